@@ -1,0 +1,22 @@
+#!/usr/bin/env node
+// Runs the whole vitest suite and ends with the plain line CI reads: "tests: N passed, M failed".
+import { spawnSync } from 'node:child_process';
+import { readFileSync, rmSync, existsSync } from 'node:fs';
+
+const report = '.vitest-report.json';
+rmSync(report, { force: true });
+const args = ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)];
+const run = spawnSync('npx', args, { stdio: 'inherit', env: { ...process.env, NO_COLOR: '1' } });
+let passed = 0;
+let failed = 0;
+if (existsSync(report)) {
+  const json = JSON.parse(readFileSync(report, 'utf8'));
+  passed = json.numPassedTests ?? 0;
+  failed = (json.numFailedTests ?? 0) + (json.numRuntimeErrorTestSuites ?? 0);
+  if (json.numFailedTestSuites && failed === 0) failed = json.numFailedTestSuites;
+} else {
+  failed = 1;
+}
+if (run.status !== 0 && failed === 0) failed = 1;
+console.log(`tests: ${passed} passed, ${failed} failed`);
+process.exit(failed === 0 && passed > 0 ? 0 : 1);

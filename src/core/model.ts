@@ -1,0 +1,274 @@
+// The build project as the core sees it: plain data, SI units, no I/O.
+// src/db maps table rows to these types; src/web forms convert display units to these.
+
+export const MODES = ['receive', 'keyUp', 'keyDown'] as const;
+export type Mode = (typeof MODES)[number];
+export const MODE_LABELS: Record<Mode, string> = {
+  receive: 'Receive',
+  keyUp: 'TX key-up',
+  keyDown: 'TX key-down',
+};
+
+export type PerMode = Record<Mode, number>;
+
+export interface Mains {
+  nominalV: number; // RMS
+  frequencyHz: number;
+  lowFraction: number; // 0.10 = mains may sag 10 % below nominal
+  highFraction: number; // 0.10 = mains may rise 10 % above nominal
+}
+
+// ---------------------------------------------------------------- supply tree
+
+export interface Winding {
+  id: string;
+  name: string;
+  ratedVrms: number; // full-load secondary voltage at nominal mains
+  ratedA: number; // rated secondary RMS current
+  regulationFraction: number; // (V_NL - V_FL) / V_FL, e.g. 0.06
+  resistanceOhm: number | null; // measured/entered; null = from regulation
+}
+
+export interface Transformer {
+  id: string;
+  name: string;
+  construction: 'laminated' | 'toroidal';
+  windings: Winding[];
+}
+
+export type RectifierTopology = 'bridge' | 'centre-tap' | 'half-wave';
+
+export interface RectifiedRail {
+  kind: 'rectified';
+  id: string;
+  name: string;
+  windingId: string;
+  topology: RectifierTopology;
+  diodeDropV: number; // forward drop of one diode at moderate current
+  diodeResistanceOhm: number; // incremental resistance of one diode
+  reservoirF: number;
+  esrOhm: number;
+  bleederOhm: number | null;
+  capacitorRatedV: number | null; // chosen reservoir part's voltage rating
+  capacitorRippleA: number | null; // chosen part's ripple-current rating (RMS, at 100/120 Hz)
+  ripplePpTargetV: number | null; // designer's ripple target, null = none
+  marginV: number; // extra headroom the designer wants above regulator needs
+  fuseA: number | null; // fitted rail fuse, null = recommend one
+}
+
+export type RegulatorSetting =
+  | { method: 'fixed'; nominalV: number }
+  | { method: 'adjustable'; vrefV: number; adjustA: number; r1Ohm: number; r2Ohm: number }
+  | { method: 'raised-diodes'; nominalV: number; diodes: number; diodeDropV: number }
+  | { method: 'raised-resistor'; nominalV: number; r1Ohm: number; r2Ohm: number };
+
+export interface HeatsinkMount {
+  thetaJcKPerW: number;
+  thetaCsKPerW: number;
+  thetaSaKPerW: number | null; // null = no heatsink chosen yet: report the one needed
+  tjMaxC: number;
+}
+
+export interface RegulatedRail {
+  kind: 'regulated';
+  id: string;
+  name: string;
+  parentId: string; // rail that feeds it
+  regulator: 'linear' | 'ldo' | 'switching';
+  setting: RegulatorSetting;
+  dropoutV: number; // minimum input - output
+  quiescentA: number; // ground-pin / standby current
+  efficiency: number | null; // switching modules: at lowest input voltage
+  maxOutputA: number | null;
+  maxInputV: number | null;
+  mount: HeatsinkMount | null;
+}
+
+export interface BatteryRail {
+  kind: 'battery';
+  id: string;
+  name: string;
+  chemistry: string;
+  nominalV: number;
+  fullV: number; // highest voltage (fresh charge / external source max)
+  endV: number; // end-of-discharge voltage
+  capacityAh: number;
+  usableFraction: number; // fraction of capacity usable before endV
+  internalOhm: number;
+}
+
+export type Rail = RectifiedRail | RegulatedRail | BatteryRail;
+
+export interface Supply {
+  transformers: Transformer[];
+  rails: Rail[];
+  primaryFuseA: number | null; // fitted primary fuse, null = recommend one
+}
+
+// ---------------------------------------------------------------- stages
+
+export const STAGE_KINDS = ['receiver', 'vxo', 'driver', 'final', 'lpf', 'tr', 'other'] as const;
+export type StageKind = (typeof STAGE_KINDS)[number];
+export const STAGE_KIND_LABELS: Record<StageKind, string> = {
+  receiver: 'Receiver',
+  vxo: 'Oscillator (VXO)',
+  driver: 'Driver',
+  final: 'Final amplifier (PA)',
+  lpf: 'Low-pass filter',
+  tr: 'T/R switching',
+  other: 'Other',
+};
+
+export interface StageLoad {
+  railId: string;
+  currentA: PerMode;
+}
+
+export interface PaParams {
+  topology: 'push-pull' | 'single-ended';
+  amplifierClass: 'B' | 'C' | 'D' | 'E';
+  railId: string;
+  devices: number; // devices sharing the dissipation
+  saturationV: number | null; // device saturation / I x Rds(on) drop
+  rdsOnOhm: number | null; // alternative to saturationV
+  turnsRatio: number | null; // secondary : (full) primary; null = design for target power
+  loadOhm: number;
+  efficiency: number | null; // null = default per class
+  deviceVdsMaxV: number;
+  deviceIdMaxA: number;
+  mount: HeatsinkMount;
+  biasIdleMaxA: number; // total idle current at the bias preset's maximum
+  referencePowerW: number; // compare output against this (dB and S-units)
+}
+
+export interface LpfParams {
+  response: 'butterworth' | 'chebyshev';
+  rippleDb: number;
+  order: number;
+  form: 'capacitor-input' | 'inductor-input';
+  cutoffHz: number | null; // null = chosen from the band
+  capacitorSeries: 'E12' | 'E24';
+  allowParallelPairs: boolean;
+  coreAlHPerTurn2: number; // AL value in H/turn^2 (e.g. 4.9e-9 for 49 nH/t^2)
+  coreName: string;
+  inductorQ: number;
+  capacitorQ: number;
+  capacitorTolerance: number; // fraction
+  inductorTolerance: number; // fraction
+  monteCarloTrials: number;
+  seed: number;
+}
+
+export interface RelayParams {
+  contactCarryA: number;
+  contactSwitchA: number;
+  contactRatedV: number;
+  rfRatedVpeak: number | null;
+  coilA: number;
+  coilRailId: string | null;
+  coilModes: Mode[];
+  isolationDb: number;
+  operateS: number;
+  releaseS: number;
+  bounceS: number;
+  dcSwitchedA: number; // DC current the relay's power contacts carry/switch, 0 = none
+  position: 'before-lpf' | 'after-lpf';
+  receiverMaxInputW: number;
+  txDelayS: number;
+  wpm: number;
+}
+
+export interface Stage {
+  id: string;
+  kind: StageKind;
+  name: string;
+  notes: string;
+  loads: StageLoad[];
+  dissipationW: number | null; // entered heat, null = from rail voltage x current
+  pa?: PaParams;
+  lpf?: LpfParams;
+  relay?: RelayParams;
+}
+
+// ---------------------------------------------------------------- RF settings
+
+export interface RfSettings {
+  spuriousRule: 'us-97-307' | 'itu-app3';
+  evenHarmonicDbc: number; // push-pull balance residual of the 2nd harmonic (negative dBc)
+  worstSwr: number;
+  antennaGainDbi: number;
+  feedlineLossDb: number;
+  groundReflection: boolean;
+  exposureDutyFactor: number; // mode duty factor (CW 0.4)
+  exposureOnFraction: number; // worst fraction of the averaging period on the air
+}
+
+// ---------------------------------------------------------------- parts and costing
+
+export interface PriceBreak {
+  minQty: number;
+  unitPriceCents: number;
+}
+
+export interface Offer {
+  id: string;
+  supplier: string;
+  sku: string;
+  currency: string;
+  breaks: PriceBreak[];
+  minOrder: number;
+  orderMultiple: number;
+  stockNote: string;
+}
+
+export interface Part {
+  id: string;
+  description: string;
+  category: string;
+  ratings: Record<string, number | string>;
+  offers: Offer[];
+}
+
+export interface Supplier {
+  name: string;
+  shippingCents: number;
+  currency: string;
+}
+
+export interface BomLine {
+  id: string;
+  stageId: string | null;
+  partId: string;
+  qtyPerRig: number;
+  refs: string;
+  notes: string;
+}
+
+export interface Costing {
+  attritionFraction: number;
+  sparesPerLine: number;
+  exchangeRates: Record<string, number>; // units of project currency per 1 unit of key currency
+  suppliers: Supplier[];
+}
+
+// ---------------------------------------------------------------- the project
+
+export interface Project {
+  id: string;
+  name: string;
+  notes: string;
+  frequencyHz: number;
+  targetPowerW: number;
+  mains: Mains | null; // null = battery / DC-only station
+  ambientC: number;
+  currency: string;
+  kits: number;
+  keyingDuty: number; // CW conversational duty factor for heating (0.4)
+  version: number;
+  supply: Supply;
+  stages: Stage[];
+  rf: RfSettings;
+  parts: Part[];
+  bom: BomLine[];
+  costing: Costing;
+}

@@ -1,0 +1,11 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  oxc: { jsx: { runtime: 'automatic', importSource: 'hono/jsx' } },
+  test: {
+    include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],
+    testTimeout: 60_000,
+    hookTimeout: 60_000,
+    pool: 'forks',
+  },
+});
