@@ -1,0 +1,210 @@
+// Current budget: what every rail must deliver in each operating mode, propagated up the supply tree.
+import type { Project, PerMode, Rail, RegulatedRail, RegulatorSetting, Mode } from './model';
+import { MODES } from './model';
+import type { Finding } from './findings';
+
+export interface LoadContribution {
+  stageId: string;
+  stageName: string;
+  currentA: PerMode;
+  /** true when the current was computed (PA key-down current, relay coil), not entered */
+  computed: boolean;
+}
+
+export interface RailBudget {
+  railId: string;
+  name: string;
+  kind: Rail['kind'];
+  parentId: string | null;
+  /** depth in the supply tree: 0 for a rectified rail or battery */
+  depth: number;
+  /** the rail's nominal output voltage, V */
+  nominalV: number;
+  /** sum of the stage loads connected directly to this rail, A */
+  ownA: PerMode;
+  /** input current of the regulators this rail feeds, A */
+  regulatorsA: PerMode;
+  /** everything this rail must deliver: ownA + regulatorsA, A */
+  outputA: PerMode;
+  /** for a regulated rail: the current it draws from its parent, A; null otherwise */
+  inputA: PerMode | null;
+  /** outputA x nominalV, W */
+  outputW: PerMode;
+  loads: LoadContribution[];
+}
+
+export interface BudgetReport {
+  rails: RailBudget[];
+  /** root rails (rectified rails and batteries): what each source delivers */
+  sources: { railId: string; name: string; outputA: PerMode; outputW: PerMode }[];
+  /** sum of the DC power delivered by all sources per mode, W */
+  totalW: PerMode;
+  findings: Finding[];
+}
+
+export interface ComputedLoad {
+  stageId: string;
+  railId: string;
+  currentA: PerMode;
+  /** replace the stage's entered load on this rail in these modes (PA key-down); otherwise add */
+  replaces: Mode[];
+}
+
+const zero = (): PerMode => ({ receive: 0, keyUp: 0, keyDown: 0 });
+const add = (a: PerMode, b: PerMode): PerMode => ({ receive: a.receive + b.receive, keyUp: a.keyUp + b.keyUp, keyDown: a.keyDown + b.keyDown });
+const map = (a: PerMode, f: (v: number, m: Mode) => number): PerMode => ({ receive: f(a.receive, 'receive'), keyUp: f(a.keyUp, 'keyUp'), keyDown: f(a.keyDown, 'keyDown') });
+
+/** Regulator output voltage from its setting. */
+export function regulatorOutputV(setting: RegulatorSetting, quiescentA = 0): number {
+  switch (setting.method) {
+    case 'fixed':
+      return setting.nominalV;
+    // Source: adjustable three-terminal regulator datasheets: Vout = Vref (1 + R2/R1) + I_adj R2
+    case 'adjustable':
+      return setting.vrefV * (1 + setting.r2Ohm / setting.r1Ohm) + setting.adjustA * setting.r2Ohm;
+    // Common practice (circuit notes): each forward-biased silicon diode in the common lead adds its drop
+    case 'raised-diodes':
+      return setting.nominalV + setting.diodes * setting.diodeDropV;
+    // Source: fixed regulator application notes: Vout = Vxx (1 + R2/R1) + Iq R2 (Iq leaves the common pin)
+    case 'raised-resistor':
+      return setting.nominalV * (1 + setting.r2Ohm / setting.r1Ohm) + quiescentA * setting.r2Ohm;
+  }
+}
+
+/** Current a regulator draws from its input for a given output current. */
+export function regulatorInputA(rail: RegulatedRail, outputA: number, inputV: number): number {
+  if (rail.regulator === 'switching') {
+    const eff = rail.efficiency && rail.efficiency > 0 ? rail.efficiency : 0.85;
+    const outV = regulatorOutputV(rail.setting, rail.quiescentA);
+    // Energy balance: Pin = Pout / efficiency (efficiency taken at the lowest input voltage)
+    return inputV > 0 ? (outV * outputA) / (eff * inputV) + rail.quiescentA : 0;
+  }
+  // Linear series regulator: input current = output current + quiescent (ground-pin) current
+  return outputA + rail.quiescentA;
+}
+
+/** Nominal (no-load-ish, nominal mains) voltage of a rail, for budgets and display. */
+export function railNominalV(rail: Rail, project: Project): number {
+  if (rail.kind === 'battery') return rail.nominalV;
+  if (rail.kind === 'regulated') return regulatorOutputV(rail.setting, rail.quiescentA);
+  const winding = project.supply.transformers.flatMap((t) => t.windings).find((w) => w.id === rail.windingId);
+  if (!winding) return 0;
+  const diodes = rail.topology === 'bridge' ? 2 : 1;
+  // Capacitor-input rectifier: DC ~ peak of the rated secondary minus the conducting diode drops
+  return Math.max(0, Math.SQRT2 * winding.ratedVrms - diodes * rail.diodeDropV);
+}
+
+/** Lowest voltage a rail may present to a switching regulator it feeds (budget estimate). */
+function railLowestV(rail: Rail, project: Project): number {
+  if (rail.kind === 'battery') return rail.endV;
+  if (rail.kind === 'regulated') return regulatorOutputV(rail.setting, rail.quiescentA);
+  const low = project.mains ? 1 - project.mains.lowFraction : 1;
+  return railNominalV(rail, project) * low;
+}
+
+export function computeBudget(project: Project, computed: ComputedLoad[] = [], inputVOverride: Record<string, number> = {}): BudgetReport {
+  const findings: Finding[] = [];
+  const rails = project.supply.rails;
+  const byId = new Map(rails.map((r) => [r.id, r]));
+  const own = new Map<string, PerMode>(rails.map((r) => [r.id, zero()]));
+  const loads = new Map<string, LoadContribution[]>(rails.map((r) => [r.id, []]));
+
+  for (const stage of project.stages) {
+    for (const load of stage.loads) {
+      if (!byId.has(load.railId)) continue;
+      const replaced = computed.filter((c) => c.stageId === stage.id && c.railId === load.railId).flatMap((c) => c.replaces);
+      const current = map(load.currentA, (v, m) => (replaced.includes(m) ? 0 : v));
+      own.set(load.railId, add(own.get(load.railId)!, current));
+      loads.get(load.railId)!.push({ stageId: stage.id, stageName: stage.name, currentA: current, computed: false });
+    }
+  }
+  for (const c of computed) {
+    if (!byId.has(c.railId)) continue;
+    const stage = project.stages.find((s) => s.id === c.stageId);
+    own.set(c.railId, add(own.get(c.railId)!, c.currentA));
+    loads.get(c.railId)!.push({ stageId: c.stageId, stageName: stage?.name ?? c.stageId, currentA: c.currentA, computed: true });
+  }
+
+  // Children of each rail; detect cycles (a regulator fed, through others, by itself).
+  const children = new Map<string, RegulatedRail[]>(rails.map((r) => [r.id, []]));
+  for (const r of rails) if (r.kind === 'regulated' && byId.has(r.parentId)) children.get(r.parentId)!.push(r);
+  const depth = new Map<string, number>();
+  const visiting = new Set<string>();
+  const depthOf = (r: Rail): number => {
+    if (depth.has(r.id)) return depth.get(r.id)!;
+    if (r.kind !== 'regulated' || !byId.has(r.parentId)) return 0;
+    if (visiting.has(r.id)) return -1;
+    visiting.add(r.id);
+    const d = depthOf(byId.get(r.parentId)!);
+    visiting.delete(r.id);
+    const result = d < 0 ? -1 : d + 1;
+    depth.set(r.id, result);
+    return result;
+  };
+  for (const r of rails) depth.set(r.id, depthOf(r));
+
+  const output = new Map<string, PerMode>();
+  const input = new Map<string, PerMode>();
+  const regs = new Map<string, PerMode>();
+  const outputOf = (r: Rail): PerMode => {
+    if (output.has(r.id)) return output.get(r.id)!;
+    let fromRegs = zero();
+    for (const child of children.get(r.id)!) {
+      if (depth.get(child.id)! < 0) continue;
+      const childOut = outputOf(child);
+      const inV = inputVOverride[r.id] ?? railLowestV(r, project);
+      const childIn = map(childOut, (v) => regulatorInputA(child, v, inV));
+      input.set(child.id, childIn);
+      fromRegs = add(fromRegs, childIn);
+    }
+    regs.set(r.id, fromRegs);
+    const total = add(own.get(r.id)!, fromRegs);
+    output.set(r.id, total);
+    return total;
+  };
+
+  const result: RailBudget[] = [];
+  for (const r of rails) {
+    const d = depth.get(r.id)!;
+    if (d < 0) {
+      findings.push({
+        severity: 'fail',
+        rule: 'supply.loop',
+        subject: r.name,
+        value: null,
+        limit: null,
+        unit: '',
+        source: 'Circuit topology',
+        message: `${r.name} is fed, through other regulators, by itself. Choose a different source rail.`,
+      });
+    }
+    if (r.kind === 'regulated' && !byId.has(r.parentId)) {
+      findings.push({ severity: 'fail', rule: 'supply.parent', subject: r.name, value: null, limit: null, unit: '', source: 'Circuit topology', message: `${r.name} has no source rail.` });
+    }
+    const out = d < 0 ? zero() : outputOf(r);
+    const v = railNominalV(r, project);
+    result.push({
+      railId: r.id,
+      name: r.name,
+      kind: r.kind,
+      parentId: r.kind === 'regulated' ? r.parentId : null,
+      depth: Math.max(0, d),
+      nominalV: v,
+      ownA: own.get(r.id)!,
+      regulatorsA: regs.get(r.id) ?? zero(),
+      outputA: out,
+      inputA: r.kind === 'regulated' ? (input.get(r.id) ?? zero()) : null,
+      outputW: map(out, (a) => a * v),
+      loads: loads.get(r.id)!,
+    });
+  }
+  // regulated rails whose parent is missing still ask for current: fold nothing up, the finding says so
+  const sources = result
+    .filter((r) => r.kind !== 'regulated')
+    .map((r) => ({ railId: r.railId, name: r.name, outputA: r.outputA, outputW: r.outputW }));
+  const totalW = sources.reduce((acc, s) => add(acc, s.outputW), zero());
+  for (const m of MODES) if (!Number.isFinite(totalW[m])) totalW[m] = 0;
+  return { rails: result, sources, totalW, findings };
+}
+
+export { zero as zeroPerMode, add as addPerMode };

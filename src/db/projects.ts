@@ -1,0 +1,234 @@
+// Rows <-> core Project. A project is written whole inside one serialised transaction, guarded by its
+// version number (optimistic concurrency): a stale write is refused, never merged silently.
+import { eq, asc, inArray } from 'drizzle-orm';
+import type { Database, Tx, Db } from './client';
+import * as t from './schema';
+import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing } from '../core/model';
+
+export interface ProjectSummary {
+  id: string;
+  name: string;
+  frequencyHz: number;
+  targetPowerW: number;
+  kits: number;
+  stageCount: number;
+  version: number;
+  updatedAt: string;
+}
+
+export class VersionConflict extends Error {
+  constructor(
+    readonly expected: number,
+    readonly actual: number,
+  ) {
+    super(`This project was changed elsewhere (version ${actual}, your page had ${expected}).`);
+  }
+}
+
+export class NotFound extends Error {}
+
+export async function listProjects(db: Db): Promise<ProjectSummary[]> {
+  const rows = await db.select().from(t.projects).orderBy(asc(t.projects.name));
+  const stageRows = await db.select({ projectId: t.stages.projectId }).from(t.stages);
+  const counts = new Map<string, number>();
+  for (const s of stageRows) counts.set(s.projectId, (counts.get(s.projectId) ?? 0) + 1);
+  return rows.map((r) => ({
+    id: r.id,
+    name: r.name,
+    frequencyHz: r.frequencyHz,
+    targetPowerW: r.targetPowerW,
+    kits: r.kits,
+    stageCount: counts.get(r.id) ?? 0,
+    version: r.version,
+    updatedAt: r.updatedAt,
+  }));
+}
+
+export async function loadProject(db: Db | Tx, id: string): Promise<Project | null> {
+  const [p] = await db.select().from(t.projects).where(eq(t.projects.id, id));
+  if (!p) return null;
+  const trafoRows = await db.select().from(t.transformers).where(eq(t.transformers.projectId, id)).orderBy(asc(t.transformers.position));
+  const windingRows = trafoRows.length
+    ? await db.select().from(t.windings).where(inArray(t.windings.transformerId, trafoRows.map((r) => r.id))).orderBy(asc(t.windings.position))
+    : [];
+  const railRows = await db.select().from(t.rails).where(eq(t.rails.projectId, id)).orderBy(asc(t.rails.position));
+  const stageRows = await db.select().from(t.stages).where(eq(t.stages.projectId, id)).orderBy(asc(t.stages.position));
+  const loadRows = stageRows.length
+    ? await db.select().from(t.stageLoads).where(inArray(t.stageLoads.stageId, stageRows.map((r) => r.id))).orderBy(asc(t.stageLoads.position))
+    : [];
+  const partRows = await db.select().from(t.parts).where(eq(t.parts.projectId, id)).orderBy(asc(t.parts.position));
+  const offerRows = partRows.length
+    ? await db.select().from(t.offers).where(inArray(t.offers.partId, partRows.map((r) => r.id))).orderBy(asc(t.offers.position))
+    : [];
+  const bomRows = await db.select().from(t.bomLines).where(eq(t.bomLines.projectId, id)).orderBy(asc(t.bomLines.position));
+
+  const transformers: Transformer[] = trafoRows.map((tr) => ({
+    id: tr.id,
+    name: tr.name,
+    construction: tr.construction as Transformer['construction'],
+    windings: windingRows
+      .filter((w) => w.transformerId === tr.id)
+      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm })),
+  }));
+  const rails = railRows.map((r) => ({ ...(r.params as object), id: r.id, name: r.name, kind: r.kind }) as Rail);
+  const stages: Stage[] = stageRows.map((s) => ({
+    id: s.id,
+    kind: s.kind as Stage['kind'],
+    name: s.name,
+    notes: s.notes,
+    dissipationW: s.dissipationW,
+    loads: loadRows
+      .filter((l) => l.stageId === s.id)
+      .map((l) => ({ railId: l.railId, currentA: { receive: l.receiveA, keyUp: l.keyUpA, keyDown: l.keyDownA } })),
+    ...((s.params as object | null) ?? {}),
+  }));
+  const parts: Part[] = partRows.map((r) => ({
+    id: r.id,
+    description: r.description,
+    category: r.category,
+    ratings: r.ratings as Part['ratings'],
+    offers: offerRows
+      .filter((o) => o.partId === r.id)
+      .map((o) => ({
+        id: o.id,
+        supplier: o.supplier,
+        sku: o.sku,
+        currency: o.currency,
+        breaks: o.breaks as Part['offers'][number]['breaks'],
+        minOrder: o.minOrder,
+        orderMultiple: o.orderMultiple,
+        stockNote: o.stockNote,
+      })),
+  }));
+  const bom: BomLine[] = bomRows.map((b) => ({ id: b.id, stageId: b.stageId, partId: b.partId, qtyPerRig: b.qtyPerRig, refs: b.refs, notes: b.notes }));
+  const mains =
+    p.mainsNominalV !== null && p.mainsFrequencyHz !== null
+      ? { nominalV: p.mainsNominalV, frequencyHz: p.mainsFrequencyHz, lowFraction: p.mainsLowFraction ?? 0.1, highFraction: p.mainsHighFraction ?? 0.1 }
+      : null;
+  return {
+    id: p.id,
+    name: p.name,
+    notes: p.notes,
+    frequencyHz: p.frequencyHz,
+    targetPowerW: p.targetPowerW,
+    mains,
+    ambientC: p.ambientC,
+    currency: p.currency,
+    kits: p.kits,
+    keyingDuty: p.keyingDuty,
+    version: p.version,
+    supply: { transformers, rails, primaryFuseA: p.primaryFuseA },
+    stages,
+    rf: p.rf as RfSettings,
+    parts,
+    bom,
+    costing: p.costing as Costing,
+  };
+}
+
+async function writeChildren(tx: Tx, project: Project): Promise<void> {
+  const id = project.id;
+  await tx.delete(t.bomLines).where(eq(t.bomLines.projectId, id));
+  await tx.delete(t.parts).where(eq(t.parts.projectId, id));
+  await tx.delete(t.stages).where(eq(t.stages.projectId, id));
+  await tx.delete(t.rails).where(eq(t.rails.projectId, id));
+  await tx.delete(t.transformers).where(eq(t.transformers.projectId, id));
+  for (const [i, tr] of project.supply.transformers.entries()) {
+    await tx.insert(t.transformers).values({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction });
+    for (const [j, w] of tr.windings.entries()) {
+      await tx.insert(t.windings).values({ ...w, transformerId: tr.id, position: j });
+    }
+  }
+  for (const [i, rail] of project.supply.rails.entries()) {
+    const { id: railId, name, kind, ...params } = rail;
+    await tx.insert(t.rails).values({ id: railId, projectId: id, position: i, name, kind, params });
+  }
+  for (const [i, s] of project.stages.entries()) {
+    const params = s.pa ? { pa: s.pa } : s.lpf ? { lpf: s.lpf } : s.relay ? { relay: s.relay } : null;
+    await tx.insert(t.stages).values({ id: s.id, projectId: id, position: i, kind: s.kind, name: s.name, notes: s.notes, dissipationW: s.dissipationW, params });
+    for (const [j, l] of s.loads.entries()) {
+      await tx.insert(t.stageLoads).values({
+        id: `${s.id}:${j}`,
+        stageId: s.id,
+        railId: l.railId,
+        position: j,
+        receiveA: l.currentA.receive,
+        keyUpA: l.currentA.keyUp,
+        keyDownA: l.currentA.keyDown,
+      });
+    }
+  }
+  for (const [i, part] of project.parts.entries()) {
+    await tx.insert(t.parts).values({ id: part.id, projectId: id, position: i, description: part.description, category: part.category, ratings: part.ratings });
+    for (const [j, o] of part.offers.entries()) {
+      await tx.insert(t.offers).values({ ...o, partId: part.id, position: j });
+    }
+  }
+  for (const [i, b] of project.bom.entries()) {
+    await tx.insert(t.bomLines).values({ ...b, projectId: id, position: i });
+  }
+}
+
+function projectColumns(p: Project) {
+  return {
+    name: p.name,
+    notes: p.notes,
+    frequencyHz: p.frequencyHz,
+    targetPowerW: p.targetPowerW,
+    mainsNominalV: p.mains?.nominalV ?? null,
+    mainsFrequencyHz: p.mains?.frequencyHz ?? null,
+    mainsLowFraction: p.mains?.lowFraction ?? null,
+    mainsHighFraction: p.mains?.highFraction ?? null,
+    ambientC: p.ambientC,
+    currency: p.currency,
+    kits: p.kits,
+    keyingDuty: p.keyingDuty,
+    primaryFuseA: p.supply.primaryFuseA,
+    rf: p.rf,
+    costing: p.costing,
+  };
+}
+
+/** Insert a complete new project (import, clone, seed). Atomic: all rows or none. */
+export async function insertProject(database: Database, project: Project, nowIso: string): Promise<Project> {
+  await database.write(async (tx) => {
+    await tx.insert(t.projects).values({ id: project.id, ...projectColumns(project), version: 1, createdAt: nowIso, updatedAt: nowIso });
+    await writeChildren(tx, project);
+  });
+  return { ...project, version: 1 };
+}
+
+/**
+ * Apply `change` to the stored project if its version still equals `expectedVersion`; bumps the version.
+ * `change` returns the new project (pure) and runs inside the write transaction.
+ */
+export async function updateProject(
+  database: Database,
+  id: string,
+  expectedVersion: number,
+  change: (p: Project) => Project,
+  nowIso: string,
+): Promise<Project> {
+  return database.write(async (tx) => {
+    const current = await loadProject(tx, id);
+    if (!current) throw new NotFound(`No project ${id}`);
+    if (current.version !== expectedVersion) throw new VersionConflict(expectedVersion, current.version);
+    const next = { ...change(current), id, version: current.version + 1 };
+    await tx.update(t.projects).set({ ...projectColumns(next), version: next.version, updatedAt: nowIso }).where(eq(t.projects.id, id));
+    await writeChildren(tx, next);
+    return next;
+  });
+}
+
+export async function deleteProject(database: Database, id: string): Promise<boolean> {
+  return database.write(async (tx) => {
+    await tx.delete(t.bomLines).where(eq(t.bomLines.projectId, id));
+    const res = await tx.delete(t.projects).where(eq(t.projects.id, id)).returning({ id: t.projects.id });
+    return res.length > 0;
+  });
+}
+
+export async function countProjects(db: Db): Promise<number> {
+  const rows = await db.select({ id: t.projects.id }).from(t.projects);
+  return rows.length;
+}

@@ -1,0 +1,297 @@
+// The exported project file (JSON): its zod schema, used for import, the CLI and round trips.
+// Format: { "format": "rigwright-project", "formatVersion": 1, "exportedAt": ISO date, "project": {...} }
+// with every quantity in SI units (V, A, W, Ω, F, H, Hz, s, °C, fractions 0..1) and money in integer cents.
+import { z } from 'zod';
+import type { Project } from '../core/model';
+import { MODES, STAGE_KINDS } from '../core/model';
+
+export const FORMAT = 'rigwright-project';
+export const FORMAT_VERSION = 1;
+
+const id = z.string().min(1).max(80);
+const name = z.string().trim().min(1, 'must not be empty').max(200);
+const text = z.string().max(20_000);
+const pos = (max: number) => z.number().finite().positive().max(max);
+const nonneg = (max: number) => z.number().finite().min(0).max(max);
+const fraction = z.number().finite().min(0).max(1);
+const perMode = z.object({ receive: nonneg(1000), keyUp: nonneg(1000), keyDown: nonneg(1000) });
+
+const mount = z.object({
+  thetaJcKPerW: nonneg(100),
+  thetaCsKPerW: nonneg(100),
+  thetaSaKPerW: nonneg(1000).nullable(),
+  tjMaxC: z.number().finite().min(25).max(250),
+});
+
+const setting = z.discriminatedUnion('method', [
+  z.object({ method: z.literal('fixed'), nominalV: pos(1000) }),
+  z.object({ method: z.literal('adjustable'), vrefV: pos(10), adjustA: nonneg(0.01), r1Ohm: pos(1e7), r2Ohm: nonneg(1e7) }),
+  z.object({ method: z.literal('raised-diodes'), nominalV: pos(1000), diodes: z.number().int().min(0).max(10), diodeDropV: nonneg(2) }),
+  z.object({ method: z.literal('raised-resistor'), nominalV: pos(1000), r1Ohm: pos(1e7), r2Ohm: nonneg(1e7) }),
+]);
+
+const rail = z.discriminatedUnion('kind', [
+  z.object({
+    kind: z.literal('rectified'),
+    id,
+    name,
+    windingId: id,
+    topology: z.enum(['bridge', 'centre-tap', 'half-wave']),
+    diodeDropV: nonneg(5),
+    diodeResistanceOhm: nonneg(100),
+    reservoirF: pos(10),
+    esrOhm: nonneg(100),
+    bleederOhm: pos(1e9).nullable(),
+    capacitorRatedV: pos(10_000).nullable(),
+    capacitorRippleA: pos(1000).nullable(),
+    ripplePpTargetV: pos(1000).nullable(),
+    marginV: nonneg(100),
+    fuseA: pos(1000).nullable(),
+  }),
+  z.object({
+    kind: z.literal('regulated'),
+    id,
+    name,
+    parentId: id,
+    regulator: z.enum(['linear', 'ldo', 'switching']),
+    setting,
+    dropoutV: nonneg(50),
+    quiescentA: nonneg(1),
+    efficiency: z.number().finite().gt(0).max(1).nullable(),
+    maxOutputA: pos(1000).nullable(),
+    maxInputV: pos(10_000).nullable(),
+    mount: mount.nullable(),
+  }),
+  z.object({
+    kind: z.literal('battery'),
+    id,
+    name,
+    chemistry: z.string().max(80),
+    nominalV: pos(1000),
+    fullV: pos(1000),
+    endV: pos(1000),
+    capacityAh: pos(10_000),
+    usableFraction: fraction,
+    internalOhm: nonneg(100),
+  }),
+]);
+
+const pa = z.object({
+  topology: z.enum(['push-pull', 'single-ended']),
+  amplifierClass: z.enum(['B', 'C', 'D', 'E']),
+  railId: id,
+  devices: z.number().int().min(1).max(16),
+  saturationV: nonneg(100).nullable(),
+  rdsOnOhm: nonneg(100).nullable(),
+  turnsRatio: pos(100).nullable(),
+  loadOhm: pos(10_000),
+  efficiency: z.number().finite().gt(0).max(1).nullable(),
+  deviceVdsMaxV: pos(10_000),
+  deviceIdMaxA: pos(1000),
+  mount,
+  biasIdleMaxA: nonneg(100),
+  referencePowerW: pos(1e6),
+});
+
+const lpf = z.object({
+  response: z.enum(['butterworth', 'chebyshev']),
+  rippleDb: z.number().finite().min(0).max(3),
+  order: z.number().int().min(1).max(15),
+  form: z.enum(['capacitor-input', 'inductor-input']),
+  cutoffHz: pos(1e9).nullable(),
+  capacitorSeries: z.enum(['E12', 'E24']),
+  allowParallelPairs: z.boolean(),
+  coreAlHPerTurn2: z.number().finite().max(1e-3),
+  coreName: z.string().max(120),
+  inductorQ: pos(10_000),
+  capacitorQ: pos(100_000),
+  capacitorTolerance: fraction,
+  inductorTolerance: fraction,
+  monteCarloTrials: z.number().int().min(0).max(100_000),
+  seed: z.number().int().min(0).max(2 ** 32 - 1),
+});
+
+const relay = z.object({
+  contactCarryA: pos(1000),
+  contactSwitchA: pos(1000),
+  contactRatedV: pos(100_000),
+  rfRatedVpeak: pos(100_000).nullable(),
+  coilA: nonneg(10),
+  coilRailId: id.nullable(),
+  coilModes: z.array(z.enum(MODES)),
+  isolationDb: nonneg(200),
+  operateS: nonneg(1),
+  releaseS: nonneg(1),
+  bounceS: nonneg(1),
+  dcSwitchedA: nonneg(1000),
+  position: z.enum(['before-lpf', 'after-lpf']),
+  receiverMaxInputW: pos(1e6),
+  txDelayS: nonneg(10),
+  wpm: pos(100),
+});
+
+const stage = z.object({
+  id,
+  kind: z.enum(STAGE_KINDS),
+  name,
+  notes: text,
+  loads: z.array(z.object({ railId: id, currentA: perMode })).max(20),
+  dissipationW: nonneg(10_000).nullable(),
+  pa: pa.optional(),
+  lpf: lpf.optional(),
+  relay: relay.optional(),
+});
+
+const money = z.number().int().min(0).max(1e12);
+const currency = z.string().regex(/^[A-Z]{3}$/, 'must be a three-letter currency code such as USD');
+
+const part = z.object({
+  id,
+  description: name,
+  category: z.string().max(80),
+  ratings: z.record(z.string().max(80), z.union([z.number().finite(), z.string().max(200)])),
+  offers: z
+    .array(
+      z.object({
+        id,
+        supplier: name,
+        sku: z.string().max(120),
+        currency,
+        breaks: z.array(z.object({ minQty: z.number().int().min(1), unitPriceCents: money })).max(50),
+        minOrder: z.number().int().min(1).max(1e7),
+        orderMultiple: z.number().int().min(1).max(1e7),
+        stockNote: z.string().max(500),
+      }),
+    )
+    .max(50),
+});
+
+export const projectSchema = z.object({
+  id,
+  name,
+  notes: text,
+  frequencyHz: z.number().finite().min(100e3).max(60e6),
+  targetPowerW: pos(2000),
+  mains: z
+    .object({
+      nominalV: z.number().finite().min(50).max(300),
+      frequencyHz: z.number().finite().min(40).max(500),
+      lowFraction: z.number().finite().min(0).max(0.5),
+      highFraction: z.number().finite().min(0).max(0.5),
+    })
+    .nullable(),
+  ambientC: z.number().finite().min(-40).max(70),
+  currency,
+  kits: z.number().int().min(1).max(1000),
+  keyingDuty: fraction,
+  version: z.number().int().min(0).optional().default(1),
+  supply: z.object({
+    transformers: z
+      .array(
+        z.object({
+          id,
+          name,
+          construction: z.enum(['laminated', 'toroidal']),
+          windings: z.array(
+            z.object({ id, name, ratedVrms: pos(1000), ratedA: pos(1000), regulationFraction: z.number().finite().min(0).max(1), resistanceOhm: nonneg(1000).nullable() }),
+          ),
+        }),
+      )
+      .max(10),
+    rails: z.array(rail).max(50),
+    primaryFuseA: pos(100).nullable(),
+  }),
+  stages: z.array(stage).max(100),
+  rf: z.object({
+    spuriousRule: z.enum(['us-97-307', 'itu-app3']),
+    evenHarmonicDbc: z.number().finite().min(-120).max(0),
+    worstSwr: z.number().finite().min(1).max(100),
+    antennaGainDbi: z.number().finite().min(-30).max(30),
+    feedlineLossDb: nonneg(100),
+    groundReflection: z.boolean(),
+    exposureDutyFactor: fraction,
+    exposureOnFraction: fraction,
+  }),
+  parts: z.array(part).max(5000),
+  bom: z
+    .array(z.object({ id, stageId: id.nullable(), partId: id, qtyPerRig: nonneg(1e6), refs: z.string().max(2000), notes: z.string().max(2000) }))
+    .max(5000),
+  costing: z.object({
+    attritionFraction: z.number().finite().min(0).max(1),
+    sparesPerLine: z.number().int().min(0).max(1000),
+    exchangeRates: z.record(currency, z.number().finite().positive()),
+    suppliers: z.array(z.object({ name, shippingCents: money, currency })).max(200),
+  }),
+});
+
+export const projectFileSchema = z.object({
+  format: z.literal(FORMAT, { message: `is not "${FORMAT}": this is not a project file exported by this program` }),
+  formatVersion: z.literal(FORMAT_VERSION, { message: `must be ${FORMAT_VERSION}` }),
+  exportedAt: z.string().optional(),
+  project: projectSchema,
+});
+
+export type ProjectFileResult = { ok: true; project: Project } | { ok: false; errors: string[] };
+
+/** Where-and-what messages for a zod error: "project.stages[2].loads[0].currentA.keyDown: too big ...". */
+export function describeIssues(error: z.ZodError, prefix = ''): string[] {
+  return error.issues.slice(0, 50).map((i) => {
+    const path = i.path.reduce<string>((acc, seg) => (typeof seg === 'number' ? `${acc}[${seg}]` : acc ? `${acc}.${String(seg)}` : String(seg)), prefix);
+    return `${path || '(file)'}: ${i.message}`;
+  });
+}
+
+/** Cross-references a schema cannot express: rails, windings, stages and parts named by id must exist. */
+export function checkReferences(p: Project): string[] {
+  const errors: string[] = [];
+  const windingIds = new Set(p.supply.transformers.flatMap((t) => t.windings.map((w) => w.id)));
+  const railIds = new Set(p.supply.rails.map((r) => r.id));
+  const stageIds = new Set(p.stages.map((s) => s.id));
+  const partIds = new Set(p.parts.map((x) => x.id));
+  const dupes = (ids: string[], what: string) => {
+    const seen = new Set<string>();
+    for (const i of ids) {
+      if (seen.has(i)) errors.push(`${what} id "${i}" is used twice`);
+      seen.add(i);
+    }
+  };
+  dupes([...p.supply.rails.map((r) => r.id), ...windingIds], 'rail/winding');
+  dupes(p.stages.map((s) => s.id), 'stage');
+  dupes(p.parts.map((x) => x.id), 'part');
+  p.supply.rails.forEach((r, i) => {
+    if (r.kind === 'rectified' && !windingIds.has(r.windingId)) errors.push(`project.supply.rails[${i}].windingId: no winding "${r.windingId}"`);
+    if (r.kind === 'regulated' && !railIds.has(r.parentId)) errors.push(`project.supply.rails[${i}].parentId: no rail "${r.parentId}"`);
+    if (r.kind === 'regulated' && r.parentId === r.id) errors.push(`project.supply.rails[${i}].parentId: a rail cannot feed itself`);
+  });
+  p.stages.forEach((s, i) => {
+    s.loads.forEach((l, j) => {
+      if (!railIds.has(l.railId)) errors.push(`project.stages[${i}].loads[${j}].railId: no rail "${l.railId}"`);
+    });
+    if (s.pa && !railIds.has(s.pa.railId)) errors.push(`project.stages[${i}].pa.railId: no rail "${s.pa.railId}"`);
+    if (s.relay?.coilRailId && !railIds.has(s.relay.coilRailId)) errors.push(`project.stages[${i}].relay.coilRailId: no rail "${s.relay.coilRailId}"`);
+  });
+  p.bom.forEach((b, i) => {
+    if (!partIds.has(b.partId)) errors.push(`project.bom[${i}].partId: no part "${b.partId}"`);
+    if (b.stageId !== null && !stageIds.has(b.stageId)) errors.push(`project.bom[${i}].stageId: no stage "${b.stageId}"`);
+  });
+  return errors;
+}
+
+/** Parse and validate a project file's text. Never throws for bad input. */
+export function parseProjectFile(textIn: string): ProjectFileResult {
+  let json: unknown;
+  try {
+    json = JSON.parse(textIn);
+  } catch (e) {
+    return { ok: false, errors: [`The file is not valid JSON: ${(e as Error).message}`] };
+  }
+  const parsed = projectFileSchema.safeParse(json);
+  if (!parsed.success) return { ok: false, errors: describeIssues(parsed.error) };
+  const project = parsed.data.project as Project;
+  const refErrors = checkReferences(project);
+  return refErrors.length ? { ok: false, errors: refErrors } : { ok: true, project };
+}
+
+export function toProjectFile(project: Project, exportedAtIso: string): string {
+  return JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, exportedAt: exportedAtIso, project }, null, 2);
+}
