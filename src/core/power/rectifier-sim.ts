@@ -1,0 +1,304 @@
+// Steady-state time-domain simulation of a capacitor-input rectifier (bridge, full-wave centre-tap,
+// half-wave). Pure and bounded: the only state is the reservoir voltage, so the periodic steady state
+// is the fixed point of the one-cycle map P(v0) -> v(T); it is found by safeguarded secant iteration
+// over whole mains cycles (never more than maxCycles), which converges in a handful of cycles.
+//
+// Circuit (per conducting path): sinusoidal EMF behind the winding resistance Rw, n diodes in series
+// (each Vf + r_d), reservoir C with series ESR, load = constant current I0 (regulated loads) or a
+// resistance, plus an optional bleeder. Leakage inductance is not modelled (it lowers peak currents).
+// Source: Reference values §4.2 (time-domain script check with the same element model), this project.
+
+import type { RectifierTopology } from '../model';
+
+export type SimLoad = { kind: 'current'; currentA: number } | { kind: 'resistance'; resistanceOhm: number };
+
+export interface RectifierSimInput {
+  topology: RectifierTopology;
+  /** Open-circuit secondary RMS voltage actually applied (V): V_NL x mains factor; per half for centre-tap. */
+  secondaryVrms: number;
+  /** Winding resistance referred to the secondary (Ω), per half for centre-tap. */
+  windingResistanceOhm: number;
+  /** Mains frequency (Hz). */
+  frequencyHz: number;
+  /** Forward drop of one diode (V). */
+  diodeDropV: number;
+  /** Incremental resistance of one diode (Ω). */
+  diodeResistanceOhm: number;
+  /** Reservoir capacitance (F). */
+  capacitanceF: number;
+  /** Reservoir equivalent series resistance (Ω). */
+  esrOhm: number;
+  load: SimLoad;
+  /** Bleeder across the reservoir (Ω), null/undefined = none. */
+  bleederOhm?: number | null;
+  /** Integration steps per mains cycle (default 1000). */
+  stepsPerCycle?: number;
+  /** Convergence: cycle-to-cycle change of the reservoir voltage (V); default 1e-5 of the peak. */
+  toleranceV?: number;
+  /** Hard cap on simulated cycles (default 200). */
+  maxCycles?: number;
+  /** Waveform points over the two recorded cycles (default 160). */
+  waveformPoints?: number;
+}
+
+export interface RectifierWaveform {
+  /** Time from the start of the recorded window (s). */
+  timeS: number[];
+  /** Rail (reservoir terminal) voltage (V). */
+  outputV: number[];
+  /** Winding current (A), signed: positive in the first half-cycle (half A for centre-tap). */
+  windingA: number[];
+}
+
+export interface RectifierSimResult {
+  /** True when the cycle-to-cycle change fell below the tolerance within maxCycles. */
+  converged: boolean;
+  /** Mains cycles simulated (s/s, count). */
+  cycles: number;
+  /** Mean rail voltage over a steady-state cycle (V). */
+  dcMeanV: number;
+  /** Ripple peak-to-peak (V). */
+  ripplePpV: number;
+  /** Lowest rail voltage in the cycle (V). */
+  troughV: number;
+  /** Highest rail voltage in the cycle (V). */
+  peakV: number;
+  /** Peak rail voltage with no load (V): EMF peak minus diode drops. */
+  noLoadPeakV: number;
+  /** Mean load current actually drawn (A). */
+  loadMeanA: number;
+  /** RMS current in the secondary winding (A); per half for centre-tap. */
+  secondaryRmsA: number;
+  /** Repetitive peak current of one diode (A). */
+  diodePeakA: number;
+  /** RMS ripple current in the reservoir capacitor (A). */
+  capacitorRippleRmsA: number;
+  /** Fraction of the mains cycle in which any diode conducts (0..1). */
+  conductionFraction: number;
+  /** Switch-on surge estimate, first peak into a discharged reservoir (A). */
+  surgeA: number;
+  /** True when a constant-current load pulled the reservoir to 0 V (supply collapses). */
+  collapsed: boolean;
+  waveform: RectifierWaveform;
+  /** Plain-words note on convergence or invalid input, null when fine. */
+  note: string | null;
+}
+
+interface Circuit {
+  diodes: number;
+  /** Total diode drop in the conducting path (V). */
+  dropV: number;
+  peakEmfV: number;
+  rt: number;
+  esr: number;
+  c: number;
+  g: number;
+  i0: number;
+  omega: number;
+  topology: RectifierTopology;
+}
+
+interface CycleStats {
+  sumV: number;
+  minV: number;
+  maxV: number;
+  sumId2A: number;
+  sumIdB2: number;
+  maxId: number;
+  sumIc2: number;
+  sumIc: number;
+  sumLoad: number;
+  conducting: number;
+  collapsed: boolean;
+}
+
+const finite = (x: number, fallback = 0): number => (Number.isFinite(x) ? x : fallback);
+
+/** Exact solution of C dv/dt = A(s) - B v over one step, with A linear in s. */
+function advance(v: number, a0: number, a1: number, b: number, c: number, h: number): number {
+  const lam = b / c;
+  if (lam * h < 1e-9) return v + (a0 * h + 0.5 * a1 * h * h - b * v * h) / c;
+  const slope = a1 / b;
+  const p0 = (a0 - c * slope) / b;
+  return p0 + slope * h + (v - p0) * Math.exp(-lam * h);
+}
+
+function emptyStats(): CycleStats {
+  return { sumV: 0, minV: Infinity, maxV: -Infinity, sumId2A: 0, sumIdB2: 0, maxId: 0, sumIc2: 0, sumIc: 0, sumLoad: 0, conducting: 0, collapsed: false };
+}
+
+/**
+ * One mains cycle from reservoir voltage v0; returns the end voltage and statistics.
+ * Capacitor current is piecewise linear in v_c: i_c = A - B v_c, one branch with the diodes
+ * conducting and one blocking; the branch is chosen so that the diode current is >= 0 at the step end.
+ */
+function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt: number, iw: number) => void): { v: number; st: CycleStats } {
+  const h = (2 * Math.PI) / cir.omega / steps;
+  const st = emptyStats();
+  const k = 1 + cir.esr * cir.g;
+  const d = Math.max(cir.esr + cir.rt * k, 1e-9);
+  const m = 1 + cir.g * cir.rt;
+  const bCond = m / d;
+  const bBlock = cir.g / k;
+  const halfWave = cir.topology === 'half-wave';
+  const dPhase = cir.omega * h;
+  let v = v0;
+  let sPrev = 0;
+  let ePrev = (halfWave ? 0 : 0) - cir.dropV;
+  for (let n = 1; n <= steps; n++) {
+    const s = cir.peakEmfV * Math.sin(dPhase * n);
+    const e = (halfWave ? s : Math.abs(s)) - cir.dropV;
+    const i0 = v > 0 ? cir.i0 : 0;
+    // conducting branch
+    const a0 = (m * (ePrev * k + cir.esr * i0)) / d - cir.g * ePrev - i0;
+    const a1 = (m * (e * k + cir.esr * i0)) / d - cir.g * e - i0;
+    let vNew = advance(v, a0, (a1 - a0) / h, bCond, cir.c, h);
+    let id = (e * k - vNew + cir.esr * i0) / d;
+    if (!(id >= 0)) {
+      const aBlock = (cir.g * cir.esr * i0) / k - i0;
+      vNew = advance(v, aBlock, 0, bBlock, cir.c, h);
+      id = 0;
+    }
+    if (vNew < 0) {
+      vNew = 0;
+      if (cir.i0 > 0) st.collapsed = true;
+    }
+    const vt = id > 0 ? e - cir.rt * id : (vNew - cir.esr * i0) / k;
+    const iLoad = cir.g * vt + (vNew > 0 ? i0 : 0);
+    const ic = id - iLoad;
+    st.sumV += vt;
+    if (vt < st.minV) st.minV = vt;
+    if (vt > st.maxV) st.maxV = vt;
+    const firstHalf = s > 0 || (s === 0 && sPrev >= 0);
+    if (firstHalf) st.sumId2A += id * id;
+    else st.sumIdB2 += id * id;
+    if (id > st.maxId) st.maxId = id;
+    st.sumIc2 += ic * ic;
+    st.sumIc += ic;
+    st.sumLoad += iLoad;
+    if (id > 0) st.conducting++;
+    if (rec) rec(n * h, vt, firstHalf ? id : -id);
+    v = vNew;
+    sPrev = s;
+    ePrev = e;
+  }
+  return { v, st };
+}
+
+function invalid(note: string): RectifierSimResult {
+  return {
+    converged: false, cycles: 0, dcMeanV: 0, ripplePpV: 0, troughV: 0, peakV: 0, noLoadPeakV: 0, loadMeanA: 0,
+    secondaryRmsA: 0, diodePeakA: 0, capacitorRippleRmsA: 0, conductionFraction: 0, surgeA: 0, collapsed: true,
+    waveform: { timeS: [], outputV: [], windingA: [] }, note,
+  };
+}
+
+export function diodesInPath(topology: RectifierTopology): number {
+  return topology === 'bridge' ? 2 : 1;
+}
+
+/**
+ * Switch-on surge into a discharged reservoir: EMF peak less diode drops over the total series resistance.
+ * Source: Reference values §4.2 "switch-on surge" derivation (this project, [D]).
+ */
+export function switchOnSurgeA(peakEmfV: number, topology: RectifierTopology, diodeDropV: number, seriesOhm: number): number {
+  const n = diodesInPath(topology);
+  const r = Math.max(seriesOhm, 1e-3);
+  return Math.max(0, finite((peakEmfV - n * diodeDropV) / r));
+}
+
+export function simulateRectifier(input: RectifierSimInput): RectifierSimResult {
+  const nums = [input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm];
+  if (!nums.every((x) => Number.isFinite(x))) return invalid('Simulation not run: an input is missing or not a number.');
+  if (input.frequencyHz <= 0) return invalid('Simulation not run: the mains frequency must be above 0 Hz.');
+  if (input.capacitanceF <= 0) return invalid('Simulation not run: the reservoir capacitance must be above 0 F.');
+  if (input.secondaryVrms <= 0) return invalid('Simulation not run: the secondary voltage must be above 0 V.');
+  if (input.windingResistanceOhm < 0 || input.diodeResistanceOhm < 0 || input.esrOhm < 0 || input.diodeDropV < 0) {
+    return invalid('Simulation not run: resistances and diode drop must not be negative.');
+  }
+  const n = diodesInPath(input.topology);
+  const peakEmfV = Math.SQRT2 * input.secondaryVrms;
+  const loadG = input.load.kind === 'resistance' ? (input.load.resistanceOhm > 0 ? 1 / input.load.resistanceOhm : NaN) : 0;
+  const i0 = input.load.kind === 'current' ? input.load.currentA : 0;
+  if (!Number.isFinite(loadG) || !(i0 >= 0) || !Number.isFinite(i0)) return invalid('Simulation not run: the load must be a current of 0 A or more, or a resistance above 0 Ω.');
+  const bleedG = input.bleederOhm && input.bleederOhm > 0 ? 1 / input.bleederOhm : 0;
+  const cir: Circuit = {
+    diodes: n, dropV: n * input.diodeDropV, peakEmfV, rt: input.windingResistanceOhm + n * input.diodeResistanceOhm, esr: input.esrOhm,
+    c: input.capacitanceF, g: loadG + bleedG, i0, omega: 2 * Math.PI * input.frequencyHz, topology: input.topology,
+  };
+  const steps = Math.max(100, Math.min(20000, Math.round(input.stepsPerCycle ?? 1000)));
+  const maxCycles = Math.max(2, Math.min(2000, Math.round(input.maxCycles ?? 200)));
+  const noLoadPeakV = Math.max(0, peakEmfV - n * input.diodeDropV);
+  const tol = input.toleranceV ?? Math.max(1e-7, 1e-5 * noLoadPeakV);
+  const surgeA = switchOnSurgeA(peakEmfV, input.topology, input.diodeDropV, cir.rt + cir.esr);
+
+  // Safeguarded secant on F(v) = P(v) - v within the bracket [0, no-load peak].
+  let lo = 0;
+  let hi = noLoadPeakV;
+  let x = noLoadPeakV * 0.95;
+  let xPrev = NaN;
+  let fPrev = NaN;
+  let cycles = 0;
+  let converged = false;
+  let last: { v: number; st: CycleStats };
+  while (cycles < maxCycles) {
+    last = runCycle(cir, x, steps);
+    cycles++;
+    const f = last.v - x;
+    if (Math.abs(f) < tol) {
+      converged = true;
+      break;
+    }
+    if (f > 0) lo = Math.max(lo, x);
+    else hi = Math.min(hi, x);
+    let next = Number.isFinite(fPrev) && f !== fPrev ? x - (f * (x - xPrev)) / (f - fPrev) : last.v;
+    if (!(next > lo && next < hi)) next = last.v > lo && last.v < hi ? last.v : 0.5 * (lo + hi);
+    if (hi - lo < tol) {
+      next = 0.5 * (lo + hi);
+    }
+    xPrev = x;
+    fPrev = f;
+    x = next;
+  }
+  // Record two cycles from the steady state for the plot (also the statistics of the first of them).
+  const pts = Math.max(20, Math.min(2000, Math.round(input.waveformPoints ?? 160)));
+  const every = Math.max(1, Math.floor((2 * steps) / pts));
+  const wf: RectifierWaveform = { timeS: [], outputV: [], windingA: [] };
+  let counter = 0;
+  let offsetT = 0;
+  const rec = (t: number, vt: number, iw: number) => {
+    if (counter++ % every === 0) {
+      wf.timeS.push(finite(offsetT + t));
+      wf.outputV.push(finite(vt));
+      wf.windingA.push(finite(iw));
+    }
+  };
+  const first = runCycle(cir, x, steps, rec);
+  offsetT = 1 / input.frequencyHz;
+  runCycle(cir, first.v, steps, rec);
+  const st = first.st;
+  const perHalf = input.topology === 'centre-tap';
+  const secondaryRmsA = perHalf ? Math.sqrt(Math.max(st.sumId2A, st.sumIdB2) / steps) : Math.sqrt((st.sumId2A + st.sumIdB2) / steps);
+  const meanIc = st.sumIc / steps;
+  const result: RectifierSimResult = {
+    converged,
+    cycles: cycles + 2,
+    dcMeanV: finite(st.sumV / steps),
+    ripplePpV: finite(st.maxV - st.minV),
+    troughV: finite(st.minV),
+    peakV: finite(st.maxV),
+    noLoadPeakV,
+    loadMeanA: finite(st.sumLoad / steps),
+    secondaryRmsA: finite(secondaryRmsA),
+    diodePeakA: finite(st.maxId),
+    capacitorRippleRmsA: finite(Math.sqrt(Math.max(0, st.sumIc2 / steps - meanIc * meanIc))),
+    conductionFraction: finite(st.conducting / steps),
+    surgeA,
+    collapsed: st.collapsed,
+    waveform: wf,
+    note: null,
+  };
+  if (!converged) result.note = `Steady state not reached within ${maxCycles} mains cycles; values are from the last cycle and may be off.`;
+  if (st.collapsed) result.note = 'The load pulls the reservoir down to 0 V: this supply cannot deliver this current.';
+  return result;
+}
