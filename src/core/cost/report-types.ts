@@ -1,0 +1,153 @@
+// The costing result: plain JSON (no Infinity, no NaN, no Maps). Money is integer minor units
+// ("cents") of the project currency unless a key says "offer currency".
+
+import type { Finding } from '../findings';
+import type { StageKind } from '../model';
+import type { CostSection } from './sections';
+import type { PlanMethod } from './supplier-plan';
+
+/** Why a line is not (fully) priced or is otherwise suspect. */
+export type LineFlag =
+  | 'unknown-part' // line.partId matches no part
+  | 'unknown-stage' // line.stageId matches no stage; costed under General
+  | 'bad-qty' // qtyPerRig negative or not a number; nothing ordered
+  | 'zero-qty' // nothing needed (qtyPerRig 0 or kits 0)
+  | 'no-offer' // the part has no supplier offers
+  | 'no-price' // offers exist but none has a usable price break
+  | 'no-rate'; // priced offers exist but none in a currency with an exchange rate
+
+export interface BreakSuggestion {
+  /** Pieces to order instead (reaches a higher price break). */
+  qty: number;
+  /** Extra pieces over the planned order quantity. */
+  extraQty: number;
+  /** Unit price at that quantity, minor units of the offer currency. */
+  unitPriceCents: number;
+  /** Line cost at that quantity, project-currency minor units (converted half-up). */
+  lineCostCents: number;
+  /** Planned line cost minus lineCostCents (> 0), project-currency minor units. */
+  savingCents: number;
+}
+
+export interface CostLine {
+  lineId: string;
+  partId: string;
+  /** Part description ('' when the part is unknown). */
+  description: string;
+  category: string;
+  /** Reference designators as entered. */
+  refs: string;
+  /** Pieces per rig. */
+  qtyPerRig: number;
+  stageId: string | null;
+  /** Stage name, "General" for no stage. */
+  stageName: string;
+  section: CostSection;
+  /** Pieces needed for the build: ceil(qtyPerRig x kits x (1 + attrition)) + spares. */
+  neededQty: number;
+  /** Pieces ordered from the chosen offer (minimum order, lowest break, multiple applied); 0 if none. */
+  orderQty: number;
+  /** Chosen supplier name, null when unpriced. */
+  supplier: string | null;
+  offerId: string | null;
+  sku: string | null;
+  /** Currency of the chosen offer (ISO code), null when unpriced. */
+  offerCurrency: string | null;
+  /** Unit price at orderQty, minor units of the offer currency. */
+  unitPriceCents: number | null;
+  /** orderQty x unitPriceCents, minor units of the offer currency. */
+  offerCostCents: number | null;
+  /** Project-currency units per 1 offer-currency unit used for this line. */
+  exchangeRate: number | null;
+  /** Line cost in project-currency minor units, rounded half-up once per line; 0 when unpriced. */
+  lineCostCents: number;
+  /** Buying up to a higher price break would cost less; null when not. */
+  suggestion: BreakSuggestion | null;
+  flags: LineFlag[];
+}
+
+export interface StageSubtotal {
+  stageId: string | null;
+  /** Stage name, "General" for lines with no stage. */
+  name: string;
+  kind: StageKind | null;
+  /** Line ids in this group, in BOM order. */
+  lineIds: string[];
+  /** Sum of lineCostCents, project-currency minor units (shipping not included). */
+  partsCents: number;
+}
+
+export interface SectionSubtotal {
+  section: CostSection;
+  label: string;
+  /** Sum of lineCostCents in the section, project-currency minor units. */
+  partsCents: number;
+  lineCount: number;
+}
+
+export interface SupplierUse {
+  supplier: string;
+  /** Lines bought there. */
+  lineCount: number;
+  /** Parts bought there, project-currency minor units. */
+  partsCents: number;
+  /** Shipping charge, project-currency minor units (converted half-up from the supplier's currency). */
+  shippingCents: number;
+}
+
+export type SingleSupplierComparison =
+  | {
+      available: true;
+      supplier: string;
+      /** Parts, project-currency minor units. */
+      partsCents: number;
+      /** That supplier's shipping, project-currency minor units. */
+      shippingCents: number;
+      /** partsCents + shippingCents. */
+      totalCents: number;
+      /** totalCents minus the chosen plan's total (>= 0): what one-stop shopping costs extra. */
+      extraCents: number;
+    }
+  | { available: false; reason: string };
+
+export interface CostTotals {
+  /** All line costs, project-currency minor units. */
+  partsCents: number;
+  /** Shipping of the suppliers used, project-currency minor units. */
+  shippingCents: number;
+  /** partsCents + shippingCents. */
+  buildCents: number;
+  /** buildCents / kits rounded half-up; null when kits < 1. */
+  perKitCents: number | null;
+  /** partsCents / kits rounded half-up; null when kits < 1. */
+  perKitPartsCents: number | null;
+  /** Lines left out of the totals because they have no usable price. */
+  unpricedLines: number;
+}
+
+export interface CostReport {
+  /** Project currency (ISO code); every "...Cents" key without another note is in it. */
+  currency: string;
+  /** Number of rigs built (whole number >= 0). */
+  kits: number;
+  /** Supplier-choice method that ran. */
+  method: PlanMethod;
+  /** One sentence describing the method and whether the result is proven optimal. */
+  methodNote: string;
+  /** Suppliers that could be chosen (had a usable offer for a needed line). */
+  candidateSuppliers: number;
+  lines: CostLine[];
+  /** Project stage order, then General (no stage) last; only groups with lines. */
+  stages: StageSubtotal[];
+  /** supply, rf, other, always in that order. */
+  sections: SectionSubtotal[];
+  /** Suppliers in the chosen plan, by name. */
+  suppliers: SupplierUse[];
+  singleSupplier: SingleSupplierComparison;
+  totals: CostTotals;
+  /** Total of all price-break savings on offer, project-currency minor units. */
+  suggestedSavingsCents: number;
+  findings: Finding[];
+  /** The rules applied, in words (rounding, quantities, sections), for reports and the PDF. */
+  notes: string[];
+}

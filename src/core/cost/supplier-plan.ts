@@ -1,0 +1,142 @@
+// Supplier choice: which supplier each purchasable line is bought from so that parts plus shipping
+// (paid once per supplier used) is least. This is the uncapacitated facility-location problem
+// (suppliers = facilities with an opening cost, lines = customers); it is NP-hard in general, so:
+// - up to `exactLimit` suppliers: enumerate every non-empty supplier subset; with the subset fixed each
+//   line takes its cheapest supplier in it. Exact: the optimum uses some subset, and for that subset
+//   per-line minima are optimal.
+// - beyond: local search (single add / drop / swap moves, best improvement first) from three starts
+//   (all suppliers; each line's cheapest supplier; the best single supplier). Not guaranteed optimal.
+
+export interface PlanInput {
+  /** Supplier names, index = column of lineCosts. */
+  suppliers: readonly string[];
+  /** Shipping per supplier, project-currency minor units. */
+  shippingCents: readonly number[];
+  /** [line][supplier] cheapest line cost in project-currency minor units; Infinity = not offered. */
+  lineCosts: readonly (readonly number[])[];
+}
+
+export interface PlanResult {
+  /** Supplier index per line. */
+  assignment: number[];
+  /** Indices of suppliers actually used, ascending. */
+  used: number[];
+  partsCents: number;
+  shippingCents: number;
+  totalCents: number;
+}
+
+export type PlanMethod = 'exact' | 'local-search';
+
+export const DEFAULT_EXACT_LIMIT = 12;
+
+/** Cost of buying every line from the cheapest supplier in `open`; null when a line is not covered. */
+export function evaluateSubset(input: PlanInput, open: readonly boolean[]): PlanResult | null {
+  const assignment: number[] = [];
+  let parts = 0;
+  for (const row of input.lineCosts) {
+    let best = -1;
+    for (let s = 0; s < row.length; s++) {
+      if (open[s] && Number.isFinite(row[s]) && (best < 0 || row[s] < row[best])) best = s;
+    }
+    if (best < 0) return null;
+    assignment.push(best);
+    parts += row[best];
+  }
+  const used = [...new Set(assignment)].sort((a, b) => a - b);
+  const shipping = used.reduce((sum, s) => sum + input.shippingCents[s], 0);
+  return { assignment, used, partsCents: parts, shippingCents: shipping, totalCents: parts + shipping };
+}
+
+/** Deterministic order: lower total, then fewer suppliers, then earlier supplier indices. */
+function better(a: PlanResult, b: PlanResult | null): boolean {
+  if (b === null) return true;
+  if (a.totalCents !== b.totalCents) return a.totalCents < b.totalCents;
+  if (a.used.length !== b.used.length) return a.used.length < b.used.length;
+  for (let i = 0; i < a.used.length; i++) if (a.used[i] !== b.used[i]) return a.used[i] < b.used[i];
+  return false;
+}
+
+const EMPTY: PlanResult = { assignment: [], used: [], partsCents: 0, shippingCents: 0, totalCents: 0 };
+
+/** Exact optimum by subset enumeration (2^n subsets). null when some line has no supplier at all. */
+export function planExact(input: PlanInput): PlanResult | null {
+  const n = input.suppliers.length;
+  if (input.lineCosts.length === 0) return EMPTY;
+  let best: PlanResult | null = null;
+  for (let mask = 1; mask < 1 << n; mask++) {
+    const open = Array.from({ length: n }, (_, s) => (mask & (1 << s)) !== 0);
+    const r = evaluateSubset(input, open);
+    if (r !== null && better(r, best)) best = r;
+  }
+  return best;
+}
+
+function localSearchFrom(input: PlanInput, start: boolean[]): PlanResult | null {
+  let open = start.slice();
+  let current = evaluateSubset(input, open);
+  if (current === null) return null;
+  const n = open.length;
+  // Each accepted move strictly lowers the total (or the tie order), so the loop ends; the cap is a guard.
+  for (let iter = 0; iter < 10_000; iter++) {
+    let bestMove: { open: boolean[]; result: PlanResult } | null = null;
+    const consider = (cand: boolean[]) => {
+      const r = evaluateSubset(input, cand);
+      if (r !== null && better(r, bestMove ? bestMove.result : current)) bestMove = { open: cand, result: r };
+    };
+    for (let s = 0; s < n; s++) {
+      const flip = open.slice();
+      flip[s] = !flip[s];
+      consider(flip); // add or drop
+      if (!open[s]) continue;
+      for (let t = 0; t < n; t++) {
+        if (open[t]) continue;
+        const swap = open.slice();
+        swap[s] = false;
+        swap[t] = true;
+        consider(swap);
+      }
+    }
+    if (bestMove === null) break;
+    const move: { open: boolean[]; result: PlanResult } = bestMove;
+    open = move.open;
+    current = move.result;
+  }
+  return current;
+}
+
+/** Heuristic plan by local search; never worse than the best single supplier or the cheapest-per-line plan. */
+export function planLocalSearch(input: PlanInput): PlanResult | null {
+  const n = input.suppliers.length;
+  if (input.lineCosts.length === 0) return EMPTY;
+  const starts: boolean[][] = [Array(n).fill(true)];
+  const cheapest = evaluateSubset(input, Array(n).fill(true));
+  if (cheapest !== null) starts.push(Array.from({ length: n }, (_, s) => cheapest.used.includes(s)));
+  const single = planSingleSupplier(input);
+  if (single !== null) starts.push(Array.from({ length: n }, (_, s) => s === single.used[0]));
+  let best: PlanResult | null = null;
+  for (const st of starts) {
+    const r = localSearchFrom(input, st);
+    if (r !== null && better(r, best)) best = r;
+  }
+  return best;
+}
+
+/** Cheapest plan using one supplier for every line; null when no supplier offers every line. */
+export function planSingleSupplier(input: PlanInput): PlanResult | null {
+  let best: PlanResult | null = null;
+  for (let s = 0; s < input.suppliers.length; s++) {
+    const r = evaluateSubset(input, input.suppliers.map((_, t) => t === s));
+    if (r !== null && better(r, best)) best = r;
+  }
+  return best;
+}
+
+/** Exact when the supplier count is within `exactLimit`, otherwise local search; says which ran. */
+export function choosePlan(
+  input: PlanInput,
+  exactLimit: number = DEFAULT_EXACT_LIMIT,
+): { method: PlanMethod; plan: PlanResult | null } {
+  if (input.suppliers.length <= exactLimit) return { method: 'exact', plan: planExact(input) };
+  return { method: 'local-search', plan: planLocalSearch(input) };
+}
