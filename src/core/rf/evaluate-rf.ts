@@ -1,0 +1,120 @@
+// Entry point of the RF engine: PA, filter, relay, harmonics and exposure for a project.
+import { type Finding, sortFindings } from '../findings';
+import type { Project, Stage } from '../model';
+import { evaluateExposure } from './exposure';
+import { harmonicCompliance, paHarmonicDbc } from './harmonics';
+import { analyseLpf } from './lpf-analysis';
+import { designLpf } from './lpf-design';
+import { monteCarloLpf } from './lpf-monte-carlo';
+import { validateRfInputs } from './lpf-validate';
+import { evaluatePa } from './pa';
+import type { LpfStageResult, RfReport, RfStageResult } from './report';
+import { lineMaxima, evaluateRelay } from './tr-relay';
+
+export interface RfContext {
+  /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
+  paRailV: Record<string, number>;
+  /** Optional progress of the filter Monte Carlo runs: (done, total) trials. */
+  onMonteCarloProgress?: (done: number, total: number) => void;
+}
+
+const finite = (x: number, fallback = 0) => (Number.isFinite(x) ? x : fallback);
+
+function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext): { res: LpfStageResult; findings: Finding[] } {
+  const p = stage.lpf!;
+  const d = designLpf(p, project.frequencyHz);
+  const swr = Math.max(1, finite(project.rf.worstSwr, 1));
+  const capacitorPeakV = lineMaxima(powerW, 50, swr).peakV;
+  if (!d.ok) {
+    return {
+      res: { errors: d.errors, design: null, analysis: null, monteCarlo: null, capacitorPeakV, filterLossW: 0 },
+      findings: d.errors.map((e) => ({ severity: 'fail', rule: 'lpf.input', subject: `${stage.name}: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+    };
+  }
+  const design = d.value;
+  const analysis = analyseLpf(design);
+  const monteCarlo = monteCarloLpf(design, { trials: p.monteCarloTrials, seed: p.seed, onProgress: ctx.onMonteCarloProgress });
+  const il = analysis.atOperating.lossDb;
+  // Source: definition of insertion loss: dissipated = P_in (1 - 10^(-IL/10)) (reflection counted as loss: upper bound)
+  const filterLossW = powerW * (1 - 10 ** (-il / 10));
+  const s = stage.name;
+  const f: Finding[] = [];
+  f.push({ severity: analysis.bandMaxLossDb > 1 ? 'caution' : 'ok', rule: 'lpf.passband', subject: s, value: analysis.bandMaxLossDb, limit: 1, unit: 'dB', source: 'ABCD analysis of the as-built ladder with component Q',
+    message: `Loss across the band up to ${analysis.bandMaxLossDb.toFixed(2)} dB (${il.toFixed(2)} dB at the operating frequency, about ${filterLossW.toFixed(2)} W of heat).` });
+  f.push({ severity: analysis.bandMaxSwr > 2 ? 'fail' : analysis.bandMaxSwr > 1.3 ? 'caution' : 'ok', rule: 'lpf.swr', subject: s, value: analysis.bandMaxSwr, limit: 1.3, unit: '', source: 'ABCD analysis of the as-built ladder',
+    message: analysis.bandMaxSwr > 1.3
+      ? `The built filter shows SWR up to ${analysis.bandMaxSwr.toFixed(2)} in the band: component snapping or turns rounding detune it; adjust turns or use a parallel capacitor pair.`
+      : `Input SWR stays below ${analysis.bandMaxSwr.toFixed(2)} across the band.` });
+  for (const e of design.elements) {
+    // Common practice, no published source: keep as-built values within 5 % of ideal
+    if (Math.abs(e.errorFraction) > 0.05) {
+      f.push({ severity: 'caution', rule: 'lpf.snap', subject: `${s}: ${e.kind === 'shunt-capacitor' ? 'C' : 'L'}${e.index}`, value: e.builtValue, limit: e.idealValue, unit: e.kind === 'shunt-capacitor' ? 'F' : 'H', source: 'Common practice, no published source',
+        message: `Built value is ${(e.errorFraction * 100).toFixed(1)} % from ideal${e.turns !== null && e.turns < 6 ? '; with so few turns a core with a lower AL gives finer steps' : ''}.` });
+    }
+  }
+  f.push({ severity: 'caution', rule: 'lpf.capacitor-voltage', subject: s, value: capacitorPeakV, limit: null, unit: 'V', source: 'Transmission-line standing-wave maxima (REFERENCE-VALUES §9)',
+    message: `Shunt capacitors can see about ${capacitorPeakV.toFixed(0)} V peak at SWR ${swr}; use RF-rated (silver-mica or C0G) parts rated well above it.` });
+  return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW }, findings: f };
+}
+
+/** Evaluate all RF stages of a project. Never throws for bad data; problems become findings. */
+export function evaluateRf(project: Project, ctx: RfContext): RfReport {
+  const inputErrors = validateRfInputs(project.frequencyHz, project.targetPowerW);
+  const all: Finding[] = inputErrors.map((e) => ({ severity: 'fail', rule: 'rf.input', subject: e.field, value: null, limit: null, unit: '', source: 'input check', message: e.message }));
+  const frequencyHz = finite(project.frequencyHz);
+  const targetPowerW = finite(project.targetPowerW);
+  const stages: RfStageResult[] = [];
+  const paStage = project.stages.find((s) => s.kind === 'final' && s.pa);
+  const lpfStageDef = project.stages.find((s) => s.kind === 'lpf' && s.lpf);
+  let paPowerW = targetPowerW;
+  const okFreq = inputErrors.every((e) => e.field !== 'frequencyHz');
+
+  for (const st of project.stages) {
+    if (st.kind === 'final' && st.pa) {
+      const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name);
+      if (st === paStage && pa.outputW > 0) paPowerW = pa.outputW;
+      stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });
+    }
+  }
+  let lpfRes: LpfStageResult | null = null;
+  for (const st of project.stages) {
+    if (st.kind === 'lpf' && st.lpf && okFreq) {
+      const { res, findings } = lpfStage(st, project, paPowerW, ctx);
+      if (st === lpfStageDef) lpfRes = res;
+      stages.push({ stageId: st.id, stageName: st.name, kind: 'lpf', pa: null, lpf: res, relay: null, findings: sortFindings(findings) });
+    }
+  }
+  const passbandLossDb = lpfRes?.analysis?.atOperating.lossDb ?? 0;
+  const outputPowerW = paPowerW * 10 ** (-passbandLossDb / 10);
+  const topology = paStage?.pa?.topology ?? 'single-ended';
+  const evenDbc = finite(project.rf.evenHarmonicDbc, 0);
+  const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (paHarmonicDbc(topology, evenDbc, n).dbc / 20), 0);
+  for (const st of project.stages) {
+    if (st.kind === 'tr' && st.relay) {
+      const relay = evaluateRelay(st.relay, { powerW: st.relay.position === 'before-lpf' ? paPowerW : outputPowerW, swr: finite(project.rf.worstSwr, 1), harmonicAmplitudeSum, subject: st.name });
+      stages.push({ stageId: st.id, stageName: st.name, kind: 'tr', pa: null, lpf: null, relay, findings: sortFindings(relay.findings) });
+    }
+  }
+  for (const s of stages) all.push(...s.findings);
+  if (!paStage) {
+    all.push({ severity: 'caution', rule: 'rf.no-pa', subject: 'Final amplifier', value: null, limit: null, unit: '', source: 'input check',
+      message: 'No final amplifier stage with PA settings: harmonics, relay and exposure use the target power instead.' });
+  }
+  const harmonics = okFreq && targetPowerW > 0
+    ? harmonicCompliance({
+      rule: project.rf.spuriousRule, topology, evenHarmonicDbc: evenDbc, fundamentalW: outputPowerW, frequencyHz, passbandLossDb,
+      filter: lpfRes?.analysis ? lpfRes.analysis.harmonics : null, monteCarlo: lpfRes?.monteCarlo ?? null,
+    })
+    : null;
+  if (harmonics) all.push(...harmonics.findings);
+  if (frequencyHz >= 30e6) {
+    all.push({ severity: 'caution', rule: 'spurious.range', subject: 'Spurious-emission rule', value: frequencyHz, limit: 30e6, unit: 'Hz', source: '47 CFR 97.307(d)/(e)',
+      message: 'The spurious-emission limits used here apply below 30 MHz; other limits apply at this frequency.' });
+  }
+  const exposure = okFreq ? evaluateExposure(outputPowerW, frequencyHz, project.rf) : null;
+  if (exposure) all.push(...exposure.findings);
+  return {
+    frequencyHz, targetPowerW, outputPowerW, paStageId: paStage?.id ?? null, lpfStageId: lpfStageDef?.id ?? null, inputErrors,
+    stages, harmonics, exposure, findings: sortFindings(all),
+  };
+}

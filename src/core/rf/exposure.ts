@@ -1,0 +1,103 @@
+// RF exposure estimate: OET Bulletin 65 far-field method against 47 CFR 1.1310 limits.
+import type { Finding } from '../findings';
+import type { RfSettings } from '../model';
+
+export const EXPOSURE_CAUTION =
+  'This is a far-field estimate for planning only. Local rules and your licence conditions govern RF exposure; ' +
+  'evaluate the finished station as they require, keep people away from the antenna while transmitting, and never touch an antenna or feedline while keyed.';
+
+/** Power-density limits in mW/cm^2 at f (MHz); null outside 0.3–100,000 MHz. */
+export function mpeLimitsMwPerCm2(fMHz: number): { controlled: number; general: number } | null {
+  if (!(fMHz >= 0.3 && fMHz <= 100_000)) return null;
+  // Source: 47 CFR 1.1310 Table 1 (A) occupational/controlled (plane-wave equivalent below 30 MHz)
+  const controlled = fMHz < 3 ? 100 : fMHz < 30 ? 900 / fMHz ** 2 : fMHz < 300 ? 1.0 : fMHz < 1500 ? fMHz / 300 : 5;
+  // Source: 47 CFR 1.1310 Table 1 (B) general population/uncontrolled
+  const general = fMHz < 1.34 ? 100 : fMHz < 30 ? 180 / fMHz ** 2 : fMHz < 300 ? 0.2 : fMHz < 1500 ? fMHz / 1500 : 1.0;
+  return { controlled, general };
+}
+
+/** ERP threshold (W) for exemption at distance R (m), f in MHz. */
+export function exemptionThresholdW(fMHz: number, distanceM: number): number {
+  const r2 = distanceM * distanceM;
+  // Source: 47 CFR 1.1307(b)(3)(i)(C), Table 1 (single RF source thresholds)
+  if (fMHz < 1.34) return 1920 * r2;
+  if (fMHz < 30) return (3450 * r2) / (fMHz * fMHz);
+  if (fMHz < 300) return 3.83 * r2;
+  if (fMHz < 1500) return 0.0128 * r2 * fMHz;
+  return 19.2 * r2;
+}
+
+export interface ExposureResult {
+  frequencyHz: number;
+  /** Key-down transmitter output, W. */
+  peakPowerW: number;
+  /** Time-averaged power at the transmitter: peak x duty factor x fraction of the averaging period on air, W. */
+  averagePowerW: number;
+  /** Time-averaged EIRP and ERP (ERP = EIRP / 1.64), W. */
+  eirpW: number;
+  erpW: number;
+  groundReflection: boolean;
+  /** Limits at this frequency, W/m^2 (1 mW/cm^2 = 10 W/m^2); null outside the table. */
+  limitControlledWPerM2: number | null;
+  limitGeneralWPerM2: number | null;
+  /** Minimum distance from the antenna, m (null outside the table). */
+  controlledDistanceM: number | null;
+  generalDistanceM: number | null;
+  /** lambda / 2 pi, m: inside it the far-field figures are estimates only. */
+  nearFieldDistanceM: number;
+  /** True when both distances are at least lambda / 2 pi. */
+  farFieldValid: boolean;
+  /** ERP threshold at lambda/2pi, W; exempt = time-averaged ERP at or below it; distance beyond which exempt, m. */
+  exemptionThresholdW: number | null;
+  exempt: boolean | null;
+  exemptBeyondM: number | null;
+  caution: string;
+  findings: Finding[];
+}
+
+const SRC = 'FCC OET Bulletin 65 (1997) far-field method with 47 CFR 1.1310 Table 1 limits';
+
+export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: RfSettings): ExposureResult {
+  const fMHz = frequencyHz / 1e6;
+  const p = Math.max(0, Number.isFinite(peakPowerW) ? peakPowerW : 0);
+  // Source: OET-65 Supplement B (1997): average = PEP x duty factor x fraction of averaging time on air
+  const averagePowerW = p * Math.min(1, Math.max(0, rf.exposureDutyFactor)) * Math.min(1, Math.max(0, rf.exposureOnFraction));
+  // Source: OET Bulletin 65 (1997): EIRP = P G, feedline loss reduces P
+  const eirpW = averagePowerW * 10 ** (-Math.max(0, rf.feedlineLossDb) / 10) * 10 ** (rf.antennaGainDbi / 10);
+  const erpW = eirpW / 1.64;
+  const lim = mpeLimitsMwPerCm2(fMHz);
+  // Source: OET Bulletin 65 (1997): R = sqrt(k EIRP / (4 pi S)), k = 2.56 with ground reflection (EPA model)
+  const k = rf.groundReflection ? 2.56 : 1;
+  const dist = (sMwPerCm2: number) => Math.sqrt((k * eirpW * 1e3) / (4 * Math.PI * sMwPerCm2)) / 100;
+  // Source: 47 CFR 1.1307(b)(3)(i)(C) / FCC 19-126 note 143: lambda/2pi = 47.7/f m
+  const nearFieldDistanceM = fMHz > 0 ? 47.7 / fMHz : 0;
+  const controlledDistanceM = lim ? dist(lim.controlled) : null;
+  const generalDistanceM = lim ? dist(lim.general) : null;
+  const farFieldValid = generalDistanceM !== null && controlledDistanceM !== null && Math.min(generalDistanceM, controlledDistanceM) >= nearFieldDistanceM;
+  const thr = lim ? exemptionThresholdW(fMHz, nearFieldDistanceM) : null;
+  const exempt = thr === null ? null : erpW <= thr;
+  const exemptBeyondM = thr === null ? null : Math.max(nearFieldDistanceM, Math.sqrt((erpW * nearFieldDistanceM ** 2) / Math.max(thr, 1e-30)));
+  const findings: Finding[] = [];
+  if (!lim) {
+    findings.push({ severity: 'fail', rule: 'exposure.range', subject: 'RF exposure', value: frequencyHz, limit: 3e5, unit: 'Hz', source: '47 CFR 1.1310',
+      message: 'The operating frequency is outside the exposure limit table (0.3 MHz to 100 GHz); no estimate is possible.' });
+  } else {
+    findings.push({ severity: 'caution', rule: 'exposure.distance', subject: 'RF exposure', value: generalDistanceM, limit: null, unit: 'm', source: SRC,
+      message: `Keep people at least ${(generalDistanceM as number).toFixed(2)} m (general public) and ${(controlledDistanceM as number).toFixed(2)} m (you and your household) from the antenna.` });
+    if (!farFieldValid) {
+      findings.push({ severity: 'caution', rule: 'exposure.near-field', subject: 'RF exposure', value: generalDistanceM, limit: nearFieldDistanceM, unit: 'm', source: 'OET Bulletin 65 Supplement B (1997)',
+        message: `These distances lie inside λ/2π = ${nearFieldDistanceM.toFixed(2)} m (reactive near field), where the far-field formula is only a rough estimate.` });
+    }
+    findings.push({ severity: exempt ? 'ok' : 'caution', rule: 'exposure.exemption', subject: 'RF exposure', value: erpW, limit: thr, unit: 'W', source: '47 CFR 1.1307(b)(3)(i)(C)',
+      message: exempt
+        ? `Time-averaged ERP ${erpW.toFixed(1)} W is within the ${(thr as number).toFixed(0)} W exemption threshold for people at ${nearFieldDistanceM.toFixed(2)} m or more (US rule).`
+        : `Time-averaged ERP ${erpW.toFixed(1)} W exceeds the exemption threshold at ${nearFieldDistanceM.toFixed(2)} m; a routine evaluation is needed for people closer than ${(exemptBeyondM as number).toFixed(1)} m (US rule).` });
+  }
+  findings.push({ severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'Local regulations and licence conditions', message: EXPOSURE_CAUTION });
+  return {
+    frequencyHz, peakPowerW: p, averagePowerW, eirpW, erpW, groundReflection: rf.groundReflection,
+    limitControlledWPerM2: lim ? lim.controlled * 10 : null, limitGeneralWPerM2: lim ? lim.general * 10 : null,
+    controlledDistanceM, generalDistanceM, nearFieldDistanceM, farFieldValid,
+    exemptionThresholdW: thr, exempt, exemptBeyondM, caution: EXPOSURE_CAUTION, findings,
+  };
+}

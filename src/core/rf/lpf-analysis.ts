@@ -1,0 +1,123 @@
+// ABCD (chain-matrix) analysis of the as-built ladder between equal terminations, with finite Q.
+import { bandOf } from './bands';
+import type { LpfDesign } from './lpf-design';
+
+/** Ladder in flat arrays for the inner loops: kind 0 = shunt capacitor (F), 1 = series inductor (H). */
+export interface Ladder {
+  kinds: Uint8Array;
+  values: Float64Array;
+  inductorQ: number;
+  capacitorQ: number;
+  r0Ohm: number;
+}
+
+export function ladderOf(design: LpfDesign, which: 'built' | 'ideal' = 'built', lossless = false): Ladder {
+  const n = design.elements.length;
+  const kinds = new Uint8Array(n);
+  const values = new Float64Array(n);
+  design.elements.forEach((e, i) => {
+    kinds[i] = e.kind === 'shunt-capacitor' ? 0 : 1;
+    values[i] = which === 'built' ? e.builtValue : e.idealValue;
+  });
+  return {
+    kinds,
+    values,
+    inductorQ: lossless ? Infinity : design.inductorQ,
+    capacitorQ: lossless ? Infinity : design.capacitorQ,
+    r0Ohm: design.r0Ohm,
+  };
+}
+
+/**
+ * Evaluate the ladder at one frequency. Writes out[0] = |S21|^2 and out[1] = |input reflection|.
+ * Loss model: inductor series R = wL/Q_L, capacitor shunt G = wC/Q_C (constant Q).
+ */
+export function evalLadder(l: Ladder, values: Float64Array, frequencyHz: number, out: Float64Array): void {
+  const w = 2 * Math.PI * frequencyHz;
+  // chain matrix [[A, B], [C, D]], complex parts
+  let ar = 1, ai = 0, br = 0, bi = 0, cr = 0, ci = 0, dr = 1, di = 0;
+  for (let k = 0; k < values.length; k++) {
+    const x = values[k];
+    if (l.kinds[k] === 1) {
+      // Source: Pozar, Microwave Engineering (2012), Table 4.1: series impedance Z -> [[1, Z], [0, 1]]
+      const zr = (w * x) / l.inductorQ;
+      const zi = w * x;
+      const nbr = ar * zr - ai * zi + br, nbi = ar * zi + ai * zr + bi;
+      const ndr = cr * zr - ci * zi + dr, ndi = cr * zi + ci * zr + di;
+      br = nbr; bi = nbi; dr = ndr; di = ndi;
+    } else {
+      // Source: Pozar, Microwave Engineering (2012), Table 4.1: shunt admittance Y -> [[1, 0], [Y, 1]]
+      const yr = (w * x) / l.capacitorQ;
+      const yi = w * x;
+      const nar = ar + br * yr - bi * yi, nai = ai + br * yi + bi * yr;
+      const ncr = cr + dr * yr - di * yi, nci = ci + dr * yi + di * yr;
+      ar = nar; ai = nai; cr = ncr; ci = nci;
+    }
+  }
+  const z0 = l.r0Ohm;
+  // Source: Pozar, Microwave Engineering (2012), Table 4.2: S21 = 2 / (A + B/Z0 + C Z0 + D) for equal Z0
+  const sr = ar + br / z0 + cr * z0 + dr;
+  const si = ai + bi / z0 + ci * z0 + di;
+  out[0] = 4 / (sr * sr + si * si);
+  // Zin = (A Z0 + B) / (C Z0 + D); Gamma = (Zin - Z0)/(Zin + Z0)
+  const nr = ar * z0 + br, ni = ai * z0 + bi;
+  const mr = cr * z0 + dr, mi = ci * z0 + di;
+  const den = mr * mr + mi * mi;
+  const zr = (nr * mr + ni * mi) / den, zi = (ni * mr - nr * mi) / den;
+  const gr = zr - z0, gi = zi, hr = zr + z0, hi = zi;
+  out[1] = Math.sqrt((gr * gr + gi * gi) / (hr * hr + hi * hi));
+}
+
+export interface LadderPoint {
+  frequencyHz: number;
+  /** Insertion loss, dB (positive = loss). */
+  lossDb: number;
+  /** 20 log10 |S21|, dB (negative = loss). */
+  s21Db: number;
+  /** Input SWR with a 50 ohm load (capped at 999). */
+  inputSwr: number;
+}
+
+export function pointAt(l: Ladder, frequencyHz: number): LadderPoint {
+  const out = new Float64Array(2);
+  evalLadder(l, l.values, frequencyHz, out);
+  const lossDb = -10 * Math.log10(out[0]);
+  const g = Math.min(out[1], 0.998);
+  return { frequencyHz, lossDb, s21Db: -lossDb, inputSwr: Math.min(999, (1 + g) / (1 - g)) };
+}
+
+export interface LpfAnalysis {
+  /** At the operating frequency. */
+  atOperating: LadderPoint;
+  /** Band edges used for the passband check, Hz (operating +/- 1 % when the band is unknown). */
+  bandLowHz: number;
+  bandHighHz: number;
+  /** Worst insertion loss across the band, dB. */
+  bandMaxLossDb: number;
+  /** Worst input SWR across the band. */
+  bandMaxSwr: number;
+  /** Attenuation at harmonics 2..5 of the operating frequency (as built, with losses). */
+  harmonics: { n: number; frequencyHz: number; attenuationDb: number }[];
+  /** Log-spaced sweep 0.5..6 x operating frequency for plots. */
+  sweep: LadderPoint[];
+}
+
+export function analyseLpf(design: LpfDesign, sweepPoints = 161): LpfAnalysis {
+  const l = ladderOf(design);
+  const f0 = design.operatingFrequencyHz;
+  const band = bandOf(f0);
+  const lo = band ? band.lowHz : f0 * 0.99;
+  const hi = band ? band.highHz : f0 * 1.01;
+  let bandMaxLossDb = 0;
+  let bandMaxSwr = 1;
+  for (let i = 0; i <= 20; i++) {
+    const p = pointAt(l, lo + ((hi - lo) * i) / 20);
+    bandMaxLossDb = Math.max(bandMaxLossDb, p.lossDb);
+    bandMaxSwr = Math.max(bandMaxSwr, p.inputSwr);
+  }
+  const harmonics = [2, 3, 4, 5].map((n) => ({ n, frequencyHz: n * f0, attenuationDb: pointAt(l, n * f0).lossDb }));
+  const sweep: LadderPoint[] = [];
+  const a = Math.log(0.5 * f0), b = Math.log(6 * f0);
+  for (let i = 0; i < sweepPoints; i++) sweep.push(pointAt(l, Math.exp(a + ((b - a) * i) / (sweepPoints - 1))));
+  return { atOperating: pointAt(l, f0), bandLowHz: lo, bandHighHz: hi, bandMaxLossDb, bandMaxSwr, harmonics, sweep };
+}

@@ -1,0 +1,163 @@
+// Final amplifier: output power, turns ratio, DC input, dissipation, heatsink and device ratings.
+import type { Finding } from '../findings';
+import type { PaParams, Project } from '../model';
+import { validatePaParams } from './lpf-validate';
+import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
+import { paThermal, type PaThermal } from './pa-thermal';
+
+/** Drain efficiency used when none is entered. Common practice, no published source (ref §8.2 ranges). */
+export const DEFAULT_EFFICIENCY: Record<PaParams['amplifierClass'], number> = { B: 0.6, C: 0.7, D: 0.8, E: 0.85 };
+
+export interface RatioOption {
+  /** "primary:secondary" turns. */
+  label: string;
+  /** Secondary / full primary turns. */
+  turnsRatio: number;
+  /** Drain load referred to the full primary, ohms. */
+  primaryOhm: number;
+  /** Output power with this ratio, W. */
+  outputW: number;
+}
+
+export interface PaResult {
+  /** Supply voltage used (key-down trough when known), V. */
+  railV: number;
+  /** Saturation drop used (entered, or Rds(on) x peak current after iteration), V. */
+  saturationV: number;
+  /** Secondary / full primary turns ratio in use. */
+  turnsRatio: number;
+  turnsRatioSource: 'entered' | 'designed';
+  /** Exact ratio for the target power (design mode), else null. */
+  idealTurnsRatio: number | null;
+  /** Practical ratios with the power each gives (design mode: all; entered: empty). */
+  ratioOptions: RatioOption[];
+  /** Drain load referred to the full primary (drain to drain for push-pull), ohms. */
+  primaryOhm: number;
+  /** Output power into the load, W. */
+  outputW: number;
+  outputDbm: number;
+  outputDbw: number;
+  /** Output relative to referencePowerW, dB, and in S-units (6 dB each, common practice). */
+  vsReferenceDb: number;
+  vsReferenceSUnits: number;
+  efficiency: number;
+  efficiencySource: 'entered' | 'class-default';
+  /** DC input power key-down (RF part only), W. */
+  dcInputW: number;
+  /** Key-down DC current including bias idle current, A. */
+  keyDownCurrentA: number;
+  /** Peak drain voltage, V, and peak current of one conducting device, A. */
+  peakDrainV: number;
+  peakDeviceA: number;
+  thermal: PaThermal;
+  findings: Finding[];
+}
+
+const SRC_LOADLINE = 'Textbook load line / Sokal & Sokal IEEE JSSC 1975 (REFERENCE-VALUES §8.1)';
+
+function zeroResult(railV: number, findings: Finding[]): PaResult {
+  return {
+    railV, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
+    outputW: 0, outputDbm: -999, outputDbw: -999, vsReferenceDb: -999, vsReferenceSUnits: -999 / 6, efficiency: 0, efficiencySource: 'entered',
+    dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
+    thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
+    findings,
+  };
+}
+
+const db = (x: number) => (x > 0 ? 10 * Math.log10(x) : -999);
+
+export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier'): PaResult {
+  const errors = validatePaParams(pa);
+  if (!(railV > 0 && Number.isFinite(railV))) errors.push({ field: 'railId', message: 'No supply voltage is known for the PA rail.' });
+  const vsat0 = pa.saturationV ?? 0;
+  if (errors.length === 0 && railV <= vsat0) errors.push({ field: 'saturationV', message: 'Saturation drop is not below the supply voltage.' });
+  if (errors.length > 0) {
+    return zeroResult(Number.isFinite(railV) ? railV : 0, errors.map((e) => ({
+      severity: 'fail', rule: 'pa.input', subject: `${subject}: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message,
+    })));
+  }
+  const findings: Finding[] = [];
+  const target = project.targetPowerW > 0 ? project.targetPowerW : 0;
+  let turnsRatio: number;
+  let idealTurnsRatio: number | null = null;
+  let ratioOptions: RatioOption[] = [];
+  if (pa.turnsRatio !== null) {
+    turnsRatio = pa.turnsRatio;
+  } else if (target > 0) {
+    // Source: impedance transformation N_s/N_p = sqrt(Z_s/Z_p) (REFERENCE-VALUES §8.1)
+    idealTurnsRatio = Math.sqrt(pa.loadOhm / primaryOhmForPower(pa, railV, target));
+    ratioOptions = PRACTICAL_RATIOS.map((r) => {
+      const primaryOhm = pa.loadOhm / r.turnsRatio ** 2;
+      return { ...r, primaryOhm, outputW: operatingPoint(pa, railV, primaryOhm).outputW };
+    });
+    const best = ratioOptions.reduce((a, b) => (Math.abs(db(b.outputW / target)) < Math.abs(db(a.outputW / target)) ? b : a));
+    turnsRatio = best.turnsRatio;
+  } else {
+    return zeroResult(railV, [{ severity: 'fail', rule: 'pa.input', subject, value: target, limit: 0, unit: 'W', source: 'input check', message: 'Enter a turns ratio or a target power above zero.' }]);
+  }
+  // Source: impedance transformation Z_p = Z_s / (N_s/N_p)^2 (REFERENCE-VALUES §8.1)
+  const primaryOhm = pa.loadOhm / turnsRatio ** 2;
+  const op = operatingPoint(pa, railV, primaryOhm);
+  const efficiency = pa.efficiency ?? DEFAULT_EFFICIENCY[pa.amplifierClass];
+  const dcInputW = op.outputW / efficiency;
+  const biasW = pa.biasIdleMaxA * railV;
+  const keyDownCurrentA = dcInputW / railV + pa.biasIdleMaxA;
+  const peakDrainV = peakDrainFactor(pa.amplifierClass) * railV;
+  const thermal = paThermal(pa, op.outputW, dcInputW, biasW, project.ambientC, project.keyingDuty);
+
+  if (pa.efficiency === null) {
+    findings.push({ severity: 'ok', rule: 'pa.efficiency', subject, value: efficiency, limit: null, unit: '', source: 'Common practice, no published source',
+      message: `No efficiency entered: ${Math.round(efficiency * 100)} % assumed for class ${pa.amplifierClass}; measure DC input at full output to confirm.` });
+  }
+  if (pa.amplifierClass === 'E' && pa.topology === 'push-pull') {
+    findings.push({ severity: 'caution', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'assumption, no published source',
+      message: 'Push-pull class E is modelled as two single-ended class-E halves each driving half the load; treat the power as an estimate.' });
+  }
+  if (target > 0) {
+    const dev = db(op.outputW / target);
+    findings.push({ severity: Math.abs(dev) > 1 ? 'caution' : 'ok', rule: 'pa.power', subject, value: op.outputW, limit: target, unit: 'W', source: SRC_LOADLINE,
+      message: Math.abs(dev) > 1
+        ? `Predicted output ${op.outputW.toFixed(1)} W is ${dev.toFixed(1)} dB from the ${target} W target; change the turns ratio or rail voltage.`
+        : `Predicted output ${op.outputW.toFixed(1)} W is within 1 dB of the ${target} W target.` });
+  }
+  // Common practice, no published source: device voltage rating at least 1.25 x the peak drain voltage
+  const vMargin = 1.25;
+  findings.push({
+    severity: pa.deviceVdsMaxV < peakDrainV ? 'fail' : pa.deviceVdsMaxV < vMargin * peakDrainV ? 'caution' : 'ok',
+    rule: 'pa.vds', subject, value: peakDrainV, limit: pa.deviceVdsMaxV, unit: 'V', source: `${SRC_LOADLINE}; 25 % margin common practice`,
+    message: pa.deviceVdsMaxV < peakDrainV
+      ? `Drain peaks near ${peakDrainV.toFixed(1)} V exceed the ${pa.deviceVdsMaxV} V device rating: the device will break down, especially into a mismatch.`
+      : pa.deviceVdsMaxV < vMargin * peakDrainV
+        ? `Drain peaks near ${peakDrainV.toFixed(1)} V leave less than 25 % margin to the ${pa.deviceVdsMaxV} V rating; a mismatch or supply rise can exceed it.`
+        : `Device rating ${pa.deviceVdsMaxV} V covers the ${peakDrainV.toFixed(1)} V drain peaks with margin.`,
+  });
+  findings.push({
+    severity: op.peakDeviceA > pa.deviceIdMaxA ? 'fail' : op.peakDeviceA > 0.8 * pa.deviceIdMaxA ? 'caution' : 'ok',
+    rule: 'pa.id', subject, value: op.peakDeviceA, limit: pa.deviceIdMaxA, unit: 'A', source: SRC_LOADLINE,
+    message: op.peakDeviceA > pa.deviceIdMaxA
+      ? `Peak device current ${op.peakDeviceA.toFixed(2)} A exceeds the ${pa.deviceIdMaxA} A rating.`
+      : `Peak device current ${op.peakDeviceA.toFixed(2)} A against a ${pa.deviceIdMaxA} A rating.`,
+  });
+  findings.push(...thermal.findings.map((f) => ({ ...f, subject })));
+  const { findings: _drop, ...thermalValues } = thermal;
+  void _drop;
+  const ref = pa.referencePowerW;
+  const vsReferenceDb = db(op.outputW / ref);
+  return {
+    railV, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
+    primaryOhm, outputW: op.outputW,
+    // Source: definitions of dBm and dBW (power relative to 1 mW / 1 W)
+    outputDbm: db(op.outputW / 1e-3), outputDbw: db(op.outputW),
+    // Common practice, no published source: one S-unit = 6 dB
+    vsReferenceDb, vsReferenceSUnits: vsReferenceDb / 6,
+    efficiency, efficiencySource: pa.efficiency === null ? 'class-default' : 'entered',
+    dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, findings,
+  };
+}
+
+/** Key-down DC current of the PA from railV (A), 0 when the parameters are unusable. For the lead's budget. */
+export function paKeyDownCurrentA(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>): number {
+  const r = evaluatePa(pa, railV, project);
+  return Number.isFinite(r.keyDownCurrentA) ? r.keyDownCurrentA : 0;
+}

@@ -1,0 +1,55 @@
+// Shape of the RF engine's report: plain JSON (no Maps, no NaN), SI units unless a key says otherwise.
+import type { Finding } from '../findings';
+import type { ExposureResult } from './exposure';
+import type { HarmonicsReport } from './harmonics';
+import type { LpfAnalysis } from './lpf-analysis';
+import type { LpfDesign } from './lpf-design';
+import type { MonteCarloResult } from './lpf-monte-carlo';
+import type { FieldError } from './lpf-validate';
+import type { PaResult } from './pa';
+import type { RelayResult } from './tr-relay';
+
+export interface LpfStageResult {
+  /** Field errors of the filter parameters (design/analysis null when not empty). */
+  errors: FieldError[];
+  design: LpfDesign | null;
+  analysis: LpfAnalysis | null;
+  monteCarlo: MonteCarloResult | null;
+  /** Peak RF voltage across the shunt capacitors at the worst SWR, V (choose capacitors rated well above it). */
+  capacitorPeakV: number;
+  /** Heat in the filter at key-down from its insertion loss, W. */
+  filterLossW: number;
+}
+
+export interface RfStageResult {
+  stageId: string;
+  stageName: string;
+  kind: 'final' | 'lpf' | 'tr';
+  /** PA results (kind 'final'). */
+  pa: PaResult | null;
+  /** Filter results (kind 'lpf'). */
+  lpf: LpfStageResult | null;
+  /** Relay results (kind 'tr'). */
+  relay: RelayResult | null;
+  /** This stage's findings, most severe first. */
+  findings: Finding[];
+}
+
+export interface RfReport {
+  /** Operating frequency, Hz. */
+  frequencyHz: number;
+  /** Target output power, W. */
+  targetPowerW: number;
+  /** Power at the transmitter output after the filter (PA result, else the target), W. */
+  outputPowerW: number;
+  /** Stage id of the PA and filter used for harmonics and exposure (null when absent). */
+  paStageId: string | null;
+  lpfStageId: string | null;
+  /** Project-level input errors (frequency, power). */
+  inputErrors: FieldError[];
+  stages: RfStageResult[];
+  harmonics: HarmonicsReport | null;
+  exposure: ExposureResult | null;
+  /** All findings, most severe first. */
+  findings: Finding[];
+}

@@ -1,0 +1,123 @@
+// T/R relay checks: RF voltage/current at worst SWR, DC contacts, coil load, isolation, keying timing.
+import type { Finding } from '../findings';
+import type { Mode, PerMode, RelayParams, Stage } from '../model';
+import { MODES } from '../model';
+
+export interface RelayResult {
+  /** Net power through the relay, W, and the worst SWR assumed. */
+  powerW: number;
+  swr: number;
+  /** Standing-wave maxima on the line at that SWR: RMS and peak voltage (V), RMS and peak current (A). */
+  rfRmsV: number;
+  rfPeakV: number;
+  rfRmsA: number;
+  rfPeakA: number;
+  /** Before the filter: upper bound of the peak with PA harmonics added in phase, V (null after the filter). */
+  peakWithHarmonicsV: number | null;
+  /** Voltage rating compared against, V peak, and whether it is an RF rating. */
+  ratedPeakV: number;
+  ratedIsRf: boolean;
+  /** Power reaching the receiver through the open contacts during transmit, W and dBm. */
+  receiverPowerW: number;
+  receiverPowerDbm: number;
+  /** Morse dot length at the set speed, s. */
+  dotS: number;
+  /** txDelayS - (operate + bounce), s; negative = RF applied to moving contacts. */
+  hotSwitchMarginS: number;
+  findings: Finding[];
+}
+
+/** Standing-wave maxima on a lossless line for net power P, impedance Z0 and SWR S. */
+export function lineMaxima(powerW: number, z0Ohm: number, swr: number) {
+  // Source: standard transmission-line theory (REFERENCE-VALUES §9): V_max,rms = sqrt(P Z0 S), I_max,rms = sqrt(P S / Z0)
+  const rmsV = Math.sqrt(powerW * z0Ohm * swr);
+  const rmsA = Math.sqrt((powerW * swr) / z0Ohm);
+  return { rmsV, peakV: Math.SQRT2 * rmsV, rmsA, peakA: Math.SQRT2 * rmsA };
+}
+
+// Source: ITU-R M.1677-1, International Morse code (2009; edition year from memory): dot = 1 unit; with the common-practice "PARIS" word of 50 units, dot = 1.2/WPM s
+export function dotLengthS(wpm: number): number {
+  return 1.2 / wpm;
+}
+
+export interface RelayInput {
+  powerW: number;
+  swr: number;
+  /** Sum of PA harmonic amplitudes relative to the fundamental (for the before-filter bound). */
+  harmonicAmplitudeSum: number;
+  subject: string;
+}
+
+export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
+  const f: Finding[] = [];
+  const s = inp.subject;
+  const swr = Math.max(1, inp.swr);
+  const m = lineMaxima(Math.max(0, inp.powerW), 50, swr);
+  const before = r.position === 'before-lpf';
+  // Source: triangle inequality on the Fourier components (REFERENCE-VALUES §9 note): peak <= fundamental x (1 + sum of harmonics)
+  const peakWithHarmonicsV = before ? m.peakV * (1 + Math.max(0, inp.harmonicAmplitudeSum)) : null;
+  const ratedIsRf = r.rfRatedVpeak !== null;
+  const ratedPeakV = r.rfRatedVpeak ?? r.contactRatedV;
+  const checkV = peakWithHarmonicsV ?? m.peakV;
+  f.push({
+    severity: checkV > ratedPeakV ? 'fail' : !ratedIsRf || checkV > 0.8 * ratedPeakV ? 'caution' : 'ok',
+    rule: 'relay.rf-voltage', subject: s, value: checkV, limit: ratedPeakV, unit: 'V', source: 'Transmission-line standing-wave maxima (REFERENCE-VALUES §9)',
+    message: (checkV > ratedPeakV
+      ? `RF peaks up to ${checkV.toFixed(0)} V at SWR ${swr} exceed the ${ratedPeakV} V rating: the contacts can arc.`
+      : `RF peaks up to ${checkV.toFixed(0)} V at SWR ${swr} against a ${ratedPeakV} V rating.`) +
+      (ratedIsRf ? '' : ' No RF rating is entered, so the DC contact rating is used; RF ratings are usually lower.') +
+      (before ? ' The relay sits before the low-pass filter, where harmonics add to the peaks; this value is an upper bound.' : ''),
+  });
+  f.push({
+    severity: m.rmsA > r.contactCarryA ? 'fail' : m.rmsA > 0.8 * r.contactCarryA ? 'caution' : 'ok',
+    rule: 'relay.rf-current', subject: s, value: m.rmsA, limit: r.contactCarryA, unit: 'A', source: 'Transmission-line standing-wave maxima (REFERENCE-VALUES §9)',
+    message: `RF current up to ${m.rmsA.toFixed(2)} A RMS at SWR ${swr} against a ${r.contactCarryA} A carry rating.`,
+  });
+  if (r.dcSwitchedA > 0) {
+    const bad = r.dcSwitchedA > r.contactSwitchA || r.dcSwitchedA > r.contactCarryA;
+    f.push({
+      severity: bad ? 'fail' : r.dcSwitchedA > 0.8 * r.contactSwitchA ? 'caution' : 'ok', rule: 'relay.dc-contacts', subject: s,
+      value: r.dcSwitchedA, limit: Math.min(r.contactSwitchA, r.contactCarryA), unit: 'A', source: "Relay maker's contact ratings",
+      message: bad
+        ? `The DC contacts switch ${r.dcSwitchedA} A, above their ${r.contactSwitchA} A switching / ${r.contactCarryA} A carry rating.`
+        : `The DC contacts switch ${r.dcSwitchedA} A within their ${r.contactSwitchA} A switching rating.`,
+    });
+  }
+  // Source: definition of isolation in dB: P_rx = P_tx x 10^(-isolation/10)
+  const receiverPowerW = Math.max(0, inp.powerW) * 10 ** (-r.isolationDb / 10);
+  f.push({
+    severity: receiverPowerW > r.receiverMaxInputW ? 'fail' : receiverPowerW > 0.5 * r.receiverMaxInputW ? 'caution' : 'ok',
+    rule: 'relay.isolation', subject: s, value: receiverPowerW, limit: r.receiverMaxInputW, unit: 'W', source: "Relay maker's isolation figure at the operating frequency",
+    message: receiverPowerW > r.receiverMaxInputW
+      ? `About ${(receiverPowerW * 1e3).toPrecision(3)} mW leaks to the receiver input, above its ${(r.receiverMaxInputW * 1e3).toPrecision(3)} mW maximum: add a protection diode pair or a second relay section.`
+      : `About ${(receiverPowerW * 1e3).toPrecision(3)} mW reaches the receiver input (maximum ${(r.receiverMaxInputW * 1e3).toPrecision(3)} mW).`,
+  });
+  const dotS = dotLengthS(r.wpm);
+  const hotSwitchMarginS = r.txDelayS - (r.operateS + r.bounceS);
+  f.push({
+    severity: hotSwitchMarginS < 0 ? 'fail' : 'ok', rule: 'relay.hot-switch', subject: s, value: r.txDelayS, limit: r.operateS + r.bounceS, unit: 's', source: "Relay maker's operate and bounce times",
+    message: hotSwitchMarginS < 0
+      ? `RF starts ${(r.txDelayS * 1e3).toFixed(1)} ms after the key, before the contacts settle (${((r.operateS + r.bounceS) * 1e3).toFixed(1)} ms): hot switching burns contacts and stresses the PA. Lengthen the transmit delay.`
+      : `RF starts ${(r.txDelayS * 1e3).toFixed(1)} ms after the key, after the contacts settle (${((r.operateS + r.bounceS) * 1e3).toFixed(1)} ms).`,
+  });
+  const cycleS = r.operateS + r.releaseS;
+  f.push({
+    severity: r.txDelayS > 0.5 * dotS ? 'caution' : 'ok', rule: 'relay.keying', subject: s, value: r.txDelayS, limit: 0.5 * dotS, unit: 's', source: 'ITU-R M.1677-1 dot length 1.2/WPM',
+    message: (r.txDelayS > 0.5 * dotS
+      ? `At ${r.wpm} WPM a dot lasts ${(dotS * 1e3).toFixed(0)} ms; a ${(r.txDelayS * 1e3).toFixed(0)} ms transmit delay clips the first element noticeably.`
+      : `At ${r.wpm} WPM a dot lasts ${(dotS * 1e3).toFixed(0)} ms; the transmit delay clips the first element by ${((r.txDelayS / dotS) * 100).toFixed(0)} %.`) +
+      (cycleS > dotS ? ' The relay is too slow to follow single elements, so it suits semi-break-in with a hang time, not full break-in.' : ''),
+  });
+  return {
+    powerW: inp.powerW, swr, rfRmsV: m.rmsV, rfPeakV: m.peakV, rfRmsA: m.rmsA, rfPeakA: m.peakA, peakWithHarmonicsV, ratedPeakV, ratedIsRf,
+    receiverPowerW, receiverPowerDbm: receiverPowerW > 0 ? 10 * Math.log10(receiverPowerW / 1e-3) : -999, dotS, hotSwitchMarginS, findings: f,
+  };
+}
+
+/** Coil current drawn per mode (energised in coilModes) for the supply budget; null when not applicable. */
+export function relayCoilLoads(stage: Stage): { railId: string; currentA: PerMode } | null {
+  const r = stage.relay;
+  if (!r || r.coilRailId === null || !(r.coilA > 0) || !Number.isFinite(r.coilA)) return null;
+  const currentA = Object.fromEntries(MODES.map((m: Mode) => [m, r.coilModes.includes(m) ? r.coilA : 0])) as PerMode;
+  return { railId: r.coilRailId, currentA };
+}
