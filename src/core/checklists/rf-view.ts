@@ -1,8 +1,10 @@
 // The few RF numbers the checklists and the PDF read, in one place, so a change in the RF report's
 // shape touches only this file. Pure.
 
-/** Placeholder until the RF report lands: the PDF and checklists print "not computed" for null. */
-export type RfReport = Record<string, unknown>;
+import type { RfReport } from '../rf/report';
+import { formatValue } from '../units';
+
+export type { RfReport };
 
 export interface RfElementView {
   label: string; // "C1", "L2"
@@ -51,10 +53,65 @@ export interface RfView {
   relayReleaseS: number | null;
   relayBounceS: number | null;
   txDelayS: number | null;
+  /** T/R delay minus (operate + bounce), s; negative = RF on moving contacts. */
+  relayMarginS: number | null;
   exposure: RfExposureView[];
 }
 
 export function rfView(rf: RfReport | null): RfView | null {
   if (!rf) return null;
-  return null;
+  const paStage = rf.stages.find((s) => s.stageId === rf.paStageId && s.pa) ?? rf.stages.find((s) => s.pa);
+  const lpfStage = rf.stages.find((s) => s.stageId === rf.lpfStageId && s.lpf) ?? rf.stages.find((s) => s.lpf);
+  const trStage = rf.stages.find((s) => s.relay);
+  const pa = paStage?.pa ?? null;
+  const design = lpfStage?.lpf?.design ?? null;
+  const analysis = lpfStage?.lpf?.analysis ?? null;
+  const relay = trStage?.relay ?? null;
+  const exp = rf.exposure;
+  const exposure: RfExposureView[] = [];
+  if (exp?.controlledDistanceM != null) exposure.push({ label: 'controlled / occupational: you, aware of the exposure', distanceM: exp.controlledDistanceM });
+  if (exp?.generalDistanceM != null) exposure.push({ label: 'general public and neighbours', distanceM: exp.generalDistanceM });
+  return {
+    paOutputW: pa?.outputW ?? null,
+    paKeyDownA: pa?.keyDownCurrentA ?? null,
+    paRailV: pa?.railV ?? null,
+    paEfficiency: pa?.efficiency ?? null,
+    paPeakDrainV: pa?.peakDrainV ?? null,
+    paDissipationW: pa?.thermal.dissipationTotalW ?? null,
+    paJunctionC: pa?.thermal.tjContinuousC ?? null,
+    paThetaSaNeededKPerW: pa?.thermal.thetaSaNeededContinuousKPerW ?? null,
+    lpfCutoffHz: design?.cutoffHz ?? null,
+    lpfText: design ? `${design.response === 'chebyshev' ? `Chebyshev ${design.rippleDb} dB` : 'Butterworth'}, order ${design.order}, ${design.form}` : '',
+    lpfElements: (design?.elements ?? []).map((e) => {
+      const cap = e.kind === 'shunt-capacitor';
+      return {
+        label: `${cap ? 'C' : 'L'}${e.index}`,
+        kind: cap ? ('capacitor' as const) : ('inductor' as const),
+        idealValue: e.idealValue,
+        builtValue: e.builtValue,
+        partsText: cap ? e.capacitorPartsF.map((c) => formatValue(c, 'F')).join(' + ') : `${e.turns ?? '—'} turns`,
+        turns: e.turns,
+      };
+    }),
+    lpfCoreName: design?.coreName ?? '',
+    lpfBandLossDb: analysis?.bandMaxLossDb ?? null,
+    s21: (analysis?.sweep ?? []).map((p) => ({ frequencyHz: p.frequencyHz, gainDb: p.s21Db })),
+    harmonicRule: rf.harmonics ? rf.harmonics.ruleTitle : '',
+    harmonics: (rf.harmonics?.rows ?? []).map((h) => ({
+      n: h.n,
+      frequencyHz: h.frequencyHz,
+      paLevelDbc: h.paLevelDbc,
+      filterAttenuationDb: h.filterAttenuationDb,
+      predictedDbc: h.predictedDbc,
+      requiredDb: h.requiredDb,
+      marginDb: h.marginDb,
+      severity: h.severity,
+    })),
+    relayOperateS: null,
+    relayReleaseS: null,
+    relayBounceS: null,
+    txDelayS: null,
+    relayMarginS: relay?.hotSwitchMarginS ?? null,
+    exposure,
+  };
 }

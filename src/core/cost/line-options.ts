@@ -19,6 +19,7 @@ export interface LineContext {
   lineId: string;
   partId: string;
   description: string;
+  value: string;
   category: string;
   refs: string;
   qtyPerRig: number;
@@ -78,6 +79,7 @@ export function prepareLines(project: Project): LineContext[] {
       lineId: line.id,
       partId: line.partId,
       description: part?.description ?? '',
+      value: part === null || part.ratings.value === undefined ? '' : String(part.ratings.value),
       category,
       refs: line.refs,
       qtyPerRig: qtyOk ? line.qtyPerRig : 0,

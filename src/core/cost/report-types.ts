@@ -34,6 +34,8 @@ export interface CostLine {
   partId: string;
   /** Part description ('' when the part is unknown). */
   description: string;
+  /** The part's ratings.value as text (e.g. "100 nF"), '' when none. */
+  value: string;
   category: string;
   /** Reference designators as entered. */
   refs: string;

@@ -1,0 +1,103 @@
+// Which CSV column feeds which field of an imported parts list or catalog. Guessed from the header
+// text; the user can override any field.
+
+export const IMPORT_FIELDS = [
+  'refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency',
+] as const;
+export type ImportField = (typeof IMPORT_FIELDS)[number];
+
+export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
+  refs: 'Reference designators',
+  value: 'Value',
+  quantity: 'Quantity per rig',
+  description: 'Description',
+  category: 'Category',
+  supplier: 'Supplier',
+  sku: 'Supplier order code (SKU)',
+  price: 'Unit price',
+  currency: 'Currency',
+};
+
+/** Column index (0-based) per field, null = not imported. */
+export type ColumnMapping = Record<ImportField, number | null>;
+
+// Whole-header synonyms, compared after normalise(). Checked before the word matches below.
+const EXACT: Record<ImportField, string[]> = {
+  refs: ['ref', 'refs', 'reference', 'references', 'designator', 'designators', 'refdes', 'ref des',
+    'reference designator', 'reference designators', 'part refs'],
+  value: ['value', 'val', 'part value'],
+  quantity: ['qty', 'quantity', 'qty per rig', 'quantity per rig', 'qty per kit', 'count', 'pcs', 'pieces', 'amount'],
+  description: ['description', 'desc', 'part description', 'item', 'name', 'part', 'component'],
+  category: ['category', 'type', 'kind', 'group'],
+  supplier: ['supplier', 'vendor', 'distributor', 'shop', 'source', 'seller'],
+  sku: ['sku', 'order code', 'order number', 'supplier part', 'supplier part number', 'part number',
+    'catalog number', 'catalogue number', 'cat no', 'article', 'article number', 'stock code', 'pn'],
+  price: ['price', 'unit price', 'price each', 'each', 'unit cost', 'cost each', 'price per unit'],
+  currency: ['currency', 'cur', 'ccy'],
+};
+
+// Single words that identify a field anywhere in a header, for headers no exact synonym took.
+const WORDS: Record<ImportField, string[]> = {
+  refs: ['designator', 'designators', 'refs', 'ref'],
+  value: ['value'],
+  quantity: ['qty', 'quantity'],
+  description: ['description', 'desc'],
+  category: ['category'],
+  supplier: ['supplier', 'vendor', 'distributor'],
+  sku: ['sku'],
+  price: ['price'],
+  currency: ['currency'],
+};
+
+/** Lower case, accents and punctuation dropped, single spaces: "Qty./Rig" -> "qty rig". */
+export function normaliseHeader(h: string): string {
+  return h
+    .replace(/^\uFEFF/, '')
+    .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, ' ')
+    .trim();
+}
+
+export function emptyMapping(): ColumnMapping {
+  return Object.fromEntries(IMPORT_FIELDS.map((f) => [f, null])) as ColumnMapping;
+}
+
+/** Guess the mapping: exact synonyms first, then whole-word matches; each column used at most once. */
+export function guessMapping(headers: readonly string[]): ColumnMapping {
+  const mapping = emptyMapping();
+  const norm = headers.map(normaliseHeader);
+  const taken = new Set<number>();
+  for (const f of IMPORT_FIELDS) {
+    const i = norm.findIndex((h, k) => !taken.has(k) && EXACT[f].includes(h));
+    if (i >= 0) {
+      mapping[f] = i;
+      taken.add(i);
+    }
+  }
+  for (const f of IMPORT_FIELDS) {
+    if (mapping[f] !== null) continue;
+    const i = norm.findIndex((h, k) => !taken.has(k) && h.split(' ').some((w) => WORDS[f].includes(w)));
+    if (i >= 0) {
+      mapping[f] = i;
+      taken.add(i);
+    }
+  }
+  return mapping;
+}
+
+/** Apply the user's choices over a guess; out-of-range columns become null. */
+export function overrideMapping(
+  base: ColumnMapping,
+  overrides: Partial<Record<ImportField, number | null>>,
+  columnCount: number,
+): ColumnMapping {
+  const out = { ...base };
+  for (const f of IMPORT_FIELDS) {
+    if (!(f in overrides)) continue;
+    const v = overrides[f];
+    out[f] = v !== null && v !== undefined && Number.isInteger(v) && v >= 0 && v < columnCount ? v : null;
+  }
+  return out;
+}

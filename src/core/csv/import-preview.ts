@@ -1,0 +1,154 @@
+// Import preview: every data row with its parsed values and its errors, before anything is saved.
+
+import { guessDelimiter, parseCsv } from './parse';
+import { parsePrice, parseQuantity } from './parse-price';
+import { countRefs } from './refs';
+import { guessMapping, IMPORT_FIELD_LABELS, type ColumnMapping, type ImportField } from './import-mapping';
+import { unneutraliseText } from './write';
+
+/** parts-list: BOM lines (quantity needed); catalog: supplier offers (supplier and price needed). */
+export type ImportKind = 'parts-list' | 'catalog';
+
+export interface ImportOptions {
+  kind: ImportKind;
+  /** Currency for prices that name none (ISO code). */
+  defaultCurrency: string;
+  /** Decides "1,250" / "1.250" (see parse-price.ts); default "." (or "," when the file uses ";"). */
+  decimal?: '.' | ',';
+  /** Field separator; guessed from the header line when absent. */
+  delimiter?: ',' | ';' | '\t';
+  /** Column choices; guessed from the headers when absent. */
+  mapping?: ColumnMapping;
+}
+
+export interface RowError {
+  /** Record number as a spreadsheet shows it: header = 1, first data row = 2. 0 = the whole file. */
+  row: number;
+  /** Header text of the column (or field label when the column is missing); null = whole row. */
+  column: string | null;
+  message: string;
+}
+
+export interface ImportValues {
+  refs: string;
+  value: string;
+  description: string;
+  category: string;
+  /** Pieces per rig; null in a catalog or when unreadable. */
+  quantity: number | null;
+  supplier: string;
+  sku: string;
+  /** Unit price in minor units of `currency`; null when no price column or empty in a parts list. */
+  priceCents: number | null;
+  currency: string | null;
+}
+
+export interface PreviewRow {
+  row: number;
+  values: ImportValues;
+  errors: RowError[];
+  warnings: RowError[];
+}
+
+export interface ImportPreview {
+  kind: ImportKind;
+  headers: string[];
+  mapping: ColumnMapping;
+  delimiter: string;
+  rows: PreviewRow[];
+  /** Problems with the file or the mapping; they block the import. */
+  fileErrors: RowError[];
+  validRows: number;
+  invalidRows: number;
+}
+
+function requiredFieldErrors(kind: ImportKind, m: ColumnMapping): RowError[] {
+  const missing = (fields: ImportField[], msg: string): RowError[] =>
+    fields.every((f) => m[f] === null) ? [{ row: 0, column: fields.map((f) => IMPORT_FIELD_LABELS[f]).join(' / '), message: msg }] : [];
+  const errs = missing(['description', 'value'], 'Choose a column for the description or the value.');
+  if (kind === 'parts-list') errs.push(...missing(['quantity', 'refs'], 'Choose a column for the quantity (or the reference designators to count).'));
+  else {
+    errs.push(...missing(['supplier'], 'A catalog needs a supplier column.'));
+    errs.push(...missing(['price'], 'A catalog needs a price column.'));
+  }
+  return errs;
+}
+
+export function previewImport(text: string, options: ImportOptions): ImportPreview {
+  const delimiter = options.delimiter ?? guessDelimiter(text);
+  const decimal = options.decimal ?? (delimiter === ';' ? ',' : '.');
+  const parsed = parseCsv(text, delimiter);
+  const fileErrors: RowError[] = parsed.errors.map((e) => ({ row: e.record, column: null, message: `Line ${e.line}: ${e.message}` }));
+  const headers = (parsed.records[0] ?? []).map((h) => h.trim());
+  const mapping = options.mapping ?? guessMapping(headers);
+  if (parsed.records.length === 0) fileErrors.push({ row: 0, column: null, message: 'The file is empty.' });
+  else fileErrors.push(...requiredFieldErrors(options.kind, mapping));
+
+  const rows: PreviewRow[] = [];
+  parsed.records.slice(1).forEach((cells, k) => {
+    if (cells.every((c) => c.trim() === '')) return; // blank lines are not rows
+    rows.push(previewRow(k + 2, cells, headers, mapping, options, decimal));
+  });
+  const invalidRows = rows.filter((r) => r.errors.length > 0).length;
+  return { kind: options.kind, headers, mapping, delimiter, rows, fileErrors, validRows: rows.length - invalidRows, invalidRows };
+}
+
+function previewRow(
+  row: number,
+  cells: string[],
+  headers: string[],
+  m: ColumnMapping,
+  opts: ImportOptions,
+  decimal: '.' | ',',
+): PreviewRow {
+  const errors: RowError[] = [];
+  const warnings: RowError[] = [];
+  const col = (f: ImportField) => (m[f] === null ? IMPORT_FIELD_LABELS[f] : headers[m[f]!] || IMPORT_FIELD_LABELS[f]);
+  const get = (f: ImportField) => (m[f] === null ? '' : unneutraliseText(cells[m[f]!] ?? '').trim());
+  const err = (f: ImportField | null, message: string) => errors.push({ row, column: f === null ? null : col(f), message });
+  const warn = (f: ImportField | null, message: string) => warnings.push({ row, column: f === null ? null : col(f), message });
+
+  const v: ImportValues = {
+    refs: get('refs'), value: get('value'), description: get('description'), category: get('category'),
+    quantity: null, supplier: get('supplier'), sku: get('sku'), priceCents: null, currency: null,
+  };
+  if (v.description === '' && v.value === '') err(m.description !== null ? 'description' : 'value', 'Needs a description or a value.');
+
+  if (opts.kind === 'parts-list') {
+    const refCount = v.refs === '' ? null : countRefs(v.refs);
+    const qtyText = get('quantity');
+    if (m.quantity === null || qtyText === '') {
+      if (refCount !== null && refCount > 0) v.quantity = refCount;
+      else err('quantity', 'Needs a quantity (or reference designators to count).');
+    } else {
+      const q = parseQuantity(qtyText);
+      if (q === null) err('quantity', `"${qtyText}" is not a quantity.`);
+      else if (q === 0) err('quantity', 'The quantity is 0.');
+      else {
+        v.quantity = q;
+        if (refCount !== null && refCount !== q) warn('refs', `${refCount} designators listed but the quantity is ${q}.`);
+      }
+    }
+  }
+
+  const priceText = get('price');
+  if (priceText !== '') {
+    const p = parsePrice(priceText, decimal);
+    if (!p.ok) err('price', p.message);
+    else {
+      v.priceCents = p.cents;
+      if (p.roundedFrom !== null) warn('price', `${p.roundedFrom} rounded half-up to ${p.cents} minor units.`);
+      const colCurrency = get('currency').toUpperCase();
+      if (colCurrency !== '' && !/^[A-Z]{3}$/.test(colCurrency)) err('currency', `"${colCurrency}" is not a three-letter currency code.`);
+      else if (colCurrency !== '' && p.currency !== null && colCurrency !== p.currency) err('currency', `The price says ${p.currency} but the currency column says ${colCurrency}.`);
+      v.currency = p.currency ?? (colCurrency || opts.defaultCurrency.toUpperCase());
+    }
+  } else if (opts.kind === 'catalog') err('price', 'Needs a price.');
+
+  if (v.supplier === '') {
+    if (opts.kind === 'catalog') err('supplier', 'Needs a supplier.');
+    else if (v.priceCents !== null) err('supplier', 'A price needs a supplier.');
+    else if (v.sku !== '') err('supplier', 'An order code (SKU) needs a supplier.');
+  }
+  return { row, values: v, errors, warnings };
+}

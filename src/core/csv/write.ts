@@ -1,0 +1,62 @@
+// CSV writer. Source: IETF, RFC 4180 "Common Format and MIME Type for CSV Files" (2005), §2.
+// Formula-injection defence: Source: OWASP, "CSV Injection" community page (accessed from memory),
+// recommendation: prefix cells starting with = + - @ TAB CR with a single quote, and quote every field
+// that contains the separator or a double quote.
+
+/** A cell: text is escaped and neutralised; a finite number is written as a number; null/undefined = empty. */
+export type CsvCell = string | number | null | undefined;
+
+export interface CsvWriteOptions {
+  /** Start with a UTF-8 byte order mark (U+FEFF) so spreadsheets read the file as UTF-8. Default false. */
+  bom?: boolean;
+  /** Prefix text cells starting with = + - @ TAB CR with "'" (OWASP). Default true. */
+  neutralise?: boolean;
+  /** Field separator; "," per RFC 4180, ";" for spreadsheets set to a decimal comma. Default ",". */
+  delimiter?: ',' | ';' | '\t';
+}
+
+export const BOM = '\uFEFF';
+
+/** First characters a spreadsheet may read as the start of a formula (OWASP list). */
+export const FORMULA_TRIGGERS = ['=', '+', '-', '@', '\t', '\r'] as const;
+
+/** "'=1+2" for "=1+2"; other text unchanged. Numbers are never passed here: -5 stays a number. */
+export function neutraliseText(text: string): string {
+  return text.length > 0 && (FORMULA_TRIGGERS as readonly string[]).includes(text[0]) ? `'${text}` : text;
+}
+
+/** Undo neutraliseText: drop one leading "'" when a formula trigger follows it (used by the importer). */
+export function unneutraliseText(text: string): string {
+  return text.length > 1 && text[0] === "'" && (FORMULA_TRIGGERS as readonly string[]).includes(text[1])
+    ? text.slice(1)
+    : text;
+}
+
+function field(cell: CsvCell, delimiter: string, neutralise: boolean): string {
+  if (cell === null || cell === undefined) return '';
+  if (typeof cell === 'number') return Number.isFinite(cell) ? String(cell) : '';
+  const text = neutralise ? neutraliseText(cell) : cell;
+  // RFC 4180 §2.6: fields containing line breaks, double quotes or the separator are enclosed in quotes;
+  // §2.7: a double quote inside is escaped by doubling it.
+  if (text.includes('"') || text.includes(delimiter) || text.includes('\n') || text.includes('\r')) {
+    return `"${text.replace(/"/g, '""')}"`;
+  }
+  return text;
+}
+
+/**
+ * Rows to CSV text. RFC 4180 §2.1: every record ends with CRLF (including the last, which §2.2 allows).
+ * A record that is a single empty field is written as `""` so it is not read back as a blank line.
+ */
+export function writeCsv(rows: readonly (readonly CsvCell[])[], options: CsvWriteOptions = {}): string {
+  const delimiter = options.delimiter ?? ',';
+  const neutralise = options.neutralise ?? true;
+  const body = rows
+    .map((row) => {
+      const line = row.map((c) => field(c, delimiter, neutralise)).join(delimiter);
+      return line === '' && row.length === 1 ? '""' : line;
+    })
+    .map((line) => `${line}\r\n`)
+    .join('');
+  return (options.bom ? BOM : '') + body;
+}

@@ -1,0 +1,63 @@
+// Battery or external DC source: voltage window against regulator headroom, and runtime for an operating split.
+import type { Finding } from '../findings';
+import type { BatteryRail, PerMode } from '../model';
+import { safeDuty } from './corners';
+
+export interface BatteryRuntime {
+  /** Average current over the receive/transmit split (A). */
+  averageA: number;
+  /** Transmit-time current = keyDown x duty + keyUp x (1 - duty) (A). */
+  transmitA: number;
+  /** Runtime on the usable capacity (s); 0 when the battery or the load is not usable. */
+  runtimeS: number;
+}
+
+/**
+ * Runtime = usable charge / average current; the transmit current is the CW duty-weighted mean of key-down and key-up.
+ * Source: charge balance Q = I t; CW duty factor 0.40 from FCC OET Bulletin 65 Supplement B (1997), Table 2 (ref §2.3 [C2]).
+ */
+export function batteryRuntime(battery: BatteryRail, outputA: PerMode, keyingDuty: number, transmitFraction: number): BatteryRuntime {
+  const d = safeDuty(keyingDuty);
+  const tx = Number.isFinite(transmitFraction) ? Math.min(1, Math.max(0, transmitFraction)) : 0.2;
+  const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
+  const transmitA = clean(outputA.keyDown) * d + clean(outputA.keyUp) * (1 - d);
+  const averageA = (1 - tx) * clean(outputA.receive) + tx * transmitA;
+  const usableAh = clean(battery.capacityAh) * Math.min(1, clean(battery.usableFraction));
+  const runtimeS = averageA > 0 ? (usableAh * 3600) / averageA : 0;
+  return { averageA, transmitA, runtimeS: Number.isFinite(runtimeS) ? runtimeS : 0 };
+}
+
+/** Terminal voltage at end of discharge with the key-down current through the internal resistance (V). */
+export function loadedEndV(battery: BatteryRail, keyDownA: number): number {
+  const r = Number.isFinite(battery.internalOhm) && battery.internalOhm > 0 ? battery.internalOhm : 0;
+  const i = Number.isFinite(keyDownA) && keyDownA > 0 ? keyDownA : 0;
+  // Source: Thevenin source model, V = E - I R
+  return Math.max(0, (Number.isFinite(battery.endV) ? battery.endV : 0) - i * r);
+}
+
+export function batteryFindings(battery: BatteryRail, requiredMinV: number, loadedEnd: number, runtime: BatteryRuntime): Finding[] {
+  const out: Finding[] = [];
+  const subject = battery.name;
+  if (!(battery.fullV >= battery.endV) || !(battery.endV > 0)) {
+    out.push({ severity: 'fail', rule: 'battery.window', subject, value: battery.endV, limit: battery.fullV, unit: 'V', source: 'Battery data', message: `${subject}: the end-of-discharge voltage must be above 0 V and not above the full-charge voltage.` });
+  }
+  if (!(battery.capacityAh > 0)) {
+    out.push({ severity: 'fail', rule: 'battery.capacity', subject, value: battery.capacityAh, limit: null, unit: 'Ah', source: 'Battery data', message: `${subject}: enter the capacity to get a runtime.` });
+  }
+  if (requiredMinV > 0) {
+    const base = { rule: 'battery.end-voltage', subject, value: loadedEnd, limit: requiredMinV, unit: 'V', source: 'Regulator dropout (ref §6.1, §6.2) against the battery end-of-discharge voltage under key-down load' };
+    if (loadedEnd < requiredMinV) {
+      const fullLoaded = battery.fullV - (loadedEnd < battery.endV ? battery.endV - loadedEnd : 0);
+      const sev = fullLoaded < requiredMinV ? 'fail' : 'caution';
+      out.push({ ...base, severity: sev, message: sev === 'fail'
+        ? `${subject}: even fully charged the voltage under key-down load (${fullLoaded.toFixed(2)} V) is below the ${requiredMinV.toFixed(2)} V the regulators need.`
+        : `${subject}: near end of discharge the voltage under key-down load falls to ${loadedEnd.toFixed(2)} V, below the ${requiredMinV.toFixed(2)} V the regulators need; the regulators drop out before the battery is flat, so less capacity is usable than the runtime shows.` });
+    } else {
+      out.push({ ...base, severity: 'ok', message: `${subject}: at end of discharge under key-down load (${loadedEnd.toFixed(2)} V) the regulators still have their headroom.` });
+    }
+  }
+  if (runtime.runtimeS > 0) {
+    out.push({ severity: 'ok', rule: 'battery.runtime', subject, value: runtime.runtimeS, limit: null, unit: 's', source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2)', message: `${subject}: about ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ${(runtime.averageA * 1000).toFixed(0)} mA average.` });
+  }
+  return out;
+}

@@ -1,0 +1,65 @@
+// Bleeder resistor: time for the reservoir to fall to a safe voltage after switch-off.
+import type { Finding } from '../findings';
+import type { BleederReport } from './report-types';
+import { E12_STEPS, prevInSeries } from './standard-values';
+
+/** Residual-voltage threshold (V d.c.). Source: IEC 60204-1 residual voltage <= 60 V within 5 s (ref §10 [C2]); ES1 60 V d.c. in IEC 62368-1 (ref §10 [M]). */
+export const SAFE_DC_V = 60;
+/** Time allowed to fall to the threshold (s). Source: IEC 60204-1, 5 s after disconnection (ref §10 [C2]). */
+export const SAFE_TIME_S = 5;
+/** For rails already below 60 V: time constant we suggest so the rail is low within a minute. Common practice, no published source. */
+export const LOW_VOLTAGE_TAU_S = 22;
+
+const SOURCE = 'V(t) = V0 e^(-t/RC), t = RC ln(V0/Vsafe), P = V0^2/R (ref §10); threshold IEC 60204-1 60 V within 5 s (ref §10 [C2])';
+
+/** Source: residual-voltage guidance page quoted in ref §10 [C]: t = R C ln(V0 / V_safe). */
+export function dischargeTimeS(resistanceOhm: number, capacitanceF: number, startV: number, safeV: number): number {
+  if (!(resistanceOhm > 0) || !(capacitanceF > 0) || !(startV > safeV) || !(safeV > 0)) return 0;
+  const t = resistanceOhm * capacitanceF * Math.log(startV / safeV);
+  return Number.isFinite(t) ? t : 0;
+}
+
+/** Largest resistance that reaches safeV within timeS (Ω): R = t / (C ln(V0/Vsafe)). Same source as above. */
+export function maxBleederOhm(capacitanceF: number, startV: number, safeV: number, timeS: number): number | null {
+  if (!(capacitanceF > 0) || !(startV > safeV) || !(safeV > 0) || !(timeS > 0)) return null;
+  const r = timeS / (capacitanceF * Math.log(startV / safeV));
+  return Number.isFinite(r) ? r : null;
+}
+
+export function bleederReport(capacitanceF: number, startV: number, esrOhm: number, fittedOhm: number | null): BleederReport {
+  const v0 = Number.isFinite(startV) ? Math.max(0, startV) : 0;
+  const c = Number.isFinite(capacitanceF) ? Math.max(0, capacitanceF) : 0;
+  // Source: stored energy of a capacitor, E = C V^2 / 2 (ref §10 low-voltage example)
+  const storedJ = 0.5 * c * v0 * v0;
+  const shortCircuitA = v0 / Math.max(esrOhm, 1e-3);
+  const high = v0 > SAFE_DC_V;
+  let suggestedOhm: number | null;
+  let reasoning: string;
+  if (high) {
+    const rMax = maxBleederOhm(c, v0, SAFE_DC_V, SAFE_TIME_S);
+    suggestedOhm = rMax ? prevInSeries(E12_STEPS, rMax) : null;
+    reasoning = `The reservoir charges to ${v0.toFixed(1)} V (no load, high mains). To fall below ${SAFE_DC_V} V within ${SAFE_TIME_S} s the bleeder must be at most ${rMax ? (rMax / 1000).toFixed(2) + ' kΩ' : '?'}; the next lower E12 value is suggested.`;
+  } else {
+    // Common practice, no published source: a time constant of ~22 s leaves a low-voltage rail near zero within a couple of minutes
+    const r = c > 0 ? LOW_VOLTAGE_TAU_S / c : null;
+    suggestedOhm = r ? prevInSeries(E12_STEPS, r) : null;
+    reasoning = `At ${v0.toFixed(1)} V the rail is already below the ${SAFE_DC_V} V d.c. threshold, but it stores ${storedJ.toFixed(1)} J and can drive about ${shortCircuitA.toFixed(0)} A into a short (a dropped tool sparks and burns). A bleeder with a time constant of about ${LOW_VOLTAGE_TAU_S} s is suggested.`;
+  }
+  const suggestedW = suggestedOhm ? (v0 * v0) / suggestedOhm : null;
+  const fittedTimeS = fittedOhm && fittedOhm > 0 && high ? dischargeTimeS(fittedOhm, c, v0, SAFE_DC_V) : null;
+  return { startV: v0, thresholdV: SAFE_DC_V, allowedS: SAFE_TIME_S, fittedOhm, fittedTimeS, suggestedOhm, suggestedW, storedJ, shortCircuitA, reasoning };
+}
+
+export function bleederFindings(railName: string, b: BleederReport): Finding[] {
+  const base = { rule: 'bleeder.discharge', subject: `${railName} reservoir`, source: SOURCE };
+  if (b.startV <= b.thresholdV) {
+    return [{ ...base, severity: 'ok', value: b.startV, limit: b.thresholdV, unit: 'V', message: `${railName}: at most ${b.startV.toFixed(1)} V, below the ${b.thresholdV} V d.c. shock threshold; the ${b.storedJ.toFixed(1)} J stored can still spark and burn, so discharge before working on it.` }];
+  }
+  if (b.fittedOhm === null || b.fittedTimeS === null) {
+    return [{ ...base, severity: 'fail', value: b.startV, limit: b.thresholdV, unit: 'V', message: `${railName}: the reservoir holds ${b.startV.toFixed(0)} V after switch-off and has no bleeder; fit one (suggested ${b.suggestedOhm ? (b.suggestedOhm / 1000).toPrecision(2) + ' kΩ' : 'see recommendation'}) and always check with a meter. Follow your local electrical code.` }];
+  }
+  if (b.fittedTimeS > b.allowedS) {
+    return [{ ...base, severity: 'fail', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `${railName}: the fitted bleeder takes ${b.fittedTimeS.toFixed(1)} s to bring the reservoir below ${b.thresholdV} V; ${b.allowedS} s is the usual limit. Use a smaller resistor.` }];
+  }
+  return [{ ...base, severity: 'ok', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `${railName}: the bleeder brings the reservoir below ${b.thresholdV} V in ${b.fittedTimeS.toFixed(1)} s. Still check with a meter before touching.` }];
+}

@@ -1,0 +1,164 @@
+// One rectified rail: simulate every corner, check headroom, reservoir, bleeder and fuse, recommend a winding.
+import type { Finding } from '../findings';
+import { sortFindings } from '../findings';
+import type { Mains, PerMode, RectifiedRail, Transformer, Winding } from '../model';
+import type { CornerSpec, RectifiedCorner, RectifiedRailReport, Recommendation } from './report-types';
+import type { RectifierSimInput, RectifierSimResult } from './rectifier-sim';
+import { simulateRectifier } from './rectifier-sim';
+import { cornerCurrent, worstIds } from './corners';
+import { noLoadVrms, windingResistanceOhm } from './winding';
+import { minimumCapacitanceF, recommendedCapacitorV, reservoirFindings, standardCapacitanceF, textbookCapacitanceF } from './reservoir';
+import { bleederFindings, bleederReport } from './bleeder';
+import { fittedFuseFindings, railFuse } from './fuses';
+import { recommendWinding } from './transformer';
+import { DEFAULT_SECONDARY_V } from './standard-values';
+
+export interface RectifiedContext {
+  mains: Mains;
+  keyingDuty: number;
+  specs: CornerSpec[];
+  requiredMinV: number;
+  requirementNote: string;
+  /** True when the requirement comes from regulators or a stated value (so a winding voltage can be derived). */
+  hasRequirement: boolean;
+  standardSecondaryV?: readonly number[];
+  capacitorRatingsV?: readonly number[];
+  stepsPerCycle?: number;
+}
+
+export interface RectifiedEvaluation {
+  report: RectifiedRailReport;
+  simulations: number;
+  allConverged: boolean;
+}
+
+const fmt = (x: number, d = 2) => x.toFixed(d);
+
+function zeroCorner(spec: CornerSpec, loadA: number, note: string): RectifiedCorner {
+  return { ...spec, loadA, dcMeanV: 0, ripplePpV: 0, troughV: 0, peakV: 0, noLoadPeakV: 0, secondaryRmsA: 0, diodePeakA: 0, capacitorRippleRmsA: 0, conductionFraction: 0, surgeA: 0, headroomMarginV: 0, converged: false, cycles: 0, note };
+}
+
+/** Simulation input for a rail at a mains factor and load current. */
+export function simInputFor(rail: RectifiedRail, winding: Winding, frequencyHz: number, mainsFactor: number, loadA: number, steps?: number): RectifierSimInput {
+  return {
+    topology: rail.topology,
+    secondaryVrms: noLoadVrms(winding) * mainsFactor,
+    windingResistanceOhm: windingResistanceOhm(winding),
+    frequencyHz,
+    diodeDropV: rail.diodeDropV,
+    diodeResistanceOhm: rail.diodeResistanceOhm,
+    capacitanceF: rail.reservoirF,
+    esrOhm: rail.esrOhm,
+    load: { kind: 'current', currentA: loadA },
+    bleederOhm: rail.bleederOhm,
+    stepsPerCycle: steps,
+  };
+}
+
+export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | null, transformer: Transformer | null, outputA: PerMode, ctx: RectifiedContext): RectifiedEvaluation {
+  const findings: Finding[] = [];
+  const recommendations: Recommendation[] = [];
+  const ids = worstIds(true);
+  let simulations = 0;
+  let allConverged = true;
+  const sims = new Map<string, RectifierSimResult>();
+  const corners: RectifiedCorner[] = ctx.specs.map((spec) => {
+    const loadA = cornerCurrent(outputA, spec.load, ctx.keyingDuty);
+    if (!winding) return zeroCorner(spec, loadA, 'No winding selected for this rail.');
+    const input = simInputFor(rail, winding, ctx.mains.frequencyHz, spec.mainsFactor, loadA, ctx.stepsPerCycle);
+    const r = simulateRectifier({ ...input, waveformPoints: spec.id === ids.voltage ? 200 : 20 });
+    simulations++;
+    if (!r.converged) allConverged = false;
+    sims.set(spec.id, r);
+    const { waveform: _w, collapsed: _c, loadMeanA: _l, ...summary } = r;
+    return { ...spec, loadA, ...summary, headroomMarginV: r.troughV - ctx.requiredMinV };
+  });
+  const worst = corners.find((c) => c.id === ids.voltage) ?? corners[0];
+  const thermal = corners.find((c) => c.id === ids.thermal) ?? corners[0];
+  const tuneUp = corners.find((c) => c.id === ids.tuneUp) ?? corners[0];
+  const highNoLoad = Math.max(0, ...corners.filter((c) => c.mains === 'high').map((c) => c.noLoadPeakV));
+  const source = 'Time-domain simulation of the rectifier and reservoir (this program), checked against ref §4.2 and ngspice';
+
+  if (!winding) {
+    findings.push({ severity: 'fail', rule: 'rail.winding', subject: rail.name, value: null, limit: null, unit: '', source: 'Supply tree', message: `${rail.name} has no transformer winding; choose one.` });
+  }
+  for (const c of corners) {
+    if (c.note && winding) findings.push({ severity: c.note.startsWith('The load pulls') || c.note.startsWith('Simulation not run') ? 'fail' : 'caution', rule: 'rectifier.simulation', subject: rail.name, value: null, limit: null, unit: '', source, message: `${c.label}: ${c.note}` });
+  }
+  if (winding) {
+    const base = { rule: 'rail.headroom', subject: rail.name, value: worst.troughV, limit: ctx.requiredMinV, unit: 'V', source };
+    if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: the rail dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
+    else findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough ${fmt(worst.troughV)} V stays above the ${fmt(ctx.requiredMinV)} V needed (${ctx.requirementNote}).` });
+    if (rail.topology === 'half-wave') findings.push({ severity: 'caution', rule: 'rectifier.half-wave', subject: rail.name, value: null, limit: null, unit: '', source: 'Common practice, no published source', message: `${rail.name}: a half-wave rectifier puts direct current through the winding, which can saturate a small transformer's core and doubles the ripple; prefer a bridge or centre-tap.` });
+  }
+
+  // Reservoir
+  const ripTarget = rail.ripplePpTargetV !== null && rail.ripplePpTargetV > 0 ? rail.ripplePpTargetV : null;
+  const minF = winding && ripTarget !== null ? minimumCapacitanceF(simInputFor(rail, winding, ctx.mains.frequencyHz, worst.mainsFactor, worst.loadA), ripTarget, worst.loadA) : null;
+  const thermalRippleA = Math.sqrt(ctx.keyingDuty * sq(cornerVal(corners, 'high-keyDown', 'capacitorRippleRmsA')) + (1 - ctx.keyingDuty) * sq(cornerVal(corners, 'high-keyUp', 'capacitorRippleRmsA')));
+  const reservoir = {
+    fittedF: rail.reservoirF,
+    ripplePpTargetV: ripTarget,
+    minimumF: minF,
+    textbookF: ripTarget !== null ? textbookCapacitanceF(rail.topology, worst.loadA, ctx.mains.frequencyHz, ripTarget) : null,
+    standardF: standardCapacitanceF(minF),
+    noLoadPeakHighV: highNoLoad,
+    recommendedRatedV: recommendedCapacitorV(highNoLoad, ctx.capacitorRatingsV),
+    thermalRippleA,
+    tuneUpRippleA: tuneUp.capacitorRippleRmsA,
+  };
+  if (winding) findings.push(...reservoirFindings(rail.name, rail.capacitorRatedV, highNoLoad, rail.capacitorRippleA, thermalRippleA, tuneUp.capacitorRippleRmsA, ripTarget, worst.ripplePpV));
+  recommendations.push({
+    topic: 'reservoir',
+    text: `${reservoir.standardF !== null ? fmtF(reservoir.standardF) + ', ' : ''}rated ${reservoir.recommendedRatedV ?? '?'} V or more, ripple current ${fmt(Math.max(thermalRippleA, tuneUp.capacitorRippleRmsA))} A RMS or more at ${2 * ctx.mains.frequencyHz} Hz`,
+    reasoning: `${ripTarget !== null ? (minF !== null ? `The simulation needs at least ${fmtF(minF)} for ${ripTarget} V p-p at low mains, key-down (the textbook I/(2fC) estimate, ${fmtF(reservoir.textbookF ?? 0)}, is conservative). ` : `The ${ripTarget} V p-p target cannot be met with this winding and load. `) : 'No ripple target set. '}The no-load peak at high mains is ${fmt(highNoLoad, 1)} V; a 20 % margin gives the voltage rating. Ripple current is from the simulation (thermal load; continuous carrier ${fmt(tuneUp.capacitorRippleRmsA)} A).`,
+    source: 'Simulation (this program); ripple formula ref §4.1; rating margin common practice',
+  });
+
+  // Bleeder
+  const bleeder = bleederReport(rail.reservoirF, highNoLoad, rail.esrOhm, rail.bleederOhm);
+  if (winding) findings.push(...bleederFindings(rail.name, bleeder));
+  if (bleeder.suggestedOhm !== null) {
+    recommendations.push({ topic: 'bleeder', text: `${fmtOhm(bleeder.suggestedOhm)} bleeder, ${bleeder.suggestedW !== null ? fmt(bleeder.suggestedW * 2, 2) : '?'} W rating or more`, reasoning: `${bleeder.reasoning} It dissipates ${fmt(bleeder.suggestedW ?? 0, 2)} W at ${fmt(bleeder.startV, 1)} V; a part rated for twice that runs cool.`, source: 'Discharge t = RC ln(V0/Vsafe) (ref §10); IEC 60204-1 60 V within 5 s (ref §10 [C2]); 2x power rating common practice' });
+  }
+
+  // Rail fuse
+  const fuse = railFuse(outputA.keyDown, 'on the DC side after the reservoir');
+  findings.push(...fittedFuseFindings(`${rail.name} fuse`, rail.fuseA, fuse));
+  recommendations.push({ topic: 'fuse', text: fuse.ratedA !== null ? `T${fuse.ratedA} A rail fuse` : 'Rail fuse: see reasoning', reasoning: fuse.reasoning, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' });
+  if (winding) {
+    recommendations.push({ topic: 'rectifier', text: `Diodes rated ${fmt(Math.max(...corners.map((c) => c.diodePeakA)), 1)} A repetitive peak and ${fmt(Math.max(...corners.map((c) => c.surgeA)), 0)} A surge or more`, reasoning: `The simulated repetitive peak current and the switch-on surge into a discharged ${fmtF(rail.reservoirF)} reservoir (EMF peak over winding, diode and ESR resistance) at high mains. The bridge's non-repetitive surge rating (IFSM) must exceed the surge.`, source: 'Simulation (this program); surge estimate ref §4.2 [D]' });
+  }
+
+  // Winding recommendation
+  const winding_ = winding
+    ? recommendWinding({ rail, winding, corners, keyingDuty: ctx.keyingDuty, requiredMinV: ctx.hasRequirement ? ctx.requiredMinV : null, frequencyHz: ctx.mains.frequencyHz, mainsNominalV: ctx.mains.nominalV, lowFactor: worst.mainsFactor, keyDownA: worst.loadA, standardSecondaryV: ctx.standardSecondaryV ?? DEFAULT_SECONDARY_V, construction: transformer?.construction ?? 'laminated' })
+    : null;
+  if (winding_) {
+    simulations += winding_.simulations;
+    findings.push(...winding_.findings);
+    recommendations.push(winding_.recommendation);
+  }
+
+  const waveform = sims.get(ids.voltage)?.waveform ?? { timeS: [], outputV: [], windingA: [] };
+  return {
+    report: {
+      kind: 'rectified', railId: rail.id, railName: rail.name, topology: rail.topology, requiredMinV: ctx.requiredMinV, requirementNote: ctx.requirementNote, outputA, corners,
+      worstVoltageCornerId: worst.id, worstThermalCornerId: thermal.id, waveform, winding: winding_?.result ?? null, reservoir, bleeder, fuse,
+      findings: sortFindings(findings), recommendations,
+    },
+    simulations,
+    allConverged,
+  };
+}
+
+const sq = (x: number) => x * x;
+function cornerVal(corners: RectifiedCorner[], id: string, key: 'capacitorRippleRmsA' | 'secondaryRmsA'): number {
+  return corners.find((c) => c.id === id)?.[key] ?? 0;
+}
+function fmtF(f: number): string {
+  return f >= 1e-6 ? `${Number((f * 1e6).toPrecision(3))} µF` : `${Number((f * 1e9).toPrecision(3))} nF`;
+}
+function fmtOhm(r: number): string {
+  return r >= 1000 ? `${Number((r / 1000).toPrecision(3))} kΩ` : `${Number(r.toPrecision(3))} Ω`;
+}

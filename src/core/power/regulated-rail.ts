@@ -1,0 +1,89 @@
+// One regulated rail: headroom at the worst voltage corner, dissipation and junction temperature at the worst
+// thermal corner (and with a tune-up carrier), input current per corner for the parent rail.
+import type { Finding } from '../findings';
+import { sortFindings } from '../findings';
+import type { PerMode, RegulatedRail } from '../model';
+import type { CornerSpec, Recommendation, RegulatedCorner, RegulatedRailReport } from './report-types';
+import { BATTERY_LABEL, LOAD_LABEL, cornerCurrent, worstIds } from './corners';
+import { headroomFinding, ratingFindings, regulatorDissipationW, regulatorInputCurrentA, regulatorOutputV } from './regulator';
+import { DEFAULT_TO220_MOUNT, junctionTemperature, thermalFindings } from '../thermal/junction';
+
+/** Voltage a rail presents at one corner (V). */
+export interface RailVoltage {
+  troughV: number;
+  meanV: number;
+}
+
+export interface RegulatedEvaluation {
+  report: RegulatedRailReport;
+  /** Output voltage this rail presents to its own children, per corner id. */
+  outputAt: Record<string, RailVoltage>;
+}
+
+export function evaluateRegulatedRail(
+  rail: RegulatedRail,
+  outputA: PerMode,
+  specs: CornerSpec[],
+  parentAt: Record<string, RailVoltage>,
+  parentMaxV: number,
+  rootIsBattery: boolean,
+  keyingDuty: number,
+  ambientC: number,
+): RegulatedEvaluation {
+  const findings: Finding[] = [];
+  const recommendations: Recommendation[] = [];
+  const ids = worstIds();
+  const vOut = regulatorOutputV(rail.setting, rail.quiescentA);
+  const dropout = Number.isFinite(rail.dropoutV) ? Math.max(0, rail.dropoutV) : 0;
+  const outputAt: Record<string, RailVoltage> = {};
+  const corners: RegulatedCorner[] = specs.map((spec) => {
+    const p = parentAt[spec.id] ?? { troughV: 0, meanV: 0 };
+    const out = cornerCurrent(outputA, spec.load, keyingDuty);
+    const label = rootIsBattery ? `${BATTERY_LABEL[spec.mains]}, ${LOAD_LABEL[spec.load]}` : spec.label;
+    // A regulator that drops out passes its input through less the dropout
+    outputAt[spec.id] = { troughV: Math.max(0, Math.min(vOut, p.troughV - dropout)), meanV: Math.max(0, Math.min(vOut, p.meanV - dropout)) };
+    return {
+      ...spec, label, outputA: out,
+      inputA: regulatorInputCurrentA(rail, out, p.troughV),
+      inputTroughV: p.troughV, inputMeanV: p.meanV, headroomV: p.troughV - vOut,
+      dissipationW: regulatorDissipationW(rail, out, p.meanV),
+    };
+  });
+  const worst = corners.find((c) => c.id === ids.voltage) ?? corners[0];
+  const thermalC = corners.find((c) => c.id === ids.thermal) ?? corners[0];
+  const tuneC = corners.find((c) => c.id === ids.tuneUp) ?? corners[0];
+  findings.push(headroomFinding(rail, worst.inputTroughV, worst.label));
+  findings.push(...ratingFindings(rail, parentMaxV, outputA.keyDown));
+
+  let thermal = null;
+  let tuneUpThermal = null;
+  if (rail.regulator !== 'switching') {
+    const mount = rail.mount ?? DEFAULT_TO220_MOUNT;
+    if (!rail.mount) findings.push({ severity: 'caution', rule: 'thermal.mount', subject: rail.name, value: null, limit: null, unit: '', source: 'Ref §6.1 (θjc 5 K/W) and §7 (greased θcs 1 K/W)', message: `${rail.name}: no package or heatsink entered; a TO-220 with greased mounting (θjc 5 K/W, θcs 1 K/W, Tj max 125 °C) is assumed.` });
+    thermal = junctionTemperature(thermalC.dissipationW, ambientC, mount);
+    tuneUpThermal = junctionTemperature(tuneC.dissipationW, ambientC, mount);
+    findings.push(...thermalFindings(rail.name, thermal, `${thermalC.label}, ${thermalC.dissipationW.toFixed(2)} W`));
+    const tj = tuneUpThermal.junctionC;
+    if (tj !== null && tj > tuneUpThermal.tjMaxC) {
+      findings.push({ severity: 'caution', rule: 'thermal.tune-up', subject: rail.name, value: tj, limit: tuneUpThermal.tjMaxC, unit: '°C', source: 'Thermal series path (ref §7); heatsinks take minutes to warm up', message: `${rail.name}: a continuous tune-up carrier would take the junction to about ${tj.toFixed(0)} °C given time; keep tune-up short.` });
+    }
+    const need = thermal.requiredThetaSaKPerW;
+    recommendations.push({
+      topic: 'heatsink',
+      text: !thermal.needsHeatsink ? 'No heatsink needed' : need !== null ? `Heatsink ${need.toFixed(1)} K/W or lower` : 'No single heatsink is enough: reduce the input voltage or share the heat',
+      reasoning: `Dissipation ${thermal.powerW.toFixed(2)} W at ${thermalC.label.toLowerCase()} (tune-up ${tuneC.dissipationW.toFixed(2)} W). θsa = (Tj,target - Ta)/P - θjc - θcs with Tj,target = 0.8 x ${mount.tjMaxC} °C = ${thermal.targetC.toFixed(0)} °C and Ta = ${thermal.ambientC} °C.`,
+      source: 'Reference values §7 (series thermal path, 0.8 Tj,max derating)',
+    });
+  } else {
+    findings.push({ severity: 'ok', rule: 'regulator.switching', subject: rail.name, value: thermalC.dissipationW, limit: null, unit: 'W', source: 'Energy balance with the module efficiency at its lowest input voltage', message: `${rail.name}: switching module dissipates about ${thermalC.dissipationW.toFixed(2)} W and draws ${worst.inputA.toFixed(3)} A at the lowest input voltage.` });
+  }
+  return {
+    report: {
+      kind: 'regulated', railId: rail.id, railName: rail.name, parentId: rail.parentId, regulator: rail.regulator, outputV: vOut, dropoutV: dropout,
+      corners, worstVoltageCornerId: worst.id, worstThermalCornerId: thermalC.id,
+      thermalDissipationW: thermalC.dissipationW, tuneUpDissipationW: tuneC.dissipationW, thermal, tuneUpThermal,
+      findings: sortFindings(findings), recommendations,
+    },
+    outputAt,
+  };
+}

@@ -1,0 +1,130 @@
+// Transformer sizing: per-winding voltage and current ratings, total VA, primary current and inrush caution.
+import type { Finding } from '../findings';
+import type { RectifiedRail, Transformer, Winding } from '../model';
+import type { RectifiedCorner, Recommendation, TransformerReport, WindingRecommendation } from './report-types';
+import { simulateRectifier } from './rectifier-sim';
+import { noLoadVrms, windingResistanceOhm } from './winding';
+import { DEFAULT_TRANSFORMER_VA, nextAtLeast } from './standard-values';
+
+/** Toroid size above which a soft-start is advised. Common practice, no published source (from memory). */
+export const TOROID_SOFT_START_VA = 300;
+
+export interface WindingInput {
+  rail: RectifiedRail;
+  winding: Winding;
+  corners: RectifiedCorner[];
+  keyingDuty: number;
+  requiredMinV: number | null;
+  frequencyHz: number;
+  mainsNominalV: number;
+  lowFactor: number;
+  keyDownA: number;
+  standardSecondaryV: readonly number[];
+  construction: 'laminated' | 'toroidal';
+}
+
+const get = (cs: RectifiedCorner[], id: string) => cs.find((c) => c.id === id);
+
+/** Trough at low mains, key-down, for a winding of rated V and A with the fitted winding's regulation. */
+function troughFor(inp: WindingInput, ratedV: number, ratedA: number): number {
+  const w = inp.winding;
+  // Effective regulation of the fitted winding (from its entered resistance when there is one): R = Reg V / I (ref §4.1)
+  const regEff = w.ratedVrms > 0 && w.ratedA > 0 ? (windingResistanceOhm(w) * w.ratedA) / w.ratedVrms : w.regulationFraction;
+  const r = ratedA > 0 ? (regEff * ratedV) / ratedA : 0;
+  const sim = simulateRectifier({
+    topology: inp.rail.topology, secondaryVrms: noLoadVrms({ ...w, ratedVrms: ratedV }) * inp.lowFactor, windingResistanceOhm: r,
+    frequencyHz: inp.frequencyHz, diodeDropV: inp.rail.diodeDropV, diodeResistanceOhm: inp.rail.diodeResistanceOhm,
+    capacitanceF: inp.rail.reservoirF, esrOhm: inp.rail.esrOhm, load: { kind: 'current', currentA: inp.keyDownA },
+    bleederOhm: inp.rail.bleederOhm, stepsPerCycle: 500, waveformPoints: 20, maxCycles: 80,
+  });
+  return sim.collapsed ? 0 : sim.troughV;
+}
+
+export function recommendWinding(inp: WindingInput): { result: WindingRecommendation; findings: Finding[]; recommendation: Recommendation; simulations: number } {
+  const d = inp.keyingDuty;
+  const kd = get(inp.corners, 'high-keyDown');
+  const ku = get(inp.corners, 'high-keyUp');
+  // Heating follows I^2: the heating-equivalent RMS over a keying cycle is sqrt(d I_kd^2 + (1-d) I_ku^2) (Joule heating, I^2 R)
+  const thermalRmsA = Math.sqrt(d * (kd?.secondaryRmsA ?? 0) ** 2 + (1 - d) * (ku?.secondaryRmsA ?? 0) ** 2);
+  const tuneUpRmsA = kd?.secondaryRmsA ?? 0;
+  const peakA = Math.max(0, ...inp.corners.map((c) => c.diodePeakA));
+  const halves = inp.rail.topology === 'centre-tap' ? 2 : 1;
+  const ratedA = thermalRmsA;
+  let simulations = 0;
+  let minimumRatedV: number | null = null;
+  let reasoningV: string;
+  if (inp.requiredMinV !== null && inp.requiredMinV > 0 && inp.keyDownA >= 0) {
+    const req = inp.requiredMinV;
+    let lo = 0;
+    let hi = Math.max(1, req);
+    let n = 0;
+    while (troughFor(inp, hi, ratedA) < req && n++ < 10) {
+      lo = hi;
+      hi *= 2;
+    }
+    simulations += n + 1;
+    if (troughFor(inp, hi, ratedA) >= req) {
+      for (let i = 0; i < 16 && hi - lo > 0.02; i++) {
+        const mid = 0.5 * (lo + hi);
+        simulations++;
+        if (troughFor(inp, mid, ratedA) >= req) hi = mid;
+        else lo = mid;
+      }
+      minimumRatedV = hi;
+    }
+    reasoningV = minimumRatedV !== null
+      ? `The lowest rated secondary that keeps the trough at low mains, key-down above ${req.toFixed(2)} V is ${minimumRatedV.toFixed(2)} V${halves === 2 ? ' per half' : ''} (same regulation as the fitted winding).`
+      : `No secondary voltage up to ${hi.toFixed(0)} V keeps the trough above ${req.toFixed(2)} V with this reservoir and load; the reservoir or load must change.`;
+  } else {
+    reasoningV = 'This rail states no minimum voltage (no regulator fed), so the fitted secondary voltage is kept.';
+  }
+  const target = minimumRatedV ?? (inp.requiredMinV === null ? inp.winding.ratedVrms : null);
+  const standardRatedV = target !== null ? nextAtLeast(inp.standardSecondaryV, target) : null;
+  let checkTroughV: number | null = null;
+  if (standardRatedV !== null) {
+    checkTroughV = troughFor(inp, standardRatedV, ratedA);
+    simulations++;
+  }
+  const va = (standardRatedV ?? inp.winding.ratedVrms) * ratedA * halves;
+  const maxKeyDownRms = Math.max(0, ...inp.corners.filter((c) => c.load === 'keyDown').map((c) => c.secondaryRmsA));
+  // Ampere-turn balance: primary current = secondary current x turns ratio (V_NL / V_mains); magnetising current neglected
+  const primaryReferredA = inp.mainsNominalV > 0 ? (noLoadVrms(inp.winding) / inp.mainsNominalV) * maxKeyDownRms * Math.sqrt(halves) : 0;
+  const half = halves === 2 ? ' per half (centre-tapped)' : '';
+  const result: WindingRecommendation = {
+    windingId: inp.winding.id, windingName: inp.winding.name, minimumRatedV, standardRatedV, thermalRmsA, tuneUpRmsA, peakA, ratedA, va, checkTroughV,
+    primaryReferredA, halves,
+    reasoning: `${reasoningV} Current rating: heating-equivalent RMS at high mains with CW duty ${d} is ${thermalRmsA.toFixed(2)} A${half} (continuous carrier ${tuneUpRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`,
+  };
+  const findings: Finding[] = [];
+  const src = 'Simulated secondary RMS current against the winding rating; capacitor-input rectifiers draw ~1.6-2.2 x I_dc RMS (ref §4.1)';
+  if (inp.winding.ratedA > 0) {
+    const base = { rule: 'transformer.current', subject: inp.winding.name, unit: 'A', source: src, limit: inp.winding.ratedA };
+    if (thermalRmsA > inp.winding.ratedA) findings.push({ ...base, value: thermalRmsA, severity: 'fail', message: `${inp.winding.name}: ${thermalRmsA.toFixed(2)} A RMS in CW operation exceeds its ${inp.winding.ratedA} A rating; the transformer will overheat. Choose at least ${ratedA.toFixed(2)} A${half}.` });
+    else if (tuneUpRmsA > inp.winding.ratedA) findings.push({ ...base, value: tuneUpRmsA, severity: 'caution', message: `${inp.winding.name}: a continuous carrier draws ${tuneUpRmsA.toFixed(2)} A RMS, above its ${inp.winding.ratedA} A rating; keep tune-up short.` });
+    else findings.push({ ...base, value: thermalRmsA, severity: 'ok', message: `${inp.winding.name}: ${thermalRmsA.toFixed(2)} A RMS in CW operation is within its ${inp.winding.ratedA} A rating.` });
+  } else {
+    findings.push({ severity: 'fail', rule: 'transformer.current', subject: inp.winding.name, value: null, limit: null, unit: 'A', source: 'Transformer data', message: `${inp.winding.name}: enter the winding's rated current; without it the winding resistance and heating cannot be judged.` });
+  }
+  const recommendation: Recommendation = {
+    topic: 'transformer',
+    text: `${inp.winding.name}: ${standardRatedV !== null ? `${standardRatedV} V` : 'voltage: see reasoning'}${halves === 2 ? '-0-' + (standardRatedV ?? '') + ' V' : ''}, ${ratedA.toFixed(2)} A RMS${half} (${va.toFixed(0)} VA)`,
+    reasoning: result.reasoning + (checkTroughV !== null ? ` With ${standardRatedV} V the trough is ${checkTroughV.toFixed(2)} V.` : ''),
+    source: 'Simulation (this program); standard voltages from an editable list (common practice)',
+  };
+  return { result, findings, recommendation, simulations };
+}
+
+export function transformerReport(t: Transformer, windings: WindingRecommendation[], vaList: readonly number[] = DEFAULT_TRANSFORMER_VA): { report: TransformerReport; findings: Finding[] } {
+  const thermalVA = windings.reduce((s, w) => s + w.va, 0);
+  const tuneUpVA = windings.reduce((s, w) => s + (w.standardRatedV ?? 0) * w.tuneUpRmsA * w.halves, 0);
+  const standardVA = thermalVA > 0 ? nextAtLeast(vaList, thermalVA) : null;
+  const primaryA = windings.reduce((s, w) => s + w.primaryReferredA, 0);
+  const findings: Finding[] = [];
+  if (t.construction === 'toroidal' && (standardVA ?? thermalVA) >= TOROID_SOFT_START_VA) {
+    findings.push({ severity: 'caution', rule: 'transformer.inrush', subject: t.name, value: standardVA ?? thermalVA, limit: TOROID_SOFT_START_VA, unit: 'VA', source: 'Common practice, no published source: toroids of a few hundred VA and up draw switch-on inrush of many times their rated current', message: `${t.name}: a toroidal transformer of this size can draw a large inrush at switch-on and blow fuses or trip breakers; fit a soft-start (series NTC thermistor or a resistor shorted by a relay after a moment). Mains wiring must follow your local electrical code.` });
+  }
+  if (standardVA !== null && tuneUpVA > standardVA * 1.2) {
+    findings.push({ severity: 'caution', rule: 'transformer.tune-up', subject: t.name, value: tuneUpVA, limit: standardVA, unit: 'VA', source: 'Duty-factor averaging (OET Bulletin 65 Supplement B, Table 2: CW 40 %, carrier 100 %)', message: `${t.name}: a continuous carrier loads it to ${tuneUpVA.toFixed(0)} VA, well above the ${standardVA} VA sized for CW; keep tune-up carriers short.` });
+  }
+  return { report: { transformerId: t.id, name: t.name, construction: t.construction, windings, thermalVA, tuneUpVA, standardVA, primaryA }, findings };
+}

@@ -1,0 +1,47 @@
+// Font loading for the pack: DejaVu Sans (regular and bold) embedded through fontkit, so Ω µ ° ± ≤ ≥ ×
+// render (the standard PDF fonts are WinAnsi-only). The bytes are read once and cached per process.
+import { readFile } from 'node:fs/promises';
+import { createRequire } from 'node:module';
+import { dirname, join } from 'node:path';
+import type { PDFDocument, PDFFont } from 'pdf-lib';
+import fontkit from '@pdf-lib/fontkit';
+
+const require = createRequire(import.meta.url);
+let cache: Promise<{ regular: Uint8Array; bold: Uint8Array }> | null = null;
+
+function fontBytes(): Promise<{ regular: Uint8Array; bold: Uint8Array }> {
+  if (!cache) {
+    const dir = join(dirname(require.resolve('dejavu-fonts-ttf/package.json')), 'ttf');
+    cache = Promise.all([readFile(join(dir, 'DejaVuSans.ttf')), readFile(join(dir, 'DejaVuSans-Bold.ttf'))]).then(([regular, bold]) => ({ regular, bold }));
+    cache.catch(() => (cache = null));
+  }
+  return cache;
+}
+
+export interface Fonts {
+  regular: PDFFont;
+  bold: PDFFont;
+  /** Code points both fonts can draw; anything else is stripped before drawing. */
+  charset: Set<number>;
+}
+
+export async function embedFonts(doc: PDFDocument): Promise<Fonts> {
+  doc.registerFontkit(fontkit);
+  const bytes = await fontBytes();
+  // subset: only the glyphs used are written (TTF subsetting works; woff2 subsetting renders blank)
+  const regular = await doc.embedFont(bytes.regular, { subset: true });
+  const bold = await doc.embedFont(bytes.bold, { subset: true });
+  const boldSet = new Set(bold.getCharacterSet());
+  const charset = new Set(regular.getCharacterSet().filter((c) => boldSet.has(c)));
+  return { regular, bold, charset };
+}
+
+/** Replace line breaks and tabs by spaces and drop characters the fonts cannot encode. */
+export function clean(text: string, charset: Set<number>): string {
+  let out = '';
+  for (const ch of text.replace(/[\r\n\t]+/g, ' ')) {
+    const cp = ch.codePointAt(0)!;
+    if (cp === 0x20 || charset.has(cp)) out += ch;
+  }
+  return out;
+}

@@ -1,0 +1,150 @@
+// Overview routes: project settings, stages (add, reorder, currents) and the live budget.
+import { Hono } from 'hono';
+import { z } from 'zod';
+import type { Project, Stage } from '../../core/model';
+import { MODES, STAGE_KINDS } from '../../core/model';
+import { evaluate } from '../../core/evaluate';
+import { loadProject } from '../../db/projects';
+import { num, pct, text, choice, type FieldErrors } from '../form';
+import { projectEdit } from '../edit';
+import { sendPage } from '../render';
+import type { Deps } from '../deps';
+import { Layout } from '../../../views/layout';
+import { OverviewBody } from '../../../views/pages/overview';
+import type { Failed } from '../../../views/components/failed';
+import { newId } from '../ids';
+
+const settingsSchema = z.object({
+  name: text('Name'),
+  notes: text('Notes', 20_000, false),
+  frequency: num('Hz', { label: 'Operating frequency', min: 100e3, max: 60e6 }),
+  power: num('W', { label: 'Target output', min: 0, exclusiveMin: true, max: 2000 }),
+  supplyKind: choice('Station supply', ['mains', 'dc']),
+  mainsV: num('V', { label: 'Mains nominal voltage', min: 50, max: 300 }),
+  mainsHz: num('Hz', { label: 'Mains frequency', min: 40, max: 500 }),
+  mainsLow: pct({ label: 'Low mains tolerance', min: 0, max: 50 }),
+  mainsHigh: pct({ label: 'High mains tolerance', min: 0, max: 50 }),
+  ambient: num('°C', { label: 'Ambient temperature', min: -40, max: 70 }),
+  duty: pct({ label: 'Keying duty', min: 0, max: 100 }),
+  kits: num('', { label: 'Number of kits', min: 1, max: 1000, integer: true }),
+  currency: z
+    .string()
+    .transform((s) => s.trim().toUpperCase())
+    .pipe(z.string().regex(/^[A-Z]{3}$/, 'Currency must be a three-letter code such as USD or EUR')),
+});
+
+const addStageSchema = z.object({ kind: choice('Stage kind', STAGE_KINDS), name: text('Stage name', 200, false) });
+const moveSchema = z.object({ direction: choice('Direction', ['up', 'down']) });
+
+export function overviewPage(project: Project, failed?: Failed, notice?: string) {
+  const report = evaluate(project);
+  return (
+    <Layout title={project.name} project={project} section="overview">
+      <OverviewBody project={project} report={report} failed={failed} notice={notice} />
+    </Layout>
+  );
+}
+
+export function overviewPartial(project: Project, failed?: Failed, notice?: string) {
+  return <OverviewBody project={project} report={evaluate(project)} failed={failed} notice={notice} />;
+}
+
+function findStage(p: Project, id: string | undefined): Stage | undefined {
+  return p.stages.find((s) => s.id === id);
+}
+
+export function overviewRoutes(deps: Deps) {
+  const app = new Hono();
+  const common = { partial: overviewPartial, page: overviewPage, redirect: (p: Project) => `/projects/${p.id}` };
+
+  app.get('/projects/:id', async (c) => {
+    const project = await loadProject(deps.database.db, c.req.param('id'));
+    if (!project) return c.notFound();
+    return sendPage(c, overviewPage(project));
+  });
+
+  app.post(
+    '/projects/:id/settings',
+    projectEdit(deps, {
+      ...common,
+      form: 'settings',
+      schema: settingsSchema,
+      change: (p, d) => ({
+        ...p,
+        name: d.name,
+        notes: d.notes,
+        frequencyHz: d.frequency,
+        targetPowerW: d.power,
+        mains: d.supplyKind === 'mains' ? { nominalV: d.mainsV, frequencyHz: d.mainsHz, lowFraction: d.mainsLow, highFraction: d.mainsHigh } : null,
+        ambientC: d.ambient,
+        keyingDuty: d.duty,
+        kits: d.kits,
+        currency: d.currency,
+      }),
+    }),
+  );
+
+  app.post(
+    '/projects/:id/stages',
+    projectEdit(deps, {
+      ...common,
+      form: 'add-stage',
+      schema: addStageSchema,
+      change: (p, d) => {
+        const name = d.name || defaultStageName(d.kind);
+        const stage: Stage = { id: newId('st'), kind: d.kind, name, notes: '', loads: [], dissipationW: null };
+        return { ...p, stages: [...p.stages, stage] };
+      },
+    }),
+  );
+
+  app.post(
+    '/projects/:id/stages/:sid/move',
+    projectEdit(deps, {
+      ...common,
+      form: (c) => `move-${c.req.param('sid')}`,
+      schema: moveSchema,
+      change: (p, d, c) => {
+        const i = p.stages.findIndex((s) => s.id === c.req.param('sid'));
+        if (i < 0) return { errors: { _form: 'That stage no longer exists; the page has been refreshed.' } };
+        const j = d.direction === 'up' ? i - 1 : i + 1;
+        if (j < 0 || j >= p.stages.length) return p;
+        const stages = [...p.stages];
+        [stages[i], stages[j]] = [stages[j], stages[i]];
+        return { ...p, stages };
+      },
+    }),
+  );
+
+  app.post(
+    '/projects/:id/stages/:sid/loads',
+    projectEdit(deps, {
+      ...common,
+      form: (c) => `loads-${c.req.param('sid')}`,
+      schema: z.record(z.string(), z.string()),
+      change: (p, values, c) => {
+        const stage = findStage(p, c.req.param('sid'));
+        if (!stage) return { errors: { _form: 'That stage no longer exists.' } };
+        const errors: FieldErrors = {};
+        const loads = stage.loads.map((l, i) => {
+          const currentA = { ...l.currentA };
+          for (const m of MODES) {
+            const key = `l${i}_${m}`;
+            const r = num('A', { label: `${stage.name}: ${m === 'keyDown' ? 'key-down' : m === 'keyUp' ? 'key-up' : 'receive'} current`, min: 0, max: 100 }).safeParse(values[key] ?? '');
+            if (r.success) currentA[m] = r.data;
+            else errors[key] = r.error.issues[0].message;
+          }
+          return { ...l, currentA };
+        });
+        if (Object.keys(errors).length) return { errors };
+        return { ...p, stages: p.stages.map((s) => (s.id === stage.id ? { ...s, loads } : s)) };
+      },
+    }),
+  );
+
+  return app;
+}
+
+export function defaultStageName(kind: Stage['kind']): string {
+  return { receiver: 'Receiver', vxo: 'VXO', driver: 'Driver', final: 'Final amplifier', lpf: 'Low-pass filter', tr: 'T/R switching', other: 'Other stage' }[kind];
+}

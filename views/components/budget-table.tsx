@@ -1,0 +1,78 @@
+// Current budget per rail and operating mode.
+import type { FC } from 'hono/jsx';
+import type { BudgetReport } from '../../src/core/budget';
+import { MODES, MODE_LABELS } from '../../src/core/model';
+import { formatValue } from '../../src/core/units';
+
+export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
+  <section class="card" id="budget">
+    <h2>Current budget</h2>
+    <p class="explain">
+      What each rail delivers in each operating mode: its own stage loads plus the input current of every regulator it feeds
+      (linear: output + quiescent current; switching: from its efficiency at the lowest input voltage). Computed loads (PA key-down
+      current, relay coil) are marked ◆.
+    </p>
+    <table class="grid budget">
+      <thead>
+        <tr>
+          <th>Rail</th>
+          <th class="num">Voltage</th>
+          {MODES.map((m) => (
+            <th class="num">{MODE_LABELS[m]}</th>
+          ))}
+        </tr>
+      </thead>
+      <tbody>
+        {budget.rails.map((r) => (
+          <>
+            <tr class="rail-row">
+              <th scope="row" style={`padding-left:${0.5 + r.depth * 1.2}rem`}>
+                {r.depth > 0 ? '└ ' : ''}
+                {r.name}
+              </th>
+              <td class="num">{formatValue(r.nominalV, 'V')}</td>
+              {MODES.map((m) => (
+                <td class="num" data-rail={r.railId} data-mode={m}>
+                  <strong>{formatValue(r.outputA[m], 'A')}</strong>
+                  <span class="sub">{formatValue(r.outputW[m], 'W')}</span>
+                </td>
+              ))}
+            </tr>
+            {r.loads.map((l) => (
+              <tr class="load-row">
+                <td style={`padding-left:${1.6 + r.depth * 1.2}rem`}>
+                  {l.stageName}
+                  {l.computed ? <span title="computed"> ◆</span> : null}
+                </td>
+                <td></td>
+                {MODES.map((m) => (
+                  <td class="num">{formatValue(l.currentA[m], 'A')}</td>
+                ))}
+              </tr>
+            ))}
+            {MODES.some((m) => r.regulatorsA[m] > 0) ? (
+              <tr class="load-row">
+                <td style={`padding-left:${1.6 + r.depth * 1.2}rem`}>regulators fed from this rail</td>
+                <td></td>
+                {MODES.map((m) => (
+                  <td class="num">{formatValue(r.regulatorsA[m], 'A')}</td>
+                ))}
+              </tr>
+            ) : null}
+          </>
+        ))}
+      </tbody>
+      <tfoot>
+        <tr>
+          <th scope="row">All sources, DC power</th>
+          <td></td>
+          {MODES.map((m) => (
+            <td class="num" data-total-mode={m}>
+              <strong>{formatValue(budget.totalW[m], 'W')}</strong>
+            </td>
+          ))}
+        </tr>
+      </tfoot>
+    </table>
+  </section>
+);

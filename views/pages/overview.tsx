@@ -1,0 +1,189 @@
+// Project overview: settings, stages in build order with their currents, and the live current budget.
+import type { FC } from 'hono/jsx';
+import type { Project, Stage } from '../../src/core/model';
+import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
+import type { EvaluationReport } from '../../src/core/evaluate';
+import { formatInput, formatValue } from '../../src/core/units';
+import { Field, Select, FormErrors, type FieldState } from '../components/fields';
+import { stateFor, type Failed } from '../components/failed';
+import { BudgetTable } from '../components/budget-table';
+
+export function settingsValues(p: Project): Record<string, string> {
+  return {
+    name: p.name,
+    notes: p.notes,
+    frequency: formatInput(p.frequencyHz, 'Hz'),
+    power: formatInput(p.targetPowerW, 'W'),
+    supplyKind: p.mains ? 'mains' : 'dc',
+    mainsV: p.mains ? formatInput(p.mains.nominalV, 'V') : '230 V',
+    mainsHz: p.mains ? formatInput(p.mains.frequencyHz, 'Hz') : '50 Hz',
+    mainsLow: p.mains ? String(+(p.mains.lowFraction * 100).toFixed(3)) : '10',
+    mainsHigh: p.mains ? String(+(p.mains.highFraction * 100).toFixed(3)) : '10',
+    ambient: String(p.ambientC),
+    currency: p.currency,
+    kits: String(p.kits),
+    duty: String(+(p.keyingDuty * 100).toFixed(3)),
+  };
+}
+
+export function loadValues(s: Stage): Record<string, string> {
+  const v: Record<string, string> = {};
+  s.loads.forEach((l, i) => {
+    for (const m of MODES) v[`l${i}_${m}`] = formatInput(l.currentA[m], 'A');
+  });
+  return v;
+}
+
+const Hidden: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
+
+const SettingsForm: FC<{ project: Project; state: FieldState }> = ({ project, state }) => (
+  <details class="card settings" open={Object.keys(state.errors).length > 0}>
+    <summary>
+      <h2>Project settings</h2>
+      <span class="summary-line">
+        {formatValue(project.frequencyHz, 'Hz', 4)} · {formatValue(project.targetPowerW, 'W')} ·{' '}
+        {project.mains ? `${formatValue(project.mains.nominalV, 'V')} ${formatValue(project.mains.frequencyHz, 'Hz')} mains` : 'battery / DC'} · {project.kits}{' '}
+        {project.kits === 1 ? 'kit' : 'kits'} · ambient {project.ambientC} °C
+      </span>
+    </summary>
+    <form method="post" action={`/projects/${project.id}/settings`} hx-post={`/projects/${project.id}/settings`} hx-target="#overview" hx-swap="outerHTML">
+      <Hidden version={project.version} />
+      <FormErrors state={state} />
+      <div class="row">
+        <Field name="name" label="Name" state={state} size={40} />
+        <Field name="frequency" label="Operating frequency" unit="Hz" state={state} hint="e.g. 10.11 MHz" />
+        <Field name="power" label="Target output" unit="W" state={state} />
+      </div>
+      <div class="row">
+        <Select name="supplyKind" label="Station supply" state={state} options={[['mains', 'Mains'], ['dc', 'Battery / external DC']]} />
+        <Field name="mainsV" label="Mains nominal" unit="V rms" state={state} size={7} />
+        <Field name="mainsHz" label="Mains frequency" unit="Hz" state={state} size={7} />
+        <Field name="mainsLow" label="Low tolerance" unit="%" state={state} size={4} />
+        <Field name="mainsHigh" label="High tolerance" unit="%" state={state} size={4} />
+      </div>
+      <div class="row">
+        <Field name="ambient" label="Ambient" unit="°C" state={state} size={5} />
+        <Field name="duty" label="Keying duty (heating)" unit="%" state={state} size={5} hint="CW conversational 40 %" />
+        <Field name="kits" label="Kits (group build)" state={state} size={5} />
+        <Field name="currency" label="Currency" state={state} size={5} />
+      </div>
+      <label class="field wide">
+        <span class="label">Notes</span>
+        <textarea name="notes" rows={2}>
+          {state.values.notes ?? ''}
+        </textarea>
+      </label>
+      <button type="submit">Save settings</button>
+    </form>
+  </details>
+);
+
+const StageRow: FC<{ project: Project; stage: Stage; index: number; state: FieldState; railName: (id: string) => string }> = ({ project, stage, index, state, railName }) => {
+  const base = `/projects/${project.id}/stages/${stage.id}`;
+  const computedNote = stage.pa ? 'key-down current on the PA rail is computed from the PA model' : stage.relay?.coilRailId ? 'relay coil current is added automatically' : null;
+  return (
+    <li class="stage" id={`stage-${stage.id}`}>
+      <div class="stage-head">
+        <span class="order">{index + 1}</span>
+        <a class="stage-name" href={base}>
+          {stage.name}
+        </a>
+        <span class="kind">{STAGE_KIND_LABELS[stage.kind]}</span>
+        <span class="actions">
+          <form method="post" action={`${base}/move`} hx-post={`${base}/move`} hx-target="#overview" hx-swap="outerHTML" class="inline">
+            <Hidden version={project.version} />
+            <button name="direction" value="up" disabled={index === 0} title="Move earlier in the build order" aria-label={`Move ${stage.name} up`}>
+              ↑
+            </button>
+            <button name="direction" value="down" disabled={index === project.stages.length - 1} title="Move later in the build order" aria-label={`Move ${stage.name} down`}>
+              ↓
+            </button>
+          </form>
+          <a href={base}>Edit</a>
+          <a href={`${base}/delete`} class="danger">
+            Delete…
+          </a>
+        </span>
+      </div>
+      {stage.loads.length ? (
+        <form method="post" action={`${base}/loads`} hx-post={`${base}/loads`} hx-target="#overview" hx-swap="outerHTML" class="loads">
+          <Hidden version={project.version} />
+          <FormErrors state={state} />
+          <table class="grid compact">
+            <thead>
+              <tr>
+                <th>Rail</th>
+                {MODES.map((m) => (
+                  <th>{MODE_LABELS[m]}</th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {stage.loads.map((l, i) => (
+                <tr>
+                  <td>{railName(l.railId)}</td>
+                  {MODES.map((m) => (
+                    <td>
+                      <Field name={`l${i}_${m}`} label={`${MODE_LABELS[m]} current`} state={state} size={8} />
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          <button type="submit">Save currents</button>
+          {computedNote ? <span class="hint"> Note: {computedNote}.</span> : null}
+        </form>
+      ) : (
+        <p class="hint">Draws no current from the supply. {stage.kind === 'lpf' ? '' : <a href={base}>Add a load</a>}</p>
+      )}
+    </li>
+  );
+};
+
+export const OverviewBody: FC<{ project: Project; report: EvaluationReport; failed?: Failed; notice?: string }> = ({ project, report, failed, notice }) => {
+  const railName = (id: string) => project.supply.rails.find((r) => r.id === id)?.name ?? `(missing rail ${id})`;
+  const addState = stateFor('add-stage', failed, () => ({ kind: 'receiver', name: '' }));
+  return (
+    <div id="overview">
+      {notice ? (
+        <p class="notice" role="status">
+          {notice}
+        </p>
+      ) : null}
+      <SettingsForm project={project} state={stateFor('settings', failed, () => settingsValues(project))} />
+      <div class="columns">
+        <section class="card">
+          <h2>Stages in build order</h2>
+          <ol class="stages">
+            {project.stages.map((s, i) => (
+              <StageRow project={project} stage={s} index={i} railName={railName} state={stateFor(`loads-${s.id}`, failed, () => loadValues(s))} />
+            ))}
+          </ol>
+          <form method="post" action={`/projects/${project.id}/stages`} hx-post={`/projects/${project.id}/stages`} hx-target="#overview" hx-swap="outerHTML" class="add-stage">
+            <Hidden version={project.version} />
+            <FormErrors state={addState} />
+            <div class="row">
+              <Select name="kind" label="Add a stage" state={addState} options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])} />
+              <Field name="name" label="Name" state={addState} size={28} />
+              <button type="submit">Add stage</button>
+            </div>
+          </form>
+        </section>
+        <BudgetTable budget={report.budget} />
+      </div>
+      {report.findings.length ? (
+        <section class="card">
+          <h2>Findings</h2>
+          <ul class="findings">
+            {report.findings.map((f) => (
+              <li class={`finding sev-${f.severity}`}>
+                <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="source">({f.source})</span>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+    </div>
+  );
+};
