@@ -1,0 +1,85 @@
+import { describe, expect, it } from 'vitest';
+import { evaluatePa, paKeyDownCurrentA } from '../../../src/core/rf/pa';
+import { operatingPoint, powerCoefficient } from '../../../src/core/rf/pa-load-line';
+import { paThermal } from '../../../src/core/rf/pa-thermal';
+import { paParams } from './fixture';
+import { near } from './helpers';
+
+const proj = { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 };
+const toleranceOhm = 0.01;
+const toleranceW = 0.01;
+
+describe('PA worked example, push-pull 13.8 V 10 W 50 Ω (REFERENCE-VALUES §8.3)', () => {
+  const pa = paParams({ saturationV: 1.0, amplifierClass: 'B', efficiency: 0.7, biasIdleMaxA: 0 });
+  const r = evaluatePa(pa, 13.8, proj);
+  it('ideal turns ratio 1.235 (R_dd 32.77 Ω)', () => {
+    near(r.idealTurnsRatio as number, 1.235, 0.0005, 'ratio');
+    near(50 / (r.idealTurnsRatio as number) ** 2, 32.77, toleranceOhm, 'R_dd');
+  });
+  it('practical ratios: 1:1 -> 6.55 W, 4:5 -> 10.24 W, 2:3 -> 14.75 W, and 4:5 chosen', () => {
+    const by = (l: string) => r.ratioOptions.find((o) => o.label === l)!;
+    near(by('1:1').outputW, 6.55, toleranceW, '1:1');
+    near(by('4:5').primaryOhm, 32.0, toleranceOhm, '4:5 R');
+    near(by('4:5').outputW, 10.24, toleranceW, '4:5');
+    near(by('2:3').outputW, 14.75, toleranceW, '2:3');
+    expect(r.turnsRatio).toBe(1.25);
+  });
+  it('DC input 14.3 W and about 1.04 A at 70 %', () => {
+    const t = evaluatePa({ ...pa, turnsRatio: 1.235 }, 13.8, proj);
+    near(t.outputW, 10.0, 0.02, 'P');
+    near(t.dcInputW, 14.3, 0.05, 'DC W');
+    // printed 1.04 A from rounded 14.3 W / 13.8 V (= 1.036 A): tolerance 0.01 A
+    near(t.keyDownCurrentA, 1.04, 0.01, 'I');
+    near(paKeyDownCurrentA({ ...pa, turnsRatio: 1.235 }, 13.8, proj), t.keyDownCurrentA, 1e-12, 'export');
+  });
+  it('class D square-wave model with 1.25 ratio gives 16.6 W', () => {
+    const d = evaluatePa({ ...pa, amplifierClass: 'D', turnsRatio: 1.25 }, 13.8, proj);
+    near(d.outputW, 16.6, 0.05, 'class D');
+  });
+  it('class E single-ended: R = 9.45 Ω for 10 W, peak drain 49.1 V', () => {
+    const e = paParams({ topology: 'single-ended', devices: 1, amplifierClass: 'E', saturationV: 1.0 });
+    // R = 0.5768 x 12.8^2 / 10 (Sokal & Sokal 1975 via REFERENCE-VALUES §8.1)
+    near((powerCoefficient('single-ended', 'E') * 12.8 ** 2) / 10, 9.45, toleranceOhm, 'R');
+    near(operatingPoint(e, 13.8, 9.45).outputW, 10.0, 0.01, 'P at 9.45 Ω');
+    near(evaluatePa({ ...e, turnsRatio: Math.sqrt(50 / 9.45) }, 13.8, proj).peakDrainV, 49.1, 0.05, 'peak');
+  });
+  it('Rds(on) drop is iterated to a self-consistent point', () => {
+    const p = paParams({ saturationV: null, rdsOnOhm: 0.1, amplifierClass: 'B', turnsRatio: 1.25 });
+    const op = operatingPoint(p, 13.8, 32);
+    // self-consistency: Vsat = Ipk x Rds, with Ipk = 4(Vdd - Vsat)/R_dd for a push-pull sinusoidal swing
+    near(op.saturationV, 0.1 * ((4 * (13.8 - op.saturationV)) / 32), 1e-6, 'Vsat');
+    near(op.saturationV, (13.8 * 0.0125) / 1.0125, 1e-6, 'closed form');
+  });
+});
+
+describe('PA thermal (REFERENCE-VALUES §7 worked example numbers)', () => {
+  it('θsa for 8.2 W, θjc 5, θcs 1, Ta 40 °C, target 100 °C is 1.32 K/W', () => {
+    // Tjmax 125 °C -> 0.8 x 125 = 100 °C target; REFERENCE-VALUES §7 gives 60/8.2 - 6 = 1.32 K/W
+    const p = paParams({ devices: 1, mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 125 } });
+    const t = paThermal(p, 0, 8.2, 0, 40, 1);
+    near(t.thetaSaNeededContinuousKPerW as number, 1.32, 0.005, 'θsa');
+    near(t.thetaSaNeededAverageKPerW as number, 1.32, 0.005, 'duty 1');
+    const k = paThermal(p, 0, 8.2, 0, 40, 0.4);
+    near(k.averagePerDeviceW, 8.2 * 0.4, 1e-9, 'duty-averaged');
+  });
+  it('bias idle power is added to dissipation', () => {
+    const p = paParams({ devices: 2 });
+    const t = paThermal(p, 10, 14, 0.05 * 13.8, 25, 0.4);
+    near(t.dissipationTotalW, 4 + 0.69, 1e-9, 'total');
+  });
+});
+
+describe('PA findings and bad inputs', () => {
+  it('flags a device rating below the drain peak', () => {
+    const r = evaluatePa(paParams({ deviceVdsMaxV: 20, turnsRatio: 1.25 }), 13.8, proj);
+    expect(r.findings.find((f) => f.rule === 'pa.vds')?.severity).toBe('fail');
+  });
+  it('zero or missing rail voltage gives a fail finding, not NaN', () => {
+    for (const v of [0, -5, NaN]) {
+      const r = evaluatePa(paParams(), v, proj);
+      expect(r.findings.some((f) => f.severity === 'fail')).toBe(true);
+      expect(Number.isFinite(r.outputW) && Number.isFinite(r.railV)).toBe(true);
+    }
+    expect(paKeyDownCurrentA(paParams(), 0, proj)).toBe(0);
+  });
+});
