@@ -11,6 +11,9 @@ import { fileURLToPath } from 'node:url';
 import type { Deps } from './web/deps';
 import { projectRoutes } from './web/routes/projects';
 import { overviewRoutes } from './web/routes/overview';
+import { supplyRoutes } from './web/routes/supply';
+import { partsRoutes } from './web/routes/parts';
+import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
 import { Layout } from '../views/layout';
 
@@ -51,9 +54,13 @@ export function buildApp(deps: Deps) {
   app.get('/assets/htmx.min.js', (c) => c.body(HTMX, 200, { 'Content-Type': 'text/javascript; charset=utf-8', 'Cache-Control': 'max-age=3600' }));
   app.get('/assets/style.css', (c) => c.body(CSS, 200, { 'Content-Type': 'text/css; charset=utf-8', 'Cache-Control': 'max-age=300' }));
   app.get('/healthz', (c) => c.text('ok'));
+  app.get('/favicon.ico', (c) => c.body(null, 204));
 
   app.route('/', projectRoutes(deps));
   app.route('/', overviewRoutes(deps));
+  app.route('/', supplyRoutes(deps));
+  app.route('/', partsRoutes(deps));
+  app.route('/', bomRoutes(deps));
 
   app.notFound((c) =>
     sendPage(

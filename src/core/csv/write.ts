@@ -13,6 +13,8 @@ export interface CsvWriteOptions {
   neutralise?: boolean;
   /** Field separator; "," per RFC 4180, ";" for spreadsheets set to a decimal comma. Default ",". */
   delimiter?: ',' | ';' | '\t';
+  /** Write number cells with a decimal comma (1,25), for ";" files read by decimal-comma spreadsheets. */
+  decimalComma?: boolean;
 }
 
 export const BOM = '\uFEFF';
@@ -32,9 +34,13 @@ export function unneutraliseText(text: string): string {
     : text;
 }
 
-function field(cell: CsvCell, delimiter: string, neutralise: boolean): string {
+function field(cell: CsvCell, delimiter: string, neutralise: boolean, decimalComma: boolean): string {
   if (cell === null || cell === undefined) return '';
-  if (typeof cell === 'number') return Number.isFinite(cell) ? String(cell) : '';
+  if (typeof cell === 'number') {
+    if (!Number.isFinite(cell)) return '';
+    const n = decimalComma ? String(cell).replace('.', ',') : String(cell);
+    return n.includes(delimiter) ? `"${n}"` : n;
+  }
   const text = neutralise ? neutraliseText(cell) : cell;
   // RFC 4180 §2.6: fields containing line breaks, double quotes or the separator are enclosed in quotes;
   // §2.7: a double quote inside is escaped by doubling it.
@@ -51,9 +57,10 @@ function field(cell: CsvCell, delimiter: string, neutralise: boolean): string {
 export function writeCsv(rows: readonly (readonly CsvCell[])[], options: CsvWriteOptions = {}): string {
   const delimiter = options.delimiter ?? ',';
   const neutralise = options.neutralise ?? true;
+  const decimalComma = options.decimalComma ?? false;
   const body = rows
     .map((row) => {
-      const line = row.map((c) => field(c, delimiter, neutralise)).join(delimiter);
+      const line = row.map((c) => field(c, delimiter, neutralise, decimalComma)).join(delimiter);
       return line === '' && row.length === 1 ? '""' : line;
     })
     .map((line) => `${line}\r\n`)

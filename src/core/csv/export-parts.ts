@@ -1,0 +1,66 @@
+// The costed parts list as CSV, one row per BOM line in report order, optional total rows at the end.
+// The headers are ones guessMapping() recognises, so the file imports back as a parts list.
+
+import { centsToMajor, formatMoney } from '../cost/money';
+import type { CostLine, CostReport } from '../cost/report-types';
+import { writeCsv, type CsvCell } from './write';
+
+export interface PartsCsvOptions {
+  /** Start with a UTF-8 BOM (default true: spreadsheets then show Ω, µ, ü correctly). */
+  bom?: boolean;
+  /** "," (default, numbers with a decimal point) or ";" (numbers with a decimal comma, for spreadsheets so set). */
+  delimiter?: ',' | ';';
+  /** Append total rows (parts, shipping, build, per kit). Default true. Import reports them as bad rows. */
+  includeTotals?: boolean;
+}
+
+export function partsCsvHeaders(currency: string): string[] {
+  return [
+    'Stage', 'Section', 'Refs', 'Value', 'Description', 'Category', 'Qty per rig', 'Needed qty', 'Order qty',
+    'Supplier', 'SKU', 'Currency', 'Unit price', 'Offer line cost', 'Exchange rate', `Line cost ${currency}`,
+    'Price-break suggestion', 'Flags',
+  ];
+}
+
+function money(cents: number | null): CsvCell {
+  return cents === null ? null : centsToMajor(cents);
+}
+
+function row(l: CostLine, currency: string): CsvCell[] {
+  const suggestion =
+    l.suggestion === null
+      ? ''
+      : `Order ${l.suggestion.qty} (+${l.suggestion.extraQty}) to save ${formatMoney(l.suggestion.savingCents, currency)}`;
+  return [
+    l.stageName, l.section, l.refs, l.value, l.description, l.category, l.qtyPerRig, l.neededQty, l.orderQty,
+    l.supplier, l.sku, l.offerCurrency, money(l.unitPriceCents), money(l.offerCostCents), l.exchangeRate,
+    money(l.lineCostCents), suggestion, l.flags.join(' '),
+  ];
+}
+
+export function costReportToCsv(report: CostReport, options: PartsCsvOptions = {}): string {
+  const headers = partsCsvHeaders(report.currency);
+  const width = headers.length;
+  const total = (label: string, cents: number | null): CsvCell[] => {
+    const r: CsvCell[] = Array(width).fill(null);
+    r[0] = label;
+    r[width - 3] = money(cents);
+    return r;
+  };
+  const rows: CsvCell[][] = [headers, ...report.lines.map((l) => row(l, report.currency))];
+  if (options.includeTotals ?? true) {
+    const t = report.totals;
+    rows.push(
+      Array(width).fill(null),
+      total('Total parts', t.partsCents),
+      total('Total shipping', t.shippingCents),
+      total(`Total build (${report.kits} kits)`, t.buildCents),
+      total('Per kit', t.perKitCents),
+    );
+  }
+  return writeCsv(rows, {
+    bom: options.bom ?? true,
+    delimiter: options.delimiter ?? ',',
+    decimalComma: options.delimiter === ';',
+  });
+}

@@ -1,0 +1,185 @@
+// Entry point of the mains-supply design engine: evaluateSupply(project, railOutputA, options) -> SupplyReport.
+// Pure: no I/O, no clock. The caller (the current budget) supplies the output current of every rail per mode.
+import type { Finding } from '../findings';
+import { sortFindings } from '../findings';
+import type { BatteryRail, Mains, PerMode, Project, RectifiedRail, RegulatedRail, Transformer, Winding } from '../model';
+import type { BatteryRailReport, PrimaryReport, RailReport, SupplyReport, TransformerReport, WindingRecommendation } from './report-types';
+import { DEFAULT_TRANSMIT_FRACTION, cornerCurrent, cornerSpecs, mainsFactor, safeDuty } from './corners';
+import { evaluateRectifiedRail } from './rectified-rail';
+import type { RailVoltage } from './regulated-rail';
+import { evaluateRegulatedRail } from './regulated-rail';
+import { regulatorOutputV } from './regulator';
+import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
+import { fittedFuseFindings, primaryFuse, railFuse } from './fuses';
+import { transformerReport } from './transformer';
+
+export interface SupplyOptions {
+  /** Standard secondary voltages to choose from (V RMS); default DEFAULT_SECONDARY_V. */
+  standardSecondaryV?: readonly number[];
+  /** Standard transformer ratings (VA); default DEFAULT_TRANSFORMER_VA. */
+  standardVA?: readonly number[];
+  /** Capacitor voltage ratings (V); default DEFAULT_CAPACITOR_V. */
+  capacitorRatingsV?: readonly number[];
+  /** Transmit share of operating time for battery runtime (0..1); default 0.2 (80 % receive / 20 % transmit). */
+  transmitFraction?: number;
+  /** Stated minimum voltage per rail id (V) for rails with direct loads (no regulator) or extra needs. */
+  railMinimumV?: Record<string, number>;
+  /** Integration steps per mains cycle (default 1000). */
+  stepsPerCycle?: number;
+}
+
+const ZERO: PerMode = { receive: 0, keyUp: 0, keyDown: 0 };
+const FALLBACK_MAINS: Mains = { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 };
+
+function requirement(railId: string, marginV: number, children: RegulatedRail[], stated: number | undefined): { v: number; note: string; has: boolean } {
+  const margin = Number.isFinite(marginV) ? Math.max(0, marginV) : 0;
+  const regNeed = children.map((c) => ({ c, v: regulatorOutputV(c.setting, c.quiescentA) + Math.max(0, c.dropoutV) }));
+  const top = regNeed.reduce<{ c: RegulatedRail; v: number } | null>((a, b) => (a === null || b.v > a.v ? b : a), null);
+  const st = stated !== undefined && Number.isFinite(stated) && stated > 0 ? stated : null;
+  if (top) {
+    const v = top.v + margin;
+    if (st !== null && st > v) return { v: st, note: `stated minimum for this rail`, has: true };
+    return { v, note: `${top.c.name}: output + dropout${margin > 0 ? ` + ${margin} V margin` : ''}`, has: true };
+  }
+  if (st !== null) return { v: st, note: 'stated minimum for the direct loads', has: true };
+  void railId;
+  return { v: margin, note: `no regulator fed: only the rail's ${margin} V margin above 0 V is required; state a minimum for its direct loads`, has: false };
+}
+
+export function evaluateSupply(project: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): SupplyReport {
+  const duty = safeDuty(project.keyingDuty);
+  const txFraction = options.transmitFraction !== undefined && Number.isFinite(options.transmitFraction) ? Math.min(1, Math.max(0, options.transmitFraction)) : DEFAULT_TRANSMIT_FRACTION;
+  const mainsOk = project.mains !== null && project.mains.nominalV > 0 && project.mains.frequencyHz > 0;
+  const specs = cornerSpecs(project.mains, duty);
+  const rails = project.supply.rails;
+  const globalFindings: Finding[] = [];
+  if (project.mains && !mainsOk) {
+    globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'Project data', message: 'The mains voltage and frequency must both be above zero.' });
+  }
+  const windings = new Map<string, { w: Winding; t: Transformer }>();
+  for (const t of project.supply.transformers) for (const w of t.windings) windings.set(w.id, { w, t });
+  const childrenOf = (id: string) => rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
+  const budget = (id: string): PerMode => {
+    const b = railOutputA[id];
+    if (!b) {
+      globalFindings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'Current budget', message: `No current budget for rail "${id}": it is treated as unloaded.` });
+      return ZERO;
+    }
+    return b;
+  };
+
+  const reports = new Map<string, RailReport>();
+  const voltageAt = new Map<string, Record<string, RailVoltage>>();
+  const maxV = new Map<string, number>();
+  const rootBattery = new Map<string, boolean>();
+  const windingRecs = new Map<string, WindingRecommendation[]>();
+  const usedWindings = new Map<string, string[]>();
+  let simulations = 0;
+  let allConverged = true;
+
+  for (const rail of rails.filter((r): r is RectifiedRail => r.kind === 'rectified')) {
+    const wt = windings.get(rail.windingId) ?? null;
+    usedWindings.set(rail.windingId, [...(usedWindings.get(rail.windingId) ?? []), rail.name]);
+    const req = requirement(rail.id, rail.marginV, childrenOf(rail.id), options.railMinimumV?.[rail.id]);
+    const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), {
+      mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
+      standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
+    });
+    if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'Project data', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
+    simulations += ev.simulations;
+    allConverged = allConverged && ev.allConverged;
+    reports.set(rail.id, ev.report);
+    voltageAt.set(rail.id, Object.fromEntries(ev.report.corners.map((c) => [c.id, { troughV: c.troughV, meanV: c.dcMeanV }])));
+    maxV.set(rail.id, Math.max(0, ...ev.report.corners.map((c) => c.noLoadPeakV)));
+    rootBattery.set(rail.id, false);
+    if (ev.report.winding && wt) windingRecs.set(wt.t.id, [...(windingRecs.get(wt.t.id) ?? []), ev.report.winding]);
+  }
+
+  for (const b of rails.filter((r): r is BatteryRail => r.kind === 'battery')) {
+    const out = budget(b.id);
+    const children = childrenOf(b.id);
+    const req = requirement(b.id, 0, children, options.railMinimumV?.[b.id]);
+    const loadedEnd = loadedEndV(b, out.keyDown);
+    const runtime = batteryRuntime(b, out, duty, txFraction);
+    const fuse = railFuse(out.keyDown, 'as close to the battery terminal as possible');
+    const r = Number.isFinite(b.internalOhm) && b.internalOhm > 0 ? b.internalOhm : 0;
+    const at: Record<string, RailVoltage> = {};
+    for (const s of specs) {
+      const base = s.mains === 'low' ? b.endV : s.mains === 'high' ? b.fullV : b.nominalV;
+      // Thevenin source model, V = E - I R
+      const v = Math.max(0, (Number.isFinite(base) ? base : 0) - cornerCurrent(out, s.load, duty) * r);
+      at[s.id] = { troughV: v, meanV: v };
+    }
+    voltageAt.set(b.id, at);
+    maxV.set(b.id, Number.isFinite(b.fullV) ? b.fullV : 0);
+    rootBattery.set(b.id, true);
+    const report: BatteryRailReport = {
+      kind: 'battery', railId: b.id, railName: b.name, fullV: b.fullV, endV: b.endV, loadedEndV: loadedEnd, requiredMinV: req.v,
+      receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse,
+      findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
+      recommendations: [
+        { topic: 'fuse', text: fuse.ratedA !== null ? `T${fuse.ratedA} A fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' },
+        { topic: 'battery', text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive / ${Math.round(txFraction * 100)} % transmit`, reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`, source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2, ref §2.3 [C2])' },
+      ],
+    };
+    reports.set(b.id, report);
+  }
+
+  // Regulated rails in dependency order (a rail whose parent is missing or in a loop gets 0 V input).
+  const pending = rails.filter((r): r is RegulatedRail => r.kind === 'regulated');
+  for (let guard = 0; pending.length > 0 && guard <= rails.length; guard++) {
+    for (let i = 0; i < pending.length; ) {
+      const rr = pending[i];
+      if (!voltageAt.has(rr.parentId)) {
+        i++;
+        continue;
+      }
+      const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, voltageAt.get(rr.parentId)!, maxV.get(rr.parentId) ?? 0, rootBattery.get(rr.parentId) ?? false, duty, project.ambientC);
+      reports.set(rr.id, ev.report);
+      voltageAt.set(rr.id, ev.outputAt);
+      maxV.set(rr.id, ev.report.outputV);
+      rootBattery.set(rr.id, rootBattery.get(rr.parentId) ?? false);
+      pending.splice(i, 1);
+    }
+  }
+  for (const rr of pending) {
+    const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, {}, 0, false, duty, project.ambientC);
+    ev.report.findings.unshift({ severity: 'fail', rule: 'supply.parent', subject: rr.name, value: null, limit: null, unit: '', source: 'Supply tree', message: `${rr.name} has no valid source rail (missing or fed by itself).` });
+    reports.set(rr.id, ev.report);
+  }
+
+  for (const [wid, names] of usedWindings) {
+    if (names.length > 1) globalFindings.push({ severity: 'caution', rule: 'transformer.shared-winding', subject: names.join(', '), value: names.length, limit: 1, unit: '', source: 'Simulation model', message: `${names.join(' and ')} share one winding (${wid}); each is simulated as if it had the winding to itself, so headroom and ratings are optimistic.` });
+  }
+
+  const transformers: TransformerReport[] = [];
+  for (const t of project.supply.transformers) {
+    const tr = transformerReport(t, windingRecs.get(t.id) ?? [], options.standardVA);
+    transformers.push(tr.report);
+    globalFindings.push(...tr.findings);
+  }
+
+  let primary: PrimaryReport | null = null;
+  if (mainsOk && transformers.some((t) => t.primaryA > 0)) {
+    const loadA = transformers.reduce((s, t) => s + t.primaryA, 0);
+    const construction = transformers.some((t) => t.construction === 'toroidal' && t.primaryA > 0) ? 'toroidal' : 'laminated';
+    const fuse = primaryFuse(loadA, construction);
+    const findings = sortFindings(fittedFuseFindings('Primary fuse', project.supply.primaryFuseA, fuse));
+    primary = { loadA, fuse, fittedA: project.supply.primaryFuseA, findings };
+  }
+
+  const railReports = rails.map((r) => reports.get(r.id)!).filter(Boolean);
+  const all = [...globalFindings, ...railReports.flatMap((r) => r.findings), ...(primary?.findings ?? [])];
+  const m = project.mains;
+  return {
+    mains: mainsOk && m ? { nominalV: m.nominalV, lowV: m.nominalV * mainsFactor(m, 'low'), highV: m.nominalV * mainsFactor(m, 'high'), frequencyHz: m.frequencyHz } : null,
+    keyingDuty: duty,
+    transmitFraction: txFraction,
+    rails: railReports,
+    transformers,
+    primary,
+    findings: sortFindings(all),
+    simulations,
+    allConverged,
+  };
+}

@@ -1,0 +1,232 @@
+// A small layout toolkit on pdf-lib: a cursor running down the page, wrapped text, tables with the header
+// repeated after each page break, tick boxes, and page footers. All geometry in points (1/72 in).
+// pdf-lib puts the origin bottom-left; the cursor `yPt` is measured from the bottom too.
+import { PDFDocument, type PDFFont, type PDFPage, rgb, type RGB } from 'pdf-lib';
+import { clean, embedFonts, type Fonts } from './fonts';
+
+export type Paper = 'a4' | 'letter';
+// ISO 216 A4 is 210 x 297 mm; US Letter 8.5 x 11 in
+export const PAPER_SIZES_PT: Record<Paper, [number, number]> = { a4: [595.28, 841.89], letter: [612, 792] };
+
+export const INK = rgb(0.1, 0.1, 0.12);
+export const GREY = rgb(0.42, 0.42, 0.45);
+export const RULE = rgb(0.78, 0.78, 0.8);
+export const SHADE = rgb(0.93, 0.94, 0.96);
+export const CAUTION = rgb(0.62, 0.22, 0.0);
+export const FAIL = rgb(0.7, 0.05, 0.05);
+
+export interface TextStyle {
+  sizePt?: number;
+  bold?: boolean;
+  color?: RGB;
+  indentPt?: number;
+  /** extra space after the block */
+  afterPt?: number;
+}
+
+export interface Column {
+  header: string;
+  /** fraction of the content width; fractions of a table sum to 1 */
+  width: number;
+  align?: 'left' | 'right';
+  /** draw an empty tick box in this column instead of text */
+  tick?: boolean;
+}
+
+export interface Row {
+  cells: string[];
+  bold?: boolean;
+  shade?: boolean;
+  color?: RGB;
+}
+
+export class Layout {
+  readonly marginTopPt = 46;
+  readonly marginBottomPt = 52;
+  readonly marginSidePt = 44;
+  readonly pages: PDFPage[] = [];
+  page!: PDFPage;
+  yPt = 0;
+
+  private constructor(readonly doc: PDFDocument, readonly fonts: Fonts, readonly paper: Paper) {}
+
+  static async create(paper: Paper, title: string): Promise<Layout> {
+    const doc = await PDFDocument.create();
+    doc.setTitle(title);
+    doc.setCreator('Rigwright');
+    doc.setProducer('Rigwright (pdf-lib)');
+    // a fixed date keeps the bytes reproducible for the same inputs
+    doc.setCreationDate(new Date(0));
+    doc.setModificationDate(new Date(0));
+    const l = new Layout(doc, await embedFonts(doc), paper);
+    l.newPage();
+    return l;
+  }
+
+  get widthPt(): number {
+    return PAPER_SIZES_PT[this.paper][0];
+  }
+  get heightPt(): number {
+    return PAPER_SIZES_PT[this.paper][1];
+  }
+  get leftPt(): number {
+    return this.marginSidePt;
+  }
+  get contentWidthPt(): number {
+    return this.widthPt - 2 * this.marginSidePt;
+  }
+  get topPt(): number {
+    return this.heightPt - this.marginTopPt;
+  }
+
+  newPage(): void {
+    this.page = this.doc.addPage(PAPER_SIZES_PT[this.paper]);
+    this.pages.push(this.page);
+    this.yPt = this.topPt;
+  }
+
+  /** Start a new page unless `heightPt` still fits above the bottom margin. */
+  ensure(heightPt: number): void {
+    if (this.yPt - heightPt < this.marginBottomPt) this.newPage();
+  }
+
+  gap(pt: number): void {
+    this.yPt -= pt;
+  }
+
+  font(bold = false): PDFFont {
+    return bold ? this.fonts.bold : this.fonts.regular;
+  }
+
+  clean(text: string): string {
+    return clean(text, this.fonts.charset);
+  }
+
+  textWidth(text: string, sizePt: number, bold = false): number {
+    return this.font(bold).widthOfTextAtSize(this.clean(text), sizePt);
+  }
+
+  /** Greedy word wrap; a word longer than the width is broken by characters. */
+  wrap(text: string, widthPt: number, sizePt: number, bold = false): string[] {
+    const font = this.font(bold);
+    const fits = (s: string) => font.widthOfTextAtSize(s, sizePt) <= widthPt;
+    const lines: string[] = [];
+    let line = '';
+    for (const word of this.clean(text).split(' ').filter((w) => w.length > 0)) {
+      const candidate = line ? `${line} ${word}` : word;
+      if (fits(candidate)) {
+        line = candidate;
+        continue;
+      }
+      if (line) lines.push(line);
+      line = '';
+      let rest = word;
+      while (!fits(rest)) {
+        let n = rest.length - 1;
+        while (n > 1 && !fits(rest.slice(0, n))) n--;
+        lines.push(rest.slice(0, n));
+        rest = rest.slice(n);
+      }
+      line = rest;
+    }
+    if (line || lines.length === 0) lines.push(line);
+    return lines;
+  }
+
+  /** Draw one line of already-clean text with its baseline at `baselinePt`. */
+  drawAt(text: string, xPt: number, baselinePt: number, sizePt: number, bold = false, color: RGB = INK): void {
+    const t = this.clean(text);
+    if (t.length > 0) this.page.drawText(t, { x: xPt, y: baselinePt, size: sizePt, font: this.font(bold), color });
+  }
+
+  /** A wrapped paragraph at the cursor; breaks pages between lines. */
+  text(text: string, style: TextStyle = {}): void {
+    const size = style.sizePt ?? 9.5;
+    const indent = style.indentPt ?? 0;
+    const lineH = size * 1.3;
+    for (const line of this.wrap(text, this.contentWidthPt - indent, size, style.bold)) {
+      this.ensure(lineH);
+      this.yPt -= lineH;
+      this.drawAt(line, this.leftPt + indent, this.yPt + size * 0.28, size, style.bold, style.color ?? INK);
+    }
+    this.yPt -= style.afterPt ?? 3;
+  }
+
+  /** Section heading; keeps at least `keepPt` of following content on the same page. */
+  heading(text: string, level: 1 | 2 = 1, keepPt = 60): void {
+    const size = level === 1 ? 15 : 11.5;
+    this.ensure(size * 1.6 + keepPt);
+    if (this.yPt < this.topPt - 1) this.yPt -= level === 1 ? 10 : 6;
+    this.yPt -= size * 1.25;
+    this.drawAt(text, this.leftPt, this.yPt + size * 0.25, size, true);
+    if (level === 1) this.page.drawLine({ start: { x: this.leftPt, y: this.yPt - 3 }, end: { x: this.leftPt + this.contentWidthPt, y: this.yPt - 3 }, thickness: 0.8, color: GREY });
+    this.yPt -= level === 1 ? 9 : 4;
+  }
+
+  tickBox(xPt: number, baselinePt: number, sizePt: number): void {
+    this.page.drawRectangle({ x: xPt, y: baselinePt - 1, width: sizePt, height: sizePt, borderColor: INK, borderWidth: 0.7 });
+  }
+
+  /** A table: wrapped cells, the header row repeated at the top of every page it runs onto. */
+  table(columns: Column[], rows: Row[], sizePt = 8.5): void {
+    const pad = 3;
+    const lineH = sizePt * 1.25;
+    const xs: number[] = [];
+    let x = this.leftPt;
+    for (const c of columns) {
+      xs.push(x);
+      x += c.width * this.contentWidthPt;
+    }
+    const widthOf = (i: number) => columns[i].width * this.contentWidthPt - 2 * pad;
+    const drawRow = (cells: string[], bold: boolean, fill: RGB | null, color: RGB, isHeader: boolean) => {
+      const wrapped = cells.map((c, i) => (columns[i]?.tick && !isHeader ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, bold)));
+      const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
+      const top = this.yPt;
+      if (fill) this.page.drawRectangle({ x: this.leftPt, y: top - h, width: this.contentWidthPt, height: h, color: fill });
+      wrapped.forEach((lines, i) => {
+        const col = columns[i];
+        if (!col) return;
+        if (col.tick && !isHeader) {
+          this.tickBox(xs[i] + pad, top - pad - sizePt, sizePt);
+          return;
+        }
+        lines.forEach((line, k) => {
+          const w = this.font(bold).widthOfTextAtSize(line, sizePt);
+          const lx = col.align === 'right' ? xs[i] + col.width * this.contentWidthPt - pad - w : xs[i] + pad;
+          this.drawAt(line, lx, top - pad - (k + 1) * lineH + sizePt * 0.3, sizePt, bold, color);
+        });
+      });
+      this.page.drawLine({ start: { x: this.leftPt, y: top - h }, end: { x: this.leftPt + this.contentWidthPt, y: top - h }, thickness: isHeader ? 0.8 : 0.3, color: isHeader ? GREY : RULE });
+      this.yPt = top - h;
+      return h;
+    };
+    const headerH = () => Math.max(...columns.map((c, i) => this.wrap(c.header, widthOf(i), sizePt, true).length)) * lineH + 2 * pad;
+    const header = () => drawRow(columns.map((c) => c.header), true, SHADE, INK, true);
+    this.ensure(headerH() + lineH + 2 * pad);
+    header();
+    for (const row of rows) {
+      const h = Math.max(...row.cells.map((c, i) => (columns[i]?.tick ? 1 : this.wrap(c ?? '', widthOf(i), sizePt, row.bold).length))) * lineH + 2 * pad;
+      if (this.yPt - h < this.marginBottomPt) {
+        this.newPage();
+        header();
+      }
+      drawRow(row.cells, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false);
+    }
+    this.yPt -= 8;
+  }
+
+  /** Footer on every page: left text and "page X of Y" on the right. Call once, after all content. */
+  footers(leftText: (pageIndex: number) => string): void {
+    const n = this.pages.length;
+    const size = 7.5;
+    this.pages.forEach((p, i) => {
+      const right = `page ${i + 1} of ${n}`;
+      const y = this.marginBottomPt / 2 - 4;
+      p.drawLine({ start: { x: this.leftPt, y: y + 11 }, end: { x: this.leftPt + this.contentWidthPt, y: y + 11 }, thickness: 0.4, color: RULE });
+      const left = this.clean(leftText(i));
+      p.drawText(left, { x: this.leftPt, y, size, font: this.fonts.regular, color: GREY });
+      const w = this.fonts.regular.widthOfTextAtSize(right, size);
+      p.drawText(right, { x: this.leftPt + this.contentWidthPt - w, y, size, font: this.fonts.regular, color: GREY });
+    });
+  }
+}
