@@ -22,16 +22,23 @@ export const BOM = '\uFEFF';
 /** First characters a spreadsheet may read as the start of a formula (OWASP list). */
 export const FORMULA_TRIGGERS = ['=', '+', '-', '@', '\t', '\r'] as const;
 
-/** "'=1+2" for "=1+2"; other text unchanged. Numbers are never passed here: -5 stays a number. */
-export function neutraliseText(text: string): string {
-  return text.length > 0 && (FORMULA_TRIGGERS as readonly string[]).includes(text[0]) ? `'${text}` : text;
+function startsWithTrigger(text: string): boolean {
+  const rest = text.replace(/^'+/, '');
+  return rest.length > 0 && (FORMULA_TRIGGERS as readonly string[]).includes(rest[0]);
 }
 
-/** Undo neutraliseText: drop one leading "'" when a formula trigger follows it (used by the importer). */
+/**
+ * "'=1+2" for "=1+2"; other text unchanged. Numbers are never passed here: -5 stays a number.
+ * Text that already starts with quotes before a trigger ("'=x") gets one more quote ("''=x") so that
+ * unneutraliseText gives back exactly what was written.
+ */
+export function neutraliseText(text: string): string {
+  return startsWithTrigger(text) ? `'${text}` : text;
+}
+
+/** Undo neutraliseText (used by the importer): drop one leading "'" when quotes then a trigger follow. */
 export function unneutraliseText(text: string): string {
-  return text.length > 1 && text[0] === "'" && (FORMULA_TRIGGERS as readonly string[]).includes(text[1])
-    ? text.slice(1)
-    : text;
+  return text.startsWith("'") && startsWithTrigger(text) ? text.slice(1) : text;
 }
 
 function field(cell: CsvCell, delimiter: string, neutralise: boolean, decimalComma: boolean): string {
