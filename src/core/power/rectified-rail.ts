@@ -66,7 +66,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     const loadA = cornerCurrent(outputA, spec.load, ctx.keyingDuty);
     if (!winding) return zeroCorner(spec, loadA, 'No winding selected for this rail.');
     const input = simInputFor(rail, winding, ctx.mains.frequencyHz, spec.mainsFactor, loadA, ctx.stepsPerCycle);
-    const r = simulateRectifier({ ...input, waveformPoints: spec.id === ids.voltage ? 200 : 20 });
+    const r = simulateRectifier({ ...input, waveformPoints: spec.id === ids.voltage ? 200 : 0 });
     simulations++;
     if (!r.converged) allConverged = false;
     sims.set(spec.id, r);
@@ -87,7 +87,8 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   }
   if (winding) {
     const base = { rule: 'rail.headroom', subject: rail.name, value: worst.troughV, limit: ctx.requiredMinV, unit: 'V', source };
-    if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: the rail dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
+    if (!ctx.hasRequirement) findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough is ${fmt(worst.troughV)} V; no regulator is fed and no minimum is stated, so only the ${fmt(ctx.requiredMinV)} V margin is checked${worst.troughV < ctx.requiredMinV ? ' (and it is not met)' : ''}.` });
+    else if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: the rail dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
     else findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough ${fmt(worst.troughV)} V stays above the ${fmt(ctx.requiredMinV)} V needed (${ctx.requirementNote}).` });
     if (rail.topology === 'half-wave') findings.push({ severity: 'caution', rule: 'rectifier.half-wave', subject: rail.name, value: null, limit: null, unit: '', source: 'Common practice, no published source', message: `${rail.name}: a half-wave rectifier puts direct current through the winding, which can saturate a small transformer's core and doubles the ripple; prefer a bridge or centre-tap.` });
   }

@@ -37,7 +37,7 @@ export interface RectifierSimInput {
   toleranceV?: number;
   /** Hard cap on simulated cycles (default 200). */
   maxCycles?: number;
-  /** Waveform points over the two recorded cycles (default 160). */
+  /** Waveform points over the two recorded cycles (default 160; 0 = no waveform, one cycle fewer). */
   waveformPoints?: number;
 }
 
@@ -114,13 +114,27 @@ interface CycleStats {
 
 const finite = (x: number, fallback = 0): number => (Number.isFinite(x) ? x : fallback);
 
-/** Exact solution of C dv/dt = A(s) - B v over one step, with A linear in s. */
-function advance(v: number, a0: number, a1: number, b: number, c: number, h: number): number {
-  const lam = b / c;
-  if (lam * h < 1e-9) return v + (a0 * h + 0.5 * a1 * h * h - b * v * h) / c;
+/**
+ * Exact solution of C dv/dt = A(s) - B v over one step of length h, with A linear in s (slope a1):
+ * v(h) = p0 + (a1/B) h + (v - p0) e^(-B h / C), p0 = (a0 - C a1/B)/B. `decay` = e^(-B h / C), precomputed.
+ */
+function advance(v: number, a0: number, a1: number, b: number, c: number, h: number, decay: number): number {
+  if (b * h < 1e-9 * c) return v + (a0 * h + 0.5 * a1 * h * h - b * v * h) / c;
   const slope = a1 / b;
   const p0 = (a0 - c * slope) / b;
-  return p0 + slope * h + (v - p0) * Math.exp(-lam * h);
+  return p0 + slope * h + (v - p0) * decay;
+}
+
+const SIN_TABLES = new Map<number, Float64Array>();
+function sinTable(steps: number): Float64Array {
+  let t = SIN_TABLES.get(steps);
+  if (!t) {
+    t = new Float64Array(steps + 1);
+    for (let n = 0; n <= steps; n++) t[n] = Math.sin((2 * Math.PI * n) / steps);
+    if (SIN_TABLES.size > 16) SIN_TABLES.clear();
+    SIN_TABLES.set(steps, t);
+  }
+  return t;
 }
 
 function emptyStats(): CycleStats {
@@ -141,22 +155,24 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
   const bCond = m / d;
   const bBlock = cir.g / k;
   const halfWave = cir.topology === 'half-wave';
-  const dPhase = cir.omega * h;
+  const sines = sinTable(steps);
+  const decayCond = Math.exp((-bCond * h) / cir.c);
+  const decayBlock = Math.exp((-bBlock * h) / cir.c);
   let v = v0;
   let sPrev = 0;
-  let ePrev = (halfWave ? 0 : 0) - cir.dropV;
+  let ePrev = -cir.dropV;
   for (let n = 1; n <= steps; n++) {
-    const s = cir.peakEmfV * Math.sin(dPhase * n);
+    const s = cir.peakEmfV * sines[n];
     const e = (halfWave ? s : Math.abs(s)) - cir.dropV;
     const i0 = v > 0 ? cir.i0 : 0;
     // conducting branch
     const a0 = (m * (ePrev * k + cir.esr * i0)) / d - cir.g * ePrev - i0;
     const a1 = (m * (e * k + cir.esr * i0)) / d - cir.g * e - i0;
-    let vNew = advance(v, a0, (a1 - a0) / h, bCond, cir.c, h);
+    let vNew = advance(v, a0, (a1 - a0) / h, bCond, cir.c, h, decayCond);
     let id = (e * k - vNew + cir.esr * i0) / d;
     if (!(id >= 0)) {
       const aBlock = (cir.g * cir.esr * i0) / k - i0;
-      vNew = advance(v, aBlock, 0, bBlock, cir.c, h);
+      vNew = advance(v, aBlock, 0, bBlock, cir.c, h, decayBlock);
       id = 0;
     }
     if (vNew < 0) {
@@ -240,7 +256,7 @@ export function simulateRectifier(input: RectifierSimInput): RectifierSimResult 
   let fPrev = NaN;
   let cycles = 0;
   let converged = false;
-  let last: { v: number; st: CycleStats };
+  let last: { v: number; st: CycleStats } = { v: x, st: emptyStats() };
   while (cycles < maxCycles) {
     last = runCycle(cir, x, steps);
     cycles++;
@@ -261,6 +277,7 @@ export function simulateRectifier(input: RectifierSimInput): RectifierSimResult 
     x = next;
   }
   // Record two cycles from the steady state for the plot (also the statistics of the first of them).
+  const wantWave = (input.waveformPoints ?? 160) > 0;
   const pts = Math.max(20, Math.min(2000, Math.round(input.waveformPoints ?? 160)));
   const every = Math.max(1, Math.floor((2 * steps) / pts));
   const wf: RectifierWaveform = { timeS: [], outputV: [], windingA: [] };
@@ -273,16 +290,19 @@ export function simulateRectifier(input: RectifierSimInput): RectifierSimResult 
       wf.windingA.push(finite(iw));
     }
   };
-  const first = runCycle(cir, x, steps, rec);
-  offsetT = 1 / input.frequencyHz;
-  runCycle(cir, first.v, steps, rec);
-  const st = first.st;
+  let st = last.st;
+  if (wantWave) {
+    const first = runCycle(cir, x, steps, rec);
+    offsetT = 1 / input.frequencyHz;
+    runCycle(cir, first.v, steps, rec);
+    st = first.st;
+  }
   const perHalf = input.topology === 'centre-tap';
   const secondaryRmsA = perHalf ? Math.sqrt(Math.max(st.sumId2A, st.sumIdB2) / steps) : Math.sqrt((st.sumId2A + st.sumIdB2) / steps);
   const meanIc = st.sumIc / steps;
   const result: RectifierSimResult = {
     converged,
-    cycles: cycles + 2,
+    cycles: cycles + (wantWave ? 2 : 0),
     dcMeanV: finite(st.sumV / steps),
     ripplePpV: finite(st.maxV - st.minV),
     troughV: finite(st.minV),

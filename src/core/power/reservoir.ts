@@ -27,7 +27,7 @@ export function minimumCapacitanceF(base: RectifierSimInput, ripplePpTargetV: nu
   const textbook = textbookCapacitanceF(base.topology, loadA, base.frequencyHz, ripplePpTargetV);
   if (textbook === null) return null;
   const ripple = (c: number) => {
-    const r = simulateRectifier({ ...base, capacitanceF: c, stepsPerCycle: 500, waveformPoints: 20, maxCycles: 80 });
+    const r = simulateRectifier({ ...base, capacitanceF: c, stepsPerCycle: 500, waveformPoints: 0, maxCycles: 80 });
     return r.collapsed || r.note?.startsWith('Simulation not run') ? Infinity : r.ripplePpV;
   };
   let hi = textbook;

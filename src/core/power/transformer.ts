@@ -35,7 +35,7 @@ function troughFor(inp: WindingInput, ratedV: number, ratedA: number): number {
     topology: inp.rail.topology, secondaryVrms: noLoadVrms({ ...w, ratedVrms: ratedV }) * inp.lowFactor, windingResistanceOhm: r,
     frequencyHz: inp.frequencyHz, diodeDropV: inp.rail.diodeDropV, diodeResistanceOhm: inp.rail.diodeResistanceOhm,
     capacitanceF: inp.rail.reservoirF, esrOhm: inp.rail.esrOhm, load: { kind: 'current', currentA: inp.keyDownA },
-    bleederOhm: inp.rail.bleederOhm, stepsPerCycle: 500, waveformPoints: 20, maxCycles: 80,
+    bleederOhm: inp.rail.bleederOhm, stepsPerCycle: 500, waveformPoints: 0, maxCycles: 80,
   });
   return sim.collapsed ? 0 : sim.troughV;
 }
