@@ -1,0 +1,33 @@
+// Bleeder discharge against the reference values §10 worked examples [D] (formula t = RC ln(V0/Vsafe), [C]).
+import { describe, expect, it } from 'vitest';
+import { bleederFindings, bleederReport, dischargeTimeS, maxBleederOhm } from '../../../src/core/power/bleeder';
+import { near } from './helpers';
+
+const toleranceS = 0.1; // ref prints 0.1 s
+describe('ref §10', () => {
+  it('220 µF at 350 V, 100 kΩ: to 60 V in 38.8 s', () => {
+    near(dischargeTimeS(100e3, 220e-6, 350, 60), 38.8, toleranceS, 't');
+  });
+  it('for 5 s the bleeder must be <= 12.9 kΩ and dissipates 9.5 W', () => {
+    const r = maxBleederOhm(220e-6, 350, 60, 5) ?? NaN;
+    near(r, 12.9e3, 50, 'R max (Ω)'); // ref prints 12.9 kΩ
+    near((350 * 350) / r, 9.5, 0.05, 'P (W)');
+  });
+  it('report suggests an E12 value at or below the limit and fails a 100 kΩ bleeder', () => {
+    const b = bleederReport(220e-6, 350, 0.1, 100e3);
+    expect(b.suggestedOhm).toBe(12e3); // E12 below 12.9 kΩ
+    near(b.fittedTimeS ?? NaN, 38.8, toleranceS, 'fitted');
+    expect(bleederFindings('HV', b)[0].severity).toBe('fail');
+  });
+  it('low-voltage example: 10,000 µF at 25.5 V, 2.2 kΩ: to 5 V in 35.8 s; 3.2 J stored; below 60 V', () => {
+    near(dischargeTimeS(2200, 0.01, 25.5, 5), 35.8, toleranceS, 't to 5 V');
+    const b = bleederReport(0.01, 25.5, 0.02, 2200);
+    near(b.storedJ, 3.2, 0.06, 'energy (J)'); // 0.5 x 0.01 x 25.5^2 = 3.25 J, printed "3.2 J" in ref §10
+    const f = bleederFindings('LV', b)[0];
+    expect(f.severity).toBe('ok');
+    expect(f.message).toMatch(/below the 60 V/);
+  });
+  it('no bleeder on a high-voltage rail is a fail', () => {
+    expect(bleederFindings('HV', bleederReport(220e-6, 350, 0.1, null))[0].severity).toBe('fail');
+  });
+});
