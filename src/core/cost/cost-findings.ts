@@ -6,14 +6,14 @@ import type { LineFlag } from './report-types';
 
 const SOURCE = 'common practice, no published source';
 
-const MESSAGES: Partial<Record<LineFlag, (subject: string) => string>> = {
-  'unknown-part': (s) => `${s}: the line points to a part that is not in the parts list; it is not costed.`,
-  'unknown-stage': (s) => `${s}: the line's stage no longer exists; it is costed under General.`,
-  'bad-qty': (s) => `${s}: quantity per rig is negative or not a number; nothing is ordered.`,
-  'no-offer': (s) => `${s}: no supplier offer is entered; the line is in the list at zero cost.`,
-  'no-price': (s) => `${s}: the offers have no usable price break; the line is in the list at zero cost.`,
-  'no-rate': (s) =>
-    `${s}: no exchange rate for the offer currency; add one under costing. The line is in the list at zero cost.`,
+// The subject (part and designators) is shown beside the message, so messages do not repeat it.
+const MESSAGES: Partial<Record<LineFlag, string>> = {
+  'unknown-part': 'The line points to a part that is not in the parts catalog; it is not costed.',
+  'unknown-stage': "The line's stage no longer exists; it is costed under General.",
+  'bad-qty': 'The quantity per rig is negative or not a number; nothing is ordered.',
+  'no-offer': 'No supplier offer is entered; the line stays in the list at zero cost.',
+  'no-price': 'The offers have no usable price break; the line stays in the list at zero cost.',
+  'no-rate': 'No exchange rate for the offer currency (add one under costing); the line stays in the list at zero cost.',
 };
 
 export function lineSubject(l: Pick<LineContext, 'description' | 'refs' | 'lineId'>): string {
@@ -35,7 +35,7 @@ export function lineFindings(l: LineContext): Finding[] {
         limit: null,
         unit: '',
         source: SOURCE,
-        message: msg(subject),
+        message: msg,
       },
     ];
   });
