@@ -12,6 +12,7 @@ import type { Deps } from './web/deps';
 import { projectRoutes } from './web/routes/projects';
 import { overviewRoutes } from './web/routes/overview';
 import { supplyRoutes } from './web/routes/supply';
+import { stageRoutes } from './web/routes/stage';
 import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
@@ -58,6 +59,7 @@ export function buildApp(deps: Deps) {
 
   app.route('/', projectRoutes(deps));
   app.route('/', overviewRoutes(deps));
+  app.route('/', stageRoutes(deps));
   app.route('/', supplyRoutes(deps));
   app.route('/', partsRoutes(deps));
   app.route('/', bomRoutes(deps));

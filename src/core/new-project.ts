@@ -69,3 +69,64 @@ export function cloneProject(p: Project, newProjectId: string, name: string, mak
   const bom = p.bom.map((b) => ({ ...b, id: makeId('bl'), partId: r(b.partId), stageId: b.stageId ? r(b.stageId) : null }));
   return { ...structuredClone(p), id: newProjectId, name, version: 1, supply: { ...p.supply, transformers, rails }, stages, parts, bom };
 }
+
+// Starting values for a new final, filter or relay stage; the builder edits them on the stage page.
+export function defaultPa(railId: string): import('./model').PaParams {
+  return {
+    topology: 'push-pull',
+    amplifierClass: 'C',
+    railId,
+    devices: 2,
+    saturationV: 1,
+    rdsOnOhm: null,
+    turnsRatio: null,
+    loadOhm: 50,
+    efficiency: null,
+    deviceVdsMaxV: 100,
+    deviceIdMaxA: 5,
+    mount: { thetaJcKPerW: 2, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 150 },
+    biasIdleMaxA: 0.05,
+    referencePowerW: 5,
+  };
+}
+
+export function defaultLpfParams(): import('./model').LpfParams {
+  return {
+    response: 'chebyshev',
+    rippleDb: 0.1,
+    order: 5,
+    form: 'capacitor-input',
+    cutoffHz: null,
+    capacitorSeries: 'E12',
+    allowParallelPairs: true,
+    coreAlHPerTurn2: 4.9e-9,
+    coreName: 'Iron-powder toroid 12.7 mm (AL 4.9 nH/t²)',
+    inductorQ: 150,
+    capacitorQ: 1000,
+    capacitorTolerance: 0.05,
+    inductorTolerance: 0.05,
+    monteCarloTrials: 2000,
+    seed: 1,
+  };
+}
+
+export function defaultRelay(coilRailId: string | null): import('./model').RelayParams {
+  return {
+    contactCarryA: 2,
+    contactSwitchA: 1,
+    contactRatedV: 125,
+    rfRatedVpeak: null,
+    coilA: 0.03,
+    coilRailId,
+    coilModes: ['keyUp', 'keyDown'],
+    isolationDb: 30,
+    operateS: 0.005,
+    releaseS: 0.003,
+    bounceS: 0.001,
+    dcSwitchedA: 0,
+    position: 'after-lpf',
+    receiverMaxInputW: 0.01,
+    txDelayS: 0.008,
+    wpm: 20,
+  };
+}

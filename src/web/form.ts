@@ -59,7 +59,7 @@ export const text = (label: string, max = 200, required = true) =>
     .transform((s) => s.trim())
     .pipe(required ? z.string().min(1, `${label} must not be empty`).max(max, `${label} is longer than ${max} characters`) : z.string().max(max, `${label} is longer than ${max} characters`));
 
-export const choice = <T extends readonly [string, ...string[]]>(label: string, options: T) =>
+export const choice = <const T extends readonly [string, ...string[]]>(label: string, options: T) =>
   z.enum(options, { message: `${label}: choose one of ${options.join(', ')}` });
 
 export const checkbox = z.stringbool().optional().default(false);

@@ -13,6 +13,7 @@ const FLAG_LABELS: Record<LineFlag, string> = {
   'no-offer': 'no supplier offer',
   'no-price': 'no usable price',
   'no-rate': 'no exchange rate',
+  'too-large': 'cost too large: check the offer',
 };
 
 const Flags: FC<{ line: CostLine }> = ({ line }) =>

@@ -1,0 +1,99 @@
+// Supply page: transformers and windings, rails (rectified, regulated, battery), the primary fuse, and the
+// computed supply results below. The body is the htmx partial (#supply) and the page content alike.
+import type { Child, FC } from 'hono/jsx';
+import type { Project } from '../../src/core/model';
+import { formatInput } from '../../src/core/units';
+import { FormErrors } from '../components/fields';
+import { stateFor, type Failed } from '../components/failed';
+import { PField, PSelect } from '../components/supply-fields';
+import { TransformerCard, Version, hx } from '../components/supply-transformer';
+import { RailCard } from '../components/supply-rail';
+
+export interface SupplyBodyProps {
+  project: Project;
+  /** Rail id -> the rails it may be fed from ([id, label] pairs, no loops). */
+  parentsFor: (railId: string) => [string, string][];
+  /** The computed results, rendered by the supply-results partial (null while not available). */
+  results: Child | null;
+  failed?: Failed;
+  notice?: string;
+  /** Rail to show opened (just added). */
+  openRail?: string;
+}
+
+function sourceOptions(p: Project): [string, string][] {
+  const w = p.supply.transformers.flatMap((t) => t.windings.map((x): [string, string] => [`w:${x.id}`, `Rectified from ${t.name} · ${x.name}`]));
+  const r = p.supply.rails.map((x): [string, string] => [`r:${x.id}`, `Regulated from ${x.name}`]);
+  return [...w, ...r, ['battery', 'Battery (or external DC source)']];
+}
+
+export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, failed, notice, openRail }) => {
+  const base = `/projects/${project.id}/supply`;
+  const addTrafo = stateFor('add-transformer', failed, () => ({ name: '', construction: 'laminated' }));
+  const addRail = stateFor('add-rail', failed, () => ({ name: '', source: sourceOptions(project)[0]?.[0] ?? 'battery' }));
+  const fuse = stateFor('primary-fuse', failed, () => ({ primaryFuse: formatInput(project.supply.primaryFuseA, 'A') }));
+  const deleteError = failed?.form.startsWith('delete-') ? failed.state.errors._form : undefined;
+  return (
+    <div id="supply">
+      {notice ? (
+        <p class="notice" role="status">
+          {notice}
+        </p>
+      ) : null}
+      {deleteError ? (
+        <div class="form-errors" role="alert">
+          <p>{deleteError}</p>
+        </div>
+      ) : null}
+      <p class="caution-box">
+        Mains wiring, charged reservoir capacitors and hot regulators can injure. Fuse the primary, earth the chassis, fit
+        bleeders, and follow your local electrical code; these figures are planning aids, not a safety approval. Mains
+        voltage and frequency are set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
+      </p>
+      <div class="columns">
+        <section>
+          <h2>Transformers</h2>
+          {project.supply.transformers.length ? (
+            project.supply.transformers.map((t) => <TransformerCard project={project} t={t} failed={failed} />)
+          ) : (
+            <p class="hint">{project.mains ? 'No transformer yet.' : 'A battery / DC station needs no transformer.'}</p>
+          )}
+          <form {...hx(`${base}/transformers`)} class="card add" aria-label="Add a transformer">
+            <Version version={project.version} />
+            <FormErrors state={addTrafo} />
+            <div class="row">
+              <PField idp="at" name="name" label="New transformer" state={addTrafo} size={24} hint="e.g. T1 mains transformer" />
+              <PSelect idp="at" name="construction" label="Construction" state={addTrafo} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
+              <button type="submit">Add transformer</button>
+            </div>
+          </form>
+          <form {...hx(`${base}/fuse`)} class="card" aria-label="Primary fuse">
+            <Version version={project.version} />
+            <FormErrors state={fuse} />
+            <div class="row">
+              <PField idp="pf" name="primaryFuse" label="Fitted primary (mains) fuse" unit="A" state={fuse} size={6} hint="empty = recommend one" />
+              <button type="submit">Save fuse</button>
+            </div>
+          </form>
+        </section>
+        <section>
+          <h2>Rails</h2>
+          {project.supply.rails.map((r) => (
+            <RailCard project={project} rail={r} failed={failed} parents={parentsFor(r.id)} open={r.id === openRail} />
+          ))}
+          <form {...hx(`${base}/rails`)} class="card add" aria-label="Add a rail">
+            <Version version={project.version} />
+            <FormErrors state={addRail} />
+            <div class="row">
+              <PField idp="ar" name="name" label="New rail" state={addRail} size={22} hint="e.g. 12 V receiver rail" />
+              <PSelect idp="ar" name="source" label="Fed from" state={addRail} options={sourceOptions(project)} />
+              <button type="submit">Add rail</button>
+            </div>
+            <p class="hint">The new rail starts with typical values; open it to enter your parts.</p>
+          </form>
+        </section>
+      </div>
+      {results}
+    </div>
+  );
+};
