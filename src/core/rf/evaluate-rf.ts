@@ -6,7 +6,7 @@ import { harmonicCompliance, paHarmonicDbc } from './harmonics';
 import { analyseLpf } from './lpf-analysis';
 import { designLpf } from './lpf-design';
 import { monteCarloLpf } from './lpf-monte-carlo';
-import { validateRfInputs } from './lpf-validate';
+import { validateRfInputs, validateRfSettings } from './lpf-validate';
 import { evaluatePa } from './pa';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
@@ -23,7 +23,7 @@ const finite = (x: number, fallback = 0) => (Number.isFinite(x) ? x : fallback);
 function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext): { res: LpfStageResult; findings: Finding[] } {
   const p = stage.lpf!;
   const d = designLpf(p, project.frequencyHz);
-  const swr = Math.max(1, finite(project.rf.worstSwr, 1));
+  const swr = Math.min(100, Math.max(1, finite(project.rf.worstSwr, 1)));
   const capacitorPeakV = lineMaxima(powerW, 50, swr).peakV;
   if (!d.ok) {
     return {
@@ -61,8 +61,11 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
 export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const inputErrors = validateRfInputs(project.frequencyHz, project.targetPowerW);
   const all: Finding[] = inputErrors.map((e) => ({ severity: 'fail', rule: 'rf.input', subject: e.field, value: null, limit: null, unit: '', source: 'input check', message: e.message }));
+  for (const e of validateRfSettings(project.rf)) {
+    all.push({ severity: 'fail', rule: 'rf.settings', subject: e.field, value: null, limit: null, unit: '', source: 'input check', message: e.message });
+  }
   const frequencyHz = finite(project.frequencyHz);
-  const targetPowerW = finite(project.targetPowerW);
+  const targetPowerW = Math.max(0, finite(project.targetPowerW));
   const stages: RfStageResult[] = [];
   const paStage = project.stages.find((s) => s.kind === 'final' && s.pa);
   const lpfStageDef = project.stages.find((s) => s.kind === 'lpf' && s.lpf);
@@ -87,7 +90,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const passbandLossDb = lpfRes?.analysis?.atOperating.lossDb ?? 0;
   const outputPowerW = paPowerW * 10 ** (-passbandLossDb / 10);
   const topology = paStage?.pa?.topology ?? 'single-ended';
-  const evenDbc = finite(project.rf.evenHarmonicDbc, 0);
+  const evenDbc = Math.min(0, Math.max(-120, finite(project.rf.evenHarmonicDbc, 0)));
   const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (paHarmonicDbc(topology, evenDbc, n).dbc / 20), 0);
   for (const st of project.stages) {
     if (st.kind === 'tr' && st.relay) {

@@ -1,6 +1,7 @@
 // RF exposure estimate: OET Bulletin 65 far-field method against 47 CFR 1.1310 limits.
 import type { Finding } from '../findings';
 import type { RfSettings } from '../model';
+import { validateRfSettings } from './lpf-validate';
 
 export const EXPOSURE_CAUTION =
   'This is a far-field estimate for planning only. Local rules and your licence conditions govern RF exposure; ' +
@@ -58,6 +59,18 @@ export interface ExposureResult {
 const SRC = 'FCC OET Bulletin 65 (1997) far-field method with 47 CFR 1.1310 Table 1 limits';
 
 export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: RfSettings): ExposureResult {
+  const bad = validateRfSettings(rf).filter((e) => e.field !== 'evenHarmonicDbc' && e.field !== 'worstSwr');
+  if (bad.length > 0) {
+    return {
+      frequencyHz: Number.isFinite(frequencyHz) ? frequencyHz : 0, peakPowerW: 0, averagePowerW: 0, eirpW: 0, erpW: 0, groundReflection: rf.groundReflection,
+      limitControlledWPerM2: null, limitGeneralWPerM2: null, controlledDistanceM: null, generalDistanceM: null, nearFieldDistanceM: 0, farFieldValid: false,
+      exemptionThresholdW: null, exempt: null, exemptBeyondM: null, caution: EXPOSURE_CAUTION,
+      findings: [
+        ...bad.map((e): Finding => ({ severity: 'fail', rule: 'exposure.input', subject: `RF exposure: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+        { severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'Local regulations and licence conditions', message: EXPOSURE_CAUTION },
+      ],
+    };
+  }
   const fMHz = frequencyHz / 1e6;
   const p = Math.max(0, Number.isFinite(peakPowerW) ? peakPowerW : 0);
   // Source: OET-65 Supplement B (1997): average = PEP x duty factor x fraction of averaging time on air
@@ -70,7 +83,7 @@ export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: Rf
   const k = rf.groundReflection ? 2.56 : 1;
   const dist = (sMwPerCm2: number) => Math.sqrt((k * eirpW * 1e3) / (4 * Math.PI * sMwPerCm2)) / 100;
   // Source: 47 CFR 1.1307(b)(3)(i)(C) / FCC 19-126 note 143: lambda/2pi = 47.7/f m
-  const nearFieldDistanceM = fMHz > 0 ? 47.7 / fMHz : 0;
+  const nearFieldDistanceM = fMHz >= 0.01 ? 47.7 / fMHz : 0;
   const controlledDistanceM = lim ? dist(lim.controlled) : null;
   const generalDistanceM = lim ? dist(lim.general) : null;
   const farFieldValid = generalDistanceM !== null && controlledDistanceM !== null && Math.min(generalDistanceM, controlledDistanceM) >= nearFieldDistanceM;

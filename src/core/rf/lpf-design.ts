@@ -62,8 +62,8 @@ export function turnsForInductance(inductanceH: number, alHPerTurn2: number): nu
 /** Synthesise the filter. Invalid parameters give field errors, never a throw. */
 export function designLpf(p: LpfParams, operatingFrequencyHz: number): Checked<LpfDesign> {
   const errors = validateLpfParams(p);
-  if (!(operatingFrequencyHz > 0 && Number.isFinite(operatingFrequencyHz))) {
-    errors.push({ field: 'frequencyHz', message: 'Operating frequency must be above zero.' });
+  if (!(operatingFrequencyHz >= 10e3 && operatingFrequencyHz <= 1e9)) {
+    errors.push({ field: 'frequencyHz', message: 'Operating frequency must be between 10 kHz and 1 GHz.' });
   }
   if (errors.length > 0) return { ok: false, errors };
   const rippleDb = p.response === 'chebyshev' ? p.rippleDb : 0;

@@ -1,7 +1,7 @@
 // Final amplifier: output power, turns ratio, DC input, dissipation, heatsink and device ratings.
 import type { Finding } from '../findings';
 import type { PaParams, Project } from '../model';
-import { validatePaParams } from './lpf-validate';
+import { validatePaParams, validateThermalInputs } from './lpf-validate';
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
 
@@ -68,8 +68,8 @@ function zeroResult(railV: number, findings: Finding[]): PaResult {
 const db = (x: number) => (x > 0 ? 10 * Math.log10(x) : -999);
 
 export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier'): PaResult {
-  const errors = validatePaParams(pa);
-  if (!(railV > 0 && Number.isFinite(railV))) errors.push({ field: 'railId', message: 'No supply voltage is known for the PA rail.' });
+  const errors = [...validatePaParams(pa), ...validateThermalInputs(project.ambientC, project.keyingDuty)];
+  if (!(railV > 0 && railV <= 5000)) errors.push({ field: 'railId', message: 'No usable supply voltage (above 0 V, at most 5 kV) is known for the PA rail.' });
   const vsat0 = pa.saturationV ?? 0;
   if (errors.length === 0 && railV <= vsat0) errors.push({ field: 'saturationV', message: 'Saturation drop is not below the supply voltage.' });
   if (errors.length > 0) {

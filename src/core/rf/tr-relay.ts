@@ -2,6 +2,7 @@
 import type { Finding } from '../findings';
 import type { Mode, PerMode, RelayParams, Stage } from '../model';
 import { MODES } from '../model';
+import { validateRelayParams } from './lpf-validate';
 
 export interface RelayResult {
   /** Net power through the relay, W, and the worst SWR assumed. */
@@ -51,8 +52,20 @@ export interface RelayInput {
 export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
   const f: Finding[] = [];
   const s = inp.subject;
-  const swr = Math.max(1, inp.swr);
-  const m = lineMaxima(Math.max(0, inp.powerW), 50, swr);
+  const errors = validateRelayParams(r);
+  if (errors.length > 0) {
+    return {
+      powerW: 0, swr: 1, rfRmsV: 0, rfPeakV: 0, rfRmsA: 0, rfPeakA: 0, peakWithHarmonicsV: null, ratedPeakV: 0, ratedIsRf: false,
+      receiverPowerW: 0, receiverPowerDbm: -999, dotS: 0, hotSwitchMarginS: 0,
+      findings: errors.map((e) => ({ severity: 'fail', rule: 'relay.input', subject: `${s}: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+    };
+  }
+  const swr = Number.isFinite(inp.swr) ? Math.min(Math.max(1, inp.swr), 100) : 1;
+  if (swr !== inp.swr) {
+    f.push({ severity: 'caution', rule: 'relay.swr', subject: s, value: swr, limit: null, unit: '', source: 'input check', message: `The worst-case SWR was taken as ${swr} (the entered value is outside 1 to 100).` });
+  }
+  const powerW = Number.isFinite(inp.powerW) ? Math.max(0, inp.powerW) : 0;
+  const m = lineMaxima(powerW, 50, swr);
   const before = r.position === 'before-lpf';
   // Source: triangle inequality on the Fourier components (REFERENCE-VALUES §9 note): peak <= fundamental x (1 + sum of harmonics)
   const peakWithHarmonicsV = before ? m.peakV * (1 + Math.max(0, inp.harmonicAmplitudeSum)) : null;
@@ -84,7 +97,7 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
     });
   }
   // Source: definition of isolation in dB: P_rx = P_tx x 10^(-isolation/10)
-  const receiverPowerW = Math.max(0, inp.powerW) * 10 ** (-r.isolationDb / 10);
+  const receiverPowerW = powerW * 10 ** (-r.isolationDb / 10);
   f.push({
     severity: receiverPowerW > r.receiverMaxInputW ? 'fail' : receiverPowerW > 0.5 * r.receiverMaxInputW ? 'caution' : 'ok',
     rule: 'relay.isolation', subject: s, value: receiverPowerW, limit: r.receiverMaxInputW, unit: 'W', source: "Relay maker's isolation figure at the operating frequency",
@@ -109,7 +122,7 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
       (cycleS > dotS ? ' The relay is too slow to follow single elements, so it suits semi-break-in with a hang time, not full break-in.' : ''),
   });
   return {
-    powerW: inp.powerW, swr, rfRmsV: m.rmsV, rfPeakV: m.peakV, rfRmsA: m.rmsA, rfPeakA: m.peakA, peakWithHarmonicsV, ratedPeakV, ratedIsRf,
+    powerW, swr, rfRmsV: m.rmsV, rfPeakV: m.peakV, rfRmsA: m.rmsA, rfPeakA: m.peakA, peakWithHarmonicsV, ratedPeakV, ratedIsRf,
     receiverPowerW, receiverPowerDbm: receiverPowerW > 0 ? 10 * Math.log10(receiverPowerW / 1e-3) : -999, dotS, hotSwitchMarginS, findings: f,
   };
 }

@@ -1,0 +1,94 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import type { Finding } from '../../../src/core/findings';
+import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
+import { lineMaxima } from '../../../src/core/rf/tr-relay';
+import { lpfParams, paParams, project, relayParams } from './fixture';
+import { near, nonFinitePaths } from './helpers';
+
+const RANK = { fail: 0, caution: 1, ok: 2 } as const;
+const sorted = (f: Finding[]) => f.every((x, i) => i === 0 || RANK[f[i - 1].severity] <= RANK[x.severity]);
+
+describe('evaluateRf on a 40 m push-pull rig', () => {
+  const p = project();
+  const r = evaluateRf(p, { paRailV: { pa: 13.8 } });
+  it('has a result per RF stage and JSON-friendly values', () => {
+    expect(r.stages.map((s) => s.kind)).toEqual(['final', 'lpf', 'tr']);
+    expect(nonFinitePaths(r)).toEqual([]);
+    expect(JSON.parse(JSON.stringify(r))).toEqual(r);
+    expect(sorted(r.findings)).toBe(true);
+  });
+  it('the PA designs a practical ratio near 10 W (REFERENCE-VALUES §8.3: 4:5 gives 10.24 W)', () => {
+    const pa = r.stages[0].pa!;
+    expect(pa.turnsRatio).toBe(1.25);
+    // Source: REFERENCE-VALUES §8.3 sinusoidal push-pull model, class C: P = 2 (13.8 - 1)^2 / 32
+    near(pa.outputW, 10.24, 0.01, 'P');
+  });
+  it('harmonics table uses the as-built filter and passes 43 dB for this design', () => {
+    expect(r.harmonics!.rows).toHaveLength(4);
+    expect(r.harmonics!.rows.every((x) => x.marginDb > 0)).toBe(true);
+    expect(r.harmonics!.rows.every((x) => x.worstMarginDb !== null)).toBe(true);
+  });
+  it('relay voltage at SWR 2 follows the line maxima formula (REFERENCE-VALUES §9)', () => {
+    const relay = r.stages[2].relay!;
+    near(relay.rfPeakV, lineMaxima(r.outputPowerW, 50, 2).peakV, 1e-9, 'Vpk');
+  });
+  it('exposure uses the delivered power and always cautions', () => {
+    near(r.exposure!.peakPowerW, r.outputPowerW, 1e-12, 'P');
+    expect(r.findings.some((f) => f.rule === 'exposure.local-rules')).toBe(true);
+  });
+  it('missing PA rail voltage is a fail finding', () => {
+    const x = evaluateRf(p, { paRailV: {} });
+    expect(x.findings.some((f) => f.rule === 'pa.input' && f.severity === 'fail')).toBe(true);
+    expect(nonFinitePaths(x)).toEqual([]);
+  });
+  it('zero power and zero frequency are input errors, not crashes', () => {
+    const x = evaluateRf(project({ targetPowerW: 0, frequencyHz: 0 }), { paRailV: { pa: 13.8 } });
+    expect(x.inputErrors.map((e) => e.field).sort()).toEqual(['frequencyHz', 'targetPowerW']);
+    expect(nonFinitePaths(x)).toEqual([]);
+  });
+});
+
+describe('evaluateRf never produces NaN/Infinity or throws for odd inputs', () => {
+  const num = fc.oneof(fc.constant(0), fc.constant(-1), fc.constant(1e12), fc.double({ min: -10, max: 1e3, noNaN: true }), fc.constant(Number.NaN));
+  it('random parameter corruption', () => {
+    fc.assert(
+      fc.property(num, num, num, num, num, num, num, fc.integer({ min: -2, max: 12 }), (f, pw, rail, al, q, swr, tr, order) => {
+        const p = project({
+          frequencyHz: Math.abs(f) * 1e5,
+          targetPowerW: pw,
+          stages: [
+            { id: 'a', kind: 'final', name: 'PA', notes: '', loads: [], dissipationW: null, pa: paParams({ turnsRatio: tr > 0 ? tr : null, saturationV: Number.isFinite(q) ? q : 1 }) },
+            { id: 'b', kind: 'lpf', name: 'LPF', notes: '', loads: [], dissipationW: null, lpf: lpfParams({ coreAlHPerTurn2: al * 1e-9, order, inductorQ: q, monteCarloTrials: 50 }) },
+            { id: 'c', kind: 'tr', name: 'TR', notes: '', loads: [], dissipationW: null, relay: relayParams({ wpm: Math.abs(pw) + 1 }) },
+          ],
+          rf: { ...project().rf, worstSwr: swr },
+        });
+        const r = evaluateRf(p, { paRailV: { pa: rail } });
+        expect(nonFinitePaths(r)).toEqual([]);
+        expect(sorted(r.findings)).toBe(true);
+      }),
+      { numRuns: 400 },
+    );
+  });
+  it('corrupted project, PA, relay and exposure settings', () => {
+    fc.assert(
+      fc.property(num, num, num, num, num, num, num, num, (amb, duty, eff, tj, gain, loss, even, iso) => {
+        const base = project();
+        const p = project({
+          ambientC: amb,
+          keyingDuty: duty,
+          stages: [
+            { ...base.stages[0], pa: paParams({ efficiency: eff, mount: { thetaJcKPerW: 1, thetaCsKPerW: 1, thetaSaKPerW: Number.isNaN(gain) ? null : gain, tjMaxC: tj } }) },
+            base.stages[1],
+            { ...base.stages[2], relay: relayParams({ isolationDb: iso, position: 'before-lpf' }) },
+          ],
+          rf: { ...base.rf, antennaGainDbi: gain, feedlineLossDb: loss, evenHarmonicDbc: even, exposureDutyFactor: duty, exposureOnFraction: eff },
+        });
+        const r = evaluateRf(p, { paRailV: { pa: 13.8 } });
+        expect(nonFinitePaths(r)).toEqual([]);
+      }),
+      { numRuns: 400 },
+    );
+  });
+});
