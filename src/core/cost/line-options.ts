@@ -34,6 +34,9 @@ export interface LineContext {
 
 export const GENERAL_STAGE_NAME = 'General';
 
+/** More pieces than this on one line is taken as a typing error (flag 'bad-qty'), not a purchase. */
+export const MAX_PIECES_PER_LINE = 1e7;
+
 /** Whole number of kits (floor), 0 when the entry is not a finite number >= 1. */
 export function kitsOf(project: Project): number {
   return Number.isFinite(project.kits) && project.kits >= 1 ? Math.floor(project.kits) : 0;
@@ -57,10 +60,14 @@ export function prepareLines(project: Project): LineContext[] {
     const category = part?.category ?? '';
     const qtyOk = Number.isFinite(line.qtyPerRig) && line.qtyPerRig >= 0;
     if (!qtyOk) flags.push('bad-qty');
-    const needed = qtyOk ? neededQty(line.qtyPerRig, kits, attritionFraction, sparesPerLine) : 0;
-    if (qtyOk && needed === 0) flags.push('zero-qty');
+    const raw = qtyOk ? neededQty(line.qtyPerRig, kits, attritionFraction, sparesPerLine) : 0;
+    const absurd = !(raw <= MAX_PIECES_PER_LINE);
+    if (qtyOk && absurd) flags.push('bad-qty');
+    const needed = absurd ? 0 : raw;
+    if (qtyOk && !absurd && needed === 0) flags.push('zero-qty');
 
     const options: OfferOption[] = [];
+    let overflow = false;
     if (part !== null && needed > 0) {
       const offers = part.offers;
       const priced = offers.filter((o) => validBreaks(o.breaks).length > 0);
@@ -70,9 +77,14 @@ export function prepareLines(project: Project): LineContext[] {
         const rate = rateFor(offer.currency, project.currency, exchangeRates);
         const quote = quoteOffer(needed, offer);
         if (rate === null || quote === null) continue;
+        // Absurd prices or rates would leave exact integer arithmetic: such an offer is not used.
+        if (!Number.isSafeInteger(quote.costCents) || !(quote.costCents * rate < Number.MAX_SAFE_INTEGER)) {
+          overflow = true;
+          continue;
+        }
         options.push({ offer, quote, rate, costCents: convertCents(quote.costCents, rate) });
       }
-      if (priced.length > 0 && options.length === 0) flags.push('no-rate');
+      if (priced.length > 0 && options.length === 0) flags.push(overflow ? 'too-large' : 'no-rate');
     }
 
     return {

@@ -10,7 +10,8 @@ import type { PlanMethod } from './supplier-plan';
 export type LineFlag =
   | 'unknown-part' // line.partId matches no part
   | 'unknown-stage' // line.stageId matches no stage; costed under General
-  | 'bad-qty' // qtyPerRig negative or not a number; nothing ordered
+  | 'bad-qty' // qtyPerRig negative, not a number, or over 10 million pieces needed; nothing ordered
+  | 'too-large' // every priced offer gives a cost too large to add up exactly (absurd price or rate)
   | 'zero-qty' // nothing needed (qtyPerRig 0 or kits 0)
   | 'no-offer' // the part has no supplier offers
   | 'no-price' // offers exist but none has a usable price break

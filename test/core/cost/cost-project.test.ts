@@ -163,6 +163,25 @@ describe('flags: unpriced lines stay in the list at zero cost', () => {
     }
   });
 
+  it('absurd quantities, prices and rates give flags and findings, never NaN or Infinity', () => {
+    const r = costProject(
+      project({
+        parts: [
+          part('huge', [offer({ id: 'h', supplier: 'A', breaks: flat(5) })]),
+          part('dear', [offer({ id: 'd', supplier: 'A', breaks: flat(Number.MAX_SAFE_INTEGER) })]),
+          part('rate', [offer({ id: 'r', supplier: 'A', currency: 'XXX', breaks: flat(5) })]),
+        ],
+        bom: [line('L1', 'huge', 1e300), line('L2', 'dear', 3), line('L3', 'rate', 1)],
+        exchangeRates: { XXX: 1e300 },
+        suppliers: [ship('A', 0)],
+      }),
+    );
+    expect(r.lines.map((l) => l.flags)).toEqual([['bad-qty'], ['too-large'], ['too-large']]);
+    expect(r.totals.buildCents).toBe(0);
+    expect(r.findings.map((f) => f.rule)).toEqual(expect.arrayContaining(['cost.bad-qty', 'cost.too-large']));
+    expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
+  });
+
   it('a supplier with no shipping entry is counted at 0 shipping with a caution', () => {
     const r = costProject(project({ parts: [part('p', [offer({ id: 'o', supplier: 'Nowhere', breaks: flat(5) })])], bom: [line('L', 'p', 2)] }));
     expect(r.totals.buildCents).toBe(10);
