@@ -285,6 +285,8 @@ export function parseProjectFile(textIn: string): ProjectFileResult {
   } catch (e) {
     return { ok: false, errors: [`The file is not valid JSON: ${(e as Error).message}`] };
   }
+  const head = projectFileSchema.pick({ format: true, formatVersion: true }).safeParse(json);
+  if (!head.success) return { ok: false, errors: describeIssues(head.error) };
   const parsed = projectFileSchema.safeParse(json);
   if (!parsed.success) return { ok: false, errors: describeIssues(parsed.error) };
   const project = parsed.data.project as Project;

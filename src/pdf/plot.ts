@@ -63,7 +63,7 @@ export function plot(l: Layout, spec: PlotSpec): void {
 
   const leftPt = l.leftPt + 46;
   const widthPt = l.contentWidthPt - 56;
-  const topPt = l.yPt - 6;
+  const topPt = l.yPt - 14;
   const bottomPt = topPt - heightPt;
   const px = (x: number) => leftPt + ((tx(x) - x0) / (x1 - x0)) * widthPt;
   const py = (y: number) => bottomPt + ((Math.min(y1, Math.max(y0, y)) - y0) / (y1 - y0)) * heightPt;

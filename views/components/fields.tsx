@@ -8,7 +8,8 @@ export interface FieldState {
 
 export const emptyState = (): FieldState => ({ values: {}, errors: {} });
 
-export const Field: FC<{ name: string; label: string; state: FieldState; unit?: string; hint?: string; size?: number; type?: string; required?: boolean }> = ({
+export const Field: FC<{ name: string; label: string; state: FieldState; unit?: string; hint?: string; size?: number; type?: string; required?: boolean; id?: string }> = ({
+  id: idIn,
   name,
   label,
   state,
@@ -19,7 +20,7 @@ export const Field: FC<{ name: string; label: string; state: FieldState; unit?: 
   required,
 }) => {
   const error = state.errors[name];
-  const id = `f-${name}`;
+  const id = idIn ?? `f-${name}`;
   return (
     <label class={error ? 'field has-error' : 'field'} for={id}>
       <span class="label">

@@ -9,7 +9,7 @@ import { stateFor, type Failed } from './failed';
 export const Version: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
 
 /** Attributes that make a form post through htmx and swap the supply body in place. */
-export const hx = (action: string, target = '#supply') => ({ method: 'post', action, 'hx-post': action, 'hx-target': target, 'hx-swap': 'outerHTML' });
+export const hx = (action: string, target = '#supply') => ({ method: 'post' as const, action, 'hx-post': action, 'hx-target': target, 'hx-swap': 'outerHTML' });
 
 export const pctText = (fraction: number) => String(+(fraction * 100).toFixed(4));
 

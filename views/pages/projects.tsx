@@ -62,7 +62,7 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
                   <td>
                     <form method="post" action={`/projects/${p.id}/rename`} class="inline">
                       <input type="hidden" name="version" value={String(p.version)} />
-                      <Field name="name" label="New name" state={rs} size={24} />
+                      <Field name="name" id={`rename-${p.id}`} label="New name" state={rs} size={24} />
                       <button type="submit">Rename</button>
                     </form>
                   </td>

@@ -29,6 +29,8 @@ export interface PlanResult {
 export type PlanMethod = 'exact' | 'local-search';
 
 export const DEFAULT_EXACT_LIMIT = 12;
+/** Subset masks are 32-bit integers (1 << n), and 2^24 subsets is already minutes of work. */
+export const MAX_EXACT_LIMIT = 24;
 
 /** Cost of buying every line from the cheapest supplier in `open`; null when a line is not covered. */
 export function evaluateSubset(input: PlanInput, open: readonly boolean[]): PlanResult | null {
@@ -137,6 +139,6 @@ export function choosePlan(
   input: PlanInput,
   exactLimit: number = DEFAULT_EXACT_LIMIT,
 ): { method: PlanMethod; plan: PlanResult | null } {
-  if (input.suppliers.length <= exactLimit) return { method: 'exact', plan: planExact(input) };
+  if (input.suppliers.length <= Math.min(exactLimit, MAX_EXACT_LIMIT)) return { method: 'exact', plan: planExact(input) };
   return { method: 'local-search', plan: planLocalSearch(input) };
 }

@@ -31,7 +31,7 @@ export function bleederReport(capacitanceF: number, startV: number, esrOhm: numb
   const c = Number.isFinite(capacitanceF) ? Math.max(0, capacitanceF) : 0;
   // Source: stored energy of a capacitor, E = C V^2 / 2 (ref §10 low-voltage example)
   const storedJ = 0.5 * c * v0 * v0;
-  const shortCircuitA = v0 / Math.max(esrOhm, 1e-3);
+  const shortCircuitA = v0 / (Number.isFinite(esrOhm) ? Math.max(esrOhm, 1e-3) : 1e-3);
   const high = v0 > SAFE_DC_V;
   let suggestedOhm: number | null;
   let reasoning: string;

@@ -12,6 +12,7 @@ import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
 import { fittedFuseFindings, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
+import { normalizeSupply } from './normalize';
 
 export interface SupplyOptions {
   /** Standard secondary voltages to choose from (V RMS); default DEFAULT_SECONDARY_V. */
@@ -46,13 +47,15 @@ function requirement(railId: string, marginV: number, children: RegulatedRail[],
   return { v: margin, note: `no regulator fed: only the rail's ${margin} V margin above 0 V is required; state a minimum for its direct loads`, has: false };
 }
 
-export function evaluateSupply(project: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): SupplyReport {
+export function evaluateSupply(projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): SupplyReport {
+  const normalized = normalizeSupply(projectIn.supply);
+  const project: Project = { ...projectIn, supply: normalized.supply };
   const duty = safeDuty(project.keyingDuty);
   const txFraction = options.transmitFraction !== undefined && Number.isFinite(options.transmitFraction) ? Math.min(1, Math.max(0, options.transmitFraction)) : DEFAULT_TRANSMIT_FRACTION;
   const mainsOk = project.mains !== null && project.mains.nominalV > 0 && project.mains.frequencyHz > 0;
   const specs = cornerSpecs(project.mains, duty);
   const rails = project.supply.rails;
-  const globalFindings: Finding[] = [];
+  const globalFindings: Finding[] = [...normalized.findings];
   if (project.mains && !mainsOk) {
     globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'Project data', message: 'The mains voltage and frequency must both be above zero.' });
   }
@@ -65,7 +68,8 @@ export function evaluateSupply(project: Project, railOutputA: Record<string, Per
       globalFindings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'Current budget', message: `No current budget for rail "${id}": it is treated as unloaded.` });
       return ZERO;
     }
-    return b;
+    const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
+    return { receive: clean(b.receive), keyUp: clean(b.keyUp), keyDown: clean(b.keyDown) };
   };
 
   const reports = new Map<string, RailReport>();
@@ -171,7 +175,7 @@ export function evaluateSupply(project: Project, railOutputA: Record<string, Per
   const railReports = rails.map((r) => reports.get(r.id)!).filter(Boolean);
   const all = [...globalFindings, ...railReports.flatMap((r) => r.findings), ...(primary?.findings ?? [])];
   const m = project.mains;
-  return {
+  return sanitize({
     mains: mainsOk && m ? { nominalV: m.nominalV, lowV: m.nominalV * mainsFactor(m, 'low'), highV: m.nominalV * mainsFactor(m, 'high'), frequencyHz: m.frequencyHz } : null,
     keyingDuty: duty,
     transmitFraction: txFraction,
@@ -181,5 +185,27 @@ export function evaluateSupply(project: Project, railOutputA: Record<string, Per
     findings: sortFindings(all),
     simulations,
     allConverged,
+  });
+}
+
+/**
+ * Safety net: a non-finite number anywhere in the report becomes 0 and adds a 'fail' finding naming the field,
+ * so a missed edge case shows up as a visible defect instead of NaN in a page. Tests assert it never fires.
+ */
+function sanitize(report: SupplyReport): SupplyReport {
+  const bad: string[] = [];
+  const walk = (v: unknown, path: string): unknown => {
+    if (typeof v === 'number') {
+      if (Number.isFinite(v)) return v;
+      bad.push(path);
+      return 0;
+    }
+    if (Array.isArray(v)) return v.map((x, i) => walk(x, `${path}[${i}]`));
+    if (v && typeof v === 'object') return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, walk(x, `${path}.${k}`)]));
+    return v;
   };
+  const clean = walk(report, 'report') as SupplyReport;
+  if (bad.length === 0) return report;
+  const f: Finding = { severity: 'fail', rule: 'internal.non-finite', subject: 'Supply report', value: bad.length, limit: 0, unit: '', source: 'Program check', message: `Some supply values could not be computed from the inputs (${bad.slice(0, 3).join(', ')}${bad.length > 3 ? ', ...' : ''}); check the entered values.` };
+  return { ...clean, findings: sortFindings([f, ...clean.findings]) };
 }

@@ -98,7 +98,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   const minF = winding && ripTarget !== null ? minimumCapacitanceF(simInputFor(rail, winding, ctx.mains.frequencyHz, worst.mainsFactor, worst.loadA), ripTarget, worst.loadA) : null;
   const thermalRippleA = Math.sqrt(ctx.keyingDuty * sq(cornerVal(corners, 'high-keyDown', 'capacitorRippleRmsA')) + (1 - ctx.keyingDuty) * sq(cornerVal(corners, 'high-keyUp', 'capacitorRippleRmsA')));
   const reservoir = {
-    fittedF: rail.reservoirF,
+    fittedF: Number.isFinite(rail.reservoirF) ? rail.reservoirF : 0,
     ripplePpTargetV: ripTarget,
     minimumF: minF,
     textbookF: ripTarget !== null ? textbookCapacitanceF(rail.topology, worst.loadA, ctx.mains.frequencyHz, ripTarget) : null,
@@ -108,7 +108,8 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     thermalRippleA,
     tuneUpRippleA: tuneUp.capacitorRippleRmsA,
   };
-  if (winding) findings.push(...reservoirFindings(rail.name, rail.capacitorRatedV, highNoLoad, rail.capacitorRippleA, thermalRippleA, tuneUp.capacitorRippleRmsA, ripTarget, worst.ripplePpV));
+  const fin = (x: number | null) => (x !== null && Number.isFinite(x) ? x : null);
+  if (winding) findings.push(...reservoirFindings(rail.name, fin(rail.capacitorRatedV), highNoLoad, fin(rail.capacitorRippleA), thermalRippleA, tuneUp.capacitorRippleRmsA, ripTarget, worst.ripplePpV));
   recommendations.push({
     topic: 'reservoir',
     text: `${reservoir.standardF !== null ? fmtF(reservoir.standardF) + ', ' : ''}rated ${reservoir.recommendedRatedV ?? '?'} V or more, ripple current ${fmt(Math.max(thermalRippleA, tuneUp.capacitorRippleRmsA))} A RMS or more at ${2 * ctx.mains.frequencyHz} Hz`,

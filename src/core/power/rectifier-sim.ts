@@ -193,7 +193,7 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
     st.sumIc += ic;
     st.sumLoad += iLoad;
     if (id > 0) st.conducting++;
-    if (rec) rec(n * h, vt, firstHalf ? id : -id);
+    if (rec) rec(n * h, vt, (firstHalf ? id : -id) + 0); // + 0 turns -0 into 0 for JSON
     v = vNew;
     sPrev = s;
     ePrev = e;

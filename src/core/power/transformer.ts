@@ -85,7 +85,8 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
     checkTroughV = troughFor(inp, standardRatedV, ratedA);
     simulations++;
   }
-  const va = (standardRatedV ?? inp.winding.ratedVrms) * ratedA * halves;
+  const fittedV = Number.isFinite(inp.winding.ratedVrms) ? Math.max(0, inp.winding.ratedVrms) : 0;
+  const va = (standardRatedV ?? fittedV) * ratedA * halves;
   const maxKeyDownRms = Math.max(0, ...inp.corners.filter((c) => c.load === 'keyDown').map((c) => c.secondaryRmsA));
   // Ampere-turn balance: primary current = secondary current x turns ratio (V_NL / V_mains); magnetising current neglected
   const primaryReferredA = inp.mainsNominalV > 0 ? (noLoadVrms(inp.winding) / inp.mainsNominalV) * maxKeyDownRms * Math.sqrt(halves) : 0;
@@ -97,7 +98,7 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
   };
   const findings: Finding[] = [];
   const src = 'Simulated secondary RMS current against the winding rating; capacitor-input rectifiers draw ~1.6-2.2 x I_dc RMS (ref §4.1)';
-  if (inp.winding.ratedA > 0) {
+  if (inp.winding.ratedA > 0 && Number.isFinite(inp.winding.ratedA)) {
     const base = { rule: 'transformer.current', subject: inp.winding.name, unit: 'A', source: src, limit: inp.winding.ratedA };
     if (thermalRmsA > inp.winding.ratedA) findings.push({ ...base, value: thermalRmsA, severity: 'fail', message: `${inp.winding.name}: ${thermalRmsA.toFixed(2)} A RMS in CW operation exceeds its ${inp.winding.ratedA} A rating; the transformer will overheat. Choose at least ${ratedA.toFixed(2)} A${half}.` });
     else if (tuneUpRmsA > inp.winding.ratedA) findings.push({ ...base, value: tuneUpRmsA, severity: 'caution', message: `${inp.winding.name}: a continuous carrier draws ${tuneUpRmsA.toFixed(2)} A RMS, above its ${inp.winding.ratedA} A rating; keep tune-up short.` });

@@ -41,16 +41,19 @@ export interface ThermalResult {
 export function junctionTemperature(powerW: number, ambientC: number, mount: HeatsinkMount, freeAirKPerW = TO220_FREE_AIR_K_PER_W): ThermalResult {
   const p = Number.isFinite(powerW) ? Math.max(0, powerW) : 0;
   const ta = Number.isFinite(ambientC) ? ambientC : 25;
-  const targetC = TJ_DERATING_FRACTION * mount.tjMaxC;
-  const path = mount.thetaJcKPerW + mount.thetaCsKPerW;
-  const junctionC = mount.thetaSaKPerW === null ? null : ta + p * (path + mount.thetaSaKPerW);
+  const ok = (x: number, f: number) => (Number.isFinite(x) && x >= 0 ? x : f);
+  const tjMaxC = Number.isFinite(mount.tjMaxC) ? mount.tjMaxC : DEFAULT_TO220_MOUNT.tjMaxC;
+  const targetC = TJ_DERATING_FRACTION * tjMaxC;
+  const path = ok(mount.thetaJcKPerW, DEFAULT_TO220_MOUNT.thetaJcKPerW) + ok(mount.thetaCsKPerW, DEFAULT_TO220_MOUNT.thetaCsKPerW);
+  const sa = mount.thetaSaKPerW === null || !Number.isFinite(mount.thetaSaKPerW) ? null : Math.max(0, mount.thetaSaKPerW);
+  const junctionC = sa === null ? null : ta + p * (path + sa);
   const freeAirJunctionC = ta + p * freeAirKPerW;
   let required: number | null = null;
   if (p > 0) {
     const r = (targetC - ta) / p - path;
     required = r > 0 && Number.isFinite(r) ? r : null;
   }
-  return { powerW: p, ambientC: ta, junctionC, targetC, tjMaxC: mount.tjMaxC, requiredThetaSaKPerW: required, needsHeatsink: freeAirJunctionC > targetC, freeAirJunctionC };
+  return { powerW: p, ambientC: ta, junctionC, targetC, tjMaxC, requiredThetaSaKPerW: required, needsHeatsink: freeAirJunctionC > targetC, freeAirJunctionC };
 }
 
 const SOURCE_7 = 'Thermal series path Tj = Ta + P(θjc+θcs+θsa); derating to 0.8 Tj,max (reference values §7)';

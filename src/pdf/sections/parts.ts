@@ -1,0 +1,93 @@
+// Costed parts list grouped by stage, with stage subtotals, shipping and totals per build and per kit;
+// and one packing sheet per kit for a group build.
+import type { Project } from '../../core/model';
+import type { CostReport } from '../../core/cost/report-types';
+import { formatMoney } from '../../core/cost/money';
+import { GREY, FAIL, type Column, type Layout, type Row } from '../layout';
+import { notComputed } from './common';
+
+const FLAG_WORDS: Record<string, string> = {
+  'unknown-part': 'unknown part',
+  'unknown-stage': 'unknown stage',
+  'bad-qty': 'bad quantity',
+  'zero-qty': 'none needed',
+  'no-offer': 'no supplier offer',
+  'no-price': 'no usable price',
+  'no-rate': 'no exchange rate',
+};
+
+export function partsList(l: Layout, project: Project, cost: CostReport | null): void {
+  l.heading('Costed parts list');
+  if (!cost) return notComputed(l, 'Costing');
+  const money = (c: number) => formatMoney(c, cost.currency);
+  l.text(`${cost.kits} kit${cost.kits === 1 ? '' : 's'}; prices in ${cost.currency}. ${cost.methodNote}`, { sizePt: 8.5, color: GREY, afterPt: 6 });
+  const columns: Column[] = [
+    { header: 'Refs', width: 0.1 },
+    { header: 'Description', width: 0.33 },
+    { header: 'Per rig', width: 0.07, align: 'right' },
+    { header: 'Order', width: 0.07, align: 'right' },
+    { header: 'Supplier / SKU', width: 0.2 },
+    { header: 'Unit', width: 0.1, align: 'right' },
+    { header: 'Line', width: 0.13, align: 'right' },
+  ];
+  const byId = new Map(cost.lines.map((x) => [x.lineId, x]));
+  const rows: Row[] = [];
+  for (const st of cost.stages) {
+    rows.push({ cells: [st.name, '', '', '', '', '', ''], bold: true, shade: true });
+    for (const id of st.lineIds) {
+      const x = byId.get(id);
+      if (!x) continue;
+      const flags = x.flags.map((f) => FLAG_WORDS[f] ?? f).join(', ');
+      const desc = flags ? `${x.description || x.partId} [${flags}]` : x.description;
+      const unit = x.unitPriceCents !== null && x.offerCurrency ? formatMoney(x.unitPriceCents, x.offerCurrency) : '—';
+      rows.push({
+        cells: [x.refs, desc, String(x.qtyPerRig), String(x.orderQty), x.supplier ? `${x.supplier} ${x.sku ?? ''}` : 'unpriced', unit, x.supplier ? money(x.lineCostCents) : '—'],
+        color: x.flags.some((f) => f !== 'zero-qty') ? FAIL : undefined,
+      });
+    }
+    rows.push({ cells: ['', `Subtotal ${st.name}`, '', '', '', '', money(st.partsCents)], bold: true });
+  }
+  l.table(columns, rows);
+
+  l.heading('Totals', 2, 80);
+  const totals: Row[] = [];
+  for (const s of cost.suppliers) totals.push({ cells: [`${s.supplier} (${s.lineCount} lines)`, money(s.partsCents), money(s.shippingCents)] });
+  totals.push({ cells: ['Parts and shipping', money(cost.totals.partsCents), money(cost.totals.shippingCents)], bold: true, shade: true });
+  l.table([{ header: 'Supplier', width: 0.6 }, { header: 'Parts', width: 0.2, align: 'right' }, { header: 'Shipping', width: 0.2, align: 'right' }], totals);
+  const sum: Row[] = [{ cells: ['Build total', money(cost.totals.buildCents)], bold: true }];
+  if (cost.totals.perKitCents !== null) sum.push({ cells: [`Per kit (${cost.kits} kits, shipping shared)`, money(cost.totals.perKitCents)], bold: true });
+  if (cost.totals.perKitPartsCents !== null) sum.push({ cells: ['Per kit, parts only', money(cost.totals.perKitPartsCents)] });
+  if (cost.suggestedSavingsCents > 0) sum.push({ cells: ['Possible saving by buying up to the next price break', money(cost.suggestedSavingsCents)] });
+  if (cost.totals.unpricedLines > 0) sum.push({ cells: [`Unpriced lines left out of the totals`, String(cost.totals.unpricedLines)], color: FAIL });
+  l.table([{ header: 'Total', width: 0.7 }, { header: cost.currency, width: 0.3, align: 'right' }], sum);
+  for (const n of cost.notes) l.text(`• ${n}`, { sizePt: 7.5, color: GREY, afterPt: 1 });
+  void project;
+}
+
+/** One page per kit with tick boxes, for a group build (kits > 1). */
+export function packingSheets(l: Layout, project: Project, cost: CostReport | null): number {
+  if (project.kits <= 1) return 0;
+  const partById = new Map(project.parts.map((p) => [p.id, p]));
+  const stageName = new Map(project.stages.map((s) => [s.id, s.name]));
+  const lines = project.bom.filter((b) => b.qtyPerRig > 0);
+  for (let k = 1; k <= project.kits; k++) {
+    l.newPage();
+    l.heading(`Packing sheet — kit ${k} of ${project.kits}`, 1, 80);
+    l.text('Builder: ______________________   Packed by: ____________   Checked by: ____________', { sizePt: 9.5, afterPt: 8 });
+    const rows: Row[] = lines.map((b) => ({
+      cells: ['', String(b.qtyPerRig), b.refs, partById.get(b.partId)?.description ?? b.partId, b.stageId ? (stageName.get(b.stageId) ?? '') : 'General'],
+    }));
+    l.table(
+      [
+        { header: '✓', width: 0.05, tick: true },
+        { header: 'Qty', width: 0.06, align: 'right' },
+        { header: 'Refs', width: 0.12 },
+        { header: 'Part', width: 0.52 },
+        { header: 'Stage', width: 0.25 },
+      ],
+      rows,
+    );
+    l.text(`${lines.length} lines. Spares and attrition stock stay with the organiser${cost ? ` (ordered for the whole build: ${cost.lines.reduce((a, x) => a + x.orderQty, 0)} pieces)` : ''}.`, { sizePt: 8, color: GREY });
+  }
+  return project.kits;
+}

@@ -1,0 +1,94 @@
+// RF findings: PA, low-pass filter (components, turns, |S21| plot), harmonics, T/R relay, exposure.
+import type { RfReport } from '../../core/rf/report';
+import { GREY, FAIL, CAUTION, type Layout, type Row } from '../layout';
+import { plot, BLUE, ORANGE } from '../plot';
+import { findingsList, fv, keyValues, notComputed } from './common';
+
+export function rfSection(l: Layout, rf: RfReport | null): void {
+  l.newPage();
+  l.heading('RF design');
+  if (!rf) return notComputed(l, 'RF design');
+  for (const s of rf.stages) {
+    if (s.pa) {
+      const p = s.pa;
+      l.heading(`${s.stageName}: final amplifier`, 2);
+      keyValues(l, [
+        ['Output', `${fv(p.outputW, 'W')} (${fv(p.outputDbm, 'dBm')}), ${fv(p.vsReferenceDb, 'dB')} vs. reference (${p.vsReferenceSUnits.toFixed(1)} S-units)`],
+        ['Supply', `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')}, DC input ${fv(p.dcInputW, 'W')}, efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`],
+        ['Load', `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
+        ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')}`],
+        ['Heat', `${fv(p.thermal.dissipationTotalW, 'W')} key-down in all devices; junction ${fv(p.thermal.tjAverageC, '°C')} average, ${fv(p.thermal.tjContinuousC, '°C')} continuous (target ≤ ${fv(p.thermal.tjTargetC, '°C')}); heatsink ≤ ${fv(p.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for tune-up`],
+      ], 110, 8.5);
+    }
+    if (s.lpf) {
+      l.heading(`${s.stageName}: low-pass filter`, 2, 120);
+      const d = s.lpf.design;
+      if (!d) {
+        l.text('Filter not designed: see the findings below.', { color: GREY });
+      } else {
+        l.text(`${d.response === 'chebyshev' ? `Chebyshev, ${d.rippleDb} dB ripple` : 'Butterworth'}, order ${d.order}, ${d.form}; cutoff ${fv(d.cutoffHz, 'Hz')} (${d.cutoffSource}); ${fv(d.r0Ohm, 'Ω')}. Core: ${d.coreName}. Shunt capacitors see up to ${fv(s.lpf.capacitorPeakV, 'V')} peak.`, { sizePt: 8.5, afterPt: 5 });
+        const rows: Row[] = d.elements.map((e) => {
+          const cap = e.kind === 'shunt-capacitor';
+          const unit = cap ? 'F' : 'H';
+          return { cells: [`${cap ? 'C' : 'L'}${e.index}`, cap ? 'shunt capacitor' : 'series inductor', fv(e.idealValue, unit), cap ? e.capacitorPartsF.map((c) => fv(c, 'F')).join(' + ') : `${e.turns ?? '—'} turns`, fv(e.builtValue, unit), `${(e.errorFraction * 100).toFixed(1)} %`] };
+        });
+        l.table([{ header: 'Part', width: 0.08 }, { header: 'Kind', width: 0.2 }, { header: 'Ideal', width: 0.15, align: 'right' }, { header: 'Fit', width: 0.27 }, { header: 'As built', width: 0.15, align: 'right' }, { header: 'Error', width: 0.15, align: 'right' }], rows);
+      }
+      const a = s.lpf.analysis;
+      if (a) {
+        plot(l, {
+          title: `${s.stageName}: |S21| as built, with component losses`,
+          xLabel: 'frequency (MHz)',
+          yLabel: '|S21| (dB)',
+          xLog: true,
+          yMin: -80,
+          yMax: 5,
+          xTick: (v) => (v / 1e6).toPrecision(2).replace(/\.0$/, ''),
+          yTick: (v) => v.toFixed(0),
+          series: [{ label: '|S21| (dB)', xs: a.sweep.map((p) => p.frequencyHz), ys: a.sweep.map((p) => p.s21Db), color: BLUE }],
+          markers: [{ x: rf.frequencyHz, label: 'f' }, ...a.harmonics.map((h) => ({ x: h.frequencyHz, label: `${h.n}f` }))],
+          heightPt: 150,
+        });
+        keyValues(l, [['Passband', `worst loss ${fv(a.bandMaxLossDb, 'dB')}, worst SWR ${a.bandMaxSwr.toFixed(2)} across ${fv(a.bandLowHz, 'Hz', 5)}–${fv(a.bandHighHz, 'Hz', 5)}`]], 110, 8.5);
+      }
+    }
+    if (s.relay) {
+      const r = s.relay;
+      l.heading(`${s.stageName}: T/R relay`, 2);
+      keyValues(l, [
+        ['RF on the contacts', `${fv(r.rfPeakV, 'V')} peak, ${fv(r.rfRmsA, 'A')} RMS at SWR ${r.swr} (rated ${fv(r.ratedPeakV, 'V')} peak${r.ratedIsRf ? ', RF rating' : ', DC rating'})`],
+        ['Receiver leakage', `${fv(r.receiverPowerDbm, 'dBm')} during transmit`],
+        ['Timing', `T/R delay minus (operate + bounce) = ${fv(r.hotSwitchMarginS, 's')}${r.hotSwitchMarginS < 0 ? ': RF reaches moving contacts' : ''}; dot ${fv(r.dotS, 's')}`],
+      ], 110, 8.5);
+    }
+  }
+  harmonics(l, rf);
+  exposure(l, rf);
+  l.heading('All RF findings', 2);
+  findingsList(l, rf.findings);
+}
+
+function harmonics(l: Layout, rf: RfReport): void {
+  const h = rf.harmonics;
+  l.heading('Harmonics at the antenna', 2, 100);
+  if (!h) return notComputed(l, 'Harmonics');
+  l.text(`Rule: ${h.ruleTitle} — ${fv(h.requiredDb, 'dB')} below ${fv(h.fundamentalW, 'W')}${h.ruleFromMemory ? ' (from memory; check the current text)' : ''}. Source: ${h.ruleSource}`, { sizePt: 8.5, afterPt: 4 });
+  const rows: Row[] = h.rows.map((x) => ({
+    cells: [`${x.n}`, fv(x.frequencyHz, 'Hz'), fv(x.paLevelDbc, 'dBc'), fv(x.filterAttenuationDb, 'dB'), fv(x.predictedDbc, 'dBc'), x.worstPredictedDbc !== null ? fv(x.worstPredictedDbc, 'dBc') : '—', fv(x.marginDb, 'dB')],
+    color: x.severity === 'fail' ? FAIL : x.severity === 'caution' ? CAUTION : undefined,
+  }));
+  l.table([{ header: 'n', width: 0.06 }, { header: 'Frequency', width: 0.16, align: 'right' }, { header: 'At PA', width: 0.15, align: 'right' }, { header: 'Filter', width: 0.15, align: 'right' }, { header: 'Predicted', width: 0.16, align: 'right' }, { header: 'Worst (tolerances)', width: 0.18, align: 'right' }, { header: 'Margin', width: 0.14, align: 'right' }], rows);
+  void ORANGE;
+}
+
+function exposure(l: Layout, rf: RfReport): void {
+  const e = rf.exposure;
+  l.heading('RF exposure', 2, 80);
+  if (!e) return notComputed(l, 'RF exposure');
+  keyValues(l, [
+    ['Power', `${fv(e.peakPowerW, 'W')} key-down, ${fv(e.averagePowerW, 'W')} time-averaged, EIRP ${fv(e.eirpW, 'W')}`],
+    ['Minimum distance', `${e.controlledDistanceM !== null ? fv(e.controlledDistanceM, 'm', 2) : 'outside the table'} controlled (you); ${e.generalDistanceM !== null ? fv(e.generalDistanceM, 'm', 2) : 'outside the table'} general public${e.groundReflection ? ', ground reflection included' : ''}`],
+    ['Near field', `inside ${fv(e.nearFieldDistanceM, 'm', 2)} the figures are estimates only${e.farFieldValid ? '' : ' (a distance above lies inside it)'}`],
+  ], 110, 8.5);
+  l.text(e.caution, { sizePt: 8.5, color: CAUTION });
+}

@@ -1,0 +1,93 @@
+// Supply design summary: transformer, reservoirs, fuses, bleeders, regulators, heatsinks, battery runtime,
+// the rectifier waveform plot, and the supply's findings. Reads the supply report only.
+import type { SupplyReport, RectifiedRailReport, RegulatedRailReport, BatteryRailReport } from '../../core/power/report-types';
+import { GREY, type Layout, type Row } from '../layout';
+import { plot, BLUE, ORANGE } from '../plot';
+import { findingsList, fv, keyValues, notComputed } from './common';
+
+export function supplySection(l: Layout, supply: SupplyReport | null): void {
+  l.newPage();
+  l.heading('Power supply design');
+  if (!supply) return notComputed(l, 'Supply design');
+  if (supply.mains) keyValues(l, [['Mains', `${fv(supply.mains.nominalV, 'V')} nominal, ${fv(supply.mains.lowV, 'V')} low, ${fv(supply.mains.highV, 'V')} high, ${fv(supply.mains.frequencyHz, 'Hz')}`], ['Keying duty (heating)', `${Math.round(supply.keyingDuty * 100)} %`]]);
+  for (const t of supply.transformers) {
+    l.heading(`Transformer: ${t.name} (${t.construction})`, 2);
+    const rows: Row[] = t.windings.map((w) => ({ cells: [w.windingName, fv(w.minimumRatedV, 'V'), fv(w.standardRatedV, 'V'), fv(w.ratedA, 'A'), fv(w.tuneUpRmsA, 'A'), fv(w.va, 'VA')] }));
+    l.table([{ header: 'Winding', width: 0.3 }, { header: 'Min. rated', width: 0.14, align: 'right' }, { header: 'Standard', width: 0.14, align: 'right' }, { header: 'Rated current', width: 0.14, align: 'right' }, { header: 'Tune-up RMS', width: 0.14, align: 'right' }, { header: 'VA', width: 0.14, align: 'right' }], rows);
+    keyValues(l, [['Transformer VA', `${fv(t.thermalVA, 'VA')} at the thermal load → ${t.standardVA !== null ? fv(t.standardVA, 'VA') + ' standard' : 'beyond the standard list'} (${fv(t.tuneUpVA, 'VA')} with a continuous carrier)`], ['Primary current', fv(t.primaryA, 'A')]]);
+  }
+  if (supply.primary) {
+    const f = supply.primary.fuse;
+    keyValues(l, [['Primary fuse', `${f.ratedA !== null ? fv(f.ratedA, 'A') : 'beyond the series'} ${f.characteristic} (load ${fv(f.loadA, 'A')} × ${f.factor})${supply.primary.fittedA !== null ? `; fitted ${fv(supply.primary.fittedA, 'A')}` : ''}`]]);
+  }
+  for (const r of supply.rails) {
+    if (r.kind === 'rectified') rectified(l, r);
+    else if (r.kind === 'regulated') regulated(l, r);
+    else battery(l, r);
+  }
+  l.heading('All supply findings', 2);
+  findingsList(l, supply.findings);
+}
+
+function recommendations(l: Layout, r: { recommendations: { topic: string; text: string; reasoning: string }[] }): void {
+  for (const rec of r.recommendations) {
+    l.text(`${rec.topic}: ${rec.text}`, { sizePt: 8.5, bold: true, afterPt: 0 });
+    l.text(rec.reasoning, { sizePt: 8, color: GREY, indentPt: 10, afterPt: 3 });
+  }
+}
+
+function rectified(l: Layout, r: RectifiedRailReport): void {
+  l.heading(`${r.railName} (${r.topology} rectifier)`, 2, 120);
+  l.text(`Required minimum at the ripple trough: ${fv(r.requiredMinV, 'V')} (${r.requirementNote})`, { sizePt: 8.5, color: GREY, afterPt: 4 });
+  const rows: Row[] = r.corners.map((c) => ({ cells: [c.label, fv(c.loadA, 'A'), fv(c.noLoadPeakV, 'V'), fv(c.dcMeanV, 'V'), fv(c.ripplePpV, 'V'), fv(c.troughV, 'V'), fv(c.headroomMarginV, 'V')], bold: c.id === r.worstVoltageCornerId }));
+  l.table([{ header: 'Corner', width: 0.31 }, { header: 'Load', width: 0.11, align: 'right' }, { header: 'No load', width: 0.115, align: 'right' }, { header: 'Mean', width: 0.115, align: 'right' }, { header: 'Ripple p-p', width: 0.115, align: 'right' }, { header: 'Trough', width: 0.115, align: 'right' }, { header: 'Margin', width: 0.12, align: 'right' }], rows, 8);
+  const res = r.reservoir;
+  const b = r.bleeder;
+  keyValues(l, [
+    ['Reservoir', `${fv(res.fittedF, 'F')} fitted${res.minimumF !== null ? `; ${fv(res.minimumF, 'F')} needed (${fv(res.standardF, 'F')} standard)` : ''}; rated ≥ ${fv(res.recommendedRatedV, 'V')} (peak ${fv(res.noLoadPeakHighV, 'V')}); ripple current ${fv(res.thermalRippleA, 'A')} RMS (${fv(res.tuneUpRippleA, 'A')} tune-up)`],
+    ['Rail fuse', `${r.fuse.ratedA !== null ? fv(r.fuse.ratedA, 'A') : 'beyond the series'} ${r.fuse.characteristic} (load ${fv(r.fuse.loadA, 'A')} × ${r.fuse.factor})`],
+    ['Bleeder', `${b.fittedOhm !== null ? `${fv(b.fittedOhm, 'Ω')} fitted: below ${fv(b.thresholdV, 'V')} in ${fv(b.fittedTimeS, 's')}` : 'none fitted'}; suggested ${fv(b.suggestedOhm, 'Ω')} ${b.suggestedW !== null ? `(${fv(b.suggestedW, 'W')})` : ''}; stored ${fv(b.storedJ, 'J')}`],
+    ...(r.winding ? ([['Winding', `${fv(r.winding.standardRatedV, 'V')} ${fv(r.winding.ratedA, 'A')} (peak ${fv(r.winding.peakA, 'A')})`]] as [string, string][]) : []),
+  ], 110, 8.5);
+  recommendations(l, r);
+  const w = r.waveform;
+  const worst = r.corners.find((c) => c.id === r.worstVoltageCornerId);
+  plot(l, {
+    title: `${r.railName}: rail voltage and winding current, ${worst?.label ?? 'worst corner'}`,
+    xLabel: 'time (ms)',
+    yLabel: 'V / A',
+    xTick: (v) => (v * 1000).toFixed(0),
+    yTick: (v) => v.toFixed(0),
+    series: [
+      { label: 'rail voltage (V)', xs: w.timeS, ys: w.outputV, color: BLUE },
+      { label: 'winding current (A)', xs: w.timeS, ys: w.windingA, color: ORANGE },
+    ],
+    heightPt: 140,
+  });
+  findingsList(l, r.findings, true);
+}
+
+function regulated(l: Layout, r: RegulatedRailReport): void {
+  l.heading(`${r.railName} (${r.regulator} regulator)`, 2, 100);
+  const rows: Row[] = r.corners.map((c) => ({ cells: [c.label, fv(c.outputA, 'A'), fv(c.inputTroughV, 'V'), fv(c.headroomV, 'V'), fv(c.dissipationW, 'W')], bold: c.id === r.worstVoltageCornerId }));
+  l.table([{ header: 'Corner', width: 0.4 }, { header: 'Output', width: 0.15, align: 'right' }, { header: 'Input trough', width: 0.15, align: 'right' }, { header: 'Headroom', width: 0.15, align: 'right' }, { header: 'Dissipation', width: 0.15, align: 'right' }], rows, 8);
+  const t = r.thermal;
+  const kv: [string, string][] = [['Output', `${fv(r.outputV, 'V')}, dropout ${fv(r.dropoutV, 'V')}`], ['Dissipation', `${fv(r.thermalDissipationW, 'W')} thermal load, ${fv(r.tuneUpDissipationW, 'W')} tune-up`]];
+  if (t) kv.push(['Heatsink', t.needsHeatsink ? `needed: at most ${fv(t.requiredThetaSaKPerW, 'K/W')}; junction ${t.junctionC !== null ? fv(t.junctionC, '°C') : 'no heatsink chosen'} (target ≤ ${fv(t.targetC, '°C')})` : `none needed (free air ${fv(t.freeAirJunctionC, '°C')})`]);
+  keyValues(l, kv, 110, 8.5);
+  recommendations(l, r);
+  findingsList(l, r.findings, true);
+}
+
+function battery(l: Layout, r: BatteryRailReport): void {
+  l.heading(`${r.railName} (battery)`, 2, 80);
+  keyValues(l, [
+    ['Voltage', `${fv(r.fullV, 'V')} full, ${fv(r.endV, 'V')} end, ${fv(r.loadedEndV, 'V')} at end under key-down load (need ≥ ${fv(r.requiredMinV, 'V')})`],
+    ['Average current', `${fv(r.averageA, 'A')} (receive ${Math.round(r.receiveFraction * 100)} % of the time)`],
+    ['Runtime', `about ${fv(r.runtimeS / 3600, '', 2)} h on the usable capacity`],
+    ['Battery fuse', `${r.fuse.ratedA !== null ? fv(r.fuse.ratedA, 'A') : 'beyond the series'} ${r.fuse.characteristic}, at the battery terminal`],
+  ], 110, 8.5);
+  recommendations(l, r);
+  findingsList(l, r.findings, true);
+  void GREY;
+}

@@ -1,0 +1,53 @@
+import { describe, it, expect, beforeAll } from 'vitest';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { DEMO_PROJECTS } from '../seed-demo/index';
+import { toProjectFile } from '../src/io/project-file';
+
+const dir = mkdtempSync(join(tmpdir(), 'rw-cli-'));
+const cli = (args: string[], env: Record<string, string> = {}) =>
+  spawnSync(process.execPath, ['scripts/rigwright.mjs', ...args], { encoding: 'utf8', env: { ...process.env, ...env }, timeout: 60_000 });
+
+describe('command line', () => {
+  const file = join(dir, 'club.json');
+  beforeAll(() => writeFileSync(file, toProjectFile(DEMO_PROJECTS[0], '2026-12-01T00:00:00Z')));
+
+  it('evaluates the exported demo as a table', () => {
+    const r = cli(['evaluate', file]);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('Current budget');
+    expect(r.stdout).toMatch(/13\.8 V signal rail\s+13\.9 V\s+83 mA\s+106 mA\s+206 mA/);
+  });
+
+  it('evaluates as JSON with the documented keys', () => {
+    const r = cli(['evaluate', file, '--json']);
+    expect(r.status).toBe(0);
+    const json = JSON.parse(r.stdout);
+    expect(json.format).toBe('rigwright-evaluation');
+    expect(json.formatVersion).toBe(1);
+    const rail = json.budget.rails.find((x: { railId: string }) => x.railId === 'rail-13v8');
+    expect(rail.outputA.keyDown).toBeCloseTo(0.206, 9);
+    expect(Array.isArray(json.findings)).toBe(true);
+  });
+
+  it('refuses a broken file with a message and exit code 2', () => {
+    const bad = join(dir, 'bad.json');
+    writeFileSync(bad, '{"format":"rigwright-project","formatVersion":1,"project":{"name":""}}');
+    const r = cli(['evaluate', bad]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('project.name');
+  });
+
+  it('imports into and exports from a database', () => {
+    const env = { DATABASE_URL: `file:${join(dir, 'cli.db')}` };
+    const imp = cli(['import', file], env);
+    expect(imp.status).toBe(0);
+    const id = /as (\S+)/.exec(imp.stdout)![1];
+    const exp = cli(['export', '--id', id, '--out', join(dir, 'back.json')], env);
+    expect(exp.status).toBe(0);
+    const again = cli(['evaluate', join(dir, 'back.json'), '--json']);
+    expect(JSON.parse(again.stdout).project.name).toBe(DEMO_PROJECTS[0].name);
+  });
+});

@@ -1,0 +1,96 @@
+import { describe, it, expect } from 'vitest';
+import { demoApp } from '../helpers/app';
+import { loadProject } from '../../src/db/projects';
+
+const ID = 'demo-club-30m';
+
+describe('overview page', () => {
+  it('shows the stages in build order and the budget per rail and mode', async () => {
+    const { get } = await demoApp();
+    const res = await get(`/projects/${ID}`);
+    expect(res.status).toBe(200);
+    const html = await res.text();
+    expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
+    expect(html).toContain('Direct-conversion receiver');
+    expect(html.indexOf('Direct-conversion receiver')).toBeLessThan(html.indexOf('Push-pull MOSFET final'));
+    // 13.8 V rail key-down total, by hand: 12 + 18 + 160 + 4 + 12 mA = 206 mA
+    expect(html).toMatch(/data-rail="rail-13v8" data-mode="keyDown"><strong>206 mA/);
+  });
+
+  it('an htmx edit of a current returns the partial with the new total', async () => {
+    const { post, database } = await demoApp();
+    const res = await post(`/projects/${ID}/stages/st-drv/loads`, { version: '1', l0_receive: '0', l0_keyUp: '60 mA', l0_keyDown: '260m' }, { 'HX-Request': 'true' });
+    expect(res.status).toBe(200);
+    const html = await res.text();
+    expect(html.startsWith('<div id="overview">')).toBe(true);
+    expect(html).toMatch(/data-rail="rail-13v8" data-mode="keyDown"><strong>306 mA/);
+    const p = await loadProject(database.db, ID);
+    expect(p!.stages.find((s) => s.id === 'st-drv')!.loads[0].currentA.keyDown).toBeCloseTo(0.26, 12);
+    expect(p!.version).toBe(2);
+  });
+
+  it('without JavaScript an edit redirects back to the page (Post/Redirect/Get)', async () => {
+    const { post } = await demoApp();
+    const res = await post(`/projects/${ID}/stages/st-drv/loads`, { version: '1', l0_receive: '0', l0_keyUp: '60 mA', l0_keyDown: '200 mA' });
+    expect(res.status).toBe(303);
+    expect(res.headers.get('location')).toBe(`/projects/${ID}`);
+  });
+
+  it('a bad current is refused beside its field, keeps the typed text and saves nothing', async () => {
+    const { post, database } = await demoApp();
+    const before = await loadProject(database.db, ID);
+    const res = await post(`/projects/${ID}/stages/st-drv/loads`, { version: '1', l0_receive: '0', l0_keyUp: '60 mA', l0_keyDown: 'lots' }, { 'HX-Request': 'true' });
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain('value="lots"');
+    expect(html).toMatch(/key-down current &quot;lots&quot; is not understood|key-down current "lots" is not understood/);
+    expect(await loadProject(database.db, ID)).toEqual(before);
+  });
+
+  it('a stale version is refused with a clear message; the first save stays', async () => {
+    const { post, database } = await demoApp();
+    expect((await post(`/projects/${ID}/stages/st-rx/loads`, { version: '1', l0_receive: '50 mA', l0_keyUp: '12 mA', l0_keyDown: '12 mA' })).status).toBe(303);
+    const stale = await post(`/projects/${ID}/stages/st-rx/loads`, { version: '1', l0_receive: '70 mA', l0_keyUp: '12 mA', l0_keyDown: '12 mA' }, { 'HX-Request': 'true' });
+    expect(stale.status).toBe(409);
+    const html = await stale.text();
+    expect(html).toContain('changed in another tab or window');
+    expect(html).toContain('value="70 mA"');
+    const p = await loadProject(database.db, ID);
+    expect(p!.stages[0].loads[0].currentA.receive).toBeCloseTo(0.05, 12);
+  });
+
+  it('settings: mains tolerance out of range is refused', async () => {
+    const { post, database } = await demoApp();
+    const form = { version: '1', name: 'X', notes: '', frequency: '10.11 MHz', power: '20 W', supplyKind: 'mains', mainsV: '120 V', mainsHz: '60 Hz', mainsLow: '80', mainsHigh: '10', ambient: '35', duty: '40', kits: '8', currency: 'usd' };
+    const res = await post(`/projects/${ID}/settings`, form);
+    expect(res.status).toBe(422);
+    expect(await res.text()).toContain('Low mains tolerance must be at most 50');
+    expect((await loadProject(database.db, ID))!.name).not.toBe('X');
+    const ok = await post(`/projects/${ID}/settings`, { ...form, mainsLow: '10', mains: '230', mainsV: '230 V', mainsHz: '50 Hz' });
+    expect(ok.status).toBe(303);
+    const p = await loadProject(database.db, ID);
+    expect(p!.mains).toEqual({ nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 });
+    expect(p!.currency).toBe('USD');
+  });
+
+  it('adds, reorders and deletes stages', async () => {
+    const { post, database } = await demoApp();
+    expect((await post(`/projects/${ID}/stages`, { version: '1', kind: 'other', name: 'Frequency counter' })).status).toBe(303);
+    let p = (await loadProject(database.db, ID))!;
+    const added = p.stages[p.stages.length - 1];
+    expect(added.name).toBe('Frequency counter');
+    expect((await post(`/projects/${ID}/stages/${added.id}/move`, { version: '2', direction: 'up' })).status).toBe(303);
+    p = (await loadProject(database.db, ID))!;
+    expect(p.stages[p.stages.length - 2].id).toBe(added.id);
+    expect((await post(`/projects/${ID}/stages/${added.id}/delete`, { version: '3' })).status).toBe(303);
+    p = (await loadProject(database.db, ID))!;
+    expect(p.stages.some((s) => s.id === added.id)).toBe(false);
+  });
+
+  it('an unknown project is a 404 page', async () => {
+    const { get } = await demoApp();
+    const res = await get('/projects/nope');
+    expect(res.status).toBe(404);
+    expect(await res.text()).toContain('Not found');
+  });
+});

@@ -1,0 +1,254 @@
+// RF results: PA, low-pass filter (ideal vs fitted vs as-wound), |S21| plot, harmonics against the rule,
+// T/R relay checks, RF exposure distances and the findings. Renders only what evaluateRf computed.
+import type { FC } from 'hono/jsx';
+import { raw } from 'hono/html';
+import type { Finding } from '../../src/core/findings';
+import type { PaResult } from '../../src/core/rf/pa';
+import type { LpfStageResult, RfReport } from '../../src/core/rf/report';
+import type { RelayResult } from '../../src/core/rf/tr-relay';
+import { formatValue as fv } from '../../src/core/units';
+import { filterPlotSvg } from '../plots/filter-plot';
+
+const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
+const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
+
+const KV: FC<{ rows: [string, string][] }> = ({ rows }) => (
+  <table class="grid kv">
+    <tbody>
+      {rows.map(([k, v]) => (
+        <tr>
+          <th scope="row">{k}</th>
+          <td>{v}</td>
+        </tr>
+      ))}
+    </tbody>
+  </table>
+);
+
+const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => (
+  <div class="rf-pa">
+    <h3>{name}: final amplifier</h3>
+    <KV
+      rows={[
+        ['Output', `${fv(pa.outputW, 'W')} = ${fv(pa.outputDbm, 'dBm')} = ${fv(pa.outputDbw, 'dBW')}`],
+        ['Against reference', `${fv(pa.vsReferenceDb, 'dB')} (${pa.vsReferenceSUnits.toFixed(1)} S-units at 6 dB each)`],
+        ['Supply', `${fv(pa.railV, 'V')} (saturation drop ${fv(pa.saturationV, 'V')})`],
+        ['Turns ratio (secondary : full primary)', `${pa.turnsRatio.toFixed(3)} (${pa.turnsRatioSource})${pa.idealTurnsRatio !== null ? `, exact for target ${pa.idealTurnsRatio.toFixed(3)}` : ''}`],
+        ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
+        ['Efficiency', `${pct(pa.efficiency)} (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'})`],
+        ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} (bias idle included)`],
+        ['Peak drain voltage / device current', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
+        ['Dissipation', `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`],
+        ['Heatsink needed per device (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
+        ['Junction with fitted heatsink', pa.thermal.tjAverageC === null ? 'no heatsink chosen' : `${fv(pa.thermal.tjAverageC, '°C')} keying, ${fv(pa.thermal.tjContinuousC, '°C')} continuous`],
+      ]}
+    />
+    {pa.ratioOptions.length > 0 ? (
+      <table class="grid ratios">
+        <caption>Practical transformer ratios (primary : secondary turns) and the power each gives</caption>
+        <thead>
+          <tr>
+            <th>Turns</th>
+            <th class="num">Secondary / primary</th>
+            <th class="num">Drain load</th>
+            <th class="num">Output</th>
+          </tr>
+        </thead>
+        <tbody>
+          {pa.ratioOptions.map((o) => (
+            <tr class={o.turnsRatio === pa.turnsRatio ? 'chosen' : ''}>
+              <td>{o.label}{o.turnsRatio === pa.turnsRatio ? ' ✓' : ''}</td>
+              <td class="num">{o.turnsRatio.toFixed(3)}</td>
+              <td class="num">{fv(o.primaryOhm, 'Ω')}</td>
+              <td class="num">{fv(o.outputW, 'W')}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    ) : null}
+  </div>
+);
+
+const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageId: string }> = ({ name, lpf, report, stageId }) => {
+  const d = lpf.design;
+  const a = lpf.analysis;
+  const mc = lpf.monteCarlo;
+  const svg = filterPlotSvg(report, stageId);
+  return (
+    <div class="rf-lpf">
+      <h3>{name}: low-pass filter</h3>
+      {lpf.errors.length > 0 ? (
+        <ul class="field-errors">
+          {lpf.errors.map((e) => (
+            <li data-field={e.field}>{e.message}</li>
+          ))}
+        </ul>
+      ) : null}
+      {d ? (
+        <>
+          <p class="explain">
+            {d.response === 'chebyshev' ? `Chebyshev, ${d.rippleDb} dB ripple (cutoff = ripple edge)` : 'Butterworth (cutoff = 3 dB point)'}, order {d.order},{' '}
+            {d.form}, cutoff {fv(d.cutoffHz, 'Hz')} ({d.cutoffSource === 'band-rule' ? 'chosen from the band' : 'entered'}), {fv(d.r0Ohm, 'Ω')}. Core: {d.coreName} (AL{' '}
+            {fv(d.coreAlHPerTurn2, 'H')}/turn²). Shunt capacitors see up to {fv(lpf.capacitorPeakV, 'V')} peak.
+          </p>
+          <table class="grid lpf-parts">
+            <thead>
+              <tr>
+                <th>Part</th>
+                <th class="num">g</th>
+                <th class="num">Ideal</th>
+                <th>Fitted / wound</th>
+                <th class="num">As built</th>
+                <th class="num">Error</th>
+              </tr>
+            </thead>
+            <tbody>
+              {d.elements.map((e) => {
+                const cap = e.kind === 'shunt-capacitor';
+                const unit = cap ? 'F' : 'H';
+                return (
+                  <tr>
+                    <td>{cap ? `C${e.index} (shunt)` : `L${e.index} (series)`}</td>
+                    <td class="num">{e.g.toFixed(4)}</td>
+                    <td class="num">{fv(e.idealValue, unit)}</td>
+                    <td>{cap ? e.capacitorPartsF.map((c) => fv(c, 'F', 2)).join(' ∥ ') : `${e.turns} turns`}</td>
+                    <td class="num">{fv(e.builtValue, unit)}</td>
+                    <td class="num">{pct(e.errorFraction)}</td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </>
+      ) : null}
+      {a ? (
+        <KV
+          rows={[
+            ['At the operating frequency', `loss ${fv(a.atOperating.lossDb, 'dB')}, input SWR ${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} of heat`],
+            ['Across the band', `${fv(a.bandLowHz, 'Hz', 5)} – ${fv(a.bandHighHz, 'Hz', 5)}: worst loss ${fv(a.bandMaxLossDb, 'dB')}, worst SWR ${a.bandMaxSwr.toFixed(2)}`],
+            ...a.harmonics.map((h): [string, string] => {
+              const m = mc?.harmonics.find((x) => x.n === h.n);
+              return [`Attenuation at ${h.n}f (${fv(h.frequencyHz, 'Hz')})`, `${fv(h.attenuationDb, 'dB')}${m ? `; tolerances: worst ${fv(m.worstAttenuationDb, 'dB')}, ${mc?.percentile}th percentile ${fv(m.percentileAttenuationDb, 'dB')}` : ''}`];
+            }),
+            ...(mc ? [['Monte Carlo', `${mc.trials} trials, seed ${mc.seed}, each part uniform within its tolerance`] as [string, string]] : []),
+          ]}
+        />
+      ) : null}
+      {svg ? <figure class="plot">{raw(svg)}</figure> : null}
+    </div>
+  );
+};
+
+const RelayTable: FC<{ name: string; r: RelayResult }> = ({ name, r }) => (
+  <div class="rf-relay">
+    <h3>{name}: T/R relay</h3>
+    <KV
+      rows={[
+        ['RF on the contacts', `${fv(r.rfPeakV, 'V')} peak (${fv(r.rfRmsV, 'V')} RMS), ${fv(r.rfRmsA, 'A')} RMS at SWR ${r.swr} and ${fv(r.powerW, 'W')}`],
+        ...(r.peakWithHarmonicsV !== null ? [['With harmonics (before the filter, upper bound)', fv(r.peakWithHarmonicsV, 'V')] as [string, string]] : []),
+        ['Rating compared', `${fv(r.ratedPeakV, 'V')} peak (${r.ratedIsRf ? 'RF rating' : 'DC rating: no RF rating entered'})`],
+        ['Receiver input during transmit', `${fv(r.receiverPowerW, 'W')} (${fv(r.receiverPowerDbm, 'dBm')})`],
+        ['Timing', `dot ${fv(r.dotS, 's')}; transmit delay minus (operate + bounce) = ${fv(r.hotSwitchMarginS, 's')}`],
+      ]}
+    />
+  </div>
+);
+
+const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
+  const h = report.harmonics;
+  if (!h) return <p class="explain">Harmonics not computed: see the findings.</p>;
+  return (
+    <div class="rf-harmonics">
+      <h3>Harmonics at the antenna</h3>
+      <p class="explain">
+        Rule: {h.ruleTitle}
+        {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')}. Odd
+        harmonics at the PA from the square-wave series (1/n); even harmonics from the push-pull balance residual (or 1/n single-ended).
+      </p>
+      <table class="grid harmonics">
+        <thead>
+          <tr>
+            <th class="num">n</th>
+            <th class="num">Frequency</th>
+            <th class="num">At PA</th>
+            <th class="num">Filter</th>
+            <th class="num">Filter worst</th>
+            <th class="num">Predicted</th>
+            <th class="num">Margin</th>
+            <th class="num">Worst margin</th>
+            <th>Check</th>
+          </tr>
+        </thead>
+        <tbody>
+          {h.rows.map((x) => (
+            <tr data-harmonic={x.n}>
+              <td class="num">{x.n}</td>
+              <td class="num">{fv(x.frequencyHz, 'Hz')}</td>
+              <td class="num">{fv(x.paLevelDbc, 'dBc')}<span class="sub">{x.paLevelBasis}</span></td>
+              <td class="num">{fv(x.filterAttenuationDb, 'dB')}</td>
+              <td class="num">{fv(x.worstFilterAttenuationDb, 'dB')}</td>
+              <td class="num">{fv(x.predictedDbc, 'dBc')}</td>
+              <td class="num">{fv(x.marginDb, 'dB')}</td>
+              <td class="num">{fv(x.worstMarginDb, 'dB')}</td>
+              <td><span class={sevClass(x.severity)}>{x.severity}</span></td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+};
+
+const Exposure: FC<{ report: RfReport }> = ({ report }) => {
+  const e = report.exposure;
+  if (!e) return null;
+  return (
+    <div class="rf-exposure">
+      <h3>RF exposure (far-field estimate)</h3>
+      <KV
+        rows={[
+          ['Time-averaged power', `${fv(e.averagePowerW, 'W')} from ${fv(e.peakPowerW, 'W')} key-down; EIRP ${fv(e.eirpW, 'W')}, ERP ${fv(e.erpW, 'W')}`],
+          ['General public (uncontrolled)', `${fv(e.generalDistanceM, 'm')} (limit ${fv(e.limitGeneralWPerM2, 'W')}/m²)`],
+          ['You and your household (controlled)', `${fv(e.controlledDistanceM, 'm')} (limit ${fv(e.limitControlledWPerM2, 'W')}/m²)`],
+          ['Near-field boundary λ/2π', `${fv(e.nearFieldDistanceM, 'm')}${e.farFieldValid ? '' : ': the distances above lie inside it and are estimates only'}`],
+          ['Ground reflection', e.groundReflection ? 'included (factor 2.56)' : 'not included'],
+          ['US exemption (47 CFR 1.1307(b)(3)(i)(C))', e.exempt === null ? '—' : e.exempt ? `exempt for people at ${fv(e.nearFieldDistanceM, 'm')} or more (threshold ${fv(e.exemptionThresholdW, 'W')} ERP)` : `evaluate for people closer than ${fv(e.exemptBeyondM, 'm')}`],
+        ]}
+      />
+      <p class="caution">{e.caution}</p>
+    </div>
+  );
+};
+
+export const RfFindings: FC<{ findings: Finding[] }> = ({ findings }) => (
+  <ul class="findings">
+    {findings.map((f) => (
+      <li data-rule={f.rule}>
+        <span class={sevClass(f.severity)}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="sub">({f.source})</span>
+      </li>
+    ))}
+  </ul>
+);
+
+export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
+  <section class="card" id="rf-results">
+    <h2>RF design</h2>
+    <p class="summary-line">
+      {fv(report.frequencyHz, 'Hz', 5)}, {fv(report.outputPowerW, 'W')} at the output (target {fv(report.targetPowerW, 'W')})
+    </p>
+    {report.inputErrors.length > 0 ? (
+      <ul class="field-errors">
+        {report.inputErrors.map((e) => (
+          <li data-field={e.field}>{e.message}</li>
+        ))}
+      </ul>
+    ) : null}
+    {report.stages.map((s) =>
+      s.pa ? <PaTable name={s.stageName} pa={s.pa} /> : s.lpf ? <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} /> : s.relay ? <RelayTable name={s.stageName} r={s.relay} /> : null,
+    )}
+    <Harmonics report={report} />
+    <Exposure report={report} />
+    <h3>Findings</h3>
+    <RfFindings findings={report.findings} />
+  </section>
+);
