@@ -82,6 +82,7 @@ export const TransformerCard: FC<{ project: Project; t: Transformer; failed?: Fa
         <Version version={project.version} />
         <FormErrors state={addState} />
         <div class="row">
+          <span class="row-label">Add a winding:</span>
           <WindingFields idp={`aw-${t.id}`} state={addState} />
           <button type="submit">Add winding</button>
         </div>

@@ -50,7 +50,7 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
         bleeders, and follow your local electrical code; these figures are planning aids, not a safety approval. Mains
         voltage and frequency are set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
       </p>
-      <div class="columns">
+      <div class="supply-sections">
         <section>
           <h2>Transformers</h2>
           {project.supply.transformers.length ? (
