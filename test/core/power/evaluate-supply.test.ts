@@ -4,7 +4,7 @@ import fc from 'fast-check';
 import { evaluateSupply } from '../../../src/core/power/evaluate-supply';
 import { computeBudget } from '../../../src/core/budget';
 import { DEMO_PROJECTS } from '../../../seed-demo/index';
-import type { Project } from '../../../src/core/model';
+import type { Project, RectifiedRail } from '../../../src/core/model';
 import type { RectifiedRailReport, RegulatedRailReport } from '../../../src/core/power/report-types';
 import { flat, refProject, regulator13v8 } from './fixture';
 import { nonFinitePaths } from './helpers';
@@ -76,7 +76,7 @@ describe('random and absurd inputs never throw and never give NaN', () => {
         const [v, a, c, esr, load, duty, reg, vf, rd, capV, capA, fuse, bleed, thetaSa, tjMax, drop] = n;
         const p = refProject({
           rails: [
-            { ...refProject().supply.rails[0], topology, reservoirF: c, esrOhm: esr, diodeDropV: vf, diodeResistanceOhm: rd, capacitorRatedV: capV, capacitorRippleA: capA, fuseA: fuse, bleederOhm: bleed, ripplePpTargetV: reg },
+            { ...(refProject().supply.rails[0] as RectifiedRail), topology, reservoirF: c, esrOhm: esr, diodeDropV: vf, diodeResistanceOhm: rd, capacitorRatedV: capV, capacitorRippleA: capA, fuseA: fuse, bleederOhm: bleed, ripplePpTargetV: reg },
             { ...regulator13v8, dropoutV: drop, mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: thetaSa, tjMaxC: tjMax } },
           ],
           primaryFuseA: fuse,
