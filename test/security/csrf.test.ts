@@ -1,7 +1,7 @@
 // Cross-site form posts are refused on every state-changing route the app registers (hono csrf()),
 // and the refusal writes nothing. Routes are read from app.routes, so new pages are covered too.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { makeApp, postForm, rowCounts, type TestApp } from '../helpers/app';
+import { makeApp, postForm, rowCounts, type TestApp } from '../helpers/test-app';
 import { appRoutes, STATE_CHANGING, DEMO_ID } from '../helpers/routes';
 import { loadProject } from '../../src/db/projects';
 

@@ -2,7 +2,7 @@
 // Payloads reach fields two ways: through the forms (create, rename, settings, add stage, a refused
 // current) and through an imported project file whose every free-text field carries one.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { makeApp, postForm, type TestApp } from '../helpers/app';
+import { makeApp, postForm, type TestApp } from '../helpers/test-app';
 import { appRoutes } from '../helpers/routes';
 import { formByAction, stageIds } from '../helpers/html';
 import { withPayloads, MARKUP_PAYLOADS, RAW_MARKERS, ESCAPED_SCRIPT, FORMULA_PAYLOAD } from '../helpers/payloads';

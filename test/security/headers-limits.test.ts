@@ -1,6 +1,6 @@
 // Secure headers, the body limit, refused imports and basic auth, through app.request().
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { makeApp, postForm, rowCounts, ORIGIN, type TestApp } from '../helpers/app';
+import { makeApp, postForm, rowCounts, ORIGIN, type TestApp } from '../helpers/test-app';
 import { BODY_LIMIT_BYTES } from '../../src/app';
 import { IMPORT_LIMIT_BYTES } from '../../src/web/routes/projects';
 import { DEMO_PROJECTS } from '../../seed-demo/index';
