@@ -34,12 +34,14 @@ export const MAX_EXACT_LIMIT = 24;
 
 /** Cost of buying every line from the cheapest supplier in `open`; null when a line is not covered. */
 export function evaluateSubset(input: PlanInput, open: readonly boolean[]): PlanResult | null {
+  const openList: number[] = [];
+  for (let s = 0; s < open.length; s++) if (open[s]) openList.push(s);
   const assignment: number[] = [];
   let parts = 0;
   for (const row of input.lineCosts) {
     let best = -1;
-    for (let s = 0; s < row.length; s++) {
-      if (open[s] && Number.isFinite(row[s]) && (best < 0 || row[s] < row[best])) best = s;
+    for (const s of openList) {
+      if (Number.isFinite(row[s]) && (best < 0 || row[s] < row[best])) best = s;
     }
     if (best < 0) return null;
     assignment.push(best);
