@@ -1,7 +1,8 @@
 // Current budget: what every rail must deliver in each operating mode, propagated up the supply tree.
-import type { Project, PerMode, Rail, RegulatedRail, RegulatorSetting, Mode } from './model';
+import type { Project, PerMode, Rail, RegulatedRail, Mode } from './model';
 import { MODES } from './model';
 import type { Finding } from './findings';
+import { regulatorOutputV, regulatorInputCurrentA } from './power/regulator';
 
 export interface LoadContribution {
   stageId: string;
@@ -53,35 +54,6 @@ export interface ComputedLoad {
 const zero = (): PerMode => ({ receive: 0, keyUp: 0, keyDown: 0 });
 const add = (a: PerMode, b: PerMode): PerMode => ({ receive: a.receive + b.receive, keyUp: a.keyUp + b.keyUp, keyDown: a.keyDown + b.keyDown });
 const map = (a: PerMode, f: (v: number, m: Mode) => number): PerMode => ({ receive: f(a.receive, 'receive'), keyUp: f(a.keyUp, 'keyUp'), keyDown: f(a.keyDown, 'keyDown') });
-
-/** Regulator output voltage from its setting. */
-export function regulatorOutputV(setting: RegulatorSetting, quiescentA = 0): number {
-  switch (setting.method) {
-    case 'fixed':
-      return setting.nominalV;
-    // Source: adjustable three-terminal regulator datasheets: Vout = Vref (1 + R2/R1) + I_adj R2
-    case 'adjustable':
-      return setting.vrefV * (1 + setting.r2Ohm / setting.r1Ohm) + setting.adjustA * setting.r2Ohm;
-    // Common practice (circuit notes): each forward-biased silicon diode in the common lead adds its drop
-    case 'raised-diodes':
-      return setting.nominalV + setting.diodes * setting.diodeDropV;
-    // Source: fixed regulator application notes: Vout = Vxx (1 + R2/R1) + Iq R2 (Iq leaves the common pin)
-    case 'raised-resistor':
-      return setting.nominalV * (1 + setting.r2Ohm / setting.r1Ohm) + quiescentA * setting.r2Ohm;
-  }
-}
-
-/** Current a regulator draws from its input for a given output current. */
-export function regulatorInputA(rail: RegulatedRail, outputA: number, inputV: number): number {
-  if (rail.regulator === 'switching') {
-    const eff = rail.efficiency && rail.efficiency > 0 ? rail.efficiency : 0.85;
-    const outV = regulatorOutputV(rail.setting, rail.quiescentA);
-    // Energy balance: Pin = Pout / efficiency (efficiency taken at the lowest input voltage)
-    return inputV > 0 ? (outV * outputA) / (eff * inputV) + rail.quiescentA : 0;
-  }
-  // Linear series regulator: input current = output current + quiescent (ground-pin) current
-  return outputA + rail.quiescentA;
-}
 
 /** Nominal (no-load-ish, nominal mains) voltage of a rail, for budgets and display. */
 export function railNominalV(rail: Rail, project: Project): number {
@@ -153,7 +125,7 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
       if (depth.get(child.id)! < 0) continue;
       const childOut = outputOf(child);
       const inV = inputVOverride[r.id] ?? railLowestV(r, project);
-      const childIn = map(childOut, (v) => regulatorInputA(child, v, inV));
+      const childIn = map(childOut, (v) => regulatorInputCurrentA(child, v, inV));
       input.set(child.id, childIn);
       fromRegs = add(fromRegs, childIn);
     }

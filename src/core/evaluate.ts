@@ -1,15 +1,80 @@
-// evaluate(project) -> report: the one place the core's pieces are put together, in a fixed order.
-import type { Project } from './model';
+// evaluate(project) -> report: the one place the core's pieces are put together, in a fixed order:
+// PA key-down current and relay coils -> current budget -> supply design -> (PA rail voltage settles) -> RF -> cost.
+import type { Project, PerMode } from './model';
 import { computeBudget, type BudgetReport, type ComputedLoad } from './budget';
 import { sortFindings, type Finding } from './findings';
+import { evaluateSupply } from './power/evaluate-supply';
+import type { SupplyReport } from './power/report-types';
+import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
+import { costProject, type CostReport } from './cost';
 
 export interface EvaluationReport {
   budget: BudgetReport;
+  /** null when the project has no rails */
+  supply: SupplyReport | null;
+  rf: RfReport;
+  cost: CostReport;
+  /** PA rail voltage used for the PA model, per rail id (V): nominal-mains key-down trough when simulated */
+  paRailV: Record<string, number>;
+  /** every finding of every section, most severe first */
   findings: Finding[];
 }
 
-export function evaluate(project: Project): EvaluationReport {
-  const computed: ComputedLoad[] = [];
-  const budget = computeBudget(project, computed);
-  return { budget, findings: sortFindings([...budget.findings]) };
+export interface EvaluateOptions {
+  onMonteCarloProgress?: (done: number, total: number) => void;
+}
+
+/** Voltage a PA sees per rail: the supply's nominal-mains key-down trough when simulated, else the budget's nominal. */
+function paRailVoltages(project: Project, budget: BudgetReport, supply: SupplyReport | null): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const s of project.stages) {
+    if (!s.pa) continue;
+    const id = s.pa.railId;
+    const simulated = supply?.rails.find((r) => r.railId === id);
+    if (simulated?.kind === 'rectified') {
+      const corner = simulated.corners.find((c) => c.mains === 'nominal' && c.load === 'keyDown');
+      if (corner && Number.isFinite(corner.troughV)) {
+        out[id] = corner.troughV;
+        continue;
+      }
+    }
+    if (simulated?.kind === 'battery') {
+      out[id] = budget.rails.find((r) => r.railId === id)?.nominalV ?? 0;
+      continue;
+    }
+    out[id] = budget.rails.find((r) => r.railId === id)?.nominalV ?? 0;
+  }
+  return out;
+}
+
+function computedLoads(project: Project, paRailV: Record<string, number>): ComputedLoad[] {
+  const loads: ComputedLoad[] = [];
+  for (const s of project.stages) {
+    if (s.pa && paRailV[s.pa.railId] !== undefined) {
+      const keyDown = paKeyDownCurrentA(s.pa, paRailV[s.pa.railId], project);
+      loads.push({ stageId: s.id, railId: s.pa.railId, currentA: { receive: 0, keyUp: 0, keyDown }, replaces: ['keyDown'] });
+    }
+    const coil = relayCoilLoads(s);
+    if (coil) loads.push({ stageId: s.id, railId: coil.railId, currentA: coil.currentA, replaces: [] });
+  }
+  return loads;
+}
+
+const railOutputs = (b: BudgetReport): Record<string, PerMode> => Object.fromEntries(b.rails.map((r) => [r.railId, r.outputA]));
+
+export function evaluate(project: Project, options: EvaluateOptions = {}): EvaluationReport {
+  // First pass: PA at the nominal rail voltage; second pass: at the simulated key-down trough.
+  // Two passes settle it: the trough moves by millivolts when the PA current is refined.
+  let budget = computeBudget(project, computedLoads(project, paRailVoltages(project, computeBudget(project), null)));
+  let supply = project.supply.rails.length ? evaluateSupply(project, railOutputs(budget)) : null;
+  let paRailV = paRailVoltages(project, budget, supply);
+  if (supply && Object.keys(paRailV).length) {
+    budget = computeBudget(project, computedLoads(project, paRailV));
+    supply = evaluateSupply(project, railOutputs(budget));
+    paRailV = paRailVoltages(project, budget, supply);
+  }
+  const rf = evaluateRf(project, { paRailV, onMonteCarloProgress: options.onMonteCarloProgress });
+  const cost = costProject(project);
+  const findings = sortFindings([...budget.findings, ...(supply?.findings ?? []), ...rf.findings, ...cost.findings]);
+  return { budget, supply, rf, cost, paRailV, findings };
 }

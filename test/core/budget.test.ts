@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { computeBudget, regulatorOutputV, regulatorInputA } from '../../src/core/budget';
+import { computeBudget } from '../../src/core/budget';
+import { regulatorOutputV, regulatorInputCurrentA as regulatorInputA } from '../../src/core/power/regulator';
 import { DEMO_PROJECTS } from '../../seed-demo/index';
 import type { Project, RegulatedRail } from '../../src/core/model';
 import { MODES } from '../../src/core/model';
