@@ -133,17 +133,17 @@ export const batterySchema = z
 /** Sentences naming everything that draws on rail `railId` (empty = free to delete). */
 export function railUsers(p: Project, railId: string): string[] {
   const out: string[] = [];
-  for (const r of p.supply.rails) if (r.kind === 'regulated' && r.parentId === railId) out.push(`rail "${r.name}" is fed from it`);
+  for (const r of p.supply.rails) if (r.kind === 'regulated' && r.parentId === railId) out.push(`rail “${r.name}” is fed from it`);
   for (const s of p.stages) {
-    if (s.loads.some((l) => l.railId === railId)) out.push(`stage "${s.name}" draws current from it`);
-    if (s.pa?.railId === railId) out.push(`the final amplifier "${s.name}" runs from it`);
-    if (s.relay?.coilRailId === railId) out.push(`the relay coil of "${s.name}" is powered from it`);
+    if (s.loads.some((l) => l.railId === railId)) out.push(`stage “${s.name}” draws current from it`);
+    if (s.pa?.railId === railId) out.push(`the final amplifier “${s.name}” runs from it`);
+    if (s.relay?.coilRailId === railId) out.push(`the relay coil of “${s.name}” is powered from it`);
   }
   return out;
 }
 
 export function windingUsers(p: Project, windingId: string): string[] {
-  return p.supply.rails.filter((r) => r.kind === 'rectified' && r.windingId === windingId).map((r) => `rail "${r.name}" is rectified from it`);
+  return p.supply.rails.filter((r) => r.kind === 'rectified' && r.windingId === windingId).map((r) => `rail “${r.name}” is rectified from it`);
 }
 
 export function transformerUsers(p: Project, transformerId: string): string[] {
@@ -166,5 +166,5 @@ export function possibleParents(p: Project, railId: string | null): Rail[] {
 }
 
 export function refusal(what: string, users: string[]): string {
-  return `${what} cannot be deleted while it is in use: ${users.join('; ')}. Change or delete those first.`;
+  return `${what.charAt(0).toUpperCase()}${what.slice(1)} cannot be deleted while it is in use: ${users.join('; ')}. Change or delete those first.`;
 }

@@ -1,0 +1,156 @@
+// Supply page through app.request(): add/edit/delete, refused input kept and nothing saved, stale version,
+// and deletes refused while something still uses the item.
+import { beforeEach, describe, expect, it } from 'vitest';
+import { buildApp } from '../../src/app';
+import { openDatabase, type Database } from '../../src/db/client';
+import { loadProject } from '../../src/db/projects';
+import { seedDemo } from '../../seed-demo/index';
+import type { Project, RegulatedRail, RectifiedRail } from '../../src/core/model';
+
+const ID = 'demo-club-30m';
+let database: Database;
+let app: ReturnType<typeof buildApp>;
+
+beforeEach(async () => {
+  database = await openDatabase('file::memory:');
+  await seedDemo(database, '2026-01-01T00:00:00.000Z');
+  app = buildApp({ database, now: () => new Date('2026-01-02T00:00:00.000Z') });
+});
+
+const stored = async (): Promise<Project> => (await loadProject(database.db, ID))!;
+
+function post(path: string, fields: Record<string, string>, htmx = false) {
+  const headers: Record<string, string> = { Origin: 'http://localhost', 'Content-Type': 'application/x-www-form-urlencoded' };
+  if (htmx) headers['HX-Request'] = 'true';
+  return app.request(`http://localhost${path}`, { method: 'POST', headers, body: new URLSearchParams(fields).toString() });
+}
+
+const base = `/projects/${ID}/supply`;
+
+describe('supply page', () => {
+  it('renders the supply tree with every transformer, winding and rail', async () => {
+    const res = await app.request(`http://localhost${base}`);
+    expect(res.status).toBe(200);
+    const html = await res.text();
+    expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
+    for (const name of ['T1 mains transformer', '16 V winding', '20 V winding', '13.8 V signal rail', 'PA rail (unregulated, ~24 V)']) expect(html).toContain(name);
+    expect(html).toContain('id="supply"');
+  });
+
+  it('adds a transformer and a winding, parsing engineering values', async () => {
+    const v = (await stored()).version;
+    let res = await post(`${base}/transformers`, { version: String(v), name: 'T2 auxiliary', construction: 'toroidal' });
+    expect(res.status).toBe(303);
+    const t2 = (await stored()).supply.transformers.find((t) => t.name === 'T2 auxiliary')!;
+    expect(t2.construction).toBe('toroidal');
+    res = await post(`${base}/transformers/${t2.id}/windings`, { version: String(v + 1), name: '9 V', ratedV: '9 V', ratedA: '350 mA', regulation: '12', resistance: '2R2' }, true);
+    expect(res.status).toBe(200);
+    expect(await res.text()).toContain('Saved.');
+    const w = (await stored()).supply.transformers.find((t) => t.id === t2.id)!.windings[0];
+    expect(w).toMatchObject({ name: '9 V', ratedVrms: 9, ratedA: 0.35, resistanceOhm: 2.2 });
+    expect(w.regulationFraction).toBeCloseTo(0.12, 12);
+  });
+
+  it('edits a rectified rail (4u7 style values, empty optional = null)', async () => {
+    const p = await stored();
+    const res = await post(`${base}/rails/rail-pa`, {
+      version: String(p.version), name: 'PA rail', windingId: 'w-20', topology: 'centre-tap', diodeDrop: '0.7', diodeR: '20m', reservoir: '10000u',
+      esr: '25 mΩ', bleeder: '', capV: '63 V', capRipple: '4 A', rippleTarget: '', margin: '0', fuse: '3.15 A',
+    }, true);
+    expect(res.status).toBe(200);
+    const r = (await stored()).supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
+    expect(r).toMatchObject({ name: 'PA rail', topology: 'centre-tap', diodeDropV: 0.7, bleederOhm: null, capacitorRatedV: 63, ripplePpTargetV: null, fuseA: 3.15 });
+    expect(r.reservoirF).toBeCloseTo(0.01, 12);
+    expect(r.diodeResistanceOhm).toBeCloseTo(0.02, 12);
+  });
+
+  it('edits a regulated rail to a fixed regulator raised by diodes, with heatsink θsa left to compute', async () => {
+    const p = await stored();
+    const res = await post(`${base}/rails/rail-13v8`, {
+      version: String(p.version), name: '13.8 V signal rail', parentId: 'rail-raw', regulator: 'linear', method: 'raised-diodes', nominalV: '12', diodes: '2', raiseDrop: '0.65',
+      vref: '', iadj: '', r1: '', r2: '', dropout: '2', quiescent: '5 mA', efficiency: '', maxOut: '1.5', maxIn: '35', thetaJc: '5', thetaCs: '1', thetaSa: '', tjMax: '125',
+    });
+    expect(res.status).toBe(303);
+    const r = (await stored()).supply.rails.find((x) => x.id === 'rail-13v8') as RegulatedRail;
+    expect(r.setting).toEqual({ method: 'raised-diodes', nominalV: 12, diodes: 2, diodeDropV: 0.65 });
+    expect(r.mount).toEqual({ thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 125 });
+  });
+
+  it('refuses a regulated rail fed from its own child (a loop) and an adjustable setting without R2', async () => {
+    const before = await stored();
+    const res = await post(`${base}/rails/rail-raw`, { version: String(before.version), name: 'x' }, true);
+    expect(res.status).toBe(422); // rail-raw is rectified: the rectified fields are required
+    const loop = await post(`${base}/rails/rail-13v8`, {
+      version: String(before.version), name: '13.8 V', parentId: 'rail-13v8', regulator: 'linear', method: 'adjustable', vref: '1.25', r1: '240', r2: '', dropout: '2', quiescent: '5m',
+    }, true);
+    expect(loop.status).toBe(422);
+    const html = await loop.text();
+    expect(html).toContain('R2: needed for this output setting');
+    const selfFed = await post(`${base}/rails/rail-13v8`, {
+      version: String(before.version), name: '13.8 V', parentId: 'rail-13v8', regulator: 'linear', method: 'fixed', nominalV: '12', dropout: '2', quiescent: '5m',
+    }, true);
+    expect(selfFed.status).toBe(422);
+    expect(await selfFed.text()).toContain('fed from this one (a loop)');
+    expect(await stored()).toEqual(before);
+  });
+
+  it('keeps the typed text beside the field and saves nothing when a value is not understood', async () => {
+    const before = await stored();
+    const res = await post(`${base}/windings/w-16`, { version: String(before.version), name: '16 V winding', ratedV: '16 volts-ish', ratedA: '1 A', regulation: '10', resistance: '' }, true);
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain('value="16 volts-ish"');
+    expect(html).toContain('Rated voltage &quot;16 volts-ish&quot; is not understood');
+    expect(html).toContain('Nothing was saved');
+    expect(await stored()).toEqual(before);
+  });
+
+  it('refuses a stale version with 409 and keeps the entries', async () => {
+    const before = await stored();
+    const res = await post(`${base}/fuse`, { version: String(before.version - 1 || 99), primaryFuse: '1.6 A' }, true);
+    expect(res.status).toBe(409);
+    const html = await res.text();
+    expect(html).toContain('changed in another tab');
+    expect(html).toContain('value="1.6 A"');
+    expect(await stored()).toEqual(before);
+  });
+
+  it('adds a rail fed from a rail and deletes it after the confirm page', async () => {
+    const v = (await stored()).version;
+    const res = await post(`${base}/rails`, { version: String(v), name: '9 V VXO rail', source: 'r:rail-13v8' });
+    expect(res.status).toBe(303);
+    const added = (await stored()).supply.rails.at(-1)!;
+    expect(added).toMatchObject({ kind: 'regulated', name: '9 V VXO rail', parentId: 'rail-13v8' });
+    expect(res.headers.get('location')).toContain(`open=${added.id}`);
+    const confirm = await app.request(`http://localhost${base}/rails/${added.id}/delete`);
+    expect(confirm.status).toBe(200);
+    expect(await confirm.text()).toContain('Yes, delete');
+    const del = await post(`${base}/rails/${added.id}/delete`, { version: String(v + 1) });
+    expect(del.status).toBe(303);
+    expect((await stored()).supply.rails.some((r) => r.id === added.id)).toBe(false);
+  });
+
+  it('refuses to delete a rail that stages and another rail use, naming them', async () => {
+    const before = await stored();
+    const confirm = await (await app.request(`http://localhost${base}/rails/rail-raw/delete`)).text();
+    expect(confirm).not.toContain('Yes, delete');
+    expect(confirm).toContain('rail “13.8 V signal rail” is fed from it');
+    const res = await post(`${base}/rails/rail-13v8/delete`, { version: String(before.version) });
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain('cannot be deleted while it is in use');
+    expect(html).toContain('stage “Direct-conversion receiver” draws current from it');
+    expect(html).toContain('the relay coil of “T/R relay and sequencer”');
+    expect(await stored()).toEqual(before);
+  });
+
+  it('refuses to delete a winding or transformer that a rectified rail uses', async () => {
+    const before = await stored();
+    const w = await post(`${base}/windings/w-20/delete`, { version: String(before.version) });
+    expect(w.status).toBe(422);
+    expect(await w.text()).toContain('rail “PA rail (unregulated, ~24 V)” is rectified from it');
+    const t = await post(`${base}/transformers/tr-main/delete`, { version: String(before.version) });
+    expect(t.status).toBe(422);
+    expect(await stored()).toEqual(before);
+  });
+});
