@@ -67,7 +67,7 @@ export function renderFilterPlot(d: FilterPlotData, widthPx = 720, heightPx = 38
   const x = (f: number) => m.l + ((Math.log10(f) - lo) / (hi - lo)) * w;
   const y = (db: number) => m.t + (Math.min(0, Math.max(yMin, db)) / yMin) * h;
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" class="plot filter-plot" viewBox="0 0 ${widthPx} ${heightPx}" role="img" aria-label="${esc(d.title)}: |S21| in dB against frequency">`);
+  out.push(`<svg xmlns="http://www.w3.org/2000/svg" class="plot filter-plot" viewBox="0 0 ${widthPx} ${heightPx}" font-family="sans-serif" role="img" aria-label="${esc(d.title)}: |S21| in dB against frequency">`);
   out.push(`<title>${esc(d.title)}</title>`);
   out.push(`<text x="${m.l}" y="18" font-size="13" font-weight="600">${esc(d.title)}</text>`);
   // band shading
