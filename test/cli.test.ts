@@ -18,7 +18,8 @@ describe('command line', () => {
     const r = cli(['evaluate', file]);
     expect(r.status).toBe(0);
     expect(r.stdout).toContain('Current budget');
-    expect(r.stdout).toMatch(/13\.8 V signal rail\s+13\.9 V\s+83 mA\s+106 mA\s+206 mA/);
+    // entered loads 83 / 106 / 206 mA plus the relay coil (36 mA in key-up and key-down)
+    expect(r.stdout).toMatch(/13\.8 V signal rail\s+13\.9 V\s+83 mA\s+142 mA\s+242 mA/);
   });
 
   it('evaluates as JSON with the documented keys', () => {
@@ -28,7 +29,7 @@ describe('command line', () => {
     expect(json.format).toBe('rigwright-evaluation');
     expect(json.formatVersion).toBe(1);
     const rail = json.budget.rails.find((x: { railId: string }) => x.railId === 'rail-13v8');
-    expect(rail.outputA.keyDown).toBeCloseTo(0.206, 9);
+    expect(rail.outputA.keyDown).toBeCloseTo(0.242, 9);
     expect(Array.isArray(json.findings)).toBe(true);
   });
 

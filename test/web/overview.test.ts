@@ -13,8 +13,8 @@ describe('overview page', () => {
     expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
     expect(html).toContain('Direct-conversion receiver');
     expect(html.indexOf('Direct-conversion receiver')).toBeLessThan(html.indexOf('Push-pull MOSFET final'));
-    // 13.8 V rail key-down total, by hand: 12 + 18 + 160 + 4 + 12 mA = 206 mA
-    expect(html).toMatch(/data-rail="rail-13v8" data-mode="keyDown"><strong>206 mA/);
+    // 13.8 V rail key-down total, by hand: entered 12 + 18 + 160 + 4 + 12 mA = 206 mA, plus the relay coil 36 mA = 242 mA
+    expect(html).toMatch(/data-rail="rail-13v8" data-mode="keyDown"><strong>242 mA/);
   });
 
   it('an htmx edit of a current returns the partial with the new total', async () => {
@@ -23,7 +23,7 @@ describe('overview page', () => {
     expect(res.status).toBe(200);
     const html = await res.text();
     expect(html.startsWith('<div id="overview">')).toBe(true);
-    expect(html).toMatch(/data-rail="rail-13v8" data-mode="keyDown"><strong>306 mA/);
+    expect(html).toMatch(/data-rail="rail-13v8" data-mode="keyDown"><strong>342 mA/); // 242 mA + 100 mA more driver current
     const p = await loadProject(database.db, ID);
     expect(p!.stages.find((s) => s.id === 'st-drv')!.loads[0].currentA.keyDown).toBeCloseTo(0.26, 12);
     expect(p!.version).toBe(2);
