@@ -63,7 +63,7 @@ describe('body limit', () => {
 });
 
 describe('import refusals', () => {
-  const importFile = (content: string | Uint8Array, name = 'project.json') => {
+  const importFile = (content: string | Uint8Array<ArrayBuffer>, name = 'project.json') => {
     const fd = new FormData();
     fd.set('file', new File([content], name, { type: 'application/json' }));
     return t.app.request('/import', { method: 'POST', headers: { Origin: ORIGIN }, body: fd });
@@ -109,14 +109,14 @@ describe('import refusals', () => {
 
 function badCurrentFile(): string {
   const p = structuredClone(DEMO_PROJECTS[0]);
-  const s = p.stages.findLast((x) => x.loads.length)!;
+  const s = [...p.stages].reverse().find((x) => x.loads.length > 0)!;
   s.loads[0].currentA.keyDown = 5000;
   return toProjectFile(p, '2026-01-01T00:00:00Z');
 }
 
 function danglingRailFile(): string {
   const p = structuredClone(DEMO_PROJECTS[0]);
-  p.stages.findLast((x) => x.loads.length)!.loads[0].railId = 'rail-missing';
+  [...p.stages].reverse().find((x) => x.loads.length > 0)!.loads[0].railId = 'rail-missing';
   return toProjectFile(p, '2026-01-01T00:00:00Z');
 }
 
