@@ -38,6 +38,8 @@ export interface Row {
   bold?: boolean;
   shade?: boolean;
   color?: RGB;
+  /** draw cells[0] across the whole table width (a group heading) */
+  span?: boolean;
 }
 
 export class Layout {
@@ -178,15 +180,18 @@ export class Layout {
       x += c.width * this.contentWidthPt;
     }
     const widthOf = (i: number) => columns[i].width * this.contentWidthPt - 2 * pad;
-    const drawRow = (cells: string[], bold: boolean, fill: RGB | null, color: RGB, isHeader: boolean) => {
-      const wrapped = cells.map((c, i) => (columns[i]?.tick && !isHeader ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, bold)));
+    const spanW = this.contentWidthPt - 2 * pad;
+    const wrapRow = (row: Row): string[][] =>
+      row.span ? [this.wrap(row.cells[0] ?? '', spanW, sizePt, row.bold)] : row.cells.map((c, i) => (columns[i]?.tick ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, row.bold)));
+    const drawRow = (cells: string[], bold: boolean, fill: RGB | null, color: RGB, isHeader: boolean, span = false) => {
+      const wrapped = span ? [this.wrap(cells[0] ?? '', spanW, sizePt, bold)] : cells.map((c, i) => (columns[i]?.tick && !isHeader ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, bold)));
       const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
       const top = this.yPt;
       if (fill) this.page.drawRectangle({ x: this.leftPt, y: top - h, width: this.contentWidthPt, height: h, color: fill });
       wrapped.forEach((lines, i) => {
         const col = columns[i];
         if (!col) return;
-        if (col.tick && !isHeader) {
+        if (col.tick && !isHeader && !span) {
           this.tickBox(xs[i] + pad, top - pad - sizePt, sizePt);
           return;
         }
@@ -205,12 +210,12 @@ export class Layout {
     this.ensure(headerH() + lineH + 2 * pad);
     header();
     for (const row of rows) {
-      const h = Math.max(...row.cells.map((c, i) => (columns[i]?.tick ? 1 : this.wrap(c ?? '', widthOf(i), sizePt, row.bold).length))) * lineH + 2 * pad;
+      const h = Math.max(...wrapRow(row).map((w) => w.length)) * lineH + 2 * pad;
       if (this.yPt - h < this.marginBottomPt) {
         this.newPage();
         header();
       }
-      drawRow(row.cells, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false);
+      drawRow(row.cells, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false, row.span);
     }
     this.yPt -= 8;
   }

@@ -46,7 +46,7 @@ export function plot(l: Layout, spec: PlotSpec): void {
   }
   const heightPt = spec.heightPt ?? 170;
   l.ensure(heightPt + 50);
-  l.text(spec.title, { bold: true, sizePt: 9.5, afterPt: 2 });
+  if (spec.title) l.text(spec.title, { bold: true, sizePt: 9.5, afterPt: 2 });
   const tx = (x: number) => (spec.xLog ? Math.log10(x) : x);
   let x0 = Math.min(...pts.map(([x]) => tx(x)));
   let x1 = Math.max(...pts.map(([x]) => tx(x)));

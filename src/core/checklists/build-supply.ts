@@ -22,7 +22,7 @@ function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] 
         const nl = r.corners.find((c) => c.id === 'nominal-receive') ?? r.corners[0];
         const kd = r.corners.find((c) => c.id === 'low-keyDown');
         items.push(measured(`${rail.name}: with no load at nominal mains expect about {v}.`, nl?.noLoadPeakV ?? null, 'V', `supply: ${nl?.label ?? 'no load'}`));
-        if (kd) items.push(measured(`${rail.name}: lowest point of the ripple at low mains, key-down, about {v} (must stay above ${fmt(r.requiredMinV, 'V')}).`, kd.troughV, 'V', `supply: ${kd.label}`, kd.headroomMarginV < 0 ? 'caution' : 'normal'));
+        if (kd) items.push(measured(`${rail.name}: lowest point of the ripple at low mains, key-down, about {v}${r.requiredMinV > 0 ? ` (must stay above ${fmt(r.requiredMinV, 'V')})` : ''}.`, kd.troughV, 'V', `supply: ${kd.label}`, kd.headroomMarginV < 0 ? 'caution' : 'normal'));
         if (r.bleeder.fittedTimeS !== null) items.push(measured(`Switch off and time the discharge: ${rail.name} should fall below ${fmt(r.bleeder.thresholdV, 'V')} within about {v}.`, r.bleeder.fittedTimeS, 's', 'supply: bleeder'));
       } else {
         items.push(measured(`${rail.name}: expect roughly {v} (supply design not computed).`, railNominalV(rail, project), 'V', 'budget: nominal rail voltage'));

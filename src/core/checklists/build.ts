@@ -19,7 +19,7 @@ export function buildChecklist(project: Project, report: ChecklistReport): Check
   const rf = rfView(report.rf);
   const sections: ChecklistSection[] = [supplySection(project, report)];
   for (const stage of stagesInBuildOrder(project)) {
-    const items = [...currentItems(report, stage), ...kindItems(project, report, stage, rf)];
+    const items = [...kindItems(project, report, stage, rf), ...currentItems(report, stage)];
     sections.push({ id: `stage:${stage.id}`, title: stage.name, stageId: stage.id, items });
   }
   sections.push({ id: 'station', title: 'Whole station', stageId: null, items: stationItems(project, report, rf) });
@@ -33,6 +33,9 @@ function currentItems(report: ChecklistReport, stage: Stage): ChecklistItem[] {
   for (const c of stageCurrents(report, stage.id, mode)) {
     if (stage.kind === 'final') continue; // the final's idle and key-down currents have their own lines
     items.push(measured(`With the stage fitted, the ${c.railName} current rises by about {v} ${modeWords}; much more means a fault: switch off and look.`, c.currentA, 'A', `budget: ${stage.name}, ${mode}`));
+  }
+  if (stage.kind === 'driver') {
+    for (const c of stageCurrents(report, stage.id, 'keyDown')) items.push(measured(`Key-down, the driver draws about {v} from ${c.railName}.`, c.currentA, 'A', `budget: ${stage.name}, key-down`));
   }
   return items;
 }
@@ -55,7 +58,6 @@ function kindItems(project: Project, report: ChecklistReport, stage: Stage, rf: 
     case 'driver':
       return [
         step('Terminate the driver output in a resistor of its design load (or fit the final with its bias at minimum) before keying.'),
-        ...stageCurrents(report, stage.id, 'keyDown').map((c) => measured(`Key-down, the driver draws about {v} from ${c.railName}.`, c.currentA, 'A', `budget: ${stage.name}, key-down`)),
       ];
     case 'lpf':
       return lpfItems(project, rf);

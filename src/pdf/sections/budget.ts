@@ -9,10 +9,10 @@ export function budgetSection(l: Layout, budget: BudgetReport): void {
   l.text('Current each rail must deliver (its own stages plus the regulators it feeds). Computed loads (PA key-down, relay coil) are marked *.', { sizePt: 8.5, color: GREY, afterPt: 6 });
   const rows: Row[] = [];
   for (const r of budget.rails) {
-    const indent = '   '.repeat(r.depth);
+    const indent = r.depth > 0 ? `${'›'.repeat(r.depth)} ` : '';
     rows.push({ cells: [`${indent}${r.name}`, fv(r.nominalV, 'V'), ...MODES.map((m) => fv(r.outputA[m], 'A'))], bold: true, shade: true });
-    for (const ld of r.loads) rows.push({ cells: [`${indent}   ${ld.stageName}${ld.computed ? ' *' : ''}`, '', ...MODES.map((m) => fv(ld.currentA[m], 'A'))] });
-    if (r.inputA) rows.push({ cells: [`${indent}   drawn from its source rail`, '', ...MODES.map((m) => fv(r.inputA![m], 'A'))], color: GREY });
+    for (const ld of r.loads) rows.push({ cells: [`– ${ld.stageName}${ld.computed ? ' *' : ''}`, '', ...MODES.map((m) => fv(ld.currentA[m], 'A'))] });
+    if (r.inputA) rows.push({ cells: ['– drawn from its source rail (regulator input)', '', ...MODES.map((m) => fv(r.inputA![m], 'A'))], color: GREY });
   }
   l.table(
     [

@@ -15,11 +15,11 @@ export function checklistPages(l: Layout, title: string, intro: string, sections
     if (s.items.length === 0) continue;
     l.heading(s.title, 2, 40);
     for (const item of s.items) {
-      const lines = l.wrap(item.text, textW, size, item.emphasis === 'caution');
+      const lines = l.wrap(item.text, textW, size);
       l.ensure(lines.length * lineH + 3);
       l.yPt -= lineH;
       l.tickBox(l.leftPt, l.yPt + 1, boxPt);
-      lines.forEach((line, i) => l.drawAt(line, textX, l.yPt - i * lineH + size * 0.28, size, item.emphasis === 'caution', item.emphasis === 'caution' ? CAUTION : INK));
+      lines.forEach((line, i) => l.drawAt(line, textX, l.yPt - i * lineH + size * 0.28, size, false, item.emphasis === 'caution' ? CAUTION : INK));
       l.yPt -= (lines.length - 1) * lineH + 3.5;
     }
     l.gap(3);

@@ -7,15 +7,17 @@ import { CAUTION, FAIL, GREY, INK, type Layout } from '../layout';
 export const fv = formatValue;
 
 /** Two-column key/value block without rules. */
-export function keyValues(l: Layout, rows: [string, string][], keyWidthPt = 150, sizePt = 9.5): void {
+export function keyValues(l: Layout, rows: [string, string][], keyWidthPt = 170, sizePt = 9.5): void {
   const lineH = sizePt * 1.35;
   for (const [k, v] of rows) {
+    const keys = l.wrap(k, keyWidthPt - 10, sizePt);
     const lines = l.wrap(v, l.contentWidthPt - keyWidthPt, sizePt);
-    l.ensure(lines.length * lineH);
+    const n = Math.max(keys.length, lines.length);
+    l.ensure(n * lineH);
     l.yPt -= lineH;
-    l.drawAt(k, l.leftPt, l.yPt + sizePt * 0.28, sizePt, false, GREY);
+    keys.forEach((line, i) => l.drawAt(line, l.leftPt, l.yPt - i * lineH + sizePt * 0.28, sizePt, false, GREY));
     lines.forEach((line, i) => l.drawAt(line, l.leftPt + keyWidthPt, l.yPt - i * lineH + sizePt * 0.28, sizePt, false, INK));
-    l.yPt -= (lines.length - 1) * lineH;
+    l.yPt -= (n - 1) * lineH + 1.5;
   }
   l.yPt -= 6;
 }

@@ -22,18 +22,18 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null):
   const money = (c: number) => formatMoney(c, cost.currency);
   l.text(`${cost.kits} kit${cost.kits === 1 ? '' : 's'}; prices in ${cost.currency}. ${cost.methodNote}`, { sizePt: 8.5, color: GREY, afterPt: 6 });
   const columns: Column[] = [
-    { header: 'Refs', width: 0.1 },
-    { header: 'Description', width: 0.33 },
-    { header: 'Per rig', width: 0.07, align: 'right' },
+    { header: 'Refs', width: 0.085 },
+    { header: 'Description', width: 0.34 },
+    { header: 'Per rig', width: 0.065, align: 'right' },
     { header: 'Order', width: 0.07, align: 'right' },
     { header: 'Supplier / SKU', width: 0.2 },
-    { header: 'Unit', width: 0.1, align: 'right' },
+    { header: 'Unit', width: 0.11, align: 'right' },
     { header: 'Line', width: 0.13, align: 'right' },
   ];
   const byId = new Map(cost.lines.map((x) => [x.lineId, x]));
   const rows: Row[] = [];
   for (const st of cost.stages) {
-    rows.push({ cells: [st.name, '', '', '', '', '', ''], bold: true, shade: true });
+    rows.push({ cells: [st.name], bold: true, shade: true, span: true });
     for (const id of st.lineIds) {
       const x = byId.get(id);
       if (!x) continue;
@@ -60,6 +60,8 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null):
   if (cost.suggestedSavingsCents > 0) sum.push({ cells: ['Possible saving by buying up to the next price break', money(cost.suggestedSavingsCents)] });
   if (cost.totals.unpricedLines > 0) sum.push({ cells: [`Unpriced lines left out of the totals`, String(cost.totals.unpricedLines)], color: FAIL });
   l.table([{ header: 'Total', width: 0.7 }, { header: cost.currency, width: 0.3, align: 'right' }], sum);
+  const notesPt = cost.notes.reduce((a, n) => a + l.wrap(`• ${n}`, l.contentWidthPt, 7.5).length * 9.75 + 1, 0);
+  l.ensure(Math.min(notesPt, 300));
   for (const n of cost.notes) l.text(`• ${n}`, { sizePt: 7.5, color: GREY, afterPt: 1 });
   void project;
 }

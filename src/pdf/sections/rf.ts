@@ -5,7 +5,6 @@ import { plot, BLUE, ORANGE } from '../plot';
 import { findingsList, fv, keyValues, notComputed } from './common';
 
 export function rfSection(l: Layout, rf: RfReport | null): void {
-  l.newPage();
   l.heading('RF design');
   if (!rf) return notComputed(l, 'RF design');
   for (const s of rf.stages) {

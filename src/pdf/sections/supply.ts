@@ -6,7 +6,6 @@ import { plot, BLUE, ORANGE } from '../plot';
 import { findingsList, fv, keyValues, notComputed } from './common';
 
 export function supplySection(l: Layout, supply: SupplyReport | null): void {
-  l.newPage();
   l.heading('Power supply design');
   if (!supply) return notComputed(l, 'Supply design');
   if (supply.mains) keyValues(l, [['Mains', `${fv(supply.mains.nominalV, 'V')} nominal, ${fv(supply.mains.lowV, 'V')} low, ${fv(supply.mains.highV, 'V')} high, ${fv(supply.mains.frequencyHz, 'Hz')}`], ['Keying duty (heating)', `${Math.round(supply.keyingDuty * 100)} %`]]);
@@ -46,24 +45,15 @@ function rectified(l: Layout, r: RectifiedRailReport): void {
   keyValues(l, [
     ['Reservoir', `${fv(res.fittedF, 'F')} fitted${res.minimumF !== null ? `; ${fv(res.minimumF, 'F')} needed (${fv(res.standardF, 'F')} standard)` : ''}; rated ≥ ${fv(res.recommendedRatedV, 'V')} (peak ${fv(res.noLoadPeakHighV, 'V')}); ripple current ${fv(res.thermalRippleA, 'A')} RMS (${fv(res.tuneUpRippleA, 'A')} tune-up)`],
     ['Rail fuse', `${r.fuse.ratedA !== null ? fv(r.fuse.ratedA, 'A') : 'beyond the series'} ${r.fuse.characteristic} (load ${fv(r.fuse.loadA, 'A')} × ${r.fuse.factor})`],
-    ['Bleeder', `${b.fittedOhm !== null ? `${fv(b.fittedOhm, 'Ω')} fitted: below ${fv(b.thresholdV, 'V')} in ${fv(b.fittedTimeS, 's')}` : 'none fitted'}; suggested ${fv(b.suggestedOhm, 'Ω')} ${b.suggestedW !== null ? `(${fv(b.suggestedW, 'W')})` : ''}; stored ${fv(b.storedJ, 'J')}`],
+    ['Bleeder', `${b.fittedOhm !== null ? `${fv(b.fittedOhm, 'Ω')} fitted: ${b.fittedTimeS !== null ? `below ${fv(b.thresholdV, 'V')} in ${fv(b.fittedTimeS, 's')}` : `the rail starts below ${fv(b.thresholdV, 'V')}`}` : 'none fitted'}; suggested ${fv(b.suggestedOhm, 'Ω')} ${b.suggestedW !== null ? `(${fv(b.suggestedW, 'W')})` : ''}; stored ${fv(b.storedJ, 'J')}`],
     ...(r.winding ? ([['Winding', `${fv(r.winding.standardRatedV, 'V')} ${fv(r.winding.ratedA, 'A')} (peak ${fv(r.winding.peakA, 'A')})`]] as [string, string][]) : []),
   ], 110, 8.5);
   recommendations(l, r);
   const w = r.waveform;
   const worst = r.corners.find((c) => c.id === r.worstVoltageCornerId);
-  plot(l, {
-    title: `${r.railName}: rail voltage and winding current, ${worst?.label ?? 'worst corner'}`,
-    xLabel: 'time (ms)',
-    yLabel: 'V / A',
-    xTick: (v) => (v * 1000).toFixed(0),
-    yTick: (v) => v.toFixed(0),
-    series: [
-      { label: 'rail voltage (V)', xs: w.timeS, ys: w.outputV, color: BLUE },
-      { label: 'winding current (A)', xs: w.timeS, ys: w.windingA, color: ORANGE },
-    ],
-    heightPt: 140,
-  });
+  const title = `${r.railName}: two mains cycles at ${worst?.label.toLowerCase() ?? 'the worst corner'}`;
+  plot(l, { title, xLabel: 'time (ms)', yLabel: 'rail (V)', xTick: (v) => (v * 1000).toFixed(0), yTick: (v) => v.toFixed(1), series: [{ label: 'rail voltage (V)', xs: w.timeS, ys: w.outputV, color: BLUE }], heightPt: 95 });
+  plot(l, { title: '', xLabel: 'time (ms)', yLabel: 'winding (A)', xTick: (v) => (v * 1000).toFixed(0), yTick: (v) => v.toFixed(1), series: [{ label: 'winding current (A)', xs: w.timeS, ys: w.windingA, color: ORANGE }], heightPt: 70 });
   findingsList(l, r.findings, true);
 }
 
