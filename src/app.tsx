@@ -13,6 +13,7 @@ import { projectRoutes } from './web/routes/projects';
 import { overviewRoutes } from './web/routes/overview';
 import { supplyRoutes } from './web/routes/supply';
 import { stageRoutes } from './web/routes/stage';
+import { rfRoutes } from './web/routes/rf';
 import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
@@ -61,6 +62,7 @@ export function buildApp(deps: Deps) {
   app.route('/', overviewRoutes(deps));
   app.route('/', stageRoutes(deps));
   app.route('/', supplyRoutes(deps));
+  app.route('/', rfRoutes(deps));
   app.route('/', partsRoutes(deps));
   app.route('/', bomRoutes(deps));
 
