@@ -1,0 +1,241 @@
+// Supply results: per rail the corners table, findings, recommendations (transformer, capacitor, fuses,
+// heatsink) and, for rectified rails, the waveform plot; then the transformers and the primary fuse.
+// Renders only what evaluateSupply computed; no maths beyond formatting.
+import type { FC } from 'hono/jsx';
+import type { Finding } from '../../src/core/findings';
+import type {
+  BatteryRailReport, Recommendation, RectifiedRailReport, RegulatedRailReport, SupplyReport, TransformerReport,
+} from '../../src/core/power/report-types';
+import { formatValue as fv } from '../../src/core/units';
+import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
+
+const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
+const pct = (x: number) => `${(x * 100).toFixed(0)} %`;
+
+export const FindingList: FC<{ findings: Finding[] }> = ({ findings }) =>
+  findings.length ? (
+    <ul class="findings">
+      {findings.map((f) => (
+        <li>
+          <span class={sevClass(f.severity)}>{f.severity}</span> {f.message} <span class="source">({f.source})</span>
+        </li>
+      ))}
+    </ul>
+  ) : (
+    <p class="hint">No findings.</p>
+  );
+
+const Recommendations: FC<{ items: Recommendation[] }> = ({ items }) =>
+  items.length ? (
+    <dl class="recommendations">
+      {items.map((r) => (
+        <>
+          <dt>
+            <strong>{r.topic}:</strong> {r.text}
+          </dt>
+          <dd>
+            {r.reasoning} <span class="source">({r.source})</span>
+          </dd>
+        </>
+      ))}
+    </dl>
+  ) : null;
+
+const Tag: FC<{ id: string; voltage: string; thermal: string }> = ({ id, voltage, thermal }) =>
+  id === voltage ? <span class="hint"> · sets headroom</span> : id === thermal ? <span class="hint"> · sets heating</span> : null;
+
+const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
+  <section class="card supply-rail" id={`supply-${rail.railId}`}>
+    <h3>
+      {rail.railName} <span class="hint">({rail.topology} rectifier; needs {fv(rail.requiredMinV, 'V')} at the trough: {rail.requirementNote})</span>
+    </h3>
+    <table class="grid corners">
+      <thead>
+        <tr>
+          <th scope="col">Corner</th>
+          <th class="num">Load</th>
+          <th class="num">Mean</th>
+          <th class="num">Trough</th>
+          <th class="num">Ripple p-p</th>
+          <th class="num">Peak / no-load</th>
+          <th class="num">Winding RMS</th>
+          <th class="num">Diode peak</th>
+          <th class="num">Cap. ripple RMS</th>
+          <th class="num">Conduction</th>
+          <th class="num">Margin</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rail.corners.map((c) => (
+          <tr class={c.id === rail.worstVoltageCornerId || c.id === rail.worstThermalCornerId ? 'worst' : ''}>
+            <th scope="row">
+              {c.label}
+              <Tag id={c.id} voltage={rail.worstVoltageCornerId} thermal={rail.worstThermalCornerId} />
+              {c.converged ? null : <span class="hint"> · not converged</span>}
+            </th>
+            <td class="num">{fv(c.loadA, 'A')}</td>
+            <td class="num">{fv(c.dcMeanV, 'V')}</td>
+            <td class="num">{fv(c.troughV, 'V')}</td>
+            <td class="num">{fv(c.ripplePpV, 'V')}</td>
+            <td class="num">
+              {fv(c.peakV, 'V')}
+              <span class="sub">{fv(c.noLoadPeakV, 'V')}</span>
+            </td>
+            <td class="num">{fv(c.secondaryRmsA, 'A')}</td>
+            <td class="num">{fv(c.diodePeakA, 'A')}</td>
+            <td class="num">{fv(c.capacitorRippleRmsA, 'A')}</td>
+            <td class="num">{pct(c.conductionFraction)}</td>
+            <td class="num">{fv(c.headroomMarginV, 'V')}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+    <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
+    <h4>Findings</h4>
+    <FindingList findings={rail.findings} />
+    <h4>Recommendations</h4>
+    <Recommendations items={rail.recommendations} />
+  </section>
+);
+
+const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
+  <section class="card supply-rail" id={`supply-${rail.railId}`}>
+    <h3>
+      {rail.railName}{' '}
+      <span class="hint">
+        ({rail.regulator} regulator, {fv(rail.outputV, 'V')} out, dropout {fv(rail.dropoutV, 'V')})
+      </span>
+    </h3>
+    <table class="grid corners">
+      <thead>
+        <tr>
+          <th scope="col">Corner</th>
+          <th class="num">Output</th>
+          <th class="num">Input current</th>
+          <th class="num">Input trough</th>
+          <th class="num">Input mean</th>
+          <th class="num">Headroom</th>
+          <th class="num">Dissipation</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rail.corners.map((c) => (
+          <tr class={c.id === rail.worstVoltageCornerId || c.id === rail.worstThermalCornerId ? 'worst' : ''}>
+            <th scope="row">
+              {c.label}
+              <Tag id={c.id} voltage={rail.worstVoltageCornerId} thermal={rail.worstThermalCornerId} />
+            </th>
+            <td class="num">{fv(c.outputA, 'A')}</td>
+            <td class="num">{fv(c.inputA, 'A')}</td>
+            <td class="num">{fv(c.inputTroughV, 'V')}</td>
+            <td class="num">{fv(c.inputMeanV, 'V')}</td>
+            <td class="num">{fv(c.headroomV, 'V')}</td>
+            <td class="num">{fv(c.dissipationW, 'W')}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+    {rail.thermal ? (
+      <p class="summary-line">
+        Heat: {fv(rail.thermalDissipationW, 'W')} in CW operation, {fv(rail.tuneUpDissipationW, 'W')} with a tune-up carrier; junction{' '}
+        {rail.thermal.junctionC !== null ? fv(rail.thermal.junctionC, '°C') : 'not known (no heatsink chosen)'} against a target of{' '}
+        {fv(rail.thermal.targetC, '°C')} (0.8 × {fv(rail.thermal.tjMaxC, '°C')}).
+      </p>
+    ) : null}
+    <h4>Findings</h4>
+    <FindingList findings={rail.findings} />
+    <h4>Recommendations</h4>
+    <Recommendations items={rail.recommendations} />
+  </section>
+);
+
+const BatteryCard: FC<{ rail: BatteryRailReport }> = ({ rail }) => (
+  <section class="card supply-rail" id={`supply-${rail.railId}`}>
+    <h3>{rail.railName}</h3>
+    <table class="grid kv">
+      <tbody>
+        <tr><th scope="row">Voltage window</th><td>{fv(rail.fullV, 'V')} full to {fv(rail.endV, 'V')} end ({fv(rail.loadedEndV, 'V')} under key-down load)</td></tr>
+        <tr><th scope="row">Needed by the regulators</th><td>{fv(rail.requiredMinV, 'V')}</td></tr>
+        <tr><th scope="row">Average current</th><td>{fv(rail.averageA, 'A')} ({pct(rail.receiveFraction)} receive)</td></tr>
+        <tr><th scope="row">Runtime</th><td>{(rail.runtimeS / 3600).toFixed(1)} h</td></tr>
+      </tbody>
+    </table>
+    <h4>Findings</h4>
+    <FindingList findings={rail.findings} />
+    <h4>Recommendations</h4>
+    <Recommendations items={rail.recommendations} />
+  </section>
+);
+
+const TransformerCard: FC<{ t: TransformerReport }> = ({ t }) => (
+  <div class="transformer-result">
+    <h4>
+      {t.name} <span class="hint">({t.construction})</span>
+    </h4>
+    <table class="grid">
+      <thead>
+        <tr>
+          <th scope="col">Winding</th>
+          <th class="num">Lowest rated V</th>
+          <th class="num">Standard V</th>
+          <th class="num">Current rating (CW)</th>
+          <th class="num">Tune-up RMS</th>
+          <th class="num">Peak</th>
+          <th class="num">VA</th>
+        </tr>
+      </thead>
+      <tbody>
+        {t.windings.map((w) => (
+          <tr>
+            <th scope="row">{w.windingName}{w.halves === 2 ? ' (per half)' : ''}</th>
+            <td class="num">{w.minimumRatedV !== null ? fv(w.minimumRatedV, 'V') : '—'}</td>
+            <td class="num">{w.standardRatedV !== null ? fv(w.standardRatedV, 'V') : '—'}</td>
+            <td class="num">{fv(w.ratedA, 'A')}</td>
+            <td class="num">{fv(w.tuneUpRmsA, 'A')}</td>
+            <td class="num">{fv(w.peakA, 'A')}</td>
+            <td class="num">{fv(w.va, 'VA')}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+    <p class="summary-line">
+      Total {fv(t.thermalVA, 'VA')} in CW operation ({fv(t.tuneUpVA, 'VA')} with a tune-up carrier): choose {t.standardVA !== null ? fv(t.standardVA, 'VA') : 'a larger transformer than the list holds'}. Primary current {fv(t.primaryA, 'A')}.
+    </p>
+  </div>
+);
+
+export const SupplyResults: FC<{ report: SupplyReport }> = ({ report }) => {
+  const inRails = new Set(report.rails.flatMap((r) => r.findings));
+  const general = report.findings.filter((f) => !inRails.has(f));
+  return (
+    <div class="supply-results">
+      <p class="summary-line">
+        {report.mains
+          ? `Mains ${fv(report.mains.lowV, 'V')} / ${fv(report.mains.nominalV, 'V')} / ${fv(report.mains.highV, 'V')} at ${fv(report.mains.frequencyHz, 'Hz')}. `
+          : 'No mains: battery or external DC supply. '}
+        Headroom is judged at the lowest voltage (low mains, key-down); heat at the highest (high mains, CW duty {pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.
+        {report.allConverged ? '' : ' Some simulations did not settle: their rows are marked.'}
+      </p>
+      <p class="caution-box">
+        Mains and charged capacitors can kill or burn: these are planning figures, not a safety approval. Fuse and earth the
+        supply, discharge reservoirs before touching, and follow your local electrical code and licensed practice.
+      </p>
+      {report.rails.map((r) => (r.kind === 'rectified' ? <RectifiedCard rail={r} /> : r.kind === 'regulated' ? <RegulatedCard rail={r} /> : <BatteryCard rail={r} />))}
+      {report.transformers.length || report.primary || general.length ? (
+        <section class="card supply-transformers">
+          <h3>Transformers and primary</h3>
+          {report.transformers.map((t) => (
+            <TransformerCard t={t} />
+          ))}
+          {report.primary ? (
+            <p>
+              <strong>Primary fuse:</strong> {report.primary.fuse.ratedA !== null ? `T${fv(report.primary.fuse.ratedA, 'A')}` : 'beyond the IEC 60127 series'}
+              {report.primary.fittedA !== null ? ` (fitted ${fv(report.primary.fittedA, 'A')})` : ''}. {report.primary.fuse.reasoning}
+            </p>
+          ) : null}
+          <FindingList findings={general} />
+        </section>
+      ) : null}
+    </div>
+  );
+};
