@@ -88,7 +88,8 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
         <>
           <p class="explain">
             {d.response === 'chebyshev' ? `Chebyshev, ${d.rippleDb} dB ripple (cutoff = ripple edge)` : 'Butterworth (cutoff = 3 dB point)'}, order {d.order},{' '}
-            {d.form}, cutoff {fv(d.cutoffHz, 'Hz')} ({d.cutoffSource === 'band-rule' ? 'chosen from the band' : 'entered'}), {fv(d.r0Ohm, 'Ω')}. Core: {d.coreName} (AL{' '}
+            {d.form}, cutoff {fv(d.cutoffHz, 'Hz')} (
+            {d.cutoffSource === 'band-rule' ? 'chosen from the band: 1.2 × f for Chebyshev, 1.4 × f for Butterworth, at least 1.05 × the band top; common practice' : 'entered'}), {fv(d.r0Ohm, 'Ω')}. Core: {d.coreName} (AL{' '}
             {fv(d.coreAlHPerTurn2, 'H')}/turn²). Shunt capacitors see up to {fv(lpf.capacitorPeakV, 'V')} peak.
           </p>
           <table class="grid lpf-parts">

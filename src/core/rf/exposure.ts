@@ -29,6 +29,7 @@ export function exemptionThresholdW(fMHz: number, distanceM: number): number {
 }
 
 export interface ExposureResult {
+  /** Operating frequency, Hz. */
   frequencyHz: number;
   /** Key-down transmitter output, W. */
   peakPowerW: number;
@@ -37,6 +38,7 @@ export interface ExposureResult {
   /** Time-averaged EIRP and ERP (ERP = EIRP / 1.64), W. */
   eirpW: number;
   erpW: number;
+  /** Whether the 2.56 ground-reflection factor was applied. */
   groundReflection: boolean;
   /** Limits at this frequency, W/m^2 (1 mW/cm^2 = 10 W/m^2); null outside the table. */
   limitControlledWPerM2: number | null;
@@ -52,6 +54,7 @@ export interface ExposureResult {
   exemptionThresholdW: number | null;
   exempt: boolean | null;
   exemptBeyondM: number | null;
+  /** Caution text to show beside the distances (local rules govern). */
   caution: string;
   findings: Finding[];
 }

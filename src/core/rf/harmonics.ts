@@ -61,12 +61,15 @@ export interface HarmonicRow {
   neededFilterAttenuationDb: number;
   /** -predictedDbc - requiredDb (positive = passes), dB. */
   marginDb: number;
+  /** Same with the Monte Carlo worst-case filter, dB (null without Monte Carlo). */
   worstMarginDb: number | null;
+  /** fail: nominal margin < 0; caution: worst-case margin < 0 or nominal margin < 3 dB. */
   severity: Finding['severity'];
 }
 
 export interface HarmonicsReport {
   rule: SpuriousRule;
+  /** The rule in words, its citation, and whether the figure is from memory (unconfirmed). */
   ruleTitle: string;
   ruleSource: string;
   ruleFromMemory: boolean;
@@ -74,6 +77,7 @@ export interface HarmonicsReport {
   fundamentalW: number;
   /** Required attenuation, dB. */
   requiredDb: number;
+  /** Harmonics 2..5. */
   rows: HarmonicRow[];
   findings: Finding[];
 }

@@ -7,7 +7,7 @@ export { designLpf, type LpfDesign, type LpfElement } from './lpf-design';
 export { analyseLpf, type LpfAnalysis, type LadderPoint } from './lpf-analysis';
 export { monteCarloLpf, mulberry32, type MonteCarloResult, type MonteCarloOptions } from './lpf-monte-carlo';
 export { lpfNetlist } from './lpf-netlist';
-export { validateLpfParams, validatePaParams, validateRelayParams, validateRfInputs, type FieldError, type Checked } from './lpf-validate';
+export { validateLpfParams, validatePaParams, validateRelayParams, validateRfInputs, validateRfSettings, validateThermalInputs, type FieldError, type Checked } from './lpf-validate';
 export { harmonicCompliance, requiredAttenuationDb, type HarmonicsReport, type HarmonicRow } from './harmonics';
 export { evaluateRelay, relayCoilLoads, lineMaxima, dotLengthS, type RelayResult } from './tr-relay';
 export { evaluateExposure, mpeLimitsMwPerCm2, exemptionThresholdW, EXPOSURE_CAUTION, type ExposureResult } from './exposure';

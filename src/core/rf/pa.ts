@@ -35,12 +35,15 @@ export interface PaResult {
   primaryOhm: number;
   /** Output power into the load, W. */
   outputW: number;
+  /** Output power in dBm and dBW (-999 when there is no output). */
   outputDbm: number;
   outputDbw: number;
   /** Output relative to referencePowerW, dB, and in S-units (6 dB each, common practice). */
   vsReferenceDb: number;
   vsReferenceSUnits: number;
+  /** Drain efficiency used (fraction, 0.7 = 70 %). */
   efficiency: number;
+  /** 'class-default' = DEFAULT_EFFICIENCY (common practice, no published source). */
   efficiencySource: 'entered' | 'class-default';
   /** DC input power key-down (RF part only), W. */
   dcInputW: number;
@@ -49,7 +52,9 @@ export interface PaResult {
   /** Peak drain voltage, V, and peak current of one conducting device, A. */
   peakDrainV: number;
   peakDeviceA: number;
+  /** Heating: dissipation (W), heatsink needed (K/W), junction temperatures (°C). */
   thermal: PaThermal;
+  /** This stage's findings. */
   findings: Finding[];
 }
 
@@ -109,6 +114,10 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   if (pa.efficiency === null) {
     findings.push({ severity: 'ok', rule: 'pa.efficiency', subject, value: efficiency, limit: null, unit: '', source: 'Common practice, no published source',
       message: `No efficiency entered: ${Math.round(efficiency * 100)} % assumed for class ${pa.amplifierClass}; measure DC input at full output to confirm.` });
+  }
+  if (pa.amplifierClass === 'D' && pa.topology === 'single-ended') {
+    findings.push({ severity: 'ok', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'Fourier series of a square wave (REFERENCE-VALUES §3.3)',
+      message: 'Single-ended class D is modelled as a half-bridge driving a 0 to Vdd square wave into the transformer.' });
   }
   if (pa.amplifierClass === 'E' && pa.topology === 'push-pull') {
     findings.push({ severity: 'caution', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'assumption, no published source',

@@ -92,3 +92,18 @@ describe('evaluateRf never produces NaN/Infinity or throws for odd inputs', () =
     );
   });
 });
+
+describe('evaluateRf rule selection and missing filter', () => {
+  it('ITU rule at ~10 W requires min(43 + 10 log10 P, 50) = 50 dB and is marked from memory', () => {
+    const r = evaluateRf(project({ rf: { ...project().rf, spuriousRule: 'itu-app3' } }), { paRailV: { pa: 13.8 } });
+    expect(r.harmonics!.requiredDb).toBe(50);
+    expect(r.harmonics!.ruleFromMemory).toBe(true);
+    expect(r.findings.some((f) => f.rule === 'spurious.rule-source')).toBe(true);
+  });
+  it('no filter stage: harmonics fail and the worst finding comes first', () => {
+    const p = project();
+    const r = evaluateRf(project({ stages: p.stages.filter((s) => s.kind !== 'lpf') }), { paRailV: { pa: 13.8 } });
+    expect(r.harmonics!.rows.every((x) => x.severity === 'fail')).toBe(true);
+    expect(r.findings[0].severity).toBe('fail');
+  });
+});

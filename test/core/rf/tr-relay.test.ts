@@ -53,3 +53,18 @@ describe('relay checks', () => {
     expect(relayCoilLoads({ ...st, relay: undefined })).toBeNull();
   });
 });
+
+describe('relay DC contacts and isolation limits', () => {
+  it('DC current above the switching rating fails; leakage above the receiver maximum fails', () => {
+    const r = evaluateRelay(relayParams({ dcSwitchedA: 1.5, contactSwitchA: 1, isolationDb: 20, receiverMaxInputW: 0.02 }), { powerW: 10, swr: 1.5, harmonicAmplitudeSum: 0, subject: 'T/R' });
+    expect(r.findings.find((f) => f.rule === 'relay.dc-contacts')?.severity).toBe('fail');
+    // 10 W - 20 dB = 100 mW > 20 mW
+    near(r.receiverPowerW, 0.1, 1e-12, 'leak');
+    expect(r.findings.find((f) => f.rule === 'relay.isolation')?.severity).toBe('fail');
+  });
+  it('invalid relay parameters become fail findings with zeroed numbers', () => {
+    const r = evaluateRelay(relayParams({ wpm: 0 }), { powerW: 10, swr: 2, harmonicAmplitudeSum: 0, subject: 'T/R' });
+    expect(r.findings.every((f) => f.severity === 'fail')).toBe(true);
+    expect(r.findings[0].subject).toContain('wpm');
+  });
+});
