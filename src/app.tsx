@@ -14,6 +14,7 @@ import { overviewRoutes } from './web/routes/overview';
 import { supplyRoutes } from './web/routes/supply';
 import { stageRoutes } from './web/routes/stage';
 import { rfRoutes } from './web/routes/rf';
+import { packRoutes } from './web/routes/pack';
 import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
@@ -63,6 +64,7 @@ export function buildApp(deps: Deps) {
   app.route('/', stageRoutes(deps));
   app.route('/', supplyRoutes(deps));
   app.route('/', rfRoutes(deps));
+  app.route('/', packRoutes(deps));
   app.route('/', partsRoutes(deps));
   app.route('/', bomRoutes(deps));
 
