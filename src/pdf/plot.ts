@@ -63,7 +63,7 @@ export function plot(l: Layout, spec: PlotSpec): void {
 
   const leftPt = l.leftPt + 46;
   const widthPt = l.contentWidthPt - 56;
-  const topPt = l.yPt - 14;
+  const topPt = l.yPt - 18;
   const bottomPt = topPt - heightPt;
   const px = (x: number) => leftPt + ((tx(x) - x0) / (x1 - x0)) * widthPt;
   const py = (y: number) => bottomPt + ((Math.min(y1, Math.max(y0, y)) - y0) / (y1 - y0)) * heightPt;
@@ -110,6 +110,6 @@ export function plot(l: Layout, spec: PlotSpec): void {
     l.drawAt(s.label, lx + 18, ly, 7.5, false, INK);
     lx += 18 + l.textWidth(s.label, 7.5) + 16;
   }
-  l.drawAt(spec.yLabel, l.leftPt, topPt + 3, 7.5, false, INK);
+  l.drawAt(spec.yLabel, l.leftPt, topPt + 7, 7.5, false, INK);
   l.yPt = ly - 12;
 }

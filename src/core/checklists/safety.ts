@@ -7,7 +7,7 @@ import { step, caution, measured, fmt } from './items';
 import { rfView } from './rf-view';
 
 export const SAFETY_PREAMBLE =
-  'This list is a planning aid, not a certification. Local electrical codes, your licence conditions and the practice of a licensed electrician or a qualified person take precedence over anything here. If in doubt, have the mains wiring inspected before first use.';
+  'This list is a planning aid, not a certification. Local electrical codes, your licence conditions and the practice of a licensed electrician or a qualified person take precedence over anything here.';
 
 export function safetyChecklist(project: Project, report: ChecklistReport): ChecklistSection[] {
   const sections: ChecklistSection[] = [{ id: 'safety:general', title: 'Before you start', stageId: null, items: generalItems() }];
@@ -20,10 +20,15 @@ export function safetyChecklist(project: Project, report: ChecklistReport): Chec
       id: 'safety:findings',
       title: 'Open findings to resolve before power-up',
       stageId: null,
-      items: open.map((f) => ({ text: `${f.severity === 'fail' ? 'FAIL' : 'Caution'} — ${f.subject}: ${f.message}`, value: f.value, unit: f.unit, basis: `finding: ${f.rule}`, emphasis: 'caution' as const })),
+      items: open.map((f) => ({ text: `${f.severity === 'fail' ? 'FAIL' : 'Caution'} — ${withSubject(f.subject, f.message)}`, value: f.value, unit: f.unit, basis: `finding: ${f.rule}`, emphasis: 'caution' as const })),
     });
   }
   return sections;
+}
+
+/** "subject: message", unless the message already starts with the subject. */
+export function withSubject(subject: string, message: string): string {
+  return message.startsWith(subject) ? message : `${subject}: ${message}`;
 }
 
 function generalItems(): ChecklistItem[] {
@@ -38,6 +43,7 @@ function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] 
   const items: ChecklistItem[] = [
     caution('Use a fused, switched and earthed mains inlet; the switch and fuse break the live (phase) conductor.'),
     caution('Bond the protective earth to the chassis at its own fixing (star washer, locking nut, no other part under it), and keep the earth lead longer than live and neutral so it is the last to pull out.'),
+    caution('If in doubt about any mains work, have it done or inspected by a qualified person before first use.'),
     step('Measure the resistance from the inlet earth pin to bare chassis metal: a fraction of an ohm.'),
     caution('Sleeve or shroud every mains terminal (inlet, switch, fuse holder, transformer primary); no bare mains conductor may be touchable with the lid off.'),
   ];
@@ -50,7 +56,8 @@ function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] 
     const rated = project.supply.rails.find((x) => x.id === r.railId);
     const fittedV = rated && rated.kind === 'rectified' ? rated.capacitorRatedV : null;
     items.push(measured(`${r.railName} reservoir: rated at least {v} (no-load peak at high mains ${fmt(r.reservoir.noLoadPeakHighV, 'V')}${fittedV ? `, fitted ${fmt(fittedV, 'V')}` : ''}).`, r.reservoir.recommendedRatedV, 'V', 'supply: reservoir rating', fittedV !== null && r.reservoir.recommendedRatedV !== null && fittedV < r.reservoir.recommendedRatedV ? 'caution' : 'normal'));
-    if (r.bleeder.fittedTimeS !== null) items.push(measured(`${r.railName}: the bleeder brings the reservoir below ${fmt(r.bleeder.thresholdV, 'V')} in about {v} (allowed ${fmt(r.bleeder.allowedS, 's')}); wait that long after switch-off.`, r.bleeder.fittedTimeS, 's', 'supply: bleeder', r.bleeder.fittedTimeS > r.bleeder.allowedS ? 'caution' : 'normal'));
+    if (r.bleeder.fittedOhm !== null && r.bleeder.fittedTimeS === null) items.push(measured(`${r.railName}: the rail starts below ${fmt(r.bleeder.thresholdV, 'V')}; the fitted {v} bleeder still drains the reservoir after switch-off.`, r.bleeder.fittedOhm, 'Ω', 'supply: bleeder'));
+    else if (r.bleeder.fittedTimeS !== null) items.push(measured(`${r.railName}: the bleeder brings the reservoir below ${fmt(r.bleeder.thresholdV, 'V')} in about {v} (allowed ${fmt(r.bleeder.allowedS, 's')}); wait that long after switch-off.`, r.bleeder.fittedTimeS, 's', 'supply: bleeder', r.bleeder.fittedTimeS > r.bleeder.allowedS ? 'caution' : 'normal'));
     else items.push(measured(`${r.railName}: no bleeder fitted; fit about {v} so the reservoir discharges after switch-off.`, r.bleeder.suggestedOhm, 'Ω', 'supply: bleeder', 'caution'));
     items.push(measured(`${r.railName}: a charged reservoir can deliver about {v} into a short; discharge it through a resistor, never a screwdriver.`, r.bleeder.shortCircuitA, 'A', 'supply: stored charge', 'caution'));
   }

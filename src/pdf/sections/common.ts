@@ -2,6 +2,7 @@
 import type { Finding } from '../../core/findings';
 import { sortFindings } from '../../core/findings';
 import { formatValue } from '../../core/units';
+import { withSubject } from '../../core/checklists';
 import { CAUTION, FAIL, GREY, INK, type Layout } from '../layout';
 
 export const fv = formatValue;
@@ -37,7 +38,7 @@ export function findingsList(l: Layout, findings: readonly Finding[], onlyProble
   const tagW = 52;
   for (const f of shown) {
     const color = f.severity === 'fail' ? FAIL : f.severity === 'caution' ? CAUTION : GREY;
-    const body = `${f.subject}: ${f.message}`;
+    const body = withSubject(f.subject, f.message);
     const lines = l.wrap(body, l.contentWidthPt - tagW, size);
     l.ensure(lines.length * lineH + 2);
     l.yPt -= lineH;

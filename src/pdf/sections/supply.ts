@@ -51,7 +51,7 @@ function rectified(l: Layout, r: RectifiedRailReport): void {
   recommendations(l, r);
   const w = r.waveform;
   const worst = r.corners.find((c) => c.id === r.worstVoltageCornerId);
-  const title = `${r.railName}: two mains cycles at ${worst?.label.toLowerCase() ?? 'the worst corner'}`;
+  const title = `${r.railName}: two mains cycles at ${worst?.label ?? 'the worst corner'}`;
   plot(l, { title, xLabel: 'time (ms)', yLabel: 'rail (V)', xTick: (v) => (v * 1000).toFixed(0), yTick: (v) => v.toFixed(1), series: [{ label: 'rail voltage (V)', xs: w.timeS, ys: w.outputV, color: BLUE }], heightPt: 95 });
   plot(l, { title: '', xLabel: 'time (ms)', yLabel: 'winding (A)', xTick: (v) => (v * 1000).toFixed(0), yTick: (v) => v.toFixed(1), series: [{ label: 'winding current (A)', xs: w.timeS, ys: w.windingA, color: ORANGE }], heightPt: 70 });
   findingsList(l, r.findings, true);
