@@ -88,9 +88,11 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     }
   }
   const passbandLossDb = lpfRes?.analysis?.atOperating.lossDb ?? 0;
+  // Source: definition of insertion loss in dB: P_out = P_in 10^(-IL/10)
   const outputPowerW = paPowerW * 10 ** (-passbandLossDb / 10);
   const topology = paStage?.pa?.topology ?? 'single-ended';
   const evenDbc = Math.min(0, Math.max(-120, finite(project.rf.evenHarmonicDbc, 0)));
+  // Amplitude ratio from dBc: 10^(dBc/20) (definition of the decibel for voltages)
   const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (paHarmonicDbc(topology, evenDbc, n).dbc / 20), 0);
   for (const st of project.stages) {
     if (st.kind === 'tr' && st.relay) {

@@ -39,14 +39,14 @@ export function evalLadder(l: Ladder, values: Float64Array, frequencyHz: number,
   for (let k = 0; k < values.length; k++) {
     const x = values[k];
     if (l.kinds[k] === 1) {
-      // Source: Pozar, Microwave Engineering (2012), Table 4.1: series impedance Z -> [[1, Z], [0, 1]]
+      // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.1 (table number from memory): series impedance Z -> [[1, Z], [0, 1]]
       const zr = (w * x) / l.inductorQ;
       const zi = w * x;
       const nbr = ar * zr - ai * zi + br, nbi = ar * zi + ai * zr + bi;
       const ndr = cr * zr - ci * zi + dr, ndi = cr * zi + ci * zr + di;
       br = nbr; bi = nbi; dr = ndr; di = ndi;
     } else {
-      // Source: Pozar, Microwave Engineering (2012), Table 4.1: shunt admittance Y -> [[1, 0], [Y, 1]]
+      // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.1 (table number from memory): shunt admittance Y -> [[1, 0], [Y, 1]]
       const yr = (w * x) / l.capacitorQ;
       const yi = w * x;
       const nar = ar + br * yr - bi * yi, nai = ai + br * yi + bi * yr;
@@ -55,7 +55,7 @@ export function evalLadder(l: Ladder, values: Float64Array, frequencyHz: number,
     }
   }
   const z0 = l.r0Ohm;
-  // Source: Pozar, Microwave Engineering (2012), Table 4.2: S21 = 2 / (A + B/Z0 + C Z0 + D) for equal Z0
+  // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.2 (from memory): S21 = 2 / (A + B/Z0 + C Z0 + D) for equal Z0
   const sr = ar + br / z0 + cr * z0 + dr;
   const si = ai + bi / z0 + ci * z0 + di;
   out[0] = 4 / (sr * sr + si * si);
@@ -81,8 +81,10 @@ export interface LadderPoint {
 export function pointAt(l: Ladder, frequencyHz: number): LadderPoint {
   const out = new Float64Array(2);
   evalLadder(l, l.values, frequencyHz, out);
+  // Source: definition of insertion loss between equal terminations: IL = -10 log10 |S21|^2
   const lossDb = -10 * Math.log10(out[0]);
   const g = Math.min(out[1], 0.998);
+  // Source: definition of standing-wave ratio: SWR = (1 + |Gamma|) / (1 - |Gamma|)
   return { frequencyHz, lossDb, s21Db: -lossDb, inputSwr: Math.min(999, (1 + g) / (1 - g)) };
 }
 

@@ -38,10 +38,10 @@ export function chebyshevT(n: number, x: number): number {
  */
 export function prototypeLossDb(response: LpfResponse, order: number, rippleDb: number, omega: number): number {
   if (response === 'butterworth') {
-    // Source: Bretchko & Ludwig, RF Circuit Design: Theory and Practice (2000), §5 Butterworth |H|^2 = 1/(1 + w^2N)
+    // Source: Ludwig & Bretchko, RF Circuit Design: Theory and Practice (2000, year from memory), §5 Butterworth |H|^2 = 1/(1 + w^2N)
     return 10 * Math.log10(1 + omega ** (2 * order));
   }
-  // Source: Bretchko & Ludwig, RF Circuit Design: Theory and Practice (2000), fig. 5-22 listing: LF = 1 + eps^2 T_n^2(w)
+  // Source: Ludwig & Bretchko, RF Circuit Design: Theory and Practice (2000, year from memory), fig. 5-22 listing: LF = 1 + eps^2 T_n^2(w)
   const eps2 = 10 ** (rippleDb / 10) - 1;
   return 10 * Math.log10(1 + eps2 * chebyshevT(order, omega) ** 2);
 }
