@@ -10,7 +10,7 @@ import type { RailVoltage } from './regulated-rail';
 import { evaluateRegulatedRail } from './regulated-rail';
 import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
-import { fittedFuseFindings, primaryFuse, railFuse } from './fuses';
+import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
 import { normalizeSupply } from './normalize';
 
@@ -122,7 +122,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
       receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse,
       findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
       recommendations: [
-        { topic: 'fuse', text: fuse.ratedA !== null ? `T${fuse.ratedA} A fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' },
+        { topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' },
         { topic: 'battery', text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive / ${Math.round(txFraction * 100)} % transmit`, reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`, source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2, ref §2.3 [C2])' },
       ],
     };

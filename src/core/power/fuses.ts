@@ -12,6 +12,11 @@ export const RAIL_FACTOR = 1.5;
 
 const SOURCE = 'IEC 60127 rated-current series; sizing factor is engineering practice, no published standard (ref §4.3)';
 
+/** Marking as printed on a time-lag fuse: "T400mA", "T2A", "T3.15A". */
+export function fuseMarking(ratedA: number, characteristic: 'T' | 'F' = 'T'): string {
+  return ratedA < 1 ? `${characteristic}${Math.round(ratedA * 1000)}mA` : `${characteristic}${Number(ratedA.toPrecision(3))}A`;
+}
+
 function fmtA(a: number): string {
   return a < 1 ? `${Math.round(a * 1000)} mA` : `${Number(a.toPrecision(3))} A`;
 }

@@ -9,7 +9,7 @@ import { cornerCurrent, worstIds } from './corners';
 import { noLoadVrms, windingResistanceOhm } from './winding';
 import { minimumCapacitanceF, recommendedCapacitorV, reservoirFindings, standardCapacitanceF, textbookCapacitanceF } from './reservoir';
 import { bleederFindings, bleederReport } from './bleeder';
-import { fittedFuseFindings, railFuse } from './fuses';
+import { fittedFuseFindings, fuseMarking, railFuse } from './fuses';
 import { recommendWinding } from './transformer';
 import { DEFAULT_SECONDARY_V } from './standard-values';
 
@@ -87,7 +87,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   }
   if (winding) {
     const base = { rule: 'rail.headroom', subject: rail.name, value: worst.troughV, limit: ctx.requiredMinV, unit: 'V', source };
-    if (!ctx.hasRequirement) findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough is ${fmt(worst.troughV)} V; no regulator is fed and no minimum is stated, so only the ${fmt(ctx.requiredMinV)} V margin is checked${worst.troughV < ctx.requiredMinV ? ' (and it is not met)' : ''}.` });
+    if (!ctx.hasRequirement) findings.push({ ...base, severity: worst.troughV < ctx.requiredMinV ? 'caution' : 'ok', message: `${worst.label}: the ripple trough is ${fmt(worst.troughV)} V; no regulator is fed and no minimum is stated, so only the ${fmt(ctx.requiredMinV)} V margin is checked${worst.troughV < ctx.requiredMinV ? ' (and it is not met)' : ''}.` });
     else if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: the rail dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
     else findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough ${fmt(worst.troughV)} V stays above the ${fmt(ctx.requiredMinV)} V needed (${ctx.requirementNote}).` });
     if (rail.topology === 'half-wave') findings.push({ severity: 'caution', rule: 'rectifier.half-wave', subject: rail.name, value: null, limit: null, unit: '', source: 'Common practice, no published source', message: `${rail.name}: a half-wave rectifier puts direct current through the winding, which can saturate a small transformer's core and doubles the ripple; prefer a bridge or centre-tap.` });
@@ -127,7 +127,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   // Rail fuse
   const fuse = railFuse(outputA.keyDown, 'on the DC side after the reservoir');
   findings.push(...fittedFuseFindings(`${rail.name} fuse`, rail.fuseA, fuse));
-  recommendations.push({ topic: 'fuse', text: fuse.ratedA !== null ? `T${fuse.ratedA} A rail fuse` : 'Rail fuse: see reasoning', reasoning: fuse.reasoning, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' });
+  recommendations.push({ topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} rail fuse` : 'Rail fuse: see reasoning', reasoning: fuse.reasoning, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' });
   if (winding) {
     recommendations.push({ topic: 'rectifier', text: `Diodes rated ${fmt(Math.max(...corners.map((c) => c.diodePeakA)), 1)} A repetitive peak and ${fmt(Math.max(...corners.map((c) => c.surgeA)), 0)} A surge or more`, reasoning: `The simulated repetitive peak current and the switch-on surge into a discharged ${fmtF(rail.reservoirF)} reservoir (EMF peak over winding, diode and ESR resistance) at high mains. The bridge's non-repetitive surge rating (IFSM) must exceed the surge.`, source: 'Simulation (this program); surge estimate ref §4.2 [D]' });
   }
