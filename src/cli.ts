@@ -2,6 +2,8 @@
 //   rigwright evaluate FILE.json [--json]
 //   rigwright export [--id ID] [--out FILE]        (from DATABASE_URL; all project ids listed without --id)
 //   rigwright import FILE.json                      (into DATABASE_URL, always as a new project)
+//   rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf
+//   rigwright csv FILE.json|--id ID [--out PARTS.csv]
 import { readFileSync, writeFileSync } from 'node:fs';
 import { parseProjectFile, toProjectFile } from './io/project-file';
 import { evaluate } from './core/evaluate';
@@ -12,7 +14,24 @@ const USAGE = `Usage:
   rigwright evaluate FILE.json [--json]   evaluate an exported project file (no server, no database)
   rigwright export [--id ID] [--out FILE] export a project from the database (DATABASE_URL)
   rigwright import FILE.json              import a project file into the database as a new project
-  rigwright list                          list the projects in the database`;
+  rigwright list                          list the projects in the database
+  rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf   the builder pack as PDF
+  rigwright csv FILE.json|--id ID [--out PARTS.csv]                    the costed parts list as CSV`;
+
+/** A project from a file argument, or from the database with --id. */
+async function projectFrom(rest: string[]): Promise<import('./core/model').Project> {
+  const id = flag(rest, '--id');
+  if (!id) {
+    const file = rest.find((a, i) => !a.startsWith('--') && !(i > 0 && rest[i - 1].startsWith('--')));
+    return readProjectFile(file);
+  }
+  return withDb(async (d) => {
+    const { loadProject } = await import('./db/projects');
+    const p = await loadProject(d.db, id);
+    if (!p) fail(`No project with id ${id}.`);
+    return p!;
+  });
+}
 
 function flag(args: string[], name: string): string | undefined {
   const i = args.indexOf(name);
@@ -91,6 +110,27 @@ async function main(args: string[]) {
         await insertProject(d, copy, new Date().toISOString());
         process.stdout.write(`Imported "${copy.name}" as ${copy.id}\n`);
       });
+      return;
+    }
+    case 'pdf': {
+      const out = flag(rest, '--out');
+      if (!out) fail('Give --out PACK.pdf');
+      const paper = flag(rest, '--paper') ?? 'a4';
+      if (paper !== 'a4' && paper !== 'letter') fail('--paper must be a4 or letter');
+      const project = await projectFrom(rest);
+      const { buildPack } = await import('./pdf');
+      const bytes = await buildPack(project, evaluate(project), { paper: paper as 'a4' | 'letter', dataDate: new Date().toISOString().slice(0, 10) });
+      writeFileSync(out!, bytes);
+      process.stdout.write(`Wrote ${out} (${bytes.length} bytes)\n`);
+      return;
+    }
+    case 'csv': {
+      const project = await projectFrom(rest);
+      const { costReportToCsv } = await import('./core/csv');
+      const text = costReportToCsv(evaluate(project).cost);
+      const out = flag(rest, '--out');
+      if (out) writeFileSync(out, text);
+      else process.stdout.write(text);
       return;
     }
     default:

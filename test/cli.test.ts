@@ -1,6 +1,6 @@
 import { describe, it, expect, beforeAll } from 'vitest';
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { DEMO_PROJECTS } from '../seed-demo/index';
@@ -50,5 +50,22 @@ describe('command line', () => {
     expect(exp.status).toBe(0);
     const again = cli(['evaluate', join(dir, 'back.json'), '--json']);
     expect(JSON.parse(again.stdout).project.name).toBe(DEMO_PROJECTS[0].name);
+  });
+
+  it('writes the builder pack PDF and the costed CSV from a project file', () => {
+    const pdf = join(dir, 'pack.pdf');
+    const r = cli(['pdf', file, '--paper', 'letter', '--out', pdf]);
+    expect(r.status).toBe(0);
+    expect(readFileSync(pdf).subarray(0, 5).toString()).toBe('%PDF-');
+    const csv = cli(['csv', file]);
+    expect(csv.status).toBe(0);
+    expect(csv.stdout).toContain('Stage,Section,Refs');
+    expect(csv.stdout).toContain('"Mains cord with IEC plug, 3-core, earthed"');
+  });
+
+  it('refuses a bad paper size', () => {
+    const r = cli(['pdf', file, '--paper', 'a3', '--out', join(dir, 'x.pdf')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('--paper must be a4 or letter');
   });
 });
