@@ -1,7 +1,163 @@
-// Placeholder until the parts pages land: the router exists so app.tsx can mount it.
-import { Hono } from 'hono';
+// Parts catalog routes: parts and their supplier offers, suppliers with shipping, costing settings.
+import { Hono, type Context } from 'hono';
+import { z } from 'zod';
+import type { Offer, Part, Project, Supplier } from '../../core/model';
+import { loadProject } from '../../db/projects';
+import { projectEdit, type ChangeResult } from '../edit';
+import { sendPage } from '../render';
 import type { Deps } from '../deps';
+import { newId } from '../ids';
+import * as F from '../parts-forms';
+import { refusal } from '../supply-forms';
+import { Layout } from '../../../views/layout';
+import { PartsBody } from '../../../views/pages/parts';
+import { ConfirmItemPage } from '../../../views/components/supply-confirm';
+import type { Failed } from '../../../views/components/failed';
 
-export function partsRoutes(_deps: Deps) {
-  return new Hono();
+export function partsPage(project: Project, failed?: Failed, notice?: string, openPart?: string) {
+  return (
+    <Layout title={`Parts catalog · ${project.name}`} project={project} section="parts">
+      <link rel="stylesheet" href="/assets/pages.css" />
+      <PartsBody project={project} failed={failed} notice={notice} openPart={openPart} />
+    </Layout>
+  );
+}
+
+const gone = (what: string): ChangeResult => ({ errors: { _form: `That ${what} no longer exists (deleted in another window?). The page now shows the stored catalog.` } });
+const withParts = (p: Project, parts: Part[]): Project => ({ ...p, parts });
+const withSuppliers = (p: Project, suppliers: Supplier[]): Project => ({ ...p, costing: { ...p.costing, suppliers } });
+const sameName = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
+
+type OfferData = z.output<typeof F.offerSchema>;
+const offerFrom = (id: string, d: OfferData): Offer => ({ id, supplier: d.supplier, sku: d.sku, currency: d.currency, breaks: d.breaks, minOrder: d.minOrder, orderMultiple: d.orderMultiple, stockNote: d.stockNote });
+
+function supplierAt(p: Project, c: Context): { index: number; s: Supplier } | null {
+  const index = Number(c.req.param('n'));
+  const s = Number.isInteger(index) ? p.costing.suppliers[index] : undefined;
+  return s ? { index, s } : null;
+}
+
+export function partsRoutes(deps: Deps) {
+  const app = new Hono();
+  const pageUrl = (p: Project) => `/projects/${p.id}/parts`;
+  const common = { partial: (p: Project, f?: Failed, n?: string) => <PartsBody project={p} failed={f} notice={n} />, page: (p: Project, f?: Failed, n?: string) => partsPage(p, f, n), redirect: pageUrl };
+  const noFields = z.object({});
+
+  app.get('/projects/:id/parts', async (c) => {
+    const project = await loadProject(deps.database.db, c.req.param('id'));
+    if (!project) return c.notFound();
+    const done = c.req.query('done') === 'deleted' ? 'Deleted.' : undefined;
+    return sendPage(c, partsPage(project, undefined, done, c.req.query('open')));
+  });
+
+  app.post('/projects/:id/costing', projectEdit(deps, { ...common, form: 'costing', schema: F.costingSchema,
+    change: (p, d) => {
+      if (d.rates[p.currency.toUpperCase()] !== undefined) return { errors: { rates: `${p.currency} is the project currency; it needs no exchange rate` } };
+      return { ...p, costing: { ...p.costing, attritionFraction: d.attrition, sparesPerLine: d.spares, exchangeRates: d.rates } };
+    },
+  }));
+
+  // ------------------------------------------------------------ suppliers
+  app.post('/projects/:id/suppliers', projectEdit(deps, { ...common, form: 'add-supplier', schema: F.supplierSchema,
+    change: (p, d) => {
+      if (p.costing.suppliers.some((s) => sameName(s.name, d.name))) return { errors: { name: `Supplier “${d.name}” is already in the list` } };
+      return withSuppliers(p, [...p.costing.suppliers, { name: d.name, shippingCents: d.shipping, currency: d.currency }]);
+    },
+  }));
+
+  app.post('/projects/:id/suppliers/:n', projectEdit(deps, { ...common, form: (c) => `supplier-${c.req.param('n')}`, schema: F.supplierSchema,
+    change: (p, d, c) => {
+      const at = supplierAt(p, c);
+      if (!at) return gone('supplier');
+      if (p.costing.suppliers.some((s, i) => i !== at.index && sameName(s.name, d.name))) return { errors: { name: `Supplier “${d.name}” is already in the list` } };
+      const old = at.s.name;
+      const parts = p.parts.map((part) => ({ ...part, offers: part.offers.map((o) => (sameName(o.supplier, old) ? { ...o, supplier: d.name } : o)) }));
+      return withSuppliers({ ...p, parts }, p.costing.suppliers.map((s, i) => (i === at.index ? { name: d.name, shippingCents: d.shipping, currency: d.currency } : s)));
+    },
+  }));
+
+  // ------------------------------------------------------------ parts and offers
+  app.post('/projects/:id/parts', projectEdit(deps, { ...common, form: 'add-part', schema: F.partSchema,
+    partial: (p, f, n) => <PartsBody project={p} failed={f} notice={n && !f ? 'Part added: open it below to add supplier offers.' : n} openPart={f ? undefined : p.parts.at(-1)?.id} />,
+    redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(p.parts.at(-1)?.id ?? '')}#part-${p.parts.at(-1)?.id ?? ''}`,
+    change: (p, d) => withParts(p, [...p.parts, { id: newId('p'), description: d.description, category: d.category, ratings: d.ratings, offers: [] }]),
+  }));
+
+  app.post('/projects/:id/parts/:pid', projectEdit(deps, { ...common, form: (c) => `part-${c.req.param('pid')}`, schema: F.partSchema,
+    change: (p, d, c) => {
+      const pid = c.req.param('pid');
+      if (!p.parts.some((x) => x.id === pid)) return gone('part');
+      return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, description: d.description, category: d.category, ratings: d.ratings } : x)));
+    },
+  }));
+
+  app.post('/projects/:id/parts/:pid/offers', projectEdit(deps, { ...common, form: (c) => `add-offer-${c.req.param('pid')}`, schema: F.offerSchema,
+    change: (p, d, c) => {
+      const pid = c.req.param('pid');
+      if (!p.parts.some((x) => x.id === pid)) return gone('part');
+      return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, offers: [...x.offers, offerFrom(newId('o'), d)] } : x)));
+    },
+  }));
+
+  app.post('/projects/:id/parts/:pid/offers/:oid', projectEdit(deps, { ...common, form: (c) => `offer-${c.req.param('oid')}`, schema: F.offerSchema,
+    change: (p, d, c) => {
+      const { pid, oid } = c.req.param();
+      const part = p.parts.find((x) => x.id === pid);
+      if (!part?.offers.some((o) => o.id === oid)) return gone('offer');
+      return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, offers: x.offers.map((o) => (o.id === oid ? offerFrom(oid, d) : o)) } : x)));
+    },
+  }));
+
+  // ------------------------------------------------------------ deletes: confirm page, then the post
+  type Target = { what: string; users: string[]; also?: string; remove: (p: Project) => Project } | null;
+  const targets: Record<string, { path: string; find: (p: Project, c: Context) => Target }> = {
+    part: {
+      path: '/projects/:id/parts/:pid/delete',
+      find: (p, c) => {
+        const part = p.parts.find((x) => x.id === c.req.param('pid'));
+        if (!part) return null;
+        const also = part.offers.length ? `Its ${part.offers.length} supplier offer(s) go with it.` : undefined;
+        return { what: `part “${part.description}”`, users: F.partUsers(p, part.id), also, remove: (q) => withParts(q, q.parts.filter((x) => x.id !== part.id)) };
+      },
+    },
+    offer: {
+      path: '/projects/:id/parts/:pid/offers/:oid/delete',
+      find: (p, c) => {
+        const part = p.parts.find((x) => x.id === c.req.param('pid'));
+        const o = part?.offers.find((x) => x.id === c.req.param('oid'));
+        if (!part || !o) return null;
+        const remove = (q: Project) => withParts(q, q.parts.map((x) => (x.id === part.id ? { ...x, offers: x.offers.filter((y) => y.id !== o.id) } : x)));
+        return { what: `the ${o.supplier} offer${o.sku ? ` “${o.sku}”` : ''} for “${part.description}”`, users: [], remove };
+      },
+    },
+    supplier: {
+      path: '/projects/:id/suppliers/:n/delete',
+      find: (p, c) => {
+        const at = supplierAt(p, c);
+        if (!at) return null;
+        return { what: `supplier “${at.s.name}”`, users: F.supplierUsers(p, at.s.name), remove: (q) => withSuppliers(q, q.costing.suppliers.filter((_, i) => i !== at.index)) };
+      },
+    },
+  };
+
+  for (const [kind, t] of Object.entries(targets)) {
+    app.get(t.path, async (c) => {
+      const project = await loadProject(deps.database.db, c.req.param("id")!);
+      if (!project) return c.notFound();
+      const found = t.find(project, c);
+      if (!found) return c.notFound();
+      return sendPage(c, <ConfirmItemPage project={project} section="parts" title={`Delete ${kind}`} what={found.what} action={c.req.path} back={pageUrl(project)} users={found.users} also={found.also} />);
+    });
+    app.post(t.path, projectEdit(deps, { ...common, form: (c) => `delete-${kind}`, schema: noFields,
+      redirect: (p) => `${pageUrl(p)}?done=deleted`,
+      change: (p, _d, c) => {
+        const found = t.find(p, c);
+        if (!found) return gone(kind);
+        if (found.users.length) return { errors: { _form: refusal(found.what, found.users) } };
+        return found.remove(p);
+      },
+    }));
+  }
+
+  return app;
 }

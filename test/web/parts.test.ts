@@ -1,0 +1,143 @@
+// Parts catalog through app.request(): parts, offers (price-break text), suppliers, costing settings;
+// refused input kept and nothing saved, stale version, deletion of a part on the parts list refused.
+import { beforeEach, describe, expect, it } from 'vitest';
+import { buildApp } from '../../src/app';
+import { openDatabase, type Database } from '../../src/db/client';
+import { loadProject } from '../../src/db/projects';
+import { seedDemo } from '../../seed-demo/index';
+import type { Project } from '../../src/core/model';
+import { parseBreaks, parseRatings, parseRates, moneyToCents } from '../../src/web/parts-forms';
+
+const ID = 'demo-club-30m';
+let database: Database;
+let app: ReturnType<typeof buildApp>;
+
+beforeEach(async () => {
+  database = await openDatabase('file::memory:');
+  await seedDemo(database, '2026-01-01T00:00:00.000Z');
+  app = buildApp({ database, now: () => new Date('2026-01-02T00:00:00.000Z') });
+});
+
+const stored = async (): Promise<Project> => (await loadProject(database.db, ID))!;
+
+function post(path: string, fields: Record<string, string>, htmx = false) {
+  const headers: Record<string, string> = { Origin: 'http://localhost', 'Content-Type': 'application/x-www-form-urlencoded' };
+  if (htmx) headers['HX-Request'] = 'true';
+  return app.request(`http://localhost${path}`, { method: 'POST', headers, body: new URLSearchParams(fields).toString() });
+}
+
+describe('catalog text parsing', () => {
+  it('reads price breaks as minimum quantity -> whole cents, sorted', () => {
+    expect(parseBreaks('10: 0.78, 1: 0.95, 100: 0.52')).toEqual({ ok: true, breaks: [{ minQty: 1, unitPriceCents: 95 }, { minQty: 10, unitPriceCents: 78 }, { minQty: 100, unitPriceCents: 52 }] });
+    expect(parseBreaks('1: 0,95; 10: 0,78')).toEqual({ ok: true, breaks: [{ minQty: 1, unitPriceCents: 95 }, { minQty: 10, unitPriceCents: 78 }] });
+    expect(parseBreaks('1: 0.125').ok).toBe(false); // sub-cent prices are refused, not silently rounded
+    expect(parseBreaks('0: 1.00').ok).toBe(false);
+    expect(parseBreaks('1: 1, 1: 2').ok).toBe(false);
+    expect(parseBreaks('').ok).toBe(false);
+  });
+
+  it('reads ratings with numbers parsed (engineering prefixes too) and text kept', () => {
+    expect(parseRatings('voltageV=35, rippleA=2.4; capacitanceF=4700u; type=T; note=5 × 20 mm, glass')).toEqual({
+      ok: true,
+      ratings: { voltageV: 35, rippleA: 2.4, capacitanceF: 0.0047, type: 'T', note: '5 × 20 mm, glass' },
+    });
+    expect(parseRatings('va 70').ok).toBe(false);
+    expect(parseRatings('a=1; a=2').ok).toBe(false);
+  });
+
+  it('reads exchange rates and amounts', () => {
+    expect(parseRates('EUR = 1.08\ngbp=1.27')).toEqual({ ok: true, rates: { EUR: 1.08, GBP: 1.27 } });
+    expect(parseRates('EUR = 0').ok).toBe(false);
+    expect(moneyToCents('8.5')).toEqual({ ok: true, cents: 850 });
+    expect(moneyToCents('0.29')).toEqual({ ok: true, cents: 29 });
+  });
+});
+
+describe('parts catalog page', () => {
+  it('renders every part and supplier', async () => {
+    const res = await app.request(`http://localhost/projects/${ID}/parts`);
+    expect(res.status).toBe(200);
+    const html = await res.text();
+    const p = await stored();
+    for (const part of p.parts) expect(html).toContain(part.description.replace(/&/g, '&amp;'));
+    expect(html).toContain('Northfield Components');
+    expect(html).toContain('1: 2.15, 10: 1.82, 50: 1.49');
+  });
+
+  it('adds a part, then an offer with price breaks', async () => {
+    const v = (await stored()).version;
+    const res = await post(`/projects/${ID}/parts`, { version: String(v), description: 'Zener diode 5.1 V 0.5 W', category: 'diode', ratings: 'voltageV=5.1, powerW=500m' });
+    expect(res.status).toBe(303);
+    const part = (await stored()).parts.at(-1)!;
+    expect(part).toMatchObject({ description: 'Zener diode 5.1 V 0.5 W', category: 'diode', ratings: { voltageV: 5.1, powerW: 0.5 }, offers: [] });
+    const o = await post(`/projects/${ID}/parts/${part.id}/offers`, { version: String(v + 1), supplier: 'Harbor Radio Surplus', sku: 'HR-Z51', currency: 'usd', breaks: '1: 0.12, 100: 0.04', minOrder: '10', orderMultiple: '10', stockNote: '' }, true);
+    expect(o.status).toBe(200);
+    const offer = (await stored()).parts.find((x) => x.id === part.id)!.offers[0];
+    expect(offer).toMatchObject({ supplier: 'Harbor Radio Surplus', sku: 'HR-Z51', currency: 'USD', breaks: [{ minQty: 1, unitPriceCents: 12 }, { minQty: 100, unitPriceCents: 4 }], minOrder: 10, orderMultiple: 10 });
+  });
+
+  it('keeps the typed price breaks beside the field and saves nothing when they are wrong', async () => {
+    const before = await stored();
+    const res = await post(`/projects/${ID}/parts/p-c4700/offers/o9`, { version: String(before.version), supplier: 'Northfield Components', sku: 'NC-E4735', currency: 'USD', breaks: '1: 2.15, ten: 1.82', minOrder: '1', orderMultiple: '1', stockNote: '' }, true);
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain('value="1: 2.15, ten: 1.82"');
+    expect(html).toContain('is not &quot;quantity: unit price&quot;');
+    expect(await stored()).toEqual(before);
+  });
+
+  it('saves costing settings and refuses a rate for the project currency', async () => {
+    const p = await stored();
+    const ok = await post(`/projects/${ID}/costing`, { version: String(p.version), attrition: '10', spares: '1', rates: 'EUR = 1.10\nGBP = 1.27' }, true);
+    expect(ok.status).toBe(200);
+    const after = await stored();
+    expect(after.costing).toMatchObject({ attritionFraction: 0.1, sparesPerLine: 1, exchangeRates: { EUR: 1.1, GBP: 1.27 } });
+    const bad = await post(`/projects/${ID}/costing`, { version: String(after.version), attrition: '10', spares: '1', rates: 'USD = 1' }, true);
+    expect(bad.status).toBe(422);
+    expect(await bad.text()).toContain('USD is the project currency');
+    expect(await stored()).toEqual(after);
+  });
+
+  it('renames a supplier and its offers together', async () => {
+    const p = await stored();
+    const res = await post(`/projects/${ID}/suppliers/1`, { version: String(p.version), was: 'Harbor Radio Surplus', name: 'Harbour Radio Surplus', shipping: '6.50', currency: 'USD' });
+    expect(res.status).toBe(303);
+    const after = await stored();
+    expect(after.costing.suppliers[1]).toEqual({ name: 'Harbour Radio Surplus', shippingCents: 650, currency: 'USD' });
+    expect(after.parts.flatMap((x) => x.offers).filter((o) => o.supplier === 'Harbor Radio Surplus')).toHaveLength(0);
+    expect(after.parts.flatMap((x) => x.offers).filter((o) => o.supplier === 'Harbour Radio Surplus').length).toBeGreaterThan(0);
+  });
+
+  it('refuses a stale version with 409', async () => {
+    const before = await stored();
+    await post(`/projects/${ID}/parts/p-pcb`, { version: String(before.version), description: 'PCB rev C', category: 'pcb', ratings: '' });
+    const res = await post(`/projects/${ID}/parts/p-pcb`, { version: String(before.version), description: 'PCB rev D', category: 'pcb', ratings: '' }, true);
+    expect(res.status).toBe(409);
+    expect(await res.text()).toContain('value="PCB rev D"');
+    expect((await stored()).parts.find((x) => x.id === 'p-pcb')!.description).toBe('PCB rev C');
+  });
+
+  it('refuses to delete a part on the parts list, naming the lines', async () => {
+    const before = await stored();
+    const confirm = await (await app.request(`http://localhost/projects/${ID}/parts/p-fuse/delete`)).text();
+    expect(confirm).toContain('parts-list line “F1–F3” in General, 3 per rig');
+    expect(confirm).not.toContain('Yes, delete');
+    const res = await post(`/projects/${ID}/parts/p-fuse/delete`, { version: String(before.version) });
+    expect(res.status).toBe(422);
+    expect(await res.text()).toContain('cannot be deleted while it is in use');
+    expect(await stored()).toEqual(before);
+  });
+
+  it('deletes an offer and an unused part after the confirm page', async () => {
+    const p = await stored();
+    expect(await (await app.request(`http://localhost/projects/${ID}/parts/p-trafo/offers/o2/delete`)).text()).toContain('Yes, delete');
+    let res = await post(`/projects/${ID}/parts/p-trafo/offers/o2/delete`, { version: String(p.version) });
+    expect(res.status).toBe(303);
+    expect((await stored()).parts.find((x) => x.id === 'p-trafo')!.offers.map((o) => o.id)).toEqual(['o1']);
+    res = await post(`/projects/${ID}/parts`, { version: String(p.version + 1), description: 'Spare knob', category: 'hardware', ratings: '' });
+    const added = (await stored()).parts.at(-1)!;
+    res = await post(`/projects/${ID}/parts/${added.id}/delete`, { version: String(p.version + 2) });
+    expect(res.status).toBe(303);
+    expect((await stored()).parts.some((x) => x.id === added.id)).toBe(false);
+  });
+});

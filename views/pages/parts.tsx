@@ -1,0 +1,72 @@
+// Parts catalog page: costing settings, suppliers, and the parts with their supplier offers.
+// The body (#parts) is both the page content and the htmx partial.
+import type { FC } from 'hono/jsx';
+import type { Project } from '../../src/core/model';
+import { FormErrors } from '../components/fields';
+import { stateFor, type Failed } from '../components/failed';
+import { Version, hx } from '../components/supply-transformer';
+import { PartCard, PartFields, partValues } from '../components/parts-part';
+import { CostingCard, SuppliersCard } from '../components/parts-costing';
+
+export interface PartsBodyProps {
+  project: Project;
+  failed?: Failed;
+  notice?: string;
+  /** Part to show opened (just added). */
+  openPart?: string;
+}
+
+export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPart }) => {
+  const addState = stateFor('add-part', failed, () => partValues(null));
+  const deleteError = failed?.form.startsWith('delete-') ? failed.state.errors._form : undefined;
+  const uses = (id: string) => project.bom.filter((l) => l.partId === id).length;
+  const categories = [...new Set(project.parts.map((p) => p.category).filter(Boolean))].sort();
+  const suppliers = [...new Set([...project.costing.suppliers.map((s) => s.name), ...project.parts.flatMap((p) => p.offers.map((o) => o.supplier))])].sort();
+  return (
+    <div id="parts">
+      {notice ? (
+        <p class="notice" role="status">
+          {notice}
+        </p>
+      ) : null}
+      {deleteError ? (
+        <div class="form-errors" role="alert">
+          <p>{deleteError}</p>
+        </div>
+      ) : null}
+      <datalist id="supplier-names">
+        {suppliers.map((s) => (
+          <option value={s} />
+        ))}
+      </datalist>
+      <datalist id="part-categories">
+        {categories.map((c) => (
+          <option value={c} />
+        ))}
+      </datalist>
+      <div class="columns">
+        <CostingCard project={project} failed={failed} />
+        <SuppliersCard project={project} failed={failed} />
+      </div>
+      <section>
+        <h2>Parts ({project.parts.length})</h2>
+        <p class="explain">
+          Open a part to change it or its supplier offers. Price breaks are written as quantity: unit price in the offer's currency, e.g.{' '}
+          <code>1: 0.95, 10: 0.78, 100: 0.52</code>. Describe parts by type and ratings.
+        </p>
+        <form {...hx(`/projects/${project.id}/parts`, '#parts')} class="card add" aria-label="Add a part">
+          <Version version={project.version} />
+          <FormErrors state={addState} />
+          <div class="row">
+            <span class="row-label">Add a part:</span>
+            <PartFields state={addState} idp="ap" />
+            <button type="submit">Add part</button>
+          </div>
+        </form>
+        {project.parts.map((part) => (
+          <PartCard project={project} part={part} failed={failed} uses={uses(part.id)} open={part.id === openPart} />
+        ))}
+      </section>
+    </div>
+  );
+};
