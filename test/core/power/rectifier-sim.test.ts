@@ -123,3 +123,28 @@ describe('bad and extreme inputs never hang and never give NaN', () => {
     expect([r.dcMeanV, r.ripplePpV, r.diodePeakA, r.secondaryRmsA].every(Number.isFinite)).toBe(true);
   });
 });
+
+describe('rules of thumb as loose cross-checks (ref §4.1; maker design note [C], "use as a cross-check only")', () => {
+  // 18 V, 100 VA winding at 6 % and 10 % regulation: R_s = Reg x 18^2 / 100 (ref §4.1)
+  const at = (topology: RectifierTopology, reg: number, currentA: number) =>
+    simulateRectifier({ ...refCase(1), topology, secondaryVrms: 18 * (1 + reg), windingResistanceOhm: (reg * 18 * 18) / 100, load: { kind: 'current', currentA } });
+  for (const reg of [0.06, 0.1]) {
+    it(`bridge, ${reg * 100} % regulation: I_AC/I_DC inside the 1.6-2.2 band, peak 4-8 x I_DC`, () => {
+      const r = at('bridge', reg, 3);
+      expect(r.secondaryRmsA / 3).toBeGreaterThanOrEqual(1.6);
+      expect(r.secondaryRmsA / 3).toBeLessThanOrEqual(2.2);
+      expect(r.diodePeakA / 3).toBeGreaterThanOrEqual(4);
+      expect(r.diodePeakA / 3).toBeLessThanOrEqual(8);
+    });
+    it(`half-wave, ${reg * 100} % regulation: I_AC/I_DC near the maker's 2.6 (within 0.3)`, () => {
+      const toleranceRatio = 0.3;
+      expect(Math.abs(at('half-wave', reg, 1.5).secondaryRmsA / 1.5 - 2.6)).toBeLessThanOrEqual(toleranceRatio);
+    });
+    it(`centre-tap, ${reg * 100} % regulation: each half carries the bridge RMS / sqrt(2) (same rectified current)`, () => {
+      const toleranceFraction = 0.03;
+      const b = at('bridge', reg, 3).secondaryRmsA;
+      const ct = at('centre-tap', reg, 3).secondaryRmsA;
+      expect(Math.abs((ct * Math.SQRT2) / b - 1)).toBeLessThanOrEqual(toleranceFraction);
+    });
+  }
+});
