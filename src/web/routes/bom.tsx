@@ -1,7 +1,148 @@
-// Placeholder until the bom pages land: the router exists so app.tsx can mount it.
-import { Hono } from 'hono';
+// Parts-list routes: lines (add, edit, delete), costing view, CSV export, CSV import with preview.
+import { Hono, type Context } from 'hono';
+import { z } from 'zod';
+import type { Project } from '../../core/model';
+import { costProject } from '../../core/cost';
+import { costReportToCsv, planImport, previewImport, rowsToProjectData, guessDelimiter, parseCsv, guessMapping } from '../../core/csv';
+import { loadProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
+import { projectEdit, type ChangeResult } from '../edit';
+import { sendPage } from '../render';
+import { versionField } from '../form';
 import type { Deps } from '../deps';
+import { newId } from '../ids';
+import { lineSchema, lineErrors, lineFrom, mappingFrom, mergeImport } from '../bom-forms';
+import { Layout } from '../../../views/layout';
+import { BomBody } from '../../../views/pages/bom';
+import { ImportPreviewBody, type ImportPreviewProps } from '../../../views/components/bom-import';
+import { ConfirmItemPage } from '../../../views/components/supply-confirm';
+import type { Failed } from '../../../views/components/failed';
 
-export function bomRoutes(_deps: Deps) {
-  return new Hono();
+export const CSV_IMPORT_LIMIT_BYTES = 2 * 1024 * 1024;
+
+const body = (p: Project, failed?: Failed, notice?: string) => <BomBody project={p} report={costProject(p)} failed={failed} notice={notice} />;
+
+export function bomPage(project: Project, failed?: Failed, notice?: string) {
+  return (
+    <Layout title={`Parts list · ${project.name}`} project={project} section="bom">
+      <link rel="stylesheet" href="/assets/pages.css" />
+      {body(project, failed, notice)}
+    </Layout>
+  );
+}
+
+const gone: ChangeResult = { errors: { _form: 'That line no longer exists (deleted in another window?). The page now shows the stored parts list.' } };
+
+function lineChange(p: Project, d: z.output<typeof lineSchema>, id: string | null): ChangeResult {
+  const errors = lineErrors(p, d);
+  if (errors) return { errors };
+  if (id === null) return { ...p, bom: [...p.bom, lineFrom(newId('b'), d)] };
+  if (!p.bom.some((l) => l.id === id)) return gone;
+  return { ...p, bom: p.bom.map((l) => (l.id === id ? lineFrom(id, d) : l)) };
+}
+
+type ImportState = Omit<ImportPreviewProps, 'project' | 'preview' | 'message'> & { values: Record<string, string> };
+
+/** Read the import request: an uploaded file (first step) or the CSV text carried by the preview form. */
+async function readImport(c: Context): Promise<ImportState | { error: string; status: 413 | 422 }> {
+  const form = await c.req.parseBody();
+  const values: Record<string, string> = {};
+  for (const [k, v] of Object.entries(form)) if (typeof v === 'string') values[k] = v;
+  let csv = values.csv ?? '';
+  let fileName = values.fileName ?? '';
+  const file = form.file;
+  if (file instanceof File && file.size > 0) {
+    if (file.size > CSV_IMPORT_LIMIT_BYTES) return { error: `The file is ${file.size} bytes; the limit is ${CSV_IMPORT_LIMIT_BYTES / 1024 / 1024} MiB.`, status: 413 };
+    csv = await file.text();
+    fileName = file.name;
+  }
+  if (csv.trim() === '') return { error: 'No file was chosen (or it is empty): choose a CSV file and press Preview.', status: 422 };
+  return { values, csv, fileName, stageId: values.stageId ?? '', decimal: values.decimal === ',' ? ',' : '.', takeGoodRows: values.takeGoodRows === 'true' };
+}
+
+export function bomRoutes(deps: Deps) {
+  const app = new Hono();
+  const pageUrl = (p: Project) => `/projects/${p.id}/bom`;
+  const common = { partial: body, page: bomPage, redirect: pageUrl };
+
+  app.get('/projects/:id/bom', async (c) => {
+    const project = await loadProject(deps.database.db, c.req.param('id'));
+    if (!project) return c.notFound();
+    const q = c.req.query();
+    const notice =
+      q.done === 'deleted' ? 'Deleted.' : q.done === 'imported' ? `Imported ${Number(q.lines) || 0} line(s); ${Number(q.parts) || 0} new catalog part(s); ${Number(q.skipped) || 0} refused row(s) skipped.` : undefined;
+    return sendPage(c, bomPage(project, undefined, notice));
+  });
+
+  app.get('/projects/:id/bom.csv', async (c) => {
+    const project = await loadProject(deps.database.db, c.req.param('id'));
+    if (!project) return c.notFound();
+    const semicolon = c.req.query('sep') === 'semicolon';
+    const text = costReportToCsv(costProject(project), { delimiter: semicolon ? ';' : ',' });
+    const fileName = `${project.name.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 60) || 'parts-list'}-parts.csv`;
+    return c.body(text, 200, { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileName}"` });
+  });
+
+  app.post('/projects/:id/bom/lines', projectEdit(deps, { ...common, form: 'add-line', schema: lineSchema, change: (p, d) => lineChange(p, d, null) }));
+  app.post('/projects/:id/bom/lines/:lid', projectEdit(deps, { ...common, form: (c) => `line-${c.req.param('lid')}`, schema: lineSchema, change: (p, d, c) => lineChange(p, d, c.req.param('lid')!) }));
+
+  app.get('/projects/:id/bom/lines/:lid/delete', async (c) => {
+    const project = await loadProject(deps.database.db, c.req.param('id'));
+    const line = project?.bom.find((l) => l.id === c.req.param('lid'));
+    if (!project || !line) return c.notFound();
+    const part = project.parts.find((x) => x.id === line.partId);
+    const what = `the line ${line.refs ? `“${line.refs}” ` : ''}(${line.qtyPerRig} × ${part?.description ?? 'unknown part'})`;
+    return sendPage(c, <ConfirmItemPage project={project} section="bom" title="Delete parts-list line" what={what} action={c.req.path} back={pageUrl(project)} users={[]} also="The part stays in the catalog." />);
+  });
+
+  app.post('/projects/:id/bom/lines/:lid/delete', projectEdit(deps, { ...common, form: (c) => `delete-line-${c.req.param('lid')}`, schema: z.object({}),
+    redirect: (p) => `${pageUrl(p)}?done=deleted`,
+    change: (p, _d, c) => (p.bom.some((l) => l.id === c.req.param('lid')) ? { ...p, bom: p.bom.filter((l) => l.id !== c.req.param('lid')) } : gone),
+  }));
+
+  // ------------------------------------------------------------ CSV import: preview until the user imports
+  app.post('/projects/:id/bom/import', async (c) => {
+    const id = c.req.param('id');
+    const project = await loadProject(deps.database.db, id);
+    if (!project) return c.notFound();
+    const input = await readImport(c);
+    if ('error' in input) return sendPage(c, bomPage(project, { form: 'import', state: { values: {}, errors: { _form: input.error } } }, undefined), input.status);
+    const { values, ...state } = input;
+    const delimiter = guessDelimiter(state.csv);
+    const headers = (parseCsv(state.csv, delimiter).records[0] ?? []).map((h) => h.trim());
+    const mapping = mappingFrom(values, guessMapping(headers), headers.length);
+    const preview = previewImport(state.csv, { kind: 'parts-list', defaultCurrency: project.currency, decimal: state.decimal, delimiter, mapping });
+    const show = (p: Project, status: 200 | 409 | 422, message?: string) =>
+      sendPage(c, <Layout title={`Import preview · ${p.name}`} project={p} section="bom"><link rel="stylesheet" href="/assets/pages.css" /><ImportPreviewBody project={p} preview={preview} message={message} {...state} /></Layout>, status);
+    if (values.action !== 'import') return show(project, 200);
+
+    const stageId = state.stageId === '' ? null : state.stageId;
+    if (stageId !== null && !project.stages.some((s) => s.id === stageId)) return show(project, 422, 'The chosen stage no longer exists; choose another.');
+    const plan = planImport(preview, { takeGoodRows: state.takeGoodRows });
+    if (!plan.ok) {
+      const refused = preview.invalidRows;
+      const why = preview.fileErrors.length ? 'the file or the column choices have problems (listed above)' : `${refused} row(s) are refused`;
+      return show(project, 422, `Nothing was imported: ${why}. Correct the file or the column choices, or tick “Import only the good rows”.`);
+    }
+    const version = versionField.safeParse(values.version);
+    if (!version.success) return show(project, 422, 'The form had no version number; reload the page.');
+    const data = rowsToProjectData(plan.rows, { makeId: (kind) => newId(kind === 'part' ? 'p' : kind === 'offer' ? 'o' : 'b'), stageId, asBomLines: true });
+    let stats = { newParts: 0 };
+    try {
+      await updateProject(deps.database, id, version.data, (p) => {
+        const merged = mergeImport(p, data);
+        stats = merged;
+        return merged.project;
+      }, deps.now().toISOString());
+    } catch (e) {
+      if (e instanceof VersionConflict) {
+        const fresh = (await loadProject(deps.database.db, id)) ?? project;
+        return show(fresh, 409, 'Not imported: this project was changed in another tab or window since the preview was made. The preview now uses the stored project; press Import again to add the rows to it.');
+      }
+      if (e instanceof NotFound) return c.notFound();
+      throw e;
+    }
+    return c.redirect(`${pageUrl(project)}?done=imported&lines=${data.bom.length}&parts=${stats.newParts}&skipped=${new Set(plan.skipped.map((e) => e.row)).size}`, 303);
+  });
+
+  return app;
 }

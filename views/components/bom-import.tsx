@@ -1,0 +1,179 @@
+// CSV import of a parts list: the upload form, and the preview with column choices and per-row errors.
+// Nothing is saved until the user presses Import, and then only if no row is refused (or they chose
+// to import only the good rows).
+import type { FC } from 'hono/jsx';
+import type { Project } from '../../src/core/model';
+import { IMPORT_FIELDS, IMPORT_FIELD_LABELS, type ImportPreview } from '../../src/core/csv';
+import { formatMoney } from '../../src/core/cost/money';
+import { Version } from './supply-transformer';
+
+const stageOptions = (p: Project): [string, string][] => [['', 'General (no stage)'], ...p.stages.map((s): [string, string] => [s.id, s.name])];
+
+export const ImportForm: FC<{ project: Project; error?: string }> = ({ project, error }) => (
+  <form method="post" action={`/projects/${project.id}/bom/import`} enctype="multipart/form-data" class="card add" aria-label="Import a parts list from CSV">
+    <h2>Import lines from a CSV file</h2>
+    <Version version={project.version} />
+    {error ? (
+      <div class="form-errors" role="alert">
+        <p>{error}</p>
+      </div>
+    ) : null}
+    <div class="row">
+      <label class="field" for="imp-file">
+        <span class="label">CSV file (comma, semicolon or tab separated; first row = headers)</span>
+        <input id="imp-file" type="file" name="file" accept=".csv,.txt,text/csv" />
+      </label>
+      <label class="field" for="imp-stage">
+        <span class="label">Stage for the imported lines</span>
+        <select id="imp-stage" name="stageId">
+          {stageOptions(project).map(([v, t]) => (
+            <option value={v}>{t}</option>
+          ))}
+        </select>
+      </label>
+      <button type="submit">Preview…</button>
+    </div>
+    <p class="hint">You will see every row, choose which column is which, and decide before anything is saved.</p>
+  </form>
+);
+
+export interface ImportPreviewProps {
+  project: Project;
+  csv: string;
+  fileName: string;
+  stageId: string;
+  decimal: '.' | ',';
+  takeGoodRows: boolean;
+  preview: ImportPreview;
+  /** Why the last Import press saved nothing (or the version conflict). */
+  message?: string;
+}
+
+export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileName, stageId, decimal, takeGoodRows, preview, message }) => {
+  const colOptions: [string, string][] = [['', '(not imported)'], ...preview.headers.map((h, i): [string, string] => [String(i), `Column ${i + 1}: ${h || '(no header)'}`])];
+  const blocked = preview.fileErrors.length > 0;
+  return (
+    <section class="card import-preview" id="import-preview">
+      <h1>Import preview{fileName ? `: ${fileName}` : ''}</h1>
+      {message ? (
+        <div class="form-errors" role="alert">
+          <p>{message}</p>
+        </div>
+      ) : null}
+      <p class="summary-line">
+        {preview.rows.length} data row(s): <strong>{preview.validRows} good</strong>, <strong>{preview.invalidRows} refused</strong>. Separator “{preview.delimiter === '\t' ? 'tab' : preview.delimiter}”. Nothing has been saved yet.
+      </p>
+      {preview.fileErrors.length ? (
+        <div class="form-errors" role="alert">
+          {preview.fileErrors.map((e) => (
+            <p>
+              {e.column ? `${e.column}: ` : ''}
+              {e.message}
+            </p>
+          ))}
+        </div>
+      ) : null}
+      <form method="post" action={`/projects/${project.id}/bom/import`}>
+        <Version version={project.version} />
+        <input type="hidden" name="fileName" value={fileName} />
+        <textarea name="csv" hidden aria-hidden="true">
+          {csv}
+        </textarea>
+        <h2>Which column is which</h2>
+        <div class="row">
+          {IMPORT_FIELDS.map((f) => (
+            <label class="field" for={`map-${f}`}>
+              <span class="label">{IMPORT_FIELD_LABELS[f]}</span>
+              <select id={`map-${f}`} name={`map_${f}`}>
+                {colOptions.map(([v, t]) => (
+                  <option value={v} selected={String(preview.mapping[f] ?? '') === v}>
+                    {t}
+                  </option>
+                ))}
+              </select>
+            </label>
+          ))}
+          <label class="field" for="imp-decimal">
+            <span class="label">Decimal mark in prices</span>
+            <select id="imp-decimal" name="decimal">
+              <option value="." selected={decimal === '.'}>
+                point (1,250.50)
+              </option>
+              <option value="," selected={decimal === ','}>
+                comma (1.250,50)
+              </option>
+            </select>
+          </label>
+          <label class="field" for="imp-stage2">
+            <span class="label">Stage for the imported lines</span>
+            <select id="imp-stage2" name="stageId">
+              {stageOptions(project).map(([v, t]) => (
+                <option value={v} selected={v === stageId}>
+                  {t}
+                </option>
+              ))}
+            </select>
+          </label>
+        </div>
+        <div class="row">
+          <button type="submit" name="action" value="preview">
+            Update the preview
+          </button>
+          <label class="field check" for="imp-good">
+            <input id="imp-good" type="checkbox" name="takeGoodRows" value="true" checked={takeGoodRows} />
+            <span class="label">Import only the good rows (skip the {preview.invalidRows} refused)</span>
+          </label>
+          <button type="submit" name="action" value="import" class="primary" disabled={blocked}>
+            Import
+          </button>
+          <a href={`/projects/${project.id}/bom`}>Cancel</a>
+        </div>
+      </form>
+      <table class="grid compact import-rows">
+        <thead>
+          <tr>
+            <th>Row</th>
+            <th>Designators</th>
+            <th>Description / value</th>
+            <th>Category</th>
+            <th class="num">Qty</th>
+            <th>Supplier · SKU</th>
+            <th class="num">Price</th>
+            <th>Problems</th>
+          </tr>
+        </thead>
+        <tbody>
+          {preview.rows.map((r) => (
+            <tr class={r.errors.length ? 'refused' : ''}>
+              <td>{r.row}</td>
+              <td>{r.values.refs}</td>
+              <td>
+                {r.values.description}
+                {r.values.value ? <span class="sub"> {r.values.value}</span> : null}
+              </td>
+              <td>{r.values.category}</td>
+              <td class="num">{r.values.quantity ?? '–'}</td>
+              <td>{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
+              <td class="num">{r.values.priceCents === null ? '' : formatMoney(r.values.priceCents, r.values.currency ?? project.currency)}</td>
+              <td>
+                {r.errors.map((e) => (
+                  <span class="row-error">
+                    <span class="sev sev-fail">refused</span> {e.column ? `${e.column}: ` : ''}
+                    {e.message}{' '}
+                  </span>
+                ))}
+                {r.warnings.map((e) => (
+                  <span class="row-warning">
+                    <span class="sev sev-caution">check</span> {e.column ? `${e.column}: ` : ''}
+                    {e.message}{' '}
+                  </span>
+                ))}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p class="hint">Suppliers new to the catalog need a shipping entry on the Parts catalog page; until then their shipping counts as 0.</p>
+    </section>
+  );
+};

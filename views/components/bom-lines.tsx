@@ -1,0 +1,82 @@
+// Parts-list line editor: one form per line laid out as a grid row, and an add-line form.
+import type { FC } from 'hono/jsx';
+import type { BomLine, Project } from '../../src/core/model';
+import { type FieldState } from './fields';
+import { stateFor, type Failed } from './failed';
+import { PField, PSelect } from './supply-fields';
+import { Version, hx } from './supply-transformer';
+
+export function lineValues(l: BomLine | null): Record<string, string> {
+  return l ? { stageId: l.stageId ?? '', partId: l.partId, qty: String(l.qtyPerRig), refs: l.refs, notes: l.notes } : { stageId: '', partId: '', qty: '1', refs: '', notes: '' };
+}
+
+const Errors: FC<{ state: FieldState }> = ({ state }) =>
+  Object.keys(state.errors).length ? (
+    <div class="form-errors bom-span" role="alert">
+      {state.errors._form ? <p>{state.errors._form}</p> : <p>Nothing was saved. Correct the marked fields and save again; what you typed is kept.</p>}
+    </div>
+  ) : null;
+
+const LineFields: FC<{ project: Project; state: FieldState; idp: string }> = ({ project, state, idp }) => {
+  const stages: [string, string][] = [['', 'General (no stage)'], ...project.stages.map((s): [string, string] => [s.id, s.name])];
+  const parts: [string, string][] = project.parts.map((p) => [p.id, `${p.description}${p.category ? ` (${p.category})` : ''}`]);
+  const partsWithPick: [string, string][] = state.values.partId ? parts : [['', 'Choose a part…'], ...parts];
+  return (
+    <>
+      <PSelect idp={idp} name="stageId" label="Stage" state={state} options={stages} cls="bom-stage" />
+      <PSelect idp={idp} name="partId" label="Part" state={state} options={partsWithPick} cls="bom-part" />
+      <PField idp={idp} name="qty" label="Qty per rig" state={state} size={4} cls="bom-qty" />
+      <PField idp={idp} name="refs" label="Designators" state={state} size={10} cls="bom-refs" />
+      <PField idp={idp} name="notes" label="Notes" state={state} size={18} cls="bom-notes" />
+    </>
+  );
+};
+
+export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, failed }) => {
+  const addState = stateFor('add-line', failed, () => lineValues(null));
+  const base = `/projects/${project.id}/bom`;
+  return (
+    <section class="card">
+      <h2>Parts list ({project.bom.length} lines)</h2>
+      <div class="bom-grid" role="table" aria-label="Parts-list lines">
+        <div class="bom-head" role="row">
+          <span role="columnheader">Stage</span>
+          <span role="columnheader">Part</span>
+          <span role="columnheader">Qty per rig</span>
+          <span role="columnheader">Designators</span>
+          <span role="columnheader">Notes</span>
+          <span />
+        </div>
+        {project.bom.map((l) => {
+          const state = stateFor(`line-${l.id}`, failed, () => lineValues(l));
+          return (
+            <form {...hx(`${base}/lines/${l.id}`, '#bom')} class="bom-row" id={`line-${l.id}`} role="row">
+              <Version version={project.version} />
+              <Errors state={state} />
+              <LineFields project={project} state={state} idp={`l-${l.id}`} />
+              <span class="bom-actions">
+                <button type="submit">Save</button>{' '}
+                <a class="danger" href={`${base}/lines/${l.id}/delete`}>
+                  Delete…
+                </a>
+              </span>
+            </form>
+          );
+        })}
+        <form {...hx(`${base}/lines`, '#bom')} class="bom-row add" role="row" aria-label="Add a line">
+          <Version version={project.version} />
+          <Errors state={addState} />
+          <LineFields project={project} state={addState} idp="al" />
+          <span class="bom-actions">
+            <button type="submit">Add line</button>
+          </span>
+        </form>
+      </div>
+      {project.parts.length ? null : (
+        <p class="hint">
+          The catalog is empty: add parts on the <a href={`/projects/${project.id}/parts`}>Parts catalog</a> page first, or import a CSV below.
+        </p>
+      )}
+    </section>
+  );
+};
