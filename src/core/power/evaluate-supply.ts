@@ -34,6 +34,7 @@ const FALLBACK_MAINS: Mains = { nominalV: 230, frequencyHz: 50, lowFraction: 0.1
 
 function requirement(railId: string, marginV: number, children: RegulatedRail[], stated: number | undefined): { v: number; note: string; has: boolean } {
   const margin = Number.isFinite(marginV) ? Math.max(0, marginV) : 0;
+  // Source: three-terminal regulator datasheets, input >= output + dropout at the ripple low point (ref §6.1, §6.2)
   const regNeed = children.map((c) => ({ c, v: regulatorOutputV(c.setting, c.quiescentA) + Math.max(0, c.dropoutV) }));
   const top = regNeed.reduce<{ c: RegulatedRail; v: number } | null>((a, b) => (a === null || b.v > a.v ? b : a), null);
   const st = stated !== undefined && Number.isFinite(stated) && stated > 0 ? stated : null;

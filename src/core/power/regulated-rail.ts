@@ -40,7 +40,7 @@ export function evaluateRegulatedRail(
     const p = parentAt[spec.id] ?? { troughV: 0, meanV: 0 };
     const out = cornerCurrent(outputA, spec.load, keyingDuty);
     const label = rootIsBattery ? `${BATTERY_LABEL[spec.mains]}, ${LOAD_LABEL[spec.load]}` : spec.label;
-    // A regulator that drops out passes its input through less the dropout
+    // Common practice, no published source: a regulator in dropout passes its input through less the dropout
     outputAt[spec.id] = { troughV: Math.max(0, Math.min(vOut, p.troughV - dropout)), meanV: Math.max(0, Math.min(vOut, p.meanV - dropout)) };
     return {
       ...spec, label, outputA: out,
@@ -77,6 +77,7 @@ export function evaluateRegulatedRail(
   } else {
     findings.push({ severity: 'ok', rule: 'regulator.switching', subject: rail.name, value: thermalC.dissipationW, limit: null, unit: 'W', source: 'Energy balance with the module efficiency at its lowest input voltage', message: `${rail.name}: switching module dissipates about ${thermalC.dissipationW.toFixed(2)} W and draws ${worst.inputA.toFixed(3)} A at the lowest input voltage.` });
   }
+  recommendations.push({ topic: 'fuse', text: 'No separate fuse', reasoning: `${rail.name} is current-limited by its regulator${rail.regulator === 'switching' ? ' module' : ' (internal limit and thermal shutdown)'}; the fuse of the rail that feeds it protects the wiring.`, source: 'Common practice, no published source' });
   return {
     report: {
       kind: 'regulated', railId: rail.id, railName: rail.name, parentId: rail.parentId, regulator: rail.regulator, outputV: vOut, dropoutV: dropout,
