@@ -138,7 +138,10 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
     {rail.thermal ? (
       <p class="summary-line">
         Heat: {fv(rail.thermalDissipationW, 'W')} in CW operation, {fv(rail.tuneUpDissipationW, 'W')} with a tune-up carrier; junction{' '}
-        {rail.thermal.junctionC !== null ? fv(rail.thermal.junctionC, '°C') : 'not known (no heatsink chosen)'} against a target of{' '}
+        {rail.thermal.junctionC !== null
+          ? fv(rail.thermal.junctionC, '°C')
+          : `about ${fv(rail.thermal.freeAirJunctionC, '°C')} without a heatsink`}{' '}
+        against a target of{' '}
         {fv(rail.thermal.targetC, '°C')} (0.8 × {fv(rail.thermal.tjMaxC, '°C')}).
       </p>
     ) : null}
@@ -213,12 +216,14 @@ export const SupplyResults: FC<{ report: SupplyReport }> = ({ report }) => {
         {report.mains
           ? `Mains ${fv(report.mains.lowV, 'V')} / ${fv(report.mains.nominalV, 'V')} / ${fv(report.mains.highV, 'V')} at ${fv(report.mains.frequencyHz, 'Hz')}. `
           : 'No mains: battery or external DC supply. '}
-        Headroom is judged at the lowest voltage (low mains, key-down); heat at the highest (high mains, CW duty {pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.
+        {report.mains
+          ? `Headroom is judged at the lowest voltage (low mains, key-down); heat at the highest (high mains, CW duty ${pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.`
+          : `Headroom is judged at the battery's end voltage with the key down; heat with it fully charged (CW duty ${pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.`}
         {report.allConverged ? '' : ' Some simulations did not settle: their rows are marked.'}
       </p>
       <p class="caution-box">
-        Mains and charged capacitors can kill or burn: these are planning figures, not a safety approval. Fuse and earth the
-        supply, discharge reservoirs before touching, and follow your local electrical code and licensed practice.
+        Mains, charged capacitors and shorted batteries can kill or burn: these are planning figures, not a safety approval.
+        Fuse and earth the supply, discharge reservoirs before touching, and follow your local electrical code and licensed practice.
       </p>
       {report.rails.map((r) => (r.kind === 'rectified' ? <RectifiedCard rail={r} /> : r.kind === 'regulated' ? <RegulatedCard rail={r} /> : <BatteryCard rail={r} />))}
       {report.transformers.length || report.primary || general.length ? (

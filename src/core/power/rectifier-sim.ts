@@ -4,9 +4,11 @@
 // over whole mains cycles (never more than maxCycles), which converges in a handful of cycles.
 //
 // Circuit (per conducting path): sinusoidal EMF behind the winding resistance Rw, n diodes in series
-// (each Vf + r_d), reservoir C with series ESR, load = constant current I0 (regulated loads) or a
-// resistance, plus an optional bleeder. Leakage inductance is not modelled (it lowers peak currents).
-// Source: Reference values §4.2 (time-domain script check with the same element model), this project.
+// (each Vf + r_d, piecewise linear), reservoir C with series ESR, load = constant current I0 (regulated
+// loads) or a resistance, plus an optional bleeder. Leakage inductance is not modelled (it lowers peak
+// currents; ref §4.2 says the same). Integration: fixed step, exact exponential solution of each linear
+// piece with the EMF linear across the step. Element model as in the reference values §4.2 script check;
+// verified against its table and against ngspice (test/core/power).
 
 import type { RectifierTopology } from '../model';
 
