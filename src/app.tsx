@@ -4,6 +4,7 @@ import { csrf } from 'hono/csrf';
 import { secureHeaders } from 'hono/secure-headers';
 import { bodyLimit } from 'hono/body-limit';
 import { basicAuth } from 'hono/basic-auth';
+import { HTTPException } from 'hono/http-exception';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, resolve } from 'node:path';
@@ -83,6 +84,11 @@ export function buildApp(deps: Deps) {
     ),
   );
   app.onError((err, c) => {
+    // Middleware refusals (401 without credentials, 403 cross-site post) carry their own response.
+    if (err instanceof HTTPException) {
+      if (err.status === 403) return c.text('Refused: this request did not come from a Rigwright page (cross-site request protection). Nothing was changed.', 403);
+      return err.getResponse();
+    }
     console.error(err);
     return sendPage(
       c,
