@@ -58,6 +58,7 @@ describe('supply page', () => {
       esr: '25 mΩ', bleeder: '', capV: '63 V', capRipple: '4 A', rippleTarget: '', margin: '0', fuse: '3.15 A',
     }, true);
     expect(res.status).toBe(200);
+    expect(await res.text()).toMatch(/<details class="card supply-item rail" id="rail-rail-pa" open/); // the edited rail stays open after the swap
     const r = (await stored()).supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
     expect(r).toMatchObject({ name: 'PA rail', topology: 'centre-tap', diodeDropV: 0.7, bleederOhm: null, capacitorRatedV: 63, ripplePpTargetV: null, fuseA: 3.15 });
     expect(r.reservoirF).toBeCloseTo(0.01, 12);

@@ -83,30 +83,37 @@ export function partsRoutes(deps: Deps) {
     change: (p, d) => withParts(p, [...p.parts, { id: newId('p'), description: d.description, category: d.category, ratings: d.ratings, offers: [] }]),
   }));
 
-  app.post('/projects/:id/parts/:pid', projectEdit(deps, { ...common, form: (c) => `part-${c.req.param('pid')}`, schema: F.partSchema,
+  // After an edit the part stays open (a fresh spec per request knows which part that is).
+  const keepOpen = (c: Context) => ({
+    partial: (p: Project, f?: Failed, n?: string) => <PartsBody project={p} failed={f} notice={n} openPart={c.req.param('pid')} />,
+    page: (p: Project, f?: Failed, n?: string) => partsPage(p, f, n, c.req.param('pid')),
+    redirect: (p: Project) => `${pageUrl(p)}?open=${encodeURIComponent(c.req.param('pid') ?? '')}#part-${c.req.param('pid') ?? ''}`,
+  });
+
+  app.post('/projects/:id/parts/:pid', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `part-${c.req.param('pid')}`, schema: F.partSchema,
     change: (p, d, c) => {
       const pid = c.req.param('pid');
       if (!p.parts.some((x) => x.id === pid)) return gone('part');
       return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, description: d.description, category: d.category, ratings: d.ratings } : x)));
     },
-  }));
+  })(c));
 
-  app.post('/projects/:id/parts/:pid/offers', projectEdit(deps, { ...common, form: (c) => `add-offer-${c.req.param('pid')}`, schema: F.offerSchema,
+  app.post('/projects/:id/parts/:pid/offers', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `add-offer-${c.req.param('pid')}`, schema: F.offerSchema,
     change: (p, d, c) => {
       const pid = c.req.param('pid');
       if (!p.parts.some((x) => x.id === pid)) return gone('part');
       return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, offers: [...x.offers, offerFrom(newId('o'), d)] } : x)));
     },
-  }));
+  })(c));
 
-  app.post('/projects/:id/parts/:pid/offers/:oid', projectEdit(deps, { ...common, form: (c) => `offer-${c.req.param('oid')}`, schema: F.offerSchema,
+  app.post('/projects/:id/parts/:pid/offers/:oid', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `offer-${c.req.param('oid')}`, schema: F.offerSchema,
     change: (p, d, c) => {
       const { pid, oid } = c.req.param();
       const part = p.parts.find((x) => x.id === pid);
       if (!part?.offers.some((o) => o.id === oid)) return gone('offer');
       return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, offers: x.offers.map((o) => (o.id === oid ? offerFrom(oid, d) : o)) } : x)));
     },
-  }));
+  })(c));
 
   // ------------------------------------------------------------ deletes: confirm page, then the post
   type Target = { what: string; users: string[]; also?: string; remove: (p: Project) => Project } | null;

@@ -145,7 +145,12 @@ export function supplyRoutes(deps: Deps) {
     },
   }));
 
-  app.post('/projects/:id/supply/rails/:rid', projectEdit(deps, { ...common, form: (c) => `rail-${c.req.param('rid')}`, schema: rawValues, change: (p, v, c) => editRail(p, v, c) }));
+  // The edited rail stays open after the swap (a fresh spec per request knows which rail that is).
+  app.post('/projects/:id/supply/rails/:rid', (c) =>
+    projectEdit(deps, { ...common, form: `rail-${c.req.param('rid')}`, schema: rawValues, change: (p, v) => editRail(p, v, c),
+      partial: (p, f, n) => body(p, f, n, c.req.param('rid')), page: (p, f, n) => supplyPage(p, f, n, c.req.param('rid')),
+      redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(c.req.param('rid') ?? '')}#rail-${c.req.param('rid') ?? ''}` })(c),
+  );
 
   app.post('/projects/:id/supply/fuse', projectEdit(deps, { ...common, form: 'primary-fuse', schema: F.fuseSchema,
     change: (p, d) => ({ ...p, supply: { ...p.supply, primaryFuseA: d.primaryFuse } }),
