@@ -25,8 +25,35 @@ export interface Fonts {
   charset: Set<number>;
 }
 
+type Fontkit = Parameters<PDFDocument['registerFontkit']>[0];
+type FontkitFont = ReturnType<Fontkit['create']>;
+type Glyph = ReturnType<FontkitFont['glyphForCodePoint']>;
+
+/**
+ * fontkit with a per-character layout: one glyph per code point from glyphForCodePoint, cached. pdf-lib
+ * calls layout() for every string it measures or draws, and full OpenType shaping of each line made a
+ * long parts list take seconds. Latin/Greek text of the pack needs no ligatures or contextual forms;
+ * pdf-lib draws glyphs at their advances (no kerning) either way.
+ */
+const perCharacterFontkit: Fontkit = {
+  create(data, postscriptName) {
+    const font = fontkit.create(data, postscriptName);
+    const cache = new Map<number, Glyph>();
+    const glyphFor = (cp: number): Glyph => {
+      let g = cache.get(cp);
+      if (!g) {
+        g = font.glyphForCodePoint(cp);
+        cache.set(cp, g);
+      }
+      return g;
+    };
+    font.layout = ((text: string) => ({ glyphs: Array.from(text, (ch) => glyphFor(ch.codePointAt(0)!)), positions: [] })) as unknown as FontkitFont['layout'];
+    return font;
+  },
+};
+
 export async function embedFonts(doc: PDFDocument): Promise<Fonts> {
-  doc.registerFontkit(fontkit);
+  doc.registerFontkit(perCharacterFontkit);
   const bytes = await fontBytes();
   // subset: only the glyphs used are written (TTF subsetting works; woff2 subsetting renders blank)
   const regular = await doc.embedFont(bytes.regular, { subset: true });

@@ -104,14 +104,34 @@ export class Layout {
     return clean(text, this.fonts.charset);
   }
 
+  private readonly advance = [new Map<string, number>(), new Map<string, number>()];
+
+  /**
+   * Width of clean text: the sum of glyph advances, cached per character. pdf-lib draws glyphs at their
+   * advances without kerning, so this matches what is drawn, and avoids a fontkit layout per call.
+   */
+  width(text: string, sizePt: number, bold = false): number {
+    const cache = this.advance[bold ? 1 : 0];
+    const font = this.font(bold);
+    let units = 0;
+    for (const ch of text) {
+      let w = cache.get(ch);
+      if (w === undefined) {
+        w = font.widthOfTextAtSize(ch, 1000);
+        cache.set(ch, w);
+      }
+      units += w;
+    }
+    return (units * sizePt) / 1000;
+  }
+
   textWidth(text: string, sizePt: number, bold = false): number {
-    return this.font(bold).widthOfTextAtSize(this.clean(text), sizePt);
+    return this.width(this.clean(text), sizePt, bold);
   }
 
   /** Greedy word wrap; a word longer than the width is broken by characters. */
   wrap(text: string, widthPt: number, sizePt: number, bold = false): string[] {
-    const font = this.font(bold);
-    const fits = (s: string) => font.widthOfTextAtSize(s, sizePt) <= widthPt;
+    const fits = (s: string) => this.width(s, sizePt, bold) <= widthPt;
     const lines: string[] = [];
     let line = '';
     for (const word of this.clean(text).split(' ').filter((w) => w.length > 0)) {
@@ -183,8 +203,7 @@ export class Layout {
     const spanW = this.contentWidthPt - 2 * pad;
     const wrapRow = (row: Row): string[][] =>
       row.span ? [this.wrap(row.cells[0] ?? '', spanW, sizePt, row.bold)] : row.cells.map((c, i) => (columns[i]?.tick ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, row.bold)));
-    const drawRow = (cells: string[], bold: boolean, fill: RGB | null, color: RGB, isHeader: boolean, span = false) => {
-      const wrapped = span ? [this.wrap(cells[0] ?? '', spanW, sizePt, bold)] : cells.map((c, i) => (columns[i]?.tick && !isHeader ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, bold)));
+    const drawRow = (wrapped: string[][], bold: boolean, fill: RGB | null, color: RGB, isHeader: boolean, span = false) => {
       const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
       const top = this.yPt;
       if (fill) this.page.drawRectangle({ x: this.leftPt, y: top - h, width: this.contentWidthPt, height: h, color: fill });
@@ -196,7 +215,7 @@ export class Layout {
           return;
         }
         lines.forEach((line, k) => {
-          const w = this.font(bold).widthOfTextAtSize(line, sizePt);
+          const w = this.width(line, sizePt, bold);
           const lx = col.align === 'right' ? xs[i] + col.width * this.contentWidthPt - pad - w : xs[i] + pad;
           this.drawAt(line, lx, top - pad - (k + 1) * lineH + sizePt * 0.3, sizePt, bold, color);
         });
@@ -205,17 +224,18 @@ export class Layout {
       this.yPt = top - h;
       return h;
     };
-    const headerH = () => Math.max(...columns.map((c, i) => this.wrap(c.header, widthOf(i), sizePt, true).length)) * lineH + 2 * pad;
-    const header = () => drawRow(columns.map((c) => c.header), true, SHADE, INK, true);
-    this.ensure(headerH() + lineH + 2 * pad);
+    const headerLines = columns.map((c, i) => this.wrap(c.header, widthOf(i), sizePt, true));
+    const header = () => drawRow(headerLines, true, SHADE, INK, true);
+    this.ensure(Math.max(...headerLines.map((w) => w.length)) * lineH + lineH + 4 * pad);
     header();
     for (const row of rows) {
-      const h = Math.max(...wrapRow(row).map((w) => w.length)) * lineH + 2 * pad;
+      const wrapped = wrapRow(row);
+      const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
       if (this.yPt - h < this.marginBottomPt) {
         this.newPage();
         header();
       }
-      drawRow(row.cells, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false, row.span);
+      drawRow(wrapped, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false, row.span);
     }
     this.yPt -= 8;
   }
@@ -230,7 +250,7 @@ export class Layout {
       p.drawLine({ start: { x: this.leftPt, y: y + 11 }, end: { x: this.leftPt + this.contentWidthPt, y: y + 11 }, thickness: 0.4, color: RULE });
       const left = this.clean(leftText(i));
       p.drawText(left, { x: this.leftPt, y, size, font: this.fonts.regular, color: GREY });
-      const w = this.fonts.regular.widthOfTextAtSize(right, size);
+      const w = this.width(right, size);
       p.drawText(right, { x: this.leftPt + this.contentWidthPt - w, y, size, font: this.fonts.regular, color: GREY });
     });
   }

@@ -101,15 +101,20 @@ function lpfItems(project: Project, rf: RfView | null): ChecklistItem[] {
 
 function finalItems(project: Project, report: ChecklistReport, stage: Stage, rf: RfView | null): ChecklistItem[] {
   const pa = stage.pa;
+  const biased = !pa || pa.biasIdleMaxA > 0;
   const items: ChecklistItem[] = [
     caution('Connect a 50 Ω dummy load rated for the full output through the low-pass filter before any key-down; never key into an open or unknown antenna.'),
-    caution('Set the bias preset to minimum (no gate bias) before the first key-down.'),
-    step('Power the PA rail through a current limit or a series lamp for the first key-down.'),
   ];
+  if (biased) items.push(caution('Set the bias preset to minimum (no gate bias) before the first key-down.'));
+  items.push(step(project.mains ? 'Power the PA rail through a current limit or a series lamp for the first key-down.' : 'Power the PA from a current-limited bench supply for the first key-down, not straight from the battery.'));
   if (pa) {
     const perMode = stagePerMode(report, stage.id, pa.railId);
-    items.push(measured('Raise the bias slowly, key up, until the idle current reaches {v}; do not exceed it.', perMode?.keyUp ?? null, 'A', 'budget: final, key-up idle'));
-    items.push(measured('The bias preset at its maximum can give up to {v}: leave it at the setting above.', pa.biasIdleMaxA, 'A', 'stage: bias idle maximum', 'caution'));
+    if (biased) {
+      items.push(measured('Raise the bias slowly, key up, until the idle current reaches {v}; do not exceed it.', perMode?.keyUp ?? null, 'A', 'budget: final, key-up idle'));
+      items.push(measured('The bias preset at its maximum can give up to {v}: leave it at the setting above.', pa.biasIdleMaxA, 'A', 'stage: bias idle maximum', 'caution'));
+    } else {
+      items.push(measured(`This class ${pa.amplifierClass} final runs without idle bias: key up, its rail current should be about {v}.`, perMode?.keyUp ?? 0, 'A', 'budget: final, key-up'));
+    }
     const kdA = rf?.paKeyDownA ?? perMode?.keyDown ?? null;
     items.push(measured('Key down for a few seconds: PA rail current about {v}.', kdA, 'A', rf?.paKeyDownA != null ? 'rf: PA key-down current' : 'budget: final, key-down'));
   }

@@ -55,8 +55,8 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null):
   totals.push({ cells: ['Parts and shipping', money(cost.totals.partsCents), money(cost.totals.shippingCents)], bold: true, shade: true });
   l.table([{ header: 'Supplier', width: 0.6 }, { header: 'Parts', width: 0.2, align: 'right' }, { header: 'Shipping', width: 0.2, align: 'right' }], totals);
   const sum: Row[] = [{ cells: ['Build total', money(cost.totals.buildCents)], bold: true }];
-  if (cost.totals.perKitCents !== null) sum.push({ cells: [`Per kit (${cost.kits} kits, shipping shared)`, money(cost.totals.perKitCents)], bold: true });
-  if (cost.totals.perKitPartsCents !== null) sum.push({ cells: ['Per kit, parts only', money(cost.totals.perKitPartsCents)] });
+  if (cost.totals.perKitCents !== null && cost.kits > 1) sum.push({ cells: [`Per kit (${cost.kits} kits, shipping shared)`, money(cost.totals.perKitCents)], bold: true });
+  if (cost.totals.perKitPartsCents !== null && cost.kits > 1) sum.push({ cells: ['Per kit, parts only', money(cost.totals.perKitPartsCents)] });
   if (cost.suggestedSavingsCents > 0) sum.push({ cells: ['Possible saving by buying up to the next price break', money(cost.suggestedSavingsCents)] });
   if (cost.totals.unpricedLines > 0) sum.push({ cells: [`Unpriced lines left out of the totals`, String(cost.totals.unpricedLines)], color: FAIL });
   l.table([{ header: 'Total', width: 0.7 }, { header: cost.currency, width: 0.3, align: 'right' }], sum);
