@@ -16,6 +16,7 @@ import { supplyRoutes } from './web/routes/supply';
 import { stageRoutes } from './web/routes/stage';
 import { rfRoutes } from './web/routes/rf';
 import { packRoutes } from './web/routes/pack';
+import { netlistRoutes } from './web/routes/netlists';
 import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
@@ -66,6 +67,7 @@ export function buildApp(deps: Deps) {
   app.route('/', supplyRoutes(deps));
   app.route('/', rfRoutes(deps));
   app.route('/', packRoutes(deps));
+  app.route('/', netlistRoutes(deps));
   app.route('/', partsRoutes(deps));
   app.route('/', bomRoutes(deps));
 

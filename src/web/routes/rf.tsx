@@ -3,7 +3,6 @@ import { Hono } from 'hono';
 import { z } from 'zod';
 import type { Project } from '../../core/model';
 import { evaluate } from '../../core/evaluate';
-import { designLpf, lpfNetlist } from '../../core/rf';
 import { loadProject } from '../../db/projects';
 import { num, pct, choice, checkbox } from '../form';
 import { projectEdit } from '../edit';
@@ -61,14 +60,5 @@ export function rfRoutes(deps: Deps) {
       page,
     }),
   );
-  app.get('/projects/:id/stages/:sid/lpf.cir', async (c) => {
-    const p = await loadProject(deps.database.db, c.req.param('id'));
-    const stage = p?.stages.find((s) => s.id === c.req.param('sid'));
-    if (!p || !stage?.lpf) return c.notFound();
-    const d = designLpf(stage.lpf, p.frequencyHz);
-    if (!d.ok) return c.text(`The filter data has errors, so no netlist was made:\n${d.errors.map((e) => `${e.field}: ${e.message}`).join('\n')}\n`, 422);
-    c.header('Content-Disposition', `attachment; filename="${stage.id}-lpf.cir"`);
-    return c.body(lpfNetlist(d.value), 200, { 'Content-Type': 'text/plain; charset=utf-8' });
-  });
   return app;
 }
