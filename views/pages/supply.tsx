@@ -3,7 +3,7 @@
 import type { Child, FC } from 'hono/jsx';
 import type { Project } from '../../src/core/model';
 import { formatInput } from '../../src/core/units';
-import { FormErrors } from '../components/fields';
+import { FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { PField, PSelect } from '../components/supply-fields';
 import { TransformerCard, Version, hx } from '../components/supply-transformer';
@@ -27,6 +27,29 @@ function sourceOptions(p: Project): [string, string][] {
   return [...w, ...r, ['battery', 'Battery (or external DC source)']];
 }
 
+const AddTransformer: FC<{ project: Project; state: FieldState }> = ({ project, state }) => (
+  <form {...hx(`/projects/${project.id}/supply/transformers`)} class="card add" aria-label="Add a transformer">
+    <Version version={project.version} />
+    <FormErrors state={state} />
+    <div class="row">
+      <PField idp="at" name="name" label="New transformer" state={state} size={24} hint="e.g. T1 mains transformer" />
+      <PSelect idp="at" name="construction" label="Construction" state={state} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
+      <button type="submit">Add transformer</button>
+    </div>
+  </form>
+);
+
+const PrimaryFuse: FC<{ project: Project; state: FieldState }> = ({ project, state }) => (
+  <form {...hx(`/projects/${project.id}/supply/fuse`)} class="card" aria-label="Primary fuse">
+    <Version version={project.version} />
+    <FormErrors state={state} />
+    <div class="row">
+      <PField idp="pf" name="primaryFuse" label="Fitted primary (mains) fuse" unit="A" state={state} size={6} hint="empty = recommend one" />
+      <button type="submit">Save fuse</button>
+    </div>
+  </form>
+);
+
 export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, failed, notice, openRail }) => {
   const base = `/projects/${project.id}/supply`;
   const addTrafo = stateFor('add-transformer', failed, () => ({ name: '', construction: 'laminated' }));
@@ -45,36 +68,34 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
           <p>{deleteError}</p>
         </div>
       ) : null}
-      <p class="caution-box">
-        Mains wiring, charged reservoir capacitors and hot regulators can injure. Fuse the primary, earth the chassis, fit
-        bleeders, and follow your local electrical code; these figures are planning aids, not a safety approval. Mains
-        voltage and frequency are set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
-      </p>
+      {project.mains ? (
+        <p class="caution-box">
+          Mains wiring, charged reservoir capacitors and hot regulators can injure. Fuse the primary, earth the chassis, fit
+          bleeders, and follow your local electrical code; these figures are planning aids, not a safety approval. Mains
+          voltage and frequency are set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
+        </p>
+      ) : (
+        <p class="caution-box">
+          This station runs from a battery or external DC (set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page).
+          A battery can deliver a very large fault current: fuse the positive lead close to the battery, and charge it only with a
+          charger made for its chemistry. These figures are planning aids, not a safety approval.
+        </p>
+      )}
       <div class="supply-sections">
         <section>
           <h2>Transformers</h2>
-          {project.supply.transformers.length ? (
-            project.supply.transformers.map((t) => <TransformerCard project={project} t={t} failed={failed} />)
+          {project.supply.transformers.map((t) => (
+            <TransformerCard project={project} t={t} failed={failed} />
+          ))}
+          {project.mains ? (
+            <>
+              {project.supply.transformers.length ? null : <p class="hint">No transformer yet: add the mains transformer, then its secondaries.</p>}
+              <AddTransformer project={project} state={addTrafo} />
+              <PrimaryFuse project={project} state={fuse} />
+            </>
           ) : (
-            <p class="hint">{project.mains ? 'No transformer yet.' : 'A battery / DC station needs no transformer.'}</p>
+            <p class="hint">A battery / DC station needs no mains transformer or primary fuse.</p>
           )}
-          <form {...hx(`${base}/transformers`)} class="card add" aria-label="Add a transformer">
-            <Version version={project.version} />
-            <FormErrors state={addTrafo} />
-            <div class="row">
-              <PField idp="at" name="name" label="New transformer" state={addTrafo} size={24} hint="e.g. T1 mains transformer" />
-              <PSelect idp="at" name="construction" label="Construction" state={addTrafo} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
-              <button type="submit">Add transformer</button>
-            </div>
-          </form>
-          <form {...hx(`${base}/fuse`)} class="card" aria-label="Primary fuse">
-            <Version version={project.version} />
-            <FormErrors state={fuse} />
-            <div class="row">
-              <PField idp="pf" name="primaryFuse" label="Fitted primary (mains) fuse" unit="A" state={fuse} size={6} hint="empty = recommend one" />
-              <button type="submit">Save fuse</button>
-            </div>
-          </form>
         </section>
         <section>
           <h2>Rails</h2>
