@@ -72,10 +72,11 @@ function trItems(stage: Stage, rf: RfView | null): ChecklistItem[] {
   const r = stage.relay;
   const items: ChecklistItem[] = [step('Key the rig with the final unpowered and listen for the relay; confirm the receiver mutes and recovers.')];
   if (!r) return items;
-  const settleS = (rf?.relayOperateS ?? r.operateS) + (rf?.relayBounceS ?? r.bounceS);
+  const settleS = r.operateS + r.bounceS;
+  const marginS = rf?.relayMarginS ?? r.txDelayS - settleS;
   items.push(measured('Relay operate time plus bounce is {v}; on a scope, the contacts must settle before RF appears.', settleS, 's', 'stage: relay operate + bounce'));
-  items.push(measured('Transmit delay after the relay is keyed is {v}; it must exceed the settle time above.', rf?.txDelayS ?? r.txDelayS, 's', 'stage: T/R delay', r.txDelayS < settleS ? 'caution' : 'normal'));
-  items.push(measured('Relay release time {v}: no RF may reach the receiver while the contacts open.', rf?.relayReleaseS ?? r.releaseS, 's', 'stage: relay release'));
+  items.push(measured(`Transmit delay after the relay is keyed is {v}, ${fmt(marginS, 's')} ${marginS < 0 ? 'SHORT of' : 'beyond'} the settle time above.`, r.txDelayS, 's', rf?.relayMarginS != null ? 'rf: T/R timing' : 'stage: T/R delay', marginS < 0 ? 'caution' : 'normal'));
+  items.push(measured('Relay release time {v}: no RF may reach the receiver while the contacts open.', r.releaseS, 's', 'stage: relay release'));
   return items;
 }
 
@@ -84,7 +85,8 @@ function lpfItems(project: Project, rf: RfView | null): ChecklistItem[] {
   if (rf && rf.lpfElements.length > 0) {
     for (const e of rf.lpfElements) {
       const unit = e.kind === 'capacitor' ? 'F' : 'H';
-      items.push(measured(`${e.label}: ${e.partsText} (target {v}).`, e.builtValue, unit, 'rf: filter design'));
+      const how = e.kind === 'capacitor' ? `fit ${e.partsText}` : `wind ${e.partsText}${rf.lpfCoreName ? ` on the ${rf.lpfCoreName}` : ''}`;
+      items.push(measured(`${e.label}: ${how}, giving {v} (ideal ${fmt(e.idealValue, unit)}).`, e.builtValue, unit, 'rf: filter design'));
     }
     items.push(measured('Cutoff of the design: {v}.', rf.lpfCutoffHz, 'Hz', 'rf: filter design'));
   } else {

@@ -49,10 +49,6 @@ export interface RfView {
   s21: { frequencyHz: number; gainDb: number }[];
   harmonicRule: string;
   harmonics: RfHarmonicView[];
-  relayOperateS: number | null;
-  relayReleaseS: number | null;
-  relayBounceS: number | null;
-  txDelayS: number | null;
   /** T/R delay minus (operate + bounce), s; negative = RF on moving contacts. */
   relayMarginS: number | null;
   exposure: RfExposureView[];
@@ -107,10 +103,6 @@ export function rfView(rf: RfReport | null): RfView | null {
       marginDb: h.marginDb,
       severity: h.severity,
     })),
-    relayOperateS: null,
-    relayReleaseS: null,
-    relayBounceS: null,
-    txDelayS: null,
     relayMarginS: relay?.hotSwitchMarginS ?? null,
     exposure,
   };
