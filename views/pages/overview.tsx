@@ -3,6 +3,7 @@ import type { FC } from 'hono/jsx';
 import type { Project, Stage } from '../../src/core/model';
 import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
 import type { EvaluationReport } from '../../src/core/evaluate';
+import type { Finding } from '../../src/core/findings';
 import { formatInput, formatValue } from '../../src/core/units';
 import { Field, Select, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
@@ -141,6 +142,63 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
   );
 };
 
+const SECTIONS: { key: string; label: string; path: string; findings: (r: EvaluationReport) => Finding[] }[] = [
+  { key: 'budget', label: 'Current budget', path: '', findings: (r) => r.budget.findings },
+  { key: 'supply', label: 'Supply', path: '/supply', findings: (r) => r.supply?.findings ?? [] },
+  { key: 'rf', label: 'RF checks', path: '/rf', findings: (r) => r.rf.findings },
+  { key: 'cost', label: 'Parts and cost', path: '/bom', findings: (r) => r.cost.findings },
+];
+
+/** Counts per section and the findings that need attention; the detail lives on each section's page. */
+const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ project, report }) => {
+  const attention = report.findings.filter((f) => f.severity !== 'ok');
+  return (
+    <section class="card" id="checks">
+      <h2>Checks at a glance</h2>
+      <table class="grid summary">
+        <thead>
+          <tr>
+            <th>Section</th>
+            <th class="num">Fail</th>
+            <th class="num">Caution</th>
+            <th class="num">OK</th>
+          </tr>
+        </thead>
+        <tbody>
+          {SECTIONS.map((s) => {
+            const f = s.findings(report);
+            const n = (sev: string) => f.filter((x) => x.severity === sev).length;
+            return (
+              <tr>
+                <td>
+                  <a href={`/projects/${project.id}${s.path}`}>{s.label}</a>
+                </td>
+                <td class="num">{n('fail') ? <span class="sev sev-fail">{n('fail')}</span> : '0'}</td>
+                <td class="num">{n('caution') ? <span class="sev sev-caution">{n('caution')}</span> : '0'}</td>
+                <td class="num">{n('ok')}</td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+      {attention.length ? (
+        <>
+          <h3>Needs attention ({attention.length})</h3>
+          <ul class="findings">
+            {attention.map((f) => (
+              <li class={`finding sev-${f.severity}`}>
+                <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="source">({f.source})</span>
+              </li>
+            ))}
+          </ul>
+        </>
+      ) : (
+        <p>No check fails or needs caution.</p>
+      )}
+    </section>
+  );
+};
+
 export const OverviewBody: FC<{ project: Project; report: EvaluationReport; failed?: Failed; notice?: string }> = ({ project, report, failed, notice }) => {
   const railName = (id: string) => project.supply.rails.find((r) => r.id === id)?.name ?? `(missing rail ${id})`;
   const addState = stateFor('add-stage', failed, () => ({ kind: 'receiver', name: '' }));
@@ -172,18 +230,7 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
         </section>
         <BudgetTable budget={report.budget} />
       </div>
-      {report.findings.length ? (
-        <section class="card">
-          <h2>Findings</h2>
-          <ul class="findings">
-            {report.findings.map((f) => (
-              <li class={`finding sev-${f.severity}`}>
-                <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="source">({f.source})</span>
-              </li>
-            ))}
-          </ul>
-        </section>
-      ) : null}
+      <ChecksSummary project={project} report={report} />
     </div>
   );
 };
