@@ -39,10 +39,10 @@ export function batteryFindings(battery: BatteryRail, requiredMinV: number, load
   const out: Finding[] = [];
   const subject = battery.name;
   if (!(battery.fullV >= battery.endV) || !(battery.endV > 0)) {
-    out.push({ severity: 'fail', rule: 'battery.window', subject, value: battery.endV, limit: battery.fullV, unit: 'V', source: 'Battery data', message: `${subject}: the end-of-discharge voltage must be above 0 V and not above the full-charge voltage.` });
+    out.push({ severity: 'fail', rule: 'battery.window', subject, value: battery.endV, limit: battery.fullV, unit: 'V', source: 'Battery data', message: `The end-of-discharge voltage must be above 0 V and not above the full-charge voltage.` });
   }
   if (!(battery.capacityAh > 0)) {
-    out.push({ severity: 'fail', rule: 'battery.capacity', subject, value: battery.capacityAh, limit: null, unit: 'Ah', source: 'Battery data', message: `${subject}: enter the capacity to get a runtime.` });
+    out.push({ severity: 'fail', rule: 'battery.capacity', subject, value: battery.capacityAh, limit: null, unit: 'Ah', source: 'Battery data', message: `Enter the capacity to get a runtime.` });
   }
   if (requiredMinV > 0) {
     const base = { rule: 'battery.end-voltage', subject, value: loadedEnd, limit: requiredMinV, unit: 'V', source: 'Regulator dropout (ref §6.1, §6.2) against the battery end-of-discharge voltage under key-down load' };
@@ -53,11 +53,11 @@ export function batteryFindings(battery: BatteryRail, requiredMinV: number, load
         ? `${subject}: even fully charged the voltage under key-down load (${fullLoaded.toFixed(2)} V) is below the ${requiredMinV.toFixed(2)} V the regulators need.`
         : `${subject}: near end of discharge the voltage under key-down load falls to ${loadedEnd.toFixed(2)} V, below the ${requiredMinV.toFixed(2)} V the regulators need; the regulators drop out before the battery is flat, so less capacity is usable than the runtime shows.` });
     } else {
-      out.push({ ...base, severity: 'ok', message: `${subject}: at end of discharge under key-down load (${loadedEnd.toFixed(2)} V) the regulators still have their headroom.` });
+      out.push({ ...base, severity: 'ok', message: `At end of discharge under key-down load (${loadedEnd.toFixed(2)} V) the regulators still have their headroom.` });
     }
   }
   if (runtime.runtimeS > 0) {
-    out.push({ severity: 'ok', rule: 'battery.runtime', subject, value: runtime.runtimeS, limit: null, unit: 's', source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2)', message: `${subject}: about ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ${(runtime.averageA * 1000).toFixed(0)} mA average.` });
+    out.push({ severity: 'ok', rule: 'battery.runtime', subject, value: runtime.runtimeS, limit: null, unit: 's', source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2)', message: `About ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ${(runtime.averageA * 1000).toFixed(0)} mA average.` });
   }
   return out;
 }

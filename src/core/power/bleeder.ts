@@ -53,13 +53,13 @@ export function bleederReport(capacitanceF: number, startV: number, esrOhm: numb
 export function bleederFindings(railName: string, b: BleederReport): Finding[] {
   const base = { rule: 'bleeder.discharge', subject: `${railName} reservoir`, source: SOURCE };
   if (b.startV <= b.thresholdV) {
-    return [{ ...base, severity: 'ok', value: b.startV, limit: b.thresholdV, unit: 'V', message: `${railName}: at most ${b.startV.toFixed(1)} V, below the ${b.thresholdV} V d.c. shock threshold; the ${b.storedJ.toFixed(1)} J stored can still spark and burn, so discharge before working on it.` }];
+    return [{ ...base, severity: 'ok', value: b.startV, limit: b.thresholdV, unit: 'V', message: `At most ${b.startV.toFixed(1)} V, below the ${b.thresholdV} V d.c. shock threshold; the ${b.storedJ.toFixed(1)} J stored can still spark and burn, so discharge before working on it.` }];
   }
   if (b.fittedOhm === null || b.fittedTimeS === null) {
-    return [{ ...base, severity: 'fail', value: b.startV, limit: b.thresholdV, unit: 'V', message: `${railName}: the reservoir holds ${b.startV.toFixed(0)} V after switch-off and has no bleeder; fit one (suggested ${b.suggestedOhm ? (b.suggestedOhm / 1000).toPrecision(2) + ' kΩ' : 'see recommendation'}) and always check with a meter. Follow your local electrical code.` }];
+    return [{ ...base, severity: 'fail', value: b.startV, limit: b.thresholdV, unit: 'V', message: `The reservoir holds ${b.startV.toFixed(0)} V after switch-off and has no bleeder; fit one (suggested ${b.suggestedOhm ? (b.suggestedOhm / 1000).toPrecision(2) + ' kΩ' : 'see recommendation'}) and always check with a meter. Follow your local electrical code.` }];
   }
   if (b.fittedTimeS > b.allowedS) {
-    return [{ ...base, severity: 'fail', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `${railName}: the fitted bleeder takes ${b.fittedTimeS.toFixed(1)} s to bring the reservoir below ${b.thresholdV} V; ${b.allowedS} s is the usual limit. Use a smaller resistor.` }];
+    return [{ ...base, severity: 'fail', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `The fitted bleeder takes ${b.fittedTimeS.toFixed(1)} s to bring the reservoir below ${b.thresholdV} V; ${b.allowedS} s is the usual limit. Use a smaller resistor.` }];
   }
-  return [{ ...base, severity: 'ok', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `${railName}: the bleeder brings the reservoir below ${b.thresholdV} V in ${b.fittedTimeS.toFixed(1)} s. Still check with a meter before touching.` }];
+  return [{ ...base, severity: 'ok', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `The bleeder brings the reservoir below ${b.thresholdV} V in ${b.fittedTimeS.toFixed(1)} s. Still check with a meter before touching.` }];
 }

@@ -61,20 +61,20 @@ export function fittedFuseFindings(subject: string, fittedA: number | null, rec:
   if (fittedA === null) return [];
   const base = { rule: 'fuse.rating', subject, value: fittedA, unit: 'A', source: SOURCE };
   if (!(fittedA > 0) || !Number.isFinite(fittedA)) {
-    return [{ ...base, value: null, limit: rec.ratedA, severity: 'fail', message: `${subject}: the fitted fuse rating is not a valid current.` }];
+    return [{ ...base, value: null, limit: rec.ratedA, severity: 'fail', message: `The fitted fuse rating is not a valid current.` }];
   }
   if (fittedA < rec.loadA) {
-    return [{ ...base, limit: rec.loadA, severity: 'fail', message: `${subject}: a ${fmtA(fittedA)} fuse is below the ${fmtA(rec.loadA)} it must carry and will blow in use; fit T${rec.ratedA !== null ? fmtA(rec.ratedA) : '?'}.` }];
+    return [{ ...base, limit: rec.loadA, severity: 'fail', message: `A ${fmtA(fittedA)} fuse is below the ${fmtA(rec.loadA)} it must carry and will blow in use; fit T${rec.ratedA !== null ? fmtA(rec.ratedA) : '?'}.` }];
   }
   if (rec.ratedA === null) return [];
   if (fittedA < rec.ratedA * (1 - 1e-9)) {
-    return [{ ...base, limit: rec.ratedA, severity: 'caution', message: `${subject}: a ${fmtA(fittedA)} fuse is smaller than the recommended T${fmtA(rec.ratedA)}; it may blow at switch-on or during long key-down.` }];
+    return [{ ...base, limit: rec.ratedA, severity: 'caution', message: `A ${fmtA(fittedA)} fuse is smaller than the recommended T${fmtA(rec.ratedA)}; it may blow at switch-on or during long key-down.` }];
   }
   const sorted = [...series].sort((a, b) => a - b);
   const idx = sorted.findIndex((v) => v >= rec.ratedA! * (1 - 1e-9));
   const ceiling = sorted[Math.min(sorted.length - 1, idx + 2)];
   if (fittedA > ceiling * (1 + 1e-9)) {
-    return [{ ...base, limit: ceiling, severity: 'caution', message: `${subject}: a ${fmtA(fittedA)} fuse is much larger than the recommended T${fmtA(rec.ratedA)}; a fault could overheat the winding or wiring before it blows.` }];
+    return [{ ...base, limit: ceiling, severity: 'caution', message: `A ${fmtA(fittedA)} fuse is much larger than the recommended T${fmtA(rec.ratedA)}; a fault could overheat the winding or wiring before it blows.` }];
   }
-  return [{ ...base, limit: rec.ratedA, severity: 'ok', message: `${subject}: the fitted ${fmtA(fittedA)} fuse suits the load (recommended T${fmtA(rec.ratedA)}).` }];
+  return [{ ...base, limit: rec.ratedA, severity: 'ok', message: `The fitted ${fmtA(fittedA)} fuse suits the load (recommended T${fmtA(rec.ratedA)}).` }];
 }

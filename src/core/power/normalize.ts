@@ -11,7 +11,7 @@ export function normalizeSupply(supply: Supply): { supply: Supply; findings: Fin
   const walk = (v: unknown, key: string, owner: string): unknown => {
     if (typeof v === 'number') {
       if (Number.isFinite(v)) return v;
-      findings.push({ severity: 'fail', rule: 'input.number', subject: owner, value: null, limit: null, unit: '', source: 'Input check', message: `${owner}: "${key}" is not a usable number; it is treated as ${NULLABLE.has(key) ? 'not entered' : '0'}.` });
+      findings.push({ severity: 'fail', rule: 'input.number', subject: owner, value: null, limit: null, unit: '', source: 'Input check', message: `"${key}" is not a usable number; it is treated as ${NULLABLE.has(key) ? 'not entered' : '0'}.` });
       return NULLABLE.has(key) ? null : 0;
     }
     if (Array.isArray(v)) return v.map((x) => walk(x, key, owner));

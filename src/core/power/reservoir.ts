@@ -69,21 +69,21 @@ export function reservoirFindings(
   if (fittedRatedV !== null) {
     const need = noLoadPeakHighV * CAP_VOLTAGE_MARGIN;
     const base = { rule: 'reservoir.voltage', subject, value: fittedRatedV, unit: 'V', source: srcV };
-    if (fittedRatedV < noLoadPeakHighV) out.push({ ...base, limit: noLoadPeakHighV, severity: 'fail', message: `${subject}: rated ${fittedRatedV} V but it sees ${noLoadPeakHighV.toFixed(1)} V with no load at high mains; it can vent or explode. Fit a higher-voltage part.` });
-    else if (fittedRatedV < need) out.push({ ...base, limit: need, severity: 'caution', message: `${subject}: rated ${fittedRatedV} V against a ${noLoadPeakHighV.toFixed(1)} V no-load peak leaves under 20 % margin; mains surges can exceed it.` });
-    else out.push({ ...base, limit: need, severity: 'ok', message: `${subject}: the ${fittedRatedV} V rating covers the ${noLoadPeakHighV.toFixed(1)} V no-load peak with margin.` });
+    if (fittedRatedV < noLoadPeakHighV) out.push({ ...base, limit: noLoadPeakHighV, severity: 'fail', message: `Rated ${fittedRatedV} V but it sees ${noLoadPeakHighV.toFixed(1)} V with no load at high mains; it can vent or explode. Fit a higher-voltage part.` });
+    else if (fittedRatedV < need) out.push({ ...base, limit: need, severity: 'caution', message: `Rated ${fittedRatedV} V against a ${noLoadPeakHighV.toFixed(1)} V no-load peak leaves under 20 % margin; mains surges can exceed it.` });
+    else out.push({ ...base, limit: need, severity: 'ok', message: `The ${fittedRatedV} V rating covers the ${noLoadPeakHighV.toFixed(1)} V no-load peak with margin.` });
   }
   if (fittedRippleA !== null) {
     const base = { rule: 'reservoir.ripple-current', subject, value: thermalRippleA, limit: fittedRippleA, unit: 'A', source: 'Simulated capacitor RMS current against the maker\'s ripple-current rating (ref §4.1, §4.2)' };
-    if (thermalRippleA > fittedRippleA) out.push({ ...base, severity: 'fail', message: `${subject}: ripple current ${thermalRippleA.toFixed(2)} A RMS in normal operation exceeds the ${fittedRippleA} A rating; the capacitor runs hot and its life is short. Use a larger part or two in parallel.` });
-    else if (tuneUpRippleA > fittedRippleA) out.push({ ...base, value: tuneUpRippleA, severity: 'caution', message: `${subject}: with a continuous carrier the ripple current (${tuneUpRippleA.toFixed(2)} A) exceeds the ${fittedRippleA} A rating; keep tune-up short.` });
-    else out.push({ ...base, severity: 'ok', message: `${subject}: ripple current ${thermalRippleA.toFixed(2)} A RMS is within its ${fittedRippleA} A rating.` });
+    if (thermalRippleA > fittedRippleA) out.push({ ...base, severity: 'fail', message: `Ripple current ${thermalRippleA.toFixed(2)} A RMS in normal operation exceeds the ${fittedRippleA} A rating; the capacitor runs hot and its life is short. Use a larger part or two in parallel.` });
+    else if (tuneUpRippleA > fittedRippleA) out.push({ ...base, value: tuneUpRippleA, severity: 'caution', message: `With a continuous carrier the ripple current (${tuneUpRippleA.toFixed(2)} A) exceeds the ${fittedRippleA} A rating; keep tune-up short.` });
+    else out.push({ ...base, severity: 'ok', message: `Ripple current ${thermalRippleA.toFixed(2)} A RMS is within its ${fittedRippleA} A rating.` });
   }
   if (ripplePpTargetV !== null && ripplePpTargetV > 0) {
     const base = { rule: 'reservoir.ripple', subject, value: worstRipplePpV, limit: ripplePpTargetV, unit: 'V', source: 'Time-domain simulation of the rectifier (this program), low mains, key-down' };
     out.push(worstRipplePpV > ripplePpTargetV
-      ? { ...base, severity: 'caution', message: `${subject}: ripple ${worstRipplePpV.toFixed(2)} V p-p at key-down exceeds the ${ripplePpTargetV} V target; more capacitance is needed.` }
-      : { ...base, severity: 'ok', message: `${subject}: ripple ${worstRipplePpV.toFixed(2)} V p-p meets the ${ripplePpTargetV} V target.` });
+      ? { ...base, severity: 'caution', message: `Ripple ${worstRipplePpV.toFixed(2)} V p-p at key-down exceeds the ${ripplePpTargetV} V target; more capacitance is needed.` }
+      : { ...base, severity: 'ok', message: `Ripple ${worstRipplePpV.toFixed(2)} V p-p meets the ${ripplePpTargetV} V target.` });
   }
   return out;
 }
