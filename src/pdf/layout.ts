@@ -190,7 +190,7 @@ export class Layout {
   }
 
   /** A table: wrapped cells, the header row repeated at the top of every page it runs onto. */
-  table(columns: Column[], rows: Row[], sizePt = 8.5): void {
+  table(columns: Column[], rows: Row[], sizePt = 8.5, continuedLabel = ''): void {
     const pad = 3;
     const lineH = sizePt * 1.25;
     const xs: number[] = [];
@@ -233,6 +233,7 @@ export class Layout {
       const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
       if (this.yPt - h < this.marginBottomPt) {
         this.newPage();
+        if (continuedLabel) this.text(`${continuedLabel} (continued)`, { sizePt: 8, color: GREY, afterPt: 3 });
         header();
       }
       drawRow(wrapped, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false, row.span);

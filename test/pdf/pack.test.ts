@@ -71,6 +71,7 @@ describe('club pack (8 kits, mains)', () => {
     expect(all).toContain('kΩ');
     expect(all).toContain('µF');
     expect(all).toContain('°C');
+    expect(all).not.toMatch(/NaN|Infinity|undefined|\[object/);
   });
 
   it.skipIf(!hasPoppler)('draws the plots as vector paths: no raster images in the file', () => {
@@ -112,5 +113,19 @@ describe('pack with nothing but the budget', () => {
     expect(all).toContain('RF design: not computed.');
     expect(all).toContain('Costing: not computed.');
     expect(all).toContain('Odd name');
+  });
+});
+
+describe('pack for a brand-new, empty project', () => {
+  it.skipIf(!hasPoppler)('renders without crashing and without NaN in the text', async () => {
+    const { newProject } = await import('../../src/core/new-project');
+    const { evaluate } = await import('../../src/core/evaluate');
+    for (const mains of [null, { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 }]) {
+      const p = newProject('p-empty', 'Empty', 7.03e6, 5, mains);
+      const bytes = await buildPack(p, evaluate(p), { paper: 'a4', dataDate: DATE });
+      const text = pagesText(writeTemp(bytes, 'empty.pdf')).join('\n');
+      expect(text).toContain('Safety checklist');
+      expect(text).not.toMatch(/NaN|Infinity|undefined/);
+    }
   });
 });

@@ -47,7 +47,7 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null):
     }
     rows.push({ cells: ['', `Subtotal ${st.name}`, '', '', '', '', money(st.partsCents)], bold: true });
   }
-  l.table(columns, rows);
+  l.table(columns, rows, 8.5, 'Costed parts list');
 
   l.heading('Totals', 2, 80);
   const totals: Row[] = [];
@@ -88,6 +88,8 @@ export function packingSheets(l: Layout, project: Project, cost: CostReport | nu
         { header: 'Stage', width: 0.25 },
       ],
       rows,
+      8.5,
+      `Packing sheet — kit ${k} of ${project.kits}`,
     );
     l.text(`${lines.length} lines. Spares and attrition stock stay with the organiser${cost ? ` (ordered for the whole build: ${cost.lines.reduce((a, x) => a + x.orderQty, 0)} pieces)` : ''}.`, { sizePt: 8, color: GREY });
   }
