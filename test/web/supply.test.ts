@@ -6,6 +6,8 @@ import { openDatabase, type Database } from '../../src/db/client';
 import { loadProject } from '../../src/db/projects';
 import { seedDemo } from '../../seed-demo/index';
 import type { Project, RegulatedRail, RectifiedRail } from '../../src/core/model';
+import { evaluate } from '../../src/core/evaluate';
+import { formatValue } from '../../src/core/units';
 
 const ID = 'demo-club-30m';
 let database: Database;
@@ -35,6 +37,10 @@ describe('supply page', () => {
     expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
     for (const name of ['T1 mains transformer', '16 V winding', '20 V winding', '13.8 V signal rail', 'PA rail (unregulated, ~24 V)']) expect(html).toContain(name);
     expect(html).toContain('id="supply"');
+    // the computed results below the editor are the ones evaluate() gives for the stored project
+    const supply = evaluate(await stored()).supply!;
+    expect(html).toContain('class="supply-results"');
+    expect(html).toContain(`Mains ${formatValue(supply.mains!.lowV, 'V')} / ${formatValue(supply.mains!.nominalV, 'V')} / ${formatValue(supply.mains!.highV, 'V')}`);
   });
 
   it('adds a transformer and a winding, parsing engineering values', async () => {

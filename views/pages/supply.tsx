@@ -114,7 +114,10 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
           </form>
         </section>
       </div>
-      {results}
+      <section class="supply-results-wrap" aria-label="Computed supply results">
+        <h2>Computed supply results</h2>
+        {results}
+      </section>
     </div>
   );
 };

@@ -17,17 +17,15 @@ import type { Failed } from '../../../views/components/failed';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import type { EvaluationReport } from '../../core/evaluate';
+import { SupplyResults } from '../../../views/partials/supply-results';
 
 // Styles of the supply, parts and parts-list pages (style.css is the lead's). Served here until the
 // layout links it; the pages link it themselves meanwhile.
 const PAGES_CSS = readFileSync(fileURLToPath(new URL('../../../views/assets/pages.css', import.meta.url)));
 
-// NOTE: evaluate() does not return `supply` yet and views/partials/supply-results.tsx has not landed;
-// the cast keeps this page working until both exist (then: <SupplyResults report={report.supply} />).
 function supplyResultsFor(report: EvaluationReport) {
-  const supply = (report as EvaluationReport & { supply?: unknown }).supply;
-  if (!supply) return <p class="hint card">The computed supply results (rail voltages at the mains corners, ripple, fuses, heat) will appear here.</p>;
-  return null;
+  if (report.supply) return <SupplyResults report={report.supply} />;
+  return <p class="hint card">No computed supply results: add a rail (and, for a mains station, a transformer with a winding) to see rail voltages at the mains corners, ripple, fuses and heat.</p>;
 }
 
 function body(project: Project, failed?: Failed, notice?: string, openRail?: string) {
