@@ -79,7 +79,15 @@ const SettingsForm: FC<{ project: Project; state: FieldState }> = ({ project, st
   </details>
 );
 
-const StageRow: FC<{ project: Project; stage: Stage; index: number; state: FieldState; railName: (id: string) => string }> = ({ project, stage, index, state, railName }) => {
+const StageRow: FC<{ project: Project; stage: Stage; index: number; state: FieldState; railName: (id: string) => string; report: EvaluationReport }> = ({
+  project,
+  stage,
+  index,
+  state,
+  railName,
+  report,
+}) => {
+  const computed = report.budget.rails.flatMap((r) => r.loads.filter((l) => l.computed && l.stageId === stage.id).map((l) => ({ rail: r.name, currentA: l.currentA })));
   const base = `/projects/${project.id}/stages/${stage.id}`;
   const computedNote = stage.pa ? 'key-down current on the PA rail is computed from the PA model' : stage.relay?.coilRailId ? 'relay coil current is added automatically' : null;
   return (
@@ -134,6 +142,11 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
           </table>
           <button type="submit">Save currents</button>
           {computedNote ? <span class="hint"> Note: {computedNote}.</span> : null}
+          {computed.map((c) => (
+            <p class="computed-load">
+              ◆ Computed and used in the budget ({c.rail}): {MODES.filter((m) => c.currentA[m] > 0).map((m) => `${MODE_LABELS[m]} ${formatValue(c.currentA[m], 'A')}`).join(', ') || 'none'}
+            </p>
+          ))}
         </form>
       ) : (
         <p class="hint">Draws no current from the supply. {stage.kind === 'lpf' ? '' : <a href={base}>Add a load</a>}</p>
@@ -215,7 +228,7 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
           <h2>Stages in build order</h2>
           <ol class="stages">
             {project.stages.map((s, i) => (
-              <StageRow project={project} stage={s} index={i} railName={railName} state={stateFor(`loads-${s.id}`, failed, () => loadValues(s))} />
+              <StageRow project={project} stage={s} index={i} railName={railName} report={report} state={stateFor(`loads-${s.id}`, failed, () => loadValues(s))} />
             ))}
           </ol>
           <form method="post" action={`/projects/${project.id}/stages`} hx-post={`/projects/${project.id}/stages`} hx-target="#overview" hx-swap="outerHTML" class="add-stage">
