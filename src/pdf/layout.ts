@@ -228,6 +228,7 @@ export class Layout {
     const header = () => drawRow(headerLines, true, SHADE, INK, true);
     this.ensure(Math.max(...headerLines.map((w) => w.length)) * lineH + lineH + 4 * pad);
     header();
+    let group: Row | null = null;
     for (const row of rows) {
       const wrapped = wrapRow(row);
       const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
@@ -235,7 +236,10 @@ export class Layout {
         this.newPage();
         if (continuedLabel) this.text(`${continuedLabel} (continued)`, { sizePt: 8, color: GREY, afterPt: 3 });
         header();
+        // a group heading (span row) is repeated above the rest of its rows
+        if (group && !row.span) drawRow(wrapRow({ ...group, cells: [`${group.cells[0]} (continued)`] }), !!group.bold, group.shade ? SHADE : null, group.color ?? INK, false, true);
       }
+      if (row.span) group = row;
       drawRow(wrapped, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false, row.span);
     }
     this.yPt -= 8;

@@ -7,6 +7,10 @@ import { findingsList, fv } from './common';
 export function budgetSection(l: Layout, budget: BudgetReport): void {
   l.heading('Current budget per rail and mode');
   l.text('Current each rail must deliver (its own stages plus the regulators it feeds). Computed loads (PA key-down, relay coil) are marked *.', { sizePt: 8.5, color: GREY, afterPt: 6 });
+  if (budget.rails.length === 0) {
+    l.text('No rails entered yet: add a supply to see the budget.', { color: GREY });
+    return;
+  }
   const rows: Row[] = [];
   for (const r of budget.rails) {
     const indent = r.depth > 0 ? `${'›'.repeat(r.depth)} ` : '';
