@@ -12,6 +12,7 @@ export function supplySection(project: Project, report: ChecklistReport): Checkl
 function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] {
   const items: ChecklistItem[] = [
     caution('Wire the inlet, fuse, switch and transformer primary first, with the secondaries unloaded, and insulate every mains terminal before power is applied.'),
+    // Common practice, no published source: a lamp in series with the primary limits the fault current
     caution('First power-up through a series lamp (a 40–60 W incandescent bulb in series with the primary) or a current-limited variable transformer; a lamp glowing steadily bright means a fault.'),
   ];
   const supply = report.supply;

@@ -22,7 +22,7 @@ export function buildChecklist(project: Project, report: ChecklistReport): Check
     const items = [...kindItems(project, report, stage, rf), ...currentItems(report, stage)];
     sections.push({ id: `stage:${stage.id}`, title: stage.name, stageId: stage.id, items });
   }
-  sections.push({ id: 'station', title: 'Whole station', stageId: null, items: stationItems(project, report, rf) });
+  sections.push({ id: 'station', title: 'Whole station', stageId: null, items: stationItems(report, rf) });
   return sections;
 }
 
@@ -127,7 +127,7 @@ function finalItems(project: Project, report: ChecklistReport, stage: Stage, rf:
   return items;
 }
 
-function stationItems(project: Project, report: ChecklistReport, rf: RfView | null): ChecklistItem[] {
+function stationItems(report: ChecklistReport, rf: RfView | null): ChecklistItem[] {
   const items: ChecklistItem[] = [];
   for (const rail of report.supply?.rails ?? []) {
     if (rail.kind !== 'rectified') continue;
@@ -139,6 +139,5 @@ function stationItems(project: Project, report: ChecklistReport, rf: RfView | nu
   }
   if (!rf) items.push(step('RF results not computed: check output power and harmonics against the RF page when available.'));
   items.push(step('Final check: receive and transmit on the dummy load, the full keying speed, for ten minutes; nothing smells, nothing drifts.'));
-  void project;
   return items;
 }

@@ -26,6 +26,8 @@ export function safetyChecklist(project: Project, report: ChecklistReport): Chec
   return sections;
 }
 
+const fuseKind = (c: 'T' | 'F') => (c === 'T' ? 'time-lag (T)' : 'quick-acting (F)');
+
 /** "subject: message", unless the message already starts with the subject. */
 export function withSubject(subject: string, message: string): string {
   return message.startsWith(subject) ? message : `${subject}: ${message}`;
@@ -48,11 +50,13 @@ function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] 
     caution('Sleeve or shroud every mains terminal (inlet, switch, fuse holder, transformer primary); no bare mains conductor may be touchable with the lid off.'),
   ];
   const pf = supply?.primary?.fuse;
-  if (pf) items.push(measured(`Primary fuse: ${pf.characteristic === 'T' ? 'time-lag (T)' : 'quick-acting (F)'} {v} (load ${fmt(pf.loadA, 'A')}).`, pf.ratedA, 'A', 'supply: primary fuse', 'caution'));
+  if (pf && pf.ratedA === null) items.push(caution(`Primary fuse: the load (${fmt(pf.loadA, 'A')}) is beyond the standard fuse series; review the design before building.`, pf.loadA, 'A', 'supply: primary fuse'));
+  else if (pf) items.push(measured(`Primary fuse: ${fuseKind(pf.characteristic)} {v} (load ${fmt(pf.loadA, 'A')}).`, pf.ratedA, 'A', 'supply: primary fuse', 'caution'));
   else items.push(step('Primary fuse: not computed; size it from the transformer rating before first use.'));
   for (const r of supply?.rails ?? []) {
     if (r.kind !== 'rectified') continue;
-    items.push(measured(`${r.railName} fuse: ${r.fuse.characteristic === 'T' ? 'time-lag (T)' : 'quick-acting (F)'} {v}.`, r.fuse.ratedA, 'A', 'supply: rail fuse'));
+    if (r.fuse.ratedA === null) items.push(caution(`${r.railName} fuse: the load (${fmt(r.fuse.loadA, 'A')}) is beyond the standard fuse series; review the design.`, r.fuse.loadA, 'A', 'supply: rail fuse'));
+    else items.push(measured(`${r.railName} fuse: ${fuseKind(r.fuse.characteristic)} {v}.`, r.fuse.ratedA, 'A', 'supply: rail fuse'));
     const rated = project.supply.rails.find((x) => x.id === r.railId);
     const fittedV = rated && rated.kind === 'rectified' ? rated.capacitorRatedV : null;
     items.push(measured(`${r.railName} reservoir: rated at least {v} (no-load peak at high mains ${fmt(r.reservoir.noLoadPeakHighV, 'V')}${fittedV ? `, fitted ${fmt(fittedV, 'V')}` : ''}).`, r.reservoir.recommendedRatedV, 'V', 'supply: reservoir rating', fittedV !== null && r.reservoir.recommendedRatedV !== null && fittedV < r.reservoir.recommendedRatedV ? 'caution' : 'normal'));
@@ -69,7 +73,7 @@ function batteryItems(project: Project, report: ChecklistReport): ChecklistItem[
   for (const rail of project.supply.rails) {
     if (rail.kind !== 'battery') continue;
     const r = report.supply?.rails.find((x) => x.railId === rail.id);
-    if (r && r.kind === 'battery') items.push(measured(`Fuse the positive lead at the battery terminal: ${r.fuse.characteristic === 'T' ? 'time-lag' : 'quick-acting'} {v}.`, r.fuse.ratedA, 'A', 'supply: battery fuse', 'caution'));
+    if (r && r.kind === 'battery' && r.fuse.ratedA !== null) items.push(measured(`Fuse the positive lead at the battery terminal: ${fuseKind(r.fuse.characteristic)} {v}.`, r.fuse.ratedA, 'A', 'supply: battery fuse', 'caution'));
     else items.push(caution('Fuse the positive lead at the battery terminal (fuse value not computed).'));
     // Ohm's law: short-circuit current limited by the internal resistance only
     const shortA = rail.internalOhm > 0 ? rail.fullV / rail.internalOhm : null;

@@ -143,3 +143,16 @@ describe('checklists without the optional reports', () => {
     expect(find(safety, /exposure distances: not computed/i).length).toBe(1);
   });
 });
+
+describe('fuse beyond the standard series', () => {
+  it('says to review the design instead of printing an empty fuse value', () => {
+    const report = evaluationFor(club30m);
+    const supply = structuredClone(report.supply!);
+    supply.primary!.fuse.ratedA = null;
+    const safety = safetyChecklist(club30m, { ...report, supply });
+    const line = find(safety, /^Primary fuse/)[0];
+    expect(line.text).toMatch(/beyond the standard fuse series/);
+    expect(line.value).toBe(supply.primary!.fuse.loadA);
+    expect(line.text).not.toContain('—');
+  });
+});
