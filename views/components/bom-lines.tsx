@@ -10,12 +10,22 @@ export function lineValues(l: BomLine | null): Record<string, string> {
   return l ? { stageId: l.stageId ?? '', partId: l.partId, qty: String(l.qtyPerRig), refs: l.refs, notes: l.notes } : { stageId: '', partId: '', qty: '1', refs: '', notes: '' };
 }
 
-const Errors: FC<{ state: FieldState }> = ({ state }) =>
-  Object.keys(state.errors).length ? (
+// In the grid the messages go in a full-width box right above the row (the narrow cells would wrap them
+// word by word); the refused fields keep their red border and aria-invalid.
+const Errors: FC<{ state: FieldState }> = ({ state }) => {
+  const fieldMessages = Object.entries(state.errors).filter(([k]) => k !== '_form');
+  if (!state.errors._form && !fieldMessages.length) return null;
+  return (
     <div class="form-errors bom-span" role="alert">
-      {state.errors._form ? <p>{state.errors._form}</p> : <p>Nothing was saved. Correct the marked fields and save again; what you typed is kept.</p>}
+      {state.errors._form ? <p>{state.errors._form}</p> : null}
+      {fieldMessages.length ? (
+        <p>
+          Nothing was saved: {fieldMessages.map(([, m]) => m).join('; ')}. What you typed is kept below.
+        </p>
+      ) : null}
     </div>
-  ) : null;
+  );
+};
 
 const LineFields: FC<{ project: Project; state: FieldState; idp: string }> = ({ project, state, idp }) => {
   const stages: [string, string][] = [['', 'General (no stage)'], ...project.stages.map((s): [string, string] => [s.id, s.name])];
@@ -38,19 +48,19 @@ export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, f
   return (
     <section class="card">
       <h2>Parts list ({project.bom.length} lines)</h2>
-      <div class="bom-grid" role="table" aria-label="Parts-list lines">
-        <div class="bom-head" role="row">
-          <span role="columnheader">Stage</span>
-          <span role="columnheader">Part</span>
-          <span role="columnheader">Qty per rig</span>
-          <span role="columnheader">Designators</span>
-          <span role="columnheader">Notes</span>
+      <div class="bom-grid" aria-label="Parts-list lines">
+        <div class="bom-head" aria-hidden="true">
+          <span>Stage</span>
+          <span>Part</span>
+          <span>Qty per rig</span>
+          <span>Designators</span>
+          <span>Notes</span>
           <span />
         </div>
         {project.bom.map((l) => {
           const state = stateFor(`line-${l.id}`, failed, () => lineValues(l));
           return (
-            <form {...hx(`${base}/lines/${l.id}`, '#bom')} class="bom-row" id={`line-${l.id}`} role="row">
+            <form {...hx(`${base}/lines/${l.id}`, '#bom')} class="bom-row" id={`line-${l.id}`} aria-label={`Line ${l.refs || l.id}`}>
               <Version version={project.version} />
               <Errors state={state} />
               <LineFields project={project} state={state} idp={`l-${l.id}`} />
@@ -63,7 +73,7 @@ export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, f
             </form>
           );
         })}
-        <form {...hx(`${base}/lines`, '#bom')} class="bom-row add" role="row" aria-label="Add a line">
+        <form {...hx(`${base}/lines`, '#bom')} class="bom-row add" aria-label="Add a line">
           <Version version={project.version} />
           <Errors state={addState} />
           <LineFields project={project} state={addState} idp="al" />
