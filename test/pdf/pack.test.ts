@@ -7,6 +7,7 @@ import { portable20m } from '../../seed-demo/portable-20m';
 import { buildPack, buildPackWithInfo, type PackReport } from '../../src/pdf';
 import { formatMoney } from '../../src/core/cost/money';
 import { computeBudget } from '../../src/core/budget';
+import { formatValue } from '../../src/core/units';
 import { evaluationFor } from './fixture';
 import { hasPoppler, POPPLER_MISSING, pagesText, writeTemp, imageCount } from './pdf-text';
 
@@ -72,6 +73,18 @@ describe('club pack (8 kits, mains)', () => {
     expect(all).toContain('µF');
     expect(all).toContain('°C');
     expect(all).not.toMatch(/NaN|Infinity|undefined|\[object/);
+  });
+
+  it.skipIf(!hasPoppler)('prints the budget per rail and mode, the supply fuses and the harmonics table', () => {
+    const all = pages.join('\n').replace(/\s+/g, ' ');
+    for (const r of report.budget.rails) {
+      for (const m of ['receive', 'keyUp', 'keyDown'] as const) expect(all).toContain(formatValue(r.outputA[m], 'A'));
+    }
+    const pf = report.supply!.primary!.fuse;
+    expect(all).toContain(`${formatValue(pf.ratedA, 'A')} ${pf.characteristic} (load ${formatValue(pf.loadA, 'A')}`);
+    for (const h of report.rf!.harmonics!.rows) expect(all).toContain(formatValue(h.predictedDbc, 'dBc'));
+    const lpf = report.rf!.stages.find((s) => s.lpf)!.lpf!.design!;
+    for (const e of lpf.elements.filter((x) => x.turns !== null)) expect(all).toContain(`${e.turns} turns`);
   });
 
   it.skipIf(!hasPoppler)('draws the plots as vector paths: no raster images in the file', () => {
