@@ -1,5 +1,5 @@
 // A fresh project with sensible defaults (pure: ids and clock come from the caller).
-import type { Project, Mains } from './model';
+import type { Project, Mains, RfSettings } from './model';
 
 export const MAINS_PRESETS: Record<string, Mains | null> = {
   '230-50': { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 },
@@ -24,19 +24,24 @@ export function newProject(id: string, name: string, frequencyHz: number, target
     version: 1,
     supply: { transformers: [], rails: [], primaryFuseA: null },
     stages: [],
-    rf: {
-      spuriousRule: 'us-97-307',
-      evenHarmonicDbc: -30,
-      worstSwr: 2,
-      antennaGainDbi: 2.15,
-      feedlineLossDb: 0.5,
-      groundReflection: true,
-      exposureDutyFactor: 0.4,
-      exposureOnFraction: 1,
-    },
+    rf: defaultRfSettings(),
     parts: [],
     bom: [],
     costing: { attritionFraction: 0, sparesPerLine: 0, exchangeRates: {}, suppliers: [] },
+  };
+}
+
+/** RF settings for a new project: US rule, 2:1 worst SWR, a dipole, CW duty (OET-65 Supplement B Table 2: 40 %). */
+export function defaultRfSettings(): RfSettings {
+  return {
+    spuriousRule: 'us-97-307',
+    evenHarmonicDbc: -30,
+    worstSwr: 2,
+    antennaGainDbi: 2.15,
+    feedlineLossDb: 0.5,
+    groundReflection: true,
+    exposureDutyFactor: 0.4,
+    exposureOnFraction: 1,
   };
 }
 
@@ -100,7 +105,7 @@ export function defaultLpfParams(): import('./model').LpfParams {
     capacitorSeries: 'E12',
     allowParallelPairs: true,
     coreAlHPerTurn2: 4.9e-9,
-    coreName: 'Iron-powder toroid 12.7 mm (AL 4.9 nH/t²)',
+    coreName: 'Iron-powder toroid 12.7 mm, 1–30 MHz mix (AL 4.9 nH/t²)',
     inductorQ: 150,
     capacitorQ: 1000,
     capacitorTolerance: 0.05,
