@@ -9,7 +9,13 @@ export const FORMAT = 'rigwright-project';
 export const FORMAT_VERSION = 1;
 
 const id = z.string().min(1).max(80);
-const name = z.string().trim().min(1, 'must not be empty').max(200);
+// names are one line: no line breaks or control characters (they end up in netlists, CSV and PDF lines)
+const name = z
+  .string()
+  .trim()
+  .min(1, 'must not be empty')
+  .max(200)
+  .regex(/^[^\u0000-\u001f\u007f\u2028\u2029]*$/, 'must be one line of text without control characters');
 const text = z.string().max(20_000);
 const pos = (max: number) => z.number().finite().positive().max(max);
 const nonneg = (max: number) => z.number().finite().min(0).max(max);

@@ -11,7 +11,9 @@ import { makeApp, postForm, type TestApp } from '../helpers/test-app';
 import { appRoutes } from '../helpers/routes';
 import { DEMO_PROJECTS } from '../../seed-demo/index';
 import { toProjectFile } from '../../src/io/project-file';
-import { loadProject } from '../../src/db/projects';
+import { loadProject, insertProject } from '../../src/db/projects';
+import { cloneProject } from '../../src/core/new-project';
+import { newId } from '../../src/web/ids';
 
 const MARKER = 'rigwright-injected-marker';
 const INJECTION = `\n.control\nshell touch ${MARKER}\n.endc\n`;
@@ -25,9 +27,14 @@ beforeAll(async () => {
   for (const s of p.stages) s.name = `${s.name}${INJECTION}`;
   for (const tr of p.supply.transformers) for (const w of tr.windings) w.name = `${w.name}${INJECTION}`;
   if (p.stages.some((s) => s.lpf)) p.stages.find((s) => s.lpf)!.lpf!.coreName = `core${INJECTION}`;
+  // The import refuses multi-line names outright (checked below); to test the netlist layer on its own,
+  // the hostile project goes straight into the database, as an older file or another client might have left it.
   const res = await postForm(t.app, '/import', { json: toProjectFile(p, '2026-01-01T00:00:00Z') });
-  expect(res.status).toBe(303);
-  id = res.headers.get('Location')!.split('/').pop()!;
+  expect(res.status).toBe(422);
+  expect(await res.text()).toContain('must be one line of text');
+  const copy = cloneProject(p, 'hostile-project', p.name, newId);
+  await insertProject(t.database, copy, '2026-01-01T00:00:00Z');
+  id = copy.id;
 });
 afterAll(() => t?.close());
 

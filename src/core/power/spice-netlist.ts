@@ -60,7 +60,7 @@ export function rectifierNetlist(input: RectifierSimInput, options: NetlistOptio
   const ic = Math.max(0, vpk - n * vf);
   const diode = (name: string, a: string, k: string) => `${name} ${a} ${k} I = max(V(${a},${k}) - ${num(vf)}, 0) / ${num(rd)}`;
   const lines: string[] = [
-    `* ${options.title ?? `${input.topology} rectifier, ${num(input.secondaryVrms)} V rms open circuit, ${num(f)} Hz`}`,
+    `* ${oneLine(options.title ?? `${input.topology} rectifier, ${num(input.secondaryVrms)} V rms open circuit, ${num(f)} Hz`)}`,
     `* Diodes: behavioural I = max(Vak - ${num(vf)} V, 0) / ${num(rd)} ohm (piecewise-linear Vf + r_d model).`,
     `* Results: .meas over the last whole cycle (${cycles} cycles simulated from the no-load peak).`,
   ];
@@ -112,6 +112,12 @@ export function rectifierNetlist(input: RectifierSimInput, options: NetlistOptio
     `.end`,
   );
   return lines.join('\n') + '\n';
+}
+
+/** Project text in a netlist stays on its comment line: line breaks and control characters become spaces,
+ *  so a name can never start a SPICE command line (e.g. a `.control` block with `shell`). */
+export function oneLine(text: string): string {
+  return text.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ');
 }
 
 /** Netlist of a project's rectified rail at a mains factor and load current (A). */
