@@ -1,7 +1,8 @@
 // Project list flows in a real browser: export a project as JSON (a real download) and import it back
 // as a new project; the supply page edits in place; PDF and CSV downloads once those pages exist.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import type { Page } from 'playwright-core';
@@ -99,8 +100,20 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
     expect(html).toMatch(/name="primaryFuse"[^>]*value="1.6 A"|value="1.6 A"[^>]*name="primaryFuse"/);
   });
 
+  it('supply page: editing a regulated rail (its form has a control named "method") saves in place', async () => {
+    await page.goto(`${server.url}/projects/${DEMO}/supply`);
+    await page.waitForFunction(() => 'htmx' in window);
+    await markPage();
+    await page.locator('details#rail-rail-13v8 > summary').click();
+    const form = () => page.locator(`form[action="/projects/${DEMO}/supply/rails/rail-13v8"]`);
+    await form().locator('input[name="r2"]').fill('2.7 kΩ');
+    await form().getByRole('button', { name: 'Save rail' }).click();
+    await expect.poll(async () => (await (await fetch(`${server.url}/projects/${DEMO}/supply`)).text()).includes('value="2.7 kΩ"'), { timeout: 20_000 }).toBe(true);
+    expect(await marker()).toBe('kept');
+  });
+
   for (const [label, path, linkPattern, magic] of [
-    ['PDF builder pack', 'pack', /pack\.pdf$/, '%PDF-'],
+    ['PDF builder pack', 'pack', /pack\.pdf(\?.*)?$/, '%PDF-'],
     ['parts list CSV', 'bom', /\.csv(\?.*)?$/, ''],
   ] as const) {
     it(`downloads the ${label} from its page (when that page exists)`, async (ctx) => {
@@ -118,6 +131,11 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
       expect(bytes.length).toBeGreaterThan(100);
       if (magic) expect(bytes.subarray(0, magic.length).toString('latin1')).toBe(magic);
       else expect(bytes.toString('utf8')).toMatch(/,|;/);
+      // the PDF carries the project: its text (via poppler's pdftotext, when installed) names it
+      if (magic && existsSync('/usr/bin/pdftotext')) {
+        const text = spawnSync('/usr/bin/pdftotext', ['-layout', file, '-'], { encoding: 'utf8' }).stdout;
+        expect(text).toContain('Club build');
+      }
     });
   }
 
