@@ -1,9 +1,8 @@
 // Parts-list line editor: one form per line laid out as a grid row, and an add-line form.
 import type { FC } from 'hono/jsx';
 import type { BomLine, Project } from '../../src/core/model';
-import { type FieldState } from './fields';
+import { type FieldState, Field, Select } from './fields';
 import { stateFor, type Failed } from './failed';
-import { PField, PSelect } from './supply-fields';
 import { Version, hx } from './supply-transformer';
 
 export function lineValues(l: BomLine | null): Record<string, string> {
@@ -33,11 +32,11 @@ const LineFields: FC<{ project: Project; state: FieldState; idp: string }> = ({ 
   const partsWithPick: [string, string][] = state.values.partId ? parts : [['', 'Choose a part…'], ...parts];
   return (
     <>
-      <PSelect idp={idp} name="stageId" label="Stage" state={state} options={stages} cls="bom-stage" />
-      <PSelect idp={idp} name="partId" label="Part" state={state} options={partsWithPick} cls="bom-part" />
-      <PField idp={idp} name="qty" label="Qty per rig" state={state} size={4} cls="bom-qty" />
-      <PField idp={idp} name="refs" label="Designators" state={state} size={10} cls="bom-refs" />
-      <PField idp={idp} name="notes" label="Notes" state={state} size={18} cls="bom-notes" />
+      <Select idp={idp} name="stageId" label="Stage" state={state} options={stages} cls="bom-stage" />
+      <Select idp={idp} name="partId" label="Part" state={state} options={partsWithPick} cls="bom-part" />
+      <Field idp={idp} name="qty" label="Qty per rig" state={state} size={4} cls="bom-qty" />
+      <Field idp={idp} name="refs" label="Designators" state={state} size={10} cls="bom-refs" />
+      <Field idp={idp} name="notes" label="Notes" state={state} size={18} cls="bom-notes" />
     </>
   );
 };

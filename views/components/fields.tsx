@@ -8,60 +8,84 @@ export interface FieldState {
 
 export const emptyState = (): FieldState => ({ values: {}, errors: {} });
 
-export const Field: FC<{ name: string; label: string; state: FieldState; unit?: string; hint?: string; size?: number; type?: string; required?: boolean; id?: string }> = ({
-  id: idIn,
-  name,
-  label,
-  state,
-  unit,
-  hint,
-  size,
-  type,
-  required,
-}) => {
+interface Common {
+  name: string;
+  label: string;
+  state: FieldState;
+  /** id prefix: pages with many forms repeat field names, and each label must point at its own input */
+  idp?: string;
+  cls?: string;
+  hint?: string;
+}
+
+const Message: FC<{ error?: string; hint?: string }> = ({ error, hint }) =>
+  error ? (
+    <span class="error" role="alert">
+      {error}
+    </span>
+  ) : hint ? (
+    <span class="hint">{hint}</span>
+  ) : null;
+
+const fieldClass = (error: string | undefined, cls?: string) => `field${error ? ' has-error' : ''}${cls ? ' ' + cls : ''}`;
+
+export const Field: FC<Common & { unit?: string; size?: number; type?: string; required?: boolean; id?: string; list?: string }> = ({ name, label, state, idp, cls, hint, unit, size, type, required, id: idIn, list }) => {
   const error = state.errors[name];
-  const id = idIn ?? `f-${name}`;
+  const id = idIn ?? `${idp ?? 'f'}-${name}`;
   return (
-    <label class={error ? 'field has-error' : 'field'} for={id}>
+    <label class={fieldClass(error, cls)} for={id}>
       <span class="label">
         {label}
         {unit ? <span class="unit"> ({unit})</span> : null}
       </span>
-      <input id={id} name={name} type={type ?? 'text'} value={state.values[name] ?? ''} size={size ?? 10} aria-invalid={error ? 'true' : undefined} required={required} />
-      {hint && !error ? <span class="hint">{hint}</span> : null}
-      {error ? (
-        <span class="error" role="alert">
-          {error}
-        </span>
-      ) : null}
+      <input id={id} name={name} type={type ?? 'text'} value={state.values[name] ?? ''} size={size ?? 10} aria-invalid={error ? 'true' : undefined} required={required} list={list} />
+      <Message error={error} hint={hint} />
     </label>
   );
 };
 
-export const Select: FC<{ name: string; label: string; state: FieldState; options: [string, string][] }> = ({ name, label, state, options }) => {
+export const Select: FC<Common & { options: [string, string][] }> = ({ name, label, state, idp, cls, hint, options }) => {
   const error = state.errors[name];
+  const id = `${idp ?? 'f'}-${name}`;
+  const value = state.values[name];
+  const known = options.some(([v]) => v === value);
   return (
-    <label class={error ? 'field has-error' : 'field'} for={`f-${name}`}>
+    <label class={fieldClass(error, cls)} for={id}>
       <span class="label">{label}</span>
-      <select id={`f-${name}`} name={name}>
-        {options.map(([value, text]) => (
-          <option value={value} selected={state.values[name] === value}>
+      <select id={id} name={name} aria-invalid={error ? 'true' : undefined}>
+        {!known && value ? (
+          <option value={value} selected>
+            (missing: {value})
+          </option>
+        ) : null}
+        {options.map(([v, text]) => (
+          <option value={v} selected={value === v}>
             {text}
           </option>
         ))}
       </select>
-      {error ? (
-        <span class="error" role="alert">
-          {error}
-        </span>
-      ) : null}
+      <Message error={error} hint={hint} />
     </label>
   );
 };
 
-export const Check: FC<{ name: string; label: string; state: FieldState }> = ({ name, label, state }) => (
-  <label class="field check" for={`f-${name}`}>
-    <input id={`f-${name}`} type="checkbox" name={name} value="true" checked={state.values[name] === 'true'} />
+export const TextArea: FC<Common & { rows?: number; cols?: number }> = ({ name, label, state, idp, cls, hint, rows, cols }) => {
+  const error = state.errors[name];
+  const id = `${idp ?? 'f'}-${name}`;
+  return (
+    <label class={fieldClass(error, cls)} for={id}>
+      <span class="label">{label}</span>
+      <textarea id={id} name={name} rows={rows ?? 3} cols={cols ?? 40} aria-invalid={error ? 'true' : undefined}>
+        {state.values[name] ?? ''}
+      </textarea>
+      <Message error={error} hint={hint} />
+    </label>
+  );
+};
+
+export const Check: FC<{ name: string; label: string; state: FieldState; idp?: string }> = ({ name, label, state, idp }) => (
+  <label class="field check" for={`${idp ?? 'f'}-${name}`}>
+    <input id={`${idp ?? 'f'}-${name}`} type="checkbox" name={name} value="true" checked={state.values[name] === 'true'} />
     <span class="label">{label}</span>
   </label>
 );

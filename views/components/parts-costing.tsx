@@ -1,9 +1,8 @@
 // Costing settings (attrition, spares, exchange rates) and the supplier list with shipping charges.
 import type { FC } from 'hono/jsx';
 import type { Project, Supplier } from '../../src/core/model';
-import { FormErrors } from './fields';
+import { FormErrors, Field, TextArea } from './fields';
 import { stateFor, type Failed } from './failed';
-import { PField, PText } from './supply-fields';
 import { Version, hx, pctText } from './supply-transformer';
 import { centsText } from './parts-part';
 
@@ -29,9 +28,9 @@ export const CostingCard: FC<{ project: Project; failed?: Failed }> = ({ project
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-          <PField idp="cs" name="attrition" label="Attrition allowance" unit="%" state={state} size={5} hint="extra for losses and mistakes" />
-          <PField idp="cs" name="spares" label="Spares per line" state={state} size={5} hint="whole pieces added to each line" />
-          <PText idp="cs" name="rates" label={`Exchange rates (${project.currency} per 1 unit)`} state={state} rows={3} cols={18} hint="one per line, e.g. EUR = 1.08" />
+          <Field idp="cs" name="attrition" label="Attrition allowance" unit="%" state={state} size={5} hint="extra for losses and mistakes" />
+          <Field idp="cs" name="spares" label="Spares per line" state={state} size={5} hint="whole pieces added to each line" />
+          <TextArea idp="cs" name="rates" label={`Exchange rates (${project.currency} per 1 unit)`} state={state} rows={3} cols={18} hint="one per line, e.g. EUR = 1.08" />
           <button type="submit">Save</button>
         </div>
         <p class="hint">
@@ -57,9 +56,9 @@ export const SuppliersCard: FC<{ project: Project; failed?: Failed }> = ({ proje
             <input type="hidden" name="was" value={s.name} />
             <FormErrors state={state} />
             <div class="row">
-              <PField idp={`s${i}`} name="name" label="Supplier" state={state} size={24} />
-              <PField idp={`s${i}`} name="shipping" label="Shipping per order" state={state} size={7} />
-              <PField idp={`s${i}`} name="currency" label="Currency" state={state} size={4} />
+              <Field idp={`s${i}`} name="name" label="Supplier" state={state} size={24} />
+              <Field idp={`s${i}`} name="shipping" label="Shipping per order" state={state} size={7} />
+              <Field idp={`s${i}`} name="currency" label="Currency" state={state} size={4} />
               <button type="submit">Save</button>
               <a class="danger" href={`${base}/delete`}>
                 Delete…
@@ -73,9 +72,9 @@ export const SuppliersCard: FC<{ project: Project; failed?: Failed }> = ({ proje
         <FormErrors state={addState} />
         <div class="row">
           <span class="row-label">Add a supplier:</span>
-          <PField idp="as" name="name" label="Supplier" state={addState} size={24} />
-          <PField idp="as" name="shipping" label="Shipping per order" state={addState} size={7} />
-          <PField idp="as" name="currency" label="Currency" state={addState} size={4} />
+          <Field idp="as" name="name" label="Supplier" state={addState} size={24} />
+          <Field idp="as" name="shipping" label="Shipping per order" state={addState} size={7} />
+          <Field idp="as" name="currency" label="Currency" state={addState} size={4} />
           <button type="submit">Add supplier</button>
         </div>
       </form>

@@ -1,9 +1,8 @@
 // One catalog part: its own form, one form per supplier offer, and a form to add an offer.
 import type { FC } from 'hono/jsx';
 import type { Offer, Part, Project } from '../../src/core/model';
-import { FormErrors, type FieldState } from './fields';
+import { FormErrors, type FieldState, Field } from './fields';
 import { stateFor, type Failed } from './failed';
-import { PField } from './supply-fields';
 import { Version, hx } from './supply-transformer';
 
 // Display text for model values (the inverse of src/web/parts-forms.ts parsing).
@@ -25,21 +24,21 @@ export function offerValues(o: Offer | null, currency: string): Record<string, s
 
 const OfferFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
   <>
-    <PField idp={idp} name="supplier" label="Supplier" state={state} size={20} list="supplier-names" />
-    <PField idp={idp} name="sku" label="SKU" state={state} size={12} />
-    <PField idp={idp} name="currency" label="Currency" state={state} size={4} />
-    <PField idp={idp} name="breaks" label="Price breaks (qty: unit price)" state={state} size={30} />
-    <PField idp={idp} name="minOrder" label="Min. order" state={state} size={4} />
-    <PField idp={idp} name="orderMultiple" label="Multiple" state={state} size={4} />
-    <PField idp={idp} name="stockNote" label="Stock note" state={state} size={14} />
+    <Field idp={idp} name="supplier" label="Supplier" state={state} size={20} list="supplier-names" />
+    <Field idp={idp} name="sku" label="SKU" state={state} size={12} />
+    <Field idp={idp} name="currency" label="Currency" state={state} size={4} />
+    <Field idp={idp} name="breaks" label="Price breaks (qty: unit price)" state={state} size={30} />
+    <Field idp={idp} name="minOrder" label="Min. order" state={state} size={4} />
+    <Field idp={idp} name="orderMultiple" label="Multiple" state={state} size={4} />
+    <Field idp={idp} name="stockNote" label="Stock note" state={state} size={14} />
   </>
 );
 
 export const PartFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
   <>
-    <PField idp={idp} name="description" label="Description (type and ratings, no brand numbers)" state={state} size={56} />
-    <PField idp={idp} name="category" label="Category" state={state} size={16} list="part-categories" />
-    <PField idp={idp} name="ratings" label="Ratings (key=value; …)" state={state} size={48} hint="e.g. voltageV=35; rippleA=2.4" />
+    <Field idp={idp} name="description" label="Description (type and ratings, no brand numbers)" state={state} size={56} />
+    <Field idp={idp} name="category" label="Category" state={state} size={16} list="part-categories" />
+    <Field idp={idp} name="ratings" label="Ratings (key=value; …)" state={state} size={48} hint="e.g. voltageV=35; rippleA=2.4" />
   </>
 );
 

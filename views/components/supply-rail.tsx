@@ -2,9 +2,8 @@
 import type { FC } from 'hono/jsx';
 import type { BatteryRail, Project, Rail, RectifiedRail, RegulatedRail } from '../../src/core/model';
 import { formatInput, formatValue } from '../../src/core/units';
-import { FormErrors, type FieldState } from './fields';
+import { FormErrors, type FieldState, Field, Select } from './fields';
 import { stateFor, type Failed } from './failed';
-import { PField, PSelect } from './supply-fields';
 import { Version, hx, pctText } from './supply-transformer';
 
 const KIND_LABEL = { rectified: 'Rectified', regulated: 'Regulated', battery: 'Battery' } as const;
@@ -71,22 +70,22 @@ const RectifiedFields: FC<FormProps> = ({ project, state, idp }) => {
   return (
     <>
       <div class="row">
-        <PSelect idp={idp} name="windingId" label="Winding" state={state} options={windings} />
-        <PSelect idp={idp} name="topology" label="Rectifier" state={state} options={TOPOLOGY} />
-        <PField idp={idp} name="diodeDrop" label="Diode drop" unit="V" state={state} size={6} />
-        <PField idp={idp} name="diodeR" label="Diode resistance" unit="Ω" state={state} size={6} />
+        <Select idp={idp} name="windingId" label="Winding" state={state} options={windings} />
+        <Select idp={idp} name="topology" label="Rectifier" state={state} options={TOPOLOGY} />
+        <Field idp={idp} name="diodeDrop" label="Diode drop" unit="V" state={state} size={6} />
+        <Field idp={idp} name="diodeR" label="Diode resistance" unit="Ω" state={state} size={6} />
       </div>
       <div class="row">
-        <PField idp={idp} name="reservoir" label="Reservoir" unit="F" state={state} size={8} hint="e.g. 4700u" />
-        <PField idp={idp} name="esr" label="ESR" unit="Ω" state={state} size={6} />
-        <PField idp={idp} name="capV" label="Capacitor rating" unit="V" state={state} size={6} hint="empty = not chosen" />
-        <PField idp={idp} name="capRipple" label="Ripple rating" unit="A rms" state={state} size={6} hint="empty = not chosen" />
-        <PField idp={idp} name="bleeder" label="Bleeder" unit="Ω" state={state} size={7} hint="empty = none fitted" />
+        <Field idp={idp} name="reservoir" label="Reservoir" unit="F" state={state} size={8} hint="e.g. 4700u" />
+        <Field idp={idp} name="esr" label="ESR" unit="Ω" state={state} size={6} />
+        <Field idp={idp} name="capV" label="Capacitor rating" unit="V" state={state} size={6} hint="empty = not chosen" />
+        <Field idp={idp} name="capRipple" label="Ripple rating" unit="A rms" state={state} size={6} hint="empty = not chosen" />
+        <Field idp={idp} name="bleeder" label="Bleeder" unit="Ω" state={state} size={7} hint="empty = none fitted" />
       </div>
       <div class="row">
-        <PField idp={idp} name="rippleTarget" label="Ripple target" unit="V p-p" state={state} size={6} hint="empty = none" />
-        <PField idp={idp} name="margin" label="Headroom margin" unit="V" state={state} size={6} />
-        <PField idp={idp} name="fuse" label="Fitted rail fuse" unit="A" state={state} size={6} hint="empty = recommend one" />
+        <Field idp={idp} name="rippleTarget" label="Ripple target" unit="V p-p" state={state} size={6} hint="empty = none" />
+        <Field idp={idp} name="margin" label="Headroom margin" unit="V" state={state} size={6} />
+        <Field idp={idp} name="fuse" label="Fitted rail fuse" unit="A" state={state} size={6} hint="empty = recommend one" />
       </div>
     </>
   );
@@ -95,31 +94,31 @@ const RectifiedFields: FC<FormProps> = ({ project, state, idp }) => {
 const RegulatedFields: FC<FormProps & { parents: [string, string][] }> = ({ state, idp, parents }) => (
   <>
     <div class="row">
-      <PSelect idp={idp} name="parentId" label="Fed from" state={state} options={parents} />
-      <PSelect idp={idp} name="regulator" label="Regulator" state={state} options={REGULATORS} />
-      <PSelect idp={idp} name="method" label="Output setting" state={state} options={METHODS} />
+      <Select idp={idp} name="parentId" label="Fed from" state={state} options={parents} />
+      <Select idp={idp} name="regulator" label="Regulator" state={state} options={REGULATORS} />
+      <Select idp={idp} name="method" label="Output setting" state={state} options={METHODS} />
     </div>
     <div class="row method-fields">
-      <PField idp={idp} name="nominalV" label="Regulator voltage" unit="V" state={state} size={6} cls="m m-fixed m-raised-diodes m-raised-resistor" />
-      <PField idp={idp} name="vref" label="Vref" unit="V" state={state} size={6} cls="m m-adjustable" />
-      <PField idp={idp} name="iadj" label="Iadj" unit="A" state={state} size={6} cls="m m-adjustable" hint="empty = 0" />
-      <PField idp={idp} name="r1" label="R1 (output to adj)" unit="Ω" state={state} size={7} cls="m m-adjustable m-raised-resistor" />
-      <PField idp={idp} name="r2" label="R2 (adj to ground)" unit="Ω" state={state} size={7} cls="m m-adjustable m-raised-resistor" />
-      <PField idp={idp} name="diodes" label="Diodes in the ground leg" state={state} size={4} cls="m m-raised-diodes" />
-      <PField idp={idp} name="raiseDrop" label="Drop per diode" unit="V" state={state} size={6} cls="m m-raised-diodes" />
+      <Field idp={idp} name="nominalV" label="Regulator voltage" unit="V" state={state} size={6} cls="m m-fixed m-raised-diodes m-raised-resistor" />
+      <Field idp={idp} name="vref" label="Vref" unit="V" state={state} size={6} cls="m m-adjustable" />
+      <Field idp={idp} name="iadj" label="Iadj" unit="A" state={state} size={6} cls="m m-adjustable" hint="empty = 0" />
+      <Field idp={idp} name="r1" label="R1 (output to adj)" unit="Ω" state={state} size={7} cls="m m-adjustable m-raised-resistor" />
+      <Field idp={idp} name="r2" label="R2 (adj to ground)" unit="Ω" state={state} size={7} cls="m m-adjustable m-raised-resistor" />
+      <Field idp={idp} name="diodes" label="Diodes in the ground leg" state={state} size={4} cls="m m-raised-diodes" />
+      <Field idp={idp} name="raiseDrop" label="Drop per diode" unit="V" state={state} size={6} cls="m m-raised-diodes" />
     </div>
     <div class="row">
-      <PField idp={idp} name="dropout" label="Dropout" unit="V" state={state} size={6} />
-      <PField idp={idp} name="quiescent" label="Quiescent" unit="A" state={state} size={7} />
-      <PField idp={idp} name="efficiency" label="Efficiency (switching)" unit="%" state={state} size={5} hint="at lowest input" />
-      <PField idp={idp} name="maxOut" label="Max output" unit="A" state={state} size={6} hint="empty = unknown" />
-      <PField idp={idp} name="maxIn" label="Max input" unit="V" state={state} size={6} hint="empty = unknown" />
+      <Field idp={idp} name="dropout" label="Dropout" unit="V" state={state} size={6} />
+      <Field idp={idp} name="quiescent" label="Quiescent" unit="A" state={state} size={7} />
+      <Field idp={idp} name="efficiency" label="Efficiency (switching)" unit="%" state={state} size={5} hint="at lowest input" />
+      <Field idp={idp} name="maxOut" label="Max output" unit="A" state={state} size={6} hint="empty = unknown" />
+      <Field idp={idp} name="maxIn" label="Max input" unit="V" state={state} size={6} hint="empty = unknown" />
     </div>
     <div class="row">
-      <PField idp={idp} name="thetaJc" label="θjc" unit="°C/W" state={state} size={5} />
-      <PField idp={idp} name="thetaCs" label="θcs" unit="°C/W" state={state} size={5} />
-      <PField idp={idp} name="thetaSa" label="Heatsink θsa" unit="°C/W" state={state} size={5} hint="empty = compute needed" />
-      <PField idp={idp} name="tjMax" label="Tj max" unit="°C" state={state} size={5} />
+      <Field idp={idp} name="thetaJc" label="θjc" unit="°C/W" state={state} size={5} />
+      <Field idp={idp} name="thetaCs" label="θcs" unit="°C/W" state={state} size={5} />
+      <Field idp={idp} name="thetaSa" label="Heatsink θsa" unit="°C/W" state={state} size={5} hint="empty = compute needed" />
+      <Field idp={idp} name="tjMax" label="Tj max" unit="°C" state={state} size={5} />
       <span class="hint">Leave all four heatsink fields empty if there is no heatsink data.</span>
     </div>
   </>
@@ -127,13 +126,13 @@ const RegulatedFields: FC<FormProps & { parents: [string, string][] }> = ({ stat
 
 const BatteryFields: FC<FormProps> = ({ state, idp }) => (
   <div class="row">
-    <PField idp={idp} name="chemistry" label="Chemistry" state={state} size={10} />
-    <PField idp={idp} name="nominalV" label="Nominal" unit="V" state={state} size={6} />
-    <PField idp={idp} name="fullV" label="Full" unit="V" state={state} size={6} />
-    <PField idp={idp} name="endV" label="End of discharge" unit="V" state={state} size={6} />
-    <PField idp={idp} name="capacity" label="Capacity" unit="Ah" state={state} size={6} />
-    <PField idp={idp} name="usable" label="Usable" unit="%" state={state} size={4} />
-    <PField idp={idp} name="internal" label="Internal resistance" unit="Ω" state={state} size={6} />
+    <Field idp={idp} name="chemistry" label="Chemistry" state={state} size={10} />
+    <Field idp={idp} name="nominalV" label="Nominal" unit="V" state={state} size={6} />
+    <Field idp={idp} name="fullV" label="Full" unit="V" state={state} size={6} />
+    <Field idp={idp} name="endV" label="End of discharge" unit="V" state={state} size={6} />
+    <Field idp={idp} name="capacity" label="Capacity" unit="Ah" state={state} size={6} />
+    <Field idp={idp} name="usable" label="Usable" unit="%" state={state} size={4} />
+    <Field idp={idp} name="internal" label="Internal resistance" unit="Ω" state={state} size={6} />
   </div>
 );
 
@@ -151,7 +150,7 @@ export const RailCard: FC<{ project: Project; rail: Rail; failed?: Failed; paren
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-          <PField idp={idp} name="name" label="Rail name" state={state} size={32} />
+          <Field idp={idp} name="name" label="Rail name" state={state} size={32} />
         </div>
         {rail.kind === 'rectified' ? <RectifiedFields project={project} rail={rail} state={state} idp={idp} /> : null}
         {rail.kind === 'regulated' ? <RegulatedFields project={project} rail={rail} state={state} idp={idp} parents={parents} /> : null}

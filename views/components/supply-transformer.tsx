@@ -2,8 +2,7 @@
 import type { FC } from 'hono/jsx';
 import type { Project, Transformer, Winding } from '../../src/core/model';
 import { formatInput, formatValue } from '../../src/core/units';
-import { FormErrors, type FieldState } from './fields';
-import { PField, PSelect } from './supply-fields';
+import { FormErrors, type FieldState, Field, Select } from './fields';
 import { stateFor, type Failed } from './failed';
 
 export const Version: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
@@ -26,11 +25,11 @@ export function windingValues(w: Winding | null): Record<string, string> {
 
 const WindingFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
   <>
-    <PField idp={idp} name="name" label="Winding" state={state} size={16} />
-    <PField idp={idp} name="ratedV" label="Rated voltage" unit="V rms" state={state} size={7} />
-    <PField idp={idp} name="ratedA" label="Rated current" unit="A rms" state={state} size={7} />
-    <PField idp={idp} name="regulation" label="Regulation" unit="%" state={state} size={4} />
-    <PField idp={idp} name="resistance" label="Resistance" unit="Ω" state={state} size={7} hint="empty = from regulation" />
+    <Field idp={idp} name="name" label="Winding" state={state} size={16} />
+    <Field idp={idp} name="ratedV" label="Rated voltage" unit="V rms" state={state} size={7} />
+    <Field idp={idp} name="ratedA" label="Rated current" unit="A rms" state={state} size={7} />
+    <Field idp={idp} name="regulation" label="Regulation" unit="%" state={state} size={4} />
+    <Field idp={idp} name="resistance" label="Resistance" unit="Ω" state={state} size={7} hint="empty = from regulation" />
   </>
 );
 
@@ -67,8 +66,8 @@ export const TransformerCard: FC<{ project: Project; t: Transformer; failed?: Fa
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-           <PField idp={`t-${t.id}`} name="name" label="Transformer" state={state} size={28} />
-          <PSelect idp={`t-${t.id}`} name="construction" label="Construction" state={state} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
+           <Field idp={`t-${t.id}`} name="name" label="Transformer" state={state} size={28} />
+          <Select idp={`t-${t.id}`} name="construction" label="Construction" state={state} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
           <button type="submit">Save</button>
           <a class="danger" href={`${base}/delete`}>
             Delete transformer…

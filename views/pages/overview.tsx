@@ -133,7 +133,7 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
                   <td>{railName(l.railId)}</td>
                   {MODES.map((m) => (
                     <td>
-                      <Field name={`l${i}_${m}`} label={`${MODE_LABELS[m]} current`} state={state} size={8} />
+                      <Field name={`l${i}_${m}`} idp={`s-${stage.id}`} label={`${MODE_LABELS[m]} current`} state={state} size={8} />
                     </td>
                   ))}
                 </tr>

@@ -135,22 +135,14 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
   );
 };
 
-export const ConfirmDelete: FC<{ title: string; what: string; action: string; back: string; version?: number; project?: { id: string; name: string } }> = ({
-  title,
-  what,
-  action,
-  back,
-  version,
-  project,
-}) => (
-  <Layout title={title} project={project}>
+export const ConfirmDelete: FC<{ title: string; what: string; action: string; back: string }> = ({ title, what, action, back }) => (
+  <Layout title={title}>
     <section class="card confirm">
       <h1>{title}</h1>
       <p>
         Delete <strong>{what}</strong>? This cannot be undone. (Export the project first if you may want it back.)
       </p>
       <form method="post" action={action} class="inline">
-        {version !== undefined ? <input type="hidden" name="version" value={String(version)} /> : null}
         <button type="submit" class="danger">
           Yes, delete
         </button>

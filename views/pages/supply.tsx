@@ -3,9 +3,8 @@
 import type { Child, FC } from 'hono/jsx';
 import type { Project } from '../../src/core/model';
 import { formatInput } from '../../src/core/units';
-import { FormErrors, type FieldState } from '../components/fields';
+import { FormErrors, type FieldState, Field, Select } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
-import { PField, PSelect } from '../components/supply-fields';
 import { TransformerCard, Version, hx } from '../components/supply-transformer';
 import { RailCard } from '../components/supply-rail';
 
@@ -32,8 +31,8 @@ const AddTransformer: FC<{ project: Project; state: FieldState }> = ({ project, 
     <Version version={project.version} />
     <FormErrors state={state} />
     <div class="row">
-      <PField idp="at" name="name" label="New transformer" state={state} size={24} hint="e.g. T1 mains transformer" />
-      <PSelect idp="at" name="construction" label="Construction" state={state} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
+      <Field idp="at" name="name" label="New transformer" state={state} size={24} hint="e.g. T1 mains transformer" />
+      <Select idp="at" name="construction" label="Construction" state={state} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
       <button type="submit">Add transformer</button>
     </div>
   </form>
@@ -44,7 +43,7 @@ const PrimaryFuse: FC<{ project: Project; state: FieldState }> = ({ project, sta
     <Version version={project.version} />
     <FormErrors state={state} />
     <div class="row">
-      <PField idp="pf" name="primaryFuse" label="Fitted primary (mains) fuse" unit="A" state={state} size={6} hint="empty = recommend one" />
+      <Field idp="pf" name="primaryFuse" label="Fitted primary (mains) fuse" unit="A" state={state} size={6} hint="empty = recommend one" />
       <button type="submit">Save fuse</button>
     </div>
   </form>
@@ -106,8 +105,8 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
             <Version version={project.version} />
             <FormErrors state={addRail} />
             <div class="row">
-              <PField idp="ar" name="name" label="New rail" state={addRail} size={22} hint="e.g. 12 V receiver rail" />
-              <PSelect idp="ar" name="source" label="Fed from" state={addRail} options={sourceOptions(project)} />
+              <Field idp="ar" name="name" label="New rail" state={addRail} size={22} hint="e.g. 12 V receiver rail" />
+              <Select idp="ar" name="source" label="Fed from" state={addRail} options={sourceOptions(project)} />
               <button type="submit">Add rail</button>
             </div>
             <p class="hint">The new rail starts with typical values; open it to enter your parts.</p>

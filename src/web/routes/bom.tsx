@@ -14,7 +14,7 @@ import { lineSchema, lineErrors, lineFrom, mappingFrom, mergeImport } from '../b
 import { Layout } from '../../../views/layout';
 import { BomBody } from '../../../views/pages/bom';
 import { ImportPreviewBody, type ImportPreviewProps } from '../../../views/components/bom-import';
-import { ConfirmItemPage } from '../../../views/components/supply-confirm';
+import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 
 export const CSV_IMPORT_LIMIT_BYTES = 2 * 1024 * 1024;
@@ -24,7 +24,6 @@ const body = (p: Project, failed?: Failed, notice?: string) => <BomBody project=
 export function bomPage(project: Project, failed?: Failed, notice?: string) {
   return (
     <Layout title={`Parts list · ${project.name}`} project={project} section="bom">
-      <link rel="stylesheet" href="/assets/pages.css" />
       {body(project, failed, notice)}
     </Layout>
   );
@@ -112,7 +111,7 @@ export function bomRoutes(deps: Deps) {
     const mapping = mappingFrom(values, guessMapping(headers), headers.length);
     const preview = previewImport(state.csv, { kind: 'parts-list', defaultCurrency: project.currency, decimal: state.decimal, delimiter, mapping });
     const show = (p: Project, status: 200 | 409 | 422, message?: string) =>
-      sendPage(c, <Layout title={`Import preview · ${p.name}`} project={p} section="bom"><link rel="stylesheet" href="/assets/pages.css" /><ImportPreviewBody project={p} preview={preview} message={message} {...state} /></Layout>, status);
+      sendPage(c, <Layout title={`Import preview · ${p.name}`} project={p} section="bom"><ImportPreviewBody project={p} preview={preview} message={message} {...state} /></Layout>, status);
     if (values.action !== 'import') return show(project, 200);
 
     const stageId = state.stageId === '' ? null : state.stageId;

@@ -11,13 +11,12 @@ import * as F from '../parts-forms';
 import { refusal } from '../supply-forms';
 import { Layout } from '../../../views/layout';
 import { PartsBody } from '../../../views/pages/parts';
-import { ConfirmItemPage } from '../../../views/components/supply-confirm';
+import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 
 export function partsPage(project: Project, failed?: Failed, notice?: string, openPart?: string) {
   return (
     <Layout title={`Parts catalog · ${project.name}`} project={project} section="parts">
-      <link rel="stylesheet" href="/assets/pages.css" />
       <PartsBody project={project} failed={failed} notice={notice} openPart={openPart} />
     </Layout>
   );

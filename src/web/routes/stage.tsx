@@ -12,7 +12,7 @@ import type { Deps } from '../deps';
 import { stageSchema, paSchema, toPa, lpfSchema, toLpf, relaySchema, toRelay } from '../stage-forms';
 import { Layout } from '../../../views/layout';
 import { StageBody } from '../../../views/pages/stage';
-import { ConfirmDelete } from '../../../views/pages/projects';
+import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 import { stageResults } from './stage-results';
 
@@ -127,13 +127,15 @@ export function stageRoutes(deps: Deps) {
     const used = p.bom.filter((b) => b.stageId === stage.id).length;
     return sendPage(
       c,
-      <ConfirmDelete
+      <ConfirmItemPage
+        project={p}
+        section="overview"
         title="Delete stage"
-        what={`${stage.name}${used ? ` (its ${used} parts-list line${used === 1 ? '' : 's'} move to "General")` : ''}`}
+        what={`stage “${stage.name}”`}
+        also={used ? `Its ${used} parts-list line${used === 1 ? '' : 's'} move to "General".` : undefined}
         action={`/projects/${p.id}/stages/${stage.id}/delete`}
         back={`/projects/${p.id}`}
-        version={p.version}
-        project={p}
+        users={[]}
       />,
     );
   });
@@ -156,7 +158,15 @@ export function stageRoutes(deps: Deps) {
       if (!(e instanceof VersionConflict)) throw e;
       return sendPage(
         c,
-        <ConfirmDelete title="Not deleted: the project changed meanwhile" what={p.stages.find((s) => s.id === sid(c))!.name} action={`/projects/${id}/stages/${sid(c)}/delete`} back={`/projects/${id}`} version={p.version} project={p} />,
+        <ConfirmItemPage
+          project={p}
+          section="overview"
+          title="Not deleted: the project changed meanwhile"
+          what={`stage “${p.stages.find((s) => s.id === sid(c))!.name}”`}
+          action={`/projects/${id}/stages/${sid(c)}/delete`}
+          back={`/projects/${id}`}
+          users={[]}
+        />,
         409,
       );
     }

@@ -12,16 +12,10 @@ import { newId } from '../ids';
 import * as F from '../supply-forms';
 import { Layout } from '../../../views/layout';
 import { SupplyBody } from '../../../views/pages/supply';
-import { ConfirmItemPage } from '../../../views/components/supply-confirm';
+import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import type { EvaluationReport } from '../../core/evaluate';
 import { SupplyResults } from '../../../views/partials/supply-results';
-
-// Styles of the supply, parts and parts-list pages (style.css is the lead's). Served here until the
-// layout links it; the pages link it themselves meanwhile.
-const PAGES_CSS = readFileSync(fileURLToPath(new URL('../../../views/assets/pages.css', import.meta.url)));
 
 function supplyResultsFor(report: EvaluationReport) {
   if (report.supply) return <SupplyResults report={report.supply} />;
@@ -37,7 +31,6 @@ function body(project: Project, failed?: Failed, notice?: string, openRail?: str
 export function supplyPage(project: Project, failed?: Failed, notice?: string, openRail?: string) {
   return (
     <Layout title={`Supply · ${project.name}`} project={project} section="supply">
-      <link rel="stylesheet" href="/assets/pages.css" />
       {body(project, failed, notice, openRail)}
     </Layout>
   );
@@ -92,8 +85,6 @@ export function supplyRoutes(deps: Deps) {
   const common = { partial: (p: Project, f?: Failed, n?: string) => body(p, f, n), page: (p: Project, f?: Failed, n?: string) => supplyPage(p, f, n), redirect: pageUrl };
   const rawValues = z.record(z.string(), z.string());
   const noFields = z.object({});
-
-  app.get('/assets/pages.css', (c) => c.body(PAGES_CSS, 200, { 'Content-Type': 'text/css; charset=utf-8', 'Cache-Control': 'max-age=300' }));
 
   app.get('/projects/:id/supply', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));
