@@ -63,7 +63,8 @@ export const text = (label: string, max = 200, required = true) =>
 export const choice = <const T extends readonly [string, ...string[]]>(label: string, options: T) =>
   z.enum(options, { message: `${label}: choose one of ${options.join(', ')}` });
 
-export const checkbox = z.stringbool().optional().default(false);
+/** A checkbox: unchecked sends nothing (or an empty value): false. */
+export const checkbox = z.preprocess((v) => (v === '' ? undefined : v), z.stringbool().optional().default(false));
 
 export const versionField = z.coerce.number({ message: 'version: missing; reload the page' }).int().min(1);
 

@@ -102,9 +102,10 @@ export function toPa(d: z.output<typeof paSchema>): PaParams {
 export const lpfSchema = z
   .object({
     response: choice('Response', ['butterworth', 'chebyshev']),
-    ripple: num('dB', { label: 'Passband ripple', min: 0, max: 3 }),
+    ripple: num('dB', { label: 'Passband ripple', min: 0, max: 100 }),
     order: num('', { label: 'Order', min: 1, max: 15, integer: true }),
-    form: choice('Form', ['capacitor-input', 'inductor-input']),
+    // not named "form": an input called form would shadow HTMLFormElement.form for scripts
+    layout: choice('Form', ['capacitor-input', 'inductor-input']),
     cutoff: optNum('Hz', { label: 'Cutoff', min: 100e3, max: 100e6 }),
     capacitorSeries: choice('Capacitor series', ['E12', 'E24']),
     allowParallelPairs: checkbox,
@@ -132,7 +133,7 @@ export function lpfValues(p: LpfParams): Record<string, string> {
     response: p.response,
     ripple: String(p.rippleDb),
     order: String(p.order),
-    form: p.form,
+    layout: p.form,
     cutoff: formatInput(p.cutoffHz, 'Hz'),
     capacitorSeries: p.capacitorSeries,
     allowParallelPairs: p.allowParallelPairs ? 'true' : '',
@@ -152,7 +153,7 @@ export function toLpf(d: z.output<typeof lpfSchema>): LpfParams {
     response: d.response,
     rippleDb: d.response === 'butterworth' ? 0 : d.ripple,
     order: d.order,
-    form: d.form,
+    form: d.layout,
     cutoffHz: d.cutoff,
     capacitorSeries: d.capacitorSeries,
     allowParallelPairs: d.allowParallelPairs,

@@ -136,7 +136,7 @@ const LpfForm: FC<{ project: Project; stage: Stage; state: FieldState }> = ({ pr
       <Select name="response" label="Response" state={state} options={[['chebyshev', 'Chebyshev (equal ripple)'], ['butterworth', 'Butterworth (maximally flat)']]} />
       <Field name="ripple" label="Ripple" unit="dB" state={state} size={5} hint="0.01–0.5 dB" />
       <Field name="order" label="Order" state={state} size={3} hint="3, 5, 7 or 9" />
-      <Select name="form" label="Form" state={state} options={[['capacitor-input', 'Capacitor input (π)'], ['inductor-input', 'Inductor input (T)']]} />
+      <Select name="layout" label="Form" state={state} options={[['capacitor-input', 'Capacitor input (π)'], ['inductor-input', 'Inductor input (T)']]} />
       <Field name="cutoff" label="Cutoff" unit="Hz" state={state} size={9} hint="empty = chosen from the band" />
     </div>
     <div class="row">

@@ -1,0 +1,72 @@
+import { describe, it, expect } from 'vitest';
+import { demoApp } from '../helpers/app';
+import { loadProject } from '../../src/db/projects';
+import { lpfValues, paValues, relayValues } from '../../src/web/stage-forms';
+import { DEMO_PROJECTS } from '../../seed-demo/index';
+
+const ID = 'demo-club-30m';
+const club = DEMO_PROJECTS[0];
+const lpfForm = () => ({ version: '1', ...lpfValues(club.stages.find((s) => s.id === 'st-lpf')!.lpf!) });
+
+describe('stage page', () => {
+  it('renders the filter form and the stage checks', async () => {
+    const { get } = await demoApp();
+    const html = await (await get(`/projects/${ID}/stages/st-lpf`)).text();
+    expect(html).toContain('Low-pass filter design');
+    expect(html).toContain('Checks for this stage');
+  });
+
+  it.each([
+    ['an even-order filter between equal terminations', { order: '6' }, 'order', 'Order must be odd'],
+    ['a 5 dB Chebyshev ripple', { ripple: '5' }, 'ripple', 'Chebyshev ripple must be between 0.01 and 0.5 dB'],
+    ['a negative core AL', { coreAl: '-4.9n' }, 'coreAl', 'Core AL must be a positive inductance'],
+  ])('refuses %s beside the field and saves nothing', async (_label, change, field, message) => {
+    const { post, database } = await demoApp();
+    const before = await loadProject(database.db, ID);
+    const res = await post(`/projects/${ID}/stages/st-lpf/lpf`, { ...lpfForm(), ...change }, { 'HX-Request': 'true' });
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain(message);
+    expect(html).toContain(`id="f-${field}" name="${field}" type="text" value="${Object.values(change)[0]}"`);
+    expect(await loadProject(database.db, ID)).toEqual(before);
+  });
+
+  it('a valid filter change is saved and the design follows it', async () => {
+    const { post, database } = await demoApp();
+    const res = await post(`/projects/${ID}/stages/st-lpf/lpf`, { ...lpfForm(), order: '7', layout: 'inductor-input' });
+    expect(res.status).toBe(303);
+    const lpf = (await loadProject(database.db, ID))!.stages.find((s) => s.id === 'st-lpf')!.lpf!;
+    expect(lpf.order).toBe(7);
+    expect(lpf.form).toBe('inductor-input');
+  });
+
+  it('refuses a zero target power on the settings form', async () => {
+    const { post } = await demoApp();
+    const res = await post(`/projects/${ID}/settings`, {
+      version: '1', name: 'x', notes: '', frequency: '10.11 MHz', power: '0', supplyKind: 'mains', mainsV: '120', mainsHz: '60', mainsLow: '10', mainsHigh: '10', ambient: '35', duty: '40', kits: '8', currency: 'USD',
+    });
+    expect(res.status).toBe(422);
+    expect(await res.text()).toContain('Target output must be more than 0 W');
+  });
+
+  it('PA and relay forms round-trip their stored values', async () => {
+    const { post, database } = await demoApp();
+    const pa = club.stages.find((s) => s.id === 'st-pa')!.pa!;
+    expect((await post(`/projects/${ID}/stages/st-pa/pa`, { version: '1', ...paValues(pa) })).status).toBe(303);
+    const relay = club.stages.find((s) => s.id === 'st-tr')!.relay!;
+    expect((await post(`/projects/${ID}/stages/st-tr/relay`, { version: '2', ...relayValues(relay) })).status).toBe(303);
+    const p = (await loadProject(database.db, ID))!;
+    expect(p.stages.find((s) => s.id === 'st-pa')!.pa).toEqual(pa);
+    expect(p.stages.find((s) => s.id === 'st-tr')!.relay).toEqual(relay);
+  });
+
+  it('editing the loads adds a new rail load and removes one', async () => {
+    const { post, database } = await demoApp();
+    const res = await post(`/projects/${ID}/stages/st-keyer`, {
+      version: '1', name: 'Keyer', kind: 'other', notes: '', dissipation: '', rail0: '', l0_receive: '8 mA', l0_keyUp: '12 mA', l0_keyDown: '12 mA', rail1: 'rail-pa', l1_receive: '0', l1_keyUp: '1m', l1_keyDown: '2m',
+    });
+    expect(res.status).toBe(303);
+    const stage = (await loadProject(database.db, ID))!.stages.find((s) => s.id === 'st-keyer')!;
+    expect(stage.loads).toEqual([{ railId: 'rail-pa', currentA: { receive: 0, keyUp: 0.001, keyDown: 0.002 } }]);
+  });
+});
