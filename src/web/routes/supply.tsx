@@ -17,14 +17,33 @@ import type { Failed } from '../../../views/components/failed';
 import type { EvaluationReport } from '../../core/evaluate';
 import { SupplyResults } from '../../../views/partials/supply-results';
 
-function supplyResultsFor(report: EvaluationReport) {
-  if (report.supply) return <SupplyResults report={report.supply} />;
-  return <p class="hint card">No computed supply results: add a rail (and, for a mains station, a transformer with a winding) to see rail voltages at the mains corners, ripple, fuses and heat.</p>;
+function supplyResultsFor(project: Project, report: EvaluationReport) {
+  if (!report.supply) return <p class="hint card">No computed supply results: add a rail (and, for a mains station, a transformer with a winding) to see rail voltages at the mains corners, ripple, fuses and heat.</p>;
+  const rectified = project.supply.rails.filter((r) => r.kind === 'rectified');
+  return (
+    <>
+      {rectified.length && project.mains ? (
+        <p class="hint">
+          SPICE netlists at the worst voltage corner (low mains, key-down), with .meas lines for the mean, ripple, trough, winding RMS and peak diode current:{' '}
+          {rectified.map((r, i) => (
+            <>
+              {i ? ', ' : ''}
+              <a href={`/projects/${project.id}/supply/${r.id}/netlist.cir`} download>
+                {r.name}
+              </a>
+            </>
+          ))}
+          .
+        </p>
+      ) : null}
+      <SupplyResults report={report.supply} />
+    </>
+  );
 }
 
 function body(project: Project, failed?: Failed, notice?: string, openRail?: string) {
   const parentsFor = (railId: string) => F.possibleParents(project, railId).map((r): [string, string] => [r.id, r.name]);
-  const results = supplyResultsFor(evaluate(project));
+  const results = supplyResultsFor(project, evaluate(project));
   return <SupplyBody project={project} parentsFor={parentsFor} results={results} failed={failed} notice={notice} openRail={openRail} />;
 }
 
