@@ -16,20 +16,31 @@ const attr = (tag: string, name: string): string | undefined => {
 };
 
 /** Every <form> with its action, method and the name/value of its inputs, textareas and selects. */
-export function forms(html: string): { action: string; method: string; fields: Record<string, string> }[] {
-  const out: { action: string; method: string; fields: Record<string, string> }[] = [];
+export interface HtmlForm {
+  action: string;
+  method: string;
+  fields: Record<string, string>;
+  /** input type per field name: text, hidden, checkbox, number, ..., 'textarea' or 'select' */
+  types: Record<string, string>;
+}
+
+export function forms(html: string): HtmlForm[] {
+  const out: HtmlForm[] = [];
   for (const m of html.matchAll(/<form\b([^>]*)>([\s\S]*?)<\/form>/g)) {
     const fields: Record<string, string> = {};
+    const types: Record<string, string> = {};
     for (const i of m[2].matchAll(/<input\b[^>]*>/g)) {
       const name = attr(i[0], 'name');
       const type = attr(i[0], 'type') ?? 'text';
       if (!name || type === 'file' || type === 'submit') continue;
+      types[name] = type;
       if (type === 'checkbox' && !/\schecked/.test(i[0])) continue;
       fields[name] = attr(i[0], 'value') ?? '';
     }
     for (const t of m[2].matchAll(/<textarea\b([^>]*)>([\s\S]*?)<\/textarea>/g)) {
       const name = attr(t[1], 'name');
       if (name) fields[name] = unescapeHtml(t[2]);
+      if (name) types[name] = 'textarea';
     }
     for (const s of m[2].matchAll(/<select\b([^>]*)>([\s\S]*?)<\/select>/g)) {
       const name = attr(s[1], 'name');
@@ -37,8 +48,9 @@ export function forms(html: string): { action: string; method: string; fields: R
       const opts = [...s[2].matchAll(/<option\b([^>]*)>/g)];
       const chosen = opts.find((o) => /\sselected/.test(o[1])) ?? opts[0];
       if (chosen) fields[name] = attr(chosen[1], 'value') ?? '';
+      types[name] = 'select';
     }
-    out.push({ action: attr(m[1], 'action') ?? '', method: (attr(m[1], 'method') ?? 'get').toLowerCase(), fields });
+    out.push({ action: attr(m[1], 'action') ?? '', method: (attr(m[1], 'method') ?? 'get').toLowerCase(), fields, types });
   }
   return out;
 }

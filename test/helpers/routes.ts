@@ -30,3 +30,22 @@ export function appRoutes(app: Hono, ids: Record<string, string> = { id: DEMO_ID
 }
 
 export const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+
+/** Path parameters filled with the real ids of a project, so item pages render its content. */
+export function idsFor(p: import('../../src/core/model').Project): Record<string, string> {
+  const rail = p.supply.rails.find((r) => r.kind === 'rectified') ?? p.supply.rails[0];
+  const part = p.parts.find((x) => x.offers.length) ?? p.parts[0];
+  return {
+    id: p.id,
+    sid: p.stages.find((s) => s.lpf)?.id ?? p.stages[0]?.id ?? 'x',
+    tid: p.supply.transformers[0]?.id ?? 'x',
+    wid: p.supply.transformers[0]?.windings[0]?.id ?? 'x',
+    rid: rail?.id ?? 'x',
+    railId: rail?.id ?? 'x',
+    item: rail?.id ?? 'x',
+    pid: part?.id ?? 'x',
+    oid: part?.offers[0]?.id ?? 'x',
+    lid: p.bom[0]?.id ?? 'x',
+    n: '0',
+  };
+}

@@ -3,7 +3,7 @@
 // current) and through an imported project file whose every free-text field carries one.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { makeApp, postForm, type TestApp } from '../helpers/test-app';
-import { appRoutes } from '../helpers/routes';
+import { appRoutes, idsFor } from '../helpers/routes';
 import { formByAction, stageIds } from '../helpers/html';
 import { withPayloads, MARKUP_PAYLOADS, RAW_MARKERS, ESCAPED_SCRIPT, FORMULA_PAYLOAD } from '../helpers/payloads';
 import { DEMO_PROJECTS } from '../../seed-demo/index';
@@ -27,24 +27,8 @@ function expectNoRawMarkup(html: string, where: string) {
   for (const m of RAW_MARKERS) expect(html.includes(m), `${where} contains raw ${m}`).toBe(false);
 }
 
-/** Path parameters filled with the real ids of a stored project, so item pages render its content. */
 async function idsOf(id: string): Promise<Record<string, string>> {
-  const p = (await loadProject(t.database.db, id))!;
-  const rail = p.supply.rails.find((r) => r.kind === 'rectified') ?? p.supply.rails[0];
-  const part = p.parts.find((x) => x.offers.length) ?? p.parts[0];
-  return {
-    id,
-    sid: p.stages.find((s) => s.lpf)?.id ?? p.stages[0]?.id ?? 'x',
-    tid: p.supply.transformers[0]?.id ?? 'x',
-    wid: p.supply.transformers[0]?.windings[0]?.id ?? 'x',
-    rid: rail?.id ?? 'x',
-    railId: rail?.id ?? 'x',
-    item: rail?.id ?? 'x',
-    pid: part?.id ?? 'x',
-    oid: part?.offers[0]?.id ?? 'x',
-    lid: p.bom[0]?.id ?? 'x',
-    n: '0',
-  };
+  return idsFor((await loadProject(t.database.db, id))!);
 }
 
 /** Every GET page of a project (overview, supply, parts, ... as they exist), HTML only. */
