@@ -75,7 +75,9 @@ export function bomRoutes(deps: Deps) {
   app.get('/projects/:id/bom.csv', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));
     if (!project) return c.notFound();
-    const semicolon = c.req.query('sep') === 'semicolon';
+    const sep = c.req.query('sep') ?? 'comma';
+    if (sep !== 'comma' && sep !== 'semicolon') return c.text(`Bad request: sep must be "comma" or "semicolon" (you gave "${sep.slice(0, 40)}").`, 400);
+    const semicolon = sep === 'semicolon';
     const text = costReportToCsv(costProject(project), { delimiter: semicolon ? ';' : ',' });
     const fileName = `${project.name.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 60) || 'parts-list'}-parts.csv`;
     return c.body(text, 200, { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileName}"` });

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { demoApp } from '../helpers/app';
 
-describe('SPICE netlist downloads', () => {
+describe('downloads: SPICE netlists and CSV', () => {
   it('gives each rectified rail at low mains and key-down current, with .meas lines', async () => {
     const { get } = await demoApp();
     const res = await get('/projects/demo-club-30m/supply/rail-pa/netlist.cir');
@@ -25,5 +25,13 @@ describe('SPICE netlist downloads', () => {
     expect((await get('/projects/demo-club-30m/supply/rail-13v8/netlist.cir')).status).toBe(404);
     expect((await get('/projects/demo-club-30m/supply/nope/netlist.cir')).status).toBe(404);
     expect((await get('/projects/demo-club-30m/stages/st-rx/lpf.cir')).status).toBe(404);
+  });
+
+  it('the CSV export refuses an unknown separator with a message', async () => {
+    const { get } = await demoApp();
+    const res = await get('/projects/demo-club-30m/bom.csv?sep=pipe');
+    expect(res.status).toBe(400);
+    expect(await res.text()).toContain('sep must be "comma" or "semicolon"');
+    expect((await get('/projects/demo-club-30m/bom.csv?sep=semicolon')).status).toBe(200);
   });
 });
