@@ -1,5 +1,6 @@
 // Parts list & cost page: the line editor, the costing below it, CSV export and import; the body (#bom) is
 // both the page content and the htmx partial. The import form is a plain form (file upload, own preview page).
+import { PageMessages } from '../components/messages';
 import type { FC } from 'hono/jsx';
 import type { Project } from '../../src/core/model';
 import type { CostReport } from '../../src/core/cost';
@@ -16,20 +17,10 @@ export interface BomBodyProps {
 }
 
 export const BomBody: FC<BomBodyProps> = ({ project, report, failed, notice }) => {
-  const deleteError = failed?.form.startsWith('delete-') ? failed.state.errors._form : undefined;
   const csv = `/projects/${project.id}/bom.csv`;
   return (
     <div id="bom">
-      {notice ? (
-        <p class="notice" role="status">
-          {notice}
-        </p>
-      ) : null}
-      {deleteError ? (
-        <div class="form-errors" role="alert">
-          <p>{deleteError}</p>
-        </div>
-      ) : null}
+      <PageMessages notice={notice} failed={failed} />
       <BomLines project={project} failed={failed} />
       <p class="bom-export">
         Export the costed parts list: <a href={csv}>CSV (comma separated)</a> · <a href={`${csv}?sep=semicolon`}>CSV (semicolon, decimal comma)</a>

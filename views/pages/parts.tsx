@@ -1,6 +1,7 @@
 // Parts catalog page: costing settings, suppliers, and the parts with their supplier offers.
 // The body (#parts) is both the page content and the htmx partial.
 import type { FC } from 'hono/jsx';
+import { PageMessages } from '../components/messages';
 import type { Project } from '../../src/core/model';
 import { FormErrors } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
@@ -18,22 +19,12 @@ export interface PartsBodyProps {
 
 export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPart }) => {
   const addState = stateFor('add-part', failed, () => partValues(null));
-  const deleteError = failed?.form.startsWith('delete-') ? failed.state.errors._form : undefined;
   const uses = (id: string) => project.bom.filter((l) => l.partId === id).length;
   const categories = [...new Set(project.parts.map((p) => p.category).filter(Boolean))].sort();
   const suppliers = [...new Set([...project.costing.suppliers.map((s) => s.name), ...project.parts.flatMap((p) => p.offers.map((o) => o.supplier))])].sort();
   return (
     <div id="parts">
-      {notice ? (
-        <p class="notice" role="status">
-          {notice}
-        </p>
-      ) : null}
-      {deleteError ? (
-        <div class="form-errors" role="alert">
-          <p>{deleteError}</p>
-        </div>
-      ) : null}
+      <PageMessages notice={notice} failed={failed} />
       <datalist id="supplier-names">
         {suppliers.map((s) => (
           <option value={s} />

@@ -1,6 +1,7 @@
 // Supply page: transformers and windings, rails (rectified, regulated, battery), the primary fuse, and the
 // computed supply results below. The body is the htmx partial (#supply) and the page content alike.
 import type { Child, FC } from 'hono/jsx';
+import { PageMessages } from '../components/messages';
 import type { Project } from '../../src/core/model';
 import { formatInput } from '../../src/core/units';
 import { FormErrors, type FieldState, Field, Select } from '../components/fields';
@@ -54,19 +55,9 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
   const addTrafo = stateFor('add-transformer', failed, () => ({ name: '', construction: 'laminated' }));
   const addRail = stateFor('add-rail', failed, () => ({ name: '', source: sourceOptions(project)[0]?.[0] ?? 'battery' }));
   const fuse = stateFor('primary-fuse', failed, () => ({ primaryFuse: formatInput(project.supply.primaryFuseA, 'A') }));
-  const deleteError = failed?.form.startsWith('delete-') ? failed.state.errors._form : undefined;
   return (
     <div id="supply">
-      {notice ? (
-        <p class="notice" role="status">
-          {notice}
-        </p>
-      ) : null}
-      {deleteError ? (
-        <div class="form-errors" role="alert">
-          <p>{deleteError}</p>
-        </div>
-      ) : null}
+      <PageMessages notice={notice} failed={failed} />
       {project.mains ? (
         <p class="caution-box">
           Mains wiring, charged reservoir capacitors and hot regulators can injure. Fuse the primary, earth the chassis, fit
