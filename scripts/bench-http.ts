@@ -80,6 +80,9 @@ async function editRoute(server: RunningServer): Promise<Route> {
 export async function benchHttp(server: RunningServer, seconds: number): Promise<{ results: HttpResult[]; text: string }> {
   const get = (name: string, path: string, connections = 8): Route => ({ name, connections, ok: (s) => s >= 200 && s < 300, requests: [{ method: 'GET', path }] });
   const routes: Route[] = [get('GET /healthz (trivial)', '/healthz'), get('GET overview page', DEMO), await editRoute(server), get('GET project JSON export', `${DEMO}/export.json`)];
+  const csv = await fetch(`${server.url}${DEMO}/bom.csv`);
+  await csv.arrayBuffer();
+  if (csv.status === 200) routes.push(get('GET parts list CSV', `${DEMO}/bom.csv`));
   const pdf = await fetch(`${server.url}${DEMO}/pack.pdf`);
   await pdf.arrayBuffer();
   if (pdf.status === 200) routes.push(get('GET PDF pack', `${DEMO}/pack.pdf`, 2));
@@ -95,8 +98,9 @@ export async function benchHttp(server: RunningServer, seconds: number): Promise
   const rows = results.map((r) => [
     r.name,
     r.rps.toFixed(0),
-    ms(r.p50),
-    ms(r.p99),
+    // autocannon's latency resolution is 1 ms: 0 means under a millisecond
+    r.p50 === 0 ? '<1' : ms(r.p50),
+    r.p99 === 0 ? '<1' : ms(r.p99),
     r === trivial ? '1' : `${(trivial.rps / Math.max(r.rps, 1e-9)).toFixed(1)}x`,
     r.requests,
     Object.entries(r.statuses).map(([k, v]) => `${k}:${v}`).join(' '),
