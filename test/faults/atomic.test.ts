@@ -62,6 +62,33 @@ describe('import is all-or-nothing', () => {
   });
 });
 
+describe('parts-list CSV import is all-or-nothing unless asked for the good rows', () => {
+  const csv = ['Refs,Description,Quantity,Supplier,Price,Currency', 'R81,Resistor 1k 0.25 W,2,Plain Parts Co,0.05,USD', 'R82,Resistor 2k2 0.25 W,lots,Plain Parts Co,0.05,USD', 'R83,Resistor 4k7 0.25 W,1,Plain Parts Co,0.05,USD'].join('\r\n');
+  const importCsv = async (extra: Record<string, string>) => {
+    const version = (await loadProject(t.database.db, 'demo-portable-20m'))!.version;
+    return postForm(t.app, '/projects/demo-portable-20m/bom/import', { csv, action: 'import', version: String(version), stageId: '', ...extra });
+  };
+
+  it('a file with a bad row in the middle imports nothing and says so', async () => {
+    const before = await rowCounts(t.database);
+    const res = await importCsv({});
+    expect(res.status).toBe(422);
+    expect(await res.text()).toMatch(/Nothing was imported/);
+    expect(await rowCounts(t.database)).toEqual(before);
+  });
+
+  it('control: asked for the good rows only, it imports exactly those two lines', async () => {
+    const before = await rowCounts(t.database);
+    const res = await importCsv({ takeGoodRows: 'true' });
+    expect(res.status).toBe(303);
+    const after = await rowCounts(t.database);
+    expect(after.bom_lines - before.bom_lines).toBe(2);
+    const refs = (await loadProject(t.database.db, 'demo-portable-20m'))!.bom.map((b) => b.refs);
+    expect(refs).toEqual(expect.arrayContaining(['R81', 'R83']));
+    expect(refs).not.toContain('R82');
+  });
+});
+
 describe('clone is all-or-nothing', () => {
   it('insertProject rolls back every row when the last insert fails (duplicate parts-list line id)', async () => {
     const before = await rowCounts(t.database);
