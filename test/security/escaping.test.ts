@@ -2,6 +2,10 @@
 // Payloads reach fields two ways: through the forms (create, rename, settings, add stage, a refused
 // current) and through an imported project file whose every free-text field carries one.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { makeApp, postForm, type TestApp } from '../helpers/test-app';
 import { appRoutes, idsFor } from '../helpers/routes';
 import { formByAction, stageIds } from '../helpers/html';
@@ -109,7 +113,19 @@ describe('downloads of the hostile project', () => {
     const res = await t.app.request(`/projects/${importedId}/pack.pdf`);
     expect(res.status).toBe(200);
     expect(res.headers.get('Content-Type')).toMatch(/^application\/pdf/);
-    expect(Buffer.from(await res.arrayBuffer()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    const bytes = Buffer.from(await res.arrayBuffer());
+    expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    // the payloads are printed as the literal text they are (poppler's pdftotext, when installed)
+    if (existsSync('/usr/bin/pdftotext')) {
+      const dir = mkdtempSync(join(tmpdir(), 'rigwright-pdf-'));
+      try {
+        writeFileSync(join(dir, 'pack.pdf'), bytes);
+        const text = spawnSync('/usr/bin/pdftotext', ['-raw', join(dir, 'pack.pdf'), '-'], { encoding: 'utf8' }).stdout;
+        expect(text).toContain('<script>alert(1)</script>');
+      } finally {
+        rmSync(dir, { recursive: true, force: true });
+      }
+    }
   });
 });
 
