@@ -68,6 +68,27 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
     expect(await projectRows()).toBe(3);
   });
 
+  it('deletes a stage and then a project, each after a confirmation page', async () => {
+    await page.goto(`${server.url}/projects/${DEMO}`);
+    const names = () => page.locator('li.stage .stage-name').allInnerTexts();
+    const before = await names();
+    const victim = before.at(-1)!;
+    await page.locator('li.stage', { hasText: victim }).getByRole('link', { name: /Delete/ }).click();
+    await page.waitForURL(/\/delete$/);
+    expect(await page.locator('main').innerText()).toContain(victim);
+    await Promise.all([page.waitForURL(new RegExp(`/projects/${DEMO}(\\?.*)?$`)), page.getByRole('button', { name: /delete/i }).click()]);
+    expect(await names()).toEqual(before.slice(0, -1));
+
+    await page.goto(server.url + '/');
+    const rows = await projectRows();
+    const row = page.locator('table.projects tbody tr', { hasNot: page.locator('a[href^="/projects/demo-"]') }).first();
+    await row.getByRole('link', { name: /Delete/ }).click();
+    await page.waitForURL(/\/delete$/);
+    await Promise.all([page.waitForURL(/\/(\?.*)?$/), page.getByRole('button', { name: /delete/i }).click()]);
+    expect(await projectRows()).toBe(rows - 1);
+    expect(await page.locator('.notice').innerText()).toMatch(/deleted/i);
+  });
+
   it('shows a refused import with its reason and saves nothing', async () => {
     await page.goto(server.url + '/');
     const before = await projectRows();
