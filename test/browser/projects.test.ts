@@ -141,7 +141,7 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
       const probe = await fetch(`${server.url}/projects/${DEMO}/${path}`);
       if (probe.status === 404) ctx.skip(`/${path} page not landed yet`);
       await page.goto(`${server.url}/projects/${DEMO}/${path}`);
-      await page.screenshot({ path: artifactPath(`${path}.png`), fullPage: true });
+      await page.screenshot({ path: artifactPath(`${path}-download.png`), fullPage: true });
       const hrefs = await page.locator('a[href]').evaluateAll((as) => as.map((a) => a.getAttribute('href')!));
       const href = hrefs.find((h) => linkPattern.test(h));
       if (!href) ctx.skip(`no ${label} link on /${path} yet`);
