@@ -1,7 +1,7 @@
 // The section pages in a real browser: stage (filter), RF checks, parts catalog and parts list edit in
 // place (no full reload), refuse bad input beside the field, and the parts list exports CSV.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import type { Page } from 'playwright-core';
@@ -145,6 +145,22 @@ describe.skipIf(!hasChromium)('section pages in the browser', () => {
     const row = csv.records.find((r) => r[refsCol] === 'J1');
     expect(row, 'the J1 line is in the CSV').toBeDefined();
     expect(row!.some((cell) => cell === '3')).toBe(true);
+  });
+
+  it('parts list: a CSV file is previewed first, then imported as new lines', async (ctx) => {
+    await open(`${DEMO}/bom`, ctx);
+    const file = join(dl, 'lines.csv');
+    writeFileSync(file, 'Refs,Description,Quantity,Supplier,Price,Currency\r\nR81,Resistor 1k 0.25 W,2,Plain Parts Co,0.05,USD\r\nR83,Resistor 4k7 0.25 W,1,Plain Parts Co,0.05,USD\r\n');
+    const form = page.locator('form[aria-label="Import a parts list from CSV"]');
+    await form.locator('input[type="file"]').setInputFiles(file);
+    await Promise.all([page.waitForURL(/\/bom\/import$/), form.getByRole('button', { name: /Preview/ }).click()]);
+    expect(await page.locator('main').innerText()).toContain('Resistor 4k7 0.25 W');
+    // nothing is saved by the preview
+    expect(await (await fetch(`${server.url}${DEMO}/bom`)).text()).not.toContain('R81');
+    await Promise.all([page.waitForURL(/\/bom\?/), page.getByRole('button', { name: 'Import', exact: true }).click()]);
+    expect(await page.locator('.notice').first().innerText()).toMatch(/Imported 2 line/);
+    expect(await page.locator('form#line-b1').count()).toBe(1);
+    expect(await page.locator('input[name="refs"][value="R81"]').count()).toBe(1);
   });
 
   it('raised no script errors or policy violations on the way', () => {
