@@ -1,43 +1,33 @@
-// Parts list & cost page through app.request(): lines add/edit/delete, refused input kept and nothing saved,
+// Parts list & cost page through t.app.request(): lines add/edit/delete, refused input kept and nothing saved,
 // stale version, CSV export, and the CSV import (preview, all-or-nothing, good rows only).
 import { beforeEach, describe, expect, it } from 'vitest';
-import { buildApp } from '../../src/app';
-import { openDatabase, type Database } from '../../src/db/client';
+import { demoApp } from '../helpers/app';
 import { loadProject } from '../../src/db/projects';
-import { seedDemo } from '../../seed-demo/index';
 import type { Project } from '../../src/core/model';
 import { costProject } from '../../src/core/cost';
 import { formatMoney } from '../../src/core/cost/money';
 
 const ID = 'demo-club-30m';
-let database: Database;
-let app: ReturnType<typeof buildApp>;
-
+let t: Awaited<ReturnType<typeof demoApp>>;
 beforeEach(async () => {
-  database = await openDatabase('file::memory:');
-  await seedDemo(database, '2026-01-01T00:00:00.000Z');
-  app = buildApp({ database, now: () => new Date('2026-01-02T00:00:00.000Z') });
+  t = await demoApp();
 });
 
-const stored = async (): Promise<Project> => (await loadProject(database.db, ID))!;
+const stored = async (): Promise<Project> => (await loadProject(t.database.db, ID))!;
 const base = `/projects/${ID}/bom`;
 
-function post(path: string, fields: Record<string, string>, htmx = false) {
-  const headers: Record<string, string> = { Origin: 'http://localhost', 'Content-Type': 'application/x-www-form-urlencoded' };
-  if (htmx) headers['HX-Request'] = 'true';
-  return app.request(`http://localhost${path}`, { method: 'POST', headers, body: new URLSearchParams(fields).toString() });
-}
+const post = (path: string, fields: Record<string, string>, htmx = false) => t.post(path, fields, htmx ? { 'HX-Request': 'true' } : {});
 
 function upload(fields: Record<string, string>, csv: string, name = 'list.csv') {
   const form = new FormData();
   for (const [k, v] of Object.entries(fields)) form.set(k, v);
   form.set('file', new File([csv], name, { type: 'text/csv' }));
-  return app.request(`http://localhost${base}/import`, { method: 'POST', headers: { Origin: 'http://localhost' }, body: form });
+  return t.app.request(`http://localhost${base}/import`, { method: 'POST', headers: { Origin: 'http://localhost' }, body: form });
 }
 
 describe('parts list lines', () => {
   it('renders the lines and the costing computed by costProject', async () => {
-    const res = await app.request(`http://localhost${base}`);
+    const res = await t.app.request(`http://localhost${base}`);
     expect(res.status).toBe(200);
     const html = await res.text();
     const p = await stored();
@@ -56,7 +46,7 @@ describe('parts list lines', () => {
     expect(edit.status).toBe(303);
     const after = await stored();
     expect(after.bom.find((l) => l.id === line.id)).toMatchObject({ stageId: null, qtyPerRig: 4, refs: 'R20–R23' });
-    expect(await (await app.request(`http://localhost${base}`)).text()).toContain(formatMoney(costProject(after).totals.buildCents, after.currency));
+    expect(await (await t.app.request(`http://localhost${base}`)).text()).toContain(formatMoney(costProject(after).totals.buildCents, after.currency));
   });
 
   it('keeps the typed quantity and saves nothing when it is not a number', async () => {
@@ -87,7 +77,7 @@ describe('parts list lines', () => {
 
   it('deletes a line after the confirm page; the part stays in the catalog', async () => {
     const p = await stored();
-    const confirm = await (await app.request(`http://localhost${base}/lines/b26/delete`)).text();
+    const confirm = await (await t.app.request(`http://localhost${base}/lines/b26/delete`)).text();
     expect(confirm).toContain('Yes, delete');
     const res = await post(`${base}/lines/b26/delete`, { version: String(p.version) });
     expect(res.status).toBe(303);
@@ -99,7 +89,7 @@ describe('parts list lines', () => {
 
 describe('CSV export and import', () => {
   it('exports the costed parts list as CSV with the header the importer recognises', async () => {
-    const res = await app.request(`http://localhost/projects/${ID}/bom.csv`);
+    const res = await t.app.request(`http://localhost/projects/${ID}/bom.csv`);
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toContain('text/csv');
     const text = await res.text();

@@ -1,30 +1,20 @@
-// Parts catalog through app.request(): parts, offers (price-break text), suppliers, costing settings;
+// Parts catalog through t.app.request(): parts, offers (price-break text), suppliers, costing settings;
 // refused input kept and nothing saved, stale version, deletion of a part on the parts list refused.
 import { beforeEach, describe, expect, it } from 'vitest';
-import { buildApp } from '../../src/app';
-import { openDatabase, type Database } from '../../src/db/client';
+import { demoApp } from '../helpers/app';
 import { loadProject } from '../../src/db/projects';
-import { seedDemo } from '../../seed-demo/index';
 import type { Project } from '../../src/core/model';
 import { parseBreaks, parseRatings, parseRates, moneyToCents } from '../../src/web/parts-forms';
 
 const ID = 'demo-club-30m';
-let database: Database;
-let app: ReturnType<typeof buildApp>;
-
+let t: Awaited<ReturnType<typeof demoApp>>;
 beforeEach(async () => {
-  database = await openDatabase('file::memory:');
-  await seedDemo(database, '2026-01-01T00:00:00.000Z');
-  app = buildApp({ database, now: () => new Date('2026-01-02T00:00:00.000Z') });
+  t = await demoApp();
 });
 
-const stored = async (): Promise<Project> => (await loadProject(database.db, ID))!;
+const stored = async (): Promise<Project> => (await loadProject(t.database.db, ID))!;
 
-function post(path: string, fields: Record<string, string>, htmx = false) {
-  const headers: Record<string, string> = { Origin: 'http://localhost', 'Content-Type': 'application/x-www-form-urlencoded' };
-  if (htmx) headers['HX-Request'] = 'true';
-  return app.request(`http://localhost${path}`, { method: 'POST', headers, body: new URLSearchParams(fields).toString() });
-}
+const post = (path: string, fields: Record<string, string>, htmx = false) => t.post(path, fields, htmx ? { 'HX-Request': 'true' } : {});
 
 describe('catalog text parsing', () => {
   it('reads price breaks as minimum quantity -> whole cents, sorted', () => {
@@ -55,7 +45,7 @@ describe('catalog text parsing', () => {
 
 describe('parts catalog page', () => {
   it('renders every part and supplier', async () => {
-    const res = await app.request(`http://localhost/projects/${ID}/parts`);
+    const res = await t.app.request(`http://localhost/projects/${ID}/parts`);
     expect(res.status).toBe(200);
     const html = await res.text();
     const p = await stored();
@@ -119,7 +109,7 @@ describe('parts catalog page', () => {
 
   it('refuses to delete a part on the parts list, naming the lines', async () => {
     const before = await stored();
-    const confirm = await (await app.request(`http://localhost/projects/${ID}/parts/p-fuse/delete`)).text();
+    const confirm = await (await t.app.request(`http://localhost/projects/${ID}/parts/p-fuse/delete`)).text();
     expect(confirm).toContain('parts-list line “F1–F3” in General, 3 per rig');
     expect(confirm).not.toContain('Yes, delete');
     const res = await post(`/projects/${ID}/parts/p-fuse/delete`, { version: String(before.version) });
@@ -130,7 +120,7 @@ describe('parts catalog page', () => {
 
   it('deletes an offer and an unused part after the confirm page', async () => {
     const p = await stored();
-    expect(await (await app.request(`http://localhost/projects/${ID}/parts/p-trafo/offers/o2/delete`)).text()).toContain('Yes, delete');
+    expect(await (await t.app.request(`http://localhost/projects/${ID}/parts/p-trafo/offers/o2/delete`)).text()).toContain('Yes, delete');
     let res = await post(`/projects/${ID}/parts/p-trafo/offers/o2/delete`, { version: String(p.version) });
     expect(res.status).toBe(303);
     expect((await stored()).parts.find((x) => x.id === 'p-trafo')!.offers.map((o) => o.id)).toEqual(['o1']);

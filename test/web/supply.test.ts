@@ -1,37 +1,27 @@
-// Supply page through app.request(): add/edit/delete, refused input kept and nothing saved, stale version,
+// Supply page through t.app.request(): add/edit/delete, refused input kept and nothing saved, stale version,
 // and deletes refused while something still uses the item.
 import { beforeEach, describe, expect, it } from 'vitest';
-import { buildApp } from '../../src/app';
-import { openDatabase, type Database } from '../../src/db/client';
+import { demoApp } from '../helpers/app';
 import { loadProject } from '../../src/db/projects';
-import { seedDemo } from '../../seed-demo/index';
 import type { Project, RegulatedRail, RectifiedRail } from '../../src/core/model';
 import { evaluate } from '../../src/core/evaluate';
 import { formatValue } from '../../src/core/units';
 
 const ID = 'demo-club-30m';
-let database: Database;
-let app: ReturnType<typeof buildApp>;
-
+let t: Awaited<ReturnType<typeof demoApp>>;
 beforeEach(async () => {
-  database = await openDatabase('file::memory:');
-  await seedDemo(database, '2026-01-01T00:00:00.000Z');
-  app = buildApp({ database, now: () => new Date('2026-01-02T00:00:00.000Z') });
+  t = await demoApp();
 });
 
-const stored = async (): Promise<Project> => (await loadProject(database.db, ID))!;
+const stored = async (): Promise<Project> => (await loadProject(t.database.db, ID))!;
 
-function post(path: string, fields: Record<string, string>, htmx = false) {
-  const headers: Record<string, string> = { Origin: 'http://localhost', 'Content-Type': 'application/x-www-form-urlencoded' };
-  if (htmx) headers['HX-Request'] = 'true';
-  return app.request(`http://localhost${path}`, { method: 'POST', headers, body: new URLSearchParams(fields).toString() });
-}
+const post = (path: string, fields: Record<string, string>, htmx = false) => t.post(path, fields, htmx ? { 'HX-Request': 'true' } : {});
 
 const base = `/projects/${ID}/supply`;
 
 describe('supply page', () => {
   it('renders the supply tree with every transformer, winding and rail', async () => {
-    const res = await app.request(`http://localhost${base}`);
+    const res = await t.app.request(`http://localhost${base}`);
     expect(res.status).toBe(200);
     const html = await res.text();
     expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
@@ -129,7 +119,7 @@ describe('supply page', () => {
     const added = (await stored()).supply.rails.at(-1)!;
     expect(added).toMatchObject({ kind: 'regulated', name: '9 V VXO rail', parentId: 'rail-13v8' });
     expect(res.headers.get('location')).toContain(`open=${added.id}`);
-    const confirm = await app.request(`http://localhost${base}/rails/${added.id}/delete`);
+    const confirm = await t.app.request(`http://localhost${base}/rails/${added.id}/delete`);
     expect(confirm.status).toBe(200);
     expect(await confirm.text()).toContain('Yes, delete');
     const del = await post(`${base}/rails/${added.id}/delete`, { version: String(v + 1) });
@@ -139,7 +129,7 @@ describe('supply page', () => {
 
   it('refuses to delete a rail that stages and another rail use, naming them', async () => {
     const before = await stored();
-    const confirm = await (await app.request(`http://localhost${base}/rails/rail-raw/delete`)).text();
+    const confirm = await (await t.app.request(`http://localhost${base}/rails/rail-raw/delete`)).text();
     expect(confirm).not.toContain('Yes, delete');
     expect(confirm).toContain('rail “13.8 V signal rail” is fed from it');
     const res = await post(`${base}/rails/rail-13v8/delete`, { version: String(before.version) });
