@@ -73,8 +73,11 @@ describe('crash safety under a stream of edits', () => {
           const amps = (100 + editNo) / 1000;
           editNo++;
           if (i < round.acks) {
-            const res = await post(s, amps);
-            expect(res.status, await res.text()).toBe(303);
+            const res = await post(s, amps).catch((e: Error) => {
+              // diagnostics: did the server die under us (something outside killed it)?
+              throw new Error(`edit ${editNo} got no answer: ${e.message}; server exit ${server.proc.exitCode} signal ${server.proc.signalCode}; output:\n${server.output().slice(-2000)}`);
+            });
+            expect(res.status, `edit ${editNo}: ${(await res.text()).slice(0, 500)}`).toBe(303);
             version++;
             acknowledged++;
             expected.set(s.action, amps);
