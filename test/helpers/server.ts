@@ -53,7 +53,18 @@ export function exited(proc: ChildProcess): Promise<number | null> {
   return new Promise((r) => proc.once('exit', (code) => r(code)));
 }
 
+/** Start the server; when the chosen port was taken meanwhile (EADDRINUSE), try again on another. */
 export async function startServer(opts: ServerOptions = {}): Promise<RunningServer> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await startOnce(opts);
+    } catch (e) {
+      if (attempt >= 3 || !/EADDRINUSE/.test(String((e as Error).message))) throw e;
+    }
+  }
+}
+
+async function startOnce(opts: ServerOptions): Promise<RunningServer> {
   const ownDir = opts.dbPath ? null : mkdtempSync(join(tmpdir(), 'rigwright-test-'));
   const dbPath = opts.dbPath ?? join(ownDir!, 'rigwright.db');
   const port = await freePort();
