@@ -66,6 +66,15 @@ export async function startServer(opts: ServerOptions = {}): Promise<RunningServ
 
 async function startOnce(opts: ServerOptions): Promise<RunningServer> {
   const ownDir = opts.dbPath ? null : mkdtempSync(join(tmpdir(), 'rigwright-test-'));
+  try {
+    return await startIn(opts, ownDir);
+  } catch (e) {
+    if (ownDir) rmSync(ownDir, { recursive: true, force: true });
+    throw e;
+  }
+}
+
+async function startIn(opts: ServerOptions, ownDir: string | null): Promise<RunningServer> {
   const dbPath = opts.dbPath ?? join(ownDir!, 'rigwright.db');
   const port = await freePort();
   const host = opts.env?.HOST ?? '127.0.0.1';
