@@ -247,7 +247,8 @@ export function describeIssues(error: z.ZodError, prefix = ''): string[] {
   });
 }
 
-/** Cross-references a schema cannot express: rails, windings, stages and parts named by id must exist. */
+/** Cross-references a schema cannot express: rails, windings, stages and parts named by id must exist, and
+ *  the ids others refer to must be unique (offer and parts-list line ids are renewed on import, so may repeat). */
 export function checkReferences(p: Project): string[] {
   const errors: string[] = [];
   const windingIds = new Set(p.supply.transformers.flatMap((t) => t.windings.map((w) => w.id)));
@@ -262,6 +263,7 @@ export function checkReferences(p: Project): string[] {
     }
   };
   dupes([...p.supply.rails.map((r) => r.id), ...windingIds], 'rail/winding');
+  dupes(p.supply.transformers.map((t) => t.id), 'transformer');
   dupes(p.stages.map((s) => s.id), 'stage');
   dupes(p.parts.map((x) => x.id), 'part');
   p.supply.rails.forEach((r, i) => {

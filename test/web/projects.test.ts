@@ -85,3 +85,15 @@ describe('project list', () => {
     expect((await listProjects(database.db)).length).toBe(2);
   });
 });
+
+describe('import cross-references', () => {
+  it('two transformers with one id are refused with a message, not a server error', async () => {
+    const { app, get, database } = await demoApp();
+    const file = JSON.parse(await (await get(`/projects/${ID}/export.json`)).text());
+    file.project.supply.transformers.push({ ...file.project.supply.transformers[0], windings: [] });
+    const res = await upload(app, JSON.stringify(file));
+    expect(res.status).toBe(422);
+    expect(await res.text()).toContain('transformer id &quot;tr-main&quot; is used twice');
+    expect((await listProjects(database.db)).length).toBe(2);
+  });
+});
