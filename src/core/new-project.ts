@@ -135,3 +135,12 @@ export function defaultRelay(coilRailId: string | null): import('./model').Relay
     wpm: 20,
   };
 }
+
+/** A stage of kind final, lpf or tr gets its kind's data (with starting values) when it has none. */
+export function withKindDefaults(p: Project, s: import('./model').Stage): import('./model').Stage {
+  const firstRail = p.supply.rails[0]?.id ?? '';
+  if (s.kind === 'final' && !s.pa) return { ...s, pa: defaultPa(s.loads[0]?.railId ?? firstRail) };
+  if (s.kind === 'lpf' && !s.lpf) return { ...s, lpf: defaultLpfParams() };
+  if (s.kind === 'tr' && !s.relay) return { ...s, relay: defaultRelay(s.loads[0]?.railId ?? null) };
+  return s;
+}

@@ -93,4 +93,13 @@ describe('overview page', () => {
     expect(res.status).toBe(404);
     expect(await res.text()).toContain('Not found');
   });
+
+  it('a new final stage starts with PA data, so its form and checks appear at once', async () => {
+    const { post, get, database } = await demoApp();
+    expect((await post(`/projects/${ID}/stages`, { version: '1', kind: 'final', name: 'Second final' })).status).toBe(303);
+    const added = (await loadProject(database.db, ID))!.stages.at(-1)!;
+    expect(added.pa?.railId).toBe('rail-raw'); // the first rail, until the builder chooses
+    const html = await (await get(`/projects/${ID}/stages/${added.id}`)).text();
+    expect(html).toContain('Final amplifier data');
+  });
 });

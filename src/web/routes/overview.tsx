@@ -4,6 +4,7 @@ import { z } from 'zod';
 import type { Project, Stage } from '../../core/model';
 import { MODES, STAGE_KINDS } from '../../core/model';
 import { evaluate } from '../../core/evaluate';
+import { withKindDefaults } from '../../core/new-project';
 import { loadProject } from '../../db/projects';
 import { num, pct, text, choice, type FieldErrors } from '../form';
 import { projectEdit } from '../edit';
@@ -92,7 +93,7 @@ export function overviewRoutes(deps: Deps) {
       schema: addStageSchema,
       change: (p, d) => {
         const name = d.name || defaultStageName(d.kind);
-        const stage: Stage = { id: newId('st'), kind: d.kind, name, notes: '', loads: [], dissipationW: null };
+        const stage = withKindDefaults(p, { id: newId('st'), kind: d.kind, name, notes: '', loads: [], dissipationW: null });
         return { ...p, stages: [...p.stages, stage] };
       },
     }),

@@ -3,7 +3,7 @@ import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Project, Stage, StageLoad } from '../../core/model';
 import { MODES } from '../../core/model';
-import { defaultPa, defaultLpfParams, defaultRelay } from '../../core/new-project';
+import { withKindDefaults } from '../../core/new-project';
 import { loadProject, updateProject, VersionConflict } from '../../db/projects';
 import { num, parseForm, type FieldErrors } from '../form';
 import { projectEdit, type ChangeResult } from '../edit';
@@ -24,15 +24,6 @@ function withStage(p: Project, id: string, f: (s: Stage) => Stage | { errors: Fi
   const next = f(stage);
   if ('errors' in next) return next;
   return { ...p, stages: p.stages.map((s) => (s.id === id ? next : s)) };
-}
-
-/** Add the kind's own data when a stage becomes a final, filter or relay stage. */
-function ensureKindData(p: Project, s: Stage): Stage {
-  const firstRail = p.supply.rails[0]?.id ?? '';
-  if (s.kind === 'final' && !s.pa) return { ...s, pa: defaultPa(s.loads[0]?.railId ?? firstRail) };
-  if (s.kind === 'lpf' && !s.lpf) return { ...s, lpf: defaultLpfParams() };
-  if (s.kind === 'tr' && !s.relay) return { ...s, relay: defaultRelay(s.loads[0]?.railId ?? null) };
-  return s;
 }
 
 function parseLoads(p: Project, values: Record<string, string>): { loads: StageLoad[] } | { errors: FieldErrors } {
@@ -99,7 +90,7 @@ export function stageRoutes(deps: Deps) {
       const errors = { ...(general.ok ? {} : general.errors), ...('errors' in loads ? loads.errors : {}) };
       if (!general.ok || 'errors' in loads) return { errors };
       const d = general.data;
-      return withStage(p, sid(c), (s) => ensureKindData(p, { ...s, name: d.name, kind: d.kind, notes: d.notes, dissipationW: d.dissipation, loads: loads.loads }));
+      return withStage(p, sid(c), (s) => withKindDefaults(p, { ...s, name: d.name, kind: d.kind, notes: d.notes, dissipationW: d.dissipation, loads: loads.loads }));
     }),
   );
 
