@@ -7,6 +7,7 @@ import { evaluateSupply } from './power/evaluate-supply';
 import type { SupplyReport } from './power/report-types';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
+import { catalogFindings } from './catalog-checks';
 
 export interface EvaluationReport {
   budget: BudgetReport;
@@ -14,6 +15,8 @@ export interface EvaluationReport {
   supply: SupplyReport | null;
   rf: RfReport;
   cost: CostReport;
+  /** parts on the parts list checked against the computed design (reservoir capacitors) */
+  catalog: Finding[];
   /** PA rail voltage used for the PA model, per rail id (V): nominal-mains key-down trough when simulated */
   paRailV: Record<string, number>;
   /** every finding of every section, most severe first */
@@ -75,6 +78,7 @@ export function evaluate(project: Project, options: EvaluateOptions = {}): Evalu
   }
   const rf = evaluateRf(project, { paRailV, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
-  const findings = sortFindings([...budget.findings, ...(supply?.findings ?? []), ...rf.findings, ...cost.findings]);
-  return { budget, supply, rf, cost, paRailV, findings };
+  const catalog = catalogFindings(project, supply);
+  const findings = sortFindings([...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
+  return { budget, supply, rf, cost, catalog, paRailV, findings };
 }

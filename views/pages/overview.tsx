@@ -157,7 +157,7 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
 
 const SECTIONS: { key: string; label: string; path: string; findings: (r: EvaluationReport) => Finding[] }[] = [
   { key: 'budget', label: 'Current budget', path: '', findings: (r) => r.budget.findings },
-  { key: 'supply', label: 'Supply', path: '/supply', findings: (r) => r.supply?.findings ?? [] },
+  { key: 'supply', label: 'Supply', path: '/supply', findings: (r) => [...(r.supply?.findings ?? []), ...r.catalog] },
   { key: 'rf', label: 'RF checks', path: '/rf', findings: (r) => r.rf.findings },
   { key: 'cost', label: 'Parts and cost', path: '/bom', findings: (r) => r.cost.findings },
 ];

@@ -15,7 +15,8 @@ import { SupplyBody } from '../../../views/pages/supply';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 import type { EvaluationReport } from '../../core/evaluate';
-import { SupplyResults } from '../../../views/partials/supply-results';
+import { SupplyResults, FindingList } from '../../../views/partials/supply-results';
+import { sortFindings } from '../../core/findings';
 
 function supplyResultsFor(project: Project, report: EvaluationReport) {
   if (!report.supply) return <p class="hint card">No computed supply results: add a rail (and, for a mains station, a transformer with a winding) to see rail voltages at the mains corners, ripple, fuses and heat.</p>;
@@ -37,6 +38,12 @@ function supplyResultsFor(project: Project, report: EvaluationReport) {
         </p>
       ) : null}
       <SupplyResults report={report.supply} />
+      {report.catalog.length ? (
+        <section class="card">
+          <h3>Reservoir capacitors on the parts list against this design</h3>
+          <FindingList findings={sortFindings(report.catalog)} />
+        </section>
+      ) : null}
     </>
   );
 }
