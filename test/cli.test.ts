@@ -20,6 +20,11 @@ describe('command line', () => {
     expect(r.stdout).toContain('Current budget');
     // entered loads 83 / 106 / 206 mA plus the relay coil (36 mA in key-up and key-down)
     expect(r.stdout).toMatch(/13\.8 V signal rail\s+13\.9 V\s+83 mA\s+142 mA\s+242 mA/);
+    // the other sections appear with the same numbers as the JSON (checked there)
+    expect(r.stdout).toContain('Supply design (headroom at the worst voltage corner');
+    expect(r.stdout).toMatch(/Primary fuse: T\d/);
+    expect(r.stdout).toMatch(/Harmonic 3: -\d+\.\d dBc, margin \d+\.\d dB/);
+    expect(r.stdout).toMatch(/Cost: build of 8 kit\(s\) USD [\d,]+\.\d\d/);
   });
 
   it('evaluates as JSON with the documented keys', () => {

@@ -3,6 +3,7 @@ import type { Project } from '../core/model';
 import { MODES, MODE_LABELS } from '../core/model';
 import type { EvaluationReport } from '../core/evaluate';
 import { formatValue } from '../core/units';
+import { formatMoney } from '../core/cost/money';
 
 export const EVALUATION_FORMAT = 'rigwright-evaluation';
 export const EVALUATION_FORMAT_VERSION = 1;
@@ -30,8 +31,50 @@ export function renderEvaluationText(project: Project, report: EvaluationReport)
     out.push(`${pad('  '.repeat(r.depth) + r.name, 40)}${lpad(formatValue(r.nominalV, 'V'), 9)}${MODES.map((m) => lpad(formatValue(r.outputA[m], 'A'), 13)).join('')}`);
   }
   out.push(`${pad('All sources, DC power', 49)}${MODES.map((m) => lpad(formatValue(report.budget.totalW[m], 'W'), 13)).join('')}`);
+  out.push(...supplyLines(report), ...rfLines(report), ...costLines(report));
   out.push('');
   out.push(`Findings (${report.findings.length}, most severe first)`);
   for (const f of report.findings) out.push(`  [${f.severity.toUpperCase()}] ${f.subject}: ${f.message} (${f.source})`);
   return `${out.join('\n')}\n`;
+}
+
+function supplyLines(report: EvaluationReport): string[] {
+  const s = report.supply;
+  if (!s) return [];
+  const out = ['', s.mains ? 'Supply design (headroom at the worst voltage corner: low mains, key-down)' : 'Supply design'];
+  for (const r of s.rails) {
+    if (r.kind === 'rectified') {
+      const c = r.corners.find((x) => x.id === r.worstVoltageCornerId);
+      const fuse = r.fuse.ratedA !== null ? `${r.fuse.characteristic}${formatValue(r.fuse.ratedA, 'A')}` : 'beyond the series';
+      out.push(`  ${r.railName}: trough ${formatValue(c?.troughV, 'V')} (needs ${formatValue(r.requiredMinV, 'V')}), ripple ${formatValue(c?.ripplePpV, 'V')} p-p, reservoir >= ${formatValue(r.reservoir.recommendedRatedV, 'V')} rated, rail fuse ${fuse}`);
+    } else if (r.kind === 'regulated') {
+      const tj = r.thermal?.junctionC != null ? `, junction ${formatValue(r.thermal.junctionC, '°C')}` : '';
+      out.push(`  ${r.railName}: ${formatValue(r.outputV, 'V')}, ${formatValue(r.thermalDissipationW, 'W')} in CW use${tj}`);
+    } else {
+      out.push(`  ${r.railName}: runtime about ${(r.runtimeS / 3600).toFixed(1)} h, end of discharge under load ${formatValue(r.loadedEndV, 'V')}`);
+    }
+  }
+  for (const t of s.transformers) out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard, primary ${formatValue(t.primaryA, 'A')}`);
+  if (s.primary?.fuse.ratedA) out.push(`  Primary fuse: ${s.primary.fuse.characteristic}${formatValue(s.primary.fuse.ratedA, 'A')} (time-lag, IEC 60127 series)`);
+  return out;
+}
+
+function rfLines(report: EvaluationReport): string[] {
+  const rf = report.rf;
+  const out = ['', 'RF'];
+  for (const st of rf.stages) {
+    if (st.pa) out.push(`  ${st.stageName}: ${formatValue(st.pa.outputW, 'W')} out from ${formatValue(st.pa.railV, 'V')}, key-down ${formatValue(st.pa.keyDownCurrentA, 'A')}, drain peak ${formatValue(st.pa.peakDrainV, 'V')}`);
+    if (st.lpf?.design) out.push(`  ${st.stageName}: ${st.lpf.design.response} order ${st.lpf.design.order}, cutoff ${formatValue(st.lpf.design.cutoffHz, 'Hz', 4)}, loss ${st.lpf.analysis?.atOperating.lossDb.toFixed(2)} dB`);
+    if (st.relay) out.push(`  ${st.stageName}: RF ${formatValue(st.relay.rfPeakV, 'V')} peak, ${formatValue(st.relay.rfRmsA, 'A')} RMS at the worst SWR`);
+  }
+  for (const h of rf.harmonics?.rows ?? []) out.push(`  Harmonic ${h.n}: ${h.predictedDbc.toFixed(1)} dBc, margin ${h.marginDb.toFixed(1)} dB`);
+  if (rf.exposure) out.push(`  RF exposure: keep the public ${formatValue(rf.exposure.generalDistanceM, 'm')} and yourself ${formatValue(rf.exposure.controlledDistanceM, 'm')} from the antenna (far-field estimate)`);
+  return out;
+}
+
+function costLines(report: EvaluationReport): string[] {
+  const c = report.cost;
+  const t = c.totals;
+  const perKit = t.perKitCents !== null ? `, per kit ${formatMoney(t.perKitCents, c.currency)}` : '';
+  return ['', `Cost: build of ${c.kits} kit(s) ${formatMoney(t.buildCents, c.currency)} (parts ${formatMoney(t.partsCents, c.currency)}, shipping ${formatMoney(t.shippingCents, c.currency)})${perKit}${t.unpricedLines ? `; ${t.unpricedLines} line(s) unpriced` : ''}`];
 }
