@@ -6,6 +6,7 @@ import type { Finding } from '../../src/core/findings';
 import type { PaResult } from '../../src/core/rf/pa';
 import type { LpfStageResult, RfReport } from '../../src/core/rf/report';
 import type { RelayResult } from '../../src/core/rf/tr-relay';
+import type { HarmonicBasis } from '../../src/core/rf/harmonics';
 import { formatValue as fv } from '../../src/core/units';
 import { filterPlotSvg } from '../plots/filter-plot';
 
@@ -185,7 +186,7 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
             <tr data-harmonic={x.n}>
               <td class="num">{x.n}</td>
               <td class="num">{fv(x.frequencyHz, 'Hz')}</td>
-              <td class="num">{fv(x.paLevelDbc, 'dBc')}<span class="sub">{x.paLevelBasis}</span></td>
+              <td class="num">{fv(x.paLevelDbc, 'dBc')}<span class="sub">{BASIS_WORDS[x.paLevelBasis]}</span></td>
               <td class="num">{fv(x.filterAttenuationDb, 'dB')}</td>
               <td class="num">{fv(x.worstFilterAttenuationDb, 'dB')}</td>
               <td class="num">{fv(x.predictedDbc, 'dBc')}</td>
@@ -219,6 +220,13 @@ const Exposure: FC<{ report: RfReport }> = ({ report }) => {
       <p class="caution">{e.caution}</p>
     </div>
   );
+};
+
+/** How each PA harmonic level was estimated, in words. */
+const BASIS_WORDS: Record<HarmonicBasis, string> = {
+  'square-wave-1/n': 'square wave (1/n)',
+  'rectangular-bound-1/n': 'single-ended bound (1/n)',
+  'balance-residual': 'push-pull residual',
 };
 
 export const RfFindings: FC<{ findings: Finding[] }> = ({ findings }) => (

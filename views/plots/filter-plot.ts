@@ -2,6 +2,7 @@
 // shaded, harmonics marked, the attenuation the spurious rule needs (limit line) and the Monte Carlo
 // worst case. Pure: data in, SVG text out; no arithmetic beyond placing points.
 import type { RfReport } from '../../src/core/rf/report';
+import { esc } from './svg-text';
 
 export interface FilterPlotData {
   title: string;
@@ -45,7 +46,6 @@ export function filterPlotData(report: RfReport, lpfStageId?: string): FilterPlo
   };
 }
 
-const esc = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 const fmt = (x: number) => (Math.round(x * 10) / 10).toString();
 
 function mhzLabel(hz: number): string {

@@ -4,6 +4,7 @@
 // (inline styles, no external CSS).
 import type { RectifiedRailReport } from '../../src/core/power/report-types';
 import { formatValue } from '../../src/core/units';
+import { esc } from './svg-text';
 
 export interface RectifierPlotData {
   title: string;
@@ -31,7 +32,6 @@ export function rectifierPlotData(rail: RectifiedRailReport): RectifierPlotData 
   };
 }
 
-const esc = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 const r1 = (x: number) => (Math.round(x * 10) / 10).toString();
 
 /** A "nice" tick step (1, 2, 5 x 10^k) giving about `count` intervals over span. */
