@@ -63,18 +63,26 @@ function computedLoads(project: Project, paRailV: Record<string, number>): Compu
   return loads;
 }
 
+/** PA rail voltages closer than this between passes count as settled (V). */
+const SETTLED_V = 0.005;
+const MAX_PASSES = 6;
+
 const railOutputs = (b: BudgetReport): Record<string, PerMode> => Object.fromEntries(b.rails.map((r) => [r.railId, r.outputA]));
 
 export function evaluate(project: Project, options: EvaluateOptions = {}): EvaluationReport {
-  // First pass: PA at the nominal rail voltage; second pass: at the simulated key-down trough.
-  // Two passes settle it: the trough moves by millivolts when the PA current is refined.
-  let budget = computeBudget(project, computedLoads(project, paRailVoltages(project, computeBudget(project), null)));
+  // The PA current depends on its rail voltage and the rail voltage on the PA current: iterate to a fixed
+  // point, starting from the budget's nominal voltage. The map is a strong contraction (a volt more on the
+  // rail changes the current by tens of mA, which moves the trough by tens of mV), so it settles in 2-4 passes.
+  let paRailV = paRailVoltages(project, computeBudget(project), null);
+  let budget = computeBudget(project, computedLoads(project, paRailV));
   let supply = project.supply.rails.length ? evaluateSupply(project, railOutputs(budget)) : null;
-  let paRailV = paRailVoltages(project, budget, supply);
-  if (supply && Object.keys(paRailV).length) {
+  for (let pass = 0; supply && pass < MAX_PASSES; pass++) {
+    const next = paRailVoltages(project, budget, supply);
+    const settled = Object.keys(next).every((id) => Math.abs(next[id] - (paRailV[id] ?? 0)) < SETTLED_V);
+    paRailV = next;
+    if (settled) break;
     budget = computeBudget(project, computedLoads(project, paRailV));
     supply = evaluateSupply(project, railOutputs(budget));
-    paRailV = paRailVoltages(project, budget, supply);
   }
   const rf = evaluateRf(project, { paRailV, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);

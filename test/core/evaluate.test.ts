@@ -1,0 +1,52 @@
+// The whole evaluation responds to the builder's changes the way a supply designer would expect.
+import { describe, it, expect } from 'vitest';
+import { evaluate } from '../../src/core/evaluate';
+import { DEMO_PROJECTS } from '../../seed-demo/index';
+import type { RectifiedRailReport } from '../../src/core/power/report-types';
+
+const club = () => structuredClone(DEMO_PROJECTS[0]);
+const paRail = (r: ReturnType<typeof evaluate>) => r.supply!.rails.find((x) => x.railId === 'rail-pa') as RectifiedRailReport;
+
+describe('evaluate(): changes ripple through the design', () => {
+  it('230 V / 50 Hz mains: the primary current and fuse fall, the reservoir for the same ripple grows', () => {
+    const a = evaluate(club());
+    const p = club();
+    p.mains = { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 };
+    const b = evaluate(p);
+    // same secondary load on roughly twice the primary voltage: about half the primary current
+    expect(b.supply!.primary!.loadA).toBeLessThan(a.supply!.primary!.loadA * 0.6);
+    expect(b.supply!.primary!.fuse.ratedA!).toBeLessThan(a.supply!.primary!.fuse.ratedA!);
+    // Source: ripple ~ I / (2 f C) (ref §4.1): at 50 Hz instead of 60 Hz the capacitance for the same ripple rises
+    expect(paRail(b).reservoir.minimumF!).toBeGreaterThan(paRail(a).reservoir.minimumF!);
+  });
+
+  it('a PA drawing more current raises the winding current and transformer VA and lowers the trough', () => {
+    const a = evaluate(club());
+    const p = club();
+    p.stages.find((s) => s.id === 'st-pa')!.pa!.efficiency = 0.5; // less efficient: more DC input for the same RF
+    const b = evaluate(p);
+    expect(b.budget.rails.find((r) => r.railId === 'rail-pa')!.outputA.keyDown).toBeGreaterThan(a.budget.rails.find((r) => r.railId === 'rail-pa')!.outputA.keyDown);
+    expect(paRail(b).winding!.thermalRmsA).toBeGreaterThan(paRail(a).winding!.thermalRmsA);
+    expect(b.supply!.transformers[0].thermalVA).toBeGreaterThan(a.supply!.transformers[0].thermalVA);
+    const trough = (r: ReturnType<typeof evaluate>) => paRail(r).corners.find((c) => c.id === 'low-keyDown')!.troughV;
+    expect(trough(b)).toBeLessThan(trough(a));
+  });
+
+  it('the PA model sees the simulated key-down trough at nominal mains, and its current is in the budget', () => {
+    const r = evaluate(club());
+    const nominalTrough = paRail(r).corners.find((c) => c.mains === 'nominal' && c.load === 'keyDown')!.troughV;
+    expect(r.paRailV['rail-pa']).toBeCloseTo(nominalTrough, 9);
+    const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
+    const load = r.budget.rails.find((x) => x.railId === 'rail-pa')!.loads.find((l) => l.computed)!;
+    expect(Math.abs(load.currentA.keyDown - pa.keyDownCurrentA)).toBeLessThan(0.002); // same model; the passes settle the rail within 5 mV
+  });
+
+  it('every finding in the report carries a source and a message', () => {
+    for (const p of DEMO_PROJECTS) {
+      for (const f of evaluate(structuredClone(p)).findings) {
+        expect(f.source.length).toBeGreaterThan(3);
+        expect(f.message.length).toBeGreaterThan(10);
+      }
+    }
+  });
+});
