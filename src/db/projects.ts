@@ -220,8 +220,13 @@ export async function updateProject(
   });
 }
 
-export async function deleteProject(database: Database, id: string): Promise<boolean> {
+/** Delete a project and its rows. With `expectedVersion`, a project changed since then is refused (VersionConflict). */
+export async function deleteProject(database: Database, id: string, expectedVersion?: number): Promise<boolean> {
   return database.write(async (tx) => {
+    if (expectedVersion !== undefined) {
+      const [row] = await tx.select({ version: t.projects.version }).from(t.projects).where(eq(t.projects.id, id));
+      if (row && row.version !== expectedVersion) throw new VersionConflict(expectedVersion, row.version);
+    }
     await tx.delete(t.bomLines).where(eq(t.bomLines.projectId, id));
     const res = await tx.delete(t.projects).where(eq(t.projects.id, id)).returning({ id: t.projects.id });
     return res.length > 0;

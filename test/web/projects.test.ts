@@ -42,8 +42,33 @@ describe('project list', () => {
     const confirm = await get(`/projects/${ID}/delete`);
     expect(await confirm.text()).toContain('cannot be undone');
     expect((await listProjects(database.db)).length).toBe(2);
-    expect((await post(`/projects/${ID}/delete`, {})).status).toBe(303);
+    const version = /name="version" value="(\d+)"/.exec(await (await get(`/projects/${ID}/delete`)).text())![1];
+    expect((await post(`/projects/${ID}/delete`, { version })).status).toBe(303);
     expect((await listProjects(database.db)).length).toBe(1);
+  });
+
+  it('a delete confirmed before another edit is asked again, not carried out', async () => {
+    const { get, post, database } = await demoApp();
+    const shownVersion = /name="version" value="(\d+)"/.exec(await (await get(`/projects/${ID}/delete`)).text())![1];
+    // another window renames the project after the confirmation page was shown
+    expect((await post(`/projects/${ID}/rename`, { version: shownVersion, name: 'Renamed elsewhere' })).status).toBe(303);
+    const stale = await post(`/projects/${ID}/delete`, { version: shownVersion });
+    expect(stale.status).toBe(409);
+    const html = await stale.text();
+    expect(html).toContain('Not deleted: this project was changed');
+    expect(html).toContain(`name="version" value="${Number(shownVersion) + 1}"`);
+    // a delete with no version at all is not carried out either
+    expect((await post(`/projects/${ID}/delete`, {})).status).toBe(409);
+    expect((await listProjects(database.db)).length).toBe(2);
+  });
+
+  it('renaming a project deleted meanwhile says so instead of failing', async () => {
+    const { post, database } = await demoApp();
+    expect((await post(`/projects/${ID}/delete`, { version: '1' })).status).toBe(303);
+    const res = await post(`/projects/${ID}/rename`, { version: '1', name: 'Too late' });
+    expect(res.status).toBe(404);
+    expect(await res.text()).toContain('Not renamed: that project no longer exists');
+    expect((await listProjects(database.db)).map((p) => p.name)).not.toContain('Too late');
   });
 
   it('exports JSON and imports it back as a new project', async () => {

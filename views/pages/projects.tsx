@@ -135,14 +135,20 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
   );
 };
 
-export const ConfirmDelete: FC<{ title: string; what: string; action: string; back: string }> = ({ title, what, action, back }) => (
+export const ConfirmDelete: FC<{ title: string; what: string; version: number; action: string; back: string; refusal?: string }> = ({ title, what, version, action, back, refusal }) => (
   <Layout title={title}>
     <section class="card confirm">
       <h1>{title}</h1>
+      {refusal ? (
+        <div class="form-errors" role="alert">
+          <p>{refusal}</p>
+        </div>
+      ) : null}
       <p>
         Delete <strong>{what}</strong>? This cannot be undone. (Export the project first if you may want it back.)
       </p>
       <form method="post" action={action} class="inline">
+        <input type="hidden" name="version" value={String(version)} />
         <button type="submit" class="danger">
           Yes, delete
         </button>

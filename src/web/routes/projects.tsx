@@ -1,7 +1,7 @@
 // Project list routes: create, clone, rename, delete (confirmed), export and import JSON.
 import { Hono } from 'hono';
 import { z } from 'zod';
-import { listProjects, loadProject, insertProject, deleteProject, updateProject, VersionConflict } from '../../db/projects';
+import { listProjects, loadProject, insertProject, deleteProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
 import { newProject, cloneProject, MAINS_PRESETS } from '../../core/new-project';
 import { parseProjectFile, toProjectFile } from '../../io/project-file';
 import { num, text, choice, parseForm, versionField } from '../form';
@@ -55,6 +55,8 @@ export function projectRoutes(deps: Deps) {
         const errors = { name: 'Not renamed: the project was changed elsewhere meanwhile. The list now shows the stored name; rename again if you still want to.' };
         return sendPage(c, await listPage({ renameFailed: { id, state: { values, errors } } }), 409);
       }
+      // deleted in another window meanwhile: say so on the list instead of failing
+      if (e instanceof NotFound) return sendPage(c, await listPage({ notice: `Not renamed: that project no longer exists (deleted in another window?). Nothing was saved.` }), 404);
       throw e;
     }
     return c.redirect('/?notice=Renamed.', 303);
@@ -63,12 +65,29 @@ export function projectRoutes(deps: Deps) {
   app.get('/projects/:id/delete', async (c) => {
     const p = await loadProject(deps.database.db, c.req.param('id'));
     if (!p) return c.notFound();
-    return sendPage(c, <ConfirmDelete title="Delete project" what={p.name} action={`/projects/${p.id}/delete`} back="/" />);
+    return sendPage(c, <ConfirmDelete title="Delete project" what={p.name} version={p.version} action={`/projects/${p.id}/delete`} back="/" />);
   });
 
+  // The confirmation carries the version it showed: a project changed since then is asked about again.
   app.post('/projects/:id/delete', async (c) => {
-    const ok = await deleteProject(deps.database, c.req.param('id'));
-    if (!ok) return c.notFound();
+    const id = c.req.param('id');
+    const version = versionField.safeParse((await formValues(c)).version);
+    const reconfirm = async () => {
+      const p = await loadProject(deps.database.db, id);
+      if (!p) return c.notFound();
+      const why = version.success
+        ? 'Not deleted: this project was changed in another tab or window after this confirmation was shown.'
+        : 'Not deleted: the confirmation had no version number.';
+      return sendPage(c, <ConfirmDelete title="Delete project" what={p.name} version={p.version} action={`/projects/${p.id}/delete`} back="/" refusal={`${why} Check it, then confirm again if you still want to delete it.`} />, 409);
+    };
+    if (!version.success) return reconfirm();
+    try {
+      const ok = await deleteProject(deps.database, id, version.data);
+      if (!ok) return c.notFound();
+    } catch (e) {
+      if (e instanceof VersionConflict) return reconfirm();
+      throw e;
+    }
     return c.redirect('/?notice=Project deleted.', 303);
   });
 
