@@ -50,6 +50,30 @@ function paRailVoltages(project: Project, budget: BudgetReport, supply: SupplyRe
   return out;
 }
 
+/**
+ * Highest and hottest voltage per PA rail: a rectified rail's high-mains no-load peak (the reservoir is charged to it
+ * while the PA is unkeyed, and the first key-down cycles see it) and its high-mains key-down mean; a battery's
+ * full-charge voltage for both. Common practice, no published source (worst-case corners of the supply).
+ */
+function paRailCorners(project: Project, supply: SupplyReport | null): { maxV: Record<string, number>; hotV: Record<string, number> } {
+  const maxV: Record<string, number> = {};
+  const hotV: Record<string, number> = {};
+  for (const s of project.stages) {
+    if (!s.pa) continue;
+    const id = s.pa.railId;
+    const r = supply?.rails.find((x) => x.railId === id);
+    if (r?.kind === 'rectified') {
+      const hot = r.corners.find((c) => c.id === 'high-keyDown');
+      if (Number.isFinite(r.reservoir.noLoadPeakHighV) && r.reservoir.noLoadPeakHighV > 0) maxV[id] = r.reservoir.noLoadPeakHighV;
+      if (hot && Number.isFinite(hot.dcMeanV) && hot.dcMeanV > 0) hotV[id] = hot.dcMeanV;
+    } else if (r?.kind === 'battery' && Number.isFinite(r.fullV) && r.fullV > 0) {
+      maxV[id] = r.fullV;
+      hotV[id] = r.fullV;
+    }
+  }
+  return { maxV, hotV };
+}
+
 function computedLoads(project: Project, paRailV: Record<string, number>): ComputedLoad[] {
   const loads: ComputedLoad[] = [];
   for (const s of project.stages) {
@@ -84,7 +108,8 @@ export function evaluate(project: Project, options: EvaluateOptions = {}): Evalu
     budget = computeBudget(project, computedLoads(project, paRailV));
     supply = evaluateSupply(project, railOutputs(budget));
   }
-  const rf = evaluateRf(project, { paRailV, onMonteCarloProgress: options.onMonteCarloProgress });
+  const corners = paRailCorners(project, supply);
+  const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);
   const findings = sortFindings([...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);

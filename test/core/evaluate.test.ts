@@ -50,3 +50,17 @@ describe('evaluate(): changes ripple through the design', () => {
     }
   });
 });
+
+describe('evaluate(): the PA is judged at the supply corners that stress it', () => {
+  it('drain peak = 2 x the PA rail high-mains no-load peak (push-pull, REFERENCE-VALUES §8.1), not the nominal trough', () => {
+    const r = evaluate(club());
+    const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
+    const rail = paRail(r);
+    const toleranceV = 1e-9;
+    expect(Math.abs(pa.maxRailV - rail.reservoir.noLoadPeakHighV)).toBeLessThan(toleranceV);
+    expect(Math.abs(pa.peakDrainV - 2 * rail.reservoir.noLoadPeakHighV)).toBeLessThan(toleranceV);
+    expect(pa.peakDrainV).toBeGreaterThan(2 * r.paRailV['rail-pa']);
+    const hot = rail.corners.find((c) => c.id === 'high-keyDown')!;
+    expect(Math.abs(pa.hotRailV - hot.dcMeanV)).toBeLessThan(toleranceV);
+  });
+});

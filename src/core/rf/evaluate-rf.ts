@@ -14,6 +14,10 @@ import { lineMaxima, evaluateRelay } from './tr-relay';
 export interface RfContext {
   /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
   paRailV: Record<string, number>;
+  /** Highest voltage per PA rail id (high-mains no-load peak, full battery), V: judges the drain-voltage rating. */
+  paRailMaxV?: Record<string, number>;
+  /** Voltage per PA rail id at high mains key-down (mean), V: judges heating. */
+  paRailHotV?: Record<string, number>;
   /** Optional progress of the filter Monte Carlo runs: (done, total) trials. */
   onMonteCarloProgress?: (done: number, total: number) => void;
 }
@@ -74,7 +78,9 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
 
   for (const st of project.stages) {
     if (st.kind === 'final' && st.pa) {
-      const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name);
+      const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
+        maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId],
+      });
       if (st === paStage && pa.outputW > 0) paPowerW = pa.outputW;
       stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });
     }

@@ -49,7 +49,11 @@ export interface PaResult {
   dcInputW: number;
   /** Key-down DC current including bias idle current, A. */
   keyDownCurrentA: number;
-  /** Peak drain voltage, V, and peak current of one conducting device, A. */
+  /** Highest supply voltage the drains can see (high mains with the PA unkeyed, or a full battery), V; railV when unknown. */
+  maxRailV: number;
+  /** Supply voltage used for heating (high mains, key-down), V; railV when unknown. */
+  hotRailV: number;
+  /** Peak drain voltage at the highest supply voltage (maxRailV), V, and peak current of one conducting device, A. */
   peakDrainV: number;
   peakDeviceA: number;
   /** Heating: dissipation (W), heatsink needed (K/W), junction temperatures (°C). */
@@ -62,7 +66,7 @@ const SRC_LOADLINE = 'Textbook load line / Sokal & Sokal IEEE JSSC 1975 (REFEREN
 
 function zeroResult(railV: number, findings: Finding[]): PaResult {
   return {
-    railV, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
+    railV, maxRailV: railV, hotRailV: railV, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
     outputW: 0, outputDbm: -999, outputDbw: -999, vsReferenceDb: -999, vsReferenceSUnits: -999 / 6, efficiency: 0, efficiencySource: 'entered',
     dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
     thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
@@ -72,7 +76,15 @@ function zeroResult(railV: number, findings: Finding[]): PaResult {
 
 const db = (x: number) => (x > 0 ? 10 * Math.log10(x) : -999);
 
-export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier'): PaResult {
+/** Supply corners beyond the operating point: the highest rail voltage (device voltage stress) and the hot one (heating). */
+export interface PaSupplyCorners {
+  /** Highest rail voltage while the PA can be keyed (high mains, no load; full battery), V. */
+  maxRailV?: number;
+  /** Rail voltage at high mains, key-down (mean), V: sets the heating. */
+  hotRailV?: number;
+}
+
+export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier', corners: PaSupplyCorners = {}): PaResult {
   const errors = [...validatePaParams(pa), ...validateThermalInputs(project.ambientC, project.keyingDuty)];
   if (!(railV > 0 && railV <= 5000)) errors.push({ field: 'railId', message: 'No usable supply voltage (above 0 V, at most 5 kV) is known for the PA rail.' });
   const vsat0 = pa.saturationV ?? 0;
@@ -106,10 +118,19 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const op = operatingPoint(pa, railV, primaryOhm);
   const efficiency = pa.efficiency ?? DEFAULT_EFFICIENCY[pa.amplifierClass];
   const dcInputW = op.outputW / efficiency;
-  const biasW = pa.biasIdleMaxA * railV;
   const keyDownCurrentA = dcInputW / railV + pa.biasIdleMaxA;
-  const peakDrainV = peakDrainFactor(pa.amplifierClass) * railV;
-  const thermal = paThermal(pa, op.outputW, dcInputW, biasW, project.ambientC, project.keyingDuty);
+  // Device stress and heating are judged at their own worst corners, not at the operating point: the drains swing
+  // to k x Vdd at the highest rail voltage (high mains, reservoir charged with the PA unkeyed, or a full battery),
+  // and the heat is largest at high mains key-down. Common practice, no published source (worst-case design).
+  const usable = (v: number | undefined) => (v !== undefined && Number.isFinite(v) && v > railV && v <= 5000 ? v : railV);
+  const maxRailV = usable(corners.maxRailV);
+  const hotRailV = usable(corners.hotRailV);
+  // Source: Sokal & Sokal (1975) 3.56 Vdd for class E; 2 Vdd for B, C, D (REFERENCE-VALUES §8.1)
+  const peakDrainV = peakDrainFactor(pa.amplifierClass) * maxRailV;
+  const opHot = hotRailV === railV ? op : operatingPoint(pa, hotRailV, primaryOhm);
+  const thermalRaw = paThermal(pa, opHot.outputW, opHot.outputW / efficiency, pa.biasIdleMaxA * hotRailV, project.ambientC, project.keyingDuty);
+  const hotNote = hotRailV > railV ? ` (with the supply at ${hotRailV.toFixed(1)} V: high mains or full battery, key-down)` : '';
+  const thermal = { ...thermalRaw, findings: thermalRaw.findings.map((f) => (f.rule === 'pa.heat-safety' ? f : { ...f, message: f.message.replace(/\.$|:/, (m) => `${hotNote}${m}`) })) };
 
   if (pa.efficiency === null) {
     findings.push({ severity: 'ok', rule: 'pa.efficiency', subject, value: efficiency, limit: null, unit: '', source: 'Common practice, no published source',
@@ -132,14 +153,15 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   }
   // Common practice, no published source: device voltage rating at least 1.25 x the peak drain voltage
   const vMargin = 1.25;
+  const atMax = maxRailV > railV ? ` at the highest supply of ${maxRailV.toFixed(1)} V (high mains or full battery, before the rail sags under key-down)` : '';
   findings.push({
     severity: pa.deviceVdsMaxV < peakDrainV ? 'fail' : pa.deviceVdsMaxV < vMargin * peakDrainV ? 'caution' : 'ok',
     rule: 'pa.vds', subject, value: peakDrainV, limit: pa.deviceVdsMaxV, unit: 'V', source: `${SRC_LOADLINE}; 25 % margin common practice`,
     message: pa.deviceVdsMaxV < peakDrainV
-      ? `Drain peaks near ${peakDrainV.toFixed(1)} V exceed the ${pa.deviceVdsMaxV} V device rating: the device will break down, especially into a mismatch.`
+      ? `Drain peaks near ${peakDrainV.toFixed(1)} V${atMax} exceed the ${pa.deviceVdsMaxV} V device rating: the device will break down, especially into a mismatch.`
       : pa.deviceVdsMaxV < vMargin * peakDrainV
-        ? `Drain peaks near ${peakDrainV.toFixed(1)} V leave less than 25 % margin to the ${pa.deviceVdsMaxV} V rating; a mismatch or supply rise can exceed it.`
-        : `Device rating ${pa.deviceVdsMaxV} V covers the ${peakDrainV.toFixed(1)} V drain peaks with margin.`,
+        ? `Drain peaks near ${peakDrainV.toFixed(1)} V${atMax} leave less than 25 % margin to the ${pa.deviceVdsMaxV} V rating; a mismatch can exceed it.`
+        : `Device rating ${pa.deviceVdsMaxV} V covers the ${peakDrainV.toFixed(1)} V drain peaks${atMax} with margin.`,
   });
   findings.push({
     severity: op.peakDeviceA > pa.deviceIdMaxA ? 'fail' : op.peakDeviceA > 0.8 * pa.deviceIdMaxA ? 'caution' : 'ok',
@@ -154,7 +176,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const ref = pa.referencePowerW;
   const vsReferenceDb = db(op.outputW / ref);
   return {
-    railV, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
+    railV, maxRailV, hotRailV, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
     primaryOhm, outputW: op.outputW,
     // Source: definitions of dBm and dBW (power relative to 1 mW / 1 W)
     outputDbm: db(op.outputW / 1e-3), outputDbw: db(op.outputW),

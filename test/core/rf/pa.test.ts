@@ -83,3 +83,33 @@ describe('PA findings and bad inputs', () => {
     expect(paKeyDownCurrentA(paParams(), 0, proj)).toBe(0);
   });
 });
+
+describe('PA judged at its worst supply corners (common practice, no published source: worst-case design)', () => {
+  const toleranceV = 0.05;
+  it('drain peak uses the highest rail voltage: class E 3.56 x 15.18 V = 54.0 V (Sokal & Sokal 1975 via REFERENCE-VALUES §8.1)', () => {
+    const e = paParams({ topology: 'single-ended', devices: 1, amplifierClass: 'E', saturationV: 1.0, deviceVdsMaxV: 50, turnsRatio: Math.sqrt(50 / 9.45) });
+    const nominal = evaluatePa(e, 13.8, proj);
+    // REFERENCE-VALUES §8.3: 3.56 x 13.8 = 49.1 V at the operating point
+    near(nominal.peakDrainV, 49.1, toleranceV, 'nominal');
+    expect(nominal.findings.find((f) => f.rule === 'pa.vds')?.severity).toBe('caution');
+    // +10 % mains: the reservoir sits at 15.18 V before key-down; 3.56 x 15.18 = 54.04 V exceeds a 50 V part
+    const high = evaluatePa(e, 13.8, proj, 'PA', { maxRailV: 15.18 });
+    near(high.peakDrainV, 3.56 * 15.18, toleranceV, 'high');
+    expect(high.findings.find((f) => f.rule === 'pa.vds')?.severity).toBe('fail');
+    // the output power stays at the operating point
+    near(high.outputW, nominal.outputW, 1e-9, 'output unchanged');
+  });
+  it('heating uses the hot rail voltage: 4:5 push-pull at 15.18 V gives 2 x 14.18^2 / 32 = 12.57 W, 5.39 W heat at 70 % (REFERENCE-VALUES §8.1, §8.3)', () => {
+    const pa = paParams({ saturationV: 1.0, amplifierClass: 'B', efficiency: 0.7, biasIdleMaxA: 0, turnsRatio: 1.25 });
+    const r = evaluatePa(pa, 13.8, proj, 'PA', { hotRailV: 15.18 });
+    const toleranceW = 0.01;
+    // P = 2 (Vdd - Vsat)^2 / R_dd (§8.1), dissipation = P (1/eta - 1)
+    const pHot = (2 * 14.18 ** 2) / 32;
+    near(r.thermal.dissipationTotalW, pHot * (1 / 0.7 - 1), toleranceW, 'hot dissipation');
+    near(r.outputW, 10.24, toleranceW, 'output at the operating point (§8.3)');
+    // absurd corner values fall back to the operating point instead of producing NaN
+    const bad = evaluatePa(pa, 13.8, proj, 'PA', { hotRailV: NaN, maxRailV: -3 });
+    near(bad.peakDrainV, 2 * 13.8, 1e-9, 'fallback peak');
+    near(bad.thermal.dissipationTotalW, 10.24 * (1 / 0.7 - 1), toleranceW, 'fallback heat');
+  });
+});
