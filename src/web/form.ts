@@ -53,11 +53,15 @@ export function pct(o: NumOpts) {
   return num('%', o).transform((v) => v / 100);
 }
 
-/** Single-line text (names): line breaks and control characters become spaces. Multi-line fields (notes) keep them. */
+/**
+ * Single-line text (names): line breaks and control characters become spaces, ends trimmed. Multi-line fields
+ * (notes, max > 1000) keep line breaks and the indentation of their first line: only blank lines before the
+ * text and white space after it go.
+ */
 export const text = (label: string, max = 200, required = true) =>
   z
     .string({ message: `${label}: missing` })
-    .transform((s) => (max > 1000 ? s.trim() : s.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim()))
+    .transform((s) => (max > 1000 ? s.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd() : s.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim()))
     .pipe(required ? z.string().min(1, `${label} must not be empty`).max(max, `${label} is longer than ${max} characters`) : z.string().max(max, `${label} is longer than ${max} characters`));
 
 export const choice = <const T extends readonly [string, ...string[]]>(label: string, options: T) =>

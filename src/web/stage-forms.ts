@@ -2,10 +2,10 @@
 import { z } from 'zod';
 import type { Stage, PaParams, LpfParams, RelayParams } from '../core/model';
 import { MODES, STAGE_KINDS } from '../core/model';
-import { formatInput } from '../core/units';
+import { inputText, percentText } from './input-text';
 import { num, optNum, pct, text, choice, checkbox } from './form';
 
-const pctText = (f: number) => String(+(f * 100).toFixed(4));
+const pctText = percentText;
 
 export const stageSchema = z.object({
   name: text('Stage name'),
@@ -15,10 +15,10 @@ export const stageSchema = z.object({
 });
 
 export function stageValues(s: Stage): Record<string, string> {
-  const v: Record<string, string> = { name: s.name, kind: s.kind, notes: s.notes, dissipation: formatInput(s.dissipationW, 'W') };
+  const v: Record<string, string> = { name: s.name, kind: s.kind, notes: s.notes, dissipation: inputText(s.dissipationW, 'W') };
   s.loads.forEach((l, i) => {
     v[`rail${i}`] = l.railId;
-    for (const m of MODES) v[`l${i}_${m}`] = formatInput(l.currentA[m], 'A');
+    for (const m of MODES) v[`l${i}_${m}`] = inputText(l.currentA[m], 'A');
   });
   return v;
 }
@@ -64,15 +64,15 @@ export function paValues(p: PaParams): Record<string, string> {
     amplifierClass: p.amplifierClass,
     railId: p.railId,
     devices: String(p.devices),
-    saturation: formatInput(p.saturationV, 'V'),
-    rdsOn: formatInput(p.rdsOnOhm, 'Ω'),
+    saturation: inputText(p.saturationV, 'V'),
+    rdsOn: inputText(p.rdsOnOhm, 'Ω'),
     turnsRatio: p.turnsRatio === null ? '' : String(p.turnsRatio),
-    load: formatInput(p.loadOhm, 'Ω'),
+    load: inputText(p.loadOhm, 'Ω'),
     efficiency: p.efficiency === null ? '' : pctText(p.efficiency),
-    vdsMax: formatInput(p.deviceVdsMaxV, 'V'),
-    idMax: formatInput(p.deviceIdMaxA, 'A'),
-    biasIdle: formatInput(p.biasIdleMaxA, 'A'),
-    referencePower: formatInput(p.referencePowerW, 'W'),
+    vdsMax: inputText(p.deviceVdsMaxV, 'V'),
+    idMax: inputText(p.deviceIdMaxA, 'A'),
+    biasIdle: inputText(p.biasIdleMaxA, 'A'),
+    referencePower: inputText(p.referencePowerW, 'W'),
     thetaJc: String(p.mount.thetaJcKPerW),
     thetaCs: String(p.mount.thetaCsKPerW),
     thetaSa: p.mount.thetaSaKPerW === null ? '' : String(p.mount.thetaSaKPerW),
@@ -134,10 +134,10 @@ export function lpfValues(p: LpfParams): Record<string, string> {
     ripple: String(p.rippleDb),
     order: String(p.order),
     layout: p.form,
-    cutoff: formatInput(p.cutoffHz, 'Hz'),
+    cutoff: inputText(p.cutoffHz, 'Hz'),
     capacitorSeries: p.capacitorSeries,
     allowParallelPairs: p.allowParallelPairs ? 'true' : '',
-    coreAl: formatInput(p.coreAlHPerTurn2, 'H/t²').replace(' H/t²', ''),
+    coreAl: inputText(p.coreAlHPerTurn2, 'H/t²').replace(' H/t²', ''),
     coreName: p.coreName,
     inductorQ: String(p.inductorQ),
     capacitorQ: String(p.capacitorQ),
@@ -191,23 +191,23 @@ export const relaySchema = z.object({
 
 export function relayValues(r: RelayParams): Record<string, string> {
   return {
-    contactCarry: formatInput(r.contactCarryA, 'A'),
-    contactSwitch: formatInput(r.contactSwitchA, 'A'),
-    contactV: formatInput(r.contactRatedV, 'V'),
-    rfV: formatInput(r.rfRatedVpeak, 'V'),
-    coil: formatInput(r.coilA, 'A'),
+    contactCarry: inputText(r.contactCarryA, 'A'),
+    contactSwitch: inputText(r.contactSwitchA, 'A'),
+    contactV: inputText(r.contactRatedV, 'V'),
+    rfV: inputText(r.rfRatedVpeak, 'V'),
+    coil: inputText(r.coilA, 'A'),
     coilRailId: r.coilRailId ?? '',
     coilReceive: r.coilModes.includes('receive') ? 'true' : '',
     coilKeyUp: r.coilModes.includes('keyUp') ? 'true' : '',
     coilKeyDown: r.coilModes.includes('keyDown') ? 'true' : '',
     isolation: String(r.isolationDb),
-    operate: formatInput(r.operateS, 's'),
-    release: formatInput(r.releaseS, 's'),
-    bounce: formatInput(r.bounceS, 's'),
-    dcSwitched: formatInput(r.dcSwitchedA, 'A'),
+    operate: inputText(r.operateS, 's'),
+    release: inputText(r.releaseS, 's'),
+    bounce: inputText(r.bounceS, 's'),
+    dcSwitched: inputText(r.dcSwitchedA, 'A'),
     position: r.position,
-    rxMax: formatInput(r.receiverMaxInputW, 'W'),
-    txDelay: formatInput(r.txDelayS, 's'),
+    rxMax: inputText(r.receiverMaxInputW, 'W'),
+    txDelay: inputText(r.txDelayS, 's'),
     wpm: String(r.wpm),
   };
 }

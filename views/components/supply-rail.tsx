@@ -1,7 +1,8 @@
 // One rail on the supply page: a collapsible card whose form fits the rail's kind.
 import type { FC } from 'hono/jsx';
 import type { BatteryRail, Project, Rail, RectifiedRail, RegulatedRail } from '../../src/core/model';
-import { formatInput, formatValue } from '../../src/core/units';
+import { formatValue } from '../../src/core/units';
+import { inputText } from '../../src/web/input-text';
 import { FormErrors, type FieldState, Field, Select } from './fields';
 import { stateFor, type Failed } from './failed';
 import { Version, hx, pctText } from './supply-transformer';
@@ -14,10 +15,10 @@ const METHODS: [string, string][] = [['fixed', 'Fixed output'], ['adjustable', '
 export function rectifiedValues(r: RectifiedRail): Record<string, string> {
   return {
     name: r.name, windingId: r.windingId, topology: r.topology,
-    diodeDrop: formatInput(r.diodeDropV, 'V'), diodeR: formatInput(r.diodeResistanceOhm, 'Ω'),
-    reservoir: formatInput(r.reservoirF, 'F'), esr: formatInput(r.esrOhm, 'Ω'), bleeder: formatInput(r.bleederOhm, 'Ω'),
-    capV: formatInput(r.capacitorRatedV, 'V'), capRipple: formatInput(r.capacitorRippleA, 'A'),
-    rippleTarget: formatInput(r.ripplePpTargetV, 'V'), margin: formatInput(r.marginV, 'V'), fuse: formatInput(r.fuseA, 'A'),
+    diodeDrop: inputText(r.diodeDropV, 'V'), diodeR: inputText(r.diodeResistanceOhm, 'Ω'),
+    reservoir: inputText(r.reservoirF, 'F'), esr: inputText(r.esrOhm, 'Ω'), bleeder: inputText(r.bleederOhm, 'Ω'),
+    capV: inputText(r.capacitorRatedV, 'V'), capRipple: inputText(r.capacitorRippleA, 'A'),
+    rippleTarget: inputText(r.ripplePpTargetV, 'V'), margin: inputText(r.marginV, 'V'), fuse: inputText(r.fuseA, 'A'),
   };
 }
 
@@ -25,24 +26,24 @@ export function regulatedValues(r: RegulatedRail): Record<string, string> {
   const s = r.setting;
   const v: Record<string, string> = {
     name: r.name, parentId: r.parentId, regulator: r.regulator, method: s.method,
-    nominalV: 'nominalV' in s ? formatInput(s.nominalV, 'V') : '',
-    vref: s.method === 'adjustable' ? formatInput(s.vrefV, 'V') : '',
-    iadj: s.method === 'adjustable' ? formatInput(s.adjustA, 'A') : '',
-    r1: 'r1Ohm' in s ? formatInput(s.r1Ohm, 'Ω') : '', r2: 'r2Ohm' in s ? formatInput(s.r2Ohm, 'Ω') : '',
-    diodes: s.method === 'raised-diodes' ? String(s.diodes) : '', raiseDrop: s.method === 'raised-diodes' ? formatInput(s.diodeDropV, 'V') : '',
-    dropout: formatInput(r.dropoutV, 'V'), quiescent: formatInput(r.quiescentA, 'A'),
+    nominalV: 'nominalV' in s ? inputText(s.nominalV, 'V') : '',
+    vref: s.method === 'adjustable' ? inputText(s.vrefV, 'V') : '',
+    iadj: s.method === 'adjustable' ? inputText(s.adjustA, 'A') : '',
+    r1: 'r1Ohm' in s ? inputText(s.r1Ohm, 'Ω') : '', r2: 'r2Ohm' in s ? inputText(s.r2Ohm, 'Ω') : '',
+    diodes: s.method === 'raised-diodes' ? String(s.diodes) : '', raiseDrop: s.method === 'raised-diodes' ? inputText(s.diodeDropV, 'V') : '',
+    dropout: inputText(r.dropoutV, 'V'), quiescent: inputText(r.quiescentA, 'A'),
     efficiency: r.efficiency === null ? '' : pctText(r.efficiency),
-    maxOut: formatInput(r.maxOutputA, 'A'), maxIn: formatInput(r.maxInputV, 'V'),
-    thetaJc: formatInput(r.mount?.thetaJcKPerW, 'K/W'), thetaCs: formatInput(r.mount?.thetaCsKPerW, 'K/W'),
-    thetaSa: formatInput(r.mount?.thetaSaKPerW, 'K/W'), tjMax: formatInput(r.mount?.tjMaxC, '°C'),
+    maxOut: inputText(r.maxOutputA, 'A'), maxIn: inputText(r.maxInputV, 'V'),
+    thetaJc: inputText(r.mount?.thetaJcKPerW, 'K/W'), thetaCs: inputText(r.mount?.thetaCsKPerW, 'K/W'),
+    thetaSa: inputText(r.mount?.thetaSaKPerW, 'K/W'), tjMax: inputText(r.mount?.tjMaxC, '°C'),
   };
   return v;
 }
 
 export function batteryValues(r: BatteryRail): Record<string, string> {
   return {
-    name: r.name, chemistry: r.chemistry, nominalV: formatInput(r.nominalV, 'V'), fullV: formatInput(r.fullV, 'V'),
-    endV: formatInput(r.endV, 'V'), capacity: formatInput(r.capacityAh, 'Ah'), usable: pctText(r.usableFraction), internal: formatInput(r.internalOhm, 'Ω'),
+    name: r.name, chemistry: r.chemistry, nominalV: inputText(r.nominalV, 'V'), fullV: inputText(r.fullV, 'V'),
+    endV: inputText(r.endV, 'V'), capacity: inputText(r.capacityAh, 'Ah'), usable: pctText(r.usableFraction), internal: inputText(r.internalOhm, 'Ω'),
   };
 }
 

@@ -1,7 +1,8 @@
 // One transformer on the supply page: its own form (name, construction) and one form per winding.
 import type { FC } from 'hono/jsx';
 import type { Project, Transformer, Winding } from '../../src/core/model';
-import { formatInput, formatValue } from '../../src/core/units';
+import { formatValue } from '../../src/core/units';
+import { inputText, percentText } from '../../src/web/input-text';
 import { FormErrors, type FieldState, Field, Select } from './fields';
 import { stateFor, type Failed } from './failed';
 
@@ -10,16 +11,16 @@ export const Version: FC<{ version: number }> = ({ version }) => <input type="hi
 /** Attributes that make a form post through htmx and swap the supply body in place. */
 export const hx = (action: string, target = '#supply') => ({ method: 'post' as const, action, 'hx-post': action, 'hx-target': target, 'hx-swap': 'outerHTML' });
 
-export const pctText = (fraction: number) => String(+(fraction * 100).toFixed(4));
+export const pctText = percentText;
 
 export function windingValues(w: Winding | null): Record<string, string> {
   if (!w) return { name: '', ratedV: '', ratedA: '', regulation: '8', resistance: '' };
   return {
     name: w.name,
-    ratedV: formatInput(w.ratedVrms, 'V'),
-    ratedA: formatInput(w.ratedA, 'A'),
+    ratedV: inputText(w.ratedVrms, 'V'),
+    ratedA: inputText(w.ratedA, 'A'),
     regulation: pctText(w.regulationFraction),
-    resistance: formatInput(w.resistanceOhm, 'Ω'),
+    resistance: inputText(w.resistanceOhm, 'Ω'),
   };
 }
 

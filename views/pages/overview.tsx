@@ -4,7 +4,8 @@ import type { Project, Stage } from '../../src/core/model';
 import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
 import type { EvaluationReport } from '../../src/core/evaluate';
 import type { Finding } from '../../src/core/findings';
-import { formatInput, formatValue } from '../../src/core/units';
+import { formatValue } from '../../src/core/units';
+import { inputText, percentText } from '../../src/web/input-text';
 import { Field, Select, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';
@@ -13,24 +14,24 @@ export function settingsValues(p: Project): Record<string, string> {
   return {
     name: p.name,
     notes: p.notes,
-    frequency: formatInput(p.frequencyHz, 'Hz'),
-    power: formatInput(p.targetPowerW, 'W'),
+    frequency: inputText(p.frequencyHz, 'Hz'),
+    power: inputText(p.targetPowerW, 'W'),
     supplyKind: p.mains ? 'mains' : 'dc',
-    mainsV: p.mains ? formatInput(p.mains.nominalV, 'V') : '230 V',
-    mainsHz: p.mains ? formatInput(p.mains.frequencyHz, 'Hz') : '50 Hz',
-    mainsLow: p.mains ? String(+(p.mains.lowFraction * 100).toFixed(3)) : '10',
-    mainsHigh: p.mains ? String(+(p.mains.highFraction * 100).toFixed(3)) : '10',
+    mainsV: p.mains ? inputText(p.mains.nominalV, 'V') : '230 V',
+    mainsHz: p.mains ? inputText(p.mains.frequencyHz, 'Hz') : '50 Hz',
+    mainsLow: p.mains ? percentText(p.mains.lowFraction) : '10',
+    mainsHigh: p.mains ? percentText(p.mains.highFraction) : '10',
     ambient: String(p.ambientC),
     currency: p.currency,
     kits: String(p.kits),
-    duty: String(+(p.keyingDuty * 100).toFixed(3)),
+    duty: percentText(p.keyingDuty),
   };
 }
 
 export function loadValues(s: Stage): Record<string, string> {
   const v: Record<string, string> = {};
   s.loads.forEach((l, i) => {
-    for (const m of MODES) v[`l${i}_${m}`] = formatInput(l.currentA[m], 'A');
+    for (const m of MODES) v[`l${i}_${m}`] = inputText(l.currentA[m], 'A');
   });
   return v;
 }

@@ -5,6 +5,7 @@ import type { EvaluationReport } from '../../src/core/evaluate';
 import { Field, Select, Check, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { RfResults } from '../partials/rf-results';
+import { percentText } from '../../src/web/input-text';
 
 export function rfSettingsValues(p: Project): Record<string, string> {
   const r = p.rf;
@@ -15,8 +16,8 @@ export function rfSettingsValues(p: Project): Record<string, string> {
     antennaGain: String(r.antennaGainDbi),
     feedlineLoss: String(r.feedlineLossDb),
     groundReflection: r.groundReflection ? 'true' : '',
-    dutyFactor: String(+(r.exposureDutyFactor * 100).toFixed(3)),
-    onFraction: String(+(r.exposureOnFraction * 100).toFixed(3)),
+    dutyFactor: percentText(r.exposureDutyFactor),
+    onFraction: percentText(r.exposureOnFraction),
   };
 }
 

@@ -3,7 +3,7 @@
 import type { Child, FC } from 'hono/jsx';
 import { PageMessages } from '../components/messages';
 import type { Project } from '../../src/core/model';
-import { formatInput } from '../../src/core/units';
+import { inputText } from '../../src/web/input-text';
 import { FormErrors, type FieldState, Field, Select } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { TransformerCard, Version, hx } from '../components/supply-transformer';
@@ -54,7 +54,7 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
   const base = `/projects/${project.id}/supply`;
   const addTrafo = stateFor('add-transformer', failed, () => ({ name: '', construction: 'laminated' }));
   const addRail = stateFor('add-rail', failed, () => ({ name: '', source: sourceOptions(project)[0]?.[0] ?? 'battery' }));
-  const fuse = stateFor('primary-fuse', failed, () => ({ primaryFuse: formatInput(project.supply.primaryFuseA, 'A') }));
+  const fuse = stateFor('primary-fuse', failed, () => ({ primaryFuse: inputText(project.supply.primaryFuseA, 'A') }));
   return (
     <div id="supply">
       <PageMessages notice={notice} failed={failed} />
