@@ -97,6 +97,8 @@ export interface WindingRecommendation {
   ratedA: number;
   /** VA this winding needs at the thermal load: standard (or fitted) volts x ratedA (VA). */
   va: number;
+  /** The volts used for va and the tune-up VA: the standard voltage, or the fitted one when there is none (V RMS). */
+  vaRatedV?: number;
   /** Trough at low mains, key-down with the recommended winding (V), null when not simulated. */
   checkTroughV: number | null;
   /** This winding's share of the primary current, worst continuous key-down, referred by the turns ratio V_NL/V_mains (A). */

@@ -86,13 +86,14 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
     simulations++;
   }
   const fittedV = Number.isFinite(inp.winding.ratedVrms) ? Math.max(0, inp.winding.ratedVrms) : 0;
-  const va = (standardRatedV ?? fittedV) * ratedA * halves;
+  const vaRatedV = standardRatedV ?? fittedV;
+  const va = vaRatedV * ratedA * halves;
   const maxKeyDownRms = Math.max(0, ...inp.corners.filter((c) => c.load === 'keyDown').map((c) => c.secondaryRmsA));
   // Ampere-turn balance: primary current = secondary current x turns ratio (V_NL / V_mains); magnetising current neglected
   const primaryReferredA = inp.mainsNominalV > 0 ? (noLoadVrms(inp.winding) / inp.mainsNominalV) * maxKeyDownRms * Math.sqrt(halves) : 0;
   const half = halves === 2 ? ' per half (centre-tapped)' : '';
   const result: WindingRecommendation = {
-    windingId: inp.winding.id, windingName: inp.winding.name, minimumRatedV, standardRatedV, thermalRmsA, tuneUpRmsA, peakA, ratedA, va, checkTroughV,
+    windingId: inp.winding.id, windingName: inp.winding.name, minimumRatedV, standardRatedV, thermalRmsA, tuneUpRmsA, peakA, ratedA, va, vaRatedV, checkTroughV,
     primaryReferredA, halves,
     reasoning: `${reasoningV} Current rating: heating-equivalent RMS at high mains with CW duty ${d} is ${thermalRmsA.toFixed(2)} A${half} (continuous carrier ${tuneUpRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`,
   };
@@ -117,7 +118,8 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
 
 export function transformerReport(t: Transformer, windings: WindingRecommendation[], vaList: readonly number[] = DEFAULT_TRANSFORMER_VA): { report: TransformerReport; findings: Finding[] } {
   const thermalVA = windings.reduce((s, w) => s + w.va, 0);
-  const tuneUpVA = windings.reduce((s, w) => s + (w.standardRatedV ?? 0) * w.tuneUpRmsA * w.halves, 0);
+  // Same volts as the thermal VA (standard, else fitted): a winding with no standard voltage still counts
+  const tuneUpVA = windings.reduce((s, w) => s + (w.vaRatedV ?? w.standardRatedV ?? 0) * w.tuneUpRmsA * w.halves, 0);
   const standardVA = thermalVA > 0 ? nextAtLeast(vaList, thermalVA) : null;
   const primaryA = windings.reduce((s, w) => s + w.primaryReferredA, 0);
   const findings: Finding[] = [];

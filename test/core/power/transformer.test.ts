@@ -76,3 +76,16 @@ describe('evaluateSupply on the §4.2 example (3 A in every mode)', () => {
     expect(sev['reservoir.ripple-current']).toBe('ok');
   });
 });
+
+describe('tune-up VA of a winding with no standard voltage (apparent power S = V x I, definition)', () => {
+  it('counts the fitted volts, so the continuous-carrier caution can still fire', async () => {
+    const { transformerReport } = await import('../../../src/core/power/transformer');
+    const w = { windingId: 'w', windingName: 'W', minimumRatedV: null, standardRatedV: null, thermalRmsA: 1, tuneUpRmsA: 3, peakA: 6, ratedA: 1, va: 30, vaRatedV: 30, checkTroughV: null, primaryReferredA: 0.4, halves: 1, reasoning: '' };
+    const t = { id: 't', name: 'T', construction: 'laminated' as const, windings: [] };
+    const r = transformerReport(t as never, [w]);
+    const toleranceVA = 1e-9;
+    // 30 V x 3 A = 90 VA with a continuous carrier, against 30 VA at the thermal load
+    near(r.report.tuneUpVA, 90, toleranceVA, 'tune-up VA');
+    expect(r.findings.some((f) => f.rule === 'transformer.tune-up')).toBe(true);
+  });
+});
