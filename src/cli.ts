@@ -5,6 +5,7 @@
 //   rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf
 //   rigwright csv FILE.json|--id ID [--out PARTS.csv]
 import { readFileSync, writeFileSync } from 'node:fs';
+import { parseArgs } from 'node:util';
 import { parseProjectFile, toProjectFile } from './io/project-file';
 import { evaluate } from './core/evaluate';
 import { renderEvaluationText, evaluationJson } from './io/evaluation-output';
@@ -18,12 +19,46 @@ const USAGE = `Usage:
   rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf   the builder pack as PDF
   rigwright csv FILE.json|--id ID [--out PARTS.csv]                    the costed parts list as CSV`;
 
-/** A project from a file argument, or from the database with --id. */
-async function projectFrom(rest: string[]): Promise<import('./core/model').Project> {
-  const id = flag(rest, '--id');
-  if (!id) {
-    const file = rest.find((a, i) => !a.startsWith('--') && !(i > 0 && rest[i - 1].startsWith('--')));
-    return readProjectFile(file);
+interface Args {
+  positionals: string[];
+  values: { id?: string; out?: string; paper?: string; json?: boolean };
+}
+
+/** Which options each command takes; anything else is refused with a message (never silently ignored). */
+const OPTIONS: Record<string, { options: ('id' | 'out' | 'paper' | 'json')[]; files: [number, number] }> = {
+  evaluate: { options: ['json'], files: [1, 1] },
+  list: { options: [], files: [0, 0] },
+  export: { options: ['id', 'out'], files: [0, 0] },
+  import: { options: [], files: [1, 1] },
+  pdf: { options: ['id', 'paper', 'out'], files: [0, 1] },
+  csv: { options: ['id', 'out'], files: [0, 1] },
+};
+
+function readArgs(command: string, rest: string[]): Args {
+  const spec = OPTIONS[command];
+  const all = { id: { type: 'string' }, out: { type: 'string' }, paper: { type: 'string' }, json: { type: 'boolean' } } as const;
+  const options = Object.fromEntries(spec.options.map((o) => [o, all[o]]));
+  let parsed: Args;
+  try {
+    parsed = parseArgs({ args: rest, options, strict: true, allowPositionals: true }) as Args;
+  } catch (e) {
+    fail(`${command}: ${(e as Error).message}\n${USAGE}`);
+  }
+  const [min, max] = spec.files;
+  const n = parsed!.positionals.length;
+  if (n > max) fail(`${command}: unexpected argument ${JSON.stringify(parsed!.positionals[max])}\n${USAGE}`);
+  if (n < min) fail(`${command}: give the project file to read.\n${USAGE}`);
+  for (const [k, v] of Object.entries(parsed!.values)) if (v === '') fail(`${command}: --${k} needs a value`);
+  return parsed!;
+}
+
+/** A project from a file argument, or from the database with --id (not both). */
+async function projectFrom(command: string, a: Args): Promise<import('./core/model').Project> {
+  const id = a.values.id;
+  if (id !== undefined && a.positionals.length) fail(`${command}: give either a project file or --id, not both.`);
+  if (id === undefined) {
+    if (!a.positionals.length) fail(`${command}: give the project file to read, or --id ID for a project in the database.`);
+    return readProjectFile(a.positionals[0]);
   }
   return withDb(async (d) => {
     const { loadProject } = await import('./db/projects');
@@ -33,9 +68,13 @@ async function projectFrom(rest: string[]): Promise<import('./core/model').Proje
   });
 }
 
-function flag(args: string[], name: string): string | undefined {
-  const i = args.indexOf(name);
-  return i >= 0 ? args[i + 1] : undefined;
+/** Write an output file; a failure (missing folder, no permission) is a message and exit code 2, not a stack trace. */
+function writeOut(path: string, data: string | Uint8Array) {
+  try {
+    writeFileSync(path, data);
+  } catch (e) {
+    fail(`Cannot write ${path}: ${(e as Error).message}. Nothing was written.`);
+  }
 }
 
 function readProjectFile(path: string | undefined) {
@@ -69,11 +108,16 @@ async function withDb<T>(fn: (db: import('./db/client').Database) => Promise<T>)
 
 async function main(args: string[]) {
   const [command, ...rest] = args;
+  if (!command || !Object.hasOwn(OPTIONS, command)) {
+    process.stderr.write(`${command ? `Unknown command ${JSON.stringify(command)}.\n` : ''}${USAGE}\n`);
+    process.exit(command ? 2 : 0);
+  }
+  const a = readArgs(command, rest);
   switch (command) {
     case 'evaluate': {
-      const project = readProjectFile(rest.find((a) => !a.startsWith('--')));
+      const project = readProjectFile(a.positionals[0]);
       const report = evaluate(project);
-      process.stdout.write(rest.includes('--json') ? `${JSON.stringify(evaluationJson(project, report), null, 2)}\n` : renderEvaluationText(project, report));
+      process.stdout.write(a.values.json ? `${JSON.stringify(evaluationJson(project, report), null, 2)}\n` : renderEvaluationText(project, report));
       return;
     }
     case 'list':
@@ -85,7 +129,7 @@ async function main(args: string[]) {
     case 'export':
       await withDb(async (d) => {
         const { listProjects, loadProject } = await import('./db/projects');
-        const id = flag(rest, '--id');
+        const id = a.values.id;
         if (!id) {
           process.stdout.write('Give --id ID. Projects:\n');
           for (const p of await listProjects(d.db)) process.stdout.write(`  ${p.id}\t${p.name}\n`);
@@ -95,13 +139,12 @@ async function main(args: string[]) {
         const p = await loadProject(d.db, id);
         if (!p) fail(`No project with id ${id}.`);
         const text = toProjectFile(p!, new Date().toISOString());
-        const out = flag(rest, '--out');
-        if (out) writeFileSync(out, text);
+        if (a.values.out) writeOut(a.values.out, text);
         else process.stdout.write(`${text}\n`);
       });
       return;
     case 'import': {
-      const project = readProjectFile(rest.find((a) => !a.startsWith('--')));
+      const project = readProjectFile(a.positionals[0]);
       await withDb(async (d) => {
         const { insertProject } = await import('./db/projects');
         const { cloneProject } = await import('./core/new-project');
@@ -113,29 +156,25 @@ async function main(args: string[]) {
       return;
     }
     case 'pdf': {
-      const out = flag(rest, '--out');
+      const out = a.values.out;
       if (!out) fail('Give --out PACK.pdf');
-      const paper = flag(rest, '--paper') ?? 'a4';
+      const paper = a.values.paper ?? 'a4';
       if (paper !== 'a4' && paper !== 'letter') fail('--paper must be a4 or letter');
-      const project = await projectFrom(rest);
+      const project = await projectFrom(command, a);
       const { buildPack } = await import('./pdf');
       const bytes = await buildPack(project, evaluate(project), { paper: paper as 'a4' | 'letter', dataDate: new Date().toISOString().slice(0, 10) });
-      writeFileSync(out!, bytes);
+      writeOut(out!, bytes);
       process.stdout.write(`Wrote ${out} (${bytes.length} bytes)\n`);
       return;
     }
     case 'csv': {
-      const project = await projectFrom(rest);
+      const project = await projectFrom(command, a);
       const { costReportToCsv } = await import('./core/csv');
       const text = costReportToCsv(evaluate(project).cost);
-      const out = flag(rest, '--out');
-      if (out) writeFileSync(out, text);
+      if (a.values.out) writeOut(a.values.out, text);
       else process.stdout.write(text);
       return;
     }
-    default:
-      process.stderr.write(`${USAGE}\n`);
-      process.exit(command ? 2 : 0);
   }
 }
 

@@ -74,3 +74,30 @@ describe('command line', () => {
     expect(r.stderr).toContain('--paper must be a4 or letter');
   });
 });
+
+describe('command line: bad arguments are refused with a message', () => {
+  const file = join(dir, 'club-args.json');
+  beforeAll(() => writeFileSync(file, toProjectFile(DEMO_PROJECTS[0], '2026-12-01T00:00:00Z')));
+
+  it.each([
+    [['evaluate', 'FILE', '--jsn'], "Unknown option '--jsn'"],
+    [['evaluate', 'FILE', 'FILE'], 'unexpected argument'],
+    [['evaluate'], 'give the project file to read'],
+    [['pdf', 'FILE', '--paper', '--out', 'x.pdf'], "'--paper'"],
+    [['csv', 'FILE', '--id', 'demo'], 'either a project file or --id, not both'],
+    [['export', '--id'], "'--id <value>' argument missing"],
+    [['bogus'], 'Unknown command "bogus"'],
+  ])('%j', (args, message) => {
+    const r = cli(args.map((a) => (a === 'FILE' ? file : a)));
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain(message);
+    expect(r.stdout).toBe('');
+  });
+
+  it('an output path that cannot be written is a message, not a stack trace', () => {
+    const r = cli(['csv', file, '--out', join(dir, 'no-such-folder', 'parts.csv')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain(`Cannot write ${join(dir, 'no-such-folder', 'parts.csv')}`);
+    expect(r.stderr).not.toMatch(/\n\s+at /);
+  });
+});
