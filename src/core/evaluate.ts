@@ -108,7 +108,19 @@ export function evaluate(project: Project, options: EvaluateOptions = {}): Evalu
     budget = computeBudget(project, computedLoads(project, paRailV));
     supply = evaluateSupply(project, railOutputs(budget));
   }
-  const corners = paRailCorners(project, supply);
+  // Heating corner: at high mains a PA of fixed load draws more current (I ~ V); the supply's high-mains corners
+  // (transformer, winding, reservoir ripple current, fuse) use the budget with the PA at its high-mains key-down rail.
+  // Source: load line P = k V^2 / R (REFERENCE-VALUES §8.1), so I_dc = P / (eta V) grows in proportion to V.
+  let corners = paRailCorners(project, supply);
+  // The hot rail voltage and the PA current settle together, as for the nominal pass above.
+  for (let pass = 0; supply && Object.keys(corners.hotV).length > 0 && pass < MAX_PASSES; pass++) {
+    const budgetHigh = computeBudget(project, computedLoads(project, { ...paRailV, ...corners.hotV }));
+    supply = evaluateSupply(project, railOutputs(budget), { highMainsOutputA: railOutputs(budgetHigh) });
+    const next = paRailCorners(project, supply);
+    const settled = Object.keys(next.hotV).every((id) => Math.abs(next.hotV[id] - (corners.hotV[id] ?? 0)) < SETTLED_V);
+    corners = next;
+    if (settled) break;
+  }
   const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);

@@ -64,3 +64,23 @@ describe('evaluate(): the PA is judged at the supply corners that stress it', ()
     expect(Math.abs(pa.hotRailV - hot.dcMeanV)).toBeLessThan(toleranceV);
   });
 });
+
+describe('evaluate(): high-mains heating corners carry the PA current at the high-mains rail', () => {
+  it('PA rail high-mains key-down load = nominal budget + the extra PA current at the hotter rail (I_dc = k V / (eta R), REFERENCE-VALUES §8.1)', async () => {
+    const { paKeyDownCurrentA } = await import('../../src/core/rf/pa');
+    const p = club();
+    const r = evaluate(p);
+    const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
+    const rail = paRail(r);
+    const nominalKd = r.budget.rails.find((x) => x.railId === 'rail-pa')!.outputA.keyDown;
+    const high = rail.corners.find((c) => c.id === 'high-keyDown')!.loadA;
+    const low = rail.corners.find((c) => c.id === 'low-keyDown')!.loadA;
+    const paStage = p.stages.find((s) => s.id === 'st-pa')!.pa!;
+    const extra = paKeyDownCurrentA(paStage, pa.hotRailV, p) - paKeyDownCurrentA(paStage, r.paRailV['rail-pa'], p);
+    const toleranceA = 0.002; // the passes settle the hot rail within 5 mV
+    expect(extra).toBeGreaterThan(0.1);
+    expect(Math.abs(high - (nominalKd + extra))).toBeLessThan(toleranceA);
+    // the headroom corner keeps the nominal budget (more conservative than the lower low-mains PA current)
+    expect(Math.abs(low - nominalKd)).toBeLessThan(1e-12);
+  });
+});

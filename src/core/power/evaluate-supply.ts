@@ -27,6 +27,8 @@ export interface SupplyOptions {
   railMinimumV?: Record<string, number>;
   /** Integration steps per mains cycle (default 1000). */
   stepsPerCycle?: number;
+  /** Output current per rectified rail id and mode at high mains (PA current rises with its rail), A. */
+  highMainsOutputA?: Record<string, PerMode>;
 }
 
 const ZERO: PerMode = { receive: 0, keyUp: 0, keyDown: 0 };
@@ -73,6 +75,15 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     return { receive: clean(b.receive), keyUp: clean(b.keyUp), keyDown: clean(b.keyDown) };
   };
 
+  const highBudget = (id: string): PerMode | undefined => {
+    const b = options.highMainsOutputA?.[id];
+    if (!b) return undefined;
+    const base = budget(id);
+    const clean = (x: number, floor: number) => (Number.isFinite(x) && x > floor ? x : floor);
+    // never below the nominal budget: the high-mains corner is the heating one
+    return { receive: clean(b.receive, base.receive), keyUp: clean(b.keyUp, base.keyUp), keyDown: clean(b.keyDown, base.keyDown) };
+  };
+
   const reports = new Map<string, RailReport>();
   const voltageAt = new Map<string, Record<string, RailVoltage>>();
   const maxV = new Map<string, number>();
@@ -89,6 +100,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), {
       mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
       standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
+      highMainsOutputA: highBudget(rail.id),
     });
     if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'Project data', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
     simulations += ev.simulations;

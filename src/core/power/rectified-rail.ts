@@ -24,6 +24,8 @@ export interface RectifiedContext {
   standardSecondaryV?: readonly number[];
   capacitorRatingsV?: readonly number[];
   stepsPerCycle?: number;
+  /** Output current per mode at high mains (a PA draws more from a higher rail), A; default: the nominal outputA. */
+  highMainsOutputA?: PerMode;
 }
 
 export interface RectifiedEvaluation {
@@ -63,7 +65,8 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   let allConverged = true;
   const sims = new Map<string, RectifierSimResult>();
   const corners: RectifiedCorner[] = ctx.specs.map((spec) => {
-    const loadA = cornerCurrent(outputA, spec.load, ctx.keyingDuty);
+    // A fixed-load PA draws current in proportion to its rail, so high-mains corners (heating) use their own budget
+    const loadA = cornerCurrent(spec.mains === 'high' && ctx.highMainsOutputA ? ctx.highMainsOutputA : outputA, spec.load, ctx.keyingDuty);
     if (!winding) return zeroCorner(spec, loadA, 'No winding selected for this rail.');
     const input = simInputFor(rail, winding, ctx.mains.frequencyHz, spec.mainsFactor, loadA, ctx.stepsPerCycle);
     const r = simulateRectifier({ ...input, waveformPoints: spec.id === ids.voltage ? 200 : 0 });
@@ -125,7 +128,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   }
 
   // Rail fuse
-  const fuse = railFuse(outputA.keyDown, 'on the DC side after the reservoir');
+  const fuse = railFuse(Math.max(outputA.keyDown, ctx.highMainsOutputA?.keyDown ?? 0), 'on the DC side after the reservoir');
   findings.push(...fittedFuseFindings(`${rail.name} fuse`, rail.fuseA, fuse));
   recommendations.push({ topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} rail fuse` : 'Rail fuse: see reasoning', reasoning: fuse.reasoning, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' });
   if (winding) {
