@@ -55,23 +55,29 @@ function paRailVoltages(project: Project, budget: BudgetReport, supply: SupplyRe
  * while the PA is unkeyed, and the first key-down cycles see it) and its high-mains key-down mean; a battery's
  * full-charge voltage for both. Common practice, no published source (worst-case corners of the supply).
  */
-function paRailCorners(project: Project, supply: SupplyReport | null): { maxV: Record<string, number>; hotV: Record<string, number> } {
+function paRailCorners(project: Project, supply: SupplyReport | null): { maxV: Record<string, number>; hotV: Record<string, number>; lowV: Record<string, number>; battery: Record<string, boolean> } {
   const maxV: Record<string, number> = {};
   const hotV: Record<string, number> = {};
+  const lowV: Record<string, number> = {};
+  const battery: Record<string, boolean> = {};
   for (const s of project.stages) {
     if (!s.pa) continue;
     const id = s.pa.railId;
     const r = supply?.rails.find((x) => x.railId === id);
     if (r?.kind === 'rectified') {
       const hot = r.corners.find((c) => c.id === 'high-keyDown');
+      const low = r.corners.find((c) => c.id === 'low-keyDown');
+      if (low && Number.isFinite(low.troughV) && low.troughV > 0) lowV[id] = low.troughV;
       if (Number.isFinite(r.reservoir.noLoadPeakHighV) && r.reservoir.noLoadPeakHighV > 0) maxV[id] = r.reservoir.noLoadPeakHighV;
       if (hot && Number.isFinite(hot.dcMeanV) && hot.dcMeanV > 0) hotV[id] = hot.dcMeanV;
     } else if (r?.kind === 'battery' && Number.isFinite(r.fullV) && r.fullV > 0) {
+      battery[id] = true;
       maxV[id] = r.fullV;
       hotV[id] = r.fullV;
+      if (Number.isFinite(r.loadedEndV) && r.loadedEndV > 0) lowV[id] = r.loadedEndV;
     }
   }
-  return { maxV, hotV };
+  return { maxV, hotV, lowV, battery };
 }
 
 function computedLoads(project: Project, paRailV: Record<string, number>): ComputedLoad[] {
@@ -121,7 +127,7 @@ export function evaluate(project: Project, options: EvaluateOptions = {}): Evalu
     corners = next;
     if (settled) break;
   }
-  const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, onMonteCarloProgress: options.onMonteCarloProgress });
+  const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);
   const findings = sortFindings([...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);

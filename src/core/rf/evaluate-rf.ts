@@ -18,6 +18,10 @@ export interface RfContext {
   paRailMaxV?: Record<string, number>;
   /** Voltage per PA rail id at high mains key-down (mean), V: judges heating. */
   paRailHotV?: Record<string, number>;
+  /** Lowest key-down voltage per PA rail id (low-mains trough, loaded battery end voltage), V. */
+  paRailLowV?: Record<string, number>;
+  /** PA rail ids fed from a battery (wording of the PA corner findings). */
+  paRailBattery?: Record<string, boolean>;
   /** Optional progress of the filter Monte Carlo runs: (done, total) trials. */
   onMonteCarloProgress?: (done: number, total: number) => void;
 }
@@ -79,7 +83,8 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   for (const st of project.stages) {
     if (st.kind === 'final' && st.pa) {
       const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
-        maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId],
+        maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
+        source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains',
       });
       if (st === paStage && pa.outputW > 0) paPowerW = pa.outputW;
       stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });

@@ -53,6 +53,9 @@ export interface PaResult {
   maxRailV: number;
   /** Supply voltage used for heating (high mains, key-down), V; railV when unknown. */
   hotRailV: number;
+  /** Lowest key-down supply voltage (low mains trough, flat battery), V, and the output there, W; railV / outputW when unknown. */
+  lowRailV: number;
+  lowOutputW: number;
   /** Peak drain voltage at the highest supply voltage (maxRailV), V, and peak current of one conducting device, A. */
   peakDrainV: number;
   peakDeviceA: number;
@@ -66,7 +69,7 @@ const SRC_LOADLINE = 'Textbook load line / Sokal & Sokal IEEE JSSC 1975 (REFEREN
 
 function zeroResult(railV: number, findings: Finding[]): PaResult {
   return {
-    railV, maxRailV: railV, hotRailV: railV, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
+    railV, maxRailV: railV, hotRailV: railV, lowRailV: railV, lowOutputW: 0, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
     outputW: 0, outputDbm: -999, outputDbw: -999, vsReferenceDb: -999, vsReferenceSUnits: -999 / 6, efficiency: 0, efficiencySource: 'entered',
     dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
     thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
@@ -82,6 +85,10 @@ export interface PaSupplyCorners {
   maxRailV?: number;
   /** Rail voltage at high mains, key-down (mean), V: sets the heating. */
   hotRailV?: number;
+  /** Lowest rail voltage under key-down (low-mains trough, battery at end of discharge under load), V. */
+  lowRailV?: number;
+  /** What the rail comes from, for the wording of the findings; default 'mains'. */
+  source?: 'mains' | 'battery';
 }
 
 export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier', corners: PaSupplyCorners = {}): PaResult {
@@ -129,7 +136,10 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const peakDrainV = peakDrainFactor(pa.amplifierClass) * maxRailV;
   const opHot = hotRailV === railV ? op : operatingPoint(pa, hotRailV, primaryOhm);
   const thermalRaw = paThermal(pa, opHot.outputW, opHot.outputW / efficiency, pa.biasIdleMaxA * hotRailV, project.ambientC, project.keyingDuty);
-  const hotNote = hotRailV > railV ? ` (with the supply at ${hotRailV.toFixed(1)} V: high mains or full battery, key-down)` : '';
+  const lowRailV = corners.lowRailV !== undefined && Number.isFinite(corners.lowRailV) && corners.lowRailV > 0 && corners.lowRailV < railV ? corners.lowRailV : railV;
+  const lowOutputW = lowRailV === railV ? op.outputW : operatingPoint(pa, lowRailV, primaryOhm).outputW;
+  const bat = corners.source === 'battery';
+  const hotNote = hotRailV > railV ? ` (with the supply at ${hotRailV.toFixed(1)} V: ${bat ? 'battery full' : 'high mains'}, key-down)` : '';
   const thermal = { ...thermalRaw, findings: thermalRaw.findings.map((f) => (f.rule === 'pa.heat-safety' ? f : { ...f, message: f.message.replace(/\.$|:/, (m) => `${hotNote}${m}`) })) };
 
   if (pa.efficiency === null) {
@@ -151,9 +161,15 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
         ? `Predicted output ${op.outputW.toFixed(1)} W is ${dev.toFixed(1)} dB from the ${target} W target; change the turns ratio or rail voltage.`
         : `Predicted output ${op.outputW.toFixed(1)} W is within 1 dB of the ${target} W target.` });
   }
+  if (target > 0 && lowRailV < railV) {
+    // Same load line at the lowest key-down rail (REFERENCE-VALUES §8.1); 1 dB as for the target check above
+    const devLow = db(lowOutputW / target);
+    findings.push({ severity: devLow < -1 ? 'caution' : 'ok', rule: 'pa.power-low-supply', subject, value: lowOutputW, limit: target, unit: 'W', source: SRC_LOADLINE,
+      message: `With the supply at its lowest under key-down (${lowRailV.toFixed(1)} V: ${bat ? 'battery at its end voltage' : 'low mains'}) the output falls to about ${lowOutputW.toFixed(1)} W (${devLow.toFixed(1)} dB from the ${target} W target)${devLow < -1 ? '; a higher rail or a different turns ratio keeps the power up' : ''}.` });
+  }
   // Common practice, no published source: device voltage rating at least 1.25 x the peak drain voltage
   const vMargin = 1.25;
-  const atMax = maxRailV > railV ? ` at the highest supply of ${maxRailV.toFixed(1)} V (high mains or full battery, before the rail sags under key-down)` : '';
+  const atMax = maxRailV > railV ? ` at the highest supply of ${maxRailV.toFixed(1)} V (${bat ? 'battery full' : 'high mains, before the rail sags under key-down'})` : '';
   findings.push({
     severity: pa.deviceVdsMaxV < peakDrainV ? 'fail' : pa.deviceVdsMaxV < vMargin * peakDrainV ? 'caution' : 'ok',
     rule: 'pa.vds', subject, value: peakDrainV, limit: pa.deviceVdsMaxV, unit: 'V', source: `${SRC_LOADLINE}; 25 % margin common practice`,
@@ -176,7 +192,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const ref = pa.referencePowerW;
   const vsReferenceDb = db(op.outputW / ref);
   return {
-    railV, maxRailV, hotRailV, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
+    railV, maxRailV, hotRailV, lowRailV, lowOutputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
     primaryOhm, outputW: op.outputW,
     // Source: definitions of dBm and dBW (power relative to 1 mW / 1 W)
     outputDbm: db(op.outputW / 1e-3), outputDbw: db(op.outputW),

@@ -113,3 +113,19 @@ describe('PA judged at its worst supply corners (common practice, no published s
     near(bad.thermal.dissipationTotalW, 10.24 * (1 / 0.7 - 1), toleranceW, 'fallback heat');
   });
 });
+
+describe('PA output at the lowest key-down supply (load line P = (Vdd - Vsat)^2 / (0.5768... R): REFERENCE-VALUES §8.1, §8.3)', () => {
+  const e = paParams({ topology: 'single-ended', devices: 1, amplifierClass: 'E', saturationV: 1.0, turnsRatio: Math.sqrt(50 / 9.45) });
+  const toleranceW = 0.02;
+  it('10 W at 13.8 V falls to 10 x (10.8/12.8)^2 = 7.12 W at 11.8 V: caution (more than 1 dB down)', () => {
+    const r = evaluatePa(e, 13.8, proj, 'PA', { lowRailV: 11.8 });
+    near(r.lowOutputW, 10 * (10.8 / 12.8) ** 2, toleranceW, 'low output');
+    expect(r.findings.find((f) => f.rule === 'pa.power-low-supply')?.severity).toBe('caution');
+  });
+  it('at 13.0 V it is 10 x (12/12.8)^2 = 8.79 W, within 1 dB: ok; no lower corner known: no finding', () => {
+    const r = evaluatePa(e, 13.8, proj, 'PA', { lowRailV: 13.0 });
+    near(r.lowOutputW, 10 * (12 / 12.8) ** 2, toleranceW, 'low output');
+    expect(r.findings.find((f) => f.rule === 'pa.power-low-supply')?.severity).toBe('ok');
+    expect(evaluatePa(e, 13.8, proj).findings.some((f) => f.rule === 'pa.power-low-supply')).toBe(false);
+  });
+});
