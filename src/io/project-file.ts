@@ -20,19 +20,22 @@ const text = z.string().max(20_000);
 const pos = (max: number) => z.number().finite().positive().max(max);
 const nonneg = (max: number) => z.number().finite().min(0).max(max);
 const fraction = z.number().finite().min(0).max(1);
-const perMode = z.object({ receive: nonneg(1000), keyUp: nonneg(1000), keyDown: nonneg(1000) });
+// limits match the web forms, so an imported project can be edited and saved back unchanged
+const perMode = z.object({ receive: nonneg(100), keyUp: nonneg(100), keyDown: nonneg(100) });
 
-const mount = z.object({
-  thetaJcKPerW: nonneg(100),
-  thetaCsKPerW: nonneg(100),
-  thetaSaKPerW: nonneg(1000).nullable(),
-  tjMaxC: z.number().finite().min(25).max(250),
-});
+const mountOf = (tjMinC: number) =>
+  z.object({
+    thetaJcKPerW: nonneg(100),
+    thetaCsKPerW: nonneg(100),
+    thetaSaKPerW: pos(1000).nullable(),
+    tjMaxC: z.number().finite().min(tjMinC).max(250),
+  });
+const mount = mountOf(25);
 
 const setting = z.discriminatedUnion('method', [
   z.object({ method: z.literal('fixed'), nominalV: pos(1000) }),
   z.object({ method: z.literal('adjustable'), vrefV: pos(10), adjustA: nonneg(0.01), r1Ohm: pos(1e7), r2Ohm: nonneg(1e7) }),
-  z.object({ method: z.literal('raised-diodes'), nominalV: pos(1000), diodes: z.number().int().min(0).max(10), diodeDropV: nonneg(2) }),
+  z.object({ method: z.literal('raised-diodes'), nominalV: pos(1000), diodes: z.number().int().min(1).max(10), diodeDropV: pos(2) }),
   z.object({ method: z.literal('raised-resistor'), nominalV: pos(1000), r1Ohm: pos(1e7), r2Ohm: nonneg(1e7) }),
 ]);
 
@@ -52,7 +55,7 @@ const rail = z.discriminatedUnion('kind', [
     capacitorRippleA: pos(1000).nullable(),
     ripplePpTargetV: pos(1000).nullable(),
     marginV: nonneg(100),
-    fuseA: pos(1000).nullable(),
+    fuseA: pos(63).nullable(),
   }),
   z.object({
     kind: z.literal('regulated'),
@@ -64,20 +67,20 @@ const rail = z.discriminatedUnion('kind', [
     dropoutV: nonneg(50),
     quiescentA: nonneg(1),
     efficiency: z.number().finite().gt(0).max(1).nullable(),
-    maxOutputA: pos(1000).nullable(),
-    maxInputV: pos(10_000).nullable(),
-    mount: mount.nullable(),
+    maxOutputA: pos(100).nullable(),
+    maxInputV: pos(1000).nullable(),
+    mount: mountOf(50).nullable(),
   }),
   z.object({
     kind: z.literal('battery'),
     id,
     name,
-    chemistry: z.string().max(80),
+    chemistry: name.pipe(z.string().max(60)),
     nominalV: pos(1000),
     fullV: pos(1000),
     endV: pos(1000),
     capacityAh: pos(10_000),
-    usableFraction: fraction,
+    usableFraction: z.number().finite().gt(0).max(1),
     internalOhm: nonneg(100),
   }),
 ]);
@@ -91,31 +94,31 @@ const pa = z.object({
   rdsOnOhm: nonneg(100).nullable(),
   turnsRatio: pos(100).nullable(),
   loadOhm: pos(10_000),
-  efficiency: z.number().finite().gt(0).max(1).nullable(),
+  efficiency: z.number().finite().min(0.01).max(1).nullable(),
   deviceVdsMaxV: pos(10_000),
   deviceIdMaxA: pos(1000),
   mount,
   biasIdleMaxA: nonneg(100),
   referencePowerW: pos(1e6),
-});
+}).refine((p) => p.saturationV !== null || p.rdsOnOhm !== null, { message: 'give saturationV or rdsOnOhm (or both)', path: ['saturationV'] });
 
 const lpf = z.object({
   response: z.enum(['butterworth', 'chebyshev']),
-  rippleDb: z.number().finite().min(0).max(3),
-  order: z.number().int().min(1).max(15),
+  rippleDb: z.number().finite().min(0).max(0.5),
+  order: z.number().int().refine((n) => [3, 5, 7, 9].includes(n), 'must be 3, 5, 7 or 9 (an odd order between equal 50 Ω terminations)'),
   form: z.enum(['capacitor-input', 'inductor-input']),
-  cutoffHz: pos(1e9).nullable(),
+  cutoffHz: z.number().finite().min(100e3).max(100e6).nullable(),
   capacitorSeries: z.enum(['E12', 'E24']),
   allowParallelPairs: z.boolean(),
-  coreAlHPerTurn2: z.number().finite().max(1e-3),
+  coreAlHPerTurn2: pos(1e-3),
   coreName: z.string().max(120),
   inductorQ: pos(10_000),
   capacitorQ: pos(100_000),
-  capacitorTolerance: fraction,
-  inductorTolerance: fraction,
-  monteCarloTrials: z.number().int().min(0).max(100_000),
+  capacitorTolerance: z.number().finite().min(0).max(0.5),
+  inductorTolerance: z.number().finite().min(0).max(0.5),
+  monteCarloTrials: z.number().int().min(0).max(20_000),
   seed: z.number().int().min(0).max(2 ** 32 - 1),
-});
+}).refine((f) => f.response === 'butterworth' || f.rippleDb >= 0.01, { message: 'a Chebyshev filter needs rippleDb from 0.01 to 0.5', path: ['rippleDb'] });
 
 const relay = z.object({
   contactCarryA: pos(1000),
@@ -133,14 +136,14 @@ const relay = z.object({
   position: z.enum(['before-lpf', 'after-lpf']),
   receiverMaxInputW: pos(1e6),
   txDelayS: nonneg(10),
-  wpm: pos(100),
+  wpm: z.number().finite().min(1).max(100),
 });
 
 const stage = z.object({
   id,
   kind: z.enum(STAGE_KINDS),
   name,
-  notes: text,
+  notes: z.string().max(5000),
   loads: z.array(z.object({ railId: id, currentA: perMode })).max(20),
   dissipationW: nonneg(10_000).nullable(),
   pa: pa.optional(),
@@ -154,19 +157,23 @@ const currency = z.string().regex(/^[A-Z]{3}$/, 'must be a three-letter currency
 const part = z.object({
   id,
   description: name,
-  category: z.string().max(80),
+  category: name.pipe(z.string().max(60)),
   ratings: z.record(z.string().max(80), z.union([z.number().finite(), z.string().max(200)])),
   offers: z
     .array(
       z.object({
         id,
-        supplier: name,
+        supplier: name.pipe(z.string().max(120)),
         sku: z.string().max(120),
         currency,
-        breaks: z.array(z.object({ minQty: z.number().int().min(1), unitPriceCents: money })).max(50),
-        minOrder: z.number().int().min(1).max(1e7),
-        orderMultiple: z.number().int().min(1).max(1e7),
-        stockNote: z.string().max(500),
+        breaks: z
+          .array(z.object({ minQty: z.number().int().min(1), unitPriceCents: money }))
+          .min(1)
+          .max(50)
+          .refine((b) => new Set(b.map((x) => x.minQty)).size === b.length, 'a quantity is given twice'),
+        minOrder: z.number().int().min(1).max(1e6),
+        orderMultiple: z.number().int().min(1).max(1e6),
+        stockNote: z.string().max(200),
       }),
     )
     .max(50),
@@ -199,13 +206,13 @@ export const projectSchema = z.object({
           name,
           construction: z.enum(['laminated', 'toroidal']),
           windings: z.array(
-            z.object({ id, name, ratedVrms: pos(1000), ratedA: pos(1000), regulationFraction: z.number().finite().min(0).max(1), resistanceOhm: nonneg(1000).nullable() }),
+            z.object({ id, name, ratedVrms: pos(1000), ratedA: pos(100), regulationFraction: z.number().finite().min(0).max(1), resistanceOhm: pos(1000).nullable() }),
           ),
         }),
       )
       .max(10),
     rails: z.array(rail).max(50),
-    primaryFuseA: pos(100).nullable(),
+    primaryFuseA: pos(63).nullable(),
   }),
   stages: z.array(stage).max(100),
   rf: z.object({
@@ -220,13 +227,13 @@ export const projectSchema = z.object({
   }),
   parts: z.array(part).max(5000),
   bom: z
-    .array(z.object({ id, stageId: id.nullable(), partId: id, qtyPerRig: nonneg(1e6), refs: z.string().max(2000), notes: z.string().max(2000) }))
+    .array(z.object({ id, stageId: id.nullable(), partId: id, qtyPerRig: pos(100_000), refs: z.string().max(300), notes: z.string().max(500) }))
     .max(5000),
   costing: z.object({
     attritionFraction: z.number().finite().min(0).max(1),
     sparesPerLine: z.number().int().min(0).max(1000),
     exchangeRates: z.record(currency, z.number().finite().positive()),
-    suppliers: z.array(z.object({ name, shippingCents: money, currency })).max(200),
+    suppliers: z.array(z.object({ name: name.pipe(z.string().max(120)), shippingCents: money, currency })).max(200),
   }),
 });
 
