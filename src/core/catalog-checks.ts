@@ -4,6 +4,7 @@
 import type { Project } from './model';
 import type { Finding } from './findings';
 import type { SupplyReport } from './power/report-types';
+import { CAP_VOLTAGE_MARGIN } from './power/reservoir';
 
 const CAPACITANCE_MATCH = 0.02; // relative; E6 steps are ~50 % apart, so 2 % cannot confuse two values
 
@@ -36,7 +37,9 @@ export function catalogFindings(project: Project, supply: SupplyReport | null): 
       continue;
     }
     // Source: capacitor rating must exceed the no-load high-mains peak, ripple rating the simulated RMS (ref §4.2)
-    const needV = rail.reservoir.recommendedRatedV ?? rail.reservoir.noLoadPeakHighV;
+    // Same margin as the fitted-part check (reservoir.ts): 1.2 x the peak, not the next standard step above it, so a
+    // part rated between the two is judged alike on both pages. Common practice, no published source (ref §4.2 [D]).
+    const needV = rail.reservoir.noLoadPeakHighV * CAP_VOLTAGE_MARGIN;
     const needA = rail.reservoir.thermalRippleA;
     for (const part of matches) {
       const v = num(part.ratings.voltageV);
@@ -49,11 +52,11 @@ export function catalogFindings(project: Project, supply: SupplyReport | null): 
       if (v < rail.reservoir.noLoadPeakHighV)
         out.push({ severity: 'fail', rule: 'catalog.reservoir-voltage', subject, value: v, limit: rail.reservoir.noLoadPeakHighV, unit: 'V', source: 'Capacitor rating against the no-load high-mains peak (ref §4.2)', message: `Rated ${v} V but the rail reaches ${rail.reservoir.noLoadPeakHighV.toFixed(1)} V with no load at high mains: choose a higher-voltage part.` });
       else if (v < needV)
-        out.push({ severity: 'caution', rule: 'catalog.reservoir-voltage', subject, value: v, limit: needV, unit: 'V', source: 'Capacitor rating with 20 % margin over the no-load peak; margin is common practice, no published source', message: `Rated ${v} V, below the recommended ${needV} V (margin over the ${rail.reservoir.noLoadPeakHighV.toFixed(1)} V peak).` });
+        out.push({ severity: 'caution', rule: 'catalog.reservoir-voltage', subject, value: v, limit: needV, unit: 'V', source: 'Capacitor rating with 20 % margin over the no-load peak; margin is common practice, no published source', message: `Rated ${v} V, under 20 % above the ${rail.reservoir.noLoadPeakHighV.toFixed(1)} V no-load peak (${needV.toFixed(1)} V); mains surges can exceed it${rail.reservoir.recommendedRatedV !== null ? `: choose ${rail.reservoir.recommendedRatedV} V` : ''}.` });
       if (a < needA)
         out.push({ severity: 'fail', rule: 'catalog.reservoir-ripple', subject, value: a, limit: needA, unit: 'A', source: "Simulated ripple current against the maker's rating (ref §4.1, §4.2)", message: `Ripple rating ${a} A RMS is below the ${needA.toFixed(2)} A it carries in CW operation: it will run hot and age early.` });
       if (v >= needV && a >= needA)
-        out.push({ severity: 'ok', rule: 'catalog.reservoir', subject, value: v, limit: needV, unit: 'V', source: 'Parts list against the supply design (ref §4.2)', message: `The listed part (${v} V, ${a} A ripple) covers this rail (${needV} V, ${needA.toFixed(2)} A).` });
+        out.push({ severity: 'ok', rule: 'catalog.reservoir', subject, value: v, limit: needV, unit: 'V', source: 'Parts list against the supply design (ref §4.2)', message: `The listed part (${v} V, ${a} A ripple) covers this rail (${needV.toFixed(1)} V with margin, ${needA.toFixed(2)} A).` });
     }
   }
   return out;

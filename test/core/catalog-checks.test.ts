@@ -38,3 +38,17 @@ describe('parts-list reservoir capacitors against the supply design', () => {
     expect(rule(p, 'catalog.reservoir-match').length).toBe(1);
   });
 });
+
+describe('parts-list capacitor voltage margin matches the fitted-part check (1.2 x no-load peak; common practice, no published source, ref §4.2 [D])', () => {
+  it('a part 25 % above the no-load peak but below the next standard step is ok on both checks', () => {
+    const p = club();
+    const peak = evaluate(club()).supply!.rails.find((r) => r.railId === 'rail-pa');
+    const peakV = (peak as { reservoir: { noLoadPeakHighV: number } }).reservoir.noLoadPeakHighV;
+    const ratedV = Math.ceil(peakV * 1.25); // e.g. 40 V for a 31.8 V peak: above 1.2 x peak, below the 50 V step
+    p.parts.find((x) => x.id === 'p-c6800')!.ratings.voltageV = ratedV;
+    expect(rule(p, 'catalog.reservoir-voltage').length).toBe(0);
+    const ok = rule(p, 'catalog.reservoir').find((f) => f.subject.includes('6800'));
+    expect(ok?.severity).toBe('ok');
+    expect(Math.abs(ok!.limit! - 1.2 * peakV)).toBeLessThan(1e-9);
+  });
+});
