@@ -84,3 +84,21 @@ describe('evaluate(): high-mains heating corners carry the PA current at the hig
     expect(Math.abs(low - nominalKd)).toBeLessThan(1e-12);
   });
 });
+
+describe('evaluate(): filter and relay stress at the most RF the PA delivers (high mains)', () => {
+  it('relay peak = sqrt(2 P Z0 S) with P the high-mains PA output after the filter loss (REFERENCE-VALUES §9)', () => {
+    const p = club();
+    const r = evaluate(p);
+    const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
+    const relayStage = r.rf.stages.find((s) => s.kind === 'tr')!;
+    const lpf = r.rf.stages.find((s) => s.kind === 'lpf')!.lpf!;
+    const swr = p.rf.worstSwr;
+    const before = p.stages.find((s) => s.id === relayStage.stageId)!.relay!.position === 'before-lpf';
+    const pStress = pa.hotOutputW * (before ? 1 : 10 ** (-lpf.analysis!.atOperating.lossDb / 10));
+    const toleranceV = 1e-6;
+    expect(pa.hotOutputW).toBeGreaterThan(pa.outputW);
+    expect(Math.abs(relayStage.relay!.rfPeakV - Math.sqrt(2 * pStress * 50 * swr))).toBeLessThan(toleranceV);
+    // the filter's shunt capacitors: same maxima at the PA's high-mains output (before the filter loss)
+    expect(Math.abs(lpf.capacitorPeakV - Math.sqrt(2 * pa.hotOutputW * 50 * swr))).toBeLessThan(toleranceV);
+  });
+});

@@ -78,6 +78,9 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const paStage = project.stages.find((s) => s.kind === 'final' && s.pa);
   const lpfStageDef = project.stages.find((s) => s.kind === 'lpf' && s.lpf);
   let paPowerW = targetPowerW;
+  // Component stress (filter capacitors and heat, relay contacts, receiver leakage) is judged at the most RF the PA
+  // delivers: high mains or a full battery. Common practice, no published source (worst-case design).
+  let paStressW = targetPowerW;
   const okFreq = inputErrors.every((e) => e.field !== 'frequencyHz');
 
   for (const st of project.stages) {
@@ -86,14 +89,17 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
         source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains',
       });
-      if (st === paStage && pa.outputW > 0) paPowerW = pa.outputW;
+      if (st === paStage && pa.outputW > 0) {
+        paPowerW = pa.outputW;
+        paStressW = Math.max(pa.outputW, finite(pa.hotOutputW));
+      }
       stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });
     }
   }
   let lpfRes: LpfStageResult | null = null;
   for (const st of project.stages) {
     if (st.kind === 'lpf' && st.lpf && okFreq) {
-      const { res, findings } = lpfStage(st, project, paPowerW, ctx);
+      const { res, findings } = lpfStage(st, project, paStressW, ctx);
       if (st === lpfStageDef) lpfRes = res;
       stages.push({ stageId: st.id, stageName: st.name, kind: 'lpf', pa: null, lpf: res, relay: null, findings: sortFindings(findings) });
     }
@@ -107,8 +113,18 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (paHarmonicDbc(topology, evenDbc, n).dbc / 20), 0);
   for (const st of project.stages) {
     if (st.kind === 'tr' && st.relay) {
-      const relay = evaluateRelay(st.relay, { powerW: st.relay.position === 'before-lpf' ? paPowerW : outputPowerW, swr: finite(project.rf.worstSwr, 1), harmonicAmplitudeSum, subject: st.name });
+      const relay = evaluateRelay(st.relay, { powerW: st.relay.position === 'before-lpf' ? paStressW : paStressW * 10 ** (-passbandLossDb / 10), swr: finite(project.rf.worstSwr, 1), harmonicAmplitudeSum, subject: st.name });
       stages.push({ stageId: st.id, stageName: st.name, kind: 'tr', pa: null, lpf: null, relay, findings: sortFindings(relay.findings) });
+    }
+  }
+  if (paStressW > paPowerW * 1.001) {
+    // Say which power the stress figures are for, so they do not look inconsistent with the PA's nominal output
+    const onBattery = paStage?.pa ? ctx.paRailBattery?.[paStage.pa.railId] === true : false;
+    const note = ` (at ${paStressW.toFixed(1)} W from the PA, its output ${onBattery ? 'with a full battery' : 'at high mains'})`;
+    const stressed = new Set(['lpf.capacitor-voltage', 'lpf.passband', 'relay.rf-voltage', 'relay.rf-current', 'relay.isolation']);
+    for (const st of stages) {
+      st.findings = st.findings.map((f) => (stressed.has(f.rule) ? { ...f, message: f.message.replace(/\.(?=[^.]*$)/, `${note}.`) } : f));
+      if (st.relay) st.relay.findings = st.findings.filter((f) => f.rule.startsWith('relay.'));
     }
   }
   for (const s of stages) all.push(...s.findings);

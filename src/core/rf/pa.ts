@@ -56,6 +56,8 @@ export interface PaResult {
   /** Lowest key-down supply voltage (low mains trough, flat battery), V, and the output there, W; railV / outputW when unknown. */
   lowRailV: number;
   lowOutputW: number;
+  /** Output at the hot supply (hotRailV), W: the most RF the stage delivers, for filter, relay and heat checks. */
+  hotOutputW: number;
   /** Peak drain voltage at the highest supply voltage (maxRailV), V, and peak current of one conducting device, A. */
   peakDrainV: number;
   peakDeviceA: number;
@@ -69,7 +71,7 @@ const SRC_LOADLINE = 'Textbook load line / Sokal & Sokal IEEE JSSC 1975 (REFEREN
 
 function zeroResult(railV: number, findings: Finding[]): PaResult {
   return {
-    railV, maxRailV: railV, hotRailV: railV, lowRailV: railV, lowOutputW: 0, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
+    railV, maxRailV: railV, hotRailV: railV, lowRailV: railV, lowOutputW: 0, hotOutputW: 0, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
     outputW: 0, outputDbm: -999, outputDbw: -999, vsReferenceDb: -999, vsReferenceSUnits: -999 / 6, efficiency: 0, efficiencySource: 'entered',
     dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
     thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
@@ -192,7 +194,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const ref = pa.referencePowerW;
   const vsReferenceDb = db(op.outputW / ref);
   return {
-    railV, maxRailV, hotRailV, lowRailV, lowOutputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
+    railV, maxRailV, hotRailV, lowRailV, lowOutputW, hotOutputW: opHot.outputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
     primaryOhm, outputW: op.outputW,
     // Source: definitions of dBm and dBW (power relative to 1 mW / 1 W)
     outputDbm: db(op.outputW / 1e-3), outputDbw: db(op.outputW),
