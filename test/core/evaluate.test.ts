@@ -102,3 +102,14 @@ describe('evaluate(): filter and relay stress at the most RF the PA delivers (hi
     expect(Math.abs(lpf.capacitorPeakV - Math.sqrt(2 * pa.hotOutputW * 50 * swr))).toBeLessThan(toleranceV);
   });
 });
+
+describe('evaluate(): RF exposure from the most the station radiates', () => {
+  it('exposure uses the high-mains PA output after the filter: R = sqrt(2.56 EIRP / (4 pi S)) grows with sqrt(P) (REFERENCE-VALUES §2.2, §2.5)', () => {
+    const r = evaluate(club());
+    const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
+    const lossDb = r.rf.stages.find((s) => s.kind === 'lpf')!.lpf!.analysis!.atOperating.lossDb;
+    const toleranceW = 1e-9;
+    expect(Math.abs(r.rf.exposure!.peakPowerW - pa.hotOutputW * 10 ** (-lossDb / 10))).toBeLessThan(toleranceW);
+    expect(r.rf.exposure!.peakPowerW).toBeGreaterThan(r.rf.outputPowerW);
+  });
+});

@@ -143,7 +143,9 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     all.push({ severity: 'caution', rule: 'spurious.range', subject: 'Spurious-emission rule', value: frequencyHz, limit: 30e6, unit: 'Hz', source: '47 CFR 97.307(d)/(e)',
       message: 'The spurious-emission limits used here apply below 30 MHz; other limits apply at this frequency.' });
   }
-  const exposure = okFreq ? evaluateExposure(outputPowerW, frequencyHz, project.rf) : null;
+  // RF exposure is a safety estimate: the most the station radiates (high mains or a full battery), not the nominal
+  // output. Source: OET Bulletin 65 Supplement B (1997), averaging starts from the transmitter PEP (ref §2.3; "worst case" wording from memory).
+  const exposure = okFreq ? evaluateExposure(paStressW * 10 ** (-passbandLossDb / 10), frequencyHz, project.rf) : null;
   if (exposure) all.push(...exposure.findings);
   return {
     frequencyHz, targetPowerW, outputPowerW, paStageId: paStage?.id ?? null, lpfStageId: lpfStageDef?.id ?? null, inputErrors,
