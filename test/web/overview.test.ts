@@ -103,3 +103,22 @@ describe('overview page', () => {
     expect(html).toContain('Final amplifier data');
   });
 });
+
+describe('numbers with a grouping comma', () => {
+  it('"1,500 W" is refused as ambiguous instead of being read as 1.5 W; "4,7" stays a decimal comma', async () => {
+    const { get, post, database } = await demoApp();
+    const { formByAction } = await import('../helpers/html');
+    const action = `/projects/${ID}/settings`;
+    const form = formByAction(await (await get(`/projects/${ID}`)).text(), action);
+    const before = (await loadProject(database.db, ID))!;
+    const res = await post(action, { ...form.fields, power: '1,500 W' }, { 'HX-Request': 'true' });
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain('Target output: &quot;1,500 W&quot; is ambiguous');
+    expect(html).toContain('write 1500 or 1.5');
+    expect(html).toContain('value="1,500 W"'); // what the user typed is kept
+    expect((await loadProject(database.db, ID))!.version).toBe(before.version);
+    expect((await post(action, { ...form.fields, power: '4,7 W' })).status).toBe(303);
+    expect((await loadProject(database.db, ID))!.targetPowerW).toBe(4.7);
+  });
+});
