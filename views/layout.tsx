@@ -12,6 +12,13 @@ const TABS: [Section, string, string][] = [
   ['pack', 'Builder pack', '/pack'],
 ];
 
+/** The project name in the header; an htmx partial that can rename the project sends it again out of band. */
+export const ProjectCrumb: FC<{ name: string; oob?: boolean }> = ({ name, oob }) => (
+  <span class="crumb" id="project-crumb" hx-swap-oob={oob ? 'true' : undefined}>
+    {name}
+  </span>
+);
+
 export const Layout: FC<{ title: string; project?: { id: string; name: string }; section?: Section; children?: Child }> = ({ title, project, section, children }) => (
   <html lang="en">
     <head>
@@ -27,7 +34,7 @@ export const Layout: FC<{ title: string; project?: { id: string; name: string };
           Rigwright
         </a>
         <span class="tagline">station build planner</span>
-        {project ? <span class="crumb">{project.name}</span> : null}
+        {project ? <ProjectCrumb name={project.name} /> : null}
       </header>
       {project ? (
         <nav class="tabs" aria-label="Project sections">

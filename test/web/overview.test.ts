@@ -122,3 +122,19 @@ describe('numbers with a grouping comma', () => {
     expect((await loadProject(database.db, ID))!.targetPowerW).toBe(4.7);
   });
 });
+
+describe('renaming through the htmx settings form', () => {
+  it('sends the header name out of band, escaped, so header and page agree', async () => {
+    const { get, post } = await demoApp();
+    const { formByAction } = await import('../helpers/html');
+    const action = `/projects/${ID}/settings`;
+    const form = formByAction(await (await get(`/projects/${ID}`)).text(), action);
+    const res = await post(action, { ...form.fields, name: 'New <b>name</b>' }, { 'HX-Request': 'true' });
+    expect(res.status).toBe(200);
+    const html = await res.text();
+    expect(html).toContain('<span class="crumb" id="project-crumb" hx-swap-oob="true">New &lt;b&gt;name&lt;/b&gt;</span>');
+    // the full page has the same element without the out-of-band marker
+    const page = await (await get(`/projects/${ID}`)).text();
+    expect(page).toContain('<span class="crumb" id="project-crumb">New &lt;b&gt;name&lt;/b&gt;</span>');
+  });
+});

@@ -10,7 +10,7 @@ import { num, pct, text, choice, type FieldErrors } from '../form';
 import { projectEdit } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
-import { Layout } from '../../../views/layout';
+import { Layout, ProjectCrumb } from '../../../views/layout';
 import { OverviewBody } from '../../../views/pages/overview';
 import type { Failed } from '../../../views/components/failed';
 import { newId } from '../ids';
@@ -46,8 +46,14 @@ export function overviewPage(project: Project, failed?: Failed, notice?: string)
   );
 }
 
+/** The htmx swap: the overview, and the header's project name (the settings form can rename it). */
 export function overviewPartial(project: Project, failed?: Failed, notice?: string) {
-  return <OverviewBody project={project} report={evaluate(project)} failed={failed} notice={notice} />;
+  return (
+    <>
+      <OverviewBody project={project} report={evaluate(project)} failed={failed} notice={notice} />
+      <ProjectCrumb name={project.name} oob />
+    </>
+  );
 }
 
 function findStage(p: Project, id: string | undefined): Stage | undefined {
