@@ -70,3 +70,23 @@ describe('stage page', () => {
     expect(stage.loads).toEqual([{ railId: 'rail-pa', currentA: { receive: 0, keyUp: 0.001, keyDown: 0.002 } }]);
   });
 });
+
+describe('a stage deleted in another window', () => {
+  it('an edit of it says so, as a page and as the htmx swap, and saves nothing', async () => {
+    const { post, database } = await demoApp();
+    const id = 'demo-club-30m';
+    const before = (await loadProject(database.db, id))!;
+    const fields = { version: String(before.version), name: 'Ghost', kind: 'receiver', notes: '', dissipation: '' };
+    const page = await post(`/projects/${id}/stages/st-gone`, fields);
+    expect(page.status).toBe(422);
+    const html = await page.text();
+    expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
+    expect(html).toContain('this stage no longer exists');
+    expect(html).toContain(`href="/projects/${id}"`);
+    const partial = await post(`/projects/${id}/stages/st-gone`, fields, { 'HX-Request': 'true' });
+    const swap = await partial.text();
+    expect(swap.startsWith('<div id="stage">')).toBe(true);
+    expect(swap).toContain('this stage no longer exists');
+    expect((await loadProject(database.db, id))!.version).toBe(before.version);
+  });
+});

@@ -51,11 +51,30 @@ function parseLoads(p: Project, values: Record<string, string>): { loads: StageL
   return Object.keys(errors).length ? { errors } : { loads };
 }
 
+/** A stage deleted in another window: the same message as a page and as the htmx swap, with the way back. */
+const StageGone = ({ project }: { project: Project }) => (
+  <div id="stage">
+    <section class="card">
+      <div class="form-errors" role="alert">
+        <p>Not saved: this stage no longer exists (deleted in another tab or window?). Nothing was changed.</p>
+      </div>
+      <p>
+        <a href={`/projects/${project.id}`}>← All stages and the budget</a>
+      </p>
+    </section>
+  </div>
+);
+
 export function stageRoutes(deps: Deps) {
   const app = new Hono();
   const page = (p: Project, c: Context) => (failed?: Failed, notice?: string) => {
     const stage = p.stages.find((s) => s.id === sid(c));
-    if (!stage) return <p>That stage no longer exists.</p>;
+    if (!stage)
+      return (
+        <Layout title="Stage not found" project={p} section="overview">
+          <StageGone project={p} />
+        </Layout>
+      );
     return (
       <Layout title={stage.name} project={p} section="overview">
         <StageBody project={p} stage={stage} failed={failed} notice={notice} results={stageResults(p, stage)} />
@@ -64,7 +83,7 @@ export function stageRoutes(deps: Deps) {
   };
   const partial = (p: Project, c: Context) => (failed?: Failed, notice?: string) => {
     const stage = p.stages.find((s) => s.id === sid(c));
-    return stage ? <StageBody project={p} stage={stage} failed={failed} notice={notice} results={stageResults(p, stage)} /> : <p id="stage">That stage no longer exists.</p>;
+    return stage ? <StageBody project={p} stage={stage} failed={failed} notice={notice} results={stageResults(p, stage)} /> : <StageGone project={p} />;
   };
   const edit = <S extends z.ZodType>(form: string, schema: S, change: (p: Project, d: z.output<S>, c: Context) => ChangeResult) => (c: Context) =>
     projectEdit(deps, {
