@@ -99,6 +99,22 @@ const MAX_PASSES = 6;
 
 const railOutputs = (b: BudgetReport): Record<string, PerMode> => Object.fromEntries(b.rails.map((r) => [r.railId, r.outputA]));
 
+/**
+ * Lowest simulated voltage of each source rail (low mains / battery end, key-down trough), V. A switching regulator
+ * draws I_in = V_out I_out / (eta V_in), most at the lowest V_in; the budget otherwise assumes nominal x (1 - low
+ * fraction), which ignores ripple and winding regulation. Source: energy balance (see power/regulator.ts).
+ */
+function lowestInputV(project: Project, supply: SupplyReport | null): Record<string, number> {
+  const out: Record<string, number> = {};
+  const feedsSwitching = new Set(project.supply.rails.flatMap((r) => (r.kind === 'regulated' && r.regulator === 'switching' ? [r.parentId] : [])));
+  for (const r of supply?.rails ?? []) {
+    if ((r.kind !== 'rectified' && r.kind !== 'battery') || !feedsSwitching.has(r.railId)) continue;
+    const low = r.kind === 'rectified' ? r.corners.find((c) => c.id === 'low-keyDown')?.troughV : r.loadedEndV;
+    if (low !== undefined && Number.isFinite(low) && low > 0) out[r.railId] = low;
+  }
+  return out;
+}
+
 export function evaluate(project: Project, options: EvaluateOptions = {}): EvaluationReport {
   // The PA current depends on its rail voltage and the rail voltage on the PA current: iterate to a fixed
   // point, starting from the budget's nominal voltage. The map is a strong contraction (a volt more on the
@@ -106,12 +122,16 @@ export function evaluate(project: Project, options: EvaluateOptions = {}): Evalu
   let paRailV = paRailVoltages(project, computeBudget(project), null);
   let budget = computeBudget(project, computedLoads(project, paRailV));
   let supply = project.supply.rails.length ? evaluateSupply(project, railOutputs(budget)) : null;
+  let lowV: Record<string, number> = {};
   for (let pass = 0; supply && pass < MAX_PASSES; pass++) {
     const next = paRailVoltages(project, budget, supply);
-    const settled = Object.keys(next).every((id) => Math.abs(next[id] - (paRailV[id] ?? 0)) < SETTLED_V);
+    const nextLow = lowestInputV(project, supply);
+    const settled = Object.keys(next).every((id) => Math.abs(next[id] - (paRailV[id] ?? 0)) < SETTLED_V)
+      && Object.keys(nextLow).every((id) => Math.abs(nextLow[id] - (lowV[id] ?? 0)) < SETTLED_V);
     paRailV = next;
+    lowV = nextLow;
     if (settled) break;
-    budget = computeBudget(project, computedLoads(project, paRailV));
+    budget = computeBudget(project, computedLoads(project, paRailV), lowV);
     supply = evaluateSupply(project, railOutputs(budget));
   }
   // Heating corner: at high mains a PA of fixed load draws more current (I ~ V); the supply's high-mains corners
@@ -120,7 +140,7 @@ export function evaluate(project: Project, options: EvaluateOptions = {}): Evalu
   let corners = paRailCorners(project, supply);
   // The hot rail voltage and the PA current settle together, as for the nominal pass above.
   for (let pass = 0; supply && Object.keys(corners.hotV).length > 0 && pass < MAX_PASSES; pass++) {
-    const budgetHigh = computeBudget(project, computedLoads(project, { ...paRailV, ...corners.hotV }));
+    const budgetHigh = computeBudget(project, computedLoads(project, { ...paRailV, ...corners.hotV }), lowV);
     supply = evaluateSupply(project, railOutputs(budget), { highMainsOutputA: railOutputs(budgetHigh) });
     const next = paRailCorners(project, supply);
     const settled = Object.keys(next.hotV).every((id) => Math.abs(next.hotV[id] - (corners.hotV[id] ?? 0)) < SETTLED_V);

@@ -113,3 +113,26 @@ describe('evaluate(): RF exposure from the most the station radiates', () => {
     expect(r.rf.exposure!.peakPowerW).toBeGreaterThan(r.rf.outputPowerW);
   });
 });
+
+describe('evaluate(): a switching regulator draws its input current at the lowest simulated input voltage', () => {
+  it('I_in = V_out I_out / (eta V_trough) + I_q at the low-mains key-down trough (energy balance P_in = P_out / eta)', async () => {
+    const { regulatorOutputV } = await import('../../src/core/power/regulator');
+    const p = club();
+    const reg = p.supply.rails.find((r) => r.id === 'rail-13v8')!;
+    if (reg.kind !== 'regulated') throw new Error('fixture');
+    reg.regulator = 'switching';
+    reg.efficiency = 0.85;
+    reg.dropoutV = 1;
+    const r = evaluate(p);
+    const b = r.budget.rails.find((x) => x.railId === 'rail-13v8')!;
+    const raw = r.supply!.rails.find((x) => x.railId === 'rail-raw') as RectifiedRailReport;
+    const trough = raw.corners.find((c) => c.id === 'low-keyDown')!.troughV;
+    const vOut = regulatorOutputV(reg.setting, reg.quiescentA);
+    const expected = (vOut * b.outputA.keyDown) / (0.85 * trough) + reg.quiescentA;
+    const toleranceA = 0.0005; // the passes settle the trough within 5 mV
+    expect(Math.abs(b.inputA!.keyDown - expected)).toBeLessThan(toleranceA);
+    // the older estimate, nominal x (1 - low fraction), is higher than the trough and gave less current
+    const nominalLow = r.budget.rails.find((x) => x.railId === 'rail-raw')!.nominalV * 0.9;
+    expect(trough).toBeLessThan(nominalLow);
+  });
+});
