@@ -48,7 +48,7 @@ export function projectEdit<S extends z.ZodType>(deps: Deps, spec: EditSpec<S>) 
         if ('errors' in r) throw new Error('change refused on retry');
         return r;
       }, deps.now().toISOString());
-      if (!isHtmx(c)) return c.redirect(spec.redirect(saved, c), 303);
+      if (!isHtmx(c)) return c.redirect(withDone(spec.redirect(saved, c), 'saved'), 303);
       return sendPartial(c, await spec.partial(saved, undefined, 'Saved.'));
     } catch (e) {
       if (e instanceof VersionConflict) {
@@ -61,4 +61,18 @@ export function projectEdit<S extends z.ZodType>(deps: Deps, spec: EditSpec<S>) 
       throw e;
     }
   };
+}
+
+/** Mark a Post/Redirect/Get target with what was done (unless it says already), so the page without JavaScript says it too. */
+export function withDone(url: string, done: 'saved' | 'deleted'): string {
+  if (/[?&]done=/.test(url)) return url;
+  const hash = url.indexOf('#');
+  const [path, frag] = hash < 0 ? [url, ''] : [url.slice(0, hash), url.slice(hash)];
+  return `${path}${path.includes('?') ? '&' : '?'}done=${done}${frag}`;
+}
+
+/** The status line for a page reached by such a redirect. */
+export function doneNotice(c: Context): string | undefined {
+  const done = c.req.query('done');
+  return done === 'saved' ? 'Saved.' : done === 'deleted' ? 'Deleted.' : undefined;
 }

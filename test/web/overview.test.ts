@@ -33,7 +33,10 @@ describe('overview page', () => {
     const { post } = await demoApp();
     const res = await post(`/projects/${ID}/stages/st-drv/loads`, { version: '1', l0_receive: '0', l0_keyUp: '60 mA', l0_keyDown: '200 mA' });
     expect(res.status).toBe(303);
-    expect(res.headers.get('location')).toBe(`/projects/${ID}`);
+    expect(res.headers.get('location')).toBe(`/projects/${ID}?done=saved`);
+    // the page reached by the redirect says what happened, as the htmx swap does
+    const { get } = await demoApp();
+    expect(await (await get(`/projects/${ID}?done=saved`)).text()).toContain('<p class="notice" role="status">Saved.</p>');
   });
 
   it('a bad current is refused beside its field, keeps the typed text and saves nothing', async () => {

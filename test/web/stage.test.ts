@@ -90,3 +90,26 @@ describe('a stage deleted in another window', () => {
     expect((await loadProject(database.db, id))!.version).toBe(before.version);
   });
 });
+
+describe('saving without JavaScript', () => {
+  it('the stage page reached by the redirect says "Saved.", like the htmx swap', async () => {
+    const { get, post, database } = await demoApp();
+    const id = 'demo-club-30m';
+    const p = (await loadProject(database.db, id))!;
+    const pa = p.stages.find((s) => s.pa)!;
+    const res = await post(`/projects/${id}/stages/${pa.id}/pa`, { ...paValues(pa.pa!), version: String(p.version) });
+    expect(res.status).toBe(303);
+    const location = res.headers.get('location')!;
+    expect(location).toBe(`/projects/${id}/stages/${pa.id}?done=saved`);
+    expect(await (await get(location)).text()).toContain('<p class="notice" role="status">Saved.</p>');
+    // a plain visit says nothing
+    expect(await (await get(`/projects/${id}/stages/${pa.id}`)).text()).not.toContain('Saved.');
+  });
+
+  it('the done marker goes before a fragment and never twice', async () => {
+    const { withDone } = await import('../../src/web/edit');
+    expect(withDone('/projects/x/supply?open=r1#rail-r1', 'saved')).toBe('/projects/x/supply?open=r1&done=saved#rail-r1');
+    expect(withDone('/projects/x/bom?done=deleted', 'saved')).toBe('/projects/x/bom?done=deleted');
+    expect(withDone('/projects/x', 'saved')).toBe('/projects/x?done=saved');
+  });
+});

@@ -5,7 +5,7 @@ import type { Project } from '../../core/model';
 import { costProject } from '../../core/cost';
 import { costReportToCsv, planImport, previewImport, rowsToProjectData, guessDelimiter, parseCsv, guessMapping } from '../../core/csv';
 import { loadProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
-import { projectEdit, type ChangeResult } from '../edit';
+import { projectEdit, doneNotice, type ChangeResult } from '../edit';
 import { sendPage } from '../render';
 import { versionField } from '../form';
 import type { Deps } from '../deps';
@@ -68,7 +68,7 @@ export function bomRoutes(deps: Deps) {
     if (!project) return c.notFound();
     const q = c.req.query();
     const notice =
-      q.done === 'deleted' ? 'Deleted.' : q.done === 'imported' ? `Imported ${Number(q.lines) || 0} line(s); ${Number(q.parts) || 0} new catalog part(s); ${Number(q.skipped) || 0} refused row(s) skipped.` : undefined;
+      q.done === 'deleted' || q.done === 'saved' ? doneNotice(c) : q.done === 'imported' ? `Imported ${Number(q.lines) || 0} line(s); ${Number(q.parts) || 0} new catalog part(s); ${Number(q.skipped) || 0} refused row(s) skipped.` : undefined;
     return sendPage(c, bomPage(project, undefined, notice));
   });
 

@@ -7,7 +7,7 @@ import { evaluate } from '../../core/evaluate';
 import { withKindDefaults } from '../../core/new-project';
 import { loadProject } from '../../db/projects';
 import { num, pct, text, choice, type FieldErrors } from '../form';
-import { projectEdit } from '../edit';
+import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { Layout, ProjectCrumb } from '../../../views/layout';
@@ -67,7 +67,7 @@ export function overviewRoutes(deps: Deps) {
   app.get('/projects/:id', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));
     if (!project) return c.notFound();
-    return sendPage(c, overviewPage(project));
+    return sendPage(c, overviewPage(project, undefined, doneNotice(c)));
   });
 
   app.post(

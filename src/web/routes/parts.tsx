@@ -3,7 +3,7 @@ import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Offer, Part, Project, Supplier } from '../../core/model';
 import { loadProject } from '../../db/projects';
-import { projectEdit, type ChangeResult } from '../edit';
+import { projectEdit, doneNotice, type ChangeResult } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { newId } from '../ids';
@@ -45,8 +45,7 @@ export function partsRoutes(deps: Deps) {
   app.get('/projects/:id/parts', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));
     if (!project) return c.notFound();
-    const done = c.req.query('done') === 'deleted' ? 'Deleted.' : undefined;
-    return sendPage(c, partsPage(project, undefined, done, c.req.query('open')));
+    return sendPage(c, partsPage(project, undefined, doneNotice(c), c.req.query('open')));
   });
 
   app.post('/projects/:id/costing', projectEdit(deps, { ...common, form: 'costing', schema: F.costingSchema,

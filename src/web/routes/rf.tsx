@@ -5,7 +5,7 @@ import type { Project } from '../../core/model';
 import { evaluate } from '../../core/evaluate';
 import { loadProject } from '../../db/projects';
 import { num, pct, choice, checkbox } from '../form';
-import { projectEdit } from '../edit';
+import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { Layout } from '../../../views/layout';
@@ -35,7 +35,7 @@ export function rfRoutes(deps: Deps) {
   app.get('/projects/:id/rf', async (c) => {
     const p = await loadProject(deps.database.db, c.req.param('id'));
     if (!p) return c.notFound();
-    return sendPage(c, page(p));
+    return sendPage(c, page(p, undefined, doneNotice(c)));
   });
   app.post(
     '/projects/:id/rf/settings',

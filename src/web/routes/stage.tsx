@@ -6,7 +6,7 @@ import { MODES } from '../../core/model';
 import { withKindDefaults } from '../../core/new-project';
 import { loadProject, updateProject, VersionConflict } from '../../db/projects';
 import { num, parseForm, type FieldErrors } from '../form';
-import { projectEdit, type ChangeResult } from '../edit';
+import { projectEdit, doneNotice, type ChangeResult } from '../edit';
 import { sendPage, formValues } from '../render';
 import type { Deps } from '../deps';
 import { stageSchema, paSchema, toPa, lpfSchema, toLpf, relaySchema, toRelay } from '../stage-forms';
@@ -98,7 +98,7 @@ export function stageRoutes(deps: Deps) {
   app.get('/projects/:id/stages/:sid', async (c) => {
     const p = await loadProject(deps.database.db, c.req.param('id'));
     if (!p || !p.stages.some((s) => s.id === sid(c))) return c.notFound();
-    return sendPage(c, page(p, c)());
+    return sendPage(c, page(p, c)(undefined, doneNotice(c)));
   });
 
   app.post(

@@ -5,7 +5,7 @@ import type { Project, Rail } from '../../core/model';
 import { evaluate } from '../../core/evaluate';
 import { loadProject } from '../../db/projects';
 import { parseForm } from '../form';
-import { projectEdit, type ChangeResult } from '../edit';
+import { projectEdit, doneNotice, type ChangeResult } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { newId } from '../ids';
@@ -115,8 +115,7 @@ export function supplyRoutes(deps: Deps) {
   app.get('/projects/:id/supply', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));
     if (!project) return c.notFound();
-    const done = c.req.query('done') === 'deleted' ? 'Deleted.' : undefined;
-    return sendPage(c, supplyPage(project, undefined, done, c.req.query('open')));
+    return sendPage(c, supplyPage(project, undefined, doneNotice(c), c.req.query('open')));
   });
 
   // ------------------------------------------------------------ transformers and windings
