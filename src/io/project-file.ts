@@ -296,7 +296,8 @@ export function checkReferences(p: Project): string[] {
 export function parseProjectFile(textIn: string): ProjectFileResult {
   let json: unknown;
   try {
-    json = JSON.parse(textIn);
+    // a byte-order mark (some editors on Windows save one) is not part of the JSON
+    json = JSON.parse(textIn.replace(/^\uFEFF/, ''));
   } catch (e) {
     return { ok: false, errors: [`The file is not valid JSON: ${(e as Error).message}`] };
   }

@@ -122,3 +122,16 @@ describe('import cross-references', () => {
     expect((await listProjects(database.db)).length).toBe(2);
   });
 });
+
+describe('import file encodings', () => {
+  it('a file saved with a byte-order mark imports like one without', async () => {
+    const { app, get, database } = await demoApp();
+    const exported = await (await get(`/projects/${ID}/export.json`)).text();
+    const res = await upload(app, `\uFEFF${exported}`);
+    expect(res.status).toBe(303);
+    expect((await listProjects(database.db)).length).toBe(3);
+    // the CLI reads files with readFileSync(..., 'utf8'), which keeps the mark: the parser must skip it
+    const { parseProjectFile } = await import('../../src/io/project-file');
+    expect(parseProjectFile(`\uFEFF${exported}`).ok).toBe(true);
+  });
+});
