@@ -97,6 +97,9 @@ function computedLoads(project: Project, paRailV: Record<string, number>): Compu
 const SETTLED_V = 0.005;
 const MAX_PASSES = 6;
 
+/** Every voltage in `next` within SETTLED_V of the one before. */
+const close = (next: Record<string, number>, prev: Record<string, number>) => Object.keys(next).every((id) => Math.abs(next[id] - (prev[id] ?? 0)) < SETTLED_V);
+
 const railOutputs = (b: BudgetReport): Record<string, PerMode> => Object.fromEntries(b.rails.map((r) => [r.railId, r.outputA]));
 
 /**
@@ -116,35 +119,29 @@ function lowestInputV(project: Project, supply: SupplyReport | null): Record<str
 }
 
 export function evaluate(project: Project, options: EvaluateOptions = {}): EvaluationReport {
-  // The PA current depends on its rail voltage and the rail voltage on the PA current: iterate to a fixed
-  // point, starting from the budget's nominal voltage. The map is a strong contraction (a volt more on the
-  // rail changes the current by tens of mA, which moves the trough by tens of mV), so it settles in 2-4 passes.
+  // The PA current depends on its rail voltage and the rail voltage on the PA current: iterate to a fixed point,
+  // starting from the budget's nominal voltage. Each pass runs the supply design once, with the PA at its
+  // nominal key-down trough (headroom, budget) and, for the high-mains heating corners, at its high-mains rail:
+  // a PA of fixed load draws more current there (I ~ V; load line P = k V^2 / R, REFERENCE-VALUES §8.1).
+  // The map is a strong contraction (a volt more on the rail moves the current by tens of mA, which moves the
+  // trough by tens of mV), so it settles in 2-4 passes.
   let paRailV = paRailVoltages(project, computeBudget(project), null);
-  let budget = computeBudget(project, computedLoads(project, paRailV));
-  let supply = project.supply.rails.length ? evaluateSupply(project, railOutputs(budget)) : null;
+  let hotV: Record<string, number> = {};
   let lowV: Record<string, number> = {};
-  for (let pass = 0; supply && pass < MAX_PASSES; pass++) {
+  let budget = computeBudget(project, computedLoads(project, paRailV));
+  let supply: SupplyReport | null = null;
+  let corners = paRailCorners(project, null);
+  for (let pass = 0; project.supply.rails.length && pass < MAX_PASSES; pass++) {
+    budget = computeBudget(project, computedLoads(project, paRailV), lowV);
+    const budgetHigh = computeBudget(project, computedLoads(project, { ...paRailV, ...hotV }), lowV);
+    supply = evaluateSupply(project, railOutputs(budget), { highMainsOutputA: railOutputs(budgetHigh) });
     const next = paRailVoltages(project, budget, supply);
     const nextLow = lowestInputV(project, supply);
-    const settled = Object.keys(next).every((id) => Math.abs(next[id] - (paRailV[id] ?? 0)) < SETTLED_V)
-      && Object.keys(nextLow).every((id) => Math.abs(nextLow[id] - (lowV[id] ?? 0)) < SETTLED_V);
+    corners = paRailCorners(project, supply);
+    const settled = close(next, paRailV) && close(nextLow, lowV) && close(corners.hotV, hotV);
     paRailV = next;
     lowV = nextLow;
-    if (settled) break;
-    budget = computeBudget(project, computedLoads(project, paRailV), lowV);
-    supply = evaluateSupply(project, railOutputs(budget));
-  }
-  // Heating corner: at high mains a PA of fixed load draws more current (I ~ V); the supply's high-mains corners
-  // (transformer, winding, reservoir ripple current, fuse) use the budget with the PA at its high-mains key-down rail.
-  // Source: load line P = k V^2 / R (REFERENCE-VALUES §8.1), so I_dc = P / (eta V) grows in proportion to V.
-  let corners = paRailCorners(project, supply);
-  // The hot rail voltage and the PA current settle together, as for the nominal pass above.
-  for (let pass = 0; supply && Object.keys(corners.hotV).length > 0 && pass < MAX_PASSES; pass++) {
-    const budgetHigh = computeBudget(project, computedLoads(project, { ...paRailV, ...corners.hotV }), lowV);
-    supply = evaluateSupply(project, railOutputs(budget), { highMainsOutputA: railOutputs(budgetHigh) });
-    const next = paRailCorners(project, supply);
-    const settled = Object.keys(next.hotV).every((id) => Math.abs(next.hotV[id] - (corners.hotV[id] ?? 0)) < SETTLED_V);
-    corners = next;
+    hotV = corners.hotV;
     if (settled) break;
   }
   const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
