@@ -46,7 +46,7 @@ function supplyLines(report: EvaluationReport): string[] {
     if (r.kind === 'rectified') {
       const c = r.corners.find((x) => x.id === r.worstVoltageCornerId);
       const fuse = r.fuse.ratedA !== null ? `${r.fuse.characteristic}${formatValue(r.fuse.ratedA, 'A')}` : 'beyond the series';
-      out.push(`  ${r.railName}: trough ${formatValue(c?.troughV, 'V')} (needs ${formatValue(r.requiredMinV, 'V')}), ripple ${formatValue(c?.ripplePpV, 'V')} p-p, reservoir >= ${formatValue(r.reservoir.recommendedRatedV, 'V')} rated, rail fuse ${fuse}`);
+      out.push(`  ${r.railName}: trough ${formatValue(c?.troughV, 'V')} (${r.requiredMinV > 0 ? `needs ${formatValue(r.requiredMinV, 'V')}` : 'no regulator fed, no minimum stated'}), ripple ${formatValue(c?.ripplePpV, 'V')} p-p, reservoir >= ${formatValue(r.reservoir.recommendedRatedV, 'V')} rated, rail fuse ${fuse}`);
     } else if (r.kind === 'regulated') {
       const tj = r.thermal?.junctionC != null ? `, junction ${formatValue(r.thermal.junctionC, '°C')}` : '';
       out.push(`  ${r.railName}: ${formatValue(r.outputV, 'V')}, ${formatValue(r.thermalDissipationW, 'W')} in CW use${tj}`);
