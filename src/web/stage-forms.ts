@@ -125,6 +125,8 @@ export const lpfSchema = z
     else if (d.order < 3 || d.order > 9) ctx.addIssue({ code: 'custom', path: ['order'], message: `Order must be 3, 5, 7 or 9; you entered ${d.order}` });
     if (d.response === 'chebyshev' && (d.ripple < 0.01 || d.ripple > 0.5))
       ctx.addIssue({ code: 'custom', path: ['ripple'], message: `Chebyshev ripple must be between 0.01 and 0.5 dB (more ripple means poor input match); you entered ${d.ripple} dB` });
+    // a Butterworth design ignores the ripple, but it is kept as typed for a later switch to Chebyshev
+    else if (d.ripple > 0.5) ctx.addIssue({ code: 'custom', path: ['ripple'], message: `Ripple must be at most 0.5 dB (a Butterworth filter does not use it; leave it or enter 0); you entered ${d.ripple} dB` });
     if (d.coreAl <= 0) ctx.addIssue({ code: 'custom', path: ['coreAl'], message: 'Core AL must be a positive inductance per turn squared, e.g. 4.9n (4.9 nH/t²)' });
   });
 
@@ -151,7 +153,7 @@ export function lpfValues(p: LpfParams): Record<string, string> {
 export function toLpf(d: z.output<typeof lpfSchema>): LpfParams {
   return {
     response: d.response,
-    rippleDb: d.response === 'butterworth' ? 0 : d.ripple,
+    rippleDb: d.ripple,
     order: d.order,
     form: d.layout,
     cutoffHz: d.cutoff,

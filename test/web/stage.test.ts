@@ -113,3 +113,18 @@ describe('saving without JavaScript', () => {
     expect(withDone('/projects/x', 'saved')).toBe('/projects/x?done=saved');
   });
 });
+
+describe('filter ripple with a Butterworth response', () => {
+  it('is kept as typed (the design ignores it), so switching back to Chebyshev keeps it; above 0.5 dB it is refused', async () => {
+    const { post, database } = await demoApp();
+    const save = (change: Record<string, string>, version: number) => post(`/projects/${ID}/stages/st-lpf/lpf`, { ...lpfForm(), ...change, version: String(version) });
+    expect((await save({ response: 'butterworth', ripple: '0.2' }, 1)).status).toBe(303);
+    const lpf = (await loadProject(database.db, ID))!.stages.find((s) => s.id === 'st-lpf')!.lpf!;
+    expect(lpf.response).toBe('butterworth');
+    expect(lpf.rippleDb).toBe(0.2);
+    expect(lpfValues(lpf).ripple).toBe('0.2');
+    const refused = await save({ response: 'butterworth', ripple: '3' }, 2);
+    expect(refused.status).toBe(422);
+    expect(await refused.text()).toContain('Ripple must be at most 0.5 dB');
+  });
+});
