@@ -97,8 +97,18 @@ function fail(message: string): never {
 
 async function withDb<T>(fn: (db: import('./db/client').Database) => Promise<T>): Promise<T> {
   const { openDatabase } = await import('./db/client');
-  const env = readEnv(process.env);
-  const database = await openDatabase(env.databaseUrl, env.databaseAuthToken);
+  let env: ReturnType<typeof readEnv>;
+  try {
+    env = readEnv(process.env);
+  } catch (e) {
+    fail((e as Error).message);
+  }
+  let database: import('./db/client').Database;
+  try {
+    database = await openDatabase(env!.databaseUrl, env!.databaseAuthToken);
+  } catch (e) {
+    fail(`Cannot open the database ${env!.databaseUrl} (DATABASE_URL): ${(e as Error).message}`);
+  }
   try {
     return await fn(database);
   } finally {

@@ -6,7 +6,14 @@ import { countProjects } from './db/projects';
 import { seedDemo } from '../seed-demo/index';
 import { buildApp } from './app';
 
-const env = readEnv(process.env);
+const env = (() => {
+  try {
+    return readEnv(process.env);
+  } catch (e) {
+    console.error(`${(e as Error).message}. Nothing was started.`);
+    process.exit(2);
+  }
+})();
 if (!isLoopback(env.host) && !env.accessSecret) {
   console.error(
     `Refusing to listen on ${env.host}: anyone on that network could read and change the projects. ` +
@@ -14,7 +21,10 @@ if (!isLoopback(env.host) && !env.accessSecret) {
   );
   process.exit(2);
 }
-const database = await openDatabase(env.databaseUrl, env.databaseAuthToken);
+const database = await openDatabase(env.databaseUrl, env.databaseAuthToken).catch((e: Error) => {
+  console.error(`Cannot open the database ${env.databaseUrl} (DATABASE_URL): ${e.message}`);
+  process.exit(2);
+});
 if (env.loadDemo && (await countProjects(database.db)) === 0) {
   const names = await seedDemo(database, new Date().toISOString());
   if (names.length) console.log(`Loaded the demo projects: ${names.join('; ')}`);

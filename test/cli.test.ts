@@ -94,6 +94,16 @@ describe('command line: bad arguments are refused with a message', () => {
     expect(r.stdout).toBe('');
   });
 
+  it('a bad DATABASE_URL or PORT is a message, not a stack trace', () => {
+    const db = cli(['list'], { DATABASE_URL: 'nosuchscheme://x' });
+    expect(db.status).toBe(2);
+    expect(db.stderr).toContain('Cannot open the database nosuchscheme://x (DATABASE_URL)');
+    expect(db.stderr).not.toMatch(/\n\s+at /);
+    const port = cli(['list'], { PORT: 'abc' });
+    expect(port.status).toBe(2);
+    expect(port.stderr).toContain('Bad environment: PORT');
+  });
+
   it('an output path that cannot be written is a message, not a stack trace', () => {
     const r = cli(['csv', file, '--out', join(dir, 'no-such-folder', 'parts.csv')]);
     expect(r.status).toBe(2);
