@@ -128,3 +128,23 @@ describe('filter ripple with a Butterworth response', () => {
     expect(await refused.text()).toContain('Ripple must be at most 0.5 dB');
   });
 });
+
+describe('changing a stage kind', () => {
+  it('a final changed to a driver drops its PA data, so no hidden PA current stays in the budget', async () => {
+    const { get, post, database } = await demoApp();
+    const { stageValues } = await import('../../src/web/stage-forms');
+    const { evaluate } = await import('../../src/core/evaluate');
+    const p = (await loadProject(database.db, ID))!;
+    const pa = p.stages.find((s) => s.kind === 'final' && s.pa)!;
+    const computed = (q: typeof p) => evaluate(q).budget.rails.flatMap((r) => r.loads).filter((l) => l.stageId === pa.id && l.computed);
+    expect(computed(p).length).toBeGreaterThan(0); // the PA key-down current is computed while it is a final
+    const res = await post(`/projects/${ID}/stages/${pa.id}`, { ...stageValues(pa), kind: 'driver', version: String(p.version) });
+    expect(res.status).toBe(303);
+    const after = (await loadProject(database.db, ID))!;
+    const stage = after.stages.find((s) => s.id === pa.id)!;
+    expect(stage.kind).toBe('driver');
+    expect(stage.pa).toBeUndefined();
+    expect(computed(after)).toEqual([]);
+    expect(await (await get(`/projects/${ID}/stages/${pa.id}`)).text()).not.toContain('/pa"');
+  });
+});

@@ -50,7 +50,7 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
       <FormShell project={project} stage={stage} path="" title={`${stage.name} (${STAGE_KIND_LABELS[stage.kind]})`} state={general} submit="Save stage">
         <div class="row">
           <Field name="name" label="Name" state={general} size={36} />
-          <Select name="kind" label="Kind" state={general} options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])} />
+          <Select name="kind" label="Kind" state={general} options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])} hint="A new kind starts from typical data; the old kind's PA, filter or relay data is dropped" />
           <Field name="dissipation" label="Heat dissipated (empty = rail V × key-down current)" unit="W" state={general} size={8} />
         </div>
         <label class="field wide">

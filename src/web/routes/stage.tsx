@@ -26,6 +26,13 @@ function withStage(p: Project, id: string, f: (s: Stage) => Stage | { errors: Fi
   return { ...p, stages: p.stages.map((s) => (s.id === id ? next : s)) };
 }
 
+/** The stage without the data of other kinds: a stage changed from final to driver no longer carries (and is no
+ *  longer evaluated with) hidden PA data; the new kind gets its starting data from withKindDefaults. */
+function ownData(s: Stage, kind: Stage['kind']): Stage {
+  const { pa, lpf, relay, ...rest } = s;
+  return { ...rest, ...(kind === 'final' && pa ? { pa } : {}), ...(kind === 'lpf' && lpf ? { lpf } : {}), ...(kind === 'tr' && relay ? { relay } : {}) };
+}
+
 function parseLoads(p: Project, values: Record<string, string>): { loads: StageLoad[] } | { errors: FieldErrors } {
   const errors: FieldErrors = {};
   const loads: StageLoad[] = [];
@@ -109,7 +116,7 @@ export function stageRoutes(deps: Deps) {
       const errors = { ...(general.ok ? {} : general.errors), ...('errors' in loads ? loads.errors : {}) };
       if (!general.ok || 'errors' in loads) return { errors };
       const d = general.data;
-      return withStage(p, sid(c), (s) => withKindDefaults(p, { ...s, name: d.name, kind: d.kind, notes: d.notes, dissipationW: d.dissipation, loads: loads.loads }));
+      return withStage(p, sid(c), (s) => withKindDefaults(p, { ...ownData(s, d.kind), name: d.name, kind: d.kind, notes: d.notes, dissipationW: d.dissipation, loads: loads.loads }));
     }),
   );
 
