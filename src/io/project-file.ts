@@ -149,6 +149,11 @@ const stage = z.object({
   pa: pa.optional(),
   lpf: lpf.optional(),
   relay: relay.optional(),
+}).superRefine((s, ctx) => {
+  // each kind carries only its own data (the database keeps one set per stage; a driver must not carry a hidden PA)
+  const own = { pa: 'final', lpf: 'lpf', relay: 'tr' } as const;
+  for (const key of ['pa', 'lpf', 'relay'] as const)
+    if (s[key] !== undefined && s.kind !== own[key]) ctx.addIssue({ code: 'custom', path: [key], message: `only a stage of kind "${own[key]}" has ${key} data; this stage is "${s.kind}"` });
 });
 
 const money = z.number().int().min(0).max(1e12);

@@ -24,6 +24,7 @@ describe('import accepts only what the forms accept', () => {
     ['a final with neither saturation voltage nor Rds(on)', (p: any) => Object.assign(p.stages.find((s: any) => s.pa).pa, { saturationV: null, rdsOnOhm: null }), /pa\.saturationV: give saturationV or rdsOnOhm/],
     ['an empty part category', (p: any) => (p.parts[0].category = ''), /parts\[0\]\.category/],
     ['an offer without price breaks', (p: any) => (p.parts.find((x: any) => x.offers.length).offers[0].breaks = []), /offers\[0\]\.breaks/],
+    ['PA data on a driver stage', (p: any) => (p.stages.find((s: any) => s.pa).kind = 'driver'), /stages\[\d\]\.pa: only a stage of kind &quot;final&quot; has pa data/],
     ['a parts-list line of quantity 0', (p: any) => (p.bom[0].qtyPerRig = 0), /bom\[0\]\.qtyPerRig/],
   ])('%s is refused with its place, nothing saved', async (_label, spoil, message) => {
     const { app, get, database } = await demoApp();
