@@ -10,6 +10,7 @@ import { validateRfInputs, validateRfSettings } from './lpf-validate';
 import { evaluatePa } from './pa';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
+import { fieldLabel } from './field-labels';
 
 export interface RfContext {
   /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
@@ -36,7 +37,7 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   if (!d.ok) {
     return {
       res: { errors: d.errors, design: null, analysis: null, monteCarlo: null, capacitorPeakV, filterLossW: 0 },
-      findings: d.errors.map((e) => ({ severity: 'fail', rule: 'lpf.input', subject: `${stage.name}: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+      findings: d.errors.map((e) => ({ severity: 'fail', rule: 'lpf.input', subject: `${stage.name}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
     };
   }
   const design = d.value;

@@ -2,6 +2,7 @@
 import type { Finding } from '../findings';
 import type { RfSettings } from '../model';
 import { validateRfSettings } from './lpf-validate';
+import { fieldLabel } from './field-labels';
 
 export const EXPOSURE_CAUTION =
   'This is a far-field estimate for planning only. Local rules and your licence conditions govern RF exposure; ' +
@@ -69,7 +70,7 @@ export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: Rf
       limitControlledWPerM2: null, limitGeneralWPerM2: null, controlledDistanceM: null, generalDistanceM: null, nearFieldDistanceM: 0, farFieldValid: false,
       exemptionThresholdW: null, exempt: null, exemptBeyondM: null, caution: EXPOSURE_CAUTION,
       findings: [
-        ...bad.map((e): Finding => ({ severity: 'fail', rule: 'exposure.input', subject: `RF exposure: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+        ...bad.map((e): Finding => ({ severity: 'fail', rule: 'exposure.input', subject: `RF exposure: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
         { severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'Local regulations and licence conditions', message: EXPOSURE_CAUTION },
       ],
     };

@@ -4,6 +4,7 @@ import type { PaParams, Project } from '../model';
 import { validatePaParams, validateThermalInputs } from './lpf-validate';
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
+import { fieldLabel } from './field-labels';
 
 /** Drain efficiency used when none is entered. Common practice, no published source (ref §8.2 ranges). */
 export const DEFAULT_EFFICIENCY: Record<PaParams['amplifierClass'], number> = { B: 0.6, C: 0.7, D: 0.8, E: 0.85 };
@@ -100,7 +101,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   if (errors.length === 0 && railV <= vsat0) errors.push({ field: 'saturationV', message: 'Saturation drop is not below the supply voltage.' });
   if (errors.length > 0) {
     return zeroResult(Number.isFinite(railV) ? railV : 0, errors.map((e) => ({
-      severity: 'fail', rule: 'pa.input', subject: `${subject}: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message,
+      severity: 'fail', rule: 'pa.input', subject: `${subject}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message,
     })));
   }
   const findings: Finding[] = [];

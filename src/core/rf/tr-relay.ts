@@ -3,6 +3,7 @@ import type { Finding } from '../findings';
 import type { Mode, PerMode, RelayParams, Stage } from '../model';
 import { MODES } from '../model';
 import { validateRelayParams } from './lpf-validate';
+import { fieldLabel } from './field-labels';
 
 export interface RelayResult {
   /** Net power through the relay, W, and the worst SWR assumed. */
@@ -57,7 +58,7 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
     return {
       powerW: 0, swr: 1, rfRmsV: 0, rfPeakV: 0, rfRmsA: 0, rfPeakA: 0, peakWithHarmonicsV: null, ratedPeakV: 0, ratedIsRf: false,
       receiverPowerW: 0, receiverPowerDbm: -999, dotS: 0, hotSwitchMarginS: 0,
-      findings: errors.map((e) => ({ severity: 'fail', rule: 'relay.input', subject: `${s}: ${e.field}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+      findings: errors.map((e) => ({ severity: 'fail', rule: 'relay.input', subject: `${s}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
     };
   }
   const swr = Number.isFinite(inp.swr) ? Math.min(Math.max(1, inp.swr), 100) : 1;
