@@ -59,6 +59,11 @@ export function parseValue(input: string, unit: string): ParseResult {
   const expected = `a number such as ${example(unit)}`;
   const raw = String(input ?? '').trim().replace(/\s+/g, ' ');
   if (raw === '') return { ok: false, message: `is empty: enter ${expected}` };
+  // "1,500" is 1.5 if the comma is a decimal point but 1500 to many readers: ask instead of guessing
+  const grouped = /(?:^|[^\d.,])([1-9]\d{0,2}),(\d{3})(?![\d.,])/.exec(raw);
+  if (grouped) {
+    return { ok: false, message: `"${raw}" is ambiguous (a comma is read as the decimal point): write ${grouped[1]}${grouped[2]} or ${`${grouped[1]}.${grouped[2]}`.replace(/\.?0+$/, '')}` };
+  }
   let text = raw.replace(',', '.');
   if (unit === '%') {
     text = text.replace(/%$/, '').trim();

@@ -17,12 +17,6 @@ export interface NumOpts {
 /** Required engineering value in `unit` (SI result), e.g. num('A', { label: 'Key-down current', min: 0, max: 100 }). */
 export function num(unit: string, o: NumOpts) {
   return z.string({ message: `${o.label}: missing` }).transform((text, ctx) => {
-    // "1,500" is 1.5 to the parser (comma = decimal point) but 1500 to many readers: ask instead of guessing
-    const grouped = /(?:^|[^\d.,])([1-9]\d{0,2}),(\d{3})(?![\d.,])/.exec(text);
-    if (grouped) {
-      ctx.addIssue({ code: 'custom', message: `${o.label}: "${text.trim()}" is ambiguous (a comma is read as the decimal point): write ${grouped[1]}${grouped[2]} or ${`${grouped[1]}.${grouped[2]}`.replace(/\.?0+$/, '')}` });
-      return z.NEVER;
-    }
     const r = parseValue(text, unit);
     if (!r.ok) {
       ctx.addIssue({ code: 'custom', message: `${o.label} ${r.message}` });

@@ -52,6 +52,13 @@ describe('SI prefixes with unit symbols', () => {
     expect(close(value(text, unit), expected)).toBe(true);
   });
 
+  it('refuses a grouping comma as ambiguous but keeps a decimal comma', () => {
+    const r = parseValue('1,500 W', 'W');
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toContain('write 1500 or 1.5');
+    expect(value('4,7 V', 'V')).toBeCloseTo(4.7, 12);
+  });
+
   it('refuses nonsense with a message naming the expected form', () => {
     for (const bad of ['abc', '', '1.2.3', '4k7k', 'MHz', '--1']) {
       const r = parseValue(bad, 'A');
