@@ -2,8 +2,8 @@
 // reordering stages, all through htmx against the real server on its own database.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { hasChromium, launchBrowser, artifactPath, CHROMIUM_PATH } from '../helpers/browser';
-import { startServer, type RunningServer } from '../helpers/server';
+import { hasChromium, openSession, artifactPath, CHROMIUM_PATH, type BrowserSession } from '../helpers/browser';
+import type { RunningServer } from '../helpers/server';
 import { formByAction } from '../helpers/html';
 
 if (!hasChromium) console.warn(`Browser tests skipped: ${CHROMIUM_PATH} is missing (apt-get install chromium).`);
@@ -11,28 +11,19 @@ if (!hasChromium) console.warn(`Browser tests skipped: ${CHROMIUM_PATH} is missi
 const DEMO = '/projects/demo-club-30m';
 
 describe.skipIf(!hasChromium)('overview in the browser', () => {
+  let session: BrowserSession;
   let server: RunningServer;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
   let page: Page;
-  const problems: string[] = [];
+  let problems: string[];
 
   beforeAll(async () => {
-    server = await startServer();
-    browser = await launchBrowser();
-    page = await browser.context.newPage();
-    // CSP violations and script errors show up here: htmx must run under the page's policy.
-    page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
-    // (a refused form answers 422 on purpose; Chromium logs that as a failed resource load)
-    page.on('console', (m) => m.type() === 'error' && !/status of 422/.test(m.text()) && problems.push(`console: ${m.text()}`));
+    session = await openSession();
+    ({ server, page, problems } = session);
     await page.goto(server.url + DEMO);
     await page.waitForFunction(() => 'htmx' in window);
   }, 120_000);
 
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-    server?.cleanup();
-  });
+  afterAll(() => session?.close());
 
   const markPage = () => page.evaluate(() => ((window as unknown as { __rigwrightMarker: string }).__rigwrightMarker = 'still-here'));
   const marker = () => page.evaluate(() => (window as unknown as { __rigwrightMarker?: string }).__rigwrightMarker);

@@ -1,12 +1,11 @@
 // The section pages in a real browser: stage (filter), RF checks, parts catalog and parts list edit in
 // place (no full reload), refuse bad input beside the field, and the parts list exports CSV.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { tmpdir } from 'node:os';
 import type { Page } from 'playwright-core';
-import { hasChromium, launchBrowser, artifactPath, CHROMIUM_PATH } from '../helpers/browser';
-import { startServer, type RunningServer } from '../helpers/server';
+import { hasChromium, openSession, artifactPath, CHROMIUM_PATH, type BrowserSession } from '../helpers/browser';
+import type { RunningServer } from '../helpers/server';
 import { parseCsv } from '../../src/core/csv/parse';
 
 if (!hasChromium) console.warn(`Browser tests skipped: ${CHROMIUM_PATH} is missing (apt-get install chromium).`);
@@ -14,27 +13,19 @@ if (!hasChromium) console.warn(`Browser tests skipped: ${CHROMIUM_PATH} is missi
 const DEMO = '/projects/demo-club-30m';
 
 describe.skipIf(!hasChromium)('section pages in the browser', () => {
+  let session: BrowserSession;
   let server: RunningServer;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
   let page: Page;
   let dl: string;
-  const problems: string[] = [];
+  let problems: string[];
 
   beforeAll(async () => {
-    server = await startServer();
-    browser = await launchBrowser();
-    page = await browser.context.newPage();
-    page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
-    page.on('console', (m) => m.type() === 'error' && !/status of 4(09|22)/.test(m.text()) && problems.push(`console: ${m.text()}`));
-    dl = mkdtempSync(join(tmpdir(), 'rigwright-dl-'));
+    session = await openSession();
+    ({ server, page, problems } = session);
+    dl = session.downloads;
   }, 120_000);
 
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-    server?.cleanup();
-    if (dl) rmSync(dl, { recursive: true, force: true });
-  });
+  afterAll(() => session?.close());
 
   /** Open a page (skipping the test when the route has not landed) and mark the window. */
   async function open(path: string, ctx: { skip: (m: string) => void }) {

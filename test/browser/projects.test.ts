@@ -1,40 +1,31 @@
 // Project list flows in a real browser: export a project as JSON (a real download) and import it back
 // as a new project; the supply page edits in place; PDF and CSV downloads once those pages exist.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import { join } from 'node:path';
-import { tmpdir } from 'node:os';
 import type { Page } from 'playwright-core';
-import { hasChromium, launchBrowser, artifactPath, CHROMIUM_PATH } from '../helpers/browser';
-import { startServer, type RunningServer } from '../helpers/server';
+import { hasChromium, openSession, artifactPath, CHROMIUM_PATH, type BrowserSession } from '../helpers/browser';
+import type { RunningServer } from '../helpers/server';
 
 if (!hasChromium) console.warn(`Browser tests skipped: ${CHROMIUM_PATH} is missing (apt-get install chromium).`);
 
 const DEMO = 'demo-club-30m';
 
 describe.skipIf(!hasChromium)('project list, downloads and other pages in the browser', () => {
+  let session: BrowserSession;
   let server: RunningServer;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
   let page: Page;
   let dl: string;
-  const problems: string[] = [];
+  let problems: string[];
 
   beforeAll(async () => {
-    server = await startServer();
-    browser = await launchBrowser();
-    page = await browser.context.newPage();
-    page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
-    page.on('console', (m) => m.type() === 'error' && !/status of 4(09|22)/.test(m.text()) && problems.push(`console: ${m.text()}`));
-    dl = mkdtempSync(join(tmpdir(), 'rigwright-dl-'));
+    session = await openSession();
+    ({ server, page, problems } = session);
+    dl = session.downloads;
   }, 120_000);
 
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-    server?.cleanup();
-    if (dl) rmSync(dl, { recursive: true, force: true });
-  });
+  afterAll(() => session?.close());
 
   const projectRows = () => page.locator('table.projects tbody tr').count();
   const markPage = () => page.evaluate(() => ((window as unknown as { __m: string }).__m = 'kept'));

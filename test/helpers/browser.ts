@@ -2,8 +2,8 @@
 import { existsSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type BrowserContext } from 'playwright-core';
-import { REPO_ROOT } from './server';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { REPO_ROOT, startServer, type RunningServer } from './server';
 
 export const CHROMIUM_PATH = '/usr/bin/chromium';
 export const hasChromium = existsSync(CHROMIUM_PATH);
@@ -32,4 +32,43 @@ export async function launchBrowser(): Promise<{ context: BrowserContext; close:
 export function artifactPath(name: string): string {
   mkdirSync(ARTIFACTS, { recursive: true });
   return join(ARTIFACTS, name);
+}
+
+export interface BrowserSession {
+  server: RunningServer;
+  page: Page;
+  /** script errors, CSP violations and console errors other than deliberate 409/422 answers */
+  problems: string[];
+  /** a temp folder for downloads */
+  downloads: string;
+  /** set a marker on window; it survives an htmx swap but not a full page load */
+  markPage: () => Promise<unknown>;
+  marker: () => Promise<string | undefined>;
+  close: () => Promise<void>;
+}
+
+/** A real server on its own database and one browser page watching for script problems. */
+export async function openSession(): Promise<BrowserSession> {
+  const server = await startServer();
+  const browser = await launchBrowser();
+  const page = await browser.context.newPage();
+  const problems: string[] = [];
+  page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
+  // a refused form answers 409/422 on purpose; Chromium logs that as a failed resource load
+  page.on('console', (m) => m.type() === 'error' && !/status of 4(09|22)/.test(m.text()) && problems.push(`console: ${m.text()}`));
+  const downloads = mkdtempSync(join(tmpdir(), 'rigwright-dl-'));
+  return {
+    server,
+    page,
+    problems,
+    downloads,
+    markPage: () => page.evaluate(() => ((window as unknown as { __rigwrightMarker: string }).__rigwrightMarker = 'still-here')),
+    marker: () => page.evaluate(() => (window as unknown as { __rigwrightMarker?: string }).__rigwrightMarker),
+    close: async () => {
+      await browser.close();
+      await server.stop();
+      server.cleanup();
+      rmSync(downloads, { recursive: true, force: true });
+    },
+  };
 }
