@@ -36,14 +36,29 @@ function splitList(s: string, next: RegExp): string[] {
 
 // ------------------------------------------------------------ ratings: "va=70; ratedA=10; type=T"
 
+// One rating: key = "quoted text" (JSON string, may hold ; , or look like a number) or plain text up to the next
+// ";", newline or ", key=".
+const RATING = /([A-Za-z][\w.-]*)\s*=\s*("(?:[^"\\\n]|\\.)*"|(?:(?!,\s*[A-Za-z][\w.-]*\s*=)[^;\n])*)/y;
+
 export function parseRatings(s: string): { ok: true; ratings: Record<string, number | string> } | { ok: false; message: string } {
   const ratings: Record<string, number | string> = {};
-  for (const item of splitList(s, /\s*[A-Za-z][\w.-]*\s*=/)) {
-    const m = /^([A-Za-z][\w.-]*)\s*=\s*(.*)$/.exec(item);
-    if (!m) return { ok: false, message: `"${item}" is not key=value (e.g. voltageV=35)` };
-    const [, key, raw] = m;
+  const text = s.trim();
+  let i = 0;
+  while (i < text.length) {
+    i += /^[\s;,]*/.exec(text.slice(i))![0].length;
+    if (i >= text.length) break;
+    RATING.lastIndex = i;
+    const m = RATING.exec(text);
+    if (!m) return { ok: false, message: `"${text.slice(i).split(/[;\n]/)[0].trim()}" is not key=value (e.g. voltageV=35)` };
+    i = RATING.lastIndex;
+    const key = m[1];
+    const raw = m[2].trim();
     if (key in ratings) return { ok: false, message: `"${key}" is given twice` };
     if (raw === '') return { ok: false, message: `"${key}" has no value` };
+    if (raw.startsWith('"')) {
+      ratings[key] = JSON.parse(raw) as string;
+      continue;
+    }
     const n = parseValue(raw, '');
     ratings[key] = n.ok ? n.value : raw;
   }

@@ -5,6 +5,7 @@ import { demoApp } from '../helpers/app';
 import { loadProject } from '../../src/db/projects';
 import type { Project } from '../../src/core/model';
 import { parseBreaks, parseRatings, parseRates, moneyToCents } from '../../src/web/parts-forms';
+import { ratingsText } from '../../views/components/parts-part';
 
 const ID = 'demo-club-30m';
 let t: Awaited<ReturnType<typeof demoApp>>;
@@ -32,6 +33,9 @@ describe('catalog text parsing', () => {
       ratings: { voltageV: 35, rippleA: 2.4, capacitanceF: 0.0047, type: 'T', note: '5 × 20 mm, glass' },
     });
     expect(parseRatings('va 70').ok).toBe(false);
+    // text that would read as a number, or holds a separator, is quoted by the form and comes back unchanged
+    const ratings = { va: 70, code: '100n', note: 'a; b, c', quote: 'say "hi"', alHPerTurn2: 4.9e-9 };
+    expect(parseRatings(ratingsText(ratings))).toEqual({ ok: true, ratings });
     expect(parseRatings('a=1; a=2').ok).toBe(false);
   });
 

@@ -3,13 +3,17 @@ import type { FC } from 'hono/jsx';
 import type { Offer, Part, Project } from '../../src/core/model';
 import { FormErrors, type FieldState, Field } from './fields';
 import { stateFor, type Failed } from './failed';
+import { parseValue } from '../../src/core/units';
 import { Version, hx } from './supply-transformer';
 
 // Display text for model values (the inverse of src/web/parts-forms.ts parsing).
 export const ratingsText = (r: Record<string, number | string>) =>
   Object.entries(r)
-    .map(([k, v]) => `${k}=${v}`)
+    .map(([k, v]) => `${k}=${typeof v === 'string' && needsQuotes(v) ? JSON.stringify(v) : v}`)
     .join('; ');
+
+/** Text that would not come back as the same text unquoted: it reads as a number, or holds a separator. */
+const needsQuotes = (v: string) => v === '' || v !== v.trim() || /[;\n",]/.test(v) || parseValue(v, '').ok;
 export const centsText = (cents: number) => (cents / 100).toFixed(2);
 export const breaksText = (b: Offer['breaks']) => b.map((x) => `${x.minQty}: ${centsText(x.unitPriceCents)}`).join(', ');
 
