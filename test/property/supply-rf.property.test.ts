@@ -4,6 +4,7 @@
 //  - a higher filter order never lowers the stopband attenuation (prototypeLossDb; designLpf + ladder)
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
+import { propertyOptions } from '../helpers/property';
 import { simulateRectifier, type RectifierSimInput } from '../../src/core/power/rectifier-sim';
 import { simInputFor } from '../../src/core/power/rectified-rail';
 import { prototypeLossDb } from '../../src/core/rf/prototype';
@@ -48,7 +49,7 @@ describe('supply models', () => {
         checked.ripple++;
         expect(big.ripplePpV).toBeLessThanOrEqual(small.ripplePpV + toleranceV);
       }),
-      { seed: SEED, numRuns: 150 },
+      propertyOptions(SEED, 150),
     );
     expect(checked.ripple).toBeGreaterThanOrEqual(75);
   });
@@ -76,7 +77,7 @@ describe('supply models', () => {
           expect(hi.dcMeanV).toBeGreaterThanOrEqual(lo.dcMeanV - toleranceV);
         },
       ),
-      { seed: SEED, numRuns: 150 },
+      propertyOptions(SEED, 150),
     );
     expect(checked.mains).toBeGreaterThanOrEqual(75);
   });
@@ -94,7 +95,7 @@ describe('filter models', () => {
           expect(prototypeLossDb(response, order + 1, rippleDb, omega)).toBeGreaterThanOrEqual(prototypeLossDb(response, order, rippleDb, omega) - toleranceDb);
         },
       ),
-      { seed: SEED, numRuns: 2000 },
+      propertyOptions(SEED, 2000),
     );
   });
 
@@ -124,7 +125,7 @@ describe('filter models', () => {
           }
         },
       ),
-      { seed: SEED, numRuns: 300 },
+      propertyOptions(SEED, 300),
     );
   });
 });

@@ -2,6 +2,7 @@
 // (fast-check, fixed seed). The brute force shares only the per-offer quote and conversion
 // (checked separately against hand-worked examples) and enumerates plans independently.
 import fc from 'fast-check';
+import { propertyOptions } from '../../helpers/property';
 import { describe, expect, it } from 'vitest';
 import { costProject } from '../../../src/core/cost/cost-project';
 import { convertCents, rateFor } from '../../../src/core/cost/money';
@@ -83,7 +84,7 @@ describe('supplier choice: exact equals brute force (fast-check, seeded)', () =>
         expect(r.method).toBe('exact');
         expect(r.totals.buildCents).toBe(bruteForce(p));
       }),
-      { seed: SEED, numRuns: 300 },
+      propertyOptions(SEED, 300),
     );
   });
 
@@ -102,7 +103,7 @@ describe('supplier choice: exact equals brute force (fast-check, seeded)', () =>
           expect(exact.singleSupplier.extraCents).toBe(exact.singleSupplier.totalCents - exact.totals.buildCents);
         }
       }),
-      { seed: SEED + 1, numRuns: 300 },
+      propertyOptions(SEED + 1, 300),
     );
   });
 });

@@ -1,6 +1,7 @@
 // Writer and parser against RFC 4180 (IETF, 2005, §2) examples and the OWASP CSV-injection advice,
 // plus a seeded property round trip.
 import fc from 'fast-check';
+import { propertyOptions } from '../../helpers/property';
 import { describe, expect, it } from 'vitest';
 import { guessDelimiter, parseCsv } from '../../../src/core/csv/parse';
 import { neutraliseText, unneutraliseText, writeCsv } from '../../../src/core/csv/write';
@@ -69,7 +70,7 @@ describe('round trip (fast-check, seeded)', () => {
         expect(r.errors).toEqual([]);
         expect(r.records).toEqual(rows);
       }),
-      { seed: 4180, numRuns: 400 },
+      propertyOptions(4180, 400),
     );
   });
   it('with neutralisation, unneutralising the parsed text gives the original back', () => {
@@ -80,7 +81,7 @@ describe('round trip (fast-check, seeded)', () => {
         // And no written field starts with a trigger, quoted or not (OWASP).
         for (const row of r.records) for (const c of row) expect('=+-@\t\r'.includes(c[0] ?? 'x')).toBe(false);
       }),
-      { seed: 4181, numRuns: 400 },
+      propertyOptions(4181, 400),
     );
   });
 });

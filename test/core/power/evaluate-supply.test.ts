@@ -1,6 +1,7 @@
 // evaluateSupply on the demo projects and on random inputs: shape, JSON-safety, ordering, duty-weighted thermal load.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
+import { propertyOptions } from '../../helpers/property';
 import { evaluateSupply } from '../../../src/core/power/evaluate-supply';
 import { computeBudget } from '../../../src/core/budget';
 import { DEMO_PROJECTS } from '../../../seed-demo/index';
@@ -90,7 +91,7 @@ describe('random and absurd inputs never throw and never give NaN', () => {
         // the safety net in evaluateSupply must not have been needed
         expect(report.findings.filter((f) => f.rule === 'internal.non-finite')).toEqual([]);
       }),
-      { numRuns: 80, seed: 42 },
+      propertyOptions(42, 80),
     );
   });
   it('a project without mains reports its rectified rail as a fail', () => {

@@ -5,6 +5,7 @@ import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
 import { lineMaxima } from '../../../src/core/rf/tr-relay';
 import { lpfParams, paParams, project, relayParams } from './fixture';
 import { near, nonFinitePaths } from './helpers';
+import { propertyOptions } from '../../helpers/property';
 
 const RANK = { fail: 0, caution: 1, ok: 2 } as const;
 const sorted = (f: Finding[]) => f.every((x, i) => i === 0 || RANK[f[i - 1].severity] <= RANK[x.severity]);
@@ -49,7 +50,7 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
   });
 });
 
-describe('evaluateRf never produces NaN/Infinity or throws for odd inputs', () => {
+describe('evaluateRf never produces NaN/Infinity or throws for odd inputs (fast-check, seeded)', () => {
   const num = fc.oneof(fc.constant(0), fc.constant(-1), fc.constant(1e12), fc.double({ min: -10, max: 1e3, noNaN: true }), fc.constant(Number.NaN));
   it('random parameter corruption', () => {
     fc.assert(
@@ -68,7 +69,7 @@ describe('evaluateRf never produces NaN/Infinity or throws for odd inputs', () =
         expect(nonFinitePaths(r)).toEqual([]);
         expect(sorted(r.findings)).toBe(true);
       }),
-      { numRuns: 400 },
+      propertyOptions(20261202, 400),
     );
   });
   it('corrupted project, PA, relay and exposure settings', () => {
@@ -88,7 +89,7 @@ describe('evaluateRf never produces NaN/Infinity or throws for odd inputs', () =
         const r = evaluateRf(p, { paRailV: { pa: 13.8 } });
         expect(nonFinitePaths(r)).toEqual([]);
       }),
-      { numRuns: 400 },
+      propertyOptions(20261203, 400),
     );
   });
 });
