@@ -1,6 +1,7 @@
 // PA device heating: dissipation per device, heatsink needed, junction temperature with a fitted heatsink.
 import type { Finding } from '../findings';
 import type { PaParams } from '../model';
+import { quotient } from '../numeric';
 
 export interface PaThermal {
   /** Key-down dissipation of all devices (DC in - RF out + bias idle), W. */
@@ -11,7 +12,10 @@ export interface PaThermal {
   averagePerDeviceW: number;
   /** Junction temperature target, 0.8 x Tjmax, °C. */
   tjTargetC: number;
-  /** Largest heatsink-to-air resistance meeting the target for the duty-averaged load, K/W (null: none possible; 1e6 when nothing dissipates). */
+  /**
+   * Largest heatsink-to-air resistance meeting the target for the duty-averaged load, K/W (null: none possible;
+   * NO_HEATSINK_NEEDED_K_PER_W when the dissipation is below NEGLIGIBLE_DISSIPATION_W).
+   */
   thetaSaNeededAverageKPerW: number | null;
   /** Same for a continuous key-down (tune-up) carrier, K/W (null: none possible). */
   thetaSaNeededContinuousKPerW: number | null;
@@ -19,6 +23,12 @@ export interface PaThermal {
   tjAverageC: number | null;
   tjContinuousC: number | null;
 }
+
+/** Per-device dissipation below which no heatsink is needed, W. Common practice, no published source: 1 mW warms even a
+ * free-air small-signal package (about 200 K/W, from memory) by 0.2 K. Also the floor of the θsa quotient below. */
+export const NEGLIGIBLE_DISSIPATION_W = 1e-3;
+/** θsa reported when the dissipation is negligible: any heatsink, or none, will do, K/W. */
+export const NO_HEATSINK_NEEDED_K_PER_W = 1e6;
 
 const SRC = 'Series thermal path Tj = Ta + P(θjc + θcs + θsa); target 0.8 Tjmax (REFERENCE-VALUES §7)';
 
@@ -34,10 +44,12 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
   const tjTargetC = 0.8 * m.tjMaxC;
   const jc = m.thetaJcKPerW + m.thetaCsKPerW;
   // Source: REFERENCE-VALUES §7: θsa,max = (Tj,target - Ta)/P - θjc - θcs
+  // A subnormal p (from a rail of 1.5e-322 V) makes the quotient Infinity: below the floor no heatsink is needed.
   const need = (p: number): number | null => {
-    if (p <= 0) return 1e6;
-    const v = (tjTargetC - ambientC) / p - jc;
-    return v > 0 ? v : null;
+    if (p < NEGLIGIBLE_DISSIPATION_W) return tjTargetC > ambientC ? NO_HEATSINK_NEEDED_K_PER_W : null;
+    const perW = quotient(tjTargetC - ambientC, p, NEGLIGIBLE_DISSIPATION_W);
+    const v = perW === null ? null : perW - jc;
+    return v !== null && v > 0 ? v : null;
   };
   const thetaSaNeededAverageKPerW = need(average);
   const thetaSaNeededContinuousKPerW = need(perDevice);
@@ -46,7 +58,14 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
   const tjAverageC = sa === null ? null : ambientC + average * (jc + sa);
   const tjContinuousC = sa === null ? null : ambientC + perDevice * (jc + sa);
   const findings: Finding[] = [];
-  if (sa === null) {
+  if (sa === null && average < NEGLIGIBLE_DISSIPATION_W && thetaSaNeededAverageKPerW !== null) {
+    findings.push({
+      severity: thetaSaNeededContinuousKPerW === null ? 'caution' : 'ok', rule: 'pa.heatsink', subject: '',
+      value: average, limit: NEGLIGIBLE_DISSIPATION_W, unit: 'W', source: SRC,
+      message: `The devices dissipate almost nothing (under 1 mW each) in CW keying: no heatsink is needed` +
+        (thetaSaNeededContinuousKPerW === null ? '; no heatsink allows a continuous tune-up carrier.' : '.'),
+    });
+  } else if (sa === null) {
     findings.push({
       severity: thetaSaNeededAverageKPerW === null ? 'fail' : 'ok', rule: 'pa.heatsink', subject: '', value: thetaSaNeededAverageKPerW, limit: null, unit: 'K/W', source: SRC,
       message: thetaSaNeededAverageKPerW === null

@@ -5,6 +5,7 @@ import { validatePaParams, validateThermalInputs } from './lpf-validate';
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
+import { usablePositive } from '../numeric';
 
 /** Drain efficiency used when none is entered. Common practice, no published source (ref §8.2 ranges). */
 export const DEFAULT_EFFICIENCY: Record<PaParams['amplifierClass'], number> = { B: 0.6, C: 0.7, D: 0.8, E: 0.85 };
@@ -68,6 +69,9 @@ export interface PaResult {
   findings: Finding[];
 }
 
+/** Lowest PA supply voltage, V. Common practice, no published source: no transistor PA gives useful output below 1 V. */
+export const MIN_PA_RAIL_V = 1;
+
 const SRC_LOADLINE = 'Textbook load line / Sokal & Sokal IEEE JSSC 1975 (REFERENCE-VALUES §8.1)';
 
 function zeroResult(railV: number, findings: Finding[]): PaResult {
@@ -96,7 +100,10 @@ export interface PaSupplyCorners {
 
 export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier', corners: PaSupplyCorners = {}): PaResult {
   const errors = [...validatePaParams(pa), ...validateThermalInputs(project.ambientC, project.keyingDuty)];
-  if (!(railV > 0 && railV <= 5000)) errors.push({ field: 'railId', message: 'No usable supply voltage (above 0 V, at most 5 kV) is known for the PA rail.' });
+  // A rail must be usable, not merely above 0: 1.5e-322 V passed `railV > 0` and made the heat quotients Infinity.
+  if (!(usablePositive(railV, MIN_PA_RAIL_V) && railV <= 5000)) {
+    errors.push({ field: 'railId', message: `No usable supply voltage (at least ${MIN_PA_RAIL_V} V, at most 5 kV) is known for the PA rail.` });
+  }
   const vsat0 = pa.saturationV ?? 0;
   if (errors.length === 0 && railV <= vsat0) errors.push({ field: 'saturationV', message: 'Saturation drop is not below the supply voltage.' });
   if (errors.length > 0) {

@@ -43,6 +43,15 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     expect(x.findings.some((f) => f.rule === 'pa.input' && f.severity === 'fail')).toBe(true);
     expect(nonFinitePaths(x)).toEqual([]);
   });
+  it('a PA rail of 1.5e-322 V (subnormal) is refused with a finding, not turned into Infinity (regression)', () => {
+    // Found by the corruption property below: with saturationV 0 the rail passed `railV > 0` and the bias heat
+    // 0.05 A x 1.5e-322 V made the heatsink quotient (Tj,target - Ta) / P infinite.
+    const base = project();
+    const x = evaluateRf(project({ stages: [{ ...base.stages[0], pa: paParams({ saturationV: 0 }) }, base.stages[1], base.stages[2]] }),
+      { paRailV: { pa: 1.5e-322 } });
+    expect(nonFinitePaths(x)).toEqual([]);
+    expect(x.findings.some((f) => f.rule === 'pa.input' && f.severity === 'fail' && /supply voltage/.test(f.message))).toBe(true);
+  });
   it('zero power and zero frequency are input errors, not crashes', () => {
     const x = evaluateRf(project({ targetPowerW: 0, frequencyHz: 0 }), { paRailV: { pa: 13.8 } });
     expect(x.inputErrors.map((e) => e.field).sort()).toEqual(['frequencyHz', 'targetPowerW']);
