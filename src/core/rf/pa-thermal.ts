@@ -2,6 +2,7 @@
 import type { Finding } from '../findings';
 import type { PaParams } from '../model';
 import { quotient } from '../numeric';
+import { NEGLIGIBLE_DISSIPATION_W } from '../thermal/junction';
 
 export interface PaThermal {
   /** Key-down dissipation of all devices (DC in - RF out + bias idle), W. */
@@ -24,9 +25,7 @@ export interface PaThermal {
   tjContinuousC: number | null;
 }
 
-/** Per-device dissipation below which no heatsink is needed, W. Common practice, no published source: 1 mW warms even a
- * free-air small-signal package (about 200 K/W, from memory) by 0.2 K. Also the floor of the θsa quotient below. */
-export const NEGLIGIBLE_DISSIPATION_W = 1e-3;
+export { NEGLIGIBLE_DISSIPATION_W };
 /** θsa reported when the dissipation is negligible: any heatsink, or none, will do, K/W. */
 export const NO_HEATSINK_NEEDED_K_PER_W = 1e6;
 

@@ -1,6 +1,7 @@
 // Junction temperature of a device on a heatsink, and the heatsink needed to meet a derating target.
 import type { Finding } from '../findings';
 import type { HeatsinkMount } from '../model';
+import { quotient } from '../numeric';
 
 /** Derating target as a fraction of the rated maximum junction temperature. */
 // Source: thermal design practice quoted in the reference values §7: target Tj <= 0.8 x Tj,max ([C] reference page)
@@ -11,6 +12,13 @@ export const TJ_DERATING_FRACTION = 0.8;
  * no insulator, ref §7), Tj,max 125 °C (common rating of three-terminal regulators, from memory).
  */
 export const DEFAULT_TO220_MOUNT: HeatsinkMount = { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 125 };
+
+/**
+ * Dissipation below which a device needs no heatsink, W; also the floor of the θsa quotient (a subnormal P would make
+ * (Tj,target - Ta) / P infinite). Common practice, no published source: 1 mW warms even a free-air small-signal package
+ * (about 200 K/W, from memory) by 0.2 K.
+ */
+export const NEGLIGIBLE_DISSIPATION_W = 1e-3;
 
 /** Free-air junction-to-ambient of a TO-220 without heatsink (K/W). Source: ref §6.1, RθJA 50 °C/W (one datasheet). */
 export const TO220_FREE_AIR_K_PER_W = 50;
@@ -49,9 +57,10 @@ export function junctionTemperature(powerW: number, ambientC: number, mount: Hea
   const junctionC = sa === null ? null : ta + p * (path + sa);
   const freeAirJunctionC = ta + p * freeAirKPerW;
   let required: number | null = null;
-  if (p > 0) {
-    const r = (targetC - ta) / p - path;
-    required = r > 0 && Number.isFinite(r) ? r : null;
+  const perW = quotient(targetC - ta, p, NEGLIGIBLE_DISSIPATION_W);
+  if (perW !== null) {
+    const r = perW - path;
+    required = r > 0 ? r : null;
   }
   return { powerW: p, ambientC: ta, junctionC, targetC, tjMaxC, requiredThetaSaKPerW: required, needsHeatsink: freeAirJunctionC > targetC, freeAirJunctionC };
 }

@@ -45,3 +45,18 @@ describe('thermal findings', () => {
     expect([t.powerW, t.ambientC, t.junctionC ?? 0, t.freeAirJunctionC].every(Number.isFinite)).toBe(true);
   });
 });
+
+describe('negligible and subnormal dissipation (the θsa quotient must not overflow)', () => {
+  const mount = { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 125 };
+  it('5e-324 W (subnormal) needs no heatsink and gives no infinite θsa', () => {
+    const t = junctionTemperature(5e-324, 40, mount);
+    expect(t.requiredThetaSaKPerW).toBeNull();
+    expect(t.needsHeatsink).toBe(false);
+    expect(Object.values(t).every((v) => v === null || typeof v === 'boolean' || Number.isFinite(v))).toBe(true);
+    expect(thermalFindings('x', t, 'c')[0].message).toContain('no heatsink needed');
+  });
+  it('at the 1 mW floor the series-path formula applies: (100 - 40) / 0.001 - 6 = 59 994 K/W (ref §7 formula)', () => {
+    const t = junctionTemperature(1e-3, 40, mount);
+    expect(Math.abs((t.requiredThetaSaKPerW ?? NaN) - 59994)).toBeLessThanOrEqual(toleranceKPerW);
+  });
+});
