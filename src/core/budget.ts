@@ -1,4 +1,6 @@
 // Current budget: what every rail must deliver in each operating mode, propagated up the supply tree.
+// A current that cannot be computed (core refuses a PA's data, say) is NaN: "unknown". It stays unknown through
+// every sum up the tree and is shown as unknown; it never becomes 0. The findings say why.
 import type { Project, PerMode, Rail, RegulatedRail, Mode } from './model';
 import { MODES } from './model';
 import type { Finding } from './findings';
@@ -46,7 +48,10 @@ export interface BudgetReport {
 export interface ComputedLoad {
   stageId: string;
   railId: string;
+  /** NaN in a mode = unknown (the findings say why) */
   currentA: PerMode;
+  /** why a mode is unknown: fail findings naming the stage and the refused field */
+  findings?: Finding[];
   /** replace the stage's entered load on this rail in these modes (PA key-down); otherwise add */
   replaces: Mode[];
 }
@@ -54,6 +59,11 @@ export interface ComputedLoad {
 const zero = (): PerMode => ({ receive: 0, keyUp: 0, keyDown: 0 });
 const add = (a: PerMode, b: PerMode): PerMode => ({ receive: a.receive + b.receive, keyUp: a.keyUp + b.keyUp, keyDown: a.keyDown + b.keyDown });
 const map = (a: PerMode, f: (v: number, m: Mode) => number): PerMode => ({ receive: f(a.receive, 'receive'), keyUp: f(a.keyUp, 'keyUp'), keyDown: f(a.keyDown, 'keyDown') });
+
+/** Modes in which a rail's current is unknown (a computed load could not be computed). */
+export function unknownModes(a: PerMode): Mode[] {
+  return MODES.filter((m) => Number.isNaN(a[m]));
+}
 
 /** Nominal (no-load-ish, nominal mains) voltage of a rail, for budgets and display. */
 export function railNominalV(rail: Rail, project: Project): number {
@@ -81,9 +91,18 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
   const own = new Map<string, PerMode>(rails.map((r) => [r.id, zero()]));
   const loads = new Map<string, LoadContribution[]>(rails.map((r) => [r.id, []]));
 
+  const noRail = (stageName: string, railId: string, what: string): Finding => ({
+    severity: 'fail', rule: 'budget.no-rail', subject: `${stageName}: ${what}`, value: null, limit: null, unit: 'A', source: 'Circuit topology',
+    message: railId === ''
+      ? `${stageName} draws current (${what}) from no rail, so no rail's budget carries it. Choose its rail.`
+      : `${stageName} draws current (${what}) from a rail that is not in this project's supply, so no rail's budget carries it. Choose its rail.`,
+  });
   for (const stage of project.stages) {
     for (const load of stage.loads) {
-      if (!byId.has(load.railId)) continue;
+      if (!byId.has(load.railId)) {
+        if (MODES.some((m) => load.currentA[m] !== 0)) findings.push(noRail(stage.name, load.railId, 'entered load'));
+        continue;
+      }
       const replaced = computed.filter((c) => c.stageId === stage.id && c.railId === load.railId).flatMap((c) => c.replaces);
       const current = map(load.currentA, (v, m) => (replaced.includes(m) ? 0 : v));
       own.set(load.railId, add(own.get(load.railId)!, current));
@@ -91,8 +110,13 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
     }
   }
   for (const c of computed) {
-    if (!byId.has(c.railId)) continue;
     const stage = project.stages.find((s) => s.id === c.stageId);
+    findings.push(...(c.findings ?? []));
+    if (!byId.has(c.railId)) {
+      // a load that already explains itself (a refused coil rail) needs no second finding
+      if (!c.findings?.length) findings.push(noRail(stage?.name ?? c.stageId, c.railId, 'computed load'));
+      continue;
+    }
     own.set(c.railId, add(own.get(c.railId)!, c.currentA));
     loads.get(c.railId)!.push({ stageId: c.stageId, stageName: stage?.name ?? c.stageId, currentA: c.currentA, computed: true });
   }
@@ -125,7 +149,8 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
       if (depth.get(child.id)! < 0) continue;
       const childOut = outputOf(child);
       const inV = inputVOverride[r.id] ?? railLowestV(r, project);
-      const childIn = map(childOut, (v) => regulatorInputCurrentA(child, v, inV));
+      // an unknown output current makes the regulator's input current unknown too (never 0)
+      const childIn = map(childOut, (v) => (Number.isNaN(v) ? NaN : regulatorInputCurrentA(child, v, inV)));
       input.set(child.id, childIn);
       fromRegs = add(fromRegs, childIn);
     }
@@ -174,8 +199,8 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
   const sources = result
     .filter((r) => r.kind !== 'regulated')
     .map((r) => ({ railId: r.railId, name: r.name, outputA: r.outputA, outputW: r.outputW }));
+  // an unknown (NaN) source power leaves the total unknown: it is shown as such, never as 0
   const totalW = sources.reduce((acc, s) => add(acc, s.outputW), zero());
-  for (const m of MODES) if (!Number.isFinite(totalW[m])) totalW[m] = 0;
   return { rails: result, sources, totalW, findings };
 }
 

@@ -1,6 +1,6 @@
 // evaluate(project) -> report: the one place the core's pieces are put together, in a fixed order:
 // PA key-down current and relay coils -> current budget -> supply design -> (PA rail voltage settles) -> RF -> cost.
-import type { Project, PerMode } from './model';
+import { MODES, type Project, type PerMode } from './model';
 import { computeBudget, type BudgetReport, type ComputedLoad } from './budget';
 import { sortFindings, type Finding } from './findings';
 import { evaluateSupply } from './power/evaluate-supply';
@@ -41,11 +41,9 @@ function paRailVoltages(project: Project, budget: BudgetReport, supply: SupplyRe
         continue;
       }
     }
-    if (simulated?.kind === 'battery') {
-      out[id] = budget.rails.find((r) => r.railId === id)?.nominalV ?? 0;
-      continue;
-    }
-    out[id] = budget.rails.find((r) => r.railId === id)?.nominalV ?? 0;
+    // a PA on a rail the project does not have gets no voltage: its current is refused (a fail finding), not 0
+    const nominalV = budget.rails.find((r) => r.railId === id)?.nominalV;
+    if (nominalV !== undefined) out[id] = nominalV;
   }
   return out;
 }
@@ -80,17 +78,40 @@ function paRailCorners(project: Project, supply: SupplyReport | null): { maxV: R
   return { maxV, hotV, lowV, battery };
 }
 
+/**
+ * PA key-down currents and relay coil currents for the budget. A current core cannot compute is unknown (NaN) in the
+ * modes it covers, with a fail finding naming the stage and the refused field; it never falls back to 0.
+ */
 function computedLoads(project: Project, paRailV: Record<string, number>): ComputedLoad[] {
   const loads: ComputedLoad[] = [];
+  const railIds = new Set(project.supply.rails.map((r) => r.id));
   for (const s of project.stages) {
-    if (s.pa && paRailV[s.pa.railId] !== undefined) {
-      const keyDown = paKeyDownCurrentA(s.pa, paRailV[s.pa.railId], project);
-      loads.push({ stageId: s.id, railId: s.pa.railId, currentA: { receive: 0, keyUp: 0, keyDown }, replaces: ['keyDown'] });
+    if (s.pa) {
+      const railV = paRailV[s.pa.railId] ?? NaN;
+      const kd = paKeyDownCurrentA(s.pa, railV, project, s.name);
+      const findings = kd.ok ? [] : [paUnknownFinding(s.name, kd.findings)];
+      loads.push({ stageId: s.id, railId: s.pa.railId, currentA: { receive: 0, keyUp: 0, keyDown: kd.ok ? kd.currentA : NaN }, replaces: ['keyDown'], findings });
     }
-    const coil = relayCoilLoads(s);
-    if (coil) loads.push({ stageId: s.id, railId: coil.railId, currentA: coil.currentA, replaces: [] });
+    const coil = relayCoilLoads(s, railIds);
+    if (!coil.ok) {
+      // the coil's rail is unknown or refused: no rail can carry it; the finding keeps it from leaving silently
+      const unknown = Object.fromEntries(MODES.map((m) => [m, s.relay?.coilModes.includes(m) ? NaN : 0])) as PerMode;
+      loads.push({ stageId: s.id, railId: s.relay?.coilRailId ?? '', currentA: unknown, replaces: [], findings: coil.findings });
+    } else if (coil.load) {
+      loads.push({ stageId: s.id, railId: coil.load.railId, currentA: coil.load.currentA, replaces: [] });
+    }
   }
   return loads;
+}
+
+/** The PA's key-down current is unknown: say which stage and which inputs core refused. */
+function paUnknownFinding(stageName: string, refused: Finding[]): Finding {
+  const fields = refused.map((f) => f.subject.replace(`${stageName}: `, '')).filter((x, i, a) => x !== stageName && a.indexOf(x) === i);
+  const reasons = refused.map((f) => f.message).join(' ');
+  return {
+    severity: 'fail', rule: 'budget.pa-current', subject: `${stageName}: PA key-down current`, value: null, limit: null, unit: 'A', source: 'input check',
+    message: `The PA key-down current cannot be computed${fields.length ? ` (refused: ${fields.join(', ')})` : ''}, so the key-down budget of its rail is unknown and its supply is not designed. ${reasons}`,
+  };
 }
 
 /** PA rail voltages closer than this between passes count as settled (V). */

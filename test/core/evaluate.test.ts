@@ -76,7 +76,11 @@ describe('evaluate(): high-mains heating corners carry the PA current at the hig
     const high = rail.corners.find((c) => c.id === 'high-keyDown')!.loadA;
     const low = rail.corners.find((c) => c.id === 'low-keyDown')!.loadA;
     const paStage = p.stages.find((s) => s.id === 'st-pa')!.pa!;
-    const extra = paKeyDownCurrentA(paStage, pa.hotRailV, p) - paKeyDownCurrentA(paStage, r.paRailV['rail-pa'], p);
+    const current = (v: number) => {
+      const kd = paKeyDownCurrentA(paStage, v, p);
+      return kd.ok ? kd.currentA : NaN;
+    };
+    const extra = current(pa.hotRailV) - current(r.paRailV['rail-pa']);
     const toleranceA = 0.002; // the passes settle the hot rail within 5 mV
     expect(extra).toBeGreaterThan(0.1);
     expect(Math.abs(high - (nominalKd + extra))).toBeLessThan(toleranceA);

@@ -4,13 +4,24 @@ import type { BudgetReport } from '../../src/core/budget';
 import { MODES, MODE_LABELS } from '../../src/core/model';
 import { formatValue } from '../../src/core/units';
 
+/** A budget figure; NaN means a computed load could not be computed (the failed findings say why). */
+const Amount: FC<{ value: number; unit: string }> = ({ value, unit }) =>
+  Number.isNaN(value) ? (
+    <span class="unknown" title="A computed load could not be computed: see the failed checks">
+      unknown
+    </span>
+  ) : (
+    <>{formatValue(value, unit)}</>
+  );
+
 export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
   <section class="card" id="budget">
     <h2>Current budget</h2>
     <p class="explain">
       What each rail delivers in each operating mode: its own stage loads plus the input current of every regulator it feeds
       (linear: output + quiescent current; switching: from its efficiency at the lowest input voltage). Computed loads (PA key-down
-      current, relay coil) are marked ◆.
+      current, relay coil) are marked ◆; one that cannot be computed from the entered data shows as unknown, and the
+      supply is not designed until it is known.
     </p>
     <table class="grid budget">
       <thead>
@@ -33,8 +44,12 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
               <td class="num">{formatValue(r.nominalV, 'V')}</td>
               {MODES.map((m) => (
                 <td class="num" data-rail={r.railId} data-mode={m}>
-                  <strong>{formatValue(r.outputA[m], 'A')}</strong>
-                  <span class="sub">{formatValue(r.outputW[m], 'W')}</span>
+                  <strong>
+                    <Amount value={r.outputA[m]} unit="A" />
+                  </strong>
+                  <span class="sub">
+                    <Amount value={r.outputW[m]} unit="W" />
+                  </span>
                 </td>
               ))}
             </tr>
@@ -46,16 +61,20 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
                 </td>
                 <td></td>
                 {MODES.map((m) => (
-                  <td class="num">{formatValue(l.currentA[m], 'A')}</td>
+                  <td class="num">
+                    <Amount value={l.currentA[m]} unit="A" />
+                  </td>
                 ))}
               </tr>
             ))}
-            {MODES.some((m) => r.regulatorsA[m] > 0) ? (
+            {MODES.some((m) => r.regulatorsA[m] !== 0) ? (
               <tr class="load-row">
                 <td style={`padding-left:${1.6 + r.depth * 1.2}rem`}>regulators fed from this rail</td>
                 <td></td>
                 {MODES.map((m) => (
-                  <td class="num">{formatValue(r.regulatorsA[m], 'A')}</td>
+                  <td class="num">
+                    <Amount value={r.regulatorsA[m]} unit="A" />
+                  </td>
                 ))}
               </tr>
             ) : null}
@@ -68,7 +87,9 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
           <td></td>
           {MODES.map((m) => (
             <td class="num" data-total-mode={m}>
-              <strong>{formatValue(budget.totalW[m], 'W')}</strong>
+              <strong>
+                <Amount value={budget.totalW[m]} unit="W" />
+              </strong>
             </td>
           ))}
         </tr>

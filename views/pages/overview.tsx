@@ -145,7 +145,9 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
           {computedNote ? <span class="hint"> Note: {computedNote}.</span> : null}
           {computed.map((c) => (
             <p class="computed-load">
-              ◆ Computed and used in the budget ({c.rail}): {MODES.filter((m) => c.currentA[m] > 0).map((m) => `${MODE_LABELS[m]} ${formatValue(c.currentA[m], 'A')}`).join(', ') || 'none'}
+              ◆ Computed and used in the budget ({c.rail}): {MODES.filter((m) => c.currentA[m] !== 0)
+                .map((m) => `${MODE_LABELS[m]} ${Number.isNaN(c.currentA[m]) ? 'unknown (see the failed checks)' : formatValue(c.currentA[m], 'A')}`)
+                .join(', ') || 'none'}
             </p>
           ))}
         </form>

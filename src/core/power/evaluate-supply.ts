@@ -3,6 +3,7 @@
 import type { Finding } from '../findings';
 import { sortFindings } from '../findings';
 import type { BatteryRail, Mains, PerMode, Project, RectifiedRail, RegulatedRail, Transformer, Winding } from '../model';
+import { MODES, MODE_LABELS } from '../model';
 import type { BatteryRailReport, PrimaryReport, RailReport, SupplyReport, TransformerReport, WindingRecommendation } from './report-types';
 import { DEFAULT_TRANSMIT_FRACTION, cornerCurrent, cornerSpecs, mainsFactor, safeDuty } from './corners';
 import { evaluateRectifiedRail } from './rectified-rail';
@@ -65,6 +66,11 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   const windings = new Map<string, { w: Winding; t: Transformer }>();
   for (const t of project.supply.transformers) for (const w of t.windings) windings.set(w.id, { w, t });
   const childrenOf = (id: string) => rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
+  const undesigned = unknownLoadRails(rails, railOutputA, options.highMainsOutputA ?? {});
+  for (const [id, why] of undesigned) {
+    const name = rails.find((r) => r.id === id)?.name ?? id;
+    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: name, value: null, limit: null, unit: 'A', source: 'Current budget', message: `${name} is not designed: ${why}` });
+  }
   const budget = (id: string): PerMode => {
     const b = railOutputA[id];
     if (!b) {
@@ -93,7 +99,8 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   let simulations = 0;
   let allConverged = true;
 
-  for (const rail of rails.filter((r): r is RectifiedRail => r.kind === 'rectified')) {
+  const designable = (r: { id: string }) => !undesigned.has(r.id);
+  for (const rail of rails.filter((r): r is RectifiedRail => r.kind === 'rectified' && designable(r))) {
     const wt = windings.get(rail.windingId) ?? null;
     usedWindings.set(rail.windingId, [...(usedWindings.get(rail.windingId) ?? []), rail.name]);
     const req = requirement(rail.id, rail.marginV, childrenOf(rail.id), options.railMinimumV?.[rail.id]);
@@ -112,7 +119,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     if (ev.report.winding && wt) windingRecs.set(wt.t.id, [...(windingRecs.get(wt.t.id) ?? []), ev.report.winding]);
   }
 
-  for (const b of rails.filter((r): r is BatteryRail => r.kind === 'battery')) {
+  for (const b of rails.filter((r): r is BatteryRail => r.kind === 'battery' && designable(r))) {
     const out = budget(b.id);
     const children = childrenOf(b.id);
     const req = requirement(b.id, 0, children, options.railMinimumV?.[b.id]);
@@ -143,7 +150,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   }
 
   // Regulated rails in dependency order (a rail whose parent is missing or in a loop gets 0 V input).
-  const pending = rails.filter((r): r is RegulatedRail => r.kind === 'regulated');
+  const pending = rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && designable(r));
   for (let guard = 0; pending.length > 0 && guard <= rails.length; guard++) {
     for (let i = 0; i < pending.length; ) {
       const rr = pending[i];
@@ -170,14 +177,20 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   }
 
   const transformers: TransformerReport[] = [];
+  // a transformer with a winding feeding an undesigned rail would be sized for part of its load: leave it unsized
+  const unsized = project.supply.transformers.filter((t) => rails.some((r) => r.kind === 'rectified' && undesigned.has(r.id) && t.windings.some((w) => w.id === r.windingId)));
+  for (const t of unsized) {
+    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: t.name, value: null, limit: null, unit: 'VA', source: 'Current budget', message: `${t.name} is not sized, and no primary fuse is recommended: a rail it feeds has an unknown load.` });
+  }
   for (const t of project.supply.transformers) {
+    if (unsized.includes(t)) continue;
     const tr = transformerReport(t, windingRecs.get(t.id) ?? [], options.standardVA);
     transformers.push(tr.report);
     globalFindings.push(...tr.findings);
   }
 
   let primary: PrimaryReport | null = null;
-  if (mainsOk && transformers.some((t) => t.primaryA > 0)) {
+  if (mainsOk && unsized.length === 0 && transformers.some((t) => t.primaryA > 0)) {
     const loadA = transformers.reduce((s, t) => s + t.primaryA, 0);
     const construction = transformers.some((t) => t.construction === 'toroidal' && t.primaryA > 0) ? 'toroidal' : 'laminated';
     const fuse = primaryFuse(loadA, construction);
@@ -199,6 +212,43 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     simulations,
     allConverged,
   });
+}
+
+/**
+ * Rails that cannot be designed because a load in their supply tree is unknown (NaN in the budget: a computed current
+ * core refused). An unknown load makes its source's load unknown, and every rail of that tree depends on the source's
+ * voltage, so the whole tree from the root is left undesigned, each rail with the reason. Designing them for a
+ * load of 0 would show a supply that looks fine for an unloaded rail.
+ */
+function unknownLoadRails(rails: Project['supply']['rails'], outputA: Record<string, PerMode>, highA: Record<string, PerMode>): Map<string, string> {
+  const byId = new Map(rails.map((r) => [r.id, r]));
+  const rootOf = (id: string): string => {
+    const seen = new Set<string>();
+    let r = byId.get(id);
+    while (r && r.kind === 'regulated' && byId.has(r.parentId) && !seen.has(r.id)) {
+      seen.add(r.id);
+      r = byId.get(r.parentId);
+    }
+    return r?.id ?? id;
+  };
+  const unknown = (a: PerMode | undefined) => (a ? MODES.filter((m) => Number.isNaN(a[m])) : []);
+  const own = new Map<string, string>();
+  for (const r of rails) {
+    const modes = [...new Set([...unknown(outputA[r.id]), ...unknown(highA[r.id])])];
+    if (modes.length) own.set(r.id, modes.map((m) => MODE_LABELS[m]).join(', '));
+  }
+  const out = new Map<string, string>();
+  const badRoots = new Map<string, string>();
+  for (const [id] of own) badRoots.set(rootOf(id), id);
+  for (const r of rails) {
+    if (own.has(r.id)) {
+      out.set(r.id, `its ${own.get(r.id)} current is unknown (a computed load could not be computed; see the failed inputs); a design for no load there would hide that.`);
+    } else if (badRoots.has(rootOf(r.id))) {
+      const cause = byId.get(badRoots.get(rootOf(r.id))!)?.name ?? badRoots.get(rootOf(r.id))!;
+      out.set(r.id, `it shares its source with ${cause}, whose load is unknown, so its input voltage is unknown too.`);
+    }
+  }
+  return out;
 }
 
 /**

@@ -11,6 +11,7 @@
 // verified against its table and against ngspice (test/core/power).
 
 import type { RectifierTopology } from '../model';
+import { quotient, usablePositive } from '../numeric';
 
 export type SimLoad = { kind: 'current'; currentA: number } | { kind: 'resistance'; resistanceOhm: number };
 
@@ -225,21 +226,41 @@ export function switchOnSurgeA(peakEmfV: number, topology: RectifierTopology, di
   return Math.max(0, finite((peakEmfV - n * diodeDropV) / r));
 }
 
+/**
+ * Smallest usable inputs: the step solution divides by C and the loads by R, and a subnormal above 0 (5e-324 F) made
+ * every result 0 with no note. Common practice, no published source: below these the circuit is not a mains rectifier.
+ */
+export const SIM_FLOORS = { frequencyHz: 1, capacitanceF: 1e-9, secondaryVrms: 1e-3, resistanceOhm: 1e-3 } as const;
+
 export function simulateRectifier(input: RectifierSimInput): RectifierSimResult {
   const nums = [input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm];
   if (!nums.every((x) => Number.isFinite(x))) return invalid('Simulation not run: an input is missing or not a number.');
-  if (input.frequencyHz <= 0) return invalid('Simulation not run: the mains frequency must be above 0 Hz.');
-  if (input.capacitanceF <= 0) return invalid('Simulation not run: the reservoir capacitance must be above 0 F.');
-  if (input.secondaryVrms <= 0) return invalid('Simulation not run: the secondary voltage must be above 0 V.');
+  const f = SIM_FLOORS;
+  const notRun = 'Simulation not run:';
+  if (!usablePositive(input.frequencyHz, f.frequencyHz)) {
+    return invalid(`${notRun} the mains frequency must be at least 1 Hz.`);
+  }
+  if (!usablePositive(input.capacitanceF, f.capacitanceF)) {
+    return invalid(`${notRun} the reservoir capacitance must be at least 1 nF.`);
+  }
+  if (!usablePositive(input.secondaryVrms, f.secondaryVrms)) {
+    return invalid(`${notRun} the secondary voltage must be at least 1 mV.`);
+  }
   if (input.windingResistanceOhm < 0 || input.diodeResistanceOhm < 0 || input.esrOhm < 0 || input.diodeDropV < 0) {
     return invalid('Simulation not run: resistances and diode drop must not be negative.');
   }
   const n = diodesInPath(input.topology);
   const peakEmfV = Math.SQRT2 * input.secondaryVrms;
-  const loadG = input.load.kind === 'resistance' ? (input.load.resistanceOhm > 0 ? 1 / input.load.resistanceOhm : NaN) : 0;
+  const loadG = input.load.kind === 'resistance' ? (quotient(1, input.load.resistanceOhm, f.resistanceOhm) ?? NaN) : 0;
   const i0 = input.load.kind === 'current' ? input.load.currentA : 0;
-  if (!Number.isFinite(loadG) || !(i0 >= 0) || !Number.isFinite(i0)) return invalid('Simulation not run: the load must be a current of 0 A or more, or a resistance above 0 Ω.');
-  const bleedG = input.bleederOhm && input.bleederOhm > 0 ? 1 / input.bleederOhm : 0;
+  if (!(loadG >= 0) || !(i0 >= 0) || !Number.isFinite(i0)) {
+    return invalid(`${notRun} the load must be a current of 0 A or more, or a resistance of at least 1 mΩ.`);
+  }
+  // null, undefined or 0: no bleeder fitted
+  const bleedG = input.bleederOhm ? quotient(1, input.bleederOhm, f.resistanceOhm) : 0;
+  if (bleedG === null || bleedG < 0) {
+    return invalid(`${notRun} the bleeder resistance must be at least 1 mΩ (or none).`);
+  }
   const cir: Circuit = {
     diodes: n, dropV: n * input.diodeDropV, peakEmfV, rt: input.windingResistanceOhm + n * input.diodeResistanceOhm, esr: input.esrOhm,
     c: input.capacitanceF, g: loadG + bleedG, i0, omega: 2 * Math.PI * input.frequencyHz, topology: input.topology,

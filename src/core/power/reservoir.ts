@@ -4,6 +4,7 @@ import type { RectifierTopology } from '../model';
 import type { RectifierSimInput } from './rectifier-sim';
 import { simulateRectifier } from './rectifier-sim';
 import { DEFAULT_CAPACITOR_V, DEFAULT_CAPACITANCE_STEPS, nextAtLeast, nextInSeries } from './standard-values';
+import { usablePositive } from '../numeric';
 
 /** Voltage-rating margin over the highest (no-load, high-mains) peak. Common practice, no published source (ref §4.2 [D]: 28.5 V -> 35 V). */
 export const CAP_VOLTAGE_MARGIN = 1.2;
@@ -14,7 +15,8 @@ export const CAP_VOLTAGE_MARGIN = 1.2;
  */
 export function textbookCapacitanceF(topology: RectifierTopology, loadA: number, frequencyHz: number, ripplePpV: number): number | null {
   const k = topology === 'half-wave' ? 1 : 2;
-  if (!(loadA > 0) || !(frequencyHz > 0) || !(ripplePpV > 0)) return null;
+  // Usable, not merely > 0: a subnormal ripple target made C infinite. Floors: common practice, no published source.
+  if (!usablePositive(loadA, 1e-6) || !usablePositive(frequencyHz, 1) || !usablePositive(ripplePpV, 1e-6)) return null;
   const c = loadA / (k * frequencyHz * ripplePpV);
   return Number.isFinite(c) ? c : null;
 }

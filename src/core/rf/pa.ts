@@ -213,8 +213,20 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   };
 }
 
-/** Key-down DC current of the PA from railV (A), 0 when the parameters are unusable. For the lead's budget. */
-export function paKeyDownCurrentA(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>): number {
-  const r = evaluatePa(pa, railV, project);
-  return Number.isFinite(r.keyDownCurrentA) ? r.keyDownCurrentA : 0;
+/** A computed current, or the findings that say why it cannot be computed (never a silent 0). */
+export type ComputedCurrent = { ok: true; currentA: number } | { ok: false; findings: Finding[] };
+
+/**
+ * Key-down DC current of the PA from railV (A), for the lead's budget. When core refuses the PA data (or the rail
+ * voltage) the result carries the refusing findings instead, so the caller can mark the current unknown.
+ */
+export function paKeyDownCurrentA(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier'): ComputedCurrent {
+  const r = evaluatePa(pa, railV, project, subject);
+  const refused = r.findings.filter((f) => f.rule === 'pa.input');
+  if (refused.length > 0) return { ok: false, findings: refused };
+  if (!Number.isFinite(r.keyDownCurrentA) || r.keyDownCurrentA < 0) {
+    return { ok: false, findings: [{ severity: 'fail', rule: 'pa.input', subject: `${subject}: key-down current`, value: null, limit: null, unit: 'A', source: 'input check',
+      message: 'The PA key-down current could not be computed from the entered data.' }] };
+  }
+  return { ok: true, currentA: r.keyDownCurrentA };
 }

@@ -128,10 +128,35 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
   };
 }
 
-/** Coil current drawn per mode (energised in coilModes) for the supply budget; null when not applicable. */
-export function relayCoilLoads(stage: Stage): { railId: string; currentA: PerMode } | null {
-  const r = stage.relay;
-  if (!r || r.coilRailId === null || !(r.coilA > 0) || !Number.isFinite(r.coilA)) return null;
-  const currentA = Object.fromEntries(MODES.map((m: Mode) => [m, r.coilModes.includes(m) ? r.coilA : 0])) as PerMode;
-  return { railId: r.coilRailId, currentA };
+export interface CoilLoad {
+  railId: string;
+  currentA: PerMode;
 }
+
+/**
+ * Coil current drawn per mode (energised in coilModes) for the supply budget. `load` is null when the stage has no
+ * relay or its coil draws nothing. A coil current core refuses, or a coil that draws current from no rail (or from a
+ * rail the project does not have), is a refusal with a fail finding naming the stage and field: its current must not
+ * leave the budget silently.
+ */
+export function relayCoilLoads(stage: Stage, railIds?: ReadonlySet<string>): { ok: true; load: CoilLoad | null } | { ok: false; findings: Finding[] } {
+  const r = stage.relay;
+  if (!r) return { ok: true, load: null };
+  const fail = (field: string, message: string): { ok: false; findings: Finding[] } => ({
+    ok: false,
+    findings: [{ severity: 'fail', rule: 'relay.coil', subject: `${stage.name}: ${field}`, value: Number.isFinite(r.coilA) ? r.coilA : null, limit: null, unit: 'A', source: 'input check', message }],
+  });
+  if (!nonNegative(r.coilA)) return fail('relay coil current', 'The relay coil current must be a number, zero or more; the coil current is unknown in the budget.');
+  if (r.coilA === 0) return { ok: true, load: null };
+  const amps = `${(r.coilA * 1e3).toPrecision(3)} mA`;
+  if (r.coilRailId === null || r.coilRailId === '') {
+    return fail('relay coil rail', `The relay coil draws ${amps} but no rail is chosen for it, so no rail's budget carries it. Choose the coil's rail.`);
+  }
+  if (railIds && !railIds.has(r.coilRailId)) {
+    return fail('relay coil rail', `The relay coil draws ${amps} from a rail that is not in this project's supply. Choose the coil's rail.`);
+  }
+  const currentA = Object.fromEntries(MODES.map((m: Mode) => [m, r.coilModes.includes(m) ? r.coilA : 0])) as PerMode;
+  return { ok: true, load: { railId: r.coilRailId, currentA } };
+}
+
+const nonNegative = (v: number) => Number.isFinite(v) && v >= 0;

@@ -23,7 +23,9 @@ export function netlistRoutes(deps: Deps) {
     if (!winding || !p.mains) return c.text('This rail has no winding or the project has no mains settings, so there is nothing to simulate.', 422);
     // the worst voltage corner: low mains, the key-down current from the budget
     const report = evaluate(p);
-    const loadA = report.budget.rails.find((r) => r.railId === rail.id)?.outputA.keyDown ?? 0;
+    const loadA = report.budget.rails.find((r) => r.railId === rail.id)?.outputA.keyDown;
+    // an unknown key-down load (a computed current core refused) gets no netlist rather than one for no load
+    if (loadA === undefined || !Number.isFinite(loadA)) return c.text('The key-down load of this rail is unknown (see the failed checks on the overview), so no netlist was made.', 422);
     const mainsFactor = 1 - p.mains.lowFraction;
     return download(c, `${rail.id}-low-mains-keydown.cir`, railNetlist(rail, winding, p.mains.frequencyHz, mainsFactor, loadA));
   });

@@ -103,6 +103,9 @@ describe('bad and extreme inputs never hang and never give NaN', () => {
   const bad: Partial<RectifierSimInput>[] = [
     { capacitanceF: 0 }, { capacitanceF: -1 }, { frequencyHz: 0 }, { secondaryVrms: 0 }, { secondaryVrms: NaN },
     { windingResistanceOhm: -1 }, { load: { kind: 'resistance', resistanceOhm: 0 } }, { load: { kind: 'current', currentA: -2 } },
+    // Subnormals above 0 (regression): they passed `x <= 0` and gave 0 V results with no note, or an infinite conductance
+    { capacitanceF: 5e-324 }, { frequencyHz: 5e-324 }, { secondaryVrms: 1.5e-322 }, { bleederOhm: 5e-324 },
+    { load: { kind: 'resistance', resistanceOhm: 5e-324 } }, { capacitanceF: 1e-300 }, { frequencyHz: 1e-300 },
   ];
   for (const b of bad) {
     it(`refuses ${JSON.stringify(b)}`, () => {

@@ -41,6 +41,10 @@ describe('reservoir (ref §4.1, §4.2)', () => {
   it('textbook C = I/(2 f Vpp): 3 A, 50 Hz, 3.0 V -> 10,000 µF', () => {
     nearRel(textbookCapacitanceF('bridge', 3, 50, 3) ?? NaN, 0.01, 1e-12, 'C');
   });
+  it('no textbook C for a subnormal load (it gave 0 F) or ripple target (C = I/(2 f Vpp) would overflow)', () => {
+    expect(textbookCapacitanceF('bridge', 3, 50, 5e-324)).toBeNull();
+    expect(textbookCapacitanceF('bridge', 5e-324, 50, 3)).toBeNull();
+  });
   it('voltage rating: no-load peak ~28.5 V at +10 % -> 35 V part', () => {
     expect(recommendedCapacitorV(28.5)).toBe(35);
   });

@@ -30,7 +30,9 @@ describe('PA worked example, push-pull 13.8 V 10 W 50 Ω (REFERENCE-VALUES §8.3
     near(t.dcInputW, 14.3, 0.05, 'DC W');
     // printed 1.04 A from rounded 14.3 W / 13.8 V (= 1.036 A): tolerance 0.01 A
     near(t.keyDownCurrentA, 1.04, 0.01, 'I');
-    near(paKeyDownCurrentA({ ...pa, turnsRatio: 1.235 }, 13.8, proj), t.keyDownCurrentA, 1e-12, 'export');
+    const kd = paKeyDownCurrentA({ ...pa, turnsRatio: 1.235 }, 13.8, proj);
+    expect(kd.ok).toBe(true);
+    near(kd.ok ? kd.currentA : NaN, t.keyDownCurrentA, 1e-12, 'export');
   });
   it('class D square-wave model with 1.25 ratio gives 16.6 W', () => {
     const d = evaluatePa({ ...pa, amplifierClass: 'D', turnsRatio: 1.25 }, 13.8, proj);
@@ -80,7 +82,10 @@ describe('PA findings and bad inputs', () => {
       expect(r.findings.some((f) => f.severity === 'fail')).toBe(true);
       expect(Number.isFinite(r.outputW) && Number.isFinite(r.railV)).toBe(true);
     }
-    expect(paKeyDownCurrentA(paParams(), 0, proj)).toBe(0);
+    // the budget's current is refused with the rail named, not 0 (a 0 would design the supply for an unloaded PA)
+    const kd = paKeyDownCurrentA(paParams(), 0, proj, 'PA');
+    expect(kd.ok).toBe(false);
+    if (!kd.ok) expect(kd.findings.map((f) => [f.severity, f.subject])).toEqual([['fail', 'PA: supply rail']]);
   });
 });
 

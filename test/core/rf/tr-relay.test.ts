@@ -48,9 +48,17 @@ describe('relay checks', () => {
   });
   it('coil loads per mode for the supply budget', () => {
     const st: Stage = { id: 't', kind: 'tr', name: 'T/R', notes: '', loads: [], dissipationW: null, relay: relayParams() };
-    expect(relayCoilLoads(st)).toEqual({ railId: 'sig', currentA: { receive: 0, keyUp: 0.03, keyDown: 0.03 } });
-    expect(relayCoilLoads({ ...st, relay: relayParams({ coilRailId: null }) })).toBeNull();
-    expect(relayCoilLoads({ ...st, relay: undefined })).toBeNull();
+    expect(relayCoilLoads(st)).toEqual({ ok: true, load: { railId: 'sig', currentA: { receive: 0, keyUp: 0.03, keyDown: 0.03 } } });
+    expect(relayCoilLoads({ ...st, relay: undefined })).toEqual({ ok: true, load: null });
+    expect(relayCoilLoads({ ...st, relay: relayParams({ coilA: 0, coilRailId: null }) })).toEqual({ ok: true, load: null });
+  });
+  it('a coil drawing current from no rail, from a missing rail, or with a refused current is a fail finding', () => {
+    const st: Stage = { id: 't', kind: 'tr', name: 'T/R', notes: '', loads: [], dissipationW: null, relay: relayParams() };
+    const subjects = (r: ReturnType<typeof relayCoilLoads>) => (r.ok ? [] : r.findings.map((f) => `${f.severity} ${f.subject}`));
+    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilRailId: null }) }))).toEqual(['fail T/R: relay coil rail']);
+    expect(subjects(relayCoilLoads(st, new Set(['other'])))).toEqual(['fail T/R: relay coil rail']);
+    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilA: -0.03 }) }))).toEqual(['fail T/R: relay coil current']);
+    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilA: NaN }) }))).toEqual(['fail T/R: relay coil current']);
   });
 });
 
