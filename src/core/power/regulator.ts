@@ -1,6 +1,7 @@
 // Linear and switching regulators: output voltage from the setting, input current, dissipation, headroom checks.
 import type { Finding } from '../findings';
 import type { RegulatedRail, RegulatorSetting } from '../model';
+import { usablePositive } from '../numeric';
 
 /** Efficiency assumed for a switching module with none entered. Common practice, no published source. */
 export const DEFAULT_SWITCHING_EFFICIENCY = 0.85;
@@ -30,21 +31,24 @@ export function regulatorOutputV(setting: RegulatorSetting, quiescentA = 0): num
 /** Efficiency of a switching module, falling back to the default when missing or absurd. */
 export function switchingEfficiency(rail: RegulatedRail): number {
   const e = rail.efficiency;
-  return e !== null && Number.isFinite(e) && e > 0 && e <= 1 ? e : DEFAULT_SWITCHING_EFFICIENCY;
+  // Usable, not merely > 0: a subnormal efficiency made Pout / eff infinite (and the input current silently Iq only).
+  // Floor 1 %: common practice, no published source (no working module is less efficient).
+  return e !== null && usablePositive(e, 0.01) && e <= 1 ? e : DEFAULT_SWITCHING_EFFICIENCY;
 }
 
 /**
  * Current a regulator draws from its input (A).
  * Linear/LDO: output current + quiescent current (series pass element, ref §6.1 "quiescent (ground-pin) current").
  * Switching: Pin = Pout / efficiency -> I_in = Vout I_out / (eff V_in) + I_q (energy balance; efficiency taken
- * at the lowest input voltage). A non-positive inputV is treated as V_in = Vout (the module at its limit).
+ * at the lowest input voltage). A non-positive or unusable inputV is treated as V_in = Vout (the module at its limit).
  */
 export function regulatorInputCurrentA(rail: RegulatedRail, outputA: number, inputV: number): number {
   const iOut = Number.isFinite(outputA) && outputA > 0 ? outputA : 0;
   const iq = Number.isFinite(rail.quiescentA) && rail.quiescentA > 0 ? rail.quiescentA : 0;
   if (rail.regulator !== 'switching') return iOut + iq;
   const vOut = regulatorOutputV(rail.setting, rail.quiescentA);
-  const vIn = Number.isFinite(inputV) && inputV > 0 ? inputV : Math.max(vOut, 1e-3);
+  // Below 1 mV (a subnormal included) the input is no usable voltage: treated as V_in = Vout, as a non-positive one.
+  const vIn = usablePositive(inputV, 1e-3) ? inputV : Math.max(vOut, 1e-3);
   // Energy balance: Pin = Pout / efficiency
   return finiteOr((vOut * iOut) / (switchingEfficiency(rail) * vIn), 0) + iq;
 }

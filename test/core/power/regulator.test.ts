@@ -39,6 +39,12 @@ describe('input current and dissipation', () => {
     near(regulatorInputCurrentA(rail({ regulator: 'switching', efficiency: 0.85 }), 2, 24), 10 / (0.85 * 24) + 0.005, 1e-12, 'switching');
     expect(Number.isFinite(regulatorInputCurrentA(rail({ regulator: 'switching', efficiency: 0 }), 2, 0))).toBe(true);
   });
+  it('switching, subnormal input voltage or efficiency (regression: the input current fell silently to Iq)', () => {
+    // 1.5e-322 V is no usable input: treated as V_in = Vout = 5 V, so 10 W / (0.85 x 5 V) + Iq (energy balance)
+    near(regulatorInputCurrentA(rail({ regulator: 'switching', efficiency: 0.85 }), 2, 1.5e-322), 10 / (0.85 * 5) + 0.005, 1e-12, 'Vin');
+    // an efficiency of 5e-324 is absurd: the 85 % default (common practice, no published source) applies
+    near(regulatorInputCurrentA(rail({ regulator: 'switching', efficiency: 5e-324 }), 2, 24), 10 / (0.85 * 24) + 0.005, 1e-12, 'eff');
+  });
   it('linear dissipation, ref §7 example: (22.0 - 13.8) x 1.0 = 8.2 W (Iq = 0)', () => {
     const r = rail({ setting: { method: 'fixed', nominalV: 13.8 }, quiescentA: 0 });
     near(regulatorDissipationW(r, 1, 22), 8.2, 1e-9, 'P');
