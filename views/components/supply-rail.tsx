@@ -2,7 +2,7 @@
 import type { FC } from 'hono/jsx';
 import type { BatteryRail, Project, Rail, RectifiedRail, RegulatedRail } from '../../src/core/model';
 import { formatValue } from '../../src/core/units';
-import { inputText } from '../../src/web/input-text';
+import { inputText } from '../../src/core/spec/input-text';
 import { FormErrors, type FieldState, Field, Select } from './fields';
 import { stateFor, type Failed } from './failed';
 import { Version, hx, pctText } from './supply-transformer';

@@ -2,7 +2,7 @@
 import type { FC } from 'hono/jsx';
 import type { Project, Transformer, Winding } from '../../src/core/model';
 import { formatValue } from '../../src/core/units';
-import { inputText, percentText } from '../../src/web/input-text';
+import { inputText, percentText } from '../../src/core/spec/input-text';
 import { FormErrors, type FieldState, Field, Select } from './fields';
 import { stateFor, type Failed } from './failed';
 

@@ -5,7 +5,7 @@ import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/co
 import type { EvaluationReport } from '../../src/core/evaluate';
 import type { Finding } from '../../src/core/findings';
 import { formatValue } from '../../src/core/units';
-import { inputText, percentText } from '../../src/web/input-text';
+import { inputText, percentText } from '../../src/core/spec/input-text';
 import { Field, Select, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';

@@ -5,7 +5,7 @@ import type { EvaluationReport } from '../../src/core/evaluate';
 import { Field, Select, Check, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { RfResults } from '../partials/rf-results';
-import { percentText } from '../../src/web/input-text';
+import { percentText } from '../../src/core/spec/input-text';
 
 export function rfSettingsValues(p: Project): Record<string, string> {
   const r = p.rf;

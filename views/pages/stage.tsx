@@ -4,7 +4,10 @@ import type { Project, Stage } from '../../src/core/model';
 import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
 import { Field, Select, Check, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
-import { stageValues, paValues, lpfValues, relayValues } from '../../src/web/stage-forms';
+import { formValues, lpfSpec, loadSpec, paSpec, relaySpec, stageSpec } from '../../src/core/spec';
+import { loadFormName, stageFormValues } from '../../src/core/spec/stage';
+import { SpecField } from '../components/spec-fields';
+import { REMOVE_LOAD } from '../../src/core/edits/stage-loads';
 
 const Hidden: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
 
@@ -35,7 +38,7 @@ const FormShell: FC<{ project: Project; stage: Stage; path: string; title: strin
 
 export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }) => {
   const railOptions: [string, string][] = project.supply.rails.map((r) => [r.id, r.name]);
-  const general = stateFor('stage', failed, () => stageValues(stage));
+  const general = stateFor('stage', failed, () => stageFormValues(stage));
   const loadRows = Math.max(stage.loads.length + 1, 1);
   return (
     <div id="stage">
@@ -49,9 +52,9 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
       ) : null}
       <FormShell project={project} stage={stage} path="" title={`${stage.name} (${STAGE_KIND_LABELS[stage.kind]})`} state={general} submit="Save stage">
         <div class="row">
-          <Field name="name" label="Name" state={general} size={36} />
-          <Select name="kind" label="Kind" state={general} options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])} hint="A new kind starts from typical data; the old kind's PA, filter or relay data is dropped" />
-          <Field name="dissipation" label="Heat dissipated (empty = rail V × key-down current)" unit="W" state={general} size={8} />
+          <SpecField spec={stageSpec} k="name" label="Name" state={general} size={36} />
+          <Select name="kind" label="Kind" state={general} options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])} hint="A new kind starts from typical data. A change that would drop PA, filter or relay data asks first." />
+          <SpecField spec={stageSpec} k="dissipationW" state={general} size={8} />
         </div>
         <label class="field wide">
           <span class="label">Notes</span>
@@ -78,11 +81,11 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
               {Array.from({ length: loadRows }, (_, i) => (
                 <tr>
                   <td>
-                    <Select name={`rail${i}`} label="Rail" state={general} options={[['', i < stage.loads.length ? '(remove this load)' : '(add a load…)'], ...railOptions]} />
+                    <Select name={loadFormName(i, 'railId')} label="Rail" state={general} options={[i < stage.loads.length ? [REMOVE_LOAD, '(remove this load)'] : ['', '(add a load…)'], ...railOptions]} />
                   </td>
                   {MODES.map((m) => (
                     <td>
-                      <Field name={`l${i}_${m}`} label={`${MODE_LABELS[m]} current`} state={general} size={8} />
+                      <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} state={general} size={8} />
                     </td>
                   ))}
                 </tr>
@@ -90,11 +93,11 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
             </tbody>
           </table>
         )}
-        <p class="hint">Currents accept 350 mA, 350m, 0.35 or 1.2 A. Choose "(remove this load)" to drop a row.</p>
+        <p class="hint">Currents are in mA: 350 means 350 mA; 1.2 A, 350m or 0.35 A are read as written. Choose "(remove this load)" to drop a row.</p>
       </FormShell>
-      {stage.kind === 'final' && stage.pa ? <PaForm project={project} stage={stage} state={stateFor('pa', failed, () => paValues(stage.pa!))} rails={railOptions} /> : null}
-      {stage.kind === 'lpf' && stage.lpf ? <LpfForm project={project} stage={stage} state={stateFor('lpf', failed, () => lpfValues(stage.lpf!))} /> : null}
-      {stage.kind === 'tr' && stage.relay ? <RelayForm project={project} stage={stage} state={stateFor('relay', failed, () => relayValues(stage.relay!))} rails={railOptions} /> : null}
+      {stage.kind === 'final' && stage.pa ? <PaForm project={project} stage={stage} state={stateFor('pa', failed, () => formValues(paSpec, stage.pa))} rails={railOptions} /> : null}
+      {stage.kind === 'lpf' && stage.lpf ? <LpfForm project={project} stage={stage} state={stateFor('lpf', failed, () => formValues(lpfSpec, stage.lpf))} /> : null}
+      {stage.kind === 'tr' && stage.relay ? <RelayForm project={project} stage={stage} state={stateFor('relay', failed, () => formValues(relaySpec, stage.relay))} rails={railOptions} /> : null}
       {results as never}
     </div>
   );
@@ -103,29 +106,29 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
 const PaForm: FC<{ project: Project; stage: Stage; state: FieldState; rails: [string, string][] }> = ({ project, stage, state, rails }) => (
   <FormShell project={project} stage={stage} path="/pa" title="Final amplifier data" state={state} submit="Save PA data">
     <div class="row">
-      <Select name="topology" label="Topology" state={state} options={[['push-pull', 'Push-pull'], ['single-ended', 'Single-ended']]} />
-      <Select name="amplifierClass" label="Class" state={state} options={[['B', 'B'], ['C', 'C'], ['D', 'D (switching)'], ['E', 'E (switching)']]} />
-      <Select name="railId" label="Fed from rail" state={state} options={rails} />
-      <Field name="devices" label="Devices" state={state} size={3} />
+      <SpecField spec={paSpec} k="topology" state={state} />
+      <SpecField spec={paSpec} k="amplifierClass" state={state} />
+      <SpecField spec={paSpec} k="railId" state={state} options={rails} />
+      <SpecField spec={paSpec} k="devices" state={state} />
     </div>
     <div class="row">
-      <Field name="saturation" label="Saturation voltage" unit="V" state={state} size={6} hint="or give Rds(on)" />
-      <Field name="rdsOn" label="Rds(on)" unit="Ω" state={state} size={6} />
-      <Field name="turnsRatio" label="Output turns ratio (sec : full pri)" state={state} size={6} hint="empty = design it for the target power" />
-      <Field name="load" label="Load" unit="Ω" state={state} size={5} />
-      <Field name="efficiency" label="Drain efficiency" unit="%" state={state} size={5} hint="empty = default for the class" />
+      <SpecField spec={paSpec} k="saturationV" state={state} />
+      <SpecField spec={paSpec} k="rdsOnOhm" state={state} />
+      <SpecField spec={paSpec} k="turnsRatio" state={state} />
+      <SpecField spec={paSpec} k="loadOhm" state={state} />
+      <SpecField spec={paSpec} k="efficiency" state={state} />
     </div>
     <div class="row">
-      <Field name="vdsMax" label="Device V(BR)DSS" unit="V" state={state} size={6} />
-      <Field name="idMax" label="Device max drain current" unit="A" state={state} size={6} />
-      <Field name="biasIdle" label="Bias preset max idle current" unit="A" state={state} size={6} />
-      <Field name="referencePower" label="Compare with" unit="W" state={state} size={6} />
+      <SpecField spec={paSpec} k="deviceVdsMaxV" state={state} />
+      <SpecField spec={paSpec} k="deviceIdMaxA" state={state} />
+      <SpecField spec={paSpec} k="biasIdleMaxA" state={state} />
+      <SpecField spec={paSpec} k="referencePowerW" state={state} />
     </div>
     <div class="row">
-      <Field name="thetaJc" label="θjc" unit="°C/W" state={state} size={5} />
-      <Field name="thetaCs" label="θcs (washer, grease)" unit="°C/W" state={state} size={5} />
-      <Field name="thetaSa" label="Heatsink θsa" unit="°C/W" state={state} size={5} hint="empty = tell me what I need" />
-      <Field name="tjMax" label="Tj max" unit="°C" state={state} size={5} />
+      <SpecField spec={paSpec} k="mount.thetaJcKPerW" state={state} />
+      <SpecField spec={paSpec} k="mount.thetaCsKPerW" state={state} />
+      <SpecField spec={paSpec} k="mount.thetaSaKPerW" state={state} />
+      <SpecField spec={paSpec} k="mount.tjMaxC" state={state} />
     </div>
   </FormShell>
 );
@@ -133,25 +136,25 @@ const PaForm: FC<{ project: Project; stage: Stage; state: FieldState; rails: [st
 const LpfForm: FC<{ project: Project; stage: Stage; state: FieldState }> = ({ project, stage, state }) => (
   <FormShell project={project} stage={stage} path="/lpf" title="Low-pass filter design" state={state} submit="Save and redesign">
     <div class="row">
-      <Select name="response" label="Response" state={state} options={[['chebyshev', 'Chebyshev (equal ripple)'], ['butterworth', 'Butterworth (maximally flat)']]} />
-      <Field name="ripple" label="Ripple" unit="dB" state={state} size={5} hint="0.01–0.5 dB" />
-      <Field name="order" label="Order" state={state} size={3} hint="3, 5, 7 or 9" />
-      <Select name="layout" label="Form" state={state} options={[['capacitor-input', 'Capacitor input (π)'], ['inductor-input', 'Inductor input (T)']]} />
-      <Field name="cutoff" label="Cutoff" unit="Hz" state={state} size={9} hint="empty = chosen from the band" />
+      <SpecField spec={lpfSpec} k="response" state={state} />
+      <SpecField spec={lpfSpec} k="rippleDb" state={state} />
+      <SpecField spec={lpfSpec} k="order" state={state} />
+      <SpecField spec={lpfSpec} k="form" state={state} />
+      <SpecField spec={lpfSpec} k="cutoffHz" state={state} />
     </div>
     <div class="row">
-      <Select name="capacitorSeries" label="Capacitor values" state={state} options={[['E12', 'E12'], ['E24', 'E24']]} />
-      <Check name="allowParallelPairs" label="Allow a parallel pair when closer" state={state} />
-      <Field name="coreName" label="Core" state={state} size={30} />
-      <Field name="coreAl" label="Core AL" unit="H/t²" state={state} size={7} hint="e.g. 4.9n" />
+      <SpecField spec={lpfSpec} k="capacitorSeries" state={state} />
+      <SpecField spec={lpfSpec} k="allowParallelPairs" state={state} />
+      <SpecField spec={lpfSpec} k="coreName" state={state} size={30} />
+      <SpecField spec={lpfSpec} k="coreAlHPerTurn2" state={state} />
     </div>
     <div class="row">
-      <Field name="inductorQ" label="Inductor Q" state={state} size={5} />
-      <Field name="capacitorQ" label="Capacitor Q" state={state} size={5} />
-      <Field name="capacitorTolerance" label="C tolerance" unit="%" state={state} size={4} />
-      <Field name="inductorTolerance" label="L tolerance" unit="%" state={state} size={4} />
-      <Field name="trials" label="Monte Carlo trials" state={state} size={6} />
-      <Field name="seed" label="Seed" state={state} size={6} />
+      <SpecField spec={lpfSpec} k="inductorQ" state={state} />
+      <SpecField spec={lpfSpec} k="capacitorQ" state={state} />
+      <SpecField spec={lpfSpec} k="capacitorTolerance" state={state} />
+      <SpecField spec={lpfSpec} k="inductorTolerance" state={state} />
+      <SpecField spec={lpfSpec} k="monteCarloTrials" state={state} />
+      <SpecField spec={lpfSpec} k="seed" state={state} />
     </div>
   </FormShell>
 );
@@ -159,30 +162,30 @@ const LpfForm: FC<{ project: Project; stage: Stage; state: FieldState }> = ({ pr
 const RelayForm: FC<{ project: Project; stage: Stage; state: FieldState; rails: [string, string][] }> = ({ project, stage, state, rails }) => (
   <FormShell project={project} stage={stage} path="/relay" title="T/R relay data" state={state} submit="Save relay data">
     <div class="row">
-      <Field name="contactCarry" label="Contact carry" unit="A" state={state} size={5} />
-      <Field name="contactSwitch" label="Contact switching" unit="A" state={state} size={5} />
-      <Field name="contactV" label="Contact voltage rating" unit="V" state={state} size={5} />
-      <Field name="rfV" label="RF peak voltage rating" unit="V" state={state} size={5} hint="empty = use the contact rating" />
-      <Field name="dcSwitched" label="DC current its contacts switch" unit="A" state={state} size={5} />
+      <SpecField spec={relaySpec} k="contactCarryA" state={state} />
+      <SpecField spec={relaySpec} k="contactSwitchA" state={state} />
+      <SpecField spec={relaySpec} k="contactRatedV" state={state} />
+      <SpecField spec={relaySpec} k="rfRatedVpeak" state={state} />
+      <SpecField spec={relaySpec} k="dcSwitchedA" state={state} />
     </div>
     <div class="row">
-      <Field name="coil" label="Coil current" unit="A" state={state} size={6} />
-      <Select name="coilRailId" label="Coil rail" state={state} options={[['', '(not on a rail here)'], ...rails]} />
-      <Check name="coilReceive" label="energised in receive" state={state} />
-      <Check name="coilKeyUp" label="in TX key-up" state={state} />
-      <Check name="coilKeyDown" label="in TX key-down" state={state} />
+      <SpecField spec={relaySpec} k="coilA" state={state} />
+      <SpecField spec={relaySpec} k="coilRailId" state={state} options={rails} none="(not on a rail here)" />
+      <SpecField spec={relaySpec} k="coilReceive" state={state} />
+      <SpecField spec={relaySpec} k="coilKeyUp" state={state} />
+      <SpecField spec={relaySpec} k="coilKeyDown" state={state} />
     </div>
     <div class="row">
-      <Field name="isolation" label="Isolation at the operating frequency" unit="dB" state={state} size={4} />
-      <Select name="position" label="Position" state={state} options={[['after-lpf', 'After the low-pass filter'], ['before-lpf', 'Before the low-pass filter']]} />
-      <Field name="rxMax" label="Receiver max input" unit="W" state={state} size={6} />
+      <SpecField spec={relaySpec} k="isolationDb" state={state} />
+      <SpecField spec={relaySpec} k="position" state={state} />
+      <SpecField spec={relaySpec} k="receiverMaxInputW" state={state} />
     </div>
     <div class="row">
-      <Field name="operate" label="Operate time" unit="s" state={state} size={6} />
-      <Field name="release" label="Release time" unit="s" state={state} size={6} />
-      <Field name="bounce" label="Bounce time" unit="s" state={state} size={6} />
-      <Field name="txDelay" label="Transmit delay after relay drive" unit="s" state={state} size={6} />
-      <Field name="wpm" label="Keying speed" unit="WPM" state={state} size={4} />
+      <SpecField spec={relaySpec} k="operateS" state={state} />
+      <SpecField spec={relaySpec} k="releaseS" state={state} />
+      <SpecField spec={relaySpec} k="bounceS" state={state} />
+      <SpecField spec={relaySpec} k="txDelayS" state={state} />
+      <SpecField spec={relaySpec} k="wpm" state={state} />
     </div>
   </FormShell>
 );

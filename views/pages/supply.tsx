@@ -3,7 +3,7 @@
 import type { Child, FC } from 'hono/jsx';
 import { PageMessages } from '../components/messages';
 import type { Project } from '../../src/core/model';
-import { inputText } from '../../src/web/input-text';
+import { inputText } from '../../src/core/spec/input-text';
 import { FormErrors, type FieldState, Field, Select } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { TransformerCard, Version, hx } from '../components/supply-transformer';

@@ -1,6 +1,6 @@
 // Stored SI values -> the text put back into an input, exact enough that saving the form unchanged
 // stores the same number (the short display form is kept whenever it already parses back exactly).
-import { formatInput, formatValue, parseValue } from '../core/units';
+import { formatInput, formatValue, parseValue } from '../units';
 
 const parsesTo = (text: string, unit: string, value: number) => {
   const r = parseValue(text, unit);

@@ -2,21 +2,33 @@
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Project, Stage, StageLoad } from '../../core/model';
-import { MODES } from '../../core/model';
+import { MODES, STAGE_KIND_LABELS } from '../../core/model';
 import { withKindDefaults } from '../../core/new-project';
+import { droppedByKindChange, keepOwnData } from '../../core/edits/stage-kind';
 import { loadProject, updateProject, VersionConflict } from '../../db/projects';
 import { num, parseForm, type FieldErrors } from '../form';
 import { projectEdit, doneNotice, type ChangeResult } from '../edit';
-import { sendPage, formValues } from '../render';
+import { sendPage, sendPartial, formValues, isHtmx } from '../render';
 import type { Deps } from '../deps';
-import { stageSchema, paSchema, toPa, lpfSchema, toLpf, relaySchema, toRelay } from '../stage-forms';
+import { stageValues, paValues, lpfValues, relayValues } from '../stage-forms';
+import { readLoads } from '../../core/edits/stage-loads';
+import { stageSchema, paSchema, lpfSchema, relaySchema } from '../stage-forms';
 import { Layout } from '../../../views/layout';
 import { StageBody } from '../../../views/pages/stage';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
+import { KindChangeConfirm } from '../../../views/pages/stage-kind-confirm';
 import type { Failed } from '../../../views/components/failed';
 import { stageResults } from './stage-results';
 
 const sid = (c: Context) => c.req.param('sid')!;
+
+/** Each stage form's text (as the page fills it), or null when the stage no longer has that data. */
+const formText: Record<string, (s: Stage) => Record<string, string> | null> = {
+  stage: stageValues,
+  pa: (s) => (s.kind === 'final' && s.pa ? paValues(s.pa) : null),
+  lpf: (s) => (s.kind === 'lpf' && s.lpf ? lpfValues(s.lpf) : null),
+  relay: (s) => (s.kind === 'tr' && s.relay ? relayValues(s.relay) : null),
+};
 
 function withStage(p: Project, id: string, f: (s: Stage) => Stage | { errors: FieldErrors }): ChangeResult {
   const stage = p.stages.find((s) => s.id === id);
@@ -26,36 +38,15 @@ function withStage(p: Project, id: string, f: (s: Stage) => Stage | { errors: Fi
   return { ...p, stages: p.stages.map((s) => (s.id === id ? next : s)) };
 }
 
-/** The stage without the data of other kinds: a stage changed from final to driver no longer carries (and is no
- *  longer evaluated with) hidden PA data; the new kind gets its starting data from withKindDefaults. */
-function ownData(s: Stage, kind: Stage['kind']): Stage {
-  const { pa, lpf, relay, ...rest } = s;
-  return { ...rest, ...(kind === 'final' && pa ? { pa } : {}), ...(kind === 'lpf' && lpf ? { lpf } : {}), ...(kind === 'tr' && relay ? { relay } : {}) };
-}
+/** The stage form as typed (version included), without the kind-change question's own answers. */
+const typedStage = (values: Record<string, string>) =>
+  Object.fromEntries(Object.entries(values).filter(([k]) => k !== 'confirmDrop' && k !== 'keepKind'));
+
+const railName = (p: Project) => (id: string) => p.supply.rails.find((r) => r.id === id)?.name ?? id;
 
 function parseLoads(p: Project, values: Record<string, string>): { loads: StageLoad[] } | { errors: FieldErrors } {
-  const errors: FieldErrors = {};
-  const loads: StageLoad[] = [];
-  const railIds = new Set(p.supply.rails.map((r) => r.id));
-  for (let i = 0; `rail${i}` in values; i++) {
-    const railId = values[`rail${i}`];
-    if (!railId) continue;
-    if (!railIds.has(railId)) {
-      errors[`rail${i}`] = 'That rail no longer exists; choose another.';
-      continue;
-    }
-    const currentA = { receive: 0, keyUp: 0, keyDown: 0 };
-    for (const m of MODES) {
-      const key = `l${i}_${m}`;
-      const raw = values[key] ?? '';
-      if (raw.trim() === '') continue; // an empty current in a new row means 0 A
-      const r = num('A', { label: 'Current', min: 0, max: 100 }).safeParse(raw);
-      if (r.success) currentA[m] = r.data;
-      else errors[key] = r.error.issues[0].message;
-    }
-    loads.push({ railId, currentA });
-  }
-  return Object.keys(errors).length ? { errors } : { loads };
+  const r = readLoads(new Set(p.supply.rails.map((x) => x.id)), values);
+  return r.ok ? { loads: r.loads } : { errors: r.errors };
 }
 
 /** A stage deleted in another window: the same message as a page and as the htmx swap, with the way back. */
@@ -97,6 +88,17 @@ export function stageRoutes(deps: Deps) {
       form,
       schema,
       change,
+      // the form's text for a project (null when the stage or its data is gone): saves from an older version
+      // merge field by field; load rows are numbered, so a row's fields belong to its rail (rowOf)
+      values: (p) => {
+        const stage = p.stages.find((s) => s.id === sid(c));
+        return stage ? (formText[form]?.(stage) ?? null) : null;
+      },
+      rowOf: (f) => {
+        const row = /^l(\d+)_/.exec(f);
+        return row ? `rail${row[1]}` : undefined;
+      },
+      gone: { message: 'Not saved: this stage no longer exists (deleted in another tab or window?). Nothing was changed.', back: (p) => `/projects/${p.id}` },
       redirect: (p) => `/projects/${p.id}/stages/${sid(c)}`,
       partial: (p, f, n) => partial(p, c)(f, n),
       page: (p, f, n) => page(p, c)(f, n),
@@ -108,32 +110,88 @@ export function stageRoutes(deps: Deps) {
     return sendPage(c, page(p, c)(undefined, doneNotice(c)));
   });
 
-  app.post(
-    '/projects/:id/stages/:sid',
-    edit('stage', z.record(z.string(), z.string()), (p, values, c) => {
-      const general = parseForm(stageSchema, values);
-      const loads = parseLoads(p, values);
-      const errors = { ...(general.ok ? {} : general.errors), ...('errors' in loads ? loads.errors : {}) };
-      if (!general.ok || 'errors' in loads) return { errors };
-      const d = general.data;
-      return withStage(p, sid(c), (s) => withKindDefaults(p, { ...ownData(s, d.kind), name: d.name, kind: d.kind, notes: d.notes, dissipationW: d.dissipation, loads: loads.loads }));
-    }),
-  );
+  const saveStage = edit('stage', z.record(z.string(), z.string()), (p, values, c) => {
+    const general = parseForm(stageSchema, values);
+    const loads = parseLoads(p, values);
+    const errors = { ...(general.ok ? {} : general.errors), ...('errors' in loads ? loads.errors : {}) };
+    if (!general.ok || 'errors' in loads) return { errors };
+    const d = general.data;
+    return withStage(p, sid(c), (s) => {
+      // The question is asked before this runs for a form of the current version; a form from an older version
+      // (merged with changes made meanwhile) is refused here instead, and its next save asks.
+      const dropped = values.confirmDrop === '1' || d.kind === s.kind ? [] : droppedByKindChange(s, d.kind);
+      if (dropped.length) {
+        const what = dropped.map((x) => x.what).join(' and ');
+        const to = STAGE_KIND_LABELS[d.kind];
+        const message = `Not saved: changing the kind to ${to} drops this stage’s ${what}. Save again to see it.`;
+        return { errors: { kind: message } };
+      }
+      const typed = { name: d.name, kind: d.kind, notes: d.notes, dissipationW: d.dissipationW, loads: loads.loads };
+      return withKindDefaults(p, { ...keepOwnData(s, d.kind), ...typed });
+    });
+  });
+
+  /** A valid stage form that changes the kind of a stage with PA, filter or relay data, not yet confirmed: the
+   *  question (what is dropped, with both answers); undefined when there is nothing to ask. */
+  const kindChangeQuestion = (p: Project, stage: Stage, values: Record<string, string>) => {
+    // a form from an older version is merged by projectEdit first; the change itself refuses an unconfirmed drop
+    if (values.confirmDrop === '1' || values.version !== String(p.version)) return undefined;
+    const general = parseForm(stageSchema, values);
+    if (!general.ok || 'errors' in parseLoads(p, values) || general.data.kind === stage.kind) return undefined;
+    const dropped = droppedByKindChange(stage, general.data.kind, railName(p));
+    if (!dropped.length) return undefined;
+    const [kind, typed] = [general.data.kind, typedStage(values)];
+    return <KindChangeConfirm project={p} stage={stage} newKind={kind} dropped={dropped} values={typed} />;
+  };
+
+  /** "Keep the kind": the stage form again with everything typed except the new kind; nothing is saved. */
+  const keepKind = (p: Project, stage: Stage, values: Record<string, string>): Failed => {
+    const stale = Number(values.version) !== p.version;
+    const note =
+      'This project was changed in another tab or window meanwhile: the page shows the stored project with your ' +
+      'entries in this form; check them before saving.';
+    const errors: FieldErrors = stale ? { _form: note } : {};
+    const state = { values: { ...typedStage(values), kind: stage.kind }, errors };
+    return { form: 'stage', state };
+  };
+
+  app.post('/projects/:id/stages/:sid', async (c) => {
+    const values = await formValues(c);
+    const p = await loadProject(deps.database.db, c.req.param('id'));
+    const stage = p?.stages.find((s) => s.id === sid(c));
+    if (p && stage && values.keepKind === '1') {
+      const failed = keepKind(p, stage, values);
+      const kind = STAGE_KIND_LABELS[stage.kind];
+      const notice =
+        `Not saved yet: the kind stays ${kind}. ` + 'Your other entries are below; press Save stage to save them.';
+      return isHtmx(c) ? sendPartial(c, partial(p, c)(failed, notice)) : sendPage(c, page(p, c)(failed, notice));
+    }
+    const question = p && stage ? kindChangeQuestion(p, stage, values) : undefined;
+    if (question) {
+      if (isHtmx(c)) return sendPartial(c, question);
+      return sendPage(
+        c,
+        <Layout title={`Change the kind of ${stage!.name}?`} project={p!} section="overview">
+          {question}
+        </Layout>,
+      );
+    }
+    return saveStage(c);
+  });
 
   app.post(
     '/projects/:id/stages/:sid/pa',
     edit('pa', paSchema, (p, d, c) => {
       if (!p.supply.rails.some((r) => r.id === d.railId)) return { errors: { railId: 'That rail no longer exists; choose another.' } };
-      if (d.saturation === null && d.rdsOn === null) return { errors: { saturation: 'Give either the saturation voltage or Rds(on).' } };
-      return withStage(p, sid(c), (s) => ({ ...s, pa: toPa(d) }));
+      return withStage(p, sid(c), (s) => ({ ...s, pa: d }));
     }),
   );
-  app.post('/projects/:id/stages/:sid/lpf', edit('lpf', lpfSchema, (p, d, c) => withStage(p, sid(c), (s) => ({ ...s, lpf: toLpf(d) }))));
+  app.post('/projects/:id/stages/:sid/lpf', edit('lpf', lpfSchema, (p, d, c) => withStage(p, sid(c), (s) => ({ ...s, lpf: d }))));
   app.post(
     '/projects/:id/stages/:sid/relay',
     edit('relay', relaySchema, (p, d, c) => {
       if (d.coilRailId && !p.supply.rails.some((r) => r.id === d.coilRailId)) return { errors: { coilRailId: 'That rail no longer exists; choose another.' } };
-      return withStage(p, sid(c), (s) => ({ ...s, relay: toRelay(d) }));
+      return withStage(p, sid(c), (s) => ({ ...s, relay: d }));
     }),
   );
 

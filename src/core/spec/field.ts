@@ -1,0 +1,105 @@
+// One definition per input: a field says its SI unit, the unit shown beside the box, its range, whether it may be
+// empty, its label, help text and default. Forms, the project file, the database load and core's own checks are all
+// derived from these definitions (see derive-*.ts), so a limit is written once.
+
+/** The unit a builder reads and types: a bare number typed in the box is read in this unit. */
+export interface DisplayUnit {
+  symbol: string; // shown beside the box: 'mA', 'µF', '%', 'V'
+  scale: number; // SI value of one display unit: mA -> 1e-3, µF -> 1e-6, % -> 0.01
+}
+
+interface Base {
+  label: string; // the field's name in words, used in every message about it
+  help?: string; // one line shown under the box
+  /** form field name when it differs from the model key (kept stable for existing pages and saved links) */
+  form?: string;
+}
+
+export interface NumberField extends Base {
+  type: 'number';
+  unit: string; // SI unit symbol the parser understands after a number ('A', 'F', 'V', 'Ω', 'Hz', '%', '')
+  display: DisplayUnit;
+  min: number; // SI
+  max: number; // SI
+  exclusiveMin?: boolean; // the value must be greater than min
+  integer?: boolean;
+  optional?: boolean; // an empty box is stored as null (meaning "not chosen yet" / "compute it")
+  default: number | null;
+  example?: string; // an example in the display unit, e.g. '350' or '4700'
+}
+
+export interface ChoiceField extends Base {
+  type: 'choice';
+  options: readonly (readonly [string, string])[]; // [stored value, text shown]
+  default: string;
+}
+
+export interface TextField extends Base {
+  type: 'text';
+  max: number;
+  required: boolean;
+  multiline?: boolean;
+  default: string;
+}
+
+export interface BoolField extends Base {
+  type: 'bool';
+  default: boolean;
+}
+
+/** An id of another item of the project (a rail, a stage); existence is checked against the project. */
+export interface RefField extends Base {
+  type: 'ref';
+  to: 'rail' | 'winding' | 'stage' | 'part';
+  optional?: boolean;
+  default: string | null;
+}
+
+export type Field = NumberField | ChoiceField | TextField | BoolField | RefField;
+
+export interface FieldError {
+  field: string; // model key path, e.g. 'mount.thetaSaKPerW'
+  label: string;
+  message: string; // a sentence naming the field
+}
+
+export interface Spec {
+  name: string; // stable id, e.g. 'relay'
+  label: string; // what the object is, in words: 'T/R relay data'
+  fields: Record<string, Field>; // model key path -> field
+  /** rules across fields (odd filter order, one of two values given); messages name the field */
+  refine?: (value: Record<string, unknown>) => FieldError[];
+  /** where the stored shape differs from the fields (three checkboxes for a list of modes): stored <-> fields */
+  view?: { from: (stored: Record<string, unknown>) => Record<string, unknown>; to: (fields: Record<string, unknown>) => Record<string, unknown> };
+}
+
+export const defineSpec = <S extends Spec>(spec: S): S => spec;
+
+/** The form name of a field (the model key unless the spec names another). */
+export const formName = (key: string, f: Field): string => f.form ?? key;
+
+// Display units used across the specs.
+export const U = {
+  V: { symbol: 'V', scale: 1 },
+  mV: { symbol: 'mV', scale: 1e-3 },
+  A: { symbol: 'A', scale: 1 },
+  mA: { symbol: 'mA', scale: 1e-3 },
+  W: { symbol: 'W', scale: 1 },
+  ohm: { symbol: 'Ω', scale: 1 },
+  uF: { symbol: 'µF', scale: 1e-6 },
+  pF: { symbol: 'pF', scale: 1e-12 },
+  nHt2: { symbol: 'nH/t²', scale: 1e-9 },
+  Hz: { symbol: 'Hz', scale: 1 },
+  MHz: { symbol: 'MHz', scale: 1e6 },
+  ms: { symbol: 'ms', scale: 1e-3 },
+  s: { symbol: 's', scale: 1 },
+  pct: { symbol: '%', scale: 0.01 },
+  KW: { symbol: '°C/W', scale: 1 },
+  C: { symbol: '°C', scale: 1 },
+  dB: { symbol: 'dB', scale: 1 },
+  dBi: { symbol: 'dBi', scale: 1 },
+  dBc: { symbol: 'dBc', scale: 1 },
+  Ah: { symbol: 'Ah', scale: 1 },
+  none: { symbol: '', scale: 1 },
+  wpm: { symbol: 'WPM', scale: 1 },
+} as const satisfies Record<string, DisplayUnit>;

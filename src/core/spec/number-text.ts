@@ -1,0 +1,95 @@
+// Text <-> SI value for one number field: a bare number is read in the field's display unit (mA, µF, %); a number
+// with an SI prefix, an IEC 60062 letter code (4k7, 100n) or a unit symbol is read as written. A refused value gets
+// a "did you mean …?" where a common unit slip explains it.
+import { formatValue, parseValue } from '../units';
+import type { NumberField } from './field';
+import { inputText, percentText } from './input-text';
+
+export type NumberParse = { ok: true; value: number } | { ok: false; message: string };
+
+const BARE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+/** SI value of `text` for field `f`, or a message (without the label) saying what is wrong. */
+export function readNumber(text: string, f: NumberField): NumberParse {
+  const raw = String(text ?? '').trim();
+  const compact = raw.replace(/\s+/g, '').replace(',', '.');
+  let value: number;
+  if (BARE.test(compact) && !/^\d{1,3},\d{3}$/.test(raw.replace(/\s+/g, ''))) {
+    value = inDisplay(Number(compact), f.display.scale);
+  } else {
+    const r = parseValue(raw, f.unit);
+    if (!r.ok) return { ok: false, message: r.message.replace(/a number such as [^:;]+$/, exampleText(f)) };
+    value = f.unit === '%' ? r.value * 0.01 : r.value;
+  }
+  if (!Number.isFinite(value)) return { ok: false, message: `is out of range: enter ${exampleText(f)}` };
+  const problem = rangeProblem(value, f);
+  if (!problem) return { ok: true, value };
+  const slip = BARE.test(compact) ? unitSlip(Number(compact), f) : '';
+  return { ok: false, message: `${problem}; you entered "${raw}"${slip}` };
+}
+
+/** Why `value` (SI) is outside the field's range, or '' when it is inside. */
+export function rangeProblem(value: number, f: NumberField): string {
+  if (!Number.isFinite(value)) return 'is not a usable number';
+  if (f.integer && !Number.isInteger(value / (f.display.scale === 0.01 ? 0.01 : 1))) return 'must be a whole number';
+  const lowOk = f.exclusiveMin ? value > f.min : value >= f.min;
+  if (lowOk && value <= f.max) return '';
+  return `must be ${f.exclusiveMin ? 'more than' : 'at least'} ${show(f.min, f)} and at most ${show(f.max, f)}`;
+}
+
+/** A limit as the builder reads it: in the display unit, or with a prefix for very large or small values. */
+export function show(value: number, f: NumberField): string {
+  if (f.unit === '%') return `${percentText(value)} %`;
+  if (hasPrefixes(f.unit)) return formatValue(value, f.unit, 4);
+  const sym = f.display.symbol;
+  return `${trim(value / f.display.scale)}${sym ? ' ' + sym : ''}`;
+}
+
+// divide by the reciprocal for sub-unit scales so "350" mA is exactly 0.35 A (350 * 1e-3 is not)
+const inDisplay = (n: number, scale: number) => (scale < 1 ? n / Math.round(1 / scale) : n * scale);
+
+const hasPrefixes = (unit: string) => !['°C', 'K/W', 'dB', '%', ''].includes(unit);
+const trim = (x: number) => String(Number(x.toPrecision(6)));
+
+/** The unit slips builders make, most likely first: capacitors are thought of in µF, pF or nF; currents in mA. */
+const SLIPS: Record<string, [number, string][]> = {
+  F: [[1e-6, 'µ'], [1e-12, 'p'], [1e-9, 'n']],
+  H: [[1e-6, 'µ'], [1e-9, 'n'], [1e-3, 'm']],
+  A: [[1e-3, 'm'], [1, ''], [1e-6, 'µ']],
+  V: [[1, ''], [1e-3, 'm'], [1e3, 'k']],
+  W: [[1, ''], [1e-3, 'm'], [1e3, 'k']],
+  Ω: [[1, ''], [1e3, 'k'], [1e6, 'M']],
+  Hz: [[1e6, 'M'], [1e3, 'k'], [1, '']],
+  s: [[1e-3, 'm'], [1, ''], [1e-6, 'µ']],
+};
+
+function unitSlip(typed: number, f: NumberField): string {
+  for (const [scale, prefix] of SLIPS[f.unit] ?? []) {
+    if (scale === f.display.scale) continue;
+    const v = typed * scale;
+    if (!rangeProblem(v, f)) return ` — did you mean ${trim(typed)} ${prefix}${f.unit}?`;
+  }
+  return '';
+}
+
+/** "a number in mA such as 350, or 1.2 A" — what to type in this box. */
+export function exampleText(f: NumberField): string {
+  const sym = f.display.symbol;
+  const ex = f.example ?? (f.default ? numberText(f.default, f) : '1');
+  return sym ? `a number in ${sym} such as ${ex}` : `a number such as ${ex}`;
+}
+
+/** The text put back into the box for a stored SI value; it parses back to exactly the same value. */
+export function numberText(value: number | null, f: NumberField): string {
+  if (value === null || !Number.isFinite(value)) return '';
+  if (f.unit === '%') return percentText(value);
+  if (f.display.scale !== 1) {
+    const bare = value / f.display.scale;
+    const t = String(Number(bare.toPrecision(12)));
+    const back = readNumber(t, { ...f, min: -Infinity, max: Infinity, exclusiveMin: false, integer: false });
+    if (Math.abs(bare) >= 0.1 && Math.abs(bare) < 1e4 && back.ok && back.value === value) return t;
+  }
+  const text = inputText(value, f.unit);
+  // a bare fallback would be read in the display unit: give it the SI unit symbol
+  return f.display.scale !== 1 && BARE.test(text) ? `${text} ${f.unit}` : text;
+}

@@ -1,0 +1,48 @@
+// The final amplifier's data on a stage of kind 'final'.
+import { defineSpec, U } from './field';
+import { choice, num, optNum, ref } from './make';
+
+export const mountFields = (tjMinC: number) => ({
+  'mount.thetaJcKPerW': num('θjc junction–case', 'K/W', U.KW, 0, 100, 2, { form: 'thetaJc' }),
+  'mount.thetaCsKPerW': num('θcs case–heatsink', 'K/W', U.KW, 0, 100, 1, { form: 'thetaCs', help: 'washer and grease' }),
+  'mount.thetaSaKPerW': optNum('Heatsink θsa', 'K/W', U.KW, 0, 1000, null, {
+    form: 'thetaSa',
+    exclusiveMin: true,
+    help: 'empty = tell me the heatsink I need',
+  }),
+  'mount.tjMaxC': num('Tj max', '°C', U.C, tjMinC, 250, 150, { form: 'tjMax' }),
+});
+
+export const paSpec = defineSpec({
+  name: 'pa',
+  label: 'Final amplifier data',
+  fields: {
+    topology: choice('Topology', [['push-pull', 'Push-pull'], ['single-ended', 'Single-ended']], 'push-pull'),
+    amplifierClass: choice('Class', [['B', 'B'], ['C', 'C'], ['D', 'D (switching)'], ['E', 'E (switching)']], 'C'),
+    railId: ref('Fed from rail', 'rail', false),
+    devices: num('Devices', '', U.none, 1, 16, 2, { integer: true, example: '2' }),
+    saturationV: optNum('Saturation voltage', 'V', U.V, 0, 100, 1, { form: 'saturation', help: 'or give Rds(on)' }),
+    rdsOnOhm: optNum('Rds(on)', 'Ω', U.ohm, 0, 100, null, { form: 'rdsOn' }),
+    turnsRatio: optNum('Output turns ratio (sec : full pri)', '', U.none, 0.05, 20, null, {
+      form: 'turnsRatio',
+      help: 'empty = design it for the target power',
+      example: '1.5',
+    }),
+    loadOhm: num('Load', 'Ω', U.ohm, 0.1, 10_000, 50, { form: 'load' }),
+    // Common practice, no published source: below 5 % a "PA" is a heater; above 100 % is impossible
+    efficiency: optNum('Drain efficiency', '%', U.pct, 0.05, 1, null, { help: 'empty = default for the class' }),
+    deviceVdsMaxV: num('Device V(BR)DSS', 'V', U.V, 0, 10_000, 100, { form: 'vdsMax', exclusiveMin: true }),
+    deviceIdMaxA: num('Device max drain current', 'A', U.A, 0, 1000, 5, { form: 'idMax', exclusiveMin: true }),
+    biasIdleMaxA: num('Bias preset max idle current', 'A', U.mA, 0, 100, 0.05, { form: 'biasIdle', example: '50' }),
+    referencePowerW: num('Compare with', 'W', U.W, 0, 1e6, 5, { form: 'referencePower', exclusiveMin: true }),
+    ...mountFields(25),
+  },
+  refine: (v) => {
+    const errors = [];
+    if (v.saturationV === null && v.rdsOnOhm === null)
+      errors.push({ field: 'saturationV', label: 'Saturation voltage', message: 'Saturation voltage: give it or Rds(on) (or both)' });
+    if (v.topology === 'push-pull' && typeof v.devices === 'number' && v.devices < 2)
+      errors.push({ field: 'devices', label: 'Devices', message: 'Devices: a push-pull stage has at least 2' });
+    return errors;
+  },
+});
