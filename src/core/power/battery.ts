@@ -2,6 +2,7 @@
 import type { Finding } from '../findings';
 import type { BatteryRail, PerMode } from '../model';
 import { safeDuty } from './corners';
+import { quotient } from '../numeric';
 
 export interface BatteryRuntime {
   /** Average current over the receive/transmit split (A). */
@@ -16,6 +17,12 @@ export interface BatteryRuntime {
  * Runtime = usable charge / average current; the transmit current is the CW duty-weighted mean of key-down and key-up.
  * Source: charge balance Q = I t; CW duty factor 0.40 from FCC OET Bulletin 65 Supplement B (1997), Table 2 (ref §2.3 [C2]).
  */
+/**
+ * Average current below which no runtime is given, A. Common practice, no published source: below 1 µA the battery's
+ * own self-discharge, not the rig, sets how long it lasts.
+ */
+export const NEGLIGIBLE_CURRENT_A = 1e-6;
+
 export function batteryRuntime(battery: BatteryRail, outputA: PerMode, keyingDuty: number, transmitFraction: number): BatteryRuntime {
   const d = safeDuty(keyingDuty);
   const tx = Number.isFinite(transmitFraction) ? Math.min(1, Math.max(0, transmitFraction)) : 0.2;
@@ -23,8 +30,9 @@ export function batteryRuntime(battery: BatteryRail, outputA: PerMode, keyingDut
   const transmitA = clean(outputA.keyDown) * d + clean(outputA.keyUp) * (1 - d);
   const averageA = (1 - tx) * clean(outputA.receive) + tx * transmitA;
   const usableAh = clean(battery.capacityAh) * Math.min(1, clean(battery.usableFraction));
-  const runtimeS = averageA > 0 ? (usableAh * 3600) / averageA : 0;
-  return { averageA, transmitA, runtimeS: Number.isFinite(runtimeS) ? runtimeS : 0 };
+  // 0 = not computed: batteryFindings says why (a subnormal average current made the quotient Infinity)
+  const runtimeS = quotient(usableAh * 3600, averageA, NEGLIGIBLE_CURRENT_A) ?? 0;
+  return { averageA, transmitA, runtimeS };
 }
 
 /** Terminal voltage at end of discharge with the key-down current through the internal resistance (V). */
@@ -55,6 +63,14 @@ export function batteryFindings(battery: BatteryRail, requiredMinV: number, load
     } else {
       out.push({ ...base, severity: 'ok', message: `At end of discharge under key-down load (${loadedEnd.toFixed(2)} V) the regulators still have their headroom.` });
     }
+  }
+  if (runtime.runtimeS === 0 && battery.capacityAh > 0 && !(runtime.averageA >= NEGLIGIBLE_CURRENT_A)) {
+    out.push({
+      severity: 'ok', rule: 'battery.runtime', subject, value: runtime.averageA, limit: NEGLIGIBLE_CURRENT_A, unit: 'A',
+      source: 'Charge balance Q = I t',
+      message: 'No runtime given: the rig draws almost no current from the battery (under 1 µA on average), '
+        + 'so self-discharge sets how long it lasts.',
+    });
   }
   if (runtime.runtimeS > 0) {
     out.push({ severity: 'ok', rule: 'battery.runtime', subject, value: runtime.runtimeS, limit: null, unit: 's', source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2)', message: `About ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ${(runtime.averageA * 1000).toFixed(0)} mA average.` });

@@ -19,6 +19,13 @@ describe('battery runtime', () => {
   it('no load gives runtime 0 (not Infinity)', () => {
     expect(batteryRuntime(bat, { receive: 0, keyUp: 0, keyDown: 0 }, 0.4, 0.2).runtimeS).toBe(0);
   });
+  it('a subnormal load (5e-324 A) gives no runtime and a finding that says why (regression: Infinity, then a silent 0)', () => {
+    const rt = batteryRuntime(bat, { receive: 5e-324, keyUp: 5e-324, keyDown: 5e-324 }, 0.4, 0.2);
+    expect(rt.runtimeS).toBe(0);
+    const f = batteryFindings(bat, 0, loadedEndV(bat, 0), rt).filter((x) => x.rule === 'battery.runtime');
+    expect(f).toHaveLength(1);
+    expect(f[0].message).toMatch(/No runtime given/);
+  });
   it('loaded end voltage = 10.4 - 1.0 x 0.04 = 10.36 V', () => {
     near(loadedEndV(bat, 1), 10.36, 1e-12, 'V');
   });
