@@ -5,6 +5,7 @@ import type { Project, PerMode, Rail, RegulatedRail, Mode } from './model';
 import { MODES } from './model';
 import type { Finding } from './findings';
 import { regulatorOutputV, regulatorInputCurrentA } from './power/regulator';
+import { rectifiedEstimateV } from './role-defaults';
 
 export interface LoadContribution {
   stageId: string;
@@ -71,9 +72,8 @@ export function railNominalV(rail: Rail, project: Project): number {
   if (rail.kind === 'regulated') return regulatorOutputV(rail.setting, rail.quiescentA);
   const winding = project.supply.transformers.flatMap((t) => t.windings).find((w) => w.id === rail.windingId);
   if (!winding) return 0;
-  const diodes = rail.topology === 'bridge' ? 2 : 1;
-  // Capacitor-input rectifier: DC ~ peak of the rated secondary minus the conducting diode drops
-  return Math.max(0, Math.SQRT2 * winding.ratedVrms - diodes * rail.diodeDropV);
+  // Capacitor-input rectifier: DC ~ peak of the rated secondary minus the conducting diode drops (REFERENCE-VALUES §4.1)
+  return Math.max(0, rectifiedEstimateV(winding.ratedVrms, rail.topology, rail.diodeDropV));
 }
 
 /** Lowest voltage a rail may present to a switching regulator it feeds (budget estimate). */

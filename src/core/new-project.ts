@@ -1,5 +1,6 @@
 // A fresh project with sensible defaults (pure: ids and clock come from the caller).
 import type { Project, Mains, RfSettings } from './model';
+import { paDefaultRailId, relayCoilDefaultRailId } from './role-defaults';
 
 export const MAINS_PRESETS: Record<string, Mains | null> = {
   '230-50': { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 },
@@ -136,11 +137,15 @@ export function defaultRelay(coilRailId: string | null): import('./model').Relay
   };
 }
 
-/** A stage of kind final, lpf or tr gets its kind's data (with starting values) when it has none. */
+/**
+ * A stage of kind final, lpf or tr gets its kind's data (with starting values) when it has none. The PA feeds from
+ * the highest-voltage rail that is not a regulator's raw input (one of the stage's own load rails when one
+ * qualifies), the relay coil from the signal rail (role-defaults.ts). With no such rail the PA has no rail ('') and
+ * the coil none (null): the evaluation reports either as a failure instead of leaving the current out.
+ */
 export function withKindDefaults(p: Project, s: import('./model').Stage): import('./model').Stage {
-  const firstRail = p.supply.rails[0]?.id ?? '';
-  if (s.kind === 'final' && !s.pa) return { ...s, pa: defaultPa(s.loads[0]?.railId ?? firstRail) };
+  if (s.kind === 'final' && !s.pa) return { ...s, pa: defaultPa(paDefaultRailId(p, s.loads.map((l) => l.railId)) ?? '') };
   if (s.kind === 'lpf' && !s.lpf) return { ...s, lpf: defaultLpfParams() };
-  if (s.kind === 'tr' && !s.relay) return { ...s, relay: defaultRelay(s.loads[0]?.railId ?? null) };
+  if (s.kind === 'tr' && !s.relay) return { ...s, relay: defaultRelay(relayCoilDefaultRailId(p)) };
   return s;
 }

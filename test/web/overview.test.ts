@@ -50,13 +50,16 @@ describe('overview page', () => {
     expect(await loadProject(database.db, ID)).toEqual(before);
   });
 
-  it('a stale version is refused with a clear message; the first save stays', async () => {
+  it('a stale save of the same field is refused with both values shown; the first save stays', async () => {
     const { post, database } = await demoApp();
     expect((await post(`/projects/${ID}/stages/st-rx/loads`, { version: '1', l0_receive: '50 mA', l0_keyUp: '12 mA', l0_keyDown: '12 mA' })).status).toBe(303);
     const stale = await post(`/projects/${ID}/stages/st-rx/loads`, { version: '1', l0_receive: '70 mA', l0_keyUp: '12 mA', l0_keyDown: '12 mA' }, { 'HX-Request': 'true' });
     expect(stale.status).toBe(409);
     const html = await stale.text();
-    expect(html).toContain('changed in another tab or window');
+    // the same field changed by both: refused with both values shown and the typed one kept
+    expect(html).toContain('someone else changed the same field');
+    expect(html).toContain('Changed by someone else to “50 mA”');
+    expect(html).toContain('you typed “70 mA”');
     expect(html).toContain('value="70 mA"');
     const p = await loadProject(database.db, ID);
     expect(p!.stages[0].loads[0].currentA.receive).toBeCloseTo(0.05, 12);
@@ -101,7 +104,8 @@ describe('overview page', () => {
     const { post, get, database } = await demoApp();
     expect((await post(`/projects/${ID}/stages`, { version: '1', kind: 'final', name: 'Second final' })).status).toBe(303);
     const added = (await loadProject(database.db, ID))!.stages.at(-1)!;
-    expect(added.pa?.railId).toBe('rail-raw'); // the first rail, until the builder chooses
+    // the highest-voltage rail that is not a regulator's raw input (role-defaults.ts), not the first rail in the list
+    expect(added.pa?.railId).toBe('rail-pa');
     const html = await (await get(`/projects/${ID}/stages/${added.id}`)).text();
     expect(html).toContain('Final amplifier data');
   });
