@@ -20,6 +20,7 @@ import { netlistRoutes } from './web/routes/netlists';
 import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
+import { isBusyError } from './db/client';
 import { Layout } from '../views/layout';
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -90,6 +91,21 @@ export function buildApp(deps: Deps) {
     if (err instanceof HTTPException) {
       if (err.status === 403) return c.text('Refused: this request did not come from a Rigwright page (cross-site request protection). Nothing was changed.', 403);
       return err.getResponse();
+    }
+    // Another app process kept the database locked through every retry: nothing was written.
+    if (isBusyError(err)) {
+      const msg = 'The database is busy; nothing was saved. Try again.';
+      if (c.req.header('HX-Request') === 'true') return c.html(`<div class="form-errors" role="alert"><p>${msg}</p></div>`, 503);
+      return sendPage(
+        c,
+        <Layout title="Busy">
+          <section class="card">
+            <h1>Busy</h1>
+            <p>{msg}</p>
+          </section>
+        </Layout>,
+        503,
+      );
     }
     console.error(err);
     return sendPage(

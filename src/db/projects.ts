@@ -1,6 +1,7 @@
-// Rows <-> core Project. A project is written whole inside one serialised transaction, guarded by its
-// version number (optimistic concurrency): a stale write is refused, never merged silently.
-import { eq, asc, inArray } from 'drizzle-orm';
+// Rows <-> core Project. A project is written whole inside one serialised transaction. Each write bumps its
+// version number and keeps a snapshot of the stored result (project_versions), so the web layer can merge a
+// form loaded at an older version field by field (src/web/edit.ts); a plain version check refuses stale writes.
+import { eq, asc, inArray, and, lte } from 'drizzle-orm';
 import type { Database, Tx, Db } from './client';
 import * as t from './schema';
 import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing } from '../core/model';
@@ -189,18 +190,60 @@ function projectColumns(p: Project) {
   };
 }
 
+/** How many versions of each project keep a snapshot: a form older than that can no longer be merged. */
+export const KEEP_VERSIONS = 50;
+
+/** The stored project as it was at `version`, or null when that snapshot is not (or no longer) kept. */
+export async function loadSnapshot(db: Db | Tx, id: string, version: number): Promise<Project | null> {
+  const [row] = await db
+    .select({ snapshot: t.projectVersions.snapshot })
+    .from(t.projectVersions)
+    .where(and(eq(t.projectVersions.projectId, id), eq(t.projectVersions.version, version)));
+  return row ? (row.snapshot as Project) : null;
+}
+
+/** Keep what was stored at this version (read back, so it is exactly what a page shows) and drop old ones. */
+async function keepSnapshot(tx: Tx, id: string): Promise<Project> {
+  const stored = await loadProject(tx, id);
+  if (!stored) throw new NotFound(`No project ${id}`);
+  await tx.insert(t.projectVersions).values({ projectId: id, version: stored.version, snapshot: stored }).onConflictDoNothing();
+  await tx.delete(t.projectVersions).where(and(eq(t.projectVersions.projectId, id), lte(t.projectVersions.version, stored.version - KEEP_VERSIONS)));
+  return stored;
+}
+
 /** Insert a complete new project (import, clone, seed). Atomic: all rows or none. */
 export async function insertProject(database: Database, project: Project, nowIso: string): Promise<Project> {
-  await database.write(async (tx) => {
+  return database.write(async (tx) => {
     await tx.insert(t.projects).values({ id: project.id, ...projectColumns(project), version: 1, createdAt: nowIso, updatedAt: nowIso });
     await writeChildren(tx, project);
+    return keepSnapshot(tx, project.id);
   });
-  return { ...project, version: 1 };
 }
 
 /**
- * Apply `change` to the stored project if its version still equals `expectedVersion`; bumps the version.
- * `change` returns the new project (pure) and runs inside the write transaction.
+ * Write `change(current)` over the stored project, whatever its version, and bump the version. `change` runs
+ * inside the write transaction on the latest stored project (again, if a busy lock makes the write retry);
+ * it may throw to write nothing. Returns the project as stored.
+ */
+export async function changeProject(
+  database: Database,
+  id: string,
+  change: (current: Project, tx: Tx) => Project | Promise<Project>,
+  nowIso: string,
+): Promise<Project> {
+  return database.write(async (tx) => {
+    const current = await loadProject(tx, id);
+    if (!current) throw new NotFound(`No project ${id}`);
+    const next = { ...(await change(current, tx)), id, version: current.version + 1 };
+    await tx.update(t.projects).set({ ...projectColumns(next), version: next.version, updatedAt: nowIso }).where(eq(t.projects.id, id));
+    await writeChildren(tx, next);
+    return keepSnapshot(tx, id);
+  });
+}
+
+/**
+ * Apply `change` to the stored project if its version still equals `expectedVersion` (else VersionConflict);
+ * bumps the version. `change` returns the new project (pure) and runs inside the write transaction.
  */
 export async function updateProject(
   database: Database,
@@ -209,15 +252,15 @@ export async function updateProject(
   change: (p: Project) => Project,
   nowIso: string,
 ): Promise<Project> {
-  return database.write(async (tx) => {
-    const current = await loadProject(tx, id);
-    if (!current) throw new NotFound(`No project ${id}`);
-    if (current.version !== expectedVersion) throw new VersionConflict(expectedVersion, current.version);
-    const next = { ...change(current), id, version: current.version + 1 };
-    await tx.update(t.projects).set({ ...projectColumns(next), version: next.version, updatedAt: nowIso }).where(eq(t.projects.id, id));
-    await writeChildren(tx, next);
-    return next;
-  });
+  return changeProject(
+    database,
+    id,
+    (current) => {
+      if (current.version !== expectedVersion) throw new VersionConflict(expectedVersion, current.version);
+      return change(current);
+    },
+    nowIso,
+  );
 }
 
 /** Delete a project and its rows. With `expectedVersion`, a project changed since then is refused (VersionConflict). */

@@ -1,6 +1,6 @@
 // Drizzle schema. Kind-specific parameters (regulator settings, PA/filter/relay data, part ratings) live in
 // JSON columns validated with zod at the edge, so the core types stay the single description of them.
-import { sqliteTable, text, integer, real, index } from 'drizzle-orm/sqlite-core';
+import { sqliteTable, text, integer, real, index, primaryKey } from 'drizzle-orm/sqlite-core';
 
 export const projects = sqliteTable('projects', {
   id: text('id').primaryKey(),
@@ -155,4 +155,18 @@ export const bomLines = sqliteTable(
     notes: text('notes').notNull().default(''),
   },
   (t) => [index('bom_lines_project').on(t.projectId)],
+);
+
+// The stored project as it was after each version (JSON of the core Project), so a form loaded at an older
+// version can be merged field by field with what was saved since. Only the last few per project are kept.
+export const projectVersions = sqliteTable(
+  'project_versions',
+  {
+    projectId: text('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    version: integer('version').notNull(),
+    snapshot: text('snapshot', { mode: 'json' }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.projectId, t.version] })],
 );

@@ -79,15 +79,18 @@ describe('a stage deleted in another window', () => {
     const before = (await loadProject(database.db, id))!;
     const fields = { version: String(before.version), name: 'Ghost', kind: 'receiver', notes: '', dissipation: '' };
     const page = await post(`/projects/${id}/stages/st-gone`, fields);
-    expect(page.status).toBe(422);
+    expect(page.status).toBe(409);
     const html = await page.text();
     expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
     expect(html).toContain('this stage no longer exists');
     expect(html).toContain(`href="/projects/${id}"`);
-    const partial = await post(`/projects/${id}/stages/st-gone`, fields, { 'HX-Request': 'true' });
+    expect(html).toContain('>Ghost</textarea>'); // what was typed is shown, to copy
+    const partial = await post(`/projects/${id}/stages/st-gone`, fields, { 'HX-Request': 'true', 'HX-Target': 'div#stage' });
+    expect(partial.status).toBe(409);
     const swap = await partial.text();
-    expect(swap.startsWith('<div id="stage">')).toBe(true);
+    expect(swap.startsWith('<section class="card" id="stage">')).toBe(true);
     expect(swap).toContain('this stage no longer exists');
+    expect(swap).toContain('>Ghost</textarea>');
     expect((await loadProject(database.db, id))!.version).toBe(before.version);
   });
 });

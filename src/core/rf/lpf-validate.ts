@@ -1,5 +1,6 @@
 // Validation of filter, PA and relay parameters: errors as values, for display beside form fields.
 import type { LpfParams, PaParams, RelayParams, RfSettings } from '../model';
+import { usablePositive } from '../numeric';
 
 export interface FieldError {
   /** Name of the offending field in the params object. */
@@ -73,13 +74,21 @@ export function validateRelayParams(p: RelayParams): FieldError[] {
   return e;
 }
 
+/**
+ * Smallest target power, W: the PA divides by it (load line, dB from target), and a subnormal such as 5e-324 W passed
+ * `> 0` and gave "Infinity dB". Common practice, no published source: 1 mW (0 dBm) is below any transmitter built here.
+ */
+export const MIN_TARGET_POWER_W = 1e-3;
+
 /** Project-level inputs the RF engine needs. */
 export function validateRfInputs(frequencyHz: number, powerW: number): FieldError[] {
   const e: FieldError[] = [];
   if (!(pos(frequencyHz) && frequencyHz >= 10e3 && frequencyHz <= 1e9)) {
     e.push({ field: 'frequencyHz', message: 'Operating frequency must be between 10 kHz and 1 GHz.' });
   }
-  if (!(pos(powerW) && powerW <= 10e3)) e.push({ field: 'targetPowerW', message: 'Target power must be above zero and at most 10 kW.' });
+  if (!(usablePositive(powerW, MIN_TARGET_POWER_W) && powerW <= 10e3)) {
+    e.push({ field: 'targetPowerW', message: 'Target power must be at least 1 mW and at most 10 kW.' });
+  }
   return e;
 }
 

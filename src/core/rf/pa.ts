@@ -1,7 +1,7 @@
 // Final amplifier: output power, turns ratio, DC input, dissipation, heatsink and device ratings.
 import type { Finding } from '../findings';
 import type { PaParams, Project } from '../model';
-import { validatePaParams, validateThermalInputs } from './lpf-validate';
+import { MIN_TARGET_POWER_W, validatePaParams, validateThermalInputs } from './lpf-validate';
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
@@ -112,7 +112,8 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     })));
   }
   const findings: Finding[] = [];
-  const target = project.targetPowerW > 0 ? project.targetPowerW : 0;
+  // 0 = no usable target (a subnormal one divided to Infinity dB): then a turns ratio must be entered (finding below)
+  const target = usablePositive(project.targetPowerW, MIN_TARGET_POWER_W) ? project.targetPowerW : 0;
   let turnsRatio: number;
   let idealTurnsRatio: number | null = null;
   let ratioOptions: RatioOption[] = [];

@@ -13,6 +13,7 @@ import { newId } from '../ids';
 import { lineSchema, lineErrors, lineFrom, mappingFrom, mergeImport } from '../bom-forms';
 import { Layout } from '../../../views/layout';
 import { BomBody } from '../../../views/pages/bom';
+import { lineValues } from '../../../views/components/bom-lines';
 import { ImportPreviewBody, type ImportPreviewProps } from '../../../views/components/bom-import';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
@@ -83,8 +84,13 @@ export function bomRoutes(deps: Deps) {
     return c.body(text, 200, { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileName}"` });
   });
 
-  app.post('/projects/:id/bom/lines', projectEdit(deps, { ...common, form: 'add-line', schema: lineSchema, change: (p, d) => lineChange(p, d, null) }));
-  app.post('/projects/:id/bom/lines/:lid', projectEdit(deps, { ...common, form: (c) => `line-${c.req.param('lid')}`, schema: lineSchema, change: (p, d, c) => lineChange(p, d, c.req.param('lid')!) }));
+  app.post('/projects/:id/bom/lines', projectEdit(deps, { ...common, form: 'add-line', schema: lineSchema, values: () => ({}), change: (p, d) => lineChange(p, d, null) }));
+  app.post('/projects/:id/bom/lines/:lid', projectEdit(deps, { ...common, form: (c) => `line-${c.req.param('lid')}`, schema: lineSchema,
+    values: (p, c) => {
+      const l = p.bom.find((x) => x.id === c.req.param('lid'));
+      return l ? lineValues(l) : null;
+    },
+    change: (p, d, c) => lineChange(p, d, c.req.param('lid')!) }));
 
   app.get('/projects/:id/bom/lines/:lid/delete', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));

@@ -11,7 +11,7 @@ import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { Layout, ProjectCrumb } from '../../../views/layout';
-import { OverviewBody } from '../../../views/pages/overview';
+import { OverviewBody, settingsValues, loadValues } from '../../../views/pages/overview';
 import type { Failed } from '../../../views/components/failed';
 import { newId } from '../ids';
 
@@ -76,6 +76,7 @@ export function overviewRoutes(deps: Deps) {
       ...common,
       form: 'settings',
       schema: settingsSchema,
+      values: settingsValues,
       change: (p, d) => ({
         ...p,
         name: d.name,
@@ -97,6 +98,7 @@ export function overviewRoutes(deps: Deps) {
       ...common,
       form: 'add-stage',
       schema: addStageSchema,
+      values: () => ({}),
       change: (p, d) => {
         const name = d.name || defaultStageName(d.kind);
         const stage = withKindDefaults(p, { id: newId('st'), kind: d.kind, name, notes: '', loads: [], dissipationW: null });
@@ -129,6 +131,16 @@ export function overviewRoutes(deps: Deps) {
       ...common,
       form: (c) => `loads-${c.req.param('sid')}`,
       schema: z.record(z.string(), z.string()),
+      // the currents of numbered rows; '#i' (never typed) names row i's rail, so a row that now feeds another
+      // rail is a conflict rather than a silent edit of the wrong row
+      values: (p, c) => {
+        const s = findStage(p, c.req.param('sid'));
+        return s ? { ...loadValues(s), ...Object.fromEntries(s.loads.map((l, i) => [`#${i}`, l.railId])) } : null;
+      },
+      rowOf: (f) => {
+        const row = /^l(\d+)_/.exec(f);
+        return row ? `#${row[1]}` : undefined;
+      },
       change: (p, values, c) => {
         const stage = findStage(p, c.req.param('sid'));
         if (!stage) return { errors: { _form: 'That stage no longer exists.' } };

@@ -11,6 +11,8 @@ import * as F from '../parts-forms';
 import { refusal } from '../supply-forms';
 import { Layout } from '../../../views/layout';
 import { PartsBody } from '../../../views/pages/parts';
+import { partValues, offerValues } from '../../../views/components/parts-part';
+import { costingValues } from '../../../views/components/parts-costing';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 
@@ -48,7 +50,7 @@ export function partsRoutes(deps: Deps) {
     return sendPage(c, partsPage(project, undefined, doneNotice(c), c.req.query('open')));
   });
 
-  app.post('/projects/:id/costing', projectEdit(deps, { ...common, form: 'costing', schema: F.costingSchema,
+  app.post('/projects/:id/costing', projectEdit(deps, { ...common, form: 'costing', schema: F.costingSchema, values: costingValues,
     change: (p, d) => {
       if (d.rates[p.currency.toUpperCase()] !== undefined) return { errors: { rates: `${p.currency} is the project currency; it needs no exchange rate` } };
       return { ...p, costing: { ...p.costing, attritionFraction: d.attrition, sparesPerLine: d.spares, exchangeRates: d.rates } };
@@ -56,7 +58,7 @@ export function partsRoutes(deps: Deps) {
   }));
 
   // ------------------------------------------------------------ suppliers
-  app.post('/projects/:id/suppliers', projectEdit(deps, { ...common, form: 'add-supplier', schema: F.supplierSchema,
+  app.post('/projects/:id/suppliers', projectEdit(deps, { ...common, form: 'add-supplier', schema: F.supplierSchema, values: () => ({}),
     change: (p, d) => {
       if (p.costing.suppliers.some((s) => sameName(s.name, d.name))) return { errors: { name: `Supplier “${d.name}” is already in the list` } };
       return withSuppliers(p, [...p.costing.suppliers, { name: d.name, shippingCents: d.shipping, currency: d.currency }]);
@@ -75,7 +77,7 @@ export function partsRoutes(deps: Deps) {
   }));
 
   // ------------------------------------------------------------ parts and offers
-  app.post('/projects/:id/parts', projectEdit(deps, { ...common, form: 'add-part', schema: F.partSchema,
+  app.post('/projects/:id/parts', projectEdit(deps, { ...common, form: 'add-part', schema: F.partSchema, values: () => ({}),
     partial: (p, f, n) => <PartsBody project={p} failed={f} notice={n && !f ? 'Part added: open it below to add supplier offers.' : n} openPart={f ? undefined : p.parts.at(-1)?.id} />,
     redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(p.parts.at(-1)?.id ?? '')}#part-${p.parts.at(-1)?.id ?? ''}`,
     change: (p, d) => withParts(p, [...p.parts, { id: newId('p'), description: d.description, category: d.category, ratings: d.ratings, offers: [] }]),
@@ -89,6 +91,10 @@ export function partsRoutes(deps: Deps) {
   });
 
   app.post('/projects/:id/parts/:pid', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `part-${c.req.param('pid')}`, schema: F.partSchema,
+    values: (p) => {
+      const part = p.parts.find((x) => x.id === c.req.param('pid'));
+      return part ? partValues(part) : null;
+    },
     change: (p, d, c) => {
       const pid = c.req.param('pid');
       if (!p.parts.some((x) => x.id === pid)) return gone('part');
@@ -97,6 +103,7 @@ export function partsRoutes(deps: Deps) {
   })(c));
 
   app.post('/projects/:id/parts/:pid/offers', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `add-offer-${c.req.param('pid')}`, schema: F.offerSchema,
+    values: (p) => (p.parts.some((x) => x.id === c.req.param('pid')) ? {} : null),
     change: (p, d, c) => {
       const pid = c.req.param('pid');
       if (!p.parts.some((x) => x.id === pid)) return gone('part');
@@ -105,6 +112,10 @@ export function partsRoutes(deps: Deps) {
   })(c));
 
   app.post('/projects/:id/parts/:pid/offers/:oid', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `offer-${c.req.param('oid')}`, schema: F.offerSchema,
+    values: (p) => {
+      const o = p.parts.find((x) => x.id === c.req.param('pid'))?.offers.find((x) => x.id === c.req.param('oid'));
+      return o ? offerValues(o, p.currency) : null;
+    },
     change: (p, d, c) => {
       const { pid, oid } = c.req.param();
       const part = p.parts.find((x) => x.id === pid);

@@ -9,7 +9,7 @@ import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { Layout } from '../../../views/layout';
-import { RfBody } from '../../../views/pages/rf';
+import { RfBody, rfSettingsValues } from '../../../views/pages/rf';
 import type { Failed } from '../../../views/components/failed';
 
 const rfSettingsSchema = z.object({
@@ -42,6 +42,7 @@ export function rfRoutes(deps: Deps) {
     projectEdit(deps, {
       form: 'rf-settings',
       schema: rfSettingsSchema,
+      values: rfSettingsValues,
       change: (p, d) => ({
         ...p,
         rf: {

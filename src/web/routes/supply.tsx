@@ -12,6 +12,9 @@ import { newId } from '../ids';
 import * as F from '../supply-forms';
 import { Layout } from '../../../views/layout';
 import { SupplyBody } from '../../../views/pages/supply';
+import { windingValues, transformerValues } from '../../../views/components/supply-transformer';
+import { railValues } from '../../../views/components/supply-rail';
+import { inputText } from '../../core/spec/input-text';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 import type { EvaluationReport } from '../../core/evaluate';
@@ -119,11 +122,15 @@ export function supplyRoutes(deps: Deps) {
   });
 
   // ------------------------------------------------------------ transformers and windings
-  app.post('/projects/:id/supply/transformers', projectEdit(deps, { ...common, form: 'add-transformer', schema: F.transformerSchema,
+  app.post('/projects/:id/supply/transformers', projectEdit(deps, { ...common, form: 'add-transformer', schema: F.transformerSchema, values: () => ({}),
     change: (p, d) => ({ ...p, supply: { ...p.supply, transformers: [...p.supply.transformers, { id: newId('tr'), name: d.name, construction: d.construction, windings: [] }] } }),
   }));
 
   app.post('/projects/:id/supply/transformers/:tid', projectEdit(deps, { ...common, form: (c) => `transformer-${c.req.param('tid')}`, schema: F.transformerSchema,
+    values: (p, c) => {
+      const t = p.supply.transformers.find((x) => x.id === c.req.param('tid'));
+      return t ? transformerValues(t) : null;
+    },
     change: (p, d, c) => {
       const tid = c.req.param('tid');
       if (!p.supply.transformers.some((t) => t.id === tid)) return gone('transformer');
@@ -132,6 +139,7 @@ export function supplyRoutes(deps: Deps) {
   }));
 
   app.post('/projects/:id/supply/transformers/:tid/windings', projectEdit(deps, { ...common, form: (c) => `add-winding-${c.req.param('tid')}`, schema: F.windingSchema,
+    values: (p, c) => (p.supply.transformers.some((x) => x.id === c.req.param('tid')) ? {} : null),
     change: (p, d, c) => {
       const tid = c.req.param('tid');
       if (!p.supply.transformers.some((t) => t.id === tid)) return gone('transformer');
@@ -141,6 +149,10 @@ export function supplyRoutes(deps: Deps) {
   }));
 
   app.post('/projects/:id/supply/windings/:wid', projectEdit(deps, { ...common, form: (c) => `winding-${c.req.param('wid')}`, schema: F.windingSchema,
+    values: (p, c) => {
+      const w = p.supply.transformers.flatMap((t) => t.windings).find((x) => x.id === c.req.param('wid'));
+      return w ? windingValues(w) : null;
+    },
     change: (p, d, c) => {
       const wid = c.req.param('wid');
       if (!p.supply.transformers.some((t) => t.windings.some((w) => w.id === wid))) return gone('winding');
@@ -150,7 +162,7 @@ export function supplyRoutes(deps: Deps) {
   }));
 
   // ------------------------------------------------------------ rails and the primary fuse
-  app.post('/projects/:id/supply/rails', projectEdit(deps, { ...common, form: 'add-rail', schema: F.addRailSchema,
+  app.post('/projects/:id/supply/rails', projectEdit(deps, { ...common, form: 'add-rail', schema: F.addRailSchema, values: () => ({}),
     partial: (p, f, n) => body(p, f, n && !f ? 'Rail added with typical values: enter your parts below and save.' : n, f ? undefined : p.supply.rails.at(-1)?.id),
     redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(p.supply.rails.at(-1)?.id ?? '')}#rail-${p.supply.rails.at(-1)?.id ?? ''}`,
     change: (p, d) => {
@@ -162,11 +174,15 @@ export function supplyRoutes(deps: Deps) {
   // The edited rail stays open after the swap (a fresh spec per request knows which rail that is).
   app.post('/projects/:id/supply/rails/:rid', (c) =>
     projectEdit(deps, { ...common, form: `rail-${c.req.param('rid')}`, schema: rawValues, change: (p, v) => editRail(p, v, c),
+      values: (p) => {
+        const r = railAt(p, c.req.param('rid'));
+        return r ? railValues(r) : null;
+      },
       partial: (p, f, n) => body(p, f, n, c.req.param('rid')), page: (p, f, n) => supplyPage(p, f, n, c.req.param('rid')),
       redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(c.req.param('rid') ?? '')}#rail-${c.req.param('rid') ?? ''}` })(c),
   );
 
-  app.post('/projects/:id/supply/fuse', projectEdit(deps, { ...common, form: 'primary-fuse', schema: F.fuseSchema,
+  app.post('/projects/:id/supply/fuse', projectEdit(deps, { ...common, form: 'primary-fuse', schema: F.fuseSchema, values: (p) => ({ primaryFuse: inputText(p.supply.primaryFuseA, 'A') }),
     change: (p, d) => ({ ...p, supply: { ...p.supply, primaryFuseA: d.primaryFuse } }),
   }));
 

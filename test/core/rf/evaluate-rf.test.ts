@@ -8,6 +8,8 @@ import { near, nonFinitePaths } from './helpers';
 import { propertyOptions } from '../../helpers/property';
 
 const RANK = { fail: 0, caution: 1, ok: 2 } as const;
+/** Finding messages that print a non-finite number. */
+const nonFiniteText = (f: Finding[]) => f.map((x) => x.message).filter((m) => /Infinity|NaN/.test(m));
 const sorted = (f: Finding[]) => f.every((x, i) => i === 0 || RANK[f[i - 1].severity] <= RANK[x.severity]);
 
 describe('evaluateRf on a 40 m push-pull rig', () => {
@@ -52,6 +54,12 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     expect(nonFinitePaths(x)).toEqual([]);
     expect(x.findings.some((f) => f.rule === 'pa.input' && f.severity === 'fail' && /supply voltage/.test(f.message))).toBe(true);
   });
+  it('a target power of 5e-324 W (subnormal) is an input error, not "Infinity dB" (regression)', () => {
+    const x = evaluateRf(project({ targetPowerW: 5e-324 }), { paRailV: { pa: 13.8 } });
+    expect(x.inputErrors.map((e) => e.field)).toEqual(['targetPowerW']);
+    expect(nonFiniteText(x.findings)).toEqual([]);
+    expect(nonFinitePaths(x)).toEqual([]);
+  });
   it('zero power and zero frequency are input errors, not crashes', () => {
     const x = evaluateRf(project({ targetPowerW: 0, frequencyHz: 0 }), { paRailV: { pa: 13.8 } });
     expect(x.inputErrors.map((e) => e.field).sort()).toEqual(['frequencyHz', 'targetPowerW']);
@@ -76,6 +84,7 @@ describe('evaluateRf never produces NaN/Infinity or throws for odd inputs (fast-
         });
         const r = evaluateRf(p, { paRailV: { pa: rail } });
         expect(nonFinitePaths(r)).toEqual([]);
+        expect(nonFiniteText(r.findings)).toEqual([]);
         expect(sorted(r.findings)).toBe(true);
       }),
       propertyOptions(20261202, 400),
@@ -97,6 +106,7 @@ describe('evaluateRf never produces NaN/Infinity or throws for odd inputs (fast-
         });
         const r = evaluateRf(p, { paRailV: { pa: 13.8 } });
         expect(nonFinitePaths(r)).toEqual([]);
+        expect(nonFiniteText(r.findings)).toEqual([]);
       }),
       propertyOptions(20261203, 400),
     );
