@@ -70,6 +70,26 @@ describe('stage page', () => {
     const stage = (await loadProject(database.db, ID))!.stages.find((s) => s.id === 'st-keyer')!;
     expect(stage.loads).toEqual([{ railId: 'rail-pa', currentA: { receive: 0, keyUp: 0.001, keyDown: 0.002 } }]);
   });
+
+  it("the add-a-load row: currents typed without a rail are refused on that row's rail field, kept, and nothing is saved", async () => {
+    const { post, database } = await demoApp();
+    const before = await loadProject(database.db, ID);
+    const form = { version: '1', name: 'Keyer and sidetone', kind: 'other', notes: '', dissipation: '', rail0: 'rail-13v8', l0_receive: '8 mA', l0_keyUp: '12 mA', l0_keyDown: '12 mA', rail1: '', l1_receive: '', l1_keyUp: '35 mA', l1_keyDown: '40 mA' };
+    for (const headers of [{}, { 'HX-Request': 'true' }]) {
+      const res = await post(`/projects/${ID}/stages/st-keyer`, form, headers);
+      expect(res.status).toBe(422);
+      const html = await res.text();
+      expect(html).not.toContain('Saved.');
+      // the message sits on the new row's rail field, and what was typed in the row is kept
+      const railField = html.match(/<label class="field has-error" for="[^"]*rail1"[\s\S]*?<\/label>/)?.[0] ?? '';
+      expect(railField).toContain('choose the rail this row');
+      expect(html).toContain('value="35 mA"');
+      expect(html).toContain('value="40 mA"');
+      expect(await loadProject(database.db, ID)).toEqual(before);
+    }
+    // the same row with its currents cleared adds nothing and saves
+    expect((await post(`/projects/${ID}/stages/st-keyer`, { ...form, l1_keyUp: '', l1_keyDown: '' })).status).toBe(303);
+  });
 });
 
 describe('a stage deleted in another window', () => {
