@@ -2,7 +2,9 @@
 // Format: { "format": "rigwright-project", "formatVersion": 1, "exportedAt": ISO date, "project": {...} }
 // with every quantity in SI units (V, A, W, Ω, F, H, Hz, s, °C, fractions 0..1) and money in integer cents.
 import { z } from 'zod';
-import type { Project } from '../core/model';
+import type { LpfParams, PaParams, Project, RelayParams } from '../core/model';
+import { lpfSpec, paSpec, relaySpec } from '../core/spec';
+import { specFileSchema } from './spec-schema';
 import { MODES, STAGE_KINDS } from '../core/model';
 
 export const FORMAT = 'rigwright-project';
@@ -85,59 +87,10 @@ const rail = z.discriminatedUnion('kind', [
   }),
 ]);
 
-const pa = z.object({
-  topology: z.enum(['push-pull', 'single-ended']),
-  amplifierClass: z.enum(['B', 'C', 'D', 'E']),
-  railId: id,
-  devices: z.number().int().min(1).max(16),
-  saturationV: nonneg(100).nullable(),
-  rdsOnOhm: nonneg(100).nullable(),
-  turnsRatio: pos(100).nullable(),
-  loadOhm: pos(10_000),
-  efficiency: z.number().finite().min(0.01).max(1).nullable(),
-  deviceVdsMaxV: pos(10_000),
-  deviceIdMaxA: pos(1000),
-  mount,
-  biasIdleMaxA: nonneg(100),
-  referencePowerW: pos(1e6),
-}).refine((p) => p.saturationV !== null || p.rdsOnOhm !== null, { message: 'give saturationV or rdsOnOhm (or both)', path: ['saturationV'] });
-
-const lpf = z.object({
-  response: z.enum(['butterworth', 'chebyshev']),
-  rippleDb: z.number().finite().min(0).max(0.5),
-  order: z.number().int().refine((n) => [3, 5, 7, 9].includes(n), 'must be 3, 5, 7 or 9 (an odd order between equal 50 Ω terminations)'),
-  form: z.enum(['capacitor-input', 'inductor-input']),
-  cutoffHz: z.number().finite().min(100e3).max(100e6).nullable(),
-  capacitorSeries: z.enum(['E12', 'E24']),
-  allowParallelPairs: z.boolean(),
-  coreAlHPerTurn2: pos(1e-3),
-  coreName: z.string().max(120),
-  inductorQ: pos(10_000),
-  capacitorQ: pos(100_000),
-  capacitorTolerance: z.number().finite().min(0).max(0.5),
-  inductorTolerance: z.number().finite().min(0).max(0.5),
-  monteCarloTrials: z.number().int().min(0).max(20_000),
-  seed: z.number().int().min(0).max(2 ** 32 - 1),
-}).refine((f) => f.response === 'butterworth' || f.rippleDb >= 0.01, { message: 'a Chebyshev filter needs rippleDb from 0.01 to 0.5', path: ['rippleDb'] });
-
-const relay = z.object({
-  contactCarryA: pos(1000),
-  contactSwitchA: pos(1000),
-  contactRatedV: pos(100_000),
-  rfRatedVpeak: pos(100_000).nullable(),
-  coilA: nonneg(10),
-  coilRailId: id.nullable(),
-  coilModes: z.array(z.enum(MODES)),
-  isolationDb: nonneg(200),
-  operateS: nonneg(1),
-  releaseS: nonneg(1),
-  bounceS: nonneg(1),
-  dcSwitchedA: nonneg(1000),
-  position: z.enum(['before-lpf', 'after-lpf']),
-  receiverMaxInputW: pos(1e6),
-  txDelayS: nonneg(10),
-  wpm: z.number().finite().min(1).max(100),
-});
+// stage kinds' data: the same specs as the forms and core's checks (src/core/spec)
+const pa = specFileSchema<PaParams>(paSpec);
+const lpf = specFileSchema<LpfParams>(lpfSpec);
+const relay = specFileSchema<RelayParams>(relaySpec);
 
 const stage = z.object({
   id,

@@ -54,7 +54,9 @@ export function validate(spec: Spec, stored: unknown): FieldError[] {
     const problem = storedProblem(f, getPath(obj, key));
     if (problem) errors.push({ field: key, label: f.label, message: `${f.label} ${problem}` });
   }
-  return errors.length ? errors : (spec.refine?.(obj as Obj) ?? []);
+  // rules across fields also run on a partly bad object (they check types themselves): report every problem once
+  for (const e of spec.refine?.(obj as Obj) ?? []) if (!errors.some((x) => x.field === e.field)) errors.push(e);
+  return errors;
 }
 
 /** The form text of a stored object: what the boxes show, parsing back to the same values. */
