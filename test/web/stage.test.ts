@@ -75,7 +75,7 @@ describe('stage page', () => {
     const { post, database } = await demoApp();
     const before = await loadProject(database.db, ID);
     const form = { version: '1', name: 'Keyer and sidetone', kind: 'other', notes: '', dissipation: '', rail0: 'rail-13v8', l0_receive: '8 mA', l0_keyUp: '12 mA', l0_keyDown: '12 mA', rail1: '', l1_receive: '', l1_keyUp: '35 mA', l1_keyDown: '40 mA' };
-    for (const headers of [{}, { 'HX-Request': 'true' }]) {
+    for (const headers of [{}, { 'HX-Request': 'true' }] as Record<string, string>[]) {
       const res = await post(`/projects/${ID}/stages/st-keyer`, form, headers);
       expect(res.status).toBe(422);
       const html = await res.text();
