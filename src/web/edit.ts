@@ -13,7 +13,7 @@ import { DatabaseBusy, isBusyError } from '../db/client';
 import { loadProject, loadSnapshot, changeProject, VersionConflict, NotFound } from '../db/projects';
 import { parseForm, versionField, type FieldErrors, type FormValues } from './form';
 import { formValues, isHtmx, sendPage, sendPartial } from './render';
-import { mergeForm, conflictMessage } from './merge-form';
+import { mergeForm, conflictMessage, conflictSummary } from './merge-form';
 import type { Deps } from './deps';
 import type { Failed } from '../../views/components/failed';
 import { KeptEntries, KeptEntriesPage } from '../../views/components/kept-entries';
@@ -45,7 +45,7 @@ export interface EditSpec<S extends z.ZodType> {
 export const STALE_MESSAGE =
   'Not saved: this project was changed in another tab or window since you opened this page. The page now shows the stored project; your entries in this form are kept — check them and save again to apply them.';
 export const CONFLICT_MESSAGE =
-  'Not saved: someone else changed the same field since you opened this page. Both values are shown at the field; your entries are kept — check them and save again.';
+  'Not saved: someone else changed the same field since you opened this page; your entries are kept — check them and save again';
 export const BUSY_MESSAGE = 'The database is busy; nothing was saved. Try again.';
 export const GONE_MESSAGE =
   'Not saved: what this form edits no longer exists (it was deleted in another tab or window). Nothing was changed.';
@@ -150,7 +150,9 @@ async function mergeWith<S extends z.ZodType>(spec: EditSpec<S>, c: Context, lat
   if (baseValues === null) throw new VersionConflict(Number(typed.version), latest.version);
   const m = mergeForm({ base: baseValues, current: currentValues, typed, rowOf: spec.rowOf });
   if (!m.ok) {
-    const errors: FieldErrors = { _form: CONFLICT_MESSAGE };
+    // Both values beside each field, and in the form's message too (not every form shows a message at every field).
+    const list = Object.entries(m.conflicts).map(([k, conflict]) => `${k}: ${conflictSummary(conflict)}`);
+    const errors: FieldErrors = { _form: `${CONFLICT_MESSAGE} (${list.join('; ')})` };
     for (const [k, conflict] of Object.entries(m.conflicts)) errors[k] = conflictMessage(conflict);
     throw new MergeConflict(latest, m.values, errors);
   }

@@ -64,8 +64,14 @@ export function mergeForm({ base, current, typed, rowOf }: MergeInput): MergeRes
   return Object.keys(conflicts).length ? { ok: false, values, conflicts } : { ok: true, values, changed };
 }
 
+const shown = (s: string) => (norm(s) === '' ? '(empty)' : `“${s.length > 200 ? s.slice(0, 200) + '…' : s}”`);
+
 /** The message beside a conflicting field: both values, in words. */
 export function conflictMessage(c: FieldConflict): string {
-  const shown = (s: string) => (norm(s) === '' ? '(empty)' : `“${s.length > 200 ? s.slice(0, 200) + '…' : s}”`);
   return `Changed by someone else to ${shown(c.current)} since you opened this page; you typed ${shown(c.typed)}. Check it and save again to keep yours.`;
+}
+
+/** Both values in a few words, for the form's own message. */
+export function conflictSummary(c: FieldConflict): string {
+  return `changed by someone else to ${shown(c.current)}, you typed ${shown(c.typed)}`;
 }
