@@ -23,7 +23,9 @@ const Typed: FC<{ values: Record<string, string> }> = ({ values }) => (
   </>
 );
 
-const joinAnd = (words: string[]) => (words.length < 2 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`);
+const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+const joinAnd = (words: string[]) =>
+  words.length < 2 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`;
 
 export const KindChangeConfirm: FC<Props> = ({ project, stage, newKind, dropped, values }) => {
   const action = `/projects/${project.id}/stages/${stage.id}`;
@@ -41,7 +43,7 @@ export const KindChangeConfirm: FC<Props> = ({ project, stage, newKind, dropped,
         </p>
         {dropped.map((d) => (
           <>
-            {dropped.length > 1 ? <h3>{d.what.charAt(0).toUpperCase() + d.what.slice(1)}</h3> : null}
+            {dropped.length > 1 ? <h3>{capital(d.what)}</h3> : null}
             <ul class="dropped">
               {d.items.map((item) => (
                 <li>{item}</li>
@@ -50,8 +52,8 @@ export const KindChangeConfirm: FC<Props> = ({ project, stage, newKind, dropped,
           </>
         ))}
         <p>
-          <strong>Nothing has been saved yet.</strong> Your other entries on the stage form (name, notes, heat, currents)
-          go with either answer.
+          <strong>Nothing has been saved yet.</strong> Your other entries on the stage form (name, notes, heat,
+          currents) are kept with either answer.
         </p>
         <div class="answers">
           <form method="post" action={action} hx-post={action} hx-target="#stage" hx-swap="outerHTML">
@@ -60,14 +62,14 @@ export const KindChangeConfirm: FC<Props> = ({ project, stage, newKind, dropped,
               Change kind and drop the data
             </button>
             <span class="hint">
-              Saves the stage as {to}; the data above is gone.
+              Saves the stage as {to} with your other entries; the data listed above is deleted.
             </span>
           </form>
           <form method="post" action={action} hx-post={action} hx-target="#stage" hx-swap="outerHTML">
             <Typed values={{ ...values, keepKind: '1' }} />
             <button type="submit">Keep the kind</button>
             <span class="hint">
-              Back to the stage form as {from}, with your other entries filled in but not saved.
+              Back to the stage form as {from}, with your other entries filled in, not yet saved.
             </span>
           </form>
         </div>

@@ -38,7 +38,8 @@ const pctOf = (fraction: number) => `${formatValue(fraction * 100, '')} %`;
 function paItems(pa: PaParams, rail: RailName): string[] {
   const m = pa.mount;
   const v = formatValue;
-  const drop = pa.saturationV === null ? `Rds(on) ${v(pa.rdsOnOhm, 'Ω')}` : `saturation ${v(pa.saturationV, 'V')}`;
+  const saturation = `saturation voltage ${v(pa.saturationV, 'V')}`;
+  const drop = pa.saturationV === null ? `Rds(on) ${v(pa.rdsOnOhm, 'Ω')}` : saturation;
   const ratio = pa.turnsRatio === null ? 'turns ratio designed for the target power' : `turns ratio ${pa.turnsRatio}`;
   const efficiency = pa.efficiency === null ? '' : `, drain efficiency ${pctOf(pa.efficiency)}`;
   const thetaSa = m.thetaSaKPerW === null ? 'θsa to be chosen' : `θsa ${kPerW(m.thetaSaKPerW)}`;
@@ -51,7 +52,7 @@ function paItems(pa: PaParams, rail: RailName): string[] {
     `bias preset max idle ${formatValue(pa.biasIdleMaxA, 'A')}`,
     `heatsink: θjc ${kPerW(m.thetaJcKPerW)}, θcs ${kPerW(m.thetaCsKPerW)}, ${thetaSa}, ` +
       `Tj max ${formatValue(m.tjMaxC, '°C')}`,
-    `compared with ${formatValue(pa.referencePowerW, 'W')}`,
+    `output compared with ${formatValue(pa.referencePowerW, 'W')}`,
   ];
 }
 
@@ -72,7 +73,7 @@ function lpfItems(f: LpfParams): string[] {
 function relayItems(r: RelayParams, rail: RailName): string[] {
   const v = formatValue;
   const rf = r.rfRatedVpeak === null ? '' : `, RF ${v(r.rfRatedVpeak, 'V')} peak`;
-  const dc = r.dcSwitchedA > 0 ? `, switching ${v(r.dcSwitchedA, 'A')} DC` : '';
+  const dc = r.dcSwitchedA > 0 ? `; DC it switches here ${v(r.dcSwitchedA, 'A')}` : '';
   const coilRail = r.coilRailId === null ? ' (not on a rail here)' : ` from rail “${rail(r.coilRailId)}”`;
   const modes = r.coilModes.map((m) => MODE_LABELS[m]).join(', ') || 'no mode';
   const side = r.position === 'after-lpf' ? 'after' : 'before';

@@ -38,12 +38,12 @@ describe('droppedByKindChange', () => {
         items: [
           'push-pull, class C, 2 devices',
           'fed from rail “PA rail”',
-          'saturation 1 V',
+          'saturation voltage 1 V',
           'output: turns ratio 1.5, load 50 Ω, drain efficiency 65 %',
           'device ratings: V(BR)DSS 200 V, drain 9 A',
           'bias preset max idle 50 mA',
           'heatsink: θjc 1.7 °C/W, θcs 1.2 °C/W, θsa 2.5 °C/W, Tj max 150 °C',
-          'compared with 5 W',
+          'output compared with 5 W',
         ],
       },
     ]);
@@ -88,6 +88,14 @@ describe('droppedByKindChange', () => {
     });
   });
 
+  it('names an RF rating and DC switched by the contacts when they are given', () => {
+    const relay = { ...defaultRelay(null), rfRatedVpeak: 300, dcSwitchedA: 0.16 };
+    expect(droppedByKindChange({ ...base('tr'), relay }, 'other')[0].items.slice(0, 2)).toEqual([
+      'contacts: carry 2 A, switch 1 A, rated 125 V, RF 300 V peak; DC it switches here 160 mA',
+      'coil 30 mA (not on a rail here), energised in TX key-up, TX key-down',
+    ]);
+  });
+
   it('drops nothing when the kind keeps its data or the stage has none', () => {
     expect(droppedByKindChange(final, 'final')).toEqual([]);
     expect(droppedByKindChange(base('driver'), 'final')).toEqual([]);
@@ -102,7 +110,8 @@ describe('droppedByKindChange', () => {
   // leaves out, so the confirmation never hides a loss and never names one that does not happen.
   const pairs = STAGE_KINDS.flatMap((from) => STAGE_KINDS.map((to) => [from, to] as const));
   it.each(pairs)('%s -> %s agrees with keepOwnData', (from, to) => {
-    const full: Stage = { ...base(from), pa: defaultPa('rail-pa'), lpf: defaultLpfParams(), relay: defaultRelay(null) };
+    const full: Stage =
+      { ...base(from), pa: defaultPa('rail-pa'), lpf: defaultLpfParams(), relay: defaultRelay(null) };
     const kept = keepOwnData(full, to);
     const lost = (['pa', 'lpf', 'relay'] as const).filter((k) => full[k] && !kept[k]);
     const names = { pa: 'PA data', lpf: 'filter design', relay: 'relay data' } as const;
