@@ -8,6 +8,7 @@ import type { SupplyReport } from './power/report-types';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
+import { checkProjectInputs } from './spec/project-check';
 
 export interface EvaluationReport {
   budget: BudgetReport;
@@ -168,6 +169,6 @@ export function evaluate(project: Project, options: EvaluateOptions = {}): Evalu
   const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);
-  const findings = sortFindings([...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
+  const findings = sortFindings([...checkProjectInputs(project), ...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
   return { budget, supply, rf, cost, catalog, paRailV, findings };
 }

@@ -45,6 +45,18 @@ export async function listProjects(db: Db): Promise<ProjectSummary[]> {
   }));
 }
 
+const jsonObject = (v: unknown): Record<string, unknown> => (v !== null && typeof v === 'object' && !Array.isArray(v) ? (v as Record<string, unknown>) : {});
+
+/** Only a stage kind's own data keys from the params column (an odd key must not overwrite the stage's loads). */
+function stageData(v: unknown): Pick<Stage, 'pa' | 'lpf' | 'relay'> {
+  const o = jsonObject(v);
+  const out: Pick<Stage, 'pa' | 'lpf' | 'relay'> = {};
+  if (o.pa !== undefined) out.pa = o.pa as Stage['pa'];
+  if (o.lpf !== undefined) out.lpf = o.lpf as Stage['lpf'];
+  if (o.relay !== undefined) out.relay = o.relay as Stage['relay'];
+  return out;
+}
+
 export async function loadProject(db: Db | Tx, id: string): Promise<Project | null> {
   const [p] = await db.select().from(t.projects).where(eq(t.projects.id, id));
   if (!p) return null;
@@ -71,7 +83,9 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
       .filter((w) => w.transformerId === tr.id)
       .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm })),
   }));
-  const rails = railRows.map((r) => ({ ...(r.params as object), id: r.id, name: r.name, kind: r.kind }) as Rail);
+  // JSON columns are not trusted: a non-object reads as no data, and evaluate() checks every field against its spec
+  // (src/core/spec/project-check.ts), so a bad stored value is a fail finding naming it, never replaced silently.
+  const rails = railRows.map((r) => ({ ...jsonObject(r.params), id: r.id, name: r.name, kind: r.kind }) as Rail);
   const stages: Stage[] = stageRows.map((s) => ({
     id: s.id,
     kind: s.kind as Stage['kind'],
@@ -81,7 +95,7 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     loads: loadRows
       .filter((l) => l.stageId === s.id)
       .map((l) => ({ railId: l.railId, currentA: { receive: l.receiveA, keyUp: l.keyUpA, keyDown: l.keyDownA } })),
-    ...((s.params as object | null) ?? {}),
+    ...stageData(s.params),
   }));
   const parts: Part[] = partRows.map((r) => ({
     id: r.id,

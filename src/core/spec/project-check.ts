@@ -1,0 +1,52 @@
+// The whole project checked against the input specs: every stored object where it lives in the project, with the
+// same limits as the forms and the project file. A value that fails is a fail finding naming the item and the field;
+// it is never replaced by 0 or a default. Used by evaluate() on every load (database rows, imported files).
+import type { Project } from '../model';
+import type { Finding } from '../findings';
+import type { Spec } from './field';
+import { validate } from './derive';
+import { loadSpec, stageSpec } from './stage';
+import { paSpec } from './pa';
+import { lpfSpec } from './lpf';
+import { relaySpec } from './relay';
+
+/** One stored object and the words that name it ("Stage 'PA', PA data"). */
+export interface Located {
+  subject: string;
+  value: unknown;
+}
+
+/** Where each spec's objects live in a project. Every spec in ALL_SPECS needs an entry (a test checks it). */
+export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
+  { spec: stageSpec, at: (p) => p.stages.map((s) => ({ subject: `Stage "${s.name}"`, value: s })) },
+  {
+    spec: loadSpec,
+    at: (p) => p.stages.flatMap((s) => s.loads.map((l, i) => ({ subject: `Stage "${s.name}", load row ${i + 1}`, value: l }))),
+  },
+  { spec: paSpec, at: (p) => p.stages.flatMap((s) => (s.pa ? [{ subject: `Stage "${s.name}", PA data`, value: s.pa }] : [])) },
+  { spec: lpfSpec, at: (p) => p.stages.flatMap((s) => (s.lpf ? [{ subject: `Stage "${s.name}", filter data`, value: s.lpf }] : [])) },
+  {
+    spec: relaySpec,
+    at: (p) => p.stages.flatMap((s) => (s.relay ? [{ subject: `Stage "${s.name}", relay data`, value: s.relay }] : [])),
+  },
+];
+
+/** Fail findings for every stored value outside its field's definition. */
+export function checkProjectInputs(p: Project): Finding[] {
+  return LOCATIONS.flatMap(({ spec, at }) =>
+    at(p).flatMap(({ subject, value }) =>
+      validate(spec, value).map(
+        (e): Finding => ({
+          severity: 'fail',
+          rule: 'input.stored',
+          subject: `${subject}: ${e.label}`,
+          value: null,
+          limit: null,
+          unit: '',
+          source: 'Input definition of this field',
+          message: `Stored value refused: ${e.message}. Open the item and enter a valid value; nothing is computed from it until then.`,
+        }),
+      ),
+    ),
+  );
+}
