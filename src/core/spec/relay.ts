@@ -30,8 +30,11 @@ export const relaySpec = defineSpec({
   },
   view: {
     from: (r) => {
-      const { coilModes, ...rest } = r as { coilModes?: Mode[] };
-      return { ...rest, ...Object.fromEntries(COIL_MODES.map(([k, m]) => [k, Array.isArray(coilModes) && coilModes.includes(m)])) };
+      const { coilModes, ...rest } = r as { coilModes?: unknown };
+      // a stored list that is not a list of known modes leaves the flags unreadable, so the check names them
+      const known = Array.isArray(coilModes) && coilModes.every((m) => COIL_MODES.some(([, x]) => x === m));
+      const flag = (m: Mode) => (known ? (coilModes as Mode[]).includes(m) : `unreadable modes ${JSON.stringify(coilModes)}`);
+      return { ...rest, ...Object.fromEntries(COIL_MODES.map(([k, m]) => [k, flag(m)])) };
     },
     to: (v) => {
       const out: Record<string, unknown> = { ...v, coilModes: COIL_MODES.filter(([k]) => v[k] === true).map(([, m]) => m) };
