@@ -23,6 +23,8 @@ export interface NumberField extends Base {
   max: number; // SI
   exclusiveMin?: boolean; // the value must be greater than min
   integer?: boolean;
+  /** money: stored as integer minor units (cents, unit ''), typed in the major unit with at most two decimals */
+  money?: boolean;
   optional?: boolean; // an empty box is stored as null (meaning "not chosen yet" / "compute it")
   default: number | null;
   example?: string; // an example in the display unit, e.g. '350' or '4700'
@@ -34,11 +36,26 @@ export interface ChoiceField extends Base {
   default: string;
 }
 
+/** A text box whose stored value is not the text itself (a list, a table): both directions and the stored check. */
+export interface TextCodec {
+  toText: (stored: unknown) => string;
+  /** the stored value of typed text, or a message (without the label) saying what is wrong and where */
+  fromText: (text: string) => { ok: true; value: unknown } | { ok: false; message: string };
+  /** what is wrong with a stored value ('' when fine), without the label */
+  check: (stored: unknown) => string;
+}
+
 export interface TextField extends Base {
   type: 'text';
   max: number;
   required: boolean;
   multiline?: boolean;
+  /** typed text is upper-cased ('usd' -> 'USD'); stored text must already be upper case */
+  upper?: boolean;
+  /** what the whole text must match, and the rest of the sentence saying so ('must be a three-letter code …') */
+  pattern?: { re: RegExp; says: string };
+  /** the stored value is structured (max then counts the characters of it written out) */
+  codec?: TextCodec;
   default: string;
 }
 
@@ -69,6 +86,8 @@ export interface Spec {
   fields: Record<string, Field>; // model key path -> field
   /** rules across fields (odd filter order, one of two values given); messages name the field */
   refine?: (value: Record<string, unknown>) => FieldError[];
+  /** for a spec drawn once per row of a table: the form name of field `key` in row `row` */
+  rowName?: (row: number, key: string) => string;
   /** where the stored shape differs from the fields (three checkboxes for a list of modes): stored <-> fields */
   view?: { from: (stored: Record<string, unknown>) => Record<string, unknown>; to: (fields: Record<string, unknown>) => Record<string, unknown> };
 }

@@ -22,6 +22,7 @@ export const stageSpec = defineSpec({
 export const loadSpec = defineSpec({
   name: 'load',
   label: 'Stage load',
+  rowName: (row: number, key: string) => loadFormName(row, key),
   fields: {
     railId: ref('Rail', 'rail', false),
     ...Object.fromEntries(
@@ -30,8 +31,9 @@ export const loadSpec = defineSpec({
   },
 });
 
-export const loadFormName = (row: number, key: string): string =>
-  key === 'railId' ? `rail${row}` : `l${row}_${key.replace('currentA.', '')}`;
+export function loadFormName(row: number, key: string): string {
+  return key === 'railId' ? `rail${row}` : `l${row}_${key.replace('currentA.', '')}`;
+}
 
 /** The stage form's text: the stage's own fields and one row per load (rail0, l0_receive, ...). */
 export function stageFormValues(s: Stage): Record<string, string> {
