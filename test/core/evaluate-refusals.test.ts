@@ -114,3 +114,34 @@ describe('the budget table shows an unknown current as unknown, never as 0', () 
     expect(total).toContain('unknown');
   });
 });
+
+describe('a refused PA shows no placeholder zeros downstream', () => {
+  const refused = () => {
+    const p = club();
+    p.stages.find((s) => s.id === 'st-pa')!.pa!.efficiency = 0.02;
+    return { p, r: evaluate(p) };
+  };
+  it('the RF page says "Not computed" instead of a table of 0 W / 0 A', async () => {
+    const { RfResults } = await import('../../views/partials/rf-results');
+    const html = String(await RfResults({ report: refused().r.rf })!.toString());
+    const block = html.match(/<div class="rf-pa">([\s\S]*?)<\/div>/)![1];
+    expect(block).toContain('Not computed: the PA data is refused');
+    expect(block).toContain('Push-pull MOSFET final: efficiency');
+    expect(block).not.toContain('DC input / key-down current');
+  });
+  it('the RF checks say the stress checks use the target power instead of the unknown PA output', () => {
+    const { p, r } = refused();
+    const note = r.rf.findings.find((f) => f.rule === 'rf.pa-unknown')!;
+    expect(note.severity).toBe('caution');
+    expect(note.message).toContain(`${p.targetPowerW} W target power`);
+  });
+  it('the build checklist does not tell the builder to expect 0 A key-down or 0 W output', async () => {
+    const { buildChecklist } = await import('../../src/core/checklists');
+    const { p, r } = refused();
+    const items = buildChecklist(p, r).find((s) => s.stageId === 'st-pa')!.items;
+    const keyDown = items.find((i) => i.text.startsWith('Key down for a few seconds'))!;
+    expect(keyDown.value).toBeNull(); // unknown, printed as a dash, not "0 A"
+    const output = items.find((i) => i.text.startsWith('Measure the output'))!;
+    expect(output.text).toContain('PA not computed');
+  });
+});

@@ -26,7 +26,18 @@ const KV: FC<{ rows: [string, string][] }> = ({ rows }) => (
   </table>
 );
 
-const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => (
+/** A refused PA has no numbers to show (its result holds placeholders): say so instead of a table of zeros. */
+const PaRefused: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => (
+  <div class="rf-pa">
+    <h3>{name}: final amplifier</h3>
+    <p class="form-errors" role="alert">
+      Not computed: the PA data is refused ({pa.findings.filter((f) => f.severity === 'fail').map((f) => f.subject).join('; ')}). Output, current and heat
+      are unknown until it is corrected; see the failed checks below.
+    </p>
+  </div>
+);
+
+const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused ? <PaRefused name={name} pa={pa} /> : (
   <div class="rf-pa">
     <h3>{name}: final amplifier</h3>
     <KV

@@ -115,7 +115,7 @@ function finalItems(project: Project, report: ChecklistReport, stage: Stage, rf:
       items.push(measured('Raise the bias slowly, key up, until the idle current reaches {v}; do not exceed it.', perMode?.keyUp ?? null, 'A', 'budget: final, key-up idle'));
       items.push(measured('The bias preset at its maximum can give up to {v}: leave it at the setting above.', pa.biasIdleMaxA, 'A', 'stage: bias idle maximum', 'caution'));
     } else {
-      items.push(measured(`This class ${pa.amplifierClass} final runs without idle bias: key up, its rail current should be about {v}.`, perMode?.keyUp ?? 0, 'A', 'budget: final, key-up'));
+      items.push(measured(`This class ${pa.amplifierClass} final runs without idle bias: key up, its rail current should be about {v}.`, perMode?.keyUp ?? null, 'A', 'budget: final, key-up'));
     }
     const kdA = rf?.paKeyDownA ?? perMode?.keyDown ?? null;
     items.push(measured('Key down for a few seconds: PA rail current about {v}.', kdA, 'A', rf?.paKeyDownA != null ? 'rf: PA key-down current' : 'budget: final, key-down'));

@@ -59,7 +59,8 @@ export function rfView(rf: RfReport | null): RfView | null {
   const paStage = rf.stages.find((s) => s.stageId === rf.paStageId && s.pa) ?? rf.stages.find((s) => s.pa);
   const lpfStage = rf.stages.find((s) => s.stageId === rf.lpfStageId && s.lpf) ?? rf.stages.find((s) => s.lpf);
   const trStage = rf.stages.find((s) => s.relay);
-  const pa = paStage?.pa ?? null;
+  // a refused PA's numbers are placeholder zeros: the checklist must not print them as expected readings
+  const pa = paStage?.pa && !paStage.pa.refused ? paStage.pa : null;
   const design = lpfStage?.lpf?.design ?? null;
   const analysis = lpfStage?.lpf?.analysis ?? null;
   const relay = trStage?.relay ?? null;

@@ -95,6 +95,11 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         paStressW = Math.max(pa.outputW, finite(pa.hotOutputW));
       }
       stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });
+      if (st === paStage && pa.refused) {
+        // the stress checks below need a power: say that they take the target instead of the PA's (unknown) output
+        all.push({ severity: 'caution', rule: 'rf.pa-unknown', subject: st.name, value: targetPowerW, limit: null, unit: 'W', source: 'input check',
+          message: `The PA output is unknown (its data is refused), so the filter, relay, harmonic and exposure checks use the ${targetPowerW} W target power instead.` });
+      }
     }
   }
   let lpfRes: LpfStageResult | null = null;

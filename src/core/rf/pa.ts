@@ -67,6 +67,8 @@ export interface PaResult {
   thermal: PaThermal;
   /** This stage's findings. */
   findings: Finding[];
+  /** Core refused the inputs (the fail findings say which): every number above is a placeholder 0, not a result. */
+  refused: boolean;
 }
 
 /** Lowest PA supply voltage, V. Common practice, no published source: no transistor PA gives useful output below 1 V. */
@@ -81,6 +83,7 @@ function zeroResult(railV: number, findings: Finding[]): PaResult {
     dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
     thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
     findings,
+    refused: true,
   };
 }
 
@@ -210,7 +213,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     // Common practice, no published source: one S-unit = 6 dB
     vsReferenceDb, vsReferenceSUnits: vsReferenceDb / 6,
     efficiency, efficiencySource: pa.efficiency === null ? 'class-default' : 'entered',
-    dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, findings,
+    dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, findings, refused: false,
   };
 }
 
@@ -223,8 +226,7 @@ export type ComputedCurrent = { ok: true; currentA: number } | { ok: false; find
  */
 export function paKeyDownCurrentA(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier'): ComputedCurrent {
   const r = evaluatePa(pa, railV, project, subject);
-  const refused = r.findings.filter((f) => f.rule === 'pa.input');
-  if (refused.length > 0) return { ok: false, findings: refused };
+  if (r.refused) return { ok: false, findings: r.findings.filter((f) => f.severity === 'fail') };
   if (!Number.isFinite(r.keyDownCurrentA) || r.keyDownCurrentA < 0) {
     return { ok: false, findings: [{ severity: 'fail', rule: 'pa.input', subject: `${subject}: key-down current`, value: null, limit: null, unit: 'A', source: 'input check',
       message: 'The PA key-down current could not be computed from the entered data.' }] };

@@ -8,7 +8,11 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
   l.heading('RF design');
   if (!rf) return notComputed(l, 'RF design');
   for (const s of rf.stages) {
-    if (s.pa) {
+    if (s.pa?.refused) {
+      // a refused PA's numbers are placeholders: print none of them
+      l.heading(`${s.stageName}: final amplifier`, 2);
+      l.text('Not computed: the PA data is refused; output, current and heat are unknown (see the findings).', { color: GREY });
+    } else if (s.pa) {
       const p = s.pa;
       l.heading(`${s.stageName}: final amplifier`, 2);
       keyValues(l, [
