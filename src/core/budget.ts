@@ -66,12 +66,12 @@ export function unknownModes(a: PerMode): Mode[] {
   return MODES.filter((m) => Number.isNaN(a[m]));
 }
 
-/** Nominal (no-load-ish, nominal mains) voltage of a rail, for budgets and display. */
+/** Nominal (no-load-ish, nominal mains) voltage of a rail, for budgets and display; NaN (unknown) with no winding. */
 export function railNominalV(rail: Rail, project: Project): number {
   if (rail.kind === 'battery') return rail.nominalV;
   if (rail.kind === 'regulated') return regulatorOutputV(rail.setting, rail.quiescentA);
   const winding = project.supply.transformers.flatMap((t) => t.windings).find((w) => w.id === rail.windingId);
-  if (!winding) return 0;
+  if (!winding) return NaN; // the supply design fails the rail for it; shown as unknown, not 0 V
   // Capacitor-input rectifier: DC ~ peak of the rated secondary minus the conducting diode drops (REFERENCE-VALUES §4.1)
   return Math.max(0, rectifiedEstimateV(winding.ratedVrms, rail.topology, rail.diodeDropV));
 }
@@ -180,6 +180,10 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
     }
     const out = d < 0 ? zero() : outputOf(r);
     const v = railNominalV(r, project);
+    if (Number.isNaN(v)) {
+      findings.push({ severity: 'fail', rule: 'budget.rail-voltage', subject: r.name, value: null, limit: null, unit: 'V', source: 'Supply tree',
+        message: `${r.name} has no transformer winding, so its voltage and the power it delivers are unknown; choose its winding.` });
+    }
     result.push({
       railId: r.id,
       name: r.name,

@@ -44,7 +44,7 @@ function paRailVoltages(project: Project, budget: BudgetReport, supply: SupplyRe
     }
     // a PA on a rail the project does not have gets no voltage: its current is refused (a fail finding), not 0
     const nominalV = budget.rails.find((r) => r.railId === id)?.nominalV;
-    if (nominalV !== undefined) out[id] = nominalV;
+    if (nominalV !== undefined && Number.isFinite(nominalV)) out[id] = nominalV;
   }
   return out;
 }

@@ -145,3 +145,16 @@ describe('a refused PA shows no placeholder zeros downstream', () => {
     expect(output.text).toContain('PA not computed');
   });
 });
+
+describe('a rectified rail with no winding', () => {
+  it('has an unknown voltage in the budget (not 0 V) with a fail naming the rail, and its PA current is refused', () => {
+    const p = club();
+    (p.supply.rails.find((x) => x.id === 'rail-pa') as { windingId: string }).windingId = 'gone';
+    const r = evaluate(p);
+    const pa = railOf(r, 'rail-pa');
+    expect(Number.isNaN(pa.nominalV)).toBe(true);
+    expect(Number.isNaN(pa.outputW.keyUp)).toBe(true); // 50 mA at an unknown voltage: unknown power, not 0 W
+    expect(fails(r, 'budget.rail-voltage').map((f) => f.subject)).toEqual([pa.name]);
+    expect(fails(r, 'budget.pa-current').map((f) => f.subject)).toEqual(['Push-pull MOSFET final: PA key-down current']);
+  });
+});
