@@ -14,7 +14,9 @@ export function badTexts(f: Field): [string, string][] {
     if (Number.isFinite(f.max)) out.push([si(f.max * 2 + 1), 'above the maximum']);
     if (Number.isFinite(f.min)) out.push([si(f.min - Math.max(1, Math.abs(f.min))), 'below the minimum']);
     if (f.exclusiveMin) out.push([si(f.min), 'at an exclusive minimum']);
-    if (f.integer) out.push([String(Math.max(f.min, 0) + 1.5), 'not whole']);
+    // money is typed in the major unit (1.5 = 150 cents): a part of a cent is what it cannot hold
+    if (f.money) out.push(['0.125', 'part of a cent']);
+    else if (f.integer) out.push([String(Math.max(f.min, 0) + 1.5), 'not whole']);
   } else if (f.type === 'choice') out.push(['no-such-choice', 'not an option']);
   else if (f.type === 'text') {
     out.push(['x'.repeat(f.max + 1), 'too long']);
@@ -33,6 +35,8 @@ export function badStored(f: Field): [unknown, string][] {
   }
   if (f.type === 'choice') out.push([42, 'a number']);
   if (f.type === 'text') out.push(['x'.repeat(f.max + 1), 'too long']);
+  // a structured text field (ratings, price breaks, rates) may hold an empty object: refuse a number instead
+  if (f.type === 'text' && f.codec) return [...out.filter(([v]) => typeof v === 'string'), [42, 'a number']];
   if (f.type === 'bool') out.push([1, 'a number']);
   // any string is a well-formed text or id (whether the id exists is checked against the project, not the spec)
   return out.filter(([v]) => !((f.type === 'text' || f.type === 'ref') && v === 'a string'));

@@ -1,6 +1,6 @@
 // Everything derived from a spec: the check of a stored (SI) object, the form text of an object, the parse of a
 // submitted form back to SI, and the defaults of a new object. Pure; the zod wrappers live at the edges.
-import type { Field, FieldError, Spec } from './field';
+import type { Field, FieldError, Spec, TextField } from './field';
 import { formName } from './field';
 import { numberText, rangeProblem, readNumber } from './number-text';
 
@@ -34,10 +34,16 @@ export function storedProblem(f: Field, v: unknown): string {
     case 'choice':
       return f.options.some(([o]) => o === v) ? '' : `must be one of ${f.options.map(([o]) => o).join(', ')}`;
     case 'text':
+      if (f.codec) {
+        const problem = f.codec.check(v);
+        if (problem) return `: ${problem}`; // validate() writes "Label: problem"
+        return f.codec.toText(v).length > f.max ? `is longer than ${f.max} characters when written out` : '';
+      }
       if (typeof v !== 'string') return 'is not text';
       if (f.required && v.trim() === '') return 'must not be empty';
       if (v.length > f.max) return `is longer than ${f.max} characters`;
-      return !f.multiline && CONTROL.test(v) ? 'must be one line of text without control characters' : '';
+      if (!f.multiline && CONTROL.test(v)) return 'must be one line of text without control characters';
+      return f.pattern && v !== '' && !f.pattern.re.test(v) ? f.pattern.says : '';
     case 'bool':
       return typeof v === 'boolean' ? '' : 'must be true or false';
     case 'ref':
@@ -52,7 +58,7 @@ export function validate(spec: Spec, stored: unknown): FieldError[] {
   const errors: FieldError[] = [];
   for (const [key, f] of Object.entries(spec.fields)) {
     const problem = storedProblem(f, getPath(obj, key));
-    if (problem) errors.push({ field: key, label: f.label, message: `${f.label} ${problem}` });
+    if (problem) errors.push({ field: key, label: f.label, message: `${f.label}${problem.startsWith(':') ? '' : ' '}${problem}` });
   }
   // rules across fields also run on a partly bad object (they check types themselves): report every problem once
   for (const e of spec.refine?.(obj as Obj) ?? []) if (!errors.some((x) => x.field === e.field)) errors.push(e);
@@ -68,6 +74,7 @@ export function formValues(spec: Spec, stored: unknown): Record<string, string> 
     const name = formName(key, f);
     if (f.type === 'number') out[name] = typeof v === 'number' ? numberText(v, f) : '';
     else if (f.type === 'bool') out[name] = v === true ? 'true' : '';
+    else if (f.type === 'text' && f.codec) out[name] = v === null || v === undefined ? '' : f.codec.toText(v);
     else out[name] = typeof v === 'string' ? v : '';
   }
   return out;
@@ -89,9 +96,15 @@ export function readField(f: Field, raw: string | undefined): { ok: true; value:
         ? { ok: true, value: text }
         : { ok: false, message: `${f.label}: choose one of ${f.options.map(([, t]) => t).join(', ')}` };
     case 'text': {
-      const v = f.multiline ? text.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd() : text.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim();
+      const typed = f.multiline ? text.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd() : text.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim();
+      const v = f.upper ? typed.toUpperCase() : typed;
       if (f.required && v === '') return { ok: false, message: `${f.label} must not be empty` };
       if (v.length > f.max) return { ok: false, message: `${f.label} is longer than ${f.max} characters` };
+      if (f.pattern && v !== '' && !f.pattern.re.test(v)) return { ok: false, message: `${f.label} ${f.pattern.says}; you entered "${typed}"` };
+      if (f.codec) {
+        const r = f.codec.fromText(v);
+        return r.ok ? r : { ok: false, message: `${f.label}: ${r.message}` };
+      }
       return { ok: true, value: v };
     }
     case 'bool':
@@ -116,10 +129,17 @@ export function parseForm(spec: Spec, values: Record<string, string | undefined>
   return Object.keys(errors).length ? { ok: false, errors } : { ok: true, value: spec.view ? spec.view.to(value) : value };
 }
 
+/** A structured field's default is written as text in the spec ('' = an empty list): its stored value. */
+function codecDefault(f: TextField): unknown {
+  const r = f.codec!.fromText(f.default);
+  if (!r.ok) throw new Error(`default of ${f.label} does not parse: ${r.message}`);
+  return r.value;
+}
+
 /** A new object's starting values. */
 export function defaults(spec: Spec): Obj {
   const value: Obj = {};
-  for (const [key, f] of Object.entries(spec.fields)) setPath(value, key, f.default);
+  for (const [key, f] of Object.entries(spec.fields)) setPath(value, key, f.type === 'text' && f.codec ? codecDefault(f) : f.default);
   return spec.view ? spec.view.to(value) : value;
 }
 

@@ -4,9 +4,14 @@ import { paSpec } from './pa';
 import { lpfSpec } from './lpf';
 import { relaySpec } from './relay';
 import { loadSpec, stageSpec } from './stage';
+import { offerSpec, partSpec, supplierSpec } from './parts';
+import { bomLineSpec } from './parts-list';
+import { costingSpec } from './costing';
 
 export * from './field';
 export { validate, formValues, parseForm, defaults, pick, readField } from './derive';
 export { paSpec, lpfSpec, relaySpec, stageSpec, loadSpec };
+export { partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec };
 
-export const ALL_SPECS: Spec[] = [stageSpec, loadSpec, paSpec, lpfSpec, relaySpec];
+export const ALL_SPECS: Spec[] = [stageSpec, loadSpec, paSpec, lpfSpec, relaySpec,
+  partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec];

@@ -12,6 +12,12 @@ const BARE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 /** SI value of `text` for field `f`, or a message (without the label) saying what is wrong. */
 export function readNumber(text: string, f: NumberField): NumberParse {
   const raw = String(text ?? '').trim();
+  if (f.money) {
+    const m = moneyCents(raw);
+    if (!m.ok) return m;
+    const problem = rangeProblem(m.value, f);
+    return problem ? { ok: false, message: `${problem}; you entered "${raw}"` } : m;
+  }
   const compact = raw.replace(/\s+/g, '').replace(',', '.');
   let value: number;
   if (BARE.test(compact) && !/^\d{1,3},\d{3}$/.test(raw.replace(/\s+/g, ''))) {
@@ -31,6 +37,7 @@ export function readNumber(text: string, f: NumberField): NumberParse {
 /** Why `value` (SI) is outside the field's range, or '' when it is inside. */
 export function rangeProblem(value: number, f: NumberField): string {
   if (!Number.isFinite(value)) return 'is not a usable number';
+  if (f.money && !Number.isInteger(value)) return 'must be a whole number of cents';
   if (f.integer && !Number.isInteger(value / (f.display.scale === 0.01 ? 0.01 : 1))) return 'must be a whole number';
   const lowOk = f.exclusiveMin ? value > f.min : value >= f.min;
   if (lowOk && value <= f.max) return '';
@@ -39,6 +46,7 @@ export function rangeProblem(value: number, f: NumberField): string {
 
 /** A limit as the builder reads it: in the display unit, or with a prefix for very large or small values. */
 export function show(value: number, f: NumberField): string {
+  if (f.money) return `${moneyText(value)}${f.display.symbol ? ' ' + f.display.symbol : ''}`;
   if (f.unit === '%') return `${percentText(value)} %`;
   if (hasPrefixes(f.unit)) return formatValue(value, f.unit, 4);
   const sym = f.display.symbol;
@@ -82,6 +90,7 @@ export function exampleText(f: NumberField): string {
 /** The text put back into the box for a stored SI value; it parses back to exactly the same value. */
 export function numberText(value: number | null, f: NumberField): string {
   if (value === null || !Number.isFinite(value)) return '';
+  if (f.money) return moneyText(value);
   if (f.unit === '%') return percentText(value);
   if (f.display.scale !== 1) {
     const bare = value / f.display.scale;
@@ -92,4 +101,18 @@ export function numberText(value: number | null, f: NumberField): string {
   const text = inputText(value, f.unit);
   // a bare fallback would be read in the display unit: give it the SI unit symbol
   return f.display.scale !== 1 && BARE.test(text) ? `${text} ${f.unit}` : text;
+}
+
+/** Whole cents as major-unit text with two decimals (850 -> "8.50"). */
+export const moneyText = (cents: number): string => (Number.isInteger(cents) ? `${cents < 0 ? '-' : ''}${Math.floor(Math.abs(cents) / 100)}.${String(Math.abs(cents) % 100).padStart(2, '0')}` : String(cents / 100));
+
+/** An amount typed in the major unit ("0.95", "12", "0,95") -> whole cents; more than two decimals is refused
+ *  (amounts are kept in whole cents, never rounded silently). The message has no label. */
+export function moneyCents(input: string): NumberParse {
+  const t = input.trim();
+  const m = /^(\d*)(?:[.,](\d*))?$/.exec(t);
+  if (!m || (m[1] + (m[2] ?? '')) === '') return { ok: false, message: `"${t}" is not an amount: enter e.g. 0.95` };
+  if ((m[2] ?? '').length > 2) return { ok: false, message: `"${t}" has more than two decimals; amounts are kept in whole cents` };
+  const cents = Number(m[1] || '0') * 100 + Number((m[2] ?? '').padEnd(2, '0'));
+  return Number.isSafeInteger(cents) ? { ok: true, value: cents } : { ok: false, message: `"${t}" is too large` };
 }

@@ -9,6 +9,9 @@ import { loadSpec, stageSpec } from './stage';
 import { paSpec } from './pa';
 import { lpfSpec } from './lpf';
 import { relaySpec } from './relay';
+import { offerSpec, partSpec, supplierSpec } from './parts';
+import { bomLineSpec } from './parts-list';
+import { costingSpec } from './costing';
 
 /** One stored object and the words that name it ("Stage 'PA', PA data"). */
 export interface Located {
@@ -29,6 +32,14 @@ export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
     spec: relaySpec,
     at: (p) => p.stages.flatMap((s) => (s.relay ? [{ subject: `Stage "${s.name}", relay data`, value: s.relay }] : [])),
   },
+  { spec: partSpec, at: (p) => p.parts.map((x) => ({ subject: `Part "${x.description}"`, value: x })) },
+  {
+    spec: offerSpec,
+    at: (p) => p.parts.flatMap((x) => x.offers.map((o) => ({ subject: `Part "${x.description}", ${o.supplier} offer`, value: o }))),
+  },
+  { spec: supplierSpec, at: (p) => p.costing.suppliers.map((s) => ({ subject: `Supplier "${s.name}"`, value: s })) },
+  { spec: bomLineSpec, at: (p) => p.bom.map((l, i) => ({ subject: `Parts-list line ${i + 1}${l.refs ? ` (${l.refs})` : ''}`, value: l })) },
+  { spec: costingSpec, at: (p) => [{ subject: 'Costing settings', value: p.costing }] },
 ];
 
 /** Fail findings for every stored value outside its field's definition. */
