@@ -74,6 +74,9 @@ export interface PaResult {
 /** Lowest PA supply voltage, V. Common practice, no published source: no transistor PA gives useful output below 1 V. */
 export const MIN_PA_RAIL_V = 1;
 
+/** Smallest reference power for the dB comparison, W. Common practice, no published source (1 nW = -60 dBm). */
+const MIN_REFERENCE_POWER_W = 1e-9;
+
 const SRC_LOADLINE = 'Textbook load line / Sokal & Sokal IEEE JSSC 1975 (REFERENCE-VALUES §8.1)';
 
 function zeroResult(railV: number, findings: Finding[]): PaResult {
@@ -106,6 +109,10 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   // A rail must be usable, not merely above 0: 1.5e-322 V passed `railV > 0` and made the heat quotients Infinity.
   if (!(usablePositive(railV, MIN_PA_RAIL_V) && railV <= 5000)) {
     errors.push({ field: 'railId', message: `No usable supply voltage (at least ${MIN_PA_RAIL_V} V, at most 5 kV) is known for the PA rail.` });
+  }
+  // The output is compared with it in dB: a reference of 5e-324 W passed `> 0` and gave Infinity dB.
+  if (!usablePositive(pa.referencePowerW, MIN_REFERENCE_POWER_W) && !errors.some((e) => e.field === 'referencePowerW')) {
+    errors.push({ field: 'referencePowerW', message: 'The reference power must be at least 1 nW.' });
   }
   const vsat0 = pa.saturationV ?? 0;
   if (errors.length === 0 && railV <= vsat0) errors.push({ field: 'saturationV', message: 'Saturation drop is not below the supply voltage.' });

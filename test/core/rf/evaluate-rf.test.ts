@@ -60,6 +60,13 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     expect(nonFiniteText(x.findings)).toEqual([]);
     expect(nonFinitePaths(x)).toEqual([]);
   });
+  it('a reference power of 5e-324 W (subnormal) is refused, not compared as "Infinity dB" (regression)', () => {
+    const base = project();
+    const x = evaluateRf(project({ stages: [{ ...base.stages[0], pa: paParams({ referencePowerW: 5e-324 }) }, base.stages[1], base.stages[2]] }),
+      { paRailV: { pa: 13.8 } });
+    expect(nonFinitePaths(x)).toEqual([]);
+    expect(x.findings.filter((f) => f.rule === 'pa.input' && f.severity === 'fail')).toHaveLength(1);
+  });
   it('zero power and zero frequency are input errors, not crashes', () => {
     const x = evaluateRf(project({ targetPowerW: 0, frequencyHz: 0 }), { paRailV: { pa: 13.8 } });
     expect(x.inputErrors.map((e) => e.field).sort()).toEqual(['frequencyHz', 'targetPowerW']);
