@@ -73,7 +73,9 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
               <tr>
                 <th>Rail</th>
                 {MODES.map((m) => (
-                  <th>{MODE_LABELS[m]}</th>
+                  <th>
+                    {MODE_LABELS[m]} ({loadSpec.fields[`currentA.${m}`].display.symbol})
+                  </th>
                 ))}
               </tr>
             </thead>

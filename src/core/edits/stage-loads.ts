@@ -4,7 +4,6 @@ import type { StageLoad } from '../model';
 import { MODES } from '../model';
 import { loadSpec, loadFormName } from '../spec/stage';
 import { readField } from '../spec/derive';
-import type { Field } from '../spec/field';
 
 /** The rail choice that removes an existing row (the empty choice belongs to the new row). */
 export const REMOVE_LOAD = 'remove';
@@ -32,7 +31,7 @@ export function readLoads(railIds: ReadonlySet<string>, values: Record<string, s
       const key = loadFormName(i, `currentA.${m}`);
       // an empty current in a row means none drawn in that mode
       if (!typed.includes(m)) continue;
-      const r = readField((loadSpec.fields as Record<string, Field>)[`currentA.${m}`], values[key]);
+      const r = readField(loadSpec.fields[`currentA.${m}`], values[key]);
       if (r.ok) currentA[m] = r.value as number;
       else errors[key] = r.message;
     }

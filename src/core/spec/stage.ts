@@ -1,5 +1,5 @@
 // A stage's own fields and one row of its current table (the current it draws from one rail in each mode).
-import { defineSpec, U } from './field';
+import { defineSpec, U, type NumberField } from './field';
 import { MODE_LABELS, MODES, STAGE_KINDS, STAGE_KIND_LABELS, type Stage } from '../model';
 import { formValues } from './derive';
 import { choice, num, optNum, ref, text } from './make';
@@ -27,7 +27,7 @@ export const loadSpec = defineSpec({
     railId: ref('Rail', 'rail', false),
     ...Object.fromEntries(
       MODES.map((m) => [`currentA.${m}`, num(`${MODE_LABELS[m]} current`, 'A', U.mA, 0, 100, 0, { example: '350' })]),
-    ),
+    ) as Record<string, NumberField>,
   },
 });
 
