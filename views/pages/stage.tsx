@@ -5,7 +5,7 @@ import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/co
 import { Field, Select, Check, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { formValues, lpfSpec, loadSpec, paSpec, relaySpec, stageSpec } from '../../src/core/spec';
-import { loadFormName, stageFormValues } from '../../src/core/spec/stage';
+import { loadCurrentFields, loadFormName, stageFormValues } from '../../src/core/spec/stage';
 import { SpecField } from '../components/spec-fields';
 import { REMOVE_LOAD } from '../../src/core/edits/stage-loads';
 
@@ -74,7 +74,7 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
                 <th>Rail</th>
                 {MODES.map((m) => (
                   <th>
-                    {MODE_LABELS[m]} ({loadSpec.fields[`currentA.${m}`].display.symbol})
+                    {MODE_LABELS[m]} ({loadCurrentFields[`currentA.${m}`].display.symbol})
                   </th>
                 ))}
               </tr>

@@ -2,7 +2,7 @@
 // A row with currents but no rail is refused (the currents would otherwise vanish on save).
 import type { StageLoad } from '../model';
 import { MODES } from '../model';
-import { loadSpec, loadFormName } from '../spec/stage';
+import { loadCurrentFields, loadFormName } from '../spec/stage';
 import { readField } from '../spec/derive';
 
 /** The rail choice that removes an existing row (the empty choice belongs to the new row). */
@@ -31,7 +31,7 @@ export function readLoads(railIds: ReadonlySet<string>, values: Record<string, s
       const key = loadFormName(i, `currentA.${m}`);
       // an empty current in a row means none drawn in that mode
       if (!typed.includes(m)) continue;
-      const r = readField(loadSpec.fields[`currentA.${m}`], values[key]);
+      const r = readField(loadCurrentFields[`currentA.${m}`], values[key]);
       if (r.ok) currentA[m] = r.value as number;
       else errors[key] = r.message;
     }

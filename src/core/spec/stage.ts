@@ -18,6 +18,11 @@ export const stageSpec = defineSpec({
   },
 });
 
+/** The current a stage draws from one rail in each mode, keyed 'currentA.receive' etc. */
+export const loadCurrentFields: Record<string, NumberField> = Object.fromEntries(
+  MODES.map((m) => [`currentA.${m}`, num(`${MODE_LABELS[m]} current`, 'A', U.mA, 0, 100, 0, { example: '350' })]),
+);
+
 /** One load row; the form names carry the row number (rail0, l0_keyDown), see loadFormName. */
 export const loadSpec = defineSpec({
   name: 'load',
@@ -25,9 +30,7 @@ export const loadSpec = defineSpec({
   rowName: (row: number, key: string) => loadFormName(row, key),
   fields: {
     railId: ref('Rail', 'rail', false),
-    ...Object.fromEntries(
-      MODES.map((m) => [`currentA.${m}`, num(`${MODE_LABELS[m]} current`, 'A', U.mA, 0, 100, 0, { example: '350' })]),
-    ) as Record<string, NumberField>,
+    ...loadCurrentFields,
   },
 });
 
