@@ -158,3 +158,16 @@ describe('a rectified rail with no winding', () => {
     expect(fails(r, 'budget.pa-current').map((f) => f.subject)).toEqual(['Push-pull MOSFET final: PA key-down current']);
   });
 });
+
+describe('the supply page for a tree with an unknown load', () => {
+  it('shows the "not designed" failure and no rail card for the PA rail', async () => {
+    const { SupplyResults } = await import('../../views/partials/supply-results');
+    const p = club();
+    p.stages.find((s) => s.id === 'st-pa')!.pa!.efficiency = 0.02;
+    const html = String(await SupplyResults({ report: evaluate(p).supply! })!.toString());
+    expect(html).toContain('PA rail (unregulated, ~24 V) is not designed');
+    expect(html).toContain('T1 mains transformer is not sized');
+    expect(html).toContain('id="supply-rail-raw"'); // the other tree keeps its card
+    expect(html).not.toContain('id="supply-rail-pa"');
+  });
+});
