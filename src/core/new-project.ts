@@ -1,13 +1,11 @@
 // A fresh project with sensible defaults (pure: ids and clock come from the caller).
 import type { Project, Mains, RfSettings } from './model';
 import { paDefaultRailId, relayCoilDefaultRailId } from './role-defaults';
+import { defaults } from './spec/derive';
+import { settingsSpec } from './spec/settings';
+import { rfSettingsSpec } from './spec/rf-settings';
 
-export const MAINS_PRESETS: Record<string, Mains | null> = {
-  '230-50': { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 },
-  '120-60': { nominalV: 120, frequencyHz: 60, lowFraction: 0.1, highFraction: 0.1 },
-  '100-50': { nominalV: 100, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 },
-  battery: null,
-};
+export { MAINS_PRESETS } from './spec/settings';
 
 export function newProject(id: string, name: string, frequencyHz: number, targetPowerW: number, mains: Mains | null): Project {
   return {
@@ -17,11 +15,8 @@ export function newProject(id: string, name: string, frequencyHz: number, target
     frequencyHz,
     targetPowerW,
     mains,
-    ambientC: 30,
-    currency: 'USD',
-    kits: 1,
-    // Source: FCC OET Bulletin 65 Supplement B (1997), Table 2: conversational CW duty factor 40 %
-    keyingDuty: 0.4,
+    // ambient, currency, kits and keying duty start at the settings spec's defaults (sources there)
+    ...settingStart(),
     version: 1,
     supply: { transformers: [], rails: [], primaryFuseA: null },
     stages: [],
@@ -32,18 +27,14 @@ export function newProject(id: string, name: string, frequencyHz: number, target
   };
 }
 
-/** RF settings for a new project: US rule, 2:1 worst SWR, a dipole, CW duty (OET-65 Supplement B Table 2: 40 %). */
+/** RF settings for a new project: the RF settings spec's defaults (US rule, 2:1 worst SWR, a dipole, CW duty). */
 export function defaultRfSettings(): RfSettings {
-  return {
-    spuriousRule: 'us-97-307',
-    evenHarmonicDbc: -30,
-    worstSwr: 2,
-    antennaGainDbi: 2.15,
-    feedlineLossDb: 0.5,
-    groundReflection: true,
-    exposureDutyFactor: 0.4,
-    exposureOnFraction: 1,
-  };
+  return defaults(rfSettingsSpec) as unknown as RfSettings;
+}
+
+function settingStart(): Pick<Project, 'ambientC' | 'currency' | 'kits' | 'keyingDuty'> {
+  const d = defaults(settingsSpec) as unknown as Project;
+  return { ambientC: d.ambientC, currency: d.currency, kits: d.kits, keyingDuty: d.keyingDuty };
 }
 
 /** A copy with fresh ids for every row, so it can live beside the original. */

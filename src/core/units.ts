@@ -33,7 +33,7 @@ const UNIT_ALIASES: Record<string, string[]> = {
   Ah: ['Ah', 'ah'],
   'K/W': ['K/W', '°C/W', 'C/W', 'degC/W'],
   '°C': ['°C', 'C', 'degC'],
-  dB: ['dB', 'db'],
+  dB: ['dB', 'db', 'dBc', 'dBi'], // a relative level typed with its reference (-30 dBc, 2.15 dBi)
   '%': ['%'],
   'H/t²': ['H/t²', 'H/t2', 'H/turn2', 'H/N2'],
   '': [],

@@ -2,9 +2,11 @@
 // Format: { "format": "rigwright-project", "formatVersion": 1, "exportedAt": ISO date, "project": {...} }
 // with every quantity in SI units (V, A, W, Ω, F, H, Hz, s, °C, fractions 0..1) and money in integer cents.
 import { z } from 'zod';
-import type { LpfParams, PaParams, Project, RelayParams } from '../core/model';
+import type { LpfParams, Mains, PaParams, Project, RelayParams, RfSettings } from '../core/model';
 import { lpfSpec, paSpec, relaySpec } from '../core/spec';
-import { specFileSchema } from './spec-schema';
+import { mainsSpec, projectFieldsSpec } from '../core/spec/settings';
+import { rfSettingsSpec } from '../core/spec/rf-settings';
+import { specFileSchema, specShape } from './spec-schema';
 import { MODES, STAGE_KINDS } from '../core/model';
 
 export const FORMAT = 'rigwright-project';
@@ -18,10 +20,8 @@ const name = z
   .min(1, 'must not be empty')
   .max(200)
   .regex(/^[^\u0000-\u001f\u007f\u2028\u2029]*$/, 'must be one line of text without control characters');
-const text = z.string().max(20_000);
 const pos = (max: number) => z.number().finite().positive().max(max);
 const nonneg = (max: number) => z.number().finite().min(0).max(max);
-const fraction = z.number().finite().min(0).max(1);
 // limits match the web forms, so an imported project can be edited and saved back unchanged
 const perMode = z.object({ receive: nonneg(100), keyUp: nonneg(100), keyDown: nonneg(100) });
 
@@ -137,24 +137,15 @@ const part = z.object({
     .max(50),
 });
 
+// the project's own values, its mains and its RF settings: the same specs as the settings forms and core's checks
+const projectFields = specShape(projectFieldsSpec);
+const mains = specFileSchema<Mains>(mainsSpec);
+const rf = specFileSchema<RfSettings>(rfSettingsSpec);
+
 export const projectSchema = z.object({
   id,
-  name,
-  notes: text,
-  frequencyHz: z.number().finite().min(100e3).max(60e6),
-  targetPowerW: pos(2000),
-  mains: z
-    .object({
-      nominalV: z.number().finite().min(50).max(300),
-      frequencyHz: z.number().finite().min(40).max(500),
-      lowFraction: z.number().finite().min(0).max(0.5),
-      highFraction: z.number().finite().min(0).max(0.5),
-    })
-    .nullable(),
-  ambientC: z.number().finite().min(-40).max(70),
-  currency,
-  kits: z.number().int().min(1).max(1000),
-  keyingDuty: fraction,
+  ...projectFields,
+  mains: mains.nullable(),
   version: z.number().int().min(0).optional().default(1),
   supply: z.object({
     transformers: z
@@ -173,16 +164,7 @@ export const projectSchema = z.object({
     primaryFuseA: pos(63).nullable(),
   }),
   stages: z.array(stage).max(100),
-  rf: z.object({
-    spuriousRule: z.enum(['us-97-307', 'itu-app3']),
-    evenHarmonicDbc: z.number().finite().min(-120).max(0),
-    worstSwr: z.number().finite().min(1).max(100),
-    antennaGainDbi: z.number().finite().min(-30).max(30),
-    feedlineLossDb: nonneg(100),
-    groundReflection: z.boolean(),
-    exposureDutyFactor: fraction,
-    exposureOnFraction: fraction,
-  }),
+  rf,
   parts: z.array(part).max(5000),
   bom: z
     .array(z.object({ id, stageId: id.nullable(), partId: id, qtyPerRig: pos(100_000), refs: z.string().max(300), notes: z.string().max(500) }))

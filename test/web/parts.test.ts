@@ -1,11 +1,10 @@
 // Parts catalog through t.app.request(): parts, offers (price-break text), suppliers, costing settings;
-// refused input kept and nothing saved, stale version, deletion of a part on the parts list refused.
+// refused input kept and nothing saved, stale version, deletion of a part on the parts list refused. The text formats
+// themselves (ratings, price breaks, rates, money) are tested with their specs in test/core/spec/parts.test.ts.
 import { beforeEach, describe, expect, it } from 'vitest';
 import { demoApp } from '../helpers/app';
 import { loadProject } from '../../src/db/projects';
 import type { Project } from '../../src/core/model';
-import { parseBreaks, parseRatings, parseRates, moneyToCents } from '../../src/web/parts-forms';
-import { ratingsText } from '../../views/components/parts-part';
 
 const ID = 'demo-club-30m';
 let t: Awaited<ReturnType<typeof demoApp>>;
@@ -16,36 +15,6 @@ beforeEach(async () => {
 const stored = async (): Promise<Project> => (await loadProject(t.database.db, ID))!;
 
 const post = (path: string, fields: Record<string, string>, htmx = false) => t.post(path, fields, htmx ? { 'HX-Request': 'true' } : {});
-
-describe('catalog text parsing', () => {
-  it('reads price breaks as minimum quantity -> whole cents, sorted', () => {
-    expect(parseBreaks('10: 0.78, 1: 0.95, 100: 0.52')).toEqual({ ok: true, breaks: [{ minQty: 1, unitPriceCents: 95 }, { minQty: 10, unitPriceCents: 78 }, { minQty: 100, unitPriceCents: 52 }] });
-    expect(parseBreaks('1: 0,95; 10: 0,78')).toEqual({ ok: true, breaks: [{ minQty: 1, unitPriceCents: 95 }, { minQty: 10, unitPriceCents: 78 }] });
-    expect(parseBreaks('1: 0.125').ok).toBe(false); // sub-cent prices are refused, not silently rounded
-    expect(parseBreaks('0: 1.00').ok).toBe(false);
-    expect(parseBreaks('1: 1, 1: 2').ok).toBe(false);
-    expect(parseBreaks('').ok).toBe(false);
-  });
-
-  it('reads ratings with numbers parsed (engineering prefixes too) and text kept', () => {
-    expect(parseRatings('voltageV=35, rippleA=2.4; capacitanceF=4700u; type=T; note=5 × 20 mm, glass')).toEqual({
-      ok: true,
-      ratings: { voltageV: 35, rippleA: 2.4, capacitanceF: 0.0047, type: 'T', note: '5 × 20 mm, glass' },
-    });
-    expect(parseRatings('va 70').ok).toBe(false);
-    // text that would read as a number, or holds a separator, is quoted by the form and comes back unchanged
-    const ratings = { va: 70, code: '100n', note: 'a; b, c', quote: 'say "hi"', alHPerTurn2: 4.9e-9 };
-    expect(parseRatings(ratingsText(ratings))).toEqual({ ok: true, ratings });
-    expect(parseRatings('a=1; a=2').ok).toBe(false);
-  });
-
-  it('reads exchange rates and amounts', () => {
-    expect(parseRates('EUR = 1.08\ngbp=1.27')).toEqual({ ok: true, rates: { EUR: 1.08, GBP: 1.27 } });
-    expect(parseRates('EUR = 0').ok).toBe(false);
-    expect(moneyToCents('8.5')).toEqual({ ok: true, cents: 850 });
-    expect(moneyToCents('0.29')).toEqual({ ok: true, cents: 29 });
-  });
-});
 
 describe('parts catalog page', () => {
   it('renders every part and supplier', async () => {

@@ -1,13 +1,14 @@
 // Parts-list line editor: one form per line laid out as a grid row, and an add-line form.
 import type { FC } from 'hono/jsx';
 import type { BomLine, Project } from '../../src/core/model';
-import { type FieldState, Field, Select } from './fields';
+import { bomLineSpec, defaults, formValues } from '../../src/core/spec';
+import { type FieldState } from './fields';
+import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
 import { Version, hx } from './supply-transformer';
 
-export function lineValues(l: BomLine | null): Record<string, string> {
-  return l ? { stageId: l.stageId ?? '', partId: l.partId, qty: String(l.qtyPerRig), refs: l.refs, notes: l.notes } : { stageId: '', partId: '', qty: '1', refs: '', notes: '' };
-}
+/** Form text of a line (a new line starts from the spec's defaults: General, no part chosen, 1 per rig). */
+export const lineValues = (l: BomLine | null): Record<string, string> => formValues(bomLineSpec, l ?? defaults(bomLineSpec));
 
 // In the grid the messages go in a full-width box right above the row (the narrow cells would wrap them
 // word by word); the refused fields keep their red border and aria-invalid.
@@ -27,16 +28,17 @@ const Errors: FC<{ state: FieldState }> = ({ state }) => {
 };
 
 const LineFields: FC<{ project: Project; state: FieldState; idp: string }> = ({ project, state, idp }) => {
-  const stages: [string, string][] = [['', 'General (no stage)'], ...project.stages.map((s): [string, string] => [s.id, s.name])];
+  const stages: [string, string][] = project.stages.map((s): [string, string] => [s.id, s.name]);
   const parts: [string, string][] = project.parts.map((p) => [p.id, `${p.description}${p.category ? ` (${p.category})` : ''}`]);
   const partsWithPick: [string, string][] = state.values.partId ? parts : [['', 'Choose a part…'], ...parts];
+  // the grid's column heads name the fields: the boxes carry no help lines (they would break the rows)
   return (
     <>
-      <Select idp={idp} name="stageId" label="Stage" state={state} options={stages} cls="bom-stage" />
-      <Select idp={idp} name="partId" label="Part" state={state} options={partsWithPick} cls="bom-part" />
-      <Field idp={idp} name="qty" label="Qty per rig" state={state} size={4} cls="bom-qty" />
-      <Field idp={idp} name="refs" label="Designators" state={state} size={10} cls="bom-refs" />
-      <Field idp={idp} name="notes" label="Notes" state={state} size={18} cls="bom-notes" />
+      <SpecField spec={bomLineSpec} k="stageId" idp={idp} state={state} options={stages} none="General (no stage)" cls="bom-stage" />
+      <SpecField spec={bomLineSpec} k="partId" idp={idp} state={state} options={partsWithPick} cls="bom-part" />
+      <SpecField spec={bomLineSpec} k="qtyPerRig" idp={idp} state={state} size={4} label="Qty per rig" cls="bom-qty" />
+      <SpecField spec={bomLineSpec} k="refs" idp={idp} state={state} size={10} label="Designators" hint="" cls="bom-refs" />
+      <SpecField spec={bomLineSpec} k="notes" idp={idp} state={state} size={18} cls="bom-notes" />
     </>
   );
 };

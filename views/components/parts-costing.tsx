@@ -1,23 +1,26 @@
 // Costing settings (attrition, spares, exchange rates) and the supplier list with shipping charges.
 import type { FC } from 'hono/jsx';
 import type { Project, Supplier } from '../../src/core/model';
-import { FormErrors, Field, TextArea } from './fields';
+import { costingSpec, formValues, supplierSpec } from '../../src/core/spec';
+import { FormErrors, type FieldState } from './fields';
+import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
-import { Version, hx, pctText } from './supply-transformer';
-import { centsText } from './parts-part';
+import { Version, hx } from './supply-transformer';
 
-export const ratesText = (r: Record<string, number>) =>
-  Object.entries(r)
-    .map(([k, v]) => `${k} = ${v}`)
-    .join('\n');
-
-export function costingValues(p: Project): Record<string, string> {
-  return { attrition: pctText(p.costing.attritionFraction), spares: String(p.costing.sparesPerLine), rates: ratesText(p.costing.exchangeRates) };
-}
+// Form text of stored values, from the specs (src/core/spec/costing.ts, parts.ts).
+export const costingValues = (p: Project): Record<string, string> => formValues(costingSpec, p.costing);
 
 export function supplierValues(s: Supplier | null, currency: string): Record<string, string> {
-  return s ? { name: s.name, shipping: centsText(s.shippingCents), currency: s.currency, was: s.name } : { name: '', shipping: '0.00', currency };
+  return s ? { ...formValues(supplierSpec, s), was: s.name } : { ...formValues(supplierSpec, { shippingCents: 0 }), currency };
 }
+
+const SupplierFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
+  <>
+    <SpecField spec={supplierSpec} k="name" idp={idp} state={state} size={24} label="Supplier" />
+    <SpecField spec={supplierSpec} k="shippingCents" idp={idp} state={state} size={7} hint="" />
+    <SpecField spec={supplierSpec} k="currency" idp={idp} state={state} size={4} hint="" />
+  </>
+);
 
 export const CostingCard: FC<{ project: Project; failed?: Failed }> = ({ project, failed }) => {
   const state = stateFor('costing', failed, () => costingValues(project));
@@ -28,9 +31,9 @@ export const CostingCard: FC<{ project: Project; failed?: Failed }> = ({ project
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-          <Field idp="cs" name="attrition" label="Attrition allowance" unit="%" state={state} size={5} hint="extra for losses and mistakes" />
-          <Field idp="cs" name="spares" label="Spares per line" state={state} size={5} hint="whole pieces added to each line" />
-          <TextArea idp="cs" name="rates" label={`Exchange rates (${project.currency} per 1 unit)`} state={state} rows={3} cols={18} hint="one per line, e.g. EUR = 1.08" />
+          <SpecField spec={costingSpec} k="attritionFraction" idp="cs" state={state} size={5} />
+          <SpecField spec={costingSpec} k="sparesPerLine" idp="cs" state={state} size={5} />
+          <SpecField spec={costingSpec} k="exchangeRates" idp="cs" state={state} rows={3} size={18} label={`Exchange rates (${project.currency} per 1 unit)`} />
           <button type="submit">Save</button>
         </div>
         <p class="hint">
@@ -56,9 +59,7 @@ export const SuppliersCard: FC<{ project: Project; failed?: Failed }> = ({ proje
             <input type="hidden" name="was" value={s.name} />
             <FormErrors state={state} />
             <div class="row">
-              <Field idp={`s${i}`} name="name" label="Supplier" state={state} size={24} />
-              <Field idp={`s${i}`} name="shipping" label="Shipping per order" state={state} size={7} />
-              <Field idp={`s${i}`} name="currency" label="Currency" state={state} size={4} />
+              <SupplierFields idp={`s${i}`} state={state} />
               <button type="submit">Save</button>
               <a class="danger" href={`${base}/delete`}>
                 Delete…
@@ -72,9 +73,7 @@ export const SuppliersCard: FC<{ project: Project; failed?: Failed }> = ({ proje
         <FormErrors state={addState} />
         <div class="row">
           <span class="row-label">Add a supplier:</span>
-          <Field idp="as" name="name" label="Supplier" state={addState} size={24} />
-          <Field idp="as" name="shipping" label="Shipping per order" state={addState} size={7} />
-          <Field idp="as" name="currency" label="Currency" state={addState} size={4} />
+          <SupplierFields idp="as" state={addState} />
           <button type="submit">Add supplier</button>
         </div>
       </form>

@@ -1,48 +1,39 @@
 // One catalog part: its own form, one form per supplier offer, and a form to add an offer.
 import type { FC } from 'hono/jsx';
 import type { Offer, Part, Project } from '../../src/core/model';
-import { FormErrors, type FieldState, Field } from './fields';
+import { formValues, offerSpec, partSpec } from '../../src/core/spec';
+import { FormErrors, type FieldState } from './fields';
+import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
-import { parseValue } from '../../src/core/units';
 import { Version, hx } from './supply-transformer';
 
-// Display text for model values (the inverse of src/web/parts-forms.ts parsing).
-export const ratingsText = (r: Record<string, number | string>) =>
-  Object.entries(r)
-    .map(([k, v]) => `${k}=${typeof v === 'string' && needsQuotes(v) ? JSON.stringify(v) : v}`)
-    .join('; ');
-
-/** Text that would not come back as the same text unquoted: it reads as a number, or holds a separator. */
-const needsQuotes = (v: string) => v === '' || v !== v.trim() || /[;\n",]/.test(v) || parseValue(v, '').ok;
-export const centsText = (cents: number) => (cents / 100).toFixed(2);
-export const breaksText = (b: Offer['breaks']) => b.map((x) => `${x.minQty}: ${centsText(x.unitPriceCents)}`).join(', ');
-
+// Form text of stored values, from the specs (src/core/spec/parts.ts); a new part or offer starts with empty boxes.
 export function partValues(p: Part | null): Record<string, string> {
-  return p ? { description: p.description, category: p.category, ratings: ratingsText(p.ratings) } : { description: '', category: '', ratings: '' };
+  return p ? formValues(partSpec, p) : { description: '', category: '', ratings: '' };
 }
 
 export function offerValues(o: Offer | null, currency: string): Record<string, string> {
-  if (!o) return { supplier: '', sku: '', currency, breaks: '', minOrder: '1', orderMultiple: '1', stockNote: '' };
-  return { supplier: o.supplier, sku: o.sku, currency: o.currency, breaks: breaksText(o.breaks), minOrder: String(o.minOrder), orderMultiple: String(o.orderMultiple), stockNote: o.stockNote };
+  if (o) return formValues(offerSpec, o);
+  return { ...formValues(offerSpec, { minOrder: 1, orderMultiple: 1 }), currency };
 }
 
 const OfferFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
   <>
-    <Field idp={idp} name="supplier" label="Supplier" state={state} size={20} list="supplier-names" />
-    <Field idp={idp} name="sku" label="SKU" state={state} size={12} />
-    <Field idp={idp} name="currency" label="Currency" state={state} size={4} />
-    <Field idp={idp} name="breaks" label="Price breaks (qty: unit price)" state={state} size={30} />
-    <Field idp={idp} name="minOrder" label="Min. order" state={state} size={4} />
-    <Field idp={idp} name="orderMultiple" label="Multiple" state={state} size={4} />
-    <Field idp={idp} name="stockNote" label="Stock note" state={state} size={14} />
+    <SpecField spec={offerSpec} k="supplier" idp={idp} state={state} size={20} list="supplier-names" />
+    <SpecField spec={offerSpec} k="sku" idp={idp} state={state} size={12} hint="" />
+    <SpecField spec={offerSpec} k="currency" idp={idp} state={state} size={4} hint="" />
+    <SpecField spec={offerSpec} k="breaks" idp={idp} state={state} size={30} />
+    <SpecField spec={offerSpec} k="minOrder" idp={idp} state={state} size={4} label="Min. order" />
+    <SpecField spec={offerSpec} k="orderMultiple" idp={idp} state={state} size={4} label="Multiple" />
+    <SpecField spec={offerSpec} k="stockNote" idp={idp} state={state} size={14} />
   </>
 );
 
 export const PartFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
   <>
-    <Field idp={idp} name="description" label="Description (type and ratings, no brand numbers)" state={state} size={56} />
-    <Field idp={idp} name="category" label="Category" state={state} size={16} list="part-categories" />
-    <Field idp={idp} name="ratings" label="Ratings (key=value; …)" state={state} size={48} hint="e.g. voltageV=35; rippleA=2.4" />
+    <SpecField spec={partSpec} k="description" idp={idp} state={state} size={56} />
+    <SpecField spec={partSpec} k="category" idp={idp} state={state} size={16} list="part-categories" />
+    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={48} />
   </>
 );
 

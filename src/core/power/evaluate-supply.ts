@@ -14,6 +14,7 @@ import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
 import { normalizeSupply } from './normalize';
+import { usablePositive } from '../numeric';
 
 export interface SupplyOptions {
   /** Standard secondary voltages to choose from (V RMS); default DEFAULT_SECONDARY_V. */
@@ -56,12 +57,14 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   const project: Project = { ...projectIn, supply: normalized.supply };
   const duty = safeDuty(project.keyingDuty);
   const txFraction = options.transmitFraction !== undefined && Number.isFinite(options.transmitFraction) ? Math.min(1, Math.max(0, options.transmitFraction)) : DEFAULT_TRANSMIT_FRACTION;
-  const mainsOk = project.mains !== null && project.mains.nominalV > 0 && project.mains.frequencyHz > 0;
+  // Usable, not merely > 0: the primary current divides by the mains voltage (5e-324 V made it Infinity)
+  const m0 = project.mains;
+  const mainsOk = m0 !== null && usablePositive(m0.nominalV, 1) && usablePositive(m0.frequencyHz, 1);
   const specs = cornerSpecs(project.mains, duty);
   const rails = project.supply.rails;
   const globalFindings: Finding[] = [...normalized.findings];
   if (project.mains && !mainsOk) {
-    globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'Project data', message: 'The mains voltage and frequency must both be above zero.' });
+    globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'Project data', message: 'The mains voltage must be at least 1 V and its frequency at least 1 Hz.' });
   }
   const windings = new Map<string, { w: Winding; t: Transformer }>();
   for (const t of project.supply.transformers) for (const w of t.windings) windings.set(w.id, { w, t });

@@ -5,6 +5,7 @@ import type { RectifiedCorner, Recommendation, TransformerReport, WindingRecomme
 import { simulateRectifier } from './rectifier-sim';
 import { noLoadVrms, windingResistanceOhm } from './winding';
 import { DEFAULT_TRANSFORMER_VA, nextAtLeast } from './standard-values';
+import { usablePositive } from '../numeric';
 
 /** Toroid size above which a soft-start is advised. Common practice, no published source (from memory). */
 export const TOROID_SOFT_START_VA = 300;
@@ -29,8 +30,10 @@ const get = (cs: RectifiedCorner[], id: string) => cs.find((c) => c.id === id);
 function troughFor(inp: WindingInput, ratedV: number, ratedA: number): number {
   const w = inp.winding;
   // Effective regulation of the fitted winding (from its entered resistance when there is one): R = Reg V / I (ref §4.1)
-  const regEff = w.ratedVrms > 0 && w.ratedA > 0 ? (windingResistanceOhm(w) * w.ratedA) / w.ratedVrms : w.regulationFraction;
-  const r = ratedA > 0 ? (regEff * ratedV) / ratedA : 0;
+  // Usable denominators (1 mV, 1 µA), not merely > 0: a subnormal rating made these quotients infinite
+  const ratingUsable = usablePositive(w.ratedVrms, 1e-3) && usablePositive(w.ratedA, 1e-6);
+  const regEff = ratingUsable ? (windingResistanceOhm(w) * w.ratedA) / w.ratedVrms : w.regulationFraction;
+  const r = usablePositive(ratedA, 1e-6) ? (regEff * ratedV) / ratedA : 0;
   const sim = simulateRectifier({
     topology: inp.rail.topology, secondaryVrms: noLoadVrms({ ...w, ratedVrms: ratedV }) * inp.lowFactor, windingResistanceOhm: r,
     frequencyHz: inp.frequencyHz, diodeDropV: inp.rail.diodeDropV, diodeResistanceOhm: inp.rail.diodeResistanceOhm,
@@ -90,7 +93,9 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
   const va = vaRatedV * ratedA * halves;
   const maxKeyDownRms = Math.max(0, ...inp.corners.filter((c) => c.load === 'keyDown').map((c) => c.secondaryRmsA));
   // Ampere-turn balance: primary current = secondary current x turns ratio (V_NL / V_mains); magnetising current neglected
-  const primaryReferredA = inp.mainsNominalV > 0 ? (noLoadVrms(inp.winding) / inp.mainsNominalV) * maxKeyDownRms * Math.sqrt(halves) : 0;
+  // 0 only without usable mains, which evaluateSupply already reports as a fail (mains.values)
+  const primaryReferredA = usablePositive(inp.mainsNominalV, 1)
+    ? (noLoadVrms(inp.winding) / inp.mainsNominalV) * maxKeyDownRms * Math.sqrt(halves) : 0;
   const half = halves === 2 ? ' per half (centre-tapped)' : '';
   const result: WindingRecommendation = {
     windingId: inp.winding.id, windingName: inp.winding.name, minimumRatedV, standardRatedV, thermalRmsA, tuneUpRmsA, peakA, ratedA, va, vaRatedV, checkTroughV,

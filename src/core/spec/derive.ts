@@ -41,9 +41,9 @@ export function storedProblem(f: Field, v: unknown): string {
       }
       if (typeof v !== 'string') return 'is not text';
       if (f.required && v.trim() === '') return 'must not be empty';
+      if (f.pattern && v !== '' && !f.pattern.re.test(v)) return f.pattern.says;
       if (v.length > f.max) return `is longer than ${f.max} characters`;
-      if (!f.multiline && CONTROL.test(v)) return 'must be one line of text without control characters';
-      return f.pattern && v !== '' && !f.pattern.re.test(v) ? f.pattern.says : '';
+      return !f.multiline && CONTROL.test(v) ? 'must be one line of text without control characters' : '';
     case 'bool':
       return typeof v === 'boolean' ? '' : 'must be true or false';
     case 'ref':
@@ -99,8 +99,9 @@ export function readField(f: Field, raw: string | undefined): { ok: true; value:
       const typed = f.multiline ? text.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd() : text.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim();
       const v = f.upper ? typed.toUpperCase() : typed;
       if (f.required && v === '') return { ok: false, message: `${f.label} must not be empty` };
-      if (v.length > f.max) return { ok: false, message: `${f.label} is longer than ${f.max} characters` };
+      // the pattern says what is expected, which is more use than a length
       if (f.pattern && v !== '' && !f.pattern.re.test(v)) return { ok: false, message: `${f.label} ${f.pattern.says}; you entered "${typed}"` };
+      if (v.length > f.max) return { ok: false, message: `${f.label} is longer than ${f.max} characters` };
       if (f.codec) {
         const r = f.codec.fromText(v);
         return r.ok ? r : { ok: false, message: `${f.label}: ${r.message}` };

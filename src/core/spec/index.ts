@@ -4,6 +4,8 @@ import { paSpec } from './pa';
 import { lpfSpec } from './lpf';
 import { relaySpec } from './relay';
 import { loadSpec, stageSpec } from './stage';
+import { mainsSpec, newProjectSpec, settingsSpec } from './settings';
+import { rfSettingsSpec } from './rf-settings';
 import { offerSpec, partSpec, supplierSpec } from './parts';
 import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
@@ -11,7 +13,9 @@ import { costingSpec } from './costing';
 export * from './field';
 export { validate, formValues, parseForm, defaults, pick, readField } from './derive';
 export { paSpec, lpfSpec, relaySpec, stageSpec, loadSpec };
+export { settingsSpec, mainsSpec, newProjectSpec, rfSettingsSpec };
 export { partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec };
 
 export const ALL_SPECS: Spec[] = [stageSpec, loadSpec, paSpec, lpfSpec, relaySpec,
+  settingsSpec, rfSettingsSpec,
   partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec];

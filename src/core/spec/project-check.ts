@@ -12,6 +12,8 @@ import { relaySpec } from './relay';
 import { offerSpec, partSpec, supplierSpec } from './parts';
 import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
+import { settingsSpec } from './settings';
+import { rfSettingsSpec } from './rf-settings';
 
 /** One stored object and the words that name it ("Stage 'PA', PA data"). */
 export interface Located {
@@ -40,6 +42,8 @@ export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
   { spec: supplierSpec, at: (p) => p.costing.suppliers.map((s) => ({ subject: `Supplier "${s.name}"`, value: s })) },
   { spec: bomLineSpec, at: (p) => p.bom.map((l, i) => ({ subject: `Parts-list line ${i + 1}${l.refs ? ` (${l.refs})` : ''}`, value: l })) },
   { spec: costingSpec, at: (p) => [{ subject: 'Costing settings', value: p.costing }] },
+  { spec: settingsSpec, at: (p) => [{ subject: 'Project settings', value: p }] },
+  { spec: rfSettingsSpec, at: (p) => [{ subject: 'RF settings', value: p.rf }] },
 ];
 
 /** Fail findings for every stored value outside its field's definition. */

@@ -5,12 +5,13 @@ import type { Project } from '../../core/model';
 import { costProject } from '../../core/cost';
 import { costReportToCsv, planImport, previewImport, rowsToProjectData, guessDelimiter, parseCsv, guessMapping } from '../../core/csv';
 import { loadProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
-import { projectEdit, doneNotice, type ChangeResult } from '../edit';
+import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import { versionField } from '../form';
 import type { Deps } from '../deps';
 import { newId } from '../ids';
-import { lineSchema, lineErrors, lineFrom, mappingFrom, mergeImport } from '../bom-forms';
+import { lineSchema, mappingFrom } from '../bom-forms';
+import { deleteLine, mergeImport, saveLine } from '../../core/edits/parts-list';
 import { Layout } from '../../../views/layout';
 import { BomBody } from '../../../views/pages/bom';
 import { lineValues } from '../../../views/components/bom-lines';
@@ -28,16 +29,6 @@ export function bomPage(project: Project, failed?: Failed, notice?: string) {
       {body(project, failed, notice)}
     </Layout>
   );
-}
-
-const gone: ChangeResult = { errors: { _form: 'That line no longer exists (deleted in another window?). The page now shows the stored parts list.' } };
-
-function lineChange(p: Project, d: z.output<typeof lineSchema>, id: string | null): ChangeResult {
-  const errors = lineErrors(p, d);
-  if (errors) return { errors };
-  if (id === null) return { ...p, bom: [...p.bom, lineFrom(newId('b'), d)] };
-  if (!p.bom.some((l) => l.id === id)) return gone;
-  return { ...p, bom: p.bom.map((l) => (l.id === id ? lineFrom(id, d) : l)) };
 }
 
 type ImportState = Omit<ImportPreviewProps, 'project' | 'preview' | 'message'> & { values: Record<string, string> };
@@ -84,13 +75,13 @@ export function bomRoutes(deps: Deps) {
     return c.body(text, 200, { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileName}"` });
   });
 
-  app.post('/projects/:id/bom/lines', projectEdit(deps, { ...common, form: 'add-line', schema: lineSchema, values: () => ({}), change: (p, d) => lineChange(p, d, null) }));
+  app.post('/projects/:id/bom/lines', projectEdit(deps, { ...common, form: 'add-line', schema: lineSchema, values: () => ({}), change: (p, d) => saveLine(p, newId('b'), d, true) }));
   app.post('/projects/:id/bom/lines/:lid', projectEdit(deps, { ...common, form: (c) => `line-${c.req.param('lid')}`, schema: lineSchema,
     values: (p, c) => {
       const l = p.bom.find((x) => x.id === c.req.param('lid'));
       return l ? lineValues(l) : null;
     },
-    change: (p, d, c) => lineChange(p, d, c.req.param('lid')!) }));
+    change: (p, d, c) => saveLine(p, c.req.param('lid')!, d, false) }));
 
   app.get('/projects/:id/bom/lines/:lid/delete', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));
@@ -103,7 +94,7 @@ export function bomRoutes(deps: Deps) {
 
   app.post('/projects/:id/bom/lines/:lid/delete', projectEdit(deps, { ...common, form: (c) => `delete-line-${c.req.param('lid')}`, schema: z.object({}),
     redirect: (p) => `${pageUrl(p)}?done=deleted`,
-    change: (p, _d, c) => (p.bom.some((l) => l.id === c.req.param('lid')) ? { ...p, bom: p.bom.filter((l) => l.id !== c.req.param('lid')) } : gone),
+    change: (p, _d, c) => deleteLine(p, c.req.param('lid')!),
   }));
 
   // ------------------------------------------------------------ CSV import: preview until the user imports

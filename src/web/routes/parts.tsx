@@ -1,9 +1,10 @@
 // Parts catalog routes: parts and their supplier offers, suppliers with shipping, costing settings.
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
-import type { Offer, Part, Project, Supplier } from '../../core/model';
+import type { Part, Project, Supplier } from '../../core/model';
+import { addPart, gone, saveCosting, saveOffer, savePart, saveSupplier } from '../../core/edits/catalog';
 import { loadProject } from '../../db/projects';
-import { projectEdit, doneNotice, type ChangeResult } from '../edit';
+import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { newId } from '../ids';
@@ -24,13 +25,8 @@ export function partsPage(project: Project, failed?: Failed, notice?: string, op
   );
 }
 
-const gone = (what: string): ChangeResult => ({ errors: { _form: `That ${what} no longer exists (deleted in another window?). The page now shows the stored catalog.` } });
 const withParts = (p: Project, parts: Part[]): Project => ({ ...p, parts });
 const withSuppliers = (p: Project, suppliers: Supplier[]): Project => ({ ...p, costing: { ...p.costing, suppliers } });
-const sameName = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
-
-type OfferData = z.output<typeof F.offerSchema>;
-const offerFrom = (id: string, d: OfferData): Offer => ({ id, supplier: d.supplier, sku: d.sku, currency: d.currency, breaks: d.breaks, minOrder: d.minOrder, orderMultiple: d.orderMultiple, stockNote: d.stockNote });
 
 function supplierAt(p: Project, c: Context): { index: number; s: Supplier } | null {
   const index = Number(c.req.param('n'));
@@ -50,29 +46,17 @@ export function partsRoutes(deps: Deps) {
     return sendPage(c, partsPage(project, undefined, doneNotice(c), c.req.query('open')));
   });
 
-  app.post('/projects/:id/costing', projectEdit(deps, { ...common, form: 'costing', schema: F.costingSchema, values: costingValues,
-    change: (p, d) => {
-      if (d.rates[p.currency.toUpperCase()] !== undefined) return { errors: { rates: `${p.currency} is the project currency; it needs no exchange rate` } };
-      return { ...p, costing: { ...p.costing, attritionFraction: d.attrition, sparesPerLine: d.spares, exchangeRates: d.rates } };
-    },
-  }));
+  app.post('/projects/:id/costing', projectEdit(deps, { ...common, form: 'costing', schema: F.costingSchema, values: costingValues, change: saveCosting }));
 
   // ------------------------------------------------------------ suppliers
   app.post('/projects/:id/suppliers', projectEdit(deps, { ...common, form: 'add-supplier', schema: F.supplierSchema, values: () => ({}),
-    change: (p, d) => {
-      if (p.costing.suppliers.some((s) => sameName(s.name, d.name))) return { errors: { name: `Supplier “${d.name}” is already in the list` } };
-      return withSuppliers(p, [...p.costing.suppliers, { name: d.name, shippingCents: d.shipping, currency: d.currency }]);
-    },
+    change: (p, d) => saveSupplier(p, null, d),
   }));
 
   app.post('/projects/:id/suppliers/:n', projectEdit(deps, { ...common, form: (c) => `supplier-${c.req.param('n')}`, schema: F.supplierSchema,
     change: (p, d, c) => {
       const at = supplierAt(p, c);
-      if (!at) return gone('supplier');
-      if (p.costing.suppliers.some((s, i) => i !== at.index && sameName(s.name, d.name))) return { errors: { name: `Supplier “${d.name}” is already in the list` } };
-      const old = at.s.name;
-      const parts = p.parts.map((part) => ({ ...part, offers: part.offers.map((o) => (sameName(o.supplier, old) ? { ...o, supplier: d.name } : o)) }));
-      return withSuppliers({ ...p, parts }, p.costing.suppliers.map((s, i) => (i === at.index ? { name: d.name, shippingCents: d.shipping, currency: d.currency } : s)));
+      return at ? saveSupplier(p, at.index, d) : gone('supplier');
     },
   }));
 
@@ -80,7 +64,7 @@ export function partsRoutes(deps: Deps) {
   app.post('/projects/:id/parts', projectEdit(deps, { ...common, form: 'add-part', schema: F.partSchema, values: () => ({}),
     partial: (p, f, n) => <PartsBody project={p} failed={f} notice={n && !f ? 'Part added: open it below to add supplier offers.' : n} openPart={f ? undefined : p.parts.at(-1)?.id} />,
     redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(p.parts.at(-1)?.id ?? '')}#part-${p.parts.at(-1)?.id ?? ''}`,
-    change: (p, d) => withParts(p, [...p.parts, { id: newId('p'), description: d.description, category: d.category, ratings: d.ratings, offers: [] }]),
+    change: (p, d) => addPart(p, newId('p'), d),
   }));
 
   // After an edit the part stays open (a fresh spec per request knows which part that is).
@@ -95,20 +79,12 @@ export function partsRoutes(deps: Deps) {
       const part = p.parts.find((x) => x.id === c.req.param('pid'));
       return part ? partValues(part) : null;
     },
-    change: (p, d, c) => {
-      const pid = c.req.param('pid');
-      if (!p.parts.some((x) => x.id === pid)) return gone('part');
-      return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, description: d.description, category: d.category, ratings: d.ratings } : x)));
-    },
+    change: (p, d, c) => savePart(p, c.req.param('pid')!, d),
   })(c));
 
   app.post('/projects/:id/parts/:pid/offers', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `add-offer-${c.req.param('pid')}`, schema: F.offerSchema,
     values: (p) => (p.parts.some((x) => x.id === c.req.param('pid')) ? {} : null),
-    change: (p, d, c) => {
-      const pid = c.req.param('pid');
-      if (!p.parts.some((x) => x.id === pid)) return gone('part');
-      return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, offers: [...x.offers, offerFrom(newId('o'), d)] } : x)));
-    },
+    change: (p, d, c) => saveOffer(p, c.req.param('pid')!, newId('o'), d, true),
   })(c));
 
   app.post('/projects/:id/parts/:pid/offers/:oid', (c) => projectEdit(deps, { ...common, ...keepOpen(c), form: `offer-${c.req.param('oid')}`, schema: F.offerSchema,
@@ -116,12 +92,7 @@ export function partsRoutes(deps: Deps) {
       const o = p.parts.find((x) => x.id === c.req.param('pid'))?.offers.find((x) => x.id === c.req.param('oid'));
       return o ? offerValues(o, p.currency) : null;
     },
-    change: (p, d, c) => {
-      const { pid, oid } = c.req.param();
-      const part = p.parts.find((x) => x.id === pid);
-      if (!part?.offers.some((o) => o.id === oid)) return gone('offer');
-      return withParts(p, p.parts.map((x) => (x.id === pid ? { ...x, offers: x.offers.map((o) => (o.id === oid ? offerFrom(oid, d) : o)) } : x)));
-    },
+    change: (p, d, c) => saveOffer(p, c.req.param('pid')!, c.req.param('oid')!, d, false),
   })(c));
 
   // ------------------------------------------------------------ deletes: confirm page, then the post

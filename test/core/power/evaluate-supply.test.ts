@@ -101,4 +101,12 @@ describe('random and absurd inputs never throw and never give NaN', () => {
     expect(report.findings[0].severity).toBe('fail');
     expect(report.mains).toBeNull();
   });
+  it('mains of 5e-324 V (subnormal) is refused with a finding (regression: the primary current was Infinity)', () => {
+    const p = refProject();
+    p.mains = { ...p.mains!, nominalV: 5e-324 };
+    const report = evaluateSupply(p, { raw: flat(1) });
+    expect(nonFinitePaths(report)).toEqual([]);
+    expect(report.findings.filter((f) => f.rule === 'internal.non-finite')).toEqual([]);
+    expect(report.findings.some((f) => f.rule === 'mains.values' && f.severity === 'fail')).toBe(true);
+  });
 });

@@ -1,0 +1,40 @@
+// The project's RF settings: spurious-emission rule, push-pull balance, worst SWR, antenna and feedline, exposure.
+import type { Project } from '../model';
+import { defineSpec, U } from './field';
+import { formValues } from './derive';
+import { bool, choice, num } from './make';
+
+export const SPURIOUS_RULES = [
+  ['us-97-307', 'US 47 CFR 97.307(d): 43 dB below the fundamental'],
+  ['itu-app3', 'ITU Radio Regulations Appendix 3 (amateur, below 30 MHz)'],
+] as const;
+
+// Limits: the RF form, the project file and core agreed on all but the feedline loss: the form and file allowed
+// 100 dB, core 30 dB. 30 dB is kept: the loss is subtracted before the exposure estimate, so an over-large value (a
+// slip such as 50 for 0.5) shrinks the safety distances; 30 dB is already more than any HF feedline a station uses
+// (common practice, no published source), and core refused evaluating above it anyway.
+export const rfSettingsSpec = defineSpec({
+  name: 'rf-settings',
+  label: 'RF settings',
+  fields: {
+    spuriousRule: choice('Spurious-emission rule', SPURIOUS_RULES, 'us-97-307'),
+    // Common practice, no published source: a balanced push-pull stage suppresses its 2nd harmonic by about 30 dB
+    evenHarmonicDbc: num('2nd-harmonic balance residual', 'dB', U.dBc, -120, 0, -30, {
+      form: 'evenHarmonic',
+      help: 'push-pull imbalance, e.g. −30',
+      example: '-30',
+    }),
+    worstSwr: num('Worst-case SWR', '', U.none, 1, 100, 2, { example: '2' }),
+    // a half-wave dipole in free space has 2.15 dBi (the textbook value; from memory, section not checked)
+    antennaGainDbi: num('Antenna gain', 'dB', U.dBi, -30, 30, 2.15, { form: 'antennaGain', example: '2.15' }),
+    feedlineLossDb: num('Feedline loss', 'dB', U.dB, 0, 30, 0.5, { form: 'feedlineLoss', example: '0.5' }),
+    // Source: OET Bulletin 65 (1997): k = 2.56 with ground reflection (EPA model), as in exposure.ts
+    groundReflection: bool('Include ground reflection (×2.56)', true),
+    // Source: FCC OET Bulletin 65 Supplement B (1997), Table 2: conversational CW duty factor 40 %
+    exposureDutyFactor: num('Mode duty factor', '%', U.pct, 0, 1, 0.4, { form: 'dutyFactor', help: 'CW 40 %' }),
+    exposureOnFraction: num('Worst share of the averaging time on the air', '%', U.pct, 0, 1, 1, { form: 'onFraction' }),
+  },
+});
+
+/** The RF settings form's text for a project. */
+export const rfSettingsFormValues = (p: Pick<Project, 'rf'>): Record<string, string> => formValues(rfSettingsSpec, p.rf);
