@@ -21,6 +21,7 @@ import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
 import { isBusyError } from './db/client';
+import { pageCache } from './web/cache/pages';
 import { Layout } from '../views/layout';
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -61,6 +62,11 @@ export function buildApp(deps: Deps) {
   app.get('/assets/style.css', (c) => c.body(CSS, 200, { 'Content-Type': 'text/css; charset=utf-8', 'Cache-Control': 'max-age=300' }));
   app.get('/healthz', (c) => c.text('ok'));
   app.get('/favicon.ico', (c) => c.body(null, 204));
+
+  // ETags (304) and the per-version page cache for every GET of one project's pages and downloads
+  const pages = pageCache(deps);
+  app.use('/projects/:id', pages.middleware);
+  app.use('/projects/:id/*', pages.middleware);
 
   app.route('/', projectRoutes(deps));
   app.route('/', overviewRoutes(deps));

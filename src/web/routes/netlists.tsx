@@ -1,6 +1,6 @@
 // SPICE netlist downloads: each rectified rail at its worst voltage corner, and the as-built filter.
 import { Hono, type Context } from 'hono';
-import { evaluate } from '../../core/evaluate';
+import { evaluateCached as evaluate } from '../cache/reports';
 import { railNetlist } from '../../core/power/spice-netlist';
 import { designLpf, lpfNetlist } from '../../core/rf';
 import { loadProject } from '../../db/projects';

@@ -3,7 +3,7 @@ import { Hono } from 'hono';
 import { z } from 'zod';
 import type { Project, Stage } from '../../core/model';
 import { MODES, STAGE_KINDS } from '../../core/model';
-import { evaluate } from '../../core/evaluate';
+import { evaluateCached as evaluate } from '../cache/reports';
 import { withKindDefaults } from '../../core/new-project';
 import { loadProject } from '../../db/projects';
 import { num, pct, text, choice, type FieldErrors } from '../form';

@@ -1,7 +1,7 @@
 // Builder pack: the checklists on screen and the PDF download (A4 or US Letter).
 import { Hono } from 'hono';
 import { z } from 'zod';
-import { evaluate } from '../../core/evaluate';
+import { evaluateCached as evaluate } from '../cache/reports';
 import { buildChecklist, safetyChecklist, SAFETY_PREAMBLE } from '../../core/checklists';
 import { buildPack } from '../../pdf';
 import { loadProject } from '../../db/projects';

@@ -2,7 +2,7 @@
 import { Hono } from 'hono';
 import { z } from 'zod';
 import type { Project } from '../../core/model';
-import { evaluate } from '../../core/evaluate';
+import { evaluateCached as evaluate } from '../cache/reports';
 import { loadProject } from '../../db/projects';
 import { num, pct, choice, checkbox } from '../form';
 import { projectEdit, doneNotice } from '../edit';

@@ -1,6 +1,6 @@
 // The computed results shown under a stage's own forms: its RF findings and where the detail lives.
 import type { Project, Stage } from '../../core/model';
-import { evaluate } from '../../core/evaluate';
+import { evaluateCached as evaluate } from '../cache/reports';
 import { RfFindings } from '../../../views/partials/rf-results';
 
 export function stageResults(p: Project, s: Stage) {

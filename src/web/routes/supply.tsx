@@ -2,7 +2,7 @@
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Project, Rail } from '../../core/model';
-import { evaluate } from '../../core/evaluate';
+import { evaluateCached as evaluate } from '../cache/reports';
 import { loadProject } from '../../db/projects';
 import { parseForm } from '../form';
 import { projectEdit, doneNotice, type ChangeResult } from '../edit';
