@@ -42,8 +42,11 @@ export const DEFAULT_RETRY_FOR_MS = 8000;
 
 /** Another process held the database lock for longer than the write was willing to wait. Nothing was written. */
 export class DatabaseBusy extends Error {
-  constructor(readonly attempts: number) {
-    super(`The database is busy (locked by another process); nothing was saved after ${attempts} attempts.`);
+  constructor(
+    readonly attempts: number,
+    cause?: unknown,
+  ) {
+    super(`The database is busy (locked by another process); nothing was saved after ${attempts} attempts.`, { cause });
   }
 }
 
@@ -63,17 +66,25 @@ const MIGRATIONS = resolve(dirname(fileURLToPath(import.meta.url)), '../../migra
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-/** Run `op` again while it fails with SQLITE_BUSY, with jittered exponential backoff, for up to `retryForMs`. */
-export async function retryBusy<T>(op: () => Promise<T>, retryForMs: number): Promise<T> {
+/**
+ * Run `op` again while it fails with SQLITE_BUSY, with jittered exponential backoff, for up to `retryForMs`.
+ * `recover` runs after each busy failure, after a wait (a timer turn at least), before anything else.
+ */
+export async function retryBusy<T>(op: () => Promise<T>, retryForMs: number, recover?: () => Promise<void>): Promise<T> {
   const start = Date.now();
   for (let attempt = 1; ; attempt++) {
     try {
       return await op();
     } catch (e) {
       if (!isBusyError(e)) throw e;
-      if (Date.now() - start >= retryForMs) throw new DatabaseBusy(attempt);
+      if (Date.now() - start >= retryForMs) {
+        await sleep(0);
+        await recover?.();
+        throw new DatabaseBusy(attempt, e);
+      }
       // Jitter spreads the retries of several processes apart. Common practice, no published source.
       await sleep(Math.min(400, 10 * 2 ** attempt) * (0.5 + Math.random() / 2));
+      await recover?.();
     }
   }
 }
@@ -93,10 +104,17 @@ export async function openDatabase(url: string, authToken?: string, opts: OpenOp
   await client.execute('PRAGMA foreign_keys = ON');
   const db = drizzle(client, { schema });
   // two processes starting at once both try to migrate: the second waits, then finds nothing to do
-  await retryBusy(() => migrate(db, { migrationsFolder: MIGRATIONS }), retryForMs);
+  await retryBusy(() => migrate(db, { migrationsFolder: MIGRATIONS }), retryForMs, () => client.reconnect());
+  // A statement that failed with SQLITE_BUSY stays "in progress" on its connection until it is garbage
+  // collected: that connection keeps an old read snapshot (stale pages) and every later COMMIT on it fails
+  // ("cannot commit transaction - SQL statements in progress"). So a busy write drops all pooled connections
+  // before it tries again or gives up. No other transaction is open then (writes are serialised here), and reads
+  // borrow a connection only for one synchronous call, done before the timer turn this waits for, so nothing in
+  // flight loses its connection.
+  const freshConnections = () => client.reconnect();
   let queue: Promise<unknown> = Promise.resolve();
   const write = <T>(fn: (tx: Tx) => Promise<T>): Promise<T> => {
-    const run = queue.then(() => retryBusy(() => db.transaction(fn), retryForMs));
+    const run = queue.then(() => retryBusy(() => db.transaction(fn), retryForMs, freshConnections));
     queue = run.catch(() => undefined);
     return run;
   };

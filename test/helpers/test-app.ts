@@ -3,7 +3,7 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { openDatabase, type Database } from '../../src/db/client';
+import { openDatabase, type Database, type OpenOptions } from '../../src/db/client';
 import { seedDemo } from '../../seed-demo/index';
 import { buildApp } from '../../src/app';
 
@@ -17,10 +17,10 @@ export interface TestApp {
   close: () => void;
 }
 
-export async function makeApp(opts: { accessSecret?: string; demo?: boolean } = {}): Promise<TestApp> {
+export async function makeApp(opts: { accessSecret?: string; demo?: boolean; db?: OpenOptions } = {}): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'rigwright-app-'));
   const dbPath = join(dir, 'test.db');
-  const database = await openDatabase(`file:${dbPath}`);
+  const database = await openDatabase(`file:${dbPath}`, undefined, opts.db);
   if (opts.demo !== false) await seedDemo(database, FIXED_NOW.toISOString());
   const app = buildApp({ database, now: () => FIXED_NOW, accessSecret: opts.accessSecret });
   return {
