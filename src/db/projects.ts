@@ -6,16 +6,9 @@ import type { Database, Tx, Db } from './client';
 import * as t from './schema';
 import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing } from '../core/model';
 
-export interface ProjectSummary {
-  id: string;
-  name: string;
-  frequencyHz: number;
-  targetPowerW: number;
-  kits: number;
-  stageCount: number;
-  version: number;
-  updatedAt: string;
-}
+import type { ProjectSummary } from '../core/project-summary';
+
+export type { ProjectSummary };
 
 export class VersionConflict extends Error {
   constructor(

@@ -70,7 +70,8 @@ describe('overview page', () => {
     const form = { version: '1', name: 'X', notes: '', frequency: '10.11 MHz', power: '20 W', supplyKind: 'mains', mainsV: '120 V', mainsHz: '60 Hz', mainsLow: '80', mainsHigh: '10', ambient: '35', duty: '40', kits: '8', currency: 'usd' };
     const res = await post(`/projects/${ID}/settings`, form);
     expect(res.status).toBe(422);
-    expect(await res.text()).toContain('Low mains tolerance must be at most 50');
+    // the message now comes from the settings spec and states both limits in the box's unit (%)
+    expect(await res.text()).toContain('Low mains tolerance must be at least 0 % and at most 50 %; you entered &quot;80&quot;');
     expect((await loadProject(database.db, ID))!.name).not.toBe('X');
     const ok = await post(`/projects/${ID}/settings`, { ...form, mainsLow: '10', mains: '230', mainsV: '230 V', mainsHz: '50 Hz' });
     expect(ok.status).toBe(303);

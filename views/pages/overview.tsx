@@ -5,28 +5,12 @@ import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/co
 import type { EvaluationReport } from '../../src/core/evaluate';
 import type { Finding } from '../../src/core/findings';
 import { formatValue } from '../../src/core/units';
-import { inputText, percentText } from '../../src/core/spec/input-text';
-import { Field, Select, FormErrors, type FieldState } from '../components/fields';
+import { inputText } from '../../src/core/spec/input-text';
+import { settingsSpec, settingsFormValues } from '../../src/core/spec/settings';
+import { Field, Select, TextArea, FormErrors, type FieldState } from '../components/fields';
+import { SpecField } from '../components/spec-fields';
 import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';
-
-export function settingsValues(p: Project): Record<string, string> {
-  return {
-    name: p.name,
-    notes: p.notes,
-    frequency: inputText(p.frequencyHz, 'Hz'),
-    power: inputText(p.targetPowerW, 'W'),
-    supplyKind: p.mains ? 'mains' : 'dc',
-    mainsV: p.mains ? inputText(p.mains.nominalV, 'V') : '230 V',
-    mainsHz: p.mains ? inputText(p.mains.frequencyHz, 'Hz') : '50 Hz',
-    mainsLow: p.mains ? percentText(p.mains.lowFraction) : '10',
-    mainsHigh: p.mains ? percentText(p.mains.highFraction) : '10',
-    ambient: String(p.ambientC),
-    currency: p.currency,
-    kits: String(p.kits),
-    duty: percentText(p.keyingDuty),
-  };
-}
 
 export function loadValues(s: Stage): Record<string, string> {
   const v: Record<string, string> = {};
@@ -52,29 +36,24 @@ const SettingsForm: FC<{ project: Project; state: FieldState }> = ({ project, st
       <Hidden version={project.version} />
       <FormErrors state={state} />
       <div class="row">
-        <Field name="name" label="Name" state={state} size={40} />
-        <Field name="frequency" label="Operating frequency" unit="Hz" state={state} hint="e.g. 10.11 MHz" />
-        <Field name="power" label="Target output" unit="W" state={state} />
+        <SpecField spec={settingsSpec} k="name" state={state} size={40} />
+        <SpecField spec={settingsSpec} k="frequencyHz" state={state} size={9} />
+        <SpecField spec={settingsSpec} k="targetPowerW" state={state} size={7} />
       </div>
       <div class="row">
-        <Select name="supplyKind" label="Station supply" state={state} options={[['mains', 'Mains'], ['dc', 'Battery / external DC']]} />
-        <Field name="mainsV" label="Mains nominal" unit="V rms" state={state} size={7} />
-        <Field name="mainsHz" label="Mains frequency" unit="Hz" state={state} size={7} />
-        <Field name="mainsLow" label="Low tolerance" unit="%" state={state} size={4} />
-        <Field name="mainsHigh" label="High tolerance" unit="%" state={state} size={4} />
+        <SpecField spec={settingsSpec} k="supplyKind" state={state} />
+        <SpecField spec={settingsSpec} k="mains.nominalV" state={state} size={7} />
+        <SpecField spec={settingsSpec} k="mains.frequencyHz" state={state} size={7} />
+        <SpecField spec={settingsSpec} k="mains.lowFraction" state={state} size={4} />
+        <SpecField spec={settingsSpec} k="mains.highFraction" state={state} size={4} />
       </div>
       <div class="row">
-        <Field name="ambient" label="Ambient" unit="°C" state={state} size={5} />
-        <Field name="duty" label="Keying duty (heating)" unit="%" state={state} size={5} hint="CW conversational 40 %" />
-        <Field name="kits" label="Kits (group build)" state={state} size={5} />
-        <Field name="currency" label="Currency" state={state} size={5} />
+        <SpecField spec={settingsSpec} k="ambientC" state={state} size={5} />
+        <SpecField spec={settingsSpec} k="keyingDuty" state={state} size={5} />
+        <SpecField spec={settingsSpec} k="kits" state={state} size={5} />
+        <SpecField spec={settingsSpec} k="currency" state={state} size={5} />
       </div>
-      <label class="field wide">
-        <span class="label">Notes</span>
-        <textarea name="notes" rows={2}>
-          {state.values.notes ?? ''}
-        </textarea>
-      </label>
+      <TextArea name="notes" label={settingsSpec.fields.notes.label} state={state} rows={2} cls="wide" />
       <button type="submit">Save settings</button>
     </form>
   </details>
@@ -225,7 +204,7 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
           {notice}
         </p>
       ) : null}
-      <SettingsForm project={project} state={stateFor('settings', failed, () => settingsValues(project))} />
+      <SettingsForm project={project} state={stateFor('settings', failed, () => settingsFormValues(project))} />
       <div class="columns">
         <section class="card">
           <h2>Stages in build order</h2>

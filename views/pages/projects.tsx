@@ -1,19 +1,11 @@
 // Project list: open, create, clone, rename, export, import, delete (with confirmation).
 import type { FC } from 'hono/jsx';
-import type { ProjectSummary } from '../../src/db/projects';
+import type { ProjectSummary } from '../../src/core/project-summary';
+import { NEW_PROJECT_BANDS, newProjectFormValues, newProjectSpec } from '../../src/core/spec/settings';
 import { formatValue } from '../../src/core/units';
 import { Layout } from '../layout';
 import { Field, Select, FormErrors, type FieldState, emptyState } from '../components/fields';
-
-export const BANDS: [string, string][] = [
-  ['1.83 MHz', '160 m (1.83 MHz)'],
-  ['3.56 MHz', '80 m (3.56 MHz)'],
-  ['7.03 MHz', '40 m (7.03 MHz)'],
-  ['10.11 MHz', '30 m (10.11 MHz)'],
-  ['14.06 MHz', '20 m (14.06 MHz)'],
-  ['18.086 MHz', '17 m (18.086 MHz)'],
-  ['21.06 MHz', '15 m (21.06 MHz)'],
-];
+import { SpecField } from '../components/spec-fields';
 
 export interface ProjectsPageProps {
   projects: ProjectSummary[];
@@ -24,7 +16,7 @@ export interface ProjectsPageProps {
 }
 
 export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importErrors, renameFailed, notice }) => {
-  const createState = create ?? { values: { band: '10.11 MHz', power: '5 W', mains: '230-50' }, errors: {} };
+  const createState = create ?? { values: newProjectFormValues(), errors: {} };
   return (
     <Layout title="Projects">
       {notice ? (
@@ -88,21 +80,11 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
           <h2>New project</h2>
           <form method="post" action="/projects">
             <FormErrors state={createState} />
-            <Field name="name" label="Name" state={createState} size={32} />
+            <SpecField spec={newProjectSpec} k="name" state={createState} size={32} />
             <div class="row">
-              <Select name="band" label="Band" state={createState} options={BANDS} />
-              <Field name="power" label="Target output" unit="W" state={createState} size={6} />
-              <Select
-                name="mains"
-                label="Supply"
-                state={createState}
-                options={[
-                  ['230-50', 'Mains 230 V 50 Hz'],
-                  ['120-60', 'Mains 120 V 60 Hz'],
-                  ['100-50', 'Mains 100 V 50 Hz'],
-                  ['battery', 'Battery / external DC'],
-                ]}
-              />
+              <Select name="band" label={newProjectSpec.fields.frequencyHz.label} state={createState} options={NEW_PROJECT_BANDS} />
+              <SpecField spec={newProjectSpec} k="targetPowerW" state={createState} size={6} />
+              <SpecField spec={newProjectSpec} k="mainsPreset" state={createState} />
             </div>
             <button type="submit">Create project</button>
           </form>

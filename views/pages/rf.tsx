@@ -2,24 +2,11 @@
 import type { FC } from 'hono/jsx';
 import type { Project } from '../../src/core/model';
 import type { EvaluationReport } from '../../src/core/evaluate';
-import { Field, Select, Check, FormErrors, type FieldState } from '../components/fields';
+import { FormErrors, type FieldState } from '../components/fields';
+import { SpecField } from '../components/spec-fields';
 import { stateFor, type Failed } from '../components/failed';
 import { RfResults } from '../partials/rf-results';
-import { percentText } from '../../src/core/spec/input-text';
-
-export function rfSettingsValues(p: Project): Record<string, string> {
-  const r = p.rf;
-  return {
-    spuriousRule: r.spuriousRule,
-    evenHarmonic: String(r.evenHarmonicDbc),
-    worstSwr: String(r.worstSwr),
-    antennaGain: String(r.antennaGainDbi),
-    feedlineLoss: String(r.feedlineLossDb),
-    groundReflection: r.groundReflection ? 'true' : '',
-    dutyFactor: percentText(r.exposureDutyFactor),
-    onFraction: percentText(r.exposureOnFraction),
-  };
-}
+import { rfSettingsSpec, rfSettingsFormValues } from '../../src/core/spec/rf-settings';
 
 const Settings: FC<{ project: Project; state: FieldState }> = ({ project, state }) => {
   const action = `/projects/${project.id}/rf/settings`;
@@ -30,24 +17,16 @@ const Settings: FC<{ project: Project; state: FieldState }> = ({ project, state 
         <input type="hidden" name="version" value={String(project.version)} />
         <FormErrors state={state} />
         <div class="row">
-          <Select
-            name="spuriousRule"
-            label="Spurious-emission rule"
-            state={state}
-            options={[
-              ['us-97-307', 'US 47 CFR 97.307(d): 43 dB below the fundamental'],
-              ['itu-app3', 'ITU Radio Regulations Appendix 3 (amateur, below 30 MHz)'],
-            ]}
-          />
-          <Field name="evenHarmonic" label="2nd-harmonic balance residual" unit="dBc" state={state} size={5} hint="push-pull imbalance, e.g. −30" />
-          <Field name="worstSwr" label="Worst-case SWR" state={state} size={4} />
+          <SpecField spec={rfSettingsSpec} k="spuriousRule" state={state} />
+          <SpecField spec={rfSettingsSpec} k="evenHarmonicDbc" state={state} size={5} />
+          <SpecField spec={rfSettingsSpec} k="worstSwr" state={state} size={4} />
         </div>
         <div class="row">
-          <Field name="antennaGain" label="Antenna gain" unit="dBi" state={state} size={5} />
-          <Field name="feedlineLoss" label="Feedline loss" unit="dB" state={state} size={5} />
-          <Check name="groundReflection" label="Include ground reflection (×2.56)" state={state} />
-          <Field name="dutyFactor" label="Mode duty factor" unit="%" state={state} size={4} hint="CW 40 %" />
-          <Field name="onFraction" label="Worst share of the averaging time on the air" unit="%" state={state} size={4} />
+          <SpecField spec={rfSettingsSpec} k="antennaGainDbi" state={state} size={5} />
+          <SpecField spec={rfSettingsSpec} k="feedlineLossDb" state={state} size={5} />
+          <SpecField spec={rfSettingsSpec} k="groundReflection" state={state} />
+          <SpecField spec={rfSettingsSpec} k="exposureDutyFactor" state={state} size={4} />
+          <SpecField spec={rfSettingsSpec} k="exposureOnFraction" state={state} size={4} />
         </div>
         <button type="submit" class="primary">
           Save and recompute
@@ -68,7 +47,7 @@ export const RfBody: FC<{ project: Project; report: EvaluationReport; failed?: F
       Transmit only within your licence. Predicted harmonic levels and exposure distances are estimates from idealised models: measure the finished
       transmitter into a dummy load with a suitable instrument before going on the air, and evaluate RF exposure as your local rules require.
     </p>
-    <Settings project={project} state={stateFor('rf-settings', failed, () => rfSettingsValues(project))} />
+    <Settings project={project} state={stateFor('rf-settings', failed, () => rfSettingsFormValues(project))} />
     <RfResults report={report.rf} />
     {report.rf.lpfStageId ? (
       <p>

@@ -6,33 +6,19 @@ import { MODES, STAGE_KINDS } from '../../core/model';
 import { evaluateCached as evaluate } from '../cache/reports';
 import { withKindDefaults } from '../../core/new-project';
 import { loadProject } from '../../db/projects';
-import { num, pct, text, choice, type FieldErrors } from '../form';
+import { num, text, choice, type FieldErrors } from '../form';
+import { specFormSchema } from '../forms/spec-schema';
+import { settingsSpec, settingsFormValues, type ProjectSettings } from '../../core/spec/settings';
+import { applySettings } from '../../core/edits/settings';
 import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
 import { Layout, ProjectCrumb } from '../../../views/layout';
-import { OverviewBody, settingsValues, loadValues } from '../../../views/pages/overview';
+import { OverviewBody, loadValues } from '../../../views/pages/overview';
 import type { Failed } from '../../../views/components/failed';
 import { newId } from '../ids';
 
-const settingsSchema = z.object({
-  name: text('Name'),
-  notes: text('Notes', 20_000, false),
-  frequency: num('Hz', { label: 'Operating frequency', min: 100e3, max: 60e6 }),
-  power: num('W', { label: 'Target output', min: 0, exclusiveMin: true, max: 2000 }),
-  supplyKind: choice('Station supply', ['mains', 'dc']),
-  mainsV: num('V', { label: 'Mains nominal voltage', min: 50, max: 300 }),
-  mainsHz: num('Hz', { label: 'Mains frequency', min: 40, max: 500 }),
-  mainsLow: pct({ label: 'Low mains tolerance', min: 0, max: 50 }),
-  mainsHigh: pct({ label: 'High mains tolerance', min: 0, max: 50 }),
-  ambient: num('°C', { label: 'Ambient temperature', min: -40, max: 70 }),
-  duty: pct({ label: 'Keying duty', min: 0, max: 100 }),
-  kits: num('', { label: 'Number of kits', min: 1, max: 1000, integer: true }),
-  currency: z
-    .string()
-    .transform((s) => s.trim().toUpperCase())
-    .pipe(z.string().regex(/^[A-Z]{3}$/, 'Currency must be a three-letter code such as USD or EUR')),
-});
+const settingsSchema = specFormSchema<ProjectSettings>(settingsSpec);
 
 const addStageSchema = z.object({ kind: choice('Stage kind', STAGE_KINDS), name: text('Stage name', 200, false) });
 const moveSchema = z.object({ direction: choice('Direction', ['up', 'down']) });
@@ -76,19 +62,8 @@ export function overviewRoutes(deps: Deps) {
       ...common,
       form: 'settings',
       schema: settingsSchema,
-      values: settingsValues,
-      change: (p, d) => ({
-        ...p,
-        name: d.name,
-        notes: d.notes,
-        frequencyHz: d.frequency,
-        targetPowerW: d.power,
-        mains: d.supplyKind === 'mains' ? { nominalV: d.mainsV, frequencyHz: d.mainsHz, lowFraction: d.mainsLow, highFraction: d.mainsHigh } : null,
-        ambientC: d.ambient,
-        keyingDuty: d.duty,
-        kits: d.kits,
-        currency: d.currency,
-      }),
+      values: settingsFormValues,
+      change: applySettings,
     }),
   );
 

@@ -2,9 +2,11 @@
 import { Hono } from 'hono';
 import { z } from 'zod';
 import { listProjects, loadProject, insertProject, deleteProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
-import { newProject, cloneProject, MAINS_PRESETS } from '../../core/new-project';
+import { newProject, cloneProject } from '../../core/new-project';
+import { newProjectSpec, type NewProjectInput } from '../../core/spec/settings';
+import { specFormSchema } from '../forms/spec-schema';
 import { parseProjectFile, toProjectFile } from '../../io/project-file';
-import { num, text, choice, parseForm, versionField } from '../form';
+import { text, parseForm, versionField } from '../form';
 import { formValues, sendPage } from '../render';
 import { newId } from '../ids';
 import type { Deps } from '../deps';
@@ -12,12 +14,7 @@ import { ProjectsPage, ConfirmDelete, type ProjectsPageProps } from '../../../vi
 
 export const IMPORT_LIMIT_BYTES = 5 * 1024 * 1024;
 
-const createSchema = z.object({
-  name: text('Name'),
-  band: num('Hz', { label: 'Band', min: 100e3, max: 60e6 }),
-  power: num('W', { label: 'Target output', min: 0, exclusiveMin: true, max: 2000 }),
-  mains: choice('Supply', ['230-50', '120-60', '100-50', 'battery']),
-});
+const createSchema = specFormSchema<NewProjectInput>(newProjectSpec);
 
 export function projectRoutes(deps: Deps) {
   const app = new Hono();
@@ -30,7 +27,7 @@ export function projectRoutes(deps: Deps) {
     const parsed = parseForm(createSchema, values);
     if (!parsed.ok) return sendPage(c, await listPage({ create: { values, errors: parsed.errors } }), 422);
     const d = parsed.data;
-    const project = newProject(newId('prj'), d.name, d.band, d.power, MAINS_PRESETS[d.mains]);
+    const project = newProject(newId('prj'), d.name, d.frequencyHz, d.targetPowerW, d.mains);
     await insertProject(deps.database, project, deps.now().toISOString());
     return c.redirect(`/projects/${project.id}`, 303);
   });
