@@ -92,7 +92,7 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
   const loads = new Map<string, LoadContribution[]>(rails.map((r) => [r.id, []]));
 
   const noRail = (stageName: string, railId: string, what: string): Finding => ({
-    severity: 'fail', rule: 'budget.no-rail', subject: `${stageName}: ${what}`, value: null, limit: null, unit: 'A', source: 'Circuit topology',
+    severity: 'fail', rule: 'budget.no-rail', subject: `${stageName}: ${what}`, value: null, limit: null, unit: 'A', source: 'design.consistency',
     message: railId === ''
       ? `${stageName} draws current (${what}) from no rail, so no rail's budget carries it. Choose its rail.`
       : `${stageName} draws current (${what}) from a rail that is not in this project's supply, so no rail's budget carries it. Choose its rail.`,
@@ -171,17 +171,17 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
         value: null,
         limit: null,
         unit: '',
-        source: 'Circuit topology',
+        source: 'design.consistency',
         message: `${r.name} is fed, through other regulators, by itself. Choose a different source rail.`,
       });
     }
     if (r.kind === 'regulated' && !byId.has(r.parentId)) {
-      findings.push({ severity: 'fail', rule: 'supply.parent', subject: r.name, value: null, limit: null, unit: '', source: 'Circuit topology', message: `${r.name} has no source rail.` });
+      findings.push({ severity: 'fail', rule: 'supply.parent', subject: r.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${r.name} has no source rail.` });
     }
     const out = d < 0 ? zero() : outputOf(r);
     const v = railNominalV(r, project);
     if (Number.isNaN(v)) {
-      findings.push({ severity: 'fail', rule: 'budget.rail-voltage', subject: r.name, value: null, limit: null, unit: 'V', source: 'Supply tree',
+      findings.push({ severity: 'fail', rule: 'budget.rail-voltage', subject: r.name, value: null, limit: null, unit: 'V', source: 'design.consistency',
         message: `${r.name} has no transformer winding, so its voltage and the power it delivers are unknown; choose its winding.` });
     }
     result.push({

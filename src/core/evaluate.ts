@@ -110,7 +110,7 @@ function paUnknownFinding(stageName: string, refused: Finding[]): Finding {
   const fields = refused.map((f) => f.subject.replace(`${stageName}: `, '')).filter((x, i, a) => x !== stageName && a.indexOf(x) === i);
   const reasons = refused.map((f) => f.message).join(' ');
   return {
-    severity: 'fail', rule: 'budget.pa-current', subject: `${stageName}: PA key-down current`, value: null, limit: null, unit: 'A', source: 'input check',
+    severity: 'fail', rule: 'budget.pa-current', subject: `${stageName}: PA key-down current`, value: null, limit: null, unit: 'A', source: 'design.input',
     message: `The PA key-down current cannot be computed${fields.length ? ` (refused: ${fields.join(', ')})` : ''}, so the key-down budget of its rail is unknown and its supply is not designed. ${reasons}`,
   };
 }

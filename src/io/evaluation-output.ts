@@ -4,6 +4,8 @@ import { MODES, MODE_LABELS } from '../core/model';
 import type { EvaluationReport } from '../core/evaluate';
 import { formatValue } from '../core/units';
 import { formatMoney } from '../core/cost/money';
+import { actionable, standingCautions } from '../core/findings';
+import { isSourceKey, sourceText } from '../core/sources/registry';
 
 export const EVALUATION_FORMAT = 'rigwright-evaluation';
 export const EVALUATION_FORMAT_VERSION = 1;
@@ -13,8 +15,28 @@ export function evaluationJson(project: Project, report: EvaluationReport) {
     format: EVALUATION_FORMAT,
     formatVersion: EVALUATION_FORMAT_VERSION,
     project: { id: project.id, name: project.name, frequencyHz: project.frequencyHz, targetPowerW: project.targetPowerW, kits: project.kits },
-    ...report,
+    ...(withSourceText(report) as EvaluationReport),
   };
+}
+
+/**
+ * The report with every source key replaced by the registry text a reader can look up (the key is kept beside it as
+ * `sourceKey`), and every finding's kind written out ('actionable' or 'standing').
+ */
+export function withSourceText(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(withSourceText);
+  if (value === null || typeof value !== 'object') return value;
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(value)) out[k] = withSourceText(v);
+  for (const k of ['source', 'ruleSource'] as const) {
+    const key = out[k];
+    if (typeof key === 'string' && isSourceKey(key)) {
+      out[k] = sourceText(key);
+      out[`${k}Key`] = key;
+    }
+  }
+  if ('severity' in out && 'rule' in out && 'sourceKey' in out) out.kind = out.kind ?? 'actionable';
+  return out;
 }
 
 const pad = (s: string, n: number) => (s.length >= n ? s.slice(0, n) : s + ' '.repeat(n - s.length));
@@ -33,8 +55,15 @@ export function renderEvaluationText(project: Project, report: EvaluationReport)
   out.push(`${pad('All sources, DC power', 49)}${MODES.map((m) => lpad(formatValue(report.budget.totalW[m], 'W'), 13)).join('')}`);
   out.push(...supplyLines(report), ...rfLines(report), ...costLines(report));
   out.push('');
-  out.push(`Findings (${report.findings.length}, most severe first)`);
-  for (const f of report.findings) out.push(`  [${f.severity.toUpperCase()}] ${f.subject}: ${f.message} (${f.source})`);
+  const act = actionable(report.findings);
+  out.push(`Findings (${act.length}, most severe first)`);
+  for (const f of act) out.push(`  [${f.severity.toUpperCase()}] ${f.subject}: ${f.message} (Source: ${sourceText(f.source)})`);
+  const standing = standingCautions(report.findings);
+  if (standing.length) {
+    out.push('');
+    out.push('Standing cautions (true of every station of this kind; not counted in the verdict)');
+    for (const f of standing) out.push(`  ${f.subject}: ${f.message} (Source: ${sourceText(f.source)})`);
+  }
   return `${out.join('\n')}\n`;
 }
 

@@ -4,6 +4,9 @@ import type { Project, Stage } from '../../src/core/model';
 import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
 import type { EvaluationReport } from '../../src/core/evaluate';
 import type { Finding } from '../../src/core/findings';
+import { actionable, standingCautions, worstSeverity } from '../../src/core/findings';
+import { sourceText } from '../../src/core/sources/registry';
+import { StandingCautions } from '../components/standing-cautions';
 import { formatValue } from '../../src/core/units';
 import { inputText } from '../../src/core/spec/input-text';
 import { settingsSpec, settingsFormValues } from '../../src/core/spec/settings';
@@ -146,10 +149,18 @@ const SECTIONS: { key: string; label: string; path: string; findings: (r: Evalua
 
 /** Counts per section and the findings that need attention; the detail lives on each section's page. */
 const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ project, report }) => {
-  const attention = report.findings.filter((f) => f.severity !== 'ok');
+  // only findings a design change can clear count; standing cautions have their own block below
+  const counted = actionable(report.findings);
+  const attention = counted.filter((f) => f.severity !== 'ok');
+  const verdict = worstSeverity(counted);
+  const standing = standingCautions(report.findings);
   return (
     <section class="card" id="checks">
       <h2>Checks at a glance</h2>
+      <p class="verdict" data-verdict={verdict}>
+        Verdict: <span class={`sev sev-${verdict}`}>{verdict === 'ok' ? 'OK' : verdict}</span>
+        {verdict === 'ok' ? ' — no check of this design fails or needs caution.' : ` — ${attention.length} finding(s) need attention.`}
+      </p>
       <table class="grid summary">
         <thead>
           <tr>
@@ -161,7 +172,7 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
         </thead>
         <tbody>
           {SECTIONS.map((s) => {
-            const f = s.findings(report);
+            const f = actionable(s.findings(report));
             const n = (sev: string) => f.filter((x) => x.severity === sev).length;
             return (
               <tr>
@@ -182,7 +193,7 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
           <ul class="findings">
             {attention.map((f) => (
               <li class={`finding sev-${f.severity}`}>
-                <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="source">({f.source})</span>
+                <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="source">(Source: {sourceText(f.source)})</span>
               </li>
             ))}
           </ul>
@@ -190,6 +201,7 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
       ) : (
         <p>No check fails or needs caution.</p>
       )}
+      <StandingCautions findings={standing} />
     </section>
   );
 };

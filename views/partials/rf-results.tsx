@@ -3,6 +3,9 @@
 import type { FC } from 'hono/jsx';
 import { raw } from 'hono/html';
 import type { Finding } from '../../src/core/findings';
+import { actionable, standingCautions } from '../../src/core/findings';
+import { sourceText } from '../../src/core/sources/registry';
+import { StandingCautions } from '../components/standing-cautions';
 import type { PaResult } from '../../src/core/rf/pa';
 import type { LpfStageResult, RfReport } from '../../src/core/rf/report';
 import type { RelayResult } from '../../src/core/rf/tr-relay';
@@ -241,13 +244,16 @@ const BASIS_WORDS: Record<HarmonicBasis, string> = {
 };
 
 export const RfFindings: FC<{ findings: Finding[] }> = ({ findings }) => (
-  <ul class="findings">
-    {findings.map((f) => (
-      <li data-rule={f.rule}>
-        <span class={sevClass(f.severity)}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="sub">({f.source})</span>
-      </li>
-    ))}
-  </ul>
+  <>
+    <ul class="findings">
+      {actionable(findings).map((f) => (
+        <li data-rule={f.rule}>
+          <span class={sevClass(f.severity)}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="sub">(Source: {sourceText(f.source)})</span>
+        </li>
+      ))}
+    </ul>
+    <StandingCautions findings={standingCautions(findings)} />
+  </>
 );
 
 export const RfResults: FC<{ report: RfReport }> = ({ report }) => (

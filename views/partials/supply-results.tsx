@@ -3,6 +3,9 @@
 // Renders only what evaluateSupply computed; no maths beyond formatting.
 import type { FC } from 'hono/jsx';
 import type { Finding } from '../../src/core/findings';
+import { actionable, standingCautions } from '../../src/core/findings';
+import { sourceText } from '../../src/core/sources/registry';
+import { StandingCautions } from '../components/standing-cautions';
 import type {
   BatteryRailReport, Recommendation, RectifiedRailReport, RegulatedRailReport, SupplyReport, TransformerReport,
 } from '../../src/core/power/report-types';
@@ -14,13 +17,16 @@ const pct = (x: number) => `${(x * 100).toFixed(0)} %`;
 
 export const FindingList: FC<{ findings: Finding[] }> = ({ findings }) =>
   findings.length ? (
-    <ul class="findings">
-      {findings.map((f) => (
-        <li>
-          <span class={sevClass(f.severity)}>{f.severity}</span> {f.message} <span class="source">({f.source})</span>
-        </li>
-      ))}
-    </ul>
+    <>
+      <ul class="findings">
+        {actionable(findings).map((f) => (
+          <li>
+            <span class={sevClass(f.severity)}>{f.severity}</span> {f.message} <span class="source">(Source: {sourceText(f.source)})</span>
+          </li>
+        ))}
+      </ul>
+      <StandingCautions findings={standingCautions(findings)} />
+    </>
   ) : (
     <p class="hint">No findings.</p>
   );
@@ -34,7 +40,7 @@ const Recommendations: FC<{ items: Recommendation[] }> = ({ items }) =>
             <strong>{r.topic}:</strong> {r.text}
           </dt>
           <dd>
-            {r.reasoning} <span class="source">({r.source})</span>
+            {r.reasoning} <span class="source">(Source: {sourceText(r.source)})</span>
           </dd>
         </>
       ))}

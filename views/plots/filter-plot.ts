@@ -42,7 +42,7 @@ export function filterPlotData(report: RfReport, lpfStageId?: string): FilterPlo
         worstS21Db: mc ? -mc.worstAttenuationDb : null,
       };
     }),
-    ruleLabel: report.harmonics ? `${report.harmonics.requiredDb.toFixed(0)} dB rule (${report.harmonics.ruleSource})` : 'rule',
+    ruleLabel: report.harmonics ? `${report.harmonics.requiredDb.toFixed(0)} dB rule (${report.harmonics.rule === 'us-97-307' ? '47 CFR 97.307(d)' : 'ITU RR Appendix 3'})` : 'rule',
   };
 }
 

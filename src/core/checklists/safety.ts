@@ -2,7 +2,8 @@
 // numbers and findings. Pure. The usual cautions; local codes, licence conditions and licensed practice win.
 import type { Project } from '../model';
 import type { ChecklistItem, ChecklistReport, ChecklistSection } from './types';
-import { sortFindings } from '../findings';
+import { actionable, sortFindings, standingCautions } from '../findings';
+import { sourceText } from '../sources/registry';
 import { step, caution, measured, fmt } from './items';
 import { rfView } from './rf-view';
 
@@ -14,13 +15,22 @@ export function safetyChecklist(project: Project, report: ChecklistReport): Chec
   sections.push(project.mains ? { id: 'safety:mains', title: 'Mains wiring', stageId: null, items: mainsItems(project, report) } : { id: 'safety:battery', title: 'Battery and DC wiring', stageId: null, items: batteryItems(project, report) });
   sections.push({ id: 'safety:heat', title: 'Heat', stageId: null, items: heatItems(report) });
   sections.push({ id: 'safety:rf', title: 'Transmitting and RF exposure', stageId: null, items: rfItems(project, report) });
-  const open = sortFindings(report.findings).filter((f) => f.severity !== 'ok');
+  const open = sortFindings(actionable(report.findings)).filter((f) => f.severity !== 'ok');
   if (open.length > 0) {
     sections.push({
       id: 'safety:findings',
       title: 'Open findings to resolve before power-up',
       stageId: null,
       items: open.map((f) => ({ text: `${f.severity === 'fail' ? 'FAIL' : 'Caution'} — ${withSubject(f.subject, f.message)}`, value: f.value, unit: f.unit, basis: `finding: ${f.rule}`, emphasis: 'caution' as const })),
+    });
+  }
+  const standing = standingCautions(report.findings);
+  if (standing.length > 0) {
+    sections.push({
+      id: 'safety:standing',
+      title: 'Standing cautions (true of every station of this kind)',
+      stageId: null,
+      items: standing.map((f) => caution(`${withSubject(f.subject, f.message)} (Source: ${sourceText(f.source)})`)),
     });
   }
   return sections;

@@ -4,7 +4,7 @@ import type { Finding } from '../findings';
 import type { LineContext } from './line-options';
 import type { LineFlag } from './report-types';
 
-const SOURCE = 'common practice, no published source';
+const SOURCE = 'cost.practice' as const;
 
 // The subject (part and designators) is shown beside the message, so messages do not repeat it.
 const MESSAGES: Partial<Record<LineFlag, string>> = {

@@ -15,7 +15,7 @@ export interface CostOptions {
   exactLimit?: number;
 }
 
-const SOURCE = 'common practice, no published source';
+const SOURCE = 'cost.practice' as const;
 
 export const COST_NOTES: readonly string[] = [
   'Needed pieces per line = ceil(qty per rig x kits x (1 + attrition)) + spares per line; lines with no use get no spares.',

@@ -47,10 +47,10 @@ export function batteryFindings(battery: BatteryRail, requiredMinV: number, load
   const out: Finding[] = [];
   const subject = battery.name;
   if (!(battery.fullV >= battery.endV) || !(battery.endV > 0)) {
-    out.push({ severity: 'fail', rule: 'battery.window', subject, value: battery.endV, limit: battery.fullV, unit: 'V', source: 'Battery data', message: `The end-of-discharge voltage must be above 0 V and not above the full-charge voltage.` });
+    out.push({ severity: 'fail', rule: 'battery.window', subject, value: battery.endV, limit: battery.fullV, unit: 'V', source: 'supply.battery-data', message: `The end-of-discharge voltage must be above 0 V and not above the full-charge voltage.` });
   }
   if (!(battery.capacityAh > 0)) {
-    out.push({ severity: 'fail', rule: 'battery.capacity', subject, value: battery.capacityAh, limit: null, unit: 'Ah', source: 'Battery data', message: `Enter the capacity to get a runtime.` });
+    out.push({ severity: 'fail', rule: 'battery.capacity', subject, value: battery.capacityAh, limit: null, unit: 'Ah', source: 'supply.battery-data', message: `Enter the capacity to get a runtime.` });
   }
   if (requiredMinV > 0) {
     const base = { rule: 'battery.end-voltage', subject, value: loadedEnd, limit: requiredMinV, unit: 'V', source: 'Regulator dropout (ref §6.1, §6.2) against the battery end-of-discharge voltage under key-down load' };
@@ -67,13 +67,13 @@ export function batteryFindings(battery: BatteryRail, requiredMinV: number, load
   if (runtime.runtimeS === 0 && battery.capacityAh > 0 && !(runtime.averageA >= NEGLIGIBLE_CURRENT_A)) {
     out.push({
       severity: 'ok', rule: 'battery.runtime', subject, value: runtime.averageA, limit: NEGLIGIBLE_CURRENT_A, unit: 'A',
-      source: 'Charge balance Q = I t',
+      source: 'supply.battery-runtime',
       message: 'No runtime given: the rig draws almost no current from the battery (under 1 µA on average), '
         + 'so self-discharge sets how long it lasts.',
     });
   }
   if (runtime.runtimeS > 0) {
-    out.push({ severity: 'ok', rule: 'battery.runtime', subject, value: runtime.runtimeS, limit: null, unit: 's', source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2)', message: `About ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ${(runtime.averageA * 1000).toFixed(0)} mA average.` });
+    out.push({ severity: 'ok', rule: 'battery.runtime', subject, value: runtime.runtimeS, limit: null, unit: 's', source: 'supply.battery-runtime', message: `About ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ${(runtime.averageA * 1000).toFixed(0)} mA average.` });
   }
   return out;
 }

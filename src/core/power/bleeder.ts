@@ -10,7 +10,7 @@ export const SAFE_TIME_S = 5;
 /** For rails already below 60 V: time constant we suggest so the rail is low within a minute. Common practice, no published source. */
 export const LOW_VOLTAGE_TAU_S = 22;
 
-const SOURCE = 'V(t) = V0 e^(-t/RC), t = RC ln(V0/Vsafe), P = V0^2/R (ref §10); threshold IEC 60204-1 60 V within 5 s (ref §10 [C2])';
+const SOURCE = 'supply.bleeder' as const;
 
 /** Source: residual-voltage guidance page quoted in ref §10 [C]: t = R C ln(V0 / V_safe). */
 export function dischargeTimeS(resistanceOhm: number, capacitanceF: number, startV: number, safeV: number): number {

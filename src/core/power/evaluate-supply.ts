@@ -64,7 +64,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   const rails = project.supply.rails;
   const globalFindings: Finding[] = [...normalized.findings];
   if (project.mains && !mainsOk) {
-    globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'Project data', message: 'The mains voltage must be at least 1 V and its frequency at least 1 Hz.' });
+    globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'design.consistency', message: 'The mains voltage must be at least 1 V and its frequency at least 1 Hz.' });
   }
   const windings = new Map<string, { w: Winding; t: Transformer }>();
   for (const t of project.supply.transformers) for (const w of t.windings) windings.set(w.id, { w, t });
@@ -72,12 +72,12 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   const undesigned = unknownLoadRails(rails, railOutputA, options.highMainsOutputA ?? {});
   for (const [id, why] of undesigned) {
     const name = rails.find((r) => r.id === id)?.name ?? id;
-    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: name, value: null, limit: null, unit: 'A', source: 'Current budget', message: `${name} is not designed: ${why}` });
+    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: name, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `${name} is not designed: ${why}` });
   }
   const budget = (id: string): PerMode => {
     const b = railOutputA[id];
     if (!b) {
-      globalFindings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'Current budget', message: `No current budget for rail "${id}": it is treated as unloaded.` });
+      globalFindings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `No current budget for rail "${id}": it is treated as unloaded.` });
       return ZERO;
     }
     const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
@@ -112,7 +112,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
       standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
       highMainsOutputA: highBudget(rail.id),
     });
-    if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'Project data', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
+    if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
     simulations += ev.simulations;
     allConverged = allConverged && ev.allConverged;
     reports.set(rail.id, ev.report);
@@ -145,8 +145,8 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
       receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse,
       findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
       recommendations: [
-        { topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' },
-        { topic: 'battery', text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive / ${Math.round(txFraction * 100)} % transmit`, reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`, source: 'Charge balance; CW duty 0.40 (OET Bulletin 65 Supplement B, Table 2, ref §2.3 [C2])' },
+        { topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'supply.fuse' },
+        { topic: 'battery', text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive / ${Math.round(txFraction * 100)} % transmit`, reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`, source: 'supply.battery-runtime' },
       ],
     };
     reports.set(b.id, report);
@@ -171,19 +171,19 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   }
   for (const rr of pending) {
     const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, {}, 0, false, duty, project.ambientC);
-    ev.report.findings.unshift({ severity: 'fail', rule: 'supply.parent', subject: rr.name, value: null, limit: null, unit: '', source: 'Supply tree', message: `${rr.name} has no valid source rail (missing or fed by itself).` });
+    ev.report.findings.unshift({ severity: 'fail', rule: 'supply.parent', subject: rr.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rr.name} has no valid source rail (missing or fed by itself).` });
     reports.set(rr.id, ev.report);
   }
 
   for (const [wid, names] of usedWindings) {
-    if (names.length > 1) globalFindings.push({ severity: 'caution', rule: 'transformer.shared-winding', subject: names.join(', '), value: names.length, limit: 1, unit: '', source: 'Simulation model', message: `${names.join(' and ')} share one winding (${wid}); each is simulated as if it had the winding to itself, so headroom and ratings are optimistic.` });
+    if (names.length > 1) globalFindings.push({ severity: 'caution', rule: 'transformer.shared-winding', subject: names.join(', '), value: names.length, limit: 1, unit: '', source: 'design.shared-winding', message: `${names.join(' and ')} share one winding (${wid}); each is simulated as if it had the winding to itself, so headroom and ratings are optimistic.` });
   }
 
   const transformers: TransformerReport[] = [];
   // a transformer with a winding feeding an undesigned rail would be sized for part of its load: leave it unsized
   const unsized = project.supply.transformers.filter((t) => rails.some((r) => r.kind === 'rectified' && undesigned.has(r.id) && t.windings.some((w) => w.id === r.windingId)));
   for (const t of unsized) {
-    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: t.name, value: null, limit: null, unit: 'VA', source: 'Current budget', message: `${t.name} is not sized, and no primary fuse is recommended: a rail it feeds has an unknown load.` });
+    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: t.name, value: null, limit: null, unit: 'VA', source: 'design.consistency', message: `${t.name} is not sized, and no primary fuse is recommended: a rail it feeds has an unknown load.` });
   }
   for (const t of project.supply.transformers) {
     if (unsized.includes(t)) continue;
@@ -272,6 +272,6 @@ function sanitize(report: SupplyReport): SupplyReport {
   };
   const clean = walk(report, 'report') as SupplyReport;
   if (bad.length === 0) return report;
-  const f: Finding = { severity: 'fail', rule: 'internal.non-finite', subject: 'Supply report', value: bad.length, limit: 0, unit: '', source: 'Program check', message: `Some supply values could not be computed from the inputs (${bad.slice(0, 3).join(', ')}${bad.length > 3 ? ', ...' : ''}); check the entered values.` };
+  const f: Finding = { severity: 'fail', rule: 'internal.non-finite', subject: 'Supply report', value: bad.length, limit: 0, unit: '', source: 'design.computation', message: `Some supply values could not be computed from the inputs (${bad.slice(0, 3).join(', ')}${bad.length > 3 ? ', ...' : ''}); check the entered values.` };
   return { ...clean, findings: sortFindings([f, ...clean.findings]) };
 }

@@ -10,7 +10,7 @@ export const PRIMARY_FACTOR = { laminated: 1.5, toroidal: 2 } as const;
 /** DC-side rail fuse factor over the key-down DC current. Common practice, no published source (ref §4.3 [M]: 1.25-1.5). */
 export const RAIL_FACTOR = 1.5;
 
-const SOURCE = 'IEC 60127 rated-current series; sizing factor is engineering practice, no published standard (ref §4.3)';
+const SOURCE = 'supply.fuse' as const;
 
 /** Marking as printed on a time-lag fuse: "T400mA", "T2A", "T3.15A". */
 export function fuseMarking(ratedA: number, characteristic: 'T' | 'F' = 'T'): string {

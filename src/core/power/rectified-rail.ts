@@ -80,10 +80,10 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   const thermal = corners.find((c) => c.id === ids.thermal) ?? corners[0];
   const tuneUp = corners.find((c) => c.id === ids.tuneUp) ?? corners[0];
   const highNoLoad = Math.max(0, ...corners.filter((c) => c.mains === 'high').map((c) => c.noLoadPeakV));
-  const source = 'Time-domain simulation of the rectifier and reservoir (this program), checked against ref §4.2 and ngspice';
+  const source = 'design.simulation' as const;
 
   if (!winding) {
-    findings.push({ severity: 'fail', rule: 'rail.winding', subject: rail.name, value: null, limit: null, unit: '', source: 'Supply tree', message: `${rail.name} has no transformer winding; choose one.` });
+    findings.push({ severity: 'fail', rule: 'rail.winding', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} has no transformer winding; choose one.` });
   }
   for (const c of corners) {
     if (c.note && winding) findings.push({ severity: c.note.startsWith('The load pulls') || c.note.startsWith('Simulation not run') ? 'fail' : 'caution', rule: 'rectifier.simulation', subject: rail.name, value: null, limit: null, unit: '', source, message: `${c.label}: ${c.note}` });
@@ -93,7 +93,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     if (!ctx.hasRequirement) findings.push({ ...base, severity: worst.troughV < ctx.requiredMinV ? 'caution' : 'ok', message: `${worst.label}: the ripple trough is ${fmt(worst.troughV)} V; no regulator is fed and no minimum is stated, so only the ${fmt(ctx.requiredMinV)} V margin is checked${worst.troughV < ctx.requiredMinV ? ' (and it is not met)' : ''}.` });
     else if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: the rail dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
     else findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough ${fmt(worst.troughV)} V stays above the ${fmt(ctx.requiredMinV)} V needed (${ctx.requirementNote}).` });
-    if (rail.topology === 'half-wave') findings.push({ severity: 'caution', rule: 'rectifier.half-wave', subject: rail.name, value: null, limit: null, unit: '', source: 'Common practice, no published source', message: `${rail.name}: a half-wave rectifier puts direct current through the winding, which can saturate a small transformer's core and doubles the ripple; prefer a bridge or centre-tap.` });
+    if (rail.topology === 'half-wave') findings.push({ severity: 'caution', rule: 'rectifier.half-wave', subject: rail.name, value: null, limit: null, unit: '', source: 'supply.half-wave', message: `${rail.name}: a half-wave rectifier puts direct current through the winding, which can saturate a small transformer's core and doubles the ripple; prefer a bridge or centre-tap.` });
   }
 
   // Reservoir
@@ -117,22 +117,22 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     topic: 'reservoir',
     text: `${reservoir.standardF !== null ? fmtF(reservoir.standardF) + ', ' : ''}rated ${reservoir.recommendedRatedV ?? '?'} V or more, ripple current ${fmt(Math.max(thermalRippleA, tuneUp.capacitorRippleRmsA))} A RMS or more at ${2 * ctx.mains.frequencyHz} Hz`,
     reasoning: `${ripTarget !== null ? (minF !== null ? `The simulation needs at least ${fmtF(minF)} for ${ripTarget} V p-p at low mains, key-down (the textbook I/(2fC) estimate, ${fmtF(reservoir.textbookF ?? 0)}, is conservative). ` : `The ${ripTarget} V p-p target cannot be met with this winding and load. `) : 'No ripple target set. '}The no-load peak at high mains is ${fmt(highNoLoad, 1)} V; a 20 % margin gives the voltage rating. Ripple current is from the simulation (thermal load; continuous carrier ${fmt(tuneUp.capacitorRippleRmsA)} A).`,
-    source: 'Simulation (this program); ripple formula ref §4.1; rating margin common practice',
+    source: 'supply.reservoir-plan',
   });
 
   // Bleeder
   const bleeder = bleederReport(rail.reservoirF, highNoLoad, rail.esrOhm, rail.bleederOhm);
   if (winding) findings.push(...bleederFindings(rail.name, bleeder));
   if (bleeder.suggestedOhm !== null) {
-    recommendations.push({ topic: 'bleeder', text: `${fmtOhm(bleeder.suggestedOhm)} bleeder, ${bleeder.suggestedW !== null ? fmt(bleeder.suggestedW * 2, 2) : '?'} W rating or more`, reasoning: `${bleeder.reasoning} It dissipates ${fmt(bleeder.suggestedW ?? 0, 2)} W at ${fmt(bleeder.startV, 1)} V; a part rated for twice that runs cool.`, source: 'Discharge t = RC ln(V0/Vsafe) (ref §10); IEC 60204-1 60 V within 5 s (ref §10 [C2]); 2x power rating common practice' });
+    recommendations.push({ topic: 'bleeder', text: `${fmtOhm(bleeder.suggestedOhm)} bleeder, ${bleeder.suggestedW !== null ? fmt(bleeder.suggestedW * 2, 2) : '?'} W rating or more`, reasoning: `${bleeder.reasoning} It dissipates ${fmt(bleeder.suggestedW ?? 0, 2)} W at ${fmt(bleeder.startV, 1)} V; a part rated for twice that runs cool.`, source: 'supply.bleeder' });
   }
 
   // Rail fuse
   const fuse = railFuse(Math.max(outputA.keyDown, ctx.highMainsOutputA?.keyDown ?? 0), 'on the DC side after the reservoir');
   findings.push(...fittedFuseFindings(`${rail.name} fuse`, rail.fuseA, fuse));
-  recommendations.push({ topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} rail fuse` : 'Rail fuse: see reasoning', reasoning: fuse.reasoning, source: 'IEC 60127 series; sizing common practice (ref §4.3 [M])' });
+  recommendations.push({ topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} rail fuse` : 'Rail fuse: see reasoning', reasoning: fuse.reasoning, source: 'supply.fuse' });
   if (winding) {
-    recommendations.push({ topic: 'rectifier', text: `Diodes rated ${fmt(Math.max(...corners.map((c) => c.diodePeakA)), 1)} A repetitive peak and ${fmt(Math.max(...corners.map((c) => c.surgeA)), 0)} A surge or more`, reasoning: `The simulated repetitive peak current and the switch-on surge into a discharged ${fmtF(rail.reservoirF)} reservoir (EMF peak over winding, diode and ESR resistance) at high mains. The bridge's non-repetitive surge rating (IFSM) must exceed the surge.`, source: 'Simulation (this program); surge estimate ref §4.2 [D]' });
+    recommendations.push({ topic: 'rectifier', text: `Diodes rated ${fmt(Math.max(...corners.map((c) => c.diodePeakA)), 1)} A repetitive peak and ${fmt(Math.max(...corners.map((c) => c.surgeA)), 0)} A surge or more`, reasoning: `The simulated repetitive peak current and the switch-on surge into a discharged ${fmtF(rail.reservoirF)} reservoir (EMF peak over winding, diode and ESR resistance) at high mains. The bridge's non-repetitive surge rating (IFSM) must exceed the surge.`, source: 'supply.surge' });
   }
 
   // Winding recommendation

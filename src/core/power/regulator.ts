@@ -67,7 +67,7 @@ export function regulatorDissipationW(rail: RegulatedRail, outputA: number, inpu
   return Math.max(0, (vIn - vOut) * iOut + vIn * iq);
 }
 
-const SOURCE_DROPOUT = 'Three-terminal regulator datasheets: input must exceed output by the dropout even at the ripple trough (ref §6.1, §6.2)';
+const SOURCE_DROPOUT = 'supply.regulator-dropout' as const;
 
 /** Headroom finding at the trough of the worst corner. */
 export function headroomFinding(rail: RegulatedRail, troughV: number, cornerLabel: string): Finding {
@@ -89,13 +89,13 @@ export function ratingFindings(rail: RegulatedRail, maxInputSeenV: number, maxOu
   const out: Finding[] = [];
   const vOut = regulatorOutputV(rail.setting, rail.quiescentA);
   if (!(vOut > 0)) {
-    out.push({ severity: 'fail', rule: 'regulator.setting', subject: rail.name, value: vOut, limit: null, unit: 'V', source: 'Regulator setting', message: `The setting gives no usable output voltage; check the resistor values.` });
+    out.push({ severity: 'fail', rule: 'regulator.setting', subject: rail.name, value: vOut, limit: null, unit: 'V', source: 'design.input', message: `The setting gives no usable output voltage; check the resistor values.` });
   }
   if (rail.maxInputV !== null && Number.isFinite(rail.maxInputV) && maxInputSeenV > rail.maxInputV) {
-    out.push({ severity: 'fail', rule: 'regulator.max-input', subject: rail.name, value: maxInputSeenV, limit: rail.maxInputV, unit: 'V', source: 'Regulator datasheet maximum input voltage (e.g. 35 V for 5-18 V 78xx types, ref §6.1)', message: `With no load at high mains the input reaches ${maxInputSeenV.toFixed(1)} V, above the ${rail.maxInputV} V maximum.` });
+    out.push({ severity: 'fail', rule: 'regulator.max-input', subject: rail.name, value: maxInputSeenV, limit: rail.maxInputV, unit: 'V', source: 'supply.regulator-max-input', message: `With no load at high mains the input reaches ${maxInputSeenV.toFixed(1)} V, above the ${rail.maxInputV} V maximum.` });
   }
   if (rail.maxOutputA !== null && Number.isFinite(rail.maxOutputA) && maxOutputSeenA > rail.maxOutputA) {
-    out.push({ severity: 'fail', rule: 'regulator.max-output', subject: rail.name, value: maxOutputSeenA, limit: rail.maxOutputA, unit: 'A', source: 'Regulator datasheet output current rating', message: `Key-down load ${maxOutputSeenA.toFixed(2)} A exceeds its ${rail.maxOutputA} A rating.` });
+    out.push({ severity: 'fail', rule: 'regulator.max-output', subject: rail.name, value: maxOutputSeenA, limit: rail.maxOutputA, unit: 'A', source: 'design.maker-rating', message: `Key-down load ${maxOutputSeenA.toFixed(2)} A exceeds its ${rail.maxOutputA} A rating.` });
   }
   return out;
 }

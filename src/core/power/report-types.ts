@@ -1,5 +1,6 @@
 // The supply report: plain JSON-friendly objects (no Maps, no NaN). SI units; the unit of every key is in its doc.
 import type { Finding } from '../findings';
+import type { SourceKey } from '../sources/registry';
 import type { Mode, PerMode, RectifierTopology } from '../model';
 import type { RectifierWaveform } from './rectifier-sim';
 import type { ThermalResult } from '../thermal/junction';
@@ -64,8 +65,8 @@ export interface Recommendation {
   text: string;
   /** The reasoning in words, with the rule used. */
   reasoning: string;
-  /** Source or "common practice, no published source". */
-  source: string;
+  /** Source registry key; users see its registry text. */
+  source: SourceKey;
 }
 
 export interface FuseRecommendation {

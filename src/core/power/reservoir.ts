@@ -67,7 +67,7 @@ export function reservoirFindings(
 ): Finding[] {
   const out: Finding[] = [];
   const subject = `${railName} reservoir`;
-  const srcV = 'Capacitor rating must exceed the no-load high-mains peak; 20 % margin is common practice, no published source (ref §4.2)';
+  const srcV = 'supply.capacitor-voltage' as const;
   if (fittedRatedV !== null) {
     const need = noLoadPeakHighV * CAP_VOLTAGE_MARGIN;
     const base = { rule: 'reservoir.voltage', subject, value: fittedRatedV, unit: 'V', source: srcV };
@@ -76,13 +76,13 @@ export function reservoirFindings(
     else out.push({ ...base, limit: need, severity: 'ok', message: `The ${fittedRatedV} V rating covers the ${noLoadPeakHighV.toFixed(1)} V no-load peak with margin.` });
   }
   if (fittedRippleA !== null) {
-    const base = { rule: 'reservoir.ripple-current', subject, value: thermalRippleA, limit: fittedRippleA, unit: 'A', source: 'Simulated capacitor RMS current against the maker\'s ripple-current rating (ref §4.1, §4.2)' };
+    const base = { rule: 'reservoir.ripple-current', subject, value: thermalRippleA, limit: fittedRippleA, unit: 'A', source: 'supply.capacitor-ripple' as const };
     if (thermalRippleA > fittedRippleA) out.push({ ...base, severity: 'fail', message: `Ripple current ${thermalRippleA.toFixed(2)} A RMS in normal operation exceeds the ${fittedRippleA} A rating; the capacitor runs hot and its life is short. Use a larger part or two in parallel.` });
     else if (tuneUpRippleA > fittedRippleA) out.push({ ...base, value: tuneUpRippleA, severity: 'caution', message: `With a continuous carrier the ripple current (${tuneUpRippleA.toFixed(2)} A) exceeds the ${fittedRippleA} A rating; keep tune-up short.` });
     else out.push({ ...base, severity: 'ok', message: `Ripple current ${thermalRippleA.toFixed(2)} A RMS is within its ${fittedRippleA} A rating.` });
   }
   if (ripplePpTargetV !== null && ripplePpTargetV > 0) {
-    const base = { rule: 'reservoir.ripple', subject, value: worstRipplePpV, limit: ripplePpTargetV, unit: 'V', source: 'Time-domain simulation of the rectifier (this program), low mains, key-down' };
+    const base = { rule: 'reservoir.ripple', subject, value: worstRipplePpV, limit: ripplePpTargetV, unit: 'V', source: 'design.simulation' as const };
     out.push(worstRipplePpV > ripplePpTargetV
       ? { ...base, severity: 'caution', message: `Ripple ${worstRipplePpV.toFixed(2)} V p-p at key-down exceeds the ${ripplePpTargetV} V target; more capacitance is needed.` }
       : { ...base, severity: 'ok', message: `Ripple ${worstRipplePpV.toFixed(2)} V p-p meets the ${ripplePpTargetV} V target.` });

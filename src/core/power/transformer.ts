@@ -103,20 +103,20 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
     reasoning: `${reasoningV} Current rating: heating-equivalent RMS at high mains with CW duty ${d} is ${thermalRmsA.toFixed(2)} A${half} (continuous carrier ${tuneUpRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`,
   };
   const findings: Finding[] = [];
-  const src = 'Simulated secondary RMS current against the winding rating; capacitor-input rectifiers draw ~1.6-2.2 x I_dc RMS (ref §4.1)';
+  const src = 'supply.transformer-current' as const;
   if (inp.winding.ratedA > 0 && Number.isFinite(inp.winding.ratedA)) {
     const base = { rule: 'transformer.current', subject: inp.winding.name, unit: 'A', source: src, limit: inp.winding.ratedA };
     if (thermalRmsA > inp.winding.ratedA) findings.push({ ...base, value: thermalRmsA, severity: 'fail', message: `${thermalRmsA.toFixed(2)} A RMS in CW operation exceeds its ${inp.winding.ratedA} A rating; the transformer will overheat. Choose at least ${ratedA.toFixed(2)} A${half}.` });
     else if (tuneUpRmsA > inp.winding.ratedA) findings.push({ ...base, value: tuneUpRmsA, severity: 'caution', message: `A continuous carrier draws ${tuneUpRmsA.toFixed(2)} A RMS, above its ${inp.winding.ratedA} A rating; keep tune-up short.` });
     else findings.push({ ...base, value: thermalRmsA, severity: 'ok', message: `${thermalRmsA.toFixed(2)} A RMS in CW operation is within its ${inp.winding.ratedA} A rating.` });
   } else {
-    findings.push({ severity: 'fail', rule: 'transformer.current', subject: inp.winding.name, value: null, limit: null, unit: 'A', source: 'Transformer data', message: `Enter the winding's rated current; without it the winding resistance and heating cannot be judged.` });
+    findings.push({ severity: 'fail', rule: 'transformer.current', subject: inp.winding.name, value: null, limit: null, unit: 'A', source: 'design.input', message: `Enter the winding's rated current; without it the winding resistance and heating cannot be judged.` });
   }
   const recommendation: Recommendation = {
     topic: 'transformer',
     text: `${inp.winding.name}: ${standardRatedV !== null ? `${standardRatedV} V` : 'voltage: see reasoning'}${halves === 2 ? '-0-' + (standardRatedV ?? '') + ' V' : ''}, ${ratedA.toFixed(2)} A RMS${half} (${va.toFixed(0)} VA)`,
     reasoning: result.reasoning + (checkTroughV !== null ? ` With ${standardRatedV} V the trough is ${checkTroughV.toFixed(2)} V.` : ''),
-    source: 'Simulation (this program); standard voltages from an editable list (common practice)',
+    source: 'supply.standard-values',
   };
   return { result, findings, recommendation, simulations };
 }
@@ -129,10 +129,10 @@ export function transformerReport(t: Transformer, windings: WindingRecommendatio
   const primaryA = windings.reduce((s, w) => s + w.primaryReferredA, 0);
   const findings: Finding[] = [];
   if (t.construction === 'toroidal' && (standardVA ?? thermalVA) >= TOROID_SOFT_START_VA) {
-    findings.push({ severity: 'caution', rule: 'transformer.inrush', subject: t.name, value: standardVA ?? thermalVA, limit: TOROID_SOFT_START_VA, unit: 'VA', source: 'Common practice, no published source: toroids of a few hundred VA and up draw switch-on inrush of many times their rated current', message: `A toroidal transformer of this size can draw a large inrush at switch-on and blow fuses or trip breakers; fit a soft-start (series NTC thermistor or a resistor shorted by a relay after a moment). Mains wiring must follow your local electrical code.` });
+    findings.push({ severity: 'caution', rule: 'transformer.inrush', subject: t.name, value: standardVA ?? thermalVA, limit: TOROID_SOFT_START_VA, unit: 'VA', source: 'supply.inrush', message: `A toroidal transformer of this size can draw a large inrush at switch-on and blow fuses or trip breakers; fit a soft-start (series NTC thermistor or a resistor shorted by a relay after a moment). Mains wiring must follow your local electrical code.` });
   }
   if (standardVA !== null && tuneUpVA > standardVA * 1.2) {
-    findings.push({ severity: 'caution', rule: 'transformer.tune-up', subject: t.name, value: tuneUpVA, limit: standardVA, unit: 'VA', source: 'Duty-factor averaging (OET Bulletin 65 Supplement B, Table 2: CW 40 %, carrier 100 %)', message: `A continuous carrier loads it to ${tuneUpVA.toFixed(0)} VA, well above the ${standardVA} VA sized for CW; keep tune-up carriers short.` });
+    findings.push({ severity: 'caution', rule: 'transformer.tune-up', subject: t.name, value: tuneUpVA, limit: standardVA, unit: 'VA', source: 'supply.tune-up-duty', message: `A continuous carrier loads it to ${tuneUpVA.toFixed(0)} VA, well above the ${standardVA} VA sized for CW; keep tune-up carriers short.` });
   }
   return { report: { transformerId: t.id, name: t.name, construction: t.construction, windings, thermalVA, tuneUpVA, standardVA, primaryA }, findings };
 }

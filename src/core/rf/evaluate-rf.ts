@@ -37,7 +37,7 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   if (!d.ok) {
     return {
       res: { errors: d.errors, design: null, analysis: null, monteCarlo: null, capacitorPeakV, filterLossW: 0 },
-      findings: d.errors.map((e) => ({ severity: 'fail', rule: 'lpf.input', subject: `${stage.name}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+      findings: d.errors.map((e) => ({ severity: 'fail', rule: 'lpf.input', subject: `${stage.name}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'design.input', message: e.message })),
     };
   }
   const design = d.value;
@@ -48,20 +48,20 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   const filterLossW = powerW * (1 - 10 ** (-il / 10));
   const s = stage.name;
   const f: Finding[] = [];
-  f.push({ severity: analysis.bandMaxLossDb > 1 ? 'caution' : 'ok', rule: 'lpf.passband', subject: s, value: analysis.bandMaxLossDb, limit: 1, unit: 'dB', source: 'ABCD analysis of the as-built ladder with component Q',
+  f.push({ severity: analysis.bandMaxLossDb > 1 ? 'caution' : 'ok', rule: 'lpf.passband', subject: s, value: analysis.bandMaxLossDb, limit: 1, unit: 'dB', source: 'lpf.abcd',
     message: `Loss across the band up to ${analysis.bandMaxLossDb.toFixed(2)} dB (${il.toFixed(2)} dB at the operating frequency, about ${filterLossW.toFixed(2)} W of heat).` });
-  f.push({ severity: analysis.bandMaxSwr > 2 ? 'fail' : analysis.bandMaxSwr > 1.3 ? 'caution' : 'ok', rule: 'lpf.swr', subject: s, value: analysis.bandMaxSwr, limit: 1.3, unit: '', source: 'ABCD analysis of the as-built ladder',
+  f.push({ severity: analysis.bandMaxSwr > 2 ? 'fail' : analysis.bandMaxSwr > 1.3 ? 'caution' : 'ok', rule: 'lpf.swr', subject: s, value: analysis.bandMaxSwr, limit: 1.3, unit: '', source: 'lpf.abcd',
     message: analysis.bandMaxSwr > 1.3
       ? `The built filter shows SWR up to ${analysis.bandMaxSwr.toFixed(2)} in the band: component snapping or turns rounding detune it; adjust turns or use a parallel capacitor pair.`
       : `Input SWR stays below ${analysis.bandMaxSwr.toFixed(2)} across the band.` });
   for (const e of design.elements) {
     // Common practice, no published source: keep as-built values within 5 % of ideal
     if (Math.abs(e.errorFraction) > 0.05) {
-      f.push({ severity: 'caution', rule: 'lpf.snap', subject: `${s}: ${e.kind === 'shunt-capacitor' ? 'C' : 'L'}${e.index}`, value: e.builtValue, limit: e.idealValue, unit: e.kind === 'shunt-capacitor' ? 'F' : 'H', source: 'Common practice, no published source',
+      f.push({ severity: 'caution', rule: 'lpf.snap', subject: `${s}: ${e.kind === 'shunt-capacitor' ? 'C' : 'L'}${e.index}`, value: e.builtValue, limit: e.idealValue, unit: e.kind === 'shunt-capacitor' ? 'F' : 'H', source: 'lpf.snap',
         message: `Built value is ${(e.errorFraction * 100).toFixed(1)} % from ideal${e.turns !== null && e.turns < 6 ? '; with so few turns a core with a lower AL gives finer steps' : ''}.` });
     }
   }
-  f.push({ severity: 'caution', rule: 'lpf.capacitor-voltage', subject: s, value: capacitorPeakV, limit: null, unit: 'V', source: 'Transmission-line standing-wave maxima (REFERENCE-VALUES §9)',
+  f.push({ severity: 'caution', kind: 'standing', rule: 'lpf.capacitor-voltage', subject: s, value: capacitorPeakV, limit: null, unit: 'V', source: 'line.standing-wave',
     message: `Shunt capacitors can see about ${capacitorPeakV.toFixed(0)} V peak at SWR ${swr}; use RF-rated (silver-mica or C0G) parts rated well above it.` });
   return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW }, findings: f };
 }
@@ -69,9 +69,9 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
 /** Evaluate all RF stages of a project. Never throws for bad data; problems become findings. */
 export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const inputErrors = validateRfInputs(project.frequencyHz, project.targetPowerW);
-  const all: Finding[] = inputErrors.map((e) => ({ severity: 'fail', rule: 'rf.input', subject: e.field, value: null, limit: null, unit: '', source: 'input check', message: e.message }));
+  const all: Finding[] = inputErrors.map((e) => ({ severity: 'fail', rule: 'rf.input', subject: e.field, value: null, limit: null, unit: '', source: 'design.input', message: e.message }));
   for (const e of validateRfSettings(project.rf)) {
-    all.push({ severity: 'fail', rule: 'rf.settings', subject: e.field, value: null, limit: null, unit: '', source: 'input check', message: e.message });
+    all.push({ severity: 'fail', rule: 'rf.settings', subject: e.field, value: null, limit: null, unit: '', source: 'design.input', message: e.message });
   }
   const frequencyHz = finite(project.frequencyHz);
   const targetPowerW = Math.max(0, finite(project.targetPowerW));
@@ -97,7 +97,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
       stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });
       if (st === paStage && pa.refused) {
         // the stress checks below need a power: say that they take the target instead of the PA's (unknown) output
-        all.push({ severity: 'caution', rule: 'rf.pa-unknown', subject: st.name, value: targetPowerW, limit: null, unit: 'W', source: 'input check',
+        all.push({ severity: 'caution', rule: 'rf.pa-unknown', subject: st.name, value: targetPowerW, limit: null, unit: 'W', source: 'design.consistency',
           message: `The PA output is unknown (its data is refused), so the filter, relay, harmonic and exposure checks use the ${targetPowerW} W target power instead.` });
       }
     }
@@ -135,7 +135,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   }
   for (const s of stages) all.push(...s.findings);
   if (!paStage) {
-    all.push({ severity: 'caution', rule: 'rf.no-pa', subject: 'Final amplifier', value: null, limit: null, unit: '', source: 'input check',
+    all.push({ severity: 'caution', rule: 'rf.no-pa', subject: 'Final amplifier', value: null, limit: null, unit: '', source: 'design.consistency',
       message: 'No final amplifier stage with PA settings: harmonics, relay and exposure use the target power instead.' });
   }
   const harmonics = okFreq && targetPowerW > 0
@@ -146,7 +146,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     : null;
   if (harmonics) all.push(...harmonics.findings);
   if (frequencyHz >= 30e6) {
-    all.push({ severity: 'caution', rule: 'spurious.range', subject: 'Spurious-emission rule', value: frequencyHz, limit: 30e6, unit: 'Hz', source: '47 CFR 97.307(d)/(e)',
+    all.push({ severity: 'caution', rule: 'spurious.range', subject: 'Spurious-emission rule', value: frequencyHz, limit: 30e6, unit: 'Hz', source: project.rf.spuriousRule === 'us-97-307' ? 'spurious.us-97-307e' : 'spurious.itu-range',
       message: 'The spurious-emission limits used here apply below 30 MHz; other limits apply at this frequency.' });
   }
   // RF exposure is a safety estimate: the most the station radiates (high mains or a full battery), not the nominal

@@ -60,7 +60,7 @@ export interface ExposureResult {
   findings: Finding[];
 }
 
-const SRC = 'FCC OET Bulletin 65 (1997) far-field method with 47 CFR 1.1310 Table 1 limits';
+const SRC = 'exposure.fcc-distance' as const;
 
 export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: RfSettings): ExposureResult {
   const bad = validateRfSettings(rf).filter((e) => e.field !== 'evenHarmonicDbc' && e.field !== 'worstSwr');
@@ -70,8 +70,8 @@ export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: Rf
       limitControlledWPerM2: null, limitGeneralWPerM2: null, controlledDistanceM: null, generalDistanceM: null, nearFieldDistanceM: 0, farFieldValid: false,
       exemptionThresholdW: null, exempt: null, exemptBeyondM: null, caution: EXPOSURE_CAUTION,
       findings: [
-        ...bad.map((e): Finding => ({ severity: 'fail', rule: 'exposure.input', subject: `RF exposure: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
-        { severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'Local regulations and licence conditions', message: EXPOSURE_CAUTION },
+        ...bad.map((e): Finding => ({ severity: 'fail', rule: 'exposure.input', subject: `RF exposure: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'design.input', message: e.message })),
+        { severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'exposure.local-rules', kind: 'standing', message: EXPOSURE_CAUTION },
       ],
     };
   }
@@ -96,21 +96,21 @@ export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: Rf
   const exemptBeyondM = thr === null ? null : Math.max(nearFieldDistanceM, Math.sqrt((erpW * nearFieldDistanceM ** 2) / Math.max(thr, 1e-30)));
   const findings: Finding[] = [];
   if (!lim) {
-    findings.push({ severity: 'fail', rule: 'exposure.range', subject: 'RF exposure', value: frequencyHz, limit: 3e5, unit: 'Hz', source: '47 CFR 1.1310',
+    findings.push({ severity: 'fail', rule: 'exposure.range', subject: 'RF exposure', value: frequencyHz, limit: 3e5, unit: 'Hz', source: 'exposure.fcc-range',
       message: 'The operating frequency is outside the exposure limit table (0.3 MHz to 100 GHz); no estimate is possible.' });
   } else {
-    findings.push({ severity: 'caution', rule: 'exposure.distance', subject: 'RF exposure', value: generalDistanceM, limit: null, unit: 'm', source: SRC,
+    findings.push({ severity: 'caution', kind: 'standing', rule: 'exposure.distance', subject: 'RF exposure', value: generalDistanceM, limit: null, unit: 'm', source: SRC,
       message: `Keep people at least ${(generalDistanceM as number).toFixed(2)} m (general public) and ${(controlledDistanceM as number).toFixed(2)} m (you and your household) from the antenna.` });
     if (!farFieldValid) {
-      findings.push({ severity: 'caution', rule: 'exposure.near-field', subject: 'RF exposure', value: generalDistanceM, limit: nearFieldDistanceM, unit: 'm', source: 'OET Bulletin 65 Supplement B (1997)',
+      findings.push({ severity: 'caution', rule: 'exposure.near-field', subject: 'RF exposure', value: generalDistanceM, limit: nearFieldDistanceM, unit: 'm', source: 'exposure.near-field', kind: 'standing',
         message: `These distances lie inside λ/2π = ${nearFieldDistanceM.toFixed(2)} m (reactive near field), where the far-field formula is only a rough estimate.` });
     }
-    findings.push({ severity: exempt ? 'ok' : 'caution', rule: 'exposure.exemption', subject: 'RF exposure', value: erpW, limit: thr, unit: 'W', source: '47 CFR 1.1307(b)(3)(i)(C)',
+    findings.push({ severity: exempt ? 'ok' : 'caution', rule: 'exposure.exemption', subject: 'RF exposure', value: erpW, limit: thr, unit: 'W', source: 'exposure.fcc-exemption',
       message: exempt
         ? `Time-averaged ERP ${erpW.toFixed(1)} W is within the ${(thr as number).toFixed(0)} W exemption threshold for people at ${nearFieldDistanceM.toFixed(2)} m or more (US rule).`
         : `Time-averaged ERP ${erpW.toFixed(1)} W exceeds the exemption threshold at ${nearFieldDistanceM.toFixed(2)} m; a routine evaluation is needed for people closer than ${(exemptBeyondM as number).toFixed(1)} m (US rule).` });
   }
-  findings.push({ severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'Local regulations and licence conditions', message: EXPOSURE_CAUTION });
+  findings.push({ severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'exposure.local-rules', kind: 'standing', message: EXPOSURE_CAUTION });
   return {
     frequencyHz, peakPowerW: p, averagePowerW, eirpW, erpW, groundReflection: rf.groundReflection,
     limitControlledWPerM2: lim ? lim.controlled * 10 : null, limitGeneralWPerM2: lim ? lim.general * 10 : null,

@@ -1,19 +1,20 @@
 // Harmonic (spurious) compliance: PA harmonic levels, minus filter attenuation, against the chosen rule.
 import type { Finding } from '../findings';
+import type { SourceKey } from '../sources/registry';
 import type { PaParams, RfSettings } from '../model';
 import type { MonteCarloResult } from './lpf-monte-carlo';
 
 export type SpuriousRule = RfSettings['spuriousRule'];
 
-export const RULE_INFO: Record<SpuriousRule, { title: string; source: string; fromMemory: boolean }> = {
+export const RULE_INFO: Record<SpuriousRule, { title: string; source: SourceKey; fromMemory: boolean }> = {
   'us-97-307': {
     title: '47 CFR 97.307(d): spurious emissions at least 43 dB below the fundamental (below 30 MHz, installed after 2003)',
-    source: '47 CFR 97.307(d)',
+    source: 'spurious.us-97-307d',
     fromMemory: false,
   },
   'itu-app3': {
     title: 'ITU RR Appendix 3, amateur below 30 MHz: 43 + 10 log10(P) dB or 50 dBc, whichever is less stringent',
-    source: 'ITU Radio Regulations Appendix 3 (limit formula from memory, not confirmed)',
+    source: 'spurious.itu-app3',
     fromMemory: true,
   },
 };
@@ -71,7 +72,7 @@ export interface HarmonicsReport {
   rule: SpuriousRule;
   /** The rule in words, its citation, and whether the figure is from memory (unconfirmed). */
   ruleTitle: string;
-  ruleSource: string;
+  ruleSource: SourceKey;
   ruleFromMemory: boolean;
   /** Fundamental mean power used for the rule, W. */
   fundamentalW: number;
@@ -131,10 +132,10 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
     return row;
   });
   if (info.fromMemory) {
-    findings.push({ severity: 'caution', rule: 'spurious.rule-source', subject: 'Spurious-emission rule', value: null, limit: null, unit: '', source: info.source,
+    findings.push({ severity: 'caution', kind: 'standing', rule: 'spurious.rule-source', subject: 'Spurious-emission rule', value: null, limit: null, unit: '', source: info.source,
       message: 'The ITU limit formula used here is from memory and not confirmed against the Radio Regulations; check the current text and your licence conditions.' });
   }
-  findings.push({ severity: 'caution', rule: 'spurious.measure', subject: 'Spurious emissions', value: null, limit: null, unit: '', source: '47 CFR 97.307(c); licence conditions',
+  findings.push({ severity: 'caution', rule: 'spurious.measure', subject: 'Spurious emissions', value: null, limit: null, unit: '', source: 'spurious.measure', kind: 'standing',
     message: 'These are predictions from idealised waveforms; measure the finished transmitter into a dummy load before going on the air, and follow your licence conditions.' });
   return { rule: inp.rule, ruleTitle: info.title, ruleSource: info.source, ruleFromMemory: info.fromMemory, fundamentalW: inp.fundamentalW, requiredDb, rows, findings };
 }

@@ -29,7 +29,7 @@ export { NEGLIGIBLE_DISSIPATION_W };
 /** θsa reported when the dissipation is negligible: any heatsink, or none, will do, K/W. */
 export const NO_HEATSINK_NEEDED_K_PER_W = 1e6;
 
-const SRC = 'Series thermal path Tj = Ta + P(θjc + θcs + θsa); target 0.8 Tjmax (REFERENCE-VALUES §7)';
+const SRC = 'pa.thermal';
 
 export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW: number, ambientC: number, keyingDuty: number): PaThermal & { findings: Finding[] } {
   const m = pa.mount;
@@ -91,7 +91,7 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
     });
   }
   findings.push({
-    severity: 'caution', rule: 'pa.heat-safety', subject: '', value: null, limit: null, unit: '', source: 'Common practice, no published source',
+    severity: 'caution', rule: 'pa.heat-safety', subject: '', value: null, limit: null, unit: '', source: 'pa.heat', kind: 'standing',
     message: 'Heatsinks and device tabs get hot enough to burn; tabs are often at drain voltage, so insulate them or keep fingers away when keyed.',
   });
   return {

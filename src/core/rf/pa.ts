@@ -77,7 +77,7 @@ export const MIN_PA_RAIL_V = 1;
 /** Smallest reference power for the dB comparison, W. Common practice, no published source (1 nW = -60 dBm). */
 const MIN_REFERENCE_POWER_W = 1e-9;
 
-const SRC_LOADLINE = 'Textbook load line / Sokal & Sokal IEEE JSSC 1975 (REFERENCE-VALUES §8.1)';
+const SRC_LOADLINE = 'pa.load-line';
 
 function zeroResult(railV: number, findings: Finding[]): PaResult {
   return {
@@ -118,7 +118,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   if (errors.length === 0 && railV <= vsat0) errors.push({ field: 'saturationV', message: 'Saturation drop is not below the supply voltage.' });
   if (errors.length > 0) {
     return zeroResult(Number.isFinite(railV) ? railV : 0, errors.map((e) => ({
-      severity: 'fail', rule: 'pa.input', subject: `${subject}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message,
+      severity: 'fail', rule: 'pa.input', subject: `${subject}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'design.input', message: e.message,
     })));
   }
   const findings: Finding[] = [];
@@ -139,7 +139,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     const best = ratioOptions.reduce((a, b) => (Math.abs(db(b.outputW / target)) < Math.abs(db(a.outputW / target)) ? b : a));
     turnsRatio = best.turnsRatio;
   } else {
-    return zeroResult(railV, [{ severity: 'fail', rule: 'pa.input', subject, value: target, limit: 0, unit: 'W', source: 'input check', message: 'Enter a turns ratio or a target power above zero.' }]);
+    return zeroResult(railV, [{ severity: 'fail', rule: 'pa.input', subject, value: target, limit: 0, unit: 'W', source: 'design.input', message: 'Enter a turns ratio or a target power above zero.' }]);
   }
   // Source: impedance transformation Z_p = Z_s / (N_s/N_p)^2 (REFERENCE-VALUES §8.1)
   const primaryOhm = pa.loadOhm / turnsRatio ** 2;
@@ -164,15 +164,15 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const thermal = { ...thermalRaw, findings: thermalRaw.findings.map((f) => (f.rule === 'pa.heat-safety' ? f : { ...f, message: f.message.replace(/\.$|:/, (m) => `${hotNote}${m}`) })) };
 
   if (pa.efficiency === null) {
-    findings.push({ severity: 'ok', rule: 'pa.efficiency', subject, value: efficiency, limit: null, unit: '', source: 'Common practice, no published source',
+    findings.push({ severity: 'ok', rule: 'pa.efficiency', subject, value: efficiency, limit: null, unit: '', source: 'pa.efficiency',
       message: `No efficiency entered: ${Math.round(efficiency * 100)} % assumed for class ${pa.amplifierClass}; measure DC input at full output to confirm.` });
   }
   if (pa.amplifierClass === 'D' && pa.topology === 'single-ended') {
-    findings.push({ severity: 'ok', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'Fourier series of a square wave (REFERENCE-VALUES §3.3)',
+    findings.push({ severity: 'ok', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'pa.fourier',
       message: 'Single-ended class D is modelled as a half-bridge driving a 0 to Vdd square wave into the transformer.' });
   }
   if (pa.amplifierClass === 'E' && pa.topology === 'push-pull') {
-    findings.push({ severity: 'caution', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'assumption, no published source',
+    findings.push({ severity: 'caution', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'pa.push-pull-e',
       message: 'Push-pull class E is modelled as two single-ended class-E halves each driving half the load; treat the power as an estimate.' });
   }
   if (target > 0) {
@@ -193,7 +193,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const atMax = maxRailV > railV ? ` at the highest supply of ${maxRailV.toFixed(1)} V (${bat ? 'battery full' : 'high mains, before the rail sags under key-down'})` : '';
   findings.push({
     severity: pa.deviceVdsMaxV < peakDrainV ? 'fail' : pa.deviceVdsMaxV < vMargin * peakDrainV ? 'caution' : 'ok',
-    rule: 'pa.vds', subject, value: peakDrainV, limit: pa.deviceVdsMaxV, unit: 'V', source: `${SRC_LOADLINE}; 25 % margin common practice`,
+    rule: 'pa.vds', subject, value: peakDrainV, limit: pa.deviceVdsMaxV, unit: 'V', source: 'pa.vds',
     message: pa.deviceVdsMaxV < peakDrainV
       ? `Drain peaks near ${peakDrainV.toFixed(1)} V${atMax} exceed the ${pa.deviceVdsMaxV} V device rating: the device will break down, especially into a mismatch.`
       : pa.deviceVdsMaxV < vMargin * peakDrainV
@@ -202,7 +202,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   });
   findings.push({
     severity: op.peakDeviceA > pa.deviceIdMaxA ? 'fail' : op.peakDeviceA > 0.8 * pa.deviceIdMaxA ? 'caution' : 'ok',
-    rule: 'pa.id', subject, value: op.peakDeviceA, limit: pa.deviceIdMaxA, unit: 'A', source: SRC_LOADLINE,
+    rule: 'pa.id', subject, value: op.peakDeviceA, limit: pa.deviceIdMaxA, unit: 'A', source: 'pa.peak-current',
     message: op.peakDeviceA > pa.deviceIdMaxA
       ? `Peak device current ${op.peakDeviceA.toFixed(2)} A exceeds the ${pa.deviceIdMaxA} A rating.`
       : `Peak device current ${op.peakDeviceA.toFixed(2)} A against a ${pa.deviceIdMaxA} A rating.`,
@@ -235,7 +235,7 @@ export function paKeyDownCurrentA(pa: PaParams, railV: number, project: Pick<Pro
   const r = evaluatePa(pa, railV, project, subject);
   if (r.refused) return { ok: false, findings: r.findings.filter((f) => f.severity === 'fail') };
   if (!Number.isFinite(r.keyDownCurrentA) || r.keyDownCurrentA < 0) {
-    return { ok: false, findings: [{ severity: 'fail', rule: 'pa.input', subject: `${subject}: key-down current`, value: null, limit: null, unit: 'A', source: 'input check',
+    return { ok: false, findings: [{ severity: 'fail', rule: 'pa.input', subject: `${subject}: key-down current`, value: null, limit: null, unit: 'A', source: 'design.input',
       message: 'The PA key-down current could not be computed from the entered data.' }] };
   }
   return { ok: true, currentA: r.keyDownCurrentA };

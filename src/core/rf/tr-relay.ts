@@ -58,12 +58,12 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
     return {
       powerW: 0, swr: 1, rfRmsV: 0, rfPeakV: 0, rfRmsA: 0, rfPeakA: 0, peakWithHarmonicsV: null, ratedPeakV: 0, ratedIsRf: false,
       receiverPowerW: 0, receiverPowerDbm: -999, dotS: 0, hotSwitchMarginS: 0,
-      findings: errors.map((e) => ({ severity: 'fail', rule: 'relay.input', subject: `${s}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'input check', message: e.message })),
+      findings: errors.map((e) => ({ severity: 'fail', rule: 'relay.input', subject: `${s}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'design.input', message: e.message })),
     };
   }
   const swr = Number.isFinite(inp.swr) ? Math.min(Math.max(1, inp.swr), 100) : 1;
   if (swr !== inp.swr) {
-    f.push({ severity: 'caution', rule: 'relay.swr', subject: s, value: swr, limit: null, unit: '', source: 'input check', message: `The worst-case SWR was taken as ${swr} (the entered value is outside 1 to 100).` });
+    f.push({ severity: 'caution', rule: 'relay.swr', subject: s, value: swr, limit: null, unit: '', source: 'design.input', message: `The worst-case SWR was taken as ${swr} (the entered value is outside 1 to 100).` });
   }
   const powerW = Number.isFinite(inp.powerW) ? Math.max(0, inp.powerW) : 0;
   const m = lineMaxima(powerW, 50, swr);
@@ -75,7 +75,7 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
   const checkV = peakWithHarmonicsV ?? m.peakV;
   f.push({
     severity: checkV > ratedPeakV ? 'fail' : !ratedIsRf || checkV > 0.8 * ratedPeakV ? 'caution' : 'ok',
-    rule: 'relay.rf-voltage', subject: s, value: checkV, limit: ratedPeakV, unit: 'V', source: 'Transmission-line standing-wave maxima (REFERENCE-VALUES §9)',
+    rule: 'relay.rf-voltage', subject: s, value: checkV, limit: ratedPeakV, unit: 'V', source: 'line.standing-wave',
     message: (checkV > ratedPeakV
       ? `RF peaks up to ${checkV.toFixed(0)} V at SWR ${swr} exceed the ${ratedPeakV} V rating: the contacts can arc.`
       : `RF peaks up to ${checkV.toFixed(0)} V at SWR ${swr} against a ${ratedPeakV} V rating.`) +
@@ -84,14 +84,14 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
   });
   f.push({
     severity: m.rmsA > r.contactCarryA ? 'fail' : m.rmsA > 0.8 * r.contactCarryA ? 'caution' : 'ok',
-    rule: 'relay.rf-current', subject: s, value: m.rmsA, limit: r.contactCarryA, unit: 'A', source: 'Transmission-line standing-wave maxima (REFERENCE-VALUES §9)',
+    rule: 'relay.rf-current', subject: s, value: m.rmsA, limit: r.contactCarryA, unit: 'A', source: 'line.standing-wave',
     message: `RF current up to ${m.rmsA.toFixed(2)} A RMS at SWR ${swr} against a ${r.contactCarryA} A carry rating.`,
   });
   if (r.dcSwitchedA > 0) {
     const bad = r.dcSwitchedA > r.contactSwitchA || r.dcSwitchedA > r.contactCarryA;
     f.push({
       severity: bad ? 'fail' : r.dcSwitchedA > 0.8 * r.contactSwitchA ? 'caution' : 'ok', rule: 'relay.dc-contacts', subject: s,
-      value: r.dcSwitchedA, limit: Math.min(r.contactSwitchA, r.contactCarryA), unit: 'A', source: "Relay maker's contact ratings",
+      value: r.dcSwitchedA, limit: Math.min(r.contactSwitchA, r.contactCarryA), unit: 'A', source: 'design.maker-rating',
       message: bad
         ? `The DC contacts switch ${r.dcSwitchedA} A, above their ${r.contactSwitchA} A switching / ${r.contactCarryA} A carry rating.`
         : `The DC contacts switch ${r.dcSwitchedA} A within their ${r.contactSwitchA} A switching rating.`,
@@ -101,7 +101,7 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
   const receiverPowerW = powerW * 10 ** (-r.isolationDb / 10);
   f.push({
     severity: receiverPowerW > r.receiverMaxInputW ? 'fail' : receiverPowerW > 0.5 * r.receiverMaxInputW ? 'caution' : 'ok',
-    rule: 'relay.isolation', subject: s, value: receiverPowerW, limit: r.receiverMaxInputW, unit: 'W', source: "Relay maker's isolation figure at the operating frequency",
+    rule: 'relay.isolation', subject: s, value: receiverPowerW, limit: r.receiverMaxInputW, unit: 'W', source: 'design.maker-rating',
     message: receiverPowerW > r.receiverMaxInputW
       ? `About ${(receiverPowerW * 1e3).toPrecision(3)} mW leaks to the receiver input, above its ${(r.receiverMaxInputW * 1e3).toPrecision(3)} mW maximum: add a protection diode pair or a second relay section.`
       : `About ${(receiverPowerW * 1e3).toPrecision(3)} mW reaches the receiver input (maximum ${(r.receiverMaxInputW * 1e3).toPrecision(3)} mW).`,
@@ -109,14 +109,14 @@ export function evaluateRelay(r: RelayParams, inp: RelayInput): RelayResult {
   const dotS = dotLengthS(r.wpm);
   const hotSwitchMarginS = r.txDelayS - (r.operateS + r.bounceS);
   f.push({
-    severity: hotSwitchMarginS < 0 ? 'fail' : 'ok', rule: 'relay.hot-switch', subject: s, value: r.txDelayS, limit: r.operateS + r.bounceS, unit: 's', source: "Relay maker's operate and bounce times",
+    severity: hotSwitchMarginS < 0 ? 'fail' : 'ok', rule: 'relay.hot-switch', subject: s, value: r.txDelayS, limit: r.operateS + r.bounceS, unit: 's', source: 'design.maker-rating',
     message: hotSwitchMarginS < 0
       ? `RF starts ${(r.txDelayS * 1e3).toFixed(1)} ms after the key, before the contacts settle (${((r.operateS + r.bounceS) * 1e3).toFixed(1)} ms): hot switching burns contacts and stresses the PA. Lengthen the transmit delay.`
       : `RF starts ${(r.txDelayS * 1e3).toFixed(1)} ms after the key, after the contacts settle (${((r.operateS + r.bounceS) * 1e3).toFixed(1)} ms).`,
   });
   const cycleS = r.operateS + r.releaseS;
   f.push({
-    severity: r.txDelayS > 0.5 * dotS ? 'caution' : 'ok', rule: 'relay.keying', subject: s, value: r.txDelayS, limit: 0.5 * dotS, unit: 's', source: 'ITU-R M.1677-1 dot length 1.2/WPM',
+    severity: r.txDelayS > 0.5 * dotS ? 'caution' : 'ok', rule: 'relay.keying', subject: s, value: r.txDelayS, limit: 0.5 * dotS, unit: 's', source: 'relay.keying',
     message: (r.txDelayS > 0.5 * dotS
       ? `At ${r.wpm} WPM a dot lasts ${(dotS * 1e3).toFixed(0)} ms; a ${(r.txDelayS * 1e3).toFixed(0)} ms transmit delay clips the first element noticeably.`
       : `At ${r.wpm} WPM a dot lasts ${(dotS * 1e3).toFixed(0)} ms; the transmit delay clips the first element by ${((r.txDelayS / dotS) * 100).toFixed(0)} %.`) +
@@ -144,7 +144,7 @@ export function relayCoilLoads(stage: Stage, railIds?: ReadonlySet<string>): { o
   if (!r) return { ok: true, load: null };
   const fail = (field: string, message: string): { ok: false; findings: Finding[] } => ({
     ok: false,
-    findings: [{ severity: 'fail', rule: 'relay.coil', subject: `${stage.name}: ${field}`, value: Number.isFinite(r.coilA) ? r.coilA : null, limit: null, unit: 'A', source: 'input check', message }],
+    findings: [{ severity: 'fail', rule: 'relay.coil', subject: `${stage.name}: ${field}`, value: Number.isFinite(r.coilA) ? r.coilA : null, limit: null, unit: 'A', source: 'design.input', message }],
   });
   if (!nonNegative(r.coilA)) return fail('relay coil current', 'The relay coil current must be a number, zero or more; the coil current is unknown in the budget.');
   if (r.coilA === 0) return { ok: true, load: null };

@@ -58,7 +58,7 @@ export function checkProjectInputs(p: Project): Finding[] {
           value: null,
           limit: null,
           unit: '',
-          source: 'Input definition of this field',
+          source: 'design.input',
           message: `Stored value refused: ${e.message}. Open the item and enter a valid value; nothing is computed from it until then.`,
         }),
       ),

@@ -65,7 +65,7 @@ export function junctionTemperature(powerW: number, ambientC: number, mount: Hea
   return { powerW: p, ambientC: ta, junctionC, targetC, tjMaxC, requiredThetaSaKPerW: required, needsHeatsink: freeAirJunctionC > targetC, freeAirJunctionC };
 }
 
-const SOURCE_7 = 'Thermal series path Tj = Ta + P(θjc+θcs+θsa); derating to 0.8 Tj,max (reference values §7)';
+const SOURCE_7 = 'thermal.series-path' as const;
 
 /** Findings for a thermal result: fail above Tj,max, caution above the derated target, ok otherwise. */
 export function thermalFindings(subject: string, t: ThermalResult, context: string): Finding[] {

@@ -1,6 +1,7 @@
 // Shared pieces of the pack's sections: key/value blocks, findings lists, "not computed" notes.
 import type { Finding } from '../../core/findings';
-import { sortFindings } from '../../core/findings';
+import { actionable, sortFindings } from '../../core/findings';
+import { sourceText } from '../../core/sources/registry';
 import { formatValue } from '../../core/units';
 import { withSubject } from '../../core/checklists';
 import { CAUTION, FAIL, GREY, INK, type Layout } from '../layout';
@@ -25,9 +26,12 @@ export function keyValues(l: Layout, rows: [string, string][], keyWidthPt = 170,
 
 const SEV_LABEL = { fail: 'FAIL', caution: 'CAUTION', ok: 'ok' } as const;
 
-/** Findings as a list, most severe first; `onlyProblems` hides the ok ones. */
+/**
+ * Findings a design change can clear, as a list, most severe first; `onlyProblems` hides the ok ones. Standing
+ * cautions are printed once, in the safety checklist, not in every section.
+ */
 export function findingsList(l: Layout, findings: readonly Finding[], onlyProblems = false, max = Infinity): void {
-  const list = sortFindings(findings).filter((f) => !onlyProblems || f.severity !== 'ok');
+  const list = sortFindings(actionable(findings)).filter((f) => !onlyProblems || f.severity !== 'ok');
   if (list.length === 0) {
     l.text(onlyProblems ? 'No cautions or failures.' : 'No findings.', { color: GREY });
     return;
@@ -45,7 +49,7 @@ export function findingsList(l: Layout, findings: readonly Finding[], onlyProble
     l.drawAt(SEV_LABEL[f.severity], l.leftPt, l.yPt + size * 0.28, size, true, color);
     lines.forEach((line, i) => l.drawAt(line, l.leftPt + tagW, l.yPt - i * lineH + size * 0.28, size, false, INK));
     l.yPt -= (lines.length - 1) * lineH + 2;
-    const src = f.source ? `Source: ${f.source}` : '';
+    const src = `Source: ${sourceText(f.source)}`;
     if (src) {
       const srcLines = l.wrap(src, l.contentWidthPt - tagW, 7);
       for (const s of srcLines) {

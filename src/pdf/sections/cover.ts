@@ -4,7 +4,7 @@ import { MODE_LABELS } from '../../core/model';
 import { bandOf } from '../../core/rf/bands';
 import { formatMoney } from '../../core/cost/money';
 import { rfView } from '../../core/checklists';
-import { worstSeverity } from '../../core/findings';
+import { actionable, worstSeverity } from '../../core/findings';
 import { GREY, type Layout } from '../layout';
 import type { PackOptions, PackReport } from '../report';
 import { findingsList, fv, keyValues } from './common';
@@ -54,7 +54,10 @@ export function cover(l: Layout, project: Project, report: PackReport, opts: Pac
   if (!report.rf) key.push(['RF design', 'not computed']);
   keyValues(l, key);
 
-  const sev = worstSeverity(report.findings);
-  l.heading(`Worst findings (overall: ${sev === 'ok' ? 'no problems' : sev})`, 2, 40);
-  findingsList(l, report.findings, true, 8);
+  // the verdict counts only findings a design change can clear; standing cautions are in the safety checklist
+  const counted = actionable(report.findings);
+  const sev = worstSeverity(counted);
+  l.heading(`Worst findings (overall: ${sev === 'ok' ? 'OK' : sev})`, 2, 40);
+  if (sev === 'ok') l.text('OK: no check of this design fails or needs caution. Standing cautions are in the safety checklist.');
+  else findingsList(l, counted, true, 8);
 }

@@ -3,6 +3,7 @@ import type { RfReport } from '../../core/rf/report';
 import { GREY, FAIL, CAUTION, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
 import { findingsList, fv, keyValues, notComputed } from './common';
+import { sourceText } from '../../core/sources/registry';
 
 export function rfSection(l: Layout, rf: RfReport | null): void {
   l.heading('RF design');
@@ -75,7 +76,7 @@ function harmonics(l: Layout, rf: RfReport): void {
   const h = rf.harmonics;
   l.heading('Harmonics at the antenna', 2, 100);
   if (!h) return notComputed(l, 'Harmonics');
-  l.text(`Rule: ${h.ruleTitle} — ${fv(h.requiredDb, 'dB')} below ${fv(h.fundamentalW, 'W')}${h.ruleFromMemory ? ' (from memory; check the current text)' : ''}. Source: ${h.ruleSource}`, { sizePt: 8.5, afterPt: 4 });
+  l.text(`Rule: ${h.ruleTitle} — ${fv(h.requiredDb, 'dB')} below ${fv(h.fundamentalW, 'W')}${h.ruleFromMemory ? ' (from memory; check the current text)' : ''}. Source: ${sourceText(h.ruleSource)}`, { sizePt: 8.5, afterPt: 4 });
   const rows: Row[] = h.rows.map((x) => ({
     cells: [`${x.n}`, fv(x.frequencyHz, 'Hz'), fv(x.paLevelDbc, 'dBc'), fv(x.filterAttenuationDb, 'dB'), fv(x.predictedDbc, 'dBc'), x.worstPredictedDbc !== null ? fv(x.worstPredictedDbc, 'dBc') : '—', fv(x.marginDb, 'dB')],
     color: x.severity === 'fail' ? FAIL : x.severity === 'caution' ? CAUTION : undefined,

@@ -97,10 +97,15 @@ describe('checklists for the club mains build', () => {
     expect(find(safety, /electrical codes/i).length).toBeGreaterThan(0);
   });
 
-  it('safety: every fail or caution finding becomes a line to resolve', () => {
-    const open = report.findings.filter((f) => f.severity !== 'ok').length;
+  it('safety: every actionable fail or caution becomes a line to resolve; each standing caution is listed once on its own', () => {
+    const open = report.findings.filter((f) => f.severity !== 'ok' && f.kind !== 'standing').length;
     const sec = safety.find((s) => s.id === 'safety:findings');
     expect(sec?.items.length ?? 0).toBe(open);
+    const standingMessages = new Set(report.findings.filter((f) => f.kind === 'standing').map((f) => f.message));
+    expect(standingMessages.size).toBeGreaterThan(0);
+    const standing = safety.find((s) => s.id === 'safety:standing');
+    expect(standing?.items.length).toBe(standingMessages.size);
+    for (const m of standingMessages) expect(standing!.items.filter((i) => i.text.includes(m)).length).toBe(1);
   });
 
   it('never puts a non-finite number into a line', () => {

@@ -1,0 +1,98 @@
+// The source registry: every source a finding or recommendation can carry, as a reader would look it up.
+// Findings carry a key (Finding.source: SourceKey); users only ever see the text here. Internal working notes and
+// their section numbers stay in code comments and tests. Each text is one of: a published source (title, edition
+// or year, clause, table or equation), "by analogy with ..." where a rule is borrowed from another field, "common
+// practice, no published source", "from memory, not confirmed", or a statement that the check compares the design
+// with itself or with the data the builder entered.
+
+export type SourceStatus = 'published' | 'analogy' | 'practice' | 'memory' | 'design';
+
+export interface SourceEntry {
+  /** What a reader sees, complete (title, edition, clause; or the honest status). */
+  text: string;
+  status: SourceStatus;
+}
+
+const FROM_MEMORY = 'from memory, not confirmed';
+const PRACTICE = 'common practice, no published source';
+/** OET-65 Supplement B, Table 2: a duty-factor table for RF-exposure averaging, borrowed for heating and runtime. */
+const OET65B_DUTY = 'FCC OET Bulletin 65, Supplement B (Edition 97-01, 1997), Table 2 (conversational CW duty factor 40 %)';
+const OET65 = 'FCC OET Bulletin 65, Edition 97-01 (1997), far-field power-density equations with the 2.56 ground-reflection factor';
+
+export const SOURCES = {
+  // ---------------------------------------------------------------- the design and the builder's own data
+  'design.input': { status: 'design', text: 'Allowed range of this input in this program (a plausibility limit, common practice, no published source)' },
+  'design.consistency': { status: 'design', text: 'Consistency of the design as entered (rails, windings, loads); no published source applies' },
+  'design.computation': { status: 'design', text: 'The computation could not be completed from the entered values; no published source applies' },
+  'design.maker-rating': { status: 'design', text: "The maker's rating you entered, from the part's datasheet" },
+  'design.simulation': { status: 'design', text: "Time-domain simulation of the rectifier and reservoir in this program (ideal source behind the winding's resistance, diode drop and resistance); a model, not a published source" },
+  'design.shared-winding': { status: 'design', text: 'Limitation of the simulation in this program (one winding per rail); no published source' },
+  'design.parts-list': { status: 'design', text: "Parts-list ratings you entered, against this program's supply design" },
+  'design.energy-balance': { status: 'published', text: 'Energy balance P_in = P_out / η (conservation of energy) with the module efficiency you entered' },
+  // ---------------------------------------------------------------- supply
+  'supply.transformer-current': { status: 'published', text: "Simulated secondary RMS current against the winding's rated current; a capacitor-input bridge draws about 1.8 × I_dc RMS (a transformer maker's design note, not a standard)" },
+  'supply.standard-values': { status: 'practice', text: `Simulation in this program; standard transformer voltages and VA sizes from an editable list (${PRACTICE})` },
+  'supply.inrush': { status: 'practice', text: `Toroidal transformers of a few hundred VA draw switch-on inrush of many times their rating (${PRACTICE})` },
+  'supply.tune-up-duty': { status: 'analogy', text: `Duty-factor averaging by analogy with ${OET65B_DUTY}, an RF-exposure table used here for transformer heating; carrier 100 %` },
+  'supply.half-wave': { status: 'practice', text: `Half-wave rectification puts DC through the winding (${PRACTICE})` },
+  'supply.capacitor-voltage': { status: 'practice', text: `Capacitor voltage rating above the no-load peak at high mains (the maker's rating); the 20 % margin is ${PRACTICE}` },
+  'supply.capacitor-ripple': { status: 'design', text: "Simulated capacitor RMS ripple current against the maker's ripple-current rating" },
+  'supply.reservoir-plan': { status: 'practice', text: `Simulation in this program; ripple estimate I / (2 f C) from the charge balance Q = C ΔV (textbook); voltage margin ${PRACTICE}` },
+  'supply.surge': { status: 'design', text: "Simulation in this program; switch-on surge = winding EMF peak / (winding + diode + ESR resistance), Ohm's law" },
+  'supply.fuse': { status: 'practice', text: `Rated currents from IEC 60127 (miniature fuses, rated-current series); the sizing factor is ${PRACTICE}` },
+  'supply.no-fuse': { status: 'practice', text: `A regulator's internal current limit protects its output (${PRACTICE})` },
+  'supply.bleeder': { status: 'analogy', text: 'Discharge law V(t) = V0 e^(−t/RC) (RC circuit, textbook); the target of 60 V within 5 s is by analogy with IEC 60204-1 (safety of machinery, electrical equipment), clause 6.2.4 (clause number and values from a secondary source, not read); the 2 × power rating is common practice' },
+  'supply.regulator-dropout': { status: 'published', text: 'Three-terminal regulator datasheets (78xx fixed and LM317-type adjustable): input above output by the dropout, about 2 V, even at the ripple trough' },
+  'supply.regulator-max-input': { status: 'published', text: 'Regulator datasheet maximum input voltage (35 V for 5–18 V 78xx types)' },
+  'supply.battery-end': { status: 'published', text: "Regulator dropout from three-terminal regulator datasheets, or the lowest voltage you stated for the loads, against the battery's loaded end-of-discharge voltage" },
+  'supply.battery-runtime': { status: 'analogy', text: `Charge balance Q = I t (textbook); the CW duty of 40 % is by analogy with ${OET65B_DUTY}, an RF-exposure table` },
+  'supply.battery-data': { status: 'design', text: 'The battery data you entered (capacity, full and end voltages)' },
+  'thermal.series-path': { status: 'practice', text: `Series thermal path Tj = Ta + P (θjc + θcs + θsa) (heat-transfer textbook model); derating to 0.8 Tj,max is ${PRACTICE}` },
+  'thermal.assumed-mount': { status: 'published', text: 'Assumed TO-220: θjc 5 K/W (78xx datasheet maximum), greased θcs about 1 K/W (a heatsink maker\'s interface chart), Tj,max 125 °C (datasheet)' },
+  'thermal.tune-up': { status: 'practice', text: `Series thermal path Tj = Ta + P (θjc + θcs + θsa) at a continuous carrier; heatsinks take minutes to warm up (${PRACTICE})` },
+  // ---------------------------------------------------------------- PA
+  'pa.load-line': { status: 'published', text: 'Sinusoidal load line P = (Vdd − Vsat)² / (2R), push-pull P = 2 (Vdd − Vsat)² / R_dd (textbook); class E: N. O. Sokal and A. D. Sokal, "Class E — A New Class of High-Efficiency Tuned Single-Ended Switching Power Amplifiers", IEEE J. Solid-State Circuits SC-10(3), pp. 168–176, June 1975 (R = 0.5768 (Vdd − Vsat)² / P, peak drain 3.56 Vdd)' },
+  'pa.vds': { status: 'published', text: `Peak drain voltage from the load line (2 Vdd; class E 3.56 Vdd, Sokal and Sokal, IEEE JSSC SC-10(3), 1975); the 25 % margin is ${PRACTICE}` },
+  'pa.peak-current': { status: 'memory', text: `Peak device current from the load line (voltage swing / load); class E peak switch current 2.86 × I_dc (${FROM_MEMORY})` },
+  'pa.fourier': { status: 'published', text: 'Fourier series of a square wave: fundamental 4/π of the amplitude, odd harmonic n at 1/n (textbook)' },
+  'pa.efficiency': { status: 'practice', text: `Typical drain efficiency of the amplifier class (${PRACTICE})` },
+  'pa.push-pull-e': { status: 'practice', text: `Push-pull class E modelled as two single-ended halves (an assumption of this program, ${PRACTICE})` },
+  'pa.thermal': { status: 'analogy', text: `Series thermal path Tj = Ta + P (θjc + θcs + θsa) (textbook); target 0.8 Tj,max (${PRACTICE}); average dissipation with the CW duty of 40 % by analogy with ${OET65B_DUTY}` },
+  'pa.heat': { status: 'practice', text: `Heatsinks of a keyed transmitter run hot (${PRACTICE})` },
+  // ---------------------------------------------------------------- filter, relay, keying
+  'lpf.abcd': { status: 'published', text: 'Chain-matrix (ABCD) analysis of the ladder as built, with component Q, between 50 Ω terminations (circuit theory, textbook)' },
+  'lpf.snap': { status: 'practice', text: `Nearest standard component values (IEC 60063 E-series); the tolerance for flagging a large step is ${PRACTICE}` },
+  'line.standing-wave': { status: 'published', text: 'Standing-wave maxima on a lossless line: V_max = √(P Z0 S), I_max = √(P S / Z0) (transmission-line theory, textbook)' },
+  'relay.keying': { status: 'practice', text: `PARIS word convention: one word = 50 dot units, so a dot lasts 1.2 / WPM seconds; keeping the delay under half a dot is ${PRACTICE}` },
+  // ---------------------------------------------------------------- spurious emissions
+  'spurious.us-97-307d': { status: 'published', text: '47 CFR 97.307(d) (US amateur service): spurious emissions below 30 MHz at least 43 dB below the mean power of the fundamental (transmitters installed after 1 January 2003)' },
+  'spurious.us-97-307e': { status: 'published', text: '47 CFR 97.307(d) covers below 30 MHz only; 97.307(e) sets the 30–225 MHz limits' },
+  'spurious.itu-app3': { status: 'memory', text: `ITU Radio Regulations, Appendix 3 (amateur services below 30 MHz): 43 + 10 log10(P) dB, or 50 dB, whichever is less stringent (the formula is ${FROM_MEMORY}; the Appendix 3 table was not read)` },
+  'spurious.itu-range': { status: 'memory', text: `ITU Radio Regulations, Appendix 3: the amateur row used here covers below 30 MHz only (${FROM_MEMORY})` },
+  'spurious.measure': { status: 'practice', text: `Predictions from idealised waveforms; measure the finished transmitter (${PRACTICE}); local rules and your licence govern` },
+  // ---------------------------------------------------------------- RF exposure
+  'exposure.fcc-distance': { status: 'published', text: `${OET65}, with the limits of 47 CFR 1.1310(e)(1), Table 1 (occupational/controlled and general population/uncontrolled); duty factor from ${OET65B_DUTY}` },
+  'exposure.fcc-range': { status: 'published', text: '47 CFR 1.1310(e)(1), Table 1: limits defined from 0.3 MHz to 100 GHz' },
+  'exposure.fcc-exemption': { status: 'published', text: '47 CFR 1.1307(b)(3)(i)(C), Table 1 (single RF source exemption thresholds, valid at or beyond λ/2π)' },
+  'exposure.icnirp-distance': { status: 'published', text: `ICNIRP (1998), "Guidelines for limiting exposure to time-varying electric, magnetic, and electromagnetic fields (up to 300 GHz)", Health Physics 74(4):494–522: reference levels for the general public (the levels of EU Council Recommendation 1999/519/EC) and occupational exposure, applied with the far-field method of ${OET65}` },
+  'exposure.icnirp-range': { status: 'published', text: 'ICNIRP (1998) reference levels: the electric-field levels used here are defined from 1 MHz to 400 MHz' },
+  'exposure.near-field': { status: 'published', text: `λ/2π (= 47.7 / f in MHz, metres) bounds the reactive near field (47 CFR 1.1307(b)(3)(i)(C)); the far-field equations of ${OET65} are estimates inside it` },
+  'exposure.local-rules': { status: 'practice', text: 'Local rules and your licence conditions govern RF exposure; this is a planning estimate' },
+  // ---------------------------------------------------------------- mains
+  'mains.ansi-c84-1': { status: 'memory', text: `ANSI C84.1 (electric power systems, voltage ratings, 60 Hz), Range B service voltage for 120 V nominal: 110–127 V (values ${FROM_MEMORY}; the table was not read)` },
+  'mains.iec-60038': { status: 'published', text: 'IEC 60038 (IEC standard voltages): 230 V ± 10 % at the supply terminals (207–253 V)' },
+  // ---------------------------------------------------------------- costing
+  'cost.practice': { status: 'practice', text: `Costing arithmetic from your offers (${PRACTICE})` },
+} as const satisfies Record<string, SourceEntry>;
+
+export type SourceKey = keyof typeof SOURCES;
+
+/** The text a reader sees for a source key. */
+export function sourceText(key: SourceKey): string {
+  return SOURCES[key].text;
+}
+
+/** True for a string that is a registry key (for data read from outside core, e.g. a stored report). */
+export function isSourceKey(key: string): key is SourceKey {
+  return Object.prototype.hasOwnProperty.call(SOURCES, key);
+}
