@@ -9,7 +9,7 @@ import { loadProject } from '../../src/db/projects';
 const ID = 'demo-club-30m';
 const HX = { 'HX-Request': 'true' };
 
-async function open(get: (p: string) => Promise<Response>, page: string, action: string) {
+async function open(get: (p: string) => Response | Promise<Response>, page: string, action: string) {
   return formByAction(await (await get(page)).text(), action).fields;
 }
 
