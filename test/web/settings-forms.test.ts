@@ -7,6 +7,8 @@ import { formByAction } from '../helpers/html';
 import { listProjects, loadProject } from '../../src/db/projects';
 
 const IDS = ['demo-club-30m', 'demo-portable-20m'];
+// the full page (no JavaScript) and the htmx swap
+const PAGE_AND_SWAP: Record<string, string>[] = [{}, { 'HX-Request': 'true' }];
 
 describe('project settings form', () => {
   for (const id of IDS) {
@@ -37,7 +39,7 @@ describe('project settings form', () => {
     const action = `/projects/${id}/settings`;
     const form = formByAction(await (await get(`/projects/${id}`)).text(), action);
     const before = await loadProject(database.db, id);
-    for (const headers of [{}, { 'HX-Request': 'true' }]) {
+    for (const headers of PAGE_AND_SWAP) {
       const res = await post(action, { ...form.fields, [field]: typed }, headers);
       expect(res.status).toBe(422);
       const html = await res.text();
@@ -78,7 +80,7 @@ describe('RF settings form', () => {
     const action = `/projects/${id}/rf/settings`;
     const form = formByAction(await (await get(`/projects/${id}/rf`)).text(), action);
     const before = await loadProject(database.db, id);
-    for (const headers of [{}, { 'HX-Request': 'true' }]) {
+    for (const headers of PAGE_AND_SWAP) {
       const res = await post(action, { ...form.fields, [field]: typed }, headers);
       expect(res.status).toBe(422);
       const html = await res.text();
