@@ -4,6 +4,7 @@ import { MODES, type Project, type PerMode } from './model';
 import { computeBudget, type BudgetReport, type ComputedLoad } from './budget';
 import { sortFindings, type Finding } from './findings';
 import { evaluateSupply } from './power/evaluate-supply';
+import { withSimulationMemo } from './power/rectifier-sim';
 import type { SupplyReport } from './power/report-types';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
@@ -141,6 +142,11 @@ function lowestInputV(project: Project, supply: SupplyReport | null): Record<str
 }
 
 export function evaluate(project: Project, options: EvaluateOptions = {}): EvaluationReport {
+  // a rail whose load is the same as in the pass before is not simulated again (exact-input memo, this call only)
+  return withSimulationMemo(() => evaluateOnce(project, options));
+}
+
+function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationReport {
   // The PA current depends on its rail voltage and the rail voltage on the PA current: iterate to a fixed point,
   // starting from the budget's nominal voltage. Each pass runs the supply design once, with the PA at its
   // nominal key-down trough (headroom, budget) and, for the high-mains heating corners, at its high-mains rail:

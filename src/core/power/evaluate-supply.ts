@@ -258,7 +258,21 @@ function unknownLoadRails(rails: Project['supply']['rails'], outputA: Record<str
  * Safety net: a non-finite number anywhere in the report becomes 0 and adds a 'fail' finding naming the field,
  * so a missed edge case shows up as a visible defect instead of NaN in a page. Tests assert it never fires.
  */
+/** True when every number reachable from `v` is finite (no copies, no paths: the common case is cheap). */
+function allFinite(v: unknown): boolean {
+  if (typeof v === 'number') return Number.isFinite(v);
+  if (Array.isArray(v)) {
+    for (const x of v) if (!allFinite(x)) return false;
+    return true;
+  }
+  if (v && typeof v === 'object') {
+    for (const k in v) if (!allFinite((v as Record<string, unknown>)[k])) return false;
+  }
+  return true;
+}
+
 function sanitize(report: SupplyReport): SupplyReport {
+  if (allFinite(report)) return report;
   const bad: string[] = [];
   const walk = (v: unknown, path: string): unknown => {
     if (typeof v === 'number') {

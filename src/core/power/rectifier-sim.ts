@@ -1,7 +1,10 @@
 // Steady-state time-domain simulation of a capacitor-input rectifier (bridge, full-wave centre-tap,
 // half-wave). Pure and bounded: the only state is the reservoir voltage, so the periodic steady state
-// is the fixed point of the one-cycle map P(v0) -> v(T); it is found by safeguarded secant iteration
-// over whole mains cycles (never more than maxCycles), which converges in a handful of cycles.
+// is the fixed point of the one-cycle map P(v0) -> v(T); it is found by shooting: Newton's method on
+// F(v0) = P(v0) - v0, with P'(v0) carried exactly through the cycle beside v (each step's solution is affine in its
+// start voltage), safeguarded by the bracket [0, no-load peak] (never more than maxCycles). It converges in 2-4 cycles.
+// Inside one evaluation (withSimulationMemo) results are memoised on the exact inputs, so a fixed-point pass that
+// asks again for a rail whose load did not change costs a look-up; the memo only returns what the same inputs give.
 //
 // Circuit (per conducting path): sinusoidal EMF behind the winding resistance Rw, n diodes in series
 // (each Vf + r_d, piecewise linear), reservoir C with series ESR, load = constant current I0 (regulated
@@ -149,7 +152,7 @@ function emptyStats(): CycleStats {
  * Capacitor current is piecewise linear in v_c: i_c = A - B v_c, one branch with the diodes
  * conducting and one blocking; the branch is chosen so that the diode current is >= 0 at the step end.
  */
-function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt: number, iw: number) => void): { v: number; st: CycleStats } {
+function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt: number, iw: number) => void): { v: number; dvdv0: number; st: CycleStats } {
   const h = (2 * Math.PI) / cir.omega / steps;
   const st = emptyStats();
   const k = 1 + cir.esr * cir.g;
@@ -162,6 +165,10 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
   const decayCond = Math.exp((-bCond * h) / cir.c);
   const decayBlock = Math.exp((-bBlock * h) / cir.c);
   let v = v0;
+  // d v / d v0 along the cycle: each step maps v affinely (slope = the branch's decay), a clamp at 0 has slope 0
+  let dv = 1;
+  const slopeCond = cir.c > 0 && bCond * h < 1e-9 * cir.c ? 1 - (bCond * h) / cir.c : decayCond;
+  const slopeBlock = cir.c > 0 && bBlock * h < 1e-9 * cir.c ? 1 - (bBlock * h) / cir.c : decayBlock;
   let sPrev = 0;
   let ePrev = -cir.dropV;
   for (let n = 1; n <= steps; n++) {
@@ -173,13 +180,17 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
     const a1 = (m * (e * k + cir.esr * i0)) / d - cir.g * e - i0;
     let vNew = advance(v, a0, (a1 - a0) / h, bCond, cir.c, h, decayCond);
     let id = (e * k - vNew + cir.esr * i0) / d;
+    let slope = slopeCond;
     if (!(id >= 0)) {
       const aBlock = (cir.g * cir.esr * i0) / k - i0;
       vNew = advance(v, aBlock, 0, bBlock, cir.c, h, decayBlock);
       id = 0;
+      slope = slopeBlock;
     }
+    dv *= slope;
     if (vNew < 0) {
       vNew = 0;
+      dv = 0;
       if (cir.i0 > 0) st.collapsed = true;
     }
     const vt = id > 0 ? e - cir.rt * id : (vNew - cir.esr * i0) / k;
@@ -201,7 +212,7 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
     sPrev = s;
     ePrev = e;
   }
-  return { v, st };
+  return { v, dvdv0: dv, st };
 }
 
 function invalid(note: string): RectifierSimResult {
@@ -232,7 +243,36 @@ export function switchOnSurgeA(peakEmfV: number, topology: RectifierTopology, di
  */
 export const SIM_FLOORS = { frequencyHz: 1, capacitanceF: 1e-9, secondaryVrms: 1e-3, resistanceOhm: 1e-3 } as const;
 
+/** Memo of results by exact input, live only inside withSimulationMemo (one evaluation); bounded. */
+let MEMO: Map<string, RectifierSimResult> | null = null;
+const MEMO_MAX = 4096;
+
+/**
+ * Run `fn` with simulations memoised on their exact inputs; the memo is dropped when `fn` returns, so results never
+ * depend on what was evaluated before and no memory outlives the call. Nested calls share the outer memo.
+ */
+export function withSimulationMemo<T>(fn: () => T): T {
+  if (MEMO) return fn();
+  MEMO = new Map();
+  try {
+    return fn();
+  } finally {
+    MEMO = null;
+  }
+}
+
 export function simulateRectifier(input: RectifierSimInput): RectifierSimResult {
+  if (!MEMO) return simulateUncached(input);
+  const key = JSON.stringify([input.topology, input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm, input.load, input.bleederOhm ?? null, input.stepsPerCycle ?? null, input.toleranceV ?? null, input.maxCycles ?? null, input.waveformPoints ?? null]);
+  const held = MEMO.get(key);
+  if (held) return held;
+  const result = simulateUncached(input);
+  if (MEMO.size >= MEMO_MAX) MEMO.clear();
+  MEMO.set(key, result);
+  return result;
+}
+
+function simulateUncached(input: RectifierSimInput): RectifierSimResult {
   const nums = [input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm];
   if (!nums.every((x) => Number.isFinite(x))) return invalid('Simulation not run: an input is missing or not a number.');
   const f = SIM_FLOORS;
@@ -271,7 +311,9 @@ export function simulateRectifier(input: RectifierSimInput): RectifierSimResult 
   const tol = input.toleranceV ?? Math.max(1e-7, 1e-5 * noLoadPeakV);
   const surgeA = switchOnSurgeA(peakEmfV, input.topology, input.diodeDropV, cir.rt + cir.esr);
 
-  // Safeguarded secant on F(v) = P(v) - v within the bracket [0, no-load peak].
+  // Safeguarded Newton on F(v) = P(v) - v within the bracket [0, no-load peak]; F' = P' - 1 < 0 (P' is a product of
+  // decays in [0, 1)). Source: shooting method for periodic steady states, e.g. Aprille & Trick, Proc. IEEE 60(1),
+  // 1972 (from memory); the secant fallback is kept for a flat cycle map.
   let lo = 0;
   let hi = noLoadPeakV;
   let x = noLoadPeakV * 0.95;
@@ -279,7 +321,7 @@ export function simulateRectifier(input: RectifierSimInput): RectifierSimResult 
   let fPrev = NaN;
   let cycles = 0;
   let converged = false;
-  let last: { v: number; st: CycleStats } = { v: x, st: emptyStats() };
+  let last: { v: number; dvdv0: number; st: CycleStats } = { v: x, dvdv0: 0, st: emptyStats() };
   while (cycles < maxCycles) {
     last = runCycle(cir, x, steps);
     cycles++;
@@ -290,7 +332,8 @@ export function simulateRectifier(input: RectifierSimInput): RectifierSimResult 
     }
     if (f > 0) lo = Math.max(lo, x);
     else hi = Math.min(hi, x);
-    let next = Number.isFinite(fPrev) && f !== fPrev ? x - (f * (x - xPrev)) / (f - fPrev) : last.v;
+    const fPrime = last.dvdv0 - 1;
+    let next = Number.isFinite(fPrime) && fPrime < -1e-12 ? x - f / fPrime : Number.isFinite(fPrev) && f !== fPrev ? x - (f * (x - xPrev)) / (f - fPrev) : last.v;
     if (!(next > lo && next < hi)) next = last.v > lo && last.v < hi ? last.v : 0.5 * (lo + hi);
     if (hi - lo < tol) {
       next = 0.5 * (lo + hi);
