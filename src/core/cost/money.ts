@@ -1,5 +1,6 @@
 // Money helpers. All money is integer minor units ("cents"); every currency is assumed to have two
 // minor digits (a deliberate simplification: JPY-style zero-decimal currencies still print ".00").
+import { usablePositive } from '../numeric';
 
 /**
  * Round half-up (towards +infinity at exactly .5) to a whole number.
@@ -25,6 +26,9 @@ export function convertCents(cents: number, rate: number): number {
  * Exchange rate for `currency` into the project currency, or null when none is known.
  * The project currency itself is 1 unless the table says otherwise; rates must be finite and > 0.
  */
+/** Smallest exchange rate taken as known. Common practice, no published source: 1e-9 is far below any currency in use. */
+export const MIN_EXCHANGE_RATE = 1e-9;
+
 export function rateFor(
   currency: string,
   projectCurrency: string,
@@ -33,7 +37,8 @@ export function rateFor(
   const key = currency.trim().toUpperCase();
   const table = Object.fromEntries(Object.entries(rates).map(([k, v]) => [k.trim().toUpperCase(), v]));
   const r = table[key];
-  if (r !== undefined) return Number.isFinite(r) && r > 0 ? r : null;
+  // Usable, not merely > 0: a rate of 5e-324 converted every price to 0 cents (a free part, silently)
+  if (r !== undefined) return usablePositive(r, MIN_EXCHANGE_RATE) ? r : null;
   return key === projectCurrency.trim().toUpperCase() ? 1 : null;
 }
 

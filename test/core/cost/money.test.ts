@@ -34,5 +34,7 @@ describe('half-up rounding of conversions (hand-worked)', () => {
     expect(rateFor('GBP', 'USD', {})).toBeNull();
     expect(rateFor('GBP', 'USD', { GBP: 0 })).toBeNull();
     expect(rateFor('GBP', 'USD', { GBP: Number.NaN })).toBeNull();
+    // regression: a subnormal rate passed `> 0` and converted every price to 0 cents
+    expect(rateFor('GBP', 'USD', { GBP: 5e-324 })).toBeNull();
   });
 });
