@@ -72,6 +72,7 @@ export const thermalInputsSpec = defineSpec({
 const name = text('Name', 200, true);
 const optional = (f: NumberField): NumberField => ({ ...f, optional: true });
 const MAINS_KEYS = Object.keys(mainsSpec.fields) as (keyof Mains)[];
+const NO_MAINS = Object.fromEntries(MAINS_KEYS.map((k) => [k, null]));
 
 /** The project's own top-level values as stored (the project file's top level); mains is mainsSpec or null. */
 export const projectFieldsSpec = defineSpec({
@@ -96,7 +97,9 @@ export const settingsSpec = defineSpec({
   label: 'Project settings',
   fields: {
     ...projectFieldsSpec.fields,
-    supplyKind: choice('Station supply', [['mains', 'Mains'], ['dc', 'Battery / external DC']], 'mains'),
+    supplyKind: choice('Station supply', [['mains', 'Mains'], ['dc', 'Battery / external DC']], 'mains', {
+      help: 'the mains boxes are used only with Mains',
+    }),
     // the mains boxes may stay empty for a battery / DC station (checked in refine when mains is chosen)
     ...Object.fromEntries(MAINS_KEYS.map((k) => [`mains.${k}`, optional(mainsSpec.fields[k])])),
   },
@@ -110,8 +113,8 @@ export const settingsSpec = defineSpec({
     return errors;
   },
   view: {
-    // a battery / DC station (mains null) shows the usual mains values in the boxes, ready if mains is chosen
-    from: (p) => ({ ...p, supplyKind: p.mains === null ? 'dc' : 'mains', mains: p.mains === null ? MAINS_PRESETS['230-50'] : p.mains }),
+    // a battery / DC station (mains null) shows empty mains boxes: figures there would read as a mains supply
+    from: (p) => ({ ...p, supplyKind: p.mains === null ? 'dc' : 'mains', mains: p.mains === null ? NO_MAINS : p.mains }),
     to: (v) => {
       const { supplyKind, ...rest } = v;
       return { ...rest, mains: supplyKind === 'mains' ? v.mains : null };

@@ -40,9 +40,11 @@ describe('round trips of the demo projects', () => {
     });
   }
 
-  it('the battery demo has no mains: the form says "dc" and saving keeps mains null', () => {
+  it('the battery demo has no mains: the form says "dc", shows empty mains boxes, and saving keeps mains null', () => {
     const values = formValues(settingsSpec, portable20m);
     expect(values.supplyKind).toBe('dc');
+    // empty boxes: figures there would read as a mains supply the station does not have
+    expect([values.mainsV, values.mainsHz, values.mainsLow, values.mainsHigh]).toEqual(['', '', '', '']);
     expect(parseForm(settingsSpec, values)).toMatchObject({ ok: true, value: { mains: null } });
   });
 });
