@@ -2,9 +2,11 @@
 // Format: { "format": "rigwright-project", "formatVersion": 1, "exportedAt": ISO date, "project": {...} }
 // with every quantity in SI units (V, A, W, Ω, F, H, Hz, s, °C, fractions 0..1) and money in integer cents.
 import { z } from 'zod';
-import type { LpfParams, Mains, PaParams, Project, RelayParams, RfSettings } from '../core/model';
-import { lpfSpec, paSpec, relaySpec } from '../core/spec';
+import type { BomLine, Costing, LpfParams, Mains, Part, PaParams, Project, Rail, RelayParams, RfSettings } from '../core/model';
+import { bomLineSpec, costingSpec, lpfSpec, offerSpec, paSpec, partSpec, relaySpec, supplierSpec } from '../core/spec';
 import { mainsSpec, projectFieldsSpec } from '../core/spec/settings';
+import { primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec/supply';
+import { batterySpec, rectifiedSpec, regulatedSpec } from '../core/spec/supply-rails';
 import { rfSettingsSpec } from '../core/spec/rf-settings';
 import { specFileSchema, specShape } from './spec-schema';
 import { MODES, STAGE_KINDS } from '../core/model';
@@ -20,72 +22,23 @@ const name = z
   .min(1, 'must not be empty')
   .max(200)
   .regex(/^[^\u0000-\u001f\u007f\u2028\u2029]*$/, 'must be one line of text without control characters');
-const pos = (max: number) => z.number().finite().positive().max(max);
 const nonneg = (max: number) => z.number().finite().min(0).max(max);
 // limits match the web forms, so an imported project can be edited and saved back unchanged
 const perMode = z.object({ receive: nonneg(100), keyUp: nonneg(100), keyDown: nonneg(100) });
 
-const mountOf = (tjMinC: number) =>
-  z.object({
-    thetaJcKPerW: nonneg(100),
-    thetaCsKPerW: nonneg(100),
-    thetaSaKPerW: pos(1000).nullable(),
-    tjMaxC: z.number().finite().min(tjMinC).max(250),
+// the supply's objects: the same specs as the supply page's forms and core's supply check (src/core/spec/supply*.ts)
+const railKinds = { rectified: rectifiedSpec, regulated: regulatedSpec, battery: batterySpec } as const;
+const rail = z
+  .object({ kind: z.enum(['rectified', 'regulated', 'battery']), id })
+  .loose()
+  .transform((r, ctx): Rail => {
+    const res = specFileSchema<object>(railKinds[r.kind]).safeParse(r);
+    if (res.success) return { ...res.data, kind: r.kind, id: r.id } as Rail;
+    for (const issue of res.error.issues) ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
+    return z.NEVER;
   });
-const mount = mountOf(25);
-
-const setting = z.discriminatedUnion('method', [
-  z.object({ method: z.literal('fixed'), nominalV: pos(1000) }),
-  z.object({ method: z.literal('adjustable'), vrefV: pos(10), adjustA: nonneg(0.01), r1Ohm: pos(1e7), r2Ohm: nonneg(1e7) }),
-  z.object({ method: z.literal('raised-diodes'), nominalV: pos(1000), diodes: z.number().int().min(1).max(10), diodeDropV: pos(2) }),
-  z.object({ method: z.literal('raised-resistor'), nominalV: pos(1000), r1Ohm: pos(1e7), r2Ohm: nonneg(1e7) }),
-]);
-
-const rail = z.discriminatedUnion('kind', [
-  z.object({
-    kind: z.literal('rectified'),
-    id,
-    name,
-    windingId: id,
-    topology: z.enum(['bridge', 'centre-tap', 'half-wave']),
-    diodeDropV: nonneg(5),
-    diodeResistanceOhm: nonneg(100),
-    reservoirF: pos(10),
-    esrOhm: nonneg(100),
-    bleederOhm: pos(1e9).nullable(),
-    capacitorRatedV: pos(10_000).nullable(),
-    capacitorRippleA: pos(1000).nullable(),
-    ripplePpTargetV: pos(1000).nullable(),
-    marginV: nonneg(100),
-    fuseA: pos(63).nullable(),
-  }),
-  z.object({
-    kind: z.literal('regulated'),
-    id,
-    name,
-    parentId: id,
-    regulator: z.enum(['linear', 'ldo', 'switching']),
-    setting,
-    dropoutV: nonneg(50),
-    quiescentA: nonneg(1),
-    efficiency: z.number().finite().gt(0).max(1).nullable(),
-    maxOutputA: pos(100).nullable(),
-    maxInputV: pos(1000).nullable(),
-    mount: mountOf(50).nullable(),
-  }),
-  z.object({
-    kind: z.literal('battery'),
-    id,
-    name,
-    chemistry: name.pipe(z.string().max(60)),
-    nominalV: pos(1000),
-    fullV: pos(1000),
-    endV: pos(1000),
-    capacityAh: pos(10_000),
-    usableFraction: z.number().finite().gt(0).max(1),
-    internalOhm: nonneg(100),
-  }),
-]);
+const winding = z.object({ id, ...specShape(windingSpec) });
+const transformer = z.object({ id, ...specShape(transformerSpec), windings: z.array(winding).max(20) });
 
 // stage kinds' data: the same specs as the forms and core's checks (src/core/spec)
 const pa = specFileSchema<PaParams>(paSpec);
@@ -109,33 +62,13 @@ const stage = z.object({
     if (s[key] !== undefined && s.kind !== own[key]) ctx.addIssue({ code: 'custom', path: [key], message: `only a stage of kind "${own[key]}" has ${key} data; this stage is "${s.kind}"` });
 });
 
-const money = z.number().int().min(0).max(1e12);
-const currency = z.string().regex(/^[A-Z]{3}$/, 'must be a three-letter currency code such as USD');
-
-const part = z.object({
-  id,
-  description: name,
-  category: name.pipe(z.string().max(60)),
-  ratings: z.record(z.string().max(80), z.union([z.number().finite(), z.string().max(200)])),
-  offers: z
-    .array(
-      z.object({
-        id,
-        supplier: name.pipe(z.string().max(120)),
-        sku: z.string().max(120),
-        currency,
-        breaks: z
-          .array(z.object({ minQty: z.number().int().min(1), unitPriceCents: money }))
-          .min(1)
-          .max(50)
-          .refine((b) => new Set(b.map((x) => x.minQty)).size === b.length, 'a quantity is given twice'),
-        minOrder: z.number().int().min(1).max(1e6),
-        orderMultiple: z.number().int().min(1).max(1e6),
-        stockNote: z.string().max(200),
-      }),
-    )
-    .max(50),
-});
+// parts, offers, suppliers, parts-list lines and costing settings: the same specs as the catalog and parts-list forms
+// (a spec's shape checks values, not TypeScript types: the model types are stated here)
+const offer = z.object({ id, ...specShape(offerSpec) });
+const part = z.object({ id, ...specShape(partSpec), offers: z.array(offer).max(50) }) as unknown as z.ZodType<Part>;
+const supplier = z.object(specShape(supplierSpec));
+const bomLine = z.object({ id, ...specShape(bomLineSpec) }) as unknown as z.ZodType<BomLine>;
+const costing = z.object({ ...specShape(costingSpec), suppliers: z.array(supplier).max(200) }) as unknown as z.ZodType<Costing>;
 
 // the project's own values, its mains and its RF settings: the same specs as the settings forms and core's checks
 const projectFields = specShape(projectFieldsSpec);
@@ -148,33 +81,15 @@ export const projectSchema = z.object({
   mains: mains.nullable(),
   version: z.number().int().min(0).optional().default(1),
   supply: z.object({
-    transformers: z
-      .array(
-        z.object({
-          id,
-          name,
-          construction: z.enum(['laminated', 'toroidal']),
-          windings: z.array(
-            z.object({ id, name, ratedVrms: pos(1000), ratedA: pos(100), regulationFraction: z.number().finite().min(0).max(1), resistanceOhm: pos(1000).nullable() }),
-          ),
-        }),
-      )
-      .max(10),
+    transformers: z.array(transformer).max(10),
     rails: z.array(rail).max(50),
-    primaryFuseA: pos(63).nullable(),
+    ...specShape(primaryFuseSpec),
   }),
   stages: z.array(stage).max(100),
   rf,
   parts: z.array(part).max(5000),
-  bom: z
-    .array(z.object({ id, stageId: id.nullable(), partId: id, qtyPerRig: pos(100_000), refs: z.string().max(300), notes: z.string().max(500) }))
-    .max(5000),
-  costing: z.object({
-    attritionFraction: z.number().finite().min(0).max(1),
-    sparesPerLine: z.number().int().min(0).max(1000),
-    exchangeRates: z.record(currency, z.number().finite().positive()),
-    suppliers: z.array(z.object({ name: name.pipe(z.string().max(120)), shippingCents: money, currency })).max(200),
-  }),
+  bom: z.array(bomLine).max(5000),
+  costing,
 });
 
 export const projectFileSchema = z.object({

@@ -10,6 +10,8 @@ import { offerSpec, partSpec, supplierSpec } from '../../../src/core/spec/parts'
 import { bomLineSpec } from '../../../src/core/spec/parts-list';
 import { costingSpec } from '../../../src/core/spec/costing';
 import { parseBreaks, parseRates, parseRatings, ratingsText } from '../../../src/core/spec/parts-text';
+import { parseProjectFile, toProjectFile } from '../../../src/io/project-file';
+import type { Project } from '../../../src/core/model';
 
 const DEMOS = [club30m, portable20m];
 
@@ -137,5 +139,40 @@ describe('parts-list line and costing limits', () => {
     if (!spares.ok) expect(spares.errors.spares).toContain('must be a whole number');
     // the one limit for spares is 1000 (the form allowed 10 000, the project file 1000)
     expect(validate(costingSpec, { attritionFraction: 0, sparesPerLine: 1001, exchangeRates: {} })[0].field).toBe('sparesPerLine');
+  });
+});
+
+describe('the project file holds the catalog to the same specs', () => {
+  const file = (edit: (p: Project) => void) => {
+    const p = structuredClone(club30m);
+    edit(p);
+    return parseProjectFile(toProjectFile(p, '2026-01-01T00:00:00Z'));
+  };
+
+  it('both demo projects come back with the same parts, lines and costing', () => {
+    for (const p of DEMOS) {
+      const r = parseProjectFile(toProjectFile(p, '2026-01-01T00:00:00Z'));
+      expect(r.ok, r.ok ? '' : r.errors.join('\n')).toBe(true);
+      if (r.ok) expect([r.project.parts, r.project.bom, r.project.costing]).toEqual([p.parts, p.bom, p.costing]);
+    }
+  });
+
+  it('refuses a unit price that is not whole cents, saying where', () => {
+    const r = file((p) => (p.parts[0].offers[0].breaks = [{ minQty: 1, unitPriceCents: 9.5 }]));
+    expect(r).toEqual({ ok: false, errors: ['project.parts[0].offers[0].breaks: Price breaks: break 1 (from 1): the unit price must be a whole number of cents'] });
+  });
+
+  it('takes what a CSV import makes: an offer without prices and a part without a category', () => {
+    const r = file((p) => {
+      p.parts[0].offers[0].breaks = [];
+      p.parts[0].category = '';
+    });
+    expect(r.ok, r.ok ? '' : r.errors.join('\n')).toBe(true);
+  });
+
+  it('uses one limit for a description (300 characters) and for spares (1000)', () => {
+    expect(file((p) => (p.parts[0].description = 'd'.repeat(300))).ok).toBe(true);
+    expect(file((p) => (p.parts[0].description = 'd'.repeat(301)))).toMatchObject({ ok: false, errors: [expect.stringContaining('project.parts[0].description')] });
+    expect(file((p) => (p.costing.sparesPerLine = 1001))).toMatchObject({ ok: false, errors: [expect.stringContaining('project.costing.sparesPerLine')] });
   });
 });
