@@ -6,6 +6,7 @@ import { actionable, sortFindings, standingCautions } from '../findings';
 import { sourceText } from '../sources/registry';
 import { step, caution, measured, fmt } from './items';
 import { rfView } from './rf-view';
+import { quotient } from '../numeric';
 
 export const SAFETY_PREAMBLE =
   'This list is a planning aid, not a certification. Local electrical codes, your licence conditions and the practice of a licensed electrician or a qualified person take precedence over anything here.';
@@ -86,7 +87,8 @@ function batteryItems(project: Project, report: ChecklistReport): ChecklistItem[
     if (r && r.kind === 'battery' && r.fuse.ratedA !== null) items.push(measured(`Fuse the positive lead at the battery terminal: ${fuseKind(r.fuse.characteristic)} {v}.`, r.fuse.ratedA, 'A', 'supply: battery fuse', 'caution'));
     else items.push(caution('Fuse the positive lead at the battery terminal (fuse value not computed).'));
     // Ohm's law: short-circuit current limited by the internal resistance only
-    const shortA = rail.internalOhm > 0 ? rail.fullV / rail.internalOhm : null;
+    // null (shown as not known) below 1 µΩ: a subnormal resistance passed `> 0` and gave an infinite current
+    const shortA = quotient(rail.fullV, rail.internalOhm, 1e-6);
     items.push(measured(`A dead short across ${rail.name} can draw about {v}: insulate the terminals and carry the battery with its leads covered.`, shortA, 'A', 'project: full voltage / internal resistance', 'caution'));
     items.push(caution(`Charge the ${rail.chemistry} battery only with a charger made for that chemistry, on a non-flammable surface, and never unattended; do not charge a swollen or damaged pack.`));
   }

@@ -2,6 +2,7 @@
 import type { Finding } from '../findings';
 import type { BleederReport } from './report-types';
 import { E12_STEPS, prevInSeries } from './standard-values';
+import { quotient, usablePositive } from '../numeric';
 
 /** Residual-voltage threshold (V d.c.). Source: IEC 60204-1 residual voltage <= 60 V within 5 s (ref §10 [C2]); ES1 60 V d.c. in IEC 62368-1 (ref §10 [M]). */
 export const SAFE_DC_V = 60;
@@ -9,6 +10,9 @@ export const SAFE_DC_V = 60;
 export const SAFE_TIME_S = 5;
 /** For rails already below 60 V: time constant we suggest so the rail is low within a minute. Common practice, no published source. */
 export const LOW_VOLTAGE_TAU_S = 22;
+
+/** Smallest capacitance a bleeder is sized for, F. Common practice, no published source: below 1 nF nothing to bleed. */
+const MIN_RESERVOIR_F = 1e-9;
 
 const SOURCE = 'supply.bleeder' as const;
 
@@ -21,7 +25,8 @@ export function dischargeTimeS(resistanceOhm: number, capacitanceF: number, star
 
 /** Largest resistance that reaches safeV within timeS (Ω): R = t / (C ln(V0/Vsafe)). Same source as above. */
 export function maxBleederOhm(capacitanceF: number, startV: number, safeV: number, timeS: number): number | null {
-  if (!(capacitanceF > 0) || !(startV > safeV) || !(safeV > 0) || !(timeS > 0)) return null;
+  // Usable capacitance (1 nF), not merely > 0: a subnormal C made R = t / (C ln) infinite
+  if (!usablePositive(capacitanceF, MIN_RESERVOIR_F) || !(startV > safeV) || !(safeV > 0) || !(timeS > 0)) return null;
   const r = timeS / (capacitanceF * Math.log(startV / safeV));
   return Number.isFinite(r) ? r : null;
 }
@@ -41,7 +46,7 @@ export function bleederReport(capacitanceF: number, startV: number, esrOhm: numb
     reasoning = `The reservoir charges to ${v0.toFixed(1)} V (no load, high mains). To fall below ${SAFE_DC_V} V within ${SAFE_TIME_S} s the bleeder must be at most ${rMax ? (rMax / 1000).toFixed(2) + ' kΩ' : '?'}; the next lower E12 value is suggested.`;
   } else {
     // Common practice, no published source: a time constant of ~22 s leaves a low-voltage rail near zero within a couple of minutes
-    const r = c > 0 ? LOW_VOLTAGE_TAU_S / c : null;
+    const r = quotient(LOW_VOLTAGE_TAU_S, c, MIN_RESERVOIR_F);
     suggestedOhm = r ? prevInSeries(E12_STEPS, r) : null;
     reasoning = `At ${v0.toFixed(1)} V the rail is already below the ${SAFE_DC_V} V d.c. threshold, but it stores ${storedJ.toFixed(1)} J and can drive about ${shortCircuitA.toFixed(0)} A into a short (a dropped tool sparks and burns). A bleeder with a time constant of about ${LOW_VOLTAGE_TAU_S} s is suggested.`;
   }

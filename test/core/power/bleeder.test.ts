@@ -27,6 +27,12 @@ describe('ref §10', () => {
     expect(f.severity).toBe('ok');
     expect(f.message).toMatch(/below the 60 V/);
   });
+  it('a subnormal reservoir (5e-324 F) gets no bleeder value, not one sized from an infinite quotient (regression)', () => {
+    expect(maxBleederOhm(5e-324, 350, 60, 5)).toBeNull();
+    const b = bleederReport(5e-324, 25.5, 0.02, null);
+    expect(b.suggestedOhm).toBeNull();
+    expect(b.suggestedW).toBeNull();
+  });
   it('no bleeder on a high-voltage rail is a fail', () => {
     expect(bleederFindings('HV', bleederReport(220e-6, 350, 0.1, null))[0].severity).toBe('fail');
   });
