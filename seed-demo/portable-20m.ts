@@ -20,7 +20,7 @@ export const portable20m: Project = {
   supply: {
     transformers: [],
     rails: [
-      { kind: 'battery', id: 'rail-bat', name: '12.8 V battery (4-cell LiFePO4, 6 Ah)', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10.4, capacityAh: 6, usableFraction: 0.9, internalOhm: 0.04 },
+      { kind: 'battery', id: 'rail-bat', name: '12.8 V battery (4-cell LiFePO4, 6 Ah)', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10.4, capacityAh: 6, usableFraction: 0.9, internalOhm: 0.04, minimumV: null },
       {
         kind: 'regulated',
         id: 'rail-9v',

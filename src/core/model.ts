@@ -54,6 +54,7 @@ export interface RectifiedRail {
   ripplePpTargetV: number | null; // designer's ripple target, null = none
   marginV: number; // extra headroom the designer wants above regulator needs
   fuseA: number | null; // fitted rail fuse, null = recommend one
+  minimumV: number | null; // lowest voltage its direct loads need, null = not stated
 }
 
 export type RegulatorSetting =
@@ -95,6 +96,7 @@ export interface BatteryRail {
   capacityAh: number;
   usableFraction: number; // fraction of capacity usable before endV
   internalOhm: number;
+  minimumV: number | null; // lowest voltage its direct loads need, null = not stated
 }
 
 export type Rail = RectifiedRail | RegulatedRail | BatteryRail;

@@ -5,6 +5,7 @@ import { eq, asc, inArray, and, lte } from 'drizzle-orm';
 import type { Database, Tx, Db } from './client';
 import * as t from './schema';
 import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing } from '../core/model';
+import { withRailDefaults } from '../core/spec/supply-rails';
 
 import type { ProjectSummary } from '../core/project-summary';
 
@@ -78,7 +79,8 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
   }));
   // JSON columns are not trusted: a non-object reads as no data, and evaluate() checks every field against its spec
   // (src/core/spec/project-check.ts), so a bad stored value is a fail finding naming it, never replaced silently.
-  const rails = railRows.map((r) => ({ ...jsonObject(r.params), id: r.id, name: r.name, kind: r.kind }) as Rail);
+  // rows written before a rail field existed read it as not stated (withRailDefaults)
+  const rails = railRows.map((r) => withRailDefaults({ ...jsonObject(r.params), id: r.id, name: r.name, kind: r.kind } as Rail));
   const stages: Stage[] = stageRows.map((s) => ({
     id: s.id,
     kind: s.kind as Stage['kind'],

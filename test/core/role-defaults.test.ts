@@ -75,7 +75,7 @@ describe('signal rail choice', () => {
     kind: 'regulated', id, name: `${v} V`, parentId, regulator: 'linear', setting: { method: 'fixed', nominalV: v }, dropoutV: 2, quiescentA: 0.005,
     efficiency: null, maxOutputA: null, maxInputV: null, mount: null,
   });
-  const bat: Rail = { kind: 'battery', id: 'bat', name: '12 V', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10, capacityAh: 7, usableFraction: 0.8, internalOhm: 0.05 };
+  const bat: Rail = { kind: 'battery', id: 'bat', name: '12 V', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10, capacityAh: 7, usableFraction: 0.8, internalOhm: 0.05, minimumV: null };
   const withRails = (rails: Rail[]): Project => ({ ...newProject('p', 'P', 7.03e6, 5, null), supply: { transformers: [], rails, primaryFuseA: null } });
   it('the regulated rail with the lowest voltage of at least 5 V (a 3.3 V logic rail is too low for a relay coil)', () => {
     expect(relayCoilDefaultRailId(withRails([bat, reg('r12', 12), reg('r33', 3.3), reg('r5', 5)]))).toBe('r5');

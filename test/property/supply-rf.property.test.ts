@@ -58,7 +58,7 @@ describe('supply models', () => {
     const winding: Winding = { id: 'w', name: 'secondary', ratedVrms: 18, ratedA: 2, regulationFraction: 0.1, resistanceOhm: null };
     const rail = (topology: RectifiedRail['topology'], reservoirF: number): RectifiedRail => ({
       kind: 'rectified', id: 'r', name: 'rail', windingId: 'w', topology, diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF, esrOhm: 0.05,
-      bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0.5, fuseA: null,
+      bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0.5, fuseA: null, minimumV: null,
     });
     fc.assert(
       fc.property(

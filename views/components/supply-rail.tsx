@@ -1,141 +1,124 @@
-// One rail on the supply page: a collapsible card whose form fits the rail's kind.
-import type { FC } from 'hono/jsx';
-import type { BatteryRail, Project, Rail, RectifiedRail, RegulatedRail } from '../../src/core/model';
+// One rail on the supply page: a collapsible card whose form fits the rail's kind. Fields come from the rail specs.
+import type { Child, FC } from 'hono/jsx';
+import type { Project, Rail } from '../../src/core/model';
 import { formatValue } from '../../src/core/units';
-import { inputText } from '../../src/core/spec/input-text';
-import { FormErrors, type FieldState, Field, Select } from './fields';
+import { formValues } from '../../src/core/spec/derive';
+import { RAIL_SPECS, batterySpec, rectifiedSpec, regulatedSpec } from '../../src/core/spec/supply-rails';
+import { FormErrors, type FieldState } from './fields';
+import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
-import { Version, hx, pctText } from './supply-transformer';
+import { Version, hx } from './supply-transformer';
 
 const KIND_LABEL = { rectified: 'Rectified', regulated: 'Regulated', battery: 'Battery' } as const;
-const TOPOLOGY: [string, string][] = [['bridge', 'Bridge (4 diodes)'], ['centre-tap', 'Centre-tap (2 diodes)'], ['half-wave', 'Half-wave (1 diode)']];
-const REGULATORS: [string, string][] = [['linear', 'Linear (3-terminal)'], ['ldo', 'Low-dropout linear'], ['switching', 'Switching module']];
-const METHODS: [string, string][] = [['fixed', 'Fixed output'], ['adjustable', 'Adjustable: Vref, R1, R2'], ['raised-diodes', 'Fixed, raised by diodes'], ['raised-resistor', 'Fixed, raised by R1/R2']];
 
-export function rectifiedValues(r: RectifiedRail): Record<string, string> {
-  return {
-    name: r.name, windingId: r.windingId, topology: r.topology,
-    diodeDrop: inputText(r.diodeDropV, 'V'), diodeR: inputText(r.diodeResistanceOhm, 'Ω'),
-    reservoir: inputText(r.reservoirF, 'F'), esr: inputText(r.esrOhm, 'Ω'), bleeder: inputText(r.bleederOhm, 'Ω'),
-    capV: inputText(r.capacitorRatedV, 'V'), capRipple: inputText(r.capacitorRippleA, 'A'),
-    rippleTarget: inputText(r.ripplePpTargetV, 'V'), margin: inputText(r.marginV, 'V'), fuse: inputText(r.fuseA, 'A'),
-  };
-}
-
-export function regulatedValues(r: RegulatedRail): Record<string, string> {
-  const s = r.setting;
-  const v: Record<string, string> = {
-    name: r.name, parentId: r.parentId, regulator: r.regulator, method: s.method,
-    nominalV: 'nominalV' in s ? inputText(s.nominalV, 'V') : '',
-    vref: s.method === 'adjustable' ? inputText(s.vrefV, 'V') : '',
-    iadj: s.method === 'adjustable' ? inputText(s.adjustA, 'A') : '',
-    r1: 'r1Ohm' in s ? inputText(s.r1Ohm, 'Ω') : '', r2: 'r2Ohm' in s ? inputText(s.r2Ohm, 'Ω') : '',
-    diodes: s.method === 'raised-diodes' ? String(s.diodes) : '', raiseDrop: s.method === 'raised-diodes' ? inputText(s.diodeDropV, 'V') : '',
-    dropout: inputText(r.dropoutV, 'V'), quiescent: inputText(r.quiescentA, 'A'),
-    efficiency: r.efficiency === null ? '' : pctText(r.efficiency),
-    maxOut: inputText(r.maxOutputA, 'A'), maxIn: inputText(r.maxInputV, 'V'),
-    thetaJc: inputText(r.mount?.thetaJcKPerW, 'K/W'), thetaCs: inputText(r.mount?.thetaCsKPerW, 'K/W'),
-    thetaSa: inputText(r.mount?.thetaSaKPerW, 'K/W'), tjMax: inputText(r.mount?.tjMaxC, '°C'),
-  };
-  return v;
-}
-
-export function batteryValues(r: BatteryRail): Record<string, string> {
-  return {
-    name: r.name, chemistry: r.chemistry, nominalV: inputText(r.nominalV, 'V'), fullV: inputText(r.fullV, 'V'),
-    endV: inputText(r.endV, 'V'), capacity: inputText(r.capacityAh, 'Ah'), usable: pctText(r.usableFraction), internal: inputText(r.internalOhm, 'Ω'),
-  };
-}
-
-export function railValues(r: Rail): Record<string, string> {
-  return r.kind === 'rectified' ? rectifiedValues(r) : r.kind === 'regulated' ? regulatedValues(r) : batteryValues(r);
-}
+/** The form text of a stored rail. */
+export const railValues = (r: Rail): Record<string, string> => formValues(RAIL_SPECS[r.kind], r);
 
 /** One line under the rail name, so a closed card still says what the rail is. */
 function summary(p: Project, r: Rail): string {
   if (r.kind === 'rectified') {
     const w = p.supply.transformers.flatMap((t) => t.windings).find((x) => x.id === r.windingId);
-    return `${r.topology} from ${w ? `${w.name} (${formatValue(w.ratedVrms, 'V')} rms)` : 'a missing winding'}, ${formatValue(r.reservoirF, 'F')} reservoir`;
+    return `${r.topology} from ${w ? `${w.name} (${formatValue(w.ratedVrms, 'V')} rms)` : 'a missing winding'}, ${formatValue(r.reservoirF, 'F')} reservoir${needs(r.minimumV)}`;
   }
   if (r.kind === 'regulated') {
     const parent = p.supply.rails.find((x) => x.id === r.parentId);
     return `${r.regulator} regulator (${r.setting.method}) fed from ${parent ? parent.name : 'a missing rail'}`;
   }
-  return `${r.chemistry} ${formatValue(r.nominalV, 'V')}, ${formatValue(r.capacityAh, 'Ah')}`;
+  return `${r.chemistry} ${formatValue(r.nominalV, 'V')}, ${formatValue(r.capacityAh, 'Ah')}${needs(r.minimumV)}`;
 }
+
+const needs = (v: number | null | undefined) => (typeof v === 'number' ? `; its loads need ${formatValue(v, 'V')} or more` : '');
 
 type FormProps = { project: Project; rail: Rail; state: FieldState; idp: string };
 
 const RectifiedFields: FC<FormProps> = ({ project, state, idp }) => {
   const windings = project.supply.transformers.flatMap((t) => t.windings.map((w): [string, string] => [w.id, `${t.name} · ${w.name}`]));
+  const f = (k: string, size = 6, hint?: string) => <SpecField spec={rectifiedSpec} k={k} state={state} idp={idp} size={size} hint={hint} />;
   return (
     <>
       <div class="row">
-        <Select idp={idp} name="windingId" label="Winding" state={state} options={windings} />
-        <Select idp={idp} name="topology" label="Rectifier" state={state} options={TOPOLOGY} />
-        <Field idp={idp} name="diodeDrop" label="Diode drop" unit="V" state={state} size={6} />
-        <Field idp={idp} name="diodeR" label="Diode resistance" unit="Ω" state={state} size={6} />
+        <SpecField spec={rectifiedSpec} k="windingId" state={state} idp={idp} options={windings} />
+        {f('topology')}
+        {f('diodeDropV')}
+        {f('diodeResistanceOhm')}
       </div>
       <div class="row">
-        <Field idp={idp} name="reservoir" label="Reservoir" unit="F" state={state} size={8} hint="e.g. 4700u" />
-        <Field idp={idp} name="esr" label="ESR" unit="Ω" state={state} size={6} />
-        <Field idp={idp} name="capV" label="Capacitor rating" unit="V" state={state} size={6} hint="empty = not chosen" />
-        <Field idp={idp} name="capRipple" label="Ripple rating" unit="A rms" state={state} size={6} hint="empty = not chosen" />
-        <Field idp={idp} name="bleeder" label="Bleeder" unit="Ω" state={state} size={7} hint="empty = none fitted" />
+        {f('reservoirF', 8)}
+        {f('esrOhm')}
+        {f('capacitorRatedV')}
+        {f('capacitorRippleA')}
+        {f('bleederOhm', 7)}
       </div>
       <div class="row">
-        <Field idp={idp} name="rippleTarget" label="Ripple target" unit="V p-p" state={state} size={6} hint="empty = none" />
-        <Field idp={idp} name="margin" label="Headroom margin" unit="V" state={state} size={6} />
-        <Field idp={idp} name="fuse" label="Fitted rail fuse" unit="A" state={state} size={6} hint="empty = recommend one" />
+        {f('ripplePpTargetV')}
+        {f('marginV')}
+        {f('fuseA')}
+        {f('minimumV', 6)}
       </div>
     </>
   );
 };
 
-const RegulatedFields: FC<FormProps & { parents: [string, string][] }> = ({ state, idp, parents }) => (
-  <>
-    <div class="row">
-      <Select idp={idp} name="parentId" label="Fed from" state={state} options={parents} />
-      <Select idp={idp} name="regulator" label="Regulator" state={state} options={REGULATORS} />
-      <Select idp={idp} name="method" label="Output setting" state={state} options={METHODS} />
-    </div>
-    <div class="row method-fields">
-      <Field idp={idp} name="nominalV" label="Regulator voltage" unit="V" state={state} size={6} cls="m m-fixed m-raised-diodes m-raised-resistor" />
-      <Field idp={idp} name="vref" label="Vref" unit="V" state={state} size={6} cls="m m-adjustable" />
-      <Field idp={idp} name="iadj" label="Iadj" unit="A" state={state} size={6} cls="m m-adjustable" hint="empty = 0" />
-      <Field idp={idp} name="r1" label="R1 (output to adj)" unit="Ω" state={state} size={7} cls="m m-adjustable m-raised-resistor" />
-      <Field idp={idp} name="r2" label="R2 (adj to ground)" unit="Ω" state={state} size={7} cls="m m-adjustable m-raised-resistor" />
-      <Field idp={idp} name="diodes" label="Diodes in the ground leg" state={state} size={4} cls="m m-raised-diodes" />
-      <Field idp={idp} name="raiseDrop" label="Drop per diode" unit="V" state={state} size={6} cls="m m-raised-diodes" />
-    </div>
-    <div class="row">
-      <Field idp={idp} name="dropout" label="Dropout" unit="V" state={state} size={6} />
-      <Field idp={idp} name="quiescent" label="Quiescent" unit="A" state={state} size={7} />
-      <Field idp={idp} name="efficiency" label="Efficiency (switching)" unit="%" state={state} size={5} hint="at lowest input" />
-      <Field idp={idp} name="maxOut" label="Max output" unit="A" state={state} size={6} hint="empty = unknown" />
-      <Field idp={idp} name="maxIn" label="Max input" unit="V" state={state} size={6} hint="empty = unknown" />
-    </div>
-    <div class="row">
-      <Field idp={idp} name="thetaJc" label="θjc" unit="°C/W" state={state} size={5} />
-      <Field idp={idp} name="thetaCs" label="θcs" unit="°C/W" state={state} size={5} />
-      <Field idp={idp} name="thetaSa" label="Heatsink θsa" unit="°C/W" state={state} size={5} hint="empty = compute needed" />
-      <Field idp={idp} name="tjMax" label="Tj max" unit="°C" state={state} size={5} />
-      <span class="hint">Leave all four heatsink fields empty if there is no heatsink data.</span>
-    </div>
-  </>
+/** A field shown only for some output-setting methods (the page's CSS hides the others). */
+const ForMethods: FC<{ methods: string; children?: Child }> = ({ methods, children }) => (
+  <div class={`m ${methods.split(' ').map((x) => `m-${x}`).join(' ')}`}>{children}</div>
 );
 
-const BatteryFields: FC<FormProps> = ({ state, idp }) => (
-  <div class="row">
-    <Field idp={idp} name="chemistry" label="Chemistry" state={state} size={10} />
-    <Field idp={idp} name="nominalV" label="Nominal" unit="V" state={state} size={6} />
-    <Field idp={idp} name="fullV" label="Full" unit="V" state={state} size={6} />
-    <Field idp={idp} name="endV" label="End of discharge" unit="V" state={state} size={6} />
-    <Field idp={idp} name="capacity" label="Capacity" unit="Ah" state={state} size={6} />
-    <Field idp={idp} name="usable" label="Usable" unit="%" state={state} size={4} />
-    <Field idp={idp} name="internal" label="Internal resistance" unit="Ω" state={state} size={6} />
-  </div>
-);
+const RegulatedFields: FC<FormProps & { parents: [string, string][] }> = ({ state, idp, parents }) => {
+  const f = (k: string, size = 6) => <SpecField spec={regulatedSpec} k={k} state={state} idp={idp} size={size} />;
+  return (
+    <>
+      <div class="row">
+        <SpecField spec={regulatedSpec} k="parentId" state={state} idp={idp} options={parents} />
+        {f('regulator')}
+        {f('setting.method')}
+      </div>
+      <div class="row method-fields">
+        <ForMethods methods="fixed raised-diodes raised-resistor">{f('setting.nominalV')}</ForMethods>
+        <ForMethods methods="adjustable">{f('setting.vrefV')}</ForMethods>
+        <ForMethods methods="adjustable">{f('setting.adjustA')}</ForMethods>
+        <ForMethods methods="adjustable raised-resistor">{f('setting.r1Ohm', 7)}</ForMethods>
+        <ForMethods methods="adjustable raised-resistor">{f('setting.r2Ohm', 7)}</ForMethods>
+        <ForMethods methods="raised-diodes">{f('setting.diodes', 4)}</ForMethods>
+        <ForMethods methods="raised-diodes">{f('setting.diodeDropV')}</ForMethods>
+      </div>
+      <div class="row">
+        {f('dropoutV')}
+        {f('quiescentA', 7)}
+        {f('efficiency', 5)}
+        {f('maxOutputA')}
+        {f('maxInputV')}
+      </div>
+      <div class="row">
+        {f('mount.thetaJcKPerW', 5)}
+        {f('mount.thetaCsKPerW', 5)}
+        {f('mount.thetaSaKPerW', 5)}
+        {f('mount.tjMaxC', 5)}
+        <span class="hint">Leave all four heatsink fields empty if there is no heatsink data.</span>
+      </div>
+    </>
+  );
+};
+
+const BatteryFields: FC<FormProps> = ({ state, idp }) => {
+  const f = (k: string, size = 6) => <SpecField spec={batterySpec} k={k} state={state} idp={idp} size={size} />;
+  return (
+    <>
+      <div class="row">
+        {f('chemistry', 10)}
+        {f('nominalV')}
+        {f('fullV')}
+        {f('endV')}
+      </div>
+      <div class="row">
+        {f('capacityAh')}
+        {f('usableFraction', 4)}
+        {f('internalOhm')}
+        {f('minimumV')}
+      </div>
+    </>
+  );
+};
 
 export const RailCard: FC<{ project: Project; rail: Rail; failed?: Failed; parents: [string, string][]; open?: boolean }> = ({ project, rail, failed, parents, open }) => {
   const base = `/projects/${project.id}/supply/rails/${rail.id}`;
@@ -151,7 +134,7 @@ export const RailCard: FC<{ project: Project; rail: Rail; failed?: Failed; paren
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-          <Field idp={idp} name="name" label="Rail name" state={state} size={32} />
+          <SpecField spec={RAIL_SPECS[rail.kind]} k="name" state={state} idp={idp} size={32} />
         </div>
         {rail.kind === 'rectified' ? <RectifiedFields project={project} rail={rail} state={state} idp={idp} /> : null}
         {rail.kind === 'regulated' ? <RegulatedFields project={project} rail={rail} state={state} idp={idp} parents={parents} /> : null}

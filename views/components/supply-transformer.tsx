@@ -1,9 +1,12 @@
-// One transformer on the supply page: its own form (name, construction) and one form per winding.
+// One transformer on the supply page: its own form (name, construction) and one form per winding; fields from specs.
 import type { FC } from 'hono/jsx';
 import type { Project, Transformer, Winding } from '../../src/core/model';
 import { formatValue } from '../../src/core/units';
-import { inputText, percentText } from '../../src/core/spec/input-text';
-import { FormErrors, type FieldState, Field, Select } from './fields';
+import { defaults, formValues } from '../../src/core/spec/derive';
+import { percentText } from '../../src/core/spec/input-text';
+import { transformerSpec, windingSpec } from '../../src/core/spec/supply';
+import { FormErrors, type FieldState } from './fields';
+import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
 
 export const Version: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
@@ -13,24 +16,20 @@ export const hx = (action: string, target = '#supply') => ({ method: 'post' as c
 
 export const pctText = percentText;
 
+/** The form text of a winding; a new winding starts with the spec's regulation and empty name, voltage and current
+ *  (those must come from the transformer in hand, not from a default). */
 export function windingValues(w: Winding | null): Record<string, string> {
-  if (!w) return { name: '', ratedV: '', ratedA: '', regulation: '8', resistance: '' };
-  return {
-    name: w.name,
-    ratedV: inputText(w.ratedVrms, 'V'),
-    ratedA: inputText(w.ratedA, 'A'),
-    regulation: pctText(w.regulationFraction),
-    resistance: inputText(w.resistanceOhm, 'Ω'),
-  };
+  if (w) return formValues(windingSpec, w);
+  return { ...formValues(windingSpec, defaults(windingSpec)), name: '', ratedV: '', ratedA: '' };
 }
 
 const WindingFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
   <>
-    <Field idp={idp} name="name" label="Winding" state={state} size={16} />
-    <Field idp={idp} name="ratedV" label="Rated voltage" unit="V rms" state={state} size={7} />
-    <Field idp={idp} name="ratedA" label="Rated current" unit="A rms" state={state} size={7} />
-    <Field idp={idp} name="regulation" label="Regulation" unit="%" state={state} size={4} />
-    <Field idp={idp} name="resistance" label="Resistance" unit="Ω" state={state} size={7} hint="empty = from regulation" />
+    <SpecField spec={windingSpec} k="name" label="Winding" state={state} idp={idp} size={16} />
+    <SpecField spec={windingSpec} k="ratedVrms" state={state} idp={idp} size={7} />
+    <SpecField spec={windingSpec} k="ratedA" state={state} idp={idp} size={7} />
+    <SpecField spec={windingSpec} k="regulationFraction" state={state} idp={idp} size={4} />
+    <SpecField spec={windingSpec} k="resistanceOhm" label="Resistance" state={state} idp={idp} size={7} />
   </>
 );
 
@@ -52,9 +51,7 @@ const WindingRow: FC<{ project: Project; t: Transformer; w: Winding; failed?: Fa
   );
 };
 
-export function transformerValues(t: Transformer): Record<string, string> {
-  return { name: t.name, construction: t.construction };
-}
+export const transformerValues = (t: Transformer): Record<string, string> => formValues(transformerSpec, t);
 
 export const TransformerCard: FC<{ project: Project; t: Transformer; failed?: Failed }> = ({ project, t, failed }) => {
   const base = `/projects/${project.id}/supply/transformers/${t.id}`;
@@ -67,8 +64,8 @@ export const TransformerCard: FC<{ project: Project; t: Transformer; failed?: Fa
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-           <Field idp={`t-${t.id}`} name="name" label="Transformer" state={state} size={28} />
-          <Select idp={`t-${t.id}`} name="construction" label="Construction" state={state} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
+          <SpecField spec={transformerSpec} k="name" label="Transformer" hint="" state={state} idp={`t-${t.id}`} size={28} />
+          <SpecField spec={transformerSpec} k="construction" state={state} idp={`t-${t.id}`} />
           <button type="submit">Save</button>
           <a class="danger" href={`${base}/delete`}>
             Delete transformer…

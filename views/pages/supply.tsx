@@ -3,8 +3,10 @@
 import type { Child, FC } from 'hono/jsx';
 import { PageMessages } from '../components/messages';
 import type { Project } from '../../src/core/model';
-import { inputText } from '../../src/core/spec/input-text';
-import { FormErrors, type FieldState, Field, Select } from '../components/fields';
+import { defaults, formValues } from '../../src/core/spec/derive';
+import { addRailSpec, primaryFuseSpec, transformerSpec } from '../../src/core/spec/supply';
+import { FormErrors, type FieldState } from '../components/fields';
+import { SpecField } from '../components/spec-fields';
 import { stateFor, type Failed } from '../components/failed';
 import { TransformerCard, Version, hx } from '../components/supply-transformer';
 import { RailCard } from '../components/supply-rail';
@@ -32,8 +34,8 @@ const AddTransformer: FC<{ project: Project; state: FieldState }> = ({ project, 
     <Version version={project.version} />
     <FormErrors state={state} />
     <div class="row">
-      <Field idp="at" name="name" label="New transformer" state={state} size={24} hint="e.g. T1 mains transformer" />
-      <Select idp="at" name="construction" label="Construction" state={state} options={[['laminated', 'Laminated (EI)'], ['toroidal', 'Toroidal']]} />
+      <SpecField spec={transformerSpec} k="name" label="New transformer" state={state} idp="at" size={24} />
+      <SpecField spec={transformerSpec} k="construction" state={state} idp="at" />
       <button type="submit">Add transformer</button>
     </div>
   </form>
@@ -44,7 +46,7 @@ const PrimaryFuse: FC<{ project: Project; state: FieldState }> = ({ project, sta
     <Version version={project.version} />
     <FormErrors state={state} />
     <div class="row">
-      <Field idp="pf" name="primaryFuse" label="Fitted primary (mains) fuse" unit="A" state={state} size={6} hint="empty = recommend one" />
+      <SpecField spec={primaryFuseSpec} k="primaryFuseA" state={state} idp="pf" size={6} />
       <button type="submit">Save fuse</button>
     </div>
   </form>
@@ -52,9 +54,10 @@ const PrimaryFuse: FC<{ project: Project; state: FieldState }> = ({ project, sta
 
 export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, failed, notice, openRail }) => {
   const base = `/projects/${project.id}/supply`;
-  const addTrafo = stateFor('add-transformer', failed, () => ({ name: '', construction: 'laminated' }));
+  // new items start with an empty name (the builder names them); the other fields from the specs' defaults
+  const addTrafo = stateFor('add-transformer', failed, () => ({ ...formValues(transformerSpec, defaults(transformerSpec)), name: '' }));
   const addRail = stateFor('add-rail', failed, () => ({ name: '', source: sourceOptions(project)[0]?.[0] ?? 'battery' }));
-  const fuse = stateFor('primary-fuse', failed, () => ({ primaryFuse: inputText(project.supply.primaryFuseA, 'A') }));
+  const fuse = stateFor('primary-fuse', failed, () => formValues(primaryFuseSpec, project.supply));
   return (
     <div id="supply">
       <PageMessages notice={notice} failed={failed} />
@@ -96,8 +99,8 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
             <Version version={project.version} />
             <FormErrors state={addRail} />
             <div class="row">
-              <Field idp="ar" name="name" label="New rail" state={addRail} size={22} hint="e.g. 12 V receiver rail" />
-              <Select idp="ar" name="source" label="Fed from" state={addRail} options={sourceOptions(project)} />
+              <SpecField spec={addRailSpec} k="name" label="New rail" state={addRail} idp="ar" size={22} />
+              <SpecField spec={addRailSpec} k="source" state={addRail} idp="ar" options={sourceOptions(project)} />
               <button type="submit">Add rail</button>
             </div>
             <p class="hint">The new rail starts with typical values; open it to enter your parts.</p>

@@ -1,5 +1,5 @@
 // The supply section of the build checklist: first power-up and the expected rail voltages. Pure.
-import type { Project } from '../model';
+import type { BatteryRail, Project, RectifiedRail } from '../model';
 import type { ChecklistItem, ChecklistReport, ChecklistSection } from './types';
 import { step, caution, measured, fmt } from './items';
 import { railNominalV } from '../budget';
@@ -23,7 +23,7 @@ function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] 
         const nl = r.corners.find((c) => c.id === 'nominal-receive') ?? r.corners[0];
         const kd = r.corners.find((c) => c.id === 'low-keyDown');
         items.push(measured(`${rail.name}: with no load at nominal mains expect about {v}.`, nl?.noLoadPeakV ?? null, 'V', `supply: ${nl?.label ?? 'no load'}`));
-        if (kd) items.push(measured(`${rail.name}: lowest point of the ripple at low mains, key-down, about {v}${r.requiredMinV > 0 ? ` (must stay above ${fmt(r.requiredMinV, 'V')})` : ''}.`, kd.troughV, 'V', `supply: ${kd.label}`, kd.headroomMarginV < 0 ? 'caution' : 'normal'));
+        if (kd) items.push(measured(`${rail.name}: lowest point of the ripple at low mains, key-down, about {v}${needText(project, rail, r.requiredMinV)}.`, kd.troughV, 'V', `supply: ${kd.label}`, kd.headroomMarginV < 0 ? 'caution' : 'normal'));
         if (r.bleeder.fittedTimeS !== null) items.push(measured(`Switch off and time the discharge: ${rail.name} should fall below ${fmt(r.bleeder.thresholdV, 'V')} within about {v}.`, r.bleeder.fittedTimeS, 's', 'supply: bleeder'));
       } else {
         items.push(measured(`${rail.name}: expect roughly {v} (supply design not computed).`, railNominalV(rail, project), 'V', 'budget: nominal rail voltage'));
@@ -48,11 +48,23 @@ function batteryItems(project: Project, report: ChecklistReport): ChecklistItem[
     const r = report.supply?.rails.find((x) => x.railId === rail.id);
     if (rail.kind === 'battery') {
       items.push(measured(`${rail.name}: a full battery reads up to {v}; stop operating at ${fmt(rail.endV, 'V')}.`, rail.fullV, 'V', 'project: battery'));
-      if (r && r.kind === 'battery') items.push(measured(`${rail.name}: at end of discharge, key-down, the rig sees about {v}.`, r.loadedEndV, 'V', 'supply: battery end voltage under load', r.loadedEndV < r.requiredMinV ? 'caution' : 'normal'));
+      if (r && r.kind === 'battery') items.push(measured(`${rail.name}: at end of discharge, key-down, the rig sees about {v}${needText(project, rail, r.requiredMinV)}.`, r.loadedEndV, 'V', 'supply: battery end voltage under load', r.loadedEndV < r.requiredMinV ? 'caution' : 'normal'));
     } else if (rail.kind === 'regulated') {
       const v = r && r.kind === 'regulated' ? r.outputV : railNominalV(rail, project);
       items.push(measured(`${rail.name}: check the regulator output, {v}, before connecting any stage.`, v, 'V', r ? 'supply: regulator setting' : 'budget: regulator setting'));
     }
   }
   return items;
+}
+
+/**
+ * What the rail must stay above, in words: the regulators' need or the lowest voltage stated for its direct loads
+ * (the supply design's requirement, whichever is higher), or that none is stated, so the reading has nothing to be
+ * compared with. A margin alone is not a need: it is not shown as one.
+ */
+function needText(project: Project, rail: RectifiedRail | BatteryRail, requiredMinV: number): string {
+  const feedsRegulator = project.supply.rails.some((x) => x.kind === 'regulated' && x.parentId === rail.id);
+  if (rail.minimumV === null && !feedsRegulator) return ' (no lowest voltage is stated for its loads: state one on the supply page to have it checked)';
+  const who = rail.minimumV !== null && requiredMinV === rail.minimumV ? 'its loads' : 'the regulators it feeds';
+  return ` (must stay above ${fmt(requiredMinV, 'V')}, the least ${who} need)`;
 }

@@ -43,7 +43,8 @@ export function loadedEndV(battery: BatteryRail, keyDownA: number): number {
   return Math.max(0, (Number.isFinite(battery.endV) ? battery.endV : 0) - i * r);
 }
 
-export function batteryFindings(battery: BatteryRail, requiredMinV: number, loadedEnd: number, runtime: BatteryRuntime): Finding[] {
+/** `needNote` says where the minimum comes from ('the regulators', 'its loads (stated)'). */
+export function batteryFindings(battery: BatteryRail, requiredMinV: number, loadedEnd: number, runtime: BatteryRuntime, needNote = 'the regulators'): Finding[] {
   const out: Finding[] = [];
   const subject = battery.name;
   if (!(battery.fullV >= battery.endV) || !(battery.endV > 0)) {
@@ -53,15 +54,15 @@ export function batteryFindings(battery: BatteryRail, requiredMinV: number, load
     out.push({ severity: 'fail', rule: 'battery.capacity', subject, value: battery.capacityAh, limit: null, unit: 'Ah', source: 'supply.battery-data', message: `Enter the capacity to get a runtime.` });
   }
   if (requiredMinV > 0) {
-    const base = { rule: 'battery.end-voltage', subject, value: loadedEnd, limit: requiredMinV, unit: 'V', source: 'Regulator dropout (ref §6.1, §6.2) against the battery end-of-discharge voltage under key-down load' };
+    const base = { rule: 'battery.end-voltage', subject, value: loadedEnd, limit: requiredMinV, unit: 'V', source: 'supply.battery-end' as const };
     if (loadedEnd < requiredMinV) {
       const fullLoaded = battery.fullV - (loadedEnd < battery.endV ? battery.endV - loadedEnd : 0);
       const sev = fullLoaded < requiredMinV ? 'fail' : 'caution';
       out.push({ ...base, severity: sev, message: sev === 'fail'
-        ? `${subject}: even fully charged the voltage under key-down load (${fullLoaded.toFixed(2)} V) is below the ${requiredMinV.toFixed(2)} V the regulators need.`
-        : `${subject}: near end of discharge the voltage under key-down load falls to ${loadedEnd.toFixed(2)} V, below the ${requiredMinV.toFixed(2)} V the regulators need; the regulators drop out before the battery is flat, so less capacity is usable than the runtime shows.` });
+        ? `${subject}: even fully charged the voltage under key-down load (${fullLoaded.toFixed(2)} V) is below the ${requiredMinV.toFixed(2)} V ${needNote} need.`
+        : `${subject}: near end of discharge the voltage under key-down load falls to ${loadedEnd.toFixed(2)} V, below the ${requiredMinV.toFixed(2)} V ${needNote} need; they stop working before the battery is flat, so less capacity is usable than the runtime shows.` });
     } else {
-      out.push({ ...base, severity: 'ok', message: `At end of discharge under key-down load (${loadedEnd.toFixed(2)} V) the regulators still have their headroom.` });
+      out.push({ ...base, severity: 'ok', message: `At end of discharge under key-down load (${loadedEnd.toFixed(2)} V) ${needNote} still get the ${requiredMinV.toFixed(2)} V they need.` });
     }
   }
   if (runtime.runtimeS === 0 && battery.capacityAh > 0 && !(runtime.averageA >= NEGLIGIBLE_CURRENT_A)) {

@@ -13,7 +13,7 @@ import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
-import { normalizeSupply } from './normalize';
+import { checkSupplyInputs } from './supply-inputs';
 import { usablePositive } from '../numeric';
 
 export interface SupplyOptions {
@@ -25,8 +25,6 @@ export interface SupplyOptions {
   capacitorRatingsV?: readonly number[];
   /** Transmit share of operating time for battery runtime (0..1); default 0.2 (80 % receive / 20 % transmit). */
   transmitFraction?: number;
-  /** Stated minimum voltage per rail id (V) for rails with direct loads (no regulator) or extra needs. */
-  railMinimumV?: Record<string, number>;
   /** Integration steps per mains cycle (default 1000). */
   stepsPerCycle?: number;
   /** Output current per rectified rail id and mode at high mains (PA current rises with its rail), A. */
@@ -36,25 +34,27 @@ export interface SupplyOptions {
 const ZERO: PerMode = { receive: 0, keyUp: 0, keyDown: 0 };
 const FALLBACK_MAINS: Mains = { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 };
 
-function requirement(railId: string, marginV: number, children: RegulatedRail[], stated: number | undefined): { v: number; note: string; has: boolean } {
+/** What a rail must give at its lowest: its regulators' input needs (plus margin) or the minimum stated for its direct
+ *  loads, whichever is higher; `has` is false when neither is known. */
+function requirement(marginV: number, children: RegulatedRail[], stated: number | null): { v: number; note: string; has: boolean } {
   const margin = Number.isFinite(marginV) ? Math.max(0, marginV) : 0;
   // Source: three-terminal regulator datasheets, input >= output + dropout at the ripple low point (ref §6.1, §6.2)
   const regNeed = children.map((c) => ({ c, v: regulatorOutputV(c.setting, c.quiescentA) + Math.max(0, c.dropoutV) }));
   const top = regNeed.reduce<{ c: RegulatedRail; v: number } | null>((a, b) => (a === null || b.v > a.v ? b : a), null);
-  const st = stated !== undefined && Number.isFinite(stated) && stated > 0 ? stated : null;
+  const st = stated;
   if (top) {
     const v = top.v + margin;
-    if (st !== null && st > v) return { v: st, note: `stated minimum for this rail`, has: true };
+    if (st !== null && st > v) return { v: st, note: 'the lowest voltage stated for its loads', has: true };
     return { v, note: `${top.c.name}: output + dropout${margin > 0 ? ` + ${margin} V margin` : ''}`, has: true };
   }
-  if (st !== null) return { v: st, note: 'stated minimum for the direct loads', has: true };
-  void railId;
+  if (st !== null) return { v: st, note: 'the lowest voltage stated for its loads', has: true };
   return { v: margin, note: `no regulator fed: only the rail's ${margin} V margin above 0 V is required; state a minimum for its direct loads`, has: false };
 }
 
 export function evaluateSupply(projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): SupplyReport {
-  const normalized = normalizeSupply(projectIn.supply);
-  const project: Project = { ...projectIn, supply: normalized.supply };
+  const project = projectIn;
+  // inputs outside their field definitions: a fail finding each, and the item (with its dependants) is left out
+  const inputs = checkSupplyInputs(project.supply);
   const duty = safeDuty(project.keyingDuty);
   const txFraction = options.transmitFraction !== undefined && Number.isFinite(options.transmitFraction) ? Math.min(1, Math.max(0, options.transmitFraction)) : DEFAULT_TRANSMIT_FRACTION;
   // Usable, not merely > 0: the primary current divides by the mains voltage (5e-324 V made it Infinity)
@@ -62,7 +62,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   const mainsOk = m0 !== null && usablePositive(m0.nominalV, 1) && usablePositive(m0.frequencyHz, 1);
   const specs = cornerSpecs(project.mains, duty);
   const rails = project.supply.rails;
-  const globalFindings: Finding[] = [...normalized.findings];
+  const globalFindings: Finding[] = [...inputs.findings];
   if (project.mains && !mainsOk) {
     globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'design.consistency', message: 'The mains voltage must be at least 1 V and its frequency at least 1 Hz.' });
   }
@@ -71,8 +71,14 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   const childrenOf = (id: string) => rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
   const undesigned = unknownLoadRails(rails, railOutputA, options.highMainsOutputA ?? {});
   for (const [id, why] of undesigned) {
+    if (inputs.leftOut.has(id)) continue;
     const name = rails.find((r) => r.id === id)?.name ?? id;
     globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: name, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `${name} is not designed: ${why}` });
+  }
+  for (const [id, why] of inputs.leftOut) {
+    const name = rails.find((r) => r.id === id)?.name ?? id;
+    undesigned.set(id, why);
+    globalFindings.push({ severity: 'fail', rule: 'supply.refused-input', subject: name, value: null, limit: null, unit: '', source: 'design.input', message: `${name} is not designed: ${why}` });
   }
   const budget = (id: string): PerMode => {
     const b = railOutputA[id];
@@ -106,7 +112,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   for (const rail of rails.filter((r): r is RectifiedRail => r.kind === 'rectified' && designable(r))) {
     const wt = windings.get(rail.windingId) ?? null;
     usedWindings.set(rail.windingId, [...(usedWindings.get(rail.windingId) ?? []), rail.name]);
-    const req = requirement(rail.id, rail.marginV, childrenOf(rail.id), options.railMinimumV?.[rail.id]);
+    const req = requirement(rail.marginV, childrenOf(rail.id), rail.minimumV ?? null);
     const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), {
       mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
       standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
@@ -125,7 +131,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   for (const b of rails.filter((r): r is BatteryRail => r.kind === 'battery' && designable(r))) {
     const out = budget(b.id);
     const children = childrenOf(b.id);
-    const req = requirement(b.id, 0, children, options.railMinimumV?.[b.id]);
+    const req = requirement(0, children, b.minimumV ?? null);
     const loadedEnd = loadedEndV(b, out.keyDown);
     const runtime = batteryRuntime(b, out, duty, txFraction);
     const fuse = railFuse(out.keyDown, 'as close to the battery terminal as possible');
@@ -143,7 +149,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const report: BatteryRailReport = {
       kind: 'battery', railId: b.id, railName: b.name, fullV: b.fullV, endV: b.endV, loadedEndV: loadedEnd, requiredMinV: req.v,
       receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse,
-      findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
+      findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime, b.minimumV !== null && req.v === b.minimumV ? 'its loads' : 'the regulators'), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
       recommendations: [
         { topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'supply.fuse' },
         { topic: 'battery', text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive / ${Math.round(txFraction * 100)} % transmit`, reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`, source: 'supply.battery-runtime' },
@@ -181,9 +187,12 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
 
   const transformers: TransformerReport[] = [];
   // a transformer with a winding feeding an undesigned rail would be sized for part of its load: leave it unsized
-  const unsized = project.supply.transformers.filter((t) => rails.some((r) => r.kind === 'rectified' && undesigned.has(r.id) && t.windings.some((w) => w.id === r.windingId)));
+  const feedsUndesigned = (t: Transformer) => rails.some((r) => r.kind === 'rectified' && undesigned.has(r.id) && t.windings.some((w) => w.id === r.windingId));
+  const unsized = project.supply.transformers.filter((t) => inputs.unsized.has(t.id) || feedsUndesigned(t));
   for (const t of unsized) {
-    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: t.name, value: null, limit: null, unit: 'VA', source: 'design.consistency', message: `${t.name} is not sized, and no primary fuse is recommended: a rail it feeds has an unknown load.` });
+    const refused = inputs.unsized.get(t.id) ?? (rails.some((r) => inputs.leftOut.has(r.id) && r.kind === 'rectified' && t.windings.some((w) => w.id === r.windingId)) ? 'a rail it feeds depends on a refused input' : null);
+    const why = refused ?? 'a rail it feeds has an unknown load';
+    globalFindings.push({ severity: 'fail', rule: refused ? 'supply.refused-input' : 'supply.unknown-load', subject: t.name, value: null, limit: null, unit: 'VA', source: refused ? 'design.input' : 'design.consistency', message: `${t.name} is not sized, and no primary fuse is recommended: ${why}.` });
   }
   for (const t of project.supply.transformers) {
     if (unsized.includes(t)) continue;
@@ -197,8 +206,10 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const loadA = transformers.reduce((s, t) => s + t.primaryA, 0);
     const construction = transformers.some((t) => t.construction === 'toroidal' && t.primaryA > 0) ? 'toroidal' : 'laminated';
     const fuse = primaryFuse(loadA, construction);
-    const findings = sortFindings(fittedFuseFindings('Primary fuse', project.supply.primaryFuseA, fuse));
-    primary = { loadA, fuse, fittedA: project.supply.primaryFuseA, findings };
+    // a refused fitted value is not checked (its own finding says so)
+    const fittedA = inputs.primaryFuseOk ? project.supply.primaryFuseA : null;
+    const findings = sortFindings(fittedFuseFindings('Primary fuse', fittedA, fuse));
+    primary = { loadA, fuse, fittedA, findings };
   }
 
   const railReports = rails.map((r) => reports.get(r.id)!).filter(Boolean);

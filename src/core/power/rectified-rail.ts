@@ -90,9 +90,9 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   }
   if (winding) {
     const base = { rule: 'rail.headroom', subject: rail.name, value: worst.troughV, limit: ctx.requiredMinV, unit: 'V', source };
-    if (!ctx.hasRequirement) findings.push({ ...base, severity: worst.troughV < ctx.requiredMinV ? 'caution' : 'ok', message: `${worst.label}: the ripple trough is ${fmt(worst.troughV)} V; no regulator is fed and no minimum is stated, so only the ${fmt(ctx.requiredMinV)} V margin is checked${worst.troughV < ctx.requiredMinV ? ' (and it is not met)' : ''}.` });
-    else if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: the rail dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
-    else findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough ${fmt(worst.troughV)} V stays above the ${fmt(ctx.requiredMinV)} V needed (${ctx.requirementNote}).` });
+    if (!ctx.hasRequirement) findings.push({ ...base, severity: worst.troughV < ctx.requiredMinV ? 'caution' : 'ok', message: `${worst.label}: the ripple trough of ${rail.name} is ${fmt(worst.troughV)} V; no regulator is fed and no lowest voltage is stated for its loads, so only the ${fmt(ctx.requiredMinV)} V margin is checked${worst.troughV < ctx.requiredMinV ? ' (and it is not met)' : ''}. State the lowest voltage its loads need on the supply page.` });
+    else if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: ${rail.name} dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
+    else findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough of ${rail.name}, ${fmt(worst.troughV)} V, stays above the ${fmt(ctx.requiredMinV)} V needed (${ctx.requirementNote}).` });
     if (rail.topology === 'half-wave') findings.push({ severity: 'caution', rule: 'rectifier.half-wave', subject: rail.name, value: null, limit: null, unit: '', source: 'supply.half-wave', message: `${rail.name}: a half-wave rectifier puts direct current through the winding, which can saturate a small transformer's core and doubles the ripple; prefer a bridge or centre-tap.` });
   }
 

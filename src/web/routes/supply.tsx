@@ -2,9 +2,11 @@
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Project, Rail } from '../../core/model';
+import { formValues, primaryFuseSpec, transformerSpec, windingSpec } from '../../core/spec';
+import { RAIL_SPECS } from '../../core/spec/supply-rails';
+import { addRail, editRail } from '../../core/edits/supply-rails';
 import { evaluateCached as evaluate } from '../cache/reports';
 import { loadProject } from '../../db/projects';
-import { parseForm } from '../form';
 import { projectEdit, doneNotice, type ChangeResult } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
@@ -12,9 +14,6 @@ import { newId } from '../ids';
 import * as F from '../supply-forms';
 import { Layout } from '../../../views/layout';
 import { SupplyBody } from '../../../views/pages/supply';
-import { windingValues, transformerValues } from '../../../views/components/supply-transformer';
-import { railValues } from '../../../views/components/supply-rail';
-import { inputText } from '../../core/spec/input-text';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 import type { EvaluationReport } from '../../core/evaluate';
@@ -68,45 +67,7 @@ export function supplyPage(project: Project, failed?: Failed, notice?: string, o
 const gone = (what: string): ChangeResult => ({ errors: { _form: `That ${what} no longer exists (deleted in another window?). The page now shows the stored supply.` } });
 const railAt = (p: Project, id: string | undefined) => p.supply.rails.find((r) => r.id === id);
 const withRails = (p: Project, rails: Rail[]): Project => ({ ...p, supply: { ...p.supply, rails } });
-const replaceRail = (p: Project, rail: Rail) => withRails(p, p.supply.rails.map((r) => (r.id === rail.id ? rail : r)));
-
-function newRail(p: Project, name: string, source: string): Rail | null {
-  const id = newId('rail');
-  if (source === 'battery') {
-    return { kind: 'battery', id, name, chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10, capacityAh: 7, usableFraction: 0.8, internalOhm: 0.05 };
-  }
-  const ref = source.slice(2);
-  if (source.startsWith('w:')) {
-    if (!p.supply.transformers.some((t) => t.windings.some((w) => w.id === ref))) return null;
-    return { kind: 'rectified', id, name, windingId: ref, topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 4700e-6, esrOhm: 0.05, bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0.5, fuseA: null };
-  }
-  if (!railAt(p, ref)) return null;
-  return { kind: 'regulated', id, name, parentId: ref, regulator: 'linear', setting: { method: 'fixed', nominalV: 12 }, dropoutV: 2, quiescentA: 0.005, efficiency: null, maxOutputA: null, maxInputV: null, mount: null };
-}
-
-function editRail(p: Project, values: Record<string, string>, c: Context): ChangeResult {
-  const rail = railAt(p, c.req.param('rid'));
-  if (!rail) return gone('rail');
-  if (rail.kind === 'rectified') {
-    const r = parseForm(F.rectifiedSchema, values);
-    if (!r.ok) return { errors: r.errors };
-    const d = r.data;
-    if (!p.supply.transformers.some((t) => t.windings.some((w) => w.id === d.windingId))) return { errors: { windingId: 'Winding: that winding no longer exists; choose another' } };
-    return replaceRail(p, { ...rail, name: d.name, windingId: d.windingId, topology: d.topology, diodeDropV: d.diodeDrop, diodeResistanceOhm: d.diodeR, reservoirF: d.reservoir, esrOhm: d.esr, bleederOhm: d.bleeder, capacitorRatedV: d.capV, capacitorRippleA: d.capRipple, ripplePpTargetV: d.rippleTarget, marginV: d.margin, fuseA: d.fuse });
-  }
-  if (rail.kind === 'regulated') {
-    const r = parseForm(F.regulatedSchema, values);
-    if (!r.ok) return { errors: r.errors };
-    const d = r.data;
-    if (!F.possibleParents(p, rail.id).some((x) => x.id === d.parentId)) return { errors: { parentId: 'Fed from: that rail does not exist or is fed from this one (a loop); choose another' } };
-    if (!d.setting) return { errors: { method: 'Output setting: incomplete' } };
-    return replaceRail(p, { ...rail, name: d.name, parentId: d.parentId, regulator: d.regulator, setting: d.setting, dropoutV: d.dropout, quiescentA: d.quiescent, efficiency: d.efficiencyFraction, maxOutputA: d.maxOut, maxInputV: d.maxIn, mount: d.mount });
-  }
-  const r = parseForm(F.batterySchema, values);
-  if (!r.ok) return { errors: r.errors };
-  const d = r.data;
-  return replaceRail(p, { ...rail, name: d.name, chemistry: d.chemistry, nominalV: d.nominalV, fullV: d.fullV, endV: d.endV, capacityAh: d.capacity, usableFraction: d.usable, internalOhm: d.internal });
-}
+const railEdit = (r: ReturnType<typeof editRail>): ChangeResult => (r.ok ? r.project : { errors: r.errors });
 
 export function supplyRoutes(deps: Deps) {
   const app = new Hono();
@@ -129,7 +90,7 @@ export function supplyRoutes(deps: Deps) {
   app.post('/projects/:id/supply/transformers/:tid', projectEdit(deps, { ...common, form: (c) => `transformer-${c.req.param('tid')}`, schema: F.transformerSchema,
     values: (p, c) => {
       const t = p.supply.transformers.find((x) => x.id === c.req.param('tid'));
-      return t ? transformerValues(t) : null;
+      return t ? formValues(transformerSpec, t) : null;
     },
     change: (p, d, c) => {
       const tid = c.req.param('tid');
@@ -143,7 +104,7 @@ export function supplyRoutes(deps: Deps) {
     change: (p, d, c) => {
       const tid = c.req.param('tid');
       if (!p.supply.transformers.some((t) => t.id === tid)) return gone('transformer');
-      const w = { id: newId('w'), name: d.name, ratedVrms: d.ratedV, ratedA: d.ratedA, regulationFraction: d.regulation, resistanceOhm: d.resistance };
+      const w = { ...d, id: newId('w') };
       return { ...p, supply: { ...p.supply, transformers: p.supply.transformers.map((t) => (t.id === tid ? { ...t, windings: [...t.windings, w] } : t)) } };
     },
   }));
@@ -151,13 +112,12 @@ export function supplyRoutes(deps: Deps) {
   app.post('/projects/:id/supply/windings/:wid', projectEdit(deps, { ...common, form: (c) => `winding-${c.req.param('wid')}`, schema: F.windingSchema,
     values: (p, c) => {
       const w = p.supply.transformers.flatMap((t) => t.windings).find((x) => x.id === c.req.param('wid'));
-      return w ? windingValues(w) : null;
+      return w ? formValues(windingSpec, w) : null;
     },
     change: (p, d, c) => {
       const wid = c.req.param('wid');
       if (!p.supply.transformers.some((t) => t.windings.some((w) => w.id === wid))) return gone('winding');
-      const edit = { name: d.name, ratedVrms: d.ratedV, ratedA: d.ratedA, regulationFraction: d.regulation, resistanceOhm: d.resistance };
-      return { ...p, supply: { ...p.supply, transformers: p.supply.transformers.map((t) => ({ ...t, windings: t.windings.map((w) => (w.id === wid ? { ...w, ...edit } : w)) })) } };
+      return { ...p, supply: { ...p.supply, transformers: p.supply.transformers.map((t) => ({ ...t, windings: t.windings.map((w) => (w.id === wid ? { ...w, ...d } : w)) })) } };
     },
   }));
 
@@ -165,25 +125,22 @@ export function supplyRoutes(deps: Deps) {
   app.post('/projects/:id/supply/rails', projectEdit(deps, { ...common, form: 'add-rail', schema: F.addRailSchema, values: () => ({}),
     partial: (p, f, n) => body(p, f, n && !f ? 'Rail added with typical values: enter your parts below and save.' : n, f ? undefined : p.supply.rails.at(-1)?.id),
     redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(p.supply.rails.at(-1)?.id ?? '')}#rail-${p.supply.rails.at(-1)?.id ?? ''}`,
-    change: (p, d) => {
-      const rail = newRail(p, d.name, d.source);
-      return rail ? withRails(p, [...p.supply.rails, rail]) : { errors: { source: 'Fed from: that winding or rail no longer exists; choose another' } };
-    },
+    change: (p, d) => railEdit(addRail(p, newId('rail'), d.name, d.source)),
   }));
 
   // The edited rail stays open after the swap (a fresh spec per request knows which rail that is).
   app.post('/projects/:id/supply/rails/:rid', (c) =>
-    projectEdit(deps, { ...common, form: `rail-${c.req.param('rid')}`, schema: rawValues, change: (p, v) => editRail(p, v, c),
+    projectEdit(deps, { ...common, form: `rail-${c.req.param('rid')}`, schema: rawValues, change: (p, v) => railEdit(editRail(p, c.req.param('rid') ?? '', v)),
       values: (p) => {
         const r = railAt(p, c.req.param('rid'));
-        return r ? railValues(r) : null;
+        return r ? formValues(RAIL_SPECS[r.kind], r) : null;
       },
       partial: (p, f, n) => body(p, f, n, c.req.param('rid')), page: (p, f, n) => supplyPage(p, f, n, c.req.param('rid')),
       redirect: (p) => `${pageUrl(p)}?open=${encodeURIComponent(c.req.param('rid') ?? '')}#rail-${c.req.param('rid') ?? ''}` })(c),
   );
 
-  app.post('/projects/:id/supply/fuse', projectEdit(deps, { ...common, form: 'primary-fuse', schema: F.fuseSchema, values: (p) => ({ primaryFuse: inputText(p.supply.primaryFuseA, 'A') }),
-    change: (p, d) => ({ ...p, supply: { ...p.supply, primaryFuseA: d.primaryFuse } }),
+  app.post('/projects/:id/supply/fuse', projectEdit(deps, { ...common, form: 'primary-fuse', schema: F.fuseSchema, values: (p) => formValues(primaryFuseSpec, p.supply),
+    change: (p, d) => ({ ...p, supply: { ...p.supply, primaryFuseA: d.primaryFuseA } }),
   }));
 
   // ------------------------------------------------------------ deletes: confirm page, then the post

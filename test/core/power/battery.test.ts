@@ -5,7 +5,7 @@ import { batteryFindings, batteryRuntime, loadedEndV } from '../../../src/core/p
 import type { BatteryRail } from '../../../src/core/model';
 import { near } from './helpers';
 
-const bat: BatteryRail = { kind: 'battery', id: 'b', name: 'LiFePO4 6 Ah', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10.4, capacityAh: 6, usableFraction: 0.9, internalOhm: 0.04 };
+const bat: BatteryRail = { kind: 'battery', id: 'b', name: 'LiFePO4 6 Ah', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10.4, capacityAh: 6, usableFraction: 0.9, internalOhm: 0.04, minimumV: null };
 const load = { receive: 0.05, keyUp: 0.1, keyDown: 1.0 };
 const toleranceS = 1;
 

@@ -4,7 +4,7 @@ import type { PerMode, Project, RectifiedRail, RegulatedRail } from '../../../sr
 
 export const refRail: RectifiedRail = {
   kind: 'rectified', id: 'raw', name: 'Raw rail', windingId: 'w18', topology: 'bridge', diodeDropV: 0.75, diodeResistanceOhm: 0.02,
-  reservoirF: 0.01, esrOhm: 0, bleederOhm: null, capacitorRatedV: 35, capacitorRippleA: 5.5, ripplePpTargetV: null, marginV: 0, fuseA: null,
+  reservoirF: 0.01, esrOhm: 0, bleederOhm: null, capacitorRatedV: 35, capacitorRippleA: 5.5, ripplePpTargetV: null, marginV: 0, fuseA: null, minimumV: null,
 };
 
 export const regulator13v8: RegulatedRail = {

@@ -6,7 +6,7 @@ import { primaryFuse, railFuse, fittedFuseFindings } from '../../../src/core/pow
 import { IEC_60127_FUSES_A } from '../../../src/core/power/standard-values';
 import { textbookCapacitanceF, recommendedCapacitorV, minimumCapacitanceF } from '../../../src/core/power/reservoir';
 import type { RectifiedRailReport } from '../../../src/core/power/report-types';
-import { flat, refProject } from './fixture';
+import { flat, refProject, refRail } from './fixture';
 import { near, nearRel } from './helpers';
 
 describe('winding model (ref §4.1, §4.2)', () => {
@@ -55,7 +55,8 @@ describe('reservoir (ref §4.1, §4.2)', () => {
 });
 
 describe('evaluateSupply on the §4.2 example (3 A in every mode)', () => {
-  const report = evaluateSupply(refProject(), { raw: flat(3) }, { railMinimumV: { raw: 18.42 } });
+  // the §4.2 trough stated as the rail's lowest voltage, so a winding voltage is derived from it
+  const report = evaluateSupply(refProject({ rails: [{ ...refRail, minimumV: 18.42 }] }), { raw: flat(3) });
   const rail = report.rails[0] as RectifiedRailReport;
   it('low-mains key-down corner reproduces the §4.2 -10 % row', () => {
     const c = rail.corners.find((x) => x.id === rail.worstVoltageCornerId)!;
