@@ -5,6 +5,23 @@ import { parsePrice, parseQuantity } from './parse-price';
 import { countRefs } from './refs';
 import { guessMapping, IMPORT_FIELD_LABELS, type ColumnMapping, type ImportField } from './import-mapping';
 import { unneutraliseText } from './write';
+import type { Field } from '../spec/field';
+import { storedProblem } from '../spec/derive';
+import { offerSpec, partSpec } from '../spec/parts';
+import { bomLineSpec } from '../spec/parts-list';
+import { CURRENCY, RATING_TEXT_MAX, unitPriceField } from '../spec/parts-text';
+import { text } from '../spec/make';
+
+// Each cell is held to the limit of the field it becomes (src/core/spec): the part's description and category, the
+// rating "value", the line's quantity and designators, the offer's supplier, SKU and unit price.
+const CELL_FIELDS: Partial<Record<ImportField, Field>> = {
+  description: partSpec.fields.description,
+  value: text('Value', RATING_TEXT_MAX, false),
+  category: partSpec.fields.category,
+  refs: bomLineSpec.fields.refs,
+  supplier: offerSpec.fields.supplier,
+  sku: offerSpec.fields.sku,
+};
 
 /** parts-list: BOM lines (quantity needed); catalog: supplier offers (supplier and price needed). */
 export type ImportKind = 'parts-list' | 'catalog';
@@ -113,6 +130,10 @@ function previewRow(
     quantity: null, supplier: get('supplier'), sku: get('sku'), priceCents: null, currency: null,
   };
   if (v.description === '' && v.value === '') err(m.description !== null ? 'description' : 'value', 'Needs a description or a value.');
+  for (const [f, field] of Object.entries(CELL_FIELDS) as [ImportField, Field][]) {
+    const problem = v[f as keyof ImportValues] === '' ? '' : storedProblem(field, v[f as keyof ImportValues]);
+    if (problem) err(f, `${field.label} ${problem}.`);
+  }
 
   if (opts.kind === 'parts-list') {
     const refCount = v.refs === '' ? null : countRefs(v.refs);
@@ -122,8 +143,9 @@ function previewRow(
       else err('quantity', 'Needs a quantity (or reference designators to count).');
     } else {
       const q = parseQuantity(qtyText);
+      const problem = q === null ? '' : storedProblem(bomLineSpec.fields.qtyPerRig, q);
       if (q === null) err('quantity', `"${qtyText}" is not a quantity.`);
-      else if (q === 0) err('quantity', 'The quantity is 0.');
+      else if (problem) err('quantity', `${bomLineSpec.fields.qtyPerRig.label} ${problem}; the file says "${qtyText}".`);
       else {
         v.quantity = q;
         if (refCount !== null && refCount !== q) warn('refs', `${refCount} designators listed but the quantity is ${q}.`);
@@ -134,12 +156,14 @@ function previewRow(
   const priceText = get('price');
   if (priceText !== '') {
     const p = parsePrice(priceText, decimal);
+    const range = p.ok ? storedProblem(unitPriceField, p.cents) : '';
     if (!p.ok) err('price', p.message);
+    else if (range) err('price', `${unitPriceField.label} ${range}.`);
     else {
       v.priceCents = p.cents;
       if (p.roundedFrom !== null) warn('price', `${p.roundedFrom} rounded half-up to ${p.cents} minor units.`);
       const colCurrency = get('currency').toUpperCase();
-      if (colCurrency !== '' && !/^[A-Z]{3}$/.test(colCurrency)) err('currency', `"${colCurrency}" is not a three-letter currency code.`);
+      if (colCurrency !== '' && !CURRENCY.re.test(colCurrency)) err('currency', `"${colCurrency}" is not a three-letter currency code.`);
       else if (colCurrency !== '' && p.currency !== null && colCurrency !== p.currency) err('currency', `The price says ${p.currency} but the currency column says ${colCurrency}.`);
       v.currency = p.currency ?? (colCurrency || opts.defaultCurrency.toUpperCase());
     }

@@ -12,6 +12,7 @@ import { costingSpec } from '../../../src/core/spec/costing';
 import { parseBreaks, parseRates, parseRatings, ratingsText } from '../../../src/core/spec/parts-text';
 import { parseProjectFile, toProjectFile } from '../../../src/io/project-file';
 import type { Project } from '../../../src/core/model';
+import { previewImport } from '../../../src/core/csv';
 
 const DEMOS = [club30m, portable20m];
 
@@ -174,5 +175,23 @@ describe('the project file holds the catalog to the same specs', () => {
     expect(file((p) => (p.parts[0].description = 'd'.repeat(300))).ok).toBe(true);
     expect(file((p) => (p.parts[0].description = 'd'.repeat(301)))).toMatchObject({ ok: false, errors: [expect.stringContaining('project.parts[0].description')] });
     expect(file((p) => (p.costing.sparesPerLine = 1001))).toMatchObject({ ok: false, errors: [expect.stringContaining('project.costing.sparesPerLine')] });
+  });
+});
+
+describe('the CSV import holds each cell to the spec of the field it becomes', () => {
+  const preview = (row: string) =>
+    previewImport(`Refs,Description,Category,Qty,Supplier,SKU,Unit price\n${row}`, { kind: 'parts-list', defaultCurrency: 'USD' });
+  const errors = (row: string) => preview(row).rows[0].errors.map((e) => `${e.column}: ${e.message}`);
+
+  it('takes a good row', () => expect(errors('R1,Resistor 10 kΩ 0.25 W,resistor,2,Northfield Components,NC-R-10K,0.05')).toEqual([]));
+
+  it('refuses a quantity above the line limit (100 000 per rig), a description over 300 and a long SKU', () => {
+    expect(errors('R1,Resistor,resistor,200000,N,S,0.05')).toEqual(['Qty: Quantity per rig must be more than 0 and at most 100000; the file says "200000".']);
+    expect(errors(`R1,${'d'.repeat(301)},resistor,1,N,S,0.05`)).toEqual(['Description: Description is longer than 300 characters.']);
+    expect(errors(`R1,Resistor,resistor,1,N,${'s'.repeat(121)},0.05`)).toEqual(['SKU: SKU is longer than 120 characters.']);
+  });
+
+  it('refuses a unit price above the money limit (10 000 000 000.00)', () => {
+    expect(errors('R1,Resistor,resistor,1,N,S,20000000000')).toEqual(['Unit price: Unit price must be at least 0.00 and at most 10000000000.00.']);
   });
 });
