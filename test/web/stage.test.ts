@@ -1,7 +1,12 @@
 import { describe, it, expect } from 'vitest';
 import { demoApp } from '../helpers/app';
 import { loadProject } from '../../src/db/projects';
-import { lpfValues, paValues, relayValues } from '../../src/web/stage-forms';
+import { formValues, lpfSpec, paSpec, relaySpec } from '../../src/core/spec';
+import type { LpfParams, PaParams, RelayParams } from '../../src/core/model';
+
+const lpfValues = (v: LpfParams) => formValues(lpfSpec, v);
+const paValues = (v: PaParams) => formValues(paSpec, v);
+const relayValues = (v: RelayParams) => formValues(relaySpec, v);
 import { DEMO_PROJECTS } from '../../seed-demo/index';
 import { forms, formByAction } from '../helpers/html';
 

@@ -2,9 +2,10 @@
 import type { FC } from 'hono/jsx';
 import type { Project, Stage } from '../../src/core/model';
 import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
-import { Field, Select, Check, FormErrors, type FieldState } from '../components/fields';
+import { Select, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
-import { formValues, lpfSpec, loadSpec, paSpec, relaySpec, stageSpec } from '../../src/core/spec';
+import { formValues, loadSpec, stageSpec } from '../../src/core/spec';
+import { stageData, type StageData } from '../../src/core/spec/stage-data';
 import { loadCurrentFields, loadFormName, stageFormValues } from '../../src/core/spec/stage';
 import { SpecField } from '../components/spec-fields';
 import { REMOVE_LOAD } from '../../src/core/edits/stage-loads';
@@ -40,6 +41,7 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
   const railOptions: [string, string][] = project.supply.rails.map((r) => [r.id, r.name]);
   const general = stateFor('stage', failed, () => stageFormValues(stage));
   const loadRows = Math.max(stage.loads.length + 1, 1);
+  const own = stageData(stage);
   return (
     <div id="stage">
       <p>
@@ -97,97 +99,23 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
         )}
         <p class="hint">Currents are in mA: 350 means 350 mA; 1.2 A, 350m or 0.35 A are read as written. Choose "(remove this load)" to drop a row.</p>
       </FormShell>
-      {stage.kind === 'final' && stage.pa ? <PaForm project={project} stage={stage} state={stateFor('pa', failed, () => formValues(paSpec, stage.pa))} rails={railOptions} /> : null}
-      {stage.kind === 'lpf' && stage.lpf ? <LpfForm project={project} stage={stage} state={stateFor('lpf', failed, () => formValues(lpfSpec, stage.lpf))} /> : null}
-      {stage.kind === 'tr' && stage.relay ? <RelayForm project={project} stage={stage} state={stateFor('relay', failed, () => formValues(relaySpec, stage.relay))} rails={railOptions} /> : null}
+      {own ? <DataForm project={project} stage={stage} data={own.data} state={stateFor(own.data.key, failed, () => formValues(own.data.spec, own.value))} rails={railOptions} /> : null}
       {results as never}
     </div>
   );
 };
 
-const PaForm: FC<{ project: Project; stage: Stage; state: FieldState; rails: [string, string][] }> = ({ project, stage, state, rails }) => (
-  <FormShell project={project} stage={stage} path="/pa" title="Final amplifier data" state={state} submit="Save PA data">
-    <div class="row">
-      <SpecField spec={paSpec} k="topology" state={state} />
-      <SpecField spec={paSpec} k="amplifierClass" state={state} />
-      <SpecField spec={paSpec} k="railId" state={state} options={rails} />
-      <SpecField spec={paSpec} k="devices" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={paSpec} k="saturationV" state={state} />
-      <SpecField spec={paSpec} k="rdsOnOhm" state={state} />
-      <SpecField spec={paSpec} k="turnsRatio" state={state} />
-      <SpecField spec={paSpec} k="loadOhm" state={state} />
-      <SpecField spec={paSpec} k="efficiency" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={paSpec} k="deviceVdsMaxV" state={state} />
-      <SpecField spec={paSpec} k="deviceIdMaxA" state={state} />
-      <SpecField spec={paSpec} k="biasIdleMaxA" state={state} />
-      <SpecField spec={paSpec} k="referencePowerW" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={paSpec} k="mount.thetaJcKPerW" state={state} />
-      <SpecField spec={paSpec} k="mount.thetaCsKPerW" state={state} />
-      <SpecField spec={paSpec} k="mount.thetaSaKPerW" state={state} />
-      <SpecField spec={paSpec} k="mount.tjMaxC" state={state} />
-    </div>
-  </FormShell>
-);
-
-const LpfForm: FC<{ project: Project; stage: Stage; state: FieldState }> = ({ project, stage, state }) => (
-  <FormShell project={project} stage={stage} path="/lpf" title="Low-pass filter design" state={state} submit="Save and redesign">
-    <div class="row">
-      <SpecField spec={lpfSpec} k="response" state={state} />
-      <SpecField spec={lpfSpec} k="rippleDb" state={state} />
-      <SpecField spec={lpfSpec} k="order" state={state} />
-      <SpecField spec={lpfSpec} k="form" state={state} />
-      <SpecField spec={lpfSpec} k="cutoffHz" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={lpfSpec} k="capacitorSeries" state={state} />
-      <SpecField spec={lpfSpec} k="allowParallelPairs" state={state} />
-      <SpecField spec={lpfSpec} k="coreName" state={state} size={30} />
-      <SpecField spec={lpfSpec} k="coreAlHPerTurn2" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={lpfSpec} k="inductorQ" state={state} />
-      <SpecField spec={lpfSpec} k="capacitorQ" state={state} />
-      <SpecField spec={lpfSpec} k="capacitorTolerance" state={state} />
-      <SpecField spec={lpfSpec} k="inductorTolerance" state={state} />
-      <SpecField spec={lpfSpec} k="monteCarloTrials" state={state} />
-      <SpecField spec={lpfSpec} k="seed" state={state} />
-    </div>
-  </FormShell>
-);
-
-const RelayForm: FC<{ project: Project; stage: Stage; state: FieldState; rails: [string, string][] }> = ({ project, stage, state, rails }) => (
-  <FormShell project={project} stage={stage} path="/relay" title="T/R relay data" state={state} submit="Save relay data">
-    <div class="row">
-      <SpecField spec={relaySpec} k="contactCarryA" state={state} />
-      <SpecField spec={relaySpec} k="contactSwitchA" state={state} />
-      <SpecField spec={relaySpec} k="contactRatedV" state={state} />
-      <SpecField spec={relaySpec} k="rfRatedVpeak" state={state} />
-      <SpecField spec={relaySpec} k="dcSwitchedA" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={relaySpec} k="coilA" state={state} />
-      <SpecField spec={relaySpec} k="coilRailId" state={state} options={rails} none="(not on a rail here)" />
-      <SpecField spec={relaySpec} k="coilReceive" state={state} />
-      <SpecField spec={relaySpec} k="coilKeyUp" state={state} />
-      <SpecField spec={relaySpec} k="coilKeyDown" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={relaySpec} k="isolationDb" state={state} />
-      <SpecField spec={relaySpec} k="position" state={state} />
-      <SpecField spec={relaySpec} k="receiverMaxInputW" state={state} />
-    </div>
-    <div class="row">
-      <SpecField spec={relaySpec} k="operateS" state={state} />
-      <SpecField spec={relaySpec} k="releaseS" state={state} />
-      <SpecField spec={relaySpec} k="bounceS" state={state} />
-      <SpecField spec={relaySpec} k="txDelayS" state={state} />
-      <SpecField spec={relaySpec} k="wpm" state={state} />
-    </div>
+/** The form of the data block this stage's kind owns, drawn from its registry entry (rows of spec fields). */
+const DataForm: FC<{ project: Project; stage: Stage; data: StageData; state: FieldState; rails: [string, string][] }> = ({ project, stage, data, state, rails }) => (
+  <FormShell project={project} stage={stage} path={`/${data.key}`} title={data.spec.label} state={state} submit={data.submit}>
+    {data.rows.map((row) => (
+      <div class="row">
+        {row.map((k) => {
+          const f = data.spec.fields[k];
+          const refOptions = f.type === 'ref' && f.to === 'rail' ? rails : undefined;
+          return <SpecField spec={data.spec} k={k} state={state} options={refOptions} none={f.type === 'ref' ? '(not on a rail here)' : undefined} size={f.type === 'text' ? 30 : undefined} />;
+        })}
+      </div>
+    ))}
   </FormShell>
 );

@@ -10,9 +10,12 @@ import { num, parseForm, type FieldErrors } from '../form';
 import { projectEdit, doneNotice, type ChangeResult } from '../edit';
 import { sendPage, sendPartial, formValues, isHtmx } from '../render';
 import type { Deps } from '../deps';
-import { stageValues, paValues, lpfValues, relayValues } from '../stage-forms';
 import { readLoads } from '../../core/edits/stage-loads';
-import { stageSchema, paSchema, lpfSchema, relaySchema } from '../stage-forms';
+import { stageSchema, stageValues } from '../stage-forms';
+import { STAGE_DATA, missingRefs } from '../../core/spec/stage-data';
+import { formValues as specText } from '../../core/spec/derive';
+import { formName } from '../../core/spec/field';
+import { specFormSchema } from '../forms/spec-schema';
 import { Layout } from '../../../views/layout';
 import { StageBody } from '../../../views/pages/stage';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
@@ -25,9 +28,7 @@ const sid = (c: Context) => c.req.param('sid')!;
 /** Each stage form's text (as the page fills it), or null when the stage no longer has that data. */
 const formText: Record<string, (s: Stage) => Record<string, string> | null> = {
   stage: stageValues,
-  pa: (s) => (s.kind === 'final' && s.pa ? paValues(s.pa) : null),
-  lpf: (s) => (s.kind === 'lpf' && s.lpf ? lpfValues(s.lpf) : null),
-  relay: (s) => (s.kind === 'tr' && s.relay ? relayValues(s.relay) : null),
+  ...Object.fromEntries(STAGE_DATA.map((d) => [d.key, (s: Stage) => (s.kind === d.kind && s[d.key] ? specText(d.spec, s[d.key]) : null)])),
 };
 
 function withStage(p: Project, id: string, f: (s: Stage) => Stage | { errors: FieldErrors }): ChangeResult {
@@ -179,21 +180,15 @@ export function stageRoutes(deps: Deps) {
     return saveStage(c);
   });
 
-  app.post(
-    '/projects/:id/stages/:sid/pa',
-    edit('pa', paSchema, (p, d, c) => {
-      if (!p.supply.rails.some((r) => r.id === d.railId)) return { errors: { railId: 'That rail no longer exists; choose another.' } };
-      return withStage(p, sid(c), (s) => ({ ...s, pa: d }));
-    }),
-  );
-  app.post('/projects/:id/stages/:sid/lpf', edit('lpf', lpfSchema, (p, d, c) => withStage(p, sid(c), (s) => ({ ...s, lpf: d }))));
-  app.post(
-    '/projects/:id/stages/:sid/relay',
-    edit('relay', relaySchema, (p, d, c) => {
-      if (d.coilRailId && !p.supply.rails.some((r) => r.id === d.coilRailId)) return { errors: { coilRailId: 'That rail no longer exists; choose another.' } };
-      return withStage(p, sid(c), (s) => ({ ...s, relay: d }));
-    }),
-  );
+  // the data block each kind owns (PA, filter, relay): one route per registry entry
+  for (const d of STAGE_DATA) {
+    const change = (p: Project, value: Record<string, unknown>, c: Context): ChangeResult => {
+      const missing = missingRefs(p, d.spec, value);
+      if (missing.length) return { errors: Object.fromEntries(missing.map((e) => [formName(e.field, d.spec.fields[e.field]), e.message])) };
+      return withStage(p, sid(c), (s) => ({ ...s, [d.key]: value }));
+    };
+    app.post(`/projects/:id/stages/:sid/${d.key}`, edit(d.key, specFormSchema<Record<string, unknown>>(d.spec), change));
+  }
 
   app.get('/projects/:id/stages/:sid/delete', async (c) => {
     const p = await loadProject(deps.database.db, c.req.param('id'));
