@@ -35,9 +35,16 @@ type Glyph = ReturnType<FontkitFont['glyphForCodePoint']>;
  * long parts list take seconds. Latin/Greek text of the pack needs no ligatures or contextual forms;
  * pdf-lib draws glyphs at their advances (no kerning) either way.
  */
+// Parsed once per process per font file: the bytes are read once (fontBytes), so the same array comes back, and
+// each document's embedder makes its own subset from the shared, read-only parsed font.
+const parsed = new WeakMap<object, FontkitFont>();
+
 const perCharacterFontkit: Fontkit = {
   create(data, postscriptName) {
+    const held = postscriptName === undefined ? parsed.get(data) : undefined;
+    if (held) return held;
     const font = fontkit.create(data, postscriptName);
+    if (postscriptName === undefined) parsed.set(data, font);
     const cache = new Map<number, Glyph>();
     const glyphFor = (cp: number): Glyph => {
       let g = cache.get(cp);

@@ -42,6 +42,9 @@ export interface Row {
   span?: boolean;
 }
 
+/** Glyph advances per character (1000-unit em), regular and bold: the same font files in every document. */
+const ADVANCE = [new Map<string, number>(), new Map<string, number>()];
+
 export class Layout {
   readonly marginTopPt = 46;
   readonly marginBottomPt = 52;
@@ -83,6 +86,7 @@ export class Layout {
 
   newPage(): void {
     this.page = this.doc.addPage(PAPER_SIZES_PT[this.paper]);
+    this.pageFont = null;
     this.pages.push(this.page);
     this.yPt = this.topPt;
   }
@@ -104,26 +108,32 @@ export class Layout {
     return clean(text, this.fonts.charset);
   }
 
-  private readonly advance = [new Map<string, number>(), new Map<string, number>()];
-
   /**
-   * Width of clean text: the sum of glyph advances, cached per character. pdf-lib draws glyphs at their
-   * advances without kerning, so this matches what is drawn, and avoids a fontkit layout per call.
+   * Width of clean text: the sum of glyph advances, cached per character (per process: the fonts are the same
+   * files) and per whole string within this document (parts lists repeat their cells). pdf-lib draws glyphs at
+   * their advances without kerning, so this matches what is drawn, and avoids a fontkit layout per call.
    */
   width(text: string, sizePt: number, bold = false): number {
-    const cache = this.advance[bold ? 1 : 0];
-    const font = this.font(bold);
-    let units = 0;
-    for (const ch of text) {
-      let w = cache.get(ch);
-      if (w === undefined) {
-        w = font.widthOfTextAtSize(ch, 1000);
-        cache.set(ch, w);
+    const strings = this.stringUnits[bold ? 1 : 0];
+    let units = strings.get(text);
+    if (units === undefined) {
+      const cache = ADVANCE[bold ? 1 : 0];
+      const font = this.font(bold);
+      units = 0;
+      for (const ch of text) {
+        let w = cache.get(ch);
+        if (w === undefined) {
+          w = font.widthOfTextAtSize(ch, 1000);
+          cache.set(ch, w);
+        }
+        units += w;
       }
-      units += w;
+      strings.set(text, units);
     }
     return (units * sizePt) / 1000;
   }
+
+  private readonly stringUnits = [new Map<string, number>(), new Map<string, number>()];
 
   textWidth(text: string, sizePt: number, bold = false): number {
     return this.width(this.clean(text), sizePt, bold);
@@ -134,10 +144,15 @@ export class Layout {
     const fits = (s: string) => this.width(s, sizePt, bold) <= widthPt;
     const lines: string[] = [];
     let line = '';
+    // widths add up (no kerning): the line's width grows by a space and the word, with no re-measuring of the line
+    const spaceW = this.width(' ', sizePt, bold);
+    let lineW = 0;
     for (const word of this.clean(text).split(' ').filter((w) => w.length > 0)) {
-      const candidate = line ? `${line} ${word}` : word;
-      if (fits(candidate)) {
-        line = candidate;
+      const wordW = this.width(word, sizePt, bold);
+      const candidateW = line ? lineW + spaceW + wordW : wordW;
+      if (candidateW <= widthPt) {
+        line = line ? `${line} ${word}` : word;
+        lineW = candidateW;
         continue;
       }
       if (line) lines.push(line);
@@ -150,6 +165,7 @@ export class Layout {
         rest = rest.slice(n);
       }
       line = rest;
+      lineW = this.width(rest, sizePt, bold);
     }
     if (line || lines.length === 0) lines.push(line);
     return lines;
@@ -158,8 +174,18 @@ export class Layout {
   /** Draw one line of already-clean text with its baseline at `baselinePt`. */
   drawAt(text: string, xPt: number, baselinePt: number, sizePt: number, bold = false, color: RGB = INK): void {
     const t = this.clean(text);
-    if (t.length > 0) this.page.drawText(t, { x: xPt, y: baselinePt, size: sizePt, font: this.font(bold), color });
+    if (t.length === 0) return;
+    // drawText with a `font` option adds two entries to the page's font dictionary on every call (it sets the
+    // font and sets the old one back); setting the page's font only when it changes adds one per switch
+    const font = this.font(bold);
+    if (this.pageFont !== font) {
+      this.page.setFont(font);
+      this.pageFont = font;
+    }
+    this.page.drawText(t, { x: xPt, y: baselinePt, size: sizePt, color });
   }
+
+  private pageFont: PDFFont | null = null;
 
   /** A wrapped paragraph at the cursor; breaks pages between lines. */
   text(text: string, style: TextStyle = {}): void {
