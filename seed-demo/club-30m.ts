@@ -201,7 +201,8 @@ export const club30m: Project = {
         maxInputV: 40,
         mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: 4.5, tjMaxC: 125 },
       },
-      { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 2.5, minimumV: null },
+      // invented: below 20 V the final falls well short of its 20 W (its output goes as (V - Vsat)²)
+      { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 2.5, minimumV: 20 },
     ],
     primaryFuseA: null,
   },

@@ -14,6 +14,8 @@ import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
 import { settingsSpec } from './settings';
 import { rfSettingsSpec } from './rf-settings';
+import { addRailSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
+import { batterySpec, rectifiedSpec, regulatedSpec } from './supply-rails';
 
 /** One stored object and the words that name it ("Stage 'PA', PA data"). */
 export interface Located {
@@ -44,6 +46,13 @@ export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
   { spec: costingSpec, at: (p) => [{ subject: 'Costing settings', value: p.costing }] },
   { spec: settingsSpec, at: (p) => [{ subject: 'Project settings', value: p }] },
   { spec: rfSettingsSpec, at: (p) => [{ subject: 'RF settings', value: p.rf }] },
+  // The supply's objects are checked by the supply design itself (power/supply-inputs.ts, same specs), because a
+  // refused transformer, winding or rail must also be left out of the design with everything that depends on it;
+  // listing them here too would report each refusal twice. The add-rail form has no stored object.
+  ...[transformerSpec, windingSpec, primaryFuseSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec].map((spec) => ({
+    spec,
+    at: (): Located[] => [],
+  })),
 ];
 
 /** Fail findings for every stored value outside its field's definition. */
