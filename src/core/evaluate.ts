@@ -10,6 +10,7 @@ import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
 import { checkProjectInputs } from './spec/project-check';
+import { mainsCornerFindings } from './rules/rule-set';
 
 export interface EvaluationReport {
   budget: BudgetReport;
@@ -175,6 +176,7 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);
-  const findings = sortFindings([...checkProjectInputs(project), ...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
+  const mains = mainsCornerFindings(project.mains, project.rf.spuriousRule);
+  const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
   return { budget, supply, rf, cost, catalog, paRailV, findings };
 }

@@ -1,6 +1,7 @@
 // A fresh project with sensible defaults (pure: ids and clock come from the caller).
 import type { Project, Mains, RfSettings } from './model';
 import { paDefaultRailId, relayCoilDefaultRailId } from './role-defaults';
+import { defaultRuleSet } from './rules/rule-set';
 import { defaults } from './spec/derive';
 import { settingsSpec } from './spec/settings';
 import { rfSettingsSpec } from './spec/rf-settings';
@@ -20,7 +21,8 @@ export function newProject(id: string, name: string, frequencyHz: number, target
     version: 1,
     supply: { transformers: [], rails: [], primaryFuseA: null },
     stages: [],
-    rf: defaultRfSettings(),
+    // the rule set follows the mains preset (120 V / 60 Hz: US; other mains: ITU / CEPT); editable in the RF settings
+    rf: { ...defaultRfSettings(), spuriousRule: defaultRuleSet(mains) ?? defaultRfSettings().spuriousRule },
     parts: [],
     bom: [],
     costing: { attritionFraction: 0, sparesPerLine: 0, exchangeRates: {}, suppliers: [] },

@@ -6,6 +6,7 @@ import { formatValue } from '../core/units';
 import { formatMoney } from '../core/cost/money';
 import { actionable, standingCautions } from '../core/findings';
 import { isSourceKey, sourceText } from '../core/sources/registry';
+import { GOVERNS, RULE_SETS } from '../core/rules/rule-set';
 
 export const EVALUATION_FORMAT = 'rigwright-evaluation';
 export const EVALUATION_FORMAT_VERSION = 1;
@@ -46,6 +47,7 @@ export function renderEvaluationText(project: Project, report: EvaluationReport)
   const out: string[] = [];
   out.push(`${project.name}`);
   out.push(`${formatValue(project.frequencyHz, 'Hz', 4)}, ${formatValue(project.targetPowerW, 'W')}, ${project.kits} kit(s)`);
+  out.push(`Rule set: ${RULE_SETS[project.rf.spuriousRule].label}. ${GOVERNS}`);
   out.push('');
   out.push('Current budget (A delivered per rail)');
   out.push(`${pad('Rail', 40)}${lpad('Volts', 9)}${MODES.map((m) => lpad(MODE_LABELS[m], 13)).join('')}`);

@@ -5,6 +5,7 @@ import { raw } from 'hono/html';
 import type { Finding } from '../../src/core/findings';
 import { actionable, standingCautions } from '../../src/core/findings';
 import { sourceText } from '../../src/core/sources/registry';
+import { GOVERNS, RULE_SETS } from '../../src/core/rules/rule-set';
 import { StandingCautions } from '../components/standing-cautions';
 import type { PaResult } from '../../src/core/rf/pa';
 import type { LpfStageResult, RfReport } from '../../src/core/rf/report';
@@ -215,6 +216,8 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
   );
 };
 
+const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
 const Exposure: FC<{ report: RfReport }> = ({ report }) => {
   const e = report.exposure;
   if (!e) return null;
@@ -224,11 +227,12 @@ const Exposure: FC<{ report: RfReport }> = ({ report }) => {
       <KV
         rows={[
           ['Time-averaged power', `${fv(e.averagePowerW, 'W')} from ${fv(e.peakPowerW, 'W')} key-down; EIRP ${fv(e.eirpW, 'W')}, ERP ${fv(e.erpW, 'W')}`],
-          ['General public (uncontrolled)', `${fv(e.generalDistanceM, 'm')} (limit ${fv(e.limitGeneralWPerM2, 'W')}/m²)`],
-          ['You and your household (controlled)', `${fv(e.controlledDistanceM, 'm')} (limit ${fv(e.limitControlledWPerM2, 'W')}/m²)`],
+          ['Limits', `${e.limitsName} (source: ${sourceText(e.ruleSet === 'us-97-307' ? 'exposure.fcc-distance' : 'exposure.icnirp-distance')})`],
+          [cap(e.generalLabel), `${fv(e.generalDistanceM, 'm')} (limit ${fv(e.limitGeneralWPerM2, 'W')}/m²)`],
+          [cap(e.controlledLabel), `${fv(e.controlledDistanceM, 'm')} (limit ${fv(e.limitControlledWPerM2, 'W')}/m²)`],
           ['Near-field boundary λ/2π', `${fv(e.nearFieldDistanceM, 'm')}${e.farFieldValid ? '' : ': the distances above lie inside it and are estimates only'}`],
           ['Ground reflection', e.groundReflection ? 'included (factor 2.56)' : 'not included'],
-          ['US exemption (47 CFR 1.1307(b)(3)(i)(C))', e.exempt === null ? '—' : e.exempt ? `exempt for people at ${fv(e.nearFieldDistanceM, 'm')} or more (threshold ${fv(e.exemptionThresholdW, 'W')} ERP)` : `evaluate for people closer than ${fv(e.exemptBeyondM, 'm')}`],
+          ['US exemption (47 CFR 1.1307(b)(3)(i)(C))', e.ruleSet !== 'us-97-307' ? 'not part of the ITU / CEPT rule set' : e.exempt === null ? '—' : e.exempt ? `exempt for people at ${fv(e.nearFieldDistanceM, 'm')} or more (threshold ${fv(e.exemptionThresholdW, 'W')} ERP)` : `evaluate for people closer than ${fv(e.exemptBeyondM, 'm')}`],
         ]}
       />
       <p class="caution">{e.caution}</p>
@@ -256,12 +260,30 @@ export const RfFindings: FC<{ findings: Finding[] }> = ({ findings }) => (
   </>
 );
 
+/** The rule set in force, its sources, and who governs. */
+export const RuleSetBlock: FC<{ ruleSet: RfReport['ruleSet'] }> = ({ ruleSet }) => {
+  const info = RULE_SETS[ruleSet];
+  return (
+    <div class="rule-set" data-rule-set={ruleSet}>
+      <p>
+        <strong>Rule set: {info.label}.</strong> {GOVERNS}
+      </p>
+      <ul class="sources">
+        {info.sources.map((k) => (
+          <li data-source={k}>{sourceText(k)}</li>
+        ))}
+      </ul>
+    </div>
+  );
+};
+
 export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
   <section class="card" id="rf-results">
     <h2>RF design</h2>
     <p class="summary-line">
       {fv(report.frequencyHz, 'Hz', 5)}, {fv(report.outputPowerW, 'W')} at the output (target {fv(report.targetPowerW, 'W')})
     </p>
+    <RuleSetBlock ruleSet={report.ruleSet} />
     {report.inputErrors.length > 0 ? (
       <ul class="field-errors">
         {report.inputErrors.map((e) => (

@@ -155,6 +155,6 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   if (exposure) all.push(...exposure.findings);
   return {
     frequencyHz, targetPowerW, outputPowerW, paStageId: paStage?.id ?? null, lpfStageId: lpfStageDef?.id ?? null, inputErrors,
-    stages, harmonics, exposure, findings: sortFindings(all),
+    ruleSet: project.rf.spuriousRule, stages, harmonics, exposure, findings: sortFindings(all),
   };
 }

@@ -1,6 +1,7 @@
 // Shape of the RF engine's report: plain JSON (no Maps, no NaN), SI units unless a key says otherwise.
 import type { Finding } from '../findings';
 import type { ExposureResult } from './exposure';
+import type { RfSettings } from '../model';
 import type { HarmonicsReport } from './harmonics';
 import type { LpfAnalysis } from './lpf-analysis';
 import type { LpfDesign } from './lpf-design';
@@ -48,6 +49,8 @@ export interface RfReport {
   /** Project-level input errors (frequency, power). */
   inputErrors: FieldError[];
   stages: RfStageResult[];
+  /** The project's rule set (spurious, exposure and mains sources). */
+  ruleSet: RfSettings['spuriousRule'];
   harmonics: HarmonicsReport | null;
   exposure: ExposureResult | null;
   /** All findings, most severe first. */

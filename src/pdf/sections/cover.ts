@@ -5,6 +5,7 @@ import { bandOf } from '../../core/rf/bands';
 import { formatMoney } from '../../core/cost/money';
 import { rfView } from '../../core/checklists';
 import { actionable, worstSeverity } from '../../core/findings';
+import { GOVERNS, RULE_SETS } from '../../core/rules/rule-set';
 import { GREY, type Layout } from '../layout';
 import type { PackOptions, PackReport } from '../report';
 import { findingsList, fv, keyValues } from './common';
@@ -24,6 +25,7 @@ export function cover(l: Layout, project: Project, report: PackReport, opts: Pac
     ['Target output', fv(project.targetPowerW, 'W')],
     ['Computed output', rf?.paOutputW != null ? fv(rf.paOutputW, 'W') : 'not computed'],
     ['Power source', supplyText],
+    ['Rule set', `${RULE_SETS[project.rf.spuriousRule].label}. ${GOVERNS} Sources: see the Sources section`],
     ['Rails', project.supply.rails.map((r) => r.name).join('; ') || 'none'],
     ['Kits in this build', String(project.kits)],
     ['Data date', `${opts.dataDate} (prices and results as computed then)`],

@@ -91,7 +91,8 @@ function exposure(l: Layout, rf: RfReport): void {
   if (!e) return notComputed(l, 'RF exposure');
   keyValues(l, [
     ['Power', `${fv(e.peakPowerW, 'W')} key-down, ${fv(e.averagePowerW, 'W')} time-averaged, EIRP ${fv(e.eirpW, 'W')}`],
-    ['Minimum distance', `${e.controlledDistanceM !== null ? fv(e.controlledDistanceM, 'm', 2) : 'outside the table'} controlled (you); ${e.generalDistanceM !== null ? fv(e.generalDistanceM, 'm', 2) : 'outside the table'} general public${e.groundReflection ? ', ground reflection included' : ''}`],
+    ['Limits', `${e.limitsName}. Source: ${sourceText(e.ruleSet === 'us-97-307' ? 'exposure.fcc-distance' : 'exposure.icnirp-distance')}`],
+    ['Minimum distance', `${e.controlledDistanceM !== null ? fv(e.controlledDistanceM, 'm', 2) : 'outside the table'} ${e.controlledLabel}; ${e.generalDistanceM !== null ? fv(e.generalDistanceM, 'm', 2) : 'outside the table'} ${e.generalLabel}${e.groundReflection ? ', ground reflection included' : ''}`],
     ['Near field', `inside ${fv(e.nearFieldDistanceM, 'm', 2)} the figures are estimates only${e.farFieldValid ? '' : ' (a distance above lies inside it)'}`],
   ], 110, 8.5);
   l.text(e.caution, { sizePt: 8.5, color: CAUTION });
