@@ -59,6 +59,18 @@ describe('parts list lines', () => {
     expect(await stored()).toEqual(before);
   });
 
+  it('refuses a quantity of 0 or above 100 000 per rig, naming the field; nothing saved', async () => {
+    const before = await stored();
+    for (const qty of ['0', '200000']) {
+      const res = await post(`${base}/lines/b6`, { version: String(before.version), stageId: '', partId: 'p-bridge', qty, refs: 'BR1, BR2', notes: '' }, true);
+      expect(res.status).toBe(422);
+      const html = await res.text();
+      expect(html).toContain('Quantity per rig must be more than 0 and at most 100000');
+      expect(html).toContain(`value="${qty}"`);
+    }
+    expect(await stored()).toEqual(before);
+  });
+
   it('refuses a line for a part that is not in the catalog', async () => {
     const before = await stored();
     const res = await post(`${base}/lines`, { version: String(before.version), stageId: '', partId: 'p-nothing', qty: '1', refs: '', notes: '' }, true);

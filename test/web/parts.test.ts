@@ -104,3 +104,42 @@ describe('parts catalog page', () => {
     expect((await stored()).parts.some((x) => x.id === added.id)).toBe(false);
   });
 });
+
+describe('bad values are refused with the field named, kept as typed, nothing saved', () => {
+  const refused = async (path: string, fields: Record<string, string>, says: string, kept: string) => {
+    const before = await stored();
+    for (const htmx of [false, true]) {
+      const res = await post(path, { version: String(before.version), ...fields }, htmx);
+      expect(res.status).toBe(422);
+      const html = await res.text();
+      expect(html).toContain(says);
+      expect(html).toContain(`value="${kept}"`);
+    }
+    expect(await stored()).toEqual(before);
+  };
+
+  it('a shipping charge with a part of a cent', () =>
+    refused(`/projects/${ID}/suppliers/0`, { name: 'Northfield Components', shipping: '8.505', currency: 'USD' }, 'Shipping per order &quot;8.505&quot; has more than two decimals', '8.505'));
+
+  it('a currency that is not a three-letter code', () =>
+    refused(`/projects/${ID}/parts/p-c4700/offers/o9`, { supplier: 'Northfield Components', sku: 'NC-E4735', currency: 'US1', breaks: '1: 2.15', minOrder: '1', orderMultiple: '1', stockNote: '' }, 'Currency must be a three-letter code', 'US1'));
+
+  it('ratings that are not key=value', () =>
+    refused(`/projects/${ID}/parts/p-pcb`, { description: 'PCB', category: 'pcb', ratings: 'layers 2' }, 'Ratings: &quot;layers 2&quot; is not key=value', 'layers 2'));
+
+  it('spares above the one limit (1000)', async () => {
+    const p = await stored();
+    await refused(`/projects/${ID}/costing`, { attrition: '5', spares: '1001', rates: 'EUR = 1.08' }, 'Spares per line must be at least 0 and at most 1000', '1001');
+    expect(p.costing.sparesPerLine).toBe(0);
+  });
+});
+
+describe('an offer without price breaks', () => {
+  it('is saved as not priced yet (as a CSV import makes it)', async () => {
+    const p = await stored();
+    const res = await post(`/projects/${ID}/parts/p-pcb/offers`, { version: String(p.version), supplier: 'Harbor Radio Surplus', sku: '', currency: 'USD', breaks: '', minOrder: '1', orderMultiple: '1', stockNote: 'ask' });
+    expect(res.status).toBe(303);
+    expect((await stored()).parts.find((x) => x.id === 'p-pcb')!.offers.at(-1)).toMatchObject({ supplier: 'Harbor Radio Surplus', breaks: [], stockNote: 'ask' });
+    expect(await (await t.app.request(`http://localhost/projects/${ID}/parts`)).text()).toContain('without prices');
+  });
+});
