@@ -61,6 +61,45 @@ describe('supply page', () => {
     expect(r.diodeResistanceOhm).toBeCloseTo(0.02, 12);
   });
 
+  it('states and clears the lowest voltage the PA rail’s loads need (V box, empty = not stated)', async () => {
+    const p = await stored();
+    const rail = p.supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
+    const page = await (await t.app.request(`http://localhost${base}`)).text();
+    expect(page).toContain('Lowest voltage its loads need');
+    const values = { version: String(p.version), name: rail.name, windingId: rail.windingId, topology: rail.topology, diodeDrop: '0.9', diodeR: '30m', reservoir: '6800', esr: '30m', bleeder: '2k2', capV: '50', capRipple: '3.6', rippleTarget: '2.5', margin: '0', fuse: '2.5' };
+    let res = await post(`${base}/rails/rail-pa`, { ...values, minimumV: '21.5' }, true);
+    expect(res.status).toBe(200);
+    let r = (await stored()).supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
+    expect(r.minimumV).toBe(21.5);
+    expect(r.reservoirF).toBeCloseTo(6800e-6, 15); // a bare reservoir is read in µF
+    res = await post(`${base}/rails/rail-pa`, { ...values, version: String(p.version + 1), minimumV: '' }, true);
+    expect(res.status).toBe(200);
+    r = (await stored()).supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
+    expect(r.minimumV).toBeNull();
+  });
+
+  it('refuses a negative lowest voltage and a 0 µF reservoir by name, keeps the text and saves nothing', async () => {
+    const before = await stored();
+    const res = await post(`${base}/rails/rail-pa`, {
+      version: String(before.version), name: 'PA rail', windingId: 'w-20', topology: 'bridge', diodeDrop: '0.9', diodeR: '30m', reservoir: '0',
+      esr: '30m', bleeder: '', capV: '', capRipple: '', rippleTarget: '', margin: '0', fuse: '', minimumV: '-3',
+    }, true);
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain('Lowest voltage its loads need must be more than');
+    expect(html).toContain('Reservoir must be more than');
+    expect(html).toContain('value="-3"');
+    expect(await stored()).toEqual(before);
+  });
+
+  it('a new battery rail starts from the battery spec’s values with no stated minimum', async () => {
+    const v = (await stored()).version;
+    const res = await post(`${base}/rails`, { version: String(v), name: 'Backup battery', source: 'battery' });
+    expect(res.status).toBe(303);
+    const added = (await stored()).supply.rails.at(-1)!;
+    expect(added).toMatchObject({ kind: 'battery', name: 'Backup battery', chemistry: 'LiFePO4', fullV: 14.4, endV: 10, minimumV: null });
+  });
+
   it('edits a regulated rail to a fixed regulator raised by diodes, with heatsink θsa left to compute', async () => {
     const p = await stored();
     const res = await post(`${base}/rails/rail-13v8`, {
