@@ -17,6 +17,7 @@ import { stageRoutes } from './web/routes/stage';
 import { rfRoutes } from './web/routes/rf';
 import { packRoutes } from './web/routes/pack';
 import { netlistRoutes } from './web/routes/netlists';
+import { sourcesRoutes } from './web/routes/sources';
 import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
 import { sendPage } from './web/render';
@@ -75,6 +76,7 @@ export function buildApp(deps: Deps) {
   app.route('/', rfRoutes(deps));
   app.route('/', packRoutes(deps));
   app.route('/', netlistRoutes(deps));
+  app.route('/', sourcesRoutes(deps));
   app.route('/', partsRoutes(deps));
   app.route('/', bomRoutes(deps));
 

@@ -1,7 +1,7 @@
 // Page frame: the same for every page; project pages get the section tabs.
 import type { Child, FC } from 'hono/jsx';
 
-export type Section = 'overview' | 'supply' | 'rf' | 'parts' | 'bom' | 'pack';
+export type Section = 'overview' | 'supply' | 'rf' | 'parts' | 'bom' | 'pack' | 'sources';
 
 const TABS: [Section, string, string][] = [
   ['overview', 'Stages & budget', ''],
@@ -10,6 +10,7 @@ const TABS: [Section, string, string][] = [
   ['parts', 'Parts catalog', '/parts'],
   ['bom', 'Parts list & cost', '/bom'],
   ['pack', 'Builder pack', '/pack'],
+  ['sources', 'Sources', '/sources'],
 ];
 
 /** The project name in the header; an htmx partial that can rename the project sends it again out of band. */

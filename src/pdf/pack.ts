@@ -10,6 +10,7 @@ import { budgetSection } from './sections/budget';
 import { supplySection } from './sections/supply';
 import { rfSection } from './sections/rf';
 import { checklistPages } from './sections/checklists';
+import { sourcesSection } from './sections/sources';
 
 export interface PackResult {
   bytes: Uint8Array;
@@ -29,6 +30,8 @@ export async function buildPackWithInfo(project: Project, report: PackReport, op
   rfSection(l, report.rf);
   checklistPages(l, 'Build checklist', 'Stages in build order. Tick each line as you go; the numbers come from this pack’s computed results.', buildChecklist(project, report));
   checklistPages(l, 'Safety checklist', '', safetyChecklist(project, report));
+  l.newPage();
+  sourcesSection(l, project, report);
   l.footers(() => `${project.name} · data of ${opts.dataDate}`);
   const bytes = await l.doc.save({ useObjectStreams: true });
   return { bytes, pageCount: l.pages.length, packingSheets: sheets };

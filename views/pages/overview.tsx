@@ -192,7 +192,7 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
           <h3>Needs attention ({attention.length})</h3>
           <ul class="findings">
             {attention.map((f) => (
-              <li class={`finding sev-${f.severity}`}>
+              <li class={`finding sev-${f.severity}`} data-rule={f.rule}>
                 <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="source">(Source: {sourceText(f.source)})</span>
               </li>
             ))}
