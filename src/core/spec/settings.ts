@@ -69,7 +69,8 @@ export const thermalInputsSpec = defineSpec({
   },
 });
 
-const name = text('Name', 200, true);
+// a stored project always has a name; the new-project form starts empty so the builder types one
+const name = text('Name', 200, true, 'New project');
 const optional = (f: NumberField): NumberField => ({ ...f, optional: true });
 const MAINS_KEYS = Object.keys(mainsSpec.fields) as (keyof Mains)[];
 const NO_MAINS = Object.fromEntries(MAINS_KEYS.map((k) => [k, null]));
@@ -133,7 +134,7 @@ export const newProjectSpec = defineSpec({
   name: 'new-project',
   label: 'New project',
   fields: {
-    name,
+    name: { ...name, default: '' },
     frequencyHz: { ...rfInputsSpec.fields.frequencyHz, label: 'Band', form: 'band' },
     targetPowerW: rfInputsSpec.fields.targetPowerW,
     mainsPreset: choice('Supply', Object.keys(MAINS_PRESETS).map((k) => [k, PRESET_TEXT[k]] as const), '230-50', { form: 'mains' }),
