@@ -2,14 +2,15 @@
 // Format: { "format": "rigwright-project", "formatVersion": 1, "exportedAt": ISO date, "project": {...} }
 // with every quantity in SI units (V, A, W, Ω, F, H, Hz, s, °C, fractions 0..1) and money in integer cents.
 import { z } from 'zod';
-import type { BomLine, Costing, LpfParams, Mains, Part, PaParams, Project, Rail, RelayParams, RfSettings } from '../core/model';
-import { bomLineSpec, costingSpec, lpfSpec, offerSpec, paSpec, partSpec, relaySpec, supplierSpec } from '../core/spec';
+import type { BomLine, Costing, Mains, Part, Project, Rail, RfSettings, StageLoad } from '../core/model';
+import { bomLineSpec, costingSpec, offerSpec, partSpec, supplierSpec } from '../core/spec';
+import { STAGE_DATA } from '../core/spec/stage-data';
+import { loadSpec, stageSpec } from '../core/spec/stage';
 import { mainsSpec, projectFieldsSpec } from '../core/spec/settings';
 import { primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec/supply';
 import { batterySpec, rectifiedSpec, regulatedSpec } from '../core/spec/supply-rails';
 import { rfSettingsSpec } from '../core/spec/rf-settings';
 import { specFileSchema, specShape } from './spec-schema';
-import { MODES, STAGE_KINDS } from '../core/model';
 
 export const FORMAT = 'rigwright-project';
 export const FORMAT_VERSION = 1;
@@ -22,9 +23,6 @@ const name = z
   .min(1, 'must not be empty')
   .max(200)
   .regex(/^[^\u0000-\u001f\u007f\u2028\u2029]*$/, 'must be one line of text without control characters');
-const nonneg = (max: number) => z.number().finite().min(0).max(max);
-// limits match the web forms, so an imported project can be edited and saved back unchanged
-const perMode = z.object({ receive: nonneg(100), keyUp: nonneg(100), keyDown: nonneg(100) });
 
 // the supply's objects: the same specs as the supply page's forms and core's supply check (src/core/spec/supply*.ts)
 const railKinds = { rectified: rectifiedSpec, regulated: regulatedSpec, battery: batterySpec } as const;
@@ -40,26 +38,20 @@ const rail = z
 const winding = z.object({ id, ...specShape(windingSpec) });
 const transformer = z.object({ id, ...specShape(transformerSpec), windings: z.array(winding).max(20) });
 
-// stage kinds' data: the same specs as the forms and core's checks (src/core/spec)
-const pa = specFileSchema<PaParams>(paSpec);
-const lpf = specFileSchema<LpfParams>(lpfSpec);
-const relay = specFileSchema<RelayParams>(relaySpec);
+// stage kinds' data: the same specs as the forms and core's checks, one optional block per registry entry
+const stageDataSchemas = Object.fromEntries(STAGE_DATA.map((d) => [d.key, specFileSchema<unknown>(d.spec).optional()]));
 
 const stage = z.object({
   id,
-  kind: z.enum(STAGE_KINDS),
-  name,
-  notes: z.string().max(5000),
-  loads: z.array(z.object({ railId: id, currentA: perMode })).max(20),
-  dissipationW: nonneg(10_000).nullable(),
-  pa: pa.optional(),
-  lpf: lpf.optional(),
-  relay: relay.optional(),
+  ...specShape(stageSpec),
+  loads: z.array(specFileSchema<StageLoad>(loadSpec)).max(20),
+  ...stageDataSchemas,
 }).superRefine((s, ctx) => {
   // each kind carries only its own data (the database keeps one set per stage; a driver must not carry a hidden PA)
-  const own = { pa: 'final', lpf: 'lpf', relay: 'tr' } as const;
-  for (const key of ['pa', 'lpf', 'relay'] as const)
-    if (s[key] !== undefined && s.kind !== own[key]) ctx.addIssue({ code: 'custom', path: [key], message: `only a stage of kind "${own[key]}" has ${key} data; this stage is "${s.kind}"` });
+  const o = s as Record<string, unknown>;
+  for (const d of STAGE_DATA)
+    if (o[d.key] !== undefined && o.kind !== d.kind)
+      ctx.addIssue({ code: 'custom', path: [d.key], message: `only a stage of kind "${d.kind}" has ${d.key} data; this stage is "${String(o.kind)}"` });
 });
 
 // parts, offers, suppliers, parts-list lines and costing settings: the same specs as the catalog and parts-list forms
