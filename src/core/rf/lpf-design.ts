@@ -4,6 +4,10 @@ import { defaultCutoffHz } from './bands';
 import { snapCapacitance } from './e-series';
 import { type Checked, validateLpfParams } from './lpf-validate';
 import { prototypeG } from './prototype';
+import { rfInputsSpec } from '../spec/settings';
+import { storedProblem } from '../spec/derive';
+
+const FREQUENCY = rfInputsSpec.fields.frequencyHz;
 
 /** System impedance of the filter (source and load), ohms. */
 export const LPF_R0_OHM = 50;
@@ -62,9 +66,9 @@ export function turnsForInductance(inductanceH: number, alHPerTurn2: number): nu
 /** Synthesise the filter. Invalid parameters give field errors, never a throw. */
 export function designLpf(p: LpfParams, operatingFrequencyHz: number): Checked<LpfDesign> {
   const errors = validateLpfParams(p);
-  if (!(operatingFrequencyHz >= 10e3 && operatingFrequencyHz <= 1e9)) {
-    errors.push({ field: 'frequencyHz', message: 'Operating frequency must be between 10 kHz and 1 GHz.' });
-  }
+  // the project's frequency field (settings spec): one limit for the forms, the file and every check
+  const frequencyProblem = storedProblem(FREQUENCY, operatingFrequencyHz);
+  if (frequencyProblem) errors.push({ field: 'frequencyHz', message: `${FREQUENCY.label} ${frequencyProblem}` });
   if (errors.length > 0) return { ok: false, errors };
   const rippleDb = p.response === 'chebyshev' ? p.rippleDb : 0;
   const cutoffHz = p.cutoffHz ?? defaultCutoffHz(operatingFrequencyHz, p.response);

@@ -13,6 +13,7 @@ import { applySettings, applyRfSettings } from '../../../src/core/edits/settings
 import { validateRfInputs, validateRfSettings, validateThermalInputs } from '../../../src/core/rf/lpf-validate';
 import { parseProjectFile, toProjectFile } from '../../../src/io/project-file';
 import { newProject } from '../../../src/core/new-project';
+import { designLpf } from '../../../src/core/rf/lpf-design';
 
 const DEMOS: Project[] = [club30m, portable20m];
 
@@ -111,6 +112,10 @@ describe('one limit per field: forms, project file and core agree', () => {
     expect(validateRfInputs(10.11e6, 5e-324)).toMatchObject([{ field: 'targetPowerW', message: 'Target output must be at least 1 mW and at most 2 kW' }]);
     expect(fileWith((p) => (p.targetPowerW = 5e-324))).toMatchObject({ ok: false, errors: ['project.targetPowerW: Target output must be at least 1 mW and at most 2 kW'] });
     expect(fileWith((p) => (p.frequencyHz = 100e6))).toMatchObject({ ok: false, errors: [expect.stringMatching(/^project\.frequencyHz: Operating frequency must be at least 100 kHz/)] });
+    // the filter design checks the operating frequency with the same field (it allowed 10 kHz–1 GHz before)
+    const filter = club30m.stages.find((s) => s.lpf)!.lpf!;
+    expect(designLpf(filter, 100e6)).toMatchObject({ ok: false, errors: [{ field: 'frequencyHz', message: expect.stringMatching(/^Operating frequency must be at least 100 kHz and at most 60 MHz/) }] });
+    expect(designLpf(filter, 10.11e6).ok).toBe(true);
   });
 
   it('ambient −40–70 °C and keying duty 0–100 % in core as in the forms and file', () => {
