@@ -17,23 +17,24 @@ export function offerValues(o: Offer | null, currency: string): Record<string, s
   return { ...formValues(offerSpec, { minOrder: 1, orderMultiple: 1 }), currency };
 }
 
-const OfferFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
+// The help lines show on the add forms only: repeated under every stored row they push the rows apart.
+const OfferFields: FC<{ state: FieldState; idp: string; help?: boolean }> = ({ state, idp, help }) => (
   <>
     <SpecField spec={offerSpec} k="supplier" idp={idp} state={state} size={20} list="supplier-names" />
-    <SpecField spec={offerSpec} k="sku" idp={idp} state={state} size={12} hint="" />
+    <SpecField spec={offerSpec} k="sku" idp={idp} state={state} size={10} hint="" />
     <SpecField spec={offerSpec} k="currency" idp={idp} state={state} size={4} hint="" />
-    <SpecField spec={offerSpec} k="breaks" idp={idp} state={state} size={30} />
+    <SpecField spec={offerSpec} k="breaks" idp={idp} state={state} size={24} hint={help ? undefined : ''} />
     <SpecField spec={offerSpec} k="minOrder" idp={idp} state={state} size={4} label="Min. order" />
     <SpecField spec={offerSpec} k="orderMultiple" idp={idp} state={state} size={4} label="Multiple" />
-    <SpecField spec={offerSpec} k="stockNote" idp={idp} state={state} size={14} />
+    <SpecField spec={offerSpec} k="stockNote" idp={idp} state={state} size={10} />
   </>
 );
 
-export const PartFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
+export const PartFields: FC<{ state: FieldState; idp: string; help?: boolean }> = ({ state, idp, help }) => (
   <>
-    <SpecField spec={partSpec} k="description" idp={idp} state={state} size={56} />
+    <SpecField spec={partSpec} k="description" idp={idp} state={state} size={56} hint={help ? undefined : ''} />
     <SpecField spec={partSpec} k="category" idp={idp} state={state} size={16} list="part-categories" />
-    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={48} />
+    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={48} hint={help ? undefined : ''} />
   </>
 );
 
@@ -88,7 +89,7 @@ export const PartCard: FC<{ project: Project; part: Part; failed?: Failed; uses:
         <FormErrors state={addState} />
         <div class="row">
           <span class="row-label">Add an offer:</span>
-          <OfferFields state={addState} idp={`ao-${part.id}`} />
+          <OfferFields state={addState} idp={`ao-${part.id}`} help />
           <button type="submit">Add offer</button>
         </div>
       </form>

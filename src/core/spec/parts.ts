@@ -1,6 +1,6 @@
 // The parts catalog's inputs: a part (description, category, ratings), one supplier offer for it, and a supplier
 // with its shipping charge. Money is integer cents, typed in the major unit of its currency (see MAJOR).
-import { defineSpec } from './field';
+import { defineSpec, U } from './field';
 import { num, text } from './make';
 import { breaksCodec, CURRENCY, MAJOR, MONEY_MAX_CENTS, ratingsCodec } from './parts-text';
 
@@ -18,7 +18,7 @@ export const partSpec = defineSpec({
   },
 });
 
-const pieces = (label: string) => num(label, '', { symbol: 'pcs', scale: 1 }, 1, 1_000_000, 1, { integer: true, example: '10' });
+const pieces = (label: string) => num(label, '', U.none, 1, 1_000_000, 1, { integer: true, example: '10' });
 
 export const offerSpec = defineSpec({
   name: 'offer',
@@ -27,7 +27,7 @@ export const offerSpec = defineSpec({
     supplier: text('Supplier', 120, true, 'New supplier'),
     sku: text('SKU', 120, false, '', { help: 'the supplier’s order code' }),
     currency: currencyField(),
-    breaks: text('Price breaks', 2000, false, '', { codec: breaksCodec, help: 'qty: unit price, e.g. 1: 0.95, 10: 0.78; empty = not priced yet' }),
+    breaks: text('Price breaks', 2000, false, '', { codec: breaksCodec, help: 'e.g. 1: 0.95, 10: 0.78 (empty: not priced yet)' }),
     minOrder: pieces('Minimum order'),
     orderMultiple: pieces('Order multiple'),
     stockNote: text('Stock note', 200, false),
