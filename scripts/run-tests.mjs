@@ -1,5 +1,6 @@
 #!/usr/bin/env node
-// Runs the whole vitest suite and ends with the plain line CI reads: "tests: N passed, M failed".
+// Runs the whole vitest suite and ends with the plain line CI reads: "tests: N passed, M failed, K skipped".
+// Skipped tests are counted and shown (a missing ngspice, chromium or pdftotext skips its tests with the reason printed).
 import { spawnSync } from 'node:child_process';
 import { readFileSync, rmSync, existsSync } from 'node:fs';
 
@@ -9,14 +10,16 @@ const args = ['vitest', 'run', '--reporter=default', '--reporter=json', `--outpu
 const run = spawnSync('npx', args, { stdio: 'inherit', env: { ...process.env, NO_COLOR: '1' } });
 let passed = 0;
 let failed = 0;
+let skipped = 0;
 if (existsSync(report)) {
   const json = JSON.parse(readFileSync(report, 'utf8'));
   passed = json.numPassedTests ?? 0;
+  skipped = (json.numPendingTests ?? 0) + (json.numTodoTests ?? 0);
   failed = (json.numFailedTests ?? 0) + (json.numRuntimeErrorTestSuites ?? 0);
   if (json.numFailedTestSuites && failed === 0) failed = json.numFailedTestSuites;
 } else {
   failed = 1;
 }
 if (run.status !== 0 && failed === 0) failed = 1;
-console.log(`tests: ${passed} passed, ${failed} failed`);
+console.log(`tests: ${passed} passed, ${failed} failed, ${skipped} skipped`);
 process.exit(failed === 0 && passed > 0 ? 0 : 1);

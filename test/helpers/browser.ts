@@ -4,9 +4,10 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { REPO_ROOT, startServer, type RunningServer } from './server';
+import { CHROMIUM } from './tools';
 
-export const CHROMIUM_PATH = '/usr/bin/chromium';
-export const hasChromium = existsSync(CHROMIUM_PATH);
+export const CHROMIUM_PATH = CHROMIUM ?? 'chromium (not found on PATH)';
+export const hasChromium = CHROMIUM !== null;
 export const ARTIFACTS = join(REPO_ROOT, 'test-artifacts');
 
 // launchPersistentContext: chromium.launch() refuses --user-data-dir (STACK.md).

@@ -4,6 +4,7 @@
 // project text reaches another member's machine this way).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { existsSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { NGSPICE, requireTool } from '../helpers/tools';
 import { spawnSync } from 'node:child_process';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -65,12 +66,12 @@ describe('SPICE netlist downloads', () => {
     }
   });
 
-  it.skipIf(!existsSync('/usr/bin/ngspice'))('running a downloaded netlist with ngspice -b runs no command from project text', async () => {
+  it.skipIf(!requireTool(NGSPICE, 'Running a downloaded netlist in ngspice', 'apt-get install ngspice'))('running a downloaded netlist with ngspice -b runs no command from project text', async () => {
     for (const [path, text] of await netlists()) {
       const dir = mkdtempSync(join(tmpdir(), 'rigwright-inject-'));
       try {
         writeFileSync(join(dir, 'download.cir'), text);
-        spawnSync('/usr/bin/ngspice', ['-b', 'download.cir'], { cwd: dir, encoding: 'utf8', timeout: 60_000 });
+        spawnSync(NGSPICE as string, ['-b', 'download.cir'], { cwd: dir, encoding: 'utf8', timeout: 60_000 });
         expect(readdirSync(dir), `${path}: ngspice ran the injected shell command`).not.toContain(MARKER);
       } finally {
         rmSync(dir, { recursive: true, force: true });

@@ -4,15 +4,14 @@
 // differences come from the integration and the steady-state search only.
 import { describe, expect, it } from 'vitest';
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { NGSPICE, requireTool } from '../../helpers/tools';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { rectifierNetlist } from '../../../src/core/power/spice-netlist';
 import { simulateRectifier, type RectifierSimInput } from '../../../src/core/power/rectifier-sim';
 
-const NGSPICE = '/usr/bin/ngspice';
-const hasNgspice = existsSync(NGSPICE) || spawnSync('ngspice', ['-v'], { encoding: 'utf8' }).status === 0;
-if (!hasNgspice) console.warn('ngspice is not installed: the ngspice cross-checks are skipped (apt-get install ngspice).');
+const hasNgspice = requireTool(NGSPICE, 'Rectifier cross-checks against ngspice', 'apt-get install ngspice');
 
 // Tolerances (named with units)
 const toleranceMeanFraction = 0.003; // DC mean, 0.3 %
@@ -37,7 +36,7 @@ function runNgspice(netlist: string): Record<string, number> {
   const dir = mkdtempSync(join(tmpdir(), 'rigwright-spice-'));
   try {
     writeFileSync(join(dir, 'rail.cir'), netlist);
-    const run = spawnSync(existsSync(NGSPICE) ? NGSPICE : 'ngspice', ['-b', 'rail.cir'], { cwd: dir, encoding: 'utf8', timeout: 60_000 });
+    const run = spawnSync(NGSPICE as string, ['-b', 'rail.cir'], { cwd: dir, encoding: 'utf8', timeout: 60_000 });
     const out = `${run.stdout ?? ''}\n${run.stderr ?? ''}`;
     const values: Record<string, number> = {};
     for (const m of out.matchAll(/^(vavg|vpp|vmin|vmax|isec|idpk)\s*=\s*([-+0-9.eE]+)/gm)) values[m[1]] = Number(m[2]);
@@ -61,12 +60,6 @@ describe.skipIf(!hasNgspice)('built-in simulation against ngspice', () => {
       expect(Math.abs(sim.diodePeakA / sp.idpk - 1), `peak ${sim.diodePeakA} vs ${sp.idpk}`).toBeLessThanOrEqual(tolerancePeakFraction);
     });
   }
-});
-
-describe.skipIf(hasNgspice)('ngspice cross-check', () => {
-  it('skipped: ngspice is not installed (apt-get install ngspice)', () => {
-    expect(hasNgspice).toBe(false);
-  });
 });
 
 describe('netlist text', () => {

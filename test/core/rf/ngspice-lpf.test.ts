@@ -1,6 +1,7 @@
 // Cross-check of the ABCD analysis against ngspice AC analysis of the exported netlist.
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { NGSPICE, requireTool } from '../../helpers/tools';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -9,9 +10,7 @@ import { designLpf } from '../../../src/core/rf/lpf-design';
 import { lpfNetlist } from '../../../src/core/rf/lpf-netlist';
 import { lpfParams } from './fixture';
 
-const NGSPICE = '/usr/bin/ngspice';
-const haveNgspice = existsSync(NGSPICE);
-if (!haveNgspice) console.warn('ngspice not found at /usr/bin/ngspice: SPICE cross-check of the low-pass filter skipped (apt-get install ngspice)');
+const haveNgspice = requireTool(NGSPICE, 'SPICE cross-check of the low-pass filter', 'apt-get install ngspice');
 
 // Both sides solve the same linear circuit (constant-Q losses set per frequency with `alter`); the only
 // difference is the 7-significant-digit component values in the netlist.
@@ -39,7 +38,7 @@ describe.skipIf(!haveNgspice)('LPF netlist in ngspice vs ABCD analysis', () => {
       writeFileSync(file, lpfNetlist(d.value, freqs));
       // ngspice exits 1 in batch mode when the netlist has only a .control block ("no simulations run"
       // note), so the exit status is not used; the printed values are.
-      const run = spawnSync(NGSPICE, ['-b', file], { cwd: dir, encoding: 'utf8' });
+      const run = spawnSync(NGSPICE as string, ['-b', file], { cwd: dir, encoding: 'utf8' });
       const out = run.stdout;
       const got = new Map<number, number>();
       for (const m of out.matchAll(/^s21_(\d+)\s*=\s*(\S+)/gm)) got.set(Number(m[1]), Number(m[2]));
