@@ -3,6 +3,19 @@ import { describe, it, expect } from 'vitest';
 import { evaluate } from '../../src/core/evaluate';
 import { DEMO_PROJECTS } from '../../seed-demo/index';
 import type { RectifiedRailReport } from '../../src/core/power/report-types';
+import fc from 'fast-check';
+import { propertyOptions, PROPERTY_SEED } from '../helpers/property';
+import { isSourceKey, sourceText } from '../../src/core/sources/registry';
+
+/** Every finding and supply recommendation carries a registry key whose text a reader sees (not empty, not a key). */
+function expectRegistered(r: ReturnType<typeof evaluate>): void {
+  const recs = (r.supply?.rails ?? []).flatMap((x) => x.recommendations);
+  for (const x of [...r.findings, ...recs]) {
+    expect(isSourceKey(x.source), `unregistered source "${x.source}"`).toBe(true);
+    expect(sourceText(x.source).trim().length, x.source).toBeGreaterThan(10);
+  }
+  for (const f of r.findings) expect(f.message.length, f.rule).toBeGreaterThan(10);
+}
 
 const club = () => structuredClone(DEMO_PROJECTS[0]);
 const paRail = (r: ReturnType<typeof evaluate>) => r.supply!.rails.find((x) => x.railId === 'rail-pa') as RectifiedRailReport;
@@ -41,13 +54,35 @@ describe('evaluate(): changes ripple through the design', () => {
     expect(Math.abs(load.currentA.keyDown - pa.keyDownCurrentA)).toBeLessThan(0.002); // same model; the passes settle the rail within 5 mV
   });
 
-  it('every finding in the report carries a source and a message', () => {
+  it('every finding and recommendation of both demos resolves to a registry source with text, and has a message', () => {
     for (const p of DEMO_PROJECTS) {
-      for (const f of evaluate(structuredClone(p)).findings) {
-        expect(f.source.length).toBeGreaterThan(3);
-        expect(f.message.length).toBeGreaterThan(10);
-      }
+      const r = evaluate(structuredClone(p));
+      expect(r.findings.length).toBeGreaterThan(10);
+      expectRegistered(r);
     }
+  });
+
+  it('so does every finding of fuzzed projects (seeded): changed mains, rule set, power, band, stages and bad values', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(0, 1),
+        fc.option(fc.record({ nominalV: fc.constantFrom(100, 120, 230, 0, Number.NaN), frequencyHz: fc.constantFrom(50, 60), lowFraction: fc.constantFrom(0.05, 0.1, 0.2), highFraction: fc.constantFrom(0.05, 0.1) }), { nil: null }),
+        fc.constantFrom('us-97-307' as const, 'itu-app3' as const),
+        fc.constantFrom(0.5, 5, 20, 100, -1, Number.NaN),
+        fc.constantFrom(1.9e6, 7.03e6, 10.11e6, 14.06e6, 28.1e6, 50.1e6, 0.1e6),
+        fc.integer({ min: 0, max: 5 }),
+        (demo, mains, ruleSet, targetPowerW, frequencyHz, dropStage) => {
+          const p = structuredClone(DEMO_PROJECTS[demo]);
+          p.mains = mains;
+          p.rf = { ...p.rf, spuriousRule: ruleSet };
+          p.targetPowerW = targetPowerW;
+          p.frequencyHz = frequencyHz;
+          if (dropStage < p.stages.length) p.stages.splice(dropStage, 1);
+          expectRegistered(evaluate(p));
+        },
+      ),
+      propertyOptions(PROPERTY_SEED, 25),
+    );
   });
 });
 
