@@ -4,20 +4,17 @@
 import type { LpfParams, PaParams, RelayParams, Stage, StageKind } from '../model';
 import { MODE_LABELS } from '../model';
 import { formatValue } from '../units';
+import { STAGE_DATA, type StageDataKey } from '../spec/stage-data';
 
 /** The kind that owns each optional block of stage data. */
-export const DATA_OWNER = { pa: 'final', lpf: 'lpf', relay: 'tr' } as const satisfies Record<string, StageKind>;
+export const DATA_OWNER = Object.fromEntries(STAGE_DATA.map((d) => [d.key, d.kind])) as Record<StageDataKey, StageKind>;
 
 /** The stage without the data of other kinds: a stage changed from final to driver no longer carries (and is no
  *  longer evaluated with) hidden PA data. */
 export function keepOwnData(s: Stage, kind: StageKind): Stage {
-  const { pa, lpf, relay, ...rest } = s;
-  return {
-    ...rest,
-    ...(kind === DATA_OWNER.pa && pa ? { pa } : {}),
-    ...(kind === DATA_OWNER.lpf && lpf ? { lpf } : {}),
-    ...(kind === DATA_OWNER.relay && relay ? { relay } : {}),
-  };
+  const out: Stage = { ...s };
+  for (const d of STAGE_DATA) if (d.kind !== kind) delete out[d.key];
+  return out;
 }
 
 export interface DroppedData {

@@ -6,9 +6,7 @@ import type { Finding } from '../findings';
 import type { Spec } from './field';
 import { validate } from './derive';
 import { loadSpec, stageSpec } from './stage';
-import { paSpec } from './pa';
-import { lpfSpec } from './lpf';
-import { relaySpec } from './relay';
+import { STAGE_DATA } from './stage-data';
 import { offerSpec, partSpec, supplierSpec } from './parts';
 import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
@@ -30,12 +28,11 @@ export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
     spec: loadSpec,
     at: (p) => p.stages.flatMap((s) => s.loads.map((l, i) => ({ subject: `Stage "${s.name}", load row ${i + 1}`, value: l }))),
   },
-  { spec: paSpec, at: (p) => p.stages.flatMap((s) => (s.pa ? [{ subject: `Stage "${s.name}", PA data`, value: s.pa }] : [])) },
-  { spec: lpfSpec, at: (p) => p.stages.flatMap((s) => (s.lpf ? [{ subject: `Stage "${s.name}", filter data`, value: s.lpf }] : [])) },
-  {
-    spec: relaySpec,
-    at: (p) => p.stages.flatMap((s) => (s.relay ? [{ subject: `Stage "${s.name}", relay data`, value: s.relay }] : [])),
-  },
+  // each kind's data block (PA, filter, relay), wherever a stage holds one
+  ...STAGE_DATA.map((d) => ({
+    spec: d.spec,
+    at: (p: Project) => p.stages.flatMap((s) => (s[d.key] ? [{ subject: `Stage "${s.name}", ${d.what}`, value: s[d.key] }] : [])),
+  })),
   { spec: partSpec, at: (p) => p.parts.map((x) => ({ subject: `Part "${x.description}"`, value: x })) },
   {
     spec: offerSpec,
