@@ -96,7 +96,7 @@ export function numberText(value: number | null, f: NumberField): string {
     const bare = value / f.display.scale;
     const t = String(Number(bare.toPrecision(12)));
     const back = readNumber(t, { ...f, min: -Infinity, max: Infinity, exclusiveMin: false, integer: false });
-    if (Math.abs(bare) >= 0.1 && Math.abs(bare) < 1e4 && back.ok && back.value === value) return t;
+    if ((bare === 0 || (Math.abs(bare) >= 0.1 && Math.abs(bare) < 1e4)) && back.ok && back.value === value) return t;
   }
   const text = inputText(value, f.unit);
   // a bare fallback would be read in the display unit: give it the SI unit symbol
