@@ -14,7 +14,9 @@ const withSuppliers = (p: Project, suppliers: Supplier[]): Project => ({ ...p, c
 
 /** The message for an edit whose item was deleted meanwhile (another window). */
 export const gone = (what: string): EditResult => ({
-  errors: { _form: `That ${what} no longer exists (deleted in another window?). The page now shows the stored catalog.` },
+  errors: {
+    _form: `That ${what} no longer exists (deleted in another window?). The page now shows the stored catalog.`,
+  },
 });
 
 export function saveCosting(p: Project, d: CostingFields): EditResult {
@@ -23,18 +25,22 @@ export function saveCosting(p: Project, d: CostingFields): EditResult {
   return { ...p, costing: { ...p.costing, ...d } };
 }
 
-/** Add a supplier (index null) or change supplier `index`; a new name is carried into the offers that used the old one. */
+/** Add a supplier (index null) or change supplier `index`; a new name is carried into the offers using the old one. */
 export function saveSupplier(p: Project, index: number | null, s: Supplier): EditResult {
   const list = p.costing.suppliers;
   if (index !== null && !list[index]) return gone('supplier');
-  if (list.some((x, i) => i !== index && sameName(x.name, s.name))) return { errors: { name: `Supplier “${s.name}” is already in the list` } };
+  if (list.some((x, i) => i !== index && sameName(x.name, s.name))) {
+    return { errors: { name: `Supplier “${s.name}” is already in the list` } };
+  }
   if (index === null) return withSuppliers(p, [...list, s]);
   const old = list[index].name;
-  const parts = p.parts.map((part) => ({ ...part, offers: part.offers.map((o) => (sameName(o.supplier, old) ? { ...o, supplier: s.name } : o)) }));
+  const renamed = (o: Offer): Offer => (sameName(o.supplier, old) ? { ...o, supplier: s.name } : o);
+  const parts = p.parts.map((part) => ({ ...part, offers: part.offers.map(renamed) }));
   return withSuppliers({ ...p, parts }, list.map((x, i) => (i === index ? s : x)));
 }
 
-export const addPart = (p: Project, id: string, d: PartFields): EditResult => withParts(p, [...p.parts, { id, ...d, offers: [] }]);
+export const addPart = (p: Project, id: string, d: PartFields): EditResult =>
+  withParts(p, [...p.parts, { id, ...d, offers: [] }]);
 
 export function savePart(p: Project, partId: string, d: PartFields): EditResult {
   if (!p.parts.some((x) => x.id === partId)) return gone('part');

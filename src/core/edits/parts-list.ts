@@ -10,8 +10,12 @@ const GONE = 'That line no longer exists (deleted in another window?). The page 
 /** Add line `id` (isNew) or replace it; a part or stage deleted meanwhile is refused on its field. */
 export function saveLine(p: Project, id: string, d: LineFields, isNew: boolean): EditResult {
   const errors: Record<string, string> = {};
-  if (!p.parts.some((x) => x.id === d.partId)) errors.partId = 'Part: that part is not in the catalog (deleted?); choose another';
-  if (d.stageId !== null && !p.stages.some((s) => s.id === d.stageId)) errors.stageId = 'Stage: that stage no longer exists; choose another or General';
+  if (!p.parts.some((x) => x.id === d.partId)) {
+    errors.partId = 'Part: that part is not in the catalog (deleted?); choose another';
+  }
+  if (d.stageId !== null && !p.stages.some((s) => s.id === d.stageId)) {
+    errors.stageId = 'Stage: that stage no longer exists; choose another or General';
+  }
   if (Object.keys(errors).length) return { errors };
   const line: BomLine = { id, ...d };
   if (isNew) return { ...p, bom: [...p.bom, line] };
@@ -32,7 +36,10 @@ const sameOffer = (a: { supplier: string; sku: string }, b: { supplier: string; 
  * Add imported parts and lines to the project. An imported part equal to a catalog part (same description,
  * value and category, ignoring case) is not added again: its new supplier offers join the catalog part.
  */
-export function mergeImport(p: Project, data: { parts: Part[]; bom: BomLine[] }): { project: Project; newParts: number; reusedParts: number } {
+export function mergeImport(
+  p: Project,
+  data: { parts: Part[]; bom: BomLine[] },
+): { project: Project; newParts: number; reusedParts: number } {
   const byKey = new Map(p.parts.map((x) => [partKey(x), x.id]));
   const idMap = new Map<string, string>();
   let parts = [...p.parts];
@@ -47,7 +54,8 @@ export function mergeImport(p: Project, data: { parts: Part[]; bom: BomLine[] })
       continue;
     }
     idMap.set(imported.id, existing);
-    parts = parts.map((x) => (x.id !== existing ? x : { ...x, offers: [...x.offers, ...imported.offers.filter((o) => !x.offers.some((e) => sameOffer(e, o)))] }));
+    const fresh = (x: Part) => imported.offers.filter((o) => !x.offers.some((e) => sameOffer(e, o)));
+    parts = parts.map((x) => (x.id !== existing ? x : { ...x, offers: [...x.offers, ...fresh(x)] }));
   }
   const bom = [...p.bom, ...data.bom.map((l) => ({ ...l, partId: idMap.get(l.partId) ?? l.partId }))];
   return { project: { ...p, parts, bom }, newParts, reusedParts: data.parts.length - newParts };

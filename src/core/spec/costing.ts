@@ -8,8 +8,21 @@ export const costingSpec = defineSpec({
   name: 'costing',
   label: 'Costing settings',
   fields: {
-    attritionFraction: num('Attrition allowance', '%', U.pct, 0, 1, 0.05, { form: 'attrition', help: 'extra for losses and mistakes' }),
-    sparesPerLine: num('Spares per line', '', U.none, 0, 1000, 0, { form: 'spares', integer: true, help: 'whole pieces added to each line', example: '1' }),
-    exchangeRates: text('Exchange rates', 2000, false, '', { form: 'rates', multiline: true, codec: ratesCodec, help: 'one per line, e.g. EUR = 1.08' }),
+    attritionFraction: num('Attrition allowance', '%', U.pct, 0, 1, 0.05, {
+      form: 'attrition',
+      help: 'extra for losses and mistakes',
+    }),
+    sparesPerLine: num('Spares per line', '', U.none, 0, 1000, 0, {
+      form: 'spares',
+      integer: true,
+      help: 'whole pieces added to each line',
+      example: '1',
+    }),
+    exchangeRates: text('Exchange rates', 2000, false, '', {
+      form: 'rates',
+      multiline: true,
+      codec: ratesCodec,
+      help: 'one per line, e.g. EUR = 1.08',
+    }),
   },
 });

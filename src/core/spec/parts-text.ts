@@ -15,7 +15,10 @@ export const MAJOR = { symbol: '', scale: 100 } as const;
 
 // one price break: from this many pieces, this unit price
 export const breakQtyField: NumberField = num('Quantity', '', U.none, 1, 1_000_000, 1, { integer: true });
-export const unitPriceField: NumberField = num('Unit price', '', MAJOR, 0, MONEY_MAX_CENTS, 0, { money: true, integer: true });
+export const unitPriceField: NumberField = num('Unit price', '', MAJOR, 0, MONEY_MAX_CENTS, 0, {
+  money: true,
+  integer: true,
+});
 export const MAX_BREAKS = 50;
 
 // one exchange rate: project-currency units per 1 unit of another currency
@@ -62,7 +65,8 @@ export function parseRatings(s: string): Parsed<Record<string, number | string>>
     if (i >= text.length) break;
     RATING.lastIndex = i;
     const m = RATING.exec(text);
-    if (!m) return { ok: false, message: `"${text.slice(i).split(/[;\n]/)[0].trim()}" is not key=value (e.g. voltageV=35)` };
+    const what = text.slice(i).split(/[;\n]/)[0].trim();
+    if (!m) return { ok: false, message: `"${what}" is not key=value (e.g. voltageV=35)` };
     i = RATING.lastIndex;
     const key = m[1];
     const raw = m[2].trim();
@@ -73,12 +77,13 @@ export function parseRatings(s: string): Parsed<Record<string, number | string>>
     const problem = ratingProblem(key, ratings[key]);
     if (problem) return { ok: false, message: problem };
   }
-  return Object.keys(ratings).length > MAX_RATINGS ? { ok: false, message: `more than ${MAX_RATINGS} ratings` } : { ok: true, value: ratings };
+  if (Object.keys(ratings).length > MAX_RATINGS) return { ok: false, message: `more than ${MAX_RATINGS} ratings` };
+  return { ok: true, value: ratings };
 }
 
 function ratingProblem(key: string, v: unknown): string {
-  if (!RATING_KEY.test(key)) return `"${key.slice(0, 40)}" is not a rating name (a letter, then letters, digits, _ . -)`;
-  if (key.length > RATING_KEY_MAX) return `the name "${key.slice(0, 20)}…" is longer than ${RATING_KEY_MAX} characters`;
+  if (!RATING_KEY.test(key)) return `"${key.slice(0, 40)}" is not a rating name (a letter, then letters, digits, _.-)`;
+  if (key.length > RATING_KEY_MAX) return `the name "${key.slice(0, 20)}…" is over ${RATING_KEY_MAX} characters`;
   if (typeof v === 'number') return Number.isFinite(v) ? '' : `"${key}" is not a usable number`;
   if (typeof v !== 'string') return `"${key}" is neither a number nor text`;
   return v.length > RATING_TEXT_MAX ? `the text of "${key}" is longer than ${RATING_TEXT_MAX} characters` : '';
@@ -101,7 +106,8 @@ export const ratingsCodec: TextCodec = {
 
 // ------------------------------------------------------------ price breaks: "1: 0.95, 10: 0.78, 100: 0.52"
 
-export const breaksText = (b: readonly PriceBreak[]): string => b.map((x) => `${x.minQty}: ${moneyText(x.unitPriceCents)}`).join(', ');
+export const breaksText = (b: readonly PriceBreak[]): string =>
+  b.map((x) => `${x.minQty}: ${moneyText(x.unitPriceCents)}`).join(', ');
 
 /** Price breaks as typed; empty text is no prices yet (the offer is listed but unpriced). Sorted by quantity. */
 export function parseBreaks(s: string): Parsed<PriceBreak[]> {
@@ -115,7 +121,8 @@ export function parseBreaks(s: string): Parsed<PriceBreak[]> {
     if (!price.ok) return { ok: false, message: `${qty.value}: ${price.message}` };
     const problem = rangeProblem(price.value, unitPriceField);
     if (problem) return { ok: false, message: `${qty.value}: the unit price ${problem}` };
-    if (breaks.some((b) => b.minQty === qty.value)) return { ok: false, message: `quantity ${qty.value} is given twice` };
+    const twice = breaks.some((b) => b.minQty === qty.value);
+    if (twice) return { ok: false, message: `quantity ${qty.value} is given twice` };
     breaks.push({ minQty: qty.value, unitPriceCents: price.value });
   }
   if (breaks.length > MAX_BREAKS) return { ok: false, message: `more than ${MAX_BREAKS} price breaks` };
@@ -160,7 +167,8 @@ export function parseRates(s: string): Parsed<Record<string, number>> {
     if (!rate.ok) return { ok: false, message: `${code}: the rate ${rate.message}` };
     rates[code] = rate.value;
   }
-  return Object.keys(rates).length > MAX_RATES ? { ok: false, message: `more than ${MAX_RATES} rates` } : { ok: true, value: rates };
+  if (Object.keys(rates).length > MAX_RATES) return { ok: false, message: `more than ${MAX_RATES} rates` };
+  return { ok: true, value: rates };
 }
 
 export const ratesCodec: TextCodec = {

@@ -5,7 +5,8 @@ import { num, text } from './make';
 import { breaksCodec, CURRENCY, MAJOR, MONEY_MAX_CENTS, ratingsCodec } from './parts-text';
 
 /** A three-letter currency code (typed in any case, stored upper case). */
-export const currencyField = (label = 'Currency') => text(label, 3, true, 'USD', { upper: true, pattern: CURRENCY, help: 'e.g. USD, EUR' });
+export const currencyField = (label = 'Currency') =>
+  text(label, 3, true, 'USD', { upper: true, pattern: CURRENCY, help: 'e.g. USD, EUR' });
 
 export const partSpec = defineSpec({
   name: 'part',
@@ -14,7 +15,10 @@ export const partSpec = defineSpec({
     description: text('Description', 300, true, 'New part', { help: 'type and ratings, no maker part numbers' }),
     category: text('Category', 60, false, ''),
     // free key=value for now: numbers are read with SI prefixes (4700u), other text is kept as typed
-    ratings: text('Ratings', 2000, false, '', { codec: ratingsCodec, help: 'key=value; … e.g. voltageV=35; rippleA=2.4' }),
+    ratings: text('Ratings', 2000, false, '', {
+      codec: ratingsCodec,
+      help: 'key=value; … e.g. voltageV=35; rippleA=2.4',
+    }),
   },
 });
 
@@ -27,7 +31,10 @@ export const offerSpec = defineSpec({
     supplier: text('Supplier', 120, true, 'New supplier'),
     sku: text('SKU', 120, false, '', { help: 'the supplier’s order code' }),
     currency: currencyField(),
-    breaks: text('Price breaks', 2000, false, '', { codec: breaksCodec, help: 'e.g. 1: 0.95, 10: 0.78 (empty: not priced yet)' }),
+    breaks: text('Price breaks', 2000, false, '', {
+      codec: breaksCodec,
+      help: 'e.g. 1: 0.95, 10: 0.78 (empty: not priced yet)',
+    }),
     minOrder: pieces('Minimum order'),
     orderMultiple: pieces('Order multiple'),
     stockNote: text('Stock note', 200, false),
@@ -39,7 +46,13 @@ export const supplierSpec = defineSpec({
   label: 'Supplier',
   fields: {
     name: text('Supplier name', 120, true, 'New supplier'),
-    shippingCents: num('Shipping per order', '', MAJOR, 0, MONEY_MAX_CENTS, 0, { form: 'shipping', money: true, integer: true, example: '8.50', help: 'in the supplier’s currency' }),
+    shippingCents: num('Shipping per order', '', MAJOR, 0, MONEY_MAX_CENTS, 0, {
+      form: 'shipping',
+      money: true,
+      integer: true,
+      example: '8.50',
+      help: 'in the supplier’s currency',
+    }),
     currency: currencyField(),
   },
 });
