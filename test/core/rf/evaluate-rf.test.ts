@@ -21,7 +21,7 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     expect(JSON.parse(JSON.stringify(r))).toEqual(r);
     expect(sorted(r.findings)).toBe(true);
   });
-  it('the PA designs a practical ratio near 10 W (REFERENCE-VALUES §8.3: 4:5 gives 10.24 W)', () => {
+  it('the PA designs a practical ratio near 10 W (textbook push-pull load line: 4:5 gives 10.24 W)', () => {
     const pa = r.stages[0].pa!;
     expect(pa.turnsRatio).toBe(1.25);
     // Source: REFERENCE-VALUES §8.3 sinusoidal push-pull model, class C: P = 2 (13.8 - 1)^2 / 32
@@ -32,11 +32,14 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     expect(r.harmonics!.rows.every((x) => x.marginDb > 0)).toBe(true);
     expect(r.harmonics!.rows.every((x) => x.worstMarginDb !== null)).toBe(true);
   });
-  it('relay voltage at SWR 2 follows the line maxima formula (REFERENCE-VALUES §9)', () => {
+  it('relay voltage at SWR 2: the standing-wave maximum of a lossless line, written out here (not the code under test)', () => {
     const relay = r.stages[2].relay!;
-    near(relay.rfPeakV, lineMaxima(r.outputPowerW, 50, 2).peakV, 1e-9, 'Vpk');
+    // Source: transmission-line theory (textbook): V_max,rms = sqrt(P Z0 S), peak = sqrt(2 P Z0 S); Z0 = 50 ohm, S = 2
+    near(relay.rfPeakV, Math.sqrt(2 * r.outputPowerW * 50 * 2), 1e-9, 'Vpk');
+    // Worked value for 25 W at S = 2 (sqrt(2 x 25 x 50 x 2) = sqrt(5000) = 70.71 V peak), against the helper the RF code uses
+    near(lineMaxima(25, 50, 2).peakV, 70.71, 0.005, 'Vpk 25 W');
   });
-  it('exposure uses the delivered power and always cautions', () => {
+  it('consistency check (no external reference): exposure uses the delivered power and always cautions', () => {
     near(r.exposure!.peakPowerW, r.outputPowerW, 1e-12, 'P');
     expect(r.findings.some((f) => f.rule === 'exposure.local-rules')).toBe(true);
   });
