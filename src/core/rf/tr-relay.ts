@@ -37,7 +37,8 @@ export function lineMaxima(powerW: number, z0Ohm: number, swr: number) {
   return { rmsV, peakV: Math.SQRT2 * rmsV, rmsA, peakA: Math.SQRT2 * rmsA };
 }
 
-// Source: ITU-R M.1677-1, International Morse code (2009; edition year from memory): dot = 1 unit; with the common-practice "PARIS" word of 50 units, dot = 1.2/WPM s
+// Source: PARIS word convention (a word of 50 dot units; common practice, no published source), dot = 60 / (50 WPM) =
+// 1.2/WPM s. ITU-R M.1677 defines the code's unit ratios (dot 1, dash 3, gaps 1/3/7), not the speed in words/min.
 export function dotLengthS(wpm: number): number {
   return 1.2 / wpm;
 }

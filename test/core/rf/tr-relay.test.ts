@@ -32,7 +32,8 @@ describe('line maxima (REFERENCE-VALUES §9 worked values)', () => {
 });
 
 describe('relay checks', () => {
-  it('dot length 1.2/WPM (ITU-R M.1677): 60 ms at 20 WPM', () => {
+  it('dot length 1.2/WPM (PARIS word convention, 50 dot units a word): 60 ms at 20 WPM', () => {
+    // 20 words/min x 50 units = 1000 units/min -> 60 s / 1000 = 0.060 s per dot
     near(dotLengthS(20), 0.06, 1e-12, 'dot');
   });
   it('hot switching when the TX delay is shorter than operate + bounce', () => {
