@@ -3,6 +3,7 @@
 // form loaded at an older version field by field (src/web/edit.ts); a plain version check refuses stale writes.
 import { eq, asc, inArray, and, lte } from 'drizzle-orm';
 import type { Database, Tx, Db } from './client';
+import { STAGE_DATA, type StageDataKey } from '../core/spec/stage-data';
 import * as t from './schema';
 import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing } from '../core/model';
 import { withRailDefaults } from '../core/spec/supply-rails';
@@ -41,14 +42,10 @@ export async function listProjects(db: Db): Promise<ProjectSummary[]> {
 
 const jsonObject = (v: unknown): Record<string, unknown> => (v !== null && typeof v === 'object' && !Array.isArray(v) ? (v as Record<string, unknown>) : {});
 
-/** Only a stage kind's own data keys from the params column (an odd key must not overwrite the stage's loads). */
-function stageData(v: unknown): Pick<Stage, 'pa' | 'lpf' | 'relay'> {
+/** Only the data blocks the registry knows from the params column (an odd key must not overwrite the loads). */
+function stageData(v: unknown): Partial<Pick<Stage, StageDataKey>> {
   const o = jsonObject(v);
-  const out: Pick<Stage, 'pa' | 'lpf' | 'relay'> = {};
-  if (o.pa !== undefined) out.pa = o.pa as Stage['pa'];
-  if (o.lpf !== undefined) out.lpf = o.lpf as Stage['lpf'];
-  if (o.relay !== undefined) out.relay = o.relay as Stage['relay'];
-  return out;
+  return Object.fromEntries(STAGE_DATA.filter((d) => o[d.key] !== undefined).map((d) => [d.key, o[d.key]]));
 }
 
 export async function loadProject(db: Db | Tx, id: string): Promise<Project | null> {
@@ -154,7 +151,8 @@ async function writeChildren(tx: Tx, project: Project): Promise<void> {
     await tx.insert(t.rails).values({ id: railId, projectId: id, position: i, name, kind, params });
   }
   for (const [i, s] of project.stages.entries()) {
-    const params = s.pa ? { pa: s.pa } : s.lpf ? { lpf: s.lpf } : s.relay ? { relay: s.relay } : null;
+    const own = STAGE_DATA.find((d) => s[d.key] !== undefined);
+    const params = own ? { [own.key]: s[own.key] } : null;
     await tx.insert(t.stages).values({ id: s.id, projectId: id, position: i, kind: s.kind, name: s.name, notes: s.notes, dissipationW: s.dissipationW, params });
     for (const [j, l] of s.loads.entries()) {
       await tx.insert(t.stageLoads).values({
