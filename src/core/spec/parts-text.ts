@@ -3,6 +3,7 @@
 // the typed text gets, so a project file or database row is held to what the form accepts.
 import type { PriceBreak } from '../model';
 import { parseValue } from '../units';
+import { MIN_EXCHANGE_RATE } from '../cost/money';
 import type { NumberField, TextCodec } from './field';
 import { U } from './field';
 import { num } from './make';
@@ -22,7 +23,8 @@ export const unitPriceField: NumberField = num('Unit price', '', MAJOR, 0, MONEY
 export const MAX_BREAKS = 50;
 
 // one exchange rate: project-currency units per 1 unit of another currency
-export const rateField: NumberField = num('Rate', '', U.none, 1e-6, 1e6, 1);
+// the smallest rate is the one costing takes as known (one limit, in cost/money.ts)
+export const rateField: NumberField = num('Rate', '', U.none, MIN_EXCHANGE_RATE, 1e6, 1);
 export const MAX_RATES = 50;
 export const CURRENCY = { re: /^[A-Z]{3}$/, says: 'must be a three-letter code such as USD or EUR' };
 
