@@ -1,5 +1,7 @@
 // A fresh project with sensible defaults (pure: ids and clock come from the caller).
-import type { Project, Mains, RfSettings } from './model';
+import type { LpfParams, Mains, PaParams, Project, RelayParams, RfSettings, Stage } from './model';
+import { lpfSpec, paSpec, relaySpec } from './spec';
+import { dataOfKind } from './spec/stage-data';
 import { paDefaultRailId, relayCoilDefaultRailId } from './role-defaults';
 import { defaultRuleSet } from './rules/rule-set';
 import { defaults } from './spec/derive';
@@ -69,76 +71,25 @@ export function cloneProject(p: Project, newProjectId: string, name: string, mak
   return { ...structuredClone(p), id: newProjectId, name, version: 1, supply: { ...p.supply, transformers, rails }, stages, parts, bom };
 }
 
-// Starting values for a new final, filter or relay stage; the builder edits them on the stage page.
-export function defaultPa(railId: string): import('./model').PaParams {
-  return {
-    topology: 'push-pull',
-    amplifierClass: 'C',
-    railId,
-    devices: 2,
-    saturationV: 1,
-    rdsOnOhm: null,
-    turnsRatio: null,
-    loadOhm: 50,
-    efficiency: null,
-    deviceVdsMaxV: 100,
-    deviceIdMaxA: 5,
-    mount: { thetaJcKPerW: 2, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 150 },
-    biasIdleMaxA: 0.05,
-    referencePowerW: 5,
-  };
-}
-
-export function defaultLpfParams(): import('./model').LpfParams {
-  return {
-    response: 'chebyshev',
-    rippleDb: 0.1,
-    order: 5,
-    form: 'capacitor-input',
-    cutoffHz: null,
-    capacitorSeries: 'E12',
-    allowParallelPairs: true,
-    coreAlHPerTurn2: 4.9e-9,
-    coreName: 'Iron-powder toroid 12.7 mm, 1–30 MHz mix (AL 4.9 nH/t²)',
-    inductorQ: 150,
-    capacitorQ: 1000,
-    capacitorTolerance: 0.05,
-    inductorTolerance: 0.05,
-    monteCarloTrials: 2000,
-    seed: 1,
-  };
-}
-
-export function defaultRelay(coilRailId: string | null): import('./model').RelayParams {
-  return {
-    contactCarryA: 2,
-    contactSwitchA: 1,
-    contactRatedV: 125,
-    rfRatedVpeak: null,
-    coilA: 0.03,
-    coilRailId,
-    coilModes: ['keyUp', 'keyDown'],
-    isolationDb: 30,
-    operateS: 0.005,
-    releaseS: 0.003,
-    bounceS: 0.001,
-    dcSwitchedA: 0,
-    position: 'after-lpf',
-    receiverMaxInputW: 0.01,
-    txDelayS: 0.008,
-    wpm: 20,
-  };
-}
+// Starting values for a new final, filter or relay stage come from their field specs (the spec's defaults); the
+// builder edits them on the stage page.
+export const defaultPa = (railId: string) => ({ ...defaults(paSpec), railId }) as PaParams;
+export const defaultLpfParams = () => defaults(lpfSpec) as unknown as LpfParams;
+export const defaultRelay = (coilRailId: string | null) => ({ ...defaults(relaySpec), coilRailId }) as RelayParams;
 
 /**
- * A stage of kind final, lpf or tr gets its kind's data (with starting values) when it has none. The PA feeds from
- * the highest-voltage rail that is not a regulator's raw input (one of the stage's own load rails when one
- * qualifies), the relay coil from the signal rail (role-defaults.ts). With no such rail the PA has no rail ('') and
- * the coil none (null): the evaluation reports either as a failure instead of leaving the current out.
+ * A stage whose kind owns a data block (PA, filter, relay: STAGE_DATA) gets it with the spec's starting values when
+ * it has none. Its rail references follow the roles (role-defaults.ts): the PA feeds from the highest-voltage rail
+ * that is not a regulator's raw input (one of the stage's own load rails when one qualifies), the relay coil from
+ * the signal rail. With no such rail the PA has no rail ('') and the coil none (null): the evaluation reports
+ * either as a failure instead of leaving the current out.
  */
-export function withKindDefaults(p: Project, s: import('./model').Stage): import('./model').Stage {
-  if (s.kind === 'final' && !s.pa) return { ...s, pa: defaultPa(paDefaultRailId(p, s.loads.map((l) => l.railId)) ?? '') };
-  if (s.kind === 'lpf' && !s.lpf) return { ...s, lpf: defaultLpfParams() };
-  if (s.kind === 'tr' && !s.relay) return { ...s, relay: defaultRelay(relayCoilDefaultRailId(p)) };
-  return s;
+export function withKindDefaults(p: Project, s: Stage): Stage {
+  const own = dataOfKind(s.kind);
+  if (!own || s[own.key]) return s;
+  const roles: Record<string, unknown> = {
+    pa: { railId: paDefaultRailId(p, s.loads.map((l) => l.railId)) ?? '' },
+    relay: { coilRailId: relayCoilDefaultRailId(p) },
+  };
+  return { ...s, [own.key]: { ...defaults(own.spec), ...(roles[own.key] as object | undefined) } };
 }

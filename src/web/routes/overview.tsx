@@ -1,6 +1,7 @@
 // Overview routes: project settings, stages (add, reorder, currents) and the live budget.
 import { Hono } from 'hono';
 import { z } from 'zod';
+import { STAGE_KIND_LABELS } from '../../core/model';
 import type { Project, Stage } from '../../core/model';
 import { MODES, STAGE_KINDS } from '../../core/model';
 import { evaluateCached as evaluate } from '../cache/reports';
@@ -139,6 +140,7 @@ export function overviewRoutes(deps: Deps) {
   return app;
 }
 
+/** A new stage's name when none is typed: its kind in words. */
 export function defaultStageName(kind: Stage['kind']): string {
-  return { receiver: 'Receiver', vxo: 'VXO', driver: 'Driver', final: 'Final amplifier', lpf: 'Low-pass filter', tr: 'T/R switching', other: 'Other stage' }[kind];
+  return STAGE_KIND_LABELS[kind];
 }
