@@ -105,3 +105,23 @@ describe('Sources page', () => {
     expect(html).toMatch(/PARIS word convention/);
   });
 });
+
+describe('a new 230 V project shows its rule set, its limits and its sources', () => {
+  it('created through the form with the 230 V / 50 Hz preset: ITU / CEPT on the RF page, the Sources page and the pack', async () => {
+    const { post, get } = await demoApp();
+    const res = await post('/projects', { name: '40 m 230 V', band: '7.03 MHz', power: '10 W', mains: '230-50' });
+    expect(res.status).toBe(303);
+    const path = res.headers.get('Location')!;
+    const rf = await (await get(`${path}/rf`)).text();
+    expect(rf).toMatch(/data-rule-set="itu-app3"/);
+    expect(rf).toMatch(/Rule set: ITU \/ CEPT\./);
+    expect(rf).toMatch(/ICNIRP \(1998\)/);
+    expect(rf).toMatch(/IEC 60038/);
+    expect(rf).toMatch(/Local rules and your licence conditions govern/);
+    expect(leaks(rf)).toEqual([]);
+    const sources = await (await get(`${path}/sources`)).text();
+    expect(sources).toMatch(/Rule set: <strong>ITU \/ CEPT<\/strong>/);
+    expect(sources).toMatch(/Radio Regulations, Appendix 3/);
+    expect(leaks(sources)).toEqual([]);
+  });
+});
