@@ -8,7 +8,7 @@ export function badTexts(f: Field): [string, string][] {
   if (f.type === 'number') {
     const unit = f.unit === '%' ? '%' : f.unit;
     out.push(['abc', 'not a number'], ['1e999', 'overflows'], ['NaN', 'NaN']);
-    if (!f.optional) out.push(['', 'empty but required']);
+    if (!f.optional && f.emptyAs === undefined) out.push(['', 'empty but required']);
     // limits typed with the SI unit symbol (read as written, whatever the display unit)
     const si = (v: number) => (f.unit === '%' ? `${v * 100} %` : `${v}${unit ? ' ' + unit : ''}`);
     if (Number.isFinite(f.max)) out.push([si(f.max * 2 + 1), 'above the maximum']);

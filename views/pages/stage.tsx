@@ -89,7 +89,7 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
                   </td>
                   {MODES.map((m) => (
                     <td>
-                      <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} state={general} size={8} />
+                      <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} state={general} size={8} hint="" />
                     </td>
                   ))}
                 </tr>
@@ -97,7 +97,7 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
             </tbody>
           </table>
         )}
-        <p class="hint">Currents are in mA: 350 means 350 mA; 1.2 A, 350m or 0.35 A are read as written. Choose "(remove this load)" to drop a row.</p>
+        <p class="hint">Currents are in mA: 350 means 350 mA; 1.2 A, 350m or 0.35 A are read as written; an empty box means none drawn. Choose "(remove this load)" to drop a row.</p>
       </FormShell>
       {own ? <DataForm project={project} stage={stage} data={own.data} state={stateFor(own.data.key, failed, () => formValues(own.data.spec, own.value))} rails={railOptions} /> : null}
       {results as never}

@@ -29,8 +29,6 @@ export function readLoads(railIds: ReadonlySet<string>, values: Record<string, s
     const currentA = { receive: 0, keyUp: 0, keyDown: 0 };
     for (const m of MODES) {
       const key = loadFormName(i, `currentA.${m}`);
-      // an empty current in a row means none drawn in that mode
-      if (!typed.includes(m)) continue;
       const r = readField(loadCurrentFields[`currentA.${m}`], values[key]);
       if (r.ok) currentA[m] = r.value as number;
       else errors[key] = r.message;

@@ -87,7 +87,10 @@ export function readField(f: Field, raw: string | undefined): { ok: true; value:
   const text = raw ?? '';
   switch (f.type) {
     case 'number': {
-      if (text.trim() === '') return f.optional ? { ok: true, value: null } : { ok: false, message: `${f.label} is empty: enter a value` };
+      if (text.trim() === '') {
+        if (f.emptyAs !== undefined) return { ok: true, value: f.emptyAs };
+        return f.optional ? { ok: true, value: null } : { ok: false, message: `${f.label} is empty: enter a value` };
+      }
       const r = readNumber(text, f);
       return r.ok ? r : { ok: false, message: `${f.label} ${r.message}` };
     }

@@ -26,6 +26,8 @@ export interface NumberField extends Base {
   /** money: stored as integer minor units (cents, unit ''), typed in the major unit with at most two decimals */
   money?: boolean;
   optional?: boolean; // an empty box is stored as null (meaning "not chosen yet" / "compute it")
+  /** an empty box means this value (said in the help line: "empty = none drawn"); the stored value is a number */
+  emptyAs?: number;
   default: number | null;
   example?: string; // an example in the display unit, e.g. '350' or '4700'
 }
