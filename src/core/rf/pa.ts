@@ -202,7 +202,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   });
   findings.push({
     severity: op.peakDeviceA > pa.deviceIdMaxA ? 'fail' : op.peakDeviceA > 0.8 * pa.deviceIdMaxA ? 'caution' : 'ok',
-    rule: 'pa.id', subject, value: op.peakDeviceA, limit: pa.deviceIdMaxA, unit: 'A', source: 'pa.peak-current',
+    rule: 'pa.id', subject, value: op.peakDeviceA, limit: pa.deviceIdMaxA, unit: 'A', source: pa.amplifierClass === 'E' ? 'pa.peak-current-e' : 'pa.peak-current',
     message: op.peakDeviceA > pa.deviceIdMaxA
       ? `Peak device current ${op.peakDeviceA.toFixed(2)} A exceeds the ${pa.deviceIdMaxA} A rating.`
       : `Peak device current ${op.peakDeviceA.toFixed(2)} A against a ${pa.deviceIdMaxA} A rating.`,

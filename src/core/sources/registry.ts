@@ -53,7 +53,8 @@ export const SOURCES = {
   // ---------------------------------------------------------------- PA
   'pa.load-line': { status: 'published', text: 'Sinusoidal load line P = (Vdd − Vsat)² / (2R), push-pull P = 2 (Vdd − Vsat)² / R_dd (textbook); class E: N. O. Sokal and A. D. Sokal, "Class E — A New Class of High-Efficiency Tuned Single-Ended Switching Power Amplifiers", IEEE J. Solid-State Circuits SC-10(3), pp. 168–176, June 1975 (R = 0.5768 (Vdd − Vsat)² / P, peak drain 3.56 Vdd)' },
   'pa.vds': { status: 'published', text: `Peak drain voltage from the load line (2 Vdd; class E 3.56 Vdd, Sokal and Sokal, IEEE JSSC SC-10(3), 1975); the 25 % margin is ${PRACTICE}` },
-  'pa.peak-current': { status: 'memory', text: `Peak device current from the load line (voltage swing / load); class E peak switch current 2.86 × I_dc (${FROM_MEMORY})` },
+  'pa.peak-current': { status: 'published', text: 'Peak device current from the load line: voltage swing / load (textbook)' },
+  'pa.peak-current-e': { status: 'memory', text: `Class E peak switch current 2.86 × I_dc (${FROM_MEMORY}; not a published load line read here)` },
   'pa.fourier': { status: 'published', text: 'Fourier series of a square wave: fundamental 4/π of the amplitude, odd harmonic n at 1/n (textbook)' },
   'pa.efficiency': { status: 'practice', text: `Typical drain efficiency of the amplifier class (${PRACTICE})` },
   'pa.push-pull-e': { status: 'practice', text: `Push-pull class E modelled as two single-ended halves (an assumption of this program, ${PRACTICE})` },
