@@ -14,6 +14,7 @@ import { loadProject, loadSnapshot, changeProject, VersionConflict, NotFound } f
 import { parseForm, versionField, type FieldErrors, type FormValues } from './form';
 import { formValues, isHtmx, sendPage, sendPartial } from './render';
 import { mergeForm, conflictMessage, conflictSummary } from './merge-form';
+import { fieldLabel } from './forms/spec-schema';
 import type { Deps } from './deps';
 import type { Failed } from '../../views/components/failed';
 import { KeptEntries, KeptEntriesPage } from '../../views/components/kept-entries';
@@ -151,7 +152,7 @@ async function mergeWith<S extends z.ZodType>(spec: EditSpec<S>, c: Context, lat
   const m = mergeForm({ base: baseValues, current: currentValues, typed, rowOf: spec.rowOf });
   if (!m.ok) {
     // Both values beside each field, and in the form's message too (not every form shows a message at every field).
-    const list = Object.entries(m.conflicts).map(([k, conflict]) => `${k}: ${conflictSummary(conflict)}`);
+    const list = Object.entries(m.conflicts).map(([k, conflict]) => `${fieldLabel(spec.schema, k)}: ${conflictSummary(conflict)}`);
     const errors: FieldErrors = { _form: `${CONFLICT_MESSAGE} (${list.join('; ')})` };
     for (const [k, conflict] of Object.entries(m.conflicts)) errors[k] = conflictMessage(conflict);
     throw new MergeConflict(latest, m.values, errors);

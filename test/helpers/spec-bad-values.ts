@@ -14,6 +14,7 @@ export function badTexts(f: Field): [string, string][] {
     if (Number.isFinite(f.max)) out.push([si(f.max * 2 + 1), 'above the maximum']);
     if (Number.isFinite(f.min)) out.push([si(f.min - Math.max(1, Math.abs(f.min))), 'below the minimum']);
     if (f.exclusiveMin) out.push([si(f.min), 'at an exclusive minimum']);
+    if (f.exclusiveMin && f.min === 0) out.push([`5e-324${unit && unit !== '%' ? ' ' + unit : ''}`, 'a subnormal above zero']);
     // money is typed in the major unit (1.5 = 150 cents): a part of a cent is what it cannot hold
     if (f.money) out.push(['0.125', 'part of a cent']);
     else if (f.integer) out.push([String(Math.max(f.min, 0) + 1.5), 'not whole']);
@@ -30,6 +31,7 @@ export function badStored(f: Field): [unknown, string][] {
   const out: [unknown, string][] = [['a string', 'text where a value belongs'], [{}, 'an object']];
   if (f.type === 'number') {
     out.push([NaN, 'NaN'], [Infinity, 'Infinity'], [f.max * 2 + 1, 'above the maximum']);
+    if (f.exclusiveMin && f.min === 0) out.push([5e-324, 'a subnormal above zero']);
     if (!f.optional) out.push([null, 'null but required']);
     if (f.integer) out.push([Math.max(f.min, 0) + 0.5, 'not whole']);
   }

@@ -39,7 +39,9 @@ export function rangeProblem(value: number, f: NumberField): string {
   if (!Number.isFinite(value)) return 'is not a usable number';
   if (f.money && !Number.isInteger(value)) return 'must be a whole number of cents';
   if (f.integer && !Number.isInteger(value / (f.display.scale === 0.01 ? 0.01 : 1))) return 'must be a whole number';
-  const lowOk = f.exclusiveMin ? value > f.min : value >= f.min;
+  // "more than min" means a usable amount above it: a subnormal such as 5e-324 passes `> 0` and later divides to
+  // Infinity. Common practice, no published source: 1e-15 of the field's range is below anything a builder enters.
+  const lowOk = f.exclusiveMin ? value > f.min + Math.abs(f.max - f.min) * 1e-15 : value >= f.min;
   if (lowOk && value <= f.max) return '';
   return `must be ${f.exclusiveMin ? 'more than' : 'at least'} ${show(f.min, f)} and at most ${show(f.max, f)}`;
 }

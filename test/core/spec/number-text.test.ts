@@ -89,7 +89,7 @@ describe('property: every spec number field round-trips its stored values throug
     fc.assert(
       fc.property(fc.integer({ min: 0, max: fields.length - 1 }), fc.double({ min: 0, max: 1, noNaN: true }), (i, u) => {
         const f = fields[i];
-        const lo = f.exclusiveMin ? f.min + Math.abs(f.min) * 1e-9 + 1e-15 : f.min;
+        const lo = f.exclusiveMin ? f.min + (f.max - f.min) * 1e-12 : f.min;
         let v = lo + (f.max - lo) * u;
         if (f.integer) v = Math.round(v);
         if (v > f.max || v < f.min || (f.exclusiveMin && v <= f.min)) return;
