@@ -23,6 +23,7 @@ if (!hasPoppler) console.warn(`[skip] ${POPPLER_MISSING}`);
 describe('no internal references or confidence tags reach the builder', () => {
   it('pages of both demos (every project page)', async () => {
     const { get } = await demoApp();
+    expect(leaks(await (await get('/')).text()), 'project list').toEqual([]);
     for (const p of DEMO_PROJECTS) {
       for (const path of ['', '/supply', '/rf', '/parts', '/bom', '/pack', '/sources']) {
         const res = await get(`/projects/${p.id}${path}`);
