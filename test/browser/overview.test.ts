@@ -53,7 +53,8 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
     // and it was stored: the page as served now carries the new value
     const html = await (await fetch(server.url + DEMO)).text();
     const sid = (await loadsForm().getAttribute('action'))!;
-    expect(formByAction(html, sid).fields.l0_receive).toBe(typed);
+    // stored as 2.5 A and shown back in the box's own unit (mA)
+    expect(formByAction(html, sid).fields.l0_receive).toBe('2500');
   });
 
   it('adds a stage in place', async () => {

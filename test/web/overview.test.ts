@@ -58,7 +58,7 @@ describe('overview page', () => {
     const html = await stale.text();
     // the same field changed by both: refused with both values shown and the typed one kept
     expect(html).toContain('someone else changed the same field');
-    expect(html).toContain('Changed by someone else to “50 mA”');
+    expect(html).toContain('Changed by someone else to “50”');
     expect(html).toContain('you typed “70 mA”');
     expect(html).toContain('value="70 mA"');
     const p = await loadProject(database.db, ID);

@@ -12,16 +12,12 @@ import { inputText } from '../../src/core/spec/input-text';
 import { settingsSpec, settingsFormValues } from '../../src/core/spec/settings';
 import { Field, Select, TextArea, FormErrors, type FieldState } from '../components/fields';
 import { SpecField } from '../components/spec-fields';
+import { loadCurrentValues } from '../../src/core/edits/stage-loads';
+import { loadCurrentFields, loadFormName, loadSpec } from '../../src/core/spec/stage';
 import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';
 
-export function loadValues(s: Stage): Record<string, string> {
-  const v: Record<string, string> = {};
-  s.loads.forEach((l, i) => {
-    for (const m of MODES) v[`l${i}_${m}`] = inputText(l.currentA[m], 'A');
-  });
-  return v;
-}
+export const loadValues = (s: Stage): Record<string, string> => loadCurrentValues(s.loads);
 
 const Hidden: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
 
@@ -106,7 +102,9 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
               <tr>
                 <th>Rail</th>
                 {MODES.map((m) => (
-                  <th>{MODE_LABELS[m]}</th>
+                  <th>
+                    {MODE_LABELS[m]} ({loadCurrentFields[`currentA.${m}`].display.symbol})
+                  </th>
                 ))}
               </tr>
             </thead>
@@ -116,7 +114,7 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
                   <td>{railName(l.railId)}</td>
                   {MODES.map((m) => (
                     <td>
-                      <Field name={`l${i}_${m}`} idp={`s-${stage.id}`} label={`${MODE_LABELS[m]} current`} state={state} size={8} />
+                      <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} idp={`s-${stage.id}`} state={state} size={8} hint="" />
                     </td>
                   ))}
                 </tr>

@@ -2,8 +2,8 @@
 // A row with currents but no rail is refused (the currents would otherwise vanish on save).
 import type { StageLoad } from '../model';
 import { MODES } from '../model';
-import { loadCurrentFields, loadFormName } from '../spec/stage';
-import { readField } from '../spec/derive';
+import { loadCurrentFields, loadFormName, loadSpec } from '../spec/stage';
+import { formValues, readField } from '../spec/derive';
 
 /** The rail choice that removes an existing row (the empty choice belongs to the new row). */
 export const REMOVE_LOAD = 'remove';
@@ -36,4 +36,30 @@ export function readLoads(railIds: ReadonlySet<string>, values: Record<string, s
     loads.push({ railId, currentA });
   }
   return Object.keys(errors).length ? { ok: false, errors } : { ok: true, loads };
+}
+
+/** The currents of a stage's existing rows (the overview's short form): each box read with the load spec. */
+export function readLoadCurrents(loads: readonly StageLoad[], values: Record<string, string | undefined>): LoadsResult {
+  const errors: Record<string, string> = {};
+  const next = loads.map((l, i) => {
+    const currentA = { ...l.currentA };
+    for (const m of MODES) {
+      const key = loadFormName(i, `currentA.${m}`);
+      const r = readField(loadCurrentFields[`currentA.${m}`], values[key]);
+      if (r.ok) currentA[m] = r.value as number;
+      else errors[key] = r.message;
+    }
+    return { ...l, currentA };
+  });
+  return Object.keys(errors).length ? { ok: false, errors } : { ok: true, loads: next };
+}
+
+/** The text of a stage's current boxes, row by row (rail names are shown, not edited, in the short form). */
+export function loadCurrentValues(loads: readonly StageLoad[]): Record<string, string> {
+  const v: Record<string, string> = {};
+  loads.forEach((l, i) => {
+    const row = formValues(loadSpec, l);
+    for (const m of MODES) v[loadFormName(i, `currentA.${m}`)] = row[`currentA.${m}`];
+  });
+  return v;
 }

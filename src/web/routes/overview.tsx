@@ -7,7 +7,8 @@ import { MODES, STAGE_KINDS } from '../../core/model';
 import { evaluateCached as evaluate } from '../cache/reports';
 import { withKindDefaults } from '../../core/new-project';
 import { loadProject } from '../../db/projects';
-import { num, text, choice, type FieldErrors } from '../form';
+import { text, choice } from '../form';
+import { readLoadCurrents } from '../../core/edits/stage-loads';
 import { specFormSchema } from '../forms/spec-schema';
 import { settingsSpec, settingsFormValues, type ProjectSettings } from '../../core/spec/settings';
 import { applySettings } from '../../core/edits/settings';
@@ -120,18 +121,9 @@ export function overviewRoutes(deps: Deps) {
       change: (p, values, c) => {
         const stage = findStage(p, c.req.param('sid'));
         if (!stage) return { errors: { _form: 'That stage no longer exists.' } };
-        const errors: FieldErrors = {};
-        const loads = stage.loads.map((l, i) => {
-          const currentA = { ...l.currentA };
-          for (const m of MODES) {
-            const key = `l${i}_${m}`;
-            const r = num('A', { label: `${stage.name}: ${m === 'keyDown' ? 'key-down' : m === 'keyUp' ? 'key-up' : 'receive'} current`, min: 0, max: 100 }).safeParse(values[key] ?? '');
-            if (r.success) currentA[m] = r.data;
-            else errors[key] = r.error.issues[0].message;
-          }
-          return { ...l, currentA };
-        });
-        if (Object.keys(errors).length) return { errors };
+        const r = readLoadCurrents(stage.loads, values);
+        if (!r.ok) return { errors: r.errors };
+        const loads = r.loads;
         return { ...p, stages: p.stages.map((s) => (s.id === stage.id ? { ...s, loads } : s)) };
       },
     }),
