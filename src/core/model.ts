@@ -38,6 +38,9 @@ export interface Transformer {
 
 export type RectifierTopology = 'bridge' | 'centre-tap' | 'half-wave';
 
+/** Fuse-link type by its IEC 60127-2 standard sheet: T3 time-lag low breaking, T5 time-lag high breaking, F2 quick. */
+export type FuseSheet = 'T3' | 'T5' | 'F2';
+
 export interface RectifiedRail {
   kind: 'rectified';
   id: string;
@@ -55,6 +58,9 @@ export interface RectifiedRail {
   marginV: number; // extra headroom the designer wants above regulator needs
   fuseA: number | null; // fitted rail fuse, null = recommend one
   minimumV: number | null; // lowest voltage its direct loads need, null = not stated
+  windingFuseA?: number | null; // fitted fuse in the winding lead ahead of the rectifier, null/absent = recommend one
+  windingFuseSheet?: FuseSheet; // its type; absent = T3
+  bleederRatedW?: number | null; // fitted bleeder's power rating, null/absent = not stated
 }
 
 export type RegulatorSetting =
@@ -83,6 +89,8 @@ export interface RegulatedRail {
   maxOutputA: number | null;
   maxInputV: number | null;
   mount: HeatsinkMount | null;
+  rippleRejectionDb?: number | null; // datasheet ripple rejection at 100/120 Hz, null/absent = not stated
+  rippleTargetV?: number | null; // largest output ripple wanted (V p-p, e.g. a receiver's rail), null/absent = none
 }
 
 export interface BatteryRail {
@@ -141,6 +149,8 @@ export interface PaParams {
   mount: HeatsinkMount;
   biasIdleMaxA: number; // total idle current at the bias preset's maximum
   referencePowerW: number; // compare output against this (dB and S-units)
+  heatsinkSharedBy?: number | null; // devices on one heatsink (their heat through one θsa); null/absent = one each
+  networkLoadOhm?: number | null; // drain load set by an L/pi matching network, ohms; null/absent = transformer
 }
 
 export interface LpfParams {

@@ -49,13 +49,15 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused
         ['Output', `${fv(pa.outputW, 'W')} = ${fv(pa.outputDbm, 'dBm')} = ${fv(pa.outputDbw, 'dBW')}`],
         ['Against reference', `${fv(pa.vsReferenceDb, 'dB')} (${pa.vsReferenceSUnits.toFixed(1)} S-units at 6 dB each)`],
         ['Supply', `${fv(pa.railV, 'V')} (saturation drop ${fv(pa.saturationV, 'V')})`],
-        ['Turns ratio (secondary : full primary)', `${pa.turnsRatio.toFixed(3)} (${pa.turnsRatioSource})${pa.idealTurnsRatio !== null ? `, exact for target ${pa.idealTurnsRatio.toFixed(3)}` : ''}`],
+        pa.turnsRatioSource === 'network'
+          ? ['Output match', `matching network presenting ${fv(pa.primaryOhm, 'Ω')} at the drain (no transformer)`]
+          : ['Turns ratio (secondary : full primary)', `${pa.turnsRatio.toFixed(3)} (${pa.turnsRatioSource})${pa.idealTurnsRatio !== null ? `, exact for target ${pa.idealTurnsRatio.toFixed(3)}` : ''}`],
         ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
         ['Efficiency', `${pct(pa.efficiency)} (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'})`],
         ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} (bias idle included)`],
         ['Peak drain voltage / device current', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
         ['Dissipation', `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`],
-        ['Heatsink needed per device (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
+        [(pa.thermal.sharedBy > 1 ? `Heatsink needed, one per ${pa.thermal.sharedBy} devices` : 'Heatsink needed per device') + ' (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
         ['Junction with fitted heatsink', pa.thermal.tjAverageC === null ? 'no heatsink chosen' : `${fv(pa.thermal.tjAverageC, '°C')} keying, ${fv(pa.thermal.tjContinuousC, '°C')} continuous`],
       ]}
     />
@@ -141,7 +143,7 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
       {a ? (
         <KV
           rows={[
-            ['At the operating frequency', `loss ${fv(a.atOperating.lossDb, 'dB')}, input SWR ${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} of heat`],
+            ['At the operating frequency', `loss ${fv(a.atOperating.lossDb, 'dB')}, input SWR ${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} dissipated as heat (reflected power excluded)`],
             ['Across the band', `${fv(a.bandLowHz, 'Hz', 5)} – ${fv(a.bandHighHz, 'Hz', 5)}: worst loss ${fv(a.bandMaxLossDb, 'dB')}, worst SWR ${a.bandMaxSwr.toFixed(2)}`],
             ...a.harmonics.map((h): [string, string] => {
               const m = mc?.harmonics.find((x) => x.n === h.n);

@@ -44,12 +44,15 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   const analysis = analyseLpf(design);
   const monteCarlo = monteCarloLpf(design, { trials: p.monteCarloTrials, seed: p.seed, onProgress: ctx.onMonteCarloProgress });
   const il = analysis.atOperating.lossDb;
-  // Source: definition of insertion loss: dissipated = P_in (1 - 10^(-IL/10)) (reflection counted as loss: upper bound)
-  const filterLossW = powerW * (1 - 10 ** (-il / 10));
+  // Power balance of a two-port into a matched load: dissipated = P_avail (1 - |Gamma_in|^2 - |S21|^2), with
+  // |Gamma| = (SWR - 1)/(SWR + 1) (definitions of S-parameters and SWR): reflected power is not heat
+  const swrIn = analysis.atOperating.inputSwr;
+  const gammaIn = (swrIn - 1) / (swrIn + 1);
+  const filterLossW = Math.max(0, powerW * (1 - gammaIn ** 2 - 10 ** (-il / 10)));
   const s = stage.name;
   const f: Finding[] = [];
   f.push({ severity: analysis.bandMaxLossDb > 1 ? 'caution' : 'ok', rule: 'lpf.passband', subject: s, value: analysis.bandMaxLossDb, limit: 1, unit: 'dB', source: 'lpf.abcd',
-    message: `Loss across the band up to ${analysis.bandMaxLossDb.toFixed(2)} dB (${il.toFixed(2)} dB at the operating frequency, about ${filterLossW.toFixed(2)} W of heat).` });
+    message: `Loss across the band up to ${analysis.bandMaxLossDb.toFixed(2)} dB (${il.toFixed(2)} dB at the operating frequency, about ${filterLossW.toFixed(2)} W dissipated as heat).` });
   f.push({ severity: analysis.bandMaxSwr > 2 ? 'fail' : analysis.bandMaxSwr > 1.3 ? 'caution' : 'ok', rule: 'lpf.swr', subject: s, value: analysis.bandMaxSwr, limit: 1.3, unit: '', source: 'lpf.abcd',
     message: analysis.bandMaxSwr > 1.3
       ? `The built filter shows SWR up to ${analysis.bandMaxSwr.toFixed(2)} in the band: component snapping or turns rounding detune it; adjust turns or use a parallel capacitor pair.`

@@ -20,6 +20,8 @@ export interface PaThermal {
   thetaSaNeededAverageKPerW: number | null;
   /** Same for a continuous key-down (tune-up) carrier, K/W (null: none possible). */
   thetaSaNeededContinuousKPerW: number | null;
+  /** Devices whose heat flows through one heatsink (θsa); 1 = one heatsink per device. */
+  sharedBy: number;
   /** Junction temperature with the fitted heatsink (null when none chosen), °C. */
   tjAverageC: number | null;
   tjContinuousC: number | null;
@@ -42,20 +44,24 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
   // Source: reference page on derating practice (REFERENCE-VALUES §7): target Tj <= 0.8 Tjmax
   const tjTargetC = 0.8 * m.tjMaxC;
   const jc = m.thetaJcKPerW + m.thetaCsKPerW;
-  // Source: REFERENCE-VALUES §7: θsa,max = (Tj,target - Ta)/P - θjc - θcs
+  // Devices on one heatsink: their heat adds in the one θsa, each keeps its own θjc + θcs
+  const sharedBy = Math.min(n, Math.max(1, Math.round(pa.heatsinkSharedBy ?? 1)));
+  // Source: series/parallel thermal network (textbook; REFERENCE-VALUES §7 extended to s devices on one sink):
+  // Tj = Ta + P (θjc + θcs) + s P θsa, so θsa,max = ((Tj,target - Ta)/P - θjc - θcs) / s
   // A subnormal p (from a rail of 1.5e-322 V) makes the quotient Infinity: below the floor no heatsink is needed.
   const need = (p: number): number | null => {
     if (p < NEGLIGIBLE_DISSIPATION_W) return tjTargetC > ambientC ? NO_HEATSINK_NEEDED_K_PER_W : null;
     const perW = quotient(tjTargetC - ambientC, p, NEGLIGIBLE_DISSIPATION_W);
-    const v = perW === null ? null : perW - jc;
+    const v = perW === null ? null : (perW - jc) / sharedBy;
     return v !== null && v > 0 ? v : null;
   };
   const thetaSaNeededAverageKPerW = need(average);
   const thetaSaNeededContinuousKPerW = need(perDevice);
   const sa = m.thetaSaKPerW;
-  // Source: REFERENCE-VALUES §7: Tj = Ta + P (θjc + θcs + θsa)
-  const tjAverageC = sa === null ? null : ambientC + average * (jc + sa);
-  const tjContinuousC = sa === null ? null : ambientC + perDevice * (jc + sa);
+  // Source: series thermal path Tj = Ta + P (θjc + θcs) + s P θsa (REFERENCE-VALUES §7, s devices on one heatsink)
+  const tjAverageC = sa === null ? null : ambientC + average * (jc + sharedBy * sa);
+  const tjContinuousC = sa === null ? null : ambientC + perDevice * (jc + sharedBy * sa);
+  const sinkWord = sharedBy > 1 ? `for each heatsink shared by ${sharedBy} devices` : 'per device';
   const findings: Finding[] = [];
   if (sa === null && average < NEGLIGIBLE_DISSIPATION_W && thetaSaNeededAverageKPerW !== null) {
     findings.push({
@@ -69,7 +75,7 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
       severity: thetaSaNeededAverageKPerW === null ? 'fail' : 'ok', rule: 'pa.heatsink', subject: '', value: thetaSaNeededAverageKPerW, limit: null, unit: 'K/W', source: SRC,
       message: thetaSaNeededAverageKPerW === null
         ? `No heatsink can hold the junction below ${tjTargetC.toFixed(0)} °C at ${average.toFixed(1)} W per device: share the heat over more devices or lower the power.`
-        : `Choose a heatsink of at most ${thetaSaNeededAverageKPerW.toFixed(2)} K/W per device for CW keying` +
+        : `Choose a heatsink of at most ${thetaSaNeededAverageKPerW.toFixed(2)} K/W ${sinkWord} for CW keying` +
           (thetaSaNeededContinuousKPerW === null ? '; no heatsink allows a continuous tune-up carrier.' : ` (${thetaSaNeededContinuousKPerW.toFixed(2)} K/W for a continuous tune-up carrier).`),
     });
   } else {
@@ -78,8 +84,9 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
     findings.push({
       severity: ta > tjTargetC ? 'fail' : 'ok', rule: 'pa.tj-keying', subject: '', value: ta, limit: tjTargetC, unit: '°C', source: SRC,
       message: ta > tjTargetC
-        ? `With the fitted heatsink the junction averages ${ta.toFixed(0)} °C in CW keying, above the ${tjTargetC.toFixed(0)} °C target: fit a larger heatsink.`
-        : `Junction about ${ta.toFixed(0)} °C in CW keying (target ${tjTargetC.toFixed(0)} °C).`,
+        ? `With the fitted heatsink${sharedBy > 1 ? ` (shared by ${sharedBy} devices)` : ''} the junction averages ${ta.toFixed(0)} °C in CW keying, above the ${tjTargetC.toFixed(0)} °C target: fit a larger heatsink.`
+        : `Junction about ${ta.toFixed(0)} °C in CW keying (target ${tjTargetC.toFixed(0)} °C)` +
+          `${sharedBy > 1 ? `, ${sharedBy} devices sharing one heatsink` : ''}.`,
     });
     findings.push({
       severity: tc > tjTargetC ? 'caution' : 'ok', rule: 'pa.tj-carrier', subject: '', value: tc, limit: tjTargetC, unit: '°C', source: SRC,
@@ -95,7 +102,7 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
     message: 'Heatsinks and device tabs get hot enough to burn; tabs are often at drain voltage, so insulate them or keep fingers away when keyed.',
   });
   return {
-    dissipationTotalW, dissipationPerDeviceW: perDevice, averagePerDeviceW: average, tjTargetC,
+    dissipationTotalW, dissipationPerDeviceW: perDevice, averagePerDeviceW: average, tjTargetC, sharedBy,
     thetaSaNeededAverageKPerW, thetaSaNeededContinuousKPerW, tjAverageC, tjContinuousC, findings,
   };
 }

@@ -28,7 +28,8 @@ export interface PaResult {
   saturationV: number;
   /** Secondary / full primary turns ratio in use. */
   turnsRatio: number;
-  turnsRatioSource: 'entered' | 'designed';
+  /** 'network': the drain load is set by an L/pi network (networkLoadOhm); turnsRatio is then its equivalent. */
+  turnsRatioSource: 'entered' | 'designed' | 'network';
   /** Exact ratio for the target power (design mode), else null. */
   idealTurnsRatio: number | null;
   /** Practical ratios with the power each gives (design mode: all; entered: empty). */
@@ -84,7 +85,7 @@ function zeroResult(railV: number, findings: Finding[]): PaResult {
     railV, maxRailV: railV, hotRailV: railV, lowRailV: railV, lowOutputW: 0, hotOutputW: 0, saturationV: 0, turnsRatio: 0, turnsRatioSource: 'entered', idealTurnsRatio: null, ratioOptions: [], primaryOhm: 0,
     outputW: 0, outputDbm: -999, outputDbw: -999, vsReferenceDb: -999, vsReferenceSUnits: -999 / 6, efficiency: 0, efficiencySource: 'entered',
     dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
-    thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
+    thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, sharedBy: 1, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
     findings,
     refused: true,
   };
@@ -127,7 +128,11 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   let turnsRatio: number;
   let idealTurnsRatio: number | null = null;
   let ratioOptions: RatioOption[] = [];
-  if (pa.turnsRatio !== null) {
+  const network = pa.networkLoadOhm ?? null;
+  if (network !== null) {
+    // Source: impedance transformation, equivalent ratio sqrt(Z_load / Z_drain) (REFERENCE-VALUES §8.1)
+    turnsRatio = Math.sqrt(pa.loadOhm / network);
+  } else if (pa.turnsRatio !== null) {
     turnsRatio = pa.turnsRatio;
   } else if (target > 0) {
     // Source: impedance transformation N_s/N_p = sqrt(Z_s/Z_p) (REFERENCE-VALUES §8.1)
@@ -142,7 +147,8 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     return zeroResult(railV, [{ severity: 'fail', rule: 'pa.input', subject, value: target, limit: 0, unit: 'W', source: 'design.input', message: 'Enter a turns ratio or a target power above zero.' }]);
   }
   // Source: impedance transformation Z_p = Z_s / (N_s/N_p)^2 (REFERENCE-VALUES §8.1)
-  const primaryOhm = pa.loadOhm / turnsRatio ** 2;
+  const primaryOhm = network ?? pa.loadOhm / turnsRatio ** 2;
+  const fixWord = network !== null ? "the network's drain load" : 'the turns ratio';
   const op = operatingPoint(pa, railV, primaryOhm);
   const efficiency = pa.efficiency ?? DEFAULT_EFFICIENCY[pa.amplifierClass];
   const dcInputW = op.outputW / efficiency;
@@ -179,14 +185,14 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     const dev = db(op.outputW / target);
     findings.push({ severity: Math.abs(dev) > 1 ? 'caution' : 'ok', rule: 'pa.power', subject, value: op.outputW, limit: target, unit: 'W', source: SRC_LOADLINE,
       message: Math.abs(dev) > 1
-        ? `Predicted output ${op.outputW.toFixed(1)} W is ${dev.toFixed(1)} dB from the ${target} W target; change the turns ratio or rail voltage.`
+        ? `Predicted output ${op.outputW.toFixed(1)} W is ${dev.toFixed(1)} dB from the ${target} W target; change ${fixWord} or the rail voltage.`
         : `Predicted output ${op.outputW.toFixed(1)} W is within 1 dB of the ${target} W target.` });
   }
   if (target > 0 && lowRailV < railV) {
     // Same load line at the lowest key-down rail (REFERENCE-VALUES §8.1); 1 dB as for the target check above
     const devLow = db(lowOutputW / target);
     findings.push({ severity: devLow < -1 ? 'caution' : 'ok', rule: 'pa.power-low-supply', subject, value: lowOutputW, limit: target, unit: 'W', source: SRC_LOADLINE,
-      message: `With the supply at its lowest under key-down (${lowRailV.toFixed(1)} V: ${bat ? 'battery at its end voltage' : 'low mains'}) the output falls to about ${lowOutputW.toFixed(1)} W (${devLow.toFixed(1)} dB from the ${target} W target)${devLow < -1 ? '; a higher rail or a different turns ratio keeps the power up' : ''}.` });
+      message: `With the supply at its lowest under key-down (${lowRailV.toFixed(1)} V: ${bat ? 'battery at its end voltage' : 'low mains'}) the output falls to about ${lowOutputW.toFixed(1)} W (${devLow.toFixed(1)} dB from the ${target} W target)${devLow < -1 ? `; a higher rail or a different ${network !== null ? 'network drain load' : 'turns ratio'} keeps the power up` : ''}.` });
   }
   // Common practice, no published source: device voltage rating at least 1.25 x the peak drain voltage
   const vMargin = 1.25;
@@ -213,7 +219,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const ref = pa.referencePowerW;
   const vsReferenceDb = db(op.outputW / ref);
   return {
-    railV, maxRailV, hotRailV, lowRailV, lowOutputW, hotOutputW: opHot.outputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
+    railV, maxRailV, hotRailV, lowRailV, lowOutputW, hotOutputW: opHot.outputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: network !== null ? 'network' : pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
     primaryOhm, outputW: op.outputW,
     // Source: definitions of dBm and dBW (power relative to 1 mW / 1 W)
     outputDbm: db(op.outputW / 1e-3), outputDbw: db(op.outputW),

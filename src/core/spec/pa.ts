@@ -36,6 +36,17 @@ export const paSpec = defineSpec({
     biasIdleMaxA: num('Bias preset max idle current', 'A', U.mA, 0, 100, 0.05, { form: 'biasIdle', example: '50' }),
     referencePowerW: num('Compare with', 'W', U.W, 0, 1e6, 5, { form: 'referencePower', exclusiveMin: true }),
     ...mountFields(25),
+    heatsinkSharedBy: optNum('Devices on one heatsink', '', U.none, 1, 16, null, {
+      integer: true,
+      form: 'heatsinkSharedBy',
+      help: 'their heat flows through one θsa; empty = each device on its own heatsink',
+      example: '2',
+    }),
+    networkLoadOhm: optNum('Drain load set by a matching network', 'Ω', U.ohm, 0.1, 10_000, null, {
+      form: 'networkLoad',
+      help: 'L or pi network instead of a transformer; empty = transformer (turns ratio)',
+      example: '12.5',
+    }),
   },
   refine: (v) => {
     const errors = [];
@@ -43,6 +54,11 @@ export const paSpec = defineSpec({
       errors.push({ field: 'saturationV', label: 'Saturation voltage', message: 'Saturation voltage: give it or Rds(on) (or both)' });
     if (v.topology === 'push-pull' && typeof v.devices === 'number' && v.devices < 2)
       errors.push({ field: 'devices', label: 'Devices', message: 'Devices: a push-pull stage has at least 2' });
+    const shared = v.heatsinkSharedBy;
+    if (typeof shared === 'number' && typeof v.devices === 'number' && shared > v.devices)
+      errors.push({ field: 'heatsinkSharedBy', label: 'Devices on one heatsink', message: 'Devices on one heatsink: at most the number of devices' });
+    if (typeof v.networkLoadOhm === 'number' && typeof v.turnsRatio === 'number')
+      errors.push({ field: 'networkLoadOhm', label: 'Drain load set by a matching network', message: 'Drain load set by a matching network: give it or a turns ratio, not both' });
     return errors;
   },
 });

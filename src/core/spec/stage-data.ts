@@ -30,7 +30,8 @@ export const STAGE_DATA: readonly StageData[] = [
       ['topology', 'amplifierClass', 'railId', 'devices'],
       ['saturationV', 'rdsOnOhm', 'turnsRatio', 'loadOhm', 'efficiency'],
       ['deviceVdsMaxV', 'deviceIdMaxA', 'biasIdleMaxA', 'referencePowerW'],
-      ['mount.thetaJcKPerW', 'mount.thetaCsKPerW', 'mount.thetaSaKPerW', 'mount.tjMaxC'],
+      ['mount.thetaJcKPerW', 'mount.thetaCsKPerW', 'mount.thetaSaKPerW', 'mount.tjMaxC', 'heatsinkSharedBy'],
+      ['networkLoadOhm'],
     ],
   },
   {

@@ -19,9 +19,9 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       keyValues(l, [
         ['Output', `${fv(p.outputW, 'W')} (${fv(p.outputDbm, 'dBm')}), ${fv(p.vsReferenceDb, 'dB')} vs. reference (${p.vsReferenceSUnits.toFixed(1)} S-units)`],
         ['Supply', `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')}, DC input ${fv(p.dcInputW, 'W')}, efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`],
-        ['Load', `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
+        ['Load', p.turnsRatioSource === 'network' ? `matching network, ${fv(p.primaryOhm, 'Ω')} at the drain` : `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
         ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')}`],
-        ['Heat', `${fv(p.thermal.dissipationTotalW, 'W')} key-down in all devices; junction ${fv(p.thermal.tjAverageC, '°C')} average, ${fv(p.thermal.tjContinuousC, '°C')} continuous (target ≤ ${fv(p.thermal.tjTargetC, '°C')}); heatsink ≤ ${fv(p.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for tune-up`],
+        ['Heat', `${fv(p.thermal.dissipationTotalW, 'W')} key-down in all devices; junction ${fv(p.thermal.tjAverageC, '°C')} average, ${fv(p.thermal.tjContinuousC, '°C')} continuous (target ≤ ${fv(p.thermal.tjTargetC, '°C')}); heatsink ≤ ${fv(p.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for tune-up${p.thermal.sharedBy > 1 ? ` (one heatsink for ${p.thermal.sharedBy} devices)` : ''}`],
       ], 110, 8.5);
     }
     if (s.lpf) {

@@ -35,3 +35,24 @@ describe('paThermal with (nearly) nothing to dissipate', () => {
     expect(t.findings.find((x) => x.rule === 'pa.heatsink')?.severity).toBe('fail');
   });
 });
+
+describe('paThermal with devices sharing one heatsink', () => {
+  // Thermal network (REFERENCE-VALUES §7 series path, s devices in parallel into one θsa; textbook):
+  // Tj = Ta + P (θjc + θcs) + s P θsa. Hand arithmetic: P = 10 W per device (duty 1), θjc + θcs = 6 K/W,
+  // θsa = 2 K/W, Ta = 25 °C: one sink each 25 + 10 x 8 = 105 °C; two on one sink 25 + 60 + 40 = 125 °C.
+  const two = (shared: number | null, sa: number | null) =>
+    paParams({ devices: 2, heatsinkSharedBy: shared, mount: { ...mount, thetaSaKPerW: sa } });
+  it('one heatsink per device: 105 °C continuous', () => {
+    near(paThermal(two(null, 2), 0, 20, 0, 25, 1).tjContinuousC as number, 105, 1e-9, 'Tj');
+  });
+  it('two devices on one heatsink: 125 °C continuous (the shared θsa carries 20 W)', () => {
+    const t = paThermal(two(2, 2), 0, 20, 0, 25, 1);
+    near(t.tjContinuousC as number, 125, 1e-9, 'Tj');
+    expect(t.sharedBy).toBe(2);
+  });
+  it('heatsink needed halves with two devices on it: ((100 - 25)/10 - 6)/2 = 0.75 K/W', () => {
+    const t = paThermal(two(2, null), 0, 20, 0, 25, 1);
+    near(t.thetaSaNeededContinuousKPerW as number, 0.75, 1e-9, 'θsa');
+    expect(t.findings.find((f) => f.rule === 'pa.heatsink')?.message).toContain('shared by 2 devices');
+  });
+});
