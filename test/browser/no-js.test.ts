@@ -42,7 +42,7 @@ describe.skipIf(!hasChromium)('without JavaScript', () => {
     await loadsForm().locator('input[name="l0_receive"]').fill('1.75 A');
     await Promise.all([page.waitForURL(server.url + DEMO), loadsForm().getByRole('button', { name: 'Save currents' }).click()]);
     await page.waitForLoadState('load');
-    expect(await loadsForm().locator('input[name="l0_receive"]').inputValue()).toBe('1.75 A');
+    expect(await loadsForm().locator('input[name="l0_receive"]').inputValue()).toBe('1750') // 1.75 A shown back in the box's unit, mA;
     expect(await total('receive')).not.toBe(before);
   });
 

@@ -5,7 +5,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type RunningServer } from '../helpers/server';
 import { forms, type HtmlForm } from '../helpers/html';
-import { parseValue } from '../../src/core/units';
+import { readNumber } from '../../src/core/spec/number-text';
+import { loadCurrentFields } from '../../src/core/spec/stage';
 
 const DEMO = '/projects/demo-club-30m';
 let server: RunningServer;
@@ -34,7 +35,8 @@ describe('concurrent edits', () => {
   it('of several edits of the same field sent at once with the same version, exactly one is saved; the others get 409', async () => {
     const [f] = await loadsForms();
     const version = Number(f.fields.version);
-    const values = Array.from({ length: 8 }, (_, i) => `${300 + i} mA`);
+    // bare numbers: the current boxes are in mA, and the page shows a stored value back the same way
+    const values = Array.from({ length: 8 }, (_, i) => `${300 + i}`);
     const res = await Promise.all(values.map((v) => post(f, version, v)));
     const statuses = res.map((r) => r.status);
     expect(statuses.filter((s) => s === 303)).toHaveLength(1);
@@ -46,7 +48,7 @@ describe('concurrent edits', () => {
     // the refused ones were told why (both values), and given the stored version to try again with
     const refused = await res[statuses.indexOf(409)].text();
     expect(refused).toContain('someone else changed the same field');
-    expect(refused).toContain(`l0_keyUp: changed by someone else to “${winner}”`);
+    expect(refused).toContain(`changed by someone else to “${winner}”`);
     expect(refused).toContain(`name="version" value="${version + 1}"`);
   });
 
@@ -86,8 +88,9 @@ describe('concurrent edits', () => {
       const f = stageForms[c % stageForms.length];
       const last = applied.filter((a) => a.action === f.action).at(-1)!;
       const shown = after.find((x) => x.action === f.action)!.fields.l0_keyUp;
-      const a = parseValue(shown, 'A');
-      const b = parseValue(last.value, 'A');
+      // both in mA as typed and as shown (the load spec's display unit)
+      const a = readNumber(shown, loadCurrentFields['currentA.keyUp']);
+      const b = readNumber(last.value, loadCurrentFields['currentA.keyUp']);
       expect(a.ok && b.ok && Math.abs(a.value - b.value) < 1e-12, `${f.action}: ${shown} vs ${last.value}`).toBe(true);
     }
     // each client edits its own stage, so no edit conflicts with another: they merge instead of being refused
