@@ -27,7 +27,6 @@ beforeAll(async () => {
   for (const r of p.supply.rails) r.name = `${r.name}${INJECTION}`;
   for (const s of p.stages) s.name = `${s.name}${INJECTION}`;
   for (const tr of p.supply.transformers) for (const w of tr.windings) w.name = `${w.name}${INJECTION}`;
-  if (p.stages.some((s) => s.lpf)) p.stages.find((s) => s.lpf)!.lpf!.coreName = `core${INJECTION}`;
   // The import refuses multi-line names outright (checked below); to test the netlist layer on its own,
   // the hostile project goes straight into the database, as an older file or another client might have left it.
   const res = await postForm(t.app, '/import', { json: toProjectFile(p, '2026-01-01T00:00:00Z') });
@@ -55,6 +54,19 @@ async function netlists(): Promise<[string, string][]> {
 }
 
 describe('SPICE netlist downloads', () => {
+  it('a stored multi-line core name is refused by the filter input spec: no netlist, a message naming the field', async () => {
+    const p = (await loadProject(t.database.db, id))!;
+    const lpf = p.stages.find((s) => s.lpf)!;
+    const bad = cloneProject({ ...p, stages: p.stages.map((s) => (s.id === lpf.id ? { ...s, lpf: { ...s.lpf!, coreName: `core${INJECTION}` } } : s)) }, 'hostile-core', p.name, newId);
+    await insertProject(t.database, bad, '2026-01-01T00:00:00Z');
+    const sid = bad.stages.find((s) => s.lpf)!.id;
+    const res = await t.app.request(`/projects/hostile-core/stages/${sid}/lpf.cir`);
+    expect(res.status).toBe(422);
+    const body = await res.text();
+    expect(body).toContain('Core must be one line of text');
+    expect(body.split(/\r?\n/).filter((l) => /^\s*(\.control|shell\b)/i.test(l))).toEqual([]);
+  });
+
   it('keep every piece of project text inside comment lines (no injected .control / shell line)', async (ctx) => {
     const files = await netlists();
     if (!files.length) ctx.skip('no netlist download route yet');
