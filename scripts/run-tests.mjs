@@ -1,12 +1,13 @@
 #!/usr/bin/env node
 // Runs the whole vitest suite and ends with the plain line CI reads: "tests: N passed, M failed, K skipped".
+// A heartbeat reporter (scripts/progress-reporter.mjs) prints which long test files are still running.
 // Skipped tests are counted and shown (a missing ngspice, chromium or pdftotext skips its tests with the reason printed).
 import { spawnSync } from 'node:child_process';
 import { readFileSync, rmSync, existsSync } from 'node:fs';
 
 const report = '.vitest-report.json';
 rmSync(report, { force: true });
-const args = ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)];
+const args = ['vitest', 'run', '--reporter=default', '--reporter=./scripts/progress-reporter.mjs', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)];
 const run = spawnSync('npx', args, { stdio: 'inherit', env: { ...process.env, NO_COLOR: '1' } });
 let passed = 0;
 let failed = 0;

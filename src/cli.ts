@@ -4,12 +4,15 @@
 //   rigwright import FILE.json                      (into DATABASE_URL, always as a new project)
 //   rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf
 //   rigwright csv FILE.json|--id ID [--out PARTS.csv]
-import { readFileSync, writeFileSync } from 'node:fs';
+//   rigwright backup FILE.db                       (a consistent copy of the database, also while the server runs)
+// Every command that opens the database names it on stderr (stdout stays the data).
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { parseArgs } from 'node:util';
 import { parseProjectFile, toProjectFile } from './io/project-file';
 import { evaluate } from './core/evaluate';
 import { renderEvaluationText, evaluationJson } from './io/evaluation-output';
-import { readEnv } from './env';
+import { readEnv, describeDatabase } from './env';
 
 const USAGE = `Usage:
   rigwright evaluate FILE.json [--json]   evaluate an exported project file (no server, no database)
@@ -17,7 +20,11 @@ const USAGE = `Usage:
   rigwright import FILE.json              import a project file into the database as a new project
   rigwright list                          list the projects in the database
   rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf   the builder pack as PDF
-  rigwright csv FILE.json|--id ID [--out PARTS.csv]                    the costed parts list as CSV`;
+  rigwright csv FILE.json|--id ID [--out PARTS.csv]                    the costed parts list as CSV
+  rigwright backup FILE.db                a consistent copy of the database (works while the server runs)
+  rigwright --help                        this text
+
+The database is DATABASE_URL, by default data/rigwright.db in the Rigwright folder (from any current folder).`;
 
 interface Args {
   positionals: string[];
@@ -32,6 +39,7 @@ const OPTIONS: Record<string, { options: ('id' | 'out' | 'paper' | 'json')[]; fi
   import: { options: [], files: [1, 1] },
   pdf: { options: ['id', 'paper', 'out'], files: [0, 1] },
   csv: { options: ['id', 'out'], files: [0, 1] },
+  backup: { options: [], files: [1, 1] },
 };
 
 function readArgs(command: string, rest: string[]): Args {
@@ -47,7 +55,7 @@ function readArgs(command: string, rest: string[]): Args {
   const [min, max] = spec.files;
   const n = parsed!.positionals.length;
   if (n > max) fail(`${command}: unexpected argument ${JSON.stringify(parsed!.positionals[max])}\n${USAGE}`);
-  if (n < min) fail(`${command}: give the project file to read.\n${USAGE}`);
+  if (n < min) fail(`${command}: give the ${command === 'backup' ? 'file to write the copy to' : 'project file to read'}.\n${USAGE}`);
   for (const [k, v] of Object.entries(parsed!.values)) if (v === '') fail(`${command}: --${k} needs a value`);
   return parsed!;
 }
@@ -109,6 +117,7 @@ async function withDb<T>(fn: (db: import('./db/client').Database) => Promise<T>)
   } catch (e) {
     fail(`Cannot open the database ${env!.databaseUrl} (DATABASE_URL): ${(e as Error).message}`);
   }
+  process.stderr.write(`Database: ${describeDatabase(env!.databaseUrl, env!.databaseIsDefault)}\n`);
   try {
     return await fn(database);
   } finally {
@@ -118,6 +127,10 @@ async function withDb<T>(fn: (db: import('./db/client').Database) => Promise<T>)
 
 async function main(args: string[]) {
   const [command, ...rest] = args;
+  if (command === '--help' || command === '-h' || command === 'help') {
+    process.stdout.write(`${USAGE}\n`);
+    return;
+  }
   if (!command || !Object.hasOwn(OPTIONS, command)) {
     process.stderr.write(`${command ? `Unknown command ${JSON.stringify(command)}.\n` : ''}${USAGE}\n`);
     process.exit(command ? 2 : 0);
@@ -133,7 +146,9 @@ async function main(args: string[]) {
     case 'list':
       await withDb(async (d) => {
         const { listProjects } = await import('./db/projects');
-        for (const p of await listProjects(d.db)) process.stdout.write(`${p.id}\t${p.name}\n`);
+        const projects = await listProjects(d.db);
+        if (!projects.length) process.stderr.write('No projects in this database (start the server to load the demo, or rigwright import FILE.json).\n');
+        for (const p of projects) process.stdout.write(`${p.id}\t${p.name}\n`);
       });
       return;
     case 'export':
@@ -183,6 +198,21 @@ async function main(args: string[]) {
       const text = costReportToCsv(evaluate(project).cost);
       if (a.values.out) writeOut(a.values.out, text);
       else process.stdout.write(text);
+      return;
+    }
+    case 'backup': {
+      const target = resolve(a.positionals[0]);
+      if (existsSync(target)) fail(`backup: ${target} already exists; give a new file name. Nothing was written.`);
+      await withDb(async (d) => {
+        try {
+          // Source: SQLite documentation, "VACUUM" (sqlite.org/lang_vacuum.html), VACUUM INTO: a consistent copy
+          // made in one read transaction, so the server may keep running and writing meanwhile.
+          await d.client.execute({ sql: 'VACUUM INTO ?', args: [target] });
+        } catch (e) {
+          fail(`backup: cannot write ${target}: ${(e as Error).message}. Nothing was written.`);
+        }
+        process.stdout.write(`Wrote a copy of the database to ${target}\n`);
+      });
       return;
     }
   }

@@ -1,10 +1,13 @@
-import { describe, it, expect, beforeAll } from 'vitest';
+import { describe, it, expect, beforeAll, afterAll } from 'vitest';
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { DEMO_PROJECTS } from '../seed-demo/index';
 import { toProjectFile } from '../src/io/project-file';
+import { readEnv, describeDatabase } from '../src/env';
+import { startServer, spawnServer, exited, type RunningServer } from './helpers/server';
 
 const dir = mkdtempSync(join(tmpdir(), 'rw-cli-'));
 const cli = (args: string[], env: Record<string, string> = {}) =>
@@ -109,5 +112,72 @@ describe('command line: bad arguments are refused with a message', () => {
     expect(r.status).toBe(2);
     expect(r.stderr).toContain(`Cannot write ${join(dir, 'no-such-folder', 'parts.csv')}`);
     expect(r.stderr).not.toMatch(/\n\s+at /);
+  });
+});
+
+describe('command line: the first hour', () => {
+  it('--help prints the usage on stdout and exits 0', () => {
+    const r = cli(['--help']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('Usage:');
+    expect(r.stdout).toContain('rigwright backup FILE.db');
+  });
+
+  it('list on an empty database says so and names the database it opened', () => {
+    const path = join(dir, 'empty.db');
+    const r = cli(['list'], { DATABASE_URL: `file:${path}` });
+    expect(r.status).toBe(0);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toContain(`Database: ${path}`);
+    expect(r.stderr).toContain('No projects in this database');
+  });
+
+  it('the default database is data/rigwright.db in the project folder, whatever the current folder', () => {
+    const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+    const env = readEnv({});
+    expect(env.databaseUrl).toBe(`file:${join(root, 'data', 'rigwright.db')}`);
+    expect(env.databaseIsDefault).toBe(true);
+    expect(describeDatabase(env.databaseUrl, true)).toBe(`${join(root, 'data', 'rigwright.db')} (the default; set DATABASE_URL for another)`);
+    expect(readEnv({ DATABASE_URL: 'file:x.db' }).databaseIsDefault).toBe(false);
+  });
+
+  describe('with the server running', () => {
+    let server: RunningServer;
+    beforeAll(async () => {
+      server = await startServer();
+    }, 90_000);
+    afterAll(async () => {
+      await server?.stop();
+      server?.cleanup();
+    });
+
+    it('backup writes a consistent copy that lists the same projects, and refuses to overwrite', () => {
+      const env = { DATABASE_URL: `file:${server.dbPath}` };
+      const original = cli(['list'], env);
+      expect(original.status).toBe(0);
+      expect(original.stdout.trim().split('\n').length).toBe(DEMO_PROJECTS.length);
+      const copy = join(dir, 'backup.db');
+      const r = cli(['backup', copy], env);
+      expect(r.stderr).toContain(`Database: ${server.dbPath}`);
+      expect(r.status).toBe(0);
+      expect(r.stdout).toContain(`Wrote a copy of the database to ${copy}`);
+      const listed = cli(['list'], { DATABASE_URL: `file:${copy}` });
+      expect(listed.stdout).toBe(original.stdout);
+      const again = cli(['backup', copy], env);
+      expect(again.status).toBe(2);
+      expect(again.stderr).toContain('already exists');
+    });
+
+    it('a second server on the same PORT stops with one line naming PORT, not a stack trace', async () => {
+      const proc = spawnServer({ PORT: String(server.port), DATABASE_URL: `file:${join(dir, 'second.db')}`, RIGWRIGHT_NO_DEMO: 'true' });
+      let err = '';
+      proc.stderr!.on('data', (d) => (err += d));
+      const code = await exited(proc);
+      expect(code).toBe(2);
+      expect(err.trim().split('\n')).toHaveLength(1);
+      expect(err).toContain(`port ${server.port} on 127.0.0.1 is already in use`);
+      expect(err).toContain(`PORT=${server.port + 1} npm start`);
+      expect(err).not.toMatch(/\n\s+at /);
+    }, 60_000);
   });
 });
