@@ -1,5 +1,5 @@
 // Costed parts list: lines grouped by stage with subtotals, totals per kit and build, the chosen
-// supplier per line, price-break suggestions, the single-supplier comparison and the flags.
+// supplier per line, quantities raised to a price break, the single-supplier comparison and the flags.
 // Renders only what costProject computed: no arithmetic here.
 import type { FC } from 'hono/jsx';
 import { formatMoney } from '../../src/core/cost/money';
@@ -49,10 +49,10 @@ const LineRow: FC<{ line: CostLine; currency: string }> = ({ line, currency }) =
     </td>
     <td class="num">{formatMoney(line.lineCostCents, currency)}</td>
     <td>
-      {line.suggestion ? (
+      {line.breakMinQty !== null ? <span class="sub">from {line.breakMinQty}</span> : null}
+      {line.raised ? (
         <span class="suggestion">
-          Order {line.suggestion.qty} (+{line.suggestion.extraQty}) at {formatMoney(line.suggestion.unitPriceCents, line.offerCurrency ?? currency)}{' '}
-          each: saves {formatMoney(line.suggestion.savingCents, currency)}
+          {' '}+{line.raised.extraQty} over the plain {line.raised.plainQty}: saves {formatMoney(line.raised.savingCents, currency)}
         </span>
       ) : null}
     </td>
@@ -162,10 +162,10 @@ export const CostResults: FC<{ report: CostReport; currency: string }> = ({ repo
           ))}
         </tbody>
       </table>
-      {report.suggestedSavingsCents > 0 ? (
+      {report.raisedSavingsCents > 0 ? (
         <p class="notice">
-          Buying up to the next price break where it is cheaper would save {formatMoney(report.suggestedSavingsCents, currency)} in
-          all (see the Price break column; the plan above does not assume it).
+          Buying up to a price break where that is cheaper saves {formatMoney(report.raisedSavingsCents, currency)} in all (see the
+          Price break column; the totals above include it).
         </p>
       ) : null}
       {problems.length ? (

@@ -3,23 +3,27 @@
 import type { Finding } from '../findings';
 import type { Project } from '../model';
 import { cheapestBySupplier, GENERAL_STAGE_NAME, kitsOf, prepareLines, type LineContext } from './line-options';
-import { convertCents, rateFor, roundHalfUp } from './money';
-import { cheaperBreakQuote } from './quantities';
+import { convertCents, formatMoney, rateFor, roundHalfUp } from './money';
+import { breakMinQtyAt } from './quantities';
 import type { CostLine, CostReport, SingleSupplierComparison, StageSubtotal, SupplierUse } from './report-types';
 import { COST_SECTION_LABELS, SECTION_RULE, type CostSection } from './sections';
-import { choosePlan, DEFAULT_EXACT_LIMIT, planSingleSupplier, type PlanInput } from './supplier-plan';
+import { choosePlan, DEFAULT_EXACT_LIMIT, planSingleSupplier, type PlanChoice, type PlanInput } from './supplier-plan';
 import { lineFindings } from './cost-findings';
 
 export interface CostOptions {
   /** Largest supplier count solved exactly by subset enumeration (default 12). */
   exactLimit?: number;
+  /** Node budget of the branch and bound used above exactLimit (default 200000). */
+  nodeLimit?: number;
 }
 
 const SOURCE = 'cost.practice' as const;
 
 export const COST_NOTES: readonly string[] = [
   'Needed pieces per line = ceil(qty per rig x kits x (1 + attrition)) + spares per line; lines with no use get no spares.',
-  'Order quantity = need raised to the minimum order and the lowest price break, then rounded up to the order multiple.',
+  'Order quantity = the cheapest quantity at least the need that the offer allows (minimum order, lowest price break, '
+    + 'order multiple): the plain order, or more pieces up to a higher price break when that costs less in total.',
+  'Each line is bought from one offer; splitting a line between suppliers is not considered.',
   'Unit price = the price break with the highest minimum quantity not above the order quantity.',
   'Currency conversion: line cost (and each shipping charge) converted once and rounded half-up to a whole minor unit.',
   'Shipping is paid once per supplier used, converted from that supplier\'s currency.',
@@ -40,10 +44,21 @@ function shippingFor(project: Project, name: string, findings: Finding[]): numbe
   return convertCents(entry.shippingCents, rate);
 }
 
-function methodNote(method: 'exact' | 'local-search', n: number, limit: number): string {
+function methodNote(choice: PlanChoice, n: number, limit: number, total: number, currency: string): string {
   if (n === 0) return 'No supplier could be chosen: no line has a usable priced offer.';
-  if (method === 'exact') return `Exact: all ${2 ** n - 1} supplier combinations of ${n} suppliers compared; the plan is the cheapest possible.`;
-  return `Heuristic: ${n} suppliers is more than ${limit} for exact search, so a local search (add, drop, swap one supplier) was used; the plan may not be the cheapest possible.`;
+  const scope = 'with each line bought from one offer at its cheapest allowed quantity';
+  if (choice.method === 'exact') {
+    return `Exact: all ${choice.examined} supplier combinations of ${n} suppliers compared, ${scope}; `
+      + 'the plan is the cheapest possible.';
+  }
+  if (choice.proven) {
+    return `Exact: ${n} suppliers is more than ${limit} for comparing every combination, so a branch and bound `
+      + `search (${choice.examined} nodes) was used, ${scope}; it proved the plan the cheapest possible.`;
+  }
+  const lb = choice.lowerBoundCents ?? total;
+  return `Not proven: with ${n} suppliers the branch and bound search stopped after ${choice.examined} nodes, ${scope}; `
+    + `the plan costs ${formatMoney(total, currency)} and no plan can cost less than ${formatMoney(lb, currency)} `
+    + `(at most ${formatMoney(total - lb, currency)} might be saved).`;
 }
 
 export function costProject(project: Project, options: CostOptions = {}): CostReport {
@@ -67,7 +82,8 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
     shippingCents: names.map((n) => shippingFor(project, n, findings)),
     lineCosts: bySupplier.map((m) => names.map((n) => m.get(n)?.costCents ?? Infinity)),
   };
-  const { method, plan } = choosePlan(input, exactLimit);
+  const choice = choosePlan(input, exactLimit, options.nodeLimit);
+  const { method, plan } = choice;
   // Every purchasable line has at least one supplier, so the all-suppliers subset covers it: plan is set.
   const assignment = plan?.assignment ?? [];
 
@@ -95,7 +111,9 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
     currency: project.currency,
     kits,
     method,
-    methodNote: methodNote(method, names.length, exactLimit),
+    methodNote: methodNote(choice, names.length, exactLimit, plan?.totalCents ?? 0, project.currency),
+    proven: choice.proven,
+    lowerBoundCents: choice.lowerBoundCents,
     candidateSuppliers: names.length,
     lines: costLines,
     stages: stageSubtotals(project, lines, costLines),
@@ -113,7 +131,7 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
       perKitPartsCents: kits > 0 ? roundHalfUp(partsCents / kits) : null,
       unpricedLines,
     },
-    suggestedSavingsCents: costLines.reduce((t, l) => t + (l.suggestion?.savingCents ?? 0), 0),
+    raisedSavingsCents: costLines.reduce((t, l) => t + (l.raised?.savingCents ?? 0), 0),
     findings,
     notes: [...COST_NOTES],
   };
@@ -127,13 +145,13 @@ function toCostLine(l: LineContext, supplier: string | null): CostLine {
   };
   const option = supplier === null ? undefined : cheapestBySupplier(l.options).get(supplier);
   if (option === undefined) {
-    return { ...base, orderQty: 0, supplier: null, offerId: null, sku: null, offerCurrency: null, unitPriceCents: null, offerCostCents: null, exchangeRate: null, lineCostCents: 0, suggestion: null };
+    return { ...base, orderQty: 0, breakMinQty: null, supplier: null, offerId: null, sku: null, offerCurrency: null, unitPriceCents: null, offerCostCents: null, exchangeRate: null, lineCostCents: 0, raised: null };
   }
-  const better = cheaperBreakQuote(l.neededQty, option.offer);
-  const betterCents = better === null ? null : convertCents(better.costCents, option.rate);
+  const plainCents = convertCents(option.plain.costCents, option.rate);
   return {
     ...base,
     orderQty: option.quote.qty,
+    breakMinQty: breakMinQtyAt(option.offer.breaks, option.quote.qty),
     supplier,
     offerId: option.offer.id,
     sku: option.offer.sku,
@@ -142,10 +160,10 @@ function toCostLine(l: LineContext, supplier: string | null): CostLine {
     offerCostCents: option.quote.costCents,
     exchangeRate: option.rate,
     lineCostCents: option.costCents,
-    // After conversion a tiny saving can round to 0: only a saving of at least one minor unit is shown.
-    suggestion:
-      better !== null && betterCents !== null && betterCents < option.costCents
-        ? { qty: better.qty, extraQty: better.qty - option.quote.qty, unitPriceCents: better.unitPriceCents, lineCostCents: betterCents, savingCents: option.costCents - betterCents }
+    // After conversion a saving can round to 0: only a raise saving at least one minor unit is reported.
+    raised:
+      option.quote.qty > option.plain.qty && plainCents > option.costCents
+        ? { plainQty: option.plain.qty, extraQty: option.quote.qty - option.plain.qty, plainCostCents: plainCents, savingCents: plainCents - option.costCents }
         : null,
   };
 }

@@ -2,13 +2,16 @@
 
 import type { Offer, Project, Stage } from '../model';
 import { convertCents, rateFor } from './money';
-import { neededQty, quoteOffer, validBreaks, type OfferQuote } from './quantities';
+import { bestQuote, neededQty, quoteOffer, validBreaks, type OfferQuote } from './quantities';
 import type { LineFlag } from './report-types';
 import { sectionOf, type CostSection } from './sections';
 
 export interface OfferOption {
   offer: Offer;
+  /** The least-cost order from this offer (possibly raised to a price break or multiple). */
   quote: OfferQuote;
+  /** The plain order: need raised only to the minimum order, lowest break and multiple. */
+  plain: OfferQuote;
   /** Project-currency units per offer-currency unit. */
   rate: number;
   /** quote.costCents converted half-up, project-currency minor units. */
@@ -75,14 +78,16 @@ export function prepareLines(project: Project): LineContext[] {
       else if (priced.length === 0) flags.push('no-price');
       for (const offer of priced) {
         const rate = rateFor(offer.currency, project.currency, exchangeRates);
-        const quote = quoteOffer(needed, offer);
-        if (rate === null || quote === null) continue;
+        const plain = quoteOffer(needed, offer);
+        const quote = bestQuote(needed, offer);
+        if (rate === null || quote === null || plain === null) continue;
         // Absurd prices or rates would leave exact integer arithmetic: such an offer is not used.
-        if (!Number.isSafeInteger(quote.costCents) || !(quote.costCents * rate < Number.MAX_SAFE_INTEGER)) {
+        const worst = Math.max(quote.costCents, plain.costCents);
+        if (!Number.isSafeInteger(worst) || !(worst * rate < Number.MAX_SAFE_INTEGER)) {
           overflow = true;
           continue;
         }
-        options.push({ offer, quote, rate, costCents: convertCents(quote.costCents, rate) });
+        options.push({ offer, quote, plain, rate, costCents: convertCents(quote.costCents, rate) });
       }
       if (priced.length > 0 && options.length === 0) flags.push(overflow ? 'too-large' : 'no-rate');
     }

@@ -96,23 +96,36 @@ export function quoteOffer(needed: number, offer: Offer): OfferQuote | null {
 }
 
 /**
- * Cheapest quote obtained by ordering up to a higher price break than the one `needed` lands on,
- * if it costs strictly less in total than the plain quote (ties go to the smaller quantity).
- * Minimum order and order multiple still apply to the larger quantity. null when no higher break helps.
+ * The least-cost quote for at least `needed` pieces from one offer, over every quantity the offer allows
+ * (>= need, >= minimum order, >= lowest break, a whole multiple). Ties go to the smaller quantity.
+ * Why the candidates below are enough: between two consecutive break thresholds the unit price is fixed, so
+ * the cost grows with the quantity and the cheapest allowed quantity in that interval is the smallest one,
+ * i.e. the plain order quantity or a break threshold raised to the minimum order and the multiple. Above the
+ * highest threshold the same holds. (Elementary; the brute-force property test checks it.)
  */
-export function cheaperBreakQuote(needed: number, offer: Offer): OfferQuote | null {
+export function bestQuote(needed: number, offer: Offer): OfferQuote | null {
   const plain = quoteOffer(needed, offer);
-  if (plain === null || plain.qty === 0) return null;
-  let best: OfferQuote | null = null;
+  if (plain === null || plain.qty === 0) return plain;
+  let best = plain;
+  const multiple = orderMultipleOf(offer);
   for (const b of validBreaks(offer.breaks)) {
     if (b.minQty <= plain.qty) continue;
-    const qty = roundUpToMultiple(Math.max(b.minQty, minOrderOf(offer)), orderMultipleOf(offer));
+    const qty = roundUpToMultiple(Math.max(b.minQty, minOrderOf(offer)), multiple);
     const unit = unitPriceAt(offer.breaks, qty);
     if (unit === null) continue;
     const cost = qty * unit;
-    if (cost < plain.costCents && (best === null || cost < best.costCents)) {
+    if (cost < best.costCents || (cost === best.costCents && qty < best.qty)) {
       best = { qty, unitPriceCents: unit, costCents: cost };
     }
   }
   return best;
+}
+
+/** Minimum quantity of the price break that sets the unit price at `qty`; null when none applies. */
+export function breakMinQtyAt(breaks: readonly PriceBreak[], qty: number): number | null {
+  let best: PriceBreak | null = null;
+  for (const b of validBreaks(breaks)) {
+    if (b.minQty <= qty && (best === null || b.minQty > best.minQty)) best = b;
+  }
+  return best === null ? null : best.minQty;
 }

@@ -17,16 +17,15 @@ export type LineFlag =
   | 'no-price' // offers exist but none has a usable price break
   | 'no-rate'; // priced offers exist but none in a currency with an exchange rate
 
-export interface BreakSuggestion {
-  /** Pieces to order instead (reaches a higher price break). */
-  qty: number;
-  /** Extra pieces over the planned order quantity. */
+/** The plan bought more than the plain order because a price break or multiple made that cheaper. */
+export interface QuantityRaise {
+  /** Pieces the plain rule would order from the same offer (need raised to minimum order, lowest break, multiple). */
+  plainQty: number;
+  /** Extra pieces bought over plainQty. */
   extraQty: number;
-  /** Unit price at that quantity, minor units of the offer currency. */
-  unitPriceCents: number;
-  /** Line cost at that quantity, project-currency minor units (converted half-up). */
-  lineCostCents: number;
-  /** Planned line cost minus lineCostCents (> 0), project-currency minor units. */
+  /** Line cost at plainQty from the same offer, project-currency minor units. */
+  plainCostCents: number;
+  /** plainCostCents minus the line cost (> 0), project-currency minor units. */
   savingCents: number;
 }
 
@@ -48,8 +47,10 @@ export interface CostLine {
   section: CostSection;
   /** Pieces needed for the build: ceil(qtyPerRig x kits x (1 + attrition)) + spares. */
   neededQty: number;
-  /** Pieces ordered from the chosen offer (minimum order, lowest break, multiple applied); 0 if none. */
+  /** Pieces ordered from the chosen offer: the least-cost allowed quantity >= need; 0 if none. */
   orderQty: number;
+  /** Minimum quantity of the price break that sets the unit price; null when unpriced. */
+  breakMinQty: number | null;
   /** Chosen supplier name, null when unpriced. */
   supplier: string | null;
   offerId: string | null;
@@ -64,8 +65,8 @@ export interface CostLine {
   exchangeRate: number | null;
   /** Line cost in project-currency minor units, rounded half-up once per line; 0 when unpriced. */
   lineCostCents: number;
-  /** Buying up to a higher price break would cost less; null when not. */
-  suggestion: BreakSuggestion | null;
+  /** Set when the plan buys more than the plain order because that costs less; null otherwise. */
+  raised: QuantityRaise | null;
   flags: LineFlag[];
 }
 
@@ -137,6 +138,10 @@ export interface CostReport {
   method: PlanMethod;
   /** One sentence describing the method and whether the result is proven optimal. */
   methodNote: string;
+  /** True when the plan is proven the least total (under one offer per line). */
+  proven: boolean;
+  /** No plan (one offer per line) costs less than this, project-currency minor units; null when nothing is priced. */
+  lowerBoundCents: number | null;
   /** Suppliers that could be chosen (had a usable offer for a needed line). */
   candidateSuppliers: number;
   lines: CostLine[];
@@ -148,8 +153,8 @@ export interface CostReport {
   suppliers: SupplierUse[];
   singleSupplier: SingleSupplierComparison;
   totals: CostTotals;
-  /** Total of all price-break savings on offer, project-currency minor units. */
-  suggestedSavingsCents: number;
+  /** Total saved by buying up to a price break or multiple over the plain orders, project-currency minor units. */
+  raisedSavingsCents: number;
   findings: Finding[];
   /** The rules applied, in words (rounding, quantities, sections), for reports and the PDF. */
   notes: string[];

@@ -4,8 +4,13 @@
 // - up to `exactLimit` suppliers: enumerate every non-empty supplier subset; with the subset fixed each
 //   line takes its cheapest supplier in it. Exact: the optimum uses some subset, and for that subset
 //   per-line minima are optimal.
-// - beyond: local search (single add / drop / swap moves, best improvement first) from three starts
-//   (all suppliers; each line's cheapest supplier; the best single supplier). Not guaranteed optimal.
+// - beyond: branch and bound over open / closed decisions per supplier (bound below), started from the
+//   local-search plan. Exact when it finishes within `nodeLimit` nodes; otherwise the best plan found is
+//   returned with a proven lower bound (the least bound of the nodes left unexplored).
+// Local search (single add / drop / swap moves, best improvement first) from three starts (all suppliers;
+// each line's cheapest supplier; the best single supplier) gives the starting plan.
+// The line costs given here are already each line's least cost per supplier over its allowed order
+// quantities (line-options.ts), so supplier and quantity are chosen together.
 
 export interface PlanInput {
   /** Supplier names, index = column of lineCosts. */
@@ -26,7 +31,7 @@ export interface PlanResult {
   totalCents: number;
 }
 
-export type PlanMethod = 'exact' | 'local-search';
+export type PlanMethod = 'exact' | 'branch-and-bound' | 'local-search';
 
 export const DEFAULT_EXACT_LIMIT = 12;
 /** Subset masks are 32-bit integers (1 << n), and 2^24 subsets is already minutes of work. */
@@ -136,11 +141,105 @@ export function planSingleSupplier(input: PlanInput): PlanResult | null {
   return best;
 }
 
-/** Exact when the supplier count is within `exactLimit`, otherwise local search; says which ran. */
+export const DEFAULT_NODE_LIMIT = 200_000;
+
+export interface BoundResult {
+  plan: PlanResult | null;
+  /** True when every node was explored or pruned: the plan is optimal. */
+  proven: boolean;
+  /** No plan costs less than this (equals plan.totalCents when proven); null when nothing is purchasable. */
+  lowerBoundCents: number | null;
+  nodes: number;
+}
+
+interface BbNode {
+  /** Decision per supplier for indices < depth: true open, false closed; undecided from depth on. */
+  open: boolean[];
+  depth: number;
+  bound: number;
+}
+
+/**
+ * Lower bound of every plan whose open suppliers include the ones opened so far and exclude the ones closed:
+ * each line at its cheapest among open-or-undecided suppliers, plus shipping of the suppliers opened so far.
+ * Valid because adding suppliers never raises a line's cost and shipping is never negative.
+ * Infinity when some line has no open-or-undecided supplier.
+ */
+function nodeBound(input: PlanInput, open: readonly boolean[], depth: number): number {
+  let total = 0;
+  for (let s = 0; s < depth; s++) if (open[s]) total += input.shippingCents[s];
+  for (const row of input.lineCosts) {
+    let best = Infinity;
+    for (let s = 0; s < row.length; s++) if ((s >= depth || open[s]) && row[s] < best) best = row[s];
+    if (best === Infinity) return Infinity;
+    total += best;
+  }
+  return total;
+}
+
+/** Branch and bound (depth first, open before closed), started from the local-search plan. */
+export function planBranchAndBound(input: PlanInput, nodeLimit: number = DEFAULT_NODE_LIMIT): BoundResult {
+  const n = input.suppliers.length;
+  if (input.lineCosts.length === 0) return { plan: EMPTY, proven: true, lowerBoundCents: 0, nodes: 0 };
+  let best = planLocalSearch(input);
+  if (best === null) return { plan: null, proven: true, lowerBoundCents: null, nodes: 0 };
+  const stack: BbNode[] = [{ open: Array(n).fill(false), depth: 0, bound: nodeBound(input, [], 0) }];
+  let nodes = 0;
+  while (stack.length > 0) {
+    if (nodes >= nodeLimit) {
+      const lb = Math.min(best.totalCents, ...stack.map((x) => x.bound));
+      return { plan: best, proven: false, lowerBoundCents: lb, nodes };
+    }
+    const node = stack.pop() as BbNode;
+    nodes++;
+    // Strictly greater: an equal bound may still hold a plan that wins the tie order.
+    if (node.bound > best.totalCents) continue;
+    if (node.depth === n) {
+      const r = evaluateSubset(input, node.open);
+      if (r !== null && better(r, best)) best = r;
+      continue;
+    }
+    for (const choice of [false, true]) {
+      const open = node.open.slice();
+      open[node.depth] = choice;
+      const bound = nodeBound(input, open, node.depth + 1);
+      if (bound <= best.totalCents) stack.push({ open, depth: node.depth + 1, bound });
+    }
+  }
+  return { plan: best, proven: true, lowerBoundCents: best.totalCents, nodes };
+}
+
+export interface PlanChoice {
+  method: PlanMethod;
+  plan: PlanResult | null;
+  /** Proven least total (exact or finished branch and bound). */
+  proven: boolean;
+  /** No plan can cost less than this; null when nothing is purchasable. */
+  lowerBoundCents: number | null;
+  /** Supplier combinations compared (exact) or search nodes visited (branch and bound). */
+  examined: number;
+}
+
+/**
+ * Exhaustive when the supplier count is within `exactLimit`, otherwise branch and bound with `nodeLimit`
+ * nodes; says which ran, whether the plan is proven least, and a lower bound when it is not.
+ */
 export function choosePlan(
   input: PlanInput,
   exactLimit: number = DEFAULT_EXACT_LIMIT,
-): { method: PlanMethod; plan: PlanResult | null } {
-  if (input.suppliers.length <= Math.min(exactLimit, MAX_EXACT_LIMIT)) return { method: 'exact', plan: planExact(input) };
-  return { method: 'local-search', plan: planLocalSearch(input) };
+  nodeLimit: number = DEFAULT_NODE_LIMIT,
+): PlanChoice {
+  const n = input.suppliers.length;
+  if (n <= Math.min(exactLimit, MAX_EXACT_LIMIT)) {
+    const plan = planExact(input);
+    return { method: 'exact', plan, proven: true, lowerBoundCents: plan?.totalCents ?? null, examined: 2 ** n - 1 };
+  }
+  const r = planBranchAndBound(input, nodeLimit);
+  return {
+    method: r.proven ? 'branch-and-bound' : 'local-search',
+    plan: r.plan,
+    proven: r.proven,
+    lowerBoundCents: r.lowerBoundCents,
+    examined: r.nodes,
+  };
 }

@@ -18,7 +18,7 @@ export function partsCsvHeaders(currency: string): string[] {
   return [
     'Stage', 'Section', 'Refs', 'Value', 'Description', 'Category', 'Qty per rig', 'Needed qty', 'Order qty',
     'Supplier', 'SKU', 'Currency', 'Unit price', 'Offer line cost', 'Exchange rate', `Line cost ${currency}`,
-    'Price-break suggestion', 'Flags',
+    'Break used', 'Flags',
   ];
 }
 
@@ -27,14 +27,15 @@ function money(cents: number | null): CsvCell {
 }
 
 function row(l: CostLine, currency: string): CsvCell[] {
-  const suggestion =
-    l.suggestion === null
-      ? ''
-      : `Order ${l.suggestion.qty} (+${l.suggestion.extraQty}) to save ${formatMoney(l.suggestion.savingCents, currency)}`;
+  const from = l.breakMinQty === null ? '' : `from ${l.breakMinQty}`;
+  const breakUsed =
+    l.raised === null
+      ? from
+      : `${from}; ${l.raised.extraQty} over the plain ${l.raised.plainQty} saves ${formatMoney(l.raised.savingCents, currency)}`;
   return [
     l.stageName, l.section, l.refs, l.value, l.description, l.category, l.qtyPerRig, l.neededQty, l.orderQty,
     l.supplier, l.sku, l.offerCurrency, money(l.unitPriceCents), money(l.offerCostCents), l.exchangeRate,
-    money(l.lineCostCents), suggestion, l.flags.join(' '),
+    money(l.lineCostCents), breakUsed, l.flags.join(' '),
   ];
 }
 

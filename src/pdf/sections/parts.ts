@@ -57,7 +57,7 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null):
   const sum: Row[] = [{ cells: ['Build total', money(cost.totals.buildCents)], bold: true }];
   if (cost.totals.perKitCents !== null && cost.kits > 1) sum.push({ cells: [`Per kit (${cost.kits} kits, shipping shared)`, money(cost.totals.perKitCents)], bold: true });
   if (cost.totals.perKitPartsCents !== null && cost.kits > 1) sum.push({ cells: ['Per kit, parts only', money(cost.totals.perKitPartsCents)] });
-  if (cost.suggestedSavingsCents > 0) sum.push({ cells: ['Possible saving by buying up to the next price break', money(cost.suggestedSavingsCents)] });
+  if (cost.raisedSavingsCents > 0) sum.push({ cells: ['Saved by buying up to a price break (included above)', money(cost.raisedSavingsCents)] });
   if (cost.totals.unpricedLines > 0) sum.push({ cells: [`Unpriced lines left out of the totals`, String(cost.totals.unpricedLines)], color: FAIL });
   l.table([{ header: 'Total', width: 0.7 }, { header: cost.currency, width: 0.3, align: 'right' }], sum);
   const notesPt = cost.notes.reduce((a, n) => a + l.wrap(`• ${n}`, l.contentWidthPt, 7.5).length * 9.75 + 1, 0);

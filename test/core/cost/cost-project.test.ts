@@ -45,11 +45,45 @@ describe('supplier choice with shipping (hand-worked)', () => {
     expect(r.totals.buildCents).toBe(3000);
     expect(r.suppliers).toEqual([{ supplier: 'Bravo', lineCount: 2, partsCents: 2200, shippingCents: 800 }]);
     expect(r.singleSupplier).toMatchObject({ available: true, supplier: 'Bravo', totalCents: 3000, extraCents: 0 });
-    // The heuristic reaches the same plan here and says it is a heuristic.
-    const h = costProject(p, { exactLimit: 0 });
-    expect(h.method).toBe('local-search');
-    expect(h.methodNote).toMatch(/may not be the cheapest/);
+    // Above the exhaustive limit, branch and bound proves the same plan.
+    const b = costProject(p, { exactLimit: 0 });
+    expect(b).toMatchObject({ method: 'branch-and-bound', proven: true, lowerBoundCents: 3000 });
+    expect(b.methodNote).toMatch(/proved the plan the cheapest possible/);
+    expect(b.totals.buildCents).toBe(3000);
+    // With no search budget the start plan is kept, not called cheapest, and a lower bound is stated:
+    // the root bound is each line at its cheapest (1000 + 1000) plus no shipping = 2000 (USD 20.00).
+    const h = costProject(p, { exactLimit: 0, nodeLimit: 0 });
+    expect(h).toMatchObject({ method: 'local-search', proven: false, lowerBoundCents: 2000 });
+    expect(h.methodNote).not.toMatch(/cheapest possible/);
+    expect(h.methodNote).toMatch(/no plan can cost less than USD 20\.00/);
     expect(h.totals.buildCents).toBe(3000);
+  });
+
+  it('issue case: 92 needed; A 0.50, 0.25 from 100; B 0.35 -> 100 from A for 25.00', () => {
+    // Hand working (USD, shipping 0 at both):
+    //   A plain: 92 x 50c = 4600c.  A up to the 100 break: 100 x 25c = 2500c.  B: 92 x 35c = 3220c.
+    //   Least: 100 from A, 2500c = 25.00, which is 720c below the 32.20 of 92 from B.
+    const mk = (shipA: number) =>
+      project({
+        parts: [
+          part('p1', [
+            offer({ id: 'a1', supplier: 'A', breaks: [{ minQty: 1, unitPriceCents: 50 }, { minQty: 100, unitPriceCents: 25 }] }),
+            offer({ id: 'b1', supplier: 'B', breaks: flat(35) }),
+          ]),
+        ],
+        bom: [line('L1', 'p1', 92)],
+        suppliers: [ship('A', shipA), ship('B', 0)],
+      });
+    const r = costProject(mk(0));
+    expect(r.lines[0]).toMatchObject({ supplier: 'A', neededQty: 92, orderQty: 100, breakMinQty: 100, unitPriceCents: 25, lineCostCents: 2500 });
+    expect(r.lines[0].raised).toEqual({ plainQty: 92, extraQty: 8, plainCostCents: 4600, savingCents: 2100 });
+    expect(r.totals.buildCents).toBe(2500);
+    expect(r).toMatchObject({ method: 'exact', proven: true });
+    expect(r.methodNote).toMatch(/cheapest possible/);
+    // Shipping is chosen jointly: A's shipping 800c makes A 2500 + 800 = 3300c > B 3220c, so B wins.
+    const s = costProject(mk(800));
+    expect(s.lines[0]).toMatchObject({ supplier: 'B', orderQty: 92, lineCostCents: 3220, raised: null });
+    expect(s.totals.buildCents).toBe(3220);
   });
 
   it('exchange rates: offer and shipping converted once, half-up', () => {
@@ -84,12 +118,13 @@ describe('supplier choice with shipping (hand-worked)', () => {
   });
 });
 
-describe('quantities, suggestions and totals through costProject (hand-worked)', () => {
-  it('kits, attrition, spares, minimum order, multiple, break suggestion, per-kit rounding', () => {
-    // 3 per rig x 4 kits x 1.10 = 13.2 -> 14 + 2 spares = 16; min order 10, multiple 5 -> 20.
-    // 20 x 12c = 240c. Suggestion: 25 x 9c = 225c, saving 15c, 5 extra pieces.
-    // Second line: 1 per rig x 4 x 1.1 = 4.4 -> 5 + 2 = 7 at 33c = 231c. Parts 471c; shipping 350c -> 821c.
-    // Per kit 821 / 4 = 205.25 -> 205. Parts per kit 471 / 4 = 117.75 -> 118.
+describe('quantities, raised orders and totals through costProject (hand-worked)', () => {
+  it('kits, attrition, spares, minimum order, multiple, buying up to a break, per-kit rounding', () => {
+    // 3 per rig x 4 kits x 1.10 = 13.2 -> 14 + 2 spares = 16; min order 10, multiple 5 -> plain order 20.
+    // 20 x 12c = 240c. Up to the 25 break: 25 x 9c = 225c (cheaper by 15c); 100 x 6c = 600c is dearer.
+    // The plan buys 25 at 9c = 225c.
+    // Second line: 1 per rig x 4 x 1.1 = 4.4 -> 5 + 2 = 7 at 33c = 231c. Parts 456c; shipping 350c -> 806c.
+    // Per kit 806 / 4 = 201.5 -> 202 (half-up). Parts per kit 456 / 4 = 114.
     const breaks = [{ minQty: 1, unitPriceCents: 12 }, { minQty: 25, unitPriceCents: 9 }, { minQty: 100, unitPriceCents: 6 }];
     const r = costProject(
       project({
@@ -99,11 +134,11 @@ describe('quantities, suggestions and totals through costProject (hand-worked)',
         suppliers: [ship('Alpha', 350)],
       }),
     );
-    expect(r.lines[0]).toMatchObject({ neededQty: 16, orderQty: 20, unitPriceCents: 12, lineCostCents: 240 });
-    expect(r.lines[0].suggestion).toEqual({ qty: 25, extraQty: 5, unitPriceCents: 9, lineCostCents: 225, savingCents: 15 });
-    expect(r.lines[1]).toMatchObject({ neededQty: 7, orderQty: 7, lineCostCents: 231, suggestion: null });
-    expect(r.totals).toEqual({ partsCents: 471, shippingCents: 350, buildCents: 821, perKitCents: 205, perKitPartsCents: 118, unpricedLines: 0 });
-    expect(r.suggestedSavingsCents).toBe(15);
+    expect(r.lines[0]).toMatchObject({ neededQty: 16, orderQty: 25, breakMinQty: 25, unitPriceCents: 9, lineCostCents: 225 });
+    expect(r.lines[0].raised).toEqual({ plainQty: 20, extraQty: 5, plainCostCents: 240, savingCents: 15 });
+    expect(r.lines[1]).toMatchObject({ neededQty: 7, orderQty: 7, breakMinQty: 1, lineCostCents: 231, raised: null });
+    expect(r.totals).toEqual({ partsCents: 456, shippingCents: 350, buildCents: 806, perKitCents: 202, perKitPartsCents: 114, unpricedLines: 0 });
+    expect(r.raisedSavingsCents).toBe(15);
   });
 
   it('stages, General and the supply / RF / other sections', () => {
@@ -190,7 +225,7 @@ describe('flags: unpriced lines stay in the list at zero cost', () => {
 });
 
 describe('method selection', () => {
-  it('more than 12 candidate suppliers switches to local search and says so', () => {
+  it('more than 12 candidate suppliers switches to branch and bound, which proves the optimum and says so', () => {
     // 13 suppliers each offering the one line; supplier k charges 100 + k cents, shipping 50.
     // Cheapest: S00 at 100 + 50 = 150 (any method finds it; the point is which method is reported).
     const names = Array.from({ length: 13 }, (_, k) => `S${String(k).padStart(2, '0')}`);
@@ -202,7 +237,8 @@ describe('method selection', () => {
       }),
     );
     expect(r.candidateSuppliers).toBe(13);
-    expect(r.method).toBe('local-search');
+    expect(r).toMatchObject({ method: 'branch-and-bound', proven: true, lowerBoundCents: 150 });
+    expect(r.methodNote).toMatch(/13 suppliers is more than 12.*proved the plan the cheapest possible/);
     expect(r.totals.buildCents).toBe(150);
     expect(r.lines[0].supplier).toBe('S00');
   });

@@ -6,7 +6,7 @@ import { CostResults } from '../../../views/partials/cost-results';
 import { line, offer, part, project, stage } from './fixture';
 
 describe('CostResults view', () => {
-  it('shows groups, subtotals, totals, suppliers, suggestion, comparison and flags; escapes text', async () => {
+  it('shows groups, subtotals, totals, suppliers, raised order, comparison and flags; escapes text', async () => {
     const flat = (c: number) => [{ minQty: 1, unitPriceCents: c }];
     const r = costProject(
       project({
@@ -21,9 +21,11 @@ describe('CostResults view', () => {
       }),
     );
     const html = String(await (<CostResults report={r} currency="USD" />).toString());
-    // Hand-worked (cents): L1 Alpha 10 x 100 = 1000; L2 Bravo 10 x 100 = 1000 (12 x 50 = 600 saves 400);
-    // shipping 500 + 500; build 3000 = USD 30.00. Alpha alone 1000 + 3000 + 500 = 4500, 1500 more.
-    expect(html).toContain('<strong>USD 30.00</strong>');
+    // Hand-worked (cents): L1 Alpha 10 x 100 = 1000; L2 Bravo plain 10 x 100 = 1000, up to the 12 break
+    // 12 x 50 = 600 (saves 400, bought); shipping 500 + 500; build 1000 + 600 + 1000 = 2600 = USD 26.00.
+    // One supplier: Alpha 1000 + 3000 + 500 = 4500; Bravo 3000 + 600 + 500 = 4100, 1500 more than 2600.
+    expect(html).toContain('<strong>USD 26.00</strong>');
+    expect(html).toContain('+2 over the plain 10');
     expect(html).toContain('Build total (1 kit)');
     expect(html).toContain('Subtotal PA');
     expect(html).toContain('Subtotal General');

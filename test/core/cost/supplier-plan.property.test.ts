@@ -1,12 +1,14 @@
-// Exact supplier choice vs brute force over every per-line offer choice, on small random projects
-// (fast-check, fixed seed). The brute force shares only the per-offer quote and conversion
-// (checked separately against hand-worked examples) and enumerates plans independently.
+// Exact supplier choice vs brute force over every per-line offer choice and every allowed order quantity, on
+// small random projects (fast-check, fixed seed). The brute force shares only unitPriceAt (the break rule,
+// checked against hand-worked examples in quantities.test.ts) and the conversion; it walks every quantity
+// itself, so buying up to a price break or multiple is found without the code under test.
 import fc from 'fast-check';
 import { propertyOptions } from '../../helpers/property';
 import { describe, expect, it } from 'vitest';
 import { costProject } from '../../../src/core/cost/cost-project';
 import { convertCents, rateFor } from '../../../src/core/cost/money';
-import { neededQty, quoteOffer } from '../../../src/core/cost/quantities';
+import { neededQty, unitPriceAt, validBreaks } from '../../../src/core/cost/quantities';
+import { choosePlan, planExact, type PlanInput } from '../../../src/core/cost/supplier-plan';
 import type { Offer, Project } from '../../../src/core/model';
 import { line, offer, part, project } from './fixture';
 
@@ -44,7 +46,28 @@ function build(c: Case): Project {
   });
 }
 
-/** Cheapest total over every combination of one offer per purchasable line. */
+/**
+ * Cheapest cost in the offer's currency of at least `need` pieces, by walking every quantity q from need up.
+ * Allowed: q >= minimum order, q >= the lowest break, q a whole multiple. Past the highest break threshold
+ * (and the need and minimum order) the unit price no longer falls, so cost only grows: walking to that point
+ * plus one multiple covers every candidate.
+ */
+function bruteOfferCost(need: number, o: Offer): number | null {
+  const breaks = validBreaks(o.breaks);
+  if (breaks.length === 0) return null;
+  const multiple = Math.max(1, Math.floor(o.orderMultiple));
+  const minOrder = Math.max(0, Math.ceil(o.minOrder));
+  const top = Math.max(need, minOrder, breaks[breaks.length - 1].minQty) + multiple;
+  let best: number | null = null;
+  for (let q = need; q <= top; q++) {
+    if (q < minOrder || q < breaks[0].minQty || q % multiple !== 0) continue;
+    const unit = unitPriceAt(o.breaks, q);
+    if (unit !== null && (best === null || q * unit < best)) best = q * unit;
+  }
+  return best;
+}
+
+/** Cheapest total over every combination of one offer (at its cheapest quantity) per purchasable line. */
 function bruteForce(p: Project): number {
   const choices: { supplier: string; cost: number }[][] = p.bom
     .map((l) => {
@@ -53,9 +76,9 @@ function bruteForce(p: Project): number {
       return need === 0
         ? []
         : offers.flatMap((o) => {
-            const q = quoteOffer(need, o);
+            const c = bruteOfferCost(need, o);
             const r = rateFor(o.currency, p.currency, p.costing.exchangeRates);
-            return q && r ? [{ supplier: o.supplier, cost: convertCents(q.costCents, r) }] : [];
+            return c !== null && r ? [{ supplier: o.supplier, cost: convertCents(c, r) }] : [];
           });
     })
     .filter((c) => c.length > 0);
@@ -93,17 +116,58 @@ describe('supplier choice: exact equals brute force (fast-check, seeded)', () =>
       fc.property(caseArb, (c) => {
         const p = build(c);
         const exact = costProject(p);
-        const heur = costProject(p, { exactLimit: 0 });
+        const heur = costProject(p, { exactLimit: 0, nodeLimit: 0 });
         expect(heur.totals.buildCents).toBeGreaterThanOrEqual(exact.totals.buildCents);
         const parts = heur.lines.reduce((t, l) => t + l.lineCostCents, 0);
         const shipping = heur.suppliers.reduce((t, s) => t + s.shippingCents, 0);
         expect(heur.totals.buildCents).toBe(parts + shipping);
+        // The stated lower bound is never above the optimum.
+        if (heur.lowerBoundCents !== null) expect(heur.lowerBoundCents).toBeLessThanOrEqual(exact.totals.buildCents);
+        // Branch and bound with its default budget proves the same optimum.
+        const bb = costProject(p, { exactLimit: 0 });
+        expect(bb.proven).toBe(true);
+        expect(bb.totals.buildCents).toBe(exact.totals.buildCents);
         if (exact.singleSupplier.available) {
           expect(exact.singleSupplier.totalCents).toBeGreaterThanOrEqual(exact.totals.buildCents);
           expect(exact.singleSupplier.extraCents).toBe(exact.singleSupplier.totalCents - exact.totals.buildCents);
         }
       }),
       propertyOptions(SEED + 1, 300),
+    );
+  });
+});
+
+// Plan inputs directly, with up to 9 suppliers: branch and bound (any budget) against subset enumeration.
+const planArb = fc.integer({ min: 1, max: 9 }).chain((n) =>
+  fc.record({
+    shippingCents: fc.array(fc.integer({ min: 0, max: 3000 }), { minLength: n, maxLength: n }),
+    lineCosts: fc.array(
+      fc.array(fc.oneof(fc.integer({ min: 0, max: 5000 }), fc.constant(Infinity)), { minLength: n, maxLength: n }),
+      { minLength: 1, maxLength: 6 },
+    ),
+    nodeLimit: fc.integer({ min: 0, max: 40 }),
+  }).map((r) => ({ ...r, suppliers: Array.from({ length: n }, (_, s) => `S${s}`) })),
+);
+
+describe('branch and bound against subset enumeration (fast-check, seeded)', () => {
+  it('proven plans equal the enumerated optimum; unproven ones bracket it with a valid lower bound', () => {
+    fc.assert(
+      fc.property(planArb, (c) => {
+        const input: PlanInput = { suppliers: c.suppliers, shippingCents: c.shippingCents, lineCosts: c.lineCosts };
+        const exact = planExact(input);
+        const full = choosePlan(input, 0);
+        expect(full.plan?.totalCents ?? null).toBe(exact?.totalCents ?? null);
+        if (exact !== null) expect(full.proven).toBe(true);
+        const small = choosePlan(input, 0, c.nodeLimit);
+        if (exact === null) {
+          expect(small.plan).toBeNull();
+          return;
+        }
+        expect(small.plan!.totalCents).toBeGreaterThanOrEqual(exact.totalCents);
+        expect(small.lowerBoundCents!).toBeLessThanOrEqual(exact.totalCents);
+        if (small.proven) expect(small.plan!.totalCents).toBe(exact.totalCents);
+      }),
+      propertyOptions(SEED + 2, 300),
     );
   });
 });
