@@ -95,6 +95,10 @@ function rfLines(report: EvaluationReport): string[] {
   const out = ['', 'RF'];
   for (const st of rf.stages) {
     if (st.pa) out.push(`  ${st.stageName}: ${formatValue(st.pa.outputW, 'W')} out from ${formatValue(st.pa.railV, 'V')}, key-down ${formatValue(st.pa.keyDownCurrentA, 'A')}, drain peak ${formatValue(st.pa.peakDrainV, 'V')}`);
+    const w = st.pa?.swr?.worstDrainPeak;
+    if (w && st.pa?.swr?.model === 'load-line' && st.pa.swr.swr > 1) {
+      out.push(`    at SWR ${st.pa.swr.swr}: drain peak up to ${formatValue(w.value, 'V')} into ${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '-' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} ohm (phase ${w.phaseDeg.toFixed(0)} deg), device current up to ${formatValue(st.pa.swr.worstPeakCurrent.value, 'A')}`);
+    }
     if (st.lpf?.design) out.push(`  ${st.stageName}: ${st.lpf.design.response} order ${st.lpf.design.order}, cutoff ${formatValue(st.lpf.design.cutoffHz, 'Hz', 4)}, loss ${st.lpf.analysis?.atOperating.lossDb.toFixed(2)} dB`);
     if (st.relay) out.push(`  ${st.stageName}: RF ${formatValue(st.relay.rfPeakV, 'V')} peak, ${formatValue(st.relay.rfRmsA, 'A')} RMS at the worst SWR`);
   }

@@ -13,6 +13,7 @@ import type { RelayResult } from '../../src/core/rf/tr-relay';
 import type { HarmonicBasis } from '../../src/core/rf/harmonics';
 import { formatValue as fv } from '../../src/core/units';
 import { filterPlotSvg } from '../plots/filter-plot';
+import { PaSwrTable } from './pa-swr-table';
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
 const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
@@ -55,12 +56,13 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused
         ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
         ['Efficiency', `${pct(pa.efficiency)} (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'})`],
         ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} (bias idle included)`],
-        ['Peak drain voltage / device current', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
+        ['Peak drain voltage / device current (design load)', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
         ['Dissipation', `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`],
         [(pa.thermal.sharedBy > 1 ? `Heatsink needed, one per ${pa.thermal.sharedBy} devices` : 'Heatsink needed per device') + ' (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
         ['Junction with fitted heatsink', pa.thermal.tjAverageC === null ? 'no heatsink chosen' : `${fv(pa.thermal.tjAverageC, '°C')} keying, ${fv(pa.thermal.tjContinuousC, '°C')} continuous`],
       ]}
     />
+    <PaSwrTable s={pa.swr} />
     {pa.ratioOptions.length > 0 ? (
       <table class="grid ratios">
         <caption>Practical transformer ratios (primary : secondary turns) and the power each gives</caption>

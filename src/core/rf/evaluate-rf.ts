@@ -91,7 +91,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     if (st.kind === 'final' && st.pa) {
       const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
         maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
-        source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains',
+        source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;

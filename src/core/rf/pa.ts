@@ -5,6 +5,8 @@ import { MIN_TARGET_POWER_W, validatePaParams, validateThermalInputs } from './l
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
+import { swrStress, type PaSwrStress } from './pa-swr';
+import { swrFindings } from './pa-swr-findings';
 import { usablePositive } from '../numeric';
 
 /** Drain efficiency used when none is entered. Common practice, no published source (ref §8.2 ranges). */
@@ -52,6 +54,8 @@ export interface PaResult {
   dcInputW: number;
   /** Key-down DC current including bias idle current, A. */
   keyDownCurrentA: number;
+  /** Drain peak, device current, dissipation and output round the circle of the worst SWR (null when refused). */
+  swr: PaSwrStress | null;
   /** Highest supply voltage the drains can see (high mains with the PA unkeyed, or a full battery), V; railV when unknown. */
   maxRailV: number;
   /** Supply voltage used for heating (high mains, key-down), V; railV when unknown. */
@@ -86,7 +90,7 @@ function zeroResult(railV: number, findings: Finding[]): PaResult {
     outputW: 0, outputDbm: -999, outputDbw: -999, vsReferenceDb: -999, vsReferenceSUnits: -999 / 6, efficiency: 0, efficiencySource: 'entered',
     dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
     thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, sharedBy: 1, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
-    findings,
+    swr: null, findings,
     refused: true,
   };
 }
@@ -101,6 +105,8 @@ export interface PaSupplyCorners {
   hotRailV?: number;
   /** Lowest rail voltage under key-down (low-mains trough, battery at end of discharge under load), V. */
   lowRailV?: number;
+  /** The project's worst-case SWR: device stress is judged round its circle; absent = the design load only. */
+  worstSwr?: number;
   /** What the rail comes from, for the wording of the findings; default 'mains'. */
   source?: 'mains' | 'battery';
 }
@@ -194,25 +200,19 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     findings.push({ severity: devLow < -1 ? 'caution' : 'ok', rule: 'pa.power-low-supply', subject, value: lowOutputW, limit: target, unit: 'W', source: SRC_LOADLINE,
       message: `With the supply at its lowest under key-down (${lowRailV.toFixed(1)} V: ${bat ? 'battery at its end voltage' : 'low mains'}) the output falls to about ${lowOutputW.toFixed(1)} W (${devLow.toFixed(1)} dB from the ${target} W target)${devLow < -1 ? `; a higher rail or a different ${network !== null ? 'network drain load' : 'turns ratio'} keeps the power up` : ''}.` });
   }
-  // Common practice, no published source: device voltage rating at least 1.25 x the peak drain voltage
-  const vMargin = 1.25;
   const atMax = maxRailV > railV ? ` at the highest supply of ${maxRailV.toFixed(1)} V (${bat ? 'battery full' : 'high mains, before the rail sags under key-down'})` : '';
-  findings.push({
-    severity: pa.deviceVdsMaxV < peakDrainV ? 'fail' : pa.deviceVdsMaxV < vMargin * peakDrainV ? 'caution' : 'ok',
-    rule: 'pa.vds', subject, value: peakDrainV, limit: pa.deviceVdsMaxV, unit: 'V', source: 'pa.vds',
-    message: pa.deviceVdsMaxV < peakDrainV
-      ? `Drain peaks near ${peakDrainV.toFixed(1)} V${atMax} exceed the ${pa.deviceVdsMaxV} V device rating: the device will break down, especially into a mismatch.`
-      : pa.deviceVdsMaxV < vMargin * peakDrainV
-        ? `Drain peaks near ${peakDrainV.toFixed(1)} V${atMax} leave less than 25 % margin to the ${pa.deviceVdsMaxV} V rating; a mismatch can exceed it.`
-        : `Device rating ${pa.deviceVdsMaxV} V covers the ${peakDrainV.toFixed(1)} V drain peaks${atMax} with margin.`,
-  });
-  findings.push({
-    severity: op.peakDeviceA > pa.deviceIdMaxA ? 'fail' : op.peakDeviceA > 0.8 * pa.deviceIdMaxA ? 'caution' : 'ok',
-    rule: 'pa.id', subject, value: op.peakDeviceA, limit: pa.deviceIdMaxA, unit: 'A', source: pa.amplifierClass === 'E' ? 'pa.peak-current-e' : 'pa.peak-current',
-    message: op.peakDeviceA > pa.deviceIdMaxA
-      ? `Peak device current ${op.peakDeviceA.toFixed(2)} A exceeds the ${pa.deviceIdMaxA} A rating.`
-      : `Peak device current ${op.peakDeviceA.toFixed(2)} A against a ${pa.deviceIdMaxA} A rating.`,
-  });
+  // Stress round the circle of the worst SWR (1 when none is given: the design load only)
+  const swrIn = corners.worstSwr;
+  const swrUsed = swrIn !== undefined && Number.isFinite(swrIn) ? Math.min(100, Math.max(1, swrIn)) : 1;
+  const hotDcW = opHot.outputW / efficiency;
+  const swr = swrStress(pa.amplifierClass, {
+    drainPeakV: peakDrainV, maxRailV, peakDeviceA: opHot.peakDeviceA, outputW: opHot.outputW, dcInputW: hotDcW,
+    biasW: pa.biasIdleMaxA * hotRailV,
+  }, swrUsed, pa.loadOhm);
+  findings.push(...swrFindings(pa, swr, {
+    subject, atMax, ambientC: project.ambientC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
+    matchedDissipationW: thermalRaw.dissipationTotalW, sharedBy: thermalRaw.sharedBy, tjTargetC: thermalRaw.tjTargetC,
+  }));
   findings.push(...thermal.findings.map((f) => ({ ...f, subject })));
   const { findings: _drop, ...thermalValues } = thermal;
   void _drop;
@@ -226,7 +226,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     // Common practice, no published source: one S-unit = 6 dB
     vsReferenceDb, vsReferenceSUnits: vsReferenceDb / 6,
     efficiency, efficiencySource: pa.efficiency === null ? 'class-default' : 'entered',
-    dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, findings, refused: false,
+    dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, swr, findings, refused: false,
   };
 }
 

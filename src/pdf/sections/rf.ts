@@ -4,6 +4,16 @@ import { GREY, FAIL, CAUTION, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
 import { findingsList, fv, keyValues, notComputed } from './common';
 import { sourceText } from '../../core/sources/registry';
+import type { PaSwrStress, Worst } from '../../core/rf/pa-swr';
+
+const loadText = (w: Worst) => `${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '−' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} Ω, phase ${w.phaseDeg.toFixed(0)}°`;
+
+/** Worst drain peak, current, dissipation and the output range round the SWR circle, each with its load. */
+function swrText(s: PaSwrStress): string {
+  return `drain peak ${fv(s.worstDrainPeak.value, 'V')} (${loadText(s.worstDrainPeak)}); current ${fv(s.worstPeakCurrent.value, 'A')} ` +
+    `(${loadText(s.worstPeakCurrent)}); dissipation ${fv(s.worstDissipation.value, 'W')} (${loadText(s.worstDissipation)}); ` +
+    `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}`;
+}
 
 export function rfSection(l: Layout, rf: RfReport | null): void {
   l.heading('RF design');
@@ -20,7 +30,9 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
         ['Output', `${fv(p.outputW, 'W')} (${fv(p.outputDbm, 'dBm')}), ${fv(p.vsReferenceDb, 'dB')} vs. reference (${p.vsReferenceSUnits.toFixed(1)} S-units)`],
         ['Supply', `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')}, DC input ${fv(p.dcInputW, 'W')}, efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`],
         ['Load', p.turnsRatioSource === 'network' ? `matching network, ${fv(p.primaryOhm, 'Ω')} at the drain` : `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
-        ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')}`],
+        ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load`],
+        ...(p.swr && p.swr.model === 'load-line' && p.swr.swr > 1 ? [['At SWR ' + p.swr.swr, swrText(p.swr)] as [string, string]] : []),
+        ...(p.swr?.model === 'class-e-matched' ? [['At SWR ' + p.swr.swr, 'class E: stress estimated, not simulated (see the findings)'] as [string, string]] : []),
         ['Heat', `${fv(p.thermal.dissipationTotalW, 'W')} key-down in all devices; junction ${fv(p.thermal.tjAverageC, '°C')} average, ${fv(p.thermal.tjContinuousC, '°C')} continuous (target ≤ ${fv(p.thermal.tjTargetC, '°C')}); heatsink ≤ ${fv(p.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for tune-up${p.thermal.sharedBy > 1 ? ` (one heatsink for ${p.thermal.sharedBy} devices)` : ''}`],
       ], 110, 8.5);
     }

@@ -1,0 +1,89 @@
+// Device-rating and heating findings of the PA at the worst load phase on the SWR circle, with protection advice.
+import type { Finding } from '../findings';
+import type { PaParams } from '../model';
+import { describeLoad, type PaSwrStress } from './pa-swr';
+
+export interface SwrFindingContext {
+  subject: string;
+  /** " at the highest supply of 15.2 V (...)" or ''. */
+  atMax: string;
+  ambientC: number;
+  keyingDuty: number;
+  /** Matched-load output at the hot supply, W, and dissipation, W. */
+  matchedOutputW: number;
+  matchedDissipationW: number;
+  /** Devices sharing one heatsink. */
+  sharedBy: number;
+  tjTargetC: number;
+}
+
+// Common practice, no published source: device voltage rating at least 1.25 x the peak drain voltage
+const V_MARGIN = 1.25;
+// Common practice, no published source: peak current at most 80 % of the rating
+const I_MARGIN = 0.8;
+
+export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext): Finding[] {
+  const { subject } = c;
+  const f: Finding[] = [];
+  const isE = s.model === 'class-e-matched';
+  const where = (w: PaSwrStress['worstDrainPeak']) =>
+    isE ? 'into the design load' : s.swr <= 1 ? 'into the design load' : `at SWR ${s.swr} into ${describeLoad(w)}`;
+  const vPk = s.worstDrainPeak.value;
+  const vWhere = where(s.worstDrainPeak);
+  f.push({
+    severity: pa.deviceVdsMaxV < vPk ? 'fail' : pa.deviceVdsMaxV < V_MARGIN * vPk ? 'caution' : 'ok',
+    rule: 'pa.vds', subject, value: vPk, limit: pa.deviceVdsMaxV, unit: 'V', source: s.swr > 1 && !isE ? 'pa.swr-load-line' : 'pa.vds',
+    message: pa.deviceVdsMaxV < vPk
+      ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, above the ${pa.deviceVdsMaxV} V device rating: ` +
+        `fit a drain clamp (TVS or zener below the rating), fold the drive back on high SWR, or use a device rated ` +
+        `${Math.ceil(V_MARGIN * vPk)} V or more.`
+      : pa.deviceVdsMaxV < V_MARGIN * vPk
+        ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, less than 25 % below the ${pa.deviceVdsMaxV} V ` +
+          `rating; a drain clamp or a higher-rated device adds margin.`
+        : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} with margin.`,
+  });
+  const iPk = s.worstPeakCurrent.value;
+  const iWhere = where(s.worstPeakCurrent);
+  f.push({
+    severity: iPk > pa.deviceIdMaxA ? 'fail' : iPk > I_MARGIN * pa.deviceIdMaxA ? 'caution' : 'ok',
+    rule: 'pa.id', subject, value: iPk, limit: pa.deviceIdMaxA, unit: 'A',
+    source: pa.amplifierClass === 'E' ? 'pa.peak-current-e' : s.swr > 1 ? 'pa.swr-load-line' : 'pa.peak-current',
+    message: iPk > pa.deviceIdMaxA
+      ? `Peak device current ${iPk.toFixed(2)} A ${iWhere} exceeds the ${pa.deviceIdMaxA} A rating: add current ` +
+        `foldback (a sense resistor that cuts the drive) or use a device rated ${Math.ceil(iPk / I_MARGIN)} A or more.`
+      : `Peak device current ${iPk.toFixed(2)} A ${iWhere} against a ${pa.deviceIdMaxA} A rating.`,
+  });
+  if (isE) {
+    f.push({
+      severity: 'caution', rule: 'pa.swr-class-e', subject, value: s.swr, limit: null, unit: '', source: 'pa.swr-class-e',
+      message: `Class E is judged at its design load only: into SWR ${s.swr} its drain peak is estimated to rise well ` +
+        `above the matched ${vPk.toFixed(1)} V (not simulated here). Rate the device generously, fit a drain clamp, and ` +
+        'check the drain on an oscilloscope into a mismatched dummy load.',
+    });
+    return f;
+  }
+  if (s.swr <= 1) return f;
+  const d = s.worstDissipation;
+  const n = Math.max(1, pa.devices);
+  const m = pa.mount;
+  const perDevice = d.value / n;
+  // Source: series thermal path Tj = Ta + P (θjc + θcs) + s P θsa (REFERENCE-VALUES §7), at the worst load
+  const tj = m.thetaSaKPerW === null ? null
+    : c.ambientC + perDevice * (m.thetaJcKPerW + m.thetaCsKPerW + c.sharedBy * m.thetaSaKPerW);
+  const ratio = c.matchedDissipationW > 0 ? d.value / c.matchedDissipationW : null;
+  f.push({
+    severity: tj !== null && tj > m.tjMaxC ? 'caution' : 'ok', rule: 'pa.swr-dissipation', subject, value: d.value,
+    limit: c.matchedDissipationW, unit: 'W', source: 'pa.swr-load-line',
+    message: `Key-down dissipation rises to ${d.value.toFixed(1)} W${ratio !== null ? ` (${ratio.toFixed(2)} × matched)` : ''} ` +
+      `at SWR ${s.swr} into ${describeLoad(d)}` +
+      (tj === null ? '.' : `; a continuous carrier into it takes the junction to about ${tj.toFixed(0)} °C` +
+        (tj > m.tjMaxC ? `, beyond its ${m.tjMaxC} °C maximum: tune at reduced power into a mismatch.` : '.')),
+  });
+  f.push({
+    severity: 'ok', rule: 'pa.swr-output', subject, value: s.maxOutput.value, limit: null, unit: 'W', source: 'pa.swr-load-line',
+    message: `Around the SWR ${s.swr} circle the output ranges from ${s.minOutput.value.toFixed(1)} W ` +
+      `(${describeLoad(s.minOutput)}) to ${s.maxOutput.value.toFixed(1)} W (${describeLoad(s.maxOutput)}); ` +
+      `${c.matchedOutputW.toFixed(1)} W matched.`,
+  });
+  return f;
+}

@@ -1,0 +1,128 @@
+// PA stress around the circle of the worst SWR: drain peak, device current, dissipation and output at each load phase.
+import type { PaParams } from '../model';
+
+/** One load on the SWR circle, referred to the drain through an ideal transformer or network. */
+export interface SwrPoint {
+  /** Phase of the load's reflection coefficient against the design load, degrees (0 = resistive, above it). */
+  phaseDeg: number;
+  /** Load at the PA's output terminals (design load x z), ohms. */
+  loadReOhm: number;
+  loadImOhm: number;
+  /** Highest drain voltage (at the highest supply), V. */
+  drainPeakV: number;
+  /** Peak current of one conducting device, A. */
+  peakDeviceA: number;
+  /** Key-down dissipation of all devices (including bias), W. */
+  dissipationW: number;
+  /** Output power into this load, W. */
+  outputW: number;
+}
+
+export interface Worst {
+  value: number;
+  phaseDeg: number;
+  loadReOhm: number;
+  loadImOhm: number;
+}
+
+export interface PaSwrStress {
+  /** The project's worst SWR the circle is drawn for. */
+  swr: number;
+  /** 'load-line': classes B, C, D at a complex load; 'class-e-matched': class E at its matched figures only. */
+  model: 'load-line' | 'class-e-matched';
+  /** Points every 15 degrees (for a table or plot). */
+  points: SwrPoint[];
+  worstDrainPeak: Worst;
+  worstPeakCurrent: Worst;
+  worstDissipation: Worst;
+  maxOutput: Worst;
+  minOutput: Worst;
+}
+
+/** What the stage does into its design load (the centre of the circle). */
+export interface MatchedPoint {
+  /** Drain peak at the highest supply (matched), V. */
+  drainPeakV: number;
+  /** Highest supply, V. */
+  maxRailV: number;
+  peakDeviceA: number;
+  outputW: number;
+  /** DC input of the RF part (without bias), W. */
+  dcInputW: number;
+  /** Bias idle power, W. */
+  biasW: number;
+}
+
+/** Normalised load z = (1 + Γ)/(1 − Γ) for Γ = ρ e^{jφ}. */
+export function loadOnCircle(swr: number, phaseDeg: number): { re: number; im: number } {
+  // Source: definition of SWR, |Γ| = (S - 1)/(S + 1)
+  const rho = (swr - 1) / (swr + 1);
+  const ph = (phaseDeg * Math.PI) / 180;
+  const gr = rho * Math.cos(ph);
+  const gi = rho * Math.sin(ph);
+  // Source: definition of the reflection coefficient, z = (1 + Γ)/(1 − Γ)
+  const den = (1 - gr) ** 2 + gi ** 2;
+  return { re: ((1 + gr) * (1 - gr) - gi * gi) / den, im: (2 * gi) / den };
+}
+
+/** The stage into one normalised load z (1 = design load). */
+export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { re: number; im: number }): Omit<SwrPoint, 'phaseDeg' | 'loadReOhm' | 'loadImOhm'> {
+  const mag = Math.hypot(z.re, z.im);
+  const swingFactor = m.drainPeakV / m.maxRailV - 1;
+  if (cls === 'D') {
+    // Voltage-switching stage: fundamental drain voltage fixed by the supply, current I1 = V1/|Z| (load line at a
+    // complex load); P = V1^2 Re(Y)/2 = P0 Re(z)/|z|^2; conduction loss scales with current^2 (common practice)
+    const currentRatio = 1 / mag;
+    const outputW = (m.outputW * z.re) / mag ** 2;
+    const lossW = Math.max(0, m.dcInputW - m.outputW) * currentRatio ** 2;
+    return { drainPeakV: m.drainPeakV, peakDeviceA: m.peakDeviceA * currentRatio, dissipationW: lossW + m.biasW, outputW };
+  }
+  // Classes B and C (and B/AB): the drive sets the fundamental current I1 until the swing I1|Z| reaches the supply;
+  // beyond it the voltage is held and the current falls as 1/|Z| (textbook load line, saturation at the design load)
+  const currentRatio = Math.min(1, 1 / mag);
+  const swingRatio = Math.min(1, mag);
+  // Source: P = I1^2 Re(Z)/2 = P0 (I1/I1,0)^2 Re(z); DC current proportional to I1 at a fixed conduction angle
+  const outputW = m.outputW * currentRatio ** 2 * z.re;
+  const dcW = m.dcInputW * currentRatio;
+  return {
+    drainPeakV: m.maxRailV * (1 + swingFactor * swingRatio),
+    peakDeviceA: m.peakDeviceA * currentRatio,
+    dissipationW: Math.max(0, dcW - outputW) + m.biasW,
+    outputW,
+  };
+}
+
+const STEPS = 360;
+
+/** Sweep the load phase once round the circle of `swr` (1 degree steps). Class E keeps its matched figures. */
+export function swrStress(cls: PaParams['amplifierClass'], m: MatchedPoint, swr: number, designLoadOhm: number): PaSwrStress {
+  const all: SwrPoint[] = [];
+  for (let i = 0; i < STEPS; i++) {
+    const phaseDeg = (360 * i) / STEPS;
+    const zl = loadOnCircle(swr, phaseDeg);
+    const p = cls === 'E'
+      ? { drainPeakV: m.drainPeakV, peakDeviceA: m.peakDeviceA, dissipationW: m.dcInputW - m.outputW + m.biasW, outputW: m.outputW }
+      : stressAt(cls, m, zl);
+    all.push({ phaseDeg, loadReOhm: designLoadOhm * zl.re, loadImOhm: designLoadOhm * zl.im, ...p });
+  }
+  const pick = (key: keyof SwrPoint, sign: 1 | -1): Worst => {
+    const best = all.reduce((a, b) => (sign * (b[key] - a[key]) > 1e-12 ? b : a));
+    return { value: best[key], phaseDeg: best.phaseDeg, loadReOhm: best.loadReOhm, loadImOhm: best.loadImOhm };
+  };
+  return {
+    swr,
+    model: cls === 'E' ? 'class-e-matched' : 'load-line',
+    points: all.filter((p) => p.phaseDeg % 15 === 0),
+    worstDrainPeak: pick('drainPeakV', 1),
+    worstPeakCurrent: pick('peakDeviceA', 1),
+    worstDissipation: pick('dissipationW', 1),
+    maxOutput: pick('outputW', 1),
+    minOutput: pick('outputW', -1),
+  };
+}
+
+/** "25.0 − j 12.5 Ω (phase 240°)" for a finding. */
+export function describeLoad(w: Worst): string {
+  const sign = w.loadImOhm < 0 ? '−' : '+';
+  return `${w.loadReOhm.toFixed(1)} ${sign} j${Math.abs(w.loadImOhm).toFixed(1)} Ω (reflection phase ${w.phaseDeg.toFixed(0)}°)`;
+}

@@ -1,0 +1,98 @@
+// PA stress round the SWR circle. Expected values are hand arithmetic from published definitions:
+// |Γ| = (S - 1)/(S + 1) and z = (1 + Γ)/(1 - Γ) (definition of the reflection coefficient, any Smith-chart text),
+// and the textbook load line at a complex load (P = |I1|^2 Re Z / 2 = |V1|^2 Re Y / 2).
+import { describe, expect, it } from 'vitest';
+import { loadOnCircle, stressAt, swrStress, type MatchedPoint } from '../../../src/core/rf/pa-swr';
+import { evaluatePa } from '../../../src/core/rf/pa';
+import { paParams } from './fixture';
+import { near } from './helpers';
+
+// Invented matched stage: 20 V highest supply, drain peak 2 x 20 V, 3 A peak, 10 W out of 14.2857 W DC (70 %)
+const m: MatchedPoint = { drainPeakV: 40, maxRailV: 20, peakDeviceA: 3, outputW: 10, dcInputW: 10 / 0.7, biasW: 0 };
+
+describe('loads on the SWR 2 circle (definition of Γ and SWR)', () => {
+  it('phase 0: Γ = +1/3, z = (4/3)/(2/3) = 2', () => {
+    const z = loadOnCircle(2, 0);
+    near(z.re, 2, 1e-12, 're');
+    near(z.im, 0, 1e-12, 'im');
+  });
+  it('phase 180°: Γ = -1/3, z = 1/2', () => near(loadOnCircle(2, 180).re, 0.5, 1e-12, 're'));
+  it('phase 90°: Γ = j/3, z = (1 + j/3)/(1 - j/3) = 0.8 + j0.6', () => {
+    const z = loadOnCircle(2, 90);
+    near(z.re, 0.8, 1e-12, 're');
+    near(z.im, 0.6, 1e-12, 'im');
+  });
+});
+
+describe('class D (voltage switching) at a complex load: V1 fixed, I1 = V1/|Z|', () => {
+  it('z = 1/2: twice the current, P = P0 Re(z)/|z|^2 = 2 P0, conduction loss x 4', () => {
+    const s = stressAt('D', m, { re: 0.5, im: 0 });
+    near(s.peakDeviceA, 6, 1e-12, 'Ipk');
+    near(s.outputW, 20, 1e-12, 'P');
+    near(s.dissipationW, 4 * (10 / 0.7 - 10), 1e-9, 'loss');
+    near(s.drainPeakV, 40, 1e-12, 'Vpk');
+  });
+  it('z = 0.8 + j0.6 (|z| = 1): same current, P = 0.8 P0', () => {
+    near(stressAt('D', m, { re: 0.8, im: 0.6 }).outputW, 8, 1e-12, 'P');
+  });
+  it('the sweep puts the worst current and the most power at phase 180° (z = 1/S)', () => {
+    const s = swrStress('D', m, 2, 50);
+    near(s.worstPeakCurrent.value, 6, 1e-9, 'Ipk');
+    expect(s.worstPeakCurrent.phaseDeg).toBe(180);
+    near(s.worstPeakCurrent.loadReOhm, 25, 1e-9, 'R');
+    near(s.maxOutput.value, 20, 1e-9, 'Pmax');
+    near(s.minOutput.value, 5, 1e-9, 'Pmin at z = 2: P0 x 2/4');
+  });
+});
+
+describe('class B/C at a complex load: I1 held until the swing reaches the supply', () => {
+  it('z = 2: swing at the supply, current halves, P = P0 (1/2)^2 x 2 = P0/2, DC halves', () => {
+    const s = stressAt('C', m, { re: 2, im: 0 });
+    near(s.peakDeviceA, 1.5, 1e-12, 'Ipk');
+    near(s.outputW, 5, 1e-12, 'P');
+    near(s.dissipationW, 10 / 0.7 / 2 - 5, 1e-9, 'Pd');
+    near(s.drainPeakV, 40, 1e-12, 'Vpk');
+  });
+  it('z = 1/2: current held, swing halves: drain peak Vdd (1 + 1/2) = 30 V, P = P0/2', () => {
+    const s = stressAt('B', m, { re: 0.5, im: 0 });
+    near(s.drainPeakV, 30, 1e-12, 'Vpk');
+    near(s.outputW, 5, 1e-12, 'P');
+    near(s.dissipationW, 10 / 0.7 - 5, 1e-9, 'Pd');
+  });
+  it('the worst dissipation on the SWR 2 circle is Pdc0 - P0/S at phase 180° (Re z and Re y are both >= 1/S)', () => {
+    const s = swrStress('B', m, 2, 50);
+    near(s.worstDissipation.value, 10 / 0.7 - 5, 1e-9, 'Pd');
+    expect(s.worstDissipation.phaseDeg).toBe(180);
+    near(s.worstDrainPeak.value, 40, 1e-12, 'Vpk never above 2 Vdd on the load line');
+  });
+  it('SWR 1 gives the matched figures at every phase', () => {
+    const s = swrStress('C', m, 1, 50);
+    near(s.maxOutput.value, 10, 1e-12, 'P');
+    near(s.minOutput.value, 10, 1e-12, 'P');
+  });
+});
+
+describe('evaluatePa judges the ratings at the worst load phase', () => {
+  const proj = { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 };
+  it('class D push-pull: the current finding is S x the matched peak and names the phase', () => {
+    const pa = paParams({ amplifierClass: 'D', turnsRatio: 1.5, saturationV: 1, deviceIdMaxA: 100 });
+    const matched = evaluatePa(pa, 13.8, proj);
+    const r = evaluatePa(pa, 13.8, proj, 'PA', { worstSwr: 2 });
+    const f = r.findings.find((x) => x.rule === 'pa.id');
+    near(f?.value as number, 2 * matched.peakDeviceA, 1e-9, 'Ipk');
+    expect(f?.message).toContain('reflection phase 180°');
+    expect(r.swr?.worstPeakCurrent.phaseDeg).toBe(180);
+  });
+  it('a rating below the worst drain peak fails and suggests a clamp or a higher-rated device', () => {
+    const r = evaluatePa(paParams({ amplifierClass: 'B', deviceVdsMaxV: 20 }), 13.8, proj, 'PA', { worstSwr: 2 });
+    const f = r.findings.find((x) => x.rule === 'pa.vds');
+    expect(f?.severity).toBe('fail');
+    expect(f?.message).toMatch(/drain clamp/);
+    expect(f?.message).toMatch(/rated 35 V or more/); // 1.25 x 27.6 V = 34.5 V, rounded up
+  });
+  it('class E says its SWR stress is not simulated', () => {
+    const r = evaluatePa(paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1 }), 13.8, proj, 'PA', { worstSwr: 2 });
+    expect(r.swr?.model).toBe('class-e-matched');
+    expect(r.findings.find((x) => x.rule === 'pa.swr-class-e')?.severity).toBe('caution');
+  });
+});

@@ -1,0 +1,52 @@
+// The PA round the circle of the worst SWR: the worst of each stress with its load, and the points every 15°.
+import type { FC } from 'hono/jsx';
+import type { PaSwrStress, Worst } from '../../src/core/rf/pa-swr';
+import { formatValue as fv } from '../../src/core/units';
+
+const load = (w: { loadReOhm: number; loadImOhm: number }) =>
+  `${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '−' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} Ω`;
+
+export const PaSwrTable: FC<{ s: PaSwrStress | null }> = ({ s }) => {
+  if (!s) return null;
+  if (s.model === 'class-e-matched') {
+    return (
+      <p class="note">
+        Class E is judged at its design load only; its stress round the SWR {s.swr} circle is an estimate (see the
+        findings), not simulated.
+      </p>
+    );
+  }
+  const rows: [string, Worst, string][] = [
+    ['Highest drain peak', s.worstDrainPeak, 'V'],
+    ['Highest device current', s.worstPeakCurrent, 'A'],
+    ['Most dissipation (key-down, all devices)', s.worstDissipation, 'W'],
+    ['Most output', s.maxOutput, 'W'],
+    ['Least output', s.minOutput, 'W'],
+  ];
+  return (
+    <table class="grid swr-circle">
+      <caption>
+        Round the SWR {s.swr} circle (load line at a complex load, loads at the PA output; phase of the reflection
+        coefficient)
+      </caption>
+      <thead>
+        <tr>
+          <th>Worst case</th>
+          <th class="num">Value</th>
+          <th class="num">Load</th>
+          <th class="num">Phase</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map(([what, w, unit]) => (
+          <tr>
+            <th scope="row">{what}</th>
+            <td class="num">{fv(w.value, unit)}</td>
+            <td class="num">{load(w)}</td>
+            <td class="num">{w.phaseDeg.toFixed(0)}°</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+};
