@@ -2,7 +2,7 @@
 export { evaluateSupply, type SupplyOptions } from './evaluate-supply';
 export type * from './report-types';
 export { simulateRectifier, switchOnSurgeA, type RectifierSimInput, type RectifierSimResult, type RectifierWaveform, type SimLoad } from './rectifier-sim';
-export { regulatorOutputV, regulatorInputCurrentA, regulatorDissipationW, DEFAULT_SWITCHING_EFFICIENCY } from './regulator';
+export { regulatorOutputV, regulatorInputCurrentA, regulatorDissipationW } from './regulator';
 export { rectifierNetlist, railNetlist, SPICE_MEASURES } from './spice-netlist';
 export { cornerSpecs, cornerCurrent, CW_DUTY_FACTOR, DEFAULT_TRANSMIT_FRACTION } from './corners';
 export { primaryFuse, railFuse, fuseMarking } from './fuses';

@@ -3,37 +3,35 @@ import type { Finding } from '../findings';
 import type { RegulatedRail, RegulatorSetting } from '../model';
 import { usablePositive } from '../numeric';
 
-/** Efficiency assumed for a switching module with none entered. Common practice, no published source. */
-export const DEFAULT_SWITCHING_EFFICIENCY = 0.85;
-
+// a result that cannot be computed is unknown (NaN, shown as unknown with a finding), never a silent 0
 const finiteOr = (x: number, f: number) => (Number.isFinite(x) ? x : f);
 
 /**
  * Output voltage of a regulator from its setting (V). `quiescentA` is the common-pin current, needed only for
- * the 'raised-resistor' method. Non-finite results (R1 = 0) come back as 0; validation reports them.
+ * the 'raised-resistor' method. Non-finite results (R1 = 0) come back unknown (NaN); validation reports them.
  */
 export function regulatorOutputV(setting: RegulatorSetting, quiescentA = 0): number {
   switch (setting.method) {
     case 'fixed':
-      return finiteOr(setting.nominalV, 0);
+      return finiteOr(setting.nominalV, NaN);
     case 'adjustable':
       // Source: adjustable three-terminal regulator datasheets (LM317-type), Vout = Vref(1 + R2/R1) + I_adj R2 (ref §6.2 [C])
-      return finiteOr(setting.vrefV * (1 + setting.r2Ohm / setting.r1Ohm) + setting.adjustA * setting.r2Ohm, 0);
+      return finiteOr(setting.vrefV * (1 + setting.r2Ohm / setting.r1Ohm) + setting.adjustA * setting.r2Ohm, NaN);
     case 'raised-diodes':
       // Source: circuit notes quoted in ref §6.1 [C]: each forward-biased silicon diode in the common lead adds ~0.6-0.7 V
-      return finiteOr(setting.nominalV + setting.diodes * setting.diodeDropV, 0);
+      return finiteOr(setting.nominalV + setting.diodes * setting.diodeDropV, NaN);
     case 'raised-resistor':
       // Source: ref §6.1 [C] (resistor method): Vout = Vxx(1 + R2/R1) + Iq R2, Iq leaves the common pin through R2
-      return finiteOr(setting.nominalV * (1 + setting.r2Ohm / setting.r1Ohm) + quiescentA * setting.r2Ohm, 0);
+      return finiteOr(setting.nominalV * (1 + setting.r2Ohm / setting.r1Ohm) + quiescentA * setting.r2Ohm, NaN);
   }
 }
 
-/** Efficiency of a switching module, falling back to the default when missing or absurd. */
+/** Efficiency of a switching module; unknown (NaN) when missing or absurd (its spec refuses such a value by name). */
 export function switchingEfficiency(rail: RegulatedRail): number {
   const e = rail.efficiency;
   // Usable, not merely > 0: a subnormal efficiency made Pout / eff infinite (and the input current silently Iq only).
   // Floor 1 %: common practice, no published source (no working module is less efficient).
-  return e !== null && usablePositive(e, 0.01) && e <= 1 ? e : DEFAULT_SWITCHING_EFFICIENCY;
+  return e !== null && usablePositive(e, 0.01) && e <= 1 ? e : NaN;
 }
 
 /**
@@ -50,7 +48,7 @@ export function regulatorInputCurrentA(rail: RegulatedRail, outputA: number, inp
   // Below 1 mV (a subnormal included) the input is no usable voltage: treated as V_in = Vout, as a non-positive one.
   const vIn = usablePositive(inputV, 1e-3) ? inputV : Math.max(vOut, 1e-3);
   // Energy balance: Pin = Pout / efficiency
-  return finiteOr((vOut * iOut) / (switchingEfficiency(rail) * vIn), 0) + iq;
+  return finiteOr((vOut * iOut) / (switchingEfficiency(rail) * vIn), NaN) + iq;
 }
 
 /**
@@ -61,7 +59,7 @@ export function regulatorInputCurrentA(rail: RegulatedRail, outputA: number, inp
 export function regulatorDissipationW(rail: RegulatedRail, outputA: number, inputMeanV: number): number {
   const vOut = regulatorOutputV(rail.setting, rail.quiescentA);
   const iOut = Number.isFinite(outputA) && outputA > 0 ? outputA : 0;
-  if (rail.regulator === 'switching') return finiteOr(vOut * iOut * (1 / switchingEfficiency(rail) - 1), 0);
+  if (rail.regulator === 'switching') return finiteOr(vOut * iOut * (1 / switchingEfficiency(rail) - 1), NaN);
   const vIn = Number.isFinite(inputMeanV) ? inputMeanV : 0;
   const iq = Number.isFinite(rail.quiescentA) && rail.quiescentA > 0 ? rail.quiescentA : 0;
   return Math.max(0, (vIn - vOut) * iOut + vIn * iq);
