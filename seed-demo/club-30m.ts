@@ -186,7 +186,7 @@ export const club30m: Project = {
       },
     ],
     rails: [
-      { kind: 'rectified', id: 'rail-raw', name: 'Raw DC for the 13.8 V regulator', windingId: 'w-16', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0047, esrOhm: 0.04, bleederOhm: 2200, capacitorRatedV: 35, capacitorRippleA: 2.4, ripplePpTargetV: 2, marginV: 0.5, fuseA: null, minimumV: null },
+      { kind: 'rectified', id: 'rail-raw', name: 'Raw DC for the 13.8 V regulator', windingId: 'w-16', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0047, esrOhm: 0.04, bleederOhm: 2200, capacitorRatedV: 35, capacitorRippleA: 2.4, ripplePpTargetV: 2, marginV: 0.5, fuseA: null, minimumV: null, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: 1 },
       {
         kind: 'regulated',
         id: 'rail-13v8',
@@ -200,9 +200,12 @@ export const club30m: Project = {
         maxOutputA: 1.5,
         maxInputV: 40,
         mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: 4.5, tjMaxC: 125 },
+        // invented: an adjustable regulator's datasheet minimum without the adjust-pin bypass; the receiver wants < 1 mV
+        rippleRejectionDb: 65,
+        rippleTargetV: 0.001,
       },
       // invented: below 20 V the final falls well short of its 20 W (its output goes as (V - Vsat)²)
-      { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 2.5, minimumV: 20 },
+      { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 2.5, minimumV: 20, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: 1 },
     ],
     primaryFuseA: null,
   },

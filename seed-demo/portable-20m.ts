@@ -34,6 +34,8 @@ export const portable20m: Project = {
         maxOutputA: 0.5,
         maxInputV: 26,
         mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 125 },
+        rippleRejectionDb: null,
+        rippleTargetV: null,
       },
     ],
     primaryFuseA: null,

@@ -58,9 +58,9 @@ export interface RectifiedRail {
   marginV: number; // extra headroom the designer wants above regulator needs
   fuseA: number | null; // fitted rail fuse, null = recommend one
   minimumV: number | null; // lowest voltage its direct loads need, null = not stated
-  windingFuseA?: number | null; // fitted fuse in the winding lead ahead of the rectifier, null/absent = recommend one
-  windingFuseSheet?: FuseSheet; // its type; absent = T3
-  bleederRatedW?: number | null; // fitted bleeder's power rating, null/absent = not stated
+  windingFuseA: number | null; // fitted fuse in the winding lead ahead of the rectifier, null = recommend one
+  windingFuseSheet: FuseSheet; // its type (old rows and files read T3)
+  bleederRatedW: number | null; // fitted bleeder's power rating, null = not stated
 }
 
 export type RegulatorSetting =
@@ -89,8 +89,8 @@ export interface RegulatedRail {
   maxOutputA: number | null;
   maxInputV: number | null;
   mount: HeatsinkMount | null;
-  rippleRejectionDb?: number | null; // datasheet ripple rejection at 100/120 Hz, null/absent = not stated
-  rippleTargetV?: number | null; // largest output ripple wanted (V p-p, e.g. a receiver's rail), null/absent = none
+  rippleRejectionDb: number | null; // datasheet ripple rejection at 100/120 Hz, null = not stated
+  rippleTargetV: number | null; // largest output ripple wanted (V p-p, e.g. a receiver's rail), null = none
 }
 
 export interface BatteryRail {
@@ -151,6 +151,9 @@ export interface PaParams {
   referencePowerW: number; // compare output against this (dB and S-units)
   heatsinkSharedBy?: number | null; // devices on one heatsink (their heat through one θsa); null/absent = one each
   networkLoadOhm?: number | null; // drain load set by an L/pi matching network, ohms; null/absent = transformer
+  conductionAngleDeg?: number | null; // class C conduction angle per device, degrees; null/absent = 150 assumed
+  imbalanceTypical?: number | null; // push-pull halves' mismatch (fraction), typical; null/absent = 0.05 assumed
+  imbalanceWorst?: number | null; // same, worst; null/absent = 0.2 assumed
 }
 
 export interface LpfParams {

@@ -78,6 +78,11 @@ function supplyLines(report: EvaluationReport): string[] {
       const c = r.corners.find((x) => x.id === r.worstVoltageCornerId);
       const fuse = r.fuse.ratedA !== null ? `${r.fuse.characteristic}${formatValue(r.fuse.ratedA, 'A')}` : 'beyond the series';
       out.push(`  ${r.railName}: trough ${formatValue(c?.troughV, 'V')} (${r.requiredMinV > 0 ? `needs ${formatValue(r.requiredMinV, 'V')}` : 'no regulator fed, no minimum stated'}), ripple ${formatValue(c?.ripplePpV, 'V')} p-p, reservoir >= ${formatValue(r.reservoir.recommendedRatedV, 'V')} rated, rail fuse ${fuse}`);
+      const wf = r.windingFuse;
+      if (wf?.check) {
+        const clear = wf.check.latestS === null ? 'not cleared (below 2.1 x In)' : `cleared within ${formatValue(wf.check.latestS, 's')} (IEC 60127-2 ${wf.check.sheet})`;
+        out.push(`    ${wf.windingName} fuse ${wf.fittedA !== null ? 'fitted' : 'recommended'} T${formatValue(wf.check.fuseA, 'A')}: shorted reservoir ${formatValue(wf.outputShortLowA, 'A')} at low mains, ${clear}`);
+      }
     } else if (r.kind === 'regulated') {
       const tj = r.thermal?.junctionC != null ? `, junction ${formatValue(r.thermal.junctionC, '°C')}` : '';
       out.push(`  ${r.railName}: ${formatValue(r.outputV, 'V')}, ${formatValue(r.thermalDissipationW, 'W')} in CW use${tj}`);
@@ -87,6 +92,9 @@ function supplyLines(report: EvaluationReport): string[] {
   }
   for (const t of s.transformers) out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard, primary ${formatValue(t.primaryA, 'A')}`);
   if (s.primary?.fuse.ratedA) out.push(`  Primary fuse: ${s.primary.fuse.characteristic}${formatValue(s.primary.fuse.ratedA, 'A')} (time-lag, IEC 60127 series)`);
+  for (const f of s.primary?.faultChecks ?? []) {
+    out.push(`    ${f.windingName} fault reflected to the primary: ${formatValue(f.reflectedA, 'A')}, ${f.check.multiple.toFixed(1)} x In: ${f.check.clears ? 'cleared' : 'not cleared'} within ${f.check.allowedS} s`);
+  }
   return out;
 }
 

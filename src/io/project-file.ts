@@ -8,7 +8,7 @@ import { STAGE_DATA } from '../core/spec/stage-data';
 import { loadSpec, stageSpec } from '../core/spec/stage';
 import { mainsSpec, projectFieldsSpec } from '../core/spec/settings';
 import { primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec/supply';
-import { batterySpec, rectifiedSpec, regulatedSpec } from '../core/spec/supply-rails';
+import { batterySpec, rectifiedSpec, regulatedSpec, withRailDefaults } from '../core/spec/supply-rails';
 import { rfSettingsSpec } from '../core/spec/rf-settings';
 import { specFileSchema, specShape } from './spec-schema';
 
@@ -30,7 +30,8 @@ const rail = z
   .object({ kind: z.enum(['rectified', 'regulated', 'battery']), id })
   .loose()
   .transform((r, ctx): Rail => {
-    const res = specFileSchema<object>(railKinds[r.kind]).safeParse(r);
+    // a file written before a rail field existed reads it as not stated (the same defaults as old database rows)
+    const res = specFileSchema<object>(railKinds[r.kind]).safeParse(withRailDefaults(r as unknown as Rail));
     if (res.success) return { ...res.data, kind: r.kind, id: r.id } as Rail;
     for (const issue of res.error.issues) ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
     return z.NEVER;

@@ -73,7 +73,7 @@ describe('role defaults with a raw rail feeding a regulator', () => {
 describe('signal rail choice', () => {
   const reg = (id: string, v: number, parentId = 'bat'): Rail => ({
     kind: 'regulated', id, name: `${v} V`, parentId, regulator: 'linear', setting: { method: 'fixed', nominalV: v }, dropoutV: 2, quiescentA: 0.005,
-    efficiency: null, maxOutputA: null, maxInputV: null, mount: null,
+    efficiency: null, maxOutputA: null, maxInputV: null, mount: null, rippleRejectionDb: null, rippleTargetV: null,
   });
   const bat: Rail = { kind: 'battery', id: 'bat', name: '12 V', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10, capacityAh: 7, usableFraction: 0.8, internalOhm: 0.05, minimumV: null };
   const withRails = (rails: Rail[]): Project => ({ ...newProject('p', 'P', 7.03e6, 5, null), supply: { transformers: [], rails, primaryFuseA: null } });

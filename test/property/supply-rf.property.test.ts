@@ -75,6 +75,7 @@ describe('supply models', () => {
     const rail = (topology: RectifiedRail['topology'], reservoirF: number): RectifiedRail => ({
       kind: 'rectified', id: 'r', name: 'rail', windingId: 'w', topology, diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF, esrOhm: 0.05,
       bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0.5, fuseA: null, minimumV: null,
+      windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: null,
     });
     fc.assert(
       fc.property(

@@ -48,12 +48,17 @@ const RectifiedFields: FC<FormProps> = ({ project, state, idp }) => {
         {f('capacitorRatedV')}
         {f('capacitorRippleA')}
         {f('bleederOhm', 7)}
+        {f('bleederRatedW', 5)}
       </div>
       <div class="row">
         {f('ripplePpTargetV')}
         {f('marginV')}
         {f('fuseA')}
         {f('minimumV', 6)}
+      </div>
+      <div class="row">
+        {f('windingFuseA')}
+        {f('windingFuseSheet')}
       </div>
     </>
   );
@@ -88,6 +93,10 @@ const RegulatedFields: FC<FormProps & { parents: [string, string][] }> = ({ stat
         {f('efficiency', 5)}
         {f('maxOutputA')}
         {f('maxInputV')}
+      </div>
+      <div class="row">
+        {f('rippleRejectionDb', 5)}
+        {f('rippleTargetV', 6)}
       </div>
       <div class="row">
         {f('mount.thetaJcKPerW', 5)}

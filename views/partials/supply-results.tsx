@@ -11,6 +11,7 @@ import type {
 } from '../../src/core/power/report-types';
 import { formatValue as fv } from '../../src/core/units';
 import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
+import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
 
 const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
 const pct = (x: number) => `${(x * 100).toFixed(0)} %`;
@@ -97,6 +98,7 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
       </tbody>
     </table>
     <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
+    {rail.windingFuse ? <WindingFuseTable wf={rail.windingFuse} /> : null}
     <h4>Findings</h4>
     <FindingList findings={rail.findings} />
     <h4>Recommendations</h4>
@@ -244,6 +246,7 @@ export const SupplyResults: FC<{ report: SupplyReport }> = ({ report }) => {
               {report.primary.fittedA !== null ? ` (fitted ${fv(report.primary.fittedA, 'A')})` : ''}. {report.primary.fuse.reasoning}
             </p>
           ) : null}
+          {report.primary ? <PrimaryFaultTable checks={report.primary.faultChecks} /> : null}
           <FindingList findings={general} />
         </section>
       ) : null}

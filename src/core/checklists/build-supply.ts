@@ -24,6 +24,11 @@ function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] 
         const kd = r.corners.find((c) => c.id === 'low-keyDown');
         items.push(measured(`${rail.name}: with no load at nominal mains expect about {v}.`, nl?.noLoadPeakV ?? null, 'V', `supply: ${nl?.label ?? 'no load'}`));
         if (kd) items.push(measured(`${rail.name}: lowest point of the ripple at low mains, key-down, about {v}${needText(project, rail, r.requiredMinV)}.`, kd.troughV, 'V', `supply: ${kd.label}`, kd.headroomMarginV < 0 ? 'caution' : 'normal'));
+        const wf = r.windingFuse;
+        if (wf?.fuse.ratedA != null || wf?.fittedA != null) {
+          const a = wf.fittedA ?? wf.fuse.ratedA!;
+          items.push(caution(`${wf.windingName}: the ${wf.fittedA !== null ? 'fitted' : 'recommended'} ${a < 1 ? `${Math.round(a * 1000)} mA` : `${a} A`} fuse goes in the winding lead between the transformer and the rectifier, so a shorted bridge or reservoir blows it; a fuse after the reservoir protects only the wiring beyond it.`));
+        }
         if (r.bleeder.fittedTimeS !== null) items.push(measured(`Switch off and time the discharge: ${rail.name} should fall below ${fmt(r.bleeder.thresholdV, 'V')} within about {v}.`, r.bleeder.fittedTimeS, 's', 'supply: bleeder'));
       } else {
         items.push(measured(`${rail.name}: expect roughly {v} (supply design not computed).`, railNominalV(rail, project), 'V', 'budget: nominal rail voltage'));

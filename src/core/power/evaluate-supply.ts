@@ -13,6 +13,7 @@ import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
+import { primaryFaultChecks, primaryFaultFindings, railsReported } from './primary-fault';
 import { checkSupplyInputs } from './supply-inputs';
 import { usablePositive } from '../numeric';
 
@@ -208,8 +209,10 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const fuse = primaryFuse(loadA, construction);
     // a refused fitted value is not checked (its own finding says so)
     const fittedA = inputs.primaryFuseOk ? project.supply.primaryFuseA : null;
-    const findings = sortFindings(fittedFuseFindings('Primary fuse', fittedA, fuse));
-    primary = { loadA, fuse, fittedA, findings };
+    const inUseA = fittedA ?? fuse.ratedA;
+    const faultChecks = inUseA !== null ? primaryFaultChecks(railsReported(reports), inUseA) : [];
+    const findings = sortFindings([...fittedFuseFindings('Primary fuse', fittedA, fuse), ...primaryFaultFindings(faultChecks, reports)]);
+    primary = { loadA, fuse, fittedA, faultChecks, findings };
   }
 
   const railReports = rails.map((r) => reports.get(r.id)!).filter(Boolean);

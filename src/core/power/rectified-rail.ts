@@ -11,6 +11,7 @@ import { minimumCapacitanceF, recommendedCapacitorV, reservoirFindings, standard
 import { bleederFindings, bleederReport } from './bleeder';
 import { fittedFuseFindings, fuseMarking, railFuse } from './fuses';
 import { recommendWinding } from './transformer';
+import { windingFuseReport } from './winding-fuse';
 import { DEFAULT_SECONDARY_V } from './standard-values';
 
 export interface RectifiedContext {
@@ -135,6 +136,16 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     recommendations.push({ topic: 'rectifier', text: `Diodes rated ${fmt(Math.max(...corners.map((c) => c.diodePeakA)), 1)} A repetitive peak and ${fmt(Math.max(...corners.map((c) => c.surgeA)), 0)} A surge or more`, reasoning: `The simulated repetitive peak current and the switch-on surge into a discharged ${fmtF(rail.reservoirF)} reservoir (EMF peak over winding, diode and ESR resistance) at high mains. The bridge's non-repetitive surge rating (IFSM) must exceed the surge.`, source: 'supply.surge' });
   }
 
+  // Fuse in the winding lead, ahead of the rectifier, and the winding's fault currents
+  const lowF = ctx.specs.find((s) => s.mains === 'low')?.mainsFactor ?? 1;
+  const highF = ctx.specs.find((s) => s.mains === 'high')?.mainsFactor ?? 1;
+  const wf = winding ? windingFuseReport({ rail, winding, corners, mainsNominalV: ctx.mains.nominalV, lowFactor: lowF, highFactor: highF }) : null;
+  if (wf) {
+    findings.push(...wf.findings);
+    const r = wf.report;
+    recommendations.push({ topic: 'fuse', text: r.fuse.ratedA !== null ? `${fuseMarking(r.fuse.ratedA)} fuse in the ${winding!.name} lead, before the rectifier` : 'Winding fuse: see reasoning', reasoning: `${r.fuse.reasoning} ${r.reasoning}`, source: 'supply.fuse-clearing' });
+  }
+
   // Winding recommendation
   const winding_ = winding
     ? recommendWinding({ rail, winding, corners, keyingDuty: ctx.keyingDuty, requiredMinV: ctx.hasRequirement ? ctx.requiredMinV : null, frequencyHz: ctx.mains.frequencyHz, mainsNominalV: ctx.mains.nominalV, lowFactor: worst.mainsFactor, keyDownA: worst.loadA, standardSecondaryV: ctx.standardSecondaryV ?? DEFAULT_SECONDARY_V, construction: transformer?.construction ?? 'laminated' })
@@ -149,7 +160,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   return {
     report: {
       kind: 'rectified', railId: rail.id, railName: rail.name, topology: rail.topology, requiredMinV: ctx.requiredMinV, requirementNote: ctx.requirementNote, outputA, corners,
-      worstVoltageCornerId: worst.id, worstThermalCornerId: thermal.id, waveform, winding: winding_?.result ?? null, reservoir, bleeder, fuse,
+      worstVoltageCornerId: worst.id, worstThermalCornerId: thermal.id, waveform, winding: winding_?.result ?? null, reservoir, bleeder, fuse, windingFuse: wf?.report ?? null,
       findings: sortFindings(findings), recommendations,
     },
     simulations,

@@ -1,7 +1,9 @@
 // The supply report: plain JSON-friendly objects (no Maps, no NaN). SI units; the unit of every key is in its doc.
 import type { Finding } from '../findings';
 import type { SourceKey } from '../sources/registry';
-import type { Mode, PerMode, RectifierTopology } from '../model';
+import type { FuseSheet, Mode, PerMode, RectifierTopology } from '../model';
+
+export type { FuseSheet } from '../model';
 import type { RectifierWaveform } from './rectifier-sim';
 import type { ThermalResult } from '../thermal/junction';
 
@@ -79,6 +81,55 @@ export interface FuseRecommendation {
   /** Multiplier applied to loadA before rounding up (dimensionless). */
   factor: number;
   reasoning: string;
+}
+
+/** A fuse against one fault current, by the IEC 60127-2 pre-arcing limits of its sheet. */
+export interface FaultCheck {
+  /** Fault current through the fuse, RMS (A). */
+  faultA: number;
+  /** Fuse rated current In (A). */
+  fuseA: number;
+  sheet: FuseSheet;
+  /** faultA / fuseA (dimensionless). */
+  multiple: number;
+  /** Latest pre-arcing time the sheet allows at this multiple (s); null = below 2.1 In, no clearing time guaranteed. */
+  latestS: number | null;
+  /** Time within which the fault must be cleared (s). */
+  allowedS: number;
+  /** True when latestS is known and at most allowedS. */
+  clears: boolean;
+}
+
+/** The fuse in a winding lead ahead of the rectifier and the faults it must clear. */
+export interface WindingFuseReport {
+  windingId: string;
+  windingName: string;
+  /** Recommended fuse (rating from the continuous key-down winding RMS current at high mains). */
+  fuse: FuseRecommendation;
+  /** Fitted fuse (A), null = none entered. */
+  fittedA: number | null;
+  sheet: FuseSheet;
+  /** Source resistance referred to the secondary: the winding's resistance (Ω); leakage reactance neglected. */
+  sourceOhm: number;
+  /** Dead short at the rectifier's input (failed bridge), low mains (A RMS). */
+  inputShortLowA: number;
+  /** The same at high mains: the most the winding and fuse can see (A RMS). */
+  inputShortHighA: number;
+  /** Shorted reservoir, current through the diodes and the fuse, low mains (A RMS): the smallest fault. */
+  outputShortLowA: number;
+  /** The fuse in use (fitted, else recommended) against outputShortLowA; null when no fuse size is known. */
+  check: FaultCheck | null;
+  /** Turns ratio secondary/primary used to reflect faults to the primary (V_NL / V_mains, dimensionless). */
+  turnsRatio: number;
+  reasoning: string;
+}
+
+/** The primary fuse against a winding fault reflected to the primary. */
+export interface PrimaryFaultCheck {
+  windingName: string;
+  /** Smallest fault (shorted reservoir, low mains) reflected by the turns ratio (A RMS), load of other windings not added. */
+  reflectedA: number;
+  check: FaultCheck;
 }
 
 export interface WindingRecommendation {
@@ -180,6 +231,8 @@ export interface RectifiedRailReport extends RailBase {
   reservoir: ReservoirReport;
   bleeder: BleederReport;
   fuse: FuseRecommendation;
+  /** Fuse in the winding lead ahead of the rectifier and its fault check; null without a winding. */
+  windingFuse: WindingFuseReport | null;
 }
 
 /** One corner for a regulated rail. */
@@ -260,6 +313,8 @@ export interface PrimaryReport {
   fuse: FuseRecommendation;
   /** Fitted primary fuse (A), null = none entered. */
   fittedA: number | null;
+  /** The primary fuse in use (fitted, else recommended; taken as T, sheet 3) against each winding's reflected fault. */
+  faultChecks: PrimaryFaultCheck[];
   findings: Finding[];
 }
 

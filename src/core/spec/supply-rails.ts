@@ -2,7 +2,7 @@
 // Field keys are the stored (model) key paths; `form:` keeps the supply page's field names.
 import { defineSpec, U, type FieldError, type Spec } from './field';
 import { getPath } from './derive';
-import type { Rail, RegulatorSetting } from '../model';
+import type { Rail, RectifiedRail, RegulatorSetting } from '../model';
 import { choice, num, optNum, ref, text } from './make';
 import { ARMS } from './supply';
 
@@ -18,6 +18,13 @@ const minimumV = optNum('Lowest voltage its loads need', 'V', U.V, 0, 1000, null
 });
 
 export const TOPOLOGIES = [['bridge', 'Bridge (4 diodes)'], ['centre-tap', 'Centre-tap (2 diodes)'], ['half-wave', 'Half-wave (1 diode)']] as const;
+
+/** IEC 60127-2 standard sheets of 5 x 20 mm fuse-links. */
+export const FUSE_SHEETS = [
+  ['T3', 'T, time-lag, low breaking (sheet 3)'],
+  ['T5', 'T, time-lag, high breaking (sheet 5)'],
+  ['F2', 'F, quick-acting (sheet 2)'],
+] as const;
 
 export const rectifiedSpec = defineSpec({
   name: 'rectified-rail',
@@ -41,8 +48,21 @@ export const rectifiedSpec = defineSpec({
     marginV: num('Headroom margin', 'V', U.V, 0, 100, 0.5, { form: 'margin', help: 'extra above what regulators need' }),
     fuseA: optNum('Fitted rail fuse', 'A', U.A, 0, 63, null, { form: 'fuse', exclusiveMin: true, help: 'empty = recommend one' }),
     minimumV,
+    windingFuseA: optNum('Fitted winding fuse', 'A', U.A, 0, 63, null, {
+      form: 'windingFuse',
+      exclusiveMin: true,
+      help: 'in the winding lead, before the rectifier; empty = recommend one',
+    }),
+    windingFuseSheet: choice('Winding fuse type', FUSE_SHEETS, 'T3', { form: 'windingFuseSheet' }),
+    bleederRatedW: optNum('Bleeder power rating', 'W', U.W, 0, 1000, null, {
+      form: 'bleederW',
+      exclusiveMin: true,
+      help: 'empty = not stated',
+      example: '1',
+    }),
   },
 });
+
 
 export const REGULATOR_METHODS = [
   ['fixed', 'Fixed output'],
@@ -106,6 +126,17 @@ export const regulatedSpec = defineSpec({
     'mount.thetaCsKPerW': optNum('θcs', 'K/W', U.KW, 0, 100, null, { form: 'thetaCs' }),
     'mount.thetaSaKPerW': optNum('Heatsink θsa', 'K/W', U.KW, 0, 1000, null, { form: 'thetaSa', exclusiveMin: true, help: 'empty = compute needed' }),
     'mount.tjMaxC': optNum('Tj max', '°C', U.C, 50, 250, null, { form: 'tjMax' }),
+    rippleRejectionDb: optNum('Ripple rejection', 'dB', U.dB, 0, 140, null, {
+      form: 'psrr',
+      help: 'datasheet minimum at 100/120 Hz; empty = not stated',
+      example: '62',
+    }),
+    rippleTargetV: optNum('Output ripple target', 'V', { symbol: 'mV p-p', scale: 1e-3 }, 0, 10, null, {
+      form: 'rippleOut',
+      exclusiveMin: true,
+      help: 'e.g. a receiver rail; empty = none',
+      example: '1',
+    }),
   },
   refine: (v) => {
     const errors: FieldError[] = [];
@@ -165,7 +196,16 @@ export const batterySpec = defineSpec({
 export const RAIL_SPECS: Record<Rail['kind'], Spec> = { rectified: rectifiedSpec, regulated: regulatedSpec, battery: batterySpec };
 
 /** A rail as stored before `minimumV` existed (old database rows, old files) reads as "not stated". */
+/** Rails stored before the winding fuse, bleeder rating and ripple fields existed read them as not stated (fuse type T3). */
 export function withRailDefaults(r: Rail): Rail {
-  if (r.kind === 'regulated') return r;
-  return { ...r, minimumV: (r as { minimumV?: number | null }).minimumV ?? null };
+  const old = r as unknown as Partial<Record<string, unknown>>;
+  if (r.kind === 'regulated') return { ...r, rippleRejectionDb: r.rippleRejectionDb ?? null, rippleTargetV: r.rippleTargetV ?? null };
+  const base = { ...r, minimumV: (old.minimumV as number | null | undefined) ?? null };
+  if (base.kind === 'battery') return base;
+  return {
+    ...base,
+    windingFuseA: (old.windingFuseA as number | null | undefined) ?? null,
+    windingFuseSheet: (old.windingFuseSheet as RectifiedRail['windingFuseSheet'] | undefined) ?? 'T3',
+    bleederRatedW: (old.bleederRatedW as number | null | undefined) ?? null,
+  };
 }

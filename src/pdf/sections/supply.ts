@@ -1,6 +1,6 @@
 // Supply design summary: transformer, reservoirs, fuses, bleeders, regulators, heatsinks, battery runtime,
 // the rectifier waveform plot, and the supply's findings. Reads the supply report only.
-import type { SupplyReport, RectifiedRailReport, RegulatedRailReport, BatteryRailReport } from '../../core/power/report-types';
+import type { SupplyReport, RectifiedRailReport, RegulatedRailReport, BatteryRailReport, FaultCheck } from '../../core/power/report-types';
 import { GREY, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
 import { findingsList, fv, keyValues, notComputed } from './common';
@@ -17,7 +17,10 @@ export function supplySection(l: Layout, supply: SupplyReport | null): void {
   }
   if (supply.primary) {
     const f = supply.primary.fuse;
-    keyValues(l, [['Primary fuse', `${f.ratedA !== null ? fv(f.ratedA, 'A') : 'beyond the series'} ${f.characteristic} (load ${fv(f.loadA, 'A')} × ${f.factor})${supply.primary.fittedA !== null ? `; fitted ${fv(supply.primary.fittedA, 'A')}` : ''}`]]);
+    keyValues(l, [
+      ['Primary fuse', `${f.ratedA !== null ? fv(f.ratedA, 'A') : 'beyond the series'} ${f.characteristic} (load ${fv(f.loadA, 'A')} × ${f.factor})${supply.primary.fittedA !== null ? `; fitted ${fv(supply.primary.fittedA, 'A')}` : ''}`],
+      ...supply.primary.faultChecks.map((c): [string, string] => [`${c.windingName} fault`, `${fv(c.reflectedA, 'A')} on the primary, ${c.check.multiple.toFixed(1)} × In: ${clearWords(c.check)}`]),
+    ]);
   }
   for (const r of supply.rails) {
     if (r.kind === 'rectified') rectified(l, r);
@@ -26,6 +29,12 @@ export function supplySection(l: Layout, supply: SupplyReport | null): void {
   }
   l.heading('All supply findings', 2);
   findingsList(l, supply.findings);
+}
+
+/** A fault check in words (IEC 60127-2 latest pre-arcing time against the time wanted). */
+function clearWords(c: FaultCheck): string {
+  if (c.latestS === null) return 'below 2.1 × In, IEC 60127-2 guarantees no time: may never clear';
+  return `IEC 60127-2 ${c.sheet}: within ${fv(c.latestS, 's')} at most (${c.clears ? 'in time' : `wanted ${fv(c.allowedS, 's')}`})`;
 }
 
 function recommendations(l: Layout, r: { recommendations: { topic: string; text: string; reasoning: string }[] }): void {
@@ -44,6 +53,7 @@ function rectified(l: Layout, r: RectifiedRailReport): void {
   const b = r.bleeder;
   keyValues(l, [
     ['Reservoir', `${fv(res.fittedF, 'F')} fitted${res.minimumF !== null ? `; ${fv(res.minimumF, 'F')} needed (${fv(res.standardF, 'F')} standard)` : ''}; rated ≥ ${fv(res.recommendedRatedV, 'V')} (peak ${fv(res.noLoadPeakHighV, 'V')}); ripple current ${fv(res.thermalRippleA, 'A')} RMS (${fv(res.tuneUpRippleA, 'A')} tune-up)`],
+    ...(r.windingFuse?.check ? ([['Winding fuse', `${r.windingFuse.fittedA !== null ? `${fv(r.windingFuse.fittedA, 'A')} ${r.windingFuse.sheet} fitted` : `none fitted; T${fv(r.windingFuse.fuse.ratedA, 'A')} recommended`} before the rectifier; shorted reservoir ${fv(r.windingFuse.outputShortLowA, 'A')} (low mains), ${r.windingFuse.check.multiple.toFixed(1)} × In: ${clearWords(r.windingFuse.check)}`]] as [string, string][]) : []),
     ['Rail fuse', `${r.fuse.ratedA !== null ? fv(r.fuse.ratedA, 'A') : 'beyond the series'} ${r.fuse.characteristic} (load ${fv(r.fuse.loadA, 'A')} × ${r.fuse.factor})`],
     ['Bleeder', `${b.fittedOhm !== null ? `${fv(b.fittedOhm, 'Ω')} fitted: ${b.fittedTimeS !== null ? `below ${fv(b.thresholdV, 'V')} in ${fv(b.fittedTimeS, 's')}` : `the rail starts below ${fv(b.thresholdV, 'V')}`}` : 'none fitted'}; suggested ${fv(b.suggestedOhm, 'Ω')} ${b.suggestedW !== null ? `(${fv(b.suggestedW, 'W')})` : ''}; stored ${fv(b.storedJ, 'J')}`],
     ...(r.winding ? ([['Winding', `${fv(r.winding.standardRatedV, 'V')} ${fv(r.winding.ratedA, 'A')} (peak ${fv(r.winding.peakA, 'A')})`]] as [string, string][]) : []),

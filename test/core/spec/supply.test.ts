@@ -2,7 +2,7 @@
 // back unchanged; bare numbers are read in the display unit; the cross-field rules name their field. Expected values
 // are worked by hand from the inputs written here (no number comes from running the program).
 import { describe, expect, it } from 'vitest';
-import { formValues, parseForm, pick, validate } from '../../../src/core/spec/derive';
+import { defaults, formValues, parseForm, pick, validate } from '../../../src/core/spec/derive';
 import { primaryFuseSpec, transformerSpec, windingSpec } from '../../../src/core/spec/supply';
 import { RAIL_SPECS, batterySpec, rectifiedSpec, regulatedSpec, withRailDefaults } from '../../../src/core/spec/supply-rails';
 import type { Spec } from '../../../src/core/spec/field';
@@ -81,6 +81,20 @@ describe('battery rail', () => {
     const r = parseForm(batterySpec, { ...formValues(batterySpec, bat), endV: '14.4', fullV: '14.4' });
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.errors.endV).toContain('below the full-charge voltage');
+  });
+  it('a stored rectified rail without the winding fuse and bleeder rating (written before they existed) reads them as not stated, fuse type T3', () => {
+    const old = { kind: 'rectified', id: 'r', name: 'Raw', windingId: 'w', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0047, esrOhm: 0.04, bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0, fuseA: null, minimumV: null };
+    const read = withRailDefaults(old as unknown as Rail);
+    expect(read).toEqual({ ...old, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: null });
+    expect(validate(rectifiedSpec, read)).toEqual([]);
+  });
+  it('a winding fuse of 0 A and a ripple rejection of 200 dB are refused naming their fields', () => {
+    const rec = parseForm(rectifiedSpec, { ...formValues(rectifiedSpec, defaults(rectifiedSpec)), windingFuse: '0' });
+    expect(rec.ok).toBe(false);
+    if (!rec.ok) expect(rec.errors.windingFuse).toContain('Fitted winding fuse');
+    const reg = parseForm(regulatedSpec, { ...formValues(regulatedSpec, defaults(regulatedSpec)), psrr: '200' });
+    expect(reg.ok).toBe(false);
+    if (!reg.ok) expect(reg.errors.psrr).toContain('Ripple rejection');
   });
   it('a stored battery without minimumV (written before it existed) reads as not stated', () => {
     const { minimumV: _m, ...old } = bat as Extract<Rail, { kind: 'battery' }>;
