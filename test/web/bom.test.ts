@@ -158,4 +158,28 @@ describe('CSV export and import', () => {
     expect(after.parts).toHaveLength(before.parts.length);
     expect(after.bom.at(-1)!.partId).toBe('p-bleed');
   });
+
+  it('importing its own export: totals rows ignored, stages kept, the lines already there merged or skipped, never doubled', async () => {
+    const before = await stored();
+    const csv = await (await t.app.request(`http://localhost/projects/${ID}/bom.csv`)).text();
+    const preview = await upload({ version: String(before.version), stageId: '' }, csv);
+    expect(preview.status).toBe(200);
+    const html = await preview.text();
+    expect(html).toContain('<strong>0 refused</strong>');
+    expect(html).toContain('4 totals row(s)');
+    expect(html).toContain(`${before.bom.length} line(s) of the file are already in the parts list`);
+
+    const fields = { version: String(before.version), stageId: '', csv, fileName: 'list.csv', action: 'import' };
+    const unchosen = await post(`${base}/import`, fields);
+    expect(unchosen.status).toBe(422);
+    expect(await unchosen.text()).toContain('Choose whether to merge them');
+    expect(await stored()).toEqual(before);
+
+    const skip = await post(`${base}/import`, { ...fields, duplicates: 'skip' });
+    expect(skip.status).toBe(303);
+    expect(skip.headers.get('location')).toContain(`lines=0&parts=0&skipped=0&kept=${before.bom.length}&totals=4`);
+    const after = await stored();
+    expect(after.bom).toEqual(before.bom);
+    expect(costProject(after).totals).toEqual(costProject(before).totals);
+  });
 });

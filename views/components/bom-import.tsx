@@ -44,12 +44,16 @@ export interface ImportPreviewProps {
   stageId: string;
   decimal: '.' | ',';
   takeGoodRows: boolean;
+  /** What to do with lines already in the list; '' = not chosen yet. */
+  duplicates: '' | 'merge' | 'skip';
+  /** Good rows that match a line already in the list (same part, stage and designators). */
+  existingLines: number;
   preview: ImportPreview;
   /** Why the last Import press saved nothing (or the version conflict). */
   message?: string;
 }
 
-export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileName, stageId, decimal, takeGoodRows, preview, message }) => {
+export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileName, stageId, decimal, takeGoodRows, duplicates, existingLines, preview, message }) => {
   const colOptions: [string, string][] = [['', '(not imported)'], ...preview.headers.map((h, i): [string, string] => [String(i), `Column ${i + 1}: ${h || '(no header)'}`])];
   const blocked = preview.fileErrors.length > 0;
   return (
@@ -62,6 +66,7 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
       ) : null}
       <p class="summary-line">
         {preview.rows.length} data row(s): <strong>{preview.validRows} good</strong>, <strong>{preview.invalidRows} refused</strong>. Separator “{preview.delimiter === '\t' ? 'tab' : preview.delimiter}”. Nothing has been saved yet.
+        {preview.totalsRows.length ? ` ${preview.totalsRows.length} totals row(s) (rows ${preview.totalsRows.join(', ')}) are recognised and ignored.` : ''}
       </p>
       {preview.fileErrors.length ? (
         <div class="form-errors" role="alert">
@@ -115,6 +120,21 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
             </select>
           </label>
         </div>
+        {existingLines > 0 ? (
+          <fieldset class="row duplicates">
+            <legend>
+              {existingLines} line(s) of the file are already in the parts list (same part, stage and designators)
+            </legend>
+            <label class="field check" for="imp-dup-merge">
+              <input id="imp-dup-merge" type="radio" name="duplicates" value="merge" checked={duplicates === 'merge'} />
+              <span class="label">Merge: those lines take the file's quantities</span>
+            </label>
+            <label class="field check" for="imp-dup-skip">
+              <input id="imp-dup-skip" type="radio" name="duplicates" value="skip" checked={duplicates === 'skip'} />
+              <span class="label">Skip: leave those lines as they are</span>
+            </label>
+          </fieldset>
+        ) : null}
         <div class="row">
           <button type="submit" name="action" value="preview">
             Update the preview

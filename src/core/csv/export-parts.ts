@@ -10,7 +10,7 @@ export interface PartsCsvOptions {
   bom?: boolean;
   /** "," (default, numbers with a decimal point) or ";" (numbers with a decimal comma, for spreadsheets so set). */
   delimiter?: ',' | ';';
-  /** Append total rows (parts, shipping, build, per kit). Default true. Import reports them as bad rows. */
+  /** Append total rows (parts, shipping, build, per kit). Default true. Import recognises and skips them. */
   includeTotals?: boolean;
 }
 

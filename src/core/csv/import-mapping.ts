@@ -2,7 +2,7 @@
 // text; the user can override any field.
 
 export const IMPORT_FIELDS = [
-  'refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency',
+  'refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency', 'stage',
 ] as const;
 export type ImportField = (typeof IMPORT_FIELDS)[number];
 
@@ -16,6 +16,7 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
   sku: 'Supplier order code (SKU)',
   price: 'Unit price',
   currency: 'Currency',
+  stage: 'Stage',
 };
 
 /** Column index (0-based) per field, null = not imported. */
@@ -34,6 +35,7 @@ const EXACT: Record<ImportField, string[]> = {
     'catalog number', 'catalogue number', 'cat no', 'article', 'article number', 'stock code', 'pn'],
   price: ['price', 'unit price', 'price each', 'each', 'unit cost', 'cost each', 'price per unit'],
   currency: ['currency', 'cur', 'ccy'],
+  stage: ['stage', 'stage name', 'module', 'board'],
 };
 
 // Single words that identify a field anywhere in a header, for headers no exact synonym took.
@@ -47,6 +49,7 @@ const WORDS: Record<ImportField, string[]> = {
   sku: ['sku'],
   price: ['price'],
   currency: ['currency'],
+  stage: ['stage'],
 };
 
 /** Lower case, accents and punctuation dropped, single spaces: "Qty./Rig" -> "qty rig". */

@@ -39,7 +39,8 @@ export type IdKind = 'part' | 'offer' | 'line';
 /**
  * Rows to parts (with offers) and, for a parts list, BOM lines. Rows describing the same part
  * (same description, value and category, case-insensitive) share one Part; each supplier + SKU pair
- * becomes one Offer with a single price break at 1 piece (minimum order 1, multiple 1).
+ * becomes one Offer with a single price break at 1 piece (minimum order 1, multiple 1). A line takes the stage
+ * of its row's stage column when one is given, otherwise `opts.stageId`.
  */
 export function rowsToProjectData(
   rows: readonly ImportedRow[],
@@ -77,7 +78,8 @@ export function rowsToProjectData(
       p.offers.push(offer);
     }
     if (opts.asBomLines && r.quantity !== null) {
-      bom.push({ id: opts.makeId('line', n), stageId: opts.stageId, partId: p.id, qtyPerRig: r.quantity, refs: r.refs, notes: '' });
+      const stageId = r.stage !== '' ? r.stageId : opts.stageId;
+      bom.push({ id: opts.makeId('line', n), stageId, partId: p.id, qtyPerRig: r.quantity, refs: r.refs, notes: '' });
     }
   });
   return { parts, bom };

@@ -36,7 +36,18 @@ export interface ImportOptions {
   delimiter?: ',' | ';' | '\t';
   /** Column choices; guessed from the headers when absent. */
   mapping?: ColumnMapping;
+  /** The project's stages, to read a stage column by name ("General" = no stage). */
+  stages?: readonly { id: string; name: string }[];
 }
+
+/** Stage name the parts-list export writes for lines with no stage. */
+export const NO_STAGE_NAME = 'General';
+
+/**
+ * A totals row of the program's own export (or a spreadsheet's): no description, value, designators, quantity,
+ * supplier or SKU, and its first filled cell starts with "Total" or "Per kit". It is skipped, not refused.
+ */
+const TOTALS_LABEL = /^(total|totals|subtotal|per kit)\b/i;
 
 export interface RowError {
   /** Record number as a spreadsheet shows it: header = 1, first data row = 2. 0 = the whole file. */
@@ -58,6 +69,10 @@ export interface ImportValues {
   /** Unit price in minor units of `currency`; null when no price column or empty in a parts list. */
   priceCents: number | null;
   currency: string | null;
+  /** Stage name as written in the stage column ('' = none given: the stage chosen on the form is used). */
+  stage: string;
+  /** The stage that name resolves to (null = General); meaningful only when `stage` is not ''. */
+  stageId: string | null;
 }
 
 export interface PreviewRow {
@@ -75,6 +90,8 @@ export interface ImportPreview {
   rows: PreviewRow[];
   /** Problems with the file or the mapping; they block the import. */
   fileErrors: RowError[];
+  /** Row numbers recognised as totals rows and skipped. */
+  totalsRows: number[];
   validRows: number;
   invalidRows: number;
 }
@@ -102,12 +119,22 @@ export function previewImport(text: string, options: ImportOptions): ImportPrevi
   else fileErrors.push(...requiredFieldErrors(options.kind, mapping));
 
   const rows: PreviewRow[] = [];
+  const totalsRows: number[] = [];
   parsed.records.slice(1).forEach((cells, k) => {
     if (cells.every((c) => c.trim() === '')) return; // blank lines are not rows
-    rows.push(previewRow(k + 2, cells, headers, mapping, options, decimal));
+    if (isTotalsRow(cells, mapping)) totalsRows.push(k + 2);
+    else rows.push(previewRow(k + 2, cells, headers, mapping, options, decimal));
   });
   const invalidRows = rows.filter((r) => r.errors.length > 0).length;
-  return { kind: options.kind, headers, mapping, delimiter, rows, fileErrors, validRows: rows.length - invalidRows, invalidRows };
+  return { kind: options.kind, headers, mapping, delimiter, rows, fileErrors, totalsRows, validRows: rows.length - invalidRows, invalidRows };
+}
+
+function isTotalsRow(cells: readonly string[], m: ColumnMapping): boolean {
+  const cell = (f: ImportField) => (m[f] === null ? '' : (cells[m[f]!] ?? '').trim());
+  const itemFields: ImportField[] = ['description', 'value', 'refs', 'quantity', 'supplier', 'sku'];
+  if (itemFields.some((f) => cell(f) !== '')) return false;
+  const first = cells.find((c) => c.trim() !== '');
+  return first !== undefined && TOTALS_LABEL.test(unneutraliseText(first).trim());
 }
 
 function previewRow(
@@ -128,7 +155,17 @@ function previewRow(
   const v: ImportValues = {
     refs: get('refs'), value: get('value'), description: get('description'), category: get('category'),
     quantity: null, supplier: get('supplier'), sku: get('sku'), priceCents: null, currency: null,
+    stage: get('stage'), stageId: null,
   };
+  if (v.stage !== '') {
+    const key = v.stage.toLowerCase();
+    const found = (opts.stages ?? []).find((s) => s.name.trim().toLowerCase() === key);
+    if (found !== undefined) v.stageId = found.id;
+    else if (key !== NO_STAGE_NAME.toLowerCase()) {
+      const names = (opts.stages ?? []).map((s) => `"${s.name}"`).join(', ');
+      err('stage', `"${v.stage}" is not a stage of this project (stages: ${names || 'none'}; "${NO_STAGE_NAME}" = no stage).`);
+    }
+  }
   if (v.description === '' && v.value === '') err(m.description !== null ? 'description' : 'value', 'Needs a description or a value.');
   for (const [f, field] of Object.entries(CELL_FIELDS) as [ImportField, Field][]) {
     const problem = v[f as keyof ImportValues] === '' ? '' : storedProblem(field, v[f as keyof ImportValues]);

@@ -32,14 +32,30 @@ const partKey = (p: Part) => [p.description, valueOf(p), p.category].map((x) => 
 const sameOffer = (a: { supplier: string; sku: string }, b: { supplier: string; sku: string }) =>
   a.supplier.trim().toLowerCase() === b.supplier.trim().toLowerCase() && a.sku === b.sku;
 
+/** What to do with an imported line whose part and stage already have a line in the list. */
+export type DuplicateMode = 'merge' | 'skip';
+
+export interface MergeStats {
+  newParts: number;
+  reusedParts: number;
+  /** Lines added to the list. */
+  added: number;
+  /** Imported lines that matched an existing line: updated from the file (merge) or left out (skip). */
+  matched: number;
+}
+
 /**
  * Add imported parts and lines to the project. An imported part equal to a catalog part (same description,
  * value and category, ignoring case) is not added again: its new supplier offers join the catalog part.
+ * An imported line "already exists" when the list has a line of the same part, stage and designators (spaces and
+ * case ignored; each existing line matches one imported line at most). `merge` sets that line's quantity from the
+ * file; `skip` leaves it as it is. Either way the line is not added a second time.
  */
 export function mergeImport(
   p: Project,
   data: { parts: Part[]; bom: BomLine[] },
-): { project: Project; newParts: number; reusedParts: number } {
+  duplicates: DuplicateMode,
+): { project: Project } & MergeStats {
   const byKey = new Map(p.parts.map((x) => [partKey(x), x.id]));
   const idMap = new Map<string, string>();
   let parts = [...p.parts];
@@ -57,6 +73,28 @@ export function mergeImport(
     const fresh = (x: Part) => imported.offers.filter((o) => !x.offers.some((e) => sameOffer(e, o)));
     parts = parts.map((x) => (x.id !== existing ? x : { ...x, offers: [...x.offers, ...fresh(x)] }));
   }
-  const bom = [...p.bom, ...data.bom.map((l) => ({ ...l, partId: idMap.get(l.partId) ?? l.partId }))];
-  return { project: { ...p, parts, bom }, newParts, reusedParts: data.parts.length - newParts };
+  const bom = [...p.bom];
+  const taken = new Set<string>();
+  let added = 0;
+  let matched = 0;
+  for (const raw of data.bom) {
+    const l = { ...raw, partId: idMap.get(raw.partId) ?? raw.partId };
+    const hit = p.bom.find(
+      (e) => !taken.has(e.id) && e.partId === l.partId && e.stageId === l.stageId && normRefs(e.refs) === normRefs(l.refs),
+    );
+    if (hit === undefined) {
+      bom.push(l);
+      added++;
+      continue;
+    }
+    taken.add(hit.id);
+    matched++;
+    if (duplicates === 'merge') {
+      const k = bom.findIndex((e) => e.id === hit.id);
+      bom[k] = { ...bom[k], qtyPerRig: l.qtyPerRig };
+    }
+  }
+  return { project: { ...p, parts, bom }, newParts, reusedParts: data.parts.length - newParts, added, matched };
 }
+
+const normRefs = (r: string) => r.replace(/\s+/g, '').toLowerCase();

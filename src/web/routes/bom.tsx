@@ -3,7 +3,7 @@ import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Project } from '../../core/model';
 import { costProject } from '../../core/cost';
-import { costReportToCsv, planImport, previewImport, rowsToProjectData, guessDelimiter, parseCsv, guessMapping } from '../../core/csv';
+import { costReportToCsv, planImport, previewImport, rowsToProjectData, guessDelimiter, parseCsv, guessMapping, type IdKind } from '../../core/csv';
 import { loadProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
 import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
@@ -33,6 +33,8 @@ export function bomPage(project: Project, failed?: Failed, notice?: string) {
 
 type ImportState = Omit<ImportPreviewProps, 'project' | 'preview' | 'message'> & { values: Record<string, string> };
 
+const importIds = (kind: IdKind) => newId(kind === 'part' ? 'p' : kind === 'offer' ? 'o' : 'b');
+
 /** Read the import request: an uploaded file (first step) or the CSV text carried by the preview form. */
 async function readImport(c: Context): Promise<ImportState | { error: string; status: 413 | 422 }> {
   const form = await c.req.parseBody();
@@ -47,7 +49,8 @@ async function readImport(c: Context): Promise<ImportState | { error: string; st
     fileName = file.name;
   }
   if (csv.trim() === '') return { error: 'No file was chosen (or it is empty): choose a CSV file and press Preview.', status: 422 };
-  return { values, csv, fileName, stageId: values.stageId ?? '', decimal: values.decimal === ',' ? ',' : '.', takeGoodRows: values.takeGoodRows === 'true' };
+  const duplicates = values.duplicates === 'merge' || values.duplicates === 'skip' ? values.duplicates : '';
+  return { values, csv, fileName, stageId: values.stageId ?? '', decimal: values.decimal === ',' ? ',' : '.', takeGoodRows: values.takeGoodRows === 'true', duplicates, existingLines: 0 };
 }
 
 export function bomRoutes(deps: Deps) {
@@ -59,8 +62,13 @@ export function bomRoutes(deps: Deps) {
     const project = await loadProject(deps.database.db, c.req.param('id'));
     if (!project) return c.notFound();
     const q = c.req.query();
-    const notice =
-      q.done === 'deleted' || q.done === 'saved' ? doneNotice(c) : q.done === 'imported' ? `Imported ${Number(q.lines) || 0} line(s); ${Number(q.parts) || 0} new catalog part(s); ${Number(q.skipped) || 0} refused row(s) skipped.` : undefined;
+    const n = (k: string) => Number(q[k]) || 0;
+    const imported = () =>
+      `Imported ${n('lines')} line(s); ${n('parts')} new catalog part(s); ${n('skipped')} refused row(s) skipped` +
+      (n('merged') ? `; ${n('merged')} line(s) already in the list took the file's quantities` : '') +
+      (n('kept') ? `; ${n('kept')} line(s) already in the list were left as they were` : '') +
+      (n('totals') ? `; ${n('totals')} totals row(s) ignored` : '') + '.';
+    const notice = q.done === 'deleted' || q.done === 'saved' ? doneNotice(c) : q.done === 'imported' ? imported() : undefined;
     return sendPage(c, bomPage(project, undefined, notice));
   });
 
@@ -108,14 +116,18 @@ export function bomRoutes(deps: Deps) {
     const delimiter = guessDelimiter(state.csv);
     const headers = (parseCsv(state.csv, delimiter).records[0] ?? []).map((h) => h.trim());
     const mapping = mappingFrom(values, guessMapping(headers), headers.length);
-    const preview = previewImport(state.csv, { kind: 'parts-list', defaultCurrency: project.currency, decimal: state.decimal, delimiter, mapping });
+    const preview = previewImport(state.csv, { kind: 'parts-list', defaultCurrency: project.currency, decimal: state.decimal, delimiter, mapping, stages: project.stages });
+    const stageId = state.stageId === '' ? null : state.stageId;
+    const plan = planImport(preview, { takeGoodRows: state.takeGoodRows });
+    // Lines of the file already in the list (same part, stage and designators): the user chooses merge or skip.
+    const existing = (p: Project) =>
+      plan.ok ? mergeImport(p, rowsToProjectData(plan.rows, { makeId: importIds, stageId, asBomLines: true }), 'skip').matched : 0;
+    state.existingLines = existing(project);
     const show = (p: Project, status: 200 | 409 | 422, message?: string) =>
       sendPage(c, <Layout title={`Import preview · ${p.name}`} project={p} section="bom"><ImportPreviewBody project={p} preview={preview} message={message} {...state} /></Layout>, status);
     if (values.action !== 'import') return show(project, 200);
 
-    const stageId = state.stageId === '' ? null : state.stageId;
     if (stageId !== null && !project.stages.some((s) => s.id === stageId)) return show(project, 422, 'The chosen stage no longer exists; choose another.');
-    const plan = planImport(preview, { takeGoodRows: state.takeGoodRows });
     if (!plan.ok) {
       const refused = preview.invalidRows;
       const why = preview.fileErrors.length ? 'the file or the column choices have problems (listed above)' : `${refused} row(s) are refused`;
@@ -123,23 +135,29 @@ export function bomRoutes(deps: Deps) {
     }
     const version = versionField.safeParse(values.version);
     if (!version.success) return show(project, 422, 'The form had no version number; reload the page.');
-    const data = rowsToProjectData(plan.rows, { makeId: (kind) => newId(kind === 'part' ? 'p' : kind === 'offer' ? 'o' : 'b'), stageId, asBomLines: true });
-    let stats = { newParts: 0 };
+    if (state.existingLines > 0 && state.duplicates === '') {
+      return show(project, 422, `Nothing was imported: ${state.existingLines} line(s) of the file are already in the parts list. Choose whether to merge them (take the file's quantities) or skip them.`);
+    }
+    const duplicates = state.duplicates === '' ? 'skip' : state.duplicates;
+    const data = rowsToProjectData(plan.rows, { makeId: importIds, stageId, asBomLines: true });
+    let stats = { newParts: 0, added: 0, matched: 0 };
     try {
       await updateProject(deps.database, id, version.data, (p) => {
-        const merged = mergeImport(p, data);
+        const merged = mergeImport(p, data, duplicates);
         stats = merged;
         return merged.project;
       }, deps.now().toISOString());
     } catch (e) {
       if (e instanceof VersionConflict) {
         const fresh = (await loadProject(deps.database.db, id)) ?? project;
+        state.existingLines = existing(fresh);
         return show(fresh, 409, 'Not imported: this project was changed in another tab or window since the preview was made. The preview now uses the stored project; press Import again to add the rows to it.');
       }
       if (e instanceof NotFound) return c.notFound();
       throw e;
     }
-    return c.redirect(`${pageUrl(project)}?done=imported&lines=${data.bom.length}&parts=${stats.newParts}&skipped=${new Set(plan.skipped.map((e) => e.row)).size}`, 303);
+    const done = `done=imported&lines=${stats.added}&parts=${stats.newParts}&skipped=${new Set(plan.skipped.map((e) => e.row)).size}`;
+    return c.redirect(`${pageUrl(project)}?${done}&${duplicates === 'merge' ? 'merged' : 'kept'}=${stats.matched}&totals=${preview.totalsRows.length}`, 303);
   });
 
   return app;

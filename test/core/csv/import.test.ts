@@ -100,8 +100,8 @@ describe('costed parts list: export then import round trip', () => {
     expect(parseCsv(csv).records.flat().some((c) => /^[=+\-@]/.test(c))).toBe(false);
   });
 
-  it('import gives back descriptions, values, refs, quantities, suppliers, SKUs, prices and currencies', () => {
-    const preview = previewImport(csv, { kind: 'parts-list', defaultCurrency: 'USD' });
+  it('import gives back descriptions, values, refs, quantities, suppliers, SKUs, prices, currencies and stages', () => {
+    const preview = previewImport(csv, { kind: 'parts-list', defaultCurrency: 'USD', stages: p.stages });
     const plan = planImport(preview);
     expect(plan.ok).toBe(true);
     if (!plan.ok) return;
@@ -110,6 +110,16 @@ describe('costed parts list: export then import round trip', () => {
     expect(plan.rows.map((r) => [r.supplier, r.sku, r.priceCents, r.currency])).toEqual(
       names.map((_, i) => [i % 2 ? 'Bravo, Ltd' : 'Alpha', i === 1 ? '-5' : `SKU "${i}"`, 123 + i, i % 2 ? 'EUR' : 'USD']),
     );
+    // Lines 0-2 were on stage "PA, push-pull" (s1), the rest on General (no stage).
+    expect(plan.rows.map((r) => [r.stage, r.stageId])).toEqual(names.map((_, i) => (i < 3 ? ['PA, push-pull', 's1'] : ['General', null])));
+  });
+
+  it('a stage name the project does not have is refused with its row and the stages named', () => {
+    const preview = previewImport(csv, { kind: 'parts-list', defaultCurrency: 'USD', stages: [] });
+    expect(preview.rows[0].errors).toEqual([
+      { row: 2, column: 'Stage', message: '"PA, push-pull" is not a stage of this project (stages: none; "General" = no stage).' },
+    ]);
+    expect(preview.rows[3].errors).toEqual([]);
   });
 
   it('with totals rows and ";" the totals parse as numbers with a decimal comma', () => {

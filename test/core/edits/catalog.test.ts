@@ -61,7 +61,7 @@ describe('parts list', () => {
       offers: [{ id: 'io1', supplier: 'Coastline Parts', sku: 'CP-1', currency: 'EUR', breaks: [], minOrder: 1, orderMultiple: 1, stockNote: '' }],
     };
     const line = { id: 'ib1', stageId: null, partId: 'imp1', qtyPerRig: 2, refs: 'R9', notes: '' };
-    const r = mergeImport(p, { parts: [imported], bom: [line] });
+    const r = mergeImport(p, { parts: [imported], bom: [line] }, 'skip'); // R9 is a new line: added in either mode
     expect([r.newParts, r.reusedParts]).toEqual([0, 1]);
     expect(r.project.parts).toHaveLength(p.parts.length);
     expect(r.project.parts.find((x) => x.id === 'p-bleed')!.offers.at(-1)).toMatchObject({ supplier: 'Coastline Parts', sku: 'CP-1' });
