@@ -78,6 +78,9 @@ function supplyLines(report: EvaluationReport): string[] {
       const c = r.corners.find((x) => x.id === r.worstVoltageCornerId);
       const fuse = r.fuse.ratedA !== null ? `${r.fuse.characteristic}${formatValue(r.fuse.ratedA, 'A')}` : 'beyond the series';
       out.push(`  ${r.railName}: trough ${formatValue(c?.troughV, 'V')} (${r.requiredMinV > 0 ? `needs ${formatValue(r.requiredMinV, 'V')}` : 'no regulator fed, no minimum stated'}), ripple ${formatValue(c?.ripplePpV, 'V')} p-p, reservoir >= ${formatValue(r.reservoir.recommendedRatedV, 'V')} rated, rail fuse ${fuse}`);
+      const b = r.bleeder;
+      if (b.fittedOhm !== null) out.push(`    bleeder ${formatValue(b.fittedOhm, 'Ω')}: below ${formatValue(b.safeV, 'V')} in ${formatValue(b.fittedTimeS ?? 0, 's')}, ${formatValue(b.fittedW ?? 0, 'W')} at ${formatValue(b.startV, 'V')}${b.ratedW !== null ? ` (rated ${formatValue(b.ratedW, 'W')})` : ''}`);
+      else out.push(`    no bleeder fitted (reservoir up to ${formatValue(b.startV, 'V')})`);
       const wf = r.windingFuse;
       if (wf?.check) {
         const clear = wf.check.latestS === null ? 'not cleared (below 2.1 x In)' : `cleared within ${formatValue(wf.check.latestS, 's')} (IEC 60127-2 ${wf.check.sheet})`;
@@ -110,7 +113,10 @@ function rfLines(report: EvaluationReport): string[] {
     if (st.lpf?.design) out.push(`  ${st.stageName}: ${st.lpf.design.response} order ${st.lpf.design.order}, cutoff ${formatValue(st.lpf.design.cutoffHz, 'Hz', 4)}, loss ${st.lpf.analysis?.atOperating.lossDb.toFixed(2)} dB`);
     if (st.relay) out.push(`  ${st.stageName}: RF ${formatValue(st.relay.rfPeakV, 'V')} peak, ${formatValue(st.relay.rfRmsA, 'A')} RMS at the worst SWR`);
   }
-  for (const h of rf.harmonics?.rows ?? []) out.push(`  Harmonic ${h.n}: ${h.predictedDbc.toFixed(1)} dBc, margin ${h.marginDb.toFixed(1)} dB`);
+  const lvl = (x: number, limited: boolean) => (limited ? 'limited by construction' : `${x.toFixed(1)} dBc`);
+  for (const h of rf.harmonics?.rows ?? []) {
+    out.push(`  Harmonic ${h.n}: ${lvl(h.predictedBestDbc, h.bestLimitedByConstruction)} to ${lvl(h.predictedDbc, h.limitedByConstruction)} at the antenna (judged on the worst end), margin ${h.marginDb.toFixed(1)} dB, ${h.severity}`);
+  }
   if (rf.exposure) out.push(`  RF exposure: keep the public ${formatValue(rf.exposure.generalDistanceM, 'm')} and yourself ${formatValue(rf.exposure.controlledDistanceM, 'm')} from the antenna (far-field estimate)`);
   return out;
 }

@@ -12,6 +12,7 @@ import type {
 import { formatValue as fv } from '../../src/core/units';
 import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
+import { BleederLine } from '../components/supply-bleeder';
 
 const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
 const pct = (x: number) => `${(x * 100).toFixed(0)} %`;
@@ -99,6 +100,7 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
     </table>
     <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
     {rail.windingFuse ? <WindingFuseTable wf={rail.windingFuse} /> : null}
+    <BleederLine b={rail.bleeder} />
     <h4>Findings</h4>
     <FindingList findings={rail.findings} />
     <h4>Recommendations</h4>

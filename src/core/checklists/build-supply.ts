@@ -29,7 +29,7 @@ function mainsItems(project: Project, report: ChecklistReport): ChecklistItem[] 
           const a = wf.fittedA ?? wf.fuse.ratedA!;
           items.push(caution(`${wf.windingName}: the ${wf.fittedA !== null ? 'fitted' : 'recommended'} ${a < 1 ? `${Math.round(a * 1000)} mA` : `${a} A`} fuse goes in the winding lead between the transformer and the rectifier, so a shorted bridge or reservoir blows it; a fuse after the reservoir protects only the wiring beyond it.`));
         }
-        if (r.bleeder.fittedTimeS !== null) items.push(measured(`Switch off and time the discharge: ${rail.name} should fall below ${fmt(r.bleeder.thresholdV, 'V')} within about {v}.`, r.bleeder.fittedTimeS, 's', 'supply: bleeder'));
+        if (r.bleeder.fittedTimeS !== null) items.push(measured(`Switch off and time the discharge: ${rail.name} should fall below ${fmt(r.bleeder.safeV, 'V')} within about {v}.`, r.bleeder.fittedTimeS, 's', 'supply: bleeder'));
       } else {
         items.push(measured(`${rail.name}: expect roughly {v} (supply design not computed).`, railNominalV(rail, project), 'V', 'budget: nominal rail voltage'));
       }

@@ -10,6 +10,11 @@ export const SAFE_DC_V = 60;
 export const SAFE_TIME_S = 5;
 /** For rails already below 60 V: time constant we suggest so the rail is low within a minute. Common practice, no published source. */
 export const LOW_VOLTAGE_TAU_S = 22;
+/** For rails already below 60 V: the voltage their discharge time is measured to (V), low enough that a dropped
+ *  tool no longer sparks. Common practice, no published source (the reference values' low-voltage example uses it). */
+export const LOW_SAFE_V = 5;
+/** A bleeder should dissipate at most this fraction of its power rating. Common practice, no published source. */
+export const BLEEDER_DERATING = 0.5;
 
 /** Smallest capacitance a bleeder is sized for, F. Common practice, no published source: below 1 nF nothing to bleed. */
 const MIN_RESERVOIR_F = 1e-9;
@@ -31,7 +36,7 @@ export function maxBleederOhm(capacitanceF: number, startV: number, safeV: numbe
   return Number.isFinite(r) ? r : null;
 }
 
-export function bleederReport(capacitanceF: number, startV: number, esrOhm: number, fittedOhm: number | null): BleederReport {
+export function bleederReport(capacitanceF: number, startV: number, esrOhm: number, fittedOhm: number | null, ratedW: number | null = null): BleederReport {
   const v0 = Number.isFinite(startV) ? Math.max(0, startV) : 0;
   const c = Number.isFinite(capacitanceF) ? Math.max(0, capacitanceF) : 0;
   // Source: stored energy of a capacitor, E = C V^2 / 2 (ref §10 low-voltage example)
@@ -50,15 +55,42 @@ export function bleederReport(capacitanceF: number, startV: number, esrOhm: numb
     suggestedOhm = r ? prevInSeries(E12_STEPS, r) : null;
     reasoning = `At ${v0.toFixed(1)} V the rail is already below the ${SAFE_DC_V} V d.c. threshold, but it stores ${storedJ.toFixed(1)} J and can drive about ${shortCircuitA.toFixed(0)} A into a short (a dropped tool sparks and burns). A bleeder with a time constant of about ${LOW_VOLTAGE_TAU_S} s is suggested.`;
   }
+  // Source: Joule heating P = V^2 / R at the highest voltage (reference values §10, P = V0^2 / R)
   const suggestedW = suggestedOhm ? (v0 * v0) / suggestedOhm : null;
-  const fittedTimeS = fittedOhm && fittedOhm > 0 && high ? dischargeTimeS(fittedOhm, c, v0, SAFE_DC_V) : null;
-  return { startV: v0, thresholdV: SAFE_DC_V, allowedS: SAFE_TIME_S, fittedOhm, fittedTimeS, suggestedOhm, suggestedW, storedJ, shortCircuitA, reasoning };
+  const fitted = fittedOhm !== null && fittedOhm > 0 && Number.isFinite(fittedOhm) ? fittedOhm : null;
+  const safeV = high ? SAFE_DC_V : LOW_SAFE_V;
+  const safeSource = high
+    ? `${SAFE_DC_V} V d.c. within ${SAFE_TIME_S} s, by analogy with IEC 60204-1`
+    : `${LOW_SAFE_V} V, where a dropped tool no longer sparks (common practice, no published source)`;
+  const fittedTimeS = fitted !== null ? (v0 > safeV ? dischargeTimeS(fitted, c, v0, safeV) : 0) : null;
+  const fittedW = fitted !== null ? (v0 * v0) / fitted : null;
+  const rated = ratedW !== null && ratedW > 0 && Number.isFinite(ratedW) ? ratedW : null;
+  return { startV: v0, thresholdV: SAFE_DC_V, allowedS: SAFE_TIME_S, safeV, safeSource, fittedOhm, fittedTimeS, fittedW, ratedW: rated, suggestedOhm, suggestedW, storedJ, shortCircuitA, reasoning };
 }
 
 export function bleederFindings(railName: string, b: BleederReport): Finding[] {
+  return [...dischargeFindings(railName, b), ...bleederPowerFindings(railName, b)];
+}
+
+/** The fitted bleeder's dissipation at the highest voltage against its rating derated to BLEEDER_DERATING. */
+export function bleederPowerFindings(railName: string, b: BleederReport): Finding[] {
+  if (b.fittedW === null) return [];
+  const base = { rule: 'bleeder.power', subject: `${railName} bleeder`, value: b.fittedW, unit: 'W', source: 'supply.bleeder-power' as const };
+  const p = `${b.fittedW.toFixed(2)} W at ${b.startV.toFixed(1)} V (no load, high mains)`;
+  if (b.ratedW === null) return [{ ...base, limit: null, severity: 'caution', message: `The bleeder dissipates ${p}; its power rating is not stated: use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];
+  const limit = b.ratedW * BLEEDER_DERATING;
+  if (b.fittedW > b.ratedW) return [{ ...base, limit, severity: 'fail', message: `The bleeder dissipates ${p}, more than its ${b.ratedW} W rating: it will overheat. Use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];
+  if (b.fittedW > limit) return [{ ...base, limit, severity: 'caution', message: `The bleeder dissipates ${p}, over ${Math.round(BLEEDER_DERATING * 100)} % of its ${b.ratedW} W rating: it runs hot. Use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];
+  return [{ ...base, limit, severity: 'ok', message: `The bleeder dissipates ${p}, within ${Math.round(BLEEDER_DERATING * 100)} % of its ${b.ratedW} W rating.` }];
+}
+
+function dischargeFindings(railName: string, b: BleederReport): Finding[] {
   const base = { rule: 'bleeder.discharge', subject: `${railName} reservoir`, source: SOURCE };
   if (b.startV <= b.thresholdV) {
-    return [{ ...base, severity: 'ok', value: b.startV, limit: b.thresholdV, unit: 'V', message: `At most ${b.startV.toFixed(1)} V, below the ${b.thresholdV} V d.c. shock threshold; the ${b.storedJ.toFixed(1)} J stored can still spark and burn, so discharge before working on it.` }];
+    const t = b.fittedTimeS !== null
+      ? ` The fitted bleeder brings it below ${b.safeV} V in ${b.fittedTimeS.toFixed(1)} s.`
+      : ` No bleeder is fitted: it stays charged after switch-off.`;
+    return [{ ...base, severity: 'ok', value: b.startV, limit: b.thresholdV, unit: 'V', message: `At most ${b.startV.toFixed(1)} V, below the ${b.thresholdV} V d.c. shock threshold; the ${b.storedJ.toFixed(1)} J stored can still spark and burn, so discharge before working on it.${t}` }];
   }
   if (b.fittedOhm === null || b.fittedTimeS === null) {
     return [{ ...base, severity: 'fail', value: b.startV, limit: b.thresholdV, unit: 'V', message: `The reservoir holds ${b.startV.toFixed(0)} V after switch-off and has no bleeder; fit one (suggested ${b.suggestedOhm ? (b.suggestedOhm / 1000).toPrecision(2) + ' kΩ' : 'see recommendation'}) and always check with a meter. Follow your local electrical code.` }];

@@ -122,7 +122,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   });
 
   // Bleeder
-  const bleeder = bleederReport(rail.reservoirF, highNoLoad, rail.esrOhm, rail.bleederOhm);
+  const bleeder = bleederReport(rail.reservoirF, highNoLoad, rail.esrOhm, rail.bleederOhm, rail.bleederRatedW ?? null);
   if (winding) findings.push(...bleederFindings(rail.name, bleeder));
   if (bleeder.suggestedOhm !== null) {
     recommendations.push({ topic: 'bleeder', text: `${fmtOhm(bleeder.suggestedOhm)} bleeder, ${bleeder.suggestedW !== null ? fmt(bleeder.suggestedW * 2, 2) : '?'} W rating or more`, reasoning: `${bleeder.reasoning} It dissipates ${fmt(bleeder.suggestedW ?? 0, 2)} W at ${fmt(bleeder.startV, 1)} V; a part rated for twice that runs cool.`, source: 'supply.bleeder' });

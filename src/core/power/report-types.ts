@@ -190,8 +190,16 @@ export interface BleederReport {
   allowedS: number;
   /** Fitted bleeder (Ω), null = none. */
   fittedOhm: number | null;
-  /** Time for the fitted bleeder to bring the reservoir to the threshold (s); null = none fitted / already below. */
+  /** Voltage the discharge time is measured to (V): thresholdV for rails above it, else a low, spark-free level. */
+  safeV: number;
+  /** Where safeV comes from, in words. */
+  safeSource: string;
+  /** Time for the fitted bleeder to bring the reservoir to safeV (s); 0 = starts below it; null = none fitted. */
   fittedTimeS: number | null;
+  /** Dissipation of the fitted bleeder at startV (W), P = V^2 / R; null = none fitted. */
+  fittedW: number | null;
+  /** Fitted bleeder's power rating (W); null = not stated. */
+  ratedW: number | null;
   /** Suggested bleeder (Ω, E12). */
   suggestedOhm: number | null;
   /** Dissipation of the suggested bleeder at startV (W). */

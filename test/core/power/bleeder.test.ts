@@ -37,3 +37,32 @@ describe('ref §10', () => {
     expect(bleederFindings('HV', bleederReport(220e-6, 350, 0.1, null))[0].severity).toBe('fail');
   });
 });
+
+// Bleeder time on every rail and the fitted bleeder's wattage, against reference values §10 worked examples [D]:
+// P = V0² / R; the 50 % derating of its rating is common practice, no published source.
+describe('bleeder on every rail: time to the safe voltage and wattage', () => {
+  const toleranceW = 0.005; // ref prints 2 decimals
+  it('low-voltage rail (25.5 V, 10,000 µF, 2.2 kΩ): timed to 5 V (35.8 s), 25.5² / 2200 = 0.30 W', () => {
+    const b = bleederReport(0.01, 25.5, 0.02, 2200, 1);
+    expect(b.safeV).toBe(5);
+    near(b.fittedTimeS ?? NaN, 35.8, toleranceS, 't to 5 V');
+    near(b.fittedW ?? NaN, 0.2956, toleranceW, 'P');
+    const p = bleederFindings('LV', b).find((f) => f.rule === 'bleeder.power');
+    expect(p?.severity).toBe('ok'); // 0.30 W <= 0.5 x 1 W
+  });
+  it('the same bleeder rated 0.5 W runs above half its rating: caution', () => {
+    const p = bleederFindings('LV', bleederReport(0.01, 25.5, 0.02, 2200, 0.5)).find((f) => f.rule === 'bleeder.power');
+    expect(p?.severity).toBe('caution'); // 0.30 W > 0.25 W
+  });
+  it('350 V rail, 100 kΩ: 350² / 100k = 1.23 W, over a 1 W rating: fail; timed to 60 V (38.8 s)', () => {
+    const b = bleederReport(220e-6, 350, 0.1, 100e3, 1);
+    expect(b.safeV).toBe(60);
+    near(b.fittedW ?? NaN, 1.225, toleranceW, 'P');
+    expect(bleederFindings('HV', b).find((f) => f.rule === 'bleeder.power')?.severity).toBe('fail');
+  });
+  it('no rating stated: a caution asking for twice the dissipation', () => {
+    const p = bleederFindings('LV', bleederReport(0.01, 25.5, 0.02, 2200, null)).find((f) => f.rule === 'bleeder.power');
+    expect(p?.severity).toBe('caution');
+    expect(p?.message).toContain('0.59 W or more'); // 2 x 0.2956 W
+  });
+});
