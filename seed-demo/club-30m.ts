@@ -50,6 +50,11 @@ const stages: Stage[] = [
       mount: { thetaJcKPerW: 1.7, thetaCsKPerW: 1.2, thetaSaKPerW: 2.5, tjMaxC: 150 },
       biasIdleMaxA: 0.05,
       referencePowerW: 5,
+      heatsinkSharedBy: 2,
+      networkLoadOhm: null,
+      conductionAngleDeg: null,
+      imbalanceTypical: null,
+      imbalanceWorst: null,
     },
   },
   {

@@ -113,6 +113,8 @@ export interface Supply {
   transformers: Transformer[];
   rails: Rail[];
   primaryFuseA: number | null; // fitted primary fuse, null = recommend one
+  enclosureAreaM2?: number | null; // enclosure surface that sheds heat, null/absent = not stated
+  enclosureUWPerM2K?: number | null; // its heat transfer coefficient, null/absent = not stated
 }
 
 // ---------------------------------------------------------------- stages

@@ -113,7 +113,10 @@ function rfLines(report: EvaluationReport): string[] {
     if (st.lpf?.design) out.push(`  ${st.stageName}: ${st.lpf.design.response} order ${st.lpf.design.order}, cutoff ${formatValue(st.lpf.design.cutoffHz, 'Hz', 4)}, loss ${st.lpf.analysis?.atOperating.lossDb.toFixed(2)} dB`);
     if (st.relay) out.push(`  ${st.stageName}: RF ${formatValue(st.relay.rfPeakV, 'V')} peak, ${formatValue(st.relay.rfRmsA, 'A')} RMS at the worst SWR`);
   }
-  for (const h of rf.harmonics?.rows ?? []) out.push(`  Harmonic ${h.n}: ${h.predictedDbc.toFixed(1)} dBc, margin ${h.marginDb.toFixed(1)} dB`);
+  const lvl = (x: number, limited: boolean) => (limited ? 'limited by construction' : `${x.toFixed(1)} dBc`);
+  for (const h of rf.harmonics?.rows ?? []) {
+    out.push(`  Harmonic ${h.n}: ${lvl(h.predictedBestDbc, h.bestLimitedByConstruction)} to ${lvl(h.predictedDbc, h.limitedByConstruction)} at the antenna (judged on the worst end), margin ${h.marginDb.toFixed(1)} dB, ${h.severity}`);
+  }
   if (rf.exposure) out.push(`  RF exposure: keep the public ${formatValue(rf.exposure.generalDistanceM, 'm')} and yourself ${formatValue(rf.exposure.controlledDistanceM, 'm')} from the antenna (far-field estimate)`);
   return out;
 }

@@ -10,7 +10,8 @@ import { StandingCautions } from '../components/standing-cautions';
 import type { PaResult } from '../../src/core/rf/pa';
 import type { LpfStageResult, RfReport } from '../../src/core/rf/report';
 import type { RelayResult } from '../../src/core/rf/tr-relay';
-import type { HarmonicBasis } from '../../src/core/rf/harmonics';
+import { CONSTRUCTION_FLOOR_DBC, type HarmonicBasis } from '../../src/core/rf/harmonics';
+import { MIN_DBC } from '../../src/core/rf/pa-spectrum';
 import { formatValue as fv } from '../../src/core/units';
 import { filterPlotSvg } from '../plots/filter-plot';
 import { PaSwrTable } from './pa-swr-table';
@@ -183,8 +184,9 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
       <h3>Harmonics at the antenna</h3>
       <p class="explain">
         Rule: {h.ruleTitle}
-        {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')}. Odd
-        harmonics at the PA from the square-wave series (1/n); even harmonics from the push-pull balance residual (or 1/n single-ended).
+        {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')}. Each
+        harmonic is a band from the PA's class (best to worst); compliance is judged on the worst end, and anything below{' '}
+        {CONSTRUCTION_FLOOR_DBC} dBc at the antenna is limited by construction.
       </p>
       <table class="grid harmonics">
         <thead>
@@ -205,10 +207,10 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
             <tr data-harmonic={x.n}>
               <td class="num">{x.n}</td>
               <td class="num">{fv(x.frequencyHz, 'Hz')}</td>
-              <td class="num">{fv(x.paLevelDbc, 'dBc')}<span class="sub">{BASIS_WORDS[x.paLevelBasis]}</span></td>
+              <td class="num">{band(x.paLevelBestDbc, x.paLevelDbc, false, false)}<span class="sub">{BASIS_WORDS[x.paLevelBasis]}</span></td>
               <td class="num">{fv(x.filterAttenuationDb, 'dB')}</td>
               <td class="num">{fv(x.worstFilterAttenuationDb, 'dB')}</td>
-              <td class="num">{fv(x.predictedDbc, 'dBc')}</td>
+              <td class="num">{band(x.predictedBestDbc, x.predictedDbc, x.bestLimitedByConstruction, x.limitedByConstruction)}</td>
               <td class="num">{fv(x.marginDb, 'dB')}</td>
               <td class="num">{fv(x.worstMarginDb, 'dB')}</td>
               <td><span class={sevClass(x.severity)}>{x.severity}</span></td>
@@ -247,9 +249,22 @@ const Exposure: FC<{ report: RfReport }> = ({ report }) => {
 /** How each PA harmonic level was estimated, in words. */
 const BASIS_WORDS: Record<HarmonicBasis, string> = {
   'square-wave-1/n': 'square wave (1/n)',
-  'rectangular-bound-1/n': 'single-ended bound (1/n)',
-  'balance-residual': 'push-pull residual',
+  'rectangular-50%-1/n': 'single-ended, 50 % duty (1/n)',
+  'balance-residual': 'push-pull residual as entered',
+  'cosine-pulse': 'current pulse, conduction angle',
+  'push-pull-imbalance': 'push-pull imbalance, typical to worst',
+  'saturation-bound': 'clean to saturated',
+  'rectangular-wave': 'rectangular wave, duty band',
+  'class-e-estimate': 'class E as rectangular (pessimistic)',
 };
+
+/** "−62.0 to −38.5 dBc", "limited by construction to −41.0 dBc", or one number when the ends agree. */
+function band(best: number, worst: number, bestLimited: boolean, worstLimited: boolean): string {
+  const one = (x: number, limited: boolean) => (limited ? 'limited by construction' : x <= MIN_DBC ? 'none (ideal)' : fv(x, 'dBc'));
+  if (worstLimited) return 'limited by construction';
+  if (Math.abs(best - worst) < 0.05) return one(worst, false);
+  return `${one(best, bestLimited)} to ${one(worst, false)}`;
+}
 
 export const RfFindings: FC<{ findings: Finding[] }> = ({ findings }) => (
   <>

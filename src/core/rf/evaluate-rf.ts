@@ -8,6 +8,8 @@ import { designLpf } from './lpf-design';
 import { monteCarloLpf } from './lpf-monte-carlo';
 import { validateRfInputs, validateRfSettings } from './lpf-validate';
 import { evaluatePa } from './pa';
+import { paSpectrum } from './pa-spectrum';
+import { spectrumFindings } from './pa-spectrum-findings';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
 import { fieldLabel } from './field-labels';
@@ -86,6 +88,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   // delivers: high mains or a full battery. Common practice, no published source (worst-case design).
   let paStressW = targetPowerW;
   const okFreq = inputErrors.every((e) => e.field !== 'frequencyHz');
+  let paRefused = false;
 
   for (const st of project.stages) {
     if (st.kind === 'final' && st.pa) {
@@ -98,6 +101,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         paStressW = Math.max(pa.outputW, finite(pa.hotOutputW));
       }
       stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });
+      if (st === paStage) paRefused = pa.refused;
       if (st === paStage && pa.refused) {
         // the stress checks below need a power: say that they take the target instead of the PA's (unknown) output
         all.push({ severity: 'caution', rule: 'rf.pa-unknown', subject: st.name, value: targetPowerW, limit: null, unit: 'W', source: 'design.consistency',
@@ -119,7 +123,11 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const topology = paStage?.pa?.topology ?? 'single-ended';
   const evenDbc = Math.min(0, Math.max(-120, finite(project.rf.evenHarmonicDbc, 0)));
   // Amplitude ratio from dBc: 10^(dBc/20) (definition of the decibel for voltages)
-  const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (paHarmonicDbc(topology, evenDbc, n).dbc / 20), 0);
+  // The PA's harmonic bands by class when there is a PA, else the square-wave / entered-residual estimate
+  const spectrum = paStage?.pa && !paRefused ? paSpectrum(paStage.pa) : null;
+  if (spectrum && paStage) all.push(...spectrumFindings(paStage.pa!, spectrum, paStage.name));
+  const levelDbc = (n: number) => spectrum?.bands.find((b) => b.n === n)?.worstDbc ?? paHarmonicDbc(topology, evenDbc, n).dbc;
+  const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (levelDbc(n) / 20), 0);
   for (const st of project.stages) {
     if (st.kind === 'tr' && st.relay) {
       const relay = evaluateRelay(st.relay, { powerW: st.relay.position === 'before-lpf' ? paStressW : paStressW * 10 ** (-passbandLossDb / 10), swr: finite(project.rf.worstSwr, 1), harmonicAmplitudeSum, subject: st.name });
@@ -145,6 +153,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     ? harmonicCompliance({
       rule: project.rf.spuriousRule, topology, evenHarmonicDbc: evenDbc, fundamentalW: outputPowerW, frequencyHz, passbandLossDb,
       filter: lpfRes?.analysis ? lpfRes.analysis.harmonics : null, monteCarlo: lpfRes?.monteCarlo ?? null,
+      ...(spectrum ? { spectrum: spectrum.bands } : {}),
     })
     : null;
   if (harmonics) all.push(...harmonics.findings);

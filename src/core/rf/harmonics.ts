@@ -3,6 +3,10 @@ import type { Finding } from '../findings';
 import type { SourceKey } from '../sources/registry';
 import type { PaParams, RfSettings } from '../model';
 import type { MonteCarloResult } from './lpf-monte-carlo';
+import type { HarmonicBand, SpectrumBasis } from './pa-spectrum';
+
+/** Harmonic level at the antenna below which a home-built filter and layout no longer set it, dBc. Common practice, no published source. */
+export const CONSTRUCTION_FLOOR_DBC = -70;
 
 export type SpuriousRule = RfSettings['spuriousRule'];
 
@@ -27,7 +31,7 @@ export function requiredAttenuationDb(rule: SpuriousRule, fundamentalW: number):
   return Math.min(43 + 10 * Math.log10(Math.max(fundamentalW, 1e-12)), 50);
 }
 
-export type HarmonicBasis = 'square-wave-1/n' | 'balance-residual' | 'rectangular-bound-1/n';
+export type HarmonicBasis = 'square-wave-1/n' | 'balance-residual' | 'rectangular-50%-1/n' | SpectrumBasis;
 
 /** Level of harmonic n at the PA output relative to the fundamental, dBc, and what it is based on. */
 export function paHarmonicDbc(topology: PaParams['topology'], evenHarmonicDbc: number, n: number): { dbc: number; basis: HarmonicBasis } {
@@ -37,30 +41,47 @@ export function paHarmonicDbc(topology: PaParams['topology'], evenHarmonicDbc: n
   }
   // Balanced push-pull cancels even harmonics; the residual is the builder's balance figure (RfSettings).
   if (topology === 'push-pull') return { dbc: Math.min(0, evenHarmonicDbc), basis: 'balance-residual' };
-  // Source: rectangular wave of duty D, harmonic n ~ |sin(n pi D)|/n <= 1/n (REFERENCE-VALUES §3.3): upper bound
-  return { dbc: 20 * Math.log10(1 / n), basis: 'rectangular-bound-1/n' };
+  // Source: rectangular wave of duty D, harmonic n = |sin(n pi D)|/(n |sin(pi D)|) (REFERENCE-VALUES §3.3);
+  // 1/n is its value at 50 % duty, not a bound at other duties
+  return { dbc: 20 * Math.log10(1 / n), basis: 'rectangular-50%-1/n' };
 }
+
+const BASIS_WHAT: Record<HarmonicBasis, string> = {
+  'square-wave-1/n': 'square-wave estimate',
+  'balance-residual': 'push-pull balance residual as entered',
+  'rectangular-50%-1/n': 'single-ended estimate at 50 % duty',
+  'cosine-pulse': 'cosine current pulse over the conduction angle',
+  'push-pull-imbalance': 'even harmonic from the stated push-pull imbalance, typical to worst',
+  'saturation-bound': 'clean sine to hard-clipped square wave',
+  'rectangular-wave': 'rectangular wave, duty 50 % to the stated worst imbalance',
+  'class-e-estimate': 'class E taken as a rectangular wave (pessimistic, not simulated)',
+};
 
 export interface HarmonicRow {
   /** Harmonic number (2..5). */
   n: number;
   frequencyHz: number;
-  /** Level at the PA output, dBc. */
+  /** Level at the PA output, dBc: the worst end of its band (paLevelBestDbc the best end). */
   paLevelDbc: number;
+  paLevelBestDbc: number;
   paLevelBasis: HarmonicBasis;
   /** Filter attenuation at n f relative to its loss at f (nominal as built), dB; 0 when there is no filter. */
   filterAttenuationDb: number;
   /** Same at the Monte Carlo worst case and percentile (null without Monte Carlo). */
   worstFilterAttenuationDb: number | null;
   percentileFilterAttenuationDb: number | null;
-  /** Predicted level at the antenna, dBc. */
+  /** Predicted level at the antenna, dBc: worst end of the band (predictedBestDbc the best end), nominal filter. */
   predictedDbc: number;
+  predictedBestDbc: number;
+  /** The worst (best) end lies below CONSTRUCTION_FLOOR_DBC: shown as "limited by construction", not a number. */
+  limitedByConstruction: boolean;
+  bestLimitedByConstruction: boolean;
   worstPredictedDbc: number | null;
   /** Required attenuation below the fundamental, dB. */
   requiredDb: number;
   /** Filter attenuation needed at this harmonic to meet the rule, dB. */
   neededFilterAttenuationDb: number;
-  /** -predictedDbc - requiredDb (positive = passes), dB. */
+  /** -max(predictedDbc, floor) - requiredDb (positive = passes), dB: judged on the worst end. */
   marginDb: number;
   /** Same with the Monte Carlo worst-case filter, dB (null without Monte Carlo). */
   worstMarginDb: number | null;
@@ -95,6 +116,8 @@ export interface HarmonicInput {
   /** Nominal filter attenuation at harmonics; null = no filter. */
   filter: { n: number; attenuationDb: number }[] | null;
   monteCarlo: MonteCarloResult | null;
+  /** The PA's harmonic bands by class (pa-spectrum); absent = square-wave odd / balance-residual even estimate. */
+  spectrum?: HarmonicBand[];
 }
 
 export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
@@ -102,7 +125,9 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
   const requiredDb = requiredAttenuationDb(inp.rule, inp.fundamentalW);
   const findings: Finding[] = [];
   const rows: HarmonicRow[] = [2, 3, 4, 5].map((n) => {
-    const pa = paHarmonicDbc(inp.topology, inp.evenHarmonicDbc, n);
+    const band = inp.spectrum?.find((b) => b.n === n);
+    const old = paHarmonicDbc(inp.topology, inp.evenHarmonicDbc, n);
+    const pa = band ? { dbc: band.worstDbc, best: band.bestDbc, basis: band.basis as HarmonicBasis } : { ...old, best: old.dbc };
     const nominal = inp.filter?.find((h) => h.n === n)?.attenuationDb ?? 0;
     const mc = inp.monteCarlo?.harmonics.find((h) => h.n === n) ?? null;
     const rel = (a: number) => a - inp.passbandLossDb;
@@ -110,27 +135,42 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
     const predictedDbc = pa.dbc - filterAttenuationDb;
     const worst = mc ? rel(mc.worstAttenuationDb) : null;
     const worstPredictedDbc = worst === null ? null : pa.dbc - worst;
-    const marginDb = -predictedDbc - requiredDb;
-    const worstMarginDb = worstPredictedDbc === null ? null : -worstPredictedDbc - requiredDb;
+    const predictedBestDbc = pa.best - filterAttenuationDb;
+    const floor = (x: number) => Math.max(x, CONSTRUCTION_FLOOR_DBC);
+    const marginDb = -floor(predictedDbc) - requiredDb;
+    const worstMarginDb = worstPredictedDbc === null ? null : -floor(worstPredictedDbc) - requiredDb;
     const severity: Finding['severity'] = marginDb < 0 ? 'fail' : (worstMarginDb !== null && worstMarginDb < 0) || marginDb < 3 ? 'caution' : 'ok';
     const row: HarmonicRow = {
-      n, frequencyHz: n * inp.frequencyHz, paLevelDbc: pa.dbc, paLevelBasis: pa.basis, filterAttenuationDb,
+      n, frequencyHz: n * inp.frequencyHz, paLevelDbc: pa.dbc, paLevelBestDbc: pa.best, paLevelBasis: pa.basis, filterAttenuationDb,
+      predictedBestDbc, limitedByConstruction: predictedDbc < CONSTRUCTION_FLOOR_DBC, bestLimitedByConstruction: predictedBestDbc < CONSTRUCTION_FLOOR_DBC,
       worstFilterAttenuationDb: worst, percentileFilterAttenuationDb: mc ? rel(mc.percentileAttenuationDb) : null,
       predictedDbc, worstPredictedDbc, requiredDb, neededFilterAttenuationDb: requiredDb + pa.dbc, marginDb, worstMarginDb, severity,
     };
-    const what = n % 2 === 1 ? 'square-wave estimate' : pa.basis === 'balance-residual' ? 'push-pull balance residual' : 'single-ended upper bound';
+    const what = BASIS_WHAT[pa.basis];
+    const lvl = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'limited by construction' : `${x.toFixed(1)} dBc`);
+    const bandText = !band ? null : predictedDbc < CONSTRUCTION_FLOOR_DBC ? 'limited by construction at the antenna'
+      : `${lvl(predictedBestDbc)} to ${lvl(predictedDbc)} at the antenna`;
+    const down = predictedDbc < CONSTRUCTION_FLOOR_DBC
+      ? `below the ${CONSTRUCTION_FLOOR_DBC} dBc construction floor`
+      : `${(-predictedDbc).toFixed(1)} dB down`;
     findings.push({
       severity, rule: 'spurious.harmonic', subject: `Harmonic ${n}`, value: -predictedDbc, limit: requiredDb, unit: 'dB', source: info.source,
       message: !inp.filter
         ? `No low-pass filter: harmonic ${n} is only ${(-pa.dbc).toFixed(1)} dB down (${what}); a filter is required before transmitting.`
         : marginDb < 0
-          ? `Harmonic ${n} is predicted ${(-predictedDbc).toFixed(1)} dB down, short of the ${requiredDb.toFixed(1)} dB required: raise the filter order or lower its cutoff.`
+          ? `Harmonic ${n} is predicted up to ${(-predictedDbc).toFixed(1)} dB down at the worst end${bandText ? ` (${bandText}, ${what})` : ''}, short of the ${requiredDb.toFixed(1)} dB required: raise the filter order or lower its cutoff.`
           : worstMarginDb !== null && worstMarginDb < 0
             ? `Harmonic ${n} passes nominally (${marginDb.toFixed(1)} dB margin) but can fail with component tolerances (worst case ${worstMarginDb.toFixed(1)} dB); check it on a spectrum analyser.`
-            : `Harmonic ${n} is predicted ${(-predictedDbc).toFixed(1)} dB down (${what}), ${marginDb.toFixed(1)} dB better than required.`,
+            : bandText
+              ? `Harmonic ${n}: ${bandText} (${what}); judged on the worst end, ${down}, ${marginDb.toFixed(1)} dB better than required.`
+              : `Harmonic ${n} is predicted ${down} (${what}), ${marginDb.toFixed(1)} dB better than required.`,
     });
     return row;
   });
+  if (rows.some((r) => r.limitedByConstruction || r.bestLimitedByConstruction)) {
+    findings.push({ severity: 'caution', kind: 'standing', rule: 'spurious.construction-floor', subject: 'Spurious emissions', value: CONSTRUCTION_FLOOR_DBC, limit: null, unit: 'dBc', source: 'spurious.construction-floor',
+      message: `Levels predicted below ${CONSTRUCTION_FLOOR_DBC} dBc are shown as limited by construction: coupling around the filter and ground currents, not the filter, set them in a home-built transmitter.` });
+  }
   if (info.fromMemory) {
     findings.push({ severity: 'caution', kind: 'standing', rule: 'spurious.rule-source', subject: 'Spurious-emission rule', value: null, limit: null, unit: '', source: info.source,
       message: 'The ITU limit formula used here is from memory and not confirmed against the Radio Regulations; check the current text and your licence conditions.' });

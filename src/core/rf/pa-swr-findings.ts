@@ -81,9 +81,9 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   });
   f.push({
     severity: 'ok', rule: 'pa.swr-output', subject, value: s.maxOutput.value, limit: null, unit: 'W', source: 'pa.swr-load-line',
-    message: `Around the SWR ${s.swr} circle the output ranges from ${s.minOutput.value.toFixed(1)} W ` +
-      `(${describeLoad(s.minOutput)}) to ${s.maxOutput.value.toFixed(1)} W (${describeLoad(s.maxOutput)}); ` +
-      `${c.matchedOutputW.toFixed(1)} W matched.`,
+    message: `Around the SWR ${s.swr} circle the output ranges from ${s.minOutput.value.toFixed(1)} W into ` +
+      `${describeLoad(s.minOutput)} to ${s.maxOutput.value.toFixed(1)} W into ${describeLoad(s.maxOutput)}, against ` +
+      `${c.matchedOutputW.toFixed(1)} W into the design load (all at the highest key-down supply).`,
   });
   return f;
 }

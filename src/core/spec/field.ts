@@ -123,4 +123,5 @@ export const U = {
   Ah: { symbol: 'Ah', scale: 1 },
   none: { symbol: '', scale: 1 },
   wpm: { symbol: 'WPM', scale: 1 },
+  deg: { symbol: '°', scale: 1 },
 } as const satisfies Record<string, DisplayUnit>;

@@ -42,6 +42,21 @@ export const paSpec = defineSpec({
       help: 'their heat flows through one θsa; empty = each device on its own heatsink',
       example: '2',
     }),
+    // Common practice, no published source: class C below 60° gives little power; 180° is class B
+    conductionAngleDeg: optNum('Conduction angle (class C)', '°', U.deg, 60, 180, 150, {
+      form: 'conductionAngle',
+      help: 'of each device per cycle; empty = 150° assumed; sets the class-C harmonics',
+      example: '150',
+    }),
+    // Common practice, no published source: mismatch of the two halves, as a fraction (drive, device or timing)
+    imbalanceTypical: optNum('Push-pull imbalance, typical', '%', U.pct, 0, 0.5, 0.05, {
+      form: 'imbalanceTypical',
+      help: 'halves’ current (B, C) or timing (D, E) mismatch; empty = 5 %',
+    }),
+    imbalanceWorst: optNum('Push-pull imbalance, worst', '%', U.pct, 0, 0.5, 0.2, {
+      form: 'imbalanceWorst',
+      help: 'sets the worst end of the even harmonics; empty = 20 %',
+    }),
     networkLoadOhm: optNum('Drain load set by a matching network', 'Ω', U.ohm, 0.1, 10_000, null, {
       form: 'networkLoad',
       help: 'L or pi network instead of a transformer; empty = transformer (turns ratio)',
@@ -57,6 +72,8 @@ export const paSpec = defineSpec({
     const shared = v.heatsinkSharedBy;
     if (typeof shared === 'number' && typeof v.devices === 'number' && shared > v.devices)
       errors.push({ field: 'heatsinkSharedBy', label: 'Devices on one heatsink', message: 'Devices on one heatsink: at most the number of devices' });
+    if (typeof v.imbalanceTypical === 'number' && typeof v.imbalanceWorst === 'number' && v.imbalanceTypical > v.imbalanceWorst)
+      errors.push({ field: 'imbalanceWorst', label: 'Push-pull imbalance, worst', message: 'Push-pull imbalance, worst: at least the typical imbalance' });
     if (typeof v.networkLoadOhm === 'number' && typeof v.turnsRatio === 'number')
       errors.push({ field: 'networkLoadOhm', label: 'Drain load set by a matching network', message: 'Drain load set by a matching network: give it or a turns ratio, not both' });
     return errors;
