@@ -1,4 +1,5 @@
-// Project overview: settings, stages in build order with their currents, and the live current budget.
+// Project overview: first the verdict, what to fix, the cost and pictures of the station (first-screen.tsx); then
+// settings, stages in build order with their currents, the live current budget and every check.
 import type { FC } from 'hono/jsx';
 import type { Project, Stage } from '../../src/core/model';
 import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
@@ -16,13 +17,14 @@ import { loadCurrentValues } from '../../src/core/edits/stage-loads';
 import { loadCurrentFields, loadFormName, loadSpec } from '../../src/core/spec/stage';
 import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';
+import { FirstScreen } from '../components/first-screen';
 
 export const loadValues = (s: Stage): Record<string, string> => loadCurrentValues(s.loads);
 
 const Hidden: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
 
 const SettingsForm: FC<{ project: Project; state: FieldState }> = ({ project, state }) => (
-  <details class="card settings" open={Object.keys(state.errors).length > 0}>
+  <details class="card settings" id="settings" open={Object.keys(state.errors).length > 0}>
     <summary>
       <h2>Project settings</h2>
       <span class="summary-line">
@@ -155,7 +157,7 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
   return (
     <section class="card" id="checks">
       <h2>Checks at a glance</h2>
-      <p class="verdict" data-verdict={verdict}>
+      <p class="verdict">
         Verdict: <span class={`sev sev-${verdict}`}>{verdict === 'ok' ? 'OK' : verdict}</span>
         {verdict === 'ok' ? ' — no check of this design fails or needs caution.' : ` — ${attention.length} finding(s) need attention.`}
       </p>
@@ -214,9 +216,10 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
           {notice}
         </p>
       ) : null}
+      <FirstScreen project={project} report={report} />
       <SettingsForm project={project} state={stateFor('settings', failed, () => settingsFormValues(project))} />
       <div class="columns">
-        <section class="card">
+        <section class="card" id="stages">
           <h2>Stages in build order</h2>
           <ol class="stages">
             {project.stages.map((s, i) => (

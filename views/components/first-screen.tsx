@@ -1,0 +1,100 @@
+// The overview's first screen: will it work (the verdict from actionable findings), what to fix first (three links to
+// where each is fixed), what it costs, and pictures of the station: power flow, rail troughs, harmonic margins.
+import type { FC } from 'hono/jsx';
+import { raw } from 'hono/html';
+import type { Project } from '../../src/core/model';
+import type { EvaluationReport } from '../../src/core/evaluate';
+import { actionable, sortFindings, worstSeverity } from '../../src/core/findings';
+import { formatMoney } from '../../src/core/cost/money';
+import { fixLink } from './fix-link';
+import { powerFlowData, powerFlowSvg } from '../plots/power-flow';
+import { troughRows, troughChartSvg, harmonicBarsSvg } from '../plots/margin-charts';
+
+const VERDICT_TEXT = {
+  ok: { sign: '✓', head: 'Will work as designed', tail: () => 'no check of this design fails or needs caution.' },
+  caution: { sign: '!', head: 'Should work, with cautions', tail: (n: number, f: number) => `${n} finding(s) need a look${f ? `, ${f} fail` : ''}.` },
+  fail: { sign: '✗', head: 'Will not work as designed', tail: (n: number, f: number) => `${f} check(s) fail, ${n - f} more need caution.` },
+} as const;
+
+export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = ({ project, report }) => {
+  const counted = actionable(report.findings);
+  const verdict = worstSeverity(counted);
+  const attention = sortFindings(counted).filter((f) => f.severity !== 'ok');
+  const fails = attention.filter((f) => f.severity === 'fail').length;
+  const top = attention.slice(0, 3);
+  const v = VERDICT_TEXT[verdict];
+  const t = report.cost.totals;
+  const cur = report.cost.currency;
+  const harmonics = report.rf.harmonics;
+  const base = `/projects/${project.id}`;
+  return (
+    <section class="first-screen" id="first-screen" aria-label="At a glance">
+      <div class="fs-left">
+        <div class={`card verdict-card sev-box-${verdict}`} id="verdict" data-verdict={verdict}>
+          <p class="verdict-head">
+            <span class={`verdict-sign sev-${verdict}`} aria-hidden="true">
+              {v.sign}
+            </span>{' '}
+            {v.head}
+          </p>
+          <p class="verdict-tail">
+            {v.tail(attention.length, fails)}{' '}
+            <a href="#checks">All checks</a>
+          </p>
+        </div>
+        <div class="card top-fixes" id="top-fixes">
+          <h2>{top.length ? `Fix first (${top.length} of ${attention.length})` : 'Nothing to fix'}</h2>
+          {top.length ? (
+            <ol>
+              {top.map((f) => {
+                const link = fixLink(project, f);
+                return (
+                  <li class={`fix sev-${f.severity}`} data-rule={f.rule}>
+                    <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message}{' '}
+                    <a class="fix-link" href={link.href}>
+                      Fix in {link.label} →
+                    </a>
+                  </li>
+                );
+              })}
+            </ol>
+          ) : (
+            <p>No check fails or needs caution.</p>
+          )}
+        </div>
+        <div class="card cost-glance" id="cost-glance">
+          <h2>Cost</h2>
+          <p>
+            <strong>{t.perKitCents === null ? '—' : formatMoney(t.perKitCents, cur)}</strong> per kit ·{' '}
+            <strong>{formatMoney(t.buildCents, cur)}</strong> for the group of {report.cost.kits} (parts and shipping)
+            {t.unpricedLines ? <span class="cost-warn"> ({t.unpricedLines} line(s) without a price: the real cost is higher)</span> : null}{' '}
+            <a href={`${base}/bom`}>Parts list</a>
+          </p>
+        </div>
+        <div class="card harmonic-glance" id="harmonic-glance">
+          <h2>Harmonic margins</h2>
+          {raw(harmonicBarsSvg(harmonics))}
+          {harmonics ? <p class="hint">Below the limit of {harmonics.ruleTitle}; the bar is the nominal filter, the tick its worst built case.</p> : null}
+        </div>
+      </div>
+      <div class="fs-right">
+        <div class="card flow-card" id="power-flow">
+          <h2>Power flow at key-down</h2>
+          {raw(powerFlowSvg(powerFlowData(project, report)))}
+          <p class="hint">
+            Currents are key-down (TX) DC currents{project.mains ? '; the mains box shows the primary RMS current' : ''}. Rails: ● headroom OK, ▲ caution, ■ fails, –
+            not checked. <a href={`${base}/supply`}>Supply page</a>
+          </p>
+        </div>
+        <div class="card trough-card" id="troughs">
+          <h2>Lowest rail voltage at key-down</h2>
+          {raw(troughChartSvg(troughRows(report.supply)))}
+          <p class="hint">
+            Dots: the trough at {project.mains ? 'low (L), nominal (N) and high (H) mains' : 'battery at end voltage, nominal and full'}; red dashed line: the
+            least the rail may fall to.
+          </p>
+        </div>
+      </div>
+    </section>
+  );
+};
