@@ -115,7 +115,8 @@ function rfLines(report: EvaluationReport): string[] {
   }
   const lvl = (x: number, limited: boolean) => (limited ? 'limited by construction' : `${x.toFixed(1)} dBc`);
   for (const h of rf.harmonics?.rows ?? []) {
-    out.push(`  Harmonic ${h.n}: ${lvl(h.predictedBestDbc, h.bestLimitedByConstruction)} to ${lvl(h.predictedDbc, h.limitedByConstruction)} at the antenna (judged on the worst end), margin ${h.marginDb.toFixed(1)} dB, ${h.severity}`);
+    const band = h.limitedByConstruction ? 'limited by construction' : `${lvl(h.predictedBestDbc, h.bestLimitedByConstruction)} to ${lvl(h.predictedDbc, false)}`;
+    out.push(`  Harmonic ${h.n}: ${band} at the antenna (judged on the worst end), margin ${h.marginDb.toFixed(1)} dB, ${h.severity}`);
   }
   if (rf.exposure) out.push(`  RF exposure: keep the public ${formatValue(rf.exposure.generalDistanceM, 'm')} and yourself ${formatValue(rf.exposure.controlledDistanceM, 'm')} from the antenna (far-field estimate)`);
   return out;
