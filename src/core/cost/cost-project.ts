@@ -3,7 +3,7 @@
 import type { Finding } from '../findings';
 import type { Project } from '../model';
 import { cheapestBySupplier, GENERAL_STAGE_NAME, kitsOf, prepareLines, type LineContext } from './line-options';
-import { convertCents, formatMoney, rateFor, roundHalfUp } from './money';
+import { convertCents, formatMoney, minorRate, rateFor, roundHalfUp } from './money';
 import { breakMinQtyAt } from './quantities';
 import type { CostLine, CostReport, SingleSupplierComparison, StageSubtotal, SupplierUse } from './report-types';
 import { COST_SECTION_LABELS, SECTION_RULE, type CostSection } from './sections';
@@ -26,6 +26,7 @@ export const COST_NOTES: readonly string[] = [
   'Each line is bought from one offer; splitting a line between suppliers is not considered.',
   'Unit price = the price break with the highest minimum quantity not above the order quantity.',
   'Currency conversion: line cost (and each shipping charge) converted once and rounded half-up to a whole minor unit.',
+  'Amounts are kept and shown in each currency\'s own minor unit (ISO 4217): no decimals for JPY, two for USD and EUR.',
   'Shipping is paid once per supplier used, converted from that supplier\'s currency.',
   'Per-kit figures = build figures / kits, rounded half-up.',
   SECTION_RULE,
@@ -41,7 +42,7 @@ function shippingFor(project: Project, name: string, findings: Finding[]): numbe
   const rate = rateFor(entry.currency, project.currency, project.costing.exchangeRates);
   if (rate === null) return caution(`No exchange rate for ${entry.currency}: shipping from "${name}" counted as 0.`);
   if (!Number.isFinite(entry.shippingCents) || entry.shippingCents < 0) return caution(`Shipping of "${name}" is not a valid amount; counted as 0.`);
-  return convertCents(entry.shippingCents, rate);
+  return convertCents(entry.shippingCents, minorRate(rate, entry.currency, project.currency));
 }
 
 function methodNote(choice: PlanChoice, n: number, limit: number, total: number, currency: string): string {
@@ -147,7 +148,7 @@ function toCostLine(l: LineContext, supplier: string | null): CostLine {
   if (option === undefined) {
     return { ...base, orderQty: 0, breakMinQty: null, supplier: null, offerId: null, sku: null, offerCurrency: null, unitPriceCents: null, offerCostCents: null, exchangeRate: null, lineCostCents: 0, raised: null };
   }
-  const plainCents = convertCents(option.plain.costCents, option.rate);
+  const plainCents = convertCents(option.plain.costCents, option.minorRate);
   return {
     ...base,
     orderQty: option.quote.qty,

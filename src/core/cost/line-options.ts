@@ -1,7 +1,7 @@
 // Per-line preparation: needed quantity, flags and every usable offer priced in the project currency.
 
 import type { Offer, Project, Stage } from '../model';
-import { convertCents, rateFor } from './money';
+import { convertCents, minorRate, rateFor } from './money';
 import { bestQuote, neededQty, quoteOffer, validBreaks, type OfferQuote } from './quantities';
 import type { LineFlag } from './report-types';
 import { sectionOf, type CostSection } from './sections';
@@ -12,8 +12,10 @@ export interface OfferOption {
   quote: OfferQuote;
   /** The plain order: need raised only to the minimum order, lowest break and multiple. */
   plain: OfferQuote;
-  /** Project-currency units per offer-currency unit. */
+  /** Project-currency units per offer-currency unit (major units, as the rate table holds it). */
   rate: number;
+  /** Project-currency minor units per offer-currency minor unit (ISO 4217 minor units of each). */
+  minorRate: number;
   /** quote.costCents converted half-up, project-currency minor units. */
   costCents: number;
 }
@@ -83,11 +85,12 @@ export function prepareLines(project: Project): LineContext[] {
         if (rate === null || quote === null || plain === null) continue;
         // Absurd prices or rates would leave exact integer arithmetic: such an offer is not used.
         const worst = Math.max(quote.costCents, plain.costCents);
-        if (!Number.isSafeInteger(worst) || !(worst * rate < Number.MAX_SAFE_INTEGER)) {
+        const toMinor = minorRate(rate, offer.currency, project.currency);
+        if (!Number.isSafeInteger(worst) || !(worst * toMinor < Number.MAX_SAFE_INTEGER)) {
           overflow = true;
           continue;
         }
-        options.push({ offer, quote, plain, rate, costCents: convertCents(quote.costCents, rate) });
+        options.push({ offer, quote, plain, rate, minorRate: toMinor, costCents: convertCents(quote.costCents, toMinor) });
       }
       if (priced.length > 0 && options.length === 0) flags.push(overflow ? 'too-large' : 'no-rate');
     }

@@ -1,5 +1,5 @@
-// Money helpers. All money is integer minor units ("cents"); every currency is assumed to have two
-// minor digits (a deliberate simplification: JPY-style zero-decimal currencies still print ".00").
+// Money helpers. All money is integer minor units ("cents") of its own currency: the minor unit is the one
+// ISO 4217 gives each currency (JPY none, so 1 = one yen; USD and EUR two decimals, so 1 = one cent).
 import { usablePositive } from '../numeric';
 
 /**
@@ -42,13 +42,40 @@ export function rateFor(
   return key === projectCurrency.trim().toUpperCase() ? 1 : null;
 }
 
-/** Minor units to a major-unit number for CSV (1234 -> 12.34). */
-export function centsToMajor(cents: number): number {
-  return Math.round(cents) / 100;
+// Source: ISO 4217:2015, Codes for the representation of currencies, list one ("minor unit" column): JPY 0,
+// USD and EUR 2 as the issue's check; the other codes below are from memory, not confirmed against the table.
+const MINOR_DIGITS_NOT_TWO: Readonly<Record<string, number>> = {
+  JPY: 0, KRW: 0, ISK: 0, CLP: 0, VND: 0, PYG: 0, UGX: 0, XAF: 0, XOF: 0, XPF: 0,
+  BHD: 3, IQD: 3, JOD: 3, KWD: 3, LYD: 3, OMR: 3, TND: 3,
+};
+
+/** Decimals of the currency's minor unit (ISO 4217): 0 for JPY, 3 for KWD, 2 for USD, EUR and other codes. */
+export function minorDigits(currency: string): number {
+  return MINOR_DIGITS_NOT_TWO[currency.trim().toUpperCase()] ?? 2;
+}
+
+/** Minor units per major unit of the currency: 1 for JPY, 100 for USD. */
+export function minorPerMajor(currency: string): number {
+  return 10 ** minorDigits(currency);
 }
 
 /**
- * "USD 1,234.56": ISO code, space, comma thousands groups, point decimal, always two decimals.
+ * Rate from minor units of `from` to minor units of `to`, given `rate` = major units of `to` per major unit of
+ * `from` (as the exchange-rate table holds it). 1000 JPY (1000 minor) at 0.0067 USD/JPY: 0.67 cents per yen.
+ */
+export function minorRate(rate: number, from: string, to: string): number {
+  // Source: ISO 4217 minor units; amount_to = amount_from x rate x 10^(digits_to - digits_from)
+  return rate * 10 ** (minorDigits(to) - minorDigits(from));
+}
+
+/** Minor units to a major-unit number for CSV (1234 USD -> 12.34; 1234 JPY -> 1234). */
+export function centsToMajor(cents: number, currency: string): number {
+  return Math.round(cents) / minorPerMajor(currency);
+}
+
+/**
+ * "USD 1,234.56", "JPY 1,235": ISO code, space, comma thousands groups, point decimal, as many decimals as the
+ * currency's minor unit has (ISO 4217).
  * No locale dependence (no Intl), so output is identical on every machine. Negative amounts print as
  * "USD -1,234.56". Non-finite input prints "USD n/a" rather than "NaN".
  */
@@ -57,8 +84,11 @@ export function formatMoney(cents: number, currency: string): string {
   const whole = Math.round(cents);
   const sign = whole < 0 ? '-' : '';
   const abs = Math.abs(whole);
-  const major = Math.floor(abs / 100).toString();
-  const minor = (abs % 100).toString().padStart(2, '0');
+  const digits = minorDigits(currency);
+  const per = 10 ** digits;
+  const major = Math.floor(abs / per).toString();
   const grouped = major.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  if (digits === 0) return `${currency} ${sign}${grouped}`;
+  const minor = (abs % per).toString().padStart(digits, '0');
   return `${currency} ${sign}${grouped}.${minor}`;
 }

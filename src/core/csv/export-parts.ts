@@ -22,8 +22,9 @@ export function partsCsvHeaders(currency: string): string[] {
   ];
 }
 
-function money(cents: number | null): CsvCell {
-  return cents === null ? null : centsToMajor(cents);
+/** Minor units as a major-unit number with the currency's own decimals (ISO 4217). */
+function money(cents: number | null, currency: string | null): CsvCell {
+  return cents === null || currency === null ? null : centsToMajor(cents, currency);
 }
 
 function row(l: CostLine, currency: string): CsvCell[] {
@@ -34,8 +35,8 @@ function row(l: CostLine, currency: string): CsvCell[] {
       : `${from}; ${l.raised.extraQty} over the plain ${l.raised.plainQty} saves ${formatMoney(l.raised.savingCents, currency)}`;
   return [
     l.stageName, l.section, l.refs, l.value, l.description, l.category, l.qtyPerRig, l.neededQty, l.orderQty,
-    l.supplier, l.sku, l.offerCurrency, money(l.unitPriceCents), money(l.offerCostCents), l.exchangeRate,
-    money(l.lineCostCents), breakUsed, l.flags.join(' '),
+    l.supplier, l.sku, l.offerCurrency, money(l.unitPriceCents, l.offerCurrency), money(l.offerCostCents, l.offerCurrency),
+    l.exchangeRate, money(l.lineCostCents, currency), breakUsed, l.flags.join(' '),
   ];
 }
 
@@ -45,7 +46,7 @@ export function costReportToCsv(report: CostReport, options: PartsCsvOptions = {
   const total = (label: string, cents: number | null): CsvCell[] => {
     const r: CsvCell[] = Array(width).fill(null);
     r[0] = label;
-    r[width - 3] = money(cents);
+    r[width - 3] = money(cents, report.currency);
     return r;
   };
   const rows: CsvCell[][] = [headers, ...report.lines.map((l) => row(l, report.currency))];

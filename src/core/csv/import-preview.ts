@@ -3,6 +3,7 @@
 import { guessDelimiter, parseCsv } from './parse';
 import { parsePrice, parseQuantity } from './parse-price';
 import { countRefs } from './refs';
+import { minorDigits } from '../cost/money';
 import { guessMapping, IMPORT_FIELD_LABELS, type ColumnMapping, type ImportField } from './import-mapping';
 import { unneutraliseText } from './write';
 import type { Field } from '../spec/field';
@@ -192,7 +193,9 @@ function previewRow(
 
   const priceText = get('price');
   if (priceText !== '') {
-    const p = parsePrice(priceText, decimal);
+    // The minor unit follows the currency: the one written with the price, else the column's, else the default.
+    const colCurrencyText = get('currency').toUpperCase();
+    const p = parsePrice(priceText, decimal, (c) => minorDigits(c ?? (colCurrencyText || opts.defaultCurrency)));
     const range = p.ok ? storedProblem(unitPriceField, p.cents) : '';
     if (!p.ok) err('price', p.message);
     else if (range) err('price', `${unitPriceField.label} ${range}.`);

@@ -8,7 +8,8 @@
 // 4. Only one kind, once, followed by exactly three digits, with a whole part other than 0 ("1,250",
 //    "1.250"): ambiguous; the import's decimal setting decides (default ".": "1.250" = 1.25, "1,250" = 1250).
 // Thousands groups must be three digits. Spaces, no-break spaces and apostrophes are ignored.
-// Prices are whole minor units: more than two decimals round half-up with a warning (0.125 -> 13 cents).
+// Prices are whole minor units of their currency (ISO 4217: two decimals for USD and EUR, none for JPY): more
+// decimals than the minor unit has round half-up with a warning (0.125 USD -> 13 cents; 12.5 JPY -> 13 yen).
 // Currency: a three-letter code before or after the number, or € (EUR), £ (GBP), $ (read as USD;
 // write "CAD 1.25" or "AUD 1.25" for other dollars).
 
@@ -17,7 +18,7 @@ export interface ParsedPrice {
   cents: number;
   /** Currency written with the price, upper case; null when none. */
   currency: string | null;
-  /** Set when the price had more than two decimals and was rounded. */
+  /** Set when the price had more decimals than its currency's minor unit and was rounded. */
   roundedFrom: string | null;
 }
 
@@ -49,8 +50,15 @@ function splitCurrency(s: string): { num: string; currency: string | null } {
   return { num: t.replace(/[\s\u00A0\u202F']/g, ''), currency };
 }
 
-/** Parse a price to whole minor units. `decimal` settles rule 4 (see the file comment). */
-export function parsePrice(text: string, decimal: '.' | ',' = '.'): PriceParse {
+/**
+ * Parse a price to whole minor units. `decimal` settles rule 4 (see the file comment). `digitsOf` gives the minor
+ * unit's decimals of the currency written with the price (null when none is written); default 2.
+ */
+export function parsePrice(
+  text: string,
+  decimal: '.' | ',' = '.',
+  digitsOf: (currency: string | null) => number = () => 2,
+): PriceParse {
   if (text.trim() === '') return { ok: false, message: 'The price is empty.' };
   const { num, currency } = splitCurrency(text);
   if (currency === '?') return { ok: false, message: `"${text}" names two different currencies.` };
@@ -96,11 +104,12 @@ export function parsePrice(text: string, decimal: '.' | ',' = '.'): PriceParse {
     return { ok: false, message: `"${text}" has separators in the wrong places.` };
   }
   const whole = intPart === '' ? 0 : Number(intPart);
-  const two = (fracPart + '00').slice(0, 2);
-  const rest = fracPart.slice(2);
-  // Half-up on the digits beyond the cent: "5" or more in the third decimal rounds up.
+  const digits = digitsOf(currency);
+  const kept = (fracPart + '0'.repeat(digits)).slice(0, digits);
+  const rest = fracPart.slice(digits);
+  // Half-up on the digits beyond the minor unit: "5" or more in the first of them rounds up.
   const roundUp = rest.length > 0 && rest[0] >= '5' ? 1 : 0;
-  const cents = whole * 100 + Number(two) + roundUp;
+  const cents = whole * 10 ** digits + (digits > 0 ? Number(kept) : 0) + roundUp;
   if (!Number.isSafeInteger(cents)) return { ok: false, message: `"${text}" is too large.` };
   const roundedFrom = /[1-9]/.test(rest) ? text.trim() : null;
   return { ok: true, cents, currency, roundedFrom };
