@@ -31,6 +31,48 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
   const loadsForm = () => page.locator('form.loads').first();
   const stageNames = () => page.locator('li.stage .stage-name').allInnerTexts();
 
+  it('at 1280x900 the first screen shows the verdict, the power-flow diagram and the top fixes without scrolling', async () => {
+    expect(page.viewportSize()).toEqual({ width: 1280, height: 900 });
+    await page.evaluate(() => window.scrollTo(0, 0));
+    for (const sel of ['#verdict', '#top-fixes', '#power-flow svg.power-flow']) {
+      const box = (await page.locator(sel).boundingBox())!;
+      expect(box, sel).not.toBeNull();
+      expect(box.y, sel).toBeGreaterThanOrEqual(0);
+      expect(box.y + box.height, `${sel} ends inside the first screen`).toBeLessThanOrEqual(900);
+      expect(await page.locator(sel).isVisible(), sel).toBe(true);
+    }
+    // the diagram draws each rail with its headroom verdict in words, not only by colour
+    const rails = page.locator('#power-flow g.rail');
+    expect(await rails.count()).toBeGreaterThanOrEqual(2);
+    for (const text of await rails.allTextContents()) expect(text).toMatch(/headroom (OK|: caution|FAILS)|no headroom check/);
+    await page.screenshot({ path: artifactPath('overview-first-screen.png') });
+  });
+
+  it('data-verdict matches the actionable findings listed under "Checks at a glance", and the top fixes are the first three', async () => {
+    const verdict = await page.locator('[data-verdict]').getAttribute('data-verdict');
+    expect(await page.locator('[data-verdict]').count()).toBe(1);
+    // the actionable findings that need attention, as the page lists them (standing cautions are in their own block)
+    const listed = page.locator('#checks ul.findings > li.finding');
+    const severities = await listed.evaluateAll((els) => els.map((e) => (e.classList.contains('sev-fail') ? 'fail' : 'caution')));
+    const expected = severities.includes('fail') ? 'fail' : severities.includes('caution') ? 'caution' : 'ok';
+    expect(verdict).toBe(expected);
+    expect(expected).not.toBe('ok'); // the club demo carries cautions, so the check above compares something
+    const fixes = page.locator('#top-fixes li.fix');
+    expect(await fixes.count()).toBe(Math.min(3, severities.length));
+    const firstRules = await listed.evaluateAll((els) => els.map((e) => e.getAttribute('data-rule')));
+    const fixRules = await fixes.evaluateAll((els) => els.map((e) => e.getAttribute('data-rule')));
+    // fails first, then cautions, as in the list below (which keeps the same order within a severity)
+    const sorted = [...firstRules.keys()].sort((a, b) => (severities[a] === severities[b] ? a - b : severities[a] === 'fail' ? -1 : 1));
+    expect(fixRules).toEqual(sorted.slice(0, 3).map((i) => firstRules[i]));
+    // each fix links to a page that exists, and an anchor it names is on that page
+    for (const href of await page.locator('#top-fixes a.fix-link').evaluateAll((els) => els.map((e) => e.getAttribute('href')!))) {
+      const res = await fetch(server.url + href);
+      expect(res.status, href).toBe(200);
+      const anchor = href.split('#')[1];
+      if (anchor) expect(await res.text(), href).toContain(`id="${anchor}"`);
+    }
+  });
+
   it('shows the demo overview with its stages and budget', async () => {
     expect(await page.title()).toMatch(/Club build/);
     expect((await stageNames()).length).toBeGreaterThanOrEqual(5);
