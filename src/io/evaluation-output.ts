@@ -94,6 +94,8 @@ function supplyLines(report: EvaluationReport): string[] {
     }
   }
   for (const t of s.transformers) out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard, primary ${formatValue(t.primaryA, 'A')}`);
+  const h = report.heat;
+  if (h) out.push(`  Heat inside: ${formatValue(h.totalW, 'W')} in CW use${h.riseK !== null ? `, rise ${formatValue(h.riseK, 'K')} (about ${formatValue(h.insideC, '°C')} inside)` : ' (enclosure not entered)'}`);
   if (s.primary?.fuse.ratedA) out.push(`  Primary fuse: ${s.primary.fuse.characteristic}${formatValue(s.primary.fuse.ratedA, 'A')} (time-lag, IEC 60127 series)`);
   for (const f of s.primary?.faultChecks ?? []) {
     out.push(`    ${f.windingName} fault reflected to the primary: ${formatValue(f.reflectedA, 'A')}, ${f.check.multiple.toFixed(1)} x In: ${f.check.clears ? 'cleared' : 'not cleared'} within ${f.check.allowedS} s`);
@@ -107,7 +109,7 @@ function rfLines(report: EvaluationReport): string[] {
   for (const st of rf.stages) {
     if (st.pa) out.push(`  ${st.stageName}: ${formatValue(st.pa.outputW, 'W')} out from ${formatValue(st.pa.railV, 'V')}, key-down ${formatValue(st.pa.keyDownCurrentA, 'A')}, drain peak ${formatValue(st.pa.peakDrainV, 'V')}`);
     const w = st.pa?.swr?.worstDrainPeak;
-    if (w && st.pa?.swr?.model === 'load-line' && st.pa.swr.swr > 1) {
+    if (w && st.pa?.swr && st.pa.swr.swr > 1) {
       out.push(`    at SWR ${st.pa.swr.swr}: drain peak up to ${formatValue(w.value, 'V')} into ${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '-' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} ohm (phase ${w.phaseDeg.toFixed(0)} deg), device current up to ${formatValue(st.pa.swr.worstPeakCurrent.value, 'A')}`);
     }
     if (st.lpf?.design) out.push(`  ${st.stageName}: ${st.lpf.design.response} order ${st.lpf.design.order}, cutoff ${formatValue(st.lpf.design.cutoffHz, 'Hz', 4)}, loss ${st.lpf.analysis?.atOperating.lossDb.toFixed(2)} dB`);

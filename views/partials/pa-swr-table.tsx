@@ -8,14 +8,6 @@ const load = (w: { loadReOhm: number; loadImOhm: number }) =>
 
 export const PaSwrTable: FC<{ s: PaSwrStress | null }> = ({ s }) => {
   if (!s) return null;
-  if (s.model === 'class-e-matched') {
-    return (
-      <p class="note">
-        Class E is judged at its design load only; its stress round the SWR {s.swr} circle is an estimate (see the
-        findings), not simulated.
-      </p>
-    );
-  }
   const rows: [string, Worst, string][] = [
     ['Highest drain peak', s.worstDrainPeak, 'V'],
     ['Highest device current', s.worstPeakCurrent, 'A'],
@@ -26,8 +18,8 @@ export const PaSwrTable: FC<{ s: PaSwrStress | null }> = ({ s }) => {
   return (
     <table class="grid swr-circle">
       <caption>
-        Round the SWR {s.swr} circle (load line at a complex load, loads at the PA output; phase of the reflection
-        coefficient)
+        Round the SWR {s.swr} circle ({s.model === 'class-e-simulated' ? 'class E by time-domain simulation, every 15°' : 'load line at a complex load'},
+        loads at the PA output; phase of the reflection coefficient)
       </caption>
       <thead>
         <tr>

@@ -25,14 +25,14 @@ const I_MARGIN = 0.8;
 export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext): Finding[] {
   const { subject } = c;
   const f: Finding[] = [];
-  const isE = s.model === 'class-e-matched';
-  const where = (w: PaSwrStress['worstDrainPeak']) =>
-    isE ? 'into the design load' : s.swr <= 1 ? 'into the design load' : `at SWR ${s.swr} into ${describeLoad(w)}`;
+  const isE = s.model === 'class-e-simulated';
+  const swrSource = isE ? 'pa.class-e-sim' : 'pa.swr-load-line';
+  const where = (w: PaSwrStress['worstDrainPeak']) => (s.swr <= 1 ? 'into the design load' : `at SWR ${s.swr} into ${describeLoad(w)}`);
   const vPk = s.worstDrainPeak.value;
   const vWhere = where(s.worstDrainPeak);
   f.push({
     severity: pa.deviceVdsMaxV < vPk ? 'fail' : pa.deviceVdsMaxV < V_MARGIN * vPk ? 'caution' : 'ok',
-    rule: 'pa.vds', subject, value: vPk, limit: pa.deviceVdsMaxV, unit: 'V', source: s.swr > 1 && !isE ? 'pa.swr-load-line' : 'pa.vds',
+    rule: 'pa.vds', subject, value: vPk, limit: pa.deviceVdsMaxV, unit: 'V', source: s.swr > 1 || isE ? swrSource : 'pa.vds',
     message: pa.deviceVdsMaxV < vPk
       ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, above the ${pa.deviceVdsMaxV} V device rating: ` +
         `fit a drain clamp (TVS or zener below the rating), fold the drive back on high SWR, or use a device rated ` +
@@ -47,20 +47,20 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   f.push({
     severity: iPk > pa.deviceIdMaxA ? 'fail' : iPk > I_MARGIN * pa.deviceIdMaxA ? 'caution' : 'ok',
     rule: 'pa.id', subject, value: iPk, limit: pa.deviceIdMaxA, unit: 'A',
-    source: pa.amplifierClass === 'E' ? 'pa.peak-current-e' : s.swr > 1 ? 'pa.swr-load-line' : 'pa.peak-current',
+    source: isE && s.swr <= 1 ? 'pa.peak-current-e' : s.swr > 1 ? swrSource : 'pa.peak-current',
     message: iPk > pa.deviceIdMaxA
       ? `Peak device current ${iPk.toFixed(2)} A ${iWhere} exceeds the ${pa.deviceIdMaxA} A rating: add current ` +
         `foldback (a sense resistor that cuts the drive) or use a device rated ${Math.ceil(iPk / I_MARGIN)} A or more.`
       : `Peak device current ${iPk.toFixed(2)} A ${iWhere} against a ${pa.deviceIdMaxA} A rating.`,
   });
-  if (isE) {
+  if (isE && s.swr > 1 && s.classETurnOnRatio !== null && s.classETurnOnRatio > 0.1) {
+    // Source: energy ½ C1 V² lost at each hard turn-on (capacitor switching loss, textbook); 10 % of Vdd: common practice
     f.push({
-      severity: 'caution', rule: 'pa.swr-class-e', subject, value: s.swr, limit: null, unit: '', source: 'pa.swr-class-e',
-      message: `Class E is judged at its design load only: into SWR ${s.swr} its drain peak is estimated to rise well ` +
-        `above the matched ${vPk.toFixed(1)} V (not simulated here). Rate the device generously, fit a drain clamp, and ` +
-        'check the drain on an oscilloscope into a mismatched dummy load.',
+      severity: 'caution', rule: 'pa.class-e-switching', subject, value: s.classETurnOnRatio, limit: 0.1, unit: '', source: 'pa.class-e-sim',
+      message: `Into part of the SWR ${s.swr} circle the switch turns on with the drain at up to ${s.classETurnOnRatio.toFixed(2)} × the ` +
+        'supply (no longer zero-voltage switching): the shunt capacitor discharges into the device every cycle, which heats it ' +
+        'and stresses it beyond these figures; add SWR foldback of the drive or supply.',
     });
-    return f;
   }
   if (s.swr <= 1) return f;
   const d = s.worstDissipation;
@@ -73,14 +73,14 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   const ratio = c.matchedDissipationW > 0 ? d.value / c.matchedDissipationW : null;
   f.push({
     severity: tj !== null && tj > m.tjMaxC ? 'caution' : 'ok', rule: 'pa.swr-dissipation', subject, value: d.value,
-    limit: c.matchedDissipationW, unit: 'W', source: 'pa.swr-load-line',
+    limit: c.matchedDissipationW, unit: 'W', source: swrSource,
     message: `Key-down dissipation rises to ${d.value.toFixed(1)} W${ratio !== null ? ` (${ratio.toFixed(2)} × matched)` : ''} ` +
       `at SWR ${s.swr} into ${describeLoad(d)}` +
       (tj === null ? '.' : `; a continuous carrier into it takes the junction to about ${tj.toFixed(0)} °C` +
         (tj > m.tjMaxC ? `, beyond its ${m.tjMaxC} °C maximum: tune at reduced power into a mismatch.` : '.')),
   });
   f.push({
-    severity: 'ok', rule: 'pa.swr-output', subject, value: s.maxOutput.value, limit: null, unit: 'W', source: 'pa.swr-load-line',
+    severity: 'ok', rule: 'pa.swr-output', subject, value: s.maxOutput.value, limit: null, unit: 'W', source: swrSource,
     message: `Around the SWR ${s.swr} circle the output ranges from ${s.minOutput.value.toFixed(1)} W into ` +
       `${describeLoad(s.minOutput)} to ${s.maxOutput.value.toFixed(1)} W into ${describeLoad(s.maxOutput)}, against ` +
       `${c.matchedOutputW.toFixed(1)} W into the design load (all at the highest key-down supply).`,

@@ -1,5 +1,6 @@
 // PA stress around the circle of the worst SWR: drain peak, device current, dissipation and output at each load phase.
 import type { PaParams } from '../model';
+import { simulateClassE } from './class-e-sim';
 
 /** One load on the SWR circle, referred to the drain through an ideal transformer or network. */
 export interface SwrPoint {
@@ -28,8 +29,10 @@ export interface Worst {
 export interface PaSwrStress {
   /** The project's worst SWR the circle is drawn for. */
   swr: number;
-  /** 'load-line': classes B, C, D at a complex load; 'class-e-matched': class E at its matched figures only. */
-  model: 'load-line' | 'class-e-matched';
+  /** 'load-line': classes B, C, D at a complex load; 'class-e-simulated': class E by time-domain simulation. */
+  model: 'load-line' | 'class-e-simulated';
+  /** Class E: highest drain voltage at switch turn-on round the circle, / Vdd (0 = zero-voltage switching). */
+  classETurnOnRatio: number | null;
   /** Points every 15 degrees (for a table or plot). */
   points: SwrPoint[];
   worstDrainPeak: Worst;
@@ -93,16 +96,38 @@ export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { 
 }
 
 const STEPS = 360;
+/** Class-E simulation points round the circle (every 15°). */
+const E_STEPS = 24;
 
-/** Sweep the load phase once round the circle of `swr` (1 degree steps). Class E keeps its matched figures. */
-export function swrStress(cls: PaParams['amplifierClass'], m: MatchedPoint, swr: number, designLoadOhm: number): PaSwrStress {
+/**
+ * Sweep the load phase once round the circle of `swr` (1° steps; class E every 15°, by simulation). For class E
+ * rdsOnRatio = Rds(on) / the drain load of one class-E half; its figures scale the matched ones by the simulated
+ * ratio to the simulated design load, so the entered efficiency and the matched model stay the reference.
+ */
+export function swrStress(cls: PaParams['amplifierClass'], m: MatchedPoint, swr: number, designLoadOhm: number, rdsOnRatio = 0): PaSwrStress {
   const all: SwrPoint[] = [];
-  for (let i = 0; i < STEPS; i++) {
-    const phaseDeg = (360 * i) / STEPS;
+  const ref = cls === 'E' ? simulateClassE(1, 0, rdsOnRatio) : null;
+  let worstTurnOn = 0;
+  // at SWR 1 every phase is the design load: one point says it all
+  const steps = swr <= 1 ? 1 : cls === 'E' ? E_STEPS : STEPS;
+  for (let i = 0; i < steps; i++) {
+    const phaseDeg = (360 * i) / steps;
     const zl = loadOnCircle(swr, phaseDeg);
-    const p = cls === 'E'
-      ? { drainPeakV: m.drainPeakV, peakDeviceA: m.peakDeviceA, dissipationW: m.dcInputW - m.outputW + m.biasW, outputW: m.outputW }
-      : stressAt(cls, m, zl);
+    let p: Omit<SwrPoint, 'phaseDeg' | 'loadReOhm' | 'loadImOhm'>;
+    if (ref) {
+      const e = simulateClassE(zl.re, zl.im, rdsOnRatio);
+      worstTurnOn = Math.max(worstTurnOn, e.turnOnRatio);
+      const outputW = (m.outputW * e.outputRatio) / ref.outputRatio;
+      const dcW = (m.dcInputW * e.dcInputRatio) / ref.dcInputRatio;
+      p = {
+        drainPeakV: (m.drainPeakV * e.drainPeakRatio) / ref.drainPeakRatio,
+        peakDeviceA: (m.peakDeviceA * e.switchPeakRatio) / ref.switchPeakRatio,
+        dissipationW: Math.max(0, dcW - outputW) + m.biasW,
+        outputW,
+      };
+    } else {
+      p = stressAt(cls, m, zl);
+    }
     all.push({ phaseDeg, loadReOhm: designLoadOhm * zl.re, loadImOhm: designLoadOhm * zl.im, ...p });
   }
   const pick = (key: keyof SwrPoint, sign: 1 | -1): Worst => {
@@ -111,7 +136,8 @@ export function swrStress(cls: PaParams['amplifierClass'], m: MatchedPoint, swr:
   };
   return {
     swr,
-    model: cls === 'E' ? 'class-e-matched' : 'load-line',
+    model: cls === 'E' ? 'class-e-simulated' : 'load-line',
+    classETurnOnRatio: ref ? worstTurnOn : null,
     points: all.filter((p) => p.phaseDeg % 15 === 0),
     worstDrainPeak: pick('drainPeakV', 1),
     worstPeakCurrent: pick('peakDeviceA', 1),

@@ -208,7 +208,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const swr = swrStress(pa.amplifierClass, {
     drainPeakV: peakDrainV, maxRailV, peakDeviceA: opHot.peakDeviceA, outputW: opHot.outputW, dcInputW: hotDcW,
     biasW: pa.biasIdleMaxA * hotRailV,
-  }, swrUsed, pa.loadOhm);
+  }, swrUsed, pa.loadOhm, classERdsRatio(pa, primaryOhm, op.peakDeviceA, railV));
   findings.push(...swrFindings(pa, swr, {
     subject, atMax, ambientC: project.ambientC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
     matchedDissipationW: thermalRaw.dissipationTotalW, sharedBy: thermalRaw.sharedBy, tjTargetC: thermalRaw.tjTargetC,
@@ -228,6 +228,16 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     efficiency, efficiencySource: pa.efficiency === null ? 'class-default' : 'entered',
     dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, swr, findings, refused: false,
   };
+}
+
+/**
+ * Rds(on) of one class-E switch over the drain load of its half (push-pull halves each drive half the drain-to-drain
+ * load): the entered Rds(on), else the saturation drop over the matched peak current (Ohm's law).
+ */
+function classERdsRatio(pa: PaParams, primaryOhm: number, peakA: number, railV: number): number {
+  const half = pa.topology === 'push-pull' ? primaryOhm / 2 : primaryOhm;
+  const rds = pa.rdsOnOhm ?? (peakA > 0 ? Math.min(pa.saturationV ?? 0, railV) / peakA : 0);
+  return rds / half;
 }
 
 /** A computed current, or the findings that say why it cannot be computed (never a silent 0). */

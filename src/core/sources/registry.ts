@@ -42,6 +42,7 @@ export const SOURCES = {
   'supply.fuse': { status: 'practice', text: `Rated currents from IEC 60127 (miniature fuses, rated-current series); the sizing factor is ${PRACTICE}` },
   'supply.fuse-clearing': { status: 'memory', text: `Pre-arcing time limits of IEC 60127-2 (miniature fuse-links, 5 × 20 mm; 2003 + A1 + A2:2010), standard sheets 3 and 5 (time-lag) as quoted in makers' datasheets, sheet 2 (quick-acting) ${FROM_MEMORY}; fault current by Ohm's law from the winding resistance (leakage neglected); clearing within 5 s and the 1.25 × winding-current rating are ${PRACTICE}` },
   'supply.bleeder-power': { status: 'practice', text: `Dissipation P = V² / R (Joule heating, textbook) at the no-load peak at high mains; using at most 50 % of the resistor's power rating is ${PRACTICE}` },
+  'thermal.enclosure': { status: 'practice', text: `Enclosure rise ΔT = P / (U A) (sealed enclosure, natural convection; U about 5.5 W/(m² K) for painted steel, 6.5 for aluminium, from an enclosure vendor's sizing page); the 10 K caution level is ${PRACTICE}` },
   'supply.no-fuse': { status: 'practice', text: `A regulator's internal current limit protects its output (${PRACTICE})` },
   'supply.bleeder': { status: 'analogy', text: 'Discharge law V(t) = V0 e^(−t/RC) (RC circuit, textbook); the target of 60 V within 5 s is by analogy with IEC 60204-1 (safety of machinery, electrical equipment), clause 6.2.4 (clause number and values from a secondary source, not read); the 2 × power rating is common practice' },
   'supply.regulator-dropout': { status: 'published', text: 'Three-terminal regulator datasheets (78xx fixed and LM317-type adjustable): input above output by the dropout, about 2 V, even at the ripple trough' },
@@ -63,7 +64,7 @@ export const SOURCES = {
   'pa.thermal': { status: 'analogy', text: `Series thermal path Tj = Ta + P (θjc + θcs + θsa) (textbook); target 0.8 Tj,max (${PRACTICE}); average dissipation with the CW duty of 40 % by analogy with ${OET65B_DUTY}` },
   'pa.heat': { status: 'practice', text: `Heatsinks of a keyed transmitter run hot (${PRACTICE})` },
   'pa.swr-load-line': { status: 'practice', text: `Load line at a complex load around the SWR circle: z = (1 + Γ)/(1 − Γ) (definition of the reflection coefficient); classes B and C held at their drive current until the swing reaches the supply, class D at its square-wave voltage; conduction loss ∝ current² (${PRACTICE}); leakage-inductance spikes not modelled` },
-  'pa.swr-class-e': { status: 'memory', text: `Class-E drain stress into a mismatched load rises well above the matched 3.56 Vdd (${FROM_MEMORY}); not simulated in this program` },
+  'pa.class-e-sim': { status: 'design', text: `Time-domain simulation of the class-E stage in this program: switch with Rds(on) and body diode, shunt C1 = 0.1836/(ωR) and series excess reactance 1.1525 R for 50 % duty (nominal design after N. O. Sokal and A. D. Sokal, IEEE JSSC SC-10(3), 1975; the two constants ${FROM_MEMORY}), loaded Q 30, choke 100 R (${PRACTICE}); at the design load it reproduces the published 3.56 Vdd peak and R = 0.5768 Vdd²/P; results scale this program's matched figures` },
   'pa.protection': { status: 'practice', text: `Protection of a PA against mismatch: drain clamp (TVS or zener), SWR or current foldback of the drive or supply, or a device rated above the worst case (${PRACTICE})` },
   'pa.harmonics-class-c': { status: 'memory', text: `Fourier coefficients of a cosine-pulse (reduced-conduction-angle) drain current: α0 = (sin θ − θ cos θ)/(π (1 − cos θ)), α1 = (θ − sin θ cos θ)/(π (1 − cos θ)), αn = 2 (sin nθ cos θ − n cos nθ sin θ)/(π n (n² − 1)(1 − cos θ)), θ = half the conduction angle; tabulated in H. L. Krauss, C. W. Bostian and F. H. Raab, Solid State Radio Engineering (Wiley, 1980) (equations ${FROM_MEMORY}; chapter and table not confirmed)` },
   'pa.harmonics-rectangular': { status: 'published', text: 'Fourier series of a rectangular wave of duty D: harmonic n relative to the fundamental |sin(nπD)| / (n |sin(πD)|) (textbook)' },
@@ -93,6 +94,7 @@ export const SOURCES = {
   'mains.iec-60038': { status: 'published', text: 'IEC 60038 (IEC standard voltages): 230 V ± 10 % at the supply terminals (207–253 V)' },
   // ---------------------------------------------------------------- costing
   'cost.practice': { status: 'practice', text: `Costing arithmetic from your offers (${PRACTICE})` },
+  'cost.stage-coverage': { status: 'design', text: 'Your parts list compared with the stages of your design; no published source applies' },
 } as const satisfies Record<string, SourceEntry>;
 
 export type SourceKey = keyof typeof SOURCES;

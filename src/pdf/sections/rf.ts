@@ -32,8 +32,7 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
         ['Supply', `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')}, DC input ${fv(p.dcInputW, 'W')}, efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`],
         ['Load', p.turnsRatioSource === 'network' ? `matching network, ${fv(p.primaryOhm, 'Ω')} at the drain` : `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
         ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load`],
-        ...(p.swr && p.swr.model === 'load-line' && p.swr.swr > 1 ? [['At SWR ' + p.swr.swr, swrText(p.swr)] as [string, string]] : []),
-        ...(p.swr?.model === 'class-e-matched' ? [['At SWR ' + p.swr.swr, 'class E: stress estimated, not simulated (see the findings)'] as [string, string]] : []),
+        ...(p.swr && p.swr.swr > 1 ? [['At SWR ' + p.swr.swr, swrText(p.swr)] as [string, string]] : []),
         ['Heat', `${fv(p.thermal.dissipationTotalW, 'W')} key-down in all devices; junction ${fv(p.thermal.tjAverageC, '°C')} average, ${fv(p.thermal.tjContinuousC, '°C')} continuous (target ≤ ${fv(p.thermal.tjTargetC, '°C')}); heatsink ≤ ${fv(p.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for tune-up${p.thermal.sharedBy > 1 ? ` (one heatsink for ${p.thermal.sharedBy} devices)` : ''}`],
       ], 110, 8.5);
     }

@@ -12,10 +12,10 @@ describe('SWR circle on the RF page', () => {
     // Definition of Γ: phase 180° at SWR 2 is z = 1/2, 25 Ω on a 50 Ω load
     expect(html).toMatch(/Most dissipation[^]*?25\.0 \+ j0\.0 Ω[^]*?180°/);
   });
-  it('class E says its stress round the circle is not simulated', async () => {
+  it('class E says its stress round the circle comes from the time-domain simulation', async () => {
     const p = project({ rf: rfSettings({ worstSwr: 2 }) });
     p.stages[0].pa = paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1 });
     const html = String(await (<RfResults report={evaluateRf(p, { paRailV: { pa: 13.8 } })} />));
-    expect(html).toContain('not simulated');
+    expect(html).toContain('class E by time-domain simulation');
   });
 });

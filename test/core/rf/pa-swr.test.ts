@@ -90,9 +90,10 @@ describe('evaluatePa judges the ratings at the worst load phase', () => {
     expect(f?.message).toMatch(/drain clamp/);
     expect(f?.message).toMatch(/rated 35 V or more/); // 1.25 x 27.6 V = 34.5 V, rounded up
   });
-  it('class E says its SWR stress is not simulated', () => {
-    const r = evaluatePa(paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1 }), 13.8, proj, 'PA', { worstSwr: 2 });
-    expect(r.swr?.model).toBe('class-e-matched');
-    expect(r.findings.find((x) => x.rule === 'pa.swr-class-e')?.severity).toBe('caution');
+  it('class E is simulated round the circle: its worst drain peak exceeds the matched 3.56 x supply', () => {
+    const r = evaluatePa(paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1, rdsOnOhm: 0.1, saturationV: null }), 13.8, proj, 'PA', { worstSwr: 2 });
+    expect(r.swr?.model).toBe('class-e-simulated');
+    expect(r.swr!.worstDrainPeak.value).toBeGreaterThan(r.peakDrainV);
+    expect(r.findings.find((x) => x.rule === 'pa.vds')?.message).toMatch(/reflection phase \d+°/);
   });
 });
