@@ -213,6 +213,8 @@ export const club30m: Project = {
       { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 2.5, minimumV: 20, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: 1 },
     ],
     primaryFuseA: null,
+    enclosureAreaM2: null,
+    enclosureUWPerM2K: null,
   },
   stages,
   rf: defaultRf(),

@@ -39,6 +39,8 @@ export const portable20m: Project = {
       },
     ],
     primaryFuseA: null,
+    enclosureAreaM2: null,
+    enclosureUWPerM2K: null,
   },
   stages: [
     { id: 'p-rx', kind: 'receiver', name: 'Superhet receiver, 4-crystal filter', notes: '', loads: [{ railId: 'rail-9v', currentA: perMode(0.032, 0.006, 0.006) }], dissipationW: null },

@@ -6,6 +6,7 @@ import { sortFindings, type Finding } from './findings';
 import { evaluateSupply } from './power/evaluate-supply';
 import { withSimulationMemo } from './power/rectifier-sim';
 import type { SupplyReport } from './power/report-types';
+import { heatBudget, type HeatBudget } from './power/heat-budget';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
@@ -16,6 +17,8 @@ export interface EvaluationReport {
   budget: BudgetReport;
   /** null when the project has no rails */
   supply: SupplyReport | null;
+  /** Heat dissipated inside the enclosure and its internal rise; null when the project has no rails */
+  heat: HeatBudget | null;
   rf: RfReport;
   cost: CostReport;
   /** parts on the parts list checked against the computed design (reservoir capacitors) */
@@ -177,6 +180,16 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);
   const mains = mainsCornerFindings(project.mains, project.rf.spuriousRule);
-  const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
-  return { budget, supply, rf, cost, catalog, paRailV, findings };
+  const heat = project.supply.rails.length ? heatBudget(supply, paHeat(rf), project.supply.enclosureAreaM2, project.supply.enclosureUWPerM2K, project.ambientC) : null;
+  const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...(heat?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
+  return { budget, supply, heat, rf, cost, catalog, paRailV, findings };
+}
+
+/** Each PA's duty-averaged dissipation, all devices (W): the per-device average times the device count. */
+function paHeat(rf: RfReport): { name: string; averageW: number }[] {
+  return rf.stages.flatMap((st) => {
+    const t = st.pa?.thermal;
+    if (!t || !(t.dissipationPerDeviceW > 0)) return [];
+    return [{ name: st.stageName, averageW: t.averagePerDeviceW * (t.dissipationTotalW / t.dissipationPerDeviceW) }];
+  });
 }

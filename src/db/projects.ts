@@ -124,7 +124,7 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     kits: p.kits,
     keyingDuty: p.keyingDuty,
     version: p.version,
-    supply: { transformers, rails, primaryFuseA: p.primaryFuseA },
+    supply: { transformers, rails, primaryFuseA: p.primaryFuseA, enclosureAreaM2: p.enclosureAreaM2, enclosureUWPerM2K: p.enclosureUWPerM2K },
     stages,
     rf: p.rf as RfSettings,
     parts,
@@ -192,6 +192,8 @@ function projectColumns(p: Project) {
     kits: p.kits,
     keyingDuty: p.keyingDuty,
     primaryFuseA: p.supply.primaryFuseA,
+    enclosureAreaM2: p.supply.enclosureAreaM2 ?? null,
+    enclosureUWPerM2K: p.supply.enclosureUWPerM2K ?? null,
     rf: p.rf,
     costing: p.costing,
   };

@@ -18,6 +18,8 @@ export const projects = sqliteTable('projects', {
   kits: integer('kits').notNull(),
   keyingDuty: real('keying_duty').notNull(),
   primaryFuseA: real('primary_fuse_a'),
+  enclosureAreaM2: real('enclosure_area_m2'),
+  enclosureUWPerM2K: real('enclosure_u_w_per_m2k'),
   rf: text('rf', { mode: 'json' }).notNull(), // RfSettings
   costing: text('costing', { mode: 'json' }).notNull(), // Costing
   version: integer('version').notNull().default(1),

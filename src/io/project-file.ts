@@ -7,7 +7,7 @@ import { bomLineSpec, costingSpec, offerSpec, partSpec, supplierSpec } from '../
 import { STAGE_DATA } from '../core/spec/stage-data';
 import { loadSpec, stageSpec } from '../core/spec/stage';
 import { mainsSpec, projectFieldsSpec } from '../core/spec/settings';
-import { primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec/supply';
+import { enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec/supply';
 import { batterySpec, rectifiedSpec, regulatedSpec, withRailDefaults } from '../core/spec/supply-rails';
 import { rfSettingsSpec } from '../core/spec/rf-settings';
 import { specFileSchema, specShape } from './spec-schema';
@@ -77,6 +77,8 @@ export const projectSchema = z.object({
     transformers: z.array(transformer).max(10),
     rails: z.array(rail).max(50),
     ...specShape(primaryFuseSpec),
+    // files written before the enclosure existed have neither key: read as not stated
+    ...Object.fromEntries(Object.entries(specShape(enclosureSpec)).map(([k, s]) => [k, s.optional().transform((v) => v ?? null)])),
   }),
   stages: z.array(stage).max(100),
   rf,

@@ -26,7 +26,7 @@ export async function buildPackWithInfo(project: Project, report: PackReport, op
   const sheets = packingSheets(l, project, report.cost);
   l.newPage();
   budgetSection(l, report.budget);
-  supplySection(l, report.supply);
+  supplySection(l, report.supply, report.heat ?? null);
   rfSection(l, report.rf);
   checklistPages(l, 'Build checklist', 'Stages in build order. Tick each line as you go; the numbers come from this pack’s computed results.', buildChecklist(project, report));
   checklistPages(l, 'Safety checklist', '', safetyChecklist(project, report));

@@ -1,12 +1,13 @@
 // Supply editor forms, derived from the field specs in src/core/spec (display text -> SI), plus the "what still uses
 // this?" checks for deletes. Rail forms are parsed by the rail edit in core (src/core/edits/supply-rails.ts).
 import type { Project, Transformer, Winding } from '../core/model';
-import { addRailSpec, primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec';
+import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec';
 import { specFormSchema } from './forms/spec-schema';
 
 export const transformerSchema = specFormSchema<Pick<Transformer, 'name' | 'construction'>>(transformerSpec);
 export const windingSchema = specFormSchema<Omit<Winding, 'id'>>(windingSpec);
 export const fuseSchema = specFormSchema<{ primaryFuseA: number | null }>(primaryFuseSpec);
+export const enclosureSchema = specFormSchema<{ enclosureAreaM2: number | null; enclosureUWPerM2K: number | null }>(enclosureSpec);
 export const addRailSchema = specFormSchema<{ name: string; source: string }>(addRailSpec);
 
 export { possibleParents } from '../core/edits/supply-rails';

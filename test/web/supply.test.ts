@@ -51,7 +51,7 @@ describe('supply page', () => {
     const p = await stored();
     const res = await post(`${base}/rails/rail-pa`, {
       version: String(p.version), name: 'PA rail', windingId: 'w-20', topology: 'centre-tap', diodeDrop: '0.7', diodeR: '20m', reservoir: '10000u',
-      esr: '25 mΩ', bleeder: '', capV: '63 V', capRipple: '4 A', rippleTarget: '', margin: '0', fuse: '3.15 A',
+      esr: '25 mΩ', bleeder: '', capV: '63 V', capRipple: '4 A', rippleTarget: '', margin: '0', fuse: '3.15 A', windingFuseSheet: 'T3',
     }, true);
     expect(res.status).toBe(200);
     expect(await res.text()).toMatch(/<details class="card supply-item rail" id="rail-rail-pa" open/); // the edited rail stays open after the swap
@@ -66,7 +66,7 @@ describe('supply page', () => {
     const rail = p.supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
     const page = await (await t.app.request(`http://localhost${base}`)).text();
     expect(page).toContain('Lowest voltage its loads need');
-    const values = { version: String(p.version), name: rail.name, windingId: rail.windingId, topology: rail.topology, diodeDrop: '0.9', diodeR: '30m', reservoir: '6800', esr: '30m', bleeder: '2k2', capV: '50', capRipple: '3.6', rippleTarget: '2.5', margin: '0', fuse: '2.5' };
+    const values = { version: String(p.version), name: rail.name, windingId: rail.windingId, topology: rail.topology, diodeDrop: '0.9', diodeR: '30m', reservoir: '6800', esr: '30m', bleeder: '2k2', capV: '50', capRipple: '3.6', rippleTarget: '2.5', margin: '0', fuse: '2.5', windingFuseSheet: 'T3' };
     let res = await post(`${base}/rails/rail-pa`, { ...values, minimumV: '21.5' }, true);
     expect(res.status).toBe(200);
     let r = (await stored()).supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
@@ -139,6 +139,21 @@ describe('supply page', () => {
     expect(html).toContain('Rated voltage &quot;16 volts-ish&quot; is not understood');
     expect(html).toContain('Nothing was saved');
     expect(await stored()).toEqual(before);
+  });
+
+  it('saves the enclosure (a bare surface is read in cm²) and refuses a negative one, naming it, saving nothing', async () => {
+    const before = await stored();
+    const bad = await post(`${base}/enclosure`, { version: String(before.version), enclosureArea: '-5', enclosureU: '5.5' }, true);
+    expect(bad.status).toBe(422);
+    expect(await bad.text()).toContain('Enclosure surface');
+    expect(await stored()).toEqual(before);
+    const res = await post(`${base}/enclosure`, { version: String(before.version), enclosureArea: '1160', enclosureU: '6.5' }, true);
+    expect(res.status).toBe(200);
+    const s = (await stored()).supply;
+    expect(s.enclosureAreaM2).toBeCloseTo(0.116, 12); // 1160 cm² = 0.116 m²
+    expect(s.enclosureUWPerM2K).toBe(6.5);
+    // 15 W in this box would rise 19.9 K (reference values part 2 §8); the page shows the heat card with a rise
+    expect(await res.text()).toMatch(/Heat in the enclosure[\s\S]*rise/);
   });
 
   it('refuses a stale version with 409 and keeps the entries', async () => {

@@ -4,7 +4,7 @@ import type { Child, FC } from 'hono/jsx';
 import { PageMessages } from '../components/messages';
 import type { Project } from '../../src/core/model';
 import { defaults, formValues } from '../../src/core/spec/derive';
-import { addRailSpec, primaryFuseSpec, transformerSpec } from '../../src/core/spec/supply';
+import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec } from '../../src/core/spec/supply';
 import { FormErrors, type FieldState } from '../components/fields';
 import { SpecField } from '../components/spec-fields';
 import { stateFor, type Failed } from '../components/failed';
@@ -52,12 +52,25 @@ const PrimaryFuse: FC<{ project: Project; state: FieldState }> = ({ project, sta
   </form>
 );
 
+const Enclosure: FC<{ project: Project; state: FieldState }> = ({ project, state }) => (
+  <form {...hx(`/projects/${project.id}/supply/enclosure`)} class="card" aria-label="Enclosure">
+    <Version version={project.version} />
+    <FormErrors state={state} />
+    <div class="row">
+      <SpecField spec={enclosureSpec} k="enclosureAreaM2" state={state} idp="enc" size={7} />
+      <SpecField spec={enclosureSpec} k="enclosureUWPerM2K" state={state} idp="enc" size={5} />
+      <button type="submit">Save enclosure</button>
+    </div>
+  </form>
+);
+
 export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, failed, notice, openRail }) => {
   const base = `/projects/${project.id}/supply`;
   // new items start with an empty name (the builder names them); the other fields from the specs' defaults
   const addTrafo = stateFor('add-transformer', failed, () => ({ ...formValues(transformerSpec, defaults(transformerSpec)), name: '' }));
   const addRail = stateFor('add-rail', failed, () => ({ name: '', source: sourceOptions(project)[0]?.[0] ?? 'battery' }));
   const fuse = stateFor('primary-fuse', failed, () => formValues(primaryFuseSpec, project.supply));
+  const enclosure = stateFor('enclosure', failed, () => formValues(enclosureSpec, project.supply));
   return (
     <div id="supply">
       <PageMessages notice={notice} failed={failed} />
@@ -89,6 +102,7 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
           ) : (
             <p class="hint">A battery / DC station needs no mains transformer or primary fuse.</p>
           )}
+          <Enclosure project={project} state={enclosure} />
         </section>
         <section>
           <h2>Rails</h2>

@@ -13,6 +13,8 @@ import { formatValue as fv } from '../../src/core/units';
 import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
 import { BleederLine } from '../components/supply-bleeder';
+import { HeatCard } from '../components/supply-heat';
+import type { HeatBudget } from '../../src/core/power/heat-budget';
 
 const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
 const pct = (x: number) => `${(x * 100).toFixed(0)} %`;
@@ -217,7 +219,7 @@ const TransformerCard: FC<{ t: TransformerReport }> = ({ t }) => (
   </div>
 );
 
-export const SupplyResults: FC<{ report: SupplyReport }> = ({ report }) => {
+export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null }> = ({ report, heat }) => {
   const inRails = new Set(report.rails.flatMap((r) => r.findings));
   const general = report.findings.filter((f) => !inRails.has(f));
   return (
@@ -236,6 +238,7 @@ export const SupplyResults: FC<{ report: SupplyReport }> = ({ report }) => {
         Fuse and earth the supply, discharge reservoirs before touching, and follow your local electrical code and licensed practice.
       </p>
       {report.rails.map((r) => (r.kind === 'rectified' ? <RectifiedCard rail={r} /> : r.kind === 'regulated' ? <RegulatedCard rail={r} /> : <BatteryCard rail={r} />))}
+      {heat ? <HeatCard heat={heat} /> : null}
       {report.transformers.length || report.primary || general.length ? (
         <section class="card supply-transformers">
           <h3>Transformers and primary</h3>

@@ -1,4 +1,5 @@
 // Checklist types: plain data a page, the CLI or the PDF pack can print. Pure; no I/O.
+import type { HeatBudget } from '../power/heat-budget';
 import type { BudgetReport } from '../budget';
 import type { Finding } from '../findings';
 import type { SupplyReport } from '../power/report-types';
@@ -31,6 +32,8 @@ export interface ChecklistSection {
 export interface ChecklistReport {
   budget: BudgetReport;
   supply: SupplyReport | null;
+  /** Heat inside the enclosure (absent in reports made without it). */
+  heat?: HeatBudget | null;
   rf: RfReport | null;
   cost: CostReport | null;
   findings: Finding[];

@@ -12,6 +12,7 @@ import { bleederFindings, bleederReport } from './bleeder';
 import { fittedFuseFindings, fuseMarking, railFuse } from './fuses';
 import { recommendWinding } from './transformer';
 import { windingFuseReport } from './winding-fuse';
+import { rectifierLoss } from './rectifier-loss';
 import { DEFAULT_SECONDARY_V } from './standard-values';
 
 export interface RectifiedContext {
@@ -160,7 +161,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   return {
     report: {
       kind: 'rectified', railId: rail.id, railName: rail.name, topology: rail.topology, requiredMinV: ctx.requiredMinV, requirementNote: ctx.requirementNote, outputA, corners,
-      worstVoltageCornerId: worst.id, worstThermalCornerId: thermal.id, waveform, winding: winding_?.result ?? null, reservoir, bleeder, fuse, windingFuse: wf?.report ?? null,
+      worstVoltageCornerId: worst.id, worstThermalCornerId: thermal.id, waveform, winding: winding_?.result ?? null, reservoir, bleeder, fuse, windingFuse: wf?.report ?? null, rectifierLoss: rectifierLoss(rail.topology, rail.diodeDropV, rail.diodeResistanceOhm, corners, ctx.keyingDuty),
       findings: sortFindings(findings), recommendations,
     },
     simulations,

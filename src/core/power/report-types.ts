@@ -83,6 +83,16 @@ export interface FuseRecommendation {
   reasoning: string;
 }
 
+/** Dissipation of a rectifier's diodes at high mains (W). */
+export interface RectifierLoss {
+  keyDownW: number;
+  keyUpW: number;
+  /** Averaged over the keying duty (W). */
+  thermalW: number;
+  /** With a continuous carrier (W). */
+  tuneUpW: number;
+}
+
 /** A fuse against one fault current, by the IEC 60127-2 pre-arcing limits of its sheet. */
 export interface FaultCheck {
   /** Fault current through the fuse, RMS (A). */
@@ -241,6 +251,8 @@ export interface RectifiedRailReport extends RailBase {
   fuse: FuseRecommendation;
   /** Fuse in the winding lead ahead of the rectifier and its fault check; null without a winding. */
   windingFuse: WindingFuseReport | null;
+  /** Diode dissipation of the rectifier at high mains. */
+  rectifierLoss: RectifierLoss;
 }
 
 /** One corner for a regulated rail. */

@@ -6,7 +6,7 @@ import { relaySpec } from './relay';
 import { loadSpec, stageSpec } from './stage';
 import { mainsSpec, newProjectSpec, settingsSpec } from './settings';
 import { rfSettingsSpec } from './rf-settings';
-import { addRailSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
+import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
 import { batterySpec, rectifiedSpec, regulatedSpec } from './supply-rails';
 import { offerSpec, partSpec, supplierSpec } from './parts';
 import { bomLineSpec } from './parts-list';
@@ -16,10 +16,10 @@ export * from './field';
 export { validate, formValues, parseForm, defaults, pick, readField } from './derive';
 export { paSpec, lpfSpec, relaySpec, stageSpec, loadSpec };
 export { settingsSpec, mainsSpec, newProjectSpec, rfSettingsSpec };
-export { transformerSpec, windingSpec, primaryFuseSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec };
+export { transformerSpec, windingSpec, primaryFuseSpec, enclosureSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec };
 export { partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec };
 
 export const ALL_SPECS: Spec[] = [stageSpec, loadSpec, paSpec, lpfSpec, relaySpec,
   settingsSpec, rfSettingsSpec,
-  transformerSpec, windingSpec, primaryFuseSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec,
+  transformerSpec, windingSpec, primaryFuseSpec, enclosureSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec,
   partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec];

@@ -12,7 +12,7 @@ import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
 import { settingsSpec } from './settings';
 import { rfSettingsSpec } from './rf-settings';
-import { addRailSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
+import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
 import { batterySpec, rectifiedSpec, regulatedSpec } from './supply-rails';
 
 /** One stored object and the words that name it ("Stage 'PA', PA data"). */
@@ -43,6 +43,7 @@ export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
   { spec: costingSpec, at: (p) => [{ subject: 'Costing settings', value: p.costing }] },
   { spec: settingsSpec, at: (p) => [{ subject: 'Project settings', value: p }] },
   { spec: rfSettingsSpec, at: (p) => [{ subject: 'RF settings', value: p.rf }] },
+  { spec: enclosureSpec, at: (p) => [{ subject: 'Enclosure', value: p.supply }] },
   // The supply's objects are checked by the supply design itself (power/supply-inputs.ts, same specs), because a
   // refused transformer, winding or rail must also be left out of the design with everything that depends on it;
   // listing them here too would report each refusal twice. The add-rail form has no stored object.

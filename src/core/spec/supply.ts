@@ -48,6 +48,27 @@ export const primaryFuseSpec = defineSpec({
   },
 });
 
+/** The enclosure the supply sits in: its surface and heat transfer coefficient give its internal temperature rise. */
+export const enclosureSpec = defineSpec({
+  name: 'enclosure',
+  label: 'Enclosure',
+  fields: {
+    enclosureAreaM2: optNum('Enclosure surface', 'm²', { symbol: 'cm²', scale: 1e-4 }, 0, 100, null, {
+      form: 'enclosureArea',
+      exclusiveMin: true,
+      help: 'faces that shed heat; empty = no rise computed',
+      example: '1160',
+    }),
+    // Sealed enclosures in still air: steel about 5.5, aluminium about 6.5 W/(m² K) (a vendor's sizing page)
+    enclosureUWPerM2K: optNum('Heat transfer coefficient', 'W/(m²·K)', { symbol: 'W/(m²·K)', scale: 1 }, 0, 100, 5.5, {
+      form: 'enclosureU',
+      exclusiveMin: true,
+      help: 'sealed steel about 5.5, aluminium 6.5',
+      example: '5.5',
+    }),
+  },
+});
+
 /** The add-a-rail form: the source decides the kind (w:<winding id> rectified, r:<rail id> regulated, battery). */
 export const addRailSpec = defineSpec({
   name: 'add-rail',

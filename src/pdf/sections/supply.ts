@@ -1,11 +1,12 @@
 // Supply design summary: transformer, reservoirs, fuses, bleeders, regulators, heatsinks, battery runtime,
 // the rectifier waveform plot, and the supply's findings. Reads the supply report only.
 import type { SupplyReport, RectifiedRailReport, RegulatedRailReport, BatteryRailReport, FaultCheck } from '../../core/power/report-types';
+import type { HeatBudget } from '../../core/power/heat-budget';
 import { GREY, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
 import { findingsList, fv, keyValues, notComputed } from './common';
 
-export function supplySection(l: Layout, supply: SupplyReport | null): void {
+export function supplySection(l: Layout, supply: SupplyReport | null, heat: HeatBudget | null = null): void {
   l.heading('Power supply design');
   if (!supply) return notComputed(l, 'Supply design');
   if (supply.mains) keyValues(l, [['Mains', `${fv(supply.mains.nominalV, 'V')} nominal, ${fv(supply.mains.lowV, 'V')} low, ${fv(supply.mains.highV, 'V')} high, ${fv(supply.mains.frequencyHz, 'Hz')}`], ['Keying duty (heating)', `${Math.round(supply.keyingDuty * 100)} %`]]);
@@ -26,6 +27,14 @@ export function supplySection(l: Layout, supply: SupplyReport | null): void {
     if (r.kind === 'rectified') rectified(l, r);
     else if (r.kind === 'regulated') regulated(l, r);
     else battery(l, r);
+  }
+  if (heat) {
+    l.heading('Heat in the enclosure', 2, 80);
+    keyValues(l, [
+      ...heat.sources.map((s): [string, string] => [s.name, `${fv(s.watts, 'W')} (${s.note})`]),
+      ['Total inside', `${fv(heat.totalW, 'W')}${heat.riseK !== null ? `; rise ${fv(heat.riseK, 'K')}, about ${fv(heat.insideC, '°C')} inside` : '; enclosure not entered'}`],
+    ], 110, 8.5);
+    findingsList(l, heat.findings, true);
   }
   l.heading('All supply findings', 2);
   findingsList(l, supply.findings);

@@ -2,7 +2,7 @@
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Project, Rail } from '../../core/model';
-import { formValues, primaryFuseSpec, transformerSpec, windingSpec } from '../../core/spec';
+import { enclosureSpec, formValues, primaryFuseSpec, transformerSpec, windingSpec } from '../../core/spec';
 import { RAIL_SPECS } from '../../core/spec/supply-rails';
 import { addRail, editRail } from '../../core/edits/supply-rails';
 import { evaluateCached as evaluate } from '../cache/reports';
@@ -39,7 +39,7 @@ function supplyResultsFor(project: Project, report: EvaluationReport) {
           .
         </p>
       ) : null}
-      <SupplyResults report={report.supply} />
+      <SupplyResults report={report.supply} heat={report.heat} />
       {report.catalog.length ? (
         <section class="card">
           <h3>Reservoir capacitors on the parts list against this design</h3>
@@ -141,6 +141,10 @@ export function supplyRoutes(deps: Deps) {
 
   app.post('/projects/:id/supply/fuse', projectEdit(deps, { ...common, form: 'primary-fuse', schema: F.fuseSchema, values: (p) => formValues(primaryFuseSpec, p.supply),
     change: (p, d) => ({ ...p, supply: { ...p.supply, primaryFuseA: d.primaryFuseA } }),
+  }));
+
+  app.post('/projects/:id/supply/enclosure', projectEdit(deps, { ...common, form: 'enclosure', schema: F.enclosureSchema, values: (p) => formValues(enclosureSpec, p.supply),
+    change: (p, d) => ({ ...p, supply: { ...p.supply, enclosureAreaM2: d.enclosureAreaM2, enclosureUWPerM2K: d.enclosureUWPerM2K } }),
   }));
 
   // ------------------------------------------------------------ deletes: confirm page, then the post
