@@ -110,6 +110,18 @@ describe('CSV export and import', () => {
     expect(lines.filter((l) => l.includes('NC-BR4-200') || l.includes('HR-1144'))).toHaveLength(1); // one BR line, one chosen supplier
   });
 
+  it('downloads the order sheets per supplier as CSV, each supplier closed by its totals, agreeing with the plan', async () => {
+    const res = await t.app.request(`http://localhost/projects/${ID}/orders.csv`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-disposition')).toContain('-orders.csv');
+    const text = (await res.text()).replace(/^\uFEFF/, '');
+    const report = costProject(await stored());
+    expect(text.split(/\r?\n/)[0]).toBe('Supplier,SKU,Description,Refs,Order qty,Needed qty,Break from,Currency,Unit price,Offer line cost,Line cost USD');
+    for (const s of report.suppliers) expect(text).toContain(`${s.supplier},,Total order`);
+    expect(text).toContain(`Total build (${report.kits} kits),,,,,,,,${report.totals.buildCents / 100}`);
+    expect((await t.app.request(`http://localhost/projects/${ID}/orders.csv?sep=tab`)).status).toBe(400);
+  });
+
   const CSV = ['Refs,Description,Category,Qty,Supplier,SKU,Unit price', 'R30,Resistor 10 kΩ 0.25 W,resistor,1,Northfield Components,NC-R-10K,0.05', 'C30,Capacitor 100 nF 50 V,capacitor,lots,Northfield Components,NC-C-100N,0.08', 'D30,Signal diode 100 V,diode,2,Harbor Radio Surplus,HR-D100,0.04'].join('\n');
 
   it('previews the rows with per-row errors and saves nothing', async () => {

@@ -24,6 +24,9 @@ export const BomBody: FC<BomBodyProps> = ({ project, report, failed, notice }) =
       <BomLines project={project} failed={failed} />
       <p class="bom-export">
         Export the costed parts list: <a href={csv}>CSV (comma separated)</a> · <a href={`${csv}?sep=semicolon`}>CSV (semicolon, decimal comma)</a>
+        <br />
+        Order sheets per supplier (SKU, quantity, price break, line totals, shipping):{' '}
+        <a href={`/projects/${project.id}/orders.csv`}>CSV</a> · <a href={`/projects/${project.id}/orders.csv?sep=semicolon`}>CSV (semicolon)</a>
       </p>
       <CostResults report={report} currency={project.currency} />
       <ImportForm project={project} error={failed?.form === 'import' ? failed.state.errors._form : undefined} />

@@ -80,6 +80,11 @@ export const CostResults: FC<{ report: CostReport; currency: string }> = ({ repo
             Everything from one supplier: cheapest is {single.supplier} at {formatMoney(single.totalCents, currency)} (shipping{' '}
             {formatMoney(single.shippingCents, currency)}),{' '}
             {single.extraCents > 0 ? <>{formatMoney(single.extraCents, currency)} more than the plan below.</> : <>the same as the plan below.</>}
+            {single.unpricedLines > 0 ? (
+              <span class="sev sev-caution">
+                Incomplete: {single.unpricedLines} needed line(s) have no usable price and are left out of both figures.
+              </span>
+            ) : null}
           </>
         ) : (
           <>One supplier for everything: not possible. {single.reason}</>

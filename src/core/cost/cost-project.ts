@@ -103,6 +103,11 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
     findings.push({ severity: 'ok', rule: 'cost.complete', subject: 'Build total', value: 0, limit: 0, unit: '', source: SOURCE, message: 'Every needed line has a priced offer.' });
   }
 
+  for (const st of project.stages) {
+    if (project.bom.some((b) => b.stageId === st.id)) continue;
+    findings.push({ severity: 'caution', rule: 'cost.empty-stage', subject: st.name, value: 0, limit: 1, unit: 'lines', source: 'cost.stage-coverage', message: 'This stage has no parts on the parts list, so its cost is missing from the totals; add its parts (or put them on it from General).' });
+  }
+
   const suppliers: SupplierUse[] = (plan?.used ?? []).map((s) => {
     const mine = costLines.filter((l) => l.supplier === names[s]);
     return { supplier: names[s], lineCount: mine.length, partsCents: mine.reduce((t, l) => t + l.lineCostCents, 0), shippingCents: input.shippingCents[s] };
@@ -123,7 +128,7 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
       return { section, label: COST_SECTION_LABELS[section], partsCents: mine.reduce((t, l) => t + l.lineCostCents, 0), lineCount: mine.length };
     }),
     suppliers,
-    singleSupplier: singleComparison(input, purchasable.length, plan?.totalCents ?? 0),
+    singleSupplier: singleComparison(input, purchasable.length, plan?.totalCents ?? 0, unpricedLines),
     totals: {
       partsCents,
       shippingCents,
@@ -182,12 +187,12 @@ function stageSubtotals(project: Project, lines: LineContext[], costLines: CostL
   return groups.filter((g) => g.lineIds.length > 0);
 }
 
-function singleComparison(input: PlanInput, purchasable: number, planTotal: number): SingleSupplierComparison {
+function singleComparison(input: PlanInput, purchasable: number, planTotal: number, unpriced: number): SingleSupplierComparison {
   if (purchasable === 0) return { available: false, reason: 'No line has a usable priced offer.' };
   const single = planSingleSupplier(input);
   if (single === null) {
     return { available: false, reason: 'No single supplier offers every priced line; the parts must come from several suppliers.' };
   }
   const s = single.used[0];
-  return { available: true, supplier: input.suppliers[s], partsCents: single.partsCents, shippingCents: single.shippingCents, totalCents: single.totalCents, extraCents: single.totalCents - planTotal };
+  return { available: true, supplier: input.suppliers[s], partsCents: single.partsCents, shippingCents: single.shippingCents, totalCents: single.totalCents, extraCents: single.totalCents - planTotal, unpricedLines: unpriced };
 }

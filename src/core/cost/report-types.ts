@@ -111,6 +111,8 @@ export type SingleSupplierComparison =
       totalCents: number;
       /** totalCents minus the chosen plan's total (>= 0): what one-stop shopping costs extra. */
       extraCents: number;
+      /** Needed lines with no usable price, left out of both totals: the comparison is incomplete when > 0. */
+      unpricedLines: number;
     }
   | { available: false; reason: string };
 

@@ -9,3 +9,4 @@ export { previewImport } from './import-preview';
 export type { ImportKind, ImportOptions, ImportPreview, PreviewRow, RowError, ImportValues } from './import-preview';
 export { planImport, rowsToProjectData, type ImportPlan, type ImportedRow, type PlanOptions, type IdKind } from './import-plan';
 export { costReportToCsv, partsCsvHeaders, type PartsCsvOptions } from './export-parts';
+export { orderSheetsToCsv, orderCsvHeaders } from './export-orders';

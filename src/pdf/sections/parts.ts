@@ -3,6 +3,7 @@
 import type { Project } from '../../core/model';
 import type { CostReport } from '../../core/cost/report-types';
 import { formatMoney } from '../../core/cost/money';
+import { orderSheets } from '../../core/cost/order-sheet';
 import { GREY, FAIL, type Column, type Layout, type Row } from '../layout';
 import { notComputed } from './common';
 
@@ -59,11 +60,47 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null):
   if (cost.totals.perKitPartsCents !== null && cost.kits > 1) sum.push({ cells: ['Per kit, parts only', money(cost.totals.perKitPartsCents)] });
   if (cost.raisedSavingsCents > 0) sum.push({ cells: ['Saved by buying up to a price break (included above)', money(cost.raisedSavingsCents)] });
   if (cost.totals.unpricedLines > 0) sum.push({ cells: [`Unpriced lines left out of the totals`, String(cost.totals.unpricedLines)], color: FAIL });
+  const single = cost.singleSupplier;
+  if (single.available) {
+    const gap = single.unpricedLines > 0 ? `; incomplete: ${single.unpricedLines} unpriced line(s) left out` : '';
+    sum.push({ cells: [`Everything from ${single.supplier} (${money(single.extraCents)} more than the plan${gap})`, money(single.totalCents)], color: single.unpricedLines > 0 ? FAIL : undefined });
+  } else sum.push({ cells: [`Everything from one supplier: not possible. ${single.reason}`, '—'] });
   l.table([{ header: 'Total', width: 0.7 }, { header: cost.currency, width: 0.3, align: 'right' }], sum);
+  orderSheetTables(l, cost);
   const notesPt = cost.notes.reduce((a, n) => a + l.wrap(`• ${n}`, l.contentWidthPt, 7.5).length * 9.75 + 1, 0);
   l.ensure(Math.min(notesPt, 300));
   for (const n of cost.notes) l.text(`• ${n}`, { sizePt: 7.5, color: GREY, afterPt: 1 });
   void project;
+}
+
+/** The organiser's order sheet per supplier: SKU, quantity, the break reached, line totals, shipping. */
+function orderSheetTables(l: Layout, cost: CostReport): void {
+  const sheets = orderSheets(cost);
+  if (sheets.length === 0) return;
+  const money = (c: number) => formatMoney(c, cost.currency);
+  l.heading('Order sheets per supplier', 2, 80);
+  const columns: Column[] = [
+    { header: 'SKU', width: 0.16 },
+    { header: 'Description', width: 0.33 },
+    { header: 'Order', width: 0.08, align: 'right' },
+    { header: 'Break from', width: 0.09, align: 'right' },
+    { header: 'Unit', width: 0.11, align: 'right' },
+    { header: 'Offer line', width: 0.11, align: 'right' },
+    { header: cost.currency, width: 0.12, align: 'right' },
+  ];
+  for (const sheet of sheets) {
+    const rows: Row[] = [{ cells: [sheet.supplier], bold: true, shade: true, span: true }];
+    for (const x of sheet.lines) {
+      const desc = x.refs ? `${x.description} (${x.refs})` : x.description;
+      const more = x.qty > x.neededQty ? ` (need ${x.neededQty})` : '';
+      rows.push({ cells: [x.sku || '—', desc + more, String(x.qty), x.breakMinQty === null ? '—' : String(x.breakMinQty),
+        formatMoney(x.unitPriceCents, x.offerCurrency), formatMoney(x.offerCostCents, x.offerCurrency), money(x.lineCostCents)] });
+    }
+    rows.push({ cells: ['', 'Parts', '', '', '', '', money(sheet.partsCents)] });
+    rows.push({ cells: ['', 'Shipping', '', '', '', '', money(sheet.shippingCents)] });
+    rows.push({ cells: ['', `Order total ${sheet.supplier}`, '', '', '', '', money(sheet.totalCents)], bold: true });
+    l.table(columns, rows, 8, `Order sheet — ${sheet.supplier}`);
+  }
 }
 
 /** One page per kit with tick boxes, for a group build (kits > 1). */

@@ -3,7 +3,7 @@ import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Project } from '../../core/model';
 import { costProject } from '../../core/cost';
-import { costReportToCsv, planImport, previewImport, rowsToProjectData, guessDelimiter, parseCsv, guessMapping, type IdKind } from '../../core/csv';
+import { costReportToCsv, orderSheetsToCsv, planImport, previewImport, rowsToProjectData, guessDelimiter, parseCsv, guessMapping, type IdKind } from '../../core/csv';
 import { loadProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
 import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
@@ -72,16 +72,18 @@ export function bomRoutes(deps: Deps) {
     return sendPage(c, bomPage(project, undefined, notice));
   });
 
-  app.get('/projects/:id/bom.csv', async (c) => {
-    const project = await loadProject(deps.database.db, c.req.param('id'));
+  const csvRoute = (suffix: string, write: typeof costReportToCsv) => async (c: Context) => {
+    const project = await loadProject(deps.database.db, c.req.param('id')!);
     if (!project) return c.notFound();
     const sep = c.req.query('sep') ?? 'comma';
     if (sep !== 'comma' && sep !== 'semicolon') return c.text(`Bad request: sep must be "comma" or "semicolon" (you gave "${sep.slice(0, 40)}").`, 400);
     const semicolon = sep === 'semicolon';
-    const text = costReportToCsv(costProject(project), { delimiter: semicolon ? ';' : ',' });
-    const fileName = `${project.name.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 60) || 'parts-list'}-parts.csv`;
+    const text = write(costProject(project), { delimiter: semicolon ? ';' : ',' });
+    const fileName = `${project.name.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 60) || 'parts-list'}-${suffix}.csv`;
     return c.body(text, 200, { 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileName}"` });
-  });
+  };
+  app.get('/projects/:id/bom.csv', csvRoute('parts', costReportToCsv));
+  app.get('/projects/:id/orders.csv', csvRoute('orders', orderSheetsToCsv));
 
   app.post('/projects/:id/bom/lines', projectEdit(deps, { ...common, form: 'add-line', schema: lineSchema, values: () => ({}), change: (p, d) => saveLine(p, newId('b'), d, true) }));
   app.post('/projects/:id/bom/lines/:lid', projectEdit(deps, { ...common, form: (c) => `line-${c.req.param('lid')}`, schema: lineSchema,
