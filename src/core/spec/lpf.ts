@@ -17,7 +17,12 @@ export const lpfSpec = defineSpec({
     capacitorSeries: choice('Capacitor values', [['E12', 'E12'], ['E24', 'E24']], 'E12'),
     allowParallelPairs: bool('Allow a parallel pair when closer', true),
     coreName: text('Core', 120, false, 'Iron-powder toroid 12.7 mm, 1–30 MHz mix (AL 4.9 nH/t²)'),
-    coreAlHPerTurn2: num('Core AL', 'H/t²', U.nHt2, 1e-12, 1e-4, 4.9e-9, { form: 'coreAl', exclusiveMin: true, example: '4.9' }),
+    coreAlHPerTurn2: num('Core AL', 'H/t²', U.nHt2, 1e-12, 1e-4, 4.9e-9, {
+      form: 'coreAl',
+      exclusiveMin: true,
+      example: '4.9',
+      help: 'per turn²; a data sheet’s µH per 100 turns is taken as typed, e.g. 49 µH/100t',
+    }),
     inductorQ: num('Inductor Q', '', U.none, 1, 10_000, 150),
     capacitorQ: num('Capacitor Q', '', U.none, 1, 100_000, 1000),
     capacitorTolerance: num('Capacitor tolerance', '%', U.pct, 0, 0.5, 0.05),

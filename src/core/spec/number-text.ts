@@ -8,6 +8,8 @@ import { inputText, percentText } from './input-text';
 export type NumberParse = { ok: true; value: number } | { ok: false; message: string };
 
 const BARE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+/** An inductance factor written per 100 turns: "49 µH/100t", "49uH/100 turns" (spaces already removed). */
+const AL_PER_100_TURNS = /^([+-]?(?:\d+\.?\d*|\.\d+))(?:µ|μ|u)H\/100(?:t|turns?)?$/i;
 
 /** SI value of `text` for field `f`, or a message (without the label) saying what is wrong. */
 export function readNumber(text: string, f: NumberField): NumberParse {
@@ -20,7 +22,10 @@ export function readNumber(text: string, f: NumberField): NumberParse {
   }
   const compact = raw.replace(/\s+/g, '').replace(',', '.');
   let value: number;
-  if (BARE.test(compact) && !/^\d{1,3},\d{3}$/.test(raw.replace(/\s+/g, ''))) {
+  const al = f.unit === 'H/t²' ? AL_PER_100_TURNS.exec(compact) : null;
+  // Source: iron-powder toroid data sheets give AL in µH per 100 turns, L = AL × (N / 100)², so 1 µH/100 t = 0.1 nH/t²
+  if (al) value = Number(al[1]) * 1e-10;
+  else if (BARE.test(compact) && !/^\d{1,3},\d{3}$/.test(raw.replace(/\s+/g, ''))) {
     value = inDisplay(Number(compact), f.display.scale);
   } else {
     const r = parseValue(raw, f.unit);
@@ -82,11 +87,26 @@ function unitSlip(typed: number, f: NumberField): string {
   return '';
 }
 
-/** "a number in mA such as 350, or 1.2 A" — what to type in this box. */
+/** "a number in mA such as 350" — what to type in this box. */
 export function exampleText(f: NumberField): string {
   const sym = f.display.symbol;
-  const ex = f.example ?? (f.default ? numberText(f.default, f) : '1');
-  return sym ? `a number in ${sym} such as ${ex}` : `a number such as ${ex}`;
+  const ex = f.example ?? exampleNumber(f);
+  const alt = f.unit === 'H/t²' ? ', or in µH per 100 turns such as 49 µH/100t' : '';
+  return sym ? `a number in ${sym} such as ${ex}${alt}` : `a number such as ${ex}`;
+}
+
+/**
+ * An example that fits the field, as a bare number in its display unit (so "a number in V such as 0.5", never
+ * "such as 500 mV"): its default, else the first round number inside its range, else the middle of the range.
+ */
+export function exampleNumber(f: NumberField): string {
+  const fits = (v: number | null): v is number => v !== null && Number.isFinite(v) && rangeProblem(v, f) === '' && v !== 0;
+  const round = [1, 10, 100, 1000, 0.1, 10_000, 0.01].map((n) => inDisplay(n, f.display.scale));
+  const mid = (f.min + f.max) / 2;
+  const value = [f.default, ...round, f.integer ? Math.round(mid) : mid].find(fits) ?? f.default ?? f.min;
+  if (f.money) return moneyText(value);
+  const bare = f.display.scale < 1 ? value * Math.round(1 / f.display.scale) : value / f.display.scale;
+  return String(Number(bare.toPrecision(6)));
 }
 
 /** The text put back into the box for a stored SI value; it parses back to exactly the same value. */

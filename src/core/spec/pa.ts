@@ -34,7 +34,12 @@ export const paSpec = defineSpec({
     deviceVdsMaxV: num('Device V(BR)DSS', 'V', U.V, 0, 10_000, 100, { form: 'vdsMax', exclusiveMin: true }),
     deviceIdMaxA: num('Device max drain current', 'A', U.A, 0, 1000, 5, { form: 'idMax', exclusiveMin: true }),
     biasIdleMaxA: num('Bias preset max idle current', 'A', U.mA, 0, 100, 0.05, { form: 'biasIdle', example: '50' }),
-    referencePowerW: num('Compare with', 'W', U.W, 0, 1e6, 5, { form: 'referencePower', exclusiveMin: true }),
+    referencePowerW: num('Reference power for dB and S-units', 'W', U.W, 0, 1e6, 5, {
+      form: 'referencePower',
+      exclusiveMin: true,
+      help: 'the output is also given in dB and S-units against this, e.g. the 5 W of a rig you know',
+      example: '5',
+    }),
     ...mountFields(25),
     heatsinkSharedBy: optNum('Devices on one heatsink', '', U.none, 1, 16, null, {
       integer: true,

@@ -33,7 +33,12 @@ export const rfSettingsSpec = defineSpec({
     // Source: OET Bulletin 65 (1997): k = 2.56 with ground reflection (EPA model), as in exposure.ts
     groundReflection: bool('Include ground reflection (×2.56)', true),
     // Source: FCC OET Bulletin 65 Supplement B (1997), Table 2: conversational CW duty factor 40 %
-    exposureDutyFactor: num('Mode duty factor', '%', U.pct, 0, 1, 0.4, { form: 'dutyFactor', help: 'CW 40 %' }),
+    exposureDutyFactor: num('Mode duty factor', '%', U.pct, 0, 1, 0.4, {
+      form: 'dutyFactor',
+      help: 'for the RF exposure distance only: average over the exposure averaging time by mode, CW 40 %. ' +
+        'Heating uses the keying duty in the project settings',
+      example: '40',
+    }),
     exposureOnFraction: num('Worst share of the averaging time on the air', '%', U.pct, 0, 1, 1, { form: 'onFraction' }),
   },
 });

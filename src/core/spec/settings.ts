@@ -65,7 +65,12 @@ export const thermalInputsSpec = defineSpec({
   fields: {
     ambientC: num('Ambient temperature', '°C', U.C, -40, 70, 30, { form: 'ambient', help: 'air around the rig' }),
     // Source: FCC OET Bulletin 65 Supplement B (1997), Table 2: conversational CW duty factor 40 %
-    keyingDuty: num('Keying duty (heating)', '%', U.pct, 0, 1, 0.4, { form: 'duty', help: 'CW conversational 40 %' }),
+    keyingDuty: num('Keying duty (heating)', '%', U.pct, 0, 1, 0.4, {
+      form: 'duty',
+      help: 'share of sending time the key is down, for transformer, regulator and heatsink heating; CW conversational 40 %. ' +
+        'RF exposure uses its own mode duty factor (RF page)',
+      example: '40',
+    }),
   },
 });
 
