@@ -1,0 +1,140 @@
+// Whole-chain cross-check in ngspice: a push-pull voltage-switching (class D) stage on a centre-tapped transformer,
+// the low-pass filter, and a load of 50 Ω or on the SWR 2 circle at several phases (netlist written from scratch:
+// test/fixtures/pa-chain/pushpull-d-lpf.cir.tmpl). Output power is compared within TOL_POWER; the device-current
+// and drain peaks only as lower bounds (see below). The program's prediction is the load line at the complex load
+// the filter presents (pa-swr.ts) and its harmonic band less the filter's attenuation (harmonics.ts); ngspice
+// solves the switched circuit in the time domain. Invented design: 12 V, 1:1 transformer, 7.03 MHz, Rds(on) 0.1 Ω.
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { NGSPICE, requireTool } from '../../helpers/tools';
+import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
+import { ladderOf, pointAt } from '../../../src/core/rf/lpf-analysis';
+import { evaluatePa } from '../../../src/core/rf/pa';
+import { loadOnCircle, stressAt } from '../../../src/core/rf/pa-swr';
+import { paSpectrum } from '../../../src/core/rf/pa-spectrum';
+import { lpfParams, paParams } from './fixture';
+
+const haveNgspice = requireTool(NGSPICE, 'SPICE cross-check of the PA and filter chain', 'apt-get install ngspice');
+
+// Stated tolerances (what the program leaves out: the square wave's harmonic currents in the filter, leakage and
+// magnetising inductance, switching edges, body-diode drop)
+const TOL_POWER = 0.12; // output power, relative
+const TOL_CURRENT = 0.25; // peak device current, relative (lower bound only)
+const TOL_DRAIN = 0.15; // drain peak, relative (lower bound only)
+// the filter model assumes a 50 Ω source at every harmonic; a switching stage is a stiff source (a few dB apart)
+const TOL_HARMONIC_DB = 8;
+
+const F0 = 7.03e6;
+const VDD = 12;
+const RON = 0.1;
+const R0 = 50;
+const W = 2 * Math.PI * F0;
+
+type C = { re: number; im: number };
+const cmul = (a: C, b: C): C => ({ re: a.re * b.re - a.im * b.im, im: a.re * b.im + a.im * b.re });
+const cadd = (a: C, b: C): C => ({ re: a.re + b.re, im: a.im + b.im });
+const cdiv = (a: C, b: C): C => {
+  const d = b.re * b.re + b.im * b.im;
+  return { re: (a.re * b.re + a.im * b.im) / d, im: (a.im * b.re - a.re * b.im) / d };
+};
+
+/** Input impedance of the lossless ladder (as built) loaded by zl at F0: chain (ABCD) matrices, textbook. */
+function filterInputOhm(d: LpfDesign, zl: C): C {
+  let m = [{ re: 1, im: 0 }, { re: 0, im: 0 }, { re: 0, im: 0 }, { re: 1, im: 0 }];
+  for (const e of d.elements) {
+    const step = e.kind === 'series-inductor'
+      ? [{ re: 1, im: 0 }, { re: 0, im: W * e.builtValue }, { re: 0, im: 0 }, { re: 1, im: 0 }]
+      : [{ re: 1, im: 0 }, { re: 0, im: 0 }, { re: 0, im: W * e.builtValue }, { re: 1, im: 0 }];
+    m = [
+      cadd(cmul(m[0], step[0]), cmul(m[1], step[2])), cadd(cmul(m[0], step[1]), cmul(m[1], step[3])),
+      cadd(cmul(m[2], step[0]), cmul(m[3], step[2])), cadd(cmul(m[2], step[1]), cmul(m[3], step[3])),
+    ];
+  }
+  // Zin = (A ZL + B) / (C ZL + D)
+  return cdiv(cadd(cmul(m[0], zl), m[1]), cadd(cmul(m[2], zl), m[3]));
+}
+
+function netlist(d: LpfDesign, zl: C): string {
+  const per = 1 / F0;
+  const lines: string[] = [];
+  let node = 'f0';
+  d.elements.forEach((e, i) => {
+    if (e.kind === 'series-inductor') {
+      const next = `n${i + 1}`;
+      lines.push(`LF${i + 1} ${node} ${next} ${e.builtValue.toPrecision(7)}`);
+      node = next;
+    } else {
+      lines.push(`CF${i + 1} ${node} 0 ${e.builtValue.toPrecision(7)}`);
+    }
+  });
+  const load = Math.abs(zl.im) < 1e-9 ? `VX ${node} nr 0`
+    : zl.im > 0 ? `LX ${node} nr ${(zl.im / W).toPrecision(7)}` : `CX ${node} nr ${(1 / (W * -zl.im)).toPrecision(7)}`;
+  // full-primary reactance 20 x the 50 Ω drain-to-drain load (1:1): magnetising current small (common practice)
+  const lFull = (20 * R0) / W;
+  const vals: Record<string, string> = {
+    VDD: String(VDD), PERIOD: per.toPrecision(9), TON: (per / 2 - per / 100).toPrecision(9), TRISE: (per / 200).toPrecision(9),
+    RON: String(RON), LHALF: (lFull / 4).toPrecision(7), LSEC: lFull.toPrecision(7), KCOUP: '0.9995',
+    FILTER: lines.join('\n'), LOAD: load, RLOAD: zl.re.toPrecision(7), TSTEP: (per / 400).toPrecision(6),
+    TSTOP: (120 * per).toPrecision(9), TMAX: (per / 400).toPrecision(6), TFROM: (100 * per).toPrecision(9), F0: String(F0),
+  };
+  const tmpl = readFileSync(join(__dirname, '../../fixtures/pa-chain/pushpull-d-lpf.cir.tmpl'), 'utf8');
+  return tmpl.replace(/\{\{(\w+)\}\}/g, (_, k: string) => vals[k]);
+}
+
+const dir = haveNgspice ? mkdtempSync(join(tmpdir(), 'rw-pachain-')) : '';
+afterAll(() => {
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+function run(d: LpfDesign, zl: C, name: string) {
+  const file = join(dir, `${name}.cir`);
+  writeFileSync(file, netlist(d, zl));
+  const r = spawnSync(NGSPICE as string, ['-b', file], { cwd: dir, encoding: 'utf8' });
+  const out = r.stdout;
+  const num = (k: string) => Number(out.match(new RegExp(`^${k}\\s*=\\s*(\\S+)`, 'm'))?.[1]);
+  // fourier table rows: harmonic, frequency, magnitude, phase, ...
+  const harm = new Map<number, number>();
+  for (const m of out.matchAll(/^\s*(\d+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s*$/gm)) harm.set(Number(m[1]), Number(m[3]));
+  return { pout: num('pout'), vd1pk: num('vd1pk'), i1pk: Math.max(num('i1pk'), -num('i1min')), harm, out: out + r.stderr };
+}
+
+describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs the program', () => {
+  const dd = designLpf(lpfParams({ form: 'inductor-input', order: 5, inductorQ: 10000, capacitorQ: 100000 }), F0);
+  if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
+  const d = dd.value;
+  const pa = evaluatePa(paParams({ amplifierClass: 'D', topology: 'push-pull', turnsRatio: 1, loadOhm: R0, rdsOnOhm: RON, saturationV: null, efficiency: 0.9 }),
+    VDD, { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 });
+  const matched = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
+  const loads: [string, C][] = [
+    ['50 ohm', { re: R0, im: 0 }],
+    ...[0, 90, 180, 270].map((ph): [string, C] => {
+      const z = loadOnCircle(2, ph);
+      return [`SWR 2 at ${ph} deg`, { re: R0 * z.re, im: R0 * z.im }];
+    }),
+  ];
+  for (const [name, zl] of loads) {
+    it(`${name}: output power, device current and drain peak`, () => {
+      const zin = filterInputOhm(d, zl);
+      const pred = stressAt('D', matched, { re: zin.re / R0, im: zin.im / R0 });
+      const s = run(d, zl, name.replace(/\W+/g, '_'));
+      expect(Number.isFinite(s.pout), s.out).toBe(true);
+      expect(Math.abs(s.pout / pred.outputW - 1), `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`).toBeLessThanOrEqual(TOL_POWER);
+      // The load line gives the fundamental only: the switched circuit's device current carries the square wave's
+      // harmonic currents, and its drain the leakage-inductance spikes at each turn-off, so both peaks are higher in
+      // ngspice than in the program (a known gap of the model, not asserted here); they must at least not be lower.
+      expect(s.i1pk, `current: ngspice ${s.i1pk.toFixed(2)} A, program ${pred.peakDeviceA.toFixed(2)} A`).toBeGreaterThanOrEqual(pred.peakDeviceA * (1 - TOL_CURRENT));
+      expect(s.vd1pk, `drain: ngspice ${s.vd1pk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`).toBeGreaterThanOrEqual(pred.drainPeakV * (1 - TOL_DRAIN));
+    });
+  }
+  it('50 ohm: the 3rd harmonic at the load lies within the stated tolerance of the worst end of the band', () => {
+    const s = run(d, { re: R0, im: 0 }, 'harm50');
+    const spiceDbc = 20 * Math.log10(s.harm.get(3)! / s.harm.get(1)!);
+    const band = paSpectrum({ topology: 'push-pull', amplifierClass: 'D', imbalanceTypical: 0, imbalanceWorst: 0 }).bands.find((b) => b.n === 3)!;
+    const l = ladderOf(d, 'built', true);
+    const predicted = band.worstDbc - (pointAt(l, 3 * F0).lossDb - pointAt(l, F0).lossDb);
+    expect(Math.abs(spiceDbc - predicted), `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`).toBeLessThanOrEqual(TOL_HARMONIC_DB);
+  });
+});
