@@ -62,6 +62,13 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
         'and stresses it beyond these figures; add SWR foldback of the drive or supply.',
     });
   }
+  if (pa.topology === 'push-pull' && (pa.networkLoadOhm ?? null) === null) {
+    f.push({
+      severity: 'caution', kind: 'standing', rule: 'pa.leakage-spikes', subject, value: null, limit: null, unit: '', source: 'pa.swr-load-line',
+      message: 'The drain figures are load-line values: the output transformer\'s leakage inductance adds spikes at each ' +
+        'turn-off that these do not include; wind it tightly coupled (bifilar) and keep a drain clamp or snubber.',
+    });
+  }
   if (s.swr <= 1) return f;
   const d = s.worstDissipation;
   const n = Math.max(1, pa.devices);
