@@ -89,6 +89,9 @@ function supplyLines(report: EvaluationReport): string[] {
     } else if (r.kind === 'regulated') {
       const tj = r.thermal?.junctionC != null ? `, junction ${formatValue(r.thermal.junctionC, '°C')}` : '';
       out.push(`  ${r.railName}: ${formatValue(r.outputV, 'V')}, ${formatValue(r.thermalDissipationW, 'W')} in CW use${tj}`);
+      const rc = r.corners.find((c) => c.id === r.worstRippleCornerId);
+      if (rc && rc.outputRipplePpV !== null) out.push(`    ripple ${formatValue(rc.inputRipplePpV, 'V')} p-p in, ${formatValue(rc.outputRipplePpV, 'V')} p-p out (${r.rippleRejectionDb} dB, ${rc.label})${r.rippleTargetV !== null ? `, target ${formatValue(r.rippleTargetV, 'V')}` : ''}`);
+      else out.push(`    ripple at the output unknown: ripple rejection not stated`);
     } else {
       out.push(`  ${r.railName}: runtime about ${(r.runtimeS / 3600).toFixed(1)} h, end of discharge under load ${formatValue(r.loadedEndV, 'V')}`);
     }

@@ -128,6 +128,7 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
           <th class="num">Input mean</th>
           <th class="num">Headroom</th>
           <th class="num">Dissipation</th>
+          <th class="num">Ripple in / out</th>
         </tr>
       </thead>
       <tbody>
@@ -143,10 +144,18 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
             <td class="num">{fv(c.inputMeanV, 'V')}</td>
             <td class="num">{fv(c.headroomV, 'V')}</td>
             <td class="num">{fv(c.dissipationW, 'W')}</td>
+            <td class="num">
+              {fv(c.inputRipplePpV, 'V')}
+              <span class="sub">{c.outputRipplePpV !== null ? fv(c.outputRipplePpV, 'V') : 'rejection not stated'}{c.inDropout ? ' (dropout)' : ''}</span>
+            </td>
           </tr>
         ))}
       </tbody>
     </table>
+    <p class="summary-line ripple">
+      Ripple rejection {rail.rippleRejectionDb !== null ? `${rail.rippleRejectionDb} dB` : 'not stated'}
+      {rail.rippleTargetV !== null ? `; output ripple target ${fv(rail.rippleTargetV, 'V')} p-p` : '; no output ripple target'}.
+    </p>
     {rail.thermal ? (
       <p class="summary-line">
         Heat: {fv(rail.thermalDissipationW, 'W')} in CW operation, {fv(rail.tuneUpDissipationW, 'W')} with a tune-up carrier; junction{' '}

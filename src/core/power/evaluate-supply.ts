@@ -123,7 +123,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     simulations += ev.simulations;
     allConverged = allConverged && ev.allConverged;
     reports.set(rail.id, ev.report);
-    voltageAt.set(rail.id, Object.fromEntries(ev.report.corners.map((c) => [c.id, { troughV: c.troughV, meanV: c.dcMeanV }])));
+    voltageAt.set(rail.id, Object.fromEntries(ev.report.corners.map((c) => [c.id, { troughV: c.troughV, meanV: c.dcMeanV, ripplePpV: c.ripplePpV }])));
     maxV.set(rail.id, Math.max(0, ...ev.report.corners.map((c) => c.noLoadPeakV)));
     rootBattery.set(rail.id, false);
     if (ev.report.winding && wt) windingRecs.set(wt.t.id, [...(windingRecs.get(wt.t.id) ?? []), ev.report.winding]);
@@ -142,7 +142,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
       const base = s.mains === 'low' ? b.endV : s.mains === 'high' ? b.fullV : b.nominalV;
       // Thevenin source model, V = E - I R
       const v = Math.max(0, (Number.isFinite(base) ? base : 0) - cornerCurrent(out, s.load, duty) * r);
-      at[s.id] = { troughV: v, meanV: v };
+      at[s.id] = { troughV: v, meanV: v, ripplePpV: 0 };
     }
     voltageAt.set(b.id, at);
     maxV.set(b.id, Number.isFinite(b.fullV) ? b.fullV : 0);

@@ -7,11 +7,14 @@ import type { CornerSpec, Recommendation, RegulatedCorner, RegulatedRailReport }
 import { BATTERY_LABEL, LOAD_LABEL, cornerCurrent, worstIds } from './corners';
 import { headroomFinding, ratingFindings, regulatorDissipationW, regulatorInputCurrentA, regulatorOutputV } from './regulator';
 import { DEFAULT_TO220_MOUNT, junctionTemperature, thermalFindings } from '../thermal/junction';
+import { outputRipplePpV, rippleFindings, worstRippleCorner } from './ripple-rejection';
 
 /** Voltage a rail presents at one corner (V). */
 export interface RailVoltage {
   troughV: number;
   meanV: number;
+  /** Ripple (V p-p); absent = none known. */
+  ripplePpV?: number;
 }
 
 export interface RegulatedEvaluation {
@@ -36,23 +39,32 @@ export function evaluateRegulatedRail(
   const vOut = regulatorOutputV(rail.setting, rail.quiescentA);
   const dropout = Number.isFinite(rail.dropoutV) ? Math.max(0, rail.dropoutV) : 0;
   const outputAt: Record<string, RailVoltage> = {};
+  const rej = rail.rippleRejectionDb ?? null;
+  const rejection = rej !== null && Number.isFinite(rej) && rej >= 0 ? rej : null;
+  const tgt = rail.rippleTargetV ?? null;
+  const rippleTarget = tgt !== null && Number.isFinite(tgt) && tgt > 0 ? tgt : null;
   const corners: RegulatedCorner[] = specs.map((spec) => {
     const p = parentAt[spec.id] ?? { troughV: 0, meanV: 0 };
     const out = cornerCurrent(outputA, spec.load, keyingDuty);
     const label = rootIsBattery ? `${BATTERY_LABEL[spec.mains]}, ${LOAD_LABEL[spec.load]}` : spec.label;
+    const inputRipplePpV = Number.isFinite(p.ripplePpV) ? Math.max(0, p.ripplePpV!) : 0;
+    const inDropout = p.troughV < vOut + dropout;
+    const outRipple = rejection !== null ? outputRipplePpV(inputRipplePpV, rejection, inDropout) : null;
     // Common practice, no published source: a regulator in dropout passes its input through less the dropout
-    outputAt[spec.id] = { troughV: Math.max(0, Math.min(vOut, p.troughV - dropout)), meanV: Math.max(0, Math.min(vOut, p.meanV - dropout)) };
+    outputAt[spec.id] = { troughV: Math.max(0, Math.min(vOut, p.troughV - dropout)), meanV: Math.max(0, Math.min(vOut, p.meanV - dropout)), ripplePpV: outRipple ?? inputRipplePpV }; // rejection unknown: the ripple is not assumed removed
     return {
       ...spec, label, outputA: out,
       inputA: regulatorInputCurrentA(rail, out, p.troughV),
       inputTroughV: p.troughV, inputMeanV: p.meanV, headroomV: p.troughV - vOut,
       dissipationW: regulatorDissipationW(rail, out, p.meanV),
+      inputRipplePpV, inDropout, outputRipplePpV: outRipple,
     };
   });
   const worst = corners.find((c) => c.id === ids.voltage) ?? corners[0];
   const thermalC = corners.find((c) => c.id === ids.thermal) ?? corners[0];
   const tuneC = corners.find((c) => c.id === ids.tuneUp) ?? corners[0];
   findings.push(headroomFinding(rail, worst.inputTroughV, worst.label));
+  findings.push(...rippleFindings(rail.name, rejection, rippleTarget, corners));
   findings.push(...ratingFindings(rail, parentMaxV, outputA.keyDown));
 
   let thermal = null;
@@ -83,6 +95,7 @@ export function evaluateRegulatedRail(
       kind: 'regulated', railId: rail.id, railName: rail.name, parentId: rail.parentId, regulator: rail.regulator, outputV: vOut, dropoutV: dropout,
       corners, worstVoltageCornerId: worst.id, worstThermalCornerId: thermalC.id,
       thermalDissipationW: thermalC.dissipationW, tuneUpDissipationW: tuneC.dissipationW, thermal, tuneUpThermal,
+      rippleRejectionDb: rejection, rippleTargetV: rippleTarget, worstRippleCornerId: worstRippleCorner(corners)?.id ?? null,
       findings: sortFindings(findings), recommendations,
     },
     outputAt,

@@ -269,6 +269,12 @@ export interface RegulatedCorner extends CornerSpec {
   headroomV: number;
   /** Regulator dissipation at the mean input (W). */
   dissipationW: number;
+  /** Ripple on the input (V p-p). */
+  inputRipplePpV: number;
+  /** True when the input trough is below output + dropout (no regulation, no rejection). */
+  inDropout: boolean;
+  /** Ripple at the output (V p-p); null when the rejection is not stated. */
+  outputRipplePpV: number | null;
 }
 
 export interface RegulatedRailReport extends RailBase {
@@ -288,6 +294,12 @@ export interface RegulatedRailReport extends RailBase {
   tuneUpDissipationW: number;
   thermal: ThermalResult | null;
   tuneUpThermal: ThermalResult | null;
+  /** Ripple rejection entered from the datasheet (dB), null = not stated. */
+  rippleRejectionDb: number | null;
+  /** Output ripple target (V p-p), null = none. */
+  rippleTargetV: number | null;
+  /** Corner with the most output ripple, null when the rejection is not stated. */
+  worstRippleCornerId: string | null;
 }
 
 export interface BatteryRailReport extends RailBase {

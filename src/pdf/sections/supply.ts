@@ -82,6 +82,8 @@ function regulated(l: Layout, r: RegulatedRailReport): void {
   l.table([{ header: 'Corner', width: 0.4 }, { header: 'Output', width: 0.15, align: 'right' }, { header: 'Input trough', width: 0.15, align: 'right' }, { header: 'Headroom', width: 0.15, align: 'right' }, { header: 'Dissipation', width: 0.15, align: 'right' }], rows, 8);
   const t = r.thermal;
   const kv: [string, string][] = [['Output', `${fv(r.outputV, 'V')}, dropout ${fv(r.dropoutV, 'V')}`], ['Dissipation', `${fv(r.thermalDissipationW, 'W')} thermal load, ${fv(r.tuneUpDissipationW, 'W')} tune-up`]];
+  const rc = r.corners.find((c) => c.id === r.worstRippleCornerId);
+  kv.push(['Output ripple', rc && rc.outputRipplePpV !== null ? `${fv(rc.outputRipplePpV, 'V')} p-p from ${fv(rc.inputRipplePpV, 'V')} p-p in (${r.rippleRejectionDb} dB, ${rc.label})${r.rippleTargetV !== null ? `; target ${fv(r.rippleTargetV, 'V')}` : ''}` : 'unknown: ripple rejection not stated']);
   if (t) kv.push(['Heatsink', t.needsHeatsink ? `needed: at most ${fv(t.requiredThetaSaKPerW, 'K/W')}; junction ${t.junctionC !== null ? fv(t.junctionC, '°C') : 'no heatsink chosen'} (target ≤ ${fv(t.targetC, '°C')})` : `none needed (free air ${fv(t.freeAirJunctionC, '°C')})`]);
   keyValues(l, kv, 110, 8.5);
   recommendations(l, r);
