@@ -16,6 +16,9 @@ const VERDICT_TEXT = {
   fail: { sign: '✗', head: 'Will not work as designed', tail: (n: number, f: number) => `${f} check(s) fail, ${n - f} more need caution.` },
 } as const;
 
+/** The first words of a long message (the whole of it stands under "All checks"), cut at a word. */
+const short = (m: string, max = 150) => (m.length <= max ? m : `${m.slice(0, m.lastIndexOf(' ', max))} …`);
+
 export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = ({ project, report }) => {
   const counted = actionable(report.findings);
   const verdict = worstSeverity(counted);
@@ -50,7 +53,7 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
                 const link = fixLink(project, f);
                 return (
                   <li class={`fix sev-${f.severity}`} data-rule={f.rule}>
-                    <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message}{' '}
+                    <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {short(f.message)}{' '}
                     <a class="fix-link" href={link.href}>
                       Fix in {link.label} →
                     </a>

@@ -10,7 +10,8 @@ export interface FixLink {
   label: string;
 }
 
-const names = (subject: string, name: string) => subject === name || subject.startsWith(`${name}:`) || subject.startsWith(`${name} (`);
+/** The subject is about this named thing: "16 V winding", "16 V winding: …", "16 V winding (…)", "16 V winding fuse". */
+const names = (subject: string, name: string) => subject === name || [':', ' '].some((sep) => subject.startsWith(`${name}${sep}`));
 
 const RF_RULES = /^(lpf|pa|relay|spurious|exposure|rf)\./;
 const SUPPLY_RULES = /^(rail|regulator|reservoir|rectifier|bleeder|fuse|transformer|supply|battery|catalog|thermal|input\.supply)/;
