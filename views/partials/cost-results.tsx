@@ -29,26 +29,26 @@ const Flags: FC<{ line: CostLine }> = ({ line }) =>
 
 const LineRow: FC<{ line: CostLine; currency: string }> = ({ line, currency }) => (
   <tr class={line.supplier === null && line.neededQty > 0 ? 'cost-line unpriced' : 'cost-line'} data-line={line.lineId}>
-    <td>{line.refs}</td>
-    <td>
+    <td data-label="Refs">{line.refs}</td>
+    <td data-label="Part">
       {line.description}
       {line.value ? <span class="sub"> {line.value}</span> : null} <Flags line={line} />
     </td>
-    <td class="num">{line.qtyPerRig}</td>
-    <td class="num">{line.neededQty}</td>
-    <td class="num">{line.supplier === null ? '–' : line.orderQty}</td>
-    <td>
+    <td class="num" data-label="Per rig">{line.qtyPerRig}</td>
+    <td class="num" data-label="Needed">{line.neededQty}</td>
+    <td class="num" data-label="Ordered">{line.supplier === null ? '–' : line.orderQty}</td>
+    <td data-label="Supplier">
       {line.supplier ?? '–'}
       {line.sku ? <span class="sub">{line.sku}</span> : null}
     </td>
-    <td class="num">
+    <td class="num" data-label="Unit price">
       {line.unitPriceCents === null || line.offerCurrency === null ? '–' : formatMoney(line.unitPriceCents, line.offerCurrency)}
       {line.offerCurrency !== null && line.offerCurrency !== currency && line.exchangeRate !== null ? (
         <span class="sub">× {line.exchangeRate}</span>
       ) : null}
     </td>
-    <td class="num">{formatMoney(line.lineCostCents, currency)}</td>
-    <td>
+    <td class="num" data-label="Line cost">{formatMoney(line.lineCostCents, currency)}</td>
+    <td data-label="Price break">
       {line.breakMinQty !== null ? <span class="sub">from {line.breakMinQty}</span> : null}
       {line.raised ? (
         <span class="suggestion">
