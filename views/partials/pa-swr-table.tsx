@@ -8,6 +8,7 @@ const load = (w: { loadReOhm: number; loadImOhm: number }) =>
 
 export const PaSwrTable: FC<{ s: PaSwrStress | null }> = ({ s }) => {
   if (!s) return null;
+  const how = s.model === 'class-e-simulated' ? 'class E by time-domain simulation, every 15°' : 'load line at a complex load';
   const rows: [string, Worst, string][] = [
     ['Highest drain peak', s.worstDrainPeak, 'V'],
     ['Highest device current', s.worstPeakCurrent, 'A'],
@@ -18,7 +19,7 @@ export const PaSwrTable: FC<{ s: PaSwrStress | null }> = ({ s }) => {
   return (
     <table class="grid swr-circle">
       <caption>
-        Round the SWR {s.swr} circle ({s.model === 'class-e-simulated' ? 'class E by time-domain simulation, every 15°' : 'load line at a complex load'},
+        Round the SWR {s.swr} circle ({how},
         loads at the PA output; phase of the reflection coefficient)
       </caption>
       <thead>

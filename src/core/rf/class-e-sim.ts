@@ -97,7 +97,9 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number): ClassE
   const step = (p: M, x: number[]) => p.map((r) => r.reduce((s, v, j) => s + v * x[j], 0));
   let x = [1, 0, 0, 0, 1];
   let prevPeak = Number.NaN;
-  let res: ClassEResult = { drainPeakRatio: 0, switchPeakRatio: 0, outputRatio: 0, dcInputRatio: 0, turnOnRatio: 0, cycles: 0 };
+  let res: ClassEResult = {
+    drainPeakRatio: 0, switchPeakRatio: 0, outputRatio: 0, dcInputRatio: 0, turnOnRatio: 0, cycles: 0,
+  };
   for (let cyc = 1; cyc <= MAX_CYCLES; cyc++) {
     let vPk = -Infinity, iPk = 0, pOut = 0, iDc = 0;
     const turnOn = x[0];
@@ -112,7 +114,10 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number): ClassE
       pOut += rl * x[1] * x[1];
       iDc += x[3];
     }
-    res = { drainPeakRatio: vPk, switchPeakRatio: iPk, outputRatio: pOut / STEPS, dcInputRatio: iDc / STEPS, turnOnRatio: turnOn, cycles: cyc };
+    res = {
+      drainPeakRatio: vPk, switchPeakRatio: iPk, outputRatio: pOut / STEPS, dcInputRatio: iDc / STEPS,
+      turnOnRatio: turnOn, cycles: cyc,
+    };
     if (cyc > 20 && Math.abs(vPk - prevPeak) < 1e-6 * Math.abs(vPk)) break;
     prevPeak = vPk;
   }

@@ -20,7 +20,8 @@ export interface HarmonicBand {
 export const MIN_DBC = -200;
 /** Assumed inputs when left empty. Common practice, no published source. */
 export const ASSUMED = { conductionAngleDeg: 150, imbalanceTypical: 0.05, imbalanceWorst: 0.2 } as const;
-/** Spread of the class-C conduction angle with drive and supply, degrees each way. Common practice, no published source. */
+/** Spread of the class-C conduction angle with drive and supply, degrees each way. */
+// Common practice, no published source
 export const CONDUCTION_SPREAD_DEG = 15;
 
 const toDbc = (ratio: number) => (ratio > 10 ** (MIN_DBC / 20) ? 20 * Math.log10(ratio) : MIN_DBC);
@@ -28,7 +29,8 @@ const toDbc = (ratio: number) => (ratio > 10 ** (MIN_DBC / 20) ? 20 * Math.log10
 /**
  * Fourier coefficient n (n = 0, 1, 2, ...) of a cosine pulse of unit peak and half conduction angle theta (rad).
  * Source: cosine-pulse coefficients as tabulated in Krauss, Bostian & Raab, Solid State Radio Engineering (1980)
- * (equations from memory): α0 = (sin θ − θ cos θ)/(π(1 − cos θ)), α1 = (θ − sin θ cos θ)/(π(1 − cos θ)),
+ * (equations from memory): α0 = (sin θ − θ cos θ)/(π(1 − cos θ)),
+ * α1 = (θ − sin θ cos θ)/(π(1 − cos θ)),
  * αn = 2 (sin nθ cos θ − n cos nθ sin θ)/(π n (n² − 1)(1 − cos θ)).
  */
 export function cosinePulseCoefficient(n: number, thetaRad: number): number {
@@ -40,12 +42,14 @@ export function cosinePulseCoefficient(n: number, thetaRad: number): number {
   return (2 * (Math.sin(n * thetaRad) * c - n * Math.cos(n * thetaRad) * s)) / (k * n * (n * n - 1));
 }
 
-/** Harmonic n of a rectangular wave of duty D relative to its fundamental. Source: Fourier series of a pulse train, |sin nπD| / (n |sin πD|). */
+/** Harmonic n of a rectangular wave of duty D relative to its fundamental. */
+// Source: Fourier series of a pulse train, |sin nπD| / (n |sin πD|)
 export function rectangularHarmonic(n: number, duty: number): number {
   return Math.abs(Math.sin(n * Math.PI * duty)) / (n * Math.abs(Math.sin(Math.PI * duty)));
 }
 
-const range = (lo: number, hi: number, steps = 60) => Array.from({ length: steps + 1 }, (_, i) => lo + ((hi - lo) * i) / steps);
+const range = (lo: number, hi: number, steps = 60) =>
+  Array.from({ length: steps + 1 }, (_, i) => lo + ((hi - lo) * i) / steps);
 const minMax = (xs: number[]) => ({ min: Math.min(...xs), max: Math.max(...xs) });
 
 export interface PaSpectrum {
@@ -57,7 +61,9 @@ export interface PaSpectrum {
   imbalanceWorst: number;
 }
 
-type SpectrumInput = Pick<PaParams, 'topology' | 'amplifierClass' | 'conductionAngleDeg' | 'imbalanceTypical' | 'imbalanceWorst'>;
+type SpectrumInput = Pick<
+  PaParams, 'topology' | 'amplifierClass' | 'conductionAngleDeg' | 'imbalanceTypical' | 'imbalanceWorst'
+>;
 
 export function paSpectrum(pa: SpectrumInput, harmonics: readonly number[] = [2, 3, 4, 5]): PaSpectrum {
   const assumed: PaSpectrum['assumed'] = {};
@@ -77,13 +83,17 @@ export function paSpectrum(pa: SpectrumInput, harmonics: readonly number[] = [2,
     if (pa.amplifierClass === 'B' || pa.amplifierClass === 'C') {
       const deg = pa.amplifierClass === 'B' ? [180] : (() => {
         conductionAngleDeg = take('conductionAngleDeg', pa.conductionAngleDeg);
-        return range(Math.max(60, conductionAngleDeg - CONDUCTION_SPREAD_DEG), Math.min(180, conductionAngleDeg + CONDUCTION_SPREAD_DEG));
+        const c = conductionAngleDeg;
+        return range(Math.max(60, c - CONDUCTION_SPREAD_DEG), Math.min(180, c + CONDUCTION_SPREAD_DEG));
       })();
       // harmonic n of one device's current pulse relative to its fundamental, over the conduction-angle spread
-      const r = minMax(deg.map((d) => Math.abs(cosinePulseCoefficient(n, (d * Math.PI) / 360) / cosinePulseCoefficient(1, (d * Math.PI) / 360))));
+      const ratio = (theta: number) => Math.abs(cosinePulseCoefficient(n, theta) / cosinePulseCoefficient(1, theta));
+      const r = minMax(deg.map((d) => ratio((d * Math.PI) / 360)));
       if (even && pp) {
-        // halves (1 + ε/2) and (1 − ε/2): even harmonics ε a_n against a fundamental 2 a_1 (Fourier series, linear superposition)
-        return { n, bestDbc: toDbc((epsT * r.min) / 2), worstDbc: toDbc((epsW * r.max) / 2), basis: 'push-pull-imbalance' };
+        // halves (1 + ε/2) and (1 − ε/2): even harmonics ε a_n against a fundamental 2 a_1 (Fourier series,
+        // linear superposition)
+        const basis = 'push-pull-imbalance';
+        return { n, bestDbc: toDbc((epsT * r.min) / 2), worstDbc: toDbc((epsW * r.max) / 2), basis };
       }
       if (pa.amplifierClass === 'B' && !even) {
         // a clean half-sine pair has no odd harmonics; hard clipping at saturation approaches a square wave's 1/n

@@ -69,7 +69,9 @@ export function loadOnCircle(swr: number, phaseDeg: number): { re: number; im: n
 }
 
 /** The stage into one normalised load z (1 = design load). */
-export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { re: number; im: number }): Omit<SwrPoint, 'phaseDeg' | 'loadReOhm' | 'loadImOhm'> {
+type Stress = Omit<SwrPoint, 'phaseDeg' | 'loadReOhm' | 'loadImOhm'>;
+
+export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { re: number; im: number }): Stress {
   const mag = Math.hypot(z.re, z.im);
   const swingFactor = m.drainPeakV / m.maxRailV - 1;
   if (cls === 'D') {
@@ -78,7 +80,8 @@ export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { 
     const currentRatio = 1 / mag;
     const outputW = (m.outputW * z.re) / mag ** 2;
     const lossW = Math.max(0, m.dcInputW - m.outputW) * currentRatio ** 2;
-    return { drainPeakV: m.drainPeakV, peakDeviceA: m.peakDeviceA * currentRatio, dissipationW: lossW + m.biasW, outputW };
+    const peakDeviceA = m.peakDeviceA * currentRatio;
+    return { drainPeakV: m.drainPeakV, peakDeviceA, dissipationW: lossW + m.biasW, outputW };
   }
   // Classes B and C (and B/AB): the drive sets the fundamental current I1 until the swing I1|Z| reaches the supply;
   // beyond it the voltage is held and the current falls as 1/|Z| (textbook load line, saturation at the design load)
@@ -104,7 +107,9 @@ const E_STEPS = 24;
  * rdsOnRatio = Rds(on) / the drain load of one class-E half; its figures scale the matched ones by the simulated
  * ratio to the simulated design load, so the entered efficiency and the matched model stay the reference.
  */
-export function swrStress(cls: PaParams['amplifierClass'], m: MatchedPoint, swr: number, designLoadOhm: number, rdsOnRatio = 0): PaSwrStress {
+export function swrStress(
+  cls: PaParams['amplifierClass'], m: MatchedPoint, swr: number, designLoadOhm: number, rdsOnRatio = 0,
+): PaSwrStress {
   const all: SwrPoint[] = [];
   const ref = cls === 'E' ? simulateClassE(1, 0, rdsOnRatio) : null;
   let worstTurnOn = 0;
@@ -113,7 +118,7 @@ export function swrStress(cls: PaParams['amplifierClass'], m: MatchedPoint, swr:
   for (let i = 0; i < steps; i++) {
     const phaseDeg = (360 * i) / steps;
     const zl = loadOnCircle(swr, phaseDeg);
-    let p: Omit<SwrPoint, 'phaseDeg' | 'loadReOhm' | 'loadImOhm'>;
+    let p: Stress;
     if (ref) {
       const e = simulateClassE(zl.re, zl.im, rdsOnRatio);
       worstTurnOn = Math.max(worstTurnOn, e.turnOnRatio);
@@ -150,5 +155,6 @@ export function swrStress(cls: PaParams['amplifierClass'], m: MatchedPoint, swr:
 /** "25.0 − j 12.5 Ω (phase 240°)" for a finding. */
 export function describeLoad(w: Worst): string {
   const sign = w.loadImOhm < 0 ? '−' : '+';
-  return `${w.loadReOhm.toFixed(1)} ${sign} j${Math.abs(w.loadImOhm).toFixed(1)} Ω (reflection phase ${w.phaseDeg.toFixed(0)}°)`;
+  const z = `${w.loadReOhm.toFixed(1)} ${sign} j${Math.abs(w.loadImOhm).toFixed(1)} Ω`;
+  return `${z} (reflection phase ${w.phaseDeg.toFixed(0)}°)`;
 }
