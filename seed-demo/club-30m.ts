@@ -55,6 +55,7 @@ const stages: Stage[] = [
       conductionAngleDeg: null,
       imbalanceTypical: null,
       imbalanceWorst: null,
+      deviceCossF: null,
     },
   },
   {

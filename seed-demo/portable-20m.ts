@@ -73,6 +73,7 @@ export const portable20m: Project = {
         conductionAngleDeg: null,
         imbalanceTypical: null,
         imbalanceWorst: null,
+        deviceCossF: null,
       },
     },
     { id: 'p-lpf', kind: 'lpf', name: '20 m low-pass filter', notes: '', loads: [], dissipationW: null, lpf: { ...defaultLpf(), order: 7, seed: 7 } },

@@ -156,6 +156,7 @@ export interface PaParams {
   conductionAngleDeg?: number | null; // class C conduction angle per device, degrees; null/absent = 150 assumed
   imbalanceTypical?: number | null; // push-pull halves' mismatch (fraction), typical; null/absent = 0.05 assumed
   imbalanceWorst?: number | null; // same, worst; null/absent = 0.2 assumed
+  deviceCossF?: number | null; // device output capacitance (class E: part of the shunt C), F; null/absent = not given
 }
 
 export interface LpfParams {

@@ -95,6 +95,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
       const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
         maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
         source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
+        frequencyHz: project.frequencyHz,
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;

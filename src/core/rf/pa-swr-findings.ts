@@ -2,6 +2,34 @@
 import type { Finding } from '../findings';
 import type { PaParams } from '../model';
 import { describeLoad, type PaSwrStress } from './pa-swr';
+import { CLASS_E_SHUNT } from './class-e-sim';
+
+/**
+ * Class E: the shunt capacitance the design needs, C1 = 0.1836 / (ωR) per switch (Sokal and Sokal, IEEE JSSC
+ * SC-10(3), 1975; constant from memory), against the device's own output capacitance: fail when the device alone
+ * exceeds it, with the highest frequency at which it would not.
+ */
+export function classEShuntFindings(pa: PaParams, primaryOhm: number, frequencyHz: number | undefined, subject: string): Finding[] {
+  const coss = pa.deviceCossF ?? null;
+  if (pa.amplifierClass !== 'E' || coss === null || frequencyHz === undefined || !(frequencyHz > 0) || !(coss > 0)) return [];
+  // push-pull: each class-E half drives half the drain-to-drain load (the model's assumption)
+  const r = pa.topology === 'push-pull' ? primaryOhm / 2 : primaryOhm;
+  const w = 2 * Math.PI * frequencyHz;
+  const c1 = CLASS_E_SHUNT / (w * r);
+  // Same equation solved for f with C1 = Coss: f_max = 0.1836 / (2π R Coss)
+  const fMax = CLASS_E_SHUNT / (2 * Math.PI * r * coss);
+  const pf = (x: number) => `${(x * 1e12).toFixed(0)} pF`;
+  const base = { rule: 'pa.class-e-shunt', subject, unit: 'F', source: 'pa.class-e-sim' as const };
+  if (coss > c1) {
+    return [{ ...base, severity: 'fail', value: coss, limit: c1,
+      message: `The device's output capacitance ${pf(coss)} exceeds the ${pf(c1)} shunt capacitance class E needs at this ` +
+        `frequency into ${r.toFixed(1)} Ω: it cannot switch at zero voltage. It works up to about ${(fMax / 1e6).toFixed(2)} MHz; ` +
+        'use a device with less capacitance or a lower drain load (higher power for the supply).' }];
+  }
+  return [{ ...base, severity: 'ok', value: coss, limit: c1,
+    message: `Class-E shunt capacitance ${pf(c1)} per switch: the device gives ${pf(coss)}, add about ${pf(c1 - coss)} ` +
+      `(usable up to about ${(fMax / 1e6).toFixed(2)} MHz with this device).` }];
+}
 
 export interface SwrFindingContext {
   subject: string;

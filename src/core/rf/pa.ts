@@ -6,7 +6,7 @@ import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower }
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
 import { swrStress, type PaSwrStress } from './pa-swr';
-import { swrFindings } from './pa-swr-findings';
+import { classEShuntFindings, swrFindings } from './pa-swr-findings';
 import { usablePositive } from '../numeric';
 
 /** Drain efficiency used when none is entered. Common practice, no published source (ref §8.2 ranges). */
@@ -107,6 +107,8 @@ export interface PaSupplyCorners {
   lowRailV?: number;
   /** The project's worst-case SWR: device stress is judged round its circle; absent = the design load only. */
   worstSwr?: number;
+  /** Operating frequency, Hz: checks a class-E stage's shunt capacitance against the device's own; absent = no check. */
+  frequencyHz?: number;
   /** What the rail comes from, for the wording of the findings; default 'mains'. */
   source?: 'mains' | 'battery';
 }
@@ -213,6 +215,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     subject, atMax, ambientC: project.ambientC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
     matchedDissipationW: thermalRaw.dissipationTotalW, sharedBy: thermalRaw.sharedBy, tjTargetC: thermalRaw.tjTargetC,
   }));
+  findings.push(...classEShuntFindings(pa, primaryOhm, corners.frequencyHz, subject));
   findings.push(...thermal.findings.map((f) => ({ ...f, subject })));
   const { findings: _drop, ...thermalValues } = thermal;
   void _drop;

@@ -62,6 +62,11 @@ export const paSpec = defineSpec({
       form: 'imbalanceWorst',
       help: 'sets the worst end of the even harmonics; empty = 20 %',
     }),
+    deviceCossF: optNum('Device output capacitance Coss', 'F', U.pF, 0, 1e-6, null, {
+      form: 'coss',
+      help: 'class E: part of the shunt capacitor; empty = not checked',
+      example: '150',
+    }),
     networkLoadOhm: optNum('Drain load set by a matching network', 'Ω', U.ohm, 0.1, 10_000, null, {
       form: 'networkLoad',
       help: 'L or pi network instead of a transformer; empty = transformer (turns ratio)',
