@@ -1,0 +1,36 @@
+// The PA inputs added for the SWR-circle, heatsink, harmonic and class-E checks: drawn on the stage page, refused by
+// name when out of range or in conflict, nothing saved and nothing typed lost.
+import { describe, expect, it } from 'vitest';
+import { demoApp } from '../helpers/app';
+import { loadProject } from '../../src/db/projects';
+import { formValues, paSpec } from '../../src/core/spec';
+import { DEMO_PROJECTS } from '../../seed-demo/index';
+
+const ID = 'demo-club-30m';
+const club = DEMO_PROJECTS[0];
+const paForm = () => ({ version: '1', ...formValues(paSpec, club.stages.find((s) => s.id === 'st-pa')!.pa!) });
+
+describe('new PA inputs on the stage page', () => {
+  it('are drawn on the PA form', async () => {
+    const { get } = await demoApp();
+    const html = await (await get(`/projects/${ID}/stages/st-pa`)).text();
+    for (const label of ['Devices on one heatsink', 'Conduction angle (class C)', 'Push-pull imbalance, worst', 'Device output capacitance Coss', 'Drain load set by a matching network']) {
+      expect(html).toContain(label);
+    }
+  });
+  it.each([
+    ['a conduction angle below 60°', { conductionAngle: '30' }, 'conductionAngle', 'Conduction angle (class C) must be at least 60'],
+    ['more devices on one heatsink than the stage has', { heatsinkSharedBy: '3' }, 'heatsinkSharedBy', 'Devices on one heatsink: at most the number of devices'],
+    ['a worst imbalance below the typical', { imbalanceTypical: '10', imbalanceWorst: '5' }, 'imbalanceWorst', 'at least the typical imbalance'],
+    ['both a turns ratio and a network drain load', { networkLoad: '12.5' }, 'networkLoad', 'give it or a turns ratio, not both'],
+  ])('refuses %s by name and saves nothing', async (_label, change, field, message) => {
+    const { post, database } = await demoApp();
+    const before = await loadProject(database.db, ID);
+    const res = await post(`/projects/${ID}/stages/st-pa/pa`, { ...paForm(), ...change }, { 'HX-Request': 'true' });
+    expect(res.status).toBe(422);
+    const html = await res.text();
+    expect(html).toContain(message);
+    expect(html).toContain(`name="${field}" type="text" value="${(change as Record<string, string>)[field]}"`);
+    expect(await loadProject(database.db, ID)).toEqual(before);
+  });
+});
