@@ -32,8 +32,14 @@ export interface RailBudget {
   outputA: PerMode;
   /** for a regulated rail: the current it draws from its parent, A; null otherwise */
   inputA: PerMode | null;
-  /** outputA x nominalV, W */
+  /** outputA x the rail's voltage in that mode (modeV when the supply is designed, else nominalV), W */
   outputW: PerMode;
+  /** mean rail voltage per mode at nominal mains from the supply design, V; absent before the supply is designed */
+  modeV?: PerMode;
+  /** lowest point of the ripple with the key down at nominal mains, V; absent/null when not known */
+  keyDownTroughV?: number | null;
+  /** which voltage the Voltage column and the powers use, in words */
+  voltageCondition?: string;
   loads: LoadContribution[];
 }
 

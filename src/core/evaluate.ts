@@ -7,6 +7,7 @@ import { evaluateSupply } from './power/evaluate-supply';
 import { withSimulationMemo } from './power/rectifier-sim';
 import type { SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
+import { withSupplyVoltages } from './budget-voltages';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
@@ -176,6 +177,7 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
     hotV = corners.hotV;
     if (settled) break;
   }
+  budget = withSupplyVoltages(budget, supply);
   const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);

@@ -50,9 +50,11 @@ export function renderEvaluationText(project: Project, report: EvaluationReport)
   out.push(`Rule set: ${RULE_SETS[project.rf.spuriousRule].label}. ${GOVERNS}`);
   out.push('');
   out.push('Current budget (A delivered per rail)');
+  out.push('  Volts: mean at nominal mains, receive / key-down, and the key-down trough (supply design); powers use each mode\'s mean');
   out.push(`${pad('Rail', 40)}${lpad('Volts', 9)}${MODES.map((m) => lpad(MODE_LABELS[m], 13)).join('')}`);
   for (const r of report.budget.rails) {
-    out.push(`${pad('  '.repeat(r.depth) + r.name, 40)}${lpad(formatValue(r.nominalV, 'V'), 9)}${MODES.map((m) => lpad(formatValue(r.outputA[m], 'A'), 13)).join('')}`);
+    out.push(`${pad('  '.repeat(r.depth) + r.name, 40)}${lpad(formatValue(r.modeV?.receive ?? r.nominalV, 'V'), 9)}${MODES.map((m) => lpad(formatValue(r.outputA[m], 'A'), 13)).join('')}`);
+    if (r.modeV) out.push(`${pad('', 40)}  key-down ${formatValue(r.modeV.keyDown, 'V')}, trough ${formatValue(r.keyDownTroughV ?? NaN, 'V')}`);
   }
   out.push(`${pad('All sources, DC power', 49)}${MODES.map((m) => lpad(formatValue(report.budget.totalW[m], 'W'), 13)).join('')}`);
   out.push(...supplyLines(report), ...rfLines(report), ...costLines(report));

@@ -21,13 +21,16 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
       What each rail delivers in each operating mode: its own stage loads plus the input current of every regulator it feeds
       (linear: output + quiescent current; switching: from its efficiency at the lowest input voltage). Computed loads (PA key-down
       current, relay coil) are marked ◆; one that cannot be computed from the entered data shows as unknown, and the
-      supply is not designed until it is known.
+      supply is not designed until it is known. Powers are each mode's current times the rail's mean voltage in that mode
+      at nominal mains (from the supply design); the trough is the lowest point of the ripple with the key down.
     </p>
     <table class="grid budget">
       <thead>
         <tr>
           <th>Rail</th>
-          <th class="num">Voltage</th>
+          <th class="num">
+            Voltage <span class="sub">receive → key-down mean, nominal mains; key-down trough</span>
+          </th>
           {MODES.map((m) => (
             <th class="num">{MODE_LABELS[m]}</th>
           ))}
@@ -41,7 +44,19 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
                 {r.depth > 0 ? '└ ' : ''}
                 {r.name}
               </th>
-              <td class="num">{formatValue(r.nominalV, 'V')}</td>
+              <td class="num" title={r.voltageCondition}>
+                {r.modeV ? (
+                  <>
+                    {formatValue(r.modeV.receive, 'V')} → {formatValue(r.modeV.keyDown, 'V')}
+                    <span class="sub">trough {r.keyDownTroughV != null ? formatValue(r.keyDownTroughV, 'V') : '—'}</span>
+                  </>
+                ) : (
+                  <>
+                    {formatValue(r.nominalV, 'V')}
+                    <span class="sub">estimate</span>
+                  </>
+                )}
+              </td>
               {MODES.map((m) => (
                 <td class="num" data-rail={r.railId} data-mode={m}>
                   <strong>
