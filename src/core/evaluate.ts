@@ -8,6 +8,7 @@ import { withSimulationMemo } from './power/rectifier-sim';
 import type { SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
 import { withSupplyVoltages } from './budget-voltages';
+import { withRecommendedPa } from './power/recommended-pa';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
@@ -182,6 +183,8 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   const cost = costProject(project);
   const catalog = catalogFindings(project, supply);
   const mains = mainsCornerFindings(project.mains, project.rf.spuriousRule);
+  const recPa = withRecommendedPa(supply, project, rf);
+  supply = recPa.supply;
   const heat = project.supply.rails.length ? heatBudget(supply, paHeat(rf), project.supply.enclosureAreaM2, project.supply.enclosureUWPerM2K, project.ambientC) : null;
   const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...(heat?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
   return { budget, supply, heat, rf, cost, catalog, paRailV, findings };

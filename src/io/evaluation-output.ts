@@ -98,7 +98,10 @@ function supplyLines(report: EvaluationReport): string[] {
       out.push(`  ${r.railName}: runtime about ${(r.runtimeS / 3600).toFixed(1)} h, end of discharge under load ${formatValue(r.loadedEndV, 'V')}`);
     }
   }
-  for (const t of s.transformers) out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard, primary ${formatValue(t.primaryA, 'A')}`);
+  for (const t of s.transformers) {
+    out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard (sized for CW; ${t.tuneUpVA.toFixed(0)} VA with a continuous carrier), primary ${formatValue(t.primaryA, 'A')}`);
+    for (const w of t.windings) if (w.paAtCheck) out.push(`    recommended ${w.windingName}: ${formatValue(w.paAtCheck.railV, 'V')} at low mains, key-down; ${w.paAtCheck.stageName} about ${formatValue(w.paAtCheck.outputW, 'W')} (fitted: ${formatValue(w.paAtCheck.fittedOutputW, 'W')})`);
+  }
   const h = report.heat;
   if (h) out.push(`  Heat inside: ${formatValue(h.totalW, 'W')} in CW use${h.riseK !== null ? `, rise ${formatValue(h.riseK, 'K')} (about ${formatValue(h.insideC, '°C')} inside)` : ' (enclosure not entered)'}`);
   if (s.primary?.fuse.ratedA) out.push(`  Primary fuse: ${s.primary.fuse.characteristic}${formatValue(s.primary.fuse.ratedA, 'A')} (time-lag, IEC 60127 series)`);

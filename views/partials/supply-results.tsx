@@ -223,8 +223,18 @@ const TransformerCard: FC<{ t: TransformerReport }> = ({ t }) => (
       </tbody>
     </table>
     <p class="summary-line">
-      Total {fv(t.thermalVA, 'VA')} in CW operation ({fv(t.tuneUpVA, 'VA')} with a tune-up carrier): choose {t.standardVA !== null ? fv(t.standardVA, 'VA') : 'a larger transformer than the list holds'}. Primary current {fv(t.primaryA, 'A')}.
+      Sized for CW operation: total {fv(t.thermalVA, 'VA')} ({fv(t.tuneUpVA, 'VA')} with a continuous tune-up carrier, which this size
+      carries only briefly): choose {t.standardVA !== null ? fv(t.standardVA, 'VA') : 'a larger transformer than the list holds'}. Primary current {fv(t.primaryA, 'A')}.
     </p>
+    {t.windings.map((w) =>
+      w.paAtCheck ? (
+        <p class="summary-line">
+          With the recommended {w.windingName.replace(/ winding$/, '')} replacement ({w.standardRatedV !== null ? fv(w.standardRatedV, 'V') : '?'},{' '}
+          {fv(w.ratedA, 'A')}) the rail falls to {fv(w.paAtCheck.railV, 'V')} at low mains, key-down: {w.paAtCheck.stageName} gives about{' '}
+          {fv(w.paAtCheck.outputW, 'W')} there ({fv(w.paAtCheck.fittedOutputW, 'W')} with the fitted winding).
+        </p>
+      ) : null,
+    )}
   </div>
 );
 

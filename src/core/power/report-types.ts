@@ -163,6 +163,8 @@ export interface WindingRecommendation {
   vaRatedV?: number;
   /** Trough at low mains, key-down with the recommended winding (V), null when not simulated. */
   checkTroughV: number | null;
+  /** A PA on this rail at that trough: its output (W) and its output with the fitted winding at low mains (W). */
+  paAtCheck?: { stageName: string; railV: number; outputW: number; fittedOutputW: number };
   /** This winding's share of the primary current, worst continuous key-down, referred by the turns ratio V_NL/V_mains (A). */
   primaryReferredA: number;
   /** 2 for a centre-tapped winding (two halves, each of ratedA), otherwise 1. */
