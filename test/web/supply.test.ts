@@ -141,6 +141,16 @@ describe('supply page', () => {
     expect(await stored()).toEqual(before);
   });
 
+  it('each rail leads with its deciding corners; the full corner table sits behind a native disclosure', async () => {
+    const html = await (await t.app.request(`http://localhost${base}`)).text();
+    const card = html.slice(html.indexOf('id="supply-rail-pa"'));
+    const deciding = card.indexOf('Deciding corners');
+    const details = card.indexOf('<details class="all-corners"><summary>All 15 corners');
+    expect(deciding).toBeGreaterThan(0);
+    expect(details).toBeGreaterThan(deciding); // headroom, heating and tune-up first, then the disclosure
+    for (const role of ['Headroom', 'Heating', 'Tune-up']) expect(card.slice(deciding, details)).toContain(role);
+  });
+
   it('saves the enclosure (a bare surface is read in cm²) and refuses a negative one, naming it, saving nothing', async () => {
     const before = await stored();
     const bad = await post(`${base}/enclosure`, { version: String(before.version), enclosureArea: '-5', enclosureU: '5.5' }, true);

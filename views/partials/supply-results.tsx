@@ -14,6 +14,7 @@ import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
 import { BleederLine } from '../components/supply-bleeder';
 import { HeatCard } from '../components/supply-heat';
+import { AllCorners, RectifiedDeciding, RegulatedDeciding } from '../components/supply-corners';
 import type { HeatBudget } from '../../src/core/power/heat-budget';
 
 const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
@@ -59,6 +60,8 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
     <h3>
       {rail.railName} <span class="hint">({rail.topology} rectifier; needs {fv(rail.requiredMinV, 'V')} at the trough: {rail.requirementNote})</span>
     </h3>
+    <RectifiedDeciding rail={rail} />
+    <AllCorners count={rail.corners.length}>
     <table class="grid corners">
       <thead>
         <tr>
@@ -100,6 +103,7 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
         ))}
       </tbody>
     </table>
+    </AllCorners>
     <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
     {rail.windingFuse ? <WindingFuseTable wf={rail.windingFuse} /> : null}
     <BleederLine b={rail.bleeder} />
@@ -118,6 +122,8 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
         ({rail.regulator} regulator, {fv(rail.outputV, 'V')} out, dropout {fv(rail.dropoutV, 'V')})
       </span>
     </h3>
+    <RegulatedDeciding rail={rail} />
+    <AllCorners count={rail.corners.length}>
     <table class="grid corners">
       <thead>
         <tr>
@@ -152,7 +158,14 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
         ))}
       </tbody>
     </table>
+    </AllCorners>
     <p class="summary-line ripple">
+      {(() => {
+        const rc = rail.corners.find((c) => c.id === rail.worstRippleCornerId);
+        return rc && rc.outputRipplePpV !== null
+          ? `Ripple at the output up to ${fv(rc.outputRipplePpV, 'V')} p-p (${fv(rc.inputRipplePpV, 'V')} p-p in, ${rc.label.toLowerCase()}). `
+          : 'Ripple at the output unknown. ';
+      })()}
       Ripple rejection {rail.rippleRejectionDb !== null ? `${rail.rippleRejectionDb} dB` : 'not stated'}
       {rail.rippleTargetV !== null ? `; output ripple target ${fv(rail.rippleTargetV, 'V')} p-p` : '; no output ripple target'}.
     </p>

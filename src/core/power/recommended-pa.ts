@@ -38,5 +38,8 @@ export function withRecommendedPa(supply: SupplyReport | null, project: Project,
     });
     return { ...r, winding: { ...r.winding, paAtCheck } };
   });
-  return { supply: { ...supply, rails, findings: [...supply.findings, ...findings] }, findings };
+  // the transformer's copy of each winding recommendation carries the same figure
+  const byWinding = new Map(rails.flatMap((r) => (r.kind === 'rectified' && r.winding?.paAtCheck ? [[r.winding.windingId, r.winding.paAtCheck] as const] : [])));
+  const transformers = supply.transformers.map((t) => ({ ...t, windings: t.windings.map((w) => (byWinding.has(w.windingId) ? { ...w, paAtCheck: byWinding.get(w.windingId) } : w)) }));
+  return { supply: { ...supply, rails, transformers, findings: [...supply.findings, ...findings] }, findings };
 }

@@ -134,7 +134,8 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   findings.push(...fittedFuseFindings(`${rail.name} fuse`, rail.fuseA, fuse));
   recommendations.push({ topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} rail fuse` : 'Rail fuse: see reasoning', reasoning: fuse.reasoning, source: 'supply.fuse' });
   if (winding) {
-    recommendations.push({ topic: 'rectifier', text: `Diodes rated ${fmt(Math.max(...corners.map((c) => c.diodePeakA)), 1)} A repetitive peak and ${fmt(Math.max(...corners.map((c) => c.surgeA)), 0)} A surge or more`, reasoning: `The simulated repetitive peak current and the switch-on surge into a discharged ${fmtF(rail.reservoirF)} reservoir (EMF peak over winding, diode and ESR resistance) at high mains. The bridge's non-repetitive surge rating (IFSM) must exceed the surge.`, source: 'supply.surge' });
+    const loss = rectifierLoss(rail.topology, rail.diodeDropV, rail.diodeResistanceOhm, corners, ctx.keyingDuty);
+    recommendations.push({ topic: 'rectifier', text: `Diodes rated ${fmt(Math.max(...corners.map((c) => c.diodePeakA)), 1)} A repetitive peak and ${fmt(Math.max(...corners.map((c) => c.surgeA)), 0)} A surge or more; they dissipate ${fmt(loss.thermalW)} W in CW use (${fmt(loss.keyDownW)} W key-down or tune-up)`, reasoning: `Dissipation from the simulated currents at high mains, Vf x I_avg + r_d x I_rms² per diode. The simulated repetitive peak current and the switch-on surge into a discharged ${fmtF(rail.reservoirF)} reservoir (EMF peak over winding, diode and ESR resistance) at high mains. The bridge's non-repetitive surge rating (IFSM) must exceed the surge.`, source: 'supply.surge' });
   }
 
   // Fuse in the winding lead, ahead of the rectifier, and the winding's fault currents
