@@ -17,11 +17,11 @@ function upload(app: App['app'], json: unknown) {
 
 describe('import accepts only what the forms accept', () => {
   it.each([
-    ['an even filter order', (p: any) => (p.stages.find((s: any) => s.lpf).lpf.order = 4), /stages\[\d\]\.lpf\.order: must be 3, 5, 7 or 9/],
-    ['a Chebyshev filter without ripple', (p: any) => Object.assign(p.stages.find((s: any) => s.lpf).lpf, { response: 'chebyshev', rippleDb: 0 }), /lpf\.rippleDb: a Chebyshev filter needs rippleDb/],
+    ['an even filter order', (p: any) => (p.stages.find((s: any) => s.lpf).lpf.order = 4), /stages\[\d\]\.lpf\.order: Order must be odd \(3, 5, 7 or 9\)/],
+    ['a Chebyshev filter without ripple', (p: any) => Object.assign(p.stages.find((s: any) => s.lpf).lpf, { response: 'chebyshev', rippleDb: 0 }), /lpf\.rippleDb: Passband ripple of a Chebyshev filter must be from 0\.01 to 0\.5 dB/],
     ['a negative core AL', (p: any) => (p.stages.find((s: any) => s.lpf).lpf.coreAlHPerTurn2 = -1e-9), /lpf\.coreAlHPerTurn2/],
     ['500 A on a stage', (p: any) => (p.stages[0].loads[0].currentA.keyDown = 500), /stages\[0\]\.loads\[0\]\.currentA\.keyDown/],
-    ['a final with neither saturation voltage nor Rds(on)', (p: any) => Object.assign(p.stages.find((s: any) => s.pa).pa, { saturationV: null, rdsOnOhm: null }), /pa\.saturationV: give saturationV or rdsOnOhm/],
+    ['a final with neither saturation voltage nor Rds(on)', (p: any) => Object.assign(p.stages.find((s: any) => s.pa).pa, { saturationV: null, rdsOnOhm: null }), /pa\.saturationV: Saturation voltage: give it or Rds\(on\)/],
     // an empty category and an offer without price breaks are accepted by the forms too (CSV imports make them)
     ['a part without a description', (p: any) => (p.parts[0].description = ''), /parts\[0\]\.description/],
     ['a unit price with a part of a cent', (p: any) => (p.parts.find((x: any) => x.offers.length).offers[0].breaks = [{ minQty: 1, unitPriceCents: 9.5 }]), /offers\[0\]\.breaks/],
