@@ -1,0 +1,39 @@
+// A new project from a station template (pure: ids come from the caller's makeId).
+import type { Mains, Project } from '../model';
+import { bandOf } from '../rf/bands';
+import { cloneProject, newProject } from '../new-project';
+import { TEMPLATE_INFO, type TemplateKey } from './choices';
+import { STARTER_SUPPLIERS, starterParts } from './parts';
+import { STATIONS } from './stations';
+
+export interface TemplateInput {
+  name: string;
+  frequencyHz: number;
+  targetPowerW: number;
+  mains: Mains | null;
+}
+
+/**
+ * The template's stages, supply tree and starter parts list for the chosen band, power and mains. A battery template
+ * gets no mains; a mains template needs mains (the new-project form refuses the combination before this is called).
+ */
+export function projectFromTemplate(key: TemplateKey, input: TemplateInput, id: string, makeId: (prefix: string) => string): Project {
+  const info = TEMPLATE_INFO[key];
+  if (info.mains && !input.mains) throw new Error(`template ${key} needs a mains supply`);
+  const base = newProject(id, input.name, input.frequencyHz, input.targetPowerW, info.mains ? input.mains : null);
+  const station = STATIONS[key](bandOf(input.frequencyHz)?.name ?? '', input.targetPowerW);
+  const catalog = starterParts(input.frequencyHz);
+  const used = [...new Set(station.lines.map((l) => l.partId))];
+  const project: Project = {
+    ...base,
+    notes: `Started from the "${info.label}" template: typical values and invented suppliers and prices. ` +
+      'Replace them with your own circuit, measurements and offers.',
+    supply: station.supply,
+    stages: station.stages,
+    parts: used.map((p) => structuredClone(catalog[p]!)),
+    bom: station.lines.map((l, i) => ({ id: `bl-${i}`, stageId: l.stageId, partId: l.partId, qtyPerRig: l.qty, refs: l.refs, notes: l.notes ?? '' })),
+    costing: { ...base.costing, suppliers: structuredClone(STARTER_SUPPLIERS) },
+  };
+  // fresh ids for every row, as a clone gets, so two projects from one template never share one
+  return cloneProject(project, id, input.name, makeId);
+}
