@@ -91,6 +91,9 @@ const stages: Stage[] = [
       receiverMaxInputW: 0.01,
       txDelayS: 0.008,
       wpm: 20,
+      keyRiseS: 0.005,
+      keyFallS: 0.005,
+      keyShapingRcS: null,
     },
   },
   {

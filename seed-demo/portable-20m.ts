@@ -101,6 +101,9 @@ export const portable20m: Project = {
         receiverMaxInputW: 0.01,
         txDelayS: 0.006,
         wpm: 18,
+        keyRiseS: null,
+        keyFallS: null,
+        keyShapingRcS: 0.0025, // one RC network on the driver's bias line, 2.5 ms
       },
     },
   ],

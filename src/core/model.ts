@@ -194,6 +194,9 @@ export interface RelayParams {
   receiverMaxInputW: number;
   txDelayS: number;
   wpm: number;
+  keyRiseS?: number | null; // keyed RF envelope 10–90 % rise, raised-cosine edges, s; 0 = hard keying; null = not given
+  keyFallS?: number | null; // 10–90 % fall, s; null/absent = same as the rise
+  keyShapingRcS?: number | null; // time constant of a single RC shaping network (exponential edges), s; null = none
 }
 
 export interface Stage {

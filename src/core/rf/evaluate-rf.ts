@@ -13,6 +13,7 @@ import { spectrumFindings } from './pa-spectrum-findings';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
 import { fieldLabel } from './field-labels';
+import { evaluateKeying } from './keying-eval';
 
 export interface RfContext {
   /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
@@ -132,7 +133,10 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   for (const st of project.stages) {
     if (st.kind === 'tr' && st.relay) {
       const relay = evaluateRelay(st.relay, { powerW: st.relay.position === 'before-lpf' ? paStressW : paStressW * 10 ** (-passbandLossDb / 10), swr: finite(project.rf.worstSwr, 1), harmonicAmplitudeSum, subject: st.name });
-      stages.push({ stageId: st.id, stageName: st.name, kind: 'tr', pa: null, lpf: null, relay, findings: sortFindings(relay.findings) });
+      // keying from the relay's own data (speed, delay, edges), once that data is accepted
+      const keyed = relay.findings.some((f) => f.rule === 'relay.input') ? null : evaluateKeying(st.relay, st.name);
+      stages.push({ stageId: st.id, stageName: st.name, kind: 'tr', pa: null, lpf: null, relay, keying: keyed?.result ?? null,
+        findings: sortFindings([...relay.findings, ...(keyed?.findings ?? [])]) });
     }
   }
   if (paStressW > paPowerW * 1.001) {

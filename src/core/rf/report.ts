@@ -9,6 +9,7 @@ import type { MonteCarloResult } from './lpf-monte-carlo';
 import type { FieldError } from './lpf-validate';
 import type { PaResult } from './pa';
 import type { RelayResult } from './tr-relay';
+import type { KeyingResult } from './keying-eval';
 
 export interface LpfStageResult {
   /** Field errors of the filter parameters (design/analysis null when not empty). */
@@ -32,6 +33,8 @@ export interface RfStageResult {
   lpf: LpfStageResult | null;
   /** Relay results (kind 'tr'). */
   relay: RelayResult | null;
+  /** Keyed spectrum of a T/R stage (kind 'tr'; null or absent when no edges are entered or its data is refused). */
+  keying?: KeyingResult | null;
   /** This stage's findings, most severe first. */
   findings: Finding[];
 }

@@ -27,6 +27,26 @@ export const relaySpec = defineSpec({
     bounceS: num('Bounce time', 's', U.ms, 0, 1, 0.001, { form: 'bounce', example: '1' }),
     txDelayS: num('Transmit delay after relay drive', 's', U.ms, 0, 10, 0.008, { form: 'txDelay', example: '8' }),
     wpm: num('Keying speed', '', U.wpm, 1, 100, 20, { example: '20' }),
+    // Common practice, no published source: edges beyond 50 ms blur even slow CW into a tone that swells and fades
+    keyRiseS: optNum('Keyed envelope rise time (10–90 %)', 's', U.ms, 0, 0.05, 0.005, {
+      form: 'keyRise',
+      help: 'of the RF envelope, raised-cosine edges; 0 = hard keying; empty = not estimated',
+      example: '5',
+    }),
+    keyFallS: optNum('Keyed envelope fall time (10–90 %)', 's', U.ms, 0, 0.05, null, { form: 'keyFall', help: 'empty = same as the rise', example: '5' }),
+    keyShapingRcS: optNum('Shaping network time constant R·C', 's', U.ms, 0, 0.05, null, {
+      form: 'keyRc',
+      help: 'exponential edges of one RC network, instead of the rise and fall times; e.g. 10 kΩ × 220 nF = 2.2',
+      example: '2.2',
+    }),
+  },
+  refine: (v) => {
+    const errors = [];
+    if (typeof v.keyShapingRcS === 'number' && (typeof v.keyRiseS === 'number' || typeof v.keyFallS === 'number'))
+      errors.push({ field: 'keyShapingRcS', label: 'Shaping network time constant R·C', message: 'Shaping network time constant R·C: give it or the rise and fall times, not both' });
+    if (typeof v.keyFallS === 'number' && typeof v.keyRiseS !== 'number')
+      errors.push({ field: 'keyRiseS', label: 'Keyed envelope rise time (10–90 %)', message: 'Keyed envelope rise time (10–90 %): give it with the fall time' });
+    return errors;
   },
   view: {
     from: (r) => {

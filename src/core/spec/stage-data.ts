@@ -57,6 +57,7 @@ export const STAGE_DATA: readonly StageData[] = [
       ['coilA', 'coilRailId', 'coilReceive', 'coilKeyUp', 'coilKeyDown'],
       ['isolationDb', 'position', 'receiverMaxInputW'],
       ['operateS', 'releaseS', 'bounceS', 'txDelayS', 'wpm'],
+      ['keyRiseS', 'keyFallS', 'keyShapingRcS'],
     ],
   },
 ];
