@@ -30,11 +30,13 @@ export const RULE_SETS: Record<RuleSet, RuleSetInfo> = {
     exposure: 'exposure.fcc-distance',
     mains: 'mains.ansi-c84-1',
     sources: ['spurious.us-97-307d', 'exposure.fcc-distance', 'exposure.fcc-exemption', 'exposure.near-field', 'mains.ansi-c84-1', 'exposure.local-rules'],
-    // ANSI C84.1 Range B service voltage, 110-127 V on 120 V nominal (from memory, not confirmed; see the registry)
+    // ANSI C84.1 Range B utilization voltage (at the equipment's outlet, where the rig plugs in), 106-127 V on 120 V
+    // nominal: -11.7 % / +5.8 % (from memory, not confirmed; see the registry). Range B, not the tighter Range A:
+    // the standard allows Range B to occur, so a supply must work over it.
     mainsNominalV: 120,
-    mainsLowFraction: (120 - 110) / 120,
+    mainsLowFraction: (120 - 106) / 120,
     mainsHighFraction: (127 - 120) / 120,
-    mainsRangeText: 'ANSI C84.1 Range B service voltage, 110–127 V on 120 V nominal',
+    mainsRangeText: 'ANSI C84.1 Range B utilization voltage, 106–127 V on 120 V nominal',
   },
   'itu-app3': {
     label: 'ITU / CEPT',
@@ -58,6 +60,17 @@ export const RULE_SETS: Record<RuleSet, RuleSetInfo> = {
 export function defaultRuleSet(mains: Mains | null): RuleSet | null {
   if (!mains) return null;
   return mains.nominalV === 120 && mains.frequencyHz === 60 ? 'us-97-307' : 'itu-app3';
+}
+
+/**
+ * A mains supply of nominal voltage and frequency with the corners of the standard its default rule set names
+ * (defaultRuleSet): 120 V / 60 Hz gets ANSI C84.1 Range B, any other mains the IEC 60038 ±10 %. What a new project
+ * and the mains presets start from; editable afterwards in the settings.
+ */
+export function mainsWithStandardCorners(nominalV: number, frequencyHz: number): Mains {
+  const base = { nominalV, frequencyHz, lowFraction: 0, highFraction: 0 };
+  const info = RULE_SETS[defaultRuleSet(base)!];
+  return { ...base, lowFraction: info.mainsLowFraction, highFraction: info.mainsHighFraction };
 }
 
 /**

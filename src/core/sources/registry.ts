@@ -95,7 +95,7 @@ export const SOURCES = {
   'exposure.near-field': { status: 'published', text: `λ/2π (= 47.7 / f in MHz, metres) bounds the reactive near field (47 CFR 1.1307(b)(3)(i)(C)); the far-field equations of ${OET65} are estimates inside it` },
   'exposure.local-rules': { status: 'practice', text: 'Local rules and your licence conditions govern RF exposure; this is a planning estimate' },
   // ---------------------------------------------------------------- mains
-  'mains.ansi-c84-1': { status: 'memory', text: `ANSI C84.1 (electric power systems, voltage ratings, 60 Hz), Range B service voltage for 120 V nominal: 110–127 V (values ${FROM_MEMORY}; the table was not read)` },
+  'mains.ansi-c84-1': { status: 'memory', text: `ANSI C84.1 (electric power systems and equipment, voltage ratings, 60 Hz), Range B utilization voltage for 120 V nominal: 106–127 V, −11.7 % / +5.8 % (values ${FROM_MEMORY}; the table was not read)` },
   'mains.iec-60038': { status: 'published', text: 'IEC 60038 (IEC standard voltages): 230 V ± 10 % at the supply terminals (207–253 V)' },
   // ---------------------------------------------------------------- costing
   'cost.practice': { status: 'practice', text: `Costing arithmetic from your offers (${PRACTICE})` },

@@ -7,6 +7,7 @@ import { defineSpec, U, type FieldError, type NumberField } from './field';
 import { defaults, formValues, getPath } from './derive';
 import { choice, num, text } from './make';
 import { numberText } from './number-text';
+import { mainsWithStandardCorners } from '../rules/rule-set';
 
 /**
  * Smallest target power, W: the PA divides by it (load line, dB from target), and a subnormal such as 5e-324 W passed
@@ -14,11 +15,16 @@ import { numberText } from './number-text';
  */
 export const MIN_TARGET_POWER_W = 1e-3;
 
-/** Mains supplies a new project can start from; 'battery' = a battery / DC-only station (no mains). */
+/**
+ * Mains supplies a new project can start from; 'battery' = a battery / DC-only station (no mains). The corners come
+ * from the standard of the rule set the preset starts with (rules/rule-set.ts): 230 V IEC 60038 ±10 %; 120 V / 60 Hz
+ * ANSI C84.1 Range B utilization 106–127 V (−11.7 % / +5.8 %, from memory); 100 V takes the ITU / CEPT rule set's
+ * ±10 % (no standard for 100 V mains is in the rule sets). Stored projects keep the corners they were saved with.
+ */
 export const MAINS_PRESETS: Record<string, Mains | null> = {
-  '230-50': { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 },
-  '120-60': { nominalV: 120, frequencyHz: 60, lowFraction: 0.1, highFraction: 0.1 },
-  '100-50': { nominalV: 100, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 },
+  '230-50': mainsWithStandardCorners(230, 50),
+  '120-60': mainsWithStandardCorners(120, 60),
+  '100-50': mainsWithStandardCorners(100, 50),
   battery: null,
 };
 const PRESET_TEXT: Record<string, string> = {

@@ -83,11 +83,36 @@ describe('rule set defaults and mains corners', () => {
     expect(mainsCornerFindings({ nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 }, 'itu-app3')[0].severity).toBe('ok');
   });
 
-  it('ANSI C84.1 Range B (110-127 V on 120 V, from memory): -10 % / +10 % covers it, -5 % / +5 % does not', () => {
-    // (120 - 110) / 120 = 8.33 % low, (127 - 120) / 120 = 5.83 % high
-    expect(mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.1, highFraction: 0.1 }, 'us-97-307')[0].severity).toBe('ok');
+  it('ANSI C84.1 Range B utilization (106-127 V on 120 V, from memory): -10 % misses the low end, -12 % / +6 % covers it', () => {
+    // Source (from memory, not confirmed): ANSI C84.1 Range B utilization voltage 106-127 V on 120 V nominal
+    // (120 - 106) / 120 = 11.67 % low, (127 - 120) / 120 = 5.83 % high
+    // (was the Range B service voltage, 110-127 V: the rig sees the utilization voltage at its outlet)
+    expect(RULE_SETS['us-97-307'].mainsLowFraction).toBeCloseTo(0.11667, 4);
+    expect(RULE_SETS['us-97-307'].mainsHighFraction).toBeCloseTo(0.05833, 4);
+    const ten = mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.1, highFraction: 0.1 }, 'us-97-307')[0];
+    expect(ten.severity).toBe('caution');
+    expect(ten.kind).toBeUndefined(); // actionable: widen the corners
+    expect(ten.message).toMatch(/106–127 V/);
+    expect(mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.12, highFraction: 0.06 }, 'us-97-307')[0].severity).toBe('ok');
     expect(mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.05, highFraction: 0.05 }, 'us-97-307')[0].severity).toBe('caution');
-    expect(sourceText(RULE_SETS['us-97-307'].mains)).toMatch(/Range B/);
+    expect(sourceText(RULE_SETS['us-97-307'].mains)).toMatch(/Range B utilization.*106–127 V.*from memory/);
+  });
+
+  it('new projects and the mains presets start with the corners of their rule set\'s standard', () => {
+    // Source (from memory, not confirmed): ANSI C84.1 Range B utilization 106-127 V: -14/120, +7/120
+    const us = newProject('p', 'x', 7.03e6, 5, MAINS_PRESETS['120-60']);
+    expect(us.rf.spuriousRule).toBe('us-97-307');
+    expect(us.mains!.lowFraction).toBeCloseTo(14 / 120, 9);
+    expect(us.mains!.highFraction).toBeCloseTo(7 / 120, 9);
+    expect(mainsCornerFindings(us.mains, us.rf.spuriousRule)[0].severity).toBe('ok');
+    // Source: IEC 60038, 230 V +/- 10 %
+    const eu = newProject('p', 'x', 7.03e6, 5, MAINS_PRESETS['230-50']);
+    expect(eu.mains).toMatchObject({ nominalV: 230, lowFraction: 0.1, highFraction: 0.1 });
+    expect(mainsCornerFindings(eu.mains, eu.rf.spuriousRule)[0].severity).toBe('ok');
+    // the demo projects keep their stored corners: the club (120 V, +/- 10 %) is told to widen its low corner
+    const club = evaluate(DEMO_PROJECTS[0]);
+    expect(DEMO_PROJECTS[0].mains).toMatchObject({ nominalV: 120, lowFraction: 0.1, highFraction: 0.1 });
+    expect(club.findings.find((f) => f.rule === 'mains.corners')!.severity).toBe('caution');
   });
 
   it('each rule set names its sources in the registry and says local rules and the licence govern', () => {
