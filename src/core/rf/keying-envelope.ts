@@ -44,6 +44,10 @@ export function envelopeAt(tS: number, dotS: number, edges: KeyedEdges): number 
   const fallDur = edges.fallS / RAISED_COSINE_10_90;
   // one dot: rising edge centred on its key-down, falling edge centred on its key-up; neighbouring dots overlap
   // only when an edge is longer than a dot
-  const dot = (start: number) => Math.min(riseEdge(t - start, riseDur), 1 - riseEdge(t - start - dotS, fallDur));
-  return Math.max(dot(-periodS), dot(0), dot(periodS));
+  // (a loop rather than a closure per call: this runs once per FFT sample)
+  let level = 0;
+  for (let start = -periodS; start <= periodS; start += periodS) {
+    level = Math.max(level, Math.min(riseEdge(t - start, riseDur), 1 - riseEdge(t - start - dotS, fallDur)));
+  }
+  return level;
 }

@@ -37,8 +37,25 @@ export function envelopeLines(dotS: number, edges: KeyedEdges, samples = KEYING_
   return out;
 }
 
-/** Keyed carrier spectrum of a steady dot train at `wpm` with the given edges. */
+/** Spectra already computed, by their inputs (a pure function of them; bounded: the oldest goes first). */
+const spectra = new Map<string, KeyingSpectrum>();
+const SPECTRA_KEPT = 16;
+
+/**
+ * Keyed carrier spectrum of a steady dot train at `wpm` with the given edges. The same inputs give the same
+ * (shared, frozen) result: an edit elsewhere in the project does not run the 32k-point FFT again.
+ */
 export function keyingSpectrum(wpm: number, edges: KeyedEdges, maxOffsetHz = 3000): KeyingSpectrum {
+  const key = JSON.stringify([wpm, edges, maxOffsetHz]);
+  const held = spectra.get(key);
+  if (held) return held;
+  const computed = computeSpectrum(wpm, edges, maxOffsetHz);
+  if (spectra.size >= SPECTRA_KEPT) spectra.delete(spectra.keys().next().value!);
+  spectra.set(key, computed);
+  return computed;
+}
+
+function computeSpectrum(wpm: number, edges: KeyedEdges, maxOffsetHz: number): KeyingSpectrum {
   const dotS = dotLengthS(wpm);
   const lineSpacingHz = 1 / (2 * dotS);
   const a = envelopeLines(dotS, edges);
@@ -68,7 +85,12 @@ export function keyingSpectrum(wpm: number, edges: KeyedEdges, maxOffsetHz = 300
     outside += 2 * a[k] * a[k];
     edgeK = k - 1;
   }
-  return { wpm, dotS, lineSpacingHz, offsetsHz, levelsDbc, clicks, occupiedBandwidthHz: 2 * edgeK * lineSpacingHz };
+  const spectrum = { wpm, dotS, lineSpacingHz, offsetsHz, levelsDbc, clicks, occupiedBandwidthHz: 2 * edgeK * lineSpacingHz };
+  Object.freeze(offsetsHz);
+  Object.freeze(levelsDbc);
+  clicks.forEach((c) => Object.freeze(c));
+  Object.freeze(clicks);
+  return Object.freeze(spectrum);
 }
 
 /** Modulation rate of Morse telegraphy at `wpm`, baud: one element unit per dot length (PARIS word of 50 units). */
