@@ -122,6 +122,11 @@ function rfLines(report: EvaluationReport): string[] {
     }
     if (st.lpf?.design) out.push(`  ${st.stageName}: ${st.lpf.design.response} order ${st.lpf.design.order}, cutoff ${formatValue(st.lpf.design.cutoffHz, 'Hz', 4)}, loss ${st.lpf.analysis?.atOperating.lossDb.toFixed(2)} dB`);
     if (st.relay) out.push(`  ${st.stageName}: RF ${formatValue(st.relay.rfPeakV, 'V')} peak, ${formatValue(st.relay.rfRmsA, 'A')} RMS at the worst SWR`);
+    const k = st.keying;
+    if (k) {
+      const clicks = k.spectrum.clicks.map((c) => `${formatValue(c.offsetHz, 'Hz')} ${c.levelDbc.toFixed(0)} dBc`).join(', ');
+      out.push(`    keying at ${k.spectrum.wpm} WPM, rise ${formatValue(k.riseS, 's')}: occupied ${formatValue(k.spectrum.occupiedBandwidthHz, 'Hz')} (99 %), necessary ${formatValue(k.necessaryFadingHz, 'Hz')} (K = 5); clicks ${clicks}`);
+    }
   }
   const lvl = (x: number, limited: boolean) => (limited ? 'limited by construction' : `${x.toFixed(1)} dBc`);
   for (const h of rf.harmonics?.rows ?? []) {

@@ -14,6 +14,8 @@ import { CONSTRUCTION_FLOOR_DBC, type HarmonicBasis } from '../../src/core/rf/ha
 import { MIN_DBC } from '../../src/core/rf/pa-spectrum';
 import { formatValue as fv } from '../../src/core/units';
 import { filterPlotSvg } from '../plots/filter-plot';
+import { keyingPlotSvg } from '../plots/keying-plot';
+import type { KeyingResult } from '../../src/core/rf/keying-eval';
 import { PaSwrTable } from './pa-swr-table';
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
@@ -176,6 +178,29 @@ const RelayTable: FC<{ name: string; r: RelayResult }> = ({ name, r }) => (
   </div>
 );
 
+const ms = (s: number) => `${(s * 1e3).toFixed(1)} ms`;
+
+const KeyingTable: FC<{ name: string; k: KeyingResult }> = ({ name, k }) => (
+  <div class="rf-keying">
+    <h3>{name}: keying</h3>
+    <p class="explain">
+      Spectrum of a steady dot train at {k.spectrum.wpm} WPM (lines every {fv(k.spectrum.lineSpacingHz, 'Hz')}), from the keyed
+      envelope's {k.edges.shape === 'rc' ? `RC shaping (τ = ${ms(k.edges.timeConstantS)})` : 'raised-cosine edges'}. Key clicks are the
+      strongest line at or beyond each offset, relative to the carrier.
+    </p>
+    <KV
+      rows={[
+        ['Rise / fall (10–90 %)', `${ms(k.riseS)} / ${ms(k.fallS)}`],
+        ['Key clicks', k.spectrum.clicks.map((c) => `${fv(c.offsetHz, 'Hz')}: ${c.levelDbc.toFixed(0)} dBc`).join('; ')],
+        ['Occupied bandwidth (99 %)', fv(k.spectrum.occupiedBandwidthHz, 'Hz')],
+        ['Necessary bandwidth Bn = B K', `${fv(k.necessaryFadingHz, 'Hz')} fading (K = 5), ${fv(k.necessaryNonFadingHz, 'Hz')} non-fading (K = 3); B = ${k.baud.toFixed(1)} Bd`],
+        ['First element after the relay', `${ms(k.firstElementHalfS)} at half amplitude, ${k.firstElementFullS > 0 ? ms(k.firstElementFullS) : 'never'} above 90 %`],
+      ]}
+    />
+    <figure class="plot">{raw(keyingPlotSvg(name, k))}</figure>
+  </div>
+);
+
 const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
   const h = report.harmonics;
   if (!h) return <p class="explain">Harmonics not computed: see the findings.</p>;
@@ -311,7 +336,12 @@ export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
       </ul>
     ) : null}
     {report.stages.map((s) =>
-      s.pa ? <PaTable name={s.stageName} pa={s.pa} /> : s.lpf ? <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} /> : s.relay ? <RelayTable name={s.stageName} r={s.relay} /> : null,
+      s.pa ? <PaTable name={s.stageName} pa={s.pa} /> : s.lpf ? <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} /> : s.relay ? (
+        <>
+          <RelayTable name={s.stageName} r={s.relay} />
+          {s.keying ? <KeyingTable name={s.stageName} k={s.keying} /> : null}
+        </>
+      ) : null,
     )}
     <Harmonics report={report} />
     <Exposure report={report} />

@@ -2,6 +2,7 @@
 import type { RfReport } from '../../core/rf/report';
 import { GREY, FAIL, CAUTION, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
+import type { KeyingResult } from '../../core/rf/keying-eval';
 import { findingsList, fv, keyValues, notComputed } from './common';
 import { sourceText } from '../../core/sources/registry';
 import type { PaSwrStress, Worst } from '../../core/rf/pa-swr';
@@ -77,11 +78,35 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
         ['Timing', `T/R delay minus (operate + bounce) = ${fv(r.hotSwitchMarginS, 's')}${r.hotSwitchMarginS < 0 ? ': RF reaches moving contacts' : ''}; dot ${fv(r.dotS, 's')}`],
       ], 110, 8.5);
     }
+    if (s.keying) keying(l, s.stageName, s.keying);
   }
   harmonics(l, rf);
   exposure(l, rf);
   l.heading('All RF findings', 2);
   findingsList(l, rf.findings);
+}
+
+function keying(l: Layout, name: string, k: KeyingResult): void {
+  const ms = (x: number) => `${(x * 1e3).toFixed(1)} ms`;
+  l.heading(`${name}: keying`, 2, 120);
+  keyValues(l, [
+    ['Edges (10–90 %)', `rise ${ms(k.riseS)}, fall ${ms(k.fallS)} (${k.edges.shape === 'rc' ? 'RC shaping network' : 'raised-cosine'}) at ${k.spectrum.wpm} WPM`],
+    ['Key clicks', k.spectrum.clicks.map((c) => `${fv(c.offsetHz, 'Hz')}: ${c.levelDbc.toFixed(0)} dBc`).join('; ')],
+    ['Bandwidth', `occupied (99 %) ${fv(k.spectrum.occupiedBandwidthHz, 'Hz')}; necessary Bn = B K ${fv(k.necessaryFadingHz, 'Hz')} (K = 5), ${fv(k.necessaryNonFadingHz, 'Hz')} (K = 3), B = ${k.baud.toFixed(1)} Bd`],
+    ['First element', `${ms(k.firstElementHalfS)} at half amplitude, ${k.firstElementFullS > 0 ? ms(k.firstElementFullS) : 'never'} above 90 %`],
+  ], 110, 8.5);
+  plot(l, {
+    title: `${name}: keyed spectrum of a steady dot train (lines, one side of the carrier)`,
+    xLabel: 'offset from the carrier (Hz)',
+    yLabel: 'line level (dBc)',
+    yMin: -120,
+    yMax: 5,
+    xTick: (v) => v.toFixed(0),
+    yTick: (v) => v.toFixed(0),
+    series: [{ label: 'line level (dBc)', xs: k.spectrum.offsetsHz, ys: k.spectrum.levelsDbc.map((v) => Math.max(-120, v)), color: BLUE }],
+    markers: k.spectrum.clicks.map((c) => ({ x: c.offsetHz, label: `${c.offsetHz}` })),
+    heightPt: 130,
+  });
 }
 
 const lvl = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'by construction' : fv(x, 'dBc'));
