@@ -111,7 +111,7 @@ const S2 = 'Harbor Radio Surplus';
 const S3 = 'Copperleaf Elektronik';
 
 const parts: Part[] = [
-  { id: 'p-trafo', description: 'Mains transformer 120 V, secondaries 16 V 1 A + 20 V 2.5 A, laminated, 70 VA', category: 'transformer', ratings: { va: 70 }, offers: [offer('o1', S1, 'NC-TR-7016', 'USD', [[1, 3450], [5, 3120], [10, 2890]]), offer('o2', S3, 'CL-62201', 'EUR', [[1, 3190], [10, 2750]])] },
+  { id: 'p-trafo', description: 'Mains transformer 120 V, secondaries 16 V 1 A + 20 V 2.5 A, laminated, 70 VA', category: 'transformer', ratings: { va: 70, sec1V: 16, sec1A: 1, sec2V: 20, sec2A: 2.5 }, offers: [offer('o1', S1, 'NC-TR-7016', 'USD', [[1, 3450], [5, 3120], [10, 2890]]), offer('o2', S3, 'CL-62201', 'EUR', [[1, 3190], [10, 2750]])] },
   { id: 'p-inlet', description: 'IEC mains inlet with switch and fuse drawer', category: 'mains', ratings: { ratedA: 10 }, offers: [offer('o3', S1, 'NC-INL-10S', 'USD', [[1, 495], [10, 420]]), offer('o4', S2, 'HR-8821', 'USD', [[1, 450]])] },
   { id: 'p-fuse', description: 'Fuse 5 × 20 mm, time-lag (T), 250 V, primary rating per supply page', category: 'fuse', ratings: { type: 'T' }, offers: [offer('o5', S1, 'NC-F520-T', 'USD', [[1, 45], [10, 32], [100, 21]], 10, 10)] },
   { id: 'p-fuseh', description: 'Fuse holder 5 × 20 mm, PCB mount, with cover', category: 'fuse', ratings: {}, offers: [offer('o6', S1, 'NC-FH520', 'USD', [[1, 62], [25, 48]])] },
@@ -126,7 +126,7 @@ const parts: Part[] = [
   { id: 'p-mica', description: 'Mica insulating washer kit, TO-220', category: 'hardware', ratings: {}, offers: [offer('o19', S1, 'NC-MICA220', 'USD', [[1, 25], [100, 14]], 1, 1)] },
   { id: 'p-bino', description: 'Binocular ferrite core, HF power (output transformer)', category: 'core', ratings: {}, offers: [offer('o20', S1, 'NC-FB-BN43', 'USD', [[1, 240], [10, 205]])] },
   { id: 'p-toroid', description: 'Iron-powder toroid 12.7 mm, 1–30 MHz mix, AL 4.9 nH/t²', category: 'core', ratings: { alHPerTurn2: 4.9e-9 }, offers: [offer('o21', S1, 'NC-IP127-R', 'USD', [[1, 85], [10, 66], [100, 48]]), offer('o22', S3, 'CL-71127', 'EUR', [[1, 70], [50, 52]])] },
-  { id: 'p-cmica', description: 'Capacitor C0G/silver-mica 500 V, LPF values per RF page', category: 'capacitor', ratings: { voltageV: 500 }, offers: [offer('o23', S1, 'NC-CM500', 'USD', [[1, 55], [25, 38]], 1, 1)] },
+  { id: 'p-cmica', description: 'Capacitor C0G/silver-mica 500 V, LPF values per RF page', category: 'capacitor', ratings: { voltageV: 500, dielectric: 'mica' }, offers: [offer('o23', S1, 'NC-CM500', 'USD', [[1, 55], [25, 38]], 1, 1)] },
   { id: 'p-relay', description: 'DPDT signal relay, 12 V coil 36 mA, contacts 2 A', category: 'relay', ratings: { contactCarryA: 2, contactSwitchA: 2, coilA: 0.036 }, offers: [offer('o24', S1, 'NC-RLY-D12', 'USD', [[1, 210], [10, 175]]), offer('o25', S2, 'HR-2202', 'USD', [[1, 160], [20, 135]])] },
   { id: 'p-xtal', description: 'Quartz crystal 10.106 MHz, HC-49, series', category: 'crystal', ratings: { frequencyHz: 10.106e6 }, offers: [offer('o26', S2, 'HR-X10106', 'USD', [[1, 95], [20, 70]])] },
   { id: 'p-mixer', description: 'Double-balanced mixer IC, 8-pin DIP', category: 'ic', ratings: {}, offers: [offer('o27', S1, 'NC-DBM8', 'USD', [[1, 245], [10, 215]]), offer('o28', S3, 'CL-11602', 'EUR', [[1, 199]])] },
@@ -136,35 +136,41 @@ const parts: Part[] = [
   { id: 'p-bnc', description: 'BNC chassis socket, 50 Ω', category: 'connector', ratings: {}, offers: [offer('o32', S1, 'NC-BNC-CH', 'USD', [[1, 135], [10, 110]]), offer('o33', S2, 'HR-0450', 'USD', [[1, 120]])] },
   { id: 'p-jack', description: 'Jack socket 3.5 mm stereo, panel mount', category: 'connector', ratings: {}, offers: [offer('o34', S1, 'NC-J35S', 'USD', [[1, 48], [25, 35]])] },
   { id: 'p-wire', description: 'Enamelled copper wire 0.5 mm, 10 m reel', category: 'wire', ratings: {}, offers: [offer('o35', S1, 'NC-ECW05-10', 'USD', [[1, 395]])] },
+  // candidates for the design roles (invented); the bleeder line is the deliberate mismatch: a 0.5 W part where the
+  // supply page was told 1 W and the design needs 0.92 W (50 % loading); the 1 W part above is the fix
+  { id: 'p-bleed-05', description: 'Resistor 2.2 kΩ 0.5 W metal film', category: 'resistor', ratings: { resistanceOhm: 2200, powerW: 0.5 }, offers: [offer('o36', S1, 'NC-R05-2K2', 'USD', [[1, 12], [100, 6]], 1, 1)] },
+  { id: 'p-hs-pa-8', description: 'Finned heatsink 50 mm, 8 °C/W', category: 'heatsink', ratings: { thetaSaKPerW: 8 }, offers: [offer('o37', S2, 'HR-HS80-50', 'USD', [[1, 215], [10, 180]])] },
+  { id: 'p-trafo-100', description: 'Mains transformer 120 V, secondaries 16 V 1.5 A + 20 V 3.5 A, laminated, 100 VA', category: 'transformer', ratings: { va: 100, sec1V: 16, sec1A: 1.5, sec2V: 20, sec2A: 3.5 }, offers: [offer('o38', S1, 'NC-TR-10016', 'USD', [[1, 4690], [5, 4250], [10, 3980]])] },
   { id: 'p-cord', description: 'Mains cord with IEC plug, 3-core, earthed', category: 'mains', ratings: {}, offers: [] },
 ];
 
-const line = (id: string, stageId: string | null, partId: string, qty: number, refs: string, notes = ''): BomLine => ({ id, stageId, partId, qtyPerRig: qty, refs, notes });
+// the last argument binds the line to a design role (src/core/roles): its part is checked against that requirement
+const line = (id: string, stageId: string | null, partId: string, qty: number, refs: string, notes = '', roleId: string | null = null): BomLine => ({ id, stageId, partId, qtyPerRig: qty, refs, notes, roleId });
 
 const bom: BomLine[] = [
   line('b1', null, 'p-inlet', 1, 'J1', 'Earth pin bonded to the chassis'),
   line('b2', null, 'p-cord', 1, 'W1', 'Buy locally to the national plug standard'),
-  line('b3', null, 'p-fuse', 3, 'F1–F3', 'Primary and two rail fuses; values from the supply page'),
+  line('b3', null, 'p-fuse', 3, 'F1–F3', 'Primary and two rail fuses; values from the supply page', 'fuses'),
   line('b4', null, 'p-fuseh', 2, 'F2, F3'),
-  line('b5', null, 'p-trafo', 1, 'T1'),
+  line('b5', null, 'p-trafo', 1, 'T1', '', 'transformer:tr-main'),
   line('b6', null, 'p-bridge', 2, 'BR1, BR2'),
-  line('b7', null, 'p-c4700', 1, 'C1'),
-  line('b8', null, 'p-c6800', 1, 'C2'),
-  line('b9', null, 'p-bleed', 2, 'R1, R2'),
-  line('b10', null, 'p-reg', 1, 'U1'),
-  line('b11', null, 'p-hs-reg', 1, 'HS1'),
+  line('b7', null, 'p-c4700', 1, 'C1', '', 'reservoir:rail-raw'),
+  line('b8', null, 'p-c6800', 1, 'C2', '', 'reservoir:rail-pa'),
+  line('b9', null, 'p-bleed-05', 2, 'R1, R2', '', 'bleeders'),
+  line('b10', null, 'p-reg', 1, 'U1', '', 'regulator:rail-13v8'),
+  line('b11', null, 'p-hs-reg', 1, 'HS1', '', 'heatsink:rail-13v8'),
   line('b12', 'st-rx', 'p-mixer', 1, 'U2'),
   line('b13', 'st-rx', 'p-audio', 1, 'U3'),
   line('b14', 'st-rx', 'p-jack', 2, 'J3, J4', 'Phones and key'),
   line('b15', 'st-vxo', 'p-xtal', 2, 'Y1, Y2'),
-  line('b16', 'st-pa', 'p-mosfet', 2, 'Q3, Q4'),
-  line('b17', 'st-pa', 'p-hs-pa', 1, 'HS2'),
+  line('b16', 'st-pa', 'p-mosfet', 2, 'Q3, Q4', '', 'pa-devices:st-pa'),
+  line('b17', 'st-pa', 'p-hs-pa', 1, 'HS2', '', 'pa-heatsink:st-pa'),
   line('b18', 'st-pa', 'p-mica', 2, 'for Q3, Q4'),
   line('b19', 'st-pa', 'p-bino', 1, 'T2'),
-  line('b20', 'st-lpf', 'p-toroid', 2, 'L1, L2'),
-  line('b21', 'st-lpf', 'p-cmica', 5, 'C10–C14'),
+  line('b20', 'st-lpf', 'p-toroid', 2, 'L1, L2', '', 'lpf-cores:st-lpf'),
+  line('b21', 'st-lpf', 'p-cmica', 5, 'C10–C14', '', 'lpf-capacitors:st-lpf'),
   line('b22', 'st-lpf', 'p-wire', 1, '', 'Shared with T2 windings'),
-  line('b23', 'st-tr', 'p-relay', 1, 'K1'),
+  line('b23', 'st-tr', 'p-relay', 1, 'K1', '', 'relay:st-tr'),
   line('b24', 'st-tr', 'p-bnc', 1, 'J2'),
   line('b25', null, 'p-pcb', 1, 'PCB1'),
   line('b26', null, 'p-case', 1, 'Enclosure'),

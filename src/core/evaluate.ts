@@ -13,6 +13,7 @@ import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
 import { checkProjectInputs } from './spec/project-check';
+import { checkRoles, designRoles, type DesignRole, type RoleStatus } from './roles';
 import { mainsCornerFindings } from './rules/rule-set';
 
 export interface EvaluationReport {
@@ -23,9 +24,12 @@ export interface EvaluationReport {
   heat: HeatBudget | null;
   rf: RfReport;
   cost: CostReport;
-  /** parts on the parts list checked against the computed design (reservoir capacitors) */
+  /** parts on the parts list checked against the computed design: the roles' rating checks, unbound roles, and
+   * reservoir capacitors matched by capacitance on rails whose reservoir role has no bound line */
   catalog: Finding[];
   /** PA rail voltage used for the PA model, per rail id (V): nominal-mains key-down trough when simulated */
+  /** the parts the design needs, each with its requirement, and the state of the line bound to it */
+  roles: { list: DesignRole[]; statuses: RoleStatus[] };
   paRailV: Record<string, number>;
   /** every finding of every section, most severe first */
   findings: Finding[];
@@ -181,13 +185,18 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   budget = withSupplyVoltages(budget, supply);
   const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
-  const catalog = catalogFindings(project, supply);
+  const roleList = designRoles(project, supply, rf);
+  const roleCheck = checkRoles(project, roleList);
+  // the capacitance match only where no line is bound to the rail's reservoir role (the binding decides there)
+  const bound = new Set(project.bom.map((b) => b.roleId).filter(Boolean));
+  const unboundSupply = supply && { ...supply, rails: supply.rails.filter((r) => !bound.has(`reservoir:${r.railId}`)) };
+  const catalog = [...catalogFindings(project, unboundSupply), ...roleCheck.findings];
   const mains = mainsCornerFindings(project.mains, project.rf.spuriousRule);
   const recPa = withRecommendedPa(supply, project, rf);
   supply = recPa.supply;
   const heat = project.supply.rails.length ? heatBudget(supply, paHeat(rf), project.supply.enclosureAreaM2, project.supply.enclosureUWPerM2K, project.ambientC) : null;
   const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...(heat?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
-  return { budget, supply, heat, rf, cost, catalog, paRailV, findings };
+  return { budget, supply, heat, rf, cost, catalog, roles: { list: roleList, statuses: roleCheck.statuses }, paRailV, findings };
 }
 
 /** Each PA's duty-averaged dissipation, all devices (W): the per-device average times the device count. */

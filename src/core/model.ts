@@ -263,6 +263,8 @@ export interface BomLine {
   qtyPerRig: number;
   refs: string;
   notes: string;
+  /** The design role this line fills (src/core/roles); null or absent = not bound (older data has no binding). */
+  roleId?: string | null;
 }
 
 export interface Costing {

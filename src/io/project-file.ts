@@ -10,7 +10,7 @@ import { mainsSpec, projectFieldsSpec } from '../core/spec/settings';
 import { enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec/supply';
 import { batterySpec, rectifiedSpec, regulatedSpec, withRailDefaults } from '../core/spec/supply-rails';
 import { rfSettingsSpec } from '../core/spec/rf-settings';
-import { specFileSchema, specShape } from './spec-schema';
+import { specFileSchema, specShape, specValueSchema } from './spec-schema';
 
 export const FORMAT = 'rigwright-project';
 export const FORMAT_VERSION = 1;
@@ -60,7 +60,8 @@ const stage = z.object({
 const offer = z.object({ id, ...specShape(offerSpec) });
 const part = z.object({ id, ...specShape(partSpec), offers: z.array(offer).max(50) }) as unknown as z.ZodType<Part>;
 const supplier = z.object(specShape(supplierSpec));
-const bomLine = z.object({ id, ...specShape(bomLineSpec) }) as unknown as z.ZodType<BomLine>;
+// files written before lines were bound to design roles have no roleId: read as not bound
+const bomLine = z.object({ id, ...specShape(bomLineSpec), roleId: specValueSchema(bomLineSpec.fields.roleId).optional() }) as unknown as z.ZodType<BomLine>;
 const costing = z.object({ ...specShape(costingSpec), suppliers: z.array(supplier).max(200) }) as unknown as z.ZodType<Costing>;
 
 // the project's own values, its mains and its RF settings: the same specs as the settings forms and core's checks

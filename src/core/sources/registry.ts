@@ -28,6 +28,11 @@ export const SOURCES = {
   'design.simulation': { status: 'design', text: "Time-domain simulation of the rectifier and reservoir in this program (ideal source behind the winding's resistance, diode drop and resistance); a model, not a published source" },
   'design.shared-winding': { status: 'design', text: 'Limitation of the simulation in this program (one winding per rail); no published source' },
   'design.parts-list': { status: 'design', text: "Parts-list ratings you entered, against this program's supply design" },
+  'roles.binding': { status: 'design', text: "The parts list against this program's design: each part the design needs, bound to a parts-list line, with the ratings you entered for that part" },
+  'roles.winding-voltage': { status: 'practice', text: `A transformer's rated secondary voltage within 5 % of the voltage the rails were designed with (${PRACTICE})` },
+  'roles.core-al': { status: 'practice', text: `A core's inductance factor AL (L = AL N², core makers' data) within 10 % of the AL the turns were computed with (${PRACTICE})` },
+  'roles.relay-coil': { status: 'design', text: "The relay's coil current at most the one the current budget carries, and its coil voltage within 10 % of its rail's (the tolerance is common practice, no published source)" },
+  'roles.rf-dielectric': { status: 'practice', text: `Mica or C0G (class 1 ceramic, IEC 60384-8) capacitors in transmitter filters for stable values and low loss (${PRACTICE})` },
   'design.energy-balance': { status: 'published', text: 'Energy balance P_in = P_out / η (conservation of energy) with the module efficiency you entered' },
   // ---------------------------------------------------------------- supply
   'supply.transformer-current': { status: 'analogy', text: `Simulated secondary RMS current against the winding's rated current (a capacitor-input bridge draws about 1.8 × I_dc RMS: a transformer maker's design note, not a standard); heating averaged with the CW duty of 40 % by analogy with ${OET65B_DUTY}` },

@@ -120,7 +120,7 @@ describe('parts-list line and costing limits', () => {
   const line = (qty: string) => parseForm(bomLineSpec, { stageId: '', partId: 'p-fuse', qty, refs: 'F1', notes: '' });
 
   it('reads the quantity and an empty stage as General (null)', () => {
-    expect(line('0.5')).toEqual({ ok: true, value: { stageId: null, partId: 'p-fuse', qtyPerRig: 0.5, refs: 'F1', notes: '' } });
+    expect(line('0.5')).toEqual({ ok: true, value: { stageId: null, partId: 'p-fuse', qtyPerRig: 0.5, refs: 'F1', notes: '', roleId: null } });
     const zero = line('0');
     expect(zero.ok).toBe(false);
     if (!zero.ok) expect(zero.errors.qty).toMatch(/^Quantity per rig must be more than 0 and at most 100000/);

@@ -1,0 +1,3 @@
+export { designRoles } from './design-roles';
+export { checkRoles, judgeRule, partMeetsRole, type RoleCheck, type RuleOutcome } from './role-checks';
+export type { DesignRole, RoleRule, RoleStatus } from './types';

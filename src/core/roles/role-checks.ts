@@ -1,0 +1,108 @@
+// The parts list against the design's roles: each bound part's ratings, read through its category's fields, rule by
+// rule against the role's requirement; a role with no bound line, and a line bound to a role the design no longer
+// has, are findings too.
+import type { BomLine, Part, Project } from '../model';
+import type { Finding, Severity } from '../findings';
+import { categoryOf, readRatings } from '../spec/parts-categories';
+import { formatValue } from '../units';
+import type { DesignRole, RoleRule, RoleStatus } from './types';
+
+export interface RuleOutcome {
+  rule: RoleRule;
+  severity: Severity | 'missing';
+  value: number | string | null;
+}
+
+const sev = (o: RuleOutcome['severity'], required: boolean): Severity | null =>
+  o === 'missing' ? (required ? 'caution' : null) : o;
+
+/** One rating of a part against one rule: 'missing' when the part does not state it. */
+export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings'>): RuleOutcome {
+  const read = readRatings(part);
+  if (rule.op === 'oneOf') {
+    const v = read.choices[rule.key];
+    if (v === undefined) return { rule, severity: 'missing', value: null };
+    return { rule, severity: rule.options.includes(v) ? 'ok' : 'fail', value: v };
+  }
+  const v = read.numbers[rule.key];
+  if (v === undefined) return { rule, severity: 'missing', value: null };
+  if (rule.op === 'near') return { rule, severity: Math.abs(v - rule.limit) <= rule.tolerance * Math.abs(rule.limit) ? 'ok' : 'fail', value: v };
+  if (rule.op === 'max') return { rule, severity: v <= rule.limit ? 'ok' : 'fail', value: v };
+  if (v >= rule.limit) return { rule, severity: 'ok', value: v };
+  return { rule, severity: rule.hardLimit !== undefined && v >= rule.hardLimit ? 'caution' : 'fail', value: v };
+}
+
+/** True when the part is of the role's category and meets every rule it states, with every required rating stated. */
+export function partMeetsRole(part: Pick<Part, 'category' | 'ratings'>, role: DesignRole): boolean {
+  if (categoryOf(part.category).id !== role.category) return false;
+  return role.rules.every((r) => {
+    const o = judgeRule(r, part);
+    return o.severity === 'ok' || (o.severity === 'missing' && !r.required);
+  });
+}
+
+const show = (v: number | string, unit: string) => (typeof v === 'number' ? formatValue(v, unit) : v);
+const limitText = (r: RoleRule) =>
+  r.op === 'oneOf' ? r.options.join(' or ') : r.op === 'near' ? `${formatValue(r.limit, r.unit)} ±${Math.round(r.tolerance * 1000) / 10} %` : `${r.op === 'min' ? 'at least' : 'at most'} ${formatValue(r.limit, r.unit)}`;
+
+function lineFindings(role: DesignRole, part: Part): Finding[] {
+  const subject = `${role.label}: ${part.description}`;
+  const def = categoryOf(part.category);
+  if (def.id !== role.category)
+    return [{ severity: 'fail', rule: 'role.category', subject, value: null, limit: null, unit: '', source: 'roles.binding', message: `The bound part is in category "${part.category || 'none'}" (${def.label}); this role needs a ${role.category}. Bind a ${role.category} from the candidates.` }];
+  const out: Finding[] = [];
+  for (const e of readRatings(part).errors)
+    out.push({ severity: 'caution', rule: 'role.rating-range', subject, value: null, limit: null, unit: '', source: 'design.input', message: `${e.message}; the rating is not used.` });
+  for (const r of role.rules) {
+    const o = judgeRule(r, part);
+    const s = sev(o.severity, r.required);
+    if (s === null) continue;
+    const rule = `role.${role.category}.${r.key}`;
+    const value = typeof o.value === 'number' ? o.value : null;
+    const limit = r.op === 'oneOf' ? null : r.limit;
+    const message =
+      o.severity === 'missing'
+        ? `Enter the part's ${r.label.toLowerCase()} (${r.key}) so it can be checked: the design needs ${limitText(r)} (${r.why}).`
+        : o.severity === 'ok'
+          ? `${r.label} ${show(o.value as number | string, r.unit)} meets ${limitText(r)} (${r.why}).`
+          : `${r.label} ${show(o.value as number | string, r.unit)} does not meet ${limitText(r)} (${r.why}): choose a candidate that does.`;
+    out.push({ severity: s, rule, subject, value, limit, unit: r.unit, source: o.severity === 'missing' ? 'roles.binding' : r.source, message });
+  }
+  return out;
+}
+
+export interface RoleCheck {
+  statuses: RoleStatus[];
+  findings: Finding[];
+}
+
+const worst = (fs: Finding[]): RoleStatus['state'] =>
+  fs.some((f) => f.severity === 'fail') ? 'fail' : fs.some((f) => f.severity === 'caution') ? 'caution' : 'ok';
+
+/** Every role's bound lines checked; unbound roles and lines bound to a role that is gone reported. */
+export function checkRoles(project: Pick<Project, 'bom' | 'parts'>, roles: readonly DesignRole[]): RoleCheck {
+  const parts = new Map(project.parts.map((p) => [p.id, p]));
+  const findings: Finding[] = [];
+  const statuses: RoleStatus[] = [];
+  for (const role of roles) {
+    const lines = project.bom.filter((b) => b.roleId === role.id);
+    if (!lines.length) {
+      const f: Finding = { severity: 'caution', rule: 'role.unbound', subject: role.label, value: null, limit: null, unit: '', source: 'roles.binding', message: `No parts-list line is bound to this part of the design (needs ${role.requirement}): bind a line or a candidate on the parts list.` };
+      findings.push(f);
+      statuses.push({ role, lineIds: [], state: 'unbound' });
+      continue;
+    }
+    const fs = lines.flatMap((l) => {
+      const part = parts.get(l.partId);
+      return part ? lineFindings(role, part) : [];
+    });
+    findings.push(...fs);
+    statuses.push({ role, lineIds: lines.map((l) => l.id), state: worst(fs) });
+  }
+  const ids = new Set(roles.map((r) => r.id));
+  for (const l of project.bom as BomLine[]) {
+    if (!l.roleId || ids.has(l.roleId)) continue;
+    findings.push({ severity: 'caution', rule: 'role.gone', subject: `Parts-list line ${l.refs || l.id}`, value: null, limit: null, unit: '', source: 'roles.binding', message: `This line is bound to "${l.roleId}", which the design no longer has (a rail, stage or transformer was removed or the supply is not designed): bind it to another role or clear the binding.` });
+  }
+  return { statuses, findings };
+}
