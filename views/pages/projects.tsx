@@ -6,6 +6,7 @@ import { formatValue } from '../../src/core/units';
 import { Layout } from '../layout';
 import { Field, Select, FormErrors, type FieldState, emptyState } from '../components/fields';
 import { SpecField } from '../components/spec-fields';
+import { TEMPLATE_INFO, type TemplateKey } from '../../src/core/templates/choices';
 
 export interface ProjectsPageProps {
   projects: ProjectSummary[];
@@ -80,6 +81,7 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
           <h2>New project</h2>
           <form method="post" action="/projects">
             <FormErrors state={createState} />
+            <TemplateChoice state={createState} />
             <SpecField spec={newProjectSpec} k="name" state={createState} size={32} />
             <div class="row">
               <Select name="band" label={newProjectSpec.fields.frequencyHz.label} state={createState} options={NEW_PROJECT_BANDS} />
@@ -114,6 +116,33 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
         </section>
       </div>
     </Layout>
+  );
+};
+
+/** The station templates as radio buttons, each with what it sets up (the spec gives the label and options). */
+const TemplateChoice: FC<{ state: FieldState }> = ({ state }) => {
+  const f = newProjectSpec.fields.template;
+  if (f.type !== 'choice') throw new Error('template is a choice field');
+  const value = state.values.template ?? '';
+  const error = state.errors.template;
+  return (
+    <fieldset class={`template-choice${error ? ' has-error' : ''}`}>
+      <legend>{f.label}</legend>
+      {f.options.map(([v, text]) => (
+        <label class="template-option" for={`tpl-${v || 'empty'}`}>
+          <input type="radio" id={`tpl-${v || 'empty'}`} name="template" value={v} checked={value === v} />{' '}
+          <strong>{text}</strong>
+          {v ? <span class="hint"> — {TEMPLATE_INFO[v as TemplateKey].summary}</span> : null}
+        </label>
+      ))}
+      {error ? (
+        <span class="error" role="alert">
+          {error}
+        </span>
+      ) : (
+        <span class="hint">{f.help}. Band, power and supply below apply to it; everything can be changed afterwards.</span>
+      )}
+    </fieldset>
   );
 };
 

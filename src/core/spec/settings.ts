@@ -7,6 +7,7 @@ import { defineSpec, U, type FieldError, type NumberField } from './field';
 import { defaults, formValues, getPath } from './derive';
 import { choice, num, text } from './make';
 import { numberText } from './number-text';
+import { TEMPLATE_INFO, TEMPLATE_OPTIONS, type TemplateKey } from '../templates/choices';
 import { mainsWithStandardCorners } from '../rules/rule-set';
 
 /**
@@ -140,7 +141,7 @@ export type ProjectSettings = Pick<Project, 'name' | 'notes' | 'frequencyHz' | '
 // Common practice, from memory: CW (QRP) activity frequencies, one per band; the band names come from HF_BANDS.
 const NEW_PROJECT_BANDS_HZ = [1.83e6, 3.56e6, 7.03e6, 10.11e6, 14.06e6, 18.086e6, 21.06e6];
 
-/** The new-project form: name, band, power and the mains preset. */
+/** The new-project form: name, band, power, the mains preset and the station template to start from. */
 export const newProjectSpec = defineSpec({
   name: 'new-project',
   label: 'New project',
@@ -149,6 +150,21 @@ export const newProjectSpec = defineSpec({
     frequencyHz: { ...rfInputsSpec.fields.frequencyHz, label: 'Band', form: 'band' },
     targetPowerW: rfInputsSpec.fields.targetPowerW,
     mainsPreset: choice('Supply', Object.keys(MAINS_PRESETS).map((k) => [k, PRESET_TEXT[k]] as const), '230-50', { form: 'mains' }),
+    // '' (also what a form without this box sends) starts an empty project
+    template: choice('Start from', TEMPLATE_OPTIONS, 'mains-two-rail', {
+      help: 'a template fills in stages, supply, rails and a starter parts list with typical values and invented prices',
+    }),
+  },
+  refine: (v) => {
+    const key = String(v.template ?? '');
+    if (key === '') return [];
+    const info = TEMPLATE_INFO[key as TemplateKey];
+    const battery = v.mainsPreset === 'battery';
+    if (info.mains && battery)
+      return [{ field: 'mainsPreset', label: 'Supply', message: `Supply: the "${info.label}" template runs from the mains; choose a mains voltage (or the battery template)` }];
+    if (!info.mains && !battery)
+      return [{ field: 'mainsPreset', label: 'Supply', message: `Supply: the "${info.label}" template runs from its battery; choose Battery / external DC (or a mains template)` }];
+    return [];
   },
   view: {
     from: (p) => {
@@ -162,7 +178,7 @@ export const newProjectSpec = defineSpec({
   },
 });
 
-export type NewProjectInput = Pick<Project, 'name' | 'frequencyHz' | 'targetPowerW' | 'mains'>;
+export type NewProjectInput = Pick<Project, 'name' | 'frequencyHz' | 'targetPowerW' | 'mains'> & { template: TemplateKey | '' };
 
 /** The band choices of the new-project form: [form text, words], the text as the band box reads it. */
 export const NEW_PROJECT_BANDS: [string, string][] = NEW_PROJECT_BANDS_HZ.map((hz) => [

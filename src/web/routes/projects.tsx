@@ -3,6 +3,7 @@ import { Hono } from 'hono';
 import { z } from 'zod';
 import { listProjects, loadProject, insertProject, deleteProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
 import { newProject, cloneProject } from '../../core/new-project';
+import { projectFromTemplate } from '../../core/templates';
 import { newProjectSpec, type NewProjectInput } from '../../core/spec/settings';
 import { specFormSchema } from '../forms/spec-schema';
 import { parseProjectFile, toProjectFile } from '../../io/project-file';
@@ -27,7 +28,8 @@ export function projectRoutes(deps: Deps) {
     const parsed = parseForm(createSchema, values);
     if (!parsed.ok) return sendPage(c, await listPage({ create: { values, errors: parsed.errors } }), 422);
     const d = parsed.data;
-    const project = newProject(newId('prj'), d.name, d.frequencyHz, d.targetPowerW, d.mains);
+    const id = newId('prj');
+    const project = d.template ? projectFromTemplate(d.template, d, id, newId) : newProject(id, d.name, d.frequencyHz, d.targetPowerW, d.mains);
     await insertProject(deps.database, project, deps.now().toISOString());
     return c.redirect(`/projects/${project.id}`, 303);
   });

@@ -137,10 +137,21 @@ describe('new project', () => {
     const values = formValues(newProjectSpec, defaults(newProjectSpec));
     // the default band must be one of the choices, so the select shows it
     expect(NEW_PROJECT_BANDS.map(([v]) => v)).toContain(values.band);
-    const r = parseForm(newProjectSpec, { ...values, name: '40 m QRP', band: '7.03', power: '5 W', mains: 'battery' });
-    expect(r).toEqual({ ok: true, value: { name: '40 m QRP', frequencyHz: 7.03e6, targetPowerW: 5, mains: null } });
+    const r = parseForm(newProjectSpec, { ...values, name: '40 m QRP', band: '7.03', power: '5 W', mains: 'battery', template: '' });
+    expect(r).toEqual({ ok: true, value: { name: '40 m QRP', frequencyHz: 7.03e6, targetPowerW: 5, mains: null, template: '' } });
     const mains = parseForm(newProjectSpec, { ...values, name: 'x', mains: '120-60' });
     expect(mains).toMatchObject({ ok: true, value: { mains: MAINS_PRESETS['120-60'] } });
+  });
+
+  it('a template that runs from the mains refuses a battery supply, and the battery template a mains one, by field', () => {
+    const base = { name: 'x', band: '7.03', power: '5' };
+    const mainsTpl = parseForm(newProjectSpec, { ...base, mains: 'battery', template: 'mains-two-rail' });
+    expect(mainsTpl).toMatchObject({ ok: false, errors: { mains: expect.stringContaining('runs from the mains') } });
+    const batteryTpl = parseForm(newProjectSpec, { ...base, mains: '230-50', template: 'battery-portable' });
+    expect(batteryTpl).toMatchObject({ ok: false, errors: { mains: expect.stringContaining('runs from its battery') } });
+    expect(parseForm(newProjectSpec, { ...base, mains: 'battery', template: 'battery-portable' })).toMatchObject({ ok: true, value: { mains: null } });
+    // a form without the template box (older pages, scripts) starts an empty project
+    expect(parseForm(newProjectSpec, { ...base, mains: '230-50' })).toMatchObject({ ok: true, value: { template: '' } });
   });
 
   it('every band choice parses to its frequency', () => {
