@@ -3,6 +3,7 @@ import type { RfReport } from '../../core/rf/report';
 import { GREY, FAIL, CAUTION, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
 import type { KeyingResult } from '../../core/rf/keying-eval';
+import { SPECTRUM_FLOOR_DBC } from '../../core/rf/keying';
 import { findingsList, fv, keyValues, notComputed } from './common';
 import { sourceText } from '../../core/sources/registry';
 import type { PaSwrStress, Worst } from '../../core/rf/pa-swr';
@@ -95,15 +96,17 @@ function keying(l: Layout, name: string, k: KeyingResult): void {
     ['Bandwidth', `occupied (99 %) ${fv(k.spectrum.occupiedBandwidthHz, 'Hz')}; necessary Bn = B K ${fv(k.necessaryFadingHz, 'Hz')} (K = 5), ${fv(k.necessaryNonFadingHz, 'Hz')} (K = 3), B = ${k.baud.toFixed(1)} Bd`],
     ['First element', `${ms(k.firstElementHalfS)} at half amplitude, ${k.firstElementFullS > 0 ? ms(k.firstElementFullS) : 'never'} above 90 %`],
   ], 110, 8.5);
+  const shown = k.spectrum.levelsDbc.map((v, i) => (v > SPECTRUM_FLOOR_DBC ? i : -1)).filter((i) => i >= 0);
   plot(l, {
-    title: `${name}: keyed spectrum of a steady dot train (lines, one side of the carrier)`,
+    title: `${name}: keyed spectrum of a steady dot train (tops of the lines, one side of the carrier)`,
     xLabel: 'offset from the carrier (Hz)',
     yLabel: 'line level (dBc)',
     yMin: -120,
     yMax: 5,
     xTick: (v) => v.toFixed(0),
     yTick: (v) => v.toFixed(0),
-    series: [{ label: 'line level (dBc)', xs: k.spectrum.offsetsHz, ys: k.spectrum.levelsDbc.map((v) => Math.max(-120, v)), color: BLUE }],
+    // the tops of the lines that carry power (a symmetric dot train has no even lines): the spectrum's envelope
+    series: [{ label: 'line level (dBc)', xs: shown.map((i) => k.spectrum.offsetsHz[i]), ys: shown.map((i) => Math.max(-120, k.spectrum.levelsDbc[i])), color: BLUE }],
     markers: k.spectrum.clicks.map((c) => ({ x: c.offsetHz, label: `${c.offsetHz}` })),
     heightPt: 130,
   });
