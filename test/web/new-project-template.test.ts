@@ -48,4 +48,18 @@ describe('new project from a template', () => {
     expect(p.mains).toBeNull();
     expect(p.supply.rails.map((r) => r.kind)).toEqual(['battery', 'regulated']);
   });
+
+  it('an empty project says what to do next on the overview, supply, parts and parts-list pages', async () => {
+    const { post, get } = await demoApp();
+    const res = await post('/projects', { name: 'Blank', band: '7.03', power: '5', mains: '230-50', template: '' });
+    const id = res.headers.get('location')!.split('/').pop()!;
+    const page = async (path: string) => (await (await get(`/projects/${id}${path}`)).text()).replace(/\s+/g, ' ');
+    expect(await page('')).toContain('a stage draws its current from a rail, and there is none yet');
+    expect(await page('/supply')).toContain('no rails yet. Add the mains transformer and its secondary windings');
+    expect(await page('/parts')).toContain('the catalog is empty. Add each part you will buy below');
+    expect(await page('/bom')).toContain('the catalog is empty: add parts on the');
+    // a project with stages, rails and parts shows none of them
+    const demo = async (path: string) => (await (await get(`/projects/demo-club-30m${path}`)).text());
+    for (const path of ['', '/supply', '/parts', '/bom']) expect(await demo(path)).not.toContain('class="empty-state"');
+  });
 });

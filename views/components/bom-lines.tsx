@@ -6,6 +6,7 @@ import { type FieldState } from './fields';
 import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
 import { Version, hx } from './supply-transformer';
+import { EmptyState } from './empty-state';
 
 /** Form text of a line (a new line starts from the spec's defaults: General, no part chosen, 1 per rig). */
 export const lineValues = (l: BomLine | null): Record<string, string> => formValues(bomLineSpec, l ?? defaults(bomLineSpec));
@@ -49,6 +50,12 @@ export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, f
   return (
     <section class="card">
       <h2>Parts list ({project.bom.length} lines)</h2>
+      {project.bom.length || !project.parts.length ? null : (
+        <EmptyState label="Parts list empty">
+          the parts list is empty. Add a line below for each part a rig needs: its stage, the part from the catalog, the
+          quantity per rig and the designators (R1, C10–C14); the cost per kit and for the group appears under the list.
+        </EmptyState>
+      )}
       <div class="bom-grid" aria-label="Parts-list lines">
         <div class="bom-head" aria-hidden="true">
           <span>Stage</span>
@@ -84,9 +91,10 @@ export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, f
         </form>
       </div>
       {project.parts.length ? null : (
-        <p class="hint">
-          The catalog is empty: add parts on the <a href={`/projects/${project.id}/parts`}>Parts catalog</a> page first, or import a CSV below.
-        </p>
+        <EmptyState label="Catalog empty">
+          the catalog is empty: add parts on the <a href={`/projects/${project.id}/parts`}>Parts catalog</a> page first, or import a
+          CSV below; then add a line here for each part a rig needs.
+        </EmptyState>
       )}
     </section>
   );

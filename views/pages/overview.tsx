@@ -18,6 +18,7 @@ import { loadCurrentFields, loadFormName, loadSpec } from '../../src/core/spec/s
 import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';
 import { FirstScreen } from '../components/first-screen';
+import { EmptyState } from '../components/empty-state';
 
 export const loadValues = (s: Stage): Record<string, string> => loadCurrentValues(s.loads);
 
@@ -221,6 +222,20 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
       <div class="columns">
         <section class="card" id="stages">
           <h2>Stages in build order</h2>
+          {project.stages.length ? null : project.supply.rails.length ? (
+            <EmptyState label="No stages yet">
+              no stages yet. Add them below in build order (receiver, oscillator, driver, final, low-pass filter, T/R
+              switching), then enter each stage's current per mode on its rail. A new project can also start from a
+              station template on the <a href="/">project list</a>.
+            </EmptyState>
+          ) : (
+            <EmptyState label="No stages and no rails yet">
+              a stage draws its current from a rail, and there is none yet. Set up the supply first on the{' '}
+              <a href={`/projects/${project.id}/supply`}>Supply</a> page ({project.mains ? 'transformer, its windings, a rectified rail from a winding, a regulated rail from it' : 'a battery rail, then any regulated rail from it'}),
+              then add the stages below. Or start a new project from a station template on the <a href="/">project list</a>:
+              it sets up the supply, the stages and a starter parts list.
+            </EmptyState>
+          )}
           <ol class="stages">
             {project.stages.map((s, i) => (
               <StageRow project={project} stage={s} index={i} railName={railName} report={report} state={stateFor(`loads-${s.id}`, failed, () => loadValues(s))} />

@@ -8,6 +8,7 @@ import { stateFor, type Failed } from '../components/failed';
 import { Version, hx } from '../components/supply-transformer';
 import { PartCard, PartFields, partValues } from '../components/parts-part';
 import { CostingCard, SuppliersCard } from '../components/parts-costing';
+import { EmptyState } from '../components/empty-state';
 
 export interface PartsBodyProps {
   project: Project;
@@ -41,6 +42,13 @@ export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPar
       </div>
       <section>
         <h2>Parts ({project.parts.length})</h2>
+        {project.parts.length ? null : (
+          <EmptyState label="No parts yet">
+            the catalog is empty. Add each part you will buy below (type and ratings, then its supplier offers with price
+            breaks), or import a CSV on the <a href={`/projects/${project.id}/bom`}>Parts list</a> page; then put the parts on
+            the parts list with a quantity per rig to see the cost.
+          </EmptyState>
+        )}
         <p class="explain">
           Open a part to change it or its supplier offers. Price breaks are written as quantity: unit price in the offer's currency, e.g.{' '}
           <code>1: 0.95, 10: 0.78, 100: 0.52</code>. Describe parts by type and ratings.

@@ -10,6 +10,7 @@ import { SpecField } from '../components/spec-fields';
 import { stateFor, type Failed } from '../components/failed';
 import { TransformerCard, Version, hx } from '../components/supply-transformer';
 import { RailCard } from '../components/supply-rail';
+import { EmptyState } from '../components/empty-state';
 
 export interface SupplyBodyProps {
   project: Project;
@@ -106,6 +107,17 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
         </section>
         <section>
           <h2>Rails</h2>
+          {project.supply.rails.length ? null : (
+            <EmptyState label="No rails yet">
+              {project.mains
+                ? project.supply.transformers.some((t) => t.windings.length)
+                  ? 'no rails yet. Add a rail fed from a winding (rectified), then a regulated rail fed from it if a stage needs a steady voltage. '
+                  : 'no rails yet. Add the mains transformer and its secondary windings (left), then a rail fed from each winding. '
+                : 'no rails yet. Add a battery rail (Fed from: Battery), then a regulated rail fed from it if a stage needs a lower, steady voltage. '}
+              Stages on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page then draw their current from these rails;
+              state each rail's minimum voltage so its headroom can be judged.
+            </EmptyState>
+          )}
           {project.supply.rails.map((r) => (
             <RailCard project={project} rail={r} failed={failed} parents={parentsFor(r.id)} open={r.id === openRail} />
           ))}
