@@ -287,6 +287,8 @@ export interface Project {
   currency: string;
   kits: number;
   keyingDuty: number; // CW conversational duty factor for heating (0.4)
+  /** id of the project this one was cloned from as a variant (absent: not a variant, or its original was deleted) */
+  variantOf?: string;
   version: number;
   supply: Supply;
   stages: Stage[];

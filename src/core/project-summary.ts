@@ -8,4 +8,6 @@ export interface ProjectSummary {
   stageCount: number;
   version: number;
   updatedAt: string;
+  /** id of the project this one is a variant of, or null */
+  variantOf: string | null;
 }

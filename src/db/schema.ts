@@ -22,6 +22,9 @@ export const projects = sqliteTable('projects', {
   enclosureUWPerM2K: real('enclosure_u_w_per_m2k'),
   rf: text('rf', { mode: 'json' }).notNull(), // RfSettings
   costing: text('costing', { mode: 'json' }).notNull(), // Costing
+  // id of the project this one was cloned from as a variant. No foreign key: drizzle-kit's ALTER TABLE for SQLite
+  // drops the ON DELETE action, so deleteProject clears the links itself and insertProject drops a dangling one.
+  variantOf: text('variant_of'),
   version: integer('version').notNull().default(1),
   createdAt: text('created_at').notNull(),
   updatedAt: text('updated_at').notNull(),

@@ -73,6 +73,8 @@ export const projectSchema = z.object({
   id,
   ...projectFields,
   mains: mains.nullable(),
+  // the project this one is a variant of (an id in the database it came from; dropped on import when absent there)
+  variantOf: id.optional(),
   version: z.number().int().min(0).optional().default(1),
   supply: z.object({
     transformers: z.array(transformer).max(10),

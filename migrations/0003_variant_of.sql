@@ -1,0 +1,1 @@
+ALTER TABLE `projects` ADD `variant_of` text;
