@@ -20,6 +20,7 @@ import { netlistRoutes } from './web/routes/netlists';
 import { sourcesRoutes } from './web/routes/sources';
 import { partsRoutes } from './web/routes/parts';
 import { bomRoutes } from './web/routes/bom';
+import { compareRoutes } from './web/routes/compare';
 import { sendPage } from './web/render';
 import { isBusyError } from './db/client';
 import { pageCache } from './web/cache/pages';
@@ -79,6 +80,7 @@ export function buildApp(deps: Deps) {
   app.route('/', sourcesRoutes(deps));
   app.route('/', partsRoutes(deps));
   app.route('/', bomRoutes(deps));
+  app.route('/', compareRoutes(deps));
 
   app.notFound((c) =>
     sendPage(

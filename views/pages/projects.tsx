@@ -47,6 +47,7 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
                 <tr>
                   <td>
                     <a href={`/projects/${p.id}`}>{p.name}</a>
+                    {p.variantOf ? <span class="hint"> (variant of {projects.find((x) => x.id === p.variantOf)?.name ?? 'a deleted project'})</span> : null}
                   </td>
                   <td class="num">{formatValue(p.frequencyHz, 'Hz', 4)}</td>
                   <td class="num">{formatValue(p.targetPowerW, 'W')}</td>
@@ -63,6 +64,10 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
                     <form method="post" action={`/projects/${p.id}/clone`} class="inline">
                       <button type="submit">Clone</button>
                     </form>
+                    <form method="post" action={`/projects/${p.id}/variant`} class="inline">
+                      <button type="submit">Clone as variant</button>
+                    </form>
+                    <a href={`/projects/${p.id}/compare`}>Compare</a>
                     <a href={`/projects/${p.id}/export.json`} download>
                       Export JSON
                     </a>
