@@ -146,7 +146,7 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
 function toCostLine(l: LineContext, supplier: string | null): CostLine {
   const base = {
     lineId: l.lineId, partId: l.partId, description: l.description, value: l.value, category: l.category, refs: l.refs,
-    qtyPerRig: l.qtyPerRig, stageId: l.stage?.id ?? null, stageName: l.stageName, section: l.section,
+    roleId: l.roleId, qtyPerRig: l.qtyPerRig, stageId: l.stage?.id ?? null, stageName: l.stageName, section: l.section,
     neededQty: l.neededQty, flags: l.flags,
   };
   const option = supplier === null ? undefined : cheapestBySupplier(l.options).get(supplier);

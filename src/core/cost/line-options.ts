@@ -27,6 +27,8 @@ export interface LineContext {
   value: string;
   category: string;
   refs: string;
+  /** The design role the line is bound to (src/core/roles), null = none. */
+  roleId: string | null;
   qtyPerRig: number;
   stage: Stage | null;
   stageName: string;
@@ -102,6 +104,7 @@ export function prepareLines(project: Project): LineContext[] {
       value: part === null || part.ratings.value === undefined ? '' : String(part.ratings.value),
       category,
       refs: line.refs,
+      roleId: line.roleId ?? null,
       qtyPerRig: qtyOk ? line.qtyPerRig : 0,
       stage,
       stageName: stage?.name ?? GENERAL_STAGE_NAME,

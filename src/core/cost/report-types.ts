@@ -39,6 +39,8 @@ export interface CostLine {
   category: string;
   /** Reference designators as entered. */
   refs: string;
+  /** The design role the line is bound to, null = none. */
+  roleId: string | null;
   /** Pieces per rig. */
   qtyPerRig: number;
   stageId: string | null;

@@ -18,7 +18,7 @@ export function partsCsvHeaders(currency: string): string[] {
   return [
     'Stage', 'Section', 'Refs', 'Value', 'Description', 'Category', 'Qty per rig', 'Needed qty', 'Order qty',
     'Supplier', 'SKU', 'Currency', 'Unit price', 'Offer line cost', 'Exchange rate', `Line cost ${currency}`,
-    'Break used', 'Flags',
+    'Break used', 'Flags', 'Role',
   ];
 }
 
@@ -36,7 +36,7 @@ function row(l: CostLine, currency: string): CsvCell[] {
   return [
     l.stageName, l.section, l.refs, l.value, l.description, l.category, l.qtyPerRig, l.neededQty, l.orderQty,
     l.supplier, l.sku, l.offerCurrency, money(l.unitPriceCents, l.offerCurrency), money(l.offerCostCents, l.offerCurrency),
-    l.exchangeRate, money(l.lineCostCents, currency), breakUsed, l.flags.join(' '),
+    l.exchangeRate, money(l.lineCostCents, currency), breakUsed, l.flags.join(' '), l.roleId ?? '',
   ];
 }
 
@@ -46,7 +46,7 @@ export function costReportToCsv(report: CostReport, options: PartsCsvOptions = {
   const total = (label: string, cents: number | null): CsvCell[] => {
     const r: CsvCell[] = Array(width).fill(null);
     r[0] = label;
-    r[width - 3] = money(cents, report.currency);
+    r[headers.indexOf(`Line cost ${report.currency}`)] = money(cents, report.currency);
     return r;
   };
   const rows: CsvCell[][] = [headers, ...report.lines.map((l) => row(l, report.currency))];

@@ -2,7 +2,7 @@
 // text; the user can override any field.
 
 export const IMPORT_FIELDS = [
-  'refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency', 'stage',
+  'refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency', 'stage', 'role',
 ] as const;
 export type ImportField = (typeof IMPORT_FIELDS)[number];
 
@@ -17,6 +17,7 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
   price: 'Unit price',
   currency: 'Currency',
   stage: 'Stage',
+  role: 'Design role',
 };
 
 /** Column index (0-based) per field, null = not imported. */
@@ -36,6 +37,7 @@ const EXACT: Record<ImportField, string[]> = {
   price: ['price', 'unit price', 'price each', 'each', 'unit cost', 'cost each', 'price per unit'],
   currency: ['currency', 'cur', 'ccy'],
   stage: ['stage', 'stage name', 'module', 'board'],
+  role: ['role', 'design role'],
 };
 
 // Single words that identify a field anywhere in a header, for headers no exact synonym took.
@@ -50,6 +52,7 @@ const WORDS: Record<ImportField, string[]> = {
   price: ['price'],
   currency: ['currency'],
   stage: ['stage'],
+  role: ['role'],
 };
 
 /** Lower case, accents and punctuation dropped, single spaces: "Qty./Rig" -> "qty rig". */

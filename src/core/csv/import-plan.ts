@@ -79,7 +79,7 @@ export function rowsToProjectData(
     }
     if (opts.asBomLines && r.quantity !== null) {
       const stageId = r.stage !== '' ? r.stageId : opts.stageId;
-      bom.push({ id: opts.makeId('line', n), stageId, partId: p.id, qtyPerRig: r.quantity, refs: r.refs, notes: '' });
+      bom.push({ id: opts.makeId('line', n), stageId, partId: p.id, qtyPerRig: r.quantity, refs: r.refs, notes: '', roleId: r.role || null });
     }
   });
   return { parts, bom };

@@ -22,6 +22,7 @@ const CELL_FIELDS: Partial<Record<ImportField, Field>> = {
   refs: bomLineSpec.fields.refs,
   supplier: offerSpec.fields.supplier,
   sku: offerSpec.fields.sku,
+  role: bomLineSpec.fields.roleId,
 };
 
 /** parts-list: BOM lines (quantity needed); catalog: supplier offers (supplier and price needed). */
@@ -74,6 +75,8 @@ export interface ImportValues {
   stage: string;
   /** The stage that name resolves to (null = General); meaningful only when `stage` is not ''. */
   stageId: string | null;
+  /** The design role the line is bound to, as written ('' = none). */
+  role: string;
 }
 
 export interface PreviewRow {
@@ -156,7 +159,7 @@ function previewRow(
   const v: ImportValues = {
     refs: get('refs'), value: get('value'), description: get('description'), category: get('category'),
     quantity: null, supplier: get('supplier'), sku: get('sku'), priceCents: null, currency: null,
-    stage: get('stage'), stageId: null,
+    stage: get('stage'), stageId: null, role: get('role'),
   };
   if (v.stage !== '') {
     const key = v.stage.toLowerCase();

@@ -91,7 +91,8 @@ export function mergeImport(
     matched++;
     if (duplicates === 'merge') {
       const k = bom.findIndex((e) => e.id === hit.id);
-      bom[k] = { ...bom[k], qtyPerRig: l.qtyPerRig };
+      // the file's binding when it names one; a file without a role column leaves the stored binding alone
+      bom[k] = { ...bom[k], qtyPerRig: l.qtyPerRig, ...(l.roleId ? { roleId: l.roleId } : {}) };
     }
   }
   return { project: { ...p, parts, bom }, newParts, reusedParts: data.parts.length - newParts, added, matched };
