@@ -8,7 +8,8 @@ import { createClient } from '@libsql/client';
 import fc from 'fast-check';
 import { startServer, type RunningServer } from '../helpers/server';
 import { forms } from '../helpers/html';
-import { parseValue } from '../../src/core/units';
+import { readNumber } from '../../src/core/spec/number-text';
+import { loadCurrentFields } from '../../src/core/spec/stage';
 
 const DEMO = '/projects/demo-club-30m';
 const FIELD = 'l0_keyUp';
@@ -37,7 +38,8 @@ async function integrityCheck(dbPath: string): Promise<string> {
 }
 
 const currentA = (text: string) => {
-  const r = parseValue(text, 'A');
+  // the current boxes show mA (the load spec's display unit); a bare number there is mA
+  const r = readNumber(text, loadCurrentFields['currentA.receive']);
   if (!r.ok) throw new Error(`stored current not readable: ${text}`);
   return r.value;
 };

@@ -66,7 +66,7 @@ describe('two app instances on one database file', () => {
       const edits: (Edit & { fields: Record<string, string> })[] = [
         { label: 'project name', action: `${P}/settings`, page: P, field: 'name', value: `Club 30 m ${tag}`, fields: settings },
         { label: 'kits (same form, other field)', action: `${P}/settings`, page: P, field: 'kits', value: String(10 + round), fields: settings },
-        { label: 'VXO receive current', action: `${P}/stages/st-vxo/loads`, page: P, field: 'l0_receive', value: `${21 + round} mA`, fields: vxoLoads },
+        { label: 'VXO receive current', action: `${P}/stages/st-vxo/loads`, page: P, field: 'l0_receive', value: `${21 + round}`, fields: vxoLoads },
         { label: 'worst-case SWR', action: `${P}/rf/settings`, page: `${P}/rf`, field: 'worstSwr', value: String(2 + round / 10), fields: rf },
         { label: 'receiver notes', action: `${P}/stages/st-rx`, page: `${P}/stages/st-rx`, field: 'notes', value: `Notes ${tag}`, fields: rx },
         { label: 'driver name', action: `${P}/stages/st-drv`, page: `${P}/stages/st-drv`, field: 'name', value: `Driver ${tag}`, fields: drv },
