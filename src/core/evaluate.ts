@@ -9,6 +9,7 @@ import type { SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
 import { withSupplyVoltages } from './budget-voltages';
 import { withRecommendedPa } from './power/recommended-pa';
+import { withBatteryPa } from './power/battery-pa';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
@@ -193,7 +194,7 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   const catalog = [...catalogFindings(project, unboundSupply), ...roleCheck.findings];
   const mains = mainsCornerFindings(project.mains, project.rf.spuriousRule);
   const recPa = withRecommendedPa(supply, project, rf);
-  supply = recPa.supply;
+  supply = withBatteryPa(recPa.supply, project, rf);
   const heat = project.supply.rails.length ? heatBudget(supply, paHeat(rf), project.supply.enclosureAreaM2, project.supply.enclosureUWPerM2K, project.ambientC) : null;
   const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...(heat?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
   return { budget, supply, heat, rf, cost, catalog, roles: { list: roleList, statuses: roleCheck.statuses }, paRailV, findings };

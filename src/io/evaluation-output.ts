@@ -96,6 +96,8 @@ function supplyLines(report: EvaluationReport): string[] {
       else out.push(`    ripple at the output unknown: ripple rejection not stated`);
     } else {
       out.push(`  ${r.railName}: runtime about ${(r.runtimeS / 3600).toFixed(1)} h, end of discharge under load ${formatValue(r.loadedEndV, 'V')}`);
+      if (r.curve) out.push(`    ${r.curve.chemistry} curve (${r.curve.cells} cells): plateau ${formatValue(r.curve.plateauV, 'V')} (${formatValue(r.curve.loadedPlateauV, 'V')} under key-down), loads run to ${formatValue(r.curve.stopV, 'V')}: ${Math.round(r.curve.usedFraction * 100)} % of capacity, about ${(r.curve.runtimeS / 3600).toFixed(1)} h`);
+      if (r.pa) out.push(`    ${r.pa.stageName}: about ${formatValue(r.pa.plateauOutputW, 'W')} on the plateau (${formatValue(r.pa.plateauRailV, 'V')}), ${formatValue(r.pa.endOutputW, 'W')} at the end (${formatValue(r.pa.endRailV, 'V')})`);
     }
   }
   for (const t of s.transformers) {

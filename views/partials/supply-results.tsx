@@ -195,6 +195,15 @@ const BatteryCard: FC<{ rail: BatteryRailReport }> = ({ rail }) => (
         <tr><th scope="row">Needed by the regulators</th><td>{fv(rail.requiredMinV, 'V')}</td></tr>
         <tr><th scope="row">Average current</th><td>{fv(rail.averageA, 'A')} ({pct(rail.receiveFraction)} receive)</td></tr>
         <tr><th scope="row">Runtime</th><td>{(rail.runtimeS / 3600).toFixed(1)} h</td></tr>
+        {rail.curve ? (
+          <>
+            <tr><th scope="row">Discharge curve</th><td>{rail.curve.chemistry}, {rail.curve.cells} cells: plateau {fv(rail.curve.plateauV, 'V')} ({fv(rail.curve.loadedPlateauV, 'V')} under key-down), common end {fv(rail.curve.chemistryEndV, 'V')}</td></tr>
+            <tr><th scope="row">Runtime over the curve</th><td>{(rail.curve.runtimeS / 3600).toFixed(1)} h: the loads run to {fv(rail.curve.stopV, 'V')}, {pct(rail.curve.usedFraction)} of the capacity</td></tr>
+          </>
+        ) : null}
+        {rail.pa ? (
+          <tr><th scope="row">{rail.pa.stageName}</th><td>about {fv(rail.pa.plateauOutputW, 'W')} for most of the charge ({fv(rail.pa.plateauRailV, 'V')}), {fv(rail.pa.endOutputW, 'W')} near the end ({fv(rail.pa.endRailV, 'V')})</td></tr>
+        ) : null}
       </tbody>
     </table>
     <h4>Findings</h4>

@@ -11,6 +11,7 @@ import type { RailVoltage } from './regulated-rail';
 import { evaluateRegulatedRail } from './regulated-rail';
 import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
+import { batteryCurve, batteryCurveFindings } from './battery-curve';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
 import { primaryFaultChecks, primaryFaultFindings, railsReported } from './primary-fault';
@@ -135,6 +136,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const req = requirement(0, children, b.minimumV ?? null);
     const loadedEnd = loadedEndV(b, out.keyDown);
     const runtime = batteryRuntime(b, out, duty, txFraction);
+    const curve = batteryCurve(b, out.keyDown, runtime.averageA, req.has ? req.v : 0);
     const fuse = railFuse(out.keyDown, 'as close to the battery terminal as possible');
     const r = Number.isFinite(b.internalOhm) && b.internalOhm > 0 ? b.internalOhm : 0;
     const at: Record<string, RailVoltage> = {};
@@ -149,8 +151,8 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     rootBattery.set(b.id, true);
     const report: BatteryRailReport = {
       kind: 'battery', railId: b.id, railName: b.name, fullV: b.fullV, endV: b.endV, loadedEndV: loadedEnd, requiredMinV: req.v,
-      receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse,
-      findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime, b.minimumV !== null && req.v === b.minimumV ? 'its loads' : 'the regulators'), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
+      receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse, curve, pa: null,
+      findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime, b.minimumV !== null && req.v === b.minimumV ? 'its loads' : 'the regulators'), ...batteryCurveFindings(b, curve, runtime.runtimeS), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
       recommendations: [
         { topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'supply.fuse' },
         { topic: 'battery', text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive / ${Math.round(txFraction * 100)} % transmit`, reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`, source: 'supply.battery-runtime' },

@@ -6,6 +6,7 @@ import type { FuseSheet, Mode, PerMode, RectifierTopology } from '../model';
 export type { FuseSheet } from '../model';
 import type { RectifierWaveform } from './rectifier-sim';
 import type { ThermalResult } from '../thermal/junction';
+import type { BatteryCurveResult } from './battery-curve';
 
 /** Which load a corner applies: a mode, the duty-weighted thermal load, or a continuous tune-up carrier. */
 export type CornerLoad = Mode | 'thermal' | 'tuneUp';
@@ -322,6 +323,20 @@ export interface BatteryRailReport extends RailBase {
   runtimeS: number;
   outputA: PerMode;
   fuse: FuseRecommendation;
+  /** The chemistry's discharge curve for this battery (null: external supply, or not a whole number of cells). */
+  curve: BatteryCurveResult | null;
+  /** The PA on this battery: its output on the curve's plateau and at the end voltage, under key-down (null: no PA). */
+  pa: BatteryPaOutput | null;
+}
+
+export interface BatteryPaOutput {
+  stageName: string;
+  /** Loaded plateau voltage (V) and the output there (W): what the PA gives for most of the charge. */
+  plateauRailV: number;
+  plateauOutputW: number;
+  /** Lowest key-down voltage (loaded end voltage) (V) and the output there (W). */
+  endRailV: number;
+  endOutputW: number;
 }
 
 export type RailReport = RectifiedRailReport | RegulatedRailReport | BatteryRailReport;

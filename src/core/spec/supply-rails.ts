@@ -5,6 +5,7 @@ import { getPath } from './derive';
 import type { Rail, RectifiedRail, RegulatorSetting } from '../model';
 import { choice, num, optNum, ref, text } from './make';
 import { ARMS } from './supply';
+import { BATTERY_CHEMISTRIES, CHEMISTRY_LABEL } from '../power/battery-curve';
 
 type Obj = Record<string, unknown>;
 
@@ -172,7 +173,11 @@ export const batterySpec = defineSpec({
   label: 'Battery rail',
   fields: {
     name: railName,
-    chemistry: text('Chemistry', 60, true, 'LiFePO4'),
+    // one of the chemistries with a discharge curve (power/battery-curve.ts), or an external DC supply; a stored
+    // chemistry outside the list (free text before the curves) is refused by name
+    chemistry: choice('Chemistry', BATTERY_CHEMISTRIES.map((k) => [k, CHEMISTRY_LABEL[k]] as const), 'LiFePO4', {
+      help: 'sets the discharge curve: the plateau the rig runs on for most of the charge and the common end voltage',
+    }),
     nominalV: num('Nominal voltage', 'V', U.V, 0, 1000, 12.8, { exclusiveMin: true }),
     fullV: num('Full-charge voltage', 'V', U.V, 0, 1000, 14.4, { exclusiveMin: true }),
     endV: num('End-of-discharge voltage', 'V', U.V, 0, 1000, 10, { exclusiveMin: true }),

@@ -97,6 +97,8 @@ function battery(l: Layout, r: BatteryRailReport): void {
     ['Voltage', `${fv(r.fullV, 'V')} full, ${fv(r.endV, 'V')} end, ${fv(r.loadedEndV, 'V')} at end under key-down load (need ≥ ${fv(r.requiredMinV, 'V')})`],
     ['Average current', `${fv(r.averageA, 'A')} (receive ${Math.round(r.receiveFraction * 100)} % of the time)`],
     ['Runtime', `about ${fv(r.runtimeS / 3600, '', 2)} h on the usable capacity`],
+    ...(r.curve ? [['Discharge curve', `${r.curve.chemistry}, ${r.curve.cells} cells: plateau ${fv(r.curve.plateauV, 'V')} (${fv(r.curve.loadedPlateauV, 'V')} under key-down); the loads run to ${fv(r.curve.stopV, 'V')}, ${Math.round(r.curve.usedFraction * 100)} % of the capacity, about ${fv(r.curve.runtimeS / 3600, '', 2)} h`] as [string, string]] : []),
+    ...(r.pa ? [[r.pa.stageName, `about ${fv(r.pa.plateauOutputW, 'W')} for most of the charge (${fv(r.pa.plateauRailV, 'V')}), ${fv(r.pa.endOutputW, 'W')} near the end (${fv(r.pa.endRailV, 'V')})`] as [string, string]] : []),
     ['Battery fuse', `${r.fuse.ratedA !== null ? fv(r.fuse.ratedA, 'A') : 'beyond the series'} ${r.fuse.characteristic}, at the battery terminal`],
   ], 110, 8.5);
   recommendations(l, r);
