@@ -170,10 +170,13 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   let budget = computeBudget(project, computedLoads(project, paRailV));
   let supply: SupplyReport | null = null;
   let corners = paRailCorners(project, null);
+  let last: { outputA: Record<string, PerMode>; highMainsOutputA: Record<string, PerMode> } | null = null;
   for (let pass = 0; project.supply.rails.length && pass < MAX_PASSES; pass++) {
     budget = computeBudget(project, computedLoads(project, paRailV), lowV);
     const budgetHigh = computeBudget(project, computedLoads(project, { ...paRailV, ...hotV }), lowV);
-    supply = evaluateSupply(project, railOutputs(budget), { highMainsOutputA: railOutputs(budgetHigh) });
+    // the passes read only the corners: the reservoir and winding searches run once, below
+    last = { outputA: railOutputs(budget), highMainsOutputA: railOutputs(budgetHigh) };
+    supply = evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA, searches: false });
     const next = paRailVoltages(project, budget, supply);
     const nextLow = lowestInputV(project, supply);
     corners = paRailCorners(project, supply);
@@ -183,6 +186,9 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
     hotV = corners.hotV;
     if (settled) break;
   }
+  // the last pass again with the searches: its corners are the memo's (same inputs), so the report is the one a
+  // loop with the searches in every pass would have ended with
+  if (last) supply = evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA });
   budget = withSupplyVoltages(budget, supply);
   const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);

@@ -31,6 +31,8 @@ export interface SupplyOptions {
   stepsPerCycle?: number;
   /** Output current per rectified rail id and mode at high mains (PA current rises with its rail), A. */
   highMainsOutputA?: Record<string, PerMode>;
+  /** False: no reservoir or winding searches on rectified rails (see RectifiedContext.searches). Default true. */
+  searches?: boolean;
 }
 
 const ZERO: PerMode = { receive: 0, keyUp: 0, keyDown: 0 };
@@ -118,7 +120,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), {
       mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
       standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
-      highMainsOutputA: highBudget(rail.id),
+      highMainsOutputA: highBudget(rail.id), searches: options.searches,
     });
     if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
     simulations += ev.simulations;

@@ -28,6 +28,11 @@ export interface RectifiedContext {
   stepsPerCycle?: number;
   /** Output current per mode at high mains (a PA draws more from a higher rail), A; default: the nominal outputA. */
   highMainsOutputA?: PerMode;
+  /**
+   * False: leave out the reservoir and winding searches (minimum capacitance, recommended winding; about 40
+   * simulations). evaluate()'s fixed-point passes before the last read only the corners. Default true.
+   */
+  searches?: boolean;
 }
 
 export interface RectifiedEvaluation {
@@ -100,7 +105,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
 
   // Reservoir
   const ripTarget = rail.ripplePpTargetV !== null && rail.ripplePpTargetV > 0 ? rail.ripplePpTargetV : null;
-  const minF = winding && ripTarget !== null ? minimumCapacitanceF(simInputFor(rail, winding, ctx.mains.frequencyHz, worst.mainsFactor, worst.loadA), ripTarget, worst.loadA) : null;
+  const minF = winding && ripTarget !== null && ctx.searches !== false ? minimumCapacitanceF(simInputFor(rail, winding, ctx.mains.frequencyHz, worst.mainsFactor, worst.loadA), ripTarget, worst.loadA) : null;
   const thermalRippleA = Math.sqrt(ctx.keyingDuty * sq(cornerVal(corners, 'high-keyDown', 'capacitorRippleRmsA')) + (1 - ctx.keyingDuty) * sq(cornerVal(corners, 'high-keyUp', 'capacitorRippleRmsA')));
   const reservoir = {
     fittedF: Number.isFinite(rail.reservoirF) ? rail.reservoirF : 0,
@@ -149,7 +154,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   }
 
   // Winding recommendation
-  const winding_ = winding
+  const winding_ = winding && ctx.searches !== false
     ? recommendWinding({ rail, winding, corners, keyingDuty: ctx.keyingDuty, requiredMinV: ctx.hasRequirement ? ctx.requiredMinV : null, frequencyHz: ctx.mains.frequencyHz, mainsNominalV: ctx.mains.nominalV, lowFactor: worst.mainsFactor, keyDownA: worst.loadA, standardSecondaryV: ctx.standardSecondaryV ?? DEFAULT_SECONDARY_V, construction: transformer?.construction ?? 'laminated' })
     : null;
   if (winding_) {
