@@ -218,6 +218,11 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
         </p>
       ) : null}
       <FirstScreen project={project} report={report} />
+      <p class="variant-links" id="variant-links">
+        {project.variantOf ? 'This project is a variant. ' : ''}
+        <a href={`/projects/${project.id}/compare`}>{project.variantOf ? 'Compare with its original' : 'Compare with its variants'}</a> ·{' '}
+        <a href={`/projects/${project.id}/sweep`}>Sweep one parameter</a> (mains, winding, reservoir, PA load, filter order)
+      </p>
       <SettingsForm project={project} state={stateFor('settings', failed, () => settingsFormValues(project))} />
       <div class="columns">
         <section class="card" id="stages">
