@@ -15,7 +15,7 @@ import { batteryCurve, batteryCurveFindings } from './battery-curve';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
 import { primaryFaultChecks, primaryFaultFindings, railsReported } from './primary-fault';
-import { checkSupplyInputs } from './supply-inputs';
+import { treeRoots, checkSupplyInputs } from './supply-inputs';
 import { usablePositive } from '../numeric';
 
 export interface SupplyOptions {
@@ -243,15 +243,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
  */
 function unknownLoadRails(rails: Project['supply']['rails'], outputA: Record<string, PerMode>, highA: Record<string, PerMode>): Map<string, string> {
   const byId = new Map(rails.map((r) => [r.id, r]));
-  const rootOf = (id: string): string => {
-    const seen = new Set<string>();
-    let r = byId.get(id);
-    while (r && r.kind === 'regulated' && byId.has(r.parentId) && !seen.has(r.id)) {
-      seen.add(r.id);
-      r = byId.get(r.parentId);
-    }
-    return r?.id ?? id;
-  };
+  const rootOf = treeRoots(rails);
   const unknown = (a: PerMode | undefined) => (a ? MODES.filter((m) => Number.isNaN(a[m])) : []);
   const own = new Map<string, string>();
   for (const r of rails) {

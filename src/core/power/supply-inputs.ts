@@ -91,7 +91,7 @@ function railWords(rails: Rail[], id: string): string {
 }
 
 /** The root of each rail's supply tree (following regulated rails to their source; loops stop where they close). */
-function treeRoots(rails: Rail[]): (id: string) => string {
+export function treeRoots(rails: Rail[]): (id: string) => string {
   const byId = new Map(rails.map((r) => [r.id, r]));
   return (id: string) => {
     const seen = new Set<string>();
