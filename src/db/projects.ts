@@ -108,7 +108,7 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
         stockNote: o.stockNote,
       })),
   }));
-  const bom: BomLine[] = bomRows.map((b) => ({ id: b.id, stageId: b.stageId, partId: b.partId, qtyPerRig: b.qtyPerRig, refs: b.refs, notes: b.notes }));
+  const bom: BomLine[] = bomRows.map((b) => ({ id: b.id, stageId: b.stageId, partId: b.partId, qtyPerRig: b.qtyPerRig, refs: b.refs, notes: b.notes, roleId: b.roleId }));
   const mains =
     p.mainsNominalV !== null && p.mainsFrequencyHz !== null
       ? { nominalV: p.mainsNominalV, frequencyHz: p.mainsFrequencyHz, lowFraction: p.mainsLowFraction ?? 0.1, highFraction: p.mainsHighFraction ?? 0.1 }

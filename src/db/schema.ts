@@ -158,6 +158,8 @@ export const bomLines = sqliteTable(
     qtyPerRig: real('qty_per_rig').notNull(),
     refs: text('refs').notNull().default(''),
     notes: text('notes').notNull().default(''),
+    // the design role the line fills (src/core/roles); null = not bound
+    roleId: text('role_id'),
   },
   (t) => [index('bom_lines_project').on(t.projectId)],
 );

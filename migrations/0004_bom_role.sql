@@ -1,0 +1,1 @@
+ALTER TABLE `bom_lines` ADD `role_id` text;
