@@ -124,6 +124,8 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
   );
 };
 
+const capitalised = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
+
 /** The station templates as radio buttons, each with what it sets up (the spec gives the label and options). */
 const TemplateChoice: FC<{ state: FieldState }> = ({ state }) => {
   const f = newProjectSpec.fields.template;
@@ -145,7 +147,9 @@ const TemplateChoice: FC<{ state: FieldState }> = ({ state }) => {
           {error}
         </span>
       ) : (
-        <span class="hint">{f.help}. Band, power and supply below apply to it; everything can be changed afterwards.</span>
+        <span class="hint">
+          {capitalised(f.help ?? '')}. Band, power and supply below apply to it; everything can be changed afterwards.
+        </span>
       )}
     </fieldset>
   );
