@@ -171,6 +171,10 @@ export const SweepPage: FC<SweepPageProps> = ({ project, targets, states, active
                   <SpecField spec={spec} k="points" state={st} idp={p} size={4} />
                   <button type="submit">Sweep</button>
                 </div>
+              ) : st.errors.target ? (
+                <p class="error" role="alert">
+                  {st.errors.target}
+                </p>
               ) : (
                 <p class="hint">Not available: {unavailable[p]}.</p>
               )}
