@@ -26,7 +26,7 @@ export function figure(value: number | null, unit: string, currency?: string, si
 }
 
 const Cell: FC<{ c: CompareCell; row: CompareRow; first: boolean }> = ({ c, row, first }) => (
-  <td class={`cmp-cell verdict-${c.verdict}`} data-verdict={first ? undefined : c.verdict}>
+  <td class={`cmp-cell verdict-${c.verdict}`} data-cmp={first ? undefined : c.verdict}>
     <span class="cmp-value">{figure(c.value, row.unit, c.currency)}</span>
     {c.value === null && c.why ? <span class="hint"> ({c.why})</span> : null}
     {first ? null : c.verdict === 'same' ? (

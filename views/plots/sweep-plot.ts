@@ -67,7 +67,7 @@ export function sweepPlotSvg(r: SweepResult, display: DisplayUnit): string {
     // the project as it stands
     if (nowX >= xLo && nowX <= xHi) {
       out.push(`<line x1="${f1(x(nowX))}" y1="${top}" x2="${f1(x(nowX))}" y2="${top + plotH}" stroke="#5b6770" stroke-dasharray="4 3"/>`);
-      out.push(`<text x="${f1(x(nowX) + 3)}" y="${top + 10}" fill="#5b6770">now</text>`);
+      out.push(`<text x="${f1(x(nowX) + 3)}" y="${top + plotH - 4}" fill="#5b6770">now</text>`);
     }
     // the line through computed points (a gap where a point could not be computed)
     let path = '';
