@@ -215,17 +215,42 @@ export class Layout {
     this.page.drawRectangle({ x: xPt, y: baselinePt - 1, width: sizePt, height: sizePt, borderColor: INK, borderWidth: 0.7 });
   }
 
+  /**
+   * Column widths in points. A column too narrow for its longest unbreakable word (a reference range such as
+   * "C10–C14", an SKU) is widened to hold it, and the difference is taken from the columns with room to spare, in
+   * proportion to that room, so a word is never broken when the table can hold it. When it cannot, the widths stay
+   * as given and the wrap breaks the word by characters (nothing is lost).
+   */
+  columnWidthsPt(columns: Column[], rows: Row[], sizePt: number, padPt: number): number[] {
+    const given = columns.map((c) => c.width * this.contentWidthPt);
+    const longest = (text: string, bold: boolean) =>
+      this.clean(text).split(' ').reduce((m, w) => (w ? Math.max(m, this.width(w, sizePt, bold)) : m), 0);
+    const need = columns.map((c, i) => {
+      if (c.tick) return 0;
+      let m = longest(c.header, true);
+      for (const r of rows) if (!r.span) m = Math.max(m, longest(r.cells[i] ?? '', !!r.bold));
+      return m + 2 * padPt;
+    });
+    const shortPt = given.reduce((a, g, i) => a + Math.max(0, need[i] - g), 0);
+    if (shortPt === 0) return given;
+    const spare = given.map((g, i) => Math.max(0, g - need[i]));
+    const sparePt = spare.reduce((a, b) => a + b, 0);
+    if (sparePt < shortPt) return given;
+    return given.map((g, i) => (need[i] > g ? need[i] : g - (spare[i] * shortPt) / sparePt));
+  }
+
   /** A table: wrapped cells, the header row repeated at the top of every page it runs onto. */
   table(columns: Column[], rows: Row[], sizePt = 8.5, continuedLabel = ''): void {
     const pad = 3;
     const lineH = sizePt * 1.25;
+    const colW = this.columnWidthsPt(columns, rows, sizePt, pad);
     const xs: number[] = [];
     let x = this.leftPt;
-    for (const c of columns) {
+    for (const w of colW) {
       xs.push(x);
-      x += c.width * this.contentWidthPt;
+      x += w;
     }
-    const widthOf = (i: number) => columns[i].width * this.contentWidthPt - 2 * pad;
+    const widthOf = (i: number) => colW[i] - 2 * pad;
     const spanW = this.contentWidthPt - 2 * pad;
     const wrapRow = (row: Row): string[][] =>
       row.span ? [this.wrap(row.cells[0] ?? '', spanW, sizePt, row.bold)] : row.cells.map((c, i) => (columns[i]?.tick ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, row.bold)));
@@ -242,7 +267,7 @@ export class Layout {
         }
         lines.forEach((line, k) => {
           const w = this.width(line, sizePt, bold);
-          const lx = col.align === 'right' ? xs[i] + col.width * this.contentWidthPt - pad - w : xs[i] + pad;
+          const lx = col.align === 'right' ? xs[i] + colW[i] - pad - w : xs[i] + pad;
           this.drawAt(line, lx, top - pad - (k + 1) * lineH + sizePt * 0.3, sizePt, bold, color);
         });
       });

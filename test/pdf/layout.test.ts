@@ -59,3 +59,31 @@ describe('layout toolkit', () => {
     expect(headers).toBe(pagesUsed);
   });
 });
+
+describe('table columns hold their longest word', () => {
+  let l: Layout;
+  beforeAll(async () => {
+    l = await Layout.create('a4', 'test');
+  });
+  const sizePt = 8.5;
+  const padPt = 3;
+  const toleranceWidthPt = 1e-6;
+
+  it('widens a references column for "C10–C14" from the column with room, and the word stays on one line', () => {
+    const columns = [{ header: 'Refs', width: 0.05 }, { header: 'Description', width: 0.95 }];
+    const rows = [{ cells: ['C10–C14', 'Capacitor C0G 500 V'] }, { cells: ['R1', 'Resistor 2.2 kΩ 1 W'] }];
+    const w = l.columnWidthsPt(columns, rows, sizePt, padPt);
+    expect(Math.abs(w[0] + w[1] - l.contentWidthPt)).toBeLessThan(toleranceWidthPt);
+    expect(w[0]).toBeGreaterThanOrEqual(l.textWidth('C10–C14', sizePt) + 2 * padPt - toleranceWidthPt);
+    expect(l.wrap('C10–C14', w[0] - 2 * padPt, sizePt)).toEqual(['C10–C14']);
+    // with the given 5 % the range would have been broken inside the word
+    expect(l.wrap('C10–C14', 0.05 * l.contentWidthPt - 2 * padPt, sizePt).length).toBeGreaterThan(1);
+  });
+
+  it('keeps the given widths when every word fits, and when no widening can make one fit', () => {
+    const columns = [{ header: 'A', width: 0.5 }, { header: 'B', width: 0.5 }];
+    expect(l.columnWidthsPt(columns, [{ cells: ['x', 'y'] }], sizePt, padPt)).toEqual([0.5 * l.contentWidthPt, 0.5 * l.contentWidthPt]);
+    const huge = 'W'.repeat(400);
+    expect(l.columnWidthsPt(columns, [{ cells: [huge, huge] }], sizePt, padPt)).toEqual([0.5 * l.contentWidthPt, 0.5 * l.contentWidthPt]);
+  });
+});
