@@ -110,6 +110,8 @@ function supplyLines(report: EvaluationReport): string[] {
   for (const f of s.primary?.faultChecks ?? []) {
     out.push(`    ${f.windingName} fault reflected to the primary: ${formatValue(f.reflectedA, 'A')}, ${f.check.multiple.toFixed(1)} x In: ${f.check.clears ? 'cleared' : 'not cleared'} within ${f.check.allowedS} s`);
   }
+  const ir = s.primary?.inrush;
+  if (ir) out.push(`    switch-on inrush: peak ${formatValue(ir.peakA, 'A')}, ${ir.i2t.toFixed(3)} A²s against ${ir.fuseMeltI2t.toFixed(3)} A²s to melt the fuse (NTC soft-start about ${ir.ntcOhm.toFixed(0)} Ω if needed)`);
   return out;
 }
 

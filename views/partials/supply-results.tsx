@@ -293,6 +293,14 @@ export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null 
             </p>
           ) : null}
           {report.primary ? <PrimaryFaultTable checks={report.primary.faultChecks} /> : null}
+          {report.primary?.inrush ? (
+            <p>
+              <strong>Switch-on inrush:</strong> peak {fv(report.primary.inrush.peakA, 'A')}, {report.primary.inrush.i2t.toFixed(3)} A²s
+              against about {report.primary.inrush.fuseMeltI2t.toFixed(3)} A²s to melt the fuse
+              ({report.primary.inrush.transformers.map((t) => `${t.name}: magnetising ${fv(t.magnetisingPeakA, 'A')} (${t.construction}), reservoirs ${fv(t.chargingPeakA, 'A')}`).join('; ')}).
+              An NTC of about {report.primary.inrush.ntcOhm.toFixed(0)} Ω cold limits it if needed.
+            </p>
+          ) : null}
           <FindingList findings={general} />
         </section>
       ) : null}

@@ -12,6 +12,7 @@ import { evaluateRegulatedRail } from './regulated-rail';
 import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
 import { batteryCurve, batteryCurveFindings } from './battery-curve';
+import { inrushFindings, inrushReport } from './inrush';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
 import { primaryFaultChecks, primaryFaultFindings, railsReported } from './primary-fault';
@@ -215,8 +216,10 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const fittedA = inputs.primaryFuseOk ? project.supply.primaryFuseA : null;
     const inUseA = fittedA ?? fuse.ratedA;
     const faultChecks = inUseA !== null ? primaryFaultChecks(railsReported(reports), inUseA) : [];
-    const findings = sortFindings([...fittedFuseFindings('Primary fuse', fittedA, fuse), ...primaryFaultFindings(faultChecks, reports)]);
-    primary = { loadA, fuse, fittedA, faultChecks, findings };
+    const used = project.supply.transformers.filter((t) => transformers.some((r) => r.transformerId === t.id && r.primaryA > 0));
+    const inrush = inUseA !== null ? inrushReport(used, rails.filter((r): r is RectifiedRail => r.kind === 'rectified'), project.mains!, inUseA) : null;
+    const findings = sortFindings([...fittedFuseFindings('Primary fuse', fittedA, fuse), ...primaryFaultFindings(faultChecks, reports), ...(inrush ? inrushFindings(inrush) : [])]);
+    primary = { loadA, fuse, fittedA, faultChecks, inrush, findings };
   }
 
   const railReports = rails.map((r) => reports.get(r.id)!).filter(Boolean);

@@ -7,6 +7,7 @@ export type { FuseSheet } from '../model';
 import type { RectifierWaveform } from './rectifier-sim';
 import type { ThermalResult } from '../thermal/junction';
 import type { BatteryCurveResult } from './battery-curve';
+import type { InrushReport } from './inrush';
 
 /** Which load a corner applies: a mode, the duty-weighted thermal load, or a continuous tune-up carrier. */
 export type CornerLoad = Mode | 'thermal' | 'tuneUp';
@@ -364,6 +365,8 @@ export interface PrimaryReport {
   fittedA: number | null;
   /** The primary fuse in use (fitted, else recommended; taken as T, sheet 3) against each winding's reflected fault. */
   faultChecks: PrimaryFaultCheck[];
+  /** Switch-on inrush of all transformers against the primary fuse in use; null when no fuse size is known. */
+  inrush: InrushReport | null;
   findings: Finding[];
 }
 

@@ -1,6 +1,7 @@
 // Supply design summary: transformer, reservoirs, fuses, bleeders, regulators, heatsinks, battery runtime,
 // the rectifier waveform plot, and the supply's findings. Reads the supply report only.
 import type { SupplyReport, RectifiedRailReport, RegulatedRailReport, BatteryRailReport, FaultCheck } from '../../core/power/report-types';
+import type { InrushReport } from '../../core/power/inrush';
 import type { HeatBudget } from '../../core/power/heat-budget';
 import { GREY, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
@@ -22,6 +23,7 @@ export function supplySection(l: Layout, supply: SupplyReport | null, heat: Heat
     keyValues(l, [
       ['Primary fuse', `${f.ratedA !== null ? fv(f.ratedA, 'A') : 'beyond the series'} ${f.characteristic} (load ${fv(f.loadA, 'A')} × ${f.factor})${supply.primary.fittedA !== null ? `; fitted ${fv(supply.primary.fittedA, 'A')}` : ''}`],
       ...supply.primary.faultChecks.map((c): [string, string] => [`${c.windingName} fault`, `${fv(c.reflectedA, 'A')} on the primary, ${c.check.multiple.toFixed(1)} × In: ${clearWords(c.check)}`]),
+      ...(supply.primary.inrush ? [['Switch-on inrush', inrushWords(supply.primary.inrush)] as [string, string]] : []),
     ]);
   }
   for (const r of supply.rails) {
@@ -104,4 +106,10 @@ function battery(l: Layout, r: BatteryRailReport): void {
   recommendations(l, r);
   findingsList(l, r.findings, true);
   void GREY;
+}
+
+/** The inrush against the primary fuse in one line. */
+function inrushWords(r: InrushReport): string {
+  const parts = r.transformers.map((t) => `${t.name}: magnetising ${fv(t.magnetisingPeakA, 'A')} (${t.construction}), reservoirs ${fv(t.chargingPeakA, 'A')}`).join('; ');
+  return `peak ${fv(r.peakA, 'A')}, ${r.i2t.toFixed(3)} A²s against about ${r.fuseMeltI2t.toFixed(3)} A²s to melt the fuse (${parts}); an NTC of about ${r.ntcOhm.toFixed(0)} Ω cold limits it if needed`;
 }

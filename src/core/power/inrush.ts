@@ -1,0 +1,141 @@
+// Switch-on inrush at the primary: each transformer's magnetising inrush plus its reservoirs charging from empty
+// (reflected by the turns ratio), against the primary fuse's melting I²t estimated from its IEC 60127-2 sheet.
+import type { Finding } from '../findings';
+import type { Mains, RectifiedRail, Transformer } from '../model';
+import type { FuseSheet } from './report-types';
+import { IEC_60127_2_PRE_ARC } from './fault';
+import { noLoadVrms, windingResistanceOhm } from './winding';
+
+/**
+ * Magnetising inrush peak as a multiple of the rated primary RMS current. Common practice, no published source
+ * (from memory, not confirmed): laminated (EI) cores about 10 x, toroids (no air gap, high remanence) about 30 x.
+ * Capped by the resistance bound (a fully saturated core): peak <= sqrt(2) V / R_primary.
+ */
+export const INRUSH_MULTIPLE = { laminated: 10, toroidal: 30 } as const;
+/** Share of the copper loss taken to be in the primary. Common practice, no published source. */
+export const PRIMARY_COPPER_SHARE = 0.5;
+/** Each mains cycle's inrush peak is about half the one before. Common practice, no published source (from memory). */
+export const INRUSH_DECAY_PER_CYCLE = 0.5;
+/**
+ * Largest switch-on I²t as a share of the fuse's melting I²t, so that repeated switching does not age the element.
+ * Common practice, no published source (makers' pulse derating, from memory, not confirmed).
+ */
+export const PULSE_SHARE = 0.3;
+/** Peak an NTC soft-start is sized for, as a multiple of the rated primary RMS current. Common practice, no source. */
+export const NTC_TARGET_MULTIPLE = 10;
+
+export interface InrushTransformer {
+  transformerId: string;
+  name: string;
+  construction: Transformer['construction'];
+  /** Nameplate VA (sum of rated V x rated A over the windings) and rated primary RMS current at nominal mains (A). */
+  ratedVA: number;
+  ratedPrimaryA: number;
+  /** Primary resistance from the regulation figures and the copper split (Ω). */
+  primaryOhm: number;
+  /** Magnetising inrush peak (A) and its I²t (A² s). */
+  magnetisingPeakA: number;
+  magnetisingI2t: number;
+  /** Reservoirs charging from empty at the mains peak, reflected to the primary: peak (A) and I²t (A² s). */
+  chargingPeakA: number;
+  chargingI2t: number;
+}
+
+export interface InrushReport {
+  transformers: InrushTransformer[];
+  /** At the primary, the worse of switching at a voltage zero (magnetising) and at a peak (charging) (A, A² s). */
+  peakA: number;
+  i2t: number;
+  /** Primary fuse in use (A), its sheet, and its melting I²t estimated from the sheet's minimum pre-arcing times. */
+  fuseA: number;
+  sheet: FuseSheet;
+  fuseMeltI2t: number;
+  /** The same for a quick-acting (F, sheet 2) fuse of the same rating (A² s). */
+  quickMeltI2t: number;
+  /** Cold resistance of an NTC soft-start that keeps the resistance-limited peak to NTC_TARGET_MULTIPLE x rated (Ω). */
+  ntcOhm: number;
+}
+
+/**
+ * Lowest I²t the fuse can melt at, from its sheet (A² s): min over the rows of (m In)² t_min. Common practice, no
+ * published source: the minimum pre-arcing times of IEC 60127-2 read as a melting-I²t floor for a short pulse.
+ */
+export function meltI2tFloor(sheet: FuseSheet, ratedA: number): number {
+  const rows = IEC_60127_2_PRE_ARC[sheet].filter((r) => r.minS !== null);
+  return Math.min(...rows.map((r) => (r.multiple * ratedA) ** 2 * r.minS!));
+}
+
+const DIODES_IN_PATH = { bridge: 2, 'centre-tap': 1, 'half-wave': 1 } as const;
+
+/** One transformer's switch-on inrush at high mains. */
+export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains: Mains): InrushTransformer {
+  const highV = mains.nominalV * (1 + Math.max(0, mains.highFraction));
+  const periodS = 1 / mains.frequencyHz;
+  const ratedVA = t.windings.reduce((s, w) => s + Math.max(0, w.ratedVrms * w.ratedA), 0);
+  const ratedPrimaryA = ratedVA / mains.nominalV;
+  // VA-weighted regulation; copper loss at full load = reg x VA (resistive regulation: I² R = reg V I)
+  const reg = ratedVA > 0 ? t.windings.reduce((s, w) => s + w.regulationFraction * w.ratedVrms * w.ratedA, 0) / ratedVA : 0;
+  // I_p² R_p = share x reg x VA with I_p = VA / V_p  =>  R_p = share x reg x V_p² / VA
+  const primaryOhm = ratedVA > 0 ? (PRIMARY_COPPER_SHARE * reg * mains.nominalV ** 2) / ratedVA : 0;
+  const boundA = primaryOhm > 0 ? (Math.SQRT2 * highV) / primaryOhm : Infinity;
+  const magnetisingPeakA = Math.min(INRUSH_MULTIPLE[t.construction] * ratedPrimaryA, boundA);
+  // Half-sine pulse over a half-cycle, ∫ = I² T/4, each cycle's peak r times the last: sum 1 / (1 - r²).
+  // An upper bound: the saturation pulse is narrower than a half-cycle.
+  const magnetisingI2t = (magnetisingPeakA ** 2 * periodS) / 4 / (1 - INRUSH_DECAY_PER_CYCLE ** 2);
+  let chargingPeakA = 0;
+  let chargingRootI2t = 0;
+  for (const w of t.windings) {
+    for (const r of rails.filter((x) => x.windingId === w.id)) {
+      const n = DIODES_IN_PATH[r.topology];
+      const vNl = noLoadVrms(w) * (highV / mains.nominalV);
+      const v = Math.max(0, Math.SQRT2 * vNl - n * r.diodeDropV);
+      const rOhm = windingResistanceOhm(w) + n * r.diodeResistanceOhm + Math.max(0, r.esrOhm);
+      const k = noLoadVrms(w) / mains.nominalV; // turns ratio secondary / primary
+      if (!(rOhm > 0) || !(r.reservoirF > 0)) continue;
+      // Source: RC charge from a step (switched at the mains peak, the worst case): i = V/R e^(-t/RC), ∫ i² = V² C / (2R)
+      chargingPeakA += k * (v / rOhm);
+      // reflected by the turns ratio: the primary current is k x the secondary, so I²t scales by k²
+      chargingRootI2t += Math.sqrt(k ** 2 * ((v ** 2 * r.reservoirF) / (2 * rOhm)));
+    }
+  }
+  return {
+    transformerId: t.id, name: t.name, construction: t.construction, ratedVA, ratedPrimaryA, primaryOhm,
+    magnetisingPeakA, magnetisingI2t, chargingPeakA, chargingI2t: chargingRootI2t ** 2,
+  };
+}
+
+/** All transformers switched on together behind the primary fuse (fuseA, taken as T sheet 3 as the primary checks do). */
+export function inrushReport(transformers: Transformer[], rails: RectifiedRail[], mains: Mains, fuseA: number): InrushReport {
+  const parts = transformers.map((t) => transformerInrush(t, rails, mains));
+  // Switched at a voltage zero the magnetising inrush is worst (full flux offset) and the reservoirs charge gently
+  // with the rising sine; switched at a peak the reservoirs take the step and the core has no offset. The worse of
+  // the two is taken, the other part neglected. Common practice, no published source.
+  const magPeakA = parts.reduce((s, p) => s + p.magnetisingPeakA, 0);
+  const chgPeakA = parts.reduce((s, p) => s + p.chargingPeakA, 0);
+  // Minkowski: the I²t of a sum of currents (all transformers together) is at most (Σ sqrt(I²t))²
+  const magI2t = parts.reduce((s, p) => s + Math.sqrt(p.magnetisingI2t), 0) ** 2;
+  const chgI2t = parts.reduce((s, p) => s + Math.sqrt(p.chargingI2t), 0) ** 2;
+  const peakA = Math.max(magPeakA, chgPeakA);
+  const i2t = Math.max(magI2t, chgI2t);
+  const ratedA = parts.reduce((s, p) => s + p.ratedPrimaryA, 0);
+  const primaryOhm = parts.length ? 1 / parts.reduce((s, p) => s + (p.primaryOhm > 0 ? 1 / p.primaryOhm : 0), 0) : 0;
+  const highV = mains.nominalV * (1 + Math.max(0, mains.highFraction));
+  // resistance-limited peak sqrt(2) V / (R_NTC + R_p) = target  =>  R_NTC = sqrt(2) V / target - R_p
+  const ntcOhm = ratedA > 0 ? Math.max(0, (Math.SQRT2 * highV) / (NTC_TARGET_MULTIPLE * ratedA) - (Number.isFinite(primaryOhm) ? primaryOhm : 0)) : 0;
+  return { transformers: parts, peakA, i2t, fuseA, sheet: 'T3', fuseMeltI2t: meltI2tFloor('T3', fuseA), quickMeltI2t: meltI2tFloor('F2', fuseA), ntcOhm };
+}
+
+export function inrushFindings(r: InrushReport): Finding[] {
+  const base = { rule: 'fuse.inrush', subject: 'Primary fuse', value: r.i2t, limit: r.fuseMeltI2t, unit: 'A²s', source: 'supply.inrush-fuse' as const };
+  const fuse = `T${r.fuseA < 1 ? `${Math.round(r.fuseA * 1000)}mA` : `${Number(r.fuseA.toPrecision(3))}A`}`;
+  const what = `Switch-on inrush (the worse of magnetising inrush and reservoir charging) peaks near ${r.peakA.toFixed(1)} A with about ${r.i2t.toFixed(2)} A²s; the ${fuse} primary fuse melts from about ${r.fuseMeltI2t.toFixed(2)} A²s`;
+  const quick = r.i2t > PULSE_SHARE * r.quickMeltI2t ? ' Keep it time-lag (T): a quick-acting (F) fuse of that rating would not survive it.' : '';
+  const ntc = `an NTC thermistor of about ${r.ntcOhm.toFixed(0)} Ω cold in the primary, or a soft-start relay`;
+  if (r.i2t > r.fuseMeltI2t) {
+    return [{ ...base, severity: 'caution', message: `${what}: it may blow at switch-on. Fit ${ntc}, or a larger time-lag fuse only if it still clears the primary faults.${quick} Mains wiring must follow your local electrical code.` }];
+  }
+  if (r.i2t > PULSE_SHARE * r.fuseMeltI2t) {
+    return [{ ...base, severity: 'caution', message: `${what}: more than ${Math.round(PULSE_SHARE * 100)} % of it, so repeated switching ages the fuse until it blows one day. Fit ${ntc}.${quick}` }];
+  }
+  return [{ ...base, severity: 'ok', message: `${what}: the inrush stays within ${Math.round(PULSE_SHARE * 100)} % of it.${quick}` }];
+}
