@@ -1,7 +1,7 @@
 // Rows <-> core Project. A project is written whole inside one serialised transaction. Each write bumps its
 // version number and keeps a snapshot of the stored result (project_versions), so the web layer can merge a
 // form loaded at an older version field by field (src/web/edit.ts); a plain version check refuses stale writes.
-import { eq, asc, inArray, and, lte } from 'drizzle-orm';
+import { eq, asc, inArray, and, lte, getTableColumns } from 'drizzle-orm';
 import type { Database, Tx, Db } from './client';
 import { STAGE_DATA, type StageDataKey } from '../core/spec/stage-data';
 import * as t from './schema';
@@ -135,47 +135,89 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
   };
 }
 
-async function writeChildren(tx: Tx, project: Project): Promise<void> {
+/** The child rows of a project, table by table, parents before children (the order they are inserted in). */
+function childRows(project: Project) {
   const id = project.id;
-  await tx.delete(t.bomLines).where(eq(t.bomLines.projectId, id));
-  await tx.delete(t.parts).where(eq(t.parts.projectId, id));
-  await tx.delete(t.stages).where(eq(t.stages.projectId, id));
-  await tx.delete(t.rails).where(eq(t.rails.projectId, id));
-  await tx.delete(t.transformers).where(eq(t.transformers.projectId, id));
+  const rows = {
+    transformers: [] as Row[],
+    windings: [] as Row[],
+    rails: [] as Row[],
+    stages: [] as Row[],
+    stageLoads: [] as Row[],
+    parts: [] as Row[],
+    offers: [] as Row[],
+    bomLines: [] as Row[],
+  };
   for (const [i, tr] of project.supply.transformers.entries()) {
-    await tx.insert(t.transformers).values({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction });
-    for (const [j, w] of tr.windings.entries()) {
-      await tx.insert(t.windings).values({ ...w, transformerId: tr.id, position: j });
-    }
+    rows.transformers.push({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction });
+    for (const [j, w] of tr.windings.entries()) rows.windings.push({ ...w, transformerId: tr.id, position: j });
   }
   for (const [i, rail] of project.supply.rails.entries()) {
     const { id: railId, name, kind, ...params } = rail;
-    await tx.insert(t.rails).values({ id: railId, projectId: id, position: i, name, kind, params });
+    rows.rails.push({ id: railId, projectId: id, position: i, name, kind, params });
   }
   for (const [i, s] of project.stages.entries()) {
     const own = STAGE_DATA.find((d) => s[d.key] !== undefined);
     const params = own ? { [own.key]: s[own.key] } : null;
-    await tx.insert(t.stages).values({ id: s.id, projectId: id, position: i, kind: s.kind, name: s.name, notes: s.notes, dissipationW: s.dissipationW, params });
+    rows.stages.push({ id: s.id, projectId: id, position: i, kind: s.kind, name: s.name, notes: s.notes, dissipationW: s.dissipationW, params });
     for (const [j, l] of s.loads.entries()) {
-      await tx.insert(t.stageLoads).values({
-        id: `${s.id}:${j}`,
-        stageId: s.id,
-        railId: l.railId,
-        position: j,
-        receiveA: l.currentA.receive,
-        keyUpA: l.currentA.keyUp,
-        keyDownA: l.currentA.keyDown,
-      });
+      const currents = { receiveA: l.currentA.receive, keyUpA: l.currentA.keyUp, keyDownA: l.currentA.keyDown };
+      rows.stageLoads.push({ id: `${s.id}:${j}`, stageId: s.id, railId: l.railId, position: j, ...currents });
     }
   }
   for (const [i, part] of project.parts.entries()) {
-    await tx.insert(t.parts).values({ id: part.id, projectId: id, position: i, description: part.description, category: part.category, ratings: part.ratings });
-    for (const [j, o] of part.offers.entries()) {
-      await tx.insert(t.offers).values({ ...o, partId: part.id, position: j });
+    rows.parts.push({ id: part.id, projectId: id, position: i, description: part.description, category: part.category, ratings: part.ratings });
+    for (const [j, o] of part.offers.entries()) rows.offers.push({ ...o, partId: part.id, position: j });
+  }
+  for (const [i, b] of project.bom.entries()) rows.bomLines.push({ ...b, projectId: id, position: i });
+  return rows;
+}
+
+type Row = { id: string } & Record<string, unknown>;
+type ChildTable = keyof ReturnType<typeof childRows>;
+const CHILD_TABLES: ChildTable[] = ['transformers', 'windings', 'rails', 'stages', 'stageLoads', 'parts', 'offers', 'bomLines'];
+/** Rows per multi-row INSERT (well under SQLite's bound-variable limit for these tables). */
+const INSERT_CHUNK = 200;
+
+/** The row as its table stores it: only the table's columns, a missing value as null, JSON for comparison. */
+function storedForm(table: ChildTable, row: Row): string {
+  return JSON.stringify(Object.keys(getTableColumns(t[table])).map((k) => row[k] ?? null));
+}
+
+/** Every column of a changed row, as an INSERT would store it: a missing value is the column's default, else null. */
+function updateSet(table: ChildTable, row: Row): Record<string, unknown> {
+  const columns = Object.entries(getTableColumns(t[table])).filter(([k]) => k !== 'id');
+  return Object.fromEntries(columns.map(([k, c]) => [k, row[k] !== undefined ? row[k] : c.default !== undefined ? c.default : null]));
+}
+
+/**
+ * Write the project's child rows over `before` (what is stored now, as loadProject read it; null when there are
+ * none): rows that are new are inserted (several per statement), changed rows updated, and rows no longer there
+ * deleted. An edit of one field so writes one row rather than every row of the project. Parents are inserted and
+ * updated before their children and deleted after them, so a row moved to a new parent keeps its foreign key.
+ */
+async function writeChildren(tx: Tx, project: Project, before: Project | null): Promise<void> {
+  const next = childRows(project);
+  const prev = before ? childRows(before) : null;
+  for (const table of CHILD_TABLES) {
+    const old = new Map((prev?.[table] ?? []).map((r) => [r.id, r]));
+    const added: Row[] = [];
+    for (const row of next[table]) {
+      const was = old.get(row.id);
+      if (!was) added.push(row);
+      else if (storedForm(table, was) !== storedForm(table, row)) await tx.update(t[table]).set(updateSet(table, row)).where(eq(t[table].id, row.id));
+    }
+    for (let i = 0; i < added.length; i += INSERT_CHUNK) {
+      await tx.insert(t[table]).values(added.slice(i, i + INSERT_CHUNK) as never[]);
     }
   }
-  for (const [i, b] of project.bom.entries()) {
-    await tx.insert(t.bomLines).values({ ...b, projectId: id, position: i });
+  if (!prev) return;
+  for (const table of [...CHILD_TABLES].reverse()) {
+    const kept = new Set(next[table].map((r) => r.id));
+    const gone = prev[table].filter((r) => !kept.has(r.id)).map((r) => r.id);
+    for (let i = 0; i < gone.length; i += INSERT_CHUNK) {
+      await tx.delete(t[table]).where(inArray(t[table].id, gone.slice(i, i + INSERT_CHUNK)));
+    }
   }
 }
 
@@ -230,7 +272,7 @@ export async function insertProject(database: Database, project: Project, nowIso
     const original = project.variantOf ? await tx.select({ id: t.projects.id }).from(t.projects).where(eq(t.projects.id, project.variantOf)) : [];
     const columns = { ...projectColumns(project), variantOf: original.length ? project.variantOf! : null };
     await tx.insert(t.projects).values({ id: project.id, ...columns, version: 1, createdAt: nowIso, updatedAt: nowIso });
-    await writeChildren(tx, project);
+    await writeChildren(tx, project, null);
     return keepSnapshot(tx, project.id);
   });
 }
@@ -251,7 +293,7 @@ export async function changeProject(
     if (!current) throw new NotFound(`No project ${id}`);
     const next = { ...(await change(current, tx)), id, version: current.version + 1 };
     await tx.update(t.projects).set({ ...projectColumns(next), version: next.version, updatedAt: nowIso }).where(eq(t.projects.id, id));
-    await writeChildren(tx, next);
+    await writeChildren(tx, next, current);
     return keepSnapshot(tx, id);
   });
 }
