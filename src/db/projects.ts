@@ -159,14 +159,16 @@ function childRows(project: Project) {
   for (const [i, s] of project.stages.entries()) {
     const own = STAGE_DATA.find((d) => s[d.key] !== undefined);
     const params = own ? { [own.key]: s[own.key] } : null;
-    rows.stages.push({ id: s.id, projectId: id, position: i, kind: s.kind, name: s.name, notes: s.notes, dissipationW: s.dissipationW, params });
+    const { kind, name, notes, dissipationW } = s;
+    rows.stages.push({ id: s.id, projectId: id, position: i, kind, name, notes, dissipationW, params });
     for (const [j, l] of s.loads.entries()) {
       const currents = { receiveA: l.currentA.receive, keyUpA: l.currentA.keyUp, keyDownA: l.currentA.keyDown };
       rows.stageLoads.push({ id: `${s.id}:${j}`, stageId: s.id, railId: l.railId, position: j, ...currents });
     }
   }
   for (const [i, part] of project.parts.entries()) {
-    rows.parts.push({ id: part.id, projectId: id, position: i, description: part.description, category: part.category, ratings: part.ratings });
+    const { description, category, ratings } = part;
+    rows.parts.push({ id: part.id, projectId: id, position: i, description, category, ratings });
     for (const [j, o] of part.offers.entries()) rows.offers.push({ ...o, partId: part.id, position: j });
   }
   for (const [i, b] of project.bom.entries()) rows.bomLines.push({ ...b, projectId: id, position: i });
@@ -175,7 +177,8 @@ function childRows(project: Project) {
 
 type Row = { id: string } & Record<string, unknown>;
 type ChildTable = keyof ReturnType<typeof childRows>;
-const CHILD_TABLES: ChildTable[] = ['transformers', 'windings', 'rails', 'stages', 'stageLoads', 'parts', 'offers', 'bomLines'];
+const CHILD_TABLES: ChildTable[] = ['transformers', 'windings', 'rails', 'stages', 'stageLoads', 'parts', 'offers',
+  'bomLines'];
 /** Rows per multi-row INSERT (well under SQLite's bound-variable limit for these tables). */
 const INSERT_CHUNK = 200;
 
@@ -187,7 +190,8 @@ function storedForm(table: ChildTable, row: Row): string {
 /** Every column of a changed row, as an INSERT would store it: a missing value is the column's default, else null. */
 function updateSet(table: ChildTable, row: Row): Record<string, unknown> {
   const columns = Object.entries(getTableColumns(t[table])).filter(([k]) => k !== 'id');
-  return Object.fromEntries(columns.map(([k, c]) => [k, row[k] !== undefined ? row[k] : c.default !== undefined ? c.default : null]));
+  const value = (k: string, c: { default?: unknown }) => (row[k] !== undefined ? row[k] : c.default !== undefined ? c.default : null);
+  return Object.fromEntries(columns.map(([k, c]) => [k, value(k, c)]));
 }
 
 /**
@@ -205,7 +209,9 @@ async function writeChildren(tx: Tx, project: Project, before: Project | null): 
     for (const row of next[table]) {
       const was = old.get(row.id);
       if (!was) added.push(row);
-      else if (storedForm(table, was) !== storedForm(table, row)) await tx.update(t[table]).set(updateSet(table, row)).where(eq(t[table].id, row.id));
+      else if (storedForm(table, was) !== storedForm(table, row)) {
+        await tx.update(t[table]).set(updateSet(table, row)).where(eq(t[table].id, row.id));
+      }
     }
     for (let i = 0; i < added.length; i += INSERT_CHUNK) {
       await tx.insert(t[table]).values(added.slice(i, i + INSERT_CHUNK) as never[]);
