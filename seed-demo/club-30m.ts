@@ -1,6 +1,7 @@
 // Demo (a): a club group build of 8 kits of a 30 m, 20 W CW transceiver on 120 V / 60 Hz mains.
 // Invented scenario: the "Ridgeback Valley Radio Society" autumn build. Suppliers, SKUs and prices invented.
 import type { Project, Stage, Part, BomLine } from '../src/core/model';
+import { SAMPLE_CORES } from './cores';
 import { offer, perMode, defaultRf, defaultLpf } from './common';
 
 const stages: Stage[] = [
@@ -65,7 +66,7 @@ const stages: Stage[] = [
     notes: 'Five-element filter on two iron-powder toroids; 500 V C0G/silver-mica capacitors.',
     loads: [],
     dissipationW: null,
-    lpf: defaultLpf(),
+    lpf: { ...defaultLpf(), coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2, core: { ...SAMPLE_CORES.iron12.core } },
   },
   {
     id: 'st-tr',

@@ -1,5 +1,6 @@
 // Demo (b): a 5 W 20 m portable CW rig on a 12.8 V (4-cell lithium iron phosphate) battery.
 import type { Project } from '../src/core/model';
+import { SAMPLE_CORES } from './cores';
 import { offer, perMode, defaultRf, defaultLpf } from './common';
 
 const S1 = 'Northfield Components';
@@ -76,7 +77,8 @@ export const portable20m: Project = {
         deviceCossF: null,
       },
     },
-    { id: 'p-lpf', kind: 'lpf', name: '20 m low-pass filter', notes: '', loads: [], dissipationW: null, lpf: { ...defaultLpf(), order: 7, seed: 7 } },
+    { id: 'p-lpf', kind: 'lpf', name: '20 m low-pass filter', notes: '', loads: [], dissipationW: null, lpf: { ...defaultLpf(), order: 7, seed: 7, coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2,
+      core: { ...SAMPLE_CORES.iron12.core, wireDiameterM: 0.6e-3 } } },
     {
       id: 'p-tr',
       kind: 'tr',

@@ -175,6 +175,18 @@ export interface LpfParams {
   inductorTolerance: number; // fraction
   monteCarloTrials: number;
   seed: number;
+  core?: ToroidCore | null; // the inductors' core, for flux, fit and resonance; null/absent = not entered
+}
+
+/** A toroidal core as entered on the filter: dimensions, material data and the wire wound on it (SI; null = not given). */
+export interface ToroidCore {
+  outerDiameterM: number | null;
+  innerDiameterM: number | null;
+  heightM: number | null;
+  fluxLimitT: number | null; // the maker's peak flux density limit at the operating frequency (heating)
+  minFrequencyHz: number | null; // the material's frequency range
+  maxFrequencyHz: number | null;
+  wireDiameterM: number | null; // over the enamel
 }
 
 export interface RelayParams {

@@ -14,6 +14,7 @@ import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
 import { fieldLabel } from './field-labels';
 import { evaluateKeying } from './keying-eval';
+import { realiseLpf } from './cores-check';
 
 export interface RfContext {
   /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
@@ -69,7 +70,10 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   }
   f.push({ severity: 'caution', kind: 'standing', rule: 'lpf.capacitor-voltage', subject: s, value: capacitorPeakV, limit: null, unit: 'V', source: 'line.standing-wave',
     message: `Shunt capacitors can see about ${capacitorPeakV.toFixed(0)} V peak at SWR ${swr}; use RF-rated (silver-mica or C0G) parts rated well above it.` });
-  return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW }, findings: f };
+  // the parts themselves: element stress at the most RF the PA delivers into the worst SWR, core flux, fit, resonance
+  const real = realiseLpf(design, p.core, powerW, swr, s);
+  f.push(...real.findings);
+  return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW, realisation: real.realisation }, findings: f };
 }
 
 /** Evaluate all RF stages of a project. Never throws for bad data; problems become findings. */

@@ -10,6 +10,7 @@ import type { FieldError } from './lpf-validate';
 import type { PaResult } from './pa';
 import type { RelayResult } from './tr-relay';
 import type { KeyingResult } from './keying-eval';
+import type { CoreRealisation } from './cores-check';
 
 export interface LpfStageResult {
   /** Field errors of the filter parameters (design/analysis null when not empty). */
@@ -21,6 +22,8 @@ export interface LpfStageResult {
   capacitorPeakV: number;
   /** Heat in the filter at key-down from its insertion loss, W. */
   filterLossW: number;
+  /** Each element's RF voltage and current at the worst SWR, the core's flux, fit and self-resonance (absent when not designed). */
+  realisation?: CoreRealisation | null;
 }
 
 export interface RfStageResult {

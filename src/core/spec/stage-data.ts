@@ -43,6 +43,8 @@ export const STAGE_DATA: readonly StageData[] = [
     rows: [
       ['response', 'rippleDb', 'order', 'form', 'cutoffHz'],
       ['capacitorSeries', 'allowParallelPairs', 'coreName', 'coreAlHPerTurn2'],
+      ['core.outerDiameterM', 'core.innerDiameterM', 'core.heightM', 'core.wireDiameterM'],
+      ['core.fluxLimitT', 'core.minFrequencyHz', 'core.maxFrequencyHz'],
       ['inductorQ', 'capacitorQ', 'capacitorTolerance', 'inductorTolerance', 'monteCarloTrials', 'seed'],
     ],
   },

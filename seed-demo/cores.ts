@@ -1,0 +1,27 @@
+// Invented sample cores for the demos, described by size and material only (no maker's part codes). Their AL and
+// flux limits are illustrative values for the demos, not any maker's data: take a real core's from its data sheet.
+import type { ToroidCore } from '../src/core/model';
+
+export interface SampleCore {
+  name: string;
+  alHPerTurn2: number;
+  core: ToroidCore;
+}
+
+export const SAMPLE_CORES: Record<'iron12' | 'iron17' | 'ferrite23', SampleCore> = {
+  iron12: {
+    name: 'Iron-powder toroid 12.7 mm, 2–30 MHz mix (AL 4.9 nH/t²)',
+    alHPerTurn2: 4.9e-9,
+    core: { outerDiameterM: 12.7e-3, innerDiameterM: 7.7e-3, heightM: 4.8e-3, fluxLimitT: 0.015, minFrequencyHz: 2e6, maxFrequencyHz: 30e6, wireDiameterM: 0.8e-3 },
+  },
+  iron17: {
+    name: 'Iron-powder toroid 17.5 mm, 2–30 MHz mix (AL 5.7 nH/t²)',
+    alHPerTurn2: 5.7e-9,
+    core: { outerDiameterM: 17.5e-3, innerDiameterM: 9.4e-3, heightM: 4.8e-3, fluxLimitT: 0.015, minFrequencyHz: 2e6, maxFrequencyHz: 30e6, wireDiameterM: 0.8e-3 },
+  },
+  ferrite23: {
+    name: 'Ferrite toroid 23 mm, broadband transformer material 1–50 MHz (AL 900 nH/t²)',
+    alHPerTurn2: 900e-9,
+    core: { outerDiameterM: 23e-3, innerDiameterM: 14e-3, heightM: 7.5e-3, fluxLimitT: 0.02, minFrequencyHz: 1e6, maxFrequencyHz: 50e6, wireDiameterM: 0.6e-3 },
+  },
+};
