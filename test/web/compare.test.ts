@@ -87,13 +87,23 @@ describe('compare page', () => {
 
   it.each([
     [`p1=${CLUB}&p2=nope`, 'Second: there is no project "nope"'],
-    [`p1=${CLUB}`, 'Second: choose a project'],
     [`p2=${CLUB}`, 'First (reference): choose a project'],
   ])('%s is refused by name', async (q, says) => {
     const { get } = await demoApp();
     const res = await get(`/compare?${q}`);
     expect(res.status).toBe(422);
     expect(await text(res)).toContain(says);
+  });
+
+  it('one project (its list link when it has no variants) asks for a second, without an error', async () => {
+    const { get } = await demoApp();
+    const redirect = await get(`/projects/${PORTABLE}/compare`);
+    expect(redirect.headers.get('location')).toBe(`/compare?p1=${PORTABLE}`);
+    const res = await get(`/compare?p1=${PORTABLE}`);
+    expect(res.status).toBe(200);
+    const html = await text(res);
+    expect(html).toContain('Choose a second project to compare with.');
+    expect(html).toMatch(/<option value="demo-portable-20m" selected/);
   });
 });
 

@@ -47,9 +47,11 @@ export interface ComparePageProps {
   rows: CompareRow[] | null;
   state: FieldState;
   message?: string;
+  /** what to do next, when nothing is wrong */
+  prompt?: string;
 }
 
-export const ComparePage: FC<ComparePageProps> = ({ all, chosen, rows, state, message }) => {
+export const ComparePage: FC<ComparePageProps> = ({ all, chosen, rows, state, message, prompt }) => {
   const options: [string, string][] = all.map((p) => [p.id, p.variantOf ? `${p.name} (variant)` : p.name]);
   const differing = rows?.filter((r) => r.differs).length ?? 0;
   return (
@@ -69,6 +71,11 @@ export const ComparePage: FC<ComparePageProps> = ({ all, chosen, rows, state, me
         {message ? (
           <p class="form-errors" role="alert">
             {message}
+          </p>
+        ) : null}
+        {prompt ? (
+          <p class="notice" role="status" id="compare-prompt">
+            {prompt}
           </p>
         ) : null}
       </section>

@@ -43,12 +43,11 @@ export function compareRoutes(deps: Deps) {
       if (p) projects.push(p);
       else state.errors[s] = `${SLOT_LABEL[s]}: there is no project "${values[s].slice(0, 80)}" (deleted in another window?)`;
     }
-    if (!values.p1 || !values.p2) {
-      const missing = !values.p1 ? 'p1' : 'p2';
-      state.errors[missing] = `${SLOT_LABEL[missing]}: choose a project`;
-    }
+    if (!values.p1) state.errors.p1 = `${SLOT_LABEL.p1}: choose a project`;
     const errors = Object.values(state.errors);
     if (errors.length) return sendPage(c, <ComparePage all={all} chosen={[]} rows={null} state={state} message={errors.join(' ')} />, 422);
+    // one project (the list's Compare link on a project without variants): ask for the second, nothing is wrong
+    if (projects.length < 2) return sendPage(c, <ComparePage all={all} chosen={[]} rows={null} state={state} prompt="Choose a second project to compare with." />);
     const rows = compareRows(projects.map((p) => projectMetrics(p, evaluateCached(p))));
     const chosen = projects.map((p) => all.find((x) => x.id === p.id)!).filter(Boolean);
     return sendPage(c, <ComparePage all={all} chosen={chosen} rows={rows} state={state} />);
