@@ -28,7 +28,10 @@ const Errors: FC<{ state: FieldState }> = ({ state }) => {
   );
 };
 
-const LineFields: FC<{ project: Project; state: FieldState; idp: string }> = ({ project, state, idp }) => {
+/** Design roles offered to bind a line to, as [id, label] (from the evaluation). */
+export type RoleOptions = [string, string][];
+
+const LineFields: FC<{ project: Project; state: FieldState; idp: string; roles: RoleOptions }> = ({ project, state, idp, roles }) => {
   const stages: [string, string][] = project.stages.map((s): [string, string] => [s.id, s.name]);
   const parts: [string, string][] = project.parts.map((p) => [p.id, `${p.description}${p.category ? ` (${p.category})` : ''}`]);
   const partsWithPick: [string, string][] = state.values.partId ? parts : [['', 'Choose a part…'], ...parts];
@@ -39,12 +42,16 @@ const LineFields: FC<{ project: Project; state: FieldState; idp: string }> = ({ 
       <SpecField spec={bomLineSpec} k="partId" idp={idp} state={state} options={partsWithPick} cls="bom-part" />
       <SpecField spec={bomLineSpec} k="qtyPerRig" idp={idp} state={state} size={4} label="Qty per rig" cls="bom-qty" />
       <SpecField spec={bomLineSpec} k="refs" idp={idp} state={state} size={10} label="Designators" hint="" cls="bom-refs" />
-      <SpecField spec={bomLineSpec} k="notes" idp={idp} state={state} size={18} cls="bom-notes" />
+      {/* the role shares the notes cell, so the grid keeps its columns */}
+      <span class="bom-notes">
+        <SpecField spec={bomLineSpec} k="notes" idp={idp} state={state} size={18} />
+        <SpecField spec={bomLineSpec} k="roleId" idp={idp} state={state} options={roles} none="(not bound)" hint="" />
+      </span>
     </>
   );
 };
 
-export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, failed }) => {
+export const BomLines: FC<{ project: Project; failed?: Failed; roles?: RoleOptions }> = ({ project, failed, roles = [] }) => {
   const addState = stateFor('add-line', failed, () => lineValues(null));
   const base = `/projects/${project.id}/bom`;
   return (
@@ -62,7 +69,7 @@ export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, f
           <span>Part</span>
           <span>Qty per rig</span>
           <span>Designators</span>
-          <span>Notes</span>
+          <span>Notes, design role</span>
           <span />
         </div>
         {project.bom.map((l) => {
@@ -71,7 +78,7 @@ export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, f
             <form {...hx(`${base}/lines/${l.id}`, '#bom')} class="bom-row" id={`line-${l.id}`} aria-label={`Line ${l.refs || l.id}`}>
               <Version version={project.version} />
               <Errors state={state} />
-              <LineFields project={project} state={state} idp={`l-${l.id}`} />
+              <LineFields project={project} state={state} idp={`l-${l.id}`} roles={roles} />
               <span class="bom-actions">
                 <button type="submit">Save</button>{' '}
                 <a class="danger" href={`${base}/lines/${l.id}/delete`}>
@@ -84,7 +91,7 @@ export const BomLines: FC<{ project: Project; failed?: Failed }> = ({ project, f
         <form {...hx(`${base}/lines`, '#bom')} class="bom-row add" aria-label="Add a line">
           <Version version={project.version} />
           <Errors state={addState} />
-          <LineFields project={project} state={addState} idp="al" />
+          <LineFields project={project} state={addState} idp="al" roles={roles} />
           <span class="bom-actions">
             <button type="submit">Add line</button>
           </span>

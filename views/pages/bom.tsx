@@ -6,22 +6,27 @@ import type { Project } from '../../src/core/model';
 import type { CostReport } from '../../src/core/cost';
 import type { Failed } from '../components/failed';
 import { BomLines } from '../components/bom-lines';
+import { BomRoles } from '../components/bom-roles';
+import type { RoleStatus } from '../../src/core/roles';
 import { ImportForm } from '../components/bom-import';
 import { CostResults } from '../partials/cost-results';
 
 export interface BomBodyProps {
   project: Project;
   report: CostReport;
+  /** the design's roles and their bound lines (absent: not shown) */
+  roles?: RoleStatus[];
   failed?: Failed;
   notice?: string;
 }
 
-export const BomBody: FC<BomBodyProps> = ({ project, report, failed, notice }) => {
+export const BomBody: FC<BomBodyProps> = ({ project, report, roles = [], failed, notice }) => {
   const csv = `/projects/${project.id}/bom.csv`;
   return (
     <div id="bom">
       <PageMessages notice={notice} failed={failed} />
-      <BomLines project={project} failed={failed} />
+      <BomLines project={project} failed={failed} roles={roles.map((s): [string, string] => [s.role.id, s.role.label])} />
+      <BomRoles project={project} statuses={roles} failed={failed} />
       <p class="bom-export">
         Export the costed parts list: <a href={csv}>CSV (comma separated)</a> · <a href={`${csv}?sep=semicolon`}>CSV (semicolon, decimal comma)</a>
         <br />

@@ -12,6 +12,8 @@ import type { Deps } from '../deps';
 import { newId } from '../ids';
 import { lineSchema, mappingFrom } from '../bom-forms';
 import { deleteLine, mergeImport, saveLine } from '../../core/edits/parts-list';
+import { bindCandidate } from '../../core/edits/bind-role';
+import { evaluate } from '../../core/evaluate';
 import { Layout } from '../../../views/layout';
 import { BomBody } from '../../../views/pages/bom';
 import { lineValues } from '../../../views/components/bom-lines';
@@ -21,7 +23,10 @@ import type { Failed } from '../../../views/components/failed';
 
 export const CSV_IMPORT_LIMIT_BYTES = 2 * 1024 * 1024;
 
-const body = (p: Project, failed?: Failed, notice?: string) => <BomBody project={p} report={costProject(p)} failed={failed} notice={notice} />;
+const body = (p: Project, failed?: Failed, notice?: string) => {
+  const report = evaluate(p);
+  return <BomBody project={p} report={report.cost} roles={report.roles.statuses} failed={failed} notice={notice} />;
+};
 
 export function bomPage(project: Project, failed?: Failed, notice?: string) {
   return (
@@ -92,6 +97,11 @@ export function bomRoutes(deps: Deps) {
       return l ? lineValues(l) : null;
     },
     change: (p, d, c) => saveLine(p, c.req.param('lid')!, d, false) }));
+
+  // a candidate for a design role: the role is found in the design as it is now (it may have changed since the page)
+  const bindSchema = z.object({ roleId: z.string().trim().min(1, 'Design role: missing').max(200), partId: z.string().trim().min(1, 'Part: missing').max(200) });
+  app.post('/projects/:id/bom/roles/bind', projectEdit(deps, { ...common, form: 'bind-role', schema: bindSchema,
+    change: (p, d) => bindCandidate(p, evaluate(p).roles.list.find((r) => r.id === d.roleId), d.partId, newId('b')) }));
 
   app.get('/projects/:id/bom/lines/:lid/delete', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));

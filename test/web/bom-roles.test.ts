@@ -1,0 +1,53 @@
+// Design roles on the parts-list page through t.app.request(): the club demo's roles shown with their state, the
+// deliberate mismatch (0.5 W bleeders where 0.92 W is needed) fixed by binding a candidate, a line's role kept
+// when the line is saved, and a bind for a role the design does not have refused with nothing saved.
+import { beforeEach, describe, expect, it } from 'vitest';
+import { demoApp } from '../helpers/app';
+import { loadProject } from '../../src/db/projects';
+import type { Project } from '../../src/core/model';
+import { evaluate } from '../../src/core/evaluate';
+
+const ID = 'demo-club-30m';
+let t: Awaited<ReturnType<typeof demoApp>>;
+beforeEach(async () => {
+  t = await demoApp();
+});
+const stored = async (): Promise<Project> => (await loadProject(t.database.db, ID))!;
+const base = `/projects/${ID}/bom`;
+const page = async () => (await t.app.request(`http://localhost${base}`)).text();
+
+describe('parts the design needs', () => {
+  it('lists every role of the stored demo, bound, with the bleeders flagged and the 1 W part offered', async () => {
+    const html = await page();
+    const p = await stored();
+    const roles = evaluate(p).roles.statuses;
+    expect(roles.length).toBeGreaterThan(10);
+    for (const s of roles) expect(html).toContain(`data-role="${s.role.id}" data-state="${s.state}"`);
+    expect(roles.filter((s) => s.state !== 'ok').map((s) => [s.role.id, s.state])).toEqual([['bleeders', 'caution']]);
+    expect(html).toMatch(/data-role="bleeders"[\s\S]*?data-candidate="p-bleed"/);
+  });
+
+  it('binding the candidate fixes the mismatch and the cost follows', async () => {
+    const before = await stored();
+    const res = await t.post(`${base}/roles/bind`, { version: String(before.version), roleId: 'bleeders', partId: 'p-bleed' });
+    expect(res.status).toBe(303);
+    const after = await stored();
+    expect(after.bom.find((l) => l.id === 'b9')).toMatchObject({ partId: 'p-bleed', qtyPerRig: 2, refs: 'R1, R2', roleId: 'bleeders' });
+    const r = evaluate(after);
+    expect(r.roles.statuses.every((s) => s.state === 'ok')).toBe(true);
+    expect(r.cost.totals.buildCents).not.toBe(evaluate(before).cost.totals.buildCents);
+  });
+
+  it('saving a line keeps its role from the form; a bind for a role the design lacks is refused, nothing saved', async () => {
+    const p = await stored();
+    const line = p.bom.find((l) => l.id === 'b5')!;
+    const save = await t.post(`${base}/lines/b5`, { version: String(p.version), stageId: '', partId: line.partId, qty: '1', refs: 'T1', notes: 'x', role: 'transformer:tr-main' });
+    expect(save.status).toBe(303);
+    expect((await stored()).bom.find((l) => l.id === 'b5')).toMatchObject({ notes: 'x', roleId: 'transformer:tr-main' });
+    const now = await stored();
+    const bad = await t.post(`${base}/roles/bind`, { version: String(now.version), roleId: 'reservoir:no-such-rail', partId: 'p-c6800' });
+    expect(bad.status).toBe(422);
+    expect(await bad.text()).toMatch(/no longer exists/);
+    expect((await stored()).version).toBe(now.version);
+  });
+});

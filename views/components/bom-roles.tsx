@@ -1,0 +1,87 @@
+// The parts the design needs (design roles): each with its requirement, the line bound to it and its state, and the
+// catalog parts that meet it ranked by cost at the group quantity, each with a button that binds it.
+import type { FC } from 'hono/jsx';
+import type { Project } from '../../src/core/model';
+import type { RoleStatus } from '../../src/core/roles';
+import { candidatesFor } from '../../src/core/roles';
+import { formatMoney } from '../../src/core/cost';
+import { Version, hx } from './supply-transformer';
+import type { Failed } from './failed';
+
+const STATE_TEXT: Record<RoleStatus['state'], string> = {
+  ok: 'meets the design',
+  caution: 'check (see the findings)',
+  fail: 'does not meet the design',
+  unbound: 'no line bound',
+};
+
+/** How many candidates are listed per role (cheapest first). */
+const SHOWN = 3;
+
+export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: Failed }> = ({ project, statuses, failed }) => {
+  if (!statuses.length) return null;
+  const refused = failed?.form === 'bind-role' ? Object.values(failed.state.errors) : [];
+  const base = `/projects/${project.id}/bom`;
+  const parts = new Map(project.parts.map((p) => [p.id, p]));
+  return (
+    <section class="card" id="design-roles">
+      <h2>Parts the design needs</h2>
+      {refused.length ? (
+        <div class="form-errors" role="alert">
+          <p>Nothing was bound: {refused.join('; ')}</p>
+        </div>
+      ) : null}
+      <p class="hint">
+        Each part of the design with what it must be rated for. Bind a line to it (the “Design role” box of the line) or use a
+        candidate: catalog parts meeting every rating, cheapest first at the quantity the build needs.
+      </p>
+      <ul class="role-list">
+        {statuses.map((s) => {
+          const lines = project.bom.filter((l) => s.lineIds.includes(l.id));
+          const candidates = candidatesFor(project, s.role).slice(0, SHOWN);
+          return (
+            <li class={`role role-${s.state}`} data-role={s.role.id} data-state={s.state}>
+              <strong>{s.role.label}</strong>: <span class="role-state">{STATE_TEXT[s.state]}</span>
+              <br />
+              <span class="role-requirement">Needs {s.role.requirement}</span>
+              {lines.length ? (
+                <>
+                  <br />
+                  Bound: {lines.map((l) => `${l.refs ? `${l.refs} ` : ''}${parts.get(l.partId)?.description ?? l.partId}`).join('; ')}
+                </>
+              ) : null}
+              {candidates.length ? (
+                <ul class="role-candidates">
+                  {candidates.map((c) => (
+                    <li data-candidate={c.partId}>
+                      {c.description}: {c.costCents === null ? 'no price' : `${formatMoney(c.costCents, project.currency)} for ${c.neededQty}`}
+                      {c.orderQty !== null && c.orderQty !== c.neededQty ? ` (buying ${c.orderQty})` : ''}
+                      {c.supplier ? ` from ${c.supplier}` : ''}{' '}
+                      {c.bound ? (
+                        <em>(bound)</em>
+                      ) : (
+                        <form {...hx(`${base}/roles/bind`, '#bom')} class="inline">
+                          <Version version={project.version} />
+                          <input type="hidden" name="roleId" value={s.role.id} />
+                          <input type="hidden" name="partId" value={c.partId} />
+                          <button type="submit" aria-label={`Use ${c.description} for ${s.role.label}`}>
+                            Use
+                          </button>
+                        </form>
+                      )}
+                    </li>
+                  ))}
+                </ul>
+              ) : (
+                <>
+                  <br />
+                  <em>No catalog part meets every rating: add one on the parts catalog page (with its ratings).</em>
+                </>
+              )}
+            </li>
+          );
+        })}
+      </ul>
+    </section>
+  );
+};
