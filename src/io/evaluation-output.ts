@@ -125,6 +125,9 @@ function rfLines(report: EvaluationReport): string[] {
       out.push(`    at SWR ${st.pa.swr.swr}: drain peak up to ${formatValue(w.value, 'V')} into ${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '-' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} ohm (phase ${w.phaseDeg.toFixed(0)} deg), device current up to ${formatValue(st.pa.swr.worstPeakCurrent.value, 'A')}`);
     }
     if (st.lpf?.design) out.push(`  ${st.stageName}: ${st.lpf.design.response} order ${st.lpf.design.order}, cutoff ${formatValue(st.lpf.design.cutoffHz, 'Hz', 4)}, loss ${st.lpf.analysis?.atOperating.lossDb.toFixed(2)} dB`);
+    for (const l of st.lpf?.realisation?.inductors ?? []) {
+      if (l.peakFluxT !== null) out.push(`    L${l.index}: ${l.turns} turns, ${formatValue(l.rmsV, 'V')} RMS at the worst SWR, peak flux ${formatValue(l.peakFluxT, 'T')}`);
+    }
     if (st.relay) out.push(`  ${st.stageName}: RF ${formatValue(st.relay.rfPeakV, 'V')} peak, ${formatValue(st.relay.rfRmsA, 'A')} RMS at the worst SWR`);
     const k = st.keying;
     if (k) {

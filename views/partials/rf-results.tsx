@@ -16,6 +16,7 @@ import { formatValue as fv } from '../../src/core/units';
 import { filterPlotSvg } from '../plots/filter-plot';
 import { keyingPlotSvg } from '../plots/keying-plot';
 import type { KeyingResult } from '../../src/core/rf/keying-eval';
+import type { CoreRealisation } from '../../src/core/rf/cores-check';
 import { PaSwrTable } from './pa-swr-table';
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
@@ -159,9 +160,59 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
         />
       ) : null}
       {svg ? <figure class="plot">{raw(svg)}</figure> : null}
+      {lpf.realisation ? <Realisation r={lpf.realisation} /> : null}
     </div>
   );
 };
+
+const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
+  <div class="rf-realisation">
+    <h4>Parts at {fv(r.powerW, 'W')} into SWR {r.swr} (worst load phase)</h4>
+    <p class="explain">
+      {r.aeM2 !== null && r.leM !== null && r.permeability !== null
+        ? `Core: Ae ${(r.aeM2 * 1e6).toFixed(1)} mm², le ${(r.leM * 1e3).toFixed(1)} mm, permeability about ${r.permeability.toFixed(0)} from its AL. `
+        : 'Core dimensions not entered: flux not checked. '}
+      Self-resonance is an estimate (about 2 pF across a winding, 5 nH of capacitor lead).
+    </p>
+    <table class="grid realisation">
+      <thead>
+        <tr>
+          <th>Part</th>
+          <th class="num">Value</th>
+          <th class="num">RF voltage (RMS)</th>
+          <th class="num">RF current (RMS)</th>
+          <th class="num">Peak flux</th>
+          <th class="num">Turns (fit)</th>
+          <th class="num">Self-resonance</th>
+        </tr>
+      </thead>
+      <tbody>
+        {r.inductors.map((l) => (
+          <tr>
+            <td>L{l.index}</td>
+            <td class="num">{fv(l.inductanceH, 'H')}</td>
+            <td class="num">{fv(l.rmsV, 'V')}</td>
+            <td class="num">{fv(l.rmsA, 'A')}</td>
+            <td class="num">{l.peakFluxT !== null ? `${(l.peakFluxT * 1e3).toFixed(1)} mT` : 'not checked'}</td>
+            <td class="num">{`${l.turns}${l.fitTurns !== null ? ` (${l.fitTurns})` : ''}`}</td>
+            <td class="num">{fv(l.selfResonanceHz, 'Hz', 3)}</td>
+          </tr>
+        ))}
+        {r.capacitors.map((c) => (
+          <tr>
+            <td>C{c.index}</td>
+            <td class="num">{fv(c.capacitanceF, 'F')}</td>
+            <td class="num">{`${fv(c.rmsV, 'V')} (${fv(c.peakV, 'V')} peak)`}</td>
+            <td class="num">{fv(c.rmsA, 'A')}</td>
+            <td class="num">—</td>
+            <td class="num">—</td>
+            <td class="num">{fv(c.selfResonanceHz, 'Hz', 3)}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  </div>
+);
 
 const RelayTable: FC<{ name: string; r: RelayResult }> = ({ name, r }) => (
   <div class="rf-relay">

@@ -69,6 +69,15 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
         });
         keyValues(l, [['Passband', `worst loss ${fv(a.bandMaxLossDb, 'dB')}, worst SWR ${a.bandMaxSwr.toFixed(2)} across ${fv(a.bandLowHz, 'Hz', 5)}–${fv(a.bandHighHz, 'Hz', 5)}`]], 110, 8.5);
       }
+      const re = s.lpf.realisation;
+      if (re) {
+        l.text(`Parts at ${fv(re.powerW, 'W')} into SWR ${re.swr} (worst load phase)${re.aeM2 !== null && re.leM !== null ? `; core Ae ${(re.aeM2 * 1e6).toFixed(1)} mm², le ${(re.leM * 1e3).toFixed(1)} mm` : '; core dimensions not entered'}. Self-resonance estimated with about 2 pF across a winding and 5 nH of capacitor lead.`, { sizePt: 8.5, afterPt: 4 });
+        const rows: Row[] = [
+          ...re.inductors.map((x) => ({ cells: [`L${x.index}`, fv(x.inductanceH, 'H'), fv(x.rmsV, 'V'), fv(x.rmsA, 'A'), x.peakFluxT !== null ? `${(x.peakFluxT * 1e3).toFixed(1)} mT` : 'not checked', `${x.turns}${x.fitTurns !== null ? ` (fit ${x.fitTurns})` : ''}`, fv(x.selfResonanceHz, 'Hz', 3)] })),
+          ...re.capacitors.map((x) => ({ cells: [`C${x.index}`, fv(x.capacitanceF, 'F'), `${fv(x.rmsV, 'V')} (${fv(x.peakV, 'V')} pk)`, fv(x.rmsA, 'A'), '—', '—', fv(x.selfResonanceHz, 'Hz', 3)] })),
+        ];
+        l.table([{ header: 'Part', width: 0.08 }, { header: 'Value', width: 0.12, align: 'right' }, { header: 'RF voltage RMS', width: 0.2, align: 'right' }, { header: 'RF current RMS', width: 0.14, align: 'right' }, { header: 'Peak flux', width: 0.14, align: 'right' }, { header: 'Turns', width: 0.14, align: 'right' }, { header: 'Self-resonance', width: 0.18, align: 'right' }], rows);
+      }
     }
     if (s.relay) {
       const r = s.relay;

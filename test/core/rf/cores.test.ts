@@ -103,3 +103,19 @@ describe('realiseLpf', () => {
     expect(r.findings.find((f) => f.rule === 'core.frequency')?.severity).toBe('caution');
   });
 });
+
+describe('realisation on the page', () => {
+  it('the RF results show each part’s RF voltage, current, flux and self-resonance', async () => {
+    const { evaluateRf } = await import('../../../src/core/rf/evaluate-rf');
+    const { RfResults } = await import('../../../views/partials/rf-results');
+    const { project } = await import('./fixture');
+    const p = project();
+    const st = p.stages.find((s) => s.kind === 'lpf')!;
+    st.lpf = { ...st.lpf!, core };
+    const report = evaluateRf(p, { paRailV: { pa: 13.8 } });
+    const html = String(RfResults({ report }));
+    expect(html).toContain('rf-realisation');
+    expect(html).toMatch(/\d+\.\d mT/);
+    expect(html).toContain('Self-resonance');
+  });
+});
