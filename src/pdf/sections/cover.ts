@@ -5,14 +5,16 @@ import { bandOf } from '../../core/rf/bands';
 import { formatMoney } from '../../core/cost/money';
 import { rfView } from '../../core/checklists';
 import { actionable, worstSeverity } from '../../core/findings';
-import { GOVERNS, RULE_SETS } from '../../core/rules/rule-set';
+import { RULE_SETS } from '../../core/rules/rule-set';
 import { GREY, type Layout } from '../layout';
-import type { PackOptions, PackReport } from '../report';
+import { PACK_PART_TITLES, type PackOptions, type PackReport } from '../report';
+import { packNotice } from './notice';
 import { findingsList, fv, keyValues } from './common';
 
 export function cover(l: Layout, project: Project, report: PackReport, opts: PackOptions): void {
   l.gap(20);
-  l.text('Builder’s pack', { sizePt: 11, color: GREY, afterPt: 4 });
+  const part = opts.part ?? 'both';
+  l.text(PACK_PART_TITLES[part], { sizePt: 11, color: GREY, afterPt: 4 });
   l.text(project.name, { sizePt: 20, bold: true, afterPt: 6 });
   if (project.notes) l.text(project.notes, { sizePt: 10, color: GREY, afterPt: 12 });
   const band = bandOf(project.frequencyHz);
@@ -25,18 +27,23 @@ export function cover(l: Layout, project: Project, report: PackReport, opts: Pac
     ['Target output', fv(project.targetPowerW, 'W')],
     ['Computed output', rf?.paOutputW != null ? fv(rf.paOutputW, 'W') : 'not computed'],
     ['Power source', supplyText],
-    ['Rule set', `${RULE_SETS[project.rf.spuriousRule].label}. ${GOVERNS} Sources: see the Sources section`],
+    ['Rule set', `${RULE_SETS[project.rf.spuriousRule].label}${part === 'organiser' ? '' : '. Sources: see the Sources section'}`],
     ['Rails', project.supply.rails.map((r) => r.name).join('; ') || 'none'],
     ['Kits in this build', String(project.kits)],
     ['Data date', `${opts.dataDate} (prices and results as computed then)`],
   ];
-  if (report.cost) {
+  if (report.cost && part === 'builder') {
+    // the builder sees what a kit costs; the build's totals and orders are on the organiser's pages
+    const c = report.cost;
+    if (c.totals.perKitCents !== null) rows.push(['Per kit', formatMoney(c.totals.perKitCents, c.currency)]);
+  } else if (report.cost) {
     const c = report.cost;
     rows.push(['Build total', `${formatMoney(c.totals.buildCents, c.currency)} incl. ${formatMoney(c.totals.shippingCents, c.currency)} shipping`]);
     if (c.totals.perKitCents !== null) rows.push(['Per kit', formatMoney(c.totals.perKitCents, c.currency)]);
     if (c.totals.unpricedLines > 0) rows.push(['Unpriced lines', `${c.totals.unpricedLines} (not in the totals)`]);
   } else rows.push(['Build total', 'not computed']);
   keyValues(l, rows);
+  packNotice(l);
 
   l.heading('Key results', 2, 40);
   const key: [string, string][] = [];
@@ -60,6 +67,14 @@ export function cover(l: Layout, project: Project, report: PackReport, opts: Pac
   const counted = actionable(report.findings);
   const sev = worstSeverity(counted);
   l.heading(`Worst findings (overall: ${sev === 'ok' ? 'OK' : sev})`, 2, 40);
-  if (sev === 'ok') l.text('OK: no check of this design fails or needs caution. Standing cautions are in the safety checklist.');
+  if (part === 'organiser') {
+    // the organiser's pages hold the parts and costs; the design's own findings are in the builder's pack
+    const buying = counted.filter((f) => f.rule.startsWith('cost.') || f.rule.startsWith('catalog.'));
+    l.text(`The design's checks are in the builder's pack (overall: ${sev === 'ok' ? 'OK' : sev}). Parts and cost findings:`, {
+      sizePt: 9,
+      afterPt: 4,
+    });
+    findingsList(l, buying, true, 8);
+  } else if (sev === 'ok') l.text('OK: no check of this design fails or needs caution. Standing cautions are in the safety checklist.');
   else findingsList(l, counted, true, 8);
 }
