@@ -127,6 +127,12 @@ function paUnknownFinding(stageName: string, refused: Finding[]): Finding {
   };
 }
 
+/**
+ * The corners the fixed-point passes read: the PA's nominal key-down trough (paRailVoltages), the low-mains
+ * key-down trough (lowestInputV, paRailCorners) and the high-mains key-down mean and no-load peak (paRailCorners).
+ */
+const LOOP_CORNERS = ['nominal-keyDown', 'low-keyDown', 'high-keyDown'] as const;
+
 /** PA rail voltages closer than this between passes count as settled (V). */
 const SETTLED_V = 0.005;
 const MAX_PASSES = 6;
@@ -174,9 +180,10 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   for (let pass = 0; project.supply.rails.length && pass < MAX_PASSES; pass++) {
     budget = computeBudget(project, computedLoads(project, paRailV), lowV);
     const budgetHigh = computeBudget(project, computedLoads(project, { ...paRailV, ...hotV }), lowV);
-    // the passes read only the corners: the reservoir and winding searches run once, below
+    // the passes read only these corners: the others, and the reservoir and winding searches, run once, below
     last = { outputA: railOutputs(budget), highMainsOutputA: railOutputs(budgetHigh) };
-    supply = evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA, searches: false });
+    const passOptions = { highMainsOutputA: last.highMainsOutputA, searches: false, cornerIds: LOOP_CORNERS };
+    supply = evaluateSupply(project, last.outputA, passOptions);
     const next = paRailVoltages(project, budget, supply);
     const nextLow = lowestInputV(project, supply);
     corners = paRailCorners(project, supply);

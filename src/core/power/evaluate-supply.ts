@@ -34,6 +34,8 @@ export interface SupplyOptions {
   highMainsOutputA?: Record<string, PerMode>;
   /** False: no reservoir or winding searches on rectified rails (see RectifiedContext.searches). Default true. */
   searches?: boolean;
+  /** Only these corners (CornerSpec ids), for a caller that reads no others; default all. */
+  cornerIds?: readonly string[];
 }
 
 const ZERO: PerMode = { receive: 0, keyUp: 0, keyDown: 0 };
@@ -65,7 +67,8 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   // Usable, not merely > 0: the primary current divides by the mains voltage (5e-324 V made it Infinity)
   const m0 = project.mains;
   const mainsOk = m0 !== null && usablePositive(m0.nominalV, 1) && usablePositive(m0.frequencyHz, 1);
-  const specs = cornerSpecs(project.mains, duty);
+  const wanted = options.cornerIds;
+  const specs = cornerSpecs(project.mains, duty).filter((s) => !wanted || wanted.includes(s.id));
   const rails = project.supply.rails;
   const globalFindings: Finding[] = [...inputs.findings];
   if (project.mains && !mainsOk) {
