@@ -80,17 +80,25 @@ describe.skipIf(!hasChromium)('guided start: template to a costed plan and the p
     await page.screenshot({ path: artifactPath('template-bom.png'), fullPage: true });
   });
 
-  it('downloads the builder pack for it', async () => {
+  it("downloads the organiser's and the builder's pack for it", async () => {
     await page.goto(`${projectUrl}/pack`);
-    const link = page.locator('a[href*="pack.pdf"]').first();
-    const [download] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), link.click()]);
-    const file = join(session.downloads, download.suggestedFilename() || 'pack.pdf');
-    await download.saveAs(file);
-    expect(readFileSync(file).subarray(0, 5).toString('latin1')).toBe('%PDF-');
-    if (PDFTOTEXT) {
-      const text = spawnSync(PDFTOTEXT, ['-layout', file, '-'], { encoding: 'utf8' }).stdout;
-      expect(text).toContain('Forty metre club rig');
-      expect(text).toContain('Millbrook Radio Parts');
+    await page.screenshot({ path: artifactPath('template-pack.png'), fullPage: true });
+    const fetchPack = async (label: string) => {
+      const [download] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.getByRole('link', { name: label }).click()]);
+      const file = join(session.downloads, download.suggestedFilename() || 'pack.pdf');
+      await download.saveAs(file);
+      expect(readFileSync(file).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+      return PDFTOTEXT ? spawnSync(PDFTOTEXT, ['-layout', file, '-'], { encoding: 'utf8' }).stdout : null;
+    };
+    const organiser = await fetchPack('Organiser’s pack, A4');
+    const builder = await fetchPack('Builder’s pack, A4');
+    if (organiser !== null && builder !== null) {
+      expect(organiser).toContain('Forty metre club rig');
+      // the template's invented suppliers are on the order sheets
+      expect(organiser).toContain('Order sheet');
+      expect(organiser).toContain('Millbrook Radio Parts');
+      expect(builder).toContain('Parts for one rig');
+      expect(builder).toContain('40 m low-pass filter');
     } else console.warn('[skip] PDF text check skipped: pdftotext not found on PATH (apt-get install poppler-utils).');
   });
 

@@ -21,22 +21,46 @@ const Section: FC<{ section: ChecklistSection }> = ({ section }) => (
   </div>
 );
 
+// [part, title, what its pages are]: the same split as the PDF's (src/pdf/pack.ts)
+const PACK_CHOICES: [string, string, (kits: number) => string][] = [
+  ['builder', 'Builder’s pack', () => 'parts for one rig (no prices), current budget, supply design, RF results, build and safety checklists, sources'],
+  ['organiser', 'Organiser’s pack', (kits) => `costed parts list and totals, order sheets per supplier${kits > 1 ? `, ${kits} packing sheets (one per kit)` : ''}`],
+  ['both', 'Both in one file', () => 'the organiser’s pages, then the builder’s'],
+];
+
 export const PackBody: FC<{ project: Project; build: ChecklistSection[]; safety: ChecklistSection[]; safetyPreamble: string }> = ({ project, build, safety, safetyPreamble }) => (
   <div id="pack">
     <section class="card">
-      <h1>Builder pack (PDF)</h1>
+      <h1>Builder and organiser packs (PDF)</h1>
       <p>
-        One PDF for each builder: a cover with the project summary, the costed parts list, {project.kits > 1 ? `${project.kits} packing sheets (one per kit), ` : ''}the current
-        budget, the supply design, the RF results, and the build and safety checklists below.
+        Each pack opens with a cover: the project summary, the key results and the one safety notice. Choose the pages for
+        who reads them:
       </p>
-      <p class="row">
-        <a class="button" href={`/projects/${project.id}/pack.pdf?paper=a4`} download>
-          Download PDF (A4)
-        </a>
-        <a class="button" href={`/projects/${project.id}/pack.pdf?paper=letter`} download>
-          Download PDF (US Letter)
-        </a>
-      </p>
+      <table class="grid pack-choice">
+        <thead>
+          <tr>
+            <th>Pack</th>
+            <th>Pages</th>
+            <th>Download</th>
+          </tr>
+        </thead>
+        <tbody>
+          {PACK_CHOICES.map(([part, title, pages]) => (
+            <tr>
+              <th scope="row">{title}</th>
+              <td>{pages(project.kits)}</td>
+              <td class="actions">
+                <a class="button" href={`/projects/${project.id}/pack.pdf?part=${part}&paper=a4`} download aria-label={`${title}, A4`}>
+                  A4
+                </a>{' '}
+                <a class="button" href={`/projects/${project.id}/pack.pdf?part=${part}&paper=letter`} download aria-label={`${title}, US Letter`}>
+                  US Letter
+                </a>
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
       <p class="hint">The pack is computed from the project as stored now; its pages carry today's date as the date of the data.</p>
     </section>
     <div class="columns">
