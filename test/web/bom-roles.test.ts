@@ -50,4 +50,11 @@ describe('parts the design needs', () => {
     expect(await bad.text()).toMatch(/no longer exists/);
     expect((await stored()).version).toBe(now.version);
   });
+
+  it('the catalog offers the category list and says which ratings a part’s category is checked with', async () => {
+    const html = await (await t.app.request(`http://localhost/projects/${ID}/parts`)).text();
+    const list = /<datalist id="part-categories">([\s\S]*?)<\/datalist>/.exec(html)![1];
+    for (const c of ['capacitor', 'resistor', 'transformer', 'relay', 'fuse', 'mosfet', 'heatsink', 'regulator', 'core', 'other']) expect(list).toContain(`value="${c}"`);
+    expect(html).toContain('Heatsink: thetaSaKPerW (K/W)');
+  });
 });

@@ -2,6 +2,7 @@
 import type { FC } from 'hono/jsx';
 import type { Offer, Part, Project } from '../../src/core/model';
 import { formValues, offerSpec, partSpec } from '../../src/core/spec';
+import { ratingKeysHelp } from '../../src/core/spec/parts-categories';
 import { FormErrors, type FieldState } from './fields';
 import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
@@ -34,7 +35,8 @@ export const PartFields: FC<{ state: FieldState; idp: string; help?: boolean }> 
   <>
     <SpecField spec={partSpec} k="description" idp={idp} state={state} size={56} hint={help ? undefined : ''} />
     <SpecField spec={partSpec} k="category" idp={idp} state={state} size={16} list="part-categories" />
-    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={48} hint={help ? undefined : ''} />
+    {/* the ratings the part's category is checked with (design roles), e.g. "Heatsink: thetaSaKPerW (K/W)" */}
+    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={48} hint={`${help ? `${partSpec.fields.ratings.help} · ` : ''}${ratingKeysHelp(state.values.category ?? '')}`} />
   </>
 );
 

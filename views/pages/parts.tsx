@@ -9,6 +9,7 @@ import { Version, hx } from '../components/supply-transformer';
 import { PartCard, PartFields, partValues } from '../components/parts-part';
 import { CostingCard, SuppliersCard } from '../components/parts-costing';
 import { EmptyState } from '../components/empty-state';
+import { PART_CATEGORIES } from '../../src/core/spec/parts-categories';
 
 export interface PartsBodyProps {
   project: Project;
@@ -21,7 +22,8 @@ export interface PartsBodyProps {
 export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPart }) => {
   const addState = stateFor('add-part', failed, () => partValues(null));
   const uses = (id: string) => project.bom.filter((l) => l.partId === id).length;
-  const categories = [...new Set(project.parts.map((p) => p.category).filter(Boolean))].sort();
+  // the category list the design roles read ratings by, then any other names the catalog uses
+  const categories = [...new Set([...PART_CATEGORIES.map((c) => c.id), ...project.parts.map((p) => p.category).filter(Boolean).sort()])];
   const suppliers = [...new Set([...project.costing.suppliers.map((s) => s.name), ...project.parts.flatMap((p) => p.offers.map((o) => o.supplier))])].sort();
   return (
     <div id="parts">
