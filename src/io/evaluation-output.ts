@@ -103,6 +103,7 @@ function supplyLines(report: EvaluationReport): string[] {
   for (const t of s.transformers) {
     out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard (sized for CW; ${t.tuneUpVA.toFixed(0)} VA with a continuous carrier), primary ${formatValue(t.primaryA, 'A')}`);
     for (const w of t.windings) if (w.paAtCheck) out.push(`    recommended ${w.windingName}: ${formatValue(w.paAtCheck.railV, 'V')} at low mains, key-down; ${w.paAtCheck.stageName} about ${formatValue(w.paAtCheck.outputW, 'W')} (fitted: ${formatValue(w.paAtCheck.fittedOutputW, 'W')})`);
+    for (const x of t.crossRegulation?.rails ?? []) out.push(`    together (shared primary), low mains: ${x.railName} ${formatValue(x.keyDownTroughV, 'V')} key-down, ${formatValue(x.keyUpTroughV, 'V')} key-up (alone ${formatValue(x.aloneTroughV, 'V')})`);
   }
   const h = report.heat;
   if (h) out.push(`  Heat inside: ${formatValue(h.totalW, 'W')} in CW use${h.riseK !== null ? `, rise ${formatValue(h.riseK, 'K')} (about ${formatValue(h.insideC, '°C')} inside)` : ' (enclosure not entered)'}`);
@@ -120,6 +121,8 @@ function rfLines(report: EvaluationReport): string[] {
   const out = ['', 'RF'];
   for (const st of rf.stages) {
     if (st.pa) out.push(`  ${st.stageName}: ${formatValue(st.pa.outputW, 'W')} out from ${formatValue(st.pa.railV, 'V')}, key-down ${formatValue(st.pa.keyDownCurrentA, 'A')}, drain peak ${formatValue(st.pa.peakDrainV, 'V')}`);
+    if (st.network) out.push(`    L network ${formatValue(st.network.drainOhm, 'ohm')} to ${formatValue(st.network.loadOhm, 'ohm')}: series ${formatValue(st.network.seriesH, 'H')}${st.network.turns !== null ? ` (${st.network.turns} turns)` : ''}, shunt ${formatValue(st.network.builtShuntF, 'F')}`);
+    if (st.choke) out.push(`    feed choke at least ${formatValue(st.choke.minInductanceH, 'H')}, ${formatValue(st.choke.currentA, 'A')} key-down`);
     const w = st.pa?.swr?.worstDrainPeak;
     if (w && st.pa?.swr && st.pa.swr.swr > 1) {
       out.push(`    at SWR ${st.pa.swr.swr}: drain peak up to ${formatValue(w.value, 'V')} into ${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '-' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} ohm (phase ${w.phaseDeg.toFixed(0)} deg), device current up to ${formatValue(st.pa.swr.worstPeakCurrent.value, 'A')}`);

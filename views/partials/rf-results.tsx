@@ -17,6 +17,7 @@ import { filterPlotSvg } from '../plots/filter-plot';
 import { keyingPlotSvg } from '../plots/keying-plot';
 import type { KeyingResult } from '../../src/core/rf/keying-eval';
 import type { CoreRealisation } from '../../src/core/rf/cores-check';
+import type { LNetwork, RfChoke } from '../../src/core/rf/output-network';
 import { PaSwrTable } from './pa-swr-table';
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
@@ -229,6 +230,27 @@ const RelayTable: FC<{ name: string; r: RelayResult }> = ({ name, r }) => (
   </div>
 );
 
+const OutputNetworkTable: FC<{ name: string; n: LNetwork | null; c: RfChoke | null }> = ({ name, n, c }) => (
+  <div class="rf-network">
+    <h3>{name}: output network and feed choke</h3>
+    <KV
+      rows={[
+        ...(n
+          ? [
+            ['L network', `${fv(n.drainOhm, 'Ω')} drain load to ${fv(n.loadOhm, 'Ω')}, Q ${n.q.toFixed(2)}; series inductor on the ${n.shuntAt === 'load' ? 'drain' : 'load'} side, shunt capacitor across the ${n.shuntAt} side`],
+            ['Series inductor', `${fv(n.seriesH, 'H')} ideal${n.turns !== null && n.builtSeriesH !== null ? `; ${n.turns} turns on the filter's core = ${fv(n.builtSeriesH, 'H')}` : '; no filter core to count turns on'}`],
+            ['Shunt capacitor', `${fv(n.shuntF, 'F')} ideal; fit ${n.capacitorPartsF.map((x) => fv(x, 'F', 2)).join(' ∥ ')} = ${fv(n.builtShuntF, 'F')}`],
+            ...(n.builtDrainReOhm !== null && n.builtDrainImOhm !== null
+              ? [['Drain load as built', `${fv(n.builtDrainReOhm, 'Ω')} ${n.builtDrainImOhm < 0 ? '−' : '+'} j${fv(Math.abs(n.builtDrainImOhm), 'Ω')}`] as [string, string]]
+              : []),
+          ] as [string, string][]
+          : []),
+        ...(c ? [['Feed choke', `at least ${fv(c.minInductanceH, 'H')} (reactance 10 × the drain load), carrying ${fv(c.currentA, 'A')} key-down`] as [string, string]] : []),
+      ]}
+    />
+  </div>
+);
+
 const ms = (s: number) => `${(s * 1e3).toFixed(1)} ms`;
 
 const KeyingTable: FC<{ name: string; k: KeyingResult }> = ({ name, k }) => (
@@ -387,7 +409,12 @@ export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
       </ul>
     ) : null}
     {report.stages.map((s) =>
-      s.pa ? <PaTable name={s.stageName} pa={s.pa} /> : s.lpf ? <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} /> : s.relay ? (
+      s.pa ? (
+        <>
+          <PaTable name={s.stageName} pa={s.pa} />
+          {s.network || s.choke ? <OutputNetworkTable name={s.stageName} n={s.network ?? null} c={s.choke ?? null} /> : null}
+        </>
+      ) : s.lpf ? <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} /> : s.relay ? (
         <>
           <RelayTable name={s.stageName} r={s.relay} />
           {s.keying ? <KeyingTable name={s.stageName} k={s.keying} /> : null}

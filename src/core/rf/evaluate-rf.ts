@@ -15,6 +15,7 @@ import { lineMaxima, evaluateRelay } from './tr-relay';
 import { fieldLabel } from './field-labels';
 import { evaluateKeying } from './keying-eval';
 import { realiseLpf } from './cores-check';
+import { designOutputNetwork, feedChoke } from './output-network';
 
 export interface RfContext {
   /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
@@ -106,7 +107,14 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         paPowerW = pa.outputW;
         paStressW = Math.max(pa.outputW, finite(pa.hotOutputW));
       }
-      stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, findings: sortFindings(pa.findings) });
+      // a single-ended stage: its L network (when a network sets the drain load) on the filter's core, and its feed choke
+      const single = !pa.refused && st.pa.topology === 'single-ended' && pa.primaryOhm > 0 && frequencyHz > 0;
+      const lp = lpfStageDef?.lpf;
+      const network = single && pa.turnsRatioSource === 'network'
+        ? designOutputNetwork(st.pa, pa.primaryOhm, frequencyHz, lp ? { alHPerTurn2: lp.coreAlHPerTurn2, series: lp.capacitorSeries, pairs: lp.allowParallelPairs } : null)
+        : null;
+      const choke = single ? feedChoke(pa.primaryOhm, frequencyHz, pa.keyDownCurrentA) : null;
+      stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, network, choke, findings: sortFindings(pa.findings) });
       if (st === paStage) paRefused = pa.refused;
       if (st === paStage && pa.refused) {
         // the stress checks below need a power: say that they take the target instead of the PA's (unknown) output

@@ -11,6 +11,7 @@ import type { PaResult } from './pa';
 import type { RelayResult } from './tr-relay';
 import type { KeyingResult } from './keying-eval';
 import type { CoreRealisation } from './cores-check';
+import type { LNetwork, RfChoke } from './output-network';
 
 export interface LpfStageResult {
   /** Field errors of the filter parameters (design/analysis null when not empty). */
@@ -36,6 +37,9 @@ export interface RfStageResult {
   lpf: LpfStageResult | null;
   /** Relay results (kind 'tr'). */
   relay: RelayResult | null;
+  /** PA (kind 'final'): the L network of a single-ended stage matched by a network, and its drain feed choke. */
+  network?: LNetwork | null;
+  choke?: RfChoke | null;
   /** Keyed spectrum of a T/R stage (kind 'tr'; null or absent when no edges are entered or its data is refused). */
   keying?: KeyingResult | null;
   /** This stage's findings, most severe first. */

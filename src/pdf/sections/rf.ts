@@ -89,6 +89,14 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       ], 110, 8.5);
     }
     if (s.keying) keying(l, s.stageName, s.keying);
+    const n = s.network;
+    if (n || s.choke) {
+      l.heading(`${s.stageName}: output network and feed choke`, 2);
+      keyValues(l, [
+        ...(n ? [['L network', `${fv(n.drainOhm, 'Ω')} to ${fv(n.loadOhm, 'Ω')}, Q ${n.q.toFixed(2)}: series ${fv(n.seriesH, 'H')}${n.turns !== null && n.builtSeriesH !== null ? ` (${n.turns} turns on the filter's core, ${fv(n.builtSeriesH, 'H')})` : ''}, shunt ${n.capacitorPartsF.map((x) => fv(x, 'F', 2)).join(' ∥ ')} across the ${n.shuntAt} side`] as [string, string]] : []),
+        ...(s.choke ? [['Feed choke', `at least ${fv(s.choke.minInductanceH, 'H')}, carrying ${fv(s.choke.currentA, 'A')} key-down`] as [string, string]] : []),
+      ], 110, 8.5);
+    }
   }
   harmonics(l, rf);
   exposure(l, rf);
