@@ -50,9 +50,9 @@ export function keyingPlotSvg(title: string, k: KeyingResult, widthPx = 720, hei
   const ly = heightPx - 14;
   const legend: [string, string][] = [
     ['<line x1="9" x2="9" y1="-6" y2="6" stroke="#1f5f99" />', 'spectral lines'],
-    ['<rect x="0" y="-6" width="18" height="10" fill="#cfe8d5" />', 'necessary bandwidth (K = 5), one side'],
-    ['<line x1="0" x2="18" y1="0" y2="0" stroke="#7a5cc7" stroke-dasharray="5 4" />', '99 % occupied, one side'],
-    ['<path d="M4 -5 L14 -5 L9 4 Z" fill="#d9822b" />', 'key clicks (strongest line beyond)'],
+    ['<rect x="0" y="-6" width="18" height="10" fill="#cfe8d5" />', 'necessary bandwidth, K = 5'],
+    ['<line x1="0" x2="18" y1="0" y2="0" stroke="#7a5cc7" stroke-dasharray="5 4" />', '99 % occupied'],
+    ['<path d="M4 -5 L14 -5 L9 4 Z" fill="#d9822b" />', 'key clicks'],
   ];
   let lx = m.l;
   for (const [sym, text] of legend) {
