@@ -2,8 +2,8 @@
 // (differences marked in words), and sweep the PA rail's reservoir, with screenshots. Plain GET forms throughout.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { hasChromium, openSession, artifactPath, CHROMIUM_PATH, type BrowserSession } from '../helpers/browser';
-import type { RunningServer } from '../helpers/server';
+import { hasChromium, openSession, launchBrowser, artifactPath, CHROMIUM_PATH, type BrowserSession } from '../helpers/browser';
+import { startServer, type RunningServer } from '../helpers/server';
 
 if (!hasChromium) console.warn(`Browser tests skipped: ${CHROMIUM_PATH} is missing (apt-get install chromium).`);
 
@@ -76,5 +76,42 @@ describe.skipIf(!hasChromium)('variants and sweep in the browser', () => {
     const again = page.locator('form#sweep-paLoadOhm');
     expect(await again.locator('input[name="from"]').inputValue()).toBe('lots');
     expect(await again.locator('.error').first().innerText()).toContain('From (PA load)');
+  });
+});
+
+describe.skipIf(!hasChromium)('variants and sweep without JavaScript', () => {
+  let server: RunningServer;
+  let browser: Awaited<ReturnType<typeof launchBrowser>>;
+  let page: Page;
+
+  beforeAll(async () => {
+    server = await startServer();
+    browser = await launchBrowser();
+    page = await browser.context.newPage();
+    const cdp = await browser.context.newCDPSession(page);
+    await cdp.send('Emulation.setScriptExecutionDisabled', { value: true });
+  }, 120_000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.stop();
+    server?.cleanup();
+  });
+
+  it('clone as variant, compare and sweep all work as plain forms', async () => {
+    await page.goto(server.url + '/');
+    expect(await page.evaluate(() => 'htmx' in window)).toBe(false);
+    await page.locator('form[action="/projects/demo-portable-20m/variant"] button').click();
+    await page.waitForURL(/\/\?notice=/);
+    await page.locator('tr', { hasText: 'Variant of Portable' }).first().getByRole('link', { name: 'Compare' }).click();
+    await page.waitForURL(/\/compare\?p1=demo-portable-20m&p2=/);
+    expect(await page.locator('table.compare-table tbody tr').count()).toBeGreaterThan(5);
+    await page.goto(server.url + '/projects/demo-portable-20m/sweep');
+    const form = page.locator('form#sweep-lpfOrder');
+    await form.getByRole('button', { name: 'Sweep' }).click();
+    await page.waitForURL(/param=lpfOrder/);
+    // 3 to 9: the odd orders 3, 5, 7, 9
+    expect(await page.locator('table.sweep-table tbody th').allInnerTexts()).toEqual(['3', '5', '7', '9']);
+    await page.screenshot({ path: artifactPath('sweep-no-js.png'), fullPage: true });
   });
 });

@@ -52,7 +52,8 @@ export function projectMetrics(project: Project, report: EvaluationReport): Metr
     const r = report.supply?.rails.find((x) => x.railId === rail.id);
     const m = r ? railTroughMargin(r) : { value: null, why: 'left out of the supply design (see its findings)' };
     const what = r?.kind === 'regulated' ? 'regulator headroom above dropout' : 'trough margin above its minimum';
-    out.push({ key: `trough:${rail.name}`, label: `${rail.name}: ${what}, key-down, worst mains`, unit: 'V', better: 'higher', margin: true, ...m });
+    const worst = project.mains ? 'worst mains' : 'battery at its end voltage';
+    out.push({ key: `trough:${rail.name}`, label: `${rail.name}: ${what}, key-down, ${worst}`, unit: 'V', better: 'higher', margin: true, ...m });
   }
 
   const trafos = report.supply?.transformers ?? [];
