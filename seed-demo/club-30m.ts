@@ -66,7 +66,7 @@ const stages: Stage[] = [
     notes: 'Five-element filter on two iron-powder toroids; 500 V C0G/silver-mica capacitors.',
     loads: [],
     dissipationW: null,
-    lpf: { ...defaultLpf(), coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2, core: { ...SAMPLE_CORES.iron12.core } },
+    lpf: { ...defaultLpf(), coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2, core: { ...SAMPLE_CORES.iron12.core }, capacitorRatedV: 500 },
   },
   {
     id: 'st-tr',

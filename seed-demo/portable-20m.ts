@@ -78,7 +78,7 @@ export const portable20m: Project = {
       },
     },
     { id: 'p-lpf', kind: 'lpf', name: '20 m low-pass filter', notes: '', loads: [], dissipationW: null, lpf: { ...defaultLpf(), order: 7, seed: 7, coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2,
-      core: { ...SAMPLE_CORES.iron12.core, wireDiameterM: 0.6e-3 } } },
+      core: { ...SAMPLE_CORES.iron12.core, wireDiameterM: 0.6e-3 }, capacitorRatedV: 100 } },
     {
       id: 'p-tr',
       kind: 'tr',

@@ -176,6 +176,7 @@ export interface LpfParams {
   monteCarloTrials: number;
   seed: number;
   core?: ToroidCore | null; // the inductors' core, for flux, fit and resonance; null/absent = not entered
+  capacitorRatedV?: number | null; // the filter capacitors' voltage rating, V; null/absent = not checked
 }
 
 /** A toroidal core as entered on the filter: dimensions, material data and the wire wound on it (SI; null = not given). */

@@ -51,7 +51,13 @@ const dims = (c: ToroidCore | null | undefined) =>
     ? toroidEffective(c.outerDiameterM, c.innerDiameterM, c.heightM)
     : null;
 
-export function realiseLpf(d: LpfDesign, core: ToroidCore | null | undefined, powerW: number, swr: number, subject: string) {
+/** Share of a capacitor's voltage rating an RF peak may use before a caution. */
+// Common practice, no published source: keep RF peaks within about 70 % of a capacitor's working voltage
+const CAPACITOR_DERATING = 0.7;
+
+export function realiseLpf(
+  d: LpfDesign, core: ToroidCore | null | undefined, powerW: number, swr: number, subject: string, capacitorRatedV: number | null = null,
+) {
   const f0 = d.operatingFrequencyHz;
   const stress = elementStress(d, f0, powerW, swrCircle(d.r0Ohm, swr));
   const geo = dims(core);
@@ -89,6 +95,14 @@ export function realiseLpf(d: LpfDesign, core: ToroidCore | null | undefined, po
     } else {
       const selfResonanceHz = resonanceHz(CAPACITOR_LEAD_INDUCTANCE_H, e.builtValue);
       capacitors.push({ index: e.index, capacitanceF: e.builtValue, rmsV: s.rmsV, peakV: Math.SQRT2 * s.rmsV, rmsA: s.rmsA, selfResonanceHz });
+      const peakV = Math.SQRT2 * s.rmsV;
+      if (capacitorRatedV !== null) {
+        const sev = peakV > capacitorRatedV ? 'fail' : peakV > CAPACITOR_DERATING * capacitorRatedV ? 'caution' : 'ok';
+        findings.push({ severity: sev, rule: 'lpf.capacitor-rating', subject: `${subject}: C${e.index}`, value: peakV, limit: capacitorRatedV, unit: 'V', source: 'lpf.capacitor-rating',
+          message: sev === 'ok'
+            ? `${peakV.toFixed(0)} V RF peak at the worst load against its ${capacitorRatedV} V rating.`
+            : `${peakV.toFixed(0)} V RF peak at the worst load ${sev === 'fail' ? 'exceeds' : 'uses more than 70 % of'} its ${capacitorRatedV} V rating: use a capacitor rated higher.` });
+      }
       if (selfResonanceHz < topHz) {
         findings.push({ severity: 'caution', rule: 'core.self-resonance', subject: `${subject}: C${e.index}`, value: selfResonanceHz, limit: topHz, unit: 'Hz', source: 'core.self-resonance',
           message: `With about ${CAPACITOR_LEAD_INDUCTANCE_H * 1e9} nH of lead this capacitor resonates near ${mhz(selfResonanceHz)}, below the ${HIGHEST_HARMONIC}th harmonic (${mhz(topHz)}): keep its leads very short or use a chip part.` });

@@ -72,7 +72,7 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   f.push({ severity: 'caution', kind: 'standing', rule: 'lpf.capacitor-voltage', subject: s, value: capacitorPeakV, limit: null, unit: 'V', source: 'line.standing-wave',
     message: `Shunt capacitors can see about ${capacitorPeakV.toFixed(0)} V peak at SWR ${swr}; use RF-rated (silver-mica or C0G) parts rated well above it.` });
   // the parts themselves: element stress at the most RF the PA delivers into the worst SWR, core flux, fit, resonance
-  const real = realiseLpf(design, p.core, powerW, swr, s);
+  const real = realiseLpf(design, p.core, powerW, swr, s, p.capacitorRatedV ?? null);
   f.push(...real.findings);
   return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW, realisation: real.realisation }, findings: f };
 }

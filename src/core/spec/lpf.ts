@@ -29,6 +29,9 @@ export const lpfSpec = defineSpec({
       example: '4.9',
       help: 'per turn²; a data sheet’s µH per 100 turns is taken as typed, e.g. 49 µH/100t',
     }),
+    capacitorRatedV: optNum('Capacitor voltage rating', 'V', U.V, 0, 100_000, null, {
+      form: 'capRatedV', exclusiveMin: true, example: '500', help: 'the filter capacitors’ working voltage; empty = not checked',
+    }),
     'core.outerDiameterM': coreDim('Core outer diameter', 'coreOd', '12.7'),
     'core.innerDiameterM': coreDim('Core inner diameter', 'coreId', '7.7'),
     'core.heightM': coreDim('Core height', 'coreHeight', '4.8'),

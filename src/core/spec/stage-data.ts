@@ -44,7 +44,7 @@ export const STAGE_DATA: readonly StageData[] = [
       ['response', 'rippleDb', 'order', 'form', 'cutoffHz'],
       ['capacitorSeries', 'allowParallelPairs', 'coreName', 'coreAlHPerTurn2'],
       ['core.outerDiameterM', 'core.innerDiameterM', 'core.heightM', 'core.wireDiameterM'],
-      ['core.fluxLimitT', 'core.minFrequencyHz', 'core.maxFrequencyHz'],
+      ['core.fluxLimitT', 'core.minFrequencyHz', 'core.maxFrequencyHz', 'capacitorRatedV'],
       ['inductorQ', 'capacitorQ', 'capacitorTolerance', 'inductorTolerance', 'monteCarloTrials', 'seed'],
     ],
   },

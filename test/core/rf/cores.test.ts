@@ -119,3 +119,19 @@ describe('realisation on the page', () => {
     expect(html).toContain('Self-resonance');
   });
 });
+
+describe('capacitor voltage rating', () => {
+  const d = designLpf(lpfParams(), 7.03e6);
+  if (!d.ok) throw new Error('fixture filter should design');
+  it('the RF peak across each capacitor against the rating: fail above, caution above 70 %, none without a rating', () => {
+    const r = realiseLpf(d.value, core, 100, 2, 'LPF', 100);
+    const peak = Math.max(...r.realisation.capacitors.map((c) => c.peakV));
+    const worst = r.findings.filter((f) => f.rule === 'lpf.capacitor-rating').find((f) => f.value === peak)!;
+    // 100 W at SWR 2 on 50 Ω: the line's maximum is √(100 × 50 × 2) × √2 = 141 V peak (line theory), above 100 V
+    expect(peak).toBeGreaterThan(100);
+    expect(worst.severity).toBe('fail');
+    const mid = realiseLpf(d.value, core, 100, 2, 'LPF', peak / 0.8);
+    expect(mid.findings.find((f) => f.rule === 'lpf.capacitor-rating' && f.value === peak)!.severity).toBe('caution');
+    expect(realiseLpf(d.value, core, 100, 2, 'LPF').findings.some((f) => f.rule === 'lpf.capacitor-rating')).toBe(false);
+  });
+});
