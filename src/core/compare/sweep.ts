@@ -122,3 +122,13 @@ export function runSweep(p: Project, req: SweepRequest, evaluateFn: (p: Project)
   });
   return { ok: true, result: { parameter: req.parameter, label: SWEEP_LABELS[req.parameter], target, points } };
 }
+
+/** A starting range around the item's value for the sweep form (the builder edits it); inside the field's range. */
+export function sweepStart(parameter: SweepParameter, currentValue: number, field: { min: number; max: number }): { from: number; to: number; points: number } {
+  if (parameter === 'lpfOrder') return { from: 3, to: 9, points: 4 };
+  // Common practice, no published source: ±15 % covers mains tolerance; a factor of 2 either way shows a part's trend
+  const [lo, hi] = parameter === 'mainsV' || parameter === 'windingV' ? [0.85, 1.15] : [0.5, 2];
+  const clamp = (v: number) => Math.min(field.max, Math.max(field.min, v));
+  const round = (v: number) => Number(v.toPrecision(2));
+  return { from: clamp(round(currentValue * lo)), to: clamp(round(currentValue * hi)), points: 7 };
+}

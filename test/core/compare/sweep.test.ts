@@ -1,7 +1,7 @@
 // Sweeps on the demos: the direction each figure must move is hand reasoning from the demos' own inputs (cited
 // beside each check); no expected number comes from running the program. The inputs' spec refuses bad values by name.
 import { describe, expect, it } from 'vitest';
-import { runSweep, sweepTargets, sweepValues, withSweepValue, type SweepResult } from '../../../src/core/compare/sweep';
+import { runSweep, sweepStart, sweepTargets, sweepValues, withSweepValue, type SweepResult } from '../../../src/core/compare/sweep';
 import { projectMetrics } from '../../../src/core/compare/metrics';
 import { evaluate } from '../../../src/core/evaluate';
 import { SWEEP_SPECS, SWEEP_PARAMETERS, MAX_SWEEP_POINTS } from '../../../src/core/spec/sweep';
@@ -32,6 +32,14 @@ describe('sweep values and targets', () => {
     expect(sweepTargets(club30m, 'reservoirF')[0]).toMatchObject({ id: 'rail-pa', currentValue: 0.0068 });
     expect(sweepTargets(club30m, 'lpfOrder')[0]).toMatchObject({ id: 'st-lpf', currentValue: 5 });
     expect(sweepTargets(portable20m, 'mainsV')).toEqual([]);
+  });
+
+  it('starts the form round the item’s value, inside its field’s range', () => {
+    // 6800 µF × 0.5 and × 2; 120 V × 0.85 = 102 → 100 and × 1.15 = 138 → 140 (two significant digits)
+    expect(sweepStart('reservoirF', 0.0068, { min: 0, max: 10 })).toEqual({ from: 0.0034, to: 0.0136, points: 7 });
+    expect(sweepStart('mainsV', 120, { min: 50, max: 300 })).toEqual({ from: 100, to: 140, points: 7 });
+    // 280 V × 1.15 = 322 → 320, above the 300 V top of the mains field: held at 300
+    expect(sweepStart('mainsV', 280, { min: 50, max: 300 }).to).toBe(300);
   });
 
   it('edits a copy only, under its own id', () => {
