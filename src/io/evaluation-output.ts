@@ -103,6 +103,7 @@ function supplyLines(report: EvaluationReport): string[] {
   for (const t of s.transformers) {
     out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard (sized for CW; ${t.tuneUpVA.toFixed(0)} VA with a continuous carrier), primary ${formatValue(t.primaryA, 'A')}`);
     for (const w of t.windings) if (w.paAtCheck) out.push(`    recommended ${w.windingName}: ${formatValue(w.paAtCheck.railV, 'V')} at low mains, key-down; ${w.paAtCheck.stageName} about ${formatValue(w.paAtCheck.outputW, 'W')} (fitted: ${formatValue(w.paAtCheck.fittedOutputW, 'W')})`);
+    for (const x of t.crossRegulation?.rails ?? []) out.push(`    together (shared primary), low mains: ${x.railName} ${formatValue(x.keyDownTroughV, 'V')} key-down, ${formatValue(x.keyUpTroughV, 'V')} key-up (alone ${formatValue(x.aloneTroughV, 'V')})`);
   }
   const h = report.heat;
   if (h) out.push(`  Heat inside: ${formatValue(h.totalW, 'W')} in CW use${h.riseK !== null ? `, rise ${formatValue(h.riseK, 'K')} (about ${formatValue(h.insideC, '°C')} inside)` : ' (enclosure not entered)'}`);

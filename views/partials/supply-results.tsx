@@ -257,6 +257,33 @@ const TransformerCard: FC<{ t: TransformerReport }> = ({ t }) => (
         </p>
       ) : null,
     )}
+    {t.crossRegulation ? (
+      <table class="grid">
+        <caption>
+          Windings simulated together, the primary ({fv(t.crossRegulation.primaryOhm, 'Ω')}) shared, at low mains ({fv(t.crossRegulation.mainsV, 'V')})
+        </caption>
+        <thead>
+          <tr>
+            <th scope="col">Rail</th>
+            <th class="num">Trough alone</th>
+            <th class="num">Together, key down</th>
+            <th class="num">Together, key up</th>
+            <th class="num">Needed</th>
+          </tr>
+        </thead>
+        <tbody>
+          {t.crossRegulation.rails.map((x) => (
+            <tr>
+              <th scope="row">{x.railName}</th>
+              <td class="num">{fv(x.aloneTroughV, 'V')}</td>
+              <td class="num">{fv(x.keyDownTroughV, 'V')}</td>
+              <td class="num">{fv(x.keyUpTroughV, 'V')}</td>
+              <td class="num">{x.requiredMinV > 0 ? fv(x.requiredMinV, 'V') : '—'}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    ) : null}
   </div>
 );
 

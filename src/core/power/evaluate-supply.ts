@@ -13,6 +13,7 @@ import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
 import { batteryCurve, batteryCurveFindings } from './battery-curve';
 import { inrushFindings, inrushReport } from './inrush';
+import { crossRegulation } from './cross-regulation';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
 import { primaryFaultChecks, primaryFaultFindings, railsReported } from './primary-fault';
@@ -206,8 +207,11 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   for (const t of project.supply.transformers) {
     if (unsized.includes(t)) continue;
     const tr = transformerReport(t, windingRecs.get(t.id) ?? [], options.standardVA);
-    transformers.push(tr.report);
-    globalFindings.push(...tr.findings);
+    // all its windings simulated together (the last pass only: evaluate()'s earlier passes skip the searches)
+    const rectified = rails.filter((r): r is RectifiedRail => r.kind === 'rectified');
+    const cr = mainsOk && options.searches !== false ? crossRegulation(t, rectified, reports, budget, project.mains!) : null;
+    transformers.push({ ...tr.report, crossRegulation: cr?.report ?? null });
+    globalFindings.push(...tr.findings, ...(cr?.findings ?? []));
   }
 
   let primary: PrimaryReport | null = null;

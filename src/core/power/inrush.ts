@@ -67,16 +67,30 @@ export function meltI2tFloor(sheet: FuseSheet, ratedA: number): number {
 
 const DIODES_IN_PATH = { bridge: 2, 'centre-tap': 1, 'half-wave': 1 } as const;
 
+/** Nameplate VA: the sum of rated V x rated A over the windings. */
+export function nameplateVA(t: Transformer): number {
+  return t.windings.reduce((s, w) => s + Math.max(0, w.ratedVrms * w.ratedA), 0);
+}
+
+/**
+ * Primary resistance (Ω) from the windings' regulation figures, with PRIMARY_COPPER_SHARE of the copper loss in the
+ * primary. Copper loss at full load = reg x VA (resistive regulation: I² R = reg V I), reg VA-weighted over the
+ * windings; I_p² R_p = share x reg x VA with I_p = VA / V_p gives R_p = share x reg x V_p² / VA.
+ */
+export function primaryOhmFromRegulation(t: Transformer, mainsNominalV: number): number {
+  const va = nameplateVA(t);
+  if (!(va > 0)) return 0;
+  const reg = t.windings.reduce((s, w) => s + Math.max(0, w.regulationFraction) * w.ratedVrms * w.ratedA, 0) / va;
+  return (PRIMARY_COPPER_SHARE * reg * mainsNominalV ** 2) / va;
+}
+
 /** One transformer's switch-on inrush at high mains. */
 export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains: Mains): InrushTransformer {
   const highV = mains.nominalV * (1 + Math.max(0, mains.highFraction));
   const periodS = 1 / mains.frequencyHz;
-  const ratedVA = t.windings.reduce((s, w) => s + Math.max(0, w.ratedVrms * w.ratedA), 0);
+  const ratedVA = nameplateVA(t);
   const ratedPrimaryA = ratedVA / mains.nominalV;
-  // VA-weighted regulation; copper loss at full load = reg x VA (resistive regulation: I² R = reg V I)
-  const reg = ratedVA > 0 ? t.windings.reduce((s, w) => s + w.regulationFraction * w.ratedVrms * w.ratedA, 0) / ratedVA : 0;
-  // I_p² R_p = share x reg x VA with I_p = VA / V_p  =>  R_p = share x reg x V_p² / VA
-  const primaryOhm = ratedVA > 0 ? (PRIMARY_COPPER_SHARE * reg * mains.nominalV ** 2) / ratedVA : 0;
+  const primaryOhm = primaryOhmFromRegulation(t, mains.nominalV);
   const boundA = primaryOhm > 0 ? (Math.SQRT2 * highV) / primaryOhm : Infinity;
   const magnetisingPeakA = Math.min(INRUSH_MULTIPLE[t.construction] * ratedPrimaryA, boundA);
   // Half-sine pulse over a half-cycle, ∫ = I² T/4, each cycle's peak r times the last: sum 1 / (1 - r²).

@@ -8,6 +8,7 @@ import type { RectifierWaveform } from './rectifier-sim';
 import type { ThermalResult } from '../thermal/junction';
 import type { BatteryCurveResult } from './battery-curve';
 import type { InrushReport } from './inrush';
+import type { CrossRegulation } from './cross-regulation';
 
 /** Which load a corner applies: a mode, the duty-weighted thermal load, or a continuous tune-up carrier. */
 export type CornerLoad = Mode | 'thermal' | 'tuneUp';
@@ -355,6 +356,9 @@ export interface TransformerReport {
   standardVA: number | null;
   /** Primary RMS current at the worst continuous key-down corner, referred by turns ratio (A). */
   primaryA: number;
+  /** Its rectified rails simulated together with the primary shared (low mains, key-down and key-up); null with
+   * fewer than two such rails, absent where not computed (evaluate()'s earlier fixed-point passes). */
+  crossRegulation?: CrossRegulation | null;
 }
 
 export interface PrimaryReport {

@@ -16,7 +16,8 @@ export function supplySection(l: Layout, supply: SupplyReport | null, heat: Heat
     const rows: Row[] = t.windings.map((w) => ({ cells: [w.windingName, fv(w.minimumRatedV, 'V'), fv(w.standardRatedV, 'V'), fv(w.ratedA, 'A'), fv(w.tuneUpRmsA, 'A'), fv(w.va, 'VA')] }));
     l.table([{ header: 'Winding', width: 0.3 }, { header: 'Min. rated', width: 0.14, align: 'right' }, { header: 'Standard', width: 0.14, align: 'right' }, { header: 'Rated current', width: 0.14, align: 'right' }, { header: 'Tune-up RMS', width: 0.14, align: 'right' }, { header: 'VA', width: 0.14, align: 'right' }], rows);
     keyValues(l, [['Transformer VA', `${fv(t.thermalVA, 'VA')} at the thermal load → ${t.standardVA !== null ? fv(t.standardVA, 'VA') + ' standard' : 'beyond the standard list'} (${fv(t.tuneUpVA, 'VA')} with a continuous carrier)`], ['Primary current', fv(t.primaryA, 'A')],
-      ...t.windings.filter((w) => w.paAtCheck).map((w): [string, string] => [`Recommended ${w.windingName}`, `${fv(w.paAtCheck!.railV, 'V')} at low mains, key-down: ${w.paAtCheck!.stageName} about ${fv(w.paAtCheck!.outputW, 'W')} (fitted winding ${fv(w.paAtCheck!.fittedOutputW, 'W')})`])]);
+      ...t.windings.filter((w) => w.paAtCheck).map((w): [string, string] => [`Recommended ${w.windingName}`, `${fv(w.paAtCheck!.railV, 'V')} at low mains, key-down: ${w.paAtCheck!.stageName} about ${fv(w.paAtCheck!.outputW, 'W')} (fitted winding ${fv(w.paAtCheck!.fittedOutputW, 'W')})`]),
+      ...(t.crossRegulation?.rails ?? []).map((x): [string, string] => [`${x.railName}, together`, `${fv(x.keyDownTroughV, 'V')} key-down, ${fv(x.keyUpTroughV, 'V')} key-up at low mains with the primary shared (alone ${fv(x.aloneTroughV, 'V')})`])]);
   }
   if (supply.primary) {
     const f = supply.primary.fuse;

@@ -15,7 +15,7 @@ const hasNgspice = requireTool(NGSPICE, 'Shared-primary cross-checks against ngs
 
 // Tolerances (named with units)
 const toleranceMeanFraction = 0.005; // DC mean, 0.5 %
-const toleranceTroughV = 0.08; // trough, 80 mV
+const toleranceTroughV = 0.02; // trough, 20 mV
 
 // A two-winding 66 VA transformer on 120 V at low mains (108 V): 16 V 1 A (regulation 10 %) and 20 V 2.5 A (8 %).
 // Common-practice split (half the copper loss in the primary): R_own = 0.5 x reg x V / I (0.8 and 0.32 ohm);
@@ -78,5 +78,45 @@ describe('cross-regulation', () => {
     const up0 = simulateSharedPrimary({ ...joint(0.05), primaryOhm: 0 }).rails[0].troughV;
     const down0 = simulateSharedPrimary({ ...joint(2.2), primaryOhm: 0 }).rails[0].troughV;
     expect(Math.abs(down0 - up0)).toBeLessThan(1e-3);
+  });
+});
+
+describe.skipIf(!hasNgspice)('the club demo: its two windings together, against ngspice and the issue figure', () => {
+  it('low-mains key-down troughs match an ngspice run of the same circuit; the raw rail near the 17.78 V reported', async () => {
+    const { evaluate } = await import('../../../src/core/evaluate');
+    const { DEMO_PROJECTS } = await import('../../../seed-demo/index');
+    const p = DEMO_PROJECTS[0];
+    const r = evaluate(p);
+    const t = p.supply.transformers[0];
+    const cr = r.supply!.transformers[0].crossRegulation!;
+    expect(cr.converged).toBe(true);
+    // the same circuit written out by hand from the project's data and the stated split (half the copper in the primary)
+    const va = t.windings.reduce((s, w) => s + w.ratedVrms * w.ratedA, 0);
+    const reg = t.windings.reduce((s, w) => s + w.regulationFraction * w.ratedVrms * w.ratedA, 0) / va;
+    const low = 1 - p.mains!.lowFraction;
+    const windings: JointWinding[] = cr.rails.map((x) => {
+      const rail = p.supply.rails.find((y) => y.id === x.railId)!;
+      if (rail.kind !== 'rectified') throw new Error('not rectified');
+      const w = t.windings.find((y) => y.id === rail.windingId)!;
+      const rep = r.supply!.rails.find((y) => y.railId === x.railId)!;
+      if (rep.kind !== 'rectified') throw new Error('not rectified');
+      return {
+        topology: rail.topology, secondaryVrms: w.ratedVrms * (1 + w.regulationFraction) * low,
+        ownOhm: 0.5 * (w.regulationFraction * w.ratedVrms) / w.ratedA, diodeDropV: rail.diodeDropV,
+        diodeResistanceOhm: rail.diodeResistanceOhm, capacitanceF: rail.reservoirF, esrOhm: rail.esrOhm,
+        loadA: rep.outputA.keyDown, bleederOhm: rail.bleederOhm,
+      };
+    });
+    const input: JointInput = { primaryVrms: p.mains!.nominalV * low, primaryOhm: (0.5 * reg * p.mains!.nominalV ** 2) / va, frequencyHz: p.mains!.frequencyHz, windings };
+    const sp = runNgspice(sharedPrimaryNetlist(input, 80), windings.length);
+    cr.rails.forEach((x, i) => {
+      expect(Math.abs(x.keyDownTroughV - sp.vmin[i]), `${x.railName}: ${x.keyDownTroughV} vs ${sp.vmin[i]}`).toBeLessThanOrEqual(toleranceTroughV);
+      expect(x.keyDownTroughV).toBeLessThan(x.keyUpTroughV);
+    });
+    // Issue 12 (an independent ngspice run, shared primary with half the copper loss, no leakage): the raw rail
+    // sags to 17.78 V at PA key-down against 18.17 V alone; the loads and reservoir node differ slightly: 0.2 V
+    const raw = cr.rails.find((x) => x.railId === 'rail-raw')!;
+    expect(Math.abs(raw.keyDownTroughV - 17.78)).toBeLessThan(0.2);
+    expect(raw.aloneTroughV).toBeCloseTo(18.17, 1);
   });
 });
