@@ -9,6 +9,9 @@ import { stageData, type StageData } from '../../src/core/spec/stage-data';
 import { loadCurrentFields, loadFormName, stageFormValues } from '../../src/core/spec/stage';
 import { SpecField } from '../components/spec-fields';
 import { REMOVE_LOAD } from '../../src/core/edits/stage-loads';
+import { NEW_RAIL, NEW_RAIL_FORM } from '../../src/core/edits/rail-in-place';
+import { addRailSpec } from '../../src/core/spec/supply';
+import { sourceOptions } from './supply';
 
 const Hidden: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
 
@@ -67,36 +70,50 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
         <h3>Current drawn from each rail</h3>
         {railOptions.length === 0 ? (
           <p class="hint">
-            This project has no rails yet: add them on the <a href={`/projects/${project.id}/supply`}>Supply</a> page first.
+            This project has no rails yet: choose "(a new rail, named below)" for the row and say what feeds it, or set up
+            the supply on the <a href={`/projects/${project.id}/supply`}>Supply</a> page.
           </p>
-        ) : (
-          <table class="grid compact">
-            <thead>
+        ) : null}
+        <table class="grid compact">
+          <thead>
+            <tr>
+              <th>Rail</th>
+              {MODES.map((m) => (
+                <th>
+                  {MODE_LABELS[m]} ({loadCurrentFields[`currentA.${m}`].display.symbol})
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {Array.from({ length: loadRows }, (_, i) => (
               <tr>
-                <th>Rail</th>
+                <td>
+                  <Select
+                    name={loadFormName(i, 'railId')}
+                    label="Rail"
+                    state={general}
+                    options={[
+                      i < stage.loads.length ? [REMOVE_LOAD, '(remove this load)'] : ['', '(add a load…)'],
+                      ...railOptions,
+                      ...(i < stage.loads.length ? [] : [[NEW_RAIL, '(a new rail, named below)'] as [string, string]]),
+                    ]}
+                  />
+                </td>
                 {MODES.map((m) => (
-                  <th>
-                    {MODE_LABELS[m]} ({loadCurrentFields[`currentA.${m}`].display.symbol})
-                  </th>
+                  <td>
+                    <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} state={general} size={8} hint="" />
+                  </td>
                 ))}
               </tr>
-            </thead>
-            <tbody>
-              {Array.from({ length: loadRows }, (_, i) => (
-                <tr>
-                  <td>
-                    <Select name={loadFormName(i, 'railId')} label="Rail" state={general} options={[i < stage.loads.length ? [REMOVE_LOAD, '(remove this load)'] : ['', '(add a load…)'], ...railOptions]} />
-                  </td>
-                  {MODES.map((m) => (
-                    <td>
-                      <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} state={general} size={8} hint="" />
-                    </td>
-                  ))}
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        )}
+            ))}
+          </tbody>
+        </table>
+        <div class="row new-rail-in-place" aria-label="New rail for the new row">
+          <SpecField spec={addRailSpec} k="name" name={NEW_RAIL_FORM.name} label="New rail (for a row set to it): name" state={general} idp="nr" size={22} />
+          <SpecField spec={addRailSpec} k="source" name={NEW_RAIL_FORM.source} state={general} idp="nr" options={sourceOptions(project)} />
+          <span class="hint">Added with typical values when the stage is saved; set its parts on the Supply page.</span>
+        </div>
         <p class="hint">Currents are in mA: 350 means 350 mA; 1.2 A, 350m or 0.35 A are read as written; an empty box means none drawn. Choose "(remove this load)" to drop a row.</p>
       </FormShell>
       {own ? <DataForm project={project} stage={stage} data={own.data} state={stateFor(own.data.key, failed, () => formValues(own.data.spec, own.value))} rails={railOptions} /> : null}

@@ -24,7 +24,8 @@ export interface SupplyBodyProps {
   openRail?: string;
 }
 
-function sourceOptions(p: Project): [string, string][] {
+/** The sources a new rail can be fed from (also offered where a stage's load row creates a rail). */
+export function sourceOptions(p: Project): [string, string][] {
   const w = p.supply.transformers.flatMap((t) => t.windings.map((x): [string, string] => [`w:${x.id}`, `Rectified from ${t.name} · ${x.name}`]));
   const r = p.supply.rails.map((x): [string, string] => [`r:${x.id}`, `Regulated from ${x.name}`]);
   return [...w, ...r, ['battery', 'Battery (or external DC source)']];

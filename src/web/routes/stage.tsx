@@ -11,6 +11,8 @@ import { projectEdit, doneNotice, type ChangeResult } from '../edit';
 import { sendPage, sendPartial, formValues, isHtmx } from '../render';
 import type { Deps } from '../deps';
 import { readLoads } from '../../core/edits/stage-loads';
+import { railInPlace } from '../../core/edits/rail-in-place';
+import { newId } from '../ids';
 import { stageSchema, stageValues } from '../stage-forms';
 import { STAGE_DATA, missingRefs } from '../../core/spec/stage-data';
 import { formValues as specText } from '../../core/spec/derive';
@@ -111,8 +113,12 @@ export function stageRoutes(deps: Deps) {
     return sendPage(c, page(p, c)(undefined, doneNotice(c)));
   });
 
-  const saveStage = edit('stage', z.record(z.string(), z.string()), (p, values, c) => {
-    const general = parseForm(stageSchema, values);
+  const saveStage = edit('stage', z.record(z.string(), z.string()), (before, typedValues, c) => {
+    const general = parseForm(stageSchema, typedValues);
+    // a load row may choose a new rail, named and fed as the form says: it is added with the stage
+    const placed = railInPlace(before, typedValues, newId('rail'));
+    if (!placed.ok) return { errors: { ...(general.ok ? {} : general.errors), ...placed.errors } };
+    const { project: p, values } = placed;
     const loads = parseLoads(p, values);
     const errors = { ...(general.ok ? {} : general.errors), ...('errors' in loads ? loads.errors : {}) };
     if (!general.ok || 'errors' in loads) return { errors };
