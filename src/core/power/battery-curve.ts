@@ -32,13 +32,26 @@ export interface CellCurve {
 // Lead-acid 2.0 V nominal, 1.75 V/cell end at the 20-hour rate, falling steadily. Li-ion (NMC / LCO) 3.6-3.7 V
 // nominal, 3.0 V cut-off, sloping. NiMH 1.2 V nominal, 1.0 V/cell end, flat near 1.2 V.
 export const CELL_CURVES: Record<Exclude<BatteryChemistry, 'external'>, CellCurve> = {
-  LiFePO4: { nominalV: 3.2, endV: 2.5, fullRestV: 3.4, points: [[0, 3.45], [0.05, 3.35], [0.1, 3.32], [0.3, 3.3], [0.5, 3.29], [0.7, 3.27], [0.9, 3.2], [0.95, 3.05], [1, 2.5]] },
-  'lead-acid': { nominalV: 2.0, endV: 1.75, fullRestV: 2.13, points: [[0, 2.12], [0.1, 2.08], [0.3, 2.04], [0.5, 2.0], [0.7, 1.96], [0.9, 1.9], [1, 1.75]] },
-  'Li-ion': { nominalV: 3.6, endV: 3.0, fullRestV: 4.15, points: [[0, 4.15], [0.1, 4.0], [0.3, 3.85], [0.5, 3.72], [0.7, 3.62], [0.9, 3.45], [1, 3.0]] },
-  NiMH: { nominalV: 1.2, endV: 1.0, fullRestV: 1.38, points: [[0, 1.38], [0.05, 1.3], [0.2, 1.25], [0.5, 1.22], [0.8, 1.18], [0.9, 1.14], [1, 1.0]] },
+  LiFePO4: {
+    nominalV: 3.2, endV: 2.5, fullRestV: 3.4,
+    points: [[0, 3.45], [0.05, 3.35], [0.1, 3.32], [0.3, 3.3], [0.5, 3.29], [0.7, 3.27], [0.9, 3.2], [0.95, 3.05],
+      [1, 2.5]],
+  },
+  'lead-acid': {
+    nominalV: 2.0, endV: 1.75, fullRestV: 2.13,
+    points: [[0, 2.12], [0.1, 2.08], [0.3, 2.04], [0.5, 2.0], [0.7, 1.96], [0.9, 1.9], [1, 1.75]],
+  },
+  'Li-ion': {
+    nominalV: 3.6, endV: 3.0, fullRestV: 4.15,
+    points: [[0, 4.15], [0.1, 4.0], [0.3, 3.85], [0.5, 3.72], [0.7, 3.62], [0.9, 3.45], [1, 3.0]],
+  },
+  NiMH: {
+    nominalV: 1.2, endV: 1.0, fullRestV: 1.38,
+    points: [[0, 1.38], [0.05, 1.3], [0.2, 1.25], [0.5, 1.22], [0.8, 1.18], [0.9, 1.14], [1, 1.0]],
+  },
 };
 
-/** The plateau is the mean over this part of the discharge (depth of discharge). Common practice, no published source. */
+/** The plateau is the mean over this part of the discharge (depth of discharge). Common practice, no source. */
 export const PLATEAU_FROM = 0.1;
 export const PLATEAU_TO = 0.9;
 
@@ -64,11 +77,13 @@ export function cellVoltageAt(curve: CellCurve, depth: number): number {
 export function meanCellV(curve: CellCurve, from: number, to: number): number {
   const xs = [from, ...curve.points.map(([d]) => d).filter((d) => d > from && d < to), to];
   let area = 0;
-  for (let i = 1; i < xs.length; i++) area += ((cellVoltageAt(curve, xs[i - 1]) + cellVoltageAt(curve, xs[i])) / 2) * (xs[i] - xs[i - 1]);
+  for (let i = 1; i < xs.length; i++) {
+    area += ((cellVoltageAt(curve, xs[i - 1]) + cellVoltageAt(curve, xs[i])) / 2) * (xs[i] - xs[i - 1]);
+  }
   return area / (to - from);
 }
 
-/** Depth at which the cell voltage first falls to v (the curve only falls); 1 when it never does, 0 when it starts below. */
+/** Depth where the cell voltage first falls to v (the curve only falls); 1 if it never does, 0 if it starts below. */
 export function depthAtCellV(curve: CellCurve, v: number): number {
   const p = curve.points;
   if (p[0][1] <= v) return 0;
@@ -106,7 +121,9 @@ export interface BatteryCurveResult {
  * runtime to the point where the loaded voltage reaches the stop voltage. null for an external supply, an unknown
  * chemistry, or a nominal voltage that is not a whole number of cells (within 5 %, common practice, no source).
  */
-export function batteryCurve(b: BatteryRail, keyDownA: number, averageA: number, requiredMinV: number): BatteryCurveResult | null {
+export function batteryCurve(
+  b: BatteryRail, keyDownA: number, averageA: number, requiredMinV: number,
+): BatteryCurveResult | null {
   if (!isChemistry(b.chemistry) || b.chemistry === 'external') return null;
   const curve = CELL_CURVES[b.chemistry];
   const cells = Math.round(b.nominalV / curve.nominalV);
@@ -135,19 +152,34 @@ export function batteryCurveFindings(b: BatteryRail, c: BatteryCurveResult | nul
   if (!c) {
     if (!isChemistry(b.chemistry) || b.chemistry === 'external') return [];
     const cellV = CELL_CURVES[b.chemistry].nominalV;
-    return [{ ...base, severity: 'caution', rule: 'battery.curve', value: b.nominalV, limit: cellV, unit: 'V',
-      message: `${subject}: ${b.nominalV} V nominal is not a whole number of ${cellV} V ${b.chemistry} cells, so no discharge curve is used; check the chemistry or the nominal voltage.` }];
+    return [{
+      ...base, severity: 'caution', rule: 'battery.curve', value: b.nominalV, limit: cellV, unit: 'V',
+      message: `${subject}: ${b.nominalV} V nominal is not a whole number of ${cellV} V ${b.chemistry} cells, ` +
+        'so no discharge curve is used; check the chemistry or the nominal voltage.',
+    }];
   }
   const out: Finding[] = [];
+  const v = (x: number) => `${x.toFixed(2)} V`;
   // 2 % below the chemistry's cut-off. Common practice, no published source
   if (b.endV < c.chemistryEndV * 0.98) {
-    out.push({ ...base, severity: 'caution', rule: 'battery.deep-discharge', value: b.endV, limit: c.chemistryEndV, unit: 'V',
-      message: `${subject}: the end voltage ${b.endV.toFixed(2)} V (${(b.endV / c.cells).toFixed(2)} V a cell) is below the ${c.chemistryEndV.toFixed(2)} V common for ${c.cells} ${b.chemistry} cells; discharging that far can damage them: raise the end voltage or fit a low-voltage cut-off.` });
+    out.push({
+      ...base, severity: 'caution', rule: 'battery.deep-discharge', value: b.endV, limit: c.chemistryEndV, unit: 'V',
+      message: `${subject}: the end voltage ${v(b.endV)} (${v(b.endV / c.cells)} a cell) is below the ` +
+        `${v(c.chemistryEndV)} common for ${c.cells} ${b.chemistry} cells; discharging that far can damage them: ` +
+        'raise the end voltage or fit a low-voltage cut-off.',
+    });
   }
   const hours = (s: number) => (s / 3600).toFixed(1);
   const short = c.usedFraction < b.usableFraction - 0.05;
-  out.push({ ...base, severity: short ? 'caution' : 'ok', rule: 'battery.curve-runtime', value: c.runtimeS, limit: flatRuntimeS, unit: 's',
-    message: `${subject}: on the ${b.chemistry} curve the battery sits near ${c.plateauV.toFixed(2)} V (${c.loadedPlateauV.toFixed(2)} V under key-down) for most of the charge; the loads run until ${c.stopV.toFixed(2)} V, ${Math.round(c.usedFraction * 100)} % of the capacity: about ${hours(c.runtimeS)} h` +
-      (short ? `, not the ${hours(flatRuntimeS)} h from the ${Math.round(b.usableFraction * 100)} % usable you entered: the loads stop before the battery is flat.` : '.') });
+  const usable = Math.round(b.usableFraction * 100);
+  out.push({
+    ...base, severity: short ? 'caution' : 'ok', rule: 'battery.curve-runtime',
+    value: c.runtimeS, limit: flatRuntimeS, unit: 's',
+    message: `${subject}: on the ${b.chemistry} curve the battery sits near ${v(c.plateauV)} ` +
+      `(${v(c.loadedPlateauV)} under key-down) for most of the charge; the loads run until ${v(c.stopV)}, ` +
+      `${Math.round(c.usedFraction * 100)} % of the capacity: about ${hours(c.runtimeS)} h` +
+      (short ? `, not the ${hours(flatRuntimeS)} h from the ${usable} % usable you entered: ` +
+        'the loads stop before the battery is flat.' : '.'),
+  });
   return out;
 }

@@ -19,12 +19,19 @@ export function withBatteryPa(supply: SupplyReport | null, project: Project, rf:
     if (!stage || !pa || pa.refused) return r;
     const plateauOutputW = outputAtRailW(pa.outputW, pa.railV, pa.saturationV, r.curve.loadedPlateauV);
     if (!Number.isFinite(plateauOutputW)) return r;
-    const out = { stageName: stage.name, plateauRailV: r.curve.loadedPlateauV, plateauOutputW, endRailV: pa.lowRailV, endOutputW: pa.lowOutputW };
+    const out = {
+      stageName: stage.name, plateauRailV: r.curve.loadedPlateauV, plateauOutputW,
+      endRailV: pa.lowRailV, endOutputW: pa.lowOutputW,
+    };
     // 1 dB, as for the PA's own target check
     const dbOff = target > 0 ? 10 * Math.log10(Math.max(plateauOutputW, 1e-12) / target) : 0;
     findings.push({
-      severity: Math.abs(dbOff) > 1 ? 'caution' : 'ok', rule: 'battery.pa-output', subject: stage.name, value: plateauOutputW, limit: target, unit: 'W', source: 'supply.battery-pa',
-      message: `For most of the charge (${r.railName} on its ${r.curve.chemistry} plateau, ${out.plateauRailV.toFixed(2)} V under key-down) ${stage.name} gives about ${plateauOutputW.toFixed(1)} W (${dbOff.toFixed(1)} dB from the ${target} W target); near the end (${out.endRailV.toFixed(2)} V) about ${out.endOutputW.toFixed(1)} W.`,
+      severity: Math.abs(dbOff) > 1 ? 'caution' : 'ok', rule: 'battery.pa-output', subject: stage.name,
+      value: plateauOutputW, limit: target, unit: 'W', source: 'supply.battery-pa',
+      message: `For most of the charge (${r.railName} on its ${r.curve.chemistry} plateau, ` +
+        `${out.plateauRailV.toFixed(2)} V under key-down) ${stage.name} gives about ${plateauOutputW.toFixed(1)} W ` +
+        `(${dbOff.toFixed(1)} dB from the ${target} W target); near the end (${out.endRailV.toFixed(2)} V) ` +
+        `about ${out.endOutputW.toFixed(1)} W.`,
     });
     return { ...r, pa: out };
   });

@@ -31,7 +31,10 @@ export interface CrossRegulation {
 }
 
 /** null when fewer than two designed rectified rails hang on the transformer (nothing is shared). */
-export function crossRegulation(t: Transformer, rails: RectifiedRail[], reports: Map<string, RailReport>, budget: (id: string) => PerMode, mains: Mains): { report: CrossRegulation; findings: Finding[] } | null {
+export function crossRegulation(
+  t: Transformer, rails: RectifiedRail[], reports: Map<string, RailReport>,
+  budget: (id: string) => PerMode, mains: Mains,
+): { report: CrossRegulation; findings: Finding[] } | null {
   const on = rails.flatMap((r) => {
     const w = t.windings.find((x) => x.id === r.windingId);
     const rep = reports.get(r.id);
@@ -47,8 +50,11 @@ export function crossRegulation(t: Transformer, rails: RectifiedRail[], reports:
     diodeDropV: r.diodeDropV, diodeResistanceOhm: r.diodeResistanceOhm, capacitanceF: r.reservoirF, esrOhm: r.esrOhm,
     loadA: budget(r.id)[mode], bleederOhm: r.bleederOhm,
   }));
-  // 1000 steps a cycle: within 20 mV of ngspice on the club demo (test/core/power/shared-primary.test.ts), half the time
-  const run = (mode: 'keyDown' | 'keyUp') => simulateSharedPrimary({ primaryVrms: mains.nominalV * f, primaryOhm, frequencyHz: mains.frequencyHz, windings: windings(mode), stepsPerCycle: 1000 });
+  // 1000 steps a cycle: within 20 mV of ngspice on the club demo (test/core/power/shared-primary.test.ts)
+  const run = (mode: 'keyDown' | 'keyUp') => simulateSharedPrimary({
+    primaryVrms: mains.nominalV * f, primaryOhm, frequencyHz: mains.frequencyHz, windings: windings(mode),
+    stepsPerCycle: 1000,
+  });
   const down = run('keyDown');
   const up = run('keyUp');
   const out: CrossRegulationRail[] = on.map(({ r, w, rep }, i) => ({
@@ -57,14 +63,25 @@ export function crossRegulation(t: Transformer, rails: RectifiedRail[], reports:
     keyDownTroughV: down.rails[i].troughV, keyUpTroughV: up.rails[i].troughV,
   }));
   const report = { primaryOhm, mainsV: mains.nominalV * f, converged: down.converged && up.converged, rails: out };
-  const base = { rule: 'transformer.cross-regulation', subject: t.name, unit: 'V', source: 'supply.shared-primary' as const };
+  const base = {
+    rule: 'transformer.cross-regulation', subject: t.name, unit: 'V', source: 'supply.shared-primary' as const,
+  };
+  const v = (x: number) => `${x.toFixed(2)} V`;
+  const shared = `${primaryOhm.toFixed(1)} Ω`;
   const findings: Finding[] = out.filter((x) => x.requiredMinV > 0 && x.keyDownTroughV < x.requiredMinV).map((x) => ({
     ...base, severity: 'caution' as const, value: x.keyDownTroughV, limit: x.requiredMinV,
-    message: `With ${t.name}'s windings sharing the primary (${primaryOhm.toFixed(1)} Ω), at low mains with the key down the ${x.railName} falls to ${x.keyDownTroughV.toFixed(2)} V (${x.aloneTroughV.toFixed(2)} V simulated alone), below the ${x.requiredMinV.toFixed(2)} V its loads need: a higher winding voltage or a larger transformer.`,
+    message: `With ${t.name}'s windings sharing the primary (${shared}), at low mains with the key down the ` +
+      `${x.railName} falls to ${v(x.keyDownTroughV)} (${v(x.aloneTroughV)} simulated alone), below the ` +
+      `${v(x.requiredMinV)} its loads need: a higher winding voltage or a larger transformer.`,
   }));
   if (!findings.length) {
-    const words = out.map((x) => `${x.railName} ${x.keyDownTroughV.toFixed(2)} V (${x.aloneTroughV.toFixed(2)} V alone, ${x.keyUpTroughV.toFixed(2)} V key-up)`).join('; ');
-    findings.push({ ...base, severity: 'ok', value: null, limit: null, message: `Simulated together with the primary shared (${primaryOhm.toFixed(1)} Ω), at low mains with the key down: ${words}; every rail still has the voltage its loads need.` });
+    const words = out.map((x) =>
+      `${x.railName} ${v(x.keyDownTroughV)} (${v(x.aloneTroughV)} alone, ${v(x.keyUpTroughV)} key-up)`);
+    findings.push({
+      ...base, severity: 'ok', value: null, limit: null,
+      message: `Simulated together with the primary shared (${shared}), at low mains with the key down: ` +
+        `${words.join('; ')}; every rail still has the voltage its loads need.`,
+    });
   }
   return { report, findings };
 }

@@ -52,7 +52,7 @@ export interface InrushReport {
   fuseMeltI2t: number;
   /** The same for a quick-acting (F, sheet 2) fuse of the same rating (A² s). */
   quickMeltI2t: number;
-  /** Cold resistance of an NTC soft-start that keeps the resistance-limited peak to NTC_TARGET_MULTIPLE x rated (Ω). */
+  /** Cold resistance of an NTC soft-start keeping the resistance-limited peak to NTC_TARGET_MULTIPLE x rated (Ω). */
   ntcOhm: number;
 }
 
@@ -106,7 +106,8 @@ export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains:
       const rOhm = windingResistanceOhm(w) + n * r.diodeResistanceOhm + Math.max(0, r.esrOhm);
       const k = noLoadVrms(w) / mains.nominalV; // turns ratio secondary / primary
       if (!(rOhm > 0) || !(r.reservoirF > 0)) continue;
-      // Source: RC charge from a step (switched at the mains peak, the worst case): i = V/R e^(-t/RC), ∫ i² = V² C / (2R)
+      // Source: RC charge from a step (switched at the mains peak, the worst case): i = V/R e^(-t/RC),
+      // ∫ i² dt = V² C / (2R)
       chargingPeakA += k * (v / rOhm);
       // reflected by the turns ratio: the primary current is k x the secondary, so I²t scales by k²
       chargingRootI2t += Math.sqrt(k ** 2 * ((v ** 2 * r.reservoirF) / (2 * rOhm)));
@@ -118,8 +119,10 @@ export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains:
   };
 }
 
-/** All transformers switched on together behind the primary fuse (fuseA, taken as T sheet 3 as the primary checks do). */
-export function inrushReport(transformers: Transformer[], rails: RectifiedRail[], mains: Mains, fuseA: number): InrushReport {
+/** All transformers switched on together behind the primary fuse (fuseA, taken as T sheet 3 as elsewhere). */
+export function inrushReport(
+  transformers: Transformer[], rails: RectifiedRail[], mains: Mains, fuseA: number,
+): InrushReport {
   const parts = transformers.map((t) => transformerInrush(t, rails, mains));
   // Switched at a voltage zero the magnetising inrush is worst (full flux offset) and the reservoirs charge gently
   // with the rising sine; switched at a peak the reservoirs take the step and the core has no offset. The worse of
@@ -135,21 +138,41 @@ export function inrushReport(transformers: Transformer[], rails: RectifiedRail[]
   const primaryOhm = parts.length ? 1 / parts.reduce((s, p) => s + (p.primaryOhm > 0 ? 1 / p.primaryOhm : 0), 0) : 0;
   const highV = mains.nominalV * (1 + Math.max(0, mains.highFraction));
   // resistance-limited peak sqrt(2) V / (R_NTC + R_p) = target  =>  R_NTC = sqrt(2) V / target - R_p
-  const ntcOhm = ratedA > 0 ? Math.max(0, (Math.SQRT2 * highV) / (NTC_TARGET_MULTIPLE * ratedA) - (Number.isFinite(primaryOhm) ? primaryOhm : 0)) : 0;
-  return { transformers: parts, peakA, i2t, fuseA, sheet: 'T3', fuseMeltI2t: meltI2tFloor('T3', fuseA), quickMeltI2t: meltI2tFloor('F2', fuseA), ntcOhm };
+  const rpOhm = Number.isFinite(primaryOhm) ? primaryOhm : 0;
+  const ntcOhm = ratedA > 0 ? Math.max(0, (Math.SQRT2 * highV) / (NTC_TARGET_MULTIPLE * ratedA) - rpOhm) : 0;
+  return {
+    transformers: parts, peakA, i2t, fuseA, sheet: 'T3',
+    fuseMeltI2t: meltI2tFloor('T3', fuseA), quickMeltI2t: meltI2tFloor('F2', fuseA), ntcOhm,
+  };
 }
 
 export function inrushFindings(r: InrushReport): Finding[] {
-  const base = { rule: 'fuse.inrush', subject: 'Primary fuse', value: r.i2t, limit: r.fuseMeltI2t, unit: 'A²s', source: 'supply.inrush-fuse' as const };
+  const base = {
+    rule: 'fuse.inrush', subject: 'Primary fuse', value: r.i2t, limit: r.fuseMeltI2t, unit: 'A²s',
+    source: 'supply.inrush-fuse' as const,
+  };
   const fuse = `T${r.fuseA < 1 ? `${Math.round(r.fuseA * 1000)}mA` : `${Number(r.fuseA.toPrecision(3))}A`}`;
-  const what = `Switch-on inrush (the worse of magnetising inrush and reservoir charging) peaks near ${r.peakA.toFixed(1)} A with about ${r.i2t.toFixed(2)} A²s; the ${fuse} primary fuse melts from about ${r.fuseMeltI2t.toFixed(2)} A²s`;
-  const quick = r.i2t > PULSE_SHARE * r.quickMeltI2t ? ' Keep it time-lag (T): a quick-acting (F) fuse of that rating would not survive it.' : '';
+  const what = 'Switch-on inrush (the worse of magnetising inrush and reservoir charging) peaks near ' +
+    `${r.peakA.toFixed(1)} A with about ${r.i2t.toFixed(2)} A²s; the ${fuse} primary fuse melts from about ` +
+    `${r.fuseMeltI2t.toFixed(2)} A²s`;
+  const quick = r.i2t > PULSE_SHARE * r.quickMeltI2t
+    ? ' Keep it time-lag (T): a quick-acting (F) fuse of that rating would not survive it.'
+    : '';
   const ntc = `an NTC thermistor of about ${r.ntcOhm.toFixed(0)} Ω cold in the primary, or a soft-start relay`;
+  const share = `${Math.round(PULSE_SHARE * 100)} %`;
   if (r.i2t > r.fuseMeltI2t) {
-    return [{ ...base, severity: 'caution', message: `${what}: it may blow at switch-on. Fit ${ntc}, or a larger time-lag fuse only if it still clears the primary faults.${quick} Mains wiring must follow your local electrical code.` }];
+    return [{
+      ...base, severity: 'caution',
+      message: `${what}: it may blow at switch-on. Fit ${ntc}, or a larger time-lag fuse only if it still clears the ` +
+        `primary faults.${quick} Mains wiring must follow your local electrical code.`,
+    }];
   }
   if (r.i2t > PULSE_SHARE * r.fuseMeltI2t) {
-    return [{ ...base, severity: 'caution', message: `${what}: more than ${Math.round(PULSE_SHARE * 100)} % of it, so repeated switching ages the fuse until it blows one day. Fit ${ntc}.${quick}` }];
+    return [{
+      ...base, severity: 'caution',
+      message: `${what}: more than ${share} of it, so repeated switching ages the fuse until it blows one day. ` +
+        `Fit ${ntc}.${quick}`,
+    }];
   }
-  return [{ ...base, severity: 'ok', message: `${what}: the inrush stays within ${Math.round(PULSE_SHARE * 100)} % of it.${quick}` }];
+  return [{ ...base, severity: 'ok', message: `${what}: the inrush stays within ${share} of it.${quick}` }];
 }

@@ -97,7 +97,9 @@ function currents(ws: W[], v: Float64Array, vs: number, rp: number, out: Float64
 }
 
 /** Reservoir voltages' rate of change (V/s) at one instant. */
-function slope(ws: W[], v: Float64Array, vs: number, rp: number, buf: Float64Array, on: Uint8Array, dv: Float64Array): void {
+function slope(
+  ws: W[], v: Float64Array, vs: number, rp: number, buf: Float64Array, on: Uint8Array, dv: Float64Array,
+): void {
   currents(ws, v, vs, rp, buf, on);
   for (let i = 0; i < ws.length; i++) {
     const w = ws[i];
