@@ -13,8 +13,8 @@ import { withBatteryPa } from './power/battery-pa';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
-import { checkProjectInputs } from './spec/project-check';
 import { checkRoles, designRoles, type DesignRole, type RoleStatus } from './roles';
+import { checkProjectInputs } from './spec/project-check';
 import { mainsCornerFindings } from './rules/rule-set';
 
 export interface EvaluationReport {
@@ -28,9 +28,9 @@ export interface EvaluationReport {
   /** parts on the parts list checked against the computed design: the roles' rating checks, unbound roles, and
    * reservoir capacitors matched by capacitance on rails whose reservoir role has no bound line */
   catalog: Finding[];
-  /** PA rail voltage used for the PA model, per rail id (V): nominal-mains key-down trough when simulated */
   /** the parts the design needs, each with its requirement, and the state of the line bound to it */
   roles: { list: DesignRole[]; statuses: RoleStatus[] };
+  /** PA rail voltage used for the PA model, per rail id (V): nominal-mains key-down trough when simulated */
   paRailV: Record<string, number>;
   /** every finding of every section, most severe first */
   findings: Finding[];
