@@ -13,20 +13,25 @@ import type { Project } from '../../../src/core/model';
 // each template's own typical output (its summary on the form says the range)
 const TYPICAL_W: Record<TemplateKey, number> = { 'mains-two-rail': 20, 'battery-portable': 5, 'single-rail': 5, 'amplifier-only': 20 };
 
-function build(key: TemplateKey, frequencyHz: number, mainsKey: string): Project {
+function build(key: TemplateKey, frequencyHz: number, mainsKey: string, powerW = TYPICAL_W[key]): Project {
   let n = 0;
   const mains = TEMPLATE_INFO[key].mains ? MAINS_PRESETS[mainsKey]! : null;
-  return projectFromTemplate(key, { name: `t ${key}`, frequencyHz, targetPowerW: TYPICAL_W[key], mains }, 'prj-t', (p) => `${p}-${n++}`);
+  return projectFromTemplate(key, { name: `t ${key}`, frequencyHz, targetPowerW: powerW, mains }, 'prj-t', (p) => `${p}-${n++}`);
 }
 
-const CASES = TEMPLATE_KEYS.flatMap((key) =>
-  // 40 m on both common mains, and 20 m on 230 V (the filter and crystal follow the band)
-  ([[7.03e6, '230-50'], [7.03e6, '120-60'], [14.06e6, '230-50']] as const).map(([hz, m]) => ({ key, hz, m })),
-);
+// the new-project form's default output (the target output spec's default), which a hurried user keeps
+const FORM_DEFAULT_W = 5;
+
+const CASES = TEMPLATE_KEYS.flatMap((key) => [
+  // 40 m on both common mains, and 20 m on 230 V (the filter and crystal follow the band), at the typical output
+  ...([[7.03e6, '230-50'], [7.03e6, '120-60'], [14.06e6, '230-50']] as const).map(([hz, m]) => ({ key, hz, m, w: TYPICAL_W[key] })),
+  // and 40 m at the form's default output
+  { key, hz: 7.03e6, m: '230-50', w: FORM_DEFAULT_W },
+]);
 
 describe('station templates', () => {
-  it.each(CASES)('$key at $hz Hz on $m: stored values pass, no fail finding, every line priced', ({ key, hz, m }) => {
-    const p = build(key, hz, m);
+  it.each(CASES)('$key at $hz Hz, $w W on $m: stored values pass, no fail finding, every line priced', ({ key, hz, m, w }) => {
+    const p = build(key, hz, m, w);
     expect(checkProjectInputs(p)).toEqual([]);
     const report = evaluate(p);
     const fails = report.findings.filter((f) => f.severity === 'fail').map((f) => `${f.rule}: ${f.subject}: ${f.message}`);
