@@ -102,6 +102,16 @@ describe.skipIf(!hasChromium)('guided start: template to a costed plan and the p
     } else console.warn('[skip] PDF text check skipped: pdftotext not found on PATH (apt-get install poppler-utils).');
   });
 
+  it('the template choice works from the keyboard (arrow keys move between the radio buttons)', async () => {
+    await page.goto(server.url + '/');
+    await page.locator('#tpl-mains-two-rail').focus();
+    await page.keyboard.press('ArrowDown');
+    expect(await page.locator('#tpl-battery-portable').isChecked()).toBe(true);
+    await page.keyboard.press('ArrowDown');
+    expect(await page.locator('#tpl-single-rail').isChecked()).toBe(true);
+    expect(await page.locator('#tpl-mains-two-rail').isChecked()).toBe(false);
+  });
+
   it(`took fewer than ${SUBMISSION_GOAL} form submissions (here: create, then one settings edit)`, () => {
     expect(submissions).toBe(2);
     expect(submissions).toBeLessThan(SUBMISSION_GOAL);
