@@ -31,9 +31,34 @@ export function projectFromTemplate(key: TemplateKey, input: TemplateInput, id: 
     supply: station.supply,
     stages: station.stages,
     parts: used.map((p) => structuredClone(catalog[p]!)),
-    bom: station.lines.map((l, i) => ({ id: `bl-${i}`, stageId: l.stageId, partId: l.partId, qtyPerRig: l.qty, refs: l.refs, notes: l.notes ?? '' })),
+    bom: station.lines.map((l, i) => ({
+      id: `bl-${i}`,
+      stageId: l.stageId,
+      partId: l.partId,
+      qtyPerRig: l.qty,
+      refs: l.refs,
+      notes: l.notes ?? '',
+      roleId: l.role ?? null,
+    })),
     costing: { ...base.costing, suppliers: structuredClone(STARTER_SUPPLIERS) },
   };
   // fresh ids for every row, as a clone gets, so two projects from one template never share one
-  return cloneProject(project, id, input.name, makeId);
+  const copy = cloneProject(project, id, input.name, makeId);
+  return { ...copy, bom: copy.bom.map((l) => ({ ...l, roleId: l.roleId ? renamedRole(l.roleId, idMap(project, copy)) : null })) };
+}
+
+/** Old id -> new id of every transformer, rail and stage (the clone keeps their order). */
+function idMap(from: Project, to: Project): Map<string, string> {
+  const pairs = (a: { id: string }[], b: { id: string }[]) => a.map((x, i): [string, string] => [x.id, b[i]!.id]);
+  return new Map([
+    ...pairs(from.supply.transformers, to.supply.transformers),
+    ...pairs(from.supply.rails, to.supply.rails),
+    ...pairs(from.stages, to.stages),
+  ]);
+}
+
+/** A role id is "<kind>:<design id>" or a bare kind ("fuses"): its design id follows the clone's new ids. */
+function renamedRole(roleId: string, ids: Map<string, string>): string {
+  const at = roleId.indexOf(':');
+  return at < 0 ? roleId : `${roleId.slice(0, at + 1)}${ids.get(roleId.slice(at + 1)) ?? roleId.slice(at + 1)}`;
 }

@@ -39,14 +39,15 @@ export function starterParts(crystalHz: number): Record<string, Part> {
     part('tp-fuse', 'Fuse 5 × 20 mm, time-lag (T), 250 V, rating per supply page', 'fuse', { type: 'T' }, [
       offer(A, 'MR-F520T', [[10, 38], [100, 24]], 10),
     ]),
-    part('tp-trafo-2', 'Mains transformer, two secondaries (16 V 1 A + 20 V 2.5 A), laminated, 70 VA', 'transformer', { va: 70 }, [
+    part('tp-trafo-2', 'Mains transformer, two secondaries (16 V 1 A + 20 V 2.5 A), laminated, 70 VA', 'transformer',
+      { va: 70, sec1V: 16, sec1A: 1, sec2V: 20, sec2A: 2.5 }, [
       offer(A, 'MR-TR2-70', [[1, 3390], [10, 2850]]),
       offer(B, 'EG-4470', [[1, 3550]]),
     ]),
-    part('tp-trafo-1', 'Mains transformer, one secondary 15 V 2 A, laminated, 30 VA', 'transformer', { va: 30 }, [
+    part('tp-trafo-1', 'Mains transformer, one secondary 16 V 2 A, laminated, 35 VA', 'transformer', { va: 35, sec1V: 16, sec1A: 2 }, [
       offer(A, 'MR-TR1-30', [[1, 1990], [10, 1690]]),
     ]),
-    part('tp-trafo-pa', 'Mains transformer, one secondary 20 V 3 A, laminated, 60 VA', 'transformer', { va: 60 }, [
+    part('tp-trafo-pa', 'Mains transformer, one secondary 20 V 3 A, laminated, 60 VA', 'transformer', { va: 60, sec1V: 20, sec1A: 3 }, [
       offer(B, 'EG-4460', [[1, 2990], [10, 2590]]),
     ]),
     part('tp-bridge', 'Bridge rectifier 4 A 200 V, surge 150 A', 'rectifier', { ratedA: 4, vrrmV: 200, ifsmA: 150 }, [
@@ -60,11 +61,11 @@ export function starterParts(crystalHz: number): Record<string, Part> {
     part('tp-bleed', 'Resistor 2.2 kΩ 1 W metal film (bleeder)', 'resistor', { resistanceOhm: 2200, powerW: 1 }, [
       offer(A, 'MR-R1W-2K2', [[1, 16], [100, 8]]),
     ]),
-    part('tp-reg', 'Adjustable positive linear regulator 1.5 A, TO-220', 'regulator', { dropoutV: 2.5, maxCurrentA: 1.5 }, [
+    part('tp-reg', 'Adjustable positive linear regulator 1.5 A, TO-220', 'regulator', { dropoutV: 2.5, maxCurrentA: 1.5, thetaJcKPerW: 5 }, [
       offer(A, 'MR-VR15', [[1, 65], [10, 50]]),
       offer(B, 'EG-3115', [[1, 58]]),
     ]),
-    part('tp-ldo', 'Low-dropout regulator 9 V 500 mA, TO-220', 'regulator', { dropoutV: 0.5, maxCurrentA: 0.5 }, [
+    part('tp-ldo', 'Low-dropout regulator 9 V 500 mA, TO-220', 'regulator', { dropoutV: 0.5, maxCurrentA: 0.5, thetaJcKPerW: 5 }, [
       offer(B, 'EG-LDO9', [[1, 72]]),
     ]),
     part('tp-hs-reg', 'Heatsink for TO-220, 4.5 °C/W, with mounting kit', 'heatsink', { thetaSaKPerW: 4.5 }, [

@@ -12,6 +12,8 @@ export interface StarterLine {
   qty: number;
   refs: string;
   notes?: string;
+  /** the design role the line fills (src/core/roles: "<kind>:<template id>" or a bare kind), so it is checked */
+  role?: string;
 }
 
 export interface StationData {
@@ -85,8 +87,8 @@ const supply = (transformers: Supply['transformers'], rails: Supply['rails']): S
 
 const MAINS_LINES: StarterLine[] = [
   { partId: 'tp-inlet', stageId: null, qty: 1, refs: 'J1', notes: 'Earth pin bonded to the chassis' },
-  { partId: 'tp-fuse', stageId: null, qty: 3, refs: 'F1–F3', notes: 'Primary, winding and rail fuses; ratings from the supply page' },
-  { partId: 'tp-bleed', stageId: null, qty: 1, refs: 'R1' },
+  { partId: 'tp-fuse', stageId: null, qty: 3, refs: 'F1–F3', notes: 'Primary, winding and rail fuses; ratings from the supply page', role: 'fuses' },
+  { partId: 'tp-bleed', stageId: null, qty: 1, refs: 'R1', role: 'bleeders' },
 ];
 const RX_LINES: StarterLine[] = [
   { partId: 'tp-mixer', stageId: 'st-rx', qty: 1, refs: 'U2' },
@@ -95,15 +97,15 @@ const RX_LINES: StarterLine[] = [
   { partId: 'tp-xtal', stageId: 'st-vxo', qty: 2, refs: 'Y1, Y2' },
 ];
 const RF_LINES: StarterLine[] = [
-  { partId: 'tp-toroid', stageId: 'st-lpf', qty: 2, refs: 'L1, L2' },
-  { partId: 'tp-cmica', stageId: 'st-lpf', qty: 5, refs: 'C10–C14' },
-  { partId: 'tp-relay', stageId: 'st-tr', qty: 1, refs: 'K1' },
+  { partId: 'tp-toroid', stageId: 'st-lpf', qty: 2, refs: 'L1, L2', role: 'lpf-cores:st-lpf' },
+  { partId: 'tp-cmica', stageId: 'st-lpf', qty: 5, refs: 'C10–C14', role: 'lpf-capacitors:st-lpf' },
+  { partId: 'tp-relay', stageId: 'st-tr', qty: 1, refs: 'K1', role: 'relay:st-tr' },
   { partId: 'tp-bnc', stageId: 'st-tr', qty: 1, refs: 'J2' },
   { partId: 'tp-case', stageId: null, qty: 1, refs: 'Enclosure' },
 ];
 const PUSH_PULL_LINES: StarterLine[] = [
-  { partId: 'tp-mosfet-200', stageId: 'st-pa', qty: 2, refs: 'Q3, Q4' },
-  { partId: 'tp-hs-pa', stageId: 'st-pa', qty: 1, refs: 'HS2' },
+  { partId: 'tp-mosfet-200', stageId: 'st-pa', qty: 2, refs: 'Q3, Q4', role: 'pa-devices:st-pa' },
+  { partId: 'tp-hs-pa', stageId: 'st-pa', qty: 1, refs: 'HS2', role: 'pa-heatsink:st-pa' },
   { partId: 'tp-mica', stageId: 'st-pa', qty: 2, refs: 'for Q3, Q4' },
   { partId: 'tp-bino', stageId: 'st-pa', qty: 1, refs: 'T2' },
 ];
@@ -127,12 +129,12 @@ function mainsTwoRail(bandName: string, targetPowerW: number): StationData {
       trRelay('rail-sig', 0.16), keyer('rail-sig')],
     lines: [
       ...MAINS_LINES,
-      { partId: 'tp-trafo-2', stageId: null, qty: 1, refs: 'T1' },
+      { partId: 'tp-trafo-2', stageId: null, qty: 1, refs: 'T1', role: 'transformer:tr-1' },
       { partId: 'tp-bridge', stageId: null, qty: 2, refs: 'BR1, BR2' },
-      { partId: 'tp-c4700', stageId: null, qty: 1, refs: 'C1' },
-      { partId: 'tp-c6800', stageId: null, qty: 1, refs: 'C2' },
-      { partId: 'tp-reg', stageId: null, qty: 1, refs: 'U1' },
-      { partId: 'tp-hs-reg', stageId: null, qty: 1, refs: 'HS1' },
+      { partId: 'tp-c4700', stageId: null, qty: 1, refs: 'C1', role: 'reservoir:rail-raw' },
+      { partId: 'tp-c6800', stageId: null, qty: 1, refs: 'C2', role: 'reservoir:rail-pa' },
+      { partId: 'tp-reg', stageId: null, qty: 1, refs: 'U1', role: 'regulator:rail-sig' },
+      { partId: 'tp-hs-reg', stageId: null, qty: 1, refs: 'HS1', role: 'heatsink:rail-sig' },
       ...RX_LINES,
       ...PUSH_PULL_LINES,
       ...RF_LINES,
@@ -173,9 +175,9 @@ function batteryPortable(bandName: string, targetPowerW: number): StationData {
     lines: [
       { partId: 'tp-battery', stageId: null, qty: 1, refs: 'BT1' },
       { partId: 'tp-bladefuse', stageId: null, qty: 1, refs: 'F1', notes: 'Fit at the battery terminal' },
-      { partId: 'tp-ldo', stageId: null, qty: 1, refs: 'U1' },
+      { partId: 'tp-ldo', stageId: null, qty: 1, refs: 'U1', role: 'regulator:rail-9v' },
       ...RX_LINES,
-      { partId: 'tp-mosfet-100', stageId: 'st-pa', qty: 1, refs: 'Q2' },
+      { partId: 'tp-mosfet-100', stageId: 'st-pa', qty: 1, refs: 'Q2', role: 'pa-devices:st-pa' },
       ...RF_LINES,
     ],
   };
@@ -193,11 +195,11 @@ function singleRail(bandName: string, targetPowerW: number): StationData {
       trRelay('rail-sig', 0.16)],
     lines: [
       ...MAINS_LINES,
-      { partId: 'tp-trafo-1', stageId: null, qty: 1, refs: 'T1' },
+      { partId: 'tp-trafo-1', stageId: null, qty: 1, refs: 'T1', role: 'transformer:tr-1' },
       { partId: 'tp-bridge', stageId: null, qty: 1, refs: 'BR1' },
-      { partId: 'tp-c6800', stageId: null, qty: 1, refs: 'C1' },
-      { partId: 'tp-reg', stageId: null, qty: 1, refs: 'U1' },
-      { partId: 'tp-hs-reg', stageId: null, qty: 1, refs: 'HS1' },
+      { partId: 'tp-c6800', stageId: null, qty: 1, refs: 'C1', role: 'reservoir:rail-raw' },
+      { partId: 'tp-reg', stageId: null, qty: 1, refs: 'U1', role: 'regulator:rail-sig' },
+      { partId: 'tp-hs-reg', stageId: null, qty: 1, refs: 'HS1', role: 'heatsink:rail-sig' },
       ...RX_LINES,
       ...PUSH_PULL_LINES,
       ...RF_LINES,
@@ -219,10 +221,10 @@ function amplifierOnly(bandName: string, targetPowerW: number): StationData {
     stages: [pushPullFinal('rail-pa', paA), lowPassFilter(bandName), trRelay('rail-12v', 0)],
     lines: [
       ...MAINS_LINES,
-      { partId: 'tp-trafo-pa', stageId: null, qty: 1, refs: 'T1' },
+      { partId: 'tp-trafo-pa', stageId: null, qty: 1, refs: 'T1', role: 'transformer:tr-1' },
       { partId: 'tp-bridge', stageId: null, qty: 1, refs: 'BR1' },
-      { partId: 'tp-c6800', stageId: null, qty: 1, refs: 'C1' },
-      { partId: 'tp-reg', stageId: null, qty: 1, refs: 'U1' },
+      { partId: 'tp-c6800', stageId: null, qty: 1, refs: 'C1', role: 'reservoir:rail-pa' },
+      { partId: 'tp-reg', stageId: null, qty: 1, refs: 'U1', role: 'regulator:rail-12v' },
       ...PUSH_PULL_LINES,
       ...RF_LINES.filter((l) => l.partId !== 'tp-case'),
     ],

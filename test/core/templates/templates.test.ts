@@ -37,6 +37,11 @@ describe('station templates', () => {
     const fails = report.findings.filter((f) => f.severity === 'fail').map((f) => `${f.rule}: ${f.subject}: ${f.message}`);
     expect(fails).toEqual([]);
     expect(report.cost.totals.unpricedLines).toBe(0);
+    // the starter lines bound to design roles follow the project's fresh ids: none points at a role the design lacks
+    expect(report.findings.filter((f) => f.rule === 'role.gone').map((f) => f.subject)).toEqual([]);
+    const bound = new Set(p.bom.map((l) => l.roleId).filter(Boolean));
+    expect(report.roles.list.filter((r) => bound.has(r.id)).length).toBe(bound.size);
+    expect(bound.size).toBeGreaterThan(3);
     expect(report.cost.totals.perKitCents).toBeGreaterThan(0);
     expect(p.stages.length).toBeGreaterThan(2);
     expect(p.supply.rails.length).toBeGreaterThan(0);
