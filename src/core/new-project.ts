@@ -67,7 +67,9 @@ export function cloneProject(p: Project, newProjectId: string, name: string, mak
     ...(s.relay ? { relay: { ...s.relay, coilRailId: s.relay.coilRailId ? r(s.relay.coilRailId) : null } } : {}),
   }));
   const parts = p.parts.map((x) => ({ ...structuredClone(x), id: r(x.id), offers: x.offers.map((o) => ({ ...o, id: makeId('of') })) }));
-  const bom = p.bom.map((b) => ({ ...b, id: makeId('bl'), partId: r(b.partId), stageId: b.stageId ? r(b.stageId) : null }));
+  // a design role names the item it belongs to ("reservoir:<rail id>"): the binding follows the item's new id
+  const role = (id: string | null | undefined) => (id ? id.replace(/^([^:]+):(.+)$/, (_m, kind: string, item: string) => `${kind}:${r(item)}`) : id);
+  const bom = p.bom.map((b) => ({ ...b, id: makeId('bl'), partId: r(b.partId), stageId: b.stageId ? r(b.stageId) : null, ...(b.roleId !== undefined ? { roleId: role(b.roleId) } : {}) }));
   return { ...structuredClone(p), id: newProjectId, name, version: 1, supply: { ...p.supply, transformers, rails }, stages, parts, bom };
 }
 
