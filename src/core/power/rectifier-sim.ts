@@ -246,6 +246,13 @@ export const SIM_FLOORS = { frequencyHz: 1, capacitanceF: 1e-9, secondaryVrms: 1
 /** Memo of results by exact input, live only inside withSimulationMemo (one evaluation); bounded. */
 let MEMO: Map<string, RectifierSimResult> | null = null;
 const MEMO_MAX = 4096;
+/**
+ * Warm starts, live with the memo: the converged cycle-start voltage of the last simulation of the same circuit
+ * (every input but the load). The fixed-point passes ask again for a rail whose load moved a little; starting the
+ * Newton search there takes one or two cycles instead of three or four. The search still stops on the same
+ * tolerance, so a result moves by less than `toleranceV` at most.
+ */
+let WARM: Map<string, number> | null = null;
 
 /**
  * Run `fn` with simulations memoised on their exact inputs; the memo is dropped when `fn` returns, so results never
@@ -254,10 +261,12 @@ const MEMO_MAX = 4096;
 export function withSimulationMemo<T>(fn: () => T): T {
   if (MEMO) return fn();
   MEMO = new Map();
+  WARM = new Map();
   try {
     return fn();
   } finally {
     MEMO = null;
+    WARM = null;
   }
 }
 
@@ -266,13 +275,15 @@ export function simulateRectifier(input: RectifierSimInput): RectifierSimResult 
   const key = JSON.stringify([input.topology, input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm, input.load, input.bleederOhm ?? null, input.stepsPerCycle ?? null, input.toleranceV ?? null, input.maxCycles ?? null, input.waveformPoints ?? null]);
   const held = MEMO.get(key);
   if (held) return held;
-  const result = simulateUncached(input);
+  const circuitKey = JSON.stringify([input.topology, input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm, input.load.kind, input.bleederOhm ?? null, input.stepsPerCycle ?? null, input.toleranceV ?? null]);
+  const result = simulateUncached(input, WARM?.get(circuitKey), (v) => WARM?.set(circuitKey, v));
   if (MEMO.size >= MEMO_MAX) MEMO.clear();
+  if (WARM && WARM.size >= MEMO_MAX) WARM.clear();
   MEMO.set(key, result);
   return result;
 }
 
-function simulateUncached(input: RectifierSimInput): RectifierSimResult {
+function simulateUncached(input: RectifierSimInput, startV?: number, onSteady?: (v0: number) => void): RectifierSimResult {
   const nums = [input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm];
   if (!nums.every((x) => Number.isFinite(x))) return invalid('Simulation not run: an input is missing or not a number.');
   const f = SIM_FLOORS;
@@ -316,7 +327,8 @@ function simulateUncached(input: RectifierSimInput): RectifierSimResult {
   // 1972 (from memory); the secant fallback is kept for a flat cycle map.
   let lo = 0;
   let hi = noLoadPeakV;
-  let x = noLoadPeakV * 0.95;
+  // a warm start from the same circuit at a nearby load, else just below the no-load peak
+  let x = startV !== undefined && startV > 0 && startV < noLoadPeakV ? startV : noLoadPeakV * 0.95;
   let xPrev = NaN;
   let fPrev = NaN;
   let cycles = 0;
@@ -342,6 +354,7 @@ function simulateUncached(input: RectifierSimInput): RectifierSimResult {
     fPrev = f;
     x = next;
   }
+  if (converged) onSteady?.(x);
   // Record two cycles from the steady state for the plot (also the statistics of the first of them).
   const wantWave = (input.waveformPoints ?? 160) > 0;
   const pts = Math.max(20, Math.min(2000, Math.round(input.waveformPoints ?? 160)));
