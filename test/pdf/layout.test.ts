@@ -3,7 +3,7 @@
 // ISO 216 (A4 = 210 × 297 mm) and US Letter (8.5 × 11 in) at 72 pt per inch.
 import { describe, expect, it, beforeAll } from 'vitest';
 import fc from 'fast-check';
-import { propertyOptions } from '../helpers/property';
+import { propertyOptions } from '../helpers/property'; // fixed seed per property
 import { Layout, PAPER_SIZES_PT } from '../../src/pdf/layout';
 
 const mmToPt = (mm: number) => (mm / 25.4) * 72;
@@ -39,7 +39,7 @@ describe('layout toolkit', () => {
         for (const line of lines) if (line.length > 1) expect(l.font().widthOfTextAtSize(line, sizePt)).toBeLessThanOrEqual(widthPt + 1e-6);
         expect(lines.join('').replace(/ /g, '')).toBe(text.replace(/ /g, ''));
       }),
-      propertyOptions(42, 200),
+      propertyOptions(42, 200), // fixed seed
     );
   });
 

@@ -4,7 +4,7 @@
 //  - a higher filter order never lowers the stopband attenuation (prototypeLossDb; designLpf + ladder)
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { propertyOptions } from '../helpers/property';
+import { propertyOptions } from '../helpers/property'; // fixed seed per property
 import { simulateRectifier, type RectifierSimInput } from '../../src/core/power/rectifier-sim';
 import { simInputFor } from '../../src/core/power/rectified-rail';
 import { prototypeLossDb } from '../../src/core/rf/prototype';
@@ -53,7 +53,7 @@ describe('supply models', () => {
         checked.ripple++;
         expect(big.ripplePpV).toBeLessThanOrEqual(small.ripplePpV + toleranceV);
       }),
-      propertyOptions(SEED, 150),
+      propertyOptions(SEED, 150), // fixed seed
     );
     expect(checked.ripple).toBeGreaterThanOrEqual(75);
   });
@@ -94,7 +94,7 @@ describe('supply models', () => {
           expect(hi.dcMeanV).toBeGreaterThanOrEqual(lo.dcMeanV - toleranceV);
         },
       ),
-      propertyOptions(SEED, 150),
+      propertyOptions(SEED, 150), // fixed seed
     );
     expect(checked.mains).toBeGreaterThanOrEqual(75);
   });
@@ -112,7 +112,7 @@ describe('filter models', () => {
           expect(prototypeLossDb(response, order + 1, rippleDb, omega)).toBeGreaterThanOrEqual(prototypeLossDb(response, order, rippleDb, omega) - toleranceDb);
         },
       ),
-      propertyOptions(SEED, 2000),
+      propertyOptions(SEED, 2000), // fixed seed
     );
   });
 
@@ -142,7 +142,7 @@ describe('filter models', () => {
           }
         },
       ),
-      propertyOptions(SEED, 300),
+      propertyOptions(SEED, 300), // fixed seed
     );
   });
 });

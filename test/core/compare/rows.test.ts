@@ -94,7 +94,7 @@ describe('rows of the demos', () => {
     const rows = compareRows([clubMetrics, projectMetrics(variant, evaluate(variant))]);
     const cell = (key: string) => rows.find((r) => r.key === key)!.cells[1];
     // less ripple at the same load raises the trough: ΔV_pp ≈ I / (k f C) halves (capacitor-input filter,
-    // e.g. ARRL Handbook, power supplies chapter; from memory)
+    // a textbook relation; from memory)
     expect(cell('trough:PA rail (unregulated, ~24 V)').verdict).toBe('better');
     // the parts list and prices did not change
     expect(cell('perKitCents').verdict).toBe('same');

@@ -54,8 +54,8 @@ describe('sweep values and targets', () => {
 
 describe('sweeps of the club demo', () => {
   it('reservoir of the PA rail: the PA rail margin never falls as the capacitance rises', () => {
-    // Source: capacitor-input filter, ripple V_pp ≈ I / (2 f C) for a bridge (ARRL Handbook, power supplies
-    // chapter; from memory): more C, less ripple, a higher trough at the same load
+    // Source: capacitor-input filter, ripple V_pp ≈ I / (2 f C) for a bridge (a textbook relation; from
+    // memory): more C, less ripple, a higher trough at the same load
     const r = ok(runSweep(club30m, { parameter: 'reservoirF', target: 'rail-pa', from: 2200e-6, to: 15000e-6, points: 5 }));
     const margins = series(r, 'trough:PA rail (unregulated, ~24 V)');
     expect(nonDecreasing(margins, toleranceV), margins.join(', ')).toBe(true);
