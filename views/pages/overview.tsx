@@ -13,8 +13,9 @@ import { inputText } from '../../src/core/spec/input-text';
 import { settingsSpec, settingsFormValues } from '../../src/core/spec/settings';
 import { Field, Select, TextArea, FormErrors, type FieldState } from '../components/fields';
 import { SpecField } from '../components/spec-fields';
+import { LoadTableHead } from '../components/load-table-head';
 import { loadCurrentValues } from '../../src/core/edits/stage-loads';
-import { loadCurrentFields, loadFormName, loadSpec } from '../../src/core/spec/stage';
+import { loadFormName, loadSpec } from '../../src/core/spec/stage';
 import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';
 import { FirstScreen } from '../components/first-screen';
@@ -101,16 +102,7 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
           <Hidden version={project.version} />
           <FormErrors state={state} />
           <table class="grid compact">
-            <thead>
-              <tr>
-                <th>Rail</th>
-                {MODES.map((m) => (
-                  <th>
-                    {MODE_LABELS[m]} ({loadCurrentFields[`currentA.${m}`].display.symbol})
-                  </th>
-                ))}
-              </tr>
-            </thead>
+            <LoadTableHead />
             <tbody>
               {stage.loads.map((l, i) => (
                 <tr>

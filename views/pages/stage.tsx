@@ -1,13 +1,14 @@
 // Stage page: name, kind, notes, loads per rail and mode, and the kind's own data (PA, filter, relay).
 import type { FC } from 'hono/jsx';
 import type { Project, Stage } from '../../src/core/model';
-import { MODES, MODE_LABELS, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
+import { MODES, STAGE_KINDS, STAGE_KIND_LABELS } from '../../src/core/model';
 import { Select, FormErrors, type FieldState } from '../components/fields';
 import { stateFor, type Failed } from '../components/failed';
 import { formValues, loadSpec, stageSpec } from '../../src/core/spec';
 import { stageData, type StageData } from '../../src/core/spec/stage-data';
-import { loadCurrentFields, loadFormName, stageFormValues } from '../../src/core/spec/stage';
+import { loadFormName, stageFormValues } from '../../src/core/spec/stage';
 import { SpecField } from '../components/spec-fields';
+import { LoadTableHead } from '../components/load-table-head';
 import { REMOVE_LOAD } from '../../src/core/edits/stage-loads';
 import { NEW_RAIL, NEW_RAIL_FORM } from '../../src/core/edits/rail-in-place';
 import { addRailSpec } from '../../src/core/spec/supply';
@@ -75,16 +76,7 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
           </p>
         ) : null}
         <table class="grid compact">
-          <thead>
-            <tr>
-              <th>Rail</th>
-              {MODES.map((m) => (
-                <th>
-                  {MODE_LABELS[m]} ({loadCurrentFields[`currentA.${m}`].display.symbol})
-                </th>
-              ))}
-            </tr>
-          </thead>
+          <LoadTableHead />
           <tbody>
             {Array.from({ length: loadRows }, (_, i) => (
               <tr>
