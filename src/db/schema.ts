@@ -164,6 +164,22 @@ export const bomLines = sqliteTable(
   (t) => [index('bom_lines_project').on(t.projectId)],
 );
 
+// The project's core catalog: toroids and other cores a filter inductor or an output transformer is wound on.
+// The numbers (AL, Ae, le, window, material range, flux limit) are the core's spec (src/core/spec/cores.ts), as JSON.
+export const cores = sqliteTable(
+  'cores',
+  {
+    id: text('id').primaryKey(),
+    projectId: text('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    position: integer('position').notNull(),
+    name: text('name').notNull(),
+    params: text('params', { mode: 'json' }).notNull(),
+  },
+  (t) => [index('cores_project').on(t.projectId)],
+);
+
 // The stored project as it was after each version (JSON of the core Project), so a form loaded at an older
 // version can be merged field by field with what was saved since. Only the last few per project are kept.
 export const projectVersions = sqliteTable(
