@@ -20,6 +20,9 @@ export const projects = sqliteTable('projects', {
   primaryFuseA: real('primary_fuse_a'),
   enclosureAreaM2: real('enclosure_area_m2'),
   enclosureUWPerM2K: real('enclosure_u_w_per_m2k'),
+  // IEC 60127-2 sheet of the fitted primary fuse (null = T3) and the transformer sizing basis (null = duty)
+  primaryFuseSheet: text('primary_fuse_sheet'),
+  transformerSizing: text('transformer_sizing'),
   rf: text('rf', { mode: 'json' }).notNull(), // RfSettings
   costing: text('costing', { mode: 'json' }).notNull(), // Costing
   // id of the project this one was cloned from as a variant. No foreign key: drizzle-kit's ALTER TABLE for SQLite

@@ -1,0 +1,2 @@
+ALTER TABLE `projects` ADD `primary_fuse_sheet` text;--> statement-breakpoint
+ALTER TABLE `projects` ADD `transformer_sizing` text;
