@@ -2,7 +2,7 @@
 //   rigwright evaluate FILE.json [--json]
 //   rigwright export [--id ID] [--out FILE]        (from DATABASE_URL; all project ids listed without --id)
 //   rigwright import FILE.json                      (into DATABASE_URL, always as a new project)
-//   rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf
+//   rigwright pdf FILE.json|--id ID [--paper a4|letter] [--pack builder|organiser|both] --out PACK.pdf
 //   rigwright csv FILE.json|--id ID [--out PARTS.csv]
 //   rigwright backup FILE.db                       (a consistent copy of the database, also while the server runs)
 // Every command that opens the database names it on stderr (stdout stays the data).
@@ -19,7 +19,10 @@ const USAGE = `Usage:
   rigwright export [--id ID] [--out FILE] export a project from the database (DATABASE_URL)
   rigwright import FILE.json              import a project file into the database as a new project
   rigwright list                          list the projects in the database
-  rigwright pdf FILE.json|--id ID [--paper a4|letter] --out PACK.pdf   the builder pack as PDF
+  rigwright pdf FILE.json|--id ID [--paper a4|letter] [--pack builder|organiser|both] --out PACK.pdf
+                                          the pack as PDF: --pack builder (one rig's parts without prices, the
+                                          design, build and safety checklists), organiser (costed list, order
+                                          sheets, a packing sheet per kit) or both in one file (the default)
   rigwright csv FILE.json|--id ID [--out PARTS.csv]                    the costed parts list as CSV
   rigwright backup FILE.db                a consistent copy of the database (works while the server runs)
   rigwright --help                        this text
@@ -28,23 +31,23 @@ The database is DATABASE_URL, by default data/rigwright.db in the Rigwright fold
 
 interface Args {
   positionals: string[];
-  values: { id?: string; out?: string; paper?: string; json?: boolean };
+  values: { id?: string; out?: string; paper?: string; pack?: string; json?: boolean };
 }
 
 /** Which options each command takes; anything else is refused with a message (never silently ignored). */
-const OPTIONS: Record<string, { options: ('id' | 'out' | 'paper' | 'json')[]; files: [number, number] }> = {
+const OPTIONS: Record<string, { options: ('id' | 'out' | 'paper' | 'pack' | 'json')[]; files: [number, number] }> = {
   evaluate: { options: ['json'], files: [1, 1] },
   list: { options: [], files: [0, 0] },
   export: { options: ['id', 'out'], files: [0, 0] },
   import: { options: [], files: [1, 1] },
-  pdf: { options: ['id', 'paper', 'out'], files: [0, 1] },
+  pdf: { options: ['id', 'paper', 'pack', 'out'], files: [0, 1] },
   csv: { options: ['id', 'out'], files: [0, 1] },
   backup: { options: [], files: [1, 1] },
 };
 
 function readArgs(command: string, rest: string[]): Args {
   const spec = OPTIONS[command];
-  const all = { id: { type: 'string' }, out: { type: 'string' }, paper: { type: 'string' }, json: { type: 'boolean' } } as const;
+  const all = { id: { type: 'string' }, out: { type: 'string' }, paper: { type: 'string' }, pack: { type: 'string' }, json: { type: 'boolean' } } as const;
   const options = Object.fromEntries(spec.options.map((o) => [o, all[o]]));
   let parsed: Args;
   try {
@@ -185,11 +188,14 @@ async function main(args: string[]) {
       if (!out) fail('Give --out PACK.pdf');
       const paper = a.values.paper ?? 'a4';
       if (paper !== 'a4' && paper !== 'letter') fail('--paper must be a4 or letter');
+      const { buildPack, PACK_PARTS, PACK_PART_TITLES } = await import('./pdf');
+      const part = a.values.pack ?? 'both';
+      if (!(PACK_PARTS as readonly string[]).includes(part)) fail(`--pack must be ${PACK_PARTS.join(', ')} (got ${JSON.stringify(part)})`);
       const project = await projectFrom(command, a);
-      const { buildPack } = await import('./pdf');
-      const bytes = await buildPack(project, evaluate(project), { paper: paper as 'a4' | 'letter', dataDate: new Date().toISOString().slice(0, 10) });
+      const opts = { paper: paper as 'a4' | 'letter', part: part as import('./pdf').PackPart, dataDate: new Date().toISOString().slice(0, 10) };
+      const bytes = await buildPack(project, evaluate(project), opts);
       writeOut(out!, bytes);
-      process.stdout.write(`Wrote ${out} (${bytes.length} bytes)\n`);
+      process.stdout.write(`Wrote ${out}: ${PACK_PART_TITLES[opts.part]} (${bytes.length} bytes)\n`);
       return;
     }
     case 'csv': {

@@ -1,6 +1,6 @@
 import { describe, it, expect, beforeAll, afterAll } from 'vitest';
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync, readFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, writeFileSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -8,6 +8,7 @@ import { DEMO_PROJECTS } from '../seed-demo/index';
 import { toProjectFile } from '../src/io/project-file';
 import { readEnv, describeDatabase } from '../src/env';
 import { startServer, spawnServer, exited, type RunningServer } from './helpers/server';
+import { hasPoppler, pagesText } from './pdf/pdf-text';
 
 const dir = mkdtempSync(join(tmpdir(), 'rw-cli-'));
 const cli = (args: string[], env: Record<string, string> = {}) =>
@@ -72,6 +73,40 @@ describe('command line', () => {
     expect(csv.stdout).toContain('"Mains cord with IEC plug, 3-core, earthed"');
   });
 
+  // What each part holds is the pack's own test (test/pdf/pack-parts.test.ts); here: the CLI passes the choice through.
+  it.skipIf(!hasPoppler)('--pack builder|organiser|both writes that part of the pack', () => {
+    const text: Record<string, string> = {};
+    for (const part of ['builder', 'organiser', 'both']) {
+      const pdf = join(dir, `pack-${part}.pdf`);
+      const r = cli(['pdf', file, '--pack', part, '--out', pdf]);
+      expect(r.status, r.stderr).toBe(0);
+      expect(r.stdout).toContain(`Wrote ${pdf}: ${part === 'both' ? 'Builder’s and organiser’s pack' : part === 'builder' ? 'Builder’s pack' : 'Organiser’s pack'}`);
+      text[part] = pagesText(pdf).join('\n').replace(/\s+/g, ' ');
+    }
+    expect(text.builder).toContain('Build checklist');
+    expect(text.builder.includes('Order sheets per supplier')).toBe(false);
+    expect(text.organiser).toContain('Order sheets per supplier');
+    expect(text.organiser.includes('Build checklist')).toBe(false);
+    for (const heading of ['Build checklist', 'Order sheets per supplier']) expect(text.both).toContain(heading);
+  });
+
+  it('without --pack writes both parts in one file, as --help says', () => {
+    const r = cli(['pdf', file, '--out', join(dir, 'default.pdf')]);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('Builder’s and organiser’s pack');
+    const help = cli(['--help']);
+    expect(help.stdout).toContain('[--pack builder|organiser|both]');
+    expect(help.stdout).toMatch(/or both in one file \(the default\)/);
+  });
+
+  it('refuses an unknown --pack with the choices and writes nothing', () => {
+    const out = join(dir, 'nope.pdf');
+    const r = cli(['pdf', file, '--pack', 'kits', '--out', out]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('--pack must be both, builder, organiser (got "kits")');
+    expect(existsSync(out)).toBe(false);
+  });
+
   it('refuses a bad paper size', () => {
     const r = cli(['pdf', file, '--paper', 'a3', '--out', join(dir, 'x.pdf')]);
     expect(r.status).toBe(2);
@@ -88,6 +123,7 @@ describe('command line: bad arguments are refused with a message', () => {
     [['evaluate', 'FILE', 'FILE'], 'unexpected argument'],
     [['evaluate'], 'give the project file to read'],
     [['pdf', 'FILE', '--paper', '--out', 'x.pdf'], "'--paper'"],
+    [['pdf', 'FILE', '--pack', '--out', 'x.pdf'], "'--pack'"],
     [['csv', 'FILE', '--id', 'demo'], 'either a project file or --id, not both'],
     [['export', '--id'], "'--id <value>' argument missing"],
     [['bogus'], 'Unknown command "bogus"'],
