@@ -61,6 +61,8 @@ export interface RectifiedRail {
   windingFuseA: number | null; // fitted fuse in the winding lead ahead of the rectifier, null = recommend one
   windingFuseSheet: FuseSheet; // its type (old rows and files read T3)
   bleederRatedW: number | null; // fitted bleeder's power rating, null = not stated
+  bridgeMount?: HeatsinkMount | null; // the rectifier package's thermal data, θsa null = no heatsink; null/absent = assumed
+  bridgeFreeAirKPerW?: number | null; // its θja in free air (no heatsink), K/W; null/absent = assumed
 }
 
 export type RegulatorSetting =
@@ -91,6 +93,9 @@ export interface RegulatedRail {
   mount: HeatsinkMount | null;
   rippleRejectionDb: number | null; // datasheet ripple rejection at 100/120 Hz, null = not stated
   rippleTargetV: number | null; // largest output ripple wanted (V p-p, e.g. a receiver's rail), null = none
+  outputF?: number | null; // capacitance across its output, F; null/absent = not entered
+  bleederOhm?: number | null; // bleeder across its output, null/absent = none fitted
+  bleederRatedW?: number | null; // that bleeder's power rating, null/absent = not stated
 }
 
 export interface BatteryRail {
@@ -115,7 +120,12 @@ export interface Supply {
   primaryFuseA: number | null; // fitted primary fuse, null = recommend one
   enclosureAreaM2?: number | null; // enclosure surface that sheds heat, null/absent = not stated
   enclosureUWPerM2K?: number | null; // its heat transfer coefficient, null/absent = not stated
+  primaryFuseSheet?: FuseSheet | null; // the fitted primary fuse's IEC 60127-2 sheet, null/absent = T3
+  transformerSizing?: TransformerSizing | null; // what the transformer is sized for, null/absent = 'duty'
 }
+
+/** Size the transformer (and judge the rectifier's heat) for CW at the keying duty or a continuous tune-up carrier. */
+export type TransformerSizing = 'duty' | 'tune-up';
 
 // ---------------------------------------------------------------- stages
 
