@@ -3,8 +3,15 @@
 
 export const IMPORT_FIELDS = [
   'refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency', 'stage', 'role',
+  'ratings', 'breaks', 'minOrder', 'multiple',
 ] as const;
 export type ImportField = (typeof IMPORT_FIELDS)[number];
+
+/** The fields each kind of import reads (and offers on its column choices). */
+export const IMPORT_FIELDS_FOR: Record<'parts-list' | 'catalog', readonly ImportField[]> = {
+  'parts-list': ['refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency', 'stage', 'role'],
+  catalog: ['description', 'value', 'category', 'ratings', 'supplier', 'sku', 'price', 'breaks', 'minOrder', 'multiple', 'currency'],
+};
 
 export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
   refs: 'Reference designators',
@@ -18,6 +25,10 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
   currency: 'Currency',
   stage: 'Stage',
   role: 'Design role',
+  ratings: 'Ratings (key=value; …)',
+  breaks: 'Price breaks (qty: price, …)',
+  minOrder: 'Minimum order',
+  multiple: 'Order multiple',
 };
 
 /** Column index (0-based) per field, null = not imported. */
@@ -38,6 +49,10 @@ const EXACT: Record<ImportField, string[]> = {
   currency: ['currency', 'cur', 'ccy'],
   stage: ['stage', 'stage name', 'module', 'board'],
   role: ['role', 'design role'],
+  ratings: ['ratings', 'rating', 'specs', 'specification', 'specifications', 'parameters'],
+  breaks: ['breaks', 'price breaks', 'quantity breaks', 'qty breaks', 'break prices', 'tiered prices'],
+  minOrder: ['min order', 'minimum order', 'moq', 'min qty', 'minimum quantity', 'min order qty', 'minimum order quantity'],
+  multiple: ['multiple', 'order multiple', 'pack', 'pack size', 'multiples', 'order increment', 'increment'],
 };
 
 // Single words that identify a field anywhere in a header, for headers no exact synonym took.
@@ -53,6 +68,10 @@ const WORDS: Record<ImportField, string[]> = {
   currency: ['currency'],
   stage: ['stage'],
   role: ['role'],
+  ratings: ['ratings'],
+  breaks: ['breaks'],
+  minOrder: ['moq', 'minimum'],
+  multiple: ['multiple', 'multiples'],
 };
 
 /** Lower case, accents and punctuation dropped, single spaces: "Qty./Rig" -> "qty rig". */
@@ -70,19 +89,23 @@ export function emptyMapping(): ColumnMapping {
   return Object.fromEntries(IMPORT_FIELDS.map((f) => [f, null])) as ColumnMapping;
 }
 
-/** Guess the mapping: exact synonyms first, then whole-word matches; each column used at most once. */
-export function guessMapping(headers: readonly string[]): ColumnMapping {
+/**
+ * Guess the mapping: exact synonyms first, then whole-word matches; each column used at most once. Only the fields
+ * the kind of import reads are guessed (default: a parts list).
+ */
+export function guessMapping(headers: readonly string[], kind: 'parts-list' | 'catalog' = 'parts-list'): ColumnMapping {
   const mapping = emptyMapping();
   const norm = headers.map(normaliseHeader);
   const taken = new Set<number>();
-  for (const f of IMPORT_FIELDS) {
+  const fields = IMPORT_FIELDS_FOR[kind];
+  for (const f of fields) {
     const i = norm.findIndex((h, k) => !taken.has(k) && EXACT[f].includes(h));
     if (i >= 0) {
       mapping[f] = i;
       taken.add(i);
     }
   }
-  for (const f of IMPORT_FIELDS) {
+  for (const f of fields) {
     if (mapping[f] !== null) continue;
     const i = norm.findIndex((h, k) => !taken.has(k) && h.split(' ').some((w) => WORDS[f].includes(w)));
     if (i >= 0) {

@@ -5,6 +5,7 @@ import { parsePrice, parseQuantity } from './parse-price';
 import { countRefs } from './refs';
 import { minorDigits } from '../cost/money';
 import { guessMapping, IMPORT_FIELD_LABELS, type ColumnMapping, type ImportField } from './import-mapping';
+import { readCatalogCells, type CatalogCells } from './catalog-cells';
 import { unneutraliseText } from './write';
 import type { Field } from '../spec/field';
 import { storedProblem } from '../spec/derive';
@@ -40,6 +41,8 @@ export interface ImportOptions {
   mapping?: ColumnMapping;
   /** The project's stages, to read a stage column by name ("General" = no stage). */
   stages?: readonly { id: string; name: string }[];
+  /** Catalog: the supplier of rows with no supplier cell (a supplier's own list has no supplier column). */
+  defaultSupplier?: string;
 }
 
 /** Stage name the parts-list export writes for lines with no stage. */
@@ -77,6 +80,8 @@ export interface ImportValues {
   stageId: string | null;
   /** The design role the line is bound to, as written ('' = none). */
   role: string;
+  /** Catalog rows: the offer's ratings, breaks (the unit price as the break at 1), minimum order and multiple. */
+  catalog?: CatalogCells;
 }
 
 export interface PreviewRow {
@@ -100,14 +105,14 @@ export interface ImportPreview {
   invalidRows: number;
 }
 
-function requiredFieldErrors(kind: ImportKind, m: ColumnMapping): RowError[] {
+function requiredFieldErrors(kind: ImportKind, m: ColumnMapping, supplierGiven: boolean): RowError[] {
   const missing = (fields: ImportField[], msg: string): RowError[] =>
     fields.every((f) => m[f] === null) ? [{ row: 0, column: fields.map((f) => IMPORT_FIELD_LABELS[f]).join(' / '), message: msg }] : [];
   const errs = missing(['description', 'value'], 'Choose a column for the description or the value.');
   if (kind === 'parts-list') errs.push(...missing(['quantity', 'refs'], 'Choose a column for the quantity (or the reference designators to count).'));
   else {
-    errs.push(...missing(['supplier'], 'A catalog needs a supplier column.'));
-    errs.push(...missing(['price'], 'A catalog needs a price column.'));
+    if (!supplierGiven) errs.push(...missing(['supplier'], 'A catalog needs a supplier column or the supplier’s name.'));
+    errs.push(...missing(['price', 'breaks'], 'A catalog needs a price column or a price-breaks column.'));
   }
   return errs;
 }
@@ -118,9 +123,10 @@ export function previewImport(text: string, options: ImportOptions): ImportPrevi
   const parsed = parseCsv(text, delimiter);
   const fileErrors: RowError[] = parsed.errors.map((e) => ({ row: e.record, column: null, message: `Line ${e.line}: ${e.message}` }));
   const headers = (parsed.records[0] ?? []).map((h) => h.trim());
-  const mapping = options.mapping ?? guessMapping(headers);
+  const mapping = options.mapping ?? guessMapping(headers, options.kind);
+  const supplierGiven = options.kind === 'catalog' && (options.defaultSupplier ?? '').trim() !== '';
   if (parsed.records.length === 0) fileErrors.push({ row: 0, column: null, message: 'The file is empty.' });
-  else fileErrors.push(...requiredFieldErrors(options.kind, mapping));
+  else fileErrors.push(...requiredFieldErrors(options.kind, mapping, supplierGiven));
 
   const rows: PreviewRow[] = [];
   const totalsRows: number[] = [];
@@ -210,12 +216,37 @@ function previewRow(
       else if (colCurrency !== '' && p.currency !== null && colCurrency !== p.currency) err('currency', `The price says ${p.currency} but the currency column says ${colCurrency}.`);
       v.currency = p.currency ?? (colCurrency || opts.defaultCurrency.toUpperCase());
     }
-  } else if (opts.kind === 'catalog') err('price', 'Needs a price.');
+  }
 
+  if (opts.kind === 'catalog') catalogRow(v, get, err, opts, decimal);
   if (v.supplier === '') {
-    if (opts.kind === 'catalog') err('supplier', 'Needs a supplier.');
+    if (opts.kind === 'catalog') err('supplier', 'Needs a supplier (a cell, or the supplier’s name on the form).');
     else if (v.priceCents !== null) err('supplier', 'A price needs a supplier.');
     else if (v.sku !== '') err('supplier', 'An order code (SKU) needs a supplier.');
   }
   return { row, values: v, errors, warnings };
+}
+
+/** A catalog row's own cells (ratings, breaks, minimum order, multiple) and the form's supplier for an empty cell. */
+function catalogRow(
+  v: ImportValues,
+  get: (f: ImportField) => string,
+  err: (f: ImportField | null, message: string) => void,
+  opts: ImportOptions,
+  decimal: '.' | ',',
+): void {
+  if (v.supplier === '') v.supplier = (opts.defaultSupplier ?? '').trim();
+  const colCurrency = get('currency').toUpperCase();
+  const currency = v.currency ?? (CURRENCY.re.test(colCurrency) ? colCurrency : opts.defaultCurrency.toUpperCase());
+  if (v.currency === null) {
+    if (colCurrency !== '' && !CURRENCY.re.test(colCurrency)) err('currency', `"${colCurrency}" is not a three-letter currency code.`);
+    v.currency = currency;
+  }
+  const priceFailed = get('price') !== '' && v.priceCents === null;
+  const read = readCatalogCells({
+    category: v.category, ratings: get('ratings'), breaks: get('breaks'), minOrder: get('minOrder'), multiple: get('multiple'),
+    priceCents: v.priceCents, currency, decimal,
+  });
+  for (const [f, message] of read.errors) if (!(priceFailed && f === 'price')) err(f, message);
+  v.catalog = read.cells;
 }
