@@ -43,6 +43,8 @@ export const transformers = sqliteTable(
     position: integer('position').notNull(),
     name: text('name').notNull(),
     construction: text('construction').notNull(),
+    // null = no tolerance corner; rows from before this column read 5 % (the spec's default)
+    secondaryToleranceFraction: real('secondary_tolerance_fraction').default(0.05),
   },
   (t) => [index('transformers_project').on(t.projectId)],
 );
@@ -60,6 +62,7 @@ export const windings = sqliteTable(
     ratedA: real('rated_a').notNull(),
     regulationFraction: real('regulation_fraction').notNull(),
     resistanceOhm: real('resistance_ohm'),
+    leakageH: real('leakage_h'), // null = split from the regulation figure
   },
   (t) => [index('windings_transformer').on(t.transformerId)],
 );
