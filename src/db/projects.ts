@@ -5,6 +5,7 @@ import { eq, asc, inArray, and, lte, getTableColumns } from 'drizzle-orm';
 import type { Database, Tx, Db } from './client';
 import { STAGE_DATA, type StageDataKey } from '../core/spec/stage-data';
 import * as t from './schema';
+import type { FuseSheet, TransformerSizing } from '../core/model';
 import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing } from '../core/model';
 import { withRailDefaults } from '../core/spec/supply-rails';
 
@@ -126,7 +127,12 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     keyingDuty: p.keyingDuty,
     ...(p.variantOf ? { variantOf: p.variantOf } : {}),
     version: p.version,
-    supply: { transformers, rails, primaryFuseA: p.primaryFuseA, enclosureAreaM2: p.enclosureAreaM2, enclosureUWPerM2K: p.enclosureUWPerM2K },
+    supply: {
+      transformers, rails, primaryFuseA: p.primaryFuseA, enclosureAreaM2: p.enclosureAreaM2, enclosureUWPerM2K: p.enclosureUWPerM2K,
+      // null columns (rows written before migration 0006) stay absent: read as T3 and duty
+      ...(p.primaryFuseSheet !== null ? { primaryFuseSheet: p.primaryFuseSheet as FuseSheet } : {}),
+      ...(p.transformerSizing !== null ? { transformerSizing: p.transformerSizing as TransformerSizing } : {}),
+    },
     stages,
     rf: p.rf as RfSettings,
     parts,
@@ -245,6 +251,8 @@ function projectColumns(p: Project) {
     primaryFuseA: p.supply.primaryFuseA,
     enclosureAreaM2: p.supply.enclosureAreaM2 ?? null,
     enclosureUWPerM2K: p.supply.enclosureUWPerM2K ?? null,
+    primaryFuseSheet: p.supply.primaryFuseSheet ?? null,
+    transformerSizing: p.supply.transformerSizing ?? null,
     rf: p.rf,
     costing: p.costing,
   };

@@ -8,6 +8,7 @@ import { STAGE_DATA } from '../core/spec/stage-data';
 import { loadSpec, stageSpec } from '../core/spec/stage';
 import { mainsSpec, projectFieldsSpec } from '../core/spec/settings';
 import { enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec/supply';
+import { supplyChoicesSpec } from '../core/spec/supply-choices';
 import { batterySpec, rectifiedSpec, regulatedSpec, withRailDefaults } from '../core/spec/supply-rails';
 import { rfSettingsSpec } from '../core/spec/rf-settings';
 import { specFileSchema, specShape, specValueSchema } from './spec-schema';
@@ -82,6 +83,8 @@ export const projectSchema = z.object({
     ...specShape(primaryFuseSpec),
     // files written before the enclosure existed have neither key: read as not stated
     ...Object.fromEntries(Object.entries(specShape(enclosureSpec)).map(([k, s]) => [k, s.optional().transform((v) => v ?? null)])),
+    // the primary fuse's sheet and the sizing basis: files written before them have neither key (read as T3, duty)
+    ...Object.fromEntries(Object.entries(specShape(supplyChoicesSpec)).map(([k, s]) => [k, s.optional()])),
   }),
   stages: z.array(stage).max(100),
   rf,

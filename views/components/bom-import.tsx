@@ -3,7 +3,8 @@
 // to import only the good rows).
 import type { FC } from 'hono/jsx';
 import type { Project } from '../../src/core/model';
-import { IMPORT_FIELDS, IMPORT_FIELD_LABELS, type ImportPreview } from '../../src/core/csv';
+import { IMPORT_FIELDS_FOR, IMPORT_FIELD_LABELS } from '../../src/core/csv/import-mapping';
+import type { ImportPreview, PreviewRow } from '../../src/core/csv';
 import { formatMoney } from '../../src/core/cost/money';
 import { Version } from './supply-transformer';
 
@@ -54,7 +55,6 @@ export interface ImportPreviewProps {
 }
 
 export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileName, stageId, decimal, takeGoodRows, duplicates, existingLines, preview, message }) => {
-  const colOptions: [string, string][] = [['', '(not imported)'], ...preview.headers.map((h, i): [string, string] => [String(i), `Column ${i + 1}: ${h || '(no header)'}`])];
   const blocked = preview.fileErrors.length > 0;
   return (
     <section class="card import-preview" id="import-preview">
@@ -64,20 +64,7 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
           <p>{message}</p>
         </div>
       ) : null}
-      <p class="summary-line">
-        {preview.rows.length} data row(s): <strong>{preview.validRows} good</strong>, <strong>{preview.invalidRows} refused</strong>. Separator “{preview.delimiter === '\t' ? 'tab' : preview.delimiter}”. Nothing has been saved yet.
-        {preview.totalsRows.length ? ` ${preview.totalsRows.length} totals row(s) (rows ${preview.totalsRows.join(', ')}) are recognised and ignored.` : ''}
-      </p>
-      {preview.fileErrors.length ? (
-        <div class="form-errors" role="alert">
-          {preview.fileErrors.map((e) => (
-            <p>
-              {e.column ? `${e.column}: ` : ''}
-              {e.message}
-            </p>
-          ))}
-        </div>
-      ) : null}
+      <PreviewSummary preview={preview} />
       <form method="post" action={`/projects/${project.id}/bom/import`}>
         <Version version={project.version} />
         <input type="hidden" name="fileName" value={fileName} />
@@ -86,29 +73,8 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
         </textarea>
         <h2>Which column is which</h2>
         <div class="row">
-          {IMPORT_FIELDS.map((f) => (
-            <label class="field" for={`map-${f}`}>
-              <span class="label">{IMPORT_FIELD_LABELS[f]}</span>
-              <select id={`map-${f}`} name={`map_${f}`}>
-                {colOptions.map(([v, t]) => (
-                  <option value={v} selected={String(preview.mapping[f] ?? '') === v}>
-                    {t}
-                  </option>
-                ))}
-              </select>
-            </label>
-          ))}
-          <label class="field" for="imp-decimal">
-            <span class="label">Decimal mark in prices</span>
-            <select id="imp-decimal" name="decimal">
-              <option value="." selected={decimal === '.'}>
-                point (1,250.50)
-              </option>
-              <option value="," selected={decimal === ','}>
-                comma (1.250,50)
-              </option>
-            </select>
-          </label>
+          <ColumnChoices preview={preview} />
+          <DecimalChoice decimal={decimal} />
           <label class="field" for="imp-stage2">
             <span class="label">Stage for the imported lines</span>
             <select id="imp-stage2" name="stageId">
@@ -175,20 +141,7 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
               <td class="num">{r.values.quantity ?? '–'}</td>
               <td>{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
               <td class="num">{r.values.priceCents === null ? '' : formatMoney(r.values.priceCents, r.values.currency ?? project.currency)}</td>
-              <td>
-                {r.errors.map((e) => (
-                  <span class="row-error">
-                    <span class="sev sev-fail">refused</span> {e.column ? `${e.column}: ` : ''}
-                    {e.message}{' '}
-                  </span>
-                ))}
-                {r.warnings.map((e) => (
-                  <span class="row-warning">
-                    <span class="sev sev-caution">check</span> {e.column ? `${e.column}: ` : ''}
-                    {e.message}{' '}
-                  </span>
-                ))}
-              </td>
+              <RowProblems row={r} />
             </tr>
           ))}
         </tbody>
@@ -197,3 +150,78 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
     </section>
   );
 };
+
+// ------------------------------------------------------------ parts shared with the supplier price-list import
+
+/** Rows counted, the separator, totals rows skipped, and the problems that block the whole file. */
+export const PreviewSummary: FC<{ preview: ImportPreview }> = ({ preview }) => (
+  <>
+    <p class="summary-line">
+      {preview.rows.length} data row(s): <strong>{preview.validRows} good</strong>, <strong>{preview.invalidRows} refused</strong>. Separator “{preview.delimiter === '\t' ? 'tab' : preview.delimiter}”. Nothing has been saved yet.
+      {preview.totalsRows.length ? ` ${preview.totalsRows.length} totals row(s) (rows ${preview.totalsRows.join(', ')}) are recognised and ignored.` : ''}
+    </p>
+    {preview.fileErrors.length ? (
+      <div class="form-errors" role="alert">
+        {preview.fileErrors.map((e) => (
+          <p>
+            {e.column ? `${e.column}: ` : ''}
+            {e.message}
+          </p>
+        ))}
+      </div>
+    ) : null}
+  </>
+);
+
+/** One select per field the kind of import reads: which column feeds it. */
+export const ColumnChoices: FC<{ preview: ImportPreview }> = ({ preview }) => {
+  const colOptions: [string, string][] = [['', '(not imported)'], ...preview.headers.map((h, i): [string, string] => [String(i), `Column ${i + 1}: ${h || '(no header)'}`])];
+  return (
+    <>
+      {IMPORT_FIELDS_FOR[preview.kind].map((f) => (
+        <label class="field" for={`map-${f}`}>
+          <span class="label">{IMPORT_FIELD_LABELS[f]}</span>
+          <select id={`map-${f}`} name={`map_${f}`}>
+            {colOptions.map(([v, t]) => (
+              <option value={v} selected={String(preview.mapping[f] ?? '') === v}>
+                {t}
+              </option>
+            ))}
+          </select>
+        </label>
+      ))}
+    </>
+  );
+};
+
+export const DecimalChoice: FC<{ decimal: '.' | ',' }> = ({ decimal }) => (
+  <label class="field" for="imp-decimal">
+    <span class="label">Decimal mark in prices</span>
+    <select id="imp-decimal" name="decimal">
+      <option value="." selected={decimal === '.'}>
+        point (1,250.50)
+      </option>
+      <option value="," selected={decimal === ','}>
+        comma (1.250,50)
+      </option>
+    </select>
+  </label>
+);
+
+/** A preview row's refusals and warnings, each naming its column. */
+export const RowProblems: FC<{ row: PreviewRow }> = ({ row: r }) => (
+  <td>
+    {r.errors.map((e) => (
+      <span class="row-error">
+        <span class="sev sev-fail">refused</span> {e.column ? `${e.column}: ` : ''}
+        {e.message}{' '}
+      </span>
+    ))}
+    {r.warnings.map((e) => (
+      <span class="row-warning">
+        <span class="sev sev-caution">check</span> {e.column ? `${e.column}: ` : ''}
+        {e.message}{' '}
+      </span>
+    ))}
+  </td>
+);

@@ -10,6 +10,7 @@ import { PartCard, PartFields, partValues } from '../components/parts-part';
 import { CostingCard, SuppliersCard } from '../components/parts-costing';
 import { EmptyState } from '../components/empty-state';
 import { PART_CATEGORIES } from '../../src/core/spec/parts-categories';
+import { CatalogImportForm } from '../components/catalog-import';
 
 export interface PartsBodyProps {
   project: Project;
@@ -64,6 +65,7 @@ export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPar
             <button type="submit">Add part</button>
           </div>
         </form>
+        <CatalogImportForm project={project} error={failed?.form === 'catalog-import' ? failed.state.errors._form : undefined} />
         {project.parts.map((part) => (
           <PartCard project={project} part={part} failed={failed} uses={uses(part.id)} open={part.id === openPart} />
         ))}

@@ -8,6 +8,7 @@ import { mainsSpec, newProjectSpec, settingsSpec } from './settings';
 import { rfSettingsSpec } from './rf-settings';
 import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
 import { batterySpec, rectifiedSpec, regulatedSpec } from './supply-rails';
+import { supplyChoicesSpec } from './supply-choices';
 import { offerSpec, partSpec, supplierSpec } from './parts';
 import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
@@ -17,9 +18,11 @@ export { validate, formValues, parseForm, defaults, pick, readField } from './de
 export { paSpec, lpfSpec, relaySpec, stageSpec, loadSpec };
 export { settingsSpec, mainsSpec, newProjectSpec, rfSettingsSpec };
 export { transformerSpec, windingSpec, primaryFuseSpec, enclosureSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec };
+export { supplyChoicesSpec };
 export { partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec };
 
 export const ALL_SPECS: Spec[] = [stageSpec, loadSpec, paSpec, lpfSpec, relaySpec,
   settingsSpec, rfSettingsSpec,
   transformerSpec, windingSpec, primaryFuseSpec, enclosureSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec,
+  supplyChoicesSpec,
   partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec];

@@ -14,6 +14,7 @@ import { settingsSpec } from './settings';
 import { rfSettingsSpec } from './rf-settings';
 import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
 import { batterySpec, rectifiedSpec, regulatedSpec } from './supply-rails';
+import { supplyChoices, supplyChoicesSpec } from './supply-choices';
 
 /** One stored object and the words that name it ("Stage 'PA', PA data"). */
 export interface Located {
@@ -44,6 +45,8 @@ export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
   { spec: settingsSpec, at: (p) => [{ subject: 'Project settings', value: p }] },
   { spec: rfSettingsSpec, at: (p) => [{ subject: 'RF settings', value: p.rf }] },
   { spec: enclosureSpec, at: (p) => [{ subject: 'Enclosure', value: p.supply }] },
+  // absent in older data: read as T3 and duty (the defaults), a stored value outside the choices is refused
+  { spec: supplyChoicesSpec, at: (p) => [{ subject: 'Supply choices', value: supplyChoices(p.supply) }] },
   // The supply's objects are checked by the supply design itself (power/supply-inputs.ts, same specs), because a
   // refused transformer, winding or rail must also be left out of the design with everything that depends on it;
   // listing them here too would report each refusal twice. The add-rail form has no stored object.

@@ -61,6 +61,37 @@ export const rectifiedSpec = defineSpec({
       help: 'empty = not stated',
       example: '1',
     }),
+    // the rectifier package (bridge or diodes): datasheet values; θsa empty = no heatsink fitted
+    'bridgeMount.thetaJcKPerW': optNum('Rectifier θjc', 'K/W', U.KW, 0, 100, null, { form: 'bridgeThetaJc', example: '2.2' }),
+    'bridgeMount.thetaCsKPerW': optNum('Rectifier θcs', 'K/W', U.KW, 0, 100, null, { form: 'bridgeThetaCs', help: 'greased about 0.5', example: '0.5' }),
+    'bridgeMount.thetaSaKPerW': optNum('Rectifier heatsink θsa', 'K/W', U.KW, 0, 1000, null, {
+      form: 'bridgeThetaSa',
+      exclusiveMin: true,
+      help: 'empty = no heatsink',
+      example: '5',
+    }),
+    'bridgeMount.tjMaxC': optNum('Rectifier Tj max', '°C', U.C, 50, 250, null, { form: 'bridgeTjMax', example: '150' }),
+    bridgeFreeAirKPerW: optNum('Rectifier θja (free air)', 'K/W', U.KW, 0, 1000, null, {
+      form: 'bridgeThetaJa',
+      exclusiveMin: true,
+      help: 'without heatsink; empty = assumed 22',
+      example: '22',
+    }),
+  },
+  refine: (v): FieldError[] => {
+    // θsa alone may stay empty (no heatsink); once any value is entered θjc, θcs and Tj max are needed
+    const keys = ['bridgeMount.thetaJcKPerW', 'bridgeMount.thetaCsKPerW', 'bridgeMount.tjMaxC'];
+    if (![...keys, 'bridgeMount.thetaSaKPerW'].some((k) => present(v, k))) return [];
+    const label = (k: string): string => (rectifiedSpec.fields as Record<string, { label: string }>)[k].label;
+    return keys.filter((k) => !present(v, k)).map((k) => ({ field: k, label: label(k), message: `${label(k)}: needed once any rectifier heatsink value is entered (leave them all empty for the assumed part)` }));
+  },
+  view: {
+    from: (stored) => stored,
+    to: (v) => {
+      const mount = v.bridgeMount as Obj | null | undefined;
+      const hasMount = !!mount && Object.values(mount).some((x) => x !== null && x !== undefined);
+      return { ...v, bridgeMount: hasMount ? mount : null };
+    },
   },
 });
 
@@ -138,6 +169,9 @@ export const regulatedSpec = defineSpec({
       help: 'e.g. a receiver rail; empty = none',
       example: '1',
     }),
+    outputF: optNum('Output capacitance', 'F', U.uF, 0, 10, null, { form: 'outputC', exclusiveMin: true, help: 'all capacitors on the output; empty = not entered', example: '100' }),
+    bleederOhm: optNum('Output bleeder', 'Ω', U.ohm, 0, 1e9, null, { form: 'outBleeder', exclusiveMin: true, help: 'empty = none fitted', example: '2k2' }),
+    bleederRatedW: optNum('Output bleeder rating', 'W', U.W, 0, 1000, null, { form: 'outBleederW', exclusiveMin: true, help: 'empty = not stated', example: '0.25' }),
   },
   refine: (v) => {
     const errors: FieldError[] = [];
@@ -204,7 +238,12 @@ export const RAIL_SPECS: Record<Rail['kind'], Spec> = { rectified: rectifiedSpec
 /** Rails stored before the winding fuse, bleeder rating and ripple fields existed read them as not stated (fuse type T3). */
 export function withRailDefaults(r: Rail): Rail {
   const old = r as unknown as Partial<Record<string, unknown>>;
-  if (r.kind === 'regulated') return { ...r, rippleRejectionDb: r.rippleRejectionDb ?? null, rippleTargetV: r.rippleTargetV ?? null };
+  if (r.kind === 'regulated') {
+    return {
+      ...r, rippleRejectionDb: r.rippleRejectionDb ?? null, rippleTargetV: r.rippleTargetV ?? null,
+      outputF: r.outputF ?? null, bleederOhm: r.bleederOhm ?? null, bleederRatedW: r.bleederRatedW ?? null,
+    };
+  }
   const base = { ...r, minimumV: (old.minimumV as number | null | undefined) ?? null };
   if (base.kind === 'battery') return base;
   return {
@@ -212,5 +251,7 @@ export function withRailDefaults(r: Rail): Rail {
     windingFuseA: (old.windingFuseA as number | null | undefined) ?? null,
     windingFuseSheet: (old.windingFuseSheet as RectifiedRail['windingFuseSheet'] | undefined) ?? 'T3',
     bleederRatedW: (old.bleederRatedW as number | null | undefined) ?? null,
+    bridgeMount: (old.bridgeMount as RectifiedRail['bridgeMount']) ?? null,
+    bridgeFreeAirKPerW: (old.bridgeFreeAirKPerW as number | null | undefined) ?? null,
   };
 }

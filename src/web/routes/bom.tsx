@@ -10,6 +10,7 @@ import { sendPage } from '../render';
 import { versionField } from '../form';
 import type { Deps } from '../deps';
 import { newId } from '../ids';
+import { readCsvUpload } from '../csv-upload';
 import { lineSchema, mappingFrom } from '../bom-forms';
 import { deleteLine, mergeImport, saveLine } from '../../core/edits/parts-list';
 import { bindCandidate } from '../../core/edits/bind-role';
@@ -21,7 +22,7 @@ import { ImportPreviewBody, type ImportPreviewProps } from '../../../views/compo
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 
-export const CSV_IMPORT_LIMIT_BYTES = 2 * 1024 * 1024;
+export { CSV_IMPORT_LIMIT_BYTES } from '../csv-upload';
 
 const body = (p: Project, failed?: Failed, notice?: string) => {
   const report = evaluate(p);
@@ -42,18 +43,9 @@ const importIds = (kind: IdKind) => newId(kind === 'part' ? 'p' : kind === 'offe
 
 /** Read the import request: an uploaded file (first step) or the CSV text carried by the preview form. */
 async function readImport(c: Context): Promise<ImportState | { error: string; status: 413 | 422 }> {
-  const form = await c.req.parseBody();
-  const values: Record<string, string> = {};
-  for (const [k, v] of Object.entries(form)) if (typeof v === 'string') values[k] = v;
-  let csv = values.csv ?? '';
-  let fileName = values.fileName ?? '';
-  const file = form.file;
-  if (file instanceof File && file.size > 0) {
-    if (file.size > CSV_IMPORT_LIMIT_BYTES) return { error: `The file is ${file.size} bytes; the limit is ${CSV_IMPORT_LIMIT_BYTES / 1024 / 1024} MiB.`, status: 413 };
-    csv = await file.text();
-    fileName = file.name;
-  }
-  if (csv.trim() === '') return { error: 'No file was chosen (or it is empty): choose a CSV file and press Preview.', status: 422 };
+  const upload = await readCsvUpload(c);
+  if ('error' in upload) return upload;
+  const { values, csv, fileName } = upload;
   const duplicates = values.duplicates === 'merge' || values.duplicates === 'skip' ? values.duplicates : '';
   return { values, csv, fileName, stageId: values.stageId ?? '', decimal: values.decimal === ',' ? ',' : '.', takeGoodRows: values.takeGoodRows === 'true', duplicates, existingLines: 0 };
 }

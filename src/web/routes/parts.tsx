@@ -3,7 +3,15 @@ import { Hono, type Context } from 'hono';
 import { z } from 'zod';
 import type { Part, Project, Supplier } from '../../core/model';
 import { addPart, gone, saveCosting, saveOffer, savePart, saveSupplier } from '../../core/edits/catalog';
-import { loadProject } from '../../db/projects';
+import { loadProject, updateProject, VersionConflict, NotFound } from '../../db/projects';
+import { guessDelimiter, guessMapping, parseCsv, planImport, previewImport } from '../../core/csv';
+import { applyCatalogUpdate, planCatalogUpdate } from '../../core/csv/catalog-update';
+import { storedProblem } from '../../core/spec/derive';
+import { offerSpec } from '../../core/spec/parts';
+import { versionField } from '../form';
+import { readCsvUpload } from '../csv-upload';
+import { mappingFrom } from '../bom-forms';
+import { CatalogPreviewBody } from '../../../views/components/catalog-import';
 import { projectEdit, doneNotice } from '../edit';
 import { sendPage } from '../render';
 import type { Deps } from '../deps';
@@ -34,6 +42,15 @@ function supplierAt(p: Project, c: Context): { index: number; s: Supplier } | nu
   return s ? { index, s } : null;
 }
 
+/** The line after a price-list import, from the counts in the redirect's query. */
+function importedNotice(c: Context): string | undefined {
+  if (c.req.query('done') !== 'catalog') return undefined;
+  const n = (k: string) => Number(c.req.query(k)) || 0;
+  return `Price list imported: ${n('changed')} offer(s) changed, ${n('parts')} new part(s), ${n('offers')} new offer(s) for catalog parts` +
+    (n('gone') ? `, ${n('gone')} offer(s) gone from the list removed` : '') + (n('kept') ? `, ${n('kept')} offer(s) gone from the list kept` : '') +
+    (n('skipped') ? `; ${n('skipped')} refused row(s) skipped` : '') + '.';
+}
+
 export function partsRoutes(deps: Deps) {
   const app = new Hono();
   const pageUrl = (p: Project) => `/projects/${p.id}/parts`;
@@ -43,7 +60,58 @@ export function partsRoutes(deps: Deps) {
   app.get('/projects/:id/parts', async (c) => {
     const project = await loadProject(deps.database.db, c.req.param('id'));
     if (!project) return c.notFound();
-    return sendPage(c, partsPage(project, undefined, doneNotice(c), c.req.query('open')));
+    return sendPage(c, partsPage(project, undefined, doneNotice(c) ?? importedNotice(c), c.req.query('open')));
+  });
+
+  // ------------------------------------------------------------ a supplier's price list: preview until Import
+  app.post('/projects/:id/parts/import', async (c) => {
+    const id = c.req.param('id');
+    const project = await loadProject(deps.database.db, id);
+    if (!project) return c.notFound();
+    const upload = await readCsvUpload(c);
+    if ('error' in upload) return sendPage(c, partsPage(project, { form: 'catalog-import', state: { values: {}, errors: { _form: upload.error } } }), upload.status);
+    const { values, csv, fileName } = upload;
+    const supplier = (values.supplier ?? '').trim();
+    const supplierProblem = supplier === '' ? '' : storedProblem(offerSpec.fields.supplier, supplier);
+    const decimal = values.decimal === ',' ? ',' : '.';
+    const delimiter = guessDelimiter(csv);
+    const headers = (parseCsv(csv, delimiter).records[0] ?? []).map((h) => h.trim());
+    const mapping = mappingFrom(values, guessMapping(headers, 'catalog'), headers.length);
+    const preview = previewImport(csv, { kind: 'catalog', defaultCurrency: project.currency, decimal, delimiter, mapping, defaultSupplier: supplierProblem ? '' : supplier });
+    const takeGoodRows = values.takeGoodRows === 'true';
+    const removeGone = values.removeGone === 'true';
+    const plan = planImport(preview, { takeGoodRows });
+    const updateOf = (p: Project) => (plan.ok ? planCatalogUpdate(p, plan.rows) : null);
+    const show = (p: Project, status: 200 | 409 | 422, message?: string) =>
+      sendPage(c, (
+        <Layout title={`Price list preview · ${p.name}`} project={p} section="parts">
+          <CatalogPreviewBody project={p} csv={csv} fileName={fileName} supplier={supplier} decimal={decimal} takeGoodRows={takeGoodRows} removeGone={removeGone} preview={preview} update={updateOf(p)} message={message} />
+        </Layout>
+      ), status);
+    if (supplierProblem) return show(project, 422, `Supplier ${supplierProblem}; nothing was imported.`);
+    if (values.action !== 'import') return show(project, 200);
+    if (!plan.ok) {
+      const why = preview.fileErrors.length ? 'the file or the column choices have problems (listed above)' : `${preview.invalidRows} row(s) are refused`;
+      return show(project, 422, `Nothing was imported: ${why}. Correct the file or the column choices, or tick “Import only the good rows”.`);
+    }
+    const version = versionField.safeParse(values.version);
+    if (!version.success) return show(project, 422, 'The form had no version number; reload the page.');
+    const update = planCatalogUpdate(project, plan.rows);
+    if (update.errors.length) return show(project, 422, 'Nothing was imported: the file names an offer twice (listed above).');
+    const makeId = (k: 'part' | 'offer') => newId(k === 'part' ? 'p' : 'o');
+    try {
+      await updateProject(deps.database, id, version.data, (p) => applyCatalogUpdate(p, planCatalogUpdate(p, plan.rows), { removeGone, makeId, rows: plan.rows }), deps.now().toISOString());
+    } catch (e) {
+      if (e instanceof VersionConflict) {
+        const fresh = (await loadProject(deps.database.db, id)) ?? project;
+        return show(fresh, 409, 'Not imported: this project was changed in another tab or window since the preview was made. The preview now compares with the stored catalog; press Import again to apply it.');
+      }
+      if (e instanceof NotFound) return c.notFound();
+      throw e;
+    }
+    const n = update.counts;
+    const q = `done=catalog&changed=${n.up + n.down + n.mixed + n.terms}&parts=${n['new-part']}&offers=${n['new-offer']}&gone=${removeGone ? n.gone : 0}&kept=${removeGone ? 0 : n.gone}&skipped=${new Set(plan.skipped.map((e) => e.row)).size}`;
+    return c.redirect(`${pageUrl(project)}?${q}`, 303);
   });
 
   app.post('/projects/:id/costing', projectEdit(deps, { ...common, form: 'costing', schema: F.costingSchema, values: costingValues, change: saveCosting }));
