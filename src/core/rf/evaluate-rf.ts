@@ -3,7 +3,8 @@ import { type Finding, sortFindings } from '../findings';
 import type { Project, Stage } from '../model';
 import { evaluateExposure } from './exposure';
 import { harmonicCompliance, paHarmonicDbc } from './harmonics';
-import { analyseLpf } from './lpf-analysis';
+import { analyseLpf, harmonicsFromSource, ladderOf } from './lpf-analysis';
+import { paSource } from './pa-source';
 import { designLpf } from './lpf-design';
 import { monteCarloLpf } from './lpf-monte-carlo';
 import { validateRfInputs, validateRfSettings } from './lpf-validate';
@@ -166,11 +167,23 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     all.push({ severity: 'caution', rule: 'rf.no-pa', subject: 'Final amplifier', value: null, limit: null, unit: '', source: 'design.consistency',
       message: 'No final amplifier stage with PA settings: harmonics, relay and exposure use the target power instead.' });
   }
+  // the PA's source impedance at each harmonic into the filter (issue item: not 50 Ω for a switching stage)
+  const paRes = stages.find((x) => x.stageId === paStage?.id)?.pa ?? null;
+  const src = paStage?.pa && paRes && !paRes.refused && paRes.primaryOhm > 0 && lpfRes?.design
+    ? paSource({
+      pa: paStage.pa, primaryOhm: paRes.primaryOhm, peakDeviceA: paRes.peakDeviceA,
+      classESimulated: spectrum?.bands.some((b) => String(b.basis) === 'class-e-simulated') ?? false,
+    })
+    : null;
+  const sourced = src && lpfRes?.design
+    ? { label: src.label, rows: harmonicsFromSource(ladderOf(lpfRes.design), frequencyHz, src.kind, src.zsAt) }
+    : null;
   const harmonics = okFreq && targetPowerW > 0
     ? harmonicCompliance({
       rule: project.rf.spuriousRule, topology, evenHarmonicDbc: evenDbc, fundamentalW: outputPowerW, frequencyHz, passbandLossDb,
       filter: lpfRes?.analysis ? lpfRes.analysis.harmonics : null, monteCarlo: lpfRes?.monteCarlo ?? null,
       ...(spectrum ? { spectrum: spectrum.bands } : {}),
+      ...(sourced ? { source: sourced } : {}),
     })
     : null;
   if (harmonics) all.push(...harmonics.findings);

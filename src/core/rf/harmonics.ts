@@ -4,6 +4,7 @@ import type { SourceKey } from '../sources/registry';
 import type { PaParams, RfSettings } from '../model';
 import type { MonteCarloResult } from './lpf-monte-carlo';
 import type { HarmonicBand, SpectrumBasis } from './pa-spectrum';
+import type { SourcedHarmonic } from './lpf-analysis';
 
 /** Harmonic level at the antenna below which a home-built filter and layout no longer set it, dBc. Common practice, no published source. */
 export const CONSTRUCTION_FLOOR_DBC = -70;
@@ -46,7 +47,7 @@ export function paHarmonicDbc(topology: PaParams['topology'], evenHarmonicDbc: n
   return { dbc: 20 * Math.log10(1 / n), basis: 'rectangular-50%-1/n' };
 }
 
-const BASIS_WHAT: Record<HarmonicBasis, string> = {
+const BASIS_WHAT: Partial<Record<string, string>> = {
   'square-wave-1/n': 'square-wave estimate',
   'balance-residual': 'push-pull balance residual as entered',
   'rectangular-50%-1/n': 'single-ended estimate at 50 % duty',
@@ -55,6 +56,8 @@ const BASIS_WHAT: Record<HarmonicBasis, string> = {
   'saturation-bound': 'clean sine to hard-clipped square wave',
   'rectangular-wave': 'rectangular wave, duty 50 % to the stated worst imbalance',
   'class-e-estimate': 'class E taken as a rectangular wave (pessimistic, not simulated)',
+  'trapezoid-wave': 'switched wave with finite edges, duty 50 % to the stated worst imbalance',
+  'class-e-simulated': 'load current of the simulated class-E stage',
 };
 
 export interface HarmonicRow {
@@ -65,8 +68,18 @@ export interface HarmonicRow {
   paLevelDbc: number;
   paLevelBestDbc: number;
   paLevelBasis: HarmonicBasis;
-  /** Filter attenuation at n f relative to its loss at f (nominal as built), dB; 0 when there is no filter. */
+  /**
+   * Filter attenuation at n f relative to its loss at f (nominal as built), dB; 0 when there is no filter. With the
+   * PA's source impedance (sourceBasis) when known, else between 50 Ω terminations.
+   */
   filterAttenuationDb: number;
+  /** The same between 50 Ω terminations, dB (null without a filter). */
+  filterAttenuation50Db: number | null;
+  /** What the filter attenuation assumes at the source: the PA's source (in words) or '50 Ω'. */
+  sourceBasis: string;
+  /** The PA's source impedance at n f at the filter's input, Ω (null = infinite or not used). */
+  sourceZsReOhm: number | null;
+  sourceZsImOhm: number | null;
   /** Same at the Monte Carlo worst case and percentile (null without Monte Carlo). */
   worstFilterAttenuationDb: number | null;
   percentileFilterAttenuationDb: number | null;
@@ -118,6 +131,8 @@ export interface HarmonicInput {
   monteCarlo: MonteCarloResult | null;
   /** The PA's harmonic bands by class (pa-spectrum); absent = square-wave odd / balance-residual even estimate. */
   spectrum?: HarmonicBand[];
+  /** Filter rejection with the PA's source impedance at each harmonic (lpf-analysis harmonicsFromSource). */
+  source?: { label: string; rows: SourcedHarmonic[] };
 }
 
 export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
@@ -131,9 +146,13 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
     const nominal = inp.filter?.find((h) => h.n === n)?.attenuationDb ?? 0;
     const mc = inp.monteCarlo?.harmonics.find((h) => h.n === n) ?? null;
     const rel = (a: number) => a - inp.passbandLossDb;
-    const filterAttenuationDb = inp.filter ? rel(nominal) : 0;
+    const src = inp.filter ? inp.source?.rows.find((r) => r.n === n) ?? null : null;
+    // the PA's own source impedance changes the rejection by (sourced − 50 Ω); the tolerance spread is taken as
+    // the 50 Ω Monte Carlo's, shifted by the same amount (approximation)
+    const shift = src ? src.relativeAttenuationDb - rel(nominal) : 0;
+    const filterAttenuationDb = inp.filter ? rel(nominal) + shift : 0;
     const predictedDbc = pa.dbc - filterAttenuationDb;
-    const worst = mc ? rel(mc.worstAttenuationDb) : null;
+    const worst = mc ? rel(mc.worstAttenuationDb) + shift : null;
     const worstPredictedDbc = worst === null ? null : pa.dbc - worst;
     const predictedBestDbc = pa.best - filterAttenuationDb;
     const floor = (x: number) => Math.max(x, CONSTRUCTION_FLOOR_DBC);
@@ -142,11 +161,14 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
     const severity: Finding['severity'] = marginDb < 0 ? 'fail' : (worstMarginDb !== null && worstMarginDb < 0) || marginDb < 3 ? 'caution' : 'ok';
     const row: HarmonicRow = {
       n, frequencyHz: n * inp.frequencyHz, paLevelDbc: pa.dbc, paLevelBestDbc: pa.best, paLevelBasis: pa.basis, filterAttenuationDb,
+      filterAttenuation50Db: inp.filter ? rel(nominal) : null, sourceBasis: src ? inp.source!.label : '50 Ω',
+      sourceZsReOhm: src?.zsReOhm ?? null, sourceZsImOhm: src?.zsImOhm ?? null,
       predictedBestDbc, limitedByConstruction: predictedDbc < CONSTRUCTION_FLOOR_DBC, bestLimitedByConstruction: predictedBestDbc < CONSTRUCTION_FLOOR_DBC,
-      worstFilterAttenuationDb: worst, percentileFilterAttenuationDb: mc ? rel(mc.percentileAttenuationDb) : null,
+      worstFilterAttenuationDb: worst, percentileFilterAttenuationDb: mc ? rel(mc.percentileAttenuationDb) + shift : null,
       predictedDbc, worstPredictedDbc, requiredDb, neededFilterAttenuationDb: requiredDb + pa.dbc, marginDb, worstMarginDb, severity,
     };
-    const what = BASIS_WHAT[pa.basis];
+    const srcWhat = src ? `; filter from the PA's source, ${inp.source!.label}` : '';
+    const what = `${BASIS_WHAT[pa.basis] ?? pa.basis}${srcWhat}`;
     const lvl = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'limited by construction' : `${x.toFixed(1)} dBc`);
     const bandText = !band ? null : predictedDbc < CONSTRUCTION_FLOOR_DBC ? 'limited by construction at the antenna'
       : `${lvl(predictedBestDbc)} to ${lvl(predictedDbc)} at the antenna`;

@@ -1,4 +1,5 @@
-// ABCD (chain-matrix) analysis of the as-built ladder between equal terminations, with finite Q.
+// ABCD (chain-matrix) analysis of the as-built ladder between equal terminations, with finite Q, and from the PA's
+// own source impedance at each harmonic.
 import { bandOf } from './bands';
 import type { LpfDesign } from './lpf-design';
 
@@ -122,4 +123,95 @@ export function analyseLpf(design: LpfDesign, sweepPoints = 161): LpfAnalysis {
   const a = Math.log(0.5 * f0), b = Math.log(6 * f0);
   for (let i = 0; i < sweepPoints; i++) sweep.push(pointAt(l, Math.exp(a + ((b - a) * i) / (sweepPoints - 1))));
   return { atOperating: pointAt(l, f0), bandLowHz: lo, bandHighHz: hi, bandMaxLossDb, bandMaxSwr, harmonics, sweep };
+}
+
+/** Complex number as a pair. */
+export interface Cx { re: number; im: number }
+const cmul = (a: Cx, b: Cx): Cx => ({ re: a.re * b.re - a.im * b.im, im: a.re * b.im + a.im * b.re });
+const cadd = (a: Cx, b: Cx): Cx => ({ re: a.re + b.re, im: a.im + b.im });
+const cdiv = (a: Cx, b: Cx): Cx => {
+  const d = b.re * b.re + b.im * b.im;
+  return { re: (a.re * b.re + a.im * b.im) / d, im: (a.im * b.re - a.re * b.im) / d };
+};
+
+/** Chain matrix [A, B, C, D] of the ladder at f (same element and loss model as evalLadder). */
+export function chainMatrix(l: Ladder, frequencyHz: number): [Cx, Cx, Cx, Cx] {
+  const w = 2 * Math.PI * frequencyHz;
+  let a: Cx = { re: 1, im: 0 }, b: Cx = { re: 0, im: 0 }, c: Cx = { re: 0, im: 0 }, d: Cx = { re: 1, im: 0 };
+  for (let k = 0; k < l.values.length; k++) {
+    const x = l.values[k];
+    if (l.kinds[k] === 1) {
+      // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.1 (from memory): series Z -> [[1, Z], [0, 1]]
+      const z: Cx = { re: (w * x) / l.inductorQ, im: w * x };
+      b = cadd(cmul(a, z), b);
+      d = cadd(cmul(c, z), d);
+    } else {
+      // Source: Pozar (2012), Table 4.1 (from memory): shunt Y -> [[1, 0], [Y, 1]]
+      const y: Cx = { re: (w * x) / l.capacitorQ, im: w * x };
+      a = cadd(a, cmul(b, y));
+      c = cadd(c, cmul(d, y));
+    }
+  }
+  return [a, b, c, d];
+}
+
+/**
+ * What the PA's harmonic level describes: 'thevenin' the open-circuit voltage behind the source impedance (a
+ * voltage-switching stage), 'norton' the short-circuit current beside it (a current-source stage; null impedance =
+ * ideal), 'design-load' the current the stage drives into its design load r0 (a simulated stage).
+ */
+export type SourceKind = 'thevenin' | 'norton' | 'design-load';
+
+/**
+ * Load voltage per unit of the source quantity through the ladder into the resistive load zl, with source impedance
+ * zs (null = infinite, Norton only). Source: two-port chain relations (circuit theory, textbook; e.g. Pozar 2012,
+ * section 4.4, from memory): V_L / E_s = Z_L / (A Z_L + B + Z_s (C Z_L + D)); Norton I_s = E_s / Z_s.
+ */
+export function sourceTransfer(l: Ladder, frequencyHz: number, kind: SourceKind, zs: Cx | null, zlOhm = l.r0Ohm): Cx {
+  const [a, b, c, d] = chainMatrix(l, frequencyHz);
+  const zl: Cx = { re: zlOhm, im: 0 };
+  const cz = cadd(cmul(c, zl), d);
+  const az = cadd(cmul(a, zl), b);
+  if (zs === null) {
+    if (kind !== 'norton') throw new Error('an infinite source impedance needs a Norton source');
+    // limit Z_s -> infinity of Z_s Z_L / (A Z_L + B + Z_s (C Z_L + D)) = Z_L / (C Z_L + D)
+    return cdiv(zl, cz);
+  }
+  const h = cdiv(zl, cadd(az, cmul(zs, cz)));
+  if (kind === 'thevenin') return h;
+  if (kind === 'norton') return cmul(zs, h);
+  // current I into r0 from E_s behind Z_s: E_s = I (Z_s + r0)
+  return cmul(cadd(zs, { re: l.r0Ohm, im: 0 }), h);
+}
+
+export interface SourcedHarmonic {
+  n: number;
+  /** Harmonic n at the load relative to the fundamental, against the same ratio at the source, dB (positive = less). */
+  relativeAttenuationDb: number;
+  /** The same between 50 Ω terminations (loss at n f minus loss at f), dB, for comparison. */
+  relative50Db: number;
+  /** Source impedance at n f referred to the filter's input, Ω (null = infinite). */
+  zsReOhm: number | null;
+  zsImOhm: number | null;
+}
+
+/**
+ * Filter rejection of harmonics 2..5 relative to the fundamental with the PA's source impedance zsAt(n) (n = 1 the
+ * fundamental): 20 log |H(f) / H(n f)|, H from sourceTransfer.
+ */
+export function harmonicsFromSource(
+  l: Ladder, f0Hz: number, kind: SourceKind, zsAt: (n: number) => Cx | null, ns: readonly number[] = [2, 3, 4, 5],
+): SourcedHarmonic[] {
+  const mag = (x: Cx) => Math.hypot(x.re, x.im);
+  const h1 = mag(sourceTransfer(l, f0Hz, kind, zsAt(1)));
+  const p1 = pointAt(l, f0Hz).lossDb;
+  return ns.map((n) => {
+    const zs = zsAt(n);
+    const hn = mag(sourceTransfer(l, n * f0Hz, kind, zs));
+    // Source: definition of the decibel for voltage ratios, 20 log10
+    return {
+      n, relativeAttenuationDb: 20 * Math.log10(h1 / hn), relative50Db: pointAt(l, n * f0Hz).lossDb - p1,
+      zsReOhm: zs ? zs.re : null, zsImOhm: zs ? zs.im : null,
+    };
+  });
 }
