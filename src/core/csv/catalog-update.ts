@@ -67,8 +67,15 @@ function offerOf(r: ImportedRow, id: string, stockNote = ''): Offer {
   };
 }
 
-/** What importing the good rows of a supplier list into the project would change. */
-export function planCatalogUpdate(project: Pick<Project, 'parts' | 'costing'>, rows: readonly ImportedRow[]): CatalogUpdate {
+/**
+ * What importing the good rows of a supplier list into the project would change. `refused` are the file's rows left
+ * out (good rows only): the offers they name are still listed, so they are never counted as gone.
+ */
+export function planCatalogUpdate(
+  project: Pick<Project, 'parts' | 'costing'>,
+  rows: readonly ImportedRow[],
+  refused: readonly Pick<ImportedRow, 'supplier' | 'sku' | 'description' | 'value'>[] = [],
+): CatalogUpdate {
   const existing = new Map<string, { part: Part; offer: Offer }>();
   for (const part of project.parts) for (const offer of part.offers) existing.set(offerKey(offer.supplier, offer.sku, part.description), { part, offer });
   const changes: CatalogChange[] = [];
@@ -99,8 +106,9 @@ export function planCatalogUpdate(project: Pick<Project, 'parts' | 'costing'>, r
   }
   // offers of the suppliers this file lists that the file no longer has
   const listed = new Set(rows.map((r) => norm(r.supplier)));
+  const stillListed = new Set(refused.map((r) => offerKey(r.supplier, r.sku, r.description || r.value)));
   for (const [key, { part, offer }] of existing)
-    if (listed.has(norm(offer.supplier)) && !seen.has(key))
+    if (listed.has(norm(offer.supplier)) && !seen.has(key) && !stillListed.has(key))
       changes.push({ kind: 'gone', partId: part.id, offerId: offer.id, description: part.description, supplier: offer.supplier, sku: offer.sku, before: offer });
   const known = new Set(project.costing.suppliers.map((s) => norm(s.name)));
   const newSuppliers = [...new Map(rows.filter((r) => !known.has(norm(r.supplier))).map((r) => [norm(r.supplier), r.supplier])).values()];

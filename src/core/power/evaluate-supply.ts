@@ -19,6 +19,10 @@ import { transformerReport } from './transformer';
 import { primaryFaultChecks, primaryFaultFindings, railsReported } from './primary-fault';
 import { treeRoots, checkSupplyInputs } from './supply-inputs';
 import { usablePositive } from '../numeric';
+import { supplyChoices } from '../spec/supply-choices';
+import { bridgeThermal, bridgeThermalFindings } from '../thermal/bridge';
+import { insideNote } from '../thermal/inside';
+import { reservoirFall, withRegulatedBleeder, type FallTime } from './regulated-bleeder';
 
 export interface SupplyOptions {
   /** Standard secondary voltages to choose from (V RMS); default DEFAULT_SECONDARY_V. */
@@ -37,6 +41,8 @@ export interface SupplyOptions {
   searches?: boolean;
   /** Only these corners (CornerSpec ids), for a caller that reads no others; default all. */
   cornerIds?: readonly string[];
+  /** Air inside the enclosure (°C) when its rise is known: the ambient of the rectifier and regulator checks. */
+  insideC?: number;
 }
 
 const ZERO: PerMode = { receive: 0, keyUp: 0, keyDown: 0 };
@@ -61,6 +67,12 @@ function requirement(marginV: number, children: RegulatedRail[], stated: number 
 
 export function evaluateSupply(projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): SupplyReport {
   const project = projectIn;
+  const choices = supplyChoices(project.supply);
+  // the thermal checks of parts in the box use the air inside it when the enclosure's rise is known
+  const inside = options.insideC !== undefined && Number.isFinite(options.insideC);
+  const airC = inside ? options.insideC! : project.ambientC;
+  // how each rail falls after switch-off (null: a battery holds it up), for the bleeders of the rails it feeds
+  const falls = new Map<string, FallTime | null>();
   // inputs outside their field definitions: a fail finding each, and the item (with its dependants) is left out
   const inputs = checkSupplyInputs(project.supply);
   const duty = safeDuty(project.keyingDuty);
@@ -125,14 +137,18 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), {
       mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
       standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
-      highMainsOutputA: highBudget(rail.id), searches: options.searches,
+      highMainsOutputA: highBudget(rail.id), searches: options.searches, sizing: choices.transformerSizing,
     });
     if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
+    const loss = ev.report.rectifierLoss;
+    const bt = bridgeThermal({ railName: rail.name, thermalW: loss.thermalW, tuneUpW: loss.tuneUpW, basis: choices.transformerSizing, mount: rail.bridgeMount, freeAirKPerW: rail.bridgeFreeAirKPerW, ambientC: airC, inside });
+    ev.report = { ...ev.report, bridgeThermal: bt, findings: sortFindings([...ev.report.findings, ...bridgeThermalFindings(rail.name, bt)]) };
     simulations += ev.simulations;
     allConverged = allConverged && ev.allConverged;
     reports.set(rail.id, ev.report);
     voltageAt.set(rail.id, Object.fromEntries(ev.report.corners.map((c) => [c.id, { troughV: c.troughV, meanV: c.dcMeanV, ripplePpV: c.ripplePpV }])));
     maxV.set(rail.id, Math.max(0, ...ev.report.corners.map((c) => c.noLoadPeakV)));
+    falls.set(rail.id, reservoirFall(maxV.get(rail.id)!, rail.reservoirF, rail.bleederOhm));
     rootBattery.set(rail.id, false);
     if (ev.report.winding && wt) windingRecs.set(wt.t.id, [...(windingRecs.get(wt.t.id) ?? []), ev.report.winding]);
   }
@@ -156,6 +172,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     voltageAt.set(b.id, at);
     maxV.set(b.id, Number.isFinite(b.fullV) ? b.fullV : 0);
     rootBattery.set(b.id, true);
+    falls.set(b.id, null);
     const report: BatteryRailReport = {
       kind: 'battery', railId: b.id, railName: b.name, fullV: b.fullV, endV: b.endV, loadedEndV: loadedEnd, requiredMinV: req.v,
       receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse, curve, pa: null,
@@ -177,8 +194,11 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
         i++;
         continue;
       }
-      const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, voltageAt.get(rr.parentId)!, maxV.get(rr.parentId) ?? 0, rootBattery.get(rr.parentId) ?? false, duty, project.ambientC);
-      reports.set(rr.id, ev.report);
+      const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, voltageAt.get(rr.parentId)!, maxV.get(rr.parentId) ?? 0, rootBattery.get(rr.parentId) ?? false, duty, airC);
+      const parentName = rails.find((x) => x.id === rr.parentId)?.name ?? rr.parentId;
+      const bl = withRegulatedBleeder(ev.report, rr, parentName, falls.get(rr.parentId) ?? null);
+      falls.set(rr.id, bl.fall);
+      reports.set(rr.id, { ...bl.report, findings: sortFindings(insideNote(bl.report.findings, inside ? airC : null, project.ambientC)) });
       voltageAt.set(rr.id, ev.outputAt);
       maxV.set(rr.id, ev.report.outputV);
       rootBattery.set(rr.id, rootBattery.get(rr.parentId) ?? false);
@@ -186,7 +206,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     }
   }
   for (const rr of pending) {
-    const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, {}, 0, false, duty, project.ambientC);
+    const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, {}, 0, false, duty, airC);
     ev.report.findings.unshift({ severity: 'fail', rule: 'supply.parent', subject: rr.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rr.name} has no valid source rail (missing or fed by itself).` });
     reports.set(rr.id, ev.report);
   }
@@ -218,13 +238,13 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   if (mainsOk && unsized.length === 0 && transformers.some((t) => t.primaryA > 0)) {
     const loadA = transformers.reduce((s, t) => s + t.primaryA, 0);
     const construction = transformers.some((t) => t.construction === 'toroidal' && t.primaryA > 0) ? 'toroidal' : 'laminated';
-    const fuse = primaryFuse(loadA, construction);
+    const fuse = primaryFuse(loadA, construction, undefined, choices.primaryFuseSheet);
     // a refused fitted value is not checked (its own finding says so)
     const fittedA = inputs.primaryFuseOk ? project.supply.primaryFuseA : null;
     const inUseA = fittedA ?? fuse.ratedA;
-    const faultChecks = inUseA !== null ? primaryFaultChecks(railsReported(reports), inUseA) : [];
+    const faultChecks = inUseA !== null ? primaryFaultChecks(railsReported(reports), inUseA, choices.primaryFuseSheet) : [];
     const used = project.supply.transformers.filter((t) => transformers.some((r) => r.transformerId === t.id && r.primaryA > 0));
-    const inrush = inUseA !== null ? inrushReport(used, rails.filter((r): r is RectifiedRail => r.kind === 'rectified'), project.mains!, inUseA) : null;
+    const inrush = inUseA !== null ? inrushReport(used, rails.filter((r): r is RectifiedRail => r.kind === 'rectified'), project.mains!, inUseA, choices.primaryFuseSheet) : null;
     const findings = sortFindings([...fittedFuseFindings('Primary fuse', fittedA, fuse), ...primaryFaultFindings(faultChecks, reports), ...(inrush ? inrushFindings(inrush) : [])]);
     primary = { loadA, fuse, fittedA, faultChecks, inrush, findings };
   }
@@ -242,6 +262,8 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     findings: sortFindings(all),
     simulations,
     allConverged,
+    choices,
+    thermalAmbient: { ambientC: airC, inside },
   });
 }
 

@@ -9,6 +9,9 @@ import type { ThermalResult } from '../thermal/junction';
 import type { BatteryCurveResult } from './battery-curve';
 import type { InrushReport } from './inrush';
 import type { CrossRegulation } from './cross-regulation';
+import type { BridgeThermal } from '../thermal/bridge';
+import type { RegulatedBleederReport } from './regulated-bleeder';
+import type { SupplyChoices } from '../spec/supply-choices';
 
 /** Which load a corner applies: a mode, the duty-weighted thermal load, or a continuous tune-up carrier. */
 export type CornerLoad = Mode | 'thermal' | 'tuneUp';
@@ -258,6 +261,8 @@ export interface RectifiedRailReport extends RailBase {
   windingFuse: WindingFuseReport | null;
   /** Diode dissipation of the rectifier at high mains. */
   rectifierLoss: RectifierLoss;
+  /** The rectifier package's junction temperature and the heatsink it needs (absent in reports of older code). */
+  bridgeThermal?: BridgeThermal;
 }
 
 /** One corner for a regulated rail. */
@@ -305,6 +310,8 @@ export interface RegulatedRailReport extends RailBase {
   rippleTargetV: number | null;
   /** Corner with the most output ripple, null when the rejection is not stated. */
   worstRippleCornerId: string | null;
+  /** The output's discharge after switch-off through its bleeder (absent in reports of older code). */
+  bleeder?: RegulatedBleederReport;
 }
 
 export interface BatteryRailReport extends RailBase {
@@ -390,4 +397,8 @@ export interface SupplyReport {
   simulations: number;
   /** False when any simulation did not reach steady state. */
   allConverged: boolean;
+  /** The primary fuse's type and the transformer sizing basis used (absent in reports of older code). */
+  choices?: SupplyChoices;
+  /** Air the thermal checks inside the box used (°C) and whether it is the enclosure's inside temperature. */
+  thermalAmbient?: { ambientC: number; inside: boolean };
 }

@@ -81,7 +81,8 @@ export function partsRoutes(deps: Deps) {
     const takeGoodRows = values.takeGoodRows === 'true';
     const removeGone = values.removeGone === 'true';
     const plan = planImport(preview, { takeGoodRows });
-    const updateOf = (p: Project) => (plan.ok ? planCatalogUpdate(p, plan.rows) : null);
+    const refused = preview.rows.filter((r) => r.errors.length > 0).map((r) => r.values);
+    const updateOf = (p: Project) => (plan.ok ? planCatalogUpdate(p, plan.rows, refused) : null);
     const show = (p: Project, status: 200 | 409 | 422, message?: string) =>
       sendPage(c, (
         <Layout title={`Price list preview · ${p.name}`} project={p} section="parts">
@@ -96,11 +97,11 @@ export function partsRoutes(deps: Deps) {
     }
     const version = versionField.safeParse(values.version);
     if (!version.success) return show(project, 422, 'The form had no version number; reload the page.');
-    const update = planCatalogUpdate(project, plan.rows);
+    const update = planCatalogUpdate(project, plan.rows, refused);
     if (update.errors.length) return show(project, 422, 'Nothing was imported: the file names an offer twice (listed above).');
     const makeId = (k: 'part' | 'offer') => newId(k === 'part' ? 'p' : 'o');
     try {
-      await updateProject(deps.database, id, version.data, (p) => applyCatalogUpdate(p, planCatalogUpdate(p, plan.rows), { removeGone, makeId, rows: plan.rows }), deps.now().toISOString());
+      await updateProject(deps.database, id, version.data, (p) => applyCatalogUpdate(p, planCatalogUpdate(p, plan.rows, refused), { removeGone, makeId, rows: plan.rows }), deps.now().toISOString());
     } catch (e) {
       if (e instanceof VersionConflict) {
         const fresh = (await loadProject(deps.database.db, id)) ?? project;

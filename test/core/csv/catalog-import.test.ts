@@ -112,6 +112,18 @@ describe('catalog import: an updated list round trip', () => {
     expect(after.parts.map((p) => p.description)).toContain('Relay 12 V DPDT');
   });
 
+  it('a refused row’s offer is still listed: never counted as gone', () => {
+    const once = importList(start, LIST_V1).after;
+    const csv = LIST_V1.replace('D-F1T,0.30,10,10', 'D-F1T,0.30,ten,10');
+    const preview = previewImport(csv, opts);
+    const plan = planImport(preview, { takeGoodRows: true });
+    if (!plan.ok) throw new Error('expected a plan');
+    const refused = preview.rows.filter((r) => r.errors.length).map((r) => r.values);
+    expect(refused.map((r) => r.sku)).toEqual(['D-F1T']);
+    expect(planCatalogUpdate(once, plan.rows, refused).counts.gone).toBe(0);
+    expect(planCatalogUpdate(once, plan.rows).counts.gone).toBe(1);
+  });
+
   it('an offer named twice in one file is refused by row', () => {
     const csv = `${LIST_V1}\r\nElectrolytic 4700 µF 35 V,capacitor,,d-4700 ,"1: 1.00",1,1,USD`;
     const plan = planImport(previewImport(csv, opts));
