@@ -10,6 +10,7 @@ import { heatBudget, type HeatBudget } from './power/heat-budget';
 import { withSupplyVoltages } from './budget-voltages';
 import { withRecommendedPa } from './power/recommended-pa';
 import { withBatteryPa } from './power/battery-pa';
+import { withKeyingTransient } from './power/keying-transient';
 import { evaluateRf, paKeyDownCurrentA, relayCoilLoads, type RfReport } from './rf';
 import { costProject, type CostReport } from './cost';
 import { catalogFindings } from './catalog-checks';
@@ -207,7 +208,8 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   const catalog = [...catalogFindings(project, unboundSupply), ...roleCheck.findings];
   const mains = mainsCornerFindings(project.mains, project.rf.spuriousRule);
   const recPa = withRecommendedPa(supply, project, rf);
-  supply = withBatteryPa(recPa.supply, project, rf);
+  // the PA rail keyed from rest, with every load by its own law (the PA on its load line): after the RF model
+  supply = withKeyingTransient(withBatteryPa(recPa.supply, project, rf), project, budget, rf);
   const heat = project.supply.rails.length ? heatBudget(supply, paHeat(rf), project.supply.enclosureAreaM2, project.supply.enclosureUWPerM2K, project.ambientC) : null;
   const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...(heat?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
   return { budget, supply, heat, rf, cost, catalog, roles: { list: roleList, statuses: roleCheck.statuses }, paRailV, findings };

@@ -9,6 +9,7 @@ import type { ThermalResult } from '../thermal/junction';
 import type { BatteryCurveResult } from './battery-curve';
 import type { InrushReport } from './inrush';
 import type { CrossRegulation } from './cross-regulation';
+import type { KeyingTransient } from './keying-transient';
 import type { BridgeThermal } from '../thermal/bridge';
 import type { RegulatedBleederReport } from './regulated-bleeder';
 import type { SupplyChoices } from '../spec/supply-choices';
@@ -263,6 +264,9 @@ export interface RectifiedRailReport extends RailBase {
   rectifierLoss: RectifierLoss;
   /** The rectifier package's junction temperature and the heatsink it needs (absent in reports of older code). */
   bridgeThermal?: BridgeThermal;
+  /** A PA rail keyed with a dot train from rest at nominal mains, with the rail's load model (null: not simulated,
+   * a finding says why; absent: no PA on the rail, or before the RF model ran). */
+  keyingTransient?: KeyingTransient | null;
 }
 
 /** One corner for a regulated rail. */
