@@ -4,7 +4,7 @@ import type { FC } from 'hono/jsx';
 import type { Project } from '../../src/core/model';
 import type { RoleStatus } from '../../src/core/roles';
 import { candidatesFor } from '../../src/core/roles';
-import { formatMoney } from '../../src/core/cost';
+import { formatMoney, type CostReport } from '../../src/core/cost';
 import { Version, hx } from './supply-transformer';
 import type { Failed } from './failed';
 
@@ -18,11 +18,14 @@ const STATE_TEXT: Record<RoleStatus['state'], string> = {
 /** How many candidates are listed per role (cheapest first). */
 const SHOWN = 3;
 
-export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: Failed }> = ({ project, statuses, failed }) => {
+export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: Failed; report?: CostReport }> = ({ project, statuses, failed, report }) => {
   if (!statuses.length) return null;
   const refused = failed?.form === 'bind-role' ? Object.values(failed.state.errors) : [];
   const base = `/projects/${project.id}/bom`;
   const parts = new Map(project.parts.map((p) => [p.id, p]));
+  // the supplier the cost plan chose for each line: a candidate from a supplier used for another line adds no shipping
+  const planSuppliers = report ? new Map(report.lines.map((l): [string, string | null] => [l.lineId, l.supplier])) : undefined;
+  const money = (c: number) => formatMoney(c, project.currency);
   return (
     <section class="card" id="design-roles">
       <h2>Parts the design needs</h2>
@@ -33,12 +36,16 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
       ) : null}
       <p class="hint">
         Each part of the design with what it must be rated for. Bind a line to it (the “Design role” box of the line) or use a
-        candidate: catalog parts meeting every rating, cheapest first at the quantity the build needs.
+        candidate: catalog parts meeting every rating, cheapest first at the quantity the build needs (price breaks, minimum
+        orders and multiples included).
+        {planSuppliers
+          ? ' Shipping counts in the ranking: a supplier the plan already uses for another line adds nothing (its shipping is paid anyway); a supplier not otherwise used adds its full shipping charge.'
+          : ''}
       </p>
       <ul class="role-list">
         {statuses.map((s) => {
           const lines = project.bom.filter((l) => s.lineIds.includes(l.id));
-          const candidates = candidatesFor(project, s.role).slice(0, SHOWN);
+          const candidates = candidatesFor(project, s.role, planSuppliers).slice(0, SHOWN);
           return (
             <li class={`role role-${s.state}`} data-role={s.role.id} data-state={s.state}>
               <strong>{s.role.label}</strong>: <span class="role-state">{STATE_TEXT[s.state]}</span>
@@ -53,10 +60,12 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
               {candidates.length ? (
                 <ul class="role-candidates">
                   {candidates.map((c) => (
-                    <li data-candidate={c.partId}>
-                      {c.description}: {c.costCents === null ? 'no price' : `${formatMoney(c.costCents, project.currency)} for ${c.neededQty}`}
+                    <li data-candidate={c.partId} data-total={c.totalCents ?? ''}>
+                      {c.description}: {c.costCents === null ? 'no price' : `${money(c.costCents)} for ${c.neededQty}`}
                       {c.orderQty !== null && c.orderQty !== c.neededQty ? ` (buying ${c.orderQty})` : ''}
-                      {c.supplier ? ` from ${c.supplier}` : ''}{' '}
+                      {c.supplier ? ` from ${c.supplier}` : ''}
+                      {c.shippingCents ? ` + ${money(c.shippingCents)} shipping (supplier not otherwise used) = ${money(c.totalCents ?? 0)}` : ''}
+                      {c.shippingNote ? ` (${c.shippingNote})` : ''}{' '}
                       {c.bound ? (
                         <em>(bound)</em>
                       ) : (

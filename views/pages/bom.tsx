@@ -26,7 +26,7 @@ export const BomBody: FC<BomBodyProps> = ({ project, report, roles = [], failed,
     <div id="bom">
       <PageMessages notice={notice} failed={failed} />
       <BomLines project={project} failed={failed} roles={roles.map((s): [string, string] => [s.role.id, s.role.label])} />
-      <BomRoles project={project} statuses={roles} failed={failed} />
+      <BomRoles project={project} statuses={roles} failed={failed} report={report} />
       <p class="bom-export">
         Export the costed parts list: <a href={csv}>CSV (comma separated)</a> · <a href={`${csv}?sep=semicolon`}>CSV (semicolon, decimal comma)</a>
         <br />

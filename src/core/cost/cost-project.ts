@@ -32,17 +32,21 @@ export const COST_NOTES: readonly string[] = [
   SECTION_RULE,
 ];
 
-function shippingFor(project: Project, name: string, findings: Finding[]): number {
-  const entry = project.costing.suppliers.find((s) => s.name.trim().toLowerCase() === name.toLowerCase());
-  const caution = (message: string): number => {
-    findings.push({ severity: 'caution', rule: 'cost.shipping', subject: name, value: null, limit: null, unit: '', source: SOURCE, message });
-    return 0;
-  };
-  if (entry === undefined) return caution(`Supplier "${name}" has no shipping entry; shipping counted as 0.`);
+/** A supplier's shipping charge in project minor units, or why it cannot be counted (then costing counts 0). */
+export function supplierShipping(project: Project, name: string): { ok: true; cents: number } | { ok: false; message: string } {
+  const entry = project.costing.suppliers.find((s) => s.name.trim().toLowerCase() === name.trim().toLowerCase());
+  if (entry === undefined) return { ok: false, message: `Supplier "${name}" has no shipping entry; shipping counted as 0.` };
   const rate = rateFor(entry.currency, project.currency, project.costing.exchangeRates);
-  if (rate === null) return caution(`No exchange rate for ${entry.currency}: shipping from "${name}" counted as 0.`);
-  if (!Number.isFinite(entry.shippingCents) || entry.shippingCents < 0) return caution(`Shipping of "${name}" is not a valid amount; counted as 0.`);
-  return convertCents(entry.shippingCents, minorRate(rate, entry.currency, project.currency));
+  if (rate === null) return { ok: false, message: `No exchange rate for ${entry.currency}: shipping from "${name}" counted as 0.` };
+  if (!Number.isFinite(entry.shippingCents) || entry.shippingCents < 0) return { ok: false, message: `Shipping of "${name}" is not a valid amount; counted as 0.` };
+  return { ok: true, cents: convertCents(entry.shippingCents, minorRate(rate, entry.currency, project.currency)) };
+}
+
+function shippingFor(project: Project, name: string, findings: Finding[]): number {
+  const s = supplierShipping(project, name);
+  if (s.ok) return s.cents;
+  findings.push({ severity: 'caution', rule: 'cost.shipping', subject: name, value: null, limit: null, unit: '', source: SOURCE, message: s.message });
+  return 0;
 }
 
 function methodNote(choice: PlanChoice, n: number, limit: number, total: number, currency: string): string {

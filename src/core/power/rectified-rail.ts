@@ -33,6 +33,8 @@ export interface RectifiedContext {
    * simulations). evaluate()'s fixed-point passes before the last read only the corners. Default true.
    */
   searches?: boolean;
+  /** What the winding recommendation is sized for: CW at the keying duty (default) or a continuous tune-up carrier. */
+  sizing?: 'duty' | 'tune-up';
 }
 
 export interface RectifiedEvaluation {
@@ -155,7 +157,7 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
 
   // Winding recommendation
   const winding_ = winding && ctx.searches !== false
-    ? recommendWinding({ rail, winding, corners, keyingDuty: ctx.keyingDuty, requiredMinV: ctx.hasRequirement ? ctx.requiredMinV : null, frequencyHz: ctx.mains.frequencyHz, mainsNominalV: ctx.mains.nominalV, lowFactor: worst.mainsFactor, keyDownA: worst.loadA, standardSecondaryV: ctx.standardSecondaryV ?? DEFAULT_SECONDARY_V, construction: transformer?.construction ?? 'laminated' })
+    ? recommendWinding({ rail, winding, corners, keyingDuty: ctx.keyingDuty, requiredMinV: ctx.hasRequirement ? ctx.requiredMinV : null, frequencyHz: ctx.mains.frequencyHz, mainsNominalV: ctx.mains.nominalV, lowFactor: worst.mainsFactor, keyDownA: worst.loadA, standardSecondaryV: ctx.standardSecondaryV ?? DEFAULT_SECONDARY_V, construction: transformer?.construction ?? 'laminated', sizing: ctx.sizing })
     : null;
   if (winding_) {
     simulations += winding_.simulations;

@@ -22,6 +22,8 @@ export interface WindingInput {
   keyDownA: number;
   standardSecondaryV: readonly number[];
   construction: 'laminated' | 'toroidal';
+  /** Rate the winding for CW at the keying duty (default) or for a continuous tune-up carrier. */
+  sizing?: 'duty' | 'tune-up';
 }
 
 const get = (cs: RectifiedCorner[], id: string) => cs.find((c) => c.id === id);
@@ -52,7 +54,9 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
   const tuneUpRmsA = kd?.secondaryRmsA ?? 0;
   const peakA = Math.max(0, ...inp.corners.map((c) => c.diodePeakA));
   const halves = inp.rail.topology === 'centre-tap' ? 2 : 1;
-  const ratedA = thermalRmsA;
+  // Sized for the choice: the heating-equivalent current of CW keying, or the continuous carrier of tune-up
+  const tuneUpSized = inp.sizing === 'tune-up';
+  const ratedA = tuneUpSized ? Math.max(thermalRmsA, tuneUpRmsA) : thermalRmsA;
   let simulations = 0;
   let minimumRatedV: number | null = null;
   let reasoningV: string;
@@ -100,7 +104,9 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
   const result: WindingRecommendation = {
     windingId: inp.winding.id, windingName: inp.winding.name, minimumRatedV, standardRatedV, thermalRmsA, tuneUpRmsA, peakA, ratedA, va, vaRatedV, checkTroughV,
     primaryReferredA, halves,
-    reasoning: `${reasoningV} Current rating: heating-equivalent RMS at high mains with CW duty ${d} is ${thermalRmsA.toFixed(2)} A${half} (continuous carrier ${tuneUpRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`,
+    reasoning: tuneUpSized
+      ? `${reasoningV} Current rating, sized for tune-up: a continuous carrier at high mains draws ${tuneUpRmsA.toFixed(2)} A RMS${half} (CW at duty ${d} would need ${thermalRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`
+      : `${reasoningV} Current rating: heating-equivalent RMS at high mains with CW duty ${d} is ${thermalRmsA.toFixed(2)} A${half} (continuous carrier ${tuneUpRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`,
   };
   const findings: Finding[] = [];
   const src = 'supply.transformer-current' as const;

@@ -8,6 +8,7 @@ import { fieldLabel } from './field-labels';
 import { swrStress, type PaSwrStress } from './pa-swr';
 import { classEShuntFindings, swrFindings } from './pa-swr-findings';
 import { usablePositive } from '../numeric';
+import { insideNote } from '../thermal/inside';
 
 /** Drain efficiency used when none is entered. Common practice, no published source (ref §8.2 ranges). */
 export const DEFAULT_EFFICIENCY: Record<PaParams['amplifierClass'], number> = { B: 0.6, C: 0.7, D: 0.8, E: 0.85 };
@@ -99,6 +100,8 @@ const db = (x: number) => (x > 0 ? 10 * Math.log10(x) : -999);
 
 /** Supply corners beyond the operating point: the highest rail voltage (device voltage stress) and the hot one (heating). */
 export interface PaSupplyCorners {
+  /** Air inside the enclosure (°C) when its rise is known: the heatsink and junction checks use it, not the room. */
+  insideC?: number;
   /** Highest rail voltage while the PA can be keyed (high mains, no load; full battery), V. */
   maxRailV?: number;
   /** Rail voltage at high mains, key-down (mean), V: sets the heating. */
@@ -170,12 +173,16 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   // Source: Sokal & Sokal (1975) 3.56 Vdd for class E; 2 Vdd for B, C, D (REFERENCE-VALUES §8.1)
   const peakDrainV = peakDrainFactor(pa.amplifierClass) * maxRailV;
   const opHot = hotRailV === railV ? op : operatingPoint(pa, hotRailV, primaryOhm);
-  const thermalRaw = paThermal(pa, opHot.outputW, opHot.outputW / efficiency, pa.biasIdleMaxA * hotRailV, project.ambientC, project.keyingDuty);
+  // the air around the heatsink: inside the box when the enclosure's rise is known (an outside heatsink sees less)
+  const inside = corners.insideC !== undefined && Number.isFinite(corners.insideC);
+  const airC = inside ? corners.insideC! : project.ambientC;
+  const thermalRaw = paThermal(pa, opHot.outputW, opHot.outputW / efficiency, pa.biasIdleMaxA * hotRailV, airC, project.keyingDuty);
   const lowRailV = corners.lowRailV !== undefined && Number.isFinite(corners.lowRailV) && corners.lowRailV > 0 && corners.lowRailV < railV ? corners.lowRailV : railV;
   const lowOutputW = lowRailV === railV ? op.outputW : operatingPoint(pa, lowRailV, primaryOhm).outputW;
   const bat = corners.source === 'battery';
   const hotNote = hotRailV > railV ? ` (with the supply at ${hotRailV.toFixed(1)} V: ${bat ? 'battery full' : 'high mains'}, key-down)` : '';
-  const thermal = { ...thermalRaw, findings: thermalRaw.findings.map((f) => (f.rule === 'pa.heat-safety' ? f : { ...f, message: f.message.replace(/\.$|:/, (m) => `${hotNote}${m}`) })) };
+  const noted = thermalRaw.findings.map((f) => (f.rule === 'pa.heat-safety' ? f : { ...f, message: f.message.replace(/\.$|:/, (m) => `${hotNote}${m}`) }));
+  const thermal = { ...thermalRaw, findings: insideNote(noted, inside ? airC : null, project.ambientC) };
 
   if (pa.efficiency === null) {
     findings.push({ severity: 'ok', rule: 'pa.efficiency', subject, value: efficiency, limit: null, unit: '', source: 'pa.efficiency',
@@ -212,7 +219,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     biasW: pa.biasIdleMaxA * hotRailV,
   }, swrUsed, pa.loadOhm, classERdsRatio(pa, primaryOhm, op.peakDeviceA, railV));
   findings.push(...swrFindings(pa, swr, {
-    subject, atMax, ambientC: project.ambientC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
+    subject, atMax, ambientC: airC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
     matchedDissipationW: thermalRaw.dissipationTotalW, sharedBy: thermalRaw.sharedBy, tjTargetC: thermalRaw.tjTargetC,
   }));
   findings.push(...classEShuntFindings(pa, primaryOhm, corners.frequencyHz, subject));
