@@ -28,7 +28,7 @@ describe.skipIf(!hasChromium)('typing inputs in the browser', () => {
 
   it('"45" in the coil current box (mA) is saved as 45 mA and shown back as 45', async () => {
     await open('/stages/st-tr');
-    await expect(relayForm().locator('label[for="f-coil"] .unit').innerText()).resolves.toBe(' (mA)');
+    await expect(relayForm().locator('label[for="relay--s-st-tr--coilA"] .unit').innerText()).resolves.toBe(' (mA)');
     await relayForm().locator('input[name="coil"]').fill('45');
     await relayForm().getByRole('button', { name: 'Save relay data' }).click();
     await page.locator('#stage .notice').waitFor();
@@ -43,7 +43,7 @@ describe.skipIf(!hasChromium)('typing inputs in the browser', () => {
     // 45000 mA = 45 A is above the 10 A most a relay coil is allowed
     await relayForm().locator('input[name="coil"]').fill('45000');
     await relayForm().getByRole('button', { name: 'Save relay data' }).click();
-    const error = relayForm().locator('label[for="f-coil"] .error');
+    const error = relayForm().locator('label[for="relay--s-st-tr--coilA"] .error');
     await error.waitFor();
     expect(await error.innerText()).toContain('Coil current must be at least 0 A and at most 10 A');
     expect(await error.innerText()).toContain('did you mean 45000 µA?');

@@ -33,7 +33,8 @@ describe('stage page', () => {
     expect(res.status).toBe(422);
     const html = await res.text();
     expect(html).toContain(message);
-    expect(html).toContain(`id="f-${field}" name="${field}" type="text" value="${Object.values(change)[0]}"`);
+    // the box's id names the spec, the stage and the field (views/components/field-id.ts)
+    expect(html).toMatch(new RegExp(`id="lpf--s-st-lpf--[A-Za-z0-9]+" name="${field}" type="text" value="${Object.values(change)[0]}"`));
     expect(await loadProject(database.db, ID)).toEqual(before);
   });
 

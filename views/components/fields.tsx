@@ -14,6 +14,8 @@ interface Common {
   state: FieldState;
   /** id prefix: pages with many forms repeat field names, and each label must point at its own input */
   idp?: string;
+  /** the input's id, when the caller derives it (SpecField: field-id.ts); else idp + name */
+  id?: string;
   cls?: string;
   hint?: string;
 }
@@ -29,7 +31,7 @@ const Message: FC<{ error?: string; hint?: string }> = ({ error, hint }) =>
 
 const fieldClass = (error: string | undefined, cls?: string) => `field${error ? ' has-error' : ''}${cls ? ' ' + cls : ''}`;
 
-export const Field: FC<Common & { unit?: string; size?: number; type?: string; required?: boolean; id?: string; list?: string }> = ({ name, label, state, idp, cls, hint, unit, size, type, required, id: idIn, list }) => {
+export const Field: FC<Common & { unit?: string; size?: number; type?: string; required?: boolean; list?: string }> = ({ name, label, state, idp, cls, hint, unit, size, type, required, id: idIn, list }) => {
   const error = state.errors[name];
   const id = idIn ?? `${idp ?? 'f'}-${name}`;
   return (
@@ -44,9 +46,9 @@ export const Field: FC<Common & { unit?: string; size?: number; type?: string; r
   );
 };
 
-export const Select: FC<Common & { options: [string, string][] }> = ({ name, label, state, idp, cls, hint, options }) => {
+export const Select: FC<Common & { options: [string, string][] }> = ({ name, label, state, idp, id: idIn, cls, hint, options }) => {
   const error = state.errors[name];
-  const id = `${idp ?? 'f'}-${name}`;
+  const id = idIn ?? `${idp ?? 'f'}-${name}`;
   const value = state.values[name];
   const known = options.some(([v]) => v === value);
   return (
@@ -69,9 +71,9 @@ export const Select: FC<Common & { options: [string, string][] }> = ({ name, lab
   );
 };
 
-export const TextArea: FC<Common & { rows?: number; cols?: number }> = ({ name, label, state, idp, cls, hint, rows, cols }) => {
+export const TextArea: FC<Common & { rows?: number; cols?: number }> = ({ name, label, state, idp, id: idIn, cls, hint, rows, cols }) => {
   const error = state.errors[name];
-  const id = `${idp ?? 'f'}-${name}`;
+  const id = idIn ?? `${idp ?? 'f'}-${name}`;
   return (
     <label class={fieldClass(error, cls)} for={id}>
       <span class="label">{label}</span>
@@ -83,9 +85,9 @@ export const TextArea: FC<Common & { rows?: number; cols?: number }> = ({ name, 
   );
 };
 
-export const Check: FC<{ name: string; label: string; state: FieldState; idp?: string }> = ({ name, label, state, idp }) => (
-  <label class="field check" for={`${idp ?? 'f'}-${name}`}>
-    <input id={`${idp ?? 'f'}-${name}`} type="checkbox" name={name} value="true" checked={state.values[name] === 'true'} />
+export const Check: FC<{ name: string; label: string; state: FieldState; idp?: string; id?: string }> = ({ name, label, state, idp, id }) => (
+  <label class="field check" for={id ?? `${idp ?? 'f'}-${name}`}>
+    <input id={id ?? `${idp ?? 'f'}-${name}`} type="checkbox" name={name} value="true" checked={state.values[name] === 'true'} />
     <span class="label">{label}</span>
   </label>
 );
