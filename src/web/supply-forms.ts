@@ -4,7 +4,7 @@ import type { Project, Transformer, Winding } from '../core/model';
 import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from '../core/spec';
 import { specFormSchema } from './forms/spec-schema';
 
-export const transformerSchema = specFormSchema<Pick<Transformer, 'name' | 'construction'>>(transformerSpec);
+export const transformerSchema = specFormSchema<Pick<Transformer, 'name' | 'construction' | 'secondaryToleranceFraction'>>(transformerSpec);
 export const windingSchema = specFormSchema<Omit<Winding, 'id'>>(windingSpec);
 export const fuseSchema = specFormSchema<{ primaryFuseA: number | null }>(primaryFuseSpec);
 export const enclosureSchema = specFormSchema<{ enclosureAreaM2: number | null; enclosureUWPerM2K: number | null }>(enclosureSpec);

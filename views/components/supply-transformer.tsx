@@ -30,6 +30,7 @@ const WindingFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) =
     <SpecField spec={windingSpec} k="ratedA" state={state} idp={idp} size={7} />
     <SpecField spec={windingSpec} k="regulationFraction" state={state} idp={idp} size={4} />
     <SpecField spec={windingSpec} k="resistanceOhm" label="Resistance" state={state} idp={idp} size={7} />
+    <SpecField spec={windingSpec} k="leakageH" label="Leakage" state={state} idp={idp} size={7} />
   </>
 );
 
@@ -66,6 +67,7 @@ export const TransformerCard: FC<{ project: Project; t: Transformer; failed?: Fa
         <div class="row">
           <SpecField spec={transformerSpec} k="name" label="Transformer" hint="" state={state} idp={`t-${t.id}`} size={28} />
           <SpecField spec={transformerSpec} k="construction" state={state} idp={`t-${t.id}`} />
+          <SpecField spec={transformerSpec} k="secondaryToleranceFraction" label="Secondary ±" state={state} idp={`t-${t.id}`} size={4} />
           <button type="submit">Save</button>
           <a class="danger" href={`${base}/delete`}>
             Delete transformer…

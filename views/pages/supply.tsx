@@ -38,6 +38,7 @@ const AddTransformer: FC<{ project: Project; state: FieldState }> = ({ project, 
     <div class="row">
       <SpecField spec={transformerSpec} k="name" label="New transformer" state={state} idp="at" size={24} />
       <SpecField spec={transformerSpec} k="construction" state={state} idp="at" />
+      <SpecField spec={transformerSpec} k="secondaryToleranceFraction" label="Secondary ±" state={state} idp="at" size={4} />
       <button type="submit">Add transformer</button>
     </div>
   </form>

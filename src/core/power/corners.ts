@@ -50,8 +50,12 @@ export function cornerCurrent(perMode: PerMode, load: CornerLoad, keyingDuty: nu
   return clean(perMode[load as Mode]);
 }
 
-/** All corners: every mains corner x every load (without mains the three corners are battery end/nominal/full). */
-export function cornerSpecs(mains: Mains | null, keyingDuty: number): CornerSpec[] {
+/**
+ * All corners: every mains corner x every load (without mains the three corners are battery end/nominal/full); with
+ * `secondaryTolerance` (a transformer states one) one more, low mains with each secondary at the low end of its
+ * tolerance, key-down (TOLERANCE_ID).
+ */
+export function cornerSpecs(mains: Mains | null, keyingDuty: number, secondaryTolerance = false): CornerSpec[] {
   const out: CornerSpec[] = [];
   for (const m of MAINS_CORNERS) {
     for (const load of CORNER_LOADS) {
@@ -67,6 +71,10 @@ export function cornerSpecs(mains: Mains | null, keyingDuty: number): CornerSpec
       });
     }
   }
+  if (mains && secondaryTolerance) {
+    const low = out.find((s) => s.id === WORST_VOLTAGE_ID)!;
+    out.push({ ...low, id: TOLERANCE_ID, label: `${MAINS_LABEL.low}, secondary at its low tolerance, ${LOAD_LABEL.keyDown}`, secondaryTolerance: true });
+  }
   return out;
 }
 
@@ -74,6 +82,8 @@ export function cornerSpecs(mains: Mains | null, keyingDuty: number): CornerSpec
 export const WORST_VOLTAGE_ID = 'low-keyDown';
 export const WORST_THERMAL_ID = 'high-thermal';
 export const TUNE_UP_ID = 'high-tuneUp';
+/** Low mains, every secondary at the low end of its stated tolerance, key-down. */
+export const TOLERANCE_ID = 'lowTol-keyDown';
 
 export function worstIds(_hasMains = true): { voltage: string; thermal: string; tuneUp: string } {
   return { voltage: WORST_VOLTAGE_ID, thermal: WORST_THERMAL_ID, tuneUp: TUNE_UP_ID };

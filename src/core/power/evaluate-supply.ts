@@ -4,8 +4,8 @@ import type { Finding } from '../findings';
 import { sortFindings } from '../findings';
 import type { BatteryRail, Mains, PerMode, Project, RectifiedRail, RegulatedRail, Transformer, Winding } from '../model';
 import { MODES, MODE_LABELS } from '../model';
-import type { BatteryRailReport, PrimaryReport, RailReport, SupplyReport, TransformerReport, WindingRecommendation } from './report-types';
-import { DEFAULT_TRANSMIT_FRACTION, cornerCurrent, cornerSpecs, mainsFactor, safeDuty } from './corners';
+import type { BatteryRailReport, CornerSpec, PrimaryReport, RailReport, SupplyReport, TransformerReport, WindingRecommendation } from './report-types';
+import { DEFAULT_TRANSMIT_FRACTION, WORST_VOLTAGE_ID, cornerCurrent, cornerSpecs, mainsFactor, safeDuty } from './corners';
 import { evaluateRectifiedRail } from './rectified-rail';
 import type { RailVoltage } from './regulated-rail';
 import { evaluateRegulatedRail } from './regulated-rail';
@@ -13,7 +13,7 @@ import { regulatorOutputV } from './regulator';
 import { batteryFindings, batteryRuntime, loadedEndV } from './battery';
 import { batteryCurve, batteryCurveFindings } from './battery-curve';
 import { inrushFindings, inrushReport } from './inrush';
-import { crossRegulation } from './cross-regulation';
+import { crossRegulation, simulateTransformer, toleranceOf, type TransformerJoint } from './cross-regulation';
 import { fittedFuseFindings, fuseMarking, primaryFuse, railFuse } from './fuses';
 import { transformerReport } from './transformer';
 import { primaryFaultChecks, primaryFaultFindings, railsReported } from './primary-fault';
@@ -81,7 +81,8 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   const m0 = project.mains;
   const mainsOk = m0 !== null && usablePositive(m0.nominalV, 1) && usablePositive(m0.frequencyHz, 1);
   const wanted = options.cornerIds;
-  const specs = cornerSpecs(project.mains, duty).filter((s) => !wanted || wanted.includes(s.id));
+  const tolerance = project.supply.transformers.some((t) => toleranceOf(t) !== null);
+  const specs = cornerSpecs(project.mains, duty, tolerance).filter((s) => !wanted || wanted.includes(s.id));
   const rails = project.supply.rails;
   const globalFindings: Finding[] = [...inputs.findings];
   if (project.mains && !mainsOk) {
@@ -101,10 +102,12 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     undesigned.set(id, why);
     globalFindings.push({ severity: 'fail', rule: 'supply.refused-input', subject: name, value: null, limit: null, unit: '', source: 'design.input', message: `${name} is not designed: ${why}` });
   }
+  const noBudget = new Set<string>();
   const budget = (id: string): PerMode => {
     const b = railOutputA[id];
     if (!b) {
-      globalFindings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `No current budget for rail "${id}": it is treated as unloaded.` });
+      // said once per rail however often its budget is asked for
+      if (!noBudget.has(id) && noBudget.add(id)) globalFindings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `No current budget for rail "${id}": it is treated as unloaded.` });
       return ZERO;
     }
     const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
@@ -130,6 +133,18 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   let allConverged = true;
 
   const designable = (r: { id: string }) => !undesigned.has(r.id);
+  // one transformer, one simulation: the deciding corners of its rails simulated together (cross-regulation.ts)
+  const joints = new Map<string, TransformerJoint>();
+  for (const t of mainsOk ? project.supply.transformers : []) {
+    if (inputs.unsized.has(t.id)) continue;
+    const on = rails.filter((r): r is RectifiedRail => r.kind === 'rectified' && designable(r) && t.windings.some((w) => w.id === r.windingId));
+    const load = (rail: RectifiedRail) => (s: CornerSpec) => cornerCurrent(s.mains === 'high' ? highBudget(rail.id) ?? budget(rail.id) : budget(rail.id), s.load, duty);
+    const j = simulateTransformer(t, on.map((rail) => ({ rail, loadA: load(rail) })), specs, project.mains!, options.stepsPerCycle);
+    if (!j) continue;
+    joints.set(t.id, j);
+    simulations += j.simulations;
+    allConverged = allConverged && j.converged;
+  }
   for (const rail of rails.filter((r): r is RectifiedRail => r.kind === 'rectified' && designable(r))) {
     const wt = windings.get(rail.windingId) ?? null;
     usedWindings.set(rail.windingId, [...(usedWindings.get(rail.windingId) ?? []), rail.name]);
@@ -138,6 +153,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
       mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
       standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
       highMainsOutputA: highBudget(rail.id), searches: options.searches, sizing: choices.transformerSizing,
+      joint: wt ? joints.get(wt.t.id)?.voltages.get(rail.id) : undefined,
     });
     if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
     const loss = ev.report.rectifierLoss;
@@ -227,9 +243,16 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
   for (const t of project.supply.transformers) {
     if (unsized.includes(t)) continue;
     const tr = transformerReport(t, windingRecs.get(t.id) ?? [], options.standardVA);
-    // all its windings simulated together (the last pass only: evaluate()'s earlier passes skip the searches)
-    const rectified = rails.filter((r): r is RectifiedRail => r.kind === 'rectified');
-    const cr = mainsOk && options.searches !== false ? crossRegulation(t, rectified, reports, budget, project.mains!) : null;
+    // its windings simulated together (reported on the last pass: evaluate()'s earlier passes skip the searches)
+    const joint = joints.get(t.id);
+    const together = rails.flatMap((r) => {
+      const rep = reports.get(r.id);
+      const w = t.windings.find((x) => r.kind === 'rectified' && x.id === r.windingId);
+      if (r.kind !== 'rectified' || !w || rep?.kind !== 'rectified') return [];
+      const low = rep.corners.find((c) => c.id === WORST_VOLTAGE_ID);
+      return [{ rail: r, windingName: w.name, requiredMinV: rep.requiredMinV, aloneTroughV: low?.aloneTroughV ?? low?.troughV ?? NaN }];
+    });
+    const cr = joint && options.searches !== false ? crossRegulation(t, joint, together, project.mains!, mainsFactor(project.mains, 'low')) : null;
     transformers.push({ ...tr.report, crossRegulation: cr?.report ?? null });
     globalFindings.push(...tr.findings, ...(cr?.findings ?? []));
   }

@@ -5,7 +5,8 @@ import type { Mains, PerMode, RectifiedRail, Transformer, Winding } from '../mod
 import type { CornerSpec, RectifiedCorner, RectifiedRailReport, Recommendation } from './report-types';
 import type { RectifierSimInput, RectifierSimResult } from './rectifier-sim';
 import { simulateRectifier } from './rectifier-sim';
-import { cornerCurrent, worstIds } from './corners';
+import { TOLERANCE_ID, cornerCurrent, worstIds } from './corners';
+import type { JointVoltages } from './cross-regulation';
 import { noLoadVrms, windingResistanceOhm } from './winding';
 import { minimumCapacitanceF, recommendedCapacitorV, reservoirFindings, standardCapacitanceF, textbookCapacitanceF } from './reservoir';
 import { bleederFindings, bleederReport } from './bleeder';
@@ -26,6 +27,9 @@ export interface RectifiedContext {
   standardSecondaryV?: readonly number[];
   capacitorRatingsV?: readonly number[];
   stepsPerCycle?: number;
+  /** Voltages per corner id from all windings of its transformer simulated together (cross-regulation.ts); they
+   *  replace this rail's own at those corners, so the checks use them. */
+  joint?: Map<string, JointVoltages>;
   /** Output current per mode at high mains (a PA draws more from a higher rail), A; default: the nominal outputA. */
   highMainsOutputA?: PerMode;
   /**
@@ -77,13 +81,21 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     // A fixed-load PA draws current in proportion to its rail, so high-mains corners (heating) use their own budget
     const loadA = cornerCurrent(spec.mains === 'high' && ctx.highMainsOutputA ? ctx.highMainsOutputA : outputA, spec.load, ctx.keyingDuty);
     if (!winding) return zeroCorner(spec, loadA, 'No winding selected for this rail.');
-    const input = simInputFor(rail, winding, ctx.mains.frequencyHz, spec.mainsFactor, loadA, ctx.stepsPerCycle);
+    // the tolerance corner: this transformer's secondary at the low end of its stated tolerance (none: nominal)
+    const tol = spec.secondaryTolerance ? (transformer?.secondaryToleranceFraction ?? null) : null;
+    const factor = spec.mainsFactor * (tol !== null && tol > 0 ? 1 - tol : 1);
+    const label = spec.secondaryTolerance
+      ? `Low mains, secondary ${tol !== null && tol > 0 ? `−${fmt(tol * 100, 1).replace(/\.0$/, '')} %` : 'with no tolerance stated'}, TX key-down` : spec.label;
+    const input = simInputFor(rail, winding, ctx.mains.frequencyHz, factor, loadA, ctx.stepsPerCycle);
     const r = simulateRectifier({ ...input, waveformPoints: spec.id === ids.voltage ? 200 : 0 });
     simulations++;
     if (!r.converged) allConverged = false;
     sims.set(spec.id, r);
     const { waveform: _w, collapsed: _c, loadMeanA: _l, ...summary } = r;
-    return { ...spec, loadA, ...summary, headroomMarginV: r.troughV - ctx.requiredMinV };
+    // volts from the transformer's joint simulation where it ran (currents stay this rail's own)
+    const j = ctx.joint?.get(spec.id);
+    const volts = j ? { ...j, aloneTroughV: r.troughV } : {};
+    return { ...spec, label, loadA, ...summary, ...volts, headroomMarginV: (j?.troughV ?? r.troughV) - ctx.requiredMinV };
   });
   const worst = corners.find((c) => c.id === ids.voltage) ?? corners[0];
   const thermal = corners.find((c) => c.id === ids.thermal) ?? corners[0];
@@ -102,6 +114,10 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     if (!ctx.hasRequirement) findings.push({ ...base, severity: worst.troughV < ctx.requiredMinV ? 'caution' : 'ok', message: `${worst.label}: the ripple trough of ${rail.name} is ${fmt(worst.troughV)} V; no regulator is fed and no lowest voltage is stated for its loads, so only the ${fmt(ctx.requiredMinV)} V margin is checked${worst.troughV < ctx.requiredMinV ? ' (and it is not met)' : ''}. State the lowest voltage its loads need on the supply page.` });
     else if (worst.troughV < ctx.requiredMinV) findings.push({ ...base, severity: 'fail', message: `${worst.label}: ${rail.name} dips to ${fmt(worst.troughV)} V at the ripple trough, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}).` });
     else findings.push({ ...base, severity: 'ok', message: `${worst.label}: the ripple trough of ${rail.name}, ${fmt(worst.troughV)} V, stays above the ${fmt(ctx.requiredMinV)} V needed (${ctx.requirementNote}).` });
+    const tolC = corners.find((c) => c.id === TOLERANCE_ID);
+    if (tolC && ctx.hasRequirement && worst.troughV >= ctx.requiredMinV && tolC.troughV < ctx.requiredMinV) {
+      findings.push({ ...base, rule: 'rail.headroom-tolerance', value: tolC.troughV, source: 'supply.secondary-tolerance', severity: 'caution', message: `${tolC.label}: ${rail.name} dips to ${fmt(tolC.troughV)} V, below the ${fmt(ctx.requiredMinV)} V it needs (${ctx.requirementNote}); a transformer at the low end of its tolerance would not do. Measure the fitted one's no-load voltage, or choose the next winding voltage up.` });
+    }
     if (rail.topology === 'half-wave') findings.push({ severity: 'caution', rule: 'rectifier.half-wave', subject: rail.name, value: null, limit: null, unit: '', source: 'supply.half-wave', message: `${rail.name}: a half-wave rectifier puts direct current through the winding, which can saturate a small transformer's core and doubles the ripple; prefer a bridge or centre-tap.` });
   }
 

@@ -253,6 +253,20 @@ const MEMO_MAX = 4096;
  * tolerance, so a result moves by less than `toleranceV` at most.
  */
 let WARM: Map<string, number> | null = null;
+/** Other simulations' memos (the joint transformer simulation), by name, live with the memo. */
+let SCOPES: Map<string, Map<string, unknown>> | null = null;
+
+/**
+ * A named memo that lives as long as the current withSimulationMemo call (null outside one), bounded like the
+ * rectifier memo: for other simulations (shared-primary.ts) to memoise and warm-start within one evaluation.
+ */
+export function simulationScope<T>(name: string): Map<string, T> | null {
+  if (!SCOPES) return null;
+  let m = SCOPES.get(name);
+  if (!m) SCOPES.set(name, (m = new Map()));
+  if (m.size >= MEMO_MAX) m.clear();
+  return m as Map<string, T>;
+}
 
 /**
  * Run `fn` with simulations memoised on their exact inputs; the memo is dropped when `fn` returns, so results never
@@ -262,11 +276,13 @@ export function withSimulationMemo<T>(fn: () => T): T {
   if (MEMO) return fn();
   MEMO = new Map();
   WARM = new Map();
+  SCOPES = new Map();
   try {
     return fn();
   } finally {
     MEMO = null;
     WARM = null;
+    SCOPES = null;
   }
 }
 

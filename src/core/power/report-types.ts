@@ -33,12 +33,17 @@ export interface CornerSpec {
   load: CornerLoad;
   /** Fraction of time the key is down for this load (0..1): keyDown 1, keyUp/receive 0, thermal = keying duty, tuneUp 1. */
   duty: number;
+  /** True for the corner with each transformer's secondary at the low end of its stated tolerance. */
+  secondaryTolerance?: boolean;
 }
 
 /** One row of a rectified rail's corners table: simulation summary at one corner. */
 export interface RectifiedCorner extends CornerSpec {
   /** Output current the rail delivers at this corner (A). */
   loadA: number;
+  /** Set where the voltages (mean, ripple, trough, peak) come from all windings of the transformer simulated together
+   *  (shared primary, leakage): the trough of this rail's own simulation then (V). Currents stay the rail's own. */
+  aloneTroughV?: number;
   /** Mean rail voltage (V). */
   dcMeanV: number;
   /** Ripple peak-to-peak (V). */
@@ -367,8 +372,8 @@ export interface TransformerReport {
   standardVA: number | null;
   /** Primary RMS current at the worst continuous key-down corner, referred by turns ratio (A). */
   primaryA: number;
-  /** Its rectified rails simulated together with the primary shared (low mains, key-down and key-up); null with
-   * fewer than two such rails, absent where not computed (evaluate()'s earlier fixed-point passes). */
+  /** Its rectified rails simulated together (shared primary, leakage) at low mains, key-down and key-up, and at the
+   * secondary tolerance corner; null when no rail on it is designed, absent where not computed (earlier passes). */
   crossRegulation?: CrossRegulation | null;
 }
 

@@ -1,12 +1,19 @@
-// All rectified windings of one transformer simulated together, the primary resistance shared: a PA keying down on
-// one winding pulls the primary current up, drops the EMF of every winding, and sags the other rails too
-// (cross-regulation). Circuit: mains sine behind R_p, an ideal multi-winding transformer (secondary EMF
-// e_i = k_i (V_s - R_p i_p), i_p = Σ k_i i_i), each winding behind its own resistance and diodes (Vf + r_d, the same
-// element model as rectifier-sim.ts) into its reservoir (ESR, constant-current load, optional bleeder). Leakage
-// inductance is not modelled. Integration: Heun's method at a fixed step, whole cycles from the no-load peak until
-// the reservoir voltages repeat; the last cycle is reported. Checked against ngspice (test/core/power).
+// All rectified windings of one transformer simulated together: the primary resistance and leakage inductance
+// shared, each winding behind its own resistance and leakage inductance. A PA keying down on one winding pulls the
+// primary current up, drops the EMF of every winding, and sags the other rails too (cross-regulation).
+// Circuit: mains sine behind R_p + L_p, an ideal multi-winding transformer (secondary EMF
+// e_i = k_i (V_s - R_p i_p - L_p di_p/dt), i_p = Σ k_i i_i), each winding behind R_i + L_i and its diodes (Vf + r_d,
+// the element model of rectifier-sim.ts) into its reservoir (ESR, constant-current load, optional bleeder).
+// Integration: backward Euler at a fixed step (stable for any leakage, 0 included); with the conducting set fixed a
+// step is linear and the shared primary is a rank-one term, so each step is solved in closed form (currents()).
+// Steady state: Newton shooting on the cycle-start reservoir voltages (Jacobian by finite differences), started
+// from the last converged state of the same circuit inside one evaluation (warm start). Checked against ngspice
+// (test/core/power/shared-primary.test.ts).
+// Frame: each winding's current is taken rectified (|e| drives every full-wave winding). That holds while every
+// conduction pulse ends before the mains zero crossing, true of a capacitor-input rectifier; a pulse still running
+// there is cut and reported (`overlap`).
 import type { RectifierTopology } from '../model';
-import { diodesInPath } from './rectifier-sim';
+import { diodesInPath, simulationScope } from './rectifier-sim';
 
 export interface JointWinding {
   topology: RectifierTopology;
@@ -14,6 +21,8 @@ export interface JointWinding {
   secondaryVrms: number;
   /** The winding's own resistance (Ω), per half for centre-tap; the primary's share is in primaryOhm. */
   ownOhm: number;
+  /** The winding's own leakage inductance (H), per half for centre-tap; the primary's share is in primaryH. */
+  ownH?: number;
   diodeDropV: number;
   diodeResistanceOhm: number;
   capacitanceF: number;
@@ -24,25 +33,32 @@ export interface JointWinding {
 }
 
 export interface JointInput {
-  /** Applied mains RMS (V) and the primary resistance (Ω). */
+  /** Applied mains RMS (V), the primary resistance (Ω) and primary leakage inductance (H, default 0). */
   primaryVrms: number;
   primaryOhm: number;
+  primaryH?: number;
   frequencyHz: number;
   windings: JointWinding[];
-  /** Steps per mains cycle (default 2000) and the cap on simulated cycles (default 400). */
+  /** Steps per mains cycle (default 1000) and the cap on simulated cycles (default 200). */
   stepsPerCycle?: number;
   maxCycles?: number;
 }
 
 export interface JointRail {
+  /** Rail terminal (reservoir plus ESR) over the steady-state cycle: lowest, mean, highest (V). */
   troughV: number;
   dcMeanV: number;
   peakV: number;
+  /** Highest winding current (A) and its RMS (A) over the cycle, rectified frame. */
+  peakA: number;
+  rmsA: number;
 }
 
 export interface JointResult {
   converged: boolean;
   cycles: number;
+  /** True when a conduction pulse was still running at a mains zero crossing (the rectified frame then errs). */
+  overlap: boolean;
   rails: JointRail[];
 }
 
@@ -51,114 +67,242 @@ interface W {
   n: number;
   vf: number;
   r: number;
+  l: number;
   esr: number;
   c: number;
   i0: number;
   g: number;
   halfWave: boolean;
+  noLoadV: number;
+}
+
+interface Circuit {
+  ws: W[];
+  rp: number;
+  lp: number;
+  h: number;
+  steps: number;
+  vpk: number;
+}
+
+interface Work {
+  v: Float64Array;
+  j: Float64Array;
+  a: Float64Array;
+  d: Float64Array;
+  c: Float64Array;
+  on: Uint8Array;
 }
 
 /**
- * Winding currents (A, magnitudes) at one instant: with the conducting set S fixed the circuit is linear,
- * i_i R_i = k_i (|V_s| - R_p X) - b_i with X = Σ_S k_j i_j, so X = (|V_s| A - B) / (1 + R_p A),
- * A = Σ k_i² / R_i, B = Σ k_i b_i / R_i (Kirchhoff's laws on the ideal transformer); a winding whose current
- * comes out negative is dropped from S and the rest solved again.
+ * One backward-Euler step to emf `vs` (the source's value at the step end). Per winding in the conducting set S:
+ * L_i (j' - j)/h = k_i (|V_s| - R_p X' - L_p (X' - X)/h) - R_i j' - n Vf + ESR I0 - v', X = Σ_S k_i j_i, and
+ * C (v' - v)/h = j' - I0 - g v', so v' = a_i + β_i j'. Then j_i' = (c_i - k_i ρ X')/D_i with ρ = R_p + L_p/h,
+ * D_i = L_i/h + R_i + β_i, and X' = B / (1 + ρ A), A = Σ k_i²/D_i, B = Σ k_i c_i / D_i (Kirchhoff on the ideal
+ * transformer); a winding whose current comes out negative is dropped from S (its diodes block) and the rest solved
+ * again. Returns X'.
  */
-function currents(ws: W[], v: Float64Array, vs: number, rp: number, out: Float64Array, on: Uint8Array): void {
+function step(cir: Circuit, wk: Work, vs: number, x: number): number {
+  const { ws, h } = cir;
   const mag = Math.abs(vs);
   const m = ws.length;
+  const rho = cir.rp + cir.lp / h;
   for (let i = 0; i < m; i++) {
     const w = ws[i];
-    on[i] = (vs > 0 || !w.halfWave) && w.k * mag - (w.n * w.vf + v[i] - w.esr * w.i0) > 0 ? 1 : 0;
+    const q = 1 + (h * w.g) / w.c;
+    const beta = h / w.c / q;
+    wk.a[i] = (wk.v[i] - (h / w.c) * w.i0) / q;
+    wk.d[i] = w.l / h + w.r + beta;
+    wk.c[i] = w.k * (mag + (cir.lp / h) * x) - (w.n * w.vf - w.esr * w.i0) - wk.a[i] + (w.l / h) * wk.j[i];
+    wk.on[i] = (vs > 0 || !w.halfWave) && wk.c[i] > 0 ? 1 : 0;
   }
+  let xNew = 0;
   for (let pass = 0; pass <= m; pass++) {
     let a = 0;
     let b = 0;
     for (let i = 0; i < m; i++) {
-      if (!on[i]) continue;
-      const w = ws[i];
-      a += (w.k * w.k) / w.r;
-      b += (w.k * (w.n * w.vf + v[i] - w.esr * w.i0)) / w.r;
+      if (!wk.on[i]) continue;
+      a += (ws[i].k * ws[i].k) / wk.d[i];
+      b += (ws[i].k * wk.c[i]) / wk.d[i];
     }
-    const x = (mag * a - b) / (1 + rp * a);
+    xNew = b / (1 + rho * a);
     let worst = -1;
-    let worstI = 0;
+    let worstJ = 0;
     for (let i = 0; i < m; i++) {
-      const w = ws[i];
-      out[i] = on[i] ? (w.k * (mag - rp * x) - (w.n * w.vf + v[i] - w.esr * w.i0)) / w.r : 0;
-      if (on[i] && out[i] < worstI) {
+      const jn = wk.on[i] ? (wk.c[i] - ws[i].k * rho * xNew) / wk.d[i] : 0;
+      if (wk.on[i] && jn < worstJ) {
         worst = i;
-        worstI = out[i];
+        worstJ = jn;
       }
     }
-    if (worst < 0) return;
-    on[worst] = 0;
+    if (worst < 0) break;
+    wk.on[worst] = 0;
   }
-}
-
-/** Reservoir voltages' rate of change (V/s) at one instant. */
-function slope(
-  ws: W[], v: Float64Array, vs: number, rp: number, buf: Float64Array, on: Uint8Array, dv: Float64Array,
-): void {
-  currents(ws, v, vs, rp, buf, on);
-  for (let i = 0; i < ws.length; i++) {
+  for (let i = 0; i < m; i++) {
     const w = ws[i];
-    // capacitor current = diode current - load - bleeder (the bleeder taken across the capacitor)
-    dv[i] = (buf[i] - w.i0 - v[i] * w.g) / w.c;
+    const jn = wk.on[i] ? (wk.c[i] - w.k * rho * xNew) / wk.d[i] : 0;
+    wk.j[i] = jn;
+    const q = 1 + (h * w.g) / w.c;
+    wk.v[i] = Math.max(0, wk.a[i] + (h / w.c / q) * jn);
   }
+  return xNew;
 }
 
-export function simulateSharedPrimary(input: JointInput): JointResult {
-  const steps = input.stepsPerCycle ?? 2000;
-  const maxCycles = input.maxCycles ?? 400;
-  const period = 1 / input.frequencyHz;
-  const h = period / steps;
+interface Stats {
+  lo: Float64Array;
+  hi: Float64Array;
+  sum: Float64Array;
+  pk: Float64Array;
+  sq: Float64Array;
+  overlap: boolean;
+}
+
+/** One mains cycle from reservoir voltages v0 (currents start at 0: the cycle starts at a zero crossing). */
+function cycle(cir: Circuit, v0: Float64Array, wk: Work, st?: Stats): Float64Array {
+  const m = cir.ws.length;
+  wk.v.set(v0);
+  wk.j.fill(0);
+  let x = 0;
+  const half = cir.steps / 2;
+  for (let n = 1; n <= cir.steps; n++) {
+    const vs = cir.vpk * Math.sin((2 * Math.PI * n) / cir.steps);
+    x = step(cir, wk, vs, x);
+    if (n === half || n === cir.steps) {
+      // a pulse still running at the zero crossing: cut (the frame is rectified), and said
+      for (let i = 0; i < m; i++) if (wk.j[i] > 1e-9 && st) st.overlap = true;
+      wk.j.fill(0);
+      x = 0;
+    }
+    if (st) {
+      for (let i = 0; i < m; i++) {
+        const w = cir.ws[i];
+        // the rail terminal: reservoir plus ESR x capacitor current
+        const u = wk.v[i] + w.esr * (wk.j[i] - w.i0 - w.g * wk.v[i]);
+        if (u < st.lo[i]) st.lo[i] = u;
+        if (u > st.hi[i]) st.hi[i] = u;
+        st.sum[i] += u;
+        if (wk.j[i] > st.pk[i]) st.pk[i] = wk.j[i];
+        st.sq[i] += wk.j[i] * wk.j[i];
+      }
+    }
+  }
+  return Float64Array.from(wk.v);
+}
+
+/** Solve M y = r in place (Gaussian elimination with partial pivoting, m small); false when singular. */
+function solve(mat: number[][], r: number[]): boolean {
+  const m = r.length;
+  for (let col = 0; col < m; col++) {
+    let p = col;
+    for (let row = col + 1; row < m; row++) if (Math.abs(mat[row][col]) > Math.abs(mat[p][col])) p = row;
+    if (!(Math.abs(mat[p][col]) > 1e-14)) return false;
+    [mat[col], mat[p]] = [mat[p], mat[col]];
+    [r[col], r[p]] = [r[p], r[col]];
+    for (let row = col + 1; row < m; row++) {
+      const f = mat[row][col] / mat[col][col];
+      for (let k = col; k < m; k++) mat[row][k] -= f * mat[col][k];
+      r[row] -= f * r[col];
+    }
+  }
+  for (let row = m - 1; row >= 0; row--) {
+    let s = r[row];
+    for (let k = row + 1; k < m; k++) s -= mat[row][k] * r[k];
+    r[row] = s / mat[row][row];
+  }
+  return true;
+}
+
+function circuitOf(input: JointInput): Circuit {
+  const steps = Math.max(100, Math.min(20000, 2 * Math.round((input.stepsPerCycle ?? 1000) / 2)));
   const vpk = Math.SQRT2 * input.primaryVrms;
-  const rp = Math.max(0, input.primaryOhm);
   const ws: W[] = input.windings.map((w) => {
     const n = diodesInPath(w.topology);
+    const k = w.secondaryVrms / input.primaryVrms;
     return {
-      k: w.secondaryVrms / input.primaryVrms, n, vf: w.diodeDropV, esr: Math.max(0, w.esrOhm), c: w.capacitanceF,
+      k, n, vf: w.diodeDropV, esr: Math.max(0, w.esrOhm), c: w.capacitanceF, l: Math.max(0, w.ownH ?? 0),
       r: Math.max(1e-6, w.ownOhm + n * w.diodeResistanceOhm + Math.max(0, w.esrOhm)), i0: Math.max(0, w.loadA),
       g: w.bleederOhm && w.bleederOhm > 0 ? 1 / w.bleederOhm : 0, halfWave: w.topology === 'half-wave',
+      noLoadV: Math.max(0, k * vpk - n * w.diodeDropV),
     };
   });
-  const m = ws.length;
-  const v = Float64Array.from(ws.map((w) => Math.max(0, w.k * vpk - w.n * w.vf)));
-  const buf = new Float64Array(m);
-  const on = new Uint8Array(m);
-  const sinT = Float64Array.from({ length: steps + 1 }, (_, n) => vpk * Math.sin((2 * Math.PI * n) / steps));
-  const d1 = new Float64Array(m);
-  const d2 = new Float64Array(m);
-  const pred = new Float64Array(m);
-  const tol = 1e-5 * Math.max(1, ...v);
+  return {
+    ws, rp: Math.max(0, input.primaryOhm), lp: Math.max(0, input.primaryH ?? 0), h: 1 / input.frequencyHz / steps,
+    steps, vpk,
+  };
+}
+
+const key = (input: JointInput, withLoads: boolean) => JSON.stringify([
+  input.primaryVrms, input.primaryOhm, input.primaryH ?? 0, input.frequencyHz, input.stepsPerCycle ?? null,
+  input.maxCycles ?? null, input.windings.map((w) => [w.topology, w.secondaryVrms, w.ownOhm, w.ownH ?? 0, w.diodeDropV,
+    w.diodeResistanceOhm, w.capacitanceF, w.esrOhm, w.bleederOhm ?? null, withLoads ? w.loadA : null]),
+]);
+
+/**
+ * The steady state of the joint circuit. Inside withSimulationMemo a repeated input is a look-up, and a circuit
+ * seen before at other loads starts its search from that converged state.
+ */
+export function simulateSharedPrimary(input: JointInput): JointResult {
+  const memo = simulationScope<JointResult>('joint');
+  const warm = simulationScope<Float64Array>('joint-warm');
+  const exact = memo ? key(input, true) : '';
+  const held = memo?.get(exact);
+  if (held) return held;
+  const circuitKey = warm ? key(input, false) : '';
+  const result = simulateUncached(input, warm?.get(circuitKey), (v) => warm?.set(circuitKey, v));
+  memo?.set(exact, result);
+  return result;
+}
+
+function simulateUncached(input: JointInput, start?: Float64Array, onSteady?: (v0: Float64Array) => void): JointResult {
+  const cir = circuitOf(input);
+  const m = cir.ws.length;
+  const maxCycles = input.maxCycles ?? 200;
+  const wk: Work = {
+    v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), d: new Float64Array(m),
+    c: new Float64Array(m), on: new Uint8Array(m),
+  };
+  const top = Float64Array.from(cir.ws.map((w) => w.noLoadV));
+  const tol = 1e-5 * Math.max(1, ...top);
+  let x: Float64Array = start && start.length === m ? Float64Array.from(start) : Float64Array.from(top, (v) => 0.95 * v);
   let cycles = 0;
   let converged = false;
-  let stats = ws.map(() => ({ min: Infinity, max: -Infinity, sum: 0 }));
+  // Source: shooting method for periodic steady states (Aprille & Trick, Proc. IEEE 60(1), 1972; from memory):
+  // Newton on F(x) = P(x) - x, P the one-cycle map, Jacobian by finite differences; a step that does not reduce
+  // the residual falls back to one plain cycle x <- P(x)
   while (cycles < maxCycles) {
-    const start = Float64Array.from(v);
-    const lo = new Float64Array(m).fill(Infinity);
-    const hi = new Float64Array(m).fill(-Infinity);
-    const sum = new Float64Array(m);
-    for (let n = 0; n < steps; n++) {
-      // Heun's method (explicit trapezoid): predictor with the slope at the start, corrector with the mean slope
-      slope(ws, v, sinT[n], rp, buf, on, d1);
-      for (let i = 0; i < m; i++) pred[i] = Math.max(0, v[i] + h * d1[i]);
-      slope(ws, pred, sinT[n + 1], rp, buf, on, d2);
-      for (let i = 0; i < m; i++) {
-        v[i] = Math.max(0, v[i] + (h / 2) * (d1[i] + d2[i]));
-        // rail terminal = reservoir + ESR x capacitor current; the trough and mean are read on the reservoir node
-        if (v[i] < lo[i]) lo[i] = v[i];
-        if (v[i] > hi[i]) hi[i] = v[i];
-        sum[i] += v[i];
-      }
-    }
-    stats = ws.map((_, i) => ({ min: lo[i], max: hi[i], sum: sum[i] }));
+    const p = cycle(cir, x, wk);
     cycles++;
-    if (v.every((x, i) => Math.abs(x - start[i]) < tol)) {
+    const f = Array.from(p, (v, i) => v - x[i]);
+    const norm = Math.max(...f.map(Math.abs));
+    if (norm < tol) {
       converged = true;
       break;
     }
+    const jac: number[][] = [];
+    for (let i = 0; i < m; i++) jac.push(new Array<number>(m).fill(0));
+    const delta = 1e-4 * Math.max(1, ...top);
+    for (let col = 0; col < m && cycles < maxCycles; col++) {
+      const xp = Float64Array.from(x);
+      xp[col] += delta;
+      const pp = cycle(cir, xp, wk);
+      cycles++;
+      for (let row = 0; row < m; row++) jac[row][col] = (pp[row] - p[row]) / delta - (row === col ? 1 : 0);
+    }
+    const rhs = f.map((v) => -v);
+    const next = solve(jac, rhs) ? Float64Array.from(x, (v, i) => Math.min(top[i], Math.max(0, v + rhs[i]))) : p;
+    x = next.every((v) => Number.isFinite(v)) ? next : p;
   }
-  return { converged, cycles, rails: stats.map((s) => ({ troughV: s.min, peakV: s.max, dcMeanV: s.sum / steps })) };
+  if (converged) onSteady?.(x);
+  const st: Stats = {
+    lo: new Float64Array(m).fill(Infinity), hi: new Float64Array(m).fill(-Infinity), sum: new Float64Array(m),
+    pk: new Float64Array(m), sq: new Float64Array(m), overlap: false,
+  };
+  cycle(cir, x, wk, st);
+  return {
+    converged, cycles: cycles + 1, overlap: st.overlap,
+    rails: cir.ws.map((_, i) => ({
+      troughV: st.lo[i], peakV: st.hi[i], dcMeanV: st.sum[i] / cir.steps, peakA: st.pk[i],
+      rmsA: Math.sqrt(st.sq[i] / cir.steps),
+    })),
+  };
 }

@@ -25,3 +25,31 @@ export function resistanceFromRegulation(ratedVrms: number, ratedA: number, regu
   const r = (regulationFraction * ratedVrms) / ratedA;
   return Number.isFinite(r) ? r : 0;
 }
+
+/**
+ * Leakage reactance over winding resistance (X/R at mains frequency) when no leakage inductance is entered: the
+ * regulation figure a maker prints (measured into a resistive load) is almost all copper loss, the reactance adding
+ * only in quadrature, so the resistance comes from it as above and the leakage is taken as a share of that resistance.
+ * Common practice, no published source: small laminated (EI) transformers about 0.25, toroids (windings spread over
+ * the whole core) about 0.1.
+ */
+export const LEAKAGE_X_OVER_R = { laminated: 0.25, toroidal: 0.1 } as const;
+
+export interface Leakage {
+  /** Leakage inductance referred to this winding (H), primary and secondary leakage together. */
+  henry: number;
+  /** True when split from the regulation figure (LEAKAGE_X_OVER_R), false when entered. */
+  fromRegulation: boolean;
+}
+
+/**
+ * Leakage inductance of a winding (H): the entered value, else X = (X/R) R_s at the mains frequency,
+ * L = X / (2 pi f). Source: inductive reactance X = 2 pi f L (circuit theory); X/R from LEAKAGE_X_OVER_R.
+ */
+export function windingLeakage(w: Winding, construction: 'laminated' | 'toroidal', frequencyHz: number): Leakage {
+  const entered = w.leakageH ?? null;
+  if (entered !== null && Number.isFinite(entered) && entered >= 0) return { henry: entered, fromRegulation: false };
+  const r = resistanceFromRegulation(w.ratedVrms, w.ratedA, w.regulationFraction);
+  const l = frequencyHz > 0 ? (LEAKAGE_X_OVER_R[construction] * r) / (2 * Math.PI * frequencyHz) : 0;
+  return { henry: Number.isFinite(l) ? l : 0, fromRegulation: true };
+}

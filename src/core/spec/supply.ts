@@ -15,6 +15,12 @@ export const transformerSpec = defineSpec({
   fields: {
     name: text('Transformer name', 200, true, 'Mains transformer', { help: 'e.g. T1 mains transformer' }),
     construction: choice('Construction', CONSTRUCTIONS, 'laminated'),
+    // Common practice, no published source: makers commonly hold the secondary voltage to about ±5 %
+    secondaryToleranceFraction: optNum('Secondary voltage tolerance', '%', U.pct, 0, 0.2, 0.05, {
+      form: 'secondaryTolerance',
+      help: 'the maker\'s ± on the secondary voltage, often 5 %; empty = no tolerance corner',
+      example: '5',
+    }),
   },
 });
 
@@ -31,6 +37,11 @@ export const windingSpec = defineSpec({
       form: 'resistance',
       exclusiveMin: true,
       help: 'empty = from regulation',
+    }),
+    leakageH: optNum('Leakage inductance', 'H', { symbol: 'µH', scale: 1e-6 }, 0, 1, null, {
+      form: 'leakage',
+      help: 'referred to this winding, e.g. 250 or 1.2 mH; empty = estimated from the regulation',
+      example: '250',
     }),
   },
 });

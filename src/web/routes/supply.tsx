@@ -84,7 +84,7 @@ export function supplyRoutes(deps: Deps) {
 
   // ------------------------------------------------------------ transformers and windings
   app.post('/projects/:id/supply/transformers', projectEdit(deps, { ...common, form: 'add-transformer', schema: F.transformerSchema, values: () => ({}),
-    change: (p, d) => ({ ...p, supply: { ...p.supply, transformers: [...p.supply.transformers, { id: newId('tr'), name: d.name, construction: d.construction, windings: [] }] } }),
+    change: (p, d) => ({ ...p, supply: { ...p.supply, transformers: [...p.supply.transformers, { id: newId('tr'), name: d.name, construction: d.construction, secondaryToleranceFraction: d.secondaryToleranceFraction, windings: [] }] } }),
   }));
 
   app.post('/projects/:id/supply/transformers/:tid', projectEdit(deps, { ...common, form: (c) => `transformer-${c.req.param('tid')}`, schema: F.transformerSchema,
@@ -95,7 +95,7 @@ export function supplyRoutes(deps: Deps) {
     change: (p, d, c) => {
       const tid = c.req.param('tid');
       if (!p.supply.transformers.some((t) => t.id === tid)) return gone('transformer');
-      return { ...p, supply: { ...p.supply, transformers: p.supply.transformers.map((t) => (t.id === tid ? { ...t, name: d.name, construction: d.construction } : t)) } };
+      return { ...p, supply: { ...p.supply, transformers: p.supply.transformers.map((t) => (t.id === tid ? { ...t, name: d.name, construction: d.construction, secondaryToleranceFraction: d.secondaryToleranceFraction } : t)) } };
     },
   }));
 

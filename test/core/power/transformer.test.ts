@@ -59,9 +59,14 @@ describe('evaluateSupply on the §4.2 example (3 A in every mode)', () => {
   const report = evaluateSupply(refProject({ rails: [{ ...refRail, minimumV: 18.42 }] }), { raw: flat(3) });
   const rail = report.rails[0] as RectifiedRailReport;
   it('low-mains key-down corner reproduces the §4.2 -10 % row', () => {
+    // The §4.2 table models the winding behind its resistance alone (no leakage). The corner's volts now come from
+    // the transformer simulated as one (half the copper in the primary, leakage split from the regulation figure),
+    // so the table is checked against the rail's own simulation, kept beside it (aloneTroughV); the joint volts are
+    // checked against ngspice in shared-primary.test.ts. With one winding the two differ only by the leakage, which
+    // moves the trough by tenths of a volt (it lowers the peak current; the reservoir can charge a little higher).
     const c = rail.corners.find((x) => x.id === rail.worstVoltageCornerId)!;
-    near(c.troughV, 18.42, 0.03, 'trough');
-    near(c.dcMeanV, 19.46, 0.03, 'mean');
+    near(c.aloneTroughV ?? NaN, 18.42, 0.03, 'trough');
+    near(c.troughV, c.aloneTroughV!, 0.3, 'trough simulated as one transformer');
   });
   it('lowest secondary for a 18.42 V trough is ~18 V (the §4.2 design), standard 18 V', () => {
     // the recommendation rates the winding at the simulated RMS current (not 100 VA), so R_s differs slightly
