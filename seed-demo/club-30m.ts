@@ -1,7 +1,7 @@
 // Demo (a): a club group build of 8 kits of a 30 m, 20 W CW transceiver on 120 V / 60 Hz mains.
 // Invented scenario: the "Ridgeback Valley Radio Society" autumn build. Suppliers, SKUs and prices invented.
 import type { Project, Stage, Part, BomLine } from '../src/core/model';
-import { SAMPLE_CORES } from './cores';
+import { CATALOG_BINOCULAR, CATALOG_IRON12, CATALOG_IRON17, SAMPLE_CORES } from './cores';
 import { offer, perMode, defaultRf, defaultLpf } from './common';
 
 const stages: Stage[] = [
@@ -57,6 +57,9 @@ const stages: Stage[] = [
       imbalanceTypical: null,
       imbalanceWorst: null,
       deviceCossF: null,
+      outputCoreId: CATALOG_BINOCULAR.id,
+      outputPrimaryTurns: 2,
+      outputWireDiameterM: 0.8e-3,
     },
   },
   {
@@ -66,7 +69,8 @@ const stages: Stage[] = [
     notes: 'Five-element filter on two iron-powder toroids; 500 V C0G/silver-mica capacitors.',
     loads: [],
     dissipationW: null,
-    lpf: { ...defaultLpf(), coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2, core: { ...SAMPLE_CORES.iron12.core }, capacitorRatedV: 500 },
+    lpf: { ...defaultLpf(), coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2, core: { ...SAMPLE_CORES.iron12.core }, capacitorRatedV: 500,
+      coreId: CATALOG_IRON12.id, capacitorRatedA: 3 },
   },
   {
     id: 'st-tr',
@@ -231,6 +235,7 @@ export const club30m: Project = {
   rf: defaultRf(),
   parts,
   bom,
+  cores: [CATALOG_IRON12, CATALOG_IRON17, CATALOG_BINOCULAR],
   costing: {
     attritionFraction: 0.05,
     sparesPerLine: 0,

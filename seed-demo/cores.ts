@@ -1,6 +1,7 @@
 // Invented sample cores for the demos, described by size and material only (no maker's part codes). Their AL and
 // flux limits are illustrative values for the demos, not any maker's data: take a real core's from its data sheet.
-import type { ToroidCore } from '../src/core/model';
+import type { CatalogCore, ToroidCore } from '../src/core/model';
+import { toroidEffective } from '../src/core/rf/cores';
 
 export interface SampleCore {
   name: string;
@@ -24,4 +25,24 @@ export const SAMPLE_CORES: Record<'iron12' | 'iron17' | 'ferrite23', SampleCore>
     alHPerTurn2: 900e-9,
     core: { outerDiameterM: 23e-3, innerDiameterM: 14e-3, heightM: 7.5e-3, fluxLimitT: 0.02, minFrequencyHz: 1e6, maxFrequencyHz: 50e6, wireDiameterM: 0.6e-3 },
   },
+};
+
+/** A catalog core made from a sample toroid: Ae and le from its dimensions (src/core/rf/cores.ts). */
+function toroidEntry(id: string, s: SampleCore): CatalogCore {
+  const c = s.core;
+  const geo = toroidEffective(c.outerDiameterM!, c.innerDiameterM!, c.heightM!);
+  return {
+    id, name: s.name, alHPerTurn2: s.alHPerTurn2, aeM2: geo.aeM2, leM: geo.leM, innerDiameterM: c.innerDiameterM, windowAreaM2: null,
+    minFrequencyHz: c.minFrequencyHz!, maxFrequencyHz: c.maxFrequencyHz!, fluxLimitT: c.fluxLimitT!,
+  };
+}
+
+/** Invented catalog cores for the demos (illustrative figures, not any maker's data). */
+export const CATALOG_IRON12 = toroidEntry('core-iron12', SAMPLE_CORES.iron12);
+export const CATALOG_IRON17 = toroidEntry('core-iron17', SAMPLE_CORES.iron17);
+export const CATALOG_FERRITE23 = toroidEntry('core-ferrite23', SAMPLE_CORES.ferrite23);
+export const CATALOG_BINOCULAR: CatalogCore = {
+  id: 'core-bino14', name: 'Ferrite binocular core 14 × 8 × 12 mm, HF power material 1–30 MHz (AL 2000 nH/t²)',
+  alHPerTurn2: 2000e-9, aeM2: 25e-6, leM: 25e-3, innerDiameterM: null, windowAreaM2: 18e-6,
+  minFrequencyHz: 1e6, maxFrequencyHz: 30e6, fluxLimitT: 0.03,
 };

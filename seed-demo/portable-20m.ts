@@ -1,6 +1,6 @@
 // Demo (b): a 5 W 20 m portable CW rig on a 12.8 V (4-cell lithium iron phosphate) battery.
 import type { Project } from '../src/core/model';
-import { SAMPLE_CORES } from './cores';
+import { CATALOG_FERRITE23, CATALOG_IRON12, SAMPLE_CORES } from './cores';
 import { offer, perMode, defaultRf, defaultLpf } from './common';
 
 const S1 = 'Northfield Components';
@@ -128,5 +128,6 @@ export const portable20m: Project = {
     { id: 'pb6', stageId: null, partId: 'q-bat', qtyPerRig: 1, refs: 'BT1', notes: '', roleId: null },
     { id: 'pb7', stageId: null, partId: 'q-fuse', qtyPerRig: 1, refs: 'F1', notes: 'Fit at the battery terminal', roleId: null },
   ],
+  cores: [CATALOG_IRON12, CATALOG_FERRITE23],
   costing: { attritionFraction: 0, sparesPerLine: 0, exchangeRates: {}, suppliers: [{ name: S1, shippingCents: 850, currency: 'USD' }, { name: S2, shippingCents: 600, currency: 'USD' }] },
 };

@@ -27,15 +27,12 @@ export interface Winding {
   ratedA: number; // rated secondary RMS current
   regulationFraction: number; // (V_NL - V_FL) / V_FL, e.g. 0.06
   resistanceOhm: number | null; // measured/entered; null = from regulation
-  leakageH?: number | null; // leakage inductance referred to this winding; null/absent = split from regulation
 }
 
 export interface Transformer {
   id: string;
   name: string;
   construction: 'laminated' | 'toroidal';
-  /** Secondary voltage tolerance (fraction, e.g. 0.05): the low-tolerance corner; null/absent = no such corner. */
-  secondaryToleranceFraction?: number | null;
   windings: Winding[];
 }
 
@@ -170,6 +167,9 @@ export interface PaParams {
   imbalanceTypical?: number | null; // push-pull halves' mismatch (fraction), typical; null/absent = 0.05 assumed
   imbalanceWorst?: number | null; // same, worst; null/absent = 0.2 assumed
   deviceCossF?: number | null; // device output capacitance (class E: part of the shunt C), F; null/absent = not given
+  outputCoreId?: string | null; // the output transformer's core (a catalog core id); null/absent = not given
+  outputPrimaryTurns?: number | null; // turns of the transformer's full primary; null/absent = flux not checked
+  outputWireDiameterM?: number | null; // its primary wire over the enamel, m; null/absent = fit not checked
 }
 
 export interface LpfParams {
@@ -190,6 +190,23 @@ export interface LpfParams {
   seed: number;
   core?: ToroidCore | null; // the inductors' core, for flux, fit and resonance; null/absent = not entered
   capacitorRatedV?: number | null; // the filter capacitors' voltage rating, V; null/absent = not checked
+  capacitorRatedA?: number | null; // the filter capacitors' RF current rating (RMS), A; null/absent = not checked
+  coreId?: string | null; // the inductors' core from the project's catalog (overrides core and AL); null = entered
+}
+
+/** A core of the project's catalog, described by size and material; filter inductors and output transformers pick
+ *  one. SI units; AL in H/turn², Ae in m², le in m. */
+export interface CatalogCore {
+  id: string;
+  name: string;
+  alHPerTurn2: number;
+  aeM2: number; // effective cross-section
+  leM: number; // effective magnetic path length
+  innerDiameterM: number | null; // toroid inner diameter (winding fit), null = not given
+  windowAreaM2: number | null; // winding window (non-toroids, or instead of the diameter), null = not given
+  minFrequencyHz: number; // the material's frequency range
+  maxFrequencyHz: number;
+  fluxLimitT: number; // the maker's peak flux density limit (heating) in that range
 }
 
 /** A toroidal core as entered on the filter: dimensions, material data and the wire wound on it (SI; null = not given). */
@@ -322,4 +339,6 @@ export interface Project {
   parts: Part[];
   bom: BomLine[];
   costing: Costing;
+  /** The project's core catalog (absent in older data: none). */
+  cores?: CatalogCore[];
 }

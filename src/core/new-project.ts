@@ -53,6 +53,7 @@ export function cloneProject(p: Project, newProjectId: string, name: string, mak
   p.supply.rails.forEach((rail) => remap(rail.id, 'rail'));
   p.stages.forEach((s) => remap(s.id, 'st'));
   p.parts.forEach((x) => remap(x.id, 'part'));
+  (p.cores ?? []).forEach((c) => remap(c.id, 'core'));
   const rails = p.supply.rails.map((rail) => {
     const id = r(rail.id);
     if (rail.kind === 'rectified') return { ...rail, id, windingId: r(rail.windingId) };
@@ -63,14 +64,16 @@ export function cloneProject(p: Project, newProjectId: string, name: string, mak
     ...structuredClone(s),
     id: r(s.id),
     loads: s.loads.map((l) => ({ ...l, railId: r(l.railId) })),
-    ...(s.pa ? { pa: { ...s.pa, railId: r(s.pa.railId) } } : {}),
+    ...(s.pa ? { pa: { ...s.pa, railId: r(s.pa.railId), ...(s.pa.outputCoreId ? { outputCoreId: r(s.pa.outputCoreId) } : {}) } } : {}),
+    ...(s.lpf ? { lpf: { ...structuredClone(s.lpf), ...(s.lpf.coreId ? { coreId: r(s.lpf.coreId) } : {}) } } : {}),
     ...(s.relay ? { relay: { ...s.relay, coilRailId: s.relay.coilRailId ? r(s.relay.coilRailId) : null } } : {}),
   }));
   const parts = p.parts.map((x) => ({ ...structuredClone(x), id: r(x.id), offers: x.offers.map((o) => ({ ...o, id: makeId('of') })) }));
   // a design role names the item it belongs to ("reservoir:<rail id>"): the binding follows the item's new id
   const role = (id: string | null | undefined) => (id ? id.replace(/^([^:]+):(.+)$/, (_m, kind: string, item: string) => `${kind}:${r(item)}`) : id);
   const bom = p.bom.map((b) => ({ ...b, id: makeId('bl'), partId: r(b.partId), stageId: b.stageId ? r(b.stageId) : null, ...(b.roleId !== undefined ? { roleId: role(b.roleId) } : {}) }));
-  return { ...structuredClone(p), id: newProjectId, name, version: 1, supply: { ...p.supply, transformers, rails }, stages, parts, bom };
+  const cores = p.cores?.map((c) => ({ ...c, id: r(c.id) }));
+  return { ...structuredClone(p), id: newProjectId, name, version: 1, supply: { ...p.supply, transformers, rails }, stages, parts, bom, ...(cores ? { cores } : {}) };
 }
 
 // Starting values for a new final, filter or relay stage come from their field specs (the spec's defaults); the

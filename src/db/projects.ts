@@ -6,7 +6,7 @@ import type { Database, Tx, Db } from './client';
 import { STAGE_DATA, type StageDataKey } from '../core/spec/stage-data';
 import * as t from './schema';
 import type { FuseSheet, TransformerSizing } from '../core/model';
-import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing } from '../core/model';
+import type { Project, Rail, Stage, Part, BomLine, Transformer, RfSettings, Costing, CatalogCore } from '../core/model';
 import { withRailDefaults } from '../core/spec/supply-rails';
 
 import type { ProjectSummary } from '../core/project-summary';
@@ -67,15 +67,15 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     ? await db.select().from(t.offers).where(inArray(t.offers.partId, partRows.map((r) => r.id))).orderBy(asc(t.offers.position))
     : [];
   const bomRows = await db.select().from(t.bomLines).where(eq(t.bomLines.projectId, id)).orderBy(asc(t.bomLines.position));
+  const coreRows = await db.select().from(t.cores).where(eq(t.cores.projectId, id)).orderBy(asc(t.cores.position));
 
   const transformers: Transformer[] = trafoRows.map((tr) => ({
     id: tr.id,
     name: tr.name,
     construction: tr.construction as Transformer['construction'],
-    secondaryToleranceFraction: tr.secondaryToleranceFraction,
     windings: windingRows
       .filter((w) => w.transformerId === tr.id)
-      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm, leakageH: w.leakageH })),
+      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm })),
   }));
   // JSON columns are not trusted: a non-object reads as no data, and evaluate() checks every field against its spec
   // (src/core/spec/project-check.ts), so a bad stored value is a fail finding naming it, never replaced silently.
@@ -139,6 +139,8 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     parts,
     bom,
     costing: p.costing as Costing,
+    // JSON not trusted here either: the core spec's check reports a bad stored value by name
+    ...(coreRows.length ? { cores: coreRows.map((c) => ({ ...jsonObject(c.params), id: c.id, name: c.name }) as CatalogCore) } : {}),
   };
 }
 
@@ -154,10 +156,11 @@ function childRows(project: Project) {
     parts: [] as Row[],
     offers: [] as Row[],
     bomLines: [] as Row[],
+    cores: [] as Row[],
   };
   for (const [i, tr] of project.supply.transformers.entries()) {
-    rows.transformers.push({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction, secondaryToleranceFraction: tr.secondaryToleranceFraction ?? null });
-    for (const [j, w] of tr.windings.entries()) rows.windings.push({ ...w, leakageH: w.leakageH ?? null, transformerId: tr.id, position: j });
+    rows.transformers.push({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction });
+    for (const [j, w] of tr.windings.entries()) rows.windings.push({ ...w, transformerId: tr.id, position: j });
   }
   for (const [i, rail] of project.supply.rails.entries()) {
     const { id: railId, name, kind, ...params } = rail;
@@ -179,13 +182,17 @@ function childRows(project: Project) {
     for (const [j, o] of part.offers.entries()) rows.offers.push({ ...o, partId: part.id, position: j });
   }
   for (const [i, b] of project.bom.entries()) rows.bomLines.push({ ...b, projectId: id, position: i });
+  for (const [i, c] of (project.cores ?? []).entries()) {
+    const { id: coreId, name, ...params } = c;
+    rows.cores.push({ id: coreId, projectId: id, position: i, name, params });
+  }
   return rows;
 }
 
 type Row = { id: string } & Record<string, unknown>;
 type ChildTable = keyof ReturnType<typeof childRows>;
 const CHILD_TABLES: ChildTable[] = ['transformers', 'windings', 'rails', 'stages', 'stageLoads', 'parts', 'offers',
-  'bomLines'];
+  'bomLines', 'cores'];
 /** Rows per multi-row INSERT (well under SQLite's bound-variable limit for these tables). */
 const INSERT_CHUNK = 200;
 

@@ -2,7 +2,7 @@
 // Format: { "format": "rigwright-project", "formatVersion": 1, "exportedAt": ISO date, "project": {...} }
 // with every quantity in SI units (V, A, W, Ω, F, H, Hz, s, °C, fractions 0..1) and money in integer cents.
 import { z } from 'zod';
-import type { BomLine, Costing, Mains, Part, Project, Rail, RfSettings, StageLoad } from '../core/model';
+import type { BomLine, CatalogCore, Costing, Mains, Part, Project, Rail, RfSettings, StageLoad } from '../core/model';
 import { bomLineSpec, costingSpec, offerSpec, partSpec, supplierSpec } from '../core/spec';
 import { STAGE_DATA } from '../core/spec/stage-data';
 import { loadSpec, stageSpec } from '../core/spec/stage';
@@ -11,6 +11,7 @@ import { enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from '..
 import { supplyChoicesSpec } from '../core/spec/supply-choices';
 import { batterySpec, rectifiedSpec, regulatedSpec, withRailDefaults } from '../core/spec/supply-rails';
 import { rfSettingsSpec } from '../core/spec/rf-settings';
+import { coreSpec } from '../core/spec/cores';
 import { specFileSchema, specShape, specValueSchema } from './spec-schema';
 
 export const FORMAT = 'rigwright-project';
@@ -63,6 +64,13 @@ const part = z.object({ id, ...specShape(partSpec), offers: z.array(offer).max(5
 const supplier = z.object(specShape(supplierSpec));
 // files written before lines were bound to design roles have no roleId: read as not bound
 const bomLine = z.object({ id, ...specShape(bomLineSpec), roleId: specValueSchema(bomLineSpec.fields.roleId).optional() }) as unknown as z.ZodType<BomLine>;
+// the core catalog: the same spec as the cores page's forms; files written before it existed have none
+const core = z.object({ id }).loose().transform((c, ctx): CatalogCore => {
+  const res = specFileSchema<object>(coreSpec).safeParse(c);
+  if (res.success) return { ...res.data, id: c.id } as CatalogCore;
+  for (const issue of res.error.issues) ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
+  return z.NEVER;
+});
 const costing = z.object({ ...specShape(costingSpec), suppliers: z.array(supplier).max(200) }) as unknown as z.ZodType<Costing>;
 
 // the project's own values, its mains and its RF settings: the same specs as the settings forms and core's checks
@@ -91,6 +99,7 @@ export const projectSchema = z.object({
   parts: z.array(part).max(5000),
   bom: z.array(bomLine).max(5000),
   costing,
+  cores: z.array(core).max(200).optional(),
 });
 
 export const projectFileSchema = z.object({
@@ -129,6 +138,8 @@ export function checkReferences(p: Project): string[] {
   dupes(p.supply.transformers.map((t) => t.id), 'transformer');
   dupes(p.stages.map((s) => s.id), 'stage');
   dupes(p.parts.map((x) => x.id), 'part');
+  dupes((p.cores ?? []).map((c) => c.id), 'core');
+  const coreIds = new Set((p.cores ?? []).map((c) => c.id));
   p.supply.rails.forEach((r, i) => {
     if (r.kind === 'rectified' && !windingIds.has(r.windingId)) errors.push(`project.supply.rails[${i}].windingId: no winding "${r.windingId}"`);
     if (r.kind === 'regulated' && !railIds.has(r.parentId)) errors.push(`project.supply.rails[${i}].parentId: no rail "${r.parentId}"`);
@@ -140,6 +151,8 @@ export function checkReferences(p: Project): string[] {
     });
     if (s.pa && !railIds.has(s.pa.railId)) errors.push(`project.stages[${i}].pa.railId: no rail "${s.pa.railId}"`);
     if (s.relay?.coilRailId && !railIds.has(s.relay.coilRailId)) errors.push(`project.stages[${i}].relay.coilRailId: no rail "${s.relay.coilRailId}"`);
+    if (s.lpf?.coreId && !coreIds.has(s.lpf.coreId)) errors.push(`project.stages[${i}].lpf.coreId: no core "${s.lpf.coreId}"`);
+    if (s.pa?.outputCoreId && !coreIds.has(s.pa.outputCoreId)) errors.push(`project.stages[${i}].pa.outputCoreId: no core "${s.pa.outputCoreId}"`);
   });
   p.bom.forEach((b, i) => {
     if (!partIds.has(b.partId)) errors.push(`project.bom[${i}].partId: no part "${b.partId}"`);

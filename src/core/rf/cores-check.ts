@@ -4,10 +4,8 @@ import type { Finding } from '../findings';
 import type { ToroidCore } from '../model';
 import type { LpfDesign } from './lpf-design';
 import { elementStress, swrCircle } from './lpf-stress';
-import {
-  CAPACITOR_LEAD_INDUCTANCE_H, WINDING_CAPACITANCE_F, effectivePermeability, peakFluxDensityT, resonanceHz,
-  singleLayerTurns, toroidEffective,
-} from './cores';
+import { CAPACITOR_LEAD_INDUCTANCE_H, WINDING_CAPACITANCE_F, effectivePermeability, peakFluxDensityT, resonanceHz } from './cores';
+import { enteredCore, fitTurns, type WoundCore } from './core-catalog';
 
 /** Highest harmonic whose rejection the filter is judged on; a part resonating below it stops behaving as itself. */
 const HIGHEST_HARMONIC = 5;
@@ -46,18 +44,23 @@ export interface CoreRealisation {
   swr: number;
 }
 
-const dims = (c: ToroidCore | null | undefined) =>
-  c && c.outerDiameterM !== null && c.innerDiameterM !== null && c.heightM !== null
-    ? toroidEffective(c.outerDiameterM, c.innerDiameterM, c.heightM)
-    : null;
+/** The entered toroid as a wound core (its dimensions give Ae and le), or the catalog core as it is. */
+const asWound = (c: ToroidCore | WoundCore | null | undefined, alHPerTurn2: number): WoundCore | null => {
+  if (!c) return null;
+  if ('from' in c) return c;
+  return enteredCore({ coreName: '', coreAlHPerTurn2: alHPerTurn2, core: c });
+};
+const dims = (c: WoundCore | null) => (c && c.aeM2 !== null && c.leM !== null ? { aeM2: c.aeM2, leM: c.leM } : null);
 
 /** Share of a capacitor's voltage rating an RF peak may use before a caution. */
 // Common practice, no published source: keep RF peaks within about 70 % of a capacitor's working voltage
 const CAPACITOR_DERATING = 0.7;
 
 export function realiseLpf(
-  d: LpfDesign, core: ToroidCore | null | undefined, powerW: number, swr: number, subject: string, capacitorRatedV: number | null = null,
+  d: LpfDesign, coreIn: ToroidCore | WoundCore | null | undefined, powerW: number, swr: number, subject: string,
+  capacitorRatedV: number | null = null, capacitorRatedA: number | null = null,
 ) {
+  const core = asWound(coreIn, d.coreAlHPerTurn2);
   const f0 = d.operatingFrequencyHz;
   const stress = elementStress(d, f0, powerW, swrCircle(d.r0Ohm, swr));
   const geo = dims(core);
@@ -71,9 +74,10 @@ export function realiseLpf(
     if (e.kind === 'series-inductor') {
       const turns = e.turns ?? 0;
       const peakFluxT = geo && turns > 0 ? peakFluxDensityT(s.rmsV, f0, turns, geo.aeM2) : null;
-      const fitTurns = core && core.innerDiameterM !== null && core.wireDiameterM !== null ? singleLayerTurns(core.innerDiameterM, core.wireDiameterM) : null;
+      const fit = core ? fitTurns(core) : null;
+      const fitN = fit?.turns ?? null;
       const selfResonanceHz = resonanceHz(e.builtValue, WINDING_CAPACITANCE_F);
-      inductors.push({ index: e.index, inductanceH: e.builtValue, turns, rmsV: s.rmsV, rmsA: s.rmsA, peakFluxT, fitTurns, selfResonanceHz });
+      inductors.push({ index: e.index, inductanceH: e.builtValue, turns, rmsV: s.rmsV, rmsA: s.rmsA, peakFluxT, fitTurns: fitN, selfResonanceHz });
       const who = `${subject}: L${e.index}`;
       const limit = core?.fluxLimitT ?? null;
       if (peakFluxT !== null && limit !== null) {
@@ -82,11 +86,12 @@ export function realiseLpf(
             ? `${turns} turns carry ${s.rmsV.toFixed(1)} V RMS at the worst load: ${(peakFluxT * 1e3).toFixed(1)} mT peak, above the core's ${(limit * 1e3).toFixed(1)} mT limit; the core will heat. Use a larger core (more area).`
             : `${turns} turns carry ${s.rmsV.toFixed(1)} V RMS at the worst load: ${(peakFluxT * 1e3).toFixed(1)} mT peak against the core's ${(limit * 1e3).toFixed(1)} mT limit.` });
       }
-      if (fitTurns !== null) {
-        findings.push({ severity: turns > fitTurns ? 'fail' : 'ok', rule: 'core.fit', subject: who, value: turns, limit: fitTurns, unit: '', source: 'core.winding-fit',
-          message: turns > fitTurns
-            ? `${turns} turns do not fit in one layer inside the core (about ${fitTurns} of this wire): use thinner wire or a larger core.`
-            : `${turns} turns fit in one layer inside the core (room for about ${fitTurns}).` });
+      if (fit && fitN !== null) {
+        const where = fit.how === 'window' ? 'in the core’s window' : 'in one layer inside the core';
+        findings.push({ severity: turns > fitN ? 'fail' : 'ok', rule: 'core.fit', subject: who, value: turns, limit: fitN, unit: '', source: fit.how === 'window' ? 'core.window-fit' : 'core.winding-fit',
+          message: turns > fitN
+            ? `${turns} turns do not fit ${where} (about ${fitN} of this wire): use thinner wire or a larger core.`
+            : `${turns} turns fit ${where} (room for about ${fitN}).` });
       }
       if (selfResonanceHz < topHz) {
         findings.push({ severity: 'caution', rule: 'core.self-resonance', subject: who, value: selfResonanceHz, limit: topHz, unit: 'Hz', source: 'core.self-resonance',
@@ -103,6 +108,13 @@ export function realiseLpf(
             ? `${peakV.toFixed(0)} V RF peak at the worst load against its ${capacitorRatedV} V rating.`
             : `${peakV.toFixed(0)} V RF peak at the worst load ${sev === 'fail' ? 'exceeds' : 'uses more than 70 % of'} its ${capacitorRatedV} V rating: use a capacitor rated higher.` });
       }
+      if (capacitorRatedA !== null) {
+        const over = s.rmsA > capacitorRatedA;
+        findings.push({ severity: over ? 'fail' : 'ok', rule: 'lpf.capacitor-current', subject: `${subject}: C${e.index}`, value: s.rmsA, limit: capacitorRatedA, unit: 'A', source: 'lpf.capacitor-current',
+          message: over
+            ? `${s.rmsA.toFixed(2)} A RMS of RF current at the worst load exceeds its ${capacitorRatedA} A rating: it will heat; use a part rated for more current or two in parallel.`
+            : `${s.rmsA.toFixed(2)} A RMS of RF current at the worst load against its ${capacitorRatedA} A rating.` });
+      }
       if (selfResonanceHz < topHz) {
         findings.push({ severity: 'caution', rule: 'core.self-resonance', subject: `${subject}: C${e.index}`, value: selfResonanceHz, limit: topHz, unit: 'Hz', source: 'core.self-resonance',
           message: `With about ${CAPACITOR_LEAD_INDUCTANCE_H * 1e9} nH of lead this capacitor resonates near ${mhz(selfResonanceHz)}, below the ${HIGHEST_HARMONIC}th harmonic (${mhz(topHz)}): keep its leads very short or use a chip part.` });
@@ -115,7 +127,7 @@ export function realiseLpf(
   }
   if (!geo) {
     findings.push({ severity: 'caution', rule: 'core.not-entered', subject, value: null, limit: null, unit: '', source: 'design.consistency',
-      message: "The core's outer and inner diameter and height are not entered, so the flux density in the inductors is not checked." });
+      message: "The core's outer and inner diameter and height are not entered (or no core is chosen from the catalog), so the flux density in the inductors is not checked." });
   }
   const realisation: CoreRealisation = {
     leM: geo?.leM ?? null, aeM2: geo?.aeM2 ?? null, permeability: geo ? effectivePermeability(d.coreAlHPerTurn2, geo.leM, geo.aeM2) : null,

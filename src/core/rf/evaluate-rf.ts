@@ -17,6 +17,8 @@ import { fieldLabel } from './field-labels';
 import { evaluateKeying } from './keying-eval';
 import { realiseLpf } from './cores-check';
 import { designOutputNetwork, feedChoke } from './output-network';
+import { checkOutputTransformer, findCore, lpfCore } from './core-catalog';
+import { classEShuntCapacitor, designPiNetwork, type NetworkCore } from './pi-network';
 
 export interface RfContext {
   /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
@@ -31,15 +33,15 @@ export interface RfContext {
   paRailBattery?: Record<string, boolean>;
   /** Optional progress of the filter Monte Carlo runs: (done, total) trials. */
   onMonteCarloProgress?: (done: number, total: number) => void;
-  /** Air inside the enclosure (°C) when its rise is known: the PA's heatsink checks use it. */
-  insideC?: number;
 }
 
 const finite = (x: number, fallback = 0) => (Number.isFinite(x) ? x : fallback);
 
 function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext): { res: LpfStageResult; findings: Finding[] } {
   const p = stage.lpf!;
-  const d = designLpf(p, project.frequencyHz);
+  // the inductors' core: the catalog core chosen on the filter (its AL sets the turns), else the one entered there
+  const core = lpfCore(project, p);
+  const d = designLpf(core?.from === 'catalog' && core.alHPerTurn2 !== null ? { ...p, coreAlHPerTurn2: core.alHPerTurn2 } : p, project.frequencyHz);
   const swr = Math.min(100, Math.max(1, finite(project.rf.worstSwr, 1)));
   const capacitorPeakV = lineMaxima(powerW, 50, swr).peakV;
   if (!d.ok) {
@@ -75,8 +77,12 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   f.push({ severity: 'caution', kind: 'standing', rule: 'lpf.capacitor-voltage', subject: s, value: capacitorPeakV, limit: null, unit: 'V', source: 'line.standing-wave',
     message: `Shunt capacitors can see about ${capacitorPeakV.toFixed(0)} V peak at SWR ${swr}; use RF-rated (silver-mica or C0G) parts rated well above it.` });
   // the parts themselves: element stress at the most RF the PA delivers into the worst SWR, core flux, fit, resonance
-  const real = realiseLpf(design, p.core, powerW, swr, s, p.capacitorRatedV ?? null);
+  const real = realiseLpf(design, core, powerW, swr, s, p.capacitorRatedV ?? null, p.capacitorRatedA ?? null);
   f.push(...real.findings);
+  if (p.coreId && !core) {
+    f.push({ severity: 'fail', rule: 'core.missing', subject: s, value: null, limit: null, unit: '', source: 'design.consistency',
+      message: 'The filter’s core is not in the project’s core catalog (deleted?): choose another on the filter form; the flux is not checked.' });
+  }
   return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW, realisation: real.realisation }, findings: f };
 }
 
@@ -104,7 +110,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
       const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
         maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
         source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
-        frequencyHz: project.frequencyHz, insideC: ctx.insideC,
+        frequencyHz: project.frequencyHz,
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;
@@ -113,11 +119,26 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
       // a single-ended stage: its L network (when a network sets the drain load) on the filter's core, and its feed choke
       const single = !pa.refused && st.pa.topology === 'single-ended' && pa.primaryOhm > 0 && frequencyHz > 0;
       const lp = lpfStageDef?.lpf;
+      // the network's inductor: on the PA's chosen catalog core, else on the filter's core (catalog or entered AL)
+      const lpAl = lp ? (findCore(project, lp.coreId)?.alHPerTurn2 ?? lp.coreAlHPerTurn2) : null;
+      const netAl = findCore(project, st.pa.outputCoreId)?.alHPerTurn2 ?? lpAl;
+      const netCore: NetworkCore | null = netAl !== null ? { alHPerTurn2: netAl, series: lp?.capacitorSeries ?? 'E12', pairs: lp?.allowParallelPairs ?? true } : null;
       const network = single && pa.turnsRatioSource === 'network'
-        ? designOutputNetwork(st.pa, pa.primaryOhm, frequencyHz, lp ? { alHPerTurn2: lp.coreAlHPerTurn2, series: lp.capacitorSeries, pairs: lp.allowParallelPairs } : null)
+        ? designOutputNetwork(st.pa, pa.primaryOhm, frequencyHz, netCore)
         : null;
+      const byNetwork = !pa.refused && pa.turnsRatioSource === 'network' && pa.primaryOhm > 0 && frequencyHz > 0;
+      const pi = byNetwork ? designPiNetwork(pa.primaryOhm, st.pa.loadOhm, frequencyHz, st.pa.topology === 'push-pull', netCore) : null;
+      // class E: each switch's shunt capacitance (half the drain-to-drain load per half of a push-pull pair)
+      const classEShunt = !pa.refused && st.pa.amplifierClass === 'E' && pa.primaryOhm > 0
+        ? classEShuntCapacitor(st.pa.topology === 'push-pull' ? pa.primaryOhm / 2 : pa.primaryOhm, frequencyHz, st.pa.deviceCossF ?? null, lp?.capacitorSeries ?? 'E12')
+        : null;
+      // the output transformer on its catalog core: flux at the PA's highest output and the windings' fit
+      const ot = !pa.refused && pa.turnsRatioSource !== 'network'
+        ? checkOutputTransformer(project, st.pa, pa.primaryOhm, Math.max(pa.outputW, finite(pa.hotOutputW)), pa.turnsRatio, st.name)
+        : { check: null, findings: [] };
       const choke = single ? feedChoke(pa.primaryOhm, frequencyHz, pa.keyDownCurrentA) : null;
-      stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, network, choke, findings: sortFindings(pa.findings) });
+      stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, network, pi, classEShunt, choke,
+        outputTransformer: ot.check, findings: sortFindings([...pa.findings, ...ot.findings]) });
       if (st === paStage) paRefused = pa.refused;
       if (st === paStage && pa.refused) {
         // the stress checks below need a power: say that they take the target instead of the PA's (unknown) output

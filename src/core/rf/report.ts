@@ -12,6 +12,8 @@ import type { RelayResult } from './tr-relay';
 import type { KeyingResult } from './keying-eval';
 import type { CoreRealisation } from './cores-check';
 import type { LNetwork, RfChoke } from './output-network';
+import type { ClassEShunt, PiNetwork } from './pi-network';
+import type { OutputTransformerCheck } from './core-catalog';
 
 export interface LpfStageResult {
   /** Field errors of the filter parameters (design/analysis null when not empty). */
@@ -40,6 +42,12 @@ export interface RfStageResult {
   /** PA (kind 'final'): the L network of a single-ended stage matched by a network, and its drain feed choke. */
   network?: LNetwork | null;
   choke?: RfChoke | null;
+  /** PA matched by a network: the pi network for the same drain load (balanced for push-pull). */
+  pi?: PiNetwork | null;
+  /** Class E: the shunt capacitance needed per switch against the device's own, and the part to add. */
+  classEShunt?: ClassEShunt | null;
+  /** PA with an output transformer on a catalog core: flux at the highest output and the windings' fit. */
+  outputTransformer?: OutputTransformerCheck | null;
   /** Keyed spectrum of a T/R stage (kind 'tr'; null or absent when no edges are entered or its data is refused). */
   keying?: KeyingResult | null;
   /** This stage's findings, most severe first. */

@@ -69,7 +69,7 @@ export interface BoolField extends Base {
 /** An id of another item of the project (a rail, a stage); existence is checked against the project. */
 export interface RefField extends Base {
   type: 'ref';
-  to: 'rail' | 'winding' | 'stage' | 'part' | 'role';
+  to: 'rail' | 'winding' | 'stage' | 'part' | 'role' | 'core';
   optional?: boolean;
   default: string | null;
 }

@@ -12,6 +12,7 @@ import { supplyChoicesSpec } from './supply-choices';
 import { offerSpec, partSpec, supplierSpec } from './parts';
 import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
+import { coreSpec } from './cores';
 
 export * from './field';
 export { validate, formValues, parseForm, defaults, pick, readField } from './derive';
@@ -19,10 +20,10 @@ export { paSpec, lpfSpec, relaySpec, stageSpec, loadSpec };
 export { settingsSpec, mainsSpec, newProjectSpec, rfSettingsSpec };
 export { transformerSpec, windingSpec, primaryFuseSpec, enclosureSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec };
 export { supplyChoicesSpec };
-export { partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec };
+export { partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec, coreSpec };
 
 export const ALL_SPECS: Spec[] = [stageSpec, loadSpec, paSpec, lpfSpec, relaySpec,
   settingsSpec, rfSettingsSpec,
   transformerSpec, windingSpec, primaryFuseSpec, enclosureSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec,
   supplyChoicesSpec,
-  partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec];
+  partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec, coreSpec];

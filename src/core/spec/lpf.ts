@@ -1,6 +1,6 @@
 // The low-pass filter design inputs on a stage of kind 'lpf'.
 import { defineSpec, U, type DisplayUnit, type FieldError } from './field';
-import { bool, choice, num, optNum, text } from './make';
+import { bool, choice, num, optNum, ref, text } from './make';
 
 const MM: DisplayUnit = { symbol: 'mm', scale: 1e-3 };
 const MT: DisplayUnit = { symbol: 'mT', scale: 1e-3 };
@@ -22,6 +22,9 @@ export const lpfSpec = defineSpec({
     cutoffHz: optNum('Cutoff', 'Hz', U.MHz, 100e3, 100e6, null, { form: 'cutoff', help: 'empty = chosen from the band', example: '12.5' }),
     capacitorSeries: choice('Capacitor values', [['E12', 'E12'], ['E24', 'E24']], 'E12'),
     allowParallelPairs: bool('Allow a parallel pair when closer', true),
+    coreId: ref('Core from the catalog', 'core', true, {
+      form: 'coreId', help: 'its AL, area, window, range and flux limit are used; none = the core entered here',
+    }),
     coreName: text('Core', 120, false, 'Iron-powder toroid 12.7 mm, 1–30 MHz mix (AL 4.9 nH/t²)'),
     coreAlHPerTurn2: num('Core AL', 'H/t²', U.nHt2, 1e-12, 1e-4, 4.9e-9, {
       form: 'coreAl',
@@ -31,6 +34,9 @@ export const lpfSpec = defineSpec({
     }),
     capacitorRatedV: optNum('Capacitor voltage rating', 'V', U.V, 0, 100_000, null, {
       form: 'capRatedV', exclusiveMin: true, example: '500', help: 'the filter capacitors’ working voltage; empty = not checked',
+    }),
+    capacitorRatedA: optNum('Capacitor RF current rating', 'A', U.A, 0, 1000, null, {
+      form: 'capRatedA', exclusiveMin: true, example: '2', help: 'RMS, the filter capacitors’ maker rating at HF; empty = not checked',
     }),
     'core.outerDiameterM': coreDim('Core outer diameter', 'coreOd', '12.7'),
     'core.innerDiameterM': coreDim('Core inner diameter', 'coreId', '7.7'),

@@ -10,6 +10,9 @@ export type NumberParse = { ok: true; value: number } | { ok: false; message: st
 const BARE = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 /** An inductance factor written per 100 turns: "49 µH/100t", "49uH/100 turns" (spaces already removed). */
 const AL_PER_100_TURNS = /^([+-]?(?:\d+\.?\d*|\.\d+))(?:µ|μ|u)H\/100(?:t|turns?)?$/i;
+/** An area with a prefixed length unit: "12 mm²", "0.12cm2" (spaces already removed); the prefix is squared. */
+const AREA = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)(mm|cm|m)(?:²|2|\^2)$/;
+const AREA_SCALE: Record<string, number> = { mm: 1e-6, cm: 1e-4, m: 1 };
 
 /** SI value of `text` for field `f`, or a message (without the label) saying what is wrong. */
 export function readNumber(text: string, f: NumberField): NumberParse {
@@ -25,6 +28,11 @@ export function readNumber(text: string, f: NumberField): NumberParse {
   const al = f.unit === 'H/t²' ? AL_PER_100_TURNS.exec(compact) : null;
   // Source: iron-powder toroid data sheets give AL in µH per 100 turns, L = AL × (N / 100)², so 1 µH/100 t = 0.1 nH/t²
   if (al) value = Number(al[1]) * 1e-10;
+  else if (f.unit === 'm²' && AREA.test(compact)) {
+    const m = AREA.exec(compact)!;
+    // Source: definition of area units, 1 mm² = (10⁻³ m)² = 10⁻⁶ m² (an SI prefix on a squared unit is squared)
+    value = Number(m[1]) * AREA_SCALE[m[2]];
+  }
   else if (BARE.test(compact) && !/^\d{1,3},\d{3}$/.test(raw.replace(/\s+/g, ''))) {
     value = inDisplay(Number(compact), f.display.scale);
   } else {

@@ -1,6 +1,8 @@
 // The final amplifier's data on a stage of kind 'final'.
-import { defineSpec, U } from './field';
+import { defineSpec, U, type DisplayUnit } from './field';
 import { choice, num, optNum, ref } from './make';
+
+const MM: DisplayUnit = { symbol: 'mm', scale: 1e-3 };
 
 export const mountFields = (tjMinC: number) => ({
   'mount.thetaJcKPerW': num('θjc junction–case', 'K/W', U.KW, 0, 100, 2, { form: 'thetaJc' }),
@@ -71,6 +73,16 @@ export const paSpec = defineSpec({
       form: 'networkLoad',
       help: 'L or pi network instead of a transformer; empty = transformer (turns ratio)',
       example: '12.5',
+    }),
+    outputCoreId: ref('Output transformer core', 'core', true, {
+      form: 'outputCore', help: 'from the project’s core catalog; none = flux not checked',
+    }),
+    // Common practice, no published source: an HF output transformer's primary has 1 to a few tens of turns
+    outputPrimaryTurns: optNum('Output transformer primary turns', '', U.none, 1, 200, null, {
+      form: 'outputTurns', integer: true, example: '2', help: 'the full primary; empty = flux not checked',
+    }),
+    outputWireDiameterM: optNum('Primary wire diameter over enamel', 'm', MM, 5e-5, 0.005, null, {
+      form: 'outputWire', exclusiveMin: true, example: '0.8', help: 'empty = fit not checked',
     }),
   },
   refine: (v) => {

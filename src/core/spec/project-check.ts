@@ -10,6 +10,7 @@ import { STAGE_DATA } from './stage-data';
 import { offerSpec, partSpec, supplierSpec } from './parts';
 import { bomLineSpec } from './parts-list';
 import { costingSpec } from './costing';
+import { coreSpec } from './cores';
 import { settingsSpec } from './settings';
 import { rfSettingsSpec } from './rf-settings';
 import { addRailSpec, enclosureSpec, primaryFuseSpec, transformerSpec, windingSpec } from './supply';
@@ -42,6 +43,7 @@ export const LOCATIONS: { spec: Spec; at: (p: Project) => Located[] }[] = [
   { spec: supplierSpec, at: (p) => p.costing.suppliers.map((s) => ({ subject: `Supplier "${s.name}"`, value: s })) },
   { spec: bomLineSpec, at: (p) => p.bom.map((l, i) => ({ subject: `Parts-list line ${i + 1}${l.refs ? ` (${l.refs})` : ''}`, value: l })) },
   { spec: costingSpec, at: (p) => [{ subject: 'Costing settings', value: p.costing }] },
+  { spec: coreSpec, at: (p) => (p.cores ?? []).map((c) => ({ subject: `Core "${c.name}"`, value: c })) },
   { spec: settingsSpec, at: (p) => [{ subject: 'Project settings', value: p }] },
   { spec: rfSettingsSpec, at: (p) => [{ subject: 'RF settings', value: p.rf }] },
   { spec: enclosureSpec, at: (p) => [{ subject: 'Enclosure', value: p.supply }] },

@@ -32,6 +32,7 @@ export const STAGE_DATA: readonly StageData[] = [
       ['deviceVdsMaxV', 'deviceIdMaxA', 'biasIdleMaxA', 'referencePowerW'],
       ['mount.thetaJcKPerW', 'mount.thetaCsKPerW', 'mount.thetaSaKPerW', 'mount.tjMaxC', 'heatsinkSharedBy'],
       ['networkLoadOhm', 'conductionAngleDeg', 'imbalanceTypical', 'imbalanceWorst', 'deviceCossF'],
+      ['outputCoreId', 'outputPrimaryTurns', 'outputWireDiameterM'],
     ],
   },
   {
@@ -42,9 +43,9 @@ export const STAGE_DATA: readonly StageData[] = [
     submit: 'Save and redesign',
     rows: [
       ['response', 'rippleDb', 'order', 'form', 'cutoffHz'],
-      ['capacitorSeries', 'allowParallelPairs', 'coreName', 'coreAlHPerTurn2'],
+      ['capacitorSeries', 'allowParallelPairs', 'coreId', 'coreName', 'coreAlHPerTurn2'],
       ['core.outerDiameterM', 'core.innerDiameterM', 'core.heightM', 'core.wireDiameterM'],
-      ['core.fluxLimitT', 'core.minFrequencyHz', 'core.maxFrequencyHz', 'capacitorRatedV'],
+      ['core.fluxLimitT', 'core.minFrequencyHz', 'core.maxFrequencyHz', 'capacitorRatedV', 'capacitorRatedA'],
       ['inductorQ', 'capacitorQ', 'capacitorTolerance', 'inductorTolerance', 'monteCarloTrials', 'seed'],
     ],
   },
@@ -76,7 +77,7 @@ export function stageData(s: Stage): { data: StageData; value: unknown } | undef
 
 /** Rails, stages, ... named by the block's reference fields that the project does not have. */
 export function missingRefs(p: Project, spec: Spec, value: Record<string, unknown>): FieldError[] {
-  const ids = { rail: new Set(p.supply.rails.map((r) => r.id)), stage: new Set(p.stages.map((s) => s.id)) } as Record<string, Set<string>>;
+  const ids = { rail: new Set(p.supply.rails.map((r) => r.id)), stage: new Set(p.stages.map((s) => s.id)), core: new Set((p.cores ?? []).map((c) => c.id)) } as Record<string, Set<string>>;
   const errors: FieldError[] = [];
   for (const [key, f] of Object.entries(spec.fields)) {
     const id = value[key];
