@@ -27,12 +27,15 @@ export interface Winding {
   ratedA: number; // rated secondary RMS current
   regulationFraction: number; // (V_NL - V_FL) / V_FL, e.g. 0.06
   resistanceOhm: number | null; // measured/entered; null = from regulation
+  leakageH?: number | null; // leakage inductance referred to this winding; null/absent = split from regulation
 }
 
 export interface Transformer {
   id: string;
   name: string;
   construction: 'laminated' | 'toroidal';
+  /** Secondary voltage tolerance (fraction, e.g. 0.05): the low-tolerance corner; null/absent = no such corner. */
+  secondaryToleranceFraction?: number | null;
   windings: Winding[];
 }
 

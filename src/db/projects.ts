@@ -73,9 +73,10 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     id: tr.id,
     name: tr.name,
     construction: tr.construction as Transformer['construction'],
+    secondaryToleranceFraction: tr.secondaryToleranceFraction,
     windings: windingRows
       .filter((w) => w.transformerId === tr.id)
-      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm })),
+      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm, leakageH: w.leakageH })),
   }));
   // JSON columns are not trusted: a non-object reads as no data, and evaluate() checks every field against its spec
   // (src/core/spec/project-check.ts), so a bad stored value is a fail finding naming it, never replaced silently.
@@ -159,8 +160,8 @@ function childRows(project: Project) {
     cores: [] as Row[],
   };
   for (const [i, tr] of project.supply.transformers.entries()) {
-    rows.transformers.push({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction });
-    for (const [j, w] of tr.windings.entries()) rows.windings.push({ ...w, transformerId: tr.id, position: j });
+    rows.transformers.push({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction, secondaryToleranceFraction: tr.secondaryToleranceFraction ?? null });
+    for (const [j, w] of tr.windings.entries()) rows.windings.push({ ...w, leakageH: w.leakageH ?? null, transformerId: tr.id, position: j });
   }
   for (const [i, rail] of project.supply.rails.entries()) {
     const { id: railId, name, kind, ...params } = rail;

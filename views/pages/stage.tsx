@@ -8,6 +8,7 @@ import { formValues, loadSpec, stageSpec } from '../../src/core/spec';
 import { stageData, type StageData } from '../../src/core/spec/stage-data';
 import { loadFormName, stageFormValues } from '../../src/core/spec/stage';
 import { SpecField } from '../components/spec-fields';
+import { ITEM } from '../components/field-id';
 import { LoadTableHead } from '../components/load-table-head';
 import { REMOVE_LOAD } from '../../src/core/edits/stage-loads';
 import { NEW_RAIL, NEW_RAIL_FORM } from '../../src/core/edits/rail-in-place';
@@ -58,9 +59,9 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
       ) : null}
       <FormShell project={project} stage={stage} path="" title={`${stage.name} (${STAGE_KIND_LABELS[stage.kind]})`} state={general} submit="Save stage">
         <div class="row">
-          <SpecField spec={stageSpec} k="name" label="Name" state={general} size={36} />
+          <SpecField spec={stageSpec} k="name" label="Name" state={general} item={ITEM.stage(stage.id)} size={36} />
           <Select name="kind" label="Kind" state={general} options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])} hint="A new kind starts from typical data. A change that would drop PA, filter or relay data asks first." />
-          <SpecField spec={stageSpec} k="dissipationW" state={general} size={8} />
+          <SpecField spec={stageSpec} k="dissipationW" state={general} item={ITEM.stage(stage.id)} size={8} />
         </div>
         <label class="field wide">
           <span class="label">Notes</span>
@@ -94,7 +95,7 @@ export const StageBody: FC<Props> = ({ project, stage, failed, notice, results }
                 </td>
                 {MODES.map((m) => (
                   <td>
-                    <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} state={general} size={8} hint="" />
+                    <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} state={general} item={ITEM.stage(stage.id)} size={8} hint="" />
                   </td>
                 ))}
               </tr>
@@ -124,7 +125,7 @@ const DataForm: FC<{ project: Project; stage: Stage; data: StageData; state: Fie
           const cores = (project.cores ?? []).map((c): [string, string] => [c.id, c.name]);
           const refOptions = f.type === 'ref' ? (f.to === 'rail' ? rails : f.to === 'core' ? cores : undefined) : undefined;
           const none = f.type === 'ref' ? (f.to === 'core' ? '(none: entered here)' : '(not on a rail here)') : undefined;
-          return <SpecField spec={data.spec} k={k} state={state} options={refOptions} none={none} size={f.type === 'text' ? 30 : undefined} />;
+          return <SpecField spec={data.spec} k={k} state={state} item={ITEM.stage(stage.id)} options={refOptions} none={none} size={f.type === 'text' ? 30 : undefined} />;
         })}
       </div>
     ))}

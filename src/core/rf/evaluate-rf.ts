@@ -33,6 +33,8 @@ export interface RfContext {
   paRailBattery?: Record<string, boolean>;
   /** Optional progress of the filter Monte Carlo runs: (done, total) trials. */
   onMonteCarloProgress?: (done: number, total: number) => void;
+  /** Air inside the enclosure (°C) when its rise is known: the PA's heatsink checks use it. */
+  insideC?: number;
 }
 
 const finite = (x: number, fallback = 0) => (Number.isFinite(x) ? x : fallback);
@@ -110,7 +112,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
       const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
         maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
         source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
-        frequencyHz: project.frequencyHz,
+        frequencyHz: project.frequencyHz, insideC: ctx.insideC,
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;
