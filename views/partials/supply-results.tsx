@@ -11,6 +11,7 @@ import type {
 } from '../../src/core/power/report-types';
 import { formatValue as fv } from '../../src/core/units';
 import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
+import { KeyingTransientBlock } from '../components/supply-keying';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
 import { BleederLine } from '../components/supply-bleeder';
 import { HeatCard } from '../components/supply-heat';
@@ -105,6 +106,7 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
     </table>
     </AllCorners>
     <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
+    {rail.keyingTransient ? <KeyingTransientBlock rail={rail} /> : null}
     {rail.windingFuse ? <WindingFuseTable wf={rail.windingFuse} /> : null}
     <BleederLine b={rail.bleeder} />
     <h4>Findings</h4>

@@ -19,7 +19,7 @@ export interface PaLoadLaw {
   referenceOutputW: number;
   /** Saturation drop (V), held at its operating-point value. */
   saturationV: number;
-  /** Drain efficiency at the operating point, held constant (fraction). */
+  /** Efficiency output / (DC input less idle) at the operating point, held constant (fraction). */
   efficiency: number;
   /** Bias idle current, drawn whatever the drive (A). */
   idleA: number;
@@ -119,9 +119,12 @@ export function railLoadModel(project: Project, budget: BudgetReport, railId: st
     if (isPa) {
       const op = pas.find((p) => p.stageId === l.stageId);
       if (!op || op.refused || !(op.railV > op.saturationV) || !(op.efficiency > 0) || !(op.outputW >= 0)) return null;
+      const idleA = stage!.pa!.biasIdleMaxA;
+      // the efficiency the budget's current implies, so that I(V0) is the key-down current the supply was designed for
+      const implied = op.outputW / ((op.keyDownCurrentA - idleA) * op.railV);
       const law: PaLoadLaw = {
         stageId: l.stageId, stageName: l.stageName, referenceV: op.railV, referenceOutputW: op.outputW, saturationV: op.saturationV,
-        efficiency: op.efficiency, idleA: stage!.pa!.biasIdleMaxA,
+        efficiency: Number.isFinite(implied) && implied > 0 && implied <= 1 ? implied : op.efficiency, idleA,
       };
       out.keyDown.pa = law;
       // the computed load carries the PA in key-down only (its key-up rows are entered loads, below)

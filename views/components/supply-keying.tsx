@@ -1,0 +1,54 @@
+// The PA rail's keying transient on the supply page: the plot, one line on the first dot, and the rail's load model.
+// Renders only what the report holds.
+import type { FC } from 'hono/jsx';
+import type { RectifiedRailReport } from '../../src/core/power/report-types';
+import { formatValue as fv } from '../../src/core/units';
+import { keyingTransientSvg } from '../plots/keying-transient-plot';
+
+const sdb = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(1)} dB`;
+
+export const KeyingTransientBlock: FC<{ rail: RectifiedRailReport }> = ({ rail }) => {
+  const k = rail.keyingTransient;
+  if (!k) return null;
+  const first = k.elements[0];
+  return (
+    <div class="keying-transient">
+      <h4>Keying transient</h4>
+      <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: keyingTransientSvg(rail.railName, k) }} />
+      <p class="summary-line">
+        {k.stageName} at {k.wpm} WPM (from {k.wpmFrom}): the first dot gives {fv(first.leadOutputW, 'W')} over its first{' '}
+        {fv(k.leadS, 's', 2)} ({sdb(first.leadVsSteadyDb)}) and {fv(first.outputW, 'W')} over the dot ({sdb(first.vsSteadyDb)}),
+        against {fv(k.steadyOutputW, 'W')} with the key held at {fv(k.keyDownMeanV, 'V')}; the rail rests at {fv(k.keyUpMeanV, 'V')} key-up.
+        Caution above {sdb(k.limitDb)}.
+      </p>
+      <details>
+        <summary>Loads on this rail and how each follows its voltage</summary>
+        <table class="grid">
+          <thead>
+            <tr>
+              <th scope="col">Load</th>
+              <th scope="col">How it follows the rail</th>
+              <th class="num">Key-up / key-down</th>
+            </tr>
+          </thead>
+          <tbody>
+            {k.loadModel.parts.map((p) => (
+              <tr>
+                <th scope="row">{p.name}</th>
+                <td>{p.law === 'PA load line' ? `PA load line, P ∝ (V − Vsat)²` : p.law}</td>
+                <td class="num">
+                  {fv(p.keyUpA, 'A')} / {fv(p.keyDownA, 'A')}
+                  {p.law === 'PA load line' ? <span class="sub">at {fv(k.loadModel.keyDown.pa?.referenceV ?? NaN, 'V')}</span> : null}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        <p class="hint">
+          Simulated at {fv(k.mainsV, 'V')} mains with the winding's {fv(k.windingOhm, 'Ω')}
+          {k.leakageH > 0 ? ` and ${fv(k.leakageH, 'H')} leakage` : ' (leakage not included)'}, {k.stepsPerCycle} steps per mains cycle.
+        </p>
+      </details>
+    </div>
+  );
+};
