@@ -349,11 +349,11 @@ const BASIS_WORDS: Record<HarmonicBasis, string> = {
   'square-wave-1/n': 'square wave (1/n)',
   'rectangular-50%-1/n': 'single-ended, 50 % duty (1/n)',
   'balance-residual': 'push-pull residual as entered',
-  'cosine-pulse': 'current pulse, conduction angle',
+  'cosine-pulse': 'current pulse, edge of saturation to flat-topped',
   'push-pull-imbalance': 'push-pull imbalance, typical to worst',
   'saturation-bound': 'clean to saturated',
-  'rectangular-wave': 'rectangular wave, duty band',
-  'class-e-estimate': 'class E as rectangular (pessimistic)',
+  'trapezoid-wave': 'switched wave with its edges, duty band',
+  'class-e-simulated': 'simulated class E, loaded Q band',
 };
 
 /** "−62.0 to −38.5 dBc", "limited by construction to −41.0 dBc", or one number when the ends agree. */

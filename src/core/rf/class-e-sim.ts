@@ -9,6 +9,9 @@
 
 /** Loaded Q of the series network; RF choke reactance / R. Common practice, no published source. */
 export const CLASS_E_QL = 30;
+/** Lowest loaded Q of a series network built for class E at HF: the worst end of the harmonic band (common practice,
+ * no published source). */
+export const CLASS_E_QL_LOW = 5;
 export const CHOKE_REACTANCE_RATIO = 100;
 /** Nominal class-E shunt susceptance ωC1R and excess reactance X/R at 50 % duty (Sokal 1975, from memory). */
 export const CLASS_E_SHUNT = 0.1836;
@@ -30,7 +33,15 @@ export interface ClassEResult {
   turnOnRatio: number;
   /** Cycles run until the waveform repeated. */
   cycles: number;
+  /**
+   * Load current's harmonics relative to its fundamental, |I_n| / |I_1| for n = 1..HARMONICS (index n − 1; the load
+   * is resistive, so these are also the output voltage's): the stage's harmonic spectrum at its load.
+   */
+  loadHarmonics: number[];
 }
+
+/** Harmonics of the load current computed (1 = fundamental). */
+export const HARMONICS = 5;
 
 type M = number[][];
 
@@ -61,12 +72,12 @@ function expm(a: M): M {
  * One class-E stage into the normalised load zRe + j zIm (1 + j0 = design load). rdsOnRatio = Rds(on) / R
  * (at least 1e-3: an ideal switch has no finite step).
  */
-export function simulateClassE(zRe: number, zIm: number, rdsOnRatio: number, duty = 0.5): ClassEResult {
+export function simulateClassE(zRe: number, zIm: number, rdsOnRatio: number, duty = 0.5, loadedQ = CLASS_E_QL): ClassEResult {
   // The same inputs give the same result: remembered (bounded) so repeated evaluations of a project cost a look-up
-  const key = `${zRe}|${zIm}|${rdsOnRatio}|${duty}`;
+  const key = `${zRe}|${zIm}|${rdsOnRatio}|${duty}|${loadedQ}`;
   const hit = memo.get(key);
   if (hit) return hit;
-  const r = run(zRe, zIm, rdsOnRatio, duty);
+  const r = run(zRe, zIm, rdsOnRatio, duty, loadedQ);
   if (memo.size >= MEMO_MAX) memo.delete(memo.keys().next().value as string);
   memo.set(key, r);
   return r;
@@ -75,13 +86,13 @@ export function simulateClassE(zRe: number, zIm: number, rdsOnRatio: number, dut
 const MEMO_MAX = 2000;
 const memo = new Map<string, ClassEResult>();
 
-function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number): ClassEResult {
+function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: number): ClassEResult {
   const rds = Math.max(1e-3, rdsOnRatio);
   const c1 = CLASS_E_SHUNT;
   const lCh = CHOKE_REACTANCE_RATIO;
   // Series network: L0 = QL R/ω, C0 from 1/(ωC0) = (QL − X_excess) R; the load's reactance joins it
-  const l = CLASS_E_QL + Math.max(zIm, 0);
-  const invC = CLASS_E_QL - CLASS_E_EXCESS + Math.max(-zIm, 0);
+  const l = ql + Math.max(zIm, 0);
+  const invC = ql - CLASS_E_EXCESS + Math.max(-zIm, 0);
   const rl = zRe;
   const dt = (2 * Math.PI) / STEPS;
   // state x = [v_drain, i_series, v_C0, i_choke, 1] (the constant 1 carries the supply)
@@ -98,10 +109,15 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number): ClassE
   let x = [1, 0, 0, 0, 1];
   let prevPeak = Number.NaN;
   let res: ClassEResult = {
-    drainPeakRatio: 0, switchPeakRatio: 0, outputRatio: 0, dcInputRatio: 0, turnOnRatio: 0, cycles: 0,
+    drainPeakRatio: 0, switchPeakRatio: 0, outputRatio: 0, dcInputRatio: 0, turnOnRatio: 0, cycles: 0, loadHarmonics: [],
   };
+  // Source: Fourier series by the rectangle rule over one period (a_n = (2/N) Σ x cos nωt, b_n likewise)
+  const cosT = Array.from({ length: HARMONICS }, (_, h) => Array.from({ length: STEPS }, (_, k) => Math.cos((h + 1) * (k + 1) * dt)));
+  const sinT = Array.from({ length: HARMONICS }, (_, h) => Array.from({ length: STEPS }, (_, k) => Math.sin((h + 1) * (k + 1) * dt)));
   for (let cyc = 1; cyc <= MAX_CYCLES; cyc++) {
     let vPk = -Infinity, iPk = 0, pOut = 0, iDc = 0;
+    const a = new Array<number>(HARMONICS).fill(0);
+    const b = new Array<number>(HARMONICS).fill(0);
     const turnOn = x[0];
     for (let k = 0; k < STEPS; k++) {
       // switch on for the first `duty` of the cycle; the body diode conducts whenever the drain goes below 0
@@ -113,10 +129,15 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number): ClassE
       vPk = Math.max(vPk, x[0]);
       pOut += rl * x[1] * x[1];
       iDc += x[3];
+      for (let h = 0; h < HARMONICS; h++) {
+        a[h] += x[1] * cosT[h][k];
+        b[h] += x[1] * sinT[h][k];
+      }
     }
+    const mag = a.map((ah, h) => Math.hypot(ah, b[h]));
     res = {
       drainPeakRatio: vPk, switchPeakRatio: iPk, outputRatio: pOut / STEPS, dcInputRatio: iDc / STEPS,
-      turnOnRatio: turnOn, cycles: cyc,
+      turnOnRatio: turnOn, cycles: cyc, loadHarmonics: mag.map((m) => m / mag[0]),
     };
     if (cyc > 20 && Math.abs(vPk - prevPeak) < 1e-6 * Math.abs(vPk)) break;
     prevPeak = vPk;

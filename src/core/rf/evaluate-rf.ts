@@ -9,7 +9,6 @@ import { designLpf } from './lpf-design';
 import { monteCarloLpf } from './lpf-monte-carlo';
 import { validateRfInputs, validateRfSettings } from './lpf-validate';
 import { evaluatePa } from './pa';
-import { paSpectrum } from './pa-spectrum';
 import { spectrumFindings } from './pa-spectrum-findings';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
@@ -164,7 +163,8 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const evenDbc = Math.min(0, Math.max(-120, finite(project.rf.evenHarmonicDbc, 0)));
   // Amplitude ratio from dBc: 10^(dBc/20) (definition of the decibel for voltages)
   // The PA's harmonic bands by class when there is a PA, else the square-wave / entered-residual estimate
-  const spectrum = paStage?.pa && !paRefused ? paSpectrum(paStage.pa) : null;
+  // the bands of the PA's own waveform (the one that gave its power and key-down current)
+  const spectrum = paStage?.pa && !paRefused ? stages.find((x) => x.stageId === paStage.id)?.pa?.spectrum ?? null : null;
   if (spectrum && paStage) all.push(...spectrumFindings(paStage.pa!, spectrum, paStage.name));
   const levelDbc = (n: number) => spectrum?.bands.find((b) => b.n === n)?.worstDbc ?? paHarmonicDbc(topology, evenDbc, n).dbc;
   const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (levelDbc(n) / 20), 0);

@@ -53,9 +53,13 @@ export interface Operating {
   peakDeviceA: number;
 }
 
-/** Output power for a drain load; with Rds(on) the drop I_pk Rds(on) is found by damped iteration. */
-export function operatingPoint(pa: PaParams, railV: number, primaryOhm: number): Operating {
-  const k = powerCoefficient(pa.topology, pa.amplifierClass);
+/**
+ * Output power for a drain load; with Rds(on) the drop I_pk Rds(on) is found by damped iteration. `powerShape`
+ * scales the ideal waveform's fundamental power (class D: the finite switching edges, pa-spectrum), and the device
+ * current with its square root (the fundamental current).
+ */
+export function operatingPoint(pa: PaParams, railV: number, primaryOhm: number, powerShape = 1): Operating {
+  const k = powerCoefficient(pa.topology, pa.amplifierClass) * powerShape;
   let vsat = pa.saturationV ?? 0;
   const rds = pa.saturationV === null ? (pa.rdsOnOhm ?? 0) : 0;
   let out = 0;
@@ -63,7 +67,7 @@ export function operatingPoint(pa: PaParams, railV: number, primaryOhm: number):
   for (let it = 0; it < 200; it++) {
     const veff = Math.max(0, railV - vsat);
     out = (k * veff * veff) / primaryOhm;
-    ipk = peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, primaryOhm, out);
+    ipk = peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, primaryOhm, out) * (pa.amplifierClass === 'E' ? 1 : Math.sqrt(powerShape));
     if (rds === 0) break;
     const next = Math.min(ipk * rds, railV);
     if (Math.abs(next - vsat) < 1e-9) break;
@@ -73,15 +77,16 @@ export function operatingPoint(pa: PaParams, railV: number, primaryOhm: number):
 }
 
 /** Drain load (full primary) that gives the target power, with the Rds(on) drop iterated. */
-export function primaryOhmForPower(pa: PaParams, railV: number, targetW: number): number {
-  const k = powerCoefficient(pa.topology, pa.amplifierClass);
+export function primaryOhmForPower(pa: PaParams, railV: number, targetW: number, powerShape = 1): number {
+  const k = powerCoefficient(pa.topology, pa.amplifierClass) * powerShape;
   let vsat = pa.saturationV ?? 0;
   let r = 1;
   for (let it = 0; it < 200; it++) {
     const veff = Math.max(0, railV - vsat);
     r = Math.max((k * veff * veff) / targetW, 1e-6);
     if (pa.saturationV !== null || !pa.rdsOnOhm) break;
-    const next = Math.min(peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, r, targetW) * pa.rdsOnOhm, railV);
+    const ipk = peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, r, targetW) * (pa.amplifierClass === 'E' ? 1 : Math.sqrt(powerShape));
+    const next = Math.min(ipk * pa.rdsOnOhm, railV);
     if (Math.abs(next - vsat) < 1e-9) break;
     vsat = 0.5 * (vsat + next);
   }

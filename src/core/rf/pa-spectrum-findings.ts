@@ -1,9 +1,10 @@
-// What the PA's harmonic spectrum rests on: assumed inputs, and the class-E estimate.
+// What the PA's waveform and harmonic spectrum rest on: assumed inputs, the band of waveforms, class-D edges.
 import type { Finding } from '../findings';
 import type { PaParams } from '../model';
-import type { PaSpectrum } from './pa-spectrum';
+import type { BandFigures } from './pa-dc';
+import type { PaSpectrum, PaWaveform } from './pa-spectrum';
 
-export function spectrumFindings(pa: PaParams, s: PaSpectrum, subject: string): Finding[] {
+export function spectrumFindings(pa: PaParams, s: Omit<PaSpectrum, 'waveform'>, subject: string): Finding[] {
   const f: Finding[] = [];
   const a = s.assumed;
   const base = { subject, limit: null };
@@ -22,12 +23,56 @@ export function spectrumFindings(pa: PaParams, s: PaSpectrum, subject: string): 
         `${Math.round(s.imbalanceWorst * 100)} % worst assumed for the harmonic bands; enter your own when measured.`,
     });
   }
-  if (pa.amplifierClass === 'E') {
+  if (a.transitionTimeS !== undefined) {
     f.push({
-      ...base, severity: 'caution', rule: 'pa.harmonics-class-e', value: null, unit: '', source: 'pa.harmonics-rectangular',
-      message: 'Class-E harmonics are taken from a rectangular wave: its series-tuned output makes them lower ' +
-        '(not computed here), so these bands are pessimistic.',
+      ...base, severity: 'ok', rule: 'pa.transition-time', value: a.transitionTimeS, unit: 's', source: 'pa.trapezoid',
+      message: `No switching transition time entered: ${(a.transitionTimeS * 1e9).toFixed(0)} ns assumed for the ` +
+        'class-D waveform (power and harmonics); enter the drain rise and fall time when measured.',
     });
+  }
+  return f;
+}
+
+export interface WaveformContext {
+  subject: string;
+  /** Output of the design waveform, W, and the band's DC figures. */
+  designOutputW: number;
+  band: BandFigures;
+  railV: number;
+  frequencyHz?: number;
+}
+
+const w1 = (x: number) => `${x.toFixed(1)} W`;
+const a2 = (x: number) => `${x.toFixed(2)} A`;
+
+/** One line saying which waveforms give the power, the budgeted current and the harmonics; class-D edge checks. */
+export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext): Finding[] {
+  const base = { subject: c.subject, limit: null } as const;
+  const f: Finding[] = [];
+  const more = c.band.bandMaxCurrentA > c.band.designCurrentA * 1.001;
+  const budget = `the supply budget carries ${a2(c.band.bandMaxCurrentA)} key-down (RF part)` +
+    (more ? `, the most over the band (${a2(c.band.designCurrentA)} at the design point)` : '');
+  if (w.model === 'cosine-pulse') {
+    f.push({ ...base, severity: 'ok', rule: 'pa.waveform', value: c.band.bandMaxOutputW, unit: 'W', source: 'pa.waveform-pulse',
+      message: `Drain-current pulse from the edge of saturation (${w1(c.designOutputW)}) to hard saturation, flat-topped ` +
+        `(up to ${w1(c.band.bandMaxOutputW)}); ${budget}; the harmonic bands come from the same pulses.` });
+  } else if (w.model === 'trapezoid') {
+    const tau = w.transitionFraction ?? 0;
+    const ns = ((w.transitionTimeS ?? 0) * 1e9).toFixed(0);
+    if (w.transitionTooLong) {
+      f.push({ ...base, severity: 'fail', rule: 'pa.transition-time', value: w.transitionTimeS, unit: 's', source: 'pa.trapezoid',
+        message: `The switching transition time (${ns} ns) is ${(tau * 100).toFixed(0)} % of the period: longer than the ` +
+          'shorter half of the switching cycle at the worst imbalance, so the drain never settles at the rails; ' +
+          'switch faster (stronger gate drive, lower-capacitance devices) or use a linear class.' });
+    }
+    f.push({ ...base, severity: 'ok', rule: 'pa.waveform', value: c.designOutputW, unit: 'W', source: 'pa.trapezoid',
+      message: `Switched (trapezoidal) drain voltage with ${ns} ns edges, ${(tau * 100).toFixed(1)} % of the period: ` +
+        `${w1(c.designOutputW)} at 50 % duty; ${budget}; the harmonic bands come from the same waveform.` });
+  } else if (w.classE) {
+    const [lo, hi] = w.classE.loadedQ;
+    f.push({ ...base, severity: 'ok', rule: 'pa.waveform', value: c.designOutputW, unit: 'W', source: 'pa.class-e-harmonics',
+      message: `Simulated class-E stage: ${w1(c.designOutputW)} with a series network of loaded Q ${hi}; ${budget}; ` +
+        `the harmonics are those of its load current, from loaded Q ${hi} (best) to ${lo} (worst, not entered).` });
   }
   return f;
 }

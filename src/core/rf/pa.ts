@@ -5,7 +5,10 @@ import { MIN_TARGET_POWER_W, validatePaParams, validateThermalInputs } from './l
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
-import { swrStress, type PaSwrStress } from './pa-swr';
+import { describeLoad, swrStress, type PaSwrStress, type Worst } from './pa-swr';
+import { paSpectrum, switchingPowerShape, type PaSpectrum } from './pa-spectrum';
+import { bandFigures, idealEfficiency, type PaWaveformSummary } from './pa-dc';
+import { waveformFindings } from './pa-spectrum-findings';
 import { classEShuntFindings, swrFindings } from './pa-swr-findings';
 import { usablePositive } from '../numeric';
 import { insideNote } from '../thermal/inside';
@@ -53,8 +56,17 @@ export interface PaResult {
   efficiencySource: 'entered' | 'class-default';
   /** DC input power key-down (RF part only), W. */
   dcInputW: number;
-  /** Key-down DC current including bias idle current, A. */
+  /**
+   * Key-down DC current including bias idle current, A: the most over the waveform band (pa-spectrum), so the supply
+   * budget carries the current of the waveform whose harmonics are judged.
+   */
   keyDownCurrentA: number;
+  /** Key-down DC current into the worst load of the SWR circle (with bias), A; null at SWR 1 or when refused. */
+  swrKeyDownCurrentA: number | null;
+  /** What the waveform gives: design and band-maximum output and DC current, ideal efficiency, class D edges. */
+  waveform: PaWaveformSummary | null;
+  /** The harmonic bands of the same waveform, with the inputs assumed (null when refused). */
+  spectrum: Omit<PaSpectrum, 'waveform'> | null;
   /** Drain peak, device current, dissipation and output round the circle of the worst SWR (null when refused). */
   swr: PaSwrStress | null;
   /** Highest supply voltage the drains can see (high mains with the PA unkeyed, or a full battery), V; railV when unknown. */
@@ -64,7 +76,7 @@ export interface PaResult {
   /** Lowest key-down supply voltage (low mains trough, flat battery), V, and the output there, W; railV / outputW when unknown. */
   lowRailV: number;
   lowOutputW: number;
-  /** Output at the hot supply (hotRailV), W: the most RF the stage delivers, for filter, relay and heat checks. */
+  /** Most output at the hot supply (hotRailV) over the waveform band, W: the most RF the stage delivers, for filter and relay checks. */
   hotOutputW: number;
   /** Peak drain voltage at the highest supply voltage (maxRailV), V, and peak current of one conducting device, A. */
   peakDrainV: number;
@@ -91,7 +103,7 @@ function zeroResult(railV: number, findings: Finding[]): PaResult {
     outputW: 0, outputDbm: -999, outputDbw: -999, vsReferenceDb: -999, vsReferenceSUnits: -999 / 6, efficiency: 0, efficiencySource: 'entered',
     dcInputW: 0, keyDownCurrentA: 0, peakDrainV: 0, peakDeviceA: 0,
     thermal: { dissipationTotalW: 0, dissipationPerDeviceW: 0, averagePerDeviceW: 0, tjTargetC: 0, sharedBy: 1, thetaSaNeededAverageKPerW: null, thetaSaNeededContinuousKPerW: null, tjAverageC: null, tjContinuousC: null },
-    swr: null, findings,
+    swr: null, swrKeyDownCurrentA: null, waveform: null, spectrum: null, findings,
     refused: true,
   };
 }
@@ -147,10 +159,10 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     turnsRatio = pa.turnsRatio;
   } else if (target > 0) {
     // Source: impedance transformation N_s/N_p = sqrt(Z_s/Z_p) (REFERENCE-VALUES §8.1)
-    idealTurnsRatio = Math.sqrt(pa.loadOhm / primaryOhmForPower(pa, railV, target));
+    idealTurnsRatio = Math.sqrt(pa.loadOhm / primaryOhmForPower(pa, railV, target, switchingPowerShape(pa, corners.frequencyHz)));
     ratioOptions = PRACTICAL_RATIOS.map((r) => {
       const primaryOhm = pa.loadOhm / r.turnsRatio ** 2;
-      return { ...r, primaryOhm, outputW: operatingPoint(pa, railV, primaryOhm).outputW };
+      return { ...r, primaryOhm, outputW: operatingPoint(pa, railV, primaryOhm, switchingPowerShape(pa, corners.frequencyHz)).outputW };
     });
     const best = ratioOptions.reduce((a, b) => (Math.abs(db(b.outputW / target)) < Math.abs(db(a.outputW / target)) ? b : a));
     turnsRatio = best.turnsRatio;
@@ -160,10 +172,24 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   // Source: impedance transformation Z_p = Z_s / (N_s/N_p)^2 (REFERENCE-VALUES §8.1)
   const primaryOhm = network ?? pa.loadOhm / turnsRatio ** 2;
   const fixWord = network !== null ? "the network's drain load" : 'the turns ratio';
-  const op = operatingPoint(pa, railV, primaryOhm);
-  const efficiency = pa.efficiency ?? DEFAULT_EFFICIENCY[pa.amplifierClass];
+  // The stage's waveform (pa-spectrum): class D's switching edges lower its fundamental; class E is simulated
+  const shape = switchingPowerShape(pa, corners.frequencyHz);
+  const opLoadLine = operatingPoint(pa, railV, primaryOhm, shape);
+  const rdsRatio = classERdsRatio(pa, primaryOhm, opLoadLine.peakDeviceA, railV);
+  const spectrum = paSpectrum(pa, [2, 3, 4, 5], { frequencyHz: corners.frequencyHz, classERdsRatio: rdsRatio });
+  const wave = spectrum.waveform;
+  /** The design waveform at a supply of v (class E: Sokal's load line, which the simulation reproduces within 3 %). */
+  const at = (v: number) => (v === railV ? opLoadLine : operatingPoint(pa, v, primaryOhm, shape));
+  const op = opLoadLine;
+  // the voltage the waveform swings: Vdd − Vsat, or Vdd for the simulated class E (its switch loss is simulated)
+  const swingOf = (v: number, o: typeof op) => (wave.classE ? v : Math.max(1e-9, v - o.saturationV));
+  const ideal = idealEfficiency(wave, swingOf(railV, op), railV);
+  const efficiencyAsked = pa.efficiency ?? DEFAULT_EFFICIENCY[pa.amplifierClass];
+  const efficiency = Math.min(efficiencyAsked, ideal);
+  const band = bandFigures(wave, op.outputW, railV, efficiency);
   const dcInputW = op.outputW / efficiency;
-  const keyDownCurrentA = dcInputW / railV + pa.biasIdleMaxA;
+  // the supply carries the most current anywhere in the band: the waveform whose harmonics are judged (worst end)
+  const keyDownCurrentA = band.bandMaxCurrentA + pa.biasIdleMaxA;
   // Device stress and heating are judged at their own worst corners, not at the operating point: the drains swing
   // to k x Vdd at the highest rail voltage (high mains, reservoir charged with the PA unkeyed, or a full battery),
   // and the heat is largest at high mains key-down. Common practice, no published source (worst-case design).
@@ -172,22 +198,30 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const hotRailV = usable(corners.hotRailV);
   // Source: Sokal & Sokal (1975) 3.56 Vdd for class E; 2 Vdd for B, C, D (REFERENCE-VALUES §8.1)
   const peakDrainV = peakDrainFactor(pa.amplifierClass) * maxRailV;
-  const opHot = hotRailV === railV ? op : operatingPoint(pa, hotRailV, primaryOhm);
+  const opHot = hotRailV === railV ? op : at(hotRailV);
+  const hotBand = hotRailV === railV ? band : bandFigures(wave, opHot.outputW, hotRailV, efficiency);
+  // heating: the waveform of the band that dissipates most, at the hot supply
   // the air around the heatsink: inside the box when the enclosure's rise is known (an outside heatsink sees less)
   const inside = corners.insideC !== undefined && Number.isFinite(corners.insideC);
   const airC = inside ? corners.insideC! : project.ambientC;
-  const thermalRaw = paThermal(pa, opHot.outputW, opHot.outputW / efficiency, pa.biasIdleMaxA * hotRailV, airC, project.keyingDuty);
+  const thermalRaw = paThermal(pa, hotBand.hottest.outputW, hotBand.hottest.dcInputW, pa.biasIdleMaxA * hotRailV, airC, project.keyingDuty);
   const lowRailV = corners.lowRailV !== undefined && Number.isFinite(corners.lowRailV) && corners.lowRailV > 0 && corners.lowRailV < railV ? corners.lowRailV : railV;
-  const lowOutputW = lowRailV === railV ? op.outputW : operatingPoint(pa, lowRailV, primaryOhm).outputW;
+  const lowOutputW = lowRailV === railV ? op.outputW : at(lowRailV).outputW;
   const bat = corners.source === 'battery';
   const hotNote = hotRailV > railV ? ` (with the supply at ${hotRailV.toFixed(1)} V: ${bat ? 'battery full' : 'high mains'}, key-down)` : '';
   const noted = thermalRaw.findings.map((f) => (f.rule === 'pa.heat-safety' ? f : { ...f, message: f.message.replace(/\.$|:/, (m) => `${hotNote}${m}`) }));
   const thermal = { ...thermalRaw, findings: insideNote(noted, inside ? airC : null, project.ambientC) };
 
-  if (pa.efficiency === null) {
+  const pct = (x: number) => `${Math.round(x * 100)} %`;
+  if (efficiencyAsked > ideal) {
+    // an efficiency above the ideal waveform's would draw less DC than the waveform delivers (energy balance)
+    findings.push({ severity: pa.efficiency === null ? 'ok' : 'caution', rule: 'pa.efficiency', subject, value: efficiencyAsked, limit: ideal, unit: '', source: 'pa.waveform-dc',
+      message: `${pa.efficiency === null ? `The class-${pa.amplifierClass} default of` : 'The entered efficiency,'} ${pct(efficiencyAsked)} is above what this stage's ideal waveform gives (${pct(ideal)} at this supply and saturation drop): ${pct(ideal)} used.` });
+  } else if (pa.efficiency === null) {
     findings.push({ severity: 'ok', rule: 'pa.efficiency', subject, value: efficiency, limit: null, unit: '', source: 'pa.efficiency',
-      message: `No efficiency entered: ${Math.round(efficiency * 100)} % assumed for class ${pa.amplifierClass}; measure DC input at full output to confirm.` });
+      message: `No efficiency entered: ${pct(efficiency)} assumed for class ${pa.amplifierClass}; measure DC input at full output to confirm.` });
   }
+  findings.push(...waveformFindings(pa, wave, { subject, designOutputW: op.outputW, band, railV, frequencyHz: corners.frequencyHz }));
   if (pa.amplifierClass === 'D' && pa.topology === 'single-ended') {
     findings.push({ severity: 'ok', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'pa.fourier',
       message: 'Single-ended class D is modelled as a half-bridge driving a 0 to Vdd square wave into the transformer.' });
@@ -217,7 +251,15 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const swr = swrStress(pa.amplifierClass, {
     drainPeakV: peakDrainV, maxRailV, peakDeviceA: opHot.peakDeviceA, outputW: opHot.outputW, dcInputW: hotDcW,
     biasW: pa.biasIdleMaxA * hotRailV,
-  }, swrUsed, pa.loadOhm, classERdsRatio(pa, primaryOhm, op.peakDeviceA, railV));
+    // a hard-switched push-pull stage on a centre-tapped transformer rings at each edge (leakage with Coss)
+    ...(pa.amplifierClass === 'D' && pa.topology === 'push-pull' && network === null
+      ? { ring: { leakageH: pa.outputLeakageH ?? null, cossF: pa.deviceCossF ?? null } } : {}),
+  }, swrUsed, pa.loadOhm, rdsRatio);
+  const swrCurrent = swrKeyDownCurrent(swr, pa.biasIdleMaxA * hotRailV, hotDcW, band.designCurrentA, pa.biasIdleMaxA);
+  if (swrCurrent && swrCurrent.currentA > keyDownCurrentA * 1.001) {
+    findings.push({ severity: 'caution', rule: 'pa.swr-current', subject, value: swrCurrent.currentA, limit: keyDownCurrentA, unit: 'A', source: 'pa.waveform-dc',
+      message: `Into the worst load of SWR ${swr.swr} (${describeLoad(swrCurrent.at)}) the key-down current rises to ${swrCurrent.currentA.toFixed(2)} A, above the ${keyDownCurrentA.toFixed(2)} A the supply budget carries for the matched load; size the supply and its fuse for it, or fold the drive back at high SWR.` });
+  }
   findings.push(...swrFindings(pa, swr, {
     subject, atMax, ambientC: airC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
     matchedDissipationW: thermalRaw.dissipationTotalW, sharedBy: thermalRaw.sharedBy, tjTargetC: thermalRaw.tjTargetC,
@@ -228,8 +270,16 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   void _drop;
   const ref = pa.referencePowerW;
   const vsReferenceDb = db(op.outputW / ref);
+  const waveform: PaWaveformSummary = {
+    model: wave.model, designOutputW: op.outputW, bandMaxOutputW: band.bandMaxOutputW, designCurrentA: band.designCurrentA,
+    bandMaxCurrentA: band.bandMaxCurrentA, idealEfficiency: ideal, transitionTimeS: wave.transitionTimeS,
+    transitionAssumed: spectrum.assumed.transitionTimeS !== undefined, classELoadedQ: wave.classE?.loadedQ ?? null,
+  };
+  const { waveform: _w, ...spectrumValues } = spectrum;
+  void _w;
   return {
-    railV, maxRailV, hotRailV, lowRailV, lowOutputW, hotOutputW: opHot.outputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: network !== null ? 'network' : pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
+    waveform, spectrum: spectrumValues, swrKeyDownCurrentA: swrCurrent?.currentA ?? null,
+    railV, maxRailV, hotRailV, lowRailV, lowOutputW, hotOutputW: hotBand.bandMaxOutputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: network !== null ? 'network' : pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
     primaryOhm, outputW: op.outputW,
     // Source: definitions of dBm and dBW (power relative to 1 mW / 1 W)
     outputDbm: db(op.outputW / 1e-3), outputDbw: db(op.outputW),
@@ -247,7 +297,23 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
 function classERdsRatio(pa: PaParams, primaryOhm: number, peakA: number, railV: number): number {
   const half = pa.topology === 'push-pull' ? primaryOhm / 2 : primaryOhm;
   const rds = pa.rdsOnOhm ?? (peakA > 0 ? Math.min(pa.saturationV ?? 0, railV) / peakA : 0);
-  return rds / half;
+  // three significant figures: the passes of one evaluation (rail voltages a few mV apart) share one simulation
+  return Number((rds / half).toPrecision(3));
+}
+
+/**
+ * Key-down DC current into the worst point of the SWR circle (A, with bias), from the circle's output and
+ * dissipation: DC input = dissipation − bias + output (energy balance), scaled from the hot supply to the design
+ * current. null when the circle has one point (SWR 1).
+ */
+function swrKeyDownCurrent(swr: PaSwrStress, biasW: number, matchedDcW: number, designCurrentA: number, biasA: number): { currentA: number; at: Worst } | null {
+  if (swr.points.length < 2 || !(matchedDcW > 0)) return null;
+  const dcOf = (p: PaSwrStress['points'][number]) => Math.max(0, p.dissipationW - biasW) + p.outputW;
+  const worst = swr.points.reduce((a, b) => (dcOf(b) > dcOf(a) ? b : a));
+  return {
+    currentA: (designCurrentA * dcOf(worst)) / matchedDcW + biasA,
+    at: { value: dcOf(worst), phaseDeg: worst.phaseDeg, loadReOhm: worst.loadReOhm, loadImOhm: worst.loadImOhm },
+  };
 }
 
 /** A computed current, or the findings that say why it cannot be computed (never a silent 0). */
@@ -257,8 +323,9 @@ export type ComputedCurrent = { ok: true; currentA: number } | { ok: false; find
  * Key-down DC current of the PA from railV (A), for the lead's budget. When core refuses the PA data (or the rail
  * voltage) the result carries the refusing findings instead, so the caller can mark the current unknown.
  */
-export function paKeyDownCurrentA(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier'): ComputedCurrent {
-  const r = evaluatePa(pa, railV, project, subject);
+export function paKeyDownCurrentA(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'> & { frequencyHz?: number }, subject = 'Final amplifier'): ComputedCurrent {
+  // the frequency sets a class-D stage's switching edges, and so its waveform and current
+  const r = evaluatePa(pa, railV, project, subject, { frequencyHz: project.frequencyHz });
   if (r.refused) return { ok: false, findings: r.findings.filter((f) => f.severity === 'fail') };
   if (!Number.isFinite(r.keyDownCurrentA) || r.keyDownCurrentA < 0) {
     return { ok: false, findings: [{ severity: 'fail', rule: 'pa.input', subject: `${subject}: key-down current`, value: null, limit: null, unit: 'A', source: 'design.input',

@@ -113,6 +113,7 @@ export const U = {
   Hz: { symbol: 'Hz', scale: 1 },
   MHz: { symbol: 'MHz', scale: 1e6 },
   ms: { symbol: 'ms', scale: 1e-3 },
+  ns: { symbol: 'ns', scale: 1e-9 },
   s: { symbol: 's', scale: 1 },
   pct: { symbol: '%', scale: 0.01 },
   KW: { symbol: '°C/W', scale: 1 },

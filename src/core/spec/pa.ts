@@ -69,6 +69,12 @@ export const paSpec = defineSpec({
       help: 'class E: part of the shunt capacitor; empty = not checked',
       example: '150',
     }),
+    // Common practice, no published source: up to 1 µs (a slow switch at 160 m); 0 = ideal edges
+    transitionTimeS: optNum('Switching transition time (class D)', 's', U.ns, 0, 1e-6, null, {
+      form: 'transitionTime',
+      help: 'rise/fall time of the drain voltage; empty = 10 ns assumed; sets the class-D power and harmonics',
+      example: '10',
+    }),
     networkLoadOhm: optNum('Drain load set by a matching network', 'Ω', U.ohm, 0.1, 10_000, null, {
       form: 'networkLoad',
       help: 'L or pi network instead of a transformer; empty = transformer (turns ratio)',

@@ -28,8 +28,11 @@ describe('PA worked example, push-pull 13.8 V 10 W 50 Ω (REFERENCE-VALUES §8.3
     const t = evaluatePa({ ...pa, turnsRatio: 1.235 }, 13.8, proj);
     near(t.outputW, 10.0, 0.02, 'P');
     near(t.dcInputW, 14.3, 0.05, 'DC W');
-    // printed 1.04 A from rounded 14.3 W / 13.8 V (= 1.036 A): tolerance 0.01 A
-    near(t.keyDownCurrentA, 1.04, 0.01, 'I');
+    // printed 1.04 A from rounded 14.3 W / 13.8 V (= 1.036 A): tolerance 0.01 A; at the design point (edge of saturation)
+    near(t.waveform!.designCurrentA, 1.04, 0.01, 'I');
+    // the budget carries the band's most: the hard-saturated square wave, whose mean current is 1/2 of its peak
+    // against the half-sine's 1/π (Fourier series, textbook): π/2 × the design current
+    near(t.keyDownCurrentA, t.waveform!.designCurrentA * (Math.PI / 2), 1e-6, 'I saturated');
     const kd = paKeyDownCurrentA({ ...pa, turnsRatio: 1.235 }, 13.8, proj);
     expect(kd.ok).toBe(true);
     near(kd.ok ? kd.currentA : NaN, t.keyDownCurrentA, 1e-12, 'export');
@@ -104,18 +107,20 @@ describe('PA judged at its worst supply corners (common practice, no published s
     // the output power stays at the operating point
     near(high.outputW, nominal.outputW, 1e-9, 'output unchanged');
   });
-  it('heating uses the hot rail voltage: 4:5 push-pull at 15.18 V gives 2 x 14.18^2 / 32 = 12.57 W, 5.39 W heat at 70 % (REFERENCE-VALUES §8.1, §8.3)', () => {
+  it('heating uses the hot rail voltage: 4:5 push-pull at 15.18 V gives 2 x 14.18^2 / 32 = 12.57 W, heat of its saturated square wave at 70 % (REFERENCE-VALUES §8.1, §8.3)', () => {
     const pa = paParams({ saturationV: 1.0, amplifierClass: 'B', efficiency: 0.7, biasIdleMaxA: 0, turnsRatio: 1.25 });
     const r = evaluatePa(pa, 13.8, proj, 'PA', { hotRailV: 15.18 });
     const toleranceW = 0.01;
-    // P = 2 (Vdd - Vsat)^2 / R_dd (§8.1), dissipation = P (1/eta - 1)
+    // P = 2 (Vdd - Vsat)^2 / R_dd (§8.1). The hottest waveform of the band is the hard-saturated square wave: output
+    // (4/π)² P (fundamental 4/π), DC input (π/2) P/η (mean 1/2 against the half-sine's 1/π): Fourier series, textbook
     const pHot = (2 * 14.18 ** 2) / 32;
-    near(r.thermal.dissipationTotalW, pHot * (1 / 0.7 - 1), toleranceW, 'hot dissipation');
+    const heat = (p: number) => p * (Math.PI / (2 * 0.7) - 16 / Math.PI ** 2);
+    near(r.thermal.dissipationTotalW, heat(pHot), toleranceW, 'hot dissipation');
     near(r.outputW, 10.24, toleranceW, 'output at the operating point (§8.3)');
     // absurd corner values fall back to the operating point instead of producing NaN
     const bad = evaluatePa(pa, 13.8, proj, 'PA', { hotRailV: NaN, maxRailV: -3 });
     near(bad.peakDrainV, 2 * 13.8, 1e-9, 'fallback peak');
-    near(bad.thermal.dissipationTotalW, 10.24 * (1 / 0.7 - 1), toleranceW, 'fallback heat');
+    near(bad.thermal.dissipationTotalW, heat(10.24), toleranceW, 'fallback heat');
   });
 });
 
