@@ -46,7 +46,9 @@ export const KeyingTransientBlock: FC<{ rail: RectifiedRailReport }> = ({ rail }
         </table>
         <p class="hint">
           Simulated at {fv(k.mainsV, 'V')} mains with the winding's {fv(k.windingOhm, 'Ω')}
-          {k.leakageH > 0 ? ` and ${fv(k.leakageH, 'H')} leakage` : ' (leakage not included)'}, {k.stepsPerCycle} steps per mains cycle.
+          {k.leakageH > 0 ? ` and ${fv(k.leakageH, 'H')} leakage` : ' (leakage not included)'}, {k.stepsPerCycle} steps per mains cycle; the
+          winding is simulated on its own (the load of the transformer's other windings on the shared primary is in the
+          transformer's joint simulation, not here).
         </p>
       </details>
     </div>

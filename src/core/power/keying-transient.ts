@@ -8,7 +8,7 @@ import type { RfReport } from '../rf';
 import type { SupplyReport } from './report-types';
 import { railLoadModel, type PaOperatingPoint, type RailLoadModel } from './rail-load-model';
 import { KeyingSimulator, runKeying, steadyCycle, type KeyingCircuit, type KeyingSchedule } from './keying-sim';
-import { noLoadVrms, windingResistanceOhm } from './winding';
+import { noLoadVrms, windingLeakage, windingResistanceOhm } from './winding';
 import { dotLengthS } from '../rf/tr-relay';
 
 /** First elements this much above the settled key-down output are reported (dB). Common practice, no published
@@ -150,8 +150,9 @@ export function withKeyingTransient(supply: SupplyReport | null, project: Projec
     if (r.kind !== 'rectified') return r;
     const stage = project.stages.find((s) => s.pa && s.pa.railId === r.railId);
     const railIn = project.supply.rails.find((x): x is RectifiedRail => x.kind === 'rectified' && x.id === r.railId);
-    const winding = project.supply.transformers.flatMap((t) => t.windings).find((w) => w.id === railIn?.windingId);
-    if (!stage || !railIn || !winding) return r;
+    const transformer = project.supply.transformers.find((t) => t.windings.some((w) => w.id === railIn?.windingId));
+    const winding = transformer?.windings.find((w) => w.id === railIn?.windingId);
+    if (!stage || !railIn || !transformer || !winding) return r;
     const base = { rule: 'supply.keying-transient', subject: r.railName, unit: 'dB', source: 'supply.keying-transient' as const };
     const model = railLoadModel(project, budget, r.railId, pas);
     if (!speed || !model) {
@@ -160,7 +161,10 @@ export function withKeyingTransient(supply: SupplyReport | null, project: Projec
       added.push(f);
       return { ...r, keyingTransient: null, findings: sortFindings([...r.findings, f]) };
     }
-    const sim = simulateKeyingTransient(keyingCircuit(railIn, winding, project.mains!.frequencyHz, 1), model, speed.wpm);
+    const f0 = project.mains!.frequencyHz;
+    // the winding's leakage as entered, else split from its regulation figure (as the joint transformer simulation)
+    const leakageH = windingLeakage(winding, transformer.construction, f0).henry;
+    const sim = simulateKeyingTransient(keyingCircuit(railIn, winding, f0, 1, leakageH), model, speed.wpm);
     if (!sim) {
       const f: Finding = { ...base, severity: 'caution', value: null, limit: null, message: `The keying transient of ${r.railName} could not be simulated: the rail found no steady state with its loads.` };
       added.push(f);

@@ -23,6 +23,9 @@ describe('keying transient in the evaluation JSON', () => {
     // Source: winding model R = reg x V / I (transformer makers' notes): 0.08 x 20 / 2.5 = 0.64 Ω; 120 V nominal
     expect(k.windingOhm).toBeCloseTo(0.64, 12);
     expect(k.mainsV).toBe(120);
+    // leakage split from the regulation figure (laminated, X = 0.25 R, common practice, no published source):
+    // L = 0.25 x 0.64 / (2 pi 60) = 0.16 / 376.99 = 4.2441e-4 H
+    expect(k.leakageH).toBeCloseTo(4.2441e-4, 7);
     // one ripple period of a bridge on 60 Hz: 1 / 120 s
     expect(k.leadS).toBeCloseTo(1 / 120, 12);
     expect(k.elements.length).toBeGreaterThanOrEqual(3);
