@@ -117,8 +117,8 @@ export function fixLink(project: Project, f: Finding): FixLink {
       return at(`${base}/supply`, fieldId('winding', ITEM.winding(w.id), k), `${w.name} of ${t.name}`, k === 'ratedVrms' ? 'rated voltage' : k === 'ratedA' ? 'rated current' : 'regulation');
     }
     if (names(f.subject, t.name)) {
-      // the transformer's size is its windings' ratings: the first winding's current (or its regulation)
-      const first = t.windings[0];
+      // the transformer's size is its windings' ratings: the largest winding's current (or its regulation)
+      const first = [...t.windings].sort((a, b) => b.ratedVrms * b.ratedA - a.ratedVrms * a.ratedA)[0];
       const k = f.rule === 'transformer.cross-regulation' ? 'regulationFraction' : 'ratedA';
       if (first) return at(`${base}/supply`, fieldId('winding', ITEM.winding(first.id), k), `${first.name} of ${t.name}`, k === 'ratedA' ? 'rated current' : 'regulation');
       return at(`${base}/supply`, fieldId('transformer', ITEM.transformer(t.id), 'name'), t.name);
