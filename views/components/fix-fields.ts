@@ -69,7 +69,7 @@ export const PA_FIELDS: Record<string, string> = {
   'pa.class-e-shunt': 'deviceCossF',
   'pa.class-e-switching': 'networkLoadOhm',
   'pa.harmonics-class-e': 'topology',
-  'pa.leakage-spikes': 'turnsRatio',
+  'pa.leakage-ring': 'outputLeakageH',
   'pa.conduction-angle': 'conductionAngleDeg',
   'pa.imbalance': 'imbalanceWorst',
   'pa.efficiency': 'efficiency',

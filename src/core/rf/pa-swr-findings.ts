@@ -90,11 +90,20 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
         'and stresses it beyond these figures; add SWR foldback of the drive or supply.',
     });
   }
-  if (pa.topology === 'push-pull' && (pa.networkLoadOhm ?? null) === null) {
+  if (pa.topology === 'push-pull' && (pa.networkLoadOhm ?? null) === null && pa.amplifierClass === 'D') {
+    // Hard switching on a centre-tapped transformer: the leakage rings with the device capacitance (pa-swr leakageRing)
+    const l = pa.outputLeakageH ?? null;
+    const c = pa.deviceCossF ?? null;
+    const known = l !== null && c !== null && l > 0 && c > 0;
     f.push({
-      severity: 'caution', kind: 'standing', rule: 'pa.leakage-spikes', subject, value: null, limit: null, unit: '', source: 'pa.swr-load-line',
-      message: 'The drain figures are load-line values: the output transformer\'s leakage inductance adds spikes at each ' +
-        'turn-off that these do not include; wind it tightly coupled (bifilar) and keep a drain clamp or snubber.',
+      severity: known ? 'ok' : 'caution', rule: 'pa.leakage-ring', subject, value: vPk, limit: null, unit: 'V', source: 'pa.leakage-ring',
+      message: known
+        ? `The drain peak includes the undamped ring of the transformer's ${(l * 1e9).toFixed(1)} nH leakage with the ` +
+          `${(c * 1e12).toFixed(0)} pF device capacitance (√(L/C) = ${Math.sqrt(l / c).toFixed(1)} Ω) at each hard ` +
+          'switching edge; an RC snubber or a drain clamp lowers it.'
+        : 'The drain peak includes the ring of the output transformer\'s leakage with the device capacitance, bounded ' +
+          'by its step (twice the load-line swing); the turn-off current adds to it in proportion to √(leakage / Coss): ' +
+          'enter both (the leakage measured across one primary half with the other shorted) to include it.',
     });
   }
   if (s.swr <= 1) return f;

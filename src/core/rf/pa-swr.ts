@@ -54,6 +54,39 @@ export interface MatchedPoint {
   dcInputW: number;
   /** Bias idle power, W. */
   biasW: number;
+  /**
+   * Push-pull class D on a centre-tapped transformer (hard-switched): the leakage inductance between the primary
+   * halves and the device output capacitance ring at every switching edge. Absent for other stages; null values =
+   * not entered (the ring is then bounded by its step alone and the turn-off current's share is left out).
+   */
+  ring?: { leakageH: number | null; cossF: number | null };
+}
+
+/** Undamped leakage ring at a hard switching edge: drain overshoot above the load-line peak and its current. */
+export interface Ring {
+  /** Overshoot amplitude above the load-line drain peak, V. */
+  overshootV: number;
+  /** Ring current through the conducting device, A (null without leakage and Coss). */
+  currentA: number | null;
+  /** Characteristic impedance √(L/C), Ω (null without leakage and Coss). */
+  z0Ohm: number | null;
+}
+
+/**
+ * The opposite device turns on hard: the drain just released steps by `stepV` towards the load-line peak through the
+ * leakage inductance L into its output capacitance C, with the turn-off current iOffA already in L.
+ * Source: undamped series LC from initial conditions (circuit theory, textbook): v(t) = ΔV (1 − cos ω0t) +
+ * I Z0 sin ω0t about the start, so the peak above the new level is √(ΔV² + (I Z0)²), Z0 = √(L/C); the loop current
+ * amplitude is the same over Z0: √((ΔV/Z0)² + I²). Losses only lower both (an upper bound).
+ */
+export function leakageRing(stepV: number, iOffA: number, leakageH: number | null, cossF: number | null): Ring {
+  if (leakageH === null || cossF === null || !(leakageH > 0) || !(cossF > 0)) {
+    return { overshootV: stepV, currentA: null, z0Ohm: null };
+  }
+  const z0Ohm = Math.sqrt(leakageH / cossF);
+  return {
+    overshootV: Math.hypot(stepV, iOffA * z0Ohm), currentA: Math.hypot(stepV / z0Ohm, iOffA), z0Ohm,
+  };
 }
 
 /** Normalised load z = (1 + Γ)/(1 − Γ) for Γ = ρ e^{jφ}. */
@@ -81,7 +114,14 @@ export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { 
     const outputW = (m.outputW * z.re) / mag ** 2;
     const lossW = Math.max(0, m.dcInputW - m.outputW) * currentRatio ** 2;
     const peakDeviceA = m.peakDeviceA * currentRatio;
-    return { drainPeakV: m.drainPeakV, peakDeviceA, dissipationW: lossW + m.biasW, outputW };
+    if (!m.ring) return { drainPeakV: m.drainPeakV, peakDeviceA, dissipationW: lossW + m.biasW, outputW };
+    // Device current i = Ipk sin(θ − φ), φ = arg z (current lags an inductive load), at turn-off θ = π: Ipk sin φ
+    const iOffA = peakDeviceA * Math.sin(Math.atan2(z.im, z.re));
+    const r = leakageRing(m.drainPeakV, iOffA, m.ring.leakageH, m.ring.cossF);
+    return {
+      drainPeakV: m.drainPeakV + r.overshootV, peakDeviceA: peakDeviceA + (r.currentA ?? 0),
+      dissipationW: lossW + m.biasW, outputW,
+    };
   }
   // Classes B and C (and B/AB): the drive sets the fundamental current I1 until the swing I1|Z| reaches the supply;
   // beyond it the voltage is held and the current falls as 1/|Z| (textbook load line, saturation at the design load)

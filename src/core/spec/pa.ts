@@ -69,6 +69,11 @@ export const paSpec = defineSpec({
       help: 'class E: part of the shunt capacitor; empty = not checked',
       example: '150',
     }),
+    // Common practice, no published source: a bifilar HF output transformer has a few to a few tens of nH
+    outputLeakageH: optNum('Output transformer leakage, half to half', 'H', { symbol: 'nH', scale: 1e-9 }, 0, 1e-5, null, {
+      form: 'leakage', exclusiveMin: true, example: '6',
+      help: 'one primary half measured with the other shorted; push-pull class D drain ring; empty = not given',
+    }),
     // Common practice, no published source: up to 1 µs (a slow switch at 160 m); 0 = ideal edges
     transitionTimeS: optNum('Switching transition time (class D)', 's', U.ns, 0, 1e-6, null, {
       form: 'transitionTime',

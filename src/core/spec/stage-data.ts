@@ -31,7 +31,7 @@ export const STAGE_DATA: readonly StageData[] = [
       ['saturationV', 'rdsOnOhm', 'turnsRatio', 'loadOhm', 'efficiency'],
       ['deviceVdsMaxV', 'deviceIdMaxA', 'biasIdleMaxA', 'referencePowerW'],
       ['mount.thetaJcKPerW', 'mount.thetaCsKPerW', 'mount.thetaSaKPerW', 'mount.tjMaxC', 'heatsinkSharedBy'],
-      ['networkLoadOhm', 'conductionAngleDeg', 'imbalanceTypical', 'imbalanceWorst', 'deviceCossF', 'transitionTimeS'],
+      ['networkLoadOhm', 'conductionAngleDeg', 'imbalanceTypical', 'imbalanceWorst', 'deviceCossF', 'outputLeakageH', 'transitionTimeS'],
       ['outputCoreId', 'outputPrimaryTurns', 'outputWireDiameterM'],
     ],
   },

@@ -1,9 +1,11 @@
 // Whole-chain cross-check in ngspice: a push-pull voltage-switching (class D) stage on a centre-tapped transformer,
-// the low-pass filter, and a load of 50 Ω or on the SWR 2 circle at several phases (netlist written from scratch:
-// test/fixtures/pa-chain/pushpull-d-lpf.cir.tmpl). Output power is compared within TOL_POWER; the device-current
-// and drain peaks only as lower bounds (see below). The program's prediction is the load line at the complex load
-// the filter presents (pa-swr.ts) and its harmonic band less the filter's attenuation (harmonics.ts); ngspice
-// solves the switched circuit in the time domain. Invented design: 12 V, 1:1 transformer, 7.03 MHz, Rds(on) 0.1 Ω.
+// the low-pass filter, and a load of 50 Ω or on the SWR 2 circle at four phases (netlist written from scratch:
+// test/fixtures/pa-chain/pushpull-d-lpf.cir.tmpl). The program's prediction is the load line at the complex load the
+// filter presents plus the undamped ring of the transformer's leakage with the device capacitance at each hard edge
+// (pa-swr.ts stressAt / leakageRing), and its harmonic band less the filter's rejection from the stage's own stiff
+// source (lpf-analysis harmonicsFromSource, pa-source); ngspice solves the switched circuit in the time domain.
+// Invented design: 12 V, 1:1 transformer (k = 0.998, leakage about 23 nH half to half), 7.03 MHz, Rds(on) 0.1 Ω,
+// Coss 200 pF.
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -11,7 +13,8 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
 import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
-import { ladderOf, pointAt } from '../../../src/core/rf/lpf-analysis';
+import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
+import { paSource } from '../../../src/core/rf/pa-source';
 import { evaluatePa } from '../../../src/core/rf/pa';
 import { loadOnCircle, stressAt } from '../../../src/core/rf/pa-swr';
 import { paSpectrum } from '../../../src/core/rf/pa-spectrum';
@@ -19,17 +22,29 @@ import { lpfParams, paParams } from './fixture';
 
 const haveNgspice = requireTool(NGSPICE, 'SPICE cross-check of the PA and filter chain', 'apt-get install ngspice');
 
-// Stated tolerances (what the program leaves out: the square wave's harmonic currents in the filter, leakage and
-// magnetising inductance, switching edges, body-diode drop)
-const TOL_POWER = 0.12; // output power, relative
-const TOL_CURRENT = 0.25; // peak device current, relative (lower bound only)
-const TOL_DRAIN = 0.15; // drain peak, relative (lower bound only)
-// the filter model assumes a 50 Ω source at every harmonic; a switching stage is a stiff source (a few dB apart)
-const TOL_HARMONIC_DB = 8;
+// Stated tolerances (what the program leaves out: the square wave's harmonic currents in the filter, magnetising
+// inductance, switching edges and dead time, body-diode drop, the ring's damping by Rds(on) and the Coss loss)
+// output power, relative, both ways: the program's load line leaves out the transformer's series leakage reactance
+// (about j4 Ω at the secondary here), which lowers the power most into the lowest load (about 15 % at 180°)
+const TOL_POWER = 0.17;
+// drain peak: the program's undamped bound may stand up to 12 % above ngspice's ring (damped by Rds(on), the Coss
+// loss and Gear integration), and never more than 5 % below it
+const DRAIN_BELOW = 0.12;
+const DRAIN_ABOVE = 0.05;
+// device current: between the load-line peak (less 10 %) and the program's undamped bound (plus 5 %)
+const CURRENT_BELOW_LOAD_LINE = 0.1;
+const CURRENT_ABOVE = 0.05;
+// the 3rd harmonic at the load, dB both ways: the trapezoidal edges and the transformer's leakage are not in the
+// source model
+const TOL_HARMONIC_DB = 3;
 
 const F0 = 7.03e6;
 const VDD = 12;
 const RON = 0.1;
+// device output capacitance (invented) and the transformer's coupling in the netlist
+const COSS = 200e-12;
+const COSS_ESR = 0.05;
+const KCOUP = 0.998;
 const R0 = 50;
 const W = 2 * Math.PI * F0;
 
@@ -76,9 +91,9 @@ function netlist(d: LpfDesign, zl: C): string {
   const lFull = (20 * R0) / W;
   const vals: Record<string, string> = {
     VDD: String(VDD), PERIOD: per.toPrecision(9), TON: (per / 2 - per / 100).toPrecision(9), TRISE: (per / 200).toPrecision(9),
-    RON: String(RON), LHALF: (lFull / 4).toPrecision(7), LSEC: lFull.toPrecision(7), KCOUP: '0.9995',
+    RON: String(RON), LHALF: (lFull / 4).toPrecision(7), LSEC: lFull.toPrecision(7), KCOUP: String(KCOUP),
     FILTER: lines.join('\n'), LOAD: load, RLOAD: zl.re.toPrecision(7), TSTEP: (per / 400).toPrecision(6),
-    TSTOP: (120 * per).toPrecision(9), TMAX: (per / 400).toPrecision(6), TFROM: (100 * per).toPrecision(9), F0: String(F0),
+    COSS: COSS.toPrecision(7), COSS_ESR: String(COSS_ESR), TSTOP: (120 * per).toPrecision(9), TMAX: (per / 400).toPrecision(6), TFROM: (100 * per).toPrecision(9), F0: String(F0),
   };
   const tmpl = readFileSync(join(__dirname, '../../fixtures/pa-chain/pushpull-d-lpf.cir.tmpl'), 'utf8');
   return tmpl.replace(/\{\{(\w+)\}\}/g, (_, k: string) => vals[k]);
@@ -107,7 +122,11 @@ describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs
   const d = dd.value;
   const pa = evaluatePa(paParams({ amplifierClass: 'D', topology: 'push-pull', turnsRatio: 1, loadOhm: R0, rdsOnOhm: RON, saturationV: null, efficiency: 0.9 }),
     VDD, { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 });
-  const matched = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
+  // leakage between the primary halves, one half with the other shorted: L_half (1 − k²) (coupled inductors, textbook)
+  const lHalf = (20 * R0) / W / 4;
+  const leakageH = lHalf * (1 - KCOUP ** 2);
+  const base = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
+  const matched = { ...base, ring: { leakageH, cossF: COSS } };
   const loads: [string, C][] = [
     ['50 ohm', { re: R0, im: 0 }],
     ...[0, 90, 180, 270].map((ph): [string, C] => {
@@ -116,25 +135,29 @@ describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs
     }),
   ];
   for (const [name, zl] of loads) {
-    it(`${name}: output power, device current and drain peak`, () => {
+    it(`${name}: output power, drain peak and device current`, () => {
       const zin = filterInputOhm(d, zl);
-      const pred = stressAt('D', matched, { re: zin.re / R0, im: zin.im / R0 });
+      const zn = { re: zin.re / R0, im: zin.im / R0 };
+      const pred = stressAt('D', matched, zn);
+      const loadLine = stressAt('D', base, zn);
       const s = run(d, zl, name.replace(/\W+/g, '_'));
       expect(Number.isFinite(s.pout), s.out).toBe(true);
       expect(Math.abs(s.pout / pred.outputW - 1), `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`).toBeLessThanOrEqual(TOL_POWER);
-      // The load line gives the fundamental only: the switched circuit's device current carries the square wave's
-      // harmonic currents, and its drain the leakage-inductance spikes at each turn-off, so both peaks are higher in
-      // ngspice than in the program (a known gap of the model, not asserted here); they must at least not be lower.
-      expect(s.i1pk, `current: ngspice ${s.i1pk.toFixed(2)} A, program ${pred.peakDeviceA.toFixed(2)} A`).toBeGreaterThanOrEqual(pred.peakDeviceA * (1 - TOL_CURRENT));
-      expect(s.vd1pk, `drain: ngspice ${s.vd1pk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`).toBeGreaterThanOrEqual(pred.drainPeakV * (1 - TOL_DRAIN));
+      const vMsg = `drain: ngspice ${s.vd1pk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`;
+      expect(s.vd1pk, vMsg).toBeGreaterThanOrEqual(pred.drainPeakV * (1 - DRAIN_BELOW));
+      expect(s.vd1pk, vMsg).toBeLessThanOrEqual(pred.drainPeakV * (1 + DRAIN_ABOVE));
+      const iMsg = `current: ngspice ${s.i1pk.toFixed(2)} A, load line ${loadLine.peakDeviceA.toFixed(2)} A, bound ${pred.peakDeviceA.toFixed(2)} A`;
+      expect(s.i1pk, iMsg).toBeGreaterThanOrEqual(loadLine.peakDeviceA * (1 - CURRENT_BELOW_LOAD_LINE));
+      expect(s.i1pk, iMsg).toBeLessThanOrEqual(pred.peakDeviceA * (1 + CURRENT_ABOVE));
     });
   }
-  it('50 ohm: the 3rd harmonic at the load lies within the stated tolerance of the worst end of the band', () => {
+  it('50 ohm: the 3rd harmonic at the load from the stiff source lies within the stated tolerance', () => {
     const s = run(d, { re: R0, im: 0 }, 'harm50');
     const spiceDbc = 20 * Math.log10(s.harm.get(3)! / s.harm.get(1)!);
     const band = paSpectrum({ topology: 'push-pull', amplifierClass: 'D', imbalanceTypical: 0, imbalanceWorst: 0 }).bands.find((b) => b.n === 3)!;
-    const l = ladderOf(d, 'built', true);
-    const predicted = band.worstDbc - (pointAt(l, 3 * F0).lossDb - pointAt(l, F0).lossDb);
+    const src = paSource({ pa: paParams({ amplifierClass: 'D', topology: 'push-pull', rdsOnOhm: RON, saturationV: null }), primaryOhm: R0, peakDeviceA: pa.peakDeviceA, classESimulated: false });
+    const rows = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt);
+    const predicted = band.worstDbc - rows.find((r) => r.n === 3)!.relativeAttenuationDb;
     expect(Math.abs(spiceDbc - predicted), `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`).toBeLessThanOrEqual(TOL_HARMONIC_DB);
   });
 });

@@ -2,7 +2,7 @@
 // |Γ| = (S - 1)/(S + 1) and z = (1 + Γ)/(1 - Γ) (definition of the reflection coefficient, any Smith-chart text),
 // and the textbook load line at a complex load (P = |I1|^2 Re Z / 2 = |V1|^2 Re Y / 2).
 import { describe, expect, it } from 'vitest';
-import { loadOnCircle, stressAt, swrStress, type MatchedPoint } from '../../../src/core/rf/pa-swr';
+import { leakageRing, loadOnCircle, stressAt, swrStress, type MatchedPoint } from '../../../src/core/rf/pa-swr';
 import { evaluatePa } from '../../../src/core/rf/pa';
 import { paParams } from './fixture';
 import { near } from './helpers';
@@ -95,5 +95,33 @@ describe('evaluatePa judges the ratings at the worst load phase', () => {
     expect(r.swr?.model).toBe('class-e-simulated');
     expect(r.swr!.worstDrainPeak.value).toBeGreaterThan(r.peakDrainV);
     expect(r.findings.find((x) => x.rule === 'pa.vds')?.message).toMatch(/reflection phase \d+°/);
+  });
+});
+
+describe('push-pull class D: the leakage ring at each hard edge (undamped series LC, circuit theory)', () => {
+  // Invented: step = the 40 V load-line peak; L = 25 nH, C = 100 pF, Z0 = √(L/C) = √250 = 15.811 Ω
+  it('no turn-off current: overshoot = the step, ring current = step / Z0', () => {
+    const r = leakageRing(40, 0, 25e-9, 100e-12);
+    near(r.overshootV, 40, 1e-12, 'ΔV');
+    near(r.currentA!, 40 / Math.sqrt(250), 1e-12, 'I');
+  });
+  it('with 2 A in the leakage: overshoot √(40² + (2 Z0)²) = √(1600 + 1000) = 50.990 V; current √(6.4 + 4) A', () => {
+    const r = leakageRing(40, 2, 25e-9, 100e-12);
+    near(r.overshootV, Math.sqrt(2600), 1e-9, 'ΔV');
+    near(r.currentA!, Math.sqrt(1600 / 250 + 4), 1e-9, 'I');
+  });
+  it('without leakage or Coss: bounded by the step alone, current unknown', () => {
+    const r = leakageRing(40, 2, null, 100e-12);
+    expect(r.overshootV).toBe(40);
+    expect(r.currentA).toBeNull();
+  });
+  it('stressAt: a resistive load has no turn-off current, the drain peaks at twice the load-line peak', () => {
+    const s = stressAt('D', { ...m, ring: { leakageH: 25e-9, cossF: 100e-12 } }, { re: 1, im: 0 });
+    near(s.drainPeakV, 80, 1e-9, 'Vpk');
+    near(s.peakDeviceA, 3 + 40 / Math.sqrt(250), 1e-9, 'Ipk');
+  });
+  it('stressAt: z = 0.8 + j0.6 (current lags 36.87°), I_off = 3 x 0.6 = 1.8 A adds to the ring', () => {
+    const s = stressAt('D', { ...m, ring: { leakageH: 25e-9, cossF: 100e-12 } }, { re: 0.8, im: 0.6 });
+    near(s.drainPeakV, 40 + Math.hypot(40, 1.8 * Math.sqrt(250)), 1e-9, 'Vpk');
   });
 });
