@@ -70,31 +70,73 @@ export function faultCheck(faultA: number, ratedA: number, sheet: FuseSheet, all
 
 /**
  * RMS current through the fuse in the winding lead with the rectifier's output shorted: the EMF (peak peakV) behind
- * seriesOhm, less the diode drops in the path while it conducts. Source: Ohm's law per instant on the piecewise-linear
- * diode model (the same element model as the simulation), i = max(0, |v| - n Vf) / (R + n r_d), RMS by quadrature.
- * Bridge: two diodes per half-cycle, both half-cycles through the winding. Centre-tap: the fuse in the centre-tap
- * lead carries both halves, one diode each. Half-wave: one diode, positive half only.
+ * the winding's resistance and leakage inductance, less the diode drops in the path while it conducts.
+ * Without leakage: Ohm's law per instant on the piecewise-linear diode model (the simulation's element model),
+ * i = max(0, |v| - n Vf) / (R + n r_d), RMS by quadrature. With leakage L: L di/dt = v - (R + n r_d) i - n Vf sgn(i)
+ * (Kirchhoff's voltage law), backward Euler over mains cycles to the periodic state; the diodes block when the current
+ * would reverse. Bridge: two diodes per half-cycle, both half-cycles through the winding. Centre-tap: the fuse in the
+ * centre-tap lead carries both halves, one diode each (each half with the leakage). Half-wave: one diode, positive
+ * half only.
  */
-export function shortedOutputRmsA(topology: RectifierTopology, peakV: number, windingOhm: number, diodeDropV: number, diodeOhm: number): number {
+export function shortedOutputRmsA(
+  topology: RectifierTopology, peakV: number, windingOhm: number, diodeDropV: number, diodeOhm: number,
+  leakageH = 0, frequencyHz = 50,
+): number {
   const n = topology === 'bridge' ? 2 : 1;
   const r = windingOhm + n * diodeOhm;
   if (!(r > 0) || !(peakV > 0)) return 0;
   const drop = n * Math.max(0, diodeDropV);
-  const steps = 400;
-  let sum = 0;
-  for (let k = 0; k < steps; k++) {
-    const s = Math.sin((2 * Math.PI * (k + 0.5)) / steps) * peakV;
-    const v = topology === 'half-wave' ? Math.max(0, s) : Math.abs(s);
-    const i = Math.max(0, v - drop) / r;
-    sum += i * i;
+  if (!(leakageH > 0) || !(frequencyHz > 0)) {
+    const steps = 400;
+    let sum = 0;
+    for (let k = 0; k < steps; k++) {
+      const s = Math.sin((2 * Math.PI * (k + 0.5)) / steps) * peakV;
+      const v = topology === 'half-wave' ? Math.max(0, s) : Math.abs(s);
+      const i = Math.max(0, v - drop) / r;
+      sum += i * i;
+    }
+    const a = Math.sqrt(sum / steps);
+    return Number.isFinite(a) ? a : 0;
   }
-  const a = Math.sqrt(sum / steps);
-  return Number.isFinite(a) ? a : 0;
+  const steps = 2000;
+  const h = 1 / frequencyHz / steps;
+  const g = leakageH / h;
+  // a: the bridge's signed winding current, or the first half's (centre-tap, half-wave); b: the second half's
+  let a = 0;
+  let b = 0;
+  // one-way path (one diode direction): the current decays or grows by backward Euler, and stops at 0
+  const oneWay = (i: number, v: number) => Math.max(0, (g * i + v - drop) / (g + r));
+  let sum = 0;
+  const cycles = Math.min(200, 10 + Math.ceil((5 * leakageH) / r / (1 / frequencyHz)));
+  for (let c = 0; c < cycles; c++) {
+    sum = 0;
+    for (let k = 1; k <= steps; k++) {
+      const v = Math.sin((2 * Math.PI * k) / steps) * peakV;
+      let lead: number;
+      if (topology === 'bridge') {
+        const dir = a !== 0 ? Math.sign(a) : Math.abs(v) > drop ? Math.sign(v) : 0;
+        const next = dir === 0 ? 0 : (g * a + v - dir * drop) / (g + r);
+        a = dir !== 0 && Math.sign(next) === dir ? next : 0;
+        lead = a;
+      } else {
+        a = oneWay(a, v);
+        b = topology === 'centre-tap' ? oneWay(b, -v) : 0;
+        lead = a + b;
+      }
+      sum += lead * lead;
+    }
+  }
+  const rms = Math.sqrt(sum / steps);
+  return Number.isFinite(rms) ? rms : 0;
 }
 
-/** Dead short at the rectifier's input (failed bridge): I = E / R_w (A rms). Source: Ohm's law. */
-export function shortedWindingRmsA(emfRmsV: number, windingOhm: number): number {
-  if (!(windingOhm > 0) || !(emfRmsV > 0)) return 0;
-  const a = emfRmsV / windingOhm;
+/**
+ * Dead short at the rectifier's input (failed bridge): I = E / |Z|, |Z| = sqrt(R² + X²), X = 2 pi f L (A rms).
+ * Source: Ohm's law for sinusoidal steady state (circuit theory).
+ */
+export function shortedWindingRmsA(emfRmsV: number, windingOhm: number, reactanceOhm = 0): number {
+  const z = Math.hypot(Math.max(0, windingOhm), Math.max(0, reactanceOhm));
+  if (!(z > 0) || !(emfRmsV > 0)) return 0;
+  const a = emfRmsV / z;
   return Number.isFinite(a) ? a : 0;
 }

@@ -7,7 +7,7 @@ import type { RectifierSimInput, RectifierSimResult } from './rectifier-sim';
 import { simulateRectifier } from './rectifier-sim';
 import { TOLERANCE_ID, cornerCurrent, worstIds } from './corners';
 import type { JointVoltages } from './cross-regulation';
-import { noLoadVrms, windingResistanceOhm } from './winding';
+import { noLoadVrms, windingLeakage, windingResistanceOhm } from './winding';
 import { minimumCapacitanceF, recommendedCapacitorV, reservoirFindings, standardCapacitanceF, textbookCapacitanceF } from './reservoir';
 import { bleederFindings, bleederReport } from './bleeder';
 import { fittedFuseFindings, fuseMarking, railFuse } from './fuses';
@@ -164,7 +164,8 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   // Fuse in the winding lead, ahead of the rectifier, and the winding's fault currents
   const lowF = ctx.specs.find((s) => s.mains === 'low')?.mainsFactor ?? 1;
   const highF = ctx.specs.find((s) => s.mains === 'high')?.mainsFactor ?? 1;
-  const wf = winding ? windingFuseReport({ rail, winding, corners, mainsNominalV: ctx.mains.nominalV, lowFactor: lowF, highFactor: highF }) : null;
+  const leakageH = winding ? windingLeakage(winding, transformer?.construction ?? 'laminated', ctx.mains.frequencyHz).henry : 0;
+  const wf = winding ? windingFuseReport({ rail, winding, corners, mainsNominalV: ctx.mains.nominalV, lowFactor: lowF, highFactor: highF, leakageH, frequencyHz: ctx.mains.frequencyHz }) : null;
   if (wf) {
     findings.push(...wf.findings);
     const r = wf.report;

@@ -131,8 +131,12 @@ export interface WindingFuseReport {
   /** Fitted fuse (A), null = none entered. */
   fittedA: number | null;
   sheet: FuseSheet;
-  /** Source resistance referred to the secondary: the winding's resistance (Ω); leakage reactance neglected. */
+  /** Source resistance referred to the secondary: the winding's resistance (Ω). */
   sourceOhm: number;
+  /** The winding's leakage inductance (H, entered or split from its regulation) and its reactance at the mains
+   *  frequency (Ω), both in the fault currents; absent in reports made before leakage was modelled. */
+  leakageH?: number;
+  reactanceOhm?: number;
   /** Dead short at the rectifier's input (failed bridge), low mains (A RMS). */
   inputShortLowA: number;
   /** The same at high mains: the most the winding and fuse can see (A RMS). */

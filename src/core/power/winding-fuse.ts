@@ -15,6 +15,9 @@ export interface WindingFuseInput {
   mainsNominalV: number;
   lowFactor: number;
   highFactor: number;
+  /** The winding's leakage inductance referred to it (H) and the mains frequency (Hz); absent = leakage left out. */
+  leakageH?: number;
+  frequencyHz?: number;
 }
 
 const fmtA = (a: number) => (a < 1 ? `${Math.round(a * 1000)} mA` : `${Number(a.toPrecision(3))} A`);
@@ -48,13 +51,20 @@ export function windingFuseReport(inp: WindingFuseInput): { report: WindingFuseR
       ? `Continuous key-down winding current at high mains ${fmtA(leadRmsA)} RMS x ${WINDING_FUSE_FACTOR} = ${fmtA(leadRmsA * WINDING_FUSE_FACTOR)}, rounded up to the IEC 60127 series: T${rec !== null ? fmtA(rec) : ' (beyond the series)'}, in the winding lead before the rectifier.`
       : 'No winding current: no fuse size can be computed.',
   };
-  const inputShortLowA = shortedWindingRmsA(emfV * inp.lowFactor, sourceOhm);
-  const inputShortHighA = shortedWindingRmsA(emfV * inp.highFactor, sourceOhm);
-  const outputShortLowA = shortedOutputRmsA(rail.topology, emfV * inp.lowFactor * Math.SQRT2, sourceOhm, rail.diodeDropV, rail.diodeResistanceOhm);
+  const leakageH = inp.leakageH !== undefined && inp.frequencyHz !== undefined && inp.leakageH > 0 ? inp.leakageH : 0;
+  const hz = inp.frequencyHz ?? 0;
+  // Source: inductive reactance X = 2 pi f L (circuit theory)
+  const reactanceOhm = 2 * Math.PI * hz * leakageH;
+  const inputShortLowA = shortedWindingRmsA(emfV * inp.lowFactor, sourceOhm, reactanceOhm);
+  const inputShortHighA = shortedWindingRmsA(emfV * inp.highFactor, sourceOhm, reactanceOhm);
+  const outputShortLowA = shortedOutputRmsA(rail.topology, emfV * inp.lowFactor * Math.SQRT2, sourceOhm, rail.diodeDropV, rail.diodeResistanceOhm, leakageH, hz);
   const inUse = fittedA ?? rec;
   const check = inUse !== null && outputShortLowA > 0 ? faultCheck(outputShortLowA, inUse, sheet) : null;
   const turnsRatio = inp.mainsNominalV > 0 ? emfV / inp.mainsNominalV : 0;
-  const reasoning = `A shorted reservoir at low mains drives ${fmtA(outputShortLowA)} RMS through the winding's ${sourceOhm.toFixed(2)} Ω and the diodes; a short at the rectifier's input ${fmtA(inputShortLowA)} (low mains) to ${fmtA(inputShortHighA)} (high mains). Leakage reactance is neglected, so real fault currents are somewhat lower.`;
+  const through = leakageH > 0
+    ? `the winding's ${sourceOhm.toFixed(2)} Ω and ${reactanceOhm.toFixed(2)} Ω leakage reactance (${(leakageH * 1e6).toPrecision(3)} µH)`
+    : `the winding's ${sourceOhm.toFixed(2)} Ω (no leakage)`;
+  const reasoning = `A shorted reservoir at low mains drives ${fmtA(outputShortLowA)} RMS through ${through} and the diodes; a short at the rectifier's input ${fmtA(inputShortLowA)} (low mains) to ${fmtA(inputShortHighA)} (high mains).`;
   const findings: Finding[] = [...fittedFuseFindings(`${winding.name} fuse`, fittedA, fuse)];
   const subject = `${winding.name} fuse`;
   if (check) {
@@ -66,7 +76,7 @@ export function windingFuseReport(inp: WindingFuseInput): { report: WindingFuseR
     else findings.push({ ...base, value: check.multiple, limit: 2.1, unit: 'x In', severity: 'fail', message: `${what}. The winding can burn while the fuse holds; use a smaller fuse or a winding with less resistance.${fit}` });
   }
   return {
-    report: { windingId: winding.id, windingName: winding.name, fuse, fittedA, sheet, sourceOhm, inputShortLowA, inputShortHighA, outputShortLowA, check, turnsRatio, reasoning },
+    report: { windingId: winding.id, windingName: winding.name, fuse, fittedA, sheet, sourceOhm, leakageH, reactanceOhm, inputShortLowA, inputShortHighA, outputShortLowA, check, turnsRatio, reasoning },
     findings,
   };
 }

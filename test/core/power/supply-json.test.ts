@@ -11,12 +11,36 @@ describe('supply results in the evaluation JSON', () => {
   const raw = json.supply.rails.find((r: { railId: string }) => r.railId === 'rail-raw');
   const reg = json.supply.rails.find((r: { railId: string }) => r.railId === 'rail-13v8');
   it('per winding: fuse, fault currents and the clearing check', () => {
-    // R = 0.1 x 16 / 1 = 1.6 Ω; E = 17.6 V; at 108 V of 120 V (low mains, -10 %): 17.6 x 0.9 / 1.6 = 9.9 A
+    // R = 0.1 x 16 / 1 = 1.6 Ω; E = 17.6 V; leakage reactance (not entered: 0.25 R for a laminated core, common
+    // practice) X = 0.4 Ω, L = 0.4 / (2π 60) = 1061 µH. At 108 V of 120 V (low mains, -10 %), Ohm's law for AC:
+    // 17.6 x 0.9 / sqrt(1.6² + 0.4²) = 15.84 / 1.64924 = 9.6044 A (9.9 A without the leakage, the figure before
+    // leakage was modelled)
     expect(raw.windingFuse.sourceOhm).toBeCloseTo(1.6, 9);
-    expect(raw.windingFuse.inputShortLowA).toBeCloseTo(9.9, 9);
+    expect(raw.windingFuse.reactanceOhm).toBeCloseTo(0.4, 9);
+    expect(raw.windingFuse.leakageH * 1e6).toBeCloseTo(1061.03, 1);
+    expect(raw.windingFuse.inputShortLowA).toBeCloseTo(9.6044, 3);
+    // the shorted reservoir (through the diodes) is smaller still and is the one the fuse is checked against
+    expect(raw.windingFuse.outputShortLowA).toBeLessThan(raw.windingFuse.inputShortLowA);
+    expect(raw.windingFuse.check.faultA).toBe(raw.windingFuse.outputShortLowA);
     expect(raw.windingFuse.check).toMatchObject({ sheet: 'T3', allowedS: 5 });
     expect(typeof raw.windingFuse.check.clears).toBe('boolean');
     expect(json.supply.primary.faultChecks.length).toBe(2);
+  });
+  it('per transformer: the cross-regulated troughs, the shared primary and each winding\'s leakage', () => {
+    const cr = json.supply.transformers[0].crossRegulation;
+    expect(cr.rails.map((x: { railId: string }) => x.railId)).toEqual(['rail-raw', 'rail-pa']);
+    // the same values the rails' low-mains key-down corners carry (the headroom checks read those)
+    for (const x of cr.rails) {
+      const rail = json.supply.rails.find((r: { railId: string }) => r.railId === x.railId);
+      const low = rail.corners.find((c: { id: string }) => c.id === 'low-keyDown');
+      expect(low.troughV).toBe(x.keyDownTroughV);
+      expect(low.aloneTroughV).toBe(x.aloneTroughV);
+      expect(x.keyDownTroughV).toBeLessThan(x.keyUpTroughV);
+    }
+    // R_p = 0.5 x (5.6 / 66) x 120² / 66 = 9.256 Ω (half the VA-weighted copper loss in the primary)
+    expect(cr.primaryOhm).toBeCloseTo(9.256, 3);
+    expect(cr.primaryH).toBeGreaterThan(0);
+    expect(cr.rails[0].leakageFromRegulation).toBe(true);
   });
   it('per rail: bleeder time to its safe voltage and wattage V²/R', () => {
     const b = raw.bleeder;
