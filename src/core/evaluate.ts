@@ -7,6 +7,7 @@ import { evaluateSupply } from './power/evaluate-supply';
 import { withSimulationMemo } from './power/rectifier-sim';
 import type { SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
+import { paHeatAhead } from './thermal/pa-heat';
 import { withSupplyVoltages } from './budget-voltages';
 import { withRecommendedPa } from './power/recommended-pa';
 import { withBatteryPa } from './power/battery-pa';
@@ -198,7 +199,15 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   // loop with the searches in every pass would have ended with
   if (last) supply = evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA });
   budget = withSupplyVoltages(budget, supply);
-  const rf = evaluateRf(project, { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery, onMonteCarloProgress: options.onMonteCarloProgress });
+  const rfCtx = { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery };
+  // The air inside the enclosure is the ambient of every thermal check of a part in it (rectifiers, regulators, PA).
+  // Its rise needs every heat source, none of which depends on the air, so it is found first (the PA's heat from the
+  // same PA model) and the supply designed again with it (its simulations are memoised: only the checks run again).
+  const s = project.supply;
+  const insideC = project.supply.rails.length && s.enclosureAreaM2 && s.enclosureUWPerM2K
+    ? heatBudget(supply, paHeatAhead(project, rfCtx), s.enclosureAreaM2, s.enclosureUWPerM2K, project.ambientC).insideC : null;
+  if (last && insideC !== null) supply = evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA, insideC });
+  const rf = evaluateRf(project, { ...rfCtx, insideC: insideC ?? undefined, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const roleList = designRoles(project, supply, rf);
   const roleCheck = checkRoles(project, roleList);

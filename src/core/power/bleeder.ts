@@ -73,7 +73,7 @@ export function bleederFindings(railName: string, b: BleederReport): Finding[] {
 }
 
 /** The fitted bleeder's dissipation at the highest voltage against its rating derated to BLEEDER_DERATING. */
-export function bleederPowerFindings(railName: string, b: BleederReport): Finding[] {
+export function bleederPowerFindings(railName: string, b: Pick<BleederReport, 'fittedW' | 'startV' | 'ratedW'>): Finding[] {
   if (b.fittedW === null) return [];
   const base = { rule: 'bleeder.power', subject: `${railName} bleeder`, value: b.fittedW, unit: 'W', source: 'supply.bleeder-power' as const };
   const p = `${b.fittedW.toFixed(2)} W at ${b.startV.toFixed(1)} V (no load, high mains)`;

@@ -30,7 +30,7 @@ export interface HeatBudget {
   findings: Finding[];
 }
 
-/** A rise above which the room-ambient thermal checks inside are optimistic (K). Common practice, no published source. */
+/** A rise above which the box is worth ventilating (K). Common practice, no published source. */
 export const ENCLOSURE_RISE_CAUTION_K = 10;
 
 export interface PaHeat {
@@ -71,9 +71,9 @@ export function heatBudget(supply: SupplyReport | null, pas: PaHeat[], areaM2: n
   if (riseK === null) {
     if (totalW > 0) findings.push({ ...base, severity: 'caution', value: null, limit: ENCLOSURE_RISE_CAUTION_K, message: `About ${totalW.toFixed(1)} W is dissipated inside the box; enter the enclosure's surface and heat transfer coefficient on the supply page to see how warm it gets inside.` });
   } else if (riseK > ENCLOSURE_RISE_CAUTION_K) {
-    findings.push({ ...base, severity: 'caution', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C; the heatsink and junction checks use the ${ambientC} °C room, so they are optimistic. Ventilate the box or mount hot parts outside.` });
+    findings.push({ ...base, severity: 'caution', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C; the heatsink and junction checks of the rectifiers, regulators and PA use that air, not the ${ambientC} °C room. Ventilate the box or mount hot parts outside.` });
   } else {
-    findings.push({ ...base, severity: 'ok', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C.` });
+    findings.push({ ...base, severity: 'ok', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C, the ambient of the heatsink and junction checks inside.` });
   }
   return { sources: clean, totalW, areaM2: area, uWPerM2K: u, riseK, ambientC, insideC, findings };
 }

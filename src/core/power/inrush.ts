@@ -119,9 +119,9 @@ export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains:
   };
 }
 
-/** All transformers switched on together behind the primary fuse (fuseA, taken as T sheet 3 as elsewhere). */
+/** All transformers switched on together behind the primary fuse (fuseA, of the IEC 60127-2 sheet chosen; T3 when not). */
 export function inrushReport(
-  transformers: Transformer[], rails: RectifiedRail[], mains: Mains, fuseA: number,
+  transformers: Transformer[], rails: RectifiedRail[], mains: Mains, fuseA: number, sheet: FuseSheet = 'T3',
 ): InrushReport {
   const parts = transformers.map((t) => transformerInrush(t, rails, mains));
   // Switched at a voltage zero the magnetising inrush is worst (full flux offset) and the reservoirs charge gently
@@ -141,8 +141,8 @@ export function inrushReport(
   const rpOhm = Number.isFinite(primaryOhm) ? primaryOhm : 0;
   const ntcOhm = ratedA > 0 ? Math.max(0, (Math.SQRT2 * highV) / (NTC_TARGET_MULTIPLE * ratedA) - rpOhm) : 0;
   return {
-    transformers: parts, peakA, i2t, fuseA, sheet: 'T3',
-    fuseMeltI2t: meltI2tFloor('T3', fuseA), quickMeltI2t: meltI2tFloor('F2', fuseA), ntcOhm,
+    transformers: parts, peakA, i2t, fuseA, sheet,
+    fuseMeltI2t: meltI2tFloor(sheet, fuseA), quickMeltI2t: meltI2tFloor('F2', fuseA), ntcOhm,
   };
 }
 
@@ -151,27 +151,30 @@ export function inrushFindings(r: InrushReport): Finding[] {
     rule: 'fuse.inrush', subject: 'Primary fuse', value: r.i2t, limit: r.fuseMeltI2t, unit: 'A²s',
     source: 'supply.inrush-fuse' as const,
   };
-  const fuse = `T${r.fuseA < 1 ? `${Math.round(r.fuseA * 1000)}mA` : `${Number(r.fuseA.toPrecision(3))}A`}`;
+  const letter = r.sheet.startsWith('F') ? 'F' : 'T';
+  const fuse = `${letter}${r.fuseA < 1 ? `${Math.round(r.fuseA * 1000)}mA` : `${Number(r.fuseA.toPrecision(3))}A`}`;
   const what = 'Switch-on inrush (the worse of magnetising inrush and reservoir charging) peaks near ' +
     `${r.peakA.toFixed(1)} A with about ${r.i2t.toFixed(2)} A²s; the ${fuse} primary fuse melts from about ` +
     `${r.fuseMeltI2t.toFixed(2)} A²s`;
-  const quick = r.i2t > PULSE_SHARE * r.quickMeltI2t
+  const quick = letter === 'T' && r.i2t > PULSE_SHARE * r.quickMeltI2t
     ? ' Keep it time-lag (T): a quick-acting (F) fuse of that rating would not survive it.'
     : '';
+  // a quick-acting fuse chosen where the inrush would wear it: suggest the time-lag type of the same rating
+  const toT = letter === 'F' && r.i2t > PULSE_SHARE * r.fuseMeltI2t ? ' A time-lag (T) fuse of the same rating takes far more.' : '';
   const ntc = `an NTC thermistor of about ${r.ntcOhm.toFixed(0)} Ω cold in the primary, or a soft-start relay`;
   const share = `${Math.round(PULSE_SHARE * 100)} %`;
   if (r.i2t > r.fuseMeltI2t) {
     return [{
       ...base, severity: 'caution',
       message: `${what}: it may blow at switch-on. Fit ${ntc}, or a larger time-lag fuse only if it still clears the ` +
-        `primary faults.${quick} Mains wiring must follow your local electrical code.`,
+        `primary faults.${quick}${toT} Mains wiring must follow your local electrical code.`,
     }];
   }
   if (r.i2t > PULSE_SHARE * r.fuseMeltI2t) {
     return [{
       ...base, severity: 'caution',
       message: `${what}: more than ${share} of it, so repeated switching ages the fuse until it blows one day. ` +
-        `Fit ${ntc}.${quick}`,
+        `Fit ${ntc}.${quick}${toT}`,
     }];
   }
   return [{ ...base, severity: 'ok', message: `${what}: the inrush stays within ${share} of it.${quick}` }];

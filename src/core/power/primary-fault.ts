@@ -1,6 +1,6 @@
 // The primary fuse against each winding's fault reflected to the primary.
 import type { Finding } from '../findings';
-import type { PrimaryFaultCheck, RailReport, RectifiedRailReport } from './report-types';
+import type { FuseSheet, PrimaryFaultCheck, RailReport, RectifiedRailReport } from './report-types';
 import { faultCheck } from './fault';
 import { faultWords } from './winding-fuse';
 
@@ -12,16 +12,16 @@ export function railsReported(reports: Map<string, RailReport>): RectifiedRailRe
 /**
  * The smallest winding fault (shorted reservoir, low mains) seen on the primary: I_p = I_s x N_s/N_p, the turns
  * ratio taken as V_NL / V_mains. Source: ideal-transformer current ratio (textbook); magnetising current and the
- * other windings' load are not added, so the primary current is a lower bound. The primary fuse is taken as T,
- * IEC 60127-2 sheet 3 (what the recommendation names).
+ * other windings' load are not added, so the primary current is a lower bound. The primary fuse is of the sheet chosen
+ * for it (IEC 60127-2; T3 when none is chosen, what the recommendation names).
  */
-export function primaryFaultChecks(rails: RectifiedRailReport[], primaryFuseA: number): PrimaryFaultCheck[] {
+export function primaryFaultChecks(rails: RectifiedRailReport[], primaryFuseA: number, sheet: FuseSheet = 'T3'): PrimaryFaultCheck[] {
   const out: PrimaryFaultCheck[] = [];
   for (const r of rails) {
     const wf = r.windingFuse!;
     const reflectedA = wf.outputShortLowA * wf.turnsRatio;
     if (!(reflectedA > 0)) continue;
-    out.push({ windingName: wf.windingName, reflectedA, check: faultCheck(reflectedA, primaryFuseA, 'T3') });
+    out.push({ windingName: wf.windingName, reflectedA, check: faultCheck(reflectedA, primaryFuseA, sheet) });
   }
   return out;
 }

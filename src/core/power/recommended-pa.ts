@@ -34,7 +34,7 @@ export function withRecommendedPa(supply: SupplyReport | null, project: Project,
     const dbBelow = target > 0 ? 10 * Math.log10(target / Math.max(outputW, 1e-12)) : 0;
     findings.push({
       severity: dbBelow > 1 ? 'caution' : 'ok', rule: 'transformer.recommended-pa', subject: r.winding.windingName, value: outputW, limit: target, unit: 'W', source: 'supply.recommended-pa',
-      message: `With the recommended ${r.winding.standardRatedV ?? '?'} V ${r.winding.ratedA.toFixed(2)} A winding (sized for CW at ${Math.round(supply.keyingDuty * 100)} % duty) the ${r.railName} falls to ${r.winding.checkTroughV.toFixed(1)} V at low mains, key-down, and ${stage.name} gives about ${outputW.toFixed(1)} W (${pa.lowOutputW.toFixed(1)} W with the fitted winding; target ${target} W).`,
+      message: `With the recommended ${r.winding.standardRatedV ?? '?'} V ${r.winding.ratedA.toFixed(2)} A winding (sized for ${supply.choices?.transformerSizing === 'tune-up' ? 'tune-up, a continuous carrier' : `CW at ${Math.round(supply.keyingDuty * 100)} % duty`}) the ${r.railName} falls to ${r.winding.checkTroughV.toFixed(1)} V at low mains, key-down, and ${stage.name} gives about ${outputW.toFixed(1)} W (${pa.lowOutputW.toFixed(1)} W with the fitted winding; target ${target} W).`,
     });
     return { ...r, winding: { ...r.winding, paAtCheck } };
   });

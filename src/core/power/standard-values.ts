@@ -2,9 +2,18 @@
 
 /**
  * Off-the-shelf mains transformer secondary voltages (V RMS at full load).
- * Common practice, no published source: typical catalogue steps of small transformer makers (from memory).
+ * Common practice, no published source: the union of the secondary steps listed in small-transformer catalogues
+ * (PCB-mount laminated ranges 6-24 V, open-frame laminated and toroidal ranges 6-300 V; several makers' lines merged,
+ * none named; from memory, not confirmed). A value here is one a builder can expect to buy off the shelf.
  */
-export const DEFAULT_SECONDARY_V: readonly number[] = [6, 7.5, 9, 12, 15, 18, 20, 22, 24, 25, 28, 30, 35, 40, 45, 50, 55, 60, 70, 80, 100, 115, 120, 150, 200, 230, 250, 300];
+export const DEFAULT_SECONDARY_V: readonly number[] = [
+  5, 6, 7.5, 8, 9, 10, 12, 14, 15, 16, 17, 18, 20, 22, 24, 25, 26, 28, 30, 32, 35, 36, 40, 42, 45, 48, 50, 55, 60, 70,
+  80, 100, 110, 115, 120, 150, 200, 230, 250, 300,
+];
+
+/** Where DEFAULT_SECONDARY_V comes from, in words for the pages. */
+export const SECONDARY_V_BASIS =
+  'secondary voltages common in small-transformer catalogues (laminated and toroidal ranges merged; no maker named)';
 
 /**
  * Off-the-shelf transformer ratings (VA).

@@ -1,0 +1,24 @@
+// The PA's duty-averaged dissipation ahead of the RF evaluation, for the enclosure's heat budget: the heat does not
+// depend on the air around the heatsink, so the inside temperature can be found before the checks that use it.
+import type { Project } from '../model';
+import { evaluatePa } from '../rf';
+import type { RfContext } from '../rf/evaluate-rf';
+import type { PaHeat } from '../power/heat-budget';
+
+const finite = (x: number) => (Number.isFinite(x) ? x : 0);
+
+/** Each final stage's duty-averaged dissipation, all devices (W), from the same PA model and rail voltages as the RF evaluation. */
+export function paHeatAhead(project: Project, ctx: Pick<RfContext, 'paRailV' | 'paRailMaxV' | 'paRailHotV' | 'paRailLowV' | 'paRailBattery'>): PaHeat[] {
+  return project.stages.flatMap((st) => {
+    if (st.kind !== 'final' || !st.pa) return [];
+    const id = st.pa.railId;
+    const r = evaluatePa(st.pa, finite(ctx.paRailV[id] ?? NaN), project, st.name, {
+      maxRailV: ctx.paRailMaxV?.[id], hotRailV: ctx.paRailHotV?.[id], lowRailV: ctx.paRailLowV?.[id],
+      source: ctx.paRailBattery?.[id] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr, frequencyHz: project.frequencyHz,
+    });
+    const t = r.thermal;
+    if (r.refused || !t || !(t.dissipationPerDeviceW > 0)) return [];
+    // per-device average times the device count (dissipationTotalW / dissipationPerDeviceW)
+    return [{ name: st.name, averageW: t.averagePerDeviceW * (t.dissipationTotalW / t.dissipationPerDeviceW) }];
+  });
+}
