@@ -24,3 +24,21 @@ describe('class E into mismatched loads', () => {
     expect(simulateClassE(0.5, 0, 0.001).drainPeakRatio).toBeGreaterThan(3.562 * 1.05);
   });
 });
+
+describe('one waveform gives power, DC current and harmonics (Sokal & Sokal, IEEE JSSC SC-10(3), 1975)', () => {
+  const r = simulateClassE(1, 0, 0.001);
+  it('P = 0.5768 Vdd²/R within 3 %, and I_dc = P/Vdd at (nearly) 100 % efficiency within 1 %', () => {
+    near(r.outputRatio, 0.5768, 0.03 * 0.5768, 'P');
+    // normalised I_dc = dcInputRatio (Vdd = 1): P / Vdd
+    near(r.dcInputRatio, r.outputRatio, 0.01 * r.outputRatio, 'I_dc');
+  });
+  it('the load current is nearly sinusoidal: every harmonic at least 30 dB down with loaded Q 30', () => {
+    expect(r.loadHarmonics[0]).toBe(1);
+    for (const h of r.loadHarmonics.slice(1)) expect(20 * Math.log10(h)).toBeLessThan(-30);
+  });
+  it('a lower loaded Q filters less: every harmonic higher at Q 5 than at Q 30', () => {
+    // Source: a series-tuned network's reactance at n f is Q R (n − 1/n) (textbook): harmonics fall with Q
+    const low = simulateClassE(1, 0, 0.001, 0.5, 5);
+    for (let n = 2; n <= 5; n++) expect(low.loadHarmonics[n - 1]).toBeGreaterThan(r.loadHarmonics[n - 1]);
+  });
+});
