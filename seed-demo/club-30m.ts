@@ -1,7 +1,11 @@
 // Demo (a): a club group build of 8 kits of a 30 m, 20 W CW transceiver on 120 V / 60 Hz mains.
 // Invented scenario: the "Ridgeback Valley Radio Society" autumn build. Suppliers, SKUs and prices invented.
 import type { Project, Stage, Part, BomLine } from '../src/core/model';
-import { CATALOG_BINOCULAR, CATALOG_IRON12, CATALOG_IRON17, SAMPLE_CORES } from './cores';
+import { CATALOG_BINOCULAR, SAMPLE_CORES, toroidEntry } from './cores';
+
+// invented catalog cores (ids unique across the database)
+const CATALOG_IRON12 = toroidEntry('core-club-iron12', SAMPLE_CORES.iron12);
+const CATALOG_IRON17 = toroidEntry('core-club-iron17', SAMPLE_CORES.iron17);
 import { offer, perMode, defaultRf, defaultLpf } from './common';
 
 const stages: Stage[] = [

@@ -27,8 +27,9 @@ export const SAMPLE_CORES: Record<'iron12' | 'iron17' | 'ferrite23', SampleCore>
   },
 };
 
-/** A catalog core made from a sample toroid: Ae and le from its dimensions (src/core/rf/cores.ts). */
-function toroidEntry(id: string, s: SampleCore): CatalogCore {
+/** A catalog core made from a sample toroid: Ae and le from its dimensions (src/core/rf/cores.ts). Row ids are
+ *  unique across the database, so each demo passes its own id. */
+export function toroidEntry(id: string, s: SampleCore): CatalogCore {
   const c = s.core;
   const geo = toroidEffective(c.outerDiameterM!, c.innerDiameterM!, c.heightM!);
   return {
@@ -37,12 +38,9 @@ function toroidEntry(id: string, s: SampleCore): CatalogCore {
   };
 }
 
-/** Invented catalog cores for the demos (illustrative figures, not any maker's data). */
-export const CATALOG_IRON12 = toroidEntry('core-iron12', SAMPLE_CORES.iron12);
-export const CATALOG_IRON17 = toroidEntry('core-iron17', SAMPLE_CORES.iron17);
-export const CATALOG_FERRITE23 = toroidEntry('core-ferrite23', SAMPLE_CORES.ferrite23);
+/** An invented binocular core for the club demo's output transformer (illustrative figures, not any maker's data). */
 export const CATALOG_BINOCULAR: CatalogCore = {
-  id: 'core-bino14', name: 'Ferrite binocular core 14 × 8 × 12 mm, HF power material 1–30 MHz (AL 2000 nH/t²)',
+  id: 'core-club-bino14', name: 'Ferrite binocular core 14 × 8 × 12 mm, HF power material 1–30 MHz (AL 2000 nH/t²)',
   alHPerTurn2: 2000e-9, aeM2: 25e-6, leM: 25e-3, innerDiameterM: null, windowAreaM2: 18e-6,
   minFrequencyHz: 1e6, maxFrequencyHz: 30e6, fluxLimitT: 0.03,
 };

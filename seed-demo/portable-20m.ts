@@ -1,6 +1,10 @@
 // Demo (b): a 5 W 20 m portable CW rig on a 12.8 V (4-cell lithium iron phosphate) battery.
 import type { Project } from '../src/core/model';
-import { CATALOG_FERRITE23, CATALOG_IRON12, SAMPLE_CORES } from './cores';
+import { SAMPLE_CORES, toroidEntry } from './cores';
+
+// invented catalog cores (ids unique across the database)
+const CATALOG_IRON12 = toroidEntry('core-port-iron12', SAMPLE_CORES.iron12);
+const CATALOG_FERRITE23 = toroidEntry('core-port-ferrite23', SAMPLE_CORES.ferrite23);
 import { offer, perMode, defaultRf, defaultLpf } from './common';
 
 const S1 = 'Northfield Components';

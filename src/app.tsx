@@ -15,6 +15,7 @@ import { overviewRoutes } from './web/routes/overview';
 import { supplyRoutes } from './web/routes/supply';
 import { stageRoutes } from './web/routes/stage';
 import { rfRoutes } from './web/routes/rf';
+import { coreRoutes } from './web/routes/cores';
 import { packRoutes } from './web/routes/pack';
 import { netlistRoutes } from './web/routes/netlists';
 import { sourcesRoutes } from './web/routes/sources';
@@ -75,6 +76,7 @@ export function buildApp(deps: Deps) {
   app.route('/', stageRoutes(deps));
   app.route('/', supplyRoutes(deps));
   app.route('/', rfRoutes(deps));
+  app.route('/', coreRoutes(deps));
   app.route('/', packRoutes(deps));
   app.route('/', netlistRoutes(deps));
   app.route('/', sourcesRoutes(deps));

@@ -48,6 +48,10 @@ export const RfBody: FC<{ project: Project; report: EvaluationReport; failed?: F
       transmitter into a dummy load with a suitable instrument before going on the air, and evaluate RF exposure as your local rules require.
     </p>
     <Settings project={project} state={stateFor('rf-settings', failed, () => rfSettingsFormValues(project))} />
+    <p>
+      <a href={`/projects/${project.id}/cores`}>Core catalog</a> ({(project.cores ?? []).length} cores): the cores the filter inductors and the
+      output transformer are wound on.
+    </p>
     <RfResults report={report.rf} />
     {report.rf.lpfStageId ? (
       <p>

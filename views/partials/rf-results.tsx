@@ -19,6 +19,7 @@ import type { KeyingResult } from '../../src/core/rf/keying-eval';
 import type { CoreRealisation } from '../../src/core/rf/cores-check';
 import type { LNetwork, RfChoke } from '../../src/core/rf/output-network';
 import { PaSwrTable } from './pa-swr-table';
+import { PaMagnetics } from './pa-magnetics';
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
 const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
@@ -413,6 +414,7 @@ export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
         <>
           <PaTable name={s.stageName} pa={s.pa} />
           {s.network || s.choke ? <OutputNetworkTable name={s.stageName} n={s.network ?? null} c={s.choke ?? null} /> : null}
+          <PaMagnetics s={s} />
         </>
       ) : s.lpf ? <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} /> : s.relay ? (
         <>
