@@ -60,6 +60,14 @@ const RectifiedFields: FC<FormProps> = ({ project, state, idp }) => {
         {f('windingFuseA')}
         {f('windingFuseSheet')}
       </div>
+      <div class="row">
+        {f('bridgeMount.thetaJcKPerW', 5)}
+        {f('bridgeMount.thetaCsKPerW', 5)}
+        {f('bridgeMount.thetaSaKPerW', 5)}
+        {f('bridgeMount.tjMaxC', 5)}
+        {f('bridgeFreeAirKPerW', 5)}
+        <span class="hint">The rectifier's datasheet values; leave them empty for an assumed 4-8 A bridge with no heatsink.</span>
+      </div>
     </>
   );
 };
@@ -97,6 +105,11 @@ const RegulatedFields: FC<FormProps & { parents: [string, string][] }> = ({ stat
       <div class="row">
         {f('rippleRejectionDb', 5)}
         {f('rippleTargetV', 6)}
+      </div>
+      <div class="row">
+        {f('outputF', 7)}
+        {f('bleederOhm', 7)}
+        {f('bleederRatedW', 5)}
       </div>
       <div class="row">
         {f('mount.thetaJcKPerW', 5)}

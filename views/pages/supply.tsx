@@ -11,6 +11,8 @@ import { stateFor, type Failed } from '../components/failed';
 import { TransformerCard, Version, hx } from '../components/supply-transformer';
 import { RailCard } from '../components/supply-rail';
 import { EmptyState } from '../components/empty-state';
+import { SupplyChoicesForm } from '../components/supply-choices';
+import { supplyChoices, supplyChoicesSpec } from '../../src/core/spec/supply-choices';
 
 export interface SupplyBodyProps {
   project: Project;
@@ -74,6 +76,7 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
   const addRail = stateFor('add-rail', failed, () => ({ name: '', source: sourceOptions(project)[0]?.[0] ?? 'battery' }));
   const fuse = stateFor('primary-fuse', failed, () => formValues(primaryFuseSpec, project.supply));
   const enclosure = stateFor('enclosure', failed, () => formValues(enclosureSpec, project.supply));
+  const choices = stateFor('supply-choices', failed, () => formValues(supplyChoicesSpec, supplyChoices(project.supply)));
   return (
     <div id="supply">
       <PageMessages notice={notice} failed={failed} />
@@ -101,6 +104,7 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
               {project.supply.transformers.length ? null : <p class="hint">No transformer yet: add the mains transformer, then its secondaries.</p>}
               <AddTransformer project={project} state={addTrafo} />
               <PrimaryFuse project={project} state={fuse} />
+              <SupplyChoicesForm project={project} state={choices} />
             </>
           ) : (
             <p class="hint">A battery / DC station needs no mains transformer or primary fuse.</p>

@@ -19,6 +19,10 @@ import type { Failed } from '../../../views/components/failed';
 import type { EvaluationReport } from '../../core/evaluate';
 import { SupplyResults, FindingList } from '../../../views/partials/supply-results';
 import { sortFindings } from '../../core/findings';
+import { supplyChoices, supplyChoicesSpec, type SupplyChoices } from '../../core/spec/supply-choices';
+import { specFormSchema } from '../forms/spec-schema';
+
+const choicesSchema = specFormSchema<SupplyChoices>(supplyChoicesSpec);
 
 function supplyResultsFor(project: Project, report: EvaluationReport) {
   if (!report.supply) return <p class="hint card">No computed supply results: add a rail (and, for a mains station, a transformer with a winding) to see rail voltages at the mains corners, ripple, fuses and heat.</p>;
@@ -141,6 +145,11 @@ export function supplyRoutes(deps: Deps) {
 
   app.post('/projects/:id/supply/fuse', projectEdit(deps, { ...common, form: 'primary-fuse', schema: F.fuseSchema, values: (p) => formValues(primaryFuseSpec, p.supply),
     change: (p, d) => ({ ...p, supply: { ...p.supply, primaryFuseA: d.primaryFuseA } }),
+  }));
+
+  app.post('/projects/:id/supply/choices', projectEdit(deps, { ...common, form: 'supply-choices', schema: choicesSchema,
+    values: (p) => formValues(supplyChoicesSpec, supplyChoices(p.supply)),
+    change: (p, d) => ({ ...p, supply: { ...p.supply, primaryFuseSheet: d.primaryFuseSheet, transformerSizing: d.transformerSizing } }),
   }));
 
   app.post('/projects/:id/supply/enclosure', projectEdit(deps, { ...common, form: 'enclosure', schema: F.enclosureSchema, values: (p) => formValues(enclosureSpec, p.supply),
