@@ -14,6 +14,7 @@ import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
 import { KeyingTransientBlock } from '../components/supply-keying';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
 import { BleederLine } from '../components/supply-bleeder';
+import { BridgeLine, RegulatedBleederLine, primaryTypeWords, sizedForTuneUp } from '../components/supply-thermal';
 import { HeatCard } from '../components/supply-heat';
 import { AllCorners, RectifiedDeciding, RegulatedDeciding } from '../components/supply-corners';
 import type { HeatBudget } from '../../src/core/power/heat-budget';
@@ -109,6 +110,7 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
     {rail.keyingTransient ? <KeyingTransientBlock rail={rail} /> : null}
     {rail.windingFuse ? <WindingFuseTable wf={rail.windingFuse} /> : null}
     <BleederLine b={rail.bleeder} />
+    {rail.bridgeThermal ? <BridgeLine b={rail.bridgeThermal} /> : null}
     <h4>Findings</h4>
     <FindingList findings={rail.findings} />
     <h4>Recommendations</h4>
@@ -125,6 +127,7 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
       </span>
     </h3>
     <RegulatedDeciding rail={rail} />
+    {rail.bleeder ? <RegulatedBleederLine b={rail.bleeder} /> : null}
     <AllCorners count={rail.corners.length}>
     <table class="grid corners">
       <thead>
@@ -215,7 +218,7 @@ const BatteryCard: FC<{ rail: BatteryRailReport }> = ({ rail }) => (
   </section>
 );
 
-const TransformerCard: FC<{ t: TransformerReport }> = ({ t }) => (
+const TransformerCard: FC<{ t: TransformerReport; tuneUp?: boolean }> = ({ t, tuneUp }) => (
   <div class="transformer-result">
     <h4>
       {t.name} <span class="hint">({t.construction})</span>
@@ -247,8 +250,9 @@ const TransformerCard: FC<{ t: TransformerReport }> = ({ t }) => (
       </tbody>
     </table>
     <p class="summary-line">
-      Sized for CW operation: total {fv(t.thermalVA, 'VA')} ({fv(t.tuneUpVA, 'VA')} with a continuous tune-up carrier, which this size
-      carries only briefly): choose {t.standardVA !== null ? fv(t.standardVA, 'VA') : 'a larger transformer than the list holds'}. Primary current {fv(t.primaryA, 'A')}.
+      {tuneUp
+        ? `Sized for tune-up (a continuous carrier, as chosen): total ${fv(t.thermalVA, 'VA')}`
+        : `Sized for CW operation: total ${fv(t.thermalVA, 'VA')} (${fv(t.tuneUpVA, 'VA')} with a continuous tune-up carrier, which this size carries only briefly)`}: choose {t.standardVA !== null ? fv(t.standardVA, 'VA') : 'a larger transformer than the list holds'}. Primary current {fv(t.primaryA, 'A')}.
     </p>
     {t.windings.map((w) =>
       w.paAtCheck ? (
@@ -313,11 +317,12 @@ export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null 
         <section class="card supply-transformers">
           <h3>Transformers and primary</h3>
           {report.transformers.map((t) => (
-            <TransformerCard t={t} />
+            <TransformerCard t={t} tuneUp={sizedForTuneUp(report)} />
           ))}
           {report.primary ? (
             <p>
-              <strong>Primary fuse:</strong> {report.primary.fuse.ratedA !== null ? `T${fv(report.primary.fuse.ratedA, 'A')}` : 'beyond the IEC 60127 series'}
+              <strong>Primary fuse:</strong> {report.primary.fuse.ratedA !== null ? `${report.primary.fuse.characteristic}${fv(report.primary.fuse.ratedA, 'A')}` : 'beyond the IEC 60127 series'}
+              {' '}({primaryTypeWords(report)})
               {report.primary.fittedA !== null ? ` (fitted ${fv(report.primary.fittedA, 'A')})` : ''}. {report.primary.fuse.reasoning}
             </p>
           ) : null}
