@@ -6,6 +6,7 @@ import type { ChecklistItem, ChecklistReport, ChecklistSection } from './types';
 import { step, caution, measured, stageCurrents, stagePerMode, fmt } from './items';
 import { supplySection } from './build-supply';
 import { rfView, type RfView } from './rf-view';
+import { CONSTRUCTION_FLOOR_DBC } from '../rf/harmonics';
 
 // Common practice, no published source: build and test the supply, then the receive chain, then the
 // transmit chain from the oscillator towards the antenna, with the final amplifier last.
@@ -135,7 +136,13 @@ function stationItems(report: ChecklistReport, rf: RfView | null): ChecklistItem
     if (kd) items.push(measured(`${rail.railName} key-down at nominal mains: about {v}, ripple ${fmt(kd.ripplePpV, 'V')} p-p.`, kd.dcMeanV, 'V', `supply: ${kd.label}`));
   }
   for (const h of rf?.harmonics ?? []) {
-    items.push(measured(`Harmonic ${h.n}: predicted {v} at the antenna, ${fmt(h.requiredDb, 'dB')} required below the carrier.`, h.predictedDbc, 'dBc', 'rf: harmonics', h.severity === 'ok' ? 'normal' : 'caution'));
+    const emphasis = h.severity === 'ok' ? 'normal' : 'caution';
+    // below the construction floor the build, not the filter, sets the level: no number is printed
+    if (h.predictedDbc < CONSTRUCTION_FLOOR_DBC) {
+      items.push({ text: `Harmonic ${h.n}: limited by construction at the antenna (the prediction lies below ${CONSTRUCTION_FLOOR_DBC} dBc), ${fmt(h.requiredDb, 'dB')} required below the carrier.`, value: null, unit: '', basis: 'rf: harmonics', emphasis });
+    } else {
+      items.push(measured(`Harmonic ${h.n}: predicted {v} at the antenna, ${fmt(h.requiredDb, 'dB')} required below the carrier.`, h.predictedDbc, 'dBc', 'rf: harmonics', emphasis));
+    }
   }
   if (!rf) items.push(step('RF results not computed: check output power and harmonics against the RF page when available.'));
   items.push(step('Final check: receive and transmit on the dummy load, the full keying speed, for ten minutes; nothing smells, nothing drifts.'));

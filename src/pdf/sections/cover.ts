@@ -2,6 +2,7 @@
 import type { Project } from '../../core/model';
 import { MODE_LABELS } from '../../core/model';
 import { bandOf } from '../../core/rf/bands';
+import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
 import { formatMoney } from '../../core/cost/money';
 import { rfView } from '../../core/checklists';
 import { actionable, worstSeverity } from '../../core/findings';
@@ -56,7 +57,9 @@ export function cover(l: Layout, project: Project, report: PackReport, opts: Pac
   }
   if (rf) {
     const worst = rf.harmonics.reduce<null | (typeof rf.harmonics)[number]>((w, h) => (w === null || h.marginDb < w.marginDb ? h : w), null);
-    if (worst) key.push(['Worst harmonic', `H${worst.n}: ${fv(worst.predictedDbc, 'dBc')} predicted, margin ${fv(worst.marginDb, 'dB')}`]);
+    // below the construction floor the build sets the level: said in words, never as a number
+    const level = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'limited by construction' : `${fv(x, 'dBc')} predicted`);
+    if (worst) key.push(['Worst harmonic', `H${worst.n}: ${level(worst.predictedDbc)}, margin ${fv(worst.marginDb, 'dB')}`]);
     for (const e of rf.exposure) key.push(['Exposure distance', `${fv(e.distanceM, 'm', 2)} (${e.label})`]);
   }
   if (!report.supply) key.push(['Supply design', 'not computed']);

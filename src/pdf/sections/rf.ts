@@ -8,6 +8,7 @@ import { findingsList, fv, keyValues, notComputed } from './common';
 import { sourceText } from '../../core/sources/registry';
 import type { PaSwrStress, Worst } from '../../core/rf/pa-swr';
 import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
+import { MIN_DBC } from '../../core/rf/pa-spectrum';
 
 const loadText = (w: Worst) => `${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '−' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} Ω, phase ${w.phaseDeg.toFixed(0)}°`;
 
@@ -129,7 +130,7 @@ function keying(l: Layout, name: string, k: KeyingResult): void {
   });
 }
 
-const lvl = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'by construction' : fv(x, 'dBc'));
+const lvl = (x: number) => (x <= MIN_DBC ? 'none (ideal)' : x < CONSTRUCTION_FLOOR_DBC ? 'by construction' : fv(x, 'dBc'));
 
 function harmonics(l: Layout, rf: RfReport): void {
   const h = rf.harmonics;
@@ -137,7 +138,7 @@ function harmonics(l: Layout, rf: RfReport): void {
   if (!h) return notComputed(l, 'Harmonics');
   l.text(`Rule: ${h.ruleTitle} — ${fv(h.requiredDb, 'dB')} below ${fv(h.fundamentalW, 'W')}${h.ruleFromMemory ? ' (from memory; check the current text)' : ''}. Source: ${sourceText(h.ruleSource)}`, { sizePt: 8.5, afterPt: 4 });
   const rows: Row[] = h.rows.map((x) => ({
-    cells: [`${x.n}`, fv(x.frequencyHz, 'Hz'), fv(x.paLevelDbc, 'dBc'), fv(x.filterAttenuationDb, 'dB'), lvl(x.predictedBestDbc), lvl(x.predictedDbc), x.worstPredictedDbc !== null ? lvl(x.worstPredictedDbc) : '—', fv(x.marginDb, 'dB')],
+    cells: [`${x.n}`, fv(x.frequencyHz, 'Hz'), lvl(x.paLevelDbc), fv(x.filterAttenuationDb, 'dB'), lvl(x.predictedBestDbc), lvl(x.predictedDbc), x.worstPredictedDbc !== null ? lvl(x.worstPredictedDbc) : '—', fv(x.marginDb, 'dB')],
     color: x.severity === 'fail' ? FAIL : x.severity === 'caution' ? CAUTION : undefined,
   }));
   l.table([{ header: 'n', width: 0.05 }, { header: 'Frequency', width: 0.13, align: 'right' }, { header: 'At PA (worst)', width: 0.13, align: 'right' }, { header: 'Filter', width: 0.11, align: 'right' }, { header: 'Best end', width: 0.14, align: 'right' }, { header: 'Worst end', width: 0.14, align: 'right' }, { header: 'Tolerances', width: 0.16, align: 'right' }, { header: 'Margin', width: 0.14, align: 'right' }], rows);
