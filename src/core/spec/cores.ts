@@ -22,7 +22,7 @@ export const coreSpec = defineSpec({
     // Common practice, no published source: HF cores from a few mm² (small beads) to a few thousand mm² (stacks)
     aeM2: num('Effective area Ae', 'm²', MM2, 0.5e-6, 5e-3, 11.4e-6, { form: 'ae', example: '11.4', help: 'of the cross-section' }),
     leM: num('Effective path length le', 'm', MM, 5e-3, 0.5, 31.2e-3, { form: 'le', example: '31.2' }),
-    innerDiameterM: optNum('Inner diameter', 'm', MM, 1e-3, 0.1, null, {
+    innerDiameterM: optNum('Inner diameter', 'm', MM, 1e-3, 0.1, 7.7e-3, {
       form: 'innerDiameter', example: '7.7', help: 'a toroid’s hole; empty = give the window area',
     }),
     windowAreaM2: optNum('Window area', 'm²', MM2, 0.5e-6, 5e-3, null, {

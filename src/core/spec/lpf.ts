@@ -23,7 +23,7 @@ export const lpfSpec = defineSpec({
     capacitorSeries: choice('Capacitor values', [['E12', 'E12'], ['E24', 'E24']], 'E12'),
     allowParallelPairs: bool('Allow a parallel pair when closer', true),
     coreId: ref('Core from the catalog', 'core', true, {
-      form: 'coreId', help: 'its AL, area, window, range and flux limit are used; none = the core entered here',
+      form: 'catalogCore', help: 'its AL, area, window, range and flux limit are used; none = the core entered here',
     }),
     coreName: text('Core', 120, false, 'Iron-powder toroid 12.7 mm, 1–30 MHz mix (AL 4.9 nH/t²)'),
     coreAlHPerTurn2: num('Core AL', 'H/t²', U.nHt2, 1e-12, 1e-4, 4.9e-9, {
