@@ -83,7 +83,7 @@ export function evaluateRegulatedRail(
     recommendations.push({
       topic: 'heatsink',
       text: !thermal.needsHeatsink ? 'No heatsink needed' : need !== null ? `Heatsink ${need.toFixed(1)} K/W or lower` : 'No single heatsink is enough: reduce the input voltage or share the heat',
-      reasoning: `Dissipation ${thermal.powerW.toFixed(2)} W at ${thermalC.label.toLowerCase()} (tune-up ${tuneC.dissipationW.toFixed(2)} W). θsa = (Tj,target - Ta)/P - θjc - θcs with Tj,target = 0.8 x ${mount.tjMaxC} °C = ${thermal.targetC.toFixed(0)} °C and Ta = ${thermal.ambientC} °C.`,
+      reasoning: `Dissipation ${thermal.powerW.toFixed(2)} W at ${thermalC.label.toLowerCase()} (tune-up ${tuneC.dissipationW.toFixed(2)} W). θsa = (Tj,target - Ta)/P - θjc - θcs with Tj,target = 0.8 x ${mount.tjMaxC} °C = ${thermal.targetC.toFixed(0)} °C and Ta = ${Number(thermal.ambientC.toFixed(1))} °C.`,
       source: 'thermal.series-path',
     });
   } else {
