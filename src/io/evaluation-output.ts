@@ -88,6 +88,11 @@ function supplyLines(report: EvaluationReport): string[] {
         const clear = wf.check.latestS === null ? 'not cleared (below 2.1 x In)' : `cleared within ${formatValue(wf.check.latestS, 's')} (IEC 60127-2 ${wf.check.sheet})`;
         out.push(`    ${wf.windingName} fuse ${wf.fittedA !== null ? 'fitted' : 'recommended'} T${formatValue(wf.check.fuseA, 'A')}: shorted reservoir ${formatValue(wf.outputShortLowA, 'A')} at low mains, ${clear}`);
       }
+      const kt = r.keyingTransient;
+      if (kt?.elements.length) {
+        const sdb = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(1)} dB`;
+        out.push(`    keyed from rest at ${kt.wpm} WPM (nominal mains): ${formatValue(kt.keyUpMeanV, 'V')} key-up, ${formatValue(kt.keyDownMeanV, 'V')} key held; first dot ${sdb(kt.firstLeadDb)} over its first ${formatValue(kt.leadS, 's')}, ${sdb(kt.firstElementDb)} over the dot, against a held key`);
+      }
     } else if (r.kind === 'regulated') {
       const tj = r.thermal?.junctionC != null ? `, junction ${formatValue(r.thermal.junctionC, '°C')}` : '';
       out.push(`  ${r.railName}: ${formatValue(r.outputV, 'V')}, ${formatValue(r.thermalDissipationW, 'W')} in CW use${tj}`);

@@ -77,7 +77,20 @@ function rectified(l: Layout, r: RectifiedRailReport): void {
   const title = `${r.railName}: two mains cycles at ${worst?.label ?? 'the worst corner'}`;
   plot(l, { title, xLabel: 'time (ms)', yLabel: 'rail (V)', xTick: (v) => (v * 1000).toFixed(0), yTick: (v) => v.toFixed(1), series: [{ label: 'rail voltage (V)', xs: w.timeS, ys: w.outputV, color: BLUE }], heightPt: 95 });
   plot(l, { title: '', xLabel: 'time (ms)', yLabel: 'winding (A)', xTick: (v) => (v * 1000).toFixed(0), yTick: (v) => v.toFixed(1), series: [{ label: 'winding current (A)', xs: w.timeS, ys: w.windingA, color: ORANGE }], heightPt: 70 });
+  keyingTransient(l, r);
   findingsList(l, r.findings, true);
+}
+
+/** The PA rail keyed from rest: the rail through the first dots and the first dot against a held key. */
+function keyingTransient(l: Layout, r: RectifiedRailReport): void {
+  const k = r.keyingTransient;
+  if (!k || !k.elements.length) return;
+  const sdb = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(1)} dB`;
+  const key = k.waveform.keyed.map((d) => (d ? k.keyDownMeanV : k.keyUpMeanV));
+  const title = `${r.railName}: keyed from rest at ${k.wpm} WPM, nominal mains (dots of ${fv(k.dotS, 's')})`;
+  plot(l, { title, xLabel: 'time from the first key-down (ms)', yLabel: 'rail (V)', xTick: (v) => (v * 1000).toFixed(0), yTick: (v) => v.toFixed(1), series: [{ label: 'rail voltage (V)', xs: k.waveform.timeS, ys: k.waveform.railV, color: BLUE }, { label: 'key: up / down (key-up and held-key levels)', xs: k.waveform.timeS, ys: key, color: ORANGE }], heightPt: 95 });
+  const first = k.elements[0];
+  l.text(`${k.stageName}: the first dot gives ${fv(first.leadOutputW, 'W')} over its first ${fv(k.leadS, 's')} (${sdb(first.leadVsSteadyDb)}) and ${fv(first.outputW, 'W')} over the dot (${sdb(first.vsSteadyDb)}) against ${fv(k.steadyOutputW, 'W')} with the key held (${fv(k.keyDownMeanV, 'V')}; ${fv(k.keyUpMeanV, 'V')} key-up).`, { sizePt: 8.5, color: GREY, afterPt: 4 });
 }
 
 function regulated(l: Layout, r: RegulatedRailReport): void {

@@ -4,7 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { club30m } from '../../../seed-demo/club-30m';
 import { evaluate } from '../../../src/core/evaluate';
-import { evaluationJson } from '../../../src/io/evaluation-output';
+import { evaluationJson, renderEvaluationText } from '../../../src/io/evaluation-output';
 import { keyingTransientSvg } from '../../../views/plots/keying-transient-plot';
 import { KeyingTransientBlock } from '../../../views/components/supply-keying';
 import type { RectifiedRailReport } from '../../../src/core/power/report-types';
@@ -48,6 +48,11 @@ describe('keying transient in the evaluation JSON', () => {
     expect(f.limit).toBe(1);
     expect(f.severity).toBe(paRail.keyingTransient.firstLeadDb > 1 ? 'caution' : 'ok');
     expect(rawRail.keyingTransient).toBeUndefined();
+  });
+  it('the CLI text names the speed and the first dot against a held key', () => {
+    const line = renderEvaluationText(club30m, report).split('\n').find((l) => l.includes('keyed from rest'));
+    expect(line).toContain('20 WPM');
+    expect(line).toContain(`${paRail.keyingTransient.firstLeadDb >= 0 ? '+' : ''}${paRail.keyingTransient.firstLeadDb.toFixed(1)} dB`);
   });
   it('without a keying speed (no T/R stage) the transient is not simulated and a finding says why', () => {
     const noRelay = { ...club30m, stages: club30m.stages.filter((s) => !s.relay) };
