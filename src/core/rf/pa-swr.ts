@@ -138,6 +138,28 @@ export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { 
   };
 }
 
+/**
+ * Class E into the normalised load z: the simulated stage's figures at z over those at the design load, times the
+ * matched figures (so the entered efficiency and the matched model stay the reference).
+ */
+export function classEStressAt(
+  m: MatchedPoint, z: { re: number; im: number }, rdsOnRatio: number,
+): { stress: Stress; turnOnRatio: number } {
+  const ref = simulateClassE(1, 0, rdsOnRatio);
+  const e = simulateClassE(z.re, z.im, rdsOnRatio);
+  const outputW = (m.outputW * e.outputRatio) / ref.outputRatio;
+  const dcW = (m.dcInputW * e.dcInputRatio) / ref.dcInputRatio;
+  return {
+    turnOnRatio: e.turnOnRatio,
+    stress: {
+      drainPeakV: (m.drainPeakV * e.drainPeakRatio) / ref.drainPeakRatio,
+      peakDeviceA: (m.peakDeviceA * e.switchPeakRatio) / ref.switchPeakRatio,
+      dissipationW: Math.max(0, dcW - outputW) + m.biasW,
+      outputW,
+    },
+  };
+}
+
 const STEPS = 360;
 /** Class-E simulation points round the circle (every 15°). */
 const E_STEPS = 24;
@@ -160,16 +182,9 @@ export function swrStress(
     const zl = loadOnCircle(swr, phaseDeg);
     let p: Stress;
     if (ref) {
-      const e = simulateClassE(zl.re, zl.im, rdsOnRatio);
+      const e = classEStressAt(m, zl, rdsOnRatio);
       worstTurnOn = Math.max(worstTurnOn, e.turnOnRatio);
-      const outputW = (m.outputW * e.outputRatio) / ref.outputRatio;
-      const dcW = (m.dcInputW * e.dcInputRatio) / ref.dcInputRatio;
-      p = {
-        drainPeakV: (m.drainPeakV * e.drainPeakRatio) / ref.drainPeakRatio,
-        peakDeviceA: (m.peakDeviceA * e.switchPeakRatio) / ref.switchPeakRatio,
-        dissipationW: Math.max(0, dcW - outputW) + m.biasW,
-        outputW,
-      };
+      p = e.stress;
     } else {
       p = stressAt(cls, m, zl);
     }
