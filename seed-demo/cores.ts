@@ -32,8 +32,11 @@ export const SAMPLE_CORES: Record<'iron12' | 'iron17' | 'ferrite23', SampleCore>
 export function toroidEntry(id: string, s: SampleCore): CatalogCore {
   const c = s.core;
   const geo = toroidEffective(c.outerDiameterM!, c.innerDiameterM!, c.heightM!);
+  // stored as the boxes read them (nH/t², mm², mm to two decimals), so each value shows as typed on the page
+  const inUnit = (x: number, scale: number) => Number((x / scale).toFixed(2)) / Math.round(1 / scale);
   return {
-    id, name: s.name, alHPerTurn2: s.alHPerTurn2, aeM2: geo.aeM2, leM: geo.leM, innerDiameterM: c.innerDiameterM, windowAreaM2: null,
+    id, name: s.name, alHPerTurn2: inUnit(s.alHPerTurn2, 1e-9), aeM2: inUnit(geo.aeM2, 1e-6), leM: inUnit(geo.leM, 1e-3),
+    innerDiameterM: inUnit(c.innerDiameterM!, 1e-3), windowAreaM2: null,
     minFrequencyHz: c.minFrequencyHz!, maxFrequencyHz: c.maxFrequencyHz!, fluxLimitT: c.fluxLimitT!,
   };
 }
@@ -41,6 +44,6 @@ export function toroidEntry(id: string, s: SampleCore): CatalogCore {
 /** An invented binocular core for the club demo's output transformer (illustrative figures, not any maker's data). */
 export const CATALOG_BINOCULAR: CatalogCore = {
   id: 'core-club-bino14', name: 'Ferrite binocular core 14 × 8 × 12 mm, HF power material 1–30 MHz (AL 2000 nH/t²)',
-  alHPerTurn2: 2000e-9, aeM2: 25e-6, leM: 25e-3, innerDiameterM: null, windowAreaM2: 18e-6,
+  alHPerTurn2: 2000 / 1e9, aeM2: 25 / 1e6, leM: 25 / 1e3, innerDiameterM: null, windowAreaM2: 18 / 1e6,
   minFrequencyHz: 1e6, maxFrequencyHz: 30e6, fluxLimitT: 0.03,
 };
