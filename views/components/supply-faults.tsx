@@ -51,7 +51,7 @@ export const PrimaryFaultTable: FC<{ checks: PrimaryFaultCheck[] }> = ({ checks 
           <th scope="col">Winding</th>
           <th class="num">On the primary</th>
           <th class="num">× In</th>
-          <th scope="col">IEC 60127-2 sheet 3</th>
+          <th scope="col">IEC 60127-2 {checks[0].check.sheet}</th>
           <th scope="col">Verdict</th>
         </tr>
       </thead>
