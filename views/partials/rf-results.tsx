@@ -48,6 +48,16 @@ const PaRefused: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => (
   </div>
 );
 
+/** Which waveform gives the power, the budgeted current and the harmonics, in words. */
+function waveformText(pa: PaResult): string {
+  const w = pa.waveform;
+  if (!w) return 'unknown';
+  const band = `${fv(w.designOutputW, 'W')} at the design point, up to ${fv(w.bandMaxOutputW, 'W')} over the band`;
+  if (w.model === 'trapezoid') return `switched, ${fv(w.transitionTimeS, 's')} edges${w.transitionAssumed ? ' (assumed)' : ''}: ${band}`;
+  if (w.model === 'class-e-simulated') return `simulated class E, loaded Q ${w.classELoadedQ?.[1]} to ${w.classELoadedQ?.[0]}: ${band}`;
+  return `current pulse, edge of saturation to flat-topped: ${band}`;
+}
+
 const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused ? <PaRefused name={name} pa={pa} /> : (
   <div class="rf-pa">
     <h3>{name}: final amplifier</h3>
@@ -60,8 +70,11 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused
           ? ['Output match', `matching network presenting ${fv(pa.primaryOhm, 'Ω')} at the drain (no transformer)`]
           : ['Turns ratio (secondary : full primary)', `${pa.turnsRatio.toFixed(3)} (${pa.turnsRatioSource})${pa.idealTurnsRatio !== null ? `, exact for target ${pa.idealTurnsRatio.toFixed(3)}` : ''}`],
         ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
-        ['Efficiency', `${pct(pa.efficiency)} (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'})`],
-        ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} (bias idle included)`],
+        ['Efficiency', `${pct(pa.efficiency)} (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'}; the ideal waveform's ${pct(pa.waveform?.idealEfficiency ?? NaN)})`],
+        ['Waveform', waveformText(pa)],
+        ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} at the design point / ${fv(pa.keyDownCurrentA, 'A')} budgeted, the most over the waveform band (bias idle included)`],
+        ...(pa.swrKeyDownCurrentA !== null && pa.swrKeyDownCurrentA > pa.keyDownCurrentA
+          ? [['Key-down current at the worst SWR', `${fv(pa.swrKeyDownCurrentA, 'A')} (above the budgeted ${fv(pa.keyDownCurrentA, 'A')})`] as [string, string]] : []),
         ['Peak drain voltage / device current (design load)', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
         ['Dissipation', `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`],
         [(pa.thermal.sharedBy > 1 ? `Heatsink needed, one per ${pa.thermal.sharedBy} devices` : 'Heatsink needed per device') + ' (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
