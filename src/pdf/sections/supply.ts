@@ -6,6 +6,8 @@ import type { HeatBudget } from '../../core/power/heat-budget';
 import { GREY, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
 import { findingsList, fv, keyValues, notComputed } from './common';
+import { FUSE_SHEET_LABEL } from '../../core/power/fault';
+import { airWords } from '../../core/thermal/bridge';
 
 export function supplySection(l: Layout, supply: SupplyReport | null, heat: HeatBudget | null = null): void {
   l.heading('Power supply design');
@@ -15,14 +17,15 @@ export function supplySection(l: Layout, supply: SupplyReport | null, heat: Heat
     l.heading(`Transformer: ${t.name} (${t.construction})`, 2);
     const rows: Row[] = t.windings.map((w) => ({ cells: [w.windingName, fv(w.minimumRatedV, 'V'), fv(w.standardRatedV, 'V'), fv(w.ratedA, 'A'), fv(w.tuneUpRmsA, 'A'), fv(w.va, 'VA')] }));
     l.table([{ header: 'Winding', width: 0.3 }, { header: 'Min. rated', width: 0.14, align: 'right' }, { header: 'Standard', width: 0.14, align: 'right' }, { header: 'Rated current', width: 0.14, align: 'right' }, { header: 'Tune-up RMS', width: 0.14, align: 'right' }, { header: 'VA', width: 0.14, align: 'right' }], rows);
-    keyValues(l, [['Transformer VA', `${fv(t.thermalVA, 'VA')} at the thermal load → ${t.standardVA !== null ? fv(t.standardVA, 'VA') + ' standard' : 'beyond the standard list'} (${fv(t.tuneUpVA, 'VA')} with a continuous carrier)`], ['Primary current', fv(t.primaryA, 'A')],
+    const tuneUp = supply.choices?.transformerSizing === 'tune-up';
+    keyValues(l, [['Transformer VA', `${fv(t.thermalVA, 'VA')} ${tuneUp ? 'sized for tune-up (a continuous carrier)' : 'at the thermal load (CW duty)'} → ${t.standardVA !== null ? fv(t.standardVA, 'VA') + ' standard' : 'beyond the standard list'}${tuneUp ? '' : ` (${fv(t.tuneUpVA, 'VA')} with a continuous carrier)`}`], ['Primary current', fv(t.primaryA, 'A')],
       ...t.windings.filter((w) => w.paAtCheck).map((w): [string, string] => [`Recommended ${w.windingName}`, `${fv(w.paAtCheck!.railV, 'V')} at low mains, key-down: ${w.paAtCheck!.stageName} about ${fv(w.paAtCheck!.outputW, 'W')} (fitted winding ${fv(w.paAtCheck!.fittedOutputW, 'W')})`]),
       ...(t.crossRegulation?.rails ?? []).map((x): [string, string] => [`${x.railName}, together`, `${fv(x.keyDownTroughV, 'V')} key-down, ${fv(x.keyUpTroughV, 'V')} key-up at low mains with the primary shared (alone ${fv(x.aloneTroughV, 'V')})`])]);
   }
   if (supply.primary) {
     const f = supply.primary.fuse;
     keyValues(l, [
-      ['Primary fuse', `${f.ratedA !== null ? fv(f.ratedA, 'A') : 'beyond the series'} ${f.characteristic} (load ${fv(f.loadA, 'A')} × ${f.factor})${supply.primary.fittedA !== null ? `; fitted ${fv(supply.primary.fittedA, 'A')}` : ''}`],
+      ['Primary fuse', `${f.ratedA !== null ? fv(f.ratedA, 'A') : 'beyond the series'} ${f.characteristic} (load ${fv(f.loadA, 'A')} × ${f.factor})${supply.primary.fittedA !== null ? `; fitted ${fv(supply.primary.fittedA, 'A')}` : ''}; type ${FUSE_SHEET_LABEL[supply.choices?.primaryFuseSheet ?? 'T3']}`],
       ...supply.primary.faultChecks.map((c): [string, string] => [`${c.windingName} fault`, `${fv(c.reflectedA, 'A')} on the primary, ${c.check.multiple.toFixed(1)} × In: ${clearWords(c.check)}`]),
       ...(supply.primary.inrush ? [['Switch-on inrush', inrushWords(supply.primary.inrush)] as [string, string]] : []),
     ]);
@@ -42,6 +45,15 @@ export function supplySection(l: Layout, supply: SupplyReport | null, heat: Heat
   }
   l.heading('All supply findings', 2);
   findingsList(l, supply.findings);
+}
+
+/** The rectifier's dissipation, air, junction and the heatsink it needs, in words. */
+function bridgeWords(r: RectifiedRailReport): string {
+  const b = r.bridgeThermal!;
+  const t = b.result;
+  const tj = b.heatsinkFitted ? `${fv(t.junctionC, '°C')} on the ${fv(b.mount.thetaSaKPerW, 'K/W')} heatsink` : `${fv(t.freeAirJunctionC, '°C')} without a heatsink`;
+  const need = t.requiredThetaSaKPerW !== null ? `heatsink ≤ ${fv(t.requiredThetaSaKPerW, 'K/W')} meets it` : 'no heatsink meets it';
+  return `${fv(t.powerW, 'W')} ${b.basis === 'tune-up' ? 'continuous carrier' : 'CW duty'}, ${airWords(t.ambientC, b.inside)}; junction ${tj} (target ${fv(t.targetC, '°C')}); ${need}${b.assumed ? ' (assumed part)' : ''}`;
 }
 
 /** A fault check in words (IEC 60127-2 latest pre-arcing time against the time wanted). */
@@ -70,6 +82,7 @@ function rectified(l: Layout, r: RectifiedRailReport): void {
     ['Rail fuse', `${r.fuse.ratedA !== null ? fv(r.fuse.ratedA, 'A') : 'beyond the series'} ${r.fuse.characteristic} (load ${fv(r.fuse.loadA, 'A')} × ${r.fuse.factor})`],
     ['Bleeder', `${b.fittedOhm !== null ? `${fv(b.fittedOhm, 'Ω')} fitted: ${b.fittedTimeS !== null ? `below ${fv(b.safeV, 'V')} in ${fv(b.fittedTimeS, 's')}${b.fittedW !== null ? `, ${fv(b.fittedW, 'W')}${b.ratedW !== null ? ` of ${fv(b.ratedW, 'W')} rated` : ''}` : ''}` : `the rail starts below ${fv(b.thresholdV, 'V')}`}` : 'none fitted'}; suggested ${fv(b.suggestedOhm, 'Ω')} ${b.suggestedW !== null ? `(${fv(b.suggestedW, 'W')})` : ''}; stored ${fv(b.storedJ, 'J')}`],
     ...(r.winding ? ([['Winding', `${fv(r.winding.standardRatedV, 'V')} ${fv(r.winding.ratedA, 'A')} (peak ${fv(r.winding.peakA, 'A')})`]] as [string, string][]) : []),
+    ...(r.bridgeThermal ? ([['Rectifier heat', bridgeWords(r)]] as [string, string][]) : []),
   ], 110, 8.5);
   recommendations(l, r);
   const w = r.waveform;
@@ -101,6 +114,8 @@ function regulated(l: Layout, r: RegulatedRailReport): void {
   const kv: [string, string][] = [['Output', `${fv(r.outputV, 'V')}, dropout ${fv(r.dropoutV, 'V')}`], ['Dissipation', `${fv(r.thermalDissipationW, 'W')} thermal load, ${fv(r.tuneUpDissipationW, 'W')} tune-up`]];
   const rc = r.corners.find((c) => c.id === r.worstRippleCornerId);
   kv.push(['Output ripple', rc && rc.outputRipplePpV !== null ? `${fv(rc.outputRipplePpV, 'V')} p-p from ${fv(rc.inputRipplePpV, 'V')} p-p in (${r.rippleRejectionDb} dB, ${rc.label})${r.rippleTargetV !== null ? `; target ${fv(r.rippleTargetV, 'V')}` : ''}` : 'unknown: ripple rejection not stated']);
+  const ob = r.bleeder;
+  if (ob) kv.push(['Output bleeder', ob.fittedTimeS !== null ? `${ob.fittedOhm !== null ? `${fv(ob.fittedOhm, 'Ω')}: ` : ''}below ${fv(ob.safeV, 'V')} within about ${fv(ob.fittedTimeS, 's')} (upper bound)${ob.fittedW !== null ? `, ${fv(ob.fittedW, 'W')}${ob.ratedW !== null ? ` of ${fv(ob.ratedW, 'W')} rated` : ''}` : ''}` : `may stay at ${fv(ob.startV, 'V')}: ${ob.why}${ob.suggestedOhm !== null ? `; suggested ${fv(ob.suggestedOhm, 'Ω')}` : ''}`]);
   if (t) kv.push(['Heatsink', t.needsHeatsink ? `needed: at most ${fv(t.requiredThetaSaKPerW, 'K/W')}; junction ${t.junctionC !== null ? fv(t.junctionC, '°C') : 'no heatsink chosen'} (target ≤ ${fv(t.targetC, '°C')})` : `none needed (free air ${fv(t.freeAirJunctionC, '°C')})`]);
   keyValues(l, kv, 110, 8.5);
   recommendations(l, r);
