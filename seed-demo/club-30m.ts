@@ -144,7 +144,7 @@ const parts: Part[] = [
   { id: 'p-case', description: 'Aluminium enclosure 200 × 150 × 75 mm', category: 'enclosure', ratings: {}, offers: [offer('o31', S2, 'HR-ENC-2015', 'USD', [[1, 1895], [5, 1690]])] },
   { id: 'p-bnc', description: 'BNC chassis socket, 50 Ω', category: 'connector', ratings: {}, offers: [offer('o32', S1, 'NC-BNC-CH', 'USD', [[1, 135], [10, 110]]), offer('o33', S2, 'HR-0450', 'USD', [[1, 120]])] },
   { id: 'p-jack', description: 'Jack socket 3.5 mm stereo, panel mount', category: 'connector', ratings: {}, offers: [offer('o34', S1, 'NC-J35S', 'USD', [[1, 48], [25, 35]])] },
-  { id: 'p-wire', description: 'Enamelled copper wire 0.5 mm, 10 m reel', category: 'wire', ratings: {}, offers: [offer('o35', S1, 'NC-ECW05-10', 'USD', [[1, 395]])] },
+  { id: 'p-wire', description: 'Enamelled copper wire 0.8 mm, 10 m reel', category: 'wire', ratings: { diameterM: 0.8e-3, lengthM: 10 }, offers: [offer('o35', S1, 'NC-ECW08-10', 'USD', [[1, 395]])] },
   // candidates for the design roles (invented); the bleeder line is the deliberate mismatch: a 0.5 W part where the
   // supply page was told 1 W and the design needs 0.92 W (50 % loading); the 1 W part above is the fix
   { id: 'p-bleed-05', description: 'Resistor 2.2 kΩ 0.5 W metal film', category: 'resistor', ratings: { resistanceOhm: 2200, powerW: 0.5 }, offers: [offer('o36', S1, 'NC-R05-2K2', 'USD', [[1, 12], [100, 6]], 1, 1)] },
@@ -178,7 +178,7 @@ const bom: BomLine[] = [
   line('b19', 'st-pa', 'p-bino', 1, 'T2'),
   line('b20', 'st-lpf', 'p-toroid', 2, 'L1, L2', '', 'lpf-cores:st-lpf'),
   line('b21', 'st-lpf', 'p-cmica', 5, 'C10–C14', '', 'lpf-capacitors:st-lpf'),
-  line('b22', 'st-lpf', 'p-wire', 1, '', 'Shared with T2 windings'),
+  line('b22', 'st-lpf', 'p-wire', 1, '', 'Shared with T2 windings', 'lpf-wire:st-lpf'),
   line('b23', 'st-tr', 'p-relay', 1, 'K1', '', 'relay:st-tr'),
   line('b24', 'st-tr', 'p-bnc', 1, 'J2'),
   line('b25', null, 'p-pcb', 1, 'PCB1'),

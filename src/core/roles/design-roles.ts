@@ -9,27 +9,17 @@ import { CAP_VOLTAGE_MARGIN } from '../power/reservoir';
 import { railEstimateV } from '../role-defaults';
 import { formatValue } from '../units';
 import type { DesignRole, RoleRule } from './types';
+import { finite, groupValues, role } from './role-make';
+import { filterRoles } from './filter-roles';
 
 /** Capacitance may be this much under the design's value (nominal values compared). Common practice, no source. */
 export const CAPACITANCE_SLACK = 0.02;
 /** A winding's rated voltage within this fraction of the one designed with. Common practice, no published source. */
 export const WINDING_V_TOLERANCE = 0.05;
-/** A core's AL within this fraction of the one the filter was designed with. Common practice, no published source. */
-export const AL_TOLERANCE = 0.1;
 /** A relay coil's rated voltage within this fraction of its rail's. Common practice, no published source. */
 export const COIL_V_TOLERANCE = 0.1;
 
 const f = (v: number, unit: string) => formatValue(v, unit);
-const text = (rules: RoleRule[]) =>
-  rules
-    .map((r) =>
-      r.op === 'oneOf' ? `${r.label} ${r.options.join('/')}` : r.op === 'near' ? `${r.label} ${f(r.limit, r.unit)} ±${Math.round(r.tolerance * 100)} %` : `${r.label} ${r.op === 'min' ? '≥' : '≤'} ${f(r.limit, r.unit)}`,
-    )
-    .join(', ');
-const role = (id: string, label: string, category: DesignRole['category'], stageId: string | null, qtyPerRig: number, rules: RoleRule[], extra = ''): DesignRole => ({
-  id, label, category, stageId, qtyPerRig, rules, requirement: [text(rules), extra].filter(Boolean).join('; '),
-});
-const finite = (v: number | null | undefined): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0;
 
 function transformerRoles(project: Project, supply: SupplyReport): DesignRole[] {
   return supply.transformers.map((t) => {
@@ -86,11 +76,11 @@ function fuseRole(supply: SupplyReport, project: Project): DesignRole | null {
     positions.push({ where: `${r.railName} output`, ratedA: fitted ?? r.fuse.ratedA, type: r.fuse.characteristic });
   }
   if (!positions.length) return null;
-  const types = [...new Set(positions.map((p) => p.type))];
-  const ratings = [...new Set(positions.map((p) => p.ratedA))];
-  const rules: RoleRule[] = [{ key: 'type', label: 'Type', unit: '', op: 'oneOf', options: types, required: true, source: 'supply.fuse', why: types.length > 1 ? 'positions need different types: one line per type' : 'the characteristic every position needs' }];
-  if (ratings.length === 1 && finite(ratings[0]))
-    rules.push({ key: 'ratedA', label: 'Rating', unit: 'A', op: 'near', limit: ratings[0], tolerance: 0.001, required: false, source: 'supply.fuse', why: 'the rating of every position' });
+  const types = groupValues(positions.map((p) => ({ value: p.type, where: p.where })));
+  const ratings = groupValues(positions.filter((p) => finite(p.ratedA)).map((p) => ({ value: p.ratedA as number, where: p.where })));
+  const rules: RoleRule[] = [{ key: 'type', label: 'Type', unit: '', op: 'oneOf', options: types.map((t) => t.value), cover: types, required: true, source: 'supply.fuse', why: types.length > 1 ? 'positions need different types: one line per type' : 'the characteristic every position needs' }];
+  // one line per rating: each bound fuse must have one of the positions' ratings, and together they cover each
+  if (ratings.length) rules.push({ key: 'ratedA', label: 'Rating', unit: 'A', op: 'eachOf', values: ratings, tolerance: 0.001, required: false, source: 'supply.fuse', why: 'the rating of a position' });
   const where = positions.map((p) => `${p.where} ${p.ratedA === null ? 'beyond the series' : f(p.ratedA, 'A')} ${p.type}`).join(', ');
   return role('fuses', 'Fuses', 'fuse', null, positions.length, rules, `positions: ${where}`);
 }
@@ -99,10 +89,11 @@ function fuseRole(supply: SupplyReport, project: Project): DesignRole | null {
 function bleederRole(supply: SupplyReport): DesignRole | null {
   const rails = supply.rails.filter((r): r is RectifiedRailReport => r.kind === 'rectified' && r.bleeder.fittedOhm !== null);
   if (!rails.length) return null;
-  const ohms = [...new Set(rails.map((r) => r.bleeder.fittedOhm as number))];
+  const ohms = groupValues(rails.map((r) => ({ value: r.bleeder.fittedOhm as number, where: r.railName })));
   const maxW = Math.max(...rails.map((r) => r.bleeder.fittedW ?? 0));
   const rules: RoleRule[] = [];
-  if (ohms.length === 1) rules.push({ key: 'resistanceOhm', label: 'Resistance', unit: 'Ω', op: 'near', limit: ohms[0], tolerance: 0.05, required: true, source: 'supply.bleeder', why: 'the bleeder the discharge time was computed with' });
+  // each bound resistor has one rail's value, and together they cover every rail
+  rules.push({ key: 'resistanceOhm', label: 'Resistance', unit: 'Ω', op: 'eachOf', values: ohms, tolerance: 0.05, required: true, source: 'supply.bleeder', why: 'the bleeder the discharge time was computed with' });
   // Source: P = V²/R at the high-mains peak, rated at most 50 % loaded (supply.bleeder-power)
   if (maxW > 0) rules.push({ key: 'powerW', label: 'Power', unit: 'W', op: 'min', limit: maxW / BLEEDER_DERATING, hardLimit: maxW, required: true, source: 'supply.bleeder-power', why: 'the dissipation at the no-load peak, derated' });
   return role('bleeders', 'Bleeder resistors', 'resistor', null, rails.length, rules, ohms.length > 1 ? 'rails use different values: one line per value' : '');
@@ -126,24 +117,7 @@ function rfRoles(project: Project, rf: RfReport): DesignRole[] {
           { key: 'thetaSaKPerW', label: 'θsa', unit: 'K/W', op: 'max', limit: need, required: true, source: 'pa.thermal', why: 'the largest θsa keeping the junctions at 0.8 Tj,max' },
         ]));
     }
-    const d = s.lpf?.design;
-    if (s.lpf && d) {
-      const caps = d.elements.filter((e) => e.kind === 'shunt-capacitor');
-      const cMaxF = Math.max(0, ...caps.map((e) => e.builtValue));
-      // Source: capacitor current I = V ω C at the standing-wave voltage maximum (line.standing-wave), largest C
-      const rfA = (s.lpf.capacitorPeakV / Math.SQRT2) * 2 * Math.PI * rf.frequencyHz * cMaxF;
-      const values = caps.map((e) => e.capacitorPartsF.map((c) => f(c, 'F')).join(' ∥ ')).join('; ');
-      out.push(role(`lpf-capacitors:${s.stageId}`, `Filter capacitors, ${s.stageName}`, 'capacitor', s.stageId, caps.reduce((n, e) => n + e.capacitorPartsF.length, 0), [
-        { key: 'voltageV', label: 'Voltage', unit: 'V', op: 'min', limit: s.lpf.capacitorPeakV, required: true, source: 'line.standing-wave', why: 'the peak RF voltage at the worst SWR' },
-        { key: 'rfCurrentA', label: 'RF current', unit: 'A', op: 'min', limit: rfA, required: false, source: 'line.standing-wave', why: 'the RMS current of the largest shunt capacitor at that voltage' },
-        { key: 'dielectric', label: 'Dielectric', unit: '', op: 'oneOf', options: ['C0G', 'mica'], required: false, source: 'roles.rf-dielectric', why: 'a stable, low-loss dielectric' },
-      ], `values: ${values}`));
-      const inds = d.elements.filter((e) => e.kind === 'series-inductor');
-      if (inds.length)
-        out.push(role(`lpf-cores:${s.stageId}`, `Filter cores, ${s.stageName}`, 'core', s.stageId, inds.length, [
-          { key: 'alHPerTurn2', label: 'AL', unit: 'H', op: 'near', limit: d.coreAlHPerTurn2, tolerance: AL_TOLERANCE, required: true, source: 'roles.core-al', why: 'the AL the turns were computed with' },
-        ], `turns: ${inds.map((e) => e.turns).join(', ')}`));
-    }
+    if (stage) out.push(...filterRoles(stage, s, rf.frequencyHz));
     if (s.relay && stage?.relay) {
       const rl = s.relay;
       const coilRail = project.supply.rails.find((r) => r.id === stage.relay?.coilRailId);

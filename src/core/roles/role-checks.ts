@@ -4,8 +4,8 @@
 import type { BomLine, Part, Project } from '../model';
 import type { Finding, Severity } from '../findings';
 import { categoryOf, readRatings } from '../spec/parts-categories';
-import { formatValue } from '../units';
-import type { DesignRole, RoleRule, RoleStatus } from './types';
+import { f as formatValue } from './role-make';
+import type { DesignRole, GroupValue, RoleRule, RoleStatus } from './types';
 
 export interface RuleOutcome {
   rule: RoleRule;
@@ -15,6 +15,8 @@ export interface RuleOutcome {
 
 const sev = (o: RuleOutcome['severity'], required: boolean): Severity | null =>
   o === 'missing' ? (required ? 'caution' : null) : o;
+
+const nearValue = (v: number, target: number, tolerance: number) => Math.abs(v - target) <= tolerance * Math.abs(target);
 
 /** One rating of a part against one rule: 'missing' when the part does not state it. */
 export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings'>): RuleOutcome {
@@ -26,6 +28,7 @@ export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings
   }
   const v = read.numbers[rule.key];
   if (v === undefined) return { rule, severity: 'missing', value: null };
+  if (rule.op === 'eachOf') return { rule, severity: rule.values.some((g) => nearValue(v, g.value, rule.tolerance)) ? 'ok' : 'fail', value: v };
   if (rule.op === 'near') return { rule, severity: Math.abs(v - rule.limit) <= rule.tolerance * Math.abs(rule.limit) ? 'ok' : 'fail', value: v };
   if (rule.op === 'max') return { rule, severity: v <= rule.limit ? 'ok' : 'fail', value: v };
   if (v >= rule.limit) return { rule, severity: 'ok', value: v };
@@ -42,8 +45,15 @@ export function partMeetsRole(part: Pick<Part, 'category' | 'ratings'>, role: De
 }
 
 const show = (v: number | string, unit: string) => (typeof v === 'number' ? formatValue(v, unit) : v);
+const pct = (t: number) => `±${Math.round(t * 1000) / 10} %`;
 const limitText = (r: RoleRule) =>
-  r.op === 'oneOf' ? r.options.join(' or ') : r.op === 'near' ? `${formatValue(r.limit, r.unit)} ±${Math.round(r.tolerance * 1000) / 10} %` : `${r.op === 'min' ? 'at least' : 'at most'} ${formatValue(r.limit, r.unit)}`;
+  r.op === 'oneOf'
+    ? r.options.join(' or ')
+    : r.op === 'eachOf'
+      ? `one of ${r.values.map((g) => formatValue(g.value, r.unit)).join(', ')} (${pct(r.tolerance)})`
+      : r.op === 'near'
+        ? `${formatValue(r.limit, r.unit)} ${pct(r.tolerance)}`
+        : `${r.op === 'min' ? 'at least' : 'at most'} ${formatValue(r.limit, r.unit)}`;
 
 function lineFindings(role: DesignRole, part: Part): Finding[] {
   const subject = `${role.label}: ${part.description}`;
@@ -59,7 +69,7 @@ function lineFindings(role: DesignRole, part: Part): Finding[] {
     if (s === null) continue;
     const rule = `role.${role.category}.${r.key}`;
     const value = typeof o.value === 'number' ? o.value : null;
-    const limit = r.op === 'oneOf' ? null : r.limit;
+    const limit = r.op === 'oneOf' || r.op === 'eachOf' ? null : r.limit;
     const message =
       o.severity === 'missing'
         ? `Enter the part's ${r.label.toLowerCase()} (${r.key}) so it can be checked: the design needs ${limitText(r)} (${r.why}).`
@@ -67,6 +77,35 @@ function lineFindings(role: DesignRole, part: Part): Finding[] {
           ? `${r.label} ${show(o.value as number | string, r.unit)} meets ${limitText(r)} (${r.why}).`
           : `${r.label} ${show(o.value as number | string, r.unit)} does not meet ${limitText(r)} (${r.why}): choose a candidate that does.`;
     out.push({ severity: s, rule, subject, value, limit, unit: r.unit, source: o.severity === 'missing' ? 'roles.binding' : r.source, message });
+  }
+  return out;
+}
+
+/**
+ * A grouped role's bound lines together against each value it needs: the pieces per rig of the lines whose part has
+ * that value, against the count. Checked once any bound part states the rating (a generic line "values per the RF
+ * page" states none and is not counted against each value).
+ */
+function coverFindings(role: DesignRole, lines: readonly BomLine[], parts: ReadonlyMap<string, Part>): Finding[] {
+  const out: Finding[] = [];
+  const stated = lines.map((l) => ({ l, part: parts.get(l.partId) })).filter((x): x is { l: BomLine; part: Part } => x.part !== undefined);
+  for (const r of role.rules) {
+    const groups: GroupValue<number | string>[] | null = r.op === 'eachOf' ? [...r.values] : r.op === 'oneOf' && r.cover ? [...r.cover] : null;
+    if (groups === null || groups.length < 2) continue;
+    const values = stated.map(({ l, part }) => ({ qty: l.qtyPerRig, v: judgeRule(r, part).value }));
+    if (values.every((x) => x.v === null)) continue;
+    for (const g of groups) {
+      const matches = (v: number | string | null) =>
+        v !== null && (typeof g.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && nearValue(v, g.value, r.tolerance) : v === g.value);
+      const have = values.filter((x) => matches(x.v)).reduce((t, x) => t + x.qty, 0);
+      if (have >= g.count) continue;
+      const shown = typeof g.value === 'number' ? formatValue(g.value, r.unit) : g.value;
+      out.push({
+        severity: 'caution', rule: `role.${role.category}.${r.key}.cover`, subject: `${role.label}: ${shown}`, value: have, limit: g.count, unit: 'pieces',
+        source: 'roles.group-cover',
+        message: `The design needs ${g.count} × ${r.label.toLowerCase()} ${shown} (${g.where}); the bound lines give ${have}: bind a line with that ${r.label.toLowerCase()} for each value.`,
+      });
+    }
   }
   return out;
 }
@@ -96,6 +135,7 @@ export function checkRoles(project: Pick<Project, 'bom' | 'parts'>, roles: reado
       const part = parts.get(l.partId);
       return part ? lineFindings(role, part) : [];
     });
+    fs.push(...coverFindings(role, lines, parts));
     findings.push(...fs);
     statuses.push({ role, lineIds: lines.map((l) => l.id), state: worst(fs) });
   }

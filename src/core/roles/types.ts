@@ -6,12 +6,23 @@ import type { PartCategory } from '../spec/parts-categories';
 /**
  * One rating the role requires. 'min': the part's rating must be at least `limit` (below `hardLimit`, when given,
  * is a fail, between the two a caution); 'max': at most `limit`; 'near': within `tolerance` (fraction) of `limit`;
- * 'oneOf': a text rating from `options`.
+ * 'oneOf': a text rating from `options`; 'eachOf': a grouped role (fuses, bleeders, filter capacitors) needs several
+ * values, each line's part must be within `tolerance` of one of them, and the bound lines together must cover each
+ * value's count (pieces per rig). `cover` on 'oneOf' asks the same of text options (fuse types per position).
  */
+export interface GroupValue<T> {
+  value: T;
+  /** Pieces per rig the design needs of this value. */
+  count: number;
+  /** Where they go, for messages ("primary, PA rail output"). */
+  where: string;
+}
+
 export type RoleRule =
   | { key: string; label: string; unit: string; op: 'min' | 'max'; limit: number; hardLimit?: number; required: boolean; source: SourceKey; why: string }
   | { key: string; label: string; unit: string; op: 'near'; limit: number; tolerance: number; required: boolean; source: SourceKey; why: string }
-  | { key: string; label: string; unit: ''; op: 'oneOf'; options: readonly string[]; required: boolean; source: SourceKey; why: string };
+  | { key: string; label: string; unit: ''; op: 'oneOf'; options: readonly string[]; cover?: readonly GroupValue<string>[]; required: boolean; source: SourceKey; why: string }
+  | { key: string; label: string; unit: string; op: 'eachOf'; values: readonly GroupValue<number>[]; tolerance: number; required: boolean; source: SourceKey; why: string };
 
 export interface DesignRole {
   /** Stable id from the design's own ids, e.g. "reservoir:rail-pa", "pa-devices:st-pa". */

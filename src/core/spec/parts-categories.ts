@@ -17,6 +17,7 @@ export type PartCategory =
   | 'heatsink'
   | 'regulator'
   | 'core'
+  | 'wire'
   | 'other';
 
 /** A numeric rating: the field (unit, range) plus whether role checks need it (missing -> caution). */
@@ -44,6 +45,9 @@ const r = (key: string, f: NumberField): RatingField => ({ ...f, key, optional: 
 const A = (key: string, label: string, max = 1000) => r(key, num(label, 'A', U.A, 0, max, null, { exclusiveMin: true }));
 const V = (key: string, label: string, max = 100_000) => r(key, num(label, 'V', U.V, 0, max, null, { exclusiveMin: true }));
 const KW = (key: string, label: string) => r(key, num(label, 'K/W', U.KW, 0, 1000, null, { exclusiveMin: true }));
+const MM = { symbol: 'mm', scale: 1e-3 } as const;
+// Common practice, no published source: toroids for HF from 2 mm to 100 mm across (the filter form's own range)
+const coreMm = (key: string, label: string) => r(key, num(label, 'm', MM, 0.002, 0.1, null, { exclusiveMin: true }));
 
 export const PART_CATEGORIES: readonly CategoryDef[] = [
   {
@@ -53,6 +57,7 @@ export const PART_CATEGORIES: readonly CategoryDef[] = [
       V('voltageV', 'Rated voltage'),
       A('rippleA', 'Ripple current (RMS)'),
       A('rfCurrentA', 'RF current (RMS)'),
+      r('toleranceFraction', num('Tolerance', '%', U.pct, 0, 0.5, null)),
     ],
     choices: [{ key: 'dielectric', label: 'Dielectric', options: ['electrolytic', 'C0G', 'mica', 'film', 'X7R'] }],
   },
@@ -92,7 +97,20 @@ export const PART_CATEGORIES: readonly CategoryDef[] = [
     numbers: [V('dropoutV', 'Dropout', 100), A('maxCurrentA', 'Output current'), KW('thetaJcKPerW', 'θjc')],
     choices: [],
   },
-  { id: 'core', label: 'Core', aliases: ['toroid'], numbers: [r('alHPerTurn2', num('AL', 'H', U.nHt2, 0, 1e-3, null, { exclusiveMin: true }))], choices: [] },
+  {
+    id: 'core', label: 'Core', aliases: ['toroid'],
+    numbers: [
+      r('alHPerTurn2', num('AL', 'H', U.nHt2, 0, 1e-3, null, { exclusiveMin: true })),
+      coreMm('outerDiameterM', 'Outer diameter'), coreMm('innerDiameterM', 'Inner diameter'), coreMm('heightM', 'Height'),
+    ],
+    choices: [],
+  },
+  {
+    id: 'wire', label: 'Wire', aliases: ['enamelled wire', 'magnet wire'],
+    // the filter form's wire range (0.05-5 mm over the enamel); a reel of at most 10 km
+    numbers: [r('diameterM', num('Diameter over enamel', 'm', MM, 5e-5, 0.005, null, { exclusiveMin: true })), r('lengthM', num('Length', 'm', { symbol: 'm', scale: 1 }, 0, 10_000, null, { exclusiveMin: true }))],
+    choices: [],
+  },
   { id: 'other', label: 'Other', aliases: [], numbers: [], choices: [] },
 ];
 

@@ -1,0 +1,110 @@
+// Grouped roles (fuses, bleeders, filter capacitors) and the filter's cores and wire checked as ratings of bound
+// parts. Every expected figure is worked by hand beside its check; the club demo supplies only the design's own
+// values (turns, chosen capacitor values), and the arithmetic on them is written out here.
+import { describe, expect, it } from 'vitest';
+import { checkRoles, judgeRule, partMeetsRole, type DesignRole } from '../../../src/core/roles';
+import type { BomLine, Part } from '../../../src/core/model';
+import { evaluate } from '../../../src/core/evaluate';
+import { club30m } from '../../../seed-demo/club-30m';
+
+const fuse = (id: string, ratedA: number, type = 'T'): Part => ({ id, description: `fuse ${ratedA} A ${type}`, category: 'fuse', ratings: { ratedA, type }, offers: [] });
+const line = (id: string, partId: string, qtyPerRig: number): BomLine => ({ id, stageId: null, partId, qtyPerRig, refs: id, notes: '', roleId: 'fuses' });
+
+// three positions: primary 1 A T, a rail 400 mA T, another rail 2.5 A F
+const fuses: DesignRole = {
+  id: 'fuses', label: 'Fuses', category: 'fuse', stageId: null, qtyPerRig: 3, requirement: '',
+  rules: [
+    { key: 'type', label: 'Type', unit: '', op: 'oneOf', options: ['T', 'F'], cover: [{ value: 'T', count: 2, where: 'primary, rail A' }, { value: 'F', count: 1, where: 'rail B' }], required: true, source: 'supply.fuse', why: '' },
+    { key: 'ratedA', label: 'Rating', unit: 'A', op: 'eachOf', values: [{ value: 1, count: 1, where: 'primary' }, { value: 0.4, count: 1, where: 'rail A' }, { value: 2.5, count: 1, where: 'rail B' }], tolerance: 0.001, required: false, source: 'supply.fuse', why: '' },
+  ],
+};
+
+describe('grouped roles: one line per value', () => {
+  it('each bound part must have one of the values (within the tolerance)', () => {
+    const r = fuses.rules[1];
+    expect(judgeRule(r, fuse('a', 0.4)).severity).toBe('ok');
+    expect(judgeRule(r, fuse('a', 2.5)).severity).toBe('ok');
+    expect(judgeRule(r, fuse('a', 0.5)).severity).toBe('fail'); // 0.5 is none of 1, 0.4, 2.5
+    expect(partMeetsRole(fuse('a', 1), fuses)).toBe(true);
+    expect(partMeetsRole(fuse('a', 1.6), fuses)).toBe(false);
+  });
+
+  it('three lines, one per position: no finding short of ok', () => {
+    const parts = [fuse('f1', 1), fuse('f04', 0.4), fuse('f25', 2.5, 'F')];
+    const bom = [line('b1', 'f1', 1), line('b2', 'f04', 1), line('b3', 'f25', 1)];
+    const c = checkRoles({ parts, bom }, [fuses]);
+    expect(c.statuses[0].state).toBe('ok');
+    expect(c.findings.every((f) => f.severity === 'ok')).toBe(true);
+  });
+
+  it('values missing from the bound lines are cautions by value, with the count needed and bound', () => {
+    // 1 A T x 2 bound: 1 A covered (2 >= 1), 400 mA 0 of 1, 2.5 A 0 of 1; type F 0 of 1 (T 2 of 2 covered)
+    const c = checkRoles({ parts: [fuse('f1', 1)], bom: [line('b1', 'f1', 2)] }, [fuses]);
+    const cover = c.findings.filter((f) => f.rule.endsWith('.cover')).map((f) => [f.rule, f.subject, f.value, f.limit]);
+    expect(cover).toEqual([
+      ['role.fuse.type.cover', 'Fuses: F', 0, 1],
+      ['role.fuse.ratedA.cover', 'Fuses: 400 mA', 0, 1],
+      ['role.fuse.ratedA.cover', 'Fuses: 2.5 A', 0, 1],
+    ]);
+    expect(c.statuses[0].state).toBe('caution');
+  });
+
+  it('a generic line that states no rating is not counted against each value', () => {
+    const generic: Part = { id: 'g', description: 'fuses per the supply page', category: 'fuse', ratings: {}, offers: [] };
+    const c = checkRoles({ parts: [generic], bom: [line('b1', 'g', 3)] }, [fuses]);
+    expect(c.findings.some((f) => f.rule.endsWith('.cover'))).toBe(false);
+  });
+});
+
+describe('the club demo filter: capacitor values, cores and wire as ratings', () => {
+  const report = evaluate(club30m);
+  const roles = report.roles.list;
+  const design = report.rf.stages.find((s) => s.stageId === 'st-lpf')!.lpf!.design!;
+  const inds = design.elements.filter((e) => e.kind === 'series-inductor');
+  const turns = inds.map((e) => e.turns ?? 0);
+
+  it('the capacitor role asks for each chosen value as often as the design uses it, within the yield tolerance', () => {
+    const caps = roles.find((r) => r.id === 'lpf-capacitors:st-lpf')!;
+    const rule = caps.rules.find((r) => r.key === 'capacitanceF')!;
+    if (rule.op !== 'eachOf') throw new Error('expected eachOf');
+    const chosen = design.elements.filter((e) => e.kind === 'shunt-capacitor').flatMap((e) => e.capacitorPartsF);
+    expect(rule.values.reduce((n, g) => n + g.count, 0)).toBe(chosen.length);
+    expect(rule.tolerance).toBe(0.05); // the club's capacitor tolerance, 5 % (seed-demo/club-30m.ts)
+    // a 270 pF part with the design's 270 pF: ok; 300 pF is 11 % off every value near it: fail
+    const part = (c: number): Part => ({ id: 'x', description: '', category: 'capacitor', ratings: { capacitanceF: c }, offers: [] });
+    if (chosen.some((c) => Math.abs(c - 270e-12) < 1e-15)) {
+      expect(judgeRule(rule, part(270e-12)).severity).toBe('ok');
+      expect(judgeRule(rule, part(300e-12)).severity).toBe('fail');
+    }
+    const tol = caps.rules.find((r) => r.key === 'toleranceFraction')!;
+    expect(judgeRule(tol, { category: 'capacitor', ratings: { toleranceFraction: 0.1 } }).severity).toBe('fail'); // 10 % > 5 %
+  });
+
+  it('the core role: AL, the entered size, and the hole the turns need (one layer)', () => {
+    const cores = roles.find((r) => r.id === 'lpf-cores:st-lpf')!;
+    const hole = cores.rules.find((r) => r.label === 'Hole for the turns')!;
+    if (hole.op !== 'min') throw new Error('expected min');
+    // Source: one layer of N turns of d fits when N <= π (ID − d)/d (core.winding-fit): ID >= N d/π + d.
+    // Club: 0.8 mm wire, N = the most turns of one inductor (14 in the demo): 14 x 0.8/π + 0.8 = 4.365 mm.
+    const n = Math.max(...turns);
+    expect(hole.limit).toBeCloseTo((n * 0.8e-3) / Math.PI + 0.8e-3, 9);
+    expect(judgeRule(hole, { category: 'core', ratings: { innerDiameterM: 4e-3 } }).severity).toBe(n >= 12 ? 'fail' : 'ok');
+    const od = cores.rules.find((r) => r.key === 'outerDiameterM')!;
+    expect(judgeRule(od, { category: 'core', ratings: { outerDiameterM: 12.7e-3 } }).severity).toBe('ok');
+    expect(judgeRule(od, { category: 'core', ratings: { outerDiameterM: 17.5e-3 } }).severity).toBe('fail');
+  });
+
+  it('the wire role: diameter and the length of every turn round the core plus leads', () => {
+    const wire = roles.find((r) => r.id === 'lpf-wire:st-lpf')!;
+    const length = wire.rules.find((r) => r.key === 'lengthM')!;
+    if (length.op !== 'min') throw new Error('expected min');
+    // one turn round a 12.7 x 7.7 x 4.8 mm section: 2 x 4.8 + (12.7 − 7.7) = 14.6 mm; plus 50 mm of leads per inductor
+    const total = turns.reduce((a, b) => a + b, 0);
+    expect(length.limit).toBeCloseTo(total * 14.6e-3 + inds.length * 0.05, 9);
+    const diameter = wire.rules.find((r) => r.key === 'diameterM')!;
+    expect(judgeRule(diameter, { category: 'wire', ratings: { diameterM: 0.5e-3 } }).severity).toBe('fail'); // 0.5 vs 0.8 mm ±10 %
+    expect(judgeRule(diameter, { category: 'wire', ratings: { diameterM: 0.8e-3 } }).severity).toBe('ok');
+    // the demo's bound 0.8 mm, 10 m reel meets it
+    expect(report.roles.statuses.find((s) => s.role.id === 'lpf-wire:st-lpf')!.state).toBe('ok');
+  });
+});
