@@ -83,6 +83,8 @@ function supplyLines(report: EvaluationReport): string[] {
       const b = r.bleeder;
       if (b.fittedOhm !== null) out.push(`    bleeder ${formatValue(b.fittedOhm, 'Ω')}: below ${formatValue(b.safeV, 'V')} in ${formatValue(b.fittedTimeS ?? 0, 's')}, ${formatValue(b.fittedW ?? 0, 'W')} at ${formatValue(b.startV, 'V')}${b.ratedW !== null ? ` (rated ${formatValue(b.ratedW, 'W')})` : ''}`);
       else out.push(`    no bleeder fitted (reservoir up to ${formatValue(b.startV, 'V')})`);
+      const bt = r.bridgeThermal;
+      if (bt) out.push(`    rectifier ${formatValue(bt.result.powerW, 'W')} (${bt.basis === 'tune-up' ? 'continuous carrier' : 'CW duty'}) at ${formatValue(bt.result.ambientC, '°C')} ${bt.inside ? 'inside the box' : 'room'}: junction ${formatValue(bt.heatsinkFitted ? bt.result.junctionC! : bt.result.freeAirJunctionC, '°C')} ${bt.heatsinkFitted ? 'on its heatsink' : 'without heatsink'} (target ${formatValue(bt.result.targetC, '°C')})${bt.result.requiredThetaSaKPerW !== null ? `, heatsink <= ${formatValue(bt.result.requiredThetaSaKPerW, 'K/W')} meets it` : ''}`);
       const wf = r.windingFuse;
       if (wf?.check) {
         const clear = wf.check.latestS === null ? 'not cleared (below 2.1 x In)' : `cleared within ${formatValue(wf.check.latestS, 's')} (IEC 60127-2 ${wf.check.sheet})`;
@@ -99,6 +101,8 @@ function supplyLines(report: EvaluationReport): string[] {
       const rc = r.corners.find((c) => c.id === r.worstRippleCornerId);
       if (rc && rc.outputRipplePpV !== null) out.push(`    ripple ${formatValue(rc.inputRipplePpV, 'V')} p-p in, ${formatValue(rc.outputRipplePpV, 'V')} p-p out (${r.rippleRejectionDb} dB, ${rc.label})${r.rippleTargetV !== null ? `, target ${formatValue(r.rippleTargetV, 'V')}` : ''}`);
       else out.push(`    ripple at the output unknown: ripple rejection not stated`);
+      const ob = r.bleeder;
+      if (ob) out.push(ob.fittedTimeS !== null ? `    output below ${formatValue(ob.safeV, 'V')} within ${formatValue(ob.fittedTimeS, 's')} after switch-off (upper bound)${ob.fittedW !== null ? `, bleeder ${formatValue(ob.fittedW, 'W')}` : ''}` : `    output may stay charged: ${ob.why}${ob.suggestedOhm !== null ? `; suggested bleeder ${formatValue(ob.suggestedOhm, 'Ω')}` : ''}`);
     } else {
       out.push(`  ${r.railName}: runtime about ${(r.runtimeS / 3600).toFixed(1)} h, end of discharge under load ${formatValue(r.loadedEndV, 'V')}`);
       if (r.curve) out.push(`    ${r.curve.chemistry} curve (${r.curve.cells} cells): plateau ${formatValue(r.curve.plateauV, 'V')} (${formatValue(r.curve.loadedPlateauV, 'V')} under key-down), loads run to ${formatValue(r.curve.stopV, 'V')}: ${Math.round(r.curve.usedFraction * 100)} % of capacity, about ${(r.curve.runtimeS / 3600).toFixed(1)} h`);
@@ -106,13 +110,15 @@ function supplyLines(report: EvaluationReport): string[] {
     }
   }
   for (const t of s.transformers) {
-    out.push(`  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard (sized for CW; ${t.tuneUpVA.toFixed(0)} VA with a continuous carrier), primary ${formatValue(t.primaryA, 'A')}`);
+    out.push(s.choices?.transformerSizing === 'tune-up'
+      ? `  ${t.name}: ${t.thermalVA.toFixed(0)} VA with a continuous carrier -> ${t.standardVA ?? '?'} VA standard (sized for tune-up), primary ${formatValue(t.primaryA, 'A')}`
+      : `  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard (sized for CW; ${t.tuneUpVA.toFixed(0)} VA with a continuous carrier), primary ${formatValue(t.primaryA, 'A')}`);
     for (const w of t.windings) if (w.paAtCheck) out.push(`    recommended ${w.windingName}: ${formatValue(w.paAtCheck.railV, 'V')} at low mains, key-down; ${w.paAtCheck.stageName} about ${formatValue(w.paAtCheck.outputW, 'W')} (fitted: ${formatValue(w.paAtCheck.fittedOutputW, 'W')})`);
     for (const x of t.crossRegulation?.rails ?? []) out.push(`    together (shared primary), low mains: ${x.railName} ${formatValue(x.keyDownTroughV, 'V')} key-down, ${formatValue(x.keyUpTroughV, 'V')} key-up (alone ${formatValue(x.aloneTroughV, 'V')})`);
   }
   const h = report.heat;
   if (h) out.push(`  Heat inside: ${formatValue(h.totalW, 'W')} in CW use${h.riseK !== null ? `, rise ${formatValue(h.riseK, 'K')} (about ${formatValue(h.insideC, '°C')} inside)` : ' (enclosure not entered)'}`);
-  if (s.primary?.fuse.ratedA) out.push(`  Primary fuse: ${s.primary.fuse.characteristic}${formatValue(s.primary.fuse.ratedA, 'A')} (time-lag, IEC 60127 series)`);
+  if (s.primary?.fuse.ratedA) out.push(`  Primary fuse: ${s.primary.fuse.characteristic}${formatValue(s.primary.fuse.ratedA, 'A')} (IEC 60127-2 ${s.choices?.primaryFuseSheet ?? 'T3'}, IEC 60127 series)`);
   for (const f of s.primary?.faultChecks ?? []) {
     out.push(`    ${f.windingName} fault reflected to the primary: ${formatValue(f.reflectedA, 'A')}, ${f.check.multiple.toFixed(1)} x In: ${f.check.clears ? 'cleared' : 'not cleared'} within ${f.check.allowedS} s`);
   }
