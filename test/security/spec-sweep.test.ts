@@ -1,4 +1,4 @@
-// Every field of every input spec (src/core/spec, ALL_SPECS) against bad input: each refused form text names the
+// Every field of every input spec (src/core/spec, ALL_SPECS and FORM_ONLY_SPECS) against bad input: each refused form text names the
 // field, each refused stored value names it too. Generated from the specs: a spec added later is swept unchanged.
 // Expected behaviour is the brief's rule (every bad input gets a message saying what and where); no numbers here
 // come from running the program.
@@ -7,12 +7,15 @@ import { ALL_SPECS, defaults, formValues, parseForm, relaySpec, validate } from 
 import { formName, type Spec } from '../../src/core/spec/field';
 import { badStored, badTexts } from '../helpers/spec-bad-values';
 import { getPath, setPath } from '../../src/core/spec/derive';
+import { FORM_ONLY_SPECS } from '../../src/core/spec/form-only';
 
 /** A valid stored object: the spec's defaults with references pointing somewhere. */
 function validObject(spec: Spec): Record<string, unknown> {
   const v = defaults(spec);
   const fields = spec.view ? spec.view.from(v) : v;
   for (const [k, f] of Object.entries(spec.fields)) if (f.type === 'ref' && !f.optional) setPath(fields, k, 'some-id');
+  // a required text whose default is empty (the new project's name) gets a name
+  for (const [k, f] of Object.entries(spec.fields)) if (f.type === 'text' && f.required && getPath(fields, k) === '') setPath(fields, k, 'A name');
   return spec.view ? spec.view.to(fields) : fields;
 }
 
@@ -25,7 +28,8 @@ describe('relay coil modes (stored as a list, edited as three checkboxes)', () =
   });
 });
 
-describe.each(ALL_SPECS.map((s) => [s.name, s] as const))('spec %s', (_name, spec) => {
+// the forms that store nothing (new project, sweeps) are swept with the stored objects' specs
+describe.each([...ALL_SPECS, ...FORM_ONLY_SPECS].map((s) => [s.name, s] as const))('spec %s', (_name, spec) => {
   it('its defaults are valid and survive form text and back unchanged', () => {
     const obj = validObject(spec);
     expect(validate(spec, obj)).toEqual([]);

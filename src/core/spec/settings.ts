@@ -159,6 +159,8 @@ export const newProjectSpec = defineSpec({
     const key = String(v.template ?? '');
     if (key === '') return [];
     const info = TEMPLATE_INFO[key as TemplateKey];
+    // an unknown template is the template field's own error (not an option); nothing to compare the supply with
+    if (!info) return [];
     const battery = v.mainsPreset === 'battery';
     if (info.mains && battery)
       return [{ field: 'mainsPreset', label: 'Supply', message: `Supply: the "${info.label}" template runs from the mains; choose a mains voltage (or the battery template)` }];

@@ -67,7 +67,8 @@ function sweepSpec(p: SweepParameter): Spec {
     },
     refine: (v) => {
       const errors: FieldError[] = [];
-      if (typeof v.from === 'number' && typeof v.to === 'number') {
+      // a bad stored value (NaN, Infinity) is its own field's error; the range check needs two finite ends
+      if (typeof v.from === 'number' && typeof v.to === 'number' && Number.isFinite(v.from) && Number.isFinite(v.to)) {
         if (!(v.to > v.from)) errors.push({ field: 'to', label: `To (${BASE[p].name})`, message: `To (${BASE[p].name}) must be above From` });
         // Source: Matthaei, Young & Jones (1964) §4.05: only odd orders sit between two equal terminations
         else if (p === 'lpfOrder' && oddBetween(v.from, v.to).length < 2)
