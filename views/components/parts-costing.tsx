@@ -6,6 +6,7 @@ import { FormErrors, type FieldState } from './fields';
 import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
 import { Version, hx } from './supply-transformer';
+import { exchangeRateHint } from '../../src/core/cost/rate-text';
 
 // Form text of stored values, from the specs (src/core/spec/costing.ts, parts.ts).
 export const costingValues = (p: Project): Record<string, string> => formValues(costingSpec, p.costing);
@@ -33,7 +34,7 @@ export const CostingCard: FC<{ project: Project; failed?: Failed }> = ({ project
         <div class="row">
           <SpecField spec={costingSpec} k="attritionFraction" idp="cs" state={state} size={5} />
           <SpecField spec={costingSpec} k="sparesPerLine" idp="cs" state={state} size={5} />
-          <SpecField spec={costingSpec} k="exchangeRates" idp="cs" state={state} rows={3} size={18} label={`Exchange rates (${project.currency} per 1 unit)`} />
+          <SpecField spec={costingSpec} k="exchangeRates" idp="cs" state={state} rows={3} size={18} label={`Exchange rates into ${project.currency}`} hint={exchangeRateHint(project.currency)} />
           <button type="submit">Save</button>
         </div>
         <p class="hint">

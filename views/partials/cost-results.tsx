@@ -3,6 +3,7 @@
 // Renders only what costProject computed: no arithmetic here.
 import type { FC } from 'hono/jsx';
 import { formatMoney } from '../../src/core/cost/money';
+import { rateInWords } from '../../src/core/cost/rate-text';
 import type { CostLine, CostReport, LineFlag } from '../../src/core/cost/report-types';
 
 const FLAG_LABELS: Record<LineFlag, string> = {
@@ -44,7 +45,7 @@ const LineRow: FC<{ line: CostLine; currency: string }> = ({ line, currency }) =
     <td class="num" data-label="Unit price">
       {line.unitPriceCents === null || line.offerCurrency === null ? '–' : formatMoney(line.unitPriceCents, line.offerCurrency)}
       {line.offerCurrency !== null && line.offerCurrency !== currency && line.exchangeRate !== null ? (
-        <span class="sub">× {line.exchangeRate}</span>
+        <span class="sub">at {rateInWords(line.offerCurrency, line.exchangeRate, currency)}</span>
       ) : null}
     </td>
     <td class="num" data-label="Line cost">{formatMoney(line.lineCostCents, currency)}</td>
