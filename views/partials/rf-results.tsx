@@ -298,7 +298,10 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
         Rule: {h.ruleTitle}
         {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')}. Each
         harmonic is a band from the PA's class (best to worst); compliance is judged on the worst end, and anything below{' '}
-        {CONSTRUCTION_FLOOR_DBC} dBc at the antenna is limited by construction.
+        {CONSTRUCTION_FLOOR_DBC} dBc at the antenna is limited by construction. Filter rejection (relative to the
+        fundamental) {h.rows[0] && h.rows[0].sourceBasis !== '50 Ω'
+          ? <>from the PA's own source at each harmonic: <span data-source-basis>{h.rows[0].sourceBasis}</span>; the 50 Ω figure below it for comparison.</>
+          : 'between 50 Ω terminations.'}
       </p>
       <table class="grid harmonics">
         <thead>
@@ -320,7 +323,10 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
               <td class="num">{x.n}</td>
               <td class="num">{fv(x.frequencyHz, 'Hz')}</td>
               <td class="num">{band(x.paLevelBestDbc, x.paLevelDbc, false, false)}<span class="sub">{BASIS_WORDS[x.paLevelBasis]}</span></td>
-              <td class="num">{fv(x.filterAttenuationDb, 'dB')}</td>
+              <td class="num">
+                {fv(x.filterAttenuationDb, 'dB')}
+                {x.filterAttenuation50Db !== null && x.sourceBasis !== '50 Ω' ? <span class="sub">50 Ω: {fv(x.filterAttenuation50Db, 'dB')}</span> : null}
+              </td>
               <td class="num">{fv(x.worstFilterAttenuationDb, 'dB')}</td>
               <td class="num">{band(x.predictedBestDbc, x.predictedDbc, x.bestLimitedByConstruction, x.limitedByConstruction)}</td>
               <td class="num">{fv(x.marginDb, 'dB')}</td>

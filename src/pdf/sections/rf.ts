@@ -143,6 +143,8 @@ function harmonics(l: Layout, rf: RfReport): void {
   }));
   l.table([{ header: 'n', width: 0.05 }, { header: 'Frequency', width: 0.13, align: 'right' }, { header: 'At PA (worst)', width: 0.13, align: 'right' }, { header: 'Filter', width: 0.11, align: 'right' }, { header: 'Best end', width: 0.14, align: 'right' }, { header: 'Worst end', width: 0.14, align: 'right' }, { header: 'Tolerances', width: 0.16, align: 'right' }, { header: 'Margin', width: 0.14, align: 'right' }], rows);
   l.text(`Each harmonic at the antenna is a band from the PA's class (best to worst end); compliance is judged on the worst end. "by construction": below ${CONSTRUCTION_FLOOR_DBC} dBc, where the build, not the filter, sets the level.`, { sizePt: 8, color: GREY });
+  const basis = h.rows[0]?.sourceBasis;
+  if (basis) l.text(basis === '50 Ω' ? 'Filter rejection between 50 Ω terminations.' : `Filter rejection from the PA's own source at each harmonic: ${basis} (between 50 Ω terminations: ${h.rows.map((x) => `${x.n}f ${fv(x.filterAttenuation50Db, 'dB')}`).join(', ')}).`, { sizePt: 8, color: GREY });
   void ORANGE;
 }
 
