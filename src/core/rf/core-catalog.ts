@@ -5,6 +5,8 @@ import type { Finding } from '../findings';
 import type { CatalogCore, LpfParams, PaParams, Project } from '../model';
 import { bandOf } from './bands';
 import { peakFluxDensityT, singleLayerTurns, toroidEffective } from './cores';
+import { coreSpec } from '../spec/cores';
+import { validate } from '../spec/derive';
 
 /** A core as the checks need it, whichever way it was given (SI; null = not given). */
 export interface WoundCore {
@@ -22,8 +24,11 @@ export interface WoundCore {
   from: 'catalog' | 'entered';
 }
 
-export const findCore = (p: Project, id: string | null | undefined): CatalogCore | null =>
-  (id ? p.cores?.find((c) => c.id === id) : undefined) ?? null;
+/** The catalog core `id`, or null when there is none or its stored data fails its spec (a fail finding names it). */
+export function findCore(p: Project, id: string | null | undefined): CatalogCore | null {
+  const c = id ? p.cores?.find((x) => x.id === id) : undefined;
+  return c && validate(coreSpec, c).length === 0 ? c : null;
+}
 
 export function fromCatalog(c: CatalogCore, wireDiameterM: number | null): WoundCore {
   const { name, alHPerTurn2, aeM2, leM, innerDiameterM, windowAreaM2, fluxLimitT, minFrequencyHz, maxFrequencyHz } = c;
@@ -94,7 +99,7 @@ export function checkOutputTransformer(
   const c = findCore(project, pa.outputCoreId);
   if (!c) {
     findings.push({ severity: 'fail', rule: 'core.missing', subject, value: null, limit: null, unit: '', source: 'design.consistency',
-      message: 'The output transformer core is not in the project’s core catalog (deleted?): choose another on the PA form.' });
+      message: 'The output transformer core is not in the project’s core catalog (deleted?) or its data there is refused: choose another on the PA form or correct the core.' });
     return { check: null, findings };
   }
   if (!(primaryOhm > 0) || !(highestOutputW > 0) || !(project.frequencyHz > 0)) return { check: null, findings };

@@ -82,7 +82,7 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   f.push(...real.findings);
   if (p.coreId && !core) {
     f.push({ severity: 'fail', rule: 'core.missing', subject: s, value: null, limit: null, unit: '', source: 'design.consistency',
-      message: 'The filter’s core is not in the project’s core catalog (deleted?): choose another on the filter form; the flux is not checked.' });
+      message: 'The filter’s core is not in the project’s core catalog (deleted?) or its data there is refused: choose another on the filter form or correct the core; the flux is not checked.' });
   }
   return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW, realisation: real.realisation }, findings: f };
 }

@@ -131,6 +131,7 @@ export function classEShuntCapacitor(drainOhm: number, frequencyHz: number, coss
   const maxFrequencyHz = cossF > 0 ? CLASS_E_SHUNT / (2 * Math.PI * drainOhm * cossF) : null;
   const extra = neededF - cossF;
   if (!(extra > 0)) return { neededF, cossF, addPartsF: [], addF: 0, maxFrequencyHz };
-  const snap = snapCapacitance(extra, series, true);
+  // one standard part (a pair would add a trimmer-sized crumb here; the part is trimmed on test anyway)
+  const snap = snapCapacitance(extra, series, false);
   return { neededF, cossF, addPartsF: snap.parts, addF: snap.total, maxFrequencyHz };
 }

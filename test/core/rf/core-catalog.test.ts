@@ -113,3 +113,13 @@ describe('filter capacitors’ RF current', () => {
     expect(realiseLpf(d.value, null, 100, 1, 'LPF').findings.some((x) => x.rule === 'lpf.capacitor-current')).toBe(false);
   });
 });
+
+describe('a catalog core with refused data is not used', () => {
+  it('the output transformer check says so instead of computing from a bad value', () => {
+    const bad = { ...core, aeM2: -1 } as CatalogCore;
+    const pa = { ...paParams(), outputCoreId: 'c1', outputPrimaryTurns: 4 };
+    const r = checkOutputTransformer({ ...project(3.55e6), cores: [bad] }, pa, 50, 2, 1, 'PA');
+    expect(r.check).toBeNull();
+    expect(r.findings.map((f) => [f.severity, f.rule])).toEqual([['fail', 'core.missing']]);
+  });
+});
