@@ -11,7 +11,7 @@ import type {
 } from '../../src/core/power/report-types';
 import { formatValue as fv } from '../../src/core/units';
 import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
-import { KeyingTransientBlock } from '../components/supply-keying';
+import { KeyingTransientBlock, LoadModelDetails } from '../components/supply-keying';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
 import { BleederLine } from '../components/supply-bleeder';
 import { BridgeLine, RegulatedBleederLine, primaryTypeWords, sizedForTuneUp } from '../components/supply-thermal';
@@ -107,7 +107,7 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
     </table>
     </AllCorners>
     <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
-    {rail.keyingTransient ? <KeyingTransientBlock rail={rail} /> : null}
+    {rail.keyingTransient ? <KeyingTransientBlock rail={rail} /> : rail.loadModel ? <LoadModelDetails model={rail.loadModel} /> : null}
     {rail.windingFuse ? <WindingFuseTable wf={rail.windingFuse} /> : null}
     <BleederLine b={rail.bleeder} />
     {rail.bridgeThermal ? <BridgeLine b={rail.bridgeThermal} /> : null}

@@ -140,13 +140,15 @@ export function projectWpm(project: Project): { wpm: number; from: string } | nu
 
 const v2 = (x: number) => `${x.toFixed(1)} V`;
 
-/** Attach the keying transient (and the rail's load model) to every rectified rail feeding a PA, with its finding. */
+/** Attach every rail's load model, and the keying transient to every rectified rail feeding a PA, with its finding. */
 export function withKeyingTransient(supply: SupplyReport | null, project: Project, budget: BudgetReport, rf: RfReport): SupplyReport | null {
-  if (!supply || !project.mains) return supply;
+  if (!supply) return supply;
   const speed = projectWpm(project);
   const added: Finding[] = [];
   const pas: PaOperatingPoint[] = rf.stages.flatMap((st) => (st.pa ? [{ stageId: st.stageId, railV: st.pa.railV, outputW: st.pa.outputW, saturationV: st.pa.saturationV, efficiency: st.pa.efficiency, keyDownCurrentA: st.pa.keyDownCurrentA, refused: st.pa.refused }] : []));
-  const rails = supply.rails.map((r) => {
+  const rails = supply.rails.map((r0) => {
+    // every rail carries its load model; the rectified rails feeding a PA are keyed below
+    const r = { ...r0, loadModel: railLoadModel(project, budget, r0.railId, pas) };
     if (r.kind !== 'rectified') return r;
     const stage = project.stages.find((s) => s.pa && s.pa.railId === r.railId);
     const railIn = project.supply.rails.find((x): x is RectifiedRail => x.kind === 'rectified' && x.id === r.railId);
@@ -154,7 +156,8 @@ export function withKeyingTransient(supply: SupplyReport | null, project: Projec
     const winding = transformer?.windings.find((w) => w.id === railIn?.windingId);
     if (!stage || !railIn || !transformer || !winding) return r;
     const base = { rule: 'supply.keying-transient', subject: r.railName, unit: 'dB', source: 'supply.keying-transient' as const };
-    const model = railLoadModel(project, budget, r.railId, pas);
+    const model = r.loadModel;
+    if (!project.mains) return r;
     if (!speed || !model) {
       const why = !speed ? 'no keying speed is entered (it is on the T/R relay stage)' : "a load on the rail or the PA's operating point is unknown";
       const f: Finding = { ...base, severity: 'ok', value: null, limit: null, message: `The keying transient of ${r.railName} is not simulated: ${why}.` };

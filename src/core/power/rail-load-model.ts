@@ -135,7 +135,8 @@ export function railLoadModel(project: Project, budget: BudgetReport, railId: st
     if (modes.some((m) => !Number.isFinite(l.currentA[m]))) return null;
     out.keyUp.constantA += l.currentA.keyUp;
     out.keyDown.constantA += l.currentA.keyDown;
-    parts.push({ name: l.stageName, law: 'constant current', keyUpA: l.currentA.keyUp, keyDownA: l.currentA.keyDown });
+    // a computed load that is not the PA is a relay coil (evaluate()'s computed loads are those two)
+    parts.push({ name: l.computed ? `${l.stageName} (relay coil)` : l.stageName, law: 'constant current', keyUpA: l.currentA.keyUp, keyDownA: l.currentA.keyDown });
   }
   const children = project.supply.rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === railId);
   for (const c of children) {

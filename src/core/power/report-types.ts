@@ -10,6 +10,7 @@ import type { BatteryCurveResult } from './battery-curve';
 import type { InrushReport } from './inrush';
 import type { CrossRegulation } from './cross-regulation';
 import type { KeyingTransient } from './keying-transient';
+import type { RailLoadModel } from './rail-load-model';
 import type { BridgeThermal } from '../thermal/bridge';
 import type { RegulatedBleederReport } from './regulated-bleeder';
 import type { SupplyChoices } from '../spec/supply-choices';
@@ -245,6 +246,8 @@ interface RailBase {
   /** Findings, most severe first. */
   findings: Finding[];
   recommendations: Recommendation[];
+  /** Its loads and how each follows the rail voltage (null: a load is unknown; absent before the RF model ran). */
+  loadModel?: RailLoadModel | null;
 }
 
 export interface RectifiedRailReport extends RailBase {

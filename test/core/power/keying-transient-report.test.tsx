@@ -42,6 +42,18 @@ describe('keying transient in the evaluation JSON', () => {
     expect(m.keyDown.pa.saturationV).toBe(1);
     expect(m.parts.map((p: { law: string }) => p.law).sort()).toEqual(['PA load line', 'constant current']);
   });
+  it('every rail carries its load model: a linear regulator reflects its loads as a constant current on its raw rail', () => {
+    // Source: series-pass regulator, I_in = I_out + I_q (regulator datasheets). The 13.8 V rail's entered loads from the
+    // demo data, key-up: 12 + 18 + 60 + 4 + 12 mA and the 36 mA relay coil = 142 mA; key-down with the driver at
+    // 160 mA: 242 mA. Its regulator's 5.2 mA quiescent current added: 147.2 mA and 247.2 mA on the raw rail.
+    const sig = json.supply.rails.find((r: { railId: string }) => r.railId === 'rail-13v8').loadModel;
+    expect(sig.keyUp.constantA).toBeCloseTo(0.142, 12);
+    expect(sig.keyDown.constantA).toBeCloseTo(0.242, 12);
+    expect(sig.parts.some((p: { name: string }) => p.name === 'T/R relay and sequencer (relay coil)')).toBe(true);
+    expect(rawRail.loadModel.keyUp.constantA).toBeCloseTo(0.1472, 12);
+    expect(rawRail.loadModel.keyDown.constantA).toBeCloseTo(0.2472, 12);
+    expect(rawRail.loadModel.parts).toEqual([{ name: '13.8 V signal rail', law: 'constant current', keyUpA: expect.closeTo(0.1472, 12), keyDownA: expect.closeTo(0.2472, 12) }]);
+  });
   it('a finding per PA rail, with the registry source; no transient on a rail without a PA', () => {
     const f = paRail.findings.find((x: { rule: string }) => x.rule === 'supply.keying-transient');
     expect(f.sourceKey).toBe('supply.keying-transient');
