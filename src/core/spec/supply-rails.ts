@@ -170,7 +170,7 @@ export const regulatedSpec = defineSpec({
       example: '1',
     }),
     outputF: optNum('Output capacitance', 'F', U.uF, 0, 10, null, { form: 'outputC', exclusiveMin: true, help: 'all capacitors on the output; empty = not entered', example: '100' }),
-    bleederOhm: optNum('Output bleeder', 'Ω', U.ohm, 0, 1e9, null, { form: 'outBleeder', exclusiveMin: true, help: 'empty = none fitted', example: '2k2' }),
+    bleederOhm: optNum('Output bleeder', 'Ω', U.ohm, 0, 1e9, null, { form: 'outBleeder', exclusiveMin: true, help: 'empty = none fitted', example: '2200' }),
     bleederRatedW: optNum('Output bleeder rating', 'W', U.W, 0, 1000, null, { form: 'outBleederW', exclusiveMin: true, help: 'empty = not stated', example: '0.25' }),
   },
   refine: (v) => {
