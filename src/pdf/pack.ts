@@ -29,9 +29,9 @@ export async function buildPackWithInfo(project: Project, report: PackReport, op
   cover(l, project, report, opts);
   let sheets = 0;
   l.newPage();
-  if (part === 'builder') rigPartsList(l, project);
+  if (part === 'builder') rigPartsList(l, project, report);
   else {
-    partsList(l, project, report.cost);
+    partsList(l, project, report.cost, report);
     sheets = packingSheets(l, project, report.cost);
   }
   if (part !== 'organiser') {

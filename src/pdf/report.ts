@@ -1,8 +1,10 @@
 // What the pack reads: the evaluation report the lead assembles (structurally the same type), and options.
 import type { ChecklistReport } from '../core/checklists';
 import type { Paper } from './layout';
+import type { PackRoles } from './sections/roles';
 
-export type PackReport = ChecklistReport;
+/** The evaluation report; the design roles and their findings when the report carries them. */
+export type PackReport = ChecklistReport & PackRoles;
 
 /**
  * Which pages: the builder's (parts for one rig without prices, budget, supply, RF, checklists, sources), the

@@ -6,6 +6,7 @@ import { formatMoney } from '../../core/cost/money';
 import { orderSheets } from '../../core/cost/order-sheet';
 import { GREY, FAIL, type Column, type Layout, type Row } from '../layout';
 import { notComputed } from './common';
+import { lineRoleText, rolesTable, stateColor, type PackRoles } from './roles';
 
 const FLAG_WORDS: Record<string, string> = {
   'unknown-part': 'unknown part',
@@ -17,9 +18,10 @@ const FLAG_WORDS: Record<string, string> = {
   'no-rate': 'no exchange rate',
 };
 
-export function partsList(l: Layout, project: Project, cost: CostReport | null): void {
+export function partsList(l: Layout, project: Project, cost: CostReport | null, report: PackRoles = {}): void {
   l.heading('Costed parts list');
   if (!cost) return notComputed(l, 'Costing');
+  const roleOf = lineRoleText(report);
   const money = (c: number) => formatMoney(c, cost.currency);
   l.text(`${cost.kits} kit${cost.kits === 1 ? '' : 's'}; prices in ${cost.currency}. ${cost.methodNote}`, { sizePt: 8.5, color: GREY, afterPt: 6 });
   const columns: Column[] = [
@@ -39,16 +41,19 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null):
       const x = byId.get(id);
       if (!x) continue;
       const flags = x.flags.map((f) => FLAG_WORDS[f] ?? f).join(', ');
-      const desc = flags ? `${x.description || x.partId} [${flags}]` : x.description;
+      const role = roleOf.get(x.lineId);
+      const plain = flags ? `${x.description || x.partId} [${flags}]` : x.description;
+      const desc = role ? `${plain}. ${role.text}` : plain;
       const unit = x.unitPriceCents !== null && x.offerCurrency ? formatMoney(x.unitPriceCents, x.offerCurrency) : '—';
       rows.push({
         cells: [x.refs, desc, String(x.qtyPerRig), String(x.orderQty), x.supplier ? `${x.supplier} ${x.sku ?? ''}` : 'unpriced', unit, x.supplier ? money(x.lineCostCents) : '—'],
-        color: x.flags.some((f) => f !== 'zero-qty') ? FAIL : undefined,
+        color: x.flags.some((f) => f !== 'zero-qty') ? FAIL : stateColor(role?.state === 'unbound' ? undefined : role?.state),
       });
     }
     rows.push({ cells: ['', `Subtotal ${st.name}`, '', '', '', '', money(st.partsCents)], bold: true });
   }
   l.table(columns, rows, 8.5, 'Costed parts list');
+  rolesTable(l, project, report);
 
   l.heading('Totals', 2, 80);
   const totals: Row[] = [];

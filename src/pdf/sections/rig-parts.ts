@@ -2,8 +2,10 @@
 // (those are on the organiser's pages).
 import type { Project } from '../../core/model';
 import { GREY, type Layout, type Row } from '../layout';
+import { lineRoleText, rolesTable, stateColor, type PackRoles } from './roles';
 
-export function rigPartsList(l: Layout, project: Project): void {
+export function rigPartsList(l: Layout, project: Project, report: PackRoles = {}): void {
+  const roleOf = lineRoleText(report);
   l.heading('Parts for one rig');
   l.text('By stage, in build order; quantities per rig. Check each part against its references before you fit it.', {
     sizePt: 8.5,
@@ -20,10 +22,15 @@ export function rigPartsList(l: Layout, project: Project): void {
     const lines = project.bom.filter((b) => b.stageId === g.stageId && b.qtyPerRig > 0);
     if (!lines.length) continue;
     rows.push({ cells: [g.title], bold: true, shade: true, span: true });
-    for (const b of lines) rows.push({ cells: [b.refs, partById.get(b.partId)?.description ?? b.partId, String(b.qtyPerRig), b.notes] });
+    for (const b of lines) {
+      const role = roleOf.get(b.id);
+      const part = partById.get(b.partId)?.description ?? b.partId;
+      rows.push({ cells: [b.refs, role ? `${part}. ${role.text}` : part, String(b.qtyPerRig), b.notes], color: stateColor(role?.state) });
+    }
   }
   if (!rows.length) {
     l.text('The parts list is empty.', { sizePt: 9 });
+    rolesTable(l, project, report);
     return;
   }
   l.table(
@@ -37,4 +44,5 @@ export function rigPartsList(l: Layout, project: Project): void {
     8.5,
     'Parts for one rig',
   );
+  rolesTable(l, project, report);
 }
