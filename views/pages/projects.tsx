@@ -49,11 +49,11 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
                     <a href={`/projects/${p.id}`}>{p.name}</a>
                     {p.variantOf ? <span class="hint"> (variant of {projects.find((x) => x.id === p.variantOf)?.name ?? 'a deleted project'})</span> : null}
                   </td>
-                  <td class="num">{formatValue(p.frequencyHz, 'Hz', 4)}</td>
-                  <td class="num">{formatValue(p.targetPowerW, 'W')}</td>
-                  <td class="num">{p.kits}</td>
-                  <td class="num">{p.stageCount}</td>
-                  <td>
+                  <td class="num" data-label="Frequency">{formatValue(p.frequencyHz, 'Hz', 4)}</td>
+                  <td class="num" data-label="Output">{formatValue(p.targetPowerW, 'W')}</td>
+                  <td class="num" data-label="Kits">{p.kits}</td>
+                  <td class="num" data-label="Stages">{p.stageCount}</td>
+                  <td class="rename">
                     <form method="post" action={`/projects/${p.id}/rename`} class="inline">
                       <input type="hidden" name="version" value={String(p.version)} />
                       <Field name="name" id={`rename-${p.id}`} label="New name" state={rs} size={24} />
@@ -61,6 +61,7 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
                     </form>
                   </td>
                   <td class="actions">
+                    <div class="action-row">
                     <form method="post" action={`/projects/${p.id}/clone`} class="inline">
                       <button type="submit">Clone</button>
                     </form>
@@ -74,6 +75,7 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
                     <a href={`/projects/${p.id}/delete`} class="danger">
                       Delete…
                     </a>
+                    </div>
                   </td>
                 </tr>
               );
