@@ -24,7 +24,8 @@ export const RAIL_FIELDS: Record<RailKind, Record<string, string>> = {
     'fuse.rating': 'fuseA',
     'fuse.fault-clearing': 'windingFuseA',
     'budget.rail-voltage': 'minimumV',
-    'supply.keying-transient': 'reservoirF',
+    // the hot first elements come from the winding's regulation (a stiffer winding); more reservoir only slows the sag
+    'supply.keying-transient': 'windingId',
     '*': 'reservoirF',
   },
   regulated: {
