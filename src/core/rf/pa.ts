@@ -57,8 +57,8 @@ export interface PaResult {
   /** DC input power key-down (RF part only), W. */
   dcInputW: number;
   /**
-   * Key-down DC current including bias idle current, A: the most over the waveform band (pa-spectrum), so the supply
-   * budget carries the current of the waveform whose harmonics are judged.
+   * Key-down DC current including bias idle current, A: the design waveform's (pa-spectrum), what the supply budget
+   * carries; the band's most (hard saturation) is waveform.bandMaxCurrentA.
    */
   keyDownCurrentA: number;
   /** Key-down DC current into the worst load of the SWR circle (with bias), A; null at SWR 1 or when refused. */
@@ -76,7 +76,7 @@ export interface PaResult {
   /** Lowest key-down supply voltage (low mains trough, flat battery), V, and the output there, W; railV / outputW when unknown. */
   lowRailV: number;
   lowOutputW: number;
-  /** Most output at the hot supply (hotRailV) over the waveform band, W: the most RF the stage delivers, for filter and relay checks. */
+  /** Output at the hot supply (hotRailV), W: the most RF the stage delivers at its design drive, for filter, relay and heat checks. */
   hotOutputW: number;
   /** Peak drain voltage at the highest supply voltage (maxRailV), V, and peak current of one conducting device, A. */
   peakDrainV: number;
@@ -188,8 +188,9 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const efficiency = Math.min(efficiencyAsked, ideal);
   const band = bandFigures(wave, op.outputW, railV, efficiency);
   const dcInputW = op.outputW / efficiency;
-  // the supply carries the most current anywhere in the band: the waveform whose harmonics are judged (worst end)
-  const keyDownCurrentA = band.bandMaxCurrentA + pa.biasIdleMaxA;
+  // the supply carries the design waveform's current; the band's most (hard saturation, where the harmonics are
+  // judged) is shown beside it with a caution when it is higher (waveformFindings)
+  const keyDownCurrentA = band.designCurrentA + pa.biasIdleMaxA;
   // Device stress and heating are judged at their own worst corners, not at the operating point: the drains swing
   // to k x Vdd at the highest rail voltage (high mains, reservoir charged with the PA unkeyed, or a full battery),
   // and the heat is largest at high mains key-down. Common practice, no published source (worst-case design).
@@ -279,7 +280,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   void _w;
   return {
     waveform, spectrum: spectrumValues, swrKeyDownCurrentA: swrCurrent?.currentA ?? null,
-    railV, maxRailV, hotRailV, lowRailV, lowOutputW, hotOutputW: hotBand.bandMaxOutputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: network !== null ? 'network' : pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
+    railV, maxRailV, hotRailV, lowRailV, lowOutputW, hotOutputW: opHot.outputW, saturationV: op.saturationV, turnsRatio, turnsRatioSource: network !== null ? 'network' : pa.turnsRatio === null ? 'designed' : 'entered', idealTurnsRatio, ratioOptions,
     primaryOhm, outputW: op.outputW,
     // Source: definitions of dBm and dBW (power relative to 1 mW / 1 W)
     outputDbm: db(op.outputW / 1e-3), outputDbw: db(op.outputW),
