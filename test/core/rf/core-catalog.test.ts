@@ -123,3 +123,23 @@ describe('a catalog core with refused data is not used', () => {
     expect(r.findings.map((f) => [f.severity, f.rule])).toEqual([['fail', 'core.missing']]);
   });
 });
+
+describe('the catalog in the evaluation', () => {
+  it('the filter winds on its catalog core’s AL, whatever its own AL box says; the PA reports its transformer flux', async () => {
+    const { evaluate } = await import('../../../src/core/evaluate');
+    const lpfOf = (p: Project) => p.stages.find((s) => s.lpf)!;
+    const odd = { ...club, stages: club.stages.map((s) => (s.lpf ? { ...s, lpf: { ...s.lpf, coreAlHPerTurn2: 20e-9 } } : s)) };
+    const r = evaluate(odd);
+    const lpf = r.rf.stages.find((s) => s.stageId === lpfOf(club).id)!.lpf!;
+    const al = club.cores!.find((c) => c.id === lpfOf(club).lpf!.coreId)!.alHPerTurn2;
+    for (const e of lpf.design!.elements.filter((x) => x.kind === 'series-inductor')) {
+      // Source: L = AL N² (IEC 60205 inductance factor), with the catalog core's AL, not the 20 nH/t² box
+      expect(Math.abs(e.builtValue / (al * e.turns! ** 2) - 1)).toBeLessThan(1e-12);
+    }
+    const ot = r.rf.stages.find((s) => s.kind === 'final')!.outputTransformer!;
+    const core = club.cores!.find((c) => c.id === club.stages.find((s) => s.pa)!.pa!.outputCoreId)!;
+    // Source: transformer EMF equation, B = V / (4.44 f N Ae), at 30 m's lowest frequency 10.1 MHz (2π/√2 for 4.44)
+    expect(ot.frequencyHz).toBe(10.1e6);
+    expect(Math.abs(ot.peakFluxT / (ot.primaryRmsV / ((2 * Math.PI / Math.SQRT2) * 10.1e6 * 2 * core.aeM2)) - 1)).toBeLessThan(1e-12);
+  }, 60_000);
+});
