@@ -128,7 +128,7 @@ export function checkRoles(project: Pick<Project, 'bom' | 'parts'>, roles: reado
     if (!lines.length) {
       const f: Finding = { severity: 'caution', rule: 'role.unbound', subject: role.label, value: null, limit: null, unit: '', source: 'roles.binding', message: `No parts-list line is bound to this part of the design (needs ${role.requirement}): bind a line or a candidate on the parts list.` };
       findings.push(f);
-      statuses.push({ role, lineIds: [], state: 'unbound' });
+      statuses.push({ role, lineIds: [], state: 'unbound', bound: [], problems: [f.message] });
       continue;
     }
     const fs = lines.flatMap((l) => {
@@ -137,7 +137,9 @@ export function checkRoles(project: Pick<Project, 'bom' | 'parts'>, roles: reado
     });
     fs.push(...coverFindings(role, lines, parts));
     findings.push(...fs);
-    statuses.push({ role, lineIds: lines.map((l) => l.id), state: worst(fs) });
+    const bound = lines.map((l) => ({ lineId: l.id, refs: l.refs, qtyPerRig: l.qtyPerRig, partId: l.partId, part: parts.get(l.partId)?.description ?? '' }));
+    const problems = [...fs.filter((f) => f.severity === 'fail'), ...fs.filter((f) => f.severity === 'caution')].map((f) => f.message);
+    statuses.push({ role, lineIds: lines.map((l) => l.id), state: worst(fs), bound, problems });
   }
   const ids = new Set(roles.map((r) => r.id));
   for (const l of project.bom as BomLine[]) {

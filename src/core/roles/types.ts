@@ -46,4 +46,8 @@ export interface RoleStatus {
   lineIds: string[];
   /** 'ok' every required rating met; 'fail' a rating falls short or the category is wrong; 'unbound' no line. */
   state: 'ok' | 'caution' | 'fail' | 'unbound';
+  /** The bound lines with their parts (absent in statuses made before this field). */
+  bound?: { lineId: string; refs: string; qtyPerRig: number; partId: string; part: string }[];
+  /** Why the state is not ok: the messages of the role's caution and fail findings, most severe first. */
+  problems?: string[];
 }
