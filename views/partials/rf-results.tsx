@@ -72,7 +72,7 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused
         ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
         ['Efficiency', `${pct(pa.efficiency)} (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'}; the ideal waveform's ${pct(pa.waveform?.idealEfficiency ?? NaN)})`],
         ['Waveform', waveformText(pa)],
-        ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} at the design point / ${fv(pa.keyDownCurrentA, 'A')} budgeted, the most over the waveform band (bias idle included)`],
+        ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} budgeted at the design point (bias idle included)${pa.waveform && pa.waveform.bandMaxCurrentA > pa.waveform.designCurrentA * 1.05 ? `; up to ${fv(pa.waveform.bandMaxCurrentA + (pa.keyDownCurrentA - pa.waveform.designCurrentA), 'A')} at the worst end of the band` : ''}`],
         ...(pa.swrKeyDownCurrentA !== null && pa.swrKeyDownCurrentA > pa.keyDownCurrentA
           ? [['Key-down current at the worst SWR', `${fv(pa.swrKeyDownCurrentA, 'A')} (above the budgeted ${fv(pa.keyDownCurrentA, 'A')})`] as [string, string]] : []),
         ['Peak drain voltage / device current (design load)', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
