@@ -203,6 +203,7 @@ export const club30m: Project = {
         id: 'tr-main',
         name: 'T1 mains transformer',
         construction: 'laminated',
+        secondaryToleranceFraction: 0.05,
         windings: [
           { id: 'w-16', name: '16 V winding', ratedVrms: 16, ratedA: 1, regulationFraction: 0.1, resistanceOhm: null },
           { id: 'w-20', name: '20 V winding', ratedVrms: 20, ratedA: 2.5, regulationFraction: 0.08, resistanceOhm: null },

@@ -88,7 +88,7 @@ function supplyLines(report: EvaluationReport): string[] {
       const wf = r.windingFuse;
       if (wf?.check) {
         const clear = wf.check.latestS === null ? 'not cleared (below 2.1 x In)' : `cleared within ${formatValue(wf.check.latestS, 's')} (IEC 60127-2 ${wf.check.sheet})`;
-        out.push(`    ${wf.windingName} fuse ${wf.fittedA !== null ? 'fitted' : 'recommended'} T${formatValue(wf.check.fuseA, 'A')}: shorted reservoir ${formatValue(wf.outputShortLowA, 'A')} at low mains, ${clear}`);
+        out.push(`    ${wf.windingName} fuse ${wf.fittedA !== null ? 'fitted' : 'recommended'} T${formatValue(wf.check.fuseA, 'A')}: shorted reservoir ${formatValue(wf.outputShortLowA, 'A')} at low mains (input short ${formatValue(wf.inputShortLowA, 'A')} to ${formatValue(wf.inputShortHighA, 'A')}), ${clear}`);
       }
       const kt = r.keyingTransient;
       if (kt?.elements.length) {
@@ -114,7 +114,9 @@ function supplyLines(report: EvaluationReport): string[] {
       ? `  ${t.name}: ${t.thermalVA.toFixed(0)} VA with a continuous carrier -> ${t.standardVA ?? '?'} VA standard (sized for tune-up), primary ${formatValue(t.primaryA, 'A')}`
       : `  ${t.name}: ${t.thermalVA.toFixed(0)} VA in CW use -> ${t.standardVA ?? '?'} VA standard (sized for CW; ${t.tuneUpVA.toFixed(0)} VA with a continuous carrier), primary ${formatValue(t.primaryA, 'A')}`);
     for (const w of t.windings) if (w.paAtCheck) out.push(`    recommended ${w.windingName}: ${formatValue(w.paAtCheck.railV, 'V')} at low mains, key-down; ${w.paAtCheck.stageName} about ${formatValue(w.paAtCheck.outputW, 'W')} (fitted: ${formatValue(w.paAtCheck.fittedOutputW, 'W')})`);
-    for (const x of t.crossRegulation?.rails ?? []) out.push(`    together (shared primary), low mains: ${x.railName} ${formatValue(x.keyDownTroughV, 'V')} key-down, ${formatValue(x.keyUpTroughV, 'V')} key-up (alone ${formatValue(x.aloneTroughV, 'V')})`);
+    const cr = t.crossRegulation;
+    if (cr) out.push(`    windings together: primary ${formatValue(cr.primaryOhm, 'Ω')} and ${formatValue(cr.primaryH, 'H')} leakage shared${cr.toleranceFraction !== null ? `, secondary tolerance ${formatValue(cr.toleranceFraction * 100, '%')}` : ''}`);
+    for (const x of cr?.rails ?? []) out.push(`    together, low mains: ${x.railName} ${formatValue(x.keyDownTroughV, 'V')} key-down${x.toleranceTroughV !== null ? ` (${formatValue(x.toleranceTroughV, 'V')} at the low tolerance)` : ''}, ${formatValue(x.keyUpTroughV, 'V')} key-up (alone ${formatValue(x.aloneTroughV, 'V')}); ${x.windingName} leakage ${formatValue(x.leakageH, 'H')}${x.leakageFromRegulation ? ' estimated' : ''}`);
   }
   const h = report.heat;
   if (h) out.push(`  Heat inside: ${formatValue(h.totalW, 'W')} in CW use${h.riseK !== null ? `, rise ${formatValue(h.riseK, 'K')} (about ${formatValue(h.insideC, '°C')} inside)` : ' (enclosure not entered)'}`);

@@ -38,8 +38,14 @@ const rail = z
     for (const issue of res.error.issues) ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
     return z.NEVER;
   });
-const winding = z.object({ id, ...specShape(windingSpec) });
-const transformer = z.object({ id, ...specShape(transformerSpec), windings: z.array(winding).max(20) });
+// Fields added after files were first written may be absent: a winding's leakage (absent = split from the regulation
+// figure) and a transformer's secondary tolerance (absent = no tolerance corner), as in the model
+const windingShape = specShape(windingSpec);
+const winding = z.object({ id, ...windingShape, leakageH: windingShape.leakageH.optional() });
+const transformerShape = specShape(transformerSpec);
+const transformer = z.object({
+  id, ...transformerShape, secondaryToleranceFraction: transformerShape.secondaryToleranceFraction.optional(), windings: z.array(winding).max(20),
+});
 
 // stage kinds' data: the same specs as the forms and core's checks, one optional block per registry entry
 const stageDataSchemas = Object.fromEntries(STAGE_DATA.map((d) => [d.key, specFileSchema<unknown>(d.spec).optional()]));

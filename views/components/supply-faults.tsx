@@ -22,7 +22,10 @@ export const WindingFuseTable: FC<{ wf: WindingFuseReport }> = ({ wf }) => (
           </td>
         </tr>
         <tr>
-          <th scope="row">Fault current (winding {fv(wf.sourceOhm, 'Ω')})</th>
+          <th scope="row">
+            Fault current (winding {fv(wf.sourceOhm, 'Ω')}
+            {wf.reactanceOhm ? `, leakage ${fv(wf.leakageH ?? 0, 'H')} = ${fv(wf.reactanceOhm, 'Ω')} reactance` : ''})
+          </th>
           <td>
             shorted reservoir {fv(wf.outputShortLowA, 'A')} (low mains); short at the rectifier input {fv(wf.inputShortLowA, 'A')} to{' '}
             {fv(wf.inputShortHighA, 'A')}

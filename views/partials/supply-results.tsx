@@ -264,15 +264,18 @@ const TransformerCard: FC<{ t: TransformerReport; tuneUp?: boolean }> = ({ t, tu
       ) : null,
     )}
     {t.crossRegulation ? (
-      <table class="grid">
+      <table class="grid cross-regulation">
         <caption>
-          Windings simulated together, the primary ({fv(t.crossRegulation.primaryOhm, 'Ω')}) shared, at low mains ({fv(t.crossRegulation.mainsV, 'V')})
+          Windings simulated together (the troughs the headroom checks use), the primary's {fv(t.crossRegulation.primaryOhm, 'Ω')} and{' '}
+          {fv(t.crossRegulation.primaryH, 'H')} leakage shared, at low mains ({fv(t.crossRegulation.mainsV, 'V')})
         </caption>
         <thead>
           <tr>
             <th scope="col">Rail</th>
+            <th class="num">Winding leakage</th>
             <th class="num">Trough alone</th>
             <th class="num">Together, key down</th>
+            {t.crossRegulation.toleranceFraction !== null ? <th class="num">Secondary −{fv(t.crossRegulation.toleranceFraction * 100, '%', 2)}</th> : null}
             <th class="num">Together, key up</th>
             <th class="num">Needed</th>
           </tr>
@@ -281,8 +284,13 @@ const TransformerCard: FC<{ t: TransformerReport; tuneUp?: boolean }> = ({ t, tu
           {t.crossRegulation.rails.map((x) => (
             <tr>
               <th scope="row">{x.railName}</th>
+              <td class="num">
+                {fv(x.leakageH, 'H')}
+                {x.leakageFromRegulation ? ' (estimated)' : ''}
+              </td>
               <td class="num">{fv(x.aloneTroughV, 'V')}</td>
               <td class="num">{fv(x.keyDownTroughV, 'V')}</td>
+              {t.crossRegulation!.toleranceFraction !== null ? <td class="num">{fv(x.toleranceTroughV, 'V')}</td> : null}
               <td class="num">{fv(x.keyUpTroughV, 'V')}</td>
               <td class="num">{x.requiredMinV > 0 ? fv(x.requiredMinV, 'V') : '—'}</td>
             </tr>

@@ -124,6 +124,7 @@ export function simulateTransformer(
   let overlap = false;
   let simulations = 0;
   for (const spec of specs.filter((s) => JOINT_CORNER_IDS.includes(s.id))) {
+    // the tolerance is the secondary's (its turns), not the mains': the primary stays at the corner's mains voltage
     const f = spec.mainsFactor * (spec.secondaryTolerance && tol !== null ? 1 - tol : 1);
     const windings: JointWinding[] = on.map(({ rail, w, loadA }) => ({
       topology: rail.topology, secondaryVrms: noLoadVrms(w) * f,
@@ -134,7 +135,8 @@ export function simulateTransformer(
       esrOhm: rail.esrOhm, loadA: loadA(spec), bleederOhm: rail.bleederOhm,
     }));
     const r = simulateSharedPrimary({
-      primaryVrms: mains.nominalV * f, primaryOhm, primaryH, frequencyHz: mains.frequencyHz, windings, stepsPerCycle,
+      primaryVrms: mains.nominalV * spec.mainsFactor, primaryOhm, primaryH, frequencyHz: mains.frequencyHz, windings,
+      stepsPerCycle,
     });
     simulations++;
     converged &&= r.converged;

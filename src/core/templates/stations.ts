@@ -76,7 +76,9 @@ const adjustable = (id: string, name: string, parentId: string, r2Ohm: number): 
   rippleTargetV: null,
 });
 
-const transformer = (name: string, windings: Winding[]) => ({ id: 'tr-1', name, construction: 'laminated' as const, windings });
+const transformer = (name: string, windings: Winding[]) => ({
+  id: 'tr-1', name, construction: 'laminated' as const, secondaryToleranceFraction: 0.05, windings,
+});
 const supply = (transformers: Supply['transformers'], rails: Supply['rails']): Supply => ({
   transformers,
   rails,
