@@ -173,8 +173,9 @@ export const SweepPage: FC<SweepPageProps> = ({ project, targets, states, active
               {targets[p].length ? (
                 <div class="fields-row">
                   <Select name="target" label={spec.fields.target.label} state={st} idp={p} options={targets[p].map((t) => [t.id, t.name])} />
-                  <SpecField spec={spec} k="from" state={st} idp={p} />
-                  <SpecField spec={spec} k="to" state={st} idp={p} />
+                  {/* the heading names the quantity; the spec's longer label names it in messages */}
+                  <SpecField spec={spec} k="from" state={st} idp={p} label="From" />
+                  <SpecField spec={spec} k="to" state={st} idp={p} label="To" />
                   <SpecField spec={spec} k="points" state={st} idp={p} size={4} />
                   <button type="submit">Sweep</button>
                 </div>
@@ -195,7 +196,8 @@ export const SweepPage: FC<SweepPageProps> = ({ project, targets, states, active
           <h2>
             {result.label} of {result.target.name}
           </h2>
-          {raw(sweepPlotSvg(result, display))}
+          <div class="scroll-x">{raw(sweepPlotSvg(result, display))}</div>
+          <div class="scroll-x">
           <table class="sweep-table">
             <thead>
               <tr>
@@ -219,6 +221,7 @@ export const SweepPage: FC<SweepPageProps> = ({ project, targets, states, active
               ))}
             </tbody>
           </table>
+          </div>
         </section>
       ) : null}
     </Layout>
