@@ -143,3 +143,15 @@ describe('the catalog in the evaluation', () => {
     expect(Math.abs(ot.peakFluxT / (ot.primaryRmsV / ((2 * Math.PI / Math.SQRT2) * 10.1e6 * 2 * core.aeM2)) - 1)).toBeLessThan(1e-12);
   }, 60_000);
 });
+
+describe('an area typed with its unit is stored as the same number typed bare', () => {
+  it('"24.7 mm²" and "24.7" (the box is in mm²) give the same stored value and show back as 24.7', async () => {
+    // found in the browser: 24.7 × 1e-6 is 2.4699999999999997e-5, which showed back as "0.0000246999… m²"
+    const { readNumber, numberText } = await import('../../../src/core/spec/number-text');
+    const f = coreSpec.fields.aeM2 as Parameters<typeof readNumber>[1];
+    const a = readNumber('24.7 mm²', f);
+    const b = readNumber('24.7', f);
+    expect(a).toEqual(b);
+    if (a.ok) expect(numberText(a.value, f)).toBe('24.7');
+  });
+});
