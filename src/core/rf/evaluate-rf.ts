@@ -3,8 +3,8 @@ import { type Finding, sortFindings } from '../findings';
 import type { Project, Stage } from '../model';
 import { evaluateExposure } from './exposure';
 import { harmonicCompliance, paHarmonicDbc } from './harmonics';
-import { analyseLpf, harmonicsFromSource, ladderOf } from './lpf-analysis';
-import { paSource } from './pa-source';
+import { analyseLpf, harmonicsFromSource, inputImpedance, ladderOf } from './lpf-analysis';
+import { harmonicCurrentFinding, harmonicCurrentRatio, paSource } from './pa-source';
 import { designLpf } from './lpf-design';
 import { monteCarloLpf } from './lpf-monte-carlo';
 import { validateRfInputs, validateRfSettings } from './lpf-validate';
@@ -203,6 +203,15 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const sourced = src && lpfRes?.design
     ? { label: src.label, rows: harmonicsFromSource(ladderOf(lpfRes.design), frequencyHz, src.kind, src.zsAt) }
     : null;
+  const band3 = spectrum?.bands.find((b) => b.n === 3);
+  if (src && src.kind === 'thevenin' && lpfRes?.design && paStage && band3) {
+    // a voltage-switching stage: the 3rd harmonic current the filter's input takes (worst end of the source band)
+    const l = ladderOf(lpfRes.design);
+    // Source: definition of the decibel for voltages, ratio = 10^(dBc/20)
+    const e3 = 10 ** (band3.worstDbc / 20);
+    const f = harmonicCurrentFinding(harmonicCurrentRatio(src.zsAt, (n) => inputImpedance(l, n * frequencyHz), 3, e3), 3, paStage.name);
+    if (f) all.push(f);
+  }
   const harmonics = okFreq && targetPowerW > 0
     ? harmonicCompliance({
       rule: project.rf.spuriousRule, topology, evenHarmonicDbc: evenDbc, fundamentalW: outputPowerW, frequencyHz, passbandLossDb,

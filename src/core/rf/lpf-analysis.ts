@@ -184,6 +184,13 @@ export function sourceTransfer(l: Ladder, frequencyHz: number, kind: SourceKind,
   return cmul(cadd(zs, { re: l.r0Ohm, im: 0 }), h);
 }
 
+/** Input impedance of the ladder loaded by the resistance zlOhm: Zin = (A Z_L + B) / (C Z_L + D) (chain relations). */
+export function inputImpedance(l: Ladder, frequencyHz: number, zlOhm = l.r0Ohm): Cx {
+  const [a, b, c, d] = chainMatrix(l, frequencyHz);
+  const zl: Cx = { re: zlOhm, im: 0 };
+  return cdiv(cadd(cmul(a, zl), b), cadd(cmul(c, zl), d));
+}
+
 export interface SourcedHarmonic {
   n: number;
   /** Harmonic n at the load relative to the fundamental, against the same ratio at the source, dB (positive = less). */

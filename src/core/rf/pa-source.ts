@@ -1,4 +1,5 @@
 // The PA's source impedance at each harmonic, referred to the filter's input, and what its harmonic level describes.
+import type { Finding } from '../findings';
 import type { PaParams } from '../model';
 import type { Cx, SourceKind } from './lpf-analysis';
 import { CLASS_E_EXCESS, CLASS_E_QL } from './class-e-sim';
@@ -52,5 +53,37 @@ export function paSource(inp: PaSourceInput): PaSource {
   return {
     kind: inp.classESimulated ? 'design-load' : 'thevenin', zsAt,
     label: `series-tuned network (loaded Q ${CLASS_E_QL}), j${zsAt(2).im.toFixed(0)} Ω at 2f`,
+  };
+}
+
+/** Harmonic current into the filter above which a voltage-switching stage's devices carry it (fraction of the
+ * fundamental's). Common practice, no published source. */
+export const HARMONIC_CURRENT_LIMIT = 0.3;
+
+/**
+ * A voltage-switching stage (Thevenin source) drives harmonic n's current E_n / (Z_s + Z_in(n f)) into the filter;
+ * relative to the fundamental's: (E_n/E_1) |Z_s + Z_in(f)| / |Z_s + Z_in(n f)| (Ohm's law with the chain relation
+ * Z_in = (A Z_L + B)/(C Z_L + D)). A shunt capacitor first in the filter makes Z_in small at harmonics.
+ */
+export function harmonicCurrentRatio(
+  zsAt: (n: number) => Cx | null, zinAt: (n: number) => Cx, n: number, sourceLevelRatio: number,
+): number {
+  const z1 = zsAt(1);
+  const zn = zsAt(n);
+  if (!z1 || !zn) throw new Error('a harmonic current ratio needs a finite source impedance');
+  const sum = (a: Cx, b: Cx) => Math.hypot(a.re + b.re, a.im + b.im);
+  return (sourceLevelRatio * sum(z1, zinAt(1))) / sum(zn, zinAt(n));
+}
+
+/** The finding for a class-D stage whose filter takes the switched wave's harmonic currents (null when it does not). */
+export function harmonicCurrentFinding(ratio: number, n: number, subject: string): Finding | null {
+  if (!(ratio > HARMONIC_CURRENT_LIMIT)) return null;
+  return {
+    severity: 'caution', rule: 'pa.harmonic-current', subject, value: ratio, limit: HARMONIC_CURRENT_LIMIT, unit: '',
+    source: 'lpf.pa-source',
+    message: `The switched drain voltage drives a ${n}${n === 3 ? 'rd' : 'th'} harmonic current of about ` +
+      `${Math.round(ratio * 100)} % of the fundamental's into the filter (its input is a low impedance there): the ` +
+      'devices carry it on top of the load-line current and heat more. Use an inductor-input filter or a series-tuned ' +
+      'output for a voltage-switching stage.',
   };
 }

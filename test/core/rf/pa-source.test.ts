@@ -8,10 +8,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
-import { harmonicsFromSource, ladderOf, pointAt, sourceTransfer, type Ladder } from '../../../src/core/rf/lpf-analysis';
+import { harmonicsFromSource, inputImpedance, ladderOf, pointAt, sourceTransfer, type Ladder } from '../../../src/core/rf/lpf-analysis';
 import { designLpf } from '../../../src/core/rf/lpf-design';
-import { paSource } from '../../../src/core/rf/pa-source';
-import { lpfParams, paParams } from './fixture';
+import { harmonicCurrentFinding, harmonicCurrentRatio, paSource } from '../../../src/core/rf/pa-source';
+import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
+import { lpfParams, paParams, project } from './fixture';
 import { near } from './helpers';
 
 const one = (kind: 0 | 1, value: number, r0 = 50): Ladder => ({
@@ -70,6 +71,55 @@ describe('the PA as a source by class', () => {
     expect(s.kind).toBe('design-load');
     near(s.zsAt(2)!.im, 50 * (60 - (30 - 1.1525) / 2), 1e-9, 'X');
     near(s.zsAt(1)!.im, 50 * 1.1525, 1e-9, 'X at f: the excess reactance');
+  });
+});
+
+describe('harmonic current a stiff source drives into the filter (Ohm\'s law)', () => {
+  // one shunt capacitor of 1 nF across 50 Ω at 7 MHz: Z_in(n f) = 50 / (1 + j n ωCR) (current divider); Zs = 1 Ω
+  const f = 7e6;
+  const l = one(0, 1e-9);
+  const zin = (n: number) => inputImpedance(l, n * f);
+  const zs = () => ({ re: 1, im: 0 });
+  it('input impedance of R ∥ C is R / (1 + jωCR)', () => {
+    const b = 2 * Math.PI * f * 1e-9 * 50;
+    near(zin(1).re, 50 / (1 + b * b), 1e-9, 're');
+    near(zin(1).im, (-50 * b) / (1 + b * b), 1e-9, 'im');
+  });
+  it('3rd harmonic at 1/3 of the voltage: I3/I1 = (1/3) |1 + Zin(f)| / |1 + Zin(3f)|, worked out here', () => {
+    const w = 2 * Math.PI * f;
+    const z = (n: number) => {
+      const b = n * w * 1e-9 * 50;
+      return { re: 1 + 50 / (1 + b * b), im: (-50 * b) / (1 + b * b) };
+    };
+    const expected = ((1 / 3) * Math.hypot(z(1).re, z(1).im)) / Math.hypot(z(3).re, z(3).im);
+    near(harmonicCurrentRatio(zs, zin, 3, 1 / 3), expected, 1e-12, 'ratio');
+    // about 0.91 here (21.1 Ω against 7.7 Ω, over 3): above the 30 % threshold (common practice), so the finding is given
+    expect(harmonicCurrentFinding(expected, 3, 'PA')?.severity).toBe('caution');
+  });
+  it('a series inductor first keeps the current low: no finding', () => {
+    const li = one(1, 2e-6);
+    const r = harmonicCurrentRatio(zs, (n) => inputImpedance(li, n * f), 3, 1 / 3);
+    expect(r).toBeLessThan(0.3);
+    expect(harmonicCurrentFinding(r, 3, 'PA')).toBeNull();
+  });
+});
+
+describe('in the evaluation: push-pull class D into each filter form', () => {
+  const rig = (form: 'capacitor-input' | 'inductor-input') => {
+    const p = project();
+    return evaluateRf({
+      ...p,
+      stages: p.stages.map((st) => st.pa ? { ...st, pa: paParams({ amplifierClass: 'D', rdsOnOhm: 0.1, saturationV: null }) }
+        : st.lpf ? { ...st, lpf: lpfParams({ form }) } : st),
+    }, { paRailV: { pa: 13.8 } });
+  };
+  it('capacitor-input: the harmonic-current caution, and the rows say the filter is judged from a stiff source', () => {
+    const r = rig('capacitor-input');
+    expect(r.findings.some((f) => f.rule === 'pa.harmonic-current')).toBe(true);
+    expect(r.harmonics!.rows[1].sourceBasis).toMatch(/stiff voltage source/);
+  });
+  it('inductor-input: no such caution', () => {
+    expect(rig('inductor-input').findings.some((f) => f.rule === 'pa.harmonic-current')).toBe(false);
   });
 });
 
