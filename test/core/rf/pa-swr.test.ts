@@ -125,3 +125,26 @@ describe('push-pull class D: the leakage ring at each hard edge (undamped series
     near(s.drainPeakV, 40 + Math.hypot(40, 1.8 * Math.sqrt(250)), 1e-9, 'Vpk');
   });
 });
+
+describe('push-pull class D in evaluatePa: the ring in the drain rating check', () => {
+  const run = (over: Parameters<typeof paParams>[0]) =>
+    evaluatePa(paParams({ amplifierClass: 'D', rdsOnOhm: 0.1, saturationV: null, turnsRatio: 1, ...over }), 13.8,
+      { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 });
+  it('without leakage and Coss: twice the 2 × 13.8 V load-line peak (the step alone), and a caution to enter them', () => {
+    const r = run({});
+    near(r.swr!.worstDrainPeak.value, 4 * 13.8, 1e-9, 'Vpk');
+    const f = r.findings.find((x) => x.rule === 'pa.leakage-ring')!;
+    expect(f.severity).toBe('caution');
+    expect(f.message).toMatch(/enter both/);
+  });
+  it('with 20 nH and 200 pF entered: an ok line naming √(L/C) = 10 Ω', () => {
+    const f = run({ outputLeakageH: 20e-9, deviceCossF: 200e-12 }).findings.find((x) => x.rule === 'pa.leakage-ring')!;
+    expect(f.severity).toBe('ok');
+    expect(f.message).toContain('10.0 Ω');
+  });
+  it('class C has no hard edge: no ring finding and the load-line peak', () => {
+    const r = run({ amplifierClass: 'C', saturationV: 1, rdsOnOhm: null });
+    expect(r.findings.some((x) => x.rule === 'pa.leakage-ring')).toBe(false);
+    near(r.swr!.worstDrainPeak.value, 2 * 13.8, 1e-9, 'Vpk');
+  });
+});
