@@ -252,7 +252,7 @@ const OutputNetworkTable: FC<{ name: string; n: LNetwork | null; c: RfChoke | nu
         ...(n
           ? [
             ['L network', `${fv(n.drainOhm, 'Ω')} drain load to ${fv(n.loadOhm, 'Ω')}, Q ${n.q.toFixed(2)}; series inductor on the ${n.shuntAt === 'load' ? 'drain' : 'load'} side, shunt capacitor across the ${n.shuntAt} side`],
-            ['Series inductor', `${fv(n.seriesH, 'H')} ideal${n.turns !== null && n.builtSeriesH !== null ? `; ${n.turns} turns on the filter's core = ${fv(n.builtSeriesH, 'H')}` : '; no filter core to count turns on'}`],
+            ['Series inductor', `${fv(n.seriesH, 'H')} ideal${n.turns !== null && n.builtSeriesH !== null ? `; ${n.turns} turns on the chosen core (the PA's output core, else the filter's) = ${fv(n.builtSeriesH, 'H')}` : '; no core to count turns on'}`],
             ['Shunt capacitor', `${fv(n.shuntF, 'F')} ideal; fit ${n.capacitorPartsF.map((x) => fv(x, 'F', 2)).join(' ∥ ')} = ${fv(n.builtShuntF, 'F')}`],
             ...(n.builtDrainReOhm !== null && n.builtDrainImOhm !== null
               ? [['Drain load as built', `${fv(n.builtDrainReOhm, 'Ω')} ${n.builtDrainImOhm < 0 ? '−' : '+'} j${fv(Math.abs(n.builtDrainImOhm), 'Ω')}`] as [string, string]]
