@@ -224,8 +224,8 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   }
   findings.push(...waveformFindings(pa, wave, { subject, designOutputW: op.outputW, band, railV, frequencyHz: corners.frequencyHz }));
   if (pa.amplifierClass === 'D' && pa.topology === 'single-ended') {
-    findings.push({ severity: 'ok', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'pa.fourier',
-      message: 'Single-ended class D is modelled as a half-bridge driving a 0 to Vdd square wave into the transformer.' });
+    findings.push({ severity: 'ok', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'pa.trapezoid',
+      message: 'Single-ended class D is modelled as a half-bridge driving a 0 to Vdd switched wave (with its transition time) into the transformer.' });
   }
   if (pa.amplifierClass === 'E' && pa.topology === 'push-pull') {
     findings.push({ severity: 'caution', rule: 'pa.model', subject, value: null, limit: null, unit: '', source: 'pa.push-pull-e',
