@@ -42,7 +42,7 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   const p = stage.lpf!;
   // the inductors' core: the catalog core chosen on the filter (its AL sets the turns), else the one entered there
   const core = lpfCore(project, p);
-  const d = designLpf(core?.from === 'catalog' && core.alHPerTurn2 !== null ? { ...p, coreAlHPerTurn2: core.alHPerTurn2 } : p, project.frequencyHz);
+  const d = designLpf(core?.from === 'catalog' && core.alHPerTurn2 !== null ? { ...p, coreAlHPerTurn2: core.alHPerTurn2, coreName: core.name } : p, project.frequencyHz);
   const swr = Math.min(100, Math.max(1, finite(project.rf.worstSwr, 1)));
   const capacitorPeakV = lineMaxima(powerW, 50, swr).peakV;
   if (!d.ok) {
