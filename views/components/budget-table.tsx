@@ -24,6 +24,7 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
       supply is not designed until it is known. Powers are each mode's current times the rail's mean voltage in that mode
       at nominal mains (from the supply design); the trough is the lowest point of the ripple with the key down.
     </p>
+    <div class="scroll-x">
     <table class="grid budget">
       <thead>
         <tr>
@@ -110,5 +111,6 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
         </tr>
       </tfoot>
     </table>
+    </div>
   </section>
 );
