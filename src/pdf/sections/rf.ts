@@ -7,6 +7,7 @@ import { SPECTRUM_FLOOR_DBC } from '../../core/rf/keying';
 import { findingsList, fv, keyValues, notComputed } from './common';
 import { sourceText } from '../../core/sources/registry';
 import type { PaSwrStress, Worst } from '../../core/rf/pa-swr';
+import type { PaWaveformSummary } from '../../core/rf/pa-dc';
 import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
 import { MIN_DBC } from '../../core/rf/pa-spectrum';
 
@@ -17,6 +18,15 @@ function swrText(s: PaSwrStress): string {
   return `drain peak ${fv(s.worstDrainPeak.value, 'V')} (${loadText(s.worstDrainPeak)}); current ${fv(s.worstPeakCurrent.value, 'A')} ` +
     `(${loadText(s.worstPeakCurrent)}); dissipation ${fv(s.worstDissipation.value, 'W')} (${loadText(s.worstDissipation)}); ` +
     `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}`;
+}
+
+/** The waveform that gives the output, the budgeted current and the harmonics, and the band's most. */
+function waveformLine(w: PaWaveformSummary, keyDownA: number): string {
+  const what = w.model === 'trapezoid' ? `switched, ${fv(w.transitionTimeS, 's')} edges${w.transitionAssumed ? ' (assumed)' : ''}`
+    : w.model === 'class-e-simulated' ? `simulated class E, loaded Q ${w.classELoadedQ?.[1]} to ${w.classELoadedQ?.[0]}`
+      : 'current pulse, edge of saturation to flat-topped';
+  const bias = keyDownA - w.designCurrentA;
+  return `${what}: ${fv(w.designOutputW, 'W')} and ${fv(keyDownA, 'A')} key-down at the design point (budgeted); up to ${fv(w.bandMaxOutputW, 'W')} and ${fv(w.bandMaxCurrentA + bias, 'A')} over the band, where the harmonics are judged`;
 }
 
 export function rfSection(l: Layout, rf: RfReport | null): void {
@@ -33,6 +43,7 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       keyValues(l, [
         ['Output', `${fv(p.outputW, 'W')} (${fv(p.outputDbm, 'dBm')}), ${fv(p.vsReferenceDb, 'dB')} vs. reference (${p.vsReferenceSUnits.toFixed(1)} S-units)`],
         ['Supply', `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')}, DC input ${fv(p.dcInputW, 'W')}, efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`],
+        ...(p.waveform ? [['Waveform', waveformLine(p.waveform, p.keyDownCurrentA)] as [string, string]] : []),
         ['Load', p.turnsRatioSource === 'network' ? `matching network, ${fv(p.primaryOhm, 'Ω')} at the drain` : `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
         ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load`],
         ...(p.swr && p.swr.swr > 1 ? [['At SWR ' + p.swr.swr, swrText(p.swr)] as [string, string]] : []),
