@@ -46,6 +46,8 @@ export function heatBudget(supply: SupplyReport | null, pas: PaHeat[], areaM2: n
   for (const r of supply?.rails ?? []) {
     if (r.kind === 'regulated') {
       sources.push({ name: `${r.railName} regulator`, kind: 'regulator', watts: r.thermalDissipationW, note: 'high mains, averaged over the keying duty' });
+      const ob = r.bleeder?.fittedW;
+      if (ob !== undefined && ob !== null) sources.push({ name: `${r.railName} output bleeder`, kind: 'bleeder', watts: ob, note: 'at the set output voltage' });
     } else if (r.kind === 'rectified') {
       sources.push({ name: `${r.railName} rectifier`, kind: 'rectifier', watts: r.rectifierLoss.thermalW, note: `diodes, high mains, duty-averaged (${r.rectifierLoss.keyDownW.toFixed(2)} W key-down)` });
       const wf = r.windingFuse;

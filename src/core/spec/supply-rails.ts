@@ -238,12 +238,8 @@ export const RAIL_SPECS: Record<Rail['kind'], Spec> = { rectified: rectifiedSpec
 /** Rails stored before the winding fuse, bleeder rating and ripple fields existed read them as not stated (fuse type T3). */
 export function withRailDefaults(r: Rail): Rail {
   const old = r as unknown as Partial<Record<string, unknown>>;
-  if (r.kind === 'regulated') {
-    return {
-      ...r, rippleRejectionDb: r.rippleRejectionDb ?? null, rippleTargetV: r.rippleTargetV ?? null,
-      outputF: r.outputF ?? null, bleederOhm: r.bleederOhm ?? null, bleederRatedW: r.bleederRatedW ?? null,
-    };
-  }
+  // the output bleeder and the rectifier's thermal data are optional in the model: absent reads as not entered
+  if (r.kind === 'regulated') return { ...r, rippleRejectionDb: r.rippleRejectionDb ?? null, rippleTargetV: r.rippleTargetV ?? null };
   const base = { ...r, minimumV: (old.minimumV as number | null | undefined) ?? null };
   if (base.kind === 'battery') return base;
   return {
@@ -251,7 +247,5 @@ export function withRailDefaults(r: Rail): Rail {
     windingFuseA: (old.windingFuseA as number | null | undefined) ?? null,
     windingFuseSheet: (old.windingFuseSheet as RectifiedRail['windingFuseSheet'] | undefined) ?? 'T3',
     bleederRatedW: (old.bleederRatedW as number | null | undefined) ?? null,
-    bridgeMount: (old.bridgeMount as RectifiedRail['bridgeMount']) ?? null,
-    bridgeFreeAirKPerW: (old.bridgeFreeAirKPerW as number | null | undefined) ?? null,
   };
 }

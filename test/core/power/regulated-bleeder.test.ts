@@ -49,3 +49,16 @@ describe('regulated rail bleeder', () => {
     expect(regulatedBleederFindings('HV rail', b)[0].severity).toBe('fail');
   });
 });
+
+describe('the output bleeder is a heat source inside the box', () => {
+  it('P = V² / R at the set output joins the heat budget', async () => {
+    const { heatBudget } = await import('../../../src/core/power/heat-budget');
+    const b = regulatedBleeder(rail);
+    const reg = { kind: 'regulated', railName: '13.8 V rail', thermalDissipationW: 1, bleeder: b } as unknown as import('../../../src/core/power/report-types').RailReport;
+    const h = heatBudget({ rails: [reg] } as unknown as import('../../../src/core/power/report-types').SupplyReport, [], null, null, 25);
+    const src = h.sources.find((s) => s.name === '13.8 V rail output bleeder')!;
+    // 13.8² / 1000 = 0.19044 W; total 1 + 0.19044
+    near(src.watts, 0.19044, toleranceW, 'bleeder W');
+    near(h.totalW, 1.19044, toleranceW, 'total');
+  });
+});
