@@ -122,7 +122,7 @@ describe('numbers with a grouping comma', () => {
     const res = await post(action, { ...form.fields, power: '1,500 W' }, { 'HX-Request': 'true' });
     expect(res.status).toBe(422);
     const html = await res.text();
-    expect(html).toContain('Target output &quot;1,500 W&quot; is ambiguous');
+    expect(html).toContain('Target RF output &quot;1,500 W&quot; is ambiguous');
     expect(html).toContain('write 1500 or 1.5');
     expect(html).toContain('value="1,500 W"'); // what the user typed is kept
     expect((await loadProject(database.db, ID))!.version).toBe(before.version);

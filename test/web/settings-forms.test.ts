@@ -27,11 +27,11 @@ describe('project settings form', () => {
 
   it.each([
     ['frequency', '70', 'Operating frequency must be at least 100 kHz and at most 60 MHz'],
-    ['power', '0', 'Target output must be at least 1 mW and at most 2 kW'],
+    ['power', '0', 'Target RF output must be at least 1 mW and at most 2 kW'],
     ['mainsHz', '5', 'Mains frequency must be at least 40 Hz and at most 500 Hz'],
     ['ambient', '85', 'Ambient temperature must be at least -40 °C and at most 70 °C'],
     ['duty', '140', 'Keying duty (heating) must be at least 0 % and at most 100 %'],
-    ['kits', '2.5', 'Kits (group build) must be a whole number'],
+    ['kits', '2.5', 'Kits to build must be a whole number'],
     ['currency', 'euro', 'Currency must be a three-letter code such as USD or EUR'],
   ])('%s = "%s" is refused naming the field, kept as typed, nothing saved', async (field, typed, message) => {
     const { get, post, database } = await demoApp();
@@ -103,7 +103,7 @@ describe('RF settings form', () => {
 
 describe('new project form', () => {
   it.each([
-    ['power', '0', 'Target output must be at least 1 mW and at most 2 kW'],
+    ['power', '0', 'Target RF output must be at least 1 mW and at most 2 kW'],
     ['band', '100', 'Band must be at least 100 kHz and at most 60 MHz'],
     ['mains', '240-50', 'Supply: choose one of'],
   ])('%s = "%s" is refused naming the field, nothing created', async (field, typed, message) => {

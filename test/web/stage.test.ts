@@ -53,7 +53,7 @@ describe('stage page', () => {
       version: '1', name: 'x', notes: '', frequency: '10.11 MHz', power: '0', supplyKind: 'mains', mainsV: '120', mainsHz: '60', mainsLow: '10', mainsHigh: '10', ambient: '35', duty: '40', kits: '8', currency: 'USD',
     });
     expect(res.status).toBe(422);
-    expect(await res.text()).toContain('Target output must be at least 1 mW');
+    expect(await res.text()).toContain('Target RF output must be at least 1 mW');
   });
 
   it('PA and relay forms round-trip their stored values', async () => {

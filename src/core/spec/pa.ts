@@ -30,7 +30,10 @@ export const paSpec = defineSpec({
       help: 'empty = design it for the target power',
       example: '1.5',
     }),
-    loadOhm: num('Load', 'Ω', U.ohm, 0.1, 10_000, 50, { form: 'load' }),
+    loadOhm: num('Output load (antenna side)', 'Ω', U.ohm, 0.1, 10_000, 50, {
+      form: 'load',
+      help: 'what the output transformer or network drives, usually 50 Ω',
+    }),
     // Common practice, no published source: below 5 % a "PA" is a heater; above 100 % is impossible
     efficiency: optNum('Drain efficiency', '%', U.pct, 0.05, 1, null, { help: 'empty = default for the class' }),
     deviceVdsMaxV: num('Device V(BR)DSS', 'V', U.V, 0, 10_000, 100, { form: 'vdsMax', exclusiveMin: true }),

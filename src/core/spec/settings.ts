@@ -62,7 +62,11 @@ export const rfInputsSpec = defineSpec({
   label: 'Operating frequency and power',
   fields: {
     frequencyHz: num('Operating frequency', 'Hz', U.MHz, 100e3, 60e6, 10.11e6, { form: 'frequency', example: '10.11' }),
-    targetPowerW: num('Target output', 'W', U.W, MIN_TARGET_POWER_W, 2000, 5, { form: 'power', example: '5' }),
+    targetPowerW: num('Target RF output', 'W', U.W, MIN_TARGET_POWER_W, 2000, 5, {
+      form: 'power',
+      example: '5',
+      help: 'carrier power into the antenna',
+    }),
   },
 });
 
@@ -96,7 +100,11 @@ export const projectFieldsSpec = defineSpec({
     notes: text('Notes', 20_000, false, '', { multiline: true }),
     ...rfInputsSpec.fields,
     ...thermalInputsSpec.fields,
-    kits: num('Kits (group build)', '', U.none, 1, 1000, 1, { integer: true, example: '8' }),
+    kits: num('Kits to build', '', U.none, 1, 1000, 1, {
+      integer: true,
+      example: '8',
+      help: 'rigs the group builds; the parts are ordered for all of them',
+    }),
     currency: text('Currency', 3, true, 'USD', {
       upper: true,
       pattern: { re: /^[A-Z]{3}$/, says: 'must be a three-letter code such as USD or EUR' },

@@ -32,7 +32,11 @@ export const windingSpec = defineSpec({
     ratedVrms: num('Rated voltage', 'V', VRMS, 0, 1000, 12, { form: 'ratedV', exclusiveMin: true, example: '18' }),
     ratedA: num('Rated current', 'A', ARMS, 0, 100, 1, { form: 'ratedA', exclusiveMin: true, example: '2' }),
     // (V_no-load - V_full-load) / V_full-load as printed on the transformer's data sheet
-    regulationFraction: num('Regulation', '%', U.pct, 0, 1, 0.08, { form: 'regulation', example: '8' }),
+    regulationFraction: num('Regulation', '%', U.pct, 0, 1, 0.08, {
+      form: 'regulation',
+      example: '8',
+      help: 'rise from full load to no load, as on the data sheet',
+    }),
     resistanceOhm: optNum('Winding resistance', 'Ω', U.ohm, 0, 1000, null, {
       form: 'resistance',
       exclusiveMin: true,

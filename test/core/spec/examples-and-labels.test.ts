@@ -3,8 +3,11 @@
 import { describe, expect, it } from 'vitest';
 import { ALL_SPECS, lpfSpec, mainsSpec, paSpec, settingsSpec, rfSettingsSpec, type NumberField } from '../../../src/core/spec';
 import { exampleText, readNumber } from '../../../src/core/spec/number-text';
+import { FORM_ONLY_SPECS } from '../../../src/core/spec/form-only';
+import { windingSpec } from '../../../src/core/spec/supply';
 
-const numberFields = ALL_SPECS.flatMap((s) =>
+// the forms that store nothing (new project, sweeps) offer examples too
+const numberFields = [...ALL_SPECS, ...FORM_ONLY_SPECS].flatMap((s) =>
   Object.entries(s.fields)
     .filter(([, f]) => f.type === 'number')
     .map(([k, f]) => [`${s.name}.${k}`, f as NumberField] as const),
@@ -54,6 +57,14 @@ describe('core AL per 100 turns', () => {
 describe('labels', () => {
   it('the PA reference power says what it is for', () => {
     expect(paSpec.fields.referencePowerW.label).toBe('Reference power for dB and S-units');
+  });
+
+  it('labels a builder asked about name the trade quantity: RF output, kits to build, the PA output load, regulation', () => {
+    expect(settingsSpec.fields.targetPowerW.label).toBe('Target RF output');
+    expect(settingsSpec.fields.kits.label).toBe('Kits to build');
+    expect(paSpec.fields.loadOhm.label).toBe('Output load (antenna side)');
+    // Source: transformer data sheets state regulation as the rise from full load to no load (common practice)
+    expect(windingSpec.fields.regulationFraction.help).toMatch(/full load to no load/);
   });
 
   it('the two duty settings each say what they are for and point to the other', () => {

@@ -109,8 +109,8 @@ describe('one limit per field: forms, project file and core agree', () => {
     expect(validateRfInputs(60e6, 2000)).toEqual([]);
     expect(validateRfInputs(10.11e6, 5000)).toMatchObject([{ field: 'targetPowerW' }]);
     // 5e-324 W is below the 1 mW floor (it printed "Infinity dB" once)
-    expect(validateRfInputs(10.11e6, 5e-324)).toMatchObject([{ field: 'targetPowerW', message: 'Target output must be at least 1 mW and at most 2 kW' }]);
-    expect(fileWith((p) => (p.targetPowerW = 5e-324))).toMatchObject({ ok: false, errors: ['project.targetPowerW: Target output must be at least 1 mW and at most 2 kW'] });
+    expect(validateRfInputs(10.11e6, 5e-324)).toMatchObject([{ field: 'targetPowerW', message: 'Target RF output must be at least 1 mW and at most 2 kW' }]);
+    expect(fileWith((p) => (p.targetPowerW = 5e-324))).toMatchObject({ ok: false, errors: ['project.targetPowerW: Target RF output must be at least 1 mW and at most 2 kW'] });
     expect(fileWith((p) => (p.frequencyHz = 100e6))).toMatchObject({ ok: false, errors: [expect.stringMatching(/^project\.frequencyHz: Operating frequency must be at least 100 kHz/)] });
     // the filter design checks the operating frequency with the same field (it allowed 10 kHz–1 GHz before)
     const filter = club30m.stages.find((s) => s.lpf)!.lpf!;
