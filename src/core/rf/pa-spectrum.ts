@@ -112,7 +112,22 @@ function trapezoidPoint(duty: number, tau: number): WavePoint {
   };
 }
 
+/** The same inputs give the same spectrum: remembered (bounded), since one evaluation asks for it once per pass. */
+const memo = new Map<string, PaSpectrum>();
+const MEMO_MAX = 256;
+
 export function paSpectrum(pa: SpectrumInput, harmonics: readonly number[] = [2, 3, 4, 5], opts: SpectrumOptions = {}): PaSpectrum {
+  const key = JSON.stringify([pa.topology, pa.amplifierClass, pa.conductionAngleDeg, pa.imbalanceTypical, pa.imbalanceWorst,
+    pa.transitionTimeS, harmonics, opts.frequencyHz, opts.classERdsRatio]);
+  const hit = memo.get(key);
+  if (hit) return hit;
+  const s = computeSpectrum(pa, harmonics, opts);
+  if (memo.size >= MEMO_MAX) memo.delete(memo.keys().next().value as string);
+  memo.set(key, s);
+  return s;
+}
+
+function computeSpectrum(pa: SpectrumInput, harmonics: readonly number[], opts: SpectrumOptions): PaSpectrum {
   const assumed: PaSpectrum['assumed'] = {};
   const take = (k: keyof typeof ASSUMED, v: number | null | undefined): number => {
     if (v !== null && v !== undefined && Number.isFinite(v)) return v;
@@ -188,7 +203,11 @@ export function paSpectrum(pa: SpectrumInput, harmonics: readonly number[] = [2,
     const basis: SpectrumBasis = cls === 'E' ? 'class-e-simulated' : cls === 'B' && !even ? 'saturation-bound' : 'cosine-pulse';
     return { n, bestDbc: toDbc(r.min), worstDbc: toDbc(r.max), basis };
   });
-  return { bands, assumed, conductionAngleDeg, imbalanceTypical: epsT, imbalanceWorst: epsW, waveform };
+  // shared between callers through the memo: frozen so nobody can change another's result
+  return Object.freeze({
+    bands: Object.freeze(bands.map((b) => Object.freeze(b))) as HarmonicBand[], assumed: Object.freeze(assumed),
+    conductionAngleDeg, imbalanceTypical: epsT, imbalanceWorst: epsW, waveform: Object.freeze(waveform),
+  });
 }
 
 /** Class D transition time used, s: entered, else ASSUMED (the spectrum's findings say so). */
