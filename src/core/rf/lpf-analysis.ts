@@ -163,13 +163,15 @@ export function chainMatrix(l: Ladder, frequencyHz: number): [Cx, Cx, Cx, Cx] {
 export type SourceKind = 'thevenin' | 'norton' | 'design-load';
 
 /**
- * Load voltage per unit of the source quantity through the ladder into the resistive load zl, with source impedance
+ * Load voltage per unit of the source quantity through the ladder into the load zl (Ω, or complex), with source impedance
  * zs (null = infinite, Norton only). Source: two-port chain relations (circuit theory, textbook; e.g. Pozar 2012,
  * section 4.4, from memory): V_L / E_s = Z_L / (A Z_L + B + Z_s (C Z_L + D)); Norton I_s = E_s / Z_s.
  */
-export function sourceTransfer(l: Ladder, frequencyHz: number, kind: SourceKind, zs: Cx | null, zlOhm = l.r0Ohm): Cx {
+export function sourceTransfer(
+  l: Ladder, frequencyHz: number, kind: SourceKind, zs: Cx | null, zlOhm: number | Cx = l.r0Ohm,
+): Cx {
   const [a, b, c, d] = chainMatrix(l, frequencyHz);
-  const zl: Cx = { re: zlOhm, im: 0 };
+  const zl: Cx = typeof zlOhm === 'number' ? { re: zlOhm, im: 0 } : zlOhm;
   const cz = cadd(cmul(c, zl), d);
   const az = cadd(cmul(a, zl), b);
   if (zs === null) {
@@ -204,17 +206,22 @@ export interface SourcedHarmonic {
 
 /**
  * Filter rejection of harmonics 2..5 relative to the fundamental with the PA's source impedance zsAt(n) (n = 1 the
- * fundamental): 20 log |H(f) / H(n f)|, H from sourceTransfer.
+ * fundamental): 20 log |H(f) / H(n f)|, H from sourceTransfer, as the current in the load zlAt(n) (50 Ω unless given;
+ * compliance is judged into the design load).
  */
 export function harmonicsFromSource(
   l: Ladder, f0Hz: number, kind: SourceKind, zsAt: (n: number) => Cx | null, ns: readonly number[] = [2, 3, 4, 5],
+  zlAt: (n: number) => Cx = () => ({ re: l.r0Ohm, im: 0 }),
 ): SourcedHarmonic[] {
   const mag = (x: Cx) => Math.hypot(x.re, x.im);
-  const h1 = mag(sourceTransfer(l, f0Hz, kind, zsAt(1)));
+  // voltage across the load's resistive part would differ from the load voltage for a complex load; the ratio of
+  // powers in the resistance is |I_L(n)| / |I_L(1)| = |V_L(n)/Z_L(n)| / |V_L(1)/Z_L(1)|
+  const inR = (n: number, v: Cx) => mag(v) / mag(zlAt(n));
+  const h1 = inR(1, sourceTransfer(l, f0Hz, kind, zsAt(1), zlAt(1)));
   const p1 = pointAt(l, f0Hz).lossDb;
   return ns.map((n) => {
     const zs = zsAt(n);
-    const hn = mag(sourceTransfer(l, n * f0Hz, kind, zs));
+    const hn = inR(n, sourceTransfer(l, n * f0Hz, kind, zs, zlAt(n)));
     // Source: definition of the decibel for voltage ratios, 20 log10
     return {
       n, relativeAttenuationDb: 20 * Math.log10(h1 / hn), relative50Db: pointAt(l, n * f0Hz).lossDb - p1,

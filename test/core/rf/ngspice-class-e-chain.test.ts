@@ -3,7 +3,8 @@
 // circle at four phases. The netlist is written here from scratch (element syntax per the ngspice user's manual).
 // The program's prediction: its class-E simulation at the load the filter presents (pa-swr classEStressAt, scaled
 // from its matched figures), and each harmonic's band (pa-spectrum, loaded Q 30 best to 5 worst) less the filter's
-// rejection from the stage's own series-tuned source (lpf-analysis harmonicsFromSource, pa-source).
+// rejection from the stage's own series-tuned source into the load at each harmonic (lpf-analysis harmonicsFromSource,
+// pa-source).
 // Invented design: 20 V, drain load 50 Ω (no transformer), 7.03 MHz, Rds(on) 0.05 Ω, nominal class-E values
 // C1 = 0.1836/(ωR), excess reactance 1.1525 R (Sokal and Sokal, IEEE JSSC SC-10(3), 1975, from memory), QL 30.
 import { spawnSync } from 'node:child_process';
@@ -31,6 +32,10 @@ const TOL_POWER = 0.05;
 const TOL_DRAIN = 0.05;
 // harmonic at the antenna: within the program's band widened by this much, dB (or both below the construction floor)
 const TOL_HARMONIC_DB = 3;
+// below the band's best end at the SWR loads, dB: the band is the stage's spectrum into its design load, and a class-E
+// waveform changes with the load it sees at the fundamental (about 8 dB lower at SWR 2, 0° here); the worst end,
+// on which compliance is judged, still bounds it within TOL_HARMONIC_DB
+const TOL_HARMONIC_BELOW_SWR_DB = 10;
 
 const F0 = 7.03e6;
 const VDD = 20;
@@ -123,6 +128,9 @@ const run = (d: LpfDesign, zl: C, name: string) => {
   return cache.get(name)!;
 };
 
+/** The load at harmonic n: its resistance with the series reactance scaled as an inductor (n X) or capacitor (X/n). */
+const loadAt = (zl: C) => (n: number): C => ({ re: zl.re, im: zl.im >= 0 ? n * zl.im : zl.im / n });
+
 describe.skipIf(!haveNgspice)('class E + low-pass filter in ngspice vs the program', () => {
   const dd = designLpf(lpfParams({ inductorQ: 10000, capacitorQ: 100000 }), F0);
   if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
@@ -131,6 +139,8 @@ describe.skipIf(!haveNgspice)('class E + low-pass filter in ngspice vs the progr
     amplifierClass: 'E', topology: 'single-ended', devices: 1, turnsRatio: 1, loadOhm: R, rdsOnOhm: RON, saturationV: null, efficiency: 0.9,
   });
   const pa = evaluatePa(paIn, VDD, { targetPowerW: 5, ambientC: 25, keyingDuty: 0.4 });
+  const bands = paSpectrum(paIn, [2, 3], { frequencyHz: F0, classERdsRatio: RON / R }).bands;
+  const src = paSource({ pa: paIn, primaryOhm: R, peakDeviceA: pa.peakDeviceA, classESimulated: true });
   const m = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
   const loads: [string, C][] = [
     ['50 ohm', { re: R, im: 0 }],
@@ -148,26 +158,25 @@ describe.skipIf(!haveNgspice)('class E + low-pass filter in ngspice vs the progr
       expect(Math.abs(s.vdpk / pred.drainPeakV - 1), `drain: ngspice ${s.vdpk.toFixed(1)} V, program ${pred.drainPeakV.toFixed(1)} V`).toBeLessThanOrEqual(TOL_DRAIN);
       expect(Math.abs(s.pout / pred.outputW - 1), `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`).toBeLessThanOrEqual(TOL_POWER);
     });
-  }
-  it('50 ohm: harmonics 2 and 3 at the antenna lie in the program\'s band (or both below the construction floor)', () => {
-    const s = run(d, { re: R, im: 0 }, '50_ohm');
-    const bands = paSpectrum(paIn, [2, 3], { frequencyHz: F0, classERdsRatio: RON / R }).bands;
-    const src = paSource({ pa: paIn, primaryOhm: R, peakDeviceA: pa.peakDeviceA, classESimulated: true });
-    const rows = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt, [2, 3]);
-    for (const n of [2, 3]) {
-      const spiceDbc = 20 * Math.log10(s.harm.get(n)! / s.harm.get(1)!);
-      const rej = rows.find((r) => r.n === n)!.relativeAttenuationDb;
-      const b = bands.find((x) => x.n === n)!;
-      const lo = b.bestDbc - rej;
-      const hi = b.worstDbc - rej;
-      const msg = `n=${n}: ngspice ${spiceDbc.toFixed(1)} dBc, program ${lo.toFixed(1)} to ${hi.toFixed(1)} dBc`;
-      if (hi < CONSTRUCTION_FLOOR_DBC) {
-        // the program says "limited by construction": ngspice's ideal circuit must be below the floor too
-        expect(spiceDbc, msg).toBeLessThan(CONSTRUCTION_FLOOR_DBC + TOL_HARMONIC_DB);
-      } else {
-        expect(spiceDbc, msg).toBeGreaterThanOrEqual(lo - TOL_HARMONIC_DB);
-        expect(spiceDbc, msg).toBeLessThanOrEqual(hi + TOL_HARMONIC_DB);
+    it(`${name}: harmonics 2 and 3 at the antenna lie in the program's band (or both below the construction floor)`, () => {
+      const s = run(d, zl, name.replace(/\W+/g, '_'));
+      // the program's band from the series-tuned source, through the filter into this load at each harmonic
+      const rows = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt, [2, 3], loadAt(zl));
+      for (const n of [2, 3]) {
+        const spiceDbc = 20 * Math.log10(s.harm.get(n)! / s.harm.get(1)!);
+        const rej = rows.find((r) => r.n === n)!.relativeAttenuationDb;
+        const b = bands.find((x) => x.n === n)!;
+        const lo = b.bestDbc - rej;
+        const hi = b.worstDbc - rej;
+        const msg = `n=${n}: ngspice ${spiceDbc.toFixed(1)} dBc, program ${lo.toFixed(1)} to ${hi.toFixed(1)} dBc`;
+        if (hi < CONSTRUCTION_FLOOR_DBC) {
+          // the program says "limited by construction": ngspice's ideal circuit must be below the floor too
+          expect(spiceDbc, msg).toBeLessThan(CONSTRUCTION_FLOOR_DBC + TOL_HARMONIC_DB);
+        } else {
+          expect(spiceDbc, msg).toBeGreaterThanOrEqual(lo - (zl.re === R && zl.im === 0 ? TOL_HARMONIC_DB : TOL_HARMONIC_BELOW_SWR_DB));
+          expect(spiceDbc, msg).toBeLessThanOrEqual(hi + TOL_HARMONIC_DB);
+        }
       }
-    }
-  });
+    });
+  }
 });

@@ -34,9 +34,9 @@ const DRAIN_ABOVE = 0.05;
 // device current: between the load-line peak (less 10 %) and the program's undamped bound (plus 5 %)
 const CURRENT_BELOW_LOAD_LINE = 0.1;
 const CURRENT_ABOVE = 0.05;
-// the 3rd harmonic at the load, dB both ways: the trapezoidal edges and the transformer's leakage are not in the
-// source model
-const TOL_HARMONIC_DB = 3;
+// the 3rd harmonic at the load, dB both ways: the switch edges (1 % of the period) and the transformer's leakage are
+// not in the source model (they differ by under 1 dB here)
+const TOL_HARMONIC_DB = 1.5;
 
 const F0 = 7.03e6;
 const VDD = 12;
@@ -104,7 +104,14 @@ afterAll(() => {
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 
+const cache = new Map<string, ReturnType<typeof spiceRun>>();
+/** One ngspice run per load, shared by the tests of that load. */
 function run(d: LpfDesign, zl: C, name: string) {
+  if (!cache.has(name)) cache.set(name, spiceRun(d, zl, name));
+  return cache.get(name)!;
+}
+
+function spiceRun(d: LpfDesign, zl: C, name: string) {
   const file = join(dir, `${name}.cir`);
   writeFileSync(file, netlist(d, zl));
   const r = spawnSync(NGSPICE as string, ['-b', file], { cwd: dir, encoding: 'utf8' });
@@ -127,6 +134,9 @@ describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs
   const leakageH = lHalf * (1 - KCOUP ** 2);
   const base = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
   const matched = { ...base, ring: { leakageH, cossF: COSS } };
+  // ideal square wave (no transition time given): odd harmonics 1/n
+  const band3 = paSpectrum({ topology: 'push-pull', amplifierClass: 'D', imbalanceTypical: 0, imbalanceWorst: 0 }).bands.find((b) => b.n === 3)!;
+  const src = paSource({ pa: paParams({ amplifierClass: 'D', topology: 'push-pull', rdsOnOhm: RON, saturationV: null }), primaryOhm: R0, peakDeviceA: pa.peakDeviceA, classESimulated: false });
   const loads: [string, C][] = [
     ['50 ohm', { re: R0, im: 0 }],
     ...[0, 90, 180, 270].map((ph): [string, C] => {
@@ -150,14 +160,14 @@ describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs
       expect(s.i1pk, iMsg).toBeGreaterThanOrEqual(loadLine.peakDeviceA * (1 - CURRENT_BELOW_LOAD_LINE));
       expect(s.i1pk, iMsg).toBeLessThanOrEqual(pred.peakDeviceA * (1 + CURRENT_ABOVE));
     });
+    it(`${name}: the 3rd harmonic at the load from the stiff source, into this load at 3f`, () => {
+      const s = run(d, zl, name.replace(/\W+/g, '_'));
+      const spiceDbc = 20 * Math.log10(s.harm.get(3)! / s.harm.get(1)!);
+      // the load at 3f: its resistance with the series reactance scaled as an inductor (3X) or a capacitor (X/3)
+      const zlAt = (n: number): C => ({ re: zl.re, im: zl.im >= 0 ? n * zl.im : zl.im / n });
+      const rows = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt, [3], zlAt);
+      const predicted = band3.worstDbc - rows[0].relativeAttenuationDb;
+      expect(Math.abs(spiceDbc - predicted), `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`).toBeLessThanOrEqual(TOL_HARMONIC_DB);
+    });
   }
-  it('50 ohm: the 3rd harmonic at the load from the stiff source lies within the stated tolerance', () => {
-    const s = run(d, { re: R0, im: 0 }, 'harm50');
-    const spiceDbc = 20 * Math.log10(s.harm.get(3)! / s.harm.get(1)!);
-    const band = paSpectrum({ topology: 'push-pull', amplifierClass: 'D', imbalanceTypical: 0, imbalanceWorst: 0 }).bands.find((b) => b.n === 3)!;
-    const src = paSource({ pa: paParams({ amplifierClass: 'D', topology: 'push-pull', rdsOnOhm: RON, saturationV: null }), primaryOhm: R0, peakDeviceA: pa.peakDeviceA, classESimulated: false });
-    const rows = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt);
-    const predicted = band.worstDbc - rows.find((r) => r.n === 3)!.relativeAttenuationDb;
-    expect(Math.abs(spiceDbc - predicted), `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`).toBeLessThanOrEqual(TOL_HARMONIC_DB);
-  });
 });
