@@ -83,6 +83,8 @@ interface Circuit {
   h: number;
   steps: number;
   vpk: number;
+  /** sin(2 pi n / steps), n = 0..steps */
+  sin: Float64Array;
 }
 
 interface Work {
@@ -165,7 +167,7 @@ function cycle(cir: Circuit, v0: Float64Array, wk: Work, st?: Stats): Float64Arr
   let x = 0;
   const half = cir.steps / 2;
   for (let n = 1; n <= cir.steps; n++) {
-    const vs = cir.vpk * Math.sin((2 * Math.PI * n) / cir.steps);
+    const vs = cir.vpk * cir.sin[n];
     x = step(cir, wk, vs, x);
     if (n === half || n === cir.steps) {
       // a pulse still running at the zero crossing: cut (the frame is rectified), and said
@@ -212,6 +214,17 @@ function solve(mat: number[][], r: number[]): boolean {
   return true;
 }
 
+const SINES = new Map<number, Float64Array>();
+function sineTable(steps: number): Float64Array {
+  let t = SINES.get(steps);
+  if (!t) {
+    t = Float64Array.from({ length: steps + 1 }, (_, n) => Math.sin((2 * Math.PI * n) / steps));
+    if (SINES.size > 8) SINES.clear();
+    SINES.set(steps, t);
+  }
+  return t;
+}
+
 function circuitOf(input: JointInput): Circuit {
   const steps = Math.max(100, Math.min(20000, 2 * Math.round((input.stepsPerCycle ?? 1000) / 2)));
   const vpk = Math.SQRT2 * input.primaryVrms;
@@ -227,7 +240,7 @@ function circuitOf(input: JointInput): Circuit {
   });
   return {
     ws, rp: Math.max(0, input.primaryOhm), lp: Math.max(0, input.primaryH ?? 0), h: 1 / input.frequencyHz / steps,
-    steps, vpk,
+    steps, vpk, sin: sineTable(steps),
   };
 }
 
@@ -243,17 +256,36 @@ const key = (input: JointInput, withLoads: boolean) => JSON.stringify([
  */
 export function simulateSharedPrimary(input: JointInput): JointResult {
   const memo = simulationScope<JointResult>('joint');
-  const warm = simulationScope<Float64Array>('joint-warm');
+  const warm = simulationScope<Warm>('joint-warm');
   const exact = memo ? key(input, true) : '';
   const held = memo?.get(exact);
   if (held) return held;
   const circuitKey = warm ? key(input, false) : '';
-  const result = simulateUncached(input, warm?.get(circuitKey), (v) => warm?.set(circuitKey, v));
+  // the same transformer at another mains voltage (another corner): its state scaled to this one's no-load peaks
+  const familyKey = warm ? key({ ...input, primaryVrms: 0, windings: input.windings.map((w) => ({ ...w, secondaryVrms: 0 })) }, false) : '';
+  const start = warm?.get(circuitKey) ?? warm?.get(familyKey);
+  const result = simulateUncached(input, start, (w) => {
+    warm?.set(circuitKey, w);
+    warm?.set(familyKey, w);
+  });
   memo?.set(exact, result);
   return result;
 }
 
-function simulateUncached(input: JointInput, start?: Float64Array, onSteady?: (v0: Float64Array) => void): JointResult {
+/** A converged cycle-start state and the Jacobian of F there (its rows), for a warm start of the same circuit. */
+interface Warm {
+  x: Float64Array;
+  jac: number[][];
+  /** The no-load peaks it was found at (V), to scale it to another mains voltage. */
+  top: Float64Array;
+}
+
+const freshStats = (m: number): Stats => ({
+  lo: new Float64Array(m).fill(Infinity), hi: new Float64Array(m).fill(-Infinity), sum: new Float64Array(m),
+  pk: new Float64Array(m), sq: new Float64Array(m), overlap: false,
+});
+
+function simulateUncached(input: JointInput, start?: Warm, onSteady?: (w: Warm) => void): JointResult {
   const cir = circuitOf(input);
   const m = cir.ws.length;
   const maxCycles = input.maxCycles ?? 200;
@@ -263,14 +295,24 @@ function simulateUncached(input: JointInput, start?: Float64Array, onSteady?: (v
   };
   const top = Float64Array.from(cir.ws.map((w) => w.noLoadV));
   const tol = 1e-5 * Math.max(1, ...top);
-  let x: Float64Array = start && start.length === m ? Float64Array.from(start) : Float64Array.from(top, (v) => 0.95 * v);
+  const warmOk = start && start.x.length === m;
+  let x: Float64Array = warmOk
+    ? Float64Array.from(start.x, (v, i) => (start.top[i] > 0 ? Math.min(top[i], (v * top[i]) / start.top[i]) : v))
+    : Float64Array.from(top, (v) => 0.95 * v);
+  // the Jacobian carried from the warm start, updated by Broyden's rank-one rule and recomputed by finite differences
+  // when a step with it fails to shrink the residual
+  let jac: number[][] | null = warmOk ? start.jac.map((r) => [...r]) : null;
   let cycles = 0;
   let converged = false;
+  let st = freshStats(m);
+  let prev: { x: Float64Array; f: number[]; norm: number } | null = null;
   // Source: shooting method for periodic steady states (Aprille & Trick, Proc. IEEE 60(1), 1972; from memory):
-  // Newton on F(x) = P(x) - x, P the one-cycle map, Jacobian by finite differences; a step that does not reduce
-  // the residual falls back to one plain cycle x <- P(x)
+  // Newton on F(x) = P(x) - x, P the one-cycle map; Jacobian by finite differences, kept between steps with
+  // Broyden's update (Broyden, Math. Comp. 19, 1965; from memory). The statistics are those of the last cycle, run
+  // from the converged start.
   while (cycles < maxCycles) {
-    const p = cycle(cir, x, wk);
+    st = freshStats(m);
+    const p = cycle(cir, x, wk, st);
     cycles++;
     const f = Array.from(p, (v, i) => v - x[i]);
     const norm = Math.max(...f.map(Math.abs));
@@ -278,28 +320,43 @@ function simulateUncached(input: JointInput, start?: Float64Array, onSteady?: (v
       converged = true;
       break;
     }
-    const jac: number[][] = [];
-    for (let i = 0; i < m; i++) jac.push(new Array<number>(m).fill(0));
-    const delta = 1e-4 * Math.max(1, ...top);
-    for (let col = 0; col < m && cycles < maxCycles; col++) {
-      const xp = Float64Array.from(x);
-      xp[col] += delta;
-      const pp = cycle(cir, xp, wk);
-      cycles++;
-      for (let row = 0; row < m; row++) jac[row][col] = (pp[row] - p[row]) / delta - (row === col ? 1 : 0);
+    if (jac && prev) {
+      if (norm < prev.norm) {
+        // Broyden: J += (ΔF - J Δx) Δxᵀ / (Δxᵀ Δx)
+        const dx = Array.from(x, (v, i) => v - prev!.x[i]);
+        const dd = dx.reduce((a, v) => a + v * v, 0);
+        if (dd > 0) {
+          for (let r = 0; r < m; r++) {
+            const jdx = jac[r].reduce((a, v, c) => a + v * dx[c], 0);
+            const k = (f[r] - prev.f[r] - jdx) / dd;
+            for (let c = 0; c < m; c++) jac[r][c] += k * dx[c];
+          }
+        }
+      } else {
+        jac = null;
+      }
     }
+    if (!jac) {
+      jac = [];
+      for (let i = 0; i < m; i++) jac.push(new Array<number>(m).fill(0));
+      const delta = 1e-4 * Math.max(1, ...top);
+      for (let col = 0; col < m && cycles < maxCycles; col++) {
+        const xp = Float64Array.from(x);
+        xp[col] += delta;
+        const pp = cycle(cir, xp, wk);
+        cycles++;
+        for (let row = 0; row < m; row++) jac[row][col] = (pp[row] - p[row]) / delta - (row === col ? 1 : 0);
+      }
+    }
+    prev = { x, f, norm };
     const rhs = f.map((v) => -v);
-    const next = solve(jac, rhs) ? Float64Array.from(x, (v, i) => Math.min(top[i], Math.max(0, v + rhs[i]))) : p;
+    const next = solve(jac.map((r) => [...r]), rhs)
+      ? Float64Array.from(x, (v, i) => Math.min(top[i], Math.max(0, v + rhs[i]))) : p;
     x = next.every((v) => Number.isFinite(v)) ? next : p;
   }
-  if (converged) onSteady?.(x);
-  const st: Stats = {
-    lo: new Float64Array(m).fill(Infinity), hi: new Float64Array(m).fill(-Infinity), sum: new Float64Array(m),
-    pk: new Float64Array(m), sq: new Float64Array(m), overlap: false,
-  };
-  cycle(cir, x, wk, st);
+  if (converged && jac) onSteady?.({ x, jac, top });
   return {
-    converged, cycles: cycles + 1, overlap: st.overlap,
+    converged, cycles, overlap: st.overlap,
     rails: cir.ws.map((_, i) => ({
       troughV: st.lo[i], peakV: st.hi[i], dcMeanV: st.sum[i] / cir.steps, peakA: st.pk[i],
       rmsA: Math.sqrt(st.sq[i] / cir.steps),
