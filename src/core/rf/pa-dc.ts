@@ -1,6 +1,7 @@
 // The PA's DC input from its waveform (pa-spectrum): the same waveforms give the output, the DC current the supply
 // budget carries and the harmonic bands, so the three cannot contradict each other.
 import type { PaWaveform } from './pa-spectrum';
+import type { PaSwrStress, Worst } from './pa-swr';
 
 export interface PaWaveformSummary {
   model: PaWaveform['model'];
@@ -59,4 +60,19 @@ export function bandFigures(w: PaWaveform, designOutputW: number, railV: number,
     if (i * railV - out > hottest.dcInputW - hottest.outputW) hottest = { outputW: out, dcInputW: i * railV };
   }
   return { designCurrentA, bandMaxCurrentA, bandMaxOutputW, hottest };
+}
+
+/**
+ * Key-down DC current into the worst point of the SWR circle (A, with bias), from the circle's output and
+ * dissipation: DC input = dissipation − bias + output (energy balance), scaled from the hot supply to the design
+ * current. null when the circle has one point (SWR 1).
+ */
+export function swrKeyDownCurrent(swr: PaSwrStress, biasW: number, matchedDcW: number, designCurrentA: number, biasA: number): { currentA: number; at: Worst } | null {
+  if (swr.points.length < 2 || !(matchedDcW > 0)) return null;
+  const dcOf = (p: PaSwrStress['points'][number]) => Math.max(0, p.dissipationW - biasW) + p.outputW;
+  const worst = swr.points.reduce((a, b) => (dcOf(b) > dcOf(a) ? b : a));
+  return {
+    currentA: (designCurrentA * dcOf(worst)) / matchedDcW + biasA,
+    at: { value: dcOf(worst), phaseDeg: worst.phaseDeg, loadReOhm: worst.loadReOhm, loadImOhm: worst.loadImOhm },
+  };
 }

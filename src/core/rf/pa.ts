@@ -5,9 +5,9 @@ import { MIN_TARGET_POWER_W, validatePaParams, validateThermalInputs } from './l
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
-import { describeLoad, swrStress, type PaSwrStress, type Worst } from './pa-swr';
+import { describeLoad, swrStress, type PaSwrStress } from './pa-swr';
 import { paSpectrum, switchingPowerShape, type PaSpectrum } from './pa-spectrum';
-import { bandFigures, idealEfficiency, type PaWaveformSummary } from './pa-dc';
+import { bandFigures, idealEfficiency, swrKeyDownCurrent, type PaWaveformSummary } from './pa-dc';
 import { waveformFindings } from './pa-spectrum-findings';
 import { classEShuntFindings, swrFindings } from './pa-swr-findings';
 import { usablePositive } from '../numeric';
@@ -300,21 +300,6 @@ function classERdsRatio(pa: PaParams, primaryOhm: number, peakA: number, railV: 
   const rds = pa.rdsOnOhm ?? (peakA > 0 ? Math.min(pa.saturationV ?? 0, railV) / peakA : 0);
   // three significant figures: the passes of one evaluation (rail voltages a few mV apart) share one simulation
   return Number((rds / half).toPrecision(3));
-}
-
-/**
- * Key-down DC current into the worst point of the SWR circle (A, with bias), from the circle's output and
- * dissipation: DC input = dissipation − bias + output (energy balance), scaled from the hot supply to the design
- * current. null when the circle has one point (SWR 1).
- */
-function swrKeyDownCurrent(swr: PaSwrStress, biasW: number, matchedDcW: number, designCurrentA: number, biasA: number): { currentA: number; at: Worst } | null {
-  if (swr.points.length < 2 || !(matchedDcW > 0)) return null;
-  const dcOf = (p: PaSwrStress['points'][number]) => Math.max(0, p.dissipationW - biasW) + p.outputW;
-  const worst = swr.points.reduce((a, b) => (dcOf(b) > dcOf(a) ? b : a));
-  return {
-    currentA: (designCurrentA * dcOf(worst)) / matchedDcW + biasA,
-    at: { value: dcOf(worst), phaseDeg: worst.phaseDeg, loadReOhm: worst.loadReOhm, loadImOhm: worst.loadImOhm },
-  };
 }
 
 /** A computed current, or the findings that say why it cannot be computed (never a silent 0). */
