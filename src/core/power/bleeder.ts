@@ -73,10 +73,10 @@ export function bleederFindings(railName: string, b: BleederReport): Finding[] {
 }
 
 /** The fitted bleeder's dissipation at the highest voltage against its rating derated to BLEEDER_DERATING. */
-export function bleederPowerFindings(railName: string, b: Pick<BleederReport, 'fittedW' | 'startV' | 'ratedW'>): Finding[] {
+export function bleederPowerFindings(railName: string, b: Pick<BleederReport, 'fittedW' | 'startV' | 'ratedW'>, where = 'no load, high mains'): Finding[] {
   if (b.fittedW === null) return [];
   const base = { rule: 'bleeder.power', subject: `${railName} bleeder`, value: b.fittedW, unit: 'W', source: 'supply.bleeder-power' as const };
-  const p = `${b.fittedW.toFixed(2)} W at ${b.startV.toFixed(1)} V (no load, high mains)`;
+  const p = `${b.fittedW.toFixed(2)} W at ${b.startV.toFixed(1)} V (${where})`;
   if (b.ratedW === null) return [{ ...base, limit: null, severity: 'caution', message: `The bleeder dissipates ${p}; its power rating is not stated: use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];
   const limit = b.ratedW * BLEEDER_DERATING;
   if (b.fittedW > b.ratedW) return [{ ...base, limit, severity: 'fail', message: `The bleeder dissipates ${p}, more than its ${b.ratedW} W rating: it will overheat. Use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];

@@ -110,7 +110,7 @@ const fmtOhm = (r: number) => (r >= 1000 ? `${Number((r / 1000).toPrecision(2))}
 export function regulatedBleederFindings(railName: string, b: RegulatedBleederReport): Finding[] {
   const base = { rule: 'bleeder.regulated', subject: `${railName} output`, source: 'supply.bleeder-regulated' as const };
   const suggest = b.suggestedOhm !== null ? ` A ${fmtOhm(b.suggestedOhm)} bleeder (${(b.suggestedW! / 0.5).toFixed(2)} W rating or more) would do it.` : '';
-  const power = b.fittedW !== null ? bleederPowerFindings(railName, { fittedW: b.fittedW, startV: b.startV, ratedW: b.ratedW }) : [];
+  const power = b.fittedW !== null ? bleederPowerFindings(railName, { fittedW: b.fittedW, startV: b.startV, ratedW: b.ratedW }, 'the set output') : [];
   const high = b.startV > SAFE_DC_V;
   if (b.fittedTimeS !== null) {
     const late = high && b.fittedTimeS > SAFE_TIME_S;
