@@ -1,6 +1,6 @@
 // Everything derived from a spec: the check of a stored (SI) object, the form text of an object, the parse of a
 // submitted form back to SI, and the defaults of a new object. Pure; the zod wrappers live at the edges.
-import type { Field, FieldError, Spec, TextField } from './field';
+import type { CodecContext, Field, FieldError, Spec, TextField } from './field';
 import { formName } from './field';
 import { numberText, rangeProblem, readNumber } from './number-text';
 
@@ -69,12 +69,14 @@ export function validate(spec: Spec, stored: unknown): FieldError[] {
 export function formValues(spec: Spec, stored: unknown): Record<string, string> {
   const obj = spec.view && stored ? spec.view.from(stored as Obj) : stored;
   const out: Record<string, string> = {};
-  for (const [key, f] of Object.entries(spec.fields)) {
+  const ctx = moneyContext(spec, stored);
+  for (const [key, f0] of Object.entries(spec.fields)) {
+    const f = withMoney(f0, ctx);
     const v = getPath(obj, key);
     const name = formName(key, f);
     if (f.type === 'number') out[name] = typeof v === 'number' ? numberText(v, f) : '';
     else if (f.type === 'bool') out[name] = v === true ? 'true' : '';
-    else if (f.type === 'text' && f.codec) out[name] = v === null || v === undefined ? '' : f.codec.toText(v);
+    else if (f.type === 'text' && f.codec) out[name] = v === null || v === undefined ? '' : f.codec.toText(v, ctx);
     else out[name] = typeof v === 'string' ? v : '';
   }
   return out;
@@ -83,7 +85,14 @@ export function formValues(spec: Spec, stored: unknown): Record<string, string> 
 export type FormParse = { ok: true; value: Obj } | { ok: false; errors: Record<string, string> };
 
 /** Read one submitted field; the message names the field. */
-export function readField(f: Field, raw: string | undefined): { ok: true; value: unknown } | { ok: false; message: string } {
+/** The decimals of an object's money (spec.moneyDigits), for its money fields and codecs; {} when the spec has none. */
+function moneyContext(spec: Spec, obj: unknown): CodecContext {
+  return spec.moneyDigits && obj !== null && typeof obj === 'object' ? { moneyDigits: spec.moneyDigits(obj as Obj) } : {};
+}
+const withMoney = (f: Field, ctx: CodecContext): Field =>
+  f.type === 'number' && f.money && ctx.moneyDigits !== undefined ? { ...f, moneyDigits: ctx.moneyDigits } : f;
+
+export function readField(f: Field, raw: string | undefined, ctx: CodecContext = {}): { ok: true; value: unknown } | { ok: false; message: string } {
   const text = raw ?? '';
   switch (f.type) {
     case 'number': {
@@ -106,7 +115,7 @@ export function readField(f: Field, raw: string | undefined): { ok: true; value:
       if (f.pattern && v !== '' && !f.pattern.re.test(v)) return { ok: false, message: `${f.label} ${f.pattern.says}; you entered "${typed}"` };
       if (v.length > f.max) return { ok: false, message: `${f.label} is longer than ${f.max} characters` };
       if (f.codec) {
-        const r = f.codec.fromText(v);
+        const r = f.codec.fromText(v, ctx);
         return r.ok ? r : { ok: false, message: `${f.label}: ${r.message}` };
       }
       return { ok: true, value: v };
@@ -123,8 +132,10 @@ export function readField(f: Field, raw: string | undefined): { ok: true; value:
 export function parseForm(spec: Spec, values: Record<string, string | undefined>): FormParse {
   const value: Obj = {};
   const errors: Record<string, string> = {};
-  for (const [key, f] of Object.entries(spec.fields)) {
-    const r = readField(f, values[formName(key, f)]);
+  const ctx = moneyContext(spec, values);
+  for (const [key, f0] of Object.entries(spec.fields)) {
+    const f = withMoney(f0, ctx);
+    const r = readField(f, values[formName(key, f)], ctx);
     if (r.ok) setPath(value, key, r.value);
     else errors[formName(key, f)] = r.message;
   }

@@ -25,6 +25,8 @@ export interface NumberField extends Base {
   integer?: boolean;
   /** money: stored as integer minor units (cents, unit ''), typed in the major unit with at most two decimals */
   money?: boolean;
+  /** money only: the decimals of the box, the currency's ISO 4217 minor unit (JPY 0, KWD 3); absent = 2 */
+  moneyDigits?: number;
   optional?: boolean; // an empty box is stored as null (meaning "not chosen yet" / "compute it")
   /** an empty box means this value (said in the help line: "empty = none drawn"); the stored value is a number */
   emptyAs?: number;
@@ -39,10 +41,15 @@ export interface ChoiceField extends Base {
 }
 
 /** A text box whose stored value is not the text itself (a list, a table): both directions and the stored check. */
+/** What a codec may need of the object it is part of: the decimals of its money amounts (absent = 2). */
+export interface CodecContext {
+  moneyDigits?: number;
+}
+
 export interface TextCodec {
-  toText: (stored: unknown) => string;
+  toText: (stored: unknown, ctx?: CodecContext) => string;
   /** the stored value of typed text, or a message (without the label) saying what is wrong and where */
-  fromText: (text: string) => { ok: true; value: unknown } | { ok: false; message: string };
+  fromText: (text: string, ctx?: CodecContext) => { ok: true; value: unknown } | { ok: false; message: string };
   /** what is wrong with a stored value ('' when fine), without the label */
   check: (stored: unknown) => string;
 }
@@ -92,6 +99,11 @@ export interface Spec {
   rowName?: (row: number, key: string) => string;
   /** where the stored shape differs from the fields (three checkboxes for a list of modes): stored <-> fields */
   view?: { from: (stored: Record<string, unknown>) => Record<string, unknown>; to: (fields: Record<string, unknown>) => Record<string, unknown> };
+  /**
+   * Decimals of the object's money boxes (its currency's ISO 4217 minor unit), read from the stored object or from the
+   * submitted form text; absent = 2. Money fields and codecs of the spec are written and read with these decimals.
+   */
+  moneyDigits?: (obj: Record<string, unknown>) => number;
 }
 
 export const defineSpec = <S extends Spec>(spec: S): S => spec;

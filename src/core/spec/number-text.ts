@@ -19,7 +19,7 @@ const AREA_DIVISOR: Record<string, number> = { mm: 1e6, cm: 1e4, m: 1 };
 export function readNumber(text: string, f: NumberField): NumberParse {
   const raw = String(text ?? '').trim();
   if (f.money) {
-    const m = moneyCents(raw);
+    const m = moneyCents(raw, f.moneyDigits);
     if (!m.ok) return m;
     const problem = rangeProblem(m.value, f);
     return problem ? { ok: false, message: `${problem}; you entered "${raw}"` } : m;
@@ -62,7 +62,7 @@ export function rangeProblem(value: number, f: NumberField): string {
 
 /** A limit as the builder reads it: in the display unit, or with a prefix for very large or small values. */
 export function show(value: number, f: NumberField): string {
-  if (f.money) return `${moneyText(value)}${f.display.symbol ? ' ' + f.display.symbol : ''}`;
+  if (f.money) return `${moneyText(value, f.moneyDigits)}${f.display.symbol ? ' ' + f.display.symbol : ''}`;
   if (f.unit === '%') return `${percentText(value)} %`;
   if (hasPrefixes(f.unit)) return formatValue(value, f.unit, 4);
   const sym = f.display.symbol;
@@ -113,7 +113,7 @@ export function exampleNumber(f: NumberField): string {
   const round = [1, 10, 100, 1000, 0.1, 10_000, 0.01].map((n) => inDisplay(n, f.display.scale));
   const mid = (f.min + f.max) / 2;
   const value = [f.default, ...round, f.integer ? Math.round(mid) : mid].find(fits) ?? f.default ?? f.min;
-  if (f.money) return moneyText(value);
+  if (f.money) return moneyText(value, f.moneyDigits);
   const bare = f.display.scale < 1 ? value * Math.round(1 / f.display.scale) : value / f.display.scale;
   return String(Number(bare.toPrecision(6)));
 }
@@ -121,7 +121,7 @@ export function exampleNumber(f: NumberField): string {
 /** The text put back into the box for a stored SI value; it parses back to exactly the same value. */
 export function numberText(value: number | null, f: NumberField): string {
   if (value === null || !Number.isFinite(value)) return '';
-  if (f.money) return moneyText(value);
+  if (f.money) return moneyText(value, f.moneyDigits);
   if (f.unit === '%') return percentText(value);
   if (f.display.scale !== 1) {
     const bare = value / f.display.scale;
@@ -134,16 +134,34 @@ export function numberText(value: number | null, f: NumberField): string {
   return f.display.scale !== 1 && BARE.test(text) ? `${text} ${f.unit}` : text;
 }
 
-/** Whole cents as major-unit text with two decimals (850 -> "8.50"). */
-export const moneyText = (cents: number): string => (Number.isInteger(cents) ? `${cents < 0 ? '-' : ''}${Math.floor(Math.abs(cents) / 100)}.${String(Math.abs(cents) % 100).padStart(2, '0')}` : String(cents / 100));
+/**
+ * Whole minor units as the major-unit text of a currency with `digits` decimals (ISO 4217 minor unit; 2 when not
+ * given): 95 -> "0.95", JPY (0) 150 -> "150", KWD (3) 125 -> "0.125".
+ */
+export function moneyText(cents: number, digits = 2): string {
+  if (!Number.isInteger(cents)) return String(cents / 10 ** digits);
+  const per = 10 ** digits;
+  const whole = `${cents < 0 ? '-' : ''}${Math.floor(Math.abs(cents) / per)}`;
+  return digits === 0 ? whole : `${whole}.${String(Math.abs(cents) % per).padStart(digits, '0')}`;
+}
 
-/** An amount typed in the major unit ("0.95", "12", "0,95") -> whole cents; more than two decimals is refused
- *  (amounts are kept in whole cents, never rounded silently). The message has no label. */
-export function moneyCents(input: string): NumberParse {
+const DECIMALS_WORD = ['no', 'one', 'two', 'three', 'four'];
+
+/**
+ * An amount typed in the major unit ("0.95", "12", "0,95") -> whole minor units of a currency with `digits` decimals
+ * (2 when not given); more decimals than that are refused (amounts are kept in whole minor units, never rounded
+ * silently). The message has no label.
+ */
+export function moneyCents(input: string, digits = 2): NumberParse {
   const t = input.trim();
   const m = /^(\d*)(?:[.,](\d*))?$/.exec(t);
-  if (!m || (m[1] + (m[2] ?? '')) === '') return { ok: false, message: `"${t}" is not an amount: enter e.g. 0.95` };
-  if ((m[2] ?? '').length > 2) return { ok: false, message: `"${t}" has more than two decimals; amounts are kept in whole cents` };
-  const cents = Number(m[1] || '0') * 100 + Number((m[2] ?? '').padEnd(2, '0'));
+  if (!m || (m[1] + (m[2] ?? '')) === '') return { ok: false, message: `"${t}" is not an amount: enter e.g. ${digits === 0 ? '150' : `0.${'9'.padEnd(digits, '5')}`}` };
+  // zeros beyond the minor unit change nothing ("150.00" yen is 150 yen)
+  const frac = (m[2] ?? '').length > digits && /^0*$/.test((m[2] ?? '').slice(digits)) ? (m[2] ?? '').slice(0, digits) : (m[2] ?? '');
+  if (frac.length > digits) {
+    if (digits === 2) return { ok: false, message: `"${t}" has more than two decimals; amounts are kept in whole cents` };
+    return { ok: false, message: digits === 0 ? `"${t}" has decimals; this currency has none (ISO 4217 minor unit)` : `"${t}" has more than ${DECIMALS_WORD[digits] ?? digits} decimals; amounts are kept in whole minor units (ISO 4217)` };
+  }
+  const cents = Number(m[1] || '0') * 10 ** digits + Number(frac.padEnd(digits, '0') || '0');
   return Number.isSafeInteger(cents) ? { ok: true, value: cents } : { ok: false, message: `"${t}" is too large` };
 }

@@ -108,20 +108,24 @@ export const ratingsCodec: TextCodec = {
 
 // ------------------------------------------------------------ price breaks: "1: 0.95, 10: 0.78, 100: 0.52"
 
-export const breaksText = (b: readonly PriceBreak[]): string =>
-  b.map((x) => `${x.minQty}: ${moneyText(x.unitPriceCents)}`).join(', ');
+/** Price breaks as text, each price with `digits` decimals (the offer currency's ISO 4217 minor unit; default 2). */
+export const breaksText = (b: readonly PriceBreak[], digits = 2): string =>
+  b.map((x) => `${x.minQty}: ${moneyText(x.unitPriceCents, digits)}`).join(', ');
 
-/** Price breaks as typed; empty text is no prices yet (the offer is listed but unpriced). Sorted by quantity. */
-export function parseBreaks(s: string): Parsed<PriceBreak[]> {
+/**
+ * Price breaks as typed, each price in the major unit with at most `digits` decimals (default 2); empty text is no
+ * prices yet (the offer is listed but unpriced). Sorted by quantity.
+ */
+export function parseBreaks(s: string, digits = 2): Parsed<PriceBreak[]> {
   const breaks: PriceBreak[] = [];
   for (const item of splitList(s, /[^,:;=@\n]+[:=@]/)) {
     const m = /^(\d+)\s*(?:\+|pcs)?\s*[:=@]\s*(.+)$/.exec(item);
     if (!m) return { ok: false, message: `"${item}" is not "quantity: unit price" (e.g. 10: 0.78)` };
     const qty = readNumber(m[1], breakQtyField);
     if (!qty.ok) return { ok: false, message: `quantity "${m[1]}" ${qty.message.replace(/; you entered .*$/, '')}` };
-    const price = moneyCents(m[2]);
+    const price = moneyCents(m[2], digits);
     if (!price.ok) return { ok: false, message: `${qty.value}: ${price.message}` };
-    const problem = rangeProblem(price.value, unitPriceField);
+    const problem = rangeProblem(price.value, { ...unitPriceField, moneyDigits: digits });
     if (problem) return { ok: false, message: `${qty.value}: the unit price ${problem}` };
     const twice = breaks.some((b) => b.minQty === qty.value);
     if (twice) return { ok: false, message: `quantity ${qty.value} is given twice` };
@@ -132,8 +136,8 @@ export function parseBreaks(s: string): Parsed<PriceBreak[]> {
 }
 
 export const breaksCodec: TextCodec = {
-  toText: (v) => (Array.isArray(v) ? breaksText(v as PriceBreak[]) : ''),
-  fromText: parseBreaks,
+  toText: (v, ctx) => (Array.isArray(v) ? breaksText(v as PriceBreak[], ctx?.moneyDigits) : ''),
+  fromText: (s, ctx) => parseBreaks(s, ctx?.moneyDigits),
   check: (v) => {
     if (!Array.isArray(v)) return 'must be a list of price breaks';
     if (v.length > MAX_BREAKS) return `has more than ${MAX_BREAKS} price breaks`;

@@ -86,11 +86,59 @@ describe('minor units (ISO 4217: JPY 0, USD 2, EUR 2)', () => {
     expect(again.ok && again.value.breaks).toEqual(stored.breaks);
     const bad = parseForm(offerSpec, { ...typed, breaks: '1: 150.50' });
     expect(bad.ok).toBe(false);
-    expect(!bad.ok && bad.errors.breaks).toBe('Price breaks: JPY amounts are whole JPY with no decimals (ISO 4217 minor unit); 150.5 is not');
+    expect(!bad.ok && bad.errors.breaks).toBe('Price breaks: 1: "150.50" has decimals; this currency has none (ISO 4217 minor unit)');
+    // the box shows whole yen: "150", never "150.00"
+    expect(formValues(offerSpec, stored).breaks).toBe('1: 150');
+    expect(formValues(supplierSpec, { name: 'Kappa', shippingCents: 800, currency: 'JPY' }).shipping).toBe('800');
     const ship = parseForm(supplierSpec, { name: 'Kappa', shipping: '800', currency: 'jpy' });
     expect(ship.ok && ship.value).toEqual({ name: 'Kappa', shippingCents: 800, currency: 'JPY' });
     // USD is unchanged: 8.50 is 850 cents.
     const usd = parseForm(supplierSpec, { name: 'Alpha', shipping: '8.50', currency: 'USD' });
     expect(usd.ok && usd.value.shippingCents).toBe(850);
+  });
+});
+
+// Three-decimal currencies. Source: ISO 4217:2015, list one, "minor unit" column: KWD, BHD and OMR 3 (from memory,
+// not confirmed against the table). 1.250 KWD is 1250 fils; 0.125 BHD is 125 fils; 2.005 OMR is 2005 baisa.
+describe('three-decimal currencies (KWD, BHD, OMR)', () => {
+  it('money boxes show and read three decimals; a fourth is refused naming the field', () => {
+    for (const [currency, typed, minor] of [['KWD', '1.250', 1250], ['BHD', '0.125', 125], ['OMR', '2.005', 2005]] as const) {
+      const offerTyped = { supplier: 'Lambda', sku: 'L-1', currency, breaks: `1: ${typed}`, minOrder: '1', orderMultiple: '1', stockNote: '' };
+      const ok = parseForm(offerSpec, offerTyped);
+      expect(ok.ok && ok.value.breaks).toEqual([{ minQty: 1, unitPriceCents: minor }]);
+      const stored = { ...offerTyped, minOrder: 1, orderMultiple: 1, breaks: [{ minQty: 1, unitPriceCents: minor }] };
+      expect(validate(offerSpec, stored)).toEqual([]);
+      expect(formValues(offerSpec, stored).breaks).toBe(`1: ${typed}`);
+      const ship = parseForm(supplierSpec, { name: 'Lambda', shipping: typed, currency: currency.toLowerCase() });
+      expect(ship.ok && ship.value).toEqual({ name: 'Lambda', shippingCents: minor, currency });
+      expect(formValues(supplierSpec, { name: 'Lambda', shippingCents: minor, currency }).shipping).toBe(typed);
+    }
+    const bad = parseForm(supplierSpec, { name: 'Lambda', shipping: '1.2505', currency: 'KWD' });
+    expect(!bad.ok && bad.errors.shipping).toBe('Shipping per order "1.2505" has more than three decimals; amounts are kept in whole minor units (ISO 4217)');
+    // USD keeps two: "0.125" is refused as before
+    expect(parseForm(supplierSpec, { name: 'Alpha', shipping: '0.125', currency: 'USD' }).ok).toBe(false);
+  });
+
+  it('formats, exports and imports three decimals', () => {
+    expect(formatMoney(1250, 'KWD')).toBe('KWD 1.250');
+    expect(formatMoney(1234567, 'BHD')).toBe('BHD 1,234.567');
+    expect(centsToMajor(2005, 'OMR')).toBe(2.005);
+    // 4 pieces at 1.250 KWD = 5.000 KWD; shipping 0.750 KWD; build 5.750 KWD
+    const p = project({
+      currency: 'KWD',
+      parts: [part('p1', [offer({ id: 'o1', supplier: 'Lambda', currency: 'KWD', breaks: [{ minQty: 1, unitPriceCents: 1250 }] })])],
+      bom: [line('b1', 'p1', 4)],
+      suppliers: [{ name: 'Lambda', shippingCents: 750, currency: 'KWD' }],
+    });
+    const r = costProject(p);
+    expect(r.totals).toMatchObject({ partsCents: 5000, shippingCents: 750, buildCents: 5750 });
+    const recs = parseCsv(costReportToCsv(r)).records;
+    expect(recs[1][recs[0].indexOf('Unit price')]).toBe('1.25'); // the number 1.250 as CSV writes it
+    expect(recs[1][recs[0].indexOf('Line cost KWD')]).toBe('5');
+    expect(recs.find((x) => x[0].startsWith('Total build'))![recs[0].indexOf('Line cost KWD')]).toBe('5.75');
+    // CSV prices are read with three decimals: 0.125 KWD is 125 fils, no rounding
+    expect(parsePrice('0.125', '.', () => minorDigits('KWD'))).toMatchObject({ ok: true, cents: 125, roundedFrom: null });
+    const preview = previewImport('Description,Qty,Supplier,Price,Currency\nRelay,1,Lambda,1.250,KWD', { kind: 'parts-list', defaultCurrency: 'USD' });
+    expect(preview.rows[0].values).toMatchObject({ priceCents: 1250, currency: 'KWD' });
   });
 });
