@@ -14,7 +14,7 @@ describe('new PA inputs on the stage page', () => {
   it('are drawn on the PA form', async () => {
     const { get } = await demoApp();
     const html = await (await get(`/projects/${ID}/stages/st-pa`)).text();
-    for (const label of ['Devices on one heatsink', 'Conduction angle (class C)', 'Push-pull imbalance, worst', 'Device output capacitance Coss', 'Drain load set by a matching network']) {
+    for (const label of ['Devices on one heatsink', 'Conduction angle (class C)', 'Push-pull imbalance, worst', 'Device output capacitance Coss', 'Drain load set by a matching network', 'Output transformer leakage, half to half']) {
       expect(html).toContain(label);
     }
   });
@@ -23,6 +23,8 @@ describe('new PA inputs on the stage page', () => {
     ['more devices on one heatsink than the stage has', { heatsinkSharedBy: '3' }, 'heatsinkSharedBy', 'Devices on one heatsink: at most the number of devices'],
     ['a worst imbalance below the typical', { imbalanceTypical: '10', imbalanceWorst: '5' }, 'imbalanceWorst', 'at least the typical imbalance'],
     ['both a turns ratio and a network drain load', { networkLoad: '12.5' }, 'networkLoad', 'give it or a turns ratio, not both'],
+    ['a transformer leakage of zero', { leakage: '0' }, 'leakage', 'Output transformer leakage, half to half must be more than 0'],
+    ['a transformer leakage above 10 µH', { leakage: '20000' }, 'leakage', 'and at most 10 µH; you entered &quot;20000&quot;'],
   ])('refuses %s by name and saves nothing', async (_label, change, field, message) => {
     const { post, database } = await demoApp();
     const before = await loadProject(database.db, ID);

@@ -69,7 +69,7 @@ export const paSpec = defineSpec({
     }),
     deviceCossF: optNum('Device output capacitance Coss', 'F', U.pF, 0, 1e-6, null, {
       form: 'coss',
-      help: 'class E: part of the shunt capacitor; empty = not checked',
+      help: 'class E: part of the shunt capacitor; push-pull class D: the drain ring; empty = not given',
       example: '150',
     }),
     // Common practice, no published source: a bifilar HF output transformer has a few to a few tens of nH
