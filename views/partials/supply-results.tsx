@@ -200,6 +200,7 @@ const BatteryCard: FC<{ rail: BatteryRailReport }> = ({ rail }) => (
         <tr><th scope="row">Needed by the regulators</th><td>{fv(rail.requiredMinV, 'V')}</td></tr>
         <tr><th scope="row">Average current</th><td>{fv(rail.averageA, 'A')} ({pct(rail.receiveFraction)} receive)</td></tr>
         <tr><th scope="row">Runtime</th><td>{(rail.runtimeS / 3600).toFixed(1)} h</td></tr>
+        <tr><th scope="row">Bleeder</th><td>none applies: a battery holds its voltage while connected; disconnect it (or pull its fuse) before working on the rig</td></tr>
         {rail.curve ? (
           <>
             <tr><th scope="row">Discharge curve</th><td>{rail.curve.chemistry}, {rail.curve.cells} cells: plateau {fv(rail.curve.plateauV, 'V')} ({fv(rail.curve.loadedPlateauV, 'V')} under key-down), common end {fv(rail.curve.chemistryEndV, 'V')}</td></tr>
