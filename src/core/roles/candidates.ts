@@ -9,7 +9,7 @@ import { convertCents, minorRate, rateFor } from '../cost/money';
 import { supplierShipping } from '../cost/cost-project';
 import { bestQuote, neededQty, validBreaks } from '../cost/quantities';
 import { kitsOf } from '../cost/line-options';
-import { partMeetsRole } from './role-checks';
+import { groupOf, partMeetsRole } from './role-checks';
 import type { DesignRole } from './types';
 
 export interface Candidate {
@@ -80,10 +80,14 @@ export function shippingForRole(project: Project, role: DesignRole, planSupplier
 }
 
 /** Pieces the role needs for the build: its bound line's quantity per rig (else the role's), all kits, spares. */
-export function roleNeededQty(project: Project, role: DesignRole): number {
+export function roleNeededQty(project: Project, role: DesignRole, part?: Pick<Part, 'category' | 'ratings'>): number {
+  const spares = (perRig: number) => neededQty(perRig, kitsOf(project), project.costing.attritionFraction, project.costing.sparesPerLine);
+  // a grouped role: a part with one of its values is needed as many times per rig as the design uses that value
+  const group = part ? groupOf(role, part) : null;
+  if (group) return spares(group.count);
   const line = project.bom.find((l) => l.roleId === role.id);
   const perRig = line && Number.isFinite(line.qtyPerRig) && line.qtyPerRig > 0 ? line.qtyPerRig : role.qtyPerRig;
-  return neededQty(perRig, kitsOf(project), project.costing.attritionFraction, project.costing.sparesPerLine);
+  return spares(perRig);
 }
 
 /**
@@ -91,12 +95,12 @@ export function roleNeededQty(project: Project, role: DesignRole): number {
  * per line, a candidate's cost includes the shipping it adds (shippingForRole); without, shipping is left out.
  */
 export function candidatesFor(project: Project, role: DesignRole, planSuppliers?: ReadonlyMap<string, string | null>): Candidate[] {
-  const needed = roleNeededQty(project, role);
   const boundIds = new Set(project.bom.filter((l) => l.roleId === role.id).map((l) => l.partId));
   const shippingOf = planSuppliers ? shippingForRole(project, role, planSuppliers) : undefined;
   return project.parts
     .filter((p) => partMeetsRole(p, role))
     .map((p): Candidate => {
+      const needed = roleNeededQty(project, role, p);
       const c = needed > 0 ? partCost(project, p, needed, shippingOf) : null;
       return {
         partId: p.id, description: p.description, neededQty: needed, costCents: c?.costCents ?? null, shippingCents: c?.shippingCents ?? null,

@@ -35,6 +35,24 @@ export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings
   return { rule, severity: rule.hardLimit !== undefined && v >= rule.hardLimit ? 'caution' : 'fail', value: v };
 }
 
+/**
+ * For a grouped role (a rule asking for several values), the value a part has: the first such rule's value it is
+ * within tolerance of, with its count and places; null when the role is not grouped or the part states none of them.
+ */
+export function groupOf(role: DesignRole, part: Pick<Part, 'category' | 'ratings'>): { key: string; value: number | string; count: number; where: string } | null {
+  // values (ratings, resistances, capacitances) before text choices (fuse types): the more specific grouping
+  const rules = [...role.rules.filter((r) => r.op === 'eachOf'), ...role.rules.filter((r) => r.op === 'oneOf')];
+  for (const r of rules) {
+    const groups = r.op === 'eachOf' ? r.values : r.op === 'oneOf' && r.cover ? r.cover : null;
+    if (!groups || groups.length < 2) continue;
+    const v = judgeRule(r, part).value;
+    if (v === null) continue;
+    const g = groups.find((x) => (typeof x.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && nearValue(v, x.value, r.tolerance) : x.value === v));
+    if (g) return { key: r.key, ...g };
+  }
+  return null;
+}
+
 /** True when the part is of the role's category and meets every rule it states, with every required rating stated. */
 export function partMeetsRole(part: Pick<Part, 'category' | 'ratings'>, role: DesignRole): boolean {
   if (categoryOf(part.category).id !== role.category) return false;

@@ -2,7 +2,8 @@
 // parts. Every expected figure is worked by hand beside its check; the club demo supplies only the design's own
 // values (turns, chosen capacitor values), and the arithmetic on them is written out here.
 import { describe, expect, it } from 'vitest';
-import { checkRoles, judgeRule, partMeetsRole, type DesignRole } from '../../../src/core/roles';
+import { candidatesFor, checkRoles, judgeRule, partMeetsRole, type DesignRole } from '../../../src/core/roles';
+import { bindCandidate } from '../../../src/core/edits/bind-role';
 import type { BomLine, Part } from '../../../src/core/model';
 import { evaluate } from '../../../src/core/evaluate';
 import { club30m } from '../../../seed-demo/club-30m';
@@ -106,5 +107,38 @@ describe('the club demo filter: capacitor values, cores and wire as ratings', ()
     expect(judgeRule(diameter, { category: 'wire', ratings: { diameterM: 0.8e-3 } }).severity).toBe('ok');
     // the demo's bound 0.8 mm, 10 m reel meets it
     expect(report.roles.statuses.find((s) => s.role.id === 'lpf-wire:st-lpf')!.state).toBe('ok');
+  });
+});
+
+describe('grouped roles: candidates and binding by value', () => {
+  // 8 kits, no attrition or spares: a value used once per rig is needed 8 times, one used twice 16 times
+  const fuses2: DesignRole = {
+    ...fuses,
+    rules: [fuses.rules[0], { ...fuses.rules[1], op: 'eachOf', values: [{ value: 1, count: 1, where: 'primary' }, { value: 0.4, count: 2, where: 'rail A, rail B' }] } as DesignRole['rules'][number]],
+  };
+  const base = () => {
+    const p = structuredClone(club30m);
+    p.kits = 8;
+    p.costing = { ...p.costing, attritionFraction: 0, sparesPerLine: 0 };
+    p.parts = [fuse('f1', 1), fuse('f04', 0.4), { id: 'g', description: 'fuses per supply page', category: 'fuse', ratings: { type: 'T' }, offers: [] }];
+    return p;
+  };
+
+  it('each candidate is counted at its own value’s quantity', () => {
+    const c = candidatesFor(base(), fuses2);
+    const need = Object.fromEntries(c.map((x) => [x.partId, x.neededQty]));
+    expect(need).toMatchObject({ f1: 8, f04: 16 }); // 1 x 8 kits; 2 x 8 kits
+  });
+
+  it('binding a value adds its line with the design’s count, or replaces the line of the same value', () => {
+    const p = { ...base(), bom: [line('b1', 'g', 3)] };
+    const added = bindCandidate(p, fuses2, 'f04', 'new');
+    if ('errors' in added) throw new Error('refused');
+    expect(added.bom.map((l) => [l.id, l.partId, l.qtyPerRig])).toEqual([['b1', 'g', 3], ['new', 'f04', 2]]);
+    // a second 400 mA part replaces the 400 mA line, not the generic one
+    added.parts.push(fuse('f04b', 0.4));
+    const replaced = bindCandidate(added, fuses2, 'f04b', 'new2');
+    if ('errors' in replaced) throw new Error('refused');
+    expect(replaced.bom.map((l) => [l.id, l.partId, l.qtyPerRig])).toEqual([['b1', 'g', 3], ['new', 'f04b', 2]]);
   });
 });
