@@ -69,6 +69,7 @@ export const PA_FIELDS: Record<string, string> = {
   'pa.swr-output': 'loadOhm',
   'pa.class-e-shunt': 'deviceCossF',
   'core.output-flux': 'outputPrimaryTurns',
+  'network.pi': 'networkLoadOhm',
   'core.output-fit': 'outputWireDiameterM',
   'core.missing': 'outputCoreId',
   'core.frequency': 'outputCoreId',

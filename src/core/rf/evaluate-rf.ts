@@ -17,7 +17,7 @@ import { evaluateKeying } from './keying-eval';
 import { realiseLpf } from './cores-check';
 import { designOutputNetwork, feedChoke } from './output-network';
 import { checkOutputTransformer, findCore, lpfCore } from './core-catalog';
-import { classEShuntCapacitor, designPiNetwork, type NetworkCore } from './pi-network';
+import { classEShuntCapacitor, designPiNetwork, piFindings, type NetworkCore } from './pi-network';
 
 export interface RfContext {
   /** Voltage per PA rail id (key-down trough from the supply design when known, else nominal), V. */
@@ -139,7 +139,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         : { check: null, findings: [] };
       const choke = single ? feedChoke(pa.primaryOhm, frequencyHz, pa.keyDownCurrentA) : null;
       stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, network, pi, classEShunt, choke,
-        outputTransformer: ot.check, findings: sortFindings([...pa.findings, ...ot.findings]) });
+        outputTransformer: ot.check, findings: sortFindings([...pa.findings, ...ot.findings, ...(pi ? piFindings(pi, st.name) : [])]) });
       if (st === paStage) paRefused = pa.refused;
       if (st === paStage && pa.refused) {
         // the stress checks below need a power: say that they take the target instead of the PA's (unknown) output

@@ -2,6 +2,7 @@
 // at the load, for the drain load the stage needs; standard capacitors and turns on the chosen core. A push-pull
 // stage gets the same network for its drain-to-drain load, balanced (the series inductance split into two legs),
 // followed by a 1:1 balun to the coax. Class E: the shunt capacitance the stage needs beyond the device's own.
+import type { Finding } from '../findings';
 import { snapCapacitance, type ESeries } from './e-series';
 import { turnsForInductance } from './lpf-design';
 import { CLASS_E_SHUNT } from './class-e-sim';
@@ -134,4 +135,28 @@ export function classEShuntCapacitor(drainOhm: number, frequencyHz: number, coss
   // one standard part (a pair would add a trimmer-sized crumb here; the part is trimmed on test anyway)
   const snap = snapCapacitance(extra, series, false);
   return { neededF, cossF, addPartsF: snap.parts, addF: snap.total, maxFrequencyHz };
+}
+
+/** How far the built network's drain load may stray from the design before a caution. */
+// Common practice, no published source: within 10 % in resistance and 20 % of it in reactance a PA is matched well
+// enough; beyond, adjust the turns or the capacitors on test
+const PI_R_TOLERANCE = 0.1;
+const PI_X_TOLERANCE = 0.2;
+
+/** One finding on the designed pi network: the drain load its built parts give against the one the stage needs. */
+export function piFindings(pi: PiNetwork, subject: string): Finding[] {
+  const source = pi.form === 'balanced' ? 'network.push-pull' : 'network.pi';
+  const base = { rule: 'network.pi', subject: `${subject}: pi network`, unit: 'Ω', source } as const;
+  if (!pi.builtDrainOhm) {
+    return [{ ...base, severity: 'ok', value: null, limit: pi.drainOhm,
+      message: `A pi network for ${pi.drainOhm.toFixed(1)} Ω is designed; choose a core to count its turns and check the built network.` }];
+  }
+  const [re, im] = pi.builtDrainOhm;
+  const off = Math.abs(re / pi.drainOhm - 1) > PI_R_TOLERANCE || Math.abs(im) > PI_X_TOLERANCE * pi.drainOhm;
+  const z = `${re.toFixed(1)} ${im < 0 ? '−' : '+'} j${Math.abs(im).toFixed(1)} Ω`;
+  return [{ ...base, severity: off ? 'caution' : 'ok', value: re, limit: pi.drainOhm,
+    message: off
+      ? `Built with standard capacitors and ${pi.turns} turns the pi network gives ${z} at the drain instead of ${pi.drainOhm.toFixed(1)} Ω: ` +
+        'adjust the turns (spread or squeeze them) or a capacitor on test.'
+      : `Built with standard capacitors and ${pi.turns} turns the pi network gives ${z} at the drain (target ${pi.drainOhm.toFixed(1)} Ω).` }];
 }

@@ -112,3 +112,21 @@ describe('class-E shunt capacitor', () => {
     near(s.maxFrequencyHz!, 4.870e6, 0.001e6, 'f max');
   });
 });
+
+describe('pi network finding', () => {
+  it('ok when the built parts land within 10 % and 0.2 R of the drain load; a caution beyond; the source names the form', async () => {
+    const { piFindings } = await import('../../../src/core/rf/pi-network');
+    const n = designPiNetwork(12.5, 50, 7.03e6, false, { alHPerTurn2: 4.9e-9, series: 'E12', pairs: true })!;
+    const f = piFindings(n, 'PA')[0];
+    expect(f.source).toBe('network.pi');
+    // the built drain load checked against ngspice above; here only the verdict's thresholds (common practice)
+    const [re, im] = n.builtDrainOhm!;
+    expect(f.severity).toBe(Math.abs(re / 12.5 - 1) > 0.1 || Math.abs(im) > 0.2 * 12.5 ? 'caution' : 'ok');
+    const off = piFindings({ ...n, builtDrainOhm: [16, 0] }, 'PA')[0];
+    expect(off.severity).toBe('caution');
+    expect(off.message).toContain('instead of 12.5 Ω');
+    const bal = piFindings({ ...designPiNetwork(25, 50, 7.03e6, true, null)! }, 'PA')[0];
+    expect(bal.source).toBe('network.push-pull');
+    expect(bal.severity).toBe('ok');
+  });
+});
