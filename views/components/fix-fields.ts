@@ -4,7 +4,7 @@ import type { Rail } from '../../src/core/model';
 
 type RailKind = Rail['kind'];
 
-/** Rail rules → the field of the rail's own spec (rectified, regulated, battery); `*` = any other rule of the rail. */
+/** Rail rules → the field of the rail's own spec (rectified, regulated, battery); `*` = any other rule. */
 export const RAIL_FIELDS: Record<RailKind, Record<string, string>> = {
   rectified: {
     'rail.headroom': 'reservoirF',
