@@ -156,6 +156,8 @@ function rfLines(report: EvaluationReport): string[] {
     const band = h.limitedByConstruction ? 'limited by construction' : `${lvl(h.predictedBestDbc, h.bestLimitedByConstruction)} to ${lvl(h.predictedDbc, false)}`;
     out.push(`  Harmonic ${h.n}: ${band} at the antenna (judged on the worst end), margin ${h.marginDb.toFixed(1)} dB, ${h.severity}`);
   }
+  const basis = rf.harmonics?.rows[0]?.sourceBasis;
+  if (basis && basis !== '50 Ω') out.push(`  (filter rejection from the PA's own source: ${basis})`);
   if (rf.exposure) out.push(`  RF exposure: keep the public ${formatValue(rf.exposure.generalDistanceM, 'm')} and yourself ${formatValue(rf.exposure.controlledDistanceM, 'm')} from the antenna (far-field estimate)`);
   return out;
 }
