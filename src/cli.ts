@@ -190,9 +190,11 @@ async function main(args: string[]) {
       if (paper !== 'a4' && paper !== 'letter') fail('--paper must be a4 or letter');
       const { buildPack, PACK_PARTS, PACK_PART_TITLES } = await import('./pdf');
       const part = a.values.pack ?? 'both';
-      if (!(PACK_PARTS as readonly string[]).includes(part)) fail(`--pack must be ${PACK_PARTS.join(', ')} (got ${JSON.stringify(part)})`);
+      if (!(PACK_PARTS as readonly string[]).includes(part))
+        fail(`--pack must be ${PACK_PARTS.join(', ')} (got ${JSON.stringify(part)})`);
       const project = await projectFrom(command, a);
-      const opts = { paper: paper as 'a4' | 'letter', part: part as import('./pdf').PackPart, dataDate: new Date().toISOString().slice(0, 10) };
+      const dataDate = new Date().toISOString().slice(0, 10);
+      const opts = { paper: paper as 'a4' | 'letter', part: part as import('./pdf').PackPart, dataDate };
       const bytes = await buildPack(project, evaluate(project), opts);
       writeOut(out!, bytes);
       process.stdout.write(`Wrote ${out}: ${PACK_PART_TITLES[opts.part]} (${bytes.length} bytes)\n`);

@@ -16,7 +16,8 @@ const EXAMPLE: Record<string, [string, string]> = {
 };
 
 /** "1 EUR = 1.08 USD" */
-export const rateInWords = (from: string, rate: number | string, projectCurrency: string): string => `1 ${from} = ${rate} ${projectCurrency}`;
+export const rateInWords = (from: string, rate: number | string, projectCurrency: string): string =>
+  `1 ${from} = ${rate} ${projectCurrency}`;
 
 /** The help line under the rate box: one line per offer currency, with an example in the project's currency. */
 export function exchangeRateHint(projectCurrency: string): string {
