@@ -45,7 +45,9 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
       <ul class="role-list">
         {statuses.map((s) => {
           const lines = project.bom.filter((l) => s.lineIds.includes(l.id));
-          const candidates = candidatesFor(project, s.role, planSuppliers).slice(0, SHOWN);
+          // a grouped role (one line per value): the cheapest candidate of each value, else the cheapest few
+          const all = candidatesFor(project, s.role, planSuppliers);
+          const candidates = all.some((c) => c.group !== null) ? all.filter((c, i) => all.findIndex((x) => x.group === c.group) === i) : all.slice(0, SHOWN);
           return (
             <li class={`role role-${s.state}`} data-role={s.role.id} data-state={s.state}>
               <strong>{s.role.label}</strong>: <span class="role-state">{STATE_TEXT[s.state]}</span>
@@ -61,6 +63,7 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
                 <ul class="role-candidates">
                   {candidates.map((c) => (
                     <li data-candidate={c.partId} data-total={c.totalCents ?? ''}>
+                      {c.group ? <strong>{c.group}: </strong> : null}
                       {c.description}: {c.costCents === null ? 'no price' : `${money(c.costCents)} for ${c.neededQty}`}
                       {c.orderQty !== null && c.orderQty !== c.neededQty ? ` (buying ${c.orderQty})` : ''}
                       {c.supplier ? ` from ${c.supplier}` : ''}

@@ -11,6 +11,7 @@ import { bestQuote, neededQty, validBreaks } from '../cost/quantities';
 import { kitsOf } from '../cost/line-options';
 import { groupOf, partMeetsRole } from './role-checks';
 import type { DesignRole } from './types';
+import { formatValue } from '../units';
 
 export interface Candidate {
   partId: string;
@@ -30,6 +31,8 @@ export interface Candidate {
   orderQty: number | null;
   /** True for the part the role's line is bound to now. */
   bound: boolean;
+  /** For a grouped role: the value of the group the part fills ("400 mA", "270 pF"); null otherwise. */
+  group: string | null;
 }
 
 /** Shipping a candidate adds for a supplier: 0 for one the plan already uses, else its charge (null: unknown). */
@@ -101,11 +104,14 @@ export function candidatesFor(project: Project, role: DesignRole, planSuppliers?
     .filter((p) => partMeetsRole(p, role))
     .map((p): Candidate => {
       const needed = roleNeededQty(project, role, p);
+      const g = groupOf(role, p);
+      const unit = g ? (role.rules.find((r) => r.key === g.key)?.unit ?? '') : '';
+      const group = g === null ? null : typeof g.value === 'number' ? formatValue(g.value, unit) : g.value;
       const c = needed > 0 ? partCost(project, p, needed, shippingOf) : null;
       return {
         partId: p.id, description: p.description, neededQty: needed, costCents: c?.costCents ?? null, shippingCents: c?.shippingCents ?? null,
         totalCents: c ? c.costCents + c.shippingCents : null, shippingNote: c?.shippingNote ?? null,
-        supplier: c?.supplier ?? null, orderQty: c?.orderQty ?? null, bound: boundIds.has(p.id),
+        supplier: c?.supplier ?? null, orderQty: c?.orderQty ?? null, bound: boundIds.has(p.id), group,
       };
     })
     .sort((a, b) => (a.totalCents ?? Infinity) - (b.totalCents ?? Infinity) || a.description.localeCompare(b.description));
