@@ -73,8 +73,9 @@ function pieces(text: string, field: typeof offerSpec.fields.minOrder): { ok: tr
 }
 
 /** Read a catalog row's own cells; errors are keyed by the import field whose column they name. */
-export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [CellField, string][] } {
+export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [CellField, string][]; warnings: [CellField, string][] } {
   const errors: [CellField, string][] = [];
+  const warnings: [CellField, string][] = [];
   let ratings: Record<string, number | string> = {};
   if (c.ratings !== '') {
     const r = parseRatings(c.ratings);
@@ -83,6 +84,12 @@ export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [
       ratings = r.value;
       // the ratings the category defines are held to their ranges, as the part's form does
       for (const e of readRatings({ category: c.category, ratings }).errors) errors.push(['ratings', `${e.message} (category ${categoryOf(c.category).label}).`]);
+      // a name the category does not rate is kept as text but never checked: say so (a typo such as "voltagV")
+      const def = categoryOf(c.category);
+      const known = new Set([...def.numbers.map((f) => f.key), ...def.choices.map((x) => x.key), 'value']);
+      const unknown = Object.keys(ratings).filter((k) => !known.has(k));
+      if (def.id !== 'other' && unknown.length)
+        warnings.push(['ratings', `${unknown.map((k) => `"${k}"`).join(', ')} ${unknown.length > 1 ? 'are not ratings' : 'is not a rating'} of a ${def.label.toLowerCase()} (${[...known].filter((k) => k !== 'value').join(', ')}); kept but not checked.`]);
     }
   }
   let breaks: PriceBreak[] = [];
@@ -102,5 +109,5 @@ export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [
   const mult = pieces(c.multiple, offerSpec.fields.orderMultiple);
   if (!mult.ok) errors.push(['multiple', mult.message]);
   if (breaks.length === 0 && c.breaks === '' && c.priceCents === null) errors.push(['price', 'Needs a unit price or price breaks.']);
-  return { cells: { ratings, breaks, minOrder: min.ok ? min.n : 1, orderMultiple: mult.ok ? mult.n : 1 }, errors };
+  return { cells: { ratings, breaks, minOrder: min.ok ? min.n : 1, orderMultiple: mult.ok ? mult.n : 1 }, errors, warnings };
 }

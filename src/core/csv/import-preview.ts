@@ -218,7 +218,7 @@ function previewRow(
     }
   }
 
-  if (opts.kind === 'catalog') catalogRow(v, get, err, opts, decimal);
+  if (opts.kind === 'catalog') catalogRow(v, get, err, warn, opts, decimal);
   if (v.supplier === '') {
     if (opts.kind === 'catalog') err('supplier', 'Needs a supplier (a cell, or the supplier’s name on the form).');
     else if (v.priceCents !== null) err('supplier', 'A price needs a supplier.');
@@ -232,6 +232,7 @@ function catalogRow(
   v: ImportValues,
   get: (f: ImportField) => string,
   err: (f: ImportField | null, message: string) => void,
+  warn: (f: ImportField | null, message: string) => void,
   opts: ImportOptions,
   decimal: '.' | ',',
 ): void {
@@ -248,5 +249,6 @@ function catalogRow(
     priceCents: v.priceCents, currency, decimal,
   });
   for (const [f, message] of read.errors) if (!(priceFailed && f === 'price')) err(f, message);
+  for (const [f, message] of read.warnings) warn(f, message);
   v.catalog = read.cells;
 }

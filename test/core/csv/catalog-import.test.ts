@@ -67,6 +67,14 @@ describe('catalog import: columns and cells', () => {
     expect(planImport(preview).ok).toBe(false);
   });
 
+  it('a rating name the category does not have is a warning naming row and column (kept, not checked)', () => {
+    const csv = 'Description,Category,Ratings,SKU,Price\nCapacitor,capacitor,voltagV=35,X1,0.10';
+    const row = previewImport(csv, opts).rows[0];
+    expect(row.errors).toEqual([]);
+    expect(row.warnings.map((w) => [w.row, w.column])).toEqual([[2, 'Ratings']]);
+    expect(row.warnings[0].message).toMatch(/^"voltagV" is not a rating of a capacitor \(capacitanceF, voltageV,/);
+  });
+
   it('a list with neither a supplier column nor a supplier name is refused as a whole', () => {
     const preview = previewImport('Description,SKU,Price\nRelay,R1,1.00', { kind: 'catalog', defaultCurrency: 'USD' });
     expect(preview.fileErrors.map((e) => e.column)).toEqual(['Supplier']);
