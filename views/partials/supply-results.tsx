@@ -87,10 +87,14 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
               {c.label}
               <Tag id={c.id} voltage={rail.worstVoltageCornerId} thermal={rail.worstThermalCornerId} />
               {c.converged ? null : <span class="hint"> · not converged</span>}
+              {c.aloneTroughV !== undefined ? <span class="hint"> · windings together</span> : null}
             </th>
             <td class="num">{fv(c.loadA, 'A')}</td>
             <td class="num">{fv(c.dcMeanV, 'V')}</td>
-            <td class="num">{fv(c.troughV, 'V')}</td>
+            <td class="num">
+              {fv(c.troughV, 'V')}
+              {c.aloneTroughV !== undefined ? <span class="sub">alone {fv(c.aloneTroughV, 'V')}</span> : null}
+            </td>
             <td class="num">{fv(c.ripplePpV, 'V')}</td>
             <td class="num">
               {fv(c.peakV, 'V')}
@@ -105,6 +109,10 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
         ))}
       </tbody>
     </table>
+    <p class="hint">
+      Rows marked “windings together” take their volts from all windings of the transformer simulated at once (shared
+      primary, leakage), with this rail's own trough beneath; the other rows and every current are this winding's own.
+    </p>
     </AllCorners>
     <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
     {rail.keyingTransient ? <KeyingTransientBlock rail={rail} /> : rail.loadModel ? <LoadModelDetails model={rail.loadModel} /> : null}

@@ -11,9 +11,13 @@ import { PRIMARY_COPPER_SHARE, primaryOhmFromRegulation, nameplateVA } from './i
 import { simulateSharedPrimary, type JointWinding } from './shared-primary';
 import { noLoadVrms, windingLeakage, windingResistanceOhm } from './winding';
 
-/** Corners simulated jointly (the rest keep each rail's own simulation: they decide currents and heat, not volts). */
+/**
+ * Corners simulated jointly (the rest keep each rail's own simulation: they decide currents and heat, not volts). The
+ * tune-up corners load every rail as key-down does, so they are the same runs (memo hits).
+ */
 export const JOINT_CORNER_IDS: readonly string[] = [
-  WORST_VOLTAGE_ID, 'nominal-keyDown', 'high-keyDown', 'low-keyUp', TOLERANCE_ID,
+  WORST_VOLTAGE_ID, 'nominal-keyDown', 'high-keyDown', 'low-keyUp', TOLERANCE_ID, 'low-tuneUp', 'nominal-tuneUp',
+  'high-tuneUp',
 ];
 
 /**
