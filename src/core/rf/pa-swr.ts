@@ -33,6 +33,11 @@ export interface PaSwrStress {
   model: 'load-line' | 'class-e-simulated';
   /** Class E: highest drain voltage at switch turn-on round the circle, / Vdd (0 = zero-voltage switching). */
   classETurnOnRatio: number | null;
+  /**
+   * Push-pull class D: the leakage ring included in the drain peak and device current (leakage and Coss as entered,
+   * null when not; z0Ohm = √(L/C) when both are); null for other stages.
+   */
+  ring: { leakageH: number | null; cossF: number | null; z0Ohm: number | null } | null;
   /** Points every 15 degrees (for a table or plot). */
   points: SwrPoint[];
   worstDrainPeak: Worst;
@@ -198,6 +203,8 @@ export function swrStress(
     swr,
     model: cls === 'E' ? 'class-e-simulated' : 'load-line',
     classETurnOnRatio: ref ? worstTurnOn : null,
+    ring: m.ring && cls === 'D'
+      ? { ...m.ring, z0Ohm: leakageRing(0, 0, m.ring.leakageH, m.ring.cossF).z0Ohm } : null,
     points: all.filter((p) => p.phaseDeg % 15 === 0),
     worstDrainPeak: pick('drainPeakV', 1),
     worstPeakCurrent: pick('peakDeviceA', 1),

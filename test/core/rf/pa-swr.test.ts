@@ -138,13 +138,17 @@ describe('push-pull class D in evaluatePa: the ring in the drain rating check', 
     expect(f.message).toMatch(/enter both/);
   });
   it('with 20 nH and 200 pF entered: an ok line naming √(L/C) = 10 Ω', () => {
-    const f = run({ outputLeakageH: 20e-9, deviceCossF: 200e-12 }).findings.find((x) => x.rule === 'pa.leakage-ring')!;
+    const r = run({ outputLeakageH: 20e-9, deviceCossF: 200e-12 });
+    const f = r.findings.find((x) => x.rule === 'pa.leakage-ring')!;
     expect(f.severity).toBe('ok');
     expect(f.message).toContain('10.0 Ω');
+    // and the report says what the drain peak includes: √(20 nH / 200 pF) = 10 Ω
+    near(r.swr!.ring!.z0Ohm!, 10, 1e-9, 'Z0');
   });
   it('class C has no hard edge: no ring finding and the load-line peak', () => {
     const r = run({ amplifierClass: 'C', saturationV: 1, rdsOnOhm: null });
     expect(r.findings.some((x) => x.rule === 'pa.leakage-ring')).toBe(false);
+    expect(r.swr!.ring).toBeNull();
     near(r.swr!.worstDrainPeak.value, 2 * 13.8, 1e-9, 'Vpk');
   });
 });
