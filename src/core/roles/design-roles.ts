@@ -77,7 +77,8 @@ function fuseRole(supply: SupplyReport, project: Project): DesignRole | null {
   }
   if (!positions.length) return null;
   const types = groupValues(positions.map((p) => ({ value: p.type, where: p.where })));
-  const ratings = groupValues(positions.filter((p) => finite(p.ratedA)).map((p) => ({ value: p.ratedA as number, where: p.where })));
+  // each position's rating with its type: a 2.5 A fuse of the wrong characteristic does not fill a 2.5 A T position
+  const ratings = groupValues(positions.filter((p) => finite(p.ratedA)).map((p) => ({ value: p.ratedA as number, where: p.where, with: { type: p.type } })));
   const rules: RoleRule[] = [{ key: 'type', label: 'Type', unit: '', op: 'oneOf', options: types.map((t) => t.value), cover: types, required: true, source: 'supply.fuse', why: types.length > 1 ? 'positions need different types: one line per type' : 'the characteristic every position needs' }];
   // one line per rating: each bound fuse must have one of the positions' ratings, and together they cover each
   if (ratings.length) rules.push({ key: 'ratedA', label: 'Rating', unit: 'A', op: 'eachOf', values: ratings, tolerance: 0.001, required: false, source: 'supply.fuse', why: 'the rating of a position' });

@@ -4,7 +4,7 @@
 import type { BomLine, Part, Project } from '../model';
 import type { Finding, Severity } from '../findings';
 import { categoryOf, readRatings } from '../spec/parts-categories';
-import { f as formatValue } from './role-make';
+import { f as formatValue, groupText } from './role-make';
 import type { DesignRole, GroupValue, RoleRule, RoleStatus } from './types';
 
 export interface RuleOutcome {
@@ -17,6 +17,9 @@ const sev = (o: RuleOutcome['severity'], required: boolean): Severity | null =>
   o === 'missing' ? (required ? 'caution' : null) : o;
 
 const nearValue = (v: number, target: number, tolerance: number) => Math.abs(v - target) <= tolerance * Math.abs(target);
+/** A part's value in a group: near its value, and any text rating the group goes with the same where the part states it. */
+const inGroup = (g: GroupValue<number>, v: number, tolerance: number, choices: Record<string, string>) =>
+  nearValue(v, g.value, tolerance) && Object.entries(g.with ?? {}).every(([k, want]) => choices[k] === undefined || choices[k] === want);
 
 /** One rating of a part against one rule: 'missing' when the part does not state it. */
 export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings'>): RuleOutcome {
@@ -28,7 +31,7 @@ export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings
   }
   const v = read.numbers[rule.key];
   if (v === undefined) return { rule, severity: 'missing', value: null };
-  if (rule.op === 'eachOf') return { rule, severity: rule.values.some((g) => nearValue(v, g.value, rule.tolerance)) ? 'ok' : 'fail', value: v };
+  if (rule.op === 'eachOf') return { rule, severity: rule.values.some((g) => inGroup(g, v, rule.tolerance, read.choices)) ? 'ok' : 'fail', value: v };
   if (rule.op === 'near') return { rule, severity: Math.abs(v - rule.limit) <= rule.tolerance * Math.abs(rule.limit) ? 'ok' : 'fail', value: v };
   if (rule.op === 'max') return { rule, severity: v <= rule.limit ? 'ok' : 'fail', value: v };
   if (v >= rule.limit) return { rule, severity: 'ok', value: v };
@@ -47,7 +50,8 @@ export function groupOf(role: DesignRole, part: Pick<Part, 'category' | 'ratings
     if (!groups || groups.length < 2) continue;
     const v = judgeRule(r, part).value;
     if (v === null) continue;
-    const g = groups.find((x) => (typeof x.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && nearValue(v, x.value, r.tolerance) : x.value === v));
+    const choices = readRatings(part).choices;
+    const g = groups.find((x) => (typeof x.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && inGroup(x as GroupValue<number>, v, r.tolerance, choices) : x.value === v));
     if (g) return { key: r.key, ...g };
   }
   return null;
@@ -68,7 +72,7 @@ const limitText = (r: RoleRule) =>
   r.op === 'oneOf'
     ? r.options.join(' or ')
     : r.op === 'eachOf'
-      ? `one of ${r.values.map((g) => formatValue(g.value, r.unit)).join(', ')} (${pct(r.tolerance)})`
+      ? `one of ${r.values.map((g) => groupText(g, r.unit)).join(', ')} (${pct(r.tolerance)})`
       : r.op === 'near'
         ? `${formatValue(r.limit, r.unit)} ${pct(r.tolerance)}`
         : `${r.op === 'min' ? 'at least' : 'at most'} ${formatValue(r.limit, r.unit)}`;
@@ -110,14 +114,14 @@ function coverFindings(role: DesignRole, lines: readonly BomLine[], parts: Reado
   for (const r of role.rules) {
     const groups: GroupValue<number | string>[] | null = r.op === 'eachOf' ? [...r.values] : r.op === 'oneOf' && r.cover ? [...r.cover] : null;
     if (groups === null || groups.length < 2) continue;
-    const values = stated.map(({ l, part }) => ({ qty: l.qtyPerRig, v: judgeRule(r, part).value }));
+    const values = stated.map(({ l, part }) => ({ qty: l.qtyPerRig, v: judgeRule(r, part).value, choices: readRatings(part).choices }));
     if (values.every((x) => x.v === null)) continue;
     for (const g of groups) {
-      const matches = (v: number | string | null) =>
-        v !== null && (typeof g.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && nearValue(v, g.value, r.tolerance) : v === g.value);
-      const have = values.filter((x) => matches(x.v)).reduce((t, x) => t + x.qty, 0);
+      const matches = (v: number | string | null, choices: Record<string, string>) =>
+        v !== null && (typeof g.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && inGroup(g as GroupValue<number>, v, r.tolerance, choices) : v === g.value);
+      const have = values.filter((x) => matches(x.v, x.choices)).reduce((t, x) => t + x.qty, 0);
       if (have >= g.count) continue;
-      const shown = typeof g.value === 'number' ? formatValue(g.value, r.unit) : g.value;
+      const shown = groupText(g, r.unit);
       out.push({
         severity: 'caution', rule: `role.${role.category}.${r.key}.cover`, subject: `${role.label}: ${shown}`, value: have, limit: g.count, unit: 'pieces',
         source: 'roles.group-cover',

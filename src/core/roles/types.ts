@@ -16,6 +16,8 @@ export interface GroupValue<T> {
   count: number;
   /** Where they go, for messages ("primary, PA rail output"). */
   where: string;
+  /** Text ratings the same part must also have for this value (a fuse position's type: { type: 'T' }). */
+  with?: Readonly<Record<string, string>>;
 }
 
 export type RoleRule =

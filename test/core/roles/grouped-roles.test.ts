@@ -30,6 +30,20 @@ describe('grouped roles: one line per value', () => {
     expect(partMeetsRole(fuse('a', 1.6), fuses)).toBe(false);
   });
 
+  it('a value that goes with a type: a 2.5 A fuse of the wrong characteristic does not fill the 2.5 A F position', () => {
+    const typed: DesignRole = { ...fuses, rules: [fuses.rules[0], { ...fuses.rules[1], op: 'eachOf', values: [{ value: 1, count: 1, where: 'primary', with: { type: 'T' } }, { value: 2.5, count: 1, where: 'rail B', with: { type: 'F' } }] } as DesignRole['rules'][number]] };
+    const r = typed.rules[1];
+    expect(judgeRule(r, fuse('a', 2.5, 'F')).severity).toBe('ok');
+    expect(judgeRule(r, fuse('a', 2.5, 'T')).severity).toBe('fail');
+    // bound: 1 A T and 2.5 A T -> the 2.5 A line fails its rating and the 2.5 A F position is not covered
+    const c = checkRoles({ parts: [fuse('f1', 1), fuse('f25', 2.5, 'T')], bom: [line('b1', 'f1', 1), line('b2', 'f25', 1)] }, [typed]);
+    expect(c.findings.filter((f) => f.severity !== 'ok').map((f) => [f.rule, f.subject])).toEqual([
+      ['role.fuse.ratedA', 'Fuses: fuse 2.5 A T'],
+      ['role.fuse.type.cover', 'Fuses: F'],
+      ['role.fuse.ratedA.cover', 'Fuses: 2.5 A F'],
+    ]);
+  });
+
   it('three lines, one per position: no finding short of ok', () => {
     const parts = [fuse('f1', 1), fuse('f04', 0.4), fuse('f25', 2.5, 'F')];
     const bom = [line('b1', 'f1', 1), line('b2', 'f04', 1), line('b3', 'f25', 1)];
