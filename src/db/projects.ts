@@ -73,10 +73,11 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     id: tr.id,
     name: tr.name,
     construction: tr.construction as Transformer['construction'],
-    secondaryToleranceFraction: tr.secondaryToleranceFraction,
+    // optional in the model: a null column reads as absent (no tolerance corner; leakage split from regulation)
+    ...(tr.secondaryToleranceFraction !== null ? { secondaryToleranceFraction: tr.secondaryToleranceFraction } : {}),
     windings: windingRows
       .filter((w) => w.transformerId === tr.id)
-      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm, leakageH: w.leakageH })),
+      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm, ...(w.leakageH !== null ? { leakageH: w.leakageH } : {}) })),
   }));
   // JSON columns are not trusted: a non-object reads as no data, and evaluate() checks every field against its spec
   // (src/core/spec/project-check.ts), so a bad stored value is a fail finding naming it, never replaced silently.
