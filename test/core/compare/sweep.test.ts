@@ -60,9 +60,10 @@ describe('sweeps of the club demo', () => {
     const margins = series(r, 'trough:PA rail (unregulated, ~24 V)');
     expect(nonDecreasing(margins, toleranceV), margins.join(', ')).toBe(true);
     expect(margins[4]).toBeGreaterThan(margins[0]);
-    // the other rectified rail has its own winding and reservoir: unchanged
+    // the other rectified rail has its own winding and reservoir; it moves only through the primary the two
+    // windings share (simulated together: cross-regulation), by less than the swept rail itself
     const other = series(r, 'trough:Raw DC for the 13.8 V regulator');
-    expect(Math.max(...other) - Math.min(...other)).toBeLessThan(toleranceV);
+    expect(Math.max(...other) - Math.min(...other)).toBeLessThan(Math.max(...margins) - Math.min(...margins));
   });
 
   it('mains voltage: every rail margin rises with the mains (the windings scale with the primary)', () => {
