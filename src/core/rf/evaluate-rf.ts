@@ -209,7 +209,8 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     const l = ladderOf(lpfRes.design);
     // Source: definition of the decibel for voltages, ratio = 10^(dBc/20)
     const e3 = 10 ** (band3.worstDbc / 20);
-    const f = harmonicCurrentFinding(harmonicCurrentRatio(src.zsAt, (n) => inputImpedance(l, n * frequencyHz), 3, e3), 3, paStage.name);
+    const ratio = harmonicCurrentRatio(src.zsAt, (n) => inputImpedance(l, n * frequencyHz), 3, e3);
+    const f = harmonicCurrentFinding(ratio, 3, paStage.name);
     if (f) all.push(f);
   }
   const harmonics = okFreq && targetPowerW > 0

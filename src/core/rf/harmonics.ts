@@ -164,7 +164,8 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
       filterAttenuation50Db: inp.filter ? rel(nominal) : null, sourceBasis: src ? inp.source!.label : '50 Ω',
       sourceZsReOhm: src?.zsReOhm ?? null, sourceZsImOhm: src?.zsImOhm ?? null,
       predictedBestDbc, limitedByConstruction: predictedDbc < CONSTRUCTION_FLOOR_DBC, bestLimitedByConstruction: predictedBestDbc < CONSTRUCTION_FLOOR_DBC,
-      worstFilterAttenuationDb: worst, percentileFilterAttenuationDb: mc ? rel(mc.percentileAttenuationDb) + shift : null,
+      worstFilterAttenuationDb: worst,
+      percentileFilterAttenuationDb: mc ? rel(mc.percentileAttenuationDb) + shift : null,
       predictedDbc, worstPredictedDbc, requiredDb, neededFilterAttenuationDb: requiredDb + pa.dbc, marginDb, worstMarginDb, severity,
     };
     const srcWhat = src ? `; filter from the PA's source, ${inp.source!.label}` : '';

@@ -163,8 +163,8 @@ export function chainMatrix(l: Ladder, frequencyHz: number): [Cx, Cx, Cx, Cx] {
 export type SourceKind = 'thevenin' | 'norton' | 'design-load';
 
 /**
- * Load voltage per unit of the source quantity through the ladder into the load zl (Ω, or complex), with source impedance
- * zs (null = infinite, Norton only). Source: two-port chain relations (circuit theory, textbook; e.g. Pozar 2012,
+ * Load voltage per unit of the source quantity through the ladder into the load zl (Ω, or complex), with source
+ * impedance zs (null = infinite, Norton only). Source: two-port chain relations (circuit theory, textbook; e.g. Pozar 2012,
  * section 4.4, from memory): V_L / E_s = Z_L / (A Z_L + B + Z_s (C Z_L + D)); Norton I_s = E_s / Z_s.
  */
 export function sourceTransfer(

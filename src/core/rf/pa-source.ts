@@ -83,7 +83,7 @@ export function harmonicCurrentFinding(ratio: number, n: number, subject: string
     source: 'lpf.pa-source',
     message: `The switched drain voltage drives a ${n}${n === 3 ? 'rd' : 'th'} harmonic current of about ` +
       `${Math.round(ratio * 100)} % of the fundamental's into the filter (its input is a low impedance there): the ` +
-      'devices carry it on top of the load-line current and heat more. Use an inductor-input filter or a series-tuned ' +
-      'output for a voltage-switching stage.',
+      'devices carry it on top of the load-line current and heat more. Use an inductor-input filter or a ' +
+      'series-tuned output for a voltage-switching stage.',
   };
 }

@@ -96,15 +96,16 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
     const c = pa.deviceCossF ?? null;
     const known = l !== null && c !== null && l > 0 && c > 0;
     f.push({
-      severity: known ? 'ok' : 'caution', rule: 'pa.leakage-ring', subject, value: vPk, limit: null, unit: 'V', source: 'pa.leakage-ring',
+      severity: known ? 'ok' : 'caution', rule: 'pa.leakage-ring', subject, value: vPk, limit: null, unit: 'V',
+      source: 'pa.leakage-ring',
       message: known
-        ? `The drain peak includes the undamped ring of the transformer's ${(l * 1e9).toFixed(1)} nH leakage with the ` +
-          `${(c * 1e12).toFixed(0)} pF device capacitance (√(L/C) = ${Math.sqrt(l / c).toFixed(1)} Ω) at each hard ` +
-          'switching edge; an RC snubber or a drain clamp lowers it.'
-        : 'The drain peak includes the ring of the output transformer\'s leakage with the device capacitance, bounded ' +
-          'by its step (twice the load-line swing); the turn-off current adds to it in proportion to √(leakage / Coss), ' +
-          'and the ring\'s current flows through the devices beyond the load-line current: enter both (the leakage ' +
-          'measured across one primary half with the other shorted) to include them.',
+        ? `The drain peak includes the undamped ring of the transformer's ${(l * 1e9).toFixed(1)} nH leakage ` +
+          `with the ${(c * 1e12).toFixed(0)} pF device capacitance (√(L/C) = ${Math.sqrt(l / c).toFixed(1)} Ω) at ` +
+          'each hard switching edge; an RC snubber or a drain clamp lowers it.'
+        : 'The drain peak includes the ring of the output transformer\'s leakage with the device capacitance, ' +
+          'bounded by its step (twice the load-line swing); the turn-off current adds to it in proportion to ' +
+          '√(leakage / Coss), and the ring\'s current flows through the devices beyond the load-line current: enter ' +
+          'both (the leakage measured across one primary half with the other shorted) to include them.',
     });
   }
   if (s.swr <= 1) return f;

@@ -1,11 +1,11 @@
-// Whole-chain cross-check in ngspice: a push-pull transformer-coupled class-C stage (each device a current source
-// giving a cosine pulse of 150° conduction, falling off as its drain reaches the saturation knee) on a centre-tapped
-// transformer, the low-pass filter, and 50 Ω or the SWR 2 circle at four phases. Netlist written here from scratch
-// (behavioural B sources, coupled inductors; ngspice user's manual). The drive is set from the textbook push-pull
+// Whole-chain cross-check in ngspice: a push-pull transformer-coupled class-C (150° conduction) and class-B (180°)
+// stage (each device a current source giving a cosine pulse, falling off as its drain reaches the saturation knee) on
+// a centre-tapped transformer, the low-pass filter, and 50 Ω or the SWR 2 circle at four phases. Netlist written
+// here from scratch (behavioural B sources, coupled inductors; ngspice user's manual). The drive is set from the textbook push-pull
 // relation so that the swing just reaches the supply at the design load (the program's design point): each half
 // sees R_dd/4, so V1 = (R_dd/4) 2 α1(θ) Ipk with α1 the cosine pulse's fundamental coefficient (cosine-pulse
 // coefficients as tabulated in Krauss, Bostian & Raab, Solid State Radio Engineering, 1980; from memory).
-// The program's prediction: its load line at the filter's input impedance (pa-swr stressAt, class C), and each odd
+// The program's prediction: its load line at the filter's input impedance (pa-swr stressAt, class B or C), and each odd
 // harmonic's band (pa-spectrum) less the filter's rejection from a current source into the load at that harmonic
 // (lpf-analysis harmonicsFromSource).
 // Invented design: 13.8 V, 1:1 transformer (k = 0.9995), 7.03 MHz, 50 Ω.
@@ -29,26 +29,31 @@ const haveNgspice = requireTool(NGSPICE, 'SPICE whole-chain check of the push-pu
 // Stated tolerances: the program's load line holds the drive current until the swing reaches the supply, then holds
 // the drain's fundamental at the supply. Into a load above the design load the netlist's drain clips instead, and a
 // clipped swing has a larger fundamental (towards 4/π of the supply), so there ngspice gives more power (about 23 %
-// at SWR 2, 0°) and a higher drain peak (about 9 %); elsewhere they agree within a few per cent.
-const TOL_POWER = 0.25;
-const TOL_DRAIN = 0.1;
+// for class C and 28 % for class B at SWR 2, 0°) and a higher drain peak (about 10.5 %); elsewhere they agree within
+// a few per cent.
+const TOL_POWER = 0.3;
+const TOL_DRAIN = 0.12;
 // 3rd harmonic at the antenna: within the program's band widened by this much, dB (or both below the floor)
 const TOL_HARMONIC_DB = 3;
+// above the band's worst end at the SWR loads, dB: the band is the stage's spectrum at its design load; into a load
+// above it the stage clips harder (class B at SWR 2, 0°: about 5 dB more 3rd harmonic than the worst end)
+const TOL_HARMONIC_ABOVE_SWR_DB = 6;
 
 const F0 = 7.03e6;
 const VDD = 13.8;
 const VSAT = 0.3; // the drain's lowest excursion at the design load (the knee), V; the program is given the same
 const R0 = 50;
 const W = 2 * Math.PI * F0;
-const THETA = (75 * Math.PI) / 180; // half the 150° conduction angle
 const KNEE = 0.05; // saturation knee of the behavioural device, V
-const TSTOP = 120;
-const STEPS = 400;
+const TSTOP = 80;
+const STEPS = 250;
 
-// α1(θ) = (θ − sin θ cos θ) / (π (1 − cos θ)) (Krauss, Bostian & Raab 1980, from memory)
-const alpha1 = (THETA - Math.sin(THETA) * Math.cos(THETA)) / (Math.PI * (1 - Math.cos(THETA)));
-// swing (VDD − VSAT) at the design load, plus the knee's own drop (1 − e^−VSAT/KNEE) of the current there
-const IPK = ((VDD - VSAT) / ((R0 / 4) * 2 * alpha1)) / (1 - Math.exp(-VSAT / KNEE));
+/** Pulse peak for half conduction angle θ: the swing (VDD − VSAT) at the design load, with the knee's own drop. */
+function pulsePeakA(thetaRad: number): number {
+  // α1(θ) = (θ − sin θ cos θ) / (π (1 − cos θ)) (Krauss, Bostian & Raab 1980, from memory)
+  const alpha1 = (thetaRad - Math.sin(thetaRad) * Math.cos(thetaRad)) / (Math.PI * (1 - Math.cos(thetaRad)));
+  return ((VDD - VSAT) / ((R0 / 4) * 2 * alpha1)) / (1 - Math.exp(-VSAT / KNEE));
+}
 
 type C = { re: number; im: number };
 
@@ -68,7 +73,8 @@ function filterInputOhm(d: LpfDesign, zl: C): C {
   return z;
 }
 
-function netlist(d: LpfDesign, zl: C): string {
+function netlist(d: LpfDesign, zl: C, thetaRad: number): string {
+  const ipk = pulsePeakA(thetaRad);
   const per = 1 / F0;
   const ladder: string[] = [];
   let node = 'f0';
@@ -83,9 +89,9 @@ function netlist(d: LpfDesign, zl: C): string {
   const load = Math.abs(zl.im) < 1e-9 ? `RX ${node} nr 1e-6`
     : zl.im > 0 ? `LX ${node} nr ${(zl.im / W).toPrecision(7)}` : `CX ${node} nr ${(1 / (W * -zl.im)).toPrecision(7)}`;
   const lFull = (20 * R0) / W; // full-primary reactance 20 x the drain-to-drain load: small magnetising current
-  const cth = Math.cos(THETA).toPrecision(9);
+  const cth = Math.cos(thetaRad).toPrecision(9);
   // cosine pulse of device k (phase 0 or π), falling off as the drain nears 0 V (saturation knee)
-  const dev = (k: 1 | 2, ph: string) => `B${k} d${k} 0 I = ${IPK.toPrecision(7)} * max(0, (cos(${W.toPrecision(9)}*time${ph}) - ${cth})/(1 - ${cth}))` +
+  const dev = (k: 1 | 2, ph: string) => `B${k} d${k} 0 I = ${ipk.toPrecision(7)} * max(0, (cos(${W.toPrecision(9)}*time${ph}) - ${cth})/(1 - ${cth}))` +
     ` * (1 - exp(-max(v(d${k}), 0)/${KNEE}))`;
   return [
     '* push-pull class-C stage, low-pass filter, load (written from scratch for this test)',
@@ -116,11 +122,11 @@ afterAll(() => {
 });
 
 const cache = new Map<string, { vdpk: number; pout: number; harm: Map<number, number>; out: string }>();
-function run(d: LpfDesign, zl: C, name: string) {
+function run(d: LpfDesign, zl: C, name: string, thetaRad: number) {
   const hit = cache.get(name);
   if (hit) return hit;
   const file = join(dir, `${name}.cir`);
-  writeFileSync(file, netlist(d, zl));
+  writeFileSync(file, netlist(d, zl, thetaRad));
   const r = spawnSync(NGSPICE as string, ['-b', file], { cwd: dir, encoding: 'utf8' });
   const num = (k: string) => Number(r.stdout.match(new RegExp(`^${k}\\s*=\\s*(\\S+)`, 'm'))?.[1]);
   const harm = new Map<number, number>();
@@ -130,13 +136,17 @@ function run(d: LpfDesign, zl: C, name: string) {
   return res;
 }
 
-describe.skipIf(!haveNgspice)('push-pull class C + low-pass filter in ngspice vs the program', () => {
+// class C at 150° conduction; class B at 180° (half-sine pulses)
+const CLASSES: ['B' | 'C', number][] = [['C', 150], ['B', 180]];
+
+describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction) + low-pass filter in ngspice vs the program', (cls, conductionDeg) => {
+  const thetaRad = (conductionDeg / 2) * (Math.PI / 180);
   const dd = designLpf(lpfParams({ inductorQ: 10000, capacitorQ: 100000 }), F0);
   if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
   const d = dd.value;
   const paIn = paParams({
-    amplifierClass: 'C', topology: 'push-pull', turnsRatio: 1, loadOhm: R0, saturationV: VSAT, rdsOnOhm: null, efficiency: 0.7,
-    conductionAngleDeg: 150, imbalanceTypical: 0, imbalanceWorst: 0,
+    amplifierClass: cls, topology: 'push-pull', turnsRatio: 1, loadOhm: R0, saturationV: VSAT, rdsOnOhm: null, efficiency: 0.7,
+    conductionAngleDeg: cls === 'C' ? conductionDeg : null, imbalanceTypical: 0, imbalanceWorst: 0,
   });
   const pa = evaluatePa(paIn, VDD, { targetPowerW: 5, ambientC: 25, keyingDuty: 0.4 });
   const band3 = paSpectrum(paIn, [3], { frequencyHz: F0 }).bands.find((b) => b.n === 3)!;
@@ -152,14 +162,14 @@ describe.skipIf(!haveNgspice)('push-pull class C + low-pass filter in ngspice vs
   for (const [name, zl] of loads) {
     it(`${name}: drain peak and output power`, () => {
       const zin = filterInputOhm(d, zl);
-      const pred = stressAt('C', m, { re: zin.re / R0, im: zin.im / R0 });
-      const s = run(d, zl, name.replace(/\W+/g, '_'));
+      const pred = stressAt(cls, m, { re: zin.re / R0, im: zin.im / R0 });
+      const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       expect(Number.isFinite(s.vdpk), s.out).toBe(true);
       expect(Math.abs(s.vdpk / pred.drainPeakV - 1), `drain: ngspice ${s.vdpk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`).toBeLessThanOrEqual(TOL_DRAIN);
       expect(Math.abs(s.pout / pred.outputW - 1), `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`).toBeLessThanOrEqual(TOL_POWER);
     });
     it(`${name}: the 3rd harmonic at the antenna lies in the program's band from a current source (or below the floor)`, () => {
-      const s = run(d, zl, name.replace(/\W+/g, '_'));
+      const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       // the load at 3f: its resistance with the series reactance scaled as an inductor (3X) or a capacitor (X/3)
       const zlAt = (n: number): C => ({ re: zl.re, im: zl.im >= 0 ? n * zl.im : zl.im / n });
       const rej = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt, [3], zlAt)[0].relativeAttenuationDb;
@@ -167,11 +177,11 @@ describe.skipIf(!haveNgspice)('push-pull class C + low-pass filter in ngspice vs
       const lo = band3.bestDbc - rej;
       const hi = band3.worstDbc - rej;
       const msg = `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${lo.toFixed(1)} to ${hi.toFixed(1)} dBc`;
-      if (hi < CONSTRUCTION_FLOOR_DBC) {
+      if (hi < CONSTRUCTION_FLOOR_DBC && zl.re === R0 && zl.im === 0) {
         expect(spiceDbc, msg).toBeLessThan(CONSTRUCTION_FLOOR_DBC + TOL_HARMONIC_DB);
       } else {
         expect(spiceDbc, msg).toBeGreaterThanOrEqual(lo - TOL_HARMONIC_DB);
-        expect(spiceDbc, msg).toBeLessThanOrEqual(hi + TOL_HARMONIC_DB);
+        expect(spiceDbc, msg).toBeLessThanOrEqual(hi + (zl.re === R0 && zl.im === 0 ? TOL_HARMONIC_DB : TOL_HARMONIC_ABOVE_SWR_DB));
       }
     });
   }
