@@ -44,7 +44,7 @@ export function starterParts(crystalHz: number): Record<string, Part> {
       offer(A, 'MR-TR2-70', [[1, 3390], [10, 2850]]),
       offer(B, 'EG-4470', [[1, 3550]]),
     ]),
-    part('tp-trafo-1', 'Mains transformer, one secondary 16 V 2 A, laminated, 35 VA', 'transformer', { va: 35, sec1V: 16, sec1A: 2 }, [
+    part('tp-trafo-1', 'Mains transformer, one secondary 17 V 2 A, laminated, 35 VA', 'transformer', { va: 35, sec1V: 17, sec1A: 2 }, [
       offer(A, 'MR-TR1-30', [[1, 1990], [10, 1690]]),
     ]),
     part('tp-trafo-pa', 'Mains transformer, one secondary 20 V 3 A, laminated, 60 VA', 'transformer', { va: 60, sec1V: 20, sec1A: 3 }, [
