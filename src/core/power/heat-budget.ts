@@ -30,6 +30,9 @@ export interface HeatBudget {
   findings: Finding[];
 }
 
+/** The ambient small mains transformers are commonly rated for, their ta marking (°C). From memory, not confirmed. */
+export const TRANSFORMER_RATED_AMBIENT_C = 40;
+
 /** A rise above which the box is worth ventilating (K). Common practice, no published source. */
 export const ENCLOSURE_RISE_CAUTION_K = 10;
 
@@ -76,6 +79,12 @@ export function heatBudget(supply: SupplyReport | null, pas: PaHeat[], areaM2: n
     findings.push({ ...base, severity: 'caution', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C; the heatsink and junction checks of the rectifiers, regulators and PA use that air, not the ${ambientC} °C room. Ventilate the box or mount hot parts outside.` });
   } else {
     findings.push({ ...base, severity: 'ok', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C, the ambient of the heatsink and junction checks inside.` });
+  }
+  // the transformers sit in the same air: their current ratings hold at their rated ambient
+  if (insideC !== null && insideC > TRANSFORMER_RATED_AMBIENT_C) {
+    for (const t of supply?.transformers ?? []) {
+      findings.push({ rule: 'transformer.ambient', subject: t.name, severity: 'caution', value: insideC, limit: TRANSFORMER_RATED_AMBIENT_C, unit: '°C', source: 'thermal.transformer-ambient', message: `${t.name} sits inside the box at ${insideC.toFixed(0)} °C, above the ${TRANSFORMER_RATED_AMBIENT_C} °C ambient small transformers are commonly rated for: its current ratings are optimistic there. Check the ta marked on it, derate its current, ventilate the box or mount it outside.` });
+    }
   }
   return { sources: clean, totalW, areaM2: area, uWPerM2K: u, riseK, ambientC, insideC, findings };
 }

@@ -72,6 +72,16 @@ describe('an enclosure: the air inside is the ambient of the thermal checks insi
     expect(r.findings.some((f) => /^pa\.(heatsink|tj-)/.test(f.rule) && f.message.includes(words))).toBe(true);
     expect(r.supply!.thermalAmbient).toEqual({ ambientC: inside, inside: true });
   });
+  it('the transformer in air above its commonly rated 40 °C ambient gets a caution; a roomy box (10 m², rise under 1 K) none', () => {
+    // rated ambient ta 40 °C: the common marking of small mains transformers (from memory, not confirmed)
+    const f = r.findings.filter((x) => x.rule === 'transformer.ambient');
+    expect(inside).toBeGreaterThan(40);
+    expect(f.map((x) => [x.subject, x.severity])).toEqual([['T1 mains transformer', 'caution']]);
+    near(f[0].value!, inside, 1e-9, 'value');
+    const roomy = evaluate({ ...club30m, supply: { ...club30m.supply, enclosureAreaM2: 10, enclosureUWPerM2K: 5.5 } });
+    expect(roomy.heat!.insideC!).toBeLessThan(40);
+    expect(roomy.findings.some((x) => x.rule === 'transformer.ambient')).toBe(false);
+  });
   it('without an enclosure the room is used', () => {
     expect(evaluate(club30m).supply!.thermalAmbient).toEqual({ ambientC: club30m.ambientC, inside: false });
   });
