@@ -36,6 +36,14 @@ describe('fix links go to the field', () => {
     }
   });
 
+  it.each(DEMOS)('%s: every finding under "Needs attention" on the overview carries its fix link', async (id) => {
+    const { get } = await demoApp();
+    const html = await (await get(`/projects/${id}`)).text();
+    const items = [...html.matchAll(/<li class="finding sev-(?:fail|caution)"[\s\S]*?<\/li>/g)].map((m) => m[0]);
+    expect(items.length).toBeGreaterThan(3);
+    for (const li of items) expect(li, li.slice(0, 120)).toMatch(/class="fix-link" href="\/projects\/[^"#]+#[^"]+"/);
+  });
+
   it.each(DEMOS)('%s: every actionable finding that is not ok links to a form control', async (id) => {
     const { get, database } = await demoApp();
     const project = (await loadProject(database.db, id))!;

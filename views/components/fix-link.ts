@@ -32,7 +32,8 @@ function pick(spec: Spec, f: Finding, table: Record<string, string>, key = f.rul
   return k && spec.fields[k] ? k : undefined;
 }
 
-const fieldLabel = (spec: Spec, k: string) => spec.fields[k].label.toLowerCase();
+/** The field's label inside a sentence: a leading capital lowered, acronyms kept ("Core AL" → "core AL"). */
+const fieldLabel = (spec: Spec, k: string) => spec.fields[k].label.replace(/^[A-Z](?=[a-z])/, (c) => c.toLowerCase());
 
 const at = (href: string, id: string | undefined, label: string, field?: string): FixLink =>
   id ? { href: `${href}#${id}`, label: field ? `${label}: ${field}` : label } : { href, label };

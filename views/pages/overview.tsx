@@ -20,6 +20,7 @@ import { stateFor, type Failed } from '../components/failed';
 import { BudgetTable } from '../components/budget-table';
 import { FirstScreen } from '../components/first-screen';
 import { EmptyState } from '../components/empty-state';
+import { fixLink } from '../components/fix-link';
 
 export const loadValues = (s: Stage): Record<string, string> => loadCurrentValues(s.loads);
 
@@ -141,6 +142,16 @@ const SECTIONS: { key: string; label: string; path: string; findings: (r: Evalua
 ];
 
 /** Counts per section and the findings that need attention; the detail lives on each section's page. */
+/** The link to the input that clears a finding (views/components/fix-link.ts). */
+const FixAnchor: FC<{ project: Project; f: Finding }> = ({ project, f }) => {
+  const link = fixLink(project, f);
+  return (
+    <a class="fix-link" href={link.href}>
+      Fix: {link.label} →
+    </a>
+  );
+};
+
 const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ project, report }) => {
   // only findings a design change can clear count; standing cautions have their own block below
   const counted = actionable(report.findings);
@@ -186,7 +197,9 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
           <ul class="findings">
             {attention.map((f) => (
               <li class={`finding sev-${f.severity}`} data-rule={f.rule}>
-                <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="source">(Source: {sourceText(f.source)})</span>
+                <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message}{' '}
+                <FixAnchor project={project} f={f} />{' '}
+                <span class="source">(Source: {sourceText(f.source)})</span>
               </li>
             ))}
           </ul>
