@@ -11,10 +11,6 @@ export const DEFAULT_SECONDARY_V: readonly number[] = [
   80, 100, 110, 115, 120, 150, 200, 230, 250, 300,
 ];
 
-/** Where DEFAULT_SECONDARY_V comes from, in words for the pages. */
-export const SECONDARY_V_BASIS =
-  'secondary voltages common in small-transformer catalogues (laminated and toroidal ranges merged; no maker named)';
-
 /**
  * Off-the-shelf transformer ratings (VA).
  * Common practice, no published source: typical catalogue steps for laminated and toroidal types (from memory).
