@@ -10,7 +10,9 @@ import { junctionTemperature, type ThermalResult } from './junction';
  * class, from memory, not confirmed); θcs 0.5 K/W greased (a heatsink maker's interface chart for a package of that
  * area, from memory, not confirmed).
  */
-export const ASSUMED_BRIDGE_MOUNT: HeatsinkMount = { thetaJcKPerW: 2.2, thetaCsKPerW: 0.5, thetaSaKPerW: null, tjMaxC: 150 };
+export const ASSUMED_BRIDGE_MOUNT: HeatsinkMount = {
+  thetaJcKPerW: 2.2, thetaCsKPerW: 0.5, thetaSaKPerW: null, tjMaxC: 150,
+};
 export const ASSUMED_BRIDGE_FREE_AIR_K_PER_W = 22;
 
 export interface BridgeThermal {
@@ -49,12 +51,16 @@ export function bridgeThermal(inp: BridgeThermalInput): BridgeThermal {
   const assumed = !inp.mount;
   const mount = inp.mount ?? ASSUMED_BRIDGE_MOUNT;
   const fa = inp.freeAirKPerW;
-  const freeAirKPerW = fa !== null && fa !== undefined && Number.isFinite(fa) && fa > 0 ? fa : ASSUMED_BRIDGE_FREE_AIR_K_PER_W;
+  const usable = fa !== null && fa !== undefined && Number.isFinite(fa) && fa > 0;
+  const freeAirKPerW = usable ? fa : ASSUMED_BRIDGE_FREE_AIR_K_PER_W;
   const powerW = finite(inp.basis === 'tune-up' ? inp.tuneUpW : inp.thermalW);
   const otherW = finite(inp.basis === 'tune-up' ? inp.thermalW : inp.tuneUpW);
-  // Source: series thermal path Tj = Ta + P (θjc + θcs + θsa); θsa,max = (Tj,target - Ta)/P - θjc - θcs (textbook)
+  // Source: series thermal path Tj = Ta + P (θjc + θcs + θsa) (textbook)
   const result = junctionTemperature(powerW, inp.ambientC, mount, freeAirKPerW);
-  return { powerW, basis: inp.basis, otherW, ambientC: result.ambientC, inside: inp.inside, mount, freeAirKPerW, assumed, heatsinkFitted: mount.thetaSaKPerW !== null, result };
+  return {
+    powerW, basis: inp.basis, otherW, ambientC: result.ambientC, inside: inp.inside, mount, freeAirKPerW, assumed,
+    heatsinkFitted: mount.thetaSaKPerW !== null, result,
+  };
 }
 
 /** "inside the box at 47 °C" or "in the 35 °C room". */
@@ -65,24 +71,42 @@ export function airWords(ambientC: number, inside: boolean): string {
 export function bridgeThermalFindings(railName: string, b: BridgeThermal): Finding[] {
   const t = b.result;
   const subject = `${railName} rectifier`;
-  const base = { rule: 'thermal.bridge', subject, source: 'thermal.bridge' as const };
-  const load = b.basis === 'tune-up' ? 'with a continuous tune-up carrier' : 'in CW keying at high mains (duty-averaged)';
-  const p = `${t.powerW.toFixed(2)} W ${load}, ${airWords(t.ambientC, b.inside)}`;
+  const base = { rule: 'thermal.bridge', subject, source: 'thermal.bridge' as const, unit: '°C' };
+  const load = b.basis === 'tune-up'
+    ? 'with a continuous tune-up carrier'
+    : 'in CW keying at high mains (duty-averaged)';
+  const p = `${subject}: ${t.powerW.toFixed(2)} W ${load}, ${airWords(t.ambientC, b.inside)}`;
   const out: Finding[] = [];
   if (b.assumed) {
-    out.push({ ...base, rule: 'thermal.bridge-assumed', severity: 'caution', value: null, limit: null, unit: '', source: 'thermal.bridge-assumed', message: `${subject}: no thermal data entered; a 4-8 A single-in-line bridge is assumed (θjc ${ASSUMED_BRIDGE_MOUNT.thetaJcKPerW} K/W, θja ${ASSUMED_BRIDGE_FREE_AIR_K_PER_W} K/W in free air, Tj max ${ASSUMED_BRIDGE_MOUNT.tjMaxC} °C). Enter your part's values from its datasheet.` });
+    const m = ASSUMED_BRIDGE_MOUNT;
+    out.push({
+      ...base, rule: 'thermal.bridge-assumed', severity: 'caution', value: null, limit: null, unit: '',
+      source: 'thermal.bridge-assumed',
+      message: `${subject}: no thermal data entered; a 4-8 A single-in-line bridge is assumed ` +
+        `(θjc ${m.thetaJcKPerW} K/W, θja ${ASSUMED_BRIDGE_FREE_AIR_K_PER_W} K/W in free air, Tj max ${m.tjMaxC} °C). ` +
+        `Enter your part's values from its datasheet.`,
+    });
   }
   const need = t.requiredThetaSaKPerW;
-  const needWords = need !== null ? `a heatsink of ${need.toFixed(1)} K/W or lower (θsa)` : 'more than one heatsink can give: share the current over more diodes';
-  if (!b.heatsinkFitted) {
-    const tj = t.freeAirJunctionC;
-    if (tj > t.tjMaxC) return [...out, { ...base, severity: 'fail', value: tj, limit: t.tjMaxC, unit: '°C', message: `${subject}: ${p}, the junction would reach about ${tj.toFixed(0)} °C without a heatsink, above its ${t.tjMaxC.toFixed(0)} °C maximum. It needs ${needWords}.` }];
-    if (tj > t.targetC) return [...out, { ...base, severity: 'caution', value: tj, limit: t.targetC, unit: '°C', message: `${subject}: ${p}, the junction reaches about ${tj.toFixed(0)} °C without a heatsink, above the ${t.targetC.toFixed(0)} °C target (80 % of the maximum). Fit ${needWords}.` }];
-    return [...out, { ...base, severity: 'ok', value: tj, limit: t.targetC, unit: '°C', message: `${subject}: ${p}, about ${tj.toFixed(0)} °C at the junction without a heatsink, within the ${t.targetC.toFixed(0)} °C target.` }];
+  const needWords = need !== null
+    ? `a heatsink of ${need.toFixed(1)} K/W or lower (θsa)`
+    : 'more than one heatsink can give: share the current over more diodes';
+  const fitted = b.heatsinkFitted;
+  const tj = fitted ? t.junctionC! : t.freeAirJunctionC;
+  const on = fitted ? `on the ${b.mount.thetaSaKPerW} K/W heatsink` : 'without a heatsink';
+  const max = t.tjMaxC.toFixed(0);
+  const target = t.targetC.toFixed(0);
+  if (tj > t.tjMaxC) {
+    const message = `${p}, the junction would reach about ${tj.toFixed(0)} °C ${on}, above its ${max} °C maximum. ` +
+      `It needs ${needWords}.`;
+    return [...out, { ...base, severity: 'fail', value: tj, limit: t.tjMaxC, message }];
   }
-  const tj = t.junctionC!;
-  const sa = b.mount.thetaSaKPerW!;
-  if (tj > t.tjMaxC) return [...out, { ...base, severity: 'fail', value: tj, limit: t.tjMaxC, unit: '°C', message: `${subject}: ${p}, the junction reaches about ${tj.toFixed(0)} °C on the ${sa} K/W heatsink, above its ${t.tjMaxC.toFixed(0)} °C maximum. It needs ${needWords}.` }];
-  if (tj > t.targetC) return [...out, { ...base, severity: 'caution', value: tj, limit: t.targetC, unit: '°C', message: `${subject}: ${p}, the junction reaches about ${tj.toFixed(0)} °C on the ${sa} K/W heatsink, above the ${t.targetC.toFixed(0)} °C target: the heatsink is too small; use ${needWords}.` }];
-  return [...out, { ...base, severity: 'ok', value: tj, limit: t.targetC, unit: '°C', message: `${subject}: ${p}, about ${tj.toFixed(0)} °C at the junction on the ${sa} K/W heatsink, within the ${t.targetC.toFixed(0)} °C target.` }];
+  if (tj > t.targetC) {
+    const fix = fitted ? `the heatsink is too small; use ${needWords}` : `fit ${needWords}`;
+    const message = `${p}, the junction reaches about ${tj.toFixed(0)} °C ${on}, above the ${target} °C target ` +
+      `(80 % of the maximum): ${fix}.`;
+    return [...out, { ...base, severity: 'caution', value: tj, limit: t.targetC, message }];
+  }
+  const message = `${p}, about ${tj.toFixed(0)} °C at the junction ${on}, within the ${target} °C target.`;
+  return [...out, { ...base, severity: 'ok', value: tj, limit: t.targetC, message }];
 }
