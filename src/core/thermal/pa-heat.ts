@@ -7,14 +7,16 @@ import type { PaHeat } from '../power/heat-budget';
 
 const finite = (x: number) => (Number.isFinite(x) ? x : 0);
 
-/** Each final stage's duty-averaged dissipation, all devices (W), from the same PA model and rail voltages as the RF evaluation. */
-export function paHeatAhead(project: Project, ctx: Pick<RfContext, 'paRailV' | 'paRailMaxV' | 'paRailHotV' | 'paRailLowV' | 'paRailBattery'>): PaHeat[] {
+/** Each final stage's duty-averaged dissipation, all devices (W), from the RF evaluation's PA model and rail voltages. */
+type Rails = Pick<RfContext, 'paRailV' | 'paRailMaxV' | 'paRailHotV' | 'paRailLowV' | 'paRailBattery'>;
+export function paHeatAhead(project: Project, ctx: Rails): PaHeat[] {
   return project.stages.flatMap((st) => {
     if (st.kind !== 'final' || !st.pa) return [];
     const id = st.pa.railId;
     const r = evaluatePa(st.pa, finite(ctx.paRailV[id] ?? NaN), project, st.name, {
       maxRailV: ctx.paRailMaxV?.[id], hotRailV: ctx.paRailHotV?.[id], lowRailV: ctx.paRailLowV?.[id],
-      source: ctx.paRailBattery?.[id] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr, frequencyHz: project.frequencyHz,
+      source: ctx.paRailBattery?.[id] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
+      frequencyHz: project.frequencyHz,
     });
     const t = r.thermal;
     if (r.refused || !t || !(t.dissipationPerDeviceW > 0)) return [];
