@@ -51,7 +51,7 @@ const BASIS_WHAT: Partial<Record<string, string>> = {
   'square-wave-1/n': 'square-wave estimate',
   'balance-residual': 'push-pull balance residual as entered',
   'rectangular-50%-1/n': 'single-ended estimate at 50 % duty',
-  'cosine-pulse': 'cosine current pulse over the conduction angle',
+  'cosine-pulse': 'drain current pulse over the conduction angle, from a plain cosine pulse at the edge of saturation to a flat-topped pulse when saturated',
   'push-pull-imbalance': 'even harmonic from the stated push-pull imbalance, typical to worst',
   'saturation-bound': 'clean sine to hard-clipped square wave',
   'rectangular-wave': 'rectangular wave, duty 50 % to the stated worst imbalance',

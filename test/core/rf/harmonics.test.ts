@@ -69,3 +69,18 @@ describe('spur budget worked example (REFERENCE-VALUES §3.4)', () => {
     expect(r.rows.every((x) => x.severity === 'fail')).toBe(true);
   });
 });
+
+describe('class B/C pulse basis wording', () => {
+  // The basis spans the pulse from the edge of saturation (plain cosine) to saturation (flat-topped): the finding
+  // must say so, not only "over the conduction angle" (issue 11, item 2; wording check, no numeric source needed)
+  it('names the saturation band of the drain current pulse', () => {
+    const r = harmonicCompliance({
+      rule: 'us-97-307', topology: 'single-ended', evenHarmonicDbc: -30, fundamentalW: 10, frequencyHz: 7e6,
+      passbandLossDb: 0, filter: null, monteCarlo: null,
+      spectrum: [2, 3, 4, 5].map((n) => ({ n, bestDbc: -30, worstDbc: -20, basis: 'cosine-pulse' as const })),
+    });
+    const text = r.findings.map((f) => f.message).join(' ');
+    expect(text).toMatch(/edge of saturation/);
+    expect(text).toMatch(/flat-topped/);
+  });
+});
