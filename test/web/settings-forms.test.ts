@@ -32,7 +32,7 @@ describe('project settings form', () => {
     ['ambient', '85', 'Ambient temperature must be at least -40 °C and at most 70 °C'],
     ['duty', '140', 'Keying duty (heating) must be at least 0 % and at most 100 %'],
     ['kits', '2.5', 'Kits to build must be a whole number'],
-    ['currency', 'euro', 'Currency must be a three-letter code such as USD or EUR'],
+    ['currency', 'euro', 'Project currency must be a three-letter code such as USD or EUR'],
   ])('%s = "%s" is refused naming the field, kept as typed, nothing saved', async (field, typed, message) => {
     const { get, post, database } = await demoApp();
     const id = IDS[0];

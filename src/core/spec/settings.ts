@@ -105,8 +105,9 @@ export const projectFieldsSpec = defineSpec({
       example: '8',
       help: 'rigs the group builds; the parts are ordered for all of them',
     }),
-    currency: text('Currency', 3, true, 'USD', {
+    currency: text('Project currency', 3, true, 'USD', {
       upper: true,
+      help: 'costs are totalled in it; offers in other currencies use the exchange rates on the parts catalog',
       pattern: { re: /^[A-Z]{3}$/, says: 'must be a three-letter code such as USD or EUR' },
     }),
   },

@@ -79,7 +79,7 @@ describe('settings form: display units and messages', () => {
   it('upper-cases a currency code and refuses anything but three letters', () => {
     expect(parseForm(settingsSpec, { ...form, currency: ' eur ' })).toMatchObject({ ok: true, value: { currency: 'EUR' } });
     const r = parseForm(settingsSpec, { ...form, currency: 'dollars' });
-    expect(r).toEqual({ ok: false, errors: { currency: 'Currency must be a three-letter code such as USD or EUR; you entered "dollars"' } });
+    expect(r).toEqual({ ok: false, errors: { currency: 'Project currency must be a three-letter code such as USD or EUR; you entered "dollars"' } });
   });
 });
 
@@ -127,7 +127,7 @@ describe('one limit per field: forms, project file and core agree', () => {
 
   it('the file refuses mains outside the form limits and a lower-case currency, naming the place', () => {
     expect(fileWith((p) => (p.mains = { ...p.mains!, lowFraction: 0.8 }))).toMatchObject({ ok: false, errors: ['project.mains.lowFraction: Low mains tolerance must be at least 0 % and at most 50 %'] });
-    expect(fileWith((p) => (p.currency = 'usd'))).toMatchObject({ ok: false, errors: ['project.currency: Currency must be a three-letter code such as USD or EUR'] });
+    expect(fileWith((p) => (p.currency = 'usd'))).toMatchObject({ ok: false, errors: ['project.currency: Project currency must be a three-letter code such as USD or EUR'] });
     expect(fileWith((p) => (p.mains = null)).ok).toBe(true);
   });
 });
