@@ -2,7 +2,7 @@
 // output + dropout, then its output capacitor falls through its own bleeder (a regulator sources current but does not
 // sink it). The time to a safe voltage, the fitted bleeder's dissipation, and a suggestion when none is fitted.
 import type { Finding } from '../findings';
-import { LOW_SAFE_V, LOW_VOLTAGE_TAU_S, SAFE_DC_V, SAFE_TIME_S, bleederPowerFindings, maxBleederOhm } from './bleeder';
+import { BLEEDER_DERATING, LOW_SAFE_V, LOW_VOLTAGE_TAU_S, SAFE_DC_V, SAFE_TIME_S, bleederPowerFindings, maxBleederOhm } from './bleeder';
 import { E12_STEPS, prevInSeries } from './standard-values';
 
 /** Time (s) for a rail to fall to v after switch-off; null = it does not fall there (nothing discharges it). */
@@ -22,11 +22,14 @@ export function reservoirFall(startV: number, capacitanceF: number, bleederOhm: 
 /**
  * A regulated rail set to outputV fed from a source falling as sourceFall. After switch-off the output is at least
  * min(outputV, V_source - dropout) (the regulator sources current while it can) and otherwise falls through its own
- * bleeder. An upper bound on the time to reach v: max(t_source(v + dropout), t_source(outputV + dropout) + RC ln(outputV / v)).
+ * bleeder. An upper bound on the time to reach v:
+ * max(t_source(v + dropout), t_source(outputV + dropout) + RC ln(outputV / v)).
  * Source: RC discharge (textbook) with the regulator's dropout from its datasheet; loads are neglected (they may
  * switch off first), so the time is an upper bound. Common practice, no published source, for the hold model.
  */
-export function regulatedFall(outputV: number, dropoutV: number, sourceFall: FallTime, capacitanceF: number | null, bleederOhm: number | null): FallTime {
+export function regulatedFall(
+  outputV: number, dropoutV: number, sourceFall: FallTime, capacitanceF: number | null, bleederOhm: number | null,
+): FallTime {
   return (v) => {
     if (!(v < outputV)) return 0;
     if (!(v > 0)) return null;
@@ -54,7 +57,7 @@ export interface RegulatedBleederReport {
   fittedTimeS: number | null;
   /** Why the time is not known, in words; null when it is. */
   why: string | null;
-  /** E12 bleeder giving a time constant of LOW_VOLTAGE_TAU_S (or 60 V within 5 s above 60 V), null without capacitance. */
+  /** E12 bleeder for a time constant of LOW_VOLTAGE_TAU_S (above 60 V: 60 V within 5 s); null without capacitance. */
   suggestedOhm: number | null;
   suggestedW: number | null;
   /** Energy stored in the output capacitance at startV (J), null = capacitance not entered. */
@@ -86,12 +89,14 @@ export function regulatedBleeder(inp: RegulatedBleederInput): RegulatedBleederRe
   let why: string | null = null;
   let fittedTimeS: number | null = null;
   if (!(v0 > safeV)) fittedTimeS = 0;
-  else if (inp.sourceFall === null) why = `it is fed from a battery, which holds it up until the battery is disconnected`;
+  else if (inp.sourceFall === null) why = 'it is fed from a battery, which holds it up until the battery is disconnected';
   else if (c === null) why = 'its output capacitance is not entered';
   else if (r === null) why = 'no bleeder is fitted, so nothing but its loads discharges the output capacitor';
   else {
     fittedTimeS = regulatedFall(v0, Math.max(0, inp.dropoutV), inp.sourceFall, c, r)(safeV);
-    if (fittedTimeS === null) why = `${inp.sourceName} has no bleeder, so the regulator keeps the rail up while that reservoir stays charged`;
+    if (fittedTimeS === null) {
+      why = `${inp.sourceName} has no bleeder, so the regulator keeps the rail up while that reservoir stays charged`;
+    }
   }
   // Source: Joule heating P = V^2 / R at the highest voltage (textbook)
   const fittedW = r !== null ? (v0 * v0) / r : null;
@@ -101,27 +106,39 @@ export function regulatedBleeder(inp: RegulatedBleederInput): RegulatedBleederRe
   const suggestedW = suggestedOhm !== null ? (v0 * v0) / suggestedOhm : null;
   // Source: stored energy of a capacitor, E = C V^2 / 2
   const storedJ = c !== null ? 0.5 * c * v0 * v0 : null;
-  const reasoning = `After switch-off the regulator holds ${inp.railName} at ${v0.toFixed(1)} V until ${inp.sourceName} has fallen to ${(v0 + inp.dropoutV).toFixed(1)} V (output + dropout); then its output capacitor falls through its own bleeder, since a regulator does not sink current. The time to ${safeV} V is an upper bound (loads neglected).`;
-  return { startV: v0, safeV, safeSource, capacitanceF: c, fittedOhm: r, ratedW: usable(inp.ratedW) ? inp.ratedW : null, fittedW, fittedTimeS, why, suggestedOhm, suggestedW, storedJ, reasoning };
+  const reasoning = `After switch-off the regulator holds ${inp.railName} at ${v0.toFixed(1)} V until ${inp.sourceName} has ` +
+    `fallen to ${(v0 + inp.dropoutV).toFixed(1)} V (output + dropout); then its output capacitor falls through its own ` +
+    `bleeder, since a regulator does not sink current. The time to ${safeV} V is an upper bound (loads neglected).`;
+  const ratedW = usable(inp.ratedW) ? inp.ratedW : null;
+  return { startV: v0, safeV, safeSource, capacitanceF: c, fittedOhm: r, ratedW, fittedW, fittedTimeS, why, suggestedOhm, suggestedW, storedJ, reasoning };
 }
 
 const fmtOhm = (r: number) => (r >= 1000 ? `${Number((r / 1000).toPrecision(2))} kΩ` : `${Number(r.toPrecision(2))} Ω`);
 
 export function regulatedBleederFindings(railName: string, b: RegulatedBleederReport): Finding[] {
   const base = { rule: 'bleeder.regulated', subject: `${railName} output`, source: 'supply.bleeder-regulated' as const };
-  const suggest = b.suggestedOhm !== null ? ` A ${fmtOhm(b.suggestedOhm)} bleeder (${(b.suggestedW! / 0.5).toFixed(2)} W rating or more) would do it.` : '';
-  const power = b.fittedW !== null ? bleederPowerFindings(railName, { fittedW: b.fittedW, startV: b.startV, ratedW: b.ratedW }, 'the set output') : [];
+  const suggest = b.suggestedOhm !== null
+    ? ` A ${fmtOhm(b.suggestedOhm)} bleeder (${(b.suggestedW! / BLEEDER_DERATING).toFixed(2)} W rating or more) would do it.`
+    : '';
+  const fitted = { fittedW: b.fittedW, startV: b.startV, ratedW: b.ratedW };
+  const power = b.fittedW !== null ? bleederPowerFindings(railName, fitted, 'the set output') : [];
   const high = b.startV > SAFE_DC_V;
   if (b.fittedTimeS !== null) {
     const late = high && b.fittedTimeS > SAFE_TIME_S;
-    return [{ ...base, severity: late ? 'fail' : 'ok', value: b.fittedTimeS, limit: high ? SAFE_TIME_S : null, unit: 's', message: `${railName} falls below ${b.safeV} V within about ${b.fittedTimeS.toFixed(1)} s after switch-off (an upper bound: its source must fall first).${late ? ` ${SAFE_TIME_S} s is the usual limit: use a smaller bleeder here or on the source rail.` : ''}` }, ...power];
+    const tooLong = late ? ` ${SAFE_TIME_S} s is the usual limit: use a smaller bleeder here or on the source rail.` : '';
+    const message = `${railName} falls below ${b.safeV} V within about ${b.fittedTimeS.toFixed(1)} s after switch-off ` +
+      `(an upper bound: its source must fall first).${tooLong}`;
+    return [{ ...base, severity: late ? 'fail' : 'ok', value: b.fittedTimeS, limit: high ? SAFE_TIME_S : null, unit: 's', message }, ...power];
   }
   const e = b.storedJ !== null ? `; it stores ${b.storedJ < 0.1 ? b.storedJ.toFixed(3) : b.storedJ.toFixed(1)} J` : '';
-  return [{ ...base, severity: high ? 'fail' : 'ok', value: b.startV, limit: SAFE_DC_V, unit: 'V', message: `${railName} (${b.startV.toFixed(1)} V) may stay charged after switch-off: ${b.why}${e}.${suggest} Check with a meter before working on it.` }, ...power];
+  const message = `${railName} (${b.startV.toFixed(1)} V) may stay charged after switch-off: ${b.why}${e}.${suggest} ` +
+    'Check with a meter before working on it.';
+  return [{ ...base, severity: high ? 'fail' : 'ok', value: b.startV, limit: SAFE_DC_V, unit: 'V', message }, ...power];
 }
 
 /** A regulated rail's report with its bleeder and findings, and how its output falls (for rails it feeds). */
-export function withRegulatedBleeder<R extends { railName: string; outputV: number; dropoutV: number; findings: Finding[] }>(
+type RegulatedLike = { railName: string; outputV: number; dropoutV: number; findings: Finding[] };
+export function withRegulatedBleeder<R extends RegulatedLike>(
   report: R,
   rail: { outputF?: number | null; bleederOhm?: number | null; bleederRatedW?: number | null },
   sourceName: string,
@@ -131,6 +148,8 @@ export function withRegulatedBleeder<R extends { railName: string; outputV: numb
     railName: report.railName, sourceName, outputV: report.outputV, dropoutV: report.dropoutV,
     capacitanceF: rail.outputF ?? null, fittedOhm: rail.bleederOhm ?? null, ratedW: rail.bleederRatedW ?? null, sourceFall,
   });
-  const fall = sourceFall === null ? null : regulatedFall(bleeder.startV, Math.max(0, report.dropoutV), sourceFall, bleeder.capacitanceF, bleeder.fittedOhm);
-  return { report: { ...report, bleeder, findings: [...report.findings, ...regulatedBleederFindings(report.railName, bleeder)] }, fall };
+  const dropout = Math.max(0, report.dropoutV);
+  const fall = sourceFall === null ? null : regulatedFall(bleeder.startV, dropout, sourceFall, bleeder.capacitanceF, bleeder.fittedOhm);
+  const findings = [...report.findings, ...regulatedBleederFindings(report.railName, bleeder)];
+  return { report: { ...report, bleeder, findings }, fall };
 }
