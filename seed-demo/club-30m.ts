@@ -61,6 +61,8 @@ const stages: Stage[] = [
       imbalanceTypical: null,
       imbalanceWorst: null,
       deviceCossF: null,
+      transitionTimeS: null,
+      outputLeakageH: null,
       outputCoreId: CATALOG_BINOCULAR.id,
       outputPrimaryTurns: 2,
       outputWireDiameterM: 0.8e-3,
