@@ -11,6 +11,7 @@ import { formatValue } from '../units';
 import type { DesignRole, RoleRule } from './types';
 import { finite, groupValues, role } from './role-make';
 import { filterRoles } from './filter-roles';
+import { findCore } from '../rf/core-catalog';
 
 /** Capacitance may be this much under the design's value (nominal values compared). Common practice, no source. */
 export const CAPACITANCE_SLACK = 0.02;
@@ -118,7 +119,7 @@ function rfRoles(project: Project, rf: RfReport): DesignRole[] {
           { key: 'thetaSaKPerW', label: 'θsa', unit: 'K/W', op: 'max', limit: need, required: true, source: 'pa.thermal', why: 'the largest θsa keeping the junctions at 0.8 Tj,max' },
         ]));
     }
-    if (stage) out.push(...filterRoles(stage, s, rf.frequencyHz));
+    if (stage) out.push(...filterRoles(stage, s, rf.frequencyHz, findCore(project, stage.lpf?.coreId)));
     if (s.relay && stage?.relay) {
       const rl = s.relay;
       const coilRail = project.supply.rails.find((r) => r.id === stage.relay?.coilRailId);
