@@ -7,6 +7,7 @@ import { formatMoney } from '../core/cost/money';
 import { actionable, standingCautions } from '../core/findings';
 import { isSourceKey, sourceText } from '../core/sources/registry';
 import { GOVERNS, RULE_SETS } from '../core/rules/rule-set';
+import { roleLines } from './roles-text';
 
 export const EVALUATION_FORMAT = 'rigwright-evaluation';
 export const EVALUATION_FORMAT_VERSION = 1;
@@ -57,7 +58,7 @@ export function renderEvaluationText(project: Project, report: EvaluationReport)
     if (r.modeV) out.push(`${pad('', 40)}  key-down ${formatValue(r.modeV.keyDown, 'V')}, trough ${formatValue(r.keyDownTroughV ?? NaN, 'V')}`);
   }
   out.push(`${pad('All sources, DC power', 49)}${MODES.map((m) => lpad(formatValue(report.budget.totalW[m], 'W'), 13)).join('')}`);
-  out.push(...supplyLines(report), ...rfLines(report), ...costLines(report));
+  out.push(...supplyLines(report), ...rfLines(report), ...costLines(report), ...roleLines(report));
   out.push('');
   const act = actionable(report.findings);
   out.push(`Findings (${act.length}, most severe first)`);
