@@ -10,7 +10,7 @@ import type { Failed } from './failed';
 
 const STATE_TEXT: Record<RoleStatus['state'], string> = {
   ok: 'meets the design',
-  caution: 'check (see the findings)',
+  caution: 'check (why below)',
   fail: 'does not meet the design',
   unbound: 'no line bound',
 };
@@ -58,6 +58,13 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
                   <br />
                   Bound: {lines.map((l) => `${l.refs ? `${l.refs} ` : ''}${parts.get(l.partId)?.description ?? l.partId}`).join('; ')}
                 </>
+              ) : null}
+              {s.state !== 'ok' && s.state !== 'unbound' && s.problems?.length ? (
+                <ul class="role-problems">
+                  {s.problems.map((m) => (
+                    <li>{m}</li>
+                  ))}
+                </ul>
               ) : null}
               {candidates.length ? (
                 <ul class="role-candidates">

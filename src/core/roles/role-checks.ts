@@ -77,7 +77,30 @@ const limitText = (r: RoleRule) =>
         ? `${formatValue(r.limit, r.unit)} ${pct(r.tolerance)}`
         : `${r.op === 'min' ? 'at least' : 'at most'} ${formatValue(r.limit, r.unit)}`;
 
-function lineFindings(role: DesignRole, part: Part): Finding[] {
+/** The line as a message names it: its designators, else its id, with the part. */
+const lineName = (line: BomLine, part: Part) => `line ${line.refs.trim() || line.id} (${part.description})`;
+
+/** "a", "a or b", "a, b or c". */
+const orList = (xs: string[]) => (xs.length < 2 ? xs.join('') : `${xs.slice(0, -1).join(', ')} or ${xs[xs.length - 1]}`);
+
+/**
+ * The values a grouped role asks each line for (fuse ratings, capacitances) that a bound line's part does not state,
+ * as one caution naming the line: a generic line ("values per the RF page") is never a silent pass. Required ratings
+ * that are missing have their own caution per rating; other optional ratings (a core's size) stay unchecked.
+ */
+function unstatedFinding(role: DesignRole, line: BomLine, part: Part): Finding[] {
+  const missing = role.rules.filter((r) => r.op === 'eachOf' && !r.required && judgeRule(r, part).severity === 'missing');
+  if (!missing.length) return [];
+  const names = orList(missing.map((r) => r.label.toLowerCase()));
+  const needs = missing.map((r) => `${r.label.toLowerCase()} ${limitText(r)}`).join('; ');
+  return [{
+    severity: 'caution', rule: 'role.unstated', subject: `${role.label}: ${part.description}`, value: null, limit: null, unit: '',
+    source: 'roles.binding',
+    message: `The ${lineName(line, part)} does not state ${names}, so it cannot be checked against the design (${needs}): enter the ratings on the part or bind a candidate that states them.`,
+  }];
+}
+
+function lineFindings(role: DesignRole, part: Part, line: BomLine): Finding[] {
   const subject = `${role.label}: ${part.description}`;
   const def = categoryOf(part.category);
   if (def.id !== role.category)
@@ -100,6 +123,7 @@ function lineFindings(role: DesignRole, part: Part): Finding[] {
           : `${r.label} ${show(o.value as number | string, r.unit)} does not meet ${limitText(r)} (${r.why}): choose a candidate that does.`;
     out.push({ severity: s, rule, subject, value, limit, unit: r.unit, source: o.severity === 'missing' ? 'roles.binding' : r.source, message });
   }
+  out.push(...unstatedFinding(role, line, part));
   return out;
 }
 
@@ -155,7 +179,7 @@ export function checkRoles(project: Pick<Project, 'bom' | 'parts'>, roles: reado
     }
     const fs = lines.flatMap((l) => {
       const part = parts.get(l.partId);
-      return part ? lineFindings(role, part) : [];
+      return part ? lineFindings(role, part, l) : [];
     });
     fs.push(...coverFindings(role, lines, parts));
     findings.push(...fs);
