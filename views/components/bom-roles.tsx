@@ -62,7 +62,9 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
               {s.state !== 'ok' && s.state !== 'unbound' && s.problems?.length ? (
                 <ul class="role-problems">
                   {s.problems.map((m) => (
-                    <li>{m}</li>
+                    <li>
+                      <strong>Why:</strong> {m}
+                    </li>
                   ))}
                 </ul>
               ) : null}
