@@ -42,6 +42,10 @@ export interface CoreRealisation {
   /** Power and SWR the stress is computed for. */
   powerW: number;
   swr: number;
+  /** The core's peak flux limit and the capacitors' entered ratings the parts are judged against (null = not given). */
+  fluxLimitT?: number | null;
+  capacitorRatedV?: number | null;
+  capacitorRatedA?: number | null;
 }
 
 /** The entered toroid as a wound core (its dimensions give Ae and le), or the catalog core as it is. */
@@ -131,7 +135,7 @@ export function realiseLpf(
   }
   const realisation: CoreRealisation = {
     leM: geo?.leM ?? null, aeM2: geo?.aeM2 ?? null, permeability: geo ? effectivePermeability(d.coreAlHPerTurn2, geo.leM, geo.aeM2) : null,
-    inductors, capacitors, powerW, swr,
+    inductors, capacitors, powerW, swr, fluxLimitT: core?.fluxLimitT ?? null, capacitorRatedV, capacitorRatedA,
   };
   return { realisation, findings };
 }

@@ -10,6 +10,7 @@ import type { PaSwrStress, Worst } from '../../core/rf/pa-swr';
 import type { PaWaveformSummary } from '../../core/rf/pa-dc';
 import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
 import { MIN_DBC } from '../../core/rf/pa-spectrum';
+import { paOutputRows } from '../../core/rf/pa-output-rows';
 
 const loadText = (w: Worst) => `${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '−' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} Ω, phase ${w.phaseDeg.toFixed(0)}°`;
 
@@ -84,11 +85,24 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       const re = s.lpf.realisation;
       if (re) {
         l.text(`Parts at ${fv(re.powerW, 'W')} into SWR ${re.swr} (worst load phase)${re.aeM2 !== null && re.leM !== null ? `; core Ae ${(re.aeM2 * 1e6).toFixed(1)} mm², le ${(re.leM * 1e3).toFixed(1)} mm` : '; core dimensions not entered'}. Self-resonance estimated with about 2 pF across a winding and 5 nH of capacitor lead.`, { sizePt: 8.5, afterPt: 4 });
+        const flux = re.fluxLimitT ?? null;
+        const ratedV = re.capacitorRatedV ?? null;
+        const ratedA = re.capacitorRatedA ?? null;
+        const over = (x: boolean) => (x ? FAIL : undefined);
+        const capRating = [ratedV !== null ? `${fv(ratedV, 'V')}` : null, ratedA !== null ? `${fv(ratedA, 'A')}` : null].filter((x) => x !== null).join(', ') || 'not entered';
         const rows: Row[] = [
-          ...re.inductors.map((x) => ({ cells: [`L${x.index}`, fv(x.inductanceH, 'H'), fv(x.rmsV, 'V'), fv(x.rmsA, 'A'), x.peakFluxT !== null ? `${(x.peakFluxT * 1e3).toFixed(1)} mT` : 'not checked', `${x.turns}${x.fitTurns !== null ? ` (fit ${x.fitTurns})` : ''}`, fv(x.selfResonanceHz, 'Hz', 3)] })),
-          ...re.capacitors.map((x) => ({ cells: [`C${x.index}`, fv(x.capacitanceF, 'F'), `${fv(x.rmsV, 'V')} (${fv(x.peakV, 'V')} pk)`, fv(x.rmsA, 'A'), '—', '—', fv(x.selfResonanceHz, 'Hz', 3)] })),
+          ...re.inductors.map((x) => ({
+            cells: [`L${x.index}`, fv(x.inductanceH, 'H'), fv(x.rmsV, 'V'), fv(x.rmsA, 'A'), x.peakFluxT !== null ? `${(x.peakFluxT * 1e3).toFixed(1)} mT` : 'not checked',
+              flux !== null ? `flux ≤ ${(flux * 1e3).toFixed(1)} mT` : 'no flux limit', `${x.turns}${x.fitTurns !== null ? ` (fit ${x.fitTurns})` : ''}`, fv(x.selfResonanceHz, 'Hz', 3)],
+            color: over((flux !== null && x.peakFluxT !== null && x.peakFluxT > flux) || (x.fitTurns !== null && x.turns > x.fitTurns)),
+          })),
+          ...re.capacitors.map((x) => ({
+            cells: [`C${x.index}`, fv(x.capacitanceF, 'F'), `${fv(x.rmsV, 'V')} (${fv(x.peakV, 'V')} pk)`, fv(x.rmsA, 'A'), '—', capRating, '—', fv(x.selfResonanceHz, 'Hz', 3)],
+            color: over((ratedV !== null && x.peakV > ratedV) || (ratedA !== null && x.rmsA > ratedA)),
+          })),
         ];
-        l.table([{ header: 'Part', width: 0.08 }, { header: 'Value', width: 0.12, align: 'right' }, { header: 'RF voltage RMS', width: 0.2, align: 'right' }, { header: 'RF current RMS', width: 0.14, align: 'right' }, { header: 'Peak flux', width: 0.14, align: 'right' }, { header: 'Turns', width: 0.14, align: 'right' }, { header: 'Self-resonance', width: 0.18, align: 'right' }], rows);
+        l.table([{ header: 'Part', width: 0.06 }, { header: 'Value', width: 0.1, align: 'right' }, { header: 'RF voltage RMS', width: 0.17, align: 'right' }, { header: 'RF current RMS', width: 0.12, align: 'right' }, { header: 'Peak flux', width: 0.1, align: 'right' }, { header: 'Limit / rating', width: 0.18, align: 'right' }, { header: 'Turns', width: 0.11, align: 'right' }, { header: 'Self-resonance', width: 0.16, align: 'right' }], rows);
+        l.text('Red: over the core\'s flux limit, turns that do not fit, or a capacitor over its voltage or current rating (see the findings).', { sizePt: 8, color: GREY });
       }
     }
     if (s.relay) {
@@ -102,11 +116,13 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
     }
     if (s.keying) keying(l, s.stageName, s.keying);
     const n = s.network;
-    if (n || s.choke) {
-      l.heading(`${s.stageName}: output network and feed choke`, 2);
+    const out = paOutputRows(s);
+    if (n || s.choke || out.length) {
+      l.heading(`${s.stageName}: output network${s.choke ? ' and feed choke' : ''}`, 2);
       keyValues(l, [
         ...(n ? [['L network', `${fv(n.drainOhm, 'Ω')} to ${fv(n.loadOhm, 'Ω')}, Q ${n.q.toFixed(2)}: series ${fv(n.seriesH, 'H')}${n.turns !== null && n.builtSeriesH !== null ? ` (${n.turns} turns on the filter's core, ${fv(n.builtSeriesH, 'H')})` : ''}, shunt ${n.capacitorPartsF.map((x) => fv(x, 'F', 2)).join(' ∥ ')} across the ${n.shuntAt} side`] as [string, string]] : []),
         ...(s.choke ? [['Feed choke', `at least ${fv(s.choke.minInductanceH, 'H')}, carrying ${fv(s.choke.currentA, 'A')} key-down`] as [string, string]] : []),
+        ...out,
       ], 110, 8.5);
     }
   }
