@@ -62,4 +62,33 @@ describe('new project from a template', () => {
     const demo = async (path: string) => (await (await get(`/projects/demo-club-30m${path}`)).text());
     for (const path of ['', '/supply', '/parts', '/bom']) expect(await demo(path)).not.toContain('class="empty-state"');
   });
+
+  it("an empty project's first screen says what to do next beside the verdict, and its cost is not a plain 0.00", async () => {
+    const { post, get } = await demoApp();
+    const res = await post('/projects', { name: 'Blank', band: '7.03', power: '5', mains: '230-50', template: '' });
+    const id = res.headers.get('location')!.split('/').pop()!;
+    const html = (await (await get(`/projects/${id}`)).text()).replace(/\s+/g, ' ');
+    const verdictCard = html.slice(html.indexOf('id="verdict"'), html.indexOf('id="top-fixes"'));
+    expect(verdictCard).toContain('set up the supply on the <a href="/projects/' + id + '/supply">Supply</a> page');
+    const cost = html.slice(html.indexOf('id="cost-glance"'), html.indexOf('id="harmonic-glance"'));
+    expect(cost).toContain('no parts in the list yet, so no cost');
+    expect(cost).not.toContain('0.00');
+    // the trough chart with no rail is tall enough for its one line (24 px, not the 8 px of zero rows)
+    expect(html).toMatch(/class="plot troughs" viewBox="0 0 \d+ 24"/);
+    // the RF page names the stages the RF checks need
+    const rf = (await (await get(`/projects/${id}/rf`)).text()).replace(/\s+/g, ' ');
+    expect(rf).toContain('add a final amplifier stage with its PA settings and a low-pass filter stage on the');
+    expect(rf).toContain('Without a filter the harmonics below fail.');
+    // the club demo has stages, rails, parts, a final and a filter: none of these notes
+    const demo = (await (await get('/projects/demo-club-30m')).text()).replace(/\s+/g, ' ');
+    expect(demo).not.toContain('Nothing designed yet');
+    expect(demo).not.toContain('no parts in the list yet');
+    expect(await (await get('/projects/demo-club-30m/rf')).text()).not.toContain('RF stages missing');
+  });
+
+  it("the Supply box says which supply the battery template needs, before it is refused", async () => {
+    const { get } = await demoApp();
+    const html = (await (await get('/')).text()).replace(/\s+/g, ' ');
+    expect(html).toContain('the battery portable template needs Battery / external DC; the other templates a mains voltage');
+  });
 });

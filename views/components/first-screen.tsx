@@ -7,6 +7,7 @@ import type { EvaluationReport } from '../../src/core/evaluate';
 import { actionable, sortFindings, worstSeverity } from '../../src/core/findings';
 import { formatMoney } from '../../src/core/cost/money';
 import { fixLink } from './fix-link';
+import { EmptyState } from './empty-state';
 import { powerFlowData, powerFlowSvg } from '../plots/power-flow';
 import { troughRows, troughChartSvg, harmonicBarsSvg } from '../plots/margin-charts';
 
@@ -44,6 +45,17 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
             {v.tail(attention.length, fails)}{' '}
             <a href="#checks">All checks</a>
           </p>
+          {project.stages.length && project.supply.rails.length ? null : (
+            <EmptyState label="Nothing designed yet">
+              {project.supply.rails.length ? 'add the stages' : (
+                <>
+                  set up the supply on the <a href={`${base}/supply`}>Supply</a> page, then add the stages
+                </>
+              )}{' '}
+              under <a href="#stages">Stages in build order</a>; the verdict counts only what is entered. Or start a new
+              project from a station template on the <a href="/">project list</a>.
+            </EmptyState>
+          )}
         </div>
         <div class="card top-fixes" id="top-fixes">
           <h2>{top.length ? `Fix first (${top.length} of ${attention.length})` : 'Nothing to fix'}</h2>
@@ -67,12 +79,19 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
         </div>
         <div class="card cost-glance" id="cost-glance">
           <h2>Cost</h2>
+          {project.bom.length ? (
           <p>
             <strong>{t.perKitCents === null ? '—' : formatMoney(t.perKitCents, cur)}</strong> per kit ·{' '}
             <strong>{formatMoney(t.buildCents, cur)}</strong> for the group of {report.cost.kits} (parts and shipping)
             {t.unpricedLines ? <span class="cost-warn"> ({t.unpricedLines} line(s) without a price: the real cost is higher)</span> : null}{' '}
             <a href={`${base}/bom`}>Parts list</a>
           </p>
+          ) : (
+            <EmptyState label="No parts yet">
+              no parts in the list yet, so no cost. Add parts on the <a href={`${base}/parts`}>Parts catalog</a>, then
+              their quantities on the <a href={`${base}/bom`}>Parts list</a>.
+            </EmptyState>
+          )}
         </div>
         <div class="card harmonic-glance" id="harmonic-glance">
           <h2>Harmonic margins</h2>

@@ -6,6 +6,7 @@ import { FormErrors, type FieldState } from '../components/fields';
 import { SpecField } from '../components/spec-fields';
 import { stateFor, type Failed } from '../components/failed';
 import { RfResults } from '../partials/rf-results';
+import { EmptyState } from '../components/empty-state';
 import { rfSettingsSpec, rfSettingsFormValues } from '../../src/core/spec/rf-settings';
 
 const Settings: FC<{ project: Project; state: FieldState }> = ({ project, state }) => {
@@ -36,6 +37,21 @@ const Settings: FC<{ project: Project; state: FieldState }> = ({ project, state 
   );
 };
 
+/** What to add first when the RF checks have no final or no filter to work from. */
+const RfNext: FC<{ project: Project }> = ({ project }) => {
+  const pa = project.stages.some((s) => s.kind === 'final' && s.pa);
+  const lpf = project.stages.some((s) => s.lpf);
+  if (pa && lpf) return null;
+  const missing = [pa ? null : 'a final amplifier stage with its PA settings', lpf ? null : 'a low-pass filter stage'].filter(Boolean);
+  return (
+    <EmptyState label="RF stages missing">
+      add {missing.join(' and ')} on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page (add the stage,
+      then open it).{pa ? '' : ' Until then the checks below work from the target power alone.'}
+      {lpf ? '' : ' Without a filter the harmonics below fail.'}
+    </EmptyState>
+  );
+};
+
 export const RfBody: FC<{ project: Project; report: EvaluationReport; failed?: Failed; notice?: string }> = ({ project, report, failed, notice }) => (
   <div id="rf">
     {notice ? (
@@ -47,6 +63,7 @@ export const RfBody: FC<{ project: Project; report: EvaluationReport; failed?: F
       Transmit only within your licence. Predicted harmonic levels and exposure distances are estimates from idealised models: measure the finished
       transmitter into a dummy load with a suitable instrument before going on the air, and evaluate RF exposure as your local rules require.
     </p>
+    <RfNext project={project} />
     <Settings project={project} state={stateFor('rf-settings', failed, () => rfSettingsFormValues(project))} />
     <p>
       <a href={`/projects/${project.id}/cores`}>Core catalog</a> ({(project.cores ?? []).length} cores): the cores the filter inductors and the

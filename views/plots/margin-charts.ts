@@ -41,7 +41,8 @@ export function troughChartSvg(rows: TroughRow[]): string {
   const rowH = 30;
   const labelW = 210;
   const trackW = 250;
-  const h = rows.length * rowH + 8;
+  // room for the one line said when there is no rail
+  const h = Math.max(rows.length * rowH + 8, 24);
   const parts = [
     `<svg xmlns="http://www.w3.org/2000/svg" class="plot troughs" viewBox="0 0 ${W} ${h}" role="img" aria-labelledby="tr-title" ` +
       `font-family="sans-serif" font-size="11"><title id="tr-title">Key-down trough of each rail at low (L), nominal (N) and high (H) ` +

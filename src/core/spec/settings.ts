@@ -158,7 +158,10 @@ export const newProjectSpec = defineSpec({
     name: { ...name, default: '' },
     frequencyHz: { ...rfInputsSpec.fields.frequencyHz, label: 'Band', form: 'band' },
     targetPowerW: rfInputsSpec.fields.targetPowerW,
-    mainsPreset: choice('Supply', Object.keys(MAINS_PRESETS).map((k) => [k, PRESET_TEXT[k]] as const), '230-50', { form: 'mains' }),
+    mainsPreset: choice('Supply', Object.keys(MAINS_PRESETS).map((k) => [k, PRESET_TEXT[k]] as const), '230-50', {
+      form: 'mains',
+      help: 'the battery portable template needs Battery / external DC; the other templates a mains voltage',
+    }),
     // '' (also what a form without this box sends) starts an empty project
     template: choice('Start from', TEMPLATE_OPTIONS, 'mains-two-rail', {
       help: 'a template fills in stages, supply, rails and a starter parts list with typical values and invented prices',

@@ -6,8 +6,9 @@ import { exampleText, readNumber } from '../../../src/core/spec/number-text';
 import { FORM_ONLY_SPECS } from '../../../src/core/spec/form-only';
 import { windingSpec } from '../../../src/core/spec/supply';
 
-// the forms that store nothing (new project, sweeps) offer examples too
-const numberFields = [...ALL_SPECS, ...FORM_ONLY_SPECS].flatMap((s) =>
+// the forms that store nothing (new project, sweeps) offer examples too; the mains boxes are drawn from mainsSpec's
+// own fields (the settings spec holds optional copies of them)
+const numberFields = [...ALL_SPECS, ...FORM_ONLY_SPECS, mainsSpec].flatMap((s) =>
   Object.entries(s.fields)
     .filter(([, f]) => f.type === 'number')
     .map(([k, f]) => [`${s.name}.${k}`, f as NumberField] as const),
