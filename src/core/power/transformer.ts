@@ -3,7 +3,10 @@ import type { Finding } from '../findings';
 import type { RectifiedRail, Transformer, Winding } from '../model';
 import type { RectifiedCorner, Recommendation, TransformerReport, WindingRecommendation } from './report-types';
 import { simulateRectifier } from './rectifier-sim';
-import { noLoadVrms, windingResistanceOhm } from './winding';
+import { simulateSharedPrimary } from './shared-primary';
+import { PRIMARY_COPPER_SHARE, primaryOhmFromRegulation } from './inrush';
+import { PRIMARY_LEAKAGE_SHARE, primaryLeakageH } from './cross-regulation';
+import { noLoadVrms, windingLeakage, windingResistanceOhm } from './winding';
 import { DEFAULT_TRANSFORMER_VA, nextAtLeast } from './standard-values';
 import { usablePositive } from '../numeric';
 
@@ -28,7 +31,27 @@ export interface WindingInput {
 
 const get = (cs: RectifiedCorner[], id: string) => cs.find((c) => c.id === id);
 
-/** Trough at low mains, key-down, for a winding of rated V and A with the fitted winding's regulation. */
+/**
+ * Leakage inductance of a candidate winding rated ratedV, ratedA (H): the fitted winding's leakage (entered, or split
+ * from its regulation) at the same per-unit reactance, L' = L (V'/I') / (V/I). Source: X = 2 pi f L (circuit theory);
+ * a winding's leakage reactance as a fixed share of its impedance base V/I across ratings of one construction is
+ * common practice, no published source (the same scaling the regulation figure gives the resistance).
+ */
+export function candidateLeakageH(inp: WindingInput, ratedV: number, ratedA: number): number {
+  const w = inp.winding;
+  const fittedH = windingLeakage(w, inp.construction, inp.frequencyHz).henry;
+  if (!(fittedH > 0)) return 0;
+  if (!usablePositive(w.ratedVrms, 1e-3) || !usablePositive(w.ratedA, 1e-6) || !usablePositive(ratedA, 1e-6)) return 0;
+  const l = (fittedH * (ratedV / ratedA)) / (w.ratedVrms / w.ratedA);
+  return Number.isFinite(l) ? l : 0;
+}
+
+/**
+ * Trough at low mains, key-down, for a winding of rated V and A with the fitted winding's regulation and its leakage
+ * (candidateLeakageH). With leakage the candidate is simulated as the evaluation simulates a transformer
+ * (cross-regulation.ts): a one-winding transformer, the primary's share of its copper and leakage in the primary;
+ * without leakage by the resistive rectifier simulation. Other windings' loads on the shared primary are left out.
+ */
 function troughFor(inp: WindingInput, ratedV: number, ratedA: number): number {
   const w = inp.winding;
   // Effective regulation of the fitted winding (from its entered resistance when there is one): R = Reg V / I (ref §4.1)
@@ -36,13 +59,42 @@ function troughFor(inp: WindingInput, ratedV: number, ratedA: number): number {
   const ratingUsable = usablePositive(w.ratedVrms, 1e-3) && usablePositive(w.ratedA, 1e-6);
   const regEff = ratingUsable ? (windingResistanceOhm(w) * w.ratedA) / w.ratedVrms : w.regulationFraction;
   const r = usablePositive(ratedA, 1e-6) ? (regEff * ratedV) / ratedA : 0;
+  const secondaryVrms = noLoadVrms({ ...w, ratedVrms: ratedV }) * inp.lowFactor;
+  const leakageH = candidateLeakageH(inp, ratedV, ratedA);
+  const rail = inp.rail;
+  if (leakageH > 0 && secondaryVrms > 0 && usablePositive(inp.mainsNominalV, 1)) {
+    const candidate: Winding = { ...w, ratedVrms: ratedV, ratedA, resistanceOhm: r, leakageH };
+    const t: Transformer = { id: 'candidate', name: w.name, construction: inp.construction, windings: [candidate] };
+    const mains = { nominalV: inp.mainsNominalV, frequencyHz: inp.frequencyHz, lowFraction: 0, highFraction: 0 };
+    const joint = simulateSharedPrimary({
+      primaryVrms: inp.mainsNominalV * inp.lowFactor, primaryOhm: primaryOhmFromRegulation(t, inp.mainsNominalV),
+      primaryH: primaryLeakageH(t, mains), frequencyHz: inp.frequencyHz, stepsPerCycle: 500, maxCycles: 80,
+      windings: [{
+        topology: rail.topology, secondaryVrms, ownOhm: (1 - PRIMARY_COPPER_SHARE) * r,
+        ownH: (1 - PRIMARY_LEAKAGE_SHARE) * leakageH, diodeDropV: rail.diodeDropV,
+        diodeResistanceOhm: rail.diodeResistanceOhm, capacitanceF: rail.reservoirF, esrOhm: rail.esrOhm,
+        loadA: inp.keyDownA, bleederOhm: rail.bleederOhm,
+      }],
+    });
+    const trough = joint.rails[0]?.troughV;
+    return joint.converged && trough !== undefined && Number.isFinite(trough) ? Math.max(0, trough) : 0;
+  }
   const sim = simulateRectifier({
-    topology: inp.rail.topology, secondaryVrms: noLoadVrms({ ...w, ratedVrms: ratedV }) * inp.lowFactor, windingResistanceOhm: r,
-    frequencyHz: inp.frequencyHz, diodeDropV: inp.rail.diodeDropV, diodeResistanceOhm: inp.rail.diodeResistanceOhm,
-    capacitanceF: inp.rail.reservoirF, esrOhm: inp.rail.esrOhm, load: { kind: 'current', currentA: inp.keyDownA },
-    bleederOhm: inp.rail.bleederOhm, stepsPerCycle: 500, waveformPoints: 0, maxCycles: 80,
+    topology: rail.topology, secondaryVrms, windingResistanceOhm: r,
+    frequencyHz: inp.frequencyHz, diodeDropV: rail.diodeDropV, diodeResistanceOhm: rail.diodeResistanceOhm,
+    capacitanceF: rail.reservoirF, esrOhm: rail.esrOhm, load: { kind: 'current', currentA: inp.keyDownA },
+    bleederOhm: rail.bleederOhm, stepsPerCycle: 500, waveformPoints: 0, maxCycles: 80,
   });
   return sim.collapsed ? 0 : sim.troughV;
+}
+
+/** What the candidate windings share with the fitted one, in words: regulation, and leakage when there is any. */
+function sameAsFitted(inp: WindingInput): string {
+  const l = windingLeakage(inp.winding, inp.construction, inp.frequencyHz);
+  if (!(l.henry > 0)) return 'same regulation as the fitted winding, no leakage';
+  const mH = l.henry * 1e3;
+  const how = l.fromRegulation ? 'split from its regulation' : 'entered';
+  return `same regulation and per-unit leakage as the fitted winding, whose ${mH.toPrecision(3)} mH is ${how}`;
 }
 
 export function recommendWinding(inp: WindingInput): { result: WindingRecommendation; findings: Finding[]; recommendation: Recommendation; simulations: number } {
@@ -80,7 +132,8 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
       minimumRatedV = hi;
     }
     reasoningV = minimumRatedV !== null
-      ? `The lowest rated secondary that keeps the trough at low mains, key-down above ${req.toFixed(2)} V is ${minimumRatedV.toFixed(2)} V${halves === 2 ? ' per half' : ''} (same regulation as the fitted winding).`
+      ? `The lowest rated secondary that keeps the trough at low mains, key-down above ${req.toFixed(2)} V is ` +
+        `${minimumRatedV.toFixed(2)} V${halves === 2 ? ' per half' : ''} (${sameAsFitted(inp)}).`
       : `No secondary voltage up to ${hi.toFixed(0)} V keeps the trough above ${req.toFixed(2)} V with this reservoir and load; the reservoir or load must change.`;
   } else {
     reasoningV = 'This rail states no minimum voltage (no regulator fed), so the fitted secondary voltage is kept.';
