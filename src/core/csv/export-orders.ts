@@ -1,11 +1,14 @@
 // The order sheets as CSV: one block per supplier (its lines, then its parts, shipping and total rows), then the
 // grand total. Amounts in each currency's own minor unit (ISO 4217), written in the major unit.
 
-import { centsToMajor } from '../cost/money';
+import { minorDigits } from '../cost/money';
 import { orderSheets } from '../cost/order-sheet';
 import type { CostReport } from '../cost/report-types';
-import { writeCsv, type CsvCell } from './write';
+import { fixedCell, writeCsv, type CsvCell } from './write';
 import type { PartsCsvOptions } from './export-parts';
+
+/** Minor units written with the currency's own decimals (ISO 4217): "26.20" USD, "150" JPY, "1.250" KWD. */
+const moneyCell = (cents: number, currency: string): CsvCell => fixedCell(cents, minorDigits(currency));
 
 export function orderCsvHeaders(currency: string): string[] {
   return ['Supplier', 'SKU', 'Description', 'Refs', 'Order qty', 'Needed qty', 'Break from', 'Currency', 'Unit price',
@@ -20,14 +23,14 @@ export function orderSheetsToCsv(report: CostReport, options: Omit<PartsCsvOptio
     const r: CsvCell[] = Array(headers.length).fill(null);
     r[0] = supplier;
     r[2] = label;
-    r[headers.length - 1] = centsToMajor(cents, cur);
+    r[headers.length - 1] = moneyCell(cents, cur);
     return r;
   };
   for (const sheet of orderSheets(report)) {
     for (const l of sheet.lines) {
       rows.push([sheet.supplier, l.sku, l.description, l.refs, l.qty, l.neededQty, l.breakMinQty, l.offerCurrency,
-        centsToMajor(l.unitPriceCents, l.offerCurrency), centsToMajor(l.offerCostCents, l.offerCurrency),
-        centsToMajor(l.lineCostCents, cur)]);
+        moneyCell(l.unitPriceCents, l.offerCurrency), moneyCell(l.offerCostCents, l.offerCurrency),
+        moneyCell(l.lineCostCents, cur)]);
     }
     rows.push(total(sheet.supplier, 'Total parts', sheet.partsCents));
     rows.push(total(sheet.supplier, 'Shipping', sheet.shippingCents));

@@ -1,9 +1,9 @@
 // The costed parts list as CSV, one row per BOM line in report order, optional total rows at the end.
 // The headers are ones guessMapping() recognises, so the file imports back as a parts list.
 
-import { centsToMajor, formatMoney } from '../cost/money';
+import { formatMoney, minorDigits } from '../cost/money';
 import type { CostLine, CostReport } from '../cost/report-types';
-import { writeCsv, type CsvCell } from './write';
+import { fixedCell, writeCsv, type CsvCell } from './write';
 
 export interface PartsCsvOptions {
   /** Start with a UTF-8 BOM (default true: spreadsheets then show Ω, µ, ü correctly). */
@@ -24,7 +24,7 @@ export function partsCsvHeaders(currency: string): string[] {
 
 /** Minor units as a major-unit number with the currency's own decimals (ISO 4217). */
 function money(cents: number | null, currency: string | null): CsvCell {
-  return cents === null || currency === null ? null : centsToMajor(cents, currency);
+  return cents === null || currency === null ? null : fixedCell(cents, minorDigits(currency));
 }
 
 function row(l: CostLine, currency: string): CsvCell[] {

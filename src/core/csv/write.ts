@@ -3,8 +3,24 @@
 // recommendation: prefix cells starting with = + - @ TAB CR with a single quote, and quote every field
 // that contains the separator or a double quote.
 
+/**
+ * A decimal written with a fixed number of decimals, e.g. money in its currency's minor unit ("26.20", "150",
+ * "1.250"); `text` is a plain decimal number (optional "-", digits, optional "." and digits), written as a number.
+ */
+export interface FixedCell {
+  fixed: string;
+}
+
 /** A cell: text is escaped and neutralised; a finite number is written as a number; null/undefined = empty. */
-export type CsvCell = string | number | null | undefined;
+export type CsvCell = string | number | FixedCell | null | undefined;
+
+/** Whole minor units as a decimal with `digits` decimals, exactly (no floating point): 2620, 2 -> "26.20". */
+export function fixedCell(minor: number, digits: number): FixedCell {
+  const whole = Math.round(minor);
+  const abs = String(Math.abs(whole)).padStart(digits + 1, '0');
+  const text = digits === 0 ? abs : `${abs.slice(0, -digits)}.${abs.slice(-digits)}`;
+  return { fixed: whole < 0 ? `-${text}` : text };
+}
 
 export interface CsvWriteOptions {
   /** Start with a UTF-8 byte order mark (U+FEFF) so spreadsheets read the file as UTF-8. Default false. */
@@ -43,9 +59,10 @@ export function unneutraliseText(text: string): string {
 
 function field(cell: CsvCell, delimiter: string, neutralise: boolean, decimalComma: boolean): string {
   if (cell === null || cell === undefined) return '';
-  if (typeof cell === 'number') {
-    if (!Number.isFinite(cell)) return '';
-    const n = decimalComma ? String(cell).replace('.', ',') : String(cell);
+  if (typeof cell === 'number' || typeof cell === 'object') {
+    if (typeof cell === 'number' && !Number.isFinite(cell)) return '';
+    const plain = typeof cell === 'number' ? String(cell) : cell.fixed;
+    const n = decimalComma ? plain.replace('.', ',') : plain;
     return n.includes(delimiter) ? `"${n}"` : n;
   }
   const text = neutralise ? neutraliseText(cell) : cell;

@@ -133,9 +133,10 @@ describe('three-decimal currencies (KWD, BHD, OMR)', () => {
     const r = costProject(p);
     expect(r.totals).toMatchObject({ partsCents: 5000, shippingCents: 750, buildCents: 5750 });
     const recs = parseCsv(costReportToCsv(r)).records;
-    expect(recs[1][recs[0].indexOf('Unit price')]).toBe('1.25'); // the number 1.250 as CSV writes it
-    expect(recs[1][recs[0].indexOf('Line cost KWD')]).toBe('5');
-    expect(recs.find((x) => x[0].startsWith('Total build'))![recs[0].indexOf('Line cost KWD')]).toBe('5.75');
+    // written with KWD's three decimals (ISO 4217), as the pages print them
+    expect(recs[1][recs[0].indexOf('Unit price')]).toBe('1.250');
+    expect(recs[1][recs[0].indexOf('Line cost KWD')]).toBe('5.000');
+    expect(recs.find((x) => x[0].startsWith('Total build'))![recs[0].indexOf('Line cost KWD')]).toBe('5.750');
     // CSV prices are read with three decimals: 0.125 KWD is 125 fils, no rounding
     expect(parsePrice('0.125', '.', () => minorDigits('KWD'))).toMatchObject({ ok: true, cents: 125, roundedFrom: null });
     const preview = previewImport('Description,Qty,Supplier,Price,Currency\nRelay,1,Lambda,1.250,KWD', { kind: 'parts-list', defaultCurrency: 'USD' });

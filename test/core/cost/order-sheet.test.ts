@@ -48,10 +48,11 @@ describe('order sheets', () => {
   it('as CSV: the lines, each supplier total and the build total (2800 + 320 = 3120)', () => {
     const recs = parseCsv(orderSheetsToCsv(r)).records;
     expect(recs[0]).toEqual(['Supplier', 'SKU', 'Description', 'Refs', 'Order qty', 'Needed qty', 'Break from', 'Currency', 'Unit price', 'Offer line cost', 'Line cost USD']);
-    expect(recs[1]).toEqual(['A', 'A-100N', 'Part p1', 'C1', '100', '92', '100', 'USD', '0.25', '25', '25']);
-    expect(recs.filter((x) => x[2] === 'Total order').map((x) => [x[0], x[10]])).toEqual([['A', '28'], ['B', '3.2']]);
+    // money with USD's two decimals (ISO 4217)
+    expect(recs[1]).toEqual(['A', 'A-100N', 'Part p1', 'C1', '100', '92', '100', 'USD', '0.25', '25.00', '25.00']);
+    expect(recs.filter((x) => x[2] === 'Total order').map((x) => [x[0], x[10]])).toEqual([['A', '28.00'], ['B', '3.20']]);
     expect(recs.at(-1)![2]).toBe('Total build (1 kits)');
-    expect(recs.at(-1)![10]).toBe('31.2');
+    expect(recs.at(-1)![10]).toBe('31.20');
   });
 });
 

@@ -4,7 +4,7 @@ import fc from 'fast-check';
 import { propertyOptions } from '../../helpers/property';
 import { describe, expect, it } from 'vitest';
 import { guessDelimiter, parseCsv } from '../../../src/core/csv/parse';
-import { neutraliseText, unneutraliseText, writeCsv } from '../../../src/core/csv/write';
+import { fixedCell, neutraliseText, unneutraliseText, writeCsv } from '../../../src/core/csv/write';
 
 describe('writeCsv (RFC 4180 §2)', () => {
   it('ends every record with CRLF (§2.1) and quotes commas, quotes and line breaks (§2.6, §2.7)', () => {
@@ -83,5 +83,17 @@ describe('round trip (fast-check, seeded)', () => {
       }),
       propertyOptions(4181, 400),
     );
+  });
+});
+
+// Money cells keep the currency's own decimals (ISO 4217 minor units: 2 for USD/EUR, 0 for JPY, 3 for KWD), built
+// from whole minor units without floating point; with ";" files the decimal comma is used.
+describe('fixed-decimal money cells', () => {
+  it('writes whole minor units with the given decimals, exactly', () => {
+    const cells = [fixedCell(2620, 2), fixedCell(8900, 2), fixedCell(5, 2), fixedCell(150, 0), fixedCell(1250, 3), fixedCell(-120, 2), fixedCell(0, 2)];
+    expect(writeCsv([cells])).toBe('26.20,89.00,0.05,150,1.250,-1.20,0.00\r\n');
+    expect(writeCsv([[fixedCell(2620, 2), 'x']], { delimiter: ';', decimalComma: true })).toBe('26,20;x\r\n');
+    // a comma-separated file with a decimal comma quotes the cell
+    expect(writeCsv([[fixedCell(2620, 2)]], { decimalComma: true })).toBe('"26,20"\r\n');
   });
 });
