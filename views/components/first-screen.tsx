@@ -9,7 +9,7 @@ import { formatMoney } from '../../src/core/cost/money';
 import { fixLink } from './fix-link';
 import { EmptyState } from './empty-state';
 import { powerFlowData, powerFlowSvg } from '../plots/power-flow';
-import { troughRows, troughChartSvg, harmonicBarsSvg } from '../plots/margin-charts';
+import { troughRows, troughChartSvg, harmonicBarsSvg, TOLERANCE_MARK } from '../plots/margin-charts';
 
 const VERDICT_TEXT = {
   ok: { sign: '✓', head: 'Will work as designed', tail: () => 'no check of this design fails or needs caution.' },
@@ -31,6 +31,8 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
   const cur = report.cost.currency;
   const harmonics = report.rf.harmonics;
   const base = `/projects/${project.id}`;
+  const troughs = troughRows(report.supply);
+  const tolerance = troughs.some((r) => r.points.some((p) => p.label.endsWith(TOLERANCE_MARK)));
   return (
     <section class="first-screen" id="first-screen" aria-label="At a glance">
       <div class="fs-left">
@@ -110,10 +112,11 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
         </div>
         <div class="card trough-card" id="troughs">
           <h2>Lowest rail voltage at key-down</h2>
-          {raw(troughChartSvg(troughRows(report.supply)))}
+          {raw(troughChartSvg(troughs))}
           <p class="hint">
-            Dots: the trough at {project.mains ? 'low (L), nominal (N) and high (H) mains' : 'battery at end voltage, nominal and full'}; red dashed line: the
-            least the rail may fall to.
+            Dots: the trough at {project.mains ? 'low (L), nominal (N) and high (H) mains' : 'battery at end voltage, nominal and full'}
+            {tolerance ? `; L${TOLERANCE_MARK}: low mains with the transformer's secondary at the low end of its tolerance` : ''}; red
+            dashed line: the least the rail may fall to.
           </p>
         </div>
       </div>

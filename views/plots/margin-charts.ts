@@ -1,7 +1,7 @@
 // Two small charts for the overview's first screen: per rail, its key-down trough at low, nominal and high mains
 // against the minimum it must stay above; and the margin of each harmonic below the spurious limit as bars.
 // Pure: data in, SVG text out; presentation attributes only (no style="").
-import type { SupplyReport } from '../../src/core/power/report-types';
+import type { CornerSpec, SupplyReport } from '../../src/core/power/report-types';
 import type { HarmonicsReport } from '../../src/core/rf/harmonics';
 import type { Severity } from '../../src/core/findings';
 import { formatValue } from '../../src/core/units';
@@ -15,18 +15,23 @@ export interface TroughRow {
   minimumV: number | null;
 }
 
+/** Appended to a corner's letter when the transformer's secondary is at the low end of its tolerance. */
+export const TOLERANCE_MARK = 't';
+
 /** Per rail: the key-down troughs across the mains corners and the minimum. */
 export function troughRows(supply: SupplyReport | null): TroughRow[] {
   // mains corners: low / nominal / high mains; from a battery: at end voltage / nominal / full (power/corners.ts)
   const letter = supply?.mains ? ({ low: 'L', nominal: 'N', high: 'H' } as const) : ({ low: 'end', nominal: 'nom', high: 'full' } as const);
+  // the corner with the secondary at the low end of its tolerance is told apart from plain low mains (Lt, not a 2nd L)
+  const cornerLabel = (c: CornerSpec) => `${letter[c.mains]}${c.secondaryTolerance ? TOLERANCE_MARK : ''}`;
   return (supply?.rails ?? []).map((r) => {
     if (r.kind === 'rectified') {
-      const pts = r.corners.filter((c) => c.load === 'keyDown').map((c) => ({ label: letter[c.mains], troughV: c.troughV }));
+      const pts = r.corners.filter((c) => c.load === 'keyDown').map((c) => ({ label: cornerLabel(c), troughV: c.troughV }));
       return { name: r.railName, points: pts, minimumV: r.requiredMinV > 0 ? r.requiredMinV : null };
     }
     if (r.kind === 'regulated') {
       // a regulator's input trough against its output plus its dropout (the datasheet's definition of dropout)
-      const pts = r.corners.filter((c) => c.load === 'keyDown').map((c) => ({ label: letter[c.mains], troughV: c.inputTroughV }));
+      const pts = r.corners.filter((c) => c.load === 'keyDown').map((c) => ({ label: cornerLabel(c), troughV: c.inputTroughV }));
       return { name: `${r.railName} (regulator input)`, points: pts, minimumV: r.outputV + r.dropoutV };
     }
     return { name: r.railName, points: [{ label: 'end', troughV: r.loadedEndV }], minimumV: r.requiredMinV > 0 ? r.requiredMinV : null };
@@ -37,10 +42,15 @@ const W = 600;
 const COLOUR = { ok: '#2e7d4f', caution: '#a86500', fail: '#b3261e' } as const;
 const f1 = (x: number) => (Math.round(x * 10) / 10).toString();
 
+/** A dot below the minimum in the fail colour, or the caution colour at the secondary-tolerance corner. */
+const dotColour = (p: TroughRow['points'][number], minimumV: number | null) =>
+  minimumV === null || !(p.troughV < minimumV) ? '#1f5fa8' : p.label.endsWith(TOLERANCE_MARK) ? COLOUR.caution : COLOUR.fail;
+
 export function troughChartSvg(rows: TroughRow[]): string {
   const rowH = 30;
-  const labelW = 210;
-  const trackW = 250;
+  // the note at the right ("✗ lowest 16.4 V / min 16.9 V", about 165 px at 10.5 px) must fit inside W
+  const labelW = 200;
+  const trackW = 220;
   // room for the one line said when there is no rail
   const h = Math.max(rows.length * rowH + 8, 24);
   const parts = [
@@ -56,11 +66,15 @@ export function troughChartSvg(rows: TroughRow[]): string {
     const pad = Math.max((hi - lo) * 0.15, 0.5);
     const [vLo, vHi] = [lo - pad, hi + pad];
     const x = (v: number) => labelW + ((v - vLo) / (vHi - vLo)) * trackW;
-    const name = r.name.length > 34 ? `${r.name.slice(0, 33)}…` : r.name;
+    const name = r.name.length > 31 ? `${r.name.slice(0, 30)}…` : r.name;
     parts.push(`<text x="0" y="${y + 15}">${esc(name)}<title>${esc(r.name)}</title></text>`);
     parts.push(`<line x1="${labelW}" y1="${y + 12}" x2="${labelW + trackW}" y2="${y + 12}" stroke="#d5dbe0" stroke-width="6"/>`);
     const worst = Math.min(...r.points.map((p) => p.troughV));
     const below = r.minimumV !== null && worst < r.minimumV;
+    // below only at the secondary-tolerance corner: a caution (rail.headroom-tolerance), not a failure
+    const plainWorst = Math.min(...r.points.filter((p) => !p.label.endsWith(TOLERANCE_MARK)).map((p) => p.troughV));
+    const fails = r.minimumV !== null && plainWorst < r.minimumV;
+    const noteColour = fails ? COLOUR.fail : below ? COLOUR.caution : '#1d2327';
     if (r.minimumV !== null && Number.isFinite(r.minimumV)) {
       const mx = f1(x(r.minimumV));
       parts.push(`<line x1="${mx}" y1="${y + 2}" x2="${mx}" y2="${y + 22}" stroke="#b3261e" stroke-width="2" stroke-dasharray="3 2"/>`);
@@ -68,14 +82,14 @@ export function troughChartSvg(rows: TroughRow[]): string {
     for (const p of r.points) {
       if (!Number.isFinite(p.troughV)) continue;
       const px = f1(x(p.troughV));
-      parts.push(`<circle cx="${px}" cy="${y + 12}" r="4" fill="${below && p.troughV < (r.minimumV ?? -Infinity) ? '#b3261e' : '#1f5fa8'}"/>`);
+      parts.push(`<circle cx="${px}" cy="${y + 12}" r="4" fill="${dotColour(p, r.minimumV)}"/>`);
       parts.push(`<text x="${px}" y="${y + 28}" text-anchor="middle" font-size="9">${esc(p.label)}</text>`);
     }
     const note =
       r.minimumV === null
         ? `lowest ${formatValue(worst, 'V')}, no minimum`
-        : `${below ? '✗ ' : ''}lowest ${formatValue(worst, 'V')} / min ${formatValue(r.minimumV, 'V')}`;
-    parts.push(`<text x="${labelW + trackW + 8}" y="${y + 15}" font-size="10.5" fill="${below ? COLOUR.fail : '#1d2327'}">${esc(note)}</text>`);
+        : `${fails ? '✗ ' : below ? '! ' : ''}lowest ${formatValue(worst, 'V')} / min ${formatValue(r.minimumV, 'V')}`;
+    parts.push(`<text x="${labelW + trackW + 8}" y="${y + 15}" font-size="10.5" fill="${noteColour}">${esc(note)}</text>`);
   });
   if (!rows.length) parts.push('<text x="0" y="16" fill="#5b6770">No rails designed yet.</text>');
   parts.push('</svg>');

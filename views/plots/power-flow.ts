@@ -11,7 +11,9 @@ import { formatValue } from '../../src/core/units';
 import { esc } from './svg-text';
 
 /** The rules that decide whether a rail keeps its regulators (or loads) in regulation. */
-const HEADROOM_RULES = new Set(['rail.headroom', 'regulator.headroom', 'battery.end-voltage', 'battery.window']);
+// the tolerance corner's own headroom check too, so a rail the trough chart shows dipping below its minimum there is
+// not drawn as 'headroom OK'
+const HEADROOM_RULES = new Set(['rail.headroom', 'rail.headroom-tolerance', 'regulator.headroom', 'battery.end-voltage', 'battery.window']);
 
 export interface FlowStage {
   name: string;
@@ -91,8 +93,9 @@ export function powerFlowData(project: Project, report: EvaluationReport): FlowD
 
 export const HEADROOM_WORDS: Record<Severity | 'none', string> = {
   ok: '✓ headroom OK',
-  caution: '! headroom: caution',
-  fail: '✗ headroom FAILS',
+  // short enough that "12.8 V · ! headroom low" fits the rail box (railW 158, text from x + 21)
+  caution: '! headroom low',
+  fail: '✗ headroom fails',
   none: '– no headroom check',
 };
 const COLOUR: Record<Severity | 'none', string> = { ok: '#2e7d4f', caution: '#a86500', fail: '#b3261e', none: '#5b6770' };
@@ -208,7 +211,7 @@ export function powerFlowSvg(d: FlowData): string {
     lines.forEach((line, i) => parts.push(`<text x="${x + 6}" y="${p.y + 14 + i * 13}" font-weight="bold">${esc(line)}</text>`));
     parts.push(marker(v, x + 11, p.y + RAIL_H - 10));
     const volts = Number.isFinite(r.nominalV) ? `${formatValue(r.nominalV, 'V')} · ` : '';
-    parts.push(`<text x="${x + 21}" y="${p.y + RAIL_H - 6}" font-size="11.5" fill="${COLOUR[v]}">${esc(volts + HEADROOM_WORDS[v])}</text>`);
+    parts.push(`<text x="${x + 21}" y="${p.y + RAIL_H - 6}" font-size="10.5" fill="${COLOUR[v]}">${esc(volts + HEADROOM_WORDS[v])}</text>`);
     parts.push(`<title>${esc(`${r.name}: ${HEADROOM_WORDS[v]}`)}</title></g>`);
     if (r.stages.length) {
       const bus = stageX - 10;
