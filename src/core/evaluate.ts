@@ -3,7 +3,7 @@
 import { MODES, type Project, type PerMode } from './model';
 import { computeBudget, type BudgetReport, type ComputedLoad } from './budget';
 import { sortFindings, type Finding } from './findings';
-import { evaluateSupply } from './power/evaluate-supply';
+import { designSupply, evaluateSupply, supplyInAir } from './power/evaluate-supply';
 import { withSimulationMemo } from './power/rectifier-sim';
 import type { SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
@@ -40,6 +40,9 @@ export interface EvaluationReport {
 
 export interface EvaluateOptions {
   onMonteCarloProgress?: (done: number, total: number) => void;
+  /** The plain path without this evaluation's shortcuts (the supply designed again in full for the inside air, no
+   *  memos of pure results): the same report, slower; for the equivalence tests. */
+  reference?: boolean;
 }
 
 /** Voltage a PA sees per rail: the supply's nominal-mains key-down trough when simulated, else the budget's nominal. */
@@ -162,7 +165,7 @@ function lowestInputV(project: Project, supply: SupplyReport | null): Record<str
 
 export function evaluate(project: Project, options: EvaluateOptions = {}): EvaluationReport {
   // a rail whose load is the same as in the pass before is not simulated again (exact-input memo, this call only)
-  return withSimulationMemo(() => evaluateOnce(project, options));
+  return withSimulationMemo(() => evaluateOnce(project, options), { caches: !options.reference });
 }
 
 function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationReport {
@@ -197,16 +200,22 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   }
   // the last pass again with the searches: its corners are the memo's (same inputs), so the report is the one a
   // loop with the searches in every pass would have ended with
-  if (last) supply = evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA });
+  const designed = last && designSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA });
+  if (designed) supply = supplyInAir(designed);
   budget = withSupplyVoltages(budget, supply);
   const rfCtx = { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery };
   // The air inside the enclosure is the ambient of every thermal check of a part in it (rectifiers, regulators, PA).
   // Its rise needs every heat source, none of which depends on the air, so it is found first (the PA's heat from the
-  // same PA model) and the supply designed again with it (its simulations are memoised: only the checks run again).
+  // same PA model) and the supply's checks in air finished again with it (the design does not depend on the air; the
+  // reference path designs it again in full, its simulations memoised, for the equivalence tests).
   const s = project.supply;
   const insideC = project.supply.rails.length && s.enclosureAreaM2 && s.enclosureUWPerM2K
     ? heatBudget(supply, paHeatAhead(project, rfCtx), s.enclosureAreaM2, s.enclosureUWPerM2K, project.ambientC).insideC : null;
-  if (last && insideC !== null) supply = evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA, insideC });
+  if (last && designed && insideC !== null) {
+    supply = options.reference
+      ? evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA, insideC })
+      : supplyInAir(designed, insideC);
+  }
   const rf = evaluateRf(project, { ...rfCtx, insideC: insideC ?? undefined, onMonteCarloProgress: options.onMonteCarloProgress });
   const cost = costProject(project);
   const roleList = designRoles(project, supply, rf);

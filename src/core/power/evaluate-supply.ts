@@ -66,11 +66,56 @@ function requirement(marginV: number, children: RegulatedRail[], stated: number 
 }
 
 export function evaluateSupply(projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): SupplyReport {
+  return supplyInAir(designSupply(projectIn, railOutputA, options), options.insideC);
+}
+
+/**
+ * The supply designed up to the checks that depend on the air around its parts (the rectifiers' and regulators'
+ * thermal checks, from the regulated rails on): supplyInAir finishes it for an ambient, as often as asked, without
+ * simulating again. evaluateSupply(p, a, o) is supplyInAir(designSupply(p, a, o), o.insideC).
+ */
+export interface DesignedSupply {
+  project: Project;
+  railOutputA: Record<string, PerMode>;
+  options: SupplyOptions;
+  choices: ReturnType<typeof supplyChoices>;
+  inputs: ReturnType<typeof checkSupplyInputs>;
+  duty: number;
+  txFraction: number;
+  mainsOk: boolean;
+  specs: CornerSpec[];
+  globalFindings: readonly Finding[];
+  noBudget: ReadonlySet<string>;
+  undesigned: ReadonlyMap<string, string>;
+  reports: ReadonlyMap<string, RailReport>;
+  voltageAt: ReadonlyMap<string, Record<string, RailVoltage>>;
+  maxV: ReadonlyMap<string, number>;
+  rootBattery: ReadonlyMap<string, boolean>;
+  falls: ReadonlyMap<string, FallTime | null>;
+  windingRecs: ReadonlyMap<string, WindingRecommendation[]>;
+  usedWindings: ReadonlyMap<string, string[]>;
+  joints: ReadonlyMap<string, TransformerJoint>;
+  simulations: number;
+  allConverged: boolean;
+}
+
+/** A rail's output budget, cleaned; a rail with none is unloaded, said once per rail in `findings`. */
+function budgetLookup(railOutputA: Record<string, PerMode>, noBudget: Set<string>, findings: Finding[]) {
+  return (id: string): PerMode => {
+    const b = railOutputA[id];
+    if (!b) {
+      // said once per rail however often its budget is asked for
+      if (!noBudget.has(id) && noBudget.add(id)) findings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `No current budget for rail "${id}": it is treated as unloaded.` });
+      return ZERO;
+    }
+    const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
+    return { receive: clean(b.receive), keyUp: clean(b.keyUp), keyDown: clean(b.keyDown) };
+  };
+}
+
+export function designSupply(projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): DesignedSupply {
   const project = projectIn;
   const choices = supplyChoices(project.supply);
-  // the thermal checks of parts in the box use the air inside it when the enclosure's rise is known
-  const inside = options.insideC !== undefined && Number.isFinite(options.insideC);
-  const airC = inside ? options.insideC! : project.ambientC;
   // how each rail falls after switch-off (null: a battery holds it up), for the bleeders of the rails it feeds
   const falls = new Map<string, FallTime | null>();
   // inputs outside their field definitions: a fail finding each, and the item (with its dependants) is left out
@@ -103,16 +148,7 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
     globalFindings.push({ severity: 'fail', rule: 'supply.refused-input', subject: name, value: null, limit: null, unit: '', source: 'design.input', message: `${name} is not designed: ${why}` });
   }
   const noBudget = new Set<string>();
-  const budget = (id: string): PerMode => {
-    const b = railOutputA[id];
-    if (!b) {
-      // said once per rail however often its budget is asked for
-      if (!noBudget.has(id) && noBudget.add(id)) globalFindings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `No current budget for rail "${id}": it is treated as unloaded.` });
-      return ZERO;
-    }
-    const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
-    return { receive: clean(b.receive), keyUp: clean(b.keyUp), keyDown: clean(b.keyDown) };
-  };
+  const budget = budgetLookup(railOutputA, noBudget, globalFindings);
 
   const highBudget = (id: string): PerMode | undefined => {
     const b = options.highMainsOutputA?.[id];
@@ -156,9 +192,6 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
       joint: wt ? joints.get(wt.t.id)?.voltages.get(rail.id) : undefined,
     });
     if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
-    const loss = ev.report.rectifierLoss;
-    const bt = bridgeThermal({ railName: rail.name, thermalW: loss.thermalW, tuneUpW: loss.tuneUpW, basis: choices.transformerSizing, mount: rail.bridgeMount, freeAirKPerW: rail.bridgeFreeAirKPerW, ambientC: airC, inside });
-    ev.report = { ...ev.report, bridgeThermal: bt, findings: sortFindings([...ev.report.findings, ...bridgeThermalFindings(rail.name, bt)]) };
     simulations += ev.simulations;
     allConverged = allConverged && ev.allConverged;
     reports.set(rail.id, ev.report);
@@ -199,6 +232,37 @@ export function evaluateSupply(projectIn: Project, railOutputA: Record<string, P
       ],
     };
     reports.set(b.id, report);
+  }
+  return {
+    project, railOutputA, options, choices, inputs, duty, txFraction, mainsOk, specs, globalFindings, noBudget, undesigned,
+    reports, voltageAt, maxV, rootBattery, falls, windingRecs, usedWindings, joints, simulations, allConverged,
+  };
+}
+
+/** The designed supply finished with its parts in air at insideC (°C) when the enclosure's rise is known, else the
+ *  room: the rectifiers' thermal checks, the regulated rails, transformers and primary. The design is left as it was. */
+export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
+  const { project, options, choices, inputs, duty, txFraction, mainsOk, specs, undesigned, windingRecs, usedWindings, joints, simulations, allConverged } = d;
+  const rails = project.supply.rails;
+  // the thermal checks of parts in the box use the air inside it when the enclosure's rise is known
+  const inside = insideC !== undefined && Number.isFinite(insideC);
+  const airC = inside ? insideC! : project.ambientC;
+  // copies: each ambient's finish starts from the same design
+  const globalFindings = [...d.globalFindings];
+  const budget = budgetLookup(d.railOutputA, new Set(d.noBudget), globalFindings);
+  const reports = new Map(d.reports);
+  const voltageAt = new Map(d.voltageAt);
+  const maxV = new Map(d.maxV);
+  const rootBattery = new Map(d.rootBattery);
+  const falls = new Map(d.falls);
+  const designable = (r: { id: string }) => !undesigned.has(r.id);
+  const childrenOf = (id: string) => rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
+  for (const rail of rails.filter((r): r is RectifiedRail => r.kind === 'rectified' && designable(r))) {
+    const report = reports.get(rail.id);
+    if (report?.kind !== 'rectified') continue;
+    const loss = report.rectifierLoss;
+    const bt = bridgeThermal({ railName: rail.name, thermalW: loss.thermalW, tuneUpW: loss.tuneUpW, basis: choices.transformerSizing, mount: rail.bridgeMount, freeAirKPerW: rail.bridgeFreeAirKPerW, ambientC: airC, inside });
+    reports.set(rail.id, { ...report, bridgeThermal: bt, findings: sortFindings([...report.findings, ...bridgeThermalFindings(rail.name, bt)]) });
   }
 
   // Regulated rails in dependency order (a rail whose parent is missing or in a loop gets 0 V input).

@@ -268,21 +268,35 @@ export function simulationScope<T>(name: string): Map<string, T> | null {
   return m as Map<string, T>;
 }
 
+/** False inside withSimulationMemo(fn, { caches: false }): resultScope gives no memo (the plain path). */
+let CACHES = true;
+
+/**
+ * A memo of a pure computation's results by exact input (no warm start, so a hit is what the computation gives),
+ * live with the simulation memo; null outside one and in a run without caches (the equivalence tests' plain path).
+ */
+export function resultScope<T>(name: string): Map<string, T> | null {
+  return CACHES ? simulationScope<T>(`result:${name}`) : null;
+}
+
 /**
  * Run `fn` with simulations memoised on their exact inputs; the memo is dropped when `fn` returns, so results never
  * depend on what was evaluated before and no memory outlives the call. Nested calls share the outer memo.
+ * `caches: false` leaves out the memos of pure results (resultScope) only; the simulations' memo and warm starts stay.
  */
-export function withSimulationMemo<T>(fn: () => T): T {
+export function withSimulationMemo<T>(fn: () => T, options: { caches?: boolean } = {}): T {
   if (MEMO) return fn();
   MEMO = new Map();
   WARM = new Map();
   SCOPES = new Map();
+  CACHES = options.caches !== false;
   try {
     return fn();
   } finally {
     MEMO = null;
     WARM = null;
     SCOPES = null;
+    CACHES = true;
   }
 }
 
