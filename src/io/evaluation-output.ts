@@ -8,6 +8,7 @@ import { actionable, standingCautions } from '../core/findings';
 import { isSourceKey, sourceText } from '../core/sources/registry';
 import { GOVERNS, RULE_SETS } from '../core/rules/rule-set';
 import { roleLines } from './roles-text';
+import { inrushSummary } from '../core/power/inrush';
 
 export const EVALUATION_FORMAT = 'rigwright-evaluation';
 export const EVALUATION_FORMAT_VERSION = 1;
@@ -126,7 +127,7 @@ function supplyLines(report: EvaluationReport): string[] {
     out.push(`    ${f.windingName} fault reflected to the primary: ${formatValue(f.reflectedA, 'A')}, ${f.check.multiple.toFixed(1)} x In: ${f.check.clears ? 'cleared' : 'not cleared'} within ${f.check.allowedS} s`);
   }
   const ir = s.primary?.inrush;
-  if (ir) out.push(`    switch-on inrush: peak ${formatValue(ir.peakA, 'A')}, ${ir.i2t.toFixed(3)} A²s against ${ir.fuseMeltI2t.toFixed(3)} A²s to melt the fuse (NTC soft-start about ${ir.ntcOhm.toFixed(0)} Ω if needed)`);
+  if (ir) out.push(`    switch-on inrush: ${inrushSummary(ir)}`);
   return out;
 }
 

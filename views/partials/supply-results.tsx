@@ -13,6 +13,7 @@ import { formatValue as fv } from '../../src/core/units';
 import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
 import { KeyingTransientBlock, LoadModelDetails } from '../components/supply-keying';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
+import { inrushSummary } from '../../src/core/power/inrush';
 import { BleederLine } from '../components/supply-bleeder';
 import { BridgeLine, RegulatedBleederLine, primaryTypeWords, sizedForTuneUp } from '../components/supply-thermal';
 import { HeatCard } from '../components/supply-heat';
@@ -346,10 +347,7 @@ export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null 
           {report.primary ? <PrimaryFaultTable checks={report.primary.faultChecks} /> : null}
           {report.primary?.inrush ? (
             <p>
-              <strong>Switch-on inrush:</strong> peak {fv(report.primary.inrush.peakA, 'A')}, {report.primary.inrush.i2t.toFixed(3)} A²s
-              against about {report.primary.inrush.fuseMeltI2t.toFixed(3)} A²s to melt the fuse
-              ({report.primary.inrush.transformers.map((t) => `${t.name}: magnetising ${fv(t.magnetisingPeakA, 'A')} (${t.construction}), reservoirs ${fv(t.chargingPeakA, 'A')}`).join('; ')}).
-              An NTC of about {report.primary.inrush.ntcOhm.toFixed(0)} Ω cold limits it if needed.
+              <strong>Switch-on inrush:</strong> {inrushSummary(report.primary.inrush)}
             </p>
           ) : null}
           <FindingList findings={general} />

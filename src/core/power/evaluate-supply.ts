@@ -331,7 +331,10 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
     const inUseA = fittedA ?? fuse.ratedA;
     const faultChecks = inUseA !== null ? primaryFaultChecks(railsReported(reports), inUseA, choices.primaryFuseSheet) : [];
     const used = project.supply.transformers.filter((t) => transformers.some((r) => r.transformerId === t.id && r.primaryA > 0));
-    const inrush = inUseA !== null ? inrushReport(used, rails.filter((r): r is RectifiedRail => r.kind === 'rectified'), project.mains!, inUseA, choices.primaryFuseSheet) : null;
+    const rectified = rails.filter((r): r is RectifiedRail => r.kind === 'rectified');
+    const duty = { loadA, reflectedFaultA: faultChecks.map((f) => f.reflectedA) };
+    const inrush = inUseA !== null
+      ? inrushReport(used, rectified, project.mains!, inUseA, choices.primaryFuseSheet, duty) : null;
     const findings = sortFindings([...fittedFuseFindings('Primary fuse', fittedA, fuse), ...primaryFaultFindings(faultChecks, reports), ...(inrush ? inrushFindings(inrush) : [])]);
     primary = { loadA, fuse, fittedA, faultChecks, inrush, findings };
   }

@@ -3,7 +3,9 @@
 import type { Finding } from '../findings';
 import type { Mains, RectifiedRail, Transformer } from '../model';
 import type { FuseSheet } from './report-types';
-import { IEC_60127_2_PRE_ARC } from './fault';
+import { IEC_60127_2_PRE_ARC, faultCheck } from './fault';
+import { fuseMarking } from './fuses';
+import { IEC_60127_FUSES_A } from './standard-values';
 import { noLoadVrms, windingResistanceOhm } from './winding';
 
 /**
@@ -33,6 +35,9 @@ export interface InrushTransformer {
   ratedPrimaryA: number;
   /** Primary resistance from the regulation figures and the copper split (Ω). */
   primaryOhm: number;
+  /** The common-practice multiple of the rated primary current used (INRUSH_MULTIPLE), and whether √2 V / R_p capped it. */
+  magnetisingMultiple: number;
+  magnetisingCapped: boolean;
   /** Magnetising inrush peak (A) and its I²t (A² s). */
   magnetisingPeakA: number;
   magnetisingI2t: number;
@@ -54,6 +59,21 @@ export interface InrushReport {
   quickMeltI2t: number;
   /** Cold resistance of an NTC soft-start keeping the resistance-limited peak to NTC_TARGET_MULTIPLE x rated (Ω). */
   ntcOhm: number;
+  /** Continuous primary current the NTC (or soft-start resistor's relay) carries once warm (A); null when not given. */
+  ntcCarriesA: number | null;
+  /** The smallest time-lag rating that takes the inrush within PULSE_SHARE of its melting I²t. */
+  timeLag: TimeLagSuggestion;
+}
+
+export interface TimeLagSuggestion {
+  /** IEC 60127 rating (A), at least the fuse in use; null when none in the series is large enough. */
+  ratedA: number | null;
+  /** The time-lag sheet judged: the chosen one when time-lag, else sheet 3. */
+  sheet: FuseSheet;
+  /** Its melting I²t floor (A² s); null without a rating. */
+  meltI2t: number | null;
+  /** Whether it still clears every reflected winding fault given within FAULT_CLEAR_S; null when none given. */
+  clearsFaults: boolean | null;
 }
 
 /**
@@ -92,7 +112,8 @@ export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains:
   const ratedPrimaryA = ratedVA / mains.nominalV;
   const primaryOhm = primaryOhmFromRegulation(t, mains.nominalV);
   const boundA = primaryOhm > 0 ? (Math.SQRT2 * highV) / primaryOhm : Infinity;
-  const magnetisingPeakA = Math.min(INRUSH_MULTIPLE[t.construction] * ratedPrimaryA, boundA);
+  const magnetisingMultiple = INRUSH_MULTIPLE[t.construction];
+  const magnetisingPeakA = Math.min(magnetisingMultiple * ratedPrimaryA, boundA);
   // Half-sine pulse over a half-cycle, ∫ = I² T/4, each cycle's peak r times the last: sum 1 / (1 - r²).
   // An upper bound: the saturation pulse is narrower than a half-cycle.
   const magnetisingI2t = (magnetisingPeakA ** 2 * periodS) / 4 / (1 - INRUSH_DECAY_PER_CYCLE ** 2);
@@ -115,13 +136,31 @@ export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains:
   }
   return {
     transformerId: t.id, name: t.name, construction: t.construction, ratedVA, ratedPrimaryA, primaryOhm,
-    magnetisingPeakA, magnetisingI2t, chargingPeakA, chargingI2t: chargingRootI2t ** 2,
+    magnetisingMultiple, magnetisingCapped: magnetisingMultiple * ratedPrimaryA > boundA, magnetisingPeakA, magnetisingI2t, chargingPeakA, chargingI2t: chargingRootI2t ** 2,
   };
+}
+
+/** What the primary carries besides the inrush: its worst continuous current and each winding fault reflected to it (A). */
+export interface PrimaryDuty {
+  loadA?: number;
+  reflectedFaultA?: readonly number[];
+}
+
+/**
+ * The smallest time-lag rating in the IEC 60127 series, at least fuseA, whose melting I²t floor takes the inrush
+ * within PULSE_SHARE, and whether it still clears the reflected faults (IEC 60127-2 maximum pre-arcing times).
+ */
+export function timeLagFor(i2t: number, fuseA: number, sheet: FuseSheet, faultsA?: readonly number[]): TimeLagSuggestion {
+  const tSheet: FuseSheet = sheet.startsWith('F') ? 'T3' : sheet;
+  const ratedA = IEC_60127_FUSES_A.find((a) => a >= fuseA - 1e-9 && PULSE_SHARE * meltI2tFloor(tSheet, a) >= i2t) ?? null;
+  const clearsFaults = ratedA === null || !faultsA?.length ? null : faultsA.every((f) => faultCheck(f, ratedA, tSheet).clears);
+  return { ratedA, sheet: tSheet, meltI2t: ratedA === null ? null : meltI2tFloor(tSheet, ratedA), clearsFaults };
 }
 
 /** All transformers switched on together behind the primary fuse (fuseA, of the IEC 60127-2 sheet chosen; T3 when not). */
 export function inrushReport(
   transformers: Transformer[], rails: RectifiedRail[], mains: Mains, fuseA: number, sheet: FuseSheet = 'T3',
+  duty: PrimaryDuty = {},
 ): InrushReport {
   const parts = transformers.map((t) => transformerInrush(t, rails, mains));
   // Switched at a voltage zero the magnetising inrush is worst (full flux offset) and the reservoirs charge gently
@@ -140,10 +179,58 @@ export function inrushReport(
   // resistance-limited peak sqrt(2) V / (R_NTC + R_p) = target  =>  R_NTC = sqrt(2) V / target - R_p
   const rpOhm = Number.isFinite(primaryOhm) ? primaryOhm : 0;
   const ntcOhm = ratedA > 0 ? Math.max(0, (Math.SQRT2 * highV) / (NTC_TARGET_MULTIPLE * ratedA) - rpOhm) : 0;
+  const loadA = duty.loadA;
   return {
     transformers: parts, peakA, i2t, fuseA, sheet,
     fuseMeltI2t: meltI2tFloor(sheet, fuseA), quickMeltI2t: meltI2tFloor('F2', fuseA), ntcOhm,
+    ntcCarriesA: loadA !== undefined && Number.isFinite(loadA) && loadA > 0 ? loadA : null,
+    timeLag: timeLagFor(i2t, fuseA, sheet, duty.reflectedFaultA),
   };
+}
+
+/** Each transformer's magnetising peak with the common-practice multiple it rests on, in words. */
+export function magnetisingWords(r: InrushReport): string {
+  const each = r.transformers.map((t) => {
+    const base = `${t.name}: ${t.magnetisingMultiple} x its ${fmtA(t.ratedPrimaryA)} rated primary current (${t.construction})`;
+    return t.magnetisingCapped ? `${base}, capped by the primary resistance at ${fmtA(t.magnetisingPeakA)}`
+      : `${base} = ${fmtA(t.magnetisingPeakA)}`;
+  });
+  return `${each.join('; ')}. The multiples (${INRUSH_MULTIPLE.laminated} x laminated, ${INRUSH_MULTIPLE.toroidal} x ` +
+    'toroidal) are common practice, no published source';
+}
+
+/** What to do when the inrush is too much for the fuse: a time-lag rating that takes it, an NTC, a soft-start. */
+function remedies(r: InrushReport): string {
+  const out: string[] = [];
+  const tl = r.timeLag;
+  if (tl.ratedA !== null && tl.meltI2t !== null) {
+    const t = `${fuseMarking(tl.ratedA, 'T')} (IEC 60127-2 ${tl.sheet})`;
+    if (tl.clearsFaults === false) {
+      out.push(`A time-lag fuse that takes it, ${t}, would no longer clear every winding fault on the primary: ` +
+        'keep the fuse and limit the inrush instead.');
+    } else {
+      const faults = tl.clearsFaults ? ' and still clears the winding faults reflected to the primary' : '';
+      out.push(`A ${t} fuse melts from about ${tl.meltI2t.toFixed(2)} A²s, so it takes the inrush within ` +
+        `${Math.round(PULSE_SHARE * 100)} %${faults}.`);
+    }
+  } else {
+    out.push('No time-lag fuse in the series takes it: limit the inrush.');
+  }
+  const carries = r.ntcCarriesA !== null ? `, rated for the ${fmtA(r.ntcCarriesA)} the primary draws continuously` : '';
+  if (r.ntcOhm >= 1) {
+    out.push(`Or fit an NTC thermistor of about ${r.ntcOhm.toFixed(0)} Ω cold in the primary${carries} (it limits ` +
+      'only while cool: switched off and on again at once it is still hot), or a soft-start relay that shorts a series ' +
+      'resistor of that size once the reservoirs have charged (common practice, no published source).');
+  } else {
+    out.push('The primary resistance already limits the magnetising peak, so an NTC adds little; a soft-start relay ' +
+      'that shorts a series resistor once the reservoirs have charged limits their charging pulse (common practice, ' +
+      'no published source).');
+  }
+  return out.join(' ');
+}
+
+function fmtA(a: number): string {
+  return a < 1 ? `${Math.round(a * 1000)} mA` : `${Number(a.toPrecision(3))} A`;
 }
 
 export function inrushFindings(r: InrushReport): Finding[] {
@@ -152,30 +239,41 @@ export function inrushFindings(r: InrushReport): Finding[] {
     source: 'supply.inrush-fuse' as const,
   };
   const letter = r.sheet.startsWith('F') ? 'F' : 'T';
-  const fuse = `${letter}${r.fuseA < 1 ? `${Math.round(r.fuseA * 1000)}mA` : `${Number(r.fuseA.toPrecision(3))}A`}`;
+  const fuse = fuseMarking(r.fuseA, letter);
   const what = 'Switch-on inrush (the worse of magnetising inrush and reservoir charging) peaks near ' +
     `${r.peakA.toFixed(1)} A with about ${r.i2t.toFixed(2)} A²s; the ${fuse} primary fuse melts from about ` +
     `${r.fuseMeltI2t.toFixed(2)} A²s`;
+  const mag = ` Magnetising inrush: ${magnetisingWords(r)}.`;
   const quick = letter === 'T' && r.i2t > PULSE_SHARE * r.quickMeltI2t
     ? ' Keep it time-lag (T): a quick-acting (F) fuse of that rating would not survive it.'
     : '';
-  // a quick-acting fuse chosen where the inrush would wear it: suggest the time-lag type of the same rating
-  const toT = letter === 'F' && r.i2t > PULSE_SHARE * r.fuseMeltI2t ? ' A time-lag (T) fuse of the same rating takes far more.' : '';
-  const ntc = `an NTC thermistor of about ${r.ntcOhm.toFixed(0)} Ω cold in the primary, or a soft-start relay`;
   const share = `${Math.round(PULSE_SHARE * 100)} %`;
   if (r.i2t > r.fuseMeltI2t) {
     return [{
       ...base, severity: 'caution',
-      message: `${what}: it may blow at switch-on. Fit ${ntc}, or a larger time-lag fuse only if it still clears the ` +
-        `primary faults.${quick}${toT} Mains wiring must follow your local electrical code.`,
+      message: `${what}: it may blow at switch-on. ${remedies(r)}${quick} Mains wiring must follow your local ` +
+        `electrical code.${mag}`,
     }];
   }
   if (r.i2t > PULSE_SHARE * r.fuseMeltI2t) {
     return [{
       ...base, severity: 'caution',
       message: `${what}: more than ${share} of it, so repeated switching ages the fuse until it blows one day. ` +
-        `Fit ${ntc}.${quick}${toT}`,
+        `${remedies(r)}${quick}${mag}`,
     }];
   }
-  return [{ ...base, severity: 'ok', message: `${what}: the inrush stays within ${share} of it.${quick}` }];
+  return [{ ...base, severity: 'ok', message: `${what}: the inrush stays within ${share} of it.${quick}${mag}` }];
+}
+
+/** The inrush against the primary fuse in a few sentences (supply page, pack, CLI): the peaks, the multiples and
+ * their basis, and what to do when the fuse would not take it. */
+export function inrushSummary(r: InrushReport): string {
+  const fuse = fuseMarking(r.fuseA, r.sheet.startsWith('F') ? 'F' : 'T');
+  const reservoirs = r.transformers.map((t) => `${t.name} reservoirs ${fmtA(t.chargingPeakA)}`).join('; ');
+  const head = `peak ${fmtA(r.peakA)}, ${r.i2t.toFixed(3)} A²s against about ${r.fuseMeltI2t.toFixed(3)} A²s to melt ` +
+    `the ${fuse} fuse. Magnetising: ${magnetisingWords(r)}. Charging from empty: ${reservoirs}.`;
+  if (r.i2t <= PULSE_SHARE * r.fuseMeltI2t) {
+    return `${head} Within ${Math.round(PULSE_SHARE * 100)} % of the fuse's melting I²t: no NTC or soft-start needed.`;
+  }
+  return `${head} ${remedies(r)}`;
 }

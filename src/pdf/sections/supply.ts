@@ -1,7 +1,7 @@
 // Supply design summary: transformer, reservoirs, fuses, bleeders, regulators, heatsinks, battery runtime,
 // the rectifier waveform plot, and the supply's findings. Reads the supply report only.
 import type { SupplyReport, RectifiedRailReport, RegulatedRailReport, BatteryRailReport, FaultCheck } from '../../core/power/report-types';
-import type { InrushReport } from '../../core/power/inrush';
+import { inrushSummary, type InrushReport } from '../../core/power/inrush';
 import type { HeatBudget } from '../../core/power/heat-budget';
 import { GREY, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
@@ -137,8 +137,5 @@ function battery(l: Layout, r: BatteryRailReport): void {
   void GREY;
 }
 
-/** The inrush against the primary fuse in one line. */
-function inrushWords(r: InrushReport): string {
-  const parts = r.transformers.map((t) => `${t.name}: magnetising ${fv(t.magnetisingPeakA, 'A')} (${t.construction}), reservoirs ${fv(t.chargingPeakA, 'A')}`).join('; ');
-  return `peak ${fv(r.peakA, 'A')}, ${r.i2t.toFixed(3)} A²s against about ${r.fuseMeltI2t.toFixed(3)} A²s to melt the fuse (${parts}); an NTC of about ${r.ntcOhm.toFixed(0)} Ω cold limits it if needed`;
-}
+/** The inrush against the primary fuse (the same words as the supply page). */
+const inrushWords = (r: InrushReport): string => inrushSummary(r);
