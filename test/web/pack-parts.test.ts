@@ -2,6 +2,7 @@
 // and refuses an unknown one by name.
 import { describe, expect, it } from 'vitest';
 import { demoApp } from '../helpers/app';
+import { SAFETY_PREAMBLE } from '../../src/core/checklists';
 
 const P = '/projects/demo-club-30m';
 
@@ -12,6 +13,13 @@ describe('pack parts on the web', () => {
     for (const part of ['builder', 'organiser', 'both'])
       for (const paper of ['a4', 'letter']) expect(html).toContain(`href="${P}/pack.pdf?part=${part}&amp;paper=${paper}"`);
     expect(html).toContain('8 packing sheets (one per kit)');
+  });
+
+  it('says the safety preamble once on the page (in its box, not again as the first checklist item)', async () => {
+    const { get } = await demoApp();
+    const html = await (await get(`${P}/pack`)).text();
+    const preamble = SAFETY_PREAMBLE.slice(0, 60);
+    expect(html.split(preamble).length - 1).toBe(1);
   });
 
   it('downloads each part as its own PDF, named for it', async () => {

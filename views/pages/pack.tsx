@@ -73,8 +73,9 @@ export const PackBody: FC<{ project: Project; build: ChecklistSection[]; safety:
       <section class="card">
         <h2>Safety checklist</h2>
         <p class="caution-box">{safetyPreamble}</p>
+        {/* the preamble is said once, in the box above (the PDF drops the checklist's copy the same way) */}
         {safety.map((s) => (
-          <Section section={s} />
+          <Section section={{ ...s, items: s.items.filter((i) => i.text !== safetyPreamble) }} />
         ))}
       </section>
     </div>
