@@ -63,6 +63,7 @@ const stages: Stage[] = [
       deviceCossF: null,
       transitionTimeS: null,
       outputLeakageH: null,
+      drainClampV: null,
       outputCoreId: CATALOG_BINOCULAR.id,
       outputPrimaryTurns: 2,
       outputWireDiameterM: 0.8e-3,

@@ -81,6 +81,7 @@ export const portable20m: Project = {
         deviceCossF: null,
         transitionTimeS: null,
         outputLeakageH: null,
+        drainClampV: null,
       },
     },
     { id: 'p-lpf', kind: 'lpf', name: '20 m low-pass filter', notes: '', loads: [], dissipationW: null, lpf: { ...defaultLpf(), order: 7, seed: 7, coreName: SAMPLE_CORES.iron12.name, coreAlHPerTurn2: SAMPLE_CORES.iron12.alHPerTurn2,

@@ -170,6 +170,7 @@ export interface PaParams {
   imbalanceTypical?: number | null; // push-pull halves' mismatch (fraction), typical; null/absent = 0.05 assumed
   imbalanceWorst?: number | null; // same, worst; null/absent = 0.2 assumed
   deviceCossF?: number | null; // device output capacitance (class E: part of the shunt C), F; null/absent = not given
+  drainClampV?: number | null; // a drain clamp fitted (TVS or zener, drain to ground), its clamping voltage, V; null/absent = none
   outputLeakageH?: number | null; // push-pull output transformer: leakage between the primary halves, H; null/absent = not given
   transitionTimeS?: number | null; // class D drain-voltage rise/fall time, s; null/absent = 10 ns assumed
   outputCoreId?: string | null; // the output transformer's core (a catalog core id); null/absent = not given

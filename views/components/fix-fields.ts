@@ -60,6 +60,7 @@ export const RAIL_FIELDS: Record<RailKind, Record<string, string>> = {
 /** PA rules → field of the PA spec on the stage page. */
 export const PA_FIELDS: Record<string, string> = {
   'pa.vds': 'deviceVdsMaxV',
+  'pa.drain-clamp': 'drainClampV',
   'pa.id': 'deviceIdMaxA',
   'pa.tj-carrier': 'mount.thetaSaKPerW',
   'pa.tj-keying': 'mount.thetaSaKPerW',

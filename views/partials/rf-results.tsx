@@ -19,6 +19,7 @@ import type { KeyingResult } from '../../src/core/rf/keying-eval';
 import type { CoreRealisation } from '../../src/core/rf/cores-check';
 import type { LNetwork, RfChoke } from '../../src/core/rf/output-network';
 import { PaSwrTable } from './pa-swr-table';
+import { clampText } from '../../src/core/rf/pa-clamp';
 import { PaMagnetics } from './pa-magnetics';
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
@@ -76,6 +77,7 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused
         ...(pa.swrKeyDownCurrentA !== null && pa.swrKeyDownCurrentA > pa.keyDownCurrentA
           ? [['Key-down current at the worst SWR', `${fv(pa.swrKeyDownCurrentA, 'A')} (above the budgeted ${fv(pa.keyDownCurrentA, 'A')})`] as [string, string]] : []),
         ['Peak drain voltage / device current (design load)', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
+        ...(pa.clamp ? [['Drain clamp', clampText(pa.clamp)] as [string, string]] : []),
         ['Dissipation', `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`],
         [(pa.thermal.sharedBy > 1 ? `Heatsink needed, one per ${pa.thermal.sharedBy} devices` : 'Heatsink needed per device') + ' (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
         ['Junction with fitted heatsink', pa.thermal.tjAverageC === null ? 'no heatsink chosen' : `${fv(pa.thermal.tjAverageC, '°C')} keying, ${fv(pa.thermal.tjContinuousC, '°C')} continuous`],

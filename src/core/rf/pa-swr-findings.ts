@@ -43,6 +43,8 @@ export interface SwrFindingContext {
   /** Devices sharing one heatsink. */
   sharedBy: number;
   tjTargetC: number;
+  /** A drain clamp fitted (V), which holds the drain peak to itself; null/absent = none. */
+  clampV?: number | null;
 }
 
 // Common practice, no published source: device voltage rating at least 1.25 x the peak drain voltage
@@ -56,11 +58,13 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   const isE = s.model === 'class-e-simulated';
   const swrSource = isE ? 'pa.class-e-sim' : 'pa.swr-load-line';
   const where = (w: PaSwrStress['worstDrainPeak']) => (s.swr <= 1 ? 'into the design load' : `at SWR ${s.swr} into ${describeLoad(w)}`);
-  const vPk = s.worstDrainPeak.value;
-  const vWhere = where(s.worstDrainPeak);
+  const clamped = c.clampV != null && c.clampV > 0 && c.clampV < s.worstDrainPeak.value;
+  // a fitted clamp holds the drain to its own voltage (pa-clamp.ts): the device sees the lower of the two
+  const vPk = clamped ? c.clampV! : s.worstDrainPeak.value;
+  const vWhere = `${where(s.worstDrainPeak)}${clamped ? ` (held there by the ${c.clampV} V drain clamp; ${s.worstDrainPeak.value.toFixed(1)} V without it)` : ''}`;
   f.push({
     severity: pa.deviceVdsMaxV < vPk ? 'fail' : pa.deviceVdsMaxV < V_MARGIN * vPk ? 'caution' : 'ok',
-    rule: 'pa.vds', subject, value: vPk, limit: pa.deviceVdsMaxV, unit: 'V', source: s.swr > 1 || isE ? swrSource : 'pa.vds',
+    rule: 'pa.vds', subject, value: vPk, limit: pa.deviceVdsMaxV, unit: 'V', source: clamped ? 'pa.drain-clamp' : s.swr > 1 || isE ? swrSource : 'pa.vds',
     message: pa.deviceVdsMaxV < vPk
       ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, above the ${pa.deviceVdsMaxV} V device rating: ` +
         `fit a drain clamp (TVS or zener below the rating), fold the drive back on high SWR, or use a device rated ` +
@@ -79,7 +83,10 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
     message: iPk > pa.deviceIdMaxA
       ? `Peak device current ${iPk.toFixed(2)} A ${iWhere} exceeds the ${pa.deviceIdMaxA} A rating: add current ` +
         `foldback (a sense resistor that cuts the drive) or use a device rated ${Math.ceil(iPk / I_MARGIN)} A or more.`
-      : `Peak device current ${iPk.toFixed(2)} A ${iWhere} against a ${pa.deviceIdMaxA} A rating.`,
+      : iPk > I_MARGIN * pa.deviceIdMaxA
+        ? `Peak device current ${iPk.toFixed(2)} A ${iWhere}, above 80 % of the ${pa.deviceIdMaxA} A rating: current ` +
+          'foldback or a device rated higher adds margin.'
+        : `Peak device current ${iPk.toFixed(2)} A ${iWhere} against a ${pa.deviceIdMaxA} A rating.`,
   });
   if (isE && s.swr > 1 && s.classETurnOnRatio !== null && s.classETurnOnRatio > 0.1) {
     // Source: energy ½ C1 V² lost at each hard turn-on (capacitor switching loss, textbook); 10 % of Vdd: common practice

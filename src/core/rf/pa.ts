@@ -10,6 +10,7 @@ import { paSpectrum, switchingPowerShape, type PaSpectrum } from './pa-spectrum'
 import { bandFigures, idealEfficiency, swrKeyDownCurrent, type PaWaveformSummary } from './pa-dc';
 import { waveformFindings } from './pa-spectrum-findings';
 import { classEShuntFindings, swrFindings } from './pa-swr-findings';
+import { clampFindings, drainClamp, type DrainClamp } from './pa-clamp';
 import { usablePositive } from '../numeric';
 import { insideNote } from '../thermal/inside';
 
@@ -69,6 +70,8 @@ export interface PaResult {
   spectrum: Omit<PaSpectrum, 'waveform'> | null;
   /** Drain peak, device current, dissipation and output round the circle of the worst SWR (null when refused). */
   swr: PaSwrStress | null;
+  /** A fitted drain clamp: the peak it leaves and the power it takes (null/absent when none is entered). */
+  clamp?: DrainClamp | null;
   /** Highest supply voltage the drains can see (high mains with the PA unkeyed, or a full battery), V; railV when unknown. */
   maxRailV: number;
   /** Supply voltage used for heating (high mains, key-down), V; railV when unknown. */
@@ -261,8 +264,10 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     findings.push({ severity: 'caution', rule: 'pa.swr-current', subject, value: swrCurrent.currentA, limit: keyDownCurrentA, unit: 'A', source: 'pa.waveform-dc',
       message: `Into the worst load of SWR ${swr.swr} (${describeLoad(swrCurrent.at)}) the key-down current rises to ${swrCurrent.currentA.toFixed(2)} A, above the ${keyDownCurrentA.toFixed(2)} A the supply budget carries for the matched load; size the supply and its fuse for it, or fold the drive back at high SWR.` });
   }
+  const clamp = drainClamp(pa.drainClampV, swr, { peakV: peakDrainV, peakA: opHot.peakDeviceA, supplyV: maxRailV });
+  if (clamp) findings.push(...clampFindings(clamp, pa.deviceVdsMaxV, maxRailV, swr.swr, subject));
   findings.push(...swrFindings(pa, swr, {
-    subject, atMax, ambientC: airC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
+    clampV: clamp?.clampV ?? null, subject, atMax, ambientC: airC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
     matchedDissipationW: thermalRaw.dissipationTotalW, sharedBy: thermalRaw.sharedBy, tjTargetC: thermalRaw.tjTargetC,
   }));
   findings.push(...classEShuntFindings(pa, primaryOhm, corners.frequencyHz, subject));
@@ -287,7 +292,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     // Common practice, no published source: one S-unit = 6 dB
     vsReferenceDb, vsReferenceSUnits: vsReferenceDb / 6,
     efficiency, efficiencySource: pa.efficiency === null ? 'class-default' : 'entered',
-    dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, swr, findings, refused: false,
+    dcInputW, keyDownCurrentA, peakDrainV, peakDeviceA: op.peakDeviceA, thermal: thermalValues, swr, clamp, findings, refused: false,
   };
 }
 

@@ -37,6 +37,11 @@ export const paSpec = defineSpec({
     // Common practice, no published source: below 5 % a "PA" is a heater; above 100 % is impossible
     efficiency: optNum('Drain efficiency', '%', U.pct, 0.05, 1, null, { help: 'empty = default for the class' }),
     deviceVdsMaxV: num('Device V(BR)DSS', 'V', U.V, 0, 10_000, 100, { form: 'vdsMax', exclusiveMin: true }),
+    // same range as the device rating it protects
+    drainClampV: optNum('Drain clamp voltage', 'V', U.V, 0, 10_000, null, {
+      form: 'drainClamp', exclusiveMin: true, example: '90',
+      help: 'a TVS or zener fitted from drain to ground: its clamping voltage; empty = no clamp',
+    }),
     deviceIdMaxA: num('Device max drain current', 'A', U.A, 0, 1000, 5, { form: 'idMax', exclusiveMin: true }),
     biasIdleMaxA: num('Bias preset max idle current', 'A', U.mA, 0, 100, 0.05, { form: 'biasIdle', example: '50' }),
     referencePowerW: num('Reference power for dB and S-units', 'W', U.W, 0, 1e6, 5, {

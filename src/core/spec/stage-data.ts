@@ -29,7 +29,7 @@ export const STAGE_DATA: readonly StageData[] = [
     rows: [
       ['topology', 'amplifierClass', 'railId', 'devices'],
       ['saturationV', 'rdsOnOhm', 'turnsRatio', 'loadOhm', 'efficiency'],
-      ['deviceVdsMaxV', 'deviceIdMaxA', 'biasIdleMaxA', 'referencePowerW'],
+      ['deviceVdsMaxV', 'drainClampV', 'deviceIdMaxA', 'biasIdleMaxA', 'referencePowerW'],
       ['mount.thetaJcKPerW', 'mount.thetaCsKPerW', 'mount.thetaSaKPerW', 'mount.tjMaxC', 'heatsinkSharedBy'],
       ['networkLoadOhm', 'conductionAngleDeg', 'imbalanceTypical', 'imbalanceWorst', 'deviceCossF', 'outputLeakageH', 'transitionTimeS'],
       ['outputCoreId', 'outputPrimaryTurns', 'outputWireDiameterM'],

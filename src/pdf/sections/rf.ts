@@ -11,6 +11,7 @@ import type { PaWaveformSummary } from '../../core/rf/pa-dc';
 import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
 import { MIN_DBC } from '../../core/rf/pa-spectrum';
 import { paOutputRows } from '../../core/rf/pa-output-rows';
+import { clampText } from '../../core/rf/pa-clamp';
 
 const loadText = (w: Worst) => `${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '−' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} Ω, phase ${w.phaseDeg.toFixed(0)}°`;
 
@@ -48,6 +49,7 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
         ['Load', p.turnsRatioSource === 'network' ? `matching network, ${fv(p.primaryOhm, 'Ω')} at the drain` : `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
         ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load`],
         ...(p.swr && p.swr.swr > 1 ? [['At SWR ' + p.swr.swr, swrText(p.swr)] as [string, string]] : []),
+        ...(p.clamp ? [['Drain clamp', clampText(p.clamp)] as [string, string]] : []),
         ['Heat', `${fv(p.thermal.dissipationTotalW, 'W')} key-down in all devices; junction ${fv(p.thermal.tjAverageC, '°C')} average, ${fv(p.thermal.tjContinuousC, '°C')} continuous (target ≤ ${fv(p.thermal.tjTargetC, '°C')}); heatsink ≤ ${fv(p.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for tune-up${p.thermal.sharedBy > 1 ? ` (one heatsink for ${p.thermal.sharedBy} devices)` : ''}`],
       ], 110, 8.5);
     }
