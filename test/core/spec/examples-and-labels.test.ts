@@ -46,6 +46,17 @@ describe('core AL per 100 turns', () => {
     if (r.ok) expect(r.value).toBeCloseTo(henry, 20);
   });
 
+  // every AL box (the filter's and the core catalog's; any field in H/t²) reads the data-sheet form the same way
+  const alFields = numberFields.filter(([, f]) => f.unit === 'H/t²');
+  it.each(alFields)('%s reads 49 µH/100t as 4.9 nH/t²', (_key, f) => {
+    const r = readNumber('49 µH/100t', f);
+    expect(r.ok).toBe(true);
+    if (r.ok) expect(r.value).toBeCloseTo(4.9e-9, 20);
+  });
+  it('the AL boxes include the core catalog and the filter', () => {
+    expect(alFields.map(([k]) => k)).toEqual(expect.arrayContaining(['core.alHPerTurn2', 'lpf.coreAlHPerTurn2']));
+  });
+
   it('a value per 100 turns outside the range is refused with the range, and the message offers both forms', () => {
     const r = readNumber('-3 µH/100t', al);
     expect(r.ok).toBe(false);
