@@ -3,6 +3,7 @@
 // input (failed bridge) and a shorted reservoir (the current then still passes the diodes).
 import type { RectifierTopology } from '../model';
 import type { FaultCheck, FuseSheet } from './report-types';
+import { resultScope } from './rectifier-sim';
 
 /** One row of a pre-arcing table: at `multiple` x In the fuse melts no sooner than minS and no later than maxS. */
 interface PreArcRow {
@@ -81,6 +82,20 @@ export function faultCheck(faultA: number, ratedA: number, sheet: FuseSheet, all
 export function shortedOutputRmsA(
   topology: RectifierTopology, peakV: number, windingOhm: number, diodeDropV: number, diodeOhm: number,
   leakageH = 0, frequencyHz = 50,
+): number {
+  // inside one evaluation the same winding is asked again in every supply pass: a look-up on the exact inputs
+  const memo = resultScope<number>('shorted-output');
+  const key = memo ? JSON.stringify([topology, peakV, windingOhm, diodeDropV, diodeOhm, leakageH, frequencyHz]) : '';
+  const held = memo?.get(key);
+  if (held !== undefined) return held;
+  const a = shortedOutputUncached(topology, peakV, windingOhm, diodeDropV, diodeOhm, leakageH, frequencyHz);
+  memo?.set(key, a);
+  return a;
+}
+
+function shortedOutputUncached(
+  topology: RectifierTopology, peakV: number, windingOhm: number, diodeDropV: number, diodeOhm: number,
+  leakageH: number, frequencyHz: number,
 ): number {
   const n = topology === 'bridge' ? 2 : 1;
   const r = windingOhm + n * diodeOhm;
