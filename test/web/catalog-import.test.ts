@@ -56,7 +56,7 @@ describe('supplier price-list import', () => {
     expect(res.status).toBe(422);
     const html = await res.text();
     expect(html).toContain('Nothing was imported: 1 row(s) are refused');
-    expect(html).toContain('<td>4</td>');
+    expect(html).toContain('<td data-label="Row">4</td>');
     expect(html).toContain('Multiple: &quot;ten&quot; is not a number of pieces');
     expect(await stored()).toEqual(before);
   });

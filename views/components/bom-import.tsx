@@ -131,16 +131,16 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
         <tbody>
           {preview.rows.map((r) => (
             <tr class={r.errors.length ? 'refused' : ''}>
-              <td>{r.row}</td>
-              <td>{r.values.refs}</td>
-              <td>
+              <td data-label="Row">{r.row}</td>
+              <td data-label="Designators">{r.values.refs}</td>
+              <td data-label="Description">
                 {r.values.description}
                 {r.values.value ? <span class="sub"> {r.values.value}</span> : null}
               </td>
-              <td>{r.values.category}</td>
-              <td class="num">{r.values.quantity ?? '–'}</td>
-              <td>{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
-              <td class="num">{r.values.priceCents === null ? '' : formatMoney(r.values.priceCents, r.values.currency ?? project.currency)}</td>
+              <td data-label="Category">{r.values.category}</td>
+              <td class="num" data-label="Qty">{r.values.quantity ?? '–'}</td>
+              <td data-label="Supplier · SKU">{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
+              <td class="num" data-label="Price">{r.values.priceCents === null ? '' : formatMoney(r.values.priceCents, r.values.currency ?? project.currency)}</td>
               <RowProblems row={r} />
             </tr>
           ))}
@@ -210,7 +210,7 @@ export const DecimalChoice: FC<{ decimal: '.' | ',' }> = ({ decimal }) => (
 
 /** A preview row's refusals and warnings, each naming its column. */
 export const RowProblems: FC<{ row: PreviewRow }> = ({ row: r }) => (
-  <td>
+  <td data-label="Problems">
     {r.errors.map((e) => (
       <span class="row-error">
         <span class="sev sev-fail">refused</span> {e.column ? `${e.column}: ` : ''}

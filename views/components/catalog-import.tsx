@@ -167,14 +167,14 @@ export const CatalogPreviewBody: FC<CatalogPreviewProps> = (props) => {
         <tbody>
           {preview.rows.map((r) => (
             <tr class={r.errors.length ? 'refused' : ''}>
-              <td>{r.row}</td>
-              <td>
+              <td data-label="Row">{r.row}</td>
+              <td data-label="Description">
                 {r.values.description}
                 {r.values.value ? <span class="sub"> {r.values.value}</span> : null}
               </td>
-              <td>{r.values.category}</td>
-              <td>{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
-              <td>{r.values.catalog?.breaks.map((b) => `${b.minQty}: ${formatMoney(b.unitPriceCents, r.values.currency ?? project.currency)}`).join(', ')}</td>
+              <td data-label="Category">{r.values.category}</td>
+              <td data-label="Supplier · SKU">{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
+              <td data-label="Price breaks">{r.values.catalog?.breaks.map((b) => `${b.minQty}: ${formatMoney(b.unitPriceCents, r.values.currency ?? project.currency)}`).join(', ')}</td>
               <RowProblems row={r} />
             </tr>
           ))}

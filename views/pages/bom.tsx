@@ -10,6 +10,7 @@ import { BomRoles } from '../components/bom-roles';
 import type { RoleStatus } from '../../src/core/roles';
 import { ImportForm } from '../components/bom-import';
 import { CostResults } from '../partials/cost-results';
+import { OrderSheets } from '../components/order-sheets';
 
 export interface BomBodyProps {
   project: Project;
@@ -34,6 +35,7 @@ export const BomBody: FC<BomBodyProps> = ({ project, report, roles = [], failed,
         <a href={`/projects/${project.id}/orders.csv`}>CSV</a> · <a href={`/projects/${project.id}/orders.csv?sep=semicolon`}>CSV (semicolon)</a>
       </p>
       <CostResults report={report} currency={project.currency} />
+      <OrderSheets report={report} csvHref={`/projects/${project.id}/orders.csv`} />
       <ImportForm project={project} error={failed?.form === 'import' ? failed.state.errors._form : undefined} />
     </div>
   );
