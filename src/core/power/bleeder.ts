@@ -1,6 +1,6 @@
 // Bleeder resistor: time for the reservoir to fall to a safe voltage after switch-off.
 import type { Finding } from '../findings';
-import type { BleederReport } from './report-types';
+import type { BleederReport, Recommendation } from './report-types';
 import { E12_STEPS, prevInSeries } from './standard-values';
 import { quotient, usablePositive } from '../numeric';
 
@@ -99,4 +99,32 @@ function dischargeFindings(railName: string, b: BleederReport): Finding[] {
     return [{ ...base, severity: 'fail', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `The fitted bleeder takes ${b.fittedTimeS.toFixed(1)} s to bring the reservoir below ${b.thresholdV} V; ${b.allowedS} s is the usual limit. Use a smaller resistor.` }];
   }
   return [{ ...base, severity: 'ok', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `The bleeder brings the reservoir below ${b.thresholdV} V in ${b.fittedTimeS.toFixed(1)} s. Still check with a meter before touching.` }];
+}
+
+function ohmWords(r: number): string {
+  return r >= 1000 ? `${Number((r / 1000).toPrecision(3))} kΩ` : `${Number(r.toPrecision(3))} Ω`;
+}
+
+/**
+ * A rail's bleeder recommendation: a fitted bleeder that meets the discharge target is kept (the suggested value is
+ * then only what a new build would fit); otherwise the suggested value with a rating of its dissipation over
+ * BLEEDER_DERATING. Null when nothing can be suggested.
+ */
+export function bleederRecommendation(b: BleederReport): Recommendation | null {
+  if (b.suggestedOhm === null) return null;
+  const w = b.suggestedW ?? 0;
+  const ratingW = (w / BLEEDER_DERATING).toFixed(2);
+  const suggested = `${ohmWords(b.suggestedOhm)} bleeder, ${ratingW} W rating or more`;
+  const heat = `It dissipates ${w.toFixed(2)} W at ${b.startV.toFixed(1)} V; a part rated for ` +
+    `${Math.round(1 / BLEEDER_DERATING)} x that runs cool.`;
+  const meets = b.fittedOhm !== null && b.fittedTimeS !== null && (b.startV <= b.thresholdV || b.fittedTimeS <= b.allowedS);
+  if (meets) {
+    return {
+      topic: 'bleeder',
+      text: `Keep the fitted ${ohmWords(b.fittedOhm!)} bleeder (below ${b.safeV} V in ${b.fittedTimeS!.toFixed(1)} s)`,
+      reasoning: `It meets the discharge target; for a new build: ${suggested}. ${b.reasoning} ${heat}`,
+      source: SOURCE,
+    };
+  }
+  return { topic: 'bleeder', text: suggested, reasoning: `${b.reasoning} ${heat}`, source: SOURCE };
 }

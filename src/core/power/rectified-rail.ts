@@ -9,7 +9,7 @@ import { TOLERANCE_ID, cornerCurrent, worstIds } from './corners';
 import type { JointVoltages } from './cross-regulation';
 import { noLoadVrms, windingLeakage, windingResistanceOhm } from './winding';
 import { minimumCapacitanceF, recommendedCapacitorV, reservoirFindings, standardCapacitanceF, textbookCapacitanceF } from './reservoir';
-import { bleederFindings, bleederReport } from './bleeder';
+import { bleederFindings, bleederReport, bleederRecommendation } from './bleeder';
 import { fittedFuseFindings, fuseMarking, railFuse } from './fuses';
 import { recommendWinding } from './transformer';
 import { windingFuseReport } from './winding-fuse';
@@ -148,9 +148,9 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
   // Bleeder
   const bleeder = bleederReport(rail.reservoirF, highNoLoad, rail.esrOhm, rail.bleederOhm, rail.bleederRatedW ?? null);
   if (winding) findings.push(...bleederFindings(rail.name, bleeder));
-  if (bleeder.suggestedOhm !== null) {
-    recommendations.push({ topic: 'bleeder', text: `${fmtOhm(bleeder.suggestedOhm)} bleeder, ${bleeder.suggestedW !== null ? fmt(bleeder.suggestedW * 2, 2) : '?'} W rating or more`, reasoning: `${bleeder.reasoning} It dissipates ${fmt(bleeder.suggestedW ?? 0, 2)} W at ${fmt(bleeder.startV, 1)} V; a part rated for twice that runs cool.`, source: 'supply.bleeder' });
-  }
+  // a fitted bleeder that meets the target is kept; the suggested value is then what a new build would fit
+  const bleederPlan = bleederRecommendation(bleeder);
+  if (bleederPlan) recommendations.push(bleederPlan);
 
   // Rail fuse
   const fuse = railFuse(Math.max(outputA.keyDown, ctx.highMainsOutputA?.keyDown ?? 0), 'on the DC side after the reservoir');

@@ -1,6 +1,8 @@
 // Bleeder discharge against the reference values §10 worked examples [D] (formula t = RC ln(V0/Vsafe), [C]).
 import { describe, expect, it } from 'vitest';
-import { bleederFindings, bleederReport, dischargeTimeS, maxBleederOhm } from '../../../src/core/power/bleeder';
+import {
+  bleederFindings, bleederRecommendation, bleederReport, dischargeTimeS, maxBleederOhm,
+} from '../../../src/core/power/bleeder';
 import { near } from './helpers';
 
 const toleranceS = 0.1; // ref prints 0.1 s
@@ -64,5 +66,24 @@ describe('bleeder on every rail: time to the safe voltage and wattage', () => {
     const p = bleederFindings('LV', bleederReport(0.01, 25.5, 0.02, 2200, null)).find((f) => f.rule === 'bleeder.power');
     expect(p?.severity).toBe('caution');
     expect(p?.message).toContain('0.59 W or more'); // 2 x 0.2956 W
+  });
+});
+
+describe('the bleeder recommendation keeps a fitted bleeder that meets its target', () => {
+  it('4700 µF at 25.6 V with 2.2 kΩ fitted: kept (to 5 V in RC ln(25.6/5) = 16.9 s); 3.9 kΩ only for a new build', () => {
+    // t = R C ln(V0/Vsafe) (ref §10 [C]); 5 V and the 22 s time constant (22 / 4700 µF = 4.68 kΩ -> E12 3.9 kΩ) are
+    // common practice, no published source; P = V²/R = 25.6² / 3900 = 0.168 W, rated twice that (derating 50 %)
+    const b = bleederReport(4700e-6, 25.6, 0.04, 2200, 1);
+    const r = bleederRecommendation(b)!;
+    const t = (2200 * 4700e-6 * Math.log(25.6 / 5)).toFixed(1);
+    expect(r.text).toBe(`Keep the fitted 2.2 kΩ bleeder (below 5 V in ${t} s)`);
+    expect(r.reasoning).toMatch(/for a new build: 3\.9 kΩ bleeder, 0\.34 W rating or more/);
+  });
+  it('none fitted, or too slow above 60 V: the suggested value (220 µF at 350 V: at most 12.9 kΩ -> E12 12 kΩ)', () => {
+    // ref §10: for 5 s the bleeder must be <= 12.9 kΩ; 350² / 12 k = 10.2 W, rated 20.42 W or more
+    const none = bleederRecommendation(bleederReport(4700e-6, 25.6, 0.04, null))!;
+    expect(none.text).toBe('3.9 kΩ bleeder, 0.34 W rating or more');
+    const slow = bleederRecommendation(bleederReport(220e-6, 350, 0.1, 100e3, 2))!;
+    expect(slow.text).toBe(`12 kΩ bleeder, ${((350 * 350) / 12e3 / 0.5).toFixed(2)} W rating or more`);
   });
 });
