@@ -35,7 +35,7 @@ export interface InrushTransformer {
   ratedPrimaryA: number;
   /** Primary resistance from the regulation figures and the copper split (Ω). */
   primaryOhm: number;
-  /** The common-practice multiple of the rated primary current used (INRUSH_MULTIPLE), and whether √2 V / R_p capped it. */
+  /** The common-practice multiple of the rated primary current (INRUSH_MULTIPLE); whether √2 V / R_p capped it. */
   magnetisingMultiple: number;
   magnetisingCapped: boolean;
   /** Magnetising inrush peak (A) and its I²t (A² s). */
@@ -136,11 +136,12 @@ export function transformerInrush(t: Transformer, rails: RectifiedRail[], mains:
   }
   return {
     transformerId: t.id, name: t.name, construction: t.construction, ratedVA, ratedPrimaryA, primaryOhm,
-    magnetisingMultiple, magnetisingCapped: magnetisingMultiple * ratedPrimaryA > boundA, magnetisingPeakA, magnetisingI2t, chargingPeakA, chargingI2t: chargingRootI2t ** 2,
+    magnetisingMultiple, magnetisingCapped: magnetisingMultiple * ratedPrimaryA > boundA, magnetisingPeakA,
+    magnetisingI2t, chargingPeakA, chargingI2t: chargingRootI2t ** 2,
   };
 }
 
-/** What the primary carries besides the inrush: its worst continuous current and each winding fault reflected to it (A). */
+/** What the primary carries besides the inrush: its worst continuous current, each winding fault on it (A). */
 export interface PrimaryDuty {
   loadA?: number;
   reflectedFaultA?: readonly number[];
@@ -150,14 +151,18 @@ export interface PrimaryDuty {
  * The smallest time-lag rating in the IEC 60127 series, at least fuseA, whose melting I²t floor takes the inrush
  * within PULSE_SHARE, and whether it still clears the reflected faults (IEC 60127-2 maximum pre-arcing times).
  */
-export function timeLagFor(i2t: number, fuseA: number, sheet: FuseSheet, faultsA?: readonly number[]): TimeLagSuggestion {
+export function timeLagFor(
+  i2t: number, fuseA: number, sheet: FuseSheet, faultsA?: readonly number[],
+): TimeLagSuggestion {
   const tSheet: FuseSheet = sheet.startsWith('F') ? 'T3' : sheet;
-  const ratedA = IEC_60127_FUSES_A.find((a) => a >= fuseA - 1e-9 && PULSE_SHARE * meltI2tFloor(tSheet, a) >= i2t) ?? null;
-  const clearsFaults = ratedA === null || !faultsA?.length ? null : faultsA.every((f) => faultCheck(f, ratedA, tSheet).clears);
+  const takes = (a: number) => a >= fuseA - 1e-9 && PULSE_SHARE * meltI2tFloor(tSheet, a) >= i2t;
+  const ratedA = IEC_60127_FUSES_A.find(takes) ?? null;
+  const clearsFaults = ratedA === null || !faultsA?.length
+    ? null : faultsA.every((f) => faultCheck(f, ratedA, tSheet).clears);
   return { ratedA, sheet: tSheet, meltI2t: ratedA === null ? null : meltI2tFloor(tSheet, ratedA), clearsFaults };
 }
 
-/** All transformers switched on together behind the primary fuse (fuseA, of the IEC 60127-2 sheet chosen; T3 when not). */
+/** All transformers switched on together behind the primary fuse (fuseA, of the IEC 60127-2 sheet chosen; else T3). */
 export function inrushReport(
   transformers: Transformer[], rails: RectifiedRail[], mains: Mains, fuseA: number, sheet: FuseSheet = 'T3',
   duty: PrimaryDuty = {},
@@ -191,7 +196,8 @@ export function inrushReport(
 /** Each transformer's magnetising peak with the common-practice multiple it rests on, in words. */
 export function magnetisingWords(r: InrushReport): string {
   const each = r.transformers.map((t) => {
-    const base = `${t.name}: ${t.magnetisingMultiple} x its ${fmtA(t.ratedPrimaryA)} rated primary current (${t.construction})`;
+    const base = `${t.name}: ${t.magnetisingMultiple} x its ${fmtA(t.ratedPrimaryA)} rated primary current ` +
+      `(${t.construction})`;
     return t.magnetisingCapped ? `${base}, capped by the primary resistance at ${fmtA(t.magnetisingPeakA)}`
       : `${base} = ${fmtA(t.magnetisingPeakA)}`;
   });
@@ -219,8 +225,8 @@ function remedies(r: InrushReport): string {
   const carries = r.ntcCarriesA !== null ? `, rated for the ${fmtA(r.ntcCarriesA)} the primary draws continuously` : '';
   if (r.ntcOhm >= 1) {
     out.push(`Or fit an NTC thermistor of about ${r.ntcOhm.toFixed(0)} Ω cold in the primary${carries} (it limits ` +
-      'only while cool: switched off and on again at once it is still hot), or a soft-start relay that shorts a series ' +
-      'resistor of that size once the reservoirs have charged (common practice, no published source).');
+      'only while cool: switched off and on again at once it is still hot), or a soft-start relay that shorts a ' +
+      'series resistor of that size once the reservoirs have charged (common practice, no published source).');
   } else {
     out.push('The primary resistance already limits the magnetising peak, so an NTC adds little; a soft-start relay ' +
       'that shorts a series resistor once the reservoirs have charged limits their charging pulse (common practice, ' +
@@ -270,8 +276,8 @@ export function inrushFindings(r: InrushReport): Finding[] {
 export function inrushSummary(r: InrushReport): string {
   const fuse = fuseMarking(r.fuseA, r.sheet.startsWith('F') ? 'F' : 'T');
   const reservoirs = r.transformers.map((t) => `${t.name} reservoirs ${fmtA(t.chargingPeakA)}`).join('; ');
-  const head = `peak ${fmtA(r.peakA)}, ${r.i2t.toFixed(3)} A²s against about ${r.fuseMeltI2t.toFixed(3)} A²s to melt ` +
-    `the ${fuse} fuse. Magnetising: ${magnetisingWords(r)}. Charging from empty: ${reservoirs}.`;
+  const head = `peak ${fmtA(r.peakA)}, ${r.i2t.toFixed(3)} A²s against about ${r.fuseMeltI2t.toFixed(3)} ` +
+    `A²s to melt the ${fuse} fuse. Magnetising: ${magnetisingWords(r)}. Charging from empty: ${reservoirs}.`;
   if (r.i2t <= PULSE_SHARE * r.fuseMeltI2t) {
     return `${head} Within ${Math.round(PULSE_SHARE * 100)} % of the fuse's melting I²t: no NTC or soft-start needed.`;
   }

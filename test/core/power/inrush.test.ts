@@ -14,12 +14,16 @@ import { nearRel } from './helpers';
 const rel = 1e-6;
 const mains: Mains = { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 };
 const tr = (construction: Transformer['construction'], reg: number): Transformer => ({
-  id: 't', name: 'T1', construction, windings: [{ id: 'w', name: '24 V', ratedVrms: 24, ratedA: 2, regulationFraction: reg, resistanceOhm: null }],
+  id: 't', name: 'T1', construction,
+  windings: [{ id: 'w', name: '24 V', ratedVrms: 24, ratedA: 2, regulationFraction: reg, resistanceOhm: null }],
 });
-const rail = { kind: 'rectified', id: 'r', name: 'PA', windingId: 'w', topology: 'bridge', diodeDropV: 1, diodeResistanceOhm: 0.05, reservoirF: 4700e-6, esrOhm: 0.05 } as RectifiedRail;
+const rail = {
+  kind: 'rectified', id: 'r', name: 'PA', windingId: 'w', topology: 'bridge', diodeDropV: 1, diodeResistanceOhm: 0.05,
+  reservoirF: 4700e-6, esrOhm: 0.05,
+} as RectifiedRail;
 
 describe('fuse melting-I²t floor from IEC 60127-2 minimum pre-arcing times', () => {
-  it('T (sheet 3), 1 A: min of 2.75² x 0.6, 4² x 0.15, 10² x 0.02 = 2.0 A²s; F (sheet 2): 4² x 0.003 = 0.048 A²s', () => {
+  it('T (sheet 3), 1 A: min of 2.75² x 0.6, 4² x 0.15, 10² x 0.02 = 2.0 A²s; F (sheet 2): 4² x 0.003 = 0.048', () => {
     // Source: IEC 60127-2 sheet 3 minimum pre-arcing times as quoted in makers' datasheets (2.75 In >= 0.6 s,
     // 4 In >= 0.15 s, 10 In >= 20 ms); sheet 2 from memory (2.75 In >= 10 ms, 4 In >= 3 ms)
     nearRel(meltI2tFloor('T3', 1), Math.min(2.75 ** 2 * 0.6, 16 * 0.15, 100 * 0.02), rel, 'T3');
@@ -33,14 +37,14 @@ describe('one 24 V 2 A laminated transformer on 230 V +/- 10 %, 50 Hz (hand calc
   // VA = 48; rated primary 48 / 230 = 0.20870 A; R_p = 0.5 x 0.1 x 230² / 48 = 55.104 ohm
   const vaA = 48 / 230;
   const rp = (0.5 * 0.1 * 230 ** 2) / 48;
-  it('magnetising: 10 x rated = 2.087 A (below the bound sqrt2 x 253 / 55.1 = 6.49 A); I²t = I² T/4 / (1 - 0.25)', () => {
+  it('magnetising: 10 x rated = 2.087 A (below sqrt2 x 253 / 55.1 = 6.49 A); I²t = I² T/4 / (1 - 0.25)', () => {
     const t = transformerInrush(tr('laminated', 0.1), [rail], mains);
     nearRel(t.primaryOhm, rp, rel, 'R_p');
     nearRel(t.magnetisingPeakA, 10 * vaA, rel, 'peak');
     nearRel(t.magnetisingI2t, ((10 * vaA) ** 2 * 0.02) / 4 / 0.75, rel, 'I2t');
   });
 
-  it('charging: V = sqrt2 x 24 x 1.1 x 1.1 - 2 = 39.07 V behind 1.2 + 0.1 + 0.05 ohm; reflected by k = 26.4 / 230', () => {
+  it('charging: V = sqrt2 x 24 x 1.1 x 1.1 - 2 = 39.07 V behind 1.2 + 0.1 + 0.05 ohm; reflected by 26.4 / 230', () => {
     const t = transformerInrush(tr('laminated', 0.1), [rail], mains);
     // Source: RC charging from a step, i = V/R e^(-t/RC): peak V/R, ∫ i² dt = V² C / (2 R) (textbook)
     const v = Math.SQRT2 * 24 * 1.1 * 1.1 - 2;
@@ -50,7 +54,7 @@ describe('one 24 V 2 A laminated transformer on 230 V +/- 10 %, 50 Hz (hand calc
     nearRel(t.chargingI2t, (k ** 2 * v ** 2 * 4700e-6) / (2 * r), rel, 'I2t'); // 0.0350 A²s
   });
 
-  it('against the fuse: T250mA ok (0.035 < 30 % of 0.125), T200mA ages (44 %), T100mA may blow; F would not survive', () => {
+  it('against the fuse: T250mA ok (0.035 < 30 % of 0.125), T200mA ages (44 %), T100mA may blow; not F', () => {
     const t = [tr('laminated', 0.1)];
     const ok = inrushReport(t, [rail], mains, 0.25);
     expect(ok.i2t).toBeCloseTo(0.035, 3); // the charging pulse is the worse of the two here
@@ -66,7 +70,7 @@ describe('one 24 V 2 A laminated transformer on 230 V +/- 10 %, 50 Hz (hand calc
     nearRel(ok.ntcOhm, (Math.SQRT2 * 253) / (10 * vaA) - rp, rel, 'NTC');
   });
 
-  it('a toroid: 30 x rated (6.26 A) is capped by the primary resistance (regulation 20 %: sqrt2 x 253 / 110.2 = 3.25 A)', () => {
+  it('a toroid: 30 x rated (6.26 A) capped by the primary resistance (20 %: sqrt2 x 253 / 110.2 = 3.25 A)', () => {
     const t = transformerInrush(tr('toroidal', 0.2), [], mains);
     nearRel(t.magnetisingPeakA, (Math.SQRT2 * 253) / ((0.5 * 0.2 * 230 ** 2) / 48), rel, 'capped');
     expect(t.chargingI2t).toBe(0);
@@ -81,7 +85,7 @@ describe('what to do about it: a time-lag rating, an NTC or a soft-start (24 V 2
   const v = Math.SQRT2 * 24 * 1.1 * 1.1 - 2;
   const k = (24 * 1.1) / 230;
   const i2t = (k ** 2 * v ** 2 * 4700e-6) / (2 * ((0.1 * 24) / 2 + 0.15));
-  it('T100mA blows: the smallest T3 rating taking it within 30 % is T250mA (0.3 x 2.0 x 0.25² = 0.0375 >= 0.0350)', () => {
+  it('T100mA blows: the smallest T3 rating within 30 % is T250mA (0.3 x 2.0 x 0.25² = 0.0375 >= 0.0350)', () => {
     // Source: IEC 60127-2 sheet 3 minimum pre-arcing times (melting I²t floor 2.0 In² A²s, as in the first test);
     // the 30 % pulse share is common practice, no published source. T200mA: 0.3 x 2.0 x 0.04 = 0.024 < 0.0350
     const r = inrushReport(t, [rail], mains, 0.1, 'T3', { loadA: 0.2, reflectedFaultA: [1.2] });
@@ -97,7 +101,7 @@ describe('what to do about it: a time-lag rating, an NTC or a soft-start (24 V 2
     expect(m).toMatch(/limits only while cool/);
     expect(m).toMatch(/soft-start relay/);
   });
-  it('a larger time-lag fuse that no longer clears a winding fault is refused in words (0.5 A is 2 x In of 250 mA)', () => {
+  it('a larger time-lag fuse that no longer clears a winding fault is refused (0.5 A is 2 x In of 250 mA)', () => {
     // IEC 60127-2 sheet 3 sets no time below 2.1 In: a 0.5 A fault on T250mA may never clear
     const r = inrushReport(t, [rail], mains, 0.1, 'T3', { reflectedFaultA: [0.5] });
     expect(r.timeLag.clearsFaults).toBe(false);
@@ -117,7 +121,7 @@ describe('what to do about it: a time-lag rating, an NTC or a soft-start (24 V 2
     expect(m).toMatch(/10 x laminated, 30 x toroidal\) are common practice, no published source/);
     expect(inrushSummary(r)).toMatch(/no NTC or soft-start needed/);
   });
-  it('when the primary resistance already limits the peak (toroid, 35 % regulation) no NTC is offered, a soft-start is', () => {
+  it('when the primary resistance limits the peak (toroid, 35 % regulation) no NTC is offered, a soft-start is', () => {
     // R_p = 0.5 x 0.35 x 230² / 48 = 192.9 Ω > sqrt2 x 253 / (10 x 0.2087) = 171.5 Ω: the NTC comes out 0 Ω
     const r = inrushReport([tr('toroidal', 0.35)], [rail], mains, 0.05);
     expect(r.ntcOhm).toBe(0);
