@@ -76,7 +76,7 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused
         ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} budgeted at the design point (bias idle included)${pa.waveform && pa.waveform.bandMaxCurrentA > pa.waveform.designCurrentA * 1.05 ? `; up to ${fv(pa.waveform.bandMaxCurrentA + (pa.keyDownCurrentA - pa.waveform.designCurrentA), 'A')} at the worst end of the band` : ''}`],
         ...(pa.swrKeyDownCurrentA !== null && pa.swrKeyDownCurrentA > pa.keyDownCurrentA
           ? [['Key-down current at the worst SWR', `${fv(pa.swrKeyDownCurrentA, 'A')} (above the budgeted ${fv(pa.keyDownCurrentA, 'A')})`] as [string, string]] : []),
-        ['Peak drain voltage / device current (design load)', `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
+        [`Peak drain voltage / device current (design load${pa.maxRailV > pa.railV ? `, highest supply ${fv(pa.maxRailV, 'V')}` : ''})`, `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
         ...(pa.clamp ? [['Drain clamp', clampText(pa.clamp)] as [string, string]] : []),
         ['Dissipation', `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`],
         [(pa.thermal.sharedBy > 1 ? `Heatsink needed, one per ${pa.thermal.sharedBy} devices` : 'Heatsink needed per device') + ' (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
@@ -130,8 +130,7 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
           <p class="explain">
             {d.response === 'chebyshev' ? `Chebyshev, ${d.rippleDb} dB ripple (cutoff = ripple edge)` : 'Butterworth (cutoff = 3 dB point)'}, order {d.order},{' '}
             {d.form}, cutoff {fv(d.cutoffHz, 'Hz')} (
-            {d.cutoffSource === 'band-rule' ? 'chosen from the band: 1.2 × f for Chebyshev, 1.4 × f for Butterworth, at least 1.05 × the band top; common practice' : 'entered'}), {fv(d.r0Ohm, 'Ω')}. Core: {d.coreName} (AL{' '}
-            {fv(d.coreAlHPerTurn2, 'H')}/turn²). Shunt capacitors see up to {fv(lpf.capacitorPeakV, 'V')} peak.
+            {d.cutoffSource === 'band-rule' ? 'chosen from the band: 1.2 × f for Chebyshev, 1.4 × f for Butterworth, at least 1.05 × the band top; common practice' : 'entered'}), {fv(d.r0Ohm, 'Ω')}. Core: {d.coreName}; turns computed with AL {fv(d.coreAlHPerTurn2, 'H')}/turn². Shunt capacitors see up to {fv(lpf.capacitorPeakV, 'V')} peak.
           </p>
           <table class="grid lpf-parts">
             <thead>
@@ -182,6 +181,11 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
   );
 };
 
+/** The capacitors' entered ratings ("500 V, 3 A"), or 'not entered'. */
+const capRating = (r: CoreRealisation) =>
+  [r.capacitorRatedV != null ? fv(r.capacitorRatedV, 'V') : null, r.capacitorRatedA != null ? fv(r.capacitorRatedA, 'A') : null]
+    .filter((x) => x !== null).join(', ') || 'not entered';
+
 const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
   <div class="rf-realisation">
     <h4>Parts at {fv(r.powerW, 'W')} into SWR {r.swr} (worst load phase)</h4>
@@ -199,6 +203,7 @@ const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
           <th class="num">RF voltage (RMS)</th>
           <th class="num">RF current (RMS)</th>
           <th class="num">Peak flux</th>
+          <th class="num">Limit / rating</th>
           <th class="num">Turns (fit)</th>
           <th class="num">Self-resonance</th>
         </tr>
@@ -211,6 +216,7 @@ const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
             <td class="num">{fv(l.rmsV, 'V')}</td>
             <td class="num">{fv(l.rmsA, 'A')}</td>
             <td class="num">{l.peakFluxT !== null ? `${(l.peakFluxT * 1e3).toFixed(1)} mT` : 'not checked'}</td>
+            <td class="num">{r.fluxLimitT != null ? `flux ≤ ${(r.fluxLimitT * 1e3).toFixed(1)} mT` : 'no flux limit'}</td>
             <td class="num">{`${l.turns}${l.fitTurns !== null ? ` (${l.fitTurns})` : ''}`}</td>
             <td class="num">{fv(l.selfResonanceHz, 'Hz', 3)}</td>
           </tr>
@@ -222,6 +228,7 @@ const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
             <td class="num">{`${fv(c.rmsV, 'V')} (${fv(c.peakV, 'V')} peak)`}</td>
             <td class="num">{fv(c.rmsA, 'A')}</td>
             <td class="num">—</td>
+            <td class="num">{capRating(r)}</td>
             <td class="num">—</td>
             <td class="num">{fv(c.selfResonanceHz, 'Hz', 3)}</td>
           </tr>
@@ -312,10 +319,10 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
             <th class="num">Frequency</th>
             <th class="num">At PA</th>
             <th class="num">Filter</th>
-            <th class="num">Filter worst</th>
+            <th class="num">Filter, worst tolerances</th>
             <th class="num">Predicted</th>
             <th class="num">Margin</th>
-            <th class="num">Worst margin</th>
+            <th class="num">Margin, worst tolerances</th>
             <th>Check</th>
           </tr>
         </thead>
@@ -378,12 +385,12 @@ const BASIS_WORDS: Record<HarmonicBasis, string> = {
   'class-e-simulated': 'simulated class E, loaded Q band',
 };
 
-/** "−62.0 to −38.5 dBc", "limited by construction to −41.0 dBc", or one number when the ends agree. */
+/** "−62.0 to −38.5 dBc", "below −70 dBc to −41.0 dBc" (best end under the construction floor), or one number. */
 function band(best: number, worst: number, bestLimited: boolean, worstLimited: boolean): string {
-  const one = (x: number, limited: boolean) => (limited ? 'limited by construction' : x <= MIN_DBC ? 'none (ideal)' : fv(x, 'dBc'));
+  const one = (x: number) => (x <= MIN_DBC ? 'none (ideal)' : fv(x, 'dBc'));
   if (worstLimited) return 'limited by construction';
-  if (Math.abs(best - worst) < 0.05) return one(worst, false);
-  return `${one(best, bestLimited)} to ${one(worst, false)}`;
+  if (Math.abs(best - worst) < 0.05) return one(worst);
+  return `${bestLimited ? `below ${CONSTRUCTION_FLOOR_DBC} dBc` : one(best)} to ${one(worst)}`;
 }
 
 export const RfFindings: FC<{ findings: Finding[] }> = ({ findings }) => (

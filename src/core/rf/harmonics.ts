@@ -172,7 +172,7 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
     const what = `${BASIS_WHAT[pa.basis] ?? pa.basis}${srcWhat}`;
     const lvl = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'limited by construction' : `${x.toFixed(1)} dBc`);
     const bandText = !band ? null : predictedDbc < CONSTRUCTION_FLOOR_DBC ? 'limited by construction at the antenna'
-      : `${lvl(predictedBestDbc)} to ${lvl(predictedDbc)} at the antenna`;
+      : `${predictedBestDbc < CONSTRUCTION_FLOOR_DBC ? `below ${CONSTRUCTION_FLOOR_DBC} dBc (the construction floor)` : lvl(predictedBestDbc)} to ${lvl(predictedDbc)} at the antenna`;
     const down = predictedDbc < CONSTRUCTION_FLOOR_DBC
       ? `below the ${CONSTRUCTION_FLOOR_DBC} dBc construction floor`
       : `${(-predictedDbc).toFixed(1)} dB down`;

@@ -23,7 +23,7 @@ export const rfSettingsSpec = defineSpec({
     // Common practice, no published source: a balanced push-pull stage suppresses its 2nd harmonic by about 30 dB
     evenHarmonicDbc: num('2nd-harmonic balance residual', 'dB', U.dBc, -120, 0, -30, {
       form: 'evenHarmonic',
-      help: 'push-pull imbalance, e.g. −30',
+      help: 'used only without a computed PA stage (a PA\'s own imbalance inputs set its even harmonics), e.g. −30',
       example: '-30',
     }),
     worstSwr: num('Worst-case SWR', '', U.none, 1, 100, 2, { example: '2' }),

@@ -1,0 +1,33 @@
+// The RF page as a builder reads it on the two demos: each harmonic's band worded without implying the construction
+// floor sets its worst end, the filter parts beside the core's flux limit and the capacitors' entered ratings, and the
+// design-load drain peak said to be at the highest supply (where it is computed). Wording checks; the figures are the
+// demos' own inputs (seed-demo/*.ts).
+import { describe, expect, it } from 'vitest';
+import { evaluate } from '../../../src/core/evaluate';
+import { RfResults } from '../../../views/partials/rf-results';
+import { club30m } from '../../../seed-demo/club-30m';
+import { portable20m } from '../../../seed-demo/portable-20m';
+
+const html = async (p: typeof club30m) => String(await (<RfResults report={evaluate(p).rf} />).toString());
+
+describe('RF page wording on the demos', () => {
+  it('club: the 2nd harmonic band reads "below -70 dBc to ..." (not "limited by construction to ...")', async () => {
+    const h = await html(club30m);
+    const row = /<tr data-harmonic="2">([\s\S]*?)<\/tr>/.exec(h)![1];
+    expect(row).toMatch(/push-pull imbalance, typical to worst/);
+    expect(row).toMatch(/below -70 dBc to -?[\d.]+ dBc/);
+    expect(h).not.toMatch(/limited by construction to/);
+  });
+  it('club: the filter parts show the 15 mT flux limit and the 500 V, 3 A capacitor ratings; the AL is said once', async () => {
+    const h = await html(club30m);
+    expect(h).toContain('Limit / rating');
+    expect(h).toContain('flux ≤ 15.0 mT');
+    expect(h).toContain('500 V, 3 A');
+    expect(h).toMatch(/turns computed with AL 4\.9 nH\/turn²/);
+    expect(h).not.toMatch(/\(AL [\d.]+ nH\/t²\) \(AL/);
+  });
+  it('portable: the design-load drain peak is labelled with the highest supply, 14.4 V (a full LiFePO4 battery)', async () => {
+    const h = await html(portable20m);
+    expect(h).toMatch(/design load, highest supply 14\.4 V/);
+  });
+});
