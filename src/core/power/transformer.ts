@@ -54,7 +54,8 @@ export function candidateLeakageH(inp: WindingInput, ratedV: number, ratedA: num
  */
 function troughFor(inp: WindingInput, ratedV: number, ratedA: number): number {
   const w = inp.winding;
-  // Effective regulation of the fitted winding (from its entered resistance when there is one): R = Reg V / I (ref §4.1)
+  // Effective regulation of the fitted winding (from its entered resistance when there is one):
+  // R = Reg V / I (ref §4.1)
   // Usable denominators (1 mV, 1 µA), not merely > 0: a subnormal rating made these quotients infinite
   const ratingUsable = usablePositive(w.ratedVrms, 1e-3) && usablePositive(w.ratedA, 1e-6);
   const regEff = ratingUsable ? (windingResistanceOhm(w) * w.ratedA) / w.ratedVrms : w.regulationFraction;
@@ -97,11 +98,14 @@ function sameAsFitted(inp: WindingInput): string {
   return `same regulation and per-unit leakage as the fitted winding, whose ${mH.toPrecision(3)} mH is ${how}`;
 }
 
-export function recommendWinding(inp: WindingInput): { result: WindingRecommendation; findings: Finding[]; recommendation: Recommendation; simulations: number } {
+export function recommendWinding(inp: WindingInput): {
+  result: WindingRecommendation; findings: Finding[]; recommendation: Recommendation; simulations: number;
+} {
   const d = inp.keyingDuty;
   const kd = get(inp.corners, 'high-keyDown');
   const ku = get(inp.corners, 'high-keyUp');
-  // Heating follows I^2: the heating-equivalent RMS over a keying cycle is sqrt(d I_kd^2 + (1-d) I_ku^2) (Joule heating, I^2 R)
+  // Heating follows I^2: the heating-equivalent RMS over a keying cycle is sqrt(d I_kd^2 + (1-d) I_ku^2)
+  // (Joule heating, I^2 R)
   const thermalRmsA = Math.sqrt(d * (kd?.secondaryRmsA ?? 0) ** 2 + (1 - d) * (ku?.secondaryRmsA ?? 0) ** 2);
   const tuneUpRmsA = kd?.secondaryRmsA ?? 0;
   const peakA = Math.max(0, ...inp.corners.map((c) => c.diodePeakA));
@@ -134,7 +138,8 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
     reasoningV = minimumRatedV !== null
       ? `The lowest rated secondary that keeps the trough at low mains, key-down above ${req.toFixed(2)} V is ` +
         `${minimumRatedV.toFixed(2)} V${halves === 2 ? ' per half' : ''} (${sameAsFitted(inp)}).`
-      : `No secondary voltage up to ${hi.toFixed(0)} V keeps the trough above ${req.toFixed(2)} V with this reservoir and load; the reservoir or load must change.`;
+      : `No secondary voltage up to ${hi.toFixed(0)} V keeps the trough above ${req.toFixed(2)} V with this ` +
+        'reservoir and load; the reservoir or load must change.';
   } else {
     reasoningV = 'This rail states no minimum voltage (no regulator fed), so the fitted secondary voltage is kept.';
   }
@@ -149,38 +154,67 @@ export function recommendWinding(inp: WindingInput): { result: WindingRecommenda
   const vaRatedV = standardRatedV ?? fittedV;
   const va = vaRatedV * ratedA * halves;
   const maxKeyDownRms = Math.max(0, ...inp.corners.filter((c) => c.load === 'keyDown').map((c) => c.secondaryRmsA));
-  // Ampere-turn balance: primary current = secondary current x turns ratio (V_NL / V_mains); magnetising current neglected
+  // Ampere-turn balance: primary current = secondary current x turns ratio (V_NL / V_mains); magnetising current
+  // neglected
   // 0 only without usable mains, which evaluateSupply already reports as a fail (mains.values)
   const primaryReferredA = usablePositive(inp.mainsNominalV, 1)
     ? (noLoadVrms(inp.winding) / inp.mainsNominalV) * maxKeyDownRms * Math.sqrt(halves) : 0;
   const half = halves === 2 ? ' per half (centre-tapped)' : '';
   const result: WindingRecommendation = {
-    windingId: inp.winding.id, windingName: inp.winding.name, minimumRatedV, standardRatedV, thermalRmsA, tuneUpRmsA, peakA, ratedA, va, vaRatedV, checkTroughV,
+    windingId: inp.winding.id, windingName: inp.winding.name, minimumRatedV, standardRatedV, thermalRmsA, tuneUpRmsA,
+    peakA, ratedA, va, vaRatedV, checkTroughV,
     primaryReferredA, halves,
     reasoning: tuneUpSized
-      ? `${reasoningV} Current rating, sized for tune-up: a continuous carrier at high mains draws ${tuneUpRmsA.toFixed(2)} A RMS${half} (CW at duty ${d} would need ${thermalRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`
-      : `${reasoningV} Current rating: heating-equivalent RMS at high mains with CW duty ${d} is ${thermalRmsA.toFixed(2)} A${half} (continuous carrier ${tuneUpRmsA.toFixed(2)} A; repetitive peak ${peakA.toFixed(1)} A).`,
+      ? `${reasoningV} Current rating, sized for tune-up: a continuous carrier at high mains draws ` +
+        `${tuneUpRmsA.toFixed(2)} A RMS${half} (CW at duty ${d} would need ${thermalRmsA.toFixed(2)} A; repetitive ` +
+        `peak ${peakA.toFixed(1)} A).`
+      : `${reasoningV} Current rating: heating-equivalent RMS at high mains with CW duty ${d} is ` +
+        `${thermalRmsA.toFixed(2)} A${half} (continuous carrier ${tuneUpRmsA.toFixed(2)} A; repetitive peak ` +
+        `${peakA.toFixed(1)} A).`,
   };
   const findings: Finding[] = [];
   const src = 'supply.transformer-current' as const;
   if (inp.winding.ratedA > 0 && Number.isFinite(inp.winding.ratedA)) {
-    const base = { rule: 'transformer.current', subject: inp.winding.name, unit: 'A', source: src, limit: inp.winding.ratedA };
-    if (thermalRmsA > inp.winding.ratedA) findings.push({ ...base, value: thermalRmsA, severity: 'fail', message: `${thermalRmsA.toFixed(2)} A RMS in CW operation exceeds its ${inp.winding.ratedA} A rating; the transformer will overheat. Choose at least ${ratedA.toFixed(2)} A${half}.` });
-    else if (tuneUpRmsA > inp.winding.ratedA) findings.push({ ...base, value: tuneUpRmsA, severity: 'caution', message: `A continuous carrier draws ${tuneUpRmsA.toFixed(2)} A RMS, above its ${inp.winding.ratedA} A rating; keep tune-up short.` });
-    else findings.push({ ...base, value: thermalRmsA, severity: 'ok', message: `${thermalRmsA.toFixed(2)} A RMS in CW operation is within its ${inp.winding.ratedA} A rating.` });
+    const rated = inp.winding.ratedA;
+    const base = { rule: 'transformer.current', subject: inp.winding.name, unit: 'A', source: src, limit: rated };
+    const cw = `${thermalRmsA.toFixed(2)} A RMS in CW operation`;
+    if (thermalRmsA > rated) {
+      findings.push({
+        ...base, value: thermalRmsA, severity: 'fail',
+        message: `${cw} exceeds its ${rated} A rating; the transformer will overheat. Choose at least ` +
+          `${ratedA.toFixed(2)} A${half}.`,
+      });
+    } else if (tuneUpRmsA > rated) {
+      findings.push({
+        ...base, value: tuneUpRmsA, severity: 'caution',
+        message: `A continuous carrier draws ${tuneUpRmsA.toFixed(2)} A RMS, above its ${rated} A rating; ` +
+          'keep tune-up short.',
+      });
+    } else {
+      findings.push({ ...base, value: thermalRmsA, severity: 'ok', message: `${cw} is within its ${rated} A rating.` });
+    }
   } else {
-    findings.push({ severity: 'fail', rule: 'transformer.current', subject: inp.winding.name, value: null, limit: null, unit: 'A', source: 'design.input', message: `Enter the winding's rated current; without it the winding resistance and heating cannot be judged.` });
+    findings.push({
+      severity: 'fail', rule: 'transformer.current', subject: inp.winding.name, value: null, limit: null, unit: 'A',
+      source: 'design.input',
+      message: 'Enter the winding\'s rated current; without it the winding resistance and heating cannot be judged.',
+    });
   }
   const recommendation: Recommendation = {
     topic: 'transformer',
-    text: `${inp.winding.name}: ${standardRatedV !== null ? `${standardRatedV} V` : 'voltage: see reasoning'}${halves === 2 ? '-0-' + (standardRatedV ?? '') + ' V' : ''}, ${ratedA.toFixed(2)} A RMS${half} (${va.toFixed(0)} VA)`,
-    reasoning: result.reasoning + (checkTroughV !== null ? ` With ${standardRatedV} V the trough is ${checkTroughV.toFixed(2)} V.` : ''),
+    text: `${inp.winding.name}: ${standardRatedV !== null ? `${standardRatedV} V` : 'voltage: see reasoning'}` +
+      `${halves === 2 ? '-0-' + (standardRatedV ?? '') + ' V' : ''}, ${ratedA.toFixed(2)} A RMS${half} ` +
+      `(${va.toFixed(0)} VA)`,
+    reasoning: result.reasoning +
+      (checkTroughV !== null ? ` With ${standardRatedV} V the trough is ${checkTroughV.toFixed(2)} V.` : ''),
     source: 'supply.standard-values',
   };
   return { result, findings, recommendation, simulations };
 }
 
-export function transformerReport(t: Transformer, windings: WindingRecommendation[], vaList: readonly number[] = DEFAULT_TRANSFORMER_VA): { report: TransformerReport; findings: Finding[] } {
+export function transformerReport(
+  t: Transformer, windings: WindingRecommendation[], vaList: readonly number[] = DEFAULT_TRANSFORMER_VA,
+): { report: TransformerReport; findings: Finding[] } {
   const thermalVA = windings.reduce((s, w) => s + w.va, 0);
   // Same volts as the thermal VA (standard, else fitted): a winding with no standard voltage still counts
   const tuneUpVA = windings.reduce((s, w) => s + (w.vaRatedV ?? w.standardRatedV ?? 0) * w.tuneUpRmsA * w.halves, 0);
@@ -188,10 +222,27 @@ export function transformerReport(t: Transformer, windings: WindingRecommendatio
   const primaryA = windings.reduce((s, w) => s + w.primaryReferredA, 0);
   const findings: Finding[] = [];
   if (t.construction === 'toroidal' && (standardVA ?? thermalVA) >= TOROID_SOFT_START_VA) {
-    findings.push({ severity: 'caution', rule: 'transformer.inrush', subject: t.name, value: standardVA ?? thermalVA, limit: TOROID_SOFT_START_VA, unit: 'VA', source: 'supply.inrush', message: `A toroidal transformer of this size can draw a large inrush at switch-on and blow fuses or trip breakers; fit a soft-start (series NTC thermistor or a resistor shorted by a relay after a moment). Mains wiring must follow your local electrical code.` });
+    findings.push({
+      severity: 'caution', rule: 'transformer.inrush', subject: t.name, value: standardVA ?? thermalVA,
+      limit: TOROID_SOFT_START_VA, unit: 'VA', source: 'supply.inrush',
+      message: 'A toroidal transformer of this size can draw a large inrush at switch-on and blow fuses or trip ' +
+        'breakers; fit a soft-start (series NTC thermistor or a resistor shorted by a relay after a moment). Mains ' +
+        'wiring must follow your local electrical code.',
+    });
   }
   if (standardVA !== null && tuneUpVA > standardVA * 1.2) {
-    findings.push({ severity: 'caution', rule: 'transformer.tune-up', subject: t.name, value: tuneUpVA, limit: standardVA, unit: 'VA', source: 'supply.tune-up-duty', message: `A continuous carrier loads it to ${tuneUpVA.toFixed(0)} VA, well above the ${standardVA} VA sized for CW; keep tune-up carriers short.` });
+    findings.push({
+      severity: 'caution', rule: 'transformer.tune-up', subject: t.name, value: tuneUpVA, limit: standardVA, unit: 'VA',
+      source: 'supply.tune-up-duty',
+      message: `A continuous carrier loads it to ${tuneUpVA.toFixed(0)} VA, well above the ${standardVA} VA ` +
+        'sized for CW; keep tune-up carriers short.',
+    });
   }
-  return { report: { transformerId: t.id, name: t.name, construction: t.construction, windings, thermalVA, tuneUpVA, standardVA, primaryA }, findings };
+  return {
+    report: {
+      transformerId: t.id, name: t.name, construction: t.construction, windings, thermalVA, tuneUpVA, standardVA,
+      primaryA,
+    },
+    findings,
+  };
 }
