@@ -3,7 +3,7 @@
 import { MODES, type Project, type PerMode } from './model';
 import { computeBudget, type BudgetReport, type ComputedLoad } from './budget';
 import { sortFindings, type Finding } from './findings';
-import { designSupply, evaluateSupply, supplyInAir } from './power/evaluate-supply';
+import { designSupply, designedSourceRails, evaluateSupply, supplyInAir } from './power/evaluate-supply';
 import { withSimulationMemo } from './power/rectifier-sim';
 import type { SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
@@ -45,8 +45,11 @@ export interface EvaluateOptions {
   reference?: boolean;
 }
 
+/** What the fixed-point passes read of a supply report: its rails. */
+type PassSupply = Pick<SupplyReport, 'rails'>;
+
 /** Voltage a PA sees per rail: the supply's nominal-mains key-down trough when simulated, else the budget's nominal. */
-function paRailVoltages(project: Project, budget: BudgetReport, supply: SupplyReport | null): Record<string, number> {
+function paRailVoltages(project: Project, budget: BudgetReport, supply: PassSupply | null): Record<string, number> {
   const out: Record<string, number> = {};
   for (const s of project.stages) {
     if (!s.pa) continue;
@@ -71,7 +74,7 @@ function paRailVoltages(project: Project, budget: BudgetReport, supply: SupplyRe
  * while the PA is unkeyed, and the first key-down cycles see it) and its high-mains key-down mean; a battery's
  * full-charge voltage for both. Common practice, no published source (worst-case corners of the supply).
  */
-function paRailCorners(project: Project, supply: SupplyReport | null): { maxV: Record<string, number>; hotV: Record<string, number>; lowV: Record<string, number>; battery: Record<string, boolean> } {
+function paRailCorners(project: Project, supply: PassSupply | null): { maxV: Record<string, number>; hotV: Record<string, number>; lowV: Record<string, number>; battery: Record<string, boolean> } {
   const maxV: Record<string, number> = {};
   const hotV: Record<string, number> = {};
   const lowV: Record<string, number> = {};
@@ -152,7 +155,7 @@ const railOutputs = (b: BudgetReport): Record<string, PerMode> => Object.fromEnt
  * draws I_in = V_out I_out / (eta V_in), most at the lowest V_in; the budget otherwise assumes nominal x (1 - low
  * fraction), which ignores ripple and winding regulation. Source: energy balance (see power/regulator.ts).
  */
-function lowestInputV(project: Project, supply: SupplyReport | null): Record<string, number> {
+function lowestInputV(project: Project, supply: PassSupply | null): Record<string, number> {
   const out: Record<string, number> = {};
   const feedsSwitching = new Set(project.supply.rails.flatMap((r) => (r.kind === 'regulated' && r.regulator === 'switching' ? [r.parentId] : [])));
   for (const r of supply?.rails ?? []) {
@@ -175,10 +178,12 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   // a PA of fixed load draws more current there (I ~ V; load line P = k V^2 / R, REFERENCE-VALUES §8.1).
   // The map is a strong contraction (a volt more on the rail moves the current by tens of mA, which moves the
   // trough by tens of mV), so it settles in 2-4 passes.
-  let paRailV = paRailVoltages(project, computeBudget(project), null);
+  const bare = computeBudget(project);
+  let paRailV = paRailVoltages(project, bare, null);
   let hotV: Record<string, number> = {};
   let lowV: Record<string, number> = {};
-  let budget = computeBudget(project, computedLoads(project, paRailV));
+  // with rails the first pass computes it with the same voltages, so it is not computed here (but on the reference path)
+  let budget = project.supply.rails.length && !options.reference ? bare : computeBudget(project, computedLoads(project, paRailV));
   let supply: SupplyReport | null = null;
   let corners = paRailCorners(project, null);
   let last: { outputA: Record<string, PerMode>; highMainsOutputA: Record<string, PerMode> } | null = null;
@@ -188,10 +193,15 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
     // the passes read only these corners: the others, and the reservoir and winding searches, run once, below
     last = { outputA: railOutputs(budget), highMainsOutputA: railOutputs(budgetHigh) };
     const passOptions = { highMainsOutputA: last.highMainsOutputA, searches: false, cornerIds: LOOP_CORNERS };
-    supply = evaluateSupply(project, last.outputA, passOptions);
-    const next = paRailVoltages(project, budget, supply);
-    const nextLow = lowestInputV(project, supply);
-    corners = paRailCorners(project, supply);
+    // the passes read only the rectified and battery rails' reports: the design's, unless a number there is not
+    // finite (then the finished report, whose safety net zeroes it); the reference path finishes every pass
+    const designedPass = options.reference ? null : designSupply(project, last.outputA, passOptions);
+    const sourceRails = designedPass && designedSourceRails(designedPass);
+    const passSupply: PassSupply = sourceRails ? { rails: sourceRails }
+      : designedPass ? supplyInAir(designedPass) : evaluateSupply(project, last.outputA, passOptions);
+    const next = paRailVoltages(project, budget, passSupply);
+    const nextLow = lowestInputV(project, passSupply);
+    corners = paRailCorners(project, passSupply);
     const settled = close(next, paRailV) && close(nextLow, lowV) && close(corners.hotV, hotV);
     paRailV = next;
     lowV = nextLow;

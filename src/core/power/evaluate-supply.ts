@@ -7,6 +7,7 @@ import { MODES, MODE_LABELS } from '../model';
 import type { BatteryRailReport, CornerSpec, PrimaryReport, RailReport, SupplyReport, TransformerReport, WindingRecommendation } from './report-types';
 import { DEFAULT_TRANSMIT_FRACTION, WORST_VOLTAGE_ID, cornerCurrent, cornerSpecs, mainsFactor, safeDuty } from './corners';
 import { evaluateRectifiedRail } from './rectified-rail';
+import { resultScope } from './rectifier-sim';
 import type { RailVoltage } from './regulated-rail';
 import { evaluateRegulatedRail } from './regulated-rail';
 import { regulatorOutputV } from './regulator';
@@ -119,7 +120,7 @@ export function designSupply(projectIn: Project, railOutputA: Record<string, Per
   // how each rail falls after switch-off (null: a battery holds it up), for the bleeders of the rails it feeds
   const falls = new Map<string, FallTime | null>();
   // inputs outside their field definitions: a fail finding each, and the item (with its dependants) is left out
-  const inputs = checkSupplyInputs(project.supply);
+  const inputs = supplyInputs(project.supply);
   const duty = safeDuty(project.keyingDuty);
   const txFraction = options.transmitFraction !== undefined && Number.isFinite(options.transmitFraction) ? Math.min(1, Math.max(0, options.transmitFraction)) : DEFAULT_TRANSMIT_FRACTION;
   // Usable, not merely > 0: the primary current divides by the mains voltage (5e-324 V made it Infinity)
@@ -237,6 +238,29 @@ export function designSupply(projectIn: Project, railOutputA: Record<string, Per
     project, railOutputA, options, choices, inputs, duty, txFraction, mainsOk, specs, globalFindings, noBudget, undesigned,
     reports, voltageAt, maxV, rootBattery, falls, windingRecs, usedWindings, joints, simulations, allConverged,
   };
+}
+
+/** checkSupplyInputs once per supply within one evaluation (every fixed-point pass checks the same inputs). */
+function supplyInputs(supply: Project['supply']): ReturnType<typeof checkSupplyInputs> {
+  const memo = resultScope<{ of: Project['supply']; inputs: ReturnType<typeof checkSupplyInputs> }>('supply-inputs');
+  const held = memo?.get('last');
+  if (held && held.of === supply) return held.inputs;
+  const inputs = checkSupplyInputs(supply);
+  memo?.set('last', { of: supply, inputs });
+  return inputs;
+}
+
+/**
+ * The design's rectified and battery rail reports as the finished report carries them, for a caller that reads only
+ * their corners and voltages (evaluate()'s fixed-point passes); null when a number in them is not finite (the finished
+ * report's safety net would change it to 0): finish the design with supplyInAir then.
+ */
+export function designedSourceRails(d: DesignedSupply): RailReport[] | null {
+  const out = d.project.supply.rails.flatMap((r) => {
+    const rep = d.reports.get(r.id);
+    return rep && (rep.kind === 'rectified' || rep.kind === 'battery') ? [rep] : [];
+  });
+  return allFinite(out) ? out : null;
 }
 
 /** The designed supply finished with its parts in air at insideC (°C) when the enclosure's rise is known, else the
