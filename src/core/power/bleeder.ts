@@ -4,11 +4,17 @@ import type { BleederReport, Recommendation } from './report-types';
 import { E12_STEPS, prevInSeries } from './standard-values';
 import { quotient, usablePositive } from '../numeric';
 
-/** Residual-voltage threshold (V d.c.). Source: IEC 60204-1 residual voltage <= 60 V within 5 s (ref §10 [C2]); ES1 60 V d.c. in IEC 62368-1 (ref §10 [M]). */
+/**
+ * Residual-voltage threshold (V d.c.). Source: IEC 60204-1 residual voltage <= 60 V within 5 s (ref §10 [C2]); ES1 60 V
+ * d.c. in IEC 62368-1 (ref §10 [M]).
+ */
 export const SAFE_DC_V = 60;
 /** Time allowed to fall to the threshold (s). Source: IEC 60204-1, 5 s after disconnection (ref §10 [C2]). */
 export const SAFE_TIME_S = 5;
-/** For rails already below 60 V: time constant we suggest so the rail is low within a minute. Common practice, no published source. */
+/**
+ * For rails already below 60 V: time constant we suggest so the rail is low within a minute. Common practice, no
+ * published source.
+ */
 export const LOW_VOLTAGE_TAU_S = 22;
 /** For rails already below 60 V: the voltage their discharge time is measured to (V), low enough that a dropped
  *  tool no longer sparks. Common practice, no published source (the reference values' low-voltage example uses it). */
@@ -16,7 +22,9 @@ export const LOW_SAFE_V = 5;
 /** A bleeder should dissipate at most this fraction of its power rating. Common practice, no published source. */
 export const BLEEDER_DERATING = 0.5;
 
-/** Smallest capacitance a bleeder is sized for, F. Common practice, no published source: below 1 nF nothing to bleed. */
+/**
+ * Smallest capacitance a bleeder is sized for, F. Common practice, no published source: below 1 nF nothing to bleed.
+ */
 const MIN_RESERVOIR_F = 1e-9;
 
 const SOURCE = 'supply.bleeder' as const;
@@ -36,7 +44,9 @@ export function maxBleederOhm(capacitanceF: number, startV: number, safeV: numbe
   return Number.isFinite(r) ? r : null;
 }
 
-export function bleederReport(capacitanceF: number, startV: number, esrOhm: number, fittedOhm: number | null, ratedW: number | null = null): BleederReport {
+export function bleederReport(
+  capacitanceF: number, startV: number, esrOhm: number, fittedOhm: number | null, ratedW: number | null = null,
+): BleederReport {
   const v0 = Number.isFinite(startV) ? Math.max(0, startV) : 0;
   const c = Number.isFinite(capacitanceF) ? Math.max(0, capacitanceF) : 0;
   // Source: stored energy of a capacitor, E = C V^2 / 2 (ref §10 low-voltage example)
@@ -48,12 +58,17 @@ export function bleederReport(capacitanceF: number, startV: number, esrOhm: numb
   if (high) {
     const rMax = maxBleederOhm(c, v0, SAFE_DC_V, SAFE_TIME_S);
     suggestedOhm = rMax ? prevInSeries(E12_STEPS, rMax) : null;
-    reasoning = `The reservoir charges to ${v0.toFixed(1)} V (no load, high mains). To fall below ${SAFE_DC_V} V within ${SAFE_TIME_S} s the bleeder must be at most ${rMax ? (rMax / 1000).toFixed(2) + ' kΩ' : '?'}; the next lower E12 value is suggested.`;
+    const most = rMax ? (rMax / 1000).toFixed(2) + ' kΩ' : '?';
+    reasoning = `The reservoir charges to ${v0.toFixed(1)} V (no load, high mains). To fall below ${SAFE_DC_V} V ` +
+      `within ${SAFE_TIME_S} s the bleeder must be at most ${most}; the next lower E12 value is suggested.`;
   } else {
-    // Common practice, no published source: a time constant of ~22 s leaves a low-voltage rail near zero within a couple of minutes
+    // Common practice, no published source: a time constant of ~22 s leaves a low-voltage rail near zero within a
+    // couple of minutes
     const r = quotient(LOW_VOLTAGE_TAU_S, c, MIN_RESERVOIR_F);
     suggestedOhm = r ? prevInSeries(E12_STEPS, r) : null;
-    reasoning = `At ${v0.toFixed(1)} V the rail is already below the ${SAFE_DC_V} V d.c. threshold, but it stores ${storedJ.toFixed(1)} J and can drive about ${shortCircuitA.toFixed(0)} A into a short (a dropped tool sparks and burns). A bleeder with a time constant of about ${LOW_VOLTAGE_TAU_S} s is suggested.`;
+    reasoning = `At ${v0.toFixed(1)} V the rail is already below the ${SAFE_DC_V} V d.c. threshold, but it stores ` +
+      `${storedJ.toFixed(1)} J and can drive about ${shortCircuitA.toFixed(0)} A into a short (a dropped tool sparks ` +
+      `and burns). A bleeder with a time constant of about ${LOW_VOLTAGE_TAU_S} s is suggested.`;
   }
   // Source: Joule heating P = V^2 / R at the highest voltage (reference values §10, P = V0^2 / R)
   const suggestedW = suggestedOhm ? (v0 * v0) / suggestedOhm : null;
@@ -65,7 +80,10 @@ export function bleederReport(capacitanceF: number, startV: number, esrOhm: numb
   const fittedTimeS = fitted !== null ? (v0 > safeV ? dischargeTimeS(fitted, c, v0, safeV) : 0) : null;
   const fittedW = fitted !== null ? (v0 * v0) / fitted : null;
   const rated = ratedW !== null && ratedW > 0 && Number.isFinite(ratedW) ? ratedW : null;
-  return { startV: v0, thresholdV: SAFE_DC_V, allowedS: SAFE_TIME_S, safeV, safeSource, fittedOhm, fittedTimeS, fittedW, ratedW: rated, suggestedOhm, suggestedW, storedJ, shortCircuitA, reasoning };
+  return {
+    startV: v0, thresholdV: SAFE_DC_V, allowedS: SAFE_TIME_S, safeV, safeSource, fittedOhm, fittedTimeS, fittedW,
+    ratedW: rated, suggestedOhm, suggestedW, storedJ, shortCircuitA, reasoning,
+  };
 }
 
 export function bleederFindings(railName: string, b: BleederReport): Finding[] {
@@ -73,15 +91,40 @@ export function bleederFindings(railName: string, b: BleederReport): Finding[] {
 }
 
 /** The fitted bleeder's dissipation at the highest voltage against its rating derated to BLEEDER_DERATING. */
-export function bleederPowerFindings(railName: string, b: Pick<BleederReport, 'fittedW' | 'startV' | 'ratedW'>, where = 'no load, high mains'): Finding[] {
+export function bleederPowerFindings(
+  railName: string, b: Pick<BleederReport, 'fittedW' | 'startV' | 'ratedW'>, where = 'no load, high mains',
+): Finding[] {
   if (b.fittedW === null) return [];
-  const base = { rule: 'bleeder.power', subject: `${railName} bleeder`, value: b.fittedW, unit: 'W', source: 'supply.bleeder-power' as const };
+  const base = {
+    rule: 'bleeder.power', subject: `${railName} bleeder`, value: b.fittedW, unit: 'W',
+    source: 'supply.bleeder-power' as const,
+  };
+  const use = `Use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.`;
+  const share = `${Math.round(BLEEDER_DERATING * 100)} %`;
   const p = `${b.fittedW.toFixed(2)} W at ${b.startV.toFixed(1)} V (${where})`;
-  if (b.ratedW === null) return [{ ...base, limit: null, severity: 'caution', message: `The bleeder dissipates ${p}; its power rating is not stated: use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];
+  if (b.ratedW === null) {
+    return [{
+      ...base, limit: null, severity: 'caution',
+      message: `The bleeder dissipates ${p}; its power rating is not stated: ${use.replace('Use', 'use')}`,
+    }];
+  }
   const limit = b.ratedW * BLEEDER_DERATING;
-  if (b.fittedW > b.ratedW) return [{ ...base, limit, severity: 'fail', message: `The bleeder dissipates ${p}, more than its ${b.ratedW} W rating: it will overheat. Use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];
-  if (b.fittedW > limit) return [{ ...base, limit, severity: 'caution', message: `The bleeder dissipates ${p}, over ${Math.round(BLEEDER_DERATING * 100)} % of its ${b.ratedW} W rating: it runs hot. Use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.` }];
-  return [{ ...base, limit, severity: 'ok', message: `The bleeder dissipates ${p}, within ${Math.round(BLEEDER_DERATING * 100)} % of its ${b.ratedW} W rating.` }];
+  if (b.fittedW > b.ratedW) {
+    return [{
+      ...base, limit, severity: 'fail',
+      message: `The bleeder dissipates ${p}, more than its ${b.ratedW} W rating: it will overheat. ${use}`,
+    }];
+  }
+  if (b.fittedW > limit) {
+    return [{
+      ...base, limit, severity: 'caution',
+      message: `The bleeder dissipates ${p}, over ${share} of its ${b.ratedW} W rating: it runs hot. ${use}`,
+    }];
+  }
+  return [{
+    ...base, limit, severity: 'ok',
+    message: `The bleeder dissipates ${p}, within ${share} of its ${b.ratedW} W rating.`,
+  }];
 }
 
 function dischargeFindings(railName: string, b: BleederReport): Finding[] {
@@ -90,15 +133,32 @@ function dischargeFindings(railName: string, b: BleederReport): Finding[] {
     const t = b.fittedTimeS !== null
       ? ` The fitted bleeder brings it below ${b.safeV} V in ${b.fittedTimeS.toFixed(1)} s.`
       : ` No bleeder is fitted: it stays charged after switch-off.`;
-    return [{ ...base, severity: 'ok', value: b.startV, limit: b.thresholdV, unit: 'V', message: `At most ${b.startV.toFixed(1)} V, below the ${b.thresholdV} V d.c. shock threshold; the ${b.storedJ.toFixed(1)} J stored can still spark and burn, so discharge before working on it.${t}` }];
+    return [{
+      ...base, severity: 'ok', value: b.startV, limit: b.thresholdV, unit: 'V',
+      message: `At most ${b.startV.toFixed(1)} V, below the ${b.thresholdV} V d.c. shock threshold; the ` +
+        `${b.storedJ.toFixed(1)} J stored can still spark and burn, so discharge before working on it.${t}`,
+    }];
   }
   if (b.fittedOhm === null || b.fittedTimeS === null) {
-    return [{ ...base, severity: 'fail', value: b.startV, limit: b.thresholdV, unit: 'V', message: `The reservoir holds ${b.startV.toFixed(0)} V after switch-off and has no bleeder; fit one (suggested ${b.suggestedOhm ? (b.suggestedOhm / 1000).toPrecision(2) + ' kΩ' : 'see recommendation'}) and always check with a meter. Follow your local electrical code.` }];
+    const suggested = b.suggestedOhm ? (b.suggestedOhm / 1000).toPrecision(2) + ' kΩ' : 'see recommendation';
+    return [{
+      ...base, severity: 'fail', value: b.startV, limit: b.thresholdV, unit: 'V',
+      message: `The reservoir holds ${b.startV.toFixed(0)} V after switch-off and has no bleeder; fit one ` +
+        `(suggested ${suggested}) and always check with a meter. Follow your local electrical code.`,
+    }];
   }
   if (b.fittedTimeS > b.allowedS) {
-    return [{ ...base, severity: 'fail', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `The fitted bleeder takes ${b.fittedTimeS.toFixed(1)} s to bring the reservoir below ${b.thresholdV} V; ${b.allowedS} s is the usual limit. Use a smaller resistor.` }];
+    return [{
+      ...base, severity: 'fail', value: b.fittedTimeS, limit: b.allowedS, unit: 's',
+      message: `The fitted bleeder takes ${b.fittedTimeS.toFixed(1)} s to bring the reservoir below ` +
+        `${b.thresholdV} V; ${b.allowedS} s is the usual limit. Use a smaller resistor.`,
+    }];
   }
-  return [{ ...base, severity: 'ok', value: b.fittedTimeS, limit: b.allowedS, unit: 's', message: `The bleeder brings the reservoir below ${b.thresholdV} V in ${b.fittedTimeS.toFixed(1)} s. Still check with a meter before touching.` }];
+  return [{
+    ...base, severity: 'ok', value: b.fittedTimeS, limit: b.allowedS, unit: 's',
+    message: `The bleeder brings the reservoir below ${b.thresholdV} V in ${b.fittedTimeS.toFixed(1)} s. Still check ` +
+      'with a meter before touching.',
+  }];
 }
 
 function ohmWords(r: number): string {
@@ -117,7 +177,8 @@ export function bleederRecommendation(b: BleederReport): Recommendation | null {
   const suggested = `${ohmWords(b.suggestedOhm)} bleeder, ${ratingW} W rating or more`;
   const heat = `It dissipates ${w.toFixed(2)} W at ${b.startV.toFixed(1)} V; a part rated for ` +
     `${Math.round(1 / BLEEDER_DERATING)} x that runs cool.`;
-  const meets = b.fittedOhm !== null && b.fittedTimeS !== null && (b.startV <= b.thresholdV || b.fittedTimeS <= b.allowedS);
+  const meets = b.fittedOhm !== null && b.fittedTimeS !== null
+    && (b.startV <= b.thresholdV || b.fittedTimeS <= b.allowedS);
   if (meets) {
     return {
       topic: 'bleeder',
