@@ -27,26 +27,32 @@ export interface DrainClamp {
  * the supply, v = Vdd + (Vpk − Vdd) cos θ, so the clamp conducts while cos θ > (Vc − Vdd)/(Vpk − Vdd), a share θc/π of
  * the cycle; the current it diverts is at most the stage's peak device current, so P ≤ Vc Ipk θc/π (an upper
  * estimate: the real current is smaller at the edges of the interval; a class-E drain is not a cosine, an
- * approximation).
+ * approximation). Energy balance (textbook): the clamp cannot take more than the stage draws from its supply at that
+ * load, so P is also at most that DC input (maxW).
  */
-export function clampAt(clampV: number, supplyV: number, peakV: number, peakA: number): ClampPoint {
+export function clampAt(clampV: number, supplyV: number, peakV: number, peakA: number, maxW = Infinity): ClampPoint {
   const clampedPeakV = Math.min(peakV, clampV);
   if (!(peakV > clampV)) return { unclampedPeakV: peakV, clampedPeakV, conductionFraction: 0, dissipationW: 0 };
   const swing = peakV - supplyV;
   const c = swing > 0 ? (clampV - supplyV) / swing : -1;
   const thetaC = Math.acos(Math.max(-1, Math.min(1, c)));
   const conductionFraction = thetaC / Math.PI;
-  return { unclampedPeakV: peakV, clampedPeakV, conductionFraction, dissipationW: clampV * peakA * conductionFraction };
+  return { unclampedPeakV: peakV, clampedPeakV, conductionFraction, dissipationW: Math.min(clampV * peakA * conductionFraction, maxW) };
 }
 
 /** The fitted clamp at the design load and at the worst drain peak of the circle (null when none is fitted). */
-export function drainClamp(clampV: number | null | undefined, s: PaSwrStress, design: { peakV: number; peakA: number; supplyV: number }): DrainClamp | null {
+export function drainClamp(
+  clampV: number | null | undefined, s: PaSwrStress, design: { peakV: number; peakA: number; supplyV: number; dcInputW: number },
+): DrainClamp | null {
   if (clampV === null || clampV === undefined || !(clampV > 0)) return null;
   const w = s.worstDrainPeak;
+  // DC input at the worst load: all of it leaves as output or heat in the devices (energy balance)
+  const at = s.points.find((p) => p.phaseDeg === w.phaseDeg);
+  const worstDcW = at ? at.outputW + at.dissipationW : Infinity;
   return {
     clampV,
-    design: clampAt(clampV, design.supplyV, design.peakV, design.peakA),
-    worst: clampAt(clampV, design.supplyV, w.value, s.worstPeakCurrent.value),
+    design: clampAt(clampV, design.supplyV, design.peakV, design.peakA, design.dcInputW),
+    worst: clampAt(clampV, design.supplyV, w.value, s.worstPeakCurrent.value, worstDcW),
     worstLoad: w,
   };
 }

@@ -264,7 +264,9 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     findings.push({ severity: 'caution', rule: 'pa.swr-current', subject, value: swrCurrent.currentA, limit: keyDownCurrentA, unit: 'A', source: 'pa.waveform-dc',
       message: `Into the worst load of SWR ${swr.swr} (${describeLoad(swrCurrent.at)}) the key-down current rises to ${swrCurrent.currentA.toFixed(2)} A, above the ${keyDownCurrentA.toFixed(2)} A the supply budget carries for the matched load; size the supply and its fuse for it, or fold the drive back at high SWR.` });
   }
-  const clamp = drainClamp(pa.drainClampV, swr, { peakV: peakDrainV, peakA: opHot.peakDeviceA, supplyV: maxRailV });
+  const clamp = drainClamp(pa.drainClampV, swr, {
+    peakV: peakDrainV, peakA: opHot.peakDeviceA, supplyV: maxRailV, dcInputW: hotDcW + pa.biasIdleMaxA * hotRailV,
+  });
   if (clamp) findings.push(...clampFindings(clamp, pa.deviceVdsMaxV, maxRailV, swr.swr, subject));
   findings.push(...swrFindings(pa, swr, {
     clampV: clamp?.clampV ?? null, subject, atMax, ambientC: airC, keyingDuty: project.keyingDuty, matchedOutputW: opHot.outputW,
