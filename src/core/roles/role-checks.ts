@@ -57,12 +57,16 @@ export function groupOf(role: DesignRole, part: Pick<Part, 'category' | 'ratings
   return null;
 }
 
-/** True when the part is of the role's category and meets every rule it states, with every required rating stated. */
+/**
+ * True when the part is of the role's category and meets every rule it states, with every required rating stated and
+ * each value a grouped role asks for stated (a generic "values per the RF page" part is no candidate: it cannot be
+ * checked).
+ */
 export function partMeetsRole(part: Pick<Part, 'category' | 'ratings'>, role: DesignRole): boolean {
   if (categoryOf(part.category).id !== role.category) return false;
   return role.rules.every((r) => {
     const o = judgeRule(r, part);
-    return o.severity === 'ok' || (o.severity === 'missing' && !r.required);
+    return o.severity === 'ok' || (o.severity === 'missing' && !r.required && r.op !== 'eachOf');
   });
 }
 

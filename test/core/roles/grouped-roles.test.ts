@@ -83,6 +83,8 @@ describe('grouped roles: one line per value', () => {
     // a line with no designators is named by its id
     const noRefs = checkRoles({ parts: [generic], bom: [{ ...line('b7', 'g', 3), refs: '' }] }, [fuses]);
     expect(noRefs.findings.find((f) => f.rule === 'role.unstated')!.message).toMatch(/^The line b7 \(fuses per the supply page\) does not state rating, so it cannot be checked/);
+    // nor is the generic part offered as a candidate that meets the role
+    expect(partMeetsRole(generic, fuses)).toBe(false);
     // a line stating its value gets no such caution
     const stated = checkRoles({ parts: [fuse('f1', 1)], bom: [line('b1', 'f1', 1)] }, [fuses]);
     expect(stated.findings.some((f) => f.rule === 'role.unstated')).toBe(false);
