@@ -175,8 +175,8 @@ export function bleederRecommendation(b: BleederReport): Recommendation | null {
   const w = b.suggestedW ?? 0;
   const ratingW = (w / BLEEDER_DERATING).toFixed(2);
   const suggested = `${ohmWords(b.suggestedOhm)} bleeder, ${ratingW} W rating or more`;
-  const heat = `${ohmWords(b.suggestedOhm)} dissipates ${w.toFixed(2)} W at ${b.startV.toFixed(1)} V; a part rated for ` +
-    `${Math.round(1 / BLEEDER_DERATING)} x that runs cool.`;
+  const heat = `${ohmWords(b.suggestedOhm)} dissipates ${w.toFixed(2)} W at ${b.startV.toFixed(1)} V; a part ` +
+    `rated for ${Math.round(1 / BLEEDER_DERATING)} x that runs cool.`;
   const meets = b.fittedOhm !== null && b.fittedTimeS !== null
     && (b.startV <= b.thresholdV || b.fittedTimeS <= b.allowedS);
   if (meets) {
