@@ -18,10 +18,10 @@ const COSS_F = 150e-12;
 const textOf = async (p: Project, name: string) =>
   pagesText(writeTemp(await buildPack(p, evaluationFor(p), { paper: 'a4', dataDate: DATE, part: 'builder' }), name)).join('\n').replace(/\s+/g, ' ');
 
-/** The portable demo matched by a network to 12.5 Ω at the drain, its device's output capacitance entered. */
+/** The portable demo matched by a network to 12.5 Ω at the drain, its device's output capacitance and a 56 V clamp entered. */
 const networked: Project = {
   ...portable20m,
-  stages: portable20m.stages.map((s) => (s.pa ? { ...s, pa: { ...s.pa, networkLoadOhm: NETWORK_OHM, deviceCossF: COSS_F } } : s)),
+  stages: portable20m.stages.map((s) => (s.pa ? { ...s, pa: { ...s.pa, networkLoadOhm: NETWORK_OHM, deviceCossF: COSS_F, drainClampV: 56 } } : s)),
 };
 
 describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
@@ -59,5 +59,9 @@ describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
     expect(m).not.toBeNull();
     const handF = 0.1836 / (2 * Math.PI * 14.06e6 * NETWORK_OHM);
     expect(Math.abs(Number(m![1]) * 1e-12 - handF) / handF).toBeLessThan(0.01);
+  });
+
+  it('portable with a clamp: the pack names the fitted clamp and what it does at the design and the worst load', () => {
+    expect(net).toMatch(/Drain clamp 56 V fitted; design load: [^;]+; worst load \([^)]*reflection phase \d+°\)\)?: /);
   });
 });
