@@ -319,10 +319,10 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
             <th class="num">Frequency</th>
             <th class="num">At PA</th>
             <th class="num">Filter</th>
-            <th class="num">Filter, worst tolerances</th>
+            <th class="num">Filter,<br />worst tolerances</th>
             <th class="num">Predicted</th>
             <th class="num">Margin</th>
-            <th class="num">Margin, worst tolerances</th>
+            <th class="num">Margin,<br />worst tolerances</th>
             <th>Check</th>
           </tr>
         </thead>
