@@ -24,12 +24,25 @@ const networked: Project = {
   stages: portable20m.stages.map((s) => (s.pa ? { ...s, pa: { ...s.pa, networkLoadOhm: NETWORK_OHM, deviceCossF: COSS_F, drainClampV: 56 } } : s)),
 };
 
+/** The club's push-pull stage matched by a network (no transformer): the pi network is the balanced form. */
+const balanced: Project = {
+  ...club30m,
+  stages: club30m.stages.map((s) => (s.pa ? { ...s, pa: { ...s.pa, turnsRatio: null, networkLoadOhm: 25, outputCoreId: null, outputPrimaryTurns: null } } : s)),
+};
+
 describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
   let club = '';
   let net = '';
+  let bal = '';
   beforeAll(async () => {
     club = await textOf(club30m, 'club.pdf');
     net = await textOf(networked, 'net.pdf');
+    bal = await textOf(balanced, 'balanced.pdf');
+  });
+
+  it('club matched by a network: the balanced pi, its series inductance split into two legs', () => {
+    expect(bal).toMatch(/Pi network 25 Ω drain to drain to 50 Ω, loaded Q [\d.]+; balanced: the series inductance split into two legs/);
+    expect(bal).toMatch(/Series inductor [\d.]+ [nµ]H ideal \([\d.]+ [nµ]H a leg\)/);
   });
 
   it('club: the output transformer on its catalog core, its flux against the limit and the winding fit', () => {
