@@ -182,8 +182,9 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   let paRailV = paRailVoltages(project, bare, null);
   let hotV: Record<string, number> = {};
   let lowV: Record<string, number> = {};
-  // with rails the first pass computes it with the same voltages, so it is not computed here (but on the reference path)
-  let budget = project.supply.rails.length && !options.reference ? bare : computeBudget(project, computedLoads(project, paRailV));
+  // with rails the first pass computes it with the same voltages: not here (but on the reference path)
+  let budget = project.supply.rails.length && !options.reference
+    ? bare : computeBudget(project, computedLoads(project, paRailV));
   let supply: SupplyReport | null = null;
   let corners = paRailCorners(project, null);
   let last: { outputA: Record<string, PerMode>; highMainsOutputA: Record<string, PerMode> } | null = null;

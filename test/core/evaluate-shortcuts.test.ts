@@ -14,15 +14,19 @@ const asJson = (x: unknown) => JSON.parse(JSON.stringify(x)) as unknown;
 function template(key: (typeof TEMPLATE_KEYS)[number], mainsKey: string): Project {
   let n = 0;
   const mains = TEMPLATE_INFO[key].mains ? MAINS_PRESETS[mainsKey]! : null;
-  return projectFromTemplate(key, { name: `t ${key}`, frequencyHz: 7.03e6, targetPowerW: 20, mains }, 'prj-t', (p) => `${p}-${n++}`);
+  const input = { name: `t ${key} ${mainsKey}`, frequencyHz: 7.03e6, targetPowerW: 20, mains };
+  return projectFromTemplate(key, input, 'prj-t', (p) => `${p}-${n++}`);
 }
 
 // a small closed box (its air well above the room) and a roomy one (a few kelvin): the inside-air path runs
-const boxed = (p: Project, areaM2: number): Project => ({ ...p, name: `${p.name} in ${areaM2} m²`, supply: { ...p.supply, enclosureAreaM2: areaM2, enclosureUWPerM2K: 5.5 } });
+const boxed = (p: Project, areaM2: number): Project => ({
+  ...p, name: `${p.name} in ${areaM2} m²`, supply: { ...p.supply, enclosureAreaM2: areaM2, enclosureUWPerM2K: 5.5 },
+});
 
 const BASES: Project[] = [
   ...DEMO_PROJECTS,
-  ...TEMPLATE_KEYS.flatMap((k) => (TEMPLATE_INFO[k].mains ? [template(k, '230-50'), template(k, '120-60')] : [template(k, '230-50')])),
+  ...TEMPLATE_KEYS.flatMap((k) => (TEMPLATE_INFO[k].mains
+    ? [template(k, '230-50'), template(k, '120-60')] : [template(k, '230-50')])),
 ];
 const CASES = BASES.flatMap((p) => [p, boxed(p, 0.1), boxed(p, 10)]);
 

@@ -114,7 +114,9 @@ function budgetLookup(railOutputA: Record<string, PerMode>, noBudget: Set<string
   };
 }
 
-export function designSupply(projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): DesignedSupply {
+export function designSupply(
+  projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {},
+): DesignedSupply {
   const project = projectIn;
   const choices = supplyChoices(project.supply);
   // how each rail falls after switch-off (null: a battery holds it up), for the bleeders of the rails it feeds
@@ -235,8 +237,9 @@ export function designSupply(projectIn: Project, railOutputA: Record<string, Per
     reports.set(b.id, report);
   }
   return {
-    project, railOutputA, options, choices, inputs, duty, txFraction, mainsOk, specs, globalFindings, noBudget, undesigned,
-    reports, voltageAt, maxV, rootBattery, falls, windingRecs, usedWindings, joints, simulations, allConverged,
+    project, railOutputA, options, choices, inputs, duty, txFraction, mainsOk, specs, globalFindings, noBudget,
+    undesigned, reports, voltageAt, maxV, rootBattery, falls, windingRecs, usedWindings, joints, simulations,
+    allConverged,
   };
 }
 
@@ -263,10 +266,13 @@ export function designedSourceRails(d: DesignedSupply): RailReport[] | null {
   return allFinite(out) ? out : null;
 }
 
-/** The designed supply finished with its parts in air at insideC (°C) when the enclosure's rise is known, else the
- *  room: the rectifiers' thermal checks, the regulated rails, transformers and primary. The design is left as it was. */
+/**
+ * The designed supply finished with its parts in air at insideC (°C) when the enclosure's rise is known, else the
+ * room: the rectifiers' thermal checks, the regulated rails, transformers and primary. The design is left as it was.
+ */
 export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
-  const { project, options, choices, inputs, duty, txFraction, mainsOk, specs, undesigned, windingRecs, usedWindings, joints, simulations, allConverged } = d;
+  const { project, options, choices, inputs, duty, txFraction, mainsOk, specs, undesigned } = d;
+  const { windingRecs, usedWindings, joints, simulations, allConverged } = d;
   const rails = project.supply.rails;
   // the thermal checks of parts in the box use the air inside it when the enclosure's rise is known
   const inside = insideC !== undefined && Number.isFinite(insideC);
@@ -286,7 +292,8 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
     if (report?.kind !== 'rectified') continue;
     const loss = report.rectifierLoss;
     const bt = bridgeThermal({ railName: rail.name, thermalW: loss.thermalW, tuneUpW: loss.tuneUpW, basis: choices.transformerSizing, mount: rail.bridgeMount, freeAirKPerW: rail.bridgeFreeAirKPerW, ambientC: airC, inside });
-    reports.set(rail.id, { ...report, bridgeThermal: bt, findings: sortFindings([...report.findings, ...bridgeThermalFindings(rail.name, bt)]) });
+    const findings = sortFindings([...report.findings, ...bridgeThermalFindings(rail.name, bt)]);
+    reports.set(rail.id, { ...report, bridgeThermal: bt, findings });
   }
 
   // Regulated rails in dependency order (a rail whose parent is missing or in a loop gets 0 V input).
