@@ -9,6 +9,7 @@ import { isSourceKey, sourceText } from '../core/sources/registry';
 import { GOVERNS, RULE_SETS } from '../core/rules/rule-set';
 import { roleLines } from './roles-text';
 import { inrushSummary } from '../core/power/inrush';
+import { STEADY_INPUT_WORDS, steadyInput } from '../core/power/ripple-rejection';
 
 export const EVALUATION_FORMAT = 'rigwright-evaluation';
 export const EVALUATION_FORMAT_VERSION = 1;
@@ -102,6 +103,7 @@ function supplyLines(report: EvaluationReport): string[] {
       out.push(`  ${r.railName}: ${formatValue(r.outputV, 'V')}, ${formatValue(r.thermalDissipationW, 'W')} in CW use${tj}`);
       const rc = r.corners.find((c) => c.id === r.worstRippleCornerId);
       if (rc && rc.outputRipplePpV !== null) out.push(`    ripple ${formatValue(rc.inputRipplePpV, 'V')} p-p in, ${formatValue(rc.outputRipplePpV, 'V')} p-p out (${r.rippleRejectionDb} dB, ${rc.label})${r.rippleTargetV !== null ? `, target ${formatValue(r.rippleTargetV, 'V')}` : ''}`);
+      else if (steadyInput(r.corners)) out.push(`    ${STEADY_INPUT_WORDS}`);
       else out.push(`    ripple at the output unknown: ripple rejection not stated`);
       const ob = r.bleeder;
       if (ob) out.push(ob.fittedTimeS !== null ? `    output below ${formatValue(ob.safeV, 'V')} within ${formatValue(ob.fittedTimeS, 's')} after switch-off (upper bound)${ob.fittedW !== null ? `, bleeder ${formatValue(ob.fittedW, 'W')}` : ''}` : `    output may stay charged: ${ob.why}${ob.suggestedOhm !== null ? `; suggested bleeder ${formatValue(ob.suggestedOhm, 'Ω')}` : ''}`);

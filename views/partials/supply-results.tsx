@@ -14,6 +14,7 @@ import { rectifierPlotData, rectifierPlotSvg } from '../plots/rectifier-plot';
 import { KeyingTransientBlock, LoadModelDetails } from '../components/supply-keying';
 import { PrimaryFaultTable, WindingFuseTable } from '../components/supply-faults';
 import { inrushSummary } from '../../src/core/power/inrush';
+import { STEADY_INPUT_WORDS, steadyInput } from '../../src/core/power/ripple-rejection';
 import { BleederLine } from '../components/supply-bleeder';
 import { BridgeLine, RegulatedBleederLine, primaryTypeWords, sizedForTuneUp } from '../components/supply-thermal';
 import { HeatCard } from '../components/supply-heat';
@@ -166,7 +167,10 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
             <td class="num">{fv(c.dissipationW, 'W')}</td>
             <td class="num">
               {fv(c.inputRipplePpV, 'V')}
-              <span class="sub">{c.outputRipplePpV !== null ? fv(c.outputRipplePpV, 'V') : 'rejection not stated'}{c.inDropout ? ' (dropout)' : ''}</span>
+              <span class="sub">
+                {c.outputRipplePpV !== null ? fv(c.outputRipplePpV, 'V') : c.inputRipplePpV === 0 ? fv(0, 'V') : 'rejection not stated'}
+                {c.inDropout ? ' (dropout)' : ''}
+              </span>
             </td>
           </tr>
         ))}
@@ -175,13 +179,18 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
     </AllCorners>
     <p class="summary-line ripple">
       {(() => {
+        // a rail fed without ripple (a battery) has none to pass on, whatever the rejection
+        if (steadyInput(rail.corners)) return `${STEADY_INPUT_WORDS[0].toUpperCase()}${STEADY_INPUT_WORDS.slice(1)}.`;
         const rc = rail.corners.find((c) => c.id === rail.worstRippleCornerId);
-        return rc && rc.outputRipplePpV !== null
-          ? `Ripple at the output up to ${fv(rc.outputRipplePpV, 'V')} p-p (${fv(rc.inputRipplePpV, 'V')} p-p in, ${rc.label.toLowerCase()}). `
+        const out = rc && rc.outputRipplePpV !== null
+          ? `Ripple at the output up to ${fv(rc.outputRipplePpV, 'V')} p-p (${fv(rc.inputRipplePpV, 'V')} p-p in, ` +
+            `${rc.label.toLowerCase()}). `
           : 'Ripple at the output unknown. ';
+        const db = rail.rippleRejectionDb !== null ? `${rail.rippleRejectionDb} dB` : 'not stated';
+        const target = rail.rippleTargetV !== null
+          ? `; output ripple target ${fv(rail.rippleTargetV, 'V')} p-p` : '; no output ripple target';
+        return `${out}Ripple rejection ${db}${target}.`;
       })()}
-      Ripple rejection {rail.rippleRejectionDb !== null ? `${rail.rippleRejectionDb} dB` : 'not stated'}
-      {rail.rippleTargetV !== null ? `; output ripple target ${fv(rail.rippleTargetV, 'V')} p-p` : '; no output ripple target'}.
     </p>
     {rail.thermal ? (
       <p class="summary-line">
@@ -333,7 +342,7 @@ export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null 
       {heat ? <HeatCard heat={heat} /> : null}
       {report.transformers.length || report.primary || general.length ? (
         <section class="card supply-transformers">
-          <h3>Transformers and primary</h3>
+          <h3>{report.transformers.length || report.primary ? 'Transformers and primary' : 'The supply as a whole'}</h3>
           {report.transformers.map((t) => (
             <TransformerCard t={t} tuneUp={sizedForTuneUp(report)} />
           ))}

@@ -38,3 +38,11 @@ export function rippleFindings(railName: string, rejectionDb: number | null, tar
   if (w.outputRipplePpV > targetV) return [{ ...base, severity: 'fail', value: w.outputRipplePpV, limit: targetV, message: `${railName}: ${mv(w.outputRipplePpV)} p-p ripple at the output (${w.label}: ${how}) exceeds the ${mv(targetV)} target; a receiver on it will hum. Use a larger reservoir, an RC filter before the regulator, or a regulator with more rejection (an adjust-pin bypass capacitor adds rejection on adjustable types).` }];
   return [{ ...base, severity: 'ok', value: w.outputRipplePpV, limit: targetV, message: `${railName}: ${mv(w.outputRipplePpV)} p-p ripple at the output (${w.label}: ${how}) is within the ${mv(targetV)} target.` }];
 }
+
+/** True when no corner feeds the regulator any ripple (a battery or other steady source): none reaches the output. */
+export function steadyInput(corners: readonly Pick<RegulatedCorner, 'inputRipplePpV'>[]): boolean {
+  return corners.length > 0 && corners.every((c) => c.inputRipplePpV === 0);
+}
+
+/** Words for a regulated rail fed without ripple (page, pack, CLI). */
+export const STEADY_INPUT_WORDS = 'no ripple at the input (a steady source such as a battery), so none at the output';

@@ -2,6 +2,7 @@
 // the rectifier waveform plot, and the supply's findings. Reads the supply report only.
 import type { SupplyReport, RectifiedRailReport, RegulatedRailReport, BatteryRailReport, FaultCheck } from '../../core/power/report-types';
 import { inrushSummary, type InrushReport } from '../../core/power/inrush';
+import { STEADY_INPUT_WORDS, steadyInput } from '../../core/power/ripple-rejection';
 import type { HeatBudget } from '../../core/power/heat-budget';
 import { GREY, type Layout, type Row } from '../layout';
 import { plot, BLUE, ORANGE } from '../plot';
@@ -113,7 +114,7 @@ function regulated(l: Layout, r: RegulatedRailReport): void {
   const t = r.thermal;
   const kv: [string, string][] = [['Output', `${fv(r.outputV, 'V')}, dropout ${fv(r.dropoutV, 'V')}`], ['Dissipation', `${fv(r.thermalDissipationW, 'W')} thermal load, ${fv(r.tuneUpDissipationW, 'W')} tune-up`]];
   const rc = r.corners.find((c) => c.id === r.worstRippleCornerId);
-  kv.push(['Output ripple', rc && rc.outputRipplePpV !== null ? `${fv(rc.outputRipplePpV, 'V')} p-p from ${fv(rc.inputRipplePpV, 'V')} p-p in (${r.rippleRejectionDb} dB, ${rc.label})${r.rippleTargetV !== null ? `; target ${fv(r.rippleTargetV, 'V')}` : ''}` : 'unknown: ripple rejection not stated']);
+  kv.push(['Output ripple', rc && rc.outputRipplePpV !== null ? `${fv(rc.outputRipplePpV, 'V')} p-p from ${fv(rc.inputRipplePpV, 'V')} p-p in (${r.rippleRejectionDb} dB, ${rc.label})${r.rippleTargetV !== null ? `; target ${fv(r.rippleTargetV, 'V')}` : ''}` : steadyInput(r.corners) ? STEADY_INPUT_WORDS : 'unknown: ripple rejection not stated']);
   const ob = r.bleeder;
   if (ob) kv.push(['Output bleeder', ob.fittedTimeS !== null ? `${ob.fittedOhm !== null ? `${fv(ob.fittedOhm, 'Ω')}: ` : ''}below ${fv(ob.safeV, 'V')} within about ${fv(ob.fittedTimeS, 's')} (upper bound)${ob.fittedW !== null ? `, ${fv(ob.fittedW, 'W')}${ob.ratedW !== null ? ` of ${fv(ob.ratedW, 'W')} rated` : ''}` : ''}` : `may stay at ${fv(ob.startV, 'V')}: ${ob.why}${ob.suggestedOhm !== null ? `; suggested ${fv(ob.suggestedOhm, 'Ω')}` : ''}`]);
   if (t) kv.push(['Heatsink', t.needsHeatsink ? `needed: at most ${fv(t.requiredThetaSaKPerW, 'K/W')}; junction ${t.junctionC !== null ? fv(t.junctionC, '°C') : 'no heatsink chosen'} (target ≤ ${fv(t.targetC, '°C')})` : `none needed (free air ${fv(t.freeAirJunctionC, '°C')})`]);

@@ -46,7 +46,7 @@ function supplyResultsFor(project: Project, report: EvaluationReport) {
       <SupplyResults report={report.supply} heat={report.heat} />
       {report.catalog.length ? (
         <section class="card">
-          <h3>Reservoir capacitors on the parts list against this design</h3>
+          <h3>Parts on the parts list against this design</h3>
           <FindingList findings={sortFindings(report.catalog)} />
         </section>
       ) : null}

@@ -5,6 +5,9 @@ import { SupplyResults } from '../../../views/partials/supply-results';
 import { rectifierPlotData, rectifierPlotSvg } from '../../../views/plots/rectifier-plot';
 import type { RectifiedRailReport } from '../../../src/core/power/report-types';
 import { flat, refProject, regulator13v8 } from './fixture';
+import { evaluate } from '../../../src/core/evaluate';
+import { DEMO_PROJECTS } from '../../../seed-demo/index';
+import { steadyInput } from '../../../src/core/power/ripple-rejection';
 
 const project = refProject({ rails: [refProject().supply.rails[0], regulator13v8] });
 const report = evaluateSupply(project, { raw: flat(3), reg: flat(3) });
@@ -44,5 +47,24 @@ describe('supply results partial', () => {
     const out = String(SupplyResults({ report: evaluateSupply(p, { raw: flat(1) }) }));
     expect(out).not.toContain('<b>raw</b>');
     expect(out).toContain('&lt;b&gt;raw&lt;/b&gt;');
+  });
+});
+
+describe('a regulated rail fed from a battery (portable demo)', () => {
+  // a battery feeds no ripple: whatever the regulator's rejection, none reaches the output (0 V in, 0 V out)
+  const portable = evaluate(DEMO_PROJECTS[1]).supply!;
+  const html = String(SupplyResults({ report: portable }));
+  it('says no ripple reaches the output instead of "unknown", and the PA-on-battery card is not called transformers', () => {
+    expect(portable.transformers).toHaveLength(0);
+    expect(html).toContain('No ripple at the input (a steady source such as a battery), so none at the output.');
+    expect(html).not.toContain('Ripple at the output unknown');
+    expect(html).not.toContain('rejection not stated');
+    expect(html).toContain('<h3>The supply as a whole</h3>');
+    expect(html).not.toContain('Transformers and primary');
+  });
+  it('a regulated rail with no ripple in any corner is steady; one with ripple is not', () => {
+    expect(steadyInput([{ inputRipplePpV: 0 }, { inputRipplePpV: 0 }])).toBe(true);
+    expect(steadyInput([{ inputRipplePpV: 0 }, { inputRipplePpV: 0.2 }])).toBe(false);
+    expect(steadyInput([])).toBe(false);
   });
 });
