@@ -29,7 +29,7 @@ describe('ref §10', () => {
     expect(f.severity).toBe('ok');
     expect(f.message).toMatch(/below the 60 V/);
   });
-  it('a subnormal reservoir (5e-324 F) gets no bleeder value, not one sized from an infinite quotient (regression)', () => {
+  it('a subnormal reservoir (5e-324 F) gets no bleeder, none sized from an infinite quotient (regression)', () => {
     expect(maxBleederOhm(5e-324, 350, 60, 5)).toBeNull();
     const b = bleederReport(5e-324, 25.5, 0.02, null);
     expect(b.suggestedOhm).toBeNull();
@@ -63,14 +63,15 @@ describe('bleeder on every rail: time to the safe voltage and wattage', () => {
     expect(bleederFindings('HV', b).find((f) => f.rule === 'bleeder.power')?.severity).toBe('fail');
   });
   it('no rating stated: a caution asking for twice the dissipation', () => {
-    const p = bleederFindings('LV', bleederReport(0.01, 25.5, 0.02, 2200, null)).find((f) => f.rule === 'bleeder.power');
+    const p = bleederFindings('LV', bleederReport(0.01, 25.5, 0.02, 2200, null))
+      .find((f) => f.rule === 'bleeder.power');
     expect(p?.severity).toBe('caution');
     expect(p?.message).toContain('0.59 W or more'); // 2 x 0.2956 W
   });
 });
 
 describe('the bleeder recommendation keeps a fitted bleeder that meets its target', () => {
-  it('4700 µF at 25.6 V with 2.2 kΩ fitted: kept (to 5 V in RC ln(25.6/5) = 16.9 s); 3.9 kΩ only for a new build', () => {
+  it('4700 µF at 25.6 V with 2.2 kΩ fitted: kept (to 5 V in RC ln(25.6/5) = 16.9 s); 3.9 kΩ for a new build', () => {
     // t = R C ln(V0/Vsafe) (ref §10 [C]); 5 V and the 22 s time constant (22 / 4700 µF = 4.68 kΩ -> E12 3.9 kΩ) are
     // common practice, no published source; P = V²/R = 25.6² / 3900 = 0.168 W, rated twice that (derating 50 %)
     const b = bleederReport(4700e-6, 25.6, 0.04, 2200, 1);

@@ -15,9 +15,10 @@ describe('winding model (ref §4.1, §4.2)', () => {
   });
 });
 
-describe('IEC 60127 series and fuse sizing (ref §4.3 [M]: primary T fuse 1.5-2 x primary current, example T630mA-T1A)', () => {
+describe('IEC 60127 series and fuse sizing (ref §4.3 [M]: primary T fuse 1.5-2 x primary current, T630mA-T1A)', () => {
   it('series holds the R10 steps across decades', () => {
-    for (const a of [0.1, 0.125, 0.16, 0.2, 0.25, 0.315, 0.4, 0.5, 0.63, 0.8, 1, 1.25, 1.6, 2, 2.5, 3.15, 4, 5, 6.3, 8, 10]) {
+    const r10 = [0.1, 0.125, 0.16, 0.2, 0.25, 0.315, 0.4, 0.5, 0.63, 0.8, 1, 1.25, 1.6, 2, 2.5, 3.15, 4, 5, 6.3, 8, 10];
+    for (const a of r10) {
       expect(IEC_60127_FUSES_A.some((x) => Math.abs(x - a) < 1e-9), `${a} A`).toBe(true);
     }
   });
@@ -49,7 +50,10 @@ describe('reservoir (ref §4.1, §4.2)', () => {
     expect(recommendedCapacitorV(28.5)).toBe(35);
   });
   it('simulated minimum C for 2.09 V p-p at nominal mains is ~10,000 µF (inverse of the §4.2 table)', () => {
-    const base = { topology: 'bridge' as const, secondaryVrms: 19.08, windingResistanceOhm: 0.194, frequencyHz: 50, diodeDropV: 0.75, diodeResistanceOhm: 0.02, capacitanceF: 1, esrOhm: 0, load: { kind: 'current' as const, currentA: 3 } };
+    const base = {
+      topology: 'bridge' as const, secondaryVrms: 19.08, windingResistanceOhm: 0.194, frequencyHz: 50, diodeDropV: 0.75,
+      diodeResistanceOhm: 0.02, capacitanceF: 1, esrOhm: 0, load: { kind: 'current' as const, currentA: 3 },
+    };
     nearRel(minimumCapacitanceF(base, 2.09, 3) ?? NaN, 0.01, 0.02, 'C min');
   });
 });
@@ -121,7 +125,10 @@ describe('evaluateSupply on the §4.2 example (3 A in every mode)', () => {
 describe('tune-up VA of a winding with no standard voltage (apparent power S = V x I, definition)', () => {
   it('counts the fitted volts, so the continuous-carrier caution can still fire', async () => {
     const { transformerReport } = await import('../../../src/core/power/transformer');
-    const w = { windingId: 'w', windingName: 'W', minimumRatedV: null, standardRatedV: null, thermalRmsA: 1, tuneUpRmsA: 3, peakA: 6, ratedA: 1, va: 30, vaRatedV: 30, checkTroughV: null, primaryReferredA: 0.4, halves: 1, reasoning: '' };
+    const w = {
+      windingId: 'w', windingName: 'W', minimumRatedV: null, standardRatedV: null, thermalRmsA: 1, tuneUpRmsA: 3,
+      peakA: 6, ratedA: 1, va: 30, vaRatedV: 30, checkTroughV: null, primaryReferredA: 0.4, halves: 1, reasoning: '',
+    };
     const t = { id: 't', name: 'T', construction: 'laminated' as const, windings: [] };
     const r = transformerReport(t as never, [w]);
     const toleranceVA = 1e-9;
