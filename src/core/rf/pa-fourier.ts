@@ -66,3 +66,23 @@ export function trapezoidCoefficient(n: number, duty: number, tau: number): numb
 export function trapezoidHarmonic(n: number, duty: number, tau: number): number {
   return trapezoidCoefficient(n, duty, tau) / trapezoidCoefficient(1, duty, tau);
 }
+
+/**
+ * Coefficient of sin nωt (n ≥ 1; signed, its magnitude is harmonic n's amplitude) of a sinusoid of amplitude `drive`
+ * (in units of the clip level) flat-topped at ±1 (the drain voltage held at the rail limits):
+ * min(1, max(−1, drive sin ωt)). Even harmonics are 0 (half-wave
+ * symmetry); drive ≤ 1 is the plain sinusoid; drive → ∞ tends to the square wave, 4/(nπ) for odd n.
+ * Source: Fourier series of the clipped sinusoid, the saturation describing function (Gelb & Vander Velde,
+ * Multiple-Input Describing Functions and Nonlinear System Design, 1968; from memory): with sin β = 1/drive,
+ * b1 = (2 drive/π)(β + sin β cos β),
+ * bn = (4/π)[(drive/2)(sin((n−1)β)/(n−1) − sin((n+1)β)/(n+1)) + cos(nβ)/n] for odd n ≥ 3.
+ */
+export function clippedSineCoefficient(n: number, drive: number): number {
+  if (n % 2 === 0) return 0;
+  if (!(drive > 1)) return n === 1 ? Math.max(0, drive) : 0;
+  if (!Number.isFinite(drive)) return 4 / (n * Math.PI);
+  const beta = Math.asin(1 / drive);
+  if (n === 1) return ((2 * drive) / Math.PI) * (beta + Math.sin(beta) * Math.cos(beta));
+  const a = (drive / 2) * (Math.sin((n - 1) * beta) / (n - 1) - Math.sin((n + 1) * beta) / (n + 1));
+  return (4 / Math.PI) * (a + Math.cos(n * beta) / n);
+}

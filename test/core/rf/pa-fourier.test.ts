@@ -3,7 +3,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
-  cosinePulseCoefficient, flattenedPulseCoefficient, rectangularHarmonic, rectangularPulseCoefficient, trapezoidCoefficient,
+  clippedSineCoefficient, cosinePulseCoefficient, flattenedPulseCoefficient, rectangularHarmonic, rectangularPulseCoefficient, trapezoidCoefficient,
   trapezoidHarmonic,
 } from '../../../src/core/rf/pa-fourier';
 import { near } from './helpers';
@@ -99,5 +99,31 @@ describe('trapezoidal wave (C. R. Paul, Introduction to Electromagnetic Compatib
         expect(Math.abs(trapezoidCoefficient(n, d, tau) - fourierMag((phi) => wave(phi < T - tau * T / 2 ? phi : phi - T), n))).toBeLessThan(2e-4);
       },
     ), propertyOptions(3201, 60)); // seed 3201
+  });
+});
+
+describe('clipped sinusoid (drain voltage flat-topped at the rail limits)', () => {
+  it('x = 2 (clip at half the amplitude, β = 30°), worked by hand: b1 = 2/3 + √3/π, b3 = √3/(2π)', () => {
+    // Source: clipped-sinusoid Fourier series / saturation describing function (Gelb & Vander Velde 1968, from memory),
+    // worked by hand at β = π/6: b1 = (4/π)(π/6 + √3/4) = 1.21800; b3 = (4/π)(sin 60°/2 − sin 120°/4) = 0.27566
+    near(clippedSineCoefficient(1, 2), 2 / 3 + Math.sqrt(3) / Math.PI, 1e-12, 'b1');
+    near(clippedSineCoefficient(3, 2), Math.sqrt(3) / (2 * Math.PI), 1e-12, 'b3');
+    expect(clippedSineCoefficient(2, 2)).toBe(0);
+  });
+  it('hard-limited: tends to the square wave, 4/π and 4/(3π) (Fourier series of a square wave, textbook)', () => {
+    near(clippedSineCoefficient(1, 1e6), 4 / Math.PI, 1e-5, 'b1 at x = 1e6');
+    near(clippedSineCoefficient(3, 1e6), 4 / (3 * Math.PI), 1e-5, 'b3 at x = 1e6');
+    near(clippedSineCoefficient(5, Infinity), 4 / (5 * Math.PI), 1e-15, 'b5 at the limit');
+  });
+  it('unclipped (x ≤ 1): the sinusoid itself, no harmonics (definition)', () => {
+    near(clippedSineCoefficient(1, 0.7), 0.7, 1e-15, 'b1');
+    expect(clippedSineCoefficient(3, 1)).toBe(0);
+  });
+  it('matches a numerical Fourier integral of the sampled clipped sinusoid (seeded property)', () => {
+    fc.assert(fc.property(fc.double({ min: 1, max: 20, noNaN: true }), fc.constantFrom(1, 3, 5, 7), (x, n) => {
+      // clipped cosine (the same waveform shifted a quarter period): amplitudes of cos nωt
+      const wave = (phi: number) => Math.min(1, Math.max(-1, x * Math.cos(phi)));
+      expect(Math.abs(Math.abs(fourierCos(wave, n, 200000)) - Math.abs(clippedSineCoefficient(n, x)))).toBeLessThan(1e-4);
+    }), propertyOptions(4711, 60)); // seed 4711
   });
 });
