@@ -6,7 +6,11 @@ import { minorDigits } from '../cost/money';
 import { storedProblem } from '../spec/derive';
 import { offerSpec } from '../spec/parts';
 import { categoryOf, readRatings } from '../spec/parts-categories';
-import { breakQtyField, MAX_BREAKS, parseRatings, unitPriceField } from '../spec/parts-text';
+import { breakQtyField, MAX_BREAKS, unitPriceField } from '../spec/parts-text';
+import { parseRatingsReadable, ratingLabel, ratingsReadable } from '../spec/ratings-readable';
+
+/** A rating written key=value ("voltageV=35"), the form before names and units. */
+const OLD_FORM = /(?:^|[;\n,])\s*[A-Za-z][\w.-]*\s*=/;
 import { parsePrice, parseQuantity } from './parse-price';
 
 export interface CatalogCells {
@@ -78,7 +82,7 @@ export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [
   const warnings: [CellField, string][] = [];
   let ratings: Record<string, number | string> = {};
   if (c.ratings !== '') {
-    const r = parseRatings(c.ratings);
+    const r = parseRatingsReadable(c.ratings);
     if (!r.ok) errors.push(['ratings', `${r.message}.`]);
     else {
       ratings = r.value;
@@ -88,8 +92,12 @@ export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [
       const def = categoryOf(c.category);
       const known = new Set([...def.numbers.map((f) => f.key), ...def.choices.map((x) => x.key), 'value']);
       const unknown = Object.keys(ratings).filter((k) => !known.has(k));
+      const names = [...known].filter((k) => k !== 'value').map(ratingLabel).join(', ');
       if (def.id !== 'other' && unknown.length)
-        warnings.push(['ratings', `${unknown.map((k) => `"${k}"`).join(', ')} ${unknown.length > 1 ? 'are not ratings' : 'is not a rating'} of a ${def.label.toLowerCase()} (${[...known].filter((k) => k !== 'value').join(', ')}); kept but not checked.`]);
+        warnings.push(['ratings', `${unknown.map((k) => `"${ratingLabel(k)}"`).join(', ')} ${unknown.length > 1 ? 'are not ratings' : 'is not a rating'} of a ${def.label.toLowerCase()} (${names}); kept but not checked.`]);
+      // the older key=value form is still read; say how it reads in names and units
+      if (OLD_FORM.test(c.ratings))
+        warnings.push(['ratings', `written as key=value (the older form), read as "${ratingsReadable(ratings)}".`]);
     }
   }
   let breaks: PriceBreak[] = [];

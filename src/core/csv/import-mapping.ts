@@ -25,7 +25,7 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
   currency: 'Currency',
   stage: 'Stage',
   role: 'Design role',
-  ratings: 'Ratings (key=value; …)',
+  ratings: 'Ratings (name value unit; …)',
   breaks: 'Price breaks (qty: price, …)',
   minOrder: 'Minimum order',
   multiple: 'Order multiple',

@@ -69,7 +69,7 @@ export const PART_CATEGORIES: readonly CategoryDef[] = [
   {
     id: 'transformer', label: 'Transformer', aliases: ['mains-transformer'],
     numbers: [
-      r('va', num('Rating', 'VA', U.none, 0, 100_000, null, { exclusiveMin: true })),
+      r('va', num('VA rating', 'VA', { symbol: 'VA', scale: 1 }, 0, 100_000, null, { exclusiveMin: true })),
       V('sec1V', 'Secondary 1 voltage (RMS)'), A('sec1A', 'Secondary 1 current'),
       V('sec2V', 'Secondary 2 voltage (RMS)'), A('sec2A', 'Secondary 2 current'),
       V('sec3V', 'Secondary 3 voltage (RMS)'), A('sec3A', 'Secondary 3 current'),
@@ -138,22 +138,25 @@ export function readRatings(part: Pick<Part, 'category' | 'ratings'>): ReadRatin
     const v = part.ratings[f.key];
     if (v === undefined) continue;
     const problem = typeof v === 'number' ? rangeProblem(v, f) : 'is not a number';
-    if (problem) out.errors.push({ field: `ratings.${f.key}`, label: f.label, message: `${f.label} (${f.key}) ${problem}` });
+    if (problem) out.errors.push({ field: `ratings.${f.key}`, label: f.label, message: `${f.label} ${problem}` });
     else out.numbers[f.key] = v as number;
   }
   for (const c of def.choices) {
     const v = part.ratings[c.key];
     if (v === undefined) continue;
     const hit = typeof v === 'string' ? c.options.find((o) => o.toLowerCase() === v.trim().toLowerCase()) : undefined;
-    if (hit === undefined) out.errors.push({ field: `ratings.${c.key}`, label: c.label, message: `${c.label} (${c.key}) must be one of ${c.options.join(', ')}` });
+    if (hit === undefined) out.errors.push({ field: `ratings.${c.key}`, label: c.label, message: `${c.label} must be one of ${c.options.join(', ')}` });
     else out.choices[c.key] = hit;
   }
   return out;
 }
 
-/** The rating keys a category offers, as a help line for the ratings box ("capacitanceF, voltageV, …"). */
+/** The ratings a category offers by name and unit, as a help line ("Capacitor: Capacitance (µF), Rated voltage (V), …"). */
 export function ratingKeysHelp(category: string): string {
   const def = categoryOf(category);
-  const keys = [...def.numbers.map((f) => `${f.key} (${f.unit})`), ...def.choices.map((c) => `${c.key} (${c.options.join('/')})`)];
-  return keys.length ? `${def.label}: ${keys.join(', ')}` : 'no rated fields for this category';
+  const names = [
+    ...def.numbers.map((f) => `${f.label}${f.display.symbol ? ` (${f.display.symbol})` : ''}`),
+    ...def.choices.map((c) => `${c.label} (${c.options.join('/')})`),
+  ];
+  return names.length ? `${def.label}: ${names.join(', ')}` : 'no rated fields for this category';
 }

@@ -3,7 +3,8 @@
 import { defineSpec, U } from './field';
 import { minorDigits } from '../cost/money';
 import { num, text } from './make';
-import { breaksCodec, CURRENCY, MAJOR, MONEY_MAX_CENTS, ratingsCodec } from './parts-text';
+import { breaksCodec, CURRENCY, MAJOR, MONEY_MAX_CENTS } from './parts-text';
+import { readableRatingsCodec } from './ratings-readable';
 
 /** A three-letter currency code (typed in any case, stored upper case). */
 export const currencyField = (label = 'Currency') =>
@@ -15,10 +16,10 @@ export const partSpec = defineSpec({
   fields: {
     description: text('Description', 300, true, 'New part', { help: 'type and ratings, no maker part numbers' }),
     category: text('Category', 60, false, ''),
-    // free key=value for now: numbers are read with SI prefixes (4700u), other text is kept as typed
+    // each rating by its name and unit (ratings-readable.ts); the older key=value is still read
     ratings: text('Ratings', 2000, false, '', {
-      codec: ratingsCodec,
-      help: 'key=value; … e.g. voltageV=35; rippleA=2.4',
+      codec: readableRatingsCodec,
+      help: 'name and value, separated by ";" e.g. Rated voltage 35 V; ripple current 2.4 A',
     }),
   },
 });

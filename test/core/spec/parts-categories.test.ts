@@ -33,7 +33,7 @@ describe('part categories', () => {
   });
 
   it('says which keys a category takes, for the ratings box', () => {
-    expect(ratingKeysHelp('heatsink')).toBe('Heatsink: thetaSaKPerW (K/W)');
+    expect(ratingKeysHelp('heatsink')).toBe('Heatsink: θsa (°C/W)');
     expect(ratingKeysHelp('crystal')).toBe('no rated fields for this category');
   });
 });
