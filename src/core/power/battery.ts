@@ -15,7 +15,8 @@ export interface BatteryRuntime {
 
 /**
  * Runtime = usable charge / average current; the transmit current is the CW duty-weighted mean of key-down and key-up.
- * Source: charge balance Q = I t; CW duty factor 0.40 from FCC OET Bulletin 65 Supplement B (1997), Table 2 (ref §2.3 [C2]).
+ * Source: charge balance Q = I t; CW duty factor 0.40 from FCC OET Bulletin 65 Supplement B (1997), Table 2 (ref §2.3
+ * [C2]).
  */
 /**
  * Average current below which no runtime is given, A. Common practice, no published source: below 1 µA the battery's

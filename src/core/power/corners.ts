@@ -38,7 +38,8 @@ export function dutyOf(load: CornerLoad, keyingDuty: number): number {
 
 /**
  * Current for a corner load. Thermal load = keyDown x duty + keyUp x (1 - duty): the mean over a keying cycle.
- * Source: duty-factor averaging of OET Bulletin 65 Supplement B (1997), Table 2 and its averaging recipe (ref §2.3 [C2]).
+ * Source: duty-factor averaging of OET Bulletin 65 Supplement B (1997), Table 2 and its averaging recipe (ref §2.3
+ * [C2]).
  */
 export function cornerCurrent(perMode: PerMode, load: CornerLoad, keyingDuty: number): number {
   const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);

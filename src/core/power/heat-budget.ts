@@ -56,7 +56,8 @@ export function heatBudget(supply: SupplyReport | null, pas: PaHeat[], areaM2: n
       const wf = r.windingFuse;
       if (wf && r.winding) {
         const halves = r.winding.halves;
-        // Source: Joule heating P = I^2 R, with the winding's resistance referred to the secondary (primary share included)
+        // Source: Joule heating P = I^2 R, with the winding's resistance referred to the secondary (primary share
+        // included)
         const w = halves * r.winding.thermalRmsA * r.winding.thermalRmsA * wf.sourceOhm;
         sources.push({ name: `${wf.windingName} copper`, kind: 'transformer', watts: w, note: `I² R with ${r.winding.thermalRmsA.toFixed(2)} A RMS (duty-averaged) in ${wf.sourceOhm.toFixed(2)} Ω` });
       }

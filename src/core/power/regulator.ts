@@ -15,10 +15,12 @@ export function regulatorOutputV(setting: RegulatorSetting, quiescentA = 0): num
     case 'fixed':
       return finiteOr(setting.nominalV, NaN);
     case 'adjustable':
-      // Source: adjustable three-terminal regulator datasheets (LM317-type), Vout = Vref(1 + R2/R1) + I_adj R2 (ref §6.2 [C])
+      // Source: adjustable three-terminal regulator datasheets (LM317-type), Vout = Vref(1 + R2/R1) + I_adj R2 (ref
+      // §6.2 [C])
       return finiteOr(setting.vrefV * (1 + setting.r2Ohm / setting.r1Ohm) + setting.adjustA * setting.r2Ohm, NaN);
     case 'raised-diodes':
-      // Source: circuit notes quoted in ref §6.1 [C]: each forward-biased silicon diode in the common lead adds ~0.6-0.7 V
+      // Source: circuit notes quoted in ref §6.1 [C]: each forward-biased silicon diode in the common lead adds
+      // ~0.6-0.7 V
       return finiteOr(setting.nominalV + setting.diodes * setting.diodeDropV, NaN);
     case 'raised-resistor':
       // Source: ref §6.1 [C] (resistor method): Vout = Vxx(1 + R2/R1) + Iq R2, Iq leaves the common pin through R2

@@ -6,7 +6,10 @@ import { simulateRectifier } from './rectifier-sim';
 import { DEFAULT_CAPACITOR_V, DEFAULT_CAPACITANCE_STEPS, nextAtLeast, nextInSeries } from './standard-values';
 import { usablePositive } from '../numeric';
 
-/** Voltage-rating margin over the highest (no-load, high-mains) peak. Common practice, no published source (ref §4.2 [D]: 28.5 V -> 35 V). */
+/**
+ * Voltage-rating margin over the highest (no-load, high-mains) peak. Common practice, no published source (ref §4.2
+ * [D]: 28.5 V -> 35 V).
+ */
 export const CAP_VOLTAGE_MARGIN = 1.2;
 
 /**

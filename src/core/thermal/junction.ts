@@ -34,7 +34,10 @@ export interface ThermalResult {
   targetC: number;
   /** Rated maximum junction temperature (°C). */
   tjMaxC: number;
-  /** Largest heatsink-to-air resistance that meets the target (K/W); null when no heatsink can (or none needed: see needsHeatsink). */
+  /**
+   * Largest heatsink-to-air resistance that meets the target (K/W); null when no heatsink can (or none needed: see
+   * needsHeatsink).
+   */
   requiredThetaSaKPerW: number | null;
   /** False when the device stays below target in free air (no heatsink needed). */
   needsHeatsink: boolean;

@@ -7,7 +7,9 @@ import type { PaHeat } from '../power/heat-budget';
 
 const finite = (x: number) => (Number.isFinite(x) ? x : 0);
 
-/** Each final stage's duty-averaged dissipation, all devices (W), from the RF evaluation's PA model and rail voltages. */
+/**
+ * Each final stage's duty-averaged dissipation, all devices (W), from the RF evaluation's PA model and rail voltages.
+ */
 type Rails = Pick<RfContext, 'paRailV' | 'paRailMaxV' | 'paRailHotV' | 'paRailLowV' | 'paRailBattery'>;
 export function paHeatAhead(project: Project, ctx: Rails): PaHeat[] {
   return project.stages.flatMap((st) => {

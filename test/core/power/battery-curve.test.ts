@@ -25,7 +25,8 @@ describe('cell figures per chemistry', () => {
   });
 
   it('plateaus: LiFePO4 flat near 3.3 V, NiMH near 1.2 V; every curve falls and ends at its cut-off', () => {
-    // Common practice, no published source: a LiFePO4 cell spends most of its discharge at 3.2-3.35 V, NiMH at 1.15-1.25 V
+    // Common practice, no published source: a LiFePO4 cell spends most of its discharge at 3.2-3.35 V, NiMH at
+    // 1.15-1.25 V
     const lfp = meanCellV(CELL_CURVES.LiFePO4, 0.1, 0.9);
     expect(lfp).toBeGreaterThan(3.2);
     expect(lfp).toBeLessThan(3.35);
@@ -89,7 +90,8 @@ describe('the portable demo on its LiFePO4 curve', () => {
     // 4 cells x mean 3.28 V (10-90 %) = 13.12 V, less 0.487 A x 0.04 ohm under key-down
     expect(bat.curve!.cells).toBe(4);
     near(bat.curve!.loadedPlateauV, 13.12 - bat.outputA.keyDown * 0.04, 1e-6, 'plateau');
-    // The independent estimate: about 4.0-4.3 W for most of the charge; the end output is the PA's low-supply one
+    // The independent estimate: about 4.0-4.3 W for most of the charge; the end output is the PA's low-supply
+    // one
     expect(bat.pa!.plateauOutputW).toBeGreaterThan(4.0);
     expect(bat.pa!.plateauOutputW).toBeLessThan(4.3);
     const pa = r.rf.stages.find((s) => s.pa)!.pa!;

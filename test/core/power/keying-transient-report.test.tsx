@@ -43,7 +43,8 @@ describe('keying transient in the evaluation JSON', () => {
     expect(m.parts.map((p: { law: string }) => p.law).sort()).toEqual(['PA load line', 'constant current']);
   });
   it('every rail carries its load model: a linear regulator reflects its loads as a constant current on its raw rail', () => {
-    // Source: series-pass regulator, I_in = I_out + I_q (regulator datasheets). The 13.8 V rail's entered loads from the
+    // Source: series-pass regulator, I_in = I_out + I_q (regulator datasheets). The 13.8 V rail's entered loads from
+    // the
     // demo data, key-up: 12 + 18 + 60 + 4 + 12 mA and the 36 mA relay coil = 142 mA; key-down with the driver at
     // 160 mA: 242 mA. Its regulator's 5.2 mA quiescent current added: 147.2 mA and 247.2 mA on the raw rail.
     const sig = json.supply.rails.find((r: { railId: string }) => r.railId === 'rail-13v8').loadModel;

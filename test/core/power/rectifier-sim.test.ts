@@ -40,7 +40,8 @@ describe('consistency check (same element model, not a reference): bridge rectif
   }
 
   it('RMS/DC ratio against source resistance (ref §4.2 sensitivity list)', () => {
-    // Source: ref §4.2: regulation 0 % -> 2.49; 3 %/100 VA (0.097 Ω) -> 2.10; 6 % -> 1.93; 10 %/100 VA (0.324 Ω) -> 1.81;
+    // Source: ref §4.2: regulation 0 % -> 2.49; 3 %/100 VA (0.097 Ω) -> 2.10; 6 % -> 1.93; 10 %/100 VA (0.324 Ω) ->
+    // 1.81;
     // 10 %/80 VA (0.405 Ω) -> 1.75, each with the 18 V winding's V_NL = 18 (1 + reg).
     const toleranceRatioAbs = 0.03;
     const cases = [
@@ -105,7 +106,8 @@ describe('bad and extreme inputs never hang and never give NaN', () => {
   const bad: Partial<RectifierSimInput>[] = [
     { capacitanceF: 0 }, { capacitanceF: -1 }, { frequencyHz: 0 }, { secondaryVrms: 0 }, { secondaryVrms: NaN },
     { windingResistanceOhm: -1 }, { load: { kind: 'resistance', resistanceOhm: 0 } }, { load: { kind: 'current', currentA: -2 } },
-    // Subnormals above 0 (regression): they passed `x <= 0` and gave 0 V results with no note, or an infinite conductance
+    // Subnormals above 0 (regression): they passed `x <= 0` and gave 0 V results with no note, or an infinite
+    // conductance
     { capacitanceF: 5e-324 }, { frequencyHz: 5e-324 }, { secondaryVrms: 1.5e-322 }, { bleederOhm: 5e-324 },
     { load: { kind: 'resistance', resistanceOhm: 5e-324 } }, { capacitanceF: 1e-300 }, { frequencyHz: 1e-300 },
   ];

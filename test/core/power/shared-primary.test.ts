@@ -145,7 +145,8 @@ async function clubAgainstNgspice(p: Project, leakage: boolean) {
   const hz = p.mains!.frequencyHz;
   // The split written out by hand (the stated common-practice rules, not the program's functions):
   // R_s = reg V / I: 16 V 1 A 10 % -> 1.6 Ω, 20 V 2.5 A 8 % -> 0.64 Ω; half of it in each winding.
-  // Leakage X = 0.25 R_s (laminated) at 60 Hz: L = 0.25 x 1.6 / (2π 60) = 1.0610 mH, 0.25 x 0.64 / (2π 60) = 0.42441 mH.
+  // Leakage X = 0.25 R_s (laminated) at 60 Hz: L = 0.25 x 1.6 / (2π 60) = 1.0610 mH, 0.25 x 0.64 / (2π 60) = 0.42441
+  // mH.
   const rs = (w: (typeof t.windings)[number]) => (w.regulationFraction * w.ratedVrms) / w.ratedA;
   const ls = (w: (typeof t.windings)[number]) => (leakage ? (0.25 * rs(w)) / (2 * Math.PI * hz) : 0);
   // R_p = 0.5 x reg_VA-weighted x Vp² / VA = 9.256 Ω; L_p = Σ (0.5 L_s / k²) VA_w / VA with k = V_NL / 120:

@@ -1,5 +1,6 @@
 // Refused supply inputs and the stated lowest voltage of a rail's loads, on the §4.2 reference project
-// (../shared/reference/REFERENCE-VALUES.md §4.2: 18 V 6 % winding, bridge, 10,000 µF, 3 A: trough 18.42 V at -10 % mains).
+// (../shared/reference/REFERENCE-VALUES.md §4.2: 18 V 6 % winding, bridge, 10,000 µF, 3 A: trough 18.42 V at -10 %
+// mains).
 // A refused item is a fail finding naming item and field and is left out of the design, never computed from 0.
 import { describe, expect, it } from 'vitest';
 import { evaluateSupply } from '../../../src/core/power/evaluate-supply';
