@@ -1,19 +1,40 @@
-// The corners that decide a rail's design, shown first: headroom (lowest trough), heating (high mains at the CW
-// duty) and tune-up (a continuous carrier at high mains). The full corner table follows behind a disclosure.
+// The corners that decide a rail's design, shown first: headroom (lowest trough; with a stated secondary tolerance
+// also low mains with the secondary at the low end of it), heating (high mains at the CW duty) and tune-up (a
+// continuous carrier at high mains). The full corner table follows behind a disclosure. The headroom verdicts are
+// the rail's own headroom findings, the ones the overview's first screen draws, so both pages agree.
 import type { Child, FC } from 'hono/jsx';
-import type { RectifiedRailReport, RegulatedRailReport } from '../../src/core/power/report-types';
+import type { Finding, Severity } from '../../src/core/findings';
+import type { BatteryRailReport, RectifiedRailReport, RegulatedRailReport, SupplyReport } from '../../src/core/power/report-types';
 import { formatValue as fv } from '../../src/core/units';
 
-type Role = { role: string; id: string };
-const roles = (voltage: string, thermal: string): Role[] => [
-  { role: 'Headroom', id: voltage },
+type Role = { role: string; id: string; headroom?: 'plain' | 'tolerance' };
+const TOLERANCE_ID = 'lowTol-keyDown';
+const roles = (voltage: string, thermal: string, tolerance: boolean): Role[] => [
+  { role: 'Headroom', id: voltage, headroom: 'plain' },
+  ...(tolerance ? [{ role: 'Headroom, secondary at its low tolerance', id: TOLERANCE_ID, headroom: 'tolerance' as const }] : []),
   { role: 'Heating', id: thermal },
   { role: 'Tune-up', id: 'high-tuneUp' },
 ];
 
-export const RectifiedDeciding: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
-  <table class="grid deciding">
-    <caption>Deciding corners</caption>
+const severityOf = (findings: Finding[], rule: string): Severity | null => findings.find((f) => f.rule === rule)?.severity ?? null;
+
+/** A rectified rail's headroom verdict at the plain low-mains corner and at the secondary-tolerance corner. */
+function rectifiedVerdict(rail: RectifiedRailReport, which: 'plain' | 'tolerance'): Severity | null {
+  const plain = severityOf(rail.findings, 'rail.headroom');
+  if (which === 'plain') return plain;
+  // the tolerance check is a caution of its own; without one the corner meets the need, or the plain corner fails
+  const tol = severityOf(rail.findings, 'rail.headroom-tolerance');
+  const c = rail.corners.find((x) => x.id === TOLERANCE_ID);
+  return tol ?? (c && c.headroomMarginV >= 0 ? 'ok' : plain);
+}
+
+const VERDICT_WORDS: Record<Severity, string> = { ok: 'ok', caution: 'caution', fail: 'fail' };
+const Verdict: FC<{ sev: Severity | null; none?: string }> = ({ sev, none }) =>
+  sev ? <span class={`sev sev-${sev}`} data-headroom-verdict={sev}>{VERDICT_WORDS[sev]}</span> : <span class="hint">{none ?? '—'}</span>;
+
+export const RectifiedDeciding: FC<{ rail: RectifiedRailReport; caption?: Child }> = ({ rail, caption }) => (
+  <table class="grid deciding" data-rail={rail.railId}>
+    <caption>{caption ?? 'Deciding corners'}</caption>
     <thead>
       <tr>
         <th scope="col">Decides</th>
@@ -21,56 +42,109 @@ export const RectifiedDeciding: FC<{ rail: RectifiedRailReport }> = ({ rail }) =
         <th class="num">Load</th>
         <th class="num">Trough</th>
         <th class="num">Margin</th>
+        <th scope="col">Headroom</th>
         <th class="num">Winding RMS</th>
         <th class="num">Cap. ripple RMS</th>
       </tr>
     </thead>
     <tbody>
-      {roles(rail.worstVoltageCornerId, rail.worstThermalCornerId).map(({ role, id }) => {
-        const c = rail.corners.find((x) => x.id === id);
-        return c ? (
-          <tr>
-            <th scope="row">{role}</th>
-            <td>{c.label}</td>
-            <td class="num">{fv(c.loadA, 'A')}</td>
-            <td class="num">{fv(c.troughV, 'V')}</td>
-            <td class="num">{fv(c.headroomMarginV, 'V')}</td>
-            <td class="num">{fv(c.secondaryRmsA, 'A')}</td>
-            <td class="num">{fv(c.capacitorRippleRmsA, 'A')}</td>
-          </tr>
-        ) : null;
-      })}
+      {roles(rail.worstVoltageCornerId, rail.worstThermalCornerId, rail.corners.some((x) => x.id === TOLERANCE_ID)).map(
+        ({ role, id, headroom }) => {
+          const c = rail.corners.find((x) => x.id === id);
+          return c ? (
+            <tr data-corner={id} class={headroom ? 'headroom-row' : ''}>
+              <th scope="row">{role}</th>
+              <td>{c.label}</td>
+              <td class="num">{fv(c.loadA, 'A')}</td>
+              <td class="num">{fv(c.troughV, 'V')}</td>
+              <td class="num">{fv(c.headroomMarginV, 'V')}</td>
+              <td>{headroom ? <Verdict sev={rectifiedVerdict(rail, headroom)} none="no need stated" /> : null}</td>
+              <td class="num">{fv(c.secondaryRmsA, 'A')}</td>
+              <td class="num">{fv(c.capacitorRippleRmsA, 'A')}</td>
+            </tr>
+          ) : null;
+        },
+      )}
     </tbody>
   </table>
 );
 
-export const RegulatedDeciding: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
-  <table class="grid deciding">
-    <caption>Deciding corners</caption>
+export const RegulatedDeciding: FC<{ rail: RegulatedRailReport; caption?: Child }> = ({ rail, caption }) => (
+  <table class="grid deciding" data-rail={rail.railId}>
+    <caption>{caption ?? 'Deciding corners'}</caption>
     <thead>
       <tr>
         <th scope="col">Decides</th>
         <th scope="col">Corner</th>
         <th class="num">Input trough</th>
         <th class="num">Headroom</th>
+        <th scope="col">Verdict</th>
         <th class="num">Dissipation</th>
       </tr>
     </thead>
     <tbody>
-      {roles(rail.worstVoltageCornerId, rail.worstThermalCornerId).map(({ role, id }) => {
-        const c = rail.corners.find((x) => x.id === id);
-        return c ? (
-          <tr>
-            <th scope="row">{role}</th>
-            <td>{c.label}</td>
-            <td class="num">{fv(c.inputTroughV, 'V')}</td>
-            <td class="num">{fv(c.headroomV, 'V')}</td>
-            <td class="num">{fv(c.dissipationW, 'W')}</td>
-          </tr>
-        ) : null;
-      })}
+      {roles(rail.worstVoltageCornerId, rail.worstThermalCornerId, rail.corners.some((x) => x.id === TOLERANCE_ID)).map(
+        ({ role, id, headroom }) => {
+          const c = rail.corners.find((x) => x.id === id);
+          return c ? (
+            <tr data-corner={id} class={headroom ? 'headroom-row' : ''}>
+              <th scope="row">{role}</th>
+              <td>{c.label}</td>
+              <td class="num">{fv(c.inputTroughV, 'V')}</td>
+              <td class="num">{fv(c.headroomV, 'V')}</td>
+              <td>
+                {headroom === 'plain' ? <Verdict sev={severityOf(rail.findings, 'regulator.headroom')} /> : null}
+                {/* the feeding rail's own tolerance check judges this corner */}
+                {headroom === 'tolerance' ? <span class="hint">judged on the rail that feeds it</span> : null}
+              </td>
+              <td class="num">{fv(c.dissipationW, 'W')}</td>
+            </tr>
+          ) : null;
+        },
+      )}
     </tbody>
   </table>
+);
+
+/** A battery rail's one deciding point: the end voltage under key-down load against what its regulators need. */
+const BatteryDeciding: FC<{ rail: BatteryRailReport }> = ({ rail }) => {
+  const sev = severityOf(rail.findings, 'battery.end-voltage') ?? severityOf(rail.findings, 'battery.window');
+  return (
+    <table class="grid deciding" data-rail={rail.railId}>
+      <caption>
+        <a href={`#supply-${rail.railId}`}>{rail.railName}</a>
+      </caption>
+      <tbody>
+        <tr class="headroom-row">
+          <th scope="row">Headroom</th>
+          <td>At end voltage under key-down load: {fv(rail.loadedEndV, 'V')}; needed {fv(rail.requiredMinV, 'V')}</td>
+          <td><Verdict sev={sev} none="no need stated" /></td>
+        </tr>
+      </tbody>
+    </table>
+  );
+};
+
+/** The page's first results: every rail's deciding corners, each linking to its full results further down. */
+export const SupplyGlance: FC<{ report: SupplyReport }> = ({ report }) => (
+  <section class="card supply-glance" id="supply-glance" aria-labelledby="supply-glance-h">
+    <h2 id="supply-glance-h">Does the supply hold up?</h2>
+    <p class="hint">
+      Per rail, the corners that decide it: headroom at the lowest trough
+      {report.mains ? ' (low mains, and with a stated secondary tolerance its low end too)' : ''}, heating in CW use and a
+      tune-up carrier. The editors, every corner, the plots and the findings follow below.
+    </p>
+    {report.rails.map((r) => {
+      const caption = <a href={`#supply-${r.railId}`}>{r.railName}</a>;
+      return r.kind === 'rectified' ? (
+        <RectifiedDeciding rail={r} caption={caption} />
+      ) : r.kind === 'regulated' ? (
+        <RegulatedDeciding rail={r} caption={caption} />
+      ) : (
+        <BatteryDeciding rail={r} />
+      );
+    })}
+  </section>
 );
 
 /** The full corner table behind a native disclosure (keyboard: Tab to the summary, Enter or Space opens it). */

@@ -1,5 +1,6 @@
-// Supply page: transformers and windings, rails (rectified, regulated, battery), the primary fuse, and the
-// computed supply results below. The body is the htmx partial (#supply) and the page content alike.
+// Supply page: first every rail's deciding corners (does it hold up?), then the editors for transformers and
+// windings, rails (rectified, regulated, battery) and the primary fuse, then the full computed supply results.
+// The body is the htmx partial (#supply) and the page content alike.
 import type { Child, FC } from 'hono/jsx';
 import { PageMessages } from '../components/messages';
 import type { Project } from '../../src/core/model';
@@ -20,6 +21,8 @@ export interface SupplyBodyProps {
   parentsFor: (railId: string) => [string, string][];
   /** The computed results, rendered by the supply-results partial (null while not available). */
   results: Child | null;
+  /** The deciding corners of every rail, shown first, above the editors (null while not available). */
+  glance?: Child | null;
   failed?: Failed;
   notice?: string;
   /** Rail to show opened (just added). */
@@ -69,7 +72,7 @@ const Enclosure: FC<{ project: Project; state: FieldState }> = ({ project, state
   </form>
 );
 
-export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, failed, notice, openRail }) => {
+export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, glance, failed, notice, openRail }) => {
   const base = `/projects/${project.id}/supply`;
   // new items start with an empty name (the builder names them); the other fields from the specs' defaults
   const addTrafo = stateFor('add-transformer', failed, () => ({ ...formValues(transformerSpec, defaults(transformerSpec)), name: '' }));
@@ -93,6 +96,7 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
           charger made for its chemistry. These figures are planning aids, not a safety approval.
         </p>
       )}
+      {glance ?? null}
       <div class="supply-sections">
         <section>
           <h2>Transformers</h2>

@@ -18,6 +18,7 @@ import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
 import type { EvaluationReport } from '../../core/evaluate';
 import { SupplyResults, FindingList } from '../../../views/partials/supply-results';
+import { SupplyGlance } from '../../../views/components/supply-corners';
 import { sortFindings } from '../../core/findings';
 import { supplyChoices, supplyChoicesSpec, type SupplyChoices } from '../../core/spec/supply-choices';
 import { specFormSchema } from '../forms/spec-schema';
@@ -56,8 +57,10 @@ function supplyResultsFor(project: Project, report: EvaluationReport) {
 
 function body(project: Project, failed?: Failed, notice?: string, openRail?: string) {
   const parentsFor = (railId: string) => F.possibleParents(project, railId).map((r): [string, string] => [r.id, r.name]);
-  const results = supplyResultsFor(project, evaluate(project));
-  return <SupplyBody project={project} parentsFor={parentsFor} results={results} failed={failed} notice={notice} openRail={openRail} />;
+  const report = evaluate(project);
+  const results = supplyResultsFor(project, report);
+  const glance = report.supply?.rails.length ? <SupplyGlance report={report.supply} /> : null;
+  return <SupplyBody project={project} parentsFor={parentsFor} results={results} glance={glance} failed={failed} notice={notice} openRail={openRail} />;
 }
 
 export function supplyPage(project: Project, failed?: Failed, notice?: string, openRail?: string) {
