@@ -30,7 +30,8 @@ export const FindingList: FC<{ findings: Finding[] }> = ({ findings }) =>
       <ul class="findings">
         {actionable(findings).map((f) => (
           <li>
-            <span class={sevClass(f.severity)}>{f.severity}</span> {f.message} <span class="source">(Source: {sourceText(f.source)})</span>
+            <span class={sevClass(f.severity)}>{f.severity}</span> {f.message}{' '}
+            <span class="source">(Source: {sourceText(f.source)})</span>
           </li>
         ))}
       </ul>
@@ -57,12 +58,16 @@ const Recommendations: FC<{ items: Recommendation[] }> = ({ items }) =>
   ) : null;
 
 const Tag: FC<{ id: string; voltage: string; thermal: string }> = ({ id, voltage, thermal }) =>
-  id === voltage ? <span class="hint"> · sets headroom</span> : id === thermal ? <span class="hint"> · sets heating</span> : null;
+  id === voltage ? <span class="hint"> · sets headroom</span>
+    : id === thermal ? <span class="hint"> · sets heating</span> : null;
 
 const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
   <section class="card supply-rail" id={`supply-${rail.railId}`}>
     <h3>
-      {rail.railName} <span class="hint">({rail.topology} rectifier; needs {fv(rail.requiredMinV, 'V')} at the trough: {rail.requirementNote})</span>
+      {rail.railName}{' '}
+      <span class="hint">
+        ({rail.topology} rectifier; needs {fv(rail.requiredMinV, 'V')} at the trough: {rail.requirementNote})
+      </span>
     </h3>
     <RectifiedDeciding rail={rail} />
     <AllCorners count={rail.corners.length}>
@@ -117,7 +122,8 @@ const RectifiedCard: FC<{ rail: RectifiedRailReport }> = ({ rail }) => (
     </p>
     </AllCorners>
     <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: rectifierPlotSvg(rectifierPlotData(rail)) }} />
-    {rail.keyingTransient ? <KeyingTransientBlock rail={rail} /> : rail.loadModel ? <LoadModelDetails model={rail.loadModel} /> : null}
+    {rail.keyingTransient ? <KeyingTransientBlock rail={rail} />
+      : rail.loadModel ? <LoadModelDetails model={rail.loadModel} /> : null}
     {rail.windingFuse ? <WindingFuseTable wf={rail.windingFuse} /> : null}
     <BleederLine b={rail.bleeder} />
     {rail.bridgeThermal ? <BridgeLine b={rail.bridgeThermal} /> : null}
@@ -168,7 +174,8 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
             <td class="num">
               {fv(c.inputRipplePpV, 'V')}
               <span class="sub">
-                {c.outputRipplePpV !== null ? fv(c.outputRipplePpV, 'V') : c.inputRipplePpV === 0 ? fv(0, 'V') : 'rejection not stated'}
+                {c.outputRipplePpV !== null ? fv(c.outputRipplePpV, 'V')
+                  : c.inputRipplePpV === 0 ? fv(0, 'V') : 'rejection not stated'}
                 {c.inDropout ? ' (dropout)' : ''}
               </span>
             </td>
@@ -214,19 +221,48 @@ const BatteryCard: FC<{ rail: BatteryRailReport }> = ({ rail }) => (
     <h3>{rail.railName}</h3>
     <table class="grid kv">
       <tbody>
-        <tr><th scope="row">Voltage window</th><td>{fv(rail.fullV, 'V')} full to {fv(rail.endV, 'V')} end ({fv(rail.loadedEndV, 'V')} under key-down load)</td></tr>
+        <tr>
+          <th scope="row">Voltage window</th>
+          <td>{fv(rail.fullV, 'V')} full to {fv(rail.endV, 'V')} end ({fv(rail.loadedEndV, 'V')} under key-down load)</td>
+        </tr>
         <tr><th scope="row">Needed by the regulators</th><td>{fv(rail.requiredMinV, 'V')}</td></tr>
-        <tr><th scope="row">Average current</th><td>{fv(rail.averageA, 'A')} ({pct(rail.receiveFraction)} receive)</td></tr>
+        <tr>
+          <th scope="row">Average current</th><td>{fv(rail.averageA, 'A')} ({pct(rail.receiveFraction)} receive)</td>
+        </tr>
         <tr><th scope="row">Runtime</th><td>{(rail.runtimeS / 3600).toFixed(1)} h</td></tr>
-        <tr><th scope="row">Bleeder</th><td>none applies: a battery holds its voltage while connected; disconnect it (or pull its fuse) before working on the rig</td></tr>
+        <tr>
+          <th scope="row">Bleeder</th>
+          <td>
+            none applies: a battery holds its voltage while connected; disconnect it (or pull its fuse) before working
+            on the rig
+          </td>
+        </tr>
         {rail.curve ? (
           <>
-            <tr><th scope="row">Discharge curve</th><td>{rail.curve.chemistry}, {rail.curve.cells} cells: plateau {fv(rail.curve.plateauV, 'V')} ({fv(rail.curve.loadedPlateauV, 'V')} under key-down), common end {fv(rail.curve.chemistryEndV, 'V')}</td></tr>
-            <tr><th scope="row">Runtime over the curve</th><td>{(rail.curve.runtimeS / 3600).toFixed(1)} h: the loads run to {fv(rail.curve.stopV, 'V')}, {pct(rail.curve.usedFraction)} of the capacity</td></tr>
+            <tr>
+              <th scope="row">Discharge curve</th>
+              <td>
+                {rail.curve.chemistry}, {rail.curve.cells} cells: plateau {fv(rail.curve.plateauV, 'V')}
+                {' '}({fv(rail.curve.loadedPlateauV, 'V')} under key-down), common end {fv(rail.curve.chemistryEndV, 'V')}
+              </td>
+            </tr>
+            <tr>
+              <th scope="row">Runtime over the curve</th>
+              <td>
+                {(rail.curve.runtimeS / 3600).toFixed(1)} h: the loads run to {fv(rail.curve.stopV, 'V')},
+                {' '}{pct(rail.curve.usedFraction)} of the capacity
+              </td>
+            </tr>
           </>
         ) : null}
         {rail.pa ? (
-          <tr><th scope="row">{rail.pa.stageName}</th><td>about {fv(rail.pa.plateauOutputW, 'W')} for most of the charge ({fv(rail.pa.plateauRailV, 'V')}), {fv(rail.pa.endOutputW, 'W')} near the end ({fv(rail.pa.endRailV, 'V')})</td></tr>
+          <tr>
+            <th scope="row">{rail.pa.stageName}</th>
+            <td>
+              about {fv(rail.pa.plateauOutputW, 'W')} for most of the charge ({fv(rail.pa.plateauRailV, 'V')}),
+              {' '}{fv(rail.pa.endOutputW, 'W')} near the end ({fv(rail.pa.endRailV, 'V')})
+            </td>
+          </tr>
         ) : null}
       </tbody>
     </table>
@@ -338,7 +374,8 @@ export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null 
         Mains, charged capacitors and shorted batteries can kill or burn: these are planning figures, not a safety approval.
         Fuse and earth the supply, discharge reservoirs before touching, and follow your local electrical code and licensed practice.
       </p>
-      {report.rails.map((r) => (r.kind === 'rectified' ? <RectifiedCard rail={r} /> : r.kind === 'regulated' ? <RegulatedCard rail={r} /> : <BatteryCard rail={r} />))}
+      {report.rails.map((r) => (r.kind === 'rectified' ? <RectifiedCard rail={r} />
+        : r.kind === 'regulated' ? <RegulatedCard rail={r} /> : <BatteryCard rail={r} />))}
       {heat ? <HeatCard heat={heat} /> : null}
       {report.transformers.length || report.primary || general.length ? (
         <section class="card supply-transformers">
