@@ -136,12 +136,17 @@ export const SupplyGlance: FC<{ report: SupplyReport }> = ({ report }) => (
     </p>
     {report.rails.map((r) => {
       const caption = <a href={`#supply-${r.railId}`}>{r.railName}</a>;
-      return r.kind === 'rectified' ? (
-        <RectifiedDeciding rail={r} caption={caption} />
-      ) : r.kind === 'regulated' ? (
-        <RegulatedDeciding rail={r} caption={caption} />
-      ) : (
-        <BatteryDeciding rail={r} />
+      // a wide table scrolls inside its card on a phone instead of widening the page
+      return (
+        <div class="scroll-x">
+          {r.kind === 'rectified' ? (
+            <RectifiedDeciding rail={r} caption={caption} />
+          ) : r.kind === 'regulated' ? (
+            <RegulatedDeciding rail={r} caption={caption} />
+          ) : (
+            <BatteryDeciding rail={r} />
+          )}
+        </div>
       );
     })}
   </section>
