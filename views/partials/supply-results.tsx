@@ -223,7 +223,9 @@ const BatteryCard: FC<{ rail: BatteryRailReport }> = ({ rail }) => (
       <tbody>
         <tr>
           <th scope="row">Voltage window</th>
-          <td>{fv(rail.fullV, 'V')} full to {fv(rail.endV, 'V')} end ({fv(rail.loadedEndV, 'V')} under key-down load)</td>
+          <td>
+            {fv(rail.fullV, 'V')} full to {fv(rail.endV, 'V')} end ({fv(rail.loadedEndV, 'V')} under key-down load)
+          </td>
         </tr>
         <tr><th scope="row">Needed by the regulators</th><td>{fv(rail.requiredMinV, 'V')}</td></tr>
         <tr>
@@ -243,7 +245,8 @@ const BatteryCard: FC<{ rail: BatteryRailReport }> = ({ rail }) => (
               <th scope="row">Discharge curve</th>
               <td>
                 {rail.curve.chemistry}, {rail.curve.cells} cells: plateau {fv(rail.curve.plateauV, 'V')}
-                {' '}({fv(rail.curve.loadedPlateauV, 'V')} under key-down), common end {fv(rail.curve.chemistryEndV, 'V')}
+                {' '}({fv(rail.curve.loadedPlateauV, 'V')} under key-down), common end
+                {' '}{fv(rail.curve.chemistryEndV, 'V')}
               </td>
             </tr>
             <tr>
@@ -330,7 +333,8 @@ const TransformerCard: FC<{ t: TransformerReport; tuneUp?: boolean }> = ({ t, tu
             <th class="num">Winding leakage</th>
             <th class="num">Trough alone</th>
             <th class="num">Together, key down</th>
-            {t.crossRegulation.toleranceFraction !== null ? <th class="num">Secondary −{fv(t.crossRegulation.toleranceFraction * 100, '%', 2)}</th> : null}
+            {t.crossRegulation.toleranceFraction !== null
+              ? <th class="num">Secondary −{fv(t.crossRegulation.toleranceFraction * 100, '%', 2)}</th> : null}
             <th class="num">Together, key up</th>
             <th class="num">Needed</th>
           </tr>
@@ -345,7 +349,8 @@ const TransformerCard: FC<{ t: TransformerReport; tuneUp?: boolean }> = ({ t, tu
               </td>
               <td class="num">{fv(x.aloneTroughV, 'V')}</td>
               <td class="num">{fv(x.keyDownTroughV, 'V')}</td>
-              {t.crossRegulation!.toleranceFraction !== null ? <td class="num">{fv(x.toleranceTroughV, 'V')}</td> : null}
+              {t.crossRegulation!.toleranceFraction !== null
+                ? <td class="num">{fv(x.toleranceTroughV, 'V')}</td> : null}
               <td class="num">{fv(x.keyUpTroughV, 'V')}</td>
               <td class="num">{x.requiredMinV > 0 ? fv(x.requiredMinV, 'V') : '—'}</td>
             </tr>
@@ -363,16 +368,20 @@ export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null 
     <div class="supply-results">
       <p class="summary-line">
         {report.mains
-          ? `Mains ${fv(report.mains.lowV, 'V')} / ${fv(report.mains.nominalV, 'V')} / ${fv(report.mains.highV, 'V')} at ${fv(report.mains.frequencyHz, 'Hz')}. `
+          ? `Mains ${fv(report.mains.lowV, 'V')} / ${fv(report.mains.nominalV, 'V')} / ${fv(report.mains.highV, 'V')} ` +
+            `at ${fv(report.mains.frequencyHz, 'Hz')}. `
           : 'No mains: battery or external DC supply. '}
         {report.mains
-          ? `Headroom is judged at the lowest voltage (low mains, key-down); heat at the highest (high mains, CW duty ${pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.`
-          : `Headroom is judged at the battery's end voltage with the key down; heat with it fully charged (CW duty ${pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.`}
+          ? 'Headroom is judged at the lowest voltage (low mains, key-down); heat at the highest (high mains, CW ' +
+            `duty ${pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.`
+          : 'Headroom is judged at the battery\'s end voltage with the key down; heat with it fully charged (CW ' +
+            `duty ${pct(report.keyingDuty)}); a continuous tune-up carrier is shown too.`}
         {report.allConverged ? '' : ' Some simulations did not settle: their rows are marked.'}
       </p>
       <p class="caution-box">
-        Mains, charged capacitors and shorted batteries can kill or burn: these are planning figures, not a safety approval.
-        Fuse and earth the supply, discharge reservoirs before touching, and follow your local electrical code and licensed practice.
+        Mains, charged capacitors and shorted batteries can kill or burn: these are planning figures, not a safety
+        approval. Fuse and earth the supply, discharge reservoirs before touching, and follow your local electrical code
+        and licensed practice.
       </p>
       {report.rails.map((r) => (r.kind === 'rectified' ? <RectifiedCard rail={r} />
         : r.kind === 'regulated' ? <RegulatedCard rail={r} /> : <BatteryCard rail={r} />))}
@@ -385,9 +394,12 @@ export const SupplyResults: FC<{ report: SupplyReport; heat?: HeatBudget | null 
           ))}
           {report.primary ? (
             <p>
-              <strong>Primary fuse:</strong> {report.primary.fuse.ratedA !== null ? `${report.primary.fuse.characteristic}${fv(report.primary.fuse.ratedA, 'A')}` : 'beyond the IEC 60127 series'}
+              <strong>Primary fuse:</strong>{' '}
+              {report.primary.fuse.ratedA !== null
+                ? `${report.primary.fuse.characteristic}${fv(report.primary.fuse.ratedA, 'A')}` : 'beyond the IEC 60127 series'}
               {' '}({primaryTypeWords(report)})
-              {report.primary.fittedA !== null ? ` (fitted ${fv(report.primary.fittedA, 'A')})` : ''}. {report.primary.fuse.reasoning}
+              {report.primary.fittedA !== null ? ` (fitted ${fv(report.primary.fittedA, 'A')})` : ''}.{' '}
+              {report.primary.fuse.reasoning}
             </p>
           ) : null}
           {report.primary ? <PrimaryFaultTable checks={report.primary.faultChecks} /> : null}
