@@ -3,8 +3,21 @@ import type { Project, Supplier } from '../core/model';
 import { costingSpec, offerSpec, partSpec, supplierSpec } from '../core/spec';
 import type { CostingFields, OfferFields, PartFields } from '../core/edits/catalog';
 import { specFormSchema } from './forms/spec-schema';
+import { z } from 'zod';
+import { parseForm } from '../core/spec/derive';
+import { readRatingBoxes } from '../core/spec/rating-boxes';
 
-export const partSchema = specFormSchema<PartFields>(partSpec);
+// the part's own boxes from its spec, and one box per rating (r.<key>, rating-boxes.ts) merged into its ratings
+export const partSchema = z.record(z.string(), z.string()).transform((values, ctx): PartFields => {
+  const r = parseForm(partSpec, values);
+  const boxes = readRatingBoxes(values);
+  if (!r.ok) for (const [path, message] of Object.entries(r.errors)) ctx.addIssue({ code: 'custom', path: [path], message });
+  for (const e of boxes.errors) ctx.addIssue({ code: 'custom', path: [e.field], message: e.message });
+  if (!r.ok || boxes.errors.length) return z.NEVER;
+  const v = r.value as PartFields;
+  // a rating typed both in its box and in the other-ratings text: the box is the one the form shows for it
+  return { ...v, ratings: { ...v.ratings, ...boxes.ratings } };
+});
 export const offerSchema = specFormSchema<OfferFields>(offerSpec);
 export const supplierSchema = specFormSchema<Supplier>(supplierSpec);
 export const costingSchema = specFormSchema<CostingFields>(costingSpec);

@@ -27,6 +27,24 @@ describe('parts catalog page', () => {
     expect(html).toContain('1: 2.15, 10: 1.82, 50: 1.49');
   });
 
+  it('takes a part’s ratings one box per rating of its category, and shows them back in their boxes', async () => {
+    const v = (await stored()).version;
+    // SI prefixes (BIPM SI Brochure 9th ed., Table 7): 4700 µF = 4.7e-3 F; the capacitor box is in µF
+    const res = await post(`/projects/${ID}/parts`, { version: String(v), description: 'Electrolytic 4700 µF 50 V', category: 'capacitor',
+      'r.capacitanceF': '4700', 'r.voltageV': '50', 'r.rippleA': '2400 mA', 'r.dielectric': 'electrolytic', ratings: 'note=105 °C' });
+    expect(res.status).toBe(303);
+    const part = (await stored()).parts.at(-1)!;
+    expect(part.ratings).toEqual({ note: '105 °C', capacitanceF: 4.7e-3, voltageV: 50, rippleA: 2.4, dielectric: 'electrolytic' });
+    const html = await (await t.app.request(`http://localhost/projects/${ID}/parts`)).text();
+    expect(html).toContain(`name="r.capacitanceF" type="text" value="4700"`);
+    expect(html).toContain('Rated voltage<span class="unit"> (V)</span>');
+    // the category switch redraws the boxes of the new category, keeping a value typed in a box it shares
+    const boxes = await (await t.app.request(`http://localhost/projects/${ID}/parts/rating-boxes?idp=ap&category=fuse&r.ratedA=1.6`)).text();
+    expect(boxes).toContain('Rated current<span class="unit"> (A)</span>');
+    expect(boxes).toContain('value="1.6"');
+    expect(boxes).not.toContain('r.capacitanceF');
+  });
+
   it('adds a part, then an offer with price breaks', async () => {
     const v = (await stored()).version;
     const res = await post(`/projects/${ID}/parts`, { version: String(v), description: 'Zener diode 5.1 V 0.5 W', category: 'diode', ratings: 'voltageV=5.1, powerW=500m' });
@@ -124,8 +142,16 @@ describe('bad values are refused with the field named, kept as typed, nothing sa
   it('a currency that is not a three-letter code', () =>
     refused(`/projects/${ID}/parts/p-c4700/offers/o9`, { supplier: 'Northfield Components', sku: 'NC-E4735', currency: 'US1', breaks: '1: 2.15', minOrder: '1', orderMultiple: '1', stockNote: '' }, 'Currency must be a three-letter code', 'US1'));
 
-  it('ratings that are not key=value', () =>
-    refused(`/projects/${ID}/parts/p-pcb`, { description: 'PCB', category: 'pcb', ratings: 'layers 2' }, 'Ratings: &quot;layers 2&quot; is not key=value', 'layers 2'));
+  it('ratings that are neither a rating name with its value nor key=value', () =>
+    refused(`/projects/${ID}/parts/p-pcb`, { description: 'PCB', category: 'pcb', ratings: 'layers 2' }, 'Ratings: &quot;layers 2&quot; is not a rating', 'layers 2'));
+
+  it('a rating box out of its range names the rating and keeps every box as typed', async () => {
+    // a capacitor's rated voltage must be above 0 V (parts-categories.ts; common practice, no source)
+    const fields = { description: 'Electrolytic 4700 µF', category: 'capacitor', 'r.capacitanceF': '4700', 'r.voltageV': '-35', 'r.rippleA': '2.4', ratings: '' };
+    await refused(`/projects/${ID}/parts/p-c4700`, fields, 'Rated voltage must be more than 0 V', '-35');
+    const res = await post(`/projects/${ID}/parts/p-c4700`, { version: String((await stored()).version), ...fields }, true);
+    expect(await res.text()).toContain('value="4700"');
+  });
 
   it('spares above the one limit (1000)', async () => {
     const p = await stored();

@@ -2,21 +2,69 @@
 import type { FC } from 'hono/jsx';
 import type { Offer, Part, Project } from '../../src/core/model';
 import { formValues, offerSpec, partSpec } from '../../src/core/spec';
-import { ratingKeysHelp } from '../../src/core/spec/parts-categories';
+import { categoryOf, PART_CATEGORIES } from '../../src/core/spec/parts-categories';
+import { ratingBoxSpec, ratingBoxValues } from '../../src/core/spec/rating-boxes';
+import { fieldId } from './field-id';
 import { FormErrors, type FieldState } from './fields';
 import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
 import { Version, hx } from './supply-transformer';
 
 // Form text of stored values, from the specs (src/core/spec/parts.ts); a new part or offer starts with empty boxes.
+// The ratings: one box per rating of the category (rating-boxes.ts), the rest as readable text ("Other ratings").
 export function partValues(p: Part | null): Record<string, string> {
-  return p ? formValues(partSpec, p) : { description: '', category: '', ratings: '' };
+  if (!p) return { description: '', category: '', ratings: '' };
+  return { ...formValues(partSpec, p), ...ratingBoxValues(p) };
 }
 
 export function offerValues(o: Offer | null, currency: string): Record<string, string> {
   if (o) return formValues(offerSpec, o);
   return { ...formValues(offerSpec, { minOrder: 1, orderMultiple: 1 }), currency };
 }
+
+/** The category list, with a stored name that is not on it (an older alias, or a name of the builder's) kept. */
+function categoryOptions(value: string): [string, string][] {
+  const list: [string, string][] = PART_CATEGORIES.map((d) => [d.id, d.label]);
+  if (value && !PART_CATEGORIES.some((d) => d.id === value)) {
+    const d = categoryOf(value);
+    list.unshift([value, d.id === 'other' ? `${value} (not on the list: read as Other)` : `${d.label} (${value})`]);
+  }
+  return list;
+}
+
+/** The boxes of one category's ratings, each from its spec (label, display unit, range); swapped on a category change. */
+export const RatingBoxes: FC<{ state: FieldState; idp: string; category: string }> = ({ state, idp, category }) => {
+  const spec = ratingBoxSpec(category);
+  const keys = Object.keys(spec.fields);
+  return (
+    <span id={`ratings-${idp}`} class="rating-boxes">
+      {keys.length ? keys.map((k) => <SpecField spec={spec} k={k} idp={idp} state={state} size={7} hint="" />) : <span class="hint">No rated fields for this category: use Other ratings.</span>}
+    </span>
+  );
+};
+
+/** The category as a choice from the list; changing it redraws the rating boxes (keeping what was typed). */
+const CategorySelect: FC<{ state: FieldState; idp: string; projectId: string }> = ({ state, idp, projectId }) => {
+  const value = state.values.category ?? '';
+  const error = state.errors.category;
+  const id = fieldId(partSpec.name, idp, 'category');
+  return (
+    <label class={`field${error ? ' has-error' : ''}`} for={id}>
+      <span class="label">Category</span>
+      <select id={id} name="category" aria-invalid={error ? 'true' : undefined}
+        hx-get={`/projects/${projectId}/parts/rating-boxes?idp=${encodeURIComponent(idp)}`} hx-trigger="change"
+        hx-target={`#ratings-${idp}`} hx-swap="outerHTML" hx-include="closest form">
+        {value === '' ? <option value="" selected>(choose a category)</option> : null}
+        {categoryOptions(value).map(([v, t]) => (
+          <option value={v} selected={v === value}>
+            {t}
+          </option>
+        ))}
+      </select>
+      {error ? <span class="error" role="alert">{error}</span> : null}
+    </label>
+  );
+};
 
 // The help lines show on the add forms only: repeated under every stored row they push the rows apart.
 const OfferFields: FC<{ state: FieldState; idp: string; help?: boolean }> = ({ state, idp, help }) => (
@@ -31,12 +79,12 @@ const OfferFields: FC<{ state: FieldState; idp: string; help?: boolean }> = ({ s
   </>
 );
 
-export const PartFields: FC<{ state: FieldState; idp: string; help?: boolean }> = ({ state, idp, help }) => (
+export const PartFields: FC<{ state: FieldState; idp: string; projectId: string; help?: boolean }> = ({ state, idp, projectId, help }) => (
   <>
     <SpecField spec={partSpec} k="description" idp={idp} state={state} size={56} hint={help ? undefined : ''} />
-    <SpecField spec={partSpec} k="category" idp={idp} state={state} size={16} list="part-categories" />
-    {/* the ratings the part's category is checked with (design roles), e.g. "Heatsink: thetaSaKPerW (K/W)" */}
-    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={48} hint={`${help ? `${partSpec.fields.ratings.help} · ` : ''}${ratingKeysHelp(state.values.category ?? '')}`} />
+    <CategorySelect state={state} idp={idp} projectId={projectId} />
+    <RatingBoxes state={state} idp={idp} category={state.values.category ?? ''} />
+    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={36} label="Other ratings" hint={help ? partSpec.fields.ratings.help : ''} />
   </>
 );
 
@@ -64,7 +112,7 @@ export const PartCard: FC<{ project: Project; part: Part; failed?: Failed; uses:
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-          <PartFields state={state} idp={`p-${part.id}`} />
+          <PartFields state={state} idp={`p-${part.id}`} projectId={project.id} />
           <button type="submit">Save part</button>
           <a class="danger" href={`${base}/delete`}>
             Delete part…

@@ -61,7 +61,7 @@ export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPar
           <FormErrors state={addState} />
           <div class="row">
             <span class="row-label">Add a part:</span>
-            <PartFields state={addState} idp="ap" help />
+            <PartFields state={addState} idp="ap" projectId={project.id} help />
             <button type="submit">Add part</button>
           </div>
         </form>

@@ -8,7 +8,7 @@ import { PART_CATEGORIES, type RatingChoice, type RatingField } from './parts-ca
 import { MAX_RATINGS, parseRatings, ratingsCodec, ratingsText } from './parts-text';
 
 type Parsed<T> = { ok: true; value: T } | { ok: false; message: string };
-type Known = { kind: 'number'; f: RatingField } | { kind: 'choice'; c: RatingChoice };
+export type Known = { kind: 'number'; f: RatingField } | { kind: 'choice'; c: RatingChoice };
 
 // one definition per key (θjc is the same field for a MOSFET and a regulator)
 const BY_KEY = new Map<string, Known>();
@@ -27,6 +27,9 @@ const NAMES: { name: string; key: string; k: Known }[] = [...BY_KEY.entries()]
     return [...names].map((name) => ({ name, key, k }));
   })
   .sort((a, b) => b.name.length - a.name.length);
+
+/** The field or list a rating key is defined by in some category, if any. */
+export const ratingDef = (key: string): Known | undefined => BY_KEY.get(key);
 
 /** The label of a rating key ("Rated voltage"), or the key itself when no category defines it. */
 export const ratingLabel = (key: string): string => {

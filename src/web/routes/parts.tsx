@@ -20,7 +20,7 @@ import * as F from '../parts-forms';
 import { refusal } from '../supply-forms';
 import { Layout } from '../../../views/layout';
 import { PartsBody } from '../../../views/pages/parts';
-import { partValues, offerValues } from '../../../views/components/parts-part';
+import { partValues, offerValues, RatingBoxes } from '../../../views/components/parts-part';
 import { costingValues } from '../../../views/components/parts-costing';
 import { ConfirmItemPage } from '../../../views/components/confirm-item';
 import type { Failed } from '../../../views/components/failed';
@@ -61,6 +61,13 @@ export function partsRoutes(deps: Deps) {
     const project = await loadProject(deps.database.db, c.req.param('id'));
     if (!project) return c.notFound();
     return sendPage(c, partsPage(project, undefined, doneNotice(c) ?? importedNotice(c), c.req.query('open')));
+  });
+
+  // the part form's rating boxes for the category just chosen, with what was typed in the form kept (htmx swap)
+  app.get('/projects/:id/parts/rating-boxes', (c) => {
+    const values = c.req.query();
+    const idp = /^[\w-]{1,80}$/.test(values.idp ?? '') ? values.idp! : 'ap';
+    return c.html(<RatingBoxes state={{ values, errors: {} }} idp={idp} category={values.category ?? ''} />);
   });
 
   // ------------------------------------------------------------ a supplier's price list: preview until Import
