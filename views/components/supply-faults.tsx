@@ -18,7 +18,8 @@ export const WindingFuseTable: FC<{ wf: WindingFuseReport }> = ({ wf }) => (
           <th scope="row">Fuse in the {wf.windingName} lead, before the rectifier</th>
           <td>
             {wf.fittedA !== null ? `fitted ${fv(wf.fittedA, 'A')} (${wf.sheet})` : 'none entered'}; recommended{' '}
-            {wf.fuse.ratedA !== null ? `T${fv(wf.fuse.ratedA, 'A')}` : 'beyond the series'} for {fv(wf.fuse.loadA, 'A')} RMS continuous
+            {wf.fuse.ratedA !== null ? `T${fv(wf.fuse.ratedA, 'A')}` : 'beyond the series'} for
+            {' '}{fv(wf.fuse.loadA, 'A')} RMS continuous
           </td>
         </tr>
         <tr>
@@ -27,7 +28,8 @@ export const WindingFuseTable: FC<{ wf: WindingFuseReport }> = ({ wf }) => (
             {wf.reactanceOhm ? `, leakage ${fv(wf.leakageH ?? 0, 'H')} = ${fv(wf.reactanceOhm, 'Ω')} reactance` : ''})
           </th>
           <td>
-            shorted reservoir {fv(wf.outputShortLowA, 'A')} (low mains); short at the rectifier input {fv(wf.inputShortLowA, 'A')} to{' '}
+            shorted reservoir {fv(wf.outputShortLowA, 'A')} (low mains); short at the rectifier input
+            {' '}{fv(wf.inputShortLowA, 'A')} to{' '}
             {fv(wf.inputShortHighA, 'A')}
           </td>
         </tr>
@@ -35,7 +37,8 @@ export const WindingFuseTable: FC<{ wf: WindingFuseReport }> = ({ wf }) => (
           <tr>
             <th scope="row">Clearing (IEC 60127-2 {wf.check.sheet})</th>
             <td>
-              {wf.check.multiple.toFixed(1)} × In: {clearText(wf.check)}, wanted within {fv(wf.check.allowedS, 's')}:{' '}
+              {wf.check.multiple.toFixed(1)} × In: {clearText(wf.check)}, wanted within
+              {' '}{fv(wf.check.allowedS, 's')}:{' '}
               <span class={sev(wf.check)}>{verdict(wf.check)}</span>
             </td>
           </tr>

@@ -29,7 +29,9 @@ export const HeatCard: FC<{ heat: HeatBudget }> = ({ heat }) => (
           <td class="num">{fv(heat.totalW, 'W')}</td>
           <td>
             {heat.riseK !== null
-              ? `rise ${fv(heat.riseK, 'K')} over the ${fv(heat.ambientC, '°C')} room (${fv(heat.areaM2! * 1e4, 'cm²')} at ${heat.uWPerM2K} W/(m²·K)): about ${fv(heat.insideC, '°C')} inside, the ambient of the rectifier, regulator and PA heatsink checks`
+              ? `rise ${fv(heat.riseK, 'K')} over the ${fv(heat.ambientC, '°C')} room ` +
+                `(${fv(heat.areaM2! * 1e4, 'cm²')} at ${heat.uWPerM2K} W/(m²·K)): about ${fv(heat.insideC, '°C')} ` +
+                'inside, the ambient of the rectifier, regulator and PA heatsink checks'
               : 'enclosure not entered: no rise computed'}
           </td>
         </tr>
@@ -38,7 +40,8 @@ export const HeatCard: FC<{ heat: HeatBudget }> = ({ heat }) => (
     <ul class="findings">
       {heat.findings.map((f) => (
         <li>
-          <span class={`sev sev-${f.severity}`}>{f.severity}</span> {f.message} <span class="source">(Source: {sourceText(f.source)})</span>
+          <span class={`sev sev-${f.severity}`}>{f.severity}</span> {f.message}{' '}
+          <span class="source">(Source: {sourceText(f.source)})</span>
         </li>
       ))}
     </ul>

@@ -17,14 +17,17 @@ export const KeyingTransientBlock: FC<{ rail: RectifiedRailReport }> = ({ rail }
       <h4>Keying transient</h4>
       <div class="plot-wrap" dangerouslySetInnerHTML={{ __html: keyingTransientSvg(rail.railName, k) }} />
       <p class="summary-line">
-        {k.stageName} at {k.wpm} WPM (from {k.wpmFrom}): the first dot gives {fv(first.leadOutputW, 'W')} over its first{' '}
-        {fv(k.leadS, 's', 2)} ({sdb(first.leadVsSteadyDb)}) and {fv(first.outputW, 'W')} over the dot ({sdb(first.vsSteadyDb)}),
-        against {fv(k.steadyOutputW, 'W')} with the key held at {fv(k.keyDownMeanV, 'V')}; the rail rests at {fv(k.keyUpMeanV, 'V')} key-up.
+        {k.stageName} at {k.wpm} WPM (from {k.wpmFrom}): the first dot
+        gives {fv(first.leadOutputW, 'W')} over its first{' '}
+        {fv(k.leadS, 's', 2)} ({sdb(first.leadVsSteadyDb)}) and {fv(first.outputW, 'W')} over the dot
+        ({sdb(first.vsSteadyDb)}), against {fv(k.steadyOutputW, 'W')} with the key
+        held at {fv(k.keyDownMeanV, 'V')}; the rail rests at {fv(k.keyUpMeanV, 'V')} key-up.
         Caution above {sdb(k.limitDb)}.
       </p>
       <LoadModelDetails model={k.loadModel}>
         Simulated at {fv(k.mainsV, 'V')} mains with the winding's {fv(k.windingOhm, 'Ω')}
-        {k.leakageH > 0 ? ` and ${fv(k.leakageH, 'H')} leakage` : ' (leakage not included)'}, {k.stepsPerCycle} steps per mains cycle; the
+        {k.leakageH > 0 ? ` and ${fv(k.leakageH, 'H')} leakage` : ' (leakage not included)'}, {k.stepsPerCycle} steps
+        per mains cycle; the
         winding is simulated on its own (the load of the transformer's other windings on the shared primary is in the
         transformer's joint simulation, not here).
       </LoadModelDetails>
@@ -51,7 +54,8 @@ export const LoadModelDetails: FC<{ model: RailLoadModel; children?: Child }> = 
             <td>{p.law === 'PA load line' ? `PA load line, P ∝ (V − Vsat)²` : p.law}</td>
             <td class="num">
               {fv(p.keyUpA, 'A')} / {fv(p.keyDownA, 'A')}
-              {p.law === 'PA load line' ? <span class="sub">at {fv(model.keyDown.pa?.referenceV ?? NaN, 'V')}</span> : null}
+              {p.law === 'PA load line'
+                ? <span class="sub">at {fv(model.keyDown.pa?.referenceV ?? NaN, 'V')}</span> : null}
             </td>
           </tr>
         ))}

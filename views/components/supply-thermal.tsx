@@ -11,16 +11,20 @@ import { formatValue as fv } from '../../src/core/units';
 export const BridgeLine: FC<{ b: BridgeThermal }> = ({ b }) => {
   const t = b.result;
   const load = b.basis === 'tune-up' ? 'continuous carrier (sized for tune-up)' : 'CW duty-averaged';
-  const part = b.assumed ? 'assumed 4-8 A bridge' : `θjc ${fv(b.mount.thetaJcKPerW, 'K/W')}, Tj max ${fv(b.mount.tjMaxC, '°C')}`;
+  const part = b.assumed
+    ? 'assumed 4-8 A bridge' : `θjc ${fv(b.mount.thetaJcKPerW, 'K/W')}, Tj max ${fv(b.mount.tjMaxC, '°C')}`;
   return (
     <p class="summary-line bridge-thermal">
-      <strong>Rectifier heat:</strong> {fv(t.powerW, 'W')} {load} ({fv(b.otherW, 'W')} {b.basis === 'tune-up' ? 'in CW use' : 'key-down held'}),{' '}
+      <strong>Rectifier heat:</strong> {fv(t.powerW, 'W')} {load} ({fv(b.otherW, 'W')}{' '}
+      {b.basis === 'tune-up' ? 'in CW use' : 'key-down held'}),{' '}
       {airWords(t.ambientC, b.inside)}; {part}.{' '}
       {b.heatsinkFitted
         ? `On the ${fv(b.mount.thetaSaKPerW!, 'K/W')} heatsink the junction reaches about ${fv(t.junctionC!, '°C')}`
-        : `Without a heatsink (θja ${fv(b.freeAirKPerW, 'K/W')}) the junction reaches about ${fv(t.freeAirJunctionC, '°C')}`}{' '}
+        : `Without a heatsink (θja ${fv(b.freeAirKPerW, 'K/W')}) the junction reaches about ` +
+          `${fv(t.freeAirJunctionC, '°C')}`}{' '}
       against a {fv(t.targetC, '°C')} target;{' '}
-      {t.requiredThetaSaKPerW !== null ? `a heatsink of ${fv(t.requiredThetaSaKPerW, 'K/W')} or lower meets it` : 'no single heatsink meets it'}
+      {t.requiredThetaSaKPerW !== null
+        ? `a heatsink of ${fv(t.requiredThetaSaKPerW, 'K/W')} or lower meets it` : 'no single heatsink meets it'}
       {!t.needsHeatsink ? ' (none needed)' : ''}.
     </p>
   );
@@ -31,14 +35,18 @@ export const RegulatedBleederLine: FC<{ b: RegulatedBleederReport }> = ({ b }) =
     <strong>Output bleeder:</strong>{' '}
     {b.fittedTimeS !== null ? (
       <>
-        {b.fittedOhm !== null ? `${fv(b.fittedOhm, 'Ω')}: ` : ''}below {fv(b.safeV, 'V')} within about {fv(b.fittedTimeS, 's')} after switch-off (an upper
-        bound; safe level: {b.safeSource})
-        {b.fittedW !== null ? `; it dissipates ${fv(b.fittedW, 'W')} at ${fv(b.startV, 'V')}${b.ratedW !== null ? `, rated ${fv(b.ratedW, 'W')}` : ', rating not stated'}` : ''}.
+        {b.fittedOhm !== null ? `${fv(b.fittedOhm, 'Ω')}: ` : ''}below {fv(b.safeV, 'V')} within about
+        {' '}{fv(b.fittedTimeS, 's')} after switch-off (an upper bound; safe level: {b.safeSource})
+        {b.fittedW !== null
+          ? `; it dissipates ${fv(b.fittedW, 'W')} at ${fv(b.startV, 'V')}` +
+            (b.ratedW !== null ? `, rated ${fv(b.ratedW, 'W')}` : ', rating not stated')
+          : ''}.
       </>
     ) : (
       <>
         the output may stay at {fv(b.startV, 'V')}: {b.why}.
-        {b.suggestedOhm !== null ? ` Suggested: ${fv(b.suggestedOhm, 'Ω')} (${fv(b.suggestedW!, 'W')} at ${fv(b.startV, 'V')}).` : ''}
+        {b.suggestedOhm !== null
+          ? ` Suggested: ${fv(b.suggestedOhm, 'Ω')} (${fv(b.suggestedW!, 'W')} at ${fv(b.startV, 'V')}).` : ''}
         {b.fittedW !== null ? ` The fitted bleeder dissipates ${fv(b.fittedW, 'W')}.` : ''}
       </>
     )}
