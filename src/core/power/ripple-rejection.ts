@@ -17,26 +17,52 @@ export function outputRipplePpV(inputPpV: number, rejectionDb: number, inDropout
 /** The corner with the most ripple at the output (null when the rejection is not stated or there are no corners). */
 export function worstRippleCorner(corners: RegulatedCorner[]): RegulatedCorner | null {
   let worst: RegulatedCorner | null = null;
-  for (const c of corners) if (c.outputRipplePpV !== null && (worst === null || c.outputRipplePpV > worst.outputRipplePpV!)) worst = c;
+  for (const c of corners) {
+    if (c.outputRipplePpV !== null && (worst === null || c.outputRipplePpV > worst.outputRipplePpV!)) worst = c;
+  }
   return worst;
 }
 
 const mv = (v: number) => `${(v * 1000).toFixed(v < 0.01 ? 2 : 1)} mV`;
 
 /** Output ripple against the builder's target for the rail (e.g. a direct-conversion receiver's rail). */
-export function rippleFindings(railName: string, rejectionDb: number | null, targetV: number | null, corners: RegulatedCorner[]): Finding[] {
+export function rippleFindings(
+  railName: string, rejectionDb: number | null, targetV: number | null, corners: RegulatedCorner[],
+): Finding[] {
   const base = { rule: 'regulator.ripple', subject: railName, unit: 'V', source: 'supply.ripple-rejection' as const };
   const maxIn = Math.max(0, ...corners.map((c) => c.inputRipplePpV));
   if (rejectionDb === null) {
     if (targetV === null) return [];
-    return [{ ...base, severity: 'caution', value: null, limit: targetV, message: `${railName}: an output ripple target of ${mv(targetV)} p-p is set but the regulator's ripple rejection is not; enter it from the datasheet (dB at 100/120 Hz). Its input carries up to ${mv(maxIn)} p-p.` }];
+    return [{
+      ...base, severity: 'caution', value: null, limit: targetV,
+      message: `${railName}: an output ripple target of ${mv(targetV)} p-p is set but the regulator's ripple ` +
+        'rejection is not; enter it from the datasheet (dB at 100/120 Hz). Its input carries up to ' +
+        `${mv(maxIn)} p-p.`,
+    }];
   }
   const w = worstRippleCorner(corners);
   if (!w || w.outputRipplePpV === null) return [];
-  const how = `${mv(w.inputRipplePpV)} p-p in, ${rejectionDb} dB rejection${w.inDropout ? ' (but the regulator is in dropout there, so the ripple passes)' : ''}`;
-  if (targetV === null) return [{ ...base, severity: 'ok', value: w.outputRipplePpV, limit: null, message: `${railName}: about ${mv(w.outputRipplePpV)} p-p ripple at the output (${w.label}: ${how}). Set a target on the rail if a receiver runs from it.` }];
-  if (w.outputRipplePpV > targetV) return [{ ...base, severity: 'fail', value: w.outputRipplePpV, limit: targetV, message: `${railName}: ${mv(w.outputRipplePpV)} p-p ripple at the output (${w.label}: ${how}) exceeds the ${mv(targetV)} target; a receiver on it will hum. Use a larger reservoir, an RC filter before the regulator, or a regulator with more rejection (an adjust-pin bypass capacitor adds rejection on adjustable types).` }];
-  return [{ ...base, severity: 'ok', value: w.outputRipplePpV, limit: targetV, message: `${railName}: ${mv(w.outputRipplePpV)} p-p ripple at the output (${w.label}: ${how}) is within the ${mv(targetV)} target.` }];
+  const dropout = w.inDropout ? ' (but the regulator is in dropout there, so the ripple passes)' : '';
+  const how = `${mv(w.inputRipplePpV)} p-p in, ${rejectionDb} dB rejection${dropout}`;
+  const at = `${mv(w.outputRipplePpV)} p-p ripple at the output (${w.label}: ${how})`;
+  if (targetV === null) {
+    return [{
+      ...base, severity: 'ok', value: w.outputRipplePpV, limit: null,
+      message: `${railName}: about ${at}. Set a target on the rail if a receiver runs from it.`,
+    }];
+  }
+  if (w.outputRipplePpV > targetV) {
+    return [{
+      ...base, severity: 'fail', value: w.outputRipplePpV, limit: targetV,
+      message: `${railName}: ${at} exceeds the ${mv(targetV)} target; a receiver on it will hum. Use a larger ` +
+        'reservoir, an RC filter before the regulator, or a regulator with more rejection (an adjust-pin bypass ' +
+        'capacitor adds rejection on adjustable types).',
+    }];
+  }
+  return [{
+    ...base, severity: 'ok', value: w.outputRipplePpV, limit: targetV,
+    message: `${railName}: ${at} is within the ${mv(targetV)} target.`,
+  }];
 }
 
 /** True when no corner feeds the regulator any ripple (a battery or other steady source): none reaches the output. */
