@@ -38,7 +38,7 @@ export const RatingBoxes: FC<{ state: FieldState; idp: string; category: string 
   const keys = Object.keys(spec.fields);
   return (
     <span id={`ratings-${idp}`} class="rating-boxes">
-      {keys.length ? keys.map((k) => <SpecField spec={spec} k={k} idp={idp} state={state} size={7} hint="" />) : <span class="hint">No rated fields for this category: use Other ratings.</span>}
+      {keys.length ? keys.map((k) => <SpecField spec={spec} k={k} idp={idp} state={state} size={7} hint="" />) : <span class="hint">{category ? 'No rated fields for this category: use Other ratings.' : 'Choose a category to get its rating boxes.'}</span>}
     </span>
   );
 };

@@ -29,6 +29,16 @@ export function ratingBoxSpec(category: string): Spec {
 /** Every rating box of every category, for the form's field labels. */
 export const allRatingBoxSpecs = (): Spec[] => PART_CATEGORIES.map((d) => ratingBoxSpec(d.id));
 
+/** A value in its box: bare in the display unit shown beside the box ("35", not "35 V") when that reads back exactly. */
+function boxText(v: number, f: NumberField): string {
+  const t = numberText(v, f);
+  const sym = ` ${f.display.symbol}`;
+  if (!f.display.symbol || !t.endsWith(sym)) return t;
+  const bare = t.slice(0, -sym.length);
+  const back = readNumber(bare, f);
+  return back.ok && back.value === v ? bare : t;
+}
+
 /** Form text of a part's ratings: its category's ratings in their boxes, the rest in the "Other ratings" text. */
 export function ratingBoxValues(part: Pick<Part, 'category' | 'ratings'>): Record<string, string> {
   const def = categoryOf(part.category);
@@ -38,7 +48,7 @@ export function ratingBoxValues(part: Pick<Part, 'category' | 'ratings'>): Recor
   for (const [k, v] of Object.entries(part.ratings)) {
     const d = ratingDef(k);
     if (!own.has(k) || !d) rest[k] = v;
-    else if (d.kind === 'number' && typeof v === 'number') out[BOX_PREFIX + k] = numberText(v, d.f);
+    else if (d.kind === 'number' && typeof v === 'number') out[BOX_PREFIX + k] = boxText(v, d.f);
     else if (d.kind === 'choice' && typeof v === 'string' && d.c.options.includes(v)) out[BOX_PREFIX + k] = v;
     else rest[k] = v;
   }
