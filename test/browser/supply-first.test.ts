@@ -67,4 +67,26 @@ describe.skipIf(!hasChromium)('supply page leads with its deciding corners', () 
     await page.screenshot({ path: artifactPath('supply-first-screen-390.png') });
     await page.setViewportSize({ width: 1280, height: 900 });
   });
+
+  it('without JavaScript the transformer form still saves (Post/Redirect/Get) and the glance follows the change', async () => {
+    const plain = session.server.url;
+    const noJs = await page.context().newPage();
+    const cdp = await page.context().newCDPSession(noJs);
+    await cdp.send('Emulation.setScriptExecutionDisabled', { value: true });
+    await noJs.goto(plain + SUPPLY);
+    expect(await noJs.evaluate(() => 'htmx' in window).catch(() => false)).toBe(false);
+    expect(await noJs.locator('#supply-glance tr[data-corner="lowTol-keyDown"]').count()).toBe(3);
+    // empty = no tolerance corner (the field's help says so); the field keeps the id fix links use
+    const box = noJs.locator('#transformer--t-tr-main--secondaryToleranceFraction');
+    await box.fill('');
+    const form = noJs.locator('form', { has: box });
+    await Promise.all([noJs.waitForURL(plain + SUPPLY), form.getByRole('button', { name: 'Save' }).click()]);
+    await noJs.waitForLoadState('load');
+    expect(await noJs.locator('#transformer--t-tr-main--secondaryToleranceFraction').inputValue()).toBe('');
+    expect(await noJs.locator('#supply-glance tr[data-corner="lowTol-keyDown"]').count()).toBe(0);
+    const glance = (await noJs.locator('#supply-glance').boundingBox())!;
+    const firstForm = (await noJs.locator('#supply form').first().boundingBox())!;
+    expect(glance.y).toBeLessThan(firstForm.y);
+    await noJs.close();
+  });
 });

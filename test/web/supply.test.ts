@@ -27,7 +27,12 @@ describe('supply page', () => {
     expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
     for (const name of ['T1 mains transformer', '16 V winding', '20 V winding', '13.8 V signal rail', 'PA rail (unregulated, ~24 V)']) expect(html).toContain(name);
     expect(html).toContain('id="supply"');
-    // the computed results below the editor are the ones evaluate() gives for the stored project
+    // the page leads with every rail's deciding corners, then the editors, then the full computed results
+    const glance = html.indexOf('id="supply-glance"');
+    expect(glance).toBeGreaterThan(0);
+    expect(html.indexOf('<form', html.indexOf('id="supply"'))).toBeGreaterThan(glance);
+    expect(html.indexOf('class="supply-results"')).toBeGreaterThan(html.indexOf('aria-label="Add a rail"'));
+    // the computed results below the editors are the ones evaluate() gives for the stored project
     const supply = evaluate(await stored()).supply!;
     expect(html).toContain('class="supply-results"');
     expect(html).toContain(`Mains ${formatValue(supply.mains!.lowV, 'V')} / ${formatValue(supply.mains!.nominalV, 'V')} / ${formatValue(supply.mains!.highV, 'V')}`);
