@@ -10,6 +10,7 @@ import { monteCarloLpf } from './lpf-monte-carlo';
 import { validateRfInputs, validateRfSettings } from './lpf-validate';
 import { evaluatePa } from './pa';
 import { spectrumFindings } from './pa-spectrum-findings';
+import { foldClipping } from './pa-clip';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
 import { fieldLabel } from './field-labels';
@@ -203,6 +204,20 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const sourced = src && lpfRes?.design
     ? { label: src.label, rows: harmonicsFromSource(ladderOf(lpfRes.design), frequencyHz, src.kind, src.zsAt) }
     : null;
+  // a class B/C stage clips into the SWR circle's loads above its design load (worst at reflection phase 0, |z| = S):
+  // its flat-topped harmonics there, through the filter into that load, fold into the bands' worst end (pa-clip)
+  const swrWorst = Math.min(100, Math.max(1, finite(project.rf.worstSwr, 1)));
+  const cls = paStage?.pa?.amplifierClass;
+  const bands = spectrum && sourced && lpfRes?.design && (cls === 'B' || cls === 'C') && swrWorst > 1
+    ? (() => {
+      const l = ladderOf(lpfRes.design);
+      const clipped = harmonicsFromSource(l, frequencyHz, 'thevenin', () => ({ re: 0, im: 0 }), [2, 3, 4, 5],
+        () => ({ re: swrWorst * l.r0Ohm, im: 0 }));
+      const rej = (rows: { n: number; relativeAttenuationDb: number }[]) => (n: number) =>
+        rows.find((r) => r.n === n)?.relativeAttenuationDb ?? null;
+      return foldClipping(spectrum.bands, swrWorst, rej(sourced.rows), rej(clipped));
+    })()
+    : spectrum?.bands;
   const band3 = spectrum?.bands.find((b) => b.n === 3);
   if (src && src.kind === 'thevenin' && lpfRes?.design && paStage && band3) {
     // a voltage-switching stage: the 3rd harmonic current the filter's input takes (worst end of the source band)
@@ -217,7 +232,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     ? harmonicCompliance({
       rule: project.rf.spuriousRule, topology, evenHarmonicDbc: evenDbc, fundamentalW: outputPowerW, frequencyHz, passbandLossDb,
       filter: lpfRes?.analysis ? lpfRes.analysis.harmonics : null, monteCarlo: lpfRes?.monteCarlo ?? null,
-      ...(spectrum ? { spectrum: spectrum.bands } : {}),
+      ...(bands ? { spectrum: bands } : {}),
       ...(sourced ? { source: sourced } : {}),
     })
     : null;

@@ -14,7 +14,8 @@ export type SpectrumBasis =
   | 'push-pull-imbalance' // even harmonics left by the halves' mismatch
   | 'saturation-bound' // odd harmonics of a class-B stage between a clean sine and a hard-clipped square wave
   | 'trapezoid-wave' // switching stage: trapezoidal wave of duty D and the stated transition time
-  | 'class-e-simulated'; // class E: the load current of the simulated stage
+  | 'class-e-simulated' // class E: the load current of the simulated stage
+  | 'clipped-at-swr'; // class B/C: the drain voltage flat-topped at the rails into the most-clipping SWR load (pa-clip)
 
 export interface HarmonicBand {
   n: number;

@@ -1,6 +1,7 @@
 // PA stress around the circle of the worst SWR: drain peak, device current, dissipation and output at each load phase.
 import type { PaParams } from '../model';
 import { simulateClassE } from './class-e-sim';
+import { clippedSineCoefficient } from './pa-fourier';
 
 /** One load on the SWR circle, referred to the drain through an ideal transformer or network. */
 export interface SwrPoint {
@@ -128,11 +129,13 @@ export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { 
       dissipationW: lossW + m.biasW, outputW,
     };
   }
-  // Classes B and C (and B/AB): the drive sets the fundamental current I1 until the swing I1|Z| reaches the supply;
-  // beyond it the voltage is held and the current falls as 1/|Z| (textbook load line, saturation at the design load)
-  const currentRatio = Math.min(1, 1 / mag);
+  // Classes B and C (and B/AB): the drive sets the fundamental current I1; the load line's swing I1|Z| is |z| times
+  // the swing at the design load (which just reaches the supply less saturation). Above it the drain voltage is
+  // flat-topped at the rail limits: the clipped sinusoid's fundamental (clippedStage) is what drives the load.
+  const { currentRatio } = clippedStage(mag);
   const swingRatio = Math.min(1, mag);
-  // Source: P = I1^2 Re(Z)/2 = P0 (I1/I1,0)^2 Re(z); DC current proportional to I1 at a fixed conduction angle
+  // Source: P = |V1|^2 Re(Y)/2 = I1^2 Re(Z)/2 = P0 (I1/I1,0)^2 Re(z); DC current proportional to I1 at a fixed
+  // conduction angle (textbook load line)
   const outputW = m.outputW * currentRatio ** 2 * z.re;
   const dcW = m.dcInputW * currentRatio;
   return {
@@ -141,6 +144,28 @@ export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { 
     dissipationW: Math.max(0, dcW - outputW) + m.biasW,
     outputW,
   };
+}
+
+/** A class B/C stage into a load |z| times its design load (|z| = 1: the swing just reaches the rail limits). */
+export interface ClippedStage {
+  /** The load line's swing over the rail limit (|z|); above 1 the drain voltage is flat-topped. */
+  overdrive: number;
+  /** Fundamental of the drain voltage over the rail-limited swing (1 unclipped, → 4/π hard-limited). */
+  fundamentalRatio: number;
+  /** Fundamental load current over the design load's, V1/|Z| against V/R. */
+  currentRatio: number;
+}
+
+/**
+ * The drain voltage into a load |z| times the design load: the load-line swing |z| V, flat-topped at ±V (the rail
+ * limits) when |z| > 1. Its fundamental is V b1(|z|) and the load's fundamental current falls as b1(|z|)/|z|.
+ * Source: Fourier series of the clipped sinusoid (pa-fourier clippedSineCoefficient; saturation describing function,
+ * Gelb & Vander Velde 1968, from memory); below the clip, the current held by the drive (textbook load line).
+ */
+export function clippedStage(mag: number): ClippedStage {
+  if (!(mag > 1)) return { overdrive: mag, fundamentalRatio: 1, currentRatio: 1 };
+  const fundamentalRatio = clippedSineCoefficient(1, mag);
+  return { overdrive: mag, fundamentalRatio, currentRatio: fundamentalRatio / mag };
 }
 
 /**

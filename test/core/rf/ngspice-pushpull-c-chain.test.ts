@@ -5,9 +5,10 @@
 // relation so that the swing just reaches the supply at the design load (the program's design point): each half
 // sees R_dd/4, so V1 = (R_dd/4) 2 α1(θ) Ipk with α1 the cosine pulse's fundamental coefficient (cosine-pulse
 // coefficients as tabulated in Krauss, Bostian & Raab, Solid State Radio Engineering, 1980; from memory).
-// The program's prediction: its load line at the filter's input impedance (pa-swr stressAt, class B or C), and each odd
-// harmonic's band (pa-spectrum) less the filter's rejection from a current source into the load at that harmonic
-// (lpf-analysis harmonicsFromSource).
+// The program's prediction: its load line at the filter's input impedance (pa-swr stressAt, class B or C, flat-topped
+// at the rails where the swing would exceed them), and each odd harmonic's band (pa-spectrum, its worst end raised by
+// the clipped drain voltage where that is higher, pa-clip) less the filter's rejection from a current source into the
+// load at that harmonic (lpf-analysis harmonicsFromSource).
 // Invented design: 13.8 V, 1:1 transformer (k = 0.9995), 7.03 MHz, 50 Ω.
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -21,23 +22,29 @@ import { evaluatePa } from '../../../src/core/rf/pa';
 import { paSource } from '../../../src/core/rf/pa-source';
 import { paSpectrum } from '../../../src/core/rf/pa-spectrum';
 import { loadOnCircle, stressAt } from '../../../src/core/rf/pa-swr';
+import { foldClipping } from '../../../src/core/rf/pa-clip';
 import { CONSTRUCTION_FLOOR_DBC } from '../../../src/core/rf/harmonics';
 import { lpfParams, paParams } from './fixture';
 
 const haveNgspice = requireTool(NGSPICE, 'SPICE whole-chain check of the push-pull class-C stage', 'apt-get install ngspice');
 
-// Stated tolerances: the program's load line holds the drive current until the swing reaches the supply, then holds
-// the drain's fundamental at the supply. Into a load above the design load the netlist's drain clips instead, and a
-// clipped swing has a larger fundamental (towards 4/π of the supply), so there ngspice gives more power (about 23 %
-// for class C and 28 % for class B at SWR 2, 0°) and a higher drain peak (about 10.5 %); elsewhere they agree within
-// a few per cent.
-const TOL_POWER = 0.3;
+// Stated tolerances. Power: where the program's load line stays within the rails (|z_in| ≤ 1: SWR 2 at 90° and 180°)
+// ngspice agrees within 1 %, so TOL_POWER is 5 %. Where it would swing beyond them (SWR 2 at 0°, |z_in| = 1.96; at
+// 270° and into 50 Ω by 1–5 %) the program takes the drain voltage as the load-line sinusoid flat-topped at the rail
+// limits (the clipped sinusoid's fundamental, pa-swr clippedStage). The capacitor-input filter shunts part of the flat
+// top, so the netlist clips less than that: at 0° ngspice gives 14 % (class B) and 17 % (class C) less power. The
+// program is the upper end there: ngspice at most TOL_POWER above it and TOL_POWER_CLIPPED_BELOW below it.
+// (Before the clipping model the power was held at the design swing: 30 % allowed either way at every load, ngspice
+// 23 % (C) and 28 % (B) above at 0°.) Drain peak: ngspice's drain rings about 10.5 % above 2 Vdd at 0° (not modelled).
+const TOL_POWER = 0.05;
+const TOL_POWER_CLIPPED_BELOW = 0.2;
 const TOL_DRAIN = 0.12;
-// 3rd harmonic at the antenna: within the program's band widened by this much, dB (or both below the floor)
+// 3rd harmonic at the antenna: within the program's band widened by this much, dB (or both below the floor), at
+// every load. At the clipping loads the band's worst end includes the flat-topped drain voltage through the filter
+// from a voltage source (pa-clip foldClipping): at SWR 2, 0° it sits 5 dB (B) and 10 dB (C) above ngspice, which is
+// again the upper end. (Before: the band from the design load only, 6 dB allowed above its worst end at the SWR loads,
+// where class B at 0° came 5.3 dB above it.)
 const TOL_HARMONIC_DB = 3;
-// above the band's worst end at the SWR loads, dB: the band is the stage's spectrum at its design load; into a load
-// above it the stage clips harder (class B at SWR 2, 0°: about 5 dB more 3rd harmonic than the worst end)
-const TOL_HARMONIC_ABOVE_SWR_DB = 6;
 
 const F0 = 7.03e6;
 const VDD = 13.8;
@@ -166,22 +173,31 @@ describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction
       const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       expect(Number.isFinite(s.vdpk), s.out).toBe(true);
       expect(Math.abs(s.vdpk / pred.drainPeakV - 1), `drain: ngspice ${s.vdpk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`).toBeLessThanOrEqual(TOL_DRAIN);
-      expect(Math.abs(s.pout / pred.outputW - 1), `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`).toBeLessThanOrEqual(TOL_POWER);
+      const pmsg = `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`;
+      expect(s.pout / pred.outputW - 1, pmsg).toBeLessThanOrEqual(TOL_POWER);
+      const clipping = Math.hypot(zin.re, zin.im) / R0 > 1;
+      expect(1 - s.pout / pred.outputW, pmsg).toBeLessThanOrEqual(clipping ? TOL_POWER_CLIPPED_BELOW : TOL_POWER);
     });
     it(`${name}: the 3rd harmonic at the antenna lies in the program's band from a current source (or below the floor)`, () => {
       const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       // the load at 3f: its resistance with the series reactance scaled as an inductor (3X) or a capacitor (X/3)
       const zlAt = (n: number): C => ({ re: zl.re, im: zl.im >= 0 ? n * zl.im : zl.im / n });
-      const rej = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt, [3], zlAt)[0].relativeAttenuationDb;
+      const ladder = ladderOf(d, 'built', true);
+      const rej = harmonicsFromSource(ladder, F0, src.kind, src.zsAt, [3], zlAt)[0].relativeAttenuationDb;
+      // the flat-topped drain held at the rails: a stiff voltage source into the filter (pa-clip)
+      const stiff = () => ({ re: 0, im: 0 });
+      const rejClip = harmonicsFromSource(ladder, F0, 'thevenin', stiff, [3], zlAt)[0].relativeAttenuationDb;
+      const zin = filterInputOhm(d, zl);
+      const folded = foldClipping([band3], Math.hypot(zin.re, zin.im) / R0, () => rej, () => rejClip)[0];
       const spiceDbc = 20 * Math.log10(s.harm.get(3)! / s.harm.get(1)!);
-      const lo = band3.bestDbc - rej;
-      const hi = band3.worstDbc - rej;
+      const lo = folded.bestDbc - rej;
+      const hi = folded.worstDbc - rej;
       const msg = `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${lo.toFixed(1)} to ${hi.toFixed(1)} dBc`;
       if (hi < CONSTRUCTION_FLOOR_DBC && zl.re === R0 && zl.im === 0) {
         expect(spiceDbc, msg).toBeLessThan(CONSTRUCTION_FLOOR_DBC + TOL_HARMONIC_DB);
       } else {
         expect(spiceDbc, msg).toBeGreaterThanOrEqual(lo - TOL_HARMONIC_DB);
-        expect(spiceDbc, msg).toBeLessThanOrEqual(hi + (zl.re === R0 && zl.im === 0 ? TOL_HARMONIC_DB : TOL_HARMONIC_ABOVE_SWR_DB));
+        expect(spiceDbc, msg).toBeLessThanOrEqual(hi + TOL_HARMONIC_DB);
       }
     });
   }

@@ -45,13 +45,30 @@ describe('class D (voltage switching) at a complex load: V1 fixed, I1 = V1/|Z|',
   });
 });
 
-describe('class B/C at a complex load: I1 held until the swing reaches the supply', () => {
-  it('z = 2: swing at the supply, current halves, P = P0 (1/2)^2 x 2 = P0/2, DC halves', () => {
+describe('class B/C at a complex load: I1 held until the swing reaches the supply, then clipped', () => {
+  it('z = 2: the swing 2 V is flat-topped at ±V; fundamental V b1(2), b1(2) = 2/3 + √3/π worked by hand', () => {
+    // Source: clipped-sinusoid Fourier series (saturation describing function, Gelb & Vander Velde 1968, from
+    // memory): clip at half the amplitude, β = 30°, b1 = (4/π)(π/6 + √3/4) = 1.21800; the load current
+    // V1/|Z| is b1/2 = 0.60900 of the matched one, P = P0 (b1/2)^2 x 2 = 7.4176 W, DC 0.609 of the matched
+    const i1 = (2 / 3 + Math.sqrt(3) / Math.PI) / 2;
     const s = stressAt('C', m, { re: 2, im: 0 });
-    near(s.peakDeviceA, 1.5, 1e-12, 'Ipk');
-    near(s.outputW, 5, 1e-12, 'P');
-    near(s.dissipationW, 10 / 0.7 / 2 - 5, 1e-9, 'Pd');
-    near(s.drainPeakV, 40, 1e-12, 'Vpk');
+    near(s.peakDeviceA, 3 * i1, 1e-12, 'Ipk');
+    near(s.outputW, 10 * i1 * i1 * 2, 1e-12, 'P');
+    near(s.outputW, 7.4176, 1e-4, 'P, by hand');
+    near(s.dissipationW, (10 / 0.7) * i1 - 10 * i1 * i1 * 2, 1e-9, 'Pd');
+    near(s.drainPeakV, 40, 1e-12, 'Vpk: flat-topped at the rail limit');
+  });
+  it('a hard-limited swing (|z| → ∞, resistive): power P0 (4/π)^2/|z|, the square-wave fundamental (textbook)', () => {
+    const s = stressAt('B', m, { re: 1e6, im: 0 });
+    near((s.outputW * 1e6) / 10, (4 / Math.PI) ** 2, 1e-5, 'P |z| / P0');
+  });
+  it('ideal class B (η = π/4) into a clipping load: efficiency b1 π/4 (clipped-sine fundamental), below 1', () => {
+    // Source: definition of drain efficiency with DC ∝ I1 and P ∝ V1 I1: η = η0 x V1/V (textbook load line)
+    const mb = { ...m, dcInputW: 10 / (Math.PI / 4) };
+    const s = stressAt('B', mb, { re: 3, im: 0 });
+    const dc = s.dissipationW + s.outputW;
+    expect(s.outputW / dc).toBeGreaterThan(Math.PI / 4);
+    expect(s.outputW / dc).toBeLessThan(1);
   });
   it('z = 1/2: current held, swing halves: drain peak Vdd (1 + 1/2) = 30 V, P = P0/2', () => {
     const s = stressAt('B', m, { re: 0.5, im: 0 });

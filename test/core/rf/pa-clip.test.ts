@@ -1,0 +1,43 @@
+// The clipped class B/C stage's harmonics (src/core/rf/pa-clip.ts), worked by hand from the clipped-sinusoid Fourier
+// series (saturation describing function, Gelb & Vander Velde 1968, from memory) and the square-wave series (textbook).
+import { describe, expect, it } from 'vitest';
+import { clippedHarmonicDbc, foldClipping } from '../../../src/core/rf/pa-clip';
+import { MIN_DBC, type HarmonicBand } from '../../../src/core/rf/pa-spectrum';
+import { near } from './helpers';
+
+describe('clippedHarmonicDbc', () => {
+  it('swing twice the rail limit (β = 30°): b3/b1 = (√3/(2π)) / (2/3 + √3/π) = 0.22633, −12.905 dBc (by hand)', () => {
+    near(clippedHarmonicDbc(3, 2), 20 * Math.log10(0.226326), 1e-3, '3rd');
+    near(clippedHarmonicDbc(3, 2), -12.905, 1e-3, '3rd, dBc by hand');
+  });
+  it('hard-limited: the square wave, harmonic n at 1/n (20 log10(1/3) = −9.54 dBc)', () => {
+    near(clippedHarmonicDbc(3, Infinity), 20 * Math.log10(1 / 3), 1e-12, '3rd');
+    near(clippedHarmonicDbc(5, Infinity), 20 * Math.log10(1 / 5), 1e-12, '5th');
+  });
+  it('no clipping, or an even harmonic of the symmetric swing: none', () => {
+    expect(clippedHarmonicDbc(3, 1)).toBe(MIN_DBC);
+    expect(clippedHarmonicDbc(2, 3)).toBe(MIN_DBC);
+  });
+});
+
+describe('foldClipping keeps the level at the antenna: worst = max(worst, clipped − rejClipped + rejSource)', () => {
+  const bands: HarmonicBand[] = [
+    { n: 2, bestDbc: -60, worstDbc: -30, basis: 'push-pull-imbalance' },
+    { n: 3, bestDbc: -50, worstDbc: -40, basis: 'cosine-pulse' },
+  ];
+  it('clipped 3rd (−12.91 dBc) through 40 dB from a voltage source vs 50 dB from the current source: −2.91 dBc', () => {
+    const f = foldClipping(bands, 2, () => 50, () => 40);
+    near(f[1].worstDbc, -12.906 - 40 + 50, 2e-3, '3rd worst');
+    expect(f[1].basis).toBe('clipped-at-swr');
+    expect(f[1].bestDbc).toBe(-50);
+    expect(f[0]).toEqual(bands[0]);
+  });
+  it('a clipped level below the band leaves it: −12.91 − 80 + 50 = −42.9 < −40', () => {
+    const f = foldClipping(bands, 2, () => 50, () => 80);
+    expect(f[1]).toEqual(bands[1]);
+  });
+  it('no clipping (|z| ≤ 1) or an unknown rejection leaves the bands', () => {
+    expect(foldClipping(bands, 1, () => 50, () => 0)).toEqual(bands);
+    expect(foldClipping(bands, 2, () => null, () => 0)).toEqual(bands);
+  });
+});
