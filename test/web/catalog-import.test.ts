@@ -46,6 +46,10 @@ describe('supplier price-list import', () => {
     expect(html).toMatch(/data-change="down" data-sku="NC-R1W-2K2"/);
     expect(html).toMatch(/data-change="new-part" data-sku="NC-F520-T1"/);
     expect(html).toMatch(/data-change="gone" data-sku="NC-TR-7016"/);
+    // ratings shown by name and unit (4700u = 4700 µF, SI Brochure Table 7), with a note on the older key=value form
+    expect(html).toContain('<td data-label="Ratings">Capacitance 4700 µF; rated voltage 35 V</td>');
+    expect(html).toContain('<td data-label="Ratings">Rated current 1 A; characteristic T</td>');
+    expect(html).toContain('written as key=value (the older form), read as &quot;Rated current 1 A; characteristic T&quot;');
     expect((await stored()).version).toBe(before.version);
   });
 
@@ -58,6 +62,11 @@ describe('supplier price-list import', () => {
     expect(html).toContain('Nothing was imported: 1 row(s) are refused');
     expect(html).toContain('<td data-label="Row">4</td>');
     expect(html).toContain('Multiple: &quot;ten&quot; is not a number of pieces');
+    // a rating in names and units out of its range is named with its row, and nothing is saved
+    const badRating = UPDATED.replace('ratedA=1; type=T', 'rated current 0 A; characteristic T');
+    const r2 = await t.post(`${base}/import`, { version: String(before.version), supplier: 'Northfield Components', csv: badRating, action: 'import' });
+    expect(r2.status).toBe(422);
+    expect(await r2.text()).toContain('Rated current must be more than 0 A');
     expect(await stored()).toEqual(before);
   });
 

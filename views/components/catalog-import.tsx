@@ -5,6 +5,7 @@ import type { FC } from 'hono/jsx';
 import type { Offer, Project } from '../../src/core/model';
 import type { ImportPreview } from '../../src/core/csv';
 import type { CatalogChange, CatalogUpdate } from '../../src/core/csv/catalog-update';
+import { ratingsReadable } from '../../src/core/spec/ratings-readable';
 import { formatMoney } from '../../src/core/cost/money';
 import { Version } from './supply-transformer';
 import { ColumnChoices, DecimalChoice, PreviewSummary, RowProblems } from './bom-import';
@@ -159,6 +160,7 @@ export const CatalogPreviewBody: FC<CatalogPreviewProps> = (props) => {
             <th>Row</th>
             <th>Description / value</th>
             <th>Category</th>
+            <th>Ratings</th>
             <th>Supplier · SKU</th>
             <th>Price breaks</th>
             <th>Problems</th>
@@ -173,6 +175,7 @@ export const CatalogPreviewBody: FC<CatalogPreviewProps> = (props) => {
                 {r.values.value ? <span class="sub"> {r.values.value}</span> : null}
               </td>
               <td data-label="Category">{r.values.category}</td>
+              <td data-label="Ratings">{r.values.catalog ? ratingsReadable(r.values.catalog.ratings) : ''}</td>
               <td data-label="Supplier · SKU">{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
               <td data-label="Price breaks">{r.values.catalog?.breaks.map((b) => `${b.minQty}: ${formatMoney(b.unitPriceCents, r.values.currency ?? project.currency)}`).join(', ')}</td>
               <RowProblems row={r} />
