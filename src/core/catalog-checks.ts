@@ -32,7 +32,7 @@ export function catalogFindings(project: Project, supply: SupplyReport | null): 
           limit: null,
           unit: 'F',
           source: 'design.parts-list',
-          message: 'No reservoir capacitor on the parts list has this capacitance (with a capacitanceF rating); check the part you buy by hand.',
+          message: 'No reservoir capacitor on the parts list has this capacitance (with its capacitance entered as a rating); check the part you buy by hand.',
         });
       continue;
     }
@@ -46,7 +46,7 @@ export function catalogFindings(project: Project, supply: SupplyReport | null): 
       const a = num(part.ratings.rippleA);
       const subject = `${part.description} (${rail.railName})`;
       if (v === null || a === null) {
-        out.push({ severity: 'caution', rule: 'catalog.reservoir-ratings', subject, value: null, limit: null, unit: '', source: 'design.parts-list', message: 'Enter the voltageV and rippleA ratings of this catalog part so it can be checked against the design.' });
+        out.push({ severity: 'caution', rule: 'catalog.reservoir-ratings', subject, value: null, limit: null, unit: '', source: 'design.parts-list', message: 'Enter the rated voltage and the ripple current (RMS) of this catalog part on the parts catalog page so it can be checked against the design.' });
         continue;
       }
       if (v < rail.reservoir.noLoadPeakHighV)
