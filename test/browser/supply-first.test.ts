@@ -22,7 +22,7 @@ describe.skipIf(!hasChromium)('supply page leads with its deciding corners', () 
 
   afterAll(() => session?.close());
 
-  it('at 1280x900 the first rail’s deciding corners sit above the first editor form, inside the first screen', async () => {
+  it('at 1280x900 the first rail’s deciding corners above the first form, on the first screen', async () => {
     expect(page.viewportSize()).toEqual({ width: 1280, height: 900 });
     await page.evaluate(() => window.scrollTo(0, 0));
     const first = page.locator('#supply-glance table.deciding').first();
@@ -45,13 +45,14 @@ describe.skipIf(!hasChromium)('supply page leads with its deciding corners', () 
     await page.screenshot({ path: artifactPath('supply-first-screen-1280.png') });
   });
 
-  it('a rail name in the glance leads to its full results; the corner disclosure still opens from the keyboard', async () => {
+  it('a rail name in the glance leads to its results; the corner disclosure opens from the keyboard', async () => {
     await page.locator('#supply-glance caption a', { hasText: 'PA rail' }).click();
     await expect.poll(() => page.evaluate(() => location.hash)).toBe('#supply-rail-pa');
     const summary = page.locator('#supply-rail-pa details.all-corners > summary');
     await summary.focus();
     await page.keyboard.press('Enter');
-    expect(await page.locator('#supply-rail-pa details.all-corners').evaluate((d) => (d as HTMLDetailsElement).open)).toBe(true);
+    const opened = page.locator('#supply-rail-pa details.all-corners').evaluate((d) => (d as HTMLDetailsElement).open);
+    expect(await opened).toBe(true);
     expect(session.problems).toEqual([]);
   });
 
@@ -68,7 +69,7 @@ describe.skipIf(!hasChromium)('supply page leads with its deciding corners', () 
     await page.setViewportSize({ width: 1280, height: 900 });
   });
 
-  it('without JavaScript the transformer form still saves (Post/Redirect/Get) and the glance follows the change', async () => {
+  it('without JavaScript the transformer form saves (Post/Redirect/Get) and the glance follows', async () => {
     const plain = session.server.url;
     const noJs = await page.context().newPage();
     const cdp = await page.context().newCDPSession(noJs);

@@ -4,19 +4,24 @@
 // the rail's own headroom findings, the ones the overview's first screen draws, so both pages agree.
 import type { Child, FC } from 'hono/jsx';
 import type { Finding, Severity } from '../../src/core/findings';
-import type { BatteryRailReport, RectifiedRailReport, RegulatedRailReport, SupplyReport } from '../../src/core/power/report-types';
+import type {
+  BatteryRailReport, RectifiedRailReport, RegulatedRailReport, SupplyReport,
+} from '../../src/core/power/report-types';
 import { formatValue as fv } from '../../src/core/units';
 
 type Role = { role: string; id: string; headroom?: 'plain' | 'tolerance' };
 const TOLERANCE_ID = 'lowTol-keyDown';
 const roles = (voltage: string, thermal: string, tolerance: boolean): Role[] => [
   { role: 'Headroom', id: voltage, headroom: 'plain' },
-  ...(tolerance ? [{ role: 'Headroom, secondary at its low tolerance', id: TOLERANCE_ID, headroom: 'tolerance' as const }] : []),
+  ...(tolerance
+    ? [{ role: 'Headroom, secondary at its low tolerance', id: TOLERANCE_ID, headroom: 'tolerance' as const }]
+    : []),
   { role: 'Heating', id: thermal },
   { role: 'Tune-up', id: 'high-tuneUp' },
 ];
 
-const severityOf = (findings: Finding[], rule: string): Severity | null => findings.find((f) => f.rule === rule)?.severity ?? null;
+const severityOf = (findings: Finding[], rule: string): Severity | null =>
+  findings.find((f) => f.rule === rule)?.severity ?? null;
 
 /** A rectified rail's headroom verdict at the plain low-mains corner and at the secondary-tolerance corner. */
 function rectifiedVerdict(rail: RectifiedRailReport, which: 'plain' | 'tolerance'): Severity | null {
@@ -30,7 +35,11 @@ function rectifiedVerdict(rail: RectifiedRailReport, which: 'plain' | 'tolerance
 
 const VERDICT_WORDS: Record<Severity, string> = { ok: 'ok', caution: 'caution', fail: 'fail' };
 const Verdict: FC<{ sev: Severity | null; none?: string }> = ({ sev, none }) =>
-  sev ? <span class={`sev sev-${sev}`} data-headroom-verdict={sev}>{VERDICT_WORDS[sev]}</span> : <span class="hint">{none ?? '—'}</span>;
+  sev ? (
+    <span class={`sev sev-${sev}`} data-headroom-verdict={sev}>{VERDICT_WORDS[sev]}</span>
+  ) : (
+    <span class="hint">{none ?? '—'}</span>
+  );
 
 export const RectifiedDeciding: FC<{ rail: RectifiedRailReport; caption?: Child }> = ({ rail, caption }) => (
   <table class="grid deciding" data-rail={rail.railId}>
@@ -131,8 +140,8 @@ export const SupplyGlance: FC<{ report: SupplyReport }> = ({ report }) => (
     <h2 id="supply-glance-h">Does the supply hold up?</h2>
     <p class="hint">
       Per rail, the corners that decide it: headroom at the lowest trough
-      {report.mains ? ' (low mains, and with a stated secondary tolerance its low end too)' : ''}, heating in CW use and a
-      tune-up carrier. The editors, every corner, the plots and the findings follow below.
+      {report.mains ? ' (low mains, and with a stated secondary tolerance its low end too)' : ''}, heating in CW use
+      and a tune-up carrier. The editors, every corner, the plots and the findings follow below.
     </p>
     {report.rails.map((r) => {
       const caption = <a href={`#supply-${r.railId}`}>{r.railName}</a>;
