@@ -2,7 +2,9 @@
 // output + dropout, then its output capacitor falls through its own bleeder (a regulator sources current but does not
 // sink it). The time to a safe voltage, the fitted bleeder's dissipation, and a suggestion when none is fitted.
 import type { Finding } from '../findings';
-import { BLEEDER_DERATING, LOW_SAFE_V, LOW_VOLTAGE_TAU_S, SAFE_DC_V, SAFE_TIME_S, bleederPowerFindings, maxBleederOhm } from './bleeder';
+import {
+  BLEEDER_DERATING, LOW_SAFE_V, LOW_VOLTAGE_TAU_S, SAFE_DC_V, SAFE_TIME_S, bleederPowerFindings, maxBleederOhm,
+} from './bleeder';
 import { E12_STEPS, prevInSeries } from './standard-values';
 
 /** Time (s) for a rail to fall to v after switch-off; null = it does not fall there (nothing discharges it). */
@@ -89,7 +91,9 @@ export function regulatedBleeder(inp: RegulatedBleederInput): RegulatedBleederRe
   let why: string | null = null;
   let fittedTimeS: number | null = null;
   if (!(v0 > safeV)) fittedTimeS = 0;
-  else if (inp.sourceFall === null) why = 'it is fed from a battery, which holds it up until the battery is disconnected';
+  else if (inp.sourceFall === null) {
+    why = 'it is fed from a battery, which holds it up until the battery is disconnected';
+  }
   else if (c === null) why = 'its output capacitance is not entered';
   else if (r === null) why = 'no bleeder is fitted, so nothing but its loads discharges the output capacitor';
   else {
@@ -106,29 +110,44 @@ export function regulatedBleeder(inp: RegulatedBleederInput): RegulatedBleederRe
   const suggestedW = suggestedOhm !== null ? (v0 * v0) / suggestedOhm : null;
   // Source: stored energy of a capacitor, E = C V^2 / 2
   const storedJ = c !== null ? 0.5 * c * v0 * v0 : null;
-  const reasoning = `After switch-off the regulator holds ${inp.railName} at ${v0.toFixed(1)} V until ${inp.sourceName} has ` +
-    `fallen to ${(v0 + inp.dropoutV).toFixed(1)} V (output + dropout); then its output capacitor falls through its own ` +
+  const reasoning = `After switch-off the regulator holds ${inp.railName} at ${v0.toFixed(1)} V until ` +
+    `${inp.sourceName} has fallen to ${(v0 + inp.dropoutV).toFixed(1)} V (output + dropout); then its output ` +
+    'capacitor falls through its own ' +
     `bleeder, since a regulator does not sink current. The time to ${safeV} V is an upper bound (loads neglected).`;
   const ratedW = usable(inp.ratedW) ? inp.ratedW : null;
-  return { startV: v0, safeV, safeSource, capacitanceF: c, fittedOhm: r, ratedW, fittedW, fittedTimeS, why, suggestedOhm, suggestedW, storedJ, reasoning };
+  return {
+    startV: v0, safeV, safeSource, capacitanceF: c, fittedOhm: r, ratedW, fittedW, fittedTimeS, why, suggestedOhm,
+    suggestedW, storedJ, reasoning,
+  };
 }
 
 const fmtOhm = (r: number) => (r >= 1000 ? `${Number((r / 1000).toPrecision(2))} kΩ` : `${Number(r.toPrecision(2))} Ω`);
 
 export function regulatedBleederFindings(railName: string, b: RegulatedBleederReport): Finding[] {
-  const base = { rule: 'bleeder.regulated', subject: `${railName} output`, source: 'supply.bleeder-regulated' as const };
+  const base = {
+    rule: 'bleeder.regulated', subject: `${railName} output`, source: 'supply.bleeder-regulated' as const,
+  };
   const suggest = b.suggestedOhm !== null
-    ? ` A ${fmtOhm(b.suggestedOhm)} bleeder (${(b.suggestedW! / BLEEDER_DERATING).toFixed(2)} W rating or more) would do it.`
+    ? ` A ${fmtOhm(b.suggestedOhm)} bleeder (${(b.suggestedW! / BLEEDER_DERATING).toFixed(2)} W rating or more) ` +
+      'would do it.'
     : '';
   const fitted = { fittedW: b.fittedW, startV: b.startV, ratedW: b.ratedW };
   const power = b.fittedW !== null ? bleederPowerFindings(railName, fitted, 'the set output') : [];
   const high = b.startV > SAFE_DC_V;
   if (b.fittedTimeS !== null) {
     const late = high && b.fittedTimeS > SAFE_TIME_S;
-    const tooLong = late ? ` ${SAFE_TIME_S} s is the usual limit: use a smaller bleeder here or on the source rail.` : '';
-    const message = `${railName} falls below ${b.safeV} V within about ${b.fittedTimeS.toFixed(1)} s after switch-off ` +
+    const tooLong = late
+      ? ` ${SAFE_TIME_S} s is the usual limit: use a smaller bleeder here or on the source rail.` : '';
+    const message = `${railName} falls below ${b.safeV} V within about ${b.fittedTimeS.toFixed(1)} s after ` +
+      'switch-off ' +
       `(an upper bound: its source must fall first).${tooLong}`;
-    return [{ ...base, severity: late ? 'fail' : 'ok', value: b.fittedTimeS, limit: high ? SAFE_TIME_S : null, unit: 's', message }, ...power];
+    return [
+      {
+        ...base, severity: late ? 'fail' : 'ok', value: b.fittedTimeS, limit: high ? SAFE_TIME_S : null, unit: 's',
+        message,
+      },
+      ...power,
+    ];
   }
   const e = b.storedJ !== null ? `; it stores ${b.storedJ < 0.1 ? b.storedJ.toFixed(3) : b.storedJ.toFixed(1)} J` : '';
   const message = `${railName} (${b.startV.toFixed(1)} V) may stay charged after switch-off: ${b.why}${e}.${suggest} ` +
@@ -146,10 +165,12 @@ export function withRegulatedBleeder<R extends RegulatedLike>(
 ): { report: R & { bleeder: RegulatedBleederReport }; fall: FallTime | null } {
   const bleeder = regulatedBleeder({
     railName: report.railName, sourceName, outputV: report.outputV, dropoutV: report.dropoutV,
-    capacitanceF: rail.outputF ?? null, fittedOhm: rail.bleederOhm ?? null, ratedW: rail.bleederRatedW ?? null, sourceFall,
+    capacitanceF: rail.outputF ?? null, fittedOhm: rail.bleederOhm ?? null, ratedW: rail.bleederRatedW ?? null,
+    sourceFall,
   });
   const dropout = Math.max(0, report.dropoutV);
-  const fall = sourceFall === null ? null : regulatedFall(bleeder.startV, dropout, sourceFall, bleeder.capacitanceF, bleeder.fittedOhm);
+  const fall = sourceFall === null
+    ? null : regulatedFall(bleeder.startV, dropout, sourceFall, bleeder.capacitanceF, bleeder.fittedOhm);
   const findings = [...report.findings, ...regulatedBleederFindings(report.railName, bleeder)];
   return { report: { ...report, bleeder, findings }, fall };
 }
