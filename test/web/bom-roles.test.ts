@@ -31,6 +31,9 @@ describe('parts the design needs', () => {
     expect(roles.find((s) => s.role.id === 'fuses')!.problems).toEqual([expect.stringMatching(/^The line F1–F3 \(Fuse .*\) does not state rating, so it cannot be checked/)]);
     expect(html).toContain('does not state capacitance, so it cannot be checked');
     expect(html).toMatch(/data-role="bleeders"[\s\S]*?data-candidate="p-bleed"/);
+    // each candidate with its ratings by name and unit, never the stored keys
+    expect(html).toMatch(/data-candidate="p-trafo-100"[^>]*>[^<]*<span class="sub"> \(VA rating 100 VA; secondary 1 voltage \(RMS\) 16 V;/);
+    expect(html).not.toMatch(/role-candidates[\s\S]*?sec1V/);
   });
 
   it('binding the candidate fixes the mismatch and the cost follows', async () => {
@@ -60,8 +63,9 @@ describe('parts the design needs', () => {
 
   it('the catalog offers the category list and says which ratings a part’s category is checked with', async () => {
     const html = await (await t.app.request(`http://localhost/projects/${ID}/parts`)).text();
-    const list = /<datalist id="part-categories">([\s\S]*?)<\/datalist>/.exec(html)![1];
+    // the category is a choice from the list; a heatsink part gets its one rating box, θsa in °C/W
+    const list = /<select id="part--ap--category"[\s\S]*?<\/select>/.exec(html)![0];
     for (const c of ['capacitor', 'resistor', 'transformer', 'relay', 'fuse', 'mosfet', 'heatsink', 'regulator', 'core', 'other']) expect(list).toContain(`value="${c}"`);
-    expect(html).toContain('Heatsink: thetaSaKPerW (K/W)');
+    expect(html).toMatch(/<span class="label">θsa<span class="unit"> \(°C\/W\)<\/span><\/span><input id="ratings-heatsink--p-[^"]+--r-thetaSaKPerW" name="r.thetaSaKPerW"/);
   });
 });

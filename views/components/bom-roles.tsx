@@ -7,6 +7,7 @@ import { candidatesFor } from '../../src/core/roles';
 import { formatMoney, type CostReport } from '../../src/core/cost';
 import { Version, hx } from './supply-transformer';
 import type { Failed } from './failed';
+import { ratingsReadable } from '../../src/core/spec/ratings-readable';
 
 const STATE_TEXT: Record<RoleStatus['state'], string> = {
   ok: 'meets the design',
@@ -17,6 +18,12 @@ const STATE_TEXT: Record<RoleStatus['state'], string> = {
 
 /** How many candidates are listed per role (cheapest first). */
 const SHOWN = 3;
+
+/** A candidate's ratings in names and units ("Capacitance 4700 µF; rated voltage 35 V"), '' when it states none. */
+const ratingsOf = (project: Project, partId: string): string => {
+  const part = project.parts.find((p) => p.id === partId);
+  return part ? ratingsReadable(part.ratings) : '';
+};
 
 export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: Failed; report?: CostReport }> = ({ project, statuses, failed, report }) => {
   if (!statuses.length) return null;
@@ -73,7 +80,9 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
                   {candidates.map((c) => (
                     <li data-candidate={c.partId} data-total={c.totalCents ?? ''}>
                       {c.group ? <strong>{c.group}: </strong> : null}
-                      {c.description}: {c.costCents === null ? 'no price' : `${money(c.costCents)} for ${c.neededQty}`}
+                      {c.description}
+                      {ratingsOf(project, c.partId) ? <span class="sub"> ({ratingsOf(project, c.partId)})</span> : null}
+                      : {c.costCents === null ? 'no price' : `${money(c.costCents)} for ${c.neededQty}`}
                       {c.orderQty !== null && c.orderQty !== c.neededQty ? ` (buying ${c.orderQty})` : ''}
                       {c.supplier ? ` from ${c.supplier}` : ''}
                       {c.shippingCents ? ` + ${money(c.shippingCents)} shipping (supplier not otherwise used) = ${money(c.totalCents ?? 0)}` : ''}
