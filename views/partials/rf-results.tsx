@@ -383,7 +383,7 @@ const BASIS_WORDS: Record<HarmonicBasis, string> = {
   'saturation-bound': 'clean to saturated',
   'trapezoid-wave': 'switched wave with its edges, duty band',
   'class-e-simulated': 'simulated class E, loaded Q band',
-  'clipped-at-swr': 'flat-topped at the supply, worst SWR load',
+  'clipped-at-swr': 'flat-topped at the supply, worst SWR load (equivalent level)',
 };
 
 /** "−62.0 to −38.5 dBc", "below −70 dBc to −41.0 dBc" (best end under the construction floor), or one number. */

@@ -54,7 +54,7 @@ const BASIS_WHAT: Partial<Record<string, string>> = {
   'cosine-pulse': 'drain current pulse over the conduction angle, from a plain cosine pulse at the edge of saturation to a flat-topped pulse when saturated',
   'push-pull-imbalance': 'even harmonic from the stated push-pull imbalance, typical to worst',
   'saturation-bound': 'clean sine to hard-clipped square wave',
-  'clipped-at-swr': 'drain voltage flat-topped at the supply into the worst SWR load',
+  'clipped-at-swr': 'drain voltage flat-topped at the supply into the worst SWR load, as the equivalent source level',
   'rectangular-wave': 'rectangular wave, duty 50 % to the stated worst imbalance',
   'class-e-estimate': 'class E taken as a rectangular wave (pessimistic, not simulated)',
   'trapezoid-wave': 'switched wave with finite edges, duty 50 % to the stated worst imbalance',

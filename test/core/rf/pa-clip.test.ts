@@ -3,6 +3,9 @@
 import { describe, expect, it } from 'vitest';
 import { clippedHarmonicDbc, foldClipping } from '../../../src/core/rf/pa-clip';
 import { MIN_DBC, type HarmonicBand } from '../../../src/core/rf/pa-spectrum';
+import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
+import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
+import { project, rfSettings } from './fixture';
 import { near } from './helpers';
 
 describe('clippedHarmonicDbc', () => {
@@ -39,5 +42,24 @@ describe('foldClipping keeps the level at the antenna: worst = max(worst, clippe
   it('no clipping (|z| ≤ 1) or an unknown rejection leaves the bands', () => {
     expect(foldClipping(bands, 1, () => 50, () => 0)).toEqual(bands);
     expect(foldClipping(bands, 2, () => null, () => 0)).toEqual(bands);
+  });
+});
+
+describe('evaluateRf folds the clipped class-C push-pull stage into the harmonic rows at the worst SWR', () => {
+  const at = (worstSwr: number) => evaluateRf(project({ rf: rfSettings({ worstSwr }) }), { paRailV: { pa: 13.8 } });
+  it('SWR 1: no load above the design load, no clipped basis', () => {
+    expect(at(1).harmonics!.rows.some((x) => x.paLevelBasis === 'clipped-at-swr')).toBe(false);
+  });
+  it('SWR 2: the 3rd at the antenna, clipped swing (−12.905 dBc by hand) less the filter from a stiff source', () => {
+    const r = at(2);
+    const row = r.harmonics!.rows.find((x) => x.n === 3)!;
+    expect(row.paLevelBasis).toBe('clipped-at-swr');
+    const lpf = r.stages.find((x) => x.kind === 'lpf')!.lpf!;
+    const l = ladderOf(lpf.design!);
+    // the filter's own rejection from a zero-impedance source into 2 x 50 Ω (lpf-analysis, checked in its own tests)
+    const stiff = () => ({ re: 0, im: 0 });
+    const rej = harmonicsFromSource(l, r.frequencyHz, 'thevenin', stiff, [3], () => ({ re: 100, im: 0 }));
+    near(row.predictedDbc, -12.905 - rej[0].relativeAttenuationDb, 1e-3, '3rd at the antenna');
+    expect(row.predictedDbc).toBeGreaterThan(at(1).harmonics!.rows.find((x) => x.n === 3)!.predictedDbc);
   });
 });
