@@ -28,7 +28,8 @@ export function faultWords(c: FaultCheck): string {
   const at = `${fmtA(c.faultA)} is ${c.multiple.toFixed(1)} x In of ${fmtA(c.fuseA)}`;
   return c.latestS === null
     ? `${at}, below 2.1 x In, where IEC 60127-2 sets no time at all: the fuse may never blow`
-    : `${at}: IEC 60127-2 lets it take up to ${c.latestS < 1 ? `${(c.latestS * 1000).toFixed(0)} ms` : `${c.latestS} s`} to melt`;
+    : `${at}: IEC 60127-2 lets it take up to ` +
+      `${c.latestS < 1 ? `${(c.latestS * 1000).toFixed(0)} ms` : `${c.latestS} s`} to melt`;
 }
 
 export function windingFuseReport(inp: WindingFuseInput): { report: WindingFuseReport; findings: Finding[] } {
@@ -48,7 +49,9 @@ export function windingFuseReport(inp: WindingFuseInput): { report: WindingFuseR
     loadA: leadRmsA,
     factor: WINDING_FUSE_FACTOR,
     reasoning: leadRmsA > 0
-      ? `Continuous key-down winding current at high mains ${fmtA(leadRmsA)} RMS x ${WINDING_FUSE_FACTOR} = ${fmtA(leadRmsA * WINDING_FUSE_FACTOR)}, rounded up to the IEC 60127 series: T${rec !== null ? fmtA(rec) : ' (beyond the series)'}, in the winding lead before the rectifier.`
+      ? `Continuous key-down winding current at high mains ${fmtA(leadRmsA)} RMS x ${WINDING_FUSE_FACTOR} = ` +
+        `${fmtA(leadRmsA * WINDING_FUSE_FACTOR)}, rounded up to the IEC 60127 series: ` +
+        `T${rec !== null ? fmtA(rec) : ' (beyond the series)'}, in the winding lead before the rectifier.`
       : 'No winding current: no fuse size can be computed.',
   };
   const leakageH = inp.leakageH !== undefined && inp.frequencyHz !== undefined && inp.leakageH > 0 ? inp.leakageH : 0;
@@ -57,26 +60,51 @@ export function windingFuseReport(inp: WindingFuseInput): { report: WindingFuseR
   const reactanceOhm = 2 * Math.PI * hz * leakageH;
   const inputShortLowA = shortedWindingRmsA(emfV * inp.lowFactor, sourceOhm, reactanceOhm);
   const inputShortHighA = shortedWindingRmsA(emfV * inp.highFactor, sourceOhm, reactanceOhm);
-  const outputShortLowA = shortedOutputRmsA(rail.topology, emfV * inp.lowFactor * Math.SQRT2, sourceOhm, rail.diodeDropV, rail.diodeResistanceOhm, leakageH, hz);
+  const outputShortLowA = shortedOutputRmsA(
+    rail.topology, emfV * inp.lowFactor * Math.SQRT2, sourceOhm, rail.diodeDropV, rail.diodeResistanceOhm, leakageH, hz,
+  );
   const inUse = fittedA ?? rec;
   const check = inUse !== null && outputShortLowA > 0 ? faultCheck(outputShortLowA, inUse, sheet) : null;
   const turnsRatio = inp.mainsNominalV > 0 ? emfV / inp.mainsNominalV : 0;
   const through = leakageH > 0
-    ? `the winding's ${sourceOhm.toFixed(2)} Ω and ${reactanceOhm.toFixed(2)} Ω leakage reactance (${(leakageH * 1e6).toPrecision(3)} µH)`
+    ? `the winding's ${sourceOhm.toFixed(2)} Ω and ${reactanceOhm.toFixed(2)} Ω leakage reactance ` +
+      `(${(leakageH * 1e6).toPrecision(3)} µH)`
     : `the winding's ${sourceOhm.toFixed(2)} Ω (no leakage)`;
-  const reasoning = `A shorted reservoir at low mains drives ${fmtA(outputShortLowA)} RMS through ${through} and the diodes; a short at the rectifier's input ${fmtA(inputShortLowA)} (low mains) to ${fmtA(inputShortHighA)} (high mains).`;
+  const reasoning = `A shorted reservoir at low mains drives ${fmtA(outputShortLowA)} RMS through ${through} and the ` +
+    `diodes; a short at the rectifier's input ${fmtA(inputShortLowA)} (low mains) to ${fmtA(inputShortHighA)} ` +
+    '(high mains).';
   const findings: Finding[] = [...fittedFuseFindings(`${winding.name} fuse`, fittedA, fuse)];
   const subject = `${winding.name} fuse`;
   if (check) {
-    const base = { rule: 'fuse.fault-clearing', subject, value: check.latestS, limit: check.allowedS, unit: 's', source: SOURCE };
+    const base = {
+      rule: 'fuse.fault-clearing', subject, value: check.latestS, limit: check.allowedS, unit: 's', source: SOURCE,
+    };
     const what = `A shorted reservoir on ${rail.name}: ${faultWords(check)} (${FUSE_SHEET_LABEL[check.sheet]})`;
-    const fit = fittedA === null ? ` No winding fuse is entered: fit ${fuseMarking(check.fuseA)} in the winding lead, before the rectifier.` : '';
-    if (check.clears) findings.push({ ...base, severity: fittedA === null ? 'caution' : 'ok', message: `${what}, within ${check.allowedS} s.${fit}` });
-    else if (check.latestS !== null) findings.push({ ...base, severity: 'caution', message: `${what}, longer than the ${check.allowedS} s wanted; the winding heats meanwhile. Use a smaller or quicker fuse if the load allows.${fit}` });
-    else findings.push({ ...base, value: check.multiple, limit: 2.1, unit: 'x In', severity: 'fail', message: `${what}. The winding can burn while the fuse holds; use a smaller fuse or a winding with less resistance.${fit}` });
+    const fit = fittedA === null
+      ? ` No winding fuse is entered: fit ${fuseMarking(check.fuseA)} in the winding lead, before the rectifier.` : '';
+    if (check.clears) {
+      findings.push({
+        ...base, severity: fittedA === null ? 'caution' : 'ok', message: `${what}, within ${check.allowedS} s.${fit}`,
+      });
+    } else if (check.latestS !== null) {
+      findings.push({
+        ...base, severity: 'caution',
+        message: `${what}, longer than the ${check.allowedS} s wanted; the winding heats meanwhile. Use a smaller ` +
+          `or quicker fuse if the load allows.${fit}`,
+      });
+    } else {
+      findings.push({
+        ...base, value: check.multiple, limit: 2.1, unit: 'x In', severity: 'fail',
+        message: `${what}. The winding can burn while the fuse holds; use a smaller fuse or a winding with less ` +
+          `resistance.${fit}`,
+      });
+    }
   }
   return {
-    report: { windingId: winding.id, windingName: winding.name, fuse, fittedA, sheet, sourceOhm, leakageH, reactanceOhm, inputShortLowA, inputShortHighA, outputShortLowA, check, turnsRatio, reasoning },
+    report: {
+      windingId: winding.id, windingName: winding.name, fuse, fittedA, sheet, sourceOhm, leakageH, reactanceOhm,
+      inputShortLowA, inputShortHighA, outputShortLowA, check, turnsRatio, reasoning,
+    },
     findings,
   };
 }
