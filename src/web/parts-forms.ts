@@ -2,13 +2,13 @@
 import type { Project, Supplier } from '../core/model';
 import { costingSpec, offerSpec, partSpec, supplierSpec } from '../core/spec';
 import type { CostingFields, OfferFields, PartFields } from '../core/edits/catalog';
-import { specFormSchema } from './forms/spec-schema';
+import { labelFormSchema, specFormSchema } from './forms/spec-schema';
 import { z } from 'zod';
 import { parseForm } from '../core/spec/derive';
-import { readRatingBoxes } from '../core/spec/rating-boxes';
+import { allRatingBoxSpecs, readRatingBoxes } from '../core/spec/rating-boxes';
 
 // the part's own boxes from its spec, and one box per rating (r.<key>, rating-boxes.ts) merged into its ratings
-export const partSchema = z.record(z.string(), z.string()).transform((values, ctx): PartFields => {
+const partBoxesSchema = z.record(z.string(), z.string()).transform((values, ctx): PartFields => {
   const r = parseForm(partSpec, values);
   const boxes = readRatingBoxes(values);
   if (!r.ok) for (const [path, message] of Object.entries(r.errors)) ctx.addIssue({ code: 'custom', path: [path], message });
@@ -17,6 +17,11 @@ export const partSchema = z.record(z.string(), z.string()).transform((values, ct
   const v = r.value as PartFields;
   // a rating typed both in its box and in the other-ratings text: the box is the one the form shows for it
   return { ...v, ratings: { ...v.ratings, ...boxes.ratings } };
+});
+// labels for messages about its fields (a stale-version conflict names "Rated voltage", not "r.voltageV")
+export const partSchema = labelFormSchema(partBoxesSchema, {
+  ...partSpec,
+  fields: Object.assign({}, partSpec.fields, ...allRatingBoxSpecs().map((s) => s.fields)),
 });
 export const offerSchema = specFormSchema<OfferFields>(offerSpec);
 export const supplierSchema = specFormSchema<Supplier>(supplierSpec);

@@ -45,6 +45,17 @@ describe('parts catalog page', () => {
     expect(boxes).not.toContain('r.capacitanceF');
   });
 
+  it('a rating box both people changed is a conflict named by the rating, not its key', async () => {
+    const v = (await stored()).version;
+    const form = (voltage: string, version: number) => ({ version: String(version), description: 'Electrolytic capacitor 4700 µF 35 V', category: 'capacitor', 'r.capacitanceF': '4700', 'r.voltageV': voltage, 'r.rippleA': '', ratings: '' });
+    const part = (await stored()).parts.find((p) => p.id === 'p-c4700')!;
+    const start = { ...form('35', v), 'r.rippleA': part.ratings.rippleA === undefined ? '' : String(part.ratings.rippleA) };
+    expect((await post(`/projects/${ID}/parts/p-c4700`, { ...start, 'r.voltageV': '50' })).status).toBe(303);
+    const res = await post(`/projects/${ID}/parts/p-c4700`, { ...start, 'r.voltageV': '63' }, true);
+    expect(res.status).toBe(409);
+    expect(await res.text()).toContain('Rated voltage: ');
+  });
+
   it('adds a part, then an offer with price breaks', async () => {
     const v = (await stored()).version;
     const res = await post(`/projects/${ID}/parts`, { version: String(v), description: 'Zener diode 5.1 V 0.5 W', category: 'diode', ratings: 'voltageV=5.1, powerW=500m' });

@@ -18,6 +18,12 @@ export function specFormSchema<T>(spec: Spec) {
 /** The spec behind a form schema made here, so messages about its fields can use their labels. */
 const FORM_SPECS = new WeakMap<object, Spec>();
 
+/** Name the spec whose labels a hand-made form schema's fields have (a form drawn from several specs). */
+export function labelFormSchema<S extends object>(schema: S, spec: Spec): S {
+  FORM_SPECS.set(schema, spec);
+  return schema;
+}
+
 /** A form field's label in words (the field name itself when the schema has no spec). */
 export function fieldLabel(schema: object, name: string): string {
   const spec = FORM_SPECS.get(schema);
