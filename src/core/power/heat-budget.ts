@@ -44,27 +44,53 @@ export interface PaHeat {
 
 const ok = (x: number | null | undefined): x is number => typeof x === 'number' && Number.isFinite(x) && x > 0;
 
-export function heatBudget(supply: SupplyReport | null, pas: PaHeat[], areaM2: number | null | undefined, uWPerM2K: number | null | undefined, ambientC: number): HeatBudget {
+export function heatBudget(
+  supply: SupplyReport | null, pas: PaHeat[], areaM2: number | null | undefined, uWPerM2K: number | null | undefined,
+  ambientC: number,
+): HeatBudget {
   const sources: HeatSource[] = [];
   for (const r of supply?.rails ?? []) {
     if (r.kind === 'regulated') {
-      sources.push({ name: `${r.railName} regulator`, kind: 'regulator', watts: r.thermalDissipationW, note: 'high mains, averaged over the keying duty' });
+      sources.push({
+        name: `${r.railName} regulator`, kind: 'regulator', watts: r.thermalDissipationW,
+        note: 'high mains, averaged over the keying duty',
+      });
       const ob = r.bleeder?.fittedW;
-      if (ob !== undefined && ob !== null) sources.push({ name: `${r.railName} output bleeder`, kind: 'bleeder', watts: ob, note: 'at the set output voltage' });
+      if (ob !== undefined && ob !== null) {
+        sources.push({
+          name: `${r.railName} output bleeder`, kind: 'bleeder', watts: ob, note: 'at the set output voltage',
+        });
+      }
     } else if (r.kind === 'rectified') {
-      sources.push({ name: `${r.railName} rectifier`, kind: 'rectifier', watts: r.rectifierLoss.thermalW, note: `diodes, high mains, duty-averaged (${r.rectifierLoss.keyDownW.toFixed(2)} W key-down)` });
+      sources.push({
+        name: `${r.railName} rectifier`, kind: 'rectifier', watts: r.rectifierLoss.thermalW,
+        note: `diodes, high mains, duty-averaged (${r.rectifierLoss.keyDownW.toFixed(2)} W key-down)`,
+      });
       const wf = r.windingFuse;
       if (wf && r.winding) {
         const halves = r.winding.halves;
         // Source: Joule heating P = I^2 R, with the winding's resistance referred to the secondary (primary share
         // included)
         const w = halves * r.winding.thermalRmsA * r.winding.thermalRmsA * wf.sourceOhm;
-        sources.push({ name: `${wf.windingName} copper`, kind: 'transformer', watts: w, note: `I² R with ${r.winding.thermalRmsA.toFixed(2)} A RMS (duty-averaged) in ${wf.sourceOhm.toFixed(2)} Ω` });
+        sources.push({
+          name: `${wf.windingName} copper`, kind: 'transformer', watts: w,
+          note: `I² R with ${r.winding.thermalRmsA.toFixed(2)} A RMS (duty-averaged) in ${wf.sourceOhm.toFixed(2)} Ω`,
+        });
       }
-      if (r.bleeder.fittedW !== null) sources.push({ name: `${r.railName} bleeder`, kind: 'bleeder', watts: r.bleeder.fittedW, note: 'at the no-load peak at high mains (an upper bound)' });
+      if (r.bleeder.fittedW !== null) {
+        sources.push({
+          name: `${r.railName} bleeder`, kind: 'bleeder', watts: r.bleeder.fittedW,
+          note: 'at the no-load peak at high mains (an upper bound)',
+        });
+      }
     }
   }
-  for (const p of pas) sources.push({ name: `${p.name} devices`, kind: 'pa', watts: p.averageW, note: 'duty-averaged (key-down share of DC in minus RF out, bias idle otherwise)' });
+  for (const p of pas) {
+    sources.push({
+      name: `${p.name} devices`, kind: 'pa', watts: p.averageW,
+      note: 'duty-averaged (key-down share of DC in minus RF out, bias idle otherwise)',
+    });
+  }
   const clean = sources.map((s) => ({ ...s, watts: Number.isFinite(s.watts) ? Math.max(0, s.watts) : 0 }));
   const totalW = clean.reduce((a, s) => a + s.watts, 0);
   const area = ok(areaM2) ? areaM2 : null;
@@ -75,16 +101,38 @@ export function heatBudget(supply: SupplyReport | null, pas: PaHeat[], areaM2: n
   const findings: Finding[] = [];
   const base = { rule: 'enclosure.rise', subject: 'Enclosure', unit: 'K', source: 'thermal.enclosure' as const };
   if (riseK === null) {
-    if (totalW > 0) findings.push({ ...base, severity: 'caution', value: null, limit: ENCLOSURE_RISE_CAUTION_K, message: `About ${totalW.toFixed(1)} W is dissipated inside the box; enter the enclosure's surface and heat transfer coefficient on the supply page to see how warm it gets inside.` });
+    if (totalW > 0) {
+      findings.push({
+        ...base, severity: 'caution', value: null, limit: ENCLOSURE_RISE_CAUTION_K,
+        message: `About ${totalW.toFixed(1)} W is dissipated inside the box; enter the enclosure's surface and heat ` +
+          'transfer coefficient on the supply page to see how warm it gets inside.',
+      });
+    }
   } else if (riseK > ENCLOSURE_RISE_CAUTION_K) {
-    findings.push({ ...base, severity: 'caution', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C; the heatsink and junction checks of the rectifiers, regulators and PA use that air, not the ${ambientC} °C room. Ventilate the box or mount hot parts outside.` });
+    findings.push({
+      ...base, severity: 'caution', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K,
+      message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ` +
+        `${insideC!.toFixed(0)} °C; the heatsink and junction checks of the rectifiers, regulators and PA use that ` +
+        `air, not the ${ambientC} °C room. Ventilate the box or mount hot parts outside.`,
+    });
   } else {
-    findings.push({ ...base, severity: 'ok', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K, message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ${insideC!.toFixed(0)} °C, the ambient of the heatsink and junction checks inside.` });
+    findings.push({
+      ...base, severity: 'ok', value: riseK, limit: ENCLOSURE_RISE_CAUTION_K,
+      message: `${totalW.toFixed(1)} W inside raises the air in the box about ${riseK.toFixed(1)} K, to ` +
+        `${insideC!.toFixed(0)} °C, the ambient of the heatsink and junction checks inside.`,
+    });
   }
   // the transformers sit in the same air: their current ratings hold at their rated ambient
   if (insideC !== null && insideC > TRANSFORMER_RATED_AMBIENT_C) {
     for (const t of supply?.transformers ?? []) {
-      findings.push({ rule: 'transformer.ambient', subject: t.name, severity: 'caution', value: insideC, limit: TRANSFORMER_RATED_AMBIENT_C, unit: '°C', source: 'thermal.transformer-ambient', message: `${t.name} sits inside the box at ${insideC.toFixed(0)} °C, above the ${TRANSFORMER_RATED_AMBIENT_C} °C ambient small transformers are commonly rated for: its current ratings are optimistic there. Check the ta marked on it, derate its current, ventilate the box or mount it outside.` });
+      findings.push({
+        rule: 'transformer.ambient', subject: t.name, severity: 'caution', value: insideC,
+        limit: TRANSFORMER_RATED_AMBIENT_C, unit: '°C', source: 'thermal.transformer-ambient',
+        message: `${t.name} sits inside the box at ${insideC.toFixed(0)} °C, above the ` +
+          `${TRANSFORMER_RATED_AMBIENT_C} °C ambient small transformers are commonly rated for: its current ` +
+          'ratings are optimistic there. Check the ta marked on it, derate its current, ventilate the box or ' +
+          'mount it outside.',
+      });
     }
   }
   return { sources: clean, totalW, areaM2: area, uWPerM2K: u, riseK, ambientC, insideC, findings };
