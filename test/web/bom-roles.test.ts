@@ -61,6 +61,13 @@ describe('parts the design needs', () => {
     expect((await stored()).version).toBe(now.version);
   });
 
+  it('the parts-list line form names a part’s category as the list does', async () => {
+    const html = await (await t.app.request(`http://localhost/projects/${ID}/bom`)).text();
+    // the club's reservoir capacitor is stored under the older name "capacitor-reservoir" (seed-demo/club-30m.ts)
+    expect(html).toContain('Electrolytic capacitor 4700 µF 35 V, 105 °C, ripple 2.4 A (capacitor)</option>');
+    expect(html).not.toContain('(capacitor-reservoir)</option>');
+  });
+
   it('the catalog offers the category list and says which ratings a part’s category is checked with', async () => {
     const html = await (await t.app.request(`http://localhost/projects/${ID}/parts`)).text();
     // the category is a choice from the list; a heatsink part gets its one rating box, θsa in °C/W

@@ -1,4 +1,5 @@
 // Parts-list line editor: one form per line laid out as a grid row, and an add-line form.
+import { categoryOf } from '../../src/core/spec/parts-categories';
 import type { FC } from 'hono/jsx';
 import type { BomLine, Project } from '../../src/core/model';
 import { bomLineSpec, defaults, formValues } from '../../src/core/spec';
@@ -33,7 +34,9 @@ export type RoleOptions = [string, string][];
 
 const LineFields: FC<{ project: Project; state: FieldState; idp: string; roles: RoleOptions }> = ({ project, state, idp, roles }) => {
   const stages: [string, string][] = project.stages.map((s): [string, string] => [s.id, s.name]);
-  const parts: [string, string][] = project.parts.map((p) => [p.id, `${p.description}${p.category ? ` (${p.category})` : ''}`]);
+  // the category by its name on the list (an older or the builder's own name as typed)
+  const catName = (c: string) => (categoryOf(c).id === 'other' && c.trim().toLowerCase() !== 'other' ? c : categoryOf(c).label.toLowerCase());
+  const parts: [string, string][] = project.parts.map((p) => [p.id, `${p.description}${p.category ? ` (${catName(p.category)})` : ''}`]);
   const partsWithPick: [string, string][] = state.values.partId ? parts : [['', 'Choose a part…'], ...parts];
   // the grid's column heads name the fields: the boxes carry no help lines (they would break the rows)
   return (
