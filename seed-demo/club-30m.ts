@@ -231,6 +231,10 @@ export const club30m: Project = {
         // invented: an adjustable regulator's datasheet minimum without the adjust-pin bypass; the receiver wants < 1 mV
         rippleRejectionDb: 65,
         rippleTargetV: 0.001,
+        // invented: the usual output electrolytic beside an adjustable regulator; no bleeder fitted across it
+        outputF: 100e-6,
+        bleederOhm: null,
+        bleederRatedW: null,
       },
       // invented: below 20 V the final falls well short of its 20 W (its output goes as (V - Vsat)²)
       { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 2.5, minimumV: 20, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: 1 },

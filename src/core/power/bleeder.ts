@@ -3,6 +3,7 @@ import type { Finding } from '../findings';
 import type { BleederReport, Recommendation } from './report-types';
 import { E12_STEPS, prevInSeries } from './standard-values';
 import { quotient, usablePositive } from '../numeric';
+import { formatValue } from '../units';
 
 /**
  * Residual-voltage threshold (V d.c.). Source: IEC 60204-1 residual voltage <= 60 V within 5 s (ref §10 [C2]); ES1 60 V
@@ -21,6 +22,20 @@ export const LOW_VOLTAGE_TAU_S = 22;
 export const LOW_SAFE_V = 5;
 /** A bleeder should dissipate at most this fraction of its power rating. Common practice, no published source. */
 export const BLEEDER_DERATING = 0.5;
+/** Power ratings resistors are commonly sold in, W. Common practice, no published source. */
+export const RESISTOR_RATINGS_W = [0.125, 0.25, 0.5, 1, 2, 3, 5, 7, 10, 15, 20, 25, 50] as const;
+
+/** The smallest common resistor rating that carries `dissipationW` at BLEEDER_DERATING, or null when none does. */
+export function bleederRatingW(dissipationW: number): number | null {
+  // the part runs at no more than BLEEDER_DERATING of its rating
+  return RESISTOR_RATINGS_W.find((r) => r * BLEEDER_DERATING >= dissipationW) ?? null;
+}
+
+/** A rating as a builder orders it: "0.25 W", or "more than 50 W" beyond the common list. */
+export function ratingWords(dissipationW: number): string {
+  const r = bleederRatingW(dissipationW);
+  return r === null ? `more than ${RESISTOR_RATINGS_W[RESISTOR_RATINGS_W.length - 1]} W` : `${r} W`;
+}
 
 /**
  * Smallest capacitance a bleeder is sized for, F. Common practice, no published source: below 1 nF nothing to bleed.
@@ -99,7 +114,7 @@ export function bleederPowerFindings(
     rule: 'bleeder.power', subject: `${railName} bleeder`, value: b.fittedW, unit: 'W',
     source: 'supply.bleeder-power' as const,
   };
-  const use = `Use one rated ${(b.fittedW / BLEEDER_DERATING).toFixed(2)} W or more.`;
+  const use = `Use one rated ${ratingWords(b.fittedW)} or more.`;
   const share = `${Math.round(BLEEDER_DERATING * 100)} %`;
   const p = `${b.fittedW.toFixed(2)} W at ${b.startV.toFixed(1)} V (${where})`;
   if (b.ratedW === null) {
@@ -171,11 +186,10 @@ function ohmWords(r: number): string {
  * BLEEDER_DERATING. Null when nothing can be suggested.
  */
 export function bleederRecommendation(b: BleederReport): Recommendation | null {
-  if (b.suggestedOhm === null) return null;
-  const w = b.suggestedW ?? 0;
-  const ratingW = (w / BLEEDER_DERATING).toFixed(2);
-  const suggested = `${ohmWords(b.suggestedOhm)} bleeder, ${ratingW} W rating or more`;
-  const heat = `${ohmWords(b.suggestedOhm)} dissipates ${w.toFixed(2)} W at ${b.startV.toFixed(1)} V; a part ` +
+  if (b.suggestedOhm === null || b.suggestedW === null) return null;
+  const w = b.suggestedW;
+  const suggested = `${ohmWords(b.suggestedOhm)} bleeder, ${ratingWords(w)} rating or more`;
+  const heat = `${ohmWords(b.suggestedOhm)} dissipates ${formatValue(w, 'W')} at ${b.startV.toFixed(1)} V; a part ` +
     `rated for ${Math.round(1 / BLEEDER_DERATING)} x that runs cool.`;
   const meets = b.fittedOhm !== null && b.fittedTimeS !== null
     && (b.startV <= b.thresholdV || b.fittedTimeS <= b.allowedS);

@@ -3,7 +3,7 @@
 // sink it). The time to a safe voltage, the fitted bleeder's dissipation, and a suggestion when none is fitted.
 import type { Finding } from '../findings';
 import {
-  BLEEDER_DERATING, LOW_SAFE_V, LOW_VOLTAGE_TAU_S, SAFE_DC_V, SAFE_TIME_S, bleederPowerFindings, maxBleederOhm,
+  LOW_SAFE_V, LOW_VOLTAGE_TAU_S, SAFE_DC_V, SAFE_TIME_S, bleederPowerFindings, maxBleederOhm, ratingWords,
 } from './bleeder';
 import { E12_STEPS, prevInSeries } from './standard-values';
 
@@ -128,7 +128,7 @@ export function regulatedBleederFindings(railName: string, b: RegulatedBleederRe
     rule: 'bleeder.regulated', subject: `${railName} output`, source: 'supply.bleeder-regulated' as const,
   };
   const suggest = b.suggestedOhm !== null
-    ? ` A ${fmtOhm(b.suggestedOhm)} bleeder (${(b.suggestedW! / BLEEDER_DERATING).toFixed(2)} W rating or more) ` +
+    ? ` A ${fmtOhm(b.suggestedOhm)} bleeder (${ratingWords(b.suggestedW!)} rating or more) ` +
       'would do it.'
     : '';
   const fitted = { fittedW: b.fittedW, startV: b.startV, ratedW: b.ratedW };

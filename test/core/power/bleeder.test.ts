@@ -1,7 +1,7 @@
 // Bleeder discharge against the reference values §10 worked examples [D] (formula t = RC ln(V0/Vsafe), [C]).
 import { describe, expect, it } from 'vitest';
 import {
-  bleederFindings, bleederRecommendation, bleederReport, dischargeTimeS, maxBleederOhm,
+  bleederFindings, bleederRecommendation, bleederReport, dischargeTimeS, maxBleederOhm, bleederRatingW, ratingWords,
 } from '../../../src/core/power/bleeder';
 import { near } from './helpers';
 
@@ -62,29 +62,43 @@ describe('bleeder on every rail: time to the safe voltage and wattage', () => {
     near(b.fittedW ?? NaN, 1.225, toleranceW, 'P');
     expect(bleederFindings('HV', b).find((f) => f.rule === 'bleeder.power')?.severity).toBe('fail');
   });
-  it('no rating stated: a caution asking for twice the dissipation', () => {
+  it('no rating stated: a caution asking for a rating of at least twice the dissipation', () => {
     const p = bleederFindings('LV', bleederReport(0.01, 25.5, 0.02, 2200, null))
       .find((f) => f.rule === 'bleeder.power');
     expect(p?.severity).toBe('caution');
-    expect(p?.message).toContain('0.59 W or more'); // 2 x 0.2956 W
+    // 25.5² / 2200 = 0.2956 W, twice that 0.59 W: the next common rating is 1 W (common practice, no source)
+    expect(p?.message).toContain('use one rated 1 W or more');
   });
 });
 
 describe('the bleeder recommendation keeps a fitted bleeder that meets its target', () => {
   it('4700 µF at 25.6 V with 2.2 kΩ fitted: kept (to 5 V in RC ln(25.6/5) = 16.9 s); 3.9 kΩ for a new build', () => {
     // t = R C ln(V0/Vsafe) (ref §10 [C]); 5 V and the 22 s time constant (22 / 4700 µF = 4.68 kΩ -> E12 3.9 kΩ) are
-    // common practice, no published source; P = V²/R = 25.6² / 3900 = 0.168 W, rated twice that (derating 50 %)
+    // common practice, no published source; P = V²/R = 25.6² / 3900 = 0.168 W, rated at least twice that (derating
+    // 50 %): the next common resistor rating above 0.336 W is 0.5 W (common practice, no source)
     const b = bleederReport(4700e-6, 25.6, 0.04, 2200, 1);
     const r = bleederRecommendation(b)!;
     const t = (2200 * 4700e-6 * Math.log(25.6 / 5)).toFixed(1);
     expect(r.text).toBe(`Keep the fitted 2.2 kΩ bleeder (below 5 V in ${t} s)`);
-    expect(r.reasoning).toMatch(/for a new build: 3\.9 kΩ bleeder, 0\.34 W rating or more/);
+    expect(r.reasoning).toMatch(/for a new build: 3\.9 kΩ bleeder, 0\.5 W rating or more/);
   });
   it('none fitted, or too slow above 60 V: the suggested value (220 µF at 350 V: at most 12.9 kΩ -> E12 12 kΩ)', () => {
-    // ref §10: for 5 s the bleeder must be <= 12.9 kΩ; 350² / 12 k = 10.2 W, rated 20.42 W or more
+    // ref §10: for 5 s the bleeder must be <= 12.9 kΩ; 350² / 12 k = 10.2 W, so at least 20.4 W rated: 25 W is the
+    // next common rating (common practice, no source)
     const none = bleederRecommendation(bleederReport(4700e-6, 25.6, 0.04, null))!;
-    expect(none.text).toBe('3.9 kΩ bleeder, 0.34 W rating or more');
+    expect(none.text).toBe('3.9 kΩ bleeder, 0.5 W rating or more');
     const slow = bleederRecommendation(bleederReport(220e-6, 350, 0.1, 100e3, 2))!;
-    expect(slow.text).toBe(`12 kΩ bleeder, ${((350 * 350) / 12e3 / 0.5).toFixed(2)} W rating or more`);
+    expect(slow.text).toBe('12 kΩ bleeder, 25 W rating or more');
+  });
+});
+
+describe('a suggested rating is one a builder can order', () => {
+  it('the smallest common rating carrying the dissipation at 50 % (common practice, no source)', () => {
+    // 13.9² / 220 kΩ = 0.88 mW -> 0.125 W; 0.125 W exactly -> 0.25 W at 50 %; 0.126 W -> 0.5 W; 30 W -> 0.5 × 50 W < 30
+    expect(bleederRatingW((13.9 * 13.9) / 220e3)).toBe(0.125);
+    expect(bleederRatingW(0.125)).toBe(0.25);
+    expect(bleederRatingW(0.126)).toBe(0.5);
+    expect(bleederRatingW(30)).toBeNull();
+    expect(ratingWords(30)).toBe('more than 50 W');
   });
 });
