@@ -106,8 +106,10 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
           <h2>Power flow at key-down</h2>
           {raw(powerFlowSvg(powerFlowData(project, report)))}
           <p class="hint">
-            Currents are key-down (TX) DC currents{project.mains ? '; the mains box shows the primary RMS current' : ''}. Rails: ● headroom OK, ▲ caution, ■ fails, –
-            not checked. <a href={`${base}/supply`}>Supply page</a>
+            Currents are key-down (TX) DC currents{project.mains ? '; the mains box shows the primary RMS current' : ''}.
+            A rail's voltage is its nominal value (a rectified rail: the rated winding's peak less the diode drops, before
+            load); its troughs are in the chart. Rails: ● headroom OK, ▲ caution, ■ fails, – not checked.{' '}
+            <a href={`${base}/supply`}>Supply page</a>
           </p>
         </div>
         <div class="card trough-card" id="troughs">
