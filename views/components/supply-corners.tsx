@@ -33,6 +33,25 @@ function rectifiedVerdict(rail: RectifiedRailReport, which: 'plain' | 'tolerance
   return tol ?? (c && c.headroomMarginV >= 0 ? 'ok' : plain);
 }
 
+type DecidingRail<C> = { worstVoltageCornerId: string; worstThermalCornerId: string; corners: C[] };
+/** One row per deciding role whose corner the rail has: the role, the corner's label, then the rail's own cells. */
+function decidingRows<C extends { id: string; label: string }>(
+  rail: DecidingRail<C>,
+  cells: (corner: C, headroom: Role['headroom']) => Child,
+) {
+  const tolerance = rail.corners.some((x) => x.id === TOLERANCE_ID);
+  return roles(rail.worstVoltageCornerId, rail.worstThermalCornerId, tolerance).map(({ role, id, headroom }) => {
+    const c = rail.corners.find((x) => x.id === id);
+    return c ? (
+      <tr data-corner={id} class={headroom ? 'headroom-row' : ''}>
+        <th scope="row">{role}</th>
+        <td>{c.label}</td>
+        {cells(c, headroom)}
+      </tr>
+    ) : null;
+  });
+}
+
 const VERDICT_WORDS: Record<Severity, string> = { ok: 'ok', caution: 'caution', fail: 'fail' };
 const Verdict: FC<{ sev: Severity | null; none?: string }> = ({ sev, none }) =>
   sev ? (
@@ -57,23 +76,16 @@ export const RectifiedDeciding: FC<{ rail: RectifiedRailReport; caption?: Child 
       </tr>
     </thead>
     <tbody>
-      {roles(rail.worstVoltageCornerId, rail.worstThermalCornerId, rail.corners.some((x) => x.id === TOLERANCE_ID)).map(
-        ({ role, id, headroom }) => {
-          const c = rail.corners.find((x) => x.id === id);
-          return c ? (
-            <tr data-corner={id} class={headroom ? 'headroom-row' : ''}>
-              <th scope="row">{role}</th>
-              <td>{c.label}</td>
-              <td class="num">{fv(c.loadA, 'A')}</td>
-              <td class="num">{fv(c.troughV, 'V')}</td>
-              <td class="num">{fv(c.headroomMarginV, 'V')}</td>
-              <td>{headroom ? <Verdict sev={rectifiedVerdict(rail, headroom)} none="no need stated" /> : null}</td>
-              <td class="num">{fv(c.secondaryRmsA, 'A')}</td>
-              <td class="num">{fv(c.capacitorRippleRmsA, 'A')}</td>
-            </tr>
-          ) : null;
-        },
-      )}
+      {decidingRows(rail, (c, headroom) => (
+        <>
+          <td class="num">{fv(c.loadA, 'A')}</td>
+          <td class="num">{fv(c.troughV, 'V')}</td>
+          <td class="num">{fv(c.headroomMarginV, 'V')}</td>
+          <td>{headroom ? <Verdict sev={rectifiedVerdict(rail, headroom)} none="no need stated" /> : null}</td>
+          <td class="num">{fv(c.secondaryRmsA, 'A')}</td>
+          <td class="num">{fv(c.capacitorRippleRmsA, 'A')}</td>
+        </>
+      ))}
     </tbody>
   </table>
 );
@@ -92,25 +104,18 @@ export const RegulatedDeciding: FC<{ rail: RegulatedRailReport; caption?: Child 
       </tr>
     </thead>
     <tbody>
-      {roles(rail.worstVoltageCornerId, rail.worstThermalCornerId, rail.corners.some((x) => x.id === TOLERANCE_ID)).map(
-        ({ role, id, headroom }) => {
-          const c = rail.corners.find((x) => x.id === id);
-          return c ? (
-            <tr data-corner={id} class={headroom ? 'headroom-row' : ''}>
-              <th scope="row">{role}</th>
-              <td>{c.label}</td>
-              <td class="num">{fv(c.inputTroughV, 'V')}</td>
-              <td class="num">{fv(c.headroomV, 'V')}</td>
-              <td>
-                {headroom === 'plain' ? <Verdict sev={severityOf(rail.findings, 'regulator.headroom')} /> : null}
-                {/* the feeding rail's own tolerance check judges this corner */}
-                {headroom === 'tolerance' ? <span class="hint">judged on the rail that feeds it</span> : null}
-              </td>
-              <td class="num">{fv(c.dissipationW, 'W')}</td>
-            </tr>
-          ) : null;
-        },
-      )}
+      {decidingRows(rail, (c, headroom) => (
+        <>
+          <td class="num">{fv(c.inputTroughV, 'V')}</td>
+          <td class="num">{fv(c.headroomV, 'V')}</td>
+          <td>
+            {headroom === 'plain' ? <Verdict sev={severityOf(rail.findings, 'regulator.headroom')} /> : null}
+            {/* the feeding rail's own tolerance check judges this corner */}
+            {headroom === 'tolerance' ? <span class="hint">judged on the rail that feeds it</span> : null}
+          </td>
+          <td class="num">{fv(c.dissipationW, 'W')}</td>
+        </>
+      ))}
     </tbody>
   </table>
 );
