@@ -5,24 +5,9 @@
 import type { KeyingTransient } from '../../src/core/power/keying-transient';
 import { formatValue } from '../../src/core/units';
 import { esc } from './svg-text';
+import { r1, ticks } from './ticks';
 
-const r1 = (x: number) => (Math.round(x * 10) / 10).toString();
 const sdb = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(1)} dB`;
-
-function niceStep(span: number, count: number): number {
-  const raw = span / Math.max(1, count);
-  if (!(raw > 0) || !Number.isFinite(raw)) return 1;
-  const p = 10 ** Math.floor(Math.log10(raw));
-  const m = raw / p;
-  return (m <= 1 ? 1 : m <= 2 ? 2 : m <= 5 ? 5 : 10) * p;
-}
-
-function ticks(lo: number, hi: number, count: number): number[] {
-  const step = niceStep(hi - lo, count);
-  const out: number[] = [];
-  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9 && out.length < 30; v += step) out.push(Number(v.toPrecision(10)));
-  return out;
-}
 
 /** Render the transient of one rail ('' when there is nothing to draw). */
 export function keyingTransientSvg(railName: string, k: KeyingTransient, widthPx = 720, heightPx = 340): string {

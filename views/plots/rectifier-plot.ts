@@ -5,6 +5,7 @@
 import type { RectifiedRailReport } from '../../src/core/power/report-types';
 import { formatValue } from '../../src/core/units';
 import { esc } from './svg-text';
+import { r1, ticks } from './ticks';
 
 export interface RectifierPlotData {
   title: string;
@@ -30,24 +31,6 @@ export function rectifierPlotData(rail: RectifiedRailReport): RectifierPlotData 
     minimumV: rail.requiredMinV > 0 ? rail.requiredMinV : null,
     minimumLabel: `needed minimum ${formatValue(rail.requiredMinV, 'V')}`,
   };
-}
-
-const r1 = (x: number) => (Math.round(x * 10) / 10).toString();
-
-/** A "nice" tick step (1, 2, 5 x 10^k) giving about `count` intervals over span. */
-function niceStep(span: number, count: number): number {
-  const raw = span / Math.max(1, count);
-  if (!(raw > 0) || !Number.isFinite(raw)) return 1;
-  const p = 10 ** Math.floor(Math.log10(raw));
-  const m = raw / p;
-  return (m <= 1 ? 1 : m <= 2 ? 2 : m <= 5 ? 5 : 10) * p;
-}
-
-function ticks(lo: number, hi: number, count: number): number[] {
-  const step = niceStep(hi - lo, count);
-  const out: number[] = [];
-  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9 && out.length < 30; v += step) out.push(Number(v.toPrecision(10)));
-  return out;
 }
 
 function range(values: number[], extra: (number | null)[], padFraction: number): [number, number] {
