@@ -7,12 +7,9 @@
 // pa-source).
 // Invented design: 20 V, drain load 50 Ω (no transformer), 7.03 MHz, Rds(on) 0.05 Ω, nominal class-E values
 // C1 = 0.1836/(ωR), excess reactance 1.1525 R (Sokal and Sokal, IEEE JSSC SC-10(3), 1975, from memory), QL 30.
-import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
+import { type Complex as C, ladderAndLoadLines, ladderInputOhm, runSpice, spiceScratchDir } from '../../helpers/ngspice';
 import { CHOKE_REACTANCE_RATIO, CLASS_E_EXCESS, CLASS_E_QL, CLASS_E_SHUNT } from '../../../src/core/rf/class-e-sim';
 import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
 import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
@@ -46,42 +43,11 @@ const W = 2 * Math.PI * F0;
 const TSTOP = 150;
 const STEPS = 300;
 
-type C = { re: number; im: number };
-
-/** Input impedance of the lossless ladder (as built) loaded by zl at F0, folded element by element from the load
- * (series Z adds; shunt C: Z ∥ 1/(jωC) = Z / (1 + jωC Z); circuit theory). */
-function filterInputOhm(d: LpfDesign, zl: C): C {
-  const elements = d.elements;
-  let z: C = zl;
-  for (let i = elements.length - 1; i >= 0; i--) {
-    const e = elements[i];
-    if (e.kind === 'series-inductor') z = { re: z.re, im: z.im + W * e.builtValue };
-    else {
-      // shunt C: Z ∥ 1/(jωC) = Z / (1 + jωC Z)
-      const b = W * e.builtValue;
-      const den = { re: 1 - b * z.im, im: b * z.re };
-      const m = den.re * den.re + den.im * den.im;
-      z = { re: (z.re * den.re + z.im * den.im) / m, im: (z.im * den.re - z.re * den.im) / m };
-    }
-  }
-  return z;
-}
+/** Input impedance of the lossless ladder (as built) loaded by zl at F0. */
+const filterInputOhm = (d: LpfDesign, zl: C): C => ladderInputOhm(d, zl, W);
 
 function netlist(d: LpfDesign, zl: C): string {
   const per = 1 / F0;
-  const ladder: string[] = [];
-  let node = 'b';
-  d.elements.forEach((e, i) => {
-    if (e.kind === 'series-inductor') {
-      ladder.push(`LF${i} ${node} n${i} ${e.builtValue.toPrecision(7)}`);
-      node = `n${i}`;
-    } else {
-      ladder.push(`CF${i} ${node} 0 ${e.builtValue.toPrecision(7)}`);
-    }
-  });
-  // a resistive load joins through 1 µΩ (a 0 V source there stalled the time step in the stage-only test)
-  const load = Math.abs(zl.im) < 1e-9 ? `RX ${node} nr 1e-6`
-    : zl.im > 0 ? `LX ${node} nr ${(zl.im / W).toPrecision(7)}` : `CX ${node} nr ${(1 / (W * -zl.im)).toPrecision(7)}`;
   return [
     '* class-E stage, low-pass filter, load (written from scratch for this test)',
     `VDD vdd 0 DC ${VDD}`,
@@ -95,8 +61,7 @@ function netlist(d: LpfDesign, zl: C): string {
     `C1 d 0 ${(CLASS_E_SHUNT / (W * R)).toPrecision(7)}`,
     `L0 d a ${((CLASS_E_QL * R) / W).toPrecision(7)}`,
     `C0 a b ${(1 / (W * (CLASS_E_QL - CLASS_E_EXCESS) * R)).toPrecision(7)}`,
-    ...ladder,
-    load,
+    ...ladderAndLoadLines(d, 'b', zl, W),
     `RL nr 0 ${zl.re.toPrecision(7)}`,
     '* Gear integration: with the default method the time step stalled at the body diode near zero-voltage switching',
     '.options method=gear',
@@ -108,20 +73,12 @@ function netlist(d: LpfDesign, zl: C): string {
   ].join('\n');
 }
 
-const dir = haveNgspice ? mkdtempSync(join(tmpdir(), 'rw-echain-')) : '';
-afterAll(() => {
-  if (dir) rmSync(dir, { recursive: true, force: true });
-});
+const dir = spiceScratchDir('rw-echain-', haveNgspice);
 
 const cache = new Map<string, ReturnType<typeof spiceRun>>();
 function spiceRun(d: LpfDesign, zl: C, name: string) {
-  const file = join(dir, `${name}.cir`);
-  writeFileSync(file, netlist(d, zl));
-  const r = spawnSync(NGSPICE as string, ['-b', file], { cwd: dir, encoding: 'utf8' });
-  const num = (k: string) => Number(r.stdout.match(new RegExp(`^${k}\\s*=\\s*(\\S+)`, 'm'))?.[1]);
-  const harm = new Map<number, number>();
-  for (const m of r.stdout.matchAll(/^\s*(\d+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s*$/gm)) harm.set(Number(m[1]), Number(m[3]));
-  return { vdpk: num('vdpk'), pout: num('pout'), harm, out: r.stdout + r.stderr };
+  const r = runSpice(dir, name, netlist(d, zl));
+  return { vdpk: r.measure('vdpk'), pout: r.measure('pout'), harm: r.harm, out: r.out };
 }
 const run = (d: LpfDesign, zl: C, name: string) => {
   if (!cache.has(name)) cache.set(name, spiceRun(d, zl, name));

@@ -10,12 +10,9 @@
 // the clipped drain voltage where that is higher, pa-clip) less the filter's rejection from a current source into the
 // load at that harmonic (lpf-analysis harmonicsFromSource).
 // Invented design: 13.8 V, 1:1 transformer (k = 0.9995), 7.03 MHz, 50 Ω.
-import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
+import { type Complex as C, ladderAndLoadLines, ladderInputOhm, runSpice, spiceScratchDir } from '../../helpers/ngspice';
 import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
 import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
 import { evaluatePa } from '../../../src/core/rf/pa';
@@ -62,39 +59,12 @@ function pulsePeakA(thetaRad: number): number {
   return ((VDD - VSAT) / ((R0 / 4) * 2 * alpha1)) / (1 - Math.exp(-VSAT / KNEE));
 }
 
-type C = { re: number; im: number };
-
-/** Input impedance of the lossless ladder (as built) loaded by zl at F0, folded from the load (circuit theory). */
-function filterInputOhm(d: LpfDesign, zl: C): C {
-  let z: C = zl;
-  for (let i = d.elements.length - 1; i >= 0; i--) {
-    const e = d.elements[i];
-    if (e.kind === 'series-inductor') z = { re: z.re, im: z.im + W * e.builtValue };
-    else {
-      const b = W * e.builtValue;
-      const den = { re: 1 - b * z.im, im: b * z.re };
-      const m = den.re * den.re + den.im * den.im;
-      z = { re: (z.re * den.re + z.im * den.im) / m, im: (z.im * den.re - z.re * den.im) / m };
-    }
-  }
-  return z;
-}
+/** Input impedance of the lossless ladder (as built) loaded by zl at F0. */
+const filterInputOhm = (d: LpfDesign, zl: C): C => ladderInputOhm(d, zl, W);
 
 function netlist(d: LpfDesign, zl: C, thetaRad: number): string {
   const ipk = pulsePeakA(thetaRad);
   const per = 1 / F0;
-  const ladder: string[] = [];
-  let node = 'f0';
-  d.elements.forEach((e, i) => {
-    if (e.kind === 'series-inductor') {
-      ladder.push(`LF${i} ${node} n${i} ${e.builtValue.toPrecision(7)}`);
-      node = `n${i}`;
-    } else {
-      ladder.push(`CF${i} ${node} 0 ${e.builtValue.toPrecision(7)}`);
-    }
-  });
-  const load = Math.abs(zl.im) < 1e-9 ? `RX ${node} nr 1e-6`
-    : zl.im > 0 ? `LX ${node} nr ${(zl.im / W).toPrecision(7)}` : `CX ${node} nr ${(1 / (W * -zl.im)).toPrecision(7)}`;
   const lFull = (20 * R0) / W; // full-primary reactance 20 x the drain-to-drain load: small magnetising current
   const cth = Math.cos(thetaRad).toPrecision(9);
   // cosine pulse of device k (phase 0 or π), falling off as the drain nears 0 V (saturation knee)
@@ -112,8 +82,7 @@ function netlist(d: LpfDesign, zl: C, thetaRad: number): string {
     `LP2 d2 vdd ${(lFull / 4).toPrecision(7)}`,
     `LS1 f0 0 ${lFull.toPrecision(7)}`,
     'K1 LP1 LP2 0.9995', 'K2 LP1 LS1 0.9995', 'K3 LP2 LS1 0.9995',
-    ...ladder,
-    load,
+    ...ladderAndLoadLines(d, 'f0', zl, W),
     `RL nr 0 ${zl.re.toPrecision(7)}`,
     `.tran ${(per / STEPS).toPrecision(6)} ${(TSTOP * per).toPrecision(9)} 0 ${(per / STEPS).toPrecision(6)}`,
     `.meas tran vdpk MAX v(d1) from=${((TSTOP - 20) * per).toPrecision(9)} to=${(TSTOP * per).toPrecision(9)}`,
@@ -123,22 +92,14 @@ function netlist(d: LpfDesign, zl: C, thetaRad: number): string {
   ].join('\n');
 }
 
-const dir = haveNgspice ? mkdtempSync(join(tmpdir(), 'rw-cchain-')) : '';
-afterAll(() => {
-  if (dir) rmSync(dir, { recursive: true, force: true });
-});
+const dir = spiceScratchDir('rw-cchain-', haveNgspice);
 
 const cache = new Map<string, { vdpk: number; pout: number; harm: Map<number, number>; out: string }>();
 function run(d: LpfDesign, zl: C, name: string, thetaRad: number) {
   const hit = cache.get(name);
   if (hit) return hit;
-  const file = join(dir, `${name}.cir`);
-  writeFileSync(file, netlist(d, zl, thetaRad));
-  const r = spawnSync(NGSPICE as string, ['-b', file], { cwd: dir, encoding: 'utf8' });
-  const num = (k: string) => Number(r.stdout.match(new RegExp(`^${k}\\s*=\\s*(\\S+)`, 'm'))?.[1]);
-  const harm = new Map<number, number>();
-  for (const m of r.stdout.matchAll(/^\s*(\d+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s*$/gm)) harm.set(Number(m[1]), Number(m[3]));
-  const res = { vdpk: num('vdpk'), pout: num('pout'), harm, out: r.stdout + r.stderr };
+  const r = runSpice(dir, name, netlist(d, zl, thetaRad));
+  const res = { vdpk: r.measure('vdpk'), pout: r.measure('pout'), harm: r.harm, out: r.out };
   cache.set(name, res);
   return res;
 }
