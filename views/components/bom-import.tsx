@@ -1,7 +1,7 @@
 // CSV import of a parts list: the upload form, and the preview with column choices and per-row errors.
 // Nothing is saved until the user presses Import, and then only if no row is refused (or they chose
 // to import only the good rows).
-import type { FC } from 'hono/jsx';
+import type { Child, FC } from 'hono/jsx';
 import type { Project } from '../../src/core/model';
 import { IMPORT_FIELDS_FOR, IMPORT_FIELD_LABELS } from '../../src/core/csv/import-mapping';
 import type { ImportPreview, PreviewRow } from '../../src/core/csv';
@@ -14,11 +14,7 @@ export const ImportForm: FC<{ project: Project; error?: string }> = ({ project, 
   <form method="post" action={`/projects/${project.id}/bom/import`} enctype="multipart/form-data" class="card add" aria-label="Import a parts list from CSV">
     <h2>Import lines from a CSV file</h2>
     <Version version={project.version} />
-    {error ? (
-      <div class="form-errors" role="alert">
-        <p>{error}</p>
-      </div>
-    ) : null}
+    <FormAlert message={error} />
     <div class="row">
       <label class="field" for="imp-file">
         <span class="label">CSV file (comma, semicolon or tab separated; first row = headers)</span>
@@ -59,22 +55,10 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
   return (
     <section class="card import-preview" id="import-preview">
       <h1>Import preview{fileName ? `: ${fileName}` : ''}</h1>
-      {message ? (
-        <div class="form-errors" role="alert">
-          <p>{message}</p>
-        </div>
-      ) : null}
+      <FormAlert message={message} />
       <PreviewSummary preview={preview} />
       <form method="post" action={`/projects/${project.id}/bom/import`}>
-        <Version version={project.version} />
-        <input type="hidden" name="fileName" value={fileName} />
-        <textarea name="csv" hidden aria-hidden="true">
-          {csv}
-        </textarea>
-        <h2>Which column is which</h2>
-        <div class="row">
-          <ColumnChoices preview={preview} />
-          <DecimalChoice decimal={decimal} />
+        <PreviewMapping version={project.version} fileName={fileName} csv={csv} preview={preview} decimal={decimal}>
           <label class="field" for="imp-stage2">
             <span class="label">Stage for the imported lines</span>
             <select id="imp-stage2" name="stageId">
@@ -85,7 +69,7 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
               ))}
             </select>
           </label>
-        </div>
+        </PreviewMapping>
         {existingLines > 0 ? (
           <fieldset class="row duplicates">
             <legend>
@@ -152,6 +136,34 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
 };
 
 // ------------------------------------------------------------ parts shared with the supplier price-list import
+
+/** Why the last press saved nothing (nothing drawn without a message). */
+export const FormAlert: FC<{ message?: string }> = ({ message }) =>
+  message ? (
+    <div class="form-errors" role="alert">
+      <p>{message}</p>
+    </div>
+  ) : null;
+
+/** The preview form's carried file (version, name and text, hidden) and its column choices: one select per field,
+ * the decimal mark, then the import's own field (children). */
+export const PreviewMapping: FC<{
+  version: number; fileName: string; csv: string; preview: ImportPreview; decimal: '.' | ','; children?: Child;
+}> = ({ version, fileName, csv, preview, decimal, children }) => (
+  <>
+    <Version version={version} />
+    <input type="hidden" name="fileName" value={fileName} />
+    <textarea name="csv" hidden aria-hidden="true">
+      {csv}
+    </textarea>
+    <h2>Which column is which</h2>
+    <div class="row">
+      <ColumnChoices preview={preview} />
+      <DecimalChoice decimal={decimal} />
+      {children}
+    </div>
+  </>
+);
 
 /** Rows counted, the separator, totals rows skipped, and the problems that block the whole file. */
 export const PreviewSummary: FC<{ preview: ImportPreview }> = ({ preview }) => (

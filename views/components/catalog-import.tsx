@@ -8,7 +8,7 @@ import type { CatalogChange, CatalogUpdate } from '../../src/core/csv/catalog-up
 import { ratingsReadable } from '../../src/core/spec/ratings-readable';
 import { formatMoney } from '../../src/core/cost/money';
 import { Version } from './supply-transformer';
-import { ColumnChoices, DecimalChoice, PreviewSummary, RowProblems } from './bom-import';
+import { FormAlert, PreviewMapping, PreviewSummary, RowProblems } from './bom-import';
 
 const action = (p: Project) => `/projects/${p.id}/parts/import`;
 
@@ -16,11 +16,7 @@ export const CatalogImportForm: FC<{ project: Project; error?: string }> = ({ pr
   <form method="post" action={action(project)} enctype="multipart/form-data" class="card add" aria-label="Import a supplier price list" id="catalog-import">
     <h2>Import a supplier’s price list (CSV)</h2>
     <Version version={project.version} />
-    {error ? (
-      <div class="form-errors" role="alert">
-        <p>{error}</p>
-      </div>
-    ) : null}
+    <FormAlert message={error} />
     <div class="row">
       <label class="field" for="cat-file">
         <span class="label">CSV file (description, category, ratings, SKU, price or price breaks, minimum order, multiple, currency)</span>
@@ -69,11 +65,7 @@ export const CatalogPreviewBody: FC<CatalogPreviewProps> = (props) => {
   return (
     <section class="card import-preview" id="catalog-import-preview">
       <h1>Price list preview{fileName ? `: ${fileName}` : ''}</h1>
-      {message ? (
-        <div class="form-errors" role="alert">
-          <p>{message}</p>
-        </div>
-      ) : null}
+      <FormAlert message={message} />
       <PreviewSummary preview={preview} />
       {update?.errors.length ? (
         <div class="form-errors" role="alert">
@@ -85,20 +77,12 @@ export const CatalogPreviewBody: FC<CatalogPreviewProps> = (props) => {
         </div>
       ) : null}
       <form method="post" action={action(project)}>
-        <Version version={project.version} />
-        <input type="hidden" name="fileName" value={fileName} />
-        <textarea name="csv" hidden aria-hidden="true">
-          {csv}
-        </textarea>
-        <h2>Which column is which</h2>
-        <div class="row">
-          <ColumnChoices preview={preview} />
-          <DecimalChoice decimal={decimal} />
+        <PreviewMapping version={project.version} fileName={fileName} csv={csv} preview={preview} decimal={decimal}>
           <label class="field" for="cat-supplier2">
             <span class="label">Supplier (for rows with no supplier column)</span>
             <input id="cat-supplier2" name="supplier" value={supplier} maxlength={120} />
           </label>
-        </div>
+        </PreviewMapping>
         {n ? (
           <p class="summary-line" data-changes>
             Importing changes the catalog: {n.up} price(s) up, {n.down} down, {n.mixed} up and down, {n.terms} with other terms,
