@@ -102,6 +102,8 @@ describe('Sources page', () => {
     expect(html).toMatch(/Local rules and your licence conditions govern/);
     const report = evaluate(structuredClone(DEMO_PROJECTS[0]));
     for (const f of report.findings) expect(html.includes(`data-source="${f.source}"`), f.source).toBe(true);
+    // the checks a source backs are named in the pages' words, never by the program's rule keys
+    for (const f of report.findings) expect(html.includes(`(${f.rule})`), f.rule).toBe(false);
     expect(html).toMatch(/47 CFR 97\.307\(d\)/);
     expect(html).toMatch(/PARIS word convention/);
   });

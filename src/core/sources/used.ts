@@ -10,8 +10,15 @@ export interface SourceUse {
   key: SourceKey;
   text: string;
   status: SourceStatus;
-  /** What it backs in this project: "subject: rule" lines, or the rule set / a recommendation, once each. */
+  /** What it backs in this project: each finding's subject, or the rule set / a recommendation, once each. */
   checks: string[];
+}
+
+/** What a finding is about in the words the pages use: its subject, else its first sentence (never the rule key). */
+function checkWords(f: Finding): string {
+  if (f.subject) return f.subject;
+  const first = f.message.split(/(?<=\.)\s/)[0];
+  return first.length > 90 ? `${first.slice(0, 89)}…` : first;
 }
 
 const STATUS_ORDER: Record<SourceStatus, number> = { published: 0, analogy: 1, memory: 2, practice: 3, design: 4 };
@@ -23,7 +30,7 @@ export function sourcesUsed(project: Project, report: { findings: Finding[]; sup
     if (!uses.has(key)) uses.set(key, new Set());
     uses.get(key)!.add(what);
   };
-  for (const f of report.findings) add(f.source, f.subject ? `${f.subject} (${f.rule})` : f.rule);
+  for (const f of report.findings) add(f.source, checkWords(f));
   for (const r of report.supply?.rails ?? []) for (const rec of r.recommendations) add(rec.source, `${r.railName}: ${rec.topic} recommendation`);
   if (report.rf?.harmonics) add(report.rf.harmonics.ruleSource, 'Harmonics at the antenna: the required attenuation');
   const rs = RULE_SETS[project.rf.spuriousRule];
