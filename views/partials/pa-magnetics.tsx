@@ -4,7 +4,8 @@ import type { FC } from 'hono/jsx';
 import type { RfStageResult } from '../../src/core/rf/report';
 import { paOutputRows } from '../../src/core/rf/pa-output-rows';
 
-const Rows: FC<{ rows: [string, string][] }> = ({ rows }) => (
+/** A two-column table of label and value rows. */
+export const KV: FC<{ rows: [string, string][] }> = ({ rows }) => (
   <table class="grid kv">
     <tbody>
       {rows.map(([k, v]) => (
@@ -23,7 +24,7 @@ export const PaMagnetics: FC<{ s: RfStageResult }> = ({ s }) => {
   return (
     <div class="rf-network">
       <h3>{s.stageName}: output parts</h3>
-      <Rows rows={rows} />
+      <KV rows={rows} />
     </div>
   );
 };

@@ -20,23 +20,10 @@ import type { CoreRealisation } from '../../src/core/rf/cores-check';
 import type { LNetwork, RfChoke } from '../../src/core/rf/output-network';
 import { PaSwrTable } from './pa-swr-table';
 import { clampText } from '../../src/core/rf/pa-clamp';
-import { PaMagnetics } from './pa-magnetics';
+import { KV, PaMagnetics } from './pa-magnetics';
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
 const sevClass = (s: Finding['severity']) => `sev sev-${s}`;
-
-const KV: FC<{ rows: [string, string][] }> = ({ rows }) => (
-  <table class="grid kv">
-    <tbody>
-      {rows.map(([k, v]) => (
-        <tr>
-          <th scope="row">{k}</th>
-          <td>{v}</td>
-        </tr>
-      ))}
-    </tbody>
-  </table>
-);
 
 /** A refused PA has no numbers to show (its result holds placeholders): say so instead of a table of zeros. */
 const PaRefused: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => (
