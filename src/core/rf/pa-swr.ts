@@ -34,6 +34,8 @@ export interface PaSwrStress {
   model: 'load-line' | 'class-e-simulated';
   /** Class E: highest drain voltage at switch turn-on round the circle, / Vdd (0 = zero-voltage switching). */
   classETurnOnRatio: number | null;
+  /** Class E: Rds(on) over the drain load of one half the simulation used (the harmonic band's loads share it). */
+  classERdsOnRatio: number | null;
   /**
    * Push-pull class D: the leakage ring included in the drain peak and device current (leakage and Coss as entered,
    * null when not; z0Ohm = √(L/C) when both are); null for other stages.
@@ -228,6 +230,7 @@ export function swrStress(
     swr,
     model: cls === 'E' ? 'class-e-simulated' : 'load-line',
     classETurnOnRatio: ref ? worstTurnOn : null,
+    classERdsOnRatio: ref ? rdsOnRatio : null,
     ring: m.ring && cls === 'D'
       ? { ...m.ring, z0Ohm: leakageRing(0, 0, m.ring.leakageH, m.ring.cossF).z0Ohm } : null,
     points: all.filter((p) => p.phaseDeg % 15 === 0),
