@@ -85,13 +85,29 @@ interface Circuit {
   vpk: number;
   /** sin(2 pi n / steps), n = 0..steps */
   sin: Float64Array;
+  /** Per winding, fixed for the circuit (step()'s terms, each computed as step() wrote it): k, q, h/C/q,
+   *  (h/C) I0, L/h, D = L/h + R + h/C/q, k²/D, n Vf - ESR I0, k ρ; whether it is half-wave; ESR, I0 and g. */
+  k: Float64Array;
+  q: Float64Array;
+  beta: Float64Array;
+  hcI0: Float64Array;
+  lh: Float64Array;
+  d: Float64Array;
+  k2d: Float64Array;
+  drop: Float64Array;
+  krho: Float64Array;
+  half: Uint8Array;
+  esr: Float64Array;
+  i0: Float64Array;
+  g: Float64Array;
+  rho: number;
+  lph: number;
 }
 
 interface Work {
   v: Float64Array;
   j: Float64Array;
   a: Float64Array;
-  d: Float64Array;
   c: Float64Array;
   on: Uint8Array;
 }
@@ -102,50 +118,48 @@ interface Work {
  * C (v' - v)/h = j' - I0 - g v', so v' = a_i + β_i j'. Then j_i' = (c_i - k_i ρ X')/D_i with ρ = R_p + L_p/h,
  * D_i = L_i/h + R_i + β_i, and X' = B / (1 + ρ A), A = Σ k_i²/D_i, B = Σ k_i c_i / D_i (Kirchhoff on the ideal
  * transformer); a winding whose current comes out negative is dropped from S (its diodes block) and the rest solved
- * again. Returns X'.
+ * again. Returns X'. The terms fixed by the circuit are precomputed in circuitOf (same operations, same order).
  */
 function step(cir: Circuit, wk: Work, vs: number, x: number): number {
-  const { ws, h } = cir;
+  const { k, q, hcI0, lh, d, k2d, drop, krho, half, beta } = cir;
+  const { v, j, a, c, on } = wk;
   const mag = Math.abs(vs);
-  const m = ws.length;
-  const rho = cir.rp + cir.lp / h;
+  const m = k.length;
+  const rho = cir.rho;
+  const emf = mag + cir.lph * x;
+  const positive = vs > 0;
   for (let i = 0; i < m; i++) {
-    const w = ws[i];
-    const q = 1 + (h * w.g) / w.c;
-    const beta = h / w.c / q;
-    wk.a[i] = (wk.v[i] - (h / w.c) * w.i0) / q;
-    wk.d[i] = w.l / h + w.r + beta;
-    wk.c[i] = w.k * (mag + (cir.lp / h) * x) - (w.n * w.vf - w.esr * w.i0) - wk.a[i] + (w.l / h) * wk.j[i];
-    wk.on[i] = (vs > 0 || !w.halfWave) && wk.c[i] > 0 ? 1 : 0;
+    a[i] = (v[i] - hcI0[i]) / q[i];
+    c[i] = k[i] * emf - drop[i] - a[i] + lh[i] * j[i];
+    on[i] = (positive || !half[i]) && c[i] > 0 ? 1 : 0;
   }
   let xNew = 0;
   for (let pass = 0; pass <= m; pass++) {
-    let a = 0;
-    let b = 0;
+    let sa = 0;
+    let sb = 0;
     for (let i = 0; i < m; i++) {
-      if (!wk.on[i]) continue;
-      a += (ws[i].k * ws[i].k) / wk.d[i];
-      b += (ws[i].k * wk.c[i]) / wk.d[i];
+      if (!on[i]) continue;
+      sa += k2d[i];
+      sb += (k[i] * c[i]) / d[i];
     }
-    xNew = b / (1 + rho * a);
+    xNew = sb / (1 + rho * sa);
     let worst = -1;
     let worstJ = 0;
     for (let i = 0; i < m; i++) {
-      const jn = wk.on[i] ? (wk.c[i] - ws[i].k * rho * xNew) / wk.d[i] : 0;
-      if (wk.on[i] && jn < worstJ) {
+      if (!on[i]) continue;
+      const jn = (c[i] - krho[i] * xNew) / d[i];
+      if (jn < worstJ) {
         worst = i;
         worstJ = jn;
       }
     }
     if (worst < 0) break;
-    wk.on[worst] = 0;
+    on[worst] = 0;
   }
   for (let i = 0; i < m; i++) {
-    const w = ws[i];
-    const jn = wk.on[i] ? (wk.c[i] - w.k * rho * xNew) / wk.d[i] : 0;
-    wk.j[i] = jn;
-    const q = 1 + (h * w.g) / w.c;
-    wk.v[i] = Math.max(0, wk.a[i] + (h / w.c / q) * jn);
+    const jn = on[i] ? (c[i] - krho[i] * xNew) / d[i] : 0;
+    j[i] = jn;
+    v[i] = Math.max(0, a[i] + beta[i] * jn);
   }
   return xNew;
 }
@@ -176,19 +190,20 @@ function cycle(cir: Circuit, v0: Float64Array, wk: Work, st?: Stats): Float64Arr
       x = 0;
     }
     if (st) {
+      const { v, j } = wk;
+      const { esr, i0, g } = cir;
       for (let i = 0; i < m; i++) {
-        const w = cir.ws[i];
         // the rail terminal: reservoir plus ESR x capacitor current
-        const u = wk.v[i] + w.esr * (wk.j[i] - w.i0 - w.g * wk.v[i]);
+        const u = v[i] + esr[i] * (j[i] - i0[i] - g[i] * v[i]);
         if (u < st.lo[i]) st.lo[i] = u;
         if (u > st.hi[i]) st.hi[i] = u;
         st.sum[i] += u;
-        if (wk.j[i] > st.pk[i]) st.pk[i] = wk.j[i];
-        st.sq[i] += wk.j[i] * wk.j[i];
+        if (j[i] > st.pk[i]) st.pk[i] = j[i];
+        st.sq[i] += j[i] * j[i];
       }
     }
   }
-  return Float64Array.from(wk.v);
+  return wk.v.slice();
 }
 
 /** Solve M y = r in place (Gaussian elimination with partial pivoting, m small); false when singular. */
@@ -238,9 +253,20 @@ function circuitOf(input: JointInput): Circuit {
       noLoadV: Math.max(0, k * vpk - n * w.diodeDropV),
     };
   });
+  const h = 1 / input.frequencyHz / steps;
+  const rp = Math.max(0, input.primaryOhm);
+  const lp = Math.max(0, input.primaryH ?? 0);
+  const rho = rp + lp / h;
+  const of = (f: (w: W) => number) => Float64Array.from(ws, f);
+  const q = of((w) => 1 + (h * w.g) / w.c);
+  const beta = of((w) => h / w.c / (1 + (h * w.g) / w.c));
+  const d = of((w) => w.l / h + w.r + h / w.c / (1 + (h * w.g) / w.c));
   return {
-    ws, rp: Math.max(0, input.primaryOhm), lp: Math.max(0, input.primaryH ?? 0), h: 1 / input.frequencyHz / steps,
-    steps, vpk, sin: sineTable(steps),
+    ws, rp, lp, h, steps, vpk, sin: sineTable(steps),
+    k: of((w) => w.k), q, beta, hcI0: of((w) => (h / w.c) * w.i0), lh: of((w) => w.l / h), d,
+    k2d: Float64Array.from(ws, (w, i) => (w.k * w.k) / d[i]), drop: of((w) => w.n * w.vf - w.esr * w.i0),
+    krho: of((w) => w.k * rho), half: Uint8Array.from(ws, (w) => (w.halfWave ? 1 : 0)), esr: of((w) => w.esr),
+    i0: of((w) => w.i0), g: of((w) => w.g), rho, lph: lp / h,
   };
 }
 
@@ -289,10 +315,7 @@ function simulateUncached(input: JointInput, start?: Warm, onSteady?: (w: Warm) 
   const cir = circuitOf(input);
   const m = cir.ws.length;
   const maxCycles = input.maxCycles ?? 200;
-  const wk: Work = {
-    v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), d: new Float64Array(m),
-    c: new Float64Array(m), on: new Uint8Array(m),
-  };
+  const wk: Work = { v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), c: new Float64Array(m), on: new Uint8Array(m) };
   const top = Float64Array.from(cir.ws.map((w) => w.noLoadV));
   const tol = 1e-5 * Math.max(1, ...top);
   const warmOk = start && start.x.length === m;
