@@ -84,6 +84,13 @@ export function simulateClassE(zRe: number, zIm: number, rdsOnRatio: number, dut
 }
 
 const MEMO_MAX = 2000;
+
+// Source: Fourier series by the rectangle rule over one period (a_n = (2/N) Σ x cos nωt, b_n likewise); the tables
+// once for all runs, flat (harmonic h at h * STEPS + k), sample k at the end of step k
+const trig = (fn: (x: number) => number) => Float64Array.from({ length: HARMONICS * STEPS },
+  (_, i) => fn((Math.floor(i / STEPS) + 1) * ((i % STEPS) + 1) * ((2 * Math.PI) / STEPS)));
+const COS_T = trig(Math.cos);
+const SIN_T = trig(Math.sin);
 const memo = new Map<string, ClassEResult>();
 
 function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: number): ClassEResult {
@@ -103,17 +110,28 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
     [-1 / lCh, 0, 0, 0, 1 / lCh],
     [0, 0, 0, 0, 0],
   ].map((r) => r.map((x) => x * dt)));
-  const on = piece(1 / rds);
-  const off = piece(0);
-  const step = (p: M, x: number[]) => p.map((r) => r.reduce((s, v, j) => s + v * x[j], 0));
-  let x = [1, 0, 0, 0, 1];
+  // the two pieces as flat row-major arrays, and one step x' = P x into a second buffer (no allocation per step; the
+  // sums run in the same order as a row-by-row dot product, so the results are those of the plain matrix product)
+  const flat = (p: M) => Float64Array.from(p.flat());
+  const on = flat(piece(1 / rds));
+  const off = flat(piece(0));
+  let x = Float64Array.from([1, 0, 0, 0, 1]);
+  let nx = new Float64Array(5);
+  const step = (p: Float64Array) => {
+    for (let i = 0; i < 5; i++) {
+      const o = 5 * i;
+      nx[i] = 0 + p[o] * x[0] + p[o + 1] * x[1] + p[o + 2] * x[2] + p[o + 3] * x[3] + p[o + 4] * x[4];
+    }
+    const t = x;
+    x = nx;
+    nx = t;
+  };
   let prevPeak = Number.NaN;
   let res: ClassEResult = {
     drainPeakRatio: 0, switchPeakRatio: 0, outputRatio: 0, dcInputRatio: 0, turnOnRatio: 0, cycles: 0, loadHarmonics: [],
   };
-  // Source: Fourier series by the rectangle rule over one period (a_n = (2/N) Σ x cos nωt, b_n likewise)
-  const cosT = Array.from({ length: HARMONICS }, (_, h) => Array.from({ length: STEPS }, (_, k) => Math.cos((h + 1) * (k + 1) * dt)));
-  const sinT = Array.from({ length: HARMONICS }, (_, h) => Array.from({ length: STEPS }, (_, k) => Math.sin((h + 1) * (k + 1) * dt)));
+  const cosT = COS_T;
+  const sinT = SIN_T;
   for (let cyc = 1; cyc <= MAX_CYCLES; cyc++) {
     let vPk = -Infinity, iPk = 0, pOut = 0, iDc = 0;
     const a = new Array<number>(HARMONICS).fill(0);
@@ -125,13 +143,13 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
       // the shunt capacitor's discharge at a hard turn-on (5 Rds C1) is left out of the peak: wiring inductance,
       // not Rds(on) alone, limits that spike; its energy stays in the dissipation
       if (conducting && k * dt > 5 * rds * c1) iPk = Math.max(iPk, Math.abs(x[0] / rds));
-      x = step(conducting ? on : off, x);
+      step(conducting ? on : off);
       vPk = Math.max(vPk, x[0]);
       pOut += rl * x[1] * x[1];
       iDc += x[3];
       for (let h = 0; h < HARMONICS; h++) {
-        a[h] += x[1] * cosT[h][k];
-        b[h] += x[1] * sinT[h][k];
+        a[h] += x[1] * cosT[h * STEPS + k];
+        b[h] += x[1] * sinT[h * STEPS + k];
       }
     }
     const mag = a.map((ah, h) => Math.hypot(ah, b[h]));
