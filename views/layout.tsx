@@ -20,7 +20,12 @@ export const ProjectCrumb: FC<{ name: string; oob?: boolean }> = ({ name, oob })
   </span>
 );
 
-export const Layout: FC<{ title: string; project?: { id: string; name: string }; section?: Section; children?: Child }> = ({ title, project, section, children }) => (
+export const Layout: FC<{
+  title: string;
+  project?: { id: string; name: string };
+  section?: Section;
+  children?: Child;
+}> = ({ title, project, section, children }) => (
   <html lang="en">
     <head>
       <meta charset="utf-8" />
@@ -40,7 +45,11 @@ export const Layout: FC<{ title: string; project?: { id: string; name: string };
       {project ? (
         <nav class="tabs" aria-label="Project sections">
           {TABS.map(([key, label, path]) => (
-            <a href={`/projects/${project.id}${path}`} class={key === section ? 'tab active' : 'tab'} aria-current={key === section ? 'page' : undefined}>
+            <a
+              href={`/projects/${project.id}${path}`}
+              class={key === section ? 'tab active' : 'tab'}
+              aria-current={key === section ? 'page' : undefined}
+            >
               {label}
             </a>
           ))}
@@ -48,8 +57,8 @@ export const Layout: FC<{ title: string; project?: { id: string; name: string };
       ) : null}
       <main>{children}</main>
       <footer class="safety-foot">
-        Mains voltages, stored charge, hot heatsinks and RF can injure or kill. These figures are planning aids: follow your local
-        electrical code, your licence conditions and licensed practice, and measure before you trust.
+        Mains voltages, stored charge, hot heatsinks and RF can injure or kill. These figures are planning aids: follow
+        your local electrical code, your licence conditions and licensed practice, and measure before you trust.
       </footer>
     </body>
   </html>

@@ -8,10 +8,19 @@ import type { ImportPreview, PreviewRow } from '../../src/core/csv';
 import { formatMoney } from '../../src/core/cost/money';
 import { Version } from './supply-transformer';
 
-const stageOptions = (p: Project): [string, string][] => [['', 'General (no stage)'], ...p.stages.map((s): [string, string] => [s.id, s.name])];
+const stageOptions = (p: Project): [string, string][] => [
+  ['', 'General (no stage)'],
+  ...p.stages.map((s): [string, string] => [s.id, s.name]),
+];
 
 export const ImportForm: FC<{ project: Project; error?: string }> = ({ project, error }) => (
-  <form method="post" action={`/projects/${project.id}/bom/import`} enctype="multipart/form-data" class="card add" aria-label="Import a parts list from CSV">
+  <form
+    method="post"
+    action={`/projects/${project.id}/bom/import`}
+    enctype="multipart/form-data"
+    class="card add"
+    aria-label="Import a parts list from CSV"
+  >
     <h2>Import lines from a CSV file</h2>
     <Version version={project.version} />
     <FormAlert message={error} />
@@ -50,7 +59,18 @@ export interface ImportPreviewProps {
   message?: string;
 }
 
-export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileName, stageId, decimal, takeGoodRows, duplicates, existingLines, preview, message }) => {
+export const ImportPreviewBody: FC<ImportPreviewProps> = ({
+  project,
+  csv,
+  fileName,
+  stageId,
+  decimal,
+  takeGoodRows,
+  duplicates,
+  existingLines,
+  preview,
+  message,
+}) => {
   const blocked = preview.fileErrors.length > 0;
   return (
     <section class="card import-preview" id="import-preview">
@@ -124,13 +144,20 @@ export const ImportPreviewBody: FC<ImportPreviewProps> = ({ project, csv, fileNa
               <td data-label="Category">{r.values.category}</td>
               <td class="num" data-label="Qty">{r.values.quantity ?? '–'}</td>
               <td data-label="Supplier · SKU">{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
-              <td class="num" data-label="Price">{r.values.priceCents === null ? '' : formatMoney(r.values.priceCents, r.values.currency ?? project.currency)}</td>
+              <td class="num" data-label="Price">
+                {r.values.priceCents === null
+                  ? ''
+                  : formatMoney(r.values.priceCents, r.values.currency ?? project.currency)}
+              </td>
               <RowProblems row={r} />
             </tr>
           ))}
         </tbody>
       </table>
-      <p class="hint">Suppliers new to the catalog need a shipping entry on the Parts catalog page; until then their shipping counts as 0.</p>
+      <p class="hint">
+        Suppliers new to the catalog need a shipping entry on the Parts catalog page; until then their shipping counts
+        as 0.
+      </p>
     </section>
   );
 };
@@ -169,8 +196,13 @@ export const PreviewMapping: FC<{
 export const PreviewSummary: FC<{ preview: ImportPreview }> = ({ preview }) => (
   <>
     <p class="summary-line">
-      {preview.rows.length} data row(s): <strong>{preview.validRows} good</strong>, <strong>{preview.invalidRows} refused</strong>. Separator “{preview.delimiter === '\t' ? 'tab' : preview.delimiter}”. Nothing has been saved yet.
-      {preview.totalsRows.length ? ` ${preview.totalsRows.length} totals row(s) (rows ${preview.totalsRows.join(', ')}) are recognised and ignored.` : ''}
+      {preview.rows.length} data row(s): <strong>{preview.validRows} good</strong>,{' '}
+      <strong>{preview.invalidRows} refused</strong>. Separator “
+      {preview.delimiter === '\t' ? 'tab' : preview.delimiter}”. Nothing has been saved yet.
+      {preview.totalsRows.length
+        ? ` ${preview.totalsRows.length} totals row(s) (rows ${preview.totalsRows.join(', ')}) are recognised and ` +
+          `ignored.`
+        : ''}
     </p>
     {preview.fileErrors.length ? (
       <div class="form-errors" role="alert">
@@ -187,7 +219,10 @@ export const PreviewSummary: FC<{ preview: ImportPreview }> = ({ preview }) => (
 
 /** One select per field the kind of import reads: which column feeds it. */
 export const ColumnChoices: FC<{ preview: ImportPreview }> = ({ preview }) => {
-  const colOptions: [string, string][] = [['', '(not imported)'], ...preview.headers.map((h, i): [string, string] => [String(i), `Column ${i + 1}: ${h || '(no header)'}`])];
+  const colOptions: [string, string][] = [
+    ['', '(not imported)'],
+    ...preview.headers.map((h, i): [string, string] => [String(i), `Column ${i + 1}: ${h || '(no header)'}`]),
+  ];
   return (
     <>
       {IMPORT_FIELDS_FOR[preview.kind].map((f) => (

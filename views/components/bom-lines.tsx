@@ -10,7 +10,8 @@ import { Version, hx } from './supply-transformer';
 import { EmptyState } from './empty-state';
 
 /** Form text of a line (a new line starts from the spec's defaults: General, no part chosen, 1 per rig). */
-export const lineValues = (l: BomLine | null): Record<string, string> => formValues(bomLineSpec, l ?? defaults(bomLineSpec));
+export const lineValues = (l: BomLine | null): Record<string, string> =>
+  formValues(bomLineSpec, l ?? defaults(bomLineSpec));
 
 // In the grid the messages go in a full-width box right above the row (the narrow cells would wrap them
 // word by word); the refused fields keep their red border and aria-invalid.
@@ -32,19 +33,45 @@ const Errors: FC<{ state: FieldState }> = ({ state }) => {
 /** Design roles offered to bind a line to, as [id, label] (from the evaluation). */
 export type RoleOptions = [string, string][];
 
-const LineFields: FC<{ project: Project; state: FieldState; idp: string; roles: RoleOptions }> = ({ project, state, idp, roles }) => {
+const LineFields: FC<{ project: Project; state: FieldState; idp: string; roles: RoleOptions }> = ({
+  project,
+  state,
+  idp,
+  roles,
+}) => {
   const stages: [string, string][] = project.stages.map((s): [string, string] => [s.id, s.name]);
   // the category by its name on the list (an older or the builder's own name as typed)
-  const catName = (c: string) => (categoryOf(c).id === 'other' && c.trim().toLowerCase() !== 'other' ? c : categoryOf(c).label.toLowerCase());
-  const parts: [string, string][] = project.parts.map((p) => [p.id, `${p.description}${p.category ? ` (${catName(p.category)})` : ''}`]);
+  const catName = (c: string) =>
+    categoryOf(c).id === 'other' && c.trim().toLowerCase() !== 'other' ? c : categoryOf(c).label.toLowerCase();
+  const parts: [string, string][] = project.parts.map((p) => [
+    p.id,
+    `${p.description}${p.category ? ` (${catName(p.category)})` : ''}`,
+  ]);
   const partsWithPick: [string, string][] = state.values.partId ? parts : [['', 'Choose a part…'], ...parts];
   // the grid's column heads name the fields: the boxes carry no help lines (they would break the rows)
   return (
     <>
-      <SpecField spec={bomLineSpec} k="stageId" idp={idp} state={state} options={stages} none="General (no stage)" cls="bom-stage" />
+      <SpecField
+        spec={bomLineSpec}
+        k="stageId"
+        idp={idp}
+        state={state}
+        options={stages}
+        none="General (no stage)"
+        cls="bom-stage"
+      />
       <SpecField spec={bomLineSpec} k="partId" idp={idp} state={state} options={partsWithPick} cls="bom-part" />
       <SpecField spec={bomLineSpec} k="qtyPerRig" idp={idp} state={state} size={4} label="Qty per rig" cls="bom-qty" />
-      <SpecField spec={bomLineSpec} k="refs" idp={idp} state={state} size={10} label="Designators" hint="" cls="bom-refs" />
+      <SpecField
+        spec={bomLineSpec}
+        k="refs"
+        idp={idp}
+        state={state}
+        size={10}
+        label="Designators"
+        hint=""
+        cls="bom-refs"
+      />
       {/* the role shares the notes cell, so the grid keeps its columns */}
       <span class="bom-notes">
         <SpecField spec={bomLineSpec} k="notes" idp={idp} state={state} size={18} />
@@ -54,7 +81,11 @@ const LineFields: FC<{ project: Project; state: FieldState; idp: string; roles: 
   );
 };
 
-export const BomLines: FC<{ project: Project; failed?: Failed; roles?: RoleOptions }> = ({ project, failed, roles = [] }) => {
+export const BomLines: FC<{ project: Project; failed?: Failed; roles?: RoleOptions }> = ({
+  project,
+  failed,
+  roles = [],
+}) => {
   const addState = stateFor('add-line', failed, () => lineValues(null));
   const base = `/projects/${project.id}/bom`;
   return (
@@ -63,7 +94,8 @@ export const BomLines: FC<{ project: Project; failed?: Failed; roles?: RoleOptio
       {project.bom.length || !project.parts.length ? null : (
         <EmptyState label="Parts list empty">
           the parts list is empty. Add a line below for each part a rig needs: its stage, the part from the catalog, the
-          quantity per rig and the designators (R1, C10–C14); the cost per kit and for the group appears under the list.
+          quantity per rig and the designators (R1, C10–C14); the cost per kit and for the group appears under the
+          list.
         </EmptyState>
       )}
       <div class="bom-grid" aria-label="Parts-list lines">
@@ -78,7 +110,12 @@ export const BomLines: FC<{ project: Project; failed?: Failed; roles?: RoleOptio
         {project.bom.map((l) => {
           const state = stateFor(`line-${l.id}`, failed, () => lineValues(l));
           return (
-            <form {...hx(`${base}/lines/${l.id}`, '#bom')} class="bom-row" id={`line-${l.id}`} aria-label={`Line ${l.refs || l.id}`}>
+            <form
+              {...hx(`${base}/lines/${l.id}`, '#bom')}
+              class="bom-row"
+              id={`line-${l.id}`}
+              aria-label={`Line ${l.refs || l.id}`}
+            >
               <Version version={project.version} />
               <Errors state={state} />
               <LineFields project={project} state={state} idp={`l-${l.id}`} roles={roles} />
@@ -102,8 +139,8 @@ export const BomLines: FC<{ project: Project; failed?: Failed; roles?: RoleOptio
       </div>
       {project.parts.length ? null : (
         <EmptyState label="Catalog empty">
-          the catalog is empty: add parts on the <a href={`/projects/${project.id}/parts`}>Parts catalog</a> page first, or import a
-          CSV below; then add a line here for each part a rig needs.
+          the catalog is empty: add parts on the <a href={`/projects/${project.id}/parts`}>Parts catalog</a> page first,
+          or import a CSV below; then add a line here for each part a rig needs.
         </EmptyState>
       )}
     </section>

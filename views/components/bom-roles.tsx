@@ -25,13 +25,20 @@ const ratingsOf = (project: Project, partId: string): string => {
   return part ? ratingsReadable(part.ratings) : '';
 };
 
-export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: Failed; report?: CostReport }> = ({ project, statuses, failed, report }) => {
+export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: Failed; report?: CostReport }> = ({
+  project,
+  statuses,
+  failed,
+  report,
+}) => {
   if (!statuses.length) return null;
   const refused = failed?.form === 'bind-role' ? Object.values(failed.state.errors) : [];
   const base = `/projects/${project.id}/bom`;
   const parts = new Map(project.parts.map((p) => [p.id, p]));
   // the supplier the cost plan chose for each line: a candidate from a supplier used for another line adds no shipping
-  const planSuppliers = report ? new Map(report.lines.map((l): [string, string | null] => [l.lineId, l.supplier])) : undefined;
+  const planSuppliers = report
+    ? new Map(report.lines.map((l): [string, string | null] => [l.lineId, l.supplier]))
+    : undefined;
   const money = (c: number) => formatMoney(c, project.currency);
   return (
     <section class="card" id="design-roles">
@@ -42,11 +49,13 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
         </div>
       ) : null}
       <p class="hint">
-        Each part of the design with what it must be rated for. Bind a line to it (the “Design role” box of the line) or use a
-        candidate: catalog parts meeting every rating, cheapest first at the quantity the build needs (price breaks, minimum
-        orders and multiples included).
+        Each part of the design with what it must be rated for. Bind a line to it (the “Design role” box of the
+        line) or
+        use a candidate: catalog parts meeting every rating, cheapest first at the quantity the build needs (price
+        breaks, minimum orders and multiples included).
         {planSuppliers
-          ? ' Shipping counts in the ranking: a supplier the plan already uses for another line adds nothing (its shipping is paid anyway); a supplier not otherwise used adds its full shipping charge.'
+          ? ' Shipping counts in the ranking: a supplier the plan already uses for another line adds nothing (its ' +
+            'shipping is paid anyway); a supplier not otherwise used adds its full shipping charge.'
           : ''}
       </p>
       <ul class="role-list">
@@ -54,7 +63,9 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
           const lines = project.bom.filter((l) => s.lineIds.includes(l.id));
           // a grouped role (one line per value): the cheapest candidate of each value, else the cheapest few
           const all = candidatesFor(project, s.role, planSuppliers);
-          const candidates = all.some((c) => c.group !== null) ? all.filter((c, i) => all.findIndex((x) => x.group === c.group) === i) : all.slice(0, SHOWN);
+          const candidates = all.some((c) => c.group !== null)
+            ? all.filter((c, i) => all.findIndex((x) => x.group === c.group) === i)
+            : all.slice(0, SHOWN);
           return (
             <li class={`role role-${s.state}`} data-role={s.role.id} data-state={s.state}>
               <strong>{s.role.label}</strong>: <span class="role-state">{STATE_TEXT[s.state]}</span>
@@ -63,7 +74,10 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
               {lines.length ? (
                 <>
                   <br />
-                  Bound: {lines.map((l) => `${l.refs ? `${l.refs} ` : ''}${parts.get(l.partId)?.description ?? l.partId}`).join('; ')}
+                  Bound:{' '}
+                  {lines
+                    .map((l) => `${l.refs ? `${l.refs} ` : ''}${parts.get(l.partId)?.description ?? l.partId}`)
+                    .join('; ')}
                 </>
               ) : null}
               {s.state !== 'ok' && s.state !== 'unbound' && s.problems?.length ? (
@@ -85,7 +99,10 @@ export const BomRoles: FC<{ project: Project; statuses: RoleStatus[]; failed?: F
                       : {c.costCents === null ? 'no price' : `${money(c.costCents)} for ${c.neededQty}`}
                       {c.orderQty !== null && c.orderQty !== c.neededQty ? ` (buying ${c.orderQty})` : ''}
                       {c.supplier ? ` from ${c.supplier}` : ''}
-                      {c.shippingCents ? ` + ${money(c.shippingCents)} shipping (supplier not otherwise used) = ${money(c.totalCents ?? 0)}` : ''}
+                      {c.shippingCents
+                        ? ` + ${money(c.shippingCents)} shipping (supplier not otherwise used) = ` +
+                          `${money(c.totalCents ?? 0)}`
+                        : ''}
                       {c.shippingNote ? ` (${c.shippingNote})` : ''}{' '}
                       {c.bound ? (
                         <em>(bound)</em>

@@ -13,13 +13,22 @@ import { FormAlert, PreviewMapping, PreviewSummary, RowProblems } from './bom-im
 const action = (p: Project) => `/projects/${p.id}/parts/import`;
 
 export const CatalogImportForm: FC<{ project: Project; error?: string }> = ({ project, error }) => (
-  <form method="post" action={action(project)} enctype="multipart/form-data" class="card add" aria-label="Import a supplier price list" id="catalog-import">
+  <form
+    method="post"
+    action={action(project)}
+    enctype="multipart/form-data"
+    class="card add"
+    aria-label="Import a supplier price list"
+    id="catalog-import"
+  >
     <h2>Import a supplier’s price list (CSV)</h2>
     <Version version={project.version} />
     <FormAlert message={error} />
     <div class="row">
       <label class="field" for="cat-file">
-        <span class="label">CSV file (description, category, ratings, SKU, price or price breaks, minimum order, multiple, currency)</span>
+        <span class="label">
+          CSV file (description, category, ratings, SKU, price or price breaks, minimum order, multiple, currency)
+        </span>
         <input id="cat-file" type="file" name="file" accept=".csv,.txt,text/csv" />
       </label>
       <label class="field" for="cat-supplier">
@@ -50,7 +59,10 @@ export interface CatalogPreviewProps {
 }
 
 const breaksText = (o: Offer | undefined) =>
-  o ? o.breaks.map((b) => `${b.minQty}: ${formatMoney(b.unitPriceCents, o.currency)}`).join(', ') + (o.minOrder > 1 || o.orderMultiple > 1 ? ` (min ${o.minOrder}, ×${o.orderMultiple})` : '') : '';
+  o
+    ? o.breaks.map((b) => `${b.minQty}: ${formatMoney(b.unitPriceCents, o.currency)}`).join(', ') +
+      (o.minOrder > 1 || o.orderMultiple > 1 ? ` (min ${o.minOrder}, ×${o.orderMultiple})` : '')
+    : '';
 
 const CHANGE_WORDS: Record<string, string> = {
   up: 'price up', down: 'price down', mixed: 'prices up and down', terms: 'terms changed', same: 'unchanged',
@@ -85,9 +97,13 @@ export const CatalogPreviewBody: FC<CatalogPreviewProps> = (props) => {
         </PreviewMapping>
         {n ? (
           <p class="summary-line" data-changes>
-            Importing changes the catalog: {n.up} price(s) up, {n.down} down, {n.mixed} up and down, {n.terms} with other terms,
-            {' '}{n['new-part']} new part(s), {n['new-offer']} new offer(s) for catalog parts, {n.gone} offer(s) gone from the list; {n.same} unchanged.
-            {update?.newSuppliers.length ? ` New supplier(s) with no shipping entry yet: ${update.newSuppliers.join(', ')} (add it below the import; until then their shipping counts as 0).` : ''}
+            Importing changes the catalog: {n.up} price(s) up, {n.down} down, {n.mixed} up and down, {n.terms} with
+            other terms, {n['new-part']} new part(s), {n['new-offer']} new offer(s) for catalog parts, {n.gone} offer(s)
+            gone from the list; {n.same} unchanged.
+            {update?.newSuppliers.length
+              ? ` New supplier(s) with no shipping entry yet: ${update.newSuppliers.join(', ')} (add it below the ` +
+                `import; until then their shipping counts as 0).`
+              : ''}
           </p>
         ) : null}
         <div class="row">
@@ -161,7 +177,11 @@ export const CatalogPreviewBody: FC<CatalogPreviewProps> = (props) => {
               <td data-label="Category">{r.values.category}</td>
               <td data-label="Ratings">{r.values.catalog ? ratingsReadable(r.values.catalog.ratings) : ''}</td>
               <td data-label="Supplier · SKU">{[r.values.supplier, r.values.sku].filter(Boolean).join(' · ')}</td>
-              <td data-label="Price breaks">{r.values.catalog?.breaks.map((b) => `${b.minQty}: ${formatMoney(b.unitPriceCents, r.values.currency ?? project.currency)}`).join(', ')}</td>
+              <td data-label="Price breaks">
+                {r.values.catalog?.breaks
+                  .map((b) => `${b.minQty}: ${formatMoney(b.unitPriceCents, r.values.currency ?? project.currency)}`)
+                  .join(', ')}
+              </td>
               <RowProblems row={r} />
             </tr>
           ))}

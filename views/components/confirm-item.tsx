@@ -26,7 +26,8 @@ export const ConfirmItemPage: FC<ConfirmItemProps> = ({ project, section, title,
         <>
           <div class="form-errors" role="alert">
             <p>
-              {what.charAt(0).toUpperCase() + what.slice(1)} cannot be deleted while it is in use. Change or delete these first:
+              {what.charAt(0).toUpperCase() + what.slice(1)} cannot be deleted while it is in use. Change or delete
+              these first:
             </p>
             <ul>
               {users.map((u) => (

@@ -29,9 +29,23 @@ const Message: FC<{ error?: string; hint?: string }> = ({ error, hint }) =>
     <span class="hint">{hint}</span>
   ) : null;
 
-const fieldClass = (error: string | undefined, cls?: string) => `field${error ? ' has-error' : ''}${cls ? ' ' + cls : ''}`;
+const fieldClass = (error: string | undefined, cls?: string) =>
+  `field${error ? ' has-error' : ''}${cls ? ' ' + cls : ''}`;
 
-export const Field: FC<Common & { unit?: string; size?: number; type?: string; required?: boolean; list?: string }> = ({ name, label, state, idp, cls, hint, unit, size, type, required, id: idIn, list }) => {
+export const Field: FC<Common & { unit?: string; size?: number; type?: string; required?: boolean; list?: string }> = ({
+  name,
+  label,
+  state,
+  idp,
+  cls,
+  hint,
+  unit,
+  size,
+  type,
+  required,
+  id: idIn,
+  list,
+}) => {
   const error = state.errors[name];
   const id = idIn ?? `${idp ?? 'f'}-${name}`;
   return (
@@ -40,13 +54,31 @@ export const Field: FC<Common & { unit?: string; size?: number; type?: string; r
         {label}
         {unit ? <span class="unit"> ({unit})</span> : null}
       </span>
-      <input id={id} name={name} type={type ?? 'text'} value={state.values[name] ?? ''} size={size ?? 10} aria-invalid={error ? 'true' : undefined} required={required} list={list} />
+      <input
+        id={id}
+        name={name}
+        type={type ?? 'text'}
+        value={state.values[name] ?? ''}
+        size={size ?? 10}
+        aria-invalid={error ? 'true' : undefined}
+        required={required}
+        list={list}
+      />
       <Message error={error} hint={hint} />
     </label>
   );
 };
 
-export const Select: FC<Common & { options: [string, string][] }> = ({ name, label, state, idp, id: idIn, cls, hint, options }) => {
+export const Select: FC<Common & { options: [string, string][] }> = ({
+  name,
+  label,
+  state,
+  idp,
+  id: idIn,
+  cls,
+  hint,
+  options,
+}) => {
   const error = state.errors[name];
   const id = idIn ?? `${idp ?? 'f'}-${name}`;
   const value = state.values[name];
@@ -71,7 +103,17 @@ export const Select: FC<Common & { options: [string, string][] }> = ({ name, lab
   );
 };
 
-export const TextArea: FC<Common & { rows?: number; cols?: number }> = ({ name, label, state, idp, id: idIn, cls, hint, rows, cols }) => {
+export const TextArea: FC<Common & { rows?: number; cols?: number }> = ({
+  name,
+  label,
+  state,
+  idp,
+  id: idIn,
+  cls,
+  hint,
+  rows,
+  cols,
+}) => {
   const error = state.errors[name];
   const id = idIn ?? `${idp ?? 'f'}-${name}`;
   return (
@@ -85,9 +127,21 @@ export const TextArea: FC<Common & { rows?: number; cols?: number }> = ({ name, 
   );
 };
 
-export const Check: FC<{ name: string; label: string; state: FieldState; idp?: string; id?: string }> = ({ name, label, state, idp, id }) => (
+export const Check: FC<{ name: string; label: string; state: FieldState; idp?: string; id?: string }> = ({
+  name,
+  label,
+  state,
+  idp,
+  id,
+}) => (
   <label class="field check" for={id ?? `${idp ?? 'f'}-${name}`}>
-    <input id={id ?? `${idp ?? 'f'}-${name}`} type="checkbox" name={name} value="true" checked={state.values[name] === 'true'} />
+    <input
+      id={id ?? `${idp ?? 'f'}-${name}`}
+      type="checkbox"
+      name={name}
+      value="true"
+      checked={state.values[name] === 'true'}
+    />
     <span class="label">{label}</span>
   </label>
 );
@@ -99,7 +153,9 @@ export const FormErrors: FC<{ state: FieldState }> = ({ state }) => {
   return (
     <div class="form-errors" role="alert">
       {general ? <p>{general}</p> : null}
-      {count > (general ? 1 : 0) ? <p>Nothing was saved. Correct the marked fields and save again; what you typed is kept.</p> : null}
+      {count > (general ? 1 : 0) ? (
+        <p>Nothing was saved. Correct the marked fields and save again; what you typed is kept.</p>
+      ) : null}
     </div>
   );
 };

@@ -13,8 +13,16 @@ import { troughRows, troughChartSvg, harmonicBarsSvg, TOLERANCE_MARK } from '../
 
 const VERDICT_TEXT = {
   ok: { sign: '✓', head: 'Will work as designed', tail: () => 'no check of this design fails or needs caution.' },
-  caution: { sign: '!', head: 'Should work, with cautions', tail: (n: number, f: number) => `${n} finding(s) need a look${f ? `, ${f} fail` : ''}.` },
-  fail: { sign: '✗', head: 'Will not work as designed', tail: (n: number, f: number) => `${f} check(s) fail, ${n - f} more need caution.` },
+  caution: {
+    sign: '!',
+    head: 'Should work, with cautions',
+    tail: (n: number, f: number) => `${n} finding(s) need a look${f ? `, ${f} fail` : ''}.`,
+  },
+  fail: {
+    sign: '✗',
+    head: 'Will not work as designed',
+    tail: (n: number, f: number) => `${f} check(s) fail, ${n - f} more need caution.`,
+  },
 } as const;
 
 /** The first words of a long message (the whole of it stands under "All checks"), cut at a word. */
@@ -67,7 +75,8 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
                 const link = fixLink(project, f);
                 return (
                   <li class={`fix sev-${f.severity}`} data-rule={f.rule}>
-                    <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>: {short(f.message)}{' '}
+                    <span class={`sev sev-${f.severity}`}>{f.severity}</span> <strong>{f.subject}</strong>:{' '}
+                    {short(f.message)}{' '}
                     <a class="fix-link" href={link.href}>
                       Fix in {link.label} →
                     </a>
@@ -82,12 +91,14 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
         <div class="card cost-glance" id="cost-glance">
           <h2>Cost</h2>
           {project.bom.length ? (
-          <p>
-            <strong>{t.perKitCents === null ? '—' : formatMoney(t.perKitCents, cur)}</strong> per kit ·{' '}
-            <strong>{formatMoney(t.buildCents, cur)}</strong> for the group of {report.cost.kits} (parts and shipping)
-            {t.unpricedLines ? <span class="cost-warn"> ({t.unpricedLines} line(s) without a price: the real cost is higher)</span> : null}{' '}
-            <a href={`${base}/bom`}>Parts list</a>
-          </p>
+            <p>
+              <strong>{t.perKitCents === null ? '—' : formatMoney(t.perKitCents, cur)}</strong> per kit ·{' '}
+              <strong>{formatMoney(t.buildCents, cur)}</strong> for the group of {report.cost.kits} (parts and shipping)
+              {t.unpricedLines ? (
+                <span class="cost-warn"> ({t.unpricedLines} line(s) without a price: the real cost is higher)</span>
+              ) : null}{' '}
+              <a href={`${base}/bom`}>Parts list</a>
+            </p>
           ) : (
             <EmptyState label="No parts yet">
               no parts in the list yet, so no cost. Add parts on the <a href={`${base}/parts`}>Parts catalog</a>, then
@@ -98,7 +109,11 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
         <div class="card harmonic-glance" id="harmonic-glance">
           <h2>Harmonic margins</h2>
           {raw(harmonicBarsSvg(harmonics))}
-          {harmonics ? <p class="hint">Below the limit of {harmonics.ruleTitle}; the bar is the nominal filter, the tick its worst built case.</p> : null}
+          {harmonics ? (
+            <p class="hint">
+              Below the limit of {harmonics.ruleTitle}; the bar is the nominal filter, the tick its worst built case.
+            </p>
+          ) : null}
         </div>
       </div>
       <div class="fs-right">
@@ -106,9 +121,10 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
           <h2>Power flow at key-down</h2>
           {raw(powerFlowSvg(powerFlowData(project, report)))}
           <p class="hint">
-            Currents are key-down (TX) DC currents{project.mains ? '; the mains box shows the primary RMS current' : ''}.
-            A rail's voltage is its nominal value (a rectified rail: the rated winding's peak less the diode drops, before
-            load); its troughs are in the chart. Rails: ● headroom OK, ▲ caution, ■ fails, – not checked.{' '}
+            Currents are key-down (TX) DC currents{project.mains ? '; the mains box shows the primary RMS current' : ''}
+            . A rail's voltage is its nominal value (a rectified rail: the rated winding's peak less the diode drops,
+            before load); its troughs are in the chart. Rails: ● headroom OK, ▲ caution, ■ fails, – not
+            checked.{' '}
             <a href={`${base}/supply`}>Supply page</a>
           </p>
         </div>
@@ -116,9 +132,12 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
           <h2>Lowest rail voltage at key-down</h2>
           {raw(troughChartSvg(troughs))}
           <p class="hint">
-            Dots: the trough at {project.mains ? 'low (L), nominal (N) and high (H) mains' : 'battery at end voltage, nominal and full'}
-            {tolerance ? `; L${TOLERANCE_MARK}: low mains with the transformer's secondary at the low end of its tolerance` : ''}; red
-            dashed line: the least the rail may fall to.
+            Dots: the trough at{' '}
+            {project.mains ? 'low (L), nominal (N) and high (H) mains' : 'battery at end voltage, nominal and full'}
+            {tolerance
+              ? `; L${TOLERANCE_MARK}: low mains with the transformer's secondary at the low end of its tolerance`
+              : ''}
+            ; red dashed line: the least the rail may fall to.
           </p>
         </div>
       </div>

@@ -42,7 +42,11 @@ export const KeptEntries: FC<Props> = ({ message, values, back, id }) => {
   );
 };
 
-export const KeptEntriesPage: FC<Props & { project: { id: string; name: string }; section?: Section }> = ({ project, section, ...props }) => (
+export const KeptEntriesPage: FC<Props & { project: { id: string; name: string }; section?: Section }> = ({
+  project,
+  section,
+  ...props
+}) => (
   <Layout title="Not saved" project={project} section={section}>
     <KeptEntries {...props} />
   </Layout>

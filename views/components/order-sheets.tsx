@@ -15,8 +15,9 @@ export const OrderSheets: FC<{ report: CostReport; csvHref: string }> = ({ repor
         <strong>Order sheets per supplier</strong> ({sheets.length}): what to type into each supplier’s order form
       </summary>
       <p class="hint">
-        The same sheets as the <a href={csvHref}>orders CSV</a> and the organiser’s pack. Amounts in {report.currency}; the
-        unit price and offer line in the supplier’s currency.
+        The same sheets as the <a href={csvHref}>orders CSV</a> and the organiser’s pack. Amounts
+        in {report.currency};
+        the unit price and offer line in the supplier’s currency.
       </p>
       {sheets.map((s) => (
         <table class="grid cost order-sheet" data-supplier={s.supplier}>

@@ -12,7 +12,9 @@ import { exchangeRateHint } from '../../src/core/cost/rate-text';
 export const costingValues = (p: Project): Record<string, string> => formValues(costingSpec, p.costing);
 
 export function supplierValues(s: Supplier | null, currency: string): Record<string, string> {
-  return s ? { ...formValues(supplierSpec, s), was: s.name } : { ...formValues(supplierSpec, { shippingCents: 0 }), currency };
+  return s
+    ? { ...formValues(supplierSpec, s), was: s.name }
+    : { ...formValues(supplierSpec, { shippingCents: 0 }), currency };
 }
 
 const SupplierFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) => (
@@ -34,11 +36,21 @@ export const CostingCard: FC<{ project: Project; failed?: Failed }> = ({ project
         <div class="row">
           <SpecField spec={costingSpec} k="attritionFraction" idp="cs" state={state} size={5} />
           <SpecField spec={costingSpec} k="sparesPerLine" idp="cs" state={state} size={5} />
-          <SpecField spec={costingSpec} k="exchangeRates" idp="cs" state={state} rows={3} size={18} label={`Exchange rates into ${project.currency}`} hint={exchangeRateHint(project.currency)} />
+          <SpecField
+            spec={costingSpec}
+            k="exchangeRates"
+            idp="cs"
+            state={state}
+            rows={3}
+            size={18}
+            label={`Exchange rates into ${project.currency}`}
+            hint={exchangeRateHint(project.currency)}
+          />
           <button type="submit">Save</button>
         </div>
         <p class="hint">
-          Project currency {project.currency} and the number of kits ({project.kits}) are set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
+          Project currency {project.currency} and the number of kits ({project.kits}) are set on the{' '}
+          <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
         </p>
       </form>
     </section>
@@ -50,7 +62,9 @@ export const SuppliersCard: FC<{ project: Project; failed?: Failed }> = ({ proje
   return (
     <section class="card">
       <h2>Suppliers and shipping</h2>
-      {project.costing.suppliers.length ? null : <p class="hint">No suppliers yet. Offers name their supplier; add it here with its shipping charge.</p>}
+      {project.costing.suppliers.length ? null : (
+        <p class="hint">No suppliers yet. Offers name their supplier; add it here with its shipping charge.</p>
+      )}
       {project.costing.suppliers.map((s, i) => {
         const state = stateFor(`supplier-${i}`, failed, () => supplierValues(s, project.currency));
         const base = `/projects/${project.id}/suppliers/${i}`;

@@ -32,13 +32,24 @@ function categoryOptions(value: string): [string, string][] {
   return list;
 }
 
-/** The boxes of one category's ratings, each from its spec (label, display unit, range); swapped on a category change. */
+/**
+ * The boxes of one category's ratings, each from its spec (label, display unit, range); swapped on a category
+ * change.
+ */
 export const RatingBoxes: FC<{ state: FieldState; idp: string; category: string }> = ({ state, idp, category }) => {
   const spec = ratingBoxSpec(category);
   const keys = Object.keys(spec.fields);
   return (
     <span id={`ratings-${idp}`} class="rating-boxes">
-      {keys.length ? keys.map((k) => <SpecField spec={spec} k={k} idp={idp} state={state} size={7} hint="" />) : <span class="hint">{category ? 'No rated fields for this category: use Other ratings.' : 'Choose a category to get its rating boxes.'}</span>}
+      {keys.length ? (
+        keys.map((k) => <SpecField spec={spec} k={k} idp={idp} state={state} size={7} hint="" />)
+      ) : (
+        <span class="hint">
+          {category
+            ? 'No rated fields for this category: use Other ratings.'
+            : 'Choose a category to get its rating boxes.'}
+        </span>
+      )}
     </span>
   );
 };
@@ -79,22 +90,42 @@ const OfferFields: FC<{ state: FieldState; idp: string; help?: boolean }> = ({ s
   </>
 );
 
-export const PartFields: FC<{ state: FieldState; idp: string; projectId: string; help?: boolean }> = ({ state, idp, projectId, help }) => (
+export const PartFields: FC<{ state: FieldState; idp: string; projectId: string; help?: boolean }> = ({
+  state,
+  idp,
+  projectId,
+  help,
+}) => (
   <>
     <SpecField spec={partSpec} k="description" idp={idp} state={state} size={56} hint={help ? undefined : ''} />
     <CategorySelect state={state} idp={idp} projectId={projectId} />
     <RatingBoxes state={state} idp={idp} category={state.values.category ?? ''} />
-    <SpecField spec={partSpec} k="ratings" idp={idp} state={state} size={36} label="Other ratings" hint={help ? partSpec.fields.ratings.help : ''} />
+    <SpecField
+      spec={partSpec}
+      k="ratings"
+      idp={idp}
+      state={state}
+      size={36}
+      label="Other ratings"
+      hint={help ? partSpec.fields.ratings.help : ''}
+    />
   </>
 );
 
 function offersLine(p: Part): string {
   if (!p.offers.length) return 'no supplier offers';
   const unpriced = p.offers.filter((o) => !o.breaks.length).length;
-  return `${p.offers.length} offer(s): ${p.offers.map((o) => o.supplier).join(', ')}${unpriced ? ` (${unpriced} without prices)` : ''}`;
+  return `${p.offers.length} offer(s): ` +
+    `${p.offers.map((o) => o.supplier).join(', ')}${unpriced ? ` (${unpriced} without prices)` : ''}`;
 }
 
-export const PartCard: FC<{ project: Project; part: Part; failed?: Failed; uses: number; open?: boolean }> = ({ project, part, failed, uses, open }) => {
+export const PartCard: FC<{ project: Project; part: Part; failed?: Failed; uses: number; open?: boolean }> = ({
+  project,
+  part,
+  failed,
+  uses,
+  open,
+}) => {
   const base = `/projects/${project.id}/parts/${part.id}`;
   const state = stateFor(`part-${part.id}`, failed, () => partValues(part));
   const addState = stateFor(`add-offer-${part.id}`, failed, () => offerValues(null, project.currency));
@@ -134,7 +165,11 @@ export const PartCard: FC<{ project: Project; part: Part; failed?: Failed; uses:
           </div>
         </form>
       ))}
-      <form {...hx(`${base}/offers`, '#parts')} class="item-row add" aria-label={`Add an offer for ${part.description}`}>
+      <form
+        {...hx(`${base}/offers`, '#parts')}
+        class="item-row add"
+        aria-label={`Add an offer for ${part.description}`}
+      >
         <Version version={project.version} />
         <FormErrors state={addState} />
         <div class="row">

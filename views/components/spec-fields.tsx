@@ -32,7 +32,23 @@ interface Props {
   rows?: number;
 }
 
-export const SpecField: FC<Props> = ({ spec, k, state, size, idp, item, options, none, label, hint, name: nameIn, unit: unitIn, list, cls, rows }) => {
+export const SpecField: FC<Props> = ({
+  spec,
+  k,
+  state,
+  size,
+  idp,
+  item,
+  options,
+  none,
+  label,
+  hint,
+  name: nameIn,
+  unit: unitIn,
+  list,
+  cls,
+  rows,
+}) => {
   const f = spec.fields[k];
   if (!f) throw new Error(`no field ${k} in spec ${spec.name}`);
   const name = nameIn ?? formName(k, f);
@@ -40,13 +56,47 @@ export const SpecField: FC<Props> = ({ spec, k, state, size, idp, item, options,
   const id = fieldId(spec.name, item ?? idp ?? PROJECT_ITEM, nameIn ?? k);
   const text = label ?? f.label;
   const help = hint ?? f.help;
-  if (f.type === 'choice') return <Select id={id} name={name} label={text} state={state} hint={help} options={f.options.map(([v, t]) => [v, t])} cls={cls} />;
+  if (f.type === 'choice')
+    return (
+      <Select
+        id={id}
+        name={name}
+        label={text}
+        state={state}
+        hint={help}
+        options={f.options.map(([v, t]) => [v, t])}
+        cls={cls}
+      />
+    );
   if (f.type === 'bool') return <Check id={id} name={name} label={text} state={state} />;
   if (f.type === 'ref') {
     const list = options ?? [];
-    return <Select id={id} name={name} label={text} state={state} hint={help} options={f.optional ? [['', none ?? '(none)'], ...list] : list} cls={cls} />;
+    return (
+      <Select
+        id={id}
+        name={name}
+        label={text}
+        state={state}
+        hint={help}
+        options={f.optional ? [['', none ?? '(none)'], ...list] : list}
+        cls={cls}
+      />
+    );
   }
-  if (f.type === 'text' && f.multiline && rows) return <TextArea id={id} name={name} label={text} state={state} hint={help} rows={rows} cols={size} cls={cls} />;
+  if (f.type === 'text' && f.multiline && rows)
+    return <TextArea id={id} name={name} label={text} state={state} hint={help} rows={rows} cols={size} cls={cls} />;
   const unit = unitIn ?? (f.type === 'number' ? f.display.symbol : undefined);
-  return <Field id={id} name={name} label={text} unit={unit || undefined} state={state} hint={help} size={size ?? (f.type === 'text' ? 30 : 7)} list={list} cls={cls} />;
+  return (
+    <Field
+      id={id}
+      name={name}
+      label={text}
+      unit={unit || undefined}
+      state={state}
+      hint={help}
+      size={size ?? (f.type === 'text' ? 30 : 7)}
+      list={list}
+      cls={cls}
+    />
+  );
 };

@@ -11,7 +11,8 @@ export const BleederLine: FC<{ b: BleederReport }> = ({ b }) => (
       <>none fitted; the reservoir stays at up to {fv(b.startV, 'V')} after switch-off ({fv(b.storedJ, 'J')} stored).</>
     ) : (
       <>
-        {fv(b.fittedOhm, 'Ω')} brings {fv(b.startV, 'V')} below {fv(b.safeV, 'V')} in {fv(b.fittedTimeS ?? 0, 's')}{' '}
+        {fv(b.fittedOhm, 'Ω')} brings {fv(b.startV, 'V')} below {fv(b.safeV, 'V')} in{' '}
+        {fv(b.fittedTimeS ?? 0, 's')}{' '}
         (safe level: {b.safeSource}); it dissipates {fv(b.fittedW ?? 0, 'W')} at that voltage
         {b.ratedW !== null ? `, rated ${fv(b.ratedW, 'W')}` : ', rating not stated'}.
       </>

@@ -30,7 +30,8 @@ export const HeatCard: FC<{ heat: HeatBudget }> = ({ heat }) => (
           <td>
             {heat.riseK !== null
               ? `rise ${fv(heat.riseK, 'K')} over the ${fv(heat.ambientC, '°C')} room ` +
-                `(${fv(heat.areaM2! * 1e4, 'cm²')} at ${heat.uWPerM2K} W/(m²·K)): about ${fv(heat.insideC, '°C')} ` +
+                `(${fv(heat.areaM2! * 1e4, 'cm²')} at ${heat.uWPerM2K} W/(m²·K)): about ` +
+                `${fv(heat.insideC, '°C')} ` +
                 'inside, the ambient of the rectifier, regulator and PA heatsink checks'
               : 'enclosure not entered: no rise computed'}
           </td>

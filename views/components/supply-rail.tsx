@@ -18,7 +18,9 @@ export const railValues = (r: Rail): Record<string, string> => formValues(RAIL_S
 function summary(p: Project, r: Rail): string {
   if (r.kind === 'rectified') {
     const w = p.supply.transformers.flatMap((t) => t.windings).find((x) => x.id === r.windingId);
-    return `${r.topology} from ${w ? `${w.name} (${formatValue(w.ratedVrms, 'V')} rms)` : 'a missing winding'}, ${formatValue(r.reservoirF, 'F')} reservoir${needs(r.minimumV)}`;
+    return `${r.topology} from ` +
+      `${w ? `${w.name} (${formatValue(w.ratedVrms, 'V')} rms)` : 'a missing winding'}` +
+      `, ${formatValue(r.reservoirF, 'F')} reservoir${needs(r.minimumV)}`;
   }
   if (r.kind === 'regulated') {
     const parent = p.supply.rails.find((x) => x.id === r.parentId);
@@ -27,13 +29,18 @@ function summary(p: Project, r: Rail): string {
   return `${r.chemistry} ${formatValue(r.nominalV, 'V')}, ${formatValue(r.capacityAh, 'Ah')}${needs(r.minimumV)}`;
 }
 
-const needs = (v: number | null | undefined) => (typeof v === 'number' ? `; its loads need ${formatValue(v, 'V')} or more` : '');
+const needs = (v: number | null | undefined) =>
+  typeof v === 'number' ? `; its loads need ${formatValue(v, 'V')} or more` : '';
 
 type FormProps = { project: Project; rail: Rail; state: FieldState; idp: string };
 
 const RectifiedFields: FC<FormProps> = ({ project, state, idp }) => {
-  const windings = project.supply.transformers.flatMap((t) => t.windings.map((w): [string, string] => [w.id, `${t.name} · ${w.name}`]));
-  const f = (k: string, size = 6, hint?: string) => <SpecField spec={rectifiedSpec} k={k} state={state} idp={idp} size={size} hint={hint} />;
+  const windings = project.supply.transformers.flatMap((t) =>
+    t.windings.map((w): [string, string] => [w.id, `${t.name} · ${w.name}`]),
+  );
+  const f = (k: string, size = 6, hint?: string) => (
+    <SpecField spec={rectifiedSpec} k={k} state={state} idp={idp} size={size} hint={hint} />
+  );
   return (
     <>
       <div class="row">
@@ -66,7 +73,9 @@ const RectifiedFields: FC<FormProps> = ({ project, state, idp }) => {
         {f('bridgeMount.thetaSaKPerW', 5)}
         {f('bridgeMount.tjMaxC', 5)}
         {f('bridgeFreeAirKPerW', 5)}
-        <span class="hint">The rectifier's datasheet values; leave them empty for an assumed 4-8 A bridge with no heatsink.</span>
+        <span class="hint">
+          The rectifier's datasheet values; leave them empty for an assumed 4-8 A bridge with no heatsink.
+        </span>
       </div>
     </>
   );
@@ -142,7 +151,13 @@ const BatteryFields: FC<FormProps> = ({ state, idp }) => {
   );
 };
 
-export const RailCard: FC<{ project: Project; rail: Rail; failed?: Failed; parents: [string, string][]; open?: boolean }> = ({ project, rail, failed, parents, open }) => {
+export const RailCard: FC<{
+  project: Project;
+  rail: Rail;
+  failed?: Failed;
+  parents: [string, string][];
+  open?: boolean;
+}> = ({ project, rail, failed, parents, open }) => {
   const base = `/projects/${project.id}/supply/rails/${rail.id}`;
   const state = stateFor(`rail-${rail.id}`, failed, () => railValues(rail));
   const hasErrors = Object.keys(state.errors).length > 0;
@@ -150,7 +165,8 @@ export const RailCard: FC<{ project: Project; rail: Rail; failed?: Failed; paren
   return (
     <details class="card supply-item rail" id={`rail-${rail.id}`} open={hasErrors || open}>
       <summary>
-        <strong>{rail.name}</strong> <span class="kind">{KIND_LABEL[rail.kind]}</span> <span class="summary-line">{summary(project, rail)}</span>
+        <strong>{rail.name}</strong> <span class="kind">{KIND_LABEL[rail.kind]}</span>{' '}
+        <span class="summary-line">{summary(project, rail)}</span>
       </summary>
       <form {...hx(base)} class={`rail-form kind-${rail.kind}`} aria-label={`Rail ${rail.name}`}>
         <Version version={project.version} />
@@ -159,7 +175,9 @@ export const RailCard: FC<{ project: Project; rail: Rail; failed?: Failed; paren
           <SpecField spec={RAIL_SPECS[rail.kind]} k="name" state={state} idp={idp} size={32} />
         </div>
         {rail.kind === 'rectified' ? <RectifiedFields project={project} rail={rail} state={state} idp={idp} /> : null}
-        {rail.kind === 'regulated' ? <RegulatedFields project={project} rail={rail} state={state} idp={idp} parents={parents} /> : null}
+        {rail.kind === 'regulated' ? (
+          <RegulatedFields project={project} rail={rail} state={state} idp={idp} parents={parents} />
+        ) : null}
         {rail.kind === 'battery' ? <BatteryFields project={project} rail={rail} state={state} idp={idp} /> : null}
         <div class="row">
           <button type="submit">Save rail</button>

@@ -9,10 +9,18 @@ import { FormErrors, type FieldState } from './fields';
 import { SpecField } from './spec-fields';
 import { stateFor, type Failed } from './failed';
 
-export const Version: FC<{ version: number }> = ({ version }) => <input type="hidden" name="version" value={String(version)} />;
+export const Version: FC<{ version: number }> = ({ version }) => (
+  <input type="hidden" name="version" value={String(version)} />
+);
 
 /** Attributes that make a form post through htmx and swap the supply body in place. */
-export const hx = (action: string, target = '#supply') => ({ method: 'post' as const, action, 'hx-post': action, 'hx-target': target, 'hx-swap': 'outerHTML' });
+export const hx = (action: string, target = '#supply') => ({
+  method: 'post' as const,
+  action,
+  'hx-post': action,
+  'hx-target': target,
+  'hx-swap': 'outerHTML',
+});
 
 export const pctText = percentText;
 
@@ -34,7 +42,12 @@ const WindingFields: FC<{ state: FieldState; idp: string }> = ({ state, idp }) =
   </>
 );
 
-const WindingRow: FC<{ project: Project; t: Transformer; w: Winding; failed?: Failed }> = ({ project, t, w, failed }) => {
+const WindingRow: FC<{ project: Project; t: Transformer; w: Winding; failed?: Failed }> = ({
+  project,
+  t,
+  w,
+  failed,
+}) => {
   const base = `/projects/${project.id}/supply/windings/${w.id}`;
   const state = stateFor(`winding-${w.id}`, failed, () => windingValues(w));
   return (
@@ -65,9 +78,24 @@ export const TransformerCard: FC<{ project: Project; t: Transformer; failed?: Fa
         <Version version={project.version} />
         <FormErrors state={state} />
         <div class="row">
-          <SpecField spec={transformerSpec} k="name" label="Transformer" hint="" state={state} idp={`t-${t.id}`} size={28} />
+          <SpecField
+            spec={transformerSpec}
+            k="name"
+            label="Transformer"
+            hint=""
+            state={state}
+            idp={`t-${t.id}`}
+            size={28}
+          />
           <SpecField spec={transformerSpec} k="construction" state={state} idp={`t-${t.id}`} />
-          <SpecField spec={transformerSpec} k="secondaryToleranceFraction" label="Secondary ±" state={state} idp={`t-${t.id}`} size={4} />
+          <SpecField
+            spec={transformerSpec}
+            k="secondaryToleranceFraction"
+            label="Secondary ±"
+            state={state}
+            idp={`t-${t.id}`}
+            size={4}
+          />
           <button type="submit">Save</button>
           <a class="danger" href={`${base}/delete`}>
             Delete transformer…
@@ -76,7 +104,11 @@ export const TransformerCard: FC<{ project: Project; t: Transformer; failed?: Fa
         </div>
       </form>
       <h3>Windings</h3>
-      {t.windings.length ? t.windings.map((w) => <WindingRow project={project} t={t} w={w} failed={failed} />) : <p class="hint">No windings yet: add the secondaries below.</p>}
+      {t.windings.length ? (
+        t.windings.map((w) => <WindingRow project={project} t={t} w={w} failed={failed} />)
+      ) : (
+        <p class="hint">No windings yet: add the secondaries below.</p>
+      )}
       <form {...hx(`${base}/windings`)} class="item-row add" aria-label={`Add a winding to ${t.name}`}>
         <Version version={project.version} />
         <FormErrors state={addState} />

@@ -26,13 +26,19 @@ export const BomBody: FC<BomBodyProps> = ({ project, report, roles = [], failed,
   return (
     <div id="bom">
       <PageMessages notice={notice} failed={failed} />
-      <BomLines project={project} failed={failed} roles={roles.map((s): [string, string] => [s.role.id, s.role.label])} />
+      <BomLines
+        project={project}
+        failed={failed}
+        roles={roles.map((s): [string, string] => [s.role.id, s.role.label])}
+      />
       <BomRoles project={project} statuses={roles} failed={failed} report={report} />
       <p class="bom-export">
-        Export the costed parts list: <a href={csv}>CSV (comma separated)</a> · <a href={`${csv}?sep=semicolon`}>CSV (semicolon, decimal comma)</a>
+        Export the costed parts list: <a href={csv}>CSV (comma separated)</a> ·{' '}
+        <a href={`${csv}?sep=semicolon`}>CSV (semicolon, decimal comma)</a>
         <br />
         Order sheets per supplier (SKU, quantity, price break, line totals, shipping):{' '}
-        <a href={`/projects/${project.id}/orders.csv`}>CSV</a> · <a href={`/projects/${project.id}/orders.csv?sep=semicolon`}>CSV (semicolon)</a>
+        <a href={`/projects/${project.id}/orders.csv`}>CSV</a> ·{' '}
+        <a href={`/projects/${project.id}/orders.csv?sep=semicolon`}>CSV (semicolon)</a>
       </p>
       <CostResults report={report} currency={project.currency} />
       <OrderSheets report={report} csvHref={`/projects/${project.id}/orders.csv`} />

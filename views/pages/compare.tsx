@@ -59,8 +59,8 @@ export const ComparePage: FC<ComparePageProps> = ({ all, chosen, rows, state, me
       <section class="card">
         <h1>Compare variants</h1>
         <p class="hint">
-          Two or three projects side by side. Each figure of the second and third is set against the first: the difference and
-          whether it is better or worse. Make a variant with “Clone as variant” on the projects list.
+          Two or three projects side by side. Each figure of the second and third is set against the first: the
+          difference and whether it is better or worse. Make a variant with “Clone as variant” on the projects list.
         </p>
         <form method="get" action="/compare" class="compare-pick">
           <Select name="p1" label="First (reference)" state={state} options={[['', '(choose)'], ...options]} />
@@ -83,8 +83,11 @@ export const ComparePage: FC<ComparePageProps> = ({ all, chosen, rows, state, me
         <section class="card" id="comparison">
           <h2>Side by side</h2>
           <p id="compare-summary">
-            {differing ? `${differing} of ${rows.length} figures differ (marked “differs”).` : 'No figure differs.'} Against the first
-            project; “better” and “worse” follow what is good for each figure (a higher margin, a lower cost).
+            {differing ? `${differing} of ${rows.length} figures differ (marked ` +
+              `“differs”).` : 'No figure differs.'}{' '}
+            Against the first project; “better” and “worse” follow what is good for each figure (a higher
+            margin, a
+            lower cost).
           </p>
           <table class="compare-table">
             <thead>
@@ -145,7 +148,11 @@ const MetricCell: FC<{ m: Metric | undefined }> = ({ m }) =>
   ) : (
     <td>
       {figure(m.value, m.unit, m.currency)}
-      {m.value === null ? <span class="hint"> ({m.why})</span> : m.margin && m.value < 0 ? <strong> fails</strong> : null}
+      {m.value === null ? (
+        <span class="hint"> ({m.why})</span>
+      ) : m.margin && m.value < 0 ? (
+        <strong> fails</strong>
+      ) : null}
     </td>
   );
 
@@ -156,7 +163,8 @@ export const SweepPage: FC<SweepPageProps> = ({ project, targets, states, active
       <section class="card">
         <h1>Sweep one parameter</h1>
         <p class="hint">
-          Each point is a copy of this project with one value changed, evaluated whole; nothing is saved. At most 12 points.
+          Each point is a copy of this project with one value changed, evaluated whole; nothing is saved. At most 12
+          points.
         </p>
         {message ? (
           <p class="form-errors" role="alert">
@@ -167,12 +175,23 @@ export const SweepPage: FC<SweepPageProps> = ({ project, targets, states, active
           const spec = SWEEP_SPECS[p];
           const st = states[p];
           return (
-            <form method="get" action={`/projects/${project.id}/sweep`} class={`sweep-form${active === p ? ' active' : ''}`} id={`sweep-${p}`}>
+            <form
+              method="get"
+              action={`/projects/${project.id}/sweep`}
+              class={`sweep-form${active === p ? ' active' : ''}`}
+              id={`sweep-${p}`}
+            >
               <input type="hidden" name="param" value={p} />
               <h2>{SWEEP_LABELS[p]}</h2>
               {targets[p].length ? (
                 <div class="fields-row">
-                  <Select name="target" label={spec.fields.target.label} state={st} idp={p} options={targets[p].map((t) => [t.id, t.name])} />
+                  <Select
+                    name="target"
+                    label={spec.fields.target.label}
+                    state={st}
+                    idp={p}
+                    options={targets[p].map((t) => [t.id, t.name])}
+                  />
                   {/* the heading names the quantity; the spec's longer label names it in messages */}
                   <SpecField spec={spec} k="from" state={st} idp={p} label="From" />
                   <SpecField spec={spec} k="to" state={st} idp={p} label="To" />

@@ -13,7 +13,13 @@ const ROWS: string[][] = [
   ['minFrequencyHz', 'maxFrequencyHz', 'fluxLimitT'],
 ];
 
-const CoreForm: FC<{ action: string; version: number; state: FieldState; idp: string; submit: string }> = ({ action, version, state, idp, submit }) => (
+const CoreForm: FC<{ action: string; version: number; state: FieldState; idp: string; submit: string }> = ({
+  action,
+  version,
+  state,
+  idp,
+  submit,
+}) => (
   <form method="post" action={action} hx-post={action} hx-target="#cores" hx-swap="outerHTML">
     <input type="hidden" name="version" value={String(version)} />
     <FormErrors state={state} />
@@ -52,9 +58,10 @@ export const CoresBody: FC<{ project: Project; failed?: Failed; notice?: string 
       <section class="card">
         <h2>Core catalog</h2>
         <p class="hint">
-          The cores this project's filter inductors and output transformer are wound on, described by size and material. Take AL, the effective area
-          and path length, the window and the flux limit from the core's data sheet (AL also as µH per 100 turns, e.g. 49 µH/100t). A filter or PA
-          picks its core on its stage page; the checks then use these figures for turns, flux density and winding fit.
+          The cores this project's filter inductors and output transformer are wound on, described by size and material.
+          Take AL, the effective area and path length, the window and the flux limit from the core's data sheet (AL also
+          as µH per 100 turns, e.g. 49 µH/100t). A filter or PA picks its core on its stage page; the checks then use
+          these figures for turns, flux density and winding fit.
         </p>
         {cores.length === 0 ? <p class="hint">No cores yet: add one below.</p> : null}
       </section>
@@ -70,7 +77,13 @@ export const CoresBody: FC<{ project: Project; failed?: Failed; notice?: string 
       ))}
       <section class="card">
         <h3>Add a core</h3>
-        <CoreForm action={base} version={project.version} idp="nc" submit="Add core" state={stateFor('add-core', failed, () => formValues(coreSpec, {}))} />
+        <CoreForm
+          action={base}
+          version={project.version}
+          idp="nc"
+          submit="Add core"
+          state={stateFor('add-core', failed, () => formValues(coreSpec, {}))}
+        />
       </section>
     </div>
   );

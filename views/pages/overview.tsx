@@ -32,11 +32,19 @@ const SettingsForm: FC<{ project: Project; state: FieldState }> = ({ project, st
       <h2>Project settings</h2>
       <span class="summary-line">
         {formatValue(project.frequencyHz, 'Hz', 4)} · {formatValue(project.targetPowerW, 'W')} ·{' '}
-        {project.mains ? `${formatValue(project.mains.nominalV, 'V')} ${formatValue(project.mains.frequencyHz, 'Hz')} mains` : 'battery / DC'} · {project.kits}{' '}
-        {project.kits === 1 ? 'kit' : 'kits'} · ambient {project.ambientC} °C
+        {project.mains
+          ? `${formatValue(project.mains.nominalV, 'V')} ${formatValue(project.mains.frequencyHz, 'Hz')} mains`
+          : 'battery / DC'}{' '}
+        · {project.kits} {project.kits === 1 ? 'kit' : 'kits'} · ambient {project.ambientC} °C
       </span>
     </summary>
-    <form method="post" action={`/projects/${project.id}/settings`} hx-post={`/projects/${project.id}/settings`} hx-target="#overview" hx-swap="outerHTML">
+    <form
+      method="post"
+      action={`/projects/${project.id}/settings`}
+      hx-post={`/projects/${project.id}/settings`}
+      hx-target="#overview"
+      hx-swap="outerHTML"
+    >
       <Hidden version={project.version} />
       <FormErrors state={state} />
       <div class="row">
@@ -63,17 +71,23 @@ const SettingsForm: FC<{ project: Project; state: FieldState }> = ({ project, st
   </details>
 );
 
-const StageRow: FC<{ project: Project; stage: Stage; index: number; state: FieldState; railName: (id: string) => string; report: EvaluationReport }> = ({
-  project,
-  stage,
-  index,
-  state,
-  railName,
-  report,
-}) => {
-  const computed = report.budget.rails.flatMap((r) => r.loads.filter((l) => l.computed && l.stageId === stage.id).map((l) => ({ rail: r.name, currentA: l.currentA })));
+const StageRow: FC<{
+  project: Project;
+  stage: Stage;
+  index: number;
+  state: FieldState;
+  railName: (id: string) => string;
+  report: EvaluationReport;
+}> = ({ project, stage, index, state, railName, report }) => {
+  const computed = report.budget.rails.flatMap((r) =>
+    r.loads.filter((l) => l.computed && l.stageId === stage.id).map((l) => ({ rail: r.name, currentA: l.currentA })),
+  );
   const base = `/projects/${project.id}/stages/${stage.id}`;
-  const computedNote = stage.pa ? 'key-down current on the PA rail is computed from the PA model' : stage.relay?.coilRailId ? 'relay coil current is added automatically' : null;
+  const computedNote = stage.pa
+    ? 'key-down current on the PA rail is computed from the PA model'
+    : stage.relay?.coilRailId
+      ? 'relay coil current is added automatically'
+      : null;
   return (
     <li class="stage" id={`stage-${stage.id}`}>
       <div class="stage-head">
@@ -83,12 +97,31 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
         </a>
         <span class="kind">{STAGE_KIND_LABELS[stage.kind]}</span>
         <span class="actions">
-          <form method="post" action={`${base}/move`} hx-post={`${base}/move`} hx-target="#overview" hx-swap="outerHTML" class="inline">
+          <form
+            method="post"
+            action={`${base}/move`}
+            hx-post={`${base}/move`}
+            hx-target="#overview"
+            hx-swap="outerHTML"
+            class="inline"
+          >
             <Hidden version={project.version} />
-            <button name="direction" value="up" disabled={index === 0} title="Move earlier in the build order" aria-label={`Move ${stage.name} up`}>
+            <button
+              name="direction"
+              value="up"
+              disabled={index === 0}
+              title="Move earlier in the build order"
+              aria-label={`Move ${stage.name} up`}
+            >
               ↑
             </button>
-            <button name="direction" value="down" disabled={index === project.stages.length - 1} title="Move later in the build order" aria-label={`Move ${stage.name} down`}>
+            <button
+              name="direction"
+              value="down"
+              disabled={index === project.stages.length - 1}
+              title="Move later in the build order"
+              aria-label={`Move ${stage.name} down`}
+            >
               ↓
             </button>
           </form>
@@ -99,7 +132,14 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
         </span>
       </div>
       {stage.loads.length ? (
-        <form method="post" action={`${base}/loads`} hx-post={`${base}/loads`} hx-target="#overview" hx-swap="outerHTML" class="loads">
+        <form
+          method="post"
+          action={`${base}/loads`}
+          hx-post={`${base}/loads`}
+          hx-target="#overview"
+          hx-swap="outerHTML"
+          class="loads"
+        >
           <Hidden version={project.version} />
           <FormErrors state={state} />
           <table class="grid compact">
@@ -110,7 +150,15 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
                   <td>{railName(l.railId)}</td>
                   {MODES.map((m) => (
                     <td>
-                      <SpecField spec={loadSpec} k={`currentA.${m}`} name={loadFormName(i, `currentA.${m}`)} idp={`s-${stage.id}`} state={state} size={8} hint="" />
+                      <SpecField
+                        spec={loadSpec}
+                        k={`currentA.${m}`}
+                        name={loadFormName(i, `currentA.${m}`)}
+                        idp={`s-${stage.id}`}
+                        state={state}
+                        size={8}
+                        hint=""
+                      />
                     </td>
                   ))}
                 </tr>
@@ -121,14 +169,22 @@ const StageRow: FC<{ project: Project; stage: Stage; index: number; state: Field
           {computedNote ? <span class="hint"> Note: {computedNote}.</span> : null}
           {computed.map((c) => (
             <p class="computed-load">
-              ◆ Computed and used in the budget ({c.rail}): {MODES.filter((m) => c.currentA[m] !== 0)
-                .map((m) => `${MODE_LABELS[m]} ${Number.isNaN(c.currentA[m]) ? 'unknown (see the failed checks)' : formatValue(c.currentA[m], 'A')}`)
+              ◆ Computed and used in the budget ({c.rail}):{' '}
+              {MODES.filter((m) => c.currentA[m] !== 0)
+                .map(
+                  (m) =>
+                    `${MODE_LABELS[m]} ${
+                      Number.isNaN(c.currentA[m]) ? 'unknown (see the failed checks)' : formatValue(c.currentA[m], 'A')
+                    }`,
+                )
                 .join(', ') || 'none'}
             </p>
           ))}
         </form>
       ) : (
-        <p class="hint">Draws no current from the supply. {stage.kind === 'lpf' ? '' : <a href={base}>Add a load</a>}</p>
+        <p class="hint">
+          Draws no current from the supply. {stage.kind === 'lpf' ? '' : <a href={base}>Add a load</a>}
+        </p>
       )}
     </li>
   );
@@ -163,7 +219,9 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
       <h2>Checks at a glance</h2>
       <p class="verdict">
         Verdict: <span class={`sev sev-${verdict}`}>{verdict === 'ok' ? 'OK' : verdict}</span>
-        {verdict === 'ok' ? ' — no check of this design fails or needs caution.' : ` — ${attention.length} finding(s) need attention.`}
+        {verdict === 'ok'
+          ? ' — no check of this design fails or needs caution.'
+          : ` — ${attention.length} finding(s) need attention.`}
       </p>
       <table class="grid summary">
         <thead>
@@ -212,7 +270,12 @@ const ChecksSummary: FC<{ project: Project; report: EvaluationReport }> = ({ pro
   );
 };
 
-export const OverviewBody: FC<{ project: Project; report: EvaluationReport; failed?: Failed; notice?: string }> = ({ project, report, failed, notice }) => {
+export const OverviewBody: FC<{ project: Project; report: EvaluationReport; failed?: Failed; notice?: string }> = ({
+  project,
+  report,
+  failed,
+  notice,
+}) => {
   const railName = (id: string) => project.supply.rails.find((r) => r.id === id)?.name ?? `(missing rail ${id})`;
   const addState = stateFor('add-stage', failed, () => ({ kind: 'receiver', name: '' }));
   return (
@@ -225,8 +288,11 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
       <FirstScreen project={project} report={report} />
       <p class="variant-links" id="variant-links">
         {project.variantOf ? 'This project is a variant. ' : ''}
-        <a href={`/projects/${project.id}/compare`}>{project.variantOf ? 'Compare with its original' : 'Compare with its variants'}</a> ·{' '}
-        <a href={`/projects/${project.id}/sweep`}>Sweep one parameter</a> (mains, winding, reservoir, PA load, filter order)
+        <a href={`/projects/${project.id}/compare`}>
+          {project.variantOf ? 'Compare with its original' : 'Compare with its variants'}
+        </a>{' '}
+        · <a href={`/projects/${project.id}/sweep`}>Sweep one parameter</a> (mains, winding, reservoir, PA load, filter
+        order)
       </p>
       <SettingsForm project={project} state={stateFor('settings', failed, () => settingsFormValues(project))} />
       <div class="columns">
@@ -241,21 +307,43 @@ export const OverviewBody: FC<{ project: Project; report: EvaluationReport; fail
           ) : (
             <EmptyState label="No stages and no rails yet">
               a stage draws its current from a rail, and there is none yet. Set up the supply first on the{' '}
-              <a href={`/projects/${project.id}/supply`}>Supply</a> page ({project.mains ? 'transformer, its windings, a rectified rail from a winding, a regulated rail from it' : 'a battery rail, then any regulated rail from it'}),
-              then add the stages below. Or start a new project from a station template on the <a href="/">project list</a>:
-              it sets up the supply, the stages and a starter parts list.
+              <a href={`/projects/${project.id}/supply`}>Supply</a> page (
+              {project.mains
+                ? 'transformer, its windings, a rectified rail from a winding, a regulated rail from it'
+                : 'a battery rail, then any regulated rail from it'}
+              ), then add the stages below. Or start a new project from a station template on the{' '}
+              <a href="/">project list</a>: it sets up the supply, the stages and a starter parts list.
             </EmptyState>
           )}
           <ol class="stages">
             {project.stages.map((s, i) => (
-              <StageRow project={project} stage={s} index={i} railName={railName} report={report} state={stateFor(`loads-${s.id}`, failed, () => loadValues(s))} />
+              <StageRow
+                project={project}
+                stage={s}
+                index={i}
+                railName={railName}
+                report={report}
+                state={stateFor(`loads-${s.id}`, failed, () => loadValues(s))}
+              />
             ))}
           </ol>
-          <form method="post" action={`/projects/${project.id}/stages`} hx-post={`/projects/${project.id}/stages`} hx-target="#overview" hx-swap="outerHTML" class="add-stage">
+          <form
+            method="post"
+            action={`/projects/${project.id}/stages`}
+            hx-post={`/projects/${project.id}/stages`}
+            hx-target="#overview"
+            hx-swap="outerHTML"
+            class="add-stage"
+          >
             <Hidden version={project.version} />
             <FormErrors state={addState} />
             <div class="row">
-              <Select name="kind" label="Add a stage" state={addState} options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])} />
+              <Select
+                name="kind"
+                label="Add a stage"
+                state={addState}
+                options={STAGE_KINDS.map((k) => [k, STAGE_KIND_LABELS[k]])}
+              />
               <Field name="name" label="Name" state={addState} size={28} />
               <button type="submit">Add stage</button>
             </div>

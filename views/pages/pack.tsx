@@ -14,7 +14,13 @@ const Section: FC<{ section: ChecklistSection }> = ({ section }) => (
             ☐
           </span>{' '}
           {i.text}
-          {i.value !== null ? <span class="source"> ({formatValue(i.value, i.unit)}{i.basis ? `; ${i.basis}` : ''})</span> : null}
+          {i.value !== null ? (
+            <span class="source">
+              {' '}
+              ({formatValue(i.value, i.unit)}
+              {i.basis ? `; ${i.basis}` : ''})
+            </span>
+          ) : null}
         </li>
       ))}
     </ul>
@@ -23,18 +29,34 @@ const Section: FC<{ section: ChecklistSection }> = ({ section }) => (
 
 // [part, title, what its pages are]: the same split as the PDF's (src/pdf/pack.ts)
 const PACK_CHOICES: [string, string, (kits: number) => string][] = [
-  ['builder', 'Builder’s pack', () => 'parts for one rig (no prices), current budget, supply design, RF results, build and safety checklists, sources'],
-  ['organiser', 'Organiser’s pack', (kits) => `costed parts list and totals, order sheets per supplier${kits > 1 ? `, ${kits} packing sheets (one per kit)` : ''}`],
+  [
+    'builder',
+    'Builder’s pack',
+    () =>
+      'parts for one rig (no prices), current budget, supply design, RF results, build and safety checklists, sources',
+  ],
+  [
+    'organiser',
+    'Organiser’s pack',
+    (kits) =>
+      `costed parts list and totals, order sheets per ` +
+        `supplier${kits > 1 ? `, ${kits} packing sheets (one per kit)` : ''}`,
+  ],
   ['both', 'Both in one file', () => 'the organiser’s pages, then the builder’s'],
 ];
 
-export const PackBody: FC<{ project: Project; build: ChecklistSection[]; safety: ChecklistSection[]; safetyPreamble: string }> = ({ project, build, safety, safetyPreamble }) => (
+export const PackBody: FC<{
+  project: Project;
+  build: ChecklistSection[];
+  safety: ChecklistSection[];
+  safetyPreamble: string;
+}> = ({ project, build, safety, safetyPreamble }) => (
   <div id="pack">
     <section class="card">
       <h1>Builder and organiser packs (PDF)</h1>
       <p>
-        Each pack opens with a cover: the project summary, the key results and the one safety notice. Choose the pages for
-        who reads them:
+        Each pack opens with a cover: the project summary, the key results and the one safety notice. Choose the pages
+        for who reads them:
       </p>
       <table class="grid pack-choice">
         <thead>
@@ -50,10 +72,20 @@ export const PackBody: FC<{ project: Project; build: ChecklistSection[]; safety:
               <th scope="row">{title}</th>
               <td>{pages(project.kits)}</td>
               <td class="actions">
-                <a class="button" href={`/projects/${project.id}/pack.pdf?part=${part}&paper=a4`} download aria-label={`${title}, A4`}>
+                <a
+                  class="button"
+                  href={`/projects/${project.id}/pack.pdf?part=${part}&paper=a4`}
+                  download
+                  aria-label={`${title}, A4`}
+                >
                   A4
                 </a>{' '}
-                <a class="button" href={`/projects/${project.id}/pack.pdf?part=${part}&paper=letter`} download aria-label={`${title}, US Letter`}>
+                <a
+                  class="button"
+                  href={`/projects/${project.id}/pack.pdf?part=${part}&paper=letter`}
+                  download
+                  aria-label={`${title}, US Letter`}
+                >
                   US Letter
                 </a>
               </td>
@@ -61,7 +93,9 @@ export const PackBody: FC<{ project: Project; build: ChecklistSection[]; safety:
           ))}
         </tbody>
       </table>
-      <p class="hint">The pack is computed from the project as stored now; its pages carry today's date as the date of the data.</p>
+      <p class="hint">
+        The pack is computed from the project as stored now; its pages carry today's date as the date of the data.
+      </p>
     </section>
     <div class="columns">
       <section class="card">

@@ -24,8 +24,21 @@ export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPar
   const addState = stateFor('add-part', failed, () => partValues(null));
   const uses = (id: string) => project.bom.filter((l) => l.partId === id).length;
   // the category list the design roles read ratings by, then any other names the catalog uses
-  const categories = [...new Set([...PART_CATEGORIES.map((c) => c.id), ...project.parts.map((p) => p.category).filter(Boolean).sort()])];
-  const suppliers = [...new Set([...project.costing.suppliers.map((s) => s.name), ...project.parts.flatMap((p) => p.offers.map((o) => o.supplier))])].sort();
+  const categories = [
+    ...new Set([
+      ...PART_CATEGORIES.map((c) => c.id),
+      ...project.parts
+        .map((p) => p.category)
+        .filter(Boolean)
+        .sort(),
+    ]),
+  ];
+  const suppliers = [
+    ...new Set([
+      ...project.costing.suppliers.map((s) => s.name),
+      ...project.parts.flatMap((p) => p.offers.map((o) => o.supplier)),
+    ]),
+  ].sort();
   return (
     <div id="parts">
       <PageMessages notice={notice} failed={failed} />
@@ -47,14 +60,14 @@ export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPar
         <h2>Parts ({project.parts.length})</h2>
         {project.parts.length ? null : (
           <EmptyState label="No parts yet">
-            the catalog is empty. Add each part you will buy below (type and ratings, then its supplier offers with price
-            breaks), or import a CSV on the <a href={`/projects/${project.id}/bom`}>Parts list</a> page; then put the parts on
-            the parts list with a quantity per rig to see the cost.
+            the catalog is empty. Add each part you will buy below (type and ratings, then its supplier offers with
+            price breaks), or import a CSV on the <a href={`/projects/${project.id}/bom`}>Parts list</a> page; then put
+            the parts on the parts list with a quantity per rig to see the cost.
           </EmptyState>
         )}
         <p class="explain">
-          Open a part to change it or its supplier offers. Price breaks are written as quantity: unit price in the offer's currency, e.g.{' '}
-          <code>1: 0.95, 10: 0.78, 100: 0.52</code>. Describe parts by type and ratings.
+          Open a part to change it or its supplier offers. Price breaks are written as quantity: unit price in the
+          offer's currency, e.g. <code>1: 0.95, 10: 0.78, 100: 0.52</code>. Describe parts by type and ratings.
         </p>
         <form {...hx(`/projects/${project.id}/parts`, '#parts')} class="card add" aria-label="Add a part">
           <Version version={project.version} />
@@ -65,7 +78,10 @@ export const PartsBody: FC<PartsBodyProps> = ({ project, failed, notice, openPar
             <button type="submit">Add part</button>
           </div>
         </form>
-        <CatalogImportForm project={project} error={failed?.form === 'catalog-import' ? failed.state.errors._form : undefined} />
+        <CatalogImportForm
+          project={project}
+          error={failed?.form === 'catalog-import' ? failed.state.errors._form : undefined}
+        />
         {project.parts.map((part) => (
           <PartCard project={project} part={part} failed={failed} uses={uses(part.id)} open={part.id === openPart} />
         ))}

@@ -42,12 +42,20 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
           </thead>
           <tbody>
             {projects.map((p) => {
-              const rs = renameFailed && renameFailed.id === p.id ? renameFailed.state : { values: { name: p.name }, errors: {} };
+              const rs =
+                renameFailed && renameFailed.id === p.id
+                  ? renameFailed.state
+                  : { values: { name: p.name }, errors: {} };
               return (
                 <tr>
                   <td>
                     <a href={`/projects/${p.id}`}>{p.name}</a>
-                    {p.variantOf ? <span class="hint"> (variant of {projects.find((x) => x.id === p.variantOf)?.name ?? 'a deleted project'})</span> : null}
+                    {p.variantOf ? (
+                      <span class="hint">
+                        {' '}
+                        (variant of {projects.find((x) => x.id === p.variantOf)?.name ?? 'a deleted project'})
+                      </span>
+                    ) : null}
                   </td>
                   <td class="num" data-label="Frequency">{formatValue(p.frequencyHz, 'Hz', 4)}</td>
                   <td class="num" data-label="Output">{formatValue(p.targetPowerW, 'W')}</td>
@@ -91,7 +99,12 @@ export const ProjectsPage: FC<ProjectsPageProps> = ({ projects, create, importEr
             <TemplateChoice state={createState} />
             <SpecField spec={newProjectSpec} k="name" state={createState} size={32} />
             <div class="row">
-              <Select name="band" label={newProjectSpec.fields.frequencyHz.label} state={createState} options={NEW_PROJECT_BANDS} />
+              <Select
+                name="band"
+                label={newProjectSpec.fields.frequencyHz.label}
+                state={createState}
+                options={NEW_PROJECT_BANDS}
+              />
               <SpecField spec={newProjectSpec} k="targetPowerW" state={createState} size={6} />
               <SpecField spec={newProjectSpec} k="mainsPreset" state={createState} />
             </div>
@@ -157,7 +170,14 @@ const TemplateChoice: FC<{ state: FieldState }> = ({ state }) => {
   );
 };
 
-export const ConfirmDelete: FC<{ title: string; what: string; version: number; action: string; back: string; refusal?: string }> = ({ title, what, version, action, back, refusal }) => (
+export const ConfirmDelete: FC<{
+  title: string;
+  what: string;
+  version: number;
+  action: string;
+  back: string;
+  refusal?: string;
+}> = ({ title, what, version, action, back, refusal }) => (
   <Layout title={title}>
     <section class="card confirm">
       <h1>{title}</h1>

@@ -42,17 +42,25 @@ const RfNext: FC<{ project: Project }> = ({ project }) => {
   const pa = project.stages.some((s) => s.kind === 'final' && s.pa);
   const lpf = project.stages.some((s) => s.lpf);
   if (pa && lpf) return null;
-  const missing = [pa ? null : 'a final amplifier stage with its PA settings', lpf ? null : 'a low-pass filter stage'].filter(Boolean);
+  const missing = [
+    pa ? null : 'a final amplifier stage with its PA settings',
+    lpf ? null : 'a low-pass filter stage',
+  ].filter(Boolean);
   return (
     <EmptyState label="RF stages missing">
-      add {missing.join(' and ')} on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page (add the stage,
-      then open it).{pa ? '' : ' Until then the checks below work from the target power alone.'}
+      add {missing.join(' and ')} on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page (add the
+      stage, then open it).{pa ? '' : ' Until then the checks below work from the target power alone.'}
       {lpf ? '' : ' Without a filter the harmonics below fail.'}
     </EmptyState>
   );
 };
 
-export const RfBody: FC<{ project: Project; report: EvaluationReport; failed?: Failed; notice?: string }> = ({ project, report, failed, notice }) => (
+export const RfBody: FC<{ project: Project; report: EvaluationReport; failed?: Failed; notice?: string }> = ({
+  project,
+  report,
+  failed,
+  notice,
+}) => (
   <div id="rf">
     {notice ? (
       <p class="notice" role="status">
@@ -60,14 +68,15 @@ export const RfBody: FC<{ project: Project; report: EvaluationReport; failed?: F
       </p>
     ) : null}
     <p class="caution-box">
-      Transmit only within your licence. Predicted harmonic levels and exposure distances are estimates from idealised models: measure the finished
-      transmitter into a dummy load with a suitable instrument before going on the air, and evaluate RF exposure as your local rules require.
+      Transmit only within your licence. Predicted harmonic levels and exposure distances are estimates from idealised
+      models: measure the finished transmitter into a dummy load with a suitable instrument before going on the air, and
+      evaluate RF exposure as your local rules require.
     </p>
     <RfNext project={project} />
     <Settings project={project} state={stateFor('rf-settings', failed, () => rfSettingsFormValues(project))} />
     <p>
-      <a href={`/projects/${project.id}/cores`}>Core catalog</a> ({(project.cores ?? []).length} cores): the cores the filter inductors and the
-      output transformer are wound on.
+      <a href={`/projects/${project.id}/cores`}>Core catalog</a> ({(project.cores ?? []).length} cores): the cores the
+      filter inductors and the output transformer are wound on.
     </p>
     <RfResults report={report.rf} />
     {report.rf.lpfStageId ? (

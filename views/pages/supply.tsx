@@ -31,7 +31,9 @@ export interface SupplyBodyProps {
 
 /** The sources a new rail can be fed from (also offered where a stage's load row creates a rail). */
 export function sourceOptions(p: Project): [string, string][] {
-  const w = p.supply.transformers.flatMap((t) => t.windings.map((x): [string, string] => [`w:${x.id}`, `Rectified from ${t.name} · ${x.name}`]));
+  const w = p.supply.transformers.flatMap((t) =>
+    t.windings.map((x): [string, string] => [`w:${x.id}`, `Rectified from ${t.name} · ${x.name}`]),
+  );
   const r = p.supply.rails.map((x): [string, string] => [`r:${x.id}`, `Regulated from ${x.name}`]);
   return [...w, ...r, ['battery', 'Battery (or external DC source)']];
 }
@@ -43,7 +45,14 @@ const AddTransformer: FC<{ project: Project; state: FieldState }> = ({ project, 
     <div class="row">
       <SpecField spec={transformerSpec} k="name" label="New transformer" state={state} idp="at" size={24} />
       <SpecField spec={transformerSpec} k="construction" state={state} idp="at" />
-      <SpecField spec={transformerSpec} k="secondaryToleranceFraction" label="Secondary ±" state={state} idp="at" size={4} />
+      <SpecField
+        spec={transformerSpec}
+        k="secondaryToleranceFraction"
+        label="Secondary ±"
+        state={state}
+        idp="at"
+        size={4}
+      />
       <button type="submit">Add transformer</button>
     </div>
   </form>
@@ -75,25 +84,34 @@ const Enclosure: FC<{ project: Project; state: FieldState }> = ({ project, state
 export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, glance, failed, notice, openRail }) => {
   const base = `/projects/${project.id}/supply`;
   // new items start with an empty name (the builder names them); the other fields from the specs' defaults
-  const addTrafo = stateFor('add-transformer', failed, () => ({ ...formValues(transformerSpec, defaults(transformerSpec)), name: '' }));
-  const addRail = stateFor('add-rail', failed, () => ({ name: '', source: sourceOptions(project)[0]?.[0] ?? 'battery' }));
+  const addTrafo = stateFor('add-transformer', failed, () => ({
+    ...formValues(transformerSpec, defaults(transformerSpec)),
+    name: '',
+  }));
+  const addRail = stateFor('add-rail', failed, () => ({
+    name: '',
+    source: sourceOptions(project)[0]?.[0] ?? 'battery',
+  }));
   const fuse = stateFor('primary-fuse', failed, () => formValues(primaryFuseSpec, project.supply));
   const enclosure = stateFor('enclosure', failed, () => formValues(enclosureSpec, project.supply));
-  const choices = stateFor('supply-choices', failed, () => formValues(supplyChoicesSpec, supplyChoices(project.supply)));
+  const choices = stateFor('supply-choices', failed, () =>
+    formValues(supplyChoicesSpec, supplyChoices(project.supply)),
+  );
   return (
     <div id="supply">
       <PageMessages notice={notice} failed={failed} />
       {project.mains ? (
         <p class="caution-box">
-          Mains wiring, charged reservoir capacitors and hot regulators can injure. Fuse the primary, earth the chassis, fit
-          bleeders, and follow your local electrical code; these figures are planning aids, not a safety approval. Mains
-          voltage and frequency are set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
+          Mains wiring, charged reservoir capacitors and hot regulators can injure. Fuse the primary, earth the chassis,
+          fit bleeders, and follow your local electrical code; these figures are planning aids, not a safety approval.
+          Mains voltage and frequency are set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page.
         </p>
       ) : (
         <p class="caution-box">
-          This station runs from a battery or external DC (set on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page).
-          A battery can deliver a very large fault current: fuse the positive lead close to the battery, and charge it only with a
-          charger made for its chemistry. These figures are planning aids, not a safety approval.
+          This station runs from a battery or external DC (set on the{' '}
+          <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page). A battery can deliver a very large fault
+          current: fuse the positive lead close to the battery, and charge it only with a charger made for its
+          chemistry. These figures are planning aids, not a safety approval.
         </p>
       )}
       {glance ?? null}
@@ -105,7 +123,9 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
           ))}
           {project.mains ? (
             <>
-              {project.supply.transformers.length ? null : <p class="hint">No transformer yet: add the mains transformer, then its secondaries.</p>}
+              {project.supply.transformers.length ? null : (
+                <p class="hint">No transformer yet: add the mains transformer, then its secondaries.</p>
+              )}
               <AddTransformer project={project} state={addTrafo} />
               <PrimaryFuse project={project} state={fuse} />
               <SupplyChoicesForm project={project} state={choices} />
@@ -121,11 +141,14 @@ export const SupplyBody: FC<SupplyBodyProps> = ({ project, parentsFor, results, 
             <EmptyState label="No rails yet">
               {project.mains
                 ? project.supply.transformers.some((t) => t.windings.length)
-                  ? 'no rails yet. Add a rail fed from a winding (rectified), then a regulated rail fed from it if a stage needs a steady voltage. '
-                  : 'no rails yet. Add the mains transformer and its secondary windings (left), then a rail fed from each winding. '
-                : 'no rails yet. Add a battery rail (Fed from: Battery), then a regulated rail fed from it if a stage needs a lower, steady voltage. '}
-              Stages on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page then draw their current from these rails;
-              state each rail's minimum voltage so its headroom can be judged.
+                  ? 'no rails yet. Add a rail fed from a winding (rectified), then a regulated rail fed from it if a ' +
+                    'stage needs a steady voltage. '
+                  : 'no rails yet. Add the mains transformer and its secondary windings (left), then a rail fed from ' +
+                    'each winding. '
+                : 'no rails yet. Add a battery rail (Fed from: Battery), then a regulated rail fed from it if a ' +
+                  'stage needs a lower, steady voltage. '}
+              Stages on the <a href={`/projects/${project.id}`}>Stages &amp; budget</a> page then draw their current
+              from these rails; state each rail's minimum voltage so its headroom can be judged.
             </EmptyState>
           )}
           {project.supply.rails.map((r) => (

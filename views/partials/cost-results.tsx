@@ -43,7 +43,9 @@ const LineRow: FC<{ line: CostLine; currency: string }> = ({ line, currency }) =
       {line.sku ? <span class="sub">{line.sku}</span> : null}
     </td>
     <td class="num" data-label="Unit price">
-      {line.unitPriceCents === null || line.offerCurrency === null ? '–' : formatMoney(line.unitPriceCents, line.offerCurrency)}
+      {line.unitPriceCents === null || line.offerCurrency === null
+        ? '–'
+        : formatMoney(line.unitPriceCents, line.offerCurrency)}
       {line.offerCurrency !== null && line.offerCurrency !== currency && line.exchangeRate !== null ? (
         <span class="sub">at {rateInWords(line.offerCurrency, line.exchangeRate, currency)}</span>
       ) : null}
@@ -53,7 +55,9 @@ const LineRow: FC<{ line: CostLine; currency: string }> = ({ line, currency }) =
       {line.breakMinQty !== null ? <span class="sub">from {line.breakMinQty}</span> : null}
       {line.raised ? (
         <span class="suggestion">
-          {' '}+{line.raised.extraQty} over the plain {line.raised.plainQty}: saves {formatMoney(line.raised.savingCents, currency)}
+          {' '}
+          +{line.raised.extraQty} over the plain {line.raised.plainQty}: saves{' '}
+          {formatMoney(line.raised.savingCents, currency)}
         </span>
       ) : null}
     </td>
@@ -69,18 +73,29 @@ export const CostResults: FC<{ report: CostReport; currency: string }> = ({ repo
     <section class="card" id="cost-results">
       <h2>Cost</h2>
       <p class="summary-line">
-        Build of {report.kits} kit{report.kits === 1 ? '' : 's'}: <strong>{formatMoney(t.buildCents, currency)}</strong> (parts{' '}
-        {formatMoney(t.partsCents, currency)}, shipping {formatMoney(t.shippingCents, currency)})
-        {t.perKitCents !== null ? <> · per kit <strong>{formatMoney(t.perKitCents, currency)}</strong></> : null}
+        Build
+        of {report.kits} kit{report.kits === 1 ? '' : 's'}: <strong>{formatMoney(t.buildCents, currency)}</strong>{' '}
+        (parts {formatMoney(t.partsCents, currency)}, shipping {formatMoney(t.shippingCents, currency)})
+        {t.perKitCents !== null ? (
+          <>
+            {' '}
+            · per kit <strong>{formatMoney(t.perKitCents, currency)}</strong>
+          </>
+        ) : null}
         {t.unpricedLines > 0 ? <span class="sev sev-caution">{t.unpricedLines} line(s) unpriced</span> : null}
       </p>
       <p class="explain">Supplier choice: {report.methodNote}</p>
       <p class="explain single-supplier">
         {single.available ? (
           <>
-            Everything from one supplier: cheapest is {single.supplier} at {formatMoney(single.totalCents, currency)} (shipping{' '}
-            {formatMoney(single.shippingCents, currency)}),{' '}
-            {single.extraCents > 0 ? <>{formatMoney(single.extraCents, currency)} more than the plan below.</> : <>the same as the plan below.</>}
+            Everything from one supplier: cheapest
+            is {single.supplier} at {formatMoney(single.totalCents, currency)}{' '}
+            (shipping {formatMoney(single.shippingCents, currency)}),{' '}
+            {single.extraCents > 0 ? (
+              <>{formatMoney(single.extraCents, currency)} more than the plan below.</>
+            ) : (
+              <>the same as the plan below.</>
+            )}
             {single.unpricedLines > 0 ? (
               <span class="sev sev-caution">
                 Incomplete: {single.unpricedLines} needed line(s) have no usable price and are left out of both figures.
@@ -134,7 +149,8 @@ export const CostResults: FC<{ report: CostReport; currency: string }> = ({ repo
           {report.suppliers.map((s) => (
             <tr>
               <td colspan={7}>
-                Shipping {s.supplier} ({s.lineCount} line{s.lineCount === 1 ? '' : 's'}, parts {formatMoney(s.partsCents, currency)})
+                Shipping {s.supplier} ({s.lineCount} line{s.lineCount === 1 ? '' : 's'}, parts{' '}
+                {formatMoney(s.partsCents, currency)})
               </td>
               <td class="num">{formatMoney(s.shippingCents, currency)}</td>
               <td></td>
@@ -170,8 +186,8 @@ export const CostResults: FC<{ report: CostReport; currency: string }> = ({ repo
       </table>
       {report.raisedSavingsCents > 0 ? (
         <p class="notice">
-          Buying up to a price break where that is cheaper saves {formatMoney(report.raisedSavingsCents, currency)} in all (see the
-          Price break column; the totals above include it).
+          Buying up to a price break where that is cheaper saves {formatMoney(report.raisedSavingsCents, currency)} in
+          all (see the Price break column; the totals above include it).
         </p>
       ) : null}
       {problems.length ? (

@@ -8,7 +8,8 @@ const load = (w: { loadReOhm: number; loadImOhm: number }) =>
 
 export const PaSwrTable: FC<{ s: PaSwrStress | null }> = ({ s }) => {
   if (!s) return null;
-  const how = s.model === 'class-e-simulated' ? 'class E by time-domain simulation, every 15°' : 'load line at a complex load';
+  const how =
+    s.model === 'class-e-simulated' ? 'class E by time-domain simulation, every 15°' : 'load line at a complex load';
   const rows: [string, Worst, string][] = [
     ['Highest drain peak', s.worstDrainPeak, 'V'],
     ['Highest device current', s.worstPeakCurrent, 'A'],

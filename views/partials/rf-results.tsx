@@ -30,8 +30,12 @@ const PaRefused: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => (
   <div class="rf-pa">
     <h3>{name}: final amplifier</h3>
     <p class="form-errors" role="alert">
-      Not computed: the PA data is refused ({pa.findings.filter((f) => f.severity === 'fail').map((f) => f.subject).join('; ')}). Output, current and heat
-      are unknown until it is corrected; see the failed checks below.
+      Not computed: the PA data is refused (
+      {pa.findings
+        .filter((f) => f.severity === 'fail')
+        .map((f) => f.subject)
+        .join('; ')}
+      ). Output, current and heat are unknown until it is corrected; see the failed checks below.
     </p>
   </div>
 );
@@ -41,63 +45,131 @@ function waveformText(pa: PaResult): string {
   const w = pa.waveform;
   if (!w) return 'unknown';
   const band = `${fv(w.designOutputW, 'W')} at the design point, up to ${fv(w.bandMaxOutputW, 'W')} over the band`;
-  if (w.model === 'trapezoid') return `switched, ${fv(w.transitionTimeS, 's')} edges${w.transitionAssumed ? ' (assumed)' : ''}: ${band}`;
-  if (w.model === 'class-e-simulated') return `simulated class E, loaded Q ${w.classELoadedQ?.[1]} to ${w.classELoadedQ?.[0]}: ${band}`;
+  if (w.model === 'trapezoid')
+    return `switched, ${fv(w.transitionTimeS, 's')} edges${w.transitionAssumed ? ' (assumed)' : ''}: ${band}`;
+  if (w.model === 'class-e-simulated')
+    return `simulated class E, loaded Q ${w.classELoadedQ?.[1]} to ${w.classELoadedQ?.[0]}: ${band}`;
   return `current pulse, edge of saturation to flat-topped: ${band}`;
 }
 
-const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => pa.refused ? <PaRefused name={name} pa={pa} /> : (
-  <div class="rf-pa">
-    <h3>{name}: final amplifier</h3>
-    <KV
-      rows={[
-        ['Output', `${fv(pa.outputW, 'W')} = ${fv(pa.outputDbm, 'dBm')} = ${fv(pa.outputDbw, 'dBW')}`],
-        ['Against reference', `${fv(pa.vsReferenceDb, 'dB')} (${pa.vsReferenceSUnits.toFixed(1)} S-units at 6 dB each)`],
-        ['Supply', `${fv(pa.railV, 'V')} (saturation drop ${fv(pa.saturationV, 'V')})`],
-        pa.turnsRatioSource === 'network'
-          ? ['Output match', `matching network presenting ${fv(pa.primaryOhm, 'Ω')} at the drain (no transformer)`]
-          : ['Turns ratio (secondary : full primary)', `${pa.turnsRatio.toFixed(3)} (${pa.turnsRatioSource})${pa.idealTurnsRatio !== null ? `, exact for target ${pa.idealTurnsRatio.toFixed(3)}` : ''}`],
-        ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
-        ['Efficiency', `${pct(pa.efficiency)} (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'}; the ideal waveform's ${pct(pa.waveform?.idealEfficiency ?? NaN)})`],
-        ['Waveform', waveformText(pa)],
-        ['DC input / key-down current', `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} budgeted at the design point (bias idle included)${pa.waveform && pa.waveform.bandMaxCurrentA > pa.waveform.designCurrentA * 1.05 ? `; up to ${fv(pa.waveform.bandMaxCurrentA + (pa.keyDownCurrentA - pa.waveform.designCurrentA), 'A')} at the worst end of the band` : ''}`],
-        ...(pa.swrKeyDownCurrentA !== null && pa.swrKeyDownCurrentA > pa.keyDownCurrentA
-          ? [['Key-down current at the worst SWR', `${fv(pa.swrKeyDownCurrentA, 'A')} (above the budgeted ${fv(pa.keyDownCurrentA, 'A')})`] as [string, string]] : []),
-        [`Peak drain voltage / device current (design load${pa.maxRailV > pa.railV ? `, highest supply ${fv(pa.maxRailV, 'V')}` : ''})`, `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`],
-        ...(pa.clamp ? [['Drain clamp', clampText(pa.clamp)] as [string, string]] : []),
-        ['Dissipation', `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`],
-        [(pa.thermal.sharedBy > 1 ? `Heatsink needed, one per ${pa.thermal.sharedBy} devices` : 'Heatsink needed per device') + ' (Tj ≤ ' + fv(pa.thermal.tjTargetC, '°C') + ')', `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`],
-        ['Junction with fitted heatsink', pa.thermal.tjAverageC === null ? 'no heatsink chosen' : `${fv(pa.thermal.tjAverageC, '°C')} keying, ${fv(pa.thermal.tjContinuousC, '°C')} continuous`],
-      ]}
-    />
-    <PaSwrTable s={pa.swr} />
-    {pa.ratioOptions.length > 0 ? (
-      <table class="grid ratios">
-        <caption>Practical transformer ratios (primary : secondary turns) and the power each gives</caption>
-        <thead>
-          <tr>
-            <th>Turns</th>
-            <th class="num">Secondary / primary</th>
-            <th class="num">Drain load</th>
-            <th class="num">Output</th>
-          </tr>
-        </thead>
-        <tbody>
-          {pa.ratioOptions.map((o) => (
-            <tr class={o.turnsRatio === pa.turnsRatio ? 'chosen' : ''}>
-              <td>{o.label}{o.turnsRatio === pa.turnsRatio ? ' ✓' : ''}</td>
-              <td class="num">{o.turnsRatio.toFixed(3)}</td>
-              <td class="num">{fv(o.primaryOhm, 'Ω')}</td>
-              <td class="num">{fv(o.outputW, 'W')}</td>
+const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) =>
+  pa.refused ? (
+    <PaRefused name={name} pa={pa} />
+  ) : (
+    <div class="rf-pa">
+      <h3>{name}: final amplifier</h3>
+      <KV
+        rows={[
+          ['Output', `${fv(pa.outputW, 'W')} = ${fv(pa.outputDbm, 'dBm')} = ${fv(pa.outputDbw, 'dBW')}`],
+          [
+            'Against reference',
+            `${fv(pa.vsReferenceDb, 'dB')} (${pa.vsReferenceSUnits.toFixed(1)} S-units at 6 dB each)`,
+          ],
+          ['Supply', `${fv(pa.railV, 'V')} (saturation drop ${fv(pa.saturationV, 'V')})`],
+          pa.turnsRatioSource === 'network'
+            ? ['Output match', `matching network presenting ${fv(pa.primaryOhm, 'Ω')} at the drain (no transformer)`]
+            : [
+                'Turns ratio (secondary : full primary)',
+                `${pa.turnsRatio.toFixed(3)}` +
+                  ` (${pa.turnsRatioSource})${
+                    pa.idealTurnsRatio !== null ? `, exact for target ${pa.idealTurnsRatio.toFixed(3)}` : ''
+                  }`,
+              ],
+          ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
+          [
+            'Efficiency',
+            `${pct(pa.efficiency)}` +
+              ` (${pa.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'}; ` +
+              `the ideal waveform's ${pct(pa.waveform?.idealEfficiency ?? NaN)})`,
+          ],
+          ['Waveform', waveformText(pa)],
+          [
+            'DC input / key-down current',
+            `${fv(pa.dcInputW, 'W')} / ${fv(pa.keyDownCurrentA, 'A')} budgeted at the design point (bias idle ` +
+              `included)` +
+              `${
+                pa.waveform && pa.waveform.bandMaxCurrentA > pa.waveform.designCurrentA * 1.05
+                  ? `; up to ${fv(
+                      pa.waveform.bandMaxCurrentA + (pa.keyDownCurrentA - pa.waveform.designCurrentA),
+                      'A',
+                    )} at the worst end of the band`
+                  : ''
+              }`,
+          ],
+          ...(pa.swrKeyDownCurrentA !== null && pa.swrKeyDownCurrentA > pa.keyDownCurrentA
+            ? [
+                [
+                  'Key-down current at the worst SWR',
+                  `${fv(pa.swrKeyDownCurrentA, 'A')} (above the budgeted ${fv(pa.keyDownCurrentA, 'A')})`,
+                ] as [string, string],
+              ]
+            : []),
+          [
+            `Peak drain voltage / device current (design ` +
+              `load${pa.maxRailV > pa.railV ? `, highest supply ${fv(pa.maxRailV, 'V')}` : ''})`,
+            `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`,
+          ],
+          ...(pa.clamp ? [['Drain clamp', clampText(pa.clamp)] as [string, string]] : []),
+          [
+            'Dissipation',
+            `${fv(pa.thermal.dissipationTotalW, 'W')} key-down in all devices; ` +
+              `${fv(pa.thermal.dissipationPerDeviceW, 'W')} per device, ` +
+              `${fv(pa.thermal.averagePerDeviceW, 'W')} averaged over CW keying`,
+          ],
+          [
+            (pa.thermal.sharedBy > 1
+              ? `Heatsink needed, one per ${pa.thermal.sharedBy} devices`
+              : 'Heatsink needed per device') +
+              ' (Tj ≤ ' +
+              fv(pa.thermal.tjTargetC, '°C') +
+              ')',
+            `${fv(pa.thermal.thetaSaNeededAverageKPerW, 'K/W')} for CW keying, ` +
+              `${fv(pa.thermal.thetaSaNeededContinuousKPerW, 'K/W')} for a continuous tune-up carrier`,
+          ],
+          [
+            'Junction with fitted heatsink',
+            pa.thermal.tjAverageC === null
+              ? 'no heatsink chosen'
+              : `${fv(pa.thermal.tjAverageC, '°C')} keying, ${fv(pa.thermal.tjContinuousC, '°C')} continuous`,
+          ],
+        ]}
+      />
+      <PaSwrTable s={pa.swr} />
+      {pa.ratioOptions.length > 0 ? (
+        <table class="grid ratios">
+          <caption>Practical transformer ratios (primary : secondary turns) and the power each gives</caption>
+          <thead>
+            <tr>
+              <th>Turns</th>
+              <th class="num">Secondary / primary</th>
+              <th class="num">Drain load</th>
+              <th class="num">Output</th>
             </tr>
-          ))}
-        </tbody>
-      </table>
-    ) : null}
-  </div>
-);
+          </thead>
+          <tbody>
+            {pa.ratioOptions.map((o) => (
+              <tr class={o.turnsRatio === pa.turnsRatio ? 'chosen' : ''}>
+                <td>
+                  {o.label}
+                  {o.turnsRatio === pa.turnsRatio ? ' ✓' : ''}
+                </td>
+                <td class="num">{o.turnsRatio.toFixed(3)}</td>
+                <td class="num">{fv(o.primaryOhm, 'Ω')}</td>
+                <td class="num">{fv(o.outputW, 'W')}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      ) : null}
+    </div>
+  );
 
-const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageId: string }> = ({ name, lpf, report, stageId }) => {
+const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageId: string }> = ({
+  name,
+  lpf,
+  report,
+  stageId,
+}) => {
   const d = lpf.design;
   const a = lpf.analysis;
   const mc = lpf.monteCarlo;
@@ -115,9 +187,17 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
       {d ? (
         <>
           <p class="explain">
-            {d.response === 'chebyshev' ? `Chebyshev, ${d.rippleDb} dB ripple (cutoff = ripple edge)` : 'Butterworth (cutoff = 3 dB point)'}, order {d.order},{' '}
-            {d.form}, cutoff {fv(d.cutoffHz, 'Hz')} (
-            {d.cutoffSource === 'band-rule' ? 'chosen from the band: 1.2 × f for Chebyshev, 1.4 × f for Butterworth, at least 1.05 × the band top; common practice' : 'entered'}), {fv(d.r0Ohm, 'Ω')}. Core: {d.coreName}; turns computed with AL {fv(d.coreAlHPerTurn2, 'H')}/turn². Shunt capacitors see up to {fv(lpf.capacitorPeakV, 'V')} peak.
+            {d.response === 'chebyshev'
+              ? `Chebyshev, ${d.rippleDb} dB ripple (cutoff = ripple edge)`
+              : 'Butterworth (cutoff = 3 dB point)'}
+            , order {d.order}, {d.form}, cutoff {fv(d.cutoffHz, 'Hz')} (
+            {d.cutoffSource === 'band-rule'
+              ? 'chosen from the band: 1.2 × f for Chebyshev, 1.4 × f for Butterworth, at least 1.05 × the band ' +
+                'top; common practice'
+              : 'entered'}
+            ), {fv(d.r0Ohm, 'Ω')}. Core: {d.coreName}; turns computed with AL {fv(d.coreAlHPerTurn2, 'H')}/turn².
+            Shunt
+            capacitors see up to {fv(lpf.capacitorPeakV, 'V')} peak.
           </p>
           <table class="grid lpf-parts">
             <thead>
@@ -152,13 +232,37 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
       {a ? (
         <KV
           rows={[
-            ['At the operating frequency', `loss ${fv(a.atOperating.lossDb, 'dB')}, input SWR ${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} dissipated as heat (reflected power excluded)`],
-            ['Across the band', `${fv(a.bandLowHz, 'Hz', 5)} – ${fv(a.bandHighHz, 'Hz', 5)}: worst loss ${fv(a.bandMaxLossDb, 'dB')}, worst SWR ${a.bandMaxSwr.toFixed(2)}`],
+            [
+              'At the operating frequency',
+              `loss ${fv(a.atOperating.lossDb, 'dB')}, input SWR ` +
+                `${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} dissipated as heat ` +
+                `(reflected power excluded)`,
+            ],
+            [
+              'Across the band',
+              `${fv(a.bandLowHz, 'Hz', 5)} – ${fv(a.bandHighHz, 'Hz', 5)}: worst loss ` +
+                `${fv(a.bandMaxLossDb, 'dB')}, worst SWR ${a.bandMaxSwr.toFixed(2)}`,
+            ],
             ...a.harmonics.map((h): [string, string] => {
               const m = mc?.harmonics.find((x) => x.n === h.n);
-              return [`Attenuation at ${h.n}f (${fv(h.frequencyHz, 'Hz')})`, `${fv(h.attenuationDb, 'dB')}${m ? `; tolerances: worst ${fv(m.worstAttenuationDb, 'dB')}, ${mc?.percentile}th percentile ${fv(m.percentileAttenuationDb, 'dB')}` : ''}`];
+              return [
+                `Attenuation at ${h.n}f (${fv(h.frequencyHz, 'Hz')})`,
+                `${fv(h.attenuationDb, 'dB')}${
+                  m
+                    ? `; tolerances: worst ${fv(m.worstAttenuationDb, 'dB')}, ` +
+                      `${mc?.percentile}th percentile ${fv(m.percentileAttenuationDb, 'dB')}`
+                    : ''
+                }`,
+              ];
             }),
-            ...(mc ? [['Monte Carlo', `${mc.trials} trials, seed ${mc.seed}, each part uniform within its tolerance`] as [string, string]] : []),
+            ...(mc
+              ? [
+                  ['Monte Carlo', `${mc.trials} trials, seed ${mc.seed}, each part uniform within its tolerance`] as [
+                    string,
+                    string,
+                  ],
+                ]
+              : []),
           ]}
         />
       ) : null}
@@ -170,15 +274,22 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
 
 /** The capacitors' entered ratings ("500 V, 3 A"), or 'not entered'. */
 const capRating = (r: CoreRealisation) =>
-  [r.capacitorRatedV != null ? fv(r.capacitorRatedV, 'V') : null, r.capacitorRatedA != null ? fv(r.capacitorRatedA, 'A') : null]
-    .filter((x) => x !== null).join(', ') || 'not entered';
+  [
+    r.capacitorRatedV != null ? fv(r.capacitorRatedV, 'V') : null,
+    r.capacitorRatedA != null ? fv(r.capacitorRatedA, 'A') : null,
+  ]
+    .filter((x) => x !== null)
+    .join(', ') || 'not entered';
 
 const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
   <div class="rf-realisation">
-    <h4>Parts at {fv(r.powerW, 'W')} into SWR {r.swr} (worst load phase)</h4>
+    <h4>
+      Parts at {fv(r.powerW, 'W')} into SWR {r.swr} (worst load phase)
+    </h4>
     <p class="explain">
       {r.aeM2 !== null && r.leM !== null && r.permeability !== null
-        ? `Core: Ae ${(r.aeM2 * 1e6).toFixed(1)} mm², le ${(r.leM * 1e3).toFixed(1)} mm, permeability about ${r.permeability.toFixed(0)} from its AL. `
+        ? `Core: Ae ${(r.aeM2 * 1e6).toFixed(1)} mm², le ${(r.leM * 1e3).toFixed(1)} mm, permeability about ` +
+          `${r.permeability.toFixed(0)} from its AL. `
         : 'Core dimensions not entered: flux not checked. '}
       Self-resonance is an estimate (about 2 pF across a winding, 5 nH of capacitor lead).
     </p>
@@ -203,7 +314,9 @@ const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
             <td class="num">{fv(l.rmsV, 'V')}</td>
             <td class="num">{fv(l.rmsA, 'A')}</td>
             <td class="num">{l.peakFluxT !== null ? `${(l.peakFluxT * 1e3).toFixed(1)} mT` : 'not checked'}</td>
-            <td class="num">{r.fluxLimitT != null ? `flux ≤ ${(r.fluxLimitT * 1e3).toFixed(1)} mT` : 'no flux limit'}</td>
+            <td class="num">
+              {r.fluxLimitT != null ? `flux ≤ ${(r.fluxLimitT * 1e3).toFixed(1)} mT` : 'no flux limit'}
+            </td>
             <td class="num">{`${l.turns}${l.fitTurns !== null ? ` (${l.fitTurns})` : ''}`}</td>
             <td class="num">{fv(l.selfResonanceHz, 'Hz', 3)}</td>
           </tr>
@@ -230,9 +343,18 @@ const RelayTable: FC<{ name: string; r: RelayResult }> = ({ name, r }) => (
     <h3>{name}: T/R relay</h3>
     <KV
       rows={[
-        ['RF on the contacts', `${fv(r.rfPeakV, 'V')} peak (${fv(r.rfRmsV, 'V')} RMS), ${fv(r.rfRmsA, 'A')} RMS at SWR ${r.swr} and ${fv(r.powerW, 'W')}`],
-        ...(r.peakWithHarmonicsV !== null ? [['With harmonics (before the filter, upper bound)', fv(r.peakWithHarmonicsV, 'V')] as [string, string]] : []),
-        ['Rating compared', `${fv(r.ratedPeakV, 'V')} peak (${r.ratedIsRf ? 'RF rating' : 'DC rating: no RF rating entered'})`],
+        [
+          'RF on the contacts',
+          `${fv(r.rfPeakV, 'V')} peak (${fv(r.rfRmsV, 'V')} RMS), ${fv(r.rfRmsA, 'A')} RMS at SWR ` +
+            `${r.swr} and ${fv(r.powerW, 'W')}`,
+        ],
+        ...(r.peakWithHarmonicsV !== null
+          ? [['With harmonics (before the filter, upper bound)', fv(r.peakWithHarmonicsV, 'V')] as [string, string]]
+          : []),
+        [
+          'Rating compared',
+          `${fv(r.ratedPeakV, 'V')} peak (${r.ratedIsRf ? 'RF rating' : 'DC rating: no RF rating entered'})`,
+        ],
         ['Receiver input during transmit', `${fv(r.receiverPowerW, 'W')} (${fv(r.receiverPowerDbm, 'dBm')})`],
         ['Timing', `dot ${fv(r.dotS, 's')}; transmit delay minus (operate + bounce) = ${fv(r.hotSwitchMarginS, 's')}`],
       ]}
@@ -246,16 +368,48 @@ const OutputNetworkTable: FC<{ name: string; n: LNetwork | null; c: RfChoke | nu
     <KV
       rows={[
         ...(n
-          ? [
-            ['L network', `${fv(n.drainOhm, 'Ω')} drain load to ${fv(n.loadOhm, 'Ω')}, Q ${n.q.toFixed(2)}; series inductor on the ${n.shuntAt === 'load' ? 'drain' : 'load'} side, shunt capacitor across the ${n.shuntAt} side`],
-            ['Series inductor', `${fv(n.seriesH, 'H')} ideal${n.turns !== null && n.builtSeriesH !== null ? `; ${n.turns} turns on the chosen core (the PA's output core, else the filter's) = ${fv(n.builtSeriesH, 'H')}` : '; no core to count turns on'}`],
-            ['Shunt capacitor', `${fv(n.shuntF, 'F')} ideal; fit ${n.capacitorPartsF.map((x) => fv(x, 'F', 2)).join(' ∥ ')} = ${fv(n.builtShuntF, 'F')}`],
-            ...(n.builtDrainReOhm !== null && n.builtDrainImOhm !== null
-              ? [['Drain load as built', `${fv(n.builtDrainReOhm, 'Ω')} ${n.builtDrainImOhm < 0 ? '−' : '+'} j${fv(Math.abs(n.builtDrainImOhm), 'Ω')}`] as [string, string]]
-              : []),
-          ] as [string, string][]
+          ? ([
+              [
+                'L network',
+                `${fv(n.drainOhm, 'Ω')} drain load to ${fv(n.loadOhm, 'Ω')}` +
+                  `, Q ${n.q.toFixed(2)}; series inductor on the ` +
+                  `${n.shuntAt === 'load' ? 'drain' : 'load'} side, shunt capacitor across the ${n.shuntAt} side`,
+              ],
+              [
+                'Series inductor',
+                `${fv(n.seriesH, 'H')} ideal` +
+                  `${
+                    n.turns !== null && n.builtSeriesH !== null
+                      ? `; ${n.turns} turns on the chosen core (the PA's output core, else the filter's) = ` +
+                        `${fv(n.builtSeriesH, 'H')}`
+                      : '; no core to count turns on'
+                  }`,
+              ],
+              [
+                'Shunt capacitor',
+                `${fv(n.shuntF, 'F')} ideal; fit ` +
+                  `${n.capacitorPartsF.map((x) => fv(x, 'F', 2)).join(' ∥ ')} = ${fv(n.builtShuntF, 'F')}`,
+              ],
+              ...(n.builtDrainReOhm !== null && n.builtDrainImOhm !== null
+                ? [
+                    [
+                      'Drain load as built',
+                      `${fv(n.builtDrainReOhm, 'Ω')} ${n.builtDrainImOhm < 0 ? '−' : '+'}` +
+                        ` j${fv(Math.abs(n.builtDrainImOhm), 'Ω')}`,
+                    ] as [string, string],
+                  ]
+                : []),
+            ] as [string, string][])
           : []),
-        ...(c ? [['Feed choke', `at least ${fv(c.minInductanceH, 'H')} (reactance 10 × the drain load), carrying ${fv(c.currentA, 'A')} key-down`] as [string, string]] : []),
+        ...(c
+          ? [
+              [
+                'Feed choke',
+                `at least ${fv(c.minInductanceH, 'H')} (reactance 10 × the drain load), carrying ` +
+                  `${fv(c.currentA, 'A')} key-down`,
+              ] as [string, string],
+            ]
+          : []),
       ]}
     />
   </div>
@@ -267,17 +421,30 @@ const KeyingTable: FC<{ name: string; k: KeyingResult }> = ({ name, k }) => (
   <div class="rf-keying">
     <h3>{name}: keying</h3>
     <p class="explain">
-      Spectrum of a steady dot train at {k.spectrum.wpm} WPM (lines every {fv(k.spectrum.lineSpacingHz, 'Hz')}), from the keyed
-      envelope's {k.edges.shape === 'rc' ? `RC shaping (τ = ${ms(k.edges.timeConstantS)})` : 'raised-cosine edges'}. Key clicks are the
-      strongest line at or beyond each offset, relative to the carrier.
+      Spectrum of a steady dot train at {k.spectrum.wpm} WPM (lines every {fv(k.spectrum.lineSpacingHz, 'Hz')}), from
+      the keyed envelope's{' '}
+      {k.edges.shape === 'rc' ? `RC shaping (τ = ${ms(k.edges.timeConstantS)})` : 'raised-cosine edges'}. Key clicks
+      are
+      the strongest line at or beyond each offset, relative to the carrier.
     </p>
     <KV
       rows={[
         ['Rise / fall (10–90 %)', `${ms(k.riseS)} / ${ms(k.fallS)}`],
-        ['Key clicks', k.spectrum.clicks.map((c) => `${fv(c.offsetHz, 'Hz')}: ${c.levelDbc.toFixed(0)} dBc`).join('; ')],
+        [
+          'Key clicks',
+          k.spectrum.clicks.map((c) => `${fv(c.offsetHz, 'Hz')}: ${c.levelDbc.toFixed(0)} dBc`).join('; '),
+        ],
         ['Occupied bandwidth (99 %)', fv(k.spectrum.occupiedBandwidthHz, 'Hz')],
-        ['Necessary bandwidth Bn = B K', `${fv(k.necessaryFadingHz, 'Hz')} fading (K = 5), ${fv(k.necessaryNonFadingHz, 'Hz')} non-fading (K = 3); B = ${k.baud.toFixed(1)} Bd`],
-        ['First element after the relay', `${ms(k.firstElementHalfS)} at half amplitude, ${k.firstElementFullS > 0 ? ms(k.firstElementFullS) : 'never'} above 90 %`],
+        [
+          'Necessary bandwidth Bn = B K',
+          `${fv(k.necessaryFadingHz, 'Hz')} fading (K = 5), ${fv(k.necessaryNonFadingHz, 'Hz')} non-fading (K = 3); ` +
+            `B = ${k.baud.toFixed(1)} Bd`,
+        ],
+        [
+          'First element after the relay',
+          `${ms(k.firstElementHalfS)} at half amplitude, ` +
+            `${k.firstElementFullS > 0 ? ms(k.firstElementFullS) : 'never'} above 90 %`,
+        ],
       ]}
     />
     <figure class="plot">{raw(keyingPlotSvg(name, k))}</figure>
@@ -292,12 +459,18 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
       <h3>Harmonics at the antenna</h3>
       <p class="explain">
         Rule: {h.ruleTitle}
-        {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')}. Each
-        harmonic is a band from the PA's class (best to worst); compliance is judged on the worst end, and anything below{' '}
-        {CONSTRUCTION_FLOOR_DBC} dBc at the antenna is limited by construction. Filter rejection (relative to the
-        fundamental) {h.rows[0] && h.rows[0].sourceBasis !== '50 Ω'
-          ? <>from the PA's own source at each harmonic: <span data-source-basis>{h.rows[0].sourceBasis}</span>; the 50 Ω figure below it for comparison.</>
-          : 'between 50 Ω terminations.'}
+        {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required{' '}
+        {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')}. Each harmonic is a band from the PA's class (best to
+        worst); compliance is judged on the worst end, and anything below {CONSTRUCTION_FLOOR_DBC} dBc at the antenna is
+        limited by construction. Filter rejection (relative to the fundamental){' '}
+        {h.rows[0] && h.rows[0].sourceBasis !== '50 Ω' ? (
+          <>
+            from the PA's own source at each harmonic: <span data-source-basis>{h.rows[0].sourceBasis}</span>; the 50 Ω
+            figure below it for comparison.
+          </>
+        ) : (
+          'between 50 Ω terminations.'
+        )}
       </p>
       <table class="grid harmonics">
         <thead>
@@ -306,10 +479,18 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
             <th class="num">Frequency</th>
             <th class="num">At PA</th>
             <th class="num">Filter</th>
-            <th class="num">Filter,<br />worst tolerances</th>
+            <th class="num">
+              Filter,
+              <br />
+              worst tolerances
+            </th>
             <th class="num">Predicted</th>
             <th class="num">Margin</th>
-            <th class="num">Margin,<br />worst tolerances</th>
+            <th class="num">
+              Margin,
+              <br />
+              worst tolerances
+            </th>
             <th>Check</th>
           </tr>
         </thead>
@@ -318,16 +499,25 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
             <tr data-harmonic={x.n}>
               <td class="num">{x.n}</td>
               <td class="num">{fv(x.frequencyHz, 'Hz')}</td>
-              <td class="num">{band(x.paLevelBestDbc, x.paLevelDbc, false, false)}<span class="sub">{BASIS_WORDS[x.paLevelBasis]}</span></td>
+              <td class="num">
+                {band(x.paLevelBestDbc, x.paLevelDbc, false, false)}
+                <span class="sub">{BASIS_WORDS[x.paLevelBasis]}</span>
+              </td>
               <td class="num">
                 {fv(x.filterAttenuationDb, 'dB')}
-                {x.filterAttenuation50Db !== null && x.sourceBasis !== '50 Ω' ? <span class="sub">50 Ω: {fv(x.filterAttenuation50Db, 'dB')}</span> : null}
+                {x.filterAttenuation50Db !== null && x.sourceBasis !== '50 Ω' ? (
+                  <span class="sub">50 Ω: {fv(x.filterAttenuation50Db, 'dB')}</span>
+                ) : null}
               </td>
               <td class="num">{fv(x.worstFilterAttenuationDb, 'dB')}</td>
-              <td class="num">{band(x.predictedBestDbc, x.predictedDbc, x.bestLimitedByConstruction, x.limitedByConstruction)}</td>
+              <td class="num">
+                {band(x.predictedBestDbc, x.predictedDbc, x.bestLimitedByConstruction, x.limitedByConstruction)}
+              </td>
               <td class="num">{fv(x.marginDb, 'dB')}</td>
               <td class="num">{fv(x.worstMarginDb, 'dB')}</td>
-              <td><span class={sevClass(x.severity)}>{x.severity}</span></td>
+              <td>
+                <span class={sevClass(x.severity)}>{x.severity}</span>
+              </td>
             </tr>
           ))}
         </tbody>
@@ -346,13 +536,36 @@ const Exposure: FC<{ report: RfReport }> = ({ report }) => {
       <h3>RF exposure (far-field estimate)</h3>
       <KV
         rows={[
-          ['Time-averaged power', `${fv(e.averagePowerW, 'W')} from ${fv(e.peakPowerW, 'W')} key-down; EIRP ${fv(e.eirpW, 'W')}, ERP ${fv(e.erpW, 'W')}`],
-          ['Limits', `${e.limitsName} (source: ${sourceText(e.ruleSet === 'us-97-307' ? 'exposure.fcc-distance' : 'exposure.icnirp-distance')})`],
+          [
+            'Time-averaged power',
+            `${fv(e.averagePowerW, 'W')} from ${fv(e.peakPowerW, 'W')} key-down; EIRP ` +
+              `${fv(e.eirpW, 'W')}, ERP ${fv(e.erpW, 'W')}`,
+          ],
+          [
+            'Limits',
+            `${e.limitsName} (source: ` +
+              `${sourceText(e.ruleSet === 'us-97-307' ? 'exposure.fcc-distance' : 'exposure.icnirp-distance')})`,
+          ],
           [cap(e.generalLabel), `${fv(e.generalDistanceM, 'm')} (limit ${fv(e.limitGeneralWPerM2, 'W')}/m²)`],
           [cap(e.controlledLabel), `${fv(e.controlledDistanceM, 'm')} (limit ${fv(e.limitControlledWPerM2, 'W')}/m²)`],
-          ['Near-field boundary λ/2π', `${fv(e.nearFieldDistanceM, 'm')}${e.farFieldValid ? '' : ': the distances above lie inside it and are estimates only'}`],
+          [
+            'Near-field boundary λ/2π',
+            `${fv(e.nearFieldDistanceM, 'm')}${
+              e.farFieldValid ? '' : ': the distances above lie inside it and are estimates only'
+            }`,
+          ],
           ['Ground reflection', e.groundReflection ? 'included (factor 2.56)' : 'not included'],
-          ['US exemption (47 CFR 1.1307(b)(3)(i)(C))', e.ruleSet !== 'us-97-307' ? 'not part of the ITU / CEPT rule set' : e.exempt === null ? '—' : e.exempt ? `exempt for people at ${fv(e.nearFieldDistanceM, 'm')} or more (threshold ${fv(e.exemptionThresholdW, 'W')} ERP)` : `evaluate for people closer than ${fv(e.exemptBeyondM, 'm')}`],
+          [
+            'US exemption (47 CFR 1.1307(b)(3)(i)(C))',
+            e.ruleSet !== 'us-97-307'
+              ? 'not part of the ITU / CEPT rule set'
+              : e.exempt === null
+                ? '—'
+                : e.exempt
+                  ? `exempt for people at ${fv(e.nearFieldDistanceM, 'm')} or more (threshold ` +
+                    `${fv(e.exemptionThresholdW, 'W')} ERP)`
+                  : `evaluate for people closer than ${fv(e.exemptBeyondM, 'm')}`,
+          ],
         ]}
       />
       <p class="caution">{e.caution}</p>
@@ -373,7 +586,9 @@ const BASIS_WORDS: Record<HarmonicBasis, string> = {
   'clipped-at-swr': 'flat-topped at the supply, worst SWR load (equivalent level)',
 };
 
-/** "−62.0 to −38.5 dBc", "below −70 dBc to −41.0 dBc" (best end under the construction floor), or one number. */
+/**
+ * "−62.0 to −38.5 dBc", "below −70 dBc to −41.0 dBc" (best end under the construction floor), or one number.
+ */
 function band(best: number, worst: number, bestLimited: boolean, worstLimited: boolean): string {
   const one = (x: number) => (x <= MIN_DBC ? 'none (ideal)' : fv(x, 'dBc'));
   if (worstLimited) return 'limited by construction';
@@ -386,7 +601,8 @@ export const RfFindings: FC<{ findings: Finding[] }> = ({ findings }) => (
     <ul class="findings">
       {actionable(findings).map((f) => (
         <li data-rule={f.rule}>
-          <span class={sevClass(f.severity)}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message} <span class="sub">(Source: {sourceText(f.source)})</span>
+          <span class={sevClass(f.severity)}>{f.severity}</span> <strong>{f.subject}</strong>: {f.message}{' '}
+          <span class="sub">(Source: {sourceText(f.source)})</span>
         </li>
       ))}
     </ul>
@@ -415,7 +631,8 @@ export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
   <section class="card" id="rf-results">
     <h2>RF design</h2>
     <p class="summary-line">
-      {fv(report.frequencyHz, 'Hz', 5)}, {fv(report.outputPowerW, 'W')} at the output (target {fv(report.targetPowerW, 'W')})
+      {fv(report.frequencyHz, 'Hz', 5)}, {fv(report.outputPowerW, 'W')} at the output (target{' '}
+      {fv(report.targetPowerW, 'W')})
     </p>
     <RuleSetBlock ruleSet={report.ruleSet} />
     {report.inputErrors.length > 0 ? (
@@ -429,10 +646,14 @@ export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
       s.pa ? (
         <>
           <PaTable name={s.stageName} pa={s.pa} />
-          {s.network || s.choke ? <OutputNetworkTable name={s.stageName} n={s.network ?? null} c={s.choke ?? null} /> : null}
+          {s.network || s.choke ? (
+            <OutputNetworkTable name={s.stageName} n={s.network ?? null} c={s.choke ?? null} />
+          ) : null}
           <PaMagnetics s={s} />
         </>
-      ) : s.lpf ? <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} /> : s.relay ? (
+      ) : s.lpf ? (
+        <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} />
+      ) : s.relay ? (
         <>
           <RelayTable name={s.stageName} r={s.relay} />
           {s.keying ? <KeyingTable name={s.stageName} k={s.keying} /> : null}

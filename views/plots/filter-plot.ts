@@ -26,7 +26,9 @@ export function filterPlotData(report: RfReport, lpfStageId?: string): FilterPlo
   const rows = id === report.lpfStageId ? report.harmonics?.rows ?? [] : [];
   const il = a.atOperating.lossDb;
   return {
-    title: `${st.stageName}: ${d.response === 'chebyshev' ? `Chebyshev ${d.rippleDb} dB` : 'Butterworth'}, order ${d.order}`,
+    title: `${st.stageName}: ${
+      d.response === 'chebyshev' ? `Chebyshev ${d.rippleDb} dB` : 'Butterworth'
+    }, order ${d.order}`,
     sweep: a.sweep.map((p) => ({ frequencyHz: p.frequencyHz, s21Db: p.s21Db })),
     bandLowHz: a.bandLowHz,
     bandHighHz: a.bandHighHz,
@@ -42,7 +44,10 @@ export function filterPlotData(report: RfReport, lpfStageId?: string): FilterPlo
         worstS21Db: mc ? -mc.worstAttenuationDb : null,
       };
     }),
-    ruleLabel: report.harmonics ? `${report.harmonics.requiredDb.toFixed(0)} dB rule (${report.harmonics.rule === 'us-97-307' ? '47 CFR 97.307(d)' : 'ITU RR Appendix 3'})` : 'rule',
+    ruleLabel: report.harmonics
+      ? `${report.harmonics.requiredDb.toFixed(0)} dB rule ` +
+        `(${report.harmonics.rule === 'us-97-307' ? '47 CFR 97.307(d)' : 'ITU RR Appendix 3'})`
+      : 'rule',
   };
 }
 
@@ -60,19 +65,32 @@ export function renderFilterPlot(d: FilterPlotData, widthPx = 720, heightPx = 38
   const h = heightPx - m.t - m.b;
   const fs = d.sweep.map((p) => p.frequencyHz).filter((f) => f > 0);
   if (fs.length < 2) return '';
-  const f0 = Math.min(...fs), f1 = Math.max(...fs);
-  const lo = Math.log10(f0), hi = Math.log10(f1);
-  const values = [...d.sweep.map((p) => p.s21Db), ...d.harmonics.flatMap((x) => [x.limitS21Db ?? 0, x.worstS21Db ?? 0])];
+  const f0 = Math.min(...fs),
+    f1 = Math.max(...fs);
+  const lo = Math.log10(f0),
+    hi = Math.log10(f1);
+  const values = [
+    ...d.sweep.map((p) => p.s21Db),
+    ...d.harmonics.flatMap((x) => [x.limitS21Db ?? 0, x.worstS21Db ?? 0]),
+  ];
   const yMin = Math.max(-140, Math.min(-60, Math.floor(Math.min(...values) / 20) * 20));
   const x = (f: number) => m.l + ((Math.log10(f) - lo) / (hi - lo)) * w;
   const y = (db: number) => m.t + (Math.min(0, Math.max(yMin, db)) / yMin) * h;
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" class="plot filter-plot" viewBox="0 0 ${widthPx} ${heightPx}" font-family="sans-serif" role="img" aria-label="${esc(d.title)}: |S21| in dB against frequency">`);
+  out.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" class="plot filter-plot" viewBox="0 0 ` +
+      `${widthPx} ${heightPx}" font-family="sans-serif" role="img" aria-label="${esc(d.title)}: |S21| in dB against ` +
+      `frequency">`,
+  );
   out.push(`<title>${esc(d.title)}</title>`);
   out.push(`<text x="${m.l}" y="18" font-size="13" font-weight="600">${esc(d.title)}</text>`);
   // band shading
-  const bx0 = x(Math.max(f0, d.bandLowHz)), bx1 = x(Math.min(f1, d.bandHighHz));
-  out.push(`<rect class="band" x="${fmt(bx0)}" y="${m.t}" width="${fmt(Math.max(1, bx1 - bx0))}" height="${h}" fill="#cfe8d5" />`);
+  const bx0 = x(Math.max(f0, d.bandLowHz)),
+    bx1 = x(Math.min(f1, d.bandHighHz));
+  out.push(
+    `<rect class="band" x="${fmt(bx0)}" y="${m.t}" width="${fmt(Math.max(1, bx1 - bx0))}" height="` +
+      `${h}" fill="#cfe8d5" />`,
+  );
   // grid and y axis
   for (let db = 0; db >= yMin; db -= 20) {
     out.push(`<line x1="${m.l}" x2="${m.l + w}" y1="${fmt(y(db))}" y2="${fmt(y(db))}" stroke="#e3e7ea" />`);
@@ -88,11 +106,19 @@ export function renderFilterPlot(d: FilterPlotData, widthPx = 720, heightPx = 38
     }
   }
   out.push(`<rect x="${m.l}" y="${m.t}" width="${w}" height="${h}" fill="none" stroke="#555" />`);
-  out.push(`<text x="${m.l + w / 2}" y="${m.t + h + 32}" font-size="12" text-anchor="middle">Frequency (MHz, log scale)</text>`);
-  out.push(`<text transform="translate(14 ${m.t + h / 2}) rotate(-90)" font-size="12" text-anchor="middle">|S21| (dB)</text>`);
+  out.push(
+    `<text x="${m.l + w / 2}" y="${m.t + h + 32}" font-size="12" text-anchor="middle">Frequency (MHz, log ` +
+      `scale)</text>`,
+  );
+  out.push(
+    `<text transform="translate(14 ${m.t + h / 2}) rotate(-90)" font-size="12" text-anchor="middle">|S21| (dB)</text>`,
+  );
   // cutoff marker
   if (d.cutoffHz > f0 && d.cutoffHz < f1) {
-    out.push(`<line class="cutoff" x1="${fmt(x(d.cutoffHz))}" x2="${fmt(x(d.cutoffHz))}" y1="${m.t}" y2="${m.t + h}" stroke="#888" stroke-dasharray="2 3" />`);
+    out.push(
+      `<line class="cutoff" x1="${fmt(x(d.cutoffHz))}" x2="${fmt(x(d.cutoffHz))}" y1="${m.t}" y2="` +
+        `${m.t + h}" stroke="#888" stroke-dasharray="2 3" />`,
+    );
     out.push(`<text x="${fmt(x(d.cutoffHz) + 3)}" y="${m.t + 12}" font-size="10" fill="#555">fc</text>`);
   }
   // harmonic markers, limit line (step per harmonic), worst-case marks
@@ -100,20 +126,31 @@ export function renderFilterPlot(d: FilterPlotData, widthPx = 720, heightPx = 38
   for (const hm of d.harmonics) {
     if (hm.frequencyHz < f0 || hm.frequencyHz > f1) continue;
     const hx = x(hm.frequencyHz);
-    out.push(`<line class="harmonic" x1="${fmt(hx)}" x2="${fmt(hx)}" y1="${m.t}" y2="${m.t + h}" stroke="#7a5cc7" stroke-dasharray="5 4" />`);
+    out.push(
+      `<line class="harmonic" x1="${fmt(hx)}" x2="${fmt(hx)}" y1="${m.t}" y2="${m.t + h}" stroke="#7a5cc7" ` +
+        `stroke-dasharray="5 4" />`,
+    );
     out.push(`<text x="${fmt(hx)}" y="${m.t - 4}" font-size="11" text-anchor="middle" fill="#7a5cc7">${hm.n}f</text>`);
     if (hm.limitS21Db !== null) {
-      const xa = x(Math.max(f0, hm.frequencyHz * (1 - 0.5 / hm.n))), xb = x(Math.min(f1, hm.frequencyHz * (1 + 0.5 / hm.n)));
+      const xa = x(Math.max(f0, hm.frequencyHz * (1 - 0.5 / hm.n))),
+        xb = x(Math.min(f1, hm.frequencyHz * (1 + 0.5 / hm.n)));
       limitPts.push(`${fmt(xa)},${fmt(y(hm.limitS21Db))} ${fmt(xb)},${fmt(y(hm.limitS21Db))}`);
     }
     if (hm.worstS21Db !== null) {
       const wy = y(hm.worstS21Db);
-      out.push(`<path class="mc-worst" d="M${fmt(hx - 5)} ${fmt(wy - 5)} L${fmt(hx + 5)} ${fmt(wy - 5)} L${fmt(hx)} ${fmt(wy + 4)} Z" fill="#d9822b" />`);
+      out.push(
+        `<path class="mc-worst" d="M${fmt(hx - 5)} ${fmt(wy - 5)}` +
+          ` L${fmt(hx + 5)} ${fmt(wy - 5)} L${fmt(hx)} ${fmt(wy + 4)} Z" fill="#d9822b" />`,
+      );
     }
   }
-  if (limitPts.length) out.push(`<polyline class="limit" points="${limitPts.join(' ')}" fill="none" stroke="#c0392b" stroke-width="2" />`);
+  if (limitPts.length)
+    out.push(`<polyline class="limit" points="${limitPts.join(' ')}" fill="none" stroke="#c0392b" stroke-width="2" />`);
   // response curve
-  const pts = d.sweep.filter((p) => p.frequencyHz > 0).map((p) => `${fmt(x(p.frequencyHz))},${fmt(y(p.s21Db))}`).join(' ');
+  const pts = d.sweep
+    .filter((p) => p.frequencyHz > 0)
+    .map((p) => `${fmt(x(p.frequencyHz))},${fmt(y(p.s21Db))}`)
+    .join(' ');
   out.push(`<polyline class="response" points="${pts}" fill="none" stroke="#1f5f99" stroke-width="2" />`);
   // legend
   const ly = heightPx - 14;
@@ -125,7 +162,9 @@ export function renderFilterPlot(d: FilterPlotData, widthPx = 720, heightPx = 38
   ];
   let lx = m.l;
   for (const [sym, label] of legend) {
-    out.push(`<g transform="translate(${fmt(lx)} ${ly})">${sym}<text x="22" y="4" font-size="11">${esc(label)}</text></g>`);
+    out.push(
+      `<g transform="translate(${fmt(lx)} ${ly})">${sym}<text x="22" y="4" font-size="11">${esc(label)}</text></g>`,
+    );
     lx += 30 + label.length * 5.6;
   }
   out.push('</svg>');

@@ -18,8 +18,13 @@ export function keyingPlotSvg(title: string, k: KeyingResult, widthPx = 720, hei
   const x = (f: number) => m.l + (f / fMax) * w;
   const y = (db: number) => m.t + (Math.min(0, Math.max(yMin, db)) / yMin) * h;
   const out: string[] = [];
-  const label = `${title}: keyed spectrum at ${s.wpm} WPM, rise ${(k.riseS * 1e3).toFixed(1)} ms, fall ${(k.fallS * 1e3).toFixed(1)} ms`;
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" class="plot keying-plot" viewBox="0 0 ${widthPx} ${heightPx}" font-family="sans-serif" role="img" aria-label="${esc(label)}: level in dBc against offset from the carrier">`);
+  const label = `${title}: keyed spectrum at ${s.wpm} WPM, rise ${(k.riseS * 1e3).toFixed(1)} ms, fall ` +
+    `${(k.fallS * 1e3).toFixed(1)} ms`;
+  out.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" class="plot keying-plot" viewBox="0 0 ` +
+      `${widthPx} ${heightPx}" font-family="sans-serif" role="img" aria-label="${esc(label)}: level in dBc against ` +
+      `offset from the carrier">`,
+  );
   out.push(`<title>${esc(label)}</title>`);
   out.push(`<text x="${m.l}" y="18" font-size="13" font-weight="600">${esc(label)}</text>`);
   const nb = Math.min(fMax, k.necessaryFadingHz / 2);
@@ -33,8 +38,14 @@ export function keyingPlotSvg(title: string, k: KeyingResult, widthPx = 720, hei
     out.push(`<text x="${fmt(x(f))}" y="${m.t + h + 15}" font-size="11" text-anchor="middle">${f}</text>`);
   }
   out.push(`<rect x="${m.l}" y="${m.t}" width="${w}" height="${h}" fill="none" stroke="#555" />`);
-  out.push(`<text x="${m.l + w / 2}" y="${m.t + h + 32}" font-size="12" text-anchor="middle">Offset from the carrier (Hz)</text>`);
-  out.push(`<text transform="translate(14 ${m.t + h / 2}) rotate(-90)" font-size="12" text-anchor="middle">Line level (dBc)</text>`);
+  out.push(
+    `<text x="${m.l + w / 2}" y="${m.t + h + 32}" font-size="12" text-anchor="middle">Offset from the carrier ` +
+      `(Hz)</text>`,
+  );
+  out.push(
+    `<text transform="translate(14 ${m.t + h / 2}) rotate(-90)" font-size="12" text-anchor="middle">Line level ` +
+      `(dBc)</text>`,
+  );
   // spectral lines as stems from the floor of the plot
   const stems = s.offsetsHz
     .map((f, i) => (s.levelsDbc[i] > yMin ? `M${fmt(x(f))} ${fmt(y(yMin))}V${fmt(y(s.levelsDbc[i]))}` : ''))
@@ -42,10 +53,17 @@ export function keyingPlotSvg(title: string, k: KeyingResult, widthPx = 720, hei
     .join('');
   out.push(`<path class="lines" d="${stems}" stroke="#1f5f99" stroke-width="1" fill="none" />`);
   const ob = k.spectrum.occupiedBandwidthHz / 2;
-  if (ob <= fMax) out.push(`<line class="occupied" x1="${fmt(x(ob))}" x2="${fmt(x(ob))}" y1="${m.t}" y2="${m.t + h}" stroke="#7a5cc7" stroke-dasharray="5 4" />`);
+  if (ob <= fMax)
+    out.push(
+      `<line class="occupied" x1="${fmt(x(ob))}" x2="${fmt(x(ob))}" y1="${m.t}" y2="${m.t + h}" stroke="#7a5cc7" ` +
+        `stroke-dasharray="5 4" />`,
+    );
   for (const c of s.clicks) {
     const cy = y(c.levelDbc);
-    out.push(`<path class="click" d="M${fmt(x(c.offsetHz) - 5)} ${fmt(cy - 5)} L${fmt(x(c.offsetHz) + 5)} ${fmt(cy - 5)} L${fmt(x(c.offsetHz))} ${fmt(cy + 4)} Z" fill="#d9822b" />`);
+    out.push(
+      `<path class="click" d="M${fmt(x(c.offsetHz) - 5)} ${fmt(cy - 5)}` +
+        ` L${fmt(x(c.offsetHz) + 5)} ${fmt(cy - 5)} L${fmt(x(c.offsetHz))} ${fmt(cy + 4)} Z" fill="#d9822b" />`,
+    );
   }
   const ly = heightPx - 14;
   const legend: [string, string][] = [
@@ -56,7 +74,9 @@ export function keyingPlotSvg(title: string, k: KeyingResult, widthPx = 720, hei
   ];
   let lx = m.l;
   for (const [sym, text] of legend) {
-    out.push(`<g transform="translate(${fmt(lx)} ${ly})">${sym}<text x="22" y="4" font-size="11">${esc(text)}</text></g>`);
+    out.push(
+      `<g transform="translate(${fmt(lx)} ${ly})">${sym}<text x="22" y="4" font-size="11">${esc(text)}</text></g>`,
+    );
     lx += 30 + text.length * 5.6;
   }
   out.push('</svg>');

@@ -18,7 +18,9 @@ const f1 = (x: number) => (Math.round(x * 10) / 10).toString();
 const tidy = (x: number) => (Math.abs(x) >= 100 ? x.toFixed(0) : Number(x.toPrecision(3)).toString());
 
 /** The margin series of a sweep: one per metric marked as a margin, in the order the metrics come. */
-export function marginSeries(r: SweepResult): { key: string; label: string; unit: string; values: (number | null)[] }[] {
+export function marginSeries(
+  r: SweepResult,
+): { key: string; label: string; unit: string; values: (number | null)[] }[] {
   const first = r.points[0]?.metrics ?? [];
   return first
     .filter((m) => m.margin)
@@ -36,8 +38,10 @@ export function sweepPlotSvg(r: SweepResult, display: DisplayUnit): string {
   const unit = display.symbol ? ` ${display.symbol}` : '';
   const h = Math.max(1, series.length) * PANEL_H + 4;
   const out = [
-    `<svg xmlns="http://www.w3.org/2000/svg" class="plot sweep" viewBox="0 0 ${W} ${h}" role="img" aria-labelledby="sw-title" ` +
-      `font-family="sans-serif" font-size="11"><title id="sw-title">${esc(`Margins against ${r.label.toLowerCase()} of ${r.target.name}`)}` +
+    `<svg xmlns="http://www.w3.org/2000/svg" class="plot sweep" viewBox="0 0 ${W} ${h}" role="img" ` +
+      `aria-labelledby="sw-title" ` +
+      `font-family="sans-serif" font-size="11"><title ` +
+      `id="sw-title">${esc(`Margins against ${r.label.toLowerCase()} of ${r.target.name}`)}` +
       `: circles pass, crosses fail; the line at 0 is the limit</title>`,
   ];
   if (!series.length) {
@@ -61,12 +65,18 @@ export function sweepPlotSvg(r: SweepResult, display: DisplayUnit): string {
     out.push(`<text x="0" y="${top - 8}" font-weight="bold">${esc(name)} (${esc(s.unit)})</text>`);
     out.push(`<rect x="${LEFT}" y="${top}" width="${plotW}" height="${plotH}" fill="none" stroke="#c8d0d6"/>`);
     // the limit: margin 0
-    out.push(`<line x1="${LEFT}" y1="${f1(y(0))}" x2="${LEFT + plotW}" y2="${f1(y(0))}" stroke="#1d2327" stroke-width="1.5"/>`);
+    out.push(
+      `<line x1="${LEFT}" y1="${f1(y(0))}" x2="${LEFT + plotW}" y2="${f1(y(0))}" stroke="#1d2327" stroke-width="1.5"/>`,
+    );
     out.push(`<text x="${LEFT + plotW + 6}" y="${f1(y(0) + 4)}">limit (0 ${esc(s.unit)})</text>`);
-    for (const v of [yHi - pad, yLo + pad]) out.push(`<text x="${LEFT - 6}" y="${f1(y(v) + 4)}" text-anchor="end">${tidy(v)}</text>`);
+    for (const v of [yHi - pad, yLo + pad])
+      out.push(`<text x="${LEFT - 6}" y="${f1(y(v) + 4)}" text-anchor="end">${tidy(v)}</text>`);
     // the project as it stands
     if (nowX >= xLo && nowX <= xHi) {
-      out.push(`<line x1="${f1(x(nowX))}" y1="${top}" x2="${f1(x(nowX))}" y2="${top + plotH}" stroke="#5b6770" stroke-dasharray="4 3"/>`);
+      out.push(
+        `<line x1="${f1(x(nowX))}" y1="${top}" x2="${f1(x(nowX))}" y2="${top + plotH}" stroke="#5b6770" ` +
+          `stroke-dasharray="4 3"/>`,
+      );
       out.push(`<text x="${f1(x(nowX) + 3)}" y="${top + plotH - 4}" fill="#5b6770">now</text>`);
     }
     // the line through computed points (a gap where a point could not be computed)
@@ -79,22 +89,35 @@ export function sweepPlotSvg(r: SweepResult, display: DisplayUnit): string {
     s.values.forEach((v, j) => {
       if (v === null) return;
       const [px, py] = [x(xs[j]), y(v)];
-      if (v >= 0) out.push(`<circle cx="${f1(px)}" cy="${f1(py)}" r="4" fill="#1f5fa8"><title>${tidy(xs[j])}${esc(unit)}: ${tidy(v)} ${esc(s.unit)}, passes</title></circle>`);
+      if (v >= 0)
+        out.push(
+          `<circle cx="${f1(px)}" cy="${f1(py)}" r="4" fill="#1f5fa8"><title>` +
+            `${tidy(xs[j])}${esc(unit)}: ${tidy(v)} ${esc(s.unit)}, passes</title></circle>`,
+        );
       else
         out.push(
-          `<path d="M${f1(px - 4)},${f1(py - 4)}L${f1(px + 4)},${f1(py + 4)}M${f1(px - 4)},${f1(py + 4)}L${f1(px + 4)},${f1(py - 4)}" ` +
-            `stroke="#b3261e" stroke-width="2.5"><title>${tidy(xs[j])}${esc(unit)}: ${tidy(v)} ${esc(s.unit)}, fails</title></path>`,
+          `<path d="M${f1(px - 4)},${f1(py - 4)}L${f1(px + 4)},${f1(py + 4)}` +
+            `M${f1(px - 4)},${f1(py + 4)}L${f1(px + 4)},${f1(py - 4)}" ` +
+            `stroke="#b3261e" stroke-width="2.5"><title>${tidy(xs[j])}${esc(unit)}` +
+            `: ${tidy(v)} ${esc(s.unit)}, fails</title></path>`,
         );
     });
     const last = vals.length ? vals[vals.length - 1] : null;
     const worst = vals.length ? Math.min(...vals) : null;
     if (worst !== null)
-      out.push(`<text x="${LEFT + plotW + 6}" y="${top + 12}">${worst < 0 ? '✗ fails at some points' : '✓ passes throughout'}</text>`);
-    if (last !== null) out.push(`<text x="${LEFT + plotW + 6}" y="${top + 26}">last: ${tidy(last)} ${esc(s.unit)}</text>`);
+      out.push(
+        `<text x="${LEFT + plotW + 6}" y="${top + 12}` +
+          `">${worst < 0 ? '✗ fails at some points' : '✓ passes throughout'}</text>`,
+      );
+    if (last !== null)
+      out.push(`<text x="${LEFT + plotW + 6}" y="${top + 26}">last: ${tidy(last)} ${esc(s.unit)}</text>`);
     // x axis: the ends and the unit
     out.push(`<text x="${LEFT}" y="${top + plotH + 14}" text-anchor="middle">${tidy(xLo)}</text>`);
     out.push(`<text x="${LEFT + plotW}" y="${top + plotH + 14}" text-anchor="middle">${tidy(xHi)}</text>`);
-    out.push(`<text x="${LEFT + plotW / 2}" y="${top + plotH + 14}" text-anchor="middle">${esc(r.label)}${esc(unit ? ` (${display.symbol})` : '')}</text>`);
+    out.push(
+      `<text x="${LEFT + plotW / 2}" y="${top + plotH + 14}" text-anchor="middle">` +
+        `${esc(r.label)}${esc(unit ? ` (${display.symbol})` : '')}</text>`,
+    );
   });
   out.push('</svg>');
   return out.join('');
