@@ -153,6 +153,8 @@ const parts: Part[] = [
   { id: 'p-bleed-05', description: 'Resistor 2.2 kΩ 0.5 W metal film', category: 'resistor', ratings: { resistanceOhm: 2200, powerW: 0.5 }, offers: [offer('o36', S1, 'NC-R05-2K2', 'USD', [[1, 12], [100, 6]], 1, 1)] },
   { id: 'p-hs-pa-8', description: 'Finned heatsink 50 mm, 8 °C/W', category: 'heatsink', ratings: { thetaSaKPerW: 8 }, offers: [offer('o37', S2, 'HR-HS80-50', 'USD', [[1, 215], [10, 180]])] },
   { id: 'p-trafo-100', description: 'Mains transformer 120 V, secondaries 16 V 1.5 A + 20 V 3.5 A, laminated, 100 VA', category: 'transformer', ratings: { va: 100, sec1V: 16, sec1A: 1.5, sec2V: 20, sec2A: 3.5 }, offers: [offer('o38', S1, 'NC-TR-10016', 'USD', [[1, 4690], [5, 4250], [10, 3980]])] },
+  // the candidate for a bigger final (e.g. 40 W from the same rail): its 20 V winding carries 6 A
+  { id: 'p-trafo-160', description: 'Mains transformer 120 V, secondaries 16 V 1.5 A + 20 V 6 A, laminated, 160 VA', category: 'transformer', ratings: { va: 160, sec1V: 16, sec1A: 1.5, sec2V: 20, sec2A: 6 }, offers: [offer('o39', S1, 'NC-TR-16016', 'USD', [[1, 6490], [5, 5890], [10, 5520]])] },
   { id: 'p-cord', description: 'Mains cord with IEC plug, 3-core, earthed', category: 'mains', ratings: {}, offers: [] },
 ];
 
@@ -162,9 +164,9 @@ const line = (id: string, stageId: string | null, partId: string, qty: number, r
 const bom: BomLine[] = [
   line('b1', null, 'p-inlet', 1, 'J1', 'Earth pin bonded to the chassis'),
   line('b2', null, 'p-cord', 1, 'W1', 'Buy locally to the national plug standard'),
-  line('b3', null, 'p-fuse', 3, 'F1–F3', 'Primary and two rail fuses; values from the supply page', 'fuses'),
-  line('b4', null, 'p-fuseh', 2, 'F2, F3'),
-  line('b5', null, 'p-trafo', 1, 'T1', '', 'transformer:tr-main'),
+  line('b3', null, 'p-fuse', 4, 'F1–F4', 'Primary, two rail fuses and the 20 V winding fuse; values from the supply page', 'fuses'),
+  line('b4', null, 'p-fuseh', 3, 'F2–F4'),
+  line('b5', null, 'p-trafo-100', 1, 'T1', '', 'transformer:tr-main'),
   line('b6', null, 'p-bridge', 2, 'BR1, BR2'),
   line('b7', null, 'p-c4700', 1, 'C1', '', 'reservoir:rail-raw'),
   line('b8', null, 'p-c6800', 1, 'C2', '', 'reservoir:rail-pa'),
@@ -208,8 +210,11 @@ export const club30m: Project = {
         construction: 'laminated',
         secondaryToleranceFraction: 0.05,
         windings: [
-          { id: 'w-16', name: '16 V winding', ratedVrms: 16, ratedA: 1, regulationFraction: 0.1, resistanceOhm: null },
-          { id: 'w-20', name: '20 V winding', ratedVrms: 20, ratedA: 2.5, regulationFraction: 0.08, resistanceOhm: null },
+          // the 100 VA part (p-trafo-100): the supply carries the final's saturated drive, about 2 A key-down; the 70 VA
+          // part's 2.5 A winding sagged the PA rail below 20 V at low mains and, through the shared primary, put the
+          // 13.8 V regulator into dropout at the tolerance corner; a tune-up carrier draws about 4.2 A RMS from 3.5 A
+          { id: 'w-16', name: '16 V winding', ratedVrms: 16, ratedA: 1.5, regulationFraction: 0.1, resistanceOhm: null },
+          { id: 'w-20', name: '20 V winding', ratedVrms: 20, ratedA: 3.5, regulationFraction: 0.08, resistanceOhm: null },
         ],
       },
     ],
@@ -236,8 +241,12 @@ export const club30m: Project = {
         bleederOhm: null,
         bleederRatedW: null,
       },
-      // invented: below 20 V the final falls well short of its 20 W (its output goes as (V - Vsat)²)
-      { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 2.5, minimumV: 20, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: 1 },
+      // invented: below 20 V the final falls well short of its 20 W (its output goes as (V - Vsat)²).
+      // Rail fuse T4 A: about 2.3 A key-down at high mains (saturated drive) x 1.5, the next IEC 60127 rating up.
+      // Winding fuse T6.3 A: about 4.2 A RMS key-down in the winding x 1.25; the 1.6 A primary fuse cannot clear this
+      // winding's shorted reservoir within 5 s (about 3.8 x its rating on the primary), the winding fuse does (sheet 3).
+      // The 16 V winding is left without one: the page shows what that costs (a fail), the lesson of this demo.
+      { kind: 'rectified', id: 'rail-pa', name: 'PA rail (unregulated, ~24 V)', windingId: 'w-20', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0068, esrOhm: 0.03, bleederOhm: 2200, capacitorRatedV: 50, capacitorRippleA: 3.6, ripplePpTargetV: 2.5, marginV: 0, fuseA: 4, minimumV: 20, windingFuseA: 6.3, windingFuseSheet: 'T3', bleederRatedW: 1 },
     ],
     primaryFuseA: null,
     enclosureAreaM2: null,

@@ -1,5 +1,5 @@
 // The club demo in a real browser: with the PA's turns ratio designed for the target, raising the target power moves
-// the transformer requirement on the parts list, flags the bound 70 VA transformer (its 20 V winding is rated 2.5 A),
+// the transformer requirement on the parts list, flags the bound 100 VA transformer (its 20 V winding is rated 3.5 A),
 // and binding the candidate it offers changes the cost. No expected number comes from this program: the test checks
 // that the requirement text changes, the state goes from ok to fail and back, and the total differs.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -52,7 +52,7 @@ describe.skipIf(!hasChromium)('design roles follow the design in the browser', (
     expect(await requirement()).not.toBe(reqAt20);
     await page.screenshot({ path: artifactPath('bom-roles-flagged.png'), fullPage: true });
     // the larger transformer is offered; using it clears the flag and the cost follows
-    const use = page.locator(`${ROLE} [data-candidate="p-trafo-100"] button`);
+    const use = page.locator(`${ROLE} [data-candidate="p-trafo-160"] button`);
     await Promise.all([page.waitForResponse((r) => r.url().endsWith('/bom/roles/bind')), use.click()]);
     await expect.poll(state).toBe('ok');
     expect(await total()).not.toBe(totalBefore);

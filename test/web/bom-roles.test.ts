@@ -28,11 +28,11 @@ describe('parts the design needs', () => {
     expect(roles.filter((s) => s.state !== 'ok').map((s) => [s.role.id, s.state])).toEqual([
       ['fuses', 'caution'], ['bleeders', 'caution'], ['lpf-capacitors:st-lpf', 'caution'],
     ]);
-    expect(roles.find((s) => s.role.id === 'fuses')!.problems).toEqual([expect.stringMatching(/^The line F1–F3 \(Fuse .*\) does not state rating, so it cannot be checked/)]);
+    expect(roles.find((s) => s.role.id === 'fuses')!.problems).toEqual([expect.stringMatching(/^The line F1–F4 \(Fuse .*\) does not state rating, so it cannot be checked/)]);
     expect(html).toContain('does not state capacitance, so it cannot be checked');
     expect(html).toMatch(/data-role="bleeders"[\s\S]*?data-candidate="p-bleed"/);
     // each candidate with its ratings by name and unit, never the stored keys
-    expect(html).toMatch(/data-candidate="p-trafo-100"[^>]*>[^<]*<span class="sub"> \(VA rating 100 VA; secondary 1 voltage \(RMS\) 16 V;/);
+    expect(html).toMatch(/data-candidate="p-trafo-160"[^>]*>[^<]*<span class="sub"> \(VA rating 160 VA; secondary 1 voltage \(RMS\) 16 V;/);
     expect(html).not.toMatch(/role-candidates[\s\S]*?sec1V/);
   });
 

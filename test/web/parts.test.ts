@@ -112,7 +112,7 @@ describe('parts catalog page', () => {
   it('refuses to delete a part on the parts list, naming the lines', async () => {
     const before = await stored();
     const confirm = await (await t.app.request(`http://localhost/projects/${ID}/parts/p-fuse/delete`)).text();
-    expect(confirm).toContain('parts-list line “F1–F3” in General, 3 per rig');
+    expect(confirm).toContain('parts-list line “F1–F4” in General, 4 per rig');
     expect(confirm).not.toContain('Yes, delete');
     const res = await post(`/projects/${ID}/parts/p-fuse/delete`, { version: String(before.version) });
     expect(res.status).toBe(422);

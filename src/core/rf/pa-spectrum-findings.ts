@@ -49,17 +49,19 @@ const a2 = (x: number) => `${x.toFixed(2)} A`;
 export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext): Finding[] {
   const base = { subject: c.subject, limit: null } as const;
   const f: Finding[] = [];
-  const budget = `the supply budget carries its ${a2(c.band.designCurrentA)} key-down (RF part)`;
-  // Common practice, no published source: 5 % more current than budgeted is worth saying
+  // the supply budget carries the band's most current (pa.ts), the same waveform that sets the worst harmonics
+  const budget = `the supply budget carries the band's most, ${a2(c.band.bandMaxCurrentA)} key-down (RF part)`;
+  // Common practice, no published source: 5 % more current than at the design drive is worth saying
   if (c.band.bandMaxCurrentA > c.band.designCurrentA * 1.05) {
     const what = w.model === 'cosine-pulse' ? 'Driven into hard saturation (the worst end of the harmonic bands)'
       : w.model === 'class-e-simulated' ? 'With a low loaded Q of the series network (the worst end of the harmonic bands)'
         : 'At the worst end of the harmonic bands';
     f.push({ ...base, limit: c.band.designCurrentA, severity: 'caution', rule: 'pa.saturation-current', value: c.band.bandMaxCurrentA, unit: 'A', source: 'pa.waveform-dc',
       message: `${what} the stage draws up to ${a2(c.band.bandMaxCurrentA)} key-down (RF part) and gives up to ` +
-        `${w1(c.band.bandMaxOutputW)}, against the ${a2(c.band.designCurrentA)} and ${w1(c.designOutputW)} of its design ` +
-        'point that the supply budget carries: keep the drive at the design point, or size the supply and its fuse for ' +
-        'the higher current.' });
+        `${w1(c.band.bandMaxOutputW)}; at its design drive it draws ${a2(c.band.designCurrentA)} for ` +
+        `${w1(c.designOutputW)}. The supply budget carries the higher ${a2(c.band.bandMaxCurrentA)} (the supply page ` +
+        'sizes the rail, its fuses and the transformer for it); drive the stage no harder than its design point ' +
+        'needs: the extra power comes with the worst harmonics and more heat.' });
   }
   if (w.model === 'cosine-pulse') {
     f.push({ ...base, severity: 'ok', rule: 'pa.waveform', value: c.band.bandMaxOutputW, unit: 'W', source: 'pa.waveform-pulse',

@@ -58,8 +58,8 @@ export interface PaResult {
   /** DC input power key-down (RF part only), W. */
   dcInputW: number;
   /**
-   * Key-down DC current including bias idle current, A: the design waveform's (pa-spectrum), what the supply budget
-   * carries; the band's most (hard saturation) is waveform.bandMaxCurrentA.
+   * Key-down DC current including bias idle current, A: the band's most (hard saturation, pa-spectrum), what the
+   * supply budget carries; the design drive's is waveform.designCurrentA (plus the bias).
    */
   keyDownCurrentA: number;
   /** Key-down DC current into the worst load of the SWR circle (with bias), A; null at SWR 1 or when refused. */
@@ -191,9 +191,9 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const efficiency = Math.min(efficiencyAsked, ideal);
   const band = bandFigures(wave, op.outputW, railV, efficiency);
   const dcInputW = op.outputW / efficiency;
-  // the supply carries the design waveform's current; the band's most (hard saturation, where the harmonics are
-  // judged) is shown beside it with a caution when it is higher (waveformFindings)
-  const keyDownCurrentA = band.designCurrentA + pa.biasIdleMaxA;
+  // one waveform for power, current and harmonics: the supply carries the band's most current (hard saturation, the
+  // end where the harmonics are judged), the design drive's is shown beside it (waveformFindings)
+  const keyDownCurrentA = band.bandMaxCurrentA + pa.biasIdleMaxA;
   // Device stress and heating are judged at their own worst corners, not at the operating point: the drains swing
   // to k x Vdd at the highest rail voltage (high mains, reservoir charged with the PA unkeyed, or a full battery),
   // and the heat is largest at high mains key-down. Common practice, no published source (worst-case design).
@@ -262,7 +262,7 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const swrCurrent = swrKeyDownCurrent(swr, pa.biasIdleMaxA * hotRailV, hotDcW, band.designCurrentA, pa.biasIdleMaxA);
   if (swrCurrent && swrCurrent.currentA > keyDownCurrentA * 1.001) {
     findings.push({ severity: 'caution', rule: 'pa.swr-current', subject, value: swrCurrent.currentA, limit: keyDownCurrentA, unit: 'A', source: 'pa.waveform-dc',
-      message: `Into the worst load of SWR ${swr.swr} (${describeLoad(swrCurrent.at)}) the key-down current rises to ${swrCurrent.currentA.toFixed(2)} A, above the ${keyDownCurrentA.toFixed(2)} A the supply budget carries for the matched load; size the supply and its fuse for it, or fold the drive back at high SWR.` });
+      message: `Into the worst load of SWR ${swr.swr} (${describeLoad(swrCurrent.at)}) the key-down current at the design drive rises to ${swrCurrent.currentA.toFixed(2)} A, above the ${keyDownCurrentA.toFixed(2)} A the supply budget carries (matched load, saturated drive); size the supply and its fuse for it, or fold the drive back at high SWR.` });
   }
   const clamp = drainClamp(pa.drainClampV, swr, {
     peakV: peakDrainV, peakA: opHot.peakDeviceA, supplyV: maxRailV, dcInputW: hotDcW + pa.biasIdleMaxA * hotRailV,

@@ -8,7 +8,7 @@ export type TemplateKey = (typeof TEMPLATE_KEYS)[number];
 export const TEMPLATE_INFO: Record<TemplateKey, { label: string; summary: string; mains: boolean }> = {
   'mains-two-rail': {
     label: 'Mains two-rail CW transceiver',
-    summary: 'Transformer with two windings: a regulated 13.8 V signal rail and an unregulated ~24 V rail for a ' +
+    summary: 'Transformer with two windings: a regulated 13.8 V signal rail and an unregulated ~26 V rail for a ' +
       'push-pull final; receiver, VXO, driver, final, low-pass filter, T/R relay, keyer (10–25 W)',
     mains: true,
   },

@@ -39,16 +39,16 @@ export function starterParts(crystalHz: number): Record<string, Part> {
     part('tp-fuse', 'Fuse 5 × 20 mm, time-lag (T), 250 V, rating per supply page', 'fuse', { type: 'T' }, [
       offer(A, 'MR-F520T', [[10, 38], [100, 24]], 10),
     ]),
-    part('tp-trafo-2', 'Mains transformer, two secondaries (16 V 1 A + 20 V 2.5 A), laminated, 70 VA', 'transformer',
-      { va: 70, sec1V: 16, sec1A: 1, sec2V: 20, sec2A: 2.5 }, [
-      offer(A, 'MR-TR2-70', [[1, 3390], [10, 2850]]),
-      offer(B, 'EG-4470', [[1, 3550]]),
+    part('tp-trafo-2', 'Mains transformer, two secondaries (16 V 1 A + 22 V 3.5 A), laminated, 100 VA', 'transformer',
+      { va: 100, sec1V: 16, sec1A: 1, sec2V: 22, sec2A: 3.5 }, [
+      offer(A, 'MR-TR2-100', [[1, 4490], [10, 3850]]),
+      offer(B, 'EG-4510', [[1, 4690]]),
     ]),
     part('tp-trafo-1', 'Mains transformer, one secondary 17 V 2 A, laminated, 35 VA', 'transformer', { va: 35, sec1V: 17, sec1A: 2 }, [
       offer(A, 'MR-TR1-30', [[1, 1990], [10, 1690]]),
     ]),
-    part('tp-trafo-pa', 'Mains transformer, one secondary 20 V 3 A, laminated, 60 VA', 'transformer', { va: 60, sec1V: 20, sec1A: 3 }, [
-      offer(B, 'EG-4460', [[1, 2990], [10, 2590]]),
+    part('tp-trafo-pa', 'Mains transformer, one secondary 22 V 3.5 A, laminated, 80 VA', 'transformer', { va: 80, sec1V: 22, sec1A: 3.5 }, [
+      offer(B, 'EG-4480', [[1, 3590], [10, 3150]]),
     ]),
     part('tp-bridge', 'Bridge rectifier 4 A 200 V, surge 150 A', 'rectifier', { ratedA: 4, vrrmV: 200, ifsmA: 150 }, [
       offer(A, 'MR-BR4', [[1, 85], [10, 69]]),
@@ -58,8 +58,8 @@ export function starterParts(crystalHz: number): Record<string, Part> {
       { capacitanceF: 0.0047, voltageV: 35, rippleA: 2.4 }, [offer(A, 'MR-E4735', [[1, 210], [10, 178]])]),
     part('tp-c6800', 'Electrolytic capacitor 6800 µF 50 V, 105 °C, ripple 3.6 A', 'capacitor-reservoir',
       { capacitanceF: 0.0068, voltageV: 50, rippleA: 3.6 }, [offer(A, 'MR-E6850', [[1, 375], [10, 325]])]),
-    part('tp-bleed', 'Resistor 2.2 kΩ 1 W metal film (bleeder)', 'resistor', { resistanceOhm: 2200, powerW: 1 }, [
-      offer(A, 'MR-R1W-2K2', [[1, 16], [100, 8]]),
+    part('tp-bleed', 'Resistor 2.2 kΩ 2 W metal film (bleeder)', 'resistor', { resistanceOhm: 2200, powerW: 2 }, [
+      offer(A, 'MR-R2W-2K2', [[1, 24], [100, 12]]),
     ]),
     part('tp-reg', 'Adjustable positive linear regulator 1.5 A, TO-220', 'regulator', { dropoutV: 2.5, maxCurrentA: 1.5, thetaJcKPerW: 5 }, [
       offer(A, 'MR-VR15', [[1, 65], [10, 50]]),

@@ -55,7 +55,8 @@ const rectified = (id: string, name: string, windingId: string, reservoirF: numb
   minimumV,
   windingFuseA,
   windingFuseSheet: 'T3',
-  bleederRatedW: 1,
+  // 2 W: the 22 V windings' no-load peak (about 35 V at high mains) puts about 0.56 W in 2.2 kΩ, over half of 1 W
+  bleederRatedW: 2,
 });
 
 /** An adjustable linear regulator set by 240 Ω / R2 (Vout = 1.25 V (1 + R2/R1) + Iadj R2) on a 4.5 °C/W heatsink. */
@@ -113,18 +114,21 @@ const PUSH_PULL_LINES: StarterLine[] = [
 ];
 
 function mainsTwoRail(bandName: string, targetPowerW: number): StationData {
-  // typical key-down voltage of the ~24 V rail from a 20 V winding (the club demo's figure)
-  const railV = 24;
+  // typical key-down voltage of the ~26 V rail from a 22 V winding
+  const railV = 26.5;
   const paA = finalKeyDownA(targetPowerW, railV, CLASS_C_EFFICIENCY);
   return {
     supply: supply(
-      [transformer('T1 mains transformer', [winding('w-sig', '16 V winding', 16, 1, 0.1), winding('w-pa', '20 V winding', 20, 2.5, 0.08)])],
+      // 22 V 3.5 A: the supply carries the final's saturated drive (about 1.5 A at 20 W); a 20 V winding let the PA rail
+      // dip below 20 V at 120 V low mains, and a tune-up carrier at that drive draws about 3.2 A RMS from the winding
+      [transformer('T1 mains transformer', [winding('w-sig', '16 V winding', 16, 1, 0.1), winding('w-pa', '22 V winding', 22, 3.5, 0.08)])],
       [
         // a short on the small winding reflects too little primary current to blow the primary fuse: its own fuse
         rectified('rail-raw', 'Raw DC for the 13.8 V regulator', 'w-sig', 0.0047, 35, 2.4, null, 0.8),
         adjustable('rail-sig', '13.8 V signal rail', 'rail-raw', 2400),
         // below about 20 V a 20 W push-pull final falls short of its output; stated so headroom is judged
-        rectified('rail-pa', 'PA rail (unregulated, ~24 V)', 'w-pa', 0.0068, 50, 3.6, 20),
+        // no winding fuse needed: the larger winding's shorted reservoir reflects over 5 x the primary fuse, which clears it
+        rectified('rail-pa', 'PA rail (unregulated, ~26 V)', 'w-pa', 0.0068, 50, 3.6, 20),
       ],
     ),
     stages: [receiver('rail-sig'), vxo('rail-sig'), driver('rail-sig'), pushPullFinal('rail-pa', paA), lowPassFilter(bandName),
@@ -212,12 +216,14 @@ function singleRail(bandName: string, targetPowerW: number): StationData {
 }
 
 function amplifierOnly(bandName: string, targetPowerW: number): StationData {
-  const paA = finalKeyDownA(targetPowerW, 24, CLASS_C_EFFICIENCY);
+  const paA = finalKeyDownA(targetPowerW, 26.5, CLASS_C_EFFICIENCY);
   return {
     supply: supply(
-      [transformer('T1 mains transformer', [winding('w-pa', '20 V winding', 20, 3, 0.08)])],
+      // 22 V 3.5 A, as the two-rail template's PA winding: a 20 V 3 A winding let the rail dip below 20 V at 120 V low
+      // mains once the supply carries the saturated drive
+      [transformer('T1 mains transformer', [winding('w-pa', '22 V winding', 22, 3.5, 0.08)])],
       [
-        rectified('rail-pa', 'PA rail (unregulated, ~24 V)', 'w-pa', 0.0068, 50, 3.6, 20),
+        rectified('rail-pa', 'PA rail (unregulated, ~26 V)', 'w-pa', 0.0068, 50, 3.6, 20),
         // 240 Ω / 2 kΩ: 1.25 V × (1 + 2000/240) + 50 µA × 2 kΩ ≈ 11.8 V for the relay coil and bias
         adjustable('rail-12v', '12 V relay and bias rail', 'rail-pa', 2000),
       ],

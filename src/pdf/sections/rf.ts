@@ -22,13 +22,16 @@ function swrText(s: PaSwrStress): string {
     `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}`;
 }
 
-/** The waveform that gives the output, the budgeted current and the harmonics, and the band's most. */
+/** The waveform that gives the output, the budgeted current (the band's most) and the harmonics. */
 function waveformLine(w: PaWaveformSummary, keyDownA: number): string {
   const what = w.model === 'trapezoid' ? `switched, ${fv(w.transitionTimeS, 's')} edges${w.transitionAssumed ? ' (assumed)' : ''}`
     : w.model === 'class-e-simulated' ? `simulated class E, loaded Q ${w.classELoadedQ?.[1]} to ${w.classELoadedQ?.[0]}`
       : 'current pulse, edge of saturation to flat-topped';
-  const bias = keyDownA - w.designCurrentA;
-  return `${what}: ${fv(w.designOutputW, 'W')} and ${fv(keyDownA, 'A')} key-down at the design point (budgeted); up to ${fv(w.bandMaxOutputW, 'W')} and ${fv(w.bandMaxCurrentA + bias, 'A')} over the band, where the harmonics are judged`;
+  // keyDownA is the band's most with the bias idle current
+  const bias = keyDownA - w.bandMaxCurrentA;
+  return `${what}: ${fv(w.designOutputW, 'W')} and ${fv(w.designCurrentA + bias, 'A')} key-down at the design drive; ` +
+    `up to ${fv(w.bandMaxOutputW, 'W')} and ${fv(keyDownA, 'A')} over the band, where the harmonics are judged ` +
+    '(the supply budget carries this)';
 }
 
 export function rfSection(l: Layout, rf: RfReport | null): void {
@@ -44,7 +47,8 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       l.heading(`${s.stageName}: final amplifier`, 2);
       keyValues(l, [
         ['Output', `${fv(p.outputW, 'W')} (${fv(p.outputDbm, 'dBm')}), ${fv(p.vsReferenceDb, 'dB')} vs. reference (${p.vsReferenceSUnits.toFixed(1)} S-units)`],
-        ['Supply', `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')}, DC input ${fv(p.dcInputW, 'W')}, efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`],
+        ['Supply', `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')} budgeted (saturated drive), ` +
+          `DC input ${fv(p.dcInputW, 'W')} at the design drive, efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`],
         ...(p.waveform ? [['Waveform', waveformLine(p.waveform, p.keyDownCurrentA)] as [string, string]] : []),
         ['Load', p.turnsRatioSource === 'network' ? `matching network, ${fv(p.primaryOhm, 'Ω')} at the drain` : `turns ratio ${p.turnsRatio.toFixed(2)} (${p.turnsRatioSource}), primary ${fv(p.primaryOhm, 'Ω')}`],
         ['Device stress', `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load`],

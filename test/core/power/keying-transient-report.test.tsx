@@ -1,6 +1,6 @@
 // The keying transient in the evaluation: the club demo's PA rail in `evaluate --json`, its finding, the load model
 // read from the budget, and the supply page's plot. Expected values follow from the demo's entered data by hand
-// where they can (the 20 WPM relay, 50 mA PA idle row, 20 V 2.5 A winding with 8 % regulation).
+// where they can (the 20 WPM relay, 50 mA PA idle row, 20 V 3.5 A winding with 8 % regulation).
 import { describe, expect, it } from 'vitest';
 import { club30m } from '../../../seed-demo/club-30m';
 import { evaluate } from '../../../src/core/evaluate';
@@ -20,12 +20,13 @@ describe('keying transient in the evaluation JSON', () => {
     expect(k.wpm).toBe(20);
     // Source: PARIS word of 50 units (common practice): 1.2 / 20 WPM = 60 ms
     expect(k.dotS).toBeCloseTo(0.06, 12);
-    // Source: winding model R = reg x V / I (transformer makers' notes): 0.08 x 20 / 2.5 = 0.64 Ω; 120 V nominal
-    expect(k.windingOhm).toBeCloseTo(0.64, 12);
+    // Source: winding model R = reg x V / I (transformer makers' notes): 0.08 x 20 / 3.5 = 0.457143 Ω; 120 V nominal
+    expect(k.windingOhm).toBeCloseTo(0.08 * 20 / 3.5, 12);
+    expect(k.windingOhm).toBeCloseTo(0.457143, 6);
     expect(k.mainsV).toBe(120);
     // leakage split from the regulation figure (laminated, X = 0.25 R, common practice, no published source):
-    // L = 0.25 x 0.64 / (2 pi 60) = 0.16 / 376.99 = 4.2441e-4 H
-    expect(k.leakageH).toBeCloseTo(4.2441e-4, 7);
+    // L = 0.25 x 0.457143 / (2 pi 60) = 0.114286 / 376.99 = 3.0315e-4 H
+    expect(k.leakageH).toBeCloseTo(3.0315e-4, 7);
     // one ripple period of a bridge on 60 Hz: 1 / 120 s
     expect(k.leadS).toBeCloseTo(1 / 120, 12);
     expect(k.elements.length).toBeGreaterThanOrEqual(3);

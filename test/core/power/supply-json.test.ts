@@ -1,6 +1,6 @@
 // `evaluate --json` carries, per winding, the fuse and its fault check; per rectified rail the bleeder's time and
 // wattage; per regulated rail the ripple at its output; and the enclosure heat budget. Values are checked by hand
-// from the demo's entered data where they follow directly from it (the 16 V 1 A winding with 10 % regulation).
+// from the demo's entered data where they follow directly from it (the 16 V 1.5 A winding with 10 % regulation).
 import { describe, expect, it } from 'vitest';
 import { club30m } from '../../../seed-demo/club-30m';
 import { evaluate } from '../../../src/core/evaluate';
@@ -11,14 +11,13 @@ describe('supply results in the evaluation JSON', () => {
   const raw = json.supply.rails.find((r: { railId: string }) => r.railId === 'rail-raw');
   const reg = json.supply.rails.find((r: { railId: string }) => r.railId === 'rail-13v8');
   it('per winding: fuse, fault currents and the clearing check', () => {
-    // R = 0.1 x 16 / 1 = 1.6 Ω; E = 17.6 V; leakage reactance (not entered: 0.25 R for a laminated core, common
-    // practice) X = 0.4 Ω, L = 0.4 / (2π 60) = 1061 µH. At 108 V of 120 V (low mains, -10 %), Ohm's law for AC:
-    // 17.6 x 0.9 / sqrt(1.6² + 0.4²) = 15.84 / 1.64924 = 9.6044 A (9.9 A without the leakage, the figure before
-    // leakage was modelled)
-    expect(raw.windingFuse.sourceOhm).toBeCloseTo(1.6, 9);
-    expect(raw.windingFuse.reactanceOhm).toBeCloseTo(0.4, 9);
-    expect(raw.windingFuse.leakageH * 1e6).toBeCloseTo(1061.03, 1);
-    expect(raw.windingFuse.inputShortLowA).toBeCloseTo(9.6044, 3);
+    // R = 0.1 x 16 / 1.5 = 1.06667 Ω; E = 17.6 V; leakage reactance (not entered: 0.25 R for a laminated core,
+    // common practice) X = 0.26667 Ω, L = 0.26667 / (2π 60) = 707.36 µH. At 108 V of 120 V (low mains, -10 %), Ohm's
+    // law for AC: 17.6 x 0.9 / sqrt(1.06667² + 0.26667²) = 15.84 / 1.09950 = 14.4066 A (14.85 A without the leakage)
+    expect(raw.windingFuse.sourceOhm).toBeCloseTo(1.6 / 1.5, 9);
+    expect(raw.windingFuse.reactanceOhm).toBeCloseTo(0.4 / 1.5, 9);
+    expect(raw.windingFuse.leakageH * 1e6).toBeCloseTo(707.36, 1);
+    expect(raw.windingFuse.inputShortLowA).toBeCloseTo(14.4066, 3);
     // the shorted reservoir (through the diodes) is smaller still and is the one the fuse is checked against
     expect(raw.windingFuse.outputShortLowA).toBeLessThan(raw.windingFuse.inputShortLowA);
     expect(raw.windingFuse.check.faultA).toBe(raw.windingFuse.outputShortLowA);
@@ -37,8 +36,9 @@ describe('supply results in the evaluation JSON', () => {
       expect(low.aloneTroughV).toBe(x.aloneTroughV);
       expect(x.keyDownTroughV).toBeLessThan(x.keyUpTroughV);
     }
-    // R_p = 0.5 x (5.6 / 66) x 120² / 66 = 9.256 Ω (half the VA-weighted copper loss in the primary)
-    expect(cr.primaryOhm).toBeCloseTo(9.256, 3);
+    // R_p = 0.5 x (8 / 94) x 120² / 94 = 6.5188 Ω (half the VA-weighted copper loss in the primary; VA = 16 x 1.5 +
+    // 20 x 3.5 = 94, VA-weighted regulation (0.1 x 24 + 0.08 x 70) / 94 = 8 / 94)
+    expect(cr.primaryOhm).toBeCloseTo(6.5188, 3);
     expect(cr.primaryH).toBeGreaterThan(0);
     expect(cr.rails[0].leakageFromRegulation).toBe(true);
   });

@@ -19,9 +19,12 @@ describe('class B and C: the cosine pulse, edge of saturation to flat-topped', (
     near(r.waveform!.bandMaxOutputW, r.outputW * 16 / Math.PI ** 2, 1e-6, 'P saturated');
     // Source: mean of a half-period rectangular pulse 1/2 against the half-sine's 1/π (textbook Fourier series)
     near(r.waveform!.bandMaxCurrentA, (r.outputW / (0.6 * 13.8)) * (Math.PI / 2), 1e-6, 'saturated key-down current');
-    // the budget carries the design point's P/(η Vdd); the saturated current is a caution naming both
-    near(r.keyDownCurrentA, r.outputW / (0.6 * 13.8), 1e-9, 'budgeted key-down current');
-    expect(r.findings.find((f) => f.rule === 'pa.saturation-current')?.message).toContain(`${r.waveform!.bandMaxCurrentA.toFixed(2)} A`);
+    // the budget carries the saturated end (no bias here): the square wave's π/2 × the design point's P/(η Vdd); the
+    // caution names both, the design drive's P/(η Vdd) beside it
+    near(r.keyDownCurrentA, (r.outputW / (0.6 * 13.8)) * (Math.PI / 2), 1e-9, 'budgeted key-down current');
+    const sat = r.findings.find((f) => f.rule === 'pa.saturation-current')?.message;
+    expect(sat).toContain(`${((r.outputW / (0.6 * 13.8)) * (Math.PI / 2)).toFixed(2)} A`);
+    expect(sat).toContain(`design drive it draws ${(r.outputW / (0.6 * 13.8)).toFixed(2)} A`);
     // and its odd harmonics reach the square wave's 1/n (3rd: −9.54 dBc)
     near(r.spectrum!.bands.find((b) => b.n === 3)!.worstDbc, dbc(1 / 3), 1e-9, '3rd');
   });
@@ -83,7 +86,7 @@ describe('class E: the simulated waveform (Sokal & Sokal, IEEE JSSC SC-10(3), 19
   });
 });
 
-describe('the supply budget carries the PA waveform’s current', () => {
+describe('the supply budget carries the PA waveform’s current (the band’s most)', () => {
   it('paKeyDownCurrentA (the budget) gives evaluatePa’s key-down current at the project frequency', () => {
     const pa = paParams({ amplifierClass: 'D', turnsRatio: 1.25, transitionTimeS: 20e-9 });
     const kd = paKeyDownCurrentA(pa, 13.8, { ...proj, frequencyHz: 14e6 });
