@@ -5,8 +5,8 @@
 // relation so that the swing just reaches the supply at the design load (the program's design point): each half
 // sees R_dd/4, so V1 = (R_dd/4) 2 α1(θ) Ipk with α1 the cosine pulse's fundamental coefficient (cosine-pulse
 // coefficients as tabulated in Krauss, Bostian & Raab, Solid State Radio Engineering, 1980; from memory).
-// The program's prediction: its load line at the filter's input impedance (pa-swr stressAt, class B or C, flat-topped
-// at the rails where the swing would exceed them), and each odd harmonic's band (pa-spectrum, its worst end raised by
+// The program's prediction: its load line at the filter's input impedance, balanced against the filter's input at
+// each harmonic where the swing reaches the rails (pa-swr stressAt with pa-clip-balance), and each odd harmonic's band (pa-spectrum, its worst end raised by
 // the clipped drain voltage where that is higher, pa-clip) less the filter's rejection from a current source into the
 // load at that harmonic (lpf-analysis harmonicsFromSource).
 // Invented design: 13.8 V, 1:1 transformer (k = 0.9995), 7.03 MHz, 50 Ω.
@@ -14,34 +14,45 @@ import { describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
 import { type Complex as C, ladderAndLoadLines, ladderInputOhm, runSpice, spiceScratchDir } from '../../helpers/ngspice';
 import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
-import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
+import { harmonicsFromSource, inputImpedance, ladderOf } from '../../../src/core/rf/lpf-analysis';
 import { evaluatePa } from '../../../src/core/rf/pa';
 import { paSource } from '../../../src/core/rf/pa-source';
 import { paSpectrum } from '../../../src/core/rf/pa-spectrum';
 import { loadOnCircle, stressAt } from '../../../src/core/rf/pa-swr';
 import { foldClipping } from '../../../src/core/rf/pa-clip';
+import { clipBalance, drainHarmonicLoad } from '../../../src/core/rf/pa-clip-balance';
 import { CONSTRUCTION_FLOOR_DBC } from '../../../src/core/rf/harmonics';
 import { lpfParams, paParams } from './fixture';
 
 const haveNgspice = requireTool(NGSPICE, 'SPICE whole-chain check of the push-pull class-C stage', 'apt-get install ngspice');
 
-// Stated tolerances. Power: where the program's load line stays within the rails (|z_in| ≤ 1: SWR 2 at 90° and 180°)
-// ngspice agrees within 1 %, so TOL_POWER is 5 %. Where it would swing beyond them (SWR 2 at 0°, |z_in| = 1.96; at
-// 270° and into 50 Ω by 1–5 %) the program takes the drain voltage as the load-line sinusoid flat-topped at the rail
-// limits (the clipped sinusoid's fundamental, pa-swr clippedStage). The capacitor-input filter shunts part of the flat
-// top, so the netlist clips less than that: at 0° ngspice gives 14 % (class B) and 17 % (class C) less power. The
-// program is the upper end there: ngspice at most TOL_POWER above it and TOL_POWER_CLIPPED_BELOW below it.
-// (Before the clipping model the power was held at the design swing: 30 % allowed either way at every load, ngspice
-// 23 % (C) and 28 % (B) above at 0°.) Drain peak: ngspice's drain rings about 10.5 % above 2 Vdd at 0° (not modelled).
-const TOL_POWER = 0.05;
-const TOL_POWER_CLIPPED_BELOW = 0.2;
-const TOL_DRAIN = 0.12;
+// Stated tolerances. The program's prediction is the harmonic balance of the stage against the filter's input at each
+// harmonic with the 50 pF per drain (pa-clip-balance, via pa-swr stressAt). Power: ngspice within 3.0 % of it at every
+// load (class B: 50 Ω 1.6 %, SWR 2 at 0° −0.8 %, 90° 0.9 %, 180° 0.3 %, 270° 3.0 %; class C: 2.7, 0.9, 0.9, 0.3,
+// 2.2 %), so TOL_POWER is 4 % both ways. (Before: the drain voltage flat-topped at the rail limits, which the filter's
+// shunt capacitor does not let form: ngspice 14 % (B) and 17 % (C) below it at 0°, 20 % allowed below the program; the
+// flat-topped model stays checked as the upper end at 0°.)
+// Drain peak: ngspice's drain rings about 10.5 % above 2 Vdd at 0° (the leakage with the 50 pF), carried by the 12 %
+// ring margin where the limit cuts the current (pa-swr CLIP_RING_MARGIN): there the program is 2.8 % (C) and 3.7 % (B)
+// above ngspice; at 270° (barely clipping, no margin) ngspice is 1.3 % (C) and 1.0 % (B) above the program; at the
+// loads that do not clip ngspice is up to 6.0 % above it (class C, 180°: 23.0 V against 21.7 V, far below 2 Vdd).
+// So ngspice may stand DRAIN_ABOVE_CLIPPED (2 %) above the program where the stage clips, DRAIN_ABOVE (7 %) elsewhere,
+// and DRAIN_BELOW (5 %) below it. (Before: 12 % either way.)
+const TOL_POWER = 0.04;
+const DRAIN_ABOVE = 0.07;
+const DRAIN_ABOVE_CLIPPED = 0.02;
+const DRAIN_BELOW = 0.05;
 // 3rd harmonic at the antenna: within the program's band widened by this much, dB (or both below the floor), at
 // every load. At the clipping loads the band's worst end includes the flat-topped drain voltage through the filter
 // from a voltage source (pa-clip foldClipping): at SWR 2, 0° it sits 5 dB (B) and 10 dB (C) above ngspice, which is
 // again the upper end. (Before: the band from the design load only, 6 dB allowed above its worst end at the SWR loads,
 // where class B at 0° came 5.3 dB above it.)
 const TOL_HARMONIC_DB = 3;
+// The balanced drain voltage's 3rd (pa-clip-balance) through the filter from a stiff source, against ngspice: class C
+// within 1.1 dB at every load (50 Ω −68.8 / −67.8, SWR 2 at 0° −65.5 / −64.7, 90° −71.8 / −71.7, 180° −63.1 / −63.0,
+// 270° −64.9 / −63.8 dBc, program / ngspice); class B at 0° −61.2 / −60.1 dBc, elsewhere both below the −70 dBc
+// construction floor. The band's worst end stays the flat-topped fold above (the upper end); this is its best estimate.
+const TOL_BALANCED_DB = 1.5;
 
 const F0 = 7.03e6;
 const VDD = 13.8;
@@ -119,7 +130,12 @@ describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction
   const pa = evaluatePa(paIn, VDD, { targetPowerW: 5, ambientC: 25, keyingDuty: 0.4 });
   const band3 = paSpectrum(paIn, [3], { frequencyHz: F0 }).bands.find((b) => b.n === 3)!;
   const src = paSource({ pa: paIn, primaryOhm: R0, peakDeviceA: pa.peakDeviceA, classESimulated: false });
-  const m = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
+  // the filter's input at each harmonic (50 Ω beyond it) with the netlist's 50 pF per drain, seen from the drains
+  const zAt = drainHarmonicLoad((n) => inputImpedance(ladderOf(d, 'built', true), n * F0, R0),
+    { primaryOhm: R0, loadOhm: R0, cossF: 50e-12, frequencyHz: F0, topology: 'push-pull' });
+  const harmonics = { zAt, thetaRad, topology: 'push-pull' as const };
+  const m = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0, harmonics };
+  const flat = { ...m, harmonics: undefined };
   const loads: [string, C][] = [
     ['50 ohm', { re: R0, im: 0 }],
     ...[0, 90, 180, 270].map((ph): [string, C] => {
@@ -130,14 +146,19 @@ describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction
   for (const [name, zl] of loads) {
     it(`${name}: drain peak and output power`, () => {
       const zin = filterInputOhm(d, zl);
-      const pred = stressAt(cls, m, { re: zin.re / R0, im: zin.im / R0 });
+      const zn = { re: zin.re / R0, im: zin.im / R0 };
+      const pred = stressAt(cls, m, zn);
+      const upper = stressAt(cls, flat, zn);
       const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       expect(Number.isFinite(s.vdpk), s.out).toBe(true);
-      expect(Math.abs(s.vdpk / pred.drainPeakV - 1), `drain: ngspice ${s.vdpk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`).toBeLessThanOrEqual(TOL_DRAIN);
+      const clipping = Math.hypot(zn.re, zn.im) > 1;
+      const vmsg = `drain: ngspice ${s.vdpk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`;
+      expect(s.vdpk / pred.drainPeakV - 1, vmsg).toBeLessThanOrEqual(clipping ? DRAIN_ABOVE_CLIPPED : DRAIN_ABOVE);
+      expect(1 - s.vdpk / pred.drainPeakV, vmsg).toBeLessThanOrEqual(DRAIN_BELOW);
       const pmsg = `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`;
-      expect(s.pout / pred.outputW - 1, pmsg).toBeLessThanOrEqual(TOL_POWER);
-      const clipping = Math.hypot(zin.re, zin.im) / R0 > 1;
-      expect(1 - s.pout / pred.outputW, pmsg).toBeLessThanOrEqual(clipping ? TOL_POWER_CLIPPED_BELOW : TOL_POWER);
+      expect(Math.abs(s.pout / pred.outputW - 1), pmsg).toBeLessThanOrEqual(TOL_POWER);
+      // the flat-topped model stays the upper end where the stage clips hard (SWR 2 at 0°, |z_in| = 1.96)
+      if (Math.hypot(zn.re, zn.im) > 1.5) expect(upper.outputW, pmsg).toBeGreaterThanOrEqual(s.pout);
     });
     it(`${name}: the 3rd harmonic at the antenna lies in the program's band from a current source (or below the floor)`, () => {
       const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
@@ -160,6 +181,21 @@ describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction
         expect(spiceDbc, msg).toBeGreaterThanOrEqual(lo - TOL_HARMONIC_DB);
         expect(spiceDbc, msg).toBeLessThanOrEqual(hi + TOL_HARMONIC_DB);
       }
+    });
+    it(`${name}: the 3rd at the antenna from the balanced drain voltage, within TOL_BALANCED_DB (or below the floor)`, () => {
+      const zin = filterInputOhm(d, zl);
+      const hb = clipBalance({ ...harmonics, z: { re: zin.re / R0, im: zin.im / R0 } });
+      expect(hb.converged).toBe(true);
+      // the balanced drain voltage's 3rd through the filter from its input (a stiff source) into this load at 3f
+      const zlAt = (n: number): C => ({ re: zl.re, im: zl.im >= 0 ? n * zl.im : zl.im / n });
+      const stiff = () => ({ re: 0, im: 0 });
+      const rejClip = harmonicsFromSource(ladderOf(d, 'built', true), F0, 'thevenin', stiff, [3], zlAt)[0].relativeAttenuationDb;
+      const predicted = 20 * Math.log10(hb.harmonicRatios[2]) - rejClip;
+      const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
+      const spiceDbc = 20 * Math.log10(s.harm.get(3)! / s.harm.get(1)!);
+      const msg = `3rd balanced: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`;
+      if (predicted < CONSTRUCTION_FLOOR_DBC) expect(spiceDbc, msg).toBeLessThan(CONSTRUCTION_FLOOR_DBC + TOL_BALANCED_DB);
+      else expect(Math.abs(spiceDbc - predicted), msg).toBeLessThanOrEqual(TOL_BALANCED_DB);
     });
   }
 });

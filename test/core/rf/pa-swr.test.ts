@@ -56,7 +56,9 @@ describe('class B/C at a complex load: I1 held until the swing reaches the suppl
     near(s.outputW, 10 * i1 * i1 * 2, 1e-12, 'P');
     near(s.outputW, 7.4176, 1e-4, 'P, by hand');
     near(s.dissipationW, (10 / 0.7) * i1 - 10 * i1 * i1 * 2, 1e-9, 'Pd');
-    near(s.drainPeakV, 40, 1e-12, 'Vpk: flat-topped at the rail limit');
+    // flat-topped at the rail limit (40 V) plus the ring margin where the limit cuts the current (12 %, common
+    // practice, no published source: CLIP_RING_MARGIN, evidence in ngspice-pushpull-c-chain)
+    near(s.drainPeakV, 40 * 1.12, 1e-9, 'Vpk: rail limit and ring margin');
   });
   it('a hard-limited swing (|z| → ∞, resistive): power P0 (4/π)^2/|z|, the square-wave fundamental (textbook)', () => {
     const s = stressAt('B', m, { re: 1e6, im: 0 });
@@ -80,7 +82,8 @@ describe('class B/C at a complex load: I1 held until the swing reaches the suppl
     const s = swrStress('B', m, 2, 50);
     near(s.worstDissipation.value, 10 / 0.7 - 5, 1e-9, 'Pd');
     expect(s.worstDissipation.phaseDeg).toBe(180);
-    near(s.worstDrainPeak.value, 40, 1e-12, 'Vpk never above 2 Vdd on the load line');
+    // the rail-limited 40 V plus the 12 % ring margin at the clipping loads (CLIP_RING_MARGIN)
+    near(s.worstDrainPeak.value, 40 * 1.12, 1e-9, 'Vpk: 2 Vdd and the ring margin');
   });
   it('SWR 1 gives the matched figures at every phase', () => {
     const s = swrStress('C', m, 1, 50);
@@ -105,7 +108,8 @@ describe('evaluatePa judges the ratings at the worst load phase', () => {
     const f = r.findings.find((x) => x.rule === 'pa.vds');
     expect(f?.severity).toBe('fail');
     expect(f?.message).toMatch(/drain clamp/);
-    expect(f?.message).toMatch(/rated 35 V or more/); // 1.25 x 27.6 V = 34.5 V, rounded up
+    // 27.6 V x 1.12 (ring margin at the clipping load, CLIP_RING_MARGIN) = 30.91 V; 1.25 x 30.91 = 38.6 V, rounded up
+    expect(f?.message).toMatch(/rated 39 V or more/);
   });
   it('class E is simulated round the circle: its worst drain peak exceeds the matched 3.56 x supply', () => {
     const r = evaluatePa(paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1, rdsOnOhm: 0.1, saturationV: null }), 13.8, proj, 'PA', { worstSwr: 2 });
