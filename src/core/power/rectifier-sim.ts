@@ -247,12 +247,49 @@ export const SIM_FLOORS = { frequencyHz: 1, capacitanceF: 1e-9, secondaryVrms: 1
 let MEMO: Map<string, RectifierSimResult> | null = null;
 const MEMO_MAX = 4096;
 /**
- * Warm starts, live with the memo: the converged cycle-start voltage of the last simulation of the same circuit
- * (every input but the load). The fixed-point passes ask again for a rail whose load moved a little; starting the
- * Newton search there takes one or two cycles instead of three or four. The search still stops on the same
- * tolerance, so a result moves by less than `toleranceV` at most.
+ * Warm starts, live with the memo: the converged cycle-start voltages of the same circuit (every input but the load)
+ * at the loads simulated so far. The fixed-point passes ask again for a rail whose load moved a little, and the final
+ * design for the same circuit at its other loads (receive, key-up, key-down); starting the Newton search from the
+ * voltage of the nearest load, or on the line through the two nearest, takes one or two cycles instead of three or
+ * four. A search over candidates (the reservoir bisection, `searchKey`) starts a candidate with no state of its own
+ * from the last converged one. The search still stops on the same tolerance, so a result moves by less than
+ * `toleranceV` at most.
  */
-let WARM: Map<string, number> | null = null;
+let WARM: Map<string, WarmPoint[]> | null = null;
+
+/** A converged cycle-start voltage (V) and the load it was found at (current A, or conductance S). */
+interface WarmPoint {
+  load: number;
+  v0: number;
+}
+
+/** At most this many loads are kept per circuit (a rail has five corners per mains voltage). */
+const WARM_POINTS = 8;
+
+const loadValue = (load: SimLoad): number => (load.kind === 'current' ? load.currentA : 1 / load.resistanceOhm);
+
+/**
+ * Start voltage for `load` from converged points of the same circuit: the point at that load, else the line through
+ * the two nearest loads (v0 is close to linear in the load: the reservoir's droop), else the nearest point. Undefined
+ * without points; the caller bounds it to (0, no-load peak).
+ */
+function warmStart(points: readonly WarmPoint[] | undefined, load: number): number | undefined {
+  if (!points?.length || !Number.isFinite(load)) return undefined;
+  const byDistance = [...points].sort((a, b) => Math.abs(a.load - load) - Math.abs(b.load - load));
+  const [p, q] = byDistance;
+  if (p.load === load || !q || q.load === p.load) return p.v0;
+  // Linear interpolation (or extrapolation) in the load; a start only, the Newton search decides the result
+  const v = p.v0 + ((q.v0 - p.v0) * (load - p.load)) / (q.load - p.load);
+  return Number.isFinite(v) ? v : p.v0;
+}
+
+function keepWarm(key: string, point: WarmPoint): void {
+  if (!WARM) return;
+  const points = WARM.get(key)?.filter((x) => x.load !== point.load) ?? [];
+  points.push(point);
+  if (points.length > WARM_POINTS) points.shift();
+  WARM.set(key, points);
+}
 /** Other simulations' memos (the joint transformer simulation), by name, live with the memo. */
 let SCOPES: Map<string, Map<string, unknown>> | null = null;
 
@@ -300,13 +337,25 @@ export function withSimulationMemo<T>(fn: () => T, options: { caches?: boolean }
   }
 }
 
-export function simulateRectifier(input: RectifierSimInput): RectifierSimResult {
+/**
+ * The steady state of one rectifier. Inside withSimulationMemo a repeated input is a look-up and a circuit seen
+ * before at other loads starts from those states; `searchKey` names a search over candidate circuits (the reservoir
+ * bisection), whose candidates start from the last converged one of the same search.
+ */
+export function simulateRectifier(input: RectifierSimInput, options: { searchKey?: string } = {}): RectifierSimResult {
   if (!MEMO) return simulateUncached(input);
   const key = JSON.stringify([input.topology, input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm, input.load, input.bleederOhm ?? null, input.stepsPerCycle ?? null, input.toleranceV ?? null, input.maxCycles ?? null, input.waveformPoints ?? null]);
   const held = MEMO.get(key);
   if (held) return held;
   const circuitKey = JSON.stringify([input.topology, input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm, input.load.kind, input.bleederOhm ?? null, input.stepsPerCycle ?? null, input.toleranceV ?? null]);
-  const result = simulateUncached(input, WARM?.get(circuitKey), (v) => WARM?.set(circuitKey, v));
+  const load = loadValue(input.load);
+  const searchKey = options.searchKey !== undefined ? `search\u0000${options.searchKey}` : null;
+  const start = warmStart(WARM?.get(circuitKey), load)
+    ?? (searchKey !== null ? WARM?.get(searchKey)?.at(-1)?.v0 : undefined);
+  const result = simulateUncached(input, start, (v0) => {
+    keepWarm(circuitKey, { load, v0 });
+    if (searchKey !== null) keepWarm(searchKey, { load, v0 });
+  });
   if (MEMO.size >= MEMO_MAX) MEMO.clear();
   if (WARM && WARM.size >= MEMO_MAX) WARM.clear();
   MEMO.set(key, result);

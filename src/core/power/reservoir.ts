@@ -31,8 +31,12 @@ export function textbookCapacitanceF(topology: RectifierTopology, loadA: number,
 export function minimumCapacitanceF(base: RectifierSimInput, ripplePpTargetV: number, loadA: number): number | null {
   const textbook = textbookCapacitanceF(base.topology, loadA, base.frequencyHz, ripplePpTargetV);
   if (textbook === null) return null;
+  // the candidates start from the last one's steady state (a start only: each still stops on the same tolerance)
+  const searchKey = `reservoir:${JSON.stringify([base.topology, base.secondaryVrms, base.windingResistanceOhm,
+    base.frequencyHz, base.load])}`;
   const ripple = (c: number) => {
-    const r = simulateRectifier({ ...base, capacitanceF: c, stepsPerCycle: 500, waveformPoints: 0, maxCycles: 80 });
+    const candidate = { ...base, capacitanceF: c, stepsPerCycle: 500, waveformPoints: 0, maxCycles: 80 };
+    const r = simulateRectifier(candidate, { searchKey });
     return r.collapsed || r.note?.startsWith('Simulation not run') ? Infinity : r.ripplePpV;
   };
   let hi = textbook;

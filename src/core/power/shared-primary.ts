@@ -278,9 +278,11 @@ const key = (input: JointInput, withLoads: boolean) => JSON.stringify([
 
 /**
  * The steady state of the joint circuit. Inside withSimulationMemo a repeated input is a look-up, and a circuit
- * seen before at other loads starts its search from that converged state.
+ * seen before at other loads starts its search from that converged state. `searchKey` names a search over
+ * candidate circuits (a winding voltage bisection): a candidate with no state of its own starts from the last
+ * converged candidate of the same search, scaled to its no-load peaks; the search still stops on the same tolerance.
  */
-export function simulateSharedPrimary(input: JointInput): JointResult {
+export function simulateSharedPrimary(input: JointInput, options: { searchKey?: string } = {}): JointResult {
   const memo = simulationScope<JointResult>('joint');
   const warm = simulationScope<Warm>('joint-warm');
   const exact = memo ? key(input, true) : '';
@@ -289,10 +291,12 @@ export function simulateSharedPrimary(input: JointInput): JointResult {
   const circuitKey = warm ? key(input, false) : '';
   // the same transformer at another mains voltage (another corner): its state scaled to this one's no-load peaks
   const familyKey = warm ? key({ ...input, primaryVrms: 0, windings: input.windings.map((w) => ({ ...w, secondaryVrms: 0 })) }, false) : '';
-  const start = warm?.get(circuitKey) ?? warm?.get(familyKey);
+  const searchKey = warm && options.searchKey !== undefined ? `search\u0000${options.searchKey}` : null;
+  const start = warm?.get(circuitKey) ?? warm?.get(familyKey) ?? (searchKey !== null ? warm?.get(searchKey) : undefined);
   const result = simulateUncached(input, start, (w) => {
     warm?.set(circuitKey, w);
     warm?.set(familyKey, w);
+    if (searchKey !== null) warm?.set(searchKey, w);
   });
   memo?.set(exact, result);
   return result;

@@ -40,10 +40,18 @@ export function nextAtLeast(list: readonly number[], x: number): number | null {
   return null;
 }
 
-/** Expand per-decade steps into values from 10^minExp to 10^maxExp. */
-export function decades(steps: readonly number[], minExp: number, maxExp: number): number[] {
+/** Expansions made so far, by steps and exponent range (bounded): the same few are asked for on every evaluation. */
+const EXPANDED = new Map<string, readonly number[]>();
+
+/** Expand per-decade steps into values from 10^minExp to 10^maxExp (a frozen array, kept by its inputs). */
+export function decades(steps: readonly number[], minExp: number, maxExp: number): readonly number[] {
+  const key = `${steps.join(',')}|${minExp}|${maxExp}`;
+  const held = EXPANDED.get(key);
+  if (held) return held;
   const out: number[] = [];
   for (let e = minExp; e <= maxExp; e++) for (const s of steps) out.push(Number((s * 10 ** e).toPrecision(6)));
+  if (EXPANDED.size >= 256) EXPANDED.clear();
+  EXPANDED.set(key, Object.freeze(out));
   return out;
 }
 

@@ -76,7 +76,7 @@ function troughFor(inp: WindingInput, ratedV: number, ratedA: number): number {
         diodeResistanceOhm: rail.diodeResistanceOhm, capacitanceF: rail.reservoirF, esrOhm: rail.esrOhm,
         loadA: inp.keyDownA, bleederOhm: rail.bleederOhm,
       }],
-    });
+    }, { searchKey: `winding:${rail.id}:${inp.lowFactor}:${inp.keyDownA}` });
     const trough = joint.rails[0]?.troughV;
     return joint.converged && trough !== undefined && Number.isFinite(trough) ? Math.max(0, trough) : 0;
   }

@@ -3,6 +3,8 @@
 // simulation of the same inputs within the search's own stopping tolerance, and it takes no more mains cycles.
 import { describe, expect, it } from 'vitest';
 import { simulateRectifier, withSimulationMemo, type RectifierSimInput } from '../../../src/core/power/rectifier-sim';
+import { simulateSharedPrimary, type JointInput } from '../../../src/core/power/shared-primary';
+import { minimumCapacitanceF } from '../../../src/core/power/reservoir';
 
 const base: RectifierSimInput = {
   topology: 'bridge', secondaryVrms: 18, windingResistanceOhm: 0.4, frequencyHz: 60, diodeDropV: 0.7, diodeResistanceOhm: 0.05,
@@ -23,5 +25,59 @@ describe('warm-started rectifier simulation', () => {
     expect(Math.abs(warm.dcMeanV - cold.dcMeanV)).toBeLessThan(toleranceV);
     expect(Math.abs(warm.troughV - cold.troughV)).toBeLessThan(toleranceV);
     expect(warm.cycles).toBeLessThanOrEqual(cold.cycles);
+  });
+
+  it('a load between two simulated ones starts on the line through them: same result, no more cycles', () => {
+    // the final design asks for the same circuit at its other loads (receive, key-up, key-down)
+    for (const [a, b, x] of [[0.2, 2.0, 1.1], [0.2, 1.0, 2.0], [0, 1.5, 0.4]] as const) {
+      const cold = simulateRectifier(at(x));
+      const warm = withSimulationMemo(() => {
+        simulateRectifier(at(a));
+        simulateRectifier(at(b));
+        return simulateRectifier(at(x));
+      });
+      const toleranceV = 2 * 1e-5 * cold.noLoadPeakV;
+      expect(warm.converged && cold.converged).toBe(true);
+      expect(Math.abs(warm.dcMeanV - cold.dcMeanV), `${x} A after ${a} and ${b} A`).toBeLessThan(toleranceV);
+      expect(Math.abs(warm.troughV - cold.troughV), `${x} A after ${a} and ${b} A`).toBeLessThan(toleranceV);
+      expect(warm.cycles).toBeLessThanOrEqual(cold.cycles);
+    }
+  });
+
+  it('the reservoir search, its candidates warm-started from each other, finds the cold search\'s capacitance', () => {
+    const rippleTargetV = 0.8;
+    const cold = minimumCapacitanceF(at(1.5), rippleTargetV, 1.5);
+    const warm = withSimulationMemo(() => minimumCapacitanceF(at(1.5), rippleTargetV, 1.5));
+    expect(cold).not.toBeNull();
+    // the bisection stops when hi / lo <= 1.005 (reservoir.ts): the two searches may part by one such step
+    expect(Math.abs(warm! / cold! - 1)).toBeLessThanOrEqual(0.005);
+    // and the capacitance found meets the target in a cold simulation (the ripple check itself)
+    expect(simulateRectifier({ ...at(1.5), capacitanceF: warm!, stepsPerCycle: 500 }).ripplePpV).toBeLessThanOrEqual(rippleTargetV * 1.001);
+  });
+});
+
+describe('warm-started joint transformer simulation', () => {
+  const diode = { diodeDropV: 0.9, diodeResistanceOhm: 0.03, esrOhm: 0.03 };
+  // a winding-voltage search: candidates at other rated voltages, resistance and leakage scaling with them
+  const candidate = (ratedV: number): JointInput => ({
+    primaryVrms: 207, primaryOhm: 6, primaryH: 0.02, frequencyHz: 50, stepsPerCycle: 500, maxCycles: 80,
+    windings: [{ ...diode, topology: 'bridge', secondaryVrms: ratedV * 1.08 * 0.9, ownOhm: 0.02 * ratedV,
+      ownH: 1e-5 * ratedV, capacitanceF: 10000e-6, loadA: 2.5 }],
+  });
+
+  it('a candidate started from the last one of its search matches a cold start and needs no more cycles', () => {
+    for (const [prevV, nextV] of [[18, 20], [24, 15], [16, 16.5]] as const) {
+      const cold = simulateSharedPrimary(candidate(nextV));
+      const warm = withSimulationMemo(() => {
+        simulateSharedPrimary(candidate(prevV), { searchKey: 'w' });
+        return simulateSharedPrimary(candidate(nextV), { searchKey: 'w' });
+      });
+      // the search stops when every |P(x) - x| < 1e-5 x the largest no-load peak (shared-primary.ts)
+      const toleranceV = 2 * 1e-5 * (nextV * 1.08 * 0.9 * Math.SQRT2);
+      expect(warm.converged && cold.converged).toBe(true);
+      expect(Math.abs(warm.rails[0].troughV - cold.rails[0].troughV), `${nextV} V after ${prevV} V`).toBeLessThan(toleranceV);
+      expect(Math.abs(warm.rails[0].dcMeanV - cold.rails[0].dcMeanV), `${nextV} V after ${prevV} V`).toBeLessThan(toleranceV);
+      expect(warm.cycles, `${nextV} V after ${prevV} V`).toBeLessThanOrEqual(cold.cycles);
+    }
   });
 });
