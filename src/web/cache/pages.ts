@@ -67,7 +67,7 @@ export function pageCache(deps: Deps, limits: LruLimits = PAGE_CACHE_LIMITS): Pa
   const middleware: MiddlewareHandler = async (c, next) => {
     const id = c.req.param('id');
     if ((c.req.method !== 'GET' && c.req.method !== 'HEAD') || !id) return next();
-    const stamp = await projectStamp(deps.database.db, id);
+    const stamp = await projectStamp(deps.database.client, id);
     if (!stamp) return next();
     const url = new URL(c.req.url);
     const parts = [program, stamp.id, stamp.version, stamp.createdAt, stamp.updatedAt, url.pathname, url.search, c.req.header('HX-Request') === 'true' ? 'htmx' : 'page', deps.now().toISOString().slice(0, 10)];
