@@ -39,11 +39,17 @@ export interface RfContext {
 
 const finite = (x: number, fallback = 0) => (Number.isFinite(x) ? x : fallback);
 
-function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext): { res: LpfStageResult; findings: Finding[] } {
-  const p = stage.lpf!;
-  // the inductors' core: the catalog core chosen on the filter (its AL sets the turns), else the one entered there
+/** The filter as built: the inductors' core is the catalog core chosen on the filter (its AL sets the turns), else the
+ * one entered there. */
+function designOf(p: NonNullable<Stage['lpf']>, project: Project) {
   const core = lpfCore(project, p);
   const d = designLpf(core?.from === 'catalog' && core.alHPerTurn2 !== null ? { ...p, coreAlHPerTurn2: core.alHPerTurn2, coreName: core.name } : p, project.frequencyHz);
+  return { core, d };
+}
+
+function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext): { res: LpfStageResult; findings: Finding[] } {
+  const p = stage.lpf!;
+  const { core, d } = designOf(p, project);
   const swr = Math.min(100, Math.max(1, finite(project.rf.worstSwr, 1)));
   const capacitorPeakV = lineMaxima(powerW, 50, swr).peakV;
   if (!d.ok) {
@@ -106,13 +112,18 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   let paStressW = targetPowerW;
   const okFreq = inputErrors.every((e) => e.field !== 'frequencyHz');
   let paRefused = false;
+  // the filter's input impedance at each harmonic (as built, into its design termination): a class B/C stage is
+  // balanced against it at the clipping loads of the SWR circle (pa-clip-balance)
+  const early = lpfStageDef?.lpf && okFreq ? designOf(lpfStageDef.lpf, project).d : null;
+  const filterLadder = early?.ok ? ladderOf(early.value) : null;
+  const filterInputOhmAt = filterLadder ? (n: number) => inputImpedance(filterLadder, n * frequencyHz) : undefined;
 
   for (const st of project.stages) {
     if (st.kind === 'final' && st.pa) {
       const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
         maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
         source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
-        frequencyHz: project.frequencyHz, insideC: ctx.insideC,
+        frequencyHz: project.frequencyHz, insideC: ctx.insideC, filterInputOhmAt,
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;

@@ -6,6 +6,8 @@ import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower }
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
 import { describeLoad, swrStress, type PaSwrStress } from './pa-swr';
+import { drainHarmonicLoad } from './pa-clip-balance';
+import type { Cx } from './lpf-analysis';
 import { paSpectrum, switchingPowerShape, type PaSpectrum } from './pa-spectrum';
 import { bandFigures, idealEfficiency, swrKeyDownCurrent, type PaWaveformSummary } from './pa-dc';
 import { waveformFindings } from './pa-spectrum-findings';
@@ -129,6 +131,12 @@ export interface PaSupplyCorners {
   frequencyHz?: number;
   /** What the rail comes from, for the wording of the findings; default 'mains'. */
   source?: 'mains' | 'battery';
+  /**
+   * The low-pass filter's input impedance at harmonic n ≥ 2 of the operating frequency (Ω, at the PA's output
+   * terminals): a class B/C stage at the clipping loads of the SWR circle is then balanced against it
+   * (pa-clip-balance); absent = its drain flat-topped at the rails (the upper end).
+   */
+  filterInputOhmAt?: (n: number) => Cx;
 }
 
 export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier', corners: PaSupplyCorners = {}): PaResult {
@@ -258,6 +266,16 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
     // a hard-switched push-pull stage on a centre-tapped transformer rings at each edge (leakage with Coss)
     ...(pa.amplifierClass === 'D' && pa.topology === 'push-pull' && network === null
       ? { ring: { leakageH: pa.outputLeakageH ?? null, cossF: pa.deviceCossF ?? null } } : {}),
+    // class B/C on a transformer: the filter at each harmonic seen from the drains, and the drive pulse's half angle
+    // (as its spectrum); a matching network's own harmonic impedance is not modelled (flat-topped, the upper end)
+    ...((pa.amplifierClass === 'B' || pa.amplifierClass === 'C') && network === null && corners.filterInputOhmAt
+      && corners.frequencyHz
+      ? { harmonics: {
+        zAt: drainHarmonicLoad(corners.filterInputOhmAt, { primaryOhm, loadOhm: pa.loadOhm, cossF: pa.deviceCossF ?? null,
+          frequencyHz: corners.frequencyHz, topology: pa.topology }),
+        thetaRad: (pa.amplifierClass === 'B' ? 180 : spectrum.conductionAngleDeg ?? 180) * (Math.PI / 360),
+        topology: pa.topology,
+      } } : {}),
   }, swrUsed, pa.loadOhm, rdsRatio);
   const swrCurrent = swrKeyDownCurrent(swr, pa.biasIdleMaxA * hotRailV, hotDcW, band.designCurrentA, pa.biasIdleMaxA);
   if (swrCurrent && swrCurrent.currentA > keyDownCurrentA * 1.001) {
