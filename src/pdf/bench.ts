@@ -19,7 +19,14 @@ export function largeBomProject(base: Project, lines: number): Project {
     const src = priced[i % priced.length];
     const id = `big-${i + 1}`;
     parts.push({ ...structuredClone(src), id, description: `${src.description} (line ${i + 1})` });
-    bom.push({ id: `bl-${i + 1}`, stageId: stageIds[i % stageIds.length], partId: id, qtyPerRig: 1 + (i % 3), refs: `X${i + 1}`, notes: '' });
+    bom.push({
+      id: `bl-${i + 1}`,
+      stageId: stageIds[i % stageIds.length],
+      partId: id,
+      qtyPerRig: 1 + (i % 3),
+      refs: `X${i + 1}`,
+      notes: '',
+    });
   }
   p.parts = parts;
   p.bom = bom;
@@ -29,6 +36,11 @@ export function largeBomProject(base: Project, lines: number): Project {
 }
 
 /** Render one pack; returns the bytes and page count (for a bench to time and report). */
-export function benchPack(project: Project, report: PackReport, paper: Paper = 'a4', dataDate = '2026-01-01'): Promise<PackResult> {
+export function benchPack(
+  project: Project,
+  report: PackReport,
+  paper: Paper = 'a4',
+  dataDate = '2026-01-01',
+): Promise<PackResult> {
   return buildPackWithInfo(project, report, { paper, dataDate });
 }

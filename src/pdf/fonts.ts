@@ -12,7 +12,9 @@ let cache: Promise<{ regular: Uint8Array; bold: Uint8Array }> | null = null;
 function fontBytes(): Promise<{ regular: Uint8Array; bold: Uint8Array }> {
   if (!cache) {
     const dir = join(dirname(require.resolve('dejavu-fonts-ttf/package.json')), 'ttf');
-    cache = Promise.all([readFile(join(dir, 'DejaVuSans.ttf')), readFile(join(dir, 'DejaVuSans-Bold.ttf'))]).then(([regular, bold]) => ({ regular, bold }));
+    cache = Promise.all([readFile(join(dir, 'DejaVuSans.ttf')), readFile(join(dir, 'DejaVuSans-Bold.ttf'))]).then(
+      ([regular, bold]) => ({ regular, bold }),
+    );
     cache.catch(() => (cache = null));
   }
   return cache;
@@ -54,7 +56,10 @@ const perCharacterFontkit: Fontkit = {
       }
       return g;
     };
-    font.layout = ((text: string) => ({ glyphs: Array.from(text, (ch) => glyphFor(ch.codePointAt(0)!)), positions: [] })) as unknown as FontkitFont['layout'];
+    font.layout = ((text: string) => ({
+      glyphs: Array.from(text, (ch) => glyphFor(ch.codePointAt(0)!)),
+      positions: [],
+    })) as unknown as FontkitFont['layout'];
     return font;
   },
 };

@@ -207,12 +207,25 @@ export class Layout {
     if (this.yPt < this.topPt - 1) this.yPt -= level === 1 ? 10 : 6;
     this.yPt -= size * 1.25;
     this.drawAt(text, this.leftPt, this.yPt + size * 0.25, size, true);
-    if (level === 1) this.page.drawLine({ start: { x: this.leftPt, y: this.yPt - 3 }, end: { x: this.leftPt + this.contentWidthPt, y: this.yPt - 3 }, thickness: 0.8, color: GREY });
+    if (level === 1)
+      this.page.drawLine({
+        start: { x: this.leftPt, y: this.yPt - 3 },
+        end: { x: this.leftPt + this.contentWidthPt, y: this.yPt - 3 },
+        thickness: 0.8,
+        color: GREY,
+      });
     this.yPt -= level === 1 ? 9 : 4;
   }
 
   tickBox(xPt: number, baselinePt: number, sizePt: number): void {
-    this.page.drawRectangle({ x: xPt, y: baselinePt - 1, width: sizePt, height: sizePt, borderColor: INK, borderWidth: 0.7 });
+    this.page.drawRectangle({
+      x: xPt,
+      y: baselinePt - 1,
+      width: sizePt,
+      height: sizePt,
+      borderColor: INK,
+      borderWidth: 0.7,
+    });
   }
 
   /**
@@ -253,11 +266,21 @@ export class Layout {
     const widthOf = (i: number) => colW[i] - 2 * pad;
     const spanW = this.contentWidthPt - 2 * pad;
     const wrapRow = (row: Row): string[][] =>
-      row.span ? [this.wrap(row.cells[0] ?? '', spanW, sizePt, row.bold)] : row.cells.map((c, i) => (columns[i]?.tick ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, row.bold)));
-    const drawRow = (wrapped: string[][], bold: boolean, fill: RGB | null, color: RGB, isHeader: boolean, span = false) => {
+      row.span
+        ? [this.wrap(row.cells[0] ?? '', spanW, sizePt, row.bold)]
+        : row.cells.map((c, i) => (columns[i]?.tick ? [''] : this.wrap(c ?? '', widthOf(i), sizePt, row.bold)));
+    const drawRow = (
+      wrapped: string[][],
+      bold: boolean,
+      fill: RGB | null,
+      color: RGB,
+      isHeader: boolean,
+      span = false,
+    ) => {
       const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
       const top = this.yPt;
-      if (fill) this.page.drawRectangle({ x: this.leftPt, y: top - h, width: this.contentWidthPt, height: h, color: fill });
+      if (fill)
+        this.page.drawRectangle({ x: this.leftPt, y: top - h, width: this.contentWidthPt, height: h, color: fill });
       wrapped.forEach((lines, i) => {
         const col = columns[i];
         if (!col) return;
@@ -271,7 +294,12 @@ export class Layout {
           this.drawAt(line, lx, top - pad - (k + 1) * lineH + sizePt * 0.3, sizePt, bold, color);
         });
       });
-      this.page.drawLine({ start: { x: this.leftPt, y: top - h }, end: { x: this.leftPt + this.contentWidthPt, y: top - h }, thickness: isHeader ? 0.8 : 0.3, color: isHeader ? GREY : RULE });
+      this.page.drawLine({
+        start: { x: this.leftPt, y: top - h },
+        end: { x: this.leftPt + this.contentWidthPt, y: top - h },
+        thickness: isHeader ? 0.8 : 0.3,
+        color: isHeader ? GREY : RULE,
+      });
       this.yPt = top - h;
       return h;
     };
@@ -288,7 +316,15 @@ export class Layout {
         if (continuedLabel) this.text(`${continuedLabel} (continued)`, { sizePt: 8, color: GREY, afterPt: 3 });
         header();
         // a group heading (span row) is repeated above the rest of its rows
-        if (group && !row.span) drawRow(wrapRow({ ...group, cells: [`${group.cells[0]} (continued)`] }), !!group.bold, group.shade ? SHADE : null, group.color ?? INK, false, true);
+        if (group && !row.span)
+          drawRow(
+            wrapRow({ ...group, cells: [`${group.cells[0]} (continued)`] }),
+            !!group.bold,
+            group.shade ? SHADE : null,
+            group.color ?? INK,
+            false,
+            true,
+          );
       }
       if (row.span) group = row;
       drawRow(wrapped, !!row.bold, row.shade ? SHADE : null, row.color ?? INK, false, row.span);
@@ -303,7 +339,12 @@ export class Layout {
     this.pages.forEach((p, i) => {
       const right = `page ${i + 1} of ${n}`;
       const y = this.marginBottomPt / 2 - 4;
-      p.drawLine({ start: { x: this.leftPt, y: y + 11 }, end: { x: this.leftPt + this.contentWidthPt, y: y + 11 }, thickness: 0.4, color: RULE });
+      p.drawLine({
+        start: { x: this.leftPt, y: y + 11 },
+        end: { x: this.leftPt + this.contentWidthPt, y: y + 11 },
+        thickness: 0.4,
+        color: RULE,
+      });
       const left = this.clean(leftText(i));
       p.drawText(left, { x: this.leftPt, y, size, font: this.fonts.regular, color: GREY });
       const w = this.width(right, size);

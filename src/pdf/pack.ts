@@ -39,7 +39,12 @@ export async function buildPackWithInfo(project: Project, report: PackReport, op
     budgetSection(l, report.budget);
     supplySection(l, report.supply, report.heat ?? null);
     rfSection(l, report.rf);
-    checklistPages(l, 'Build checklist', 'Stages in build order. Tick each line as you go; the numbers come from this pack’s computed results.', buildChecklist(project, report));
+    checklistPages(
+      l,
+      'Build checklist',
+      'Stages in build order. Tick each line as you go; the numbers come from this pack’s computed results.',
+      buildChecklist(project, report),
+    );
     checklistPages(l, 'Safety checklist', '', withoutPreamble(safetyChecklist(project, report)));
     l.newPage();
     sourcesSection(l, project, report);

@@ -38,7 +38,11 @@ function niceStep(span: number, target: number): number {
 }
 
 export function plot(l: Layout, spec: PlotSpec): void {
-  const finite = spec.series.map((s) => s.xs.map((x, i) => [x, s.ys[i]] as const).filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y) && (!spec.xLog || x > 0)));
+  const finite = spec.series.map((s) =>
+    s.xs
+      .map((x, i) => [x, s.ys[i]] as const)
+      .filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y) && (!spec.xLog || x > 0)),
+  );
   const pts = finite.flat();
   if (pts.length < 2) {
     l.text(`${spec.title}: no data to plot.`, { color: GREY });
@@ -70,7 +74,12 @@ export function plot(l: Layout, spec: PlotSpec): void {
   const page = l.page;
 
   for (let y = y0; y <= y1 + yStep * 1e-6; y += yStep) {
-    page.drawLine({ start: { x: leftPt, y: py(y) }, end: { x: leftPt + widthPt, y: py(y) }, thickness: 0.3, color: RULE });
+    page.drawLine({
+      start: { x: leftPt, y: py(y) },
+      end: { x: leftPt + widthPt, y: py(y) },
+      thickness: 0.3,
+      color: RULE,
+    });
     const label = spec.yTick(y);
     l.drawAt(label, leftPt - 4 - l.textWidth(label, 7), py(y) - 2.5, 7, false, GREY);
   }
@@ -85,20 +94,33 @@ export function plot(l: Layout, spec: PlotSpec): void {
     for (let v = Math.ceil(x0 / step) * step; v <= x1 + step * 1e-6; v += step) xTicks.push(v);
   }
   for (const v of xTicks) {
-    page.drawLine({ start: { x: px(v), y: bottomPt }, end: { x: px(v), y: bottomPt + heightPt }, thickness: 0.3, color: RULE });
+    page.drawLine({
+      start: { x: px(v), y: bottomPt },
+      end: { x: px(v), y: bottomPt + heightPt },
+      thickness: 0.3,
+      color: RULE,
+    });
     const label = spec.xTick(v);
     l.drawAt(label, px(v) - l.textWidth(label, 7) / 2, bottomPt - 10, 7, false, GREY);
   }
   page.drawRectangle({ x: leftPt, y: bottomPt, width: widthPt, height: heightPt, borderColor: GREY, borderWidth: 0.7 });
   for (const m of spec.markers ?? []) {
     if (tx(m.x) < x0 || tx(m.x) > x1) continue;
-    page.drawLine({ start: { x: px(m.x), y: bottomPt }, end: { x: px(m.x), y: bottomPt + heightPt }, thickness: 0.6, color: GREY, dashArray: [3, 2] });
+    page.drawLine({
+      start: { x: px(m.x), y: bottomPt },
+      end: { x: px(m.x), y: bottomPt + heightPt },
+      thickness: 0.6,
+      color: GREY,
+      dashArray: [3, 2],
+    });
     l.drawAt(m.label, px(m.x) + 2, bottomPt + heightPt - 9, 7, false, GREY);
   }
   finite.forEach((points, si) => {
     if (points.length < 2) return;
     // one SVG path per series; drawSvgPath's y axis points down from the given origin
-    const d = points.map(([x, y], i) => `${i === 0 ? 'M' : 'L'}${(px(x) - leftPt).toFixed(2)} ${(topPt - py(y)).toFixed(2)}`).join(' ');
+    const d = points
+      .map(([x, y], i) => `${i === 0 ? 'M' : 'L'}${(px(x) - leftPt).toFixed(2)} ${(topPt - py(y)).toFixed(2)}`)
+      .join(' ');
     page.drawSvgPath(d, { x: leftPt, y: topPt, borderColor: spec.series[si].color, borderWidth: 1.1 });
   });
   // legend and axis labels

@@ -19,7 +19,16 @@ export function checklistPages(l: Layout, title: string, intro: string, sections
       l.ensure(lines.length * lineH + 3);
       l.yPt -= lineH;
       l.tickBox(l.leftPt, l.yPt + 1, boxPt);
-      lines.forEach((line, i) => l.drawAt(line, textX, l.yPt - i * lineH + size * 0.28, size, false, item.emphasis === 'caution' ? CAUTION : INK));
+      lines.forEach((line, i) =>
+        l.drawAt(
+          line,
+          textX,
+          l.yPt - i * lineH + size * 0.28,
+          size,
+          false,
+          item.emphasis === 'caution' ? CAUTION : INK,
+        ),
+      );
       l.yPt -= (lines.length - 1) * lineH + 3.5;
     }
     l.gap(3);

@@ -18,7 +18,9 @@ export function keyValues(l: Layout, rows: [string, string][], keyWidthPt = 170,
     l.ensure(n * lineH);
     l.yPt -= lineH;
     keys.forEach((line, i) => l.drawAt(line, l.leftPt, l.yPt - i * lineH + sizePt * 0.28, sizePt, false, GREY));
-    lines.forEach((line, i) => l.drawAt(line, l.leftPt + keyWidthPt, l.yPt - i * lineH + sizePt * 0.28, sizePt, false, INK));
+    lines.forEach((line, i) =>
+      l.drawAt(line, l.leftPt + keyWidthPt, l.yPt - i * lineH + sizePt * 0.28, sizePt, false, INK),
+    );
     l.yPt -= (n - 1) * lineH + 1.5;
   }
   l.yPt -= 6;
@@ -60,7 +62,8 @@ export function findingsList(l: Layout, findings: readonly Finding[], onlyProble
       l.yPt -= 2;
     }
   }
-  if (list.length > shown.length) l.text(`… and ${list.length - shown.length} more in the sections that follow.`, { color: GREY, sizePt: 8.5 });
+  if (list.length > shown.length)
+    l.text(`… and ${list.length - shown.length} more in the sections that follow.`, { color: GREY, sizePt: 8.5 });
   l.yPt -= 4;
 }
 

@@ -23,7 +23,11 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null, 
   if (!cost) return notComputed(l, 'Costing');
   const roleOf = lineRoleText(report);
   const money = (c: number) => formatMoney(c, cost.currency);
-  l.text(`${cost.kits} kit${cost.kits === 1 ? '' : 's'}; prices in ${cost.currency}. ${cost.methodNote}`, { sizePt: 8.5, color: GREY, afterPt: 6 });
+  l.text(`${cost.kits} kit${cost.kits === 1 ? '' : 's'}; prices in ${cost.currency}. ${cost.methodNote}`, {
+    sizePt: 8.5,
+    color: GREY,
+    afterPt: 6,
+  });
   const columns: Column[] = [
     { header: 'Refs', width: 0.085 },
     { header: 'Description', width: 0.34 },
@@ -44,10 +48,21 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null, 
       const role = roleOf.get(x.lineId);
       const plain = flags ? `${x.description || x.partId} [${flags}]` : x.description;
       const desc = role ? `${plain}. ${role.text}` : plain;
-      const unit = x.unitPriceCents !== null && x.offerCurrency ? formatMoney(x.unitPriceCents, x.offerCurrency) : '—';
+      const unit =
+        x.unitPriceCents !== null && x.offerCurrency ? formatMoney(x.unitPriceCents, x.offerCurrency) : '—';
       rows.push({
-        cells: [x.refs, desc, String(x.qtyPerRig), String(x.orderQty), x.supplier ? `${x.supplier} ${x.sku ?? ''}` : 'unpriced', unit, x.supplier ? money(x.lineCostCents) : '—'],
-        color: x.flags.some((f) => f !== 'zero-qty') ? FAIL : stateColor(role?.state === 'unbound' ? undefined : role?.state),
+        cells: [
+          x.refs,
+          desc,
+          String(x.qtyPerRig),
+          String(x.orderQty),
+          x.supplier ? `${x.supplier} ${x.sku ?? ''}` : 'unpriced',
+          unit,
+          x.supplier ? money(x.lineCostCents) : '—',
+        ],
+        color: x.flags.some((f) => f !== 'zero-qty')
+          ? FAIL
+          : stateColor(role?.state === 'unbound' ? undefined : role?.state),
       });
     }
     rows.push({ cells: ['', `Subtotal ${st.name}`, '', '', '', '', money(st.partsCents)], bold: true });
@@ -57,18 +72,40 @@ export function partsList(l: Layout, project: Project, cost: CostReport | null, 
 
   l.heading('Totals', 2, 80);
   const totals: Row[] = [];
-  for (const s of cost.suppliers) totals.push({ cells: [`${s.supplier} (${s.lineCount} lines)`, money(s.partsCents), money(s.shippingCents)] });
-  totals.push({ cells: ['Parts and shipping', money(cost.totals.partsCents), money(cost.totals.shippingCents)], bold: true, shade: true });
-  l.table([{ header: 'Supplier', width: 0.6 }, { header: 'Parts', width: 0.2, align: 'right' }, { header: 'Shipping', width: 0.2, align: 'right' }], totals);
+  for (const s of cost.suppliers)
+    totals.push({ cells: [`${s.supplier} (${s.lineCount} lines)`, money(s.partsCents), money(s.shippingCents)] });
+  totals.push({
+    cells: ['Parts and shipping', money(cost.totals.partsCents), money(cost.totals.shippingCents)],
+    bold: true,
+    shade: true,
+  });
+  l.table(
+    [
+      { header: 'Supplier', width: 0.6 },
+      { header: 'Parts', width: 0.2, align: 'right' },
+      { header: 'Shipping', width: 0.2, align: 'right' },
+    ],
+    totals,
+  );
   const sum: Row[] = [{ cells: ['Build total', money(cost.totals.buildCents)], bold: true }];
-  if (cost.totals.perKitCents !== null && cost.kits > 1) sum.push({ cells: [`Per kit (${cost.kits} kits, shipping shared)`, money(cost.totals.perKitCents)], bold: true });
-  if (cost.totals.perKitPartsCents !== null && cost.kits > 1) sum.push({ cells: ['Per kit, parts only', money(cost.totals.perKitPartsCents)] });
-  if (cost.raisedSavingsCents > 0) sum.push({ cells: ['Saved by buying up to a price break (included above)', money(cost.raisedSavingsCents)] });
-  if (cost.totals.unpricedLines > 0) sum.push({ cells: [`Unpriced lines left out of the totals`, String(cost.totals.unpricedLines)], color: FAIL });
+  if (cost.totals.perKitCents !== null && cost.kits > 1)
+    sum.push({ cells: [`Per kit (${cost.kits} kits, shipping shared)`, money(cost.totals.perKitCents)], bold: true });
+  if (cost.totals.perKitPartsCents !== null && cost.kits > 1)
+    sum.push({ cells: ['Per kit, parts only', money(cost.totals.perKitPartsCents)] });
+  if (cost.raisedSavingsCents > 0)
+    sum.push({ cells: ['Saved by buying up to a price break (included above)', money(cost.raisedSavingsCents)] });
+  if (cost.totals.unpricedLines > 0)
+    sum.push({ cells: [`Unpriced lines left out of the totals`, String(cost.totals.unpricedLines)], color: FAIL });
   const single = cost.singleSupplier;
   if (single.available) {
     const gap = single.unpricedLines > 0 ? `; incomplete: ${single.unpricedLines} unpriced line(s) left out` : '';
-    sum.push({ cells: [`Everything from ${single.supplier} (${money(single.extraCents)} more than the plan${gap})`, money(single.totalCents)], color: single.unpricedLines > 0 ? FAIL : undefined });
+    sum.push({
+      cells: [
+        `Everything from ${single.supplier} (${money(single.extraCents)} more than the plan${gap})`,
+        money(single.totalCents),
+      ],
+      color: single.unpricedLines > 0 ? FAIL : undefined,
+    });
   } else sum.push({ cells: [`Everything from one supplier: not possible. ${single.reason}`, '—'] });
   l.table([{ header: 'Total', width: 0.7 }, { header: cost.currency, width: 0.3, align: 'right' }], sum);
   orderSheetTables(l, cost);
@@ -98,8 +135,17 @@ function orderSheetTables(l: Layout, cost: CostReport): void {
     for (const x of sheet.lines) {
       const desc = x.refs ? `${x.description} (${x.refs})` : x.description;
       const more = x.qty > x.neededQty ? ` (need ${x.neededQty})` : '';
-      rows.push({ cells: [x.sku || '—', desc + more, String(x.qty), x.breakMinQty === null ? '—' : String(x.breakMinQty),
-        formatMoney(x.unitPriceCents, x.offerCurrency), formatMoney(x.offerCostCents, x.offerCurrency), money(x.lineCostCents)] });
+      rows.push({
+        cells: [
+          x.sku || '—',
+          desc + more,
+          String(x.qty),
+          x.breakMinQty === null ? '—' : String(x.breakMinQty),
+          formatMoney(x.unitPriceCents, x.offerCurrency),
+          formatMoney(x.offerCostCents, x.offerCurrency),
+          money(x.lineCostCents),
+        ],
+      });
     }
     rows.push({ cells: ['', 'Parts', '', '', '', '', money(sheet.partsCents)] });
     rows.push({ cells: ['', 'Shipping', '', '', '', '', money(sheet.shippingCents)] });
@@ -117,9 +163,18 @@ export function packingSheets(l: Layout, project: Project, cost: CostReport | nu
   for (let k = 1; k <= project.kits; k++) {
     l.newPage();
     l.heading(`Packing sheet — kit ${k} of ${project.kits}`, 1, 80);
-    l.text('Builder: ______________________   Packed by: ____________   Checked by: ____________', { sizePt: 9.5, afterPt: 8 });
+    l.text('Builder: ______________________   Packed by: ____________   Checked by: ____________', {
+      sizePt: 9.5,
+      afterPt: 8,
+    });
     const rows: Row[] = lines.map((b) => ({
-      cells: ['', String(b.qtyPerRig), b.refs, partById.get(b.partId)?.description ?? b.partId, b.stageId ? (stageName.get(b.stageId) ?? '') : 'General'],
+      cells: [
+        '',
+        String(b.qtyPerRig),
+        b.refs,
+        partById.get(b.partId)?.description ?? b.partId,
+        b.stageId ? (stageName.get(b.stageId) ?? '') : 'General',
+      ],
     }));
     l.table(
       [
@@ -133,7 +188,12 @@ export function packingSheets(l: Layout, project: Project, cost: CostReport | nu
       8.5,
       `Packing sheet — kit ${k} of ${project.kits}`,
     );
-    l.text(`${lines.length} lines. Spares and attrition stock stay with the organiser${cost ? ` (ordered for the whole build: ${cost.lines.reduce((a, x) => a + x.orderQty, 0)} pieces)` : ''}.`, { sizePt: 8, color: GREY });
+    l.text(
+      `${lines.length} lines. Spares and attrition stock stay with the ` +
+        `organiser` +
+        `${cost ? ` (ordered for the whole build: ${cost.lines.reduce((a, x) => a + x.orderQty, 0)} pieces)` : ''}.`,
+      { sizePt: 8, color: GREY },
+    );
   }
   return project.kits;
 }

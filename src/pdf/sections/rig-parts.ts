@@ -25,7 +25,10 @@ export function rigPartsList(l: Layout, project: Project, report: PackRoles = {}
     for (const b of lines) {
       const role = roleOf.get(b.id);
       const part = partById.get(b.partId)?.description ?? b.partId;
-      rows.push({ cells: [b.refs, role ? `${part}. ${role.text}` : part, String(b.qtyPerRig), b.notes], color: stateColor(role?.state) });
+      rows.push({
+        cells: [b.refs, role ? `${part}. ${role.text}` : part, String(b.qtyPerRig), b.notes],
+        color: stateColor(role?.state),
+      });
     }
   }
   if (!rows.length) {
