@@ -70,7 +70,11 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
  * Run `op` again while it fails with SQLITE_BUSY, with jittered exponential backoff, for up to `retryForMs`.
  * `recover` runs after each busy failure, after a wait (a timer turn at least), before anything else.
  */
-export async function retryBusy<T>(op: () => Promise<T>, retryForMs: number, recover?: () => void | Promise<void>): Promise<T> {
+export async function retryBusy<T>(
+  op: () => Promise<T>,
+  retryForMs: number,
+  recover?: () => void | Promise<void>,
+): Promise<T> {
   const start = Date.now();
   for (let attempt = 1; ; attempt++) {
     try {

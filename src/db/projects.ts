@@ -42,7 +42,8 @@ export async function listProjects(db: Db): Promise<ProjectSummary[]> {
   }));
 }
 
-const jsonObject = (v: unknown): Record<string, unknown> => (v !== null && typeof v === 'object' && !Array.isArray(v) ? (v as Record<string, unknown>) : {});
+const jsonObject = (v: unknown): Record<string, unknown> =>
+  v !== null && typeof v === 'object' && !Array.isArray(v) ? (v as Record<string, unknown>) : {};
 
 /** Only the data blocks the registry knows from the params column (an odd key must not overwrite the loads). */
 function stageData(v: unknown): Partial<Pick<Stage, StageDataKey>> {
@@ -53,20 +54,55 @@ function stageData(v: unknown): Partial<Pick<Stage, StageDataKey>> {
 export async function loadProject(db: Db | Tx, id: string): Promise<Project | null> {
   const [p] = await db.select().from(t.projects).where(eq(t.projects.id, id));
   if (!p) return null;
-  const trafoRows = await db.select().from(t.transformers).where(eq(t.transformers.projectId, id)).orderBy(asc(t.transformers.position));
+  const trafoRows = await db
+    .select()
+    .from(t.transformers)
+    .where(eq(t.transformers.projectId, id))
+    .orderBy(asc(t.transformers.position));
   const windingRows = trafoRows.length
-    ? await db.select().from(t.windings).where(inArray(t.windings.transformerId, trafoRows.map((r) => r.id))).orderBy(asc(t.windings.position))
+    ? await db
+        .select()
+        .from(t.windings)
+        .where(
+          inArray(
+            t.windings.transformerId,
+            trafoRows.map((r) => r.id),
+          ),
+        )
+        .orderBy(asc(t.windings.position))
     : [];
   const railRows = await db.select().from(t.rails).where(eq(t.rails.projectId, id)).orderBy(asc(t.rails.position));
   const stageRows = await db.select().from(t.stages).where(eq(t.stages.projectId, id)).orderBy(asc(t.stages.position));
   const loadRows = stageRows.length
-    ? await db.select().from(t.stageLoads).where(inArray(t.stageLoads.stageId, stageRows.map((r) => r.id))).orderBy(asc(t.stageLoads.position))
+    ? await db
+        .select()
+        .from(t.stageLoads)
+        .where(
+          inArray(
+            t.stageLoads.stageId,
+            stageRows.map((r) => r.id),
+          ),
+        )
+        .orderBy(asc(t.stageLoads.position))
     : [];
   const partRows = await db.select().from(t.parts).where(eq(t.parts.projectId, id)).orderBy(asc(t.parts.position));
   const offerRows = partRows.length
-    ? await db.select().from(t.offers).where(inArray(t.offers.partId, partRows.map((r) => r.id))).orderBy(asc(t.offers.position))
+    ? await db
+        .select()
+        .from(t.offers)
+        .where(
+          inArray(
+            t.offers.partId,
+            partRows.map((r) => r.id),
+          ),
+        )
+        .orderBy(asc(t.offers.position))
     : [];
-  const bomRows = await db.select().from(t.bomLines).where(eq(t.bomLines.projectId, id)).orderBy(asc(t.bomLines.position));
+  const bomRows = await db
+    .select()
+    .from(t.bomLines)
+    .where(eq(t.bomLines.projectId, id))
+    .orderBy(asc(t.bomLines.position));
   const coreRows = await db.select().from(t.cores).where(eq(t.cores.projectId, id)).orderBy(asc(t.cores.position));
 
   const transformers: Transformer[] = trafoRows.map((tr) => ({
@@ -77,12 +113,22 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     ...(tr.secondaryToleranceFraction !== null ? { secondaryToleranceFraction: tr.secondaryToleranceFraction } : {}),
     windings: windingRows
       .filter((w) => w.transformerId === tr.id)
-      .map((w) => ({ id: w.id, name: w.name, ratedVrms: w.ratedVrms, ratedA: w.ratedA, regulationFraction: w.regulationFraction, resistanceOhm: w.resistanceOhm, ...(w.leakageH !== null ? { leakageH: w.leakageH } : {}) })),
+      .map((w) => ({
+        id: w.id,
+        name: w.name,
+        ratedVrms: w.ratedVrms,
+        ratedA: w.ratedA,
+        regulationFraction: w.regulationFraction,
+        resistanceOhm: w.resistanceOhm,
+        ...(w.leakageH !== null ? { leakageH: w.leakageH } : {}),
+      })),
   }));
   // JSON columns are not trusted: a non-object reads as no data, and evaluate() checks every field against its spec
   // (src/core/spec/project-check.ts), so a bad stored value is a fail finding naming it, never replaced silently.
   // rows written before a rail field existed read it as not stated (withRailDefaults)
-  const rails = railRows.map((r) => withRailDefaults({ ...jsonObject(r.params), id: r.id, name: r.name, kind: r.kind } as Rail));
+  const rails = railRows.map((r) =>
+    withRailDefaults({ ...jsonObject(r.params), id: r.id, name: r.name, kind: r.kind } as Rail),
+  );
   const stages: Stage[] = stageRows.map((s) => ({
     id: s.id,
     kind: s.kind as Stage['kind'],
@@ -112,10 +158,23 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
         stockNote: o.stockNote,
       })),
   }));
-  const bom: BomLine[] = bomRows.map((b) => ({ id: b.id, stageId: b.stageId, partId: b.partId, qtyPerRig: b.qtyPerRig, refs: b.refs, notes: b.notes, roleId: b.roleId }));
+  const bom: BomLine[] = bomRows.map((b) => ({
+    id: b.id,
+    stageId: b.stageId,
+    partId: b.partId,
+    qtyPerRig: b.qtyPerRig,
+    refs: b.refs,
+    notes: b.notes,
+    roleId: b.roleId,
+  }));
   const mains =
     p.mainsNominalV !== null && p.mainsFrequencyHz !== null
-      ? { nominalV: p.mainsNominalV, frequencyHz: p.mainsFrequencyHz, lowFraction: p.mainsLowFraction ?? 0.1, highFraction: p.mainsHighFraction ?? 0.1 }
+      ? {
+          nominalV: p.mainsNominalV,
+          frequencyHz: p.mainsFrequencyHz,
+          lowFraction: p.mainsLowFraction ?? 0.1,
+          highFraction: p.mainsHighFraction ?? 0.1,
+        }
       : null;
   return {
     id: p.id,
@@ -131,7 +190,11 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     ...(p.variantOf ? { variantOf: p.variantOf } : {}),
     version: p.version,
     supply: {
-      transformers, rails, primaryFuseA: p.primaryFuseA, enclosureAreaM2: p.enclosureAreaM2, enclosureUWPerM2K: p.enclosureUWPerM2K,
+      transformers,
+      rails,
+      primaryFuseA: p.primaryFuseA,
+      enclosureAreaM2: p.enclosureAreaM2,
+      enclosureUWPerM2K: p.enclosureUWPerM2K,
       // null columns (rows written before migration 0006) stay absent: read as T3 and duty
       ...(p.primaryFuseSheet !== null ? { primaryFuseSheet: p.primaryFuseSheet as FuseSheet } : {}),
       ...(p.transformerSizing !== null ? { transformerSizing: p.transformerSizing as TransformerSizing } : {}),
@@ -142,7 +205,9 @@ export async function loadProject(db: Db | Tx, id: string): Promise<Project | nu
     bom,
     costing: p.costing as Costing,
     // JSON not trusted here either: the core spec's check reports a bad stored value by name
-    ...(coreRows.length ? { cores: coreRows.map((c) => ({ ...jsonObject(c.params), id: c.id, name: c.name }) as CatalogCore) } : {}),
+    ...(coreRows.length
+      ? { cores: coreRows.map((c) => ({ ...jsonObject(c.params), id: c.id, name: c.name }) as CatalogCore) }
+      : {}),
   };
 }
 
@@ -161,8 +226,16 @@ function childRows(project: Project) {
     cores: [] as Row[],
   };
   for (const [i, tr] of project.supply.transformers.entries()) {
-    rows.transformers.push({ id: tr.id, projectId: id, position: i, name: tr.name, construction: tr.construction, secondaryToleranceFraction: tr.secondaryToleranceFraction ?? null });
-    for (const [j, w] of tr.windings.entries()) rows.windings.push({ ...w, leakageH: w.leakageH ?? null, transformerId: tr.id, position: j });
+    rows.transformers.push({
+      id: tr.id,
+      projectId: id,
+      position: i,
+      name: tr.name,
+      construction: tr.construction,
+      secondaryToleranceFraction: tr.secondaryToleranceFraction ?? null,
+    });
+    for (const [j, w] of tr.windings.entries())
+      rows.windings.push({ ...w, leakageH: w.leakageH ?? null, transformerId: tr.id, position: j });
   }
   for (const [i, rail] of project.supply.rails.entries()) {
     const { id: railId, name, kind, ...params } = rail;
@@ -206,7 +279,8 @@ function storedForm(table: ChildTable, row: Row): string {
 /** Every column of a changed row, as an INSERT would store it: a missing value is the column's default, else null. */
 function updateSet(table: ChildTable, row: Row): Record<string, unknown> {
   const columns = Object.entries(getTableColumns(t[table])).filter(([k]) => k !== 'id');
-  const value = (k: string, c: { default?: unknown }) => (row[k] !== undefined ? row[k] : c.default !== undefined ? c.default : null);
+  const value = (k: string, c: { default?: unknown }) =>
+    row[k] !== undefined ? row[k] : c.default !== undefined ? c.default : null;
   return Object.fromEntries(columns.map(([k, c]) => [k, value(k, c)]));
 }
 
@@ -284,8 +358,13 @@ export async function loadSnapshot(db: Db | Tx, id: string, version: number): Pr
 async function keepSnapshot(tx: Tx, id: string): Promise<Project> {
   const stored = await loadProject(tx, id);
   if (!stored) throw new NotFound(`No project ${id}`);
-  await tx.insert(t.projectVersions).values({ projectId: id, version: stored.version, snapshot: stored }).onConflictDoNothing();
-  await tx.delete(t.projectVersions).where(and(eq(t.projectVersions.projectId, id), lte(t.projectVersions.version, stored.version - KEEP_VERSIONS)));
+  await tx
+    .insert(t.projectVersions)
+    .values({ projectId: id, version: stored.version, snapshot: stored })
+    .onConflictDoNothing();
+  await tx
+    .delete(t.projectVersions)
+    .where(and(eq(t.projectVersions.projectId, id), lte(t.projectVersions.version, stored.version - KEEP_VERSIONS)));
   return stored;
 }
 
@@ -293,9 +372,13 @@ async function keepSnapshot(tx: Tx, id: string): Promise<Project> {
 export async function insertProject(database: Database, project: Project, nowIso: string): Promise<Project> {
   return database.write(async (tx) => {
     // a variant whose original is not in this database (an imported file) stands alone
-    const original = project.variantOf ? await tx.select({ id: t.projects.id }).from(t.projects).where(eq(t.projects.id, project.variantOf)) : [];
+    const original = project.variantOf
+      ? await tx.select({ id: t.projects.id }).from(t.projects).where(eq(t.projects.id, project.variantOf))
+      : [];
     const columns = { ...projectColumns(project), variantOf: original.length ? project.variantOf! : null };
-    await tx.insert(t.projects).values({ id: project.id, ...columns, version: 1, createdAt: nowIso, updatedAt: nowIso });
+    await tx
+      .insert(t.projects)
+      .values({ id: project.id, ...columns, version: 1, createdAt: nowIso, updatedAt: nowIso });
     await writeChildren(tx, project, null);
     return keepSnapshot(tx, project.id);
   });
@@ -316,7 +399,10 @@ export async function changeProject(
     const current = await loadProject(tx, id);
     if (!current) throw new NotFound(`No project ${id}`);
     const next = { ...(await change(current, tx)), id, version: current.version + 1 };
-    await tx.update(t.projects).set({ ...projectColumns(next), version: next.version, updatedAt: nowIso }).where(eq(t.projects.id, id));
+    await tx
+      .update(t.projects)
+      .set({ ...projectColumns(next), version: next.version, updatedAt: nowIso })
+      .where(eq(t.projects.id, id));
     await writeChildren(tx, next, current);
     return keepSnapshot(tx, id);
   });

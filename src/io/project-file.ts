@@ -35,7 +35,8 @@ const rail = z
     // a file written before a rail field existed reads it as not stated (the same defaults as old database rows)
     const res = specFileSchema<object>(railKinds[r.kind]).safeParse(withRailDefaults(r as unknown as Rail));
     if (res.success) return { ...res.data, kind: r.kind, id: r.id } as Rail;
-    for (const issue of res.error.issues) ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
+    for (const issue of res.error.issues)
+      ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
     return z.NEVER;
   });
 // Fields added after files were first written may be absent: a winding's leakage (absent = split from the regulation
@@ -44,24 +45,33 @@ const windingShape = specShape(windingSpec);
 const winding = z.object({ id, ...windingShape, leakageH: windingShape.leakageH.optional() });
 const transformerShape = specShape(transformerSpec);
 const transformer = z.object({
-  id, ...transformerShape, secondaryToleranceFraction: transformerShape.secondaryToleranceFraction.optional(), windings: z.array(winding).max(20),
+  id,
+  ...transformerShape,
+  secondaryToleranceFraction: transformerShape.secondaryToleranceFraction.optional(),
+  windings: z.array(winding).max(20),
 });
 
 // stage kinds' data: the same specs as the forms and core's checks, one optional block per registry entry
 const stageDataSchemas = Object.fromEntries(STAGE_DATA.map((d) => [d.key, specFileSchema<unknown>(d.spec).optional()]));
 
-const stage = z.object({
-  id,
-  ...specShape(stageSpec),
-  loads: z.array(specFileSchema<StageLoad>(loadSpec)).max(20),
-  ...stageDataSchemas,
-}).superRefine((s, ctx) => {
-  // each kind carries only its own data (the database keeps one set per stage; a driver must not carry a hidden PA)
-  const o = s as Record<string, unknown>;
-  for (const d of STAGE_DATA)
-    if (o[d.key] !== undefined && o.kind !== d.kind)
-      ctx.addIssue({ code: 'custom', path: [d.key], message: `only a stage of kind "${d.kind}" has ${d.key} data; this stage is "${String(o.kind)}"` });
-});
+const stage = z
+  .object({
+    id,
+    ...specShape(stageSpec),
+    loads: z.array(specFileSchema<StageLoad>(loadSpec)).max(20),
+    ...stageDataSchemas,
+  })
+  .superRefine((s, ctx) => {
+    // each kind carries only its own data (the database keeps one set per stage; a driver must not carry a hidden PA)
+    const o = s as Record<string, unknown>;
+    for (const d of STAGE_DATA)
+      if (o[d.key] !== undefined && o.kind !== d.kind)
+        ctx.addIssue({
+          code: 'custom',
+          path: [d.key],
+          message: `only a stage of kind "${d.kind}" has ${d.key} data; this stage is "${String(o.kind)}"`,
+        });
+  });
 
 // parts, offers, suppliers, parts-list lines and costing settings: the same specs as the catalog and parts-list forms
 // (a spec's shape checks values, not TypeScript types: the model types are stated here)
@@ -69,15 +79,26 @@ const offer = z.object({ id, ...specShape(offerSpec) });
 const part = z.object({ id, ...specShape(partSpec), offers: z.array(offer).max(50) }) as unknown as z.ZodType<Part>;
 const supplier = z.object(specShape(supplierSpec));
 // files written before lines were bound to design roles have no roleId: read as not bound
-const bomLine = z.object({ id, ...specShape(bomLineSpec), roleId: specValueSchema(bomLineSpec.fields.roleId).optional() }) as unknown as z.ZodType<BomLine>;
+const bomLine = z.object({
+  id,
+  ...specShape(bomLineSpec),
+  roleId: specValueSchema(bomLineSpec.fields.roleId).optional(),
+}) as unknown as z.ZodType<BomLine>;
 // the core catalog: the same spec as the cores page's forms; files written before it existed have none
-const core = z.object({ id }).loose().transform((c, ctx): CatalogCore => {
-  const res = specFileSchema<object>(coreSpec).safeParse(c);
-  if (res.success) return { ...res.data, id: c.id } as CatalogCore;
-  for (const issue of res.error.issues) ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
-  return z.NEVER;
-});
-const costing = z.object({ ...specShape(costingSpec), suppliers: z.array(supplier).max(200) }) as unknown as z.ZodType<Costing>;
+const core = z
+  .object({ id })
+  .loose()
+  .transform((c, ctx): CatalogCore => {
+    const res = specFileSchema<object>(coreSpec).safeParse(c);
+    if (res.success) return { ...res.data, id: c.id } as CatalogCore;
+    for (const issue of res.error.issues)
+      ctx.addIssue({ code: 'custom', path: issue.path as (string | number)[], message: issue.message });
+    return z.NEVER;
+  });
+const costing = z.object({
+  ...specShape(costingSpec),
+  suppliers: z.array(supplier).max(200),
+}) as unknown as z.ZodType<Costing>;
 
 // the project's own values, its mains and its RF settings: the same specs as the settings forms and core's checks
 const projectFields = specShape(projectFieldsSpec);
@@ -96,7 +117,9 @@ export const projectSchema = z.object({
     rails: z.array(rail).max(50),
     ...specShape(primaryFuseSpec),
     // files written before the enclosure existed have neither key: read as not stated
-    ...Object.fromEntries(Object.entries(specShape(enclosureSpec)).map(([k, s]) => [k, s.optional().transform((v) => v ?? null)])),
+    ...Object.fromEntries(
+      Object.entries(specShape(enclosureSpec)).map(([k, s]) => [k, s.optional().transform((v) => v ?? null)]),
+    ),
     // the primary fuse's sheet and the sizing basis: files written before them have neither key (read as T3, duty)
     ...Object.fromEntries(Object.entries(specShape(supplyChoicesSpec)).map(([k, s]) => [k, s.optional()])),
   }),
@@ -120,7 +143,10 @@ export type ProjectFileResult = { ok: true; project: Project } | { ok: false; er
 /** Where-and-what messages for a zod error: "project.stages[2].loads[0].currentA.keyDown: too big ...". */
 export function describeIssues(error: z.ZodError, prefix = ''): string[] {
   return error.issues.slice(0, 50).map((i) => {
-    const path = i.path.reduce<string>((acc, seg) => (typeof seg === 'number' ? `${acc}[${seg}]` : acc ? `${acc}.${String(seg)}` : String(seg)), prefix);
+    const path = i.path.reduce<string>(
+      (acc, seg) => (typeof seg === 'number' ? `${acc}[${seg}]` : acc ? `${acc}.${String(seg)}` : String(seg)),
+      prefix,
+    );
     return `${path || '(file)'}: ${i.message}`;
   });
 }
@@ -147,22 +173,29 @@ export function checkReferences(p: Project): string[] {
   dupes((p.cores ?? []).map((c) => c.id), 'core');
   const coreIds = new Set((p.cores ?? []).map((c) => c.id));
   p.supply.rails.forEach((r, i) => {
-    if (r.kind === 'rectified' && !windingIds.has(r.windingId)) errors.push(`project.supply.rails[${i}].windingId: no winding "${r.windingId}"`);
-    if (r.kind === 'regulated' && !railIds.has(r.parentId)) errors.push(`project.supply.rails[${i}].parentId: no rail "${r.parentId}"`);
-    if (r.kind === 'regulated' && r.parentId === r.id) errors.push(`project.supply.rails[${i}].parentId: a rail cannot feed itself`);
+    if (r.kind === 'rectified' && !windingIds.has(r.windingId))
+      errors.push(`project.supply.rails[${i}].windingId: no winding "${r.windingId}"`);
+    if (r.kind === 'regulated' && !railIds.has(r.parentId))
+      errors.push(`project.supply.rails[${i}].parentId: no rail "${r.parentId}"`);
+    if (r.kind === 'regulated' && r.parentId === r.id)
+      errors.push(`project.supply.rails[${i}].parentId: a rail cannot feed itself`);
   });
   p.stages.forEach((s, i) => {
     s.loads.forEach((l, j) => {
       if (!railIds.has(l.railId)) errors.push(`project.stages[${i}].loads[${j}].railId: no rail "${l.railId}"`);
     });
     if (s.pa && !railIds.has(s.pa.railId)) errors.push(`project.stages[${i}].pa.railId: no rail "${s.pa.railId}"`);
-    if (s.relay?.coilRailId && !railIds.has(s.relay.coilRailId)) errors.push(`project.stages[${i}].relay.coilRailId: no rail "${s.relay.coilRailId}"`);
-    if (s.lpf?.coreId && !coreIds.has(s.lpf.coreId)) errors.push(`project.stages[${i}].lpf.coreId: no core "${s.lpf.coreId}"`);
-    if (s.pa?.outputCoreId && !coreIds.has(s.pa.outputCoreId)) errors.push(`project.stages[${i}].pa.outputCoreId: no core "${s.pa.outputCoreId}"`);
+    if (s.relay?.coilRailId && !railIds.has(s.relay.coilRailId))
+      errors.push(`project.stages[${i}].relay.coilRailId: no rail "${s.relay.coilRailId}"`);
+    if (s.lpf?.coreId && !coreIds.has(s.lpf.coreId))
+      errors.push(`project.stages[${i}].lpf.coreId: no core "${s.lpf.coreId}"`);
+    if (s.pa?.outputCoreId && !coreIds.has(s.pa.outputCoreId))
+      errors.push(`project.stages[${i}].pa.outputCoreId: no core "${s.pa.outputCoreId}"`);
   });
   p.bom.forEach((b, i) => {
     if (!partIds.has(b.partId)) errors.push(`project.bom[${i}].partId: no part "${b.partId}"`);
-    if (b.stageId !== null && !stageIds.has(b.stageId)) errors.push(`project.bom[${i}].stageId: no stage "${b.stageId}"`);
+    if (b.stageId !== null && !stageIds.has(b.stageId))
+      errors.push(`project.bom[${i}].stageId: no stage "${b.stageId}"`);
   });
   return errors;
 }

@@ -7,7 +7,8 @@ export function specFileSchema<T>(spec: Spec) {
   return z
     .record(z.string(), z.unknown(), { message: `${spec.label}: expected an object` })
     .superRefine((o, ctx) => {
-      for (const e of validate(spec, o)) ctx.addIssue({ code: 'custom', path: e.field ? e.field.split('.') : [], message: e.message });
+      for (const e of validate(spec, o))
+        ctx.addIssue({ code: 'custom', path: e.field ? e.field.split('.') : [], message: e.message });
     })
     .transform((o) => pick(spec, o) as T);
 }
