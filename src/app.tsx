@@ -61,8 +61,12 @@ export function buildApp(deps: Deps) {
       onError: (c) => c.text(`Request refused: the body is larger than ${BODY_LIMIT_BYTES / 1024 / 1024} MiB.`, 413),
     }),
   );
-  app.get('/assets/htmx.min.js', (c) => c.body(HTMX, 200, { 'Content-Type': 'text/javascript; charset=utf-8', 'Cache-Control': 'max-age=3600' }));
-  app.get('/assets/style.css', (c) => c.body(CSS, 200, { 'Content-Type': 'text/css; charset=utf-8', 'Cache-Control': 'max-age=300' }));
+  app.get('/assets/htmx.min.js', (c) =>
+    c.body(HTMX, 200, { 'Content-Type': 'text/javascript; charset=utf-8', 'Cache-Control': 'max-age=3600' }),
+  );
+  app.get('/assets/style.css', (c) =>
+    c.body(CSS, 200, { 'Content-Type': 'text/css; charset=utf-8', 'Cache-Control': 'max-age=300' }),
+  );
   app.get('/healthz', (c) => c.text('ok'));
   app.get('/favicon.ico', (c) => c.body(null, 204));
 
@@ -91,7 +95,8 @@ export function buildApp(deps: Deps) {
         <section class="card">
           <h1>Not found</h1>
           <p>
-            There is no page at <code>{c.req.path}</code>. It may have been deleted. <a href="/">Back to the projects</a>.
+            There is no page at <code>{c.req.path}</code>. It may have been deleted.{' '}
+            <a href="/">Back to the projects</a>.
           </p>
         </section>
       </Layout>,
@@ -101,13 +106,19 @@ export function buildApp(deps: Deps) {
   app.onError((err, c) => {
     // Middleware refusals (401 without credentials, 403 cross-site post) carry their own response.
     if (err instanceof HTTPException) {
-      if (err.status === 403) return c.text('Refused: this request did not come from a Rigwright page (cross-site request protection). Nothing was changed.', 403);
+      if (err.status === 403)
+        return c.text(
+          'Refused: this request did not come from a Rigwright page (cross-site request protection). Nothing was ' +
+            'changed.',
+          403,
+        );
       return err.getResponse();
     }
     // Another app process kept the database locked through every retry: nothing was written.
     if (isBusyError(err)) {
       const msg = 'The database is busy; nothing was saved. Try again.';
-      if (c.req.header('HX-Request') === 'true') return c.html(`<div class="form-errors" role="alert"><p>${msg}</p></div>`, 503);
+      if (c.req.header('HX-Request') === 'true')
+        return c.html(`<div class="form-errors" role="alert"><p>${msg}</p></div>`, 503);
       return sendPage(
         c,
         <Layout title="Busy">

@@ -47,7 +47,13 @@ const OPTIONS: Record<string, { options: ('id' | 'out' | 'paper' | 'pack' | 'jso
 
 function readArgs(command: string, rest: string[]): Args {
   const spec = OPTIONS[command];
-  const all = { id: { type: 'string' }, out: { type: 'string' }, paper: { type: 'string' }, pack: { type: 'string' }, json: { type: 'boolean' } } as const;
+  const all = {
+    id: { type: 'string' },
+    out: { type: 'string' },
+    paper: { type: 'string' },
+    pack: { type: 'string' },
+    json: { type: 'boolean' },
+  } as const;
   const options = Object.fromEntries(spec.options.map((o) => [o, all[o]]));
   let parsed: Args;
   try {
@@ -58,7 +64,10 @@ function readArgs(command: string, rest: string[]): Args {
   const [min, max] = spec.files;
   const n = parsed!.positionals.length;
   if (n > max) fail(`${command}: unexpected argument ${JSON.stringify(parsed!.positionals[max])}\n${USAGE}`);
-  if (n < min) fail(`${command}: give the ${command === 'backup' ? 'file to write the copy to' : 'project file to read'}.\n${USAGE}`);
+  if (n < min)
+    fail(
+      `${command}: give the ${command === 'backup' ? 'file to write the copy to' : 'project file to read'}.\n${USAGE}`,
+    );
   for (const [k, v] of Object.entries(parsed!.values)) if (v === '') fail(`${command}: --${k} needs a value`);
   return parsed!;
 }
@@ -68,7 +77,8 @@ async function projectFrom(command: string, a: Args): Promise<import('./core/mod
   const id = a.values.id;
   if (id !== undefined && a.positionals.length) fail(`${command}: give either a project file or --id, not both.`);
   if (id === undefined) {
-    if (!a.positionals.length) fail(`${command}: give the project file to read, or --id ID for a project in the database.`);
+    if (!a.positionals.length)
+      fail(`${command}: give the project file to read, or --id ID for a project in the database.`);
     return readProjectFile(a.positionals[0]);
   }
   return withDb(async (d) => {
@@ -143,14 +153,21 @@ async function main(args: string[]) {
     case 'evaluate': {
       const project = readProjectFile(a.positionals[0]);
       const report = evaluate(project);
-      process.stdout.write(a.values.json ? `${JSON.stringify(evaluationJson(project, report), null, 2)}\n` : renderEvaluationText(project, report));
+      process.stdout.write(
+        a.values.json
+          ? `${JSON.stringify(evaluationJson(project, report), null, 2)}\n`
+          : renderEvaluationText(project, report),
+      );
       return;
     }
     case 'list':
       await withDb(async (d) => {
         const { listProjects } = await import('./db/projects');
         const projects = await listProjects(d.db);
-        if (!projects.length) process.stderr.write('No projects in this database (start the server to load the demo, or rigwright import FILE.json).\n');
+        if (!projects.length)
+          process.stderr.write(
+            'No projects in this database (start the server to load the demo, or rigwright import FILE.json).\n',
+          );
         for (const p of projects) process.stdout.write(`${p.id}\t${p.name}\n`);
       });
       return;

@@ -8,7 +8,11 @@ import { specFormSchema } from './forms/spec-schema';
 export const lineSchema = specFormSchema<LineFields>(bomLineSpec);
 
 /** Column choices from the form (`map_<field>` = column index or "" for none) over the guessed mapping. */
-export function mappingFrom(values: Record<string, string>, guessed: ColumnMapping, columnCount: number): ColumnMapping {
+export function mappingFrom(
+  values: Record<string, string>,
+  guessed: ColumnMapping,
+  columnCount: number,
+): ColumnMapping {
   const overrides: Partial<Record<ImportField, number | null>> = {};
   for (const f of IMPORT_FIELDS) {
     const v = values[`map_${f}`];

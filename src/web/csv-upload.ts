@@ -19,10 +19,15 @@ export async function readCsvUpload(c: Context): Promise<CsvUpload | { error: st
   let fileName = values.fileName ?? '';
   const file = form.file;
   if (file instanceof File && file.size > 0) {
-    if (file.size > CSV_IMPORT_LIMIT_BYTES) return { error: `The file is ${file.size} bytes; the limit is ${CSV_IMPORT_LIMIT_BYTES / 1024 / 1024} MiB.`, status: 413 };
+    if (file.size > CSV_IMPORT_LIMIT_BYTES)
+      return {
+        error: `The file is ${file.size} bytes; the limit is ${CSV_IMPORT_LIMIT_BYTES / 1024 / 1024} MiB.`,
+        status: 413,
+      };
     csv = await file.text();
     fileName = file.name;
   }
-  if (csv.trim() === '') return { error: 'No file was chosen (or it is empty): choose a CSV file and press Preview.', status: 422 };
+  if (csv.trim() === '')
+    return { error: 'No file was chosen (or it is empty): choose a CSV file and press Preview.', status: 422 };
   return { values, csv, fileName };
 }

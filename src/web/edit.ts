@@ -44,9 +44,11 @@ export interface EditSpec<S extends z.ZodType> {
 }
 
 export const STALE_MESSAGE =
-  'Not saved: this project was changed in another tab or window since you opened this page. The page now shows the stored project; your entries in this form are kept — check them and save again to apply them.';
+  'Not saved: this project was changed in another tab or window since you opened this page. The page now shows the ' +
+    'stored project; your entries in this form are kept — check them and save again to apply them.';
 export const CONFLICT_MESSAGE =
-  'Not saved: someone else changed the same field since you opened this page; your entries are kept — check them and save again';
+  'Not saved: someone else changed the same field since you opened this page; your entries are kept — check them ' +
+    'and save again';
 export const BUSY_MESSAGE = 'The database is busy; nothing was saved. Try again.';
 export const GONE_MESSAGE =
   'Not saved: what this form edits no longer exists (it was deleted in another tab or window). Nothing was changed.';
@@ -84,7 +86,9 @@ export function projectEdit<S extends z.ZodType>(deps: Deps, spec: EditSpec<S>) 
     const current = await loadProject(deps.database.db, id);
     if (!current) return c.notFound();
     const respond = async (project: Project, status: 200 | 409 | 422 | 503, failed?: Failed, notice?: string) =>
-      isHtmx(c) ? sendPartial(c, await spec.partial(project, failed, notice), status) : sendPage(c, await spec.page(project, failed, notice), status);
+      isHtmx(c)
+        ? sendPartial(c, await spec.partial(project, failed, notice), status)
+        : sendPage(c, await spec.page(project, failed, notice), status);
     const gone = (project: Project) => {
       const back = spec.gone?.back?.(project, c) ?? spec.redirect(project, c).replace(/[?#].*$/, '');
       const props = { message: spec.gone?.message ?? GONE_MESSAGE, values, back };
@@ -96,7 +100,11 @@ export function projectEdit<S extends z.ZodType>(deps: Deps, spec: EditSpec<S>) 
     const parsed = parseForm(spec.schema, values);
     if (spec.values && spec.values(current, c) === null) return gone(current);
     if (!parsed.ok) return respond(current, 422, { form: formKey, state: { values, errors: parsed.errors } });
-    if (!version.success) return respond(current, 422, { form: formKey, state: { values, errors: { _form: 'The form had no version number; reload the page.' } } });
+    if (!version.success)
+      return respond(current, 422, {
+        form: formKey,
+        state: { values, errors: { _form: 'The form had no version number; reload the page.' } },
+      });
 
     // Validate the change against the current project before writing (it may refuse with field messages).
     if (current.version === version.data) {
@@ -111,7 +119,13 @@ export function projectEdit<S extends z.ZodType>(deps: Deps, spec: EditSpec<S>) 
           let data = parsed.data;
           let used = values;
           if (latest.version !== version.data) {
-            const merged = await mergeWith(spec, c, latest, values, spec.values ? await loadSnapshot(tx, id, version.data) : null);
+            const merged = await mergeWith(
+              spec,
+              c,
+              latest,
+              values,
+              spec.values ? await loadSnapshot(tx, id, version.data) : null,
+            );
             used = merged.values;
             const reparsed = parseForm(spec.schema, used);
             if (!reparsed.ok) throw new Refused(latest, used, reparsed.errors);
@@ -127,23 +141,35 @@ export function projectEdit<S extends z.ZodType>(deps: Deps, spec: EditSpec<S>) 
       return sendPartial(c, await spec.partial(saved, undefined, 'Saved.'));
     } catch (e) {
       const at = (p: Project, v: FormValues) => ({ ...v, version: String(p.version) });
-      if (e instanceof MergeConflict) return respond(e.current, 409, { form: formKey, state: { values: at(e.current, e.values), errors: e.errors } });
-      if (e instanceof Refused) return respond(e.current, 422, { form: formKey, state: { values: at(e.current, e.values), errors: e.errors } });
+      if (e instanceof MergeConflict)
+        return respond(e.current, 409, { form: formKey, state: { values: at(e.current, e.values), errors: e.errors } });
+      if (e instanceof Refused)
+        return respond(e.current, 422, { form: formKey, state: { values: at(e.current, e.values), errors: e.errors } });
       if (e instanceof Gone) return gone(e.current);
       if (e instanceof VersionConflict) {
         const fresh = (await loadProject(deps.database.db, id)) ?? current;
-        return respond(fresh, 409, { form: formKey, state: { values: at(fresh, values), errors: { _form: STALE_MESSAGE } } });
+        return respond(fresh, 409, {
+          form: formKey,
+          state: { values: at(fresh, values), errors: { _form: STALE_MESSAGE } },
+        });
       }
       if (e instanceof NotFound) return c.notFound();
       // Another process kept the database locked through every retry: nothing was written; keep the entries.
-      if (e instanceof DatabaseBusy || isBusyError(e)) return respond(current, 503, { form: formKey, state: { values, errors: { _form: BUSY_MESSAGE } } });
+      if (e instanceof DatabaseBusy || isBusyError(e))
+        return respond(current, 503, { form: formKey, state: { values, errors: { _form: BUSY_MESSAGE } } });
       throw e;
     }
   };
 }
 
 /** Merge a form loaded at an older version with the latest project, or throw the refusal to answer with. */
-async function mergeWith<S extends z.ZodType>(spec: EditSpec<S>, c: Context, latest: Project, typed: FormValues, base: Project | null) {
+async function mergeWith<S extends z.ZodType>(
+  spec: EditSpec<S>,
+  c: Context,
+  latest: Project,
+  typed: FormValues,
+  base: Project | null,
+) {
   if (!spec.values || !base) throw new VersionConflict(Number(typed.version), latest.version);
   const currentValues = spec.values(latest, c);
   if (currentValues === null) throw new Gone(latest);
@@ -152,7 +178,9 @@ async function mergeWith<S extends z.ZodType>(spec: EditSpec<S>, c: Context, lat
   const m = mergeForm({ base: baseValues, current: currentValues, typed, rowOf: spec.rowOf });
   if (!m.ok) {
     // Both values beside each field, and in the form's message too (not every form shows a message at every field).
-    const list = Object.entries(m.conflicts).map(([k, conflict]) => `${fieldLabel(spec.schema, k)}: ${conflictSummary(conflict)}`);
+    const list = Object.entries(m.conflicts).map(
+      ([k, conflict]) => `${fieldLabel(spec.schema, k)}: ${conflictSummary(conflict)}`,
+    );
     const errors: FieldErrors = { _form: `${CONFLICT_MESSAGE} (${list.join('; ')})` };
     for (const [k, conflict] of Object.entries(m.conflicts)) errors[k] = conflictMessage(conflict);
     throw new MergeConflict(latest, m.values, errors);
@@ -165,7 +193,10 @@ function targetId(c: Context): string | undefined {
   return /#([A-Za-z][\w-]*)/.exec(c.req.header('HX-Target') ?? '')?.[1];
 }
 
-/** Mark a Post/Redirect/Get target with what was done (unless it says already), so the page without JavaScript says it too. */
+/**
+ * Mark a Post/Redirect/Get target with what was done (unless it says already), so the page without JavaScript says it
+ * too.
+ */
 export function withDone(url: string, done: 'saved' | 'deleted'): string {
   if (/[?&]done=/.test(url)) return url;
   const hash = url.indexOf('#');

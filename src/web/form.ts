@@ -24,10 +24,21 @@ export function num(unit: string, o: NumOpts) {
     }
     const v = r.value;
     const shown = (x: number) => `${x}${unit ? ' ' + unit : ''}`;
-    if (o.integer && !Number.isInteger(v)) ctx.addIssue({ code: 'custom', message: `${o.label} must be a whole number` });
+    if (o.integer && !Number.isInteger(v))
+      ctx.addIssue({ code: 'custom', message: `${o.label} must be a whole number` });
     else if (o.min !== undefined && (o.exclusiveMin ? v <= o.min : v < o.min))
-      ctx.addIssue({ code: 'custom', message: `${o.label} must be ${o.exclusiveMin ? 'more than' : 'at least'} ${shown(o.min)}${o.max !== undefined ? ` and at most ${shown(o.max)}` : ''}; you entered "${text.trim()}"` });
-    else if (o.max !== undefined && v > o.max) ctx.addIssue({ code: 'custom', message: `${o.label} must be at most ${shown(o.max)}; you entered "${text.trim()}"` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `${o.label} must be ` +
+          `${o.exclusiveMin ? 'more than' : 'at least'} ${shown(o.min)}${
+            o.max !== undefined ? ` and at most ${shown(o.max)}` : ''
+          }; you entered "${text.trim()}"`,
+      });
+    else if (o.max !== undefined && v > o.max)
+      ctx.addIssue({
+        code: 'custom',
+        message: `${o.label} must be at most ${shown(o.max)}; you entered "${text.trim()}"`,
+      });
     return v;
   });
 }
@@ -61,8 +72,16 @@ export function pct(o: NumOpts) {
 export const text = (label: string, max = 200, required = true) =>
   z
     .string({ message: `${label}: missing` })
-    .transform((s) => (max > 1000 ? s.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd() : s.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim()))
-    .pipe(required ? z.string().min(1, `${label} must not be empty`).max(max, `${label} is longer than ${max} characters`) : z.string().max(max, `${label} is longer than ${max} characters`));
+    .transform((s) =>
+      max > 1000
+        ? s.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd()
+        : s.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim(),
+    )
+    .pipe(
+      required
+        ? z.string().min(1, `${label} must not be empty`).max(max, `${label} is longer than ${max} characters`)
+        : z.string().max(max, `${label} is longer than ${max} characters`),
+    );
 
 export const choice = <const T extends readonly [string, ...string[]]>(label: string, options: T) =>
   z.enum(options, { message: `${label}: choose one of ${options.join(', ')}` });

@@ -68,7 +68,8 @@ const shown = (s: string) => (norm(s) === '' ? '(empty)' : `“${s.length > 200 
 
 /** The message beside a conflicting field: both values, in words. */
 export function conflictMessage(c: FieldConflict): string {
-  return `Changed by someone else to ${shown(c.current)} since you opened this page; you typed ${shown(c.typed)}. Check it and save again to keep yours.`;
+  return `Changed by someone else to ${shown(c.current)} since you opened this page; you typed ` +
+    `${shown(c.typed)}. Check it and save again to keep yours.`;
 }
 
 /** Both values in a few words, for the form's own message. */

@@ -11,7 +11,8 @@ import { allRatingBoxSpecs, readRatingBoxes } from '../core/spec/rating-boxes';
 const partBoxesSchema = z.record(z.string(), z.string()).transform((values, ctx): PartFields => {
   const r = parseForm(partSpec, values);
   const boxes = readRatingBoxes(values);
-  if (!r.ok) for (const [path, message] of Object.entries(r.errors)) ctx.addIssue({ code: 'custom', path: [path], message });
+  if (!r.ok)
+    for (const [path, message] of Object.entries(r.errors)) ctx.addIssue({ code: 'custom', path: [path], message });
   for (const e of boxes.errors) ctx.addIssue({ code: 'custom', path: [e.field], message: e.message });
   if (!r.ok || boxes.errors.length) return z.NEVER;
   const v = r.value as PartFields;
@@ -31,13 +32,22 @@ export const costingSchema = specFormSchema<CostingFields>(costingSpec);
 
 /** Parts-list lines that use part `partId`, in words. */
 export function partUsers(p: Project, partId: string): string[] {
-  const stageName = (id: string | null) => (id === null ? 'General' : (p.stages.find((s) => s.id === id)?.name ?? 'a deleted stage'));
+  const stageName = (id: string | null) =>
+    id === null ? 'General' : (p.stages.find((s) => s.id === id)?.name ?? 'a deleted stage');
   return p.bom
     .filter((l) => l.partId === partId)
-    .map((l) => `parts-list line ${l.refs ? `“${l.refs}”` : '(no designators)'} in ${stageName(l.stageId)}, ${l.qtyPerRig} per rig`);
+    .map(
+      (l) =>
+        `parts-list line ${l.refs ? `“${l.refs}”` : '(no designators)'}` +
+          ` in ${stageName(l.stageId)}, ${l.qtyPerRig} per rig`,
+    );
 }
 
 export function supplierUsers(p: Project, name: string): string[] {
   const key = name.trim().toLowerCase();
-  return p.parts.flatMap((part) => part.offers.filter((o) => o.supplier.trim().toLowerCase() === key).map((o) => `offer ${o.sku ? `“${o.sku}” ` : ''}for “${part.description}”`));
+  return p.parts.flatMap((part) =>
+    part.offers
+      .filter((o) => o.supplier.trim().toLowerCase() === key)
+      .map((o) => `offer ${o.sku ? `“${o.sku}” ` : ''}for “${part.description}”`),
+  );
 }

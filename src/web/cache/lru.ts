@@ -13,7 +13,8 @@ export class Lru<V> {
   private bytesHeld = 0;
 
   constructor(readonly limits: LruLimits) {
-    if (!(limits.maxEntries >= 1) || !(limits.maxBytes >= 1)) throw new Error('Lru: maxEntries and maxBytes must be at least 1');
+    if (!(limits.maxEntries >= 1) || !(limits.maxBytes >= 1))
+      throw new Error('Lru: maxEntries and maxBytes must be at least 1');
   }
 
   get(key: string): V | undefined {

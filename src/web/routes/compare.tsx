@@ -41,13 +41,30 @@ export function compareRoutes(deps: Deps) {
     for (const s of chosenIds) {
       const p = await loadProject(deps.database.db, values[s]);
       if (p) projects.push(p);
-      else state.errors[s] = `${SLOT_LABEL[s]}: there is no project "${values[s].slice(0, 80)}" (deleted in another window?)`;
+      else
+        state.errors[s] =
+          `${SLOT_LABEL[s]}: there is no project "${values[s].slice(0, 80)}" (deleted in another window?)`;
     }
     if (!values.p1) state.errors.p1 = `${SLOT_LABEL.p1}: choose a project`;
     const errors = Object.values(state.errors);
-    if (errors.length) return sendPage(c, <ComparePage all={all} chosen={[]} rows={null} state={state} message={errors.join(' ')} />, 422);
+    if (errors.length)
+      return sendPage(
+        c,
+        <ComparePage all={all} chosen={[]} rows={null} state={state} message={errors.join(' ')} />,
+        422,
+      );
     // one project (the list's Compare link on a project without variants): ask for the second, nothing is wrong
-    if (projects.length < 2) return sendPage(c, <ComparePage all={all} chosen={[]} rows={null} state={state} prompt="Choose a second project to compare with." />);
+    if (projects.length < 2)
+      return sendPage(
+        c,
+        <ComparePage
+          all={all}
+          chosen={[]}
+          rows={null}
+          state={state}
+          prompt="Choose a second project to compare with."
+        />,
+      );
     const rows = compareRows(projects.map((p) => projectMetrics(p, evaluateCached(p))));
     const chosen = projects.map((p) => all.find((x) => x.id === p.id)!).filter(Boolean);
     return sendPage(c, <ComparePage all={all} chosen={chosen} rows={rows} state={state} />);
@@ -59,7 +76,15 @@ export function compareRoutes(deps: Deps) {
     const all = await listProjects(deps.database.db);
     const self = all.find((p) => p.id === id);
     if (!self) return c.notFound();
-    const ids = self.variantOf ? [self.variantOf, id] : [id, ...all.filter((p) => p.variantOf === id).map((p) => p.id).slice(0, 2)];
+    const ids = self.variantOf
+      ? [self.variantOf, id]
+      : [
+          id,
+          ...all
+            .filter((p) => p.variantOf === id)
+            .map((p) => p.id)
+            .slice(0, 2),
+        ];
     const q = new URLSearchParams(ids.map((x, i) => [SLOTS[i], x]));
     return c.redirect(`/compare?${q}`, 303);
   });
@@ -67,9 +92,15 @@ export function compareRoutes(deps: Deps) {
   app.post('/projects/:id/variant', async (c) => {
     const source = await loadProject(deps.database.db, c.req.param('id'));
     if (!source) return c.notFound();
-    const copy = { ...cloneProject(source, newId('prj'), `Variant of ${source.name}`.slice(0, 200), newId), variantOf: source.id };
+    const copy = {
+      ...cloneProject(source, newId('prj'), `Variant of ${source.name}`.slice(0, 200), newId),
+      variantOf: source.id,
+    };
     await insertProject(deps.database, copy, deps.now().toISOString());
-    return c.redirect(`/?notice=${encodeURIComponent(`Made "${copy.name}": change it, then compare it with its original.`)}`, 303);
+    return c.redirect(
+      `/?notice=${encodeURIComponent(`Made "${copy.name}": change it, then compare it with its original.`)}`,
+      303,
+    );
   });
 
   app.get('/projects/:id/sweep', async (c) => sweepPage(c, deps));
@@ -80,7 +111,10 @@ export function compareRoutes(deps: Deps) {
 async function sweepPage(c: Context, deps: Deps) {
   const project = await loadProject(deps.database.db, c.req.param('id')!);
   if (!project) return c.notFound();
-  const targets = Object.fromEntries(SWEEP_PARAMETERS.map((p) => [p, sweepTargets(project, p)])) as Record<SweepParameter, SweepTarget[]>;
+  const targets = Object.fromEntries(SWEEP_PARAMETERS.map((p) => [p, sweepTargets(project, p)])) as Record<
+    SweepParameter,
+    SweepTarget[]
+  >;
   // each form starts from a range round its first item's value
   const states = Object.fromEntries(
     SWEEP_PARAMETERS.map((p) => {
@@ -90,16 +124,48 @@ async function sweepPage(c: Context, deps: Deps) {
       return [p, { values, errors: {} }];
     }),
   ) as Record<SweepParameter, FieldState>;
-  const page = (active: SweepParameter | null, result: Parameters<typeof SweepPage>[0]['result'], status: 200 | 422 = 200) =>
-    sendPage(c, <SweepPage project={project} targets={targets} states={states} active={active} result={result} unavailable={NOT_AVAILABLE} />, status);
+  const page = (
+    active: SweepParameter | null,
+    result: Parameters<typeof SweepPage>[0]['result'],
+    status: 200 | 422 = 200,
+  ) =>
+    sendPage(
+      c,
+      <SweepPage
+        project={project}
+        targets={targets}
+        states={states}
+        active={active}
+        result={result}
+        unavailable={NOT_AVAILABLE}
+      />,
+      status,
+    );
 
   const param = c.req.query('param');
   if (param === undefined) return page(null, null);
   if (!isSweepParameter(param)) {
     const message = `Parameter: "${param.slice(0, 40)}" is not one that can be swept; choose one of the forms below`;
-    return sendPage(c, <SweepPage project={project} targets={targets} states={states} active={null} result={null} unavailable={NOT_AVAILABLE} message={message} />, 422);
+    return sendPage(
+      c,
+      <SweepPage
+        project={project}
+        targets={targets}
+        states={states}
+        active={null}
+        result={null}
+        unavailable={NOT_AVAILABLE}
+        message={message}
+      />,
+      422,
+    );
   }
-  const typed = { target: c.req.query('target') ?? '', from: c.req.query('from') ?? '', to: c.req.query('to') ?? '', points: c.req.query('points') ?? '' };
+  const typed = {
+    target: c.req.query('target') ?? '',
+    from: c.req.query('from') ?? '',
+    to: c.req.query('to') ?? '',
+    points: c.req.query('points') ?? '',
+  };
   states[param] = { values: typed, errors: {} };
   const parsed = parseForm(SWEEP_SPECS[param], typed);
   if (!parsed.ok) {

@@ -20,14 +20,26 @@ export function netlistRoutes(deps: Deps) {
     if (!p || !rail) return c.notFound();
     if (rail.kind !== 'rectified') return c.text('Only a rectified rail has a rectifier netlist.', 404);
     const winding = p.supply.transformers.flatMap((t) => t.windings).find((w) => w.id === rail.windingId);
-    if (!winding || !p.mains) return c.text('This rail has no winding or the project has no mains settings, so there is nothing to simulate.', 422);
+    if (!winding || !p.mains)
+      return c.text(
+        'This rail has no winding or the project has no mains settings, so there is nothing to simulate.',
+        422,
+      );
     // the worst voltage corner: low mains, the key-down current from the budget
     const report = evaluate(p);
     const loadA = report.budget.rails.find((r) => r.railId === rail.id)?.outputA.keyDown;
     // an unknown key-down load (a computed current core refused) gets no netlist rather than one for no load
-    if (loadA === undefined || !Number.isFinite(loadA)) return c.text('The key-down load of this rail is unknown (see the failed checks on the overview), so no netlist was made.', 422);
+    if (loadA === undefined || !Number.isFinite(loadA))
+      return c.text(
+        'The key-down load of this rail is unknown (see the failed checks on the overview), so no netlist was made.',
+        422,
+      );
     const mainsFactor = 1 - p.mains.lowFraction;
-    return download(c, `${rail.id}-low-mains-keydown.cir`, railNetlist(rail, winding, p.mains.frequencyHz, mainsFactor, loadA));
+    return download(
+      c,
+      `${rail.id}-low-mains-keydown.cir`,
+      railNetlist(rail, winding, p.mains.frequencyHz, mainsFactor, loadA),
+    );
   });
 
   app.get('/projects/:id/stages/:sid/lpf.cir', async (c) => {
@@ -35,7 +47,12 @@ export function netlistRoutes(deps: Deps) {
     const stage = p?.stages.find((s) => s.id === c.req.param('sid'));
     if (!p || !stage?.lpf) return c.notFound();
     const d = designLpf(stage.lpf, p.frequencyHz);
-    if (!d.ok) return c.text(`The filter data has errors, so no netlist was made:\n${d.errors.map((e) => `${e.field}: ${e.message}`).join('\n')}\n`, 422);
+    if (!d.ok)
+      return c.text(
+        `The filter data has errors, so no netlist was ` +
+          `made:\n${d.errors.map((e) => `${e.field}: ${e.message}`).join('\n')}\n`,
+        422,
+      );
     return download(c, `${stage.id}-lpf.cir`, lpfNetlist(d.value));
   });
 

@@ -78,7 +78,14 @@ export function overviewRoutes(deps: Deps) {
       values: () => ({}),
       change: (p, d) => {
         const name = d.name || defaultStageName(d.kind);
-        const stage = withKindDefaults(p, { id: newId('st'), kind: d.kind, name, notes: '', loads: [], dissipationW: null });
+        const stage = withKindDefaults(p, {
+          id: newId('st'),
+          kind: d.kind,
+          name,
+          notes: '',
+          loads: [],
+          dissipationW: null,
+        });
         return { ...p, stages: [...p.stages, stage] };
       },
     }),

@@ -12,7 +12,9 @@ import { PackBody } from '../../../views/pages/pack';
 
 const querySchema = z.object({
   paper: z.enum(['a4', 'letter'], { message: 'paper must be "a4" or "letter"' }).default('a4'),
-  part: z.enum(PACK_PARTS, { message: `part must be one of ${PACK_PARTS.map((x) => `"${x}"`).join(', ')}` }).default('both'),
+  part: z
+    .enum(PACK_PARTS, { message: `part must be one of ${PACK_PARTS.map((x) => `"${x}"`).join(', ')}` })
+    .default('both'),
 });
 
 export function packRoutes(deps: Deps) {
@@ -24,7 +26,12 @@ export function packRoutes(deps: Deps) {
     return sendPage(
       c,
       <Layout title={`Builder pack · ${p.name}`} project={p} section="pack">
-        <PackBody project={p} build={buildChecklist(p, report)} safety={safetyChecklist(p, report)} safetyPreamble={SAFETY_PREAMBLE} />
+        <PackBody
+          project={p}
+          build={buildChecklist(p, report)}
+          safety={safetyChecklist(p, report)}
+          safetyPreamble={SAFETY_PREAMBLE}
+        />
       </Layout>,
     );
   });
@@ -36,7 +43,9 @@ export function packRoutes(deps: Deps) {
     const { paper, part } = q.data;
     const bytes = await buildPack(p, evaluate(p), { paper, part, dataDate: deps.now().toISOString().slice(0, 10) });
     // the full pack keeps its old name; a builder's or organiser's pack says which in the file name
-    const name = `${p.name.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 60) || 'project'}${part === 'both' ? '' : `-${part}`}-${paper}.pdf`;
+    const name = `${p.name.replace(/[^A-Za-z0-9._-]+/g, '-').slice(0, 60) || 'project'}${
+      part === 'both' ? '' : `-${part}`
+    }-${paper}.pdf`;
     c.header('Content-Disposition', `attachment; filename="${name}"`);
     return c.body(bytes as unknown as ArrayBuffer, 200, { 'Content-Type': 'application/pdf' });
   });

@@ -15,7 +15,9 @@ import type { Failed } from '../../../views/components/failed';
 
 const rfSettingsSchema = specFormSchema<RfSettings>(rfSettingsSpec);
 
-const body = (p: Project, failed?: Failed, notice?: string) => <RfBody project={p} report={evaluate(p)} failed={failed} notice={notice} />;
+const body = (p: Project, failed?: Failed, notice?: string) => (
+  <RfBody project={p} report={evaluate(p)} failed={failed} notice={notice} />
+);
 const page = (p: Project, failed?: Failed, notice?: string) => (
   <Layout title={`RF checks · ${p.name}`} project={p} section="rf">
     {body(p, failed, notice)}

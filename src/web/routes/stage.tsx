@@ -30,7 +30,9 @@ const sid = (c: Context) => c.req.param('sid')!;
 /** Each stage form's text (as the page fills it), or null when the stage no longer has that data. */
 const formText: Record<string, (s: Stage) => Record<string, string> | null> = {
   stage: stageValues,
-  ...Object.fromEntries(STAGE_DATA.map((d) => [d.key, (s: Stage) => (s.kind === d.kind && s[d.key] ? specText(d.spec, s[d.key]) : null)])),
+  ...Object.fromEntries(
+    STAGE_DATA.map((d) => [d.key, (s: Stage) => (s.kind === d.kind && s[d.key] ? specText(d.spec, s[d.key]) : null)]),
+  ),
 };
 
 function withStage(p: Project, id: string, f: (s: Stage) => Stage | { errors: FieldErrors }): ChangeResult {
@@ -84,28 +86,37 @@ export function stageRoutes(deps: Deps) {
   };
   const partial = (p: Project, c: Context) => (failed?: Failed, notice?: string) => {
     const stage = p.stages.find((s) => s.id === sid(c));
-    return stage ? <StageBody project={p} stage={stage} failed={failed} notice={notice} results={stageResults(p, stage)} /> : <StageGone project={p} />;
+    return stage ? (
+      <StageBody project={p} stage={stage} failed={failed} notice={notice} results={stageResults(p, stage)} />
+    ) : (
+      <StageGone project={p} />
+    );
   };
-  const edit = <S extends z.ZodType>(form: string, schema: S, change: (p: Project, d: z.output<S>, c: Context) => ChangeResult) => (c: Context) =>
-    projectEdit(deps, {
-      form,
-      schema,
-      change,
-      // the form's text for a project (null when the stage or its data is gone): saves from an older version
-      // merge field by field; load rows are numbered, so a row's fields belong to its rail (rowOf)
-      values: (p) => {
-        const stage = p.stages.find((s) => s.id === sid(c));
-        return stage ? (formText[form]?.(stage) ?? null) : null;
-      },
-      rowOf: (f) => {
-        const row = /^l(\d+)_/.exec(f);
-        return row ? `rail${row[1]}` : undefined;
-      },
-      gone: { message: 'Not saved: this stage no longer exists (deleted in another tab or window?). Nothing was changed.', back: (p) => `/projects/${p.id}` },
-      redirect: (p) => `/projects/${p.id}/stages/${sid(c)}`,
-      partial: (p, f, n) => partial(p, c)(f, n),
-      page: (p, f, n) => page(p, c)(f, n),
-    })(c);
+  const edit =
+    <S extends z.ZodType>(form: string, schema: S, change: (p: Project, d: z.output<S>, c: Context) => ChangeResult) =>
+    (c: Context) =>
+      projectEdit(deps, {
+        form,
+        schema,
+        change,
+        // the form's text for a project (null when the stage or its data is gone): saves from an older version
+        // merge field by field; load rows are numbered, so a row's fields belong to its rail (rowOf)
+        values: (p) => {
+          const stage = p.stages.find((s) => s.id === sid(c));
+          return stage ? (formText[form]?.(stage) ?? null) : null;
+        },
+        rowOf: (f) => {
+          const row = /^l(\d+)_/.exec(f);
+          return row ? `rail${row[1]}` : undefined;
+        },
+        gone: {
+          message: 'Not saved: this stage no longer exists (deleted in another tab or window?). Nothing was changed.',
+          back: (p) => `/projects/${p.id}`,
+        },
+        redirect: (p) => `/projects/${p.id}/stages/${sid(c)}`,
+        partial: (p, f, n) => partial(p, c)(f, n),
+        page: (p, f, n) => page(p, c)(f, n),
+      })(c);
 
   app.get('/projects/:id/stages/:sid', async (c) => {
     const p = await loadProject(deps.database.db, c.req.param('id'));
@@ -190,10 +201,16 @@ export function stageRoutes(deps: Deps) {
   for (const d of STAGE_DATA) {
     const change = (p: Project, value: Record<string, unknown>, c: Context): ChangeResult => {
       const missing = missingRefs(p, d.spec, value);
-      if (missing.length) return { errors: Object.fromEntries(missing.map((e) => [formName(e.field, d.spec.fields[e.field]), e.message])) };
+      if (missing.length)
+        return {
+          errors: Object.fromEntries(missing.map((e) => [formName(e.field, d.spec.fields[e.field]), e.message])),
+        };
       return withStage(p, sid(c), (s) => ({ ...s, [d.key]: value }));
     };
-    app.post(`/projects/:id/stages/:sid/${d.key}`, edit(d.key, specFormSchema<Record<string, unknown>>(d.spec), change));
+    app.post(
+      `/projects/:id/stages/:sid/${d.key}`,
+      edit(d.key, specFormSchema<Record<string, unknown>>(d.spec), change),
+    );
   }
 
   app.get('/projects/:id/stages/:sid/delete', async (c) => {
@@ -227,7 +244,11 @@ export function stageRoutes(deps: Deps) {
         deps.database,
         id,
         Number.isInteger(version) ? version : -1,
-        (q) => ({ ...q, stages: q.stages.filter((s) => s.id !== sid(c)), bom: q.bom.map((b) => (b.stageId === sid(c) ? { ...b, stageId: null } : b)) }),
+        (q) => ({
+          ...q,
+          stages: q.stages.filter((s) => s.id !== sid(c)),
+          bom: q.bom.map((b) => (b.stageId === sid(c) ? { ...b, stageId: null } : b)),
+        }),
         deps.now().toISOString(),
       );
     } catch (e) {
