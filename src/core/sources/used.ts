@@ -24,14 +24,18 @@ function checkWords(f: Finding): string {
 const STATUS_ORDER: Record<SourceStatus, number> = { published: 0, analogy: 1, memory: 2, practice: 3, design: 4 };
 
 /** Every registry source the report cites (findings, supply recommendations, the harmonic rule, the rule set). */
-export function sourcesUsed(project: Project, report: { findings: Finding[]; supply: SupplyReport | null; rf: RfReport | null }): SourceUse[] {
+export function sourcesUsed(
+  project: Project,
+  report: { findings: Finding[]; supply: SupplyReport | null; rf: RfReport | null },
+): SourceUse[] {
   const uses = new Map<SourceKey, Set<string>>();
   const add = (key: SourceKey, what: string) => {
     if (!uses.has(key)) uses.set(key, new Set());
     uses.get(key)!.add(what);
   };
   for (const f of report.findings) add(f.source, checkWords(f));
-  for (const r of report.supply?.rails ?? []) for (const rec of r.recommendations) add(rec.source, `${r.railName}: ${rec.topic} recommendation`);
+  for (const r of report.supply?.rails ?? [])
+    for (const rec of r.recommendations) add(rec.source, `${r.railName}: ${rec.topic} recommendation`);
   if (report.rf?.harmonics) add(report.rf.harmonics.ruleSource, 'Harmonics at the antenna: the required attenuation');
   const rs = RULE_SETS[project.rf.spuriousRule];
   for (const k of rs.sources) add(k, `Rule set: ${rs.label}`);

@@ -20,7 +20,11 @@ export const coreSpec = defineSpec({
       help: 'per turn²; a data sheet’s µH per 100 turns is taken as typed, e.g. 49 µH/100t',
     }),
     // Common practice, no published source: HF cores from a few mm² (small beads) to a few thousand mm² (stacks)
-    aeM2: num('Effective area Ae', 'm²', MM2, 0.5e-6, 5e-3, 11.4e-6, { form: 'ae', example: '11.4', help: 'of the cross-section' }),
+    aeM2: num('Effective area Ae', 'm²', MM2, 0.5e-6, 5e-3, 11.4e-6, {
+      form: 'ae',
+      example: '11.4',
+      help: 'of the cross-section',
+    }),
     leM: num('Effective path length le', 'm', MM, 5e-3, 0.5, 31.2e-3, { form: 'le', example: '31.2' }),
     innerDiameterM: optNum('Inner diameter', 'm', MM, 1e-3, 0.1, 7.7e-3, {
       form: 'innerDiameter', example: '7.7', help: 'a toroid’s hole; empty = give the window area',
@@ -41,9 +45,17 @@ export const coreSpec = defineSpec({
     const fmin = n('minFrequencyHz');
     const fmax = n('maxFrequencyHz');
     if (fmin !== null && fmax !== null && fmin >= fmax)
-      errors.push({ field: 'maxFrequencyHz', label: 'Material up to', message: 'Material up to: must be above “Material from”' });
+      errors.push({
+        field: 'maxFrequencyHz',
+        label: 'Material up to',
+        message: 'Material up to: must be above “Material from”',
+      });
     if (n('innerDiameterM') === null && n('windowAreaM2') === null)
-      errors.push({ field: 'innerDiameterM', label: 'Inner diameter', message: 'Inner diameter: give it or the window area' });
+      errors.push({
+        field: 'innerDiameterM',
+        label: 'Inner diameter',
+        message: 'Inner diameter: give it or the window area',
+      });
     return errors;
   },
 });

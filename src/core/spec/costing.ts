@@ -22,7 +22,8 @@ export const costingSpec = defineSpec({
       form: 'rates',
       multiline: true,
       codec: ratesCodec,
-      help: 'one per line: an offer currency = the price of 1 unit of it in the project currency (the page gives an example in it)',
+      help: 'one per line: an offer currency = the price of 1 unit of it in the project currency (the page gives an ' +
+        'example in it)',
     }),
   },
 });

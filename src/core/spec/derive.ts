@@ -53,12 +53,14 @@ export function storedProblem(f: Field, v: unknown): string {
 
 /** Check a stored object against its spec: one message per bad field, naming it. */
 export function validate(spec: Spec, stored: unknown): FieldError[] {
-  if (stored === null || typeof stored !== 'object') return [{ field: '', label: spec.label, message: `${spec.label} is missing` }];
+  if (stored === null || typeof stored !== 'object')
+    return [{ field: '', label: spec.label, message: `${spec.label} is missing` }];
   const obj = spec.view ? spec.view.from(stored as Obj) : stored;
   const errors: FieldError[] = [];
   for (const [key, f] of Object.entries(spec.fields)) {
     const problem = storedProblem(f, getPath(obj, key));
-    if (problem) errors.push({ field: key, label: f.label, message: `${f.label}${problem.startsWith(':') ? '' : ' '}${problem}` });
+    if (problem)
+      errors.push({ field: key, label: f.label, message: `${f.label}${problem.startsWith(':') ? '' : ' '}${problem}` });
   }
   // rules across fields also run on a partly bad object (they check types themselves): report every problem once
   for (const e of spec.refine?.(obj as Obj) ?? []) if (!errors.some((x) => x.field === e.field)) errors.push(e);
@@ -87,12 +89,18 @@ export type FormParse = { ok: true; value: Obj } | { ok: false; errors: Record<s
 /** Read one submitted field; the message names the field. */
 /** The decimals of an object's money (spec.moneyDigits), for its money fields and codecs; {} when the spec has none. */
 function moneyContext(spec: Spec, obj: unknown): CodecContext {
-  return spec.moneyDigits && obj !== null && typeof obj === 'object' ? { moneyDigits: spec.moneyDigits(obj as Obj) } : {};
+  return spec.moneyDigits && obj !== null && typeof obj === 'object'
+    ? { moneyDigits: spec.moneyDigits(obj as Obj) }
+    : {};
 }
 const withMoney = (f: Field, ctx: CodecContext): Field =>
   f.type === 'number' && f.money && ctx.moneyDigits !== undefined ? { ...f, moneyDigits: ctx.moneyDigits } : f;
 
-export function readField(f: Field, raw: string | undefined, ctx: CodecContext = {}): { ok: true; value: unknown } | { ok: false; message: string } {
+export function readField(
+  f: Field,
+  raw: string | undefined,
+  ctx: CodecContext = {},
+): { ok: true; value: unknown } | { ok: false; message: string } {
   const text = raw ?? '';
   switch (f.type) {
     case 'number': {
@@ -108,11 +116,14 @@ export function readField(f: Field, raw: string | undefined, ctx: CodecContext =
         ? { ok: true, value: text }
         : { ok: false, message: `${f.label}: choose one of ${f.options.map(([, t]) => t).join(', ')}` };
     case 'text': {
-      const typed = f.multiline ? text.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd() : text.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim();
+      const typed = f.multiline
+        ? text.replace(/^(?:[ \t]*\r?\n)+/, '').trimEnd()
+        : text.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ').trim();
       const v = f.upper ? typed.toUpperCase() : typed;
       if (f.required && v === '') return { ok: false, message: `${f.label} must not be empty` };
       // the pattern says what is expected, which is more use than a length
-      if (f.pattern && v !== '' && !f.pattern.re.test(v)) return { ok: false, message: `${f.label} ${f.pattern.says}; you entered "${typed}"` };
+      if (f.pattern && v !== '' && !f.pattern.re.test(v))
+        return { ok: false, message: `${f.label} ${f.pattern.says}; you entered "${typed}"` };
       if (v.length > f.max) return { ok: false, message: `${f.label} is longer than ${f.max} characters` };
       if (f.codec) {
         const r = f.codec.fromText(v, ctx);
@@ -140,8 +151,11 @@ export function parseForm(spec: Spec, values: Record<string, string | undefined>
     else errors[formName(key, f)] = r.message;
   }
   if (Object.keys(errors).length) return { ok: false, errors };
-  for (const e of spec.refine?.(value) ?? []) errors[spec.fields[e.field] ? formName(e.field, spec.fields[e.field]) : '_form'] ??= e.message;
-  return Object.keys(errors).length ? { ok: false, errors } : { ok: true, value: spec.view ? spec.view.to(value) : value };
+  for (const e of spec.refine?.(value) ?? [])
+    errors[spec.fields[e.field] ? formName(e.field, spec.fields[e.field]) : '_form'] ??= e.message;
+  return Object.keys(errors).length
+    ? { ok: false, errors }
+    : { ok: true, value: spec.view ? spec.view.to(value) : value };
 }
 
 /** A structured field's default is written as text in the spec ('' = an empty list): its stored value. */
@@ -154,7 +168,8 @@ function codecDefault(f: TextField): unknown {
 /** A new object's starting values. */
 export function defaults(spec: Spec): Obj {
   const value: Obj = {};
-  for (const [key, f] of Object.entries(spec.fields)) setPath(value, key, f.type === 'text' && f.codec ? codecDefault(f) : f.default);
+  for (const [key, f] of Object.entries(spec.fields))
+    setPath(value, key, f.type === 'text' && f.codec ? codecDefault(f) : f.default);
   return spec.view ? spec.view.to(value) : value;
 }
 

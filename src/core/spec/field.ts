@@ -98,7 +98,10 @@ export interface Spec {
   /** for a spec drawn once per row of a table: the form name of field `key` in row `row` */
   rowName?: (row: number, key: string) => string;
   /** where the stored shape differs from the fields (three checkboxes for a list of modes): stored <-> fields */
-  view?: { from: (stored: Record<string, unknown>) => Record<string, unknown>; to: (fields: Record<string, unknown>) => Record<string, unknown> };
+  view?: {
+    from: (stored: Record<string, unknown>) => Record<string, unknown>;
+    to: (fields: Record<string, unknown>) => Record<string, unknown>;
+  };
   /**
    * Decimals of the object's money boxes (its currency's ISO 4217 minor unit), read from the stored object or from the
    * submitted form text; absent = 2. Money fields and codecs of the spec are written and read with these decimals.

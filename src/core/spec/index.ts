@@ -18,7 +18,16 @@ export * from './field';
 export { validate, formValues, parseForm, defaults, pick, readField } from './derive';
 export { paSpec, lpfSpec, relaySpec, stageSpec, loadSpec };
 export { settingsSpec, mainsSpec, newProjectSpec, rfSettingsSpec };
-export { transformerSpec, windingSpec, primaryFuseSpec, enclosureSpec, addRailSpec, rectifiedSpec, regulatedSpec, batterySpec };
+export {
+  transformerSpec,
+  windingSpec,
+  primaryFuseSpec,
+  enclosureSpec,
+  addRailSpec,
+  rectifiedSpec,
+  regulatedSpec,
+  batterySpec,
+};
 export { supplyChoicesSpec };
 export { partSpec, offerSpec, supplierSpec, bomLineSpec, costingSpec, coreSpec };
 

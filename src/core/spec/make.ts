@@ -4,7 +4,15 @@ import type { BoolField, ChoiceField, DisplayUnit, NumberField, RefField, TextFi
 type NumOpts = Partial<Omit<NumberField, 'type' | 'label' | 'unit' | 'display' | 'min' | 'max' | 'default'>>;
 
 /** A number: label, SI unit, display unit, range (SI), default (SI; null = empty). */
-export const num = (label: string, unit: string, display: DisplayUnit, min: number, max: number, def: number | null, o: NumOpts = {}): NumberField => ({
+export const num = (
+  label: string,
+  unit: string,
+  display: DisplayUnit,
+  min: number,
+  max: number,
+  def: number | null,
+  o: NumOpts = {},
+): NumberField => ({
   type: 'number',
   label,
   unit,
@@ -16,10 +24,22 @@ export const num = (label: string, unit: string, display: DisplayUnit, min: numb
 });
 
 /** A number that may be left empty (stored as null). */
-export const optNum = (label: string, unit: string, display: DisplayUnit, min: number, max: number, def: number | null, o: NumOpts = {}) =>
-  num(label, unit, display, min, max, def, { ...o, optional: true });
+export const optNum = (
+  label: string,
+  unit: string,
+  display: DisplayUnit,
+  min: number,
+  max: number,
+  def: number | null,
+  o: NumOpts = {},
+) => num(label, unit, display, min, max, def, { ...o, optional: true });
 
-export const choice = (label: string, options: readonly (readonly [string, string])[], def: string, o: Partial<ChoiceField> = {}): ChoiceField => ({
+export const choice = (
+  label: string,
+  options: readonly (readonly [string, string])[],
+  def: string,
+  o: Partial<ChoiceField> = {},
+): ChoiceField => ({
   type: 'choice',
   label,
   options,
@@ -27,7 +47,13 @@ export const choice = (label: string, options: readonly (readonly [string, strin
   ...o,
 });
 
-export const text = (label: string, max: number, required: boolean, def = '', o: Partial<TextField> = {}): TextField => ({
+export const text = (
+  label: string,
+  max: number,
+  required: boolean,
+  def = '',
+  o: Partial<TextField> = {},
+): TextField => ({
   type: 'text',
   label,
   max,
@@ -36,7 +62,12 @@ export const text = (label: string, max: number, required: boolean, def = '', o:
   ...o,
 });
 
-export const bool = (label: string, def: boolean, o: Partial<BoolField> = {}): BoolField => ({ type: 'bool', label, default: def, ...o });
+export const bool = (label: string, def: boolean, o: Partial<BoolField> = {}): BoolField => ({
+  type: 'bool',
+  label,
+  default: def,
+  ...o,
+});
 
 export const ref = (label: string, to: RefField['to'], optional: boolean, o: Partial<RefField> = {}): RefField => ({
   type: 'ref',

@@ -27,11 +27,13 @@ export function readNumber(text: string, f: NumberField): NumberParse {
   const compact = raw.replace(/\s+/g, '').replace(',', '.');
   let value: number;
   const al = f.unit === 'H/t²' ? AL_PER_100_TURNS.exec(compact) : null;
-  // Source: iron-powder toroid data sheets give AL in µH per 100 turns, L = AL × (N / 100)², so 1 µH/100 t = 0.1 nH/t²
+  // Source: iron-powder toroid data sheets give AL in µH per 100 turns, L = AL × (N / 100)²,
+  // so 1 µH/100 t = 0.1 nH/t²
   if (al) value = Number(al[1]) * 1e-10;
   else if (f.unit === 'm²' && AREA.test(compact)) {
     const m = AREA.exec(compact)!;
-    // Source: definition of area units, 1 mm² = (10⁻³ m)² = 10⁻⁶ m² (an SI prefix on a squared unit is squared)
+    // Source: definition of area units, 1 mm² = (10⁻³ m)² = 10⁻⁶ m²
+    // (an SI prefix on a squared unit is squared)
     value = Number(m[1]) / AREA_DIVISOR[m[2]];
   }
   else if (BARE.test(compact) && !/^\d{1,3},\d{3}$/.test(raw.replace(/\s+/g, ''))) {
@@ -109,7 +111,8 @@ export function exampleText(f: NumberField): string {
  * "such as 500 mV"): its default, else the first round number inside its range, else the middle of the range.
  */
 export function exampleNumber(f: NumberField): string {
-  const fits = (v: number | null): v is number => v !== null && Number.isFinite(v) && rangeProblem(v, f) === '' && v !== 0;
+  const fits = (v: number | null): v is number =>
+    v !== null && Number.isFinite(v) && rangeProblem(v, f) === '' && v !== 0;
   const round = [1, 10, 100, 1000, 0.1, 10_000, 0.01].map((n) => inDisplay(n, f.display.scale));
   const mid = (f.min + f.max) / 2;
   const value = [f.default, ...round, f.integer ? Math.round(mid) : mid].find(fits) ?? f.default ?? f.min;
@@ -155,12 +158,27 @@ const DECIMALS_WORD = ['no', 'one', 'two', 'three', 'four'];
 export function moneyCents(input: string, digits = 2): NumberParse {
   const t = input.trim();
   const m = /^(\d*)(?:[.,](\d*))?$/.exec(t);
-  if (!m || (m[1] + (m[2] ?? '')) === '') return { ok: false, message: `"${t}" is not an amount: enter e.g. ${digits === 0 ? '150' : `0.${'9'.padEnd(digits, '5')}`}` };
+  if (!m || m[1] + (m[2] ?? '') === '')
+    return {
+      ok: false,
+      message: `"${t}" is not an amount: enter e.g. ${digits === 0 ? '150' : `0.${'9'.padEnd(digits, '5')}`}`,
+    };
   // zeros beyond the minor unit change nothing ("150.00" yen is 150 yen)
-  const frac = (m[2] ?? '').length > digits && /^0*$/.test((m[2] ?? '').slice(digits)) ? (m[2] ?? '').slice(0, digits) : (m[2] ?? '');
+  const frac =
+    (m[2] ?? '').length > digits && /^0*$/.test((m[2] ?? '').slice(digits))
+      ? (m[2] ?? '').slice(0, digits)
+      : (m[2] ?? '');
   if (frac.length > digits) {
-    if (digits === 2) return { ok: false, message: `"${t}" has more than two decimals; amounts are kept in whole cents` };
-    return { ok: false, message: digits === 0 ? `"${t}" has decimals; this currency has none (ISO 4217 minor unit)` : `"${t}" has more than ${DECIMALS_WORD[digits] ?? digits} decimals; amounts are kept in whole minor units (ISO 4217)` };
+    if (digits === 2)
+      return { ok: false, message: `"${t}" has more than two decimals; amounts are kept in whole cents` };
+    return {
+      ok: false,
+      message:
+        digits === 0
+          ? `"${t}" has decimals; this currency has none (ISO 4217 minor unit)`
+          : `"${t}" has more than ${DECIMALS_WORD[digits] ?? digits} decimals; amounts are kept in whole minor units ` +
+            `(ISO 4217)`,
+    };
   }
   const cents = Number(m[1] || '0') * 10 ** digits + Number(frac.padEnd(digits, '0') || '0');
   return Number.isSafeInteger(cents) ? { ok: true, value: cents } : { ok: false, message: `"${t}" is too large` };

@@ -6,7 +6,10 @@ const MM: DisplayUnit = { symbol: 'mm', scale: 1e-3 };
 
 export const mountFields = (tjMinC: number) => ({
   'mount.thetaJcKPerW': num('θjc junction–case', 'K/W', U.KW, 0, 100, 2, { form: 'thetaJc' }),
-  'mount.thetaCsKPerW': num('θcs case–heatsink', 'K/W', U.KW, 0, 100, 1, { form: 'thetaCs', help: 'washer and grease' }),
+  'mount.thetaCsKPerW': num('θcs case–heatsink', 'K/W', U.KW, 0, 100, 1, {
+    form: 'thetaCs',
+    help: 'washer and grease',
+  }),
   'mount.thetaSaKPerW': optNum('Heatsink θsa', 'K/W', U.KW, 0, 1000, null, {
     form: 'thetaSa',
     exclusiveMin: true,
@@ -78,10 +81,20 @@ export const paSpec = defineSpec({
       example: '150',
     }),
     // Common practice, no published source: a bifilar HF output transformer has a few to a few tens of nH
-    outputLeakageH: optNum('Output transformer leakage, half to half', 'H', { symbol: 'nH', scale: 1e-9 }, 0, 1e-5, null, {
-      form: 'leakage', exclusiveMin: true, example: '6',
-      help: 'one primary half measured with the other shorted; push-pull class D drain ring; empty = not given',
-    }),
+    outputLeakageH: optNum(
+      'Output transformer leakage, half to half',
+      'H',
+      { symbol: 'nH', scale: 1e-9 },
+      0,
+      1e-5,
+      null,
+      {
+        form: 'leakage',
+        exclusiveMin: true,
+        example: '6',
+        help: 'one primary half measured with the other shorted; push-pull class D drain ring; empty = not given',
+      },
+    ),
     // Common practice, no published source: up to 1 µs (a slow switch at 160 m); 0 = ideal edges
     transitionTimeS: optNum('Switching transition time (class D)', 's', U.ns, 0, 1e-6, null, {
       form: 'transitionTime',
@@ -107,16 +120,36 @@ export const paSpec = defineSpec({
   refine: (v) => {
     const errors = [];
     if (v.saturationV === null && v.rdsOnOhm === null)
-      errors.push({ field: 'saturationV', label: 'Saturation voltage', message: 'Saturation voltage: give it or Rds(on) (or both)' });
+      errors.push({
+        field: 'saturationV',
+        label: 'Saturation voltage',
+        message: 'Saturation voltage: give it or Rds(on) (or both)',
+      });
     if (v.topology === 'push-pull' && typeof v.devices === 'number' && v.devices < 2)
       errors.push({ field: 'devices', label: 'Devices', message: 'Devices: a push-pull stage has at least 2' });
     const shared = v.heatsinkSharedBy;
     if (typeof shared === 'number' && typeof v.devices === 'number' && shared > v.devices)
-      errors.push({ field: 'heatsinkSharedBy', label: 'Devices on one heatsink', message: 'Devices on one heatsink: at most the number of devices' });
-    if (typeof v.imbalanceTypical === 'number' && typeof v.imbalanceWorst === 'number' && v.imbalanceTypical > v.imbalanceWorst)
-      errors.push({ field: 'imbalanceWorst', label: 'Push-pull imbalance, worst', message: 'Push-pull imbalance, worst: at least the typical imbalance' });
+      errors.push({
+        field: 'heatsinkSharedBy',
+        label: 'Devices on one heatsink',
+        message: 'Devices on one heatsink: at most the number of devices',
+      });
+    if (
+      typeof v.imbalanceTypical === 'number' &&
+      typeof v.imbalanceWorst === 'number' &&
+      v.imbalanceTypical > v.imbalanceWorst
+    )
+      errors.push({
+        field: 'imbalanceWorst',
+        label: 'Push-pull imbalance, worst',
+        message: 'Push-pull imbalance, worst: at least the typical imbalance',
+      });
     if (typeof v.networkLoadOhm === 'number' && typeof v.turnsRatio === 'number')
-      errors.push({ field: 'networkLoadOhm', label: 'Drain load set by a matching network', message: 'Drain load set by a matching network: give it or a turns ratio, not both' });
+      errors.push({
+        field: 'networkLoadOhm',
+        label: 'Drain load set by a matching network',
+        message: 'Drain load set by a matching network: give it or a turns ratio, not both',
+      });
     return errors;
   },
 });

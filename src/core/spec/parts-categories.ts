@@ -42,8 +42,10 @@ export interface CategoryDef {
 }
 
 const r = (key: string, f: NumberField): RatingField => ({ ...f, key, optional: true });
-const A = (key: string, label: string, max = 1000) => r(key, num(label, 'A', U.A, 0, max, null, { exclusiveMin: true }));
-const V = (key: string, label: string, max = 100_000) => r(key, num(label, 'V', U.V, 0, max, null, { exclusiveMin: true }));
+const A = (key: string, label: string, max = 1000) =>
+  r(key, num(label, 'A', U.A, 0, max, null, { exclusiveMin: true }));
+const V = (key: string, label: string, max = 100_000) =>
+  r(key, num(label, 'V', U.V, 0, max, null, { exclusiveMin: true }));
 const KW = (key: string, label: string) => r(key, num(label, 'K/W', U.KW, 0, 1000, null, { exclusiveMin: true }));
 const MM = { symbol: 'mm', scale: 1e-3 } as const;
 // Common practice, no published source: toroids for HF from 2 mm to 100 mm across (the filter form's own range)
@@ -63,7 +65,10 @@ export const PART_CATEGORIES: readonly CategoryDef[] = [
   },
   {
     id: 'resistor', label: 'Resistor', aliases: [],
-    numbers: [r('resistanceOhm', num('Resistance', 'Ω', U.ohm, 0, 1e9, null, { exclusiveMin: true })), r('powerW', num('Power rating', 'W', U.W, 0, 10_000, null, { exclusiveMin: true }))],
+    numbers: [
+      r('resistanceOhm', num('Resistance', 'Ω', U.ohm, 0, 1e9, null, { exclusiveMin: true })),
+      r('powerW', num('Power rating', 'W', U.W, 0, 10_000, null, { exclusiveMin: true })),
+    ],
     choices: [],
   },
   {
@@ -78,7 +83,10 @@ export const PART_CATEGORIES: readonly CategoryDef[] = [
   },
   {
     id: 'relay', label: 'Relay', aliases: [],
-    numbers: [A('contactCarryA', 'Contact carry current'), A('contactSwitchA', 'Contact switching current'), V('contactV', 'Contact voltage'), V('coilV', 'Coil voltage'), A('coilA', 'Coil current', 10)],
+    numbers: [
+      A('contactCarryA', 'Contact carry current'), A('contactSwitchA', 'Contact switching current'),
+      V('contactV', 'Contact voltage'), V('coilV', 'Coil voltage'), A('coilA', 'Coil current', 10),
+    ],
     choices: [],
   },
   {
@@ -88,7 +96,11 @@ export const PART_CATEGORIES: readonly CategoryDef[] = [
   },
   {
     id: 'mosfet', label: 'MOSFET', aliases: ['transistor'],
-    numbers: [V('vdsMaxV', 'V(BR)DSS'), A('idMaxA', 'Drain current'), r('rdsOnOhm', num('Rds(on)', 'Ω', U.ohm, 0, 1000, null, { exclusiveMin: true })), KW('thetaJcKPerW', 'θjc'), r('tjMaxC', num('Tj max', '°C', U.C, 0, 300, null, { exclusiveMin: true }))],
+    numbers: [
+      V('vdsMaxV', 'V(BR)DSS'), A('idMaxA', 'Drain current'),
+      r('rdsOnOhm', num('Rds(on)', 'Ω', U.ohm, 0, 1000, null, { exclusiveMin: true })), KW('thetaJcKPerW', 'θjc'),
+      r('tjMaxC', num('Tj max', '°C', U.C, 0, 300, null, { exclusiveMin: true })),
+    ],
     choices: [],
   },
   { id: 'heatsink', label: 'Heatsink', aliases: [], numbers: [KW('thetaSaKPerW', 'θsa')], choices: [] },
@@ -101,14 +113,18 @@ export const PART_CATEGORIES: readonly CategoryDef[] = [
     id: 'core', label: 'Core', aliases: ['toroid'],
     numbers: [
       r('alHPerTurn2', num('AL', 'H', U.nHt2, 0, 1e-3, null, { exclusiveMin: true })),
-      coreMm('outerDiameterM', 'Outer diameter'), coreMm('innerDiameterM', 'Inner diameter'), coreMm('heightM', 'Height'),
+      coreMm('outerDiameterM', 'Outer diameter'), coreMm('innerDiameterM', 'Inner diameter'),
+      coreMm('heightM', 'Height'),
     ],
     choices: [],
   },
   {
     id: 'wire', label: 'Wire', aliases: ['enamelled wire', 'magnet wire'],
     // the filter form's wire range (0.05-5 mm over the enamel); a reel of at most 10 km
-    numbers: [r('diameterM', num('Diameter over enamel', 'm', MM, 5e-5, 0.005, null, { exclusiveMin: true })), r('lengthM', num('Length', 'm', { symbol: 'm', scale: 1 }, 0, 10_000, null, { exclusiveMin: true }))],
+    numbers: [
+      r('diameterM', num('Diameter over enamel', 'm', MM, 5e-5, 0.005, null, { exclusiveMin: true })),
+      r('lengthM', num('Length', 'm', { symbol: 'm', scale: 1 }, 0, 10_000, null, { exclusiveMin: true })),
+    ],
     choices: [],
   },
   { id: 'other', label: 'Other', aliases: [], numbers: [], choices: [] },
@@ -145,13 +161,21 @@ export function readRatings(part: Pick<Part, 'category' | 'ratings'>): ReadRatin
     const v = part.ratings[c.key];
     if (v === undefined) continue;
     const hit = typeof v === 'string' ? c.options.find((o) => o.toLowerCase() === v.trim().toLowerCase()) : undefined;
-    if (hit === undefined) out.errors.push({ field: `ratings.${c.key}`, label: c.label, message: `${c.label} must be one of ${c.options.join(', ')}` });
-    else out.choices[c.key] = hit;
+    if (hit === undefined) {
+      out.errors.push({
+        field: `ratings.${c.key}`,
+        label: c.label,
+        message: `${c.label} must be one of ${c.options.join(', ')}`,
+      });
+    } else out.choices[c.key] = hit;
   }
   return out;
 }
 
-/** The ratings a category offers by name and unit, as a help line ("Capacitor: Capacitance (µF), Rated voltage (V), …"). */
+/**
+ * The ratings a category offers by name and unit, as a help line ("Capacitor: Capacitance (µF), Rated voltage (V),
+ * …").
+ */
 export function ratingKeysHelp(category: string): string {
   const def = categoryOf(category);
   const names = [

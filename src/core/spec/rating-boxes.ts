@@ -20,7 +20,8 @@ export function ratingBoxSpec(category: string): Spec {
   if (known) return known;
   const fields: Record<string, NumberField | ChoiceField> = {};
   for (const f of def.numbers) fields[BOX_PREFIX + f.key] = f;
-  for (const c of def.choices) fields[BOX_PREFIX + c.key] = choice(c.label, [['', '(not given)'], ...c.options.map((o) => [o, o] as const)], '');
+  for (const c of def.choices)
+    fields[BOX_PREFIX + c.key] = choice(c.label, [['', '(not given)'], ...c.options.map((o) => [o, o] as const)], '');
   const spec = defineSpec({ name: `ratings-${def.id}`, label: `${def.label} ratings`, fields });
   specs.set(def.id, spec);
   return spec;
@@ -29,7 +30,9 @@ export function ratingBoxSpec(category: string): Spec {
 /** Every rating box of every category, for the form's field labels. */
 export const allRatingBoxSpecs = (): Spec[] => PART_CATEGORIES.map((d) => ratingBoxSpec(d.id));
 
-/** A value in its box: bare in the display unit shown beside the box ("35", not "35 V") when that reads back exactly. */
+/**
+ * A value in its box: bare in the display unit shown beside the box ("35", not "35 V") when that reads back exactly.
+ */
 function boxText(v: number, f: NumberField): string {
   const t = numberText(v, f);
   const sym = ` ${f.display.symbol}`;
@@ -59,7 +62,10 @@ export function ratingBoxValues(part: Pick<Part, 'category' | 'ratings'>): Recor
 }
 
 /** The ratings typed in the boxes ("r.<key>"), each read with its own field; an empty box is no rating. */
-export function readRatingBoxes(values: Record<string, string>): { ratings: Record<string, number | string>; errors: FieldError[] } {
+export function readRatingBoxes(values: Record<string, string>): {
+  ratings: Record<string, number | string>;
+  errors: FieldError[];
+} {
   const ratings: Record<string, number | string> = {};
   const errors: FieldError[] = [];
   for (const [name, raw] of Object.entries(values)) {
@@ -75,7 +81,12 @@ export function readRatingBoxes(values: Record<string, string>): { ratings: Reco
     } else {
       const o = d.c.options.find((x) => x.toLowerCase() === text.toLowerCase());
       if (o !== undefined) ratings[key] = o;
-      else errors.push({ field: name, label: d.c.label, message: `${d.c.label} must be one of ${d.c.options.join(', ')}` });
+      else
+        errors.push({
+          field: name,
+          label: d.c.label,
+          message: `${d.c.label} must be one of ${d.c.options.join(', ')}`,
+        });
     }
   }
   return { ratings, errors };

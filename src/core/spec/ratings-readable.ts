@@ -93,7 +93,11 @@ export function parseRatingsReadable(s: string): Parsed<Record<string, number | 
       // the older form, one key=value (or several joined by ", key=")
       const old = parseRatings(item);
       if (!old.ok && item.includes('=')) return old;
-      if (!old.ok) return { ok: false, message: `"${item.slice(0, 60)}" is not a rating: write its name and value (e.g. Rated voltage 35 V)` };
+      if (!old.ok)
+        return {
+          ok: false,
+          message: `"${item.slice(0, 60)}" is not a rating: write its name and value (e.g. Rated voltage 35 V)`,
+        };
       for (const [k, v] of Object.entries(old.value)) {
         const twice = put(k, v);
         if (twice) return { ok: false, message: twice };
@@ -110,7 +114,11 @@ export function parseRatingsReadable(s: string): Parsed<Record<string, number | 
       v = n.value;
     } else {
       const o = hit.k.c.options.find((x) => x.toLowerCase() === valueText.toLowerCase());
-      if (o === undefined) return { ok: false, message: `${label} must be one of ${hit.k.c.options.join(', ')}; you entered "${valueText}"` };
+      if (o === undefined)
+        return {
+          ok: false,
+          message: `${label} must be one of ${hit.k.c.options.join(', ')}; you entered "${valueText}"`,
+        };
       v = o;
     }
     const twice = put(hit.key, v);
@@ -122,7 +130,10 @@ export function parseRatingsReadable(s: string): Parsed<Record<string, number | 
 
 /** The ratings box's codec: written readable, read in either form, the stored record checked as before. */
 export const readableRatingsCodec: TextCodec = {
-  toText: (v) => (v !== null && typeof v === 'object' && !Array.isArray(v) ? ratingsReadable(v as Record<string, number | string>) : ''),
+  toText: (v) =>
+    v !== null && typeof v === 'object' && !Array.isArray(v)
+      ? ratingsReadable(v as Record<string, number | string>)
+      : '',
   fromText: parseRatingsReadable,
   check: ratingsCodec.check,
 };

@@ -39,9 +39,12 @@ export const rfSettingsSpec = defineSpec({
         'Heating uses the keying duty in the project settings',
       example: '40',
     }),
-    exposureOnFraction: num('Worst share of the averaging time on the air', '%', U.pct, 0, 1, 1, { form: 'onFraction' }),
+    exposureOnFraction: num('Worst share of the averaging time on the air', '%', U.pct, 0, 1, 1, {
+      form: 'onFraction',
+    }),
   },
 });
 
 /** The RF settings form's text for a project. */
-export const rfSettingsFormValues = (p: Pick<Project, 'rf'>): Record<string, string> => formValues(rfSettingsSpec, p.rf);
+export const rfSettingsFormValues = (p: Pick<Project, 'rf'>): Record<string, string> =>
+  formValues(rfSettingsSpec, p.rf);

@@ -42,10 +42,16 @@ export const mainsSpec = defineSpec({
   name: 'mains',
   label: 'Mains supply',
   fields: {
-    nominalV: num('Mains nominal voltage', 'V', U.V, 50, 300, 230, { form: 'mainsV', help: 'rms, as on the supply label' }),
+    nominalV: num('Mains nominal voltage', 'V', U.V, 50, 300, 230, {
+      form: 'mainsV',
+      help: 'rms, as on the supply label',
+    }),
     frequencyHz: num('Mains frequency', 'Hz', U.Hz, 40, 500, 50, { form: 'mainsHz' }),
     lowFraction: num('Low mains tolerance', '%', U.pct, 0, 0.5, 0.1, { form: 'mainsLow', help: 'how far it may sag' }),
-    highFraction: num('High mains tolerance', '%', U.pct, 0, 0.5, 0.1, { form: 'mainsHigh', help: 'how far it may rise' }),
+    highFraction: num('High mains tolerance', '%', U.pct, 0, 0.5, 0.1, {
+      form: 'mainsHigh',
+      help: 'how far it may rise',
+    }),
   },
 });
 
@@ -78,7 +84,9 @@ export const thermalInputsSpec = defineSpec({
     // Source: FCC OET Bulletin 65 Supplement B (1997), Table 2: conversational CW duty factor 40 %
     keyingDuty: num('Keying duty (heating)', '%', U.pct, 0, 1, 0.4, {
       form: 'duty',
-      help: 'share of sending time the key is down, for transformer, regulator and heatsink heating; CW conversational 40 %. ' +
+      help:
+        'share of sending time the key is down, for transformer, regulator and heatsink heating; CW conversational ' +
+        '40 %. ' +
         'RF exposure uses its own mode duty factor (RF page)',
       example: '40',
     }),
@@ -130,13 +138,22 @@ export const settingsSpec = defineSpec({
     if (v.supplyKind !== 'mains') return errors;
     for (const k of MAINS_KEYS) {
       const f = mainsSpec.fields[k];
-      if (getPath(v, `mains.${k}`) === null) errors.push({ field: `mains.${k}`, label: f.label, message: `${f.label} is empty: enter a value (or choose a battery / DC supply)` });
+      if (getPath(v, `mains.${k}`) === null)
+        errors.push({
+          field: `mains.${k}`,
+          label: f.label,
+          message: `${f.label} is empty: enter a value (or choose a battery / DC supply)`,
+        });
     }
     return errors;
   },
   view: {
     // a battery / DC station (mains null) shows empty mains boxes: figures there would read as a mains supply
-    from: (p) => ({ ...p, supplyKind: p.mains === null ? 'dc' : 'mains', mains: p.mains === null ? NO_MAINS : p.mains }),
+    from: (p) => ({
+      ...p,
+      supplyKind: p.mains === null ? 'dc' : 'mains',
+      mains: p.mains === null ? NO_MAINS : p.mains,
+    }),
     to: (v) => {
       const { supplyKind, ...rest } = v;
       return { ...rest, mains: supplyKind === 'mains' ? v.mains : null };
@@ -145,7 +162,10 @@ export const settingsSpec = defineSpec({
 });
 
 /** What the settings form changes in a project. */
-export type ProjectSettings = Pick<Project, 'name' | 'notes' | 'frequencyHz' | 'targetPowerW' | 'mains' | 'ambientC' | 'keyingDuty' | 'kits' | 'currency'>;
+export type ProjectSettings = Pick<
+  Project,
+  'name' | 'notes' | 'frequencyHz' | 'targetPowerW' | 'mains' | 'ambientC' | 'keyingDuty' | 'kits' | 'currency'
+>;
 
 // Common practice, from memory: CW (QRP) activity frequencies, one per band; the band names come from HF_BANDS.
 const NEW_PROJECT_BANDS_HZ = [1.83e6, 3.56e6, 7.03e6, 10.11e6, 14.06e6, 18.086e6, 21.06e6];
@@ -164,7 +184,8 @@ export const newProjectSpec = defineSpec({
     }),
     // '' (also what a form without this box sends) starts an empty project
     template: choice('Start from', TEMPLATE_OPTIONS, 'mains-two-rail', {
-      help: 'a template fills in stages, supply, rails and a starter parts list with typical values and invented prices',
+      help: 'a template fills in stages, supply, rails and a starter parts list with typical values and invented ' +
+        'prices',
     }),
   },
   refine: (v) => {
@@ -175,14 +196,30 @@ export const newProjectSpec = defineSpec({
     if (!info) return [];
     const battery = v.mainsPreset === 'battery';
     if (info.mains && battery)
-      return [{ field: 'mainsPreset', label: 'Supply', message: `Supply: the "${info.label}" template runs from the mains; choose a mains voltage (or the battery template)` }];
+      return [
+        {
+          field: 'mainsPreset',
+          label: 'Supply',
+          message: `Supply: the "${info.label}" template runs from the mains; choose a mains voltage (or the battery ` +
+            `template)`,
+        },
+      ];
     if (!info.mains && !battery)
-      return [{ field: 'mainsPreset', label: 'Supply', message: `Supply: the "${info.label}" template runs from its battery; choose Battery / external DC (or a mains template)` }];
+      return [
+        {
+          field: 'mainsPreset',
+          label: 'Supply',
+          message: `Supply: the "${info.label}" template runs from its battery; choose Battery / external DC (or a ` +
+            `mains template)`,
+        },
+      ];
     return [];
   },
   view: {
     from: (p) => {
-      const preset = Object.keys(MAINS_PRESETS).find((k) => JSON.stringify(MAINS_PRESETS[k]) === JSON.stringify(p.mains ?? null));
+      const preset = Object.keys(MAINS_PRESETS).find(
+        (k) => JSON.stringify(MAINS_PRESETS[k]) === JSON.stringify(p.mains ?? null),
+      );
       return { ...p, mainsPreset: preset };
     },
     to: (v) => {
@@ -192,7 +229,9 @@ export const newProjectSpec = defineSpec({
   },
 });
 
-export type NewProjectInput = Pick<Project, 'name' | 'frequencyHz' | 'targetPowerW' | 'mains'> & { template: TemplateKey | '' };
+export type NewProjectInput = Pick<Project, 'name' | 'frequencyHz' | 'targetPowerW' | 'mains'> & {
+  template: TemplateKey | '';
+};
 
 /** The band choices of the new-project form: [form text, words], the text as the band box reads it. */
 export const NEW_PROJECT_BANDS: [string, string][] = NEW_PROJECT_BANDS_HZ.map((hz) => [

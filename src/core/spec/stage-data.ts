@@ -31,7 +31,15 @@ export const STAGE_DATA: readonly StageData[] = [
       ['saturationV', 'rdsOnOhm', 'turnsRatio', 'loadOhm', 'efficiency'],
       ['deviceVdsMaxV', 'drainClampV', 'deviceIdMaxA', 'biasIdleMaxA', 'referencePowerW'],
       ['mount.thetaJcKPerW', 'mount.thetaCsKPerW', 'mount.thetaSaKPerW', 'mount.tjMaxC', 'heatsinkSharedBy'],
-      ['networkLoadOhm', 'conductionAngleDeg', 'imbalanceTypical', 'imbalanceWorst', 'deviceCossF', 'outputLeakageH', 'transitionTimeS'],
+      [
+        'networkLoadOhm',
+        'conductionAngleDeg',
+        'imbalanceTypical',
+        'imbalanceWorst',
+        'deviceCossF',
+        'outputLeakageH',
+        'transitionTimeS',
+      ],
       ['outputCoreId', 'outputPrimaryTurns', 'outputWireDiameterM'],
     ],
   },
@@ -77,7 +85,11 @@ export function stageData(s: Stage): { data: StageData; value: unknown } | undef
 
 /** Rails, stages, ... named by the block's reference fields that the project does not have. */
 export function missingRefs(p: Project, spec: Spec, value: Record<string, unknown>): FieldError[] {
-  const ids = { rail: new Set(p.supply.rails.map((r) => r.id)), stage: new Set(p.stages.map((s) => s.id)), core: new Set((p.cores ?? []).map((c) => c.id)) } as Record<string, Set<string>>;
+  const ids = {
+    rail: new Set(p.supply.rails.map((r) => r.id)),
+    stage: new Set(p.stages.map((s) => s.id)),
+    core: new Set((p.cores ?? []).map((c) => c.id)),
+  } as Record<string, Set<string>>;
   const errors: FieldError[] = [];
   for (const [key, f] of Object.entries(spec.fields)) {
     const id = value[key];

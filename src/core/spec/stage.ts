@@ -20,7 +20,10 @@ export const stageSpec = defineSpec({
 
 /** The current a stage draws from one rail in each mode, keyed 'currentA.receive' etc. */
 export const loadCurrentFields: Record<string, NumberField> = Object.fromEntries(
-  MODES.map((m) => [`currentA.${m}`, num(`${MODE_LABELS[m]} current`, 'A', U.mA, 0, 100, 0, { example: '350', emptyAs: 0, help: 'empty = none drawn' })]),
+  MODES.map((m) => [
+    `currentA.${m}`,
+    num(`${MODE_LABELS[m]} current`, 'A', U.mA, 0, 100, 0, { example: '350', emptyAs: 0, help: 'empty = none drawn' }),
+  ]),
 );
 
 /** One load row; the form names carry the row number (rail0, l0_keyDown), see loadFormName. */

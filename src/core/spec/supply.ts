@@ -75,7 +75,8 @@ export const enclosureSpec = defineSpec({
       example: '1160',
     }),
     // Sealed enclosures in still air: steel about 5.5, aluminium about 6.5 W/(m² K) (a vendor's sizing page)
-    enclosureUWPerM2K: optNum('Heat transfer coefficient', 'W/(m²·K)', { symbol: 'W/(m²·K)', scale: 1 }, 0, 100, 5.5, {
+    enclosureUWPerM2K: optNum('Heat transfer coefficient', 'W/(m²·K)', { symbol: 'W/(m²·K)' +
+      '', scale: 1 }, 0, 100, 5.5, {
       form: 'enclosureU',
       exclusiveMin: true,
       help: 'sealed steel about 5.5, aluminium 6.5',

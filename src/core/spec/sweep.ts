@@ -17,7 +17,12 @@ export type SweepParameter = (typeof SWEEP_PARAMETERS)[number];
 const BASE: Record<SweepParameter, { field: NumberField; name: string; from: number; to: number }> = {
   mainsV: { field: mainsSpec.fields.nominalV as NumberField, name: 'mains nominal voltage', from: 200, to: 250 },
   windingV: { field: windingSpec.fields.ratedVrms as NumberField, name: 'winding rated voltage', from: 16, to: 24 },
-  reservoirF: { field: rectifiedSpec.fields.reservoirF as NumberField, name: 'reservoir capacitance', from: 2200e-6, to: 15000e-6 },
+  reservoirF: {
+    field: rectifiedSpec.fields.reservoirF as NumberField,
+    name: 'reservoir capacitance',
+    from: 2200e-6,
+    to: 15000e-6,
+  },
   paLoadOhm: { field: paSpec.fields.loadOhm as NumberField, name: 'PA load', from: 25, to: 100 },
   lpfOrder: { field: lpfSpec.fields.order as NumberField, name: 'filter order', from: 3, to: 9 },
 };
@@ -69,10 +74,19 @@ function sweepSpec(p: SweepParameter): Spec {
       const errors: FieldError[] = [];
       // a bad stored value (NaN, Infinity) is its own field's error; the range check needs two finite ends
       if (typeof v.from === 'number' && typeof v.to === 'number' && Number.isFinite(v.from) && Number.isFinite(v.to)) {
-        if (!(v.to > v.from)) errors.push({ field: 'to', label: `To (${BASE[p].name})`, message: `To (${BASE[p].name}) must be above From` });
+        if (!(v.to > v.from))
+          errors.push({
+            field: 'to',
+            label: `To (${BASE[p].name})`,
+            message: `To (${BASE[p].name}) must be above From`,
+          });
         // Source: Matthaei, Young & Jones (1964) §4.05: only odd orders sit between two equal terminations
         else if (p === 'lpfOrder' && oddBetween(v.from, v.to).length < 2)
-          errors.push({ field: 'to', label: `To (${BASE[p].name})`, message: `To (${BASE[p].name}): the range holds fewer than two odd orders (3, 5, 7 or 9)` });
+          errors.push({
+            field: 'to',
+            label: `To (${BASE[p].name})`,
+            message: `To (${BASE[p].name}): the range holds fewer than two odd orders (3, 5, 7 or 9)`,
+          });
       }
       return errors;
     },
@@ -86,9 +100,9 @@ export const oddBetween = (from: number, to: number): number[] => {
   return out;
 };
 
-export const SWEEP_SPECS: Record<SweepParameter, Spec> = Object.fromEntries(SWEEP_PARAMETERS.map((p) => [p, sweepSpec(p)])) as Record<
-  SweepParameter,
-  Spec
->;
+export const SWEEP_SPECS: Record<SweepParameter, Spec> = Object.fromEntries(
+  SWEEP_PARAMETERS.map((p) => [p, sweepSpec(p)]),
+) as Record<SweepParameter, Spec>;
 
-export const isSweepParameter = (x: unknown): x is SweepParameter => (SWEEP_PARAMETERS as readonly unknown[]).includes(x);
+export const isSweepParameter = (x: unknown): x is SweepParameter =>
+  (SWEEP_PARAMETERS as readonly unknown[]).includes(x);
