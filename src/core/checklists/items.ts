@@ -13,7 +13,13 @@ export function caution(text: string, value: number | null = null, unit = '', ba
 }
 
 /** A line with a number: `{v}` in the text is replaced by the formatted value. */
-export function measured(text: string, value: number | null, unit: string, basis: string, emphasis: ChecklistItem['emphasis'] = 'normal'): ChecklistItem {
+export function measured(
+  text: string,
+  value: number | null,
+  unit: string,
+  basis: string,
+  emphasis: ChecklistItem['emphasis'] = 'normal',
+): ChecklistItem {
   const v = finiteOrNull(value);
   return { text: text.replace('{v}', formatValue(v, unit)), value: v, unit, basis, emphasis };
 }
@@ -27,11 +33,16 @@ export function fmt(value: number | null | undefined, unit: string): string {
 }
 
 /** Current a stage draws from each rail in one mode, from the budget (entered and computed loads). */
-export function stageCurrents(report: ChecklistReport, stageId: string, mode: Mode): { railId: string; railName: string; currentA: number }[] {
+export function stageCurrents(
+  report: ChecklistReport,
+  stageId: string,
+  mode: Mode,
+): { railId: string; railName: string; currentA: number }[] {
   const out: { railId: string; railName: string; currentA: number }[] = [];
   for (const rail of report.budget.rails) {
     const sum = rail.loads.filter((l) => l.stageId === stageId).reduce((a, l) => a + l.currentA[mode], 0);
-    if (rail.loads.some((l) => l.stageId === stageId)) out.push({ railId: rail.railId, railName: rail.name, currentA: sum });
+    if (rail.loads.some((l) => l.stageId === stageId))
+      out.push({ railId: rail.railId, railName: rail.name, currentA: sum });
   }
   return out;
 }
@@ -41,7 +52,14 @@ export function stagePerMode(report: ChecklistReport, stageId: string, railId: s
   if (!rail) return null;
   const loads = rail.loads.filter((l) => l.stageId === stageId);
   if (loads.length === 0) return null;
-  return loads.reduce<PerMode>((a, l) => ({ receive: a.receive + l.currentA.receive, keyUp: a.keyUp + l.currentA.keyUp, keyDown: a.keyDown + l.currentA.keyDown }), { receive: 0, keyUp: 0, keyDown: 0 });
+  return loads.reduce<PerMode>(
+    (a, l) => ({
+      receive: a.receive + l.currentA.receive,
+      keyUp: a.keyUp + l.currentA.keyUp,
+      keyDown: a.keyDown + l.currentA.keyDown,
+    }),
+    { receive: 0, keyUp: 0, keyDown: 0 },
+  );
 }
 
 export function railReport(report: ChecklistReport, railId: string): RailReport | null {

@@ -66,8 +66,13 @@ export function rfView(rf: RfReport | null): RfView | null {
   const relay = trStage?.relay ?? null;
   const exp = rf.exposure;
   const exposure: RfExposureView[] = [];
-  if (exp?.controlledDistanceM != null) exposure.push({ label: 'controlled / occupational: you, aware of the exposure', distanceM: exp.controlledDistanceM });
-  if (exp?.generalDistanceM != null) exposure.push({ label: 'general public and neighbours', distanceM: exp.generalDistanceM });
+  if (exp?.controlledDistanceM != null)
+    exposure.push({
+      label: 'controlled / occupational: you, aware of the exposure',
+      distanceM: exp.controlledDistanceM,
+    });
+  if (exp?.generalDistanceM != null)
+    exposure.push({ label: 'general public and neighbours', distanceM: exp.generalDistanceM });
   return {
     paOutputW: pa?.outputW ?? null,
     paKeyDownA: pa?.keyDownCurrentA ?? null,
@@ -78,7 +83,10 @@ export function rfView(rf: RfReport | null): RfView | null {
     paJunctionC: pa?.thermal.tjContinuousC ?? null,
     paThetaSaNeededKPerW: pa?.thermal.thetaSaNeededContinuousKPerW ?? null,
     lpfCutoffHz: design?.cutoffHz ?? null,
-    lpfText: design ? `${design.response === 'chebyshev' ? `Chebyshev ${design.rippleDb} dB` : 'Butterworth'}, order ${design.order}, ${design.form}` : '',
+    lpfText: design
+      ? `${design.response === 'chebyshev' ? `Chebyshev ${design.rippleDb} dB` : 'Butterworth'}, order ` +
+        `${design.order}, ${design.form}`
+      : '',
     lpfElements: (design?.elements ?? []).map((e) => {
       const cap = e.kind === 'shunt-capacitor';
       return {

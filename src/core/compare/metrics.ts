@@ -24,7 +24,8 @@ export interface Metric {
   margin?: boolean;
 }
 
-const finiteOrNull = (x: number | undefined | null): number | null => (typeof x === 'number' && Number.isFinite(x) ? x : null);
+const finiteOrNull = (x: number | undefined | null): number | null =>
+  typeof x === 'number' && Number.isFinite(x) ? x : null;
 const minOf = (xs: number[]): number | null => (xs.length ? Math.min(...xs) : null);
 
 /** Lowest key-down margin of a rail above the least voltage it must keep (V), or null with the reason. */
@@ -32,12 +33,22 @@ export function railTroughMargin(r: RailReport): { value: number | null; why: st
   if (r.kind === 'rectified') {
     // a rail with no stated minimum has nothing to keep above: a margin would be meaningless
     if (!(r.requiredMinV > 0)) return { value: null, why: 'no minimum stated for this rail' };
-    const m = minOf(r.corners.filter((c) => c.load === 'keyDown').map((c) => c.headroomMarginV).filter(Number.isFinite));
+    const m = minOf(
+      r.corners
+        .filter((c) => c.load === 'keyDown')
+        .map((c) => c.headroomMarginV)
+        .filter(Number.isFinite),
+    );
     return m === null ? { value: null, why: 'not simulated' } : { value: m, why: '' };
   }
   if (r.kind === 'regulated') {
     // a regulator's input trough against its output plus its dropout (the datasheet's definition of dropout)
-    const m = minOf(r.corners.filter((c) => c.load === 'keyDown').map((c) => c.inputTroughV - r.outputV - r.dropoutV).filter(Number.isFinite));
+    const m = minOf(
+      r.corners
+        .filter((c) => c.load === 'keyDown')
+        .map((c) => c.inputTroughV - r.outputV - r.dropoutV)
+        .filter(Number.isFinite),
+    );
     return m === null ? { value: null, why: 'not computed' } : { value: m, why: '' };
   }
   if (!(r.requiredMinV > 0)) return { value: null, why: 'no minimum stated for this rail' };
@@ -53,7 +64,14 @@ export function projectMetrics(project: Project, report: EvaluationReport): Metr
     const m = r ? railTroughMargin(r) : { value: null, why: 'left out of the supply design (see its findings)' };
     const what = r?.kind === 'regulated' ? 'regulator headroom above dropout' : 'trough margin above its minimum';
     const worst = project.mains ? 'worst mains' : 'battery at its end voltage';
-    out.push({ key: `trough:${rail.name}`, label: `${rail.name}: ${what}, key-down, ${worst}`, unit: 'V', better: 'higher', margin: true, ...m });
+    out.push({
+      key: `trough:${rail.name}`,
+      label: `${rail.name}: ${what}, key-down, ${worst}`,
+      unit: 'V',
+      better: 'higher',
+      margin: true,
+      ...m,
+    });
   }
 
   const trafos = report.supply?.transformers ?? [];
@@ -79,7 +97,9 @@ export function projectMetrics(project: Project, report: EvaluationReport): Metr
   });
 
   // the worst SWR circle's drain peak where the report has it, else the matched peak at the highest supply
-  const peaks = pas.flatMap((s) => (s.pa && !s.pa.refused ? [s.pa.swr?.worstDrainPeak.value ?? s.pa.peakDrainV] : [])).filter(Number.isFinite);
+  const peaks = pas
+    .flatMap((s) => (s.pa && !s.pa.refused ? [s.pa.swr?.worstDrainPeak.value ?? s.pa.peakDrainV] : []))
+    .filter(Number.isFinite);
   const peak = peaks.length ? Math.max(...peaks) : null;
   out.push({
     key: 'drainPeakV',

@@ -30,7 +30,12 @@ export interface CompareRow {
  */
 export const SAME_WITHIN: Record<string, number> = { V: 0.05, VA: 0.5, W: 0.05, dB: 0.05, m: 0.005, cents: 0.5 };
 
-function verdictOf(first: Metric | undefined, m: Metric | undefined, unit: string, better: Better): Pick<CompareCell, 'verdict' | 'delta'> {
+function verdictOf(
+  first: Metric | undefined,
+  m: Metric | undefined,
+  unit: string,
+  better: Better,
+): Pick<CompareCell, 'verdict' | 'delta'> {
   const a = first?.value ?? null;
   const b = m?.value ?? null;
   if (a === null && b === null) return { verdict: 'same', delta: null };

@@ -41,22 +41,33 @@ export type SweepOutcome = { ok: true; result: SweepResult } | { ok: false; erro
 export function sweepTargets(p: Project, parameter: SweepParameter): SweepTarget[] {
   const pa = p.stages.find((s) => s.kind === 'final' && s.pa)?.pa;
   const paRail = p.supply.rails.find((r) => r.id === pa?.railId);
-  const first = <T extends { id: string }>(xs: T[], id: string | undefined) => [...xs.filter((x) => x.id === id), ...xs.filter((x) => x.id !== id)];
+  const first = <T extends { id: string }>(xs: T[], id: string | undefined) => [
+    ...xs.filter((x) => x.id === id),
+    ...xs.filter((x) => x.id !== id),
+  ];
   switch (parameter) {
     case 'mainsV':
       return p.mains ? [{ id: 'mains', name: 'Mains', currentValue: p.mains.nominalV }] : [];
     case 'windingV': {
-      const ws = p.supply.transformers.flatMap((t) => t.windings.map((w) => ({ id: w.id, name: `${t.name}: ${w.name}`, currentValue: w.ratedVrms })));
+      const ws = p.supply.transformers.flatMap((t) =>
+        t.windings.map((w) => ({ id: w.id, name: `${t.name}: ${w.name}`, currentValue: w.ratedVrms })),
+      );
       return first(ws, paRail?.kind === 'rectified' ? paRail.windingId : undefined);
     }
     case 'reservoirF': {
-      const rs = p.supply.rails.flatMap((r) => (r.kind === 'rectified' ? [{ id: r.id, name: r.name, currentValue: r.reservoirF }] : []));
+      const rs = p.supply.rails.flatMap((r) =>
+        r.kind === 'rectified' ? [{ id: r.id, name: r.name, currentValue: r.reservoirF }] : [],
+      );
       return first(rs, paRail?.id);
     }
     case 'paLoadOhm':
-      return p.stages.flatMap((s) => (s.kind === 'final' && s.pa ? [{ id: s.id, name: s.name, currentValue: s.pa.loadOhm }] : []));
+      return p.stages.flatMap((s) =>
+        s.kind === 'final' && s.pa ? [{ id: s.id, name: s.name, currentValue: s.pa.loadOhm }] : [],
+      );
     case 'lpfOrder':
-      return p.stages.flatMap((s) => (s.kind === 'lpf' && s.lpf ? [{ id: s.id, name: s.name, currentValue: s.lpf.order }] : []));
+      return p.stages.flatMap((s) =>
+        s.kind === 'lpf' && s.lpf ? [{ id: s.id, name: s.name, currentValue: s.lpf.order }] : [],
+      );
   }
 }
 
@@ -108,13 +119,23 @@ export function withSweepValue(p: Project, parameter: SweepParameter, targetId: 
 }
 
 /** Check the request against the project (the form's spec has checked the numbers) and evaluate each point. */
-export function runSweep(p: Project, req: SweepRequest, evaluateFn: (p: Project) => EvaluationReport = evaluate): SweepOutcome {
+export function runSweep(
+  p: Project,
+  req: SweepRequest,
+  evaluateFn: (p: Project) => EvaluationReport = evaluate,
+): SweepOutcome {
   const targets = sweepTargets(p, req.parameter);
   if (!targets.length) return { ok: false, errors: { target: `Item to vary: ${NONE[req.parameter]}` } };
   const target = req.target === '' ? targets[0] : targets.find((t) => t.id === req.target);
   if (!target) {
     const names = targets.map((t) => `"${t.name}"`).join(', ');
-    return { ok: false, errors: { target: `Item to vary: there is no such item ("${req.target.slice(0, 80)}") for a ${SWEEP_LABELS[req.parameter].toLowerCase()} sweep; choose one of ${names}` } };
+    return {
+      ok: false,
+      errors: {
+        target: `Item to vary: there is no such item ("${req.target.slice(0, 80)}") for a ` +
+          `${SWEEP_LABELS[req.parameter].toLowerCase()} sweep; choose one of ${names}`,
+      },
+    };
   }
   const points = sweepValues(req).map((value) => {
     const copy = withSweepValue(p, req.parameter, target.id, value);
@@ -124,7 +145,11 @@ export function runSweep(p: Project, req: SweepRequest, evaluateFn: (p: Project)
 }
 
 /** A starting range around the item's value for the sweep form (the builder edits it); inside the field's range. */
-export function sweepStart(parameter: SweepParameter, currentValue: number, field: { min: number; max: number }): { from: number; to: number; points: number } {
+export function sweepStart(
+  parameter: SweepParameter,
+  currentValue: number,
+  field: { min: number; max: number },
+): { from: number; to: number; points: number } {
   if (parameter === 'lpfOrder') return { from: 3, to: 9, points: 4 };
   // Common practice, no published source: ±15 % covers mains tolerance; a factor of 2 either way shows a part's trend
   const [lo, hi] = parameter === 'mainsV' || parameter === 'windingV' ? [0.85, 1.15] : [0.5, 2];

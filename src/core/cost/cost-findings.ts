@@ -11,10 +11,13 @@ const MESSAGES: Partial<Record<LineFlag, string>> = {
   'unknown-part': 'The line points to a part that is not in the parts catalog; it is not costed.',
   'unknown-stage': "The line's stage no longer exists; it is costed under General.",
   'bad-qty': 'The quantity per rig is negative, not a number or absurdly large; nothing is ordered.',
-  'too-large': 'The price or exchange rate gives an absurdly large cost; check the offer. The line stays in the list at zero cost.',
+  'too-large':
+    'The price or exchange rate gives an absurdly large cost; check the offer. The line stays in the list at zero ' +
+      'cost.',
   'no-offer': 'No supplier offer is entered; the line stays in the list at zero cost.',
   'no-price': 'The offers have no usable price break; the line stays in the list at zero cost.',
-  'no-rate': 'No exchange rate for the offer currency (add one under costing); the line stays in the list at zero cost.',
+  'no-rate':
+    'No exchange rate for the offer currency (add one under costing); the line stays in the list at zero cost.',
 };
 
 export function lineSubject(l: Pick<LineContext, 'description' | 'refs' | 'lineId'>): string {

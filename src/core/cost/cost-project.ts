@@ -20,7 +20,8 @@ export interface CostOptions {
 const SOURCE = 'cost.practice' as const;
 
 export const COST_NOTES: readonly string[] = [
-  'Needed pieces per line = ceil(qty per rig x kits x (1 + attrition)) + spares per line; lines with no use get no spares.',
+  'Needed pieces per line = ceil(qty per rig x kits x (1 + attrition)) + spares per line; lines with no use get no ' +
+    'spares.',
   'Order quantity = the cheapest quantity at least the need that the offer allows (minimum order, lowest price break, '
     + 'order multiple): the plain order, or more pieces up to a higher price break when that costs less in total.',
   'Each line is bought from one offer; splitting a line between suppliers is not considered.',
@@ -33,19 +34,34 @@ export const COST_NOTES: readonly string[] = [
 ];
 
 /** A supplier's shipping charge in project minor units, or why it cannot be counted (then costing counts 0). */
-export function supplierShipping(project: Project, name: string): { ok: true; cents: number } | { ok: false; message: string } {
+export function supplierShipping(
+  project: Project,
+  name: string,
+): { ok: true; cents: number } | { ok: false; message: string } {
   const entry = project.costing.suppliers.find((s) => s.name.trim().toLowerCase() === name.trim().toLowerCase());
-  if (entry === undefined) return { ok: false, message: `Supplier "${name}" has no shipping entry; shipping counted as 0.` };
+  if (entry === undefined)
+    return { ok: false, message: `Supplier "${name}" has no shipping entry; shipping counted as 0.` };
   const rate = rateFor(entry.currency, project.currency, project.costing.exchangeRates);
-  if (rate === null) return { ok: false, message: `No exchange rate for ${entry.currency}: shipping from "${name}" counted as 0.` };
-  if (!Number.isFinite(entry.shippingCents) || entry.shippingCents < 0) return { ok: false, message: `Shipping of "${name}" is not a valid amount; counted as 0.` };
+  if (rate === null)
+    return { ok: false, message: `No exchange rate for ${entry.currency}: shipping from "${name}" counted as 0.` };
+  if (!Number.isFinite(entry.shippingCents) || entry.shippingCents < 0)
+    return { ok: false, message: `Shipping of "${name}" is not a valid amount; counted as 0.` };
   return { ok: true, cents: convertCents(entry.shippingCents, minorRate(rate, entry.currency, project.currency)) };
 }
 
 function shippingFor(project: Project, name: string, findings: Finding[]): number {
   const s = supplierShipping(project, name);
   if (s.ok) return s.cents;
-  findings.push({ severity: 'caution', rule: 'cost.shipping', subject: name, value: null, limit: null, unit: '', source: SOURCE, message: s.message });
+  findings.push({
+    severity: 'caution',
+    rule: 'cost.shipping',
+    subject: name,
+    value: null,
+    limit: null,
+    unit: '',
+    source: SOURCE,
+    message: s.message,
+  });
   return 0;
 }
 
@@ -61,9 +77,11 @@ function methodNote(choice: PlanChoice, n: number, limit: number, total: number,
       + `search (${choice.examined} nodes) was used, ${scope}; it proved the plan the cheapest possible.`;
   }
   const lb = choice.lowerBoundCents ?? total;
-  return `Not proven: with ${n} suppliers the branch and bound search stopped after ${choice.examined} nodes, ${scope}; `
-    + `the plan costs ${formatMoney(total, currency)} and no plan can cost less than ${formatMoney(lb, currency)} `
-    + `(at most ${formatMoney(total - lb, currency)} might be saved).`;
+  return (
+    `Not proven: with ${n} suppliers the branch and bound search stopped after ${choice.examined} nodes, ${scope}; ` +
+    `the plan costs ${formatMoney(total, currency)} and no plan can cost less than ${formatMoney(lb, currency)} ` +
+    `(at most ${formatMoney(total - lb, currency)} might be saved).`
+  );
 }
 
 export function costProject(project: Project, options: CostOptions = {}): CostReport {
@@ -71,11 +89,29 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
   const findings: Finding[] = [];
   const kits = kitsOf(project);
   if (kits === 0) {
-    findings.push({ severity: 'fail', rule: 'cost.kits', subject: 'Number of kits', value: Number.isFinite(project.kits) ? project.kits : null, limit: 1, unit: '', source: SOURCE, message: 'The number of kits must be a whole number of at least 1; nothing was costed.' });
+    findings.push({
+      severity: 'fail',
+      rule: 'cost.kits',
+      subject: 'Number of kits',
+      value: Number.isFinite(project.kits) ? project.kits : null,
+      limit: 1,
+      unit: '',
+      source: SOURCE,
+      message: 'The number of kits must be a whole number of at least 1; nothing was costed.',
+    });
   }
   const { attritionFraction: a } = project.costing;
   if (!Number.isFinite(a) || a < 0) {
-    findings.push({ severity: 'caution', rule: 'cost.attrition', subject: 'Attrition allowance', value: Number.isFinite(a) ? a : null, limit: 0, unit: '', source: SOURCE, message: 'The attrition allowance is negative or not a number; 0 was used.' });
+    findings.push({
+      severity: 'caution',
+      rule: 'cost.attrition',
+      subject: 'Attrition allowance',
+      value: Number.isFinite(a) ? a : null,
+      limit: 0,
+      unit: '',
+      source: SOURCE,
+      message: 'The attrition allowance is negative or not a number; 0 was used.',
+    });
   }
 
   const lines = prepareLines(project);
@@ -102,19 +138,53 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
   const buildCents = partsCents + shippingCents;
   const unpricedLines = costLines.filter((l) => l.supplier === null && l.neededQty > 0).length;
   if (unpricedLines > 0) {
-    findings.push({ severity: 'caution', rule: 'cost.incomplete', subject: 'Build total', value: unpricedLines, limit: 0, unit: '', source: SOURCE, message: `The totals leave out ${unpricedLines} line(s) with no usable price; the real cost is higher.` });
+    findings.push({
+      severity: 'caution',
+      rule: 'cost.incomplete',
+      subject: 'Build total',
+      value: unpricedLines,
+      limit: 0,
+      unit: '',
+      source: SOURCE,
+      message: `The totals leave out ${unpricedLines} line(s) with no usable price; the real cost is higher.`,
+    });
   } else if (kits > 0) {
-    findings.push({ severity: 'ok', rule: 'cost.complete', subject: 'Build total', value: 0, limit: 0, unit: '', source: SOURCE, message: 'Every needed line has a priced offer.' });
+    findings.push({
+      severity: 'ok',
+      rule: 'cost.complete',
+      subject: 'Build total',
+      value: 0,
+      limit: 0,
+      unit: '',
+      source: SOURCE,
+      message: 'Every needed line has a priced offer.',
+    });
   }
 
   for (const st of project.stages) {
     if (project.bom.some((b) => b.stageId === st.id)) continue;
-    findings.push({ severity: 'caution', rule: 'cost.empty-stage', subject: st.name, value: 0, limit: 1, unit: 'lines', source: 'cost.stage-coverage', message: 'This stage has no parts on the parts list, so its cost is missing from the totals; add its parts (or put them on it from General).' });
+    findings.push({
+      severity: 'caution',
+      rule: 'cost.empty-stage',
+      subject: st.name,
+      value: 0,
+      limit: 1,
+      unit: 'lines',
+      source: 'cost.stage-coverage',
+      message:
+        'This stage has no parts on the parts list, so its cost is missing from the totals; add its parts (or put ' +
+          'them on it from General).',
+    });
   }
 
   const suppliers: SupplierUse[] = (plan?.used ?? []).map((s) => {
     const mine = costLines.filter((l) => l.supplier === names[s]);
-    return { supplier: names[s], lineCount: mine.length, partsCents: mine.reduce((t, l) => t + l.lineCostCents, 0), shippingCents: input.shippingCents[s] };
+    return {
+      supplier: names[s],
+      lineCount: mine.length,
+      partsCents: mine.reduce((t, l) => t + l.lineCostCents, 0),
+      shippingCents: input.shippingCents[s],
+    };
   });
 
   return {
@@ -129,7 +199,12 @@ export function costProject(project: Project, options: CostOptions = {}): CostRe
     stages: stageSubtotals(project, lines, costLines),
     sections: (['supply', 'rf', 'other'] as CostSection[]).map((section) => {
       const mine = costLines.filter((l) => l.section === section);
-      return { section, label: COST_SECTION_LABELS[section], partsCents: mine.reduce((t, l) => t + l.lineCostCents, 0), lineCount: mine.length };
+      return {
+        section,
+        label: COST_SECTION_LABELS[section],
+        partsCents: mine.reduce((t, l) => t + l.lineCostCents, 0),
+        lineCount: mine.length,
+      };
     }),
     suppliers,
     singleSupplier: singleComparison(input, purchasable.length, plan?.totalCents ?? 0, unpricedLines),
@@ -155,7 +230,20 @@ function toCostLine(l: LineContext, supplier: string | null): CostLine {
   };
   const option = supplier === null ? undefined : cheapestBySupplier(l.options).get(supplier);
   if (option === undefined) {
-    return { ...base, orderQty: 0, breakMinQty: null, supplier: null, offerId: null, sku: null, offerCurrency: null, unitPriceCents: null, offerCostCents: null, exchangeRate: null, lineCostCents: 0, raised: null };
+    return {
+      ...base,
+      orderQty: 0,
+      breakMinQty: null,
+      supplier: null,
+      offerId: null,
+      sku: null,
+      offerCurrency: null,
+      unitPriceCents: null,
+      offerCostCents: null,
+      exchangeRate: null,
+      lineCostCents: 0,
+      raised: null,
+    };
   }
   const plainCents = convertCents(option.plain.costCents, option.minorRate);
   return {
@@ -173,14 +261,25 @@ function toCostLine(l: LineContext, supplier: string | null): CostLine {
     // After conversion a saving can round to 0: only a raise saving at least one minor unit is reported.
     raised:
       option.quote.qty > option.plain.qty && plainCents > option.costCents
-        ? { plainQty: option.plain.qty, extraQty: option.quote.qty - option.plain.qty, plainCostCents: plainCents, savingCents: plainCents - option.costCents }
+        ? {
+            plainQty: option.plain.qty,
+            extraQty: option.quote.qty - option.plain.qty,
+            plainCostCents: plainCents,
+            savingCents: plainCents - option.costCents,
+          }
         : null,
   };
 }
 
 function stageSubtotals(project: Project, lines: LineContext[], costLines: CostLine[]): StageSubtotal[] {
   const groups: StageSubtotal[] = [
-    ...project.stages.map((s) => ({ stageId: s.id as string | null, name: s.name, kind: s.kind, lineIds: [] as string[], partsCents: 0 })),
+    ...project.stages.map((s) => ({
+      stageId: s.id as string | null,
+      name: s.name,
+      kind: s.kind,
+      lineIds: [] as string[],
+      partsCents: 0,
+    })),
     { stageId: null, name: GENERAL_STAGE_NAME, kind: null, lineIds: [], partsCents: 0 },
   ];
   lines.forEach((l, i) => {
@@ -191,12 +290,28 @@ function stageSubtotals(project: Project, lines: LineContext[], costLines: CostL
   return groups.filter((g) => g.lineIds.length > 0);
 }
 
-function singleComparison(input: PlanInput, purchasable: number, planTotal: number, unpriced: number): SingleSupplierComparison {
+function singleComparison(
+  input: PlanInput,
+  purchasable: number,
+  planTotal: number,
+  unpriced: number,
+): SingleSupplierComparison {
   if (purchasable === 0) return { available: false, reason: 'No line has a usable priced offer.' };
   const single = planSingleSupplier(input);
   if (single === null) {
-    return { available: false, reason: 'No single supplier offers every priced line; the parts must come from several suppliers.' };
+    return {
+      available: false,
+      reason: 'No single supplier offers every priced line; the parts must come from several suppliers.',
+    };
   }
   const s = single.used[0];
-  return { available: true, supplier: input.suppliers[s], partsCents: single.partsCents, shippingCents: single.shippingCents, totalCents: single.totalCents, extraCents: single.totalCents - planTotal, unpricedLines: unpriced };
+  return {
+    available: true,
+    supplier: input.suppliers[s],
+    partsCents: single.partsCents,
+    shippingCents: single.shippingCents,
+    totalCents: single.totalCents,
+    extraCents: single.totalCents - planTotal,
+    unpricedLines: unpriced,
+  };
 }

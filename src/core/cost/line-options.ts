@@ -92,7 +92,14 @@ export function prepareLines(project: Project): LineContext[] {
           overflow = true;
           continue;
         }
-        options.push({ offer, quote, plain, rate, minorRate: toMinor, costCents: convertCents(quote.costCents, toMinor) });
+        options.push({
+          offer,
+          quote,
+          plain,
+          rate,
+          minorRate: toMinor,
+          costCents: convertCents(quote.costCents, toMinor),
+        });
       }
       if (priced.length > 0 && options.length === 0) flags.push(overflow ? 'too-large' : 'no-rate');
     }

@@ -26,7 +26,9 @@ export function convertCents(cents: number, rate: number): number {
  * Exchange rate for `currency` into the project currency, or null when none is known.
  * The project currency itself is 1 unless the table says otherwise; rates must be finite and > 0.
  */
-/** Smallest exchange rate taken as known. Common practice, no published source: 1e-9 is far below any currency in use. */
+/**
+ * Smallest exchange rate taken as known. Common practice, no published source: 1e-9 is far below any currency in use.
+ */
 export const MIN_EXCHANGE_RATE = 1e-9;
 
 export function rateFor(

@@ -56,6 +56,12 @@ export function orderSheets(report: CostReport): OrderSheet[] {
   return report.suppliers.map((s) => {
     const lines = report.lines.filter((l) => l.supplier === s.supplier && l.orderQty > 0).map(sheetLine);
     const partsCents = lines.reduce((t, l) => t + l.lineCostCents, 0);
-    return { supplier: s.supplier, lines, partsCents, shippingCents: s.shippingCents, totalCents: partsCents + s.shippingCents };
+    return {
+      supplier: s.supplier,
+      lines,
+      partsCents,
+      shippingCents: s.shippingCents,
+      totalCents: partsCents + s.shippingCents,
+    };
   });
 }

@@ -39,9 +39,14 @@ export interface CellInput {
 /**
  * Price breaks as a supplier list writes them: "1: 0.95, 10: 0.78, 100: 0.52" ("qty: price", also "qty=price",
  * "qty+ price" or "qty @ price"). Items are separated by ";", "|" or a line break, and by "," when the decimal mark is
- * the point. A cell with one plain price is the price from one piece. Each price is read with the currency's minor unit (ISO 4217 via minorDigits).
+ * the point. A cell with one plain price is the price from one piece. Each price is read with the currency's minor unit
+ * (ISO 4217 via minorDigits).
  */
-export function parseBreakCell(text: string, currency: string, decimal: '.' | ','): { ok: true; breaks: PriceBreak[] } | { ok: false; message: string } {
+export function parseBreakCell(
+  text: string,
+  currency: string,
+  decimal: '.' | ',',
+): { ok: true; breaks: PriceBreak[] } | { ok: false; message: string } {
   const sep = decimal === '.' ? /[;|\n]|,(?=\s*\d+\s*(?:\+|pcs)?\s*[:=@+])/ : /[;|\n]/;
   const breaks: PriceBreak[] = [];
   const items = text.split(sep).map((x) => x.trim()).filter(Boolean);
@@ -57,8 +62,13 @@ export function parseBreakCell(text: string, currency: string, decimal: '.' | ',
     if (qProblem) return { ok: false, message: `The break quantity ${qtyText} ${qProblem}.` };
     const p = parsePrice(priceText, decimal, (c) => minorDigits(c ?? currency));
     if (!p.ok) return { ok: false, message: `From ${qty}: ${p.message}` };
-    if (p.currency !== null && p.currency !== currency) return { ok: false, message: `From ${qty}: the price says ${p.currency} but the row's currency is ${currency}.` };
-    if (p.roundedFrom !== null) return { ok: false, message: `From ${qty}: "${priceText.trim()}" has more decimals than ${currency} has (ISO 4217).` };
+    if (p.currency !== null && p.currency !== currency)
+      return { ok: false, message: `From ${qty}: the price says ${p.currency} but the row's currency is ${currency}.` };
+    if (p.roundedFrom !== null)
+      return {
+        ok: false,
+        message: `From ${qty}: "${priceText.trim()}" has more decimals than ${currency} has (ISO 4217).`,
+      };
     const range = storedProblem(unitPriceField, p.cents);
     if (range) return { ok: false, message: `From ${qty}: the unit price ${range}.` };
     if (breaks.some((b) => b.minQty === qty)) return { ok: false, message: `Quantity ${qty} is given twice.` };
@@ -68,7 +78,10 @@ export function parseBreakCell(text: string, currency: string, decimal: '.' | ',
   return { ok: true, breaks: breaks.sort((a, b) => a.minQty - b.minQty) };
 }
 
-function pieces(text: string, field: typeof offerSpec.fields.minOrder): { ok: true; n: number } | { ok: false; message: string } {
+function pieces(
+  text: string,
+  field: typeof offerSpec.fields.minOrder,
+): { ok: true; n: number } | { ok: false; message: string } {
   if (text === '') return { ok: true, n: 1 };
   const n = parseQuantity(text);
   if (n === null) return { ok: false, message: `"${text}" is not a number of pieces.` };
@@ -77,7 +90,11 @@ function pieces(text: string, field: typeof offerSpec.fields.minOrder): { ok: tr
 }
 
 /** Read a catalog row's own cells; errors are keyed by the import field whose column they name. */
-export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [CellField, string][]; warnings: [CellField, string][] } {
+export function readCatalogCells(c: CellInput): {
+  cells: CatalogCells;
+  errors: [CellField, string][];
+  warnings: [CellField, string][];
+} {
   const errors: [CellField, string][] = [];
   const warnings: [CellField, string][] = [];
   let ratings: Record<string, number | string> = {};
@@ -87,14 +104,20 @@ export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [
     else {
       ratings = r.value;
       // the ratings the category defines are held to their ranges, as the part's form does
-      for (const e of readRatings({ category: c.category, ratings }).errors) errors.push(['ratings', `${e.message} (category ${categoryOf(c.category).label}).`]);
+      for (const e of readRatings({ category: c.category, ratings }).errors)
+        errors.push(['ratings', `${e.message} (category ${categoryOf(c.category).label}).`]);
       // a name the category does not rate is kept as text but never checked: say so (a typo such as "voltagV")
       const def = categoryOf(c.category);
       const known = new Set([...def.numbers.map((f) => f.key), ...def.choices.map((x) => x.key), 'value']);
       const unknown = Object.keys(ratings).filter((k) => !known.has(k));
       const names = [...known].filter((k) => k !== 'value').map(ratingLabel).join(', ');
       if (def.id !== 'other' && unknown.length)
-        warnings.push(['ratings', `${unknown.map((k) => `"${ratingLabel(k)}"`).join(', ')} ${unknown.length > 1 ? 'are not ratings' : 'is not a rating'} of a ${def.label.toLowerCase()} (${names}); kept but not checked.`]);
+        warnings.push([
+          'ratings',
+          `${unknown.map((k) => `"${ratingLabel(k)}"`).join(', ')} ` +
+            `${unknown.length > 1 ? 'are not ratings' : 'is not a rating'} of a ${def.label.toLowerCase()} (${names}` +
+            `); kept but not checked.`,
+        ]);
       // the older key=value form is still read; say how it reads in names and units
       if (OLD_FORM.test(c.ratings))
         warnings.push(['ratings', `written as key=value (the older form), read as "${ratingsReadable(ratings)}".`]);
@@ -109,13 +132,19 @@ export function readCatalogCells(c: CellInput): { cells: CatalogCells; errors: [
   // a unit price column is the price from one piece; beside breaks it must agree with a break at 1 if there is one
   if (c.priceCents !== null) {
     const at1 = breaks.find((b) => b.minQty === 1);
-    if (at1 && at1.unitPriceCents !== c.priceCents) errors.push(['price', `The unit price differs from the price break at 1 piece in the same row.`]);
+    if (at1 && at1.unitPriceCents !== c.priceCents)
+      errors.push(['price', `The unit price differs from the price break at 1 piece in the same row.`]);
     else if (!at1) breaks = [{ minQty: 1, unitPriceCents: c.priceCents }, ...breaks];
   }
   const min = pieces(c.minOrder, offerSpec.fields.minOrder);
   if (!min.ok) errors.push(['minOrder', min.message]);
   const mult = pieces(c.multiple, offerSpec.fields.orderMultiple);
   if (!mult.ok) errors.push(['multiple', mult.message]);
-  if (breaks.length === 0 && c.breaks === '' && c.priceCents === null) errors.push(['price', 'Needs a unit price or price breaks.']);
-  return { cells: { ratings, breaks, minOrder: min.ok ? min.n : 1, orderMultiple: mult.ok ? mult.n : 1 }, errors, warnings };
+  if (breaks.length === 0 && c.breaks === '' && c.priceCents === null)
+    errors.push(['price', 'Needs a unit price or price breaks.']);
+  return {
+    cells: { ratings, breaks, minOrder: min.ok ? min.n : 1, orderMultiple: mult.ok ? mult.n : 1 },
+    errors,
+    warnings,
+  };
 }

@@ -12,8 +12,27 @@ export type PriceMove = 'up' | 'down' | 'mixed' | 'terms' | 'same';
 export type CatalogChange =
   | { kind: 'new-part'; row: number; description: string; supplier: string; sku: string; after: Offer }
   | { kind: 'new-offer'; row: number; partId: string; description: string; supplier: string; sku: string; after: Offer }
-  | { kind: 'changed'; move: PriceMove; row: number; partId: string; offerId: string; description: string; supplier: string; sku: string; before: Offer; after: Offer }
-  | { kind: 'gone'; partId: string; offerId: string; description: string; supplier: string; sku: string; before: Offer };
+  | {
+      kind: 'changed';
+      move: PriceMove;
+      row: number;
+      partId: string;
+      offerId: string;
+      description: string;
+      supplier: string;
+      sku: string;
+      before: Offer;
+      after: Offer;
+    }
+  | {
+      kind: 'gone';
+      partId: string;
+      offerId: string;
+      description: string;
+      supplier: string;
+      sku: string;
+      before: Offer;
+    };
 
 export interface CatalogUpdate {
   changes: CatalogChange[];
@@ -28,7 +47,8 @@ const norm = (s: string) => s.trim().toLowerCase();
 const offerKey = (supplier: string, sku: string, description: string) =>
   `${norm(supplier)}\u0000${sku.trim() === '' ? `description:${norm(description)}` : norm(sku)}`;
 /** The category as stored: the list's id when the text names one, else the text as written. */
-const storedCategory = (c: string) => (categoryOf(c).id === 'other' && norm(c) !== 'other' ? c.trim() : categoryOf(c).id);
+const storedCategory = (c: string) =>
+  categoryOf(c).id === 'other' && norm(c) !== 'other' ? c.trim() : categoryOf(c).id;
 
 /** Unit price at `qty` from a break list (the largest break at or below it); null below the first break. */
 export function priceAt(breaks: readonly PriceBreak[], qty: number): number | null {
@@ -77,7 +97,9 @@ export function planCatalogUpdate(
   refused: readonly Pick<ImportedRow, 'supplier' | 'sku' | 'description' | 'value'>[] = [],
 ): CatalogUpdate {
   const existing = new Map<string, { part: Part; offer: Offer }>();
-  for (const part of project.parts) for (const offer of part.offers) existing.set(offerKey(offer.supplier, offer.sku, part.description), { part, offer });
+  for (const part of project.parts)
+    for (const offer of part.offers)
+      existing.set(offerKey(offer.supplier, offer.sku, part.description), { part, offer });
   const changes: CatalogChange[] = [];
   const errors: RowError[] = [];
   const seen = new Map<string, number>();
@@ -87,20 +109,57 @@ export function planCatalogUpdate(
     const key = offerKey(r.supplier, r.sku, description);
     const first = seen.get(key);
     if (first !== undefined) {
-      errors.push({ row: r.row, column: null, message: `Supplier “${r.supplier}”${r.sku ? `, SKU “${r.sku}”` : ''} is already in row ${first}; each offer once per file.` });
+      errors.push({
+        row: r.row,
+        column: null,
+        message: `Supplier “${r.supplier}”${r.sku ? `, SKU “${r.sku}”` : ''} is already in row ${first}` +
+          `; each offer once per file.`,
+      });
       continue;
     }
     seen.set(key, r.row);
     const hit = existing.get(key);
     if (hit) {
       const after = offerOf(r, hit.offer.id, hit.offer.stockNote);
-      changes.push({ kind: 'changed', move: priceMove(hit.offer, after), row: r.row, partId: hit.part.id, offerId: hit.offer.id, description: hit.part.description, supplier: hit.offer.supplier, sku: hit.offer.sku, before: hit.offer, after });
+      changes.push({
+        kind: 'changed',
+        move: priceMove(hit.offer, after),
+        row: r.row,
+        partId: hit.part.id,
+        offerId: hit.offer.id,
+        description: hit.part.description,
+        supplier: hit.offer.supplier,
+        sku: hit.offer.sku,
+        before: hit.offer,
+        after,
+      });
       continue;
     }
-    const same = project.parts.find((p) => norm(p.description) === norm(description) && categoryOf(p.category).id === categoryOf(r.category).id && norm(storedCategory(p.category)) === norm(storedCategory(r.category)));
-    if (same) changes.push({ kind: 'new-offer', row: r.row, partId: same.id, description: same.description, supplier: r.supplier, sku: r.sku, after: offerOf(r, '') });
+    const same = project.parts.find(
+      (p) =>
+        norm(p.description) === norm(description) &&
+        categoryOf(p.category).id === categoryOf(r.category).id &&
+        norm(storedCategory(p.category)) === norm(storedCategory(r.category)),
+    );
+    if (same)
+      changes.push({
+        kind: 'new-offer',
+        row: r.row,
+        partId: same.id,
+        description: same.description,
+        supplier: r.supplier,
+        sku: r.sku,
+        after: offerOf(r, ''),
+      });
     else {
-      changes.push({ kind: 'new-part', row: r.row, description, supplier: r.supplier, sku: r.sku, after: offerOf(r, '') });
+      changes.push({
+        kind: 'new-part',
+        row: r.row,
+        description,
+        supplier: r.supplier,
+        sku: r.sku,
+        after: offerOf(r, ''),
+      });
       newPartKeys.add(`${norm(description)}\u0000${norm(storedCategory(r.category))}`);
     }
   }
@@ -109,9 +168,19 @@ export function planCatalogUpdate(
   const stillListed = new Set(refused.map((r) => offerKey(r.supplier, r.sku, r.description || r.value)));
   for (const [key, { part, offer }] of existing)
     if (listed.has(norm(offer.supplier)) && !seen.has(key) && !stillListed.has(key))
-      changes.push({ kind: 'gone', partId: part.id, offerId: offer.id, description: part.description, supplier: offer.supplier, sku: offer.sku, before: offer });
+      changes.push({
+        kind: 'gone',
+        partId: part.id,
+        offerId: offer.id,
+        description: part.description,
+        supplier: offer.supplier,
+        sku: offer.sku,
+        before: offer,
+      });
   const known = new Set(project.costing.suppliers.map((s) => norm(s.name)));
-  const newSuppliers = [...new Map(rows.filter((r) => !known.has(norm(r.supplier))).map((r) => [norm(r.supplier), r.supplier])).values()];
+  const newSuppliers = [
+    ...new Map(rows.filter((r) => !known.has(norm(r.supplier))).map((r) => [norm(r.supplier), r.supplier])).values(),
+  ];
   const counts = { 'new-part': 0, 'new-offer': 0, gone: 0, up: 0, down: 0, mixed: 0, terms: 0, same: 0 };
   for (const c of changes) counts[c.kind === 'changed' ? c.move : c.kind]++;
   counts['new-part'] = newPartKeys.size;
@@ -127,7 +196,11 @@ export interface ApplyOptions {
 }
 
 /** The catalog with the update applied: offers changed in place (their ids kept), new offers and parts added. */
-export function applyCatalogUpdate<P extends Pick<Project, 'parts'>>(project: P, update: CatalogUpdate, opts: ApplyOptions): P {
+export function applyCatalogUpdate<P extends Pick<Project, 'parts'>>(
+  project: P,
+  update: CatalogUpdate,
+  opts: ApplyOptions,
+): P {
   const byRow = new Map(opts.rows.map((r) => [r.row, r]));
   const changed = new Map<string, Offer>();
   const added = new Map<string, Offer[]>();
@@ -139,7 +212,8 @@ export function applyCatalogUpdate<P extends Pick<Project, 'parts'>>(project: P,
     if (c.kind === 'changed') changed.set(c.offerId, c.after);
     else if (c.kind === 'gone') {
       if (opts.removeGone) gone.add(c.offerId);
-    } else if (c.kind === 'new-offer') added.set(c.partId, [...(added.get(c.partId) ?? []), { ...c.after, id: opts.makeId('offer', offers++) }]);
+    } else if (c.kind === 'new-offer')
+      added.set(c.partId, [...(added.get(c.partId) ?? []), { ...c.after, id: opts.makeId('offer', offers++) }]);
     else {
       const r = byRow.get(c.row);
       const category = storedCategory(r?.category ?? '');

@@ -37,5 +37,9 @@ export function orderSheetsToCsv(report: CostReport, options: Omit<PartsCsvOptio
     rows.push(total(sheet.supplier, 'Total order', sheet.totalCents));
   }
   rows.push(total('', `Total build (${report.kits} kits)`, report.totals.buildCents));
-  return writeCsv(rows, { bom: options.bom ?? true, delimiter: options.delimiter ?? ',', decimalComma: options.delimiter === ';' });
+  return writeCsv(rows, {
+    bom: options.bom ?? true,
+    delimiter: options.delimiter ?? ',',
+    decimalComma: options.delimiter === ';',
+  });
 }

@@ -32,11 +32,28 @@ function row(l: CostLine, currency: string): CsvCell[] {
   const breakUsed =
     l.raised === null
       ? from
-      : `${from}; ${l.raised.extraQty} over the plain ${l.raised.plainQty} saves ${formatMoney(l.raised.savingCents, currency)}`;
+      : `${from}; ${l.raised.extraQty} over the plain ${l.raised.plainQty} saves ` +
+        `${formatMoney(l.raised.savingCents, currency)}`;
   return [
-    l.stageName, l.section, l.refs, l.value, l.description, l.category, l.qtyPerRig, l.neededQty, l.orderQty,
-    l.supplier, l.sku, l.offerCurrency, money(l.unitPriceCents, l.offerCurrency), money(l.offerCostCents, l.offerCurrency),
-    l.exchangeRate, money(l.lineCostCents, currency), breakUsed, l.flags.join(' '), l.roleId ?? '',
+    l.stageName,
+    l.section,
+    l.refs,
+    l.value,
+    l.description,
+    l.category,
+    l.qtyPerRig,
+    l.neededQty,
+    l.orderQty,
+    l.supplier,
+    l.sku,
+    l.offerCurrency,
+    money(l.unitPriceCents, l.offerCurrency),
+    money(l.offerCostCents, l.offerCurrency),
+    l.exchangeRate,
+    money(l.lineCostCents, currency),
+    breakUsed,
+    l.flags.join(' '),
+    l.roleId ?? '',
   ];
 }
 

@@ -9,8 +9,32 @@ export type ImportField = (typeof IMPORT_FIELDS)[number];
 
 /** The fields each kind of import reads (and offers on its column choices). */
 export const IMPORT_FIELDS_FOR: Record<'parts-list' | 'catalog', readonly ImportField[]> = {
-  'parts-list': ['refs', 'value', 'quantity', 'description', 'category', 'supplier', 'sku', 'price', 'currency', 'stage', 'role'],
-  catalog: ['description', 'value', 'category', 'ratings', 'supplier', 'sku', 'price', 'breaks', 'minOrder', 'multiple', 'currency'],
+  'parts-list': [
+    'refs',
+    'value',
+    'quantity',
+    'description',
+    'category',
+    'supplier',
+    'sku',
+    'price',
+    'currency',
+    'stage',
+    'role',
+  ],
+  catalog: [
+    'description',
+    'value',
+    'category',
+    'ratings',
+    'supplier',
+    'sku',
+    'price',
+    'breaks',
+    'minOrder',
+    'multiple',
+    'currency',
+  ],
 };
 
 export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
@@ -51,7 +75,15 @@ const EXACT: Record<ImportField, string[]> = {
   role: ['role', 'design role'],
   ratings: ['ratings', 'rating', 'specs', 'specification', 'specifications', 'parameters'],
   breaks: ['breaks', 'price breaks', 'quantity breaks', 'qty breaks', 'break prices', 'tiered prices'],
-  minOrder: ['min order', 'minimum order', 'moq', 'min qty', 'minimum quantity', 'min order qty', 'minimum order quantity'],
+  minOrder: [
+    'min order',
+    'minimum order',
+    'moq',
+    'min qty',
+    'minimum quantity',
+    'min order qty',
+    'minimum order quantity',
+  ],
   multiple: ['multiple', 'order multiple', 'pack', 'pack size', 'multiples', 'order increment', 'increment'],
 };
 

@@ -10,7 +10,12 @@ export interface ImportedRow extends ImportValues {
 }
 
 export type ImportPlan =
-  | { ok: true; rows: ImportedRow[]; /** Rows left out (takeGoodRows), with their errors. */ skipped: RowError[]; warnings: RowError[] }
+  | {
+      ok: true;
+      rows: ImportedRow[];
+      /** Rows left out (takeGoodRows), with their errors. */ skipped: RowError[];
+      warnings: RowError[];
+    }
   | { ok: false; errors: RowError[] };
 
 export interface PlanOptions {
@@ -24,7 +29,10 @@ export function planImport(preview: ImportPreview, options: PlanOptions = {}): I
   const good = preview.rows.filter((r) => r.errors.length === 0);
   if (rowErrors.length > 0 && !options.takeGoodRows) return { ok: false, errors: rowErrors };
   if (good.length === 0) {
-    return { ok: false, errors: rowErrors.length > 0 ? rowErrors : [{ row: 0, column: null, message: 'The file has no data rows.' }] };
+    return {
+      ok: false,
+      errors: rowErrors.length > 0 ? rowErrors : [{ row: 0, column: null, message: 'The file has no data rows.' }],
+    };
   }
   return {
     ok: true,
@@ -79,7 +87,15 @@ export function rowsToProjectData(
     }
     if (opts.asBomLines && r.quantity !== null) {
       const stageId = r.stage !== '' ? r.stageId : opts.stageId;
-      bom.push({ id: opts.makeId('line', n), stageId, partId: p.id, qtyPerRig: r.quantity, refs: r.refs, notes: '', roleId: r.role || null });
+      bom.push({
+        id: opts.makeId('line', n),
+        stageId,
+        partId: p.id,
+        qtyPerRig: r.quantity,
+        refs: r.refs,
+        notes: '',
+        roleId: r.role || null,
+      });
     }
   });
   return { parts, bom };

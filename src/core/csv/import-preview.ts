@@ -107,11 +107,17 @@ export interface ImportPreview {
 
 function requiredFieldErrors(kind: ImportKind, m: ColumnMapping, supplierGiven: boolean): RowError[] {
   const missing = (fields: ImportField[], msg: string): RowError[] =>
-    fields.every((f) => m[f] === null) ? [{ row: 0, column: fields.map((f) => IMPORT_FIELD_LABELS[f]).join(' / '), message: msg }] : [];
+    fields.every((f) => m[f] === null)
+      ? [{ row: 0, column: fields.map((f) => IMPORT_FIELD_LABELS[f]).join(' / '), message: msg }]
+      : [];
   const errs = missing(['description', 'value'], 'Choose a column for the description or the value.');
-  if (kind === 'parts-list') errs.push(...missing(['quantity', 'refs'], 'Choose a column for the quantity (or the reference designators to count).'));
+  if (kind === 'parts-list')
+    errs.push(
+      ...missing(['quantity', 'refs'], 'Choose a column for the quantity (or the reference designators to count).'),
+    );
   else {
-    if (!supplierGiven) errs.push(...missing(['supplier'], 'A catalog needs a supplier column or the supplier’s name.'));
+    if (!supplierGiven)
+      errs.push(...missing(['supplier'], 'A catalog needs a supplier column or the supplier’s name.'));
     errs.push(...missing(['price', 'breaks'], 'A catalog needs a price column or a price-breaks column.'));
   }
   return errs;
@@ -121,7 +127,11 @@ export function previewImport(text: string, options: ImportOptions): ImportPrevi
   const delimiter = options.delimiter ?? guessDelimiter(text);
   const decimal = options.decimal ?? (delimiter === ';' ? ',' : '.');
   const parsed = parseCsv(text, delimiter);
-  const fileErrors: RowError[] = parsed.errors.map((e) => ({ row: e.record, column: null, message: `Line ${e.line}: ${e.message}` }));
+  const fileErrors: RowError[] = parsed.errors.map((e) => ({
+    row: e.record,
+    column: null,
+    message: `Line ${e.line}: ${e.message}`,
+  }));
   const headers = (parsed.records[0] ?? []).map((h) => h.trim());
   const mapping = options.mapping ?? guessMapping(headers, options.kind);
   const supplierGiven = options.kind === 'catalog' && (options.defaultSupplier ?? '').trim() !== '';
@@ -136,7 +146,17 @@ export function previewImport(text: string, options: ImportOptions): ImportPrevi
     else rows.push(previewRow(k + 2, cells, headers, mapping, options, decimal));
   });
   const invalidRows = rows.filter((r) => r.errors.length > 0).length;
-  return { kind: options.kind, headers, mapping, delimiter, rows, fileErrors, totalsRows, validRows: rows.length - invalidRows, invalidRows };
+  return {
+    kind: options.kind,
+    headers,
+    mapping,
+    delimiter,
+    rows,
+    fileErrors,
+    totalsRows,
+    validRows: rows.length - invalidRows,
+    invalidRows,
+  };
 }
 
 function isTotalsRow(cells: readonly string[], m: ColumnMapping): boolean {
@@ -159,8 +179,10 @@ function previewRow(
   const warnings: RowError[] = [];
   const col = (f: ImportField) => (m[f] === null ? IMPORT_FIELD_LABELS[f] : headers[m[f]!] || IMPORT_FIELD_LABELS[f]);
   const get = (f: ImportField) => (m[f] === null ? '' : unneutraliseText(cells[m[f]!] ?? '').trim());
-  const err = (f: ImportField | null, message: string) => errors.push({ row, column: f === null ? null : col(f), message });
-  const warn = (f: ImportField | null, message: string) => warnings.push({ row, column: f === null ? null : col(f), message });
+  const err = (f: ImportField | null, message: string) =>
+    errors.push({ row, column: f === null ? null : col(f), message });
+  const warn = (f: ImportField | null, message: string) =>
+    warnings.push({ row, column: f === null ? null : col(f), message });
 
   const v: ImportValues = {
     refs: get('refs'), value: get('value'), description: get('description'), category: get('category'),
@@ -173,10 +195,14 @@ function previewRow(
     if (found !== undefined) v.stageId = found.id;
     else if (key !== NO_STAGE_NAME.toLowerCase()) {
       const names = (opts.stages ?? []).map((s) => `"${s.name}"`).join(', ');
-      err('stage', `"${v.stage}" is not a stage of this project (stages: ${names || 'none'}; "${NO_STAGE_NAME}" = no stage).`);
+      err(
+        'stage',
+        `"${v.stage}" is not a stage of this project (stages: ${names || 'none'}; "${NO_STAGE_NAME}" = no stage).`,
+      );
     }
   }
-  if (v.description === '' && v.value === '') err(m.description !== null ? 'description' : 'value', 'Needs a description or a value.');
+  if (v.description === '' && v.value === '')
+    err(m.description !== null ? 'description' : 'value', 'Needs a description or a value.');
   for (const [f, field] of Object.entries(CELL_FIELDS) as [ImportField, Field][]) {
     const problem = v[f as keyof ImportValues] === '' ? '' : storedProblem(field, v[f as keyof ImportValues]);
     if (problem) err(f, `${field.label} ${problem}.`);
@@ -192,10 +218,12 @@ function previewRow(
       const q = parseQuantity(qtyText);
       const problem = q === null ? '' : storedProblem(bomLineSpec.fields.qtyPerRig, q);
       if (q === null) err('quantity', `"${qtyText}" is not a quantity.`);
-      else if (problem) err('quantity', `${bomLineSpec.fields.qtyPerRig.label} ${problem}; the file says "${qtyText}".`);
+      else if (problem)
+        err('quantity', `${bomLineSpec.fields.qtyPerRig.label} ${problem}; the file says "${qtyText}".`);
       else {
         v.quantity = q;
-        if (refCount !== null && refCount !== q) warn('refs', `${refCount} designators listed but the quantity is ${q}.`);
+        if (refCount !== null && refCount !== q)
+          warn('refs', `${refCount} designators listed but the quantity is ${q}.`);
       }
     }
   }
@@ -212,8 +240,10 @@ function previewRow(
       v.priceCents = p.cents;
       if (p.roundedFrom !== null) warn('price', `${p.roundedFrom} rounded half-up to ${p.cents} minor units.`);
       const colCurrency = get('currency').toUpperCase();
-      if (colCurrency !== '' && !CURRENCY.re.test(colCurrency)) err('currency', `"${colCurrency}" is not a three-letter currency code.`);
-      else if (colCurrency !== '' && p.currency !== null && colCurrency !== p.currency) err('currency', `The price says ${p.currency} but the currency column says ${colCurrency}.`);
+      if (colCurrency !== '' && !CURRENCY.re.test(colCurrency))
+        err('currency', `"${colCurrency}" is not a three-letter currency code.`);
+      else if (colCurrency !== '' && p.currency !== null && colCurrency !== p.currency)
+        err('currency', `The price says ${p.currency} but the currency column says ${colCurrency}.`);
       v.currency = p.currency ?? (colCurrency || opts.defaultCurrency.toUpperCase());
     }
   }
@@ -240,13 +270,20 @@ function catalogRow(
   const colCurrency = get('currency').toUpperCase();
   const currency = v.currency ?? (CURRENCY.re.test(colCurrency) ? colCurrency : opts.defaultCurrency.toUpperCase());
   if (v.currency === null) {
-    if (colCurrency !== '' && !CURRENCY.re.test(colCurrency)) err('currency', `"${colCurrency}" is not a three-letter currency code.`);
+    if (colCurrency !== '' && !CURRENCY.re.test(colCurrency))
+      err('currency', `"${colCurrency}" is not a three-letter currency code.`);
     v.currency = currency;
   }
   const priceFailed = get('price') !== '' && v.priceCents === null;
   const read = readCatalogCells({
-    category: v.category, ratings: get('ratings'), breaks: get('breaks'), minOrder: get('minOrder'), multiple: get('multiple'),
-    priceCents: v.priceCents, currency, decimal,
+    category: v.category,
+    ratings: get('ratings'),
+    breaks: get('breaks'),
+    minOrder: get('minOrder'),
+    multiple: get('multiple'),
+    priceCents: v.priceCents,
+    currency,
+    decimal,
   });
   for (const [f, message] of read.errors) if (!(priceFailed && f === 'price')) err(f, message);
   for (const [f, message] of read.warnings) warn(f, message);

@@ -63,7 +63,8 @@ export function parsePrice(
   const { num, currency } = splitCurrency(text);
   if (currency === '?') return { ok: false, message: `"${text}" names two different currencies.` };
   if (num.startsWith('-')) return { ok: false, message: `"${text}" is negative; a price must be 0 or more.` };
-  if (!/^[0-9.,]+$/.test(num) || !/[0-9]/.test(num)) return { ok: false, message: `"${text}" is not a price (expected e.g. 1.25 or EUR 1,25).` };
+  if (!/^[0-9.,]+$/.test(num) || !/[0-9]/.test(num))
+    return { ok: false, message: `"${text}" is not a price (expected e.g. 1.25 or EUR 1,25).` };
 
   const dots = (num.match(/\./g) ?? []).length;
   const commas = (num.match(/,/g) ?? []).length;

@@ -65,11 +65,19 @@ export function parseCsv(text: string, delimiter: string = ','): CsvParseResult 
       }
       atFieldStart = false;
       if (!closed) {
-        errors.push({ record: records.length + 1, line: startLine, message: 'A quoted field is never closed; the rest of the file was read into it.' });
+        errors.push({
+          record: records.length + 1,
+          line: startLine,
+          message: 'A quoted field is never closed; the rest of the file was read into it.',
+        });
         break;
       }
       if (i < s.length && s[i] !== delimiter && s[i] !== '\r' && s[i] !== '\n') {
-        errors.push({ record: records.length + 1, line, message: 'Text follows a closing quote; it was kept as part of the field.' });
+        errors.push({
+          record: records.length + 1,
+          line,
+          message: 'Text follows a closing quote; it was kept as part of the field.',
+        });
       }
       continue;
     }

@@ -9,9 +9,15 @@ import type { EditResult } from './catalog';
 import { formatValue } from '../units';
 
 export function bindCandidate(p: Project, role: DesignRole | undefined, partId: string, newLineId: string): EditResult {
-  if (!role) return { errors: { _form: 'That part of the design no longer exists (the design changed?). The page now shows the current roles.' } };
+  if (!role)
+    return {
+      errors: {
+        _form: 'That part of the design no longer exists (the design changed?). The page now shows the current roles.',
+      },
+    };
   const part = p.parts.find((x) => x.id === partId);
-  if (!part) return { errors: { partId: 'Part: that part is not in the catalog (deleted?); choose another candidate' } };
+  if (!part)
+    return { errors: { partId: 'Part: that part is not in the catalog (deleted?); choose another candidate' } };
   const bound = p.bom.filter((l) => l.roleId === role.id);
   const group = groupOf(role, part);
   if (group) {
@@ -23,11 +29,27 @@ export function bindCandidate(p: Project, role: DesignRole | undefined, partId: 
     if (same) return { ...p, bom: p.bom.map((l) => (l.id === same.id ? { ...l, partId } : l)) };
     const unit = role.rules.find((r) => r.key === group.key)?.unit ?? '';
     const what = typeof group.value === 'number' ? formatValue(group.value, unit) : group.value;
-    const line = { id: newLineId, stageId: role.stageId, partId, qtyPerRig: group.count, refs: '', notes: `${role.label}: ${what} (${group.where})`, roleId: role.id };
+    const line = {
+      id: newLineId,
+      stageId: role.stageId,
+      partId,
+      qtyPerRig: group.count,
+      refs: '',
+      notes: `${role.label}: ${what} (${group.where})`,
+      roleId: role.id,
+    };
     return { ...p, bom: [...p.bom, line] };
   }
   if (bound.length === 0) {
-    const line = { id: newLineId, stageId: role.stageId, partId, qtyPerRig: role.qtyPerRig, refs: '', notes: '', roleId: role.id };
+    const line = {
+      id: newLineId,
+      stageId: role.stageId,
+      partId,
+      qtyPerRig: role.qtyPerRig,
+      refs: '',
+      notes: '',
+      roleId: role.id,
+    };
     return { ...p, bom: [...p.bom, line] };
   }
   const first = bound[0].id;

@@ -80,7 +80,8 @@ export function mergeImport(
   for (const raw of data.bom) {
     const l = { ...raw, partId: idMap.get(raw.partId) ?? raw.partId };
     const hit = p.bom.find(
-      (e) => !taken.has(e.id) && e.partId === l.partId && e.stageId === l.stageId && normRefs(e.refs) === normRefs(l.refs),
+      (e) =>
+        !taken.has(e.id) && e.partId === l.partId && e.stageId === l.stageId && normRefs(e.refs) === normRefs(l.refs),
     );
     if (hit === undefined) {
       bom.push(l);

@@ -22,16 +22,19 @@ export type RailInPlace =
  */
 export function railInPlace(p: Project, values: Record<string, string>, id: string): RailInPlace {
   const rows: string[] = [];
-  for (let i = 0; loadFormName(i, 'railId') in values; i++) if (values[loadFormName(i, 'railId')] === NEW_RAIL) rows.push(loadFormName(i, 'railId'));
+  for (let i = 0; loadFormName(i, 'railId') in values; i++)
+    if (values[loadFormName(i, 'railId')] === NEW_RAIL) rows.push(loadFormName(i, 'railId'));
   if (!rows.length) return { ok: true, project: p, values };
   const parsed = parseForm(addRailSpec, { name: values[NEW_RAIL_FORM.name], source: values[NEW_RAIL_FORM.source] });
   if (!parsed.ok) {
     const errors: Record<string, string> = {};
-    for (const [k, m] of Object.entries(parsed.errors)) errors[k === 'source' ? NEW_RAIL_FORM.source : NEW_RAIL_FORM.name] = `New rail: ${m}`;
+    for (const [k, m] of Object.entries(parsed.errors))
+      errors[k === 'source' ? NEW_RAIL_FORM.source : NEW_RAIL_FORM.name] = `New rail: ${m}`;
     return { ok: false, errors };
   }
   const d = parsed.value as { name: string; source: string };
   const added = addRail(p, id, d.name, d.source);
-  if (!added.ok) return { ok: false, errors: { [NEW_RAIL_FORM.source]: `New rail: ${Object.values(added.errors).join('; ')}` } };
+  if (!added.ok)
+    return { ok: false, errors: { [NEW_RAIL_FORM.source]: `New rail: ${Object.values(added.errors).join('; ')}` } };
   return { ok: true, project: added.project, values: { ...values, ...Object.fromEntries(rows.map((r) => [r, id])) } };
 }

@@ -19,7 +19,8 @@ export function readLoads(railIds: ReadonlySet<string>, values: Record<string, s
     const typed = MODES.filter((m) => (values[loadFormName(i, `currentA.${m}`)] ?? '').trim() !== '');
     if (railId === REMOVE_LOAD) continue; // "(remove this load)" on an existing row
     if (!railId) {
-      if (typed.length) errors[railKey] = 'Rail: choose the rail this row’s currents are drawn from (or clear the currents)';
+      if (typed.length)
+        errors[railKey] = 'Rail: choose the rail this row’s currents are drawn from (or clear the currents)';
       continue;
     }
     if (!railIds.has(railId)) {

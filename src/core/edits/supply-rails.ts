@@ -46,13 +46,28 @@ export function addRail(p: Project, id: string, name: string, source: string): R
 /** Save rail `railId` from its form (display text); messages are keyed by form field name. */
 export function editRail(p: Project, railId: string, values: Record<string, string | undefined>): RailEdit {
   const rail = p.supply.rails.find((r) => r.id === railId);
-  if (!rail) return { ok: false, errors: { _form: 'That rail no longer exists (deleted in another window?). The page now shows the stored supply.' } };
+  if (!rail)
+    return {
+      ok: false,
+      errors: {
+        _form: 'That rail no longer exists (deleted in another window?). The page now shows the stored supply.',
+      },
+    };
   const r = parseForm(RAIL_SPECS[rail.kind], values);
   if (!r.ok) return r;
   const next = { ...r.value, kind: rail.kind, id: rail.id } as Rail;
   if (next.kind === 'rectified' && !hasWinding(p, next.windingId))
     return { ok: false, errors: { windingId: 'Winding: that winding no longer exists; choose another' } };
   if (next.kind === 'regulated' && !possibleParents(p, rail.id).some((x) => x.id === next.parentId))
-    return { ok: false, errors: { parentId: 'Fed from: that rail does not exist or is fed from this one (a loop); choose another' } };
-  return { ok: true, project: withRails(p, p.supply.rails.map((x) => (x.id === rail.id ? next : x))) };
+    return {
+      ok: false,
+      errors: { parentId: 'Fed from: that rail does not exist or is fed from this one (a loop); choose another' },
+    };
+  return {
+    ok: true,
+    project: withRails(
+      p,
+      p.supply.rails.map((x) => (x.id === rail.id ? next : x)),
+    ),
+  };
 }

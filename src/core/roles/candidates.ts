@@ -62,7 +62,13 @@ export function partCost(project: Project, part: Part, needed: number, shippingO
     const ship = shippingOf ? shippingOf(offer.supplier) : { cents: 0, note: null };
     const total = costCents + ship.cents;
     if (best === null || total < best.costCents + best.shippingCents)
-      best = { costCents, shippingCents: ship.cents, shippingNote: ship.note, supplier: offer.supplier, orderQty: q.qty };
+      best = {
+        costCents,
+        shippingCents: ship.cents,
+        shippingNote: ship.note,
+        supplier: offer.supplier,
+        orderQty: q.qty,
+      };
   }
   return best;
 }
@@ -71,10 +77,15 @@ export function partCost(project: Project, part: Part, needed: number, shippingO
  * The shipping rule of the ranking: suppliers the plan uses for lines other than the role's own add nothing; any
  * other supplier adds its full charge. `planSuppliers` maps each parts-list line id to its chosen supplier.
  */
-export function shippingForRole(project: Project, role: DesignRole, planSuppliers: ReadonlyMap<string, string | null>): ShippingOf {
+export function shippingForRole(
+  project: Project,
+  role: DesignRole,
+  planSuppliers: ReadonlyMap<string, string | null>,
+): ShippingOf {
   const own = new Set(project.bom.filter((l) => l.roleId === role.id).map((l) => l.id));
   const used = new Set<string>();
-  for (const [lineId, supplier] of planSuppliers) if (!own.has(lineId) && supplier) used.add(supplier.trim().toLowerCase());
+  for (const [lineId, supplier] of planSuppliers)
+    if (!own.has(lineId) && supplier) used.add(supplier.trim().toLowerCase());
   return (supplier) => {
     if (used.has(supplier.trim().toLowerCase())) return { cents: 0, note: null };
     const s = supplierShipping(project, supplier);
@@ -84,7 +95,8 @@ export function shippingForRole(project: Project, role: DesignRole, planSupplier
 
 /** Pieces the role needs for the build: its bound line's quantity per rig (else the role's), all kits, spares. */
 export function roleNeededQty(project: Project, role: DesignRole, part?: Pick<Part, 'category' | 'ratings'>): number {
-  const spares = (perRig: number) => neededQty(perRig, kitsOf(project), project.costing.attritionFraction, project.costing.sparesPerLine);
+  const spares = (perRig: number) =>
+    neededQty(perRig, kitsOf(project), project.costing.attritionFraction, project.costing.sparesPerLine);
   // a grouped role: a part with one of its values is needed as many times per rig as the design uses that value
   const group = part ? groupOf(role, part) : null;
   if (group) return spares(group.count);
@@ -97,7 +109,11 @@ export function roleNeededQty(project: Project, role: DesignRole, part?: Pick<Pa
  * The catalog parts meeting the role, cheapest first (unpriced last, then by description). With the plan's suppliers
  * per line, a candidate's cost includes the shipping it adds (shippingForRole); without, shipping is left out.
  */
-export function candidatesFor(project: Project, role: DesignRole, planSuppliers?: ReadonlyMap<string, string | null>): Candidate[] {
+export function candidatesFor(
+  project: Project,
+  role: DesignRole,
+  planSuppliers?: ReadonlyMap<string, string | null>,
+): Candidate[] {
   const boundIds = new Set(project.bom.filter((l) => l.roleId === role.id).map((l) => l.partId));
   const shippingOf = planSuppliers ? shippingForRole(project, role, planSuppliers) : undefined;
   return project.parts
@@ -109,10 +125,20 @@ export function candidatesFor(project: Project, role: DesignRole, planSuppliers?
       const group = g === null ? null : typeof g.value === 'number' ? formatValue(g.value, unit) : g.value;
       const c = needed > 0 ? partCost(project, p, needed, shippingOf) : null;
       return {
-        partId: p.id, description: p.description, neededQty: needed, costCents: c?.costCents ?? null, shippingCents: c?.shippingCents ?? null,
-        totalCents: c ? c.costCents + c.shippingCents : null, shippingNote: c?.shippingNote ?? null,
-        supplier: c?.supplier ?? null, orderQty: c?.orderQty ?? null, bound: boundIds.has(p.id), group,
+        partId: p.id,
+        description: p.description,
+        neededQty: needed,
+        costCents: c?.costCents ?? null,
+        shippingCents: c?.shippingCents ?? null,
+        totalCents: c ? c.costCents + c.shippingCents : null,
+        shippingNote: c?.shippingNote ?? null,
+        supplier: c?.supplier ?? null,
+        orderQty: c?.orderQty ?? null,
+        bound: boundIds.has(p.id),
+        group,
       };
     })
-    .sort((a, b) => (a.totalCents ?? Infinity) - (b.totalCents ?? Infinity) || a.description.localeCompare(b.description));
+    .sort(
+      (a, b) => (a.totalCents ?? Infinity) - (b.totalCents ?? Infinity) || a.description.localeCompare(b.description),
+    );
 }

@@ -16,10 +16,14 @@ export interface RuleOutcome {
 const sev = (o: RuleOutcome['severity'], required: boolean): Severity | null =>
   o === 'missing' ? (required ? 'caution' : null) : o;
 
-const nearValue = (v: number, target: number, tolerance: number) => Math.abs(v - target) <= tolerance * Math.abs(target);
-/** A part's value in a group: near its value, and any text rating the group goes with the same where the part states it. */
+const nearValue = (v: number, target: number, tolerance: number) =>
+  Math.abs(v - target) <= tolerance * Math.abs(target);
+/**
+ * A part's value in a group: near its value, and any text rating the group goes with the same where the part states it.
+ */
 const inGroup = (g: GroupValue<number>, v: number, tolerance: number, choices: Record<string, string>) =>
-  nearValue(v, g.value, tolerance) && Object.entries(g.with ?? {}).every(([k, want]) => choices[k] === undefined || choices[k] === want);
+  nearValue(v, g.value, tolerance) &&
+  Object.entries(g.with ?? {}).every(([k, want]) => choices[k] === undefined || choices[k] === want);
 
 /** One rating of a part against one rule: 'missing' when the part does not state it. */
 export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings'>): RuleOutcome {
@@ -31,8 +35,18 @@ export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings
   }
   const v = read.numbers[rule.key];
   if (v === undefined) return { rule, severity: 'missing', value: null };
-  if (rule.op === 'eachOf') return { rule, severity: rule.values.some((g) => inGroup(g, v, rule.tolerance, read.choices)) ? 'ok' : 'fail', value: v };
-  if (rule.op === 'near') return { rule, severity: Math.abs(v - rule.limit) <= rule.tolerance * Math.abs(rule.limit) ? 'ok' : 'fail', value: v };
+  if (rule.op === 'eachOf')
+    return {
+      rule,
+      severity: rule.values.some((g) => inGroup(g, v, rule.tolerance, read.choices)) ? 'ok' : 'fail',
+      value: v,
+    };
+  if (rule.op === 'near')
+    return {
+      rule,
+      severity: Math.abs(v - rule.limit) <= rule.tolerance * Math.abs(rule.limit) ? 'ok' : 'fail',
+      value: v,
+    };
   if (rule.op === 'max') return { rule, severity: v <= rule.limit ? 'ok' : 'fail', value: v };
   if (v >= rule.limit) return { rule, severity: 'ok', value: v };
   return { rule, severity: rule.hardLimit !== undefined && v >= rule.hardLimit ? 'caution' : 'fail', value: v };
@@ -42,7 +56,10 @@ export function judgeRule(rule: RoleRule, part: Pick<Part, 'category' | 'ratings
  * For a grouped role (a rule asking for several values), the value a part has: the first such rule's value it is
  * within tolerance of, with its count and places; null when the role is not grouped or the part states none of them.
  */
-export function groupOf(role: DesignRole, part: Pick<Part, 'category' | 'ratings'>): { key: string; value: number | string; count: number; where: string } | null {
+export function groupOf(
+  role: DesignRole,
+  part: Pick<Part, 'category' | 'ratings'>,
+): { key: string; value: number | string; count: number; where: string } | null {
   // values (ratings, resistances, capacitances) before text choices (fuse types): the more specific grouping
   const rules = [...role.rules.filter((r) => r.op === 'eachOf'), ...role.rules.filter((r) => r.op === 'oneOf')];
   for (const r of rules) {
@@ -51,7 +68,11 @@ export function groupOf(role: DesignRole, part: Pick<Part, 'category' | 'ratings
     const v = judgeRule(r, part).value;
     if (v === null) continue;
     const choices = readRatings(part).choices;
-    const g = groups.find((x) => (typeof x.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && inGroup(x as GroupValue<number>, v, r.tolerance, choices) : x.value === v));
+    const g = groups.find((x) =>
+      typeof x.value === 'number'
+        ? typeof v === 'number' && r.op === 'eachOf' && inGroup(x as GroupValue<number>, v, r.tolerance, choices)
+        : x.value === v,
+    );
     if (g) return { key: r.key, ...g };
   }
   return null;
@@ -85,7 +106,8 @@ const limitText = (r: RoleRule) =>
 const lineName = (line: BomLine, part: Part) => `line ${line.refs.trim() || line.id} (${part.description})`;
 
 /** "a", "a or b", "a, b or c". */
-const orList = (xs: string[]) => (xs.length < 2 ? xs.join('') : `${xs.slice(0, -1).join(', ')} or ${xs[xs.length - 1]}`);
+const orList = (xs: string[]) =>
+  xs.length < 2 ? xs.join('') : `${xs.slice(0, -1).join(', ')} or ${xs[xs.length - 1]}`;
 
 /**
  * The values a grouped role asks each line for (fuse ratings, capacitances) that a bound line's part does not state,
@@ -93,25 +115,56 @@ const orList = (xs: string[]) => (xs.length < 2 ? xs.join('') : `${xs.slice(0, -
  * that are missing have their own caution per rating; other optional ratings (a core's size) stay unchecked.
  */
 function unstatedFinding(role: DesignRole, line: BomLine, part: Part): Finding[] {
-  const missing = role.rules.filter((r) => r.op === 'eachOf' && !r.required && judgeRule(r, part).severity === 'missing');
+  const missing = role.rules.filter(
+    (r) => r.op === 'eachOf' && !r.required && judgeRule(r, part).severity === 'missing',
+  );
   if (!missing.length) return [];
   const names = orList(missing.map((r) => r.label.toLowerCase()));
   const needs = missing.map((r) => `${r.label.toLowerCase()} ${limitText(r)}`).join('; ');
-  return [{
-    severity: 'caution', rule: 'role.unstated', subject: `${role.label}: ${part.description}`, value: null, limit: null, unit: '',
-    source: 'roles.binding',
-    message: `The ${lineName(line, part)} does not state ${names}, so it cannot be checked against the design (${needs}): enter the ratings on the part or bind a candidate that states them.`,
-  }];
+  return [
+    {
+      severity: 'caution',
+      rule: 'role.unstated',
+      subject: `${role.label}: ${part.description}`,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'roles.binding',
+      message: `The ${lineName(line, part)} does not state ${names}, so it cannot be checked against the design ` +
+        `(${needs}): enter the ratings on the part or bind a candidate that states them.`,
+    },
+  ];
 }
 
 function lineFindings(role: DesignRole, part: Part, line: BomLine): Finding[] {
   const subject = `${role.label}: ${part.description}`;
   const def = categoryOf(part.category);
   if (def.id !== role.category)
-    return [{ severity: 'fail', rule: 'role.category', subject, value: null, limit: null, unit: '', source: 'roles.binding', message: `The bound part is in category "${part.category || 'none'}" (${def.label}); this role needs a ${role.category}. Bind a ${role.category} from the candidates.` }];
+    return [
+      {
+        severity: 'fail',
+        rule: 'role.category',
+        subject,
+        value: null,
+        limit: null,
+        unit: '',
+        source: 'roles.binding',
+        message: `The bound part is in category "${part.category || 'none'}" (${def.label}); this role needs a ` +
+          `${role.category}. Bind a ${role.category} from the candidates.`,
+      },
+    ];
   const out: Finding[] = [];
   for (const e of readRatings(part).errors)
-    out.push({ severity: 'caution', rule: 'role.rating-range', subject, value: null, limit: null, unit: '', source: 'design.input', message: `${e.message}; the rating is not used.` });
+    out.push({
+      severity: 'caution',
+      rule: 'role.rating-range',
+      subject,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.input',
+      message: `${e.message}; the rating is not used.`,
+    });
   for (const r of role.rules) {
     const o = judgeRule(r, part);
     const s = sev(o.severity, r.required);
@@ -121,11 +174,22 @@ function lineFindings(role: DesignRole, part: Part, line: BomLine): Finding[] {
     const limit = r.op === 'oneOf' || r.op === 'eachOf' ? null : r.limit;
     const message =
       o.severity === 'missing'
-        ? `Enter the part's ${r.label.toLowerCase()} (${r.key}) so it can be checked: the design needs ${limitText(r)} (${r.why}).`
+        ? `Enter the part's ${r.label.toLowerCase()} (${r.key}) so it can be checked: the design needs ` +
+          `${limitText(r)} (${r.why}).`
         : o.severity === 'ok'
           ? `${r.label} ${show(o.value as number | string, r.unit)} meets ${limitText(r)} (${r.why}).`
-          : `${r.label} ${show(o.value as number | string, r.unit)} does not meet ${limitText(r)} (${r.why}): choose a candidate that does.`;
-    out.push({ severity: s, rule, subject, value, limit, unit: r.unit, source: o.severity === 'missing' ? 'roles.binding' : r.source, message });
+          : `${r.label} ${show(o.value as number | string, r.unit)} does not meet ${limitText(r)} (${r.why}): choose ` +
+            `a candidate that does.`;
+    out.push({
+      severity: s,
+      rule,
+      subject,
+      value,
+      limit,
+      unit: r.unit,
+      source: o.severity === 'missing' ? 'roles.binding' : r.source,
+      message,
+    });
   }
   out.push(...unstatedFinding(role, line, part));
   return out;
@@ -138,22 +202,38 @@ function lineFindings(role: DesignRole, part: Part, line: BomLine): Finding[] {
  */
 function coverFindings(role: DesignRole, lines: readonly BomLine[], parts: ReadonlyMap<string, Part>): Finding[] {
   const out: Finding[] = [];
-  const stated = lines.map((l) => ({ l, part: parts.get(l.partId) })).filter((x): x is { l: BomLine; part: Part } => x.part !== undefined);
+  const stated = lines
+    .map((l) => ({ l, part: parts.get(l.partId) }))
+    .filter((x): x is { l: BomLine; part: Part } => x.part !== undefined);
   for (const r of role.rules) {
-    const groups: GroupValue<number | string>[] | null = r.op === 'eachOf' ? [...r.values] : r.op === 'oneOf' && r.cover ? [...r.cover] : null;
+    const groups: GroupValue<number | string>[] | null =
+      r.op === 'eachOf' ? [...r.values] : r.op === 'oneOf' && r.cover ? [...r.cover] : null;
     if (groups === null || groups.length < 2) continue;
-    const values = stated.map(({ l, part }) => ({ qty: l.qtyPerRig, v: judgeRule(r, part).value, choices: readRatings(part).choices }));
+    const values = stated.map(({ l, part }) => ({
+      qty: l.qtyPerRig,
+      v: judgeRule(r, part).value,
+      choices: readRatings(part).choices,
+    }));
     if (values.every((x) => x.v === null)) continue;
     for (const g of groups) {
       const matches = (v: number | string | null, choices: Record<string, string>) =>
-        v !== null && (typeof g.value === 'number' ? typeof v === 'number' && r.op === 'eachOf' && inGroup(g as GroupValue<number>, v, r.tolerance, choices) : v === g.value);
+        v !== null &&
+        (typeof g.value === 'number'
+          ? typeof v === 'number' && r.op === 'eachOf' && inGroup(g as GroupValue<number>, v, r.tolerance, choices)
+          : v === g.value);
       const have = values.filter((x) => matches(x.v, x.choices)).reduce((t, x) => t + x.qty, 0);
       if (have >= g.count) continue;
       const shown = groupText(g, r.unit);
       out.push({
-        severity: 'caution', rule: `role.${role.category}.${r.key}.cover`, subject: `${role.label}: ${shown}`, value: have, limit: g.count, unit: 'pieces',
+        severity: 'caution',
+        rule: `role.${role.category}.${r.key}.cover`,
+        subject: `${role.label}: ${shown}`,
+        value: have,
+        limit: g.count,
+        unit: 'pieces',
         source: 'roles.group-cover',
-        message: `The design needs ${g.count} × ${r.label.toLowerCase()} ${shown} (${g.where}); the bound lines give ${have}: bind a line with that ${r.label.toLowerCase()} for each value.`,
+        message: `The design needs ${g.count} × ${r.label.toLowerCase()} ${shown} (${g.where}); the bound lines ` +
+          `give ${have}: bind a line with that ${r.label.toLowerCase()} for each value.`,
       });
     }
   }
@@ -176,7 +256,17 @@ export function checkRoles(project: Pick<Project, 'bom' | 'parts'>, roles: reado
   for (const role of roles) {
     const lines = project.bom.filter((b) => b.roleId === role.id);
     if (!lines.length) {
-      const f: Finding = { severity: 'caution', rule: 'role.unbound', subject: role.label, value: null, limit: null, unit: '', source: 'roles.binding', message: `No parts-list line is bound to this part of the design (needs ${role.requirement}): bind a line or a candidate on the parts list.` };
+      const f: Finding = {
+        severity: 'caution',
+        rule: 'role.unbound',
+        subject: role.label,
+        value: null,
+        limit: null,
+        unit: '',
+        source: 'roles.binding',
+        message: `No parts-list line is bound to this part of the design (needs ${role.requirement}): bind a line or ` +
+          `a candidate on the parts list.`,
+      };
       findings.push(f);
       statuses.push({ role, lineIds: [], state: 'unbound', bound: [], problems: [f.message] });
       continue;
@@ -187,14 +277,32 @@ export function checkRoles(project: Pick<Project, 'bom' | 'parts'>, roles: reado
     });
     fs.push(...coverFindings(role, lines, parts));
     findings.push(...fs);
-    const bound = lines.map((l) => ({ lineId: l.id, refs: l.refs, qtyPerRig: l.qtyPerRig, partId: l.partId, part: parts.get(l.partId)?.description ?? '' }));
-    const problems = [...fs.filter((f) => f.severity === 'fail'), ...fs.filter((f) => f.severity === 'caution')].map((f) => f.message);
+    const bound = lines.map((l) => ({
+      lineId: l.id,
+      refs: l.refs,
+      qtyPerRig: l.qtyPerRig,
+      partId: l.partId,
+      part: parts.get(l.partId)?.description ?? '',
+    }));
+    const problems = [...fs.filter((f) => f.severity === 'fail'), ...fs.filter((f) => f.severity === 'caution')].map(
+      (f) => f.message,
+    );
     statuses.push({ role, lineIds: lines.map((l) => l.id), state: worst(fs), bound, problems });
   }
   const ids = new Set(roles.map((r) => r.id));
   for (const l of project.bom as BomLine[]) {
     if (!l.roleId || ids.has(l.roleId)) continue;
-    findings.push({ severity: 'caution', rule: 'role.gone', subject: `Parts-list line ${l.refs || l.id}`, value: null, limit: null, unit: '', source: 'roles.binding', message: `This line is bound to "${l.roleId}", which the design no longer has (a rail, stage or transformer was removed or the supply is not designed): bind it to another role or clear the binding.` });
+    findings.push({
+      severity: 'caution',
+      rule: 'role.gone',
+      subject: `Parts-list line ${l.refs || l.id}`,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'roles.binding',
+      message: `This line is bound to "${l.roleId}", which the design no longer has (a rail, stage or transformer ` +
+        `was removed or the supply is not designed): bind it to another role or clear the binding.`,
+    });
   }
   return { statuses, findings };
 }

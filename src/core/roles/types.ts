@@ -21,10 +21,50 @@ export interface GroupValue<T> {
 }
 
 export type RoleRule =
-  | { key: string; label: string; unit: string; op: 'min' | 'max'; limit: number; hardLimit?: number; required: boolean; source: SourceKey; why: string }
-  | { key: string; label: string; unit: string; op: 'near'; limit: number; tolerance: number; required: boolean; source: SourceKey; why: string }
-  | { key: string; label: string; unit: ''; op: 'oneOf'; options: readonly string[]; cover?: readonly GroupValue<string>[]; required: boolean; source: SourceKey; why: string }
-  | { key: string; label: string; unit: string; op: 'eachOf'; values: readonly GroupValue<number>[]; tolerance: number; required: boolean; source: SourceKey; why: string };
+  | {
+      key: string;
+      label: string;
+      unit: string;
+      op: 'min' | 'max';
+      limit: number;
+      hardLimit?: number;
+      required: boolean;
+      source: SourceKey;
+      why: string;
+    }
+  | {
+      key: string;
+      label: string;
+      unit: string;
+      op: 'near';
+      limit: number;
+      tolerance: number;
+      required: boolean;
+      source: SourceKey;
+      why: string;
+    }
+  | {
+      key: string;
+      label: string;
+      unit: '';
+      op: 'oneOf';
+      options: readonly string[];
+      cover?: readonly GroupValue<string>[];
+      required: boolean;
+      source: SourceKey;
+      why: string;
+    }
+  | {
+      key: string;
+      label: string;
+      unit: string;
+      op: 'eachOf';
+      values: readonly GroupValue<number>[];
+      tolerance: number;
+      required: boolean;
+      source: SourceKey;
+      why: string;
+    };
 
 export interface DesignRole {
   /** Stable id from the design's own ids, e.g. "reservoir:rail-pa", "pa-devices:st-pa". */

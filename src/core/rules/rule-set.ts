@@ -29,7 +29,14 @@ export const RULE_SETS: Record<RuleSet, RuleSetInfo> = {
     spurious: 'spurious.us-97-307d',
     exposure: 'exposure.fcc-distance',
     mains: 'mains.ansi-c84-1',
-    sources: ['spurious.us-97-307d', 'exposure.fcc-distance', 'exposure.fcc-exemption', 'exposure.near-field', 'mains.ansi-c84-1', 'exposure.local-rules'],
+    sources: [
+      'spurious.us-97-307d',
+      'exposure.fcc-distance',
+      'exposure.fcc-exemption',
+      'exposure.near-field',
+      'mains.ansi-c84-1',
+      'exposure.local-rules',
+    ],
     // ANSI C84.1 Range B utilization voltage (at the equipment's outlet, where the rig plugs in), 106-127 V on 120 V
     // nominal: -11.7 % / +5.8 % (from memory, not confirmed; see the registry). Range B, not the tighter Range A:
     // the standard allows Range B to occur, so a supply must work over it.
@@ -43,7 +50,13 @@ export const RULE_SETS: Record<RuleSet, RuleSetInfo> = {
     spurious: 'spurious.itu-app3',
     exposure: 'exposure.icnirp-distance',
     mains: 'mains.iec-60038',
-    sources: ['spurious.itu-app3', 'exposure.icnirp-distance', 'exposure.near-field', 'mains.iec-60038', 'exposure.local-rules'],
+    sources: [
+      'spurious.itu-app3',
+      'exposure.icnirp-distance',
+      'exposure.near-field',
+      'mains.iec-60038',
+      'exposure.local-rules',
+    ],
     // Source: IEC 60038, 230 V +/- 10 % at the supply terminals
     mainsNominalV: 230,
     mainsLowFraction: 0.1,
@@ -84,9 +97,31 @@ export function mainsCornerFindings(mains: Mains | null, ruleSet: RuleSet): Find
   const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
   const lowOk = mains.lowFraction >= info.mainsLowFraction - 1e-9;
   const highOk = mains.highFraction >= info.mainsHighFraction - 1e-9;
-  const base = { rule: 'mains.corners', subject: 'Mains corners', value: mains.lowFraction, limit: info.mainsLowFraction, unit: '', source: info.mains };
+  const base = {
+    rule: 'mains.corners',
+    subject: 'Mains corners',
+    value: mains.lowFraction,
+    limit: info.mainsLowFraction,
+    unit: '',
+    source: info.mains,
+  };
   if (lowOk && highOk) {
-    return [{ ...base, severity: 'ok', message: `The mains corners (−${pct(mains.lowFraction)} / +${pct(mains.highFraction)}) cover ${info.mainsRangeText}.` }];
+    return [
+      {
+        ...base,
+        severity: 'ok',
+        message: `The mains corners (−${pct(mains.lowFraction)} / +${pct(mains.highFraction)}) cover ` +
+          `${info.mainsRangeText}.`,
+      },
+    ];
   }
-  return [{ ...base, severity: 'caution', message: `The mains corners (−${pct(mains.lowFraction)} / +${pct(mains.highFraction)}) are narrower than ${info.mainsRangeText} (−${pct(info.mainsLowFraction)} / +${pct(info.mainsHighFraction)}); widen them so the supply is checked over the whole range.` }];
+  return [
+    {
+      ...base,
+      severity: 'caution',
+      message: `The mains corners (−${pct(mains.lowFraction)} / +${pct(mains.highFraction)}) are narrower than ` +
+        `${info.mainsRangeText} (−${pct(info.mainsLowFraction)} / +${pct(info.mainsHighFraction)}); widen them so ` +
+        `the supply is checked over the whole range.`,
+    },
+  ];
 }

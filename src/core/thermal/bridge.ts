@@ -83,7 +83,8 @@ export function bridgeThermalFindings(railName: string, b: BridgeThermal): Findi
       ...base, rule: 'thermal.bridge-assumed', severity: 'caution', value: null, limit: null, unit: '',
       source: 'thermal.bridge-assumed',
       message: `${subject}: no thermal data entered; a 4-8 A single-in-line bridge is assumed ` +
-        `(θjc ${m.thetaJcKPerW} K/W, θja ${ASSUMED_BRIDGE_FREE_AIR_K_PER_W} K/W in free air, Tj max ${m.tjMaxC} °C). ` +
+        `(θjc ${m.thetaJcKPerW} K/W, θja ${ASSUMED_BRIDGE_FREE_AIR_K_PER_W} K/W in free air, Tj max ${m.tjMaxC}` +
+        ` °C). ` +
         `Enter your part's values from its datasheet.`,
     });
   }

@@ -10,7 +10,8 @@ const THERMAL_RULES = /^(thermal\.|pa\.heatsink|pa\.tj-)/;
  */
 export function insideNote(findings: Finding[], insideC: number | null, roomC: number): Finding[] {
   if (insideC === null || !Number.isFinite(insideC)) return findings;
-  const note = ` (Ambient: inside the box at ${insideC.toFixed(0)} °C, the ${roomC.toFixed(0)} °C room plus the enclosure's ` +
+  const note =
+    ` (Ambient: inside the box at ${insideC.toFixed(0)} °C, the ${roomC.toFixed(0)} °C room plus the enclosure's ` +
     'rise; a heatsink mounted outside the box sees the room, so there this is conservative.)';
   const noted = (f: Finding) => THERMAL_RULES.test(f.rule) && !f.kind && !f.message.includes('inside the box');
   return findings.map((f) => (noted(f) ? { ...f, message: f.message + note } : f));
