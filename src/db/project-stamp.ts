@@ -18,5 +18,10 @@ export async function projectStamp(client: Client, id: string): Promise<ProjectS
   const { rows } = await client.execute({ sql: STAMP_SQL, args: [id] });
   const row = rows[0];
   if (!row) return null;
-  return { id: String(row.id), version: Number(row.version), createdAt: String(row.created_at), updatedAt: String(row.updated_at) };
+  return {
+    id: String(row.id),
+    version: Number(row.version),
+    createdAt: String(row.created_at),
+    updatedAt: String(row.updated_at),
+  };
 }

@@ -70,9 +70,20 @@ export function pageCache(deps: Deps, limits: LruLimits = PAGE_CACHE_LIMITS): Pa
     const stamp = await projectStamp(deps.database.client, id);
     if (!stamp) return next();
     const url = new URL(c.req.url);
-    const parts = [program, stamp.id, stamp.version, stamp.createdAt, stamp.updatedAt, url.pathname, url.search, c.req.header('HX-Request') === 'true' ? 'htmx' : 'page', deps.now().toISOString().slice(0, 10)];
+    const parts = [
+      program,
+      stamp.id,
+      stamp.version,
+      stamp.createdAt,
+      stamp.updatedAt,
+      url.pathname,
+      url.search,
+      c.req.header('HX-Request') === 'true' ? 'htmx' : 'page',
+      deps.now().toISOString().slice(0, 10),
+    ];
     // weak: the same content, not necessarily the same bytes (a download's time stamp may differ)
-    const etag = `W/"${stamp.version}-${createHash('sha1').update(parts.join('\u0000')).digest('base64url').slice(0, 22)}"`;
+    const etag = `W/"${stamp.version}-` +
+      `${createHash('sha1').update(parts.join('\u0000')).digest('base64url').slice(0, 22)}"`;
     const validators = { ETag: etag, 'Cache-Control': 'private, no-cache', Vary: 'HX-Request' };
     if (matchesIfNoneMatch(c.req.header('If-None-Match'), etag)) {
       notModified++;
