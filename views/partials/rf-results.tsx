@@ -472,6 +472,13 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
         ) : (
           'between 50 Ω terminations.'
         )}
+        {h.loadsCovered ? (
+          <>
+            {' '}
+            The bands cover <span data-loads-covered>{h.loadsCovered}</span>: the stage's harmonics change with the load
+            it meets, and each band runs from the best to the worst of them at the antenna.
+          </>
+        ) : null}
       </p>
       <table class="grid harmonics">
         <thead>
@@ -523,6 +530,15 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
           ))}
         </tbody>
       </table>
+      {h.loadsCovered ? (
+        <ul class="explain" data-worst-loads>
+          {h.rows.filter((x) => x.worstLoad !== null).map((x) => (
+            <li>
+              Harmonic {x.n}, worst end at {x.worstLoad}; best end at {x.bestLoad}.
+            </li>
+          ))}
+        </ul>
+      ) : null}
     </div>
   );
 };
@@ -585,6 +601,7 @@ const BASIS_WORDS: Record<HarmonicBasis, string> = {
   'trapezoid-wave': 'switched wave with its edges, duty band',
   'class-e-simulated': 'simulated class E, loaded Q band',
   'clipped-at-swr': 'flat-topped at the supply, worst SWR load (equivalent level)',
+  'class-e-over-loads': 'simulated class E over loaded Q and the loads met (equivalent level)',
 };
 
 /**

@@ -10,7 +10,8 @@ import { monteCarloLpf } from './lpf-monte-carlo';
 import { validateRfInputs, validateRfSettings } from './lpf-validate';
 import { evaluatePa } from './pa';
 import { spectrumFindings } from './pa-spectrum-findings';
-import { foldClipping } from './pa-clip';
+import { clipEstimateFinding, clipEstimates, foldClipping } from './pa-clip';
+import { classEOverLoads } from './class-e-loads';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
 import { fieldLabel } from './field-labels';
@@ -219,6 +220,16 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   // its flat-topped harmonics there, through the filter into that load, fold into the bands' worst end (pa-clip)
   const swrWorst = Math.min(100, Math.max(1, finite(project.rf.worstSwr, 1)));
   const cls = paStage?.pa?.amplifierClass;
+  // class E: its waveform changes with the load it meets, so each harmonic is also taken with the antenna at its design
+  // load and round the worst-SWR circle, the stage into the filter's input impedance, relative to the fundamental there
+  const paSwr = paRes?.swr ?? null;
+  const overLoads = spectrum && sourced && lpfRes?.design && cls === 'E' && paStage?.pa && paSwr && paSwr.swr > 1
+    && paSwr.classERdsOnRatio !== null
+    ? classEOverLoads(spectrum, {
+      ladder: ladderOf(lpfRes.design), frequencyHz, loadOhm: paStage.pa.loadOhm, rdsOnRatio: paSwr.classERdsOnRatio,
+      swr: paSwr.swr, pushPull: paStage.pa.topology === 'push-pull',
+    }, (n) => sourced.rows.find((r) => r.n === n)?.relativeAttenuationDb ?? null)
+    : null;
   const bands = spectrum && sourced && lpfRes?.design && (cls === 'B' || cls === 'C') && swrWorst > 1
     ? (() => {
       const l = ladderOf(lpfRes.design);
@@ -226,9 +237,16 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         () => ({ re: swrWorst * l.r0Ohm, im: 0 }));
       const rej = (rows: { n: number; relativeAttenuationDb: number }[]) => (n: number) =>
         rows.find((r) => r.n === n)?.relativeAttenuationDb ?? null;
-      return foldClipping(spectrum.bands, swrWorst, rej(sourced.rows), rej(clipped));
+      const folded = foldClipping(spectrum.bands, swrWorst, rej(sourced.rows), rej(clipped));
+      // beside the flat-topped upper end: the stage balanced against the filter at reflection phase 0 (pa-swr)
+      const ratios = paRes?.swr?.clip?.drainHarmonicsAtPhase0;
+      const est = ratios ? clipEstimates(folded, ratios, swrWorst, rej(clipped)) : [];
+      const note = paStage ? clipEstimateFinding(est, swrWorst, l.r0Ohm, paStage.name) : null;
+      if (note) all.push(note);
+      return folded;
     })()
     : spectrum?.bands;
+  const judged = overLoads ? overLoads.bands : bands;
   const band3 = spectrum?.bands.find((b) => b.n === 3);
   if (src && src.kind === 'thevenin' && lpfRes?.design && paStage && band3) {
     // a voltage-switching stage: the 3rd harmonic current the filter's input takes (worst end of the source band)
@@ -243,8 +261,9 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     ? harmonicCompliance({
       rule: project.rf.spuriousRule, topology, evenHarmonicDbc: evenDbc, fundamentalW: outputPowerW, frequencyHz, passbandLossDb,
       filter: lpfRes?.analysis ? lpfRes.analysis.harmonics : null, monteCarlo: lpfRes?.monteCarlo ?? null,
-      ...(bands ? { spectrum: bands } : {}),
+      ...(judged ? { spectrum: judged } : {}),
       ...(sourced ? { source: sourced } : {}),
+      ...(overLoads ? { loadsCovered: overLoads.loadsCovered } : {}),
     })
     : null;
   if (harmonics) all.push(...harmonics.findings);

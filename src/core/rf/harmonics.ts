@@ -59,6 +59,7 @@ const BASIS_WHAT: Partial<Record<string, string>> = {
   'class-e-estimate': 'class E taken as a rectangular wave (pessimistic, not simulated)',
   'trapezoid-wave': 'switched wave with finite edges, duty 50 % to the stated worst imbalance',
   'class-e-simulated': 'load current of the simulated class-E stage',
+  'class-e-over-loads': 'load current of the simulated class-E stage, as the equivalent source level',
 };
 
 export interface HarmonicRow {
@@ -101,6 +102,9 @@ export interface HarmonicRow {
   worstMarginDb: number | null;
   /** fail: nominal margin < 0; caution: worst-case margin < 0 or nominal margin < 3 dB. */
   severity: Finding['severity'];
+  /** Class E over the loads met: the load (and loaded Q) of the best and worst ends, in words; null otherwise. */
+  bestLoad: string | null;
+  worstLoad: string | null;
 }
 
 export interface HarmonicsReport {
@@ -115,6 +119,8 @@ export interface HarmonicsReport {
   requiredDb: number;
   /** Harmonics 2..5. */
   rows: HarmonicRow[];
+  /** Which loads the bands cover, in words (class E: design load and worst-SWR circle); null = the design load. */
+  loadsCovered: string | null;
   findings: Finding[];
 }
 
@@ -134,6 +140,8 @@ export interface HarmonicInput {
   spectrum?: HarmonicBand[];
   /** Filter rejection with the PA's source impedance at each harmonic (lpf-analysis harmonicsFromSource). */
   source?: { label: string; rows: SourcedHarmonic[] };
+  /** Which loads the bands cover, in words, when more than the design load (class-e-loads loadsCoveredText). */
+  loadsCovered?: string;
 }
 
 export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
@@ -168,9 +176,11 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
       worstFilterAttenuationDb: worst,
       percentileFilterAttenuationDb: mc ? rel(mc.percentileAttenuationDb) + shift : null,
       predictedDbc, worstPredictedDbc, requiredDb, neededFilterAttenuationDb: requiredDb + pa.dbc, marginDb, worstMarginDb, severity,
+      bestLoad: band?.bestLoad ?? null, worstLoad: band?.worstLoad ?? null,
     };
     const srcWhat = src ? `; filter from the PA's source, ${inp.source!.label}` : '';
-    const what = `${BASIS_WHAT[pa.basis] ?? pa.basis}${srcWhat}`;
+    const loads = inp.loadsCovered && band?.worstLoad ? `; over ${inp.loadsCovered}, worst at ${band.worstLoad}` : '';
+    const what = `${BASIS_WHAT[pa.basis] ?? pa.basis}${loads}${srcWhat}`;
     const lvl = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'limited by construction' : `${x.toFixed(1)} dBc`);
     const bandText = !band ? null : predictedDbc < CONSTRUCTION_FLOOR_DBC ? 'limited by construction at the antenna'
       : `${predictedBestDbc < CONSTRUCTION_FLOOR_DBC ? `below ${CONSTRUCTION_FLOOR_DBC} dBc (the construction floor)` : lvl(predictedBestDbc)} to ${lvl(predictedDbc)} at the antenna`;
@@ -201,5 +211,8 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
   }
   findings.push({ severity: 'caution', rule: 'spurious.measure', subject: 'Spurious emissions', value: null, limit: null, unit: '', source: 'spurious.measure', kind: 'standing',
     message: 'These are predictions from idealised waveforms; measure the finished transmitter into a dummy load before going on the air, and follow your licence conditions.' });
-  return { rule: inp.rule, ruleTitle: info.title, ruleSource: info.source, ruleFromMemory: info.fromMemory, fundamentalW: inp.fundamentalW, requiredDb, rows, findings };
+  return {
+    rule: inp.rule, ruleTitle: info.title, ruleSource: info.source, ruleFromMemory: info.fromMemory,
+    fundamentalW: inp.fundamentalW, requiredDb, rows, loadsCovered: inp.loadsCovered ?? null, findings,
+  };
 }

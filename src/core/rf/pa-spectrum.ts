@@ -15,7 +15,8 @@ export type SpectrumBasis =
   | 'saturation-bound' // odd harmonics of a class-B stage between a clean sine and a hard-clipped square wave
   | 'trapezoid-wave' // switching stage: trapezoidal wave of duty D and the stated transition time
   | 'class-e-simulated' // class E: the load current of the simulated stage
-  | 'clipped-at-swr'; // class B/C: the drain voltage flat-topped at the rails into the most-clipping SWR load (pa-clip)
+  | 'clipped-at-swr' // class B/C: the drain voltage flat-topped at the rails into the most-clipping SWR load (pa-clip)
+  | 'class-e-over-loads'; // class E over loaded Q and the loads met: design load and SWR circle (class-e-loads)
 
 export interface HarmonicBand {
   n: number;
@@ -23,6 +24,9 @@ export interface HarmonicBand {
   bestDbc: number;
   worstDbc: number;
   basis: SpectrumBasis;
+  /** Class E over the loads met: where the best and worst ends lie, in words (class-e-loads). */
+  bestLoad?: string;
+  worstLoad?: string;
 }
 
 /** Stands for "none in the ideal waveform", dBc (kept finite for JSON). */
