@@ -2,6 +2,8 @@
 // Its harmonics, at the most-clipping load of the SWR circle, folded into the worst end of the PA's harmonic bands.
 import { clippedSineCoefficient } from './pa-fourier';
 import { MIN_DBC, type HarmonicBand } from './pa-spectrum';
+import { CONSTRUCTION_FLOOR_DBC } from './harmonics';
+import type { Finding } from '../findings';
 
 /**
  * Harmonic n of the drain voltage of a sinusoid `overdrive` times the rail-limited swing, flat-topped at the rail
@@ -37,4 +39,52 @@ export function foldClipping(
     const equivalent = clip - rc + rs;
     return equivalent > b.worstDbc ? { ...b, worstDbc: equivalent, basis: 'clipped-at-swr' } : { ...b };
   });
+}
+
+/** One harmonic at the antenna at the clipping load: the balanced estimate beside the flat-topped upper end. */
+export interface ClipEstimate {
+  n: number;
+  /** Harmonic balance of the stage against the filter (pa-clip-balance), dBc at the antenna. */
+  estimateDbc: number;
+  /** The flat-topped drain's level there, the band's worst end, dBc at the antenna. */
+  upperDbc: number;
+}
+
+/**
+ * For each harmonic the flat top raised (basis 'clipped-at-swr'): the balanced drain voltage's harmonic n through the
+ * filter from a stiff source into the clipping load, 20 log(|V_n|/|V_1|) − rejectClipped(n), beside the flat-topped
+ * level through the same path. Source: the level at the antenna is the drain's harmonic times the filter's transfer
+ * from a voltage at its input (two-port chain relations, lpf-analysis); decibel for voltages.
+ */
+export function clipEstimates(
+  folded: readonly HarmonicBand[], drainRatios: readonly number[], overdrive: number, rejectClippedDb: RejectionDb,
+): ClipEstimate[] {
+  return folded.flatMap((b) => {
+    const rc = rejectClippedDb(b.n);
+    const ratio = drainRatios[b.n - 1];
+    if (b.basis !== 'clipped-at-swr' || rc === null || !(ratio > 0)) return [];
+    return [{ n: b.n, estimateDbc: 20 * Math.log10(ratio) - rc, upperDbc: clippedHarmonicDbc(b.n, overdrive) - rc }];
+  });
+}
+
+const ordinal = (n: number) => `${n}${n === 2 ? 'nd' : n === 3 ? 'rd' : 'th'}`;
+
+/** The builder's note: the best estimate at the clipping load and why the verdict keeps the upper end (harmonics whose
+ * upper end is below the construction floor are left out; null when none is left). */
+export function clipEstimateFinding(all: readonly ClipEstimate[], swr: number, loadOhm: number, subject: string): Finding | null {
+  const est = all.filter((e) => e.upperDbc >= CONSTRUCTION_FLOOR_DBC);
+  if (est.length === 0) return null;
+  const level = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? `is below ${CONSTRUCTION_FLOOR_DBC} dBc`
+    : `is about ${x.toFixed(0)} dBc`);
+  const list = est.map((e) => `the ${ordinal(e.n)} ${level(e.estimateDbc)}`).join(', ');
+  const upper = est.map((e) => `${e.upperDbc.toFixed(0)} dBc (${ordinal(e.n)})`).join(', ');
+  return {
+    severity: 'ok', rule: 'pa.clip-harmonics', subject, value: est[0].estimateDbc, limit: null, unit: 'dBc',
+    source: 'pa.clip-balance',
+    message: `Into the SWR ${swr} load where the stage clips most (${(swr * loadOhm).toFixed(0)} Ω, reflection phase ` +
+      `0°) the filter's input takes much of the flat top's harmonic current, so the drain stays nearer a sine: at the ` +
+      `antenna ${list} by harmonic balance against the filter (best estimate). The harmonic rows keep the ` +
+      `flat-topped drain's ${upper} as their worst end, since the output transformer's leakage inductance is not ` +
+      'modelled; a measurement into a mismatched dummy load settles it.',
+  };
 }

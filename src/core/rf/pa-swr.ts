@@ -48,7 +48,12 @@ export interface PaSwrStress {
    * harmonic; 'flat-top' when that is unknown or did not converge at some load: the upper end), and the margin for the
    * drain's ring carried where the limit cuts the current (CLIP_RING_MARGIN); null for D and E.
    */
-  clip: { model: ClipModel; ringMargin: number } | null;
+  clip: {
+    model: ClipModel; ringMargin: number;
+    /** Harmonic balance: |V_n| / |V_1| of the drain voltage (n = 1..5, index n − 1) into the circle's highest
+     * resistance (reflection phase 0, the load that clips the stage most); null when not balanced there. */
+    drainHarmonicsAtPhase0: number[] | null;
+  } | null;
   /** Points every 15 degrees (for a table or plot). */
   points: SwrPoint[];
   worstDrainPeak: Worst;
@@ -265,6 +270,7 @@ export function swrStress(
   const balanced = (cls === 'B' || cls === 'C') && m.harmonics ? m.harmonics : null;
   let clipModel: ClipModel = balanced ? 'harmonic-balance' : 'flat-top';
   let start: Float64Array | undefined;
+  let atPhase0: number[] | null = null;
   // at SWR 1 every phase is the design load: one point says it all
   const steps = swr <= 1 ? 1 : cls === 'E' || balanced ? E_STEPS : STEPS;
   for (let i = 0; i < steps; i++) {
@@ -280,6 +286,7 @@ export function swrStress(
       const hb = clipBalance({ ...balanced, z: zl, start });
       if (hb.converged) start = hb.samples;
       else clipModel = 'flat-top';
+      if (i === 0 && hb.converged) atPhase0 = hb.harmonicRatios;
       const { clipModel: _c, ...st } = hb.converged ? balancedStress(m, zl, hb) : flatTopStress(m, zl);
       void _c;
       p = st;
@@ -296,7 +303,8 @@ export function swrStress(
     swr,
     model: cls === 'E' ? 'class-e-simulated' : 'load-line',
     classETurnOnRatio: ref ? worstTurnOn : null,
-    clip: cls === 'B' || cls === 'C' ? { model: clipModel, ringMargin: CLIP_RING_MARGIN } : null,
+    clip: cls === 'B' || cls === 'C'
+      ? { model: clipModel, ringMargin: CLIP_RING_MARGIN, drainHarmonicsAtPhase0: atPhase0 } : null,
     classERdsOnRatio: ref ? rdsOnRatio : null,
     ring: m.ring && cls === 'D'
       ? { ...m.ring, z0Ohm: leakageRing(0, 0, m.ring.leakageH, m.ring.cossF).z0Ohm } : null,

@@ -1,7 +1,7 @@
 // The clipped class B/C stage's harmonics (src/core/rf/pa-clip.ts), worked by hand from the clipped-sinusoid Fourier
 // series (saturation describing function, Gelb & Vander Velde 1968, from memory) and the square-wave series (textbook).
 import { describe, expect, it } from 'vitest';
-import { clippedHarmonicDbc, foldClipping } from '../../../src/core/rf/pa-clip';
+import { clipEstimateFinding, clipEstimates, clippedHarmonicDbc, foldClipping } from '../../../src/core/rf/pa-clip';
 import { MIN_DBC, type HarmonicBand } from '../../../src/core/rf/pa-spectrum';
 import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
 import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
@@ -61,5 +61,38 @@ describe('evaluateRf folds the clipped class-C push-pull stage into the harmonic
     const rej = harmonicsFromSource(l, r.frequencyHz, 'thevenin', stiff, [3], () => ({ re: 100, im: 0 }));
     near(row.predictedDbc, -12.905 - rej[0].relativeAttenuationDb, 1e-3, '3rd at the antenna');
     expect(row.predictedDbc).toBeGreaterThan(at(1).harmonics!.rows.find((x) => x.n === 3)!.predictedDbc);
+  });
+});
+
+describe('clipEstimates: the balanced drain harmonic through the filter from a stiff source, beside the flat top', () => {
+  const folded: HarmonicBand[] = [
+    { n: 2, bestDbc: -60, worstDbc: -30, basis: 'push-pull-imbalance' },
+    { n: 3, bestDbc: -50, worstDbc: -2.905, basis: 'clipped-at-swr' },
+  ];
+  // drain 3rd at 0.1 of the fundamental (−20 dBc), 40 dB rejection from a stiff source: −60 dBc at the antenna;
+  // the flat top at overdrive 2 (−12.905 dBc, worked by hand above) through the same 40 dB: −52.905 dBc
+  const est = clipEstimates(folded, [1, 0, 0.1, 0, 0.02], 2, () => 40);
+  it('only the harmonics the flat top raised', () => {
+    expect(est.map((e) => e.n)).toEqual([3]);
+    near(est[0].estimateDbc, -60, 1e-9, 'estimate');
+    near(est[0].upperDbc, -52.905, 1e-3, 'upper end');
+  });
+  it('the builder reads both levels and why the worst end stays', () => {
+    const f = clipEstimateFinding(est, 2, 50, 'PA')!;
+    expect(f.severity).toBe('ok');
+    expect(f.message).toContain('100 Ω');
+    expect(f.message).toContain('the 3rd is about -60 dBc');
+    expect(f.message).toContain('-53 dBc (3rd)');
+    expect(f.message).toMatch(/leakage inductance is not modelled/);
+  });
+  it('nothing to say when the upper end is below the construction floor (−70 dBc)', () => {
+    expect(clipEstimateFinding(clipEstimates(folded, [1, 0, 0.1, 0, 0], 2, () => 80), 2, 50, 'PA')).toBeNull();
+  });
+  it('evaluateRf at SWR 2: the balanced estimate lies below the flat-topped worst end of the 3rd row', () => {
+    const r = evaluateRf(project({ rf: rfSettings({ worstSwr: 2 }) }), { paRailV: { pa: 13.8 } });
+    const f = r.findings.find((x) => x.rule === 'pa.clip-harmonics')!;
+    const row = r.harmonics!.rows.find((x) => x.n === 3)!;
+    expect(f.value as number).toBeLessThan(row.predictedDbc);
+    expect(r.stages.find((x) => x.kind === 'final')!.pa!.swr!.clip!.model).toBe('harmonic-balance');
   });
 });
