@@ -341,7 +341,10 @@ function rfLines(report: EvaluationReport): string[] {
       `  Harmonic ${h.n}: ${band} at the antenna (judged on the worst end), margin ` +
         `${h.marginDb.toFixed(1)} dB, ${h.severity}`,
     );
+    if (h.worstLoad !== null) out.push(`    worst end at ${h.worstLoad}`);
   }
+  const covered = rf.harmonics?.loadsCovered;
+  if (covered) out.push(`  (the bands cover ${covered})`);
   const basis = rf.harmonics?.rows[0]?.sourceBasis;
   if (basis && basis !== '50 Ω') out.push(`  (filter rejection from the PA's own source: ${basis})`);
   if (rf.exposure)

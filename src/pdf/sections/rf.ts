@@ -404,6 +404,11 @@ function harmonics(l: Layout, rf: RfReport): void {
       `level.`,
     { sizePt: 8, color: GREY },
   );
+  if (h.loadsCovered) {
+    // class E: the bands span the loads the stage meets; say which, and where each worst end lies
+    const ends = h.rows.filter((x) => x.worstLoad !== null).map((x) => `${x.n}f at ${x.worstLoad}`).join('; ');
+    l.text(`The bands cover ${h.loadsCovered}. Worst ends: ${ends}.`, { sizePt: 8, color: GREY });
+  }
   const basis = h.rows[0]?.sourceBasis;
   if (basis)
     l.text(
