@@ -20,10 +20,9 @@ const loadText = (w: Worst) =>
 /** Worst drain peak, current, dissipation and the output range round the SWR circle, each with its load. */
 function swrText(s: PaSwrStress): string {
   return (
-    `drain peak ${fv(s.worstDrainPeak.value, 'V')} (${loadText(s.worstDrainPeak)}); current ` +
-    `${fv(s.worstPeakCurrent.value, 'A')} ` +
-    `(${loadText(s.worstPeakCurrent)}); dissipation ${fv(s.worstDissipation.value, 'W')} (` +
-    `${loadText(s.worstDissipation)}); ` +
+    `drain peak ${fv(s.worstDrainPeak.value, 'V')} (${loadText(s.worstDrainPeak)}); ` +
+    `current ${fv(s.worstPeakCurrent.value, 'A')} (${loadText(s.worstPeakCurrent)}); ` +
+    `dissipation ${fv(s.worstDissipation.value, 'W')} (${loadText(s.worstDissipation)}); ` +
     `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}`
   );
 }
@@ -69,8 +68,8 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
           [
             'Supply',
             `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')} budgeted (saturated drive), ` +
-              `DC input ${fv(p.dcInputW, 'W')} at the design drive, efficiency ${Math.round(p.efficiency * 100)} % (` +
-              `${p.efficiencySource})`,
+              `DC input ${fv(p.dcInputW, 'W')} at the design drive, ` +
+              `efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`,
           ],
           ...(p.waveform ? [['Waveform', waveformLine(p.waveform, p.keyDownCurrentA)] as [string, string]] : []),
           [

@@ -330,9 +330,9 @@ function regulated(l: Layout, r: RegulatedRailReport): void {
   kv.push([
     'Output ripple',
     rc && rc.outputRipplePpV !== null
-      ? `${fv(rc.outputRipplePpV, 'V')} p-p from ${fv(rc.inputRipplePpV, 'V')} p-p in (` +
-        `${r.rippleRejectionDb} dB, ` +
-        `${rc.label})${r.rippleTargetV !== null ? `; target ${fv(r.rippleTargetV, 'V')}` : ''}`
+      ? `${fv(rc.outputRipplePpV, 'V')} p-p from ${fv(rc.inputRipplePpV, 'V')} p-p in ` +
+        `(${r.rippleRejectionDb} dB, ${rc.label})` +
+        `${r.rippleTargetV !== null ? `; target ${fv(r.rippleTargetV, 'V')}` : ''}`
       : steadyInput(r.corners)
         ? STEADY_INPUT_WORDS
         : 'unknown: ripple rejection not stated',
