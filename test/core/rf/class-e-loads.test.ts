@@ -25,13 +25,19 @@ describe('the load at a harmonic (lumped model)', () => {
 describe('the stage over the loads, with no filter between it and the antenna', () => {
   // An empty ladder (chain matrix the identity): the antenna load is the stage's load, and the current in it is the
   // series network's (Kirchhoff's current law), so each level is the simulation's own load-current harmonic
-  const none: Ladder = { kinds: new Uint8Array(0), values: new Float64Array(0), inductorQ: Infinity, capacitorQ: Infinity, r0Ohm: 50 };
+  const none: Ladder = {
+    kinds: new Uint8Array(0), values: new Float64Array(0), inductorQ: Infinity, capacitorQ: Infinity, r0Ohm: 50,
+  };
   const rds = 0.01;
-  const loads = classELoadBands({ ladder: none, frequencyHz: 7e6, loadOhm: 50, rdsOnRatio: rds, swr: 2, harmonics: [2, 3] });
-  it(`the design load and ${CLASS_E_LOAD_PHASES} phases round the circle, at loaded Q ${CLASS_E_QL} and ${CLASS_E_QL_LOW}`, () => {
+  const loads = classELoadBands({
+    ladder: none, frequencyHz: 7e6, loadOhm: 50, rdsOnRatio: rds, swr: 2, harmonics: [2, 3],
+  });
+  it(`the design load and ${CLASS_E_LOAD_PHASES} phases, loaded Q ${CLASS_E_QL} and ${CLASS_E_QL_LOW}`, () => {
     expect(loads.points.length).toBe(2 * (CLASS_E_LOAD_PHASES + 1));
-    expect(loads.points.filter((p) => p.phaseDeg === null).map((p) => p.loadedQ)).toEqual([CLASS_E_QL, CLASS_E_QL_LOW]);
-    expect(loadsCoveredText(loads)).toBe('the design load and SWR 2 at 12 phases (every 30°) at the antenna, loaded Q 30 to 5');
+    const design = loads.points.filter((p) => p.phaseDeg === null);
+    expect(design.map((p) => p.loadedQ)).toEqual([CLASS_E_QL, CLASS_E_QL_LOW]);
+    expect(loadsCoveredText(loads))
+      .toBe('the design load and SWR 2 at 12 phases (every 30°) at the antenna, loaded Q 30 to 5');
   });
   it('each antenna load lies on the SWR 2 circle: 180° is 25 Ω, 0° is 100 Ω (|Γ| = 1/3)', () => {
     const at = (ph: number) => loads.points.find((p) => p.phaseDeg === ph)!;
@@ -49,7 +55,9 @@ describe('the stage over the loads, with no filter between it and the antenna', 
       near(p.drainLoadRe, z.re, 1e-9, 'drain load re');
       near(p.drainLoadIm, z.im, 1e-9, 'drain load im');
       const sim = simulateClassE(z.re, z.im, rds, 0.5, p.loadedQ).loadHarmonics;
-      for (const l of p.levels) near(l.dbc, 20 * Math.log10(sim[l.n - 1]), 1e-6, `n=${l.n} at ${p.phaseDeg}°, Q ${p.loadedQ}`);
+      for (const l of p.levels) {
+        near(l.dbc, 20 * Math.log10(sim[l.n - 1]), 1e-6, `n=${l.n} at ${p.phaseDeg}°, Q ${p.loadedQ}`);
+      }
     }
   });
 });

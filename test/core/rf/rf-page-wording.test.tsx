@@ -30,4 +30,18 @@ describe('RF page wording on the demos', () => {
     const h = await html(portable20m);
     expect(h).toMatch(/design load, highest supply 14\.4 V/);
   });
+  it('portable (class E, SWR 2): the bands say which loads they cover and where each worst end lies', async () => {
+    const h = await html(portable20m);
+    const covered = /data-loads-covered[^>]*>([^<]*)<\/span>/.exec(h)?.[1];
+    expect(covered).toBe('the design load and SWR 2 at 12 phases (every 30°) at the antenna, loaded Q 30 to 5');
+    const ends = /<ul class="explain" data-worst-loads[^>]*>([\s\S]*?)<\/ul>/.exec(h)![1];
+    for (const n of [2, 3, 4, 5]) {
+      expect(ends).toMatch(new RegExp(`Harmonic ${n}, worst end at SWR 2 at the antenna, reflection phase \\d+°`));
+    }
+  });
+  it('club (class C): no loads line (its bands are the design load\'s, clipping folded in)', async () => {
+    const h = await html(club30m);
+    expect(h).not.toContain('data-loads-covered');
+    expect(h).not.toContain('data-worst-loads');
+  });
 });
