@@ -122,13 +122,19 @@ const finite = (x: number, fallback = 0): number => (Number.isFinite(x) ? x : fa
 
 /**
  * Exact solution of C dv/dt = A(s) - B v over one step of length h, with A linear in s (slope a1):
- * v(h) = p0 + (a1/B) h + (v - p0) e^(-B h / C), p0 = (a0 - C a1/B)/B. `decay` = e^(-B h / C), precomputed.
+ * v(h) = p0 + (a1/B) h + (v - p0) e^(-B h / C), p0 = (a0 - C a1/B)/B. `decay` = e^(-B h / C), precomputed; `small`
+ * (B h < 1e-9 C, fixed per circuit) takes the first-order step instead. Both are computed and one is chosen, with no
+ * branch: a branch one circuit never takes left the optimised loop boxing every step's voltage (about 17 bytes of
+ * garbage a step, measured), and the result is the same either way.
  */
-function advance(v: number, a0: number, a1: number, b: number, c: number, h: number, decay: number): number {
-  if (b * h < 1e-9 * c) return v + (a0 * h + 0.5 * a1 * h * h - b * v * h) / c;
+function advance(
+  v: number, a0: number, a1: number, b: number, c: number, h: number, decay: number, small: boolean,
+): number {
+  const firstOrder = v + (a0 * h + 0.5 * a1 * h * h - b * v * h) / c;
   const slope = a1 / b;
   const p0 = (a0 - c * slope) / b;
-  return p0 + slope * h + (v - p0) * decay;
+  const exact = p0 + slope * h + (v - p0) * decay;
+  return small ? firstOrder : exact;
 }
 
 const SIN_TABLES = new Map<number, Float64Array>();
@@ -152,9 +158,17 @@ function emptyStats(): CycleStats {
  * Capacitor current is piecewise linear in v_c: i_c = A - B v_c, one branch with the diodes
  * conducting and one blocking; the branch is chosen so that the diode current is >= 0 at the step end.
  */
-function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt: number, iw: number) => void): { v: number; dvdv0: number; st: CycleStats } {
+/** The recorder of a cycle whose waveform is not kept (called on every step, so the call is never a cold branch). */
+const NO_RECORD = (_t: number, _vt: number, _iw: number): void => undefined;
+
+type Recorder = (t: number, vt: number, iw: number) => void;
+
+function runCycle(
+  cir: Circuit, v0: number, steps: number, rec: Recorder = NO_RECORD,
+): { v: number; dvdv0: number; st: CycleStats } {
   const h = (2 * Math.PI) / cir.omega / steps;
-  const st = emptyStats();
+  // the statistics in locals, not in an object's fields (a double stored in a field is boxed on every write)
+  let { sumV, minV, maxV, sumId2A, sumIdB2, maxId, sumIc2, sumIc, sumLoad, conducting, collapsed } = emptyStats();
   const k = 1 + cir.esr * cir.g;
   const d = Math.max(cir.esr + cir.rt * k, 1e-9);
   const m = 1 + cir.g * cir.rt;
@@ -164,6 +178,10 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
   const sines = sinTable(steps);
   const decayCond = Math.exp((-bCond * h) / cir.c);
   const decayBlock = Math.exp((-bBlock * h) / cir.c);
+  const smallCond = bCond * h < 1e-9 * cir.c;
+  const smallBlock = bBlock * h < 1e-9 * cir.c;
+  // a constant-current load can pull the reservoir to 0 V (the clamp below); decided once, not in the rare branch
+  const canCollapse = cir.i0 > 0;
   let v = v0;
   // d v / d v0 along the cycle: each step maps v affinely (slope = the branch's decay), a clamp at 0 has slope 0
   let dv = 1;
@@ -178,12 +196,12 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
     // conducting branch
     const a0 = (m * (ePrev * k + cir.esr * i0)) / d - cir.g * ePrev - i0;
     const a1 = (m * (e * k + cir.esr * i0)) / d - cir.g * e - i0;
-    let vNew = advance(v, a0, (a1 - a0) / h, bCond, cir.c, h, decayCond);
+    let vNew = advance(v, a0, (a1 - a0) / h, bCond, cir.c, h, decayCond, smallCond);
     let id = (e * k - vNew + cir.esr * i0) / d;
     let slope = slopeCond;
     if (!(id >= 0)) {
       const aBlock = (cir.g * cir.esr * i0) / k - i0;
-      vNew = advance(v, aBlock, 0, bBlock, cir.c, h, decayBlock);
+      vNew = advance(v, aBlock, 0, bBlock, cir.c, h, decayBlock, smallBlock);
       id = 0;
       slope = slopeBlock;
     }
@@ -191,27 +209,32 @@ function runCycle(cir: Circuit, v0: number, steps: number, rec?: (t: number, vt:
     if (vNew < 0) {
       vNew = 0;
       dv = 0;
-      if (cir.i0 > 0) st.collapsed = true;
+      if (canCollapse) collapsed = true;
     }
     const vt = id > 0 ? e - cir.rt * id : (vNew - cir.esr * i0) / k;
     const iLoad = cir.g * vt + (vNew > 0 ? i0 : 0);
     const ic = id - iLoad;
-    st.sumV += vt;
-    if (vt < st.minV) st.minV = vt;
-    if (vt > st.maxV) st.maxV = vt;
-    const firstHalf = s > 0 || (s === 0 && sPrev >= 0);
-    if (firstHalf) st.sumId2A += id * id;
-    else st.sumIdB2 += id * id;
-    if (id > st.maxId) st.maxId = id;
-    st.sumIc2 += ic * ic;
-    st.sumIc += ic;
-    st.sumLoad += iLoad;
-    if (id > 0) st.conducting++;
-    if (rec) rec(n * h, vt, (firstHalf ? id : -id) + 0); // + 0 turns -0 into 0 for JSON
+    sumV += vt;
+    if (vt < minV) minV = vt;
+    if (vt > maxV) maxV = vt;
+    // compared on every step: a comparison only reached at an exact zero of the sine (never, in practice) had no type
+    // feedback, and the optimised loop then kept sPrev boxed, allocating on every step
+    const prevNonNegative = sPrev >= 0;
+    const firstHalf = s > 0 || (s === 0 && prevNonNegative);
+    if (firstHalf) sumId2A += id * id;
+    else sumIdB2 += id * id;
+    if (id > maxId) maxId = id;
+    sumIc2 += ic * ic;
+    sumIc += ic;
+    sumLoad += iLoad;
+    if (id > 0) conducting++;
+    // no `if (rec)`: doubles passed to a call in a branch never taken were boxed on every step of the optimised loop
+    rec(n * h, vt, (firstHalf ? id : -id) + 0); // + 0 turns -0 into 0 for JSON
     v = vNew;
     sPrev = s;
     ePrev = e;
   }
+  const st: CycleStats = { sumV, minV, maxV, sumId2A, sumIdB2, maxId, sumIc2, sumIc, sumLoad, conducting, collapsed };
   return { v, dvdv0: dv, st };
 }
 

@@ -110,17 +110,24 @@ interface Work {
   a: Float64Array;
   c: Float64Array;
   on: Uint8Array;
+  /** X = Σ k_i j_i at the last step end: kept here, not returned (a returned double is boxed, every step) */
+  x: Float64Array;
 }
 
 /**
- * One backward-Euler step to emf `vs` (the source's value at the step end). Per winding in the conducting set S:
+ * Step n of the cycle: one backward-Euler step to the source's emf at the step end, vs = V_pk sin(2π n / steps)
+ * (computed here from n: a double passed to this call, which is not inlined, was boxed on every step). Per winding
+ * in the conducting set S:
  * L_i (j' - j)/h = k_i (|V_s| - R_p X' - L_p (X' - X)/h) - R_i j' - n Vf + ESR I0 - v', X = Σ_S k_i j_i, and
  * C (v' - v)/h = j' - I0 - g v', so v' = a_i + β_i j'. Then j_i' = (c_i - k_i ρ X')/D_i with ρ = R_p + L_p/h,
  * D_i = L_i/h + R_i + β_i, and X' = B / (1 + ρ A), A = Σ k_i²/D_i, B = Σ k_i c_i / D_i (Kirchhoff on the ideal
  * transformer); a winding whose current comes out negative is dropped from S (its diodes block) and the rest solved
- * again. Returns X'. The terms fixed by the circuit are precomputed in circuitOf (same operations, same order).
+ * again. X and X' are wk.x[0]. The terms fixed by the circuit are precomputed in circuitOf (same operations, same
+ * order).
  */
-function step(cir: Circuit, wk: Work, vs: number, x: number): number {
+function step(cir: Circuit, wk: Work, n: number): void {
+  const vs = cir.vpk * cir.sin[n];
+  const x = wk.x[0];
   const { k, q, hcI0, lh, d, k2d, drop, krho, half, beta } = cir;
   const { v, j, a, c, on } = wk;
   const mag = Math.abs(vs);
@@ -161,7 +168,7 @@ function step(cir: Circuit, wk: Work, vs: number, x: number): number {
     j[i] = jn;
     v[i] = Math.max(0, a[i] + beta[i] * jn);
   }
-  return xNew;
+  wk.x[0] = xNew;
 }
 
 interface Stats {
@@ -178,16 +185,15 @@ function cycle(cir: Circuit, v0: Float64Array, wk: Work, st?: Stats): Float64Arr
   const m = cir.ws.length;
   wk.v.set(v0);
   wk.j.fill(0);
-  let x = 0;
+  wk.x[0] = 0;
   const half = cir.steps / 2;
   for (let n = 1; n <= cir.steps; n++) {
-    const vs = cir.vpk * cir.sin[n];
-    x = step(cir, wk, vs, x);
+    step(cir, wk, n);
     if (n === half || n === cir.steps) {
       // a pulse still running at the zero crossing: cut (the frame is rectified), and said
       for (let i = 0; i < m; i++) if (wk.j[i] > 1e-9 && st) st.overlap = true;
       wk.j.fill(0);
-      x = 0;
+      wk.x[0] = 0;
     }
     if (st) {
       const { v, j } = wk;
@@ -319,7 +325,10 @@ function simulateUncached(input: JointInput, start?: Warm, onSteady?: (w: Warm) 
   const cir = circuitOf(input);
   const m = cir.ws.length;
   const maxCycles = input.maxCycles ?? 200;
-  const wk: Work = { v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), c: new Float64Array(m), on: new Uint8Array(m) };
+  const wk: Work = {
+    v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), c: new Float64Array(m), on: new Uint8Array(m),
+    x: new Float64Array(1),
+  };
   const top = Float64Array.from(cir.ws.map((w) => w.noLoadV));
   const tol = 1e-5 * Math.max(1, ...top);
   const warmOk = start && start.x.length === m;
