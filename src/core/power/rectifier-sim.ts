@@ -158,14 +158,15 @@ function emptyStats(): CycleStats {
  * Capacitor current is piecewise linear in v_c: i_c = A - B v_c, one branch with the diodes
  * conducting and one blocking; the branch is chosen so that the diode current is >= 0 at the step end.
  */
-/** The recorder of a cycle whose waveform is not kept (called on every step, so the call is never a cold branch). */
-const NO_RECORD = (_t: number, _vt: number, _iw: number): void => undefined;
+/**
+ * The rail voltage and signed winding current at each step of the last cycle run (index n = 1..steps), written on
+ * every step of every cycle; the waveform is read from here. Written unconditionally: a recorder called only when
+ * asked was a call in the loop that boxed three doubles a step. Simulations run one at a time, so one pair serves.
+ */
+let WAVE_V = new Float64Array(0);
+let WAVE_I = new Float64Array(0);
 
-type Recorder = (t: number, vt: number, iw: number) => void;
-
-function runCycle(
-  cir: Circuit, v0: number, steps: number, rec: Recorder = NO_RECORD,
-): { v: number; dvdv0: number; st: CycleStats } {
+function runCycle(cir: Circuit, v0: number, steps: number): { v: number; dvdv0: number; st: CycleStats } {
   const h = (2 * Math.PI) / cir.omega / steps;
   // the statistics in locals, not in an object's fields (a double stored in a field is boxed on every write)
   let { sumV, minV, maxV, sumId2A, sumIdB2, maxId, sumIc2, sumIc, sumLoad, conducting, collapsed } = emptyStats();
@@ -176,6 +177,12 @@ function runCycle(
   const bBlock = cir.g / k;
   const halfWave = cir.topology === 'half-wave';
   const sines = sinTable(steps);
+  if (WAVE_V.length < steps + 1) {
+    WAVE_V = new Float64Array(steps + 1);
+    WAVE_I = new Float64Array(steps + 1);
+  }
+  const waveV = WAVE_V;
+  const waveI = WAVE_I;
   const decayCond = Math.exp((-bCond * h) / cir.c);
   const decayBlock = Math.exp((-bBlock * h) / cir.c);
   const smallCond = bCond * h < 1e-9 * cir.c;
@@ -228,8 +235,8 @@ function runCycle(
     sumIc += ic;
     sumLoad += iLoad;
     if (id > 0) conducting++;
-    // no `if (rec)`: doubles passed to a call in a branch never taken were boxed on every step of the optimised loop
-    rec(n * h, vt, (firstHalf ? id : -id) + 0); // + 0 turns -0 into 0 for JSON
+    waveV[n] = vt;
+    waveI[n] = (firstHalf ? id : -id) + 0; // + 0 turns -0 into 0 for JSON
     v = vNew;
     sPrev = s;
     ePrev = e;
@@ -464,18 +471,25 @@ function simulateUncached(input: RectifierSimInput, startV?: number, onSteady?: 
   const wf: RectifierWaveform = { timeS: [], outputV: [], windingA: [] };
   let counter = 0;
   let offsetT = 0;
-  const rec = (t: number, vt: number, iw: number) => {
-    if (counter++ % every === 0) {
-      wf.timeS.push(finite(offsetT + t));
-      wf.outputV.push(finite(vt));
-      wf.windingA.push(finite(iw));
+  // the step as runCycle computes it, for the sample times
+  const h = (2 * Math.PI) / cir.omega / steps;
+  const take = () => {
+    for (let n = 1; n <= steps; n++) {
+      if (counter++ % every === 0) {
+        wf.timeS.push(finite(offsetT + n * h));
+        wf.outputV.push(finite(WAVE_V[n]));
+        wf.windingA.push(finite(WAVE_I[n]));
+      }
     }
   };
   let st = last.st;
   if (wantWave) {
-    const first = runCycle(cir, x, steps, rec);
+    // converged: the last cycle of the search ran from x, so its steps (still in WAVE_V/WAVE_I) are the first cycle
+    const first = converged ? last : runCycle(cir, x, steps);
+    take();
     offsetT = 1 / input.frequencyHz;
-    runCycle(cir, first.v, steps, rec);
+    runCycle(cir, first.v, steps);
+    take();
     st = first.st;
   }
   const perHalf = input.topology === 'centre-tap';
