@@ -90,10 +90,10 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) =>
               `are judged; bias idle included)` +
               `${
                 pa.waveform
-                  ? `; at the design drive ${fv(pa.dcInputW, 'W')} / ${fv(
+                  ? `; at the design drive ${fv(
                       pa.waveform.designCurrentA + (pa.keyDownCurrentA - pa.waveform.bandMaxCurrentA),
                       'A',
-                    )}`
+                    )} (DC input ${fv(pa.dcInputW, 'W')})`
                   : `; DC input ${fv(pa.dcInputW, 'W')}`
               }`,
           ],
