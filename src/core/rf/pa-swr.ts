@@ -2,7 +2,7 @@
 import type { PaParams } from '../model';
 import { simulateClassE } from './class-e-sim';
 import { clippedSineCoefficient } from './pa-fourier';
-import { clipBalance, type Balance } from './pa-clip-balance';
+import { clipBalance, HARMONICS, type Balance } from './pa-clip-balance';
 import type { Cx } from './lpf-analysis';
 
 /** One load on the SWR circle, referred to the drain through an ideal transformer or network. */
@@ -252,6 +252,35 @@ export function classEStressAt(
   };
 }
 
+/** Balanced sweeps already solved (the passes of one evaluation, and evaluations of one project, share them). */
+const SWEEPS = new Map<string, Balance[]>();
+const SWEEPS_KEPT = 32;
+
+/**
+ * The stage balanced at each load of the circle (every 360/steps degrees), each load starting from the previous one's
+ * waveform (continuation round the circle). Kept by the inputs, harmonic impedances to six significant figures.
+ */
+function balancedSweep(b: NonNullable<MatchedPoint['harmonics']>, swr: number, steps: number): Balance[] {
+  const zs: string[] = [];
+  for (let n = 2; n <= HARMONICS; n++) {
+    const z = b.zAt(n);
+    zs.push(z.re.toPrecision(6), z.im.toPrecision(6));
+  }
+  const key = [b.topology, b.thetaRad.toPrecision(9), swr, steps, ...zs].join(' ');
+  const hit = SWEEPS.get(key);
+  if (hit) return hit;
+  const out: Balance[] = [];
+  let start: Float64Array | undefined;
+  for (let i = 0; i < steps; i++) {
+    const hb = clipBalance({ ...b, z: loadOnCircle(swr, (360 * i) / steps), start });
+    if (hb.converged) start = hb.samples;
+    out.push(hb);
+  }
+  if (SWEEPS.size >= SWEEPS_KEPT) SWEEPS.delete(SWEEPS.keys().next().value!);
+  SWEEPS.set(key, out);
+  return out;
+}
+
 const STEPS = 360;
 /** Class-E simulation and class B/C harmonic-balance points round the circle (every 15°). */
 const E_STEPS = 24;
@@ -269,7 +298,6 @@ export function swrStress(
   let worstTurnOn = 0;
   const balanced = (cls === 'B' || cls === 'C') && m.harmonics ? m.harmonics : null;
   let clipModel: ClipModel = balanced ? 'harmonic-balance' : 'flat-top';
-  let start: Float64Array | undefined;
   let atPhase0: number[] | null = null;
   // at SWR 1 every phase is the design load: one point says it all
   const steps = swr <= 1 ? 1 : cls === 'E' || balanced ? E_STEPS : STEPS;
@@ -283,9 +311,8 @@ export function swrStress(
       p = e.stress;
     } else if (balanced) {
       // each load starts from the previous one's waveform (continuation round the circle)
-      const hb = clipBalance({ ...balanced, z: zl, start });
-      if (hb.converged) start = hb.samples;
-      else clipModel = 'flat-top';
+      const hb = balancedSweep(balanced, swr, steps)[i];
+      if (!hb.converged) clipModel = 'flat-top';
       if (i === 0 && hb.converged) atPhase0 = hb.harmonicRatios;
       const { clipModel: _c, ...st } = hb.converged ? balancedStress(m, zl, hb) : flatTopStress(m, zl);
       void _c;

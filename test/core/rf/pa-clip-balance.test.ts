@@ -35,9 +35,9 @@ describe('clipBalance', () => {
     for (const topology of ['push-pull', 'single-ended'] as const) {
       const b = clipBalance({ topology, thetaRad: B, z: { re: 2, im: 0 }, zAt: short });
       expect(b.converged).toBe(true);
-      // 0.5 % for the sampled period (128 points) and the device's knee (0.3 % of the swing)
-      near(b.currentRatio, v1 / 2, 0.005 * v1, `${topology}: I1 = V1/|z|`);
-      near(b.swingPeak, v1, 0.005 * v1, `${topology}: the drain beyond the limit, V1`);
+      // 1.5 % for the sampled period (128 points) and the device's knee (1 % of the swing at the peak current)
+      near(b.currentRatio, v1 / 2, 0.015 * v1, `${topology}: I1 = V1/|z|`);
+      near(b.swingPeak, v1, 0.015 * v1, `${topology}: the drain beyond the limit, V1`);
       expect(b.harmonicRatios[2]).toBeLessThan(1e-6);
       expect(b.peakCurrentRatio).toBeLessThan(1);
     }
