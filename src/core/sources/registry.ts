@@ -346,7 +346,16 @@ export const SOURCES = {
       `square-wave voltage; conduction loss ∝ current² (${PRACTICE}); push-pull class D adds the leakage ring ` +
       `(pa.leakage-ring)`,
   },
-  'pa.clip-balance': { status: 'design', text: `Harmonic balance of a class B/C stage at its clipping load, in this program: each device a current source (its cosine drive pulse) that gives way at its saturation drop, against the load at the fundamental and the low-pass filter's input impedance at each harmonic (with the device output capacitance when entered); the drain's harmonics reach the antenna through the filter from a voltage at its input (two-port chain relations, circuit theory). Checked against ngspice (push-pull class B and C, 5-pole capacitor-input filter, SWR 2): power within 3 %, 3rd harmonic within 1.3 dB. The output transformer's leakage inductance is not modelled, so the flat-topped drain stays the harmonic rows' worst end (${PRACTICE})` },
+  'pa.clip-balance': {
+    status: 'design',
+    text: `Harmonic balance of a class B/C stage at its clipping load, in this program: each device a current source ` +
+      `(its cosine drive pulse) that gives way at its saturation drop, against the load at the fundamental and the ` +
+      `low-pass filter's input impedance at each harmonic (with the device output capacitance when entered); the ` +
+      `drain's harmonics reach the antenna through the filter from a voltage at its input (two-port chain relations, ` +
+      `circuit theory). Checked against ngspice (push-pull class B and C, 5-pole capacitor-input filter, SWR 2): ` +
+      `power within 3 %, 3rd harmonic within 1.3 dB. The output transformer's leakage inductance is not modelled, ` +
+      `so the flat-topped drain stays the harmonic rows' worst end (${PRACTICE})`,
+  },
   'pa.leakage-ring': {
     status: 'published',
     text: "Undamped series LC from its initial conditions (circuit theory, textbook): at a hard switching edge the " +
