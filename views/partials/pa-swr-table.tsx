@@ -8,8 +8,15 @@ const load = (w: { loadReOhm: number; loadImOhm: number }) =>
 
 export const PaSwrTable: FC<{ s: PaSwrStress | null }> = ({ s }) => {
   if (!s) return null;
-  const how =
-    s.model === 'class-e-simulated' ? 'class E by time-domain simulation, every 15°' : 'load line at a complex load';
+  const ring = s.clip ? `, drain peaks with a ${Math.round(s.clip.ringMargin * 100)} % ring margin where it clips` : '';
+  const how = s.model === 'class-e-simulated'
+    ? 'class E by time-domain simulation, every 15°'
+    : s.clip?.model === 'harmonic-balance'
+      ? 'load line at a complex load; where the swing reaches the rails, balanced against the filter at each ' +
+        `harmonic, every 15°${ring}`
+      : s.clip
+        ? `load line at a complex load, flat-topped at the rails where it reaches them (the upper end)${ring}`
+        : 'load line at a complex load';
   const rows: [string, Worst, string][] = [
     ['Highest drain peak', s.worstDrainPeak, 'V'],
     ['Highest device current', s.worstPeakCurrent, 'A'],

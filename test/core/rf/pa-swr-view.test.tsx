@@ -11,6 +11,9 @@ describe('SWR circle on the RF page', () => {
     expect(html).toContain('Round the SWR 2 circle');
     // Definition of Γ: phase 180° at SWR 2 is z = 1/2, 25 Ω on a 50 Ω load
     expect(html).toMatch(/Most dissipation[^]*?25\.0 \+ j0\.0 Ω[^]*?180°/);
+    // with a low-pass filter the clipping loads are balanced against it, and the drain peak carries the ring margin
+    expect(html).toContain('balanced against the filter at each harmonic');
+    expect(html).toContain('12 % ring margin where it clips');
   });
   it('class E says its stress round the circle comes from the time-domain simulation', async () => {
     const p = project({ rf: rfSettings({ worstSwr: 2 }) });
