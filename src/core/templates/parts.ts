@@ -47,7 +47,8 @@ export function starterParts(crystalHz: number): Record<string, Part> {
     part('tp-trafo-1', 'Mains transformer, one secondary 17 V 2 A, laminated, 35 VA', 'transformer', { va: 35, sec1V: 17, sec1A: 2 }, [
       offer(A, 'MR-TR1-30', [[1, 1990], [10, 1690]]),
     ]),
-    part('tp-trafo-pa', 'Mains transformer, one secondary 22 V 3.5 A, laminated, 80 VA', 'transformer', { va: 80, sec1V: 22, sec1A: 3.5 }, [
+    part('tp-trafo-pa', 'Mains transformer, one secondary 22 V 3.5 A, laminated, 80 VA', 'transformer',
+      { va: 80, sec1V: 22, sec1A: 3.5 }, [
       offer(B, 'EG-4480', [[1, 3590], [10, 3150]]),
     ]),
     part('tp-bridge', 'Bridge rectifier 4 A 200 V, surge 150 A', 'rectifier', { ratedA: 4, vrrmV: 200, ifsmA: 150 }, [

@@ -119,15 +119,19 @@ function mainsTwoRail(bandName: string, targetPowerW: number): StationData {
   const paA = finalKeyDownA(targetPowerW, railV, CLASS_C_EFFICIENCY);
   return {
     supply: supply(
-      // 22 V 3.5 A: the supply carries the final's saturated drive (about 1.5 A at 20 W); a 20 V winding let the PA rail
-      // dip below 20 V at 120 V low mains, and a tune-up carrier at that drive draws about 3.2 A RMS from the winding
-      [transformer('T1 mains transformer', [winding('w-sig', '16 V winding', 16, 1, 0.1), winding('w-pa', '22 V winding', 22, 3.5, 0.08)])],
+      // 22 V 3.5 A: the supply carries the final's saturated drive (about 1.5 A at 20 W); a 20 V winding let the PA
+      // rail dip below 20 V at 120 V low mains, and a tune-up carrier at that drive draws about 3.2 A RMS from it
+      [transformer('T1 mains transformer', [
+        winding('w-sig', '16 V winding', 16, 1, 0.1),
+        winding('w-pa', '22 V winding', 22, 3.5, 0.08),
+      ])],
       [
         // a short on the small winding reflects too little primary current to blow the primary fuse: its own fuse
         rectified('rail-raw', 'Raw DC for the 13.8 V regulator', 'w-sig', 0.0047, 35, 2.4, null, 0.8),
         adjustable('rail-sig', '13.8 V signal rail', 'rail-raw', 2400),
         // below about 20 V a 20 W push-pull final falls short of its output; stated so headroom is judged
-        // no winding fuse needed: the larger winding's shorted reservoir reflects over 5 x the primary fuse, which clears it
+        // no winding fuse needed: the larger winding's shorted reservoir reflects over 5 x the primary fuse, which
+        // clears it (the supply page still recommends one)
         rectified('rail-pa', 'PA rail (unregulated, ~26 V)', 'w-pa', 0.0068, 50, 3.6, 20),
       ],
     ),

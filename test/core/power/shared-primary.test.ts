@@ -150,8 +150,8 @@ async function clubAgainstNgspice(p: Project, leakage: boolean) {
   const rs = (w: (typeof t.windings)[number]) => (w.regulationFraction * w.ratedVrms) / w.ratedA;
   const ls = (w: (typeof t.windings)[number]) => (leakage ? (0.25 * rs(w)) / (2 * Math.PI * hz) : 0);
   // VA = 16 x 1.5 + 20 x 3.5 = 94; reg_VA-weighted = (0.1 x 24 + 0.08 x 70) / 94 = 0.085106;
-  // R_p = 0.5 x reg_VA-weighted x Vp² / VA = 0.5 x 0.085106 x 120² / 94 = 6.5188 Ω; L_p = Σ (0.5 L_s / k²) VA_w / VA
-  // with k = V_NL / 120: (0.5 x 0.70736 mH / 0.14667² x 24 + 0.5 x 0.30315 mH / 0.18² x 70) / 94 = 7.682 mH
+  // R_p = 0.5 x reg_VA-weighted x Vp² / VA = 0.5 x 0.085106 x 120² / 94 = 6.5188 Ω;
+  // L_p = Σ (0.5 L_s / k²) VA_w / VA with k = V_NL / 120: (0.5 x 0.70736 mH / 0.14667² x 24 + 0.5 x 0.30315 mH / 0.18² x 70) / 94 = 7.682 mH
   const va = t.windings.reduce((s, w) => s + w.ratedVrms * w.ratedA, 0);
   const reg = t.windings.reduce((s, w) => s + w.regulationFraction * w.ratedVrms * w.ratedA, 0) / va;
   const kOf = (w: (typeof t.windings)[number]) => (w.ratedVrms * (1 + w.regulationFraction)) / p.mains!.nominalV;

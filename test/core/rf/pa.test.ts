@@ -31,7 +31,8 @@ describe('PA worked example, push-pull 13.8 V 10 W 50 Ω (REFERENCE-VALUES §8.3
     // printed 1.04 A from rounded 14.3 W / 13.8 V (= 1.036 A): tolerance 0.01 A; at the design point (edge of saturation)
     near(t.waveform!.designCurrentA, 1.04, 0.01, 'I');
     // the band's most: the hard-saturated square wave, whose mean current is 1/2 of its peak against the
-    // half-sine's 1/π (Fourier series, textbook): π/2 × the design current, 1.036 × π/2 = 1.63 A, said in a caution
+    // half-sine's 1/π (Fourier series, textbook): π/2 × the design current, 1.036 × π/2 = 1.63 A, said in a
+    // caution
     near(t.waveform!.bandMaxCurrentA, t.waveform!.designCurrentA * (Math.PI / 2), 1e-6, 'I saturated');
     near(t.waveform!.bandMaxCurrentA, 1.627, 0.016, 'I saturated, by hand');
     // the budget carries the saturated end (no bias in this example)
