@@ -4,9 +4,8 @@
 // For each antenna load the filter as built presents its input impedance to the stage; the simulated stage into that
 // load gives the load current's harmonics; with the series network they give the drain's harmonic voltages, which drive
 // the filter into the antenna load. Each harmonic is taken relative to the fundamental delivered into that load.
-// The stress sweep (pa-swr) takes the circle at the PA's output instead; a filter that is not matched as built moves
-// the loads the stage meets, so its runs are not shared here (the simulation's own memo keeps repeated evaluations
-// cheap).
+// The stress sweep (pa-swr) takes the same loads (loadsThroughFilter), so its class-E runs at the loaded Q it uses are
+// shared with these through the simulation's own memo.
 import { CLASS_E_EXCESS, CLASS_E_QL, CLASS_E_QL_LOW, simulateClassE } from './class-e-sim';
 import { chainMatrix, harmonicsFromSource, type Cx, type Ladder } from './lpf-analysis';
 import { loadOnCircle } from './pa-swr';
@@ -78,6 +77,33 @@ const seriesAt = (ql: number, n: number): Cx => cx(0, ql * n - (ql - CLASS_E_EXC
 /** Source: definition of the decibel for amplitude ratios, 20 log10. */
 const dbOf = (r: number) => (r > 10 ** (MIN_DBC / 20) ? 20 * Math.log10(r) : MIN_DBC);
 
+/** An antenna load and the load the filter as built presents at its input for it, at the fundamental (Ω). */
+export interface FilterLoad {
+  /** Reflection phase of the antenna load against the filter's design load r0, degrees; null = r0 itself. */
+  phaseDeg: number | null;
+  antenna: Cx;
+  input: Cx;
+}
+
+/**
+ * The antenna at the filter's design load r0 (first) and round the circle of `swr` at `phases` reflection phases
+ * (every 360/phases degrees from 0), each with the filter's input impedance at f0.
+ */
+export function loadsThroughFilter(ladder: Ladder, frequencyHz: number, swr: number, phases: number): FilterLoad[] {
+  const r0 = ladder.r0Ohm;
+  const [a, b, c, d] = chainMatrix(ladder, frequencyHz);
+  // Source: two-port chain (ABCD) relations, circuit theory: Z_in = (A Z_L + B)/(C Z_L + D)
+  const through = (zl: Cx): FilterLoad['input'] => div(add(mul(a, zl), b), add(mul(c, zl), d));
+  const out: FilterLoad[] = [{ phaseDeg: null, antenna: cx(r0), input: through(cx(r0)) }];
+  for (let i = 0; i < phases; i++) {
+    const phaseDeg = (360 * i) / phases;
+    const g = loadOnCircle(swr, phaseDeg);
+    const zl = cx(g.re * r0, g.im * r0);
+    out.push({ phaseDeg, antenna: zl, input: through(zl) });
+  }
+  return out;
+}
+
 /**
  * The stage at each antenna load, the design load r0 and the SWR circle at reflection phases every
  * 360/CLASS_E_LOAD_PHASES degrees, for loaded Q CLASS_E_QL and CLASS_E_QL_LOW, and each harmonic at the antenna.
@@ -85,20 +111,10 @@ const dbOf = (r: number) => (r > 10 ** (MIN_DBC / 20) ? 20 * Math.log10(r) : MIN
 export function classELoadBands(inp: ClassELoadInput): ClassELoadBands {
   const ns = inp.harmonics ?? [2, 3, 4, 5];
   const f0 = inp.frequencyHz;
-  const r0 = inp.ladder.r0Ohm;
-  const [a, b, c, d] = chainMatrix(inp.ladder, f0);
   const points: ClassELoadPoint[] = [];
   const phases = inp.phases ?? CLASS_E_LOAD_PHASES;
-  const antenna: [number | null, Cx][] = [[null, cx(r0)]];
-  for (let i = 0; i < phases; i++) {
-    const phaseDeg = (360 * i) / phases;
-    const g = loadOnCircle(inp.swr, phaseDeg);
-    antenna.push([phaseDeg, cx(g.re * r0, g.im * r0)]);
-  }
-  for (const [phaseDeg, zl] of antenna) {
-    // the load the stage meets: Z_in = (A Z_L + B)/(C Z_L + D) (two-port chain relations, circuit theory), referred to
-    // the drain as a fraction of the design load (the transformer scales both alike)
-    const zin = div(add(mul(a, zl), b), add(mul(c, zl), d));
+  for (const { phaseDeg, antenna: zl, input: zin } of loadsThroughFilter(inp.ladder, f0, inp.swr, phases)) {
+    // referred to the drain as a fraction of the design load (the transformer scales both alike)
     const z = cx(zin.re / inp.loadOhm, zin.im / inp.loadOhm);
     for (const ql of [CLASS_E_QL, CLASS_E_QL_LOW]) {
       const e = simulateClassE(z.re, z.im, inp.rdsOnRatio, 0.5, ql);
