@@ -110,65 +110,8 @@ interface Work {
   a: Float64Array;
   c: Float64Array;
   on: Uint8Array;
-  /** X = Σ k_i j_i at the last step end: kept here, not returned (a returned double is boxed, every step) */
-  x: Float64Array;
-}
-
-/**
- * Step n of the cycle: one backward-Euler step to the source's emf at the step end, vs = V_pk sin(2π n / steps)
- * (computed here from n: a double passed to this call, which is not inlined, was boxed on every step). Per winding
- * in the conducting set S:
- * L_i (j' - j)/h = k_i (|V_s| - R_p X' - L_p (X' - X)/h) - R_i j' - n Vf + ESR I0 - v', X = Σ_S k_i j_i, and
- * C (v' - v)/h = j' - I0 - g v', so v' = a_i + β_i j'. Then j_i' = (c_i - k_i ρ X')/D_i with ρ = R_p + L_p/h,
- * D_i = L_i/h + R_i + β_i, and X' = B / (1 + ρ A), A = Σ k_i²/D_i, B = Σ k_i c_i / D_i (Kirchhoff on the ideal
- * transformer); a winding whose current comes out negative is dropped from S (its diodes block) and the rest solved
- * again. X and X' are wk.x[0]. The terms fixed by the circuit are precomputed in circuitOf (same operations, same
- * order).
- */
-function step(cir: Circuit, wk: Work, n: number): void {
-  const vs = cir.vpk * cir.sin[n];
-  const x = wk.x[0];
-  const { k, q, hcI0, lh, d, k2d, drop, krho, half, beta } = cir;
-  const { v, j, a, c, on } = wk;
-  const mag = Math.abs(vs);
-  const m = k.length;
-  const rho = cir.rho;
-  const emf = mag + cir.lph * x;
-  const positive = vs > 0;
-  for (let i = 0; i < m; i++) {
-    a[i] = (v[i] - hcI0[i]) / q[i];
-    c[i] = k[i] * emf - drop[i] - a[i] + lh[i] * j[i];
-    on[i] = (positive || !half[i]) && c[i] > 0 ? 1 : 0;
-  }
-  let xNew = 0;
-  for (let pass = 0; pass <= m; pass++) {
-    let sa = 0;
-    let sb = 0;
-    for (let i = 0; i < m; i++) {
-      if (!on[i]) continue;
-      sa += k2d[i];
-      sb += (k[i] * c[i]) / d[i];
-    }
-    xNew = sb / (1 + rho * sa);
-    let worst = -1;
-    let worstJ = 0;
-    for (let i = 0; i < m; i++) {
-      if (!on[i]) continue;
-      const jn = (c[i] - krho[i] * xNew) / d[i];
-      if (jn < worstJ) {
-        worst = i;
-        worstJ = jn;
-      }
-    }
-    if (worst < 0) break;
-    on[worst] = 0;
-  }
-  for (let i = 0; i < m; i++) {
-    const jn = on[i] ? (c[i] - krho[i] * xNew) / d[i] : 0;
-    j[i] = jn;
-    v[i] = Math.max(0, a[i] + beta[i] * jn);
-  }
-  wk.x[0] = xNew;
+  /** each conducting winding's new current in the last pass of a step (A) */
+  jn: Float64Array;
 }
 
 interface Stats {
@@ -180,24 +123,76 @@ interface Stats {
   overlap: boolean;
 }
 
-/** One mains cycle from reservoir voltages v0 (currents start at 0: the cycle starts at a zero crossing). */
+/**
+ * One mains cycle from reservoir voltages v0 (currents start at 0: the cycle starts at a zero crossing).
+ * Each step n is one backward-Euler step to the source's emf at the step end, vs = V_pk sin(2π n / steps). Per
+ * winding in the conducting set S:
+ * L_i (j' - j)/h = k_i (|V_s| - R_p X' - L_p (X' - X)/h) - R_i j' - n Vf + ESR I0 - v', X = Σ_S k_i j_i, and
+ * C (v' - v)/h = j' - I0 - g v', so v' = a_i + β_i j'. Then j_i' = (c_i - k_i ρ X')/D_i with ρ = R_p + L_p/h,
+ * D_i = L_i/h + R_i + β_i, and X' = B / (1 + ρ A), A = Σ k_i²/D_i, B = Σ k_i c_i / D_i (Kirchhoff on the ideal
+ * transformer); a winding whose current comes out negative is dropped from S (its diodes block) and the rest solved
+ * again. The terms fixed by the circuit are precomputed in circuitOf (same operations, same order); the step is
+ * written inside the cycle's loop (as a function it was not inlined, and its call cost more than its arithmetic).
+ */
 function cycle(cir: Circuit, v0: Float64Array, wk: Work, st?: Stats): Float64Array {
   const m = cir.ws.length;
-  wk.v.set(v0);
-  wk.j.fill(0);
-  wk.x[0] = 0;
-  const half = cir.steps / 2;
-  for (let n = 1; n <= cir.steps; n++) {
-    step(cir, wk, n);
-    if (n === half || n === cir.steps) {
+  const { k, q, hcI0, lh, d, k2d, drop, krho, half, beta, esr, i0, g, sin } = cir;
+  const { v, j, a, c, on, jn } = wk;
+  const rho = cir.rho;
+  const lph = cir.lph;
+  const vpk = cir.vpk;
+  const steps = cir.steps;
+  v.set(v0);
+  j.fill(0);
+  let x = 0;
+  const halfCycle = steps / 2;
+  for (let n = 1; n <= steps; n++) {
+    const vs = vpk * sin[n];
+    const mag = Math.abs(vs);
+    const emf = mag + lph * x;
+    const positive = vs > 0;
+    for (let i = 0; i < m; i++) {
+      a[i] = (v[i] - hcI0[i]) / q[i];
+      c[i] = k[i] * emf - drop[i] - a[i] + lh[i] * j[i];
+      on[i] = (positive || !half[i]) && c[i] > 0 ? 1 : 0;
+    }
+    let xNew = 0;
+    for (let pass = 0; pass <= m; pass++) {
+      let sa = 0;
+      let sb = 0;
+      for (let i = 0; i < m; i++) {
+        if (!on[i]) continue;
+        sa += k2d[i];
+        sb += (k[i] * c[i]) / d[i];
+      }
+      xNew = sb / (1 + rho * sa);
+      let worst = -1;
+      let worstJ = 0;
+      for (let i = 0; i < m; i++) {
+        if (!on[i]) continue;
+        jn[i] = (c[i] - krho[i] * xNew) / d[i];
+        if (jn[i] < worstJ) {
+          worst = i;
+          worstJ = jn[i];
+        }
+      }
+      if (worst < 0) break;
+      on[worst] = 0;
+    }
+    // a winding still conducting was conducting in the last pass, whose X' this is: its current is that pass's
+    for (let i = 0; i < m; i++) {
+      const ji = on[i] ? jn[i] : 0;
+      j[i] = ji;
+      v[i] = Math.max(0, a[i] + beta[i] * ji);
+    }
+    x = xNew;
+    if (n === halfCycle || n === steps) {
       // a pulse still running at the zero crossing: cut (the frame is rectified), and said
-      for (let i = 0; i < m; i++) if (wk.j[i] > 1e-9 && st) st.overlap = true;
-      wk.j.fill(0);
-      wk.x[0] = 0;
+      for (let i = 0; i < m; i++) if (j[i] > 1e-9 && st) st.overlap = true;
+      j.fill(0);
+      x = 0;
     }
     if (st) {
-      const { v, j } = wk;
-      const { esr, i0, g } = cir;
       for (let i = 0; i < m; i++) {
         // the rail terminal: reservoir plus ESR x capacitor current
         const u = v[i] + esr[i] * (j[i] - i0[i] - g[i] * v[i]);
@@ -209,7 +204,7 @@ function cycle(cir: Circuit, v0: Float64Array, wk: Work, st?: Stats): Float64Arr
       }
     }
   }
-  return wk.v.slice();
+  return v.slice();
 }
 
 /** Solve M y = r in place (Gaussian elimination with partial pivoting, m small); false when singular. */
@@ -327,7 +322,7 @@ function simulateUncached(input: JointInput, start?: Warm, onSteady?: (w: Warm) 
   const maxCycles = input.maxCycles ?? 200;
   const wk: Work = {
     v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), c: new Float64Array(m), on: new Uint8Array(m),
-    x: new Float64Array(1),
+    jn: new Float64Array(m),
   };
   const top = Float64Array.from(cir.ws.map((w) => w.noLoadV));
   const tol = 1e-5 * Math.max(1, ...top);
