@@ -243,13 +243,17 @@ function finalItems(project: Project, report: ChecklistReport, stage: Stage, rf:
         ),
       );
     }
-    const kdA = rf?.paKeyDownA ?? perMode?.keyDown ?? null;
+    // measured at the design drive; the budget's figure (hard saturation) is the most it may draw
+    const kdA = rf?.paDesignKeyDownA ?? perMode?.keyDown ?? null;
+    const satA = rf?.paKeyDownA ?? null;
+    const sat = satA !== null && kdA !== null && satA > kdA * 1.05
+      ? ` Driven into hard saturation it can draw up to ${fmt(satA, 'A')}, what the supply is sized for.` : '';
     items.push(
       measured(
-        'Key down for a few seconds: PA rail current about {v}.',
+        `Key down for a few seconds at the design drive: PA rail current about {v}.${sat}`,
         kdA,
         'A',
-        rf?.paKeyDownA != null ? 'rf: PA key-down current' : 'budget: final, key-down',
+        rf?.paDesignKeyDownA != null ? 'rf: PA key-down current at the design drive' : 'budget: final, key-down',
       ),
     );
   }

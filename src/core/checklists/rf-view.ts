@@ -33,7 +33,10 @@ export interface RfExposureView {
 
 export interface RfView {
   paOutputW: number | null;
+  /** Key-down current the supply budget carries: the PA waveform band's most (hard saturation), bias included (A). */
   paKeyDownA: number | null;
+  /** Key-down current at the design drive, bias included (A): what a builder measures at the design output. */
+  paDesignKeyDownA: number | null;
   paRailV: number | null;
   paEfficiency: number | null;
   paPeakDrainV: number | null;
@@ -76,6 +79,9 @@ export function rfView(rf: RfReport | null): RfView | null {
   return {
     paOutputW: pa?.outputW ?? null,
     paKeyDownA: pa?.keyDownCurrentA ?? null,
+    // the budget's figure is the band's most with the bias: the design drive's is its design current with the same bias
+    paDesignKeyDownA: pa ? (pa.waveform ? pa.waveform.designCurrentA + pa.keyDownCurrentA - pa.waveform.bandMaxCurrentA
+      : pa.keyDownCurrentA) : null,
     paRailV: pa?.railV ?? null,
     paEfficiency: pa?.efficiency ?? null,
     paPeakDrainV: pa?.peakDrainV ?? null,

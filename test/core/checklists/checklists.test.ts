@@ -59,6 +59,17 @@ describe('checklists for the club mains build', () => {
     expect(out.unit).toBe('W');
   });
 
+  it('key-down current to measure at the design drive (with the entered 50 mA bias), the saturated figure beside it', () => {
+    const pa = report.rf!.stages.find((s) => s.pa)!.pa!;
+    const kd = find(build, /^Key down for a few seconds at the design drive/)[0];
+    // the demo's PA enters 0.05 A bias idle: the design drive's RF current plus that is what an ammeter shows at the
+    // design output the line above expects; the budget's (hard saturation) figure, higher by the band, is named too
+    expect(kd.value).toBeCloseTo(pa.waveform!.designCurrentA + 0.05, 12);
+    expect(kd.value!).toBeLessThan(pa.keyDownCurrentA);
+    expect(pa.keyDownCurrentA).toBeCloseTo(pa.waveform!.bandMaxCurrentA + 0.05, 12);
+    expect(kd.text).toMatch(/hard saturation it can draw up to .* A, what the supply is sized for/);
+  });
+
   it('quotes the no-load and key-down rail voltages of the supply report', () => {
     const rail = report.supply!.rails.find((r) => r.kind === 'rectified' && r.railId === 'rail-pa')!;
     if (rail.kind !== 'rectified') throw new Error('expected a rectified rail');
