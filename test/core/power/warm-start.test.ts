@@ -52,7 +52,8 @@ describe('warm-started rectifier simulation', () => {
     // the bisection stops when hi / lo <= 1.005 (reservoir.ts): the two searches may part by one such step
     expect(Math.abs(warm! / cold! - 1)).toBeLessThanOrEqual(0.005);
     // and the capacitance found meets the target in a cold simulation (the ripple check itself)
-    expect(simulateRectifier({ ...at(1.5), capacitanceF: warm!, stepsPerCycle: 500 }).ripplePpV).toBeLessThanOrEqual(rippleTargetV * 1.001);
+    const check = simulateRectifier({ ...at(1.5), capacitanceF: warm!, stepsPerCycle: 500 });
+    expect(check.ripplePpV).toBeLessThanOrEqual(rippleTargetV * 1.001);
   });
 });
 
@@ -75,9 +76,39 @@ describe('warm-started joint transformer simulation', () => {
       // the search stops when every |P(x) - x| < 1e-5 x the largest no-load peak (shared-primary.ts)
       const toleranceV = 2 * 1e-5 * (nextV * 1.08 * 0.9 * Math.SQRT2);
       expect(warm.converged && cold.converged).toBe(true);
-      expect(Math.abs(warm.rails[0].troughV - cold.rails[0].troughV), `${nextV} V after ${prevV} V`).toBeLessThan(toleranceV);
-      expect(Math.abs(warm.rails[0].dcMeanV - cold.rails[0].dcMeanV), `${nextV} V after ${prevV} V`).toBeLessThan(toleranceV);
-      expect(warm.cycles, `${nextV} V after ${prevV} V`).toBeLessThanOrEqual(cold.cycles);
+      const what = `${nextV} V after ${prevV} V`;
+      expect(Math.abs(warm.rails[0].troughV - cold.rails[0].troughV), what).toBeLessThan(toleranceV);
+      expect(Math.abs(warm.rails[0].dcMeanV - cold.rails[0].dcMeanV), what).toBeLessThan(toleranceV);
+      expect(warm.cycles, what).toBeLessThanOrEqual(cold.cycles);
+    }
+  });
+});
+
+describe('the plotted corner\'s first recorded cycle is the search\'s converged cycle', () => {
+  // the waveform's first cycle is taken from the last cycle of the steady-state search (same start voltage), not
+  // simulated again: its statistics must be exactly those of the same corner simulated without a waveform
+  it.each([
+    ['bridge, current load', at(1.2)],
+    ['bridge with a bleeder', { ...at(0.4), bleederOhm: 2200 }],
+    ['half-wave', { ...at(0.2), topology: 'half-wave' as const }],
+    ['centre-tap, resistive load',
+      { ...base, topology: 'centre-tap' as const, load: { kind: 'resistance' as const, resistanceOhm: 22 } }],
+  ])('%s', (_name, input) => {
+    const plain = simulateRectifier({ ...input, waveformPoints: 0 });
+    const plotted = simulateRectifier({ ...input, waveformPoints: 200 });
+    expect(plain.converged).toBe(true);
+    const keys = ['dcMeanV', 'troughV', 'peakV', 'ripplePpV', 'secondaryRmsA', 'diodePeakA', 'capacitorRippleRmsA',
+      'conductionFraction'] as const;
+    for (const k of keys) {
+      expect(plotted[k], k).toBe(plain[k]);
+    }
+    // two cycles plotted, the first the converged one: its samples lie between that cycle's trough and peak
+    const first = plotted.waveform.outputV.filter((_, i) => plotted.waveform.timeS[i] <= 1 / base.frequencyHz);
+    expect(plotted.waveform.timeS.length).toBeGreaterThanOrEqual(190);
+    expect(first.length).toBeGreaterThanOrEqual(95);
+    for (const v of first) {
+      expect(v).toBeGreaterThanOrEqual(plain.troughV - 1e-9);
+      expect(v).toBeLessThanOrEqual(plain.peakV + 1e-9);
     }
   });
 });
