@@ -3,7 +3,7 @@
 // input (failed bridge) and a shorted reservoir (the current then still passes the diodes).
 import type { RectifierTopology } from '../model';
 import type { FaultCheck, FuseSheet } from './report-types';
-import { resultScope } from './rectifier-sim';
+import { resultScope, sinTable } from './rectifier-sim';
 
 /** One row of a pre-arcing table: at `multiple` x In the fuse melts no sooner than minS and no later than maxS. */
 interface PreArcRow {
@@ -114,6 +114,8 @@ function shortedOutputUncached(
     return Number.isFinite(a) ? a : 0;
   }
   const steps = 2000;
+  // sin(2 pi k / steps), the same values computed once (the cycles repeat them)
+  const sines = sinTable(steps);
   const h = 1 / frequencyHz / steps;
   const g = leakageH / h;
   // a: the bridge's signed winding current, or the first half's (centre-tap, half-wave); b: the second half's
@@ -126,7 +128,7 @@ function shortedOutputUncached(
   for (let c = 0; c < cycles; c++) {
     sum = 0;
     for (let k = 1; k <= steps; k++) {
-      const v = Math.sin((2 * Math.PI * k) / steps) * peakV;
+      const v = sines[k] * peakV;
       let lead: number;
       if (topology === 'bridge') {
         const dir = a !== 0 ? Math.sign(a) : Math.abs(v) > drop ? Math.sign(v) : 0;

@@ -138,7 +138,8 @@ function advance(
 }
 
 const SIN_TABLES = new Map<number, Float64Array>();
-function sinTable(steps: number): Float64Array {
+/** sin(2 pi n / steps) for n = 0..steps, computed once per step count (bounded); read-only for callers. */
+export function sinTable(steps: number): Float64Array {
   let t = SIN_TABLES.get(steps);
   if (!t) {
     t = new Float64Array(steps + 1);
