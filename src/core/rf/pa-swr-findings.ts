@@ -61,6 +61,10 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   const clamped = c.clampV != null && c.clampV > 0 && c.clampV < s.worstDrainPeak.value;
   // a fitted clamp holds the drain to its own voltage (pa-clamp.ts): the device sees the lower of the two
   const vPk = clamped ? c.clampV! : s.worstDrainPeak.value;
+  // class B/C at a clipping load: the peak includes the margin for the drain's ring (pa-swr CLIP_RING_MARGIN)
+  const ring = s.worstDrainPeak.ringMargin && s.clip
+    ? ` The ${clamped ? 'unclamped ' : ''}peak includes a ${Math.round(s.clip.ringMargin * 100)} % margin for the drain's ring where the stage ` +
+      'clips (the harmonic voltages and the transformer\'s leakage carry it past twice the supply).' : '';
   const vWhere = `${where(s.worstDrainPeak)}${clamped ? ` (held there by the ${c.clampV} V drain clamp; ${s.worstDrainPeak.value.toFixed(1)} V without it)` : ''}`;
   f.push({
     severity: pa.deviceVdsMaxV < vPk ? 'fail' : pa.deviceVdsMaxV < V_MARGIN * vPk ? 'caution' : 'ok',
@@ -68,11 +72,11 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
     message: pa.deviceVdsMaxV < vPk
       ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, above the ${pa.deviceVdsMaxV} V device rating: ` +
         `fit a drain clamp (TVS or zener below the rating), fold the drive back on high SWR, or use a device rated ` +
-        `${Math.ceil(V_MARGIN * vPk)} V or more.`
+        `${Math.ceil(V_MARGIN * vPk)} V or more.${ring}`
       : pa.deviceVdsMaxV < V_MARGIN * vPk
         ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, less than 25 % below the ${pa.deviceVdsMaxV} V ` +
-          `rating; a drain clamp or a higher-rated device adds margin.`
-        : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} with margin.`,
+          `rating; a drain clamp or a higher-rated device adds margin.${ring}`
+        : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} with margin.${ring}`,
   });
   const iPk = s.worstPeakCurrent.value;
   const iWhere = where(s.worstPeakCurrent);

@@ -20,6 +20,8 @@ export interface SwrPoint {
   dissipationW: number;
   /** Output power into this load, W. */
   outputW: number;
+  /** Class B/C: the drain peak carries the ring margin (the limit cuts the current here). */
+  ringMargin?: boolean;
 }
 
 export interface Worst {
@@ -27,6 +29,8 @@ export interface Worst {
   phaseDeg: number;
   loadReOhm: number;
   loadImOhm: number;
+  /** Class B/C: the value carries the ring margin (CLIP_RING_MARGIN). */
+  ringMargin?: boolean;
 }
 
 export interface PaSwrStress {
@@ -186,6 +190,7 @@ function flatTopStress(m: MatchedPoint, z: { re: number; im: number }): Stress &
     peakDeviceA: m.peakDeviceA * currentRatio,
     dissipationW: Math.max(0, dcW - outputW) + m.biasW,
     outputW,
+    ...(ring > 1 ? { ringMargin: true } : {}),
     clipModel: 'flat-top',
   };
 }
@@ -201,6 +206,7 @@ function balancedStress(m: MatchedPoint, z: { re: number; im: number }, hb: Bala
     peakDeviceA: m.peakDeviceA * hb.peakCurrentRatio,
     dissipationW: Math.max(0, dcW - outputW) + m.biasW,
     outputW,
+    ...(ring > 1 ? { ringMargin: true } : {}),
     clipModel: 'harmonic-balance',
   };
 }
@@ -322,9 +328,12 @@ export function swrStress(
     }
     all.push({ phaseDeg, loadReOhm: designLoadOhm * zl.re, loadImOhm: designLoadOhm * zl.im, ...p });
   }
-  const pick = (key: keyof SwrPoint, sign: 1 | -1): Worst => {
+  const pick = (key: 'drainPeakV' | 'peakDeviceA' | 'dissipationW' | 'outputW', sign: 1 | -1): Worst => {
     const best = all.reduce((a, b) => (sign * (b[key] - a[key]) > 1e-12 ? b : a));
-    return { value: best[key], phaseDeg: best.phaseDeg, loadReOhm: best.loadReOhm, loadImOhm: best.loadImOhm };
+    return {
+      value: best[key], phaseDeg: best.phaseDeg, loadReOhm: best.loadReOhm, loadImOhm: best.loadImOhm,
+      ...(key === 'drainPeakV' && best.ringMargin ? { ringMargin: true } : {}),
+    };
   };
   return {
     swr,
