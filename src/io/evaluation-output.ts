@@ -278,7 +278,8 @@ function rfLines(report: EvaluationReport): string[] {
       out.push(
         `  ${st.stageName}: ${formatValue(st.pa.outputW, 'W')} out from ` +
           `${formatValue(st.pa.railV, 'V')}, key-down ` +
-          `${formatValue(st.pa.keyDownCurrentA, 'A')}, drain peak ${formatValue(st.pa.peakDrainV, 'V')}`,
+          `${formatValue(st.pa.keyDownCurrentA, 'A')} budgeted (saturated drive), ` +
+          `drain peak ${formatValue(st.pa.peakDrainV, 'V')}`,
       );
     if (st.network)
       out.push(
