@@ -212,7 +212,8 @@ export const club30m: Project = {
         windings: [
           // the 100 VA part (p-trafo-100): the supply carries the final's saturated drive, about 2 A key-down; the 70 VA
           // part's 2.5 A winding sagged the PA rail below 20 V at low mains and, through the shared primary, put the
-          // 13.8 V regulator into dropout at the tolerance corner; a tune-up carrier draws about 4.2 A RMS from 3.5 A
+          // 13.8 V regulator into dropout at the tolerance corner. A tune-up carrier (about 4.2 A RMS) is still above
+          // the 3.5 A rating: the page says keep it short
           { id: 'w-16', name: '16 V winding', ratedVrms: 16, ratedA: 1.5, regulationFraction: 0.1, resistanceOhm: null },
           { id: 'w-20', name: '20 V winding', ratedVrms: 20, ratedA: 3.5, regulationFraction: 0.08, resistanceOhm: null },
         ],
