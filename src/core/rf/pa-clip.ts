@@ -71,7 +71,9 @@ const ordinal = (n: number) => `${n}${n === 2 ? 'nd' : n === 3 ? 'rd' : 'th'}`;
 
 /** The builder's note: the best estimate at the clipping load and why the verdict keeps the upper end (harmonics whose
  * upper end is below the construction floor are left out; null when none is left). */
-export function clipEstimateFinding(all: readonly ClipEstimate[], swr: number, loadOhm: number, subject: string): Finding | null {
+export function clipEstimateFinding(
+  all: readonly ClipEstimate[], swr: number, loadOhm: number, subject: string,
+): Finding | null {
   const est = all.filter((e) => e.upperDbc >= CONSTRUCTION_FLOOR_DBC);
   if (est.length === 0) return null;
   const level = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? `is below ${CONSTRUCTION_FLOOR_DBC} dBc`
@@ -81,10 +83,10 @@ export function clipEstimateFinding(all: readonly ClipEstimate[], swr: number, l
   return {
     severity: 'ok', rule: 'pa.clip-harmonics', subject, value: est[0].estimateDbc, limit: null, unit: 'dBc',
     source: 'pa.clip-balance',
-    message: `Into the SWR ${swr} load where the stage clips most (${(swr * loadOhm).toFixed(0)} Ω, reflection phase ` +
-      `0°) the filter's input takes much of the flat top's harmonic current, so the drain stays nearer a sine: at the ` +
-      `antenna ${list} by harmonic balance against the filter (best estimate). The harmonic rows keep the ` +
-      `flat-topped drain's ${upper} as their worst end, since the output transformer's leakage inductance is not ` +
-      'modelled; a measurement into a mismatched dummy load settles it.',
+    message: `Into the SWR ${swr} load where the stage clips most (${(swr * loadOhm).toFixed(0)} Ω, reflection ` +
+      `phase 0°) the filter's input takes much of the flat top's harmonic current, so the drain stays nearer a ` +
+      `sine: at the antenna ${list} by harmonic balance against the filter (best estimate). The harmonic rows ` +
+      `keep the flat-topped drain's ${upper} as their worst end, since the output transformer's leakage inductance ` +
+      'is not modelled; a measurement into a mismatched dummy load settles it.',
   };
 }

@@ -63,8 +63,9 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   const vPk = clamped ? c.clampV! : s.worstDrainPeak.value;
   // class B/C at a clipping load: the peak includes the margin for the drain's ring (pa-swr CLIP_RING_MARGIN)
   const ring = s.worstDrainPeak.ringMargin && s.clip
-    ? ` The ${clamped ? 'unclamped ' : ''}peak includes a ${Math.round(s.clip.ringMargin * 100)} % margin for the drain's ring where the stage ` +
-      'clips (the harmonic voltages and the transformer\'s leakage carry it past twice the supply).' : '';
+    ? ` The ${clamped ? 'unclamped ' : ''}peak includes a ${Math.round(s.clip.ringMargin * 100)} % margin for the ` +
+      'drain\'s ring where the stage clips (the harmonic voltages and the transformer\'s leakage carry it past ' +
+      'twice the supply).' : '';
   const vWhere = `${where(s.worstDrainPeak)}${clamped ? ` (held there by the ${c.clampV} V drain clamp; ${s.worstDrainPeak.value.toFixed(1)} V without it)` : ''}`;
   f.push({
     severity: pa.deviceVdsMaxV < vPk ? 'fail' : pa.deviceVdsMaxV < V_MARGIN * vPk ? 'caution' : 'ok',
@@ -76,7 +77,8 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
       : pa.deviceVdsMaxV < V_MARGIN * vPk
         ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, less than 25 % below the ${pa.deviceVdsMaxV} V ` +
           `rating; a drain clamp or a higher-rated device adds margin.${ring}`
-        : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} with margin.${ring}`,
+        : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} ` +
+          `with margin.${ring}`,
   });
   const iPk = s.worstPeakCurrent.value;
   const iWhere = where(s.worstPeakCurrent);

@@ -195,7 +195,9 @@ function flatTopStress(m: MatchedPoint, z: { re: number; im: number }): Stress &
   };
 }
 
-function balancedStress(m: MatchedPoint, z: { re: number; im: number }, hb: Balance): Stress & { clipModel: ClipModel } {
+function balancedStress(
+  m: MatchedPoint, z: { re: number; im: number }, hb: Balance,
+): Stress & { clipModel: ClipModel } {
   // Source: P = |I1|^2 Re(Z)/2 = P0 (I1/I1,0)^2 Re(z) (load line); DC input = supply x the devices' mean current,
   // its ratio to the design's from the balanced waveform (energy balance)
   const outputW = m.outputW * hb.currentRatio ** 2 * z.re;

@@ -10,9 +10,10 @@ const B = Math.PI / 2;
 const short = () => ({ re: 0, im: 0 });
 
 describe('clipBalance', () => {
-  it('below the limit (z = 0.5 + j0.3, harmonics capacitive): class B push-pull drives a sinusoid, load line unchanged', () => {
+  it('below the limit (z = 0.5 + j0.3, harmonics capacitive): class B push-pull, a sinusoid, the load line', () => {
     // a − b of alternate half-sine pulses is a pure sinusoid: no harmonic current, swing |z| = √(0.34) (load line)
-    const b = clipBalance({ topology: 'push-pull', thetaRad: B, z: { re: 0.5, im: 0.3 }, zAt: () => ({ re: 0, im: -0.3 }) });
+    const zAt = () => ({ re: 0, im: -0.3 });
+    const b = clipBalance({ topology: 'push-pull', thetaRad: B, z: { re: 0.5, im: 0.3 }, zAt });
     expect(b.converged).toBe(true);
     near(b.currentRatio, 1, 1e-9, 'I1');
     near(b.dcRatio, 1, 1e-9, 'DC');
@@ -20,7 +21,7 @@ describe('clipBalance', () => {
     // the peak read from 128 samples a period: at most 1 − cos(π/128) = 3e-4 low
     near(b.swingPeak, Math.sqrt(0.34), 3.1e-4 * Math.sqrt(0.34), 'swing');
   });
-  it('harmonics shorted, z = 2: V1 = 1/cos τ = |z| (1 − (2/π)(τ + sin τ cos τ)) (notch of width 2τ, Fourier series)', () => {
+  it('harmonics shorted, z = 2: V1 = 1/cos τ = |z| (1 − (2/π)(τ + sin τ cos τ)) (notch of width 2τ)', () => {
     // Source: the drain voltage is V1 cos ωt (no harmonic voltage); the devices carry no current where it exceeds the
     // limit, |ωt| < τ with cos τ = 1/V1; the notch removes (2/π)(τ + sin τ cos τ) of the unit fundamental (Fourier
     // coefficient of cos ωt over |ωt| < τ, both half periods; derivation, no published source). Solved by bisection.
@@ -42,7 +43,7 @@ describe('clipBalance', () => {
       expect(b.peakCurrentRatio).toBeLessThan(1);
     }
   });
-  it('harmonics open (100 x the design load), class B push-pull, z = 2: the square wave, I1 = (4/π)/2, V3/V1 = 1/3', () => {
+  it('harmonics open (100 x the design load), class B push-pull, z = 2: square wave, I1 = (4/π)/2, V3/V1 = 1/3', () => {
     // Source: Fourier series of the square wave, 4/(nπ) (textbook): the drive's sinusoid exceeds the limit over the
     // whole half period, so the drain is held there; 1 %, 0.2 dB (3rd) and 0.5 dB (5th) for the finite harmonic
     // impedance, the knee and the 31 harmonics carried
@@ -54,9 +55,10 @@ describe('clipBalance', () => {
   });
   it('a start from a nearby load reaches the same solution', () => {
     const zAt = (n: number) => ({ re: 0, im: -0.4 / n });
-    const a = clipBalance({ topology: 'push-pull', thetaRad: (75 * Math.PI) / 180, z: { re: 1.9, im: 0.2 }, zAt });
-    const b = clipBalance({ topology: 'push-pull', thetaRad: (75 * Math.PI) / 180, z: { re: 2, im: 0 }, zAt, start: a.samples });
-    const c = clipBalance({ topology: 'push-pull', thetaRad: (75 * Math.PI) / 180, z: { re: 2, im: 0 }, zAt });
+    const base = { topology: 'push-pull' as const, thetaRad: (75 * Math.PI) / 180, zAt };
+    const a = clipBalance({ ...base, z: { re: 1.9, im: 0.2 } });
+    const b = clipBalance({ ...base, z: { re: 2, im: 0 }, start: a.samples });
+    const c = clipBalance({ ...base, z: { re: 2, im: 0 } });
     expect(b.converged && c.converged).toBe(true);
     near(b.currentRatio, c.currentRatio, 1e-6, 'I1');
     near(b.swingPeak, c.swingPeak, 1e-6, 'swing');

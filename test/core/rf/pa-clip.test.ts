@@ -64,7 +64,7 @@ describe('evaluateRf folds the clipped class-C push-pull stage into the harmonic
   });
 });
 
-describe('clipEstimates: the balanced drain harmonic through the filter from a stiff source, beside the flat top', () => {
+describe('clipEstimates: the balanced drain harmonic through the filter from a stiff source, by the flat top', () => {
   const folded: HarmonicBand[] = [
     { n: 2, bestDbc: -60, worstDbc: -30, basis: 'push-pull-imbalance' },
     { n: 3, bestDbc: -50, worstDbc: -2.905, basis: 'clipped-at-swr' },

@@ -175,13 +175,15 @@ describe('push-pull class D in evaluatePa: the ring in the drain rating check', 
 });
 
 describe('class B/C drain-rating finding names the ring margin it carries', () => {
+  const proj = { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 };
   it('at SWR 2 the finding says the peak includes the 12 % ring margin (common practice, CLIP_RING_MARGIN)', () => {
-    const r = evaluatePa(paParams({ amplifierClass: 'C' }), 13.8, { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 }, 'PA', { worstSwr: 2 });
+    const r = evaluatePa(paParams({ amplifierClass: 'C' }), 13.8, proj, 'PA', { worstSwr: 2 });
     expect(r.swr!.worstDrainPeak.ringMargin).toBe(true);
-    expect(r.findings.find((x) => x.rule === 'pa.vds')?.message).toMatch(/peak includes a 12 % margin for the drain's ring/);
+    const msg = r.findings.find((x) => x.rule === 'pa.vds')?.message;
+    expect(msg).toMatch(/peak includes a 12 % margin for the drain's ring/);
   });
   it('at SWR 1 no load clips: no margin, no sentence', () => {
-    const r = evaluatePa(paParams({ amplifierClass: 'C' }), 13.8, { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 }, 'PA', { worstSwr: 1 });
+    const r = evaluatePa(paParams({ amplifierClass: 'C' }), 13.8, proj, 'PA', { worstSwr: 1 });
     expect(r.swr!.worstDrainPeak.ringMargin).toBeUndefined();
     expect(r.findings.find((x) => x.rule === 'pa.vds')?.message).not.toMatch(/ring/);
   });
