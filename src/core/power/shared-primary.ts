@@ -291,13 +291,19 @@ export function simulateSharedPrimary(input: JointInput, options: { searchKey?: 
   if (held) return held;
   const circuitKey = warm ? key(input, false) : '';
   // the same transformer at another mains voltage (another corner): its state scaled to this one's no-load peaks
-  const familyKey = warm ? key({ ...input, primaryVrms: 0, windings: input.windings.map((w) => ({ ...w, secondaryVrms: 0 })) }, false) : '';
+  const family = { ...input, primaryVrms: 0, windings: input.windings.map((w) => ({ ...w, secondaryVrms: 0 })) };
+  const familyKey = warm ? key(family, false) : '';
   const searchKey = warm && options.searchKey !== undefined ? `search\u0000${options.searchKey}` : null;
-  const start = warm?.get(circuitKey) ?? warm?.get(familyKey) ?? (searchKey !== null ? warm?.get(searchKey) : undefined);
+  const loads = Float64Array.from(input.windings, (w) => w.loadA);
+  const own = warm?.get(circuitKey);
+  const start = (own && alongLoads(own, loads)) ?? warm?.get(familyKey)
+    ?? (searchKey !== null ? warm?.get(searchKey) : undefined);
   const result = simulateUncached(input, start, (w) => {
-    warm?.set(circuitKey, w);
-    warm?.set(familyKey, w);
-    if (searchKey !== null) warm?.set(searchKey, w);
+    // the state before, kept one deep: two states of one circuit give the line a third load starts on
+    const kept: Warm = { ...w, loads, prev: own ? { ...own, prev: undefined } : undefined };
+    warm?.set(circuitKey, kept);
+    warm?.set(familyKey, kept);
+    if (searchKey !== null) warm?.set(searchKey, kept);
   });
   memo?.set(exact, result);
   return result;
@@ -309,6 +315,31 @@ interface Warm {
   jac: number[][];
   /** The no-load peaks it was found at (V), to scale it to another mains voltage. */
   top: Float64Array;
+  /** The winding loads it was found at (A) and the same circuit's state before it, if any. */
+  loads?: Float64Array;
+  prev?: Warm;
+}
+
+/**
+ * A start for `loads` from the circuit's last two states: the line through them, at the projection of the new loads
+ * on the step between theirs (the fixed-point passes move the PA's load a little each time; the reservoirs' voltages
+ * follow it almost linearly). The last state when there is no line. A start only: the search stops on its tolerance.
+ */
+function alongLoads(last: Warm, loads: Float64Array): Warm {
+  const before = last.prev;
+  if (!before?.loads || !last.loads || before.x.length !== last.x.length) return last;
+  if (last.loads.length !== loads.length || before.loads.length !== loads.length) return last;
+  let dd = 0;
+  let dn = 0;
+  for (let i = 0; i < loads.length; i++) {
+    const step = last.loads[i] - before.loads[i];
+    dd += step * step;
+    dn += (loads[i] - last.loads[i]) * step;
+  }
+  const t = dn / dd;
+  if (!(dd > 0) || !Number.isFinite(t)) return last;
+  const x = Float64Array.from(last.x, (v, i) => Math.min(last.top[i], Math.max(0, v + t * (v - before.x[i]))));
+  return { ...last, x };
 }
 
 const freshStats = (m: number): Stats => ({
@@ -321,8 +352,8 @@ function simulateUncached(input: JointInput, start?: Warm, onSteady?: (w: Warm) 
   const m = cir.ws.length;
   const maxCycles = input.maxCycles ?? 200;
   const wk: Work = {
-    v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), c: new Float64Array(m), on: new Uint8Array(m),
-    jn: new Float64Array(m),
+    v: new Float64Array(m), j: new Float64Array(m), a: new Float64Array(m), c: new Float64Array(m),
+    on: new Uint8Array(m), jn: new Float64Array(m),
   };
   const top = Float64Array.from(cir.ws.map((w) => w.noLoadV));
   const tol = 1e-5 * Math.max(1, ...top);

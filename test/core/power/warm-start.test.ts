@@ -84,6 +84,41 @@ describe('warm-started joint transformer simulation', () => {
   });
 });
 
+describe('warm-started joint transformer simulation across fixed-point passes', () => {
+  const diode = { diodeDropV: 0.9, diodeResistanceOhm: 0.03, esrOhm: 0.03 };
+  // a signal winding and a PA winding whose load moves a little each pass (the PA's current follows its rail)
+  const pass = (paA: number): JointInput => ({
+    primaryVrms: 207, primaryOhm: 6, primaryH: 0.02, frequencyHz: 50,
+    windings: [
+      { ...diode, topology: 'bridge', secondaryVrms: 15.5, ownOhm: 0.6, ownH: 1e-4, capacitanceF: 4700e-6, loadA: 0.5 },
+      {
+        ...diode, topology: 'bridge', secondaryVrms: 19.5, ownOhm: 0.3, ownH: 1e-4, capacitanceF: 10000e-6,
+        loadA: paA,
+      },
+    ],
+  });
+
+  it('a third load started on the line through the last two states matches a cold start, in no more cycles', () => {
+    for (const [a, b, x] of [[2.2, 2.1, 2.05], [2.0, 2.1, 2.3], [2.5, 2.4, 0.3]] as const) {
+      const cold = simulateSharedPrimary(pass(x));
+      const warm = withSimulationMemo(() => {
+        simulateSharedPrimary(pass(a));
+        simulateSharedPrimary(pass(b));
+        return simulateSharedPrimary(pass(x));
+      });
+      // the search stops when every |P(x) - x| < 1e-5 x the largest no-load peak (shared-primary.ts)
+      const toleranceV = 2 * 1e-5 * 19.5 * Math.SQRT2;
+      const what = `${x} A after ${a} and ${b} A`;
+      expect(warm.converged && cold.converged).toBe(true);
+      for (const r of [0, 1]) {
+        expect(Math.abs(warm.rails[r].troughV - cold.rails[r].troughV), what).toBeLessThan(toleranceV);
+        expect(Math.abs(warm.rails[r].dcMeanV - cold.rails[r].dcMeanV), what).toBeLessThan(toleranceV);
+      }
+      expect(warm.cycles, what).toBeLessThanOrEqual(cold.cycles);
+    }
+  });
+});
+
 describe('the plotted corner\'s first recorded cycle is the search\'s converged cycle', () => {
   // the waveform's first cycle is taken from the last cycle of the steady-state search (same start voltage), not
   // simulated again: its statistics must be exactly those of the same corner simulated without a waveform
