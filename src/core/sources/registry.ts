@@ -341,7 +341,7 @@ export const SOURCES = {
       `coefficient); classes B and C held at their drive current until the swing reaches the supply, then (when the ` +
       `low-pass filter is known) solved by harmonic balance of each device as a current source that gives way at its ` +
       `saturation drop against the filter's input impedance at each harmonic (circuit theory; ngspice agrees within ` +
-      `3 % in power), else the drain flat-topped at the rails (the upper end), and a 12 % margin on the drain peak ` +
+      `3 % in power push-pull, 11 % single-ended), else the drain flat-topped at the rails (the upper end), and a 12 % margin on the drain peak ` +
       `for the ring where the limit cuts the current (${PRACTICE}; ngspice shows 10.5 % above 2 Vdd); class D at its ` +
       `square-wave voltage; conduction loss ∝ current² (${PRACTICE}); push-pull class D adds the leakage ring ` +
       `(pa.leakage-ring)`,
