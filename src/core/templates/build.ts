@@ -17,7 +17,12 @@ export interface TemplateInput {
  * The template's stages, supply tree and starter parts list for the chosen band, power and mains. A battery template
  * gets no mains; a mains template needs mains (the new-project form refuses the combination before this is called).
  */
-export function projectFromTemplate(key: TemplateKey, input: TemplateInput, id: string, makeId: (prefix: string) => string): Project {
+export function projectFromTemplate(
+  key: TemplateKey,
+  input: TemplateInput,
+  id: string,
+  makeId: (prefix: string) => string,
+): Project {
   const info = TEMPLATE_INFO[key];
   if (info.mains && !input.mains) throw new Error(`template ${key} needs a mains supply`);
   const base = newProject(id, input.name, input.frequencyHz, input.targetPowerW, info.mains ? input.mains : null);
@@ -44,7 +49,10 @@ export function projectFromTemplate(key: TemplateKey, input: TemplateInput, id: 
   };
   // fresh ids for every row, as a clone gets, so two projects from one template never share one
   const copy = cloneProject(project, id, input.name, makeId);
-  return { ...copy, bom: copy.bom.map((l) => ({ ...l, roleId: l.roleId ? renamedRole(l.roleId, idMap(project, copy)) : null })) };
+  return {
+    ...copy,
+    bom: copy.bom.map((l) => ({ ...l, roleId: l.roleId ? renamedRole(l.roleId, idMap(project, copy)) : null })),
+  };
 }
 
 /** Old id -> new id of every transformer, rail and stage (the clone keeps their order). */

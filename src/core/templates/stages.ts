@@ -6,7 +6,14 @@ import { defaultLpfParams } from '../new-project';
 
 const perMode = (receive: number, keyUp: number, keyDown: number): PerMode => ({ receive, keyUp, keyDown });
 
-const stage = (id: string, kind: Stage['kind'], name: string, notes: string, railId: string | null, current: PerMode): Stage => ({
+const stage = (
+  id: string,
+  kind: Stage['kind'],
+  name: string,
+  notes: string,
+  railId: string | null,
+  current: PerMode,
+): Stage => ({
   id,
   kind,
   name,
@@ -16,14 +23,34 @@ const stage = (id: string, kind: Stage['kind'], name: string, notes: string, rai
 });
 
 export const receiver = (railId: string) =>
-  stage('st-rx', 'receiver', 'Direct-conversion receiver', 'Mixer, audio preamp, CW filter and 1 W audio amplifier.', railId,
-    perMode(0.055, 0.012, 0.012));
+  stage(
+    'st-rx',
+    'receiver',
+    'Direct-conversion receiver',
+    'Mixer, audio preamp, CW filter and 1 W audio amplifier.',
+    railId,
+    perMode(0.055, 0.012, 0.012),
+  );
 export const vxo = (railId: string) =>
-  stage('st-vxo', 'vxo', 'Crystal VXO', 'Crystal oscillator pulled by a variable capacitor, buffered.', railId, perMode(0.018, 0.018, 0.018));
+  stage(
+    'st-vxo',
+    'vxo',
+    'Crystal VXO',
+    'Crystal oscillator pulled by a variable capacitor, buffered.',
+    railId,
+    perMode(0.018, 0.018, 0.018),
+  );
 export const driver = (railId: string) =>
   stage('st-drv', 'driver', 'Driver', 'Keyed broadband driver.', railId, perMode(0, 0.06, 0.16));
 export const keyer = (railId: string) =>
-  stage('st-keyer', 'other', 'Keyer and sidetone', 'Keyer with sidetone into the audio amplifier.', railId, perMode(0.008, 0.012, 0.012));
+  stage(
+    'st-keyer',
+    'other',
+    'Keyer and sidetone',
+    'Keyer with sidetone into the audio amplifier.',
+    railId,
+    perMode(0.008, 0.012, 0.012),
+  );
 
 /**
  * The final's key-down DC current for the target power on a rail of `railV`: DC input = output / efficiency.
@@ -63,8 +90,14 @@ export function pushPullFinal(railId: string, keyDownA: number): Stage {
     heatsinkSharedBy: 2,
   };
   return {
-    ...stage('st-pa', 'final', 'Push-pull MOSFET final', 'Two MOSFETs on one heatsink with mica washers; output transformer ' +
-      'on a binocular core.', railId, perMode(0, 0.05, keyDownA)),
+    ...stage(
+      'st-pa',
+      'final',
+      'Push-pull MOSFET final',
+      'Two MOSFETs on one heatsink with mica washers; output transformer ' + 'on a binocular core.',
+      railId,
+      perMode(0, 0.05, keyDownA),
+    ),
     pa,
   };
 }
@@ -86,15 +119,27 @@ export function classEFinal(railId: string, keyDownA: number): Stage {
     heatsinkSharedBy: null,
   };
   return {
-    ...stage('st-pa', 'final', 'Single-ended class-E final', 'One MOSFET; shunt capacitor and series tuned circuit.', railId,
-      perMode(0, 0, keyDownA)),
+    ...stage(
+      'st-pa',
+      'final',
+      'Single-ended class-E final',
+      'One MOSFET; shunt capacitor and series tuned circuit.',
+      railId,
+      perMode(0, 0, keyDownA),
+    ),
     pa,
   };
 }
 
 export const lowPassFilter = (bandName: string): Stage => ({
-  ...stage('st-lpf', 'lpf', `${bandName} low-pass filter`.trim(), 'Filter on iron-powder toroids; C0G/silver-mica capacitors.', null,
-    perMode(0, 0, 0)),
+  ...stage(
+    'st-lpf',
+    'lpf',
+    `${bandName} low-pass filter`.trim(),
+    'Filter on iron-powder toroids; C0G/silver-mica capacitors.',
+    null,
+    perMode(0, 0, 0),
+  ),
   // seventh order: the 2nd harmonic of a push-pull final and a class-E final's harmonics need the steeper skirt
   lpf: { ...defaultLpfParams(), order: 7 },
 });
@@ -120,8 +165,14 @@ export function trRelay(coilRailId: string, dcSwitchedA: number): Stage {
     wpm: 20,
   };
   return {
-    ...stage('st-tr', 'tr', 'T/R relay and sequencer', 'Relay switches the antenna; transmit starts after the contacts settle.',
-      coilRailId, perMode(0.002, 0.004, 0.004)),
+    ...stage(
+      'st-tr',
+      'tr',
+      'T/R relay and sequencer',
+      'Relay switches the antenna; transmit starts after the contacts settle.',
+      coilRailId,
+      perMode(0.002, 0.004, 0.004),
+    ),
     relay,
   };
 }

@@ -3,7 +3,17 @@
 // key-down voltage, used only to size the final's starting current (the evaluation computes the rail itself).
 import type { BatteryRail, RectifiedRail, RegulatedRail, Stage, Supply, Winding } from '../model';
 import type { TemplateKey } from './choices';
-import { classEFinal, driver, finalKeyDownA, keyer, lowPassFilter, pushPullFinal, receiver, trRelay, vxo } from './stages';
+import {
+  classEFinal,
+  driver,
+  finalKeyDownA,
+  keyer,
+  lowPassFilter,
+  pushPullFinal,
+  receiver,
+  trRelay,
+  vxo,
+} from './stages';
 
 /** One starter parts-list line: a part of the starter catalog (parts.ts), its stage, quantity and references. */
 export interface StarterLine {
@@ -35,8 +45,16 @@ const winding = (id: string, name: string, ratedVrms: number, ratedA: number, re
   resistanceOhm: null,
 });
 
-const rectified = (id: string, name: string, windingId: string, reservoirF: number, capRatedV: number, capRippleA: number,
-  minimumV: number | null, windingFuseA: number | null = null): RectifiedRail => ({
+const rectified = (
+  id: string,
+  name: string,
+  windingId: string,
+  reservoirF: number,
+  capRatedV: number,
+  capRippleA: number,
+  minimumV: number | null,
+  windingFuseA: number | null = null,
+): RectifiedRail => ({
   kind: 'rectified',
   id,
   name,
@@ -90,7 +108,14 @@ const supply = (transformers: Supply['transformers'], rails: Supply['rails']): S
 
 const MAINS_LINES: StarterLine[] = [
   { partId: 'tp-inlet', stageId: null, qty: 1, refs: 'J1', notes: 'Earth pin bonded to the chassis' },
-  { partId: 'tp-fuse', stageId: null, qty: 3, refs: 'F1–F3', notes: 'Primary, winding and rail fuses; ratings from the supply page', role: 'fuses' },
+  {
+    partId: 'tp-fuse',
+    stageId: null,
+    qty: 3,
+    refs: 'F1–F3',
+    notes: 'Primary, winding and rail fuses; ratings from the supply page',
+    role: 'fuses',
+  },
   { partId: 'tp-bleed', stageId: null, qty: 1, refs: 'R1', role: 'bleeders' },
 ];
 const RX_LINES: StarterLine[] = [
@@ -135,8 +160,15 @@ function mainsTwoRail(bandName: string, targetPowerW: number): StationData {
         rectified('rail-pa', 'PA rail (unregulated, ~26 V)', 'w-pa', 0.0068, 50, 3.6, 20),
       ],
     ),
-    stages: [receiver('rail-sig'), vxo('rail-sig'), driver('rail-sig'), pushPullFinal('rail-pa', paA), lowPassFilter(bandName),
-      trRelay('rail-sig', 0.16), keyer('rail-sig')],
+    stages: [
+      receiver('rail-sig'),
+      vxo('rail-sig'),
+      driver('rail-sig'),
+      pushPullFinal('rail-pa', paA),
+      lowPassFilter(bandName),
+      trRelay('rail-sig', 0.16),
+      keyer('rail-sig'),
+    ],
     lines: [
       ...MAINS_LINES,
       { partId: 'tp-trafo-2', stageId: null, qty: 1, refs: 'T1', role: 'transformer:tr-1' },
@@ -180,8 +212,14 @@ function batteryPortable(bandName: string, targetPowerW: number): StationData {
   const paA = finalKeyDownA(targetPowerW, battery.nominalV, CLASS_E_EFFICIENCY);
   return {
     supply: supply([], [battery, ldo]),
-    stages: [receiver('rail-9v'), vxo('rail-9v'), driver('rail-bat'), classEFinal('rail-bat', paA), lowPassFilter(bandName),
-      trRelay('rail-bat', 0)],
+    stages: [
+      receiver('rail-9v'),
+      vxo('rail-9v'),
+      driver('rail-bat'),
+      classEFinal('rail-bat', paA),
+      lowPassFilter(bandName),
+      trRelay('rail-bat', 0),
+    ],
     lines: [
       { partId: 'tp-battery', stageId: null, qty: 1, refs: 'BT1' },
       { partId: 'tp-bladefuse', stageId: null, qty: 1, refs: 'F1', notes: 'Fit at the battery terminal' },
@@ -201,10 +239,19 @@ function singleRail(bandName: string, targetPowerW: number): StationData {
       // 17 V: with its leakage and the primary's share of the copper (the transformer simulated as one) a 16 V winding
       // left the regulator input about 0.15 V short of its margin at 120 V low mains
       [transformer('T1 mains transformer', [winding('w-1', '17 V winding', 17, 2, 0.08)])],
-      [rectified('rail-raw', 'Raw DC for the 13.8 V regulator', 'w-1', 0.0068, 50, 3.6, null), adjustable('rail-sig', '13.8 V rail', 'rail-raw', 2400)],
+      [
+        rectified('rail-raw', 'Raw DC for the 13.8 V regulator', 'w-1', 0.0068, 50, 3.6, null),
+        adjustable('rail-sig', '13.8 V rail', 'rail-raw', 2400),
+      ],
     ),
-    stages: [receiver('rail-sig'), vxo('rail-sig'), driver('rail-sig'), pushPullFinal('rail-sig', paA), lowPassFilter(bandName),
-      trRelay('rail-sig', 0.16)],
+    stages: [
+      receiver('rail-sig'),
+      vxo('rail-sig'),
+      driver('rail-sig'),
+      pushPullFinal('rail-sig', paA),
+      lowPassFilter(bandName),
+      trRelay('rail-sig', 0.16),
+    ],
     lines: [
       ...MAINS_LINES,
       { partId: 'tp-trafo-1', stageId: null, qty: 1, refs: 'T1', role: 'transformer:tr-1' },
