@@ -3,6 +3,7 @@ import type { Project } from '../core/model';
 import { MODES, MODE_LABELS } from '../core/model';
 import type { EvaluationReport } from '../core/evaluate';
 import { formatValue } from '../core/units';
+import type { Worst } from '../core/rf/pa-swr';
 import { formatMoney } from '../core/cost/money';
 import { actionable, standingCautions } from '../core/findings';
 import { isSourceKey, sourceText } from '../core/sources/registry';
@@ -270,6 +271,18 @@ function supplyLines(report: EvaluationReport): string[] {
   return out;
 }
 
+const zText = (re: number, im: number) => `${re.toFixed(1)} ${im < 0 ? '-' : '+'} j${Math.abs(im).toFixed(1)} ohm`;
+
+/** Where the worst SWR load lies: at the antenna and what the PA sees through the filter, else the PA's own load. */
+function ohmAt(w: Worst): string {
+  if (w.antennaReOhm === null || w.antennaImOhm === null) {
+    return `into ${zText(w.loadReOhm, w.loadImOhm)} (phase ${(w.phaseDeg ?? 0).toFixed(0)} deg, at the PA output)`;
+  }
+  const at = w.phaseDeg === null ? `with a matched antenna (${zText(w.antennaReOhm, w.antennaImOhm)})`
+    : `with the antenna at ${zText(w.antennaReOhm, w.antennaImOhm)} (phase ${w.phaseDeg.toFixed(0)} deg)`;
+  return `${at}, the PA seeing ${zText(w.loadReOhm, w.loadImOhm)} through the filter`;
+}
+
 function rfLines(report: EvaluationReport): string[] {
   const rf = report.rf;
   const out = ['', 'RF'];
@@ -298,10 +311,8 @@ function rfLines(report: EvaluationReport): string[] {
     const w = st.pa?.swr?.worstDrainPeak;
     if (w && st.pa?.swr && st.pa.swr.swr > 1) {
       out.push(
-        `    at SWR ${st.pa.swr.swr}: drain peak up to ${formatValue(w.value, 'V')} into ` +
-          `${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '-' : '+'}` +
-          ` j${Math.abs(w.loadImOhm).toFixed(1)} ohm (phase ${w.phaseDeg.toFixed(0)} deg), device current up to ` +
-          `${formatValue(st.pa.swr.worstPeakCurrent.value, 'A')}`,
+        `    at SWR ${st.pa.swr.swr}: drain peak up to ${formatValue(w.value, 'V')} ${ohmAt(w)}, device current ` +
+          `up to ${formatValue(st.pa.swr.worstPeakCurrent.value, 'A')}`,
       );
     }
     if (st.lpf?.design)

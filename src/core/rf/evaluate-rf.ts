@@ -125,6 +125,8 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
         source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
         frequencyHz: project.frequencyHz, insideC: ctx.insideC, filterInputOhmAt,
+        // the SWR circle at the antenna, each load through the filter as built (absent: at the PA's output)
+        ...(filterLadder ? { filterLadder } : {}),
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;

@@ -2,7 +2,7 @@
 // of the SWR circle, and an estimate of the power it takes while it conducts, into that load and into the design load.
 import type { Finding } from '../findings';
 import type { PaSwrStress, Worst } from './pa-swr';
-import { describeLoad } from './pa-swr';
+import { describeLoad, whereLoad } from './pa-swr';
 
 export interface ClampPoint {
   /** Drain peak without the clamp, V, and with it (the lower of the two), V. */
@@ -47,7 +47,8 @@ export function drainClamp(
   if (clampV === null || clampV === undefined || !(clampV > 0)) return null;
   const w = s.worstDrainPeak;
   // DC input at the worst load: all of it leaves as output or heat in the devices (energy balance)
-  const at = s.points.find((p) => p.phaseDeg === w.phaseDeg);
+  // the worst may lie with the antenna at its design load (phase null: the filter's own input there)
+  const at = w.phaseDeg === null ? s.designLoad : s.points.find((p) => p.phaseDeg === w.phaseDeg);
   const worstDcW = at ? at.outputW + at.dissipationW : Infinity;
   return {
     clampV,
@@ -80,7 +81,7 @@ export function clampFindings(c: DrainClamp, vdsMaxV: number, supplyV: number, s
         `${w(c.design.dissipationW)} key-down, power the antenna does not get. Choose a clamp above ` +
         `${v(c.design.unclampedPeakV)} and below the device rating.` });
   }
-  const where = swr > 1 ? `at SWR ${swr} into ${describeLoad(c.worstLoad)}` : 'into the design load';
+  const where = whereLoad(c.worstLoad, swr);
   if (c.worst.conductionFraction > 0 && c.design.conductionFraction === 0) {
     f.push({ ...base, severity: 'caution', value: c.worst.dissipationW, limit: null, unit: 'W',
       message: `The ${v(c.clampV)} clamp holds the drain peak ${where} to ${v(c.worst.clampedPeakV)} (it would reach ` +

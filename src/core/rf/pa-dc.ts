@@ -73,6 +73,9 @@ export function swrKeyDownCurrent(swr: PaSwrStress, biasW: number, matchedDcW: n
   const worst = swr.points.reduce((a, b) => (dcOf(b) > dcOf(a) ? b : a));
   return {
     currentA: (designCurrentA * dcOf(worst)) / matchedDcW + biasA,
-    at: { value: dcOf(worst), phaseDeg: worst.phaseDeg, loadReOhm: worst.loadReOhm, loadImOhm: worst.loadImOhm },
+    at: {
+      value: dcOf(worst), phaseDeg: worst.phaseDeg, loadReOhm: worst.loadReOhm, loadImOhm: worst.loadImOhm,
+      antennaReOhm: worst.antennaReOhm, antennaImOhm: worst.antennaImOhm,
+    },
   };
 }

@@ -1,7 +1,7 @@
 // Device-rating and heating findings of the PA at the worst load phase on the SWR circle, with protection advice.
 import type { Finding } from '../findings';
 import type { PaParams } from '../model';
-import { describeLoad, type PaSwrStress } from './pa-swr';
+import { describeLoad, whereLoad, type PaSwrStress } from './pa-swr';
 import { CLASS_E_SHUNT } from './class-e-sim';
 
 /**
@@ -57,7 +57,8 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   const f: Finding[] = [];
   const isE = s.model === 'class-e-simulated';
   const swrSource = isE ? 'pa.class-e-sim' : 'pa.swr-load-line';
-  const where = (w: PaSwrStress['worstDrainPeak']) => (s.swr <= 1 ? 'into the design load' : `at SWR ${s.swr} into ${describeLoad(w)}`);
+  // the load named at the antenna (and what the PA sees through the filter) when the circle is drawn there
+  const where = (w: PaSwrStress['worstDrainPeak']) => whereLoad(w, s.swr);
   const clamped = c.clampV != null && c.clampV > 0 && c.clampV < s.worstDrainPeak.value;
   // a fitted clamp holds the drain to its own voltage (pa-clamp.ts): the device sees the lower of the two
   const vPk = clamped ? c.clampV! : s.worstDrainPeak.value;
@@ -134,7 +135,7 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
     severity: tj !== null && tj > m.tjMaxC ? 'caution' : 'ok', rule: 'pa.swr-dissipation', subject, value: d.value,
     limit: c.matchedDissipationW, unit: 'W', source: swrSource,
     message: `Key-down dissipation rises to ${d.value.toFixed(1)} W${ratio !== null ? ` (${ratio.toFixed(2)} × matched)` : ''} ` +
-      `at SWR ${s.swr} into ${describeLoad(d)}` +
+      `${whereLoad(d, s.swr)}` +
       (tj === null ? '.' : `; a continuous carrier into it takes the junction to about ${tj.toFixed(0)} °C` +
         (tj > m.tjMaxC ? `, beyond its ${m.tjMaxC} °C maximum: tune at reduced power into a mismatch.` : '.')),
   });

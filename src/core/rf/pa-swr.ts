@@ -4,14 +4,21 @@ import { simulateClassE } from './class-e-sim';
 import { clippedSineCoefficient } from './pa-fourier';
 import { clipBalance, HARMONICS, type Balance } from './pa-clip-balance';
 import type { Cx } from './lpf-analysis';
+import type { FilterLoad } from './class-e-loads';
 
 /** One load on the SWR circle, referred to the drain through an ideal transformer or network. */
 export interface SwrPoint {
-  /** Phase of the load's reflection coefficient against the design load, degrees (0 = resistive, above it). */
+  /**
+   * Phase of the load's reflection coefficient against the design load, degrees (0 = resistive, above it): of the
+   * antenna's load when the filter is known (circleAt 'antenna'), else of the PA's own load.
+   */
   phaseDeg: number;
-  /** Load at the PA's output terminals (design load x z), ohms. */
+  /** Load at the PA's output terminals (design load x z; the filter's input impedance when it is known), ohms. */
   loadReOhm: number;
   loadImOhm: number;
+  /** The antenna's load on the circle, ohms; null when the circle is placed at the PA's output (no filter known). */
+  antennaReOhm: number | null;
+  antennaImOhm: number | null;
   /** Highest drain voltage (at the highest supply), V. */
   drainPeakV: number;
   /** Peak current of one conducting device, A. */
@@ -26,16 +33,32 @@ export interface SwrPoint {
 
 export interface Worst {
   value: number;
-  phaseDeg: number;
+  /** The circle's reflection phase (at the antenna when known), degrees; null = the antenna at its design load. */
+  phaseDeg: number | null;
   loadReOhm: number;
   loadImOhm: number;
+  antennaReOhm: number | null;
+  antennaImOhm: number | null;
   /** Class B/C: the value carries the ring margin (CLIP_RING_MARGIN). */
   ringMargin?: boolean;
+}
+
+/** The stage with the antenna at its design load: the load the filter as built presents at the fundamental. */
+export interface DesignLoadPoint extends Omit<SwrPoint, 'phaseDeg'> {
+  /** SWR of that load against the PA's design load (the filter's own input SWR with a matched antenna). */
+  inputSwr: number;
 }
 
 export interface PaSwrStress {
   /** The project's worst SWR the circle is drawn for. */
   swr: number;
+  /**
+   * Where the circle is drawn: 'antenna' = at the antenna, each load through the low-pass filter as built (its input
+   * impedance at the fundamental) to the PA; 'pa-output' = at the PA's output terminals (no filter known or refused).
+   */
+  circleAt: 'antenna' | 'pa-output';
+  /** The antenna at its design load, through the filter (null without one: the PA's design load itself). */
+  designLoad: DesignLoadPoint | null;
   /** 'load-line': classes B, C, D at a complex load; 'class-e-simulated': class E by time-domain simulation. */
   model: 'load-line' | 'class-e-simulated';
   /** Class E: highest drain voltage at switch turn-on round the circle, / Vdd (0 = zero-voltage switching). */
@@ -142,7 +165,7 @@ export function loadOnCircle(swr: number, phaseDeg: number): { re: number; im: n
 }
 
 /** The stage into one normalised load z (1 = design load). */
-type Stress = Omit<SwrPoint, 'phaseDeg' | 'loadReOhm' | 'loadImOhm'>;
+type Stress = Omit<SwrPoint, 'phaseDeg' | 'loadReOhm' | 'loadImOhm' | 'antennaReOhm' | 'antennaImOhm'>;
 
 export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { re: number; im: number }): Stress {
   const mag = Math.hypot(z.re, z.im);
@@ -265,22 +288,23 @@ const SWEEPS = new Map<string, Balance[]>();
 const SWEEPS_KEPT = 32;
 
 /**
- * The stage balanced at each load of the circle (every 360/steps degrees), each load starting from the previous one's
- * waveform (continuation round the circle). Kept by the inputs, harmonic impedances to six significant figures.
+ * The stage balanced at each load in turn, each load starting from the previous one's waveform (continuation round the
+ * circle). Kept by the inputs, loads and harmonic impedances to six significant figures.
  */
-function balancedSweep(b: NonNullable<MatchedPoint['harmonics']>, swr: number, steps: number): Balance[] {
+function balancedSweep(b: NonNullable<MatchedPoint['harmonics']>, loads: readonly Cx[]): Balance[] {
   const zs: string[] = [];
   for (let n = 2; n <= HARMONICS; n++) {
     const z = b.zAt(n);
     zs.push(z.re.toPrecision(6), z.im.toPrecision(6));
   }
-  const key = [b.topology, b.thetaRad.toPrecision(9), swr, steps, ...zs].join(' ');
+  for (const z of loads) zs.push(z.re.toPrecision(6), z.im.toPrecision(6));
+  const key = [b.topology, b.thetaRad.toPrecision(9), ...zs].join(' ');
   const hit = SWEEPS.get(key);
   if (hit) return hit;
   const out: Balance[] = [];
   let start: Float64Array | undefined;
-  for (let i = 0; i < steps; i++) {
-    const hb = clipBalance({ ...b, z: loadOnCircle(swr, (360 * i) / steps), start });
+  for (const z of loads) {
+    const hb = clipBalance({ ...b, z, start });
     if (hb.converged) start = hb.samples;
     out.push(hb);
   }
@@ -300,6 +324,7 @@ const E_STEPS = 24;
  */
 export function swrStress(
   cls: PaParams['amplifierClass'], m: MatchedPoint, swr: number, designLoadOhm: number, rdsOnRatio = 0,
+  filterLoads?: (phases: number) => FilterLoad[],
 ): PaSwrStress {
   const all: SwrPoint[] = [];
   const ref = cls === 'E' ? simulateClassE(1, 0, rdsOnRatio) : null;
@@ -309,36 +334,65 @@ export function swrStress(
   let atPhase0: number[] | null = null;
   // at SWR 1 every phase is the design load: one point says it all
   const steps = swr <= 1 ? 1 : cls === 'E' || balanced ? E_STEPS : STEPS;
-  for (let i = 0; i < steps; i++) {
-    const phaseDeg = (360 * i) / steps;
-    const zl = loadOnCircle(swr, phaseDeg);
-    let p: Stress;
+  // the loads the stage meets, normalised to its design load (the transformer or network scales all alike): through
+  // the filter as built with the circle at the antenna when it is known, else the circle at the PA's output
+  const through = filterLoads ? filterLoads(steps) : null;
+  const norm = (z: Cx): Cx => ({ re: z.re / designLoadOhm, im: z.im / designLoadOhm });
+  const zs = through ? through.slice(1).map((l) => norm(l.input))
+    : Array.from({ length: steps }, (_, i) => loadOnCircle(swr, (360 * i) / steps));
+  const design = through ? norm(through[0].input) : null;
+  // each load starts from the previous one's waveform (continuation round the circle, then the design load)
+  const sweep = balanced ? balancedSweep(balanced, design ? [...zs, design] : zs) : null;
+  const stressOf = (zl: Cx, i: number): Stress => {
     if (ref) {
       const e = classEStressAt(m, zl, rdsOnRatio);
       worstTurnOn = Math.max(worstTurnOn, e.turnOnRatio);
-      p = e.stress;
-    } else if (balanced) {
-      // each load starts from the previous one's waveform (continuation round the circle)
-      const hb = balancedSweep(balanced, swr, steps)[i];
+      return e.stress;
+    }
+    if (sweep) {
+      const hb = sweep[i];
       if (!hb.converged) clipModel = 'flat-top';
       if (i === 0 && hb.converged) atPhase0 = hb.harmonicRatios;
       const { clipModel: _c, ...st } = hb.converged ? balancedStress(m, zl, hb) : flatTopStress(m, zl);
       void _c;
-      p = st;
-    } else {
-      p = stressAt(cls, m, zl);
+      return st;
     }
-    all.push({ phaseDeg, loadReOhm: designLoadOhm * zl.re, loadImOhm: designLoadOhm * zl.im, ...p });
+    return stressAt(cls, m, zl);
+  };
+  for (let i = 0; i < steps; i++) {
+    const zl = zs[i];
+    const antenna = through ? through[i + 1].antenna : null;
+    all.push({
+      phaseDeg: (360 * i) / steps, loadReOhm: designLoadOhm * zl.re, loadImOhm: designLoadOhm * zl.im,
+      antennaReOhm: antenna?.re ?? null, antennaImOhm: antenna?.im ?? null, ...stressOf(zl, i),
+    });
   }
+  let designLoad: DesignLoadPoint | null = null;
+  if (through && design) {
+    // Source: definitions of the reflection coefficient and SWR, Γ = (z − 1)/(z + 1), S = (1 + |Γ|)/(1 − |Γ|)
+    const g = Math.hypot(design.re - 1, design.im) / Math.hypot(design.re + 1, design.im);
+    designLoad = {
+      loadReOhm: designLoadOhm * design.re, loadImOhm: designLoadOhm * design.im,
+      antennaReOhm: through[0].antenna.re, antennaImOhm: through[0].antenna.im, ...stressOf(design, steps),
+      inputSwr: g < 1 ? (1 + g) / (1 - g) : Infinity,
+    };
+  }
+  // the worst of each over the circle and the design load (a filter's input need not map the antenna's design load
+  // inside the circle's worst)
+  const candidates: (Omit<SwrPoint, 'phaseDeg'> & { phaseDeg: number | null })[] = designLoad
+    ? [...all, { ...designLoad, phaseDeg: null }] : all;
   const pick = (key: 'drainPeakV' | 'peakDeviceA' | 'dissipationW' | 'outputW', sign: 1 | -1): Worst => {
-    const best = all.reduce((a, b) => (sign * (b[key] - a[key]) > 1e-12 ? b : a));
+    const best = candidates.reduce((a, b) => (sign * (b[key] - a[key]) > 1e-12 ? b : a));
     return {
       value: best[key], phaseDeg: best.phaseDeg, loadReOhm: best.loadReOhm, loadImOhm: best.loadImOhm,
+      antennaReOhm: best.antennaReOhm, antennaImOhm: best.antennaImOhm,
       ...(key === 'drainPeakV' && best.ringMargin ? { ringMargin: true } : {}),
     };
   };
   return {
     swr,
+    circleAt: through ? 'antenna' : 'pa-output',
+    designLoad,
     model: cls === 'E' ? 'class-e-simulated' : 'load-line',
     classETurnOnRatio: ref ? worstTurnOn : null,
     clip: cls === 'B' || cls === 'C'
@@ -355,9 +409,41 @@ export function swrStress(
   };
 }
 
-/** "25.0 − j 12.5 Ω (phase 240°)" for a finding. */
-export function describeLoad(w: Worst): string {
-  const sign = w.loadImOhm < 0 ? '−' : '+';
-  const z = `${w.loadReOhm.toFixed(1)} ${sign} j${Math.abs(w.loadImOhm).toFixed(1)} Ω`;
-  return `${z} (reflection phase ${w.phaseDeg.toFixed(0)}°)`;
+/** "25.0 − j12.5 Ω". */
+export function ohmText(re: number, im: number): string {
+  return `${re.toFixed(1)} ${im < 0 ? '−' : '+'} j${Math.abs(im).toFixed(1)} Ω`;
 }
+
+/** The loads of a worst case, without its value. */
+type LoadOf = Pick<Worst, 'phaseDeg' | 'loadReOhm' | 'loadImOhm' | 'antennaReOhm' | 'antennaImOhm'>;
+
+/**
+ * The load in words for a finding: with the circle at the PA's output "25.0 − j12.5 Ω (reflection phase 240°)"; at
+ * the antenna "41.0 − j12.0 Ω at the PA (antenna 63.2 + j38.1 Ω, reflection phase 30°)", or "... (antenna at
+ * its design load, 50.0 + j0.0 Ω)".
+ */
+export function describeLoad(w: LoadOf): string {
+  const z = ohmText(w.loadReOhm, w.loadImOhm);
+  if (w.antennaReOhm === null || w.antennaImOhm === null) {
+    return `${z} (reflection phase ${(w.phaseDeg ?? 0).toFixed(0)}°)`;
+  }
+  const za = ohmText(w.antennaReOhm, w.antennaImOhm);
+  return w.phaseDeg === null ? `${z} at the PA (antenna at its design load, ${za})`
+    : `${z} at the PA (antenna ${za}, reflection phase ${w.phaseDeg.toFixed(0)}°)`;
+}
+
+/**
+ * Where a worst case lies, after "reaches ... V": "at SWR 2 at the antenna, reflection phase 30° (63.2 + j38.1 Ω),
+ * where the PA sees 41.0 − j12.0 Ω"; "with the antenna at its design load (50.0 + j0.0 Ω), where the PA sees ...";
+ * with the circle at the PA's output "at SWR 2 into 25.0 − j12.5 Ω (reflection phase 240°)" or "into the design load".
+ */
+export function whereLoad(w: LoadOf, swr: number): string {
+  if (w.antennaReOhm === null || w.antennaImOhm === null) {
+    return swr <= 1 ? 'into the design load' : `at SWR ${swr} into ${describeLoad(w)}`;
+  }
+  const za = ohmText(w.antennaReOhm, w.antennaImOhm);
+  const sees = `where the PA sees ${ohmText(w.loadReOhm, w.loadImOhm)}`;
+  return w.phaseDeg === null || swr <= 1 ? `with the antenna at its design load (${za}), ${sees}`
+    : `at SWR ${swr} at the antenna, reflection phase ${w.phaseDeg.toFixed(0)}° (${za}), ${sees}`;
+}
+

@@ -7,7 +7,9 @@ import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
 import { describeLoad, swrStress, type PaSwrStress } from './pa-swr';
 import { drainHarmonicLoad } from './pa-clip-balance';
-import type { Cx } from './lpf-analysis';
+import type { Cx, Ladder } from './lpf-analysis';
+import { loadsThroughFilter } from './class-e-loads';
+import { filterLoadFindings } from './pa-filter-load';
 import { paSpectrum, switchingPowerShape, type PaSpectrum } from './pa-spectrum';
 import { bandFigures, idealEfficiency, swrKeyDownCurrent, type PaWaveformSummary } from './pa-dc';
 import { waveformFindings } from './pa-spectrum-findings';
@@ -137,6 +139,12 @@ export interface PaSupplyCorners {
    * (pa-clip-balance); absent = its drain flat-topped at the rails (the upper end).
    */
   filterInputOhmAt?: (n: number) => Cx;
+  /**
+   * The low-pass filter as built (its r0Ohm the antenna's design load): the SWR circle is then drawn at the antenna
+   * and the stage meets the filter's input impedance at the fundamental (with frequencyHz); absent = the circle at
+   * the PA's output (no filter, or its data refused).
+   */
+  filterLadder?: Ladder;
 }
 
 export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier', corners: PaSupplyCorners = {}): PaResult {
@@ -276,7 +284,9 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
         thetaRad: (pa.amplifierClass === 'B' ? 180 : spectrum.conductionAngleDeg ?? 180) * (Math.PI / 360),
         topology: pa.topology,
       } } : {}),
-  }, swrUsed, pa.loadOhm, rdsRatio);
+  }, swrUsed, pa.loadOhm, rdsRatio, corners.filterLadder && corners.frequencyHz && corners.frequencyHz > 0
+    ? (phases) => loadsThroughFilter(corners.filterLadder!, corners.frequencyHz!, swrUsed, phases) : undefined);
+  findings.push(...filterLoadFindings(swr, subject));
   const swrCurrent = swrKeyDownCurrent(swr, pa.biasIdleMaxA * hotRailV, hotDcW, band.designCurrentA, pa.biasIdleMaxA);
   if (swrCurrent && swrCurrent.currentA > keyDownCurrentA * 1.001) {
     findings.push({ severity: 'caution', rule: 'pa.swr-current', subject, value: swrCurrent.currentA, limit: keyDownCurrentA, unit: 'A', source: 'pa.waveform-dc',

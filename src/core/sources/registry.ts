@@ -346,6 +346,13 @@ export const SOURCES = {
       `square-wave voltage; conduction loss ∝ current² (${PRACTICE}); push-pull class D adds the leakage ring ` +
       `(pa.leakage-ring)`,
   },
+  'pa.filter-input-swr': {
+    status: 'practice',
+    text: `The SWR circle drawn at the antenna and each of its loads taken through the low-pass filter as built to ` +
+      `the PA, Z_in = (A Z_L + B)/(C Z_L + D) (two-port chain relations, circuit theory); a caution when the filter's ` +
+      `own input SWR with a matched antenna exceeds 1.3, where a load-line stage's power moves by more than 1 dB ` +
+      `(${PRACTICE})`,
+  },
   'pa.clip-balance': {
     status: 'design',
     text: `Harmonic balance of a class B/C stage at its clipping load, in this program: each device a current source ` +

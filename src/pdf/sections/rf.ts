@@ -6,16 +6,19 @@ import type { KeyingResult } from '../../core/rf/keying-eval';
 import { SPECTRUM_FLOOR_DBC } from '../../core/rf/keying';
 import { findingsList, fv, keyValues, notComputed } from './common';
 import { sourceText } from '../../core/sources/registry';
-import type { PaSwrStress, Worst } from '../../core/rf/pa-swr';
+import { ohmText, type PaSwrStress, type Worst } from '../../core/rf/pa-swr';
 import type { PaWaveformSummary } from '../../core/rf/pa-dc';
 import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
 import { MIN_DBC } from '../../core/rf/pa-spectrum';
 import { paOutputRows } from '../../core/rf/pa-output-rows';
 import { clampText } from '../../core/rf/pa-clamp';
 
+// the load at the antenna with its phase and what the PA sees through the filter, or the PA's load with its phase
 const loadText = (w: Worst) =>
-  `${w.loadReOhm.toFixed(1)} ${w.loadImOhm < 0 ? '−' : '+'} j${Math.abs(w.loadImOhm).toFixed(1)} Ω, phase ` +
-    `${w.phaseDeg.toFixed(0)}°`;
+  w.antennaReOhm === null || w.antennaImOhm === null
+    ? `${ohmText(w.loadReOhm, w.loadImOhm)}, phase ${(w.phaseDeg ?? 0).toFixed(0)}°`
+    : `antenna ${ohmText(w.antennaReOhm, w.antennaImOhm)}${w.phaseDeg === null ? ' (matched)' : `, phase ` +
+      `${w.phaseDeg.toFixed(0)}°`}; at the PA ${ohmText(w.loadReOhm, w.loadImOhm)}`;
 
 /** Worst drain peak, current, dissipation and the output range round the SWR circle, each with its load. */
 function swrText(s: PaSwrStress): string {
@@ -23,7 +26,12 @@ function swrText(s: PaSwrStress): string {
     `drain peak ${fv(s.worstDrainPeak.value, 'V')} (${loadText(s.worstDrainPeak)}); ` +
     `current ${fv(s.worstPeakCurrent.value, 'A')} (${loadText(s.worstPeakCurrent)}); ` +
     `dissipation ${fv(s.worstDissipation.value, 'W')} (${loadText(s.worstDissipation)}); ` +
-    `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}`
+    `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}` +
+    (s.designLoad
+      ? `; circle at the antenna through the filter as built, which presents ` +
+        `${ohmText(s.designLoad.loadReOhm, s.designLoad.loadImOhm)} to the PA with a matched antenna (input SWR ` +
+        `${s.designLoad.inputSwr.toFixed(2)})`
+      : '; circle at the PA output (no low-pass filter known)')
   );
 }
 

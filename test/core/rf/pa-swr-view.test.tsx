@@ -5,16 +5,27 @@ import { RfResults } from '../../../views/partials/rf-results';
 import { paParams, project, rfSettings } from './fixture';
 
 describe('SWR circle on the RF page', () => {
-  it('class C at SWR 2: the worst drain peak with its load and phase, the dissipation worst at 180° (25 Ω)', async () => {
-    const report = evaluateRf(project({ rf: rfSettings({ worstSwr: 2 }) }), { paRailV: { pa: 13.8 } });
-    const html = String(await (<RfResults report={report} />));
+  it('class C at SWR 2, no filter: the circle at the PA output, the dissipation worst at 180° (25 Ω)', async () => {
+    const p = project({ rf: rfSettings({ worstSwr: 2 }) });
+    p.stages = p.stages.filter((s) => s.kind !== 'lpf');
+    const html = String(await (<RfResults report={evaluateRf(p, { paRailV: { pa: 13.8 } })} />));
     expect(html).toContain('Round the SWR 2 circle');
+    expect(html).toContain('no low-pass filter known, so the circle is placed there');
     // Definition of Γ: phase 180° at SWR 2 is z = 1/2, 25 Ω on a 50 Ω load
-    expect(html).toMatch(/Most dissipation[^]*?25\.0 \+ j0\.0 Ω[^]*?180°/);
-    // with a low-pass filter the clipping loads are balanced against it, and the drain peak carries the ring margin
-    expect(html).toContain('balanced against the filter at each harmonic');
-    expect(html).toContain('12 % ring margin where it clips');
+    expect(html).toMatch(/Most dissipation[^]*?180°[^]*?25\.0 \+ j0\.0 Ω/);
   });
+  it('class C at SWR 2 with the filter: the circle at the antenna, each worst with its antenna load and the PA\'s',
+    async () => {
+      const report = evaluateRf(project({ rf: rfSettings({ worstSwr: 2 }) }), { paRailV: { pa: 13.8 } });
+      const html = String(await (<RfResults report={report} />));
+      expect(html).toContain('Round the SWR 2 circle at the antenna');
+      expect(html).toContain('Load at the antenna');
+      expect(html).toContain('Load at the PA');
+      expect(html).toMatch(/With a matched antenna the filter presents [^<]*Ω to the PA \(input SWR \d\.\d\d\)/);
+      // with a low-pass filter the clipping loads are balanced against it, and the drain peak carries the ring margin
+      expect(html).toContain('balanced against the filter at each harmonic');
+      expect(html).toContain('12 % ring margin where it clips');
+    });
   it('class E says its stress round the circle comes from the time-domain simulation', async () => {
     const p = project({ rf: rfSettings({ worstSwr: 2 }) });
     p.stages[0].pa = paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1 });
