@@ -10,7 +10,8 @@ import { DEMO_PROJECTS } from '../seed-demo/index';
 import { toProjectFile } from '../src/io/project-file';
 
 const dir = mkdtempSync(join(tmpdir(), 'rw-cli-roles-'));
-const cli = (args: string[]) => spawnSync(process.execPath, ['scripts/rigwright.mjs', ...args], { encoding: 'utf8', timeout: 60_000 });
+const cli = (args: string[]) =>
+  spawnSync(process.execPath, ['scripts/rigwright.mjs', ...args], { encoding: 'utf8', timeout: 60_000 });
 
 interface RoleJson {
   role: { id: string; label: string; requirement: string; rules: { key: string; sourceKey: string }[] };
@@ -38,16 +39,31 @@ describe('evaluate --json: design roles', () => {
       for (const r of s.role.rules) expect(typeof r.sourceKey).toBe('string'); // sources as registry text and key
     }
     const reservoir = roles.find((s) => s.role.id === 'reservoir:rail-pa')!;
-    expect(reservoir).toMatchObject({ state: 'ok', bound: [{ lineId: expect.any(String), partId: 'p-c6800' }], problems: [] });
-    expect(reservoir.role.requirement).toMatch(/^Capacitance ≥ [\d.]+ µF, Voltage ≥ [\d.]+ V, Ripple ≥ [\d.]+ A$/);
+    expect(reservoir).toMatchObject({
+      state: 'ok',
+      bound: [{ lineId: expect.any(String), partId: 'p-c6800' }],
+      problems: [],
+    });
+    expect(reservoir.role.requirement).toMatch(
+      /^Capacitance ≥ [\d.]+ µF, Voltage ≥ [\d.]+ V, Ripple ≥ [\d.]+ A$/,
+    );
   });
 
-  it('the bleeders are the one mismatch, with the reason; the generic fuse and filter-capacitor lines cannot be checked', () => {
-    expect(roles.filter((s) => s.state !== 'ok').map((s) => s.role.id)).toEqual(['fuses', 'bleeders', 'lpf-capacitors:st-lpf']);
+  it('the bleeders are the one mismatch, with the reason; the generic fuse and filter-capacitor lines cannot be ' +
+    'checked', () => {
+    expect(roles.filter((s) => s.state !== 'ok').map((s) => s.role.id)).toEqual([
+      'fuses',
+      'bleeders',
+      'lpf-capacitors:st-lpf',
+    ]);
     const short = roles.filter((s) => s.problems.some((m) => m.includes('does not meet'))).map((s) => s.role.id);
     expect(short).toEqual(['bleeders']);
     const caps = roles.find((s) => s.role.id === 'lpf-capacitors:st-lpf')!;
-    expect(caps.problems).toEqual([expect.stringMatching(/^The line C10–C14 \(Capacitor [^)]*values per RF page\) does not state capacitance, so it cannot be checked/)]);
+    expect(caps.problems).toEqual([
+      expect.stringMatching(
+        /^The line C10–C14 \(Capacitor [^)]*values per RF page\) does not state capacitance, so it cannot be checked/,
+      ),
+    ]);
     const b = roles.find((s) => s.role.id === 'bleeders')!;
     expect(b.bound[0]).toMatchObject({ refs: 'R1, R2', partId: 'p-bleed-05' });
     expect(b.problems[0]).toMatch(/^Power 500 mW does not meet at least 9\d\d mW/);
@@ -75,7 +91,9 @@ describe('evaluate (plain text): design roles', () => {
       for (const b of s.bound) expect(block).toContain(`    bound: ${b.refs ? `${b.refs}: ` : ''}${b.part}, `);
       for (const p of s.problems) expect(block).toContain(`    why: ${p}\n`);
     }
-    expect(block).toMatch(/ {2}Bleeder resistors \[CAUTION\]\n {4}needs: Resistance 2 × 2\.2 kΩ ±5 %, Power ≥ 9\d\d mW\n {4}bound: R1, R2: Resistor 2\.2 kΩ 0\.5 W metal film, 2 per rig \(line b9\)\n {4}why: Power 500 mW does not meet/);
+    expect(block).toMatch(
+      / {2}Bleeder resistors \[CAUTION\]\n {4}needs: Resistance 2 × 2\.2 kΩ ±5 %, Power ≥ 9\d\d mW\n {4}bound: R1, R2: Resistor 2\.2 kΩ 0\.5 W metal film, 2 per rig \(line b9\)\n {4}why: Power 500 mW does not meet/,
+    );
     expect(block).toContain('Unbound roles: none');
   });
 
@@ -85,7 +103,9 @@ describe('evaluate (plain text): design roles', () => {
     const f = join(dir, 'club-unbound.json');
     writeFileSync(f, toProjectFile(copy, '2026-12-01T00:00:00Z'));
     const out = cli(['evaluate', f]).stdout;
-    expect(out).toMatch(/\nUnbound roles \(1: no parts-list line is bound to them\)\n {2}Mains transformer T1 mains transformer: needs VA ≥ [\d.]+ VA, /);
+    expect(out).toMatch(
+      /\nUnbound roles \(1: no parts-list line is bound to them\)\n {2}Mains transformer T1 mains transformer: needs VA ≥ [\d.]+ VA, /,
+    );
     expect(out).not.toContain('Mains transformer T1 mains transformer [');
   });
 });

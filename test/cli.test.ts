@@ -12,7 +12,11 @@ import { hasPoppler, pagesText } from './pdf/pdf-text';
 
 const dir = mkdtempSync(join(tmpdir(), 'rw-cli-'));
 const cli = (args: string[], env: Record<string, string> = {}) =>
-  spawnSync(process.execPath, ['scripts/rigwright.mjs', ...args], { encoding: 'utf8', env: { ...process.env, ...env }, timeout: 60_000 });
+  spawnSync(process.execPath, ['scripts/rigwright.mjs', ...args], {
+    encoding: 'utf8',
+    env: { ...process.env, ...env },
+    timeout: 60_000,
+  });
 
 describe('command line', () => {
   const file = join(dir, 'club.json');
@@ -28,7 +32,9 @@ describe('command line', () => {
     expect(r.stdout).toContain('Supply design (headroom at the worst voltage corner');
     expect(r.stdout).toMatch(/Primary fuse: T\d/);
     // each harmonic is a band at the antenna, judged on its worst end
-    expect(r.stdout).toMatch(/Harmonic 3: .*-\d+\.\d dBc at the antenna \(judged on the worst end\), margin \d+\.\d dB/);
+    expect(r.stdout).toMatch(
+      /Harmonic 3: .*-\d+\.\d dBc at the antenna \(judged on the worst end\), margin \d+\.\d dB/,
+    );
     expect(r.stdout).toMatch(/Cost: build of 8 kit\(s\) USD [\d,]+\.\d\d/);
   });
 
@@ -80,7 +86,16 @@ describe('command line', () => {
       const pdf = join(dir, `pack-${part}.pdf`);
       const r = cli(['pdf', file, '--pack', part, '--out', pdf]);
       expect(r.status, r.stderr).toBe(0);
-      expect(r.stdout).toContain(`Wrote ${pdf}: ${part === 'both' ? 'Builder’s and organiser’s pack' : part === 'builder' ? 'Builder’s pack' : 'Organiser’s pack'}`);
+      expect(r.stdout).toContain(
+        `Wrote ` +
+          `${pdf}: ${
+            part === 'both'
+              ? 'Builder’s and organiser’s pack'
+              : part === 'builder'
+                ? 'Builder’s pack'
+                : 'Organiser’s pack'
+          }`,
+      );
       text[part] = pagesText(pdf).join('\n').replace(/\s+/g, ' ');
     }
     expect(text.builder).toContain('Build checklist');
@@ -174,7 +189,9 @@ describe('command line: the first hour', () => {
     const env = readEnv({});
     expect(env.databaseUrl).toBe(`file:${join(root, 'data', 'rigwright.db')}`);
     expect(env.databaseIsDefault).toBe(true);
-    expect(describeDatabase(env.databaseUrl, true)).toBe(`${join(root, 'data', 'rigwright.db')} (the default; set DATABASE_URL for another)`);
+    expect(describeDatabase(env.databaseUrl, true)).toBe(
+      `${join(root, 'data', 'rigwright.db')} (the default; set DATABASE_URL for another)`,
+    );
     expect(readEnv({ DATABASE_URL: 'file:x.db' }).databaseIsDefault).toBe(false);
   });
 
@@ -206,7 +223,11 @@ describe('command line: the first hour', () => {
     });
 
     it('a second server on the same PORT stops with one line naming PORT, not a stack trace', async () => {
-      const proc = spawnServer({ PORT: String(server.port), DATABASE_URL: `file:${join(dir, 'second.db')}`, RIGWRIGHT_NO_DEMO: 'true' });
+      const proc = spawnServer({
+        PORT: String(server.port),
+        DATABASE_URL: `file:${join(dir, 'second.db')}`,
+        RIGWRIGHT_NO_DEMO: 'true',
+      });
       let err = '';
       proc.stderr!.on('data', (d) => (err += d));
       const code = await exited(proc);

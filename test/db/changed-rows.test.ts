@@ -16,7 +16,8 @@ async function stored(change: (p: Project) => Project, prepare: (p: Project) => 
   await insertProject(d, club, NOW);
   const saved = await changeProject(d, club.id, (p) => change(structuredClone(p)), NOW);
   const read = await loadProject(d.db, club.id);
-  const rows = async (table: string) => Number((await d.client.execute(`select count(*) as n from ${table}`)).rows[0].n);
+  const rows = async (table: string) =>
+    Number((await d.client.execute(`select count(*) as n from ${table}`)).rows[0].n);
   return { saved, read, rows, club };
 }
 
@@ -30,7 +31,10 @@ describe('changed-row writes', () => {
       const [a, b] = loaded;
       stages[a] = { ...stages[a], loads: stages[a].loads.slice(0, -1) };
       const [l0, ...more] = stages[b].loads;
-      stages[b] = { ...stages[b], loads: [{ ...l0, currentA: { ...l0.currentA, receive: l0.currentA.receive + 0.001 } }, ...more] };
+      stages[b] = {
+        ...stages[b],
+        loads: [{ ...l0, currentA: { ...l0.currentA, receive: l0.currentA.receive + 0.001 } }, ...more],
+      };
       expected = { ...p, stages };
       return expected;
     });
@@ -39,15 +43,27 @@ describe('changed-row writes', () => {
 
   it('moves a winding to a new transformer, clears its resistance and drops a part with its offers', async () => {
     let expected: Project | null = null;
-    const { read, rows, club } = await stored((p) => {
-      const [first, ...rest] = p.supply.transformers;
-      const [moved, ...kept] = first.windings;
-      const fresh = { id: 'tr-new', name: 'Second transformer', construction: first.construction, windings: [{ ...moved, resistanceOhm: null }] };
-      const unused = p.parts.find((part) => !p.bom.some((b) => b.partId === part.id));
-      const parts = unused ? p.parts.filter((x) => x !== unused) : p.parts;
-      expected = { ...p, parts, supply: { ...p.supply, transformers: [{ ...first, windings: kept }, ...rest, fresh] } };
-      return expected;
-    }, (p) => void (p.supply.transformers[0].windings[0].resistanceOhm = 0.5));
+    const { read, rows, club } = await stored(
+      (p) => {
+        const [first, ...rest] = p.supply.transformers;
+        const [moved, ...kept] = first.windings;
+        const fresh = {
+          id: 'tr-new',
+          name: 'Second transformer',
+          construction: first.construction,
+          windings: [{ ...moved, resistanceOhm: null }],
+        };
+        const unused = p.parts.find((part) => !p.bom.some((b) => b.partId === part.id));
+        const parts = unused ? p.parts.filter((x) => x !== unused) : p.parts;
+        expected = {
+          ...p,
+          parts,
+          supply: { ...p.supply, transformers: [{ ...first, windings: kept }, ...rest, fresh] },
+        };
+        return expected;
+      },
+      (p) => void (p.supply.transformers[0].windings[0].resistanceOhm = 0.5),
+    );
     expect(read).toEqual({ ...expected!, version: 2 });
     expect(read!.supply.transformers.at(-1)!.windings[0].resistanceOhm).toBeNull();
     // no orphan rows: as many offers and windings stored as the project has

@@ -3,15 +3,36 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { openDatabase } from '../../src/db/client';
-import { insertProject, loadProject, updateProject, listProjects, deleteProject, VersionConflict } from '../../src/db/projects';
+import {
+  insertProject,
+  loadProject,
+  updateProject,
+  listProjects,
+  deleteProject,
+  VersionConflict,
+} from '../../src/db/projects';
 import { DEMO_PROJECTS, seedDemo } from '../../seed-demo/index';
 
 describe('migrations', () => {
   it('create every table on an empty file database, and re-running them changes nothing', async () => {
     const url = `file:${join(mkdtempSync(join(tmpdir(), 'rw-')), 'empty.db')}`;
     const first = await openDatabase(url);
-    const tables = (await first.client.execute("select name from sqlite_master where type='table' order by name")).rows.map((r) => r.name);
-    expect(tables).toEqual(expect.arrayContaining(['projects', 'transformers', 'windings', 'rails', 'stages', 'stage_loads', 'parts', 'offers', 'bom_lines']));
+    const tables = (
+      await first.client.execute("select name from sqlite_master where type='table' order by name")
+    ).rows.map((r) => r.name);
+    expect(tables).toEqual(
+      expect.arrayContaining([
+        'projects',
+        'transformers',
+        'windings',
+        'rails',
+        'stages',
+        'stage_loads',
+        'parts',
+        'offers',
+        'bom_lines',
+      ]),
+    );
     first.close();
     const again = await openDatabase(url);
     expect((await listProjects(again.db)).length).toBe(0);
@@ -41,7 +62,9 @@ describe('project repository', () => {
     const id = DEMO_PROJECTS[0].id;
     const saved = await updateProject(d, id, 1, (p) => ({ ...p, name: 'First tab' }), 'y');
     expect(saved.version).toBe(2);
-    await expect(updateProject(d, id, 1, (p) => ({ ...p, name: 'Second tab' }), 'z')).rejects.toBeInstanceOf(VersionConflict);
+    await expect(updateProject(d, id, 1, (p) => ({ ...p, name: 'Second tab' }), 'z')).rejects.toBeInstanceOf(
+      VersionConflict,
+    );
     expect((await loadProject(d.db, id))!.name).toBe('First tab');
   });
 

@@ -10,7 +10,11 @@ export async function demoApp(opts: { seed?: boolean; accessSecret?: string } = 
   if (opts.seed !== false) await seedDemo(database, '2026-12-01T00:00:00.000Z');
   const app = buildApp({ database, now: () => new Date('2026-12-01T12:00:00Z'), accessSecret: opts.accessSecret });
   const post = (path: string, form: Record<string, string>, headers: Record<string, string> = {}) =>
-    app.request(`${ORIGIN}${path}`, { method: 'POST', body: new URLSearchParams(form), headers: { Origin: ORIGIN, 'Content-Type': 'application/x-www-form-urlencoded', ...headers } });
+    app.request(`${ORIGIN}${path}`, {
+      method: 'POST',
+      body: new URLSearchParams(form),
+      headers: { Origin: ORIGIN, 'Content-Type': 'application/x-www-form-urlencoded', ...headers },
+    });
   const get = (path: string, headers: Record<string, string> = {}) => app.request(`${ORIGIN}${path}`, { headers });
   return { app, database, post, get };
 }

@@ -15,7 +15,16 @@ export async function launchBrowser(): Promise<{ context: BrowserContext; close:
   const dir = mkdtempSync(join(tmpdir(), 'rigwright-chromium-'));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: CHROMIUM_PATH,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
     acceptDownloads: true,
     viewport: { width: 1280, height: 900 },
     timeout: 60_000,
@@ -56,14 +65,18 @@ export async function openSession(): Promise<BrowserSession> {
   const problems: string[] = [];
   page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
   // a refused form answers 409/422 on purpose; Chromium logs that as a failed resource load
-  page.on('console', (m) => m.type() === 'error' && !/status of 4(09|22)/.test(m.text()) && problems.push(`console: ${m.text()}`));
+  page.on(
+    'console',
+    (m) => m.type() === 'error' && !/status of 4(09|22)/.test(m.text()) && problems.push(`console: ${m.text()}`),
+  );
   const downloads = mkdtempSync(join(tmpdir(), 'rigwright-dl-'));
   return {
     server,
     page,
     problems,
     downloads,
-    markPage: () => page.evaluate(() => ((window as unknown as { __rigwrightMarker: string }).__rigwrightMarker = 'still-here')),
+    markPage: () =>
+      page.evaluate(() => ((window as unknown as { __rigwrightMarker: string }).__rigwrightMarker = 'still-here')),
     marker: () => page.evaluate(() => (window as unknown as { __rigwrightMarker?: string }).__rigwrightMarker),
     close: async () => {
       await browser.close();

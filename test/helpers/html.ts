@@ -50,7 +50,12 @@ export function forms(html: string): HtmlForm[] {
       if (chosen) fields[name] = attr(chosen[1], 'value') ?? '';
       types[name] = 'select';
     }
-    out.push({ action: attr(m[1], 'action') ?? '', method: (attr(m[1], 'method') ?? 'get').toLowerCase(), fields, types });
+    out.push({
+      action: attr(m[1], 'action') ?? '',
+      method: (attr(m[1], 'method') ?? 'get').toLowerCase(),
+      fields,
+      types,
+    });
   }
   return out;
 }

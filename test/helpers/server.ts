@@ -39,13 +39,26 @@ export interface RunningServer {
 /** Environment for the child without anything that would change its behaviour by accident. */
 export function childEnv(extra: Record<string, string | undefined>): NodeJS.ProcessEnv {
   const env: NodeJS.ProcessEnv = { ...process.env };
-  for (const k of ['PORT', 'HOST', 'DATABASE_URL', 'DATABASE_AUTH_TOKEN', 'RIGWRIGHT_SECRET', 'RIGWRIGHT_NO_DEMO', 'NODE_OPTIONS']) delete env[k];
+  for (const k of [
+    'PORT',
+    'HOST',
+    'DATABASE_URL',
+    'DATABASE_AUTH_TOKEN',
+    'RIGWRIGHT_SECRET',
+    'RIGWRIGHT_NO_DEMO',
+    'NODE_OPTIONS',
+  ])
+    delete env[k];
   for (const [k, v] of Object.entries(extra)) if (v !== undefined) env[k] = v;
   return env;
 }
 
 export function spawnServer(env: Record<string, string | undefined>): ChildProcess {
-  return spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], { cwd: REPO_ROOT, env: childEnv(env), stdio: ['ignore', 'pipe', 'pipe'] });
+  return spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], {
+    cwd: REPO_ROOT,
+    env: childEnv(env),
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
 }
 
 export function exited(proc: ChildProcess): Promise<number | null> {
@@ -86,7 +99,8 @@ async function startIn(opts: ServerOptions, ownDir: string | null): Promise<Runn
   const url = `http://${probeHost}:${port}`;
   const deadline = Date.now() + (opts.readyTimeoutMs ?? 60_000);
   for (;;) {
-    if (proc.exitCode !== null || proc.signalCode !== null) throw new Error(`server exited (${proc.exitCode ?? proc.signalCode}) before it was ready:\n${out}`);
+    if (proc.exitCode !== null || proc.signalCode !== null)
+      throw new Error(`server exited (${proc.exitCode ?? proc.signalCode}) before it was ready:\n${out}`);
     try {
       const res = await fetch(`${url}/healthz`, { headers: opts.authHeader ? { Authorization: opts.authHeader } : {} });
       if (res.ok) break;

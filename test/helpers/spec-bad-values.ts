@@ -14,7 +14,8 @@ export function badTexts(f: Field): [string, string][] {
     if (Number.isFinite(f.max)) out.push([si(f.max * 2 + 1), 'above the maximum']);
     if (Number.isFinite(f.min)) out.push([si(f.min - Math.max(1, Math.abs(f.min))), 'below the minimum']);
     if (f.exclusiveMin) out.push([si(f.min), 'at an exclusive minimum']);
-    if (f.exclusiveMin && f.min === 0) out.push([`5e-324${unit && unit !== '%' ? ' ' + unit : ''}`, 'a subnormal above zero']);
+    if (f.exclusiveMin && f.min === 0)
+      out.push([`5e-324${unit && unit !== '%' ? ' ' + unit : ''}`, 'a subnormal above zero']);
     // money is typed in the major unit (1.5 = 150 cents): a part of a cent is what it cannot hold
     if (f.money) out.push(['0.125', 'part of a cent']);
     else if (f.integer) out.push([String(Math.max(f.min, 0) + 1.5), 'not whole']);

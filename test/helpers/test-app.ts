@@ -17,7 +17,9 @@ export interface TestApp {
   close: () => void;
 }
 
-export async function makeApp(opts: { accessSecret?: string; demo?: boolean; db?: OpenOptions } = {}): Promise<TestApp> {
+export async function makeApp(
+  opts: { accessSecret?: string; demo?: boolean; db?: OpenOptions } = {},
+): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'rigwright-app-'));
   const dbPath = join(dir, 'test.db');
   const database = await openDatabase(`file:${dbPath}`, undefined, opts.db);
@@ -35,7 +37,12 @@ export async function makeApp(opts: { accessSecret?: string; demo?: boolean; db?
 }
 
 /** A same-origin form post (the csrf() middleware wants an Origin header). */
-export function postForm(app: TestApp['app'], path: string, fields: Record<string, string>, headers: Record<string, string> = {}) {
+export function postForm(
+  app: TestApp['app'],
+  path: string,
+  fields: Record<string, string>,
+  headers: Record<string, string> = {},
+) {
   return app.request(path, {
     method: 'POST',
     headers: { Origin: ORIGIN, 'Content-Type': 'application/x-www-form-urlencoded', ...headers },
@@ -45,7 +52,10 @@ export function postForm(app: TestApp['app'], path: string, fields: Record<strin
 
 /** Row counts of every user table: the fingerprint that shows nothing was written. */
 export async function rowCounts(database: Database): Promise<Record<string, number>> {
-  const tables = await database.client.execute("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name NOT LIKE '__drizzle%' ORDER BY name");
+  const tables = await database.client.execute(
+    "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name NOT LIKE '__drizzle%' " +
+      "ORDER BY name",
+  );
   const out: Record<string, number> = {};
   for (const row of tables.rows) {
     const name = String(row.name);

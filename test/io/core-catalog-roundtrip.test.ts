@@ -29,7 +29,10 @@ describe('core catalog round trips', () => {
   it('project file: exported and imported unchanged; a bad core value is refused with its place and field', () => {
     // the battery demo (no mains transformer) with its filter on its first catalog core
     const base = DEMO_PROJECTS[1];
-    const p = { ...base, stages: base.stages.map((s) => (s.lpf ? { ...s, lpf: { ...s.lpf, coreId: base.cores![0].id } } : s)) };
+    const p = {
+      ...base,
+      stages: base.stages.map((s) => (s.lpf ? { ...s, lpf: { ...s.lpf, coreId: base.cores![0].id } } : s)),
+    };
     const text = toProjectFile(p, '2026-01-01T00:00:00Z');
     const r = parseProjectFile(text);
     expect(r.ok, JSON.stringify(r)).toBe(true);

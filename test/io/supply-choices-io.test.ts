@@ -21,8 +21,15 @@ const chosen: Project = {
     enclosureUWPerM2K: 5.5,
     rails: club30m.supply.rails.map((r) =>
       r.kind === 'rectified' && r.id === 'rail-pa'
-        ? { ...r, bridgeMount: { thetaJcKPerW: 2.2, thetaCsKPerW: 0.5, thetaSaKPerW: 5, tjMaxC: 150 }, bridgeFreeAirKPerW: 22 }
-        : r.kind === 'regulated' ? { ...r, outputF: 100e-6, bleederOhm: 1000, bleederRatedW: 0.25 } : r),
+        ? {
+            ...r,
+            bridgeMount: { thetaJcKPerW: 2.2, thetaCsKPerW: 0.5, thetaSaKPerW: 5, tjMaxC: 150 },
+            bridgeFreeAirKPerW: 22,
+          }
+        : r.kind === 'regulated'
+          ? { ...r, outputF: 100e-6, bleederOhm: 1000, bleederRatedW: 0.25 }
+          : r,
+    ),
   },
 };
 
@@ -47,7 +54,9 @@ describe('supply choices and rail inputs travel with the project', () => {
     expect(old.ok && old.project.supply.primaryFuseSheet === undefined).toBe(true);
   });
   it('a file with a fuse type outside the sheets is refused, naming the place', () => {
-    const text = toProjectFile(chosen, '2026-01-01T00:00:00Z').replace('"primaryFuseSheet": "T5"', '"primaryFuseSheet": "X9"').replace('"primaryFuseSheet":"T5"', '"primaryFuseSheet":"X9"');
+    const text = toProjectFile(chosen, '2026-01-01T00:00:00Z')
+      .replace('"primaryFuseSheet": "T5"', '"primaryFuseSheet": "X9"')
+      .replace('"primaryFuseSheet":"T5"', '"primaryFuseSheet":"X9"');
     const res = parseProjectFile(text);
     expect(res.ok).toBe(false);
     if (!res.ok) expect(res.errors.join(' ')).toContain('primaryFuseSheet');
@@ -56,7 +65,8 @@ describe('supply choices and rail inputs travel with the project', () => {
 
 describe('results in the JSON and the pack', () => {
   const report = evaluate(chosen);
-  it('JSON: per rectified rail its rectifier heat, per regulated rail its output bleeder, the choices and the air used', () => {
+  it('JSON: per rectified rail its rectifier heat, per regulated rail its output bleeder, the choices and the air ' +
+    'used', () => {
     const json = JSON.parse(JSON.stringify(evaluationJson(chosen, report)));
     const pa = json.supply.rails.find((r: { railId: string }) => r.railId === 'rail-pa');
     expect(pa.bridgeThermal).toMatchObject({ basis: 'tune-up', inside: true, heatsinkFitted: true, assumed: false });
@@ -67,13 +77,16 @@ describe('results in the JSON and the pack', () => {
     expect(json.supply.thermalAmbient.inside).toBe(true);
     expect(json.supply.primary.inrush.sheet).toBe('T5');
   });
-  it.skipIf(!hasPoppler)('pack: the rectifier heat, the output bleeder, the fuse type and the sizing basis', async () => {
-    const bytes = await buildPack(chosen, report, { paper: 'a4', dataDate: '2026-11-28' });
-    const text = pagesText(writeTemp(bytes, 'pack.pdf')).join('\n').replace(/\s+/g, ' ');
-    expect(text).toContain('Rectifier heat');
-    expect(text).toContain('inside the box at');
-    expect(text).toContain('Output bleeder');
-    expect(text).toContain('IEC 60127-2 sheet 5');
-    expect(text).toContain('sized for tune-up');
-  });
+  it.skipIf(!hasPoppler)(
+    'pack: the rectifier heat, the output bleeder, the fuse type and the sizing basis',
+    async () => {
+      const bytes = await buildPack(chosen, report, { paper: 'a4', dataDate: '2026-11-28' });
+      const text = pagesText(writeTemp(bytes, 'pack.pdf')).join('\n').replace(/\s+/g, ' ');
+      expect(text).toContain('Rectifier heat');
+      expect(text).toContain('inside the box at');
+      expect(text).toContain('Output bleeder');
+      expect(text).toContain('IEC 60127-2 sheet 5');
+      expect(text).toContain('sized for tune-up');
+    },
+  );
 });

@@ -17,7 +17,11 @@ function close(a: number, b: number, what: string) {
 
 /** A demo project whose stage loads get random currents (0..5 A) on random rails. */
 const randomised = fc
-  .tuple(fc.constantFrom(...DEMO_PROJECTS.map((_, i) => i)), fc.array(fc.double({ min: 0, max: 5, noNaN: true }), { minLength: 300, maxLength: 300 }), fc.array(fc.nat(), { minLength: 100, maxLength: 100 }))
+  .tuple(
+    fc.constantFrom(...DEMO_PROJECTS.map((_, i) => i)),
+    fc.array(fc.double({ min: 0, max: 5, noNaN: true }), { minLength: 300, maxLength: 300 }),
+    fc.array(fc.nat(), { minLength: 100, maxLength: 100 }),
+  )
   .map(([which, currents, picks]) => {
     const p: Project = structuredClone(DEMO_PROJECTS[which]);
     let c = 0;
@@ -48,13 +52,19 @@ describe('budget: totals equal the sum of their parts', () => {
     );
   });
 
-  it("a rail's regulator current is the sum of its children's input currents; every entered load is counted once", () => {
+  it("a rail's regulator current is the sum of its children's input currents; every entered load is counted " +
+    "once", () => {
     fc.assert(
       fc.property(randomised, (p) => {
         const b = computeBudget(p);
         for (const r of b.rails) {
           const kids = b.rails.filter((x) => x.parentId === r.railId);
-          for (const m of MODES) close(r.regulatorsA[m], kids.reduce((s, k) => s + (k.inputA?.[m] ?? 0), 0), `${r.name} regulators ${m}`);
+          for (const m of MODES)
+            close(
+              r.regulatorsA[m],
+              kids.reduce((s, k) => s + (k.inputA?.[m] ?? 0), 0),
+              `${r.name} regulators ${m}`,
+            );
         }
         for (const m of MODES) {
           const entered = p.stages.flatMap((s) => s.loads).reduce((s, l) => s + l.currentA[m], 0);

@@ -33,7 +33,14 @@ const simInput = fc.record({
 type SimArgs = Omit<RectifierSimInput, 'load'> & { loadA: number };
 const sim = (x: SimArgs, capacitanceF = x.capacitanceF, esrOhm = x.esrOhm) => {
   const { loadA, ...rest } = x;
-  return simulateRectifier({ ...rest, capacitanceF, esrOhm, load: { kind: 'current', currentA: loadA }, stepsPerCycle: 600, waveformPoints: 0 });
+  return simulateRectifier({
+    ...rest,
+    capacitanceF,
+    esrOhm,
+    load: { kind: 'current', currentA: loadA },
+    stepsPerCycle: 600,
+    waveformPoints: 0,
+  });
 };
 
 /** How many generated cases got past the preconditions (a property that checked nothing would fail). */
@@ -57,9 +64,19 @@ describe('supply models', () => {
     );
     expect(checked.ripple).toBeGreaterThanOrEqual(75);
   });
-  it('the seed-13 case: with ESR 0 the ripple follows I/(2 f C) and falls with C; with ESR/C scaling it falls too', () => {
-    const x: SimArgs = { topology: 'bridge', secondaryVrms: 19.38984292775598, windingResistanceOhm: 0.05, frequencyHz: 60,
-      diodeDropV: 0.5, diodeResistanceOhm: 0.01, capacitanceF: 0.022, esrOhm: 0.1739322120493293, loadA: 0.02112981091906292 };
+  it('the seed-13 case: with ESR 0 the ripple follows I/(2 f C) and falls with C; with ESR/C scaling it falls ' +
+    'too', () => {
+    const x: SimArgs = {
+      topology: 'bridge',
+      secondaryVrms: 19.38984292775598,
+      windingResistanceOhm: 0.05,
+      frequencyHz: 60,
+      diodeDropV: 0.5,
+      diodeResistanceOhm: 0.01,
+      capacitanceF: 0.022,
+      esrOhm: 0.1739322120493293,
+      loadA: 0.02112981091906292,
+    };
     const factor = 5;
     // Source: textbook ripple of a full-wave capacitor-input rectifier, Vpp = I / (2 f C) (REFERENCE-VALUES §4.1)
     const textbookV = (c: number) => x.loadA / (2 * x.frequencyHz * c);
@@ -71,11 +88,34 @@ describe('supply models', () => {
   });
 
   it('higher mains never lowers the no-load voltage, nor the loaded DC voltage', () => {
-    const winding: Winding = { id: 'w', name: 'secondary', ratedVrms: 18, ratedA: 2, regulationFraction: 0.1, resistanceOhm: null };
+    const winding: Winding = {
+      id: 'w',
+      name: 'secondary',
+      ratedVrms: 18,
+      ratedA: 2,
+      regulationFraction: 0.1,
+      resistanceOhm: null,
+    };
     const rail = (topology: RectifiedRail['topology'], reservoirF: number): RectifiedRail => ({
-      kind: 'rectified', id: 'r', name: 'rail', windingId: 'w', topology, diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF, esrOhm: 0.05,
-      bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0.5, fuseA: null, minimumV: null,
-      windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: null,
+      kind: 'rectified',
+      id: 'r',
+      name: 'rail',
+      windingId: 'w',
+      topology,
+      diodeDropV: 0.9,
+      diodeResistanceOhm: 0.03,
+      reservoirF,
+      esrOhm: 0.05,
+      bleederOhm: null,
+      capacitorRatedV: null,
+      capacitorRippleA: null,
+      ripplePpTargetV: null,
+      marginV: 0.5,
+      fuseA: null,
+      minimumV: null,
+      windingFuseA: null,
+      windingFuseSheet: 'T3',
+      bleederRatedW: null,
     });
     fc.assert(
       fc.property(
@@ -87,7 +127,10 @@ describe('supply models', () => {
         (topology, lowFactor, step, loadA, c) => {
           const r = rail(topology, c);
           const lo = simulateRectifier({ ...simInputFor(r, winding, 50, lowFactor, loadA, 600), waveformPoints: 0 });
-          const hi = simulateRectifier({ ...simInputFor(r, winding, 50, lowFactor + step, loadA, 600), waveformPoints: 0 });
+          const hi = simulateRectifier({
+            ...simInputFor(r, winding, 50, lowFactor + step, loadA, 600),
+            waveformPoints: 0,
+          });
           expect(hi.noLoadPeakV).toBeGreaterThanOrEqual(lo.noLoadPeakV);
           fc.pre(lo.converged && hi.converged);
           checked.mains++;
@@ -109,17 +152,39 @@ describe('filter models', () => {
         fc.double({ min: 0.01, max: 1, noNaN: true }),
         fc.double({ min: 1.0001, max: 20, noNaN: true }),
         (response, order, rippleDb, omega) => {
-          expect(prototypeLossDb(response, order + 1, rippleDb, omega)).toBeGreaterThanOrEqual(prototypeLossDb(response, order, rippleDb, omega) - toleranceDb);
+          expect(prototypeLossDb(response, order + 1, rippleDb, omega)).toBeGreaterThanOrEqual(
+            prototypeLossDb(response, order, rippleDb, omega) - toleranceDb,
+          );
         },
       ),
       propertyOptions(SEED, 2000), // fixed seed
     );
   });
 
-  it('synthesised ladder: order n + 2 attenuates at least as much as order n above 1.3 x cutoff (ideal values, and with finite Q)', () => {
-    const params = (response: LpfParams['response'], order: number, rippleDb: number, form: LpfParams['form'], cutoffHz: number): LpfParams => ({
-      response, rippleDb, order, form, cutoffHz, capacitorSeries: 'E12', allowParallelPairs: true, coreAlHPerTurn2: 4.9e-9, coreName: 'test core',
-      inductorQ: 150, capacitorQ: 1000, capacitorTolerance: 0.05, inductorTolerance: 0.05, monteCarloTrials: 0, seed: 1,
+  it('synthesised ladder: order n + 2 attenuates at least as much as order n above 1.3 x cutoff (ideal values, and ' +
+    'with finite Q)', () => {
+    const params = (
+      response: LpfParams['response'],
+      order: number,
+      rippleDb: number,
+      form: LpfParams['form'],
+      cutoffHz: number,
+    ): LpfParams => ({
+      response,
+      rippleDb,
+      order,
+      form,
+      cutoffHz,
+      capacitorSeries: 'E12',
+      allowParallelPairs: true,
+      coreAlHPerTurn2: 4.9e-9,
+      coreName: 'test core',
+      inductorQ: 150,
+      capacitorQ: 1000,
+      capacitorTolerance: 0.05,
+      inductorTolerance: 0.05,
+      monteCarloTrials: 0,
+      seed: 1,
     });
     fc.assert(
       fc.property(
@@ -138,7 +203,10 @@ describe('filter models', () => {
           for (const lossless of [true, false]) {
             const la = pointAt(ladderOf(a.value, 'ideal', lossless), f).lossDb;
             const lb = pointAt(ladderOf(b.value, 'ideal', lossless), f).lossDb;
-            expect(lb, `${response} ${form} order ${order}->${order + 2} at ${ratio.toFixed(2)} fc, lossless ${lossless}`).toBeGreaterThanOrEqual(la - toleranceDb);
+            expect(
+              lb,
+              `${response} ${form} order ${order}->${order + 2} at ${ratio.toFixed(2)} fc, lossless ${lossless}`,
+            ).toBeGreaterThanOrEqual(la - toleranceDb);
           }
         },
       ),

@@ -14,14 +14,17 @@ const PLAIN_UNITS = ['°C', 'K/W', 'dB', '%', ''] as const;
 
 /** Positive doubles spread over decades: 10^e x mantissa. */
 const positive = (minExp: number, maxExp: number) =>
-  fc.tuple(fc.integer({ min: minExp, max: maxExp }), fc.double({ min: 1, max: 10, noNaN: true, maxExcluded: true })).map(([e, m]) => m * 10 ** e);
+  fc
+    .tuple(fc.integer({ min: minExp, max: maxExp }), fc.double({ min: 1, max: 10, noNaN: true, maxExcluded: true }))
+    .map(([e, m]) => m * 10 ** e);
 
 function roundTrips(x: number, unit: string) {
   const text = formatInput(x, unit);
   const back = parseValue(text, unit);
   if (!back.ok) throw new Error(`${x} ${unit} -> "${text}" does not parse: ${back.message}`);
   const rel = Math.abs(back.value - x) / x;
-  if (!(rel <= toleranceRelative)) throw new Error(`${x} ${unit} -> "${text}" -> ${back.value} (relative error ${rel})`);
+  if (!(rel <= toleranceRelative))
+    throw new Error(`${x} ${unit} -> "${text}" -> ${back.value} (relative error ${rel})`);
 }
 
 describe('units: formatInput then parseValue', () => {
@@ -41,7 +44,8 @@ describe('units: formatInput then parseValue', () => {
 
   it('round-trips the decade edges exactly where the prefix changes (999.9995 m -> 1 k boundaries)', () => {
     for (const unit of PREFIXED_UNITS)
-      for (let e = -12; e <= 9; e += 3) for (const m of [0.99949, 0.9995, 0.99951, 1, 1.0000049]) roundTrips(m * 10 ** e, unit);
+      for (let e = -12; e <= 9; e += 3)
+        for (const m of [0.99949, 0.9995, 0.99951, 1, 1.0000049]) roundTrips(m * 10 ** e, unit);
   });
 
   it('reads back what formatValue shows (3 significant digits) within 3 significant digits', () => {
