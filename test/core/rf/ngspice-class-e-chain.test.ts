@@ -125,7 +125,7 @@ describe.skipIf(!haveNgspice)('class E + low-pass filter in ngspice vs the progr
   }
 });
 
-describe.skipIf(!haveNgspice)('class E + low-pass filter: the SWR circle at the antenna, program sweep vs ngspice', () => {
+describe.skipIf(!haveNgspice)('class E + low-pass filter: the circle at the antenna, program sweep vs ngspice', () => {
   // the program's own sweep (evaluatePa with the filter known): the circle drawn at the antenna, each load through the
   // filter to the stage; ngspice with the same antenna load behind the same (lossless) filter
   const dd = designLpf(lpfParams({ inductorQ: 10000, capacitorQ: 100000 }), F0);
