@@ -3,9 +3,11 @@
 import { MODES, type Project, type PerMode } from './model';
 import { computeBudget, type BudgetReport, type ComputedLoad } from './budget';
 import { sortFindings, type Finding } from './findings';
-import { designSupply, designedSourceRails, evaluateSupply, supplyInAir } from './power/evaluate-supply';
+import {
+  designPass, designSupply, designedSourceRails, evaluateSupply, supplyInAir, type PassRail,
+} from './power/evaluate-supply';
 import { withSimulationMemo } from './power/rectifier-sim';
-import type { SupplyReport } from './power/report-types';
+import type { RailReport, SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
 import { paHeatAhead } from './thermal/pa-heat';
 import { withSupplyVoltages } from './budget-voltages';
@@ -45,8 +47,9 @@ export interface EvaluateOptions {
   reference?: boolean;
 }
 
-/** What the fixed-point passes read of a supply report: its rails. */
-type PassSupply = Pick<SupplyReport, 'rails'>;
+/** What the fixed-point passes read of a supply report: its rails (a rectified rail's corners and no-load peak, a
+ *  battery's voltages), from a finished report or from designPass. */
+type PassSupply = { rails: readonly (RailReport | PassRail)[] };
 
 /** Voltage a PA sees per rail: the supply's nominal-mains key-down trough when simulated, else the budget's nominal. */
 function paRailVoltages(project: Project, budget: BudgetReport, supply: PassSupply | null): Record<string, number> {
@@ -194,11 +197,13 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
     // the passes read only these corners: the others, and the reservoir and winding searches, run once, below
     last = { outputA: railOutputs(budget), highMainsOutputA: railOutputs(budgetHigh) };
     const passOptions = { highMainsOutputA: last.highMainsOutputA, searches: false, cornerIds: LOOP_CORNERS };
-    // the passes read only the rectified and battery rails' reports: the design's, unless a number there is not
-    // finite (then the finished report, whose safety net zeroes it); the reference path finishes every pass
-    const designedPass = options.reference ? null : designSupply(project, last.outputA, passOptions);
+    // the passes read only the source rails' corners and voltages: the design's simulations alone (designPass),
+    // unless a number there is not finite; then the design's rail reports, unless a number there is not finite; then
+    // the finished report, whose safety net zeroes it. The reference path finishes every pass.
+    const lite = options.reference ? null : designPass(project, last.outputA, passOptions);
+    const designedPass = options.reference || lite ? null : designSupply(project, last.outputA, passOptions);
     const sourceRails = designedPass && designedSourceRails(designedPass);
-    const passSupply: PassSupply = sourceRails ? { rails: sourceRails }
+    const passSupply: PassSupply = lite ? { rails: lite } : sourceRails ? { rails: sourceRails }
       : designedPass ? supplyInAir(designedPass) : evaluateSupply(project, last.outputA, passOptions);
     const next = paRailVoltages(project, budget, passSupply);
     const nextLow = lowestInputV(project, passSupply);

@@ -4,9 +4,12 @@ import type { Finding } from '../findings';
 import { sortFindings } from '../findings';
 import type { BatteryRail, Mains, PerMode, Project, RectifiedRail, RegulatedRail, Transformer, Winding } from '../model';
 import { MODES, MODE_LABELS } from '../model';
-import type { BatteryRailReport, CornerSpec, PrimaryReport, RailReport, SupplyReport, TransformerReport, WindingRecommendation } from './report-types';
+import type {
+  BatteryRailReport, CornerSpec, PrimaryReport, RailReport, RectifiedRailReport, ReservoirReport, SupplyReport,
+  TransformerReport, WindingRecommendation,
+} from './report-types';
 import { DEFAULT_TRANSMIT_FRACTION, WORST_VOLTAGE_ID, cornerCurrent, cornerSpecs, mainsFactor, safeDuty } from './corners';
-import { evaluateRectifiedRail } from './rectified-rail';
+import { evaluateRectifiedRail, railCorners, type RectifiedContext } from './rectified-rail';
 import { resultScope } from './rectifier-sim';
 import type { RailVoltage } from './regulated-rail';
 import { evaluateRegulatedRail } from './regulated-rail';
@@ -44,7 +47,17 @@ export interface SupplyOptions {
   cornerIds?: readonly string[];
   /** Air inside the enclosure (°C) when its rise is known: the ambient of the rectifier and regulator checks. */
   insideC?: number;
+  /** designSupply only (designPass): rectified rails get their corners and no more, in `passRails`. */
+  cornersOnly?: boolean;
 }
+
+/**
+ * What evaluate()'s fixed-point passes read of a source rail: a rectified rail's corners and high-mains no-load peak,
+ * a battery rail's report.
+ */
+export type PassRail =
+  | (Pick<RectifiedRailReport, 'kind' | 'railId' | 'corners'> & { reservoir: Pick<ReservoirReport, 'noLoadPeakHighV'> })
+  | BatteryRailReport;
 
 const ZERO: PerMode = { receive: 0, keyUp: 0, keyDown: 0 };
 const FALLBACK_MAINS: Mains = { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 };
@@ -96,6 +109,8 @@ export interface DesignedSupply {
   windingRecs: ReadonlyMap<string, WindingRecommendation[]>;
   usedWindings: ReadonlyMap<string, string[]>;
   joints: ReadonlyMap<string, TransformerJoint>;
+  /** With `cornersOnly`: each designed rectified rail's corners and no-load peak (its report is not made). */
+  passRails: ReadonlyMap<string, PassRail>;
   simulations: number;
   allConverged: boolean;
 }
@@ -168,6 +183,7 @@ export function designSupply(
   const rootBattery = new Map<string, boolean>();
   const windingRecs = new Map<string, WindingRecommendation[]>();
   const usedWindings = new Map<string, string[]>();
+  const passRails = new Map<string, PassRail>();
   let simulations = 0;
   let allConverged = true;
 
@@ -188,12 +204,22 @@ export function designSupply(
     const wt = windings.get(rail.windingId) ?? null;
     usedWindings.set(rail.windingId, [...(usedWindings.get(rail.windingId) ?? []), rail.name]);
     const req = requirement(rail.marginV, childrenOf(rail.id), rail.minimumV ?? null);
-    const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), {
+    const ctx: RectifiedContext = {
       mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
       standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
       highMainsOutputA: highBudget(rail.id), searches: options.searches, sizing: choices.transformerSizing,
       joint: wt ? joints.get(wt.t.id)?.voltages.get(rail.id) : undefined,
-    });
+    };
+    if (options.cornersOnly) {
+      // the same simulations in the same order; the rest of the rail's design is left out (designPass)
+      const c = railCorners(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), ctx);
+      simulations += c.simulations;
+      allConverged = allConverged && c.allConverged;
+      const reservoir = { noLoadPeakHighV: c.highNoLoad };
+      passRails.set(rail.id, { kind: 'rectified', railId: rail.id, corners: c.corners, reservoir });
+      continue;
+    }
+    const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), ctx);
     if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
     simulations += ev.simulations;
     allConverged = allConverged && ev.allConverged;
@@ -239,7 +265,7 @@ export function designSupply(
   return {
     project, railOutputA, options, choices, inputs, duty, txFraction, mainsOk, specs, globalFindings, noBudget,
     undesigned, reports, voltageAt, maxV, rootBattery, falls, windingRecs, usedWindings, joints, simulations,
-    allConverged,
+    allConverged, passRails,
   };
 }
 
@@ -251,6 +277,25 @@ function supplyInputs(supply: Project['supply']): ReturnType<typeof checkSupplyI
   const inputs = checkSupplyInputs(supply);
   memo?.set('last', { of: supply, inputs });
   return inputs;
+}
+
+/**
+ * The source rails as a fixed-point pass reads them (PassRail): the design's simulations, in the same order and with
+ * the same inputs as designSupply's, without the rest of each rectified rail's design (reservoir, bleeder, fuses,
+ * findings: about a third of a pass). Null when a number in them is not finite: the caller then designs the pass in
+ * full (designSupply, its simulations memo hits) and reads it as before, so what a pass reads is the same either way.
+ */
+export function designPass(
+  project: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {},
+): PassRail[] | null {
+  const d = designSupply(project, railOutputA, { ...options, cornersOnly: true });
+  const out = project.supply.rails.flatMap((r): PassRail[] => {
+    const lite = d.passRails.get(r.id);
+    if (lite) return [lite];
+    const rep = d.reports.get(r.id);
+    return rep?.kind === 'battery' ? [rep] : [];
+  });
+  return allFinite(out) ? out : null;
 }
 
 /**

@@ -70,9 +70,21 @@ export function simInputFor(rail: RectifiedRail, winding: Winding, frequencyHz: 
   };
 }
 
-export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | null, transformer: Transformer | null, outputA: PerMode, ctx: RectifiedContext): RectifiedEvaluation {
-  const findings: Finding[] = [];
-  const recommendations: Recommendation[] = [];
+/** A rail's corners as simulated (the part of its design evaluate()'s fixed-point passes read). */
+export interface RailCorners {
+  corners: RectifiedCorner[];
+  sims: Map<string, RectifierSimResult>;
+  simulations: number;
+  allConverged: boolean;
+  /** Highest no-load peak of the high-mains corners (V). */
+  highNoLoad: number;
+}
+
+/** Simulate every corner of `ctx.specs` (each rail's own simulation; volts from the joint one where it ran). */
+export function railCorners(
+  rail: RectifiedRail, winding: Winding | null, transformer: Transformer | null, outputA: PerMode,
+  ctx: RectifiedContext,
+): RailCorners {
   const ids = worstIds(true);
   let simulations = 0;
   let allConverged = true;
@@ -97,10 +109,20 @@ export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | nu
     const volts = j ? { ...j, aloneTroughV: r.troughV } : {};
     return { ...spec, label, loadA, ...summary, ...volts, headroomMarginV: (j?.troughV ?? r.troughV) - ctx.requiredMinV };
   });
+  const highNoLoad = Math.max(0, ...corners.filter((c) => c.mains === 'high').map((c) => c.noLoadPeakV));
+  return { corners, sims, simulations, allConverged, highNoLoad };
+}
+
+export function evaluateRectifiedRail(rail: RectifiedRail, winding: Winding | null, transformer: Transformer | null, outputA: PerMode, ctx: RectifiedContext): RectifiedEvaluation {
+  const findings: Finding[] = [];
+  const recommendations: Recommendation[] = [];
+  const ids = worstIds(true);
+  const simulated = railCorners(rail, winding, transformer, outputA, ctx);
+  const { corners, sims, allConverged, highNoLoad } = simulated;
+  let simulations = simulated.simulations;
   const worst = corners.find((c) => c.id === ids.voltage) ?? corners[0];
   const thermal = corners.find((c) => c.id === ids.thermal) ?? corners[0];
   const tuneUp = corners.find((c) => c.id === ids.tuneUp) ?? corners[0];
-  const highNoLoad = Math.max(0, ...corners.filter((c) => c.mains === 'high').map((c) => c.noLoadPeakV));
   const source = 'design.simulation' as const;
 
   if (!winding) {
