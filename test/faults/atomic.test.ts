@@ -20,7 +20,13 @@ const makeId = (prefix: string) => `${prefix}-atomic-${++n}`;
 function bigProject() {
   const p = structuredClone(DEMO_PROJECTS[0]);
   const base = p.parts.slice();
-  for (let k = 0; k < 20; k++) for (const part of base) p.parts.push({ ...structuredClone(part), id: `${part.id}-x${k}`, offers: part.offers.map((o) => ({ ...o, id: `${o.id}-x${k}` })) });
+  for (let k = 0; k < 20; k++)
+    for (const part of base)
+      p.parts.push({
+        ...structuredClone(part),
+        id: `${part.id}-x${k}`,
+        offers: part.offers.map((o) => ({ ...o, id: `${o.id}-x${k}` })),
+      });
   return p;
 }
 
@@ -34,7 +40,8 @@ describe('import is all-or-nothing', () => {
     expect(await rowCounts(t.database)).toEqual(before);
   });
 
-  it('a file whose last part is invalid is refused, naming the place; nothing of the earlier parts is saved', async () => {
+  it('a file whose last part is invalid is refused, naming the place; nothing of the earlier parts is ' +
+    'saved', async () => {
     const before = await rowCounts(t.database);
     const p = bigProject();
     const last = p.parts.length - 1;
@@ -45,13 +52,17 @@ describe('import is all-or-nothing', () => {
     expect(await rowCounts(t.database)).toEqual(before);
   });
 
-  it('a file that passes validation but fails while being written (two transformers share an id) leaves no rows', async () => {
+  it('a file that passes validation but fails while being written (two transformers share an id) leaves no ' +
+    'rows', async () => {
     const before = await rowCounts(t.database);
     const projectsBefore = (await listProjects(t.database.db)).length;
     const p = bigProject();
     // the duplicate sits after the project row is written, so a non-transactional insert would leave rows
     const tr = p.supply.transformers[0];
-    p.supply.transformers.push({ ...structuredClone(tr), windings: tr.windings.map((w) => ({ ...w, id: `${w.id}-second` })) });
+    p.supply.transformers.push({
+      ...structuredClone(tr),
+      windings: tr.windings.map((w) => ({ ...w, id: `${w.id}-second` })),
+    });
     const res = await postForm(t.app, '/import', { json: file(p) });
     // (today this answers 500: the file check does not look for duplicate transformer ids; the point here is
     // that the failed write leaves nothing behind)
@@ -63,10 +74,21 @@ describe('import is all-or-nothing', () => {
 });
 
 describe('parts-list CSV import is all-or-nothing unless asked for the good rows', () => {
-  const csv = ['Refs,Description,Quantity,Supplier,Price,Currency', 'R81,Resistor 1k 0.25 W,2,Plain Parts Co,0.05,USD', 'R82,Resistor 2k2 0.25 W,lots,Plain Parts Co,0.05,USD', 'R83,Resistor 4k7 0.25 W,1,Plain Parts Co,0.05,USD'].join('\r\n');
+  const csv = [
+    'Refs,Description,Quantity,Supplier,Price,Currency',
+    'R81,Resistor 1k 0.25 W,2,Plain Parts Co,0.05,USD',
+    'R82,Resistor 2k2 0.25 W,lots,Plain Parts Co,0.05,USD',
+    'R83,Resistor 4k7 0.25 W,1,Plain Parts Co,0.05,USD',
+  ].join('\r\n');
   const importCsv = async (extra: Record<string, string>) => {
     const version = (await loadProject(t.database.db, 'demo-portable-20m'))!.version;
-    return postForm(t.app, '/projects/demo-portable-20m/bom/import', { csv, action: 'import', version: String(version), stageId: '', ...extra });
+    return postForm(t.app, '/projects/demo-portable-20m/bom/import', {
+      csv,
+      action: 'import',
+      version: String(version),
+      stageId: '',
+      ...extra,
+    });
   };
 
   it('a file with a bad row in the middle imports nothing and says so', async () => {
@@ -101,7 +123,10 @@ describe('clone is all-or-nothing', () => {
     expect(await loadProject(t.database.db, 'prj-atomic-clone')).toBeNull();
     expect(await rowCounts(t.database)).toEqual(before);
     // and nothing of the copy's other children was left behind under their new ids
-    const stray = await t.database.client.execute({ sql: 'SELECT count(*) AS n FROM stages WHERE id = ?', args: [copy.stages[0].id] });
+    const stray = await t.database.client.execute({
+      sql: 'SELECT count(*) AS n FROM stages WHERE id = ?',
+      args: [copy.stages[0].id],
+    });
     expect(Number(stray.rows[0].n)).toBe(0);
   });
 
@@ -109,7 +134,10 @@ describe('clone is all-or-nothing', () => {
     const source = (await loadProject(t.database.db, 'demo-club-30m'))!;
     const bad = cloneProject(source, 'demo-club-30m', 'Duplicate project id', makeId);
     const good = cloneProject(source, 'prj-atomic-good', 'Clone that works', makeId);
-    const [r1, r2] = await Promise.allSettled([insertProject(t.database, bad, '2026-01-01T00:00:00Z'), insertProject(t.database, good, '2026-01-01T00:00:00Z')]);
+    const [r1, r2] = await Promise.allSettled([
+      insertProject(t.database, bad, '2026-01-01T00:00:00Z'),
+      insertProject(t.database, good, '2026-01-01T00:00:00Z'),
+    ]);
     expect(r1.status).toBe('rejected');
     expect(r2.status).toBe('fulfilled');
     const stored = (await loadProject(t.database.db, 'prj-atomic-good'))!;

@@ -53,7 +53,10 @@ describe('a write that meets a lock held by another process', () => {
     expect(await loadProject(t.database.db, ID)).toEqual(stored);
 
     // a change another process commits now is what the next page shows (no connection kept an old snapshot)
-    await holder.execute({ sql: 'UPDATE projects SET name = ?, version = version + 1 WHERE id = ?', args: ['Renamed elsewhere', ID] });
+    await holder.execute({
+      sql: 'UPDATE projects SET name = ?, version = version + 1 WHERE id = ?',
+      args: ['Renamed elsewhere', ID],
+    });
     const fresh = await t.app.request(`http://localhost/projects/${ID}/rf`);
     expect(fresh.status).toBe(200);
     expect(await fresh.text()).toContain('Renamed elsewhere');

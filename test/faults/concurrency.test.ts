@@ -27,12 +27,17 @@ const post = (f: HtmlForm, version: number, keyUp: string, htmx = false) =>
   fetch(server.url + f.action, {
     method: 'POST',
     redirect: 'manual',
-    headers: { Origin: server.url, 'Content-Type': 'application/x-www-form-urlencoded', ...(htmx ? { 'HX-Request': 'true' } : {}) },
+    headers: {
+      Origin: server.url,
+      'Content-Type': 'application/x-www-form-urlencoded',
+      ...(htmx ? { 'HX-Request': 'true' } : {}),
+    },
     body: new URLSearchParams({ ...f.fields, version: String(version), l0_keyUp: keyUp }),
   });
 
 describe('concurrent edits', () => {
-  it('of several edits of the same field sent at once with the same version, exactly one is saved; the others get 409', async () => {
+  it('of several edits of the same field sent at once with the same version, exactly one is saved; the others get ' +
+    '409', async () => {
     const [f] = await loadsForms();
     const version = Number(f.fields.version);
     // bare numbers: the current boxes are in mA, and the page shows a stored value back the same way
@@ -52,7 +57,8 @@ describe('concurrent edits', () => {
     expect(refused).toContain(`name="version" value="${version + 1}"`);
   });
 
-  it('clients editing different stages from forms of the same version all get their edits in, one version step each', async () => {
+  it('clients editing different stages from forms of the same version all get their edits in, one version step ' +
+    'each', async () => {
     const stageForms = await loadsForms();
     const start = Number(stageForms[0].fields.version);
     const clients = 4;

@@ -14,9 +14,14 @@ async function tableCounts(dbPath: string): Promise<{ counts: Record<string, num
   const client = createClient({ url: `file:${dbPath}` });
   try {
     const integrity = String((await client.execute('PRAGMA integrity_check')).rows[0][0]);
-    const tables = await client.execute("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name NOT LIKE '__drizzle%'");
+    const tables = await client.execute(
+      "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name NOT LIKE '__drizzle%'",
+    );
     const counts: Record<string, number> = {};
-    for (const r of tables.rows) counts[String(r.name)] = Number((await client.execute(`SELECT count(*) AS n FROM "${String(r.name)}"`)).rows[0].n);
+    for (const r of tables.rows)
+      counts[String(r.name)] = Number(
+        (await client.execute(`SELECT count(*) AS n FROM "${String(r.name)}"`)).rows[0].n,
+      );
     return { counts, integrity };
   } finally {
     client.close();
@@ -32,7 +37,8 @@ function importBody(server: RunningServer, json: string) {
   });
 }
 
-const diff = (a: Record<string, number>, b: Record<string, number>) => Object.fromEntries(Object.keys(a).map((k) => [k, a[k] - (b[k] ?? 0)]));
+const diff = (a: Record<string, number>, b: Record<string, number>) =>
+  Object.fromEntries(Object.keys(a).map((k) => [k, a[k] - (b[k] ?? 0)]));
 
 describe('crash during an import', () => {
   it('leaves the project whole or absent, never half-written', async () => {
@@ -67,7 +73,10 @@ describe('crash during an import', () => {
         const added = diff(counts, before);
         const none = Object.values(added).every((n) => n === 0);
         const all = Object.keys(whole).every((k) => added[k] === whole[k]);
-        outcomes.push(`kill at ${Math.round(fullMs * fraction)} ms of ~${fullMs} ms: answer ${answer}, project ${none ? 'absent' : all ? 'whole' : 'PARTIAL'}`);
+        outcomes.push(
+          `kill at ${Math.round(fullMs * fraction)} ms of ~${fullMs} ms: answer ${answer}, project ` +
+            `${none ? 'absent' : all ? 'whole' : 'PARTIAL'}`,
+        );
         expect(none || all, `partial rows after the kill: ${JSON.stringify(added)}`).toBe(true);
         if (answer === 303) expect(all, 'an acknowledged import must be there').toBe(true);
       }

@@ -77,7 +77,10 @@ describe('crash safety under a stream of edits', () => {
           if (i < round.acks) {
             const res = await post(s, amps).catch((e: Error) => {
               // diagnostics: did the server die under us (something outside killed it)?
-              throw new Error(`edit ${editNo} got no answer: ${e.message}; server exit ${server.proc.exitCode} signal ${server.proc.signalCode}; output:\n${server.output().slice(-2000)}`);
+              throw new Error(
+                `edit ${editNo} got no answer: ${e.message}; server exit ${server.proc.exitCode} signal ` +
+                  `${server.proc.signalCode}; output:\n${server.output().slice(-2000)}`,
+              );
             });
             expect(res.status, `edit ${editNo}: ${(await res.text()).slice(0, 500)}`).toBe(303);
             version++;
@@ -95,7 +98,10 @@ describe('crash safety under a stream of edits', () => {
           await new Promise((r) => setTimeout(r, round.delayMs));
           await server.kill('SIGKILL');
           const outcome = await pending;
-          log.push(`round: ${round.acks} acknowledged, kill after ${round.delayMs} ms, last edit -> ${outcome === 303 ? '303 (acknowledged before the kill)' : outcome}`);
+          log.push(
+            `round: ${round.acks} acknowledged, kill after ${round.delayMs} ms, last edit -> ` +
+              `${outcome === 303 ? '303 (acknowledged before the kill)' : outcome}`,
+          );
           if (outcome === 303) {
             acknowledged++;
             expected.set(s.action, amps);
@@ -112,11 +118,13 @@ describe('crash safety under a stream of edits', () => {
           const landed = after.version - (1 + acknowledged);
           expect([0, inFlight ? 1 : 0]).toContain(landed);
           for (const s of after.stages) {
-            const want = landed === 1 && inFlight && inFlight.action === s.action ? inFlight.amps : expected.get(s.action);
+            const want =
+              landed === 1 && inFlight && inFlight.action === s.action ? inFlight.amps : expected.get(s.action);
             if (want === undefined) continue;
             expect(Math.abs(currentA(s.fields[FIELD]) - want), `${s.action}`).toBeLessThan(toleranceA);
           }
-          if (inFlight) log[log.length - 1] += `; after restart that unacknowledged edit was ${landed ? 'present' : 'absent'}`;
+          if (inFlight)
+            log[log.length - 1] += `; after restart that unacknowledged edit was ${landed ? 'present' : 'absent'}`;
           if (landed === 1 && inFlight) {
             acknowledged++;
             expected.set(inFlight.action, inFlight.amps);

@@ -24,39 +24,46 @@ const names = (spec: Spec) => Object.entries(spec.fields).map(([k, f]) => [k, fo
 
 describe('the forms that store nothing, swept field by field', () => {
   it('every FORM_ONLY_SPECS spec is one of the swept forms below', () => {
-    expect(FORM_ONLY_SPECS.map((s) => s.name).sort()).toEqual([newProjectSpec, ...SWEEP_PARAMETERS.map((p) => SWEEP_SPECS[p])].map((s) => s.name).sort());
+    expect(FORM_ONLY_SPECS.map((s) => s.name).sort()).toEqual(
+      [newProjectSpec, ...SWEEP_PARAMETERS.map((p) => SWEEP_SPECS[p])].map((s) => s.name).sort(),
+    );
   });
 
-  it.each(SWEEP_PARAMETERS.map((p) => [p]))('sweep of %s: each bad value is refused on the sweep page, naming the field', async (param) => {
-    const spec = SWEEP_SPECS[param];
-    let sent = 0;
-    for (const id of IDS) {
-      const page = await (await t.app.request(`/projects/${id}/sweep`)).text();
-      const form = forms(page).find((f) => f.method === 'get' && f.fields.param === param);
-      // a project without the item (no mains, no winding) says so in place of the boxes; the other demo has them
-      if (!form || !('from' in form.types)) continue;
-      for (const [, name] of names(spec)) expect(name in form.types, `${param}: ${name} on the page`).toBe(true);
-      for (const [key, name, f] of names(spec)) {
-        for (const [bad, why] of badTexts(f)) {
-          const before = await loadProject(t.database.db, id);
-          const counts = await rowCounts(t.database);
-          const query = new URLSearchParams({ ...form.fields, [name]: bad }).toString();
-          const res = await t.app.request(`${form.action}?${query}`);
-          sent++;
-          const where = `${spec.name}.${key} = ${JSON.stringify(bad).slice(0, 40)} (${why}) at ${id}`;
-          expect(res.status, where).toBe(422);
-          const body = unescapeHtml(await res.text());
-          expect(body, where).toContain(f.label);
-          if (bad.trim() && bad.length < 100) expect(body, `${where}: typed text shown back`).toContain(`value="${bad}"`);
-          expect(await loadProject(t.database.db, id), `${where}: nothing stored`).toEqual(before);
-          expect(await rowCounts(t.database)).toEqual(counts);
+  it.each(SWEEP_PARAMETERS.map((p) => [p]))(
+    'sweep of %s: each bad value is refused on the sweep page, naming the field',
+    async (param) => {
+      const spec = SWEEP_SPECS[param];
+      let sent = 0;
+      for (const id of IDS) {
+        const page = await (await t.app.request(`/projects/${id}/sweep`)).text();
+        const form = forms(page).find((f) => f.method === 'get' && f.fields.param === param);
+        // a project without the item (no mains, no winding) says so in place of the boxes; the other demo has them
+        if (!form || !('from' in form.types)) continue;
+        for (const [, name] of names(spec)) expect(name in form.types, `${param}: ${name} on the page`).toBe(true);
+        for (const [key, name, f] of names(spec)) {
+          for (const [bad, why] of badTexts(f)) {
+            const before = await loadProject(t.database.db, id);
+            const counts = await rowCounts(t.database);
+            const query = new URLSearchParams({ ...form.fields, [name]: bad }).toString();
+            const res = await t.app.request(`${form.action}?${query}`);
+            sent++;
+            const where = `${spec.name}.${key} = ${JSON.stringify(bad).slice(0, 40)} (${why}) at ${id}`;
+            expect(res.status, where).toBe(422);
+            const body = unescapeHtml(await res.text());
+            expect(body, where).toContain(f.label);
+            if (bad.trim() && bad.length < 100)
+              expect(body, `${where}: typed text shown back`).toContain(`value="${bad}"`);
+            expect(await loadProject(t.database.db, id), `${where}: nothing stored`).toEqual(before);
+            expect(await rowCounts(t.database)).toEqual(counts);
+          }
         }
       }
-    }
-    expect(sent, 'at least one demo offers this sweep').toBeGreaterThan(0);
-  });
+      expect(sent, 'at least one demo offers this sweep').toBeGreaterThan(0);
+    },
+  );
 
-  it('new project: each bad value is refused on the project list, naming the field, and no project is made', async () => {
+  it('new project: each bad value is refused on the project list, naming the field, and no project is ' +
+    'made', async () => {
     const page = await (await t.app.request('/')).text();
     const form = forms(page).find((f: HtmlForm) => f.action === '/projects' && f.method === 'post')!;
     expect(form).toBeTruthy();
@@ -74,7 +81,8 @@ describe('the forms that store nothing, swept field by field', () => {
         const body = unescapeHtml(await res.text());
         expect(body, where).toContain(f.label);
         // a radio group (the template) cannot show an unknown choice back; its message names it
-        if (bad.trim() && bad.length < 100 && form.types[name] !== 'radio') expect(body, `${where}: typed text shown back`).toContain(`value="${bad}"`);
+        if (bad.trim() && bad.length < 100 && form.types[name] !== 'radio')
+          expect(body, `${where}: typed text shown back`).toContain(`value="${bad}"`);
         expect(await rowCounts(t.database), `${where}: nothing stored`).toEqual(counts);
       }
     }

@@ -24,7 +24,11 @@ async function allForms(): Promise<HtmlForm[]> {
   const out: HtmlForm[] = [];
   for (const id of IDS) {
     const p = (await loadProject(t.database.db, id))!;
-    const paths = new Set(appRoutes(t.app, idsFor(p)).filter((r) => r.method === 'GET' && r.pattern.includes(':id')).map((r) => r.path));
+    const paths = new Set(
+      appRoutes(t.app, idsFor(p))
+        .filter((r) => r.method === 'GET' && r.pattern.includes(':id'))
+        .map((r) => r.path),
+    );
     for (const s of p.stages) paths.add(`/projects/${id}/stages/${s.id}`);
     for (const path of paths) {
       const res = await t.app.request(path);
@@ -36,7 +40,8 @@ async function allForms(): Promise<HtmlForm[]> {
 }
 
 /** Forms that carry every field of the spec (by form name). */
-const formsFor = (spec: Spec, all: HtmlForm[]) => all.filter((f) => Object.keys(spec.fields).every((k) => nameOf(spec, k) in f.types));
+const formsFor = (spec: Spec, all: HtmlForm[]) =>
+  all.filter((f) => Object.keys(spec.fields).every((k) => nameOf(spec, k) in f.types));
 
 describe('bad input in every spec field of every form', () => {
   it('is refused with the field named, shown back, and nothing stored', async () => {
@@ -47,7 +52,8 @@ describe('bad input in every spec field of every form', () => {
     for (const spec of ALL_SPECS) {
       // one form per spec and project is enough (the same component draws each); the fullest one, so a table row is
       // an existing row (an empty new row may rightly leave its rail unchosen)
-      const filled = (f: HtmlForm) => Object.keys(spec.fields).filter((k) => (f.fields[nameOf(spec, k)] ?? '') !== '').length;
+      const filled = (f: HtmlForm) =>
+        Object.keys(spec.fields).filter((k) => (f.fields[nameOf(spec, k)] ?? '') !== '').length;
       const seen = new Set<string>();
       for (const form of formsFor(spec, all).sort((a, b) => filled(b) - filled(a))) {
         const project = form.action.split('/')[2];
@@ -58,13 +64,19 @@ describe('bad input in every spec field of every form', () => {
             const before = await loadProject(t.database.db, project);
             const counts = await rowCounts(t.database);
             const name = nameOf(spec, key);
-            const res = await postForm(t.app, form.action, { ...form.fields, version: String(before!.version), [name]: bad }, { 'HX-Request': 'true' });
+            const res = await postForm(
+              t.app,
+              form.action,
+              { ...form.fields, version: String(before!.version), [name]: bad },
+              { 'HX-Request': 'true' },
+            );
             posts++;
             const where = `${spec.name}.${key} = ${JSON.stringify(bad).slice(0, 40)} (${why}) at ${form.action}`;
             expect(res.status, where).toBe(422);
             const body = unescapeHtml(await res.text());
             expect(body, where).toContain(f.label);
-            if (bad.trim() && bad.length < 100) expect(body, `${where}: typed text shown back`).toContain(`value="${bad}"`);
+            if (bad.trim() && bad.length < 100)
+              expect(body, `${where}: typed text shown back`).toContain(`value="${bad}"`);
             expect(await loadProject(t.database.db, project), `${where}: nothing stored`).toEqual(before);
             expect(await rowCounts(t.database)).toEqual(counts);
           }

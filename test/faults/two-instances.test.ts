@@ -64,16 +64,76 @@ describe('two app instances on one database file', () => {
       expect(new Set([settings, vxoLoads, rf, rx, drv, tr].map((f) => f.version)).size).toBe(1);
 
       const edits: (Edit & { fields: Record<string, string> })[] = [
-        { label: 'project name', action: `${P}/settings`, page: P, field: 'name', value: `Club 30 m ${tag}`, fields: settings },
-        { label: 'kits (same form, other field)', action: `${P}/settings`, page: P, field: 'kits', value: String(10 + round), fields: settings },
-        { label: 'VXO receive current', action: `${P}/stages/st-vxo/loads`, page: P, field: 'l0_receive', value: `${21 + round}`, fields: vxoLoads },
-        { label: 'worst-case SWR', action: `${P}/rf/settings`, page: `${P}/rf`, field: 'worstSwr', value: String(2 + round / 10), fields: rf },
-        { label: 'receiver notes', action: `${P}/stages/st-rx`, page: `${P}/stages/st-rx`, field: 'notes', value: `Notes ${tag}`, fields: rx },
-        { label: 'driver name', action: `${P}/stages/st-drv`, page: `${P}/stages/st-drv`, field: 'name', value: `Driver ${tag}`, fields: drv },
-        { label: 'T/R notes, first', action: `${P}/stages/st-tr`, page: `${P}/stages/st-tr`, field: 'notes', value: `Relay A ${tag}`, fields: tr, conflictGroup: 'tr-notes' },
-        { label: 'T/R notes, second', action: `${P}/stages/st-tr`, page: `${P}/stages/st-tr`, field: 'notes', value: `Relay B ${tag}`, fields: tr, conflictGroup: 'tr-notes' },
+        {
+          label: 'project name',
+          action: `${P}/settings`,
+          page: P,
+          field: 'name',
+          value: `Club 30 m ${tag}`,
+          fields: settings,
+        },
+        {
+          label: 'kits (same form, other field)',
+          action: `${P}/settings`,
+          page: P,
+          field: 'kits',
+          value: String(10 + round),
+          fields: settings,
+        },
+        {
+          label: 'VXO receive current',
+          action: `${P}/stages/st-vxo/loads`,
+          page: P,
+          field: 'l0_receive',
+          value: `${21 + round}`,
+          fields: vxoLoads,
+        },
+        {
+          label: 'worst-case SWR',
+          action: `${P}/rf/settings`,
+          page: `${P}/rf`,
+          field: 'worstSwr',
+          value: String(2 + round / 10),
+          fields: rf,
+        },
+        {
+          label: 'receiver notes',
+          action: `${P}/stages/st-rx`,
+          page: `${P}/stages/st-rx`,
+          field: 'notes',
+          value: `Notes ${tag}`,
+          fields: rx,
+        },
+        {
+          label: 'driver name',
+          action: `${P}/stages/st-drv`,
+          page: `${P}/stages/st-drv`,
+          field: 'name',
+          value: `Driver ${tag}`,
+          fields: drv,
+        },
+        {
+          label: 'T/R notes, first',
+          action: `${P}/stages/st-tr`,
+          page: `${P}/stages/st-tr`,
+          field: 'notes',
+          value: `Relay A ${tag}`,
+          fields: tr,
+          conflictGroup: 'tr-notes',
+        },
+        {
+          label: 'T/R notes, second',
+          action: `${P}/stages/st-tr`,
+          page: `${P}/stages/st-tr`,
+          field: 'notes',
+          value: `Relay B ${tag}`,
+          fields: tr,
+          conflictGroup: 'tr-notes',
+        },
       ];
-      const responses = await Promise.all(edits.map((e, i) => post(i % 2 ? b : a, e.action, { ...e.fields, [e.field]: e.value })));
+      const responses = await Promise.all(
+        edits.map((e, i) => post(i % 2 ? b : a, e.action, { ...e.fields, [e.field]: e.value })),
+      );
       const bodies = await Promise.all(responses.map((r) => r.text()));
       const statuses = responses.map((r) => r.status);
       const outputs = () => `statuses ${statuses.join(', ')}\n--- A:\n${a.output()}\n--- B:\n${b.output()}`;
@@ -95,7 +155,9 @@ describe('two app instances on one database file', () => {
       const stored = formByAction(await page(a, `${P}/stages/st-tr`), `${P}/stages/st-tr`).fields.notes;
       expect(stored).toBe(won[0].e.value);
       const refused = unescapeHtml(bodies[lost[0].i]);
-      expect(refused).toContain(`notes: changed by someone else to “${won[0].e.value}”, you typed “${lost[0].e.value}”`);
+      expect(refused).toContain(
+        `notes: changed by someone else to “${won[0].e.value}”, you typed “${lost[0].e.value}”`,
+      );
     }
   }, 180_000);
 

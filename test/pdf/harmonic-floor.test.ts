@@ -38,7 +38,11 @@ describe('harmonics below the construction floor', () => {
   it.skipIf(!hasPoppler)('pack cover: the worst harmonic below the floor reads "limited by construction"', async () => {
     // every harmonic pushed 40 dB further down (below the floor): the cover must not print a number for it
     const rf = report.rf!;
-    const rows = rf.harmonics!.rows.map((h) => ({ ...h, predictedDbc: h.predictedDbc - 40, limitedByConstruction: true }));
+    const rows = rf.harmonics!.rows.map((h) => ({
+      ...h,
+      predictedDbc: h.predictedDbc - 40,
+      limitedByConstruction: true,
+    }));
     const low = { ...report, rf: { ...rf, harmonics: { ...rf.harmonics!, rows } } } as PackReport;
     const bytes = await buildPack(club30m, low, { paper: 'a4', dataDate: '2026-12-02' });
     const cover = pagesText(writeTemp(bytes, 'floor.pdf'))[0].replace(/\s+/g, ' ');

@@ -22,7 +22,10 @@ describe('500-line parts list', () => {
     // the generated lines carry the designators X1..X500 (short: never wrapped in the Refs column)
     // the order sheets per supplier after the list name the designators too: only the text before them is the list
     const cut = pages.findIndex((p) => p.includes('Order sheets per supplier'));
-    const beforeOrders = cut < 0 ? pages : pages.slice(0, cut + 1).map((p, i) => (i === cut ? p.split('Order sheets per supplier')[0] : p));
+    const beforeOrders =
+      cut < 0
+        ? pages
+        : pages.slice(0, cut + 1).map((p, i) => (i === cut ? p.split('Order sheets per supplier')[0] : p));
     const listPages = beforeOrders.filter((p) => /(?<![-\w])X\d+\b/.test(p));
     // 500 rows at two to three lines each cannot fit on fewer than 10 Letter pages
     expect(listPages.length).toBeGreaterThanOrEqual(10);

@@ -24,7 +24,9 @@ describe('layout toolkit', () => {
   });
 
   it('keeps the symbols the pack uses and strips what the font lacks', () => {
-    expect(l.clean('2.2 kΩ ± 5 %, 4700 µF, 85 °C, ≤ 1 dB, ≥ 2, 3 × 4')).toBe('2.2 kΩ ± 5 %, 4700 µF, 85 °C, ≤ 1 dB, ≥ 2, 3 × 4');
+    expect(l.clean('2.2 kΩ ± 5 %, 4700 µF, 85 °C, ≤ 1 dB, ≥ 2, 3 × 4')).toBe(
+      '2.2 kΩ ± 5 %, 4700 µF, 85 °C, ≤ 1 dB, ≥ 2, 3 × 4',
+    );
     expect(l.clean('a\u{E000}b\u{10FFFD}c')).toBe('abc');
     expect(l.clean('line one\nline\ttwo')).toBe('line one line two');
   });
@@ -32,13 +34,19 @@ describe('layout toolkit', () => {
   it('wraps every line inside the width and keeps every character (property)', () => {
     const word = fc.stringMatching(/^[A-Za-z0-9Ωµ°±×.,()-]{1,40}$/);
     fc.assert(
-      fc.property(fc.array(word, { minLength: 0, maxLength: 30 }), fc.integer({ min: 30, max: 500 }), fc.constantFrom(7, 8.5, 11), (words, widthPt, sizePt) => {
-        const text = words.join(' ');
-        const lines = l.wrap(text, widthPt, sizePt);
-        // measured by pdf-lib's own font metrics
-        for (const line of lines) if (line.length > 1) expect(l.font().widthOfTextAtSize(line, sizePt)).toBeLessThanOrEqual(widthPt + 1e-6);
-        expect(lines.join('').replace(/ /g, '')).toBe(text.replace(/ /g, ''));
-      }),
+      fc.property(
+        fc.array(word, { minLength: 0, maxLength: 30 }),
+        fc.integer({ min: 30, max: 500 }),
+        fc.constantFrom(7, 8.5, 11),
+        (words, widthPt, sizePt) => {
+          const text = words.join(' ');
+          const lines = l.wrap(text, widthPt, sizePt);
+          // measured by pdf-lib's own font metrics
+          for (const line of lines)
+            if (line.length > 1) expect(l.font().widthOfTextAtSize(line, sizePt)).toBeLessThanOrEqual(widthPt + 1e-6);
+          expect(lines.join('').replace(/ /g, '')).toBe(text.replace(/ /g, ''));
+        },
+      ),
       propertyOptions(42, 200), // fixed seed
     );
   });
@@ -82,8 +90,14 @@ describe('table columns hold their longest word', () => {
 
   it('keeps the given widths when every word fits, and when no widening can make one fit', () => {
     const columns = [{ header: 'A', width: 0.5 }, { header: 'B', width: 0.5 }];
-    expect(l.columnWidthsPt(columns, [{ cells: ['x', 'y'] }], sizePt, padPt)).toEqual([0.5 * l.contentWidthPt, 0.5 * l.contentWidthPt]);
+    expect(l.columnWidthsPt(columns, [{ cells: ['x', 'y'] }], sizePt, padPt)).toEqual([
+      0.5 * l.contentWidthPt,
+      0.5 * l.contentWidthPt,
+    ]);
     const huge = 'W'.repeat(400);
-    expect(l.columnWidthsPt(columns, [{ cells: [huge, huge] }], sizePt, padPt)).toEqual([0.5 * l.contentWidthPt, 0.5 * l.contentWidthPt]);
+    expect(l.columnWidthsPt(columns, [{ cells: [huge, huge] }], sizePt, padPt)).toEqual([
+      0.5 * l.contentWidthPt,
+      0.5 * l.contentWidthPt,
+    ]);
   });
 });

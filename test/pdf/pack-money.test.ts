@@ -11,7 +11,15 @@ if (!hasPoppler) console.warn(POPPLER_MISSING);
 
 async function packText(currency: string, rates: Record<string, number>): Promise<string> {
   // rates: units of the project currency per unit of the offer's currency (invented, round numbers)
-  const p: Project = { ...club30m, currency, costing: { ...club30m.costing, exchangeRates: rates, suppliers: club30m.costing.suppliers.map((s) => ({ ...s, currency: 'USD' })) } };
+  const p: Project = {
+    ...club30m,
+    currency,
+    costing: {
+      ...club30m.costing,
+      exchangeRates: rates,
+      suppliers: club30m.costing.suppliers.map((s) => ({ ...s, currency: 'USD' })),
+    },
+  };
   const bytes = await buildPack(p, evaluationFor(p), { paper: 'a4', dataDate: '2026-12-02', part: 'organiser' });
   return pagesText(writeTemp(bytes, `${currency}.pdf`)).join('\n');
 }

@@ -26,12 +26,15 @@ describe.skipIf(!hasPoppler)('pack parts for the club build (8 kits)', () => {
     }
   }, 120_000);
 
-  it("the builder's pack: parts for one rig without prices, the design and both checklists; no orders or packing sheets", () => {
+  it("the builder's pack: parts for one rig without prices, the design and both checklists; no orders or packing " +
+    "sheets", () => {
     const t = text.builder!;
     expect(t).toContain('Builder’s pack');
     expect(t).toContain('Parts for one rig');
-    for (const heading of ['Current budget', 'Build checklist', 'Safety checklist', 'Sources']) expect(t).toContain(heading);
-    for (const absent of ['Costed parts list', 'Order sheets per supplier', 'Order total', 'Packing sheet']) expect(t.includes(absent), absent).toBe(false);
+    for (const heading of ['Current budget', 'Build checklist', 'Safety checklist', 'Sources'])
+      expect(t).toContain(heading);
+    for (const absent of ['Costed parts list', 'Order sheets per supplier', 'Order total', 'Packing sheet'])
+      expect(t.includes(absent), absent).toBe(false);
     // the cover gives the cost per kit, not the build's total
     expect(flat(pages.builder!.slice(0, 1))).toContain('Per kit');
     expect(flat(pages.builder!.slice(0, 1)).includes('Build total')).toBe(false);
@@ -40,14 +43,22 @@ describe.skipIf(!hasPoppler)('pack parts for the club build (8 kits)', () => {
   it("the organiser's pack: costed list, order sheets and one packing sheet per kit; no checklists", () => {
     const t = text.organiser!;
     expect(t).toContain('Organiser’s pack');
-    for (const heading of ['Costed parts list', 'Order sheets per supplier', 'Build total']) expect(t).toContain(heading);
+    for (const heading of ['Costed parts list', 'Order sheets per supplier', 'Build total'])
+      expect(t).toContain(heading);
     for (let k = 1; k <= club30m.kits; k++) expect(t).toContain(`Packing sheet — kit ${k} of ${club30m.kits}`);
-    for (const absent of ['Build checklist', 'Safety checklist', 'Parts for one rig']) expect(t.includes(absent), absent).toBe(false);
+    for (const absent of ['Build checklist', 'Safety checklist', 'Parts for one rig'])
+      expect(t.includes(absent), absent).toBe(false);
   });
 
   it('both in one file holds the organiser and builder pages', () => {
     const t = text.both!;
-    for (const heading of ['Costed parts list', 'Order sheets per supplier', 'Packing sheet — kit 8 of 8', 'Build checklist', 'Safety checklist']) {
+    for (const heading of [
+      'Costed parts list',
+      'Order sheets per supplier',
+      'Packing sheet — kit 8 of 8',
+      'Build checklist',
+      'Safety checklist',
+    ]) {
       expect(t).toContain(heading);
     }
     expect(pages.both!.length).toBeGreaterThan(pages.builder!.length);

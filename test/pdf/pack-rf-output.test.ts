@@ -16,18 +16,29 @@ const NETWORK_OHM = 12.5;
 const COSS_F = 150e-12;
 
 const textOf = async (p: Project, name: string) =>
-  pagesText(writeTemp(await buildPack(p, evaluationFor(p), { paper: 'a4', dataDate: DATE, part: 'builder' }), name)).join('\n').replace(/\s+/g, ' ');
+  pagesText(writeTemp(await buildPack(p, evaluationFor(p), { paper: 'a4', dataDate: DATE, part: 'builder' }), name))
+    .join('\n')
+    .replace(/\s+/g, ' ');
 
-/** The portable demo matched by a network to 12.5 Ω at the drain, its device's output capacitance and a 56 V clamp entered. */
+/**
+ * The portable demo matched by a network to 12.5 Ω at the drain, its device's output capacitance and a 56 V clamp
+ * entered.
+ */
 const networked: Project = {
   ...portable20m,
-  stages: portable20m.stages.map((s) => (s.pa ? { ...s, pa: { ...s.pa, networkLoadOhm: NETWORK_OHM, deviceCossF: COSS_F, drainClampV: 56 } } : s)),
+  stages: portable20m.stages.map((s) =>
+    s.pa ? { ...s, pa: { ...s.pa, networkLoadOhm: NETWORK_OHM, deviceCossF: COSS_F, drainClampV: 56 } } : s,
+  ),
 };
 
 /** The club's push-pull stage matched by a network (no transformer): the pi network is the balanced form. */
 const balanced: Project = {
   ...club30m,
-  stages: club30m.stages.map((s) => (s.pa ? { ...s, pa: { ...s.pa, turnsRatio: null, networkLoadOhm: 25, outputCoreId: null, outputPrimaryTurns: null } } : s)),
+  stages: club30m.stages.map((s) =>
+    s.pa
+      ? { ...s, pa: { ...s.pa, turnsRatio: null, networkLoadOhm: 25, outputCoreId: null, outputPrimaryTurns: null } }
+      : s,
+  ),
 };
 
 describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
@@ -41,7 +52,9 @@ describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
   });
 
   it('club matched by a network: the balanced pi, its series inductance split into two legs', () => {
-    expect(bal).toMatch(/Pi network 25 Ω drain to drain to 50 Ω, loaded Q [\d.]+; balanced: the series inductance split into two legs/);
+    expect(bal).toMatch(
+      /Pi network 25 Ω drain to drain to 50 Ω, loaded Q [\d.]+; balanced: the series inductance split into two legs/,
+    );
     expect(bal).toMatch(/Series inductor [\d.]+ [nµ]H ideal \([\d.]+ [nµ]H a leg\)/);
   });
 
@@ -49,7 +62,9 @@ describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
     expect(club).toMatch(/Push-pull MOSFET final: output network/);
     // the club's binocular catalog core, 2 primary turns (seed-demo/club-30m.ts)
     expect(club).toMatch(/Output transformer core Ferrite binocular core[^:]*: 2 primary and \d+ secondary turns/);
-    expect(club).toMatch(/Flux density \(peak\) [\d.]+ mT at [\d.]+ V RMS and [\d.]+ MHz \(B = V \/ \(4\.44 f N Ae\)\) against the core's 30 mT/);
+    expect(club).toMatch(
+      /Flux density \(peak\) [\d.]+ mT at [\d.]+ V RMS and [\d.]+ MHz \(B = V \/ \(4\.44 f N Ae\)\) against the core's 30 mT/,
+    );
     expect(club).toMatch(/Winding fit \d+ turns of the entered wire; room for about \d+/);
   });
 

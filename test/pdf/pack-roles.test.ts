@@ -16,11 +16,32 @@ describe.skipIf(!hasPoppler)('design roles in the pack', () => {
   let unbound = '';
   beforeAll(async () => {
     const report = evaluationFor(club30m);
-    builder = flat(pagesText(writeTemp(await buildPack(club30m, report, { paper: 'a4', dataDate: '2026-12-02', part: 'builder' }), 'b.pdf')));
-    organiser = flat(pagesText(writeTemp(await buildPack(club30m, report, { paper: 'a4', dataDate: '2026-12-02', part: 'organiser' }), 'o.pdf')));
+    builder = flat(
+      pagesText(
+        writeTemp(await buildPack(club30m, report, { paper: 'a4', dataDate: '2026-12-02', part: 'builder' }), 'b.pdf'),
+      ),
+    );
+    organiser = flat(
+      pagesText(
+        writeTemp(
+          await buildPack(club30m, report, { paper: 'a4', dataDate: '2026-12-02', part: 'organiser' }),
+          'o.pdf',
+        ),
+      ),
+    );
     // the same project with the transformer line unbound
-    const p = { ...club30m, bom: club30m.bom.map((b) => (b.roleId === 'transformer:tr-main' ? { ...b, roleId: null } : b)) };
-    unbound = flat(pagesText(writeTemp(await buildPack(p, evaluationFor(p), { paper: 'a4', dataDate: '2026-12-02', part: 'builder' }), 'u.pdf')));
+    const p = {
+      ...club30m,
+      bom: club30m.bom.map((b) => (b.roleId === 'transformer:tr-main' ? { ...b, roleId: null } : b)),
+    };
+    unbound = flat(
+      pagesText(
+        writeTemp(
+          await buildPack(p, evaluationFor(p), { paper: 'a4', dataDate: '2026-12-02', part: 'builder' }),
+          'u.pdf',
+        ),
+      ),
+    );
   }, 120_000);
 
   it("each bound line carries its role and check, in the builder's and the organiser's parts lists", () => {

@@ -83,7 +83,8 @@ describe('club pack (8 kits, mains)', () => {
     const pf = report.supply!.primary!.fuse;
     expect(all).toContain(`${formatValue(pf.ratedA, 'A')} ${pf.characteristic} (load ${formatValue(pf.loadA, 'A')}`);
     // a level below the -70 dBc construction floor is printed as "by construction", never as a number
-    for (const h of report.rf!.harmonics!.rows) expect(all).toContain(h.predictedDbc < -70 ? 'by construction' : formatValue(h.predictedDbc, 'dBc'));
+    for (const h of report.rf!.harmonics!.rows)
+      expect(all).toContain(h.predictedDbc < -70 ? 'by construction' : formatValue(h.predictedDbc, 'dBc'));
     const lpf = report.rf!.stages.find((s) => s.lpf)!.lpf!.design!;
     for (const e of lpf.elements.filter((x) => x.turns !== null)) expect(all).toContain(`${e.turns} turns`);
   });
@@ -117,17 +118,20 @@ describe('portable pack (1 kit, battery)', () => {
 });
 
 describe('pack with nothing but the budget', () => {
-  it.skipIf(!hasPoppler)('prints "not computed" for supply, RF and cost and strips characters the font lacks', async () => {
-    // U+E000 is a private-use code point: no font has a glyph for it, so it must be dropped, not crash
-    const project = { ...structuredClone(club30m), name: 'Odd\u{E000} name' };
-    const report = { budget: computeBudget(project), supply: null, rf: null, cost: null, findings: [] };
-    const bytes = await buildPack(project, report, { paper: 'a4', dataDate: DATE });
-    const all = pagesText(writeTemp(bytes, 'bare.pdf')).join('\n');
-    expect(all).toContain('Supply design: not computed.');
-    expect(all).toContain('RF design: not computed.');
-    expect(all).toContain('Costing: not computed.');
-    expect(all).toContain('Odd name');
-  });
+  it.skipIf(!hasPoppler)(
+    'prints "not computed" for supply, RF and cost and strips characters the font lacks',
+    async () => {
+      // U+E000 is a private-use code point: no font has a glyph for it, so it must be dropped, not crash
+      const project = { ...structuredClone(club30m), name: 'Odd\u{E000} name' };
+      const report = { budget: computeBudget(project), supply: null, rf: null, cost: null, findings: [] };
+      const bytes = await buildPack(project, report, { paper: 'a4', dataDate: DATE });
+      const all = pagesText(writeTemp(bytes, 'bare.pdf')).join('\n');
+      expect(all).toContain('Supply design: not computed.');
+      expect(all).toContain('RF design: not computed.');
+      expect(all).toContain('Costing: not computed.');
+      expect(all).toContain('Odd name');
+    },
+  );
 });
 
 describe('pack for a brand-new, empty project', () => {

@@ -7,7 +7,8 @@ import { PDFTOTEXT } from '../helpers/tools';
 
 export const hasPoppler = PDFTOTEXT !== null;
 
-export const POPPLER_MISSING = '[skip] PDF text checks skipped: pdftotext not found on PATH (apt-get install poppler-utils)';
+export const POPPLER_MISSING =
+  '[skip] PDF text checks skipped: pdftotext not found on PATH (apt-get install poppler-utils)';
 
 export function writeTemp(bytes: Uint8Array, name: string): string {
   const dir = mkdtempSync(join(tmpdir(), 'rigwright-pdf-'));
@@ -18,7 +19,10 @@ export function writeTemp(bytes: Uint8Array, name: string): string {
 
 /** Text of every page (pdftotext separates pages with a form feed). */
 export function pagesText(file: string): string[] {
-  const r = spawnSync(PDFTOTEXT ?? 'pdftotext', ['-enc', 'UTF-8', file, '-'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+  const r = spawnSync(PDFTOTEXT ?? 'pdftotext', ['-enc', 'UTF-8', file, '-'], {
+    encoding: 'utf8',
+    maxBuffer: 64 * 1024 * 1024,
+  });
   if (r.status !== 0) throw new Error(`pdftotext failed: ${r.stderr}`);
   const pages = r.stdout.split('\f');
   if (pages.at(-1)?.trim() === '') pages.pop();

@@ -13,7 +13,10 @@ afterAll(() => t?.close());
 
 const EVIL = 'http://evil.example';
 const bodies: [string, () => { body: BodyInit; type?: string }][] = [
-  ['urlencoded', () => ({ body: 'name=pwned&version=1&direction=up&kind=receiver', type: 'application/x-www-form-urlencoded' })],
+  [
+    'urlencoded',
+    () => ({ body: 'name=pwned&version=1&direction=up&kind=receiver', type: 'application/x-www-form-urlencoded' }),
+  ],
   [
     'multipart',
     () => {
@@ -36,10 +39,13 @@ describe('CSRF: cross-site form posts', () => {
   it('finds the state-changing routes it is about to check', () => {
     const routes = appRoutes(t.app).filter((r) => STATE_CHANGING.has(r.method));
     // the project list and overview actions exist today; more are added as pages land
-    expect(routes.map((r) => r.pattern)).toEqual(expect.arrayContaining(['/projects', '/import', '/projects/:id/settings', '/projects/:id/stages/:sid/loads']));
+    expect(routes.map((r) => r.pattern)).toEqual(
+      expect.arrayContaining(['/projects', '/import', '/projects/:id/settings', '/projects/:id/stages/:sid/loads']),
+    );
   });
 
-  it('answers 403 for Origin: http://evil.example on every state-changing route, with every form encoding, and saves nothing', async () => {
+  it('answers 403 for Origin: http://evil.example on every state-changing route, with every form encoding, and saves ' +
+    'nothing', async () => {
     const before = await fingerprint();
     const routes = appRoutes(t.app).filter((r) => STATE_CHANGING.has(r.method));
     const refused: string[] = [];
@@ -57,20 +63,29 @@ describe('CSRF: cross-site form posts', () => {
     expect(await fingerprint()).toEqual(before);
   });
 
-  it('answers 403 for a cross-site post that carries only Sec-Fetch-Site: cross-site, or no origin information at all', async () => {
+  it('answers 403 for a cross-site post that carries only Sec-Fetch-Site: cross-site, or no origin information at ' +
+    'all', async () => {
     const before = await fingerprint();
     for (const r of appRoutes(t.app).filter((x) => STATE_CHANGING.has(x.method))) {
       for (const headers of [{ 'Sec-Fetch-Site': 'cross-site' }, {}] as Record<string, string>[]) {
-        const res = await t.app.request(r.path, { method: r.method, headers: { ...headers, 'Content-Type': 'application/x-www-form-urlencoded' }, body: 'name=pwned&version=1' });
+        const res = await t.app.request(r.path, {
+          method: r.method,
+          headers: { ...headers, 'Content-Type': 'application/x-www-form-urlencoded' },
+          body: 'name=pwned&version=1',
+        });
         expect(res.status, `${r.method} ${r.path} ${JSON.stringify(headers)}`).toBe(403);
       }
     }
     expect(await fingerprint()).toEqual(before);
   });
 
-  it('control: the same post from the page origin is not refused by the CSRF check (so the 403s above mean something)', async () => {
+  it('control: the same post from the page origin is not refused by the CSRF check (so the 403s above mean ' +
+    'something)', async () => {
     const p = await loadProject(t.database.db, DEMO_ID);
-    const res = await postForm(t.app, `/projects/${DEMO_ID}/rename`, { name: 'Renamed by a same-origin post', version: String(p!.version) });
+    const res = await postForm(t.app, `/projects/${DEMO_ID}/rename`, {
+      name: 'Renamed by a same-origin post',
+      version: String(p!.version),
+    });
     expect(res.status).toBe(303);
     expect((await loadProject(t.database.db, DEMO_ID))!.name).toBe('Renamed by a same-origin post');
   });

@@ -48,20 +48,32 @@ describe('parts-list CSV import with hostile cells', () => {
     expect(html).toContain(ESCAPED_SCRIPT);
   });
 
-  it('imports the rows with their text unchanged; pages show it escaped; the CSV export neutralises the formulas', async () => {
+  it('imports the rows with their text unchanged; pages show it escaped; the CSV export neutralises the ' +
+    'formulas', async () => {
     const version = (await loadProject(t.database.db, ID))!.version;
-    const res = await postForm(t.app, `/projects/${ID}/bom/import`, { csv: csvText(), action: 'import', version: String(version), stageId: '' });
+    const res = await postForm(t.app, `/projects/${ID}/bom/import`, {
+      csv: csvText(),
+      action: 'import',
+      version: String(version),
+      stageId: '',
+    });
     expect(res.status, await res.clone().text()).toBe(303);
     const p = (await loadProject(t.database.db, ID))!;
     const descriptions = p.parts.map((x) => x.description);
     expect(descriptions).toContain(`${MARKUP} resistor 10k`);
     expect(descriptions).toContain(FORMULA);
 
-    for (const page of ['bom', 'parts', '']) expectNoRawMarkup(await (await t.app.request(`/projects/${ID}${page ? '/' + page : ''}`)).text(), page || 'overview');
+    for (const page of ['bom', 'parts', ''])
+      expectNoRawMarkup(
+        await (await t.app.request(`/projects/${ID}${page ? '/' + page : ''}`)).text(),
+        page || 'overview',
+      );
 
     const csv = parseCsv(await (await t.app.request(`/projects/${ID}/bom.csv`)).text());
     const cells = csv.records.flat();
     expect(cells.some((c) => c.includes('HYPERLINK')), 'the formula text is exported').toBe(true);
-    for (const c of cells) if (/^[=+\-@\t\r]/.test(c) && !/^[+-]?\d/.test(c)) throw new Error(`live formula in the export: ${JSON.stringify(c)}`);
+    for (const c of cells)
+      if (/^[=+\-@\t\r]/.test(c) && !/^[+-]?\d/.test(c))
+        throw new Error(`live formula in the export: ${JSON.stringify(c)}`);
   });
 });

@@ -97,7 +97,8 @@ describe('markup payloads come back escaped', () => {
     expect(body).toContain(`abc${ESCAPED_SCRIPT}`);
   });
 
-  it('the JSON export is served as JSON with nosniff (never rendered as a page) and keeps the text exactly', async () => {
+  it('the JSON export is served as JSON with nosniff (never rendered as a page) and keeps the text ' +
+    'exactly', async () => {
     const res = await t.app.request(`/projects/${importedId}/export.json`);
     expect(res.headers.get('Content-Type')).toMatch(/^application\/json/);
     expect(res.headers.get('X-Content-Type-Options')).toBe('nosniff');
@@ -117,7 +118,11 @@ describe('downloads of the hostile project', () => {
     const bytes = Buffer.from(await res.arrayBuffer());
     expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     // the payloads are printed as the literal text they are (poppler's pdftotext, when installed)
-    if (!PDFTOTEXT) console.warn('[skip] PDF text check of the escaped payloads skipped: pdftotext not found on PATH (apt-get install poppler-utils).');
+    if (!PDFTOTEXT)
+      console.warn(
+        '[skip] PDF text check of the escaped payloads skipped: pdftotext not found on PATH (apt-get install ' +
+          'poppler-utils).',
+      );
     else {
       const dir = mkdtempSync(join(tmpdir(), 'rigwright-pdf-'));
       try {
@@ -133,7 +138,9 @@ describe('downloads of the hostile project', () => {
 
 describe('CSV exports neutralise formulas', () => {
   it('every CSV route (when present) has no cell that a spreadsheet would run as a formula', async (ctx) => {
-    const csvRoutes = appRoutes(t.app, await idsOf(importedId)).filter((r) => r.method === 'GET' && /csv/i.test(r.pattern));
+    const csvRoutes = appRoutes(t.app, await idsOf(importedId)).filter(
+      (r) => r.method === 'GET' && /csv/i.test(r.pattern),
+    );
     if (!csvRoutes.length) ctx.skip('no CSV download route is registered yet (parts list CSV not landed)');
     let sawPayload = false;
     for (const r of csvRoutes) {
@@ -143,7 +150,8 @@ describe('CSV exports neutralise formulas', () => {
       for (const row of parsed.records)
         for (const cell of row) {
           if (cell.includes('HYPERLINK')) sawPayload = true;
-          if (cell.length && (FORMULA_TRIGGERS as readonly string[]).includes(cell[0]) && !/^[+-]?\d/.test(cell)) throw new Error(`${r.path}: live formula cell ${JSON.stringify(cell)}`);
+          if (cell.length && (FORMULA_TRIGGERS as readonly string[]).includes(cell[0]) && !/^[+-]?\d/.test(cell))
+            throw new Error(`${r.path}: live formula cell ${JSON.stringify(cell)}`);
         }
     }
     expect(sawPayload, `the formula payload ${FORMULA_PAYLOAD} reached a CSV`).toBe(true);

@@ -14,7 +14,31 @@ const ID = 'demo-club-30m';
 const PAYLOADS = ['<script>alert(1)</script>', '=HYPERLINK("http://evil.example","x")"><img src=x onerror=alert(2)>'];
 const TEXT_TYPES = new Set(['text', 'textarea', 'search', 'email', 'url', 'tel']);
 /** Path segments that name a kind of thing; anything else in an action is an id. */
-const STATIC = new Set(['projects', 'stages', 'supply', 'transformers', 'windings', 'rails', 'fuse', 'rf', 'settings', 'parts', 'offers', 'suppliers', 'costing', 'bom', 'lines', 'import', 'loads', 'move', 'pa', 'lpf', 'relay', 'clone', 'rename']);
+const STATIC = new Set([
+  'projects',
+  'stages',
+  'supply',
+  'transformers',
+  'windings',
+  'rails',
+  'fuse',
+  'rf',
+  'settings',
+  'parts',
+  'offers',
+  'suppliers',
+  'costing',
+  'bom',
+  'lines',
+  'import',
+  'loads',
+  'move',
+  'pa',
+  'lpf',
+  'relay',
+  'clone',
+  'rename',
+]);
 
 let t: TestApp;
 beforeAll(async () => {
@@ -41,11 +65,15 @@ function expectNoRawMarkup(body: string, where: string) {
 
 async function submit(form: HtmlForm, fields: Record<string, string>, where: string): Promise<number> {
   const version = (await loadProject(t.database.db, ID))!.version;
-  const res = await postForm(t.app, form.action, { ...fields, ...('version' in form.fields ? { version: String(version) } : {}) });
+  const res = await postForm(t.app, form.action, {
+    ...fields,
+    ...('version' in form.fields ? { version: String(version) } : {}),
+  });
   expect(res.status, `${where}`).toBeLessThan(500);
   expectNoRawMarkup(await res.text(), where);
   const location = res.headers.get('Location');
-  if (location && location.startsWith('/')) expectNoRawMarkup(await (await t.app.request(location)).text(), `${where} -> ${location}`);
+  if (location && location.startsWith('/'))
+    expectNoRawMarkup(await (await t.app.request(location)).text(), `${where} -> ${location}`);
   return res.status;
 }
 
@@ -53,7 +81,14 @@ describe('every form with hostile text', () => {
   it('never echoes raw markup, and the stored text is shown escaped on every page', async () => {
     const seen = new Map<string, HtmlForm>();
     for (const [, html] of await htmlPages())
-      for (const f of forms(html)) if (f.method === 'post' && f.action.includes(`/projects/${ID}`) && !/\/delete$/.test(f.action) && !seen.has(shape(f))) seen.set(shape(f), f);
+      for (const f of forms(html))
+        if (
+          f.method === 'post' &&
+          f.action.includes(`/projects/${ID}`) &&
+          !/\/delete$/.test(f.action) &&
+          !seen.has(shape(f))
+        )
+          seen.set(shape(f), f);
     const withText = [...seen.values()].filter((f) => Object.entries(f.types).some(([, ty]) => TEXT_TYPES.has(ty)));
     expect(withText.length, 'forms with text fields found').toBeGreaterThanOrEqual(10);
 
@@ -73,7 +108,10 @@ describe('every form with hostile text', () => {
       }
     }
     console.log(`form fuzz: ${withText.length} form shapes, ${posts} posts, ${stored.length} accepted with a payload`);
-    expect(stored.length, 'some payloads were accepted as text (names, notes, descriptions, suppliers)').toBeGreaterThanOrEqual(5);
+    expect(
+      stored.length,
+      'some payloads were accepted as text (names, notes, descriptions, suppliers)',
+    ).toBeGreaterThanOrEqual(5);
 
     let showing = 0;
     for (const [path, html] of await htmlPages()) {
@@ -84,12 +122,16 @@ describe('every form with hostile text', () => {
   }, 240_000);
 
   it('after the fuzz, no CSV cell starts a live formula', async (ctx) => {
-    const csvRoutes = appRoutes(t.app, idsFor((await loadProject(t.database.db, ID))!)).filter((r) => r.method === 'GET' && /csv/i.test(r.pattern));
+    const csvRoutes = appRoutes(t.app, idsFor((await loadProject(t.database.db, ID))!)).filter(
+      (r) => r.method === 'GET' && /csv/i.test(r.pattern),
+    );
     if (!csvRoutes.length) ctx.skip('no CSV download yet');
     for (const r of csvRoutes) {
       const body = await (await t.app.request(r.path)).text();
       for (const row of parseCsv(body).records)
-        for (const cell of row) if (/^[=+\-@\t\r]/.test(cell) && !/^[+-]?\d/.test(cell)) throw new Error(`${r.path}: live formula ${JSON.stringify(cell)}`);
+        for (const cell of row)
+          if (/^[=+\-@\t\r]/.test(cell) && !/^[+-]?\d/.test(cell))
+            throw new Error(`${r.path}: live formula ${JSON.stringify(cell)}`);
     }
   });
 });

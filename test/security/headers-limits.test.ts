@@ -20,7 +20,8 @@ describe('secure headers', () => {
       expect(csp).toMatch(/default-src 'self'/);
       expect(csp).toMatch(/script-src 'self'(;|$)/); // no inline scripts, no eval
       expect(res.headers.get('X-Content-Type-Options')).toBe('nosniff');
-      const frameBlocked = /frame-ancestors 'none'/.test(csp) || ['DENY', 'SAMEORIGIN'].includes(res.headers.get('X-Frame-Options') ?? '');
+      const frameBlocked =
+        /frame-ancestors 'none'/.test(csp) || ['DENY', 'SAMEORIGIN'].includes(res.headers.get('X-Frame-Options') ?? '');
       expect(frameBlocked).toBe(true);
       expect(res.headers.get('Referrer-Policy')).toBe('no-referrer');
     });
@@ -69,7 +70,8 @@ describe('import refusals', () => {
     return t.app.request('/import', { method: 'POST', headers: { Origin: ORIGIN }, body: fd });
   };
 
-  it(`refuses a file over ${IMPORT_LIMIT_BYTES} bytes (but under the body limit) with 413, a message, and nothing saved`, async () => {
+  it(`refuses a file over ${IMPORT_LIMIT_BYTES} bytes (but under the body limit) with 413, a message, and nothing ` +
+    `saved`, async () => {
     const before = await rowCounts(t.database);
     const res = await importFile(new Uint8Array(IMPORT_LIMIT_BYTES + 10_000).fill(32));
     expect(res.status).toBe(413);
@@ -81,7 +83,11 @@ describe('import refusals', () => {
 
   const malformed: [string, string, RegExp][] = [
     ['not JSON', '{"format": "rigwright-project", ', /not valid JSON/],
-    ['another format', JSON.stringify({ format: 'something-else', formatVersion: 1, project: {} }), /not a project file exported by this program/],
+    [
+      'another format',
+      JSON.stringify({ format: 'something-else', formatVersion: 1, project: {} }),
+      /not a project file exported by this program/,
+    ],
     ['a current out of range deep inside', badCurrentFile(), /stages\[\d+\]\.loads\[0\]\.currentA\.keyDown/],
     ['a dangling rail reference', danglingRailFile(), /no rail (&quot;|")rail-missing/],
     ['an empty file', '', /no file was chosen|not valid JSON/],
@@ -138,7 +144,9 @@ describe('basic auth when a secret is set', () => {
 
   it('refuses a wrong password and lets the right one in (any user name)', async () => {
     expect((await a.app.request('/', { headers: { Authorization: auth('op', 'wrong') } })).status).toBe(401);
-    expect((await a.app.request('/', { headers: { Authorization: auth('anyone', 'correct horse') } })).status).toBe(200);
+    expect((await a.app.request('/', { headers: { Authorization: auth('anyone', 'correct horse') } })).status).toBe(
+      200,
+    );
   });
 
   it('refuses an unauthenticated state-changing post and saves nothing', async () => {

@@ -42,7 +42,9 @@ async function netlists(): Promise<[string, string][]> {
   const p = (await loadProject(t.database.db, id))!;
   const out: [string, string][] = [];
   for (const r of appRoutes(t.app).filter((x) => x.method === 'GET' && /\.cir$/.test(x.pattern))) {
-    const fills = r.pattern.includes(':railId') ? p.supply.rails.filter((x) => x.kind === 'rectified').map((x) => ({ id, railId: x.id })) : p.stages.filter((s) => s.lpf).map((s) => ({ id, sid: s.id }));
+    const fills = r.pattern.includes(':railId')
+      ? p.supply.rails.filter((x) => x.kind === 'rectified').map((x) => ({ id, railId: x.id }))
+      : p.stages.filter((s) => s.lpf).map((s) => ({ id, sid: s.id }));
     for (const f of fills) {
       const path = r.pattern.replace(/:(\w+)/g, (_m, k: string) => (f as Record<string, string>)[k]);
       const res = await t.app.request(path);
@@ -54,10 +56,19 @@ async function netlists(): Promise<[string, string][]> {
 }
 
 describe('SPICE netlist downloads', () => {
-  it('a stored multi-line core name is refused by the filter input spec: no netlist, a message naming the field', async () => {
+  it('a stored multi-line core name is refused by the filter input spec: no netlist, a message naming the ' +
+    'field', async () => {
     const p = (await loadProject(t.database.db, id))!;
     const lpf = p.stages.find((s) => s.lpf)!;
-    const bad = cloneProject({ ...p, stages: p.stages.map((s) => (s.id === lpf.id ? { ...s, lpf: { ...s.lpf!, coreName: `core${INJECTION}` } } : s)) }, 'hostile-core', p.name, newId);
+    const bad = cloneProject(
+      {
+        ...p,
+        stages: p.stages.map((s) => (s.id === lpf.id ? { ...s, lpf: { ...s.lpf!, coreName: `core${INJECTION}` } } : s)),
+      },
+      'hostile-core',
+      p.name,
+      newId,
+    );
     await insertProject(t.database, bad, '2026-01-01T00:00:00Z');
     const sid = bad.stages.find((s) => s.lpf)!.id;
     const res = await t.app.request(`/projects/hostile-core/stages/${sid}/lpf.cir`);
@@ -73,21 +84,26 @@ describe('SPICE netlist downloads', () => {
     for (const [path, text] of files) {
       // the payload's lines all carry the marker or sit between it: any non-comment line with it, or any
       // shell line at all, is project text turned into a command
-      const injected = text.split(/\r?\n/).filter((l) => (l.includes(MARKER) && !l.trimStart().startsWith('*')) || /^\s*shell\b/i.test(l));
+      const injected = text
+        .split(/\r?\n/)
+        .filter((l) => (l.includes(MARKER) && !l.trimStart().startsWith('*')) || /^\s*shell\b/i.test(l));
       expect(injected, `${path} has command lines from project text`).toEqual([]);
     }
   });
 
-  it.skipIf(!requireTool(NGSPICE, 'Running a downloaded netlist in ngspice', 'apt-get install ngspice'))('running a downloaded netlist with ngspice -b runs no command from project text', async () => {
-    for (const [path, text] of await netlists()) {
-      const dir = mkdtempSync(join(tmpdir(), 'rigwright-inject-'));
-      try {
-        writeFileSync(join(dir, 'download.cir'), text);
-        spawnSync(NGSPICE as string, ['-b', 'download.cir'], { cwd: dir, encoding: 'utf8', timeout: 60_000 });
-        expect(readdirSync(dir), `${path}: ngspice ran the injected shell command`).not.toContain(MARKER);
-      } finally {
-        rmSync(dir, { recursive: true, force: true });
+  it.skipIf(!requireTool(NGSPICE, 'Running a downloaded netlist in ngspice', 'apt-get install ngspice'))(
+    'running a downloaded netlist with ngspice -b runs no command from project text',
+    async () => {
+      for (const [path, text] of await netlists()) {
+        const dir = mkdtempSync(join(tmpdir(), 'rigwright-inject-'));
+        try {
+          writeFileSync(join(dir, 'download.cir'), text);
+          spawnSync(NGSPICE as string, ['-b', 'download.cir'], { cwd: dir, encoding: 'utf8', timeout: 60_000 });
+          expect(readdirSync(dir), `${path}: ngspice ran the injected shell command`).not.toContain(MARKER);
+        } finally {
+          rmSync(dir, { recursive: true, force: true });
+        }
       }
-    }
-  });
+    },
+  );
 });

@@ -1,4 +1,5 @@
-// Every field of every input spec (src/core/spec, ALL_SPECS and FORM_ONLY_SPECS) against bad input: each refused form text names the
+// Every field of every input spec (src/core/spec, ALL_SPECS and FORM_ONLY_SPECS) against bad input: each refused form
+// text names the
 // field, each refused stored value names it too. Generated from the specs: a spec added later is swept unchanged.
 // Expected behaviour is the brief's rule (every bad input gets a message saying what and where); no numbers here
 // come from running the program.
@@ -15,7 +16,8 @@ function validObject(spec: Spec): Record<string, unknown> {
   const fields = spec.view ? spec.view.from(v) : v;
   for (const [k, f] of Object.entries(spec.fields)) if (f.type === 'ref' && !f.optional) setPath(fields, k, 'some-id');
   // a required text whose default is empty (the new project's name) gets a name
-  for (const [k, f] of Object.entries(spec.fields)) if (f.type === 'text' && f.required && getPath(fields, k) === '') setPath(fields, k, 'A name');
+  for (const [k, f] of Object.entries(spec.fields))
+    if (f.type === 'text' && f.required && getPath(fields, k) === '') setPath(fields, k, 'A name');
   return spec.view ? spec.view.to(fields) : fields;
 }
 

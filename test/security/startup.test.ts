@@ -19,17 +19,28 @@ async function runOnce(env: Record<string, string>, timeoutMs: number) {
   proc.stderr!.on('data', (d) => (out += d));
   const t0 = Date.now();
   const timer = setTimeout(() => proc.kill('SIGKILL'), timeoutMs);
-  const [code, signal] = await new Promise<[number | null, NodeJS.Signals | null]>((r) => proc.once('exit', (c, s) => r([c, s])));
+  const [code, signal] = await new Promise<[number | null, NodeJS.Signals | null]>((r) =>
+    proc.once('exit', (c, s) => r([c, s])),
+  );
   clearTimeout(timer);
-  return { code, out, how: `exit code ${code}, signal ${signal}, after ${Date.now() - t0} ms, output: ${out.slice(0, 400)}` };
+  return {
+    code,
+    out,
+    how: `exit code ${code}, signal ${signal}, after ${Date.now() - t0} ms, output: ${out.slice(0, 400)}`,
+  };
 }
 
 describe('server start-up guard', () => {
   for (const host of ['0.0.0.0', '::', '192.0.2.10']) {
-    it(`refuses HOST=${host} without RIGWRIGHT_SECRET: non-zero exit, a message naming the fix, no database created`, async () => {
+    it(`refuses HOST=${host} without RIGWRIGHT_SECRET: non-zero exit, a message naming the fix, no database ` +
+      `created`, async () => {
       const dir = mkdtempSync(join(tmpdir(), 'rigwright-guard-'));
       try {
-        const { code, out, how } = await runToExit({ HOST: host, PORT: String(await freePort()), DATABASE_URL: `file:${join(dir, 'x.db')}` });
+        const { code, out, how } = await runToExit({
+          HOST: host,
+          PORT: String(await freePort()),
+          DATABASE_URL: `file:${join(dir, 'x.db')}`,
+        });
         expect(code, how).not.toBe(0);
         expect(code, how).not.toBeNull(); // it exited by itself, not by our timeout kill
         expect(out).toMatch(/Refusing to listen on/);
@@ -42,7 +53,12 @@ describe('server start-up guard', () => {
   }
 
   it('an empty RIGWRIGHT_SECRET counts as none', async () => {
-    const { code, out } = await runToExit({ HOST: '0.0.0.0', PORT: String(await freePort()), RIGWRIGHT_SECRET: '', DATABASE_URL: 'file::memory:' });
+    const { code, out } = await runToExit({
+      HOST: '0.0.0.0',
+      PORT: String(await freePort()),
+      RIGWRIGHT_SECRET: '',
+      DATABASE_URL: 'file::memory:',
+    });
     expect(code).not.toBe(0);
     expect(out).toMatch(/RIGWRIGHT_SECRET/);
   });
