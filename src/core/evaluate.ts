@@ -6,7 +6,7 @@ import { sortFindings, type Finding } from './findings';
 import {
   designPass, designSupply, designedSourceRails, evaluateSupply, supplyInAir, type PassRail,
 } from './power/evaluate-supply';
-import { withSimulationMemo } from './power/rectifier-sim';
+import { resultScope, withSimulationMemo } from './power/rectifier-sim';
 import type { RailReport, SupplyReport } from './power/report-types';
 import { heatBudget, type HeatBudget } from './power/heat-budget';
 import { paHeatAhead } from './thermal/pa-heat';
@@ -109,10 +109,14 @@ function paRailCorners(project: Project, supply: PassSupply | null): { maxV: Rec
 function computedLoads(project: Project, paRailV: Record<string, number>): ComputedLoad[] {
   const loads: ComputedLoad[] = [];
   const railIds = new Set(project.supply.rails.map((r) => r.id));
-  for (const s of project.stages) {
+  // the first pass asks twice at the same voltages (no high-mains voltage yet): the PA model once (this evaluation)
+  const memo = resultScope<ReturnType<typeof paKeyDownCurrentA>>('pa-key-down');
+  for (const [index, s] of project.stages.entries()) {
     if (s.pa) {
       const railV = paRailV[s.pa.railId] ?? NaN;
-      const kd = paKeyDownCurrentA(s.pa, railV, project, s.name);
+      const key = `${index}\u0000${railV}`;
+      const kd = memo?.get(key) ?? paKeyDownCurrentA(s.pa, railV, project, s.name);
+      memo?.set(key, kd);
       const findings = kd.ok ? [] : [paUnknownFinding(s.name, kd.findings)];
       loads.push({ stageId: s.id, railId: s.pa.railId, currentA: { receive: 0, keyUp: 0, keyDown: kd.ok ? kd.currentA : NaN }, replaces: ['keyDown'], findings });
     }
