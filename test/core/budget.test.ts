@@ -12,17 +12,27 @@ const club = () => structuredClone(DEMO_PROJECTS[0]);
 describe('regulator output voltage', () => {
   it('adjustable: Vref(1 + R2/R1) + Iadj R2', () => {
     // Source: reference §6.2 worked example [D] from adjustable-regulator datasheets: 240 Ω / 2.4 kΩ -> 13.87 V
-    expect(Math.abs(regulatorOutputV({ method: 'adjustable', vrefV: 1.25, adjustA: 50e-6, r1Ohm: 240, r2Ohm: 2400 }) - 13.87)).toBeLessThan(toleranceV);
+    expect(
+      Math.abs(
+        regulatorOutputV({ method: 'adjustable', vrefV: 1.25, adjustA: 50e-6, r1Ohm: 240, r2Ohm: 2400 }) - 13.87,
+      ),
+    ).toBeLessThan(toleranceV);
     // 220 Ω / 1 kΩ, I_adj neglected -> 6.93 V (reference §6.2)
-    expect(Math.abs(regulatorOutputV({ method: 'adjustable', vrefV: 1.25, adjustA: 0, r1Ohm: 220, r2Ohm: 1000 }) - 6.93)).toBeLessThan(toleranceV);
+    expect(
+      Math.abs(regulatorOutputV({ method: 'adjustable', vrefV: 1.25, adjustA: 0, r1Ohm: 220, r2Ohm: 1000 }) - 6.93),
+    ).toBeLessThan(toleranceV);
   });
   it('fixed raised by diodes adds one drop per diode', () => {
     // Source: reference §6.1 [C] ("5 V + 0.7 V = 5.7 V")
     expect(regulatorOutputV({ method: 'raised-diodes', nominalV: 5, diodes: 1, diodeDropV: 0.7 })).toBeCloseTo(5.7, 9);
   });
   it('fixed raised by a resistor divider includes Iq R2', () => {
-    // Source: reference §6.1 [C]: Vout = Vxx (1 + R2/R1) + Iq R2; 12 V, R1 = 1 kΩ, R2 = 150 Ω, Iq = 5 mA -> 13.8 + 0.75 = 14.55 V [D]
-    expect(regulatorOutputV({ method: 'raised-resistor', nominalV: 12, r1Ohm: 1000, r2Ohm: 150 }, 0.005)).toBeCloseTo(14.55, 9);
+    // Source: reference §6.1 [C]: Vout = Vxx (1 + R2/R1) + Iq R2; 12 V, R1 = 1 kΩ, R2 = 150 Ω, Iq = 5 mA -> 13.8 +
+    // 0.75 = 14.55 V [D]
+    expect(regulatorOutputV({ method: 'raised-resistor', nominalV: 12, r1Ohm: 1000, r2Ohm: 150 }, 0.005)).toBeCloseTo(
+      14.55,
+      9,
+    );
   });
 });
 
@@ -32,7 +42,10 @@ describe('current budget', () => {
     const b = computeBudget(p);
     const rail = b.rails.find((r) => r.railId === 'rail-13v8')!;
     for (const m of MODES) {
-      const sum = p.stages.flatMap((s) => s.loads).filter((l) => l.railId === 'rail-13v8').reduce((a, l) => a + l.currentA[m], 0);
+      const sum = p.stages
+        .flatMap((s) => s.loads)
+        .filter((l) => l.railId === 'rail-13v8')
+        .reduce((a, l) => a + l.currentA[m], 0);
       expect(Math.abs(rail.ownA[m] - sum)).toBeLessThan(toleranceA);
       expect(Math.abs(rail.outputA[m] - sum)).toBeLessThan(toleranceA); // nothing regulated hangs below it
     }
@@ -62,7 +75,9 @@ describe('current budget', () => {
 
   it('a computed load replaces the entered PA key-down current (no second entry)', () => {
     const p = club();
-    const b = computeBudget(p, [{ stageId: 'st-pa', railId: 'rail-pa', currentA: { receive: 0, keyUp: 0, keyDown: 1.5 }, replaces: ['keyDown'] }]);
+    const b = computeBudget(p, [
+      { stageId: 'st-pa', railId: 'rail-pa', currentA: { receive: 0, keyUp: 0, keyDown: 1.5 }, replaces: ['keyDown'] },
+    ]);
     const pa = b.rails.find((r) => r.railId === 'rail-pa')!;
     expect(pa.outputA.keyDown).toBeCloseTo(1.5, 12);
     expect(pa.outputA.keyUp).toBeCloseTo(0.05, 12); // entered key-up idle current kept

@@ -17,11 +17,19 @@ describe('parts-list reservoir capacitors against the supply design', () => {
     expect(found.filter((f) => f.rule.startsWith('catalog.')).every((f) => f.severity === 'ok')).toBe(true);
   });
 
-  it('with the demo’s bindings the reservoir roles decide instead, one finding per rating, and no capacitance match', () => {
+  it('with the demo’s bindings the reservoir roles decide instead, one finding per rating, and no capacitance ' +
+    'match', () => {
     const found = evaluate(structuredClone(DEMO_PROJECTS[0])).catalog;
     expect(found.filter((f) => f.rule.startsWith('catalog.'))).toEqual([]);
     const reservoir = found.filter((f) => f.subject.startsWith('Reservoir capacitor'));
-    expect(reservoir.map((f) => f.rule).sort()).toEqual(['role.capacitor.capacitanceF', 'role.capacitor.capacitanceF', 'role.capacitor.rippleA', 'role.capacitor.rippleA', 'role.capacitor.voltageV', 'role.capacitor.voltageV']);
+    expect(reservoir.map((f) => f.rule).sort()).toEqual([
+      'role.capacitor.capacitanceF',
+      'role.capacitor.capacitanceF',
+      'role.capacitor.rippleA',
+      'role.capacitor.rippleA',
+      'role.capacitor.voltageV',
+      'role.capacitor.voltageV',
+    ]);
     expect(reservoir.every((f) => f.severity === 'ok')).toBe(true);
   });
 
@@ -52,7 +60,8 @@ describe('parts-list reservoir capacitors against the supply design', () => {
   });
 });
 
-describe('parts-list capacitor voltage margin matches the fitted-part check (1.2 x no-load peak; common practice, no published source, ref §4.2 [D])', () => {
+describe('parts-list capacitor voltage margin matches the fitted-part check (1.2 x no-load peak; common practice, no ' +
+  'published source, ref §4.2 [D])', () => {
   it('a part 25 % above the no-load peak but below the next standard step is ok on both checks', () => {
     const p = club();
     const peak = evaluate(club()).supply!.rails.find((r) => r.railId === 'rail-pa');

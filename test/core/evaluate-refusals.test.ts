@@ -9,11 +9,13 @@ import { BudgetTable } from '../../views/components/budget-table';
 
 const club = () => structuredClone(DEMO_PROJECTS[0]);
 const portable = () => structuredClone(DEMO_PROJECTS[1]);
-const fails = (r: ReturnType<typeof evaluate>, rule: string) => r.findings.filter((f) => f.severity === 'fail' && f.rule === rule);
+const fails = (r: ReturnType<typeof evaluate>, rule: string) =>
+  r.findings.filter((f) => f.severity === 'fail' && f.rule === rule);
 const railOf = (r: ReturnType<typeof evaluate>, id: string) => r.budget.rails.find((x) => x.railId === id)!;
 
 describe('a PA that core refuses', () => {
-  it('efficiency 2 % (below the 5 % core accepts): fail naming stage and field, key-down unknown, PA rail not designed', () => {
+  it('efficiency 2 % (below the 5 % core accepts): fail naming stage and field, key-down unknown, PA rail not ' +
+    'designed', () => {
     const p = club();
     p.stages.find((s) => s.id === 'st-pa')!.pa!.efficiency = 0.02;
     const r = evaluate(p);
@@ -27,10 +29,9 @@ describe('a PA that core refuses', () => {
     expect(pa.outputA.keyUp).toBeCloseTo(0.05, 12); // the typed key-up idle current stays
     // no supply design for the PA rail, and its transformer is not sized on the other windings alone
     expect(r.supply!.rails.some((x) => x.railId === 'rail-pa')).toBe(false);
-    expect(r.supply!.findings.filter((x) => x.rule === 'supply.unknown-load' && x.severity === 'fail').map((x) => x.subject)).toEqual([
-      'PA rail (unregulated, ~24 V)',
-      'T1 mains transformer',
-    ]);
+    expect(
+      r.supply!.findings.filter((x) => x.rule === 'supply.unknown-load' && x.severity === 'fail').map((x) => x.subject),
+    ).toEqual(['PA rail (unregulated, ~24 V)', 'T1 mains transformer']);
     expect(r.supply!.transformers).toHaveLength(0);
     expect(r.supply!.primary).toBeNull();
     // the raw rail and its regulator are in another tree: still designed
@@ -77,7 +78,8 @@ describe('a relay coil whose current cannot be placed', () => {
     expect(fails(evaluate(p), 'relay.coil').map((x) => x.subject)).toEqual([`${tr.name}: relay coil rail`]);
   });
 
-  it('a refused coil current makes its rail unknown in the modes it is energised, and its supply tree undesigned', () => {
+  it('a refused coil current makes its rail unknown in the modes it is energised, and its supply tree ' +
+    'undesigned', () => {
     const p = club();
     const tr = p.stages.find((s) => s.kind === 'tr')!;
     tr.relay!.coilA = -0.03;
@@ -147,7 +149,8 @@ describe('a refused PA shows no placeholder zeros downstream', () => {
 });
 
 describe('a rectified rail with no winding', () => {
-  it('has an unknown voltage in the budget (not 0 V) with a fail naming the rail, and its PA current is refused', () => {
+  it('has an unknown voltage in the budget (not 0 V) with a fail naming the rail, and its PA current is ' +
+    'refused', () => {
     const p = club();
     (p.supply.rails.find((x) => x.id === 'rail-pa') as { windingId: string }).windingId = 'gone';
     const r = evaluate(p);
@@ -155,7 +158,9 @@ describe('a rectified rail with no winding', () => {
     expect(Number.isNaN(pa.nominalV)).toBe(true);
     expect(Number.isNaN(pa.outputW.keyUp)).toBe(true); // 50 mA at an unknown voltage: unknown power, not 0 W
     expect(fails(r, 'budget.rail-voltage').map((f) => f.subject)).toEqual([pa.name]);
-    expect(fails(r, 'budget.pa-current').map((f) => f.subject)).toEqual(['Push-pull MOSFET final: PA key-down current']);
+    expect(fails(r, 'budget.pa-current').map((f) => f.subject)).toEqual([
+      'Push-pull MOSFET final: PA key-down current',
+    ]);
   });
 });
 

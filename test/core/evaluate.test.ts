@@ -18,7 +18,8 @@ function expectRegistered(r: ReturnType<typeof evaluate>): void {
 }
 
 const club = () => structuredClone(DEMO_PROJECTS[0]);
-const paRail = (r: ReturnType<typeof evaluate>) => r.supply!.rails.find((x) => x.railId === 'rail-pa') as RectifiedRailReport;
+const paRail = (r: ReturnType<typeof evaluate>) =>
+  r.supply!.rails.find((x) => x.railId === 'rail-pa') as RectifiedRailReport;
 
 describe('evaluate(): changes ripple through the design', () => {
   it('230 V / 50 Hz mains: the primary current and fuse fall, the reservoir for the same ripple grows', () => {
@@ -38,7 +39,9 @@ describe('evaluate(): changes ripple through the design', () => {
     const p = club();
     p.stages.find((s) => s.id === 'st-pa')!.pa!.efficiency = 0.5; // less efficient: more DC input for the same RF
     const b = evaluate(p);
-    expect(b.budget.rails.find((r) => r.railId === 'rail-pa')!.outputA.keyDown).toBeGreaterThan(a.budget.rails.find((r) => r.railId === 'rail-pa')!.outputA.keyDown);
+    expect(b.budget.rails.find((r) => r.railId === 'rail-pa')!.outputA.keyDown).toBeGreaterThan(
+      a.budget.rails.find((r) => r.railId === 'rail-pa')!.outputA.keyDown,
+    );
     expect(paRail(b).winding!.thermalRmsA).toBeGreaterThan(paRail(a).winding!.thermalRmsA);
     expect(b.supply!.transformers[0].thermalVA).toBeGreaterThan(a.supply!.transformers[0].thermalVA);
     const trough = (r: ReturnType<typeof evaluate>) => paRail(r).corners.find((c) => c.id === 'low-keyDown')!.troughV;
@@ -51,10 +54,12 @@ describe('evaluate(): changes ripple through the design', () => {
     expect(r.paRailV['rail-pa']).toBeCloseTo(nominalTrough, 9);
     const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
     const load = r.budget.rails.find((x) => x.railId === 'rail-pa')!.loads.find((l) => l.computed)!;
-    expect(Math.abs(load.currentA.keyDown - pa.keyDownCurrentA)).toBeLessThan(0.002); // same model; the passes settle the rail within 5 mV
+    // same model; the passes settle the rail within 5 mV
+    expect(Math.abs(load.currentA.keyDown - pa.keyDownCurrentA)).toBeLessThan(0.002);
   });
 
-  it('every finding and recommendation of both demos resolves to a registry source with text, and has a message', () => {
+  it('every finding and recommendation of both demos resolves to a registry source with text, and has a ' +
+    'message', () => {
     for (const p of DEMO_PROJECTS) {
       const r = evaluate(structuredClone(p));
       expect(r.findings.length).toBeGreaterThan(10);
@@ -62,11 +67,20 @@ describe('evaluate(): changes ripple through the design', () => {
     }
   });
 
-  it('so does every finding of fuzzed projects (seeded): changed mains, rule set, power, band, stages and bad values', () => {
+  it('so does every finding of fuzzed projects (seeded): changed mains, rule set, power, band, stages and bad ' +
+    'values', () => {
     fc.assert(
       fc.property(
         fc.constantFrom(0, 1),
-        fc.option(fc.record({ nominalV: fc.constantFrom(100, 120, 230, 0, Number.NaN), frequencyHz: fc.constantFrom(50, 60), lowFraction: fc.constantFrom(0.05, 0.1, 0.2), highFraction: fc.constantFrom(0.05, 0.1) }), { nil: null }),
+        fc.option(
+          fc.record({
+            nominalV: fc.constantFrom(100, 120, 230, 0, Number.NaN),
+            frequencyHz: fc.constantFrom(50, 60),
+            lowFraction: fc.constantFrom(0.05, 0.1, 0.2),
+            highFraction: fc.constantFrom(0.05, 0.1),
+          }),
+          { nil: null },
+        ),
         fc.constantFrom('us-97-307' as const, 'itu-app3' as const),
         fc.constantFrom(0.5, 5, 20, 100, -1, Number.NaN),
         fc.constantFrom(1.9e6, 7.03e6, 10.11e6, 14.06e6, 28.1e6, 50.1e6, 0.1e6),
@@ -87,7 +101,8 @@ describe('evaluate(): changes ripple through the design', () => {
 });
 
 describe('evaluate(): the PA is judged at the supply corners that stress it', () => {
-  it('drain peak = 2 x the PA rail high-mains no-load peak (push-pull, REFERENCE-VALUES §8.1), not the nominal trough', () => {
+  it('drain peak = 2 x the PA rail high-mains no-load peak (push-pull, REFERENCE-VALUES §8.1), not the nominal ' +
+    'trough', () => {
     const r = evaluate(club());
     const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
     const rail = paRail(r);
@@ -101,7 +116,8 @@ describe('evaluate(): the PA is judged at the supply corners that stress it', ()
 });
 
 describe('evaluate(): high-mains heating corners carry the PA current at the high-mains rail', () => {
-  it('PA rail high-mains key-down load = nominal budget + the extra PA current at the hotter rail (I_dc = k V / (eta R), REFERENCE-VALUES §8.1)', async () => {
+  it('PA rail high-mains key-down load = nominal budget + the extra PA current at the hotter rail (I_dc = k V / (eta ' +
+    'R), REFERENCE-VALUES §8.1)', async () => {
     const { paKeyDownCurrentA } = await import('../../src/core/rf/pa');
     const p = club();
     const r = evaluate(p);
@@ -143,7 +159,8 @@ describe('evaluate(): filter and relay stress at the most RF the PA delivers (hi
 });
 
 describe('evaluate(): RF exposure from the most the station radiates', () => {
-  it('exposure uses the high-mains PA output after the filter: R = sqrt(2.56 EIRP / (4 pi S)) grows with sqrt(P) (REFERENCE-VALUES §2.2, §2.5)', () => {
+  it('exposure uses the high-mains PA output after the filter: R = sqrt(2.56 EIRP / (4 pi S)) grows with sqrt(P) ' +
+    '(REFERENCE-VALUES §2.2, §2.5)', () => {
     const r = evaluate(club());
     const pa = r.rf.stages.find((s) => s.stageId === 'st-pa')!.pa!;
     const lossDb = r.rf.stages.find((s) => s.kind === 'lpf')!.lpf!.analysis!.atOperating.lossDb;
@@ -154,7 +171,8 @@ describe('evaluate(): RF exposure from the most the station radiates', () => {
 });
 
 describe('evaluate(): a switching regulator draws its input current at the lowest simulated input voltage', () => {
-  it('I_in = V_out I_out / (eta V_trough) + I_q at the low-mains key-down trough (energy balance P_in = P_out / eta)', async () => {
+  it('I_in = V_out I_out / (eta V_trough) + I_q at the low-mains key-down trough (energy balance P_in = P_out / ' +
+    'eta)', async () => {
     const { regulatorOutputV } = await import('../../src/core/power/regulator');
     const p = club();
     const reg = p.supply.rails.find((r) => r.id === 'rail-13v8')!;

@@ -5,7 +5,8 @@ import { quotient, usable, usablePositive } from '../../src/core/numeric';
 
 describe('usable denominators', () => {
   it('refuses subnormals, zero, NaN and infinities; accepts values at or above the floor', () => {
-    for (const x of [5e-324, 1.5e-322, 0, -0, Number.NaN, Infinity, -Infinity, 1e-4]) expect(usablePositive(x, 1e-3)).toBe(false);
+    for (const x of [5e-324, 1.5e-322, 0, -0, Number.NaN, Infinity, -Infinity, 1e-4])
+      expect(usablePositive(x, 1e-3)).toBe(false);
     for (const x of [1e-3, 1, 13.8, 1e300]) expect(usablePositive(x, 1e-3)).toBe(true);
     expect(usablePositive(-5, 1e-3)).toBe(false);
     expect(usable(-5, 1e-3)).toBe(true);

@@ -4,12 +4,24 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/core/evaluate';
 import type { Project, Rail, Stage } from '../../src/core/model';
 import { newProject, withKindDefaults } from '../../src/core/new-project';
-import { paDefaultRailId, railEstimateV, rectifiedEstimateV, relayCoilDefaultRailId } from '../../src/core/role-defaults';
+import {
+  paDefaultRailId,
+  railEstimateV,
+  rectifiedEstimateV,
+  relayCoilDefaultRailId,
+} from '../../src/core/role-defaults';
 import { DEMO_PROJECTS } from '../../seed-demo/index';
 
 const club = () => structuredClone(DEMO_PROJECTS[0]);
 const portable = () => structuredClone(DEMO_PROJECTS[1]);
-const stage = (kind: Stage['kind'], loads: Stage['loads'] = []): Stage => ({ id: 'new', kind, name: 'New', notes: '', loads, dissipationW: null });
+const stage = (kind: Stage['kind'], loads: Stage['loads'] = []): Stage => ({
+  id: 'new',
+  kind,
+  name: 'New',
+  notes: '',
+  loads,
+  dissipationW: null,
+});
 
 describe('rectified rail estimate', () => {
   it('18 V RMS bridge with 0.9 V diodes: 25.46 - 1.8 = about 23.7 V at the capacitor (REFERENCE-VALUES §4.2)', () => {
@@ -28,7 +40,8 @@ describe('rectified rail estimate', () => {
 });
 
 describe('role defaults on the demo projects', () => {
-  it('club (mains): PA on the ~24 V PA rail, not the raw rail first in the list; relay coil on the 13.8 V signal rail', () => {
+  it('club (mains): PA on the ~24 V PA rail, not the raw rail first in the list; relay coil on the 13.8 V signal ' +
+    'rail', () => {
     const p = club();
     expect(p.supply.rails[0].id).toBe('rail-raw'); // the old default took the first rail
     expect(paDefaultRailId(p)).toBe('rail-pa');
@@ -36,7 +49,8 @@ describe('role defaults on the demo projects', () => {
     expect(withKindDefaults(p, stage('final')).pa!.railId).toBe('rail-pa');
     expect(withKindDefaults(p, stage('tr')).relay!.coilRailId).toBe('rail-13v8');
   });
-  it('portable (battery): PA on the battery (a battery counts though it feeds the 9 V regulator); coil on the 9 V rail', () => {
+  it('portable (battery): PA on the battery (a battery counts though it feeds the 9 V regulator); coil on the 9 V ' +
+    'rail', () => {
     const p = portable();
     expect(withKindDefaults(p, stage('final')).pa!.railId).toBe('rail-bat');
     expect(withKindDefaults(p, stage('tr')).relay!.coilRailId).toBe('rail-9v');
@@ -72,12 +86,40 @@ describe('role defaults with a raw rail feeding a regulator', () => {
 
 describe('signal rail choice', () => {
   const reg = (id: string, v: number, parentId = 'bat'): Rail => ({
-    kind: 'regulated', id, name: `${v} V`, parentId, regulator: 'linear', setting: { method: 'fixed', nominalV: v }, dropoutV: 2, quiescentA: 0.005,
-    efficiency: null, maxOutputA: null, maxInputV: null, mount: null, rippleRejectionDb: null, rippleTargetV: null,
+    kind: 'regulated',
+    id,
+    name: `${v} V`,
+    parentId,
+    regulator: 'linear',
+    setting: { method: 'fixed', nominalV: v },
+    dropoutV: 2,
+    quiescentA: 0.005,
+    efficiency: null,
+    maxOutputA: null,
+    maxInputV: null,
+    mount: null,
+    rippleRejectionDb: null,
+    rippleTargetV: null,
   });
-  const bat: Rail = { kind: 'battery', id: 'bat', name: '12 V', chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 10, capacityAh: 7, usableFraction: 0.8, internalOhm: 0.05, minimumV: null };
-  const withRails = (rails: Rail[]): Project => ({ ...newProject('p', 'P', 7.03e6, 5, null), supply: { transformers: [], rails, primaryFuseA: null } });
-  it('the regulated rail with the lowest voltage of at least 5 V (a 3.3 V logic rail is too low for a relay coil)', () => {
+  const bat: Rail = {
+    kind: 'battery',
+    id: 'bat',
+    name: '12 V',
+    chemistry: 'LiFePO4',
+    nominalV: 12.8,
+    fullV: 14.4,
+    endV: 10,
+    capacityAh: 7,
+    usableFraction: 0.8,
+    internalOhm: 0.05,
+    minimumV: null,
+  };
+  const withRails = (rails: Rail[]): Project => ({
+    ...newProject('p', 'P', 7.03e6, 5, null),
+    supply: { transformers: [], rails, primaryFuseA: null },
+  });
+  it('the regulated rail with the lowest voltage of at least 5 V (a 3.3 V logic rail is too low for a relay ' +
+    'coil)', () => {
     expect(relayCoilDefaultRailId(withRails([bat, reg('r12', 12), reg('r33', 3.3), reg('r5', 5)]))).toBe('r5');
   });
   it('with no regulated rail, the battery', () => {
@@ -88,7 +130,10 @@ describe('signal rail choice', () => {
 describe('no rail to choose: a failure, not a silent omission', () => {
   it('a new project with no rails: the PA and the relay coil get no rail and the evaluation fails naming them', () => {
     const p = newProject('p', 'P', 7.03e6, 5, null);
-    p.stages = [withKindDefaults(p, { ...stage('final'), id: 'pa', name: 'Final' }), withKindDefaults(p, { ...stage('tr'), id: 'tr', name: 'Relay' })];
+    p.stages = [
+      withKindDefaults(p, { ...stage('final'), id: 'pa', name: 'Final' }),
+      withKindDefaults(p, { ...stage('tr'), id: 'tr', name: 'Relay' }),
+    ];
     expect(p.stages[0].pa!.railId).toBe('');
     expect(p.stages[1].relay!.coilRailId).toBeNull();
     const r = evaluate(p);

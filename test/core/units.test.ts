@@ -78,7 +78,14 @@ describe('formatting', () => {
     expect(formatValue(NaN, 'V')).toBe('—');
   });
   it('formatInput round-trips through parseValue', () => {
-    for (const [v, u] of [[0.35, 'A'], [13.87, 'V'], [10.11e6, 'Hz'], [4.7e-6, 'F'], [2200, 'Ω'], [1.45e-6, 'H']] as const) {
+    for (const [v, u] of [
+      [0.35, 'A'],
+      [13.87, 'V'],
+      [10.11e6, 'Hz'],
+      [4.7e-6, 'F'],
+      [2200, 'Ω'],
+      [1.45e-6, 'H'],
+    ] as const) {
       expect(close(value(formatInput(v, u), u), v)).toBe(true);
     }
   });

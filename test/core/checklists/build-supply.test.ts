@@ -1,5 +1,6 @@
 // The supply checklist line for an unregulated rail says what its trough must stay above: the lowest voltage stated
-// for its loads (the club demo's PA rail states 20 V), or that none is stated — never the 0–0.5 V headroom margin as a
+// for its loads (the club demo's PA rail states 20 V), or that none is stated — never the 0–0.5 V headroom margin
+// as a
 // need (the old "must stay above 500 mV"). The reports come from the engines themselves (test/pdf/fixture).
 import { describe, expect, it } from 'vitest';
 import { club30m } from '../../../seed-demo/club-30m';

@@ -4,7 +4,12 @@
 import { describe, expect, it, beforeAll } from 'vitest';
 import { club30m } from '../../../seed-demo/club-30m';
 import { portable20m } from '../../../seed-demo/portable-20m';
-import { buildChecklist, safetyChecklist, type ChecklistSection, type ChecklistItem } from '../../../src/core/checklists';
+import {
+  buildChecklist,
+  safetyChecklist,
+  type ChecklistSection,
+  type ChecklistItem,
+} from '../../../src/core/checklists';
 import { computeBudget } from '../../../src/core/budget';
 import { evaluationFor } from '../../pdf/fixture';
 import type { PackReport } from '../../../src/pdf';
@@ -59,7 +64,8 @@ describe('checklists for the club mains build', () => {
     expect(out.unit).toBe('W');
   });
 
-  it('key-down current to measure at the design drive (with the entered 50 mA bias), the saturated figure beside it', () => {
+  it('key-down current to measure at the design drive (with the entered 50 mA bias), the saturated figure beside ' +
+    'it', () => {
     const pa = report.rf!.stages.find((s) => s.pa)!.pa!;
     const kd = find(build, /^Key down for a few seconds at the design drive/)[0];
     // the demo's PA enters 0.05 A bias idle: the design drive's RF current plus that is what an ammeter shows at the
@@ -108,7 +114,8 @@ describe('checklists for the club mains build', () => {
     expect(find(safety, /electrical codes/i).length).toBeGreaterThan(0);
   });
 
-  it('safety: every actionable fail or caution becomes a line to resolve; each standing caution is listed once on its own', () => {
+  it('safety: every actionable fail or caution becomes a line to resolve; each standing caution is listed once on ' +
+    'its own', () => {
     const open = report.findings.filter((f) => f.severity !== 'ok' && f.kind !== 'standing').length;
     const sec = safety.find((s) => s.id === 'safety:findings');
     expect(sec?.items.length ?? 0).toBe(open);

@@ -8,7 +8,13 @@ import { club30m } from '../../../seed-demo/club-30m';
 import { portable20m } from '../../../seed-demo/portable-20m';
 import type { Project } from '../../../src/core/model';
 
-const m = (key: string, value: number | null, better: Metric['better'] = 'higher', unit = 'V', currency?: string): Metric => ({
+const m = (
+  key: string,
+  value: number | null,
+  better: Metric['better'] = 'higher',
+  unit = 'V',
+  currency?: string,
+): Metric => ({
   key,
   label: key,
   unit,
@@ -20,7 +26,11 @@ const m = (key: string, value: number | null, better: Metric['better'] = 'higher
 
 describe('compareRows (hand-made figures)', () => {
   it('says better or worse by the direction that is good for the row, against the first column', () => {
-    const rows = compareRows([[m('a', 10), m('b', 10, 'lower')], [m('a', 12), m('b', 12, 'lower')], [m('a', 8), m('b', 8, 'lower')]]);
+    const rows = compareRows([
+      [m('a', 10), m('b', 10, 'lower')],
+      [m('a', 12), m('b', 12, 'lower')],
+      [m('a', 8), m('b', 8, 'lower')],
+    ]);
     expect(rows.map((r) => r.cells.map((c) => c.verdict))).toEqual([
       ['same', 'better', 'worse'],
       ['same', 'worse', 'better'],
@@ -64,7 +74,10 @@ describe('rows of the demos', () => {
       'exposureDistanceM',
       'perKitCents',
     ]);
-    expect(clubMetrics.every((x) => x.value !== null && Number.isFinite(x.value)), JSON.stringify(clubMetrics)).toBe(true);
+    expect(
+      clubMetrics.every((x) => x.value !== null && Number.isFinite(x.value)),
+      JSON.stringify(clubMetrics),
+    ).toBe(true);
     // a 20 W PA on a ~24 V rail delivers some watts at low mains but not more than a few times its target
     const low = clubMetrics.find((x) => x.key === 'paLowOutputW')!.value!;
     expect(low).toBeGreaterThan(5);
@@ -86,7 +99,8 @@ describe('rows of the demos', () => {
     expect(rows.find((r) => r.key === 'trough:PA rail (unregulated, ~24 V)')!.cells[1].verdict).toBe('missing-here');
   });
 
-  it('a variant with twice the PA reservoir: PA rail margin better, cost per kit the same, transformer VA not lower', () => {
+  it('a variant with twice the PA reservoir: PA rail margin better, cost per kit the same, transformer VA not ' +
+    'lower', () => {
     const variant: Project = structuredClone(club30m);
     const pa = variant.supply.rails.find((r) => r.id === 'rail-pa')!;
     if (pa.kind !== 'rectified') throw new Error('demo changed');

@@ -1,7 +1,14 @@
 // Sweeps on the demos: the direction each figure must move is hand reasoning from the demos' own inputs (cited
 // beside each check); no expected number comes from running the program. The inputs' spec refuses bad values by name.
 import { describe, expect, it } from 'vitest';
-import { runSweep, sweepStart, sweepTargets, sweepValues, withSweepValue, type SweepResult } from '../../../src/core/compare/sweep';
+import {
+  runSweep,
+  sweepStart,
+  sweepTargets,
+  sweepValues,
+  withSweepValue,
+  type SweepResult,
+} from '../../../src/core/compare/sweep';
 import { projectMetrics } from '../../../src/core/compare/metrics';
 import { evaluate } from '../../../src/core/evaluate';
 import { SWEEP_SPECS, SWEEP_PARAMETERS, MAX_SWEEP_POINTS } from '../../../src/core/spec/sweep';
@@ -9,7 +16,9 @@ import { defaults, formValues, parseForm, validate } from '../../../src/core/spe
 import { club30m } from '../../../seed-demo/club-30m';
 import { portable20m } from '../../../seed-demo/portable-20m';
 
-/** Rounding of the simulation (V, dB, W): a step back smaller than this is not a reversal. Common practice, no source. */
+/**
+ * Rounding of the simulation (V, dB, W): a step back smaller than this is not a reversal. Common practice, no source.
+ */
 const toleranceV = 0.02;
 const toleranceDb = 0.05;
 
@@ -35,7 +44,8 @@ describe('sweep values and targets', () => {
   });
 
   it('starts the form round the item’s value, inside its field’s range', () => {
-    // two significant digits: 6800 µF × 0.5 = 3400 µF; × 2 = 13600 µF → 14000 µF; 120 V × 0.85 = 102 → 100 V and
+    // two significant digits: 6800 µF × 0.5 = 3400 µF; × 2 = 13600 µF → 14000 µF; 120 V × 0.85 = 102 → 100 V
+    // and
     // × 1.15 = 138 → 140 V
     expect(sweepStart('reservoirF', 0.0068, { min: 0, max: 10 })).toEqual({ from: 0.0034, to: 0.014, points: 7 });
     expect(sweepStart('mainsV', 120, { min: 50, max: 300 })).toEqual({ from: 100, to: 140, points: 7 });
@@ -56,7 +66,9 @@ describe('sweeps of the club demo', () => {
   it('reservoir of the PA rail: the PA rail margin never falls as the capacitance rises', () => {
     // Source: capacitor-input filter, ripple V_pp ≈ I / (2 f C) for a bridge (a textbook relation; from
     // memory): more C, less ripple, a higher trough at the same load
-    const r = ok(runSweep(club30m, { parameter: 'reservoirF', target: 'rail-pa', from: 2200e-6, to: 15000e-6, points: 5 }));
+    const r = ok(
+      runSweep(club30m, { parameter: 'reservoirF', target: 'rail-pa', from: 2200e-6, to: 15000e-6, points: 5 }),
+    );
     const margins = series(r, 'trough:PA rail (unregulated, ~24 V)');
     expect(nonDecreasing(margins, toleranceV), margins.join(', ')).toBe(true);
     expect(margins[4]).toBeGreaterThan(margins[0]);
@@ -70,7 +82,11 @@ describe('sweeps of the club demo', () => {
     // Source: an ideal transformer's secondary voltage is the primary's divided by the turns ratio (any
     // transformer text); the club's rails are all fed from the one mains transformer
     const r = ok(runSweep(club30m, { parameter: 'mainsV', target: '', from: 100, to: 140, points: 5 }));
-    for (const key of ['trough:Raw DC for the 13.8 V regulator', 'trough:13.8 V signal rail', 'trough:PA rail (unregulated, ~24 V)']) {
+    for (const key of [
+      'trough:Raw DC for the 13.8 V regulator',
+      'trough:13.8 V signal rail',
+      'trough:PA rail (unregulated, ~24 V)',
+    ]) {
       const s = series(r, key);
       expect(nonDecreasing(s, toleranceV), `${key}: ${s.join(', ')}`).toBe(true);
       expect(s[4], key).toBeGreaterThan(s[0]);
@@ -78,7 +94,9 @@ describe('sweeps of the club demo', () => {
   });
 
   it('the point at the project’s own value gives the project’s own figures', () => {
-    const r = ok(runSweep(club30m, { parameter: 'reservoirF', target: 'rail-pa', from: 0.0068, to: 0.0136, points: 2 }));
+    const r = ok(
+      runSweep(club30m, { parameter: 'reservoirF', target: 'rail-pa', from: 0.0068, to: 0.0136, points: 2 }),
+    );
     expect(r.points[0].metrics).toEqual(projectMetrics(club30m, evaluate(club30m)));
   });
 
@@ -111,13 +129,17 @@ describe('sweeps of the club demo', () => {
 describe('refusals', () => {
   it('a parameter the project does not have is refused by name', () => {
     const o = runSweep(portable20m, { parameter: 'mainsV', target: '', from: 100, to: 140, points: 3 });
-    expect(o).toEqual({ ok: false, errors: { target: expect.stringContaining('Item to vary: this project has no mains supply') } });
+    expect(o).toEqual({
+      ok: false,
+      errors: { target: expect.stringContaining('Item to vary: this project has no mains supply') },
+    });
   });
 
   it('an item that is not in the project is refused by name, listing the ones there are', () => {
     const o = runSweep(club30m, { parameter: 'reservoirF', target: 'rail-13v8', from: 1e-3, to: 2e-3, points: 3 });
     expect(o.ok).toBe(false);
-    if (!o.ok) expect(o.errors.target).toMatch(/^Item to vary: there is no such item .*"PA rail \(unregulated, ~24 V\)"/);
+    if (!o.ok)
+      expect(o.errors.target).toMatch(/^Item to vary: there is no such item .*"PA rail \(unregulated, ~24 V\)"/);
   });
 });
 

@@ -15,8 +15,14 @@ describe('supplier choice with shipping (hand-worked)', () => {
     const r = costProject(
       project({
         parts: [
-          part('p1', [offer({ id: 'a1', supplier: 'Alpha', breaks: flat(100) }), offer({ id: 'b1', supplier: 'Bravo', breaks: flat(300) })]),
-          part('p2', [offer({ id: 'a2', supplier: 'Alpha', breaks: flat(300) }), offer({ id: 'b2', supplier: 'Bravo', breaks: flat(100) })]),
+          part('p1', [
+            offer({ id: 'a1', supplier: 'Alpha', breaks: flat(100) }),
+            offer({ id: 'b1', supplier: 'Bravo', breaks: flat(300) }),
+          ]),
+          part('p2', [
+            offer({ id: 'a2', supplier: 'Alpha', breaks: flat(300) }),
+            offer({ id: 'b2', supplier: 'Bravo', breaks: flat(100) }),
+          ]),
         ],
         bom: [line('L1', 'p1', 10), line('L2', 'p2', 10)],
         suppliers: [ship('Alpha', 500), ship('Bravo', 500)],
@@ -34,8 +40,14 @@ describe('supplier choice with shipping (hand-worked)', () => {
     // Alpha only: 2300 + 800 = 3100. Bravo only: 2200 + 800 = 3000 <- cheapest.
     const p = project({
       parts: [
-        part('p1', [offer({ id: 'a1', supplier: 'Alpha', breaks: flat(100) }), offer({ id: 'b1', supplier: 'Bravo', breaks: flat(120) })]),
-        part('p2', [offer({ id: 'a2', supplier: 'Alpha', breaks: flat(130) }), offer({ id: 'b2', supplier: 'Bravo', breaks: flat(100) })]),
+        part('p1', [
+          offer({ id: 'a1', supplier: 'Alpha', breaks: flat(100) }),
+          offer({ id: 'b1', supplier: 'Bravo', breaks: flat(120) }),
+        ]),
+        part('p2', [
+          offer({ id: 'a2', supplier: 'Alpha', breaks: flat(130) }),
+          offer({ id: 'b2', supplier: 'Bravo', breaks: flat(100) }),
+        ]),
       ],
       bom: [line('L1', 'p1', 10), line('L2', 'p2', 10)],
       suppliers: [ship('Alpha', 800), ship('Bravo', 800)],
@@ -67,7 +79,11 @@ describe('supplier choice with shipping (hand-worked)', () => {
       project({
         parts: [
           part('p1', [
-            offer({ id: 'a1', supplier: 'A', breaks: [{ minQty: 1, unitPriceCents: 50 }, { minQty: 100, unitPriceCents: 25 }] }),
+            offer({
+              id: 'a1',
+              supplier: 'A',
+              breaks: [{ minQty: 1, unitPriceCents: 50 }, { minQty: 100, unitPriceCents: 25 }],
+            }),
             offer({ id: 'b1', supplier: 'B', breaks: flat(35) }),
           ]),
         ],
@@ -75,7 +91,14 @@ describe('supplier choice with shipping (hand-worked)', () => {
         suppliers: [ship('A', shipA), ship('B', 0)],
       });
     const r = costProject(mk(0));
-    expect(r.lines[0]).toMatchObject({ supplier: 'A', neededQty: 92, orderQty: 100, breakMinQty: 100, unitPriceCents: 25, lineCostCents: 2500 });
+    expect(r.lines[0]).toMatchObject({
+      supplier: 'A',
+      neededQty: 92,
+      orderQty: 100,
+      breakMinQty: 100,
+      unitPriceCents: 25,
+      lineCostCents: 2500,
+    });
     expect(r.lines[0].raised).toEqual({ plainQty: 92, extraQty: 8, plainCostCents: 4600, savingCents: 2100 });
     expect(r.totals.buildCents).toBe(2500);
     expect(r).toMatchObject({ method: 'exact', proven: true });
@@ -93,21 +116,35 @@ describe('supplier choice with shipping (hand-worked)', () => {
     // With Delta shipping 470: Delta 530 > Charlie 518 <- Charlie.
     const mk = (deltaShip: number) =>
       project({
-        parts: [part('p1', [offer({ id: 'c1', supplier: 'Charlie', currency: 'EUR', breaks: flat(5) }), offer({ id: 'd1', supplier: 'Delta', breaks: flat(6) })])],
+        parts: [
+          part('p1', [
+            offer({ id: 'c1', supplier: 'Charlie', currency: 'EUR', breaks: flat(5) }),
+            offer({ id: 'd1', supplier: 'Delta', breaks: flat(6) }),
+          ]),
+        ],
         bom: [line('L1', 'p1', 10)],
         suppliers: [ship('Charlie', 400, 'EUR'), ship('Delta', deltaShip)],
         exchangeRates: { EUR: 1.15 },
       });
     expect(costProject(mk(450)).totals.buildCents).toBe(510);
     const r = costProject(mk(470));
-    expect(r.lines[0]).toMatchObject({ supplier: 'Charlie', offerCurrency: 'EUR', offerCostCents: 50, exchangeRate: 1.15, lineCostCents: 58 });
+    expect(r.lines[0]).toMatchObject({
+      supplier: 'Charlie',
+      offerCurrency: 'EUR',
+      offerCostCents: 50,
+      exchangeRate: 1.15,
+      lineCostCents: 58,
+    });
     expect(r.totals).toMatchObject({ partsCents: 58, shippingCents: 460, buildCents: 518 });
   });
 
   it('no single supplier covers every line', () => {
     const r = costProject(
       project({
-        parts: [part('p1', [offer({ id: 'a1', supplier: 'Alpha', breaks: flat(10) })]), part('p2', [offer({ id: 'b2', supplier: 'Bravo', breaks: flat(10) })])],
+        parts: [
+          part('p1', [offer({ id: 'a1', supplier: 'Alpha', breaks: flat(10) })]),
+          part('p2', [offer({ id: 'b2', supplier: 'Bravo', breaks: flat(10) })]),
+        ],
         bom: [line('L1', 'p1', 1), line('L2', 'p2', 1)],
         suppliers: [ship('Alpha', 100), ship('Bravo', 100)],
       }),
@@ -125,19 +162,41 @@ describe('quantities, raised orders and totals through costProject (hand-worked)
     // The plan buys 25 at 9c = 225c.
     // Second line: 1 per rig x 4 x 1.1 = 4.4 -> 5 + 2 = 7 at 33c = 231c. Parts 456c; shipping 350c -> 806c.
     // Per kit 806 / 4 = 201.5 -> 202 (half-up). Parts per kit 456 / 4 = 114.
-    const breaks = [{ minQty: 1, unitPriceCents: 12 }, { minQty: 25, unitPriceCents: 9 }, { minQty: 100, unitPriceCents: 6 }];
+    const breaks = [
+      { minQty: 1, unitPriceCents: 12 },
+      { minQty: 25, unitPriceCents: 9 },
+      { minQty: 100, unitPriceCents: 6 },
+    ];
     const r = costProject(
       project({
-        kits: 4, attritionFraction: 0.1, sparesPerLine: 2,
-        parts: [part('p1', [offer({ id: 'a1', supplier: 'Alpha', breaks, minOrder: 10, orderMultiple: 5 })]), part('p2', [offer({ id: 'a2', supplier: 'Alpha', breaks: flat(33) })])],
+        kits: 4,
+        attritionFraction: 0.1,
+        sparesPerLine: 2,
+        parts: [
+          part('p1', [offer({ id: 'a1', supplier: 'Alpha', breaks, minOrder: 10, orderMultiple: 5 })]),
+          part('p2', [offer({ id: 'a2', supplier: 'Alpha', breaks: flat(33) })]),
+        ],
         bom: [line('L1', 'p1', 3), line('L2', 'p2', 1)],
         suppliers: [ship('Alpha', 350)],
       }),
     );
-    expect(r.lines[0]).toMatchObject({ neededQty: 16, orderQty: 25, breakMinQty: 25, unitPriceCents: 9, lineCostCents: 225 });
+    expect(r.lines[0]).toMatchObject({
+      neededQty: 16,
+      orderQty: 25,
+      breakMinQty: 25,
+      unitPriceCents: 9,
+      lineCostCents: 225,
+    });
     expect(r.lines[0].raised).toEqual({ plainQty: 20, extraQty: 5, plainCostCents: 240, savingCents: 15 });
     expect(r.lines[1]).toMatchObject({ neededQty: 7, orderQty: 7, breakMinQty: 1, lineCostCents: 231, raised: null });
-    expect(r.totals).toEqual({ partsCents: 456, shippingCents: 350, buildCents: 806, perKitCents: 202, perKitPartsCents: 114, unpricedLines: 0 });
+    expect(r.totals).toEqual({
+      partsCents: 456,
+      shippingCents: 350,
+      buildCents: 806,
+      perKitCents: 202,
+      perKitPartsCents: 114,
+      unpricedLines: 0,
+    });
     expect(r.raisedSavingsCents).toBe(15);
   });
 
@@ -148,19 +207,31 @@ describe('quantities, raised orders and totals through costProject (hand-worked)
     // Supply 900 + 10 + 120 = 1030; RF 200 + 50 = 250; other 80 + 30 = 110.
     // Stage subtotals: PA 200 + 120 = 320; LPF 50; RX 80; General 900 + 10 + 30 = 940.
     const items: [string, string | null, string, number][] = [
-      ['pa', 'st-pa', 'mosfet', 200], ['tor', 'st-lpf', 'inductor', 50], ['mix', 'st-rx', 'ic', 80],
-      ['xfmr', null, 'transformer', 900], ['fuse', null, 'Fuse', 10], ['cap', 'st-pa', 'supply', 120], ['knob', null, 'hardware', 30],
+      ['pa', 'st-pa', 'mosfet', 200],
+      ['tor', 'st-lpf', 'inductor', 50],
+      ['mix', 'st-rx', 'ic', 80],
+      ['xfmr', null, 'transformer', 900],
+      ['fuse', null, 'Fuse', 10],
+      ['cap', 'st-pa', 'supply', 120],
+      ['knob', null, 'hardware', 30],
     ];
     const r = costProject(
       project({
         stages: [stage('st-rx', 'receiver', 'Receiver'), stage('st-pa', 'final', 'PA'), stage('st-lpf', 'lpf', 'LPF')],
-        parts: items.map(([id, , cat, c]) => part(id, [offer({ id: `o-${id}`, supplier: 'Alpha', breaks: flat(c) })], { category: cat })),
+        parts: items.map(([id, , cat, c]) =>
+          part(id, [offer({ id: `o-${id}`, supplier: 'Alpha', breaks: flat(c) })], { category: cat }),
+        ),
         bom: items.map(([id, st]) => line(`L-${id}`, id, 1, { stageId: st })),
         suppliers: [ship('Alpha', 0)],
       }),
     );
     expect(r.sections.map((s) => [s.section, s.partsCents])).toEqual([['supply', 1030], ['rf', 250], ['other', 110]]);
-    expect(r.stages.map((s) => [s.name, s.partsCents])).toEqual([['Receiver', 80], ['PA', 320], ['LPF', 50], ['General', 940]]);
+    expect(r.stages.map((s) => [s.name, s.partsCents])).toEqual([
+      ['Receiver', 80],
+      ['PA', 320],
+      ['LPF', 50],
+      ['General', 940],
+    ]);
   });
 });
 
@@ -174,23 +245,50 @@ describe('flags: unpriced lines stay in the list at zero cost', () => {
           part('yen', [offer({ id: 'y', supplier: 'Kilo', currency: 'JPY', breaks: flat(100) })]),
           part('ok', [offer({ id: 'z', supplier: 'Alpha', breaks: flat(25) })]),
         ],
-        bom: [line('L1', 'none', 1), line('L2', 'noprice', 1), line('L3', 'yen', 1), line('L4', 'ghost', 1), line('L5', 'ok', 2, { stageId: 'gone' })],
+        bom: [
+          line('L1', 'none', 1),
+          line('L2', 'noprice', 1),
+          line('L3', 'yen', 1),
+          line('L4', 'ghost', 1),
+          line('L5', 'ok', 2, { stageId: 'gone' }),
+        ],
         suppliers: [ship('Alpha', 100)],
       }),
     );
-    expect(r.lines.map((l) => l.flags)).toEqual([['no-offer'], ['no-price'], ['no-rate'], ['unknown-part'], ['unknown-stage']]);
+    expect(r.lines.map((l) => l.flags)).toEqual([
+      ['no-offer'],
+      ['no-price'],
+      ['no-rate'],
+      ['unknown-part'],
+      ['unknown-stage'],
+    ]);
     expect(r.lines.slice(0, 4).every((l) => l.lineCostCents === 0 && l.supplier === null)).toBe(true);
     // Only L5 priced: 2 x 25 = 50 + 100 shipping = 150.
     expect(r.totals).toMatchObject({ buildCents: 150, unpricedLines: 4 });
     expect(r.stages.map((s) => s.name)).toEqual(['General']);
     const rules = r.findings.map((f) => f.rule);
-    expect(rules).toEqual(expect.arrayContaining(['cost.no-offer', 'cost.no-price', 'cost.no-rate', 'cost.unknown-part', 'cost.unknown-stage', 'cost.incomplete']));
+    expect(rules).toEqual(
+      expect.arrayContaining([
+        'cost.no-offer',
+        'cost.no-price',
+        'cost.no-rate',
+        'cost.unknown-part',
+        'cost.unknown-stage',
+        'cost.incomplete',
+      ]),
+    );
     expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
   });
 
   it('zero or absurd kits: a fail finding, no NaN, per-kit null', () => {
     for (const kits of [0, -3, Number.NaN, Infinity]) {
-      const r = costProject(project({ kits, parts: [part('p', [offer({ id: 'o', supplier: 'A', breaks: flat(5) })])], bom: [line('L', 'p', 2)] }));
+      const r = costProject(
+        project({
+          kits,
+          parts: [part('p', [offer({ id: 'o', supplier: 'A', breaks: flat(5) })])],
+          bom: [line('L', 'p', 2)],
+        }),
+      );
       expect(r.findings.some((f) => f.rule === 'cost.kits' && f.severity === 'fail')).toBe(true);
       expect(r.totals.perKitCents).toBeNull();
       expect(r.totals.buildCents).toBe(0);
@@ -218,7 +316,12 @@ describe('flags: unpriced lines stay in the list at zero cost', () => {
   });
 
   it('a supplier with no shipping entry is counted at 0 shipping with a caution', () => {
-    const r = costProject(project({ parts: [part('p', [offer({ id: 'o', supplier: 'Nowhere', breaks: flat(5) })])], bom: [line('L', 'p', 2)] }));
+    const r = costProject(
+      project({
+        parts: [part('p', [offer({ id: 'o', supplier: 'Nowhere', breaks: flat(5) })])],
+        bom: [line('L', 'p', 2)],
+      }),
+    );
     expect(r.totals.buildCents).toBe(10);
     expect(r.findings.find((f) => f.rule === 'cost.shipping')?.severity).toBe('caution');
   });

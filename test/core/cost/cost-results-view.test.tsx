@@ -12,12 +12,29 @@ describe('CostResults view', () => {
       project({
         stages: [stage('pa', 'final', 'PA')],
         parts: [
-          part('p1', [offer({ id: 'a1', supplier: 'Alpha', breaks: flat(100) }), offer({ id: 'b1', supplier: 'Bravo', breaks: flat(300) })], { description: '<script>x</script> 10 kΩ' }),
-          part('p2', [offer({ id: 'a2', supplier: 'Alpha', breaks: flat(300) }), offer({ id: 'b2', supplier: 'Bravo', breaks: [{ minQty: 1, unitPriceCents: 100 }, { minQty: 12, unitPriceCents: 50 }] })]),
+          part(
+            'p1',
+            [
+              offer({ id: 'a1', supplier: 'Alpha', breaks: flat(100) }),
+              offer({ id: 'b1', supplier: 'Bravo', breaks: flat(300) }),
+            ],
+            { description: '<script>x</script> 10 kΩ' },
+          ),
+          part('p2', [
+            offer({ id: 'a2', supplier: 'Alpha', breaks: flat(300) }),
+            offer({
+              id: 'b2',
+              supplier: 'Bravo',
+              breaks: [{ minQty: 1, unitPriceCents: 100 }, { minQty: 12, unitPriceCents: 50 }],
+            }),
+          ]),
           part('p3', []),
         ],
         bom: [line('L1', 'p1', 10, { stageId: 'pa' }), line('L2', 'p2', 10), line('L3', 'p3', 1)],
-        suppliers: [{ name: 'Alpha', shippingCents: 500, currency: 'USD' }, { name: 'Bravo', shippingCents: 500, currency: 'USD' }],
+        suppliers: [
+          { name: 'Alpha', shippingCents: 500, currency: 'USD' },
+          { name: 'Bravo', shippingCents: 500, currency: 'USD' },
+        ],
       }),
     );
     const html = String(await (<CostResults report={r} currency="USD" />).toString());

@@ -36,7 +36,11 @@ describe('minor units (ISO 4217: JPY 0, USD 2, EUR 2)', () => {
     // Build 737 cents = USD 7.37. (Read with two-decimal JPY, the old code made it 300 x 0.0067 = 2 cents.)
     const r = costProject(
       project({
-        parts: [part('p1', [offer({ id: 'j1', supplier: 'Kappa', currency: 'JPY', breaks: [{ minQty: 1, unitPriceCents: 30 }] })])],
+        parts: [
+          part('p1', [
+            offer({ id: 'j1', supplier: 'Kappa', currency: 'JPY', breaks: [{ minQty: 1, unitPriceCents: 30 }] }),
+          ]),
+        ],
         bom: [line('L1', 'p1', 10)],
         suppliers: [{ name: 'Kappa', shippingCents: 800, currency: 'JPY' }],
         exchangeRates: { JPY: 0.0067 },
@@ -51,7 +55,11 @@ describe('minor units (ISO 4217: JPY 0, USD 2, EUR 2)', () => {
     const r = costProject(
       project({
         currency: 'JPY',
-        parts: [part('p1', [offer({ id: 'u1', supplier: 'Alpha', currency: 'USD', breaks: [{ minQty: 1, unitPriceCents: 125 }] })])],
+        parts: [
+          part('p1', [
+            offer({ id: 'u1', supplier: 'Alpha', currency: 'USD', breaks: [{ minQty: 1, unitPriceCents: 125 }] }),
+          ]),
+        ],
         bom: [line('L1', 'p1', 4)],
         suppliers: [{ name: 'Alpha', shippingCents: 500, currency: 'USD' }],
         exchangeRates: { USD: 150 },
@@ -70,14 +78,26 @@ describe('minor units (ISO 4217: JPY 0, USD 2, EUR 2)', () => {
     expect(parsePrice('150', '.', () => 0)).toMatchObject({ ok: true, cents: 150 });
     // 12.5 JPY has a decimal JPY does not have: half-up to 13 yen, with the rounding reported.
     expect(parsePrice('12.5', '.', () => 0)).toMatchObject({ ok: true, cents: 13, roundedFrom: '12.5' });
-    const preview = previewImport('Description,Qty,Supplier,Price,Currency\nCrystal,1,Kappa,150,JPY\nDiode,1,Alpha,0.04,USD', {
-      kind: 'parts-list', defaultCurrency: 'USD',
-    });
+    const preview = previewImport(
+      'Description,Qty,Supplier,Price,Currency\nCrystal,1,Kappa,150,JPY\nDiode,1,Alpha,0.04,USD',
+      {
+        kind: 'parts-list',
+        defaultCurrency: 'USD',
+      },
+    );
     expect(preview.rows.map((x) => [x.values.priceCents, x.values.currency])).toEqual([[150, 'JPY'], [4, 'USD']]);
   });
 
   it('offer and shipping boxes: whole yen are stored as yen; a yen fraction is refused naming the field', () => {
-    const typed = { supplier: 'Kappa', sku: 'K-1', currency: 'JPY', breaks: '1: 150, 100: 95', minOrder: '1', orderMultiple: '1', stockNote: '' };
+    const typed = {
+      supplier: 'Kappa',
+      sku: 'K-1',
+      currency: 'JPY',
+      breaks: '1: 150, 100: 95',
+      minOrder: '1',
+      orderMultiple: '1',
+      stockNote: '',
+    };
     const ok = parseForm(offerSpec, typed);
     expect(ok.ok && ok.value.breaks).toEqual([{ minQty: 1, unitPriceCents: 150 }, { minQty: 100, unitPriceCents: 95 }]);
     const stored = { ...typed, minOrder: 1, orderMultiple: 1, breaks: [{ minQty: 1, unitPriceCents: 150 }] };
@@ -86,7 +106,9 @@ describe('minor units (ISO 4217: JPY 0, USD 2, EUR 2)', () => {
     expect(again.ok && again.value.breaks).toEqual(stored.breaks);
     const bad = parseForm(offerSpec, { ...typed, breaks: '1: 150.50' });
     expect(bad.ok).toBe(false);
-    expect(!bad.ok && bad.errors.breaks).toBe('Price breaks: 1: "150.50" has decimals; this currency has none (ISO 4217 minor unit)');
+    expect(!bad.ok && bad.errors.breaks).toBe(
+      'Price breaks: 1: "150.50" has decimals; this currency has none (ISO 4217 minor unit)',
+    );
     // the box shows whole yen: "150", never "150.00"
     expect(formValues(offerSpec, stored).breaks).toBe('1: 150');
     expect(formValues(supplierSpec, { name: 'Kappa', shippingCents: 800, currency: 'JPY' }).shipping).toBe('800');
@@ -102,8 +124,20 @@ describe('minor units (ISO 4217: JPY 0, USD 2, EUR 2)', () => {
 // not confirmed against the table). 1.250 KWD is 1250 fils; 0.125 BHD is 125 fils; 2.005 OMR is 2005 baisa.
 describe('three-decimal currencies (KWD, BHD, OMR)', () => {
   it('money boxes show and read three decimals; a fourth is refused naming the field', () => {
-    for (const [currency, typed, minor] of [['KWD', '1.250', 1250], ['BHD', '0.125', 125], ['OMR', '2.005', 2005]] as const) {
-      const offerTyped = { supplier: 'Lambda', sku: 'L-1', currency, breaks: `1: ${typed}`, minOrder: '1', orderMultiple: '1', stockNote: '' };
+    for (const [currency, typed, minor] of [
+      ['KWD', '1.250', 1250],
+      ['BHD', '0.125', 125],
+      ['OMR', '2.005', 2005],
+    ] as const) {
+      const offerTyped = {
+        supplier: 'Lambda',
+        sku: 'L-1',
+        currency,
+        breaks: `1: ${typed}`,
+        minOrder: '1',
+        orderMultiple: '1',
+        stockNote: '',
+      };
       const ok = parseForm(offerSpec, offerTyped);
       expect(ok.ok && ok.value.breaks).toEqual([{ minQty: 1, unitPriceCents: minor }]);
       const stored = { ...offerTyped, minOrder: 1, orderMultiple: 1, breaks: [{ minQty: 1, unitPriceCents: minor }] };
@@ -114,7 +148,9 @@ describe('three-decimal currencies (KWD, BHD, OMR)', () => {
       expect(formValues(supplierSpec, { name: 'Lambda', shippingCents: minor, currency }).shipping).toBe(typed);
     }
     const bad = parseForm(supplierSpec, { name: 'Lambda', shipping: '1.2505', currency: 'KWD' });
-    expect(!bad.ok && bad.errors.shipping).toBe('Shipping per order "1.2505" has more than three decimals; amounts are kept in whole minor units (ISO 4217)');
+    expect(!bad.ok && bad.errors.shipping).toBe(
+      'Shipping per order "1.2505" has more than three decimals; amounts are kept in whole minor units (ISO 4217)',
+    );
     // USD keeps two: "0.125" is refused as before
     expect(parseForm(supplierSpec, { name: 'Alpha', shipping: '0.125', currency: 'USD' }).ok).toBe(false);
   });
@@ -126,7 +162,11 @@ describe('three-decimal currencies (KWD, BHD, OMR)', () => {
     // 4 pieces at 1.250 KWD = 5.000 KWD; shipping 0.750 KWD; build 5.750 KWD
     const p = project({
       currency: 'KWD',
-      parts: [part('p1', [offer({ id: 'o1', supplier: 'Lambda', currency: 'KWD', breaks: [{ minQty: 1, unitPriceCents: 1250 }] })])],
+      parts: [
+        part('p1', [
+          offer({ id: 'o1', supplier: 'Lambda', currency: 'KWD', breaks: [{ minQty: 1, unitPriceCents: 1250 }] }),
+        ]),
+      ],
       bom: [line('b1', 'p1', 4)],
       suppliers: [{ name: 'Lambda', shippingCents: 750, currency: 'KWD' }],
     });
@@ -138,8 +178,15 @@ describe('three-decimal currencies (KWD, BHD, OMR)', () => {
     expect(recs[1][recs[0].indexOf('Line cost KWD')]).toBe('5.000');
     expect(recs.find((x) => x[0].startsWith('Total build'))![recs[0].indexOf('Line cost KWD')]).toBe('5.750');
     // CSV prices are read with three decimals: 0.125 KWD is 125 fils, no rounding
-    expect(parsePrice('0.125', '.', () => minorDigits('KWD'))).toMatchObject({ ok: true, cents: 125, roundedFrom: null });
-    const preview = previewImport('Description,Qty,Supplier,Price,Currency\nRelay,1,Lambda,1.250,KWD', { kind: 'parts-list', defaultCurrency: 'USD' });
+    expect(parsePrice('0.125', '.', () => minorDigits('KWD'))).toMatchObject({
+      ok: true,
+      cents: 125,
+      roundedFrom: null,
+    });
+    const preview = previewImport('Description,Qty,Supplier,Price,Currency\nRelay,1,Lambda,1.250,KWD', {
+      kind: 'parts-list',
+      defaultCurrency: 'USD',
+    });
     expect(preview.rows[0].values).toMatchObject({ priceCents: 1250, currency: 'KWD' });
   });
 });

@@ -38,7 +38,17 @@ describe('club demo: the Copperleaf order sheet, worked by hand', () => {
 
   it('the plan sheet: SKU, quantities, break used, unit and line totals, shipping and order total', () => {
     expect(sheet).toBeDefined();
-    const got = byRefs(sheet.lines).map((l) => [l.refs, l.sku, l.qty, l.neededQty, l.breakMinQty, l.offerCurrency, l.unitPriceCents, l.offerCostCents, l.lineCostCents]);
+    const got = byRefs(sheet.lines).map((l) => [
+      l.refs,
+      l.sku,
+      l.qty,
+      l.neededQty,
+      l.breakMinQty,
+      l.offerCurrency,
+      l.unitPriceCents,
+      l.offerCostCents,
+      l.lineCostCents,
+    ]);
     expect(got).toEqual(byRefs(HAND.map((h) => ({ refs: h[0], h }))).map((x) => x.h));
     expect(sheet.partsCents).toBe(14376);
     expect(sheet.shippingCents).toBe(1296);
@@ -48,23 +58,56 @@ describe('club demo: the Copperleaf order sheet, worked by hand', () => {
   it('the orders CSV carries the same rows and the supplier totals', () => {
     const recs = parseCsv(orderSheetsToCsv(report).replace(/^\uFEFF/, '')).records.filter((r) => r[0] === S3);
     const lines = recs.filter((r) => r[1] !== '');
-    const want = HAND.map((h) => [S3, h[1], h[0], String(h[2]), String(h[3]), String(h[4]), h[5], (h[6] / 100).toFixed(2), (h[7] / 100).toFixed(2), (h[8] / 100).toFixed(2)]);
+    const want = HAND.map((h) => [
+      S3,
+      h[1],
+      h[0],
+      String(h[2]),
+      String(h[3]),
+      String(h[4]),
+      h[5],
+      (h[6] / 100).toFixed(2),
+      (h[7] / 100).toFixed(2),
+      (h[8] / 100).toFixed(2),
+    ]);
     const cells = lines.map((r) => [r[0], r[1], r[3], r[4], r[5], r[6], r[7], r[8], r[9], r[10]]);
-    expect([...cells].sort((a, b) => a[2].localeCompare(b[2]))).toEqual([...want].sort((a, b) => a[2].localeCompare(b[2])));
-    expect(recs.filter((r) => r[1] === '').map((r) => [r[2], r[10]])).toEqual([['Total parts', '143.76'], ['Shipping', '12.96'], ['Total order', '156.72']]);
+    expect([...cells].sort((a, b) => a[2].localeCompare(b[2]))).toEqual(
+      [...want].sort((a, b) => a[2].localeCompare(b[2])),
+    );
+    expect(recs.filter((r) => r[1] === '').map((r) => [r[2], r[10]])).toEqual([
+      ['Total parts', '143.76'],
+      ['Shipping', '12.96'],
+      ['Total order', '156.72'],
+    ]);
   });
 
-  it.skipIf(!hasPoppler)("the organiser's pack prints the sheet with the same figures", async () => {
-    const bytes = await buildPack(club30m, evaluate(club30m), { paper: 'a4', dataDate: '2026-12-02', part: 'organiser' });
-    const text = pagesText(writeTemp(bytes, 'club-orders.pdf')).join('\n').replace(/\s+/g, ' ');
-    const at = text.indexOf(`Order sheet — ${S3}`) >= 0 ? text.indexOf(`Order sheet — ${S3}`) : text.indexOf(S3, text.indexOf('Order sheets per supplier'));
-    expect(at).toBeGreaterThan(0);
-    const part = text.slice(at, text.indexOf(`Order total ${S3}`, at) + 200);
-    for (const [, sku, qty, , brk, , unit, offer, usd] of HAND) {
-      expect(part).toMatch(new RegExp(`${sku} .*? ${qty} ${brk} EUR ${(unit / 100).toFixed(2)} EUR ${(offer / 100).toFixed(2)} USD ${(usd / 100).toFixed(2)}`));
-    }
-    // pdftotext reads the bold total row's amount after the next table's header, so the two are matched apart
-    expect(part).toMatch(/Parts USD 143\.76 Shipping USD 12\.96 Order total Copperleaf Elektronik /);
-    expect(part.slice(0, part.indexOf('Harbor Radio Surplus'))).toContain('USD 156.72');
-  }, 120_000);
+  it.skipIf(!hasPoppler)(
+    "the organiser's pack prints the sheet with the same figures",
+    async () => {
+      const bytes = await buildPack(club30m, evaluate(club30m), {
+        paper: 'a4',
+        dataDate: '2026-12-02',
+        part: 'organiser',
+      });
+      const text = pagesText(writeTemp(bytes, 'club-orders.pdf')).join('\n').replace(/\s+/g, ' ');
+      const at =
+        text.indexOf(`Order sheet — ${S3}`) >= 0
+          ? text.indexOf(`Order sheet — ${S3}`)
+          : text.indexOf(S3, text.indexOf('Order sheets per supplier'));
+      expect(at).toBeGreaterThan(0);
+      const part = text.slice(at, text.indexOf(`Order total ${S3}`, at) + 200);
+      for (const [, sku, qty, , brk, , unit, offer, usd] of HAND) {
+        expect(part).toMatch(
+          new RegExp(
+            `${sku} .*? ${qty} ${brk} EUR ${(unit / 100).toFixed(2)} EUR ${(offer / 100).toFixed(2)} USD ` +
+              `${(usd / 100).toFixed(2)}`,
+          ),
+        );
+      }
+      // pdftotext reads the bold total row's amount after the next table's header, so the two are matched apart
+      expect(part).toMatch(/Parts USD 143\.76 Shipping USD 12\.96 Order total Copperleaf Elektronik /);
+      expect(part.slice(0, part.indexOf('Harbor Radio Surplus'))).toContain('USD 156.72');
+    },
+    120_000,
+  );
 });

@@ -1,6 +1,13 @@
 // Hand-worked examples: the arithmetic in each comment is the outside reference.
 import { describe, expect, it } from 'vitest';
-import { bestQuote, breakMinQtyAt, neededQty, orderQty, quoteOffer, unitPriceAt } from '../../../src/core/cost/quantities';
+import {
+  bestQuote,
+  breakMinQtyAt,
+  neededQty,
+  orderQty,
+  quoteOffer,
+  unitPriceAt,
+} from '../../../src/core/cost/quantities';
 import { offer } from './fixture';
 
 describe('neededQty', () => {
@@ -54,14 +61,27 @@ describe('orderQty and price breaks', () => {
     expect(breakMinQtyAt(o.breaks, 25)).toBe(25);
   });
   it('hand-worked: need 90 -> 90 x 9c = 810c; 100 x 6c = 600c is cheaper (saves 210c)', () => {
-    expect(bestQuote(90, offer({ id: 'a', supplier: 'S', breaks }))).toEqual({ qty: 100, unitPriceCents: 6, costCents: 600 });
+    expect(bestQuote(90, offer({ id: 'a', supplier: 'S', breaks }))).toEqual({
+      qty: 100,
+      unitPriceCents: 6,
+      costCents: 600,
+    });
   });
   it('hand-worked: need 5 -> 5 x 12c = 60c; 25 x 9c = 225c is dearer: the plain order stays', () => {
-    expect(bestQuote(5, offer({ id: 'a', supplier: 'S', breaks }))).toEqual({ qty: 5, unitPriceCents: 12, costCents: 60 });
+    expect(bestQuote(5, offer({ id: 'a', supplier: 'S', breaks }))).toEqual({
+      qty: 5,
+      unitPriceCents: 12,
+      costCents: 60,
+    });
   });
   it('hand-worked: a multiple carries the order past a break: need 26, multiple 25 -> 50 x 8c = 400c', () => {
     // 1-29 at 10c, from 30 at 8c; multiple 25: allowed 50, 75, ... 50 is past 30, so 50 x 8c = 400c.
-    const o = offer({ id: 'a', supplier: 'S', breaks: [{ minQty: 1, unitPriceCents: 10 }, { minQty: 30, unitPriceCents: 8 }], orderMultiple: 25 });
+    const o = offer({
+      id: 'a',
+      supplier: 'S',
+      breaks: [{ minQty: 1, unitPriceCents: 10 }, { minQty: 30, unitPriceCents: 8 }],
+      orderMultiple: 25,
+    });
     expect(bestQuote(26, o)).toEqual({ qty: 50, unitPriceCents: 8, costCents: 400 });
   });
   it('an offer with no usable break has no quote', () => {

@@ -19,12 +19,18 @@ const RATES: Record<string, number> = { EUR: 1.15, GBP: 1.27 };
 const offerArb = fc.record({
   supplier: fc.constantFrom(...SUPPLIERS),
   currency: fc.constantFrom('USD', 'EUR', 'GBP'),
-  breaks: fc.array(fc.record({ minQty: fc.integer({ min: 1, max: 60 }), unitPriceCents: fc.integer({ min: 0, max: 500 }) }), { minLength: 0, maxLength: 3 }),
+  breaks: fc.array(
+    fc.record({ minQty: fc.integer({ min: 1, max: 60 }), unitPriceCents: fc.integer({ min: 0, max: 500 }) }),
+    { minLength: 0, maxLength: 3 },
+  ),
   minOrder: fc.integer({ min: 0, max: 30 }),
   orderMultiple: fc.integer({ min: 1, max: 10 }),
 });
 const caseArb = fc.record({
-  lines: fc.array(fc.record({ qty: fc.integer({ min: 0, max: 12 }), offers: fc.array(offerArb, { maxLength: 3 }) }), { minLength: 1, maxLength: 4 }),
+  lines: fc.array(fc.record({ qty: fc.integer({ min: 0, max: 12 }), offers: fc.array(offerArb, { maxLength: 3 }) }), {
+    minLength: 1,
+    maxLength: 4,
+  }),
   shipping: fc.array(fc.integer({ min: 0, max: 2000 }), { minLength: SUPPLIERS.length, maxLength: SUPPLIERS.length }),
   shipCurrency: fc.constantFrom('USD', 'EUR'),
   kits: fc.integer({ min: 1, max: 5 }),

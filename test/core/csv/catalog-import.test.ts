@@ -14,7 +14,8 @@ const makeId = (k: 'part' | 'offer', n: number) => `${k}-new-${n}`;
 
 const LIST_V1 = [
   'Description,Category,Ratings,SKU,Price breaks,Min order,Multiple,Currency',
-  'Electrolytic 4700 µF 35 V,capacitor,capacitanceF=4700u; voltageV=35; rippleA=2.4,D-4700,"1: 1.20, 10: 0.95",1,1,USD',
+  'Electrolytic 4700 µF 35 V,capacitor,capacitanceF=4700u; voltageV=35; rippleA=2.4,D-4700,"1: 1.20, 10: ' +
+    '0.95",1,1,USD',
   'Resistor 10 kΩ 0.25 W,resistor,resistanceOhm=10k; powerW=0.25,D-10K,"1: 0.05, 100: 0.02",100,100,USD',
   'Fuse 1 A T 5x20,fuse,ratedA=1; type=T,D-F1T,0.30,10,10,USD',
 ].join('\r\n');
@@ -23,7 +24,8 @@ const LIST_V1 = [
 // cheaper at 100 (0.02 -> 0.015 is not a USD amount: 0.01 is written), the fuse no longer listed, a relay new.
 const LIST_V2 = [
   'Description,Category,Ratings,SKU,Price breaks,Min order,Multiple,Currency',
-  'Electrolytic 4700 µF 35 V,capacitor,capacitanceF=4700u; voltageV=35; rippleA=2.4,D-4700,"1: 1.30, 10: 0.95",1,1,USD',
+  'Electrolytic 4700 µF 35 V,capacitor,capacitanceF=4700u; voltageV=35; rippleA=2.4,D-4700,"1: 1.30, 10: ' +
+    '0.95",1,1,USD',
   'Resistor 10 kΩ 0.25 W,resistor,resistanceOhm=10k; powerW=0.25,D-10K,"1: 0.05, 100: 0.01",100,100,USD',
   'Relay 12 V DPDT,relay,coilV=12; contactCarryA=2,D-RL12,"1: 2.10; 10: 1.80",1,1,USD',
 ].join('\r\n');
@@ -38,16 +40,39 @@ function importList(p: ReturnType<typeof project>, csv: string) {
 
 describe('catalog import: columns and cells', () => {
   it('guesses a supplier list’s columns (a catalog reads breaks, minimum order and multiple)', () => {
-    const m = guessMapping(['Description', 'Category', 'Ratings', 'SKU', 'Price breaks', 'MOQ', 'Pack size', 'Currency'], 'catalog');
-    expect(m).toMatchObject({ description: 0, category: 1, ratings: 2, sku: 3, breaks: 4, minOrder: 5, multiple: 6, currency: 7, supplier: null, quantity: null });
+    const m = guessMapping(
+      ['Description', 'Category', 'Ratings', 'SKU', 'Price breaks', 'MOQ', 'Pack size', 'Currency'],
+      'catalog',
+    );
+    expect(m).toMatchObject({
+      description: 0,
+      category: 1,
+      ratings: 2,
+      sku: 3,
+      breaks: 4,
+      minOrder: 5,
+      multiple: 6,
+      currency: 7,
+      supplier: null,
+      quantity: null,
+    });
     // a parts list does not read those columns
     expect(guessMapping(['Description', 'MOQ'], 'parts-list').minOrder).toBeNull();
   });
 
   it('reads breaks in each currency’s minor unit (ISO 4217: JPY 0, USD 2, KWD 3 decimals)', () => {
-    expect(parseBreakCell('1: 150, 100: 120', 'JPY', '.')).toEqual({ ok: true, breaks: [{ minQty: 1, unitPriceCents: 150 }, { minQty: 100, unitPriceCents: 120 }] });
-    expect(parseBreakCell('1: 0.125; 10: 0.1', 'KWD', '.')).toEqual({ ok: true, breaks: [{ minQty: 1, unitPriceCents: 125 }, { minQty: 10, unitPriceCents: 100 }] });
-    expect(parseBreakCell('1: 1,25; 10: 0,95', 'EUR', ',')).toEqual({ ok: true, breaks: [{ minQty: 1, unitPriceCents: 125 }, { minQty: 10, unitPriceCents: 95 }] });
+    expect(parseBreakCell('1: 150, 100: 120', 'JPY', '.')).toEqual({
+      ok: true,
+      breaks: [{ minQty: 1, unitPriceCents: 150 }, { minQty: 100, unitPriceCents: 120 }],
+    });
+    expect(parseBreakCell('1: 0.125; 10: 0.1', 'KWD', '.')).toEqual({
+      ok: true,
+      breaks: [{ minQty: 1, unitPriceCents: 125 }, { minQty: 10, unitPriceCents: 100 }],
+    });
+    expect(parseBreakCell('1: 1,25; 10: 0,95', 'EUR', ',')).toEqual({
+      ok: true,
+      breaks: [{ minQty: 1, unitPriceCents: 125 }, { minQty: 10, unitPriceCents: 95 }],
+    });
     expect(parseBreakCell('1: 150.5', 'JPY', '.').ok).toBe(false);
   });
 
@@ -62,7 +87,16 @@ describe('catalog import: columns and cells', () => {
     ].join('\n');
     const preview = previewImport(csv, opts);
     const cells = preview.rows.flatMap((r) => r.errors.map((e) => `${e.row}/${e.column}`));
-    expect(cells).toEqual(['2/Ratings', '3/Price breaks', '4/Ratings', '4/Min order', '5/Currency', '5/Price breaks', '5/Multiple', '6/Unit price']);
+    expect(cells).toEqual([
+      '2/Ratings',
+      '3/Price breaks',
+      '4/Ratings',
+      '4/Min order',
+      '5/Currency',
+      '5/Price breaks',
+      '5/Multiple',
+      '6/Unit price',
+    ]);
     expect(preview.rows.every((r) => r.errors.every((e) => e.message.length > 10))).toBe(true);
     expect(planImport(preview).ok).toBe(false);
   });
@@ -84,7 +118,15 @@ describe('catalog import: columns and cells', () => {
 });
 
 describe('catalog import: an updated list round trip', () => {
-  const start = project({ parts: [part('p-old', [offer({ id: 'o-other', supplier: 'Echo', breaks: [{ minQty: 1, unitPriceCents: 99 }] })], { description: 'Fuse 1 A T 5x20', category: 'fuse' })], bom: [] });
+  const start = project({
+    parts: [
+      part('p-old', [offer({ id: 'o-other', supplier: 'Echo', breaks: [{ minQty: 1, unitPriceCents: 99 }] })], {
+        description: 'Fuse 1 A T 5x20',
+        category: 'fuse',
+      }),
+    ],
+    bom: [],
+  });
 
   it('the first import adds new parts, and an offer on the part it already has', () => {
     const { update, after } = importList(start, LIST_V1);
@@ -94,7 +136,11 @@ describe('catalog import: an updated list round trip', () => {
     const cap = after.parts.find((p) => p.description.startsWith('Electrolytic'))!;
     // "capacitanceF=4700u" is 4.7e-3 F; breaks as written, in cents
     expect(cap.ratings).toMatchObject({ capacitanceF: 4700e-6, voltageV: 35, rippleA: 2.4 });
-    expect(cap.offers[0]).toMatchObject({ supplier: 'Delta Parts', sku: 'D-4700', breaks: [{ minQty: 1, unitPriceCents: 120 }, { minQty: 10, unitPriceCents: 95 }] });
+    expect(cap.offers[0]).toMatchObject({
+      supplier: 'Delta Parts',
+      sku: 'D-4700',
+      breaks: [{ minQty: 1, unitPriceCents: 120 }, { minQty: 10, unitPriceCents: 95 }],
+    });
     const res = after.parts.find((p) => p.description.startsWith('Resistor'))!;
     expect(res.offers[0]).toMatchObject({ minOrder: 100, orderMultiple: 100 });
     // the fuse row joins the existing fuse part (same description and category) as a second offer
@@ -142,7 +188,13 @@ describe('catalog import: an updated list round trip', () => {
   });
 
   it('price moves: up, down, mixed, terms', () => {
-    const o = (breaks: [number, number][], extra = {}) => offer({ id: 'x', supplier: 'S', breaks: breaks.map(([minQty, unitPriceCents]) => ({ minQty, unitPriceCents })), ...extra });
+    const o = (breaks: [number, number][], extra = {}) =>
+      offer({
+        id: 'x',
+        supplier: 'S',
+        breaks: breaks.map(([minQty, unitPriceCents]) => ({ minQty, unitPriceCents })),
+        ...extra,
+      });
     expect(priceMove(o([[1, 10], [10, 8]]), o([[1, 11], [10, 8]]))).toBe('up');
     expect(priceMove(o([[1, 10]]), o([[1, 10], [10, 8]]))).toBe('down'); // from 10 pieces 8 instead of 10
     expect(priceMove(o([[1, 10], [10, 8]]), o([[1, 9], [10, 9]]))).toBe('mixed');

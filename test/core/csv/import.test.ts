@@ -11,8 +11,27 @@ import { line, offer, part, project, stage } from '../cost/fixture';
 
 describe('guessMapping', () => {
   it('recognises common headers, exact synonyms before word matches, each column once', () => {
-    const m = guessMapping(['Designator', 'Qty', 'Value', 'Part description', 'Vendor', 'Order code', 'Price each', 'Needed qty']);
-    expect(m).toMatchObject({ refs: 0, quantity: 1, value: 2, description: 3, supplier: 4, sku: 5, price: 6, currency: null, category: null });
+    const m = guessMapping([
+      'Designator',
+      'Qty',
+      'Value',
+      'Part description',
+      'Vendor',
+      'Order code',
+      'Price each',
+      'Needed qty',
+    ]);
+    expect(m).toMatchObject({
+      refs: 0,
+      quantity: 1,
+      value: 2,
+      description: 3,
+      supplier: 4,
+      sku: 5,
+      price: 6,
+      currency: null,
+      category: null,
+    });
     expect(guessMapping(['Ref.', 'Menge', 'Beschreibung']).refs).toBe(0);
     expect(guessMapping(['Line qty', 'Notes']).quantity).toBe(0); // word match
   });
@@ -38,7 +57,13 @@ describe('previewImport and planImport (parts list)', () => {
     expect(preview.fileErrors).toEqual([]);
     expect(preview.rows.map((r) => r.row)).toEqual([2, 3, 5, 6, 7]);
     // Row 2: "0,02" -> 2 cents (one comma, two digits: decimal). Row 3: qty from 1 designator.
-    expect(preview.rows[0].values).toMatchObject({ refs: 'R1-R4', value: '10 kΩ', quantity: 4, priceCents: 2, currency: 'USD' });
+    expect(preview.rows[0].values).toMatchObject({
+      refs: 'R1-R4',
+      value: '10 kΩ',
+      quantity: 4,
+      priceCents: 2,
+      currency: 'USD',
+    });
     expect(preview.rows[1].values).toMatchObject({ quantity: 1, priceCents: 5 });
   });
   it('per-row errors name the row, the column and the problem; warnings do not block', () => {
@@ -64,14 +89,19 @@ describe('previewImport and planImport (parts list)', () => {
   });
   it('missing required columns block the whole file', () => {
     const p = previewImport('Supplier,Price\r\nAlpha,1.00', { kind: 'parts-list', defaultCurrency: 'USD' });
-    expect(p.fileErrors.map((e) => e.column)).toEqual(['Description / Value', 'Quantity per rig / Reference designators']);
+    expect(p.fileErrors.map((e) => e.column)).toEqual([
+      'Description / Value',
+      'Quantity per rig / Reference designators',
+    ]);
     expect(planImport(p, { takeGoodRows: true }).ok).toBe(false);
   });
 });
 
 describe('catalog import with ";" and decimal comma', () => {
   it('reads "1,250" as 1.25 in a ";" file and checks currency agreement', () => {
-    const text = 'Description;Supplier;SKU;Price;Currency\r\nRelay 12 V DPDT;Echo;E-1;1,250;EUR\r\nTrimmer 5–60 pF;Echo;E-2;EUR 0,80;USD\r\n';
+    const text =
+      'Description;Supplier;SKU;Price;Currency\r\nRelay 12 V DPDT;Echo;E-1;1,250;EUR\r\nTrimmer 5–60 ' +
+        'pF;Echo;E-2;EUR 0,80;USD\r\n';
     const p = previewImport(text, { kind: 'catalog', defaultCurrency: 'USD' });
     expect(p.delimiter).toBe(';');
     expect(p.rows[0].values).toMatchObject({ priceCents: 125, currency: 'EUR', quantity: null });
@@ -80,15 +110,39 @@ describe('catalog import with ";" and decimal comma', () => {
 });
 
 describe('costed parts list: export then import round trip', () => {
-  const names = ['Resistor 1,5 kΩ "metal film"', '=cmd|calc!A1', 'Capacitor 4,7 µF Lötfahne', '+5 V regulator, 1 A', '@risk', '-x'];
+  const names = [
+    'Resistor 1,5 kΩ "metal film"',
+    '=cmd|calc!A1',
+    'Capacitor 4,7 µF Lötfahne',
+    '+5 V regulator, 1 A',
+    '@risk',
+    '-x',
+  ];
   const p = project({
     kits: 2,
     stages: [stage('s1', 'final', 'PA, push-pull')],
     parts: names.map((d, i) =>
-      part(`p${i}`, [offer({ id: `o${i}`, supplier: i % 2 ? 'Bravo, Ltd' : 'Alpha', sku: i === 1 ? '-5' : `SKU "${i}"`, currency: i % 2 ? 'EUR' : 'USD', breaks: [{ minQty: 1, unitPriceCents: 123 + i }] })], { description: d, ratings: { value: i === 2 ? '4,7 µF' : `${i}` } }),
+      part(
+        `p${i}`,
+        [
+          offer({
+            id: `o${i}`,
+            supplier: i % 2 ? 'Bravo, Ltd' : 'Alpha',
+            sku: i === 1 ? '-5' : `SKU "${i}"`,
+            currency: i % 2 ? 'EUR' : 'USD',
+            breaks: [{ minQty: 1, unitPriceCents: 123 + i }],
+          }),
+        ],
+        { description: d, ratings: { value: i === 2 ? '4,7 µF' : `${i}` } },
+      ),
     ),
-    bom: names.map((_, i) => line(`L${i}`, `p${i}`, i + 1, { refs: i === 0 ? 'R1, R2' : `X${i}`, stageId: i < 3 ? 's1' : null })),
-    suppliers: [{ name: 'Alpha', shippingCents: 100, currency: 'USD' }, { name: 'Bravo, Ltd', shippingCents: 200, currency: 'EUR' }],
+    bom: names.map((_, i) =>
+      line(`L${i}`, `p${i}`, i + 1, { refs: i === 0 ? 'R1, R2' : `X${i}`, stageId: i < 3 ? 's1' : null }),
+    ),
+    suppliers: [
+      { name: 'Alpha', shippingCents: 100, currency: 'USD' },
+      { name: 'Bravo, Ltd', shippingCents: 200, currency: 'EUR' },
+    ],
     exchangeRates: { EUR: 1.1 },
   });
   const report = costProject(p);
@@ -106,18 +160,31 @@ describe('costed parts list: export then import round trip', () => {
     expect(plan.ok).toBe(true);
     if (!plan.ok) return;
     expect(plan.rows.map((r) => r.description)).toEqual(names);
-    expect(plan.rows.map((r) => [r.refs, r.quantity, r.value])).toEqual(names.map((_, i) => [i === 0 ? 'R1, R2' : `X${i}`, i + 1, i === 2 ? '4,7 µF' : `${i}`]));
+    expect(plan.rows.map((r) => [r.refs, r.quantity, r.value])).toEqual(
+      names.map((_, i) => [i === 0 ? 'R1, R2' : `X${i}`, i + 1, i === 2 ? '4,7 µF' : `${i}`]),
+    );
     expect(plan.rows.map((r) => [r.supplier, r.sku, r.priceCents, r.currency])).toEqual(
-      names.map((_, i) => [i % 2 ? 'Bravo, Ltd' : 'Alpha', i === 1 ? '-5' : `SKU "${i}"`, 123 + i, i % 2 ? 'EUR' : 'USD']),
+      names.map((_, i) => [
+        i % 2 ? 'Bravo, Ltd' : 'Alpha',
+        i === 1 ? '-5' : `SKU "${i}"`,
+        123 + i,
+        i % 2 ? 'EUR' : 'USD',
+      ]),
     );
     // Lines 0-2 were on stage "PA, push-pull" (s1), the rest on General (no stage).
-    expect(plan.rows.map((r) => [r.stage, r.stageId])).toEqual(names.map((_, i) => (i < 3 ? ['PA, push-pull', 's1'] : ['General', null])));
+    expect(plan.rows.map((r) => [r.stage, r.stageId])).toEqual(
+      names.map((_, i) => (i < 3 ? ['PA, push-pull', 's1'] : ['General', null])),
+    );
   });
 
   it('a stage name the project does not have is refused with its row and the stages named', () => {
     const preview = previewImport(csv, { kind: 'parts-list', defaultCurrency: 'USD', stages: [] });
     expect(preview.rows[0].errors).toEqual([
-      { row: 2, column: 'Stage', message: '"PA, push-pull" is not a stage of this project (stages: none; "General" = no stage).' },
+      {
+        row: 2,
+        column: 'Stage',
+        message: '"PA, push-pull" is not a stage of this project (stages: none; "General" = no stage).',
+      },
     ]);
     expect(preview.rows[3].errors).toEqual([]);
   });

@@ -1,5 +1,6 @@
 // The club demo's costed parts list exported as CSV and imported into a copy of the project: the same lines,
-// stages, quantities, role bindings and totals come back; the totals rows are recognised and skipped; importing into a list that
+// stages, quantities, role bindings and totals come back; the totals rows are recognised and skipped; importing into a
+// list that
 // already holds the lines never doubles them (merge or skip). The reference is the original project itself.
 import { describe, expect, it } from 'vitest';
 import { costProject } from '../../../src/core/cost/cost-project';
@@ -15,11 +16,25 @@ const ids = () => {
   return (kind: IdKind) => `imp-${kind}-${n++}`;
 };
 
-/** The lines as the comparison sees them: part, stage, quantity per rig, designators and role binding, in list order. */
-const lineView = (p: Project) => p.bom.map((l) => ({ partId: l.partId, stageId: l.stageId, qtyPerRig: l.qtyPerRig, refs: l.refs, roleId: l.roleId ?? null }));
+/**
+ * The lines as the comparison sees them: part, stage, quantity per rig, designators and role binding, in list order.
+ */
+const lineView = (p: Project) =>
+  p.bom.map((l) => ({
+    partId: l.partId,
+    stageId: l.stageId,
+    qtyPerRig: l.qtyPerRig,
+    refs: l.refs,
+    roleId: l.roleId ?? null,
+  }));
 
 function importInto(target: Project, csv: string, mode: 'merge' | 'skip', delimiter?: ';') {
-  const preview = previewImport(csv, { kind: 'parts-list', defaultCurrency: target.currency, stages: target.stages, delimiter });
+  const preview = previewImport(csv, {
+    kind: 'parts-list',
+    defaultCurrency: target.currency,
+    stages: target.stages,
+    delimiter,
+  });
   const plan = planImport(preview);
   if (!plan.ok) throw new Error(`import refused: ${JSON.stringify(plan.errors)}`);
   const data = rowsToProjectData(plan.rows, { makeId: ids(), stageId: null, asBomLines: true });

@@ -9,7 +9,9 @@ import { fixedCell, neutraliseText, unneutraliseText, writeCsv } from '../../../
 describe('writeCsv (RFC 4180 §2)', () => {
   it('ends every record with CRLF (§2.1) and quotes commas, quotes and line breaks (§2.6, §2.7)', () => {
     expect(writeCsv([['a', 'b'], ['c', 'd']])).toBe('a,b\r\nc,d\r\n');
-    expect(writeCsv([['1,5 kΩ', 'say "hi"', 'two\nlines', 'cr\rhere']])).toBe('"1,5 kΩ","say ""hi""","two\nlines","cr\rhere"\r\n');
+    expect(writeCsv([['1,5 kΩ', 'say "hi"', 'two\nlines', 'cr\rhere']])).toBe(
+      '"1,5 kΩ","say ""hi""","two\nlines","cr\rhere"\r\n',
+    );
   });
   it('writes a BOM only when asked; a lone empty field as ""', () => {
     expect(writeCsv([['x']], { bom: true })).toBe('\uFEFFx\r\n');
@@ -28,7 +30,8 @@ describe('writeCsv (RFC 4180 §2)', () => {
     expect(writeCsv([['a;b', 1.25, -5]], { delimiter: ';', decimalComma: true })).toBe('"a;b";1,25;-5\r\n');
   });
   it('neutralise / unneutralise are inverse on text', () => {
-    for (const t of ['=x', '+', '-3', '@a', "'=already", "''+x", "'", "'plain", 'plain', '']) expect(unneutraliseText(neutraliseText(t))).toBe(t);
+    for (const t of ['=x', '+', '-3', '@a', "'=already", "''+x", "'", "'plain", 'plain', ''])
+      expect(unneutraliseText(neutraliseText(t))).toBe(t);
   });
 });
 
@@ -61,7 +64,9 @@ describe('parseCsv (RFC 4180 §2)', () => {
 });
 
 describe('round trip (fast-check, seeded)', () => {
-  const cell = fc.string({ unit: fc.constantFrom('a', 'Ω', 'µ', 'ü', ',', ';', '"', '\r', '\n', ' ', '=', '-', '@', "'", '1') });
+  const cell = fc.string({
+    unit: fc.constantFrom('a', 'Ω', 'µ', 'ü', ',', ';', '"', '\r', '\n', ' ', '=', '-', '@', "'", '1'),
+  });
   const table = fc.array(fc.array(cell, { minLength: 1, maxLength: 5 }), { minLength: 1, maxLength: 6 });
   it('parse(write(rows)) returns the rows, for both separators, with and without BOM', () => {
     fc.assert(
@@ -90,7 +95,15 @@ describe('round trip (fast-check, seeded)', () => {
 // from whole minor units without floating point; with ";" files the decimal comma is used.
 describe('fixed-decimal money cells', () => {
   it('writes whole minor units with the given decimals, exactly', () => {
-    const cells = [fixedCell(2620, 2), fixedCell(8900, 2), fixedCell(5, 2), fixedCell(150, 0), fixedCell(1250, 3), fixedCell(-120, 2), fixedCell(0, 2)];
+    const cells = [
+      fixedCell(2620, 2),
+      fixedCell(8900, 2),
+      fixedCell(5, 2),
+      fixedCell(150, 0),
+      fixedCell(1250, 3),
+      fixedCell(-120, 2),
+      fixedCell(0, 2),
+    ];
     expect(writeCsv([cells])).toBe('26.20,89.00,0.05,150,1.250,-1.20,0.00\r\n');
     expect(writeCsv([[fixedCell(2620, 2), 'x']], { delimiter: ';', decimalComma: true })).toBe('26,20;x\r\n');
     // a comma-separated file with a decimal comma quotes the cell

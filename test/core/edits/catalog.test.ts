@@ -20,14 +20,20 @@ describe('suppliers', () => {
     expect(using).toBeGreaterThan(0);
     const after = asProject(saveSupplier(p, 1, { name: 'Harbour Radio Surplus', shippingCents: 650, currency: 'USD' }));
     expect(after.costing.suppliers[1]).toEqual({ name: 'Harbour Radio Surplus', shippingCents: 650, currency: 'USD' });
-    expect(after.parts.flatMap((x) => x.offers).filter((o) => o.supplier === 'Harbour Radio Surplus')).toHaveLength(using);
+    expect(after.parts.flatMap((x) => x.offers).filter((o) => o.supplier === 'Harbour Radio Surplus')).toHaveLength(
+      using,
+    );
     expect(after.parts.flatMap((x) => x.offers).some((o) => o.supplier === old)).toBe(false);
     expect(p.costing.suppliers[1].name).toBe(old); // the input project is not changed
   });
 
   it('a second supplier of the same name (ignoring case and spaces) is refused on the name field', () => {
     const p = demo();
-    const r = saveSupplier(p, null, { name: ` ${p.costing.suppliers[0].name.toUpperCase()} `, shippingCents: 0, currency: 'USD' });
+    const r = saveSupplier(p, null, {
+      name: ` ${p.costing.suppliers[0].name.toUpperCase()} `,
+      shippingCents: 0,
+      currency: 'USD',
+    });
     expect(r).toEqual({ errors: { name: expect.stringContaining('is already in the list') } });
   });
 });
@@ -46,11 +52,22 @@ describe('costing and offers', () => {
 
 describe('parts list', () => {
   it('a line for a missing part or stage is refused on those fields', () => {
-    const r = saveLine(demo(), 'b-new', { stageId: 'st-none', partId: 'p-none', qtyPerRig: 1, refs: '', notes: '' }, true);
-    expect(r).toEqual({ errors: { partId: expect.stringContaining('not in the catalog'), stageId: expect.stringContaining('no longer exists') } });
+    const r = saveLine(
+      demo(),
+      'b-new',
+      { stageId: 'st-none', partId: 'p-none', qtyPerRig: 1, refs: '', notes: '' },
+      true,
+    );
+    expect(r).toEqual({
+      errors: {
+        partId: expect.stringContaining('not in the catalog'),
+        stageId: expect.stringContaining('no longer exists'),
+      },
+    });
   });
 
-  it('an imported part equal to a catalog part (case aside) joins it: its new offer is added, its line points at it', () => {
+  it('an imported part equal to a catalog part (case aside) joins it: its new offer is added, its line points at ' +
+    'it', () => {
     const p = demo();
     const cat = p.parts.find((x) => x.id === 'p-bleed')!;
     const imported = {
@@ -58,13 +75,27 @@ describe('parts list', () => {
       description: cat.description.toUpperCase(),
       category: cat.category,
       ratings: structuredClone(cat.ratings),
-      offers: [{ id: 'io1', supplier: 'Coastline Parts', sku: 'CP-1', currency: 'EUR', breaks: [], minOrder: 1, orderMultiple: 1, stockNote: '' }],
+      offers: [
+        {
+          id: 'io1',
+          supplier: 'Coastline Parts',
+          sku: 'CP-1',
+          currency: 'EUR',
+          breaks: [],
+          minOrder: 1,
+          orderMultiple: 1,
+          stockNote: '',
+        },
+      ],
     };
     const line = { id: 'ib1', stageId: null, partId: 'imp1', qtyPerRig: 2, refs: 'R9', notes: '' };
     const r = mergeImport(p, { parts: [imported], bom: [line] }, 'skip'); // R9 is a new line: added in either mode
     expect([r.newParts, r.reusedParts]).toEqual([0, 1]);
     expect(r.project.parts).toHaveLength(p.parts.length);
-    expect(r.project.parts.find((x) => x.id === 'p-bleed')!.offers.at(-1)).toMatchObject({ supplier: 'Coastline Parts', sku: 'CP-1' });
+    expect(r.project.parts.find((x) => x.id === 'p-bleed')!.offers.at(-1)).toMatchObject({
+      supplier: 'Coastline Parts',
+      sku: 'CP-1',
+    });
     expect(r.project.bom.at(-1)).toEqual({ ...line, partId: 'p-bleed' });
   });
 });

@@ -9,11 +9,36 @@ import { offer } from '../../../seed-demo/common';
 const role: DesignRole = {
   id: 'bleeders', label: 'Bleeder resistors', category: 'resistor', stageId: null, qtyPerRig: 2, requirement: '',
   rules: [
-    { key: 'resistanceOhm', label: 'Resistance', unit: 'Ω', op: 'near', limit: 2200, tolerance: 0.05, required: true, source: 'supply.bleeder', why: '' },
-    { key: 'powerW', label: 'Power', unit: 'W', op: 'min', limit: 0.92, required: true, source: 'supply.bleeder-power', why: '' },
+    {
+      key: 'resistanceOhm',
+      label: 'Resistance',
+      unit: 'Ω',
+      op: 'near',
+      limit: 2200,
+      tolerance: 0.05,
+      required: true,
+      source: 'supply.bleeder',
+      why: '',
+    },
+    {
+      key: 'powerW',
+      label: 'Power',
+      unit: 'W',
+      op: 'min',
+      limit: 0.92,
+      required: true,
+      source: 'supply.bleeder-power',
+      why: '',
+    },
   ],
 };
-const res = (id: string, powerW: number, offers: Part['offers']): Part => ({ id, description: `2.2 kΩ ${powerW} W ${id}`, category: 'resistor', ratings: { resistanceOhm: 2200, powerW }, offers });
+const res = (id: string, powerW: number, offers: Part['offers']): Part => ({
+  id,
+  description: `2.2 kΩ ${powerW} W ${id}`,
+  category: 'resistor',
+  ratings: { resistanceOhm: 2200, powerW },
+  offers,
+});
 
 function project(): Project {
   const p = structuredClone(club30m);
@@ -21,7 +46,9 @@ function project(): Project {
   p.kits = 46;
   p.costing = { ...p.costing, attritionFraction: 0, sparesPerLine: 0 };
   p.parts = [
-    res('a', 1, [offer('oa', 'Supplier A', 'A-1', 'USD', [[1, 50], [100, 25]])]), // 92 x 0.50 = 46.00, 100 x 0.25 = 25.00
+    res('a', 1, [
+      offer('oa', 'Supplier A', 'A-1', 'USD', [[1, 50], [100, 25]]),
+    ]), // 92 x 0.50 = 46.00, 100 x 0.25 = 25.00
     res('b', 1, [offer('ob', 'Supplier B', 'B-1', 'USD', [[1, 35]])]), // 92 x 0.35 = 32.20
     res('c', 0.5, [offer('oc', 'Supplier B', 'B-2', 'USD', [[1, 10]])]), // cheapest but under-rated: not a candidate
     res('d', 2, []), // meets the role, no price: last
@@ -52,7 +79,9 @@ describe('candidatesFor', () => {
     const p = { ...project(), bom: [] };
     const r = bindCandidate(p, role, 'b', 'new');
     if ('errors' in r) throw new Error('refused');
-    expect(r.bom).toEqual([{ id: 'new', stageId: null, partId: 'b', qtyPerRig: 2, refs: '', notes: '', roleId: 'bleeders' }]);
+    expect(r.bom).toEqual([
+      { id: 'new', stageId: null, partId: 'b', qtyPerRig: 2, refs: '', notes: '', roleId: 'bleeders' },
+    ]);
     expect(bindCandidate(p, undefined, 'b', 'new')).toHaveProperty('errors._form');
     expect(bindCandidate(p, role, 'zz', 'new')).toHaveProperty('errors.partId');
   });
@@ -63,10 +92,27 @@ describe('candidatesFor with shipping (the cost plan held as it is)', () => {
   // otherwise used adds its full charge. Supplier A ships for 10.00, Supplier B for 8.00 (USD, the project currency).
   function withShipping(): Project {
     const p = project();
-    p.parts.push({ id: 'other', description: 'Crystal, only from B', category: 'crystal', ratings: {}, offers: [offer('ox', 'Supplier B', 'B-X', 'USD', [[1, 100]])] });
-    p.parts.push(res('e', 1, [offer('oe1', 'Supplier A', 'A-2', 'USD', [[1, 30]]), offer('oe2', 'Supplier B', 'B-3', 'USD', [[1, 34]])]));
+    p.parts.push({
+      id: 'other',
+      description: 'Crystal, only from B',
+      category: 'crystal',
+      ratings: {},
+      offers: [offer('ox', 'Supplier B', 'B-X', 'USD', [[1, 100]])],
+    });
+    p.parts.push(
+      res('e', 1, [
+        offer('oe1', 'Supplier A', 'A-2', 'USD', [[1, 30]]),
+        offer('oe2', 'Supplier B', 'B-3', 'USD', [[1, 34]]),
+      ]),
+    );
     p.bom.push({ id: 'l-other', stageId: null, partId: 'other', qtyPerRig: 1, refs: 'Y1', notes: '', roleId: null });
-    p.costing = { ...p.costing, suppliers: [{ name: 'Supplier A', shippingCents: 1000, currency: 'USD' }, { name: 'Supplier B', shippingCents: 800, currency: 'USD' }] };
+    p.costing = {
+      ...p.costing,
+      suppliers: [
+        { name: 'Supplier A', shippingCents: 1000, currency: 'USD' },
+        { name: 'Supplier B', shippingCents: 800, currency: 'USD' },
+      ],
+    };
     return p;
   }
 
@@ -92,13 +138,21 @@ describe('candidatesFor with shipping (the cost plan held as it is)', () => {
     expect(plan.get('l-other')).toBe('Supplier B'); // the crystal is only offered by B
     expect(candidatesFor(p, role, plan).map((x) => x.partId)).toEqual(['e', 'b', 'a', 'd']);
     // no plan: parts cost only (a 25.00 < e 27.60 from A < b 32.20)
-    expect(candidatesFor(p, role).map((x) => [x.partId, x.totalCents])).toEqual([['a', 2500], ['e', 2760], ['b', 3220], ['d', null]]);
+    expect(candidatesFor(p, role).map((x) => [x.partId, x.totalCents])).toEqual([
+      ['a', 2500],
+      ['e', 2760],
+      ['b', 3220],
+      ['d', null],
+    ]);
   });
 
   it('a supplier with no shipping entry counts 0 and says so', () => {
     const p = withShipping();
     p.costing = { ...p.costing, suppliers: [] };
     const c = candidatesFor(p, role, new Map([['l-other', 'Supplier B']]));
-    expect(c.find((x) => x.partId === 'a')).toMatchObject({ shippingCents: 0, shippingNote: 'Supplier "Supplier A" has no shipping entry; shipping counted as 0.' });
+    expect(c.find((x) => x.partId === 'a')).toMatchObject({
+      shippingCents: 0,
+      shippingNote: 'Supplier "Supplier A" has no shipping entry; shipping counted as 0.',
+    });
   });
 });

@@ -4,19 +4,70 @@ import { checkRoles, judgeRule, partMeetsRole, type DesignRole } from '../../../
 import type { BomLine, Part } from '../../../src/core/model';
 import { SOURCES } from '../../../src/core/sources/registry';
 
-const cap = (ratings: Part['ratings'], category = 'capacitor'): Part => ({ id: 'p', description: 'cap', category, ratings, offers: [] });
+const cap = (ratings: Part['ratings'], category = 'capacitor'): Part => ({
+  id: 'p',
+  description: 'cap',
+  category,
+  ratings,
+  offers: [],
+});
 // a reservoir with a 30 V no-load peak at high mains: voltage >= 1.2 x 30 = 36 V (20 % margin, common practice,
 // no published source), fail below 30 V; ripple >= 1.5 A; capacitance >= 4700 µF x 0.98 = 4606 µF
 const reservoir: DesignRole = {
   id: 'reservoir:r1', label: 'Reservoir', category: 'capacitor', stageId: null, qtyPerRig: 1, requirement: '',
   rules: [
-    { key: 'capacitanceF', label: 'Capacitance', unit: 'F', op: 'min', limit: 4606e-6, required: true, source: 'supply.reservoir-plan', why: '' },
-    { key: 'voltageV', label: 'Voltage', unit: 'V', op: 'min', limit: 36, hardLimit: 30, required: true, source: 'supply.capacitor-voltage', why: '' },
-    { key: 'rippleA', label: 'Ripple', unit: 'A', op: 'min', limit: 1.5, required: true, source: 'supply.capacitor-ripple', why: '' },
-    { key: 'dielectric', label: 'Dielectric', unit: '', op: 'oneOf', options: ['electrolytic'], required: false, source: 'roles.rf-dielectric', why: '' },
+    {
+      key: 'capacitanceF',
+      label: 'Capacitance',
+      unit: 'F',
+      op: 'min',
+      limit: 4606e-6,
+      required: true,
+      source: 'supply.reservoir-plan',
+      why: '',
+    },
+    {
+      key: 'voltageV',
+      label: 'Voltage',
+      unit: 'V',
+      op: 'min',
+      limit: 36,
+      hardLimit: 30,
+      required: true,
+      source: 'supply.capacitor-voltage',
+      why: '',
+    },
+    {
+      key: 'rippleA',
+      label: 'Ripple',
+      unit: 'A',
+      op: 'min',
+      limit: 1.5,
+      required: true,
+      source: 'supply.capacitor-ripple',
+      why: '',
+    },
+    {
+      key: 'dielectric',
+      label: 'Dielectric',
+      unit: '',
+      op: 'oneOf',
+      options: ['electrolytic'],
+      required: false,
+      source: 'roles.rf-dielectric',
+      why: '',
+    },
   ],
 };
-const line = (roleId: string | null, partId = 'p'): BomLine => ({ id: 'b1', stageId: null, partId, qtyPerRig: 1, refs: 'C1', notes: '', roleId });
+const line = (roleId: string | null, partId = 'p'): BomLine => ({
+  id: 'b1',
+  stageId: null,
+  partId,
+  qtyPerRig: 1,
+  refs: 'C1',
+  notes: '',
+  roleId,
+});
 
 describe('judgeRule', () => {
   it('min with a hard limit: above the limit ok, between the two a caution, below the hard limit a fail', () => {
@@ -27,11 +78,30 @@ describe('judgeRule', () => {
     expect(judgeRule(v, cap({})).severity).toBe('missing');
   });
   it('max, near and oneOf', () => {
-    const theta = { key: 'thetaSaKPerW', label: 'θsa', unit: 'K/W', op: 'max', limit: 12.7, required: true, source: 'pa.thermal', why: '' } as const;
+    const theta = {
+      key: 'thetaSaKPerW',
+      label: 'θsa',
+      unit: 'K/W',
+      op: 'max',
+      limit: 12.7,
+      required: true,
+      source: 'pa.thermal',
+      why: '',
+    } as const;
     expect(judgeRule(theta, { category: 'heatsink', ratings: { thetaSaKPerW: 2.5 } }).severity).toBe('ok');
     expect(judgeRule(theta, { category: 'heatsink', ratings: { thetaSaKPerW: 15 } }).severity).toBe('fail');
     // AL 4.9 nH/t² ±10 %: 5.3 is inside (|5.3-4.9| = 0.4 <= 0.49), 5.5 is not (0.6 > 0.49)
-    const al = { key: 'alHPerTurn2', label: 'AL', unit: 'H', op: 'near', limit: 4.9e-9, tolerance: 0.1, required: true, source: 'roles.core-al', why: '' } as const;
+    const al = {
+      key: 'alHPerTurn2',
+      label: 'AL',
+      unit: 'H',
+      op: 'near',
+      limit: 4.9e-9,
+      tolerance: 0.1,
+      required: true,
+      source: 'roles.core-al',
+      why: '',
+    } as const;
     expect(judgeRule(al, { category: 'core', ratings: { alHPerTurn2: 5.3e-9 } }).severity).toBe('ok');
     expect(judgeRule(al, { category: 'core', ratings: { alHPerTurn2: 5.5e-9 } }).severity).toBe('fail');
     expect(judgeRule(reservoir.rules[3], cap({ dielectric: 'Electrolytic' })).severity).toBe('ok'); // any case
@@ -47,7 +117,11 @@ describe('checkRoles', () => {
   it('a bound part meeting every rule: ok findings only, one per rule it states, each with a registry source', () => {
     const r = checkRoles({ parts: [good], bom: [line('reservoir:r1')] }, [reservoir]);
     expect(r.statuses[0].state).toBe('ok');
-    expect(r.findings.map((f) => f.rule)).toEqual(['role.capacitor.capacitanceF', 'role.capacitor.voltageV', 'role.capacitor.rippleA']);
+    expect(r.findings.map((f) => f.rule)).toEqual([
+      'role.capacitor.capacitanceF',
+      'role.capacitor.voltageV',
+      'role.capacitor.rippleA',
+    ]);
     for (const f of r.findings) expect(SOURCES[f.source]).toBeDefined();
     expect(partMeetsRole(good, reservoir)).toBe(true);
   });
@@ -61,7 +135,9 @@ describe('checkRoles', () => {
     expect(partMeetsRole(weak, reservoir)).toBe(false);
   });
   it('a required rating not stated is a caution asking for it; an optional one is skipped', () => {
-    const r = checkRoles({ parts: [cap({ capacitanceF: 0.0047, voltageV: 50 })], bom: [line('reservoir:r1')] }, [reservoir]);
+    const r = checkRoles({ parts: [cap({ capacitanceF: 0.0047, voltageV: 50 })], bom: [line('reservoir:r1')] }, [
+      reservoir,
+    ]);
     expect(r.findings.filter((f) => f.severity === 'caution').map((f) => f.rule)).toEqual(['role.capacitor.rippleA']);
     expect(r.findings.some((f) => f.rule === 'role.capacitor.dielectric')).toBe(false);
   });

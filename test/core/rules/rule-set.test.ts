@@ -25,7 +25,18 @@ describe('ICNIRP (1998) reference levels as used by the ITU / CEPT rule set', ()
   });
 
   it('100 W key-down CW at 7 MHz, dipole 2.15 dBi, ground reflection: hand calculation', () => {
-    const e = evaluateExposure(100, 7e6, rfSettings({ spuriousRule: 'itu-app3', antennaGainDbi: 2.15, feedlineLossDb: 0, exposureDutyFactor: 0.4, exposureOnFraction: 1, groundReflection: true }));
+    const e = evaluateExposure(
+      100,
+      7e6,
+      rfSettings({
+        spuriousRule: 'itu-app3',
+        antennaGainDbi: 2.15,
+        feedlineLossDb: 0,
+        exposureDutyFactor: 0.4,
+        exposureOnFraction: 1,
+        groundReflection: true,
+      }),
+    );
     // average 100 x 0.4 x 1 = 40 W; EIRP = 40 x 10^(2.15/10) = 40 x 1.6406 = 65.62 W
     // Source: ICNIRP (1998) Table 7: 87/sqrt(7) = 32.88 V/m -> S = 32.88^2 / 377 = 2.868 W/m^2
     // Source: OET Bulletin 65 (1997) far-field method: R = sqrt(2.56 EIRP / (4 pi S)) = sqrt(167.99 / 36.04) = 2.159 m
@@ -51,7 +62,12 @@ describe('ICNIRP (1998) reference levels as used by the ITU / CEPT rule set', ()
     expect(e.ruleSet).toBe('itu-app3');
     // Hand calculation from the key-down power the exposure step was given (e.peakPowerW) and the project's settings:
     // average = P x duty x on-fraction; EIRP = average x 10^(-loss/10) x 10^(gain/10)
-    const eirpW = e.peakPowerW * p.rf.exposureDutyFactor * p.rf.exposureOnFraction * 10 ** (-p.rf.feedlineLossDb / 10) * 10 ** (p.rf.antennaGainDbi / 10);
+    const eirpW =
+      e.peakPowerW *
+      p.rf.exposureDutyFactor *
+      p.rf.exposureOnFraction *
+      10 ** (-p.rf.feedlineLossDb / 10) *
+      10 ** (p.rf.antennaGainDbi / 10);
     // Source: ICNIRP (1998) Table 7, 10-400 MHz (10.11 MHz): 28 V/m -> S = 28^2 / 377 = 2.0796 W/m^2
     const sWPerM2 = (28 * 28) / 377;
     // Source: OET Bulletin 65 (1997): R = sqrt(k EIRP / (4 pi S)), k = 2.56 with ground reflection
@@ -77,24 +93,40 @@ describe('rule set defaults and mains corners', () => {
   });
 
   it('IEC 60038 (230 V +/- 10 %): +/- 5 % corners are too narrow, a design change (widening) clears it', () => {
-    const narrow = mainsCornerFindings({ nominalV: 230, frequencyHz: 50, lowFraction: 0.05, highFraction: 0.05 }, 'itu-app3');
+    const narrow = mainsCornerFindings(
+      { nominalV: 230, frequencyHz: 50, lowFraction: 0.05, highFraction: 0.05 },
+      'itu-app3',
+    );
     expect(narrow[0].severity).toBe('caution');
     expect(narrow[0].kind).toBeUndefined(); // actionable
-    expect(mainsCornerFindings({ nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 }, 'itu-app3')[0].severity).toBe('ok');
+    expect(
+      mainsCornerFindings({ nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 }, 'itu-app3')[0]
+        .severity,
+    ).toBe('ok');
   });
 
-  it('ANSI C84.1 Range B utilization (106-127 V on 120 V, from memory): -10 % misses the low end, -12 % / +6 % covers it', () => {
+  it('ANSI C84.1 Range B utilization (106-127 V on 120 V, from memory): -10 % misses the low end, -12 % / +6 % ' +
+    'covers it', () => {
     // Source (from memory, not confirmed): ANSI C84.1 Range B utilization voltage 106-127 V on 120 V nominal
     // (120 - 106) / 120 = 11.67 % low, (127 - 120) / 120 = 5.83 % high
     // (was the Range B service voltage, 110-127 V: the rig sees the utilization voltage at its outlet)
     expect(RULE_SETS['us-97-307'].mainsLowFraction).toBeCloseTo(0.11667, 4);
     expect(RULE_SETS['us-97-307'].mainsHighFraction).toBeCloseTo(0.05833, 4);
-    const ten = mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.1, highFraction: 0.1 }, 'us-97-307')[0];
+    const ten = mainsCornerFindings(
+      { nominalV: 120, frequencyHz: 60, lowFraction: 0.1, highFraction: 0.1 },
+      'us-97-307',
+    )[0];
     expect(ten.severity).toBe('caution');
     expect(ten.kind).toBeUndefined(); // actionable: widen the corners
     expect(ten.message).toMatch(/106–127 V/);
-    expect(mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.12, highFraction: 0.06 }, 'us-97-307')[0].severity).toBe('ok');
-    expect(mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.05, highFraction: 0.05 }, 'us-97-307')[0].severity).toBe('caution');
+    expect(
+      mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.12, highFraction: 0.06 }, 'us-97-307')[0]
+        .severity,
+    ).toBe('ok');
+    expect(
+      mainsCornerFindings({ nominalV: 120, frequencyHz: 60, lowFraction: 0.05, highFraction: 0.05 }, 'us-97-307')[0]
+        .severity,
+    ).toBe('caution');
     expect(sourceText(RULE_SETS['us-97-307'].mains)).toMatch(/Range B utilization.*106–127 V.*from memory/);
   });
 

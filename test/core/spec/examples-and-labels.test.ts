@@ -1,7 +1,15 @@
 // Every example a message offers fits its field; the inductance factor is also read per 100 turns; the labels a
 // builder asked about say what they mean.
 import { describe, expect, it } from 'vitest';
-import { ALL_SPECS, lpfSpec, mainsSpec, paSpec, settingsSpec, rfSettingsSpec, type NumberField } from '../../../src/core/spec';
+import {
+  ALL_SPECS,
+  lpfSpec,
+  mainsSpec,
+  paSpec,
+  settingsSpec,
+  rfSettingsSpec,
+  type NumberField,
+} from '../../../src/core/spec';
 import { exampleText, readNumber } from '../../../src/core/spec/number-text';
 import { FORM_ONLY_SPECS } from '../../../src/core/spec/form-only';
 import { windingSpec } from '../../../src/core/spec/supply';
@@ -71,7 +79,8 @@ describe('labels', () => {
     expect(paSpec.fields.referencePowerW.label).toBe('Reference power for dB and S-units');
   });
 
-  it('labels a builder asked about name the trade quantity: RF output, kits to build, the PA output load, regulation', () => {
+  it('labels a builder asked about name the trade quantity: RF output, kits to build, the PA output load, ' +
+    'regulation', () => {
     expect(settingsSpec.fields.targetPowerW.label).toBe('Target RF output');
     expect(settingsSpec.fields.kits.label).toBe('Kits to build');
     expect(paSpec.fields.loadOhm.label).toBe('Output load (antenna side)');

@@ -12,7 +12,9 @@ import { propertyOptions } from '../../helpers/property';
 
 const current = num('Key-down current', 'A', U.mA, 0, 100, 0);
 const reservoir = num('Reservoir capacitance', 'F', U.uF, 0, 10, 0.0047, { exclusiveMin: true });
-const reservoirInFarads = num('Reservoir capacitance', 'F', { symbol: 'F', scale: 1 }, 0, 10, 0.0047, { exclusiveMin: true });
+const reservoirInFarads = num('Reservoir capacitance', 'F', { symbol: 'F', scale: 1 }, 0, 10, 0.0047, {
+  exclusiveMin: true,
+});
 const resistor = optNum('Bleeder', 'Ω', U.ohm, 0, 1e9, null, { exclusiveMin: true });
 const efficiency = optNum('Drain efficiency', '%', U.pct, 0.05, 1, null);
 const devices = num('Devices', '', U.none, 1, 16, 2, { integer: true });
@@ -51,7 +53,9 @@ describe('a number with a prefix, letter code or unit is read as written', () =>
     ['4u7', 4.7e-6],
     ['100n', 100e-9],
     ['2200 µF', 2200e-6],
-  ])('IEC 60062 letter code %s in a µF box is read as written', (text, farads) => expect(value(text, reservoir)).toBeCloseTo(farads, 15));
+  ])('IEC 60062 letter code %s in a µF box is read as written', (text, farads) =>
+    expect(value(text, reservoir)).toBeCloseTo(farads, 15),
+  );
 });
 
 describe('refusals say why and suggest the likely unit slip', () => {
@@ -65,7 +69,8 @@ describe('refusals say why and suggest the likely unit slip', () => {
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.message).toContain('ambiguous');
   });
-  it('a whole-number field refuses 2.5', () => expect(readNumber('2.5', devices)).toEqual({ ok: false, message: expect.stringContaining('whole number') }));
+  it('a whole-number field refuses 2.5', () =>
+    expect(readNumber('2.5', devices)).toEqual({ ok: false, message: expect.stringContaining('whole number') }));
   it('a limit is shown in readable units', () => {
     const r = readNumber('200 A', current);
     expect(r.ok).toBe(false);
@@ -74,8 +79,12 @@ describe('refusals say why and suggest the likely unit slip', () => {
 });
 
 describe('stored value -> box text -> the same value', () => {
-  it.each([0.012, 0.35, 1.2, 12, 1.23e-5, 0.0123456789, 0.1 + 0.2])('current %d A', (v) => expect(value(numberText(v, current))).toBe(v));
-  it.each([4.7e-3, 2.2e-3, 1e-7, 3.3e-9])('capacitance %d F', (v) => expect(value(numberText(v, reservoir), reservoir)).toBe(v));
+  it.each([0.012, 0.35, 1.2, 12, 1.23e-5, 0.0123456789, 0.1 + 0.2])('current %d A', (v) =>
+    expect(value(numberText(v, current))).toBe(v),
+  );
+  it.each([4.7e-3, 2.2e-3, 1e-7, 3.3e-9])('capacitance %d F', (v) =>
+    expect(value(numberText(v, reservoir), reservoir)).toBe(v),
+  );
   it.each([0.05, 0.85, 0.123456])('fraction %d', (v) => expect(value(numberText(v, efficiency), efficiency)).toBe(v));
   it('the box text of a mA field reads as a builder writes it', () => {
     expect(numberText(0.35, current)).toBe('350');
@@ -85,20 +94,26 @@ describe('stored value -> box text -> the same value', () => {
 
 describe('property: every spec number field round-trips its stored values through the box text', () => {
   it('for values across each field range (seeded)', () => {
-    const fields = ALL_SPECS.flatMap((s) => Object.values(s.fields)).filter((f): f is NumberField => f.type === 'number');
+    const fields = ALL_SPECS.flatMap((s) => Object.values(s.fields)).filter(
+      (f): f is NumberField => f.type === 'number',
+    );
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: fields.length - 1 }), fc.double({ min: 0, max: 1, noNaN: true }), (i, u) => {
-        const f = fields[i];
-        const lo = f.exclusiveMin ? f.min + (f.max - f.min) * 1e-12 : f.min;
-        let v = lo + (f.max - lo) * u;
-        if (f.integer) v = Math.round(v);
-        if (v > f.max || v < f.min || (f.exclusiveMin && v <= f.min)) return;
-        const back = readNumber(numberText(v, f), f);
-        expect(back.ok).toBe(true);
-        // a fraction need not be n/100 of any decimal n (0.000159 is not): percent boxes hold it to 1e-12 relative
-        if (back.ok && f.unit === '%') expect(Math.abs(back.value - v)).toBeLessThanOrEqual(Math.abs(v) * 1e-12);
-        else expect(back).toEqual({ ok: true, value: v });
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: fields.length - 1 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (i, u) => {
+          const f = fields[i];
+          const lo = f.exclusiveMin ? f.min + (f.max - f.min) * 1e-12 : f.min;
+          let v = lo + (f.max - lo) * u;
+          if (f.integer) v = Math.round(v);
+          if (v > f.max || v < f.min || (f.exclusiveMin && v <= f.min)) return;
+          const back = readNumber(numberText(v, f), f);
+          expect(back.ok).toBe(true);
+          // a fraction need not be n/100 of any decimal n (0.000159 is not): percent boxes hold it to 1e-12 relative
+          if (back.ok && f.unit === '%') expect(Math.abs(back.value - v)).toBeLessThanOrEqual(Math.abs(v) * 1e-12);
+          else expect(back).toEqual({ ok: true, value: v });
+        },
+      ),
       propertyOptions(),
     );
   });

@@ -7,7 +7,19 @@ import { DEMO_PROJECTS } from '../../../seed-demo/index';
 
 describe('part categories', () => {
   it('offers the ten categories, and reads older names and labels in any case', () => {
-    expect(PART_CATEGORIES.map((c) => c.id)).toEqual(['capacitor', 'resistor', 'transformer', 'relay', 'fuse', 'mosfet', 'heatsink', 'regulator', 'core', 'wire', 'other']);
+    expect(PART_CATEGORIES.map((c) => c.id)).toEqual([
+      'capacitor',
+      'resistor',
+      'transformer',
+      'relay',
+      'fuse',
+      'mosfet',
+      'heatsink',
+      'regulator',
+      'core',
+      'wire',
+      'other',
+    ]);
     expect(categoryOf('capacitor-reservoir').id).toBe('capacitor');
     expect(categoryOf('Transistor').id).toBe('mosfet');
     expect(categoryOf('MOSFET').id).toBe('mosfet');

@@ -16,13 +16,22 @@ describe('ratings in names and units', () => {
 
   it('reads the short names a builder types ("voltage", "ripple current") and the units with prefixes', () => {
     // SI Brochure Table 7: 2400 mA = 2.4 A; 100 nH/t² is read in the field's display unit nH/t²
-    expect(parseRatingsReadable('voltage 35 V; ripple current 2400 mA')).toEqual({ ok: true, value: { voltageV: 35, rippleA: 2.4 } });
+    expect(parseRatingsReadable('voltage 35 V; ripple current 2400 mA')).toEqual({
+      ok: true,
+      value: { voltageV: 35, rippleA: 2.4 },
+    });
     expect(parseRatingsReadable('θsa: 1.5 °C/W')).toEqual({ ok: true, value: { thetaSaKPerW: 1.5 } });
-    expect(parseRatingsReadable('VA rating 70 VA; secondary 1 voltage 18 V')).toEqual({ ok: true, value: { va: 70, sec1V: 18 } });
+    expect(parseRatingsReadable('VA rating 70 VA; secondary 1 voltage 18 V')).toEqual({
+      ok: true,
+      value: { va: 70, sec1V: 18 },
+    });
   });
 
   it('still reads the older key=value form, alone or mixed', () => {
-    expect(parseRatingsReadable('capacitanceF=4700u; voltageV=35')).toEqual({ ok: true, value: { capacitanceF: 4.7e-3, voltageV: 35 } });
+    expect(parseRatingsReadable('capacitanceF=4700u; voltageV=35')).toEqual({
+      ok: true,
+      value: { capacitanceF: 4.7e-3, voltageV: 35 },
+    });
     expect(parseRatingsReadable('Rated current 1 A; type=T')).toEqual({ ok: true, value: { ratedA: 1, type: 'T' } });
   });
 
@@ -32,7 +41,10 @@ describe('ratings in names and units', () => {
     expect(!neg.ok && neg.message).toMatch(/^Rated voltage must be more than 0 V/);
     const kind = parseRatingsReadable('characteristic Q');
     expect(!kind.ok && kind.message).toBe('Characteristic must be one of T, F; you entered "Q"');
-    expect(parseRatingsReadable('voltage 35 V; voltageV=50')).toEqual({ ok: false, message: '"Rated voltage" is given twice' });
+    expect(parseRatingsReadable('voltage 35 V; voltageV=50')).toEqual({
+      ok: false,
+      message: '"Rated voltage" is given twice',
+    });
     // the part form names the box and keeps the typed text (the form test in test/web/parts.test.ts)
     const form = parseForm(partSpec, { description: 'Cap', category: 'capacitor', ratings: 'ripple current 2.4 Q' });
     expect(form.ok).toBe(false);
@@ -43,7 +55,15 @@ describe('ratings in names and units', () => {
     const pos = (max: number) => fc.double({ min: 1e-6, max, noNaN: true, noDefaultInfinity: true });
     fc.assert(
       fc.property(
-        fc.record({ capacitanceF: fc.double({ min: 1e-12, max: 10, noNaN: true }), voltageV: pos(1e5), rippleA: pos(1000), va: pos(1e5) }, { requiredKeys: [] }),
+        fc.record(
+          {
+            capacitanceF: fc.double({ min: 1e-12, max: 10, noNaN: true }),
+            voltageV: pos(1e5),
+            rippleA: pos(1000),
+            va: pos(1e5),
+          },
+          { requiredKeys: [] },
+        ),
         (r) => {
           const back = parseRatingsReadable(ratingsReadable(r));
           expect(back).toEqual({ ok: true, value: r });

@@ -7,7 +7,13 @@ import { portable20m } from '../../../seed-demo/portable-20m';
 import type { Project } from '../../../src/core/model';
 import type { Spec } from '../../../src/core/spec/field';
 import { defaults, formValues, parseForm, pick, validate } from '../../../src/core/spec/derive';
-import { mainsSpec, newProjectSpec, settingsSpec, NEW_PROJECT_BANDS, MAINS_PRESETS } from '../../../src/core/spec/settings';
+import {
+  mainsSpec,
+  newProjectSpec,
+  settingsSpec,
+  NEW_PROJECT_BANDS,
+  MAINS_PRESETS,
+} from '../../../src/core/spec/settings';
 import { rfSettingsSpec } from '../../../src/core/spec/rf-settings';
 import { applySettings, applyRfSettings } from '../../../src/core/edits/settings';
 import { validateRfInputs, validateRfSettings, validateThermalInputs } from '../../../src/core/rf/lpf-validate';
@@ -56,8 +62,14 @@ describe('settings form: display units and messages', () => {
   it('shows the frequency in MHz and reads a bare number there', () => {
     // club demo: 10.11 MHz (seed-demo/club-30m.ts)
     expect(form.frequency).toBe('10.11');
-    expect(parseForm(settingsSpec, { ...form, frequency: '7.03' })).toMatchObject({ ok: true, value: { frequencyHz: 7.03e6 } });
-    expect(parseForm(settingsSpec, { ...form, frequency: '7030 kHz' })).toMatchObject({ ok: true, value: { frequencyHz: 7.03e6 } });
+    expect(parseForm(settingsSpec, { ...form, frequency: '7.03' })).toMatchObject({
+      ok: true,
+      value: { frequencyHz: 7.03e6 },
+    });
+    expect(parseForm(settingsSpec, { ...form, frequency: '7030 kHz' })).toMatchObject({
+      ok: true,
+      value: { frequencyHz: 7.03e6 },
+    });
     const hz = parseForm(settingsSpec, { ...form, frequency: '7030000' });
     expect(hz.ok).toBe(false);
     if (!hz.ok) expect(hz.errors.frequency).toContain('did you mean 7030000 Hz?');
@@ -65,7 +77,10 @@ describe('settings form: display units and messages', () => {
 
   it('refuses a mains tolerance over 50 % naming the field', () => {
     const r = parseForm(settingsSpec, { ...form, mainsLow: '80' });
-    expect(r).toEqual({ ok: false, errors: { mainsLow: 'Low mains tolerance must be at least 0 % and at most 50 %; you entered "80"' } });
+    expect(r).toEqual({
+      ok: false,
+      errors: { mainsLow: 'Low mains tolerance must be at least 0 % and at most 50 %; you entered "80"' },
+    });
   });
 
   it('a battery / DC station may leave the mains boxes empty; a mains station may not', () => {
@@ -77,9 +92,15 @@ describe('settings form: display units and messages', () => {
   });
 
   it('upper-cases a currency code and refuses anything but three letters', () => {
-    expect(parseForm(settingsSpec, { ...form, currency: ' eur ' })).toMatchObject({ ok: true, value: { currency: 'EUR' } });
+    expect(parseForm(settingsSpec, { ...form, currency: ' eur ' })).toMatchObject({
+      ok: true,
+      value: { currency: 'EUR' },
+    });
     const r = parseForm(settingsSpec, { ...form, currency: 'dollars' });
-    expect(r).toEqual({ ok: false, errors: { currency: 'Project currency must be a three-letter code such as USD or EUR; you entered "dollars"' } });
+    expect(r).toEqual({
+      ok: false,
+      errors: { currency: 'Project currency must be a three-letter code such as USD or EUR; you entered "dollars"' },
+    });
   });
 });
 
@@ -100,7 +121,10 @@ describe('one limit per field: forms, project file and core agree', () => {
     expect(validateRfSettings({ ...club30m.rf, feedlineLossDb: 31 }).map((e) => e.field)).toEqual(['feedlineLossDb']);
     expect(validateRfSettings({ ...club30m.rf, feedlineLossDb: 30 })).toEqual([]);
     const file = fileWith((p) => (p.rf.feedlineLossDb = 50));
-    expect(file).toEqual({ ok: false, errors: ['project.rf.feedlineLossDb: Feedline loss must be at least 0 dB and at most 30 dB'] });
+    expect(file).toEqual({
+      ok: false,
+      errors: ['project.rf.feedlineLossDb: Feedline loss must be at least 0 dB and at most 30 dB'],
+    });
   });
 
   it('frequency 100 kHz–60 MHz and target power 1 mW–2 kW in core as in the forms and file', () => {
@@ -109,25 +133,52 @@ describe('one limit per field: forms, project file and core agree', () => {
     expect(validateRfInputs(60e6, 2000)).toEqual([]);
     expect(validateRfInputs(10.11e6, 5000)).toMatchObject([{ field: 'targetPowerW' }]);
     // 5e-324 W is below the 1 mW floor (it printed "Infinity dB" once)
-    expect(validateRfInputs(10.11e6, 5e-324)).toMatchObject([{ field: 'targetPowerW', message: 'Target RF output must be at least 1 mW and at most 2 kW' }]);
-    expect(fileWith((p) => (p.targetPowerW = 5e-324))).toMatchObject({ ok: false, errors: ['project.targetPowerW: Target RF output must be at least 1 mW and at most 2 kW'] });
-    expect(fileWith((p) => (p.frequencyHz = 100e6))).toMatchObject({ ok: false, errors: [expect.stringMatching(/^project\.frequencyHz: Operating frequency must be at least 100 kHz/)] });
+    expect(validateRfInputs(10.11e6, 5e-324)).toMatchObject([
+      { field: 'targetPowerW', message: 'Target RF output must be at least 1 mW and at most 2 kW' },
+    ]);
+    expect(fileWith((p) => (p.targetPowerW = 5e-324))).toMatchObject({
+      ok: false,
+      errors: ['project.targetPowerW: Target RF output must be at least 1 mW and at most 2 kW'],
+    });
+    expect(fileWith((p) => (p.frequencyHz = 100e6))).toMatchObject({
+      ok: false,
+      errors: [expect.stringMatching(/^project\.frequencyHz: Operating frequency must be at least 100 kHz/)],
+    });
     // the filter design checks the operating frequency with the same field (it allowed 10 kHz–1 GHz before)
     const filter = club30m.stages.find((s) => s.lpf)!.lpf!;
-    expect(designLpf(filter, 100e6)).toMatchObject({ ok: false, errors: [{ field: 'frequencyHz', message: expect.stringMatching(/^Operating frequency must be at least 100 kHz and at most 60 MHz/) }] });
+    expect(designLpf(filter, 100e6)).toMatchObject({
+      ok: false,
+      errors: [
+        {
+          field: 'frequencyHz',
+          message: expect.stringMatching(/^Operating frequency must be at least 100 kHz and at most 60 MHz/),
+        },
+      ],
+    });
     expect(designLpf(filter, 10.11e6).ok).toBe(true);
   });
 
   it('ambient −40–70 °C and keying duty 0–100 % in core as in the forms and file', () => {
     expect(validateThermalInputs(70, 1)).toEqual([]);
-    expect(validateThermalInputs(100, 0.4)).toMatchObject([{ field: 'ambientC', message: 'Ambient temperature must be at least -40 °C and at most 70 °C' }]);
+    expect(validateThermalInputs(100, 0.4)).toMatchObject([
+      { field: 'ambientC', message: 'Ambient temperature must be at least -40 °C and at most 70 °C' },
+    ]);
     expect(validateThermalInputs(25, 1.5)).toMatchObject([{ field: 'keyingDuty' }]);
-    expect(fileWith((p) => (p.ambientC = 100))).toMatchObject({ ok: false, errors: [expect.stringMatching(/^project\.ambientC: Ambient temperature/)] });
+    expect(fileWith((p) => (p.ambientC = 100))).toMatchObject({
+      ok: false,
+      errors: [expect.stringMatching(/^project\.ambientC: Ambient temperature/)],
+    });
   });
 
   it('the file refuses mains outside the form limits and a lower-case currency, naming the place', () => {
-    expect(fileWith((p) => (p.mains = { ...p.mains!, lowFraction: 0.8 }))).toMatchObject({ ok: false, errors: ['project.mains.lowFraction: Low mains tolerance must be at least 0 % and at most 50 %'] });
-    expect(fileWith((p) => (p.currency = 'usd'))).toMatchObject({ ok: false, errors: ['project.currency: Project currency must be a three-letter code such as USD or EUR'] });
+    expect(fileWith((p) => (p.mains = { ...p.mains!, lowFraction: 0.8 }))).toMatchObject({
+      ok: false,
+      errors: ['project.mains.lowFraction: Low mains tolerance must be at least 0 % and at most 50 %'],
+    });
+    expect(fileWith((p) => (p.currency = 'usd'))).toMatchObject({
+      ok: false,
+      errors: ['project.currency: Project currency must be a three-letter code such as USD or EUR'],
+    });
     expect(fileWith((p) => (p.mains = null)).ok).toBe(true);
   });
 });
@@ -137,25 +188,46 @@ describe('new project', () => {
     const values = formValues(newProjectSpec, defaults(newProjectSpec));
     // the default band must be one of the choices, so the select shows it
     expect(NEW_PROJECT_BANDS.map(([v]) => v)).toContain(values.band);
-    const r = parseForm(newProjectSpec, { ...values, name: '40 m QRP', band: '7.03', power: '5 W', mains: 'battery', template: '' });
-    expect(r).toEqual({ ok: true, value: { name: '40 m QRP', frequencyHz: 7.03e6, targetPowerW: 5, mains: null, template: '' } });
+    const r = parseForm(newProjectSpec, {
+      ...values,
+      name: '40 m QRP',
+      band: '7.03',
+      power: '5 W',
+      mains: 'battery',
+      template: '',
+    });
+    expect(r).toEqual({
+      ok: true,
+      value: { name: '40 m QRP', frequencyHz: 7.03e6, targetPowerW: 5, mains: null, template: '' },
+    });
     const mains = parseForm(newProjectSpec, { ...values, name: 'x', mains: '120-60' });
     expect(mains).toMatchObject({ ok: true, value: { mains: MAINS_PRESETS['120-60'] } });
   });
 
-  it('a template that runs from the mains refuses a battery supply, and the battery template a mains one, by field', () => {
+  it('a template that runs from the mains refuses a battery supply, and the battery template a mains one, by ' +
+    'field', () => {
     const base = { name: 'x', band: '7.03', power: '5' };
     const mainsTpl = parseForm(newProjectSpec, { ...base, mains: 'battery', template: 'mains-two-rail' });
     expect(mainsTpl).toMatchObject({ ok: false, errors: { mains: expect.stringContaining('runs from the mains') } });
     const batteryTpl = parseForm(newProjectSpec, { ...base, mains: '230-50', template: 'battery-portable' });
-    expect(batteryTpl).toMatchObject({ ok: false, errors: { mains: expect.stringContaining('runs from its battery') } });
-    expect(parseForm(newProjectSpec, { ...base, mains: 'battery', template: 'battery-portable' })).toMatchObject({ ok: true, value: { mains: null } });
+    expect(batteryTpl).toMatchObject({
+      ok: false,
+      errors: { mains: expect.stringContaining('runs from its battery') },
+    });
+    expect(parseForm(newProjectSpec, { ...base, mains: 'battery', template: 'battery-portable' })).toMatchObject({
+      ok: true,
+      value: { mains: null },
+    });
     // a form without the template box (older pages, scripts) starts an empty project
-    expect(parseForm(newProjectSpec, { ...base, mains: '230-50' })).toMatchObject({ ok: true, value: { template: '' } });
+    expect(parseForm(newProjectSpec, { ...base, mains: '230-50' })).toMatchObject({
+      ok: true,
+      value: { template: '' },
+    });
   });
 
   it('every band choice parses to its frequency', () => {
-    for (const [text] of NEW_PROJECT_BANDS) expect(parseForm(newProjectSpec, { name: 'x', band: text, power: '5', mains: '230-50' }).ok).toBe(true);
+    for (const [text] of NEW_PROJECT_BANDS)
+      expect(parseForm(newProjectSpec, { name: 'x', band: text, power: '5', mains: '230-50' }).ok).toBe(true);
   });
 
   it("a new project's settings and RF settings pass their specs", () => {

@@ -4,7 +4,13 @@
 import { describe, expect, it } from 'vitest';
 import { defaults, formValues, parseForm, pick, validate } from '../../../src/core/spec/derive';
 import { primaryFuseSpec, transformerSpec, windingSpec } from '../../../src/core/spec/supply';
-import { RAIL_SPECS, batterySpec, rectifiedSpec, regulatedSpec, withRailDefaults } from '../../../src/core/spec/supply-rails';
+import {
+  RAIL_SPECS,
+  batterySpec,
+  rectifiedSpec,
+  regulatedSpec,
+  withRailDefaults,
+} from '../../../src/core/spec/supply-rails';
 import type { Spec } from '../../../src/core/spec/field';
 import type { Rail } from '../../../src/core/model';
 import { club30m } from '../../../seed-demo/club-30m';
@@ -53,7 +59,15 @@ describe('regulated rail: the output setting and the heatsink', () => {
   const reg = club30m.supply.rails.find((x) => x.kind === 'regulated')!;
   const base = () => formValues(regulatedSpec, reg);
   it('adjustable: Vref, R1, R2 stored (Iadj empty = 0), the fixed voltage box ignored', () => {
-    const r = parseForm(regulatedSpec, { ...base(), method: 'adjustable', vref: '1.25', iadj: '', r1: '240', r2: '2k2', nominalV: '12' });
+    const r = parseForm(regulatedSpec, {
+      ...base(),
+      method: 'adjustable',
+      vref: '1.25',
+      iadj: '',
+      r1: '240',
+      r2: '2k2',
+      nominalV: '12',
+    });
     expect(r.ok && r.value.setting).toEqual({ method: 'adjustable', vrefV: 1.25, adjustA: 0, r1Ohm: 240, r2Ohm: 2200 });
   });
   it('adjustable without R2 names R2', () => {
@@ -82,8 +96,26 @@ describe('battery rail', () => {
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.errors.endV).toContain('below the full-charge voltage');
   });
-  it('a stored rectified rail without the winding fuse and bleeder rating (written before they existed) reads them as not stated, fuse type T3', () => {
-    const old = { kind: 'rectified', id: 'r', name: 'Raw', windingId: 'w', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0.03, reservoirF: 0.0047, esrOhm: 0.04, bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0, fuseA: null, minimumV: null };
+  it('a stored rectified rail without the winding fuse and bleeder rating (written before they existed) reads them ' +
+    'as not stated, fuse type T3', () => {
+    const old = {
+      kind: 'rectified',
+      id: 'r',
+      name: 'Raw',
+      windingId: 'w',
+      topology: 'bridge',
+      diodeDropV: 0.9,
+      diodeResistanceOhm: 0.03,
+      reservoirF: 0.0047,
+      esrOhm: 0.04,
+      bleederOhm: null,
+      capacitorRatedV: null,
+      capacitorRippleA: null,
+      ripplePpTargetV: null,
+      marginV: 0,
+      fuseA: null,
+      minimumV: null,
+    };
     const read = withRailDefaults(old as unknown as Rail);
     // the rectifier's thermal data came later still: optional in the model, absent reads as not entered
     expect(read).toEqual({ ...old, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: null });

@@ -9,15 +9,28 @@ import { near } from '../power/helpers';
 const toleranceC = 0.01;
 const toleranceKPerW = 0.001;
 const mount = { thetaJcKPerW: 2.2, thetaCsKPerW: 0.5, thetaSaKPerW: null, tjMaxC: 150 };
-const base = { railName: 'PA rail', thermalW: 1.31, tuneUpW: 3.14, basis: 'duty' as const, mount: null, freeAirKPerW: null, ambientC: 35, inside: false };
+const base = {
+  railName: 'PA rail',
+  thermalW: 1.31,
+  tuneUpW: 3.14,
+  basis: 'duty' as const,
+  mount: null,
+  freeAirKPerW: null,
+  ambientC: 35,
+  inside: false,
+};
 
 describe('rectifier junction and heatsink (series thermal path, textbook)', () => {
-  it('no data entered: the assumed part in free air, 1.31 W duty-averaged at 35 °C: 35 + 1.31 x 22 = 63.82 °C, ok', () => {
+  it('no data entered: the assumed part in free air, 1.31 W duty-averaged at 35 °C: 35 + 1.31 x 22 = 63.82 °C, ' +
+    'ok', () => {
     const b = bridgeThermal(base);
     expect(b.assumed).toBe(true);
     near(b.result.freeAirJunctionC, 63.82, toleranceC, 'Tj');
     const f = bridgeThermalFindings('PA rail', b);
-    expect(f.map((x) => [x.rule, x.severity])).toEqual([['thermal.bridge-assumed', 'caution'], ['thermal.bridge', 'ok']]);
+    expect(f.map((x) => [x.rule, x.severity])).toEqual([
+      ['thermal.bridge-assumed', 'caution'],
+      ['thermal.bridge', 'ok'],
+    ]);
     expect(f[1].message).toContain('in the 35 °C room');
   });
   it('sized for tune-up the continuous 3.14 W is used: 35 + 3.14 x 22 = 104.08 °C', () => {
@@ -25,7 +38,8 @@ describe('rectifier junction and heatsink (series thermal path, textbook)', () =
     near(b.result.freeAirJunctionC, 104.08, toleranceC, 'Tj');
     expect(b.otherW).toBe(1.31);
   });
-  it('5 W with no heatsink: 35 + 5 x 22 = 145 °C, above the 120 °C target: caution, θsa (120 - 35)/5 - 2.7 = 14.3 K/W', () => {
+  it('5 W with no heatsink: 35 + 5 x 22 = 145 °C, above the 120 °C target: caution, θsa (120 - 35)/5 - 2.7 = 14.3 ' +
+    'K/W', () => {
     const b = bridgeThermal({ ...base, thermalW: 5, mount, freeAirKPerW: 22 });
     near(b.result.requiredThetaSaKPerW!, 14.3, toleranceKPerW, 'θsa');
     const [f] = bridgeThermalFindings('PA rail', b);
@@ -37,11 +51,18 @@ describe('rectifier junction and heatsink (series thermal path, textbook)', () =
     expect(f.severity).toBe('fail');
     near(f.value!, 167, toleranceC, 'Tj');
   });
-  it('5 W on a 20 K/W heatsink: 35 + 5 x 22.7 = 148.5 °C (too small, caution); on 10 K/W: 35 + 5 x 12.7 = 98.5 °C (ok)', () => {
-    const small = bridgeThermalFindings('PA rail', bridgeThermal({ ...base, thermalW: 5, mount: { ...mount, thetaSaKPerW: 20 }, freeAirKPerW: 22 }));
+  it('5 W on a 20 K/W heatsink: 35 + 5 x 22.7 = 148.5 °C (too small, caution); on 10 K/W: 35 + 5 x 12.7 = 98.5 °C ' +
+    '(ok)', () => {
+    const small = bridgeThermalFindings(
+      'PA rail',
+      bridgeThermal({ ...base, thermalW: 5, mount: { ...mount, thetaSaKPerW: 20 }, freeAirKPerW: 22 }),
+    );
     expect(small[0].severity).toBe('caution');
     near(small[0].value!, 148.5, toleranceC, 'Tj on 20 K/W');
-    const big = bridgeThermalFindings('PA rail', bridgeThermal({ ...base, thermalW: 5, mount: { ...mount, thetaSaKPerW: 10 }, freeAirKPerW: 22 }));
+    const big = bridgeThermalFindings(
+      'PA rail',
+      bridgeThermal({ ...base, thermalW: 5, mount: { ...mount, thetaSaKPerW: 10 }, freeAirKPerW: 22 }),
+    );
     expect(big[0].severity).toBe('ok');
     near(big[0].value!, 98.5, toleranceC, 'Tj on 10 K/W');
   });

@@ -6,7 +6,8 @@ import { junctionTemperature, thermalFindings, TJ_DERATING_FRACTION } from '../.
 const toleranceKPerW = 0.01; // ref prints 2 decimals
 const toleranceC = 1e-9;
 
-describe('ref §7: LM317-type in TO-220, Vin,avg 22.0 V, Vout 13.8 V, 1.0 A -> 8.2 W, θjc 5, θcs 1, Ta 40 °C', () => {
+describe('ref §7: LM317-type in TO-220, Vin,avg 22.0 V, Vout 13.8 V, 1.0 A -> 8.2 W, θjc 5, θcs 1, Ta 40 ' +
+  '°C', () => {
   const p = (22.0 - 13.8) * 1.0;
   it('θsa <= 1.32 K/W for Tj <= 100 °C (0.8 x 125 °C)', () => {
     const t = junctionTemperature(p, 40, { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 125 });
@@ -14,7 +15,12 @@ describe('ref §7: LM317-type in TO-220, Vin,avg 22.0 V, Vout 13.8 V, 1.0 A -> 8
     expect(Math.abs((t.requiredThetaSaKPerW ?? NaN) - 1.32)).toBeLessThanOrEqual(toleranceKPerW);
   });
   it('θsa <= 4.37 K/W for Tj <= 125 °C', () => {
-    const t = junctionTemperature(p, 40, { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: null, tjMaxC: 125 / TJ_DERATING_FRACTION });
+    const t = junctionTemperature(p, 40, {
+      thetaJcKPerW: 5,
+      thetaCsKPerW: 1,
+      thetaSaKPerW: null,
+      tjMaxC: 125 / TJ_DERATING_FRACTION,
+    });
     expect(Math.abs((t.requiredThetaSaKPerW ?? NaN) - 4.37)).toBeLessThanOrEqual(toleranceKPerW);
   });
   it('without heatsink (RθJA ~ 50 K/W) Tj exceeds 400 °C (ref §7)', () => {
