@@ -19,6 +19,7 @@ import type { KeyingResult } from '../../src/core/rf/keying-eval';
 import type { CoreRealisation } from '../../src/core/rf/cores-check';
 import type { LNetwork, RfChoke } from '../../src/core/rf/output-network';
 import { PaSwrTable } from './pa-swr-table';
+import { ohmText } from '../../src/core/rf/pa-swr';
 import { clampText } from '../../src/core/rf/pa-clamp';
 import { KV, PaMagnetics } from './pa-magnetics';
 
@@ -110,6 +111,17 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) =>
               `load${pa.maxRailV > pa.railV ? `, highest supply ${fv(pa.maxRailV, 'V')}` : ''})`,
             `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`,
           ],
+          ...(pa.swr?.designLoad
+            ? [
+                [
+                  'With a matched antenna, through the filter as built',
+                  `${fv(pa.swr.designLoad.drainPeakV, 'V')} / ${fv(pa.swr.designLoad.peakDeviceA, 'A')}, ` +
+                    `${fv(pa.swr.designLoad.outputW, 'W')} into ` +
+                    `${ohmText(pa.swr.designLoad.loadReOhm, pa.swr.designLoad.loadImOhm)} ` +
+                    `(filter input SWR ${pa.swr.designLoad.inputSwr.toFixed(2)})`,
+                ] as [string, string],
+              ]
+            : []),
           ...(pa.clamp ? [['Drain clamp', clampText(pa.clamp)] as [string, string]] : []),
           [
             'Dissipation',

@@ -88,7 +88,12 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
           ],
           [
             'Device stress',
-            `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load`,
+            `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load` +
+              (p.swr?.designLoad
+                ? `; with a matched antenna, through the filter as built, ${fv(p.swr.designLoad.drainPeakV, 'V')}, ` +
+                  `${fv(p.swr.designLoad.peakDeviceA, 'A')} and ${fv(p.swr.designLoad.outputW, 'W')} into ` +
+                  `${ohmText(p.swr.designLoad.loadReOhm, p.swr.designLoad.loadImOhm)}`
+                : ''),
           ],
           ...(p.swr && p.swr.swr > 1 ? [['At SWR ' + p.swr.swr, swrText(p.swr)] as [string, string]] : []),
           ...(p.clamp ? [['Drain clamp', clampText(p.clamp)] as [string, string]] : []),

@@ -22,6 +22,8 @@ describe('SWR circle on the RF page', () => {
       expect(html).toContain('Load at the antenna');
       expect(html).toContain('Load at the PA');
       expect(html).toMatch(/With a matched antenna the filter presents [^<]*Ω to the PA \(input SWR \d\.\d\d\)/);
+      // the design-load row beside it: the stage into what the filter presents with a matched antenna
+      expect(html).toContain('With a matched antenna, through the filter as built');
       // with a low-pass filter the clipping loads are balanced against it, and the drain peak carries the ring margin
       expect(html).toContain('balanced against the filter at each harmonic');
       expect(html).toContain('12 % ring margin where it clips');
