@@ -17,7 +17,8 @@ export function paHeatAhead(project: Project, ctx: Rails): PaHeat[] {
     const id = st.pa.railId;
     const r = evaluatePa(st.pa, finite(ctx.paRailV[id] ?? NaN), project, st.name, {
       maxRailV: ctx.paRailMaxV?.[id], hotRailV: ctx.paRailHotV?.[id], lowRailV: ctx.paRailLowV?.[id],
-      source: ctx.paRailBattery?.[id] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
+      // no SWR circle: the heat is the design load's (the stress sweep is the RF evaluation's, through the filter)
+      source: ctx.paRailBattery?.[id] ? 'battery' : 'mains',
       frequencyHz: project.frequencyHz,
     });
     const t = r.thermal;
