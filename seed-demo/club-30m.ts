@@ -447,8 +447,7 @@ export const club30m: Project = {
         secondaryToleranceFraction: 0.05,
         windings: [
           // the 100 VA part (p-trafo-100): the supply carries the final's saturated drive, about 2 A key-down; the 70
-          // VA
-          // part's 2.5 A winding sagged the PA rail below 20 V at low mains and, through the shared primary, put the
+          // VA part's 2.5 A winding sagged the PA rail below 20 V at low mains and, through the shared primary, put the
           // 13.8 V regulator into dropout at the tolerance corner. A tune-up carrier (about 4.2 A RMS) is still above
           // the 3.5 A rating: the page says keep it short
           {
@@ -505,8 +504,8 @@ export const club30m: Project = {
         maxOutputA: 1.5,
         maxInputV: 40,
         mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: 4.5, tjMaxC: 125 },
-        // invented: an adjustable regulator's datasheet minimum without the adjust-pin bypass; the receiver wants < 1
-        // mV
+        // invented: an adjustable regulator's datasheet minimum without the
+        // adjust-pin bypass; the receiver wants < 1 mV
         rippleRejectionDb: 65,
         rippleTargetV: 0.001,
         // invented: the usual output electrolytic beside an adjustable regulator; no bleeder fitted across it
@@ -517,8 +516,8 @@ export const club30m: Project = {
       // invented: below 20 V the final falls well short of its 20 W (its output goes as (V - Vsat)²).
       // Rail fuse T4 A: about 2.3 A key-down at high mains (saturated drive) x 1.5, the next IEC 60127 rating up.
       // Winding fuse T6.3 A: about 4.2 A RMS key-down in the winding x 1.25; the 1.6 A primary fuse cannot clear this
-      // winding's shorted reservoir within 5 s (about 3.8 x its rating on the primary), the winding fuse does (sheet
-      // 3).
+      // winding's shorted reservoir within 5 s (about 3.8 x its rating on the
+      // primary), the winding fuse does (sheet 3).
       // The 16 V winding is left without one: the page shows what that costs (a fail), the lesson of this demo.
       {
         kind: 'rectified',

@@ -21,8 +21,8 @@ const textOf = async (p: Project, name: string) =>
     .replace(/\s+/g, ' ');
 
 /**
- * The portable demo matched by a network to 12.5 Ω at the drain, its device's output capacitance and a 56 V clamp
- * entered.
+ * The portable demo matched by a network to 12.5 Ω at the drain, its device's
+ * output capacitance and a 56 V clamp entered.
  */
 const networked: Project = {
   ...portable20m,

@@ -62,8 +62,8 @@ describe('keying transient properties', () => {
         if (!k) return; // a rail that collapses under its load has no transient to check
         expect(k.keyDownMeanV).toBeLessThan(k.keyUpMeanV);
         for (const e of k.elements) {
-          // a dot is not a whole number of ripple periods, so its mean can sit below the held key's mean, not its
-          // trough
+          // a dot is not a whole number of ripple periods, so its mean can sit
+          // below the held key's mean, not its trough
           expect(e.meanV).toBeGreaterThan(k.keyDownTroughV - slackV);
           expect(e.meanV).toBeLessThan(k.keyUpMeanV + slackV);
         }

@@ -45,8 +45,7 @@ describe('sweep values and targets', () => {
 
   it('starts the form round the item’s value, inside its field’s range', () => {
     // two significant digits: 6800 µF × 0.5 = 3400 µF; × 2 = 13600 µF → 14000 µF; 120 V × 0.85 = 102 → 100 V
-    // and
-    // × 1.15 = 138 → 140 V
+    // and × 1.15 = 138 → 140 V
     expect(sweepStart('reservoirF', 0.0068, { min: 0, max: 10 })).toEqual({ from: 0.0034, to: 0.014, points: 7 });
     expect(sweepStart('mainsV', 120, { min: 50, max: 300 })).toEqual({ from: 100, to: 140, points: 7 });
     // 280 V × 1.15 = 322 → 320, above the 300 V top of the mains field: held at 300
