@@ -344,7 +344,8 @@ export const SOURCES = {
       `3 % in power push-pull, 11 % single-ended), else the drain flat-topped at the rails (the upper end), and a 12 % margin on the drain peak ` +
       `for the ring where the limit cuts the current (${PRACTICE}; ngspice shows 10.5 % above 2 Vdd); class D at its ` +
       `square-wave voltage; conduction loss ∝ current² (${PRACTICE}); push-pull class D adds the leakage ring ` +
-      `(pa.leakage-ring)`,
+      `(pa.leakage-ring); with the low-pass filter known the circle is drawn at the antenna and each load ` +
+      `taken through the filter as built to the PA (pa.filter-input-swr)`,
   },
   'pa.filter-input-swr': {
     status: 'practice',

@@ -9,7 +9,8 @@ import type { Ladder } from '../../../src/core/rf/lpf-analysis';
 import { evaluatePa } from '../../../src/core/rf/pa';
 import { swrStress, whereLoad, type MatchedPoint, type PaSwrStress } from '../../../src/core/rf/pa-swr';
 import { filterLoadFindings } from '../../../src/core/rf/pa-filter-load';
-import { paParams } from './fixture';
+import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
+import { lpfParams, paParams, project, rfSettings } from './fixture';
 import { near } from './helpers';
 
 const F = 10e6;
@@ -126,5 +127,24 @@ describe('evaluatePa with the filter known', () => {
     near(withF.swr!.designLoad!.peakDeviceA / withF.peakDeviceA, 1 / Math.sqrt(1.25), 1e-9, 'ratio');
     expect(withF.findings.some((f) => f.rule === 'pa.filter-input-swr' && f.severity === 'caution')).toBe(true);
     expect(withF.findings.find((f) => f.rule === 'pa.vds')?.message).toMatch(/at the antenna|antenna at its design/);
+  });
+});
+
+describe('the RF evaluation: filter known, or refused', () => {
+  it('a valid filter: the circle at the antenna; a refused one (cutoff below the frequency): at the PA output, said', () => {
+    const ok = evaluateRf(project({ rf: rfSettings({ worstSwr: 2 }) }), { paRailV: { pa: 13.8 } });
+    const okPa = ok.stages.find((x) => x.pa)!.pa!;
+    expect(okPa.swr?.circleAt).toBe('antenna');
+    expect(okPa.swr?.designLoad).not.toBeNull();
+    const bad = project({ rf: rfSettings({ worstSwr: 2 }) });
+    bad.stages[1].lpf = lpfParams({ cutoffHz: 5e6 });
+    const refused = evaluateRf(bad, { paRailV: { pa: 13.8 } });
+    const pa = refused.stages.find((x) => x.pa)!.pa!;
+    expect(pa.swr?.circleAt).toBe('pa-output');
+    expect(pa.swr?.designLoad).toBeNull();
+    const note = pa.findings.find((f) => f.rule === 'pa.filter-input-swr');
+    expect(note?.message).toMatch(/placed at the PA's output: no low-pass filter is known \(or its data is refused\)/);
+    // the worst drain peak names the load at the PA's output, as before
+    expect(pa.swr?.worstDrainPeak.antennaReOhm).toBeNull();
   });
 });
