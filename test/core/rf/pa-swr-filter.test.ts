@@ -131,7 +131,7 @@ describe('evaluatePa with the filter known', () => {
 });
 
 describe('the RF evaluation: filter known, or refused', () => {
-  it('a valid filter: the circle at the antenna; a refused one (cutoff below the frequency): at the PA output, said', () => {
+  it('a valid filter: the circle at the antenna; a refused one (cutoff below f): at the PA output, said', () => {
     const ok = evaluateRf(project({ rf: rfSettings({ worstSwr: 2 }) }), { paRailV: { pa: 13.8 } });
     const okPa = ok.stages.find((x) => x.pa)!.pa!;
     expect(okPa.swr?.circleAt).toBe('antenna');
