@@ -48,7 +48,9 @@ describe.skipIf(!hasChromium)('the demo mismatch fixed with a candidate in the b
     await Promise.all([page.waitForResponse((r) => r.url().endsWith('/bom/roles/bind')), use.click()]);
     await expect.poll(state).toBe('ok');
     expect(await page.locator(`${ROLE} .role-problems`).count()).toBe(0);
-    expect(await page.locator('#cost-results tr[data-line="b9"] td[data-label="Part"]').innerText()).toContain('2.2 kΩ 1 W');
+    expect(await page.locator('#cost-results tr[data-line="b9"] td[data-label="Part"]').innerText()).toContain(
+      '2.2 kΩ 1 W',
+    );
     expect((await total()) - before).toBe(needed * 6);
     await page.locator(ROLE).screenshot({ path: artifactPath('bom-roles-bleeder-bound.png') });
     expect(session.problems).toEqual([]);

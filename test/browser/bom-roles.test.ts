@@ -35,7 +35,10 @@ describe.skipIf(!hasChromium)('design roles follow the design in the browser', (
     // a form folded in a <details> (the project settings) is opened first, as a user would
     await form.evaluate((f) => f.closest('details')?.setAttribute('open', ''));
     await form.locator(`input[name="${field}"]`).fill(value);
-    await Promise.all([page.waitForResponse((r) => r.request().method() === 'POST'), form.locator('button[type="submit"]').first().click()]);
+    await Promise.all([
+      page.waitForResponse((r) => r.request().method() === 'POST'),
+      form.locator('button[type="submit"]').first().click(),
+    ]);
   }
 
   it('raising the target power flags the bound transformer; binding the candidate changes the cost', async () => {

@@ -31,7 +31,9 @@ describe.skipIf(!hasChromium)('supplier price-list import in the browser', () =>
   it('preview shows the refused cell and the price rise; good rows only imports the rise', async () => {
     await page.goto(server.url + DEMO + '/parts');
     const form = page.locator('form#catalog-import');
-    await form.locator('input[type="file"]').setInputFiles({ name: 'northfield.csv', mimeType: 'text/csv', buffer: Buffer.from(LIST) });
+    await form
+      .locator('input[type="file"]')
+      .setInputFiles({ name: 'northfield.csv', mimeType: 'text/csv', buffer: Buffer.from(LIST) });
     await form.locator('input[name="supplier"]').fill('Northfield Components');
     await form.locator('button[type="submit"]').click();
     await page.waitForSelector('#catalog-import-preview');
@@ -48,7 +50,9 @@ describe.skipIf(!hasChromium)('supplier price-list import in the browser', () =>
     await page.screenshot({ path: artifactPath('catalog-import-preview.png'), fullPage: true });
     await page.locator('button[value="import"]').click();
     await page.waitForSelector('p.notice');
-    expect(await page.locator('p.notice').innerText()).toContain('Price list imported: 1 offer(s) changed, 0 new part(s)');
+    expect(await page.locator('p.notice').innerText()).toContain(
+      'Price list imported: 1 offer(s) changed, 0 new part(s)',
+    );
     expect(await page.locator('p.notice').innerText()).toContain('1 refused row(s) skipped');
     expect(await page.content()).toContain('1: 2.25');
     expect(session.problems).toEqual([]);

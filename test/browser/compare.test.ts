@@ -2,7 +2,14 @@
 // (differences marked in words), and sweep the PA rail's reservoir, with screenshots. Plain GET forms throughout.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { hasChromium, openSession, launchBrowser, artifactPath, CHROMIUM_PATH, type BrowserSession } from '../helpers/browser';
+import {
+  hasChromium,
+  openSession,
+  launchBrowser,
+  artifactPath,
+  CHROMIUM_PATH,
+  type BrowserSession,
+} from '../helpers/browser';
 import { startServer, type RunningServer } from '../helpers/server';
 
 if (!hasChromium) console.warn(`Browser tests skipped: ${CHROMIUM_PATH} is missing (apt-get install chromium).`);
@@ -31,7 +38,8 @@ describe.skipIf(!hasChromium)('variants and sweep in the browser', () => {
     expect(await page.locator('#compare-summary').innerText()).toContain('No figure differs.');
   });
 
-  it('compares three projects: rows that differ say so in words, the transformer row says why one has none', async () => {
+  it('compares three projects: rows that differ say so in words, the transformer row says why one has ' +
+    'none', async () => {
     const variant = await page.locator('select[name="p2"]').inputValue();
     await page.selectOption('select[name="p2"]', 'demo-portable-20m');
     await page.selectOption('select[name="p3"]', variant);

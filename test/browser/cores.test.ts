@@ -25,7 +25,8 @@ describe.skipIf(!hasChromium)('core catalog in the browser', () => {
   };
   const addForm = () => page.locator(`form[action="${DEMO}/cores"]`);
 
-  it('a bad area is refused at its box, the typed text kept; a good core is added and offered on the filter form', async () => {
+  it('a bad area is refused at its box, the typed text kept; a good core is added and offered on the filter ' +
+    'form', async () => {
     await open('/cores');
     const f = addForm();
     await f.locator('input[name="name"]').fill('Ferrite toroid 25 mm, 1–10 MHz material');

@@ -20,7 +20,11 @@ async function tabTo(page: Page, selector: string, opts: { text?: string; back?:
     const hit = await page.evaluate(
       ([sel, text]) => {
         const el = document.activeElement;
-        return !!el && el.matches(sel) && (!text || (el.textContent ?? '').includes(text) || (el.getAttribute('aria-label') ?? '').includes(text));
+        return (
+          !!el &&
+          el.matches(sel) &&
+          (!text || (el.textContent ?? '').includes(text) || (el.getAttribute('aria-label') ?? '').includes(text))
+        );
       },
       [selector, opts.text ?? ''] as const,
     );
@@ -34,7 +38,12 @@ const focusRing = (page: Page) =>
   page.evaluate(() => {
     const el = document.activeElement as HTMLElement;
     const s = getComputedStyle(el);
-    return { tag: el.tagName.toLowerCase(), style: s.outlineStyle, widthPx: parseFloat(s.outlineWidth), visible: el.matches(':focus-visible') };
+    return {
+      tag: el.tagName.toLowerCase(),
+      style: s.outlineStyle,
+      widthPx: parseFloat(s.outlineWidth),
+      visible: el.matches(':focus-visible'),
+    };
   });
 
 async function expectFocusRing(page: Page) {
@@ -94,7 +103,8 @@ describe.skipIf(!hasChromium)('keyboard only: template to pack', () => {
     await expectFocusRing(page);
     await page.keyboard.press('Enter');
     await page.locator('#stage .notice').waitFor();
-    expect(await page.locator('form[action$="/lpf"] input[name="capRatedV"]').inputValue()).toBe('300 V'); // shown back with its unit
+    expect(await page.locator('form[action$="/lpf"] ' +
+      'input[name="capRatedV"]').inputValue()).toBe('300 V'); // shown back with its unit
   });
 
   it('follows a top-fix link: the target page opens with its input focused and in view', async () => {
@@ -111,7 +121,9 @@ describe.skipIf(!hasChromium)('keyboard only: template to pack', () => {
     expect(anchor).toBeTruthy();
     await Promise.all([page.waitForURL((u) => u.hash === `#${anchor}`), page.keyboard.press('Enter')]);
     await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe(anchor);
-    expect(await page.evaluate(() => document.activeElement!.tagName.toLowerCase())).toMatch(/^(input|select|textarea)$/);
+    expect(await page.evaluate(() => document.activeElement!.tagName.toLowerCase())).toMatch(
+      /^(input|select|textarea)$/,
+    );
     const box = (await page.locator(`[id="${anchor}"]`).boundingBox())!;
     expect(box.y).toBeGreaterThanOrEqual(0);
     expect(box.y + box.height).toBeLessThanOrEqual(page.viewportSize()!.height);
@@ -120,20 +132,25 @@ describe.skipIf(!hasChromium)('keyboard only: template to pack', () => {
 
   it('opens and closes a collapsible section with Enter and Space; its header shows the state', async () => {
     await page.goto(projectUrl);
-    const marker = () => page.evaluate(() => getComputedStyle(document.querySelector('details#settings > summary')!, '::before').content);
+    const marker = () =>
+      page.evaluate(() => getComputedStyle(document.querySelector('details#settings > summary')!, '::before').content);
     expect(await page.locator('details#settings').evaluate((d) => (d as HTMLDetailsElement).open)).toBe(false);
     expect(await marker()).toBe('"▸"');
     await tabTo(page, 'details#settings > summary');
     await expectFocusRing(page);
     await page.keyboard.press('Enter');
-    await expect.poll(() => page.locator('details#settings').evaluate((d) => (d as HTMLDetailsElement).open)).toBe(true);
+    await expect
+      .poll(() => page.locator('details#settings').evaluate((d) => (d as HTMLDetailsElement).open))
+      .toBe(true);
     expect(await marker()).toBe('"▾"');
     // the section's first box is next on Tab
     await page.keyboard.press('Tab');
     expect(await page.evaluate(() => (document.activeElement as HTMLInputElement).name)).toBe('name');
     await page.keyboard.press('Shift+Tab');
     await page.keyboard.press('Space');
-    await expect.poll(() => page.locator('details#settings').evaluate((d) => (d as HTMLDetailsElement).open)).toBe(false);
+    await expect
+      .poll(() => page.locator('details#settings').evaluate((d) => (d as HTMLDetailsElement).open))
+      .toBe(false);
   });
 
   it("downloads the builder's pack from the pack page", async () => {
@@ -142,7 +159,10 @@ describe.skipIf(!hasChromium)('keyboard only: template to pack', () => {
     await Promise.all([page.waitForURL(/\/pack$/), page.keyboard.press('Enter')]);
     await tabTo(page, 'a[download]', { text: 'Builder’s pack, A4' });
     await expectFocusRing(page);
-    const [download] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.keyboard.press('Enter')]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download', { timeout: 60_000 }),
+      page.keyboard.press('Enter'),
+    ]);
     const file = join(session.downloads, download.suggestedFilename() || 'pack.pdf');
     await download.saveAs(file);
     expect(readFileSync(file).subarray(0, 5).toString('latin1')).toBe('%PDF-');

@@ -22,7 +22,11 @@ const overflowing = (page: Page) =>
       .filter((e) => e.getBoundingClientRect().right > window.innerWidth + 1 && !e.closest('.scroll-x'))
       .filter((e) => ![...e.children].some((c) => c.getBoundingClientRect().right > window.innerWidth + 1))
       .slice(0, 5)
-      .map((e) => `${e.tagName.toLowerCase()}${e.id ? '#' + e.id : ''}${typeof e.className === 'string' && e.className ? '.' + e.className : ''}`),
+      .map(
+        (e) =>
+          `${e.tagName.toLowerCase()}${e.id ? '#' + e.id : ''}` +
+            `${typeof e.className === 'string' && e.className ? '.' + e.className : ''}`,
+      ),
   );
 
 describe.skipIf(!hasChromium)('pages at phone and desktop width', () => {
@@ -37,7 +41,9 @@ describe.skipIf(!hasChromium)('pages at phone and desktop width', () => {
     for (const [w, h] of [[390, 844], [1280, 900]]) {
       await page.setViewportSize({ width: w, height: h });
       await page.goto(server.url + path);
-      expect(await page.evaluate(() => document.documentElement.scrollWidth), `${name} at ${w} px`).toBeLessThanOrEqual(w);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth), `${name} at ${w} px`).toBeLessThanOrEqual(
+        w,
+      );
       expect(await overflowing(page), `${name} at ${w} px`).toEqual([]);
       await page.screenshot({ path: artifactPath(`${name}-${w}.png`), fullPage: w === 390 });
     }

@@ -39,7 +39,10 @@ describe.skipIf(!hasChromium)('main flow without JavaScript', () => {
     const form = page.locator('form[action="/projects"]');
     await form.locator('#tpl-single-rail').check();
     await form.locator('input[name="name"]').fill('No-script rig');
-    await Promise.all([page.waitForURL(/\/projects\/prj[^/]*$/), form.getByRole('button', { name: 'Create project' }).click()]);
+    await Promise.all([
+      page.waitForURL(/\/projects\/prj[^/]*$/),
+      form.getByRole('button', { name: 'Create project' }).click(),
+    ]);
     projectUrl = page.url();
     expect(await page.title()).toContain('No-script rig');
   });
@@ -56,9 +59,14 @@ describe.skipIf(!hasChromium)('main flow without JavaScript', () => {
     const stageUrl = page.url();
     const form = page.locator(`form[action="${new URL(stageUrl).pathname}"]`);
     await form.locator('input[name="name"]').fill('Receiver (edited without script)');
-    await Promise.all([page.waitForURL((u) => u.pathname === new URL(stageUrl).pathname), form.getByRole('button', { name: 'Save stage' }).click()]);
+    await Promise.all([
+      page.waitForURL((u) => u.pathname === new URL(stageUrl).pathname),
+      form.getByRole('button', { name: 'Save stage' }).click(),
+    ]);
     await page.waitForLoadState('load');
-    expect(await page.locator(`form[action="${new URL(stageUrl).pathname}"] input[name="name"]`).inputValue()).toBe('Receiver (edited without script)');
+    expect(await page.locator(`form[action="${new URL(stageUrl).pathname}"] input[name="name"]`).inputValue()).toBe(
+      'Receiver (edited without script)',
+    );
   });
 
   it('a top-fix link opens its page with the input focused (an anchor, no script)', async () => {
@@ -70,7 +78,9 @@ describe.skipIf(!hasChromium)('main flow without JavaScript', () => {
     expect(anchor).toBeTruthy();
     await Promise.all([page.waitForURL((u) => u.hash === `#${anchor}`), link.click()]);
     await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe(anchor);
-    expect(await page.evaluate(() => document.activeElement!.tagName.toLowerCase())).toMatch(/^(input|select|textarea)$/);
+    expect(await page.evaluate(() => document.activeElement!.tagName.toLowerCase())).toMatch(
+      /^(input|select|textarea)$/,
+    );
   });
 
   it('opens the settings section and saves the number of kits', async () => {
@@ -97,7 +107,10 @@ describe.skipIf(!hasChromium)('main flow without JavaScript', () => {
 
   it('downloads the pack with a plain link', async () => {
     await page.goto(`${projectUrl}/pack`);
-    const [download] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.getByRole('link', { name: 'Builder’s pack, A4' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download', { timeout: 60_000 }),
+      page.getByRole('link', { name: 'Builder’s pack, A4' }).click(),
+    ]);
     const file = join(mkdtempSync(join(tmpdir(), 'rw-nojs-')), download.suggestedFilename() || 'pack.pdf');
     await download.saveAs(file);
     expect(readFileSync(file).subarray(0, 5).toString('latin1')).toBe('%PDF-');

@@ -40,18 +40,27 @@ describe.skipIf(!hasChromium)('without JavaScript', () => {
     await page.goto(server.url + DEMO);
     const before = await total('receive');
     await loadsForm().locator('input[name="l0_receive"]').fill('1.75 A');
-    await Promise.all([page.waitForURL(server.url + DEMO), loadsForm().getByRole('button', { name: 'Save currents' }).click()]);
+    await Promise.all([
+      page.waitForURL(server.url + DEMO),
+      loadsForm().getByRole('button', { name: 'Save currents' }).click(),
+    ]);
     await page.waitForLoadState('load');
-    expect(await loadsForm().locator('input[name="l0_receive"]').inputValue()).toBe('1750') // 1.75 A shown back in the box's unit, mA;
+    // 1.75 A shown back in the box's unit, mA;
+    expect(await loadsForm().locator('input[name="l0_receive"]').inputValue()).toBe('1750');
     expect(await total('receive')).not.toBe(before);
   });
 
   it('a refused current comes back as a full page with the message beside the field and the text kept', async () => {
     await page.goto(server.url + DEMO);
     await loadsForm().locator('input[name="l0_receive"]').fill('abc');
-    await Promise.all([page.waitForLoadState('load'), loadsForm().getByRole('button', { name: 'Save currents' }).click()]);
+    await Promise.all([
+      page.waitForLoadState('load'),
+      loadsForm().getByRole('button', { name: 'Save currents' }).click(),
+    ]);
     await page.locator('form.loads label.has-error .error').first().waitFor();
-    expect(await page.locator('form.loads label.has-error .error').first().innerText()).toMatch(/"abc" is not understood/);
+    expect(await page.locator('form.loads label.has-error .error').first().innerText()).toMatch(
+      /"abc" is not understood/,
+    );
     expect(await page.locator('form.loads input[aria-invalid="true"]').first().inputValue()).toBe('abc');
     await page.screenshot({ path: artifactPath('overview-no-js-refused.png'), fullPage: true });
   });
@@ -65,7 +74,10 @@ describe.skipIf(!hasChromium)('without JavaScript', () => {
     await Promise.all([page.waitForLoadState('load'), form.getByRole('button', { name: 'Add stage' }).click()]);
     await expect.poll(() => names()).toHaveLength(before.length + 1);
     const now = await names();
-    await Promise.all([page.waitForLoadState('load'), page.getByRole('button', { name: `Move ${now[0]} down` }).click()]);
+    await Promise.all([
+      page.waitForLoadState('load'),
+      page.getByRole('button', { name: `Move ${now[0]} down` }).click(),
+    ]);
     await expect.poll(() => names()).toEqual([now[1], now[0], ...now.slice(2)]);
   });
 });

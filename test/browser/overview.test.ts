@@ -25,13 +25,15 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
 
   afterAll(() => session?.close());
 
-  const markPage = () => page.evaluate(() => ((window as unknown as { __rigwrightMarker: string }).__rigwrightMarker = 'still-here'));
+  const markPage = () =>
+    page.evaluate(() => ((window as unknown as { __rigwrightMarker: string }).__rigwrightMarker = 'still-here'));
   const marker = () => page.evaluate(() => (window as unknown as { __rigwrightMarker?: string }).__rigwrightMarker);
   const total = (mode: string) => page.locator(`#budget [data-total-mode="${mode}"]`).innerText();
   const loadsForm = () => page.locator('form.loads').first();
   const stageNames = () => page.locator('li.stage .stage-name').allInnerTexts();
 
-  it('at 1280x900 the first screen shows the verdict, the power-flow diagram and the top fixes without scrolling', async () => {
+  it('at 1280x900 the first screen shows the verdict, the power-flow diagram and the top fixes without ' +
+    'scrolling', async () => {
     expect(page.viewportSize()).toEqual({ width: 1280, height: 900 });
     await page.evaluate(() => window.scrollTo(0, 0));
     for (const sel of ['#verdict', '#top-fixes', '#power-flow svg.power-flow']) {
@@ -48,12 +50,15 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
     await page.screenshot({ path: artifactPath('overview-first-screen.png') });
   });
 
-  it('data-verdict matches the actionable findings listed under "Checks at a glance", and the top fixes are the first three', async () => {
+  it('data-verdict matches the actionable findings listed under "Checks at a glance", and the top fixes are the ' +
+    'first three', async () => {
     const verdict = await page.locator('[data-verdict]').getAttribute('data-verdict');
     expect(await page.locator('[data-verdict]').count()).toBe(1);
     // the actionable findings that need attention, as the page lists them (standing cautions are in their own block)
     const listed = page.locator('#checks ul.findings > li.finding');
-    const severities = await listed.evaluateAll((els) => els.map((e) => (e.classList.contains('sev-fail') ? 'fail' : 'caution')));
+    const severities = await listed.evaluateAll((els) =>
+      els.map((e) => (e.classList.contains('sev-fail') ? 'fail' : 'caution')),
+    );
     const expected = severities.includes('fail') ? 'fail' : severities.includes('caution') ? 'caution' : 'ok';
     expect(verdict).toBe(expected);
     expect(expected).not.toBe('ok'); // the club demo carries cautions, so the check above compares something
@@ -62,10 +67,14 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
     const firstRules = await listed.evaluateAll((els) => els.map((e) => e.getAttribute('data-rule')));
     const fixRules = await fixes.evaluateAll((els) => els.map((e) => e.getAttribute('data-rule')));
     // fails first, then cautions, as in the list below (which keeps the same order within a severity)
-    const sorted = [...firstRules.keys()].sort((a, b) => (severities[a] === severities[b] ? a - b : severities[a] === 'fail' ? -1 : 1));
+    const sorted = [...firstRules.keys()].sort((a, b) =>
+      severities[a] === severities[b] ? a - b : severities[a] === 'fail' ? -1 : 1,
+    );
     expect(fixRules).toEqual(sorted.slice(0, 3).map((i) => firstRules[i]));
     // each fix links to a page that exists, and an anchor it names is on that page
-    for (const href of await page.locator('#top-fixes a.fix-link').evaluateAll((els) => els.map((e) => e.getAttribute('href')!))) {
+    for (const href of await page
+      .locator('#top-fixes a.fix-link')
+      .evaluateAll((els) => els.map((e) => e.getAttribute('href')!))) {
       const res = await fetch(server.url + href);
       expect(res.status, href).toBe(200);
       const anchor = href.split('#')[1];
@@ -88,7 +97,10 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
     expect(await field.inputValue()).not.toBe(typed);
     await field.fill(typed);
     await loadsForm().getByRole('button', { name: 'Save currents' }).click();
-    await page.waitForFunction((prev) => document.querySelector('#budget [data-total-mode="receive"]')?.textContent !== prev, before);
+    await page.waitForFunction(
+      (prev) => document.querySelector('#budget [data-total-mode="receive"]')?.textContent !== prev,
+      before,
+    );
     expect(await total('receive')).not.toBe(before);
     expect(await marker()).toBe('still-here'); // the window survived: the swap was in place
     await expect.poll(() => page.locator('#overview .notice').innerText()).toMatch(/Saved/);
@@ -111,7 +123,8 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
     expect(await marker()).toBe('still-here');
   });
 
-  it('refuses "abc" as a current: the message stands beside the field, the typed text is kept, nothing is saved', async () => {
+  it('refuses "abc" as a current: the message stands beside the field, the typed text is kept, nothing is ' +
+    'saved', async () => {
     await markPage();
     const before = await total('receive');
     const field = loadsForm().locator('input[name="l0_receive"]');

@@ -51,7 +51,9 @@ describe.skipIf(!hasChromium)('section pages in the browser', () => {
         const props = ['form', 'elements', 'submit', 'requestSubmit', 'reset', 'checkValidity', 'reportValidity'];
         const out: string[] = [];
         document.querySelectorAll('form').forEach((f) => {
-          for (const p of props) if ((f as unknown as Record<string, unknown>)[p] instanceof Element) out.push(`${f.getAttribute('action')}: a control named "${p}"`);
+          for (const p of props)
+            if ((f as unknown as Record<string, unknown>)[p] instanceof Element)
+              out.push(`${f.getAttribute('action')}: a control named "${p}"`);
         });
         return out;
       });
@@ -60,7 +62,8 @@ describe.skipIf(!hasChromium)('section pages in the browser', () => {
     expect(clobbered).toEqual([]);
   });
 
-  it('stage page: redesigning the filter at a higher order updates the checks in place; an even order is refused beside the field', async (ctx) => {
+  it('stage page: redesigning the filter at a higher order updates the checks in place; an even order is refused ' +
+    'beside the field', async (ctx) => {
     await open(`${DEMO}/stages/st-lpf`, ctx);
     await page.screenshot({ path: artifactPath('stage-lpf.png'), fullPage: true });
     const form = () => page.locator(`form[action="${DEMO}/stages/st-lpf/lpf"]`);
@@ -86,11 +89,14 @@ describe.skipIf(!hasChromium)('section pages in the browser', () => {
     await form.locator('input[name="antennaGain"]').fill('12');
     await form.getByRole('button', { name: 'Save and recompute' }).click();
     await expect.poll(() => text('#rf-results')).not.toBe(before);
-    expect(await page.locator(`form[action="${DEMO}/rf/settings"] input[name="antennaGain"]`).inputValue()).toMatch(/^12/);
+    expect(await page.locator(`form[action="${DEMO}/rf/settings"] input[name="antennaGain"]`).inputValue()).toMatch(
+      /^12/,
+    );
     expect(await marker()).toBe('kept');
   });
 
-  it('parts catalog: a malformed price list is refused beside the field with the text kept; a good one is saved in place', async (ctx) => {
+  it('parts catalog: a malformed price list is refused beside the field with the text kept; a good one is saved in ' +
+    'place', async (ctx) => {
     await open(`${DEMO}/parts`, ctx);
     await page.screenshot({ path: artifactPath('parts.png'), fullPage: true });
     const offer = () => page.locator('form[aria-label="Offer Northfield Components NC-TR-7016"]');
@@ -107,7 +113,8 @@ describe.skipIf(!hasChromium)('section pages in the browser', () => {
     expect(await marker()).toBe('kept');
   });
 
-  it('parts list: changing a quantity updates the cost in place; a bad quantity is refused; the CSV download carries the new quantity', async (ctx) => {
+  it('parts list: changing a quantity updates the cost in place; a bad quantity is refused; the CSV download carries ' +
+    'the new quantity', async (ctx) => {
     await open(`${DEMO}/bom`, ctx);
     await page.screenshot({ path: artifactPath('bom.png'), fullPage: true });
     const line = () => page.locator('form#line-b1');
@@ -125,7 +132,10 @@ describe.skipIf(!hasChromium)('section pages in the browser', () => {
     await expect.poll(() => cost()).not.toBe(before);
     expect(await marker()).toBe('kept');
 
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'CSV (comma separated)' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'CSV (comma separated)' }).click(),
+    ]);
     const file = join(dl, download.suggestedFilename() || 'parts.csv');
     await download.saveAs(file);
     const csv = parseCsv(readFileSync(file, 'utf8'));
@@ -141,7 +151,11 @@ describe.skipIf(!hasChromium)('section pages in the browser', () => {
   it('parts list: a CSV file is previewed first, then imported as new lines', async (ctx) => {
     await open(`${DEMO}/bom`, ctx);
     const file = join(dl, 'lines.csv');
-    writeFileSync(file, 'Refs,Description,Quantity,Supplier,Price,Currency\r\nR81,Resistor 1k 0.25 W,2,Plain Parts Co,0.05,USD\r\nR83,Resistor 4k7 0.25 W,1,Plain Parts Co,0.05,USD\r\n');
+    writeFileSync(
+      file,
+      'Refs,Description,Quantity,Supplier,Price,Currency\r\nR81,Resistor 1k 0.25 W,2,Plain Parts ' +
+        'Co,0.05,USD\r\nR83,Resistor 4k7 0.25 W,1,Plain Parts Co,0.05,USD\r\n',
+    );
     const form = page.locator('form[aria-label="Import a parts list from CSV"]');
     await form.locator('input[type="file"]').setInputFiles(file);
     await Promise.all([page.waitForURL(/\/bom\/import$/), form.getByRole('button', { name: /Preview/ }).click()]);

@@ -26,7 +26,10 @@ describe.skipIf(!hasChromium)('parts pages on a 390 px screen', () => {
   for (const [name, path] of [['parts-list', `${DEMO}/bom`], ['parts-catalog', `${DEMO}/parts`]] as const) {
     it(`${name}: the page is no wider than the screen`, async () => {
       await page.goto(session.server.url + path);
-      const widths = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
+      const widths = await page.evaluate(() => [
+        document.documentElement.scrollWidth,
+        document.documentElement.clientWidth,
+      ]);
       await page.screenshot({ path: artifactPath(`${name}-390.png`), fullPage: true });
       expect(widths).toEqual([PHONE_WIDTH_PX, PHONE_WIDTH_PX]);
     });
@@ -53,8 +56,15 @@ describe.skipIf(!hasChromium)('parts pages on a 390 px screen', () => {
 
   /** A screen-sized shot (390 x 844) from the top of `selector`, for a person to look at. */
   const shot = async (selector: string, name: string) => {
-    const top = await page.locator(selector).first().evaluate((e) => e.getBoundingClientRect().top + window.scrollY);
-    await page.screenshot({ path: artifactPath(name), fullPage: true, clip: { x: 0, y: top, width: PHONE_WIDTH_PX, height: 844 } });
+    const top = await page
+      .locator(selector)
+      .first()
+      .evaluate((e) => e.getBoundingClientRect().top + window.scrollY);
+    await page.screenshot({
+      path: artifactPath(name),
+      fullPage: true,
+      clip: { x: 0, y: top, width: PHONE_WIDTH_PX, height: 844 },
+    });
   };
 
   it('parts list: the candidates of every role fit the screen, with their Use buttons', async () => {
@@ -77,18 +87,23 @@ describe.skipIf(!hasChromium)('parts pages on a 390 px screen', () => {
     await shot('#order-sheets', 'parts-order-sheets-390.png');
   });
 
-  it('parts catalog: the price-list import preview fits the screen, each row of the file a card with its refusal in view', async () => {
+  it('parts catalog: the price-list import preview fits the screen, each row of the file a card with its refusal in ' +
+    'view', async () => {
     await page.goto(session.server.url + `${DEMO}/parts`);
     const list = ['Description,Category,SKU,Price breaks,Min order,Multiple',
       'Electrolytic capacitor 4700 µF 35 V,capacitor,NC-E4735,"1: 2.25, 10: 1.82, 50: 1.49",1,1',
       'Relay 12 V DPDT,relay,NC-RL-NEW,"1: 2.00",lots,1'].join('\n');
     const form = page.locator('form#catalog-import');
     await form.evaluate((f) => f.closest('details')?.setAttribute('open', ''));
-    await form.locator('input[type="file"]').setInputFiles({ name: 'northfield.csv', mimeType: 'text/csv', buffer: Buffer.from(list) });
+    await form
+      .locator('input[type="file"]')
+      .setInputFiles({ name: 'northfield.csv', mimeType: 'text/csv', buffer: Buffer.from(list) });
     await form.locator('input[name="supplier"]').fill('Northfield Components');
     await form.locator('button[type="submit"]').click();
     await page.waitForSelector('#catalog-import-preview');
-    const o = await overflow('#catalog-import-preview, #catalog-import-preview form, #catalog-import-preview p, #catalog-import-preview td');
+    const o = await overflow(
+      '#catalog-import-preview, #catalog-import-preview form, #catalog-import-preview p, #catalog-import-preview td',
+    );
     expect(o.count).toBeGreaterThan(10);
     const refused = page.locator('#catalog-import-preview tr.refused td[data-label="Problems"]');
     expect(await refused.innerText()).toContain('Min order: "lots" is not a number of pieces');

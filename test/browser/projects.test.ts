@@ -41,7 +41,10 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
   it('exports the demo as JSON and imports the file back as a new project with the same content', async () => {
     await page.goto(server.url + '/');
     const row = page.locator('table.projects tbody tr', { has: page.locator(`a[href="/projects/${DEMO}"]`) });
-    const [download] = await Promise.all([page.waitForEvent('download'), row.getByRole('link', { name: 'Export JSON' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      row.getByRole('link', { name: 'Export JSON' }).click(),
+    ]);
     const file = join(dl, download.suggestedFilename());
     await download.saveAs(file);
     expect(download.suggestedFilename()).toMatch(/\.json$/);
@@ -50,7 +53,10 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
     expect(exported.project.id).toBe(DEMO);
 
     await page.locator('form[action="/import"] input[type="file"]').setInputFiles(file);
-    await Promise.all([page.waitForURL(/\/projects\/prj/), page.locator('form[action="/import"]').getByRole('button', { name: 'Import' }).click()]);
+    await Promise.all([
+      page.waitForURL(/\/projects\/prj/),
+      page.locator('form[action="/import"]').getByRole('button', { name: 'Import' }).click(),
+    ]);
     const newId = new URL(page.url()).pathname.split('/').pop()!;
     expect(newId).not.toBe(DEMO);
     expect(await page.locator('header .crumb').innerText()).toBe(exported.project.name);
@@ -68,7 +74,10 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
     await page.locator('li.stage', { hasText: victim }).getByRole('link', { name: /Delete/ }).click();
     await page.waitForURL(/\/delete$/);
     expect(await page.locator('main').innerText()).toContain(victim);
-    await Promise.all([page.waitForURL(new RegExp(`/projects/${DEMO}(\\?.*)?$`)), page.getByRole('button', { name: /delete/i }).click()]);
+    await Promise.all([
+      page.waitForURL(new RegExp(`/projects/${DEMO}(\\?.*)?$`)),
+      page.getByRole('button', { name: /delete/i }).click(),
+    ]);
     expect(await names()).toEqual(before.slice(0, -1));
 
     await page.goto(server.url + '/');
@@ -121,7 +130,12 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
     const form = () => page.locator(`form[action="/projects/${DEMO}/supply/rails/rail-13v8"]`);
     await form().locator('input[name="r2"]').fill('2.7 kΩ');
     await form().getByRole('button', { name: 'Save rail' }).click();
-    await expect.poll(async () => (await (await fetch(`${server.url}/projects/${DEMO}/supply`)).text()).includes('value="2.7 kΩ"'), { timeout: 20_000 }).toBe(true);
+    await expect
+      .poll(
+        async () => (await (await fetch(`${server.url}/projects/${DEMO}/supply`)).text()).includes('value="2.7 kΩ"'),
+        { timeout: 20_000 },
+      )
+      .toBe(true);
     expect(await marker()).toBe('kept');
   });
 
@@ -137,7 +151,10 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
       const hrefs = await page.locator('a[href]').evaluateAll((as) => as.map((a) => a.getAttribute('href')!));
       const href = hrefs.find((h) => linkPattern.test(h));
       if (!href) ctx.skip(`no ${label} link on /${path} yet`);
-      const [download] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.locator(`a[href="${href}"]`).first().click()]);
+      const [download] = await Promise.all([
+        page.waitForEvent('download', { timeout: 60_000 }),
+        page.locator(`a[href="${href}"]`).first().click(),
+      ]);
       const file = join(dl, download.suggestedFilename() || `${path}.bin`);
       await download.saveAs(file);
       const bytes = readFileSync(file);
@@ -148,7 +165,11 @@ describe.skipIf(!hasChromium)('project list, downloads and other pages in the br
       if (magic && PDFTOTEXT) {
         const text = spawnSync(PDFTOTEXT, ['-layout', file, '-'], { encoding: 'utf8' }).stdout;
         expect(text).toContain('Club build');
-      } else if (magic) console.warn('[skip] PDF text check of the downloaded pack skipped: pdftotext not found on PATH (apt-get install poppler-utils).');
+      } else if (magic)
+        console.warn(
+          '[skip] PDF text check of the downloaded pack skipped: pdftotext not found on PATH (apt-get install ' +
+            'poppler-utils).',
+        );
     });
   }
 

@@ -44,7 +44,10 @@ describe.skipIf(!hasChromium)('guided start: template to a costed plan and the p
     await form.locator('input[name="power"]').fill('15 W');
     await form.locator('select[name="mains"]').selectOption('230-50');
     await page.screenshot({ path: artifactPath('template-new-project.png'), fullPage: true });
-    await Promise.all([page.waitForURL(/\/projects\/prj[^/]*$/), form.getByRole('button', { name: 'Create project' }).click()]);
+    await Promise.all([
+      page.waitForURL(/\/projects\/prj[^/]*$/),
+      form.getByRole('button', { name: 'Create project' }).click(),
+    ]);
     projectUrl = page.url();
     expect(await page.locator('li.stage .stage-name').allInnerTexts()).toEqual([
       'Direct-conversion receiver',
@@ -84,7 +87,10 @@ describe.skipIf(!hasChromium)('guided start: template to a costed plan and the p
     await page.goto(`${projectUrl}/pack`);
     await page.screenshot({ path: artifactPath('template-pack.png'), fullPage: true });
     const fetchPack = async (label: string) => {
-      const [download] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.getByRole('link', { name: label }).click()]);
+      const [download] = await Promise.all([
+        page.waitForEvent('download', { timeout: 60_000 }),
+        page.getByRole('link', { name: label }).click(),
+      ]);
       const file = join(session.downloads, download.suggestedFilename() || 'pack.pdf');
       await download.saveAs(file);
       expect(readFileSync(file).subarray(0, 5).toString('latin1')).toBe('%PDF-');

@@ -65,7 +65,15 @@ describe('compare page', () => {
     await changeProject(
       database,
       variantId,
-      (p) => ({ ...p, supply: { ...p.supply, rails: p.supply.rails.map((r) => (r.kind === 'rectified' && r.name.startsWith('PA rail') ? { ...r, reservoirF: 0.0136 } : r)) } }),
+      (p) => ({
+        ...p,
+        supply: {
+          ...p.supply,
+          rails: p.supply.rails.map((r) =>
+            r.kind === 'rectified' && r.name.startsWith('PA rail') ? { ...r, reservoirF: 0.0136 } : r,
+          ),
+        },
+      }),
       NOW,
     );
     const html = await text(await get(`/compare?p1=${CLUB}&p2=${variantId}`));
@@ -126,12 +134,22 @@ describe('sweep page', () => {
     expect(html).toContain('limit (0 V)');
     const body = /<table class="sweep-table">[\s\S]*?<tbody>([\s\S]*?)<\/tbody>/.exec(html)![1];
     // 2200 to 15000 µF in 5 points: 2200, 5400, 8600, 11800, 15000 (step 3200)
-    expect([...body.matchAll(/<th scope="row">([^<]*)<\/th>/g)].map((m) => m[1])).toEqual(['2200', '5400', '8600', '11800', '15000']);
+    expect([...body.matchAll(/<th scope="row">([^<]*)<\/th>/g)].map((m) => m[1])).toEqual([
+      '2200',
+      '5400',
+      '8600',
+      '11800',
+      '15000',
+    ]);
   });
 
   it.each([
     ['param=reservoirF&target=rail-pa&from=abc&to=15000&points=5', 'From (reservoir capacitance)', 'abc'],
-    ['param=reservoirF&target=rail-pa&from=9000&to=3000&points=5', 'To (reservoir capacitance) must be above From', '3000'],
+    [
+      'param=reservoirF&target=rail-pa&from=9000&to=3000&points=5',
+      'To (reservoir capacitance) must be above From',
+      '3000',
+    ],
     ['param=mainsV&target=mains&from=100&to=140&points=40', 'Points', '40'],
     ['param=reservoirF&target=rail-13v8&from=1000&to=3000&points=3', 'Item to vary: there is no such item', null],
     ['param=voltage&from=1&to=2&points=3', 'Parameter: "voltage" is not one that can be swept', null],

@@ -5,7 +5,17 @@ import { demoApp } from '../helpers/app';
 import { loadProject } from '../../src/db/projects';
 
 const ID = 'demo-club-30m';
-const good = { name: 'Iron-powder toroid 17.5 mm, 1–20 MHz mix', al: '49 µH/100t', ae: '12.2 mm²', le: '42.1', innerDiameter: '9.4', window: '', fmin: '1', fmax: '20', bmax: '12' };
+const good = {
+  name: 'Iron-powder toroid 17.5 mm, 1–20 MHz mix',
+  al: '49 µH/100t',
+  ae: '12.2 mm²',
+  le: '42.1',
+  innerDiameter: '9.4',
+  window: '',
+  fmin: '1',
+  fmax: '20',
+  bmax: '12',
+};
 
 describe('core catalog pages', () => {
   it('lists the demo cores, each with its own form, and links from the RF page', async () => {
@@ -32,8 +42,17 @@ describe('core catalog pages', () => {
   it('refuses bad input naming the field, keeps the typed text, stores nothing', async () => {
     const t = await demoApp();
     const before = (await loadProject(t.database.db, ID))!;
-    for (const [k, bad, label] of [['ae', 'abc', 'Effective area Ae'], ['fmax', '0.5', 'Material up to'], ['innerDiameter', '', 'Inner diameter'], ['name', '', 'Core (size and material)']]) {
-      const res = await t.post(`/projects/${ID}/cores`, { ...good, [k]: bad, version: String(before.version) }, { 'HX-Request': 'true' });
+    for (const [k, bad, label] of [
+      ['ae', 'abc', 'Effective area Ae'],
+      ['fmax', '0.5', 'Material up to'],
+      ['innerDiameter', '', 'Inner diameter'],
+      ['name', '', 'Core (size and material)'],
+    ]) {
+      const res = await t.post(
+        `/projects/${ID}/cores`,
+        { ...good, [k]: bad, version: String(before.version) },
+        { 'HX-Request': 'true' },
+      );
       expect(res.status, k).toBe(422);
       const body = await res.text();
       expect(body, k).toContain(label);
@@ -51,7 +70,11 @@ describe('core catalog pages', () => {
     expect(p2.cores!.find((c) => c.id === used)!.fluxLimitT).toBeCloseTo(0.02, 12);
     const confirm = await (await t.get(`/projects/${ID}/cores/${used}/delete`)).text();
     expect(confirm).toContain('cannot be deleted while it is in use');
-    const refused = await t.post(`/projects/${ID}/cores/${used}/delete`, { version: String(p2.version) }, { 'HX-Request': 'true' });
+    const refused = await t.post(
+      `/projects/${ID}/cores/${used}/delete`,
+      { version: String(p2.version) },
+      { 'HX-Request': 'true' },
+    );
     expect(refused.status).toBe(422);
     const free = p2.cores!.find((c) => !p2.stages.some((s) => s.lpf?.coreId === c.id || s.pa?.outputCoreId === c.id))!;
     const del = await t.post(`/projects/${ID}/cores/${free.id}/delete`, { version: String(p2.version) });

@@ -38,7 +38,9 @@ describe('exchange rates in the project currency', () => {
     const parts1 = await (await get(`/projects/${ID}/parts`)).text();
     const costing = formByAction(parts1, `/projects/${ID}/costing`);
     const version = String((await loadProject(database.db, ID))!.version);
-    expect((await post(`/projects/${ID}/costing`, { ...costing.fields, version, rates: 'USD = 0.92' })).status).toBe(303);
+    expect((await post(`/projects/${ID}/costing`, { ...costing.fields, version, rates: 'USD = 0.92' })).status).toBe(
+      303,
+    );
     const parts = unescapeHtml(await (await get(`/projects/${ID}/parts`)).text());
     expect(parts).toContain('Exchange rates into EUR');
     expect(parts).toContain('USD = 0.92 means 1 USD = 0.92 EUR');

@@ -11,7 +11,11 @@ const FAIL = '#b3261e';
 
 describe('trough chart', () => {
   // invented rails: 24 V minimum; troughs in volts
-  const row = (points: [string, number][]): TroughRow => ({ name: 'PA rail', points: points.map(([label, troughV]) => ({ label, troughV })), minimumV: 24 });
+  const row = (points: [string, number][]): TroughRow => ({
+    name: 'PA rail',
+    points: points.map(([label, troughV]) => ({ label, troughV })),
+    minimumV: 24,
+  });
 
   it('below the minimum only at the tolerance corner: a caution note and dot, no ✗', () => {
     const svg = troughChartSvg([row([[`L${TOLERANCE_MARK}`, 23.5], ['L', 24.5], ['N', 26], ['H', 28]])]);

@@ -13,7 +13,8 @@ import { TEMPLATE_INFO, TEMPLATE_KEYS } from '../../src/core/templates/choices';
 const DEMOS = ['demo-club-30m', 'demo-portable-20m'];
 
 /** The tag name of the element carrying this id, or null. */
-const tagWithId = (html: string, id: string) => new RegExp(`<(\\w+)\\b[^>]*\\sid="${id.replace(/[-/\\^$*+?.()|[\]{}]/g, '\\$&')}"`).exec(html)?.[1] ?? null;
+const tagWithId = (html: string, id: string) =>
+  new RegExp(`<(\\w+)\\b[^>]*\\sid="${id.replace(/[-/\\^$*+?.()|[\]{}]/g, '\\$&')}"`).exec(html)?.[1] ?? null;
 
 describe('fix links go to the field', () => {
   it('ids are spec--item--field, a field path with dots kept apart by dashes', () => {
@@ -56,32 +57,51 @@ describe('fix links go to the field', () => {
       const [path, anchor] = href.split('#');
       if (!pages.has(path)) pages.set(path, await (await get(path)).text());
       const tag = anchor ? tagWithId(pages.get(path)!, anchor) : null;
-      if (!tag || !/^(input|select|textarea)$/.test(tag)) wrong.push(`${f.rule} (${f.subject}) → ${href}: ${tag ?? 'no such id'}`);
+      if (!tag || !/^(input|select|textarea)$/.test(tag))
+        wrong.push(`${f.rule} (${f.subject}) → ${href}: ${tag ?? 'no such id'}`);
     }
     expect(wrong).toEqual([]);
   });
 
-  it.each(TEMPLATE_KEYS.map((k) => [k]))('a project from the %s template: every finding to fix links to a form control', async (template) => {
-    const { get, post, database } = await demoApp();
-    const res = await post('/projects', { name: `From ${template}`, band: '7.03', power: '5', mains: TEMPLATE_INFO[template].mains ? '230-50' : 'battery', template });
-    expect(res.status).toBe(303);
-    const path = res.headers.get('Location')!;
-    const project = (await loadProject(database.db, path.split('/').pop()!))!;
-    const pages = new Map<string, string>();
-    const wrong: string[] = [];
-    for (const f of actionable(evaluate(project).findings).filter((x) => x.severity !== 'ok')) {
-      const { href } = fixLink(project, f);
-      const [page, anchor] = href.split('#');
-      if (!pages.has(page)) pages.set(page, await (await get(page)).text());
-      const tag = anchor ? tagWithId(pages.get(page)!, anchor) : null;
-      if (!tag || !/^(input|select|textarea)$/.test(tag)) wrong.push(`${f.rule} (${f.subject}) → ${href}: ${tag ?? 'no such id'}`);
-    }
-    expect(wrong).toEqual([]);
-  });
+  it.each(TEMPLATE_KEYS.map((k) => [k]))(
+    'a project from the %s template: every finding to fix links to a form control',
+    async (template) => {
+      const { get, post, database } = await demoApp();
+      const res = await post('/projects', {
+        name: `From ${template}`,
+        band: '7.03',
+        power: '5',
+        mains: TEMPLATE_INFO[template].mains ? '230-50' : 'battery',
+        template,
+      });
+      expect(res.status).toBe(303);
+      const path = res.headers.get('Location')!;
+      const project = (await loadProject(database.db, path.split('/').pop()!))!;
+      const pages = new Map<string, string>();
+      const wrong: string[] = [];
+      for (const f of actionable(evaluate(project).findings).filter((x) => x.severity !== 'ok')) {
+        const { href } = fixLink(project, f);
+        const [page, anchor] = href.split('#');
+        if (!pages.has(page)) pages.set(page, await (await get(page)).text());
+        const tag = anchor ? tagWithId(pages.get(page)!, anchor) : null;
+        if (!tag || !/^(input|select|textarea)$/.test(tag))
+          wrong.push(`${f.rule} (${f.subject}) → ${href}: ${tag ?? 'no such id'}`);
+      }
+      expect(wrong).toEqual([]);
+    },
+  );
 
   it.each(DEMOS)('%s: no id is used twice on a project page', async (id) => {
     const { get } = await demoApp();
-    for (const sub of ['', '/supply', '/rf', '/bom', '/parts', '/sweep', '/stages/' + (id === 'demo-club-30m' ? 'st-pa' : 'st-lpf')]) {
+    for (const sub of [
+      '',
+      '/supply',
+      '/rf',
+      '/bom',
+      '/parts',
+      '/sweep',
+      '/stages/' + (id === 'demo-club-30m' ? 'st-pa' : 'st-lpf'),
+    ]) {
       const html = await (await get(`/projects/${id}${sub}`)).text();
       const ids = [...html.matchAll(/\sid="([^"]+)"/g)].map((m) => m[1]);
       const twice = ids.filter((x, i) => ids.indexOf(x) !== i);

@@ -44,7 +44,8 @@ describe('merging edits from forms loaded at an older version', () => {
     expect(p.version).toBe(Number(settings.version) + 3);
   });
 
-  it('the same field changed by both is refused with both values; the re-shown form keeps the other change', async () => {
+  it('the same field changed by both is refused with both values; the re-shown form keeps the other ' +
+    'change', async () => {
     const { get, post, database } = await demoApp();
     const action = `/projects/${ID}/settings`;
     const a = await open(get, `/projects/${ID}`, action);
@@ -53,7 +54,10 @@ describe('merging edits from forms loaded at an older version', () => {
     const res = await post(action, { ...b, name: 'Thirty metre club rig' }, HX);
     expect(res.status).toBe(409);
     const html = await res.text();
-    expect(html).toContain('Changed by someone else to “Club 30 m build” since you opened this page; you typed “Thirty metre club rig”');
+    expect(html).toContain(
+      'Changed by someone else to “Club 30 m build” since you opened this page; you typed “Thirty metre club ' +
+        'rig”',
+    );
     const shown = formByAction(html, action).fields;
     expect(shown.name).toBe('Thirty metre club rig'); // the typed text is kept
     expect(shown.kits).toBe('10'); // the other person's change is shown, so saving again does not undo it
@@ -87,7 +91,9 @@ describe('merging edits from forms loaded at an older version', () => {
     let p = (await loadProject(database.db, ID))!;
     for (const line of p.bom.filter((l) => l.partId === 'p-pcb')) {
       p = (await loadProject(database.db, ID))!;
-      expect((await post(`/projects/${ID}/bom/lines/${line.id}/delete`, { version: String(p.version) })).status).toBe(303);
+      expect((await post(`/projects/${ID}/bom/lines/${line.id}/delete`, { version: String(p.version) })).status).toBe(
+        303,
+      );
     }
     p = (await loadProject(database.db, ID))!;
     expect((await post(`/projects/${ID}/parts/p-pcb/delete`, { version: String(p.version) })).status).toBe(303);

@@ -14,7 +14,13 @@ describe('new project from a template', () => {
 
   it('creates stages, supply and a parts list from the mains two-rail template', async () => {
     const { post, database } = await demoApp();
-    const res = await post('/projects', { name: '40 m two-rail', band: '7.03', power: '20', mains: '230-50', template: 'mains-two-rail' });
+    const res = await post('/projects', {
+      name: '40 m two-rail',
+      band: '7.03',
+      power: '20',
+      mains: '230-50',
+      template: 'mains-two-rail',
+    });
     expect(res.status).toBe(303);
     const id = res.headers.get('location')!.split('/').pop()!;
     const p = (await loadProject(database.db, id))!;
@@ -31,7 +37,13 @@ describe('new project from a template', () => {
   it('refuses a battery supply for a mains template by naming the Supply field, and saves nothing', async () => {
     const { post, database } = await demoApp();
     const before = (await listProjects(database.db)).length;
-    const res = await post('/projects', { name: 'Nope', band: '7.03', power: '5', mains: 'battery', template: 'single-rail' });
+    const res = await post('/projects', {
+      name: 'Nope',
+      band: '7.03',
+      power: '5',
+      mains: 'battery',
+      template: 'single-rail',
+    });
     expect(res.status).toBe(422);
     const html = await res.text();
     expect(html).toContain('Supply: the &quot;Single-rail low-power rig&quot; template runs from the mains');
@@ -42,7 +54,13 @@ describe('new project from a template', () => {
 
   it('the battery template with a battery supply creates a battery station', async () => {
     const { post, database } = await demoApp();
-    const res = await post('/projects', { name: 'Hilltop', band: '14.06', power: '5', mains: 'battery', template: 'battery-portable' });
+    const res = await post('/projects', {
+      name: 'Hilltop',
+      band: '14.06',
+      power: '5',
+      mains: 'battery',
+      template: 'battery-portable',
+    });
     expect(res.status).toBe(303);
     const p = (await loadProject(database.db, res.headers.get('location')!.split('/').pop()!))!;
     expect(p.mains).toBeNull();
@@ -63,7 +81,8 @@ describe('new project from a template', () => {
     for (const path of ['', '/supply', '/parts', '/bom']) expect(await demo(path)).not.toContain('class="empty-state"');
   });
 
-  it("an empty project's first screen says what to do next beside the verdict, and its cost is not a plain 0.00", async () => {
+  it("an empty project's first screen says what to do next beside the verdict, and its cost is not a plain " +
+    "0.00", async () => {
     const { post, get } = await demoApp();
     const res = await post('/projects', { name: 'Blank', band: '7.03', power: '5', mains: '230-50', template: '' });
     const id = res.headers.get('location')!.split('/').pop()!;
@@ -89,6 +108,8 @@ describe('new project from a template', () => {
   it("the Supply box says which supply the battery template needs, before it is refused", async () => {
     const { get } = await demoApp();
     const html = (await (await get('/')).text()).replace(/\s+/g, ' ');
-    expect(html).toContain('the battery portable template needs Battery / external DC; the other templates a mains voltage');
+    expect(html).toContain(
+      'the battery portable template needs Battery / external DC; the other templates a mains voltage',
+    );
   });
 });

@@ -20,9 +20,13 @@ describe('order sheets on the parts-list page', () => {
     expect(sheets.sort()).toEqual(['Copperleaf Elektronik', 'Harbor Radio Surplus', 'Northfield Components']);
     const start = html.indexOf('data-supplier="Copperleaf Elektronik"');
     const sheet = text(html.slice(start, html.indexOf('</table>', start)));
-    expect(sheet).toContain('CL-40968 Electrolytic capacitor 6800 µF 50 V, 105 °C, ripple 3.6 A (C2) 10 9 10 EUR 2.62 EUR 26.20 USD 28.30');
+    expect(sheet).toContain(
+      'CL-40968 Electrolytic capacitor 6800 µF 50 V, 105 °C, ripple 3.6 A (C2) 10 9 10 EUR 2.62 EUR 26.20 USD 28.30',
+    );
     expect(sheet).toContain('CL-11602 Double-balanced mixer IC, 8-pin DIP (U2) 9 9 1 EUR 1.99 EUR 17.91 USD 19.34');
-    expect(sheet).toContain('CL-PCB-RVRS-B Printed circuit board, club design rev B (PCB1) 10 9 10 EUR 8.90 EUR 89.00 USD 96.12');
+    expect(sheet).toContain(
+      'CL-PCB-RVRS-B Printed circuit board, club design rev B (PCB1) 10 9 10 EUR 8.90 EUR 89.00 USD 96.12',
+    );
     expect(sheet).toContain('Parts USD 143.76 Shipping USD 12.96 Order total Copperleaf Elektronik USD 156.72');
     expect(html).toContain(`href="/projects/${ID}/orders.csv"`);
   });

@@ -11,7 +11,8 @@ describe('pack parts on the web', () => {
     const { get } = await demoApp();
     const html = await (await get(`${P}/pack`)).text();
     for (const part of ['builder', 'organiser', 'both'])
-      for (const paper of ['a4', 'letter']) expect(html).toContain(`href="${P}/pack.pdf?part=${part}&amp;paper=${paper}"`);
+      for (const paper of ['a4', 'letter'])
+        expect(html).toContain(`href="${P}/pack.pdf?part=${part}&amp;paper=${paper}"`);
     expect(html).toContain('8 packing sheets (one per kit)');
   });
 

@@ -51,7 +51,9 @@ describe('project list', () => {
     const { get, post, database } = await demoApp();
     const shownVersion = /name="version" value="(\d+)"/.exec(await (await get(`/projects/${ID}/delete`)).text())![1];
     // another window renames the project after the confirmation page was shown
-    expect((await post(`/projects/${ID}/rename`, { version: shownVersion, name: 'Renamed elsewhere' })).status).toBe(303);
+    expect((await post(`/projects/${ID}/rename`, { version: shownVersion, name: 'Renamed elsewhere' })).status).toBe(
+      303,
+    );
     const stale = await post(`/projects/${ID}/delete`, { version: shownVersion });
     expect(stale.status).toBe(409);
     const html = await stale.text();
@@ -87,7 +89,11 @@ describe('project list', () => {
 
   it.each([
     ['not JSON', '{"format": ', /not valid JSON/],
-    ['another format', JSON.stringify({ format: 'something-else', formatVersion: 1, project: {} }), /format: is not &quot;rigwright-project&quot;/],
+    [
+      'another format',
+      JSON.stringify({ format: 'something-else', formatVersion: 1, project: {} }),
+      /format: is not &quot;rigwright-project&quot;/,
+    ],
   ])('a bad import (%s) is refused with a message and nothing is saved', async (_label, text, message) => {
     const { app, database } = await demoApp();
     const res = await upload(app, text);

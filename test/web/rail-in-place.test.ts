@@ -39,7 +39,12 @@ describe('a new rail from the stage form', () => {
     const { get, post, database } = await demoApp();
     const fields = formByAction(await (await get(action)).text(), action).fields;
     const before = await loadProject(database.db, ID);
-    const res = await post(action, { ...fields, [loadFormName(1, 'railId')]: NEW_RAIL, [NEW_RAIL_FORM.name]: ' ', [NEW_RAIL_FORM.source]: 'battery' });
+    const res = await post(action, {
+      ...fields,
+      [loadFormName(1, 'railId')]: NEW_RAIL,
+      [NEW_RAIL_FORM.name]: ' ',
+      [NEW_RAIL_FORM.source]: 'battery',
+    });
     expect(res.status).toBe(422);
     expect(await res.text()).toContain('New rail: Rail name must not be empty');
     expect(await loadProject(database.db, ID)).toEqual(before);

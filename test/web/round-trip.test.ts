@@ -13,7 +13,14 @@ describe('edit round trip', () => {
     const { get, post, database } = await demoApp();
     const action = `/projects/${ID}/settings`;
     const first = formByAction(await (await get(`/projects/${ID}`)).text(), action);
-    const typed = { ...first.fields, frequency: '10.106125 MHz', power: '12.34567 W', duty: '12.34567', mainsLow: '7.654321', notes: '  indented first line\n    and a second' };
+    const typed = {
+      ...first.fields,
+      frequency: '10.106125 MHz',
+      power: '12.34567 W',
+      duty: '12.34567',
+      mainsLow: '7.654321',
+      notes: '  indented first line\n    and a second',
+    };
     expect((await post(action, typed)).status).toBe(303);
     const saved = (await loadProject(database.db, ID))!;
     // the values as typed (exact decimal parse of the text above)

@@ -15,7 +15,10 @@ describe('project settings form', () => {
     it(`${id}: the form as shown saves back without changing the project`, async () => {
       const { get, post, database } = await demoApp();
       const before = (await loadProject(database.db, id))!;
-      for (const [page, action] of [[`/projects/${id}`, `/projects/${id}/settings`], [`/projects/${id}/rf`, `/projects/${id}/rf/settings`]]) {
+      for (const [page, action] of [
+        [`/projects/${id}`, `/projects/${id}/settings`],
+        [`/projects/${id}/rf`, `/projects/${id}/rf/settings`],
+      ]) {
         const form = formByAction(await (await get(page)).text(), action);
         const res = await post(action, form.fields);
         expect(res.status, action).toBe(303);
@@ -60,7 +63,9 @@ describe('project settings form', () => {
     const before = await loadProject(database.db, id);
     const res = await post(action, { ...empty, version: String(before!.version), supplyKind: 'mains' });
     expect(res.status).toBe(422);
-    expect(await res.text()).toContain('Mains nominal voltage is empty: enter a value (or choose a battery / DC supply)');
+    expect(await res.text()).toContain(
+      'Mains nominal voltage is empty: enter a value (or choose a battery / DC supply)',
+    );
     expect(await loadProject(database.db, id)).toEqual(before);
   });
 });

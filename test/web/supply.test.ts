@@ -15,7 +15,8 @@ beforeEach(async () => {
 
 const stored = async (): Promise<Project> => (await loadProject(t.database.db, ID))!;
 
-const post = (path: string, fields: Record<string, string>, htmx = false) => t.post(path, fields, htmx ? { 'HX-Request': 'true' } : {});
+const post = (path: string, fields: Record<string, string>, htmx = false) =>
+  t.post(path, fields, htmx ? { 'HX-Request': 'true' } : {});
 
 const base = `/projects/${ID}/supply`;
 
@@ -25,7 +26,14 @@ describe('supply page', () => {
     expect(res.status).toBe(200);
     const html = await res.text();
     expect(html.startsWith('<!DOCTYPE html>')).toBe(true);
-    for (const name of ['T1 mains transformer', '16 V winding', '20 V winding', '13.8 V signal rail', 'PA rail (unregulated, ~24 V)']) expect(html).toContain(name);
+    for (const name of [
+      'T1 mains transformer',
+      '16 V winding',
+      '20 V winding',
+      '13.8 V signal rail',
+      'PA rail (unregulated, ~24 V)',
+    ])
+      expect(html).toContain(name);
     expect(html).toContain('id="supply"');
     // the page leads with every rail's deciding corners, then the editors, then the full computed results
     const glance = html.indexOf('id="supply-glance"');
@@ -35,16 +43,27 @@ describe('supply page', () => {
     // the computed results below the editors are the ones evaluate() gives for the stored project
     const supply = evaluate(await stored()).supply!;
     expect(html).toContain('class="supply-results"');
-    expect(html).toContain(`Mains ${formatValue(supply.mains!.lowV, 'V')} / ${formatValue(supply.mains!.nominalV, 'V')} / ${formatValue(supply.mains!.highV, 'V')}`);
+    expect(html).toContain(
+      `Mains ${formatValue(supply.mains!.lowV, 'V')} / ${formatValue(supply.mains!.nominalV, 'V')} / ` +
+        `${formatValue(supply.mains!.highV, 'V')}`,
+    );
   });
 
   it('adds a transformer and a winding, parsing engineering values', async () => {
     const v = (await stored()).version;
-    let res = await post(`${base}/transformers`, { version: String(v), name: 'T2 auxiliary', construction: 'toroidal' });
+    let res = await post(`${base}/transformers`, {
+      version: String(v),
+      name: 'T2 auxiliary',
+      construction: 'toroidal',
+    });
     expect(res.status).toBe(303);
     const t2 = (await stored()).supply.transformers.find((t) => t.name === 'T2 auxiliary')!;
     expect(t2.construction).toBe('toroidal');
-    res = await post(`${base}/transformers/${t2.id}/windings`, { version: String(v + 1), name: '9 V', ratedV: '9 V', ratedA: '350 mA', regulation: '12', resistance: '2R2' }, true);
+    res = await post(
+      `${base}/transformers/${t2.id}/windings`,
+      { version: String(v + 1), name: '9 V', ratedV: '9 V', ratedA: '350 mA', regulation: '12', resistance: '2R2' },
+      true,
+    );
     expect(res.status).toBe(200);
     expect(await res.text()).toContain('Saved.');
     const w = (await stored()).supply.transformers.find((t) => t.id === t2.id)!.windings[0];
@@ -54,14 +73,40 @@ describe('supply page', () => {
 
   it('edits a rectified rail (4u7 style values, empty optional = null)', async () => {
     const p = await stored();
-    const res = await post(`${base}/rails/rail-pa`, {
-      version: String(p.version), name: 'PA rail', windingId: 'w-20', topology: 'centre-tap', diodeDrop: '0.7', diodeR: '20m', reservoir: '10000u',
-      esr: '25 mΩ', bleeder: '', capV: '63 V', capRipple: '4 A', rippleTarget: '', margin: '0', fuse: '3.15 A', windingFuseSheet: 'T3',
-    }, true);
+    const res = await post(
+      `${base}/rails/rail-pa`,
+      {
+        version: String(p.version),
+        name: 'PA rail',
+        windingId: 'w-20',
+        topology: 'centre-tap',
+        diodeDrop: '0.7',
+        diodeR: '20m',
+        reservoir: '10000u',
+        esr: '25 mΩ',
+        bleeder: '',
+        capV: '63 V',
+        capRipple: '4 A',
+        rippleTarget: '',
+        margin: '0',
+        fuse: '3.15 A',
+        windingFuseSheet: 'T3',
+      },
+      true,
+    );
     expect(res.status).toBe(200);
-    expect(await res.text()).toMatch(/<details class="card supply-item rail" id="rail-rail-pa" open/); // the edited rail stays open after the swap
+    // the edited rail stays open after the swap
+    expect(await res.text()).toMatch(/<details class="card supply-item rail" id="rail-rail-pa" open/);
     const r = (await stored()).supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
-    expect(r).toMatchObject({ name: 'PA rail', topology: 'centre-tap', diodeDropV: 0.7, bleederOhm: null, capacitorRatedV: 63, ripplePpTargetV: null, fuseA: 3.15 });
+    expect(r).toMatchObject({
+      name: 'PA rail',
+      topology: 'centre-tap',
+      diodeDropV: 0.7,
+      bleederOhm: null,
+      capacitorRatedV: 63,
+      ripplePpTargetV: null,
+      fuseA: 3.15,
+    });
     expect(r.reservoirF).toBeCloseTo(0.01, 12);
     expect(r.diodeResistanceOhm).toBeCloseTo(0.02, 12);
   });
@@ -71,7 +116,23 @@ describe('supply page', () => {
     const rail = p.supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
     const page = await (await t.app.request(`http://localhost${base}`)).text();
     expect(page).toContain('Lowest voltage its loads need');
-    const values = { version: String(p.version), name: rail.name, windingId: rail.windingId, topology: rail.topology, diodeDrop: '0.9', diodeR: '30m', reservoir: '6800', esr: '30m', bleeder: '2k2', capV: '50', capRipple: '3.6', rippleTarget: '2.5', margin: '0', fuse: '2.5', windingFuseSheet: 'T3' };
+    const values = {
+      version: String(p.version),
+      name: rail.name,
+      windingId: rail.windingId,
+      topology: rail.topology,
+      diodeDrop: '0.9',
+      diodeR: '30m',
+      reservoir: '6800',
+      esr: '30m',
+      bleeder: '2k2',
+      capV: '50',
+      capRipple: '3.6',
+      rippleTarget: '2.5',
+      margin: '0',
+      fuse: '2.5',
+      windingFuseSheet: 'T3',
+    };
     let res = await post(`${base}/rails/rail-pa`, { ...values, minimumV: '21.5' }, true);
     expect(res.status).toBe(200);
     let r = (await stored()).supply.rails.find((x) => x.id === 'rail-pa') as RectifiedRail;
@@ -85,10 +146,27 @@ describe('supply page', () => {
 
   it('refuses a negative lowest voltage and a 0 µF reservoir by name, keeps the text and saves nothing', async () => {
     const before = await stored();
-    const res = await post(`${base}/rails/rail-pa`, {
-      version: String(before.version), name: 'PA rail', windingId: 'w-20', topology: 'bridge', diodeDrop: '0.9', diodeR: '30m', reservoir: '0',
-      esr: '30m', bleeder: '', capV: '', capRipple: '', rippleTarget: '', margin: '0', fuse: '', minimumV: '-3',
-    }, true);
+    const res = await post(
+      `${base}/rails/rail-pa`,
+      {
+        version: String(before.version),
+        name: 'PA rail',
+        windingId: 'w-20',
+        topology: 'bridge',
+        diodeDrop: '0.9',
+        diodeR: '30m',
+        reservoir: '0',
+        esr: '30m',
+        bleeder: '',
+        capV: '',
+        capRipple: '',
+        rippleTarget: '',
+        margin: '0',
+        fuse: '',
+        minimumV: '-3',
+      },
+      true,
+    );
     expect(res.status).toBe(422);
     const html = await res.text();
     expect(html).toContain('Lowest voltage its loads need must be more than');
@@ -102,14 +180,40 @@ describe('supply page', () => {
     const res = await post(`${base}/rails`, { version: String(v), name: 'Backup battery', source: 'battery' });
     expect(res.status).toBe(303);
     const added = (await stored()).supply.rails.at(-1)!;
-    expect(added).toMatchObject({ kind: 'battery', name: 'Backup battery', chemistry: 'LiFePO4', fullV: 14.4, endV: 10, minimumV: null });
+    expect(added).toMatchObject({
+      kind: 'battery',
+      name: 'Backup battery',
+      chemistry: 'LiFePO4',
+      fullV: 14.4,
+      endV: 10,
+      minimumV: null,
+    });
   });
 
   it('edits a regulated rail to a fixed regulator raised by diodes, with heatsink θsa left to compute', async () => {
     const p = await stored();
     const res = await post(`${base}/rails/rail-13v8`, {
-      version: String(p.version), name: '13.8 V signal rail', parentId: 'rail-raw', regulator: 'linear', method: 'raised-diodes', nominalV: '12', diodes: '2', raiseDrop: '0.65',
-      vref: '', iadj: '', r1: '', r2: '', dropout: '2', quiescent: '5 mA', efficiency: '', maxOut: '1.5', maxIn: '35', thetaJc: '5', thetaCs: '1', thetaSa: '', tjMax: '125',
+      version: String(p.version),
+      name: '13.8 V signal rail',
+      parentId: 'rail-raw',
+      regulator: 'linear',
+      method: 'raised-diodes',
+      nominalV: '12',
+      diodes: '2',
+      raiseDrop: '0.65',
+      vref: '',
+      iadj: '',
+      r1: '',
+      r2: '',
+      dropout: '2',
+      quiescent: '5 mA',
+      efficiency: '',
+      maxOut: '1.5',
+      maxIn: '35',
+      thetaJc: '5',
+      thetaCs: '1',
+      thetaSa: '',
+      tjMax: '125',
     });
     expect(res.status).toBe(303);
     const r = (await stored()).supply.rails.find((x) => x.id === 'rail-13v8') as RegulatedRail;
@@ -121,15 +225,39 @@ describe('supply page', () => {
     const before = await stored();
     const res = await post(`${base}/rails/rail-raw`, { version: String(before.version), name: 'x' }, true);
     expect(res.status).toBe(422); // rail-raw is rectified: the rectified fields are required
-    const loop = await post(`${base}/rails/rail-13v8`, {
-      version: String(before.version), name: '13.8 V', parentId: 'rail-13v8', regulator: 'linear', method: 'adjustable', vref: '1.25', r1: '240', r2: '', dropout: '2', quiescent: '5m',
-    }, true);
+    const loop = await post(
+      `${base}/rails/rail-13v8`,
+      {
+        version: String(before.version),
+        name: '13.8 V',
+        parentId: 'rail-13v8',
+        regulator: 'linear',
+        method: 'adjustable',
+        vref: '1.25',
+        r1: '240',
+        r2: '',
+        dropout: '2',
+        quiescent: '5m',
+      },
+      true,
+    );
     expect(loop.status).toBe(422);
     const html = await loop.text();
     expect(html).toContain('R2: needed for this output setting');
-    const selfFed = await post(`${base}/rails/rail-13v8`, {
-      version: String(before.version), name: '13.8 V', parentId: 'rail-13v8', regulator: 'linear', method: 'fixed', nominalV: '12', dropout: '2', quiescent: '5m',
-    }, true);
+    const selfFed = await post(
+      `${base}/rails/rail-13v8`,
+      {
+        version: String(before.version),
+        name: '13.8 V',
+        parentId: 'rail-13v8',
+        regulator: 'linear',
+        method: 'fixed',
+        nominalV: '12',
+        dropout: '2',
+        quiescent: '5m',
+      },
+      true,
+    );
     expect(selfFed.status).toBe(422);
     expect(await selfFed.text()).toContain('fed from this one (a loop)');
     expect(await stored()).toEqual(before);
@@ -137,7 +265,18 @@ describe('supply page', () => {
 
   it('keeps the typed text beside the field and saves nothing when a value is not understood', async () => {
     const before = await stored();
-    const res = await post(`${base}/windings/w-16`, { version: String(before.version), name: '16 V winding', ratedV: '16 volts-ish', ratedA: '1 A', regulation: '10', resistance: '' }, true);
+    const res = await post(
+      `${base}/windings/w-16`,
+      {
+        version: String(before.version),
+        name: '16 V winding',
+        ratedV: '16 volts-ish',
+        ratedA: '1 A',
+        regulation: '10',
+        resistance: '',
+      },
+      true,
+    );
     expect(res.status).toBe(422);
     const html = await res.text();
     expect(html).toContain('value="16 volts-ish"');
@@ -157,13 +296,22 @@ describe('supply page', () => {
     for (const role of ['Headroom', 'Heating', 'Tune-up']) expect(card.slice(deciding, details)).toContain(role);
   });
 
-  it('saves the enclosure (a bare surface is read in cm²) and refuses a negative one, naming it, saving nothing', async () => {
+  it('saves the enclosure (a bare surface is read in cm²) and refuses a negative one, naming it, saving ' +
+    'nothing', async () => {
     const before = await stored();
-    const bad = await post(`${base}/enclosure`, { version: String(before.version), enclosureArea: '-5', enclosureU: '5.5' }, true);
+    const bad = await post(
+      `${base}/enclosure`,
+      { version: String(before.version), enclosureArea: '-5', enclosureU: '5.5' },
+      true,
+    );
     expect(bad.status).toBe(422);
     expect(await bad.text()).toContain('Enclosure surface');
     expect(await stored()).toEqual(before);
-    const res = await post(`${base}/enclosure`, { version: String(before.version), enclosureArea: '1160', enclosureU: '6.5' }, true);
+    const res = await post(
+      `${base}/enclosure`,
+      { version: String(before.version), enclosureArea: '1160', enclosureU: '6.5' },
+      true,
+    );
     expect(res.status).toBe(200);
     const s = (await stored()).supply;
     expect(s.enclosureAreaM2).toBeCloseTo(0.116, 12); // 1160 cm² = 0.116 m²

@@ -13,10 +13,23 @@ import { hasPoppler, pagesText, POPPLER_MISSING, writeTemp } from '../pdf/pdf-te
 // Internal references: the developers' reference notes and their section numbers, confidence tags, and labels that
 // stood where a source should. (Program rule: users see only registry text.)
 const INTERNAL = [
-  /REFERENCE-VALUES/i, /reference values/i, /\bref\.? ?§/i, /§/, /\[(M|C|C2|D|P)\]/, /\binput check\b/i, /\bProject data\b/,
-  /\bProgram check\b/, /\bCircuit topology\b/, /\bSupply tree\b/, /script check/i, /Input definition of this field/,
+  /REFERENCE-VALUES/i,
+  /reference values/i,
+  /\bref\.? ?§/i,
+  /§/,
+  /\[(M|C|C2|D|P)\]/,
+  /\binput check\b/i,
+  /\bProject data\b/,
+  /\bProgram check\b/,
+  /\bCircuit topology\b/,
+  /\bSupply tree\b/,
+  /script check/i,
+  /Input definition of this field/,
 ];
-const leaks = (text: string) => INTERNAL.filter((re) => re.test(text)).map((re) => `${re}: …${text.slice(Math.max(0, text.search(re) - 60), text.search(re) + 60)}…`);
+const leaks = (text: string) =>
+  INTERNAL.filter((re) => re.test(text)).map(
+    (re) => `${re}: …${text.slice(Math.max(0, text.search(re) - 60), text.search(re) + 60)}…`,
+  );
 
 if (!hasPoppler) console.warn(`[skip] ${POPPLER_MISSING}`);
 
@@ -71,7 +84,8 @@ describe('verdict: only actionable findings count', () => {
     expect(standingRules.size).toBeGreaterThan(3);
     for (const rule of standingRules) expect(needs.includes(`data-rule="${rule}"`), rule).toBe(false);
     // and every actionable caution or failure is there
-    for (const f of report.findings.filter((x) => x.kind !== 'standing' && x.severity !== 'ok')) expect(needs.includes(`data-rule="${f.rule}"`), f.rule).toBe(true);
+    for (const f of report.findings.filter((x) => x.kind !== 'standing' && x.severity !== 'ok'))
+      expect(needs.includes(`data-rule="${f.rule}"`), f.rule).toBe(true);
     const standingBlock = html.slice(html.indexOf('standing-cautions'));
     for (const rule of ['spurious.measure', 'exposure.local-rules', 'pa.heat-safety']) {
       expect(standingBlock.split(`data-rule="${rule}"`).length - 1, rule).toBe(1);
@@ -83,7 +97,15 @@ describe('verdict: only actionable findings count', () => {
     const p = structuredClone(DEMO_PROJECTS[1]);
     const r = evaluate(p);
     const keep = (fs: typeof r.findings) => fs.filter((f) => f.severity === 'ok' || f.kind === 'standing');
-    const clean = { ...r, findings: keep(r.findings), budget: { ...r.budget, findings: keep(r.budget.findings) }, supply: r.supply && { ...r.supply, findings: keep(r.supply.findings) }, rf: { ...r.rf, findings: keep(r.rf.findings) }, cost: { ...r.cost, findings: keep(r.cost.findings) }, catalog: keep(r.catalog) };
+    const clean = {
+      ...r,
+      findings: keep(r.findings),
+      budget: { ...r.budget, findings: keep(r.budget.findings) },
+      supply: r.supply && { ...r.supply, findings: keep(r.supply.findings) },
+      rf: { ...r.rf, findings: keep(r.rf.findings) },
+      cost: { ...r.cost, findings: keep(r.cost.findings) },
+      catalog: keep(r.catalog),
+    };
     expect(clean.findings.some((f) => f.kind === 'standing' && f.severity === 'caution')).toBe(true);
     const html = String(OverviewBody({ project: p, report: clean }));
     expect(html).toMatch(/data-verdict="ok"/);
@@ -110,7 +132,8 @@ describe('Sources page', () => {
 });
 
 describe('a new 230 V project shows its rule set, its limits and its sources', () => {
-  it('created through the form with the 230 V / 50 Hz preset: ITU / CEPT on the RF page, the Sources page and the pack', async () => {
+  it('created through the form with the 230 V / 50 Hz preset: ITU / CEPT on the RF page, the Sources page and the ' +
+    'pack', async () => {
     const { post, get } = await demoApp();
     const res = await post('/projects', { name: '40 m 230 V', band: '7.03 MHz', power: '10 W', mains: '230-50' });
     expect(res.status).toBe(303);

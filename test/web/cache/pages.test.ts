@@ -38,10 +38,12 @@ afterAll(() => {
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 
-const get = (app: typeof a, path: string, headers: Record<string, string> = {}) => app.request(`${ORIGIN}${path}`, { headers });
+const get = (app: typeof a, path: string, headers: Record<string, string> = {}) =>
+  app.request(`${ORIGIN}${path}`, { headers });
 
 describe('ETag and 304', () => {
-  it('a page carries an ETag; sending it back gives 304 with no body; another query or htmx gives another ETag', async () => {
+  it('a page carries an ETag; sending it back gives 304 with no body; another query or htmx gives another ' +
+    'ETag', async () => {
     const first = await get(a, P);
     expect(first.status).toBe(200);
     const etag = first.headers.get('ETag')!;
