@@ -345,7 +345,7 @@ export const SOURCES = {
       `for the ring where the limit cuts the current (${PRACTICE}; ngspice shows 10.5 % above 2 Vdd); class D at its ` +
       `square-wave voltage; conduction loss ∝ current² (${PRACTICE}); push-pull class D adds the leakage ring ` +
       `(pa.leakage-ring); with the low-pass filter known the circle is drawn at the antenna and each load ` +
-      `taken through the filter as built to the PA (pa.filter-input-swr)`,
+      `taken through the filter as built to the PA, Z_in = (A Z_L + B)/(C Z_L + D) (two-port chain relations)`,
   },
   'pa.filter-input-swr': {
     status: 'practice',
