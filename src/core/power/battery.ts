@@ -24,7 +24,12 @@ export interface BatteryRuntime {
  */
 export const NEGLIGIBLE_CURRENT_A = 1e-6;
 
-export function batteryRuntime(battery: BatteryRail, outputA: PerMode, keyingDuty: number, transmitFraction: number): BatteryRuntime {
+export function batteryRuntime(
+  battery: BatteryRail,
+  outputA: PerMode,
+  keyingDuty: number,
+  transmitFraction: number,
+): BatteryRuntime {
   const d = safeDuty(keyingDuty);
   const tx = Number.isFinite(transmitFraction) ? Math.min(1, Math.max(0, transmitFraction)) : 0.2;
   const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
@@ -45,25 +50,69 @@ export function loadedEndV(battery: BatteryRail, keyDownA: number): number {
 }
 
 /** `needNote` says where the minimum comes from ('the regulators', 'its loads (stated)'). */
-export function batteryFindings(battery: BatteryRail, requiredMinV: number, loadedEnd: number, runtime: BatteryRuntime, needNote = 'the regulators'): Finding[] {
+export function batteryFindings(
+  battery: BatteryRail,
+  requiredMinV: number,
+  loadedEnd: number,
+  runtime: BatteryRuntime,
+  needNote = 'the regulators',
+): Finding[] {
   const out: Finding[] = [];
   const subject = battery.name;
   if (!(battery.fullV >= battery.endV) || !(battery.endV > 0)) {
-    out.push({ severity: 'fail', rule: 'battery.window', subject, value: battery.endV, limit: battery.fullV, unit: 'V', source: 'supply.battery-data', message: `The end-of-discharge voltage must be above 0 V and not above the full-charge voltage.` });
+    out.push({
+      severity: 'fail',
+      rule: 'battery.window',
+      subject,
+      value: battery.endV,
+      limit: battery.fullV,
+      unit: 'V',
+      source: 'supply.battery-data',
+      message: `The end-of-discharge voltage must be above 0 V and not above the full-charge voltage.`,
+    });
   }
   if (!(battery.capacityAh > 0)) {
-    out.push({ severity: 'fail', rule: 'battery.capacity', subject, value: battery.capacityAh, limit: null, unit: 'Ah', source: 'supply.battery-data', message: `Enter the capacity to get a runtime.` });
+    out.push({
+      severity: 'fail',
+      rule: 'battery.capacity',
+      subject,
+      value: battery.capacityAh,
+      limit: null,
+      unit: 'Ah',
+      source: 'supply.battery-data',
+      message: `Enter the capacity to get a runtime.`,
+    });
   }
   if (requiredMinV > 0) {
-    const base = { rule: 'battery.end-voltage', subject, value: loadedEnd, limit: requiredMinV, unit: 'V', source: 'supply.battery-end' as const };
+    const base = {
+      rule: 'battery.end-voltage',
+      subject,
+      value: loadedEnd,
+      limit: requiredMinV,
+      unit: 'V',
+      source: 'supply.battery-end' as const,
+    };
     if (loadedEnd < requiredMinV) {
       const fullLoaded = battery.fullV - (loadedEnd < battery.endV ? battery.endV - loadedEnd : 0);
       const sev = fullLoaded < requiredMinV ? 'fail' : 'caution';
-      out.push({ ...base, severity: sev, message: sev === 'fail'
-        ? `${subject}: even fully charged the voltage under key-down load (${fullLoaded.toFixed(2)} V) is below the ${requiredMinV.toFixed(2)} V ${needNote} need.`
-        : `${subject}: near end of discharge the voltage under key-down load falls to ${loadedEnd.toFixed(2)} V, below the ${requiredMinV.toFixed(2)} V ${needNote} need; they stop working before the battery is flat, so less capacity is usable than the runtime shows.` });
+      out.push({
+        ...base,
+        severity: sev,
+        message:
+          sev === 'fail'
+            ? `${subject}: even fully charged the voltage under key-down load (${fullLoaded.toFixed(2)} V) is below ` +
+              `the ${requiredMinV.toFixed(2)} V ${needNote} need.`
+            : `${subject}: near end of discharge the voltage under key-down load falls to ${loadedEnd.toFixed(2)}` +
+              ` V, below the ${requiredMinV.toFixed(2)} V ${needNote} need; they stop working before the battery is ` +
+              `flat, so less capacity is usable than the runtime shows.`,
+      });
     } else {
-      out.push({ ...base, severity: 'ok', message: `At end of discharge under key-down load (${loadedEnd.toFixed(2)} V) ${needNote} still get the ${requiredMinV.toFixed(2)} V they need.` });
+      out.push({
+        ...base,
+        severity: 'ok',
+        message: `At end of discharge under key-down load (${loadedEnd.toFixed(2)} V) ${needNote} still get the ` +
+          `${requiredMinV.toFixed(2)} V they need.`,
+      });
     }
   }
   if (runtime.runtimeS === 0 && battery.capacityAh > 0 && !(runtime.averageA >= NEGLIGIBLE_CURRENT_A)) {
@@ -75,7 +124,17 @@ export function batteryFindings(battery: BatteryRail, requiredMinV: number, load
     });
   }
   if (runtime.runtimeS > 0) {
-    out.push({ severity: 'ok', rule: 'battery.runtime', subject, value: runtime.runtimeS, limit: null, unit: 's', source: 'supply.battery-runtime', message: `About ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ${(runtime.averageA * 1000).toFixed(0)} mA average.` });
+    out.push({
+      severity: 'ok',
+      rule: 'battery.runtime',
+      subject,
+      value: runtime.runtimeS,
+      limit: null,
+      unit: 's',
+      source: 'supply.battery-runtime',
+      message: `About ${(runtime.runtimeS / 3600).toFixed(1)} h of operation at ` +
+        `${(runtime.averageA * 1000).toFixed(0)} mA average.`,
+    });
   }
   return out;
 }

@@ -22,9 +22,16 @@ export const REF_42_INPUT: RectifierSimInput = {
  */
 export function supplyBenchCases(project?: Project, railOutputA?: Record<string, PerMode>): BenchCase[] {
   const cases: BenchCase[] = [
-    { name: 'rectifier simulation, 18 V / 3 A / 10,000 µF bridge (one corner)', run: () => simulateRectifier(REF_42_INPUT).dcMeanV },
+    {
+      name: 'rectifier simulation, 18 V / 3 A / 10,000 µF bridge (one corner)',
+      run: () => simulateRectifier(REF_42_INPUT).dcMeanV,
+    },
     { name: 'SPICE netlist text, 18 V / 3 A / 10,000 µF bridge', run: () => rectifierNetlist(REF_42_INPUT).length },
   ];
-  if (project && railOutputA) cases.push({ name: `evaluateSupply: ${project.name}`, run: () => evaluateSupply(project, railOutputA).simulations });
+  if (project && railOutputA)
+    cases.push({
+      name: `evaluateSupply: ${project.name}`,
+      run: () => evaluateSupply(project, railOutputA).simulations,
+    });
   return cases;
 }

@@ -6,8 +6,8 @@ import { quotient, usablePositive } from '../numeric';
 import { formatValue } from '../units';
 
 /**
- * Residual-voltage threshold (V d.c.). Source: IEC 60204-1 residual voltage <= 60 V within 5 s (ref §10 [C2]); ES1 60 V
- * d.c. in IEC 62368-1 (ref §10 [M]).
+ * Residual-voltage threshold (V d.c.). Source: IEC 60204-1 residual voltage <= 60 V within 5 s (ref §10 [C2]); ES1 60
+ * V d.c. in IEC 62368-1 (ref §10 [M]).
  */
 export const SAFE_DC_V = 60;
 /** Time allowed to fall to the threshold (s). Source: IEC 60204-1, 5 s after disconnection (ref §10 [C2]). */

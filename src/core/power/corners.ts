@@ -12,10 +12,22 @@ export const DEFAULT_TRANSMIT_FRACTION = 0.2;
 export const CORNER_LOADS: readonly CornerLoad[] = ['receive', 'keyUp', 'keyDown', 'thermal', 'tuneUp'];
 export const MAINS_CORNERS: readonly MainsCorner[] = ['low', 'nominal', 'high'];
 
-export const LOAD_LABEL: Record<CornerLoad, string> = { ...MODE_LABELS, thermal: 'thermal (CW duty)', tuneUp: 'tune-up carrier' };
-export const MAINS_LABEL: Record<MainsCorner, string> = { low: 'Low mains', nominal: 'Nominal mains', high: 'High mains' };
+export const LOAD_LABEL: Record<CornerLoad, string> = {
+  ...MODE_LABELS,
+  thermal: 'thermal (CW duty)',
+  tuneUp: 'tune-up carrier',
+};
+export const MAINS_LABEL: Record<MainsCorner, string> = {
+  low: 'Low mains',
+  nominal: 'Nominal mains',
+  high: 'High mains',
+};
 /** Labels when the source is a battery or external DC supply: low = end of discharge, high = full charge. */
-export const BATTERY_LABEL: Record<MainsCorner, string> = { low: 'Battery at end voltage', nominal: 'Battery nominal', high: 'Battery full' };
+export const BATTERY_LABEL: Record<MainsCorner, string> = {
+  low: 'Battery at end voltage',
+  nominal: 'Battery nominal',
+  high: 'Battery full',
+};
 
 /** Keying duty clamped to 0..1 (a bad value falls back to the CW duty factor). */
 export function safeDuty(duty: number): number {
@@ -74,7 +86,12 @@ export function cornerSpecs(mains: Mains | null, keyingDuty: number, secondaryTo
   }
   if (mains && secondaryTolerance) {
     const low = out.find((s) => s.id === WORST_VOLTAGE_ID)!;
-    out.push({ ...low, id: TOLERANCE_ID, label: `${MAINS_LABEL.low}, secondary at its low tolerance, ${LOAD_LABEL.keyDown}`, secondaryTolerance: true });
+    out.push({
+      ...low,
+      id: TOLERANCE_ID,
+      label: `${MAINS_LABEL.low}, secondary at its low tolerance, ${LOAD_LABEL.keyDown}`,
+      secondaryTolerance: true,
+    });
   }
   return out;
 }

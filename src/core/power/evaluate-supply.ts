@@ -2,13 +2,29 @@
 // Pure: no I/O, no clock. The caller (the current budget) supplies the output current of every rail per mode.
 import type { Finding } from '../findings';
 import { sortFindings } from '../findings';
-import type { BatteryRail, Mains, PerMode, Project, RectifiedRail, RegulatedRail, Transformer, Winding } from '../model';
+import type {
+  BatteryRail,
+  Mains,
+  PerMode,
+  Project,
+  RectifiedRail,
+  RegulatedRail,
+  Transformer,
+  Winding,
+} from '../model';
 import { MODES, MODE_LABELS } from '../model';
 import type {
   BatteryRailReport, CornerSpec, PrimaryReport, RailReport, RectifiedRailReport, ReservoirReport, SupplyReport,
   TransformerReport, WindingRecommendation,
 } from './report-types';
-import { DEFAULT_TRANSMIT_FRACTION, WORST_VOLTAGE_ID, cornerCurrent, cornerSpecs, mainsFactor, safeDuty } from './corners';
+import {
+  DEFAULT_TRANSMIT_FRACTION,
+  WORST_VOLTAGE_ID,
+  cornerCurrent,
+  cornerSpecs,
+  mainsFactor,
+  safeDuty,
+} from './corners';
 import { evaluateRectifiedRail, railCorners, type RectifiedContext } from './rectified-rail';
 import { resultScope } from './rectifier-sim';
 import type { RailVoltage } from './regulated-rail';
@@ -64,7 +80,11 @@ const FALLBACK_MAINS: Mains = { nominalV: 230, frequencyHz: 50, lowFraction: 0.1
 
 /** What a rail must give at its lowest: its regulators' input needs (plus margin) or the minimum stated for its direct
  *  loads, whichever is higher; `has` is false when neither is known. */
-function requirement(marginV: number, children: RegulatedRail[], stated: number | null): { v: number; note: string; has: boolean } {
+function requirement(
+  marginV: number,
+  children: RegulatedRail[],
+  stated: number | null,
+): { v: number; note: string; has: boolean } {
   const margin = Number.isFinite(marginV) ? Math.max(0, marginV) : 0;
   // Source: three-terminal regulator datasheets, input >= output + dropout at the ripple low point (ref §6.1, §6.2)
   const regNeed = children.map((c) => ({ c, v: regulatorOutputV(c.setting, c.quiescentA) + Math.max(0, c.dropoutV) }));
@@ -76,10 +96,19 @@ function requirement(marginV: number, children: RegulatedRail[], stated: number 
     return { v, note: `${top.c.name}: output + dropout${margin > 0 ? ` + ${margin} V margin` : ''}`, has: true };
   }
   if (st !== null) return { v: st, note: 'the lowest voltage stated for its loads', has: true };
-  return { v: margin, note: `no regulator fed: only the rail's ${margin} V margin above 0 V is required; state a minimum for its direct loads`, has: false };
+  return {
+    v: margin,
+    note: `no regulator fed: only the rail's ${margin} V margin above 0 V is required; state a minimum for its ` +
+      `direct loads`,
+    has: false,
+  };
 }
 
-export function evaluateSupply(projectIn: Project, railOutputA: Record<string, PerMode>, options: SupplyOptions = {}): SupplyReport {
+export function evaluateSupply(
+  projectIn: Project,
+  railOutputA: Record<string, PerMode>,
+  options: SupplyOptions = {},
+): SupplyReport {
   return supplyInAir(designSupply(projectIn, railOutputA, options), options.insideC);
 }
 
@@ -121,7 +150,17 @@ function budgetLookup(railOutputA: Record<string, PerMode>, noBudget: Set<string
     const b = railOutputA[id];
     if (!b) {
       // said once per rail however often its budget is asked for
-      if (!noBudget.has(id) && noBudget.add(id)) findings.push({ severity: 'caution', rule: 'supply.budget', subject: id, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `No current budget for rail "${id}": it is treated as unloaded.` });
+      if (!noBudget.has(id) && noBudget.add(id))
+        findings.push({
+          severity: 'caution',
+          rule: 'supply.budget',
+          subject: id,
+          value: null,
+          limit: null,
+          unit: 'A',
+          source: 'design.consistency',
+          message: `No current budget for rail "${id}": it is treated as unloaded.`,
+        });
       return ZERO;
     }
     const clean = (x: number) => (Number.isFinite(x) && x > 0 ? x : 0);
@@ -139,7 +178,10 @@ export function designSupply(
   // inputs outside their field definitions: a fail finding each, and the item (with its dependants) is left out
   const inputs = supplyInputs(project.supply);
   const duty = safeDuty(project.keyingDuty);
-  const txFraction = options.transmitFraction !== undefined && Number.isFinite(options.transmitFraction) ? Math.min(1, Math.max(0, options.transmitFraction)) : DEFAULT_TRANSMIT_FRACTION;
+  const txFraction =
+    options.transmitFraction !== undefined && Number.isFinite(options.transmitFraction)
+      ? Math.min(1, Math.max(0, options.transmitFraction))
+      : DEFAULT_TRANSMIT_FRACTION;
   // Usable, not merely > 0: the primary current divides by the mains voltage (5e-324 V made it Infinity)
   const m0 = project.mains;
   const mainsOk = m0 !== null && usablePositive(m0.nominalV, 1) && usablePositive(m0.frequencyHz, 1);
@@ -149,21 +191,49 @@ export function designSupply(
   const rails = project.supply.rails;
   const globalFindings: Finding[] = [...inputs.findings];
   if (project.mains && !mainsOk) {
-    globalFindings.push({ severity: 'fail', rule: 'mains.values', subject: 'Mains', value: project.mains.nominalV, limit: null, unit: 'V', source: 'design.consistency', message: 'The mains voltage must be at least 1 V and its frequency at least 1 Hz.' });
+    globalFindings.push({
+      severity: 'fail',
+      rule: 'mains.values',
+      subject: 'Mains',
+      value: project.mains.nominalV,
+      limit: null,
+      unit: 'V',
+      source: 'design.consistency',
+      message: 'The mains voltage must be at least 1 V and its frequency at least 1 Hz.',
+    });
   }
   const windings = new Map<string, { w: Winding; t: Transformer }>();
   for (const t of project.supply.transformers) for (const w of t.windings) windings.set(w.id, { w, t });
-  const childrenOf = (id: string) => rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
+  const childrenOf = (id: string) =>
+    rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
   const undesigned = unknownLoadRails(rails, railOutputA, options.highMainsOutputA ?? {});
   for (const [id, why] of undesigned) {
     if (inputs.leftOut.has(id)) continue;
     const name = rails.find((r) => r.id === id)?.name ?? id;
-    globalFindings.push({ severity: 'fail', rule: 'supply.unknown-load', subject: name, value: null, limit: null, unit: 'A', source: 'design.consistency', message: `${name} is not designed: ${why}` });
+    globalFindings.push({
+      severity: 'fail',
+      rule: 'supply.unknown-load',
+      subject: name,
+      value: null,
+      limit: null,
+      unit: 'A',
+      source: 'design.consistency',
+      message: `${name} is not designed: ${why}`,
+    });
   }
   for (const [id, why] of inputs.leftOut) {
     const name = rails.find((r) => r.id === id)?.name ?? id;
     undesigned.set(id, why);
-    globalFindings.push({ severity: 'fail', rule: 'supply.refused-input', subject: name, value: null, limit: null, unit: '', source: 'design.input', message: `${name} is not designed: ${why}` });
+    globalFindings.push({
+      severity: 'fail',
+      rule: 'supply.refused-input',
+      subject: name,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.input',
+      message: `${name} is not designed: ${why}`,
+    });
   }
   const noBudget = new Set<string>();
   const budget = budgetLookup(railOutputA, noBudget, globalFindings);
@@ -174,7 +244,11 @@ export function designSupply(
     const base = budget(id);
     const clean = (x: number, floor: number) => (Number.isFinite(x) && x > floor ? x : floor);
     // never below the nominal budget: the high-mains corner is the heating one
-    return { receive: clean(b.receive, base.receive), keyUp: clean(b.keyUp, base.keyUp), keyDown: clean(b.keyDown, base.keyDown) };
+    return {
+      receive: clean(b.receive, base.receive),
+      keyUp: clean(b.keyUp, base.keyUp),
+      keyDown: clean(b.keyDown, base.keyDown),
+    };
   };
 
   const reports = new Map<string, RailReport>();
@@ -192,9 +266,19 @@ export function designSupply(
   const joints = new Map<string, TransformerJoint>();
   for (const t of mainsOk ? project.supply.transformers : []) {
     if (inputs.unsized.has(t.id)) continue;
-    const on = rails.filter((r): r is RectifiedRail => r.kind === 'rectified' && designable(r) && t.windings.some((w) => w.id === r.windingId));
-    const load = (rail: RectifiedRail) => (s: CornerSpec) => cornerCurrent(s.mains === 'high' ? highBudget(rail.id) ?? budget(rail.id) : budget(rail.id), s.load, duty);
-    const j = simulateTransformer(t, on.map((rail) => ({ rail, loadA: load(rail) })), specs, project.mains!, options.stepsPerCycle);
+    const on = rails.filter(
+      (r): r is RectifiedRail =>
+        r.kind === 'rectified' && designable(r) && t.windings.some((w) => w.id === r.windingId),
+    );
+    const load = (rail: RectifiedRail) => (s: CornerSpec) =>
+      cornerCurrent(s.mains === 'high' ? (highBudget(rail.id) ?? budget(rail.id)) : budget(rail.id), s.load, duty);
+    const j = simulateTransformer(
+      t,
+      on.map((rail) => ({ rail, loadA: load(rail) })),
+      specs,
+      project.mains!,
+      options.stepsPerCycle,
+    );
     if (!j) continue;
     joints.set(t.id, j);
     simulations += j.simulations;
@@ -205,9 +289,18 @@ export function designSupply(
     usedWindings.set(rail.windingId, [...(usedWindings.get(rail.windingId) ?? []), rail.name]);
     const req = requirement(rail.marginV, childrenOf(rail.id), rail.minimumV ?? null);
     const ctx: RectifiedContext = {
-      mains: mainsOk ? project.mains! : FALLBACK_MAINS, keyingDuty: duty, specs, requiredMinV: req.v, requirementNote: req.note, hasRequirement: req.has,
-      standardSecondaryV: options.standardSecondaryV, capacitorRatingsV: options.capacitorRatingsV, stepsPerCycle: options.stepsPerCycle,
-      highMainsOutputA: highBudget(rail.id), searches: options.searches, sizing: choices.transformerSizing,
+      mains: mainsOk ? project.mains! : FALLBACK_MAINS,
+      keyingDuty: duty,
+      specs,
+      requiredMinV: req.v,
+      requirementNote: req.note,
+      hasRequirement: req.has,
+      standardSecondaryV: options.standardSecondaryV,
+      capacitorRatingsV: options.capacitorRatingsV,
+      stepsPerCycle: options.stepsPerCycle,
+      highMainsOutputA: highBudget(rail.id),
+      searches: options.searches,
+      sizing: choices.transformerSizing,
       joint: wt ? joints.get(wt.t.id)?.voltages.get(rail.id) : undefined,
     };
     if (options.cornersOnly) {
@@ -220,11 +313,26 @@ export function designSupply(
       continue;
     }
     const ev = evaluateRectifiedRail(rail, mainsOk ? (wt?.w ?? null) : null, wt?.t ?? null, budget(rail.id), ctx);
-    if (!mainsOk) ev.report.findings.unshift({ severity: 'fail', rule: 'rail.mains', subject: rail.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.` });
+    if (!mainsOk)
+      ev.report.findings.unshift({
+        severity: 'fail',
+        rule: 'rail.mains',
+        subject: rail.name,
+        value: null,
+        limit: null,
+        unit: '',
+        source: 'design.consistency',
+        message: `${rail.name} is a mains-rectified rail but the project has no valid mains supply.`,
+      });
     simulations += ev.simulations;
     allConverged = allConverged && ev.allConverged;
     reports.set(rail.id, ev.report);
-    voltageAt.set(rail.id, Object.fromEntries(ev.report.corners.map((c) => [c.id, { troughV: c.troughV, meanV: c.dcMeanV, ripplePpV: c.ripplePpV }])));
+    voltageAt.set(
+      rail.id,
+      Object.fromEntries(
+        ev.report.corners.map((c) => [c.id, { troughV: c.troughV, meanV: c.dcMeanV, ripplePpV: c.ripplePpV }]),
+      ),
+    );
     maxV.set(rail.id, Math.max(0, ...ev.report.corners.map((c) => c.noLoadPeakV)));
     falls.set(rail.id, reservoirFall(maxV.get(rail.id)!, rail.reservoirF, rail.bleederOhm));
     rootBattery.set(rail.id, false);
@@ -252,12 +360,49 @@ export function designSupply(
     rootBattery.set(b.id, true);
     falls.set(b.id, null);
     const report: BatteryRailReport = {
-      kind: 'battery', railId: b.id, railName: b.name, fullV: b.fullV, endV: b.endV, loadedEndV: loadedEnd, requiredMinV: req.v,
-      receiveFraction: 1 - txFraction, averageA: runtime.averageA, runtimeS: runtime.runtimeS, outputA: out, fuse, curve, pa: null,
-      findings: sortFindings([...batteryFindings(b, req.has ? req.v : 0, loadedEnd, runtime, b.minimumV !== null && req.v === b.minimumV ? 'its loads' : 'the regulators'), ...batteryCurveFindings(b, curve, runtime.runtimeS), ...fittedFuseFindings(`${b.name} fuse`, null, fuse)]),
+      kind: 'battery',
+      railId: b.id,
+      railName: b.name,
+      fullV: b.fullV,
+      endV: b.endV,
+      loadedEndV: loadedEnd,
+      requiredMinV: req.v,
+      receiveFraction: 1 - txFraction,
+      averageA: runtime.averageA,
+      runtimeS: runtime.runtimeS,
+      outputA: out,
+      fuse,
+      curve,
+      pa: null,
+      findings: sortFindings([
+        ...batteryFindings(
+          b,
+          req.has ? req.v : 0,
+          loadedEnd,
+          runtime,
+          b.minimumV !== null && req.v === b.minimumV ? 'its loads' : 'the regulators',
+        ),
+        ...batteryCurveFindings(b, curve, runtime.runtimeS),
+        ...fittedFuseFindings(`${b.name} fuse`, null, fuse),
+      ]),
       recommendations: [
-        { topic: 'fuse', text: fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} fuse at the battery` : 'Battery fuse: see reasoning', reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects the wiring.`, source: 'supply.fuse' },
-        { topic: 'battery', text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive / ${Math.round(txFraction * 100)} % transmit`, reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`, source: 'supply.battery-runtime' },
+        {
+          topic: 'fuse',
+          text:
+            fuse.ratedA !== null ? `${fuseMarking(fuse.ratedA)} fuse at the battery` : 'Battery fuse: see reasoning',
+          reasoning: `${fuse.reasoning} A battery can deliver hundreds of amperes into a short; the fuse protects ` +
+            `the wiring.`,
+          source: 'supply.fuse',
+        },
+        {
+          topic: 'battery',
+          text: `About ${(runtime.runtimeS / 3600).toFixed(1)} h at ${Math.round((1 - txFraction) * 100)} % receive ` +
+            `/ ${Math.round(txFraction * 100)} % transmit`,
+          reasoning: `Transmit current = key-down x ${duty} + key-up x ${(1 - duty).toFixed(2)} = ` +
+            `${runtime.transmitA.toFixed(3)} A; average ${runtime.averageA.toFixed(3)} A from ` +
+            `${(b.capacityAh * b.usableFraction).toFixed(1)} Ah usable.`,
+          source: 'supply.battery-runtime',
+        },
       ],
     };
     reports.set(b.id, report);
@@ -331,12 +476,22 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
   const rootBattery = new Map(d.rootBattery);
   const falls = new Map(d.falls);
   const designable = (r: { id: string }) => !undesigned.has(r.id);
-  const childrenOf = (id: string) => rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
+  const childrenOf = (id: string) =>
+    rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === id);
   for (const rail of rails.filter((r): r is RectifiedRail => r.kind === 'rectified' && designable(r))) {
     const report = reports.get(rail.id);
     if (report?.kind !== 'rectified') continue;
     const loss = report.rectifierLoss;
-    const bt = bridgeThermal({ railName: rail.name, thermalW: loss.thermalW, tuneUpW: loss.tuneUpW, basis: choices.transformerSizing, mount: rail.bridgeMount, freeAirKPerW: rail.bridgeFreeAirKPerW, ambientC: airC, inside });
+    const bt = bridgeThermal({
+      railName: rail.name,
+      thermalW: loss.thermalW,
+      tuneUpW: loss.tuneUpW,
+      basis: choices.transformerSizing,
+      mount: rail.bridgeMount,
+      freeAirKPerW: rail.bridgeFreeAirKPerW,
+      ambientC: airC,
+      inside,
+    });
     const findings = sortFindings([...report.findings, ...bridgeThermalFindings(rail.name, bt)]);
     reports.set(rail.id, { ...report, bridgeThermal: bt, findings });
   }
@@ -350,11 +505,23 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
         i++;
         continue;
       }
-      const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, voltageAt.get(rr.parentId)!, maxV.get(rr.parentId) ?? 0, rootBattery.get(rr.parentId) ?? false, duty, airC);
+      const ev = evaluateRegulatedRail(
+        rr,
+        budget(rr.id),
+        specs,
+        voltageAt.get(rr.parentId)!,
+        maxV.get(rr.parentId) ?? 0,
+        rootBattery.get(rr.parentId) ?? false,
+        duty,
+        airC,
+      );
       const parentName = rails.find((x) => x.id === rr.parentId)?.name ?? rr.parentId;
       const bl = withRegulatedBleeder(ev.report, rr, parentName, falls.get(rr.parentId) ?? null);
       falls.set(rr.id, bl.fall);
-      reports.set(rr.id, { ...bl.report, findings: sortFindings(insideNote(bl.report.findings, inside ? airC : null, project.ambientC)) });
+      reports.set(rr.id, {
+        ...bl.report,
+        findings: sortFindings(insideNote(bl.report.findings, inside ? airC : null, project.ambientC)),
+      });
       voltageAt.set(rr.id, ev.outputAt);
       maxV.set(rr.id, ev.report.outputV);
       rootBattery.set(rr.id, rootBattery.get(rr.parentId) ?? false);
@@ -363,22 +530,58 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
   }
   for (const rr of pending) {
     const ev = evaluateRegulatedRail(rr, budget(rr.id), specs, {}, 0, false, duty, airC);
-    ev.report.findings.unshift({ severity: 'fail', rule: 'supply.parent', subject: rr.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${rr.name} has no valid source rail (missing or fed by itself).` });
+    ev.report.findings.unshift({
+      severity: 'fail',
+      rule: 'supply.parent',
+      subject: rr.name,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.consistency',
+      message: `${rr.name} has no valid source rail (missing or fed by itself).`,
+    });
     reports.set(rr.id, ev.report);
   }
 
   for (const [wid, names] of usedWindings) {
-    if (names.length > 1) globalFindings.push({ severity: 'caution', rule: 'transformer.shared-winding', subject: names.join(', '), value: names.length, limit: 1, unit: '', source: 'design.shared-winding', message: `${names.join(' and ')} share one winding (${wid}); each is simulated as if it had the winding to itself, so headroom and ratings are optimistic.` });
+    if (names.length > 1)
+      globalFindings.push({
+        severity: 'caution',
+        rule: 'transformer.shared-winding',
+        subject: names.join(', '),
+        value: names.length,
+        limit: 1,
+        unit: '',
+        source: 'design.shared-winding',
+        message: `${names.join(' and ')} share one winding (${wid}); each is simulated as if it had the winding to ` +
+          `itself, so headroom and ratings are optimistic.`,
+      });
   }
 
   const transformers: TransformerReport[] = [];
   // a transformer with a winding feeding an undesigned rail would be sized for part of its load: leave it unsized
-  const feedsUndesigned = (t: Transformer) => rails.some((r) => r.kind === 'rectified' && undesigned.has(r.id) && t.windings.some((w) => w.id === r.windingId));
+  const feedsUndesigned = (t: Transformer) =>
+    rails.some((r) => r.kind === 'rectified' && undesigned.has(r.id) && t.windings.some((w) => w.id === r.windingId));
   const unsized = project.supply.transformers.filter((t) => inputs.unsized.has(t.id) || feedsUndesigned(t));
   for (const t of unsized) {
-    const refused = inputs.unsized.get(t.id) ?? (rails.some((r) => inputs.leftOut.has(r.id) && r.kind === 'rectified' && t.windings.some((w) => w.id === r.windingId)) ? 'a rail it feeds depends on a refused input' : null);
+    const refused =
+      inputs.unsized.get(t.id) ??
+      (rails.some(
+        (r) => inputs.leftOut.has(r.id) && r.kind === 'rectified' && t.windings.some((w) => w.id === r.windingId),
+      )
+        ? 'a rail it feeds depends on a refused input'
+        : null);
     const why = refused ?? 'a rail it feeds has an unknown load';
-    globalFindings.push({ severity: 'fail', rule: refused ? 'supply.refused-input' : 'supply.unknown-load', subject: t.name, value: null, limit: null, unit: 'VA', source: refused ? 'design.input' : 'design.consistency', message: `${t.name} is not sized, and no primary fuse is recommended: ${why}.` });
+    globalFindings.push({
+      severity: 'fail',
+      rule: refused ? 'supply.refused-input' : 'supply.unknown-load',
+      subject: t.name,
+      value: null,
+      limit: null,
+      unit: 'VA',
+      source: refused ? 'design.input' : 'design.consistency',
+      message: `${t.name} is not sized, and no primary fuse is recommended: ${why}.`,
+    });
   }
   for (const t of project.supply.transformers) {
     if (unsized.includes(t)) continue;
@@ -390,9 +593,19 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
       const w = t.windings.find((x) => r.kind === 'rectified' && x.id === r.windingId);
       if (r.kind !== 'rectified' || !w || rep?.kind !== 'rectified') return [];
       const low = rep.corners.find((c) => c.id === WORST_VOLTAGE_ID);
-      return [{ rail: r, windingName: w.name, requiredMinV: rep.requiredMinV, aloneTroughV: low?.aloneTroughV ?? low?.troughV ?? NaN }];
+      return [
+        {
+          rail: r,
+          windingName: w.name,
+          requiredMinV: rep.requiredMinV,
+          aloneTroughV: low?.aloneTroughV ?? low?.troughV ?? NaN,
+        },
+      ];
     });
-    const cr = joint && options.searches !== false ? crossRegulation(t, joint, together, project.mains!, mainsFactor(project.mains, 'low')) : null;
+    const cr =
+      joint && options.searches !== false
+        ? crossRegulation(t, joint, together, project.mains!, mainsFactor(project.mains, 'low'))
+        : null;
     transformers.push({ ...tr.report, crossRegulation: cr?.report ?? null });
     globalFindings.push(...tr.findings, ...(cr?.findings ?? []));
   }
@@ -400,18 +613,27 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
   let primary: PrimaryReport | null = null;
   if (mainsOk && unsized.length === 0 && transformers.some((t) => t.primaryA > 0)) {
     const loadA = transformers.reduce((s, t) => s + t.primaryA, 0);
-    const construction = transformers.some((t) => t.construction === 'toroidal' && t.primaryA > 0) ? 'toroidal' : 'laminated';
+    const construction = transformers.some((t) => t.construction === 'toroidal' && t.primaryA > 0)
+      ? 'toroidal'
+      : 'laminated';
     const fuse = primaryFuse(loadA, construction, undefined, choices.primaryFuseSheet);
     // a refused fitted value is not checked (its own finding says so)
     const fittedA = inputs.primaryFuseOk ? project.supply.primaryFuseA : null;
     const inUseA = fittedA ?? fuse.ratedA;
-    const faultChecks = inUseA !== null ? primaryFaultChecks(railsReported(reports), inUseA, choices.primaryFuseSheet) : [];
-    const used = project.supply.transformers.filter((t) => transformers.some((r) => r.transformerId === t.id && r.primaryA > 0));
+    const faultChecks =
+      inUseA !== null ? primaryFaultChecks(railsReported(reports), inUseA, choices.primaryFuseSheet) : [];
+    const used = project.supply.transformers.filter((t) =>
+      transformers.some((r) => r.transformerId === t.id && r.primaryA > 0),
+    );
     const rectified = rails.filter((r): r is RectifiedRail => r.kind === 'rectified');
     const duty = { loadA, reflectedFaultA: faultChecks.map((f) => f.reflectedA) };
-    const inrush = inUseA !== null
-      ? inrushReport(used, rectified, project.mains!, inUseA, choices.primaryFuseSheet, duty) : null;
-    const findings = sortFindings([...fittedFuseFindings('Primary fuse', fittedA, fuse), ...primaryFaultFindings(faultChecks, reports), ...(inrush ? inrushFindings(inrush) : [])]);
+    const inrush =
+      inUseA !== null ? inrushReport(used, rectified, project.mains!, inUseA, choices.primaryFuseSheet, duty) : null;
+    const findings = sortFindings([
+      ...fittedFuseFindings('Primary fuse', fittedA, fuse),
+      ...primaryFaultFindings(faultChecks, reports),
+      ...(inrush ? inrushFindings(inrush) : []),
+    ]);
     primary = { loadA, fuse, fittedA, faultChecks, inrush, findings };
   }
 
@@ -419,7 +641,15 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
   const all = [...globalFindings, ...railReports.flatMap((r) => r.findings), ...(primary?.findings ?? [])];
   const m = project.mains;
   return sanitize({
-    mains: mainsOk && m ? { nominalV: m.nominalV, lowV: m.nominalV * mainsFactor(m, 'low'), highV: m.nominalV * mainsFactor(m, 'high'), frequencyHz: m.frequencyHz } : null,
+    mains:
+      mainsOk && m
+        ? {
+            nominalV: m.nominalV,
+            lowV: m.nominalV * mainsFactor(m, 'low'),
+            highV: m.nominalV * mainsFactor(m, 'high'),
+            frequencyHz: m.frequencyHz,
+          }
+        : null,
     keyingDuty: duty,
     transmitFraction: txFraction,
     rails: railReports,
@@ -439,7 +669,11 @@ export function supplyInAir(d: DesignedSupply, insideC?: number): SupplyReport {
  * voltage, so the whole tree from the root is left undesigned, each rail with the reason. Designing them for a
  * load of 0 would show a supply that looks fine for an unloaded rail.
  */
-function unknownLoadRails(rails: Project['supply']['rails'], outputA: Record<string, PerMode>, highA: Record<string, PerMode>): Map<string, string> {
+function unknownLoadRails(
+  rails: Project['supply']['rails'],
+  outputA: Record<string, PerMode>,
+  highA: Record<string, PerMode>,
+): Map<string, string> {
   const byId = new Map(rails.map((r) => [r.id, r]));
   const rootOf = treeRoots(rails);
   const unknown = (a: PerMode | undefined) => (a ? MODES.filter((m) => Number.isNaN(a[m])) : []);
@@ -453,7 +687,11 @@ function unknownLoadRails(rails: Project['supply']['rails'], outputA: Record<str
   for (const [id] of own) badRoots.set(rootOf(id), id);
   for (const r of rails) {
     if (own.has(r.id)) {
-      out.set(r.id, `its ${own.get(r.id)} current is unknown (a computed load could not be computed; see the failed inputs); a design for no load there would hide that.`);
+      out.set(
+        r.id,
+        `its ${own.get(r.id)} current is unknown (a computed load could not be computed; see the failed inputs); a ` +
+          `design for no load there would hide that.`,
+      );
     } else if (badRoots.has(rootOf(r.id))) {
       const cause = byId.get(badRoots.get(rootOf(r.id))!)?.name ?? badRoots.get(rootOf(r.id))!;
       out.set(r.id, `it shares its source with ${cause}, whose load is unknown, so its input voltage is unknown too.`);
@@ -489,11 +727,22 @@ function sanitize(report: SupplyReport): SupplyReport {
       return 0;
     }
     if (Array.isArray(v)) return v.map((x, i) => walk(x, `${path}[${i}]`));
-    if (v && typeof v === 'object') return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, walk(x, `${path}.${k}`)]));
+    if (v && typeof v === 'object')
+      return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, walk(x, `${path}.${k}`)]));
     return v;
   };
   const clean = walk(report, 'report') as SupplyReport;
   if (bad.length === 0) return report;
-  const f: Finding = { severity: 'fail', rule: 'internal.non-finite', subject: 'Supply report', value: bad.length, limit: 0, unit: '', source: 'design.computation', message: `Some supply values could not be computed from the inputs (${bad.slice(0, 3).join(', ')}${bad.length > 3 ? ', ...' : ''}); check the entered values.` };
+  const f: Finding = {
+    severity: 'fail',
+    rule: 'internal.non-finite',
+    subject: 'Supply report',
+    value: bad.length,
+    limit: 0,
+    unit: '',
+    source: 'design.computation',
+    message: `Some supply values could not be computed from the inputs (${bad.slice(0, 3).join(', ')}` +
+      `${bad.length > 3 ? ', ...' : ''}); check the entered values.`,
+  };
   return { ...clean, findings: sortFindings([f, ...clean.findings]) };
 }

@@ -66,7 +66,15 @@ export function latestPreArcS(sheet: FuseSheet, multiple: number): number | null
 export function faultCheck(faultA: number, ratedA: number, sheet: FuseSheet, allowedS = FAULT_CLEAR_S): FaultCheck {
   const multiple = ratedA > 0 && Number.isFinite(faultA) ? Math.max(0, faultA) / ratedA : 0;
   const latestS = latestPreArcS(sheet, multiple);
-  return { faultA: Math.max(0, faultA), fuseA: ratedA, sheet, multiple, latestS, allowedS, clears: latestS !== null && latestS <= allowedS };
+  return {
+    faultA: Math.max(0, faultA),
+    fuseA: ratedA,
+    sheet,
+    multiple,
+    latestS,
+    allowedS,
+    clears: latestS !== null && latestS <= allowedS,
+  };
 }
 
 /**

@@ -8,7 +8,8 @@ import { IEC_60127_FUSES_A, nextAtLeast } from './standard-values';
 export const PRIMARY_FACTOR = { laminated: 1.5, toroidal: 2 } as const;
 
 /**
- * DC-side rail fuse factor over the key-down DC current. Common practice, no published source (ref §4.3 [M]: 1.25-1.5).
+ * DC-side rail fuse factor over the key-down DC current. Common practice, no
+ * published source (ref §4.3 [M]: 1.25-1.5).
  */
 export const RAIL_FACTOR = 1.5;
 

@@ -1,7 +1,14 @@
 // Public API of the mains-supply design engine (pure). See report-types.ts for every result key and its unit.
 export { evaluateSupply, type SupplyOptions } from './evaluate-supply';
 export type * from './report-types';
-export { simulateRectifier, switchOnSurgeA, type RectifierSimInput, type RectifierSimResult, type RectifierWaveform, type SimLoad } from './rectifier-sim';
+export {
+  simulateRectifier,
+  switchOnSurgeA,
+  type RectifierSimInput,
+  type RectifierSimResult,
+  type RectifierWaveform,
+  type SimLoad,
+} from './rectifier-sim';
 export { regulatorOutputV, regulatorInputCurrentA, regulatorDissipationW } from './regulator';
 export { rectifierNetlist, railNetlist, SPICE_MEASURES } from './spice-netlist';
 export { cornerSpecs, cornerCurrent, CW_DUTY_FACTOR, DEFAULT_TRANSMIT_FRACTION } from './corners';

@@ -42,7 +42,15 @@ export interface KeyingRun {
   keyed: boolean[];
   /** Per interval of the schedule: mean, lowest and highest rail voltage while keyed (V), the mean PA output (W), and
    * the mean PA output over the interval's first `leadS` (W). */
-  intervals: { startS: number; endS: number; meanV: number; minV: number; maxV: number; meanOutputW: number; leadOutputW: number }[];
+  intervals: {
+    startS: number;
+    endS: number;
+    meanV: number;
+    minV: number;
+    maxV: number;
+    meanOutputW: number;
+    leadOutputW: number;
+  }[];
   /** Reservoir voltage at time 0 (key-up steady state) (V). */
   startV: number;
   steps: number;
@@ -217,12 +225,29 @@ export class KeyingSimulator {
  * Run the schedule from the key-up steady state. `sampleEvery` steps make one plot sample. The key-up and key-down
  * loads are switched at the step nearest each interval edge.
  */
-export function runKeying(sim: KeyingSimulator, keyUp: ModeLoads, keyDown: ModeLoads, schedule: KeyingSchedule, startV: number, sampleEvery: number, leadS: number): KeyingRun {
+export function runKeying(
+  sim: KeyingSimulator,
+  keyUp: ModeLoads,
+  keyDown: ModeLoads,
+  schedule: KeyingSchedule,
+  startV: number,
+  sampleEvery: number,
+  leadS: number,
+): KeyingRun {
   const h = sim.h;
   const leadSteps = Math.max(1, Math.round(leadS / h));
   const total = Math.round(schedule.durationS / h);
   const edges = schedule.intervals.map((iv) => ({ from: Math.round(iv.startS / h), to: Math.round(iv.endS / h) }));
-  const stats = schedule.intervals.map((iv) => ({ ...iv, sum: 0, sumW: 0, leadW: 0, leadCount: 0, count: 0, minV: Infinity, maxV: -Infinity }));
+  const stats = schedule.intervals.map((iv) => ({
+    ...iv,
+    sum: 0,
+    sumW: 0,
+    leadW: 0,
+    leadCount: 0,
+    count: 0,
+    minV: Infinity,
+    maxV: -Infinity,
+  }));
   const out: KeyingRun = { timeS: [], railV: [], keyed: [], intervals: [], startV, steps: total };
   const st = { vc: startV, il: 0 };
   let k = 0;
@@ -251,12 +276,24 @@ export function runKeying(sim: KeyingSimulator, keyUp: ModeLoads, keyDown: ModeL
       }
     }
   }
-  out.intervals = stats.map((s) => ({ startS: s.startS, endS: s.endS, meanV: s.count ? s.sum / s.count : NaN, minV: s.minV, maxV: s.maxV, meanOutputW: s.count ? s.sumW / s.count : NaN, leadOutputW: s.leadCount ? s.leadW / s.leadCount : NaN }));
+  out.intervals = stats.map((s) => ({
+    startS: s.startS,
+    endS: s.endS,
+    meanV: s.count ? s.sum / s.count : NaN,
+    minV: s.minV,
+    maxV: s.maxV,
+    meanOutputW: s.count ? s.sumW / s.count : NaN,
+    leadOutputW: s.leadCount ? s.leadW / s.leadCount : NaN,
+  }));
   return out;
 }
 
 /** One cycle at the periodic steady state: mean, lowest rail voltage and mean PA output (V, V, W). */
-export function steadyCycle(sim: KeyingSimulator, loads: ModeLoads, startV: number): { meanV: number; troughV: number; meanOutputW: number } {
+export function steadyCycle(
+  sim: KeyingSimulator,
+  loads: ModeLoads,
+  startV: number,
+): { meanV: number; troughV: number; meanOutputW: number } {
   let sum = 0;
   let sumW = 0;
   let min = Infinity;

@@ -75,7 +75,10 @@ export interface KeyingTransient {
 
 /** A dot train: `elements` dots of one unit with one-unit spaces, after `leadS` of key-up (ITU-R M.1677-1 ratios). */
 export function dotTrain(dotS: number, elements: number, leadS: number): KeyingSchedule {
-  const intervals = Array.from({ length: elements }, (_, i) => ({ startS: leadS + 2 * i * dotS, endS: leadS + (2 * i + 1) * dotS }));
+  const intervals = Array.from({ length: elements }, (_, i) => ({
+    startS: leadS + 2 * i * dotS,
+    endS: leadS + (2 * i + 1) * dotS,
+  }));
   return { intervals, durationS: leadS + (2 * elements - 1) * dotS + dotS };
 }
 
@@ -85,16 +88,34 @@ export function elementsFor(dotS: number): number {
 }
 
 /** The circuit of a rectified rail at a mains factor. */
-export function keyingCircuit(rail: RectifiedRail, winding: Winding, frequencyHz: number, mainsFactor: number, leakageH = 0): KeyingCircuit {
+export function keyingCircuit(
+  rail: RectifiedRail,
+  winding: Winding,
+  frequencyHz: number,
+  mainsFactor: number,
+  leakageH = 0,
+): KeyingCircuit {
   return {
-    topology: rail.topology, secondaryVrms: noLoadVrms(winding) * mainsFactor, windingOhm: windingResistanceOhm(winding), leakageH,
-    frequencyHz, diodeDropV: rail.diodeDropV, diodeResistanceOhm: rail.diodeResistanceOhm, capacitanceF: rail.reservoirF,
-    esrOhm: rail.esrOhm, bleederOhm: rail.bleederOhm,
+    topology: rail.topology,
+    secondaryVrms: noLoadVrms(winding) * mainsFactor,
+    windingOhm: windingResistanceOhm(winding),
+    leakageH,
+    frequencyHz,
+    diodeDropV: rail.diodeDropV,
+    diodeResistanceOhm: rail.diodeResistanceOhm,
+    capacitanceF: rail.reservoirF,
+    esrOhm: rail.esrOhm,
+    bleederOhm: rail.bleederOhm,
   };
 }
 
 /** Simulate the transient; null when a steady state cannot be found (the rail collapses or the inputs are unusable). */
-export function simulateKeyingTransient(circuit: KeyingCircuit, model: RailLoadModel, wpm: number, steps = TRANSIENT_STEPS_PER_CYCLE): Omit<KeyingTransient, 'stageName' | 'wpmFrom' | 'mainsV'> | null {
+export function simulateKeyingTransient(
+  circuit: KeyingCircuit,
+  model: RailLoadModel,
+  wpm: number,
+  steps = TRANSIENT_STEPS_PER_CYCLE,
+): Omit<KeyingTransient, 'stageName' | 'wpmFrom' | 'mainsV'> | null {
   const pa = model.keyDown.pa;
   if (!pa || !(wpm > 0) || !(circuit.frequencyHz > 0) || !(circuit.capacitanceF > 0)) return null;
   const sim = new KeyingSimulator(circuit, steps);
@@ -114,17 +135,43 @@ export function simulateKeyingTransient(circuit: KeyingCircuit, model: RailLoadM
   const totalSteps = Math.round(schedule.durationS / sim.h);
   const ripplePeriodS = circuit.topology === 'half-wave' ? period : period / 2;
   const edgeS = Math.min(ripplePeriodS, dotS);
-  const run = runKeying(sim, model.keyUp, model.keyDown, schedule, up.v, Math.max(1, Math.floor(totalSteps / PLOT_POINTS)), edgeS);
+  const run = runKeying(
+    sim,
+    model.keyUp,
+    model.keyDown,
+    schedule,
+    up.v,
+    Math.max(1, Math.floor(totalSteps / PLOT_POINTS)),
+    edgeS,
+  );
   // Source: definition of the decibel, 10 log10(P1 / P2)
   const db = (w: number) => 10 * Math.log10(Math.max(w, 1e-12) / downStats.meanOutputW);
   const elements = run.intervals.map((iv, i) => ({
-    index: i + 1, startS: iv.startS - leadS, endS: iv.endS - leadS, meanV: iv.meanV, minV: iv.minV, outputW: iv.meanOutputW, vsSteadyDb: db(iv.meanOutputW),
-    leadOutputW: iv.leadOutputW, leadVsSteadyDb: db(iv.leadOutputW),
+    index: i + 1,
+    startS: iv.startS - leadS,
+    endS: iv.endS - leadS,
+    meanV: iv.meanV,
+    minV: iv.minV,
+    outputW: iv.meanOutputW,
+    vsSteadyDb: db(iv.meanOutputW),
+    leadOutputW: iv.leadOutputW,
+    leadVsSteadyDb: db(iv.leadOutputW),
   }));
   return {
-    wpm, dotS, windingOhm: circuit.windingOhm, leakageH: sim.leakageH, stepsPerCycle: steps,
-    keyUpMeanV: upStats.meanV, keyDownMeanV: downStats.meanV, keyDownTroughV: downStats.troughV, steadyOutputW: downStats.meanOutputW,
-    elements, leadS: edgeS, firstLeadDb: elements[0]?.leadVsSteadyDb ?? NaN, firstElementDb: elements[0]?.vsSteadyDb ?? NaN, limitDb: HOT_ELEMENT_LIMIT_DB,
+    wpm,
+    dotS,
+    windingOhm: circuit.windingOhm,
+    leakageH: sim.leakageH,
+    stepsPerCycle: steps,
+    keyUpMeanV: upStats.meanV,
+    keyDownMeanV: downStats.meanV,
+    keyDownTroughV: downStats.troughV,
+    steadyOutputW: downStats.meanOutputW,
+    elements,
+    leadS: edgeS,
+    firstLeadDb: elements[0]?.leadVsSteadyDb ?? NaN,
+    firstElementDb: elements[0]?.vsSteadyDb ?? NaN,
+    limitDb: HOT_ELEMENT_LIMIT_DB,
     waveform: { timeS: run.timeS.map((t) => t - leadS), railV: run.railV, keyed: run.keyed },
     loadModel: model,
   };
@@ -141,11 +188,30 @@ export function projectWpm(project: Project): { wpm: number; from: string } | nu
 const v2 = (x: number) => `${x.toFixed(1)} V`;
 
 /** Attach every rail's load model, and the keying transient to every rectified rail feeding a PA, with its finding. */
-export function withKeyingTransient(supply: SupplyReport | null, project: Project, budget: BudgetReport, rf: RfReport): SupplyReport | null {
+export function withKeyingTransient(
+  supply: SupplyReport | null,
+  project: Project,
+  budget: BudgetReport,
+  rf: RfReport,
+): SupplyReport | null {
   if (!supply) return supply;
   const speed = projectWpm(project);
   const added: Finding[] = [];
-  const pas: PaOperatingPoint[] = rf.stages.flatMap((st) => (st.pa ? [{ stageId: st.stageId, railV: st.pa.railV, outputW: st.pa.outputW, saturationV: st.pa.saturationV, efficiency: st.pa.efficiency, keyDownCurrentA: st.pa.keyDownCurrentA, refused: st.pa.refused }] : []));
+  const pas: PaOperatingPoint[] = rf.stages.flatMap((st) =>
+    st.pa
+      ? [
+          {
+            stageId: st.stageId,
+            railV: st.pa.railV,
+            outputW: st.pa.outputW,
+            saturationV: st.pa.saturationV,
+            efficiency: st.pa.efficiency,
+            keyDownCurrentA: st.pa.keyDownCurrentA,
+            refused: st.pa.refused,
+          },
+        ]
+      : [],
+  );
   const rails = supply.rails.map((r0) => {
     // every rail carries its load model; the rectified rails feeding a PA are keyed below
     const r = { ...r0, loadModel: railLoadModel(project, budget, r0.railId, pas) };
@@ -155,12 +221,25 @@ export function withKeyingTransient(supply: SupplyReport | null, project: Projec
     const transformer = project.supply.transformers.find((t) => t.windings.some((w) => w.id === railIn?.windingId));
     const winding = transformer?.windings.find((w) => w.id === railIn?.windingId);
     if (!stage || !railIn || !transformer || !winding) return r;
-    const base = { rule: 'supply.keying-transient', subject: r.railName, unit: 'dB', source: 'supply.keying-transient' as const };
+    const base = {
+      rule: 'supply.keying-transient',
+      subject: r.railName,
+      unit: 'dB',
+      source: 'supply.keying-transient' as const,
+    };
     const model = r.loadModel;
     if (!project.mains) return r;
     if (!speed || !model) {
-      const why = !speed ? 'no keying speed is entered (it is on the T/R relay stage)' : "a load on the rail or the PA's operating point is unknown";
-      const f: Finding = { ...base, severity: 'ok', value: null, limit: null, message: `The keying transient of ${r.railName} is not simulated: ${why}.` };
+      const why = !speed
+        ? 'no keying speed is entered (it is on the T/R relay stage)'
+        : "a load on the rail or the PA's operating point is unknown";
+      const f: Finding = {
+        ...base,
+        severity: 'ok',
+        value: null,
+        limit: null,
+        message: `The keying transient of ${r.railName} is not simulated: ${why}.`,
+      };
       added.push(f);
       return { ...r, keyingTransient: null, findings: sortFindings([...r.findings, f]) };
     }
@@ -169,7 +248,14 @@ export function withKeyingTransient(supply: SupplyReport | null, project: Projec
     const leakageH = windingLeakage(winding, transformer.construction, f0).henry;
     const sim = simulateKeyingTransient(keyingCircuit(railIn, winding, f0, 1, leakageH), model, speed.wpm);
     if (!sim) {
-      const f: Finding = { ...base, severity: 'caution', value: null, limit: null, message: `The keying transient of ${r.railName} could not be simulated: the rail found no steady state with its loads.` };
+      const f: Finding = {
+        ...base,
+        severity: 'caution',
+        value: null,
+        limit: null,
+        message: `The keying transient of ${r.railName} could not be simulated: the rail found no steady state with ` +
+          `its loads.`,
+      };
       added.push(f);
       return { ...r, keyingTransient: null, findings: sortFindings([...r.findings, f]) };
     }
@@ -183,11 +269,14 @@ export function withKeyingTransient(supply: SupplyReport | null, project: Projec
       ...base, severity: hot ? 'caution' : 'ok', value: kt.firstLeadDb, limit: HOT_ELEMENT_LIMIT_DB,
       message: `Keyed at ${kt.wpm} WPM (dots of ${ms(kt.dotS)}) from rest at nominal mains, ${r.railName} falls from ` +
         `${v2(kt.keyUpMeanV)} key-up towards ${v2(kt.keyDownMeanV)} with the key held. ${stage.name} gives about ` +
-        `${first.leadOutputW.toFixed(1)} W over the first ${ms(kt.leadS)} of the first dot, ${sdb(kt.firstLeadDb)} against the ` +
-        `${kt.steadyOutputW.toFixed(1)} W of a held key (${sdb(kt.firstElementDb)} over the whole dot; dot ${last.index}: ` +
+        `${first.leadOutputW.toFixed(1)} W over the first ${ms(kt.leadS)} of the first dot, ${sdb(kt.firstLeadDb)}` +
+        ` against the ` +
+        `${kt.steadyOutputW.toFixed(1)} W of a held key (${sdb(kt.firstElementDb)} over the whole dot; dot ` +
+        `${last.index}: ` +
         `${sdb(last.leadVsSteadyDb)} at its start, ${sdb(last.vsSteadyDb)} over the dot)` +
         (hot
-          ? `. The elements start hot: a transformer with less regulation (a larger one) or a regulated PA supply keeps them level; more reservoir capacitance makes the sag slower, not smaller.`
+          ? `. The elements start hot: a transformer with less regulation (a larger one) or a regulated PA supply ` +
+            `keeps them level; more reservoir capacitance makes the sag slower, not smaller.`
           : `; within ${HOT_ELEMENT_LIMIT_DB} dB.`),
     };
     added.push(f);

@@ -49,20 +49,30 @@ export interface RailLoadModel {
   keyUp: ModeLoads;
   keyDown: ModeLoads;
   /** The loads in words, for the page and the JSON. */
-  parts: { name: string; law: 'constant current' | 'constant power' | 'PA load line'; keyUpA: number; keyDownA: number }[];
+  parts: {
+    name: string;
+    law: 'constant current' | 'constant power' | 'PA load line';
+    keyUpA: number;
+    keyDownA: number;
+  }[];
 }
 
 /** The PA's output at rail voltage v on its load line (W). */
 export function paOutputW(pa: PaLoadLaw, v: number): number {
   const swing0 = pa.referenceV - pa.saturationV;
   if (!(swing0 > 0) || !(v > pa.saturationV)) return 0;
-  // Source: PA load line P = k (Vdd - Vsat)² / R (textbook; the RF model's own relation), R fixed by the output network
+  // Source: PA load line P = k (Vdd - Vsat)² / R (textbook; the RF model's own
+  // relation), R fixed by the output network
   return pa.referenceOutputW * ((v - pa.saturationV) / swing0) ** 2;
 }
 
 /** Current and its slope dI/dV of a mode's loads at rail voltage v (A, A/V); written into `into` when given (the
  * simulation's inner loop, without an allocation per step). */
-export function loadAt(m: ModeLoads, v: number, into?: { currentA: number; slopeAPerV: number }): { currentA: number; slopeAPerV: number } {
+export function loadAt(
+  m: ModeLoads,
+  v: number,
+  into?: { currentA: number; slopeAPerV: number },
+): { currentA: number; slopeAPerV: number } {
   let currentA = m.constantA;
   let slopeAPerV = 0;
   for (const p of m.constantPower) {
@@ -107,11 +117,19 @@ export interface PaOperatingPoint {
  * The load model of a rail from the current budget (which holds every load and regulator input at its voltage) and
  * the PA operating points. null when the budget has no such rail or a load is unknown (NaN), so nothing is guessed.
  */
-export function railLoadModel(project: Project, budget: BudgetReport, railId: string, pas: PaOperatingPoint[]): RailLoadModel | null {
+export function railLoadModel(
+  project: Project,
+  budget: BudgetReport,
+  railId: string,
+  pas: PaOperatingPoint[],
+): RailLoadModel | null {
   const rb = budget.rails.find((r) => r.railId === railId);
   if (!rb) return null;
   const modes: Mode[] = ['keyUp', 'keyDown'];
-  const out: Record<'keyUp' | 'keyDown', ModeLoads> = { keyUp: { constantA: 0, constantPower: [], pa: null }, keyDown: { constantA: 0, constantPower: [], pa: null } };
+  const out: Record<'keyUp' | 'keyDown', ModeLoads> = {
+    keyUp: { constantA: 0, constantPower: [], pa: null },
+    keyDown: { constantA: 0, constantPower: [], pa: null },
+  };
   const parts: RailLoadModel['parts'] = [];
   for (const l of rb.loads) {
     const stage = project.stages.find((s) => s.id === l.stageId);
@@ -123,8 +141,13 @@ export function railLoadModel(project: Project, budget: BudgetReport, railId: st
       // the efficiency the budget's current implies, so that I(V0) is the key-down current the supply was designed for
       const implied = op.outputW / ((op.keyDownCurrentA - idleA) * op.railV);
       const law: PaLoadLaw = {
-        stageId: l.stageId, stageName: l.stageName, referenceV: op.railV, referenceOutputW: op.outputW, saturationV: op.saturationV,
-        efficiency: Number.isFinite(implied) && implied > 0 && implied <= 1 ? implied : op.efficiency, idleA,
+        stageId: l.stageId,
+        stageName: l.stageName,
+        referenceV: op.railV,
+        referenceOutputW: op.outputW,
+        saturationV: op.saturationV,
+        efficiency: Number.isFinite(implied) && implied > 0 && implied <= 1 ? implied : op.efficiency,
+        idleA,
       };
       out.keyDown.pa = law;
       // the computed load carries the PA in key-down only (its key-up rows are entered loads, below)
@@ -136,12 +159,20 @@ export function railLoadModel(project: Project, budget: BudgetReport, railId: st
     out.keyUp.constantA += l.currentA.keyUp;
     out.keyDown.constantA += l.currentA.keyDown;
     // a computed load that is not the PA is a relay coil (evaluate()'s computed loads are those two)
-    parts.push({ name: l.computed ? `${l.stageName} (relay coil)` : l.stageName, law: 'constant current', keyUpA: l.currentA.keyUp, keyDownA: l.currentA.keyDown });
+    parts.push({
+      name: l.computed ? `${l.stageName} (relay coil)` : l.stageName,
+      law: 'constant current',
+      keyUpA: l.currentA.keyUp,
+      keyDownA: l.currentA.keyDown,
+    });
   }
-  const children = project.supply.rails.filter((r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === railId);
+  const children = project.supply.rails.filter(
+    (r): r is RegulatedRail => r.kind === 'regulated' && r.parentId === railId,
+  );
   for (const c of children) {
     const cb = budget.rails.find((r) => r.railId === c.id);
-    if (!cb || !cb.inputA || modes.some((m) => !Number.isFinite(cb.outputA[m]) || !Number.isFinite(cb.inputA![m]))) return null;
+    if (!cb || !cb.inputA || modes.some((m) => !Number.isFinite(cb.outputA[m]) || !Number.isFinite(cb.inputA![m])))
+      return null;
     const iq = Number.isFinite(c.quiescentA) && c.quiescentA > 0 ? c.quiescentA : 0;
     if (c.regulator !== 'switching') {
       for (const m of ['keyUp', 'keyDown'] as const) out[m].constantA += cb.inputA[m];

@@ -18,7 +18,11 @@ export function outputAtRailW(outputW: number, railV: number, saturationV: numbe
 }
 
 /** Attach the PA's low-mains output with the recommended winding to each winding recommendation of a PA rail. */
-export function withRecommendedPa(supply: SupplyReport | null, project: Project, rf: RfReport): { supply: SupplyReport | null; findings: Finding[] } {
+export function withRecommendedPa(
+  supply: SupplyReport | null,
+  project: Project,
+  rf: RfReport,
+): { supply: SupplyReport | null; findings: Finding[] } {
   if (!supply) return { supply, findings: [] };
   const findings: Finding[] = [];
   const target = project.targetPowerW;
@@ -33,13 +37,33 @@ export function withRecommendedPa(supply: SupplyReport | null, project: Project,
     // 1 dB, as for the PA's own low-supply check
     const dbBelow = target > 0 ? 10 * Math.log10(target / Math.max(outputW, 1e-12)) : 0;
     findings.push({
-      severity: dbBelow > 1 ? 'caution' : 'ok', rule: 'transformer.recommended-pa', subject: r.winding.windingName, value: outputW, limit: target, unit: 'W', source: 'supply.recommended-pa',
-      message: `With the recommended ${r.winding.standardRatedV ?? '?'} V ${r.winding.ratedA.toFixed(2)} A winding (sized for ${supply.choices?.transformerSizing === 'tune-up' ? 'tune-up, a continuous carrier' : `CW at ${Math.round(supply.keyingDuty * 100)} % duty`}) the ${r.railName} falls to ${r.winding.checkTroughV.toFixed(1)} V at low mains, key-down, and ${stage.name} gives about ${outputW.toFixed(1)} W (${pa.lowOutputW.toFixed(1)} W with the fitted winding; target ${target} W).`,
+      severity: dbBelow > 1 ? 'caution' : 'ok',
+      rule: 'transformer.recommended-pa',
+      subject: r.winding.windingName,
+      value: outputW,
+      limit: target,
+      unit: 'W',
+      source: 'supply.recommended-pa',
+      message: `With the recommended ${r.winding.standardRatedV ?? '?'} V ${r.winding.ratedA.toFixed(2)} A winding ` +
+        `(sized for ${
+          supply.choices?.transformerSizing === 'tune-up'
+            ? 'tune-up, a continuous carrier'
+            : `CW at ${Math.round(supply.keyingDuty * 100)} % duty`
+        }) the ${r.railName} falls to ${r.winding.checkTroughV.toFixed(1)} V at low mains, key-down, and ` +
+        `${stage.name} gives about ${outputW.toFixed(1)} W (${pa.lowOutputW.toFixed(1)} W with the fitted winding; ` +
+        `target ${target} W).`,
     });
     return { ...r, winding: { ...r.winding, paAtCheck } };
   });
   // the transformer's copy of each winding recommendation carries the same figure
-  const byWinding = new Map(rails.flatMap((r) => (r.kind === 'rectified' && r.winding?.paAtCheck ? [[r.winding.windingId, r.winding.paAtCheck] as const] : [])));
-  const transformers = supply.transformers.map((t) => ({ ...t, windings: t.windings.map((w) => (byWinding.has(w.windingId) ? { ...w, paAtCheck: byWinding.get(w.windingId) } : w)) }));
+  const byWinding = new Map(
+    rails.flatMap((r) =>
+      r.kind === 'rectified' && r.winding?.paAtCheck ? [[r.winding.windingId, r.winding.paAtCheck] as const] : [],
+    ),
+  );
+  const transformers = supply.transformers.map((t) => ({
+    ...t,
+    windings: t.windings.map((w) => (byWinding.has(w.windingId) ? { ...w, paAtCheck: byWinding.get(w.windingId) } : w)),
+  }));
   return { supply: { ...supply, rails, transformers, findings: [...supply.findings, ...findings] }, findings };
 }

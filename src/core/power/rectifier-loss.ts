@@ -11,7 +11,13 @@ import type { RectifiedCorner, RectifierLoss } from './report-types';
  * Half-wave: one diode carries the winding current: P = Vf I_dc + r_d I_w,rms^2.
  * I_dc is the rail's mean load current (the mean rectified current in steady state; the bleeder's share is neglected).
  */
-export function rectifierDissipationW(topology: RectifierTopology, diodeDropV: number, diodeOhm: number, dcA: number, windingRmsA: number): number {
+export function rectifierDissipationW(
+  topology: RectifierTopology,
+  diodeDropV: number,
+  diodeOhm: number,
+  dcA: number,
+  windingRmsA: number,
+): number {
   const vf = Number.isFinite(diodeDropV) ? Math.max(0, diodeDropV) : 0;
   const rd = Number.isFinite(diodeOhm) ? Math.max(0, diodeOhm) : 0;
   const i = Number.isFinite(dcA) ? Math.max(0, dcA) : 0;
@@ -22,7 +28,13 @@ export function rectifierDissipationW(topology: RectifierTopology, diodeDropV: n
 }
 
 /** Rectifier loss at high mains: key-down, key-up, averaged over the keying duty (d P_kd + (1-d) P_ku) and tune-up. */
-export function rectifierLoss(topology: RectifierTopology, diodeDropV: number, diodeOhm: number, corners: RectifiedCorner[], keyingDuty: number): RectifierLoss {
+export function rectifierLoss(
+  topology: RectifierTopology,
+  diodeDropV: number,
+  diodeOhm: number,
+  corners: RectifiedCorner[],
+  keyingDuty: number,
+): RectifierLoss {
   const at = (id: string) => {
     const c = corners.find((x) => x.id === id);
     return c ? rectifierDissipationW(topology, diodeDropV, diodeOhm, c.loadA, c.secondaryRmsA) : 0;

@@ -151,7 +151,19 @@ export function sinTable(steps: number): Float64Array {
 }
 
 function emptyStats(): CycleStats {
-  return { sumV: 0, minV: Infinity, maxV: -Infinity, sumId2A: 0, sumIdB2: 0, maxId: 0, sumIc2: 0, sumIc: 0, sumLoad: 0, conducting: 0, collapsed: false };
+  return {
+    sumV: 0,
+    minV: Infinity,
+    maxV: -Infinity,
+    sumId2A: 0,
+    sumIdB2: 0,
+    maxId: 0,
+    sumIc2: 0,
+    sumIc: 0,
+    sumLoad: 0,
+    conducting: 0,
+    collapsed: false,
+  };
 }
 
 /**
@@ -262,7 +274,12 @@ export function diodesInPath(topology: RectifierTopology): number {
  * Switch-on surge into a discharged reservoir: EMF peak less diode drops over the total series resistance.
  * Source: Reference values §4.2 "switch-on surge" derivation (this project, [D]).
  */
-export function switchOnSurgeA(peakEmfV: number, topology: RectifierTopology, diodeDropV: number, seriesOhm: number): number {
+export function switchOnSurgeA(
+  peakEmfV: number,
+  topology: RectifierTopology,
+  diodeDropV: number,
+  seriesOhm: number,
+): number {
   const n = diodesInPath(topology);
   const r = Math.max(seriesOhm, 1e-3);
   return Math.max(0, finite((peakEmfV - n * diodeDropV) / r));
@@ -375,10 +392,38 @@ export function withSimulationMemo<T>(fn: () => T, options: { caches?: boolean }
  */
 export function simulateRectifier(input: RectifierSimInput, options: { searchKey?: string } = {}): RectifierSimResult {
   if (!MEMO) return simulateUncached(input);
-  const key = JSON.stringify([input.topology, input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm, input.load, input.bleederOhm ?? null, input.stepsPerCycle ?? null, input.toleranceV ?? null, input.maxCycles ?? null, input.waveformPoints ?? null]);
+  const key = JSON.stringify([
+    input.topology,
+    input.secondaryVrms,
+    input.windingResistanceOhm,
+    input.frequencyHz,
+    input.diodeDropV,
+    input.diodeResistanceOhm,
+    input.capacitanceF,
+    input.esrOhm,
+    input.load,
+    input.bleederOhm ?? null,
+    input.stepsPerCycle ?? null,
+    input.toleranceV ?? null,
+    input.maxCycles ?? null,
+    input.waveformPoints ?? null,
+  ]);
   const held = MEMO.get(key);
   if (held) return held;
-  const circuitKey = JSON.stringify([input.topology, input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm, input.load.kind, input.bleederOhm ?? null, input.stepsPerCycle ?? null, input.toleranceV ?? null]);
+  const circuitKey = JSON.stringify([
+    input.topology,
+    input.secondaryVrms,
+    input.windingResistanceOhm,
+    input.frequencyHz,
+    input.diodeDropV,
+    input.diodeResistanceOhm,
+    input.capacitanceF,
+    input.esrOhm,
+    input.load.kind,
+    input.bleederOhm ?? null,
+    input.stepsPerCycle ?? null,
+    input.toleranceV ?? null,
+  ]);
   const load = loadValue(input.load);
   const searchKey = options.searchKey !== undefined ? `search\u0000${options.searchKey}` : null;
   const start = warmStart(WARM?.get(circuitKey), load)
@@ -393,9 +438,22 @@ export function simulateRectifier(input: RectifierSimInput, options: { searchKey
   return result;
 }
 
-function simulateUncached(input: RectifierSimInput, startV?: number, onSteady?: (v0: number) => void): RectifierSimResult {
-  const nums = [input.secondaryVrms, input.windingResistanceOhm, input.frequencyHz, input.diodeDropV, input.diodeResistanceOhm, input.capacitanceF, input.esrOhm];
-  if (!nums.every((x) => Number.isFinite(x))) return invalid('Simulation not run: an input is missing or not a number.');
+function simulateUncached(
+  input: RectifierSimInput,
+  startV?: number,
+  onSteady?: (v0: number) => void,
+): RectifierSimResult {
+  const nums = [
+    input.secondaryVrms,
+    input.windingResistanceOhm,
+    input.frequencyHz,
+    input.diodeDropV,
+    input.diodeResistanceOhm,
+    input.capacitanceF,
+    input.esrOhm,
+  ];
+  if (!nums.every((x) => Number.isFinite(x)))
+    return invalid('Simulation not run: an input is missing or not a number.');
   const f = SIM_FLOORS;
   const notRun = 'Simulation not run:';
   if (!usablePositive(input.frequencyHz, f.frequencyHz)) {
@@ -423,8 +481,16 @@ function simulateUncached(input: RectifierSimInput, startV?: number, onSteady?: 
     return invalid(`${notRun} the bleeder resistance must be at least 1 mΩ (or none).`);
   }
   const cir: Circuit = {
-    diodes: n, dropV: n * input.diodeDropV, peakEmfV, rt: input.windingResistanceOhm + n * input.diodeResistanceOhm, esr: input.esrOhm,
-    c: input.capacitanceF, g: loadG + bleedG, i0, omega: 2 * Math.PI * input.frequencyHz, topology: input.topology,
+    diodes: n,
+    dropV: n * input.diodeDropV,
+    peakEmfV,
+    rt: input.windingResistanceOhm + n * input.diodeResistanceOhm,
+    esr: input.esrOhm,
+    c: input.capacitanceF,
+    g: loadG + bleedG,
+    i0,
+    omega: 2 * Math.PI * input.frequencyHz,
+    topology: input.topology,
   };
   const steps = Math.max(100, Math.min(20000, Math.round(input.stepsPerCycle ?? 1000)));
   const maxCycles = Math.max(2, Math.min(2000, Math.round(input.maxCycles ?? 200)));
@@ -455,7 +521,12 @@ function simulateUncached(input: RectifierSimInput, startV?: number, onSteady?: 
     if (f > 0) lo = Math.max(lo, x);
     else hi = Math.min(hi, x);
     const fPrime = last.dvdv0 - 1;
-    let next = Number.isFinite(fPrime) && fPrime < -1e-12 ? x - f / fPrime : Number.isFinite(fPrev) && f !== fPrev ? x - (f * (x - xPrev)) / (f - fPrev) : last.v;
+    let next =
+      Number.isFinite(fPrime) && fPrime < -1e-12
+        ? x - f / fPrime
+        : Number.isFinite(fPrev) && f !== fPrev
+          ? x - (f * (x - xPrev)) / (f - fPrev)
+          : last.v;
     if (!(next > lo && next < hi)) next = last.v > lo && last.v < hi ? last.v : 0.5 * (lo + hi);
     if (hi - lo < tol) {
       next = 0.5 * (lo + hi);
@@ -494,7 +565,9 @@ function simulateUncached(input: RectifierSimInput, startV?: number, onSteady?: 
     st = first.st;
   }
   const perHalf = input.topology === 'centre-tap';
-  const secondaryRmsA = perHalf ? Math.sqrt(Math.max(st.sumId2A, st.sumIdB2) / steps) : Math.sqrt((st.sumId2A + st.sumIdB2) / steps);
+  const secondaryRmsA = perHalf
+    ? Math.sqrt(Math.max(st.sumId2A, st.sumIdB2) / steps)
+    : Math.sqrt((st.sumId2A + st.sumIdB2) / steps);
   const meanIc = st.sumIc / steps;
   const result: RectifierSimResult = {
     converged,
@@ -514,7 +587,9 @@ function simulateUncached(input: RectifierSimInput, startV?: number, onSteady?: 
     waveform: wf,
     note: null,
   };
-  if (!converged) result.note = `Steady state not reached within ${maxCycles} mains cycles; values are from the last cycle and may be off.`;
+  if (!converged)
+    result.note = `Steady state not reached within ${maxCycles} mains cycles; values are from the last cycle and may ` +
+      `be off.`;
   if (st.collapsed) result.note = 'The load pulls the reservoir down to 0 V: this supply cannot deliver this current.';
   return result;
 }

@@ -121,7 +121,8 @@ export function regulatedBleeder(inp: RegulatedBleederInput): RegulatedBleederRe
   };
 }
 
-const fmtOhm = (r: number) => (r >= 1000 ? `${Number((r / 1000).toPrecision(2))} kΩ` : `${Number(r.toPrecision(2))} Ω`);
+const fmtOhm = (r: number) => (r >= 1000 ? `${Number((r / 1000).toPrecision(2))} kΩ` : `${Number(r.toPrecision(2))}` +
+  ` Ω`);
 
 export function regulatedBleederFindings(railName: string, b: RegulatedBleederReport): Finding[] {
   const base = {

@@ -74,14 +74,37 @@ export function headroomFinding(rail: RegulatedRail, troughV: number, cornerLabe
   const vOut = regulatorOutputV(rail.setting, rail.quiescentA);
   const need = vOut + Math.max(0, rail.dropoutV);
   const headroom = troughV - vOut;
-  const base = { rule: 'regulator.headroom', subject: rail.name, value: troughV, limit: need, unit: 'V', source: SOURCE_DROPOUT };
+  const base = {
+    rule: 'regulator.headroom',
+    subject: rail.name,
+    value: troughV,
+    limit: need,
+    unit: 'V',
+    source: SOURCE_DROPOUT,
+  };
   if (troughV < need) {
-    return { ...base, severity: 'fail', message: `${cornerLabel}: the input dips to ${troughV.toFixed(2)} V but ${rail.name} needs ${need.toFixed(2)} V (output ${vOut.toFixed(2)} V + dropout ${rail.dropoutV.toFixed(2)} V); the output will drop out and carry ripple. Use a higher secondary voltage, more reservoir capacitance or a low-dropout regulator.` };
+    return {
+      ...base,
+      severity: 'fail',
+      message: `${cornerLabel}: the input dips to ${troughV.toFixed(2)} V but ${rail.name} needs ${need.toFixed(2)}` +
+        ` V (output ${vOut.toFixed(2)} V + dropout ${rail.dropoutV.toFixed(2)} V); the output will drop out and ` +
+        `carry ripple. Use a higher secondary voltage, more reservoir capacitance or a low-dropout regulator.`,
+    };
   }
   if (headroom - rail.dropoutV < 0.5) {
-    return { ...base, severity: 'caution', message: `${cornerLabel}: only ${(headroom - rail.dropoutV).toFixed(2)} V above dropout at the ripple trough; mains dips or a weaker transformer will make it drop out.` };
+    return {
+      ...base,
+      severity: 'caution',
+      message: `${cornerLabel}: only ${(headroom - rail.dropoutV).toFixed(2)} V above dropout at the ripple trough; ` +
+        `mains dips or a weaker transformer will make it drop out.`,
+    };
   }
-  return { ...base, severity: 'ok', message: `${cornerLabel}: the input stays ${(headroom - rail.dropoutV).toFixed(2)} V above what ${rail.name} needs at the ripple trough.` };
+  return {
+    ...base,
+    severity: 'ok',
+    message: `${cornerLabel}: the input stays ${(headroom - rail.dropoutV).toFixed(2)} V above what ${rail.name}` +
+      ` needs at the ripple trough.`,
+  };
 }
 
 /** Checks of the regulator's own ratings: maximum input voltage and output current. */
@@ -89,13 +112,41 @@ export function ratingFindings(rail: RegulatedRail, maxInputSeenV: number, maxOu
   const out: Finding[] = [];
   const vOut = regulatorOutputV(rail.setting, rail.quiescentA);
   if (!(vOut > 0)) {
-    out.push({ severity: 'fail', rule: 'regulator.setting', subject: rail.name, value: vOut, limit: null, unit: 'V', source: 'design.input', message: `The setting gives no usable output voltage; check the resistor values.` });
+    out.push({
+      severity: 'fail',
+      rule: 'regulator.setting',
+      subject: rail.name,
+      value: vOut,
+      limit: null,
+      unit: 'V',
+      source: 'design.input',
+      message: `The setting gives no usable output voltage; check the resistor values.`,
+    });
   }
   if (rail.maxInputV !== null && Number.isFinite(rail.maxInputV) && maxInputSeenV > rail.maxInputV) {
-    out.push({ severity: 'fail', rule: 'regulator.max-input', subject: rail.name, value: maxInputSeenV, limit: rail.maxInputV, unit: 'V', source: 'supply.regulator-max-input', message: `With no load at high mains the input reaches ${maxInputSeenV.toFixed(1)} V, above the ${rail.maxInputV} V maximum.` });
+    out.push({
+      severity: 'fail',
+      rule: 'regulator.max-input',
+      subject: rail.name,
+      value: maxInputSeenV,
+      limit: rail.maxInputV,
+      unit: 'V',
+      source: 'supply.regulator-max-input',
+      message: `With no load at high mains the input reaches ${maxInputSeenV.toFixed(1)} V, above the ` +
+        `${rail.maxInputV} V maximum.`,
+    });
   }
   if (rail.maxOutputA !== null && Number.isFinite(rail.maxOutputA) && maxOutputSeenA > rail.maxOutputA) {
-    out.push({ severity: 'fail', rule: 'regulator.max-output', subject: rail.name, value: maxOutputSeenA, limit: rail.maxOutputA, unit: 'A', source: 'design.maker-rating', message: `Key-down load ${maxOutputSeenA.toFixed(2)} A exceeds its ${rail.maxOutputA} A rating.` });
+    out.push({
+      severity: 'fail',
+      rule: 'regulator.max-output',
+      subject: rail.name,
+      value: maxOutputSeenA,
+      limit: rail.maxOutputA,
+      unit: 'A',
+      source: 'design.maker-rating',
+      message: `Key-down load ${maxOutputSeenA.toFixed(2)} A exceeds its ${rail.maxOutputA} A rating.`,
+    });
   }
   return out;
 }

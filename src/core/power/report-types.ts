@@ -32,7 +32,9 @@ export interface CornerSpec {
   /** Mains RMS voltage at this corner (V). */
   mainsV: number;
   load: CornerLoad;
-  /** Fraction of time the key is down for this load (0..1): keyDown 1, keyUp/receive 0, thermal = keying duty, tuneUp 1. */
+  /**
+   * Fraction of time the key is down for this load (0..1): keyDown 1, keyUp/receive 0, thermal = keying duty, tuneUp 1.
+   */
   duty: number;
   /** True for the corner with each transformer's secondary at the low end of its stated tolerance. */
   secondaryTolerance?: boolean;
@@ -154,7 +156,10 @@ export interface WindingFuseReport {
 /** The primary fuse against a winding fault reflected to the primary. */
 export interface PrimaryFaultCheck {
   windingName: string;
-  /** Smallest fault (shorted reservoir, low mains) reflected by the turns ratio (A RMS), load of other windings not added. */
+  /**
+   * Smallest fault (shorted reservoir, low mains) reflected by the turns ratio (A
+   * RMS), load of other windings not added.
+   */
   reflectedA: number;
   check: FaultCheck;
 }
@@ -162,7 +167,10 @@ export interface PrimaryFaultCheck {
 export interface WindingRecommendation {
   windingId: string;
   windingName: string;
-  /** Lowest rated secondary (V RMS at full load) keeping the trough above the rail requirement (V); null = no requirement. */
+  /**
+   * Lowest rated secondary (V RMS at full load) keeping the trough above the rail
+   * requirement (V); null = no requirement.
+   */
   minimumRatedV: number | null;
   /** Nearest standard secondary voltage at or above the minimum (V), null when beyond the list. */
   standardRatedV: number | null;
@@ -182,7 +190,10 @@ export interface WindingRecommendation {
   checkTroughV: number | null;
   /** A PA on this rail at that trough: its output (W) and its output with the fitted winding at low mains (W). */
   paAtCheck?: { stageName: string; railV: number; outputW: number; fittedOutputW: number };
-  /** This winding's share of the primary current, worst continuous key-down, referred by the turns ratio V_NL/V_mains (A). */
+  /**
+   * This winding's share of the primary current, worst continuous key-down,
+   * referred by the turns ratio V_NL/V_mains (A).
+   */
   primaryReferredA: number;
   /** 2 for a centre-tapped winding (two halves, each of ratedA), otherwise 1. */
   halves: number;

@@ -23,7 +23,8 @@ export function sharedPrimaryNetlist(input: JointInput, cycles: number, stepsPer
   input.windings.forEach((w, i) => {
     const k = w.secondaryVrms / input.primaryVrms;
     const rd = Math.max(w.diodeResistanceOhm, 1e-4);
-    const diode = (name: string, a: string, c: string) => `${name} ${a} ${c} I = max(V(${a},${c}) - ${num(w.diodeDropV)}, 0) / ${num(rd)}`;
+    const diode = (name: string, a: string, c: string) =>
+      `${name} ${a} ${c} I = max(V(${a},${c}) - ${num(w.diodeDropV)}, 0) / ${num(rd)}`;
     const rw = num(Math.max(w.ownOhm, 1e-6));
     const out = `out${i}`;
     const lw = w.ownH && w.ownH > 0 ? num(w.ownH) : null;
@@ -31,21 +32,50 @@ export function sharedPrimaryNetlist(input: JointInput, cycles: number, stepsPer
     const series = (r: string, from: string, to: string, via: string) =>
       lw ? [`${r} ${from} ${via} ${rw}`, `L${r} ${via} ${to} ${lw}`] : [`${r} ${from} ${to} ${rw}`];
     if (w.topology === 'bridge') {
-      lines.push(`E${i} p${i} n${i} pp 0 ${num(k)}`, ...series(`Rw${i}`, `p${i}`, `q${i}`, `m${i}`), `Vse${i} q${i} a${i} 0`, `F${i} pp 0 Vse${i} ${num(k)}`,
-        diode(`Ba${i}`, `a${i}`, out), diode(`Bb${i}`, `n${i}`, out), diode(`Bc${i}`, '0', `a${i}`), diode(`Bd${i}`, '0', `n${i}`),
-        `Rdn${i} n${i} 0 100Meg`, `Rda${i} a${i} 0 100Meg`);
+      lines.push(
+        `E${i} p${i} n${i} pp 0 ${num(k)}`,
+        ...series(`Rw${i}`, `p${i}`, `q${i}`, `m${i}`),
+        `Vse${i} q${i} a${i} 0`,
+        `F${i} pp 0 Vse${i} ${num(k)}`,
+        diode(`Ba${i}`, `a${i}`, out),
+        diode(`Bb${i}`, `n${i}`, out),
+        diode(`Bc${i}`, '0', `a${i}`),
+        diode(`Bd${i}`, '0', `n${i}`),
+        `Rdn${i} n${i} 0 100Meg`,
+        `Rda${i} a${i} 0 100Meg`,
+      );
     } else if (w.topology === 'centre-tap') {
-      lines.push(`E${i} p${i} 0 pp 0 ${num(k)}`, `Eb${i} pb${i} 0 pp 0 ${num(-k)}`,
-        ...series(`Rw${i}`, `p${i}`, `q${i}`, `m${i}`), ...series(`Rwb${i}`, `pb${i}`, `qb${i}`, `mb${i}`), `Vse${i} q${i} a${i} 0`, `Vseb${i} qb${i} b${i} 0`,
-        `F${i} pp 0 Vse${i} ${num(k)}`, `Fb${i} pp 0 Vseb${i} ${num(-k)}`,
-        diode(`Ba${i}`, `a${i}`, out), diode(`Bb${i}`, `b${i}`, out), `Rda${i} a${i} 0 100Meg`, `Rdb${i} b${i} 0 100Meg`);
+      lines.push(
+        `E${i} p${i} 0 pp 0 ${num(k)}`,
+        `Eb${i} pb${i} 0 pp 0 ${num(-k)}`,
+        ...series(`Rw${i}`, `p${i}`, `q${i}`, `m${i}`),
+        ...series(`Rwb${i}`, `pb${i}`, `qb${i}`, `mb${i}`),
+        `Vse${i} q${i} a${i} 0`,
+        `Vseb${i} qb${i} b${i} 0`,
+        `F${i} pp 0 Vse${i} ${num(k)}`,
+        `Fb${i} pp 0 Vseb${i} ${num(-k)}`,
+        diode(`Ba${i}`, `a${i}`, out),
+        diode(`Bb${i}`, `b${i}`, out),
+        `Rda${i} a${i} 0 100Meg`,
+        `Rdb${i} b${i} 0 100Meg`,
+      );
     } else {
-      lines.push(`E${i} p${i} 0 pp 0 ${num(k)}`, ...series(`Rw${i}`, `p${i}`, `q${i}`, `m${i}`), `Vse${i} q${i} a${i} 0`, `F${i} pp 0 Vse${i} ${num(k)}`,
-        diode(`Ba${i}`, `a${i}`, out), `Rda${i} a${i} 0 100Meg`);
+      lines.push(
+        `E${i} p${i} 0 pp 0 ${num(k)}`,
+        ...series(`Rw${i}`, `p${i}`, `q${i}`, `m${i}`),
+        `Vse${i} q${i} a${i} 0`,
+        `F${i} pp 0 Vse${i} ${num(k)}`,
+        diode(`Ba${i}`, `a${i}`, out),
+        `Rda${i} a${i} 0 100Meg`,
+      );
     }
     const ic = Math.max(0, k * vpk - (w.topology === 'bridge' ? 2 : 1) * w.diodeDropV);
-    lines.push(`Resr${i} ${out} c${i} ${num(Math.max(w.esrOhm, 1e-6))}`, `C${i} c${i} 0 ${num(w.capacitanceF)} IC=${num(ic)}`,
-      `Rdo${i} ${out} 0 100Meg`, `Il${i} ${out} 0 DC ${num(w.loadA)}`);
+    lines.push(
+      `Resr${i} ${out} c${i} ${num(Math.max(w.esrOhm, 1e-6))}`,
+      `C${i} c${i} 0 ${num(w.capacitanceF)} IC=${num(ic)}`,
+      `Rdo${i} ${out} 0 100Meg`,
+      `Il${i} ${out} 0 DC ${num(w.loadA)}`,
+    );
     if (w.bleederOhm && w.bleederOhm > 0) lines.push(`Rbl${i} ${out} 0 ${num(w.bleederOhm)}`);
   });
   const t1 = num((cycles - 1) * period);

@@ -37,7 +37,10 @@ const num = (x: number) => (Number.isFinite(x) ? Number(x.toPrecision(8)).toStri
  */
 export function settleCycles(input: RectifierSimInput): number {
   const f = input.frequencyHz > 0 ? input.frequencyHz : 50;
-  const i = input.load.kind === 'current' ? input.load.currentA : (Math.SQRT2 * input.secondaryVrms) / Math.max(input.load.resistanceOhm, 1e-3);
+  const i =
+    input.load.kind === 'current'
+      ? input.load.currentA
+      : (Math.SQRT2 * input.secondaryVrms) / Math.max(input.load.resistanceOhm, 1e-3);
   const rPath = Math.max(input.windingResistanceOhm + 2 * input.diodeResistanceOhm + input.esrOhm, 1e-3);
   // charging time constant stretched by a ~25 % conduction fraction; droop of ~1 V at I/C V/s
   const tauS = (input.capacitanceF * rPath) / 0.25;
@@ -58,9 +61,12 @@ export function rectifierNetlist(input: RectifierSimInput, options: NetlistOptio
   const esr = Math.max(input.esrOhm, 1e-6);
   const n = diodesInPath(input.topology);
   const ic = Math.max(0, vpk - n * vf);
-  const diode = (name: string, a: string, k: string) => `${name} ${a} ${k} I = max(V(${a},${k}) - ${num(vf)}, 0) / ${num(rd)}`;
+  const diode = (name: string, a: string, k: string) =>
+    `${name} ${a} ${k} I = max(V(${a},${k}) - ${num(vf)}, 0) / ${num(rd)}`;
   const lines: string[] = [
-    `* ${oneLine(options.title ?? `${input.topology} rectifier, ${num(input.secondaryVrms)} V rms open circuit, ${num(f)} Hz`)}`,
+    `* ${oneLine(
+      options.title ?? `${input.topology} rectifier, ${num(input.secondaryVrms)} V rms open circuit, ${num(f)} Hz`,
+    )}`,
     `* Diodes: behavioural I = max(Vak - ${num(vf)} V, 0) / ${num(rd)} ohm (piecewise-linear Vf + r_d model).`,
     `* Results: .meas over the last whole cycle (${cycles} cycles simulated from the no-load peak).`,
   ];
@@ -92,7 +98,14 @@ export function rectifierNetlist(input: RectifierSimInput, options: NetlistOptio
       `Rdc2 b 0 100Meg`,
     );
   } else {
-    lines.push(`Vs p 0 SIN(0 ${num(vpk)} ${num(f)})`, `Rw p p1 ${num(rw)}`, `Vsense p1 a 0`, `Vd1 a d1 0`, diode('B1', 'd1', 'out'), `Rdc1 a 0 100Meg`);
+    lines.push(
+      `Vs p 0 SIN(0 ${num(vpk)} ${num(f)})`,
+      `Rw p p1 ${num(rw)}`,
+      `Vsense p1 a 0`,
+      `Vd1 a d1 0`,
+      diode('B1', 'd1', 'out'),
+      `Rdc1 a 0 100Meg`,
+    );
   }
   lines.push(`Resr out c1 ${num(esr)}`, `C1 c1 0 ${num(input.capacitanceF)} IC=${num(ic)}`, `Rdc3 out 0 100Meg`);
   if (input.load.kind === 'current') lines.push(`Iload out 0 DC ${num(input.load.currentA)}`);
@@ -121,6 +134,16 @@ export function oneLine(text: string): string {
 }
 
 /** Netlist of a project's rectified rail at a mains factor and load current (A). */
-export function railNetlist(rail: RectifiedRail, winding: Winding, frequencyHz: number, mainsFactor: number, loadA: number, options: NetlistOptions = {}): string {
-  return rectifierNetlist(simInputFor(rail, winding, frequencyHz, mainsFactor, loadA), { title: `${rail.name}: mains x${mainsFactor}, ${loadA} A`, ...options });
+export function railNetlist(
+  rail: RectifiedRail,
+  winding: Winding,
+  frequencyHz: number,
+  mainsFactor: number,
+  loadA: number,
+  options: NetlistOptions = {},
+): string {
+  return rectifierNetlist(simInputFor(rail, winding, frequencyHz, mainsFactor, loadA), {
+    title: `${rail.name}: mains x${mainsFactor}, ${loadA} A`,
+    ...options,
+  });
 }

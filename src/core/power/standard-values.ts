@@ -15,13 +15,18 @@ export const DEFAULT_SECONDARY_V: readonly number[] = [
  * Off-the-shelf transformer ratings (VA).
  * Common practice, no published source: typical catalogue steps for laminated and toroidal types (from memory).
  */
-export const DEFAULT_TRANSFORMER_VA: readonly number[] = [3, 5, 10, 15, 20, 25, 30, 40, 50, 60, 80, 100, 120, 150, 160, 200, 225, 250, 300, 400, 500, 625, 800, 1000, 1500, 2000];
+export const DEFAULT_TRANSFORMER_VA: readonly number[] = [
+  3, 5, 10, 15, 20, 25, 30, 40, 50, 60, 80, 100, 120, 150, 160, 200, 225, 250, 300, 400, 500, 625, 800, 1000, 1500,
+  2000,
+];
 
 /**
  * Aluminium electrolytic capacitor voltage ratings (V d.c.).
  * Common practice, no published source: rating steps as listed by capacitor makers (from memory; ref §4.2 [M]).
  */
-export const DEFAULT_CAPACITOR_V: readonly number[] = [6.3, 10, 16, 25, 35, 50, 63, 80, 100, 160, 200, 250, 350, 400, 450, 500];
+export const DEFAULT_CAPACITOR_V: readonly number[] = [
+  6.3, 10, 16, 25, 35, 50, 63, 80, 100, 160, 200, 250, 350, 400, 450, 500,
+];
 
 /** Electrolytic capacitance steps per decade (E6 series), source: IEC 60063 E6 (1.0 1.5 2.2 3.3 4.7 6.8). */
 export const DEFAULT_CAPACITANCE_STEPS: readonly number[] = [1.0, 1.5, 2.2, 3.3, 4.7, 6.8];

@@ -20,18 +20,30 @@ export interface SupplyInputs {
 
 const SOURCE = 'design.input' as const;
 
-function refusals(spec: Spec | undefined, value: unknown, subject: string, what: string): { findings: Finding[]; ok: boolean } {
-  const errors: FieldError[] = spec ? validate(spec, value) : [{ field: 'kind', label: 'Kind', message: 'Kind must be rectified, regulated or battery' }];
-  const findings = errors.map(
-    (e): Finding => ({
-      severity: 'fail', rule: 'input.supply', subject: `${subject}: ${e.label}`, value: null, limit: null, unit: '', source: SOURCE,
-      message: `Stored value refused: ${e.message}. ${what} is left out of the supply design until it is corrected.`,
-    }),
-  );
+function refusals(
+  spec: Spec | undefined,
+  value: unknown,
+  subject: string,
+  what: string,
+): { findings: Finding[]; ok: boolean } {
+  const errors: FieldError[] = spec
+    ? validate(spec, value)
+    : [{ field: 'kind', label: 'Kind', message: 'Kind must be rectified, regulated or battery' }];
+  const findings = errors.map((e): Finding => ({
+    severity: 'fail',
+    rule: 'input.supply',
+    subject: `${subject}: ${e.label}`,
+    value: null,
+    limit: null,
+    unit: '',
+    source: SOURCE,
+    message: `Stored value refused: ${e.message}. ${what} is left out of the supply design until it is corrected.`,
+  }));
   return { findings, ok: errors.length === 0 };
 }
 
-const quoted = (name: unknown, fallback: string) => (typeof name === 'string' && name.trim() ? `“${name}”` : fallback);
+const quoted = (name: unknown, fallback: string) => (typeof name === 'string' && name.trim() ? `“${name}` +
+  `”` : fallback);
 
 export function checkSupplyInputs(supply: Supply): SupplyInputs {
   const findings: Finding[] = [];
@@ -62,25 +74,40 @@ export function checkSupplyInputs(supply: Supply): SupplyInputs {
     const res = refusals(RAIL_SPECS[r.kind], r, `Rail ${quoted(r.name, r.id)}`, `The rail ${quoted(r.name, r.id)}`);
     findings.push(...res.findings);
     if (!res.ok) refused.add(r.id);
-    else if (r.kind === 'rectified' && badWindings.has(r.windingId)) fromBadWinding.set(r.id, badWindings.get(r.windingId)!);
+    else if (r.kind === 'rectified' && badWindings.has(r.windingId))
+      fromBadWinding.set(r.id, badWindings.get(r.windingId)!);
   }
   const rootOf = treeRoots(supply.rails);
   const firstCause = new Map<string, string>(); // tree root -> the first rail of that tree with a cause
-  for (const r of supply.rails) if ((refused.has(r.id) || fromBadWinding.has(r.id)) && !firstCause.has(rootOf(r.id))) firstCause.set(rootOf(r.id), r.id);
+  for (const r of supply.rails)
+    if ((refused.has(r.id) || fromBadWinding.has(r.id)) && !firstCause.has(rootOf(r.id)))
+      firstCause.set(rootOf(r.id), r.id);
   const leftOut = new Map<string, string>();
   for (const r of supply.rails) {
     const causeId = firstCause.get(rootOf(r.id));
     if (causeId === undefined) continue;
     if (refused.has(r.id)) leftOut.set(r.id, 'its stored inputs were refused (see the findings naming its fields).');
-    else if (fromBadWinding.has(r.id)) leftOut.set(r.id, `it is rectified from ${fromBadWinding.get(r.id)}, which was refused.`);
+    else if (fromBadWinding.has(r.id))
+      leftOut.set(r.id, `it is rectified from ${fromBadWinding.get(r.id)}, which was refused.`);
     else {
-      const what = refused.has(causeId) ? 'whose inputs were refused' : `which is rectified from ${fromBadWinding.get(causeId)}, refused`;
-      leftOut.set(r.id, `it shares its supply tree with ${railWords(supply.rails, causeId)}, ${what}; its voltages and needs are unknown too.`);
+      const what = refused.has(causeId)
+        ? 'whose inputs were refused'
+        : `which is rectified from ${fromBadWinding.get(causeId)}, refused`;
+      leftOut.set(
+        r.id,
+        `it shares its supply tree with ${railWords(supply.rails, causeId)}, ${what}; its voltages and needs are ` +
+          `unknown too.`,
+      );
     }
   }
   // a transformer whose winding feeds a left-out rail is unsized by the caller (as for an unknown load)
 
-  const fuse = refusals(primaryFuseSpec, { primaryFuseA: supply.primaryFuseA }, 'Primary fuse', 'The fitted primary fuse');
+  const fuse = refusals(
+    primaryFuseSpec,
+    { primaryFuseA: supply.primaryFuseA },
+    'Primary fuse',
+    'The fitted primary fuse',
+  );
   findings.push(...fuse.findings);
   return { findings, leftOut, unsized, primaryFuseOk: fuse.ok };
 }
