@@ -64,8 +64,16 @@ export interface ComputedLoad {
 }
 
 const zero = (): PerMode => ({ receive: 0, keyUp: 0, keyDown: 0 });
-const add = (a: PerMode, b: PerMode): PerMode => ({ receive: a.receive + b.receive, keyUp: a.keyUp + b.keyUp, keyDown: a.keyDown + b.keyDown });
-const map = (a: PerMode, f: (v: number, m: Mode) => number): PerMode => ({ receive: f(a.receive, 'receive'), keyUp: f(a.keyUp, 'keyUp'), keyDown: f(a.keyDown, 'keyDown') });
+const add = (a: PerMode, b: PerMode): PerMode => ({
+  receive: a.receive + b.receive,
+  keyUp: a.keyUp + b.keyUp,
+  keyDown: a.keyDown + b.keyDown,
+});
+const map = (a: PerMode, f: (v: number, m: Mode) => number): PerMode => ({
+  receive: f(a.receive, 'receive'),
+  keyUp: f(a.keyUp, 'keyUp'),
+  keyDown: f(a.keyDown, 'keyDown'),
+});
 
 /** Modes in which a rail's current is unknown (a computed load could not be computed). */
 export function unknownModes(a: PerMode): Mode[] {
@@ -78,7 +86,8 @@ export function railNominalV(rail: Rail, project: Project): number {
   if (rail.kind === 'regulated') return regulatorOutputV(rail.setting, rail.quiescentA);
   const winding = project.supply.transformers.flatMap((t) => t.windings).find((w) => w.id === rail.windingId);
   if (!winding) return NaN; // the supply design fails the rail for it; shown as unknown, not 0 V
-  // Capacitor-input rectifier: DC ~ peak of the rated secondary minus the conducting diode drops (REFERENCE-VALUES §4.1)
+  // Capacitor-input rectifier: DC ~ peak of the rated secondary minus the
+  // conducting diode drops (REFERENCE-VALUES §4.1)
   return Math.max(0, rectifiedEstimateV(winding.ratedVrms, rail.topology, rail.diodeDropV));
 }
 
@@ -90,7 +99,11 @@ function railLowestV(rail: Rail, project: Project): number {
   return railNominalV(rail, project) * low;
 }
 
-export function computeBudget(project: Project, computed: ComputedLoad[] = [], inputVOverride: Record<string, number> = {}): BudgetReport {
+export function computeBudget(
+  project: Project,
+  computed: ComputedLoad[] = [],
+  inputVOverride: Record<string, number> = {},
+): BudgetReport {
   const findings: Finding[] = [];
   const rails = project.supply.rails;
   const byId = new Map(rails.map((r) => [r.id, r]));
@@ -98,10 +111,18 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
   const loads = new Map<string, LoadContribution[]>(rails.map((r) => [r.id, []]));
 
   const noRail = (stageName: string, railId: string, what: string): Finding => ({
-    severity: 'fail', rule: 'budget.no-rail', subject: `${stageName}: ${what}`, value: null, limit: null, unit: 'A', source: 'design.consistency',
-    message: railId === ''
-      ? `${stageName} draws current (${what}) from no rail, so no rail's budget carries it. Choose its rail.`
-      : `${stageName} draws current (${what}) from a rail that is not in this project's supply, so no rail's budget carries it. Choose its rail.`,
+    severity: 'fail',
+    rule: 'budget.no-rail',
+    subject: `${stageName}: ${what}`,
+    value: null,
+    limit: null,
+    unit: 'A',
+    source: 'design.consistency',
+    message:
+      railId === ''
+        ? `${stageName} draws current (${what}) from no rail, so no rail's budget carries it. Choose its rail.`
+        : `${stageName} draws current (${what}) from a rail that is not in this project's supply, so no rail's ` +
+          `budget carries it. Choose its rail.`,
   });
   for (const stage of project.stages) {
     for (const load of stage.loads) {
@@ -109,7 +130,9 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
         if (MODES.some((m) => load.currentA[m] !== 0)) findings.push(noRail(stage.name, load.railId, 'entered load'));
         continue;
       }
-      const replaced = computed.filter((c) => c.stageId === stage.id && c.railId === load.railId).flatMap((c) => c.replaces);
+      const replaced = computed
+        .filter((c) => c.stageId === stage.id && c.railId === load.railId)
+        .flatMap((c) => c.replaces);
       const current = map(load.currentA, (v, m) => (replaced.includes(m) ? 0 : v));
       own.set(load.railId, add(own.get(load.railId)!, current));
       loads.get(load.railId)!.push({ stageId: stage.id, stageName: stage.name, currentA: current, computed: false });
@@ -124,7 +147,9 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
       continue;
     }
     own.set(c.railId, add(own.get(c.railId)!, c.currentA));
-    loads.get(c.railId)!.push({ stageId: c.stageId, stageName: stage?.name ?? c.stageId, currentA: c.currentA, computed: true });
+    loads
+      .get(c.railId)!
+      .push({ stageId: c.stageId, stageName: stage?.name ?? c.stageId, currentA: c.currentA, computed: true });
   }
 
   // Children of each rail; detect cycles (a regulator fed, through others, by itself).
@@ -182,13 +207,31 @@ export function computeBudget(project: Project, computed: ComputedLoad[] = [], i
       });
     }
     if (r.kind === 'regulated' && !byId.has(r.parentId)) {
-      findings.push({ severity: 'fail', rule: 'supply.parent', subject: r.name, value: null, limit: null, unit: '', source: 'design.consistency', message: `${r.name} has no source rail.` });
+      findings.push({
+        severity: 'fail',
+        rule: 'supply.parent',
+        subject: r.name,
+        value: null,
+        limit: null,
+        unit: '',
+        source: 'design.consistency',
+        message: `${r.name} has no source rail.`,
+      });
     }
     const out = d < 0 ? zero() : outputOf(r);
     const v = railNominalV(r, project);
     if (Number.isNaN(v)) {
-      findings.push({ severity: 'fail', rule: 'budget.rail-voltage', subject: r.name, value: null, limit: null, unit: 'V', source: 'design.consistency',
-        message: `${r.name} has no transformer winding, so its voltage and the power it delivers are unknown; choose its winding.` });
+      findings.push({
+        severity: 'fail',
+        rule: 'budget.rail-voltage',
+        subject: r.name,
+        value: null,
+        limit: null,
+        unit: 'V',
+        source: 'design.consistency',
+        message: `${r.name} has no transformer winding, so its voltage and the power it delivers are unknown; choose ` +
+          `its winding.`,
+      });
     }
     result.push({
       railId: r.id,

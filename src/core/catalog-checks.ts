@@ -32,7 +32,9 @@ export function catalogFindings(project: Project, supply: SupplyReport | null): 
           limit: null,
           unit: 'F',
           source: 'design.parts-list',
-          message: 'No reservoir capacitor on the parts list has this capacitance (with its capacitance entered as a rating); check the part you buy by hand.',
+          message:
+            'No reservoir capacitor on the parts list has this capacitance (with its capacitance entered as a ' +
+              'rating); check the part you buy by hand.',
         });
       continue;
     }
@@ -46,17 +48,69 @@ export function catalogFindings(project: Project, supply: SupplyReport | null): 
       const a = num(part.ratings.rippleA);
       const subject = `${part.description} (${rail.railName})`;
       if (v === null || a === null) {
-        out.push({ severity: 'caution', rule: 'catalog.reservoir-ratings', subject, value: null, limit: null, unit: '', source: 'design.parts-list', message: 'Enter the rated voltage and the ripple current (RMS) of this catalog part on the parts catalog page so it can be checked against the design.' });
+        out.push({
+          severity: 'caution',
+          rule: 'catalog.reservoir-ratings',
+          subject,
+          value: null,
+          limit: null,
+          unit: '',
+          source: 'design.parts-list',
+          message:
+            'Enter the rated voltage and the ripple current (RMS) of this catalog part on the parts catalog page so ' +
+              'it can be checked against the design.',
+        });
         continue;
       }
       if (v < rail.reservoir.noLoadPeakHighV)
-        out.push({ severity: 'fail', rule: 'catalog.reservoir-voltage', subject, value: v, limit: rail.reservoir.noLoadPeakHighV, unit: 'V', source: 'supply.capacitor-voltage', message: `Rated ${v} V but the rail reaches ${rail.reservoir.noLoadPeakHighV.toFixed(1)} V with no load at high mains: choose a higher-voltage part.` });
+        out.push({
+          severity: 'fail',
+          rule: 'catalog.reservoir-voltage',
+          subject,
+          value: v,
+          limit: rail.reservoir.noLoadPeakHighV,
+          unit: 'V',
+          source: 'supply.capacitor-voltage',
+          message: `Rated ${v} V but the rail reaches ${rail.reservoir.noLoadPeakHighV.toFixed(1)} V with no load at ` +
+            `high mains: choose a higher-voltage part.`,
+        });
       else if (v < needV)
-        out.push({ severity: 'caution', rule: 'catalog.reservoir-voltage', subject, value: v, limit: needV, unit: 'V', source: 'supply.capacitor-voltage', message: `Rated ${v} V, under 20 % above the ${rail.reservoir.noLoadPeakHighV.toFixed(1)} V no-load peak (${needV.toFixed(1)} V); mains surges can exceed it${rail.reservoir.recommendedRatedV !== null ? `: choose ${rail.reservoir.recommendedRatedV} V` : ''}.` });
+        out.push({
+          severity: 'caution',
+          rule: 'catalog.reservoir-voltage',
+          subject,
+          value: v,
+          limit: needV,
+          unit: 'V',
+          source: 'supply.capacitor-voltage',
+          message: `Rated ${v} V, under 20 % above the ${rail.reservoir.noLoadPeakHighV.toFixed(1)} V no-load peak ` +
+            `(${needV.toFixed(1)} V); mains surges can exceed ` +
+            `it${rail.reservoir.recommendedRatedV !== null ? `: choose ${rail.reservoir.recommendedRatedV} V` : ''}.`,
+        });
       if (a < needA)
-        out.push({ severity: 'fail', rule: 'catalog.reservoir-ripple', subject, value: a, limit: needA, unit: 'A', source: 'supply.capacitor-ripple', message: `Ripple rating ${a} A RMS is below the ${needA.toFixed(2)} A it carries in CW operation: it will run hot and age early.` });
+        out.push({
+          severity: 'fail',
+          rule: 'catalog.reservoir-ripple',
+          subject,
+          value: a,
+          limit: needA,
+          unit: 'A',
+          source: 'supply.capacitor-ripple',
+          message: `Ripple rating ${a} A RMS is below the ${needA.toFixed(2)} A it carries in CW operation: it will ` +
+            `run hot and age early.`,
+        });
       if (v >= needV && a >= needA)
-        out.push({ severity: 'ok', rule: 'catalog.reservoir', subject, value: v, limit: needV, unit: 'V', source: 'design.parts-list', message: `The listed part (${v} V, ${a} A ripple) covers this rail (${needV.toFixed(1)} V with margin, ${needA.toFixed(2)} A).` });
+        out.push({
+          severity: 'ok',
+          rule: 'catalog.reservoir',
+          subject,
+          value: v,
+          limit: needV,
+          unit: 'V',
+          source: 'design.parts-list',
+          message: `The listed part (${v} V, ${a} A ripple) covers this rail (${needV.toFixed(1)} V with margin, ` +
+            `${needA.toFixed(2)} A).`,
+        });
     }
   }
   return out;

@@ -77,7 +77,12 @@ function paRailVoltages(project: Project, budget: BudgetReport, supply: PassSupp
  * while the PA is unkeyed, and the first key-down cycles see it) and its high-mains key-down mean; a battery's
  * full-charge voltage for both. Common practice, no published source (worst-case corners of the supply).
  */
-function paRailCorners(project: Project, supply: PassSupply | null): { maxV: Record<string, number>; hotV: Record<string, number>; lowV: Record<string, number>; battery: Record<string, boolean> } {
+function paRailCorners(project: Project, supply: PassSupply | null): {
+  maxV: Record<string, number>;
+  hotV: Record<string, number>;
+  lowV: Record<string, number>;
+  battery: Record<string, boolean>;
+} {
   const maxV: Record<string, number> = {};
   const hotV: Record<string, number> = {};
   const lowV: Record<string, number> = {};
@@ -90,7 +95,8 @@ function paRailCorners(project: Project, supply: PassSupply | null): { maxV: Rec
       const hot = r.corners.find((c) => c.id === 'high-keyDown');
       const low = r.corners.find((c) => c.id === 'low-keyDown');
       if (low && Number.isFinite(low.troughV) && low.troughV > 0) lowV[id] = low.troughV;
-      if (Number.isFinite(r.reservoir.noLoadPeakHighV) && r.reservoir.noLoadPeakHighV > 0) maxV[id] = r.reservoir.noLoadPeakHighV;
+      if (Number.isFinite(r.reservoir.noLoadPeakHighV) && r.reservoir.noLoadPeakHighV > 0)
+        maxV[id] = r.reservoir.noLoadPeakHighV;
       if (hot && Number.isFinite(hot.dcMeanV) && hot.dcMeanV > 0) hotV[id] = hot.dcMeanV;
     } else if (r?.kind === 'battery' && Number.isFinite(r.fullV) && r.fullV > 0) {
       battery[id] = true;
@@ -118,13 +124,25 @@ function computedLoads(project: Project, paRailV: Record<string, number>): Compu
       const kd = memo?.get(key) ?? paKeyDownCurrentA(s.pa, railV, project, s.name);
       memo?.set(key, kd);
       const findings = kd.ok ? [] : [paUnknownFinding(s.name, kd.findings)];
-      loads.push({ stageId: s.id, railId: s.pa.railId, currentA: { receive: 0, keyUp: 0, keyDown: kd.ok ? kd.currentA : NaN }, replaces: ['keyDown'], findings });
+      loads.push({
+        stageId: s.id,
+        railId: s.pa.railId,
+        currentA: { receive: 0, keyUp: 0, keyDown: kd.ok ? kd.currentA : NaN },
+        replaces: ['keyDown'],
+        findings,
+      });
     }
     const coil = relayCoilLoads(s, railIds);
     if (!coil.ok) {
       // the coil's rail is unknown or refused: no rail can carry it; the finding keeps it from leaving silently
       const unknown = Object.fromEntries(MODES.map((m) => [m, s.relay?.coilModes.includes(m) ? NaN : 0])) as PerMode;
-      loads.push({ stageId: s.id, railId: s.relay?.coilRailId ?? '', currentA: unknown, replaces: [], findings: coil.findings });
+      loads.push({
+        stageId: s.id,
+        railId: s.relay?.coilRailId ?? '',
+        currentA: unknown,
+        replaces: [],
+        findings: coil.findings,
+      });
     } else if (coil.load) {
       loads.push({ stageId: s.id, railId: coil.load.railId, currentA: coil.load.currentA, replaces: [] });
     }
@@ -134,11 +152,20 @@ function computedLoads(project: Project, paRailV: Record<string, number>): Compu
 
 /** The PA's key-down current is unknown: say which stage and which inputs core refused. */
 function paUnknownFinding(stageName: string, refused: Finding[]): Finding {
-  const fields = refused.map((f) => f.subject.replace(`${stageName}: `, '')).filter((x, i, a) => x !== stageName && a.indexOf(x) === i);
+  const fields = refused
+    .map((f) => f.subject.replace(`${stageName}: `, ''))
+    .filter((x, i, a) => x !== stageName && a.indexOf(x) === i);
   const reasons = refused.map((f) => f.message).join(' ');
   return {
-    severity: 'fail', rule: 'budget.pa-current', subject: `${stageName}: PA key-down current`, value: null, limit: null, unit: 'A', source: 'design.input',
-    message: `The PA key-down current cannot be computed${fields.length ? ` (refused: ${fields.join(', ')})` : ''}, so the key-down budget of its rail is unknown and its supply is not designed. ${reasons}`,
+    severity: 'fail',
+    rule: 'budget.pa-current',
+    subject: `${stageName}: PA key-down current`,
+    value: null,
+    limit: null,
+    unit: 'A',
+    source: 'design.input',
+    message: `The PA key-down current cannot be computed${fields.length ? ` (refused: ${fields.join(', ')})` : ''}` +
+      `, so the key-down budget of its rail is unknown and its supply is not designed. ${reasons}`,
   };
 }
 
@@ -153,9 +180,11 @@ const SETTLED_V = 0.005;
 const MAX_PASSES = 6;
 
 /** Every voltage in `next` within SETTLED_V of the one before. */
-const close = (next: Record<string, number>, prev: Record<string, number>) => Object.keys(next).every((id) => Math.abs(next[id] - (prev[id] ?? 0)) < SETTLED_V);
+const close = (next: Record<string, number>, prev: Record<string, number>) =>
+  Object.keys(next).every((id) => Math.abs(next[id] - (prev[id] ?? 0)) < SETTLED_V);
 
-const railOutputs = (b: BudgetReport): Record<string, PerMode> => Object.fromEntries(b.rails.map((r) => [r.railId, r.outputA]));
+const railOutputs = (b: BudgetReport): Record<string, PerMode> =>
+  Object.fromEntries(b.rails.map((r) => [r.railId, r.outputA]));
 
 /**
  * Lowest simulated voltage of each source rail (low mains / battery end, key-down trough), V. A switching regulator
@@ -164,7 +193,9 @@ const railOutputs = (b: BudgetReport): Record<string, PerMode> => Object.fromEnt
  */
 function lowestInputV(project: Project, supply: PassSupply | null): Record<string, number> {
   const out: Record<string, number> = {};
-  const feedsSwitching = new Set(project.supply.rails.flatMap((r) => (r.kind === 'regulated' && r.regulator === 'switching' ? [r.parentId] : [])));
+  const feedsSwitching = new Set(
+    project.supply.rails.flatMap((r) => (r.kind === 'regulated' && r.regulator === 'switching' ? [r.parentId] : [])),
+  );
   for (const r of supply?.rails ?? []) {
     if ((r.kind !== 'rectified' && r.kind !== 'battery') || !feedsSwitching.has(r.railId)) continue;
     const low = r.kind === 'rectified' ? r.corners.find((c) => c.id === 'low-keyDown')?.troughV : r.loadedEndV;
@@ -223,20 +254,33 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   const designed = last && designSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA });
   if (designed) supply = supplyInAir(designed);
   budget = withSupplyVoltages(budget, supply);
-  const rfCtx = { paRailV, paRailMaxV: corners.maxV, paRailHotV: corners.hotV, paRailLowV: corners.lowV, paRailBattery: corners.battery };
+  const rfCtx = {
+    paRailV,
+    paRailMaxV: corners.maxV,
+    paRailHotV: corners.hotV,
+    paRailLowV: corners.lowV,
+    paRailBattery: corners.battery,
+  };
   // The air inside the enclosure is the ambient of every thermal check of a part in it (rectifiers, regulators, PA).
   // Its rise needs every heat source, none of which depends on the air, so it is found first (the PA's heat from the
   // same PA model) and the supply's checks in air finished again with it (the design does not depend on the air; the
   // reference path designs it again in full, its simulations memoised, for the equivalence tests).
   const s = project.supply;
-  const insideC = project.supply.rails.length && s.enclosureAreaM2 && s.enclosureUWPerM2K
-    ? heatBudget(supply, paHeatAhead(project, rfCtx), s.enclosureAreaM2, s.enclosureUWPerM2K, project.ambientC).insideC : null;
+  const insideC =
+    project.supply.rails.length && s.enclosureAreaM2 && s.enclosureUWPerM2K
+      ? heatBudget(supply, paHeatAhead(project, rfCtx), s.enclosureAreaM2, s.enclosureUWPerM2K, project.ambientC)
+          .insideC
+      : null;
   if (last && designed && insideC !== null) {
     supply = options.reference
       ? evaluateSupply(project, last.outputA, { highMainsOutputA: last.highMainsOutputA, insideC })
       : supplyInAir(designed, insideC);
   }
-  const rf = evaluateRf(project, { ...rfCtx, insideC: insideC ?? undefined, onMonteCarloProgress: options.onMonteCarloProgress });
+  const rf = evaluateRf(project, {
+    ...rfCtx,
+    insideC: insideC ?? undefined,
+    onMonteCarloProgress: options.onMonteCarloProgress,
+  });
   const cost = costProject(project);
   const roleList = designRoles(project, supply, rf);
   const roleCheck = checkRoles(project, roleList);
@@ -248,9 +292,30 @@ function evaluateOnce(project: Project, options: EvaluateOptions): EvaluationRep
   const recPa = withRecommendedPa(supply, project, rf);
   // the PA rail keyed from rest, with every load by its own law (the PA on its load line): after the RF model
   supply = withKeyingTransient(withBatteryPa(recPa.supply, project, rf), project, budget, rf);
-  const heat = project.supply.rails.length ? heatBudget(supply, paHeat(rf), project.supply.enclosureAreaM2, project.supply.enclosureUWPerM2K, project.ambientC) : null;
-  const findings = sortFindings([...checkProjectInputs(project), ...mains, ...budget.findings, ...(supply?.findings ?? []), ...(heat?.findings ?? []), ...catalog, ...rf.findings, ...cost.findings]);
-  return { budget, supply, heat, rf, cost, catalog, roles: { list: roleList, statuses: roleCheck.statuses }, paRailV, findings };
+  const heat = project.supply.rails.length
+    ? heatBudget(supply, paHeat(rf), project.supply.enclosureAreaM2, project.supply.enclosureUWPerM2K, project.ambientC)
+    : null;
+  const findings = sortFindings([
+    ...checkProjectInputs(project),
+    ...mains,
+    ...budget.findings,
+    ...(supply?.findings ?? []),
+    ...(heat?.findings ?? []),
+    ...catalog,
+    ...rf.findings,
+    ...cost.findings,
+  ]);
+  return {
+    budget,
+    supply,
+    heat,
+    rf,
+    cost,
+    catalog,
+    roles: { list: roleList, statuses: roleCheck.statuses },
+    paRailV,
+    findings,
+  };
 }
 
 /** Each PA's duty-averaged dissipation, all devices (W): the per-device average times the device count. */

@@ -64,7 +64,8 @@ export interface RectifiedRail {
   windingFuseA: number | null; // fitted fuse in the winding lead ahead of the rectifier, null = recommend one
   windingFuseSheet: FuseSheet; // its type (old rows and files read T3)
   bleederRatedW: number | null; // fitted bleeder's power rating, null = not stated
-  bridgeMount?: HeatsinkMount | null; // the rectifier package's thermal data, θsa null = no heatsink; null/absent = assumed
+  // the rectifier package's thermal data, θsa null = no heatsink; null/absent = assumed
+  bridgeMount?: HeatsinkMount | null;
   bridgeFreeAirKPerW?: number | null; // its θja in free air (no heatsink), K/W; null/absent = assumed
 }
 
@@ -170,8 +171,10 @@ export interface PaParams {
   imbalanceTypical?: number | null; // push-pull halves' mismatch (fraction), typical; null/absent = 0.05 assumed
   imbalanceWorst?: number | null; // same, worst; null/absent = 0.2 assumed
   deviceCossF?: number | null; // device output capacitance (class E: part of the shunt C), F; null/absent = not given
-  drainClampV?: number | null; // a drain clamp fitted (TVS or zener, drain to ground), its clamping voltage, V; null/absent = none
-  outputLeakageH?: number | null; // push-pull output transformer: leakage between the primary halves, H; null/absent = not given
+  // a drain clamp fitted (TVS or zener, drain to ground), its clamping voltage, V; null/absent = none
+  drainClampV?: number | null;
+  // push-pull output transformer: leakage between the primary halves, H; null/absent = not given
+  outputLeakageH?: number | null;
   transitionTimeS?: number | null; // class D drain-voltage rise/fall time, s; null/absent = 10 ns assumed
   outputCoreId?: string | null; // the output transformer's core (a catalog core id); null/absent = not given
   outputPrimaryTurns?: number | null; // turns of the transformer's full primary; null/absent = flux not checked
@@ -215,7 +218,9 @@ export interface CatalogCore {
   fluxLimitT: number; // the maker's peak flux density limit (heating) in that range
 }
 
-/** A toroidal core as entered on the filter: dimensions, material data and the wire wound on it (SI; null = not given). */
+/**
+ * A toroidal core as entered on the filter: dimensions, material data and the wire wound on it (SI; null = not given).
+ */
 export interface ToroidCore {
   outerDiameterM: number | null;
   innerDiameterM: number | null;
@@ -243,7 +248,8 @@ export interface RelayParams {
   receiverMaxInputW: number;
   txDelayS: number;
   wpm: number;
-  keyRiseS?: number | null; // keyed RF envelope 10–90 % rise, raised-cosine edges, s; 0 = hard keying; null = not given
+  // keyed RF envelope 10–90 % rise, raised-cosine edges, s; 0 = hard keying; null = not given
+  keyRiseS?: number | null;
   keyFallS?: number | null; // 10–90 % fall, s; null/absent = same as the rise
   keyShapingRcS?: number | null; // time constant of a single RC shaping network (exponential edges), s; null = none
 }

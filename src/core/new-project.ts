@@ -10,7 +10,13 @@ import { rfSettingsSpec } from './spec/rf-settings';
 
 export { MAINS_PRESETS } from './spec/settings';
 
-export function newProject(id: string, name: string, frequencyHz: number, targetPowerW: number, mains: Mains | null): Project {
+export function newProject(
+  id: string,
+  name: string,
+  frequencyHz: number,
+  targetPowerW: number,
+  mains: Mains | null,
+): Project {
   return {
     id,
     name,
@@ -42,14 +48,23 @@ function settingStart(): Pick<Project, 'ambientC' | 'currency' | 'kits' | 'keyin
 }
 
 /** A copy with fresh ids for every row, so it can live beside the original. */
-export function cloneProject(p: Project, newProjectId: string, name: string, makeId: (prefix: string) => string): Project {
+export function cloneProject(
+  p: Project,
+  newProjectId: string,
+  name: string,
+  makeId: (prefix: string) => string,
+): Project {
   const map = new Map<string, string>();
   const remap = (old: string, prefix: string) => {
     if (!map.has(old)) map.set(old, makeId(prefix));
     return map.get(old)!;
   };
   const r = (old: string) => map.get(old) ?? old;
-  const transformers = p.supply.transformers.map((t) => ({ ...t, id: remap(t.id, 'tr'), windings: t.windings.map((w) => ({ ...w, id: remap(w.id, 'w') })) }));
+  const transformers = p.supply.transformers.map((t) => ({
+    ...t,
+    id: remap(t.id, 'tr'),
+    windings: t.windings.map((w) => ({ ...w, id: remap(w.id, 'w') })),
+  }));
   p.supply.rails.forEach((rail) => remap(rail.id, 'rail'));
   p.stages.forEach((s) => remap(s.id, 'st'));
   p.parts.forEach((x) => remap(x.id, 'part'));
@@ -64,16 +79,41 @@ export function cloneProject(p: Project, newProjectId: string, name: string, mak
     ...structuredClone(s),
     id: r(s.id),
     loads: s.loads.map((l) => ({ ...l, railId: r(l.railId) })),
-    ...(s.pa ? { pa: { ...s.pa, railId: r(s.pa.railId), ...(s.pa.outputCoreId ? { outputCoreId: r(s.pa.outputCoreId) } : {}) } } : {}),
+    ...(s.pa
+      ? {
+          pa: { ...s.pa, railId: r(s.pa.railId), ...(s.pa.outputCoreId ? { outputCoreId: r(s.pa.outputCoreId) } : {}) },
+        }
+      : {}),
     ...(s.lpf ? { lpf: { ...structuredClone(s.lpf), ...(s.lpf.coreId ? { coreId: r(s.lpf.coreId) } : {}) } } : {}),
     ...(s.relay ? { relay: { ...s.relay, coilRailId: s.relay.coilRailId ? r(s.relay.coilRailId) : null } } : {}),
   }));
-  const parts = p.parts.map((x) => ({ ...structuredClone(x), id: r(x.id), offers: x.offers.map((o) => ({ ...o, id: makeId('of') })) }));
+  const parts = p.parts.map((x) => ({
+    ...structuredClone(x),
+    id: r(x.id),
+    offers: x.offers.map((o) => ({ ...o, id: makeId('of') })),
+  }));
   // a design role names the item it belongs to ("reservoir:<rail id>"): the binding follows the item's new id
-  const role = (id: string | null | undefined) => (id ? id.replace(/^([^:]+):(.+)$/, (_m, kind: string, item: string) => `${kind}:${r(item)}`) : id);
-  const bom = p.bom.map((b) => ({ ...b, id: makeId('bl'), partId: r(b.partId), stageId: b.stageId ? r(b.stageId) : null, ...(b.roleId !== undefined ? { roleId: role(b.roleId) } : {}) }));
+  const role = (id: string | null | undefined) =>
+    id ? id.replace(/^([^:]+):(.+)$/, (_m, kind: string, item: string) => `${kind}:${r(item)}`) : id;
+  const bom = p.bom.map((b) => ({
+    ...b,
+    id: makeId('bl'),
+    partId: r(b.partId),
+    stageId: b.stageId ? r(b.stageId) : null,
+    ...(b.roleId !== undefined ? { roleId: role(b.roleId) } : {}),
+  }));
   const cores = p.cores?.map((c) => ({ ...c, id: r(c.id) }));
-  return { ...structuredClone(p), id: newProjectId, name, version: 1, supply: { ...p.supply, transformers, rails }, stages, parts, bom, ...(cores ? { cores } : {}) };
+  return {
+    ...structuredClone(p),
+    id: newProjectId,
+    name,
+    version: 1,
+    supply: { ...p.supply, transformers, rails },
+    stages,
+    parts,
+    bom,
+    ...(cores ? { cores } : {}),
+  };
 }
 
 // Starting values for a new final, filter or relay stage come from their field specs (the spec's defaults); the

@@ -61,5 +61,8 @@ export function relayCoilDefaultRailId(project: Pick<Project, 'supply'>): string
       .filter((x) => x.v >= SIGNAL_RAIL_MIN_V)
       .reduce<{ r: Rail; v: number } | null>((a, b) => (a === null || b.v < a.v ? b : a), null)?.r.id ?? null;
   const rails = project.supply.rails;
-  return lowest(rails.filter((r) => r.kind === 'regulated')) ?? lowest(rails.filter((r) => r.kind === 'battery' || !inputs.has(r.id)));
+  return (
+    lowest(rails.filter((r) => r.kind === 'regulated')) ??
+    lowest(rails.filter((r) => r.kind === 'battery' || !inputs.has(r.id)))
+  );
 }

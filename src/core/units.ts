@@ -17,7 +17,21 @@ const PREFIX: Record<string, number> = {
 
 // Source: IEC 60062:2016 (RKM code), via its published examples: R = 1, L = 1e-3, K = 1e3, M = 1e6, G = 1e9
 // for resistance; p n u/µ m for capacitance. The letter stands where the decimal point would be.
-const RKM_LETTER: Record<string, number> = { L: 1e-3, R: 1, r: 1, K: 1e3, k: 1e3, M: 1e6, G: 1e9, p: 1e-12, n: 1e-9, u: 1e-6, µ: 1e-6, μ: 1e-6, m: 1e-3 };
+const RKM_LETTER: Record<string, number> = {
+  L: 1e-3,
+  R: 1,
+  r: 1,
+  K: 1e3,
+  k: 1e3,
+  M: 1e6,
+  G: 1e9,
+  p: 1e-12,
+  n: 1e-9,
+  u: 1e-6,
+  µ: 1e-6,
+  μ: 1e-6,
+  m: 1e-3,
+};
 
 /** Unit symbols a field may carry, with aliases as a builder would type them. */
 const UNIT_ALIASES: Record<string, string[]> = {
@@ -62,7 +76,11 @@ export function parseValue(input: string, unit: string): ParseResult {
   // "1,500" is 1.5 if the comma is a decimal point but 1500 to many readers: ask instead of guessing
   const grouped = /(?:^|[^\d.,])([1-9]\d{0,2}),(\d{3})(?![\d.,])/.exec(raw);
   if (grouped) {
-    return { ok: false, message: `"${raw}" is ambiguous (a comma is read as the decimal point): write ${grouped[1]}${grouped[2]} or ${`${grouped[1]}.${grouped[2]}`.replace(/\.?0+$/, '')}` };
+    return {
+      ok: false,
+      message: `"${raw}" is ambiguous (a comma is read as the decimal point): write ${grouped[1]}${grouped[2]} or ` +
+        `${`${grouped[1]}.${grouped[2]}`.replace(/\.?0+$/, '')}`,
+    };
   }
   let text = raw.replace(',', '.');
   if (unit === '%') {
