@@ -127,6 +127,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         frequencyHz: project.frequencyHz, insideC: ctx.insideC, filterInputOhmAt,
         // the SWR circle at the antenna, each load through the filter as built (absent: at the PA's output)
         ...(filterLadder ? { filterLadder } : {}),
+        ...(early?.ok ? { filterDesign: early.value } : {}),
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;

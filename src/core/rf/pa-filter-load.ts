@@ -1,21 +1,59 @@
 // What the low-pass filter as built presents to the PA with a matched antenna, and where the SWR circle was drawn.
 import type { Finding } from '../findings';
-import { describeLoad, type PaSwrStress } from './pa-swr';
+import { ladderOf, pointAt } from './lpf-analysis';
+import type { LpfDesign } from './lpf-design';
+import { ohmText, type PaSwrStress } from './pa-swr';
 
 /**
- * Filter input SWR (against the PA's design load, at the operating frequency) above which the PA is told it does not
- * meet its design load even into a perfect antenna. Common practice, no published source: a load 1.3 times off (or
- * 1/1.3) moves a load-line stage's power by about 1.1 dB (P ∝ 1/R at a fixed swing), more than the 1 dB the power
- * check allows, and moves a class-E stage off its zero-voltage switching; the filter's own SWR check uses 1.3 as well.
+ * How far the stage's output may move from its design-load figure before the filter's load is a caution, dB: the
+ * 1 dB the power check allows (common practice, no published source). A load 1.3 times off (or 1/1.3) moves a
+ * load-line stage's power by about 1.1 dB (P ∝ 1/R at a fixed swing).
  */
-export const FILTER_INPUT_SWR_CAUTION = 1.3;
+export const FILTER_LOAD_POWER_DB = 1;
+/** The drain-peak check's margin on the device rating (pa.vds: caution below 1.25 × the peak; common practice). */
+export const FILTER_LOAD_DRAIN_MARGIN = 1.25;
 
 /**
- * The filter's input at the fundamental with the antenna at its design load: a caution when its SWR exceeds
- * FILTER_INPUT_SWR_CAUTION, naming the load the PA meets and the stage's figures there; with the circle at the PA's
- * output (no filter known) a note that says so.
+ * Largest input reflection of a lossless equal-ripple (Chebyshev) filter in its passband: at a ripple peak
+ * |S21|² = 10^(−ripple/10), and with no loss |Γ|² + |S21|² = 1.
  */
-export function filterLoadFindings(s: PaSwrStress, subject: string): Finding[] {
+export function rippleReflection(rippleDb: number): number {
+  // Source: power conservation in a lossless two-port, |S11|² + |S21|² = 1, with the Chebyshev passband's least
+  // transmission 1/(1 + ε²) = 10^(−ripple/10) (textbook relations of filter theory)
+  return Math.sqrt(1 - 10 ** (-rippleDb / 10));
+}
+
+/** SWR from a reflection magnitude. */
+export function swrOf(gamma: number): number {
+  // Source: definition of standing-wave ratio, SWR = (1 + |Γ|) / (1 − |Γ|)
+  return (1 + gamma) / (1 - gamma);
+}
+
+/** What the check knows besides the sweep: the filter's design and the stage's own design-load figures. */
+export interface FilterLoadContext {
+  /** The filter's design (ideal values, response, ripple); null when it is not known. */
+  design: LpfDesign | null;
+  /** The stage's output into its design load at the supply the sweep used (the highest), W. */
+  matchedOutputW: number;
+  /** The device's drain-source rating, V. */
+  deviceVdsMaxV: number;
+}
+
+/** The filter's design SWR at the operating frequency (ideal values, no loss) and its passband bound by design. */
+export function designSwr(d: LpfDesign): { atOperating: number; passbandMax: number | null } {
+  const atOperating = pointAt(ladderOf(d, 'ideal', true), d.operatingFrequencyHz).inputSwr;
+  return { atOperating, passbandMax: d.response === 'chebyshev' ? swrOf(rippleReflection(d.rippleDb)) : null };
+}
+
+/**
+ * The filter's input at the fundamental with the antenna at its design load: what the PA sees there, the output and
+ * drain peak it gives against the design load, and whether the design's ripple or the parts as fitted cause it. A
+ * caution only when the output moves by more than FILTER_LOAD_POWER_DB, the drain peak comes within the drain
+ * check's margin of the rating, or the parts as fitted exceed what the design allows in its passband; else ok.
+ * Without a context (the sweep alone) the figures are stated as ok. With the circle at the PA's output (no filter
+ * known) a note that says so.
+ */
+export function filterLoadFindings(s: PaSwrStress, subject: string, ctx?: FilterLoadContext): Finding[] {
   const base = { rule: 'pa.filter-input-swr', subject, source: 'pa.filter-input-swr' as const };
   if (s.circleAt === 'pa-output' || !s.designLoad) {
     if (s.swr <= 1) return [];
@@ -25,16 +63,44 @@ export function filterLoadFindings(s: PaSwrStress, subject: string): Finding[] {
         'moves them.' }];
   }
   const d = s.designLoad;
-  const sees = describeLoad({ ...d, phaseDeg: null });
-  if (d.inputSwr <= FILTER_INPUT_SWR_CAUTION) {
-    return [{ ...base, severity: 'ok', value: d.inputSwr, limit: FILTER_INPUT_SWR_CAUTION, unit: '',
-      message: `With a matched antenna the filter presents ${sees} to the PA (input SWR ${d.inputSwr.toFixed(2)}); ` +
-        `the SWR ${s.swr} circle is taken at the antenna, through the filter.` }];
-  }
-  return [{ ...base, severity: 'caution', value: d.inputSwr, limit: FILTER_INPUT_SWR_CAUTION, unit: '',
-    message: `Even into a perfect antenna the PA does not see its design load: the filter as built presents ${sees} ` +
-      `(input SWR ${d.inputSwr.toFixed(2)} at the operating frequency); there the stage gives ` +
-      `${d.outputW.toFixed(1)} W with drain peaks of ${d.drainPeakV.toFixed(1)} V and ${d.peakDeviceA.toFixed(2)} A ` +
-      'per device. Retune the filter (turns or a parallel capacitor) towards its design values; the SWR circle is ' +
-      'taken through it as built.' }];
+  const antenna = d.antennaReOhm !== null && d.antennaImOhm !== null ? ` (${ohmText(d.antennaReOhm, d.antennaImOhm)})`
+    : '';
+  const head = `With a matched antenna${antenna} the PA sees ${ohmText(d.loadReOhm, d.loadImOhm)} through the ` +
+    `filter as built (SWR ${d.inputSwr.toFixed(2)} against its design load, at the operating frequency)`;
+  const des = ctx?.design ? designSwr(ctx.design) : null;
+  // the output against the design load at the same supply, dB (definition of the decibel for power)
+  const shiftDb = ctx && ctx.matchedOutputW > 0 ? 10 * Math.log10(d.outputW / ctx.matchedOutputW) : null;
+  const stage = `the stage gives ${d.outputW.toFixed(1)} W` +
+    (ctx && shiftDb !== null ? ` against ${ctx.matchedOutputW.toFixed(1)} W into the design load ` +
+      `(${shiftDb >= 0 ? '+' : ''}${shiftDb.toFixed(1)} dB, both at the highest supply)` : '') +
+    `, with drain peaks of ${d.drainPeakV.toFixed(1)} V and ${d.peakDeviceA.toFixed(2)} A peak per device`;
+  const bound = des?.passbandMax ?? null;
+  const partsWorse = des !== null && d.inputSwr > Math.max(bound ?? 0, des.atOperating) * 1.005;
+  const cause = des === null ? ''
+    : bound !== null && ctx?.design
+      ? ` A ${ctx.design.rippleDb} dB-ripple Chebyshev filter reaches SWR ${bound.toFixed(2)} at its ripple peaks ` +
+        'by design (|Γ|² = 1 − 10^(−ripple/10)); with its design values it gives ' +
+        `${des.atOperating.toFixed(2)} ` +
+        'here, ' + (partsWorse ? 'so the parts as fitted (snapped values, turns) make it worse than the design.'
+          : `so the ${d.inputSwr.toFixed(2)} is within what the design allows` +
+            `${d.inputSwr > des.atOperating * 1.005 ? ', the rest from the parts as fitted' : ''}.`)
+      : ` With its design values the filter gives ${des.atOperating.toFixed(2)} here` +
+        (partsWorse ? '; the parts as fitted (snapped values, turns) make it worse.' : '.');
+  const powerOut = shiftDb !== null && Math.abs(shiftDb) > FILTER_LOAD_POWER_DB;
+  const drainNear = ctx !== undefined && ctx.deviceVdsMaxV < FILTER_LOAD_DRAIN_MARGIN * d.drainPeakV;
+  const caution = powerOut || drainNear || partsWorse;
+  const trim = 'trim the fitted parts (turns, a parallel capacitor) towards their design values';
+  const move = 'move the cutoff so the operating frequency sits away from a ripple peak, or choose a lower-ripple ' +
+    'response';
+  const fix = ` To bring it nearer the design load: ${partsWorse ? `${trim}; or ${move}` : `${move}; or ${trim}`}.`;
+  const nearPeak = bound !== null && des !== null && des.atOperating > 1 + 0.8 * (bound - 1)
+    ? ' (the operating frequency sits near a ripple peak)' : '';
+  const verdict = caution
+    ? (powerOut ? ` The output moves by more than the ${FILTER_LOAD_POWER_DB} dB the power check allows.` : '') +
+      (drainNear ? ` The drain peak comes within ${FILTER_LOAD_DRAIN_MARGIN} × of the ${ctx!.deviceVdsMaxV} V ` +
+        'rating.' : '') + fix
+    : ` Within the power and drain checks: nothing to do${nearPeak}.`;
+  return [{ ...base, severity: caution ? 'caution' : 'ok', value: d.inputSwr, limit: bound, unit: '',
+    message: `${head}: ${stage}.${cause}${verdict} The SWR ${s.swr} circle is taken at the antenna, through ` +
+      'the filter as built.' }];
 }

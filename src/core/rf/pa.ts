@@ -8,6 +8,7 @@ import { fieldLabel } from './field-labels';
 import { describeLoad, swrStress, type PaSwrStress } from './pa-swr';
 import { drainHarmonicLoad } from './pa-clip-balance';
 import type { Cx, Ladder } from './lpf-analysis';
+import type { LpfDesign } from './lpf-design';
 import { loadsThroughFilter } from './class-e-loads';
 import { filterLoadFindings } from './pa-filter-load';
 import { paSpectrum, switchingPowerShape, type PaSpectrum } from './pa-spectrum';
@@ -145,6 +146,8 @@ export interface PaSupplyCorners {
    * the PA's output (no filter, or its data refused).
    */
   filterLadder?: Ladder;
+  /** The same filter's design (ideal values, response, ripple): what its input SWR is by design. */
+  filterDesign?: LpfDesign;
 }
 
 export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, 'targetPowerW' | 'ambientC' | 'keyingDuty'>, subject = 'Final amplifier', corners: PaSupplyCorners = {}): PaResult {
@@ -286,7 +289,9 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
       } } : {}),
   }, swrUsed, pa.loadOhm, rdsRatio, corners.filterLadder && corners.frequencyHz && corners.frequencyHz > 0
     ? (phases) => loadsThroughFilter(corners.filterLadder!, corners.frequencyHz!, swrUsed, phases) : undefined);
-  findings.push(...filterLoadFindings(swr, subject));
+  findings.push(...filterLoadFindings(swr, subject, {
+    design: corners.filterDesign ?? null, matchedOutputW: opHot.outputW, deviceVdsMaxV: pa.deviceVdsMaxV,
+  }));
   const swrCurrent = swrKeyDownCurrent(swr, pa.biasIdleMaxA * hotRailV, hotDcW, band.designCurrentA, pa.biasIdleMaxA);
   if (swrCurrent && swrCurrent.currentA > keyDownCurrentA * 1.001) {
     findings.push({ severity: 'caution', rule: 'pa.swr-current', subject, value: swrCurrent.currentA, limit: keyDownCurrentA, unit: 'A', source: 'pa.waveform-dc',

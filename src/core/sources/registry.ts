@@ -350,9 +350,12 @@ export const SOURCES = {
   'pa.filter-input-swr': {
     status: 'practice',
     text: `The SWR circle drawn at the antenna and each of its loads taken through the low-pass filter as built to ` +
-      `the PA, Z_in = (A Z_L + B)/(C Z_L + D) (two-port chain relations, circuit theory); a caution when the filter's ` +
-      `own input SWR with a matched antenna exceeds 1.3, where a load-line stage's power moves by more than 1 dB ` +
-      `(${PRACTICE})`,
+      `the PA, Z_in = (A Z_L + B)/(C Z_L + D) (two-port chain relations, circuit theory); the input reflection a ` +
+      `lossless Chebyshev filter has by design at its ripple peaks, |Γ|² = 1 − 10^(−ripple/10) (power conservation ` +
+      `|S11|² + |S21|² = 1 with the passband's least transmission; textbook relations of filter theory); a caution ` +
+      `when the parts as fitted exceed that (or the design's own SWR at the operating frequency), when the output ` +
+      `moves by more than the power check's 1 dB, or when the drain peak comes within the drain check's 1.25 × of ` +
+      `the rating (${PRACTICE})`,
   },
   'pa.clip-balance': {
     status: 'design',

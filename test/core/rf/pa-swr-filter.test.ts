@@ -101,11 +101,12 @@ describe('a series 25 Ω reactance before the antenna (hand ABCD: [[1, j25], [0,
     expect(whereLoad(w, 2)).toBe('at SWR 2 at the antenna, reflection phase 0° (100.0 + j0.0 Ω), where the PA sees ' +
       '100.0 + j25.0 Ω');
   });
-  it('a filter input SWR of 1.64 (above 1.3) is a caution naming the load the PA sees into a matched antenna', () => {
+  it('a filter input SWR of 1.64 with nothing else known: the load the PA sees and its figures, stated (ok)', () => {
     const f = filterLoadFindings(s, 'PA');
     expect(f.map((x) => x.rule)).toEqual(['pa.filter-input-swr']);
-    expect(f[0].severity).toBe('caution');
+    expect(f[0].severity).toBe('ok');
     expect(f[0].message).toContain('50.0 + j25.0 Ω');
+    expect(f[0].message).toContain('SWR 1.64');
   });
   it('no filter: the circle at the PA output is said (ok note), no caution', () => {
     const f = filterLoadFindings(swrStress('D', m, 2, 50), 'PA');
@@ -125,7 +126,11 @@ describe('evaluatePa with the filter known', () => {
     expect(without.swr?.circleAt).toBe('pa-output');
     // into 50 + j25 Ω the class-D current falls as 1/|z| = 1/√1.25 of the matched one
     near(withF.swr!.designLoad!.peakDeviceA / withF.peakDeviceA, 1 / Math.sqrt(1.25), 1e-9, 'ratio');
-    expect(withF.findings.some((f) => f.rule === 'pa.filter-input-swr' && f.severity === 'caution')).toBe(true);
+    // P = 10 log10(1/1.25) = −0.97 dB (within the power check's 1 dB), but the drain peak there comes within
+    // 1.25 × of the fixture's 60 V rating (above 48 V): a caution that names the rating
+    const fl = withF.findings.find((f) => f.rule === 'pa.filter-input-swr');
+    expect(fl?.severity).toBe('caution');
+    expect(fl?.message).toContain('60 V rating');
     expect(withF.findings.find((f) => f.rule === 'pa.vds')?.message).toMatch(/at the antenna|antenna at its design/);
   });
 });
