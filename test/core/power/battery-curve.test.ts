@@ -2,7 +2,13 @@
 // point where the loads stop (charge balance Q = I t, hand-worked), the PA's output on the plateau, and the
 // chemistry as a choice (an unknown stored chemistry is refused by name).
 import { describe, expect, it } from 'vitest';
-import { batteryCurve, batteryCurveFindings, CELL_CURVES, depthAtCellV, meanCellV } from '../../../src/core/power/battery-curve';
+import {
+  batteryCurve,
+  batteryCurveFindings,
+  CELL_CURVES,
+  depthAtCellV,
+  meanCellV,
+} from '../../../src/core/power/battery-curve';
 import { batterySpec } from '../../../src/core/spec/supply-rails';
 import { validate } from '../../../src/core/spec/derive';
 import { evaluate } from '../../../src/core/evaluate';
@@ -11,7 +17,19 @@ import type { BatteryRail } from '../../../src/core/model';
 import { near } from './helpers';
 
 const toleranceV = 1e-9;
-const lead: BatteryRail = { kind: 'battery', id: 'b', name: '12 V SLA 7 Ah', chemistry: 'lead-acid', nominalV: 12, fullV: 13.8, endV: 10.5, capacityAh: 7, usableFraction: 0.95, internalOhm: 0.05, minimumV: null };
+const lead: BatteryRail = {
+  kind: 'battery',
+  id: 'b',
+  name: '12 V SLA 7 Ah',
+  chemistry: 'lead-acid',
+  nominalV: 12,
+  fullV: 13.8,
+  endV: 10.5,
+  capacityAh: 7,
+  usableFraction: 0.95,
+  internalOhm: 0.05,
+  minimumV: null,
+};
 
 describe('cell figures per chemistry', () => {
   it('nominal and end voltages are the usual makers figures', () => {
@@ -46,7 +64,8 @@ describe('cell figures per chemistry', () => {
 });
 
 describe('runtime over the curve (charge balance Q = I t)', () => {
-  it('12 V lead-acid, loads needing 11.4 V, no key-down: stops at 1.9 V a cell = 90 % depth; 7 Ah x 0.9 / 0.5 A = 12.6 h', () => {
+  it('12 V lead-acid, loads needing 11.4 V, no key-down: stops at 1.9 V a cell = 90 % depth; 7 Ah x 0.9 / ' +
+    '0.5 A = 12.6 h', () => {
     const c = batteryCurve(lead, 0, 0.5, 11.4)!;
     expect(c.cells).toBe(6); // 12 / 2.0
     near(depthAtCellV(CELL_CURVES['lead-acid'], 1.9), 0.9, toleranceV, 'depth');
@@ -54,7 +73,8 @@ describe('runtime over the curve (charge balance Q = I t)', () => {
     near(c.runtimeS, (7 * 0.9 * 3600) / 0.5, 1e-6, 's'); // 45 360 s
   });
 
-  it('2 A key-down through 0.05 ohm: stops where the open-circuit curve is 11.5 V (1.9167 V a cell), depth 0.8444', () => {
+  it('2 A key-down through 0.05 ohm: stops where the open-circuit curve is 11.5 V (1.9167 V a cell), ' +
+    'depth 0.8444', () => {
     // Thevenin: 11.4 + 2 x 0.05 = 11.5 V; / 6 = 1.91667 V; between (0.7, 1.96) and (0.9, 1.90):
     // 0.7 + 0.2 x (1.96 - 1.91667) / 0.06 = 0.84444
     const c = batteryCurve(lead, 2, 0.5, 11.4)!;
@@ -75,7 +95,8 @@ describe('runtime over the curve (charge balance Q = I t)', () => {
     expect(batteryCurveFindings(lfp12, null, 1)[0]).toMatchObject({ severity: 'caution', rule: 'battery.curve' });
   });
 
-  it('an end voltage below the chemistry cut-off is a deep-discharge caution (LiFePO4 4 cells at 8 V = 2.0 V a cell < 2.5 V)', () => {
+  it('an end voltage below the chemistry cut-off is a deep-discharge caution (LiFePO4 4 cells at 8 V = 2.0 V a ' +
+    'cell < 2.5 V)', () => {
     const b = { ...lead, chemistry: 'LiFePO4', nominalV: 12.8, fullV: 14.4, endV: 8 };
     const f = batteryCurveFindings(b, batteryCurve(b, 0, 0.5, 0), 1);
     expect(f.find((x) => x.rule === 'battery.deep-discharge')).toMatchObject({ severity: 'caution', limit: 10 });

@@ -82,7 +82,8 @@ describe('the bleeder recommendation keeps a fitted bleeder that meets its targe
     expect(r.text).toBe(`Keep the fitted 2.2 kΩ bleeder (below 5 V in ${t} s)`);
     expect(r.reasoning).toMatch(/for a new build: 3\.9 kΩ bleeder, 0\.5 W rating or more/);
   });
-  it('none fitted, or too slow above 60 V: the suggested value (220 µF at 350 V: at most 12.9 kΩ -> E12 12 kΩ)', () => {
+  it('none fitted, or too slow above 60 V: the suggested value (220 µF at 350 V: at most 12.9 kΩ ' +
+    '-> E12 12 kΩ)', () => {
     // ref §10: for 5 s the bleeder must be <= 12.9 kΩ; 350² / 12 k = 10.2 W, so at least 20.4 W rated: 25 W is the
     // next common rating (common practice, no source)
     const none = bleederRecommendation(bleederReport(4700e-6, 25.6, 0.04, null))!;
@@ -94,7 +95,8 @@ describe('the bleeder recommendation keeps a fitted bleeder that meets its targe
 
 describe('a suggested rating is one a builder can order', () => {
   it('the smallest common rating carrying the dissipation at 50 % (common practice, no source)', () => {
-    // 13.9² / 220 kΩ = 0.88 mW -> 0.125 W; 0.125 W exactly -> 0.25 W at 50 %; 0.126 W -> 0.5 W; 30 W -> 0.5 × 50 W < 30
+    // 13.9² / 220 kΩ = 0.88 mW -> 0.125 W; 0.125 W exactly -> 0.25 W at 50 %;
+    // 0.126 W -> 0.5 W; 30 W -> 0.5 × 50 W < 30
     expect(bleederRatingW((13.9 * 13.9) / 220e3)).toBe(0.125);
     expect(bleederRatingW(0.125)).toBe(0.25);
     expect(bleederRatingW(0.126)).toBe(0.5);

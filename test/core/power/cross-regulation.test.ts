@@ -12,9 +12,10 @@ import type { RectifiedRailReport, RegulatedRailReport } from '../../../src/core
 import { near } from './helpers';
 
 const withTolerance = (p: Project, tol: number | null): Project => ({
-  ...p, supply: { ...p.supply, transformers: p.supply.transformers.map((t) => ({ ...t, secondaryToleranceFraction: tol })) },
+  ...p,
+  supply: { ...p.supply, transformers: p.supply.transformers.map((t) => ({ ...t, secondaryToleranceFraction: tol })) },
 });
-const rail = <T,>(r: ReturnType<typeof evaluate>, id: string) => r.supply!.rails.find((x) => x.railId === id) as T;
+const rail = <T>(r: ReturnType<typeof evaluate>, id: string) => r.supply!.rails.find((x) => x.railId === id) as T;
 
 describe('the secondary-tolerance corner', () => {
   const report = evaluate(withTolerance(club30m, 0.05));
@@ -39,7 +40,8 @@ describe('the secondary-tolerance corner', () => {
     expect(cr.toleranceFraction).toBe(0.05);
     expect(cr.rails.find((x) => x.railId === 'rail-raw')!.toleranceTroughV).toBe(tol.troughV);
   });
-  it('a rail that passes at the nominal secondary but not at its low tolerance gets a caution naming the source', () => {
+  it('a rail that passes at the nominal secondary but not at its low tolerance gets a caution ' +
+    'naming the source', () => {
     // the raw rail needs 13.87 + 2.5 + 0.5 = 16.87 V (demo regulator); it passes at low mains and not 5 % lower
     expect(low.troughV).toBeGreaterThanOrEqual(raw.requiredMinV);
     expect(tol.troughV).toBeLessThan(raw.requiredMinV);

@@ -50,7 +50,8 @@ describe('corners (duty factor: OET Bulletin 65 Supplement B Table 2, CW 40 %, c
 });
 
 describe('regulated rail fed by the §4.2 rail', () => {
-  it('13.8 V + 2.5 V dropout = 16.3 V needed; trough 18.42 V at low mains: headroom ok; dissipation at high mains', () => {
+  it('13.8 V + 2.5 V dropout = 16.3 V needed; trough 18.42 V at low mains: headroom ok; dissipation ' +
+    'at high mains', () => {
     const p = refProject({ rails: [refProject().supply.rails[0], regulator13v8] });
     const report = evaluateSupply(p, { raw: flat(3), reg: flat(3) });
     const reg = report.rails.find((r) => r.railId === 'reg') as RegulatedRailReport;
@@ -79,8 +80,24 @@ describe('random and absurd inputs never throw and never give NaN', () => {
         const [v, a, c, esr, load, duty, reg, vf, rd, capV, capA, fuse, bleed, thetaSa, tjMax, drop] = n;
         const p = refProject({
           rails: [
-            { ...(refProject().supply.rails[0] as RectifiedRail), topology, reservoirF: c, esrOhm: esr, diodeDropV: vf, diodeResistanceOhm: rd, capacitorRatedV: capV, capacitorRippleA: capA, fuseA: fuse, bleederOhm: bleed, ripplePpTargetV: reg },
-            { ...regulator13v8, dropoutV: drop, mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: thetaSa, tjMaxC: tjMax } },
+            {
+              ...(refProject().supply.rails[0] as RectifiedRail),
+              topology,
+              reservoirF: c,
+              esrOhm: esr,
+              diodeDropV: vf,
+              diodeResistanceOhm: rd,
+              capacitorRatedV: capV,
+              capacitorRippleA: capA,
+              fuseA: fuse,
+              bleederOhm: bleed,
+              ripplePpTargetV: reg,
+            },
+            {
+              ...regulator13v8,
+              dropoutV: drop,
+              mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: thetaSa, tjMaxC: tjMax },
+            },
           ],
           primaryFuseA: fuse,
         });

@@ -57,7 +57,8 @@ describe('fault currents (hand-worked)', () => {
     near(shortedOutputRmsA('bridge', 10, 1, 0, 0), 10 / Math.SQRT2, toleranceA, 'bridge');
     near(shortedOutputRmsA('half-wave', 10, 1, 0, 0), 5, toleranceA, 'half-wave: Vp / 2R');
   });
-  it('bridge, Vp 10 V, 2 x 1 V drop, 1 Ω: I^2 = (1/π) ∫ (10 sinθ - 2)^2 dθ over [asin 0.2, π - asin 0.2] -> 5.326 A', () => {
+  it('bridge, Vp 10 V, 2 x 1 V drop, 1 Ω: I^2 = (1/π) ∫ (10 sinθ - 2)^2 dθ over [asin 0.2, π - asin ' +
+    '0.2] -> 5.326 A', () => {
     // θ0 = 0.201358; ∫sin² = (π - 2θ0)/2 + sin(2θ0)/2 = 1.565397; ∫sin = 2 cos θ0 = 1.959592; ∫1 = 2.738877
     // I² = (100 x 1.565397 - 40 x 1.959592 + 4 x 2.738877) / π = 28.365 -> I = 5.326 A
     near(shortedOutputRmsA('bridge', 10, 1, 1, 0), 5.326, toleranceA, 'I');
@@ -65,8 +66,35 @@ describe('fault currents (hand-worked)', () => {
 });
 
 describe('winding fuse report', () => {
-  const winding: Winding = { id: 'w', name: '16 V winding', ratedVrms: 16, ratedA: 1, regulationFraction: 0.1, resistanceOhm: null };
-  const rail = { kind: 'rectified', id: 'r', name: 'Raw', windingId: 'w', topology: 'bridge', diodeDropV: 0.9, diodeResistanceOhm: 0, reservoirF: 0.0047, esrOhm: 0.04, bleederOhm: null, capacitorRatedV: null, capacitorRippleA: null, ripplePpTargetV: null, marginV: 0, fuseA: null, minimumV: null, windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: null } as RectifiedRail;
+  const winding: Winding = {
+    id: 'w',
+    name: '16 V winding',
+    ratedVrms: 16,
+    ratedA: 1,
+    regulationFraction: 0.1,
+    resistanceOhm: null,
+  };
+  const rail = {
+    kind: 'rectified',
+    id: 'r',
+    name: 'Raw',
+    windingId: 'w',
+    topology: 'bridge',
+    diodeDropV: 0.9,
+    diodeResistanceOhm: 0,
+    reservoirF: 0.0047,
+    esrOhm: 0.04,
+    bleederOhm: null,
+    capacitorRatedV: null,
+    capacitorRippleA: null,
+    ripplePpTargetV: null,
+    marginV: 0,
+    fuseA: null,
+    minimumV: null,
+    windingFuseA: null,
+    windingFuseSheet: 'T3',
+    bleederRatedW: null,
+  } as RectifiedRail;
   const corners = [{ id: 'high-keyDown', secondaryRmsA: 1.2 }] as RectifiedCorner[];
   const rep = windingFuseReport({ rail, winding, corners, mainsNominalV: 120, lowFactor: 0.9, highFactor: 1.1 }).report;
   it('recommends T1.6A: 1.2 A x 1.25 = 1.5 A, next IEC 60127 rating 1.6 A', () => {
@@ -81,7 +109,8 @@ describe('winding fuse report', () => {
     expect(rep.outputShortLowA).toBeGreaterThan(4 * 1.6); // so at least the 4 In row (<= 3 s) applies
     expect(rep.check?.clears).toBe(true);
   });
-  it('primary: the fault reflected by 17.6/120 onto a T1A primary is below 2.1 In, so the primary fuse never clears it', () => {
+  it('primary: the fault reflected by 17.6/120 onto a T1A primary is below 2.1 In, so the primary fuse ' +
+    'never clears it', () => {
     const checks = primaryFaultChecks([{ windingFuse: rep } as RectifiedRailReport], 1);
     near(checks[0].reflectedA, rep.outputShortLowA * (17.6 / 120), 1e-9, 'reflected');
     expect(checks[0].reflectedA).toBeLessThan(2.1);
@@ -108,17 +137,24 @@ describe('fault currents with the leakage inductance', () => {
     const l = shortedOutputRmsA('bridge', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03, 1e-9, 60);
     expect(Math.abs(l / r - 1)).toBeLessThan(0.005);
     // and the leakage lowers every fault current
-    expect(shortedOutputRmsA('half-wave', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03, henry, 60)).toBeLessThan(shortedOutputRmsA('half-wave', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03));
-    expect(shortedOutputRmsA('centre-tap', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03, henry, 60)).toBeLessThan(shortedOutputRmsA('centre-tap', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03));
+    expect(shortedOutputRmsA('half-wave', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03, henry, 60)).toBeLessThan(
+      shortedOutputRmsA('half-wave', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03),
+    );
+    expect(shortedOutputRmsA('centre-tap', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03, henry, 60)).toBeLessThan(
+      shortedOutputRmsA('centre-tap', Math.SQRT2 * 17.6, 1.6, 0.9, 0.03),
+    );
   });
-  it.skipIf(!hasNgspice)('bridge with 0.9 V / 0.03 Ω diodes and the leakage into a shorted reservoir: within 1 % of ngspice', () => {
+  it.skipIf(!hasNgspice)('bridge with 0.9 V / 0.03 Ω diodes and the leakage into a shorted reservoir: within ' +
+    '1 % of ngspice', () => {
     // netlist written here: the winding a floating sine source (p to n) behind R and L, four behavioural diodes (the
     // program's element model) into the bridge's + and - joined at ground (shorted reservoir), the winding current's
     // RMS over the 40th cycle
     const netlist = [
       '* shorted bridge output behind R + L', `V1 p n SIN(0 ${Math.SQRT2 * 17.6} 60)`, 'R1 p x 1.6', `L1 x a ${henry}`,
       'Vse a b 0', 'Rg n 0 100Meg', 'Rb b 0 100Meg',
-      ...[['B1', 'b', '0'], ['B2', 'n', '0'], ['B3', '0', 'b'], ['B4', '0', 'n']].map(([nm, an, ca]) => `${nm} ${an} ${ca} I = max(V(${an},${ca}) - 0.9, 0) / 0.03`),
+      ...[['B1', 'b', '0'], ['B2', 'n', '0'], ['B3', '0', 'b'], ['B4', '0', 'n']].map(
+        ([nm, an, ca]) => `${nm} ${an} ${ca} I = max(V(${an},${ca}) - 0.9, 0) / 0.03`,
+      ),
       '.tran 5u 0.6667 0 5u', '.meas tran irms RMS i(Vse) FROM=0.65 TO=0.6667', '.end',
     ].join('\n');
     const dir = mkdtempSync(join(tmpdir(), 'rigwright-fault-'));

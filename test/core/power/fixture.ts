@@ -3,15 +3,42 @@
 import type { PerMode, Project, RectifiedRail, RegulatedRail } from '../../../src/core/model';
 
 export const refRail: RectifiedRail = {
-  kind: 'rectified', id: 'raw', name: 'Raw rail', windingId: 'w18', topology: 'bridge', diodeDropV: 0.75, diodeResistanceOhm: 0.02,
-  reservoirF: 0.01, esrOhm: 0, bleederOhm: null, capacitorRatedV: 35, capacitorRippleA: 5.5, ripplePpTargetV: null, marginV: 0, fuseA: null, minimumV: null,
-  windingFuseA: null, windingFuseSheet: 'T3', bleederRatedW: null,
+  kind: 'rectified',
+  id: 'raw',
+  name: 'Raw rail',
+  windingId: 'w18',
+  topology: 'bridge',
+  diodeDropV: 0.75,
+  diodeResistanceOhm: 0.02,
+  reservoirF: 0.01,
+  esrOhm: 0,
+  bleederOhm: null,
+  capacitorRatedV: 35,
+  capacitorRippleA: 5.5,
+  ripplePpTargetV: null,
+  marginV: 0,
+  fuseA: null,
+  minimumV: null,
+  windingFuseA: null,
+  windingFuseSheet: 'T3',
+  bleederRatedW: null,
 };
 
 export const regulator13v8: RegulatedRail = {
-  kind: 'regulated', id: 'reg', name: '13.8 V regulator', parentId: 'raw', regulator: 'linear', setting: { method: 'fixed', nominalV: 13.8 },
-  dropoutV: 2.5, quiescentA: 0, efficiency: null, maxOutputA: 5, maxInputV: 40, mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: 1.0, tjMaxC: 125 },
-  rippleRejectionDb: null, rippleTargetV: null,
+  kind: 'regulated',
+  id: 'reg',
+  name: '13.8 V regulator',
+  parentId: 'raw',
+  regulator: 'linear',
+  setting: { method: 'fixed', nominalV: 13.8 },
+  dropoutV: 2.5,
+  quiescentA: 0,
+  efficiency: null,
+  maxOutputA: 5,
+  maxInputV: 40,
+  mount: { thetaJcKPerW: 5, thetaCsKPerW: 1, thetaSaKPerW: 1.0, tjMaxC: 125 },
+  rippleRejectionDb: null,
+  rippleTargetV: null,
 };
 
 export function refProject(over: Partial<Project['supply']> = {}): Project {
@@ -20,7 +47,23 @@ export function refProject(over: Partial<Project['supply']> = {}): Project {
     mains: { nominalV: 230, frequencyHz: 50, lowFraction: 0.1, highFraction: 0.1 },
     ambientC: 40, currency: 'EUR', kits: 1, keyingDuty: 0.4, version: 1,
     supply: {
-      transformers: [{ id: 't1', name: 'T1', construction: 'laminated', windings: [{ id: 'w18', name: '18 V winding', ratedVrms: 18, ratedA: 100 / 18, regulationFraction: 0.06, resistanceOhm: null }] }],
+      transformers: [
+        {
+          id: 't1',
+          name: 'T1',
+          construction: 'laminated',
+          windings: [
+            {
+              id: 'w18',
+              name: '18 V winding',
+              ratedVrms: 18,
+              ratedA: 100 / 18,
+              regulationFraction: 0.06,
+              resistanceOhm: null,
+            },
+          ],
+        },
+      ],
       rails: [refRail],
       primaryFuseA: null,
       ...over,

@@ -11,8 +11,10 @@ import { near } from './helpers';
 const toleranceW = 0.001;
 const toleranceK = 0.05; // ref prints one decimal
 
-describe('rectifier dissipation (P = Vf I_avg + r_d I_rms² per diode; textbook conduction-loss model, from memory)', () => {
-  it('bridge, 0.9 V and 0.03 Ω diodes, 1.31 A DC, 2.79 A RMS winding: 2 (0.9 x 1.31 + 0.03 x 2.79²) = 2.825 W', () => {
+describe('rectifier dissipation (P = Vf I_avg + r_d I_rms² per diode; textbook conduction-loss model, ' +
+  'from memory)', () => {
+  it('bridge, 0.9 V and 0.03 Ω diodes, 1.31 A DC, 2.79 A RMS winding: 2 (0.9 x 1.31 + 0.03 x ' +
+    '2.79²) = 2.825 W', () => {
     // 0.9 x 1.31 = 1.179; 0.03 x 7.7841 = 0.233523; sum 1.412523; x 2 = 2.825046
     near(rectifierDissipationW('bridge', 0.9, 0.03, 1.31, 2.79), 2.825046, toleranceW, 'bridge');
   });

@@ -23,7 +23,8 @@ const rail = {
 } as RectifiedRail;
 
 describe('fuse melting-I²t floor from IEC 60127-2 minimum pre-arcing times', () => {
-  it('T (sheet 3), 1 A: min of 2.75² x 0.6, 4² x 0.15, 10² x 0.02 = 2.0 A²s; F (sheet 2): 4² x 0.003 = 0.048', () => {
+  it('T (sheet 3), 1 A: min of 2.75² x 0.6, 4² x 0.15, 10² x 0.02 = 2.0 A²s; F (sheet 2): 4² x ' +
+    '0.003 = 0.048', () => {
     // Source: IEC 60127-2 sheet 3 minimum pre-arcing times as quoted in makers' datasheets (2.75 In >= 0.6 s,
     // 4 In >= 0.15 s, 10 In >= 20 ms); sheet 2 from memory (2.75 In >= 10 ms, 4 In >= 3 ms)
     nearRel(meltI2tFloor('T3', 1), Math.min(2.75 ** 2 * 0.6, 16 * 0.15, 100 * 0.02), rel, 'T3');

@@ -43,7 +43,8 @@ describe('keying transient in the evaluation JSON', () => {
     expect(m.keyDown.pa.saturationV).toBe(1);
     expect(m.parts.map((p: { law: string }) => p.law).sort()).toEqual(['PA load line', 'constant current']);
   });
-  it('every rail carries its load model: a linear regulator reflects its loads as a constant current on its raw rail', () => {
+  it('every rail carries its load model: a linear regulator reflects its loads as a constant current on ' +
+    'its raw rail', () => {
     // Source: series-pass regulator, I_in = I_out + I_q (regulator datasheets). The 13.8 V rail's entered loads from
     // the
     // demo data, key-up: 12 + 18 + 60 + 4 + 12 mA and the 36 mA relay coil = 142 mA; key-down with the driver at
@@ -54,7 +55,14 @@ describe('keying transient in the evaluation JSON', () => {
     expect(sig.parts.some((p: { name: string }) => p.name === 'T/R relay and sequencer (relay coil)')).toBe(true);
     expect(rawRail.loadModel.keyUp.constantA).toBeCloseTo(0.1472, 12);
     expect(rawRail.loadModel.keyDown.constantA).toBeCloseTo(0.2472, 12);
-    expect(rawRail.loadModel.parts).toEqual([{ name: '13.8 V signal rail', law: 'constant current', keyUpA: expect.closeTo(0.1472, 12), keyDownA: expect.closeTo(0.2472, 12) }]);
+    expect(rawRail.loadModel.parts).toEqual([
+      {
+        name: '13.8 V signal rail',
+        law: 'constant current',
+        keyUpA: expect.closeTo(0.1472, 12),
+        keyDownA: expect.closeTo(0.2472, 12),
+      },
+    ]);
   });
   it('a finding per PA rail, with the registry source; no transient on a rail without a PA', () => {
     const f = paRail.findings.find((x: { rule: string }) => x.rule === 'supply.keying-transient');
@@ -66,7 +74,9 @@ describe('keying transient in the evaluation JSON', () => {
   it('the CLI text names the speed and the first dot against a held key', () => {
     const line = renderEvaluationText(club30m, report).split('\n').find((l) => l.includes('keyed from rest'));
     expect(line).toContain('20 WPM');
-    expect(line).toContain(`${paRail.keyingTransient.firstLeadDb >= 0 ? '+' : ''}${paRail.keyingTransient.firstLeadDb.toFixed(1)} dB`);
+    expect(line).toContain(
+      `${paRail.keyingTransient.firstLeadDb >= 0 ? '+' : ''}${paRail.keyingTransient.firstLeadDb.toFixed(1)} dB`,
+    );
   });
   it('without a keying speed (no T/R stage) the transient is not simulated and a finding says why', () => {
     const noRelay = { ...club30m, stages: club30m.stages.filter((s) => !s.relay) };
@@ -85,7 +95,9 @@ describe('keying transient plot and block', () => {
     expect(svg.match(/class="key-down"/g)).toHaveLength(k.elements.length);
     expect(svg.match(/<polyline /g)).toHaveLength(1);
     expect(svg.match(/stroke-dasharray="6 4"/g)!.length).toBeGreaterThanOrEqual(2);
-    expect(svg).toContain(`${k.elements[0].leadVsSteadyDb >= 0 ? '+' : ''}${k.elements[0].leadVsSteadyDb.toFixed(1)} dB`);
+    expect(svg).toContain(
+      `${k.elements[0].leadVsSteadyDb >= 0 ? '+' : ''}${k.elements[0].leadVsSteadyDb.toFixed(1)} dB`,
+    );
   });
   it('the page block names the stage, the speed and the loads', () => {
     const html = String(KeyingTransientBlock({ rail }));

@@ -16,7 +16,15 @@ import { near } from './helpers';
 const hasNgspice = requireTool(NGSPICE, 'Keying transient against ngspice', 'apt-get install ngspice');
 
 // A PA of 20 W at 24 V with a 1 V saturation drop, 70 % efficient, 50 mA bias idle (round numbers chosen here).
-const pa: PaLoadLaw = { stageId: 's', stageName: 'PA', referenceV: 24, referenceOutputW: 20, saturationV: 1, efficiency: 0.7, idleA: 0.05 };
+const pa: PaLoadLaw = {
+  stageId: 's',
+  stageName: 'PA',
+  referenceV: 24,
+  referenceOutputW: 20,
+  saturationV: 1,
+  efficiency: 0.7,
+  idleA: 0.05,
+};
 const keyUp: ModeLoads = { constantA: 0.05, constantPower: [], pa: null };
 const keyDown: ModeLoads = { constantA: 0, constantPower: [], pa };
 
@@ -55,7 +63,11 @@ describe('dot timing', () => {
   it('PARIS dots of 1.2 / WPM s with one-unit spaces (ITU-R M.1677-1 ratios)', () => {
     // Source: PARIS word of 50 units (common practice): 20 WPM -> 60 ms dots; element and space one unit each
     const t = dotTrain(1.2 / 20, 3, 0.05);
-    expect(t.intervals.map((i) => [i.startS, i.endS].map((x) => Math.round(x * 1e6) / 1e6))).toEqual([[0.05, 0.11], [0.17, 0.23], [0.29, 0.35]]);
+    expect(t.intervals.map((i) => [i.startS, i.endS].map((x) => Math.round(x * 1e6) / 1e6))).toEqual([
+      [0.05, 0.11],
+      [0.17, 0.23],
+      [0.29, 0.35],
+    ]);
     expect(elementsFor(0.06)).toBeGreaterThanOrEqual(3);
   });
 });
@@ -112,7 +124,8 @@ function ngspice(netlist: string, names: string[]): Record<string, number> {
 function keyedNetlist(c: KeyingCircuit, keyAtS: number, dotS: number, dots: number, leakageH: number): string {
   const vpk = Math.SQRT2 * c.secondaryVrms;
   const k = pa.referenceOutputW / (pa.efficiency * (pa.referenceV - pa.saturationV) ** 2);
-  const d = (name: string, a: string, b: string) => `${name} ${a} ${b} I = max(V(${a},${b}) - ${c.diodeDropV}, 0) / ${c.diodeResistanceOhm}`;
+  const d = (name: string, a: string, b: string) =>
+    `${name} ${a} ${b} I = max(V(${a},${b}) - ${c.diodeDropV}, 0) / ${c.diodeResistanceOhm}`;
   const end = keyAtS + 2 * dots * dotS;
   const lines = [
     '* keyed PA rail: bridge, reservoir, switched PA load',
@@ -127,7 +140,8 @@ function keyedNetlist(c: KeyingCircuit, keyAtS: number, dotS: number, dots: numb
     `Rb out 0 ${c.bleederOhm}`,
     `Vkey key 0 PULSE(0 1 ${keyAtS} 1u 1u ${dotS - 2e-6} ${2 * dotS})`,
     'Rkey key 0 1Meg',
-    `Bload out 0 I = (1 - V(key)) * 0.05 + V(key) * (${pa.idleA} + ${k} * max(V(out) - ${pa.saturationV}, 0)^2 / max(V(out), 1))`,
+    `Bload out 0 I = (1 - V(key)) * 0.05 + V(key) * (${pa.idleA} + ${k} * max(V(out) - ${pa.saturationV}, 0)^2 / ` +
+      `max(V(out), 1))`,
     `.tran 10u ${end} 0 10u uic`,
     `.meas tran up AVG v(out) FROM=${keyAtS - 1 / c.frequencyHz} TO=${keyAtS}`,
     ...AT_MS.map((ms, i) => `.meas tran at${i} FIND v(out) AT=${keyAtS + ms / 1000}`),
@@ -161,7 +175,11 @@ describe.skipIf(!hasNgspice)('keyed PA rail against ngspice', () => {
       const dots = 3;
       const run = runKeying(sim, keyUp, keyDown, dotTrain(dotS, dots, 0.05), up.v, 1, 1 / 120);
       const upMean = steadyCycle(sim, keyUp, up.v).meanV;
-      const names = ['up', ...AT_MS.map((_, i) => `at${i}`), ...[...Array(dots).keys()].flatMap((i) => [`avg${i}`, `lead${i}`, `min${i}`])];
+      const names = [
+        'up',
+        ...AT_MS.map((_, i) => `at${i}`),
+        ...[...Array(dots).keys()].flatMap((i) => [`avg${i}`, `lead${i}`, `min${i}`]),
+      ];
       const sp = ngspice(keyedNetlist(c, lead, dotS, dots, leakageH), names);
       near(upMean, sp.up, toleranceMeanV, 'key-up mean (V)');
       for (let i = 0; i < dots; i++) {

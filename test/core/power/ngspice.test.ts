@@ -23,13 +23,95 @@ const tolerancePeakFraction = 0.03; // repetitive peak diode current, 3 %
 
 const base = { diodeDropV: 0.8, diodeResistanceOhm: 0.03, esrOhm: 0.02 };
 const designs: { name: string; input: RectifierSimInput }[] = [
-  { name: 'bridge 50 Hz, 3 A constant current, ref §4.2 winding (0.194 Ω)', input: { ...base, topology: 'bridge', secondaryVrms: 19.08, windingResistanceOhm: 0.194, frequencyHz: 50, diodeDropV: 0.75, diodeResistanceOhm: 0.02, capacitanceF: 0.01, esrOhm: 0, load: { kind: 'current', currentA: 3 } } },
-  { name: 'bridge 60 Hz, 10 Ω resistive, 0.5 Ω winding', input: { ...base, topology: 'bridge', secondaryVrms: 17.3, windingResistanceOhm: 0.5, frequencyHz: 60, capacitanceF: 0.0047, load: { kind: 'resistance', resistanceOhm: 10 } } },
-  { name: 'bridge 60 Hz, 0.2 A, stiff 0.05 Ω winding, small 1000 µF', input: { ...base, topology: 'bridge', secondaryVrms: 12.6, windingResistanceOhm: 0.05, frequencyHz: 60, capacitanceF: 0.001, load: { kind: 'current', currentA: 0.2 } } },
-  { name: 'centre-tap 50 Hz, 1 A constant current, 0.3 Ω per half', input: { ...base, topology: 'centre-tap', secondaryVrms: 16.5, windingResistanceOhm: 0.3, frequencyHz: 50, capacitanceF: 0.0047, load: { kind: 'current', currentA: 1 } } },
-  { name: 'centre-tap 60 Hz, 22 Ω resistive, 0.8 Ω per half, bleeder 2.2 kΩ', input: { ...base, topology: 'centre-tap', secondaryVrms: 26, windingResistanceOhm: 0.8, frequencyHz: 60, capacitanceF: 0.0022, esrOhm: 0.1, load: { kind: 'resistance', resistanceOhm: 22 }, bleederOhm: 2200 } },
-  { name: 'half-wave 60 Hz, 47 Ω resistive, 1 Ω winding', input: { ...base, topology: 'half-wave', secondaryVrms: 14, windingResistanceOhm: 1, frequencyHz: 60, capacitanceF: 0.0022, load: { kind: 'resistance', resistanceOhm: 47 } } },
-  { name: 'half-wave 50 Hz, 0.1 A constant current, 2 Ω winding', input: { ...base, topology: 'half-wave', secondaryVrms: 9, windingResistanceOhm: 2, frequencyHz: 50, capacitanceF: 0.0033, load: { kind: 'current', currentA: 0.1 } } },
+  {
+    name: 'bridge 50 Hz, 3 A constant current, ref §4.2 winding (0.194 Ω)',
+    input: {
+      ...base,
+      topology: 'bridge',
+      secondaryVrms: 19.08,
+      windingResistanceOhm: 0.194,
+      frequencyHz: 50,
+      diodeDropV: 0.75,
+      diodeResistanceOhm: 0.02,
+      capacitanceF: 0.01,
+      esrOhm: 0,
+      load: { kind: 'current', currentA: 3 },
+    },
+  },
+  {
+    name: 'bridge 60 Hz, 10 Ω resistive, 0.5 Ω winding',
+    input: {
+      ...base,
+      topology: 'bridge',
+      secondaryVrms: 17.3,
+      windingResistanceOhm: 0.5,
+      frequencyHz: 60,
+      capacitanceF: 0.0047,
+      load: { kind: 'resistance', resistanceOhm: 10 },
+    },
+  },
+  {
+    name: 'bridge 60 Hz, 0.2 A, stiff 0.05 Ω winding, small 1000 µF',
+    input: {
+      ...base,
+      topology: 'bridge',
+      secondaryVrms: 12.6,
+      windingResistanceOhm: 0.05,
+      frequencyHz: 60,
+      capacitanceF: 0.001,
+      load: { kind: 'current', currentA: 0.2 },
+    },
+  },
+  {
+    name: 'centre-tap 50 Hz, 1 A constant current, 0.3 Ω per half',
+    input: {
+      ...base,
+      topology: 'centre-tap',
+      secondaryVrms: 16.5,
+      windingResistanceOhm: 0.3,
+      frequencyHz: 50,
+      capacitanceF: 0.0047,
+      load: { kind: 'current', currentA: 1 },
+    },
+  },
+  {
+    name: 'centre-tap 60 Hz, 22 Ω resistive, 0.8 Ω per half, bleeder 2.2 kΩ',
+    input: {
+      ...base,
+      topology: 'centre-tap',
+      secondaryVrms: 26,
+      windingResistanceOhm: 0.8,
+      frequencyHz: 60,
+      capacitanceF: 0.0022,
+      esrOhm: 0.1,
+      load: { kind: 'resistance', resistanceOhm: 22 },
+      bleederOhm: 2200,
+    },
+  },
+  {
+    name: 'half-wave 60 Hz, 47 Ω resistive, 1 Ω winding',
+    input: {
+      ...base,
+      topology: 'half-wave',
+      secondaryVrms: 14,
+      windingResistanceOhm: 1,
+      frequencyHz: 60,
+      capacitanceF: 0.0022,
+      load: { kind: 'resistance', resistanceOhm: 47 },
+    },
+  },
+  {
+    name: 'half-wave 50 Hz, 0.1 A constant current, 2 Ω winding',
+    input: {
+      ...base,
+      topology: 'half-wave',
+      secondaryVrms: 9,
+      windingResistanceOhm: 2,
+      frequencyHz: 50,
+      capacitanceF: 0.0033,
+      load: { kind: 'current', currentA: 0.1 },
+    },
+  },
 ];
 
 function runNgspice(netlist: string): Record<string, number> {
@@ -53,11 +135,21 @@ describe.skipIf(!hasNgspice)('built-in simulation against ngspice', () => {
       const sim = simulateRectifier(d.input);
       expect(sim.converged).toBe(true);
       const sp = runNgspice(rectifierNetlist(d.input));
-      expect(Math.abs(sim.dcMeanV / sp.vavg - 1), `mean ${sim.dcMeanV} vs ${sp.vavg}`).toBeLessThanOrEqual(toleranceMeanFraction);
-      expect(Math.abs(sim.ripplePpV - sp.vpp), `ripple ${sim.ripplePpV} vs ${sp.vpp}`).toBeLessThanOrEqual(toleranceRippleFraction * sp.vpp + toleranceRippleV);
-      expect(Math.abs(sim.troughV - sp.vmin), `trough ${sim.troughV} vs ${sp.vmin}`).toBeLessThanOrEqual(toleranceTroughV);
-      expect(Math.abs(sim.secondaryRmsA / sp.isec - 1), `RMS ${sim.secondaryRmsA} vs ${sp.isec}`).toBeLessThanOrEqual(toleranceRmsFraction);
-      expect(Math.abs(sim.diodePeakA / sp.idpk - 1), `peak ${sim.diodePeakA} vs ${sp.idpk}`).toBeLessThanOrEqual(tolerancePeakFraction);
+      expect(Math.abs(sim.dcMeanV / sp.vavg - 1), `mean ${sim.dcMeanV} vs ${sp.vavg}`).toBeLessThanOrEqual(
+        toleranceMeanFraction,
+      );
+      expect(Math.abs(sim.ripplePpV - sp.vpp), `ripple ${sim.ripplePpV} vs ${sp.vpp}`).toBeLessThanOrEqual(
+        toleranceRippleFraction * sp.vpp + toleranceRippleV,
+      );
+      expect(Math.abs(sim.troughV - sp.vmin), `trough ${sim.troughV} vs ${sp.vmin}`).toBeLessThanOrEqual(
+        toleranceTroughV,
+      );
+      expect(Math.abs(sim.secondaryRmsA / sp.isec - 1), `RMS ${sim.secondaryRmsA} vs ${sp.isec}`).toBeLessThanOrEqual(
+        toleranceRmsFraction,
+      );
+      expect(Math.abs(sim.diodePeakA / sp.idpk - 1), `peak ${sim.diodePeakA} vs ${sp.idpk}`).toBeLessThanOrEqual(
+        tolerancePeakFraction,
+      );
     });
   }
 });

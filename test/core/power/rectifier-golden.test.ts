@@ -9,8 +9,17 @@ import { simulateRectifier, type RectifierSimInput } from '../../../src/core/pow
 import { rectifierNetlist } from '../../../src/core/power/spice-netlist';
 
 const DIR = join(__dirname, '..', '..', 'fixtures', 'rectifier-golden');
-interface GoldenCase { id: string; what: string; netlist: string; input: RectifierSimInput; ngspice: Record<'vavg' | 'vpp' | 'vmin' | 'vmax' | 'isec' | 'idpk', number> }
-const golden = JSON.parse(readFileSync(join(DIR, 'golden.json'), 'utf8')) as { provenance: Record<string, string>; cases: GoldenCase[] };
+interface GoldenCase {
+  id: string;
+  what: string;
+  netlist: string;
+  input: RectifierSimInput;
+  ngspice: Record<'vavg' | 'vpp' | 'vmin' | 'vmax' | 'isec' | 'idpk', number>;
+}
+const golden = JSON.parse(readFileSync(join(DIR, 'golden.json'), 'utf8')) as {
+  provenance: Record<string, string>;
+  cases: GoldenCase[];
+};
 
 // Tolerances (named with units), as in the live ngspice cross-check
 const toleranceMeanFraction = 0.003; // DC mean, 0.3 %
@@ -33,12 +42,20 @@ describe('rectifier simulation against the committed ngspice fixture', () => {
       const sim = simulateRectifier(c.input);
       const sp = c.ngspice;
       expect(sim.converged).toBe(true);
-      expect(Math.abs(sim.dcMeanV / sp.vavg - 1), `mean ${sim.dcMeanV} vs ${sp.vavg}`).toBeLessThanOrEqual(toleranceMeanFraction);
-      expect(Math.abs(sim.ripplePpV - sp.vpp), `ripple ${sim.ripplePpV} vs ${sp.vpp}`).toBeLessThanOrEqual(toleranceRippleFraction * sp.vpp + toleranceRippleV);
+      expect(Math.abs(sim.dcMeanV / sp.vavg - 1), `mean ${sim.dcMeanV} vs ${sp.vavg}`).toBeLessThanOrEqual(
+        toleranceMeanFraction,
+      );
+      expect(Math.abs(sim.ripplePpV - sp.vpp), `ripple ${sim.ripplePpV} vs ${sp.vpp}`).toBeLessThanOrEqual(
+        toleranceRippleFraction * sp.vpp + toleranceRippleV,
+      );
       expect(Math.abs(sim.troughV - sp.vmin), `trough ${sim.troughV} vs ${sp.vmin}`).toBeLessThanOrEqual(toleranceV);
       expect(Math.abs(sim.peakV - sp.vmax), `peak ${sim.peakV} vs ${sp.vmax}`).toBeLessThanOrEqual(toleranceV);
-      expect(Math.abs(sim.secondaryRmsA / sp.isec - 1), `RMS ${sim.secondaryRmsA} vs ${sp.isec}`).toBeLessThanOrEqual(toleranceRmsFraction);
-      expect(Math.abs(sim.diodePeakA / sp.idpk - 1), `peak ${sim.diodePeakA} vs ${sp.idpk}`).toBeLessThanOrEqual(tolerancePeakFraction);
+      expect(Math.abs(sim.secondaryRmsA / sp.isec - 1), `RMS ${sim.secondaryRmsA} vs ${sp.isec}`).toBeLessThanOrEqual(
+        toleranceRmsFraction,
+      );
+      expect(Math.abs(sim.diodePeakA / sp.idpk - 1), `peak ${sim.diodePeakA} vs ${sp.idpk}`).toBeLessThanOrEqual(
+        tolerancePeakFraction,
+      );
     });
   }
 });

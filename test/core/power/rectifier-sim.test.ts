@@ -17,7 +17,8 @@ const refCase = (mainsFactor: number): RectifierSimInput => ({
   diodeDropV: 0.75, diodeResistanceOhm: 0.02, capacitanceF: 0.01, esrOhm: 0, load: { kind: 'current', currentA: 3 },
 });
 
-describe('consistency check (same element model, not a reference): bridge rectifier against the §4.2 script table', () => {
+describe('consistency check (same element model, not a reference): bridge rectifier against the ' +
+  '§4.2 script table', () => {
   // Source: reference values §4.2 table (mains, V_max, V_min, V_pp, V_avg, I_sec,rms, I_pk, Ic,rms, conduction)
   const rows = [
     { f: 0.9, max: 20.48, min: 18.42, pp: 2.06, avg: 19.46, rms: 5.7, pk: 13.6, ic: 4.84, cond: 0.33 },
@@ -70,7 +71,13 @@ describe('consistency check (same element model, not a reference): bridge rectif
 // Contract suite: every topology obeys the same textbook bounds (ref §4.1).
 const topologies: RectifierTopology[] = ['bridge', 'centre-tap', 'half-wave'];
 describe.each(topologies)('%s contract', (topology) => {
-  const base: RectifierSimInput = { ...refCase(1), topology, secondaryVrms: 19.08, capacitanceF: 0.0047, load: { kind: 'current', currentA: 1 } };
+  const base: RectifierSimInput = {
+    ...refCase(1),
+    topology,
+    secondaryVrms: 19.08,
+    capacitanceF: 0.0047,
+    load: { kind: 'current', currentA: 1 },
+  };
   const diodes = topology === 'bridge' ? 2 : 1;
   const r = simulateRectifier(base);
 
@@ -104,8 +111,14 @@ describe.each(topologies)('%s contract', (topology) => {
 
 describe('bad and extreme inputs never hang and never give NaN', () => {
   const bad: Partial<RectifierSimInput>[] = [
-    { capacitanceF: 0 }, { capacitanceF: -1 }, { frequencyHz: 0 }, { secondaryVrms: 0 }, { secondaryVrms: NaN },
-    { windingResistanceOhm: -1 }, { load: { kind: 'resistance', resistanceOhm: 0 } }, { load: { kind: 'current', currentA: -2 } },
+    { capacitanceF: 0 },
+    { capacitanceF: -1 },
+    { frequencyHz: 0 },
+    { secondaryVrms: 0 },
+    { secondaryVrms: NaN },
+    { windingResistanceOhm: -1 },
+    { load: { kind: 'resistance', resistanceOhm: 0 } },
+    { load: { kind: 'current', currentA: -2 } },
     // Subnormals above 0 (regression): they passed `x <= 0` and gave 0 V results with no note, or an infinite
     // conductance
     { capacitanceF: 5e-324 }, { frequencyHz: 5e-324 }, { secondaryVrms: 1.5e-322 }, { bleederOhm: 5e-324 },
@@ -125,7 +138,14 @@ describe('bad and extreme inputs never hang and never give NaN', () => {
     expect(r.note).toMatch(/cannot deliver/);
   });
   it('extreme values stay finite and bounded by the cycle cap', () => {
-    const r = simulateRectifier({ ...refCase(1), capacitanceF: 1e-9, windingResistanceOhm: 0, diodeResistanceOhm: 0, esrOhm: 0, maxCycles: 50 });
+    const r = simulateRectifier({
+      ...refCase(1),
+      capacitanceF: 1e-9,
+      windingResistanceOhm: 0,
+      diodeResistanceOhm: 0,
+      esrOhm: 0,
+      maxCycles: 50,
+    });
     expect(r.cycles).toBeLessThanOrEqual(52);
     expect([r.dcMeanV, r.ripplePpV, r.diodePeakA, r.secondaryRmsA].every(Number.isFinite)).toBe(true);
   });
@@ -134,7 +154,13 @@ describe('bad and extreme inputs never hang and never give NaN', () => {
 describe('rules of thumb as loose cross-checks (ref §4.1; maker design note [C], "use as a cross-check only")', () => {
   // 18 V, 100 VA winding at 6 % and 10 % regulation: R_s = Reg x 18^2 / 100 (ref §4.1)
   const at = (topology: RectifierTopology, reg: number, currentA: number) =>
-    simulateRectifier({ ...refCase(1), topology, secondaryVrms: 18 * (1 + reg), windingResistanceOhm: (reg * 18 * 18) / 100, load: { kind: 'current', currentA } });
+    simulateRectifier({
+      ...refCase(1),
+      topology,
+      secondaryVrms: 18 * (1 + reg),
+      windingResistanceOhm: (reg * 18 * 18) / 100,
+      load: { kind: 'current', currentA },
+    });
   for (const reg of [0.06, 0.1]) {
     it(`bridge, ${reg * 100} % regulation: I_AC/I_DC inside the 1.6-2.2 band, peak 4-8 x I_DC`, () => {
       const r = at('bridge', reg, 3);
@@ -147,7 +173,8 @@ describe('rules of thumb as loose cross-checks (ref §4.1; maker design note [C]
       const toleranceRatio = 0.3;
       expect(Math.abs(at('half-wave', reg, 1.5).secondaryRmsA / 1.5 - 2.6)).toBeLessThanOrEqual(toleranceRatio);
     });
-    it(`centre-tap, ${reg * 100} % regulation: each half carries the bridge RMS / sqrt(2) (same rectified current)`, () => {
+    it(`centre-tap, ${reg * 100} % regulation: each half carries the bridge RMS / sqrt(2) (same ` +
+      `rectified current)`, () => {
       const toleranceFraction = 0.03;
       const b = at('bridge', reg, 3).secondaryRmsA;
       const ct = at('centre-tap', reg, 3).secondaryRmsA;

@@ -9,10 +9,20 @@ const toleranceS = 0.001;
 const toleranceW = 1e-6;
 // source: 4700 µF reservoir from 24 V through 2.2 kΩ, RC = 10.34 s
 const source = reservoirFall(24, 4700e-6, 2200);
-const rail = { railName: '13.8 V rail', sourceName: 'Raw DC', outputV: 13.8, dropoutV: 2, capacitanceF: 100e-6, fittedOhm: 1000, ratedW: 0.5, sourceFall: source };
+const rail = {
+  railName: '13.8 V rail',
+  sourceName: 'Raw DC',
+  outputV: 13.8,
+  dropoutV: 2,
+  capacitanceF: 100e-6,
+  fittedOhm: 1000,
+  ratedW: 0.5,
+  sourceFall: source,
+};
 
 describe('regulated rail bleeder', () => {
-  it('source to 7 V (5 V + 2 V dropout): 10.34 ln(24/7) = 12.740 s, longer than hold 10.34 ln(24/15.8) + 0.1 ln(13.8/5) = 4.424 s', () => {
+  it('source to 7 V (5 V + 2 V dropout): 10.34 ln(24/7) = 12.740 s, longer than hold 10.34 ln(24/15.8) + ' +
+    '0.1 ln(13.8/5) = 4.424 s', () => {
     // 10.34 x 1.232144 = 12.74037; hold 10.34 x 0.418043 = 4.32256 plus own 0.1 x 1.015231 = 0.101523 -> 4.42408
     const b = regulatedBleeder(rail);
     expect(b.safeV).toBe(5);
@@ -36,14 +46,22 @@ describe('regulated rail bleeder', () => {
     expect(regulatedBleederFindings('13.8 V rail', b)[0].message).toContain('220 kΩ');
   });
   it('a source without a bleeder holds the rail up; a battery too; an unknown capacitance is said', () => {
-    expect(regulatedBleeder({ ...rail, sourceFall: reservoirFall(24, 4700e-6, null) }).why).toContain('Raw DC has no bleeder');
+    expect(regulatedBleeder({ ...rail, sourceFall: reservoirFall(24, 4700e-6, null) }).why).toContain(
+      'Raw DC has no bleeder',
+    );
     expect(regulatedBleeder({ ...rail, sourceFall: null }).why).toContain('battery');
     expect(regulatedBleeder({ ...rail, capacitanceF: null }).why).toContain('capacitance is not entered');
   });
   it('above 60 V the 60 V / 5 s target applies and a slow discharge fails', () => {
     // 100 V output, 2 V dropout, source 150 V through 10 kΩ x 100 µF (RC 1 s): to 62 V 1 x ln(150/62) = 0.883 s;
     // hold to 102 V: ln(150/102) = 0.385662, own 100 kΩ x 100 µF = 10 s x ln(100/60) = 5.108256 -> 5.4939 s > 5 s
-    const b = regulatedBleeder({ ...rail, outputV: 100, capacitanceF: 100e-6, fittedOhm: 100_000, sourceFall: reservoirFall(150, 100e-6, 10_000) });
+    const b = regulatedBleeder({
+      ...rail,
+      outputV: 100,
+      capacitanceF: 100e-6,
+      fittedOhm: 100_000,
+      sourceFall: reservoirFall(150, 100e-6, 10_000),
+    });
     expect(b.safeV).toBe(60);
     near(b.fittedTimeS!, 5.493918, toleranceS, 'time');
     expect(regulatedBleederFindings('HV rail', b)[0].severity).toBe('fail');
@@ -54,8 +72,19 @@ describe('the output bleeder is a heat source inside the box', () => {
   it('P = V² / R at the set output joins the heat budget', async () => {
     const { heatBudget } = await import('../../../src/core/power/heat-budget');
     const b = regulatedBleeder(rail);
-    const reg = { kind: 'regulated', railName: '13.8 V rail', thermalDissipationW: 1, bleeder: b } as unknown as import('../../../src/core/power/report-types').RailReport;
-    const h = heatBudget({ rails: [reg] } as unknown as import('../../../src/core/power/report-types').SupplyReport, [], null, null, 25);
+    const reg = {
+      kind: 'regulated',
+      railName: '13.8 V rail',
+      thermalDissipationW: 1,
+      bleeder: b,
+    } as unknown as import('../../../src/core/power/report-types').RailReport;
+    const h = heatBudget(
+      { rails: [reg] } as unknown as import('../../../src/core/power/report-types').SupplyReport,
+      [],
+      null,
+      null,
+      25,
+    );
     const src = h.sources.find((s) => s.name === '13.8 V rail output bleeder')!;
     // 13.8² / 1000 = 0.19044 W; total 1 + 0.19044
     near(src.watts, 0.19044, toleranceW, 'bleeder W');

@@ -21,7 +21,13 @@ describe('output ripple from the rejection', () => {
 
 describe('receiver rail target', () => {
   const corner = (outputRipplePpV: number | null): RegulatedCorner =>
-    ({ id: 'low-keyDown', label: 'Low mains, TX key-down', inputRipplePpV: 2.09, inDropout: false, outputRipplePpV }) as RegulatedCorner;
+    ({
+      id: 'low-keyDown',
+      label: 'Low mains, TX key-down',
+      inputRipplePpV: 2.09,
+      inDropout: false,
+      outputRipplePpV,
+    }) as RegulatedCorner;
   it('1.66 mV against a 1 mV target: fail', () => {
     expect(rippleFindings('RX rail', 62, 1e-3, [corner(outputRipplePpV(2.09, 62, false))])[0].severity).toBe('fail');
   });
@@ -41,14 +47,32 @@ describe('regulated rail report', () => {
   const parent = Object.fromEntries(specs.map((s) => [s.id, { troughV: 19, meanV: 20, ripplePpV: 2.09 }]));
   const out = { receive: 0.1, keyUp: 0.1, keyDown: 0.1 };
   it('62 dB entered: 1.66 mV p-p at every corner, passed on to the rail it feeds', () => {
-    const ev = evaluateRegulatedRail({ ...regulator13v8, rippleRejectionDb: 62, rippleTargetV: 1e-3 }, out, specs, parent, 25, false, 0.4, 25);
+    const ev = evaluateRegulatedRail(
+      { ...regulator13v8, rippleRejectionDb: 62, rippleTargetV: 1e-3 },
+      out,
+      specs,
+      parent,
+      25,
+      false,
+      0.4,
+      25,
+    );
     for (const c of ev.report.corners) near(c.outputRipplePpV ?? NaN, 1.66e-3, toleranceV, c.id);
     near(ev.outputAt['low-keyDown'].ripplePpV ?? NaN, 1.66e-3, toleranceV, 'passed on');
     expect(ev.report.findings.find((f) => f.rule === 'regulator.ripple')?.severity).toBe('fail');
   });
   it('an input trough below output + dropout (16 V < 13.8 + 2.5): in dropout, the ripple passes', () => {
     const low = Object.fromEntries(specs.map((s) => [s.id, { troughV: 16, meanV: 17, ripplePpV: 2.09 }]));
-    const ev = evaluateRegulatedRail({ ...regulator13v8, rippleRejectionDb: 62, rippleTargetV: null }, out, specs, low, 25, false, 0.4, 25);
+    const ev = evaluateRegulatedRail(
+      { ...regulator13v8, rippleRejectionDb: 62, rippleTargetV: null },
+      out,
+      specs,
+      low,
+      25,
+      false,
+      0.4,
+      25,
+    );
     expect(ev.report.corners[0].inDropout).toBe(true);
     expect(ev.report.corners[0].outputRipplePpV).toBe(2.09);
   });

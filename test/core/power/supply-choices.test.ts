@@ -35,8 +35,10 @@ describe('primary fuse type F2 (quick-acting, IEC 60127-2 sheet 2)', () => {
 describe('transformer sized for tune-up', () => {
   const duty = evaluate(club30m).supply!;
   const tune = evaluate({ ...club30m, supply: { ...club30m.supply, transformerSizing: 'tune-up' } }).supply!;
-  it('each winding is rated at its continuous key-down RMS current (Joule heating of a carrier held down), not the duty average', () => {
-    for (const t of tune.transformers) for (const w of t.windings) nearRel(w.ratedA, Math.max(w.thermalRmsA, w.tuneUpRmsA), rel, w.windingName);
+  it('each winding is rated at its continuous key-down RMS current (Joule heating of a carrier held down), not the ' +
+    'duty average', () => {
+    for (const t of tune.transformers)
+      for (const w of t.windings) nearRel(w.ratedA, Math.max(w.thermalRmsA, w.tuneUpRmsA), rel, w.windingName);
     const pa = (s: typeof duty) => s.transformers.flatMap((t) => t.windings).find((w) => w.windingName.includes('20'))!;
     expect(pa(tune).ratedA).toBeGreaterThan(pa(duty).ratedA);
   });
@@ -68,11 +70,14 @@ describe('an enclosure: the air inside is the ambient of the thermal checks insi
     near(reg.thermal!.ambientC, inside, 1e-9, 'regulator ambient');
     const words = `inside the box at ${inside.toFixed(0)} °C`;
     expect(r.findings.filter((f) => f.rule === 'thermal.bridge').every((f) => f.message.includes(words))).toBe(true);
-    expect(r.findings.some((f) => f.rule.startsWith('thermal.') && f.subject === reg.railName && f.message.includes(words))).toBe(true);
+    expect(
+      r.findings.some((f) => f.rule.startsWith('thermal.') && f.subject === reg.railName && f.message.includes(words)),
+    ).toBe(true);
     expect(r.findings.some((f) => /^pa\.(heatsink|tj-)/.test(f.rule) && f.message.includes(words))).toBe(true);
     expect(r.supply!.thermalAmbient).toEqual({ ambientC: inside, inside: true });
   });
-  it('the transformer in air above its commonly rated 40 °C ambient gets a caution; a roomy box (10 m², rise under 1 K) none', () => {
+  it('the transformer in air above its commonly rated 40 °C ambient gets a caution; a roomy box (10 m², rise ' +
+    'under 1 K) none', () => {
     // rated ambient ta 40 °C: the common marking of small mains transformers (from memory, not confirmed)
     const f = r.findings.filter((x) => x.rule === 'transformer.ambient');
     expect(inside).toBeGreaterThan(40);

@@ -26,7 +26,9 @@ describe('stated lowest voltage of the loads on an unregulated rail', () => {
     const ok = evaluateSupply(refProject({ rails: [{ ...refRail, minimumV: BELOW_TROUGH_V }] }), { raw: flat(3) });
     expect(ok.rails[0].findings.find((x) => x.rule === 'rail.headroom')!.severity).toBe('ok');
     const none = evaluateSupply(refProject(), { raw: flat(3) });
-    expect(none.rails[0].findings.find((x) => x.rule === 'rail.headroom')!.message).toContain('no lowest voltage is stated');
+    expect(none.rails[0].findings.find((x) => x.rule === 'rail.headroom')!.message).toContain(
+      'no lowest voltage is stated',
+    );
   });
   it('with a regulator fed, the higher of the two needs counts (13.8 V + 2.5 V dropout = 16.3 V < 19 V stated)', () => {
     const p = refProject({ rails: [{ ...refRail, minimumV: ABOVE_TROUGH_V }, regulator13v8] });
@@ -36,7 +38,8 @@ describe('stated lowest voltage of the loads on an unregulated rail', () => {
 });
 
 describe('refused inputs', () => {
-  it('a NaN reservoir: fail naming rail and field; the rail and the regulator it feeds are left out and say why', () => {
+  it('a NaN reservoir: fail naming rail and field; the rail and the regulator it feeds are left ' +
+    'out and say why', () => {
     const p = refProject({ rails: [{ ...refRail, reservoirF: NaN }, regulator13v8] });
     const report = evaluateSupply(p, { raw: flat(3), reg: flat(3) });
     const refused = report.findings.find((f) => f.rule === 'input.supply')!;
@@ -50,18 +53,25 @@ describe('refused inputs', () => {
     expect(report.transformers).toEqual([]);
     expect(report.findings.some((f) => f.subject === 'T1' && f.rule === 'supply.refused-input')).toBe(true);
   });
-  it('a negative winding rating: the winding is named, its rail says it depends on it, nothing is computed from 0', () => {
+  it('a negative winding rating: the winding is named, its rail says it depends on it, nothing is ' +
+    'computed from 0', () => {
     const p = refProject();
     p.supply.transformers[0].windings[0].ratedA = -1;
     const report = evaluateSupply(p, { raw: flat(3) });
-    expect(report.findings.find((f) => f.rule === 'input.supply')!.subject).toBe('Winding “18 V winding” (“T1”): Rated current');
+    expect(report.findings.find((f) => f.rule === 'input.supply')!.subject).toBe(
+      'Winding “18 V winding” (“T1”): Rated current',
+    );
     expect(report.rails).toEqual([]);
-    expect(report.findings.find((f) => f.subject === 'Raw rail')!.message).toContain('rectified from the winding “18 V winding”');
+    expect(report.findings.find((f) => f.subject === 'Raw rail')!.message).toContain(
+      'rectified from the winding “18 V winding”',
+    );
     expect(report.primary).toBeNull();
   });
   it('a refused fitted primary fuse is named and not checked; the recommendation stays', () => {
     const report = evaluateSupply(refProject({ primaryFuseA: Infinity }), { raw: flat(3) });
-    expect(report.findings.find((f) => f.rule === 'input.supply')!.subject).toBe('Primary fuse: Fitted primary (mains) fuse');
+    expect(report.findings.find((f) => f.rule === 'input.supply')!.subject).toBe(
+      'Primary fuse: Fitted primary (mains) fuse',
+    );
     expect(report.primary?.fittedA).toBeNull();
     expect(report.primary?.fuse.ratedA).not.toBeNull();
   });

@@ -25,7 +25,9 @@ describe('rectifier plot', () => {
     expect(svg.match(/<polyline /g)).toHaveLength(2);
   });
   it('says so when there is no waveform', () => {
-    expect(rectifierPlotSvg({ title: 't', timeS: [], outputV: [], windingA: [], minimumV: null, minimumLabel: '' })).toContain('No waveform');
+    expect(
+      rectifierPlotSvg({ title: 't', timeS: [], outputV: [], windingA: [], minimumV: null, minimumLabel: '' }),
+    ).toContain('No waveform');
   });
 });
 
@@ -54,7 +56,8 @@ describe('a regulated rail fed from a battery (portable demo)', () => {
   // a battery feeds no ripple: whatever the regulator's rejection, none reaches the output (0 V in, 0 V out)
   const portable = evaluate(DEMO_PROJECTS[1]).supply!;
   const html = String(SupplyResults({ report: portable }));
-  it('says no ripple reaches the output instead of "unknown", and the PA-on-battery card is not called transformers', () => {
+  it('says no ripple reaches the output instead of "unknown", and the PA-on-battery card is not called ' +
+    'transformers', () => {
     expect(portable.transformers).toHaveLength(0);
     expect(html).toContain('No ripple at the input (a steady source such as a battery), so none at the output.');
     expect(html).not.toContain('Ripple at the output unknown');

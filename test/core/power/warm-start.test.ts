@@ -7,8 +7,16 @@ import { simulateSharedPrimary, type JointInput } from '../../../src/core/power/
 import { minimumCapacitanceF } from '../../../src/core/power/reservoir';
 
 const base: RectifierSimInput = {
-  topology: 'bridge', secondaryVrms: 18, windingResistanceOhm: 0.4, frequencyHz: 60, diodeDropV: 0.7, diodeResistanceOhm: 0.05,
-  capacitanceF: 4700e-6, esrOhm: 0.03, load: { kind: 'current', currentA: 1.2 }, waveformPoints: 0,
+  topology: 'bridge',
+  secondaryVrms: 18,
+  windingResistanceOhm: 0.4,
+  frequencyHz: 60,
+  diodeDropV: 0.7,
+  diodeResistanceOhm: 0.05,
+  capacitanceF: 4700e-6,
+  esrOhm: 0.03,
+  load: { kind: 'current', currentA: 1.2 },
+  waveformPoints: 0,
 };
 const at = (currentA: number): RectifierSimInput => ({ ...base, load: { kind: 'current', currentA } });
 
