@@ -53,7 +53,10 @@ function waveformText(pa: PaResult): string {
   return `current pulse, edge of saturation to flat-topped: ${band}`;
 }
 
-const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) =>
+/** The PA's design output after the filter, at the antenna connector (the report's, for the PA it was taken from). */
+interface AfterFilter { outputW: number; lossDb: number }
+
+const PaTable: FC<{ name: string; pa: PaResult; after: AfterFilter | null }> = ({ name, pa, after }) =>
   pa.refused ? (
     <PaRefused name={name} pa={pa} />
   ) : (
@@ -61,7 +64,15 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) =>
       <h3>{name}: final amplifier</h3>
       <KV
         rows={[
-          ['Output', `${fv(pa.outputW, 'W')} = ${fv(pa.outputDbm, 'dBm')} = ${fv(pa.outputDbw, 'dBW')}`],
+          [
+            'Output at the PA (design load)',
+            `${fv(pa.outputW, 'W')} = ${fv(pa.outputDbm, 'dBm')} = ${fv(pa.outputDbw, 'dBW')} at ` +
+              `${fv(pa.railV, 'V')}` +
+              (after
+                ? `; ${fv(after.outputW, 'W')} at the antenna connector after the filter's ` +
+                  `${fv(after.lossDb, 'dB')} loss`
+                : ''),
+          ],
           [
             'Against reference',
             `${fv(pa.vsReferenceDb, 'dB')} (${pa.vsReferenceSUnits.toFixed(1)} S-units at 6 dB each)`,
@@ -107,18 +118,25 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) =>
               ]
             : []),
           [
-            `Peak drain voltage / device current (design ` +
-              `load${pa.maxRailV > pa.railV ? `, highest supply ${fv(pa.maxRailV, 'V')}` : ''})`,
-            `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`,
+            'Peak drain voltage / device current (design load)',
+            pa.maxRailV > pa.railV
+              ? `${fv(pa.peakDrainV, 'V')} at the highest supply, ${fv(pa.maxRailV, 'V')} / ` +
+                `${fv(pa.peakDeviceA, 'A')} at ${fv(pa.railV, 'V')}`
+              : `${fv(pa.peakDrainV, 'V')} / ${fv(pa.peakDeviceA, 'A')}`,
           ],
           ...(pa.swr?.designLoad
             ? [
                 [
                   'With a matched antenna, through the filter as built',
-                  `${fv(pa.swr.designLoad.drainPeakV, 'V')} / ${fv(pa.swr.designLoad.peakDeviceA, 'A')}, ` +
-                    `${fv(pa.swr.designLoad.outputW, 'W')} into ` +
-                    `${ohmText(pa.swr.designLoad.loadReOhm, pa.swr.designLoad.loadImOhm)} ` +
-                    `(filter input SWR ${pa.swr.designLoad.inputSwr.toFixed(2)})`,
+                  `the PA sees ${ohmText(pa.swr.designLoad.loadReOhm, pa.swr.designLoad.loadImOhm)} (filter input ` +
+                    `SWR ${pa.swr.designLoad.inputSwr.toFixed(2)}): ${fv(pa.swr.designLoad.outputW, 'W')} ` +
+                    `(${fv(pa.hotOutputW, 'W')} into the design load), drain peak ` +
+                    `${fv(pa.swr.designLoad.drainPeakV, 'V')}, device current ` +
+                    `${fv(pa.swr.designLoad.peakDeviceA, 'A')}` +
+                    (pa.maxRailV > pa.hotRailV
+                      ? ` (at the highest supply: ${fv(pa.maxRailV, 'V')} for the drain peak, ` +
+                        `${fv(pa.hotRailV, 'V')} key-down for the rest)`
+                      : ` (at the highest supply, ${fv(pa.maxRailV, 'V')})`),
                 ] as [string, string],
               ]
             : []),
@@ -147,7 +165,7 @@ const PaTable: FC<{ name: string; pa: PaResult }> = ({ name, pa }) =>
           ],
         ]}
       />
-      <PaSwrTable s={pa.swr} />
+      <PaSwrTable s={pa.swr} maxRailV={pa.maxRailV} hotRailV={pa.hotRailV} />
       {pa.ratioOptions.length > 0 ? (
         <table class="grid ratios">
           <caption>Practical transformer ratios (primary : secondary turns) and the power each gives</caption>
@@ -657,12 +675,33 @@ export const RuleSetBlock: FC<{ ruleSet: RfReport['ruleSet'] }> = ({ ruleSet }) 
   );
 };
 
+/** The report's output at the antenna connector belongs to its PA: the filter's loss at the operating frequency. */
+function afterFilter(report: RfReport, stageId: string): AfterFilter | null {
+  if (stageId !== report.paStageId || report.lpfStageId === null) return null;
+  const lpf = report.stages.find((x) => x.stageId === report.lpfStageId)?.lpf;
+  const lossDb = lpf?.analysis?.atOperating.lossDb;
+  return lossDb === undefined ? null : { outputW: report.outputPowerW, lossDb };
+}
+
+/** The line under "RF design": where the output figure is taken and what it is compared with. */
+function outputLine(report: RfReport): string {
+  const pa = report.stages.find((x) => x.stageId === report.paStageId)?.pa;
+  const target = `target ${fv(report.targetPowerW, 'W')}`;
+  if (!pa || pa.refused) {
+    return `${fv(report.outputPowerW, 'W')} at the antenna connector, taken from the ${target} (no PA computed)`;
+  }
+  const after = afterFilter(report, report.paStageId ?? '');
+  return after
+    ? `${fv(after.outputW, 'W')} at the antenna connector (${fv(pa.outputW, 'W')} from the PA into its design ` +
+      `load at ${fv(pa.railV, 'V')}, less the filter's ${fv(after.lossDb, 'dB')}); ${target}`
+    : `${fv(pa.outputW, 'W')} from the PA into its design load at ${fv(pa.railV, 'V')}; ${target}`;
+}
+
 export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
   <section class="card" id="rf-results">
     <h2>RF design</h2>
     <p class="summary-line">
-      {fv(report.frequencyHz, 'Hz', 5)}, {fv(report.outputPowerW, 'W')} at the output (target{' '}
-      {fv(report.targetPowerW, 'W')})
+      {fv(report.frequencyHz, 'Hz', 5)}: {outputLine(report)}
     </p>
     <RuleSetBlock ruleSet={report.ruleSet} />
     {report.inputErrors.length > 0 ? (
@@ -675,7 +714,7 @@ export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
     {report.stages.map((s) =>
       s.pa ? (
         <>
-          <PaTable name={s.stageName} pa={s.pa} />
+          <PaTable name={s.stageName} pa={s.pa} after={afterFilter(report, s.stageId)} />
           {s.network || s.choke ? (
             <OutputNetworkTable name={s.stageName} n={s.network ?? null} c={s.choke ?? null} />
           ) : null}

@@ -28,7 +28,23 @@ describe('RF page wording on the demos', () => {
   });
   it('portable: the design-load drain peak is labelled with the highest supply, 14.4 V (a full LiFePO4 battery)', async () => {
     const h = await html(portable20m);
-    expect(h).toMatch(/design load, highest supply 14\.4 V/);
+    expect(h).toMatch(
+      /Peak drain voltage \/ device current \(design load\)<\/th><td>[\d.]+ V at the highest supply, 14\.4 V \/ /,
+    );
+  });
+  it('club: which output is where: the subtitle at the antenna connector, the PA row at the PA', async () => {
+    const h = await html(club30m);
+    // wording only: the figures are the program's own, so the checks take any number in their place
+    const n = String.raw`[\d.]+`;
+    expect(h).toMatch(new RegExp(`10\\.11 MHz: ${n} W at the antenna connector \\(${n} W from the PA into its ` +
+      `design load at ${n} V, less the filter&#39;s ${n} dB\\); target 20 W`));
+    expect(h).toMatch(new RegExp(`Output at the PA \\(design load\\)</th><td>${n} W = [^<]*; ${n} W at the ` +
+      'antenna connector after the filter&#39;s'));
+    // the matched-antenna row names its supplies (drain peak at the highest, the rest key-down) and the design load's
+    expect(h).toMatch(new RegExp(`the PA sees [^<]*Ω \\(filter input SWR ${n}\\): ${n} W \\(${n} W into the ` +
+      'design load\\)'));
+    expect(h).toMatch(new RegExp(`\\(at the highest supply: ${n} V for the drain peak, ${n} V key-down for the ` +
+      'rest\\)'));
   });
   it('portable (class E, SWR 2): the bands say which loads they cover and where each worst end lies', async () => {
     const h = await html(portable20m);
