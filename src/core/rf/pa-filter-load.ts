@@ -33,7 +33,7 @@ export function swrOf(gamma: number): number {
 export interface FilterLoadContext {
   /** The filter's design (ideal values, response, ripple); null when it is not known. */
   design: LpfDesign | null;
-  /** The stage's output into its design load at the supply the sweep used (the highest), W. */
+  /** The stage's output into its design load at the supply the sweep used (the highest key-down), W. */
   matchedOutputW: number;
   /** The device's drain-source rating, V. */
   deviceVdsMaxV: number;
@@ -72,8 +72,9 @@ export function filterLoadFindings(s: PaSwrStress, subject: string, ctx?: Filter
   const shiftDb = ctx && ctx.matchedOutputW > 0 ? 10 * Math.log10(d.outputW / ctx.matchedOutputW) : null;
   const stage = `the stage gives ${d.outputW.toFixed(1)} W` +
     (ctx && shiftDb !== null ? ` against ${ctx.matchedOutputW.toFixed(1)} W into the design load ` +
-      `(${shiftDb >= 0 ? '+' : ''}${shiftDb.toFixed(1)} dB, both at the highest supply)` : '') +
-    `, with drain peaks of ${d.drainPeakV.toFixed(1)} V and ${d.peakDeviceA.toFixed(2)} A peak per device`;
+      `(${shiftDb >= 0 ? '+' : ''}${shiftDb.toFixed(1)} dB, both at the highest key-down supply)` : '') +
+    `, with drain peaks of ${d.drainPeakV.toFixed(1)} V (at the highest supply) and ${d.peakDeviceA.toFixed(2)} A ` +
+    'peak per device';
   const bound = des?.passbandMax ?? null;
   const partsWorse = des !== null && d.inputSwr > Math.max(bound ?? 0, des.atOperating) * 1.005;
   const cause = des === null ? ''
