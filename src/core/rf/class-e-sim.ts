@@ -72,7 +72,13 @@ function expm(a: M): M {
  * One class-E stage into the normalised load zRe + j zIm (1 + j0 = design load). rdsOnRatio = Rds(on) / R
  * (at least 1e-3: an ideal switch has no finite step).
  */
-export function simulateClassE(zRe: number, zIm: number, rdsOnRatio: number, duty = 0.5, loadedQ = CLASS_E_QL): ClassEResult {
+export function simulateClassE(
+  zRe: number,
+  zIm: number,
+  rdsOnRatio: number,
+  duty = 0.5,
+  loadedQ = CLASS_E_QL,
+): ClassEResult {
   // The same inputs give the same result: remembered (bounded) so repeated evaluations of a project cost a look-up
   const key = `${zRe}|${zIm}|${rdsOnRatio}|${duty}|${loadedQ}`;
   const hit = memo.get(key);
@@ -128,7 +134,13 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
   };
   let prevPeak = Number.NaN;
   let res: ClassEResult = {
-    drainPeakRatio: 0, switchPeakRatio: 0, outputRatio: 0, dcInputRatio: 0, turnOnRatio: 0, cycles: 0, loadHarmonics: [],
+    drainPeakRatio: 0,
+    switchPeakRatio: 0,
+    outputRatio: 0,
+    dcInputRatio: 0,
+    turnOnRatio: 0,
+    cycles: 0,
+    loadHarmonics: [],
   };
   const cosT = COS_T;
   const sinT = SIN_T;

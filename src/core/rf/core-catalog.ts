@@ -32,10 +32,24 @@ export function findCore(p: Project, id: string | null | undefined): CatalogCore
 
 export function fromCatalog(c: CatalogCore, wireDiameterM: number | null): WoundCore {
   const { name, alHPerTurn2, aeM2, leM, innerDiameterM, windowAreaM2, fluxLimitT, minFrequencyHz, maxFrequencyHz } = c;
-  return { name, alHPerTurn2, aeM2, leM, innerDiameterM, windowAreaM2, wireDiameterM, fluxLimitT, minFrequencyHz, maxFrequencyHz, from: 'catalog' };
+  return {
+    name,
+    alHPerTurn2,
+    aeM2,
+    leM,
+    innerDiameterM,
+    windowAreaM2,
+    wireDiameterM,
+    fluxLimitT,
+    minFrequencyHz,
+    maxFrequencyHz,
+    from: 'catalog',
+  };
 }
 
-/** The filter's core: its catalog core when one is chosen (null when that id is not in the catalog), else as entered. */
+/**
+ * The filter's core: its catalog core when one is chosen (null when that id is not in the catalog), else as entered.
+ */
 export function lpfCore(p: Project, lpf: LpfParams): WoundCore | null {
   const wire = lpf.core?.wireDiameterM ?? null;
   if (lpf.coreId) {
@@ -53,9 +67,17 @@ export function enteredCore(lpf: Pick<LpfParams, 'coreName' | 'coreAlHPerTurn2' 
     ? toroidEffective(t.outerDiameterM, t.innerDiameterM, t.heightM)
     : null;
   return {
-    name: lpf.coreName, alHPerTurn2: lpf.coreAlHPerTurn2, aeM2: geo?.aeM2 ?? null, leM: geo?.leM ?? null,
-    innerDiameterM: t?.innerDiameterM ?? null, windowAreaM2: null, wireDiameterM: wire, fluxLimitT: t?.fluxLimitT ?? null,
-    minFrequencyHz: t?.minFrequencyHz ?? null, maxFrequencyHz: t?.maxFrequencyHz ?? null, from: 'entered',
+    name: lpf.coreName,
+    alHPerTurn2: lpf.coreAlHPerTurn2,
+    aeM2: geo?.aeM2 ?? null,
+    leM: geo?.leM ?? null,
+    innerDiameterM: t?.innerDiameterM ?? null,
+    windowAreaM2: null,
+    wireDiameterM: wire,
+    fluxLimitT: t?.fluxLimitT ?? null,
+    minFrequencyHz: t?.minFrequencyHz ?? null,
+    maxFrequencyHz: t?.maxFrequencyHz ?? null,
+    from: 'entered',
   };
 }
 
@@ -63,13 +85,17 @@ export function enteredCore(lpf: Pick<LpfParams, 'coreName' | 'coreAlHPerTurn2' 
 // Common practice, no published source: about 40 % of the window
 export const WINDOW_FILL = 0.4;
 
-/** Turns of a wire that fit the core: one layer inside a toroid's hole, else 40 % of the window area; null = unknown. */
+/**
+ * Turns of a wire that fit the core: one layer inside a toroid's hole, else 40 % of the window area; null = unknown.
+ */
 export function fitTurns(c: WoundCore): { turns: number; how: 'single-layer' | 'window' } | null {
   const d = c.wireDiameterM;
   if (d === null || !(d > 0)) return null;
-  if (c.innerDiameterM !== null && c.innerDiameterM > 2 * d) return { turns: singleLayerTurns(c.innerDiameterM, d), how: 'single-layer' };
+  if (c.innerDiameterM !== null && c.innerDiameterM > 2 * d)
+    return { turns: singleLayerTurns(c.innerDiameterM, d), how: 'single-layer' };
   // Common practice, no published source: each round wire takes π d²/4 of the window at the fill factor above
-  if (c.windowAreaM2 !== null) return { turns: Math.floor((WINDOW_FILL * c.windowAreaM2) / ((Math.PI * d * d) / 4)), how: 'window' };
+  if (c.windowAreaM2 !== null)
+    return { turns: Math.floor((WINDOW_FILL * c.windowAreaM2) / ((Math.PI * d * d) / 4)), how: 'window' };
   return null;
 }
 
@@ -98,8 +124,18 @@ export function checkOutputTransformer(
   if (!pa.outputCoreId || !pa.outputPrimaryTurns) return { check: null, findings };
   const c = findCore(project, pa.outputCoreId);
   if (!c) {
-    findings.push({ severity: 'fail', rule: 'core.missing', subject, value: null, limit: null, unit: '', source: 'design.consistency',
-      message: 'The output transformer core is not in the project’s core catalog (deleted?) or its data there is refused: choose another on the PA form or correct the core.' });
+    findings.push({
+      severity: 'fail',
+      rule: 'core.missing',
+      subject,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.consistency',
+      message:
+        'The output transformer core is not in the project’s core catalog (deleted?) or its data there is refused: ' +
+          'choose another on the PA form or correct the core.',
+    });
     return { check: null, findings };
   }
   if (!(primaryOhm > 0) || !(highestOutputW > 0) || !(project.frequencyHz > 0)) return { check: null, findings };
@@ -112,29 +148,60 @@ export function checkOutputTransformer(
   // the secondary's turns from the turns ratio in use (secondary : full primary), at least one
   const secondaryTurns = Math.max(1, Math.round(n * turnsRatio));
   const fit = fitTurns(fromCatalog(c, pa.outputWireDiameterM ?? null));
-  const check: OutputTransformerCheck = { coreName: c.name, primaryTurns: n, secondaryTurns, primaryRmsV, frequencyHz: fHz,
-    peakFluxT, fluxLimitT: c.fluxLimitT, fitTurns: fit?.turns ?? null };
+  const check: OutputTransformerCheck = {
+    coreName: c.name,
+    primaryTurns: n,
+    secondaryTurns,
+    primaryRmsV,
+    frequencyHz: fHz,
+    peakFluxT,
+    fluxLimitT: c.fluxLimitT,
+    fitTurns: fit?.turns ?? null,
+  };
   const mt = (t: number) => `${(t * 1e3).toFixed(1)} mT`;
   const at = `${primaryRmsV.toFixed(1)} V RMS across ${n} primary turns at ${(fHz / 1e6).toFixed(3)} MHz`;
   const over = peakFluxT > c.fluxLimitT;
-  findings.push({ severity: over ? 'fail' : 'ok', rule: 'core.output-flux', subject: `${subject}: output transformer`, value: peakFluxT, limit: c.fluxLimitT,
-    unit: 'T', source: 'core.output-transformer-flux',
+  findings.push({
+    severity: over ? 'fail' : 'ok',
+    rule: 'core.output-flux',
+    subject: `${subject}: output transformer`,
+    value: peakFluxT,
+    limit: c.fluxLimitT,
+    unit: 'T',
+    source: 'core.output-transformer-flux',
     message: over
       ? `${at} give ${mt(peakFluxT)} peak in the ${c.name}, above its ${mt(c.fluxLimitT)} limit: the core will heat. ` +
         `Use more primary turns (keeping the ratio) or a core with more area.`
       : `${at} give ${mt(peakFluxT)} peak in the ${c.name}, within its ${mt(c.fluxLimitT)} limit.` });
   if (fit) {
     const need = n + secondaryTurns;
-    findings.push({ severity: need > fit.turns ? 'fail' : 'ok', rule: 'core.output-fit', subject: `${subject}: output transformer`, value: need, limit: fit.turns,
-      unit: '', source: fit.how === 'window' ? 'core.window-fit' : 'core.winding-fit',
-      message: need > fit.turns
-        ? `${n} + ${secondaryTurns} turns of this wire do not fit the core (room for about ${fit.turns}): use thinner wire or a larger core.`
-        : `${n} + ${secondaryTurns} turns of this wire fit the core (room for about ${fit.turns}).` });
+    findings.push({
+      severity: need > fit.turns ? 'fail' : 'ok',
+      rule: 'core.output-fit',
+      subject: `${subject}: output transformer`,
+      value: need,
+      limit: fit.turns,
+      unit: '',
+      source: fit.how === 'window' ? 'core.window-fit' : 'core.winding-fit',
+      message:
+        need > fit.turns
+          ? `${n} + ${secondaryTurns} turns of this wire do not fit the core (room for about ${fit.turns}` +
+            `): use thinner wire or a larger core.`
+          : `${n} + ${secondaryTurns} turns of this wire fit the core (room for about ${fit.turns}).`,
+    });
   }
   if (fHz < c.minFrequencyHz || project.frequencyHz > c.maxFrequencyHz) {
-    findings.push({ severity: 'caution', rule: 'core.frequency', subject: `${subject}: output transformer`, value: project.frequencyHz,
-      limit: fHz < c.minFrequencyHz ? c.minFrequencyHz : c.maxFrequencyHz, unit: 'Hz', source: 'design.maker-rating',
-      message: `The ${c.name} is made for ${(c.minFrequencyHz / 1e6).toFixed(1)}–${(c.maxFrequencyHz / 1e6).toFixed(1)} MHz: choose a material for this band.` });
+    findings.push({
+      severity: 'caution',
+      rule: 'core.frequency',
+      subject: `${subject}: output transformer`,
+      value: project.frequencyHz,
+      limit: fHz < c.minFrequencyHz ? c.minFrequencyHz : c.maxFrequencyHz,
+      unit: 'Hz',
+      source: 'design.maker-rating',
+      message: `The ${c.name} is made for ${(c.minFrequencyHz / 1e6).toFixed(1)}–` +
+        `${(c.maxFrequencyHz / 1e6).toFixed(1)} MHz: choose a material for this band.`,
+    });
   }
   return { check, findings };
 }

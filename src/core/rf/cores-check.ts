@@ -4,7 +4,13 @@ import type { Finding } from '../findings';
 import type { ToroidCore } from '../model';
 import type { LpfDesign } from './lpf-design';
 import { elementStress, swrCircle } from './lpf-stress';
-import { CAPACITOR_LEAD_INDUCTANCE_H, WINDING_CAPACITANCE_F, effectivePermeability, peakFluxDensityT, resonanceHz } from './cores';
+import {
+  CAPACITOR_LEAD_INDUCTANCE_H,
+  WINDING_CAPACITANCE_F,
+  effectivePermeability,
+  peakFluxDensityT,
+  resonanceHz,
+} from './cores';
 import { enteredCore, fitTurns, type WoundCore } from './core-catalog';
 
 /** Highest harmonic whose rejection the filter is judged on; a part resonating below it stops behaving as itself. */
@@ -81,61 +87,169 @@ export function realiseLpf(
       const fit = core ? fitTurns(core) : null;
       const fitN = fit?.turns ?? null;
       const selfResonanceHz = resonanceHz(e.builtValue, WINDING_CAPACITANCE_F);
-      inductors.push({ index: e.index, inductanceH: e.builtValue, turns, rmsV: s.rmsV, rmsA: s.rmsA, peakFluxT, fitTurns: fitN, selfResonanceHz });
+      inductors.push({
+        index: e.index,
+        inductanceH: e.builtValue,
+        turns,
+        rmsV: s.rmsV,
+        rmsA: s.rmsA,
+        peakFluxT,
+        fitTurns: fitN,
+        selfResonanceHz,
+      });
       const who = `${subject}: L${e.index}`;
       const limit = core?.fluxLimitT ?? null;
       if (peakFluxT !== null && limit !== null) {
-        findings.push({ severity: peakFluxT > limit ? 'fail' : 'ok', rule: 'core.flux', subject: who, value: peakFluxT, limit, unit: 'T', source: 'core.emf-equation',
-          message: peakFluxT > limit
-            ? `${turns} turns carry ${s.rmsV.toFixed(1)} V RMS at the worst load: ${(peakFluxT * 1e3).toFixed(1)} mT peak, above the core's ${(limit * 1e3).toFixed(1)} mT limit; the core will heat. Use a larger core (more area).`
-            : `${turns} turns carry ${s.rmsV.toFixed(1)} V RMS at the worst load: ${(peakFluxT * 1e3).toFixed(1)} mT peak against the core's ${(limit * 1e3).toFixed(1)} mT limit.` });
+        findings.push({
+          severity: peakFluxT > limit ? 'fail' : 'ok',
+          rule: 'core.flux',
+          subject: who,
+          value: peakFluxT,
+          limit,
+          unit: 'T',
+          source: 'core.emf-equation',
+          message:
+            peakFluxT > limit
+              ? `${turns} turns carry ${s.rmsV.toFixed(1)} V RMS at the worst load: ${(peakFluxT * 1e3).toFixed(1)}` +
+                ` mT peak, above the core's ${(limit * 1e3).toFixed(1)} mT limit; the core will heat. Use a larger ` +
+                `core (more area).`
+              : `${turns} turns carry ${s.rmsV.toFixed(1)} V RMS at the worst load: ${(peakFluxT * 1e3).toFixed(1)}` +
+                ` mT peak against the core's ${(limit * 1e3).toFixed(1)} mT limit.`,
+        });
       }
       if (fit && fitN !== null) {
         const where = fit.how === 'window' ? 'in the core’s window' : 'in one layer inside the core';
-        findings.push({ severity: turns > fitN ? 'fail' : 'ok', rule: 'core.fit', subject: who, value: turns, limit: fitN, unit: '', source: fit.how === 'window' ? 'core.window-fit' : 'core.winding-fit',
-          message: turns > fitN
-            ? `${turns} turns do not fit ${where} (about ${fitN} of this wire): use thinner wire or a larger core.`
-            : `${turns} turns fit ${where} (room for about ${fitN}).` });
+        findings.push({
+          severity: turns > fitN ? 'fail' : 'ok',
+          rule: 'core.fit',
+          subject: who,
+          value: turns,
+          limit: fitN,
+          unit: '',
+          source: fit.how === 'window' ? 'core.window-fit' : 'core.winding-fit',
+          message:
+            turns > fitN
+              ? `${turns} turns do not fit ${where} (about ${fitN} of this wire): use thinner wire or a larger core.`
+              : `${turns} turns fit ${where} (room for about ${fitN}).`,
+        });
       }
       if (selfResonanceHz < topHz) {
-        findings.push({ severity: 'caution', rule: 'core.self-resonance', subject: who, value: selfResonanceHz, limit: topHz, unit: 'Hz', source: 'core.self-resonance',
-          message: `With about ${WINDING_CAPACITANCE_F * 1e12} pF across its winding this inductor resonates near ${mhz(selfResonanceHz)}, below the ${HIGHEST_HARMONIC}th harmonic (${mhz(topHz)}): the filter rejects less there than computed.` });
+        findings.push({
+          severity: 'caution',
+          rule: 'core.self-resonance',
+          subject: who,
+          value: selfResonanceHz,
+          limit: topHz,
+          unit: 'Hz',
+          source: 'core.self-resonance',
+          message: `With about ${WINDING_CAPACITANCE_F * 1e12} pF across its winding this inductor ` +
+            `resonates near ${mhz(selfResonanceHz)}, below the ${HIGHEST_HARMONIC}th harmonic (${mhz(topHz)}` +
+            `): the filter rejects less there than computed.`,
+        });
       }
     } else {
       const selfResonanceHz = resonanceHz(CAPACITOR_LEAD_INDUCTANCE_H, e.builtValue);
-      capacitors.push({ index: e.index, capacitanceF: e.builtValue, rmsV: s.rmsV, peakV: Math.SQRT2 * s.rmsV, rmsA: s.rmsA, selfResonanceHz });
+      capacitors.push({
+        index: e.index,
+        capacitanceF: e.builtValue,
+        rmsV: s.rmsV,
+        peakV: Math.SQRT2 * s.rmsV,
+        rmsA: s.rmsA,
+        selfResonanceHz,
+      });
       const peakV = Math.SQRT2 * s.rmsV;
       if (capacitorRatedV !== null) {
         const sev = peakV > capacitorRatedV ? 'fail' : peakV > CAPACITOR_DERATING * capacitorRatedV ? 'caution' : 'ok';
-        findings.push({ severity: sev, rule: 'lpf.capacitor-rating', subject: `${subject}: C${e.index}`, value: peakV, limit: capacitorRatedV, unit: 'V', source: 'lpf.capacitor-rating',
-          message: sev === 'ok'
-            ? `${peakV.toFixed(0)} V RF peak at the worst load against its ${capacitorRatedV} V rating.`
-            : `${peakV.toFixed(0)} V RF peak at the worst load ${sev === 'fail' ? 'exceeds' : 'uses more than 70 % of'} its ${capacitorRatedV} V rating: use a capacitor rated higher.` });
+        findings.push({
+          severity: sev,
+          rule: 'lpf.capacitor-rating',
+          subject: `${subject}: C${e.index}`,
+          value: peakV,
+          limit: capacitorRatedV,
+          unit: 'V',
+          source: 'lpf.capacitor-rating',
+          message:
+            sev === 'ok'
+              ? `${peakV.toFixed(0)} V RF peak at the worst load against its ${capacitorRatedV} V rating.`
+              : `${peakV.toFixed(0)} V RF peak at ` +
+                `the worst load ${sev === 'fail' ? 'exceeds' : 'uses more than 70 % of'} its ${capacitorRatedV}` +
+                ` V rating: use a capacitor rated higher.`,
+        });
       }
       if (capacitorRatedA !== null) {
         const over = s.rmsA > capacitorRatedA;
-        findings.push({ severity: over ? 'fail' : 'ok', rule: 'lpf.capacitor-current', subject: `${subject}: C${e.index}`, value: s.rmsA, limit: capacitorRatedA, unit: 'A', source: 'lpf.capacitor-current',
+        findings.push({
+          severity: over ? 'fail' : 'ok',
+          rule: 'lpf.capacitor-current',
+          subject: `${subject}: C${e.index}`,
+          value: s.rmsA,
+          limit: capacitorRatedA,
+          unit: 'A',
+          source: 'lpf.capacitor-current',
           message: over
-            ? `${s.rmsA.toFixed(2)} A RMS of RF current at the worst load exceeds its ${capacitorRatedA} A rating: it will heat; use a part rated for more current or two in parallel.`
+            ? `${s.rmsA.toFixed(2)} A RMS of RF current at the worst load exceeds its ${capacitorRatedA} A rating: ` +
+              `it will heat; use a part rated for more current or two in parallel.`
             : `${s.rmsA.toFixed(2)} A RMS of RF current at the worst load against its ${capacitorRatedA} A rating.` });
       }
       if (selfResonanceHz < topHz) {
-        findings.push({ severity: 'caution', rule: 'core.self-resonance', subject: `${subject}: C${e.index}`, value: selfResonanceHz, limit: topHz, unit: 'Hz', source: 'core.self-resonance',
-          message: `With about ${CAPACITOR_LEAD_INDUCTANCE_H * 1e9} nH of lead this capacitor resonates near ${mhz(selfResonanceHz)}, below the ${HIGHEST_HARMONIC}th harmonic (${mhz(topHz)}): keep its leads very short or use a chip part.` });
+        findings.push({
+          severity: 'caution',
+          rule: 'core.self-resonance',
+          subject: `${subject}: C${e.index}`,
+          value: selfResonanceHz,
+          limit: topHz,
+          unit: 'Hz',
+          source: 'core.self-resonance',
+          message: `With about ${CAPACITOR_LEAD_INDUCTANCE_H * 1e9} nH of lead this capacitor ` +
+            `resonates near ${mhz(selfResonanceHz)}, below the ${HIGHEST_HARMONIC}th harmonic (${mhz(topHz)}` +
+            `): keep its leads very short or use a chip part.`,
+        });
       }
     }
   }
-  if (core && core.minFrequencyHz !== null && core.maxFrequencyHz !== null && (f0 < core.minFrequencyHz || f0 > core.maxFrequencyHz)) {
-    findings.push({ severity: 'caution', rule: 'core.frequency', subject, value: f0, limit: f0 < core.minFrequencyHz ? core.minFrequencyHz : core.maxFrequencyHz, unit: 'Hz', source: 'design.maker-rating',
-      message: `The core material is made for ${mhz(core.minFrequencyHz)}–${mhz(core.maxFrequencyHz)}; at ${mhz(f0)} its losses or permeability differ from its data: choose a material for this band.` });
+  if (
+    core &&
+    core.minFrequencyHz !== null &&
+    core.maxFrequencyHz !== null &&
+    (f0 < core.minFrequencyHz || f0 > core.maxFrequencyHz)
+  ) {
+    findings.push({
+      severity: 'caution',
+      rule: 'core.frequency',
+      subject,
+      value: f0,
+      limit: f0 < core.minFrequencyHz ? core.minFrequencyHz : core.maxFrequencyHz,
+      unit: 'Hz',
+      source: 'design.maker-rating',
+      message: `The core material is made for ${mhz(core.minFrequencyHz)}–${mhz(core.maxFrequencyHz)}; at ` +
+        `${mhz(f0)} its losses or permeability differ from its data: choose a material for this band.`,
+    });
   }
   if (!geo) {
-    findings.push({ severity: 'caution', rule: 'core.not-entered', subject, value: null, limit: null, unit: '', source: 'design.consistency',
-      message: "The core's outer and inner diameter and height are not entered (or no core is chosen from the catalog), so the flux density in the inductors is not checked." });
+    findings.push({
+      severity: 'caution',
+      rule: 'core.not-entered',
+      subject,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.consistency',
+      message:
+        "The core's outer and inner diameter and height are not entered (or no core is chosen from the catalog), so " +
+          "the flux density in the inductors is not checked.",
+    });
   }
   const realisation: CoreRealisation = {
-    leM: geo?.leM ?? null, aeM2: geo?.aeM2 ?? null, permeability: geo ? effectivePermeability(d.coreAlHPerTurn2, geo.leM, geo.aeM2) : null,
-    inductors, capacitors, powerW, swr, fluxLimitT: core?.fluxLimitT ?? null, capacitorRatedV, capacitorRatedA,
+    leM: geo?.leM ?? null,
+    aeM2: geo?.aeM2 ?? null,
+    permeability: geo ? effectivePermeability(d.coreAlHPerTurn2, geo.leM, geo.aeM2) : null,
+    inductors,
+    capacitors,
+    powerW,
+    swr,
+    fluxLimitT: core?.fluxLimitT ?? null,
+    capacitorRatedV,
+    capacitorRatedA,
   };
   return { realisation, findings };
 }

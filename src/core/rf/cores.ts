@@ -9,7 +9,8 @@ export function toroidEffective(outerM: number, innerM: number, heightM: number)
   const ln = Math.log(outerM / innerM);
   const k = 1 / innerM - 1 / outerM;
   // Source: IEC 60205 core constants of a toroid (from memory, not confirmed): C1 = 2π / (h ln(D/d)),
-  // C2 = 4π (1/d − 1/D) / (h² ln³(D/d)); le = C1²/C2 = π ln(D/d) / (1/d − 1/D), Ae = C1/C2 = h ln²(D/d) / (2 (1/d − 1/D))
+  // C2 = 4π (1/d − 1/D) / (h² ln³(D/d)); le = C1²/C2 = π ln(D/d) / (1/d − 1/D), Ae
+  // = C1/C2 = h ln²(D/d) / (2 (1/d − 1/D))
   return { leM: (Math.PI * ln) / k, aeM2: (heightM * ln * ln) / (2 * k) };
 }
 

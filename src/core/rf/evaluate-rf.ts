@@ -44,11 +44,21 @@ const finite = (x: number, fallback = 0) => (Number.isFinite(x) ? x : fallback);
  * one entered there. */
 function designOf(p: NonNullable<Stage['lpf']>, project: Project) {
   const core = lpfCore(project, p);
-  const d = designLpf(core?.from === 'catalog' && core.alHPerTurn2 !== null ? { ...p, coreAlHPerTurn2: core.alHPerTurn2, coreName: core.name } : p, project.frequencyHz);
+  const d = designLpf(
+    core?.from === 'catalog' && core.alHPerTurn2 !== null
+      ? { ...p, coreAlHPerTurn2: core.alHPerTurn2, coreName: core.name }
+      : p,
+    project.frequencyHz,
+  );
   return { core, d };
 }
 
-function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext): { res: LpfStageResult; findings: Finding[] } {
+function lpfStage(
+  stage: Stage,
+  project: Project,
+  powerW: number,
+  ctx: RfContext,
+): { res: LpfStageResult; findings: Finding[] } {
   const p = stage.lpf!;
   const { core, d } = designOf(p, project);
   const swr = Math.min(100, Math.max(1, finite(project.rf.worstSwr, 1)));
@@ -56,12 +66,25 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   if (!d.ok) {
     return {
       res: { errors: d.errors, design: null, analysis: null, monteCarlo: null, capacitorPeakV, filterLossW: 0 },
-      findings: d.errors.map((e) => ({ severity: 'fail', rule: 'lpf.input', subject: `${stage.name}: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'design.input', message: e.message })),
+      findings: d.errors.map((e) => ({
+        severity: 'fail',
+        rule: 'lpf.input',
+        subject: `${stage.name}: ${fieldLabel(e.field)}`,
+        value: null,
+        limit: null,
+        unit: '',
+        source: 'design.input',
+        message: e.message,
+      })),
     };
   }
   const design = d.value;
   const analysis = analyseLpf(design);
-  const monteCarlo = monteCarloLpf(design, { trials: p.monteCarloTrials, seed: p.seed, onProgress: ctx.onMonteCarloProgress });
+  const monteCarlo = monteCarloLpf(design, {
+    trials: p.monteCarloTrials,
+    seed: p.seed,
+    onProgress: ctx.onMonteCarloProgress,
+  });
   const il = analysis.atOperating.lossDb;
   // Power balance of a two-port into a matched load: dissipated = P_avail (1 - |Gamma_in|^2 - |S21|^2), with
   // |Gamma| = (SWR - 1)/(SWR + 1) (definitions of S-parameters and SWR): reflected power is not heat
@@ -70,37 +93,106 @@ function lpfStage(stage: Stage, project: Project, powerW: number, ctx: RfContext
   const filterLossW = Math.max(0, powerW * (1 - gammaIn ** 2 - 10 ** (-il / 10)));
   const s = stage.name;
   const f: Finding[] = [];
-  f.push({ severity: analysis.bandMaxLossDb > 1 ? 'caution' : 'ok', rule: 'lpf.passband', subject: s, value: analysis.bandMaxLossDb, limit: 1, unit: 'dB', source: 'lpf.abcd',
-    message: `Loss across the band up to ${analysis.bandMaxLossDb.toFixed(2)} dB (${il.toFixed(2)} dB at the operating frequency, about ${filterLossW.toFixed(2)} W dissipated as heat).` });
-  f.push({ severity: analysis.bandMaxSwr > 2 ? 'fail' : analysis.bandMaxSwr > 1.3 ? 'caution' : 'ok', rule: 'lpf.swr', subject: s, value: analysis.bandMaxSwr, limit: 1.3, unit: '', source: 'lpf.abcd',
-    message: analysis.bandMaxSwr > 1.3
-      ? `The built filter shows SWR up to ${analysis.bandMaxSwr.toFixed(2)} in the band: component snapping or turns rounding detune it; adjust turns or use a parallel capacitor pair.`
-      : `Input SWR stays below ${analysis.bandMaxSwr.toFixed(2)} across the band.` });
+  f.push({
+    severity: analysis.bandMaxLossDb > 1 ? 'caution' : 'ok',
+    rule: 'lpf.passband',
+    subject: s,
+    value: analysis.bandMaxLossDb,
+    limit: 1,
+    unit: 'dB',
+    source: 'lpf.abcd',
+    message: `Loss across the band up to ${analysis.bandMaxLossDb.toFixed(2)} dB (${il.toFixed(2)} dB at the ` +
+      `operating frequency, about ${filterLossW.toFixed(2)} W dissipated as heat).`,
+  });
+  f.push({
+    severity: analysis.bandMaxSwr > 2 ? 'fail' : analysis.bandMaxSwr > 1.3 ? 'caution' : 'ok',
+    rule: 'lpf.swr',
+    subject: s,
+    value: analysis.bandMaxSwr,
+    limit: 1.3,
+    unit: '',
+    source: 'lpf.abcd',
+    message:
+      analysis.bandMaxSwr > 1.3
+        ? `The built filter shows SWR up to ${analysis.bandMaxSwr.toFixed(2)} in the band: component snapping or ` +
+          `turns rounding detune it; adjust turns or use a parallel capacitor pair.`
+        : `Input SWR stays below ${analysis.bandMaxSwr.toFixed(2)} across the band.`,
+  });
   for (const e of design.elements) {
     // Common practice, no published source: keep as-built values within 5 % of ideal
     if (Math.abs(e.errorFraction) > 0.05) {
-      f.push({ severity: 'caution', rule: 'lpf.snap', subject: `${s}: ${e.kind === 'shunt-capacitor' ? 'C' : 'L'}${e.index}`, value: e.builtValue, limit: e.idealValue, unit: e.kind === 'shunt-capacitor' ? 'F' : 'H', source: 'lpf.snap',
-        message: `Built value is ${(e.errorFraction * 100).toFixed(1)} % from ideal${e.turns !== null && e.turns < 6 ? '; with so few turns a core with a lower AL gives finer steps' : ''}.` });
+      f.push({
+        severity: 'caution',
+        rule: 'lpf.snap',
+        subject: `${s}: ${e.kind === 'shunt-capacitor' ? 'C' : 'L'}${e.index}`,
+        value: e.builtValue,
+        limit: e.idealValue,
+        unit: e.kind === 'shunt-capacitor' ? 'F' : 'H',
+        source: 'lpf.snap',
+        message: `Built value is ${(e.errorFraction * 100).toFixed(1)} % from ideal` +
+          `${e.turns !== null && e.turns < 6 ? '; with so few turns a core with a lower AL gives finer steps' : ''}.`,
+      });
     }
   }
-  f.push({ severity: 'caution', kind: 'standing', rule: 'lpf.capacitor-voltage', subject: s, value: capacitorPeakV, limit: null, unit: 'V', source: 'line.standing-wave',
-    message: `Shunt capacitors can see about ${capacitorPeakV.toFixed(0)} V peak at SWR ${swr}; use RF-rated (silver-mica or C0G) parts rated well above it.` });
+  f.push({
+    severity: 'caution',
+    kind: 'standing',
+    rule: 'lpf.capacitor-voltage',
+    subject: s,
+    value: capacitorPeakV,
+    limit: null,
+    unit: 'V',
+    source: 'line.standing-wave',
+    message: `Shunt capacitors can see about ${capacitorPeakV.toFixed(0)} V peak at SWR ${swr}; use RF-rated ` +
+      `(silver-mica or C0G) parts rated well above it.`,
+  });
   // the parts themselves: element stress at the most RF the PA delivers into the worst SWR, core flux, fit, resonance
   const real = realiseLpf(design, core, powerW, swr, s, p.capacitorRatedV ?? null, p.capacitorRatedA ?? null);
   f.push(...real.findings);
   if (p.coreId && !core) {
-    f.push({ severity: 'fail', rule: 'core.missing', subject: s, value: null, limit: null, unit: '', source: 'design.consistency',
-      message: 'The filter’s core is not in the project’s core catalog (deleted?) or its data there is refused: choose another on the filter form or correct the core; the flux is not checked.' });
+    f.push({
+      severity: 'fail',
+      rule: 'core.missing',
+      subject: s,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.consistency',
+      message:
+        'The filter’s core is not in the project’s core catalog (deleted?) or its data there is refused: choose ' +
+          'another on the filter form or correct the core; the flux is not checked.',
+    });
   }
-  return { res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW, realisation: real.realisation }, findings: f };
+  return {
+    res: { errors: [], design, analysis, monteCarlo, capacitorPeakV, filterLossW, realisation: real.realisation },
+    findings: f,
+  };
 }
 
 /** Evaluate all RF stages of a project. Never throws for bad data; problems become findings. */
 export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   const inputErrors = validateRfInputs(project.frequencyHz, project.targetPowerW);
-  const all: Finding[] = inputErrors.map((e) => ({ severity: 'fail', rule: 'rf.input', subject: e.field, value: null, limit: null, unit: '', source: 'design.input', message: e.message }));
+  const all: Finding[] = inputErrors.map((e) => ({
+    severity: 'fail',
+    rule: 'rf.input',
+    subject: e.field,
+    value: null,
+    limit: null,
+    unit: '',
+    source: 'design.input',
+    message: e.message,
+  }));
   for (const e of validateRfSettings(project.rf)) {
-    all.push({ severity: 'fail', rule: 'rf.settings', subject: e.field, value: null, limit: null, unit: '', source: 'design.input', message: e.message });
+    all.push({
+      severity: 'fail',
+      rule: 'rf.settings',
+      subject: e.field,
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.input',
+      message: e.message,
+    });
   }
   const frequencyHz = finite(project.frequencyHz);
   const targetPowerW = Math.max(0, finite(project.targetPowerW));
@@ -122,9 +214,14 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   for (const st of project.stages) {
     if (st.kind === 'final' && st.pa) {
       const pa = evaluatePa(st.pa, finite(ctx.paRailV[st.pa.railId] ?? NaN), project, st.name, {
-        maxRailV: ctx.paRailMaxV?.[st.pa.railId], hotRailV: ctx.paRailHotV?.[st.pa.railId], lowRailV: ctx.paRailLowV?.[st.pa.railId],
-        source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains', worstSwr: project.rf.worstSwr,
-        frequencyHz: project.frequencyHz, insideC: ctx.insideC, filterInputOhmAt,
+        maxRailV: ctx.paRailMaxV?.[st.pa.railId],
+        hotRailV: ctx.paRailHotV?.[st.pa.railId],
+        lowRailV: ctx.paRailLowV?.[st.pa.railId],
+        source: ctx.paRailBattery?.[st.pa.railId] ? 'battery' : 'mains',
+        worstSwr: project.rf.worstSwr,
+        frequencyHz: project.frequencyHz,
+        insideC: ctx.insideC,
+        filterInputOhmAt,
         // the SWR circle at the antenna, each load through the filter as built (absent: at the PA's output)
         ...(filterLadder ? { filterLadder } : {}),
         ...(early?.ok ? { filterDesign: early.value } : {}),
@@ -133,34 +230,76 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         paPowerW = pa.outputW;
         paStressW = Math.max(pa.outputW, finite(pa.hotOutputW));
       }
-      // a single-ended stage: its L network (when a network sets the drain load) on the filter's core, and its feed choke
+      // a single-ended stage: its L network (when a network sets the drain load)
+      // on the filter's core, and its feed choke
       const single = !pa.refused && st.pa.topology === 'single-ended' && pa.primaryOhm > 0 && frequencyHz > 0;
       const lp = lpfStageDef?.lpf;
       // the network's inductor: on the PA's chosen catalog core, else on the filter's core (catalog or entered AL)
       const lpAl = lp ? (findCore(project, lp.coreId)?.alHPerTurn2 ?? lp.coreAlHPerTurn2) : null;
       const netAl = findCore(project, st.pa.outputCoreId)?.alHPerTurn2 ?? lpAl;
-      const netCore: NetworkCore | null = netAl !== null ? { alHPerTurn2: netAl, series: lp?.capacitorSeries ?? 'E12', pairs: lp?.allowParallelPairs ?? true } : null;
-      const network = single && pa.turnsRatioSource === 'network'
-        ? designOutputNetwork(st.pa, pa.primaryOhm, frequencyHz, netCore)
-        : null;
+      const netCore: NetworkCore | null =
+        netAl !== null
+          ? { alHPerTurn2: netAl, series: lp?.capacitorSeries ?? 'E12', pairs: lp?.allowParallelPairs ?? true }
+          : null;
+      const network =
+        single && pa.turnsRatioSource === 'network'
+          ? designOutputNetwork(st.pa, pa.primaryOhm, frequencyHz, netCore)
+          : null;
       const byNetwork = !pa.refused && pa.turnsRatioSource === 'network' && pa.primaryOhm > 0 && frequencyHz > 0;
-      const pi = byNetwork ? designPiNetwork(pa.primaryOhm, st.pa.loadOhm, frequencyHz, st.pa.topology === 'push-pull', netCore) : null;
-      // class E: each switch's shunt capacitance (half the drain-to-drain load per half of a push-pull pair)
-      const classEShunt = !pa.refused && st.pa.amplifierClass === 'E' && pa.primaryOhm > 0
-        ? classEShuntCapacitor(st.pa.topology === 'push-pull' ? pa.primaryOhm / 2 : pa.primaryOhm, frequencyHz, st.pa.deviceCossF ?? null, lp?.capacitorSeries ?? 'E12')
+      const pi = byNetwork
+        ? designPiNetwork(pa.primaryOhm, st.pa.loadOhm, frequencyHz, st.pa.topology === 'push-pull', netCore)
         : null;
+      // class E: each switch's shunt capacitance (half the drain-to-drain load per half of a push-pull pair)
+      const classEShunt =
+        !pa.refused && st.pa.amplifierClass === 'E' && pa.primaryOhm > 0
+          ? classEShuntCapacitor(
+              st.pa.topology === 'push-pull' ? pa.primaryOhm / 2 : pa.primaryOhm,
+              frequencyHz,
+              st.pa.deviceCossF ?? null,
+              lp?.capacitorSeries ?? 'E12',
+            )
+          : null;
       // the output transformer on its catalog core: flux at the PA's highest output and the windings' fit
-      const ot = !pa.refused && pa.turnsRatioSource !== 'network'
-        ? checkOutputTransformer(project, st.pa, pa.primaryOhm, Math.max(pa.outputW, finite(pa.hotOutputW)), pa.turnsRatio, st.name)
-        : { check: null, findings: [] };
+      const ot =
+        !pa.refused && pa.turnsRatioSource !== 'network'
+          ? checkOutputTransformer(
+              project,
+              st.pa,
+              pa.primaryOhm,
+              Math.max(pa.outputW, finite(pa.hotOutputW)),
+              pa.turnsRatio,
+              st.name,
+            )
+          : { check: null, findings: [] };
       const choke = single ? feedChoke(pa.primaryOhm, frequencyHz, pa.keyDownCurrentA) : null;
-      stages.push({ stageId: st.id, stageName: st.name, kind: 'final', pa, lpf: null, relay: null, network, pi, classEShunt, choke,
-        outputTransformer: ot.check, findings: sortFindings([...pa.findings, ...ot.findings, ...(pi ? piFindings(pi, st.name) : [])]) });
+      stages.push({
+        stageId: st.id,
+        stageName: st.name,
+        kind: 'final',
+        pa,
+        lpf: null,
+        relay: null,
+        network,
+        pi,
+        classEShunt,
+        choke,
+        outputTransformer: ot.check,
+        findings: sortFindings([...pa.findings, ...ot.findings, ...(pi ? piFindings(pi, st.name) : [])]),
+      });
       if (st === paStage) paRefused = pa.refused;
       if (st === paStage && pa.refused) {
         // the stress checks below need a power: say that they take the target instead of the PA's (unknown) output
-        all.push({ severity: 'caution', rule: 'rf.pa-unknown', subject: st.name, value: targetPowerW, limit: null, unit: 'W', source: 'design.consistency',
-          message: `The PA output is unknown (its data is refused), so the filter, relay, harmonic and exposure checks use the ${targetPowerW} W target power instead.` });
+        all.push({
+          severity: 'caution',
+          rule: 'rf.pa-unknown',
+          subject: st.name,
+          value: targetPowerW,
+          limit: null,
+          unit: 'W',
+          source: 'design.consistency',
+          message: `The PA output is unknown (its data is refused), so the filter, relay, harmonic and exposure ` +
+            `checks use the ${targetPowerW} W target power instead.`,
+        });
       }
     }
   }
@@ -169,7 +308,15 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     if (st.kind === 'lpf' && st.lpf && okFreq) {
       const { res, findings } = lpfStage(st, project, paStressW, ctx);
       if (st === lpfStageDef) lpfRes = res;
-      stages.push({ stageId: st.id, stageName: st.name, kind: 'lpf', pa: null, lpf: res, relay: null, findings: sortFindings(findings) });
+      stages.push({
+        stageId: st.id,
+        stageName: st.name,
+        kind: 'lpf',
+        pa: null,
+        lpf: res,
+        relay: null,
+        findings: sortFindings(findings),
+      });
     }
   }
   const passbandLossDb = lpfRes?.analysis?.atOperating.lossDb ?? 0;
@@ -180,33 +327,65 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   // Amplitude ratio from dBc: 10^(dBc/20) (definition of the decibel for voltages)
   // The PA's harmonic bands by class when there is a PA, else the square-wave / entered-residual estimate
   // the bands of the PA's own waveform (the one that gave its power and key-down current)
-  const spectrum = paStage?.pa && !paRefused ? stages.find((x) => x.stageId === paStage.id)?.pa?.spectrum ?? null : null;
+  const spectrum =
+    paStage?.pa && !paRefused ? (stages.find((x) => x.stageId === paStage.id)?.pa?.spectrum ?? null) : null;
   if (spectrum && paStage) all.push(...spectrumFindings(paStage.pa!, spectrum, paStage.name));
-  const levelDbc = (n: number) => spectrum?.bands.find((b) => b.n === n)?.worstDbc ?? paHarmonicDbc(topology, evenDbc, n).dbc;
+  const levelDbc = (n: number) =>
+    spectrum?.bands.find((b) => b.n === n)?.worstDbc ?? paHarmonicDbc(topology, evenDbc, n).dbc;
   const harmonicAmplitudeSum = [2, 3, 4, 5].reduce((a, n) => a + 10 ** (levelDbc(n) / 20), 0);
   for (const st of project.stages) {
     if (st.kind === 'tr' && st.relay) {
-      const relay = evaluateRelay(st.relay, { powerW: st.relay.position === 'before-lpf' ? paStressW : paStressW * 10 ** (-passbandLossDb / 10), swr: finite(project.rf.worstSwr, 1), harmonicAmplitudeSum, subject: st.name });
+      const relay = evaluateRelay(st.relay, {
+        powerW: st.relay.position === 'before-lpf' ? paStressW : paStressW * 10 ** (-passbandLossDb / 10),
+        swr: finite(project.rf.worstSwr, 1),
+        harmonicAmplitudeSum,
+        subject: st.name,
+      });
       // keying from the relay's own data (speed, delay, edges), once that data is accepted
       const keyed = relay.findings.some((f) => f.rule === 'relay.input') ? null : evaluateKeying(st.relay, st.name);
-      stages.push({ stageId: st.id, stageName: st.name, kind: 'tr', pa: null, lpf: null, relay, keying: keyed?.result ?? null,
-        findings: sortFindings([...relay.findings, ...(keyed?.findings ?? [])]) });
+      stages.push({
+        stageId: st.id,
+        stageName: st.name,
+        kind: 'tr',
+        pa: null,
+        lpf: null,
+        relay,
+        keying: keyed?.result ?? null,
+        findings: sortFindings([...relay.findings, ...(keyed?.findings ?? [])]),
+      });
     }
   }
   if (paStressW > paPowerW * 1.001) {
     // Say which power the stress figures are for, so they do not look inconsistent with the PA's nominal output
     const onBattery = paStage?.pa ? ctx.paRailBattery?.[paStage.pa.railId] === true : false;
-    const note = ` (at ${paStressW.toFixed(1)} W from the PA, its output ${onBattery ? 'with a full battery' : 'at high mains'})`;
-    const stressed = new Set(['lpf.capacitor-voltage', 'lpf.passband', 'relay.rf-voltage', 'relay.rf-current', 'relay.isolation']);
+    const note = ` (at ${paStressW.toFixed(1)} W from the ` +
+      `PA, its output ${onBattery ? 'with a full battery' : 'at high mains'})`;
+    const stressed = new Set([
+      'lpf.capacitor-voltage',
+      'lpf.passband',
+      'relay.rf-voltage',
+      'relay.rf-current',
+      'relay.isolation',
+    ]);
     for (const st of stages) {
-      st.findings = st.findings.map((f) => (stressed.has(f.rule) ? { ...f, message: f.message.replace(/\.(?=[^.]*$)/, `${note}.`) } : f));
+      st.findings = st.findings.map((f) =>
+        stressed.has(f.rule) ? { ...f, message: f.message.replace(/\.(?=[^.]*$)/, `${note}.`) } : f,
+      );
       if (st.relay) st.relay.findings = st.findings.filter((f) => f.rule.startsWith('relay.'));
     }
   }
   for (const s of stages) all.push(...s.findings);
   if (!paStage) {
-    all.push({ severity: 'caution', rule: 'rf.no-pa', subject: 'Final amplifier', value: null, limit: null, unit: '', source: 'design.consistency',
-      message: 'No final amplifier stage with PA settings: harmonics, relay and exposure use the target power instead.' });
+    all.push({
+      severity: 'caution',
+      rule: 'rf.no-pa',
+      subject: 'Final amplifier',
+      value: null,
+      limit: null,
+      unit: '',
+      source: 'design.consistency',
+      message: 'No final amplifier stage with PA settings: harmonics, relay and exposure use the target power instead.',
+    });
   }
   // the PA's source impedance at each harmonic into the filter (issue item: not 50 Ω for a switching stage)
   const paRes = stages.find((x) => x.stageId === paStage?.id)?.pa ?? null;
@@ -260,26 +439,51 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     const f = harmonicCurrentFinding(ratio, 3, paStage.name);
     if (f) all.push(f);
   }
-  const harmonics = okFreq && targetPowerW > 0
-    ? harmonicCompliance({
-      rule: project.rf.spuriousRule, topology, evenHarmonicDbc: evenDbc, fundamentalW: outputPowerW, frequencyHz, passbandLossDb,
-      filter: lpfRes?.analysis ? lpfRes.analysis.harmonics : null, monteCarlo: lpfRes?.monteCarlo ?? null,
-      ...(judged ? { spectrum: judged } : {}),
-      ...(sourced ? { source: sourced } : {}),
-      ...(overLoads ? { loadsCovered: overLoads.loadsCovered } : {}),
-    })
-    : null;
+  const harmonics =
+    okFreq && targetPowerW > 0
+      ? harmonicCompliance({
+          rule: project.rf.spuriousRule,
+          topology,
+          evenHarmonicDbc: evenDbc,
+          fundamentalW: outputPowerW,
+          frequencyHz,
+          passbandLossDb,
+          filter: lpfRes?.analysis ? lpfRes.analysis.harmonics : null,
+          monteCarlo: lpfRes?.monteCarlo ?? null,
+          ...(judged ? { spectrum: judged } : {}),
+          ...(sourced ? { source: sourced } : {}),
+          ...(overLoads ? { loadsCovered: overLoads.loadsCovered } : {}),
+        })
+      : null;
   if (harmonics) all.push(...harmonics.findings);
   if (frequencyHz >= 30e6) {
-    all.push({ severity: 'caution', rule: 'spurious.range', subject: 'Spurious-emission rule', value: frequencyHz, limit: 30e6, unit: 'Hz', source: project.rf.spuriousRule === 'us-97-307' ? 'spurious.us-97-307e' : 'spurious.itu-range',
-      message: 'The spurious-emission limits used here apply below 30 MHz; other limits apply at this frequency.' });
+    all.push({
+      severity: 'caution',
+      rule: 'spurious.range',
+      subject: 'Spurious-emission rule',
+      value: frequencyHz,
+      limit: 30e6,
+      unit: 'Hz',
+      source: project.rf.spuriousRule === 'us-97-307' ? 'spurious.us-97-307e' : 'spurious.itu-range',
+      message: 'The spurious-emission limits used here apply below 30 MHz; other limits apply at this frequency.',
+    });
   }
   // RF exposure is a safety estimate: the most the station radiates (high mains or a full battery), not the nominal
-  // output. Source: OET Bulletin 65 Supplement B (1997), averaging starts from the transmitter PEP (ref §2.3; "worst case" wording from memory).
+  // output. Source: OET Bulletin 65 Supplement B (1997), averaging starts from the transmitter PEP (ref
+  // §2.3; "worst case" wording from memory).
   const exposure = okFreq ? evaluateExposure(paStressW * 10 ** (-passbandLossDb / 10), frequencyHz, project.rf) : null;
   if (exposure) all.push(...exposure.findings);
   return {
-    frequencyHz, targetPowerW, outputPowerW, paStageId: paStage?.id ?? null, lpfStageId: lpfStageDef?.id ?? null, inputErrors,
-    ruleSet: project.rf.spuriousRule, stages, harmonics, exposure, findings: sortFindings(all),
+    frequencyHz,
+    targetPowerW,
+    outputPowerW,
+    paStageId: paStage?.id ?? null,
+    lpfStageId: lpfStageDef?.id ?? null,
+    inputErrors,
+    ruleSet: project.rf.spuriousRule,
+    stages,
+    harmonics,
+    exposure,
+    findings: sortFindings(all),
   };
 }

@@ -7,7 +7,8 @@ import { fieldLabel } from './field-labels';
 
 export const EXPOSURE_CAUTION =
   'This is a far-field estimate for planning only. Local rules and your licence conditions govern RF exposure; ' +
-  'evaluate the finished station as they require, keep people away from the antenna while transmitting, and never touch an antenna or feedline while keyed.';
+  'evaluate the finished station as they require, keep people away from the antenna while transmitting, and never ' +
+  'touch an antenna or feedline while keyed.';
 
 /** Power-density limits in mW/cm^2 at f (MHz); null outside 0.3–100,000 MHz. */
 export function mpeLimitsMwPerCm2(fMHz: number): { controlled: number; general: number } | null {
@@ -23,14 +24,22 @@ export function mpeLimitsMwPerCm2(fMHz: number): { controlled: number; general: 
  * ICNIRP (1998) electric-field reference levels as plane-wave equivalent power density, W/m^2 (S = E^2 / 377);
  * null outside 0.15-400 MHz. Below 10 MHz ICNIRP gives no power-density level, so the E-field level is converted.
  */
-export function icnirpLimitsWPerM2(fMHz: number): { occupational: number; general: number; occupationalEVPerM: number; generalEVPerM: number } | null {
+export function icnirpLimitsWPerM2(
+  fMHz: number,
+): { occupational: number; general: number; occupationalEVPerM: number; generalEVPerM: number } | null {
   if (!(fMHz >= 0.15 && fMHz <= 400)) return null;
-  // Source: ICNIRP (1998) Table 7 = EU Council Recommendation 1999/519/EC: 0.15-1 MHz 87 V/m, 1-10 MHz 87/f^0.5, 10-400 MHz 28
+  // Source: ICNIRP (1998) Table 7 = EU Council Recommendation 1999/519/EC: 0.15-1 MHz
+  // 87 V/m, 1-10 MHz 87/f^0.5, 10-400 MHz 28
   const generalEVPerM = fMHz < 1 ? 87 : fMHz < 10 ? 87 / Math.sqrt(fMHz) : 28;
   // Source: ICNIRP (1998) Table 6 (occupational): up to 1 MHz 610 V/m, 1-10 MHz 610/f, 10-400 MHz 61 V/m
   const occupationalEVPerM = fMHz < 1 ? 610 : fMHz < 10 ? 610 / fMHz : 61;
   // Source: plane-wave impedance of free space, 377 ohm: S = E^2 / 377
-  return { occupational: occupationalEVPerM ** 2 / 377, general: generalEVPerM ** 2 / 377, occupationalEVPerM, generalEVPerM };
+  return {
+    occupational: occupationalEVPerM ** 2 / 377,
+    general: generalEVPerM ** 2 / 377,
+    occupationalEVPerM,
+    generalEVPerM,
+  };
 }
 
 /** ERP threshold (W) for exemption at distance R (m), f in MHz. */
@@ -82,28 +91,72 @@ export interface ExposureResult {
 }
 
 const LIMITS = {
-  'us-97-307': { name: '47 CFR 1.1310 (FCC)', general: 'general public (uncontrolled)', controlled: 'you and your household (controlled)' },
-  'itu-app3': { name: 'ICNIRP (1998) reference levels', general: 'general public', controlled: 'occupational level (only where local rules allow it for the licensee)' },
+  'us-97-307': {
+    name: '47 CFR 1.1310 (FCC)',
+    general: 'general public (uncontrolled)',
+    controlled: 'you and your household (controlled)',
+  },
+  'itu-app3': {
+    name: 'ICNIRP (1998) reference levels',
+    general: 'general public',
+    controlled: 'occupational level (only where local rules allow it for the licensee)',
+  },
 } as const;
 
 export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: RfSettings): ExposureResult {
   const bad = validateRfSettings(rf).filter((e) => e.field !== 'evenHarmonicDbc' && e.field !== 'worstSwr');
   if (bad.length > 0) {
     return {
-      ruleSet: rf.spuriousRule, limitsName: LIMITS[rf.spuriousRule].name, generalLabel: LIMITS[rf.spuriousRule].general, controlledLabel: LIMITS[rf.spuriousRule].controlled,
-      frequencyHz: Number.isFinite(frequencyHz) ? frequencyHz : 0, peakPowerW: 0, averagePowerW: 0, eirpW: 0, erpW: 0, groundReflection: rf.groundReflection,
-      limitControlledWPerM2: null, limitGeneralWPerM2: null, controlledDistanceM: null, generalDistanceM: null, nearFieldDistanceM: 0, farFieldValid: false,
-      exemptionThresholdW: null, exempt: null, exemptBeyondM: null, caution: EXPOSURE_CAUTION,
+      ruleSet: rf.spuriousRule,
+      limitsName: LIMITS[rf.spuriousRule].name,
+      generalLabel: LIMITS[rf.spuriousRule].general,
+      controlledLabel: LIMITS[rf.spuriousRule].controlled,
+      frequencyHz: Number.isFinite(frequencyHz) ? frequencyHz : 0,
+      peakPowerW: 0,
+      averagePowerW: 0,
+      eirpW: 0,
+      erpW: 0,
+      groundReflection: rf.groundReflection,
+      limitControlledWPerM2: null,
+      limitGeneralWPerM2: null,
+      controlledDistanceM: null,
+      generalDistanceM: null,
+      nearFieldDistanceM: 0,
+      farFieldValid: false,
+      exemptionThresholdW: null,
+      exempt: null,
+      exemptBeyondM: null,
+      caution: EXPOSURE_CAUTION,
       findings: [
-        ...bad.map((e): Finding => ({ severity: 'fail', rule: 'exposure.input', subject: `RF exposure: ${fieldLabel(e.field)}`, value: null, limit: null, unit: '', source: 'design.input', message: e.message })),
-        { severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'exposure.local-rules', kind: 'standing', message: EXPOSURE_CAUTION },
+        ...bad.map((e): Finding => ({
+          severity: 'fail',
+          rule: 'exposure.input',
+          subject: `RF exposure: ${fieldLabel(e.field)}`,
+          value: null,
+          limit: null,
+          unit: '',
+          source: 'design.input',
+          message: e.message,
+        })),
+        {
+          severity: 'caution',
+          rule: 'exposure.local-rules',
+          subject: 'RF exposure',
+          value: null,
+          limit: null,
+          unit: '',
+          source: 'exposure.local-rules',
+          kind: 'standing',
+          message: EXPOSURE_CAUTION,
+        },
       ],
     };
   }
   const fMHz = frequencyHz / 1e6;
   const p = Math.max(0, Number.isFinite(peakPowerW) ? peakPowerW : 0);
   // Source: OET-65 Supplement B (1997): average = PEP x duty factor x fraction of averaging time on air
-  const averagePowerW = p * Math.min(1, Math.max(0, rf.exposureDutyFactor)) * Math.min(1, Math.max(0, rf.exposureOnFraction));
+  const averagePowerW =
+    p * Math.min(1, Math.max(0, rf.exposureDutyFactor)) * Math.min(1, Math.max(0, rf.exposureOnFraction));
   // Source: OET Bulletin 65 (1997): EIRP = P G, feedline loss reduces P
   const eirpW = averagePowerW * 10 ** (-Math.max(0, rf.feedlineLossDb) / 10) * 10 ** (rf.antennaGainDbi / 10);
   const erpW = eirpW / 1.64;
@@ -111,7 +164,11 @@ export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: Rf
   const names = LIMITS[rf.spuriousRule];
   const icnirp = us ? null : icnirpLimitsWPerM2(fMHz);
   // both in mW/cm^2 (1 W/m^2 = 0.1 mW/cm^2)
-  const lim = us ? mpeLimitsMwPerCm2(fMHz) : icnirp ? { controlled: icnirp.occupational / 10, general: icnirp.general / 10 } : null;
+  const lim = us
+    ? mpeLimitsMwPerCm2(fMHz)
+    : icnirp
+      ? { controlled: icnirp.occupational / 10, general: icnirp.general / 10 }
+      : null;
   // Source: OET Bulletin 65 (1997): R = sqrt(k EIRP / (4 pi S)), k = 2.56 with ground reflection (EPA model)
   const k = rf.groundReflection ? 2.56 : 1;
   const dist = (sMwPerCm2: number) => Math.sqrt((k * eirpW * 1e3) / (4 * Math.PI * sMwPerCm2)) / 100;
@@ -119,28 +176,85 @@ export function evaluateExposure(peakPowerW: number, frequencyHz: number, rf: Rf
   const nearFieldDistanceM = fMHz >= 0.01 ? 47.7 / fMHz : 0;
   const controlledDistanceM = lim ? dist(lim.controlled) : null;
   const generalDistanceM = lim ? dist(lim.general) : null;
-  const farFieldValid = generalDistanceM !== null && controlledDistanceM !== null && Math.min(generalDistanceM, controlledDistanceM) >= nearFieldDistanceM;
+  const farFieldValid =
+    generalDistanceM !== null &&
+    controlledDistanceM !== null &&
+    Math.min(generalDistanceM, controlledDistanceM) >= nearFieldDistanceM;
   // the exemption is a US rule: the ITU / CEPT rule set has none
   const thr = lim && us ? exemptionThresholdW(fMHz, nearFieldDistanceM) : null;
   const exempt = thr === null ? null : erpW <= thr;
-  const exemptBeyondM = thr === null ? null : Math.max(nearFieldDistanceM, Math.sqrt((erpW * nearFieldDistanceM ** 2) / Math.max(thr, 1e-30)));
+  const exemptBeyondM =
+    thr === null
+      ? null
+      : Math.max(nearFieldDistanceM, Math.sqrt((erpW * nearFieldDistanceM ** 2) / Math.max(thr, 1e-30)));
   const findings: Finding[] = [];
   if (!lim) {
-    findings.push({ severity: 'fail', rule: 'exposure.range', subject: 'RF exposure', value: frequencyHz, limit: us ? 3e5 : 1.5e5, unit: 'Hz', source: us ? 'exposure.fcc-range' : 'exposure.icnirp-range',
-      message: `The operating frequency is outside the exposure limit table (${us ? '0.3 MHz to 100 GHz' : '0.15 MHz to 400 MHz'}); no estimate is possible.` });
+    findings.push({
+      severity: 'fail',
+      rule: 'exposure.range',
+      subject: 'RF exposure',
+      value: frequencyHz,
+      limit: us ? 3e5 : 1.5e5,
+      unit: 'Hz',
+      source: us ? 'exposure.fcc-range' : 'exposure.icnirp-range',
+      message: `The operating frequency is outside the exposure ` +
+        `limit table (${us ? '0.3 MHz to 100 GHz' : '0.15 MHz to 400 MHz'}); no estimate is possible.`,
+    });
   } else {
-    findings.push({ severity: 'caution', kind: 'standing', rule: 'exposure.distance', subject: 'RF exposure', value: generalDistanceM, limit: null, unit: 'm', source: us ? 'exposure.fcc-distance' : 'exposure.icnirp-distance',
-      message: `Keep people at least ${(generalDistanceM as number).toFixed(2)} m (${names.general}) and ${(controlledDistanceM as number).toFixed(2)} m (${names.controlled}) from the antenna (${names.name}).` });
+    findings.push({
+      severity: 'caution',
+      kind: 'standing',
+      rule: 'exposure.distance',
+      subject: 'RF exposure',
+      value: generalDistanceM,
+      limit: null,
+      unit: 'm',
+      source: us ? 'exposure.fcc-distance' : 'exposure.icnirp-distance',
+      message: `Keep people at least ${(generalDistanceM as number).toFixed(2)} m (${names.general}) and ` +
+        `${(controlledDistanceM as number).toFixed(2)} m (${names.controlled}) from the antenna (${names.name}).`,
+    });
     if (!farFieldValid) {
-      findings.push({ severity: 'caution', rule: 'exposure.near-field', subject: 'RF exposure', value: generalDistanceM, limit: nearFieldDistanceM, unit: 'm', source: 'exposure.near-field', kind: 'standing',
-        message: `These distances lie inside λ/2π = ${nearFieldDistanceM.toFixed(2)} m (reactive near field), where the far-field formula is only a rough estimate.` });
+      findings.push({
+        severity: 'caution',
+        rule: 'exposure.near-field',
+        subject: 'RF exposure',
+        value: generalDistanceM,
+        limit: nearFieldDistanceM,
+        unit: 'm',
+        source: 'exposure.near-field',
+        kind: 'standing',
+        message: `These distances lie inside λ/2π = ${nearFieldDistanceM.toFixed(2)} m (reactive near field), ` +
+          `where the far-field formula is only a rough estimate.`,
+      });
     }
-    if (thr !== null) findings.push({ severity: exempt ? 'ok' : 'caution', rule: 'exposure.exemption', subject: 'RF exposure', value: erpW, limit: thr, unit: 'W', source: 'exposure.fcc-exemption',
-      message: exempt
-        ? `Time-averaged ERP ${erpW.toFixed(1)} W is within the ${(thr as number).toFixed(0)} W exemption threshold for people at ${nearFieldDistanceM.toFixed(2)} m or more (US rule).`
-        : `Time-averaged ERP ${erpW.toFixed(1)} W exceeds the exemption threshold at ${nearFieldDistanceM.toFixed(2)} m; a routine evaluation is needed for people closer than ${(exemptBeyondM as number).toFixed(1)} m (US rule).` });
+    if (thr !== null)
+      findings.push({
+        severity: exempt ? 'ok' : 'caution',
+        rule: 'exposure.exemption',
+        subject: 'RF exposure',
+        value: erpW,
+        limit: thr,
+        unit: 'W',
+        source: 'exposure.fcc-exemption',
+        message: exempt
+          ? `Time-averaged ERP ${erpW.toFixed(1)} W is within the ${(thr as number).toFixed(0)} W exemption ` +
+            `threshold for people at ${nearFieldDistanceM.toFixed(2)} m or more (US rule).`
+          : `Time-averaged ERP ${erpW.toFixed(1)} W exceeds the exemption ` +
+            `threshold at ${nearFieldDistanceM.toFixed(2)} m; a routine evaluation is needed for people ` +
+            `closer than ${(exemptBeyondM as number).toFixed(1)} m (US rule).`,
+      });
   }
-  findings.push({ severity: 'caution', rule: 'exposure.local-rules', subject: 'RF exposure', value: null, limit: null, unit: '', source: 'exposure.local-rules', kind: 'standing', message: EXPOSURE_CAUTION });
+  findings.push({
+    severity: 'caution',
+    rule: 'exposure.local-rules',
+    subject: 'RF exposure',
+    value: null,
+    limit: null,
+    unit: '',
+    source: 'exposure.local-rules',
+    kind: 'standing',
+    message: EXPOSURE_CAUTION,
+  });
   return {
     ruleSet: rf.spuriousRule, limitsName: names.name, generalLabel: names.general, controlledLabel: names.controlled,
     frequencyHz, peakPowerW: p, averagePowerW, eirpW, erpW, groundReflection: rf.groundReflection,

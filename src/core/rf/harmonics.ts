@@ -6,14 +6,18 @@ import type { MonteCarloResult } from './lpf-monte-carlo';
 import type { HarmonicBand, SpectrumBasis } from './pa-spectrum';
 import type { SourcedHarmonic } from './lpf-analysis';
 
-/** Harmonic level at the antenna below which a home-built filter and layout no longer set it, dBc. Common practice, no published source. */
+/**
+ * Harmonic level at the antenna below which a home-built filter and layout no longer set it,
+ * dBc. Common practice, no published source.
+ */
 export const CONSTRUCTION_FLOOR_DBC = -70;
 
 export type SpuriousRule = RfSettings['spuriousRule'];
 
 export const RULE_INFO: Record<SpuriousRule, { title: string; source: SourceKey; fromMemory: boolean }> = {
   'us-97-307': {
-    title: '47 CFR 97.307(d): spurious emissions at least 43 dB below the fundamental (below 30 MHz, installed after 2003)',
+    title:
+      '47 CFR 97.307(d): spurious emissions at least 43 dB below the fundamental (below 30 MHz, installed after 2003)',
     source: 'spurious.us-97-307d',
     fromMemory: false,
   },
@@ -35,7 +39,11 @@ export function requiredAttenuationDb(rule: SpuriousRule, fundamentalW: number):
 export type HarmonicBasis = 'square-wave-1/n' | 'balance-residual' | 'rectangular-50%-1/n' | SpectrumBasis;
 
 /** Level of harmonic n at the PA output relative to the fundamental, dBc, and what it is based on. */
-export function paHarmonicDbc(topology: PaParams['topology'], evenHarmonicDbc: number, n: number): { dbc: number; basis: HarmonicBasis } {
+export function paHarmonicDbc(
+  topology: PaParams['topology'],
+  evenHarmonicDbc: number,
+  n: number,
+): { dbc: number; basis: HarmonicBasis } {
   if (n % 2 === 1) {
     // Source: Fourier series of a symmetric square wave, odd harmonic n at 1/n (REFERENCE-VALUES §3.3)
     return { dbc: 20 * Math.log10(1 / n), basis: 'square-wave-1/n' };
@@ -51,7 +59,9 @@ const BASIS_WHAT: Partial<Record<string, string>> = {
   'square-wave-1/n': 'square-wave estimate',
   'balance-residual': 'push-pull balance residual as entered',
   'rectangular-50%-1/n': 'single-ended estimate at 50 % duty',
-  'cosine-pulse': 'drain current pulse over the conduction angle, from a plain cosine pulse at the edge of saturation to a flat-topped pulse when saturated',
+  'cosine-pulse':
+    'drain current pulse over the conduction angle, from a plain cosine pulse at the edge of saturation to a ' +
+      'flat-topped pulse when saturated',
   'push-pull-imbalance': 'even harmonic from the stated push-pull imbalance, typical to worst',
   'saturation-bound': 'clean sine to hard-clipped square wave',
   'clipped-at-swr': 'drain voltage flat-topped at the supply into the worst SWR load, as the equivalent source level',
@@ -151,7 +161,9 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
   const rows: HarmonicRow[] = [2, 3, 4, 5].map((n) => {
     const band = inp.spectrum?.find((b) => b.n === n);
     const old = paHarmonicDbc(inp.topology, inp.evenHarmonicDbc, n);
-    const pa = band ? { dbc: band.worstDbc, best: band.bestDbc, basis: band.basis as HarmonicBasis } : { ...old, best: old.dbc };
+    const pa = band
+      ? { dbc: band.worstDbc, best: band.bestDbc, basis: band.basis as HarmonicBasis }
+      : { ...old, best: old.dbc };
     const nominal = inp.filter?.find((h) => h.n === n)?.attenuationDb ?? 0;
     const mc = inp.monteCarlo?.harmonics.find((h) => h.n === n) ?? null;
     const rel = (a: number) => a - inp.passbandLossDb;
@@ -167,50 +179,118 @@ export function harmonicCompliance(inp: HarmonicInput): HarmonicsReport {
     const floor = (x: number) => Math.max(x, CONSTRUCTION_FLOOR_DBC);
     const marginDb = -floor(predictedDbc) - requiredDb;
     const worstMarginDb = worstPredictedDbc === null ? null : -floor(worstPredictedDbc) - requiredDb;
-    const severity: Finding['severity'] = marginDb < 0 ? 'fail' : (worstMarginDb !== null && worstMarginDb < 0) || marginDb < 3 ? 'caution' : 'ok';
+    const severity: Finding['severity'] =
+      marginDb < 0 ? 'fail' : (worstMarginDb !== null && worstMarginDb < 0) || marginDb < 3 ? 'caution' : 'ok';
     const row: HarmonicRow = {
-      n, frequencyHz: n * inp.frequencyHz, paLevelDbc: pa.dbc, paLevelBestDbc: pa.best, paLevelBasis: pa.basis, filterAttenuationDb,
-      filterAttenuation50Db: inp.filter ? rel(nominal) : null, sourceBasis: src ? inp.source!.label : '50 Ω',
-      sourceZsReOhm: src?.zsReOhm ?? null, sourceZsImOhm: src?.zsImOhm ?? null,
-      predictedBestDbc, limitedByConstruction: predictedDbc < CONSTRUCTION_FLOOR_DBC, bestLimitedByConstruction: predictedBestDbc < CONSTRUCTION_FLOOR_DBC,
+      n,
+      frequencyHz: n * inp.frequencyHz,
+      paLevelDbc: pa.dbc,
+      paLevelBestDbc: pa.best,
+      paLevelBasis: pa.basis,
+      filterAttenuationDb,
+      filterAttenuation50Db: inp.filter ? rel(nominal) : null,
+      sourceBasis: src ? inp.source!.label : '50 Ω',
+      sourceZsReOhm: src?.zsReOhm ?? null,
+      sourceZsImOhm: src?.zsImOhm ?? null,
+      predictedBestDbc,
+      limitedByConstruction: predictedDbc < CONSTRUCTION_FLOOR_DBC,
+      bestLimitedByConstruction: predictedBestDbc < CONSTRUCTION_FLOOR_DBC,
       worstFilterAttenuationDb: worst,
       percentileFilterAttenuationDb: mc ? rel(mc.percentileAttenuationDb) + shift : null,
-      predictedDbc, worstPredictedDbc, requiredDb, neededFilterAttenuationDb: requiredDb + pa.dbc, marginDb, worstMarginDb, severity,
-      bestLoad: band?.bestLoad ?? null, worstLoad: band?.worstLoad ?? null,
+      predictedDbc,
+      worstPredictedDbc,
+      requiredDb,
+      neededFilterAttenuationDb: requiredDb + pa.dbc,
+      marginDb,
+      worstMarginDb,
+      severity,
+      bestLoad: band?.bestLoad ?? null,
+      worstLoad: band?.worstLoad ?? null,
     };
     const srcWhat = src ? `; filter from the PA's source, ${inp.source!.label}` : '';
     const loads = inp.loadsCovered && band?.worstLoad ? `; over ${inp.loadsCovered}, worst at ${band.worstLoad}` : '';
     const what = `${BASIS_WHAT[pa.basis] ?? pa.basis}${loads}${srcWhat}`;
     const lvl = (x: number) => (x < CONSTRUCTION_FLOOR_DBC ? 'limited by construction' : `${x.toFixed(1)} dBc`);
-    const bandText = !band ? null : predictedDbc < CONSTRUCTION_FLOOR_DBC ? 'limited by construction at the antenna'
-      : `${predictedBestDbc < CONSTRUCTION_FLOOR_DBC ? `below ${CONSTRUCTION_FLOOR_DBC} dBc (the construction floor)` : lvl(predictedBestDbc)} to ${lvl(predictedDbc)} at the antenna`;
-    const down = predictedDbc < CONSTRUCTION_FLOOR_DBC
-      ? `below the ${CONSTRUCTION_FLOOR_DBC} dBc construction floor`
-      : `${(-predictedDbc).toFixed(1)} dB down`;
+    const bandText = !band
+      ? null
+      : predictedDbc < CONSTRUCTION_FLOOR_DBC
+        ? 'limited by construction at the antenna'
+        : `${
+            predictedBestDbc < CONSTRUCTION_FLOOR_DBC
+              ? `below ${CONSTRUCTION_FLOOR_DBC} dBc (the construction floor)`
+              : lvl(predictedBestDbc)
+          } to ${lvl(predictedDbc)} at the antenna`;
+    const down =
+      predictedDbc < CONSTRUCTION_FLOOR_DBC
+        ? `below the ${CONSTRUCTION_FLOOR_DBC} dBc construction floor`
+        : `${(-predictedDbc).toFixed(1)} dB down`;
     findings.push({
-      severity, rule: 'spurious.harmonic', subject: `Harmonic ${n}`, value: -predictedDbc, limit: requiredDb, unit: 'dB', source: info.source,
+      severity,
+      rule: 'spurious.harmonic',
+      subject: `Harmonic ${n}`,
+      value: -predictedDbc,
+      limit: requiredDb,
+      unit: 'dB',
+      source: info.source,
       message: !inp.filter
-        ? `No low-pass filter: harmonic ${n} is only ${(-pa.dbc).toFixed(1)} dB down (${what}); a filter is required before transmitting.`
+        ? `No low-pass filter: harmonic ${n} is only ${(-pa.dbc).toFixed(1)} dB down (${what}); a filter is required ` +
+          `before transmitting.`
         : marginDb < 0
-          ? `Harmonic ${n} is predicted up to ${(-predictedDbc).toFixed(1)} dB down at the worst end${bandText ? ` (${bandText}, ${what})` : ''}, short of the ${requiredDb.toFixed(1)} dB required: raise the filter order or lower its cutoff.`
+          ? `Harmonic ${n} is predicted up to ${(-predictedDbc).toFixed(1)} dB down at ` +
+            `the worst end${bandText ? ` (${bandText}, ${what})` : ''}, short of the ${requiredDb.toFixed(1)}` +
+            ` dB required: raise the filter order or lower its cutoff.`
           : worstMarginDb !== null && worstMarginDb < 0
-            ? `Harmonic ${n} passes nominally (${marginDb.toFixed(1)} dB margin) but can fail with component tolerances (worst case ${worstMarginDb.toFixed(1)} dB); check it on a spectrum analyser.`
+            ? `Harmonic ${n} passes nominally (${marginDb.toFixed(1)} dB margin) but can fail with component ` +
+              `tolerances (worst case ${worstMarginDb.toFixed(1)} dB); check it on a spectrum analyser.`
             : bandText
-              ? `Harmonic ${n}: ${bandText} (${what}); judged on the worst end, ${down}, ${marginDb.toFixed(1)} dB better than required.`
+              ? `Harmonic ${n}: ${bandText} (${what}); judged on the worst end, ${down}, ${marginDb.toFixed(1)}` +
+                ` dB better than required.`
               : `Harmonic ${n} is predicted ${down} (${what}), ${marginDb.toFixed(1)} dB better than required.`,
     });
     return row;
   });
   if (rows.some((r) => r.limitedByConstruction || r.bestLimitedByConstruction)) {
-    findings.push({ severity: 'caution', kind: 'standing', rule: 'spurious.construction-floor', subject: 'Spurious emissions', value: CONSTRUCTION_FLOOR_DBC, limit: null, unit: 'dBc', source: 'spurious.construction-floor',
-      message: `Levels predicted below ${CONSTRUCTION_FLOOR_DBC} dBc are shown as limited by construction: coupling around the filter and ground currents, not the filter, set them in a home-built transmitter.` });
+    findings.push({
+      severity: 'caution',
+      kind: 'standing',
+      rule: 'spurious.construction-floor',
+      subject: 'Spurious emissions',
+      value: CONSTRUCTION_FLOOR_DBC,
+      limit: null,
+      unit: 'dBc',
+      source: 'spurious.construction-floor',
+      message: `Levels predicted below ${CONSTRUCTION_FLOOR_DBC} dBc are shown as limited by construction: coupling ` +
+        `around the filter and ground currents, not the filter, set them in a home-built transmitter.`,
+    });
   }
   if (info.fromMemory) {
-    findings.push({ severity: 'caution', kind: 'standing', rule: 'spurious.rule-source', subject: 'Spurious-emission rule', value: null, limit: null, unit: '', source: info.source,
-      message: 'The ITU limit formula used here is from memory and not confirmed against the Radio Regulations; check the current text and your licence conditions.' });
+    findings.push({
+      severity: 'caution',
+      kind: 'standing',
+      rule: 'spurious.rule-source',
+      subject: 'Spurious-emission rule',
+      value: null,
+      limit: null,
+      unit: '',
+      source: info.source,
+      message:
+        'The ITU limit formula used here is from memory and not confirmed against the Radio Regulations; check the ' +
+          'current text and your licence conditions.',
+    });
   }
-  findings.push({ severity: 'caution', rule: 'spurious.measure', subject: 'Spurious emissions', value: null, limit: null, unit: '', source: 'spurious.measure', kind: 'standing',
-    message: 'These are predictions from idealised waveforms; measure the finished transmitter into a dummy load before going on the air, and follow your licence conditions.' });
+  findings.push({
+    severity: 'caution',
+    rule: 'spurious.measure',
+    subject: 'Spurious emissions',
+    value: null,
+    limit: null,
+    unit: '',
+    source: 'spurious.measure',
+    kind: 'standing',
+    message:
+      'These are predictions from idealised waveforms; measure the finished transmitter into a dummy load before ' +
+        'going on the air, and follow your licence conditions.',
+  });
   return {
     rule: inp.rule, ruleTitle: info.title, ruleSource: info.source, ruleFromMemory: info.fromMemory,
     fundamentalW: inp.fundamentalW, requiredDb, rows, loadsCovered: inp.loadsCovered ?? null, findings,

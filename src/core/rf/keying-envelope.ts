@@ -2,7 +2,9 @@
 // Two edge shapes: raised-cosine edges (a shaping circuit or a DSP ramp), and the exponential edges of a single RC
 // shaping network. Both are centred so that the key-down time is the width at half amplitude.
 
-/** 10–90 % time of a raised-cosine edge as a fraction of its 0–100 % duration: (acos(−0.8) − acos(0.8)) / π. */
+/**
+ * 10–90 % time of a raised-cosine edge as a fraction of its 0–100 % duration: (acos(−0.8) − acos(0.8)) / π.
+ */
 // Source: edge (1 − cos(πt/T))/2 reaches 10 % at acos(0.8)/π·T and 90 % at acos(−0.8)/π·T (algebra)
 export const RAISED_COSINE_10_90 = (Math.acos(-0.8) - Math.acos(0.8)) / Math.PI;
 

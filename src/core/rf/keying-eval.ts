@@ -39,8 +39,20 @@ export function evaluateKeying(r: RelayParams, subject: string): { result: Keyin
   if (edges === null) {
     return {
       result: null,
-      findings: [{ severity: 'caution', rule: 'keying.not-entered', subject, value: null, limit: null, unit: 's', source: 'design.consistency',
-        message: 'No keyed-envelope rise time or shaping RC is entered on the relay data, so the key clicks are not estimated.' }],
+      findings: [
+        {
+          severity: 'caution',
+          rule: 'keying.not-entered',
+          subject,
+          value: null,
+          limit: null,
+          unit: 's',
+          source: 'design.consistency',
+          message:
+            'No keyed-envelope rise time or shaping RC is entered on the relay data, so the key clicks are ' +
+              'not estimated.',
+        },
+      ],
     };
   }
   const riseS = edges.shape === 'rc' ? edges.timeConstantS * RC_10_90 : edges.riseS;
@@ -54,14 +66,32 @@ export function evaluateKeying(r: RelayParams, subject: string): { result: Keyin
   const ms = (s: number) => `${(s * 1e3).toFixed(1)} ms`;
   const click = (hz: number) => spectrum.clicks.find((c) => c.offsetHz === hz)!.levelDbc.toFixed(0);
   f.push({
-    severity: hardest < MIN_RISE_S ? 'caution' : 'ok', rule: 'keying.edges', subject, value: hardest, limit: MIN_RISE_S, unit: 's', source: 'keying.rise-time',
-    message: (hardest < MIN_RISE_S
-      ? `The keyed envelope rises in ${ms(riseS)} and falls in ${ms(fallS)}, harder than the ${ms(MIN_RISE_S)} usual for HF CW: key clicks reach ${click(500)} dBc at 500 Hz and ${click(1000)} dBc at 1 kHz from the carrier. Slow the edges (a larger shaping capacitor or a longer ramp).`
-      : `The keyed envelope rises in ${ms(riseS)} and falls in ${ms(fallS)}; key clicks ${click(500)} dBc at 500 Hz and ${click(1000)} dBc at 1 kHz from the carrier.`),
+    severity: hardest < MIN_RISE_S ? 'caution' : 'ok',
+    rule: 'keying.edges',
+    subject,
+    value: hardest,
+    limit: MIN_RISE_S,
+    unit: 's',
+    source: 'keying.rise-time',
+    message:
+      hardest < MIN_RISE_S
+        ? `The keyed envelope rises in ${ms(riseS)} and falls in ${ms(fallS)}, harder than the ${ms(MIN_RISE_S)}` +
+          ` usual for HF CW: key clicks reach ${click(500)} dBc at 500 Hz and ${click(1000)} dBc at 1 kHz from the ` +
+          `carrier. Slow the edges (a larger shaping capacitor or a longer ramp).`
+        : `The keyed envelope rises in ${ms(riseS)} and falls in ${ms(fallS)}; key clicks ${click(500)} dBc at 500 ` +
+          `Hz and ${click(1000)} dBc at 1 kHz from the carrier.`,
   });
   f.push({
-    severity: 'ok', rule: 'keying.bandwidth', subject, value: spectrum.occupiedBandwidthHz, limit: necessaryFadingHz, unit: 'Hz', source: 'keying.necessary-bandwidth',
-    message: `At ${r.wpm} WPM (${baud.toFixed(1)} Bd) the necessary bandwidth is ${necessaryFadingHz.toFixed(0)} Hz for fading circuits (${necessaryNonFadingHz.toFixed(0)} Hz non-fading); a steady dot train with these edges occupies ${spectrum.occupiedBandwidthHz.toFixed(0)} Hz (99 % of its power).`,
+    severity: 'ok',
+    rule: 'keying.bandwidth',
+    subject,
+    value: spectrum.occupiedBandwidthHz,
+    limit: necessaryFadingHz,
+    unit: 'Hz',
+    source: 'keying.necessary-bandwidth',
+    message: `At ${r.wpm} WPM (${baud.toFixed(1)} Bd) the necessary bandwidth is ${necessaryFadingHz.toFixed(0)}` +
+      ` Hz for fading circuits (${necessaryNonFadingHz.toFixed(0)} Hz non-fading); a steady dot train with these ` +
+      `edges occupies ${spectrum.occupiedBandwidthHz.toFixed(0)} Hz (99 % of its power).`,
   });
   // The first element starts when the sequencer lets RF through (txDelayS after the key) and ends with the dot; its
   // width at half amplitude is dot − delay. Time above 90 % amplitude = that width less, on each edge, the time from
@@ -73,13 +103,32 @@ export function evaluateKeying(r: RelayParams, subject: string): { result: Keyin
   const firstElementHalfS = spectrum.dotS - r.txDelayS;
   const firstElementFullS = firstElementHalfS - riseTo90S - fallFrom90S;
   f.push({
-    severity: firstElementFullS <= 0 ? 'caution' : 'ok', rule: 'keying.first-element', subject, value: firstElementFullS, limit: 0, unit: 's', source: 'keying.first-element',
-    message: firstElementFullS <= 0
-      ? `The first dot after the relay closes is ${ms(Math.max(0, firstElementHalfS))} wide and never reaches 90 % amplitude with these edges: shorten the transmit delay or use a hang time so the relay stays closed.`
-      : `The first dot after the relay closes is ${ms(firstElementHalfS)} wide (a dot is ${ms(spectrum.dotS)}), above 90 % amplitude for ${ms(firstElementFullS)}.`,
+    severity: firstElementFullS <= 0 ? 'caution' : 'ok',
+    rule: 'keying.first-element',
+    subject,
+    value: firstElementFullS,
+    limit: 0,
+    unit: 's',
+    source: 'keying.first-element',
+    message:
+      firstElementFullS <= 0
+        ? `The first dot after the relay closes is ${ms(Math.max(0, firstElementHalfS))} wide and never reaches 90 % ` +
+          `amplitude with these edges: shorten the transmit delay or use a hang time so the relay stays closed.`
+        : `The first dot after the relay closes is ${ms(firstElementHalfS)} wide (a dot is ${ms(spectrum.dotS)}` +
+          `), above 90 % amplitude for ${ms(firstElementFullS)}.`,
   });
   return {
-    result: { edges, riseS, fallS, spectrum, baud, necessaryFadingHz, necessaryNonFadingHz, firstElementHalfS, firstElementFullS },
+    result: {
+      edges,
+      riseS,
+      fallS,
+      spectrum,
+      baud,
+      necessaryFadingHz,
+      necessaryNonFadingHz,
+      firstElementHalfS,
+      firstElementFullS,
+    },
     findings: f,
   };
 }

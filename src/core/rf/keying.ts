@@ -85,7 +85,15 @@ function computeSpectrum(wpm: number, edges: KeyedEdges, maxOffsetHz: number): K
     outside += 2 * a[k] * a[k];
     edgeK = k - 1;
   }
-  const spectrum = { wpm, dotS, lineSpacingHz, offsetsHz, levelsDbc, clicks, occupiedBandwidthHz: 2 * edgeK * lineSpacingHz };
+  const spectrum = {
+    wpm,
+    dotS,
+    lineSpacingHz,
+    offsetsHz,
+    levelsDbc,
+    clicks,
+    occupiedBandwidthHz: 2 * edgeK * lineSpacingHz,
+  };
   Object.freeze(offsetsHz);
   Object.freeze(levelsDbc);
   clicks.forEach((c) => Object.freeze(c));

@@ -40,14 +40,16 @@ export function evalLadder(l: Ladder, values: Float64Array, frequencyHz: number,
   for (let k = 0; k < values.length; k++) {
     const x = values[k];
     if (l.kinds[k] === 1) {
-      // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.1 (table number from memory): series impedance Z -> [[1, Z], [0, 1]]
+      // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.1 (table number from
+      // memory): series impedance Z -> [[1, Z], [0, 1]]
       const zr = (w * x) / l.inductorQ;
       const zi = w * x;
       const nbr = ar * zr - ai * zi + br, nbi = ar * zi + ai * zr + bi;
       const ndr = cr * zr - ci * zi + dr, ndi = cr * zi + ci * zr + di;
       br = nbr; bi = nbi; dr = ndr; di = ndi;
     } else {
-      // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.1 (table number from memory): shunt admittance Y -> [[1, 0], [Y, 1]]
+      // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.1 (table number from
+      // memory): shunt admittance Y -> [[1, 0], [Y, 1]]
       const yr = (w * x) / l.capacitorQ;
       const yi = w * x;
       const nar = ar + br * yr - bi * yi, nai = ai + br * yi + bi * yr;
@@ -56,7 +58,8 @@ export function evalLadder(l: Ladder, values: Float64Array, frequencyHz: number,
     }
   }
   const z0 = l.r0Ohm;
-  // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.2 (from memory): S21 = 2 / (A + B/Z0 + C Z0 + D) for equal Z0
+  // Source: Pozar, Microwave Engineering, 4th ed. (2012), Table 4.2 (from memory): S21
+  // = 2 / (A + B/Z0 + C Z0 + D) for equal Z0
   const sr = ar + br / z0 + cr * z0 + dr;
   const si = ai + bi / z0 + ci * z0 + di;
   out[0] = 4 / (sr * sr + si * si);
@@ -164,8 +167,8 @@ export type SourceKind = 'thevenin' | 'norton' | 'design-load';
 
 /**
  * Load voltage per unit of the source quantity through the ladder into the load zl (Ω, or complex), with source
- * impedance zs (null = infinite, Norton only). Source: two-port chain relations (circuit theory, textbook; e.g. Pozar 2012,
- * section 4.4, from memory): V_L / E_s = Z_L / (A Z_L + B + Z_s (C Z_L + D)); Norton I_s = E_s / Z_s.
+ * impedance zs (null = infinite, Norton only). Source: two-port chain relations (circuit theory, textbook; e.g. Pozar
+ * 2012, section 4.4, from memory): V_L / E_s = Z_L / (A Z_L + B + Z_s (C Z_L + D)); Norton I_s = E_s / Z_s.
  */
 export function sourceTransfer(
   l: Ladder, frequencyHz: number, kind: SourceKind, zs: Cx | null, zlOhm: number | Cx = l.r0Ohm,

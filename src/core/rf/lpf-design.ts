@@ -83,13 +83,31 @@ export function designLpf(p: LpfParams, operatingFrequencyHz: number): Checked<L
       // Source: standard impedance/frequency scaling (Matthaei, Young & Jones 1964, §4.04, from memory): C = g/(R0 wc)
       const ideal = gk / (LPF_R0_OHM * wc);
       const snap = snapCapacitance(ideal, p.capacitorSeries, p.allowParallelPairs);
-      return { index: i + 1, kind: 'shunt-capacitor', g: gk, idealValue: ideal, capacitorPartsF: snap.parts, turns: null, builtValue: snap.total, errorFraction: snap.errorFraction };
+      return {
+        index: i + 1,
+        kind: 'shunt-capacitor',
+        g: gk,
+        idealValue: ideal,
+        capacitorPartsF: snap.parts,
+        turns: null,
+        builtValue: snap.total,
+        errorFraction: snap.errorFraction,
+      };
     }
     // Source: standard impedance/frequency scaling (Matthaei, Young & Jones 1964, §4.04, from memory): L = g R0 / wc
     const ideal = (gk * LPF_R0_OHM) / wc;
     const turns = turnsForInductance(ideal, p.coreAlHPerTurn2);
     const built = p.coreAlHPerTurn2 * turns * turns;
-    return { index: i + 1, kind: 'series-inductor', g: gk, idealValue: ideal, capacitorPartsF: [], turns, builtValue: built, errorFraction: built / ideal - 1 };
+    return {
+      index: i + 1,
+      kind: 'series-inductor',
+      g: gk,
+      idealValue: ideal,
+      capacitorPartsF: [],
+      turns,
+      builtValue: built,
+      errorFraction: built / ideal - 1,
+    };
   });
   return {
     ok: true,

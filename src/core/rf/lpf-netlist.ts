@@ -15,7 +15,10 @@ export function lpfNetlist(design: LpfDesign, frequenciesHz?: number[]): string 
   const f0 = design.operatingFrequencyHz;
   const freqs = frequenciesHz ?? [f0, 2 * f0, 3 * f0, 4 * f0, 5 * f0];
   const lines: string[] = [];
-  lines.push(`* Low-pass filter as built: ${design.response} order ${design.order}, ${design.form}, fc ${num(design.cutoffHz)} Hz`);
+  lines.push(
+    `* Low-pass filter as built: ${design.response} order ${design.order}, ${design.form}, fc ${num(design.cutoffHz)}` +
+      ` Hz`,
+  );
   lines.push(`V1 src 0 DC 0 AC 2`);
   lines.push(`RS src n0 ${design.r0Ohm}`);
   let node = 0;

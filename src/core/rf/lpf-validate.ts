@@ -22,10 +22,12 @@ export const validatePaParams = (p: PaParams): FieldError[] => validate(paSpec, 
 export const validateRelayParams = (p: RelayParams): FieldError[] => validate(relaySpec, p);
 
 /** Project-level inputs the RF engine needs: the settings spec's frequency and target power fields. */
-export const validateRfInputs = (frequencyHz: number, targetPowerW: number): FieldError[] => validate(rfInputsSpec, { frequencyHz, targetPowerW });
+export const validateRfInputs = (frequencyHz: number, targetPowerW: number): FieldError[] =>
+  validate(rfInputsSpec, { frequencyHz, targetPowerW });
 
 /** Project RF settings (spurious rule, SWR, antenna, exposure). Field names are keys of RfSettings. */
 export const validateRfSettings = (rf: RfSettings): FieldError[] => validate(rfSettingsSpec, rf);
 
 /** Project heating inputs used by the PA: the settings spec's ambient and keying-duty fields. */
-export const validateThermalInputs = (ambientC: number, keyingDuty: number): FieldError[] => validate(thermalInputsSpec, { ambientC, keyingDuty });
+export const validateThermalInputs = (ambientC: number, keyingDuty: number): FieldError[] =>
+  validate(thermalInputsSpec, { ambientC, keyingDuty });

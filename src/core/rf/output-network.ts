@@ -44,7 +44,12 @@ export function lNetworkIdeal(rLowOhm: number, rHighOhm: number, frequencyHz: nu
 }
 
 /** Impedance looking into the low side: jX_L + (R_high ∥ 1/(jωC)), as [re, im] Ω. */
-export function lNetworkInput(seriesH: number, shuntF: number, rHighOhm: number, frequencyHz: number): [number, number] {
+export function lNetworkInput(
+  seriesH: number,
+  shuntF: number,
+  rHighOhm: number,
+  frequencyHz: number,
+): [number, number] {
   const w = 2 * Math.PI * frequencyHz;
   const b = w * shuntF * rHighOhm;
   // Source: circuit theory: R ∥ (−j/(ωC)) = R (1 − j ωCR) / (1 + (ωCR)²)
@@ -54,7 +59,10 @@ export function lNetworkInput(seriesH: number, shuntF: number, rHighOhm: number,
 }
 
 export function designOutputNetwork(
-  pa: PaParams, drainOhm: number, frequencyHz: number, core: { alHPerTurn2: number; series: ESeries; pairs: boolean } | null,
+  pa: PaParams,
+  drainOhm: number,
+  frequencyHz: number,
+  core: { alHPerTurn2: number; series: ESeries; pairs: boolean } | null,
 ): LNetwork | null {
   const loadOhm = pa.loadOhm;
   if (!(drainOhm > 0) || !(loadOhm > 0) || !(frequencyHz > 0) || Math.abs(drainOhm - loadOhm) < 1e-9) return null;
@@ -79,5 +87,8 @@ export function designOutputNetwork(
 /** Drain feed choke of a single-ended stage: reactance ≥ 10 × the drain load at f, carrying the key-down current. */
 export function feedChoke(drainOhm: number, frequencyHz: number, keyDownCurrentA: number): RfChoke {
   // Source: inductive reactance X = ωL (textbook), with the factor of CHOKE_REACTANCE_FACTOR (common practice)
-  return { minInductanceH: (CHOKE_REACTANCE_FACTOR * drainOhm) / (2 * Math.PI * frequencyHz), currentA: keyDownCurrentA };
+  return {
+    minInductanceH: (CHOKE_REACTANCE_FACTOR * drainOhm) / (2 * Math.PI * frequencyHz),
+    currentA: keyDownCurrentA,
+  };
 }

@@ -67,7 +67,13 @@ export function bandFigures(w: PaWaveform, designOutputW: number, railV: number,
  * dissipation: DC input = dissipation − bias + output (energy balance), scaled from the hot supply to the design
  * current. null when the circle has one point (SWR 1).
  */
-export function swrKeyDownCurrent(swr: PaSwrStress, biasW: number, matchedDcW: number, designCurrentA: number, biasA: number): { currentA: number; at: Worst } | null {
+export function swrKeyDownCurrent(
+  swr: PaSwrStress,
+  biasW: number,
+  matchedDcW: number,
+  designCurrentA: number,
+  biasA: number,
+): { currentA: number; at: Worst } | null {
   if (swr.points.length < 2 || !(matchedDcW > 0)) return null;
   const dcOf = (p: PaSwrStress['points'][number]) => Math.max(0, p.dissipationW - biasW) + p.outputW;
   const worst = swr.points.reduce((a, b) => (dcOf(b) > dcOf(a) ? b : a));

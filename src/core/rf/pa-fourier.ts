@@ -32,7 +32,8 @@ export function rectangularPulseCoefficient(n: number, thetaRad: number): number
  * level 1: min(drive · p_θ(ωt), 1). drive 1 is the plain pulse (the edge of saturation), Infinity the rectangular
  * pulse. Above the clip the excess drive·p_θ − 1 is itself a cosine pulse of half angle φ with
  * cos φ = cos θ + (1 − cos θ)/drive, so by superposition
- * c_n = drive (α_n(θ) − (1 − cos φ)/(1 − cos θ) α_n(φ)) (Fourier series, linearity; derivation, no published source).
+ * c_n = drive (α_n(θ) − (1 − cos φ)/(1 − cos θ) α_n(φ)) (Fourier series,
+ * linearity; derivation, no published source).
  */
 export function flattenedPulseCoefficient(n: number, thetaRad: number, drive: number): number {
   if (!(drive > 1)) return cosinePulseCoefficient(n, thetaRad);

@@ -25,12 +25,19 @@ export function powerCoefficient(topology: Topology, cls: AmpClass): number {
 
 /** Peak drain voltage as a multiple of the supply voltage. */
 export function peakDrainFactor(cls: AmpClass): number {
-  // Source: Sokal & Sokal (1975), class E peak 3.56 Vdd; 2 Vdd for transformer/choke-fed B, C, D (REFERENCE-VALUES §8.1)
+  // Source: Sokal & Sokal (1975), class E peak 3.56 Vdd; 2 Vdd for
+  // transformer/choke-fed B, C, D (REFERENCE-VALUES §8.1)
   return cls === 'E' ? 3.56 : 2;
 }
 
 /** Peak current of one conducting device, A. */
-export function peakDeviceCurrentA(topology: Topology, cls: AmpClass, vEffV: number, primaryOhm: number, outputW: number): number {
+export function peakDeviceCurrentA(
+  topology: Topology,
+  cls: AmpClass,
+  vEffV: number,
+  primaryOhm: number,
+  outputW: number,
+): number {
   if (cls === 'E') {
     // Source: Sokal & Sokal (1975): peak switch current about 2.86 x DC input current (from memory)
     const idc = outputW / Math.max(vEffV, 1e-9);
@@ -67,7 +74,9 @@ export function operatingPoint(pa: PaParams, railV: number, primaryOhm: number, 
   for (let it = 0; it < 200; it++) {
     const veff = Math.max(0, railV - vsat);
     out = (k * veff * veff) / primaryOhm;
-    ipk = peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, primaryOhm, out) * (pa.amplifierClass === 'E' ? 1 : Math.sqrt(powerShape));
+    ipk =
+      peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, primaryOhm, out) *
+      (pa.amplifierClass === 'E' ? 1 : Math.sqrt(powerShape));
     if (rds === 0) break;
     const next = Math.min(ipk * rds, railV);
     if (Math.abs(next - vsat) < 1e-9) break;
@@ -85,7 +94,9 @@ export function primaryOhmForPower(pa: PaParams, railV: number, targetW: number,
     const veff = Math.max(0, railV - vsat);
     r = Math.max((k * veff * veff) / targetW, 1e-6);
     if (pa.saturationV !== null || !pa.rdsOnOhm) break;
-    const ipk = peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, r, targetW) * (pa.amplifierClass === 'E' ? 1 : Math.sqrt(powerShape));
+    const ipk =
+      peakDeviceCurrentA(pa.topology, pa.amplifierClass, veff, r, targetW) *
+      (pa.amplifierClass === 'E' ? 1 : Math.sqrt(powerShape));
     const next = Math.min(ipk * pa.rdsOnOhm, railV);
     if (Math.abs(next - vsat) < 1e-9) break;
     vsat = 0.5 * (vsat + next);

@@ -46,7 +46,8 @@ export function paSource(inp: PaSourceInput): PaSource {
       label: `stiff voltage source, Rds(on) through the transformer ≈ ${r.toFixed(2)} Ω`,
     };
   }
-  // Class E: series L0–C0 with the excess reactance, L0 = QL R/ω and 1/(ωC0) = (QL − X_excess) R (class-e-sim.ts);
+  // Class E: series L0–C0 with the excess reactance, L0 = QL R/ω and 1/(ωC0)
+  // = (QL − X_excess) R (class-e-sim.ts);
   // referred to the load side R becomes the load resistance (push-pull: two halves of half the load in series)
   const rl = pa.loadOhm;
   const zsAt = (n: number): Cx => ({ re: 0, im: rl * (CLASS_E_QL * n - (CLASS_E_QL - CLASS_E_EXCESS) / n) });

@@ -10,16 +10,28 @@ export function spectrumFindings(pa: PaParams, s: Omit<PaSpectrum, 'waveform'>, 
   const base = { subject, limit: null };
   if (a.conductionAngleDeg !== undefined) {
     f.push({
-      ...base, severity: 'ok', rule: 'pa.conduction-angle', value: a.conductionAngleDeg, unit: '°', source: 'pa.harmonics-class-c',
-      message: `No conduction angle entered: ${a.conductionAngleDeg}° assumed (±15° with drive and supply) for the ` +
+      ...base,
+      severity: 'ok',
+      rule: 'pa.conduction-angle',
+      value: a.conductionAngleDeg,
+      unit: '°',
+      source: 'pa.harmonics-class-c',
+      message:
+        `No conduction angle entered: ${a.conductionAngleDeg}° assumed (±15° with drive and supply) for the ` +
         'class-C harmonics; enter it when known.',
     });
   }
   if (a.imbalanceTypical !== undefined || a.imbalanceWorst !== undefined) {
     const what = pa.topology === 'push-pull' ? 'push-pull imbalance' : 'duty error';
     f.push({
-      ...base, severity: 'ok', rule: 'pa.imbalance', value: s.imbalanceWorst, unit: '', source: 'pa.harmonics-imbalance',
-      message: `No ${what} entered: ${Math.round(s.imbalanceTypical * 100)} % typical and ` +
+      ...base,
+      severity: 'ok',
+      rule: 'pa.imbalance',
+      value: s.imbalanceWorst,
+      unit: '',
+      source: 'pa.harmonics-imbalance',
+      message:
+        `No ${what} entered: ${Math.round(s.imbalanceTypical * 100)} % typical and ` +
         `${Math.round(s.imbalanceWorst * 100)} % worst assumed for the harmonic bands; enter your own when measured.`,
     });
   }
@@ -53,26 +65,52 @@ export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext
   const budget = `the supply budget carries the band's most, ${a2(c.band.bandMaxCurrentA)} key-down (RF part)`;
   // Common practice, no published source: 5 % more current than at the design drive is worth saying
   if (c.band.bandMaxCurrentA > c.band.designCurrentA * 1.05) {
-    const what = w.model === 'cosine-pulse' ? 'Driven into hard saturation (the worst end of the harmonic bands)'
-      : w.model === 'class-e-simulated' ? 'With a low loaded Q of the series network (the worst end of the harmonic bands)'
-        : 'At the worst end of the harmonic bands';
-    f.push({ ...base, limit: c.band.designCurrentA, severity: 'caution', rule: 'pa.saturation-current', value: c.band.bandMaxCurrentA, unit: 'A', source: 'pa.waveform-dc',
-      message: `${what} the stage draws up to ${a2(c.band.bandMaxCurrentA)} key-down (RF part) and gives up to ` +
+    const what =
+      w.model === 'cosine-pulse'
+        ? 'Driven into hard saturation (the worst end of the harmonic bands)'
+        : w.model === 'class-e-simulated'
+          ? 'With a low loaded Q of the series network (the worst end of the harmonic bands)'
+          : 'At the worst end of the harmonic bands';
+    f.push({
+      ...base,
+      limit: c.band.designCurrentA,
+      severity: 'caution',
+      rule: 'pa.saturation-current',
+      value: c.band.bandMaxCurrentA,
+      unit: 'A',
+      source: 'pa.waveform-dc',
+      message:
+        `${what} the stage draws up to ${a2(c.band.bandMaxCurrentA)} key-down (RF part) and gives up to ` +
         `${w1(c.band.bandMaxOutputW)}; at its design drive it draws ${a2(c.band.designCurrentA)} for ` +
         `${w1(c.designOutputW)}. The supply budget carries the higher ${a2(c.band.bandMaxCurrentA)} (the supply page ` +
         'sizes the rail, its fuses and the transformer for it); drive the stage no harder than its design point ' +
         'needs: the extra power comes with the worst harmonics and more heat.' });
   }
   if (w.model === 'cosine-pulse') {
-    f.push({ ...base, severity: 'ok', rule: 'pa.waveform', value: c.band.bandMaxOutputW, unit: 'W', source: 'pa.waveform-pulse',
-      message: `Drain-current pulse from the edge of saturation (${w1(c.designOutputW)}) to hard saturation, flat-topped ` +
-        `(up to ${w1(c.band.bandMaxOutputW)}); ${budget}; the harmonic bands come from the same pulses.` });
+    f.push({
+      ...base,
+      severity: 'ok',
+      rule: 'pa.waveform',
+      value: c.band.bandMaxOutputW,
+      unit: 'W',
+      source: 'pa.waveform-pulse',
+      message:
+        `Drain-current pulse from the edge of saturation (${w1(c.designOutputW)}) to hard saturation, flat-topped ` +
+        `(up to ${w1(c.band.bandMaxOutputW)}); ${budget}; the harmonic bands come from the same pulses.`,
+    });
   } else if (w.model === 'trapezoid') {
     const tau = w.transitionFraction ?? 0;
     const ns = ((w.transitionTimeS ?? 0) * 1e9).toFixed(0);
     if (w.transitionTooLong) {
-      f.push({ ...base, severity: 'fail', rule: 'pa.transition-time', value: w.transitionTimeS, unit: 's', source: 'pa.trapezoid',
-        message: `The switching transition time (${ns} ns) is ${(tau * 100).toFixed(0)} % of the period: longer than the ` +
+      f.push({
+        ...base,
+        severity: 'fail',
+        rule: 'pa.transition-time',
+        value: w.transitionTimeS,
+        unit: 's',
+        source: 'pa.trapezoid',
+        message:
+          `The switching transition time (${ns} ns) is ${(tau * 100).toFixed(0)} % of the period: longer than the ` +
           'shorter half of the switching cycle at the worst imbalance, so the drain never settles at the rails; ' +
           'switch faster (stronger gate drive, lower-capacitance devices) or use a linear class.' });
     }
@@ -81,9 +119,17 @@ export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext
         `${w1(c.designOutputW)} at 50 % duty; ${budget}; the harmonic bands come from the same waveform.` });
   } else if (w.classE) {
     const [lo, hi] = w.classE.loadedQ;
-    f.push({ ...base, severity: 'ok', rule: 'pa.waveform', value: c.designOutputW, unit: 'W', source: 'pa.class-e-harmonics',
-      message: `Simulated class-E stage: ${w1(c.designOutputW)} with a series network of loaded Q ${hi}; ${budget}; ` +
-        `the harmonics are those of its load current, from loaded Q ${hi} (best) to ${lo} (worst, not entered).` });
+    f.push({
+      ...base,
+      severity: 'ok',
+      rule: 'pa.waveform',
+      value: c.designOutputW,
+      unit: 'W',
+      source: 'pa.class-e-harmonics',
+      message:
+        `Simulated class-E stage: ${w1(c.designOutputW)} with a series network of loaded Q ${hi}; ${budget}; ` +
+        `the harmonics are those of its load current, from loaded Q ${hi} (best) to ${lo} (worst, not entered).`,
+    });
   }
   return f;
 }

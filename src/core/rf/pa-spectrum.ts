@@ -32,7 +32,12 @@ export interface HarmonicBand {
 /** Stands for "none in the ideal waveform", dBc (kept finite for JSON). */
 export const MIN_DBC = -200;
 /** Assumed inputs when left empty. Common practice, no published source (10 ns: an HF MOSFET with a gate driver). */
-export const ASSUMED = { conductionAngleDeg: 150, imbalanceTypical: 0.05, imbalanceWorst: 0.2, transitionTimeS: 10e-9 } as const;
+export const ASSUMED = {
+  conductionAngleDeg: 150,
+  imbalanceTypical: 0.05,
+  imbalanceWorst: 0.2,
+  transitionTimeS: 10e-9,
+} as const;
 /** Spread of the class-C conduction angle with drive and supply, degrees each way. */
 // Common practice, no published source
 export const CONDUCTION_SPREAD_DEG = 15;
@@ -77,7 +82,8 @@ export interface PaSpectrum {
 }
 
 type SpectrumInput = Pick<
-  PaParams, 'topology' | 'amplifierClass' | 'conductionAngleDeg' | 'imbalanceTypical' | 'imbalanceWorst' | 'transitionTimeS'
+  PaParams,
+  'topology' | 'amplifierClass' | 'conductionAngleDeg' | 'imbalanceTypical' | 'imbalanceWorst' | 'transitionTimeS'
 >;
 
 export interface SpectrumOptions {
@@ -113,7 +119,9 @@ function trapezoidPoint(duty: number, tau: number): WavePoint {
   return {
     powerRel: f1 ** 2,
     dcRel: f1 ** 2,
-    harmonic: Array.from({ length: NMAX + 1 }, (_, n) => (n < 2 ? 1 : trapezoidCoefficient(n, duty, t) / trapezoidCoefficient(1, duty, t))),
+    harmonic: Array.from({ length: NMAX + 1 }, (_, n) =>
+      n < 2 ? 1 : trapezoidCoefficient(n, duty, t) / trapezoidCoefficient(1, duty, t),
+    ),
   };
 }
 
@@ -121,9 +129,22 @@ function trapezoidPoint(duty: number, tau: number): WavePoint {
 const memo = new Map<string, PaSpectrum>();
 const MEMO_MAX = 256;
 
-export function paSpectrum(pa: SpectrumInput, harmonics: readonly number[] = [2, 3, 4, 5], opts: SpectrumOptions = {}): PaSpectrum {
-  const key = JSON.stringify([pa.topology, pa.amplifierClass, pa.conductionAngleDeg, pa.imbalanceTypical, pa.imbalanceWorst,
-    pa.transitionTimeS, harmonics, opts.frequencyHz, opts.classERdsRatio]);
+export function paSpectrum(
+  pa: SpectrumInput,
+  harmonics: readonly number[] = [2, 3, 4, 5],
+  opts: SpectrumOptions = {},
+): PaSpectrum {
+  const key = JSON.stringify([
+    pa.topology,
+    pa.amplifierClass,
+    pa.conductionAngleDeg,
+    pa.imbalanceTypical,
+    pa.imbalanceWorst,
+    pa.transitionTimeS,
+    harmonics,
+    opts.frequencyHz,
+    opts.classERdsRatio,
+  ]);
   const hit = memo.get(key);
   if (hit) return hit;
   const s = computeSpectrum(pa, harmonics, opts);
@@ -166,7 +187,10 @@ function computeSpectrum(pa: SpectrumInput, harmonics: readonly number[], opts: 
     evenPoints = points;
   } else if (cls === 'D') {
     const trS = take('transitionTimeS', pa.transitionTimeS);
-    const f = opts.frequencyHz !== undefined && Number.isFinite(opts.frequencyHz) && opts.frequencyHz > 0 ? opts.frequencyHz : 0;
+    const f =
+      opts.frequencyHz !== undefined && Number.isFinite(opts.frequencyHz) && opts.frequencyHz > 0
+        ? opts.frequencyHz
+        : 0;
     const tau = trS * f;
     const dutyT = 0.5 + epsT / 2;
     const dutyW = 0.5 + epsW / 2;
@@ -185,7 +209,11 @@ function computeSpectrum(pa: SpectrumInput, harmonics: readonly number[], opts: 
       dcRel: e.dcInputRatio / hi.outputRatio,
       harmonic: [1, ...e.loadHarmonics],
     });
-    waveform.classE = { outputRatio: hi.outputRatio, dcInputRatio: hi.dcInputRatio, loadedQ: [CLASS_E_QL_LOW, CLASS_E_QL] };
+    waveform.classE = {
+      outputRatio: hi.outputRatio,
+      dcInputRatio: hi.dcInputRatio,
+      loadedQ: [CLASS_E_QL_LOW, CLASS_E_QL],
+    };
     waveform.design = point(hi);
     points = [point(hi), point(lo)];
     evenPoints = points;
@@ -203,9 +231,15 @@ function computeSpectrum(pa: SpectrumInput, harmonics: readonly number[], opts: 
     if (even && pp) {
       // halves (1 + ε/2) and (1 − ε/2): even harmonics ε a_n against a fundamental 2 a_1 (Fourier series,
       // linear superposition)
-      return { n, bestDbc: toDbc((epsT * r.min) / 2), worstDbc: toDbc((epsW * r.max) / 2), basis: 'push-pull-imbalance' };
+      return {
+        n,
+        bestDbc: toDbc((epsT * r.min) / 2),
+        worstDbc: toDbc((epsW * r.max) / 2),
+        basis: 'push-pull-imbalance',
+      };
     }
-    const basis: SpectrumBasis = cls === 'E' ? 'class-e-simulated' : cls === 'B' && !even ? 'saturation-bound' : 'cosine-pulse';
+    const basis: SpectrumBasis =
+      cls === 'E' ? 'class-e-simulated' : cls === 'B' && !even ? 'saturation-bound' : 'cosine-pulse';
     return { n, bestDbc: toDbc(r.min), worstDbc: toDbc(r.max), basis };
   });
   // shared between callers through the memo: frozen so nobody can change another's result
@@ -224,8 +258,12 @@ export const transitionTimeOf = (pa: Pick<PaParams, 'transitionTimeS'>): number 
  * Class D: the fundamental power of the trapezoid at 50 % duty over the ideal square wave's, sinc²(π t_r f)
  * (trapezoid spectrum, Paul 2006 §3.2, from memory); 1 for other classes or an unknown frequency.
  */
-export function switchingPowerShape(pa: Pick<PaParams, 'amplifierClass' | 'transitionTimeS'>, frequencyHz: number | undefined): number {
-  if (pa.amplifierClass !== 'D' || frequencyHz === undefined || !Number.isFinite(frequencyHz) || frequencyHz <= 0) return 1;
+export function switchingPowerShape(
+  pa: Pick<PaParams, 'amplifierClass' | 'transitionTimeS'>,
+  frequencyHz: number | undefined,
+): number {
+  if (pa.amplifierClass !== 'D' || frequencyHz === undefined || !Number.isFinite(frequencyHz) || frequencyHz <= 0)
+    return 1;
   const tau = Math.min(0.5, transitionTimeOf(pa) * frequencyHz);
   return (trapezoidCoefficient(1, 0.5, tau) / trapezoidCoefficient(1, 0.5, 0)) ** 2;
 }

@@ -33,7 +33,14 @@ export const NO_HEATSINK_NEEDED_K_PER_W = 1e6;
 
 const SRC = 'pa.thermal';
 
-export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW: number, ambientC: number, keyingDuty: number): PaThermal & { findings: Finding[] } {
+export function paThermal(
+  pa: PaParams,
+  outputW: number,
+  dcInputW: number,
+  biasW: number,
+  ambientC: number,
+  keyingDuty: number,
+): PaThermal & { findings: Finding[] } {
   const m = pa.mount;
   const n = Math.max(1, pa.devices);
   const dissipationTotalW = Math.max(0, dcInputW - outputW) + biasW;
@@ -72,34 +79,70 @@ export function paThermal(pa: PaParams, outputW: number, dcInputW: number, biasW
     });
   } else if (sa === null) {
     findings.push({
-      severity: thetaSaNeededAverageKPerW === null ? 'fail' : 'ok', rule: 'pa.heatsink', subject: '', value: thetaSaNeededAverageKPerW, limit: null, unit: 'K/W', source: SRC,
-      message: thetaSaNeededAverageKPerW === null
-        ? `No heatsink can hold the junction below ${tjTargetC.toFixed(0)} °C at ${average.toFixed(1)} W per device: share the heat over more devices or lower the power.`
-        : `Choose a heatsink of at most ${thetaSaNeededAverageKPerW.toFixed(2)} K/W ${sinkWord} for CW keying` +
-          (thetaSaNeededContinuousKPerW === null ? '; no heatsink allows a continuous tune-up carrier.' : ` (${thetaSaNeededContinuousKPerW.toFixed(2)} K/W for a continuous tune-up carrier).`),
+      severity: thetaSaNeededAverageKPerW === null ? 'fail' : 'ok',
+      rule: 'pa.heatsink',
+      subject: '',
+      value: thetaSaNeededAverageKPerW,
+      limit: null,
+      unit: 'K/W',
+      source: SRC,
+      message:
+        thetaSaNeededAverageKPerW === null
+          ? `No heatsink can hold the junction below ${tjTargetC.toFixed(0)} °C at ${average.toFixed(1)}` +
+            ` W per device: share the heat over more devices or lower the power.`
+          : `Choose a heatsink of at most ${thetaSaNeededAverageKPerW.toFixed(2)} K/W ${sinkWord} for CW keying` +
+            (thetaSaNeededContinuousKPerW === null
+              ? '; no heatsink allows a continuous tune-up carrier.'
+              : ` (${thetaSaNeededContinuousKPerW.toFixed(2)} K/W for a continuous tune-up carrier).`),
     });
   } else {
     const ta = tjAverageC as number;
     const tc = tjContinuousC as number;
     findings.push({
-      severity: ta > tjTargetC ? 'fail' : 'ok', rule: 'pa.tj-keying', subject: '', value: ta, limit: tjTargetC, unit: '°C', source: SRC,
-      message: ta > tjTargetC
-        ? `With the fitted heatsink${sharedBy > 1 ? ` (shared by ${sharedBy} devices)` : ''} the junction averages ${ta.toFixed(0)} °C in CW keying, above the ${tjTargetC.toFixed(0)} °C target: fit a larger heatsink.`
-        : `Junction about ${ta.toFixed(0)} °C in CW keying (target ${tjTargetC.toFixed(0)} °C)` +
-          `${sharedBy > 1 ? `, ${sharedBy} devices sharing one heatsink` : ''}.`,
+      severity: ta > tjTargetC ? 'fail' : 'ok',
+      rule: 'pa.tj-keying',
+      subject: '',
+      value: ta,
+      limit: tjTargetC,
+      unit: '°C',
+      source: SRC,
+      message:
+        ta > tjTargetC
+          ? `With the fitted heatsink${sharedBy > 1 ? ` (shared by ${sharedBy} devices)` : ''} the junction averages ` +
+            `${ta.toFixed(0)} °C in CW keying, above the ${tjTargetC.toFixed(0)} °C target: fit a larger heatsink.`
+          : `Junction about ${ta.toFixed(0)} °C in CW keying (target ${tjTargetC.toFixed(0)} °C)` +
+            `${sharedBy > 1 ? `, ${sharedBy} devices sharing one heatsink` : ''}.`,
     });
     findings.push({
-      severity: tc > tjTargetC ? 'caution' : 'ok', rule: 'pa.tj-carrier', subject: '', value: tc, limit: tjTargetC, unit: '°C', source: SRC,
-      message: tc > m.tjMaxC
-        ? `A continuous carrier would take the junction to ${tc.toFixed(0)} °C, beyond its ${m.tjMaxC} °C maximum: keep tune-up to a few seconds or tune at reduced power.`
-        : tc > tjTargetC
-          ? `A continuous carrier would reach ${tc.toFixed(0)} °C, above the ${tjTargetC.toFixed(0)} °C target: keep tune-up short.`
-          : `A continuous tune-up carrier stays at about ${tc.toFixed(0)} °C.`,
+      severity: tc > tjTargetC ? 'caution' : 'ok',
+      rule: 'pa.tj-carrier',
+      subject: '',
+      value: tc,
+      limit: tjTargetC,
+      unit: '°C',
+      source: SRC,
+      message:
+        tc > m.tjMaxC
+          ? `A continuous carrier would take the junction to ${tc.toFixed(0)} °C, beyond its ${m.tjMaxC}` +
+            ` °C maximum: keep tune-up to a few seconds or tune at reduced power.`
+          : tc > tjTargetC
+            ? `A continuous carrier would reach ${tc.toFixed(0)} °C, above the ${tjTargetC.toFixed(0)} °C target: ` +
+              `keep tune-up short.`
+            : `A continuous tune-up carrier stays at about ${tc.toFixed(0)} °C.`,
     });
   }
   findings.push({
-    severity: 'caution', rule: 'pa.heat-safety', subject: '', value: null, limit: null, unit: '', source: 'pa.heat', kind: 'standing',
-    message: 'Heatsinks and device tabs get hot enough to burn; tabs are often at drain voltage, so insulate them or keep fingers away when keyed.',
+    severity: 'caution',
+    rule: 'pa.heat-safety',
+    subject: '',
+    value: null,
+    limit: null,
+    unit: '',
+    source: 'pa.heat',
+    kind: 'standing',
+    message:
+      'Heatsinks and device tabs get hot enough to burn; tabs are often at drain voltage, so insulate them or keep ' +
+        'fingers away when keyed.',
   });
   return {
     dissipationTotalW, dissipationPerDeviceW: perDevice, averagePerDeviceW: average, tjTargetC, sharedBy,

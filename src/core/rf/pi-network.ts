@@ -42,7 +42,14 @@ export function piNetworkIdeal(drainOhm: number, loadOhm: number, frequencyHz: n
   const cHi = 1 / (w * xHi);
   const cLo = 1 / (w * xLo);
   const drainHigh = drainOhm >= loadOhm;
-  return { q, q2, virtualOhm: rv, drainShuntF: drainHigh ? cHi : cLo, loadShuntF: drainHigh ? cLo : cHi, seriesH: xL / w };
+  return {
+    q,
+    q2,
+    virtualOhm: rv,
+    drainShuntF: drainHigh ? cHi : cLo,
+    loadShuntF: drainHigh ? cLo : cHi,
+    seriesH: xL / w,
+  };
 }
 
 const par = (a: C, b: C): C => {
@@ -54,7 +61,13 @@ const par = (a: C, b: C): C => {
 };
 
 /** Impedance looking into the drain side of a pi network loaded by rLoadOhm, [re, im] Ω. */
-export function piNetworkInput(drainShuntF: number, seriesH: number, loadShuntF: number, rLoadOhm: number, frequencyHz: number): C {
+export function piNetworkInput(
+  drainShuntF: number,
+  seriesH: number,
+  loadShuntF: number,
+  rLoadOhm: number,
+  frequencyHz: number,
+): C {
   const w = 2 * Math.PI * frequencyHz;
   const zcLoad: C = [0, -1 / (w * loadShuntF)];
   const zcDrain: C = [0, -1 / (w * drainShuntF)];
@@ -87,7 +100,12 @@ export interface NetworkCore {
 
 /** The pi network a stage needs, with standard capacitors and turns; null when the loads make no sense. */
 export function designPiNetwork(
-  drainOhm: number, loadOhm: number, frequencyHz: number, pushPull: boolean, core: NetworkCore | null, series: ESeries = 'E12',
+  drainOhm: number,
+  loadOhm: number,
+  frequencyHz: number,
+  pushPull: boolean,
+  core: NetworkCore | null,
+  series: ESeries = 'E12',
 ): PiNetwork | null {
   if (!(drainOhm > 0) || !(loadOhm > 0) || !(frequencyHz > 0)) return null;
   const hi = Math.max(drainOhm, loadOhm);
@@ -107,9 +125,17 @@ export function designPiNetwork(
   const builtSeriesH = builtLegH === null ? null : pushPull ? 2 * builtLegH : builtLegH;
   const built = builtSeriesH !== null ? piNetworkInput(cd.total, builtSeriesH, cl.total, loadOhm, frequencyHz) : null;
   return {
-    drainOhm, loadOhm, form: pushPull ? 'balanced' : 'single-ended', ideal,
-    drainCapacitorPartsF: cd.parts, loadCapacitorPartsF: cl.parts, builtDrainShuntF: cd.total, builtLoadShuntF: cl.total,
-    turns, builtSeriesH, builtDrainOhm: built,
+    drainOhm,
+    loadOhm,
+    form: pushPull ? 'balanced' : 'single-ended',
+    ideal,
+    drainCapacitorPartsF: cd.parts,
+    loadCapacitorPartsF: cl.parts,
+    builtDrainShuntF: cd.total,
+    builtLoadShuntF: cl.total,
+    turns,
+    builtSeriesH,
+    builtDrainOhm: built,
   };
 }
 
@@ -124,7 +150,12 @@ export interface ClassEShunt {
 }
 
 /** Class E: the external shunt capacitor beside the device (null when the device alone has too much, or no Coss). */
-export function classEShuntCapacitor(drainOhm: number, frequencyHz: number, cossF: number | null, series: ESeries): ClassEShunt | null {
+export function classEShuntCapacitor(
+  drainOhm: number,
+  frequencyHz: number,
+  cossF: number | null,
+  series: ESeries,
+): ClassEShunt | null {
   if (cossF === null || !(cossF >= 0) || !(drainOhm > 0) || !(frequencyHz > 0)) return null;
   // Source: nominal class-E design, C1 = 0.1836 / (ω R) (N. O. Sokal and A. D. Sokal, IEEE JSSC SC-10(3), 1975;
   // constant from memory); solved for f with C1 = Coss for the highest usable frequency
@@ -148,15 +179,32 @@ export function piFindings(pi: PiNetwork, subject: string): Finding[] {
   const source = pi.form === 'balanced' ? 'network.push-pull' : 'network.pi';
   const base = { rule: 'network.pi', subject: `${subject}: pi network`, unit: 'Ω', source } as const;
   if (!pi.builtDrainOhm) {
-    return [{ ...base, severity: 'ok', value: null, limit: pi.drainOhm,
-      message: `A pi network for ${pi.drainOhm.toFixed(1)} Ω is designed; choose a core to count its turns and check the built network.` }];
+    return [
+      {
+        ...base,
+        severity: 'ok',
+        value: null,
+        limit: pi.drainOhm,
+        message: `A pi network for ${pi.drainOhm.toFixed(1)} Ω is designed; choose a core to count its turns and ` +
+          `check the built network.`,
+      },
+    ];
   }
   const [re, im] = pi.builtDrainOhm;
   const off = Math.abs(re / pi.drainOhm - 1) > PI_R_TOLERANCE || Math.abs(im) > PI_X_TOLERANCE * pi.drainOhm;
   const z = `${re.toFixed(1)} ${im < 0 ? '−' : '+'} j${Math.abs(im).toFixed(1)} Ω`;
-  return [{ ...base, severity: off ? 'caution' : 'ok', value: re, limit: pi.drainOhm,
-    message: off
-      ? `Built with standard capacitors and ${pi.turns} turns the pi network gives ${z} at the drain instead of ${pi.drainOhm.toFixed(1)} Ω: ` +
-        'adjust the turns (spread or squeeze them) or a capacitor on test.'
-      : `Built with standard capacitors and ${pi.turns} turns the pi network gives ${z} at the drain (target ${pi.drainOhm.toFixed(1)} Ω).` }];
+  return [
+    {
+      ...base,
+      severity: off ? 'caution' : 'ok',
+      value: re,
+      limit: pi.drainOhm,
+      message: off
+        ? `Built with standard capacitors and ${pi.turns} turns the pi network gives ${z} at the drain instead of ` +
+          `${pi.drainOhm.toFixed(1)} Ω: ` +
+          'adjust the turns (spread or squeeze them) or a capacitor on test.'
+        : `Built with standard capacitors and ${pi.turns} turns the pi network gives ${z} at the drain (target ` +
+          `${pi.drainOhm.toFixed(1)} Ω).`,
+    },
+  ];
 }

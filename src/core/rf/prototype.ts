@@ -16,7 +16,8 @@ export function prototypeG(response: LpfResponse, order: number, rippleDb: numbe
     return g;
   }
   if (!(rippleDb > 0)) throw new Error(`prototypeG: bad ripple ${rippleDb}`);
-  // Source: Matthaei, Young & Jones, Microwave Filters... (1964), §4.05 Chebyshev recurrence (equation number from memory)
+  // Source: Matthaei, Young & Jones, Microwave Filters... (1964), §4.05 Chebyshev
+  // recurrence (equation number from memory)
   const beta = Math.log(1 / Math.tanh(rippleDb / (40 / Math.LN10)));
   const gamma = Math.sinh(beta / (2 * order));
   const a = (k: number) => Math.sin(((2 * k - 1) * Math.PI) / (2 * order));
@@ -38,10 +39,12 @@ export function chebyshevT(n: number, x: number): number {
  */
 export function prototypeLossDb(response: LpfResponse, order: number, rippleDb: number, omega: number): number {
   if (response === 'butterworth') {
-    // Source: Ludwig & Bretchko, RF Circuit Design: Theory and Practice (2000, year from memory), §5 Butterworth |H|^2 = 1/(1 + w^2N)
+    // Source: Ludwig & Bretchko, RF Circuit Design: Theory and Practice (2000, year from
+    // memory), §5 Butterworth |H|^2 = 1/(1 + w^2N)
     return 10 * Math.log10(1 + omega ** (2 * order));
   }
-  // Source: Ludwig & Bretchko, RF Circuit Design: Theory and Practice (2000, year from memory), fig. 5-22 listing: LF = 1 + eps^2 T_n^2(w)
+  // Source: Ludwig & Bretchko, RF Circuit Design: Theory and Practice (2000, year from memory),
+  // fig. 5-22 listing: LF = 1 + eps^2 T_n^2(w)
   const eps2 = 10 ** (rippleDb / 10) - 1;
   return 10 * Math.log10(1 + eps2 * chebyshevT(order, omega) ** 2);
 }

@@ -25,7 +25,10 @@ export interface LpfStageResult {
   capacitorPeakV: number;
   /** Heat in the filter at key-down from its insertion loss, W. */
   filterLossW: number;
-  /** Each element's RF voltage and current at the worst SWR, the core's flux, fit and self-resonance (absent when not designed). */
+  /**
+   * Each element's RF voltage and current at the worst SWR, the core's flux, fit and
+   * self-resonance (absent when not designed).
+   */
   realisation?: CoreRealisation | null;
 }
 
