@@ -39,6 +39,9 @@ export interface Balance {
   dcRatio: number;
   /** Highest device current over the drive pulse's peak. */
   peakCurrentRatio: number;
+  /** Largest current the limit takes from a device's drive at any instant, over the drive pulse's peak (0 = the limit
+   * not reached; 1 = a device held fully off at its drive's peak, its drain carried past the limit by the network). */
+  cutRatio: number;
   /** Highest drain excursion above the supply over the rail-limited swing (1 = the drain at 2 Vdd − Vsat; above it
    * the harmonic voltages carry the drain of a device that has given way, or is not driven, beyond the limit). */
   swingPeak: number;
@@ -228,18 +231,19 @@ export function clipBalance(inp: BalanceInput): Balance {
     }
     return Math.hypot(re, im) * (2 / N);
   };
-  let sumA = 0, sumD = 0, maxA = 0, swingPeak = 0;
+  let sumA = 0, sumD = 0, maxA = 0, swingPeak = 0, cut = 0;
   for (let k = 0; k < N; k++) {
     const { a, b } = devices(v, k, RON);
     sumA += a + b;
     sumD += d1[k] + d2[k];
     maxA = Math.max(maxA, a, b);
+    cut = Math.max(cut, d1[k] - a, d2[k] - b);
     // push-pull: each drain swings Vdd ∓ v (one device each side); single-ended: Vdd − v
     swingPeak = Math.max(swingPeak, pp ? Math.abs(v[k]) : -v[k]);
   }
   const v1 = harm(v, 1);
   return {
-    currentRatio: harm(r.i, 1), dcRatio: sumA / sumD, peakCurrentRatio: maxA / peak, swingPeak,
+    currentRatio: harm(r.i, 1), dcRatio: sumA / sumD, peakCurrentRatio: maxA / peak, cutRatio: cut / peak, swingPeak,
     harmonicRatios: [1, 2, 3, 4, 5].map((n) => harm(v, n) / v1), converged, iterations, samples: v,
   };
 }

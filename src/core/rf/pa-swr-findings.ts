@@ -64,7 +64,8 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
   const vPk = clamped ? c.clampV! : s.worstDrainPeak.value;
   // class B/C at a clipping load: the peak includes the margin for the drain's ring (pa-swr CLIP_RING_MARGIN)
   const ring = s.worstDrainPeak.ringMargin && s.clip
-    ? ` The ${clamped ? 'unclamped ' : ''}peak includes a ${Math.round(s.clip.ringMargin * 100)} % margin for the ` +
+    ? ` The ${clamped ? 'unclamped ' : ''}peak includes a ` +
+      `${Math.round((s.worstDrainPeak.ringMarginFraction ?? s.clip.ringMargin) * 100)} % margin for the ` +
       'drain\'s ring where the stage clips (the harmonic voltages and the transformer\'s leakage carry it past ' +
       'twice the supply).' : '';
   const vWhere = `${where(s.worstDrainPeak)}${clamped ? ` (held there by the ${c.clampV} V drain clamp; ${s.worstDrainPeak.value.toFixed(1)} V without it)` : ''}`;

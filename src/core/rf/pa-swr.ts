@@ -27,8 +27,10 @@ export interface SwrPoint {
   dissipationW: number;
   /** Output power into this load, W. */
   outputW: number;
-  /** Class B/C: the drain peak carries the ring margin (the limit cuts the current here). */
+  /** Class B/C: the drain peak carries the ring margin (the limit takes part of the drive current here). */
   ringMargin?: boolean;
+  /** Class B/C: the margin carried, a fraction of the drain peak without it (up to CLIP_RING_MARGIN). */
+  ringMarginFraction?: number;
 }
 
 export interface Worst {
@@ -41,6 +43,8 @@ export interface Worst {
   antennaImOhm: number | null;
   /** Class B/C: the value carries the ring margin (CLIP_RING_MARGIN). */
   ringMargin?: boolean;
+  /** Class B/C: the margin carried, a fraction of the drain peak without it. */
+  ringMarginFraction?: number;
 }
 
 /** The stage with the antenna at its design load: the load the filter as built presents at the fundamental. */
@@ -117,13 +121,18 @@ export interface MatchedPoint {
 }
 
 /**
- * Class B/C at a clipping load: the drain of the device that has given way (or is not driven) is carried past the
- * rail limit by the harmonic voltages and rings with the transformer's leakage and the device capacitance. Neither is
- * entered for these classes, so the drain peak carries this margin over the rail-limited peak wherever the devices'
- * peak current is cut by the limit. Common practice, no published source; evidence: ngspice, push-pull class B and C
- * (k = 0.9995, 50 pF per drain) into SWR 2 at 0°, drain 10.5 % above 2 Vdd (test/core/rf/ngspice-pushpull-c-chain).
+ * Class B/C at a clipping load: where the limit takes a device's drive current, the current switched out of the
+ * transformer's leakage rings with the drain capacitance; a device held fully off cannot hold its drain, which rings
+ * below its limit while the transformer carries the opposite drain as far above 2 Vdd. Leakage is not entered for
+ * these classes, so the drain peak carries this margin times the share of the drive the limit takes at its largest
+ * (Balance cutRatio; the whole margin for the flat-topped model wherever it cuts the current). Common practice, no
+ * published source; evidence: ngspice, push-pull class B and C (k = 0.9995, 50 pF per drain) into SWR 2 at the
+ * antenna through the filter: drain 7-11 % above 2 Vdd where a device is held fully off (0° and 315°), about 1 % where
+ * the limit takes half the drive or less (270°) (test/core/rf/ngspice-pushpull-c-chain).
  */
 export const CLIP_RING_MARGIN = 0.12;
+/** Below this share of the drive taken by the limit no margin is carried (numerical: the knee's own rounding). */
+const RING_CUT_MIN = 0.01;
 
 /** Undamped leakage ring at a hard switching edge: drain overshoot above the load-line peak and its current. */
 export interface Ring {
@@ -213,7 +222,7 @@ function flatTopStress(m: MatchedPoint, z: { re: number; im: number }): Stress &
     peakDeviceA: m.peakDeviceA * currentRatio,
     dissipationW: Math.max(0, dcW - outputW) + m.biasW,
     outputW,
-    ...(ring > 1 ? { ringMargin: true } : {}),
+    ...(ring > 1 ? { ringMargin: true, ringMarginFraction: ring - 1 } : {}),
     clipModel: 'flat-top',
   };
 }
@@ -225,13 +234,15 @@ function balancedStress(
   // its ratio to the design's from the balanced waveform (energy balance)
   const outputW = m.outputW * hb.currentRatio ** 2 * z.re;
   const dcW = m.dcInputW * hb.dcRatio;
-  const ring = hb.peakCurrentRatio < 0.99 ? 1 + CLIP_RING_MARGIN : 1;
+  // the ring margin in proportion to the share of the drive the limit takes (ring amplitude = Z0 x the current
+  // switched out of the leakage, undamped series LC as leakageRing; Z0 not entered: CLIP_RING_MARGIN at the whole)
+  const fraction = hb.cutRatio > RING_CUT_MIN ? CLIP_RING_MARGIN * Math.min(1, hb.cutRatio) : 0;
   return {
-    drainPeakV: (m.maxRailV + swingV(m) * hb.swingPeak) * ring,
+    drainPeakV: (m.maxRailV + swingV(m) * hb.swingPeak) * (1 + fraction),
     peakDeviceA: m.peakDeviceA * hb.peakCurrentRatio,
     dissipationW: Math.max(0, dcW - outputW) + m.biasW,
     outputW,
-    ...(ring > 1 ? { ringMargin: true } : {}),
+    ...(fraction > 0 ? { ringMargin: true, ringMarginFraction: fraction } : {}),
     clipModel: 'harmonic-balance',
   };
 }
@@ -386,7 +397,8 @@ export function swrStress(
     return {
       value: best[key], phaseDeg: best.phaseDeg, loadReOhm: best.loadReOhm, loadImOhm: best.loadImOhm,
       antennaReOhm: best.antennaReOhm, antennaImOhm: best.antennaImOhm,
-      ...(key === 'drainPeakV' && best.ringMargin ? { ringMargin: true } : {}),
+      ...(key === 'drainPeakV' && best.ringMargin
+        ? { ringMargin: true, ringMarginFraction: best.ringMarginFraction ?? CLIP_RING_MARGIN } : {}),
     };
   };
   return {

@@ -1,10 +1,11 @@
 // Whole-chain cross-check in ngspice: a push-pull transformer-coupled class-C (150° conduction) and class-B (180°)
 // stage (each device a current source giving a cosine pulse, falling off as its drain reaches the saturation knee) on
 // a centre-tapped transformer, the low-pass filter, and 50 Ω or the SWR 2 circle at four phases. Netlist written
-// here from scratch (behavioural B sources, coupled inductors; ngspice user's manual). The drive is set from the textbook push-pull
-// relation so that the swing just reaches the supply at the design load (the program's design point): each half
-// sees R_dd/4, so V1 = (R_dd/4) 2 α1(θ) Ipk with α1 the cosine pulse's fundamental coefficient (cosine-pulse
-// coefficients as tabulated in Krauss, Bostian & Raab, Solid State Radio Engineering, 1980; from memory).
+// here from scratch (behavioural B sources, coupled inductors; ngspice user's manual). The drive is set from the
+// textbook push-pull relation so that the swing just reaches the supply at the design load (the program's design
+// point): each half sees R_dd/4, so V1 = (R_dd/4) 2 α1(θ) Ipk with α1 the cosine pulse's fundamental coefficient
+// (cosine-pulse coefficients as tabulated in Krauss, Bostian & Raab, Solid State Radio Engineering, 1980; from
+// memory). The drive rises over RAMP periods (the netlist).
 // The program's prediction: its load line at the filter's input impedance, balanced against the filter's input at
 // each harmonic where the swing reaches the rails (pa-swr stressAt with pa-clip-balance), and each odd harmonic's band
 // (pa-spectrum, its worst end raised by the clipped drain voltage where that is higher, pa-clip) less the filter's
@@ -13,7 +14,9 @@
 // Invented design: 13.8 V, 1:1 transformer (k = 0.9995), 7.03 MHz, 50 Ω.
 import { describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
-import { type Complex as C, ladderAndLoadLines, ladderInputOhm, runSpice, spiceScratchDir } from '../../helpers/ngspice';
+import {
+  type Complex as C, ladderAndLoadLines, ladderInputOhm, runSpice, spiceScratchDir,
+} from '../../helpers/ngspice';
 import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
 import { harmonicsFromSource, inputImpedance, ladderOf } from '../../../src/core/rf/lpf-analysis';
 import { evaluatePa } from '../../../src/core/rf/pa';
@@ -25,24 +28,28 @@ import { clipBalance, drainHarmonicLoad } from '../../../src/core/rf/pa-clip-bal
 import { CONSTRUCTION_FLOOR_DBC } from '../../../src/core/rf/harmonics';
 import { lpfParams, paParams } from './fixture';
 
-const haveNgspice = requireTool(NGSPICE, 'SPICE whole-chain check of the push-pull class-C stage', 'apt-get install ngspice');
+const haveNgspice = requireTool(NGSPICE, 'SPICE whole-chain check of the push-pull class-C stage',
+  'apt-get install ngspice');
 
 // Stated tolerances. The program's prediction is the harmonic balance of the stage against the filter's input at each
 // harmonic with the 50 pF per drain (pa-clip-balance, via pa-swr stressAt). Power, ngspice against it: class B 50 Ω
-// +1.2 %, SWR 2 at 0° −1.7 %, 90° +0.9 %, 180° +0.3 %, 270° +2.3 %; class C +2.2, −0.3, +0.9, +0.3, +1.1 %; so
+// +1.2 %, SWR 2 at 0° −1.7 %, 90° +0.9 %, 180° +0.3 %, 270° +2.4 %; class C +2.2, −0.3, +0.9, +0.3, +1.1 %; so
 // TOL_POWER is 3 % both ways. (Before: the drain voltage flat-topped at the rail limits, which the filter's shunt
 // capacitor does not let form: ngspice 14 % (B) and 17 % (C) below it at 0°, 20 % allowed below the program; the
 // flat-topped model stays checked as the upper end at 0°.)
-// Drain peak: ngspice's drain rings about 10.5 % above 2 Vdd at 0° (the leakage with the 50 pF), carried by the 12 %
-// ring margin where the limit cuts the current (pa-swr CLIP_RING_MARGIN): there the program is 3.2 % (C) and 3.9 % (B)
-// above ngspice; at 270° (barely clipping, no margin) ngspice is 0.9 % (C) and 0.7 % (B) above the program; at the
-// loads that do not clip ngspice is up to 6.1 % above it (class C, 180°: 23.0 V against 21.7 V, far below 2 Vdd).
-// So ngspice may stand DRAIN_ABOVE_CLIPPED (2 %) above the program where the stage clips, DRAIN_ABOVE (7 %) elsewhere,
-// and DRAIN_BELOW (5 %) below it. (Before: 12 % either way.)
+// Drain peak: where the limit takes a device's drive current the drain rings with the leakage and the 50 pF (a device
+// held fully off is rung below 0 V and the transformer carries the opposite drain as far above 2 Vdd); the program
+// carries CLIP_RING_MARGIN (12 %) times the share of the drive the limit takes (pa-swr). Seen (ngspice / program, V),
+// class C: 50 Ω 27.67 / 28.57, SWR 2 at 0° 30.49 / 31.48, 90° 26.65 / 26.58, 180° 21.67 / 21.71, 270° 27.95 / 29.51;
+// class B: 27.47 / 28.09, 30.46 / 31.70, 26.96 / 27.07, 21.00 / 21.12, 27.91 / 28.71. So ngspice may stand DRAIN_ABOVE
+// (2 %) above the program at every load (a device-rating check must not sit below the drain) and DRAIN_BELOW (7 %)
+// below it (270°, where the limit takes half the drive and the ring is small: 5.3 %). (Before: the margin only where
+// the peak current was cut, 7 % allowed above at loads that do not clip, 5 % below.) The drive rises over RAMP periods:
+// stepped on at full level, the filter and load ring for longer than the 60 periods before the window (up to 7 % above
+// the steady state at 225°), a start no keyed stage makes.
 const TOL_POWER = 0.03;
-const DRAIN_ABOVE = 0.07;
-const DRAIN_ABOVE_CLIPPED = 0.02;
-const DRAIN_BELOW = 0.05;
+const DRAIN_ABOVE = 0.02;
+const DRAIN_BELOW = 0.07;
 // 3rd harmonic at the antenna: within the program's band widened by this much, dB (or both below the floor), at
 // every load. At the clipping loads the band's worst end includes the flat-topped drain voltage through the filter
 // from a voltage source (pa-clip foldClipping): at SWR 2, 0° it sits 5 dB (B) and 10 dB (C) above ngspice, which is
@@ -50,8 +57,8 @@ const DRAIN_BELOW = 0.05;
 // where class B at 0° came 5.3 dB above it.)
 const TOL_HARMONIC_DB = 3;
 // The balanced drain voltage's 3rd (pa-clip-balance) through the filter from a stiff source, against ngspice: class C
-// within 1.3 dB at every load (50 Ω −68.7 / −67.8, SWR 2 at 0° −65.6 / −64.7, 90° −71.8 / −71.7, 180° −63.1 / −63.0,
-// 270° −65.1 / −63.8 dBc, program / ngspice); class B at 0° −61.3 / −60.1 dBc, elsewhere both below the −70 dBc
+// within 1.3 dB at every load (50 Ω −68.7 / −67.8, SWR 2 at 0° −65.6 / −65.2, 90° −71.8 / −71.7, 180° −63.1 / −63.0,
+// 270° −65.1 / −63.8 dBc, program / ngspice); class B at 0° −61.3 / −60.4 dBc, elsewhere both below the −70 dBc
 // construction floor. The band's worst end stays the flat-topped fold above (the upper end); this is its best estimate.
 const TOL_BALANCED_DB = 1.5;
 
@@ -63,6 +70,8 @@ const W = 2 * Math.PI * F0;
 const KNEE = 0.05; // saturation knee of the behavioural device, V
 const TSTOP = 80;
 const STEPS = 250;
+/** Periods over which the drive rises; the measurement window is periods 60 to 80. */
+const RAMP = 20;
 
 /** Pulse peak for half conduction angle θ: the swing (VDD − VSAT) at the design load, with the knee's own drop. */
 function pulsePeakA(thetaRad: number): number {
@@ -80,8 +89,12 @@ function netlist(d: LpfDesign, zl: C, thetaRad: number): string {
   const lFull = (20 * R0) / W; // full-primary reactance 20 x the drain-to-drain load: small magnetising current
   const cth = Math.cos(thetaRad).toPrecision(9);
   // cosine pulse of device k (phase 0 or π), falling off as the drain nears 0 V (saturation knee)
-  const dev = (k: 1 | 2, ph: string) => `B${k} d${k} 0 I = ${ipk.toPrecision(7)} * max(0, (cos(${W.toPrecision(9)}*time${ph}) - ${cth})/(1 - ${cth}))` +
-    ` * (1 - exp(-max(v(d${k}), 0)/${KNEE}))`;
+  // the drive rises over RAMP periods (raised cosine), as a keyed envelope does (a real edge is milliseconds, slower
+  // still): a drive stepped on at full level rings the filter and load for more than the 60 periods before the window
+  const tr = (RAMP * per).toPrecision(9);
+  const ramp = `(0.5 - 0.5*cos(${Math.PI.toPrecision(12)}*min(time, ${tr})/${tr}))`;
+  const dev = (k: 1 | 2, ph: string) => `B${k} d${k} 0 I = ${ramp} * ${ipk.toPrecision(7)}` +
+    ` * max(0, (cos(${W.toPrecision(9)}*time${ph}) - ${cth})/(1 - ${cth})) * (1 - exp(-max(v(d${k}), 0)/${KNEE}))`;
   return [
     '* push-pull class-C stage, low-pass filter, load (written from scratch for this test)',
     `VDD vdd 0 DC ${VDD}`,
@@ -98,7 +111,8 @@ function netlist(d: LpfDesign, zl: C, thetaRad: number): string {
     `RL nr 0 ${zl.re.toPrecision(7)}`,
     `.tran ${(per / STEPS).toPrecision(6)} ${(TSTOP * per).toPrecision(9)} 0 ${(per / STEPS).toPrecision(6)}`,
     `.meas tran vdpk MAX v(d1) from=${((TSTOP - 20) * per).toPrecision(9)} to=${(TSTOP * per).toPrecision(9)}`,
-    `.meas tran pout AVG par('v(nr)*v(nr)/${zl.re.toPrecision(7)}') from=${((TSTOP - 20) * per).toPrecision(9)} to=${(TSTOP * per).toPrecision(9)}`,
+    `.meas tran pout AVG par('v(nr)*v(nr)/${zl.re.toPrecision(7)}') from=${((TSTOP - 20) * per).toPrecision(9)}` +
+      ` to=${(TSTOP * per).toPrecision(9)}`,
     `.four ${F0} v(nr)`,
     '.end',
   ].join('\n');
@@ -119,14 +133,15 @@ function run(d: LpfDesign, zl: C, name: string, thetaRad: number) {
 // class C at 150° conduction; class B at 180° (half-sine pulses)
 const CLASSES: ['B' | 'C', number][] = [['C', 150], ['B', 180]];
 
-describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction) + low-pass filter in ngspice vs the program', (cls, conductionDeg) => {
+const CHAIN_TITLE = 'push-pull class %s (%i° conduction) + low-pass filter in ngspice vs the program';
+describe.skipIf(!haveNgspice).each(CLASSES)(CHAIN_TITLE, (cls, conductionDeg) => {
   const thetaRad = (conductionDeg / 2) * (Math.PI / 180);
   const dd = designLpf(lpfParams({ inductorQ: 10000, capacitorQ: 100000 }), F0);
   if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
   const d = dd.value;
   const paIn = paParams({
-    amplifierClass: cls, topology: 'push-pull', turnsRatio: 1, loadOhm: R0, saturationV: VSAT, rdsOnOhm: null, efficiency: 0.7,
-    conductionAngleDeg: cls === 'C' ? conductionDeg : null, imbalanceTypical: 0, imbalanceWorst: 0,
+    amplifierClass: cls, topology: 'push-pull', turnsRatio: 1, loadOhm: R0, saturationV: VSAT, rdsOnOhm: null,
+    efficiency: 0.7, conductionAngleDeg: cls === 'C' ? conductionDeg : null, imbalanceTypical: 0, imbalanceWorst: 0,
   });
   const pa = evaluatePa(paIn, VDD, { targetPowerW: 5, ambientC: 25, keyingDuty: 0.4 });
   const band3 = paSpectrum(paIn, [3], { frequencyHz: F0 }).bands.find((b) => b.n === 3)!;
@@ -155,16 +170,17 @@ describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction
       const upper = stressAt(cls, flat, zn);
       const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       expect(Number.isFinite(s.vdpk), s.out).toBe(true);
-      const clipping = Math.hypot(zn.re, zn.im) > 1;
       const vmsg = `drain: ngspice ${s.vdpk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`;
-      expect(s.vdpk / pred.drainPeakV - 1, vmsg).toBeLessThanOrEqual(clipping ? DRAIN_ABOVE_CLIPPED : DRAIN_ABOVE);
+      if (process.env.RW_PRINT) console.log(`class ${cls} ${name} ${vmsg}, zn ${zn.re.toFixed(3)} ${zn.im.toFixed(3)}`);
+      expect(s.vdpk / pred.drainPeakV - 1, vmsg).toBeLessThanOrEqual(DRAIN_ABOVE);
       expect(1 - s.vdpk / pred.drainPeakV, vmsg).toBeLessThanOrEqual(DRAIN_BELOW);
       const pmsg = `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`;
+      if (process.env.RW_PRINT) console.log(`class ${cls} ${name} ${pmsg}`);
       expect(Math.abs(s.pout / pred.outputW - 1), pmsg).toBeLessThanOrEqual(TOL_POWER);
       // the flat-topped model stays the upper end where the stage clips hard (SWR 2 at 0°, |z_in| = 1.96)
       if (Math.hypot(zn.re, zn.im) > 1.5) expect(upper.outputW, pmsg).toBeGreaterThanOrEqual(s.pout);
     });
-    it(`${name}: the 3rd harmonic at the antenna lies in the program's band from a current source (or below the floor)`, () => {
+    it(`${name}: the 3rd at the antenna lies in the program's band from a current source (or below the floor)`, () => {
       const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       // the load at 3f: its resistance with the series reactance scaled as an inductor (3X) or a capacitor (X/3)
       const zlAt = (n: number): C => ({ re: zl.re, im: zl.im >= 0 ? n * zl.im : zl.im / n });
@@ -199,6 +215,7 @@ describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction
       const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
       const spiceDbc = 20 * Math.log10(s.harm.get(3)! / s.harm.get(1)!);
       const msg = `3rd balanced: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`;
+      if (process.env.RW_PRINT) console.log(`class ${cls} ${name} ${msg}`);
       // below the construction floor (−70 dBc) only that is asserted
       if (predicted < CONSTRUCTION_FLOOR_DBC) {
         expect(spiceDbc, msg).toBeLessThan(CONSTRUCTION_FLOOR_DBC + TOL_BALANCED_DB);
@@ -209,20 +226,16 @@ describe.skipIf(!haveNgspice).each(CLASSES)('push-pull class %s (%i° conduction
   }
 });
 
-// The program's own sweep with the circle at the antenna, between the four phases above (45°, 135°, 225°, 315°): seen
-// when written, ngspice 7.6 % (C) and 6.5 % (B) ABOVE the program at 315° (the PA seeing 57.4 − j50.4 Ω: the stage
-// clips but its peak current is not cut, so no ring margin is applied, while ngspice's drain rings to 30.0 V), and
-// 7.3 % (C) and 5.7 % (B) below it at 45° (78.3 + j17.5 Ω, ring margin applied); 225°: ngspice 6.7 % (C) and 7.0 %
-// (B) above (not clipping). The ring margin's on/off step misses the ring at a strongly reactive clipping load: a gap
-// of the clipping model, held here by DRAIN_BETWEEN both ways until that model covers it.
-const DRAIN_BETWEEN = 0.08;
-const ESTABLISHED_PHASES = new Set([0, 90, 180, 270]);
-
+// The program's own sweep with the circle at the antenna, all eight phases held to the same band (ngspice / program,
+// V), class C: 45° 29.03 / 30.88, 135° 21.97 / 21.89, 225° 24.10 / 24.28, 315° 29.99 / 31.21 (the PA seeing
+// 57.4 − j50.4 Ω: the peak current is not cut, but a device is held fully off and rings: the whole margin carried);
+// class B: 29.78 / 31.33, 21.91 / 21.96, 23.43 / 23.65, 29.58 / 31.12. (Before: the margin only where the peak current
+// was cut and the drive stepped on: at 315° ngspice 7.6 % (C) and 6.5 % (B) above the program, held by 8 % either way.)
 const SWEEP_TITLE = 'push-pull class %s (%i° conduction): the SWR circle at the antenna, program sweep vs ngspice';
 describe.skipIf(!haveNgspice).each(CLASSES)(SWEEP_TITLE, (cls, conductionDeg) => {
   // the program's own stress sweep (evaluatePa with the filter known and the 50 pF per drain entered): the circle drawn
   // at the antenna, each load through the (lossless) filter to the stage; ngspice with the same antenna load; the
-  // tolerances above at 50 Ω and the four phases, DRAIN_BETWEEN between them
+  // tolerances above at 50 Ω and at every phase
   const thetaRad = (conductionDeg / 2) * (Math.PI / 180);
   const dd = designLpf(lpfParams({ inductorQ: 10000, capacitorQ: 100000 }), F0);
   if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
@@ -237,21 +250,17 @@ describe.skipIf(!haveNgspice).each(CLASSES)(SWEEP_TITLE, (cls, conductionDeg) =>
     worstSwr: 2, frequencyHz: F0, filterLadder: ladder, filterInputOhmAt: (n) => inputImpedance(ladder, n * F0, R0),
   });
   const sweep = pa.swr!;
-  type Point = { drainPeakV: number; loadReOhm: number; loadImOhm: number };
-  const check = (name: string, zl: C, p: Point, between = false) => {
+  type Point = { drainPeakV: number; loadReOhm: number; loadImOhm: number; ringMarginFraction?: number };
+  const check = (name: string, zl: C, p: Point) => {
     const s = run(d, zl, `${cls}_${name.replace(/\W+/g, '_')}`, thetaRad);
     expect(Number.isFinite(s.vdpk), s.out).toBe(true);
     const clipping = Math.hypot(p.loadReOhm, p.loadImOhm) / R0 > 1;
     const msg = `${name}: ngspice ${s.vdpk.toFixed(2)} V, program ${p.drainPeakV.toFixed(2)} V` +
       `${clipping ? ' (clipping)' : ''}, the PA seeing ${p.loadReOhm.toFixed(1)} ${p.loadImOhm < 0 ? '−' : '+'} ` +
       `j${Math.abs(p.loadImOhm).toFixed(1)} Ω` +
-      `${'ringMargin' in p && p.ringMargin ? ', ring margin' : ''}`;
+      `${p.ringMarginFraction ? `, ring margin ${(100 * p.ringMarginFraction).toFixed(1)} %` : ''}`;
     if (process.env.RW_PRINT) console.log(`class ${cls} ${msg}`);
-    if (between) {
-      expect(Math.abs(s.vdpk / p.drainPeakV - 1), msg).toBeLessThanOrEqual(DRAIN_BETWEEN);
-      return;
-    }
-    expect(s.vdpk / p.drainPeakV - 1, msg).toBeLessThanOrEqual(clipping ? DRAIN_ABOVE_CLIPPED : DRAIN_ABOVE);
+    expect(s.vdpk / p.drainPeakV - 1, msg).toBeLessThanOrEqual(DRAIN_ABOVE);
     expect(1 - s.vdpk / p.drainPeakV, msg).toBeLessThanOrEqual(DRAIN_BELOW);
   };
   it('the sweep is drawn at the antenna and balanced against the filter', () => {
@@ -268,7 +277,7 @@ describe.skipIf(!haveNgspice).each(CLASSES)(SWEEP_TITLE, (cls, conductionDeg) =>
       const p = sweep.points.find((q) => q.phaseDeg === ph)!;
       // the program's point is for the same antenna load as the netlist's
       expect(Math.abs(p.antennaReOhm! - zl.re) + Math.abs(p.antennaImOhm! - zl.im)).toBeLessThan(1e-9);
-      check(`SWR 2 at ${ph} deg`, zl, p, !ESTABLISHED_PHASES.has(ph));
+      check(`SWR 2 at ${ph} deg`, zl, p);
     });
   }
 });

@@ -20,6 +20,8 @@ describe('clipBalance', () => {
     near(b.peakCurrentRatio, 1, 1e-9, 'Ipk');
     // the peak read from 128 samples a period: at most 1 − cos(π/128) = 3e-4 low
     near(b.swingPeak, Math.sqrt(0.34), 3.1e-4 * Math.sqrt(0.34), 'swing');
+    // the limit is never reached: it takes nothing from the drive
+    expect(b.cutRatio).toBe(0);
   });
   it('harmonics shorted, z = 2: V1 = 1/cos τ = |z| (1 − (2/π)(τ + sin τ cos τ)) (notch of width 2τ)', () => {
     // Source: the drain voltage is V1 cos ωt (no harmonic voltage); the devices carry no current where it exceeds the
@@ -41,6 +43,9 @@ describe('clipBalance', () => {
       near(b.swingPeak, v1, 0.015 * v1, `${topology}: the drain beyond the limit, V1`);
       expect(b.harmonicRatios[2]).toBeLessThan(1e-6);
       expect(b.peakCurrentRatio).toBeLessThan(1);
+      // the notch is centred on the drive's peak (ωt = 0) where the device carries nothing: the limit takes the whole
+      // drive there, cutRatio 1 (same derivation; 1e-6 for the knee's 1 % rounding of the notch's edge)
+      near(b.cutRatio, 1, 1e-6, `${topology}: the whole drive taken at its peak`);
     }
   });
   it('harmonics open (100 x the design load), class B push-pull, z = 2: square wave, I1 = (4/π)/2, V3/V1 = 1/3', () => {
