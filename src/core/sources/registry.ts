@@ -449,6 +449,14 @@ export const SOURCES = {
     text: 'Chain-matrix (ABCD) analysis of the ladder as built, with component Q, between 50 Ω terminations ' +
       '(circuit theory, textbook)',
   },
+  'lpf.swr-design': {
+    status: 'practice',
+    text: 'Input SWR of the ladder as built by chain-matrix (ABCD) analysis (circuit theory, textbook), against what ' +
+      'the response allows by design: a lossless Chebyshev filter reaches |Γ|² = 1 − 10^(−ripple/10) at its ripple ' +
+      'peaks (power conservation |S11|² + |S21|² = 1 with the passband\'s least transmission; textbook relations of ' +
+      'filter theory), else the design values\' own SWR across the band; a caution above SWR 1.3 only where the ' +
+      `parts as fitted exceed that, a fail above 2 (${PRACTICE})`,
+  },
   'lpf.pa-source': {
     status: 'published',
     text: "Filter rejection of each harmonic from the PA's own source impedance by the two-port chain relation " +

@@ -4,8 +4,9 @@
 // |Γ|max² = 1 − 10^(−ripple/10); SWR = (1 + |Γ|)/(1 − |Γ|) (definition of the standing-wave ratio).
 import { describe, expect, it } from 'vitest';
 import { loadsThroughFilter } from '../../../src/core/rf/class-e-loads';
-import { ladderOf, pointAt, type Ladder } from '../../../src/core/rf/lpf-analysis';
+import { analyseLpf, ladderOf, pointAt, type Ladder } from '../../../src/core/rf/lpf-analysis';
 import { designLpf } from '../../../src/core/rf/lpf-design';
+import { lpfSwrFinding } from '../../../src/core/rf/lpf-swr-finding';
 import { designSwr, filterLoadFindings, rippleReflection, swrOf } from '../../../src/core/rf/pa-filter-load';
 import { swrStress, type MatchedPoint } from '../../../src/core/rf/pa-swr';
 import { lpfParams } from './fixture';
@@ -55,7 +56,8 @@ describe('the finding: a caution only when it matters', () => {
     expect(f[0].message).toContain('nothing to do');
     expect(f[0].message).toContain('SWR 1.36 at its ripple peaks');
   });
-  // series j25 Ω: Z_in = 50 + j25 Ω, |Γ| = 25/|100 + j25| = 0.242536, SWR 1.6404 (above the 1.355 the design allows);
+  // series j25 Ω: Z_in = 50 + j25 Ω, |Γ| = 25/|100 + j25| = 0.242536, SWR
+  // 1.6404 (above the 1.355 the design allows);
   // class D: P = 10 × Re(z)/|z|² = 10/1.25 = 8 W, 10 log10(0.8) = −0.97 dB (within the 1 dB power check)
   const series = swrStress('D', m, 2, 50, 0, through(ladder([1], [25 / W])));
   it('SWR 1.64 with a 0.1 dB design: the parts as fitted exceed the design, a caution that says so', () => {
@@ -67,7 +69,8 @@ describe('the finding: a caution only when it matters', () => {
     expect(f.message).toMatch(/make it worse than the design/);
     expect(f.message).toMatch(/trim the fitted parts/);
   });
-  it('the same load with no design known: −0.97 dB is within the power check and the drain is far from 100 V: ok', () => {
+  it('the same load with no design known: −0.97 dB is within the power check and the drain is far ' +
+    'from 100 V: ok', () => {
     const f = filterLoadFindings(series, 'PA', { ...ctx, design: null })[0];
     expect(f.severity).toBe('ok');
   });
@@ -80,5 +83,29 @@ describe('the finding: a caution only when it matters', () => {
     const f = filterLoadFindings(series, 'PA', { ...ctx, design: null, matchedOutputW: 20 })[0];
     expect(f.severity).toBe('caution');
     expect(f.message).toContain('-4.0 dB');
+  });
+});
+
+describe("the filter's own SWR finding against its design (lpf-swr-finding)", () => {
+  const exact = () => {
+    // the parts exactly at their design values and lossless: the ripple relation bounds its SWR at 1.35536
+    const d = design();
+    return { ...d, inductorQ: Infinity, capacitorQ: Infinity,
+      elements: d.elements.map((e) => ({ ...e, builtValue: e.idealValue, errorFraction: 0 })) };
+  };
+  it('parts at their design values: never a caution (the passband SWR is within the ripple bound by design)', () => {
+    const d = exact();
+    const f = lpfSwrFinding(d, analyseLpf(d, 11), 'LPF');
+    expect(f.severity).toBe('ok');
+    expect(f.value!).toBeLessThanOrEqual(1.35536 * 1.0001);
+  });
+  it('C1 at five times its value: a shunt of about −j10 Ω at the input swamps 50 Ω, SWR far above 2: a fail', () => {
+    // C1 ≈ 300 pF × 5 = 1.5 nF: 1/(2π · 10 MHz · 1.5 nF) ≈ 10.6 Ω. Across the rest of the ladder (about 50 Ω):
+    // 50 ∥ −j10.6 = 2.15 − j10.14 Ω, z = 0.043 − j0.203, |Γ| = |z − 1|/|z + 1| = 0.978/1.063 = 0.92, SWR ≈ 24
+    const d = exact();
+    d.elements[0] = { ...d.elements[0], builtValue: 5 * d.elements[0].idealValue };
+    const f = lpfSwrFinding(d, analyseLpf(d, 11), 'LPF');
+    expect(f.severity).toBe('fail');
+    expect(f.message).toMatch(/more than its design allows/);
   });
 });
