@@ -90,10 +90,12 @@ describe('folding the loads into the bands', () => {
     const [b2] = foldClassELoads(design, quiet, rej);
     expect([b2.bestDbc, b2.worstDbc, b2.worstLoad]).toEqual([-50, -30, 'the stage into its design load']);
   });
-  it('push-pull: even harmonics scaled by ε/2 (ε = 0.2 worst: −20 dB; 0.02 typical: −40 dB), odd ones not', () => {
+  it('push-pull: even harmonics scaled by ε/2 (ε = 0.2 worst: −20 dB; 0.02 typical: −40 dB), ' +
+    'odd ones not', () => {
     // Source: superposition of halves (1 ± ε/2): even harmonic ε a_n against the fundamental 2 a_1
     const [b2, b3] = foldClassELoads(design, loads, rej, { typical: 0.02, worst: 0.2 });
-    // worst: max(−30, −62 + 40 − 20 = −42) = −30 (unchanged); best: min(−50, −95 + 40 − 40 = −95) = −95
+    // worst: max(−30, −62 + 40 − 20 = −42) = −30 (unchanged); best:
+    // min(−50, −95 + 40 − 40 = −95) = −95
     expect(b2.worstDbc).toBe(-30);
     near(b2.bestDbc, -95, 1e-9, 'best 2nd');
     expect(b3.worstDbc).toBe(-36);

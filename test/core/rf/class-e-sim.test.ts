@@ -9,9 +9,12 @@ import { near } from './helpers';
 describe('class E at its design load (normalised: R = 1, Vdd = 1)', () => {
   const r = simulateClassE(1, 0, 0.001);
   it('peak drain 3.562 Vdd within 3 %', () => near(r.drainPeakRatio, 3.562, 0.03 * 3.562, 'Vpk'));
-  it('DC input 0.5768 Vdd²/R within 3 % (nearly lossless switch, so P ≈ Pdc)', () => near(r.dcInputRatio, 0.5768, 0.03 * 0.5768, 'Pdc'));
-  it('peak switch current 2.862 x I_dc within 5 % (from memory)', () => near(r.switchPeakRatio / r.dcInputRatio, 2.862, 0.05 * 2.862, 'Ipk'));
-  it('switches at (nearly) zero voltage: under 2 % of Vdd at turn-on', () => expect(Math.abs(r.turnOnRatio)).toBeLessThan(0.02));
+  it('DC input 0.5768 Vdd²/R within 3 % (nearly lossless switch, so P ≈ Pdc)', () =>
+    near(r.dcInputRatio, 0.5768, 0.03 * 0.5768, 'Pdc'));
+  it('peak switch current 2.862 x I_dc within 5 % (from memory)', () =>
+    near(r.switchPeakRatio / r.dcInputRatio, 2.862, 0.05 * 2.862, 'Ipk'));
+  it('switches at (nearly) zero voltage: under 2 % of Vdd at turn-on', () =>
+    expect(Math.abs(r.turnOnRatio)).toBeLessThan(0.02));
 });
 
 describe('class E into mismatched loads', () => {

@@ -11,11 +11,22 @@ import { DEMO_PROJECTS } from '../../../seed-demo';
 import { lpfParams, paParams } from './fixture';
 
 const club = DEMO_PROJECTS[0];
-const form = { name: 'Ferrite toroid 23 mm, 1–50 MHz', al: '4.9', ae: '11.4', le: '31.2', innerDiameter: '7.7', window: '', fmin: '2', fmax: '30', bmax: '15' };
+const form = {
+  name: 'Ferrite toroid 23 mm, 1–50 MHz',
+  al: '4.9',
+  ae: '11.4',
+  le: '31.2',
+  innerDiameter: '7.7',
+  window: '',
+  fmin: '2',
+  fmax: '30',
+  bmax: '15',
+};
 
 describe('core spec', () => {
   it('reads AL in µH per 100 turns: 49 µH/100t = 4.9 nH/t² (L = AL (N/100)², 1 µH/100 t² = 0.1 nH/t²)', () => {
-    // Source: the per-100-turns convention of iron-powder data sheets: L = AL₁₀₀ (N / 100)², so per turn² AL₁₀₀ × 10⁻⁴
+    // Source: the per-100-turns convention of iron-powder data sheets: L = AL₁₀₀ (N /
+    // 100)², so per turn² AL₁₀₀ × 10⁻⁴
     const r = parseForm(coreSpec, { ...form, al: '49 µH/100t' });
     expect(r.ok).toBe(true);
     if (r.ok) expect((r.value as { alHPerTurn2: number }).alHPerTurn2).toBeCloseTo(4.9e-9, 20);
@@ -42,8 +53,16 @@ describe('core spec', () => {
 });
 
 const core: CatalogCore = {
-  id: 'c1', name: 'Ferrite binocular core, test', alHPerTurn2: 2e-6, aeM2: 20e-6, leM: 25e-3, innerDiameterM: null, windowAreaM2: 18e-6,
-  minFrequencyHz: 1e6, maxFrequencyHz: 30e6, fluxLimitT: 0.03,
+  id: 'c1',
+  name: 'Ferrite binocular core, test',
+  alHPerTurn2: 2e-6,
+  aeM2: 20e-6,
+  leM: 25e-3,
+  innerDiameterM: null,
+  windowAreaM2: 18e-6,
+  minFrequencyHz: 1e6,
+  maxFrequencyHz: 30e6,
+  fluxLimitT: 0.03,
 };
 const project = (frequencyHz: number): Project => ({ ...club, frequencyHz, cores: [core] });
 
@@ -62,7 +81,8 @@ describe('output transformer flux (transformer EMF equation)', () => {
   });
   it('fails above the core’s limit and says so with the limit; fewer turns, more flux (B ∝ 1/N)', () => {
     const pa = { ...paParams(), outputCoreId: 'c1', outputPrimaryTurns: 1, outputWireDiameterM: null };
-    // Hand-worked: 50 W into 50 Ω is √(50 × 50) = 50 V RMS; B = 50 / (4.44 × 3.5e6 × 1 × 20e-6) = 50 / 310.8 = 160.9 mT
+    // Hand-worked: 50 W into 50 Ω is √(50 × 50) = 50 V RMS; B = 50 / (4.44 ×
+    // 3.5e6 × 1 × 20e-6) = 50 / 310.8 = 160.9 mT
     const r = checkOutputTransformer(project(3.55e6), pa, 50, 50, 1, 'PA');
     const f = r.findings.find((x) => x.rule === 'core.output-flux')!;
     expect(f.severity).toBe('fail');
@@ -88,7 +108,10 @@ describe('winding fit', () => {
   });
   it('toroid hole: one layer of 0.8 mm wire inside 7.7 mm holds 27 turns (π (7.7 − 0.8) / 0.8 = 27.1)', () => {
     // Geometry, from memory as a published rule: wire centres on a circle of diameter ID − d, one d apart
-    expect(fitTurns(fromCatalog({ ...core, innerDiameterM: 7.7e-3 }, 0.8e-3))).toEqual({ turns: 27, how: 'single-layer' });
+    expect(fitTurns(fromCatalog({ ...core, innerDiameterM: 7.7e-3 }, 0.8e-3))).toEqual({
+      turns: 27,
+      how: 'single-layer',
+    });
   });
   it('no wire: not checked', () => {
     expect(fitTurns(fromCatalog(core, null))).toBeNull();
@@ -97,8 +120,8 @@ describe('winding fit', () => {
 
 describe('filter capacitors’ RF current', () => {
   it('into a matched load the output capacitor carries I = V ωC with V = √(P · 50 Ω)', () => {
-    // Source: Kirchhoff's laws: at SWR 1 the last shunt capacitor sits across the 50 Ω load, V = √(100 × 50) = 70.71 V,
-    // its current I = V ω C (capacitive reactance, textbook)
+    // Source: Kirchhoff's laws: at SWR 1 the last shunt capacitor sits across the 50 Ω load, V = √(100 × 50) =
+    // 70.71 V, its current I = V ω C (capacitive reactance, textbook)
     const d = designLpf(lpfParams({ cutoffHz: 8.4e6 }), 7.0e6);
     if (!d.ok) throw new Error('design');
     const last = d.value.elements.at(-1)!;
@@ -108,9 +131,13 @@ describe('filter capacitors’ RF current', () => {
     const f = r.findings.find((x) => x.rule === 'lpf.capacitor-current' && x.subject === `LPF: C${last.index}`)!;
     expect(Math.abs((f.value as number) / expectA - 1)).toBeLessThan(1e-9);
     expect(f.severity).toBe('fail');
-    const ok = realiseLpf(d.value, null, 100, 1, 'LPF', null, expectA * 1.1).findings.find((x) => x.subject === `LPF: C${last.index}` && x.rule === 'lpf.capacitor-current')!;
+    const ok = realiseLpf(d.value, null, 100, 1, 'LPF', null, expectA * 1.1).findings.find(
+      (x) => x.subject === `LPF: C${last.index}` && x.rule === 'lpf.capacitor-current',
+    )!;
     expect(ok.severity).toBe('ok');
-    expect(realiseLpf(d.value, null, 100, 1, 'LPF').findings.some((x) => x.rule === 'lpf.capacitor-current')).toBe(false);
+    expect(realiseLpf(d.value, null, 100, 1, 'LPF').findings.some((x) => x.rule === 'lpf.capacitor-current')).toBe(
+      false,
+    );
   });
 });
 
@@ -125,10 +152,14 @@ describe('a catalog core with refused data is not used', () => {
 });
 
 describe('the catalog in the evaluation', () => {
-  it('the filter winds on its catalog core’s AL, whatever its own AL box says; the PA reports its transformer flux', async () => {
+  it('the filter winds on its catalog core’s AL, whatever its own AL box says; the PA reports its ' +
+    'transformer flux', async () => {
     const { evaluate } = await import('../../../src/core/evaluate');
     const lpfOf = (p: Project) => p.stages.find((s) => s.lpf)!;
-    const odd = { ...club, stages: club.stages.map((s) => (s.lpf ? { ...s, lpf: { ...s.lpf, coreAlHPerTurn2: 20e-9 } } : s)) };
+    const odd = {
+      ...club,
+      stages: club.stages.map((s) => (s.lpf ? { ...s, lpf: { ...s.lpf, coreAlHPerTurn2: 20e-9 } } : s)),
+    };
     const r = evaluate(odd);
     const lpf = r.rf.stages.find((s) => s.stageId === lpfOf(club).id)!.lpf!;
     const al = club.cores!.find((c) => c.id === lpfOf(club).lpf!.coreId)!.alHPerTurn2;
@@ -140,7 +171,9 @@ describe('the catalog in the evaluation', () => {
     const core = club.cores!.find((c) => c.id === club.stages.find((s) => s.pa)!.pa!.outputCoreId)!;
     // Source: transformer EMF equation, B = V / (4.44 f N Ae), at 30 m's lowest frequency 10.1 MHz (2π/√2 for 4.44)
     expect(ot.frequencyHz).toBe(10.1e6);
-    expect(Math.abs(ot.peakFluxT / (ot.primaryRmsV / ((2 * Math.PI / Math.SQRT2) * 10.1e6 * 2 * core.aeM2)) - 1)).toBeLessThan(1e-12);
+    expect(
+      Math.abs(ot.peakFluxT / (ot.primaryRmsV / (((2 * Math.PI) / Math.SQRT2) * 10.1e6 * 2 * core.aeM2)) - 1),
+    ).toBeLessThan(1e-12);
   }, 60_000);
 });
 

@@ -9,12 +9,26 @@ import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
 import { lpfParams } from './fixture';
 import { near } from './helpers';
 
-const core = { outerDiameterM: 12.7e-3, innerDiameterM: 7.7e-3, heightM: 4.8e-3, fluxLimitT: 0.015, minFrequencyHz: 2e6, maxFrequencyHz: 30e6, wireDiameterM: 0.8e-3 };
+const core = {
+  outerDiameterM: 12.7e-3,
+  innerDiameterM: 7.7e-3,
+  heightM: 4.8e-3,
+  fluxLimitT: 0.015,
+  minFrequencyHz: 2e6,
+  maxFrequencyHz: 30e6,
+  wireDiameterM: 0.8e-3,
+};
 
 describe('transformer EMF equation', () => {
   it('B = E / (4.44 f N Ae): 230 V, 50 Hz, 500 turns, 20 cm² gives 1.036 T', () => {
-    // Source: transformer EMF equation E_rms = 4.44 f N Ae B_max (textbook); hand-worked: 230 / (4.44 × 50 × 500 × 0.002)
-    near(peakFluxDensityT(230, 50, 500, 0.002), 230 / (4.44 * 50 * 500 * 0.002), 230 / (4.44 * 50 * 500 * 0.002) * 1e-3, 'B');
+    // Source: transformer EMF equation E_rms = 4.44 f N Ae B_max (textbook);
+    // hand-worked: 230 / (4.44 × 50 × 500 × 0.002)
+    near(
+      peakFluxDensityT(230, 50, 500, 0.002),
+      230 / (4.44 * 50 * 500 * 0.002),
+      (230 / (4.44 * 50 * 500 * 0.002)) * 1e-3,
+      'B',
+    );
     near(peakFluxDensityT(230, 50, 500, 0.002), 1.036, 0.001, 'B (T)');
   });
 });
@@ -62,7 +76,21 @@ describe('ladder stress', () => {
     near(last.rmsV, Math.sqrt(10 * 50), 1e-9, 'output node voltage');
   });
   it('a single series inductor into 50 Ω: I = √(P/R), V = I ω L', () => {
-    const one: LpfDesign = { ...design, elements: [{ index: 1, kind: 'series-inductor', g: 1, idealValue: 1e-6, capacitorPartsF: [], turns: 14, builtValue: 1e-6, errorFraction: 0 }] };
+    const one: LpfDesign = {
+      ...design,
+      elements: [
+        {
+          index: 1,
+          kind: 'series-inductor',
+          g: 1,
+          idealValue: 1e-6,
+          capacitorPartsF: [],
+          turns: 14,
+          builtValue: 1e-6,
+          errorFraction: 0,
+        },
+      ],
+    };
     const [s] = elementStress(one, 10e6, 20, [[50, 0]]);
     near(s.rmsA, Math.sqrt(20 / 50), 1e-12, 'current');
     near(s.rmsV, Math.sqrt(20 / 50) * 2 * Math.PI * 10e6 * 1e-6, 1e-9, 'voltage');
@@ -123,15 +151,19 @@ describe('realisation on the page', () => {
 describe('capacitor voltage rating', () => {
   const d = designLpf(lpfParams(), 7.03e6);
   if (!d.ok) throw new Error('fixture filter should design');
-  it('the RF peak across each capacitor against the rating: fail above, caution above 70 %, none without a rating', () => {
+  it('the RF peak across each capacitor against the rating: fail above, caution above 70 %, none ' +
+    'without a rating', () => {
     const r = realiseLpf(d.value, core, 100, 2, 'LPF', 100);
     const peak = Math.max(...r.realisation.capacitors.map((c) => c.peakV));
     const worst = r.findings.filter((f) => f.rule === 'lpf.capacitor-rating').find((f) => f.value === peak)!;
-    // 100 W at SWR 2 on 50 Ω: the line's maximum is √(100 × 50 × 2) × √2 = 141 V peak (line theory), above 100 V
+    // 100 W at SWR 2 on 50 Ω: the line's maximum is √(100 × 50 × 2) × √2
+    // = 141 V peak (line theory), above 100 V
     expect(peak).toBeGreaterThan(100);
     expect(worst.severity).toBe('fail');
     const mid = realiseLpf(d.value, core, 100, 2, 'LPF', peak / 0.8);
     expect(mid.findings.find((f) => f.rule === 'lpf.capacitor-rating' && f.value === peak)!.severity).toBe('caution');
-    expect(realiseLpf(d.value, core, 100, 2, 'LPF').findings.some((f) => f.rule === 'lpf.capacitor-rating')).toBe(false);
+    expect(realiseLpf(d.value, core, 100, 2, 'LPF').findings.some((f) => f.rule === 'lpf.capacitor-rating')).toBe(
+      false,
+    );
   });
 });

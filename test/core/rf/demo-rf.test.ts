@@ -11,7 +11,8 @@ describe('club demo harmonics and heatsink', () => {
     expect(h2.predictedBestDbc).toBeLessThan(h2.predictedDbc);
     const f = r.rf.findings.find((x) => x.subject === 'Harmonic 2')!;
     // the best end may lie below the construction floor (-70 dBc, common practice): then it reads 'below -70 dBc (the
-    // construction floor) to ... dBc', never 'limited by construction to', which read as if construction set the worst end
+    // construction floor) to ... dBc', never 'limited by construction to', which
+    // read as if construction set the worst end
     expect(f.message).toMatch(/(dBc|construction floor\)) to -?[\d.]+ dBc at the antenna/);
     expect(f.message).not.toMatch(/limited by construction to/);
     expect(f.message).toContain('judged on the worst end');
@@ -23,7 +24,9 @@ describe('club demo harmonics and heatsink', () => {
     expect(pa.thermal.sharedBy).toBe(2);
     // Tj = Ta + P (θjc + θcs) + 2 P θsa (series path, REFERENCE-VALUES §7)
     const m = club30m.stages.find((s) => s.pa)!.pa!.mount;
-    const expected = club30m.ambientC + pa.thermal.dissipationPerDeviceW * (m.thetaJcKPerW + m.thetaCsKPerW + 2 * (m.thetaSaKPerW as number));
+    const expected =
+      club30m.ambientC +
+      pa.thermal.dissipationPerDeviceW * (m.thetaJcKPerW + m.thetaCsKPerW + 2 * (m.thetaSaKPerW as number));
     expect(pa.thermal.tjContinuousC).toBeCloseTo(expected, 9);
   });
 });

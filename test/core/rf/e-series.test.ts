@@ -6,7 +6,10 @@ describe('IEC 60063 series', () => {
   // Source: IEC 60063:2015 value lists (REFERENCE-VALUES §5.1, [C], several sources agree)
   it('E12 and E24 equal the published tables', () => {
     expect([...E12]).toEqual([1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2]);
-    expect([...E24]).toEqual([1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1]);
+    expect([...E24]).toEqual([
+      1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2,
+      9.1,
+    ]);
     expect(E24.filter((_, i) => i % 2 === 0)).toEqual([...E12]);
   });
   it('irregular values are not the formula (REFERENCE-VALUES §5.1: 2.7 not 2.6, 8.2 not 8.3)', () => {

@@ -32,13 +32,15 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     expect(r.harmonics!.rows.every((x) => x.marginDb > 0)).toBe(true);
     expect(r.harmonics!.rows.every((x) => x.worstMarginDb !== null)).toBe(true);
   });
-  it('relay voltage at SWR 2: the standing-wave maximum of a lossless line, written out here (not the code under test)', () => {
+  it('relay voltage at SWR 2: the standing-wave maximum of a lossless line, written out here (not the ' +
+    'code under test)', () => {
     const relay = r.stages[2].relay!;
     // Source: transmission-line theory (textbook): V_max,rms = sqrt(P Z0 S), peak = sqrt(2 P Z0 S); Z0 = 50 ohm, S = 2
     // at the most the PA delivers (its waveform band's most, hotOutputW) less the filter's loss
     const stressW = r.stages[0].pa!.hotOutputW * (r.outputPowerW / r.stages[0].pa!.outputW);
     near(relay.rfPeakV, Math.sqrt(2 * stressW * 50 * 2), 1e-9, 'Vpk');
-    // Worked value for 25 W at S = 2 (sqrt(2 x 25 x 50 x 2) = sqrt(5000) = 70.71 V peak), against the helper the RF code uses
+    // Worked value for 25 W at S = 2 (sqrt(2 x 25 x 50 x 2) = sqrt(5000) = 70.71 V
+    // peak), against the helper the RF code uses
     near(lineMaxima(25, 50, 2).peakV, 70.71, 0.005, 'Vpk 25 W');
   });
   it('consistency check (no external reference): exposure uses the most delivered power and always cautions', () => {
@@ -54,10 +56,14 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     // Found by the corruption property below: with saturationV 0 the rail passed `railV > 0` and the bias heat
     // 0.05 A x 1.5e-322 V made the heatsink quotient (Tj,target - Ta) / P infinite.
     const base = project();
-    const x = evaluateRf(project({ stages: [{ ...base.stages[0], pa: paParams({ saturationV: 0 }) }, base.stages[1], base.stages[2]] }),
-      { paRailV: { pa: 1.5e-322 } });
+    const x = evaluateRf(
+      project({ stages: [{ ...base.stages[0], pa: paParams({ saturationV: 0 }) }, base.stages[1], base.stages[2]] }),
+      { paRailV: { pa: 1.5e-322 } },
+    );
     expect(nonFinitePaths(x)).toEqual([]);
-    expect(x.findings.some((f) => f.rule === 'pa.input' && f.severity === 'fail' && /supply voltage/.test(f.message))).toBe(true);
+    expect(
+      x.findings.some((f) => f.rule === 'pa.input' && f.severity === 'fail' && /supply voltage/.test(f.message)),
+    ).toBe(true);
   });
   it('a target power of 5e-324 W (subnormal) is an input error, not "Infinity dB" (regression)', () => {
     const x = evaluateRf(project({ targetPowerW: 5e-324 }), { paRailV: { pa: 13.8 } });
@@ -67,8 +73,12 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
   });
   it('a reference power of 5e-324 W (subnormal) is refused, not compared as "Infinity dB" (regression)', () => {
     const base = project();
-    const x = evaluateRf(project({ stages: [{ ...base.stages[0], pa: paParams({ referencePowerW: 5e-324 }) }, base.stages[1], base.stages[2]] }),
-      { paRailV: { pa: 13.8 } });
+    const x = evaluateRf(
+      project({
+        stages: [{ ...base.stages[0], pa: paParams({ referencePowerW: 5e-324 }) }, base.stages[1], base.stages[2]],
+      }),
+      { paRailV: { pa: 13.8 } },
+    );
     expect(nonFinitePaths(x)).toEqual([]);
     expect(x.findings.filter((f) => f.rule === 'pa.input' && f.severity === 'fail')).toHaveLength(1);
   });
@@ -81,26 +91,66 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
 
 describe('evaluateRf never produces NaN/Infinity or throws for odd inputs (fast-check, seeded)', () => {
   // Subnormals (5e-324, 1.5e-322) pass `x > 0` and overflow a quotient: listed so every seed tries them
-  const num = fc.oneof(fc.constant(0), fc.constant(-1), fc.constant(1e12), fc.double({ min: -10, max: 1e3, noNaN: true }), fc.constant(Number.NaN),
-    fc.constantFrom(5e-324, 1.5e-322, -5e-324));
+  const num = fc.oneof(
+    fc.constant(0),
+    fc.constant(-1),
+    fc.constant(1e12),
+    fc.double({ min: -10, max: 1e3, noNaN: true }),
+    fc.constant(Number.NaN),
+    fc.constantFrom(5e-324, 1.5e-322, -5e-324),
+  );
   it('random parameter corruption', () => {
     fc.assert(
-      fc.property(num, num, num, num, num, num, num, fc.integer({ min: -2, max: 12 }), (f, pw, rail, al, q, swr, tr, order) => {
-        const p = project({
-          frequencyHz: Math.abs(f) * 1e5,
-          targetPowerW: pw,
-          stages: [
-            { id: 'a', kind: 'final', name: 'PA', notes: '', loads: [], dissipationW: null, pa: paParams({ turnsRatio: tr > 0 ? tr : null, saturationV: Number.isFinite(q) ? q : 1 }) },
-            { id: 'b', kind: 'lpf', name: 'LPF', notes: '', loads: [], dissipationW: null, lpf: lpfParams({ coreAlHPerTurn2: al * 1e-9, order, inductorQ: q, monteCarloTrials: 50 }) },
-            { id: 'c', kind: 'tr', name: 'TR', notes: '', loads: [], dissipationW: null, relay: relayParams({ wpm: Math.abs(pw) + 1 }) },
-          ],
-          rf: { ...project().rf, worstSwr: swr },
-        });
-        const r = evaluateRf(p, { paRailV: { pa: rail } });
-        expect(nonFinitePaths(r)).toEqual([]);
-        expect(nonFiniteText(r.findings)).toEqual([]);
-        expect(sorted(r.findings)).toBe(true);
-      }),
+      fc.property(
+        num,
+        num,
+        num,
+        num,
+        num,
+        num,
+        num,
+        fc.integer({ min: -2, max: 12 }),
+        (f, pw, rail, al, q, swr, tr, order) => {
+          const p = project({
+            frequencyHz: Math.abs(f) * 1e5,
+            targetPowerW: pw,
+            stages: [
+              {
+                id: 'a',
+                kind: 'final',
+                name: 'PA',
+                notes: '',
+                loads: [],
+                dissipationW: null,
+                pa: paParams({ turnsRatio: tr > 0 ? tr : null, saturationV: Number.isFinite(q) ? q : 1 }),
+              },
+              {
+                id: 'b',
+                kind: 'lpf',
+                name: 'LPF',
+                notes: '',
+                loads: [],
+                dissipationW: null,
+                lpf: lpfParams({ coreAlHPerTurn2: al * 1e-9, order, inductorQ: q, monteCarloTrials: 50 }),
+              },
+              {
+                id: 'c',
+                kind: 'tr',
+                name: 'TR',
+                notes: '',
+                loads: [],
+                dissipationW: null,
+                relay: relayParams({ wpm: Math.abs(pw) + 1 }),
+              },
+            ],
+            rf: { ...project().rf, worstSwr: swr },
+          });
+          const r = evaluateRf(p, { paRailV: { pa: rail } });
+          expect(nonFinitePaths(r)).toEqual([]);
+          expect(nonFiniteText(r.findings)).toEqual([]);
+          expect(sorted(r.findings)).toBe(true);
+        },
+      ),
       propertyOptions(20261202, 400),
     );
   });
@@ -112,11 +162,24 @@ describe('evaluateRf never produces NaN/Infinity or throws for odd inputs (fast-
           ambientC: amb,
           keyingDuty: duty,
           stages: [
-            { ...base.stages[0], pa: paParams({ efficiency: eff, mount: { thetaJcKPerW: 1, thetaCsKPerW: 1, thetaSaKPerW: Number.isNaN(gain) ? null : gain, tjMaxC: tj } }) },
+            {
+              ...base.stages[0],
+              pa: paParams({
+                efficiency: eff,
+                mount: { thetaJcKPerW: 1, thetaCsKPerW: 1, thetaSaKPerW: Number.isNaN(gain) ? null : gain, tjMaxC: tj },
+              }),
+            },
             base.stages[1],
             { ...base.stages[2], relay: relayParams({ isolationDb: iso, position: 'before-lpf' }) },
           ],
-          rf: { ...base.rf, antennaGainDbi: gain, feedlineLossDb: loss, evenHarmonicDbc: even, exposureDutyFactor: duty, exposureOnFraction: eff },
+          rf: {
+            ...base.rf,
+            antennaGainDbi: gain,
+            feedlineLossDb: loss,
+            evenHarmonicDbc: even,
+            exposureDutyFactor: duty,
+            exposureOnFraction: eff,
+          },
         });
         const r = evaluateRf(p, { paRailV: { pa: 13.8 } });
         expect(nonFinitePaths(r)).toEqual([]);

@@ -6,7 +6,11 @@ import { near } from './helpers';
 const toleranceCm = 0.06;
 
 describe('exposure worked example: 25 W CW, 14.0 MHz, dipole 2.15 dBi (REFERENCE-VALUES §2.5)', () => {
-  const r = evaluateExposure(25, 14e6, rfSettings({ antennaGainDbi: 2.15, exposureDutyFactor: 0.4, exposureOnFraction: 1, groundReflection: true }));
+  const r = evaluateExposure(
+    25,
+    14e6,
+    rfSettings({ antennaGainDbi: 2.15, exposureDutyFactor: 0.4, exposureOnFraction: 1, groundReflection: true }),
+  );
   it('average power, EIRP and ERP', () => {
     near(r.averagePowerW, 10.0, 1e-9, 'avg');
     near(r.eirpW, 16.41, 0.005, 'EIRP');

@@ -65,7 +65,16 @@ describe('spur budget worked example (REFERENCE-VALUES §3.4)', () => {
     near(r.rows.find((x) => x.n === 5)!.neededFilterAttenuationDb, 29.02, 0.005, '5f');
   });
   it('without a filter every harmonic fails', () => {
-    const r = harmonicCompliance({ rule: 'us-97-307', topology: 'push-pull', evenHarmonicDbc: -30, fundamentalW: 10, frequencyHz: 7e6, passbandLossDb: 0, filter: null, monteCarlo: null });
+    const r = harmonicCompliance({
+      rule: 'us-97-307',
+      topology: 'push-pull',
+      evenHarmonicDbc: -30,
+      fundamentalW: 10,
+      frequencyHz: 7e6,
+      passbandLossDb: 0,
+      filter: null,
+      monteCarlo: null,
+    });
     expect(r.rows.every((x) => x.severity === 'fail')).toBe(true);
   });
 });

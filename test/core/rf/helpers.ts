@@ -4,7 +4,9 @@ import { expect } from 'vitest';
 /** |actual - expected| <= tolerance, with a readable failure message. */
 export function near(actual: number, expected: number, tolerance: number, what = ''): void {
   expect(Number.isFinite(actual), `${what} finite`).toBe(true);
-  expect(Math.abs(actual - expected), `${what}: ${actual} vs ${expected} ± ${tolerance}`).toBeLessThanOrEqual(tolerance);
+  expect(Math.abs(actual - expected), `${what}: ${actual} vs ${expected} ± ${tolerance}`).toBeLessThanOrEqual(
+    tolerance,
+  );
 }
 
 /** Walk a JSON-like value and return the paths of numbers that are NaN or infinite. */

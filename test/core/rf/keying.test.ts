@@ -21,7 +21,12 @@ describe('fft', () => {
     const X = fft(x);
     near(X.re[0], m, 1e-12, 'X[0]');
     for (let k = 1; k < n; k++) {
-      near(Math.hypot(X.re[k], X.im[k]), Math.abs(Math.sin((Math.PI * k * m) / n) / Math.sin((Math.PI * k) / n)), 1e-9, `|X[${k}]|`);
+      near(
+        Math.hypot(X.re[k], X.im[k]),
+        Math.abs(Math.sin((Math.PI * k * m) / n) / Math.sin((Math.PI * k) / n)),
+        1e-9,
+        `|X[${k}]|`,
+      );
     }
   });
   it('matches the DFT definition term by term on a complex sequence', () => {
@@ -64,7 +69,8 @@ describe('dot-train spectrum', () => {
 
   it('raised-cosine edges: sinc times the cosine-pulse transform, sidelobes falling faster', () => {
     // Source: the raised-cosine-edged pulse is the rectangle convolved with a half-cosine kernel of width T; the
-    // kernel's transform is cos(πfT) / (1 − (2fT)²) (Fourier transform of a cosine pulse, from memory, not confirmed;
+    // kernel's transform is cos(πfT) / (1 − (2fT)²) (Fourier transform of a
+    // cosine pulse, from memory, not confirmed;
     // the convolution theorem is textbook). T = the 0–100 % edge time.
     const riseS = 0.005;
     const edgeS = riseS / RAISED_COSINE_10_90;

@@ -27,11 +27,24 @@ describe('7.5 MHz worked example (REFERENCE-VALUES §1.5)', () => {
     near(v[2], 838.2e-12, toleranceF, 'C3');
     near(v[3], 1.4549e-6, toleranceH, 'L4');
     near(v[4], 486.7e-12, toleranceF, 'C5');
-    expect(d.elements.map((e) => e.kind)).toEqual(['shunt-capacitor', 'series-inductor', 'shunt-capacitor', 'series-inductor', 'shunt-capacitor']);
+    expect(d.elements.map((e) => e.kind)).toEqual([
+      'shunt-capacitor',
+      'series-inductor',
+      'shunt-capacitor',
+      'series-inductor',
+      'shunt-capacitor',
+    ]);
   });
   it('lossless ideal ladder reproduces the ABCD script check', () => {
     const l = ladderOf(design({ cutoffHz: 7.5e6 }), 'ideal', true);
-    const cases: [number, number][] = [[7.0e6, 0.01], [7.5e6, 0.1], [14e6, 31.35], [15e6, 34.85], [21e6, 51.01], [22.5e6, 54.21]];
+    const cases: [number, number][] = [
+      [7.0e6, 0.01],
+      [7.5e6, 0.1],
+      [14e6, 31.35],
+      [15e6, 34.85],
+      [21e6, 51.01],
+      [22.5e6, 54.21],
+    ];
     for (const [f, db] of cases) near(pointAt(l, f).lossDb, db, toleranceDb, `${f} Hz`);
   });
   it('7th-order 0.1 dB values and losses', () => {
@@ -67,7 +80,12 @@ describe('denormalised ladders against the closed form (REFERENCE-VALUES §1.4)'
           const d = design({ cutoffHz: 10e6, response, order, form, rippleDb: 0.2 });
           const l = ladderOf(d, 'ideal', true);
           for (const w of [0.3, 0.8, 1, 1.5, 2, 3, 5]) {
-            near(pointAt(l, w * 10e6).lossDb, prototypeLossDb(response, order, d.rippleDb, w), tolDb + 1e-4 * prototypeLossDb(response, order, d.rippleDb, w), `Ω=${w}`);
+            near(
+              pointAt(l, w * 10e6).lossDb,
+              prototypeLossDb(response, order, d.rippleDb, w),
+              tolDb + 1e-4 * prototypeLossDb(response, order, d.rippleDb, w),
+              `Ω=${w}`,
+            );
           }
         });
       }

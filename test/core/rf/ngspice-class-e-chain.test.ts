@@ -1,6 +1,6 @@
 // Whole-chain cross-check in ngspice: a single-ended class-E stage (switch with Rds(on) and body diode, shunt C1,
-// series-tuned L0–C0 with the excess reactance, RF choke) into the low-pass filter and a load of 50 Ω or on the SWR 2
-// circle. The netlist is written here from scratch (element syntax per the ngspice user's manual).
+// series-tuned L0–C0 with the excess reactance, RF choke) into the low-pass filter and a load of 50 Ω or on the SWR
+// 2 circle. The netlist is written here from scratch (element syntax per the ngspice user's manual).
 // Drain peak and power: the program's class-E simulation at the load the filter presents (pa-swr classEStressAt,
 // scaled from its matched figures), at 50 Ω and SWR 2 at four phases; and the program's own stress sweep with the
 // circle at the antenna (evaluatePa with the filter known) at 50 Ω and eight phases, and at its worst drain peak.
@@ -8,19 +8,31 @@
 // loaded Q 30 to 5, widened over the design load and the SWR 2 circle at the antenna by class-e-loads, less the
 // filter's rejection from the stage's own source into the design load), against ngspice at loaded Q 30 and 5 with the
 // antenna at 50 Ω and on the SWR 2 circle at eight phases (four of them between the program's 30° points).
-// While the band was the design load's alone (−64.8 to −49.0 dBc at the 2nd harmonic, −102.7 to −84.4 dBc at the
-// 3rd), ngspice at loaded Q 5 reached −40.2 dBc at the 2nd (SWR 2 at 135°), 8.8 dB above its worst end, and −75.9 dBc
-// at the 3rd (180°), 8.5 dB above; at loaded Q 30 it fell to −76.7 dBc at the 2nd (315°), 11.9 dB below its best end.
-// Over the loads (−77.4 to −40.6 dBc and −109.0 to −74.8 dBc) every run lies inside, and ngspice at the load of the
-// worst end reaches it within 0.1 dB.
+// While the band was the design load's alone (−64.8 to −49.0 dBc at the 2nd harmonic, −102.7 to −84.4 dBc at
+// the 3rd), ngspice at loaded Q 5 reached −40.2 dBc at the 2nd (SWR 2 at 135°), 8.8 dB above its worst end, and
+// −75.9 dBc at the 3rd (180°), 8.5 dB above; at loaded Q 30 it fell to −76.7 dBc at the 2nd (315°), 11.9 dB below
+// its best end. Over the loads (−77.4 to −40.6 dBc and −109.0 to −74.8 dBc) every run lies inside, and ngspice
+// at the load of the worst end reaches it within 0.1 dB.
 // The sweep at the antenna (seen when written): ngspice's drain peak 1.8 to 3.1 % above the program's at 50 Ω and at
 // every phase (worst at 225°: ngspice 93.5 V, program 90.8 V, the PA seeing 25.8 − j24.7 Ω).
 // Invented design: 20 V, drain load 50 Ω (no transformer), 7.03 MHz, Rds(on) 0.05 Ω, nominal class-E values
 // C1 = 0.1836/(ωR), excess reactance 1.1525 R (Sokal and Sokal, IEEE JSSC SC-10(3), 1975, from memory), QL 30.
 import { describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
-import { type Complex as C, ladderAndLoadLines, ladderInputOhm, runSpice, spiceScratchDir } from '../../helpers/ngspice';
-import { CHOKE_REACTANCE_RATIO, CLASS_E_EXCESS, CLASS_E_QL, CLASS_E_QL_LOW, CLASS_E_SHUNT } from '../../../src/core/rf/class-e-sim';
+import {
+  type Complex as C,
+  ladderAndLoadLines,
+  ladderInputOhm,
+  runSpice,
+  spiceScratchDir,
+} from '../../helpers/ngspice';
+import {
+  CHOKE_REACTANCE_RATIO,
+  CLASS_E_EXCESS,
+  CLASS_E_QL,
+  CLASS_E_QL_LOW,
+  CLASS_E_SHUNT,
+} from '../../../src/core/rf/class-e-sim';
 import { designLpf, type LpfDesign } from '../../../src/core/rf/lpf-design';
 import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
 import { evaluatePa } from '../../../src/core/rf/pa';
@@ -55,7 +67,8 @@ const filterInputOhm = (d: LpfDesign, zl: C): C => ladderInputOhm(d, zl, W);
 /**
  * The chain's netlist. For the harmonic runs (`fine`): loaded Q `ql`, STEPS_HARMONIC steps per period, and a body
  * diode with 1 pF of junction capacitance (1.2 % of C1): with none, ngspice's time step stalled at the diode at three
- * of the eighteen loads (loaded Q 5, SWR 2 at 90°, 135° and 180°) whatever the tolerances or step; with 1 pF at none.
+ * of the eighteen loads (loaded Q 5, SWR 2 at 90°, 135° and 180°) whatever
+ * the tolerances or step; with 1 pF at none.
  */
 function netlist(d: LpfDesign, zl: C, ql = CLASS_E_QL, fine = false): string {
   const steps = fine ? STEPS_HARMONIC : STEPS;
@@ -64,7 +77,8 @@ function netlist(d: LpfDesign, zl: C, ql = CLASS_E_QL, fine = false): string {
     '* class-E stage, low-pass filter, load (written from scratch for this test)',
     `VDD vdd 0 DC ${VDD}`,
     `LCH vdd d ${((CHOKE_REACTANCE_RATIO * R) / W).toPrecision(7)}`,
-    `VG g 0 PULSE(0 1 0 ${(per / 200).toPrecision(6)} ${(per / 200).toPrecision(6)} ${(per / 2 - per / 100).toPrecision(9)} ${per.toPrecision(9)})`,
+    `VG g 0 PULSE(0 1 0 ${(per / 200).toPrecision(6)} ${(per / 200).toPrecision(6)} ` +
+      `${(per / 2 - per / 100).toPrecision(9)} ${per.toPrecision(9)})`,
     'VI d s 0',
     'S1 s 0 g 0 SWMOD',
     'DB 0 s DBODY',
@@ -79,7 +93,8 @@ function netlist(d: LpfDesign, zl: C, ql = CLASS_E_QL, fine = false): string {
     '.options method=gear',
     `.tran ${(per / steps).toPrecision(6)} ${(TSTOP * per).toPrecision(9)} 0 ${(per / steps).toPrecision(6)}`,
     `.meas tran vdpk MAX v(d) from=${((TSTOP - 20) * per).toPrecision(9)} to=${(TSTOP * per).toPrecision(9)}`,
-    `.meas tran pout AVG par('v(nr)*v(nr)/${zl.re.toPrecision(7)}') from=${((TSTOP - 20) * per).toPrecision(9)} to=${(TSTOP * per).toPrecision(9)}`,
+    `.meas tran pout AVG par('v(nr)*v(nr)/${zl.re.toPrecision(7)}') from=${((TSTOP - 20) * per).toPrecision(9)} to=` +
+      `${(TSTOP * per).toPrecision(9)}`,
     `.four ${F0} v(nr)`,
     '.end',
   ].join('\n');
@@ -102,10 +117,24 @@ describe.skipIf(!haveNgspice)('class E + low-pass filter in ngspice vs the progr
   if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
   const d = dd.value;
   const paIn = paParams({
-    amplifierClass: 'E', topology: 'single-ended', devices: 1, turnsRatio: 1, loadOhm: R, rdsOnOhm: RON, saturationV: null, efficiency: 0.9,
+    amplifierClass: 'E',
+    topology: 'single-ended',
+    devices: 1,
+    turnsRatio: 1,
+    loadOhm: R,
+    rdsOnOhm: RON,
+    saturationV: null,
+    efficiency: 0.9,
   });
   const pa = evaluatePa(paIn, VDD, { targetPowerW: 5, ambientC: 25, keyingDuty: 0.4 });
-  const m = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
+  const m = {
+    drainPeakV: pa.peakDrainV,
+    maxRailV: VDD,
+    peakDeviceA: pa.peakDeviceA,
+    outputW: pa.outputW,
+    dcInputW: pa.dcInputW,
+    biasW: 0,
+  };
   const loads: [string, C][] = [
     ['50 ohm', { re: R, im: 0 }],
     ...[0, 90, 180, 270].map((ph): [string, C] => {
@@ -119,8 +148,14 @@ describe.skipIf(!haveNgspice)('class E + low-pass filter in ngspice vs the progr
       const pred = classEStressAt(m, { re: zin.re / R, im: zin.im / R }, RON / R).stress;
       const s = run(d, zl, name.replace(/\W+/g, '_'));
       expect(Number.isFinite(s.vdpk), s.out).toBe(true);
-      expect(Math.abs(s.vdpk / pred.drainPeakV - 1), `drain: ngspice ${s.vdpk.toFixed(1)} V, program ${pred.drainPeakV.toFixed(1)} V`).toBeLessThanOrEqual(TOL_DRAIN);
-      expect(Math.abs(s.pout / pred.outputW - 1), `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`).toBeLessThanOrEqual(TOL_POWER);
+      expect(
+        Math.abs(s.vdpk / pred.drainPeakV - 1),
+        `drain: ngspice ${s.vdpk.toFixed(1)} V, program ${pred.drainPeakV.toFixed(1)} V`,
+      ).toBeLessThanOrEqual(TOL_DRAIN);
+      expect(
+        Math.abs(s.pout / pred.outputW - 1),
+        `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`,
+      ).toBeLessThanOrEqual(TOL_POWER);
     });
   }
 });

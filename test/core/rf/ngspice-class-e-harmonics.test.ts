@@ -9,7 +9,14 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
-import { CHOKE_REACTANCE_RATIO, CLASS_E_EXCESS, CLASS_E_QL, CLASS_E_QL_LOW, CLASS_E_SHUNT, simulateClassE } from '../../../src/core/rf/class-e-sim';
+import {
+  CHOKE_REACTANCE_RATIO,
+  CLASS_E_EXCESS,
+  CLASS_E_QL,
+  CLASS_E_QL_LOW,
+  CLASS_E_SHUNT,
+  simulateClassE,
+} from '../../../src/core/rf/class-e-sim';
 
 const haveNgspice = requireTool(NGSPICE, 'SPICE cross-check of the class-E harmonics', 'apt-get install ngspice');
 const TOL_DB = 1;
@@ -93,7 +100,9 @@ describe.skipIf(!haveNgspice)('class-E harmonics at the load vs ngspice', () => 
         const s = 20 * Math.log10(spice[n - 1]);
         const p = 20 * Math.log10(prog[n - 1]);
         expect(Number.isFinite(s), run.stderr).toBe(true);
-        expect(Math.abs(s - p), `H${n}: ngspice ${s.toFixed(1)} dBc, program ${p.toFixed(1)} dBc`).toBeLessThanOrEqual(TOL_DB);
+        expect(Math.abs(s - p), `H${n}: ngspice ${s.toFixed(1)} dBc, program ${p.toFixed(1)} dBc`).toBeLessThanOrEqual(
+          TOL_DB,
+        );
       }
     });
   }

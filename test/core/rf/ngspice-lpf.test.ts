@@ -18,9 +18,27 @@ const toleranceDb = 0.002;
 
 const cases = [
   { name: 'Chebyshev 0.1 dB n=5 C-input, Q 150/1000', over: { cutoffHz: 8.4e6 }, f0: 7.0e6 },
-  { name: 'Chebyshev 0.5 dB n=7 L-input, Q 80/500', over: { order: 7, rippleDb: 0.5, form: 'inductor-input' as const, inductorQ: 80, capacitorQ: 500 }, f0: 14.05e6 },
-  { name: 'Butterworth n=3 C-input, Q 100/800', over: { response: 'butterworth' as const, order: 3, inductorQ: 100, capacitorQ: 800 }, f0: 3.55e6 },
-  { name: 'Butterworth n=9 L-input, E12, no pairs', over: { response: 'butterworth' as const, order: 9, form: 'inductor-input' as const, capacitorSeries: 'E12' as const, allowParallelPairs: false }, f0: 21.05e6 },
+  {
+    name: 'Chebyshev 0.5 dB n=7 L-input, Q 80/500',
+    over: { order: 7, rippleDb: 0.5, form: 'inductor-input' as const, inductorQ: 80, capacitorQ: 500 },
+    f0: 14.05e6,
+  },
+  {
+    name: 'Butterworth n=3 C-input, Q 100/800',
+    over: { response: 'butterworth' as const, order: 3, inductorQ: 100, capacitorQ: 800 },
+    f0: 3.55e6,
+  },
+  {
+    name: 'Butterworth n=9 L-input, E12, no pairs',
+    over: {
+      response: 'butterworth' as const,
+      order: 9,
+      form: 'inductor-input' as const,
+      capacitorSeries: 'E12' as const,
+      allowParallelPairs: false,
+    },
+    f0: 21.05e6,
+  },
 ];
 
 const dir = haveNgspice ? mkdtempSync(join(tmpdir(), 'rw-lpf-')) : '';
@@ -47,7 +65,10 @@ describe.skipIf(!haveNgspice)('LPF netlist in ngspice vs ABCD analysis', () => {
       freqs.forEach((f, i) => {
         const spiceDb = 20 * Math.log10(got.get(i)!);
         const abcdDb = pointAt(l, f).s21Db;
-        expect(Math.abs(spiceDb - abcdDb), `${f} Hz: ngspice ${spiceDb.toFixed(3)} dB, ABCD ${abcdDb.toFixed(3)} dB`).toBeLessThanOrEqual(toleranceDb);
+        expect(
+          Math.abs(spiceDb - abcdDb),
+          `${f} Hz: ngspice ${spiceDb.toFixed(3)} dB, ABCD ${abcdDb.toFixed(3)} dB`,
+        ).toBeLessThanOrEqual(toleranceDb);
       });
     });
   }

@@ -90,10 +90,24 @@ function netlist(d: LpfDesign, zl: C): string {
   // full-primary reactance 20 x the 50 Ω drain-to-drain load (1:1): magnetising current small (common practice)
   const lFull = (20 * R0) / W;
   const vals: Record<string, string> = {
-    VDD: String(VDD), PERIOD: per.toPrecision(9), TON: (per / 2 - per / 100).toPrecision(9), TRISE: (per / 200).toPrecision(9),
-    RON: String(RON), LHALF: (lFull / 4).toPrecision(7), LSEC: lFull.toPrecision(7), KCOUP: String(KCOUP),
-    FILTER: lines.join('\n'), LOAD: load, RLOAD: zl.re.toPrecision(7), TSTEP: (per / 400).toPrecision(6),
-    COSS: COSS.toPrecision(7), COSS_ESR: String(COSS_ESR), TSTOP: (120 * per).toPrecision(9), TMAX: (per / 400).toPrecision(6), TFROM: (100 * per).toPrecision(9), F0: String(F0),
+    VDD: String(VDD),
+    PERIOD: per.toPrecision(9),
+    TON: (per / 2 - per / 100).toPrecision(9),
+    TRISE: (per / 200).toPrecision(9),
+    RON: String(RON),
+    LHALF: (lFull / 4).toPrecision(7),
+    LSEC: lFull.toPrecision(7),
+    KCOUP: String(KCOUP),
+    FILTER: lines.join('\n'),
+    LOAD: load,
+    RLOAD: zl.re.toPrecision(7),
+    TSTEP: (per / 400).toPrecision(6),
+    COSS: COSS.toPrecision(7),
+    COSS_ESR: String(COSS_ESR),
+    TSTOP: (120 * per).toPrecision(9),
+    TMAX: (per / 400).toPrecision(6),
+    TFROM: (100 * per).toPrecision(9),
+    F0: String(F0),
   };
   const tmpl = readFileSync(join(__dirname, '../../fixtures/pa-chain/pushpull-d-lpf.cir.tmpl'), 'utf8');
   return tmpl.replace(/\{\{(\w+)\}\}/g, (_, k: string) => vals[k]);
@@ -119,24 +133,60 @@ function spiceRun(d: LpfDesign, zl: C, name: string) {
   const num = (k: string) => Number(out.match(new RegExp(`^${k}\\s*=\\s*(\\S+)`, 'm'))?.[1]);
   // fourier table rows: harmonic, frequency, magnitude, phase, ...
   const harm = new Map<number, number>();
-  for (const m of out.matchAll(/^\s*(\d+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s*$/gm)) harm.set(Number(m[1]), Number(m[3]));
-  return { pout: num('pout'), vd1pk: num('vd1pk'), i1pk: Math.max(num('i1pk'), -num('i1min')), harm, out: out + r.stderr };
+  for (const m of out.matchAll(/^\s*(\d+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s+(\S+)\s*$/gm))
+    harm.set(Number(m[1]), Number(m[3]));
+  return {
+    pout: num('pout'),
+    vd1pk: num('vd1pk'),
+    i1pk: Math.max(num('i1pk'), -num('i1min')),
+    harm,
+    out: out + r.stderr,
+  };
 }
 
 describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs the program', () => {
   const dd = designLpf(lpfParams({ form: 'inductor-input', order: 5, inductorQ: 10000, capacitorQ: 100000 }), F0);
   if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
   const d = dd.value;
-  const pa = evaluatePa(paParams({ amplifierClass: 'D', topology: 'push-pull', turnsRatio: 1, loadOhm: R0, rdsOnOhm: RON, saturationV: null, efficiency: 0.9 }),
-    VDD, { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 });
-  // leakage between the primary halves, one half with the other shorted: L_half (1 − k²) (coupled inductors, textbook)
+  const pa = evaluatePa(
+    paParams({
+      amplifierClass: 'D',
+      topology: 'push-pull',
+      turnsRatio: 1,
+      loadOhm: R0,
+      rdsOnOhm: RON,
+      saturationV: null,
+      efficiency: 0.9,
+    }),
+    VDD,
+    { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 },
+  );
+  // leakage between the primary halves, one half with the other shorted: L_half
+  // (1 − k²) (coupled inductors, textbook)
   const lHalf = (20 * R0) / W / 4;
   const leakageH = lHalf * (1 - KCOUP ** 2);
-  const base = { drainPeakV: pa.peakDrainV, maxRailV: VDD, peakDeviceA: pa.peakDeviceA, outputW: pa.outputW, dcInputW: pa.dcInputW, biasW: 0 };
+  const base = {
+    drainPeakV: pa.peakDrainV,
+    maxRailV: VDD,
+    peakDeviceA: pa.peakDeviceA,
+    outputW: pa.outputW,
+    dcInputW: pa.dcInputW,
+    biasW: 0,
+  };
   const matched = { ...base, ring: { leakageH, cossF: COSS } };
   // ideal square wave (no transition time given): odd harmonics 1/n
-  const band3 = paSpectrum({ topology: 'push-pull', amplifierClass: 'D', imbalanceTypical: 0, imbalanceWorst: 0 }).bands.find((b) => b.n === 3)!;
-  const src = paSource({ pa: paParams({ amplifierClass: 'D', topology: 'push-pull', rdsOnOhm: RON, saturationV: null }), primaryOhm: R0, peakDeviceA: pa.peakDeviceA, classESimulated: false });
+  const band3 = paSpectrum({
+    topology: 'push-pull',
+    amplifierClass: 'D',
+    imbalanceTypical: 0,
+    imbalanceWorst: 0,
+  }).bands.find((b) => b.n === 3)!;
+  const src = paSource({
+    pa: paParams({ amplifierClass: 'D', topology: 'push-pull', rdsOnOhm: RON, saturationV: null }),
+    primaryOhm: R0,
+    peakDeviceA: pa.peakDeviceA,
+    classESimulated: false,
+  });
   const loads: [string, C][] = [
     ['50 ohm', { re: R0, im: 0 }],
     ...[0, 90, 180, 270].map((ph): [string, C] => {
@@ -152,11 +202,15 @@ describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs
       const loadLine = stressAt('D', base, zn);
       const s = run(d, zl, name.replace(/\W+/g, '_'));
       expect(Number.isFinite(s.pout), s.out).toBe(true);
-      expect(Math.abs(s.pout / pred.outputW - 1), `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`).toBeLessThanOrEqual(TOL_POWER);
+      expect(
+        Math.abs(s.pout / pred.outputW - 1),
+        `power: ngspice ${s.pout.toFixed(2)} W, program ${pred.outputW.toFixed(2)} W`,
+      ).toBeLessThanOrEqual(TOL_POWER);
       const vMsg = `drain: ngspice ${s.vd1pk.toFixed(2)} V, program ${pred.drainPeakV.toFixed(2)} V`;
       expect(s.vd1pk, vMsg).toBeGreaterThanOrEqual(pred.drainPeakV * (1 - DRAIN_BELOW));
       expect(s.vd1pk, vMsg).toBeLessThanOrEqual(pred.drainPeakV * (1 + DRAIN_ABOVE));
-      const iMsg = `current: ngspice ${s.i1pk.toFixed(2)} A, load line ${loadLine.peakDeviceA.toFixed(2)} A, bound ${pred.peakDeviceA.toFixed(2)} A`;
+      const iMsg = `current: ngspice ${s.i1pk.toFixed(2)} A, load line ${loadLine.peakDeviceA.toFixed(2)} A, bound ` +
+        `${pred.peakDeviceA.toFixed(2)} A`;
       expect(s.i1pk, iMsg).toBeGreaterThanOrEqual(loadLine.peakDeviceA * (1 - CURRENT_BELOW_LOAD_LINE));
       expect(s.i1pk, iMsg).toBeLessThanOrEqual(pred.peakDeviceA * (1 + CURRENT_ABOVE));
     });
@@ -167,7 +221,10 @@ describe.skipIf(!haveNgspice)('push-pull class D + low-pass filter in ngspice vs
       const zlAt = (n: number): C => ({ re: zl.re, im: zl.im >= 0 ? n * zl.im : zl.im / n });
       const rows = harmonicsFromSource(ladderOf(d, 'built', true), F0, src.kind, src.zsAt, [3], zlAt);
       const predicted = band3.worstDbc - rows[0].relativeAttenuationDb;
-      expect(Math.abs(spiceDbc - predicted), `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`).toBeLessThanOrEqual(TOL_HARMONIC_DB);
+      expect(
+        Math.abs(spiceDbc - predicted),
+        `3rd: ngspice ${spiceDbc.toFixed(1)} dBc, program ${predicted.toFixed(1)} dBc`,
+      ).toBeLessThanOrEqual(TOL_HARMONIC_DB);
     });
   }
 });
@@ -180,7 +237,8 @@ describe.skipIf(!haveNgspice)('push-pull class D: the SWR circle at the antenna,
   const dd = designLpf(lpfParams({ form: 'inductor-input', order: 5, inductorQ: 10000, capacitorQ: 100000 }), F0);
   if (!dd.ok) throw new Error(JSON.stringify(dd.errors));
   const d = dd.value;
-  // leakage between the primary halves, one half with the other shorted: L_half (1 − k²) (coupled inductors, textbook)
+  // leakage between the primary halves, one half with the other shorted: L_half
+  // (1 − k²) (coupled inductors, textbook)
   const leakageH = ((20 * R0) / W / 4) * (1 - KCOUP ** 2);
   const pa = evaluatePa(paParams({
     amplifierClass: 'D', topology: 'push-pull', turnsRatio: 1, loadOhm: R0, rdsOnOhm: RON, saturationV: null,

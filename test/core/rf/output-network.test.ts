@@ -23,7 +23,8 @@ describe('L network', () => {
     near(n.seriesH, 246.1e-9, 0.1e-9, 'L');
     near(n.shuntF, 393.8e-12, 0.1e-12, 'C');
   });
-  it('the ideal network presents exactly the drain load (checked by circuit theory, not by the design equations)', () => {
+  it('the ideal network presents exactly the drain load (checked by circuit theory, not by the ' +
+    'design equations)', () => {
     for (const [lo, hi, f] of [[12.5, 50, 14e6], [3, 50, 7e6], [22, 50, 10.1e6]]) {
       const n = lNetworkIdeal(lo, hi, f);
       const [re, im] = zIn(n.seriesH, n.shuntF, hi, f);
@@ -35,7 +36,11 @@ describe('L network', () => {
     }
   });
   it('fits standard capacitors and turns, and reports the drain load the built parts give', () => {
-    const n = designOutputNetwork(paParams({ topology: 'single-ended', loadOhm: 50 }), 12.5, 14e6, { alHPerTurn2: 4.9e-9, series: 'E12', pairs: true })!;
+    const n = designOutputNetwork(paParams({ topology: 'single-ended', loadOhm: 50 }), 12.5, 14e6, {
+      alHPerTurn2: 4.9e-9,
+      series: 'E12',
+      pairs: true,
+    })!;
     // 246 nH on AL 4.9 nH/t²: √(246.1/4.9) = 7.09 → 7 turns, 240.1 nH (L = AL N²)
     expect(n.turns).toBe(7);
     near(n.builtSeriesH!, 240.1e-9, 0.1e-9, 'built L');
@@ -63,10 +68,19 @@ describe('on the RF page', () => {
     const { project } = await import('./fixture');
     const p = project();
     const st = p.stages.find((s) => s.kind === 'final')!;
-    st.pa = { ...st.pa!, topology: 'single-ended', devices: 1, turnsRatio: null, networkLoadOhm: 12.5, heatsinkSharedBy: null };
+    st.pa = {
+      ...st.pa!,
+      topology: 'single-ended',
+      devices: 1,
+      turnsRatio: null,
+      networkLoadOhm: 12.5,
+      heatsinkSharedBy: null,
+    };
     const report = evaluateRf(p, { paRailV: { pa: 13.8 } });
     const r = report.stages.find((s) => s.kind === 'final')!;
-    expect(r.pa!.refused, JSON.stringify(r.findings.filter((f) => f.severity === 'fail').map((f) => f.message))).toBe(false);
+    expect(r.pa!.refused, JSON.stringify(r.findings.filter((f) => f.severity === 'fail').map((f) => f.message))).toBe(
+      false,
+    );
     expect(r.network?.drainOhm).toBe(12.5);
     expect(r.choke?.currentA).toBe(r.pa!.keyDownCurrentA);
     const html = String(RfResults({ report }));

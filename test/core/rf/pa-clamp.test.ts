@@ -1,7 +1,8 @@
 // A fitted drain clamp: the drain peak it leaves and the power it takes. The relation is common practice, no
 // published source (source registry 'pa.drain-clamp'): the unclamped drain as a cosine swing about the supply,
-// v = Vdd + (Vpk − Vdd) cos θ, the clamp conducting while v > Vc (a share θc/π of the cycle, cos θc = (Vc − Vdd) /
-// (Vpk − Vdd)) and carrying at most the peak device current: P ≤ Vc Ipk θc/π. Expected values are hand arithmetic.
+// v = Vdd + (Vpk − Vdd) cos θ, the clamp conducting while v > Vc (a share θc/π of the cycle, cos θc = (Vc −
+// Vdd) / (Vpk − Vdd)) and carrying at most the peak device current: P ≤ Vc Ipk
+// θc/π. Expected values are hand arithmetic.
 import { describe, expect, it } from 'vitest';
 import { clampAt } from '../../../src/core/rf/pa-clamp';
 import { evaluatePa } from '../../../src/core/rf/pa';
@@ -11,7 +12,8 @@ import { paParams } from './fixture';
 import { near } from './helpers';
 
 describe('clamp relation (hand arithmetic)', () => {
-  it('Vdd 24 V, unclamped peak 96 V, clamp 60 V, 2 A: cos θc = 36/72 = 0.5, θc = π/3, a third of the cycle, 40 W', () => {
+  it('Vdd 24 V, unclamped peak 96 V, clamp 60 V, 2 A: cos θc = 36/72 = 0.5, θc = π/3, a third of ' +
+    'the cycle, 40 W', () => {
     const c = clampAt(60, 24, 96, 2);
     near(c.conductionFraction, 1 / 3, 1e-12, 'share');
     near(c.dissipationW, 60 * 2 / 3, 1e-9, 'P'); // 60 V x 2 A x 1/3 = 40 W
@@ -34,7 +36,14 @@ describe('clamp relation (hand arithmetic)', () => {
 
 describe('a clamp fitted to a class-E stage at SWR 2', () => {
   const proj = { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 };
-  const base = { amplifierClass: 'E' as const, topology: 'single-ended' as const, devices: 1, rdsOnOhm: 0.1, saturationV: null, deviceVdsMaxV: 55 };
+  const base = {
+    amplifierClass: 'E' as const,
+    topology: 'single-ended' as const,
+    devices: 1,
+    rdsOnOhm: 0.1,
+    saturationV: null,
+    deviceVdsMaxV: 55,
+  };
   const bare = evaluatePa(paParams(base), 13.8, proj, 'PA', { worstSwr: 2 });
   // Sokal and Sokal (IEEE JSSC 1975): 3.56 x 13.8 V = 49.1 V into the design load; the SWR circle raises it above 55 V
   const worst = bare.swr!.worstDrainPeak.value;
@@ -43,7 +52,8 @@ describe('a clamp fitted to a class-E stage at SWR 2', () => {
     expect(bare.findings.find((f) => f.rule === 'pa.vds')!.severity).toBe('fail');
     expect(bare.findings.find((f) => f.rule === 'pa.vds')!.message).toMatch(/drain clamp|higher|rated/);
   });
-  it('a 52 V clamp (above the 49.1 V design peak) holds the device at 52 V: a caution (within 25 % of 55 V), not a fail', () => {
+  it('a 52 V clamp (above the 49.1 V design peak) holds the device at 52 V: a caution (within 25 % of ' +
+    '55 V), not a fail', () => {
     const r = evaluatePa(paParams({ ...base, drainClampV: 52 }), 13.8, proj, 'PA', { worstSwr: 2 });
     const vds = r.findings.find((f) => f.rule === 'pa.vds')!;
     expect(vds.value).toBe(52);
@@ -54,19 +64,37 @@ describe('a clamp fitted to a class-E stage at SWR 2', () => {
     const swing = worst - 13.8;
     const share = Math.acos((52 - 13.8) / swing) / Math.PI;
     const at = r.swr!.points.find((p) => p.phaseDeg === r.swr!.worstDrainPeak.phaseDeg)!;
-    near(r.clamp!.worst.dissipationW, Math.min(52 * r.swr!.worstPeakCurrent.value * share, at.outputW + at.dissipationW), 1e-9, 'P clamp');
+    near(
+      r.clamp!.worst.dissipationW,
+      Math.min(52 * r.swr!.worstPeakCurrent.value * share, at.outputW + at.dissipationW),
+      1e-9,
+      'P clamp',
+    );
     const f = r.findings.find((x) => x.rule === 'pa.drain-clamp')!;
     expect(f.severity).toBe('caution');
     expect(f.message).toMatch(/steady-state power rating/);
     expect(f.source).toBe('pa.drain-clamp');
   });
-  it('a clamp below the design peak conducts every cycle (caution); one at or above the rating does not protect (fail)', () => {
+  it('a clamp below the design peak conducts every cycle (caution); one at or above the rating does not ' +
+    'protect (fail)', () => {
     const low = evaluatePa(paParams({ ...base, drainClampV: 40 }), 13.8, proj, 'PA', { worstSwr: 2 });
-    expect(low.findings.some((f) => f.rule === 'pa.drain-clamp' && f.severity === 'caution' && /every cycle/.test(f.message))).toBe(true);
+    expect(
+      low.findings.some(
+        (f) => f.rule === 'pa.drain-clamp' && f.severity === 'caution' && /every cycle/.test(f.message),
+      ),
+    ).toBe(true);
     const high = evaluatePa(paParams({ ...base, drainClampV: 55 }), 13.8, proj, 'PA', { worstSwr: 2 });
-    expect(high.findings.some((f) => f.rule === 'pa.drain-clamp' && f.severity === 'fail' && /does not protect/.test(f.message))).toBe(true);
+    expect(
+      high.findings.some(
+        (f) => f.rule === 'pa.drain-clamp' && f.severity === 'fail' && /does not protect/.test(f.message),
+      ),
+    ).toBe(true);
     const under = evaluatePa(paParams({ ...base, drainClampV: 12 }), 13.8, proj, 'PA', { worstSwr: 2 });
-    expect(under.findings.some((f) => f.rule === 'pa.drain-clamp' && f.severity === 'fail' && /conduct all the time/.test(f.message))).toBe(true);
+    expect(
+      under.findings.some(
+        (f) => f.rule === 'pa.drain-clamp' && f.severity === 'fail' && /conduct all the time/.test(f.message),
+      ),
+    ).toBe(true);
   });
   it('no clamp entered: no clamp result and no clamp finding', () => {
     expect(bare.clamp ?? null).toBeNull();

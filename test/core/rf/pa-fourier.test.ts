@@ -41,10 +41,16 @@ describe('cosine pulse at a tabulated angle (Krauss, Bostian & Raab 1980, coeffi
 });
 
 describe('flat-topped (saturated) pulse', () => {
-  it('drive 1 is the plain cosine pulse; an infinite drive the rectangular pulse 2 sin(nθ)/(nπ), θ/π (pulse train)', () => {
+  it('drive 1 is the plain cosine pulse; an infinite drive the rectangular pulse 2 sin(nθ)/(nπ), θ/π ' +
+    '(pulse train)', () => {
     for (const n of [0, 1, 2, 3]) {
       near(flattenedPulseCoefficient(n, rad(75), 1), cosinePulseCoefficient(n, rad(75)), 1e-15, `n=${n} drive 1`);
-      near(rectangularPulseCoefficient(n, rad(75)), n === 0 ? rad(75) / Math.PI : (2 * Math.sin(n * rad(75))) / (n * Math.PI), 1e-15, `n=${n} rect`);
+      near(
+        rectangularPulseCoefficient(n, rad(75)),
+        n === 0 ? rad(75) / Math.PI : (2 * Math.sin(n * rad(75))) / (n * Math.PI),
+        1e-15,
+        `n=${n} rect`,
+      );
     }
     // a very large drive approaches the rectangular limit
     near(flattenedPulseCoefficient(1, rad(75), 1e6), rectangularPulseCoefficient(1, rad(75)), 1e-5, 'drive 1e6');
@@ -58,55 +64,81 @@ describe('flat-topped (saturated) pulse', () => {
     }
   });
   it('matches a numerical Fourier integral of min(A p(ωt), 1) (seeded property)', () => {
-    fc.assert(fc.property(
-      fc.double({ min: 40, max: 180, noNaN: true }), fc.double({ min: 1, max: 50, noNaN: true }), fc.integer({ min: 0, max: 5 }),
-      (deg, drive, n) => {
-        const th = rad(deg);
-        const pulse = (phi: number) => Math.abs(phi) < th ? Math.min(1, (drive * (Math.cos(phi) - Math.cos(th))) / (1 - Math.cos(th))) : 0;
-        // midpoint rule on a pulse with corners: error well under 1e-4 at 20 000 samples
-        expect(Math.abs(flattenedPulseCoefficient(n, th, drive) - fourierCos(pulse, n))).toBeLessThan(1e-4);
-      },
-    ), propertyOptions(1107, 60)); // seed 1107
+    fc.assert(
+      fc.property(
+        fc.double({ min: 40, max: 180, noNaN: true }),
+        fc.double({ min: 1, max: 50, noNaN: true }),
+        fc.integer({ min: 0, max: 5 }),
+        (deg, drive, n) => {
+          const th = rad(deg);
+          const pulse = (phi: number) =>
+            Math.abs(phi) < th ? Math.min(1, (drive * (Math.cos(phi) - Math.cos(th))) / (1 - Math.cos(th))) : 0;
+          // midpoint rule on a pulse with corners: error well under 1e-4 at 20 000 samples
+          expect(Math.abs(flattenedPulseCoefficient(n, th, drive) - fourierCos(pulse, n))).toBeLessThan(1e-4);
+        },
+      ),
+      propertyOptions(1107, 60),
+    ); // seed 1107
   });
 });
 
-describe('trapezoidal wave (C. R. Paul, Introduction to Electromagnetic Compatibility, 2nd ed. 2006, §3.2, from memory)', () => {
+describe('trapezoidal wave (C. R. Paul, Introduction to Electromagnetic Compatibility, 2nd ed. 2006, §3.2, ' +
+  'from memory)', () => {
   it('zero transition time reduces to the rectangular wave |sin nπD| / (n sin πD) (seeded property)', () => {
-    fc.assert(fc.property(fc.double({ min: 0.05, max: 0.95, noNaN: true }), fc.integer({ min: 2, max: 7 }), (d, n) => {
-      near(trapezoidHarmonic(n, d, 0), Math.abs(Math.sin(n * Math.PI * d)) / (n * Math.sin(Math.PI * d)), 1e-12, `D=${d} n=${n}`);
-      near(trapezoidHarmonic(n, d, 0), rectangularHarmonic(n, d), 1e-12, 'same as rectangularHarmonic');
-    }), propertyOptions(2006, 100)); // seed 2006
+    fc.assert(
+      fc.property(fc.double({ min: 0.05, max: 0.95, noNaN: true }), fc.integer({ min: 2, max: 7 }), (d, n) => {
+        near(
+          trapezoidHarmonic(n, d, 0),
+          Math.abs(Math.sin(n * Math.PI * d)) / (n * Math.sin(Math.PI * d)),
+          1e-12,
+          `D=${d} n=${n}`,
+        );
+        near(trapezoidHarmonic(n, d, 0), rectangularHarmonic(n, d), 1e-12, 'same as rectangularHarmonic');
+      }),
+      propertyOptions(2006, 100),
+    ); // seed 2006
   });
   it('square wave of unit height: fundamental 2/π (Fourier series of a square wave, textbook)', () => {
     near(trapezoidCoefficient(1, 0.5, 0), 2 / Math.PI, 1e-15, 'c1');
   });
-  it('rise = fall = half the period at 50 % duty is the triangle wave: odd harmonics 1/n², even none (textbook)', () => {
+  it('rise = fall = half the period at 50 % duty is the triangle wave: odd harmonics 1/n², even ' +
+    'none (textbook)', () => {
     near(trapezoidHarmonic(3, 0.5, 0.5), 1 / 9, 1e-12, '3rd');
     near(trapezoidHarmonic(5, 0.5, 0.5), 1 / 25, 1e-12, '5th');
     near(trapezoidHarmonic(2, 0.5, 0.5), 0, 1e-12, '2nd');
   });
   it('matches a numerical Fourier integral of the sampled trapezoid (seeded property)', () => {
-    fc.assert(fc.property(
-      fc.double({ min: 0.3, max: 0.7, noNaN: true }), fc.double({ min: 0, max: 0.25, noNaN: true }), fc.integer({ min: 1, max: 5 }),
-      (d, tau, n) => {
-        const T = 2 * Math.PI;
-        // rises from 0 to 1 centred on t = 0, falls centred on t = D T (50 % points), edges tau T long
-        const wave = (phi: number) => {
-          const t = phi / T;
-          const rise = Math.min(1, Math.max(0, t / tau + 0.5));
-          const fall = Math.min(1, Math.max(0, (t - d) / tau + 0.5));
-          return tau === 0 ? (t < d ? 1 : 0) : rise - fall;
-        };
-        expect(Math.abs(trapezoidCoefficient(n, d, tau) - fourierMag((phi) => wave(phi < T - tau * T / 2 ? phi : phi - T), n))).toBeLessThan(2e-4);
-      },
-    ), propertyOptions(3201, 60)); // seed 3201
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.3, max: 0.7, noNaN: true }),
+        fc.double({ min: 0, max: 0.25, noNaN: true }),
+        fc.integer({ min: 1, max: 5 }),
+        (d, tau, n) => {
+          const T = 2 * Math.PI;
+          // rises from 0 to 1 centred on t = 0, falls centred on t = D T (50 % points), edges tau T long
+          const wave = (phi: number) => {
+            const t = phi / T;
+            const rise = Math.min(1, Math.max(0, t / tau + 0.5));
+            const fall = Math.min(1, Math.max(0, (t - d) / tau + 0.5));
+            return tau === 0 ? (t < d ? 1 : 0) : rise - fall;
+          };
+          expect(
+            Math.abs(
+              trapezoidCoefficient(n, d, tau) - fourierMag((phi) => wave(phi < T - (tau * T) / 2 ? phi : phi - T), n),
+            ),
+          ).toBeLessThan(2e-4);
+        },
+      ),
+      propertyOptions(3201, 60),
+    ); // seed 3201
   });
 });
 
 describe('clipped sinusoid (drain voltage flat-topped at the rail limits)', () => {
   it('x = 2 (clip at half the amplitude, β = 30°), worked by hand: b1 = 2/3 + √3/π, b3 = √3/(2π)', () => {
     // Source: clipped-sinusoid Fourier series / saturation describing function (Gelb & Vander Velde 1968, from memory),
-    // worked by hand at β = π/6: b1 = (4/π)(π/6 + √3/4) = 1.21800; b3 = (4/π)(sin 60°/2 − sin 120°/4) = 0.27566
+    // worked by hand at β = π/6: b1 = (4/π)(π/6 + √3/4) = 1.21800; b3 =
+    // (4/π)(sin 60°/2 − sin 120°/4) = 0.27566
     near(clippedSineCoefficient(1, 2), 2 / 3 + Math.sqrt(3) / Math.PI, 1e-12, 'b1');
     near(clippedSineCoefficient(3, 2), Math.sqrt(3) / (2 * Math.PI), 1e-12, 'b3');
     expect(clippedSineCoefficient(2, 2)).toBe(0);

@@ -7,7 +7,8 @@ import { near } from './helpers';
 const proj = { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 };
 
 describe('PA with a matching network', () => {
-  // Textbook push-pull load line P = 2 (Vdd - Vsat)^2 / R_dd (REFERENCE-VALUES §8.1): 2 x 12.8^2 / 60 = 5.461 W (2.6 dB under the 10 W target)
+  // Textbook push-pull load line P = 2 (Vdd - Vsat)^2 / R_dd (REFERENCE-VALUES §8.1): 2 x 12.8^2 / 60
+  // = 5.461 W (2.6 dB under the 10 W target)
   const r = evaluatePa(paParams({ amplifierClass: 'B', networkLoadOhm: 60, saturationV: 1 }), 13.8, proj);
   it('uses the entered drain load: 5.46 W from 13.8 V into 60 Ω drain to drain', () => {
     expect(r.refused).toBe(false);

@@ -8,7 +8,14 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { NGSPICE, requireTool } from '../../helpers/tools';
-import { harmonicsFromSource, inputImpedance, ladderOf, pointAt, sourceTransfer, type Ladder } from '../../../src/core/rf/lpf-analysis';
+import {
+  harmonicsFromSource,
+  inputImpedance,
+  ladderOf,
+  pointAt,
+  sourceTransfer,
+  type Ladder,
+} from '../../../src/core/rf/lpf-analysis';
 import { designLpf } from '../../../src/core/rf/lpf-design';
 import { harmonicCurrentFinding, harmonicCurrentRatio, paSource } from '../../../src/core/rf/pa-source';
 import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
@@ -16,7 +23,11 @@ import { lpfParams, paParams, project } from './fixture';
 import { near } from './helpers';
 
 const one = (kind: 0 | 1, value: number, r0 = 50): Ladder => ({
-  kinds: Uint8Array.from([kind]), values: Float64Array.from([value]), inductorQ: Infinity, capacitorQ: Infinity, r0Ohm: r0,
+  kinds: Uint8Array.from([kind]),
+  values: Float64Array.from([value]),
+  inductorQ: Infinity,
+  capacitorQ: Infinity,
+  r0Ohm: r0,
 });
 const mag = (c: { re: number; im: number }) => Math.hypot(c.re, c.im);
 
@@ -57,7 +68,10 @@ describe('source transfer, hand checks', () => {
 describe('the PA as a source by class', () => {
   const base = { primaryOhm: 12.5, peakDeviceA: 2, classESimulated: false };
   it('push-pull class D: 4 Rds(on) on the full primary, x 50/12.5 at the filter: 4 x 0.1 x 4 = 1.6 Ω', () => {
-    const s = paSource({ ...base, pa: paParams({ amplifierClass: 'D', topology: 'push-pull', rdsOnOhm: 0.1, saturationV: null }) });
+    const s = paSource({
+      ...base,
+      pa: paParams({ amplifierClass: 'D', topology: 'push-pull', rdsOnOhm: 0.1, saturationV: null }),
+    });
     expect(s.kind).toBe('thevenin');
     near(s.zsAt(3)!.re, 1.6, 1e-12, 'Zs');
   });
@@ -66,8 +80,13 @@ describe('the PA as a source by class', () => {
     expect(s.kind).toBe('norton');
     expect(s.zsAt(2)).toBeNull();
   });
-  it('class E: the series network at 2f is j R_L (30 x 2 − 28.8475/2) = j 2278.8 Ω for 50 Ω (L0 = QL R/ω, class-e-sim)', () => {
-    const s = paSource({ ...base, pa: paParams({ amplifierClass: 'E', topology: 'single-ended' }), classESimulated: true });
+  it('class E: the series network at 2f is j R_L (30 x 2 − 28.8475/2) = j 2278.8 Ω for 50 Ω (L0 = QL R/ω, ' +
+    'class-e-sim)', () => {
+    const s = paSource({
+      ...base,
+      pa: paParams({ amplifierClass: 'E', topology: 'single-ended' }),
+      classESimulated: true,
+    });
     expect(s.kind).toBe('design-load');
     near(s.zsAt(2)!.im, 50 * (60 - (30 - 1.1525) / 2), 1e-9, 'X');
     near(s.zsAt(1)!.im, 50 * 1.1525, 1e-9, 'X at f: the excess reactance');
@@ -93,7 +112,8 @@ describe('harmonic current a stiff source drives into the filter (Ohm\'s law)', 
     };
     const expected = ((1 / 3) * Math.hypot(z(1).re, z(1).im)) / Math.hypot(z(3).re, z(3).im);
     near(harmonicCurrentRatio(zs, zin, 3, 1 / 3), expected, 1e-12, 'ratio');
-    // about 0.91 here (21.1 Ω against 7.7 Ω, over 3): above the 30 % threshold (common practice), so the finding is given
+    // about 0.91 here (21.1 Ω against 7.7 Ω, over 3): above the 30 % threshold
+    // (common practice), so the finding is given
     expect(harmonicCurrentFinding(expected, 3, 'PA')?.severity).toBe('caution');
   });
   it('a series inductor first keeps the current low: no finding', () => {
@@ -107,11 +127,19 @@ describe('harmonic current a stiff source drives into the filter (Ohm\'s law)', 
 describe('in the evaluation: push-pull class D into each filter form', () => {
   const rig = (form: 'capacitor-input' | 'inductor-input') => {
     const p = project();
-    return evaluateRf({
-      ...p,
-      stages: p.stages.map((st) => st.pa ? { ...st, pa: paParams({ amplifierClass: 'D', rdsOnOhm: 0.1, saturationV: null }) }
-        : st.lpf ? { ...st, lpf: lpfParams({ form }) } : st),
-    }, { paRailV: { pa: 13.8 } });
+    return evaluateRf(
+      {
+        ...p,
+        stages: p.stages.map((st) =>
+          st.pa
+            ? { ...st, pa: paParams({ amplifierClass: 'D', rdsOnOhm: 0.1, saturationV: null }) }
+            : st.lpf
+              ? { ...st, lpf: lpfParams({ form }) }
+              : st,
+        ),
+      },
+      { paRailV: { pa: 13.8 } },
+    );
   };
   it('capacitor-input: the harmonic-current caution, and the rows say the filter is judged from a stiff source', () => {
     const r = rig('capacitor-input');
@@ -136,8 +164,13 @@ describe.skipIf(!haveNgspice)('sourced rejection vs ngspice AC analysis', () => 
   const d = designLpf(lpfParams({ form: 'inductor-input', inductorQ: 10000, capacitorQ: 100000 }), F0);
   if (!d.ok) throw new Error('design');
   const l = ladderOf(d.value, 'built', true);
-  const ladder = d.value.elements.map((e, i) => e.kind === 'series-inductor'
-    ? `L${i} n${i} n${i + 1} ${e.builtValue.toPrecision(7)}` : `C${i} n${i} 0 ${e.builtValue.toPrecision(7)}\nV${i} n${i} n${i + 1} 0`).join('\n');
+  const ladder = d.value.elements
+    .map((e, i) =>
+      e.kind === 'series-inductor'
+        ? `L${i} n${i} n${i + 1} ${e.builtValue.toPrecision(7)}`
+        : `C${i} n${i} 0 ${e.builtValue.toPrecision(7)}\nV${i} n${i} n${i + 1} 0`,
+    )
+    .join('\n');
   const last = `n${d.value.elements.length}`;
   const spice = (source: string, name: string) => {
     const lines = ['* sourced filter', source, ladder, `RL ${last} 0 50`, '.control'];

@@ -42,7 +42,8 @@ describe('rectangular wave |sin nπD| / (n |sin πD|) (Fourier series of a pulse
 });
 
 describe('paSpectrum bands', () => {
-  it('push-pull class B: 2nd up to ε α2/(2 α1) = 0.2122 ε at 20 % -> -27.4 dBc; none in the saturated square wave', () => {
+  it('push-pull class B: 2nd up to ε α2/(2 α1) = 0.2122 ε at 20 % -> -27.4 dBc; none in the ' +
+    'saturated square wave', () => {
     const s = paSpectrum({ topology: 'push-pull', amplifierClass: 'B', imbalanceTypical: 0.05, imbalanceWorst: 0.2 });
     const h2 = s.bands.find((b) => b.n === 2)!;
     // a rectangular pulse of 50 % duty has no even harmonics (Fourier series of a pulse train, sin(2 · π/2) = 0)
@@ -62,7 +63,13 @@ describe('paSpectrum bands', () => {
     expect(s.assumed).toEqual({});
   });
   it('an empty conduction angle and imbalance are assumed and reported, never silent', () => {
-    const s = paSpectrum({ topology: 'push-pull', amplifierClass: 'C', conductionAngleDeg: null, imbalanceTypical: null, imbalanceWorst: null });
+    const s = paSpectrum({
+      topology: 'push-pull',
+      amplifierClass: 'C',
+      conductionAngleDeg: null,
+      imbalanceTypical: null,
+      imbalanceWorst: null,
+    });
     expect(s.assumed).toEqual({ conductionAngleDeg: 150, imbalanceTypical: 0.05, imbalanceWorst: 0.2 });
   });
   it('class D push-pull, duty 50 % to 60 % (20 % worst): 2nd up to |sin 1.2π|/(2 sin 0.6π) = 0.309', () => {
@@ -74,16 +81,32 @@ describe('paSpectrum bands', () => {
 });
 
 describe('compliance on the worst end, and the construction floor (-70 dBc, common practice)', () => {
-  const base = { rule: 'us-97-307' as const, topology: 'push-pull' as const, evenHarmonicDbc: -30, fundamentalW: 10, frequencyHz: 7e6, passbandLossDb: 0, monteCarlo: null };
+  const base = {
+    rule: 'us-97-307' as const,
+    topology: 'push-pull' as const,
+    evenHarmonicDbc: -30,
+    fundamentalW: 10,
+    frequencyHz: 7e6,
+    passbandLossDb: 0,
+    monteCarlo: null,
+  };
   it('a band whose worst end misses 43 dB fails even though its best end passes', () => {
-    const r = harmonicCompliance({ ...base, filter: [2, 3, 4, 5].map((n) => ({ n, attenuationDb: 20 })), spectrum: [2, 3, 4, 5].map((n) => ({ n, bestDbc: -40, worstDbc: -20, basis: 'push-pull-imbalance' as const })) });
+    const r = harmonicCompliance({
+      ...base,
+      filter: [2, 3, 4, 5].map((n) => ({ n, attenuationDb: 20 })),
+      spectrum: [2, 3, 4, 5].map((n) => ({ n, bestDbc: -40, worstDbc: -20, basis: 'push-pull-imbalance' as const })),
+    });
     const h2 = r.rows[0];
     near(h2.predictedBestDbc, -60, 1e-12, 'best');
     near(h2.predictedDbc, -40, 1e-12, 'worst');
     expect(h2.severity).toBe('fail');
   });
   it('a level below -70 dBc is limited by construction: margin taken from the floor, said in words', () => {
-    const r = harmonicCompliance({ ...base, filter: [2, 3, 4, 5].map((n) => ({ n, attenuationDb: 80 })), spectrum: [2, 3, 4, 5].map((n) => ({ n, bestDbc: -30, worstDbc: -10, basis: 'cosine-pulse' as const })) });
+    const r = harmonicCompliance({
+      ...base,
+      filter: [2, 3, 4, 5].map((n) => ({ n, attenuationDb: 80 })),
+      spectrum: [2, 3, 4, 5].map((n) => ({ n, bestDbc: -30, worstDbc: -10, basis: 'cosine-pulse' as const })),
+    });
     const h = r.rows[0];
     expect(h.limitedByConstruction).toBe(true);
     near(h.marginDb, 70 - 43, 1e-12, 'margin from the floor');

@@ -25,7 +25,8 @@ describe('paThermal with (nearly) nothing to dissipate', () => {
     expect(nonFinitePaths(t)).toEqual([]);
     expect(t.thetaSaNeededContinuousKPerW).toBe(NO_HEATSINK_NEEDED_K_PER_W);
   });
-  it('at the floor itself the formula applies: (100 - 40) / 1 mW - 6 = 59 994 K/W (REFERENCE-VALUES §7 formula)', () => {
+  it('at the floor itself the formula applies: (100 - 40) / 1 mW - 6 = 59 994 K/W ' +
+    '(REFERENCE-VALUES §7 formula)', () => {
     const t = paThermal(pa, 0, NEGLIGIBLE_DISSIPATION_W, 0, 40, 1);
     near(t.thetaSaNeededContinuousKPerW as number, 60 / 1e-3 - 6, 1e-6, 'θsa');
   });

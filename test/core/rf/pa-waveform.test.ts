@@ -13,8 +13,13 @@ const dbc = (x: number) => 20 * Math.log10(x);
 const sinc = (x: number) => Math.sin(x) / x;
 
 describe('class B and C: the cosine pulse, edge of saturation to flat-topped', () => {
-  it('class B push-pull: the band reaches the square wave, (4/π)² the power and π/2 the current (Fourier series)', () => {
-    const r = evaluatePa(paParams({ amplifierClass: 'B', efficiency: 0.6, biasIdleMaxA: 0, turnsRatio: 1.25 }), 13.8, proj);
+  it('class B push-pull: the band reaches the square wave, (4/π)² the power and π/2 the current ' +
+    '(Fourier series)', () => {
+    const r = evaluatePa(
+      paParams({ amplifierClass: 'B', efficiency: 0.6, biasIdleMaxA: 0, turnsRatio: 1.25 }),
+      13.8,
+      proj,
+    );
     // Source: square wave fundamental 4/π of its height against the sine's 1 (textbook Fourier series)
     near(r.waveform!.bandMaxOutputW, r.outputW * 16 / Math.PI ** 2, 1e-6, 'P saturated');
     // Source: mean of a half-period rectangular pulse 1/2 against the half-sine's 1/π (textbook Fourier series)
@@ -28,7 +33,8 @@ describe('class B and C: the cosine pulse, edge of saturation to flat-topped', (
     // and its odd harmonics reach the square wave's 1/n (3rd: −9.54 dBc)
     near(r.spectrum!.bands.find((b) => b.n === 3)!.worstDbc, dbc(1 / 3), 1e-9, '3rd');
   });
-  it('class C at 120° conduction: the ideal efficiency α1/(2 α0) (Vdd − Vsat)/Vdd caps an entered efficiency', () => {
+  it('class C at 120° conduction: the ideal efficiency α1/(2 α0) (Vdd − Vsat)/Vdd caps an ' +
+    'entered efficiency', () => {
     // Table values at 120° conduction (θ = 60°): α0 = 0.218, α1 = 0.391 (Krauss, Bostian & Raab 1980, from memory)
     const ideal = (0.391 / (2 * 0.218)) * (12.8 / 13.8);
     const r = evaluatePa(paParams({ conductionAngleDeg: 120, efficiency: 0.99, turnsRatio: 1.25 }), 13.8, proj);
@@ -38,18 +44,32 @@ describe('class B and C: the cosine pulse, edge of saturation to flat-topped', (
   });
 });
 
-describe('class D: trapezoidal drain voltage (C. R. Paul, Introduction to EMC, 2nd ed. 2006, §3.2, from memory)', () => {
+describe('class D: trapezoidal drain voltage (C. R. Paul, Introduction to EMC, 2nd ed. 2006, §3.2, ' +
+  'from memory)', () => {
   const f = 7.03e6;
   const tr = 10e-9;
   const tau = tr * f;
-  it('10 ns edges at 7.03 MHz: P = (32/π²)(Vdd − Vsat)²/R sinc²(π t_r f); 3rd harmonic (1/3) sinc(3π t_r f)/sinc(π t_r f)', () => {
-    const pa = paParams({ amplifierClass: 'D', turnsRatio: 1.25, transitionTimeS: tr, imbalanceTypical: 0, imbalanceWorst: 0.2 });
+  it('10 ns edges at 7.03 MHz: P = (32/π²)(Vdd − Vsat)²/R sinc²(π t_r f); 3rd harmonic (1/3) sinc(3π t_r ' +
+    'f)/sinc(π t_r f)', () => {
+    const pa = paParams({
+      amplifierClass: 'D',
+      turnsRatio: 1.25,
+      transitionTimeS: tr,
+      imbalanceTypical: 0,
+      imbalanceWorst: 0.2,
+    });
     const r = evaluatePa(pa, 13.8, proj, 'PA', { frequencyHz: f });
     // push-pull square wave ±2(Vdd − Vsat) drain to drain into R_dd = 50/1.25² = 32 Ω (Fourier series, textbook)
     near(r.outputW, ((32 / Math.PI ** 2) * 12.8 ** 2 / 32) * sinc(Math.PI * tau) ** 2, 1e-6, 'P');
     // the worst 3rd is at 50 % duty (|sin 3πD|/(3 sin πD) falls from 1/3 towards 60 %)
-    near(r.spectrum!.bands.find((b) => b.n === 3)!.worstDbc, dbc((1 / 3) * (sinc(3 * Math.PI * tau) / sinc(Math.PI * tau))), 1e-9, '3rd');
-    // an ideal voltage switch turns its DC input into output: DC = P/η, every waveform of the band at most the 50 % one
+    near(
+      r.spectrum!.bands.find((b) => b.n === 3)!.worstDbc,
+      dbc((1 / 3) * (sinc(3 * Math.PI * tau) / sinc(Math.PI * tau))),
+      1e-9,
+      '3rd',
+    );
+    // an ideal voltage switch turns its DC input into output: DC = P/η, every
+    // waveform of the band at most the 50 % one
     near(r.keyDownCurrentA - pa.biasIdleMaxA, r.outputW / (0.7 * 13.8), 1e-9, 'I');
     expect(r.waveform!.transitionAssumed).toBe(false);
   });
@@ -60,7 +80,13 @@ describe('class D: trapezoidal drain voltage (C. R. Paul, Introduction to EMC, 2
   });
   it('edges longer than the short part of the period are a fail naming the transition time', () => {
     // 80 ns at 7.03 MHz is 56 % of the period: more than the 40 % off-time at the 20 % worst imbalance
-    const r = evaluatePa(paParams({ amplifierClass: 'D', turnsRatio: 1.25, transitionTimeS: 80e-9 }), 13.8, proj, 'PA', { frequencyHz: f });
+    const r = evaluatePa(
+      paParams({ amplifierClass: 'D', turnsRatio: 1.25, transitionTimeS: 80e-9 }),
+      13.8,
+      proj,
+      'PA',
+      { frequencyHz: f },
+    );
     const fail = r.findings.find((x) => x.rule === 'pa.transition-time');
     expect(fail?.severity).toBe('fail');
     expect(fail?.message).toMatch(/transition time/);
@@ -68,12 +94,21 @@ describe('class D: trapezoidal drain voltage (C. R. Paul, Introduction to EMC, 2
 });
 
 describe('class E: the simulated waveform (Sokal & Sokal, IEEE JSSC SC-10(3), 1975)', () => {
-  const e = paParams({ topology: 'single-ended', devices: 1, amplifierClass: 'E', saturationV: null, rdsOnOhm: 0.01, efficiency: null, turnsRatio: Math.sqrt(50 / 9.45) });
+  const e = paParams({
+    topology: 'single-ended',
+    devices: 1,
+    amplifierClass: 'E',
+    saturationV: null,
+    rdsOnOhm: 0.01,
+    efficiency: null,
+    turnsRatio: Math.sqrt(50 / 9.45),
+  });
   const r = evaluatePa(e, 13.8, proj, 'PA', { frequencyHz: 14.06e6 });
   it('output from Sokal’s load line P = 0.5768 Vdd²/R (Rds(on) 0.01 Ω leaves Vdd − I Rds ≈ Vdd)', () => {
     near(r.outputW, (0.5768 * 13.8 ** 2) / 9.45, 0.02 * r.outputW, 'P');
   });
-  it('the ideal efficiency is the simulation’s (about 100 % with a small Rds(on)): I_dc ≈ P/Vdd at the design point', () => {
+  it('the ideal efficiency is the simulation’s (about 100 % with a small Rds(on)): I_dc ≈ P/Vdd at the ' +
+    'design point', () => {
     expect(r.waveform!.idealEfficiency).toBeGreaterThan(0.95);
   });
   it('harmonics come from the simulation: 2nd far below a rectangular wave’s, loaded Q 30 to 5', () => {
@@ -98,7 +133,8 @@ describe('the supply budget carries the PA waveform’s current (the band’s mo
     expect(ideal.keyDownCurrentA).toBeGreaterThan(r.keyDownCurrentA);
   });
   for (const demo of [club30m, portable20m]) {
-    it(`${demo.name}: the budget's computed PA load equals the RF report's key-down current (within the loop's settling)`, () => {
+    it(`${demo.name}: the budget's computed PA load equals the RF report's key-down current (within the ` +
+      `loop's settling)`, () => {
       const rep = evaluate(demo);
       const st = rep.rf.stages.find((s) => s.kind === 'final')!;
       const load = rep.budget.rails.flatMap((x) => x.loads).find((l) => l.stageId === st.stageId && l.computed)!;
@@ -110,7 +146,15 @@ describe('the supply budget carries the PA waveform’s current (the band’s mo
 
 describe('worst-SWR key-down current', () => {
   it('class E into the SWR 2 circle: shown, and a caution when above the matched one the budget carries', () => {
-    const e = paParams({ topology: 'single-ended', devices: 1, amplifierClass: 'E', saturationV: 0.4, turnsRatio: null, biasIdleMaxA: 0, referencePowerW: 1 });
+    const e = paParams({
+      topology: 'single-ended',
+      devices: 1,
+      amplifierClass: 'E',
+      saturationV: 0.4,
+      turnsRatio: null,
+      biasIdleMaxA: 0,
+      referencePowerW: 1,
+    });
     const r = evaluatePa(e, 12, { ...proj, targetPowerW: 5 }, 'PA', { worstSwr: 2, frequencyHz: 14.06e6 });
     expect(r.swrKeyDownCurrentA).not.toBeNull();
     // Sokal's P = 0.5768 Vdd²/R rises as the load resistance falls: the circle's 25 Ω side draws more than 50 Ω

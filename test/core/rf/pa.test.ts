@@ -28,7 +28,8 @@ describe('PA worked example, push-pull 13.8 V 10 W 50 Ω (REFERENCE-VALUES §8.3
     const t = evaluatePa({ ...pa, turnsRatio: 1.235 }, 13.8, proj);
     near(t.outputW, 10.0, 0.02, 'P');
     near(t.dcInputW, 14.3, 0.05, 'DC W');
-    // printed 1.04 A from rounded 14.3 W / 13.8 V (= 1.036 A): tolerance 0.01 A; at the design point (edge of saturation)
+    // printed 1.04 A from rounded 14.3 W / 13.8 V (= 1.036 A): tolerance 0.01 A;
+    // at the design point (edge of saturation)
     near(t.waveform!.designCurrentA, 1.04, 0.01, 'I');
     // the band's most: the hard-saturated square wave, whose mean current is 1/2 of its peak against the
     // half-sine's 1/π (Fourier series, textbook): π/2 × the design current, 1.036 × π/2 = 1.63 A, said in a
@@ -99,8 +100,16 @@ describe('PA findings and bad inputs', () => {
 
 describe('PA judged at its worst supply corners (common practice, no published source: worst-case design)', () => {
   const toleranceV = 0.05;
-  it('drain peak uses the highest rail voltage: class E 3.56 x 15.18 V = 54.0 V (Sokal & Sokal 1975 via REFERENCE-VALUES §8.1)', () => {
-    const e = paParams({ topology: 'single-ended', devices: 1, amplifierClass: 'E', saturationV: 1.0, deviceVdsMaxV: 50, turnsRatio: Math.sqrt(50 / 9.45) });
+  it('drain peak uses the highest rail voltage: class E 3.56 x 15.18 V = 54.0 V (Sokal & Sokal 1975 via ' +
+    'REFERENCE-VALUES §8.1)', () => {
+    const e = paParams({
+      topology: 'single-ended',
+      devices: 1,
+      amplifierClass: 'E',
+      saturationV: 1.0,
+      deviceVdsMaxV: 50,
+      turnsRatio: Math.sqrt(50 / 9.45),
+    });
     const nominal = evaluatePa(e, 13.8, proj);
     // REFERENCE-VALUES §8.3: 3.56 x 13.8 = 49.1 V at the operating point
     near(nominal.peakDrainV, 49.1, toleranceV, 'nominal');
@@ -112,12 +121,14 @@ describe('PA judged at its worst supply corners (common practice, no published s
     // the output power stays at the operating point
     near(high.outputW, nominal.outputW, 1e-9, 'output unchanged');
   });
-  it('heating uses the hot rail voltage: 4:5 push-pull at 15.18 V gives 2 x 14.18^2 / 32 = 12.57 W, heat of its saturated square wave at 70 % (REFERENCE-VALUES §8.1, §8.3)', () => {
+  it('heating uses the hot rail voltage: 4:5 push-pull at 15.18 V gives 2 x 14.18^2 / 32 = 12.57 W, heat of its ' +
+    'saturated square wave at 70 % (REFERENCE-VALUES §8.1, §8.3)', () => {
     const pa = paParams({ saturationV: 1.0, amplifierClass: 'B', efficiency: 0.7, biasIdleMaxA: 0, turnsRatio: 1.25 });
     const r = evaluatePa(pa, 13.8, proj, 'PA', { hotRailV: 15.18 });
     const toleranceW = 0.01;
     // P = 2 (Vdd - Vsat)^2 / R_dd (§8.1). The hottest waveform of the band is the hard-saturated square wave: output
-    // (4/π)² P (fundamental 4/π), DC input (π/2) P/η (mean 1/2 against the half-sine's 1/π): Fourier series, textbook
+    // (4/π)² P (fundamental 4/π), DC input (π/2) P/η (mean 1/2 against the
+    // half-sine's 1/π): Fourier series, textbook
     const pHot = (2 * 14.18 ** 2) / 32;
     const heat = (p: number) => p * (Math.PI / (2 * 0.7) - 16 / Math.PI ** 2);
     near(r.thermal.dissipationTotalW, heat(pHot), toleranceW, 'hot dissipation');
@@ -129,8 +140,15 @@ describe('PA judged at its worst supply corners (common practice, no published s
   });
 });
 
-describe('PA output at the lowest key-down supply (load line P = (Vdd - Vsat)^2 / (0.5768... R): REFERENCE-VALUES §8.1, §8.3)', () => {
-  const e = paParams({ topology: 'single-ended', devices: 1, amplifierClass: 'E', saturationV: 1.0, turnsRatio: Math.sqrt(50 / 9.45) });
+describe('PA output at the lowest key-down supply (load line P = (Vdd - Vsat)^2 / (0.5768... R): ' +
+  'REFERENCE-VALUES §8.1, §8.3)', () => {
+  const e = paParams({
+    topology: 'single-ended',
+    devices: 1,
+    amplifierClass: 'E',
+    saturationV: 1.0,
+    turnsRatio: Math.sqrt(50 / 9.45),
+  });
   const toleranceW = 0.02;
   it('10 W at 13.8 V falls to 10 x (10.8/12.8)^2 = 7.12 W at 11.8 V: caution (more than 1 dB down)', () => {
     const r = evaluatePa(e, 13.8, proj, 'PA', { lowRailV: 11.8 });

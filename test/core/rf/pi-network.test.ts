@@ -20,7 +20,11 @@ afterAll(() => {
 function spiceZ(name: string, body: string, plus: string, minus: string, f: number): [number, number] {
   const v = minus === '0' ? `v(${plus})` : `(v(${plus}) - v(${minus}))`;
   const file = join(dir, `${name}.cir`);
-  writeFileSync(file, `* ${name}\nI1 ${minus} ${plus} AC 1\n${body}\n.control\nac lin 1 ${f} ${f}\nlet zr = real(${v})\nlet zi = imag(${v})\nprint zr zi\n.endc\n.end\n`);
+  writeFileSync(
+    file,
+    `* ${name}\nI1 ${minus} ${plus} AC 1\n${body}\n.control\nac lin 1 ${f} ${f}\nlet zr = real(${v})\nlet zi = ` +
+      `imag(${v})\nprint zr zi\n.endc\n.end\n`,
+  );
   const out = spawnSync(NGSPICE as string, ['-b', file], { cwd: dir, encoding: 'utf8' }).stdout;
   const re = /^zr\s*=\s*(\S+)/m.exec(out);
   const im = /^zi\s*=\s*(\S+)/m.exec(out);
@@ -33,7 +37,8 @@ describe('pi network design relations', () => {
     // Hand-worked from the pi network as two L networks through a virtual resistance (textbook relations,
     // e.g. C. Bowick, RF Circuit Design, 1982, ch. 4; from memory):
     // R_v = 50 / (3² + 1) = 5 Ω; X_C(50 Ω side) = 50 / 3 = 16.667 Ω; Q₂ = √(12.5 / 5 − 1) = 1.2247;
-    // X_C(12.5 Ω side) = 12.5 / 1.2247 = 10.206 Ω; X_L = 5 × (3 + 1.2247) = 21.124 Ω; ω = 2π 7e6 = 43.982e6 rad/s;
+    // X_C(12.5 Ω side) = 12.5 / 1.2247 = 10.206 Ω; X_L = 5 × (3 + 1.2247) =
+    // 21.124 Ω; ω = 2π 7e6 = 43.982e6 rad/s;
     // C = 1 / (ω X): 1.3642 nF and 2.2278 nF; L = X / ω = 480.29 nH
     const n = piNetworkIdeal(12.5, 50, 7e6, 3);
     near(n.virtualOhm, 5, 1e-12, 'R_v');
@@ -44,7 +49,8 @@ describe('pi network design relations', () => {
   });
   it('a drain above the load puts the larger reactance (smaller C) at the drain: 200 Ω to 50 Ω, Q 3', () => {
     // Hand-worked: R_v = 200 / 10 = 20 Ω; X_C(drain) = 200 / 3 = 66.667 Ω; Q₂ = √(50/20 − 1) = 1.2247;
-    // X_C(load) = 50 / 1.2247 = 40.825 Ω; X_L = 20 (3 + 1.2247) = 84.495 Ω; at 7 MHz: 341.05 pF, 556.95 pF, 1.9211 µH
+    // X_C(load) = 50 / 1.2247 = 40.825 Ω; X_L = 20 (3 + 1.2247) = 84.495 Ω; at
+    // 7 MHz: 341.05 pF, 556.95 pF, 1.9211 µH
     const n = piNetworkIdeal(200, 50, 7e6, 3);
     near(n.drainShuntF, 341.05e-12, 0.05e-12, 'C drain');
     near(n.loadShuntF, 556.95e-12, 0.05e-12, 'C load');
@@ -62,14 +68,27 @@ describe.skipIf(!haveNgspice)('pi network in ngspice: the designed network prese
   for (const [rd, f] of [[12.5, 7.03e6], [3, 14.06e6], [200, 3.56e6]]) {
     it(`ideal parts, ${rd} Ω drain at ${f / 1e6} MHz into 50 Ω: input ≈ ${rd} Ω + j0`, () => {
       const n = piNetworkIdeal(rd, 50, f, Math.max(3, Math.sqrt(Math.max(rd, 50) / Math.min(rd, 50) - 1) + 1));
-      const [re, im] = spiceZ(`pi${rd}`, `C1 in 0 ${n.drainShuntF}\nL1 in out ${n.seriesH}\nC2 out 0 ${n.loadShuntF}\nR1 out 0 50`, 'in', '0', f);
+      const [re, im] = spiceZ(
+        `pi${rd}`,
+        `C1 in 0 ${n.drainShuntF}\nL1 in out ${n.seriesH}\nC2 out 0 ${n.loadShuntF}\nR1 out 0 50`,
+        'in',
+        '0',
+        f,
+      );
       expect(Math.abs(re - rd), `R ${re}`).toBeLessThan(toleranceOhm);
       expect(Math.abs(im), `X ${im}`).toBeLessThan(toleranceOhm);
     });
   }
-  it('built parts (E12 capacitors, turns on a 4.9 nH/t² core): ngspice agrees with the program’s built drain load', () => {
+  it('built parts (E12 capacitors, turns on a 4.9 nH/t² core): ngspice agrees with the program’s ' +
+    'built drain load', () => {
     const n = designPiNetwork(12.5, 50, 7.03e6, false, { alHPerTurn2: 4.9e-9, series: 'E12', pairs: true })!;
-    const [re, im] = spiceZ('built', `C1 in 0 ${n.builtDrainShuntF}\nL1 in out ${n.builtSeriesH}\nC2 out 0 ${n.builtLoadShuntF}\nR1 out 0 50`, 'in', '0', 7.03e6);
+    const [re, im] = spiceZ(
+      'built',
+      `C1 in 0 ${n.builtDrainShuntF}\nL1 in out ${n.builtSeriesH}\nC2 out 0 ${n.builtLoadShuntF}\nR1 out 0 50`,
+      'in',
+      '0',
+      7.03e6,
+    );
     near(re, n.builtDrainOhm![0], 1e-3 * 12.5, 'R built');
     near(im, n.builtDrainOhm![1], 1e-3 * 12.5, 'X built');
     // standard values only: every part's mantissa is in the IEC 60063 E12 list
@@ -85,7 +104,12 @@ describe.skipIf(!haveNgspice)('pi network in ngspice: the designed network prese
     const n = designPiNetwork(25, 50, 7.03e6, true, null)!;
     expect(n.form).toBe('balanced');
     const leg = n.ideal.seriesH / 2;
-    const body = [`C1 d1 d2 ${n.ideal.drainShuntF}`, `L1 d1 o1 ${leg}`, `L2 d2 o2 ${leg}`, `C2 o1 o2 ${n.ideal.loadShuntF}`, 'R1 o1 o2 50',
+    const body = [
+      `C1 d1 d2 ${n.ideal.drainShuntF}`,
+      `L1 d1 o1 ${leg}`,
+      `L2 d2 o2 ${leg}`,
+      `C2 o1 o2 ${n.ideal.loadShuntF}`,
+      'R1 o1 o2 50',
       // a DC path to ground for the floating balanced circuit (no effect at 1e9 Ω)
       'Rg1 d1 0 1e9', 'Rg2 d2 0 1e9'].join('\n');
     const [re, im] = spiceZ('balanced', body, 'd1', 'd2', 7.03e6);
@@ -95,7 +119,8 @@ describe.skipIf(!haveNgspice)('pi network in ngspice: the designed network prese
 });
 
 describe('class-E shunt capacitor', () => {
-  it('10 Ω at 7 MHz needs C1 = 0.1836 / (ωR) = 417.4 pF; with 150 pF of Coss add about 267 pF; usable to 19.48 MHz', () => {
+  it('10 Ω at 7 MHz needs C1 = 0.1836 / (ωR) = 417.4 pF; with 150 pF of Coss add about 267 pF; usable ' +
+    'to 19.48 MHz', () => {
     // Source: nominal class-E design C1 = 0.1836 / (ω R) (N. O. Sokal and A. D. Sokal, IEEE JSSC SC-10(3), 1975;
     // constant from memory). Hand-worked: ω R = 43.982e6 × 10 = 439.82e6; C1 = 0.1836 / 439.82e6 = 417.44 pF;
     // 417.44 − 150 = 267.44 pF; f_max = 0.1836 / (2π × 10 × 150e-12) = 0.1836 / 9.4248e-9 = 19.481 MHz
@@ -104,7 +129,8 @@ describe('class-E shunt capacitor', () => {
     near(s.maxFrequencyHz!, 19.481e6, 0.001e6, 'f max');
     expect(Math.abs(s.addF / 267.44e-12 - 1)).toBeLessThan(0.02);
   });
-  it('a device with more capacitance than the design needs: nothing to add, and its highest frequency is below f', () => {
+  it('a device with more capacitance than the design needs: nothing to add, and its highest ' +
+    'frequency is below f', () => {
     const s = classEShuntCapacitor(10, 7e6, 600e-12, 'E12')!;
     expect(s.addF).toBe(0);
     expect(s.addPartsF).toEqual([]);
@@ -114,7 +140,8 @@ describe('class-E shunt capacitor', () => {
 });
 
 describe('pi network finding', () => {
-  it('ok when the built parts land within 10 % and 0.2 R of the drain load; a caution beyond; the source names the form', async () => {
+  it('ok when the built parts land within 10 % and 0.2 R of the drain load; a caution beyond; the source ' +
+    'names the form', async () => {
     const { piFindings } = await import('../../../src/core/rf/pi-network');
     const n = designPiNetwork(12.5, 50, 7.03e6, false, { alHPerTurn2: 4.9e-9, series: 'E12', pairs: true })!;
     const f = piFindings(n, 'PA')[0];

@@ -22,7 +22,8 @@ describe('Butterworth prototype g-values', () => {
 });
 
 describe('Chebyshev prototype g-values', () => {
-  // Source: rfcafe.com reproduction of the Matthaei/Young/Jones Chebyshev tables, 4 decimals (REFERENCE-VALUES §1.3, [C])
+  // Source: rfcafe.com reproduction of the Matthaei/Young/Jones Chebyshev tables,
+  // 4 decimals (REFERENCE-VALUES §1.3, [C])
   const table: [number, number, number[]][] = [
     [0.01, 3, [0.6292, 0.9703, 0.6292]],
     [0.01, 5, [0.7563, 1.3049, 1.5773, 1.3049, 0.7563]],

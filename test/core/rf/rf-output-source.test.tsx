@@ -11,14 +11,16 @@ const report = evaluate(club30m);
 const json = JSON.parse(JSON.stringify(evaluationJson(club30m, report)));
 
 describe('evaluation JSON (club demo, push-pull class C, worst SWR 2)', () => {
-  it('per PA: the worst drain peak round the SWR circle with its load and phase, the highest of the 15° points', () => {
+  it('per PA: the worst drain peak round the SWR circle with its load and phase, the highest of ' +
+    'the 15° points', () => {
     const pa = json.rf.stages.find((s: { pa: unknown }) => s.pa).pa;
     const w = pa.swr.worstDrainPeak;
     expect(pa.swr.swr).toBe(2);
     for (const k of ['value', 'phaseDeg', 'loadReOhm', 'loadImOhm']) expect(typeof w[k], k).toBe('number');
     for (const p of pa.swr.points) expect(p.drainPeakV).toBeLessThanOrEqual(w.value + 1e-9);
   });
-  it('per harmonic: the band (best to worst end), the verdict on the worst end and the source the filter is judged from', () => {
+  it('per harmonic: the band (best to worst end), the verdict on the worst end and the source the filter ' +
+    'is judged from', () => {
     for (const h of json.rf.harmonics.rows) {
       expect(h.predictedBestDbc).toBeLessThanOrEqual(h.predictedDbc);
       expect(['ok', 'caution', 'fail']).toContain(h.severity);

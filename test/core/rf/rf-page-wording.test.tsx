@@ -18,7 +18,8 @@ describe('RF page wording on the demos', () => {
     expect(row).toMatch(/below -70 dBc to -?[\d.]+ dBc/);
     expect(h).not.toMatch(/limited by construction to/);
   });
-  it('club: the filter parts show the 15 mT flux limit and the 500 V, 3 A capacitor ratings; the AL is said once', async () => {
+  it('club: the filter parts show the 15 mT flux limit and the 500 V, 3 A capacitor ratings; the AL ' +
+    'is said once', async () => {
     const h = await html(club30m);
     expect(h).toContain('Limit / rating');
     expect(h).toContain('flux ≤ 15.0 mT');
@@ -26,7 +27,8 @@ describe('RF page wording on the demos', () => {
     expect(h).toMatch(/turns computed with AL 4\.9 nH\/turn²/);
     expect(h).not.toMatch(/\(AL [\d.]+ nH\/t²\) \(AL/);
   });
-  it('portable: the design-load drain peak is labelled with the highest supply, 14.4 V (a full LiFePO4 battery)', async () => {
+  it('portable: the design-load drain peak is labelled with the highest supply, 14.4 V (a full ' +
+    'LiFePO4 battery)', async () => {
     const h = await html(portable20m);
     expect(h).toMatch(
       /Peak drain voltage \/ device current \(design load\)<\/th><td>[\d.]+ V at the highest supply, 14\.4 V \/ /,

@@ -25,13 +25,17 @@ describe('filter plot', () => {
   it('places the 3f marker where the log axis puts 21.09 MHz', () => {
     const d = filterPlotData(report)!;
     const s = renderFilterPlot(d, 720, 380);
-    const f0 = d.sweep[0].frequencyHz, f1 = d.sweep[d.sweep.length - 1].frequencyHz;
-    const xExpected = 56 + ((Math.log10(3 * 7.03e6) - Math.log10(f0)) / (Math.log10(f1) - Math.log10(f0))) * (720 - 56 - 16);
+    const f0 = d.sweep[0].frequencyHz,
+      f1 = d.sweep[d.sweep.length - 1].frequencyHz;
+    const xExpected =
+      56 + ((Math.log10(3 * 7.03e6) - Math.log10(f0)) / (Math.log10(f1) - Math.log10(f0))) * (720 - 56 - 16);
     const m = [...s.matchAll(/class="harmonic" x1="([\d.]+)"/g)].map((x) => Number(x[1]));
     expect(m.some((x) => Math.abs(x - xExpected) < 0.1)).toBe(true);
   });
   it('is empty without an analysed filter', () => {
-    const r = evaluateRf(project({ stages: project().stages.filter((s) => s.kind !== 'lpf') }), { paRailV: { pa: 13.8 } });
+    const r = evaluateRf(project({ stages: project().stages.filter((s) => s.kind !== 'lpf') }), {
+      paRailV: { pa: 13.8 },
+    });
     expect(filterPlotSvg(r)).toBe('');
   });
 });

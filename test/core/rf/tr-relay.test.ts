@@ -37,35 +37,82 @@ describe('relay checks', () => {
     near(dotLengthS(20), 0.06, 1e-12, 'dot');
   });
   it('hot switching when the TX delay is shorter than operate + bounce', () => {
-    const r = evaluateRelay(relayParams({ txDelayS: 0.003 }), { powerW: 10, swr: 2, harmonicAmplitudeSum: 0.6, subject: 'T/R' });
+    const r = evaluateRelay(relayParams({ txDelayS: 0.003 }), {
+      powerW: 10,
+      swr: 2,
+      harmonicAmplitudeSum: 0.6,
+      subject: 'T/R',
+    });
     expect(r.findings.find((f) => f.rule === 'relay.hot-switch')?.severity).toBe('fail');
-    const ok = evaluateRelay(relayParams({ txDelayS: 0.008 }), { powerW: 10, swr: 2, harmonicAmplitudeSum: 0.6, subject: 'T/R' });
+    const ok = evaluateRelay(relayParams({ txDelayS: 0.008 }), {
+      powerW: 10,
+      swr: 2,
+      harmonicAmplitudeSum: 0.6,
+      subject: 'T/R',
+    });
     expect(ok.findings.find((f) => f.rule === 'relay.hot-switch')?.severity).toBe('ok');
   });
   it('before the filter the peak bound includes harmonics; isolation gives receiver power', () => {
-    const r = evaluateRelay(relayParams({ position: 'before-lpf', isolationDb: 30 }), { powerW: 10, swr: 2, harmonicAmplitudeSum: 0.6, subject: 'T/R' });
+    const r = evaluateRelay(relayParams({ position: 'before-lpf', isolationDb: 30 }), {
+      powerW: 10,
+      swr: 2,
+      harmonicAmplitudeSum: 0.6,
+      subject: 'T/R',
+    });
     near(r.peakWithHarmonicsV as number, lineMaxima(10, 50, 2).peakV * 1.6, 1e-9, 'bound');
     near(r.receiverPowerW, 0.01, 1e-12, '10 W - 30 dB');
   });
   it('coil loads per mode for the supply budget', () => {
-    const st: Stage = { id: 't', kind: 'tr', name: 'T/R', notes: '', loads: [], dissipationW: null, relay: relayParams() };
-    expect(relayCoilLoads(st)).toEqual({ ok: true, load: { railId: 'sig', currentA: { receive: 0, keyUp: 0.03, keyDown: 0.03 } } });
+    const st: Stage = {
+      id: 't',
+      kind: 'tr',
+      name: 'T/R',
+      notes: '',
+      loads: [],
+      dissipationW: null,
+      relay: relayParams(),
+    };
+    expect(relayCoilLoads(st)).toEqual({
+      ok: true,
+      load: { railId: 'sig', currentA: { receive: 0, keyUp: 0.03, keyDown: 0.03 } },
+    });
     expect(relayCoilLoads({ ...st, relay: undefined })).toEqual({ ok: true, load: null });
-    expect(relayCoilLoads({ ...st, relay: relayParams({ coilA: 0, coilRailId: null }) })).toEqual({ ok: true, load: null });
+    expect(relayCoilLoads({ ...st, relay: relayParams({ coilA: 0, coilRailId: null }) })).toEqual({
+      ok: true,
+      load: null,
+    });
   });
   it('a coil drawing current from no rail, from a missing rail, or with a refused current is a fail finding', () => {
-    const st: Stage = { id: 't', kind: 'tr', name: 'T/R', notes: '', loads: [], dissipationW: null, relay: relayParams() };
-    const subjects = (r: ReturnType<typeof relayCoilLoads>) => (r.ok ? [] : r.findings.map((f) => `${f.severity} ${f.subject}`));
-    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilRailId: null }) }))).toEqual(['fail T/R: relay coil rail']);
+    const st: Stage = {
+      id: 't',
+      kind: 'tr',
+      name: 'T/R',
+      notes: '',
+      loads: [],
+      dissipationW: null,
+      relay: relayParams(),
+    };
+    const subjects = (r: ReturnType<typeof relayCoilLoads>) =>
+      r.ok ? [] : r.findings.map((f) => `${f.severity} ${f.subject}`);
+    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilRailId: null }) }))).toEqual([
+      'fail T/R: relay coil rail',
+    ]);
     expect(subjects(relayCoilLoads(st, new Set(['other'])))).toEqual(['fail T/R: relay coil rail']);
-    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilA: -0.03 }) }))).toEqual(['fail T/R: relay coil current']);
-    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilA: NaN }) }))).toEqual(['fail T/R: relay coil current']);
+    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilA: -0.03 }) }))).toEqual([
+      'fail T/R: relay coil current',
+    ]);
+    expect(subjects(relayCoilLoads({ ...st, relay: relayParams({ coilA: NaN }) }))).toEqual([
+      'fail T/R: relay coil current',
+    ]);
   });
 });
 
 describe('relay DC contacts and isolation limits', () => {
   it('DC current above the switching rating fails; leakage above the receiver maximum fails', () => {
-    const r = evaluateRelay(relayParams({ dcSwitchedA: 1.5, contactSwitchA: 1, isolationDb: 20, receiverMaxInputW: 0.02 }), { powerW: 10, swr: 1.5, harmonicAmplitudeSum: 0, subject: 'T/R' });
+    const r = evaluateRelay(
+      relayParams({ dcSwitchedA: 1.5, contactSwitchA: 1, isolationDb: 20, receiverMaxInputW: 0.02 }),
+      { powerW: 10, swr: 1.5, harmonicAmplitudeSum: 0, subject: 'T/R' },
+    );
     expect(r.findings.find((f) => f.rule === 'relay.dc-contacts')?.severity).toBe('fail');
     // 10 W - 20 dB = 100 mW > 20 mW
     near(r.receiverPowerW, 0.1, 1e-12, 'leak');
