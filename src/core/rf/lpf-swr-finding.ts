@@ -35,7 +35,8 @@ export function lpfSwrFinding(d: LpfDesign, a: LpfAnalysis, subject: string): Fi
   const partsWorse = built > allowed * 1.005;
   const byDesign = des.rippleMax !== null
     ? `A ${d.rippleDb} dB-ripple Chebyshev filter reaches ${des.rippleMax.toFixed(2)} at its ripple peaks by design ` +
-      `(|Γ|² = 1 − 10^(−ripple/10)); with its design values this one gives ${des.bandMax.toFixed(2)} across the band.`
+      `(|Γ|² = 1 − 10^(−ripple/10)); with its design values this one gives ${des.bandMax.toFixed(2)} ` +
+      `across the band.`
     : `With its design values the filter gives ${des.bandMax.toFixed(2)} across the band.`;
   const severity = built > LPF_SWR_FAIL ? 'fail' : built > LPF_SWR_CAUTION && partsWorse ? 'caution' : 'ok';
   const message = built <= LPF_SWR_CAUTION

@@ -99,9 +99,11 @@ describe("the filter's own SWR finding against its design (lpf-swr-finding)", ()
     expect(f.severity).toBe('ok');
     expect(f.value!).toBeLessThanOrEqual(1.35536 * 1.0001);
   });
-  it('C1 at five times its value: a shunt of about −j10 Ω at the input swamps 50 Ω, SWR far above 2: a fail', () => {
-    // C1 ≈ 300 pF × 5 = 1.5 nF: 1/(2π · 10 MHz · 1.5 nF) ≈ 10.6 Ω. Across the rest of the ladder (about 50 Ω):
-    // 50 ∥ −j10.6 = 2.15 − j10.14 Ω, z = 0.043 − j0.203, |Γ| = |z − 1|/|z + 1| = 0.978/1.063 = 0.92, SWR ≈ 24
+  it('C1 at five times its value: a shunt of about −j10 Ω at the input swamps 50 Ω, SWR far ' +
+    'above 2: a fail', () => {
+    // C1 ≈ 300 pF × 5 = 1.5 nF: 1/(2π · 10 MHz · 1.5 nF) ≈ 10.6 Ω. Across the rest of the ladder
+    // (about 50 Ω): 50 ∥ −j10.6 = 2.15 − j10.14 Ω, z = 0.043 − j0.203,
+    // |Γ| = |z − 1|/|z + 1| = 0.978/1.063 = 0.92, SWR ≈ 24
     const d = exact();
     d.elements[0] = { ...d.elements[0], builtValue: 5 * d.elements[0].idealValue };
     const f = lpfSwrFinding(d, analyseLpf(d, 11), 'LPF');
