@@ -92,4 +92,15 @@ describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
   it('portable with a clamp: the pack names the fitted clamp and what it does at the design and the worst load', () => {
     expect(net).toMatch(/Drain clamp 56 V fitted; design load: [^;]+; worst load \([^)]*reflection phase \d+°\)\)?: /);
   });
+  it('club: the PA output says where each figure is (at the PA or the antenna connector; design load, as built)',
+    () => {
+    // wording only: the figures are the program's own, so any number stands in their place
+    expect(club).toMatch(new RegExp(String.raw`Output [\d.]+ W \([\d.]+ dBm\) at the PA into its design load at ` +
+      String.raw`[\d.]+ V; [\d.]+ W at the antenna connector after the filter's [\d.]+ dB loss`));
+    expect(club).toMatch(new RegExp(String.raw`Matched antenna through the filter as built the PA sees [^(]*` +
+      String.raw`\(filter input SWR [\d.]+\): [\d.]+ W \([\d.]+ W into the design load\)`));
+    expect(club).toMatch(/efficiency 70 % \(class default, common practice\)/);
+    expect(club).toContain('(chosen from the band)');
+    expect(club).toMatch(/Phase is the angle of the antenna's reflection coefficient/);
+  });
 });

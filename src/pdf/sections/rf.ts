@@ -20,18 +20,25 @@ const loadText = (w: Worst) =>
     : `antenna ${ohmText(w.antennaReOhm, w.antennaImOhm)}${w.phaseDeg === null ? ' (matched)' : `, phase ` +
       `${w.phaseDeg.toFixed(0)}°`}; at the PA ${ohmText(w.loadReOhm, w.loadImOhm)}`;
 
-/** Worst drain peak, current, dissipation and the output range round the SWR circle, each with its load. */
-function swrText(s: PaSwrStress): string {
+/**
+ * Worst drain peak, current, dissipation and the output range round the SWR circle, each with its load; then where
+ * the loads are, at which supplies, and what "phase" means.
+ */
+function swrText(s: PaSwrStress, maxRailV: number, hotRailV: number): string {
+  const where = s.circleAt === 'antenna'
+    ? 'Each antenna load on the circle (every 15°) is taken through the low-pass filter as built to the PA'
+    : "No low-pass filter is known, so the circle (every 15°) is placed at the PA's output";
+  const supplies = maxRailV > hotRailV
+    ? `drain peaks at the highest supply, ${fv(maxRailV, 'V')}, the rest at the highest key-down supply, ` +
+      `${fv(hotRailV, 'V')}`
+    : `all at the highest supply, ${fv(maxRailV, 'V')}`;
   return (
     `drain peak ${fv(s.worstDrainPeak.value, 'V')} (${loadText(s.worstDrainPeak)}); ` +
     `current ${fv(s.worstPeakCurrent.value, 'A')} (${loadText(s.worstPeakCurrent)}); ` +
     `dissipation ${fv(s.worstDissipation.value, 'W')} (${loadText(s.worstDissipation)}); ` +
-    `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}` +
-    (s.designLoad
-      ? `; circle at the antenna through the filter as built, which presents ` +
-        `${ohmText(s.designLoad.loadReOhm, s.designLoad.loadImOhm)} to the PA with a matched antenna (input SWR ` +
-        `${s.designLoad.inputSwr.toFixed(2)})`
-      : '; circle at the PA output (no low-pass filter known)')
+    `output ${fv(s.minOutput.value, 'W')} to ${fv(s.maxOutput.value, 'W')}. ${where}; ${supplies}. Phase is the ` +
+    `angle of the ${s.circleAt === 'antenna' ? "antenna's" : "load's"} reflection coefficient (0° the highest ` +
+    'resistance, 180° the lowest).'
   );
 }
 
@@ -52,6 +59,13 @@ function waveformLine(w: PaWaveformSummary, keyDownA: number): string {
   );
 }
 
+/** The PA's design output at the antenna connector, after the filter's loss (for the report's own PA). */
+function afterFilter(rf: RfReport, stageId: string): { outputW: number; lossDb: number } | null {
+  if (stageId !== rf.paStageId || rf.lpfStageId === null) return null;
+  const lossDb = rf.stages.find((x) => x.stageId === rf.lpfStageId)?.lpf?.analysis?.atOperating.lossDb;
+  return lossDb === undefined ? null : { outputW: rf.outputPowerW, lossDb };
+}
+
 export function rfSection(l: Layout, rf: RfReport | null): void {
   l.heading('RF design');
   if (!rf) return notComputed(l, 'RF design');
@@ -64,20 +78,24 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       });
     } else if (s.pa) {
       const p = s.pa;
+      const after = afterFilter(rf, s.stageId);
       l.heading(`${s.stageName}: final amplifier`, 2);
       keyValues(
         l,
         [
           [
             'Output',
-            `${fv(p.outputW, 'W')} (${fv(p.outputDbm, 'dBm')}), ${fv(p.vsReferenceDb, 'dB')} vs. reference ` +
-              `(${p.vsReferenceSUnits.toFixed(1)} S-units)`,
+            `${fv(p.outputW, 'W')} (${fv(p.outputDbm, 'dBm')}) at the PA into its design load at ${fv(p.railV, 'V')}` +
+              (after ? `; ${fv(after.outputW, 'W')} at the antenna connector after the filter's ` +
+                `${fv(after.lossDb, 'dB')} loss` : '') +
+              `; ${fv(p.vsReferenceDb, 'dB')} vs. reference (${p.vsReferenceSUnits.toFixed(1)} S-units)`,
           ],
           [
             'Supply',
             `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')} budgeted (saturated drive), ` +
               `DC input ${fv(p.dcInputW, 'W')} at the design drive, ` +
-              `efficiency ${Math.round(p.efficiency * 100)} % (${p.efficiencySource})`,
+              `efficiency ${Math.round(p.efficiency * 100)} % ` +
+              `(${p.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'})`,
           ],
           ...(p.waveform ? [['Waveform', waveformLine(p.waveform, p.keyDownCurrentA)] as [string, string]] : []),
           [
@@ -88,14 +106,28 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
           ],
           [
             'Device stress',
-            `peak drain ${fv(p.peakDrainV, 'V')}, peak current ${fv(p.peakDeviceA, 'A')} into the design load` +
-              (p.swr?.designLoad
-                ? `; with a matched antenna, through the filter as built, ${fv(p.swr.designLoad.drainPeakV, 'V')}, ` +
-                  `${fv(p.swr.designLoad.peakDeviceA, 'A')} and ${fv(p.swr.designLoad.outputW, 'W')} into ` +
-                  `${ohmText(p.swr.designLoad.loadReOhm, p.swr.designLoad.loadImOhm)}`
-                : ''),
+            `into the design load: peak drain ${fv(p.peakDrainV, 'V')}` +
+              (p.maxRailV > p.railV ? ` at the highest supply, ${fv(p.maxRailV, 'V')}` : '') +
+              `, peak current ${fv(p.peakDeviceA, 'A')} at ${fv(p.railV, 'V')}`,
           ],
-          ...(p.swr && p.swr.swr > 1 ? [['At SWR ' + p.swr.swr, swrText(p.swr)] as [string, string]] : []),
+          ...(p.swr?.designLoad
+            ? [
+                [
+                  'Matched antenna',
+                  `through the filter as built the PA sees ` +
+                    `${ohmText(p.swr.designLoad.loadReOhm, p.swr.designLoad.loadImOhm)} (filter input SWR ` +
+                    `${p.swr.designLoad.inputSwr.toFixed(2)}): ${fv(p.swr.designLoad.outputW, 'W')} ` +
+                    `(${fv(p.hotOutputW, 'W')} into the design load), peak drain ` +
+                    `${fv(p.swr.designLoad.drainPeakV, 'V')}, peak current ${fv(p.swr.designLoad.peakDeviceA, 'A')}` +
+                    (p.maxRailV > p.hotRailV
+                      ? ` (drain peak at ${fv(p.maxRailV, 'V')}, the rest at ${fv(p.hotRailV, 'V')} key-down)`
+                      : ` (at ${fv(p.maxRailV, 'V')})`),
+                ] as [string, string],
+              ]
+            : []),
+          ...(p.swr && p.swr.swr > 1
+            ? [[`At SWR ${p.swr.swr}`, swrText(p.swr, p.maxRailV, p.hotRailV)] as [string, string]]
+            : []),
           ...(p.clamp ? [['Drain clamp', clampText(p.clamp)] as [string, string]] : []),
           [
             'Heat',
@@ -118,7 +150,9 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       } else {
         l.text(
           `${d.response === 'chebyshev' ? `Chebyshev, ${d.rippleDb} dB ripple` : 'Butterworth'}, order ${d.order}, ` +
-            `${d.form}; cutoff ${fv(d.cutoffHz, 'Hz')} (${d.cutoffSource}); ${fv(d.r0Ohm, 'Ω')}. Core: ${d.coreName}` +
+            `${d.form}; cutoff ${fv(d.cutoffHz, 'Hz')} ` +
+            `(${d.cutoffSource === 'entered' ? 'entered' : 'chosen from the band'}); ${fv(d.r0Ohm, 'Ω')}. ` +
+            `Core: ${d.coreName}` +
             `. Shunt capacitors see up to ${fv(s.lpf.capacitorPeakV, 'V')} peak.`,
           { sizePt: 8.5, afterPt: 5 },
         );
