@@ -11,7 +11,7 @@ import { monteCarloLpf } from './lpf-monte-carlo';
 import { validateRfInputs, validateRfSettings } from './lpf-validate';
 import { evaluatePa } from './pa';
 import { spectrumFindings } from './pa-spectrum-findings';
-import { clipEstimateFinding, clipEstimates, foldClipping } from './pa-clip';
+import { clipEstimateFinding, clipEstimates, clipOverdrive, foldClipping } from './pa-clip';
 import { classEOverLoads } from './class-e-loads';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
@@ -408,10 +408,12 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
         () => ({ re: swrWorst * l.r0Ohm, im: 0 }));
       const rej = (rows: { n: number; relativeAttenuationDb: number }[]) => (n: number) =>
         rows.find((r) => r.n === n)?.relativeAttenuationDb ?? null;
-      const folded = foldClipping(spectrum.bands, swrWorst, rej(sourced.rows), rej(clipped));
+      // the flat top at the largest load the stage meets (through the filter it can exceed the SWR; pa-clip)
+      const overdrive = clipOverdrive(swrWorst, paRes?.swr);
+      const folded = foldClipping(spectrum.bands, overdrive, rej(sourced.rows), rej(clipped));
       // beside the flat-topped upper end: the stage balanced against the filter at reflection phase 0 (pa-swr)
       const ratios = paRes?.swr?.clip?.drainHarmonicsAtPhase0;
-      const est = ratios ? clipEstimates(folded, ratios, swrWorst, rej(clipped)) : [];
+      const est = ratios ? clipEstimates(folded, ratios, overdrive, rej(clipped)) : [];
       const note = paStage ? clipEstimateFinding(est, swrWorst, l.r0Ohm, paStage.name) : null;
       if (note) all.push(note);
       return folded;

@@ -1,5 +1,6 @@
 // A class B/C stage driven into a load above its design load: the drain voltage flat-topped at the rail limits.
-// Its harmonics, at the most-clipping load of the SWR circle, folded into the worst end of the PA's harmonic bands.
+// Its harmonics, at the most-clipping load the stage meets (clipOverdrive), folded into the worst end of the PA's
+// harmonic bands.
 import { clippedSineCoefficient } from './pa-fourier';
 import { MIN_DBC, type HarmonicBand } from './pa-spectrum';
 import { CONSTRUCTION_FLOOR_DBC } from './harmonics';
@@ -13,6 +14,17 @@ import type { Finding } from '../findings';
 export function clippedHarmonicDbc(n: number, overdrive: number): number {
   const r = Math.abs(clippedSineCoefficient(n, overdrive) / clippedSineCoefficient(1, overdrive));
   return r > 10 ** (MIN_DBC / 20) ? 20 * Math.log10(r) : MIN_DBC;
+}
+
+/**
+ * The overdrive the fold takes: the largest |z| over the design load of the loads the stage meets when the sweep
+ * drew the circle at the antenna (through the filter; the portable demo's filter turns SWR 2 into 2.9), else the SWR
+ * (the circle at the PA's output, whose largest |z| is the SWR: z = (1 + |Γ|)/(1 − |Γ|) at phase 0).
+ */
+export function clipOverdrive(
+  swr: number, sweep: { circleAt: 'antenna' | 'pa-output'; maxLoadRatio: number } | null | undefined,
+): number {
+  return sweep && sweep.circleAt === 'antenna' && Number.isFinite(sweep.maxLoadRatio) ? sweep.maxLoadRatio : swr;
 }
 
 /** Filter rejection of harmonic n (relative to the fundamental, dB), null when unknown. */

@@ -85,6 +85,12 @@ export interface PaSwrStress {
      * resistance (reflection phase 0, the load that clips the stage most); null when not balanced there. */
     drainHarmonicsAtPhase0: number[] | null;
   } | null;
+  /**
+   * The largest |z| over the design load among the loads the stage meets: with the filter known, its input impedance
+   * for the antenna at its design load and every degree round the circle (it can exceed the SWR); at the PA's output
+   * the circle's own largest (the SWR at phase 0).
+   */
+  maxLoadRatio: number;
   /** Points every 15 degrees (for a table or plot). */
   points: SwrPoint[];
   worstDrainPeak: Worst;
@@ -401,9 +407,14 @@ export function swrStress(
         ? { ringMargin: true, ringMarginFraction: best.ringMarginFraction ?? CLIP_RING_MARGIN } : {}),
     };
   };
+  // the largest load the stage meets: through the filter every degree (its input impedance alone, cheap), else the
+  // circle's own largest, the SWR at phase 0
+  const fine = through && filterLoads ? filterLoads(STEPS).map((l) => norm(l.input)) : null;
+  const mags = (fine ?? (design ? [...zs, design] : zs)).map((z) => Math.hypot(z.re, z.im));
   return {
     swr,
     circleAt: through ? 'antenna' : 'pa-output',
+    maxLoadRatio: Math.max(...mags),
     designLoad,
     model: cls === 'E' ? 'class-e-simulated' : 'load-line',
     classETurnOnRatio: ref ? worstTurnOn : null,

@@ -1,11 +1,16 @@
 // The clipped class B/C stage's harmonics (src/core/rf/pa-clip.ts), worked by hand from the clipped-sinusoid Fourier
 // series (saturation describing function, Gelb & Vander Velde 1968, from memory) and the square-wave series (textbook).
 import { describe, expect, it } from 'vitest';
-import { clipEstimateFinding, clipEstimates, clippedHarmonicDbc, foldClipping } from '../../../src/core/rf/pa-clip';
+import {
+  clipEstimateFinding, clipEstimates, clippedHarmonicDbc, clipOverdrive, foldClipping,
+} from '../../../src/core/rf/pa-clip';
+import { swrStress } from '../../../src/core/rf/pa-swr';
+import type { FilterLoad } from '../../../src/core/rf/class-e-loads';
+import { ladderInputOhm } from '../../helpers/ngspice';
 import { MIN_DBC, type HarmonicBand } from '../../../src/core/rf/pa-spectrum';
 import { evaluateRf } from '../../../src/core/rf/evaluate-rf';
 import { harmonicsFromSource, ladderOf } from '../../../src/core/rf/lpf-analysis';
-import { project, rfSettings } from './fixture';
+import { lpfParams, project, rfSettings } from './fixture';
 import { near } from './helpers';
 
 describe('clippedHarmonicDbc', () => {
@@ -45,21 +50,76 @@ describe('foldClipping keeps the level at the antenna: worst = max(worst, clippe
   });
 });
 
+describe('clipOverdrive: the largest load the stage meets through the filter, not the SWR', () => {
+  // hand case: a "filter" whose input is 50 Ω for the antenna at its design load, 100 Ω at phase 0 and 145 Ω at one
+  // phase (|z| = 2.9 over the 50 Ω design load: above the SWR of 2), 50 + j20 Ω elsewhere
+  const loads = (phases: number): FilterLoad[] => [
+    { phaseDeg: null, antenna: { re: 50, im: 0 }, input: { re: 50, im: 0 } },
+    ...Array.from({ length: phases }, (_, i): FilterLoad => ({
+      phaseDeg: (360 * i) / phases, antenna: { re: 50, im: 0 },
+      input: i === 0 ? { re: 100, im: 0 } : i === 7 ? { re: 145, im: 0 } : { re: 50, im: 20 },
+    })),
+  ];
+  const m = { drainPeakV: 27.3, maxRailV: 13.8, peakDeviceA: 1, outputW: 5, dcInputW: 7, biasW: 0 };
+  const through = swrStress('D', m, 2, 50, 0, loads);
+  it('the sweep keeps the largest |z| it meets: 145 / 50 = 2.9', () => {
+    expect(through.circleAt).toBe('antenna');
+    near(through.maxLoadRatio, 2.9, 1e-12, '|z| max');
+    near(clipOverdrive(2, through), 2.9, 1e-12, 'overdrive through the filter');
+  });
+  it('with the circle at the PA\'s output (or no sweep) the SWR itself: |z| = S at phase 0', () => {
+    const own = swrStress('D', m, 2, 50);
+    near(own.maxLoadRatio, 2, 1e-12, '|z| max on the circle');
+    expect(clipOverdrive(2, own)).toBe(2);
+    expect(clipOverdrive(2, null)).toBe(2);
+  });
+  it('the fold at 2.9: b3/b1 = 0.28136, −11.015 dBc (β = asin(1/2.9) = 20.171°, by hand)', () => {
+    // Source: clipped-sinusoid series (Gelb & Vander Velde 1968, from memory): b1 = (2A/π)(β + sin β cos β) =
+    // 1.24754, b3 = (4/π)((A/2)(sin 2β/2 − sin 4β/4) + cos 3β/3) = 0.35101 at A = 2.9 (worked on a calculator)
+    const band: HarmonicBand = { n: 3, bestDbc: -50, worstDbc: -40, basis: 'cosine-pulse' };
+    const f = foldClipping([band], clipOverdrive(2, through), () => 50, () => 40)[0];
+    near(f.worstDbc, -11.015 - 40 + 50, 2e-3, '3rd worst');
+  });
+});
+
 describe('evaluateRf folds the clipped class-C push-pull stage into the harmonic rows at the worst SWR', () => {
   const at = (worstSwr: number) => evaluateRf(project({ rf: rfSettings({ worstSwr }) }), { paRailV: { pa: 13.8 } });
   it('SWR 1: no load above the design load, no clipped basis', () => {
     expect(at(1).harmonics!.rows.some((x) => x.paLevelBasis === 'clipped-at-swr')).toBe(false);
   });
-  it('SWR 2: the 3rd at the antenna, clipped swing (−12.905 dBc by hand) less the filter from a stiff source', () => {
-    const r = at(2);
+  it('SWR 2: the 3rd at the antenna, the clipped swing at the largest load through the filter, less the filter', () => {
+    // the filter nearly lossless (Q 10⁴ and 10⁵), so that its input impedance is the lossless chain's below
+    const p = project({ rf: rfSettings({ worstSwr: 2 }) });
+    const stages = p.stages.map((st) => (st.kind === 'lpf'
+      ? { ...st, lpf: lpfParams({ inductorQ: 10000, capacitorQ: 100000 }) } : st));
+    const r = evaluateRf({ ...p, stages }, { paRailV: { pa: 13.8 } });
     const row = r.harmonics!.rows.find((x) => x.n === 3)!;
     expect(row.paLevelBasis).toBe('clipped-at-swr');
     const lpf = r.stages.find((x) => x.kind === 'lpf')!.lpf!;
     const l = ladderOf(lpf.design!);
+    // the largest |z| the PA meets: the filter's (lossless) input impedance for the antenna round the SWR 2 circle,
+    // every degree, over the 50 Ω design load (chain of the ladder's elements, circuit theory; test/helpers/ngspice)
+    const w = 2 * Math.PI * r.frequencyHz;
+    let hand = 1;
+    for (let ph = 0; ph < 360; ph++) {
+      const g = { re: (1 / 3) * Math.cos((ph * Math.PI) / 180), im: (1 / 3) * Math.sin((ph * Math.PI) / 180) };
+      // z = (1 + Γ)/(1 − Γ), |Γ| = (2 − 1)/(2 + 1) (definitions of SWR and the reflection coefficient)
+      const d = (1 - g.re) ** 2 + g.im ** 2;
+      const zl = { re: (50 * (1 - g.re ** 2 - g.im ** 2)) / d, im: (50 * 2 * g.im) / d };
+      const zin = ladderInputOhm(lpf.design!, zl, w);
+      hand = Math.max(hand, Math.hypot(zin.re, zin.im) / 50);
+    }
+    const paSwr = r.stages.find((x) => x.kind === 'final')!.pa!.swr!;
+    near(paSwr.maxLoadRatio, hand, 1e-3 * hand, 'largest |z| through the filter');
+    // the flat top's 3rd there (clipped-sinusoid series, Gelb & Vander Velde 1968, from memory; β = asin(1/A))
+    const a = paSwr.maxLoadRatio;
+    const beta = Math.asin(1 / a);
+    const b1 = ((2 * a) / Math.PI) * (beta + Math.sin(beta) * Math.cos(beta));
+    const b3 = (4 / Math.PI) * ((a / 2) * (Math.sin(2 * beta) / 2 - Math.sin(4 * beta) / 4) + Math.cos(3 * beta) / 3);
     // the filter's own rejection from a zero-impedance source into 2 x 50 Ω (lpf-analysis, checked in its own tests)
     const stiff = () => ({ re: 0, im: 0 });
     const rej = harmonicsFromSource(l, r.frequencyHz, 'thevenin', stiff, [3], () => ({ re: 100, im: 0 }));
-    near(row.predictedDbc, -12.905 - rej[0].relativeAttenuationDb, 1e-3, '3rd at the antenna');
+    near(row.predictedDbc, 20 * Math.log10(Math.abs(b3 / b1)) - rej[0].relativeAttenuationDb, 1e-3, '3rd at antenna');
     expect(row.predictedDbc).toBeGreaterThan(at(1).harmonics!.rows.find((x) => x.n === 3)!.predictedDbc);
   });
 });
