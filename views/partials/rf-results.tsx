@@ -98,8 +98,12 @@ const PaTable: FC<{ name: string; pa: PaResult; after: AfterFilter | null }> = (
           [
             'DC input / key-down current',
             // the budget carries the band's most (keyDownCurrentA); the design drive's is shown beside it
-            `${fv(pa.keyDownCurrentA, 'A')} budgeted: the most over the band (hard saturation, where the harmonics ` +
-              `are judged; bias idle included)` +
+            `${fv(pa.keyDownCurrentA, 'A')} budgeted: the most over the band, at hard saturation where the ` +
+              'harmonics are judged' +
+              (pa.waveform && pa.keyDownCurrentA > pa.waveform.bandMaxCurrentA
+                ? ` (${fv(pa.waveform.bandMaxCurrentA, 'A')} for the RF and ` +
+                  `${fv(pa.keyDownCurrentA - pa.waveform.bandMaxCurrentA, 'A')} bias idle)`
+                : '') +
               `${
                 pa.waveform
                   ? `; at the design drive ${fv(

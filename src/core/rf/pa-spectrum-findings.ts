@@ -80,11 +80,13 @@ export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext
       unit: 'A',
       source: 'pa.waveform-dc',
       message:
-        `${what} the stage draws up to ${a2(c.band.bandMaxCurrentA)} key-down (RF part) and gives up to ` +
-        `${w1(c.band.bandMaxOutputW)}; at its design drive it draws ${a2(c.band.designCurrentA)} for ` +
-        `${w1(c.designOutputW)}. The supply budget carries the higher ${a2(c.band.bandMaxCurrentA)} (the supply page ` +
-        'sizes the rail, its fuses and the transformer for it); drive the stage no harder than its design point ' +
-        'needs: the extra power comes with the worst harmonics and more heat.' });
+        `${what} the stage gives up to ${w1(c.band.bandMaxOutputW)} and draws up to ` +
+        `${a2(c.band.bandMaxCurrentA)} key-down for the RF (${a2(c.band.bandMaxCurrentA + pa.biasIdleMaxA)} with ` +
+        `the bias idle current); at its design drive ${w1(c.designOutputW)} for ${a2(c.band.designCurrentA)}. The ` +
+        `supply budget carries the ${a2(c.band.bandMaxCurrentA + pa.biasIdleMaxA)} (the supply page sizes the ` +
+        'rail, its fuses and the transformer for it), but the filter, relay and RF-exposure checks take the design ' +
+        "drive's output: set the drive no higher than the design point needs; the extra power comes with the worst " +
+        'harmonics and more heat.' });
   }
   if (w.model === 'cosine-pulse') {
     f.push({
