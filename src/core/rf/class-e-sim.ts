@@ -52,7 +52,7 @@ function mul(a: M, b: M): M {
   return c;
 }
 
-/** Matrix exponential by scaling and squaring with a Taylor series (Moler and Van Loan, SIAM Review 1978, method 3). */
+/** Matrix exponential by scaling and squaring with a Taylor series (Moler, Van Loan, SIAM Review 1978, method 3). */
 function expm(a: M): M {
   const n = a.length;
   const norm = Math.max(...a.map((r) => r.reduce((s, x) => s + Math.abs(x), 0)));
@@ -116,24 +116,53 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
     [-1 / lCh, 0, 0, 0, 1 / lCh],
     [0, 0, 0, 0, 0],
   ].map((r) => r.map((x) => x * dt)));
-  // the two pieces as flat row-major arrays, and one step x' = P x into a second buffer (no allocation per step; the
-  // sums run in the same order as a row-by-row dot product, so the results are those of the plain matrix product)
+  // the two pieces as flat row-major arrays. The last state (the constant 1) stays 1 exactly: the pieces' last row is
+  // [0 0 0 0 1] (the Taylor terms of a zero row are zero), so only the first four rows are stepped, in the order of a
+  // row-by-row dot product (p[o + 4] * 1 is p[o + 4] exactly): the results are those of the plain matrix product
   const flat = (p: M) => Float64Array.from(p.flat());
   const on = flat(piece(1 / rds));
   const off = flat(piece(0));
-  let x = Float64Array.from([1, 0, 0, 0, 1]);
-  let nx = new Float64Array(5);
-  const step = (p: Float64Array) => {
-    for (let i = 0; i < 5; i++) {
-      const o = 5 * i;
-      nx[i] = 0 + p[o] * x[0] + p[o + 1] * x[1] + p[o + 2] * x[2] + p[o + 3] * x[3] + p[o + 4] * x[4];
+  const x = Float64Array.from([1, 0, 0, 0, 1]);
+  const onSteps = duty * STEPS;
+  // one cycle from x (advanced in place), returning its peak drain voltage; with `stats` also the cycle's figures
+  const cycle = (stats: ClassEResult | null): number => {
+    let x0 = x[0], x1 = x[1], x2 = x[2], x3 = x[3];
+    let vPk = -Infinity, iPk = 0, pOut = 0, iDc = 0;
+    const a = new Array<number>(HARMONICS).fill(0);
+    const b = new Array<number>(HARMONICS).fill(0);
+    for (let k = 0; k < STEPS; k++) {
+      // switch on for the first `duty` of the cycle; the body diode conducts whenever the drain goes below 0
+      const conducting = k < onSteps || x0 < 0;
+      // the shunt capacitor's discharge at a hard turn-on (5 Rds C1) is left out of the peak: wiring inductance,
+      // not Rds(on) alone, limits that spike; its energy stays in the dissipation
+      if (stats && conducting && k * dt > 5 * rds * c1) iPk = Math.max(iPk, Math.abs(x0 / rds));
+      const p = conducting ? on : off;
+      const n0 = 0 + p[0] * x0 + p[1] * x1 + p[2] * x2 + p[3] * x3 + p[4];
+      const n1 = 0 + p[5] * x0 + p[6] * x1 + p[7] * x2 + p[8] * x3 + p[9];
+      const n2 = 0 + p[10] * x0 + p[11] * x1 + p[12] * x2 + p[13] * x3 + p[14];
+      const n3 = 0 + p[15] * x0 + p[16] * x1 + p[17] * x2 + p[18] * x3 + p[19];
+      x0 = n0; x1 = n1; x2 = n2; x3 = n3;
+      vPk = Math.max(vPk, x0);
+      if (stats) {
+        pOut += rl * x1 * x1;
+        iDc += x3;
+        for (let h = 0; h < HARMONICS; h++) {
+          a[h] += x1 * COS_T[h * STEPS + k];
+          b[h] += x1 * SIN_T[h * STEPS + k];
+        }
+      }
     }
-    const t = x;
-    x = nx;
-    nx = t;
+    if (stats) {
+      const mag = a.map((ah, h) => Math.hypot(ah, b[h]));
+      Object.assign(stats, {
+        drainPeakRatio: vPk, switchPeakRatio: iPk, outputRatio: pOut / STEPS, dcInputRatio: iDc / STEPS,
+        loadHarmonics: mag.map((m) => m / mag[0]),
+      });
+    }
+    x[0] = x0; x[1] = x1; x[2] = x2; x[3] = x3;
+    return vPk;
   };
-  let prevPeak = Number.NaN;
-  let res: ClassEResult = {
+  const res: ClassEResult = {
     drainPeakRatio: 0,
     switchPeakRatio: 0,
     outputRatio: 0,
@@ -142,34 +171,20 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
     cycles: 0,
     loadHarmonics: [],
   };
-  const cosT = COS_T;
-  const sinT = SIN_T;
+  // the figures are those of the last cycle run: each cycle runs for its peak alone, and the last one again from its
+  // saved start with its figures (the same arithmetic from the same state, so the same numbers)
+  const saved = new Float64Array(5);
+  let prevPeak = Number.NaN;
   for (let cyc = 1; cyc <= MAX_CYCLES; cyc++) {
-    let vPk = -Infinity, iPk = 0, pOut = 0, iDc = 0;
-    const a = new Array<number>(HARMONICS).fill(0);
-    const b = new Array<number>(HARMONICS).fill(0);
-    const turnOn = x[0];
-    for (let k = 0; k < STEPS; k++) {
-      // switch on for the first `duty` of the cycle; the body diode conducts whenever the drain goes below 0
-      const conducting = k < duty * STEPS || x[0] < 0;
-      // the shunt capacitor's discharge at a hard turn-on (5 Rds C1) is left out of the peak: wiring inductance,
-      // not Rds(on) alone, limits that spike; its energy stays in the dissipation
-      if (conducting && k * dt > 5 * rds * c1) iPk = Math.max(iPk, Math.abs(x[0] / rds));
-      step(conducting ? on : off);
-      vPk = Math.max(vPk, x[0]);
-      pOut += rl * x[1] * x[1];
-      iDc += x[3];
-      for (let h = 0; h < HARMONICS; h++) {
-        a[h] += x[1] * cosT[h * STEPS + k];
-        b[h] += x[1] * sinT[h * STEPS + k];
-      }
+    saved.set(x);
+    const vPk = cycle(null);
+    if ((cyc > 20 && Math.abs(vPk - prevPeak) < 1e-6 * Math.abs(vPk)) || cyc === MAX_CYCLES) {
+      x.set(saved);
+      res.turnOnRatio = x[0];
+      res.cycles = cyc;
+      cycle(res);
+      break;
     }
-    const mag = a.map((ah, h) => Math.hypot(ah, b[h]));
-    res = {
-      drainPeakRatio: vPk, switchPeakRatio: iPk, outputRatio: pOut / STEPS, dcInputRatio: iDc / STEPS,
-      turnOnRatio: turnOn, cycles: cyc, loadHarmonics: mag.map((m) => m / mag[0]),
-    };
-    if (cyc > 20 && Math.abs(vPk - prevPeak) < 1e-6 * Math.abs(vPk)) break;
     prevPeak = vPk;
   }
   return res;
