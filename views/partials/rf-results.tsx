@@ -495,7 +495,7 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
       <p class="explain">
         Rule: {h.ruleTitle}
         {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required{' '}
-        {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')}. Each harmonic is a band from the PA's class (best to
+        {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')} at the antenna connector. Each harmonic is a band from the PA's class (best to
         worst); compliance is judged on the worst end, and anything below {CONSTRUCTION_FLOOR_DBC} dBc at the antenna is
         limited by construction. Filter rejection (relative to the fundamental){' '}
         {h.rows[0] && h.rows[0].sourceBasis !== '50 Ω' ? (
@@ -555,8 +555,14 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
               <td class="num">
                 {band(x.predictedBestDbc, x.predictedDbc, x.bestLimitedByConstruction, x.limitedByConstruction)}
               </td>
-              <td class="num">{fv(x.marginDb, 'dB')}</td>
-              <td class="num">{fv(x.worstMarginDb, 'dB')}</td>
+              {/* below the construction floor the margin is counted from the floor: at least that much */}
+              <td class="num">{`${x.limitedByConstruction ? 'at least ' : ''}${fv(x.marginDb, 'dB')}`}</td>
+              <td class="num">
+                {x.worstMarginDb === null
+                  ? '—'
+                  : `${x.worstPredictedDbc !== null && x.worstPredictedDbc < CONSTRUCTION_FLOOR_DBC ? 'at least ' : ''}` +
+                    fv(x.worstMarginDb, 'dB')}
+              </td>
               <td>
                 <span class={sevClass(x.severity)}>{x.severity}</span>
               </td>

@@ -414,7 +414,7 @@ function harmonics(l: Layout, rf: RfReport): void {
   l.heading('Harmonics at the antenna', 2, 100);
   if (!h) return notComputed(l, 'Harmonics');
   l.text(
-    `Rule: ${h.ruleTitle} — ${fv(h.requiredDb, 'dB')} below ${fv(h.fundamentalW, 'W')}` +
+    `Rule: ${h.ruleTitle} — ${fv(h.requiredDb, 'dB')} below ${fv(h.fundamentalW, 'W')} at the antenna connector` +
       `${h.ruleFromMemory ? ' (from memory; check the current text)' : ''}. Source: ${sourceText(h.ruleSource)}`,
     { sizePt: 8.5, afterPt: 4 },
   );
@@ -427,7 +427,8 @@ function harmonics(l: Layout, rf: RfReport): void {
       lvl(x.predictedBestDbc),
       lvl(x.predictedDbc),
       x.worstPredictedDbc !== null ? lvl(x.worstPredictedDbc) : '—',
-      fv(x.marginDb, 'dB'),
+      // below the construction floor the margin is counted from the floor: at least that much
+      `${x.limitedByConstruction ? 'at least ' : ''}${fv(x.marginDb, 'dB')}`,
     ],
     color: x.severity === 'fail' ? FAIL : x.severity === 'caution' ? CAUTION : undefined,
   }));
@@ -439,7 +440,7 @@ function harmonics(l: Layout, rf: RfReport): void {
       { header: 'Filter', width: 0.11, align: 'right' },
       { header: 'Best end', width: 0.14, align: 'right' },
       { header: 'Worst end', width: 0.14, align: 'right' },
-      { header: 'Tolerances', width: 0.16, align: 'right' },
+      { header: 'Worst end, worst tolerances', width: 0.16, align: 'right' },
       { header: 'Margin', width: 0.14, align: 'right' },
     ],
     rows,

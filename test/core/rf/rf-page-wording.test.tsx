@@ -48,6 +48,14 @@ describe('RF page wording on the demos', () => {
     expect(h).toMatch(new RegExp(`\\(at the highest supply: ${n} V for the drain peak, ${n} V key-down for the ` +
       'rest\\)'));
   });
+  it('club: a harmonic limited by construction has its margin counted from the floor, "at least"', async () => {
+    const h = await html(club30m);
+    // floor −70 dBc (common practice) against the 43 dB of 47 CFR 97.307(d): at least 70 − 43 = 27 dB
+    const row4 = /<tr data-harmonic="4">([\s\S]*?)<\/tr>/.exec(h)![1];
+    expect(row4).toContain('limited by construction');
+    expect(row4).toContain('<td class="num">at least 27 dB</td>');
+    expect(h).toMatch(/Required 43 dB below [\d.]+ W at the antenna connector\./);
+  });
   it('portable (class E, SWR 2): the bands say which loads they cover and where each worst end lies', async () => {
     const h = await html(portable20m);
     const covered = /data-loads-covered[^>]*>([^<]*)<\/span>/.exec(h)?.[1];
