@@ -495,7 +495,8 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
       <p class="explain">
         Rule: {h.ruleTitle}
         {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required{' '}
-        {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')} at the antenna connector. Each harmonic is a band from the PA's class (best to
+        {fv(h.requiredDb, 'dB')} below {fv(h.fundamentalW, 'W')} at the antenna connector. Each harmonic is a band
+        from the PA's class (best to
         worst); compliance is judged on the worst end, and anything below {CONSTRUCTION_FLOOR_DBC} dBc at the antenna is
         limited by construction. Filter rejection (relative to the fundamental){' '}
         {h.rows[0] && h.rows[0].sourceBasis !== '50 Ω' ? (
@@ -560,7 +561,7 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
               <td class="num">
                 {x.worstMarginDb === null
                   ? '—'
-                  : `${x.worstPredictedDbc !== null && x.worstPredictedDbc < CONSTRUCTION_FLOOR_DBC ? 'at least ' : ''}` +
+                  : (x.worstPredictedDbc !== null && x.worstPredictedDbc < CONSTRUCTION_FLOOR_DBC ? 'at least ' : '') +
                     fv(x.worstMarginDb, 'dB')}
               </td>
               <td>
