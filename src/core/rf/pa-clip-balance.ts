@@ -237,6 +237,7 @@ export function clipBalance(inp: BalanceInput): Balance {
     sumA += a + b;
     sumD += d1[k] + d2[k];
     maxA = Math.max(maxA, a, b);
+    // what the limit takes from each device's drive at this instant (drive less the current it carries)
     cut = Math.max(cut, d1[k] - a, d2[k] - b);
     // push-pull: each drain swings Vdd ∓ v (one device each side); single-ended: Vdd − v
     swingPeak = Math.max(swingPeak, pp ? Math.abs(v[k]) : -v[k]);

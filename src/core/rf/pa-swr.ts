@@ -134,7 +134,8 @@ export interface MatchedPoint {
  * (Balance cutRatio; the whole margin for the flat-topped model wherever it cuts the current). Common practice, no
  * published source; evidence: ngspice, push-pull class B and C (k = 0.9995, 50 pF per drain) into SWR 2 at the
  * antenna through the filter: drain 7-11 % above 2 Vdd where a device is held fully off (0° and 315°), about 1 % where
- * the limit takes half the drive or less (270°) (test/core/rf/ngspice-pushpull-c-chain).
+ * the limit takes half the drive or less (270°: the device stays in its knee, which holds its drain and damps the
+ * ring, so the margin in proportion is the safe side there, 5 % above ngspice) (test/core/rf/ngspice-pushpull-c-chain).
  */
 export const CLIP_RING_MARGIN = 0.12;
 /** Below this share of the drive taken by the limit no margin is carried (numerical: the knee's own rounding). */
