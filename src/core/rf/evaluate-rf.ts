@@ -347,8 +347,8 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   if (paStressW > paPowerW * 1.001) {
     // Say which power the stress figures are for, so they do not look inconsistent with the PA's nominal output
     const onBattery = paStage?.pa ? ctx.paRailBattery?.[paStage.pa.railId] === true : false;
-    const note = ` (at ${paStressW.toFixed(1)} W from the ` +
-      `PA, its output ${onBattery ? 'with a full battery' : 'at high mains'})`;
+    const note = ` Figures at ${paStressW.toFixed(1)} W from the PA, its output ` +
+      `${onBattery ? 'with a full battery' : 'at high mains'}.`;
     const stressed = new Set([
       'lpf.capacitor-voltage',
       'lpf.passband',
@@ -358,7 +358,7 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     ]);
     for (const st of stages) {
       st.findings = st.findings.map((f) =>
-        stressed.has(f.rule) ? { ...f, message: f.message.replace(/\.(?=[^.]*$)/, `${note}.`) } : f,
+        stressed.has(f.rule) ? { ...f, message: `${f.message}${note}` } : f,
       );
       if (st.relay) st.relay.findings = st.findings.filter((f) => f.rule.startsWith('relay.'));
     }
