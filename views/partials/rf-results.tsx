@@ -45,7 +45,10 @@ const PaRefused: FC<{ name: string; pa: PaResult }> = ({ name, pa }) => (
 function waveformText(pa: PaResult): string {
   const w = pa.waveform;
   if (!w) return 'unknown';
-  const band = `${fv(w.designOutputW, 'W')} at the design point, up to ${fv(w.bandMaxOutputW, 'W')} over the band`;
+  // "band" here is the spread of the waveform (typical to worst harmonics), not the amateur band
+  const worstEnd = w.model === 'cosine-pulse'
+    ? 'driven into hard saturation' : 'at the worst end of the harmonic bands';
+  const band = `${fv(w.designOutputW, 'W')} at the design point, up to ${fv(w.bandMaxOutputW, 'W')} ${worstEnd}`;
   if (w.model === 'trapezoid')
     return `switched, ${fv(w.transitionTimeS, 's')} edges${w.transitionAssumed ? ' (assumed)' : ''}: ${band}`;
   if (w.model === 'class-e-simulated')
@@ -98,8 +101,9 @@ const PaTable: FC<{ name: string; pa: PaResult; after: AfterFilter | null }> = (
           [
             'DC input / key-down current',
             // the budget carries the band's most (keyDownCurrentA); the design drive's is shown beside it
-            `${fv(pa.keyDownCurrentA, 'A')} budgeted: the most over the band, at hard saturation where the ` +
-              'harmonics are judged' +
+            `${fv(pa.keyDownCurrentA, 'A')} budgeted: the most the waveform draws` +
+              (pa.waveform?.model === 'cosine-pulse' ? ', at hard saturation' : '') +
+              ', where the worst harmonics are judged' +
               (pa.waveform && pa.keyDownCurrentA > pa.waveform.bandMaxCurrentA
                 ? ` (${fv(pa.waveform.bandMaxCurrentA, 'A')} for the RF and ` +
                   `${fv(pa.keyDownCurrentA - pa.waveform.bandMaxCurrentA, 'A')} bias idle)`

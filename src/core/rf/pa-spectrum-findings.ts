@@ -62,7 +62,8 @@ export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext
   const base = { subject: c.subject, limit: null } as const;
   const f: Finding[] = [];
   // the supply budget carries the band's most current (pa.ts), the same waveform that sets the worst harmonics
-  const budget = `the supply budget carries the band's most, ${a2(c.band.bandMaxCurrentA)} key-down (RF part)`;
+  const budget = `the supply budget carries the most the stage draws, ${a2(c.band.bandMaxCurrentA)} key-down ` +
+    'for the RF';
   // Common practice, no published source: 5 % more current than at the design drive is worth saying
   if (c.band.bandMaxCurrentA > c.band.designCurrentA * 1.05) {
     // the filter, relay and exposure checks take the design drive's output: a caution only where the band's most

@@ -54,7 +54,9 @@ function waveformLine(w: PaWaveformSummary, keyDownA: number): string {
   const bias = keyDownA - w.bandMaxCurrentA;
   return (
     `${what}: ${fv(w.designOutputW, 'W')} and ${fv(w.designCurrentA + bias, 'A')} key-down at the design drive; ` +
-    `up to ${fv(w.bandMaxOutputW, 'W')} and ${fv(keyDownA, 'A')} over the band, where the harmonics are judged ` +
+    `up to ${fv(w.bandMaxOutputW, 'W')} and ${fv(keyDownA, 'A')} ` +
+    `${w.model === 'cosine-pulse' ? 'driven into hard saturation' : 'at the worst end'}, where the worst harmonics ` +
+    'are judged ' +
     '(the supply budget carries this)'
   );
 }
