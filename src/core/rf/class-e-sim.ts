@@ -6,6 +6,9 @@
 // rectifier simulation advances its linear pieces exactly); the run stops when one cycle repeats the last.
 // The design follows the nominal class-E values for 50 % duty and a high loaded Q (Sokal and Sokal, IEEE JSSC
 // SC-10(3), 1975): C1 = 0.1836/(ωR), excess series reactance 1.1525 R (from memory, not confirmed).
+// The run starts from the cycle's periodic state (class-e-shooting.ts) and runs cycles from there to its stopping
+// rule.
+import { periodicStateFor } from './class-e-shooting';
 
 /** Loaded Q of the series network; RF choke reactance / R. Common practice, no published source. */
 export const CLASS_E_QL = 30;
@@ -31,7 +34,7 @@ export interface ClassEResult {
   dcInputRatio: number;
   /** Drain voltage / Vdd at the instant the switch turns on (0 = zero-voltage switching). */
   turnOnRatio: number;
-  /** Cycles run until the waveform repeated. */
+  /** Cycles run until the waveform repeated (with those of a periodic start's probes). */
   cycles: number;
   /**
    * Load current's harmonics relative to its fundamental, |I_n| / |I_1| for n = 1..HARMONICS (index n − 1; the load
@@ -83,7 +86,7 @@ export function simulateClassE(
   const key = `${zRe}|${zIm}|${rdsOnRatio}|${duty}|${loadedQ}`;
   const hit = memo.get(key);
   if (hit) return hit;
-  const r = run(zRe, zIm, rdsOnRatio, duty, loadedQ);
+  const r = run(zRe, zIm, rdsOnRatio, duty, loadedQ, 'periodic', STOP_RATIO);
   if (memo.size >= MEMO_MAX) memo.delete(memo.keys().next().value as string);
   memo.set(key, r);
   return r;
@@ -99,7 +102,29 @@ const COS_T = trig(Math.cos);
 const SIN_T = trig(Math.sin);
 const memo = new Map<string, ClassEResult>();
 
-function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: number): ClassEResult {
+/**
+ * How the simulation starts: 'cold' from the supply switched on into an empty circuit (drain at Vdd), 'periodic'
+ * from the cycle's fixed point (class-e-shooting.ts); both then run to the same stopping rule, the peak drain voltage
+ * moving by less than STOP_RATIO of itself from one cycle to the next, after at least MIN_COLD_CYCLES from a cold
+ * start (its switch-on transient) or from a periodic start whose pattern did not settle.
+ */
+export type ClassEStart = 'cold' | 'periodic';
+
+/** Rounds of the periodic start before it gives up and starts from where it got. */
+const SHOOTING_TRIES = 8;
+export const STOP_RATIO = 1e-6;
+const MIN_COLD_CYCLES = 20;
+
+/** One simulation without the memo (for tests comparing starts); simulateClassE starts 'periodic'. */
+export function runClassE(
+  zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: number, start: ClassEStart, stopRatio = STOP_RATIO,
+): ClassEResult {
+  return run(zRe, zIm, rdsOnRatio, duty, ql, start, stopRatio);
+}
+
+function run(
+  zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: number, start: ClassEStart, stopRatio: number,
+): ClassEResult {
   const rds = Math.max(1e-3, rdsOnRatio);
   const c1 = CLASS_E_SHUNT;
   const lCh = CHOKE_REACTANCE_RATIO;
@@ -125,7 +150,7 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
   const x = Float64Array.from([1, 0, 0, 0, 1]);
   const onSteps = duty * STEPS;
   // one cycle from x (advanced in place), returning its peak drain voltage; with `stats` also the cycle's figures
-  const cycle = (stats: ClassEResult | null): number => {
+  const cycle = (stats: ClassEResult | null, pattern: Uint8Array | null = null): number => {
     let x0 = x[0], x1 = x[1], x2 = x[2], x3 = x[3];
     let vPk = -Infinity, iPk = 0, pOut = 0, iDc = 0;
     const a = new Array<number>(HARMONICS).fill(0);
@@ -133,6 +158,7 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
     for (let k = 0; k < STEPS; k++) {
       // switch on for the first `duty` of the cycle; the body diode conducts whenever the drain goes below 0
       const conducting = k < onSteps || x0 < 0;
+      if (pattern) pattern[k] = conducting ? 1 : 0;
       // the shunt capacitor's discharge at a hard turn-on (5 Rds C1) is left out of the peak: wiring inductance,
       // not Rds(on) alone, limits that spike; its energy stays in the dissipation
       if (stats && conducting && k * dt > 5 * rds * c1) iPk = Math.max(iPk, Math.abs(x0 / rds));
@@ -162,6 +188,29 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
     x[0] = x0; x[1] = x1; x[2] = x2; x[3] = x3;
     return vPk;
   };
+  // Start at the periodic state: the cycle's fixed point for the switching pattern seen from the present state
+  // (class-e-shooting.ts), again from there until the pattern repeats (the body diode's steps depend on the state)
+  let probes = 0;
+  const periodicStart = (): boolean => {
+    const seen = new Uint8Array(STEPS);
+    const next = new Uint8Array(STEPS);
+    const probe = Float64Array.from(x);
+    cycle(null, seen);
+    probes++;
+    for (let i = 0; i < SHOOTING_TRIES; i++) {
+      const y = periodicStateFor(on, off, seen);
+      if (!y) break;
+      x.set(y);
+      cycle(null, next);
+      probes++;
+      x.set(y);
+      probe.set(y);
+      if (next.every((v, k) => v === seen[k])) return true;
+      seen.set(next);
+    }
+    x.set(probe);
+    return false;
+  };
   const res: ClassEResult = {
     drainPeakRatio: 0,
     switchPeakRatio: 0,
@@ -174,14 +223,15 @@ function run(zRe: number, zIm: number, rdsOnRatio: number, duty: number, ql: num
   // the figures are those of the last cycle run: each cycle runs for its peak alone, and the last one again from its
   // saved start with its figures (the same arithmetic from the same state, so the same numbers)
   const saved = new Float64Array(5);
+  const minCycles = start === 'periodic' && periodicStart() ? 1 : MIN_COLD_CYCLES;
   let prevPeak = Number.NaN;
   for (let cyc = 1; cyc <= MAX_CYCLES; cyc++) {
     saved.set(x);
     const vPk = cycle(null);
-    if ((cyc > 20 && Math.abs(vPk - prevPeak) < 1e-6 * Math.abs(vPk)) || cyc === MAX_CYCLES) {
+    if ((cyc > minCycles && Math.abs(vPk - prevPeak) < stopRatio * Math.abs(vPk)) || cyc === MAX_CYCLES) {
       x.set(saved);
       res.turnOnRatio = x[0];
-      res.cycles = cyc;
+      res.cycles = cyc + probes;
       cycle(res);
       break;
     }
