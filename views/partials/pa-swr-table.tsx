@@ -33,9 +33,11 @@ function phaseText(s: PaSwrStress): string {
     const re = atAntenna ? p.antennaReOhm : p.loadReOhm;
     return re === null ? '' : ` (${fv(re, 'Ω')})`;
   };
+  const worsts = [s.worstDrainPeak, s.worstPeakCurrent, s.worstDissipation, s.maxOutput, s.minOutput];
+  const matched = atAntenna && worsts.some((w) => w.phaseDeg === null);
   return `Phase is the angle of ${of} reflection coefficient: 0° a resistance above the design load${z(0)}, ` +
     `180° one below${z(180)}, 90° inductive, 270° capacitive` +
-    `${atAntenna ? '; "matched" is the antenna at its design load' : ''}.`;
+    `${matched ? '; "matched" is the antenna at its design load' : ''}.`;
 }
 
 export const PaSwrTable: FC<{ s: PaSwrStress | null; maxRailV?: number; hotRailV?: number }> = (

@@ -87,7 +87,9 @@ const PaTable: FC<{ name: string; pa: PaResult; after: AfterFilter | null }> = (
                 'Turns ratio (secondary : full primary)',
                 `${pa.turnsRatio.toFixed(3)}` +
                   ` (${pa.turnsRatioSource})${
-                    pa.idealTurnsRatio !== null ? `, exact for target ${pa.idealTurnsRatio.toFixed(3)}` : ''
+                    pa.idealTurnsRatio !== null
+                      ? `; ${pa.idealTurnsRatio.toFixed(3)} would give the target power exactly`
+                      : ''
                   }`,
               ],
           ['Drain load (full primary)', fv(pa.primaryOhm, 'Ω')],
