@@ -104,5 +104,9 @@ describe.skipIf(!hasPoppler)('pack: RF output parts', () => {
     expect(club).toMatch(/Phase is the angle of the antenna's reflection coefficient/);
     // floor −70 dBc (common practice) against 43 dB (47 CFR 97.307(d)): a margin of at least 70 − 43 = 27 dB
     expect(club).toMatch(/by construction by construction by construction at least 27 dB/);
+    // the supply section's recommended-winding row names the winding it recommends and what the PA gives with it
+    expect(club).toMatch(new RegExp(String.raw`20 V winding, recommended [\d.]+ V with it the rail is [\d.]+ V at ` +
+      String.raw`low mains, key-down, and Push-pull MOSFET final gives about [\d.]+ W \([\d.]+ W with the winding ` +
+      'as fitted\\)'));
   });
 });

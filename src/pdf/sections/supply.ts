@@ -65,9 +65,10 @@ export function supplySection(l: Layout, supply: SupplyReport | null, heat: Heat
       ...t.windings
         .filter((w) => w.paAtCheck)
         .map((w): [string, string] => [
-          `Recommended ${w.windingName}`,
-          `${fv(w.paAtCheck!.railV, 'V')} at low mains, key-down: ${w.paAtCheck!.stageName} about ` +
-            `${fv(w.paAtCheck!.outputW, 'W')} (fitted winding ${fv(w.paAtCheck!.fittedOutputW, 'W')})`,
+          `${w.windingName}, recommended${w.standardRatedV !== null ? ` ${fv(w.standardRatedV, 'V')}` : ''}`,
+          `with it the rail is ${fv(w.paAtCheck!.railV, 'V')} at low mains, key-down, and ` +
+            `${w.paAtCheck!.stageName} gives about ${fv(w.paAtCheck!.outputW, 'W')} ` +
+            `(${fv(w.paAtCheck!.fittedOutputW, 'W')} with the winding as fitted)`,
         ]),
       ...(t.crossRegulation?.rails ?? []).map((x): [string, string] => [
         `${x.railName}, together`,
