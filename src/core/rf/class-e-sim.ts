@@ -46,28 +46,47 @@ export interface ClassEResult {
 /** Harmonics of the load current computed (1 = fundamental). */
 export const HARMONICS = 5;
 
-type M = number[][];
+/** 5 × 5 matrices, flat and row-major. */
+const N = 5;
 
-function mul(a: M, b: M): M {
-  const n = a.length;
-  const c: M = Array.from({ length: n }, () => new Array(n).fill(0));
-  for (let i = 0; i < n; i++) for (let k = 0; k < n; k++) for (let j = 0; j < n; j++) c[i][j] += a[i][k] * b[k][j];
-  return c;
+/** c = a · b (c apart from a and b); each entry summed over k in order from 0, as a row-by-row product. */
+function mulInto(c: Float64Array, a: Float64Array, b: Float64Array): void {
+  for (let i = 0; i < N; i++) {
+    for (let j = 0; j < N; j++) {
+      let s = 0;
+      for (let k = 0; k < N; k++) s += a[i * N + k] * b[k * N + j];
+      c[i * N + j] = s;
+    }
+  }
 }
 
 /** Matrix exponential by scaling and squaring with a Taylor series (Moler, Van Loan, SIAM Review 1978, method 3). */
-function expm(a: M): M {
-  const n = a.length;
-  const norm = Math.max(...a.map((r) => r.reduce((s, x) => s + Math.abs(x), 0)));
-  const s = Math.max(0, Math.ceil(Math.log2(norm / 0.25)));
-  const scaled = a.map((r) => r.map((x) => x / 2 ** s));
-  let term: M = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? 1 : 0)));
-  let sum: M = term.map((r) => [...r]);
-  for (let k = 1; k <= 14; k++) {
-    term = mul(term, scaled).map((r) => r.map((x) => x / k));
-    sum = sum.map((r, i) => r.map((x, j) => x + term[i][j]));
+function expm(a: Float64Array): Float64Array {
+  let norm = -Infinity;
+  for (let i = 0; i < N; i++) {
+    let r = 0;
+    for (let j = 0; j < N; j++) r += Math.abs(a[i * N + j]);
+    norm = Math.max(norm, r);
   }
-  for (let i = 0; i < s; i++) sum = mul(sum, sum);
+  const s = Math.max(0, Math.ceil(Math.log2(norm / 0.25)));
+  const scale = 2 ** s;
+  const scaled = a.map((x) => x / scale);
+  let term = new Float64Array(N * N);
+  let next = new Float64Array(N * N);
+  for (let i = 0; i < N; i++) term[i * N + i] = 1;
+  let sum = Float64Array.from(term);
+  for (let k = 1; k <= 14; k++) {
+    mulInto(next, term, scaled);
+    [term, next] = [next, term];
+    for (let i = 0; i < N * N; i++) {
+      term[i] = term[i] / k;
+      sum[i] = sum[i] + term[i];
+    }
+  }
+  for (let i = 0; i < s; i++) {
+    mulInto(next, sum, sum);
+    [sum, next] = [next, sum];
+  }
   return sum;
 }
 
@@ -134,19 +153,18 @@ function run(
   const rl = zRe;
   const dt = (2 * Math.PI) / STEPS;
   // state x = [v_drain, i_series, v_C0, i_choke, 1] (the constant 1 carries the supply)
-  const piece = (g: number): M => expm([
-    [-g / c1, -1 / c1, 0, 1 / c1, 0],
-    [1 / l, -rl / l, -1 / l, 0, 0],
-    [0, invC, 0, 0, 0],
-    [-1 / lCh, 0, 0, 0, 1 / lCh],
-    [0, 0, 0, 0, 0],
-  ].map((r) => r.map((x) => x * dt)));
+  const piece = (g: number): Float64Array => expm(Float64Array.from([
+    -g / c1, -1 / c1, 0, 1 / c1, 0,
+    1 / l, -rl / l, -1 / l, 0, 0,
+    0, invC, 0, 0, 0,
+    -1 / lCh, 0, 0, 0, 1 / lCh,
+    0, 0, 0, 0, 0,
+  ], (x) => x * dt));
   // the two pieces as flat row-major arrays. The last state (the constant 1) stays 1 exactly: the pieces' last row is
   // [0 0 0 0 1] (the Taylor terms of a zero row are zero), so only the first four rows are stepped, in the order of a
   // row-by-row dot product (p[o + 4] * 1 is p[o + 4] exactly): the results are those of the plain matrix product
-  const flat = (p: M) => Float64Array.from(p.flat());
-  const on = flat(piece(1 / rds));
-  const off = flat(piece(0));
+  const on = piece(1 / rds);
+  const off = piece(0);
   const x = Float64Array.from([1, 0, 0, 0, 1]);
   const onSteps = duty * STEPS;
   // one cycle from x (advanced in place), returning its peak drain voltage; with `stats` also the cycle's figures
