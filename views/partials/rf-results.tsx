@@ -276,8 +276,10 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
             [
               'At the operating frequency',
               `loss ${fv(a.atOperating.lossDb, 'dB')}, input SWR ` +
-                `${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} dissipated as heat ` +
-                `(reflected power excluded)`,
+                `${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} dissipated as heat` +
+                // the same power the parts' stress is taken at (the PA's most at its design drive)
+                (lpf.realisation ? ` at ${fv(lpf.realisation.powerW, 'W')} from the PA` : '') +
+                ' (reflected power excluded)',
             ],
             [
               'Across the band',
