@@ -34,7 +34,7 @@ export interface ClassEResult {
   dcInputRatio: number;
   /** Drain voltage / Vdd at the instant the switch turns on (0 = zero-voltage switching). */
   turnOnRatio: number;
-  /** Cycles run until the waveform repeated (with those of a periodic start's probes). */
+  /** Cycles run until the waveform repeated, with those of the periodic start's tries. */
   cycles: number;
   /**
    * Load current's harmonics relative to its fundamental, |I_n| / |I_1| for n = 1..HARMONICS (index n − 1; the load
@@ -206,29 +206,6 @@ function run(
     x[0] = x0; x[1] = x1; x[2] = x2; x[3] = x3;
     return vPk;
   };
-  // Start at the periodic state: the cycle's fixed point for the switching pattern seen from the present state
-  // (class-e-shooting.ts), again from there until the pattern repeats (the body diode's steps depend on the state)
-  let probes = 0;
-  const periodicStart = (): boolean => {
-    const seen = new Uint8Array(STEPS);
-    const next = new Uint8Array(STEPS);
-    const probe = Float64Array.from(x);
-    cycle(null, seen);
-    probes++;
-    for (let i = 0; i < SHOOTING_TRIES; i++) {
-      const y = periodicStateFor(on, off, seen);
-      if (!y) break;
-      x.set(y);
-      cycle(null, next);
-      probes++;
-      x.set(y);
-      probe.set(y);
-      if (next.every((v, k) => v === seen[k])) return true;
-      seen.set(next);
-    }
-    x.set(probe);
-    return false;
-  };
   const res: ClassEResult = {
     drainPeakRatio: 0,
     switchPeakRatio: 0,
@@ -238,19 +215,46 @@ function run(
     cycles: 0,
     loadHarmonics: [],
   };
-  // the figures are those of the last cycle run: each cycle runs for its peak alone, and the last one again from its
-  // saved start with its figures (the same arithmetic from the same state, so the same numbers)
+  // Start at the periodic state: the cycle's fixed point for a switching pattern (class-e-shooting.ts), first the
+  // nominal one (on for the duty, no body diode), then the one seen in a cycle from that fixed point, until the
+  // pattern repeats (the body diode's steps depend on the state). The cycle that confirms it is the run's first;
+  // its peak is returned (null: no settled pattern, x left at the last fixed point tried or at the cold start).
+  let tries = 0;
+  const periodicStart = (): number | null => {
+    const seen = Uint8Array.from({ length: STEPS }, (_, k) => (k < onSteps ? 1 : 0));
+    const next = new Uint8Array(STEPS);
+    const last = Float64Array.from(x);
+    for (; tries < SHOOTING_TRIES; tries++) {
+      const y = periodicStateFor(on, off, seen);
+      if (!y) break;
+      x.set(y);
+      last.set(y);
+      const peak = cycle(null, next);
+      if (next.every((v, k) => v === seen[k])) return peak;
+      seen.set(next);
+    }
+    x.set(last);
+    return null;
+  };
+  const startPeak = start === 'periodic' ? periodicStart() : null;
+  // from a settled periodic start any cycle may be the last, so each runs with its figures; otherwise each cycle runs
+  // for its peak alone and the last one again from its saved start with its figures (the same arithmetic from the
+  // same state, so the same numbers)
+  const inline = startPeak !== null;
+  const minCycles = inline ? 1 : MIN_COLD_CYCLES;
   const saved = new Float64Array(5);
-  const minCycles = start === 'periodic' && periodicStart() ? 1 : MIN_COLD_CYCLES;
-  let prevPeak = Number.NaN;
-  for (let cyc = 1; cyc <= MAX_CYCLES; cyc++) {
+  let prevPeak = startPeak ?? Number.NaN;
+  for (let cyc = inline ? 2 : 1; cyc <= MAX_CYCLES; cyc++) {
     saved.set(x);
-    const vPk = cycle(null);
+    const vPk = cycle(inline ? res : null);
     if ((cyc > minCycles && Math.abs(vPk - prevPeak) < stopRatio * Math.abs(vPk)) || cyc === MAX_CYCLES) {
-      x.set(saved);
-      res.turnOnRatio = x[0];
-      res.cycles = cyc + probes;
-      cycle(res);
+      res.turnOnRatio = saved[0];
+      // every cycle run counts: the periodic start's unsettled tries, and the rest (the confirming one first)
+      res.cycles = cyc + tries;
+      if (!inline) {
+        x.set(saved);
+        cycle(res);
+      }
       break;
     }
     prevPeak = vPk;
