@@ -35,12 +35,21 @@ function identity(): Float64Array {
   return m;
 }
 
+/** The two pieces and their squares found so far (P, P², P⁴, ...), kept across the tries of one simulation. */
+export interface Pieces {
+  on: Float64Array[];
+  off: Float64Array[];
+}
+
+/** Pieces for periodicStateFor: `on` conducting (switch or body diode), `off` open, each over one step. */
+export const piecesOf = (on: Float64Array, off: Float64Array): Pieces => ({ on: [on], off: [off] });
+
 /**
  * The cycle start the cycle maps to itself, for the pattern (1 = the conducting piece `on` at that step, 0 = `off`);
  * null when the system has no unique solution or the result is not finite.
  */
-export function periodicStateFor(on: Float64Array, off: Float64Array, pattern: Uint8Array): Float64Array | null {
-  const pows = [[on], [off]];
+export function periodicStateFor(pieces: Pieces, pattern: Uint8Array): Float64Array | null {
+  const pows = [pieces.on, pieces.off];
   let phi = identity();
   for (let k = 0; k < pattern.length;) {
     let e = k;

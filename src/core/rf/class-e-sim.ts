@@ -8,7 +8,7 @@
 // SC-10(3), 1975): C1 = 0.1836/(ωR), excess series reactance 1.1525 R (from memory, not confirmed).
 // The run starts from the cycle's periodic state (class-e-shooting.ts) and runs cycles from there to its stopping
 // rule.
-import { periodicStateFor } from './class-e-shooting';
+import { periodicStateFor, piecesOf } from './class-e-shooting';
 
 /** Loaded Q of the series network; RF choke reactance / R. Common practice, no published source. */
 export const CLASS_E_QL = 30;
@@ -224,13 +224,16 @@ function run(
     const seen = Uint8Array.from({ length: STEPS }, (_, k) => (k < onSteps ? 1 : 0));
     const next = new Uint8Array(STEPS);
     const last = Float64Array.from(x);
+    const pieces = piecesOf(on, off);
     for (; tries < SHOOTING_TRIES; tries++) {
-      const y = periodicStateFor(on, off, seen);
+      const y = periodicStateFor(pieces, seen);
       if (!y) break;
       x.set(y);
       last.set(y);
       const peak = cycle(null, next);
-      if (next.every((v, k) => v === seen[k])) return peak;
+      let same = true;
+      for (let k = 0; k < STEPS && same; k++) same = next[k] === seen[k];
+      if (same) return peak;
       seen.set(next);
     }
     x.set(last);
