@@ -95,7 +95,8 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
           [
             'Supply',
             `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')} budgeted (` +
-              `${p.waveform?.model === 'cosine-pulse' ? 'hard saturation' : 'the worst end of the harmonic bands'}), ` +
+              (p.waveform?.model === 'cosine-pulse' ? 'hard saturation' : 'the worst end of the harmonic bands') +
+              '), ' +
               `DC input ${fv(p.dcInputW, 'W')} at the design drive, ` +
               `efficiency ${Math.round(p.efficiency * 100)} % ` +
               `(${p.efficiencySource === 'entered' ? 'entered' : 'class default, common practice'})`,
