@@ -5,7 +5,7 @@ import { MIN_TARGET_POWER_W, validatePaParams, validateThermalInputs } from './l
 import { operatingPoint, peakDrainFactor, PRACTICAL_RATIOS, primaryOhmForPower } from './pa-load-line';
 import { paThermal, type PaThermal } from './pa-thermal';
 import { fieldLabel } from './field-labels';
-import { describeLoad, swrStress, type PaSwrStress } from './pa-swr';
+import { swrStress, whereLoad, type PaSwrStress } from './pa-swr';
 import { drainHarmonicLoad } from './pa-clip-balance';
 import type { Cx, Ladder } from './lpf-analysis';
 import type { LpfDesign } from './lpf-design';
@@ -295,7 +295,10 @@ export function evaluatePa(pa: PaParams, railV: number, project: Pick<Project, '
   const swrCurrent = swrKeyDownCurrent(swr, pa.biasIdleMaxA * hotRailV, hotDcW, band.designCurrentA, pa.biasIdleMaxA);
   if (swrCurrent && swrCurrent.currentA > keyDownCurrentA * 1.001) {
     findings.push({ severity: 'caution', rule: 'pa.swr-current', subject, value: swrCurrent.currentA, limit: keyDownCurrentA, unit: 'A', source: 'pa.waveform-dc',
-      message: `Into the worst load of SWR ${swr.swr} (${describeLoad(swrCurrent.at)}) the key-down current at the design drive rises to ${swrCurrent.currentA.toFixed(2)} A, above the ${keyDownCurrentA.toFixed(2)} A the supply budget carries (matched load, saturated drive); size the supply and its fuse for it, or fold the drive back at high SWR.` });
+      message: `The key-down current at the design drive rises to ${swrCurrent.currentA.toFixed(2)} A ` +
+        `${whereLoad(swrCurrent.at, swr.swr)}. That is above the ${keyDownCurrentA.toFixed(2)} A the supply budget ` +
+        'carries (matched load, saturated drive); size the supply and its fuse for it, or fold the drive back at high SWR.',
+    });
   }
   const clamp = drainClamp(pa.drainClampV, swr, {
     peakV: peakDrainV, peakA: opHot.peakDeviceA, supplyV: maxRailV, dcInputW: hotDcW + pa.biasIdleMaxA * hotRailV,

@@ -166,6 +166,11 @@ describe('worst-SWR key-down current', () => {
     const f = r.findings.find((x) => x.rule === 'pa.swr-current');
     expect(f?.severity).toBe('caution');
     expect(f?.message).toMatch(/reflection phase/);
+    // plain sentences: the PA's load stated once, no bracket opened inside another
+    const load = /\d+\.\d [+−] j\d+\.\d Ω \(reflection phase \d+°\)/.source;
+    expect(f?.message).toMatch(new RegExp(`rises to \\d+\\.\\d\\d A at SWR 2 into ${load}\\. That is above `));
+    expect(f?.message.match(/ Ω/g)).toHaveLength(1);
+    expect(f?.message).not.toMatch(/\([^)]*\(/);
     // at SWR 1 there is no circle and nothing to show
     expect(evaluatePa(e, 12, { ...proj, targetPowerW: 5 }, 'PA', { worstSwr: 1 }).swrKeyDownCurrentA).toBeNull();
   });
