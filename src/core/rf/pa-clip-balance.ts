@@ -90,8 +90,8 @@ function impulse(z: { re: Float64Array; im: Float64Array }): Float64Array {
   return h;
 }
 
-/** v = Z * i through the harmonics: I_n = (1/N) Σ i_k e^{−jnθk}, v_k = Σ_n 2 Re(Z_n I_n e^{jnθk}) (discrete Fourier
- * series). */
+/** v = Z * i through the harmonics: I_n = (1/N) Σ i_k e^{−jnθk}, v_k = Σ_n 2 Re(Z_n I_n e^{jnθk})
+ * (discrete Fourier series). */
 function convolve(z: { re: Float64Array; im: Float64Array }, x: Float64Array, out: Float64Array): void {
   out.fill(0);
   for (let n = 0; n < HARMONICS; n++) {

@@ -9,9 +9,15 @@ import { CLASS_E_SHUNT } from './class-e-sim';
  * SC-10(3), 1975; constant from memory), against the device's own output capacitance: fail when the device alone
  * exceeds it, with the highest frequency at which it would not.
  */
-export function classEShuntFindings(pa: PaParams, primaryOhm: number, frequencyHz: number | undefined, subject: string): Finding[] {
+export function classEShuntFindings(
+  pa: PaParams,
+  primaryOhm: number,
+  frequencyHz: number | undefined,
+  subject: string,
+): Finding[] {
   const coss = pa.deviceCossF ?? null;
-  if (pa.amplifierClass !== 'E' || coss === null || frequencyHz === undefined || !(frequencyHz > 0) || !(coss > 0)) return [];
+  if (pa.amplifierClass !== 'E' || coss === null || frequencyHz === undefined || !(frequencyHz > 0) || !(coss > 0))
+    return [];
   // push-pull: each class-E half drives half the drain-to-drain load (the model's assumption)
   const r = pa.topology === 'push-pull' ? primaryOhm / 2 : primaryOhm;
   const w = 2 * Math.PI * frequencyHz;
@@ -21,14 +27,31 @@ export function classEShuntFindings(pa: PaParams, primaryOhm: number, frequencyH
   const pf = (x: number) => `${(x * 1e12).toFixed(0)} pF`;
   const base = { rule: 'pa.class-e-shunt', subject, unit: 'F', source: 'pa.class-e-sim' as const };
   if (coss > c1) {
-    return [{ ...base, severity: 'fail', value: coss, limit: c1,
-      message: `The device's output capacitance ${pf(coss)} exceeds the ${pf(c1)} shunt capacitance class E needs at this ` +
-        `frequency into ${r.toFixed(1)} Ω: it cannot switch at zero voltage. It works up to about ${(fMax / 1e6).toFixed(2)} MHz; ` +
-        'use a device with less capacitance or a lower drain load (higher power for the supply).' }];
+    return [
+      {
+        ...base,
+        severity: 'fail',
+        value: coss,
+        limit: c1,
+        message:
+          `The device's output capacitance ${pf(coss)} exceeds the ${pf(c1)} shunt capacitance class E needs at this ` +
+          `frequency into ${r.toFixed(1)} Ω: it cannot switch at zero voltage. It works ` +
+          `up to about ${(fMax / 1e6).toFixed(2)} MHz; ` +
+          'use a device with less capacitance or a lower drain load (higher power for the supply).',
+      },
+    ];
   }
-  return [{ ...base, severity: 'ok', value: coss, limit: c1,
-    message: `Class-E shunt capacitance ${pf(c1)} per switch: the device gives ${pf(coss)}, add about ${pf(c1 - coss)} ` +
-      `(usable up to about ${(fMax / 1e6).toFixed(2)} MHz with this device).` }];
+  return [
+    {
+      ...base,
+      severity: 'ok',
+      value: coss,
+      limit: c1,
+      message:
+        `Class-E shunt capacitance ${pf(c1)} per switch: the device gives ${pf(coss)}, add about ${pf(c1 - coss)} ` +
+        `(usable up to about ${(fMax / 1e6).toFixed(2)} MHz with this device).`,
+    },
+  ];
 }
 
 export interface SwrFindingContext {
@@ -68,19 +91,28 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
       `${Math.round((s.worstDrainPeak.ringMarginFraction ?? s.clip.ringMargin) * 100)} % margin for the ` +
       'drain\'s ring where the stage clips (the harmonic voltages and the transformer\'s leakage carry it past ' +
       'twice the supply).' : '';
-  const vWhere = `${where(s.worstDrainPeak)}${clamped ? ` (held there by the ${c.clampV} V drain clamp; ${s.worstDrainPeak.value.toFixed(1)} V without it)` : ''}`;
+  const vWhere = `${where(s.worstDrainPeak)}` +
+    `${clamped ? ` (held there by the ${c.clampV} V drain clamp; ` +
+      `${s.worstDrainPeak.value.toFixed(1)} V without it)` : ''}`;
   f.push({
     severity: pa.deviceVdsMaxV < vPk ? 'fail' : pa.deviceVdsMaxV < V_MARGIN * vPk ? 'caution' : 'ok',
-    rule: 'pa.vds', subject, value: vPk, limit: pa.deviceVdsMaxV, unit: 'V', source: clamped ? 'pa.drain-clamp' : s.swr > 1 || isE ? swrSource : 'pa.vds',
-    message: pa.deviceVdsMaxV < vPk
-      ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, above the ${pa.deviceVdsMaxV} V device rating: ` +
-        `fit a drain clamp (TVS or zener below the rating), fold the drive back on high SWR, or use a device rated ` +
-        `${Math.ceil(V_MARGIN * vPk)} V or more.${ring}`
-      : pa.deviceVdsMaxV < V_MARGIN * vPk
-        ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, less than 25 % below the ${pa.deviceVdsMaxV} V ` +
-          `rating; a drain clamp or a higher-rated device adds margin.${ring}`
-        : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} ` +
-          `with margin.${ring}`,
+    rule: 'pa.vds',
+    subject,
+    value: vPk,
+    limit: pa.deviceVdsMaxV,
+    unit: 'V',
+    source: clamped ? 'pa.drain-clamp' : s.swr > 1 || isE ? swrSource : 'pa.vds',
+    message:
+      pa.deviceVdsMaxV < vPk
+        ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, above the ${pa.deviceVdsMaxV} V device rating: ` +
+          `fit a drain clamp (TVS or zener below the rating), fold the drive back on high SWR, or use a device rated ` +
+          `${Math.ceil(V_MARGIN * vPk)} V or more.${ring}`
+        : pa.deviceVdsMaxV < V_MARGIN * vPk
+          ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, less than 25 % below the ${pa.deviceVdsMaxV}` +
+            ` V ` +
+            `rating; a drain clamp or a higher-rated device adds margin.${ring}`
+          : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} ` +
+            `with margin.${ring}`,
   });
   const iPk = s.worstPeakCurrent.value;
   const iWhere = where(s.worstPeakCurrent);
@@ -97,11 +129,21 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
         : `Peak device current ${iPk.toFixed(2)} A ${iWhere} against a ${pa.deviceIdMaxA} A rating.`,
   });
   if (isE && s.swr > 1 && s.classETurnOnRatio !== null && s.classETurnOnRatio > 0.1) {
-    // Source: energy ½ C1 V² lost at each hard turn-on (capacitor switching loss, textbook); 10 % of Vdd: common practice
+    // Source: energy ½ C1 V² lost at each hard turn-on (capacitor switching loss,
+    // textbook); 10 % of Vdd: common practice
     f.push({
-      severity: 'caution', rule: 'pa.class-e-switching', subject, value: s.classETurnOnRatio, limit: 0.1, unit: '', source: 'pa.class-e-sim',
-      message: `Into part of the SWR ${s.swr} circle the switch turns on with the drain at up to ${s.classETurnOnRatio.toFixed(2)} × the ` +
-        'supply (no longer zero-voltage switching): the shunt capacitor discharges into the device every cycle, which heats it ' +
+      severity: 'caution',
+      rule: 'pa.class-e-switching',
+      subject,
+      value: s.classETurnOnRatio,
+      limit: 0.1,
+      unit: '',
+      source: 'pa.class-e-sim',
+      message:
+        `Into part of the SWR ${s.swr} circle the switch turns on with the ` +
+        `drain at up to ${s.classETurnOnRatio.toFixed(2)} × the ` +
+        'supply (no longer zero-voltage switching): the shunt capacitor discharges into the device every cycle, ' +
+        'which heats it ' +
         'and stresses it beyond these figures; add SWR foldback of the drive or supply.',
     });
   }
@@ -119,7 +161,7 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
           'each hard switching edge; an RC snubber or a drain clamp lowers it.'
         : 'The drain peak includes the ring of the output transformer\'s leakage with the device capacitance, ' +
           'bounded by its step (twice the load-line swing); the turn-off current adds to it in proportion to ' +
-          '√(leakage / Coss), and the ring\'s current flows through the devices beyond the load-line current: enter ' +
+          "√(leakage / Coss), and the ring's current flows through the devices beyond the load-line current: enter " +
           'both (the leakage measured across one primary half with the other shorted) to include them.',
     });
   }
@@ -133,9 +175,16 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
     : c.ambientC + perDevice * (m.thetaJcKPerW + m.thetaCsKPerW + c.sharedBy * m.thetaSaKPerW);
   const ratio = c.matchedDissipationW > 0 ? d.value / c.matchedDissipationW : null;
   f.push({
-    severity: tj !== null && tj > m.tjMaxC ? 'caution' : 'ok', rule: 'pa.swr-dissipation', subject, value: d.value,
-    limit: c.matchedDissipationW, unit: 'W', source: swrSource,
-    message: `Key-down dissipation rises to ${d.value.toFixed(1)} W${ratio !== null ? ` (${ratio.toFixed(2)} × matched)` : ''} ` +
+    severity: tj !== null && tj > m.tjMaxC ? 'caution' : 'ok',
+    rule: 'pa.swr-dissipation',
+    subject,
+    value: d.value,
+    limit: c.matchedDissipationW,
+    unit: 'W',
+    source: swrSource,
+    message:
+      `Key-down dissipation rises to ${d.value.toFixed(1)} W` +
+      `${ratio !== null ? ` (${ratio.toFixed(2)} × matched)` : ''} ` +
       `${whereLoad(d, s.swr)}` +
       (tj === null ? '.' : `; a continuous carrier into it takes the junction to about ${tj.toFixed(0)} °C` +
         (tj > m.tjMaxC ? `, beyond its ${m.tjMaxC} °C maximum: tune at reduced power into a mismatch.` : '.')),

@@ -133,9 +133,10 @@ export interface MatchedPoint {
  * these classes, so the drain peak carries this margin times the share of the drive the limit takes at its largest
  * (Balance cutRatio; the whole margin for the flat-topped model wherever it cuts the current). Common practice, no
  * published source; evidence: ngspice, push-pull class B and C (k = 0.9995, 50 pF per drain) into SWR 2 at the
- * antenna through the filter: drain 7-11 % above 2 Vdd where a device is held fully off (0° and 315°), about 1 % where
- * the limit takes half the drive or less (270°: the device stays in its knee, which holds its drain and damps the
- * ring, so the margin in proportion is the safe side there, 5 % above ngspice) (test/core/rf/ngspice-pushpull-c-chain).
+ * antenna through the filter: drain 7-11 % above 2 Vdd where a device is held fully off (0° and 315°), about 1 %
+ * where the limit takes half the drive or less (270°: the device stays in its knee, which holds its drain and damps
+ * the ring, so the margin in proportion is the safe side there, 5 % above ngspice)
+ * (test/core/rf/ngspice-pushpull-c-chain).
  */
 export const CLIP_RING_MARGIN = 0.12;
 /** Below this share of the drive taken by the limit no margin is carried (numerical: the knee's own rounding). */
@@ -155,8 +156,8 @@ export interface Ring {
  * The opposite device turns on hard: the drain just released steps by `stepV` towards the load-line peak through the
  * leakage inductance L into its output capacitance C, with the turn-off current iOffA already in L.
  * Source: undamped series LC from initial conditions (circuit theory, textbook): v(t) = ΔV (1 − cos ω0t) +
- * I Z0 sin ω0t about the start, so the peak above the new level is √(ΔV² + (I Z0)²), Z0 = √(L/C); the loop current
- * amplitude is the same over Z0: √((ΔV/Z0)² + I²). Losses only lower both (an upper bound).
+ * I Z0 sin ω0t about the start, so the peak above the new level is √(ΔV² + (I Z0)²), Z0 = √(L/C); the loop
+ * current amplitude is the same over Z0: √((ΔV/Z0)² + I²). Losses only lower both (an upper bound).
  */
 export function leakageRing(stepV: number, iOffA: number, leakageH: number | null, cossF: number | null): Ring {
   if (leakageH === null || cossF === null || !(leakageH > 0) || !(cossF > 0)) {
@@ -193,7 +194,8 @@ export function stressAt(cls: PaParams['amplifierClass'], m: MatchedPoint, z: { 
     const lossW = Math.max(0, m.dcInputW - m.outputW) * currentRatio ** 2;
     const peakDeviceA = m.peakDeviceA * currentRatio;
     if (!m.ring) return { drainPeakV: m.drainPeakV, peakDeviceA, dissipationW: lossW + m.biasW, outputW };
-    // Device current i = Ipk sin(θ − φ), φ = arg z (current lags an inductive load), at turn-off θ = π: Ipk sin φ
+    // Device current i = Ipk sin(θ − φ), φ = arg z (current lags an
+    // inductive load), at turn-off θ = π: Ipk sin φ
     const iOffA = peakDeviceA * Math.sin(Math.atan2(z.im, z.re));
     const r = leakageRing(m.drainPeakV, iOffA, m.ring.leakageH, m.ring.cossF);
     return {
@@ -459,7 +461,8 @@ export function describeLoad(w: LoadOf): string {
 /**
  * Where a worst case lies, after "reaches ... V": "at SWR 2 at the antenna, reflection phase 30° (63.2 + j38.1 Ω),
  * where the PA sees 41.0 − j12.0 Ω"; "with the antenna at its design load (50.0 + j0.0 Ω), where the PA sees ...";
- * with the circle at the PA's output "at SWR 2 into 25.0 − j12.5 Ω (reflection phase 240°)" or "into the design load".
+ * with the circle at the PA's output "at SWR 2 into 25.0 − j12.5 Ω (reflection
+ * phase 240°)" or "into the design load".
  */
 export function whereLoad(w: LoadOf, swr: number): string {
   if (w.antennaReOhm === null || w.antennaImOhm === null) {

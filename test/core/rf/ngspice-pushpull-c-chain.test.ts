@@ -40,7 +40,8 @@ const haveNgspice = requireTool(NGSPICE, 'SPICE whole-chain check of the push-pu
 // Drain peak: where the limit takes a device's drive current the drain rings with the leakage and the 50 pF (a device
 // held fully off is rung below 0 V and the transformer carries the opposite drain as far above 2 Vdd); the program
 // carries CLIP_RING_MARGIN (12 %) times the share of the drive the limit takes (pa-swr). Seen (ngspice / program, V),
-// class C: 50 Ω 27.67 / 28.57, SWR 2 at 0° 30.49 / 31.48, 90° 26.65 / 26.58, 180° 21.67 / 21.71, 270° 27.95 / 29.51;
+// class C: 50 Ω 27.67 / 28.57, SWR 2 at 0° 30.49 / 31.48, 90° 26.65 / 26.58,
+// 180° 21.67 / 21.71, 270° 27.95 / 29.51;
 // class B: 27.47 / 28.09, 30.46 / 31.70, 26.96 / 27.07, 21.00 / 21.12, 27.91 / 28.71. So ngspice may stand DRAIN_ABOVE
 // (2 %) above the program at every load (a device-rating check must not sit below the drain) and DRAIN_BELOW (7 %)
 // below it (at most 6.0 %, class C at 45° in the sweep below; 5.3 % at 270°, where the limit takes half the drive but
@@ -58,9 +59,10 @@ const DRAIN_BELOW = 0.07;
 // where class B at 0° came 5.3 dB above it.)
 const TOL_HARMONIC_DB = 3;
 // The balanced drain voltage's 3rd (pa-clip-balance) through the filter from a stiff source, against ngspice: class C
-// within 1.3 dB at every load (50 Ω −68.7 / −67.8, SWR 2 at 0° −65.6 / −65.2, 90° −71.8 / −71.7, 180° −63.1 / −63.0,
-// 270° −65.1 / −63.8 dBc, program / ngspice); class B at 0° −61.3 / −60.4 dBc, elsewhere both below the −70 dBc
-// construction floor. The band's worst end stays the flat-topped fold above (the upper end); this is its best estimate.
+// within 1.3 dB at every load (50 Ω −68.7 / −67.8, SWR 2 at 0° −65.6 / −65.2, 90° −71.8 / −71.7, 180°
+// −63.1 / −63.0, 270° −65.1 / −63.8 dBc, program / ngspice); class B at 0° −61.3 / −60.4 dBc, elsewhere
+// both below the −70 dBc construction floor. The band's worst end stays the flat-topped fold above
+// (the upper end); this is its best estimate.
 const TOL_BALANCED_DB = 1.5;
 
 const F0 = 7.03e6;
@@ -231,7 +233,8 @@ describe.skipIf(!haveNgspice).each(CLASSES)(CHAIN_TITLE, (cls, conductionDeg) =>
 // V), class C: 45° 29.03 / 30.88, 135° 21.97 / 21.89, 225° 24.10 / 24.28, 315° 29.99 / 31.21 (the PA seeing
 // 57.4 − j50.4 Ω: the peak current is not cut, but a device is held fully off and rings: the whole margin carried);
 // class B: 29.78 / 31.33, 21.91 / 21.96, 23.43 / 23.65, 29.58 / 31.12. (Before: the margin only where the peak current
-// was cut and the drive stepped on: at 315° ngspice 7.6 % (C) and 6.5 % (B) above the program, held by 8 % either way.)
+// was cut and the drive stepped on: at 315° ngspice 7.6 % (C) and 6.5 % (B)
+// above the program, held by 8 % either way.)
 const SWEEP_TITLE = 'push-pull class %s (%i° conduction): the SWR circle at the antenna, program sweep vs ngspice';
 describe.skipIf(!haveNgspice).each(CLASSES)(SWEEP_TITLE, (cls, conductionDeg) => {
   // the program's own stress sweep (evaluatePa with the filter known and the 50 pF per drain entered): the circle drawn

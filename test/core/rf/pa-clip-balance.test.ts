@@ -25,8 +25,9 @@ describe('clipBalance', () => {
   });
   it('harmonics shorted, z = 2: V1 = 1/cos τ = |z| (1 − (2/π)(τ + sin τ cos τ)) (notch of width 2τ)', () => {
     // Source: the drain voltage is V1 cos ωt (no harmonic voltage); the devices carry no current where it exceeds the
-    // limit, |ωt| < τ with cos τ = 1/V1; the notch removes (2/π)(τ + sin τ cos τ) of the unit fundamental (Fourier
-    // coefficient of cos ωt over |ωt| < τ, both half periods; derivation, no published source). Solved by bisection.
+    // limit, |ωt| < τ with cos τ = 1/V1; the notch removes (2/π)(τ + sin τ cos τ) of the unit fundamental
+    // (Fourier coefficient of cos ωt over |ωt| < τ, both half periods; derivation,
+    // no published source). Solved by bisection.
     const f = (tau: number) => 1 / Math.cos(tau) - 2 * (1 - (2 / Math.PI) * (tau + Math.sin(tau) * Math.cos(tau)));
     let lo = 0, hi = 1;
     for (let i = 0; i < 60; i++) {
@@ -48,7 +49,8 @@ describe('clipBalance', () => {
       near(b.cutRatio, 1, 1e-6, `${topology}: the whole drive taken at its peak`);
     }
   });
-  it('harmonics open (100 x the design load), class B push-pull, z = 2: square wave, I1 = (4/π)/2, V3/V1 = 1/3', () => {
+  it('harmonics open (100 x the design load), class B push-pull, z = 2: square wave, I1 = ' +
+    '(4/π)/2, V3/V1 = 1/3', () => {
     // Source: Fourier series of the square wave, 4/(nπ) (textbook): the drive's sinusoid exceeds the limit over the
     // whole half period, so the drain is held there; 1 %, 0.2 dB (3rd) and 0.5 dB (5th) for the finite harmonic
     // impedance, the knee and the 31 harmonics carried

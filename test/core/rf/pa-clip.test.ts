@@ -14,7 +14,8 @@ import { lpfParams, project, rfSettings } from './fixture';
 import { near } from './helpers';
 
 describe('clippedHarmonicDbc', () => {
-  it('swing twice the rail limit (β = 30°): b3/b1 = (√3/(2π)) / (2/3 + √3/π) = 0.22633, −12.905 dBc (by hand)', () => {
+  it('swing twice the rail limit (β = 30°): b3/b1 = (√3/(2π)) / (2/3 + √3/π) = 0.22633, ' +
+    '−12.905 dBc (by hand)', () => {
     near(clippedHarmonicDbc(3, 2), 20 * Math.log10(0.226326), 1e-3, '3rd');
     near(clippedHarmonicDbc(3, 2), -12.905, 1e-3, '3rd, dBc by hand');
   });
@@ -33,7 +34,8 @@ describe('foldClipping keeps the level at the antenna: worst = max(worst, clippe
     { n: 2, bestDbc: -60, worstDbc: -30, basis: 'push-pull-imbalance' },
     { n: 3, bestDbc: -50, worstDbc: -40, basis: 'cosine-pulse' },
   ];
-  it('clipped 3rd (−12.91 dBc) through 40 dB from a voltage source vs 50 dB from the current source: −2.91 dBc', () => {
+  it('clipped 3rd (−12.91 dBc) through 40 dB from a voltage source vs 50 dB from the current ' +
+    'source: −2.91 dBc', () => {
     const f = foldClipping(bands, 2, () => 50, () => 40);
     near(f[1].worstDbc, -12.906 - 40 + 50, 2e-3, '3rd worst');
     expect(f[1].basis).toBe('clipped-at-swr');

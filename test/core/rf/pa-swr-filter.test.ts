@@ -1,8 +1,8 @@
 // PA stress with the SWR circle at the antenna, through the low-pass filter to the PA. Expected values are hand
 // arithmetic from published relations: the chain (ABCD) matrices of a series impedance [[1, Z], [0, 1]] and a shunt
 // admittance [[1, 0], [Y, 1]] and Z_in = (A Z_L + B)/(C Z_L + D) (two-port relations, e.g. Pozar, Microwave
-// Engineering, 4th ed. (2012), Table 4.1, from memory); |Γ| = (S − 1)/(S + 1), z = (1 + Γ)/(1 − Γ) (definition of the
-// reflection coefficient); the class-D load line at a complex load, I1 = V1/|Z|, P = P0 Re(z)/|z|² (textbook).
+// Engineering, 4th ed. (2012), Table 4.1, from memory); |Γ| = (S − 1)/(S + 1), z = (1 + Γ)/(1 − Γ) (definition
+// of the reflection coefficient); the class-D load line at a complex load, I1 = V1/|Z|, P = P0 Re(z)/|z|² (textbook).
 import { describe, expect, it } from 'vitest';
 import { loadsThroughFilter } from '../../../src/core/rf/class-e-loads';
 import type { Ladder } from '../../../src/core/rf/lpf-analysis';
@@ -48,7 +48,8 @@ describe('a filter that is a perfect 50 Ω line gives exactly the sweep at the P
     });
   }
   it('two quarter-wave pi sections (X = 50 Ω each): ABCD = [[0, j50], [j/50, 0]]² = −I, so Z_in = Z_L', () => {
-    // each pi: shunt B = 1/50 S, series X = 50 Ω, shunt B: [[1 − BX, jX], [jB(2 − BX), 1 − BX]] = [[0, j50], [j/50, 0]]
+    // each pi: shunt B = 1/50 S, series X = 50 Ω, shunt B: [[1 − BX, jX], [jB(2
+    // − BX), 1 − BX]] = [[0, j50], [j/50, 0]]
     const c = 1 / (W * 50);
     const l = 50 / W;
     const pi2 = ladder([0, 1, 0, 1, 0], [c, l, 2 * c, l, c]);
@@ -90,7 +91,8 @@ describe('a series 25 Ω reactance before the antenna (hand ABCD: [[1, j25], [0,
     near(p.outputW, 10, 1e-9, 'P');
     near(p.peakDeviceA, 3 / Math.sqrt(0.5), 1e-9, 'Ipk');
   });
-  it('the worst current: the circle z = 1.25 + 0.75 e^{jθ} + j0.5 comes closest to 0 at √(1.25² + 0.5²) − 0.75', () => {
+  it('the worst current: the circle z = 1.25 + 0.75 e^{jθ} + j0.5 comes closest to 0 at √(1.25² + ' +
+    '0.5²) − 0.75', () => {
     // 1° steps round the circle at the antenna: within 0.5 % of the circle's exact nearest point
     const minAbs = Math.hypot(1.25, 0.5) - 0.75;
     near(s.worstPeakCurrent.value / (3 / minAbs), 1, 0.005, 'Ipk over the hand value');

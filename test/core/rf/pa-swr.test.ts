@@ -60,7 +60,8 @@ describe('class B/C at a complex load: I1 held until the swing reaches the suppl
     // practice, no published source: CLIP_RING_MARGIN, evidence in ngspice-pushpull-c-chain)
     near(s.drainPeakV, 40 * 1.12, 1e-9, 'Vpk: rail limit and ring margin');
   });
-  it('a hard-limited swing (|z| → ∞, resistive): power P0 (4/π)^2/|z|, the square-wave fundamental (textbook)', () => {
+  it('a hard-limited swing (|z| → ∞, resistive): power P0 (4/π)^2/|z|, the square-wave ' +
+    'fundamental (textbook)', () => {
     const s = stressAt('B', m, { re: 1e6, im: 0 });
     near((s.outputW * 1e6) / 10, (4 / Math.PI) ** 2, 1e-5, 'P |z| / P0');
   });
@@ -112,7 +113,13 @@ describe('evaluatePa judges the ratings at the worst load phase', () => {
     expect(f?.message).toMatch(/rated 39 V or more/);
   });
   it('class E is simulated round the circle: its worst drain peak exceeds the matched 3.56 x supply', () => {
-    const r = evaluatePa(paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1, rdsOnOhm: 0.1, saturationV: null }), 13.8, proj, 'PA', { worstSwr: 2 });
+    const r = evaluatePa(
+      paParams({ amplifierClass: 'E', topology: 'single-ended', devices: 1, rdsOnOhm: 0.1, saturationV: null }),
+      13.8,
+      proj,
+      'PA',
+      { worstSwr: 2 },
+    );
     expect(r.swr?.model).toBe('class-e-simulated');
     expect(r.swr!.worstDrainPeak.value).toBeGreaterThan(r.peakDrainV);
     expect(r.findings.find((x) => x.rule === 'pa.vds')?.message).toMatch(/reflection phase \d+°/);
@@ -126,7 +133,8 @@ describe('push-pull class D: the leakage ring at each hard edge (undamped series
     near(r.overshootV, 40, 1e-12, 'ΔV');
     near(r.currentA!, 40 / Math.sqrt(250), 1e-12, 'I');
   });
-  it('with 2 A in the leakage: overshoot √(40² + (2 Z0)²) = √(1600 + 1000) = 50.990 V; current √(6.4 + 4) A', () => {
+  it('with 2 A in the leakage: overshoot √(40² + (2 Z0)²) = √(1600 + 1000) = 50.990 V; current ' +
+    '√(6.4 + 4) A', () => {
     const r = leakageRing(40, 2, 25e-9, 100e-12);
     near(r.overshootV, Math.sqrt(2600), 1e-9, 'ΔV');
     near(r.currentA!, Math.sqrt(1600 / 250 + 4), 1e-9, 'I');
@@ -151,7 +159,8 @@ describe('push-pull class D in evaluatePa: the ring in the drain rating check', 
   const run = (over: Parameters<typeof paParams>[0]) =>
     evaluatePa(paParams({ amplifierClass: 'D', rdsOnOhm: 0.1, saturationV: null, turnsRatio: 1, ...over }), 13.8,
       { targetPowerW: 10, ambientC: 25, keyingDuty: 0.4 });
-  it('without leakage and Coss: twice the 2 × 13.8 V load-line peak (the step alone), and a caution to enter them', () => {
+  it('without leakage and Coss: twice the 2 × 13.8 V load-line peak (the step alone), and a caution ' +
+    'to enter them', () => {
     const r = run({});
     near(r.swr!.worstDrainPeak.value, 4 * 13.8, 1e-9, 'Vpk');
     const f = r.findings.find((x) => x.rule === 'pa.leakage-ring')!;
