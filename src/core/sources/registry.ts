@@ -341,21 +341,22 @@ export const SOURCES = {
       `coefficient); classes B and C held at their drive current until the swing reaches the supply, then (when the ` +
       `low-pass filter is known) solved by harmonic balance of each device as a current source that gives way at its ` +
       `saturation drop against the filter's input impedance at each harmonic (circuit theory; ngspice agrees within ` +
-      `3 % in power push-pull, 11 % single-ended), else the drain flat-topped at the rails (the upper end), and a 12 % margin on the drain peak ` +
-      `for the ring where the limit cuts the current (${PRACTICE}; ngspice shows 10.5 % above 2 Vdd); class D at its ` +
-      `square-wave voltage; conduction loss ∝ current² (${PRACTICE}); push-pull class D adds the leakage ring ` +
-      `(pa.leakage-ring); with the low-pass filter known the circle is drawn at the antenna and each load ` +
-      `taken through the filter as built to the PA, Z_in = (A Z_L + B)/(C Z_L + D) (two-port chain relations)`,
+      `3 % in power push-pull, 11 % single-ended), else the drain flat-topped at the rails (the upper end), and a ` +
+      `12 % margin on the drain peak for the ring where the limit cuts the current (${PRACTICE}; ngspice shows ` +
+      `10.5 % above 2 Vdd); class D at its square-wave voltage; conduction loss ∝ current² (${PRACTICE}); ` +
+      `push-pull class D adds the leakage ring (pa.leakage-ring); with the low-pass filter known the circle is drawn ` +
+      `at the antenna and each load taken through the filter as built to the PA, Z_in = (A Z_L + B)/(C Z_L + D) ` +
+      `(two-port chain relations)`,
   },
   'pa.filter-input-swr': {
     status: 'practice',
     text: `The SWR circle drawn at the antenna and each of its loads taken through the low-pass filter as built to ` +
       `the PA, Z_in = (A Z_L + B)/(C Z_L + D) (two-port chain relations, circuit theory); the input reflection a ` +
-      `lossless Chebyshev filter has by design at its ripple peaks, |Γ|² = 1 − 10^(−ripple/10) (power conservation ` +
-      `|S11|² + |S21|² = 1 with the passband's least transmission; textbook relations of filter theory); a caution ` +
-      `when the parts as fitted exceed that (or the design's own SWR at the operating frequency), when the output ` +
-      `moves by more than the power check's 1 dB, or when the drain peak comes within the drain check's 1.25 × of ` +
-      `the rating (${PRACTICE})`,
+      `lossless Chebyshev filter has by design at its ripple peaks, |Γ|² = 1 − 10^(−ripple/10) (power ` +
+      `conservation |S11|² + |S21|² = 1 with the passband's least transmission; textbook relations of filter ` +
+      `theory); a caution when the parts as fitted exceed that (or the design's own SWR at the operating frequency), ` +
+      `when the output moves by more than the power check's 1 dB, or when the drain peak comes within the drain ` +
+      `check's 1.25 × of the rating (${PRACTICE})`,
   },
   'pa.clip-balance': {
     status: 'design',
@@ -452,10 +453,10 @@ export const SOURCES = {
   'lpf.swr-design': {
     status: 'practice',
     text: 'Input SWR of the ladder as built by chain-matrix (ABCD) analysis (circuit theory, textbook), against what ' +
-      'the response allows by design: a lossless Chebyshev filter reaches |Γ|² = 1 − 10^(−ripple/10) at its ripple ' +
-      'peaks (power conservation |S11|² + |S21|² = 1 with the passband\'s least transmission; textbook relations of ' +
-      'filter theory), else the design values\' own SWR across the band; a caution above SWR 1.3 only where the ' +
-      `parts as fitted exceed that, a fail above 2 (${PRACTICE})`,
+      'the response allows by design: a lossless Chebyshev filter reaches |Γ|² = 1 − 10^(−ripple/10) at its ' +
+      'ripple peaks (power conservation |S11|² + |S21|² = 1 with the passband\'s least transmission; textbook ' +
+      'relations of filter theory), else the design values\' own SWR across the band; a caution above SWR 1.3 only ' +
+      `where the parts as fitted exceed that, a fail above 2 (${PRACTICE})`,
   },
   'lpf.pa-source': {
     status: 'published',
