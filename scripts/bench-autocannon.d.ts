@@ -7,7 +7,12 @@ declare module 'autocannon' {
       headers?: Record<string, string>;
       body?: string;
       setupRequest?: (req: Request, context: Record<string, unknown>) => Request;
-      onResponse?: (status: number, body: string, context: Record<string, unknown>, headers: Record<string, string>) => void;
+      onResponse?: (
+        status: number,
+        body: string,
+        context: Record<string, unknown>,
+        headers: Record<string, string>,
+      ) => void;
     }
     interface Options {
       url: string;

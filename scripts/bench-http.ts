@@ -28,14 +28,28 @@ interface Route {
 const DEMO = '/projects/demo-club-30m';
 
 async function run(server: RunningServer, r: Route, seconds: number): Promise<HttpResult> {
-  const result = await autocannon({ url: server.url, connections: r.connections, duration: seconds, requests: r.requests, timeout: 30 });
+  const result = await autocannon({
+    url: server.url,
+    connections: r.connections,
+    duration: seconds,
+    requests: r.requests,
+    timeout: 30,
+  });
   const statuses: Record<string, number> = {};
   let bad = result.errors + result.timeouts;
   for (const [code, s] of Object.entries(result.statusCodeStats ?? {})) {
     statuses[code] = s.count;
     if (!r.ok(Number(code))) bad += s.count;
   }
-  return { name: r.name, rps: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, requests: result.requests.total, bad, statuses };
+  return {
+    name: r.name,
+    rps: result.requests.average,
+    p50: result.latency.p50,
+    p99: result.latency.p99,
+    requests: result.requests.total,
+    bad,
+    statuses,
+  };
 }
 
 /** The edit round trip: an htmx POST of the first stage's currents with the version the last answer carried. */
@@ -64,7 +78,11 @@ async function editRoute(server: RunningServer): Promise<Route> {
         headers: { 'Content-Type': 'application/x-www-form-urlencoded', Origin: server.url, 'HX-Request': 'true' },
         setupRequest: (req) => {
           n++;
-          const body = new URLSearchParams({ ...form.fields, version: String(version), l0_receive: `${20 + (n % 7)} mA` }).toString();
+          const body = new URLSearchParams({
+            ...form.fields,
+            version: String(version),
+            l0_receive: `${20 + (n % 7)} mA`,
+          }).toString();
           return { ...req, body };
         },
         onResponse: (_status, body) => {
@@ -77,9 +95,22 @@ async function editRoute(server: RunningServer): Promise<Route> {
   };
 }
 
-export async function benchHttp(server: RunningServer, seconds: number): Promise<{ results: HttpResult[]; text: string }> {
-  const get = (name: string, path: string, connections = 8): Route => ({ name, connections, ok: (s) => s >= 200 && s < 300, requests: [{ method: 'GET', path }] });
-  const routes: Route[] = [get('GET /healthz (trivial)', '/healthz'), get('GET overview page', DEMO), await editRoute(server), get('GET project JSON export', `${DEMO}/export.json`)];
+export async function benchHttp(
+  server: RunningServer,
+  seconds: number,
+): Promise<{ results: HttpResult[]; text: string }> {
+  const get = (name: string, path: string, connections = 8): Route => ({
+    name,
+    connections,
+    ok: (s) => s >= 200 && s < 300,
+    requests: [{ method: 'GET', path }],
+  });
+  const routes: Route[] = [
+    get('GET /healthz (trivial)', '/healthz'),
+    get('GET overview page', DEMO),
+    await editRoute(server),
+    get('GET project JSON export', `${DEMO}/export.json`),
+  ];
   const csv = await fetch(`${server.url}${DEMO}/bom.csv`);
   await csv.arrayBuffer();
   if (csv.status === 200) routes.push(get('GET parts list CSV', `${DEMO}/bom.csv`));

@@ -21,7 +21,10 @@ function heapMiB(): number {
   return process.memoryUsage().heapUsed / 1024 / 1024;
 }
 
-export async function benchMemory(projects = 50, requests = 2000): Promise<{ startMiB: number; endMiB: number; text: string }> {
+export async function benchMemory(
+  projects = 50,
+  requests = 2000,
+): Promise<{ startMiB: number; endMiB: number; text: string }> {
   const dir = mkdtempSync(join(tmpdir(), 'rigwright-bench-mem-'));
   const database = await openDatabase(`file:${join(dir, 'mem.db')}`);
   try {
@@ -47,7 +50,9 @@ export async function benchMemory(projects = 50, requests = 2000): Promise<{ sta
       await res.text();
     }
     const endMiB = heapMiB();
-    const text = `memory: ${requests} overview requests over ${projects} projects (in process): heap ${startMiB.toFixed(1)} MiB before, ${endMiB.toFixed(1)} MiB after (after full GC)${bad ? `, ${bad} requests not 200` : ''}`;
+    const text = `memory: ${requests} overview requests over ${projects} projects (in ` +
+      `process): heap ${startMiB.toFixed(1)} MiB before, ${endMiB.toFixed(1)} MiB after ` +
+      `(after full GC)${bad ? `, ${bad} requests not 200` : ''}`;
     if (bad) throw new Error(text);
     return { startMiB, endMiB, text };
   } finally {

@@ -14,7 +14,13 @@ export interface Timing {
 }
 
 /** Run `fn` for about `budgetMs` (at least `minRuns` times, after one warm-up call) and report the median. */
-export async function timeIt(name: string, fn: () => unknown, budgetMs = 1500, minRuns = 3, note?: string): Promise<Timing> {
+export async function timeIt(
+  name: string,
+  fn: () => unknown,
+  budgetMs = 1500,
+  minRuns = 3,
+  note?: string,
+): Promise<Timing> {
   await fn();
   const samples: number[] = [];
   const start = performance.now();
@@ -25,13 +31,22 @@ export async function timeIt(name: string, fn: () => unknown, budgetMs = 1500, m
     if (samples.length >= 10_000) break;
   }
   samples.sort((a, b) => a - b);
-  return { name, runs: samples.length, medianMs: samples[Math.floor(samples.length / 2)], p90Ms: samples[Math.floor(samples.length * 0.9)], note };
+  return {
+    name,
+    runs: samples.length,
+    medianMs: samples[Math.floor(samples.length / 2)],
+    p90Ms: samples[Math.floor(samples.length * 0.9)],
+    note,
+  };
 }
 
 export function machineLine(): string {
   const c = cpus();
-  const spice = ngspicePath() ? (spawnSync(ngspicePath()!, ['-v'], { encoding: 'utf8' }).stdout.match(/ngspice-\S+/)?.[0] ?? 'ngspice') : 'ngspice missing';
-  return `machine: ${c[0]?.model ?? 'unknown cpu'} · ${c.length} cores · node ${process.version} · ${process.platform}-${process.arch} · ${spice}`;
+  const spice = ngspicePath()
+    ? (spawnSync(ngspicePath()!, ['-v'], { encoding: 'utf8' }).stdout.match(/ngspice-\S+/)?.[0] ?? 'ngspice')
+    : 'ngspice missing';
+  return `machine: ${c[0]?.model ?? 'unknown cpu'} · ${c.length} cores · node ${process.version} · ` +
+    `${process.platform}-${process.arch} · ${spice}`;
 }
 
 export function ngspicePath(): string | null {

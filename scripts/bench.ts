@@ -25,7 +25,8 @@ async function main(): Promise<number> {
     const http = await benchHttp(server, SECONDS_PER_ROUTE);
     console.log(http.text + '\n');
     httpResults = http.results;
-    for (const r of http.results) if (r.bad > 0) failures.push(`${r.name}: ${r.bad} failed requests (${JSON.stringify(r.statuses)})`);
+    for (const r of http.results)
+      if (r.bad > 0) failures.push(`${r.name}: ${r.bad} failed requests (${JSON.stringify(r.statuses)})`);
   } finally {
     await server.stop();
     server.cleanup();
@@ -72,7 +73,8 @@ function goalLines(http: HttpResult[], core: Timing[], mem: { startMiB: number; 
     // flat memory: the heap after 2,000 overview requests over 50 projects at most 25 % above the heap before
     ['heap-start/heap-end', mem.startMiB / mem.endMiB, 0.8],
   ];
-  const fmt = (x: number) => (Number.isFinite(x) ? (x >= 10 ? x.toFixed(1) : x >= 0.1 ? x.toFixed(3) : x.toPrecision(3)) : 'NaN');
+  const fmt = (x: number) =>
+    Number.isFinite(x) ? (x >= 10 ? x.toFixed(1) : x >= 0.1 ? x.toFixed(3) : x.toPrecision(3)) : 'NaN';
   return goals.map(([name, value, goal]) => `ratio ${name} ${fmt(value)} goal ${goal}`);
 }
 
