@@ -35,9 +35,9 @@ export function classEShuntFindings(
         limit: c1,
         message:
           `The device's output capacitance ${pf(coss)} exceeds the ${pf(c1)} shunt capacitance class E needs at this ` +
-          `frequency into ${r.toFixed(1)} Ω: it cannot switch at zero voltage. It works ` +
-          `up to about ${(fMax / 1e6).toFixed(2)} MHz; ` +
-          'use a device with less capacitance or a lower drain load (higher power for the supply).',
+          `frequency into ${r.toFixed(1)} Ω: it cannot switch at zero voltage. It works up to about ` +
+          `${(fMax / 1e6).toFixed(2)} MHz; use a device with less capacitance or a lower drain load (higher power ` +
+          'for the supply).',
       },
     ];
   }
@@ -108,9 +108,8 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
           `fit a drain clamp (TVS or zener below the rating), fold the drive back on high SWR, or use a device rated ` +
           `${Math.ceil(V_MARGIN * vPk)} V or more.${ring}`
         : pa.deviceVdsMaxV < V_MARGIN * vPk
-          ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, less than 25 % below the ${pa.deviceVdsMaxV}` +
-            ` V ` +
-            `rating; a drain clamp or a higher-rated device adds margin.${ring}`
+          ? `Drain peaks reach ${vPk.toFixed(1)} V ${vWhere}${c.atMax}, less than 25 % below the ` +
+            `${pa.deviceVdsMaxV} V rating; a drain clamp or a higher-rated device adds margin.${ring}`
           : `Device rating ${pa.deviceVdsMaxV} V covers the ${vPk.toFixed(1)} V drain peaks ${vWhere}${c.atMax} ` +
             `with margin.${ring}`,
   });
@@ -140,11 +139,10 @@ export function swrFindings(pa: PaParams, s: PaSwrStress, c: SwrFindingContext):
       unit: '',
       source: 'pa.class-e-sim',
       message:
-        `Into part of the SWR ${s.swr} circle the switch turns on with the ` +
-        `drain at up to ${s.classETurnOnRatio.toFixed(2)} × the ` +
-        'supply (no longer zero-voltage switching): the shunt capacitor discharges into the device every cycle, ' +
-        'which heats it ' +
-        'and stresses it beyond these figures; add SWR foldback of the drive or supply.',
+        `Into part of the SWR ${s.swr} circle the switch turns on with the drain at up to ` +
+        `${s.classETurnOnRatio.toFixed(2)} × the supply (no longer zero-voltage switching): the shunt capacitor ` +
+        'discharges into the device every cycle, which heats it and stresses it beyond these figures; add SWR ' +
+        'foldback of the drive or supply.',
     });
   }
   if (pa.topology === 'push-pull' && (pa.networkLoadOhm ?? null) === null && pa.amplifierClass === 'D') {
