@@ -4,6 +4,7 @@ import { MODES, MODE_LABELS } from '../core/model';
 import type { EvaluationReport } from '../core/evaluate';
 import { formatValue } from '../core/units';
 import type { Worst } from '../core/rf/pa-swr';
+import { budgetDriveLabel } from '../core/rf/pa-dc';
 import { formatMoney } from '../core/cost/money';
 import { actionable, standingCautions } from '../core/findings';
 import { isSourceKey, sourceText } from '../core/sources/registry';
@@ -291,7 +292,8 @@ function rfLines(report: EvaluationReport): string[] {
       out.push(
         `  ${st.stageName}: ${formatValue(st.pa.outputW, 'W')} out from ` +
           `${formatValue(st.pa.railV, 'V')}, key-down ` +
-          `${formatValue(st.pa.keyDownCurrentA, 'A')} budgeted (saturated drive), ` +
+          `${formatValue(st.pa.keyDownCurrentA, 'A')} budgeted` +
+          `${st.pa.waveform ? ` (${budgetDriveLabel(st.pa.waveform.model)})` : ''}, ` +
           `drain peak ${formatValue(st.pa.peakDrainV, 'V')}`,
       );
     if (st.network)

@@ -20,6 +20,11 @@ export interface PaWaveformSummary {
   classELoadedQ: [number, number] | null;
 }
 
+/** Where the supply budget's key-down current is taken, in words: the band's most for each waveform model. */
+export function budgetDriveLabel(model: PaWaveform['model']): string {
+  return model === 'cosine-pulse' ? 'hard saturation' : 'the worst end of the harmonic bands';
+}
+
 /**
  * Drain efficiency of the ideal design waveform, fraction: output / (Vdd I_dc) = swing / (Vdd dcRel).
  * Source: definition of drain efficiency; dcRel from the waveform's Fourier coefficients (e.g. class B: π/4 of the

@@ -12,7 +12,7 @@ import type { LpfDesign } from './lpf-design';
 import { loadsThroughFilter } from './class-e-loads';
 import { filterLoadFindings } from './pa-filter-load';
 import { paSpectrum, switchingPowerShape, type PaSpectrum } from './pa-spectrum';
-import { bandFigures, idealEfficiency, swrKeyDownCurrent, type PaWaveformSummary } from './pa-dc';
+import { bandFigures, budgetDriveLabel, idealEfficiency, swrKeyDownCurrent, type PaWaveformSummary } from './pa-dc';
 import { waveformFindings } from './pa-spectrum-findings';
 import { classEShuntFindings, swrFindings } from './pa-swr-findings';
 import { clampFindings, drainClamp, type DrainClamp } from './pa-clamp';
@@ -516,8 +516,8 @@ export function evaluatePa(
       message:
         `The key-down current at the design drive rises to ${swrCurrent.currentA.toFixed(2)} A ` +
         `${whereLoad(swrCurrent.at, swr.swr)}. That is above the ${keyDownCurrentA.toFixed(2)} A the supply budget ` +
-        'carries (matched load, saturated drive); size the supply and its fuse for it, or fold the drive back ' +
-        'at high SWR.',
+        `carries (matched load, ${budgetDriveLabel(wave.model)}); size the supply and its fuse for it, or fold ` +
+        'the drive back at high SWR.',
     });
   }
   const clamp = drainClamp(pa.drainClampV, swr, {

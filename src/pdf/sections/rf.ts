@@ -7,7 +7,7 @@ import { SPECTRUM_FLOOR_DBC } from '../../core/rf/keying';
 import { findingsList, fv, keyValues, notComputed } from './common';
 import { sourceText } from '../../core/sources/registry';
 import { ohmText, type PaSwrStress, type Worst } from '../../core/rf/pa-swr';
-import type { PaWaveformSummary } from '../../core/rf/pa-dc';
+import { budgetDriveLabel, type PaWaveformSummary } from '../../core/rf/pa-dc';
 import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
 import { MIN_DBC } from '../../core/rf/pa-spectrum';
 import { paOutputRows } from '../../core/rf/pa-output-rows';
@@ -95,7 +95,7 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
           [
             'Supply',
             `${fv(p.railV, 'V')} rail, key-down ${fv(p.keyDownCurrentA, 'A')} budgeted (` +
-              (p.waveform?.model === 'cosine-pulse' ? 'hard saturation' : 'the worst end of the harmonic bands') +
+              (p.waveform ? budgetDriveLabel(p.waveform.model) : 'the worst end of the harmonic bands') +
               '), ' +
               `DC input ${fv(p.dcInputW, 'W')} at the design drive, ` +
               `efficiency ${Math.round(p.efficiency * 100)} % ` +

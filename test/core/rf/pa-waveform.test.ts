@@ -171,6 +171,8 @@ describe('worst-SWR key-down current', () => {
     expect(f?.message).toMatch(new RegExp(`rises to \\d+\\.\\d\\d A at SWR 2 into ${load}\\. That is above `));
     expect(f?.message.match(/ Ω/g)).toHaveLength(1);
     expect(f?.message).not.toMatch(/\([^)]*\(/);
+    // a class-E budget is taken at the worst end of its harmonic bands (loaded Q), not at an overdriven stage
+    expect(f?.message).toContain('(matched load, the worst end of the harmonic bands)');
     // at SWR 1 there is no circle and nothing to show
     expect(evaluatePa(e, 12, { ...proj, targetPowerW: 5 }, 'PA', { worstSwr: 1 }).swrKeyDownCurrentA).toBeNull();
   });
