@@ -13,6 +13,7 @@ import { evaluatePa } from './pa';
 import { spectrumFindings } from './pa-spectrum-findings';
 import { clipEstimateFinding, clipEstimates, clipOverdrive, foldClipping } from './pa-clip';
 import { classEOverLoads } from './class-e-loads';
+import { stressPower, type StressPower } from './stress-power';
 import type { LpfStageResult, RfReport, RfStageResult } from './report';
 import { lineMaxima, evaluateRelay } from './tr-relay';
 import { fieldLabel } from './field-labels';
@@ -192,6 +193,9 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   // Component stress (filter capacitors and heat, relay contacts, receiver leakage) is judged at the most RF the PA
   // delivers: high mains or a full battery. Common practice, no published source (worst-case design).
   let paStressW = targetPowerW;
+  // RF exposure is taken at the design drive's output at high mains or a full battery (not the stage's most)
+  let paHotW = targetPowerW;
+  let stress: StressPower | null = null;
   const okFreq = inputErrors.every((e) => e.field !== 'frequencyHz');
   let paRefused = false;
   // the filter's input impedance at each harmonic (as built, into its design termination): a class B/C stage is
@@ -217,7 +221,16 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
       });
       if (st === paStage && pa.outputW > 0) {
         paPowerW = pa.outputW;
-        paStressW = Math.max(pa.outputW, finite(pa.hotOutputW));
+        paHotW = Math.max(pa.outputW, finite(pa.hotOutputW));
+        // the parts take the most the stage delivers as built: saturated drive or round the worst-SWR circle
+        stress = stressPower({
+          hotDesignW: paHotW,
+          designW: pa.waveform?.designOutputW ?? null,
+          bandMaxW: pa.waveform?.bandMaxOutputW ?? null,
+          circleMax: pa.swr?.maxOutput ?? null, swr: pa.swr?.swr ?? 1, model: pa.waveform?.model ?? null,
+          battery: ctx.paRailBattery?.[st.pa.railId] === true,
+        });
+        paStressW = stress.powerW;
       }
       // a single-ended stage: its L network (when a network sets the drain load)
       // on the filter's core, and its feed choke
@@ -344,14 +357,15 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
       });
     }
   }
-  if (paStressW > paPowerW * 1.001) {
+  if (stress && paStressW > paPowerW * 1.001) {
     // Say which power the stress figures are for, so they do not look inconsistent with the PA's nominal output
-    const onBattery = paStage?.pa ? ctx.paRailBattery?.[paStage.pa.railId] === true : false;
-    const note = ` Figures at ${paStressW.toFixed(1)} W from the PA, its output ` +
-      `${onBattery ? 'with a full battery' : 'at high mains'}.`;
+    const note = ` Figures at ${stress.text}.`;
     const stressed = new Set([
       'lpf.capacitor-voltage',
       'lpf.passband',
+      'lpf.capacitor-rating',
+      'lpf.capacitor-current',
+      'core.flux',
       'relay.rf-voltage',
       'relay.rf-current',
       'relay.isolation',
@@ -462,7 +476,8 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
   // RF exposure is a safety estimate: the most the station radiates (high mains or a full battery), not the nominal
   // output. Source: OET Bulletin 65 Supplement B (1997), averaging starts from the transmitter PEP (ref
   // §2.3; "worst case" wording from memory).
-  const exposure = okFreq ? evaluateExposure(paStressW * 10 ** (-passbandLossDb / 10), frequencyHz, project.rf) : null;
+  const battery = paStage?.pa ? ctx.paRailBattery?.[paStage.pa.railId] === true : false;
+  const exposure = okFreq ? evaluateExposure(paHotW * 10 ** (-passbandLossDb / 10), frequencyHz, project.rf) : null;
   if (exposure) all.push(...exposure.findings);
   return {
     frequencyHz,
@@ -475,6 +490,13 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
     stages,
     harmonics,
     exposure,
+    powerBasis: {
+      parts: stress,
+      exposure: `RF exposure: at ${(paHotW * 10 ** (-passbandLossDb / 10)).toPrecision(3)} W at the antenna, the ` +
+        `design drive's output at ${battery ? 'a full battery' : 'high mains'} after the filter.`,
+      spurious: `Spurious emissions: relative to ${outputPowerW.toPrecision(3)} W, the design output after the ` +
+        'filter.',
+    },
     findings: sortFindings(all),
   };
 }

@@ -66,7 +66,8 @@ export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext
     'for the RF';
   // Common practice, no published source: 5 % more current than at the design drive is worth saying
   if (c.band.bandMaxCurrentA > c.band.designCurrentA * 1.05) {
-    // the filter, relay and exposure checks take the design drive's output: a caution only where the band's most
+    // exposure and the spurious reference take the design drive's output (the parts take the stage's most,
+    // stress-power): a caution only where the band's most
     // is more than the power check's 1 dB above it (common practice, no published source)
     const aboveDb = 10 * Math.log10(c.band.bandMaxOutputW / c.designOutputW);
     const totalA = c.band.bandMaxCurrentA + pa.biasIdleMaxA;
@@ -94,10 +95,12 @@ export function waveformFindings(pa: PaParams, w: PaWaveform, c: WaveformContext
         `${w1(c.designOutputW)} for ${a2(c.band.designCurrentA)}. The supply budget carries the ${a2(totalA)} ` +
         '(the supply page sizes the rail, its fuses and the transformer for it). ' +
         (aboveDb > 1
-          ? `The filter, relay and RF-exposure checks take the design drive's output, ${aboveDb.toFixed(1)} dB ` +
+          ? 'The filter\'s and relay\'s parts are checked at the most the stage gives (this at the highest supply, ' +
+            'or more round the SWR circle); RF exposure and the spurious reference take the design drive\'s output, ' +
+            `${aboveDb.toFixed(1)} dB ` +
             `below this: ${advice}; the extra power comes with the worst harmonics and more heat.`
-          : `That is within 1 dB of the design drive's output, on which the filter, relay and RF-exposure checks ` +
-            'are taken.') });
+          : 'That is within 1 dB of the design drive\'s output, on which RF exposure and the spurious reference ' +
+            'are taken; the filter\'s and relay\'s parts are checked at the most the stage gives.') });
   }
   if (w.model === 'cosine-pulse') {
     f.push({

@@ -1,4 +1,5 @@
 // Shape of the RF engine's report: plain JSON (no Maps, no NaN), SI units unless a key says otherwise.
+import type { StressPower } from './stress-power';
 import type { Finding } from '../findings';
 import type { ExposureResult } from './exposure';
 import type { RfSettings } from '../model';
@@ -74,6 +75,11 @@ export interface RfReport {
   ruleSet: RfSettings['spuriousRule'];
   harmonics: HarmonicsReport | null;
   exposure: ExposureResult | null;
+  /**
+   * Which power each check uses, one short line each: the filter's and relay's parts (the most the stage delivers as
+   * built, null when no PA stage is computed: they then take the target), RF exposure and the spurious reference.
+   */
+  powerBasis?: { parts: StressPower | null; exposure: string; spurious: string };
   /** All findings, most severe first. */
   findings: Finding[];
 }

@@ -36,8 +36,12 @@ describe('evaluateRf on a 40 m push-pull rig', () => {
     'code under test)', () => {
     const relay = r.stages[2].relay!;
     // Source: transmission-line theory (textbook): V_max,rms = sqrt(P Z0 S), peak = sqrt(2 P Z0 S); Z0 = 50 ohm, S = 2
-    // at the most the PA delivers (its waveform band's most, hotOutputW) less the filter's loss
-    const stressW = r.stages[0].pa!.hotOutputW * (r.outputPowerW / r.stages[0].pa!.outputW);
+    // at the most the stage delivers as built (the larger of its saturated drive at the highest supply, the band's
+    // ratio times hotOutputW, and the most round the SWR circle) less the filter's loss
+    const pa = r.stages[0].pa!;
+    const sat = (pa.waveform!.bandMaxOutputW / pa.waveform!.designOutputW) * pa.hotOutputW;
+    const most = Math.max(sat, pa.swr?.maxOutput.value ?? 0, pa.hotOutputW);
+    const stressW = most * (r.outputPowerW / pa.outputW);
     near(relay.rfPeakV, Math.sqrt(2 * stressW * 50 * 2), 1e-9, 'Vpk');
     // Worked value for 25 W at S = 2 (sqrt(2 x 25 x 50 x 2) = sqrt(5000) = 70.71 V
     // peak), against the helper the RF code uses
