@@ -13,6 +13,7 @@ import type { RelayResult } from '../../src/core/rf/tr-relay';
 import { CONSTRUCTION_FLOOR_DBC, type HarmonicBasis } from '../../src/core/rf/harmonics';
 import { MIN_DBC } from '../../src/core/rf/pa-spectrum';
 import { formatValue as fv } from '../../src/core/units';
+import { partsPowerLine, relayPowerLine } from '../../src/core/rf/stress-power';
 import { filterPlotSvg } from '../plots/filter-plot';
 import { keyingPlotSvg } from '../plots/keying-plot';
 import type { KeyingResult } from '../../src/core/rf/keying-eval';
@@ -277,7 +278,7 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
               'At the operating frequency',
               `loss ${fv(a.atOperating.lossDb, 'dB')}, input SWR ` +
                 `${a.atOperating.inputSwr.toFixed(2)}, about ${fv(lpf.filterLossW, 'W')} dissipated as heat` +
-                // the same power the parts' stress is taken at (the PA's most at its design drive)
+                // the same power the parts' stress is taken at (the most the stage delivers as built)
                 (lpf.realisation ? ` at ${fv(lpf.realisation.powerW, 'W')} from the PA` : '') +
                 ' (reflected power excluded)',
             ],
@@ -310,7 +311,7 @@ const LpfTable: FC<{ name: string; lpf: LpfStageResult; report: RfReport; stageI
         />
       ) : null}
       {svg ? <figure class="plot">{raw(svg)}</figure> : null}
-      {lpf.realisation ? <Realisation r={lpf.realisation} /> : null}
+      {lpf.realisation ? <Realisation r={lpf.realisation} basis={partsLine(report)} /> : null}
     </div>
   );
 };
@@ -324,11 +325,15 @@ const capRating = (r: CoreRealisation) =>
     .filter((x) => x !== null)
     .join(', ') || 'not entered';
 
-const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
+/** Which power the filter's and relay's parts are checked at, one line. */
+const partsLine = (report: RfReport): string => partsPowerLine(report.powerBasis);
+
+const Realisation: FC<{ r: CoreRealisation; basis: string }> = ({ r, basis }) => (
   <div class="rf-realisation">
     <h4>
       Parts at {fv(r.powerW, 'W')} into SWR {r.swr} (worst load phase)
     </h4>
+    {basis ? <p class="explain" data-power-basis="parts">{basis}</p> : null}
     <p class="explain">
       {r.aeM2 !== null && r.leM !== null && r.permeability !== null
         ? `Core: Ae ${(r.aeM2 * 1e6).toFixed(1)} mm², le ${(r.leM * 1e3).toFixed(1)} mm, permeability about ` +
@@ -381,11 +386,12 @@ const Realisation: FC<{ r: CoreRealisation }> = ({ r }) => (
   </div>
 );
 
-const RelayTable: FC<{ name: string; r: RelayResult }> = ({ name, r }) => (
+const RelayTable: FC<{ name: string; r: RelayResult; basis: string }> = ({ name, r, basis }) => (
   <div class="rf-relay">
     <h3>{name}: T/R relay</h3>
     <KV
       rows={[
+        ...(basis ? [['Power through the relay', `${fv(r.powerW, 'W')} (${basis})`] as [string, string]] : []),
         [
           'RF on the contacts',
           `${fv(r.rfPeakV, 'V')} peak (${fv(r.rfRmsV, 'V')} RMS), ${fv(r.rfRmsA, 'A')} RMS at SWR ` +
@@ -500,6 +506,7 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
   return (
     <div class="rf-harmonics">
       <h3>Harmonics at the antenna</h3>
+      {report.powerBasis ? <p class="explain" data-power-basis="spurious">{report.powerBasis.spurious}</p> : null}
       <p class="explain">
         Rule: {h.ruleTitle}
         {h.ruleFromMemory ? ' (from memory, not confirmed: check the current text)' : ''}. Required{' '}
@@ -594,12 +601,17 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
 
 const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
+/** The relay's power in words; before the filter it carries the harmonics bound (tr-relay), no filter loss there. */
+const relayLine = (report: RfReport, r: RelayResult): string =>
+  relayPowerLine(report.powerBasis, report.lpfStageId !== null && r.peakWithHarmonicsV === null);
+
 const Exposure: FC<{ report: RfReport }> = ({ report }) => {
   const e = report.exposure;
   if (!e) return null;
   return (
     <div class="rf-exposure">
       <h3>RF exposure (far-field estimate)</h3>
+      {report.powerBasis ? <p class="explain" data-power-basis="exposure">{report.powerBasis.exposure}</p> : null}
       <KV
         rows={[
           [
@@ -743,7 +755,7 @@ export const RfResults: FC<{ report: RfReport }> = ({ report }) => (
         <LpfTable name={s.stageName} lpf={s.lpf} report={report} stageId={s.stageId} />
       ) : s.relay ? (
         <>
-          <RelayTable name={s.stageName} r={s.relay} />
+          <RelayTable name={s.stageName} r={s.relay} basis={relayLine(report, s.relay)} />
           {s.keying ? <KeyingTable name={s.stageName} k={s.keying} /> : null}
         </>
       ) : null,

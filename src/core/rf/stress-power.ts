@@ -69,3 +69,18 @@ export function stressPower(s: StressSources): StressPower {
   }
   return { powerW: hot, basis: 'design', phaseDeg: null, text: `${w(hot)}, the PA's output at ${supply}` };
 }
+
+/** One line for the page and pack: the power the filter's parts are checked at ('' when not known). */
+export function partsPowerLine(basis: { parts: StressPower | null } | undefined): string {
+  if (!basis) return '';
+  return basis.parts
+    ? `Power: ${basis.parts.text}, taken at each part's worst load on the circle (a bound).`
+    : 'Power: the target power (no PA stage is computed).';
+}
+
+/** The relay's power in words: the parts' power, less the filter's loss when the relay follows the filter. */
+export function relayPowerLine(basis: { parts: StressPower | null } | undefined, afterFilter: boolean): string {
+  if (!basis) return '';
+  const less = afterFilter ? ' less the filter\'s loss' : '';
+  return basis.parts ? `${basis.parts.text}${less}` : `the target power${less} (no PA stage is computed)`;
+}

@@ -12,6 +12,7 @@ import { CONSTRUCTION_FLOOR_DBC } from '../../core/rf/harmonics';
 import { MIN_DBC } from '../../core/rf/pa-spectrum';
 import { paOutputRows } from '../../core/rf/pa-output-rows';
 import { clampText } from '../../core/rf/pa-clamp';
+import { partsPowerLine, relayPowerLine } from '../../core/rf/stress-power';
 
 // the load at the antenna with its phase and what the PA sees through the filter, or the PA's load with its phase
 const loadText = (w: Worst) =>
@@ -233,7 +234,8 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
               re.aeM2 !== null && re.leM !== null
                 ? `; core Ae ${(re.aeM2 * 1e6).toFixed(1)} mm², le ${(re.leM * 1e3).toFixed(1)} mm`
                 : '; core dimensions not entered'
-            }. Self-resonance estimated with about 2 pF across a winding and 5 nH of capacitor lead.`,
+            }. Self-resonance estimated with about 2 pF across a winding and 5 nH of capacitor lead. ` +
+            partsPowerLine(rf.powerBasis),
           { sizePt: 8.5, afterPt: 4 },
         );
         const flux = re.fluxLimitT ?? null;
@@ -301,6 +303,10 @@ export function rfSection(l: Layout, rf: RfReport | null): void {
       keyValues(
         l,
         [
+          ...(rf.powerBasis
+            ? [['Power through the relay', `${fv(r.powerW, 'W')} (${relayPowerLine(rf.powerBasis,
+              rf.lpfStageId !== null && r.peakWithHarmonicsV === null)})`] as [string, string]]
+            : []),
           [
             'RF on the contacts',
             `${fv(r.rfPeakV, 'V')} peak, ${fv(r.rfRmsA, 'A')} RMS at SWR ${r.swr} (rated ${fv(r.ratedPeakV, 'V')}` +
@@ -419,7 +425,8 @@ function harmonics(l: Layout, rf: RfReport): void {
   if (!h) return notComputed(l, 'Harmonics');
   l.text(
     `Rule: ${h.ruleTitle} — ${fv(h.requiredDb, 'dB')} below ${fv(h.fundamentalW, 'W')} at the antenna connector` +
-      `${h.ruleFromMemory ? ' (from memory; check the current text)' : ''}. Source: ${sourceText(h.ruleSource)}`,
+      `${h.ruleFromMemory ? ' (from memory; check the current text)' : ''}. Source: ${sourceText(h.ruleSource)}` +
+      (rf.powerBasis ? ` ${rf.powerBasis.spurious}` : ''),
     { sizePt: 8.5, afterPt: 4 },
   );
   const rows: Row[] = h.rows.map((x) => ({
@@ -476,6 +483,7 @@ function exposure(l: Layout, rf: RfReport): void {
   const e = rf.exposure;
   l.heading('RF exposure', 2, 80);
   if (!e) return notComputed(l, 'RF exposure');
+  if (rf.powerBasis) l.text(rf.powerBasis.exposure, { sizePt: 8.5, afterPt: 4 });
   keyValues(
     l,
     [
