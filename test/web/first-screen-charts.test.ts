@@ -4,7 +4,8 @@
 // Expected values are what the findings say (consistency of the design as entered); no published source applies.
 import { describe, expect, it } from 'vitest';
 import { demoApp } from '../helpers/app';
-import { troughChartSvg, TOLERANCE_MARK, type TroughRow } from '../../views/plots/margin-charts';
+import { troughChartSvg, harmonicBarsSvg, TOLERANCE_MARK, type TroughRow } from '../../views/plots/margin-charts';
+import type { HarmonicRow, HarmonicsReport } from '../../src/core/rf/harmonics';
 
 const CAUTION = '#a86500';
 const FAIL = '#b3261e';
@@ -31,6 +32,33 @@ describe('trough chart', () => {
 
   it('no rail: the one line fits the picture', () => {
     expect(troughChartSvg([])).toMatch(/viewBox="0 0 \d+ 24"[^]*No rails designed yet\./);
+  });
+});
+
+describe('harmonic bars', () => {
+  // 43 dB below the fundamental: 47 CFR 97.307(d) (installed after 2003, below 30 MHz). A harmonic below the
+  // -70 dBc construction floor (the project's stated floor, a design choice) is judged from the floor:
+  // 70 - 43 = 27 dB, a lower bound. Invented rows; only the fields the bars read matter.
+  const row = (n: number, predictedDbc: number, worstPredictedDbc: number): HarmonicRow =>
+    ({
+      n,
+      predictedDbc,
+      limitedByConstruction: predictedDbc < -70,
+      worstPredictedDbc,
+      marginDb: -Math.max(predictedDbc, -70) - 43,
+      worstMarginDb: -Math.max(worstPredictedDbc, -70) - 43,
+      severity: 'ok',
+    }) as HarmonicRow;
+  const svg = harmonicBarsSvg({ rows: [row(2, -55, -52.5), row(4, -80, -78), row(5, -75, -66)] } as HarmonicsReport);
+
+  it('a margin counted from the construction floor reads "at least", never as a signed exact figure', () => {
+    expect(svg).toContain('>at least 27 dB, worst too</text>');
+    expect(svg).toContain('>at least 27 dB, worst 23 dB</text>');
+    expect(svg).not.toContain('+27.0');
+  });
+
+  it('a predicted harmonic keeps its plain margin', () => {
+    expect(svg).toContain('>12 dB, worst 9.5 dB</text>');
   });
 });
 

@@ -10,6 +10,7 @@ import { fixLink } from './fix-link';
 import { EmptyState } from './empty-state';
 import { powerFlowData, powerFlowSvg } from '../plots/power-flow';
 import { troughRows, troughChartSvg, harmonicBarsSvg, TOLERANCE_MARK } from '../plots/margin-charts';
+import { CONSTRUCTION_FLOOR_DBC } from '../../src/core/rf/harmonics';
 
 const VERDICT_TEXT = {
   ok: { sign: '✓', head: 'Will work as designed', tail: () => 'no check of this design fails or needs caution.' },
@@ -112,6 +113,11 @@ export const FirstScreen: FC<{ project: Project; report: EvaluationReport }> = (
           {harmonics ? (
             <p class="hint">
               Below the limit of {harmonics.ruleTitle}; the bar is the nominal filter, the tick its worst built case.
+              {harmonics.rows.some((r) => r.limitedByConstruction)
+                ? ` "At least": the harmonic falls below ${String(CONSTRUCTION_FLOOR_DBC).replace('-', '−')} dBc, ` +
+                  'where the build (layout, shielding), not the filter, sets the level, so the margin is counted ' +
+                  'from there.'
+                : ''}
             </p>
           ) : null}
         </div>

@@ -14,6 +14,7 @@ import { CONSTRUCTION_FLOOR_DBC, type HarmonicBasis } from '../../src/core/rf/ha
 import { MIN_DBC } from '../../src/core/rf/pa-spectrum';
 import { formatValue as fv } from '../../src/core/units';
 import { partsPowerLine, relayPowerLine } from '../../src/core/rf/stress-power';
+import { marginText, worstMarginText } from '../components/harmonic-margin';
 import { filterPlotSvg } from '../plots/filter-plot';
 import { keyingPlotSvg } from '../plots/keying-plot';
 import type { KeyingResult } from '../../src/core/rf/keying-eval';
@@ -572,13 +573,8 @@ const Harmonics: FC<{ report: RfReport }> = ({ report }) => {
                 {band(x.predictedBestDbc, x.predictedDbc, x.bestLimitedByConstruction, x.limitedByConstruction)}
               </td>
               {/* below the construction floor the margin is counted from the floor: at least that much */}
-              <td class="num">{`${x.limitedByConstruction ? 'at least ' : ''}${fv(x.marginDb, 'dB')}`}</td>
-              <td class="num">
-                {x.worstMarginDb === null
-                  ? '—'
-                  : (x.worstPredictedDbc !== null && x.worstPredictedDbc < CONSTRUCTION_FLOOR_DBC ? 'at least ' : '') +
-                    fv(x.worstMarginDb, 'dB')}
-              </td>
+              <td class="num">{marginText(x)}</td>
+              <td class="num">{worstMarginText(x) ?? '—'}</td>
               <td>
                 <span class={sevClass(x.severity)}>{x.severity}</span>
               </td>

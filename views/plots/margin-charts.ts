@@ -6,6 +6,7 @@ import type { HarmonicsReport } from '../../src/core/rf/harmonics';
 import type { Severity } from '../../src/core/findings';
 import { formatValue } from '../../src/core/units';
 import { esc } from './svg-text';
+import { marginText, worstMarginText } from '../components/harmonic-margin';
 
 export interface TroughRow {
   name: string;
@@ -131,7 +132,7 @@ export function harmonicBarsSvg(h: HarmonicsReport | null): string {
   const height = Math.max(rows.length * rowH + 6, 24);
   const parts = [
     `<svg xmlns="http://www.w3.org/2000/svg" class="plot harmonics" viewBox="0 0 ` +
-      `${labelW + trackW + 120} ${height}" role="img" ` +
+      `${labelW + trackW + 150} ${height}" role="img" ` +
       `aria-labelledby="hm-title" font-family="sans-serif" font-size="11"><title id="hm-title">Margin of each ` +
       `harmonic below the ` +
       `spurious limit (longer is better; a tick marks the worst built filter)</title>`,
@@ -162,11 +163,12 @@ export function harmonicBarsSvg(h: HarmonicsReport | null): string {
       parts.push(`<line x1="${wx}" y1="${y}" x2="${wx}" y2="${y + 16}" stroke="#1d2327" stroke-width="2"/>`);
     }
     const words = sev === 'ok' ? '' : sev === 'caution' ? ' (caution)' : ' (FAILS)';
-    const worst =
-      r.worstMarginDb === null ? '' : `, worst ${r.worstMarginDb >= 0 ? '+' : ''}${r.worstMarginDb.toFixed(1)}`;
+    // the same words as the RF page: below the construction floor a margin is a lower bound ("at least")
+    const nominal = marginText(r);
+    const worstText = worstMarginText(r);
+    const worst = worstText === null ? '' : worstText === nominal ? ', worst too' : `, worst ${worstText}`;
     parts.push(
-      `<text x="${labelW + trackW + 6}" y="${y + 12}" font-size="10.5">` +
-        `${r.marginDb >= 0 ? '+' : ''}${r.marginDb.toFixed(1)} dB${worst}${words}</text>`,
+      `<text x="${labelW + trackW + 6}" y="${y + 12}" font-size="10.5">${esc(nominal + worst + words)}</text>`,
     );
   });
   parts.push(`<line x1="${zero}" y1="0" x2="${zero}" y2="${height}" stroke="#1d2327"/>`);
