@@ -50,6 +50,16 @@ describe.skipIf(!hasChromium)('overview in the browser', () => {
     await page.screenshot({ path: artifactPath('overview-first-screen.png') });
   });
 
+  it('at 1280 px the current budget fits its card: every column shown, nothing scrolled out of view', async () => {
+    const fit = await page.locator('#budget .scroll-x').evaluate((box) => ({
+      scrollW: box.scrollWidth,
+      clientW: box.clientWidth,
+    }));
+    expect(fit.scrollW).toBeLessThanOrEqual(fit.clientW);
+    // the shortened voltage header still says in full what it shows
+    expect(await page.locator('#budget thead th[title]').getAttribute('title')).toContain('nominal mains');
+  });
+
   it('data-verdict matches the actionable findings listed under "Checks at a glance", and the top fixes are the ' +
     'first three', async () => {
     const verdict = await page.locator('[data-verdict]').getAttribute('data-verdict');

@@ -14,6 +14,10 @@ const Amount: FC<{ value: number; unit: string }> = ({ value, unit }) =>
     <>{formatValue(value, unit)}</>
   );
 
+const VOLTAGE_TITLE =
+  'Mean rail voltage in receive → with the key down, at nominal mains; below it, the lowest point of the ' +
+  'ripple with the key down';
+
 export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
   <section class="card" id="budget">
     <h2>Current budget</h2>
@@ -30,8 +34,8 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
         <thead>
           <tr>
             <th>Rail</th>
-            <th class="num">
-              Voltage <span class="sub">receive → key-down mean, nominal mains; key-down trough</span>
+            <th class="num" title={VOLTAGE_TITLE}>
+              Voltage <span class="sub">RX → key-down mean; trough</span>
             </th>
             {MODES.map((m) => (
               <th class="num">{MODE_LABELS[m]}</th>
