@@ -103,7 +103,10 @@ export interface OutputTransformerCheck {
   coreName: string;
   primaryTurns: number;
   secondaryTurns: number;
-  /** RMS voltage across the full primary at the PA's highest output, V; frequency it is judged at, Hz. */
+  /**
+   * RMS voltage across the full primary at the PA's highest output into its design load (saturated drive at the
+   * highest supply), V; frequency it is judged at, Hz.
+   */
   primaryRmsV: number;
   frequencyHz: number;
   peakFluxT: number;
@@ -159,7 +162,8 @@ export function checkOutputTransformer(
     fitTurns: fit?.turns ?? null,
   };
   const mt = (t: number) => `${(t * 1e3).toFixed(1)} mT`;
-  const at = `${primaryRmsV.toFixed(1)} V RMS across ${n} primary turns at ${(fHz / 1e6).toFixed(3)} MHz`;
+  const at = `${primaryRmsV.toFixed(1)} V RMS (${highestOutputW.toPrecision(3)} W into the design load) across ${n} ` +
+    `primary turns at ${(fHz / 1e6).toFixed(3)} MHz`;
   const over = peakFluxT > c.fluxLimitT;
   findings.push({
     severity: over ? 'fail' : 'ok',

@@ -268,7 +268,13 @@ export function evaluateRf(project: Project, ctx: RfContext): RfReport {
               project,
               st.pa,
               pa.primaryOhm,
-              Math.max(pa.outputW, finite(pa.hotOutputW)),
+              // into the design load the primary's voltage is √(P R): the saturated drive at the highest supply
+              stressPower({
+                hotDesignW: Math.max(pa.outputW, finite(pa.hotOutputW)),
+                designW: pa.waveform?.designOutputW ?? null,
+                bandMaxW: pa.waveform?.bandMaxOutputW ?? null,
+                circleMax: null, swr: 1, battery: false,
+              }).powerW,
               pa.turnsRatio,
               st.name,
             )

@@ -25,6 +25,9 @@ describe('demos: the parts take the most the stage delivers', () => {
       // the relay follows the filter: the same less the filter's loss; I_max = √(P S / Z0) RMS
       near(relay.rfPeakV, Math.sqrt(2 * sat * loss * 50 * 2), 1e-9, 'relay peak');
       near(relay.rfRmsA, Math.sqrt((sat * loss * 2) / 50), 1e-9, 'relay A');
+      // the output transformer's primary into its design load: V = √(P R) at the saturated drive (P = V² / R)
+      const ot = r.rf.stages.find((s) => s.pa)!.outputTransformer!;
+      near(ot.primaryRmsV, Math.sqrt(sat * pa.primaryOhm), 1e-9, 'primary V');
     });
   it('portable (class E): the most round the SWR 2 circle beats its saturated drive', () => {
     const { r, pa, lpf, relay, loss } = parts(portable20m);
