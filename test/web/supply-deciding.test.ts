@@ -57,4 +57,19 @@ describe('supply page and first screen agree on the deciding headroom corner', (
     expect(row(table, 'low-keyDown').verdict).toBe('ok');
     expect(row(table, 'lowTol-keyDown').verdict).toBe('caution');
   });
+
+  it('club demo: a tune-up load above the key-down budget says why, naming the budget it exceeds', async () => {
+    const { get } = await demoApp();
+    const supply = await (await get(`/projects/${ID}/supply`)).text();
+    const overview = await (await get(`/projects/${ID}`)).text();
+    // the overview's budget figure for the PA rail with the key down
+    const cell = /data-rail="rail-pa" data-mode="keyDown"><strong>([^<]+)<\/strong>/.exec(overview)?.[1];
+    expect(cell).toBeTruthy();
+    const pa = row(glanceTable(supply, 'rail-pa'), 'high-tuneUp');
+    expect(parseFloat(pa.cells[2])).toBeGreaterThan(parseFloat(cell!));
+    expect(pa.cells[1]).toContain('a carrier held at high mains');
+    expect(pa.cells[1]).toContain(`than the ${cell} key-down budget, taken at nominal mains`);
+    // the raw rail carries no PA: its tune-up load is its key-down budget, with nothing to explain
+    expect(row(glanceTable(supply, 'rail-raw'), 'high-tuneUp').cells[1]).toBe('High mains, tune-up carrier');
+  });
 });

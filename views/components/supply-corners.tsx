@@ -34,10 +34,14 @@ function rectifiedVerdict(rail: RectifiedRailReport, which: 'plain' | 'tolerance
 }
 
 type DecidingRail<C> = { worstVoltageCornerId: string; worstThermalCornerId: string; corners: C[] };
-/** One row per deciding role whose corner the rail has: the role, the corner's label, then the rail's own cells. */
+/**
+ * One row per deciding role whose corner the rail has: the role, the corner's label (with `note`'s words under it,
+ * if any), then the rail's own cells.
+ */
 function decidingRows<C extends { id: string; label: string }>(
   rail: DecidingRail<C>,
   cells: (corner: C, headroom: Role['headroom']) => Child,
+  note: (corner: C) => string | null = () => null,
 ) {
   const tolerance = rail.corners.some((x) => x.id === TOLERANCE_ID);
   return roles(rail.worstVoltageCornerId, rail.worstThermalCornerId, tolerance).map(({ role, id, headroom }) => {
@@ -45,7 +49,10 @@ function decidingRows<C extends { id: string; label: string }>(
     return c ? (
       <tr data-corner={id} class={headroom ? 'headroom-row' : ''}>
         <th scope="row">{role}</th>
-        <td>{c.label}</td>
+        <td>
+          {c.label}
+          {note(c) ? <span class="sub corner-note">{note(c)}</span> : null}
+        </td>
         {cells(c, headroom)}
       </tr>
     ) : null;
@@ -59,6 +66,20 @@ const Verdict: FC<{ sev: Severity | null; none?: string }> = ({ sev, none }) =>
   ) : (
     <span class="hint">{none ?? '—'}</span>
   );
+
+/**
+ * Why the tune-up corner loads a rail more than the key-down budget: the corner holds the key-down current at high
+ * mains, where the PA's rail is higher and a PA of fixed load draws more (I ∝ V; evaluate.ts takes the high-mains
+ * corners' PA current at the high-mains key-down mean), while the budget's key-down is the PA at the nominal-mains
+ * key-down trough. Only the PA's current depends on the rail, so a higher load here is the PA's.
+ */
+function tuneUpNote(rail: RectifiedRailReport, c: RectifiedRailReport['corners'][number]): string | null {
+  const budget = rail.corners.find((x) => x.id === 'nominal-keyDown');
+  const hot = rail.corners.find((x) => x.id === 'high-keyDown');
+  if (c.load !== 'tuneUp' || !budget || !hot || !(c.loadA > budget.loadA * 1.005)) return null;
+  return `a carrier held at high mains: the PA's rail is higher (${fv(hot.dcMeanV, 'V')} mean), so it draws more ` +
+    `than the ${fv(budget.loadA, 'A')} key-down budget, taken at nominal mains (${fv(budget.troughV, 'V')} trough)`;
+}
 
 export const RectifiedDeciding: FC<{ rail: RectifiedRailReport; caption?: Child }> = ({ rail, caption }) => (
   <table class="grid deciding" data-rail={rail.railId}>
@@ -85,7 +106,7 @@ export const RectifiedDeciding: FC<{ rail: RectifiedRailReport; caption?: Child 
           <td class="num">{fv(c.secondaryRmsA, 'A')}</td>
           <td class="num">{fv(c.capacitorRippleRmsA, 'A')}</td>
         </>
-      ))}
+      ), (c) => tuneUpNote(rail, c))}
     </tbody>
   </table>
 );
