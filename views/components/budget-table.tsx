@@ -81,6 +81,10 @@ export const BudgetTable: FC<{ budget: BudgetReport }> = ({ budget }) => (
                   <td style={`padding-left:${1.6 + r.depth * 1.2}rem`}>
                     {l.stageName}
                     {l.computed ? <span title="computed"> ◆</span> : null}
+                    {/* a stage listed twice on one rail: say which row is typed in and which computed */}
+                    {r.loads.some((o) => o !== l && o.stageId === l.stageId) ? (
+                      <span class="sub">{l.computed ? 'computed' : 'entered'}</span>
+                    ) : null}
                   </td>
                   <td></td>
                   {MODES.map((m) => (
