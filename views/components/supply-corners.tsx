@@ -90,8 +90,8 @@ export const RectifiedDeciding: FC<{ rail: RectifiedRailReport; caption?: Child 
         <th scope="col">Corner</th>
         <th class="num">Load</th>
         <th class="num">Trough</th>
-        <th class="num">Margin</th>
-        <th scope="col">Headroom</th>
+        <th class="num" title="Trough less the least the rail may fall to">Margin</th>
+        <th scope="col">Verdict</th>
         <th class="num">Winding RMS</th>
         <th class="num">Cap. ripple RMS</th>
       </tr>
