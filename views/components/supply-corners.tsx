@@ -190,7 +190,7 @@ export const SupplyGlance: FC<{ report: SupplyReport }> = ({ report }) => (
 /** The full corner table behind a native disclosure (keyboard: Tab to the summary, Enter or Space opens it). */
 export const AllCorners: FC<{ count: number; children?: Child }> = ({ count, children }) => (
   <details class="all-corners">
-    <summary>All {count} corners (every mains voltage and load)</summary>
+    <summary>All {count} corners (every supply voltage and load)</summary>
     {children}
   </details>
 );

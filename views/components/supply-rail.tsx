@@ -14,6 +14,11 @@ const KIND_LABEL = { rectified: 'Rectified', regulated: 'Regulated', battery: 'B
 /** The form text of a stored rail. */
 export const railValues = (r: Rail): Record<string, string> => formValues(RAIL_SPECS[r.kind], r);
 
+/** A regulator kind in words: the stored key, with the low-dropout one spelled out (not a bare "ldo"). */
+export function regulatorWords(kind: string): string {
+  return kind === 'ldo' ? 'low-dropout (LDO)' : kind;
+}
+
 /** One line under the rail name, so a closed card still says what the rail is. */
 function summary(p: Project, r: Rail): string {
   if (r.kind === 'rectified') {
@@ -24,7 +29,8 @@ function summary(p: Project, r: Rail): string {
   }
   if (r.kind === 'regulated') {
     const parent = p.supply.rails.find((x) => x.id === r.parentId);
-    return `${r.regulator} regulator (${r.setting.method}) fed from ${parent ? parent.name : 'a missing rail'}`;
+    return `${regulatorWords(r.regulator)} regulator (${r.setting.method}) fed from ` +
+      `${parent ? parent.name : 'a missing rail'}`;
   }
   return `${r.chemistry} ${formatValue(r.nominalV, 'V')}, ${formatValue(r.capacityAh, 'Ah')}${needs(r.minimumV)}`;
 }

@@ -23,6 +23,7 @@ import { STEADY_INPUT_WORDS, steadyInput } from '../../src/core/power/ripple-rej
 import { BleederLine } from '../components/supply-bleeder';
 import { BridgeLine, RegulatedBleederLine, primaryTypeWords, sizedForTuneUp } from '../components/supply-thermal';
 import { HeatCard } from '../components/supply-heat';
+import { regulatorWords } from '../components/supply-rail';
 import { AllCorners, RectifiedDeciding, RegulatedDeciding } from '../components/supply-corners';
 import type { HeatBudget } from '../../src/core/power/heat-budget';
 
@@ -151,7 +152,7 @@ const RegulatedCard: FC<{ rail: RegulatedRailReport }> = ({ rail }) => (
     <h3>
       {rail.railName}{' '}
       <span class="hint">
-        ({rail.regulator} regulator, {fv(rail.outputV, 'V')} out, dropout {fv(rail.dropoutV, 'V')})
+        ({regulatorWords(rail.regulator)} regulator, {fv(rail.outputV, 'V')} out, dropout {fv(rail.dropoutV, 'V')})
       </span>
     </h3>
     <RegulatedDeciding rail={rail} />
