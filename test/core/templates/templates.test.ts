@@ -126,8 +126,12 @@ describe('station templates', () => {
   });
 
   it("the final's starting current is the DC input for the target power: P / (efficiency × V)", () => {
-    // Definition of drain efficiency: 20 W out at 60 % from 24 V takes 20 / 0.6 / 24 = 1.389 A
+    // Definition of drain efficiency: 20 W out at 60 % from 24 V takes 20 / 0.6 / 24 = 1.3889 A, stored rounded
+    // up to the whole mA a builder types: 1.389 A; 10 W at 60 % from 12.5 V is exactly 1.3333 A → 1.334 A;
+    // 12 W at 50 % from 24 V is exactly 1.000 A and stays 1.000 A
     const toleranceA = 1e-9;
-    expect(Math.abs(finalKeyDownA(20, 24, 0.6) - 1.3888888889)).toBeLessThan(toleranceA);
+    expect(Math.abs(finalKeyDownA(20, 24, 0.6) - 1.389)).toBeLessThan(toleranceA);
+    expect(Math.abs(finalKeyDownA(10, 12.5, 0.6) - 1.334)).toBeLessThan(toleranceA);
+    expect(Math.abs(finalKeyDownA(12, 24, 0.5) - 1)).toBeLessThan(toleranceA);
   });
 });
