@@ -392,7 +392,8 @@ export function withSimulationMemo<T>(fn: () => T, options: { caches?: boolean }
  */
 export function simulateRectifier(input: RectifierSimInput, options: { searchKey?: string } = {}): RectifierSimResult {
   if (!MEMO) return simulateUncached(input);
-  const key = JSON.stringify([
+  // the circuit without its load names the warm starts; with the load it names the memo
+  const circuit = [
     input.topology,
     input.secondaryVrms,
     input.windingResistanceOhm,
@@ -401,29 +402,14 @@ export function simulateRectifier(input: RectifierSimInput, options: { searchKey
     input.diodeResistanceOhm,
     input.capacitanceF,
     input.esrOhm,
-    input.load,
     input.bleederOhm ?? null,
     input.stepsPerCycle ?? null,
     input.toleranceV ?? null,
-    input.maxCycles ?? null,
-    input.waveformPoints ?? null,
-  ]);
+  ];
+  const key = JSON.stringify([...circuit, input.load, input.maxCycles ?? null, input.waveformPoints ?? null]);
   const held = MEMO.get(key);
   if (held) return held;
-  const circuitKey = JSON.stringify([
-    input.topology,
-    input.secondaryVrms,
-    input.windingResistanceOhm,
-    input.frequencyHz,
-    input.diodeDropV,
-    input.diodeResistanceOhm,
-    input.capacitanceF,
-    input.esrOhm,
-    input.load.kind,
-    input.bleederOhm ?? null,
-    input.stepsPerCycle ?? null,
-    input.toleranceV ?? null,
-  ]);
+  const circuitKey = JSON.stringify([...circuit, input.load.kind]);
   const load = loadValue(input.load);
   const searchKey = options.searchKey !== undefined ? `search\u0000${options.searchKey}` : null;
   const start = warmStart(WARM?.get(circuitKey), load)
